@@ -1,0 +1,39 @@
+"""The project's own exceptions.
+
+Every failure caused by user input raises one of these, naming the field,
+variable, key, file or line at fault. The CLI prints the message in one or
+two lines and exits with status 2; no traceback reaches a user.
+"""
+
+from __future__ import annotations
+
+__all__ = ["StatsetterError", "RecordError", "StyleError", "TemplateError", "InputError"]
+
+
+class StatsetterError(Exception):
+    """Base class: an error the user can act on."""
+
+
+class RecordError(StatsetterError, ValueError):
+    """A result record failed validation; the message names the field."""
+
+    def __init__(self, field: str, message: str) -> None:
+        self.field = field
+        super().__init__(f"{field}: {message}")
+
+
+class StyleError(StatsetterError, ValueError):
+    """A style profile is invalid; the message names the key and what is allowed."""
+
+    def __init__(self, source: str, key: str, message: str) -> None:
+        self.source = source
+        self.key = key
+        super().__init__(f"{source}: {key}: {message}")
+
+
+class TemplateError(StatsetterError):
+    """A sentence template is missing or failed to render."""
+
+
+class InputError(StatsetterError, ValueError):
+    """Bad input data, file or command-line value; the message names it."""

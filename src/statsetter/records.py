@@ -1,0 +1,562 @@
+"""The result record: one statistical result, whatever computed it.
+
+Every source (analyses, adapters, the audit) ends in a :class:`Result`; every
+sink (sentences, tables, documents) starts from one. Records are frozen,
+validated on construction (messages name the field at fault) and round-trip
+through JSON with a schema version. Keys that a later schema version adds are
+kept in ``extra`` and written back, not dropped.
+
+Numbers in a record are exact and unrounded, except where ``precision`` says
+how many decimals a value was given with (a value copied from a rounded
+source); the renderer never prints more decimals than that.
+"""
+
+from __future__ import annotations
+
+import json
+import math
+from dataclasses import dataclass, field, fields
+from types import MappingProxyType
+from typing import Any, Literal, Mapping, TypeVar, get_args
+
+from .errors import RecordError
+
+__all__ = [
+    "SCHEMA",
+    "SCHEMA_VERSION",
+    "Alternative",
+    "Statistic",
+    "Interval",
+    "Estimate",
+    "EffectSize",
+    "GroupSummary",
+    "Variable",
+    "Note",
+    "Provenance",
+    "Result",
+    "dump_records",
+    "load_records",
+]
+
+SCHEMA = "statsetter.result"
+SCHEMA_VERSION = 1
+
+Alternative = Literal["two-sided", "less", "greater"]
+Level = Literal["nominal", "ordinal", "interval", "ratio"]
+NoteKind = Literal["assumption", "correction", "missing", "choice", "method", "precision", "caution"]
+
+_EMPTY: Mapping[str, Any] = MappingProxyType({})
+
+
+# --------------------------------------------------------------------------
+# validation helpers
+
+
+def _number(path: str, value: Any, *, optional: bool = True) -> float | None:
+    if value is None:
+        if optional:
+            return None
+        raise RecordError(path, "a number is required")
+    if isinstance(value, bool) or not isinstance(value, (int, float)):
+        try:
+            value = float(value)  # numpy scalars, Decimal
+        except (TypeError, ValueError):
+            raise RecordError(path, f"{value!r} is not a number") from None
+    value = float(value)
+    if math.isnan(value):
+        raise RecordError(path, "NaN where a number is required")
+    if math.isinf(value):
+        raise RecordError(path, "infinite value where a finite number is required")
+    return value
+
+
+def _count(path: str, value: Any) -> int | None:
+    if value is None:
+        return None
+    number = _number(path, value)
+    assert number is not None
+    if number < 0:
+        raise RecordError(path, f"{number:g} is negative; a count must be 0 or more")
+    if number != int(number):
+        raise RecordError(path, f"{number:g} is not a whole number")
+    return int(number)
+
+
+def _nonneg(path: str, value: Any) -> float | None:
+    number = _number(path, value)
+    if number is not None and number < 0:
+        raise RecordError(path, f"{number:g} is negative")
+    return number
+
+
+def _choice(path: str, value: Any, allowed: tuple[str, ...], optional: bool = False) -> Any:
+    if value is None and optional:
+        return None
+    if value not in allowed:
+        raise RecordError(path, f"{value!r} is not one of {', '.join(allowed)}")
+    return value
+
+
+def _text(path: str, value: Any, optional: bool = True) -> str | None:
+    if value is None:
+        if optional:
+            return None
+        raise RecordError(path, "text is required")
+    if not isinstance(value, str):
+        raise RecordError(path, f"{value!r} is not text")
+    if not optional and not value.strip():
+        raise RecordError(path, "text is required")
+    return value
+
+
+def _frozen_map(path: str, value: Any) -> Mapping[str, Any]:
+    if value is None:
+        return _EMPTY
+    if not isinstance(value, Mapping):
+        raise RecordError(path, f"{value!r} is not a mapping")
+    for key in value:
+        if not isinstance(key, str):
+            raise RecordError(path, f"key {key!r} is not text")
+    return MappingProxyType(dict(value))
+
+
+def _set(obj: Any, name: str, value: Any) -> None:
+    object.__setattr__(obj, name, value)
+
+
+# --------------------------------------------------------------------------
+# the parts
+
+
+@dataclass(frozen=True, slots=True)
+class Statistic:
+    """A test statistic: its symbol (``t``, ``F``, ``chi2``, ``r``, ``U`` ...),
+    its value and its degrees of freedom (none, one or two; non-integer allowed)."""
+
+    symbol: str
+    value: float
+    df: tuple[float, ...] = ()
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        _text(f"{path}.symbol", self.symbol, optional=False)
+        _set(self, "value", _number(f"{path}.value", self.value, optional=False))
+        df = self.df
+        if isinstance(df, (int, float)):
+            df = (df,)
+        df = tuple(df or ())
+        if len(df) > 2:
+            raise RecordError(f"{path}.df", f"at most two degrees of freedom, got {len(df)}")
+        checked = []
+        for i, d in enumerate(df):
+            number = _number(f"{path}.df[{i}]", d, optional=False)
+            assert number is not None
+            if number <= 0:
+                raise RecordError(f"{path}.df[{i}]", f"{number:g} is not positive; df must be > 0")
+            checked.append(number)
+        _set(self, "df", tuple(checked))
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+
+@dataclass(frozen=True, slots=True)
+class Interval:
+    """A confidence interval: level as a fraction (0.95), lower and upper limit."""
+
+    level: float
+    low: float
+    high: float
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        level = _number(f"{path}.level", self.level, optional=False)
+        assert level is not None
+        if not 0 < level < 1:
+            raise RecordError(f"{path}.level", f"{level:g} is not a fraction between 0 and 1 (write 0.95 for 95%)")
+        low = _number(f"{path}.low", self.low, optional=False)
+        high = _number(f"{path}.high", self.high, optional=False)
+        assert low is not None and high is not None
+        if low > high:
+            raise RecordError(f"{path}", f"lower limit {low:g} is above upper limit {high:g}")
+        _set(self, "level", level)
+        _set(self, "low", low)
+        _set(self, "high", high)
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+
+@dataclass(frozen=True, slots=True)
+class Estimate:
+    """A point estimate (a mean difference, a coefficient B ...) with its
+    standard error and confidence interval. ``ratio`` marks quantities whose
+    null value is 1 (odds ratios) rather than 0."""
+
+    name: str
+    value: float
+    se: float | None = None
+    ci: Interval | None = None
+    ratio: bool = False
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        _text(f"{path}.name", self.name, optional=False)
+        _set(self, "value", _number(f"{path}.value", self.value, optional=False))
+        _set(self, "se", _nonneg(f"{path}.se", self.se))
+        if self.ci is not None:
+            self.ci.validate(f"{path}.ci")
+        if self.ratio and self.value is not None and self.value < 0:
+            raise RecordError(f"{path}.value", f"{self.value:g} is negative; a ratio cannot be")
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+    @property
+    def null(self) -> float:
+        return 1.0 if self.ratio else 0.0
+
+
+@dataclass(frozen=True, slots=True)
+class EffectSize:
+    """An effect size (``d``, ``g``, ``eta2``, ``V`` ...) with its interval and
+    the method that computed the interval or the effect."""
+
+    name: str
+    value: float
+    ci: Interval | None = None
+    method: str | None = None
+    ratio: bool = False
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        _text(f"{path}.name", self.name, optional=False)
+        _set(self, "value", _number(f"{path}.value", self.value, optional=False))
+        if self.ci is not None:
+            self.ci.validate(f"{path}.ci")
+        _text(f"{path}.method", self.method)
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+    @property
+    def null(self) -> float:
+        return 1.0 if self.ratio else 0.0
+
+
+@dataclass(frozen=True, slots=True)
+class GroupSummary:
+    """What is known of one group or category: n, mean, SD, median, quartiles,
+    range, or a percentage (for a category)."""
+
+    label: str
+    n: int | None = None
+    mean: float | None = None
+    sd: float | None = None
+    median: float | None = None
+    q1: float | None = None
+    q3: float | None = None
+    minimum: float | None = None
+    maximum: float | None = None
+    percent: float | None = None
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        _text(f"{path}.label", self.label, optional=False)
+        _set(self, "n", _count(f"{path}.n", self.n))
+        for name in ("mean", "median", "q1", "q3", "minimum", "maximum"):
+            _set(self, name, _number(f"{path}.{name}", getattr(self, name)))
+        _set(self, "sd", _nonneg(f"{path}.sd", self.sd))
+        percent = _nonneg(f"{path}.percent", self.percent)
+        if percent is not None and percent > 100:
+            raise RecordError(f"{path}.percent", f"{percent:g} is above 100")
+        _set(self, "percent", percent)
+        if self.q1 is not None and self.q3 is not None and self.q1 > self.q3:
+            raise RecordError(f"{path}", f"q1 {self.q1:g} is above q3 {self.q3:g}")
+        if self.minimum is not None and self.maximum is not None and self.minimum > self.maximum:
+            raise RecordError(f"{path}", f"minimum {self.minimum:g} is above maximum {self.maximum:g}")
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+
+@dataclass(frozen=True, slots=True)
+class Variable:
+    """A variable taking part in the result: column name, the label to print,
+    its role (``outcome``, ``group``, ``x``, ``y``, ``predictor``, ``item`` ...)
+    and its level of measurement when known."""
+
+    name: str
+    label: str | None = None
+    role: str | None = None
+    level: Level | None = None
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        _text(f"{path}.name", self.name, optional=False)
+        _text(f"{path}.label", self.label)
+        _text(f"{path}.role", self.role)
+        _choice(f"{path}.level", self.level, get_args(Level), optional=True)
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+    @property
+    def display(self) -> str:
+        return self.label or self.name
+
+
+@dataclass(frozen=True, slots=True)
+class Note:
+    """A note attached to a result: an assumption check, a correction applied,
+    missing values dropped, an automatic choice, a method, reduced precision."""
+
+    kind: NoteKind
+    text: str
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        _choice(f"{path}.kind", self.kind, get_args(NoteKind))
+        _text(f"{path}.text", self.text, optional=False)
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+
+@dataclass(frozen=True, slots=True)
+class Provenance:
+    """What produced the record (a function or an adapter) and the versions of
+    the libraries involved."""
+
+    source: str
+    versions: Mapping[str, str] = field(default_factory=lambda: _EMPTY)
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def validate(self, path: str) -> None:
+        _text(f"{path}.source", self.source, optional=False)
+        versions = _frozen_map(f"{path}.versions", self.versions)
+        for key, value in versions.items():
+            if not isinstance(value, str):
+                raise RecordError(f"{path}.versions.{key}", f"{value!r} is not a version string")
+        _set(self, "versions", versions)
+        _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
+
+
+# --------------------------------------------------------------------------
+# the record
+
+
+@dataclass(frozen=True, slots=True)
+class Result:
+    """One statistical result, exact and unrounded.
+
+    ``kind`` selects the sentence template (see ``statsetter.render.kinds``).
+    ``details`` holds small kind-specific facts (``variant = "welch"``,
+    ``ss_type = 2``, ``procedure = "Tukey HSD"``, ``k_items = 8`` ...).
+    ``precision`` maps a field path (``"effects[0].ci.low"``) to the number of
+    decimals the value was given with when it came from a rounded source.
+    """
+
+    kind: str
+    statistic: Statistic | None = None
+    p: float | None = None
+    alternative: Alternative = "two-sided"
+    n: int | None = None
+    estimate: Estimate | None = None
+    effects: tuple[EffectSize, ...] = ()
+    groups: tuple[GroupSummary, ...] = ()
+    variables: tuple[Variable, ...] = ()
+    notes: tuple[Note, ...] = ()
+    provenance: Provenance | None = None
+    details: Mapping[str, Any] = field(default_factory=lambda: _EMPTY)
+    precision: Mapping[str, int] = field(default_factory=lambda: _EMPTY)
+    id: str | None = None
+    alpha: float = 0.05
+    extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
+
+    def __post_init__(self) -> None:
+        _text("kind", self.kind, optional=False)
+        _text("id", self.id)
+        if self.statistic is not None:
+            _check_type("statistic", self.statistic, Statistic).validate("statistic")
+        p = _number("p", self.p)
+        if p is not None and not 0 <= p <= 1:
+            raise RecordError("p", f"{p:g} is outside [0, 1]")
+        _set(self, "p", p)
+        _choice("alternative", self.alternative, get_args(Alternative))
+        _set(self, "n", _count("n", self.n))
+        if self.estimate is not None:
+            _check_type("estimate", self.estimate, Estimate).validate("estimate")
+        for name, kind in (
+            ("effects", EffectSize),
+            ("groups", GroupSummary),
+            ("variables", Variable),
+            ("notes", Note),
+        ):
+            items = getattr(self, name)
+            if items is None:
+                items = ()
+            if not isinstance(items, (tuple, list)):
+                raise RecordError(name, f"expected a list, got {type(items).__name__}")
+            items = tuple(items)
+            for i, item in enumerate(items):
+                _check_type(f"{name}[{i}]", item, kind).validate(f"{name}[{i}]")
+            _set(self, name, items)
+        if self.provenance is not None:
+            _check_type("provenance", self.provenance, Provenance).validate("provenance")
+        details = _frozen_map("details", self.details)
+        for key, value in details.items():
+            if value is not None and not isinstance(value, (str, int, float, bool)):
+                raise RecordError(f"details.{key}", f"{value!r} is not text, a number or true/false")
+            if isinstance(value, float) and math.isnan(value):
+                raise RecordError(f"details.{key}", "NaN where a number is required")
+        _set(self, "details", details)
+        precision = _frozen_map("precision", self.precision)
+        for key, value in precision.items():
+            if isinstance(value, bool) or not isinstance(value, int) or value < 0:
+                raise RecordError(f"precision.{key}", f"{value!r} is not a number of decimals")
+        _set(self, "precision", precision)
+        alpha = _number("alpha", self.alpha, optional=False)
+        assert alpha is not None
+        if not 0 < alpha < 1:
+            raise RecordError("alpha", f"{alpha:g} is outside (0, 1)")
+        _set(self, "alpha", alpha)
+        _set(self, "extra", _frozen_map("extra", self.extra))
+
+    # convenience -----------------------------------------------------------
+
+    def effect(self, name: str | None = None) -> EffectSize | None:
+        """The first effect size, or the first with this name."""
+        for e in self.effects:
+            if name is None or e.name == name:
+                return e
+        return None
+
+    def variable(self, role: str) -> Variable | None:
+        for v in self.variables:
+            if v.role == role:
+                return v
+        return None
+
+    @property
+    def df(self) -> tuple[float, ...]:
+        return self.statistic.df if self.statistic is not None else ()
+
+    # JSON --------------------------------------------------------------------
+
+    def to_dict(self) -> dict[str, Any]:
+        out = {"schema": SCHEMA, "version": SCHEMA_VERSION}
+        out.update(_to_plain(self))
+        return out
+
+    @classmethod
+    def from_dict(cls, data: Mapping[str, Any], *, where: str = "record") -> "Result":
+        if not isinstance(data, Mapping):
+            raise RecordError(where, f"expected an object, got {type(data).__name__}")
+        schema = data.get("schema", SCHEMA)
+        if schema != SCHEMA:
+            raise RecordError(f"{where}.schema", f"{schema!r} is not {SCHEMA!r}")
+        version = data.get("version", SCHEMA_VERSION)
+        if isinstance(version, bool) or not isinstance(version, int) or version < 1:
+            raise RecordError(f"{where}.version", f"{version!r} is not a schema version")
+        body = {k: v for k, v in data.items() if k not in ("schema", "version")}
+        try:
+            return _from_plain(cls, body, "record")
+        except RecordError as exc:
+            if where == "record":
+                raise
+            raise RecordError(f"{where}: {exc.field}", str(exc).split(": ", 1)[1]) from None
+
+    def to_json(self, **kwargs: Any) -> str:
+        return json.dumps(self.to_dict(), ensure_ascii=False, **kwargs)
+
+    @classmethod
+    def from_json(cls, text: str) -> "Result":
+        try:
+            data = json.loads(text)
+        except json.JSONDecodeError as exc:
+            raise RecordError("record", f"not valid JSON (line {exc.lineno}, column {exc.colno}): {exc.msg}") from None
+        return cls.from_dict(data)
+
+
+def _check_type(path: str, value: Any, kind: type) -> Any:
+    if not isinstance(value, kind):
+        raise RecordError(path, f"expected {kind.__name__}, got {type(value).__name__}")
+    return value
+
+
+_PARTS: dict[str, type] = {
+    "statistic": Statistic,
+    "estimate": Estimate,
+    "ci": Interval,
+    "provenance": Provenance,
+}
+_LISTS: dict[str, type] = {
+    "effects": EffectSize,
+    "groups": GroupSummary,
+    "variables": Variable,
+    "notes": Note,
+}
+
+T = TypeVar("T")
+
+
+def _to_plain(obj: Any) -> dict[str, Any]:
+    out: dict[str, Any] = {}
+    for f in fields(obj):
+        value = getattr(obj, f.name)
+        if f.name == "extra":
+            continue
+        if value is None or value == () or (isinstance(value, Mapping) and not value):
+            if f.name not in ("kind", "p"):
+                continue
+        if isinstance(value, tuple):
+            value = [_to_plain(v) if hasattr(v, "__dataclass_fields__") else v for v in value]
+        elif hasattr(value, "__dataclass_fields__"):
+            value = _to_plain(value)
+        elif isinstance(value, Mapping):
+            value = dict(value)
+        out[f.name] = value
+    for key, value in obj.extra.items():
+        out.setdefault(key, value)
+    return out
+
+
+def _from_plain(cls: type[T], data: Mapping[str, Any], path: str) -> T:
+    if not isinstance(data, Mapping):
+        raise RecordError(path, f"expected an object, got {type(data).__name__}")
+    known = {f.name for f in fields(cls)} - {"extra"}  # type: ignore[arg-type]
+    kwargs: dict[str, Any] = {}
+    extra: dict[str, Any] = {}
+    for key, value in data.items():
+        if key not in known:
+            extra[key] = value
+            continue
+        sub = f"{path}.{key}" if path != "record" else key
+        if key in _PARTS and value is not None:
+            value = _from_plain(_PARTS[key], value, sub)
+        elif key in _LISTS:
+            if not isinstance(value, list):
+                raise RecordError(sub, f"expected a list, got {type(value).__name__}")
+            value = tuple(_from_plain(_LISTS[key], v, f"{sub}[{i}]") for i, v in enumerate(value))
+        elif key == "df" and isinstance(value, list):
+            value = tuple(value)
+        kwargs[key] = value
+    kwargs["extra"] = extra
+    try:
+        obj = cls(**kwargs)
+    except TypeError as exc:
+        raise RecordError(path, f"incomplete: {exc}") from None
+    return obj
+
+
+def dump_records(records: list[Result] | tuple[Result, ...], *, indent: int | None = 2) -> str:
+    """Records as a JSON array (each with its schema and version)."""
+    return json.dumps([r.to_dict() for r in records], ensure_ascii=False, indent=indent)
+
+
+def load_records(text: str, *, source: str = "<records>") -> list[Result]:
+    """Records from JSON text: an array of records, or a single record object."""
+    from .errors import InputError
+
+    try:
+        data = json.loads(text)
+    except json.JSONDecodeError as exc:
+        raise InputError(f"{source}: not valid JSON (line {exc.lineno}, column {exc.colno}): {exc.msg}") from None
+    if isinstance(data, Mapping):
+        data = data.get("records", [data]) if "kind" not in data else [data]
+    if not isinstance(data, list):
+        raise InputError(f"{source}: expected a JSON array of records")
+    out = []
+    for i, item in enumerate(data):
+        try:
+            out.append(Result.from_dict(item, where=f"record {i + 1}"))
+        except RecordError as exc:
+            raise InputError(f"{source}: {exc}") from None
+    return out

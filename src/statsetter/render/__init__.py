@@ -1,0 +1,1 @@
+"""Rendering: StyledText, sentence templates and table models."""

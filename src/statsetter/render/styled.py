@@ -1,0 +1,333 @@
+"""StyledText: plain text plus italic, superscript and subscript spans.
+
+Templates and symbols are written in a tiny markup, an HTML subset:
+``<i>t</i>``, ``R<sup>2</sup>``, ``r<sub>s</sub>``, with ``&lt;``, ``&gt;``
+and ``&amp;`` for the three reserved characters. :meth:`StyledText.from_markup`
+parses it; :meth:`StyledText.markup` writes it back. Writers turn a
+StyledText into plain text (Unicode super/subscripts where they exist),
+pandoc Markdown, HTML or LaTeX, and the Word writer turns its segments into
+runs.
+"""
+
+from __future__ import annotations
+
+import html as _html
+import re
+from dataclasses import dataclass
+from typing import Iterable, Iterator, Literal
+
+__all__ = ["Span", "StyledText", "STYLES"]
+
+SpanStyle = Literal["i", "sup", "sub"]
+STYLES: tuple[str, ...] = ("i", "sup", "sub")
+
+_TOKEN = re.compile(r"<(/?)(i|sup|sub)>|&(lt|gt|amp|quot|#\d+|#x[0-9a-fA-F]+);|[<>&]")
+_ENTITY = {"lt": "<", "gt": ">", "amp": "&", "quot": '"'}
+
+
+@dataclass(frozen=True, slots=True)
+class Span:
+    start: int
+    end: int
+    style: SpanStyle
+
+
+class StyledText:
+    """Immutable text with style spans. ``str()`` gives the bare characters."""
+
+    __slots__ = ("text", "spans")
+
+    text: str
+    spans: tuple[Span, ...]
+
+    def __init__(self, text: str = "", spans: Iterable[Span] = ()) -> None:
+        object.__setattr__(self, "text", text)
+        object.__setattr__(self, "spans", tuple(s for s in spans if s.end > s.start))
+
+    def __setattr__(self, name: str, value: object) -> None:
+        raise AttributeError("StyledText is immutable")
+
+    # -- construction -----------------------------------------------------------
+
+    @classmethod
+    def styled(cls, text: str, *styles: SpanStyle) -> "StyledText":
+        return cls(text, [Span(0, len(text), s) for s in styles])
+
+    @classmethod
+    def from_markup(cls, markup: str) -> "StyledText":
+        """Parse the markup; raises ValueError naming the position of a fault."""
+        out: list[str] = []
+        length = 0
+        spans: list[Span] = []
+        stack: list[tuple[str, int]] = []
+        pos = 0
+        for m in _TOKEN.finditer(markup):
+            if m.start() > pos:
+                chunk = markup[pos : m.start()]
+                out.append(chunk)
+                length += len(chunk)
+            pos = m.end()
+            closing, tag, entity = m.group(1), m.group(2), m.group(3)
+            if tag:
+                if closing:
+                    if not stack or stack[-1][0] != tag:
+                        raise ValueError(f"</{tag}> at position {m.start()} closes nothing open")
+                    _, start = stack.pop()
+                    spans.append(Span(start, length, tag))  # type: ignore[arg-type]
+                else:
+                    stack.append((tag, length))
+            elif entity:
+                if entity.startswith("#x"):
+                    char = chr(int(entity[2:], 16))
+                elif entity.startswith("#"):
+                    char = chr(int(entity[1:]))
+                else:
+                    char = _ENTITY[entity]
+                out.append(char)
+                length += 1
+            else:
+                raise ValueError(
+                    f"bare {m.group(0)!r} at position {m.start()}; write &lt; &gt; &amp; or a tag <i> <sup> <sub>"
+                )
+        if stack:
+            tag, _ = stack[-1]
+            raise ValueError(f"<{tag}> is never closed")
+        if pos < len(markup):
+            out.append(markup[pos:])
+        spans.sort(key=lambda s: (s.start, -s.end))
+        return cls("".join(out), spans)
+
+    @staticmethod
+    def join(separator: "StyledText | str", items: Iterable["StyledText | str"]) -> "StyledText":
+        sep = separator if isinstance(separator, StyledText) else StyledText(separator)
+        result = StyledText()
+        first = True
+        for item in items:
+            if not first:
+                result = result + sep
+            result = result + item
+            first = False
+        return result
+
+    # -- combination ------------------------------------------------------------
+
+    def __add__(self, other: "StyledText | str") -> "StyledText":
+        if isinstance(other, str):
+            other = StyledText(other)
+        if not isinstance(other, StyledText):
+            return NotImplemented
+        shift = len(self.text)
+        return StyledText(
+            self.text + other.text,
+            self.spans + tuple(Span(s.start + shift, s.end + shift, s.style) for s in other.spans),
+        )
+
+    def __radd__(self, other: str) -> "StyledText":
+        if isinstance(other, str):
+            return StyledText(other) + self
+        return NotImplemented
+
+    def __eq__(self, other: object) -> bool:
+        if isinstance(other, StyledText):
+            return self.text == other.text and list(self.segments()) == list(other.segments())
+        return NotImplemented
+
+    def __hash__(self) -> int:
+        return hash((self.text, tuple(self.segments())))
+
+    def __len__(self) -> int:
+        return len(self.text)
+
+    def __bool__(self) -> bool:
+        return bool(self.text)
+
+    def __str__(self) -> str:
+        return self.text
+
+    def __repr__(self) -> str:
+        return f"StyledText({self.markup()!r})"
+
+    # -- reading ------------------------------------------------------------------
+
+    def segments(self) -> Iterator[tuple[str, frozenset[str]]]:
+        """Maximal runs of text with one set of styles, in order."""
+        text = self.text
+        if not self.spans:
+            if text:
+                yield text, frozenset()
+            return
+        cuts = {0, len(text)}
+        for s in self.spans:
+            cuts.add(s.start)
+            cuts.add(s.end)
+        points = sorted(cuts)
+        prev_text, prev_styles = "", frozenset()
+        for a, b in zip(points, points[1:]):
+            if a == b:
+                continue
+            styles = frozenset(s.style for s in self.spans if s.start <= a and s.end >= b)
+            if styles == prev_styles:
+                prev_text += text[a:b]
+            else:
+                if prev_text:
+                    yield prev_text, prev_styles
+                prev_text, prev_styles = text[a:b], styles
+        if prev_text:
+            yield prev_text, prev_styles
+
+    def italic_ranges(self) -> list[tuple[int, int]]:
+        return [(s.start, s.end) for s in self.spans if s.style == "i"]
+
+    # -- writers -----------------------------------------------------------------
+
+    def markup(self) -> str:
+        """The markup form; ``from_markup(x.markup()) == x``."""
+        return "".join(_wrap(_escape_markup(t), styles, _MARKUP_TAGS) for t, styles in self.segments())
+
+    def __html__(self) -> str:  # lets Jinja insert a StyledText as markup, unescaped
+        return self.markup()
+
+    def plain(self) -> str:
+        """Plain text: Unicode superscripts and subscripts where they exist."""
+        parts = []
+        for text, styles in self.segments():
+            if "sup" in styles:
+                parts.append(_unicode_script(text, _SUPER, "^"))
+            elif "sub" in styles:
+                parts.append(_unicode_script(text, _SUB, "_"))
+            else:
+                parts.append(text)
+        return "".join(parts)
+
+    def markdown(self) -> str:
+        """pandoc Markdown: ``*t*``, ``R^2^``, ``r~s~``."""
+        parts = []
+        for text, styles in self.segments():
+            lead, core, trail = _split_space(text)
+            core = _escape_md(core)
+            if "sup" in styles or "sub" in styles:
+                core = core.replace(" ", "\\ ")
+            if "sup" in styles:
+                core = f"^{core}^"
+            if "sub" in styles:
+                core = f"~{core}~"
+            if "i" in styles and core:
+                core = f"*{core}*"
+            parts.append(f"{_escape_md(lead)}{core}{trail}")
+        return "".join(parts)
+
+    def html(self) -> str:
+        return "".join(_wrap(_html.escape(t, quote=False), styles, _HTML_TAGS) for t, styles in self.segments())
+
+    def latex(self) -> str:
+        parts = []
+        for text, styles in self.segments():
+            body = _escape_latex(text)
+            if "sup" in styles:
+                body = f"\\textsuperscript{{{body}}}"
+            if "sub" in styles:
+                body = f"\\textsubscript{{{body}}}"
+            if "i" in styles:
+                body = f"\\textit{{{body}}}"
+            parts.append(body)
+        return "".join(parts)
+
+    def to(self, fmt: str) -> str:
+        """Write in a named format: ``text``, ``md``, ``html`` or ``tex``."""
+        try:
+            return getattr(self, _FORMATS[fmt])()
+        except KeyError:
+            raise ValueError(f"unknown format {fmt!r}; formats: {', '.join(_FORMATS)}") from None
+
+    # -- notebook display --------------------------------------------------------
+
+    def _repr_html_(self) -> str:
+        return self.html()
+
+    def _repr_markdown_(self) -> str:
+        return self.markdown()
+
+    def _repr_latex_(self) -> str:
+        return self.latex()
+
+
+_FORMATS = {"text": "plain", "md": "markdown", "html": "html", "tex": "latex", "markup": "markup"}
+
+_MARKUP_TAGS = {"i": ("<i>", "</i>"), "sup": ("<sup>", "</sup>"), "sub": ("<sub>", "</sub>")}
+_HTML_TAGS = _MARKUP_TAGS
+
+
+def _wrap(body: str, styles: frozenset[str], tags: dict[str, tuple[str, str]]) -> str:
+    for style in ("sub", "sup", "i"):
+        if style in styles:
+            open_, close = tags[style]
+            body = f"{open_}{body}{close}"
+    return body
+
+
+def _escape_markup(text: str) -> str:
+    return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
+
+
+_SUPER = dict(zip("0123456789+-−=()niab", "⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻⁻⁼⁽⁾ⁿⁱᵃᵇ"))
+_SUB = dict(zip("0123456789+-−=()aehijklmnoprstuvx", "₀₁₂₃₄₅₆₇₈₉₊₋₋₌₍₎ₐₑₕᵢⱼₖₗₘₙₒₚᵣₛₜᵤᵥₓ"))
+
+
+def _unicode_script(text: str, table: dict[str, str], marker: str) -> str:
+    if all(c in table for c in text):
+        return "".join(table[c] for c in text)
+    return f"{marker}{text}"
+
+
+_MD_SPECIAL = re.compile(r"([\\*_^~`])")
+
+
+def _escape_md(text: str) -> str:
+    return _MD_SPECIAL.sub(r"\\\1", text)
+
+
+def _split_space(text: str) -> tuple[str, str, str]:
+    core = text.strip(" ")
+    if not core:
+        return text, "", ""
+    lead = text[: len(text) - len(text.lstrip(" "))]
+    trail = text[len(text.rstrip(" ")) :]
+    return lead, core, trail
+
+
+_LATEX = {
+    "\\": r"\textbackslash{}",
+    "{": r"\{",
+    "}": r"\}",
+    "%": r"\%",
+    "$": r"\$",
+    "&": r"\&",
+    "#": r"\#",
+    "_": r"\_",
+    "~": r"\textasciitilde{}",
+    "^": r"\textasciicircum{}",
+    "−": r"\textminus{}",
+    "–": "--",
+    "—": "---",
+    "χ": r"$\chi$",
+    "η": r"$\eta$",
+    "ω": r"$\omega$",
+    "ε": r"$\varepsilon$",
+    "α": r"$\alpha$",
+    "β": r"$\beta$",
+    "τ": r"$\tau$",
+    "ρ": r"$\rho$",
+    "φ": r"$\varphi$",
+    "Δ": r"$\Delta$",
+    "×": r"$\times$",
+    "≤": r"$\leq$",
+    "≥": r"$\geq$",
+    "±": r"$\pm$",
+    "<": r"\textless{}",
+    ">": r"\textgreater{}",
+}
+_LATEX_RE = re.compile("|".join(re.escape(k) for k in _LATEX))
+
+
+def _escape_latex(text: str) -> str:
+    return _LATEX_RE.sub(lambda m: _LATEX[m.group(0)], text)
