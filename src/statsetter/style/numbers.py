@@ -33,7 +33,8 @@ _MAX_DECIMALS = 30
 def round_half_up(value: float, decimals: int) -> Decimal:
     """``value`` rounded half up at ``decimals`` places, from the shortest
     decimal representation of the float (what the user sees)."""
-    return Decimal(repr(float(value))).quantize(_QUANTUM[decimals], context=_CTX)
+    quantum = _QUANTUM[decimals] if decimals < len(_QUANTUM) else Decimal(1).scaleb(-decimals)
+    return Decimal(repr(float(value))).quantize(quantum, context=_CTX)
 
 
 def _exact_decimals(value: float) -> int:
@@ -174,13 +175,14 @@ class Numbers:
             decimals = self.decimals_for(quantity)
         if held is not None:
             decimals = min(decimals, held)
-            limit = held
-        else:
-            limit = max(_exact_decimals(value), decimals)
         null_dec = Decimal(repr(float(null)))
         rounded = round_half_up(value, decimals)
-        while rounded == null_dec and value != null and decimals < min(limit, _MAX_DECIMALS):
-            decimals += 1
+        if rounded == null_dec and value != null:
+            # round at the first significant digit of the distance from the null
+            distance = Decimal(repr(float(value))) - null_dec
+            decimals = max(decimals + 1, -distance.adjusted())
+            if held is not None:
+                decimals = min(decimals, held)
             rounded = round_half_up(value, decimals)
         return self._compose(rounded, quantity in self._bounded, True)
 

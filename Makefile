@@ -1,0 +1,27 @@
+# Two commands do all the set-up on a fresh machine with python3 and make:
+#   make demo   create .venv, install, run the demo
+#   make test   create .venv, install, run the tests
+PYTHON ?= python3
+VENV := .venv
+BIN := $(VENV)/bin
+STAMP := $(VENV)/.installed
+
+.PHONY: demo test bench clean
+
+$(STAMP): pyproject.toml
+	$(PYTHON) -m venv $(VENV)
+	$(BIN)/python -m pip install -q --upgrade pip
+	$(BIN)/python -m pip install -q -e '.[all,test]'
+	touch $(STAMP)
+
+demo: $(STAMP)
+	$(BIN)/python demo/run_demo.py
+
+test: $(STAMP)
+	$(BIN)/python -m pytest
+
+bench: $(STAMP)
+	$(BIN)/python bench/bench_render.py
+
+clean:
+	rm -rf $(VENV) dist build demo/out bench/out

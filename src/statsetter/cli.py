@@ -1,0 +1,297 @@
+"""The ``statsetter`` command.
+
+Commands: ``format`` (one result from numbers on the command line),
+``render`` (JSON files of records), ``styles`` (list, show, check). Every
+error from user input prints one or two lines and exits with status 2.
+"""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from pathlib import Path
+from typing import Sequence
+
+from .errors import InputError, StatsetterError
+
+__all__ = ["main"]
+
+EXIT_USAGE = 2
+
+# short names for ``statsetter format``; values are (kind, statistic symbol, details)
+_FORMAT_KINDS: dict[str, tuple[str, str | None, dict[str, str]]] = {
+    "t": ("t_independent", "t", {"variant": "student"}),
+    "welch-t": ("t_independent", "t", {"variant": "welch"}),
+    "paired-t": ("t_paired", "t", {}),
+    "one-sample-t": ("t_one_sample", "t", {}),
+    "r": ("pearson", "r", {}),
+    "rs": ("spearman", "rs", {}),
+    "tau": ("kendall", "tau_b", {}),
+    "chi2": ("chi2_independence", "chi2", {}),
+    "chi2-fit": ("chi2_goodness_of_fit", "chi2", {}),
+    "fisher": ("fisher_exact", None, {}),
+    "anova": ("anova_oneway", "F", {"variant": "classic"}),
+    "welch-anova": ("anova_oneway", "F", {"variant": "welch"}),
+    "anova-term": ("anova_term", "F", {}),
+    "posthoc": ("posthoc_pair", None, {}),
+    "coef": ("linear_coefficient", "t", {}),
+    "model": ("linear_model", "F", {}),
+    "step": ("linear_step", "F", {}),
+    "logit-coef": ("logistic_coefficient", "z", {}),
+    "logit-model": ("logistic_model", "chi2", {}),
+    "U": ("mann_whitney", "U", {}),
+    "signed-rank": ("wilcoxon", "T", {}),
+    "H": ("kruskal_wallis", "H", {}),
+    "alpha": ("cronbach_alpha", None, {}),
+}
+
+_OUTPUT_FORMATS = ("text", "md", "html", "tex")
+
+
+class _Parser(argparse.ArgumentParser):
+    def error(self, message: str) -> None:  # two lines, exit 2
+        self.print_usage(sys.stderr)
+        sys.stderr.write(f"{self.prog}: error: {message}\n")
+        raise SystemExit(EXIT_USAGE)
+
+
+def _build_parser() -> argparse.ArgumentParser:
+    parser = _Parser(
+        prog="statsetter",
+        description="Statistical results as manuscript-ready text and tables, in a chosen reporting style.",
+    )
+    parser.add_argument("--version", action="store_true", help="print the version and exit")
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
+
+    def style_options(p: argparse.ArgumentParser) -> None:
+        p.add_argument("--style", default=None, help="a built-in style name (see 'statsetter styles') or a TOML file")
+        p.add_argument("--to", choices=_OUTPUT_FORMATS, default="text", help="output format (default: text)")
+        p.add_argument("--form", choices=("stats", "sentence"), default="stats", help="statistics string or full sentence")
+        p.add_argument("--out", metavar="FILE", help="write to FILE instead of standard output")
+
+    f = sub.add_parser(
+        "format",
+        help="render one result from numbers given on the command line",
+        description="Render one result from its numbers, e.g. "
+        "'statsetter format t --stat 2.14 --df 38 --effect d=0.68 --effect-ci 0.04,1.31'. "
+        "A negative limit needs '=': --effect-ci=-0.30,0.52.",
+    )
+    f.add_argument("kind", metavar="KIND", help="result kind: " + ", ".join(_FORMAT_KINDS))
+    f.add_argument("--stat", type=float, metavar="VALUE", help="the test statistic")
+    f.add_argument("--df", metavar="DF[,DF2]", help="degrees of freedom, one or two numbers")
+    f.add_argument("--p", type=float, metavar="P", help="exact p value (computed from the statistic when left out)")
+    f.add_argument("--n", type=int, metavar="N", help="sample size")
+    f.add_argument("--effect", metavar="NAME=VALUE", help="effect size, e.g. d=0.68, eta2=0.09, V=0.22")
+    f.add_argument("--effect-ci", metavar="LOW,HIGH", help="confidence interval of the effect size")
+    f.add_argument("--estimate", type=float, metavar="VALUE", help="point estimate (mean difference, B, OR ...)")
+    f.add_argument("--estimate-ci", metavar="LOW,HIGH", help="confidence interval of the estimate")
+    f.add_argument("--level", type=float, default=95.0, metavar="PERCENT", help="confidence level in percent (95)")
+    f.add_argument("--alternative", choices=("two-sided", "less", "greater"), default="two-sided")
+    f.add_argument("--alpha", type=float, default=0.05, help="significance level for decision-preserving rounding")
+    f.add_argument("--label", action="append", default=[], metavar="ROLE=TEXT", help="variable label, e.g. outcome=fatigue")
+    f.add_argument("--group", action="append", default=[], metavar="LABEL,N,M,SD", help="a group summary (repeatable)")
+    style_options(f)
+
+    r = sub.add_parser("render", help="render JSON files of records in one style")
+    r.add_argument("files", nargs="+", metavar="FILE", help="JSON files of records (from several authors, say)")
+    style_options(r)
+
+    s = sub.add_parser("styles", help="list, show or check style profiles")
+    s.add_argument("action", nargs="?", choices=("list", "show", "check"), default="list")
+    s.add_argument("target", nargs="?", metavar="NAME|FILE", help="style to show, or TOML file to check")
+    return parser
+
+
+# --------------------------------------------------------------------------
+
+
+def _pair(text: str, option: str) -> tuple[float, float]:
+    parts = [p.strip() for p in text.replace(";", ",").split(",")]
+    if len(parts) != 2:
+        raise InputError(f"{option}: expected LOW,HIGH, got {text!r}")
+    try:
+        low, high = (float(p.replace("\u2212", "-")) for p in parts)
+    except ValueError:
+        raise InputError(f"{option}: {text!r} is not two numbers") from None
+    return low, high
+
+
+def _format_record(ns: argparse.Namespace):  # -> Result
+    from .records import EffectSize, Estimate, GroupSummary, Interval, Result, Statistic, Variable
+
+    if ns.kind not in _FORMAT_KINDS:
+        raise InputError(f"unknown KIND {ns.kind!r}; kinds: {', '.join(_FORMAT_KINDS)}")
+    kind, symbol, details = _FORMAT_KINDS[ns.kind]
+    if not 0 < ns.level < 100:
+        raise InputError(f"--level: {ns.level:g} is not a percentage between 0 and 100")
+    level = ns.level / 100
+    df: tuple[float, ...] = ()
+    if ns.df:
+        try:
+            df = tuple(float(x) for x in ns.df.split(","))
+        except ValueError:
+            raise InputError(f"--df: {ns.df!r} is not one or two numbers") from None
+    statistic = None
+    if ns.stat is not None:
+        if symbol is None:
+            raise InputError(f"--stat: a {ns.kind} result has no test statistic")
+        statistic = Statistic(symbol, ns.stat, df)
+    elif df:
+        raise InputError("--df given without --stat")
+    p = ns.p
+    if p is None and statistic is not None and symbol in ("t", "z", "F", "chi2", "r", "rs"):
+        from .pvalues import p_from_statistic
+
+        p = p_from_statistic(symbol, statistic.value, df, ns.alternative)
+    effects = ()
+    if ns.effect:
+        name, eq, value = ns.effect.partition("=")
+        if not eq:
+            raise InputError(f"--effect: expected NAME=VALUE, got {ns.effect!r}")
+        try:
+            number = float(value.replace("\u2212", "-"))
+        except ValueError:
+            raise InputError(f"--effect: {value!r} is not a number") from None
+        ci = Interval(level, *_pair(ns.effect_ci, "--effect-ci")) if ns.effect_ci else None
+        effects = (EffectSize(name.strip(), number, ci, ratio=name.strip() == "OR"),)
+    elif ns.effect_ci:
+        raise InputError("--effect-ci given without --effect")
+    estimate = None
+    if ns.estimate is not None:
+        ci = Interval(level, *_pair(ns.estimate_ci, "--estimate-ci")) if ns.estimate_ci else None
+        name = {"fisher_exact": "OR"}.get(kind, "estimate")
+        estimate = Estimate(name, ns.estimate, ci=ci, ratio=name == "OR")
+    variables = []
+    for item in ns.label:
+        role, eq, text = item.partition("=")
+        if not eq:
+            raise InputError(f"--label: expected ROLE=TEXT, got {item!r}")
+        variables.append(Variable(name=text, label=text, role=role.strip()))
+    groups = []
+    for item in ns.group:
+        parts = [x.strip() for x in item.split(",")]
+        if len(parts) != 4:
+            raise InputError(f"--group: expected LABEL,N,M,SD, got {item!r}")
+        try:
+            groups.append(GroupSummary(parts[0], n=int(parts[1]), mean=float(parts[2]), sd=float(parts[3])))
+        except ValueError:
+            raise InputError(f"--group: {item!r} has a value that is not a number") from None
+    return Result(
+        kind=kind,
+        statistic=statistic,
+        p=p,
+        alternative=ns.alternative,
+        n=ns.n,
+        estimate=estimate,
+        effects=effects,
+        groups=tuple(groups),
+        variables=tuple(variables),
+        details=details,
+        alpha=ns.alpha,
+    )
+
+
+def _emit(text: str, out: str | None, inputs: Sequence[str] = ()) -> None:
+    if out:
+        from .files import write_atomic
+
+        write_atomic(out, text if text.endswith("\n") else text + "\n", inputs=inputs)
+    else:
+        sys.stdout.write(text if text.endswith("\n") else text + "\n")
+
+
+def _cmd_format(ns: argparse.Namespace) -> int:
+    from .render.sentences import render
+
+    record = _format_record(ns)
+    _emit(render(record, ns.form, ns.style).to(ns.to), ns.out)
+    return 0
+
+
+def _cmd_render(ns: argparse.Namespace) -> int:
+    from .records import load_records
+    from .render.sentences import render
+    from .style import load_style
+
+    style = load_style(ns.style)
+    lines = []
+    for name in ns.files:
+        path = Path(name)
+        try:
+            text = path.read_text(encoding="utf-8")
+        except FileNotFoundError:
+            raise InputError(f"{name}: no such file") from None
+        except (OSError, UnicodeDecodeError) as exc:
+            raise InputError(f"{name}: cannot read ({exc})") from None
+        for record in load_records(text, source=name):
+            lines.append(render(record, ns.form, style).to(ns.to))
+    sep = "\n\n" if ns.to in ("md", "tex") else "\n"
+    _emit(sep.join(lines), ns.out, inputs=ns.files)
+    return 0
+
+
+def _cmd_styles(ns: argparse.Namespace) -> int:
+    from .style import builtin_styles, check_style_file, load_style
+
+    if ns.action == "list":
+        for name in builtin_styles():
+            style = load_style(name)
+            print(f"{name:8} {style.title}")
+        return 0
+    if ns.target is None:
+        raise InputError(f"styles {ns.action}: name a {'style' if ns.action == 'show' else 'TOML file'}")
+    if ns.action == "show":
+        _show_style(load_style(ns.target))
+        return 0
+    style = check_style_file(ns.target)
+    print(f"{ns.target}: valid style {style.name!r} ({style.title})")
+    return 0
+
+
+def _show_style(style) -> None:  # type: ignore[no-untyped-def]
+    from .render.sentences import render
+    from .records import EffectSize, Interval, Result, Statistic
+
+    print(f"{style.name}: {style.title}")
+    print(f"  source: {style.source}")
+    for section in ("numbers", "p", "ci", "wording"):
+        for key, value in style.data[section].items():
+            shown = ", ".join(value) if isinstance(value, tuple) and value and isinstance(value[0], str) else value
+            if isinstance(shown, dict) or hasattr(shown, "items"):
+                shown = ", ".join(f"{k}={v}" for k, v in shown.items())
+            print(f"  {section}.{key} = {shown!r}" if isinstance(shown, str) else f"  {section}.{key} = {shown}")
+    sample = Result(
+        kind="t_independent",
+        statistic=Statistic("t", -2.1436, (38,)),
+        p=0.03855,
+        effects=(EffectSize("d", -0.6779, Interval(0.95, -1.3127, -0.0346)),),
+    )
+    print("  example: " + render(sample, "stats", style).plain())
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    parser = _build_parser()
+    ns = parser.parse_args(argv)
+    if ns.version:
+        from . import __version__
+
+        print(f"statsetter {__version__}")
+        return 0
+    if ns.command is None:
+        parser.print_help()
+        return 0
+    handlers = {"format": _cmd_format, "render": _cmd_render, "styles": _cmd_styles}
+    try:
+        return handlers[ns.command](ns)
+    except StatsetterError as exc:
+        sys.stderr.write(f"statsetter {ns.command}: error: {exc}\n")
+        return EXIT_USAGE
+    except KeyboardInterrupt:
+        sys.stderr.write("statsetter: interrupted\n")
+        return 130
+    except BrokenPipeError:
+        return 0
+
+
+if __name__ == "__main__":
+    raise SystemExit(main())

@@ -1,0 +1,1 @@
+"""Writers: one per output format."""

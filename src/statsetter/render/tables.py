@@ -1,0 +1,111 @@
+"""TableModel: a manuscript table as data, built once and written by each writer.
+
+The parts follow the anatomy of a journal table (APA 7 §7.8-7.21): a number
+and a title above; column heads, optionally grouped under spanners; a stub
+column on the left; cells; and notes below (general, specific with
+superscript letters, probability). Cells and heads are StyledText, so
+italics and superscripts survive into every format.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import Literal
+
+from ..errors import InputError
+from .styled import StyledText
+
+__all__ = ["Column", "Spanner", "Row", "TableModel", "styled"]
+
+Align = Literal["left", "center", "right", "decimal"]
+
+
+def styled(value: "StyledText | str") -> StyledText:
+    """A StyledText from markup text, or the StyledText itself."""
+    if isinstance(value, StyledText):
+        return value
+    return StyledText.from_markup(value)
+
+
+@dataclass(frozen=True)
+class Column:
+    head: StyledText
+    align: Align = "center"
+
+
+@dataclass(frozen=True)
+class Spanner:
+    """A head over columns ``start`` to ``end - 1`` (0-based, stub excluded)."""
+
+    label: StyledText
+    start: int
+    end: int
+
+
+@dataclass(frozen=True)
+class Row:
+    """A stub entry and its cells. A ``heading`` row carries only its stub
+    (a variable name over its categories); ``indent`` indents the stub."""
+
+    stub: StyledText
+    cells: tuple[StyledText, ...] = ()
+    indent: int = 0
+    heading: bool = False
+
+
+@dataclass(frozen=True)
+class TableModel:
+    title: StyledText
+    columns: tuple[Column, ...]
+    rows: tuple[Row, ...]
+    stub_head: StyledText = field(default_factory=StyledText)
+    number: int | None = None
+    spanners: tuple[Spanner, ...] = ()
+    general_note: StyledText | None = None
+    specific_notes: tuple[tuple[str, StyledText], ...] = ()
+    probability_note: StyledText | None = None
+
+    def __post_init__(self) -> None:
+        width = len(self.columns)
+        for i, row in enumerate(self.rows):
+            if row.heading and not row.cells:
+                continue
+            if len(row.cells) != width:
+                raise InputError(f"table row {i + 1} ({row.stub.text!r}) has {len(row.cells)} cells; the table has {width} columns")
+        last = 0
+        for s in sorted(self.spanners, key=lambda s: s.start):
+            if not 0 <= s.start < s.end <= width:
+                raise InputError(f"spanner {s.label.text!r} covers columns {s.start}-{s.end - 1}; the table has {width}")
+            if s.start < last:
+                raise InputError(f"spanner {s.label.text!r} overlaps another spanner")
+            last = s.end
+
+    def with_number(self, number: int) -> "TableModel":
+        from dataclasses import replace
+
+        return replace(self, number=number)
+
+    @property
+    def has_notes(self) -> bool:
+        return bool(self.general_note or self.specific_notes or self.probability_note)
+
+    def heads_with_spanners(self) -> list[StyledText]:
+        """Each column head prefixed by its spanner, for one-row formats (CSV, Markdown)."""
+        out = []
+        for j, col in enumerate(self.columns):
+            span = next((s for s in self.spanners if s.start <= j < s.end), None)
+            out.append(span.label + ": " + col.head if span is not None else col.head)
+        return out
+
+    def note_parts(self) -> list[StyledText]:
+        """The notes in order: ``Note.`` + general, specific (superscript letters), probability."""
+        parts: list[StyledText] = []
+        if self.general_note:
+            parts.append(StyledText.styled("Note.", "i") + " " + self.general_note)
+        for letter, text in self.specific_notes:
+            parts.append(StyledText.styled(letter, "sup") + " " + text)
+        if self.probability_note:
+            parts.append(self.probability_note)
+        if parts and not self.general_note:
+            parts[0] = StyledText.styled("Note.", "i") + " " + parts[0]
+        return parts

@@ -1,0 +1,219 @@
+"""The number engine, against REPORTING-RULES.md (rule and source beside each check)."""
+
+from decimal import Decimal
+from pathlib import Path
+
+import pytest
+from hypothesis import given, settings
+from hypothesis import strategies as st
+
+from statsetter import load_style
+from statsetter.style import numbers_for, round_half_up
+
+MINUS = "\u2212"
+
+
+def parse(text: str, style_mark: str = ".", thousands: str = ",") -> Decimal:
+    """Read a formatted number back (inverse of the engine's notation)."""
+    t = text.replace(MINUS, "-").replace(thousands, "") if thousands else text.replace(MINUS, "-")
+    t = t.replace(style_mark, ".")
+    if t.startswith("."):
+        t = "0" + t
+    if t.startswith("-."):
+        t = "-0" + t[1:]
+    return Decimal(t)
+
+
+# -- rounding: round half up on the decimal the user sees (REPORTING-RULES, Numbers; practice)
+
+
+@pytest.mark.parametrize(
+    "value, decimals, expected",
+    [
+        (2.675, 2, "2.68"),  # binary float 2.67499999... would round down
+        (1.005, 2, "1.01"),
+        (0.125, 2, "0.13"),
+        (0.5, 0, "1"),
+        (2.5, 0, "3"),  # not banker's rounding
+        (-2.675, 2, "-2.68"),  # symmetric: away from zero
+        (1e-7, 3, "0.000"),
+    ],
+)
+def test_round_half_up(value, decimals, expected):
+    assert format(round_half_up(value, decimals), "f") == expected
+
+
+def test_python_round_differs_here():
+    # the reason for the rule: Python's round() gives 2.67 for 2.675
+    assert round(2.675, 2) == 2.67
+    assert str(round_half_up(2.675, 2)) == "2.68"
+
+
+# -- leading zero by quantity (APA 7 §6.36)
+
+
+@pytest.mark.parametrize(
+    "quantity, value, expected",
+    [
+        ("r", 0.45, ".45"),
+        ("r", -0.45, MINUS + ".45"),
+        ("R2", 0.2449, ".24"),
+        ("eta2", 0.09, ".09"),
+        ("V", 0.22, ".22"),
+        ("alpha", 0.84, ".84"),
+        ("beta", -0.31, MINUS + ".31"),
+        ("d", 0.11, "0.11"),
+        ("SD", 0.82, "0.82"),
+        ("B", 0.40, "0.40"),
+        ("M", -0.5, MINUS + "0.50"),
+    ],
+)
+def test_leading_zero(apa, quantity, value, expected):
+    assert apa.number(value, quantity) == expected
+
+
+# -- thousands: grouped, never in df (APA 7 §6.38)
+
+
+def test_thousands(apa):
+    assert apa.integer(1256) == "1,256"
+    assert apa.integer(999) == "999"
+    assert apa.number(12345.678, "M") == "12,345.68"
+    assert apa.df(1256) == "1256"
+    assert apa.df(17.776) == "17.78"  # Welch df keep decimals (REPORTING-RULES, t test; practice)
+
+
+# -- minus sign U+2212, no space after it (practice; APA examples)
+
+
+def test_minus_sign(apa):
+    assert apa.number(-2.14, "t") == "\u22122.14"
+    assert apa.number(-0.001, "t") == "0.00"  # a value that rounds to zero carries no sign
+    hyphen = numbers_for(load_style(Path(__file__).parent / "styles" / "hyphen.toml"))
+    assert hyphen.number(-2.14, "t") == "-2.14"
+
+
+# -- p values (APA 7 §6.36; AMA 11 §19.5, memory)
+
+
+@pytest.mark.parametrize(
+    "p, expected",
+    [
+        (0.0391, ("=", ".039")),
+        (0.0004, ("<", ".001")),  # never p = .000
+        (0.001, ("=", ".001")),
+        (0.5, ("=", ".500")),
+        (0.04996, ("=", ".04996")),  # .050 would read as not below .05: digits are added
+        (0.0496, ("=", ".0496")),
+        (0.05, ("=", ".050")),
+        (1.0, ("=", "1.000")),
+    ],
+)
+def test_p_apa(apa, p, expected):
+    assert apa.p(p) == expected
+
+
+@pytest.mark.parametrize(
+    "p, expected",
+    [
+        (0.0391, ("=", ".04")),  # two digits
+        (0.0049, ("=", ".005")),  # three digits below .01
+        (0.0004, ("<", ".001")),
+        (0.995, (">", ".99")),
+        (0.0496, ("=", ".0496")),  # AMA: more digits where rounding would cross .05
+    ],
+)
+def test_p_ama(ama, p, expected):
+    assert ama.p(p) == expected
+
+
+def test_p_other_alpha(apa):
+    # at alpha = .01, p = .0096 must not print as .010
+    assert apa.p(0.0096, 0.01) == ("=", ".0096")
+
+
+# -- decision-preserving CI limits (REPORTING-RULES, Numbers: the CI case is practice)
+
+
+def test_ci_limits_keep_the_decision(apa):
+    assert apa.interval(0.004, 0.45, "d") == ("0.004", "0.45")
+    assert apa.interval(-0.45, -0.0031, "d") == (MINUS + "0.45", MINUS + "0.003")
+    assert apa.interval(0.0, 0.45, "d") == ("0.00", "0.45")  # exactly 0 prints as 0
+    assert apa.interval(1.004, 2.5, "OR", null=1.0) == ("1.004", "2.50")
+
+
+# -- decimal comma with its list separator (style option)
+
+
+def test_decimal_comma():
+    style = load_style(Path(__file__).parent / "styles" / "comma.toml")
+    num = numbers_for(style)
+    assert num.number(2.675, "M") == "2,68"
+    assert num.number(0.45, "r") == ",45"
+    assert num.integer(1256) == "1.256"
+    assert style.list_separator == ";"
+
+
+# -- properties over the whole range --------------------------------------------------
+
+finite = st.floats(min_value=-1e6, max_value=1e6, allow_nan=False, allow_infinity=False)
+unit = st.floats(min_value=-1, max_value=1, allow_nan=False)
+prob = st.floats(min_value=0, max_value=1, allow_nan=False)
+alphas = st.sampled_from([0.05, 0.01, 0.001, 0.1, 0.005])
+
+
+@settings(max_examples=500, deadline=None)
+@given(finite, st.integers(0, 4))
+def test_parses_back_within_half_a_unit(value, decimals):
+    num = numbers_for(load_style("apa7"))
+    text = num.number(value, "M", decimals)
+    back = parse(text)
+    assert abs(back - Decimal(repr(value))) <= Decimal(1).scaleb(-decimals) / 2
+
+
+@settings(max_examples=500, deadline=None)
+@given(unit, st.sampled_from(["r", "p", "R2", "eta2", "V", "alpha", "beta", "omega2"]))
+def test_bounded_never_leading_zero(value, quantity):
+    num = numbers_for(load_style("apa7"))
+    text = num.number(value, quantity).lstrip(MINUS)
+    assert not text.startswith("0"), text
+
+
+@settings(max_examples=500, deadline=None)
+@given(st.floats(min_value=-0.99, max_value=0.99, allow_nan=False), st.sampled_from(["d", "M", "SD", "B", "t", "g"]))
+def test_unbounded_always_leading_zero(value, quantity):
+    num = numbers_for(load_style("apa7"))
+    text = num.number(value, quantity).lstrip(MINUS)
+    assert text.startswith("0"), text
+
+
+@settings(max_examples=1000, deadline=None)
+@given(prob, alphas, st.sampled_from(["apa7", "ama11"]))
+def test_p_never_zero_and_keeps_the_decision(p, alpha, style_name):
+    num = numbers_for(load_style(style_name))
+    op, text = num.p(p, alpha)
+    shown = parse(text)
+    if op == "=":
+        assert shown != 0, (p, text)
+        # a p below alpha never prints as alpha or above; at or above alpha never below it
+        assert (shown < Decimal(repr(alpha))) == (p < alpha), (p, alpha, text)
+    elif op == "<":
+        assert p < shown
+        assert p < alpha  # "<" is used only where it implies the decision
+        assert shown <= Decimal(repr(alpha))
+    else:
+        assert p > shown and p >= alpha
+
+
+@settings(max_examples=1000, deadline=None)
+@given(finite, finite, st.sampled_from([0.0, 1.0]))
+def test_ci_never_touches_null_unless_it_is_null(a, b, null):
+    low, high = sorted((a, b))
+    num = numbers_for(load_style("apa7"))
+    lo_text, hi_text = num.interval(low, high, "d", null)
+    for value, text in ((low, lo_text), (high, hi_text)):
+        shown = parse(text)
+        if value != null:
+            assert shown != Decimal(repr(null)), (value, text)
+            # and it stays on the same side of the null
+            assert (shown > Decimal(repr(null))) == (value > null)
