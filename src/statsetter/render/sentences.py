@@ -56,7 +56,7 @@ def _environment(language: str) -> Any:
 
 
 _SPACE = re.compile(r"\s+")
-_SPACE_PUNCT = re.compile(r" +([,;:)\]])")
+_SPACE_PUNCT = re.compile(r" +([,;:)\]])(?!\d)")
 
 
 class Helpers:

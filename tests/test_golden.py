@@ -1,0 +1,137 @@
+"""Golden strings for every template and both forms, in APA 7.
+
+Each entry names the rule of ../shared/REPORTING-RULES.md it follows and that
+rule's source. The stats form is compared as markup (so italics and
+super/subscripts are checked); the sentence form as plain text.
+"""
+
+import pytest
+
+from kind_examples import EXAMPLES
+from statsetter import render
+
+GOLDEN = {
+    # REPORTING-RULES Statistics in text: (M = 4.22, SD = 0.73), APA 7 ch. 6
+    'descriptives_continuous': (
+        '<i>M</i> = 4.22, <i>SD</i> = 0.73, <i>n</i> = 120',
+        'The mean of the score was 4.22 (SD = 0.73, n = 120).',
+    ),
+    # REPORTING-RULES Statistics in text: categorical as n (%)
+    'descriptives_categorical': (
+        'yes, 45 (37.5%); no, 75 (62.5%)',
+        'Of the 120 cases with a recorded answer, 45 (37.5%) were yes and 75 (62.5%) were no.',
+    ),
+    # REPORTING-RULES Statistics in text: r(98) = .32, p = .001 (df = n - 2); CI form APA 7 ch. 6
+    'pearson': (
+        '<i>r</i>(98) = .32, <i>p</i> = .001, 95% CI [.13, .49]',
+        'The correlation between the first score and the second score was positive, r(98) = .32, p = .001, 95% CI [.13, .49], n = 100.',
+    ),
+    # REPORTING-RULES Statistics in text: rs(98), subscript s (practice)
+    'spearman': (
+        '<i>r</i><sub>s</sub>(98) = .29, <i>p</i> = .003, 95% CI [.10, .46]',
+        'The Spearman rank correlation between the first rank and the second rank was positive, rₛ(98) = .29, p = .003, 95% CI [.10, .46], n = 100.',
+    ),
+    # REPORTING-RULES Symbols: Greek roman (APA 7 §6.45); leading zero dropped (APA 7 §6.36)
+    'kendall': (
+        'τ<sub>b</sub> = −.21, <i>p</i> = .003',
+        "Kendall's rank correlation between the first rank and the second rank was negative, τ_b = −.21, p = .003, n = 100.",
+    ),
+    # REPORTING-RULES Statistics in text: t(38) = 2.14, p = .039, d = 0.68, 95% CI [0.04, 1.31] (APA 7 ch. 6)
+    't_independent': (
+        '<i>t</i>(38) = 2.14, <i>p</i> = .039, <i>d</i> = 0.68, 95% CI [0.04, 1.31]',
+        "The score was higher in group A (M = 4.10, SD = 0.90, n = 20) than in group B (M = 3.50, SD = 0.88, n = 20); the mean difference was 0.60, 95% CI [0.03, 1.18], Student's t(38) = 2.14, p = .039, d = 0.68, 95% CI [0.04, 1.31].",
+    ),
+    # REPORTING-RULES Numbers: true minus U+2212 (practice); t test form (APA 7 ch. 6)
+    't_paired': (
+        '<i>t</i>(9) = −4.06, <i>p</i> = .003, <i>d</i><sub>z</sub> = −1.28, 95% CI [−2.10, −0.43]',
+        'Extra sleep was lower for condition 1 (M = 0.75, SD = 1.79) than for condition 2 (M = 2.33, SD = 2.00) in 10 pairs; the mean difference was −1.58, 95% CI [−2.46, −0.70], t(9) = −4.06, p = .003, d_z = −1.28, 95% CI [−2.10, −0.43].',
+    ),
+    # REPORTING-RULES Numbers: a CI limit just below 0 keeps a digit (practice); p = .051 stays above .05
+    't_one_sample': (
+        '<i>t</i>(49) = 2.00, <i>p</i> = .051, <i>d</i> = 0.28, 95% CI [−0.001, 0.56]',
+        'The mean of the score (M = 4.20, SD = 0.71, n = 50) was above the test value of 4.00; the difference was 0.20, 95% CI [−0.001, 0.40], t(49) = 2.00, p = .051, d = 0.28, 95% CI [−0.001, 0.56].',
+    ),
+    # REPORTING-RULES Statistics in text: χ²(2, N = 200) = 9.87, p = .007, V = .22 (APA 7 ch. 6)
+    'chi2_independence': (
+        'χ<sup>2</sup>(2, <i>N</i> = 200) = 9.87, <i>p</i> = .007, <i>V</i> = .22',
+        'A chi-square test of independence of the row variable and the column variable gave χ²(2, N = 200) = 9.87, p = .007, V = .22.',
+    ),
+    # REPORTING-RULES Numbers: N = 1,256 grouped (APA 7 §6.38)
+    'chi2_goodness_of_fit': (
+        'χ<sup>2</sup>(3, <i>N</i> = 1,256) = 4.20, <i>p</i> = .241',
+        'A chi-square goodness-of-fit test of the category against the expected proportions gave χ²(3, N = 1,256) = 4.20, p = .241.',
+    ),
+    # REPORTING-RULES Symbols: OR roman (APA 7 §6.45); CI form (APA 7 ch. 6)
+    'fisher_exact': (
+        '<i>p</i> = .028, OR = 3.45, 95% CI [1.10, 10.84]',
+        "Fisher's exact test of exposure and outcome (N = 60) gave p = .028, OR = 3.45, 95% CI [1.10, 10.84].",
+    ),
+    # REPORTING-RULES Statistics in text: F(2, 97) = 4.51, p = .013, η² = .09 (APA 7 ch. 6)
+    'anova_oneway': (
+        '<i>F</i>(2, 97) = 4.51, <i>p</i> = .013, η<sup>2</sup> = .09, ω<sup>2</sup> = .07',
+        'A one-way analysis of variance of the score across the groups gave F(2, 97) = 4.51, p = .013, η² = .09, ω² = .07. Group means were A (M = 3.10, SD = 1.00, n = 33), B (M = 3.50, SD = 1.10, n = 33) and C (M = 3.80, SD = 0.90, n = 34).',
+    ),
+    # REPORTING-RULES Symbols: η²p with subscript p, real super/subscript (APA 7 §6.45)
+    'anova_term': (
+        '<i>F</i>(1, 96) = 5.20, <i>p</i> = .025, η<sup>2</sup><sub>p</sub> = .05',
+        'The factor A × factor B interaction on the score gave F(1, 96) = 5.20, p = .025, η²ₚ = .05 (Type II sums of squares).',
+    ),
+    # REPORTING-RULES Statistics in text: post hoc comparisons name the procedure and the pair
+    'posthoc_pair': (
+        '<i>M</i><sub>diff</sub> = 0.70, 95% CI [0.13, 1.27], <i>p</i> = .012',
+        'C and A differed in the score by 0.70, 95% CI [0.13, 1.27] (Tukey HSD, adjusted p = .012).',
+    ),
+    # REPORTING-RULES Statistics in text: B, SE, β, t, p, CI for B (APA 7 ch. 6)
+    'linear_coefficient': (
+        '<i>B</i> = 0.42, 95% CI [0.22, 0.62], <i>SE</i> = 0.10, β = .31, <i>t</i>(196) = 4.20, <i>p</i> &lt; .001',
+        'Higher x was associated with higher y, holding the other predictors constant, B = 0.42, 95% CI [0.22, 0.62], SE = 0.10, β = .31, t(196) = 4.20, p < .001.',
+    ),
+    # REPORTING-RULES Statistics in text: R² = .24, F(3, 196) = 20.61, p < .001 (APA 7 ch. 6)
+    'linear_model': (
+        '<i>R</i><sup>2</sup> = .24, adjusted <i>R</i><sup>2</sup> = .23, <i>F</i>(3, 196) = 20.61, <i>p</i> &lt; .001',
+        'A linear regression of y on three predictors (N = 200) gave R² = .24, adjusted R² = .23, F(3, 196) = 20.61, p < .001.',
+    ),
+    # REPORTING-RULES Numbers: ΔR² bounded, no leading zero (APA 7 §6.36)
+    'linear_step': (
+        'Δ<i>R</i><sup>2</sup> = .05, Δ<i>F</i>(2, 194) = 6.30, <i>p</i> = .002',
+        'Adding two predictors at step 2 changed the explained variance in y by ΔR² = .05, ΔF(2, 194) = 6.30, p = .002, to R² = .29.',
+    ),
+    # REPORTING-RULES Statistics in text: effect sizes with CIs (JARS-Quant Table 1)
+    'logistic_coefficient': (
+        '<i>B</i> = 0.85, <i>SE</i> = 0.30, OR = 2.34, 95% CI [1.30, 4.21], <i>z</i> = 2.83, <i>p</i> = .005',
+        'Higher x was associated with higher odds of the event, B = 0.85, SE = 0.30, OR = 2.34, 95% CI [1.30, 4.21], z = 2.83, p = .005.',
+    ),
+    # REPORTING-RULES p values: below .001 write p < .001 (APA 7 §6.36)
+    'logistic_model': (
+        'χ<sup>2</sup>(3, <i>N</i> = 200) = 25.40, <i>p</i> &lt; .001, Nagelkerke <i>R</i><sup>2</sup> = .16',
+        'A logistic regression of the event gave a likelihood-ratio χ²(3, N = 200) = 25.40, p < .001, Nagelkerke R² = .16.',
+    ),
+    # REPORTING-RULES Statistics in text: say which test/approximation (practice)
+    'mann_whitney': (
+        '<i>U</i> = 512, <i>p</i> = .030, <i>r</i><sub>rb</sub> = .24',
+        'The score tended to be higher in group A (Mdn = 4.00, n = 40) than in group B (Mdn = 3.00, n = 42), Mann–Whitney U = 512, p = .030, r_rb = .24 (normal approximation).',
+    ),
+    # REPORTING-RULES Statistics in text: say which test/approximation (practice)
+    'wilcoxon': (
+        '<i>T</i> = 10.5, <i>p</i> = .020, <i>r</i><sub>rb</sub> = −.68',
+        'The score tended to be lower for condition 1 (Mdn = 3.00) than for condition 2 (Mdn = 4.50) in 12 pairs, Wilcoxon signed-rank T = 10.5, p = .020, r_rb = −.68 (exact).',
+    ),
+    # REPORTING-RULES Symbols: ε² Greek roman (APA 7 §6.45)
+    'kruskal_wallis': (
+        '<i>H</i>(2) = 7.81, <i>p</i> = .020, ε<sup>2</sup> = .08',
+        'A Kruskal–Wallis test of the score across the groups gave H(2) = 7.81, p = .020, ε² = .08.',
+    ),
+    # REPORTING-RULES Numbers: α drops the leading zero (APA 7 §6.36)
+    'cronbach_alpha': (
+        'α = .84, 95% CI [.81, .87]',
+        "Internal consistency of the scale (8 items, N = 200) was Cronbach's α = .84, 95% CI [.81, .87].",
+    ),
+}
+
+
+@pytest.mark.parametrize("kind", sorted(GOLDEN))
+def test_golden(kind):
+    stats, sentence = GOLDEN[kind]
+    record = EXAMPLES[kind]
+    assert render(record, "stats").markup() == stats
+    assert render(record, "sentence").plain() == sentence

@@ -1,0 +1,94 @@
+"""Templates: missing parts are left out cleanly; wording stays accurate."""
+
+import dataclasses
+import re
+from pathlib import Path
+
+import pytest
+
+from kind_examples import EXAMPLES
+from statsetter import Result, Statistic, TemplateError, load_style, render
+
+FORBIDDEN = re.compile(
+    r"None|nan|NaN|\bprove|due to chance|caus|\beffect of\b.*correlat|, ,|,\s*\.(?!\d)|\(\s*\)|\s[,;]|\s\.(?!\d)|;\s*$", re.I
+)
+
+
+def stripped(record: Result) -> Result:
+    """The record with every optional part removed."""
+    return dataclasses.replace(
+        record, estimate=None, effects=(), groups=(), variables=(), n=None, details={}, p=record.p
+    )
+
+
+@pytest.mark.parametrize("kind", sorted(EXAMPLES))
+@pytest.mark.parametrize("form", ["stats", "sentence"])
+def test_missing_parts_are_left_out_cleanly(kind, form):
+    # common practice: no "None", "nan", dangling commas or empty parentheses
+    for record in (EXAMPLES[kind], stripped(EXAMPLES[kind])):
+        text = render(record, form).plain()
+        assert not FORBIDDEN.search(text), text
+    if form == "sentence":
+        assert render(EXAMPLES[kind], form).plain().endswith(".")
+
+
+def test_significance_phrase_only_when_asked(tmp_path):
+    # ASA statement (Wasserstein & Lazar, 2016): the phrase only when the style asks, and only when p < alpha
+    r = EXAMPLES["t_independent"]
+    assert "significant" not in render(r, "sentence").plain()
+    house = tmp_path / "sig.toml"
+    house.write_text('extends = "apa7"\n[wording]\nsignificance = true\n')
+    style = load_style(house)
+    text = render(r, "sentence", style).plain()
+    assert "statistically significant" in text and "not statistically" not in text
+    ns = dataclasses.replace(r, p=0.2)
+    text = render(ns, "sentence", style).plain()
+    assert "not statistically significant" in text
+
+
+def test_correlation_wording_is_not_causal():
+    text = render(EXAMPLES["pearson"], "sentence").plain()
+    assert "correlation between" in text and not re.search(r"caus|effect|lead|increase", text)
+
+
+def test_one_sided_is_stated():
+    r = dataclasses.replace(EXAMPLES["t_independent"], alternative="greater")
+    assert "(one-sided)" in render(r, "stats").plain()
+
+
+def test_unknown_kind():
+    with pytest.raises(TemplateError, match="known kinds"):
+        render(Result(kind="bayes_factor"), "stats")
+    with pytest.raises(TemplateError, match="forms"):
+        render(EXAMPLES["pearson"], "poem")
+
+
+def test_labels_are_escaped():
+    r = EXAMPLES["pearson"]
+    v = dataclasses.replace(r.variables[0], label="rest & <recovery>")
+    text = render(dataclasses.replace(r, variables=(v, r.variables[1])), "sentence")
+    assert "rest & <recovery>" in text.plain()
+    assert "rest &amp; &lt;recovery&gt;" in text.markup()
+
+
+def test_ama_style_changes_every_number():
+    # AMA 11 (memory): P italic capital, two digits, CI as (95% CI, a-b)
+    text = render(EXAMPLES["t_independent"], "stats", "ama11")
+    assert text.markup() == "<i>t</i>(38) = 2.14, <i>P</i> = .04, <i>d</i> = 0.68 (95% CI, 0.04-1.31)"
+
+
+def test_decimal_comma_style():
+    style = load_style(Path(__file__).parent / "styles" / "comma.toml")
+    text = render(EXAMPLES["t_independent"], "stats", style).plain()
+    assert text == "t(38) = 2,14; p = ,039; d = 0,68; 95% CI [0,04; 1,31]"
+
+
+def test_precision_held_is_respected():
+    # a value copied from a source rounded to 2 decimals never prints with 3
+    r = dataclasses.replace(EXAMPLES["t_independent"], p=0.04, precision={"p": 2})
+    assert "p = .04," in render(r, "stats").plain()
+
+
+def test_statistic_only():
+    r = Result(kind="t_independent", statistic=Statistic("t", 1.5, (10,)))
+    assert render(r, "stats").plain() == "t(10) = 1.50"
