@@ -21,8 +21,8 @@ from .records import (
     dump_records,
     load_records,
 )
-from .render.sentences import render
-from .render.styled import StyledText
+from .rendering.sentences import render
+from .rendering.styled import StyledText
 from .style import Style, builtin_styles, load_style
 
 __version__ = "0.1.0"

@@ -50,8 +50,7 @@ _OUTPUT_FORMATS = ("text", "md", "html", "tex")
 
 class _Parser(argparse.ArgumentParser):
     def error(self, message: str) -> None:  # two lines, exit 2
-        self.print_usage(sys.stderr)
-        sys.stderr.write(f"{self.prog}: error: {message}\n")
+        sys.stderr.write(f"{self.prog}: error: {message}\n(see '{self.prog} --help')\n")
         raise SystemExit(EXIT_USAGE)
 
 
@@ -201,7 +200,7 @@ def _emit(text: str, out: str | None, inputs: Sequence[str] = ()) -> None:
 
 
 def _cmd_format(ns: argparse.Namespace) -> int:
-    from .render.sentences import render
+    from .rendering.sentences import render
 
     record = _format_record(ns)
     _emit(render(record, ns.form, ns.style).to(ns.to), ns.out)
@@ -210,7 +209,7 @@ def _cmd_format(ns: argparse.Namespace) -> int:
 
 def _cmd_render(ns: argparse.Namespace) -> int:
     from .records import load_records
-    from .render.sentences import render
+    from .rendering.sentences import render
     from .style import load_style
 
     style = load_style(ns.style)
@@ -249,7 +248,7 @@ def _cmd_styles(ns: argparse.Namespace) -> int:
 
 
 def _show_style(style) -> None:  # type: ignore[no-untyped-def]
-    from .render.sentences import render
+    from .rendering.sentences import render
     from .records import EffectSize, Interval, Result, Statistic
 
     print(f"{style.name}: {style.title}")

@@ -336,7 +336,7 @@ class Provenance:
 class Result:
     """One statistical result, exact and unrounded.
 
-    ``kind`` selects the sentence template (see ``statsetter.render.kinds``).
+    ``kind`` selects the sentence template (see ``statsetter.rendering.kinds``).
     ``details`` holds small kind-specific facts (``variant = "welch"``,
     ``ss_type = 2``, ``procedure = "Tukey HSD"``, ``k_items = 8`` ...).
     ``precision`` maps a field path (``"effects[0].ci.low"``) to the number of

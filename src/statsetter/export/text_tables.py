@@ -11,8 +11,8 @@ from __future__ import annotations
 import csv
 import io
 
-from ..render.styled import StyledText
-from ..render.tables import TableModel
+from ..rendering.styled import StyledText
+from ..rendering.tables import TableModel
 
 __all__ = ["table_markdown", "table_html", "table_latex", "table_csv", "table_text", "write_table"]
 

@@ -60,7 +60,7 @@ def _text(v: Any) -> str | None:
 def _markup(v: Any) -> str | None:
     if not isinstance(v, str):
         return f"{v!r} is not allowed; use a text string"
-    from ..render.styled import StyledText  # local: render imports style
+    from ..rendering.styled import StyledText  # local: render imports style
 
     try:
         StyledText.from_markup(v)

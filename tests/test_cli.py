@@ -1,0 +1,107 @@
+"""The command line: format, render, styles; bad input gives one or two lines and exit 2."""
+
+import json
+import subprocess
+import sys
+
+import pytest
+
+from kind_examples import EXAMPLES
+from statsetter import dump_records
+from statsetter.cli import main
+
+
+def run(*args):
+    proc = subprocess.run([sys.executable, "-m", "statsetter", *args], capture_output=True, text=True)
+    return proc.returncode, proc.stdout, proc.stderr
+
+
+def test_format_t(capsys):
+    # REPORTING-RULES, t test example (APA 7 ch. 6)
+    assert main(["format", "t", "--stat", "2.14", "--df", "38", "--p", "0.039", "--effect", "d=0.68", "--effect-ci", "0.04,1.31"]) == 0
+    assert capsys.readouterr().out == "t(38) = 2.14, p = .039, d = 0.68, 95% CI [0.04, 1.31]\n"
+
+
+def test_format_computes_p(capsys):
+    # scipy.stats.t: two-sided p of t(38) = 2.14 is 0.0388 -> .039
+    assert main(["format", "t", "--stat", "2.14", "--df", "38", "--to", "md"]) == 0
+    assert capsys.readouterr().out == "*t*(38) = 2.14, *p* = .039\n"
+
+
+def test_format_negative_ci_and_style(capsys):
+    assert main(["format", "welch-t", "--stat=-1.86", "--df", "17.78", "--p", "0.0796", "--style", "ama11"]) == 0
+    assert capsys.readouterr().out == "t(17.78) = \u22121.86, P = .08\n"
+
+
+def test_render_files(tmp_path, capsys):
+    a = tmp_path / "a.json"
+    b = tmp_path / "b.json"
+    a.write_text(dump_records([EXAMPLES["pearson"]]))
+    b.write_text(dump_records([EXAMPLES["chi2_independence"]]))
+    out = tmp_path / "out.md"
+    assert main(["render", str(a), str(b), "--to", "md", "--out", str(out)]) == 0
+    text = out.read_text()
+    assert "*r*(98) = .32" in text and "χ^2^(2, *N* = 200) = 9.87" in text
+
+
+def test_render_refuses_to_overwrite_input(tmp_path, capsys):
+    a = tmp_path / "a.json"
+    a.write_text(dump_records([EXAMPLES["pearson"]]))
+    before = a.read_text()
+    assert main(["render", str(a), "--out", str(a)]) == 2
+    assert "overwrite an input" in capsys.readouterr().err
+    assert a.read_text() == before
+
+
+def test_styles_list_show_check(tmp_path, capsys):
+    assert main(["styles"]) == 0
+    assert "apa7" in capsys.readouterr().out
+    assert main(["styles", "show", "apa7"]) == 0
+    assert "example: t(38) = \u22122.14" in capsys.readouterr().out
+    bad = tmp_path / "bad.toml"
+    bad.write_text('extends = "apa7"\n[numbers]\ndecimals = "two"\n')
+    assert main(["styles", "check", str(bad)]) == 2
+    err = capsys.readouterr().err
+    assert "numbers.decimals" in err and "0 to 6" in err
+
+
+@pytest.mark.parametrize(
+    "args, message",
+    [
+        (["format", "t", "--stat", "2", "--df", "0"], "df[0]"),
+        (["format", "t", "--p", "1.5"], "p: 1.5 is outside"),
+        (["format", "nope"], "unknown KIND"),
+        (["format", "t", "--effect", "d"], "NAME=VALUE"),
+        (["format", "t", "--effect", "d=1", "--effect-ci", "2,1"], "above upper"),
+        (["format", "t", "--style", "chicago"], "no built-in style"),
+        (["render", "missing.json"], "no such file"),
+        (["format", "t", "--stat", "x"], "invalid float"),
+    ],
+)
+def test_bad_input_exit_2_no_traceback(args, message):
+    code, out, err = run(*args)
+    assert code == 2
+    assert message in err
+    assert "Traceback" not in err
+    assert len(err.strip().splitlines()) <= 2
+
+
+def test_render_bad_json(tmp_path):
+    bad = tmp_path / "bad.json"
+    bad.write_text(json.dumps([{"kind": "pearson", "p": 7}]))
+    code, _, err = run("render", str(bad))
+    assert code == 2 and "record 1: p: 7 is outside [0, 1]" in err and "Traceback" not in err
+
+
+def test_light_start():
+    # import statsetter, --help and format load none of the heavy libraries
+    probe = (
+        "import sys, statsetter\n"
+        "from statsetter.cli import main\n"
+        "main(['format', 't', '--stat', '2.14', '--df', '38', '--p', '0.039'])\n"
+        "try:\n    main(['--help'])\nexcept SystemExit:\n    pass\n"
+        "heavy = [m for m in ('pingouin', 'statsmodels', 'matplotlib', 'pandas') if m in sys.modules]\n"
+        "print('HEAVY', heavy)\n"
+    )
+    proc = subprocess.run([sys.executable, "-c", probe], capture_output=True, text=True, check=True)
+    assert "HEAVY []" in proc.stdout

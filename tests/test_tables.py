@@ -1,0 +1,51 @@
+"""TableModel and the text writers (layout per APA 7 §7.8-7.21)."""
+
+import pytest
+
+from statsetter import InputError, StyledText
+from statsetter.export.text_tables import write_table
+from statsetter.rendering.tables import Column, Row, Spanner, TableModel, styled
+
+
+def model():
+    return TableModel(
+        number=1,
+        title=StyledText("Scores by group"),
+        stub_head=styled("Variable"),
+        columns=(Column(styled("<i>M</i>")), Column(styled("<i>SD</i>")), Column(styled("<i>M</i>")), Column(styled("<i>SD</i>"))),
+        spanners=(Spanner(styled("Group A"), 0, 2), Spanner(styled("Group B"), 2, 4)),
+        rows=(Row(styled("Score"), tuple(styled(x) for x in ("4.10", "0.90", "3.50", "0.88"))),),
+        general_note=styled("<i>M</i> = mean; <i>SD</i> = standard deviation."),
+        specific_notes=(("a", styled("One case excluded.")),),
+    )
+
+
+def test_markdown():
+    md = write_table(model(), "md")
+    assert md.startswith("**Table 1**\n\n*Scores by group*\n")
+    assert "| Variable | Group A: *M* | Group A: *SD* | Group B: *M* | Group B: *SD* |" in md
+    assert "*Note.* *M* = mean; *SD* = standard deviation. ^a^ One case excluded." in md
+
+
+def test_html_has_only_horizontal_rules():
+    html = write_table(model(), "html")
+    assert "border-left" not in html and "border-right" not in html
+    assert 'colspan="2"' in html and "<i>Note.</i>" in html
+
+
+def test_latex_booktabs():
+    tex = write_table(model(), "tex")
+    for needed in ("\\toprule", "\\midrule", "\\bottomrule", "\\cmidrule(lr){2-3}", "\\textbf{Table 1}"):
+        assert needed in tex
+    assert "|" not in tex.split("\\begin{tabular}")[1].split("}")[0]  # no vertical rules
+
+
+def test_csv():
+    assert write_table(model(), "csv").splitlines()[1] == "Score,4.10,0.90,3.50,0.88"
+
+
+def test_bad_tables():
+    with pytest.raises(InputError, match="row 1"):
+        TableModel(title=StyledText("x"), columns=(Column(styled("a")),), rows=(Row(styled("r"), ()),))
+    with pytest.raises(InputError, match="spanner"):
+        TableModel(title=StyledText("x"), columns=(Column(styled("a")),), rows=(), spanners=(Spanner(styled("s"), 0, 3),))
