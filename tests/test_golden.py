@@ -23,13 +23,13 @@ GOLDEN = {
     ),
     # REPORTING-RULES Statistics in text: r(98) = .32, p = .001 (df = n - 2); CI form APA 7 ch. 6
     'pearson': (
-        '<i>r</i>(98) = .32, <i>p</i> = .001, 95% CI [.13, .49]',
-        'The correlation between the first score and the second score was positive, r(98) = .32, p = .001, 95% CI [.13, .49], n = 100.',
+        '<i>r</i>(98) = .32, 95% CI [.13, .49], <i>p</i> = .001',
+        'The correlation between the first score and the second score was positive, r(98) = .32, 95% CI [.13, .49], p = .001, n = 100.',
     ),
     # REPORTING-RULES Statistics in text: rs(98), subscript s (practice)
     'spearman': (
-        '<i>r</i><sub>s</sub>(98) = .29, <i>p</i> = .003, 95% CI [.10, .46]',
-        'The Spearman rank correlation between the first rank and the second rank was positive, rₛ(98) = .29, p = .003, 95% CI [.10, .46], n = 100.',
+        '<i>r</i><sub>s</sub>(98) = .29, 95% CI [.10, .46], <i>p</i> = .003',
+        'The Spearman rank correlation between the first rank and the second rank was positive, rₛ(98) = .29, 95% CI [.10, .46], p = .003, n = 100.',
     ),
     # REPORTING-RULES Symbols: Greek roman (APA 7 §6.45); leading zero dropped (APA 7 §6.36)
     'kendall': (
@@ -44,7 +44,7 @@ GOLDEN = {
     # REPORTING-RULES Numbers: true minus U+2212 (practice); t test form (APA 7 ch. 6)
     't_paired': (
         '<i>t</i>(9) = −4.06, <i>p</i> = .003, <i>d</i><sub>z</sub> = −1.28, 95% CI [−2.10, −0.43]',
-        'Extra sleep was lower for condition 1 (M = 0.75, SD = 1.79) than for condition 2 (M = 2.33, SD = 2.00) in 10 pairs; the mean difference was −1.58, 95% CI [−2.46, −0.70], t(9) = −4.06, p = .003, d_z = −1.28, 95% CI [−2.10, −0.43].',
+        'Extra sleep was lower at condition 1 (M = 0.75, SD = 1.79) than at condition 2 (M = 2.33, SD = 2.00) in 10 pairs; the mean difference was −1.58, 95% CI [−2.46, −0.70], t(9) = −4.06, p = .003, d_z = −1.28, 95% CI [−2.10, −0.43].',
     ),
     # REPORTING-RULES Numbers: a CI limit just below 0 keeps a digit (practice); p = .051 stays above .05
     't_one_sample': (

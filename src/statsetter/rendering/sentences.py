@@ -79,7 +79,7 @@ class Helpers:
 
     def globals(self) -> dict[str, Callable[..., Any]]:
         names = (
-            "sym stat pv eff ci_of value est desc cat join count pct number df sided var "
+            "sym stat pv eff ci_of ci_after value est desc cat join count pct number df sided var "
             "cap verdict significant has_ci held_note direction_word"
         ).split()
         out = {name: getattr(self, name) for name in names}
@@ -154,6 +154,12 @@ class Helpers:
         pattern = self._ci_pattern_neg if negative else self._ci_pattern
         text = pattern.format(level=level, low=low, high=high, sep=self.sep)
         return Markup(_escape_text(text))
+
+    def ci_after(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> Markup:
+        """The CI attached to the value before it, in the style's way (``, 95% CI [..]`` or `` (95% CI, ..)``)."""
+        if interval is None:
+            return Markup("")
+        return self._ci_attach + self.ci_of(r, interval, quantity, null, path)
 
     def has_ci(self, item: Any) -> bool:
         return item is not None and getattr(item, "ci", None) is not None
