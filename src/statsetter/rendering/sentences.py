@@ -71,10 +71,12 @@ class Helpers:
         self._symbols = {k: Markup(v) for k, v in style.symbols.items()}
         self._symbols["p"] = Markup(style.p["symbol"])
         self._eq = Markup(" = ")
+        self._p_symbol = self._symbols["p"]
+        self._levels: dict[float, str] = {}
         ci = style.ci
         self._ci_pattern: str = ci["pattern"]
         self._ci_pattern_neg: str = ci.get("pattern_negative", "") or ci["pattern"]
-        self._ci_attach = Markup(_escape_text(ci["attach"].format(sep=sep)))
+        self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
 
     def globals(self) -> dict[str, Callable[..., Any]]:
@@ -111,55 +113,58 @@ class Helpers:
         """``t(38) = 2.14``; with ``n=True`` the chi-square form ``χ²(2, N = 200) = 9.87``."""
         s = r.statistic
         if s is None:
-            return Markup("")
-        name = symbol or s.symbol
-        inside = [self.df(d) for d in s.df]
+            return _EMPTY
+        num = self.num
+        inside = [num.df(d) for d in s.df]
         if n and r.n is not None:
-            inside.append(self.sym("N") + self._eq + self.count(r.n))
-        head = self.sym(name)
+            inside.append(f"{self.sym('N')} = {num.integer(r.n)}")
+        head = self.sym(symbol or s.symbol)
         if inside:
-            head = head + Markup("(") + self._join.join(inside) + Markup(")")
-        value = self._stat_value(r, s.symbol, s.value)
-        return head + self._eq + value
+            head = f"{head}({str.join(self._join, inside)})"
+        return Markup(f"{head} = {self._stat_value(r, s.symbol, s.value)}")
 
-    def _stat_value(self, r: Result, symbol: str, value: float) -> Markup:
+    def _stat_value(self, r: Result, symbol: str, value: float) -> str:
         held = _held(r, "statistic.value")
         if symbol in _RANK_SUMS:  # U, T, W: whole numbers print whole (practice)
             if float(value).is_integer():
-                return self.count(value)
-            return Markup(_escape_text(self.num.number(value, symbol, 1, held=held)))
-        return Markup(_escape_text(self.num.number(value, symbol, held=held)))
+                return self.num.integer(value)
+            return self.num.number(value, symbol, 1, held=held)
+        return self.num.number(value, symbol, held=held)
 
     def pv(self, r: Result, label: str = "") -> Markup:
         """``p = .039`` (or ``p < .001``), decision-preserving at the record's alpha."""
         if r.p is None:
-            return Markup("")
+            return _EMPTY
         op, text = self.num.p(r.p, r.alpha, held=_held(r, "p"))
-        prefix = Markup(escape(label) + " ") if label else Markup("")
-        return prefix + self.sym("p") + Markup(f" {_escape_text(op)} {_escape_text(text)}")
+        prefix = f"{escape(label)} " if label else ""
+        return Markup(f"{prefix}{self._p_symbol} {_OPS[op]} {text}")
 
     def sided(self, r: Result) -> Markup:
         if r.alternative == "two-sided":
-            return Markup("")
+            return _EMPTY
         return Markup(" (one-sided)")
 
     def ci_of(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> Markup:
         """``95% CI [0.04, 1.31]`` in the style's pattern; limits keep the decision."""
         if interval is None:
-            return Markup("")
-        held = (_held(r, f"{path}.low"), _held(r, f"{path}.high")) if path else (None, None)
+            return _EMPTY
+        return Markup(self._ci(r, interval, quantity, null, path))
+
+    def _ci(self, r: Result, interval: Interval, quantity: str, null: float, path: str) -> str:
+        held = (_held(r, f"{path}.low"), _held(r, f"{path}.high")) if path and r.precision else (None, None)
         low, high = self.num.interval(interval.low, interval.high, quantity, null, held)
-        level = self.num.number(interval.level * 100, "level", _level_decimals(interval.level))
-        negative = interval.low < 0 or interval.high < 0
-        pattern = self._ci_pattern_neg if negative else self._ci_pattern
-        text = pattern.format(level=level, low=low, high=high, sep=self.sep)
-        return Markup(_escape_text(text))
+        level = self._levels.get(interval.level)
+        if level is None:
+            level = self.num.number(interval.level * 100, "level", _level_decimals(interval.level))
+            self._levels[interval.level] = level
+        pattern = self._ci_pattern_neg if (interval.low < 0 or interval.high < 0) else self._ci_pattern
+        return _escape_text(pattern.format(level=level, low=low, high=high, sep=self.sep))
 
     def ci_after(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> Markup:
         """The CI attached to the value before it, in the style's way (``, 95% CI [..]`` or `` (95% CI, ..)``)."""
         if interval is None:
-            return Markup("")
-        return self._ci_attach + self.ci_of(r, interval, quantity, null, path)
+            return _EMPTY
+        return Markup(self._ci_attach + self._ci(r, interval, quantity, null, path))
 
     def has_ci(self, item: Any) -> bool:
         return item is not None and getattr(item, "ci", None) is not None
@@ -168,30 +173,31 @@ class Helpers:
         """``d = 0.68, 95% CI [0.04, 1.31]`` for the record's effect size (by name)."""
         for i, e in enumerate(r.effects):
             if name is None or e.name == name:
-                return self._effect(r, e, i, with_ci)
-        return Markup("")
+                return Markup(self._effect(r, e, i, with_ci))
+        return _EMPTY
 
-    def _effect(self, r: Result, e: EffectSize, i: int, with_ci: bool) -> Markup:
-        out = self.sym(e.name) + self._eq + self.value(r, f"effects[{i}]", e.value, e.name)
+    def _effect(self, r: Result, e: EffectSize, i: int, with_ci: bool) -> str:
+        held = _held(r, f"effects[{i}].value") if r.precision else None
+        out = f"{self.sym(e.name)} = {self.num.number(e.value, e.name, held=held)}"
         if with_ci and e.ci is not None:
-            out = out + self._ci_attach + self.ci_of(r, e.ci, e.name, e.null, f"effects[{i}].ci")
+            out += self._ci_attach + self._ci(r, e.ci, e.name, e.null, f"effects[{i}].ci")
         return out
 
     def value(self, r: Result, path: str, value: float, quantity: str = "default") -> Markup:
-        return Markup(_escape_text(self.num.number(value, quantity, held=_held(r, f"{path}.value"))))
+        return Markup(self.num.number(value, quantity, held=_held(r, f"{path}.value")))
 
     def est(self, r: Result, with_ci: bool = True, symbol: str | None = None, quantity: str | None = None) -> Markup:
         """The estimate's value (with its symbol when given) and CI."""
         e = r.estimate
         if e is None:
-            return Markup("")
+            return _EMPTY
         q = quantity or e.name
-        out = self.value(r, "estimate", e.value, q)
+        out = self.num.number(e.value, q, held=_held(r, "estimate.value"))
         if symbol:
-            out = self.sym(symbol) + self._eq + out
+            out = f"{self.sym(symbol)} = {out}"
         if with_ci and e.ci is not None:
-            out = out + self._ci_attach + self.ci_of(r, e.ci, q, e.null, "estimate.ci")
-        return out
+            out += self._ci_attach + self._ci(r, e.ci, q, e.null, "estimate.ci")
+        return Markup(out)
 
     def desc(self, r: Result, index: int = 0, parts: str = "mean sd n") -> Markup:
         """``M = 4.22, SD = 0.73, n = 40`` for group ``index``; absent parts are left out."""
@@ -230,7 +236,7 @@ class Helpers:
 
     def join(self, *parts: Any) -> Markup:
         """Join the non-empty parts with the style's list separator."""
-        return self._join.join(p for p in parts if p)
+        return Markup(str.join(self._join, [p if isinstance(p, Markup) else escape(p) for p in parts if p]))
 
     # wording ----------------------------------------------------------------
 
@@ -262,6 +268,8 @@ class Helpers:
 
 
 _RANK_SUMS = frozenset({"U", "T", "W"})
+_EMPTY = Markup("")
+_OPS = {"=": "=", "<": "&lt;", ">": "&gt;"}
 _GROUP_FIELDS = {"mean": "mean", "sd": "sd", "n": "n", "median": "median", "iqr": "q1", "min": "minimum", "max": "maximum"}
 _GROUP_SYMBOLS = {"mean": "M", "sd": "SD", "n": "n", "median": "Mdn", "iqr": "IQR", "min": "min", "max": "max"}
 
