@@ -1,0 +1,77 @@
+"""Shared preparation for the analyses: columns, missing values, labels, provenance."""
+
+from __future__ import annotations
+
+import difflib
+from typing import TYPE_CHECKING, Any, Mapping, Sequence
+
+from ..errors import InputError
+from ..records import Note, Provenance, Variable
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+
+def column(df: "pd.DataFrame", name: str) -> "pd.Series":
+    if name not in df.columns:
+        close = difflib.get_close_matches(str(name), [str(c) for c in df.columns], n=3)
+        hint = f"; did you mean {', '.join(close)}?" if close else ""
+        raise InputError(f"{name}: no such column{hint}")
+    return df[name]
+
+
+def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
+    import pandas as pd
+
+    s = column(df, name)
+    if not pd.api.types.is_numeric_dtype(s) or pd.api.types.is_bool_dtype(s):
+        raise InputError(f"{name}: not numeric (dtype {s.dtype}); a numeric outcome is required")
+    if s.notna().sum() == 0:
+        raise InputError(f"{name}: every value is missing")
+    return s.astype(float)
+
+
+def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note | None]:
+    """Rows complete on ``names``, and a note saying how many were dropped."""
+    for n in names:
+        column(df, n)
+    sub = df[list(names)]
+    complete = sub.dropna()
+    dropped = len(sub) - len(complete)
+    for n in names:
+        if sub[n].notna().sum() == 0:
+            raise InputError(f"{n}: every value is missing")
+    note = None
+    if dropped:
+        note = Note("missing", f"{dropped} of {len(sub)} rows dropped for missing values on {', '.join(names)} (listwise).")
+    return complete, note
+
+
+def variables(roles: Mapping[str, str], labels: Mapping[str, str] | None) -> tuple[Variable, ...]:
+    labels = labels or {}
+    return tuple(Variable(name, labels.get(name, name), role) for role, name in roles.items())
+
+
+def provenance(source: str) -> Provenance:
+    import numpy
+    import scipy
+
+    versions = {"numpy": numpy.__version__, "scipy": scipy.__version__}
+    try:
+        import pandas
+
+        versions["pandas"] = pandas.__version__
+    except ImportError:  # pragma: no cover - pandas is a dependency of the analyses
+        pass
+    from .. import __version__
+
+    versions["statsetter"] = __version__
+    return Provenance(source, versions)
+
+
+def notes(*items: Note | None) -> tuple[Note, ...]:
+    return tuple(n for n in items if n is not None)
+
+
+def fmt(x: Any) -> str:
+    return f"{x:.4g}"

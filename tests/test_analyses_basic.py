@@ -1,0 +1,149 @@
+"""Correlations and t tests from data, against outside references.
+
+Datasets: pingouin's bundled 'penguins' (Palmer penguins, Gorman et al., 2014)
+and Student's (1908) sleep data as printed in R's datasets::sleep (values and
+the published result t(9) = -4.06, p = .0028 recalled from memory).
+Independent computations: direct scipy.stats calls and published formulas.
+"""
+
+import math
+
+import numpy as np
+import pandas as pd
+import pingouin as pg
+import pytest
+from scipy import special, stats
+
+from statsetter import InputError, render
+from statsetter.analyses import correlate, t_independent, t_one_sample, t_paired
+
+REL = 1e-10
+
+SLEEP = pd.DataFrame(
+    {
+        "drug1": [0.7, -1.6, -0.2, -1.2, -0.1, 3.4, 3.7, 0.8, 0.0, 2.0],
+        "drug2": [1.9, 0.8, 1.1, 0.1, -0.1, 4.4, 5.5, 1.6, 4.6, 3.4],
+    }
+)
+
+
+@pytest.fixture(scope="module")
+def penguins():
+    return pg.read_dataset("penguins")
+
+
+def test_student_sleep_paired():
+    r = t_paired(SLEEP, "drug1", "drug2", outcome_label="extra sleep")
+    # published (memory): t(9) = -4.06, p = .0028
+    assert render(r, "stats").plain().startswith("t(9) = \u22124.06, p = .003")
+    assert round(r.p, 4) == 0.0028
+    ref = stats.ttest_rel(SLEEP.drug1, SLEEP.drug2)
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    ci = ref.confidence_interval()
+    assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.low, ci.high), rel=REL)
+
+
+def test_noncentral_t_interval_meets_its_definition():
+    # Steiger & Fouladi (1997): the limits are the ncp values at which the observed t
+    # is the 97.5th and 2.5th percentile of the noncentral t distribution.
+    r = t_paired(SLEEP, "drug1", "drug2")
+    d = r.effects[0]
+    n = 10
+    t = r.statistic.value
+    assert d.value == pytest.approx(t / math.sqrt(n), rel=REL)
+    assert stats.nct.cdf(t, 9, d.ci.low * math.sqrt(n)) == pytest.approx(0.975, abs=1e-9)
+    assert stats.nct.cdf(t, 9, d.ci.high * math.sqrt(n)) == pytest.approx(0.025, abs=1e-9)
+
+
+@pytest.mark.parametrize("variant", ["welch", "student"])
+def test_independent_against_scipy(penguins, variant):
+    r = t_independent(penguins, "body_mass_g", "sex", variant=variant)
+    data = penguins.dropna(subset=["body_mass_g", "sex"])
+    a = data.body_mass_g[data.sex == "female"]
+    b = data.body_mass_g[data.sex == "male"]
+    ref = stats.ttest_ind(a, b, equal_var=variant == "student")
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.statistic.df[0] == pytest.approx(ref.df, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    ci = ref.confidence_interval()
+    assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.low, ci.high), rel=REL)
+    assert r.n == len(a) + len(b)
+    assert any(n.kind == "missing" and "11 of 344" in n.text for n in r.notes)
+    assert any("Levene" in n.text for n in r.notes)
+    # Cohen's d (pooled SD) against pingouin.compute_effsize
+    d = r.effect("d")
+    assert d.value == pytest.approx(pg.compute_effsize(a, b, eftype="cohen"), rel=REL)
+    # Hedges' g: d times the exact J = Γ(m/2) / (√(m/2) Γ((m−1)/2)) (Hedges, 1981)
+    m = len(a) + len(b) - 2
+    j = special.gamma(m / 2) / (math.sqrt(m / 2) * special.gamma((m - 1) / 2)) if m < 300 else math.exp(
+        special.gammaln(m / 2) - 0.5 * math.log(m / 2) - special.gammaln((m - 1) / 2)
+    )
+    assert r.effect("g").value == pytest.approx(d.value * j, rel=REL)
+
+
+def test_one_sample_against_scipy(penguins):
+    r = t_one_sample(penguins, "flipper_length_mm", 200)
+    x = penguins.flipper_length_mm.dropna()
+    ref = stats.ttest_1samp(x, 200)
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    ci = ref.confidence_interval()
+    assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.low - 200, ci.high - 200), rel=REL)
+
+
+def test_pearson_against_scipy(penguins):
+    r = correlate(penguins, "bill_length_mm", "flipper_length_mm")
+    data = penguins[["bill_length_mm", "flipper_length_mm"]].dropna()
+    ref = stats.pearsonr(data.bill_length_mm, data.flipper_length_mm)
+    ci = ref.confidence_interval()  # scipy's interval is Fisher's z
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    assert (r.effects[0].ci.low, r.effects[0].ci.high) == pytest.approx((ci.low, ci.high), rel=REL)
+    assert r.statistic.df == (len(data) - 2,)
+
+
+def test_spearman_and_kendall(penguins):
+    data = penguins[["bill_length_mm", "body_mass_g"]].dropna()
+    n = len(data)
+    r = correlate(penguins, "bill_length_mm", "body_mass_g", "spearman")
+    ref = stats.spearmanr(data.bill_length_mm, data.body_mass_g)
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    # Bonett & Wright (2000): SE of atanh(rs) = sqrt((1 + rs^2/2) / (n - 3))
+    se = math.sqrt((1 + ref.statistic**2 / 2) / (n - 3))
+    z = stats.norm.ppf(0.975)
+    expected = (math.tanh(math.atanh(ref.statistic) - z * se), math.tanh(math.atanh(ref.statistic) + z * se))
+    assert (r.effects[0].ci.low, r.effects[0].ci.high) == pytest.approx(expected, rel=REL)
+    k = correlate(penguins, "bill_length_mm", "body_mass_g", "kendall")
+    kref = stats.kendalltau(data.bill_length_mm, data.body_mass_g)
+    assert k.statistic.value == pytest.approx(kref.statistic, rel=REL)
+    assert k.p == pytest.approx(kref.pvalue, rel=REL)
+
+
+def test_three_decimal_style_prints_correct_third_decimals(tmp_path, penguins):
+    # no borrowed rounding: the record holds unrounded limits, so a 3-decimal style is exact
+    house = tmp_path / "three.toml"
+    house.write_text('extends = "apa7"\n[numbers]\ndecimals = 3\n')
+    r = t_independent(penguins, "body_mass_g", "sex")
+    d = r.effect("d")
+    text = render(r, "stats", str(house)).plain()
+    assert f"{abs(d.ci.low):.3f}" in text and f"{abs(d.ci.high):.3f}" in text
+
+
+@pytest.mark.parametrize(
+    "call, message",
+    [
+        (lambda df: t_independent(df, "species", "sex"), "species: not numeric"),
+        (lambda df: t_independent(df, "body_mass_g", "species"), "3 groups"),
+        (lambda df: t_independent(df.assign(one="a"), "body_mass_g", "one"), "a t test needs two"),
+        (lambda df: t_independent(df.head(40).assign(g=["a"] + ["b"] * 39), "body_mass_g", "g"), "n = 1"),
+        (lambda df: t_one_sample(df.assign(k=1.0), "k", 0), "zero variance"),
+        (lambda df: correlate(df.assign(e=np.nan), "e", "body_mass_g"), "every value is missing"),
+        (lambda df: correlate(df, "bill_lenght_mm", "body_mass_g"), "did you mean bill_length_mm"),
+        (lambda df: correlate(df.assign(k=2.0), "k", "body_mass_g"), "k: zero variance"),
+    ],
+)
+def test_bad_input_names_the_variable(penguins, call, message):
+    with pytest.raises(InputError, match=message):
+        call(penguins)
