@@ -4,7 +4,9 @@ Each function loads numpy, scipy and pandas when called, never on
 ``import statsetter``.
 """
 
+from .anova import anova_oneway
+from .chisquare import chi_square, goodness_of_fit
 from .correlation import correlate
 from .ttests import t_independent, t_one_sample, t_paired
 
-__all__ = ["correlate", "t_independent", "t_paired", "t_one_sample"]
+__all__ = ["anova_oneway", "chi_square", "goodness_of_fit", "correlate", "t_independent", "t_paired", "t_one_sample"]

@@ -35,6 +35,8 @@ def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", 
     """Rows complete on ``names``, and a note saying how many were dropped."""
     for n in names:
         column(df, n)
+    if len(set(names)) != len(names):
+        raise InputError(f"{', '.join(names)}: the same variable is named twice")
     sub = df[list(names)]
     complete = sub.dropna()
     dropped = len(sub) - len(complete)

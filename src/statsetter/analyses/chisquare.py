@@ -1,0 +1,158 @@
+"""Chi-square tests of independence and goodness of fit; Fisher's exact test for 2 × 2."""
+
+from __future__ import annotations
+
+import math
+from typing import TYPE_CHECKING, Mapping
+
+from ..errors import InputError
+from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
+from . import _common as c
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+V_METHOD = "noncentral chi-square (Smithson, 2003)"
+
+
+def _ncx2_limits(chi2: float, df: int, level: float) -> tuple[float, float]:
+    """Noncentrality limits λ at which the observed χ² is the upper and lower
+    (1 − level)/2 quantile; a limit below 0 is set to 0."""
+    from scipy import optimize, stats
+
+    alpha = (1 - level) / 2
+
+    def solve(target: float) -> float:
+        f = lambda lam: stats.ncx2.cdf(chi2, df, lam) - target if lam > 0 else stats.chi2.cdf(chi2, df) - target  # noqa: E731
+        if f(0.0) < 0:
+            return 0.0
+        hi = max(1.0, chi2)
+        while f(hi) > 0:
+            hi *= 2
+        return optimize.brentq(f, 0.0, hi, xtol=1e-12, maxiter=500)
+
+    return solve(1 - alpha), solve(alpha)
+
+
+def chi_square(
+    df: "pd.DataFrame",
+    row: str,
+    column: str,
+    *,
+    yates: bool = False,
+    level: float = 0.95,
+    labels: Mapping[str, str] | None = None,
+) -> list[Result]:
+    """The χ² test of independence of two categorical columns, with Cramér's V
+    (φ for 2 × 2) and its CI. Yates' correction only when asked (stated). Cells
+    with expected counts below 5 are noted, and for a 2 × 2 table Fisher's exact
+    test (conditional maximum-likelihood odds ratio with its exact CI) is added."""
+    import pandas as pd
+    from scipy import stats
+
+    data, missing = c.listwise(df, [row, column])
+    table = pd.crosstab(data[row], data[column])
+    r, k = table.shape
+    if r < 2 or k < 2:
+        raise InputError(f"{row} × {column}: a {r} × {k} table; a test of independence needs at least 2 × 2")
+    counts = table.to_numpy()
+    res = stats.chi2_contingency(counts, correction=yates)
+    n = int(counts.sum())
+    uncorrected = stats.chi2_contingency(counts, correction=False).statistic
+    m = min(r, k) - 1
+    name = "phi" if (r, k) == (2, 2) else "V"
+    value = math.sqrt(uncorrected / (n * m))
+    lo, hi = _ncx2_limits(float(uncorrected), int(res.dof), level)
+    ci = Interval(level, math.sqrt((lo + res.dof) / (n * m)) if lo > 0 else 0.0, min(1.0, math.sqrt((hi + res.dof) / (n * m))))
+    if ci.low > value:
+        ci = Interval(level, 0.0, ci.high)
+    notes = [Note("choice", "Yates' continuity correction applied." if yates and res.dof == 1 else "No continuity correction.")]
+    small = int((res.expected_freq < 5).sum())
+    if small:
+        notes.append(Note("assumption", f"{small} of {r * k} cells have expected counts below 5 (smallest {res.expected_freq.min():.4g})."))
+    if missing:
+        notes.append(missing)
+    cells = tuple(
+        GroupSummary(f"{a} / {b}", n=int(table.loc[a, b])) for a in table.index for b in table.columns
+    )
+    variables = c.variables({"row": row, "column": column}, labels)
+    out = [
+        Result(
+            kind="chi2_independence",
+            statistic=Statistic("chi2", float(res.statistic), (int(res.dof),)),
+            p=float(res.pvalue),
+            n=n,
+            effects=(EffectSize(name, value, ci, method=f"{V_METHOD}; from the uncorrected χ²"),),
+            groups=cells,
+            variables=variables,
+            notes=tuple(notes),
+            details={"yates": bool(yates and res.dof == 1), "rows": r, "columns": k},
+            provenance=c.provenance("statsetter.analyses.chi_square"),
+        )
+    ]
+    if (r, k) == (2, 2):
+        out.append(fisher_exact_table(counts, variables, level, missing))
+    return out
+
+
+def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | None = None) -> Result:  # type: ignore[no-untyped-def]
+    from scipy import stats
+    from scipy.stats.contingency import odds_ratio
+
+    p = stats.fisher_exact(counts).pvalue
+    orr = odds_ratio(counts, kind="conditional")
+    ci = orr.confidence_interval(level)
+    high = float(ci.high)
+    estimate = Estimate(
+        "OR",
+        float(orr.statistic),
+        ci=Interval(level, float(ci.low), high) if math.isfinite(high) else None,
+        ratio=True,
+    )
+    return Result(
+        kind="fisher_exact",
+        p=float(p),
+        n=int(counts.sum()),
+        estimate=estimate,
+        variables=variables,
+        notes=c.notes(Note("method", "Conditional maximum-likelihood odds ratio with its exact CI."), missing),
+        provenance=c.provenance("statsetter.analyses.fisher_exact"),
+    )
+
+
+def goodness_of_fit(
+    df: "pd.DataFrame",
+    variable: str,
+    proportions: Mapping[object, float],
+    *,
+    labels: Mapping[str, str] | None = None,
+) -> Result:
+    """χ² goodness of fit of ``variable``'s counts against given proportions (summing to 1)."""
+    from scipy import stats
+
+    data, missing = c.listwise(df, [variable])
+    observed = data[variable].value_counts()
+    unknown = sorted(set(map(str, observed.index)) - set(map(str, proportions)))
+    if unknown:
+        raise InputError(f"{variable}: categories {', '.join(unknown)} have no expected proportion")
+    total = sum(proportions.values())
+    if not math.isclose(total, 1.0, abs_tol=1e-9) or any(v <= 0 for v in proportions.values()):
+        raise InputError(f"{variable}: expected proportions must be positive and sum to 1 (they sum to {total:g})")
+    if len(proportions) < 2:
+        raise InputError(f"{variable}: a goodness-of-fit test needs at least 2 categories")
+    keys = list(proportions)
+    lookup = {str(k): int(v) for k, v in observed.items()}
+    obs = [lookup.get(str(k), 0) for k in keys]
+    n = sum(obs)
+    res = stats.chisquare(obs, f_exp=[n * proportions[k] for k in keys])
+    return Result(
+        kind="chi2_goodness_of_fit",
+        statistic=Statistic("chi2", float(res.statistic), (len(keys) - 1,)),
+        p=float(res.pvalue),
+        n=n,
+        groups=tuple(GroupSummary(str(k), n=o, percent=100 * o / n) for k, o in zip(keys, obs)),
+        variables=c.variables({"variable": variable}, labels),
+        notes=c.notes(missing),
+        details={"expected": "given"},
+        provenance=c.provenance("statsetter.analyses.goodness_of_fit"),
+    )

@@ -1,0 +1,120 @@
+"""Chi-square, Fisher and one-way ANOVA, against outside references.
+
+Dataset: pingouin's bundled 'penguins' (Palmer penguins, Gorman et al., 2014).
+References: pingouin.chi2_independence, pingouin.anova and welch_anova,
+scipy.stats.fisher_exact / contingency.odds_ratio, and the published
+definitions of V's noncentral chi-square interval (Smithson, 2003).
+"""
+
+import math
+import warnings
+
+import pingouin as pg
+import pytest
+from scipy import stats
+
+from statsetter import InputError
+from statsetter.analyses import anova_oneway, chi_square, goodness_of_fit
+
+REL = 1e-10
+
+
+@pytest.fixture(scope="module")
+def penguins():
+    df = pg.read_dataset("penguins")
+    df["adelie"] = (df.species == "Adelie").map({True: "Adelie", False: "other"})
+    return df
+
+
+def test_chi_square_against_pingouin(penguins):
+    (r,) = chi_square(penguins, "species", "island")
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        _, _, ref = pg.chi2_independence(penguins, "species", "island")
+    row = ref[ref.test == "pearson"].iloc[0]
+    assert r.statistic.value == pytest.approx(row.chi2, rel=REL)
+    assert r.statistic.df == (row.dof,)
+    assert r.p == pytest.approx(row.pval, rel=REL)
+    v = r.effect("V")
+    assert v.value == pytest.approx(row.cramer, rel=REL)
+    # Smithson (2003): the limits are the noncentralities at which chi2 is the 97.5th / 2.5th percentile
+    n, m, dof = r.n, 2, 4
+    lam_low = v.ci.low**2 * n * m - dof
+    lam_high = v.ci.high**2 * n * m - dof
+    assert stats.ncx2.cdf(r.statistic.value, dof, lam_low) == pytest.approx(0.975, abs=1e-8)
+    assert stats.ncx2.cdf(r.statistic.value, dof, lam_high) == pytest.approx(0.025, abs=1e-8)
+    assert not any("expected counts below 5" in note.text for note in r.notes)  # smallest expected is 15.2
+
+
+def test_small_expected_counts_are_noted(penguins):
+    small = penguins.iloc[::15]
+    (r,) = chi_square(small, "species", "sex")
+    data = small.dropna(subset=["species", "sex"])
+    import pandas as pd
+
+    expected = stats.chi2_contingency(pd.crosstab(data.species, data.sex).to_numpy()).expected_freq
+    k = int((expected < 5).sum())
+    assert k > 0
+    assert any(f"{k} of 6 cells have expected counts below 5" in note.text for note in r.notes)
+
+
+def test_two_by_two_adds_fisher_and_states_yates(penguins):
+    chi, fisher = chi_square(penguins, "sex", "adelie", yates=True)
+    assert chi.effect("phi") is not None
+    assert chi.details["yates"] is True and any("Yates" in n.text for n in chi.notes)
+    data = penguins.dropna(subset=["sex", "adelie"])
+    import pandas as pd
+
+    table = pd.crosstab(data.sex, data.adelie).to_numpy()
+    assert chi.statistic.value == pytest.approx(stats.chi2_contingency(table, correction=True).statistic, rel=REL)
+    assert fisher.p == pytest.approx(stats.fisher_exact(table).pvalue, rel=REL)
+    ref = stats.contingency.odds_ratio(table, kind="conditional")
+    ci = ref.confidence_interval()
+    assert fisher.estimate.value == pytest.approx(ref.statistic, rel=REL)
+    assert (fisher.estimate.ci.low, fisher.estimate.ci.high) == pytest.approx((ci.low, ci.high), rel=REL)
+
+
+def test_goodness_of_fit(penguins):
+    r = goodness_of_fit(penguins, "species", {"Adelie": 0.4, "Chinstrap": 0.2, "Gentoo": 0.4})
+    counts = penguins.species.value_counts()
+    obs = [counts["Adelie"], counts["Chinstrap"], counts["Gentoo"]]
+    ref = stats.chisquare(obs, f_exp=[344 * 0.4, 344 * 0.2, 344 * 0.4])
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+
+
+@pytest.mark.parametrize("variant", ["classic", "welch"])
+def test_anova_against_pingouin(penguins, variant):
+    r = anova_oneway(penguins, "bill_length_mm", "species", variant=variant)
+    if variant == "classic":
+        ref = pg.anova(penguins, dv="bill_length_mm", between="species", effsize="n2").iloc[0]
+        assert r.statistic.df == (ref.ddof1, ref.ddof2)
+    else:
+        ref = pg.welch_anova(penguins, dv="bill_length_mm", between="species").iloc[0]
+        assert r.statistic.df[1] == pytest.approx(ref.ddof2, rel=REL)
+    assert r.statistic.value == pytest.approx(ref.F, rel=REL)
+    assert r.p == pytest.approx(ref["p_unc"], rel=REL)
+    eta = r.effect("eta2").value
+    assert eta == pytest.approx(ref["n2"] if variant == "classic" else ref["np2"], rel=REL)
+    # omega squared from its published formula (Hays, 1963) on the classic decomposition
+    k, n = 3, r.n
+    f = pg.anova(penguins, dv="bill_length_mm", between="species", detailed=True)
+    ssb, ssw = f.SS[0], f.SS[1]
+    msw = ssw / (n - k)
+    assert r.effect("omega2").value == pytest.approx((ssb - (k - 1) * msw) / (ssb + ssw + msw), rel=REL)
+
+
+@pytest.mark.parametrize(
+    "call, message",
+    [
+        (lambda df: chi_square(df.assign(one="x"), "one", "island"), "a 1 × 3 table"),
+        (lambda df: chi_square(df, "island", "island"), "named twice"),
+        (lambda df: goodness_of_fit(df, "species", {"Adelie": 0.5, "Gentoo": 0.5}), "Chinstrap have no expected"),
+        (lambda df: goodness_of_fit(df, "species", {"Adelie": 0.5, "Gentoo": 0.4, "Chinstrap": 0.2}), "sum to 1"),
+        (lambda df: anova_oneway(df.assign(one="x"), "bill_length_mm", "one"), "at least two"),
+        (lambda df: anova_oneway(df, "island", "species"), "island: not numeric"),
+    ],
+)
+def test_bad_input(penguins, call, message):
+    with pytest.raises(InputError, match=message):
+        call(penguins)
