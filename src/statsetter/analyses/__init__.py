@@ -7,6 +7,14 @@ Each function loads numpy, scipy and pandas when called, never on
 from .anova import anova_oneway
 from .chisquare import chi_square, goodness_of_fit
 from .correlation import correlate
+from .ranks import kruskal_wallis, mann_whitney, wilcoxon_signed_rank
+from .scales import cronbach_alpha, scale_score
 from .ttests import t_independent, t_one_sample, t_paired
 
-__all__ = ["anova_oneway", "chi_square", "goodness_of_fit", "correlate", "t_independent", "t_paired", "t_one_sample"]
+__all__ = [
+    "kruskal_wallis",
+    "mann_whitney",
+    "wilcoxon_signed_rank",
+    "cronbach_alpha",
+    "scale_score",
+    "anova_oneway", "chi_square", "goodness_of_fit", "correlate", "t_independent", "t_paired", "t_one_sample"]

@@ -1,0 +1,114 @@
+"""Rank tests and Cronbach's α, against outside references.
+
+Datasets: pingouin's bundled 'penguins' and 'cronbach_alpha'; Student's (1908)
+sleep data (values recalled from memory, as in R's datasets::sleep).
+References: scipy.stats (mannwhitneyu, wilcoxon, kruskal), pingouin (mwu's
+RBC, cronbach_alpha) and the published formulas named beside each check.
+"""
+
+import numpy as np
+import pandas as pd
+import pingouin as pg
+import pytest
+from scipy import stats
+
+from statsetter import InputError, render
+from statsetter.analyses import cronbach_alpha, kruskal_wallis, mann_whitney, scale_score, wilcoxon_signed_rank
+
+REL = 1e-10
+SLEEP = pd.DataFrame(
+    {
+        "drug1": [0.7, -1.6, -0.2, -1.2, -0.1, 3.4, 3.7, 0.8, 0.0, 2.0],
+        "drug2": [1.9, 0.8, 1.1, 0.1, -0.1, 4.4, 5.5, 1.6, 4.6, 3.4],
+    }
+)
+
+
+@pytest.fixture(scope="module")
+def penguins():
+    return pg.read_dataset("penguins")
+
+
+@pytest.fixture(scope="module")
+def items():
+    long = pg.read_dataset("cronbach_alpha")
+    return long.pivot(index="Subj", columns="Items", values="Scores")
+
+
+def test_mann_whitney(penguins):
+    r = mann_whitney(penguins, "body_mass_g", "sex")
+    data = penguins.dropna(subset=["body_mass_g", "sex"])
+    a, b = data.body_mass_g[data.sex == "female"], data.body_mass_g[data.sex == "male"]
+    ref = stats.mannwhitneyu(a, b, method="asymptotic")
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    assert r.details["method"] == "normal approximation"  # ties present: stated
+    assert r.effects[0].value == pytest.approx(pg.mwu(a, b)["RBC"].iloc[0], rel=REL)
+
+
+def test_mann_whitney_exact_for_small_untied():
+    df = pd.DataFrame({"y": [1.1, 2.3, 3.2, 4.8, 5.5, 6.1, 7.7], "g": list("aaabbbb")})
+    r = mann_whitney(df, "y", "g")
+    assert r.details["method"] == "exact p"
+    assert r.p == pytest.approx(stats.mannwhitneyu([1.1, 2.3, 3.2], [4.8, 5.5, 6.1, 7.7], method="exact").pvalue, rel=REL)
+
+
+def test_wilcoxon_sleep():
+    r = wilcoxon_signed_rank(SLEEP, "drug1", "drug2")
+    d = SLEEP.drug1 - SLEEP.drug2
+    ref = stats.wilcoxon(SLEEP.drug1, SLEEP.drug2, method="approx")
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.n == int((d != 0).sum()) == 9
+    # Kerby (2014): matched-pairs rank-biserial; every non-zero difference is negative -> -1
+    assert r.effects[0].value == pytest.approx(-1.0, rel=REL)
+    assert r.effects[0].value == pytest.approx(pg.wilcoxon(SLEEP.drug1, SLEEP.drug2)["RBC"].iloc[0], rel=REL)
+    assert "1 zero difference(s) dropped" in r.notes[0].text
+
+
+def test_kruskal(penguins):
+    r = kruskal_wallis(penguins, "bill_length_mm", "species")
+    data = penguins.dropna(subset=["bill_length_mm"])
+    ref = stats.kruskal(*[g.bill_length_mm.to_numpy() for _, g in data.groupby("species")])
+    assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
+    assert r.p == pytest.approx(ref.pvalue, rel=REL)
+    n = len(data)
+    assert r.effects[0].value == pytest.approx(ref.statistic * (n + 1) / (n * n - 1), rel=REL)  # Tomczak & Tomczak (2014)
+
+
+def test_cronbach_against_pingouin(items):
+    r = cronbach_alpha(items, list(items.columns), scale="the test")
+    alpha, ci = pg.cronbach_alpha(data=items)
+    assert r.effects[0].value == pytest.approx(alpha, rel=REL)
+    # pingouin rounds its interval to 3 decimals; ours is unrounded (Feldt, 1965)
+    assert r.effects[0].ci.low == pytest.approx(ci[0], abs=5e-4)
+    assert r.effects[0].ci.high == pytest.approx(ci[1], abs=5e-4)
+    assert r.details["k_items"] == items.shape[1]
+    # corrected item-total r: item against the sum of the others (plain pandas)
+    complete = items.dropna()
+    q1 = complete.columns[0]
+    rest = complete.drop(columns=q1).sum(axis=1)
+    assert r.details[f"item_total_r.{q1}"] == pytest.approx(complete[q1].corr(rest), rel=REL)
+    assert render(r, "stats").plain().startswith("α = .")
+
+
+def test_reverse_keying_and_scoring():
+    df = pd.DataFrame({"a": [1, 2, 5], "b": [5, 4, 1], "c": [2, np.nan, 4]})
+    s = scale_score(df, ["a", "b"], reverse=["b"], minimum=1, maximum=5)
+    assert s.tolist() == [1.0, 2.0, 5.0]  # b reversed: 6 - b
+    assert np.isnan(scale_score(df, ["a", "c"], scoring="sum")[1])
+    with pytest.raises(InputError, match="minimum and maximum"):
+        scale_score(df, ["a", "b"], reverse=["b"])
+    with pytest.raises(InputError, match="outside the item range"):
+        scale_score(df.assign(b=[7, 4, 1]), ["a", "b"], reverse=["b"], minimum=1, maximum=5)
+    with pytest.raises(InputError, match="d: no such column"):
+        scale_score(df, ["a", "d"])
+
+
+def test_rank_bad_input(penguins):
+    with pytest.raises(InputError, match="exactly two"):
+        mann_whitney(penguins, "body_mass_g", "species")
+    with pytest.raises(InputError, match="every difference is zero"):
+        wilcoxon_signed_rank(SLEEP.assign(x=SLEEP.drug1), "drug1", "x")
+    with pytest.raises(InputError, match="not numeric"):
+        kruskal_wallis(penguins, "island", "species")
