@@ -14,7 +14,8 @@ if TYPE_CHECKING:
 
 def column(df: "pd.DataFrame", name: str) -> "pd.Series":
     if name not in df.columns:
-        close = difflib.get_close_matches(str(name), [str(c) for c in df.columns], n=3)
+        names = [str(c) for c in df.columns]
+        close = [n for n in names if str(name).lower() in n.lower()][:3] or difflib.get_close_matches(str(name), names, n=3, cutoff=0.5)
         hint = f"; did you mean {', '.join(close)}?" if close else ""
         raise InputError(f"{name}: no such column{hint}")
     return df[name]

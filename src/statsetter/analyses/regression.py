@@ -1,0 +1,252 @@
+"""Linear (OLS) and logistic regression, with dummy coding stated, via statsmodels."""
+
+from __future__ import annotations
+
+import math
+import warnings
+from typing import TYPE_CHECKING, Mapping, Sequence
+
+from ..errors import InputError
+from ..records import EffectSize, Estimate, Interval, Note, Result, Statistic, Variable
+from . import _common as c
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+
+def _design(data: "pd.DataFrame", predictors: Sequence[str], reference: Mapping[str, object]):  # type: ignore[no-untyped-def]
+    """Numeric predictors as they are; others dummy-coded against a reference
+    level (the given one, else the first in sorted order). Returns the design
+    matrix (with a constant), a list of (column, predictor, level, reference)
+    and the notes saying which reference was used."""
+    import numpy as np
+    import pandas as pd
+
+    cols: dict[str, np.ndarray] = {"const": np.ones(len(data))}
+    meta: list[tuple[str, str, object | None, object | None]] = []
+    notes: list[Note] = []
+    for p in predictors:
+        s = data[p]
+        if pd.api.types.is_numeric_dtype(s) and not pd.api.types.is_bool_dtype(s):
+            if s.nunique() < 2:
+                raise InputError(f"{p}: constant predictor (every value is {s.iloc[0]!r}); it cannot be estimated")
+            cols[p] = s.to_numpy(dtype=float)
+            meta.append((p, p, None, None))
+            continue
+        levels = sorted(s.unique().tolist(), key=str)
+        if len(levels) < 2:
+            raise InputError(f"{p}: constant predictor (one level, {levels[0]!r}); it cannot be estimated")
+        ref = reference.get(p, levels[0])
+        if ref not in levels:
+            raise InputError(f"{p}: reference level {ref!r} is not among {', '.join(map(str, levels))}")
+        for lev in levels:
+            if lev == ref:
+                continue
+            name = f"{p}[{lev}]"
+            cols[name] = (s == lev).to_numpy(dtype=float)
+            meta.append((name, p, lev, ref))
+        notes.append(Note("method", f"{p} dummy-coded; reference level {ref}."))
+    X = pd.DataFrame(cols, index=data.index)
+    rank = np.linalg.matrix_rank(X.to_numpy())
+    if rank < X.shape[1]:
+        # name the first column that adds nothing to the ones before it
+        for j in range(2, X.shape[1] + 1):
+            if np.linalg.matrix_rank(X.iloc[:, :j].to_numpy()) < j:
+                raise InputError(f"{X.columns[j - 1]}: perfectly collinear with the other predictors")
+    return X, meta, notes
+
+
+def _labels(names: Sequence[str], labels: Mapping[str, str] | None) -> str:
+    labels = labels or {}
+    shown = [labels.get(n, n) for n in names]
+    return shown[0] if len(shown) == 1 else ", ".join(shown[:-1]) + " and " + shown[-1]
+
+
+def linear_regression(
+    df: "pd.DataFrame",
+    outcome: str,
+    predictors: Sequence[str],
+    *,
+    reference: Mapping[str, object] | None = None,
+    level: float = 0.95,
+    labels: Mapping[str, str] | None = None,
+) -> list[Result]:
+    """OLS of ``outcome`` on ``predictors``: the model record first, then one
+    record per coefficient (B, SE, CI, t, p, and β = B·SD(x)/SD(y))."""
+    import statsmodels.api as sm
+
+    if not predictors:
+        raise InputError("predictors: at least one is needed")
+    data, missing = c.listwise(df, [outcome, *predictors])
+    y = c.numeric(data, outcome)
+    if y.nunique() < 2:
+        raise InputError(f"{outcome}: zero variance; a regression is undefined")
+    X, meta, coding = _design(data, predictors, reference or {})
+    if len(data) <= X.shape[1]:
+        raise InputError(f"{outcome}: {len(data)} complete rows for {X.shape[1]} coefficients")
+    fit = sm.OLS(y.to_numpy(), X).fit()
+    ci = fit.conf_int(1 - level)
+    sd_y = float(y.std(ddof=1))
+    prov = c.provenance("statsetter.analyses.linear_regression")
+    import statsmodels
+
+    prov = type(prov)(prov.source, {**prov.versions, "statsmodels": statsmodels.__version__})
+    labels = labels or {}
+    model = Result(
+        kind="linear_model",
+        statistic=Statistic("F", float(fit.fvalue), (float(fit.df_model), float(fit.df_resid))),
+        p=float(fit.f_pvalue),
+        n=int(fit.nobs),
+        effects=(EffectSize("R2", float(fit.rsquared)), EffectSize("R2_adj", float(fit.rsquared_adj))),
+        variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"),)
+        + tuple(Variable(p, labels.get(p, p), "predictor") for p in predictors),
+        notes=c.notes(*coding, missing),
+        details={"predictors": _labels(predictors, labels)},
+        provenance=prov,
+    )
+    out = [model]
+    for name, pred, lev, ref in meta:
+        sd_x = float(X[name].std(ddof=1))
+        out.append(
+            Result(
+                kind="linear_coefficient",
+                statistic=Statistic("t", float(fit.tvalues[name]), (float(fit.df_resid),)),
+                p=float(fit.pvalues[name]),
+                n=int(fit.nobs),
+                estimate=Estimate("B", float(fit.params[name]), se=float(fit.bse[name]),
+                                  ci=Interval(level, float(ci.loc[name, 0]), float(ci.loc[name, 1]))),
+                effects=(EffectSize("beta", float(fit.params[name]) * sd_x / sd_y, method="B·SD(x)/SD(y)"),),
+                variables=(
+                    Variable(pred, labels.get(pred, pred) if lev is None else f"{labels.get(pred, pred)} = {lev}", "predictor"),
+                    Variable(outcome, labels.get(outcome, outcome), "outcome"),
+                ),
+                details={"term": name, "adjusted": len(meta) > 1, **({"reference": f"{labels.get(pred, pred)} = {ref}"} if ref is not None else {})},
+                provenance=prov,
+            )
+        )
+    return out
+
+
+def hierarchical_steps(
+    df: "pd.DataFrame",
+    outcome: str,
+    steps: Sequence[Sequence[str]],
+    *,
+    reference: Mapping[str, object] | None = None,
+    labels: Mapping[str, str] | None = None,
+) -> list[Result]:
+    """One record per step after the first: ΔR² and the F test of the change,
+    all steps on the same complete rows."""
+    import statsmodels.api as sm
+    from scipy import stats
+
+    if len(steps) < 2:
+        raise InputError("steps: a hierarchical regression needs at least two steps")
+    everything = [p for step in steps for p in step]
+    data, missing = c.listwise(df, [outcome, *everything])
+    y = c.numeric(data, outcome).to_numpy()
+    out = []
+    previous = None
+    used: list[str] = []
+    for i, step in enumerate(steps, 1):
+        used = used + list(step)
+        X, _, _ = _design(data, used, reference or {})
+        fit = sm.OLS(y, X).fit()
+        if previous is not None:
+            dk = fit.df_model - previous.df_model
+            dr2 = fit.rsquared - previous.rsquared
+            f = (dr2 / dk) / ((1 - fit.rsquared) / fit.df_resid)
+            p = float(stats.f.sf(f, dk, fit.df_resid))
+            out.append(
+                Result(
+                    kind="linear_step",
+                    statistic=Statistic("F_change", float(f), (float(dk), float(fit.df_resid))),
+                    p=p,
+                    n=int(fit.nobs),
+                    effects=(EffectSize("delta_R2", float(dr2)), EffectSize("R2", float(fit.rsquared))),
+                    variables=(Variable(outcome, (labels or {}).get(outcome, outcome), "outcome"),),
+                    notes=c.notes(missing),
+                    details={"step": i, "added": _labels(step, labels)},
+                    provenance=c.provenance("statsetter.analyses.hierarchical_steps"),
+                )
+            )
+        previous = fit
+    return out
+
+
+def logistic_regression(
+    df: "pd.DataFrame",
+    outcome: str,
+    predictors: Sequence[str],
+    *,
+    event: object | None = None,
+    reference: Mapping[str, object] | None = None,
+    level: float = 0.95,
+    labels: Mapping[str, str] | None = None,
+) -> list[Result]:
+    """Logistic regression of a binary ``outcome`` (``event`` is the level
+    coded 1; by default the second in sorted order): the model (likelihood-
+    ratio χ², Nagelkerke R²) and one record per coefficient (B, SE, OR with
+    its CI, Wald z, p)."""
+    import numpy as np
+    import statsmodels.api as sm
+
+    data, missing = c.listwise(df, [outcome, *predictors])
+    levels = sorted(data[outcome].unique().tolist(), key=str)
+    if len(levels) != 2:
+        raise InputError(f"{outcome}: {len(levels)} distinct values; a logistic regression needs a binary outcome")
+    event = levels[1] if event is None else event
+    if event not in levels:
+        raise InputError(f"{outcome}: event {event!r} is not among {', '.join(map(str, levels))}")
+    y = (data[outcome] == event).to_numpy(dtype=float)
+    X, meta, coding = _design(data, predictors, reference or {})
+    with warnings.catch_warnings():
+        warnings.simplefilter("error")
+        try:
+            fit = sm.Logit(y, X).fit(disp=False, maxiter=200)
+        except Exception as exc:  # statsmodels signals separation by a warning or an error
+            if "separation" in str(exc).lower() or "singular" in str(exc).lower() or "overflow" in str(exc).lower():
+                raise InputError(f"{outcome}: perfect separation by {', '.join(predictors)}; the odds ratios are infinite") from None
+            raise InputError(f"{outcome}: the logistic model did not converge ({exc})") from None
+    if not fit.mle_retvals.get("converged", True) or np.any(np.abs(fit.params[1:]) > 30):
+        raise InputError(f"{outcome}: perfect (or quasi-) separation by {', '.join(predictors)}; the model did not converge")
+    n = int(fit.nobs)
+    ll0, ll1 = float(fit.llnull), float(fit.llf)
+    cox_snell = 1 - math.exp((2 / n) * (ll0 - ll1))
+    nagelkerke = cox_snell / (1 - math.exp((2 / n) * ll0))
+    ci = fit.conf_int(1 - level)
+    labels = labels or {}
+    prov = c.provenance("statsetter.analyses.logistic_regression")
+    out = [
+        Result(
+            kind="logistic_model",
+            statistic=Statistic("chi2", float(fit.llr), (float(fit.df_model),)),
+            p=float(fit.llr_pvalue),
+            n=n,
+            effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"),),
+            variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"),),
+            notes=c.notes(Note("method", f"{outcome} = {event} coded 1."), *coding, missing),
+            details={"predictors": _labels(predictors, labels), "event": f"{event}"},
+            provenance=prov,
+        )
+    ]
+    for name, pred, lev, ref in meta:
+        b = float(fit.params[name])
+        out.append(
+            Result(
+                kind="logistic_coefficient",
+                statistic=Statistic("z", float(fit.tvalues[name])),
+                p=float(fit.pvalues[name]),
+                n=n,
+                estimate=Estimate("B", b, se=float(fit.bse[name]), ci=Interval(level, float(ci.loc[name, 0]), float(ci.loc[name, 1]))),
+                effects=(EffectSize("OR", math.exp(b), Interval(level, math.exp(ci.loc[name, 0]), math.exp(ci.loc[name, 1])), ratio=True),),
+                variables=(
+                    Variable(pred, labels.get(pred, pred) if lev is None else f"{labels.get(pred, pred)} = {lev}", "predictor"),
+                    Variable(outcome, labels.get(outcome, outcome), "outcome"),
+                ),
+                details={"term": name, "event": f"{event}", "adjusted": len(meta) > 1,
+                         **({"reference": f"{labels.get(pred, pred)} = {ref}"} if ref is not None else {})},
+                provenance=prov,
+            )
+        )
+    return out

@@ -1,0 +1,93 @@
+"""Linear and logistic regression, against outside references.
+
+Dataset: pingouin's bundled 'penguins'. References: statsmodels' formula
+interface (an independent design-matrix path: patsy treatment coding),
+scipy.stats.f for the F change, and Nagelkerke's (1991) R² formula.
+"""
+
+import math
+
+import numpy as np
+import pingouin as pg
+import pytest
+import statsmodels.formula.api as smf
+from scipy import stats
+
+from statsetter import InputError, render
+from statsetter.analyses import hierarchical_steps, linear_regression, logistic_regression
+
+REL = 1e-10
+
+
+@pytest.fixture(scope="module")
+def penguins():
+    return pg.read_dataset("penguins")
+
+
+def test_linear_against_formula_api(penguins):
+    model, *coefs = linear_regression(penguins, "body_mass_g", ["flipper_length_mm", "species"])
+    data = penguins.dropna(subset=["body_mass_g", "flipper_length_mm", "species"])
+    ref = smf.ols("body_mass_g ~ flipper_length_mm + C(species)", data=data).fit()
+    assert model.effect("R2").value == pytest.approx(ref.rsquared, rel=REL)
+    assert model.effect("R2_adj").value == pytest.approx(ref.rsquared_adj, rel=REL)
+    assert model.statistic.value == pytest.approx(ref.fvalue, rel=REL)
+    assert model.statistic.df == (ref.df_model, ref.df_resid)
+    assert model.p == pytest.approx(ref.f_pvalue, rel=REL)
+    names = {"flipper_length_mm": "flipper_length_mm", "species[Chinstrap]": "C(species)[T.Chinstrap]",
+             "species[Gentoo]": "C(species)[T.Gentoo]"}
+    ci = ref.conf_int()
+    for r in coefs:
+        term = names[r.details["term"]]
+        assert r.estimate.value == pytest.approx(ref.params[term], rel=REL)
+        assert r.estimate.se == pytest.approx(ref.bse[term], rel=REL)
+        assert r.statistic.value == pytest.approx(ref.tvalues[term], rel=REL)
+        assert r.p == pytest.approx(ref.pvalues[term], rel=REL)
+        assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.loc[term, 0], ci.loc[term, 1]), rel=REL)
+    flipper = coefs[0]
+    beta = ref.params["flipper_length_mm"] * data.flipper_length_mm.std() / data.body_mass_g.std()
+    assert flipper.effect("beta").value == pytest.approx(beta, rel=REL)
+    assert "reference level Adelie" in " ".join(n.text for n in model.notes)
+
+
+def test_hierarchical_f_change(penguins):
+    (step,) = hierarchical_steps(penguins, "body_mass_g", [["flipper_length_mm"], ["species", "sex"]])
+    data = penguins.dropna(subset=["body_mass_g", "flipper_length_mm", "species", "sex"])
+    small = smf.ols("body_mass_g ~ flipper_length_mm", data=data).fit()
+    big = smf.ols("body_mass_g ~ flipper_length_mm + C(species) + C(sex)", data=data).fit()
+    f, p, dk = big.compare_f_test(small)
+    assert step.statistic.value == pytest.approx(f, rel=1e-9)
+    assert step.p == pytest.approx(p, rel=1e-9)
+    assert step.effect("delta_R2").value == pytest.approx(big.rsquared - small.rsquared, rel=REL)
+
+
+def test_logistic_against_formula_api(penguins):
+    model, *coefs = logistic_regression(penguins, "sex", ["bill_depth_mm", "flipper_length_mm"])
+    data = penguins.dropna(subset=["sex", "bill_depth_mm", "flipper_length_mm"]).assign(male=lambda d: (d.sex == "male").astype(int))
+    ref = smf.logit("male ~ bill_depth_mm + flipper_length_mm", data=data).fit(disp=False)
+    assert model.statistic.value == pytest.approx(ref.llr, rel=1e-9)
+    assert model.p == pytest.approx(ref.llr_pvalue, rel=1e-6)
+    n = ref.nobs
+    nagelkerke = (1 - math.exp(2 / n * (ref.llnull - ref.llf))) / (1 - math.exp(2 / n * ref.llnull))
+    assert model.effect("R2_nagelkerke").value == pytest.approx(nagelkerke, rel=1e-9)
+    for r in coefs:
+        term = r.details["term"]
+        assert r.estimate.value == pytest.approx(ref.params[term], rel=1e-7)
+        assert r.effect("OR").value == pytest.approx(math.exp(ref.params[term]), rel=1e-7)
+        assert r.statistic.value == pytest.approx(ref.tvalues[term], rel=1e-7)
+    assert "OR = " in render(coefs[0], "stats").plain()
+
+
+@pytest.mark.parametrize(
+    "call, message",
+    [
+        (lambda d: linear_regression(d.assign(k=1.0), "body_mass_g", ["k"]), "k: constant predictor"),
+        (lambda d: linear_regression(d.assign(f2=d.flipper_length_mm * 2), "body_mass_g", ["flipper_length_mm", "f2"]), "f2: perfectly collinear"),
+        (lambda d: linear_regression(d, "species", ["flipper_length_mm"]), "species: not numeric"),
+        (lambda d: logistic_regression(d, "species", ["body_mass_g"]), "binary outcome"),
+        (lambda d: logistic_regression(d.assign(x=(d.sex == "male").astype(float)), "sex", ["x"]), "separation"),
+        (lambda d: linear_regression(d, "body_mass_g", ["flipper"]), "did you mean flipper_length_mm"),
+    ],
+)
+def test_bad_input(penguins, call, message):
+    with pytest.raises(InputError, match=message):
+        call(penguins)
