@@ -7,12 +7,15 @@ Each function loads numpy, scipy and pandas when called, never on
 from .anova import anova_oneway
 from .chisquare import chi_square, goodness_of_fit
 from .correlation import correlate
+from .posthoc import factorial_anova, posthoc
 from .ranks import kruskal_wallis, mann_whitney, wilcoxon_signed_rank
 from .regression import hierarchical_steps, linear_regression, logistic_regression
 from .scales import cronbach_alpha, scale_score
 from .ttests import t_independent, t_one_sample, t_paired
 
 __all__ = [
+    "posthoc",
+    "factorial_anova",
     "linear_regression",
     "hierarchical_steps",
     "logistic_regression",

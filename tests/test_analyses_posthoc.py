@@ -1,0 +1,73 @@
+"""Post hoc comparisons and factorial ANOVA, against outside references.
+
+Dataset: pingouin's bundled 'penguins'. References: scipy.stats.tukey_hsd,
+pingouin.pairwise_gameshowell and pingouin.anova (two-way, Type II and III),
+statsmodels' multipletests for Holm.
+"""
+
+import pingouin as pg
+import pytest
+from scipy import stats
+from statsmodels.stats.multitest import multipletests
+
+from statsetter import InputError, render
+from statsetter.analyses import factorial_anova, posthoc
+
+REL = 1e-10
+
+
+@pytest.fixture(scope="module")
+def penguins():
+    return pg.read_dataset("penguins")
+
+
+def samples(df):
+    d = df.dropna(subset=["bill_length_mm"])
+    return [d.bill_length_mm[d.species == s].to_numpy() for s in ("Adelie", "Chinstrap", "Gentoo")]
+
+
+def test_tukey(penguins):
+    rs = posthoc(penguins, "bill_length_mm", "species", "tukey")
+    ref = stats.tukey_hsd(*samples(penguins))
+    ci = ref.confidence_interval()
+    for r, (i, j) in zip(rs, [(0, 1), (0, 2), (1, 2)]):
+        assert r.estimate.value == pytest.approx(ref.statistic[i, j], rel=REL)
+        assert r.p == pytest.approx(ref.pvalue[i, j], rel=REL, abs=1e-300)
+        assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.low[i, j], ci.high[i, j]), rel=REL)
+    assert "Tukey HSD" in render(rs[0], "sentence").plain()
+
+
+def test_games_howell_against_pingouin(penguins):
+    rs = posthoc(penguins, "bill_length_mm", "species", "games-howell")
+    ref = pg.pairwise_gameshowell(penguins, dv="bill_length_mm", between="species")
+    for r, (_, row) in zip(rs, ref.iterrows()):
+        assert r.estimate.value == pytest.approx(row["diff"], rel=REL)
+        assert r.p == pytest.approx(row["pval"], rel=1e-6, abs=1e-12)
+
+
+def test_holm_against_multipletests(penguins):
+    rs = posthoc(penguins, "bill_length_mm", "species", "holm")
+    s = samples(penguins)
+    raw = [stats.ttest_ind(s[i], s[j]).pvalue for i, j in [(0, 1), (0, 2), (1, 2)]]
+    adjusted = multipletests(raw, method="holm")[1]
+    assert [r.p for r in rs] == pytest.approx(list(adjusted), rel=REL)
+    assert "Holm-adjusted" in rs[0].notes[0].text
+
+
+@pytest.mark.parametrize("ss_type", [2, 3])
+def test_factorial_against_pingouin(penguins, ss_type):
+    rs = factorial_anova(penguins, "body_mass_g", ("species", "sex"), ss_type=ss_type)
+    ref = pg.anova(penguins.dropna(subset=["sex"]), dv="body_mass_g", between=["species", "sex"], ss_type=ss_type)
+    for r, (_, row) in zip(rs, ref.iloc[:3].iterrows()):
+        assert r.statistic.value == pytest.approx(row["F"], rel=1e-9)
+        assert r.p == pytest.approx(row["p_unc"], rel=1e-8)
+        assert r.effects[0].value == pytest.approx(row["np2"], rel=1e-9)
+        assert r.details["ss_type"] == ss_type
+    assert "Type II" in render(rs[0], "sentence").plain() or ss_type == 3
+
+
+def test_bad_input(penguins):
+    with pytest.raises(InputError, match="procedure"):
+        posthoc(penguins, "bill_length_mm", "species", "scheffe")  # type: ignore[arg-type]
+    with pytest.raises(InputError, match="one level"):
+        factorial_anova(penguins.assign(one="x"), "body_mass_g", ("species", "one"))
