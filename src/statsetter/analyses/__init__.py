@@ -6,7 +6,9 @@ Each function loads numpy, scipy and pandas when called, never on
 
 from .anova import anova_oneway
 from .chisquare import chi_square, goodness_of_fit
+from .choose import analyse, level_of
 from .correlation import correlate
+from .matrix import CorrelationMatrix, correlation_matrix
 from .posthoc import factorial_anova, posthoc
 from .ranks import kruskal_wallis, mann_whitney, wilcoxon_signed_rank
 from .regression import hierarchical_steps, linear_regression, logistic_regression
@@ -14,6 +16,10 @@ from .scales import cronbach_alpha, scale_score
 from .ttests import t_independent, t_one_sample, t_paired
 
 __all__ = [
+    "analyse",
+    "level_of",
+    "CorrelationMatrix",
+    "correlation_matrix",
     "posthoc",
     "factorial_anova",
     "linear_regression",

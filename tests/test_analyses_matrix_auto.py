@@ -1,0 +1,92 @@
+"""Correlation matrix (pairwise-complete) and the automatic test choice.
+
+Dataset: pingouin's bundled 'penguins', with extra missing values set by the
+test so that pairs have different n. References: scipy.stats.pearsonr and
+spearmanr per pair, statsmodels' multipletests.
+"""
+
+import numpy as np
+import pingouin as pg
+import pytest
+from scipy import stats
+from statsmodels.stats.multitest import multipletests
+
+from statsetter import InputError
+from statsetter.analyses import analyse, correlation_matrix, level_of
+
+REL = 1e-10
+COLS = ["bill_length_mm", "bill_depth_mm", "flipper_length_mm", "body_mass_g"]
+
+
+@pytest.fixture(scope="module")
+def penguins():
+    df = pg.read_dataset("penguins")
+    df.loc[df.index[:25], "bill_depth_mm"] = np.nan
+    df.loc[df.index[100:110], "body_mass_g"] = np.nan
+    return df
+
+
+def test_matrix_against_scipy_pairwise(penguins):
+    m = correlation_matrix(penguins, COLS)
+    for i in range(4):
+        for j in range(i + 1, 4):
+            pair = penguins[[COLS[i], COLS[j]]].dropna()
+            ref = stats.pearsonr(pair.iloc[:, 0], pair.iloc[:, 1])
+            ci = ref.confidence_interval()
+            assert m.n[i, j] == len(pair)
+            assert m.r[i, j] == pytest.approx(ref.statistic, rel=REL)
+            assert m.p[i, j] == pytest.approx(ref.pvalue, rel=1e-8)
+            assert (m.low[i, j], m.high[i, j]) == pytest.approx((ci.low, ci.high), rel=1e-9)
+    assert len(m.records()) == 6
+
+
+def test_matrix_adjustment(penguins):
+    raw = correlation_matrix(penguins, COLS)
+    adj = correlation_matrix(penguins, COLS, adjust="holm")
+    iu = np.triu_indices(4, 1)
+    assert adj.p[iu] == pytest.approx(multipletests(raw.p[iu], method="holm")[1], rel=REL)
+    assert "Holm-adjusted" in adj.records()[0].notes[1].text
+
+
+def test_spearman_matrix_complete_data(penguins):
+    complete = penguins.dropna(subset=COLS)
+    m = correlation_matrix(complete, COLS, method="spearman")
+    ref = stats.spearmanr(complete[COLS])
+    assert m.r[np.triu_indices(4, 1)] == pytest.approx(ref.statistic[np.triu_indices(4, 1)], rel=REL)
+
+
+@pytest.mark.parametrize(
+    "outcome, predictor, kind, why",
+    [
+        ("body_mass_g", "sex", "t_independent", "two groups"),
+        ("body_mass_g", "species", "anova_oneway", "3 groups"),
+        ("island", "species", "chi2_independence", "nominal"),
+        ("body_mass_g", "flipper_length_mm", "pearson", "interval"),
+        ("rating", "sex", "mann_whitney", "ordinal"),
+        ("rating", "body_mass_g", "spearman", "ordinal"),
+    ],
+)
+def test_auto_choice_is_stated(penguins, outcome, predictor, kind, why):
+    df = penguins.assign(rating=(penguins.body_mass_g // 1000).astype("Int64").astype(float))
+    (first, *_) = analyse(df, outcome, predictor)
+    assert first.kind == kind
+    assert first.notes[0].kind == "choice" and first.notes[0].text.startswith("Chosen automatically") and why in first.notes[0].text
+
+
+def test_levels():
+    import pandas as pd
+
+    assert level_of(pd.Series([1, 2, 3, 4, 5, 6, 7] * 3, name="q"))[1].startswith("integer, 7 distinct values 1–7")
+    assert level_of(pd.Series(pd.Categorical(["a", "b"], ordered=True)))[0] == "ordinal"
+    assert level_of(pd.Series([0.5, 1.7, 2.2, 3.1, 4.4, 5.5, 6.6, 7.7]))[0] == "interval"
+    with pytest.raises(InputError, match="level 'metric'"):
+        level_of(pd.Series([1.0], name="x"), "metric")
+
+
+def test_matrix_bad_input(penguins):
+    with pytest.raises(InputError, match="at least two"):
+        correlation_matrix(penguins, ["bill_length_mm"])
+    with pytest.raises(InputError, match="zero variance"):
+        correlation_matrix(penguins.assign(k=1.0), ["k", "body_mass_g"])
+    with pytest.raises(InputError, match="not numeric"):
+        correlation_matrix(penguins, ["species", "body_mass_g"])
