@@ -147,3 +147,11 @@ def test_three_decimal_style_prints_correct_third_decimals(tmp_path, penguins):
 def test_bad_input_names_the_variable(penguins, call, message):
     with pytest.raises(InputError, match=message):
         call(penguins)
+
+
+def test_missing_values_always_stated(penguins):
+    # issue text: how many rows were dropped is always stated in a note (practice)
+    r = t_paired(SLEEP, "drug1", "drug2")
+    assert any(n.kind == "missing" and n.text.startswith("No rows dropped") for n in r.notes)
+    r = correlate(penguins, "bill_length_mm", "body_mass_g")
+    assert any(n.kind == "missing" and "2 of 344 rows dropped" in n.text for n in r.notes)

@@ -90,3 +90,13 @@ def test_matrix_bad_input(penguins):
         correlation_matrix(penguins.assign(k=1.0), ["k", "body_mass_g"])
     with pytest.raises(InputError, match="not numeric"):
         correlation_matrix(penguins, ["species", "body_mass_g"])
+
+
+def test_dense_and_sparse_paths_agree(penguins, monkeypatch):
+    from statsetter.analyses import matrix
+
+    sparse = correlation_matrix(penguins, COLS)
+    monkeypatch.setattr(matrix, "SPARSE_BELOW", -1.0)
+    dense = correlation_matrix(penguins, COLS)
+    assert np.array_equal(sparse.n, dense.n)
+    assert sparse.r == pytest.approx(dense.r, rel=1e-12)

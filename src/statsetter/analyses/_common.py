@@ -32,7 +32,7 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
     return s.astype(float)
 
 
-def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note | None]:
+def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note]:
     """Rows complete on ``names``, and a note saying how many were dropped."""
     for n in names:
         column(df, n)
@@ -44,9 +44,10 @@ def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", 
     for n in names:
         if sub[n].notna().sum() == 0:
             raise InputError(f"{n}: every value is missing")
-    note = None
     if dropped:
         note = Note("missing", f"{dropped} of {len(sub)} rows dropped for missing values on {', '.join(names)} (listwise).")
+    else:
+        note = Note("missing", f"No rows dropped for missing values on {', '.join(names)} (n = {len(sub)}).")
     return complete, note
 
 

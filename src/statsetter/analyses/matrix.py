@@ -14,6 +14,7 @@ if TYPE_CHECKING:
     import pandas as pd
 
 Adjust = Literal["holm", "bonferroni", "fdr_bh"]
+SPARSE_BELOW = 0.1  # share of missing cells below which the sparse correction path is used
 _ADJUST_NAMES = {"holm": "Holm", "bonferroni": "Bonferroni", "fdr_bh": "Benjamini–Hochberg"}
 
 
@@ -84,21 +85,47 @@ def correlation_matrix(
         raise InputError("columns: a variable is named twice")
     if adjust is not None and adjust not in _ADJUST_NAMES:
         raise InputError(f"adjust: {adjust!r} is not one of {', '.join(_ADJUST_NAMES)}")
-    frame = [c.numeric(df, name) for name in columns]
-    X = np.column_stack([s.to_numpy(dtype=float) for s in frame])
-    if method == "spearman":
-        import pandas as pd
+    import pandas as pd
 
+    present = set(df.columns)
+    for name in columns:
+        if name not in present:
+            c.column(df, name)  # raises, with close matches
+    dtypes = df.dtypes[list(columns)]
+    for name, dtype in dtypes.items():
+        if not pd.api.types.is_numeric_dtype(dtype) or pd.api.types.is_bool_dtype(dtype):
+            raise InputError(f"{name}: not numeric (dtype {dtype}); correlations need numeric variables")
+    X = df[list(columns)].to_numpy(dtype=float)
+    if method == "spearman":
         X = pd.DataFrame(X).rank().to_numpy()
     elif method != "pearson":
         raise InputError(f"method: {method!r} is not pearson or spearman")
-    mask = ~np.isnan(X)
-    M = mask.astype(float)
-    centred = np.where(mask, X - np.nanmean(X, axis=0), 0.0)
-    N = M.T @ M
-    Sx = centred.T @ M  # Sx[i, j]: sum of column i over rows where j is also present
-    Sxx = (centred * centred).T @ M
+    missing = np.isnan(X)
+    miss_count = missing.sum(axis=0)
+    rows = len(X)
+    if (miss_count == rows).any():
+        raise InputError(f"{columns[int(np.argmax(miss_count == rows))]}: every value is missing")
+    centred = np.where(missing, 0.0, X)
+    centred -= centred.sum(axis=0) / (rows - miss_count)
+    centred[missing] = 0.0
     Sxy = centred.T @ centred
+    squares = centred * centred
+    if missing.mean() <= SPARSE_BELOW:
+        # few missing values: subtract what the rows missing in column j contribute
+        from scipy import sparse
+
+        flat = np.flatnonzero(np.ascontiguousarray(missing.T))  # (column, row) pairs, by column
+        indptr = np.concatenate([[0], np.cumsum(miss_count)])
+        St = sparse.csr_matrix((np.ones(len(flat)), flat % rows, indptr), shape=(X.shape[1], rows))
+        N = rows - miss_count[:, None] - miss_count[None, :] + (St @ St.T).toarray()
+        Sx = centred.sum(axis=0)[:, None] - np.asarray(St @ centred).T
+        Sxx = squares.sum(axis=0)[:, None] - np.asarray(St @ squares).T
+    else:
+        M = (~missing).astype(float)
+        M32 = M.astype(np.float32)  # counts are exact in float32 below 2^24 rows
+        N = (M32.T @ M32).astype(float) if rows < 2**24 else M.T @ M
+        Sx = centred.T @ M  # Sx[i, j]: sum of column i over rows where j is also present
+        Sxx = squares.T @ M
     with np.errstate(divide="ignore", invalid="ignore"):
         cov = Sxy - Sx * Sx.T / N
         var_i = Sxx - Sx * Sx / N
@@ -117,7 +144,11 @@ def correlation_matrix(
     dfree = N - 2
     with np.errstate(divide="ignore", invalid="ignore"):
         t = r * np.sqrt(dfree / (1 - r * r))
-    p = np.where(np.abs(r) >= 1, 0.0, 2 * stats.t.sf(np.abs(t), dfree))
+    iu = np.triu_indices(len(columns), 1)
+    p = np.zeros_like(r)
+    upper = np.where(np.abs(r[iu]) >= 1, 0.0, 2 * stats.t.sf(np.abs(t[iu]), dfree[iu]))
+    p[iu] = upper
+    p[(iu[1], iu[0])] = upper
     zc = stats.norm.ppf(0.5 + level / 2)
     with np.errstate(divide="ignore"):
         z = np.arctanh(np.clip(r, -1 + 1e-16, 1 - 1e-16))
@@ -126,7 +157,6 @@ def correlation_matrix(
     if adjust:
         from statsmodels.stats.multitest import multipletests
 
-        iu = np.triu_indices(len(columns), 1)
         adj = multipletests(p[iu], method=adjust)[1]
         p = p.copy()
         p[iu] = adj
