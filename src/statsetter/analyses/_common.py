@@ -39,11 +39,12 @@ def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", 
     if len(set(names)) != len(names):
         raise InputError(f"{', '.join(names)}: the same variable is named twice")
     sub = df[list(names)]
-    complete = sub.dropna()
-    dropped = len(sub) - len(complete)
-    for n in names:
-        if sub[n].notna().sum() == 0:
+    absent = {n: int(sub[n].isna().sum()) for n in names}
+    for n, count in absent.items():
+        if count == len(sub):
             raise InputError(f"{n}: every value is missing")
+    complete = sub.dropna() if any(absent.values()) else sub
+    dropped = len(sub) - len(complete)
     if dropped:
         note = Note("missing", f"{dropped} of {len(sub)} rows dropped for missing values on {', '.join(names)} (listwise).")
     else:
@@ -79,3 +80,31 @@ def notes(*items: Note | None) -> tuple[Note, ...]:
 
 def fmt(x: Any) -> str:
     return f"{x:.4g}"
+
+
+def split_by(values: "pd.Series", groups: "pd.Series") -> tuple[list[object], list[Any]]:
+    """(levels in sorted order, the values of each level as numpy arrays),
+    encoding the group column once (Arrow strings are dictionary-encoded)."""
+    import numpy as np
+    import pandas as pd
+
+    array = groups.array
+    pa_array = getattr(array, "_pa_array", None)
+    if pa_array is not None:
+        import pyarrow as pa
+        import pyarrow.compute as pc
+
+        encoded = pc.dictionary_encode(pa_array)
+        if isinstance(encoded, pa.ChunkedArray):
+            encoded = encoded.combine_chunks()
+        codes = encoded.indices.to_numpy(zero_copy_only=False)
+        uniques = encoded.dictionary.to_pylist()
+    else:
+        codes, uniq = pd.factorize(groups, sort=False)
+        uniques = list(uniq)
+    order = sorted(range(len(uniques)), key=lambda k: str(uniques[k]))
+    y = values.to_numpy(dtype=float)
+    if len(uniques) == 2:
+        mask = codes == order[0]
+        return [uniques[k] for k in order], [y[mask], y[~mask]]
+    return [uniques[k] for k in order], [y[codes == k] for k in order]

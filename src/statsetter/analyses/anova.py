@@ -29,21 +29,21 @@ def anova_oneway(
         raise InputError(f"variant: {variant!r} is not classic or welch")
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
-    levels = sorted(data[group].unique().tolist(), key=str)
+    levels, samples = c.split_by(y, data[group])
     if len(levels) < 2:
         raise InputError(f"{group}: {len(levels)} group(s) with data; an ANOVA needs at least two")
-    samples = [y[data[group] == lev].to_numpy() for lev in levels]
     for lev, v in zip(levels, samples):
         if len(v) < 2:
             raise InputError(f"{group} = {lev}: n = {len(v)}; each group needs at least 2 values")
     if all(v.var(ddof=1) == 0 for v in samples):
         raise InputError(f"{outcome}: zero variance within every group; F is undefined")
     res = stats.f_oneway(*samples, equal_var=variant == "classic")
-    allv = y.to_numpy()
-    grand = allv.mean()
-    ss_b = float(sum(len(v) * (v.mean() - grand) ** 2 for v in samples))
-    ss_t = float(((allv - grand) ** 2).sum())
-    k, n = len(samples), len(allv)
+    k, n = len(samples), sum(len(v) for v in samples)
+    means = [float(v.mean()) for v in samples]
+    grand = sum(len(v) * m for v, m in zip(samples, means)) / n
+    ss_b = float(sum(len(v) * (m - grand) ** 2 for v, m in zip(samples, means)))
+    ss_w = float(sum(((v - m) ** 2).sum() for v, m in zip(samples, means)))
+    ss_t = ss_b + ss_w
     ms_w = (ss_t - ss_b) / (n - k)
     eta2 = ss_b / ss_t
     omega2 = (ss_b - (k - 1) * ms_w) / (ss_t + ms_w)

@@ -146,7 +146,9 @@ def correlation_matrix(
         t = r * np.sqrt(dfree / (1 - r * r))
     iu = np.triu_indices(len(columns), 1)
     p = np.zeros_like(r)
-    upper = np.where(np.abs(r[iu]) >= 1, 0.0, 2 * stats.t.sf(np.abs(t[iu]), dfree[iu]))
+    from scipy import special
+
+    upper = np.where(np.abs(r[iu]) >= 1, 0.0, 2 * special.stdtr(dfree[iu], -np.abs(t[iu])))  # Student t cdf
     p[iu] = upper
     p[(iu[1], iu[0])] = upper
     zc = stats.norm.ppf(0.5 + level / 2)

@@ -38,10 +38,9 @@ def posthoc(
         raise InputError(f"procedure: {procedure!r} is not one of {', '.join(_NAMES)}")
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
-    levels = sorted(data[group].unique().tolist(), key=str)
+    levels, samples = c.split_by(y, data[group])
     if len(levels) < 2:
         raise InputError(f"{group}: {len(levels)} group(s) with data; comparisons need at least two")
-    samples = [y[data[group] == lev].to_numpy() for lev in levels]
     for lev, v in zip(levels, samples):
         if len(v) < 2:
             raise InputError(f"{group} = {lev}: n = {len(v)}; each group needs at least 2 values")

@@ -144,10 +144,9 @@ def kruskal_wallis(
 
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
-    levels = sorted(data[group].unique().tolist(), key=str)
+    levels, samples = c.split_by(y, data[group])
     if len(levels) < 2:
         raise InputError(f"{group}: {len(levels)} group(s) with data; a Kruskal–Wallis test needs at least two")
-    samples = [y[data[group] == lev].to_numpy() for lev in levels]
     res = stats.kruskal(*samples)
     n = sum(len(v) for v in samples)
     h = float(res.statistic)

@@ -40,13 +40,19 @@ def t_independent(
         raise InputError(f"variant: {variant!r} is not welch or student")
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
-    g = data[group]
-    levels = list(groups) if groups is not None else sorted(g.unique().tolist(), key=str)
-    if len(levels) < 2:
-        raise InputError(f"{group}: {len(levels)} group(s) with data; a t test needs two")
-    if len(levels) > 2:
-        raise InputError(f"{group}: {len(levels)} groups ({', '.join(map(str, levels[:5]))}); name two with groups=[...] or use an ANOVA")
-    a, b = (y[g == lev].to_numpy() for lev in levels)
+    if groups is not None:
+        levels = list(groups)
+        if len(levels) != 2:
+            raise InputError(f"groups: name exactly two levels of {group}, got {len(levels)}")
+        g = data[group]
+        a, b = (y[g == lev].to_numpy() for lev in levels)
+    else:
+        levels, samples = c.split_by(y, data[group])
+        if len(levels) < 2:
+            raise InputError(f"{group}: {len(levels)} group(s) with data; a t test needs two")
+        if len(levels) > 2:
+            raise InputError(f"{group}: {len(levels)} groups ({', '.join(map(str, levels[:5]))}); name two with groups=[...] or use an ANOVA")
+        a, b = samples
     for lev, v in zip(levels, (a, b)):
         if len(v) < 2:
             raise InputError(f"{group} = {lev}: n = {len(v)}; each group needs at least 2 values")
