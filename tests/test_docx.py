@@ -1,0 +1,122 @@
+"""Word output: runs, APA table layout (APA 7 §7.8-7.21) and real rendering.
+
+Every .docx written here is converted to PDF by LibreOffice headless and read
+back with pdftotext (poppler). In CI a missing LibreOffice fails the run.
+"""
+
+import os
+import shutil
+import subprocess
+import zipfile
+
+import docx
+import pytest
+from docx.oxml.ns import qn
+
+from kind_examples import EXAMPLES
+from statsetter import render
+from statsetter.export.docx_writer import results_document, save_document
+from test_tables import model
+
+W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
+
+
+def pdf_text(path):
+    soffice = shutil.which("soffice") or shutil.which("libreoffice")
+    if soffice is None or shutil.which("pdftotext") is None:
+        if os.environ.get("CI"):
+            pytest.fail("LibreOffice (soffice) and pdftotext are required in CI; .ci/run installs them")
+        pytest.skip("LibreOffice or pdftotext not installed")
+    out = path.parent
+    subprocess.run([soffice, "--headless", "--convert-to", "pdf", "--outdir", str(out), str(path)],
+                   check=True, capture_output=True, timeout=180, env={**os.environ, "HOME": str(out)})
+    pdf = path.with_suffix(".pdf")
+    return subprocess.run(["pdftotext", str(pdf), "-"], check=True, capture_output=True, text=True).stdout
+
+
+@pytest.fixture
+def written(tmp_path):
+    records = [EXAMPLES["t_independent"], EXAMPLES["chi2_independence"]]
+    doc = results_document(records, title="Results", tables=[model()])
+    path = save_document(doc, tmp_path / "results.docx")
+    return path, records
+
+
+def test_italic_exactly_on_symbols(written):
+    path, records = written
+    doc = docx.Document(str(path))
+    paragraph = doc.paragraphs[1]
+    italic = [r.text for r in paragraph.runs if r.italic]
+    # APA 7 §6.45: Latin statistical symbols italic; Greek and CI roman
+    assert italic == ["M", "SD", "n", "M", "SD", "n", "t", "p", "d"]
+    assert paragraph.text == render(records[0], "sentence").text
+    chi = doc.paragraphs[2]
+    sup = [r.text for r in chi.runs if r.font.superscript]
+    assert sup == ["2"]  # χ² with a real superscript, not a typed caret
+
+
+def test_table_rules_are_horizontal_only(written):
+    path, _ = written
+    xml = zipfile.ZipFile(path).read("word/document.xml").decode()
+    doc = docx.Document(str(path))
+    tbl = doc.tables[0]._tbl
+    # no vertical rules anywhere
+    for edge in ("left", "right", "insideV"):
+        for el in tbl.iter(f"{W}{edge}"):
+            assert el.get(qn("w:val")) == "nil"
+    rows = tbl.findall(f"{W}tr")
+    def ruled(row, edge):
+        return [c.find(f"{W}tcPr/{W}tcBorders/{W}{edge}").get(qn("w:val")) == "single" for c in row.findall(f"{W}tc")]
+    assert all(ruled(rows[0], "top"))  # above the column heads
+    assert all(ruled(rows[1], "bottom"))  # below the column heads
+    assert all(ruled(rows[-1], "bottom"))  # at the bottom
+    assert ruled(rows[0], "bottom")[1:] == [True, True]  # under each spanner (merged cells)
+    assert not any(ruled(rows[-1], "top")) or len(rows) == 3
+    assert xml.count("<w:tblHeader/>") == 2 and xml.count("<w:cantSplit/>") == len(rows)
+
+
+def test_table_number_title_and_note(written):
+    path, _ = written
+    doc = docx.Document(str(path))
+    texts = [p.text for p in doc.paragraphs]
+    i = texts.index("Table 1")
+    assert doc.paragraphs[i].runs[0].bold
+    assert texts[i + 1] == "Scores by group" and all(r.italic for r in doc.paragraphs[i + 1].runs)
+    note = doc.paragraphs[i + 2]
+    assert note.runs[0].text == "Note." and note.runs[0].italic
+
+
+def test_libreoffice_renders_the_numbers(written):
+    path, _ = written
+    text = pdf_text(path)
+    for needed in ("t(38) = 2.14", "p = .039", "95% CI [0.04, 1.31]", "N = 200) = 9.87", "Table 1", "Scores by group", "4.10"):
+        assert needed in text.replace("\n", " "), needed
+
+
+def test_appending_keeps_everything(tmp_path):
+    base = docx.Document()
+    base.add_heading("Chapter 4", level=1)
+    base.add_paragraph("An author's own paragraph.")
+    t = base.add_table(rows=1, cols=2)
+    t.cell(0, 0).text = "kept"
+    original = tmp_path / "chapter.docx"
+    base.save(str(original))
+    before = docx.Document(str(original))
+    doc = results_document([EXAMPLES["pearson"]], base=original)
+    out = save_document(doc, tmp_path / "chapter-results.docx", inputs=[original])
+    after = docx.Document(str(out))
+    old = [p.text for p in before.paragraphs]
+    assert [p.text for p in after.paragraphs][: len(old)] == old
+    assert after.tables[0].cell(0, 0).text == "kept"
+    assert "r(98) = .32" in pdf_text(out)
+
+
+def test_refuses_to_overwrite_input(tmp_path):
+    from statsetter import InputError
+
+    path = tmp_path / "in.docx"
+    docx.Document().save(str(path))
+    before = path.read_bytes()
+    with pytest.raises(InputError, match="overwrite an input"):
+        save_document(results_document([EXAMPLES["pearson"]], base=path), path, inputs=[path])
+    assert path.read_bytes() == before
