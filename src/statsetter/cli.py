@@ -95,6 +95,17 @@ def _build_parser() -> argparse.ArgumentParser:
     r.add_argument("files", nargs="+", metavar="FILE", help="JSON files of records (from several authors, say)")
     style_options(r)
 
+    fl = sub.add_parser(
+        "fill",
+        help="fill [[id]] markers in a .docx chapter from records",
+        description="Fill result markers in a chapter: [[id]] (statistics string) or [[id|sentence]]. "
+        "Writes a new file; the chapter is never modified. Exit 1 when a marker has no record.",
+    )
+    fl.add_argument("chapter", metavar="CHAPTER.docx")
+    fl.add_argument("--records", required=True, action="append", metavar="FILE", help="JSON file of records (repeatable)")
+    fl.add_argument("--out", required=True, metavar="FILE.docx", help="the filled copy")
+    fl.add_argument("--style", default=None, help="a built-in style name or a TOML file")
+
     s = sub.add_parser("styles", help="list, show or check style profiles")
     s.add_argument("action", nargs="?", choices=("list", "show", "check"), default="list")
     s.add_argument("target", nargs="?", metavar="NAME|FILE", help="style to show, or TOML file to check")
@@ -229,6 +240,34 @@ def _cmd_render(ns: argparse.Namespace) -> int:
     return 0
 
 
+def _read_records(names: Sequence[str]):  # type: ignore[no-untyped-def]
+    from .records import load_records
+
+    out = []
+    for name in names:
+        try:
+            text = Path(name).read_text(encoding="utf-8")
+        except FileNotFoundError:
+            raise InputError(f"{name}: no such file") from None
+        except (OSError, UnicodeDecodeError) as exc:
+            raise InputError(f"{name}: cannot read ({exc})") from None
+        out.extend(load_records(text, source=name))
+    return out
+
+
+def _cmd_fill(ns: argparse.Namespace) -> int:
+    from .export.markers import describe, fill_chapter
+
+    records = _read_records(ns.records)
+    if not ns.out.endswith(".docx"):
+        raise InputError(f"--out: {ns.out} does not end in .docx")
+    report = fill_chapter(ns.chapter, records, ns.out, ns.style)
+    for line in describe(report):
+        print(line)
+    print(f"wrote {ns.out}")
+    return 1 if report.unknown else 0
+
+
 def _cmd_styles(ns: argparse.Namespace) -> int:
     from .style import builtin_styles, check_style_file, load_style
 
@@ -279,7 +318,7 @@ def main(argv: Sequence[str] | None = None) -> int:
     if ns.command is None:
         parser.print_help()
         return 0
-    handlers = {"format": _cmd_format, "render": _cmd_render, "styles": _cmd_styles}
+    handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "styles": _cmd_styles}
     try:
         return handlers[ns.command](ns)
     except StatsetterError as exc:

@@ -1,0 +1,55 @@
+"""Opening an author's .docx safely: clear errors for files that are not Word
+documents, password-protected files and archives that unpack too large."""
+
+from __future__ import annotations
+
+import zipfile
+from pathlib import Path
+from typing import TYPE_CHECKING
+
+from ..errors import InputError
+
+if TYPE_CHECKING:
+    from docx.document import Document
+
+__all__ = ["open_docx", "MAX_UNPACKED"]
+
+MAX_UNPACKED = 1 << 30  # 1 GiB unpacked, against zip bombs
+MAX_RATIO = 200  # unpacked / packed, per member of any size above 1 MiB
+_OLE = b"\xd0\xcf\x11\xe0\xa1\xb1\x1a\xe1"
+
+
+def open_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> "Document":
+    import docx
+
+    p = Path(path)
+    try:
+        head = p.open("rb").read(8)
+    except FileNotFoundError:
+        raise InputError(f"{p}: no such file") from None
+    except OSError as exc:
+        raise InputError(f"{p}: cannot read ({exc.strerror})") from None
+    if not head:
+        raise InputError(f"{p}: the file is empty")
+    if head == _OLE:
+        raise InputError(f"{p}: password-protected (encrypted) or an old binary .doc; save it as an unprotected .docx")
+    if not head.startswith(b"PK"):
+        raise InputError(f"{p}: not a Word .docx file (not a zip archive)")
+    try:
+        with zipfile.ZipFile(p) as archive:
+            names = set(archive.namelist())
+            if "word/document.xml" not in names or "[Content_Types].xml" not in names:
+                raise InputError(f"{p}: a zip archive but not a Word document (no word/document.xml)")
+            total = 0
+            for info in archive.infolist():
+                total += info.file_size
+                if info.file_size > (1 << 20) and info.file_size > MAX_RATIO * max(info.compress_size, 1):
+                    raise InputError(f"{p}: {info.filename} unpacks {info.file_size // max(info.compress_size, 1)}× its packed size; refusing (zip bomb?)")
+            if total > max_unpacked:
+                raise InputError(f"{p}: unpacks to {total:,} bytes, over the limit of {max_unpacked:,}")
+    except zipfile.BadZipFile:
+        raise InputError(f"{p}: a damaged zip archive, not a readable .docx") from None
+    try:
+        return docx.Document(str(p))
+    except Exception as exc:  # python-docx raises several kinds on malformed parts
+        raise InputError(f"{p}: not a readable Word document ({type(exc).__name__})") from None

@@ -1,0 +1,143 @@
+"""Markers in an author's chapter: split runs, table cells, headers, footers,
+footnotes; unknown markers and unused records reported; input never overwritten;
+bad .docx input gets a clear error. Outputs are read back through LibreOffice."""
+
+import dataclasses
+import io
+import zipfile
+
+import docx
+import pytest
+
+from kind_examples import EXAMPLES
+from statsetter import InputError, dump_records
+from statsetter.cli import main
+from statsetter.export.docx_input import open_docx
+from statsetter.export.markers import fill_chapter
+from test_docx import pdf_text
+
+RECORDS = [
+    dataclasses.replace(EXAMPLES["t_independent"], id="score_diff"),
+    dataclasses.replace(EXAMPLES["pearson"], id="corr"),
+    dataclasses.replace(EXAMPLES["anova_oneway"], id="spare"),
+]
+
+FOOTNOTES = (
+    '<?xml version="1.0" encoding="UTF-8" standalone="yes"?>'
+    '<w:footnotes xmlns:w="http://schemas.openxmlformats.org/wordprocessingml/2006/main">'
+    '<w:footnote w:id="1"><w:p><w:r><w:t xml:space="preserve">See [[corr]].</w:t></w:r></w:p></w:footnote>'
+    "</w:footnotes>"
+)
+
+
+def add_footnotes(path):
+    """Add a footnotes part to a python-docx file (python-docx cannot write one)."""
+    buf = io.BytesIO()
+    with zipfile.ZipFile(path) as zin, zipfile.ZipFile(buf, "w", zipfile.ZIP_DEFLATED) as zout:
+        for item in zin.infolist():
+            data = zin.read(item.filename)
+            if item.filename == "[Content_Types].xml":
+                data = data.replace(
+                    b"</Types>",
+                    b'<Override PartName="/word/footnotes.xml" ContentType="application/vnd.openxmlformats-officedocument.wordprocessingml.footnotes+xml"/></Types>',
+                )
+            if item.filename == "word/_rels/document.xml.rels":
+                data = data.replace(
+                    b"</Relationships>",
+                    b'<Relationship Id="rIdFn1" Type="http://schemas.openxmlformats.org/officeDocument/2006/relationships/footnotes" Target="footnotes.xml"/></Relationships>',
+                )
+            zout.writestr(item, data)
+        zout.writestr("word/footnotes.xml", FOOTNOTES)
+    path.write_bytes(buf.getvalue())
+
+
+@pytest.fixture
+def chapter(tmp_path):
+    d = docx.Document()
+    p = d.add_paragraph("Scores differed ")
+    r = p.add_run("[[score_")
+    r.bold = True
+    p.add_run("diff|sentence]] as expected; see [[corr]].")
+    d.add_paragraph("Unknown [[nope]] stays.")
+    d.add_table(rows=1, cols=1).cell(0, 0).text = "[[corr]]"
+    d.sections[0].header.paragraphs[0].text = "Header [[corr]]"
+    d.sections[0].footer.paragraphs[0].text = "Footer [[corr|stats]]"
+    path = tmp_path / "chapter.docx"
+    d.save(str(path))
+    add_footnotes(path)
+    return path
+
+
+def test_fill_everywhere(chapter, tmp_path):
+    before = chapter.read_bytes()
+    out = tmp_path / "filled.docx"
+    report = fill_chapter(chapter, RECORDS, out)
+    assert chapter.read_bytes() == before  # the input is never modified
+    assert len(report.filled) == 6
+    assert report.unknown == [("[[nope]]", "body paragraph 2")]
+    assert report.unused == ["spare"]
+    d = docx.Document(str(out))
+    first = d.paragraphs[0]
+    assert first.text.startswith("Scores differed The score was higher")
+    assert first.text.endswith("as expected; see r(98) = .32, 95% CI [.13, .49], p = .001.")
+    assert first.runs[0].text == "Scores differed " and not first.runs[0].bold  # surrounding formatting kept
+    assert [r.text for r in first.runs if r.italic][:3] == ["M", "SD", "n"]
+    assert d.tables[0].cell(0, 0).text == "r(98) = .32, 95% CI [.13, .49], p = .001"
+    assert "r(98) = .32" in d.sections[0].header.paragraphs[0].text
+    assert "r(98) = .32" in d.sections[0].footer.paragraphs[0].text
+    footnotes = zipfile.ZipFile(out).read("word/footnotes.xml").decode()
+    assert "[[corr]]" not in footnotes and "= .32" in footnotes
+    text = pdf_text(out)
+    assert "t(38) = 2.14" in text.replace("\n", " ") and "Unknown [[nope]] stays." in text
+
+
+def test_refuses_same_path(chapter):
+    with pytest.raises(InputError, match="overwrite the chapter"):
+        fill_chapter(chapter, RECORDS, chapter)
+
+
+def test_cli_fill(chapter, tmp_path, capsys):
+    recs = tmp_path / "records.json"
+    recs.write_text(dump_records(RECORDS))
+    out = tmp_path / "cli.docx"
+    code = main(["fill", str(chapter), "--records", str(recs), "--out", str(out)])
+    captured = capsys.readouterr()
+    assert code == 1  # an unknown marker is a finding
+    assert "unknown marker [[nope]]" in captured.out and "'spare' is not used" in captured.out
+    assert out.exists()
+
+
+@pytest.mark.parametrize(
+    "content, message",
+    [
+        (b"", "empty"),
+        (b"plain text, not a document", "not a zip"),
+        (b"\xd0\xcf\x11\xe0\xa1\xb1\x1a\xe1" + b"\0" * 100, "password-protected"),
+    ],
+)
+def test_bad_docx(tmp_path, content, message):
+    bad = tmp_path / "bad.docx"
+    bad.write_bytes(content)
+    with pytest.raises(InputError, match=message):
+        open_docx(bad)
+
+
+def test_zip_that_is_not_word_and_zip_bomb(tmp_path):
+    z = tmp_path / "z.docx"
+    with zipfile.ZipFile(z, "w") as f:
+        f.writestr("hello.txt", "hi")
+    with pytest.raises(InputError, match="not a Word document"):
+        open_docx(z)
+    bomb = tmp_path / "bomb.docx"
+    with zipfile.ZipFile(bomb, "w", zipfile.ZIP_DEFLATED) as f:
+        f.writestr("[Content_Types].xml", "<Types/>")
+        f.writestr("word/document.xml", "<w:document/>")
+        f.writestr("word/media/big.bin", b"\0" * (8 << 20))  # 8 MiB of zeros packs to a few KiB
+    with pytest.raises(InputError, match="zip bomb"):
+        open_docx(bomb)
+    big = tmp_path / "big.docx"
+    with zipfile.ZipFile(big, "w", zipfile.ZIP_STORED) as f:
+        f.writestr("[Content_Types].xml", "<Types/>")
+        f.writestr("word/document.xml", "x" * 5000)
+    with pytest.raises(InputError, match="over the limit"):
+        open_docx(big, max_unpacked=1000)
