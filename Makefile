@@ -23,6 +23,7 @@ test: $(STAMP)
 bench: $(STAMP)
 	$(BIN)/python bench/bench_render.py
 	$(BIN)/python bench/bench_analyses.py
+	$(BIN)/python bench/bench_docx.py
 
 clean:
 	rm -rf $(VENV) dist build demo/out bench/out

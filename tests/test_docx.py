@@ -120,3 +120,24 @@ def test_refuses_to_overwrite_input(tmp_path):
     with pytest.raises(InputError, match="overwrite an input"):
         save_document(results_document([EXAMPLES["pearson"]], base=path), path, inputs=[path])
     assert path.read_bytes() == before
+
+
+def test_large_table_is_spliced_in_place(tmp_path):
+    # tables above 300 rows take the linear splice path; the result must match the small path
+    from statsetter.rendering.tables import Column, Row, TableModel, styled
+
+    rows = tuple(Row(styled(f"row {i}"), (styled(f"{i / 100:.2f}"), styled("<i>x</i>"))) for i in range(400))
+    big = TableModel(title=styled("Big"), columns=(Column(styled("A")), Column(styled("B"))), rows=rows,
+                     stub_head=styled("Row"), general_note=styled("A note."))
+    doc = results_document([EXAMPLES["pearson"]], title="Results", tables=[big])
+    doc.add_paragraph("After the table.")
+    path = save_document(doc, tmp_path / "big.docx")
+    d = docx.Document(str(path))
+    assert len(d.tables) == 1 and len(d.tables[0].rows) == 401
+    assert d.tables[0].cell(400, 1).text == "3.99"
+    texts = [p.text for p in d.paragraphs]
+    assert texts[-2:] == ["Note. A note.", "After the table."]
+    body = list(d.element.body)
+    table_at = next(i for i, el in enumerate(body) if el.tag.endswith("}tbl"))
+    assert body[table_at + 1].xpath("string(.)") == "Note. A note."
+    assert "row 399" in pdf_text(path)

@@ -10,6 +10,7 @@ not split across pages. Runs use the document's own Normal style and fonts.
 from __future__ import annotations
 
 from pathlib import Path
+from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
 from ..rendering.styled import StyledText
@@ -24,7 +25,7 @@ if TYPE_CHECKING:
 
 __all__ = ["add_runs", "add_table", "results_document", "save_document"]
 
-_RULE = {"val": "single", "sz": "8", "space": "0", "color": "000000"}
+_WNS = "http://schemas.openxmlformats.org/wordprocessingml/2006/main"
 
 
 def add_runs(paragraph: "Paragraph", text: StyledText) -> None:
@@ -39,112 +40,148 @@ def add_runs(paragraph: "Paragraph", text: StyledText) -> None:
             run.font.subscript = True
 
 
-def _border(cell, **edges: dict[str, str] | None) -> None:  # type: ignore[no-untyped-def]
-    from docx.oxml import OxmlElement
-    from docx.oxml.ns import qn
-
-    tc_pr = cell._tc.get_or_add_tcPr()
-    borders = tc_pr.find(qn("w:tcBorders"))
-    if borders is None:
-        borders = OxmlElement("w:tcBorders")
-        tc_pr.append(borders)
-    for edge in ("top", "left", "bottom", "right"):
-        spec = edges.get(edge)
-        element = borders.find(qn(f"w:{edge}"))
-        if element is None:
-            element = OxmlElement(f"w:{edge}")
-            borders.append(element)
-        if spec is None:
-            element.set(qn("w:val"), "nil")
-        else:
-            for key, value in spec.items():
-                element.set(qn(f"w:{key}"), value)
+def _run_xml(text: StyledText) -> str:
+    out = []
+    for chunk, styles in text.segments():
+        props = ""
+        if styles:
+            props = "<w:rPr>" + ("<w:i/>" if "i" in styles else "")
+            if "sup" in styles:
+                props += '<w:vertAlign w:val="superscript"/>'
+            elif "sub" in styles:
+                props += '<w:vertAlign w:val="subscript"/>'
+            props += "</w:rPr>"
+        out.append(f'<w:r>{props}<w:t xml:space="preserve">{_escape(chunk)}</w:t></w:r>')
+    return "".join(out)
 
 
-def _no_table_borders(table) -> None:  # type: ignore[no-untyped-def]
-    from docx.oxml import OxmlElement
-    from docx.oxml.ns import qn
-
-    tbl_pr = table._tbl.tblPr
-    borders = OxmlElement("w:tblBorders")
-    for edge in ("top", "left", "bottom", "right", "insideH", "insideV"):
-        element = OxmlElement(f"w:{edge}")
-        element.set(qn("w:val"), "nil")
-        borders.append(element)
-    existing = tbl_pr.find(qn("w:tblBorders"))
-    if existing is not None:
-        tbl_pr.remove(existing)
-    tbl_pr.append(borders)
+_RULE_XML = '<w:{0} w:val="single" w:sz="8" w:space="0" w:color="000000"/>'
+_NIL_XML = '<w:{0} w:val="nil"/>'
 
 
-def _row_flags(row, header: bool) -> None:  # type: ignore[no-untyped-def]
-    from docx.oxml import OxmlElement
-    from docx.oxml.ns import qn
-
-    tr_pr = row._tr.get_or_add_trPr()
-    cant = OxmlElement("w:cantSplit")
-    tr_pr.append(cant)
-    if header:
-        head = OxmlElement("w:tblHeader")
-        tr_pr.append(head)
-
-
-def _fill(cell, text: StyledText, align: str) -> None:  # type: ignore[no-untyped-def]
-    from docx.enum.text import WD_ALIGN_PARAGRAPH
-
-    paragraph = cell.paragraphs[0]
-    add_runs(paragraph, text)
-    paragraph.alignment = {"left": WD_ALIGN_PARAGRAPH.LEFT, "right": WD_ALIGN_PARAGRAPH.RIGHT}.get(
-        align, WD_ALIGN_PARAGRAPH.CENTER
+def _borders(top: bool, bottom: bool) -> str:
+    return (
+        "<w:tcBorders>"
+        + (_RULE_XML if top else _NIL_XML).format("top")
+        + _NIL_XML.format("left")
+        + (_RULE_XML if bottom else _NIL_XML).format("bottom")
+        + _NIL_XML.format("right")
+        + "</w:tcBorders>"
     )
+
+
+_JC = {"left": "left", "right": "right"}
+
+
+def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1) -> str:
+    grid = f'<w:gridSpan w:val="{span}"/>' if span > 1 else ""
+    jc = _JC.get(align, "center")
+    return (
+        f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr>"
+        f'<w:p><w:pPr><w:jc w:val="{jc}"/></w:pPr>{_run_xml(text)}</w:p></w:tc>'
+    )
+
+
+def _table_xml(table: TableModel) -> str:
+    """The whole w:tbl as one string, parsed once: fast for tables of thousands of rows."""
+    ncols = len(table.columns) + 1
+    head_rows = 2 if table.spanners else 1
+    header = "<w:trPr><w:cantSplit/><w:tblHeader/></w:trPr>"
+    parts = [
+        f'<w:tbl xmlns:w="{_WNS}"><w:tblPr><w:tblW w:w="0" w:type="auto"/><w:tblBorders>'
+        + "".join(_NIL_XML.format(e) for e in ("top", "left", "bottom", "right", "insideH", "insideV"))
+        + '</w:tblBorders><w:tblLook w:val="0000"/></w:tblPr><w:tblGrid>'
+        + "<w:gridCol/>" * ncols
+        + "</w:tblGrid>"
+    ]
+    if table.spanners:
+        cells = [_cell_xml(StyledText(), "left", True, False)]
+        j = 0
+        for sp in sorted(table.spanners, key=lambda sp: sp.start):
+            cells += [_cell_xml(StyledText(), "center", True, False) for _ in range(sp.start - j)]
+            cells.append(_cell_xml(sp.label, "center", True, True, sp.end - sp.start))
+            j = sp.end
+        cells += [_cell_xml(StyledText(), "center", True, False) for _ in range(len(table.columns) - j)]
+        parts.append(f"<w:tr>{header}{''.join(cells)}</w:tr>")
+    spanned = {j for sp in table.spanners for j in range(sp.start + 1, sp.end + 1)}
+    heads = [table.stub_head] + [c.head for c in table.columns]
+    parts.append(
+        f"<w:tr>{header}"
+        + "".join(
+            _cell_xml(h, "left" if j == 0 else "center", head_rows == 1 or j in spanned, True) for j, h in enumerate(heads)
+        )
+        + "</w:tr>"
+    )
+    body = "<w:trPr><w:cantSplit/></w:trPr>"
+    aligns = [c.align for c in table.columns]
+    last = len(table.rows) - 1
+    for i, row in enumerate(table.rows):
+        bottom = i == last
+        stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
+        cells = [_cell_xml(stub, "left", False, bottom)]
+        if row.cells:
+            cells += [_cell_xml(c, a, False, bottom) for c, a in zip(row.cells, aligns)]
+        else:
+            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns)))
+        parts.append(f"<w:tr>{body}{''.join(cells)}</w:tr>")
+    parts.append("</w:tbl>")
+    return "".join(parts)
+
+
+_SPLICE_ABOVE = 300  # rows; larger tables are spliced into the serialised body
+
+
+def _splice(document: "Document", anchor: "Paragraph", table_xml: str) -> "Paragraph":
+    """Insert a large table by re-parsing the document body with the table's
+    XML in place: lxml moves big subtrees between documents in quadratic time,
+    a parse is linear. Returns the (new) anchor paragraph."""
+    from docx.oxml import parse_xml
+    from docx.text.paragraph import Paragraph
+    from lxml import etree
+
+    token = "statsetter-table-anchor"
+    anchor._p.set(f"{{{_WNS}}}rsidR", "00000000")
+    anchor.add_run(token)
+    xml = etree.tostring(document.element, encoding="unicode")
+    inner = table_xml.replace(f' xmlns:w="{_WNS}"', "", 1)
+    at = xml.index(token)
+    start = xml.rindex("<w:p ", 0, at)
+    end = xml.index("</w:p>", at) + len("</w:p>")
+    root = parse_xml(xml[:start] + inner + '<w:p><w:pPr/></w:p>' + xml[end:])
+    document.part._element = root
+    document._element = root  # type: ignore[attr-defined]
+    document._Document__body = None  # type: ignore[attr-defined]  # python-docx caches the body
+    body = root.body
+    last_p = body.findall(f"{{{_WNS}}}p")
+    # the fresh paragraph right after the table
+    for p in last_p[::-1]:
+        if p.getprevious() is not None and p.getprevious().tag == f"{{{_WNS}}}tbl" and len(p) == 1:
+            return Paragraph(p, document._body)  # type: ignore[attr-defined]
+    return document.add_paragraph()
 
 
 def add_table(document: "Document", table: TableModel) -> None:
     """Write the table number, title, table and notes at the end of ``document``."""
+    from docx.oxml import parse_xml
+
     if table.number is not None:
         p = document.add_paragraph()
         p.add_run(f"Table {table.number}").bold = True
     if table.title:
         p = document.add_paragraph()
         add_runs(p, StyledText(table.title.text, table.title.spans + StyledText.styled(table.title.text, "i").spans))
-    ncols = len(table.columns) + 1
-    head_rows = 2 if table.spanners else 1
-    t = document.add_table(rows=head_rows + len(table.rows), cols=ncols)
-    _no_table_borders(t)
-    last = len(t.rows) - 1
-    if table.spanners:
-        row = t.rows[0]
-        _row_flags(row, header=True)
-        for j in range(ncols):
-            _border(row.cells[j], top=_RULE)
-        for s in table.spanners:
-            first = row.cells[s.start + 1]
-            merged = first.merge(row.cells[s.end]) if s.end - s.start > 1 else first
-            _fill(merged, s.label, "center")
-            _border(merged, top=_RULE, bottom=_RULE)
-    head = t.rows[head_rows - 1]
-    _row_flags(head, header=True)
-    heads = [table.stub_head] + [c.head for c in table.columns]
-    for j, text in enumerate(heads):
-        cell = head.cells[j]
-        _fill(cell, text, "left" if j == 0 else "center")
-        spanned = any(s.start + 1 <= j <= s.end for s in table.spanners)
-        _border(cell, top=_RULE if head_rows == 1 or spanned else None, bottom=_RULE)
-    for i, model_row in enumerate(table.rows):
-        row = t.rows[head_rows + i]
-        _row_flags(row, header=False)
-        stub = StyledText("\u2003" * model_row.indent) + model_row.stub
-        _fill(row.cells[0], stub, "left")
-        for j, (cell_text, col) in enumerate(zip(model_row.cells, table.columns), 1):
-            _fill(row.cells[j], cell_text, col.align)
-        if head_rows + i == last:
-            for j in range(ncols):
-                _border(row.cells[j], bottom=_RULE)
-    if not table.rows:
-        for j in range(ncols):
-            _border(head.cells[j], bottom=_RULE)
-    for part in table.note_parts():
-        add_runs(document.add_paragraph(), part)
+    anchor = document.add_paragraph()  # the table goes before this, notes after it
+    if len(table.rows) <= _SPLICE_ABOVE:
+        anchor._p.addprevious(parse_xml(_table_xml(table)))
+    else:
+        anchor = _splice(document, anchor, _table_xml(table))
+    parts = table.note_parts()
+    if parts:
+        add_runs(anchor, parts[0])
+        for part in parts[1:]:
+            add_runs(document.add_paragraph(), part)
+    else:
+        anchor._p.getparent().remove(anchor._p)
 
 
 def results_document(
