@@ -11,6 +11,8 @@ sys.path.insert(0, str(HERE))
 import generate  # noqa: E402
 
 from statsetter import load_records, load_style, render  # noqa: E402
+from statsetter.export.docx_writer import results_document, save_document  # noqa: E402
+from statsetter.export.markers import describe, fill_chapter  # noqa: E402
 from statsetter.files import write_atomic  # noqa: E402
 
 CAUTION = (
@@ -34,9 +36,28 @@ def main() -> None:
             print(f"[{r.id}] {sentence.plain()}")
             md += [f"**{r.id}**: {sentence.markdown()}", "", f"Statistics string: {render(r, 'stats', style).markdown()}", ""]
     target = write_atomic(out_dir / "results.md", "\n".join(md) + "\n")
+    docx_path = save_document(results_document(records, styles[0], title="Results (invented data)"), out_dir / "results.docx")
+    chapter = make_chapter(out_dir / "chapter-with-markers.docx")
+    report = fill_chapter(chapter, records, out_dir / "chapter-filled.docx", styles[0])
     print(f"\n{CAUTION}")
-    print(f"Records: {path}")
-    print(f"Markdown: {target}")
+    print(f"Records:         {path}")
+    print(f"Markdown:        {target}")
+    print(f"Word results:    {docx_path}")
+    print(f"Chapter markers: {chapter}")
+    print(f"Filled chapter:  {out_dir / 'chapter-filled.docx'} ({'; '.join(describe(report))})")
+
+
+def make_chapter(path: Path) -> Path:
+    """An author's chapter (invented) with result markers of our syntax."""
+    import docx
+
+    d = docx.Document()
+    d.add_heading("Chapter 4: Results (invented data)", level=1)
+    d.add_paragraph("Drivers on rotating shifts reported more fatigue: [[fatigue_by_shift]].")
+    d.add_paragraph("[[sleep_fatigue|sentence]]")
+    d.add_paragraph("The rest-break subsample: [[rest_break_trial]].")
+    d.save(str(path))
+    return path
 
 
 if __name__ == "__main__":
