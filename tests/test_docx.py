@@ -141,3 +141,15 @@ def test_large_table_is_spliced_in_place(tmp_path):
     table_at = next(i for i, el in enumerate(body) if el.tag.endswith("}tbl"))
     assert body[table_at + 1].xpath("string(.)") == "Note. A note."
     assert "row 399" in pdf_text(path)
+
+
+def test_decimal_alignment_when_the_style_asks(tmp_path):
+    # APA 7 §7.13 (memory): numbers may be centred or aligned on the decimal point
+    house = tmp_path / "decimal.toml"
+    house.write_text('extends = "apa7"\n[tables]\nnumber_align = "decimal"\n')
+    path = save_document(results_document([], str(house), tables=[model()]), tmp_path / "dec.docx")
+    xml = zipfile.ZipFile(path).read("word/document.xml").decode()
+    assert xml.count('w:val="decimal"') == 4  # one tab stop per number cell
+    centred = save_document(results_document([], None, tables=[model()]), tmp_path / "cen.docx")
+    assert 'w:val="decimal"' not in zipfile.ZipFile(centred).read("word/document.xml").decode()
+    assert "3.50" in pdf_text(path)

@@ -73,16 +73,22 @@ def _borders(top: bool, bottom: bool) -> str:
 _JC = {"left": "left", "right": "right"}
 
 
-def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1) -> str:
+_DECIMAL_TAB = '<w:tabs><w:tab w:val="decimal" w:pos="{pos}"/></w:tabs>'
+
+
+def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1, decimal_at: int = 0) -> str:
     grid = f'<w:gridSpan w:val="{span}"/>' if span > 1 else ""
-    jc = _JC.get(align, "center")
-    return (
-        f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr>"
-        f'<w:p><w:pPr><w:jc w:val="{jc}"/></w:pPr>{_run_xml(text)}</w:p></w:tc>'
-    )
+    if align == "decimal" and decimal_at:
+        # decimal alignment: a decimal tab stop and a leading tab (APA 7 §7.13 allows either)
+        ppr = _DECIMAL_TAB.format(pos=decimal_at) + '<w:jc w:val="left"/>'
+        runs = "<w:r><w:tab/></w:r>" + _run_xml(text)
+    else:
+        ppr = f'<w:jc w:val="{_JC.get(align, "center")}"/>'
+        runs = _run_xml(text)
+    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr>{ppr}</w:pPr>{runs}</w:p></w:tc>"
 
 
-def _table_xml(table: TableModel) -> str:
+def _table_xml(table: TableModel, number_align: str = "center") -> str:
     """The whole w:tbl as one string, parsed once: fast for tables of thousands of rows."""
     ncols = len(table.columns) + 1
     head_rows = 2 if table.spanners else 1
@@ -113,14 +119,15 @@ def _table_xml(table: TableModel) -> str:
         + "</w:tr>"
     )
     body = "<w:trPr><w:cantSplit/></w:trPr>"
-    aligns = [c.align for c in table.columns]
+    aligns = ["decimal" if number_align == "decimal" and c.align in ("center", "decimal") else c.align for c in table.columns]
+    width = max((len(c.text) for row in table.rows for c in row.cells), default=4)
     last = len(table.rows) - 1
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
         cells = [_cell_xml(stub, "left", False, bottom)]
         if row.cells:
-            cells += [_cell_xml(c, a, False, bottom) for c, a in zip(row.cells, aligns)]
+            cells += [_cell_xml(c, a, False, bottom, 1, 60 * width) for c, a in zip(row.cells, aligns)]
         else:
             cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns)))
         parts.append(f"<w:tr>{body}{''.join(cells)}</w:tr>")
@@ -160,9 +167,14 @@ def _splice(document: "Document", anchor: "Paragraph", table_xml: str) -> "Parag
     return document.add_paragraph()
 
 
-def add_table(document: "Document", table: TableModel) -> None:
-    """Write the table number, title, table and notes at the end of ``document``."""
+def add_table(document: "Document", table: TableModel, style: "Style | str | None" = None) -> None:
+    """Write the table number, title, table and notes at the end of ``document``.
+    The style's ``tables.number_align`` (``center`` or ``decimal``) places the numbers."""
     from docx.oxml import parse_xml
+
+    from ..style.profile import load_style
+
+    align = load_style(style).tables.get("number_align", "center")
 
     if table.number is not None:
         p = document.add_paragraph()
@@ -172,9 +184,9 @@ def add_table(document: "Document", table: TableModel) -> None:
         add_runs(p, StyledText(table.title.text, table.title.spans + StyledText.styled(table.title.text, "i").spans))
     anchor = document.add_paragraph()  # the table goes before this, notes after it
     if len(table.rows) <= _SPLICE_ABOVE:
-        anchor._p.addprevious(parse_xml(_table_xml(table)))
+        anchor._p.addprevious(parse_xml(_table_xml(table, align)))
     else:
-        anchor = _splice(document, anchor, _table_xml(table))
+        anchor = _splice(document, anchor, _table_xml(table, align))
     parts = table.note_parts()
     if parts:
         add_runs(anchor, parts[0])
@@ -208,7 +220,7 @@ def results_document(
     for record in records:
         add_runs(document.add_paragraph(), render(record, form, resolved))
     for number, table in enumerate(tables, 1):
-        add_table(document, table.with_number(number))
+        add_table(document, table.with_number(number), resolved)
     return document
 
 
