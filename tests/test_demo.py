@@ -18,4 +18,8 @@ def test_demo_runs():
         assert (out / name).exists(), name
     filled = "\n".join(p.text for p in docx.Document(str(out / "chapter-filled.docx")).paragraphs)
     assert "[[" not in filled and re.search(r"t\(\d+\.\d+\) = \d", filled)
+    from test_docx import pdf_text
+
+    for name in ("results.docx", "chapter-with-markers.docx", "chapter-filled.docx"):
+        assert pdf_text(out / name).strip()  # LibreOffice opens every .docx the demo writes
     assert (ROOT / "demo" / "data" / "invented_driver_survey.csv").read_text().startswith("# INVENTED DATA")

@@ -102,6 +102,7 @@ def test_appending_keeps_everything(tmp_path):
     original = tmp_path / "chapter.docx"
     base.save(str(original))
     before = docx.Document(str(original))
+    assert "An author's own paragraph." in pdf_text(original)
     doc = results_document([EXAMPLES["pearson"]], base=original)
     out = save_document(doc, tmp_path / "chapter-results.docx", inputs=[original])
     after = docx.Document(str(out))
@@ -117,6 +118,7 @@ def test_refuses_to_overwrite_input(tmp_path):
     path = tmp_path / "in.docx"
     docx.Document().save(str(path))
     before = path.read_bytes()
+    assert pdf_text(path) is not None
     with pytest.raises(InputError, match="overwrite an input"):
         save_document(results_document([EXAMPLES["pearson"]], base=path), path, inputs=[path])
     assert path.read_bytes() == before
@@ -152,4 +154,5 @@ def test_decimal_alignment_when_the_style_asks(tmp_path):
     assert xml.count('w:val="decimal"') == 4  # one tab stop per number cell
     centred = save_document(results_document([], None, tables=[model()]), tmp_path / "cen.docx")
     assert 'w:val="decimal"' not in zipfile.ZipFile(centred).read("word/document.xml").decode()
+    assert "3.50" in pdf_text(centred)
     assert "3.50" in pdf_text(path)

@@ -69,6 +69,7 @@ def chapter(tmp_path):
 
 
 def test_fill_everywhere(chapter, tmp_path):
+    assert "[[corr]]" in pdf_text(chapter)  # the chapter the test wrote opens in LibreOffice
     before = chapter.read_bytes()
     out = tmp_path / "filled.docx"
     report = fill_chapter(chapter, RECORDS, out)
@@ -105,6 +106,7 @@ def test_cli_fill(chapter, tmp_path, capsys):
     assert code == 1  # an unknown marker is a finding
     assert "unknown marker [[nope]]" in captured.out and "'spare' is not used" in captured.out
     assert out.exists()
+    assert "r(98) = .32" in pdf_text(out)
 
 
 @pytest.mark.parametrize(
