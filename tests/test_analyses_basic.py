@@ -19,12 +19,7 @@ from statsetter.analyses import correlate, t_independent, t_one_sample, t_paired
 
 REL = 1e-10
 
-SLEEP = pd.DataFrame(
-    {
-        "drug1": [0.7, -1.6, -0.2, -1.2, -0.1, 3.4, 3.7, 0.8, 0.0, 2.0],
-        "drug2": [1.9, 0.8, 1.1, 0.1, -0.1, 4.4, 5.5, 1.6, 4.6, 3.4],
-    }
-)
+from open_data import SLEEP  # noqa: E402
 
 
 @pytest.fixture(scope="module")

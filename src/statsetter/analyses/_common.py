@@ -108,3 +108,17 @@ def split_by(values: "pd.Series", groups: "pd.Series") -> tuple[list[object], li
         mask = codes == order[0]
         return [uniques[k] for k in order], [y[mask], y[~mask]]
     return [uniques[k] for k in order], [y[codes == k] for k in order]
+
+
+def grouped(df: "pd.DataFrame", outcome: str, group: str, test: str, min_n: int = 2) -> tuple[list[object], list[Any], Note]:
+    """Listwise data of a numeric ``outcome`` split by ``group``: (levels,
+    samples, missing note), with at least two groups of ``min_n`` values each."""
+    data, missing = listwise(df, [outcome, group])
+    y = numeric(data, outcome)
+    levels, samples = split_by(y, data[group])
+    if len(levels) < 2:
+        raise InputError(f"{group}: {len(levels)} group(s) with data; {test} needs at least two")
+    for level, values in zip(levels, samples):
+        if len(values) < min_n:
+            raise InputError(f"{group} = {level}: n = {len(values)}; each group needs at least {min_n} values")
+    return levels, samples, missing

@@ -27,14 +27,7 @@ def anova_oneway(
 
     if variant not in ("classic", "welch"):
         raise InputError(f"variant: {variant!r} is not classic or welch")
-    data, missing = c.listwise(df, [outcome, group])
-    y = c.numeric(data, outcome)
-    levels, samples = c.split_by(y, data[group])
-    if len(levels) < 2:
-        raise InputError(f"{group}: {len(levels)} group(s) with data; an ANOVA needs at least two")
-    for lev, v in zip(levels, samples):
-        if len(v) < 2:
-            raise InputError(f"{group} = {lev}: n = {len(v)}; each group needs at least 2 values")
+    levels, samples, missing = c.grouped(df, outcome, group, "an ANOVA")
     if all(v.var(ddof=1) == 0 for v in samples):
         raise InputError(f"{outcome}: zero variance within every group; F is undefined")
     res = stats.f_oneway(*samples, equal_var=variant == "classic")

@@ -36,14 +36,7 @@ def posthoc(
 
     if procedure not in _NAMES:
         raise InputError(f"procedure: {procedure!r} is not one of {', '.join(_NAMES)}")
-    data, missing = c.listwise(df, [outcome, group])
-    y = c.numeric(data, outcome)
-    levels, samples = c.split_by(y, data[group])
-    if len(levels) < 2:
-        raise InputError(f"{group}: {len(levels)} group(s) with data; comparisons need at least two")
-    for lev, v in zip(levels, samples):
-        if len(v) < 2:
-            raise InputError(f"{group} = {lev}: n = {len(v)}; each group needs at least 2 values")
+    levels, samples, missing = c.grouped(df, outcome, group, "a comparison")
     k = len(samples)
     pairs = list(combinations(range(k), 2))
     rows: list[tuple[int, int, float, float, float, float]] = []  # i, j, diff, p, low, high

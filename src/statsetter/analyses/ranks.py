@@ -142,11 +142,7 @@ def kruskal_wallis(
     ε² = H(n + 1)/(n² − 1) (Tomczak & Tomczak, 2014)."""
     from scipy import stats
 
-    data, missing = c.listwise(df, [outcome, group])
-    y = c.numeric(data, outcome)
-    levels, samples = c.split_by(y, data[group])
-    if len(levels) < 2:
-        raise InputError(f"{group}: {len(levels)} group(s) with data; a Kruskal–Wallis test needs at least two")
+    levels, samples, missing = c.grouped(df, outcome, group, "a Kruskal–Wallis test", min_n=1)
     res = stats.kruskal(*samples)
     n = sum(len(v) for v in samples)
     h = float(res.statistic)
