@@ -60,6 +60,7 @@ def chapter(tmp_path):
     p.add_run("diff|sentence]] as expected; see [[corr]].")
     d.add_paragraph("Unknown [[nope]] stays.")
     d.add_table(rows=1, cols=1).cell(0, 0).text = "[[corr]]"
+    d.add_paragraph("Table 2 shows it: [[score_diff|table]]")
     d.sections[0].header.paragraphs[0].text = "Header [[corr]]"
     d.sections[0].footer.paragraphs[0].text = "Footer [[corr|stats]]"
     path = tmp_path / "chapter.docx"
@@ -74,7 +75,7 @@ def test_fill_everywhere(chapter, tmp_path):
     out = tmp_path / "filled.docx"
     report = fill_chapter(chapter, RECORDS, out)
     assert chapter.read_bytes() == before  # the input is never modified
-    assert len(report.filled) == 6
+    assert len(report.filled) == 7
     assert report.unknown == [("[[nope]]", "body paragraph 2")]
     assert report.unused == ["spare"]
     d = docx.Document(str(out))
@@ -84,6 +85,10 @@ def test_fill_everywhere(chapter, tmp_path):
     assert first.runs[0].text == "Scores differed " and not first.runs[0].bold  # surrounding formatting kept
     assert [r.text for r in first.runs if r.italic][:3] == ["M", "SD", "n"]
     assert d.tables[0].cell(0, 0).text == "r(98) = .32, 95% CI [.13, .49], p = .001"
+    # [[id|table]]: a results table after the paragraph, the marker text gone
+    assert d.paragraphs[2].text == "Table 2 shows it: "
+    t = d.tables[1]
+    assert [c.text for c in t.rows[1].cells] == ["score_diff", "t(38) = 2.14", "p = .039", "d = 0.68", "[0.04, 1.31]"]
     assert "r(98) = .32" in d.sections[0].header.paragraphs[0].text
     assert "r(98) = .32" in d.sections[0].footer.paragraphs[0].text
     footnotes = zipfile.ZipFile(out).read("word/footnotes.xml").decode()

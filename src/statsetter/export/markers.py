@@ -1,7 +1,8 @@
 """Result markers in an author's own chapter, filled from records.
 
-A marker is ``[[id]]`` (the statistics string) or ``[[id|sentence]]`` /
-``[[id|stats]]``, where ``id`` is a record's ``id``. Markers are found in body
+A marker is ``[[id]]`` (the statistics string), ``[[id|sentence]]``,
+``[[id|stats]]`` or ``[[id|table]]`` (a results table placed after the
+paragraph), where ``id`` is a record's ``id``. Markers are found in body
 paragraphs, table cells, headers, footers and footnotes, also when Word has
 split them across runs; the text around a marker keeps its formatting, and the
 inserted runs take the formatting of the run the marker starts in.
@@ -24,7 +25,7 @@ if TYPE_CHECKING:
 
 __all__ = ["MARKER", "FillReport", "fill_chapter"]
 
-MARKER = re.compile(r"\[\[\s*([A-Za-z0-9_.\-]+)\s*(?:\|\s*(stats|sentence)\s*)?\]\]")
+MARKER = re.compile(r"\[\[\s*([A-Za-z0-9_.\-]+)\s*(?:\|\s*(stats|sentence|table)\s*)?\]\]")
 _W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
 
 
@@ -117,6 +118,18 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
     matches = list(MARKER.finditer(full))
     for m in reversed(matches):
         key, form = m.group(1), m.group(2) or "stats"
+        if form == "table":
+            table_xml = lookup(key, form)
+            if table_xml is None:
+                report.unknown.append((m.group(0), where))
+                continue
+            used.add(key)
+            report.filled.append((key, where))
+            _remove_span(runs, texts, m.start(), m.end())
+            from docx.oxml import parse_xml
+
+            paragraph.addnext(parse_xml(table_xml))
+            continue
         text = lookup(key, form)
         if text is None:
             report.unknown.append((m.group(0), where))
@@ -161,6 +174,18 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
             texts[first + 1 : first + 1] = [seg for seg, _ in text.segments()]
 
 
+def _remove_span(runs, texts, start: int, end: int) -> None:  # type: ignore[no-untyped-def]
+    pos = 0
+    for i, t in enumerate(texts):
+        a, b = pos, pos + len(t)
+        pos = b
+        if b <= start or a >= end:
+            continue
+        keep = t[: max(0, start - a)] + t[max(0, end - a):]
+        _set_text(runs[i], keep)
+        texts[i] = keep
+
+
 def fill_chapter(
     chapter: "str | Path",
     records: Sequence["Result"],
@@ -187,11 +212,17 @@ def fill_chapter(
         by_id[r.id] = r
     cache: dict[tuple[str, str], StyledText] = {}
 
-    def lookup(key: str, form: str) -> StyledText | None:
+    def lookup(key: str, form: str):  # type: ignore[no-untyped-def]
         if key not in by_id:
             return None
         if (key, form) not in cache:
-            cache[(key, form)] = render(by_id[key], form, resolved)
+            if form == "table":
+                from ..rendering.record_tables import results_table
+                from .docx_writer import _table_xml
+
+                cache[(key, form)] = _table_xml(results_table([by_id[key]], resolved), resolved.tables.get("number_align", "center"))
+            else:
+                cache[(key, form)] = render(by_id[key], form, resolved)
         return cache[(key, form)]
 
     document = open_docx(chapter)
