@@ -39,6 +39,7 @@ def written(tmp_path):
     records = [EXAMPLES["t_independent"], EXAMPLES["chi2_independence"]]
     doc = results_document(records, title="Results", tables=[model()])
     path = save_document(doc, tmp_path / "results.docx")
+    assert "Table 1" in pdf_text(path)  # every .docx a test writes goes through LibreOffice
     return path, records
 
 
@@ -81,7 +82,8 @@ def test_table_number_title_and_note(written):
     texts = [p.text for p in doc.paragraphs]
     i = texts.index("Table 1")
     assert doc.paragraphs[i].runs[0].bold
-    assert texts[i + 1] == "Scores by group" and all(r.italic for r in doc.paragraphs[i + 1].runs)
+    # APA 7 §7.7: italic title case (minor words of three letters or fewer lowercase, §6.17)
+    assert texts[i + 1] == "Scores by Group" and all(r.italic for r in doc.paragraphs[i + 1].runs)
     note = doc.paragraphs[i + 2]
     assert note.runs[0].text == "Note." and note.runs[0].italic
 
@@ -89,7 +91,7 @@ def test_table_number_title_and_note(written):
 def test_libreoffice_renders_the_numbers(written):
     path, _ = written
     text = pdf_text(path)
-    for needed in ("t(38) = 2.14", "p = .039", "95% CI [0.04, 1.31]", "N = 200) = 9.87", "Table 1", "Scores by group", "4.10"):
+    for needed in ("t(38) = 2.14", "p = .039", "95% CI [0.04, 1.31]", "N = 200) = 9.87", "Table 1", "Scores by Group", "4.10"):
         assert needed in text.replace("\n", " "), needed
 
 

@@ -22,7 +22,7 @@ def model():
 
 def test_markdown():
     md = write_table(model(), "md")
-    assert md.startswith("**Table 1**\n\n*Scores by group*\n")
+    assert md.startswith("**Table 1**\n\n*Scores by Group*\n")
     assert "| Variable | Group A: *M* | Group A: *SD* | Group B: *M* | Group B: *SD* |" in md
     assert "*Note.* *M* = mean; *SD* = standard deviation. ^a^ One case excluded." in md
 
@@ -49,3 +49,11 @@ def test_bad_tables():
         TableModel(title=StyledText("x"), columns=(Column(styled("a")),), rows=(Row(styled("r"), ()),))
     with pytest.raises(InputError, match="spanner"):
         TableModel(title=StyledText("x"), columns=(Column(styled("a")),), rows=(), spanners=(Spanner(styled("s"), 0, 3),))
+
+
+def test_title_case():
+    from statsetter.rendering.tables import title_case
+
+    # APA 7 §6.17 (memory): minor words of three letters or fewer stay lowercase unless first
+    assert title_case(StyledText("means of fatigue by shift and sleep")).text == "Means of Fatigue by Shift and Sleep"
+    assert title_case(StyledText("the pH of water")).text == "The pH of Water"  # mixed case kept

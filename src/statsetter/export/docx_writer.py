@@ -14,7 +14,7 @@ from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
 from ..rendering.styled import StyledText
-from ..rendering.tables import TableModel
+from ..rendering.tables import TableModel, title_case
 
 if TYPE_CHECKING:
     from docx.document import Document
@@ -181,7 +181,8 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
         p.add_run(f"Table {table.number}").bold = True
     if table.title:
         p = document.add_paragraph()
-        add_runs(p, StyledText(table.title.text, table.title.spans + StyledText.styled(table.title.text, "i").spans))
+        title = title_case(table.title)
+        add_runs(p, StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans))
     anchor = document.add_paragraph()  # the table goes before this, notes after it
     if len(table.rows) <= _SPLICE_ABOVE:
         anchor._p.addprevious(parse_xml(_table_xml(table, align)))

@@ -12,7 +12,7 @@ import csv
 import io
 
 from ..rendering.styled import StyledText
-from ..rendering.tables import TableModel
+from ..rendering.tables import TableModel, title_case
 
 __all__ = ["table_markdown", "table_html", "table_latex", "table_csv", "table_text", "write_table"]
 
@@ -22,7 +22,7 @@ def table_markdown(t: TableModel) -> str:
     if t.number is not None:
         out += [f"**Table {t.number}**", ""]
     if t.title:
-        out += [_italic(t.title).markdown(), ""]
+        out += [_italic(title_case(t.title)).markdown(), ""]
     heads = [t.stub_head.markdown()] + [h.markdown() for h in t.heads_with_spanners()]
     out.append("| " + " | ".join(_md_cell(h) for h in heads) + " |")
     aligns = [":---"] + [":---:" if c.align in ("center", "decimal") else ("---:" if c.align == "right" else ":---") for c in t.columns]
@@ -51,7 +51,7 @@ def table_html(t: TableModel) -> str:
     if t.number is not None:
         out.append(f"<p><b>Table {t.number}</b></p>")
     if t.title:
-        out.append(f"<p><i>{t.title.html()}</i></p>")
+        out.append(f"<p><i>{title_case(t.title).html()}</i></p>")
     out.append('<table style="border-collapse:collapse;border-top:1px solid black;border-bottom:1px solid black">')
     out.append("<thead>")
     ncol = len(t.columns)
@@ -97,7 +97,7 @@ def table_latex(t: TableModel) -> str:
     if t.number is not None:
         out.append(f"\\textbf{{Table {t.number}}}\\par")
     if t.title:
-        out.append(f"\\textit{{{t.title.latex()}}}\\par\\medskip")
+        out.append(f"\\textit{{{title_case(t.title).latex()}}}\\par\\medskip")
     out.append(f"\\begin{{tabular}}{{{spec}}}")
     out.append("\\toprule")
     if t.spanners:

@@ -15,7 +15,22 @@ from typing import Literal
 from ..errors import InputError
 from .styled import StyledText
 
-__all__ = ["Column", "Spanner", "Row", "TableModel", "styled"]
+__all__ = ["Column", "Spanner", "Row", "TableModel", "styled", "title_case"]
+
+# APA 7 §6.17 (memory): in title case, words of three letters or fewer stay
+# lowercase when they are conjunctions, articles or prepositions, unless first.
+_MINOR = frozenset("a an and as at but by for if in nor of off on or per so the to up via vs yet".split())
+
+
+def title_case(text: StyledText) -> StyledText:
+    """The title in title case, spans kept (only letter case changes)."""
+    out = []
+    for i, word in enumerate(text.text.split(" ")):
+        if word and (i == 0 or word.lower() not in _MINOR) and not any(ch.isupper() for ch in word[1:]):
+            word = word[:1].upper() + word[1:]
+        out.append(word)
+    cased = " ".join(out)
+    return StyledText(cased, text.spans) if len(cased) == len(text.text) else text
 
 Align = Literal["left", "center", "right", "decimal"]
 
