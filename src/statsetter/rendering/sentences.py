@@ -82,7 +82,7 @@ class Helpers:
     def globals(self) -> dict[str, Callable[..., Any]]:
         names = (
             "sym stat pv eff ci_of ci_after value est desc cat join count pct number df sided var "
-            "cap verdict significant has_ci held_note direction_word"
+            "cap verdict significant direction_word"
         ).split()
         out = {name: getattr(self, name) for name in names}
         out["lsep"] = self._join
@@ -165,9 +165,6 @@ class Helpers:
         if interval is None:
             return _EMPTY
         return Markup(self._ci_attach + self._ci(r, interval, quantity, null, path))
-
-    def has_ci(self, item: Any) -> bool:
-        return item is not None and getattr(item, "ci", None) is not None
 
     def eff(self, r: Result, name: str | None = None, with_ci: bool = True) -> Markup:
         """``d = 0.68, 95% CI [0.04, 1.31]`` for the record's effect size (by name)."""
@@ -262,9 +259,6 @@ class Helpers:
         if value is None:
             return same
         return up if value > 0 else down if value < 0 else same
-
-    def held_note(self, r: Result) -> bool:
-        return bool(r.precision)
 
 
 _RANK_SUMS = frozenset({"U", "T", "W"})

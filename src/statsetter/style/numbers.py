@@ -16,7 +16,6 @@ Everything returns plain strings; symbols and italics are the templates' job.
 
 from __future__ import annotations
 
-import math
 from decimal import ROUND_HALF_UP, Context, Decimal
 from functools import lru_cache
 from typing import Literal
@@ -205,6 +204,3 @@ def numbers_for(style: Style) -> Numbers:
     """The (cached) number engine for a style."""
     return Numbers(style)
 
-
-def is_finite(value: float | None) -> bool:
-    return value is not None and math.isfinite(value)
