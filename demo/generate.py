@@ -12,7 +12,6 @@ with numpy and scipy, so the demo shows real rendering of real (invented) data.
 from __future__ import annotations
 
 import csv
-import json
 import math
 from pathlib import Path
 

@@ -9,7 +9,6 @@ Independent computations: direct scipy.stats calls and published formulas.
 import math
 
 import numpy as np
-import pandas as pd
 import pingouin as pg
 import pytest
 from scipy import special, stats

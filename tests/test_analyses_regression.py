@@ -7,11 +7,9 @@ scipy.stats.f for the F change, and Nagelkerke's (1991) R² formula.
 
 import math
 
-import numpy as np
 import pingouin as pg
 import pytest
 import statsmodels.formula.api as smf
-from scipy import stats
 
 from statsetter import InputError, render
 from statsetter.analyses import hierarchical_steps, linear_regression, logistic_regression

@@ -6,7 +6,6 @@ scipy.stats.fisher_exact / contingency.odds_ratio, and the published
 definitions of V's noncentral chi-square interval (Smithson, 2003).
 """
 
-import math
 import warnings
 
 import pingouin as pg

@@ -219,22 +219,11 @@ def _cmd_format(ns: argparse.Namespace) -> int:
 
 
 def _cmd_render(ns: argparse.Namespace) -> int:
-    from .records import load_records
     from .rendering.sentences import render
     from .style import load_style
 
     style = load_style(ns.style)
-    lines = []
-    for name in ns.files:
-        path = Path(name)
-        try:
-            text = path.read_text(encoding="utf-8")
-        except FileNotFoundError:
-            raise InputError(f"{name}: no such file") from None
-        except (OSError, UnicodeDecodeError) as exc:
-            raise InputError(f"{name}: cannot read ({exc})") from None
-        for record in load_records(text, source=name):
-            lines.append(render(record, ns.form, style).to(ns.to))
+    lines = [render(record, ns.form, style).to(ns.to) for record in _read_records(ns.files)]
     sep = "\n\n" if ns.to in ("md", "tex") else "\n"
     _emit(sep.join(lines), ns.out, inputs=ns.files)
     return 0

@@ -57,11 +57,15 @@ def variables(roles: Mapping[str, str], labels: Mapping[str, str] | None) -> tup
     return tuple(Variable(name, labels.get(name, name), role) for role, name in roles.items())
 
 
-def provenance(source: str) -> Provenance:
+def provenance(source: str, *, statsmodels: bool = False) -> Provenance:
     import numpy
     import scipy
 
     versions = {"numpy": numpy.__version__, "scipy": scipy.__version__}
+    if statsmodels:
+        import statsmodels as sm
+
+        versions["statsmodels"] = sm.__version__
     try:
         import pandas
 
@@ -72,6 +76,13 @@ def provenance(source: str) -> Provenance:
 
     versions["statsetter"] = __version__
     return Provenance(source, versions)
+
+
+def paired_variables(first: str, second: str, labels: Mapping[str, str], outcome_label: str | None) -> tuple[Variable, ...]:
+    """The two measurements of a paired design, led by the outcome when it is named."""
+    found = variables({"first": first, "second": second}, labels)
+    outcome = outcome_label or labels.get("outcome")
+    return ((Variable(outcome, outcome, "outcome"),) + found) if outcome else found
 
 
 def notes(*items: Note | None) -> tuple[Note, ...]:
@@ -85,7 +96,6 @@ def fmt(x: Any) -> str:
 def split_by(values: "pd.Series", groups: "pd.Series") -> tuple[list[object], list[Any]]:
     """(levels in sorted order, the values of each level as numpy arrays),
     encoding the group column once (Arrow strings are dictionary-encoded)."""
-    import numpy as np
     import pandas as pd
 
     array = groups.array

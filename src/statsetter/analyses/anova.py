@@ -46,10 +46,8 @@ def anova_oneway(
         # Welch (1951): the denominator df, recomputed from the group variances
         w = [len(v) / v.var(ddof=1) for v in samples]
         sw = sum(w)
-        mw = sum(wi * v.mean() for wi, v in zip(w, samples)) / sw
         lam = sum((1 - wi / sw) ** 2 / (len(v) - 1) for wi, v in zip(w, samples))
         dfs = (k - 1, (k * k - 1) / (3 * lam))
-        del mw
     return Result(
         kind="anova_oneway",
         statistic=Statistic("F", float(res.statistic), dfs),

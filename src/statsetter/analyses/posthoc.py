@@ -103,7 +103,6 @@ def factorial_anova(
     """Two-way between-subjects ANOVA with the interaction; one record per
     term with F, p and partial η² = SS / (SS + SS_residual). Type II or III
     sums of squares (Type III with sum-to-zero contrasts), stated."""
-    import statsmodels
     import statsmodels.formula.api as smf
     from statsmodels.stats.anova import anova_lm
 
@@ -138,7 +137,7 @@ def factorial_anova(
                 variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"), Variable(a, la, "factor"), Variable(b, lb, "factor")),
                 notes=c.notes(Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else ".")), missing),
                 details={"term": label, "interaction": interaction, "ss_type": ss_type},
-                provenance=type(c.provenance("x"))("statsetter.analyses.factorial_anova", {**c.provenance("x").versions, "statsmodels": statsmodels.__version__}),
+                provenance=c.provenance("statsetter.analyses.factorial_anova", statsmodels=True),
             )
         )
     return out

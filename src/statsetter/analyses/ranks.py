@@ -106,12 +106,7 @@ def wilcoxon_signed_rank(
         method = "exact" if len(nz) <= 50 and not ties else "asymptotic"
     res = stats.wilcoxon(a, b, alternative=alternative, method="approx" if method == "asymptotic" else "exact")
     labels = dict(labels or {})
-    variables = c.variables({"first": first, "second": second}, labels)
-    outcome = outcome_label or labels.get("outcome")
-    if outcome:
-        from ..records import Variable
-
-        variables = (Variable(outcome, outcome, "outcome"),) + variables
+    variables = c.paired_variables(first, second, labels, outcome_label)
     dropped = len(d) - len(nz)
     return Result(
         kind="wilcoxon",

@@ -87,10 +87,7 @@ def linear_regression(
     fit = sm.OLS(y.to_numpy(), X).fit()
     ci = fit.conf_int(1 - level)
     sd_y = float(y.std(ddof=1))
-    prov = c.provenance("statsetter.analyses.linear_regression")
-    import statsmodels
-
-    prov = type(prov)(prov.source, {**prov.versions, "statsmodels": statsmodels.__version__})
+    prov = c.provenance("statsetter.analyses.linear_regression", statsmodels=True)
     labels = labels or {}
     model = Result(
         kind="linear_model",
@@ -167,7 +164,7 @@ def hierarchical_steps(
                     variables=(Variable(outcome, (labels or {}).get(outcome, outcome), "outcome"),),
                     notes=c.notes(missing),
                     details={"step": i, "added": _labels(step, labels)},
-                    provenance=c.provenance("statsetter.analyses.hierarchical_steps"),
+                    provenance=c.provenance("statsetter.analyses.hierarchical_steps", statsmodels=True),
                 )
             )
         previous = fit
@@ -216,7 +213,7 @@ def logistic_regression(
     nagelkerke = cox_snell / (1 - math.exp((2 / n) * ll0))
     ci = fit.conf_int(1 - level)
     labels = labels or {}
-    prov = c.provenance("statsetter.analyses.logistic_regression")
+    prov = c.provenance("statsetter.analyses.logistic_regression", statsmodels=True)
     out = [
         Result(
             kind="logistic_model",

@@ -128,12 +128,7 @@ def t_paired(
 
         es = EffectSize("d_av", float(diff.mean() / ((a.std(ddof=1) + b.std(ddof=1)) / 2)), method="mean difference / mean SD; no interval computed")
     labels = dict(labels or {})
-    outcome = outcome_label or labels.get("outcome")
-    from ..records import Variable
-
-    variables = c.variables({"first": first, "second": second}, labels)
-    if outcome:
-        variables = (Variable(outcome, outcome, "outcome"),) + variables
+    variables = c.paired_variables(first, second, labels, outcome_label)
     return Result(
         kind="t_paired",
         statistic=Statistic("t", float(res.statistic), (float(res.df),)),

@@ -146,32 +146,23 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
         head = texts[first][: m.start() - starts[first]]
         tail = texts[last][m.end() - starts[last] :]
         template = runs[first]
-        new_runs = _styled_runs(template, text)
         if first == last:
             after = copy.deepcopy(template)
-            _set_text(template, head)
             _set_text(after, tail)
-            anchor = template
-            for r in new_runs:
-                anchor.addnext(r)
-                anchor = r
-            anchor.addnext(after)
-            runs[first + 1 : first + 1] = new_runs + [after]
-            texts[first : first + 1] = [head] + [seg for seg, _ in text.segments()] + [tail]
+            template.addnext(after)
         else:
-            _set_text(template, head)
             for i in range(first + 1, last):
                 _set_text(runs[i], "")
-                texts[i] = ""
             _set_text(runs[last], tail)
-            anchor = template
-            for r in new_runs:
-                anchor.addnext(r)
-                anchor = r
-            texts[last] = tail
-            texts[first] = head
-            runs[first + 1 : first + 1] = new_runs
-            texts[first + 1 : first + 1] = [seg for seg, _ in text.segments()]
+        _set_text(template, head)
+        texts[first] = head
+        anchor = template
+        for r in _styled_runs(template, text):
+            anchor.addnext(r)
+            anchor = r
+        # markers are replaced from the last to the first: an earlier marker
+        # touches only runs up to ``first``, whose text (now ``head``) is kept
+        # current, so its offsets stay valid
 
 
 def _remove_span(runs, texts, start: int, end: int) -> None:  # type: ignore[no-untyped-def]
