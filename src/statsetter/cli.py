@@ -1,7 +1,9 @@
 """The ``statsetter`` command.
 
 Commands: ``format`` (one result from numbers on the command line),
-``render`` (JSON files of records), ``styles`` (list, show, check). Every
+``render`` (JSON files of records), ``fill`` (markers in a chapter),
+``describe`` (a descriptives table from a data file), ``styles`` (list,
+show, check). Every
 error from user input prints one or two lines and exits with status 2.
 """
 
@@ -105,6 +107,32 @@ def _build_parser() -> argparse.ArgumentParser:
     fl.add_argument("--records", required=True, action="append", metavar="FILE", help="JSON file of records (repeatable)")
     fl.add_argument("--out", required=True, metavar="FILE.docx", help="the filled copy")
     fl.add_argument("--style", default=None, help="a built-in style name or a TOML file")
+
+    d = sub.add_parser(
+        "describe",
+        help="a descriptives table (Table 1) by level of measurement",
+        description="Describe the variables of a data file by level of measurement, overall or by group. "
+        "Reads .csv, .tsv, .txt, .xlsx, .sav, .zsav, .dta and .parquet. The level of every variable and "
+        "where it came from is printed to standard error.",
+    )
+    d.add_argument("data", metavar="DATA")
+    d.add_argument("--by", metavar="GROUP", help="one column per level of GROUP, plus Total")
+    d.add_argument("--vars", metavar="A,B,...", help="the variables, in table order (default: every column)")
+    d.add_argument("--level", action="append", default=[], metavar="VAR=LEVEL", help="declare a level: nominal, ordinal, interval, ratio")
+    d.add_argument("--label", action="append", default=[], metavar="VAR=TEXT", help="the variable's name in the table")
+    d.add_argument("--show", action="append", default=[], metavar="LEVEL=ITEM,...", help="e.g. continuous=mean_sd,median_iqr,range,skew or ordinal=median_iqr,counts")
+    d.add_argument("--weights", metavar="VAR", help="survey weights")
+    d.add_argument("--tests", action="store_true", help="add a p per row from a test chosen by level (named in the note)")
+    d.add_argument("--smd", action="store_true", help="add the standardised difference (two groups)")
+    d.add_argument("--suppress-below", type=int, metavar="K", help="hide counts from 1 to K-1 (off by default)")
+    d.add_argument("--percent-of", choices=("valid", "all"), default="valid", help="percentages of cases with a value (default) or of all")
+    d.add_argument("--missing", metavar="CODE,...", help="values meaning missing in every column, e.g. -99,-98")
+    d.add_argument("--sheet", help="Excel sheet name (default: the first)")
+    d.add_argument("--encoding", default="utf-8", help="text encoding of a CSV file (utf-8)")
+    d.add_argument("--title", help="table title")
+    d.add_argument("--number", type=int, default=1, help="table number (1)")
+    d.add_argument("--style", default=None, help="a built-in style name or a TOML file")
+    d.add_argument("--out", metavar="FILE", help="its extension picks the format: .md .html .tex .csv .txt .docx (default: text to standard output)")
 
     s = sub.add_parser("styles", help="list, show or check style profiles")
     s.add_argument("action", nargs="?", choices=("list", "show", "check"), default="list")
@@ -257,6 +285,81 @@ def _cmd_fill(ns: argparse.Namespace) -> int:
     return 1 if report.unknown else 0
 
 
+_TABLE_FORMATS = {".md": "md", ".html": "html", ".htm": "html", ".tex": "tex", ".csv": "csv", ".txt": "text", ".docx": "docx"}
+
+
+def _pairs(items: Sequence[str], option: str) -> dict[str, str]:
+    out = {}
+    for item in items:
+        key, eq, value = item.partition("=")
+        if not eq or not key.strip() or not value.strip():
+            raise InputError(f"{option}: expected NAME=VALUE, got {item!r}")
+        out[key.strip()] = value.strip()
+    return out
+
+
+def _codes(text: str | None) -> list[object]:
+    if not text:
+        return []
+    out: list[object] = []
+    for part in text.split(","):
+        part = part.strip()
+        try:
+            out.append(float(part) if "." in part or "e" in part.lower() else int(part))
+        except ValueError:
+            out.append(part)
+    return out
+
+
+def _cmd_describe(ns: argparse.Namespace) -> int:
+    from .analyses.descriptives import describe
+    from .io import read_data
+    from .style import load_style
+
+    fmt = "text"
+    if ns.out:
+        fmt = _TABLE_FORMATS.get(Path(ns.out).suffix.lower(), "")
+        if not fmt:
+            raise InputError(f"--out: {ns.out}: unknown extension; use one of {', '.join(_TABLE_FORMATS)}")
+    style = load_style(ns.style)
+    data = read_data(ns.data, sheet=ns.sheet, missing=_codes(ns.missing), encoding=ns.encoding)
+    show = {k: [i.strip() for i in v.split(",")] for k, v in _pairs(ns.show, "--show").items()}
+    labels = {**data.labels, **_pairs(ns.label, "--label")}
+    result = describe(
+        data.frame,
+        [v.strip() for v in ns.vars.split(",")] if ns.vars else None,
+        by=ns.by,
+        levels=_pairs(ns.level, "--level"),
+        metadata_levels=data.levels,
+        value_labels=data.value_labels,
+        labels=labels,
+        show=show,
+        weights=ns.weights,
+        tests=ns.tests,
+        smd=ns.smd,
+        suppress_below=ns.suppress_below,
+        percent_of=ns.percent_of,
+    )
+    for level in result.levels:
+        sys.stderr.write(("warning: " if level.weak else "level: ") + level.describe() + "\n")
+    table = result.table(style, number=ns.number, title=ns.title)
+    if fmt == "docx":
+        import docx
+
+        from .export.docx_writer import add_table, save_document
+
+        document = docx.Document()
+        add_table(document, table, style)
+        save_document(document, ns.out, inputs=[ns.data])
+    else:
+        from .export.text_tables import write_table
+
+        _emit(write_table(table, fmt), ns.out, inputs=[ns.data])
+    if ns.out:
+        print(f"wrote {ns.out}")
+    return 0
+
+
 def _cmd_styles(ns: argparse.Namespace) -> int:
     from .style import builtin_styles, check_style_file, load_style
 
@@ -307,7 +410,7 @@ def main(argv: Sequence[str] | None = None) -> int:
     if ns.command is None:
         parser.print_help()
         return 0
-    handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "styles": _cmd_styles}
+    handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "describe": _cmd_describe, "styles": _cmd_styles}
     try:
         return handlers[ns.command](ns)
     except StatsetterError as exc:

@@ -6,33 +6,18 @@ from dataclasses import replace
 from typing import TYPE_CHECKING, Mapping
 
 from ..errors import InputError
+from ..levels import check_level, infer_level
 from ..records import Note, Result
 
 if TYPE_CHECKING:
     import pandas as pd
 
-LEVELS = ("nominal", "ordinal", "interval", "ratio")
-
-
 def level_of(series: "pd.Series", declared: str | None = None) -> tuple[str, str]:
     """(level, reason): the declared level, a pandas categorical's, or an inference."""
-    import pandas as pd
-
     if declared is not None:
-        if declared not in LEVELS:
-            raise InputError(f"{series.name}: level {declared!r} is not one of {', '.join(LEVELS)}")
-        return declared, "declared"
-    if isinstance(series.dtype, pd.CategoricalDtype):
-        return ("ordinal", "ordered categorical") if series.dtype.ordered else ("nominal", "unordered categorical")
-    if not pd.api.types.is_numeric_dtype(series) or pd.api.types.is_bool_dtype(series):
-        return "nominal", f"non-numeric ({series.dtype})"
-    values = series.dropna()
-    distinct = values.nunique()
-    if distinct <= 2:
-        return "nominal", f"{distinct} distinct values"
-    if (values == values.round()).all() and distinct <= 7:
-        return "ordinal", f"integer, {distinct} distinct values {values.min():g}–{values.max():g} (a weak guess: declare it)"
-    return "interval", "numeric with many values"
+        return check_level(str(series.name), declared), "declared"
+    found = infer_level(series)
+    return found.level, found.reason + (" (a weak guess: declare it)" if found.weak else "")
 
 
 def analyse(

@@ -1,0 +1,526 @@
+"""Descriptive statistics by level of measurement, overall and by group ("Table 1").
+
+The numbers are computed here, exact and unrounded, with one pass of
+``numpy.bincount`` per statistic over integer group codes; the table layout
+lives in ``rendering/descriptive_tables.py``. Columns are the groups in order,
+then Total (the only column when there is no grouping variable).
+
+* nominal: n per category (value-label, categorical or sorted order) and the
+  missing count; percentages of the cases with a value, or of all cases;
+* ordinal: median and quartiles (linear interpolation between order
+  statistics, numpy's and pandas' default), optionally n per level;
+* interval and ratio: mean and SD (n − 1), optionally median and quartiles,
+  minimum and maximum, skewness (adjusted Fisher–Pearson G1, as pandas).
+
+With survey weights, counts are sums of weights, means are weighted, SDs use
+Σw − 1 in the denominator (frequency weights, as statsmodels' DescrStatsW with
+ddof = 1) and quantiles are the weighted inverted CDF (numpy's
+``quantile(..., weights=, method="inverted_cdf")``).
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from typing import TYPE_CHECKING, Any, Literal, Mapping, Sequence
+
+from ..errors import InputError
+from ..levels import LevelReport, resolve_levels
+from ..records import Result
+from . import _common as c
+
+if TYPE_CHECKING:
+    import numpy as np
+    import pandas as pd
+
+    from ..rendering.tables import TableModel
+    from ..style.profile import Style
+
+# What each level can show; the first entries are the defaults.
+CONTENTS: dict[str, tuple[str, ...]] = {
+    "nominal": ("counts",),
+    "ordinal": ("median_iqr", "counts"),
+    "continuous": ("mean_sd", "median_iqr", "range", "skew"),
+}
+DEFAULT_SHOW: dict[str, tuple[str, ...]] = {"nominal": ("counts",), "ordinal": ("median_iqr",), "continuous": ("mean_sd",)}
+_SMALL_RANGE = 1_000  # integer-valued data spanning at most this many values are counted, not sorted
+
+
+@dataclass(frozen=True, eq=False)
+class VariableSummary:
+    """One variable's numbers, one entry per column (groups, then Total)."""
+
+    name: str
+    label: str
+    level: LevelReport
+    show: tuple[str, ...]
+    n: "np.ndarray"
+    missing: "np.ndarray"
+    categories: tuple[str, ...] = ()
+    counts: "np.ndarray | None" = None  # columns × categories
+    mean: "np.ndarray | None" = None
+    sd: "np.ndarray | None" = None
+    median: "np.ndarray | None" = None
+    q1: "np.ndarray | None" = None
+    q3: "np.ndarray | None" = None
+    minimum: "np.ndarray | None" = None
+    maximum: "np.ndarray | None" = None
+    skew: "np.ndarray | None" = None
+    positions: bool = False  # quartiles are positions of ordered categories
+    alpha: float | None = None
+    test: Result | None = None
+    test_name: str | None = None
+    smd: float | None = None
+
+    @property
+    def kind(self) -> str:
+        return "continuous" if self.level.level in ("interval", "ratio") else self.level.level
+
+
+@dataclass(frozen=True, eq=False)
+class Description:
+    """The numbers of a descriptives table; ``table()`` lays them out in a style."""
+
+    variables: tuple[VariableSummary, ...]
+    columns: tuple[str, ...]
+    column_n: "np.ndarray"
+    by: str | None = None
+    by_label: str | None = None
+    weights: str | None = None
+    percent_of: Literal["valid", "all"] = "valid"
+    suppress_below: int | None = None
+    dropped_no_group: int = 0
+    notes: tuple[str, ...] = field(default=())
+
+    @property
+    def levels(self) -> list[LevelReport]:
+        return [v.level for v in self.variables]
+
+    def report(self) -> list[str]:
+        """One line per variable: its level, where the level came from and why."""
+        return [v.level.describe() for v in self.variables]
+
+    def table(self, style: "Style | str | None" = None, *, number: int | None = None, title: str | None = None) -> "TableModel":
+        from ..rendering.descriptive_tables import descriptive_table
+
+        return descriptive_table(self, style, number=number, title=title)
+
+
+def describe(
+    df: "pd.DataFrame",
+    variables: Sequence[str] | None = None,
+    *,
+    by: str | None = None,
+    levels: Mapping[str, str] | None = None,
+    metadata_levels: Mapping[str, str] | None = None,
+    value_labels: Mapping[str, Mapping[Any, str]] | None = None,
+    labels: Mapping[str, str] | None = None,
+    show: Mapping[str, Sequence[str]] | None = None,
+    weights: str | None = None,
+    tests: bool = False,
+    smd: bool = False,
+    suppress_below: int | None = None,
+    percent_of: Literal["valid", "all"] = "valid",
+    alphas: Mapping[str, "float | Result"] | None = None,
+) -> Description:
+    """Describe ``variables`` (default: every column but ``by`` and ``weights``)
+    by their level of measurement, overall and per group of ``by``.
+
+    ``levels`` declares levels; ``metadata_levels`` and ``value_labels`` come
+    from the data file (see ``statsetter.io.read_data``); ``show`` picks what
+    each level reports (keys nominal, ordinal, continuous; values from
+    ``CONTENTS``); ``tests`` adds a p per row chosen by level; ``smd`` adds the
+    standardised difference (two groups); ``suppress_below`` hides counts from
+    1 to that number minus one; ``alphas`` puts Cronbach's α beside scale scores.
+    """
+    import numpy as np
+
+    labels = dict(labels or {})
+    value_labels = value_labels or {}
+    names = list(variables) if variables is not None else [str(n) for n in df.columns if n not in (by, weights)]
+    if not names:
+        raise InputError("describe: no variables to describe")
+    for name in names + [n for n in (by, weights) if n is not None]:
+        c.column(df, name)
+    if by is not None and by in names:
+        raise InputError(f"{by}: the grouping variable is also listed among the variables")
+    if percent_of not in ("valid", "all"):
+        raise InputError(f"percent_of: {percent_of!r} is not valid or all")
+    if suppress_below is not None and (int(suppress_below) != suppress_below or suppress_below < 2):
+        raise InputError(f"suppress_below: {suppress_below!r}; give a whole number of 2 or more")
+    chosen = _contents(show)
+    found = resolve_levels(df, names, levels, metadata_levels)
+
+    w = _weights(df, weights) if weights is not None else None
+    if w is not None and tests:
+        raise InputError(f"{weights}: tests with survey weights need the survey design; run the tests unweighted or leave them out")
+    if by is not None:
+        codes, group_names = _codes(df[by], value_labels.get(by))
+        keep = codes >= 0
+        dropped = int((~keep).sum())
+        if len(group_names) < 2 or len(np.unique(codes[keep])) < 2:
+            raise InputError(f"{by}: {len(np.unique(codes[keep]))} group(s) with data; a grouping variable needs at least two")
+        if smd and len(group_names) != 2:
+            raise InputError(f"{by}: {len(group_names)} groups; the standardised difference needs exactly two")
+        if dropped:
+            df = df[keep]
+            codes = codes[keep]
+            w = w[keep] if w is not None else None
+    else:
+        if tests or smd:
+            raise InputError("tests and smd compare groups; name the grouping variable (by)")
+        codes, group_names, dropped = np.zeros(len(df), dtype=np.intp), [], 0
+    if len(df) == 0:
+        raise InputError("describe: no rows to describe")
+    ngroups = max(len(group_names), 1)
+    groups = _Groups(codes.astype(np.intp, copy=False), ngroups, w)
+
+    summaries = []
+    for name in names:
+        report = found[name]
+        kind = "continuous" if report.level in ("interval", "ratio") else report.level
+        summary = _summarise(
+            df[name], name, labels.get(name, name), report, chosen[kind], groups, value_labels.get(name), moments=smd and kind == "ordinal"
+        )
+        if alphas and name in alphas:
+            a = alphas[name]
+            summary = _replace(summary, alpha=float(a.statistic.value if isinstance(a, Result) and a.statistic else a))  # type: ignore[arg-type]
+        if tests:
+            summary = _replace(summary, **_test(df, name, by, kind, labels))  # type: ignore[arg-type]
+        if smd:
+            summary = _replace(summary, smd=_smd(summary))
+        summaries.append(summary)
+    unknown_alpha = sorted(set(alphas or {}) - set(names))
+    if unknown_alpha:
+        raise InputError(f"{unknown_alpha[0]}: α given for a variable that is not described")
+
+    column_n = groups.column_n()
+    columns = tuple(str(g) for g in group_names) + ("Total",) if by is not None else ("Total",)
+    return Description(
+        tuple(summaries),
+        columns,
+        column_n,
+        by=by,
+        by_label=labels.get(by, by) if by else None,
+        weights=weights,
+        percent_of=percent_of,
+        suppress_below=suppress_below,
+        dropped_no_group=dropped,
+    )
+
+
+def _replace(summary: VariableSummary, **changes: Any) -> VariableSummary:
+    from dataclasses import replace
+
+    return replace(summary, **changes)
+
+
+def _contents(show: Mapping[str, Sequence[str]] | None) -> dict[str, tuple[str, ...]]:
+    chosen = dict(DEFAULT_SHOW)
+    for kind, items in (show or {}).items():
+        key = "continuous" if kind in ("interval", "ratio") else kind
+        if key not in CONTENTS:
+            raise InputError(f"show: {kind!r} is not nominal, ordinal, interval, ratio or continuous")
+        items = (items,) if isinstance(items, str) else tuple(items)
+        bad = [i for i in items if i not in CONTENTS[key]]
+        if bad or not items:
+            raise InputError(f"show.{kind}: {bad[0] if bad else 'nothing'!r}; choose from {', '.join(CONTENTS[key])}")
+        chosen[key] = items
+    return chosen
+
+
+def _weights(df: "pd.DataFrame", name: str) -> "np.ndarray":
+    import numpy as np
+    import pandas as pd
+
+    s = df[name]
+    if not pd.api.types.is_numeric_dtype(s) or pd.api.types.is_bool_dtype(s):
+        raise InputError(f"{name}: weights must be numeric (dtype {s.dtype})")
+    w = s.to_numpy(dtype=float, na_value=np.nan)
+    if np.isnan(w).any():
+        raise InputError(f"{name}: {int(np.isnan(w).sum())} missing weight(s), first in row {int(np.argmax(np.isnan(w))) + 1}")
+    if (w < 0).any() or not np.isfinite(w).all():
+        raise InputError(f"{name}: negative or infinite weight(s), first in row {int(np.argmax((w < 0) | ~np.isfinite(w))) + 1}")
+    if w.sum() <= 0:
+        raise InputError(f"{name}: the weights sum to zero")
+    return w
+
+
+def _codes(s: "pd.Series", value_labels: Mapping[Any, str] | None) -> tuple["np.ndarray", list[str]]:
+    """Integer codes (−1 for missing) and the category names in table order:
+    value-label order, categorical order, else sorted values."""
+    import numpy as np
+    import pandas as pd
+
+    if value_labels:
+        x = s.to_numpy(dtype=float, na_value=np.nan) if pd.api.types.is_numeric_dtype(s) else s.to_numpy(dtype=object)
+        present = pd.unique(s.dropna())
+        order = list(value_labels) + sorted((v for v in present if v not in value_labels), key=_sort_key)
+        codes = pd.Index(order).get_indexer(x)
+        return codes.astype(np.intp), [str(value_labels.get(v, _show(v))) for v in order]
+    if isinstance(s.dtype, pd.CategoricalDtype):
+        return s.cat.codes.to_numpy().astype(np.intp), [str(v) for v in s.cat.categories]
+    if pd.api.types.is_numeric_dtype(s) and not pd.api.types.is_bool_dtype(s):
+        x = s.to_numpy(dtype=float, na_value=np.nan)
+        ok = ~np.isnan(x)
+        if ok.any():
+            lo = x[ok].min()
+            if x[ok].max() - lo <= _SMALL_RANGE and np.all(x[ok] == np.floor(x[ok])):
+                offset = np.where(ok, x - lo, 0).astype(np.intp)
+                present = np.flatnonzero(np.bincount(offset[ok]))
+                remap = np.full(int(present.max()) + 1, -1, dtype=np.intp)
+                remap[present] = np.arange(present.size)
+                return np.where(ok, remap[offset], -1), [_show(lo + v) for v in present]
+    codes, uniques = pd.factorize(s, sort=True)
+    return codes.astype(np.intp), [_show(v) for v in uniques]
+
+
+def _sort_key(v: Any) -> tuple[int, Any]:
+    return (0, v) if isinstance(v, (int, float)) else (1, str(v))
+
+
+def _show(v: Any) -> str:
+    return f"{v:g}" if isinstance(v, float) else str(v)
+
+
+class _Groups:
+    """Group codes and weights shared by every variable's bincounts."""
+
+    def __init__(self, codes: "np.ndarray", k: int, weights: "np.ndarray | None") -> None:
+        self.codes, self.k, self.w = codes, k, weights
+
+    def column_n(self) -> "np.ndarray":
+        import numpy as np
+
+        n = np.bincount(self.codes, weights=self.w, minlength=self.k).astype(float)
+        return np.append(n, n.sum()) if self.k > 1 else n
+
+    def total(self, per_group: "np.ndarray") -> "np.ndarray":
+        """Append the Total column (sum over groups) when there are groups."""
+        import numpy as np
+
+        return np.concatenate([per_group, per_group.sum(axis=0, keepdims=True)]) if self.k > 1 else per_group
+
+
+def _summarise(
+    s: "pd.Series",
+    name: str,
+    label: str,
+    level: LevelReport,
+    show: tuple[str, ...],
+    g: _Groups,
+    value_labels: Mapping[Any, str] | None,
+    moments: bool = False,
+) -> VariableSummary:
+    import numpy as np
+    import pandas as pd
+
+    kind = "continuous" if level.level in ("interval", "ratio") else level.level
+    if kind == "nominal":
+        codes, categories = _codes(s, value_labels)
+        counts, missing = _count(codes, len(categories), g)
+        return VariableSummary(name, label, level, show, counts.sum(axis=1), missing, tuple(categories), counts)
+    ordered = isinstance(s.dtype, pd.CategoricalDtype)
+    if ordered:
+        if kind != "ordinal":
+            raise InputError(f"{name}: a categorical variable cannot be described as {level.level}; declare it nominal or ordinal")
+        x = s.cat.codes.to_numpy().astype(float)
+        x[x < 0] = np.nan
+    elif not pd.api.types.is_numeric_dtype(s) or pd.api.types.is_bool_dtype(s):
+        raise InputError(f"{name}: {s.dtype} values cannot be {level.level}; declare it nominal or convert it to numbers")
+    else:
+        x = s.to_numpy(dtype=float, na_value=np.nan)
+    ok = ~np.isnan(x)
+    if not ok.any():
+        raise InputError(f"{name}: every value is missing")
+    n, missing = _valid_n(ok, g)
+    fields: dict[str, Any] = {}
+    if kind == "continuous" or moments:
+        fields.update(_moments(x, ok, g, n, skew="skew" in show))
+    if kind == "ordinal" or "median_iqr" in show:
+        # an ordered categorical's quartiles must be categories: the inverted CDF
+        fields.update(_quantiles(x, ok, g, inverted=ordered))
+    if kind == "ordinal" or "range" in show:
+        fields.update(_extremes(x, ok, g))
+    if ordered or (kind == "ordinal" and "counts" in show):
+        codes, categories = _codes(s, value_labels)
+        fields["categories"] = tuple(categories)
+        if "counts" in show:
+            fields["counts"] = _count(codes, len(categories), g)[0]
+    return VariableSummary(name, label, level, show, n, missing, positions=ordered, **fields)
+
+
+def _count(codes: "np.ndarray", k: int, g: _Groups) -> tuple["np.ndarray", "np.ndarray"]:
+    """(columns × k counts, missing per column) from one bincount."""
+    import numpy as np
+
+    table = np.bincount(g.codes * (k + 1) + (codes + 1), weights=g.w, minlength=g.k * (k + 1)).reshape(g.k, k + 1)
+    table = g.total(table.astype(float))
+    return table[:, 1:], table[:, 0]
+
+
+def _valid_n(ok: "np.ndarray", g: _Groups) -> tuple["np.ndarray", "np.ndarray"]:
+    import numpy as np
+
+    both = np.bincount(g.codes * 2 + ok, weights=g.w, minlength=2 * g.k).reshape(g.k, 2).astype(float)
+    both = g.total(both)
+    return both[:, 1], both[:, 0]
+
+
+def _moments(x: "np.ndarray", ok: "np.ndarray", g: _Groups, n: "np.ndarray", skew: bool) -> dict[str, "np.ndarray"]:
+    """Mean and SD per group by two passes (mean, then squared deviations);
+    the Total column by combining the groups' sums of squares."""
+    import numpy as np
+
+    xs, codes, w = _valid(x, ok, g)
+    ng = n[: g.k] if g.k > 1 else n
+    sums = np.bincount(codes, weights=xs if w is None else xs * w, minlength=g.k)
+    with np.errstate(invalid="ignore", divide="ignore"):
+        mean = sums / ng
+        dev = xs - mean[codes]
+        sq = dev * dev
+        ss = np.bincount(codes, weights=sq if w is None else sq * w, minlength=g.k)
+        out: dict[str, np.ndarray] = {}
+        if g.k > 1:
+            total_n = ng.sum()
+            grand = sums.sum() / total_n
+            ss_total = ss.sum() + float(np.sum(ng * (mean - grand) ** 2))
+            mean, ss = np.append(mean, grand), np.append(ss, ss_total)
+        out["mean"] = mean
+        out["sd"] = np.sqrt(ss / (n - 1))
+        if skew:
+            if w is not None:
+                raise InputError("skewness with survey weights is not supported; leave skew out of show")
+            m3 = np.bincount(codes, weights=sq * dev, minlength=g.k)
+            if g.k > 1:
+                d = xs - out["mean"][-1]
+                m3 = np.append(m3, float(np.sum(d * d * d)))
+            m2, m3 = ss / n, m3 / n
+            out["skew"] = np.sqrt(n * (n - 1)) / (n - 2) * m3 / m2**1.5
+    return out
+
+
+def _quantiles(x: "np.ndarray", ok: "np.ndarray", g: _Groups, inverted: bool = False) -> dict[str, "np.ndarray"]:
+    """Quartiles and median per column: counted for integer data over a small
+    range, otherwise selected (``np.quantile``) group by group."""
+    import numpy as np
+
+    probs = np.array([0.25, 0.5, 0.75])
+    xs, codes, w = _valid(x, ok, g)
+    lo, hi = xs.min(), xs.max()
+    out = np.full((g.k + (g.k > 1), 3), np.nan)
+    if hi - lo <= _SMALL_RANGE and np.all(xs == np.floor(xs)):
+        width = int(hi - lo) + 1
+        table = np.bincount(codes * width + (xs - lo).astype(np.intp), weights=w, minlength=g.k * width).reshape(g.k, width)
+        table = g.total(table.astype(float))
+        for j, row in enumerate(table):
+            out[j] = lo + (_weighted_from_counts(row, probs) if w is not None or inverted else _type7_from_counts(row, probs))
+    else:
+        parts = [(codes == j) for j in range(g.k)] if g.k > 1 else [slice(None)]
+        for j, sel in enumerate(parts):
+            out[j] = _quantile(xs[sel], probs, None if w is None else w[sel])
+        if g.k > 1:
+            out[-1] = _quantile(xs, probs, w)
+    return {"q1": out[:, 0], "median": out[:, 1], "q3": out[:, 2]}
+
+
+def _quantile(values: "np.ndarray", probs: "np.ndarray", w: "np.ndarray | None") -> "np.ndarray":
+    import numpy as np
+
+    if values.size == 0:
+        return np.full(3, np.nan)
+    if w is None:
+        return np.quantile(values, probs)
+    return np.quantile(values, probs, weights=w, method="inverted_cdf")
+
+
+def _type7_from_counts(counts: "np.ndarray", probs: "np.ndarray") -> "np.ndarray":
+    """Hyndman & Fan type 7 (numpy's and pandas' default) from counts of 0..width−1."""
+    import numpy as np
+
+    n = counts.sum()
+    if n == 0:
+        return np.full(probs.size, np.nan)
+    h = (n - 1) * probs
+    below = np.floor(h)
+    cum = np.cumsum(counts)
+    at = np.searchsorted(cum, below, side="right")  # value of order statistic number `below` (0-based)
+    nxt = np.searchsorted(cum, np.minimum(below + 1, n - 1), side="right")
+    return at + (h - below) * (nxt - at)
+
+
+def _weighted_from_counts(weights: "np.ndarray", probs: "np.ndarray") -> "np.ndarray":
+    """The weighted inverted CDF: the smallest value whose cumulative weight reaches p·W."""
+    import numpy as np
+
+    total = weights.sum()
+    if total == 0:
+        return np.full(probs.size, np.nan)
+    cum = np.cumsum(weights)
+    return np.searchsorted(cum, probs * total, side="left").astype(float)
+
+
+def _extremes(x: "np.ndarray", ok: "np.ndarray", g: _Groups) -> dict[str, "np.ndarray"]:
+    import numpy as np
+
+    xs, codes, _ = _valid(x, ok, g)
+    if g.k == 1:
+        return {"minimum": np.array([xs.min()]), "maximum": np.array([xs.max()])}
+    lo, hi = np.full(g.k, np.inf), np.full(g.k, -np.inf)
+    np.minimum.at(lo, codes, xs)
+    np.maximum.at(hi, codes, xs)
+    lo, hi = np.append(lo, xs.min()), np.append(hi, xs.max())
+    lo[np.isinf(lo)] = np.nan
+    hi[np.isinf(hi)] = np.nan
+    return {"minimum": lo, "maximum": hi}
+
+
+def _valid(x: "np.ndarray", ok: "np.ndarray", g: _Groups) -> tuple["np.ndarray", "np.ndarray", "np.ndarray | None"]:
+    """The values, group codes and weights of the rows with a value (no copy when none is missing)."""
+    if ok.all():
+        return x, g.codes, g.w
+    return x[ok], g.codes[ok], None if g.w is None else g.w[ok]
+
+
+def _test(df: "pd.DataFrame", name: str, by: str | None, kind: str, labels: Mapping[str, str]) -> dict[str, Any]:
+    """The comparison across groups chosen by level (stated in the table note)."""
+    from .anova import anova_oneway
+    from .chisquare import chi_square
+    from .ranks import kruskal_wallis, mann_whitney
+    from .ttests import t_independent
+
+    assert by is not None
+    k = df[by].dropna().nunique()
+    if kind == "nominal":
+        records = chi_square(df, by, name, labels=labels)
+        fisher = next((r for r in records if r.kind == "fisher_exact"), None)
+        small = any(n.kind == "assumption" and "expected counts below 5" in n.text for n in records[0].notes)
+        if fisher is not None and small:
+            return {"test": fisher, "test_name": "Fisher's exact test"}
+        return {"test": records[0], "test_name": "χ<sup>2</sup> test of independence"}
+    if kind == "ordinal":
+        if k == 2:
+            return {"test": mann_whitney(df, name, by, labels=labels), "test_name": "Mann–Whitney <i>U</i> test"}
+        return {"test": kruskal_wallis(df, name, by, labels=labels), "test_name": "Kruskal–Wallis <i>H</i> test"}
+    if k == 2:
+        return {"test": t_independent(df, name, by, labels=labels), "test_name": "Welch's <i>t</i> test"}
+    return {"test": anova_oneway(df, name, by, variant="welch", labels=labels), "test_name": "Welch's one-way ANOVA"}
+
+
+def _smd(v: VariableSummary) -> float:
+    """The absolute standardised difference between the two groups: for means,
+    (M1 − M2) / √((SD1² + SD2²) / 2) (Austin, 2009, Statistics in Medicine);
+    for categories, Yang & Dalton's (2012) multivariate form, which reduces to
+    the proportions formula for two categories."""
+    import numpy as np
+
+    if v.kind == "nominal":
+        assert v.counts is not None
+        p = v.counts[:2] / v.counts[:2].sum(axis=1, keepdims=True)
+        t = (p[0] - p[1])[1:]
+        cov = [np.diag(q[1:]) - np.outer(q[1:], q[1:]) for q in p]
+        s = (cov[0] + cov[1]) / 2
+        if t.size == 0 or not np.any(t):
+            return 0.0
+        return float(np.sqrt(t @ np.linalg.pinv(s) @ t))
+    assert v.mean is not None and v.sd is not None
+    return float(abs(v.mean[0] - v.mean[1]) / np.sqrt((v.sd[0] ** 2 + v.sd[1] ** 2) / 2))

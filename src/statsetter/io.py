@@ -1,0 +1,144 @@
+"""Reading data files: CSV, Excel (.xlsx), SPSS (.sav), Stata (.dta), Parquet.
+
+The file's extension picks the reader, and the first bytes must agree with
+it, so a renamed file gets a clear error instead of a parser's traceback.
+SPSS files bring their measurement levels, value labels and variable labels;
+Stata files their value and variable labels. Missing-value codes given by the
+author are turned into missing values before anything is computed.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass, field
+from pathlib import Path
+from typing import TYPE_CHECKING, Any, Mapping, Sequence
+
+from .errors import InputError
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+__all__ = ["Dataset", "read_data", "READERS"]
+
+READERS = {".csv": "CSV", ".tsv": "tab-separated text", ".txt": "delimited text", ".xlsx": "Excel", ".sav": "SPSS", ".zsav": "SPSS", ".dta": "Stata", ".parquet": "Parquet"}
+_SPSS_LEVELS = {"nominal": "nominal", "ordinal": "ordinal", "scale": "interval"}
+
+
+@dataclass(frozen=True, eq=False)
+class Dataset:
+    """A data frame and what its file said about it."""
+
+    frame: "pd.DataFrame"
+    path: Path
+    levels: Mapping[str, str] = field(default_factory=dict)
+    value_labels: Mapping[str, Mapping[Any, str]] = field(default_factory=dict)
+    labels: Mapping[str, str] = field(default_factory=dict)
+
+
+def _check_magic(path: Path, suffix: str) -> None:
+    try:
+        with path.open("rb") as fh:
+            head = fh.read(4096)
+    except FileNotFoundError:
+        raise InputError(f"{path}: no such file") from None
+    except IsADirectoryError:
+        raise InputError(f"{path}: is a folder, not a data file") from None
+    except OSError as exc:
+        raise InputError(f"{path}: cannot read ({exc.strerror or exc})") from None
+    if not head:
+        raise InputError(f"{path}: the file is empty")
+    expected = {
+        ".xlsx": (head.startswith(b"PK\x03\x04"), "an Excel .xlsx workbook (a zip file)"),
+        ".sav": (head[:4] in (b"$FL2", b"$FL3"), "an SPSS .sav file"),
+        ".zsav": (head[:4] == b"$FL3", "an SPSS .zsav file"),
+        ".dta": (head.startswith(b"<stata_dta>") or head[:1] in (b"\x71", b"\x72", b"\x73"), "a Stata .dta file"),
+        ".parquet": (head.startswith(b"PAR1"), "a Parquet file"),
+    }
+    if suffix in expected:
+        ok, what = expected[suffix]
+        if not ok:
+            raise InputError(f"{path}: not {what}; the extension does not match the contents")
+    elif b"\x00" in head or head.startswith((b"PK\x03\x04", b"\xd0\xcf\x11\xe0", b"$FL2", b"PAR1")):
+        raise InputError(f"{path}: binary contents, not {READERS[suffix]}; the extension does not match the contents")
+
+
+def read_data(
+    path: "str | Path",
+    *,
+    sheet: "str | int | None" = None,
+    missing: "Sequence[Any] | Mapping[str, Sequence[Any]] | None" = None,
+    encoding: str = "utf-8",
+) -> Dataset:
+    """Read a data file; ``missing`` lists codes (for every column, or per
+    column) that mean a missing value, such as −99."""
+    p = Path(path)
+    suffix = p.suffix.lower()
+    if suffix not in READERS:
+        raise InputError(f"{p}: unknown data format {p.suffix or '(no extension)'!r}; statsetter reads {', '.join(READERS)}")
+    _check_magic(p, suffix)
+    try:
+        data = _read(p, suffix, sheet, encoding)
+    except InputError:
+        raise
+    except UnicodeDecodeError as exc:
+        raise InputError(f"{p}: not {encoding} text (byte {exc.start}); give the file's encoding") from None
+    except Exception as exc:  # the readers raise many kinds; the message names the file
+        first = str(exc).strip().splitlines()[0] if str(exc).strip() else type(exc).__name__
+        raise InputError(f"{p}: cannot read as {READERS[suffix]} ({first})") from None
+    if data.frame.columns.duplicated().any():
+        raise InputError(f"{p}: column {data.frame.columns[data.frame.columns.duplicated()][0]!r} appears twice")
+    if missing:
+        data = Dataset(_apply_missing(data.frame, missing, p), p, data.levels, data.value_labels, data.labels)
+    return data
+
+
+def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str) -> Dataset:
+    import pandas as pd
+
+    if suffix in (".csv", ".tsv", ".txt"):
+        sep = "\t" if suffix == ".tsv" else ("," if suffix == ".csv" else None)
+        try:
+            frame = pd.read_csv(p, sep=sep, encoding=encoding, engine="python" if sep is None else "c")
+        except pd.errors.EmptyDataError:
+            raise InputError(f"{p}: no columns to read") from None
+        except pd.errors.ParserError as exc:
+            raise InputError(f"{p}: {str(exc).strip().splitlines()[0]}") from None
+        return Dataset(frame, p)
+    if suffix == ".xlsx":
+        book = pd.ExcelFile(p, engine="openpyxl")
+        if sheet is not None and not isinstance(sheet, int) and sheet not in book.sheet_names:
+            raise InputError(f"{p}: no sheet {sheet!r}; sheets: {', '.join(map(str, book.sheet_names))}")
+        return Dataset(book.parse(sheet if sheet is not None else 0), p)
+    if suffix == ".parquet":
+        return Dataset(pd.read_parquet(p), p)
+    import pyreadstat
+
+    if suffix in (".sav", ".zsav"):
+        frame, meta = pyreadstat.read_sav(str(p))
+        levels = {k: _SPSS_LEVELS[v] for k, v in (meta.variable_measure or {}).items() if v in _SPSS_LEVELS}
+    else:
+        frame, meta = pyreadstat.read_dta(str(p))
+        levels = {}
+    labels = {k: v for k, v in (meta.column_names_to_labels or {}).items() if v}
+    for name in frame.columns:  # SPSS and Stata store a missing string as ""
+        if frame[name].dtype == object or pd.api.types.is_string_dtype(frame[name]):
+            frame[name] = frame[name].mask(frame[name] == "")
+    return Dataset(frame, p, levels, dict(meta.variable_value_labels or {}), labels)
+
+
+def _apply_missing(frame: "pd.DataFrame", missing: "Sequence[Any] | Mapping[str, Sequence[Any]]", p: Path) -> "pd.DataFrame":
+    if isinstance(missing, Mapping):
+        for name in missing:
+            if name not in frame.columns:
+                from .analyses._common import column
+
+                column(frame, name)
+        per = {k: list(v) for k, v in missing.items()}
+    else:
+        per = {str(c): list(missing) for c in frame.columns}
+    out = frame.copy()
+    for name, codes in per.items():
+        hit = out[name].isin(codes)
+        if hit.any():
+            out[name] = out[name].mask(hit)
+    return out

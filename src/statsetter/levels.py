@@ -1,0 +1,111 @@
+"""Levels of measurement: declared, read from the data file, or inferred.
+
+What a table reports for a variable follows its level (Stevens, 1946;
+REPORTING-RULES.md "Levels of measurement"). A level comes, in this order,
+from the author's declaration, from the file's metadata (SPSS measurement
+levels, pandas categoricals), or from an inference whose reason is reported
+and which is flagged as weak where a wrong guess is likely.
+"""
+
+from __future__ import annotations
+
+from dataclasses import dataclass
+from typing import TYPE_CHECKING, Literal, Mapping
+
+from .errors import InputError
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+Level = Literal["nominal", "ordinal", "interval", "ratio"]
+LEVELS: tuple[Level, ...] = ("nominal", "ordinal", "interval", "ratio")
+Source = Literal["declared", "metadata", "categorical", "inferred"]
+
+# Integer-valued with at most this many distinct values reads as a rating scale.
+ORDINAL_MAX_DISTINCT = 10
+
+
+@dataclass(frozen=True, slots=True)
+class LevelReport:
+    """A variable's level, where it came from and why."""
+
+    name: str
+    level: Level
+    source: Source
+    reason: str
+    weak: bool = False
+
+    @property
+    def dichotomous(self) -> bool:
+        return self.level == "nominal" and self.reason.startswith("2 distinct")
+
+    def describe(self) -> str:
+        flag = " (a weak guess: declare the level)" if self.weak else ""
+        return f"{self.name}: {self.level}, {self.source}: {self.reason}{flag}"
+
+
+def check_level(name: str, level: str) -> Level:
+    if level not in LEVELS:
+        raise InputError(f"{name}: level {level!r} is not one of {', '.join(LEVELS)}")
+    return level  # type: ignore[return-value]
+
+
+def infer_level(series: "pd.Series") -> LevelReport:
+    """A level from the values alone, with the reason and whether it is weak."""
+    import numpy as np
+    import pandas as pd
+
+    name = str(series.name)
+    if isinstance(series.dtype, pd.CategoricalDtype):
+        if series.dtype.ordered:
+            return LevelReport(name, "ordinal", "categorical", "ordered categorical")
+        return LevelReport(name, "nominal", "categorical", "unordered categorical")
+    if not pd.api.types.is_numeric_dtype(series) or pd.api.types.is_bool_dtype(series):
+        values = series.dropna()
+        distinct = int(values.nunique())
+        reason = f"{distinct} distinct values, not numeric ({series.dtype})"
+        if distinct > 2 and len(values) and distinct > max(20, len(values) // 2):
+            return LevelReport(name, "nominal", "inferred", reason + "; looks like an identifier or free text", weak=True)
+        return LevelReport(name, "nominal", "inferred", reason)
+    x = series.to_numpy(dtype=float, na_value=np.nan)
+    x = x[~np.isnan(x)]
+    if x.size == 0:
+        return LevelReport(name, "nominal", "inferred", "every value is missing", weak=True)
+    integral = bool(np.all(x == np.floor(x)))
+    if integral and x.max() - x.min() <= 1_000:
+        distinct = int(np.count_nonzero(np.bincount((x - x.min()).astype(np.int64))))
+    else:
+        distinct = int(np.unique(x).size)
+    span = f"{x.min():g}–{x.max():g}"
+    if distinct <= 2:
+        return LevelReport(name, "nominal", "inferred", f"{distinct} distinct values ({span})")
+    if integral and distinct <= ORDINAL_MAX_DISTINCT:
+        return LevelReport(name, "ordinal", "inferred", f"integer, {distinct} distinct values {span}", weak=True)
+    if integral:
+        return LevelReport(name, "interval", "inferred", f"integer, {distinct} distinct values {span}", weak=distinct <= 20)
+    return LevelReport(name, "interval", "inferred", f"numeric with fractions, {distinct} distinct values")
+
+
+def resolve_levels(
+    df: "pd.DataFrame",
+    names: list[str],
+    declared: Mapping[str, str] | None = None,
+    metadata: Mapping[str, str] | None = None,
+) -> dict[str, LevelReport]:
+    """Each variable's level: declared, else from the file's metadata, else inferred."""
+    declared = declared or {}
+    metadata = metadata or {}
+    unknown = sorted(set(declared) - set(df.columns))
+    if unknown:
+        from .analyses._common import column
+
+        column(df, unknown[0])
+    out = {}
+    for name in names:
+        if name in declared:
+            out[name] = LevelReport(name, check_level(name, declared[name]), "declared", "declared by the author")
+        elif name in metadata:
+            out[name] = LevelReport(name, check_level(name, metadata[name]), "metadata", "the data file's measurement level")
+        else:
+            out[name] = infer_level(df[name])
+    return out

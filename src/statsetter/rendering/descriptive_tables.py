@@ -1,0 +1,272 @@
+"""The descriptives table ("Table 1") as a TableModel, in a style.
+
+Rows follow REPORTING-RULES.md "Tables": categorical rows as n (%) under the
+variable's name, continuous rows as M (SD), ordinal rows as Mdn (IQR). Column
+heads carry each group's n and the Total's N; a spanner names the grouping
+variable. The note defines every abbreviation the table uses, says what the
+percentages are of and when they do not total 100, names the test behind each
+p (specific notes, superscript letters), and states weighting and suppression.
+"""
+
+from __future__ import annotations
+
+from decimal import Decimal
+from typing import TYPE_CHECKING
+
+from ..style.numbers import Numbers, numbers_for, round_half_up
+from ..style.profile import Style, load_style
+from .styled import StyledText
+from .tables import Column, Row, Spanner, TableModel
+
+if TYPE_CHECKING:
+    import numpy as np
+
+    from ..analyses.descriptives import Description, VariableSummary
+
+_OPS = {"=": "", "<": "&lt; ", ">": "&gt; "}
+_ABBREVIATIONS = {
+    "N": "number of cases in the sample",
+    "n": "number of cases in a group or category",
+    "M": "mean",
+    "SD": "standard deviation",
+    "Mdn": "median",
+    "IQR": "interquartile range, given as first–third quartile",
+    "SMD": "absolute standardised mean difference (Austin, 2009; Yang &amp; Dalton, 2012, for categorical variables)",
+}
+
+
+class _Layout:
+    def __init__(self, d: "Description", style: Style) -> None:
+        self.d, self.style = d, style
+        self.num: Numbers = numbers_for(style)
+        self.sep = style.data["numbers"]["list_separator"]
+        self.used: list[str] = []  # abbreviations in order of first use
+        self.tests: dict[str, str] = {}  # test name -> note letter
+        self.rounding = False
+        self.suppressed = 0
+        self.groups = len(d.columns)
+
+    def sym(self, name: str) -> str:
+        if name not in self.used and name in _ABBREVIATIONS:
+            self.used.append(name)
+        return self.style.symbol(name) if name != "SMD" else "SMD"
+
+    # -- cells -------------------------------------------------------------
+
+    def count(self, n: float, of: float, hidden: bool) -> StyledText:
+        if hidden:
+            return StyledText(f"< {self.num.integer(self.d.suppress_below or 0)}")
+        if of <= 0:
+            return StyledText(self.num.integer(n))
+        return StyledText(f"{self.num.integer(n)} ({self.num.percent(100 * n / of)})")
+
+    def centre_spread(self, centre: float, spread: float) -> StyledText:
+        if centre != centre:  # NaN: no values in this column
+            return StyledText("—")
+        return StyledText(f"{self.num.number(centre, 'M')} ({self.num.number(spread, 'SD')})")
+
+    def quartiles(self, v: "VariableSummary", j: int) -> StyledText:
+        assert v.median is not None and v.q1 is not None and v.q3 is not None
+        if v.median[j] != v.median[j]:
+            return StyledText("—")
+        if v.positions:
+            names = v.categories
+            return StyledText(f"{names[int(v.median[j])]} ({names[int(v.q1[j])]}–{names[int(v.q3[j])]})")
+        q1, q3 = self.num.number(v.q1[j], "Mdn"), self.num.number(v.q3[j], "Mdn")
+        inner = f"{q1}{self.sep} {q3}" if v.q1[j] < 0 else f"{q1}–{q3}"
+        return StyledText(f"{self.num.number(v.median[j], 'Mdn')} ({inner})")
+
+    def span(self, v: "VariableSummary", j: int) -> StyledText:
+        assert v.minimum is not None and v.maximum is not None
+        if v.minimum[j] != v.minimum[j]:
+            return StyledText("—")
+        lo, hi = self.num.number(v.minimum[j], "M"), self.num.number(v.maximum[j], "M")
+        return StyledText(f"{lo}{self.sep} {hi}" if v.minimum[j] < 0 else f"{lo}–{hi}")
+
+    # -- rows --------------------------------------------------------------
+
+    def extra(self, v: "VariableSummary", first: bool) -> list[StyledText]:
+        """The p and SMD cells, filled on a variable's first row only."""
+        out = []
+        if any(x.test is not None for x in self.d.variables):
+            out.append(self.p_cell(v) if first else StyledText())
+        if any(x.smd is not None for x in self.d.variables):
+            smd = "" if not first or v.smd is None or v.smd != v.smd else self.num.number(v.smd, "d")
+            out.append(StyledText(smd))
+        return out
+
+    def p_cell(self, v: "VariableSummary") -> StyledText:
+        if v.test is None or v.test.p is None or v.test_name is None:
+            return StyledText()
+        op, text = self.num.p(v.test.p, v.test.alpha)
+        letter = self.tests.setdefault(v.test_name, "abcdefghijklmnopqrstuvwxyz"[len(self.tests)])
+        return StyledText.from_markup(f"{_OPS[op]}{text}<sup>{letter}</sup>")
+
+    def stub(self, v: "VariableSummary", what: str) -> StyledText:
+        alpha = ""
+        if v.alpha is not None:
+            alpha = f" ({self.style.symbol('alpha')} = {self.num.number(v.alpha, 'alpha')})"
+        return StyledText.from_markup(f"{_escape(v.label)}{alpha}, {what}")
+
+    def variable_rows(self, v: "VariableSummary") -> list[Row]:
+        n = self.sym("n")
+        if v.kind == "nominal":
+            return self.category_rows(v, self.stub(v, f"{n} (%)"))
+        rows: list[Row] = []
+        first = True
+        if v.kind == "continuous" and v.mean is not None and "mean_sd" in v.show:
+            assert v.sd is not None
+            what = f"{self.sym('M')} ({self.sym('SD')})"
+            cells = [self.centre_spread(v.mean[j], v.sd[j]) for j in range(self.groups)]
+            rows.append(Row(self.stub(v, what), tuple(cells + self.extra(v, True))))
+            first = False
+        if v.kind == "ordinal" or "median_iqr" in v.show:
+            what = f"{self.sym('Mdn')} ({self.sym('IQR')})"
+            cells = [self.quartiles(v, j) for j in range(self.groups)]
+            label = self.stub(v, what) if first else StyledText.from_markup(what)
+            rows.append(Row(label, tuple(cells + self.extra(v, first)), indent=0 if first else 1))
+            first = False
+        if "range" in v.show:
+            cells = [self.span(v, j) for j in range(self.groups)]
+            rows.append(Row(StyledText("Range"), tuple(cells + self.extra(v, False)), indent=1))
+        if "skew" in v.show and v.skew is not None:
+            cells = [StyledText(self.num.number(v.skew[j], "skew") if v.skew[j] == v.skew[j] else "—") for j in range(self.groups)]
+            rows.append(Row(StyledText("Skewness"), tuple(cells + self.extra(v, False)), indent=1))
+        if v.kind == "ordinal" and "counts" in v.show:
+            rows += self.category_rows(v, None)
+        elif v.missing[-1] > 0:
+            rows.append(self.missing_row(v))
+        return rows
+
+    def category_rows(self, v: "VariableSummary", heading: StyledText | None) -> list[Row]:
+        import numpy as np
+
+        assert v.counts is not None
+        base = v.n if self.d.percent_of == "valid" else v.n + v.missing
+        counts = np.vstack([v.counts.T, v.missing]) if v.missing[-1] > 0 else v.counts.T  # categories (+ missing) × columns
+        hidden = _suppress(counts, self.d.suppress_below) if self.d.suppress_below else np.zeros(counts.shape, bool)
+        self.suppressed += int(hidden.sum())
+        rows = []
+        if heading is not None:
+            rows.append(Row(heading, tuple([StyledText()] * self.groups + self.extra(v, True))))
+        with_missing_pct = self.d.percent_of == "all"
+        for i, name in enumerate(v.categories):
+            cells = [self.count(counts[i, j], base[j], hidden[i, j]) for j in range(self.groups)]
+            rows.append(Row(StyledText(name), tuple(cells + self.extra(v, False)), indent=1))
+        if v.missing[-1] > 0:
+            i = len(v.categories)
+            cells = [self.count(counts[i, j], base[j] if with_missing_pct else 0, hidden[i, j]) for j in range(self.groups)]
+            rows.append(Row(StyledText("Missing"), tuple(cells + self.extra(v, False)), indent=1))
+        if not hidden.any():
+            self.rounding |= self.rounds_off(counts[: len(v.categories)], base) or (with_missing_pct and self.rounds_off(counts, base))
+        return rows
+
+    def missing_row(self, v: "VariableSummary") -> Row:
+        hidden = _suppress(v.missing[None, :], self.d.suppress_below)[0] if self.d.suppress_below else [False] * self.groups
+        self.suppressed += int(sum(hidden))
+        cells = [self.count(v.missing[j], 0, hidden[j]) for j in range(self.groups)]
+        return Row(StyledText("Missing"), tuple(cells + self.extra(v, False)), indent=1)
+
+    def rounds_off(self, counts: "np.ndarray", base: "np.ndarray") -> bool:
+        """Whether the printed percentages of some column do not total 100."""
+        decimals = self.num.decimals_for("percent")
+        for j in range(counts.shape[1]):
+            if base[j] > 0:
+                total = sum(round_half_up(100 * c / base[j], decimals) for c in counts[:, j])
+                if total != Decimal(100):
+                    return True
+        return False
+
+
+def _escape(text: str) -> str:
+    return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
+
+
+def _suppress(counts: "np.ndarray", below: int | None) -> "np.ndarray":
+    """Primary suppression of counts from 1 to ``below`` − 1, then secondary
+    suppression so that no hidden count can be recovered by subtraction: in
+    every category column (whose total is the group's n, shown in the head)
+    and every row (whose last cell, Total, is the sum of the groups) with
+    exactly one hidden cell, the smallest other non-zero cell is hidden too."""
+    import numpy as np
+
+    hidden = (counts > 0) & (counts < (below or 0))
+    if not hidden.any():
+        return hidden
+    changed = True
+    while changed:
+        changed = False
+        for axis in (0, 1):
+            lines = hidden if axis == 0 else hidden.T
+            values = counts if axis == 0 else counts.T
+            for j in range(lines.shape[1]):
+                line, vals = lines[:, j], values[:, j]
+                if line.sum() == 1:
+                    open_ = np.flatnonzero(~line & (vals > 0))
+                    if open_.size:
+                        line[open_[np.argmin(vals[open_])]] = True
+                        changed = True
+    return hidden
+
+
+def descriptive_table(d: "Description", style: "Style | str | None" = None, *, number: int | None = None, title: str | None = None) -> TableModel:
+    """Lay out a Description in the style: one column per group plus Total,
+    optional p and SMD columns, and notes for everything the table abbreviates."""
+    resolved = load_style(style)
+    lay = _Layout(d, resolved)
+    rows = [row for v in d.variables for row in lay.variable_rows(v)]
+    total_sym = lay.sym("N")
+    columns = []
+    for j, name in enumerate(d.columns):
+        sym = lay.sym("n") if d.by is not None and j < len(d.columns) - 1 else total_sym
+        columns.append(Column(StyledText.from_markup(f"{_escape(name)} ({sym} = {lay.num.integer(d.column_n[j])})")))
+    if any(v.test is not None for v in d.variables):
+        columns.append(Column(StyledText.from_markup(resolved.symbol("p"))))
+    if any(v.smd is not None for v in d.variables):
+        columns.append(Column(StyledText.from_markup(lay.sym("SMD"))))
+    spanners = (Spanner(StyledText(d.by_label or d.by or ""), 0, len(d.columns) - 1),) if d.by is not None else ()
+    if title is None:
+        title = f"Characteristics of the sample by {d.by_label}" if d.by is not None else "Characteristics of the sample"
+    return TableModel(
+        title=StyledText(title),
+        columns=tuple(columns),
+        rows=tuple(rows),
+        stub_head=StyledText("Variable"),
+        number=number,
+        spanners=spanners,
+        general_note=_general_note(d, lay),
+        specific_notes=tuple((letter, StyledText.from_markup(f"{name}.")) for name, letter in lay.tests.items()),
+    )
+
+
+def _general_note(d: "Description", lay: _Layout) -> StyledText:
+    parts = []
+    defined = [f"{lay.style.symbol(a) if a != 'SMD' else 'SMD'} = {_ABBREVIATIONS[a]}" for a in lay.used]
+    if defined:
+        parts.append("; ".join(defined) + ".")
+    if any(v.counts is not None for v in d.variables):
+        if d.percent_of == "valid":
+            parts.append("Percentages are of the cases with a value on the variable; missing counts are shown without percentages.")
+        else:
+            parts.append("Percentages are of all cases, missing values included.")
+    if lay.rounding:
+        parts.append("Percentages may not total 100 because of rounding.")
+    if any(v.positions for v in d.variables):
+        parts.append("Quartiles of ordered categories are the categories at those points of the distribution.")
+    if d.weights:
+        parts.append(
+            f"Counts, percentages, means, SDs and quartiles are weighted by {_escape(d.weights)}; n are sums of weights, rounded; "
+            "SDs use the sum of weights minus 1 as the denominator; quartiles are weighted (inverted distribution function)."
+        )
+    if d.dropped_no_group:
+        parts.append(f"{lay.num.integer(d.dropped_no_group)} cases with no value on {_escape(d.by_label or '')} are left out.")
+    if d.suppress_below:
+        k = lay.num.integer(d.suppress_below)
+        parts.append(
+            f"To protect confidentiality, counts from 1 to {lay.num.integer(d.suppress_below - 1)} are shown as “&lt; {k}”, "
+            f"and further cells are hidden so that they cannot be recovered by subtraction ({lay.suppressed} cells hidden in all)."
+        )
+    tested = [v for v in d.variables if v.test is not None]
+    if tested:
+        parts.append(f"Each {lay.style.symbol('p')} value is from the test named under its letter.")
+    return StyledText.from_markup(" ".join(parts)) if parts else StyledText()
