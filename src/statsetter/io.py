@@ -51,7 +51,7 @@ def _check_magic(path: Path, suffix: str) -> None:
         ".xlsx": (head.startswith(b"PK\x03\x04"), "an Excel .xlsx workbook (a zip file)"),
         ".sav": (head[:4] in (b"$FL2", b"$FL3"), "an SPSS .sav file"),
         ".zsav": (head[:4] == b"$FL3", "an SPSS .zsav file"),
-        ".dta": (head.startswith(b"<stata_dta>") or head[:1] in (b"\x71", b"\x72", b"\x73"), "a Stata .dta file"),
+        ".dta": (head.startswith(b"<stata_dta>") or (head[:1] in (b"\x71", b"\x72", b"\x73") and head[1:3] in (b"\x01\x01", b"\x02\x01")), "a Stata .dta file"),
         ".parquet": (head.startswith(b"PAR1"), "a Parquet file"),
     }
     if suffix in expected:
@@ -108,7 +108,7 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str) -> Dat
         book = pd.ExcelFile(p, engine="openpyxl")
         if sheet is not None and not isinstance(sheet, int) and sheet not in book.sheet_names:
             raise InputError(f"{p}: no sheet {sheet!r}; sheets: {', '.join(map(str, book.sheet_names))}")
-        return Dataset(book.parse(sheet if sheet is not None else 0), p)
+        return Dataset(pd.read_excel(book, sheet_name=sheet if sheet is not None else 0), p)
     if suffix == ".parquet":
         return Dataset(pd.read_parquet(p), p)
     import pyreadstat
