@@ -24,6 +24,7 @@ bench: $(STAMP)
 	$(BIN)/python bench/bench_render.py
 	$(BIN)/python bench/bench_analyses.py
 	$(BIN)/python bench/bench_docx.py
+	$(BIN)/python bench/bench_describe.py
 
 clean:
 	rm -rf $(VENV) dist build demo/out bench/out

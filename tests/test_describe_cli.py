@@ -35,7 +35,7 @@ def files(tmp_path_factory):
 def test_every_data_format(files, name, capsys):
     assert main(["describe", str(files / name), "--by", "species", "--vars", "sex,body_mass_g", "--out", str(files / f"{name}.md")]) == 0
     captured = capsys.readouterr()
-    assert "level: sex: nominal" in captured.err
+    assert "level: sex: nominal (" in captured.err
     md = (files / f"{name}.md").read_text(encoding="utf-8")
     assert "Adelie (*n* = 152)" in md and "Chinstrap (*n* = 68)" in md and "Gentoo (*n* = 124)" in md
     assert "| &nbsp;&nbsp;&nbsp;&nbsp;female | 73 (50.0) | 34 (50.0) | 58 (48.7) | 165 (49.5) |" in md
@@ -62,10 +62,10 @@ def test_weak_guess_is_a_warning(tmp_path, capsys):
     path.write_text("rating\n1\n2\n3\n4\n5\n3\n", encoding="utf-8")
     assert main(["describe", str(path)]) == 0
     captured = capsys.readouterr()
-    assert "warning: rating: ordinal, inferred: integer, 5 distinct values 1–5 (a weak guess: declare the level)" in captured.err
+    assert "warning: rating: ordinal (inferred from the values: integer, 5 distinct values 1–5; a weak guess: declare the level)" in captured.err
     assert "Mdn (IQR)" in captured.out
     assert main(["describe", str(path), "--level", "rating=interval"]) == 0
-    assert "level: rating: interval, declared" in capsys.readouterr().err
+    assert "level: rating: interval (declared)" in capsys.readouterr().err
 
 
 def test_missing_codes(tmp_path, capsys):

@@ -277,3 +277,25 @@ def test_percentages_are_exactly_rounded_half_up():
     assert "1 (6.3)" in cells and "15 (93.8)" in cells
     assert Decimal("6.3") + Decimal("93.8") != 100  # and so the rounding note appears
     assert "rounding" in d.table().general_note.text
+
+
+def test_scale_score_shows_as_continuous_with_alpha():
+    # pingouin's bundled cronbach_alpha data; alpha checked against pingouin.cronbach_alpha
+    from statsetter.analyses import cronbach_alpha, scale_score
+
+    items = pg.read_dataset("cronbach_alpha").pivot(index="Subj", columns="Items", values="Scores")
+    items.columns = [f"item{c}" for c in items.columns]
+    names = list(items.columns)
+    frame = items.assign(score=scale_score(items, names))
+    record = cronbach_alpha(frame, names)
+    reference = pg.cronbach_alpha(items)[0]
+    from_record = describe(frame, ["score"], alphas={"score": record})
+    from_number = describe(frame, ["score"], alphas={"score": reference})
+    assert from_record.variables[0].alpha == pytest.approx(reference, rel=1e-10)
+    assert from_record.variables[0].level.level == "interval"
+    expected = f"{reference:.2f}".lstrip("0")
+    assert from_record.table().rows[0].stub.text == from_number.table().rows[0].stub.text == f"score (α = {expected}), M (SD)"
+    with pytest.raises(InputError, match="not a number"):
+        describe(frame, ["score"], alphas={"score": "high"})
+    with pytest.raises(InputError, match="not described"):
+        describe(frame, ["score"], alphas={"other": 0.8})

@@ -40,8 +40,9 @@ class LevelReport:
         return self.level == "nominal" and self.reason.startswith("2 distinct")
 
     def describe(self) -> str:
-        flag = " (a weak guess: declare the level)" if self.weak else ""
-        return f"{self.name}: {self.level}, {self.source}: {self.reason}{flag}"
+        flag = "; a weak guess: declare the level" if self.weak else ""
+        why = f"inferred from the values: {self.reason}" if self.source == "inferred" else self.reason
+        return f"{self.name}: {self.level} ({why}{flag})"
 
 
 def check_level(name: str, level: str) -> Level:
@@ -103,7 +104,7 @@ def resolve_levels(
     out = {}
     for name in names:
         if name in declared:
-            out[name] = LevelReport(name, check_level(name, declared[name]), "declared", "declared by the author")
+            out[name] = LevelReport(name, check_level(name, declared[name]), "declared", "declared")
         elif name in metadata:
             out[name] = LevelReport(name, check_level(name, metadata[name]), "metadata", "the data file's measurement level")
         else:

@@ -8,6 +8,7 @@ from .anova import anova_oneway
 from .chisquare import chi_square, goodness_of_fit
 from .choose import analyse, level_of
 from .correlation import correlate
+from .descriptives import Description, describe
 from .matrix import CorrelationMatrix, correlation_matrix
 from .posthoc import factorial_anova, posthoc
 from .ranks import kruskal_wallis, mann_whitney, wilcoxon_signed_rank
@@ -17,6 +18,8 @@ from .ttests import t_independent, t_one_sample, t_paired
 
 __all__ = [
     "analyse",
+    "describe",
+    "Description",
     "level_of",
     "CorrelationMatrix",
     "correlation_matrix",

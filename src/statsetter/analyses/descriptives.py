@@ -182,8 +182,7 @@ def describe(
             df[name], name, labels.get(name, name), report, chosen[kind], groups, value_labels.get(name), moments=smd and kind == "ordinal"
         )
         if alphas and name in alphas:
-            a = alphas[name]
-            summary = _replace(summary, alpha=float(a.statistic.value if isinstance(a, Result) and a.statistic else a))  # type: ignore[arg-type]
+            summary = _replace(summary, alpha=_alpha_value(name, alphas[name]))
         if tests:
             summary = _replace(summary, **_test(df, name, by, kind, labels))  # type: ignore[arg-type]
         if smd:
@@ -206,6 +205,19 @@ def describe(
         suppress_below=suppress_below,
         dropped_no_group=dropped,
     )
+
+
+def _alpha_value(name: str, given: "float | Result") -> float:
+    """α from a number or from a cronbach_alpha record."""
+    if isinstance(given, Result):
+        found = next((e.value for e in given.effects if e.name == "alpha"), None)
+        if found is None:
+            raise InputError(f"{name}: the record given for α is a {given.kind} record without an alpha")
+        return found
+    try:
+        return float(given)
+    except (TypeError, ValueError):
+        raise InputError(f"{name}: α {given!r} is not a number") from None
 
 
 def _replace(summary: VariableSummary, **changes: Any) -> VariableSummary:
@@ -339,7 +351,7 @@ def _summarise(
     if kind == "ordinal" or "median_iqr" in show:
         # an ordered categorical's quartiles must be categories: the inverted CDF
         fields.update(_quantiles(x, ok, g, inverted=ordered))
-    if kind == "ordinal" or "range" in show:
+    if "range" in show:
         fields.update(_extremes(x, ok, g))
     if ordered or (kind == "ordinal" and "counts" in show):
         codes, categories = _codes(s, value_labels)
