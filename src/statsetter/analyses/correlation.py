@@ -16,6 +16,23 @@ if TYPE_CHECKING:
 Method = Literal["pearson", "spearman", "kendall"]
 
 
+SYMBOLS = {"pearson": "r", "spearman": "rs", "kendall": "tau_b"}
+
+
+def correlation_effect(method: str, value: float, n: int, level: float) -> EffectSize:
+    """The correlation as an effect size with its CI: Fisher's z with SE
+    1/√(n − 3) (Pearson), √((1 + rs²/2)/(n − 3)) (Spearman; Bonett & Wright,
+    2000) or √(0.437/(n − 4)) (Kendall; Fieller, Hartley & Pearson, 1957)."""
+    if method == "pearson":
+        se, name = None, "Fisher z"
+    elif method == "spearman":
+        se, name = math.sqrt((1 + value * value / 2) / (n - 3)), "Fisher z, Bonett & Wright (2000) SE"
+    else:
+        se, name = math.sqrt(0.437 / (n - 4)), "Fisher z, Fieller, Hartley & Pearson (1957) SE"
+    lo, hi = fisher_z_ci(value, n, level, se)
+    return EffectSize(SYMBOLS[method], value, Interval(level, lo, hi), method=name)
+
+
 def correlate(
     df: "pd.DataFrame",
     x: str,
@@ -42,29 +59,16 @@ def correlate(
     for name, v in ((x, a), (y, b)):
         if v.min() == v.max():
             raise InputError(f"{name}: zero variance (every value is {v[0]:g}); a correlation is undefined")
-    if method == "pearson":
-        res = stats.pearsonr(a, b, alternative=alternative)
-        value, p = float(res.statistic), float(res.pvalue)
-        lo, hi = fisher_z_ci(value, n, level)
-        symbol, kind, ci_method = "r", "pearson", "Fisher z"
-    elif method == "spearman":
-        res = stats.spearmanr(a, b, alternative=alternative)
-        value, p = float(res.statistic), float(res.pvalue)
-        lo, hi = fisher_z_ci(value, n, level, math.sqrt((1 + value * value / 2) / (n - 3)))
-        symbol, kind, ci_method = "rs", "spearman", "Fisher z, Bonett & Wright (2000) SE"
-    else:
-        res = stats.kendalltau(a, b, alternative=alternative)
-        value, p = float(res.statistic), float(res.pvalue)
-        lo, hi = fisher_z_ci(value, n, level, math.sqrt(0.437 / (n - 4)))
-        symbol, kind, ci_method = "tau_b", "kendall", "Fisher z, Fieller, Hartley & Pearson (1957) SE"
-    df_ = (n - 2,) if method != "kendall" else ()
+    test = {"pearson": stats.pearsonr, "spearman": stats.spearmanr, "kendall": stats.kendalltau}[method]
+    res = test(a, b, alternative=alternative)
+    value, p = float(res.statistic), float(res.pvalue)
     return Result(
-        kind=kind,
-        statistic=Statistic(symbol, value, df_),
+        kind=method,
+        statistic=Statistic(SYMBOLS[method], value, (n - 2,) if method != "kendall" else ()),
         p=p,
         alternative=alternative,  # type: ignore[arg-type]
         n=n,
-        effects=(EffectSize(symbol, value, Interval(level, lo, hi), method=ci_method),),
+        effects=(correlation_effect(method, value, n, level),),
         variables=c.variables({"x": x, "y": y}, labels),
         notes=c.notes(missing),
         provenance=c.provenance(f"statsetter.analyses.correlate({method})"),

@@ -1,0 +1,100 @@
+"""Result objects from scipy, pingouin and statsmodels → records.
+
+``to_records(obj)`` reads what the object holds. What it lacks (group means
+and SDs, effect sizes, n, labels) comes from the data when they are passed
+alongside — ``data=`` and ``columns=`` (the column arguments of the matching
+statsetter analysis), or ``samples=`` (the arrays the library function was
+given) — and every record says which parts are absent otherwise. Nothing is
+guessed: where an object does not say which function made it, ``source=``
+must.
+"""
+
+from __future__ import annotations
+
+from typing import TYPE_CHECKING, Any, Mapping, Sequence
+
+from ..errors import InputError
+from ..records import Result
+from ._core import Adapter, Context, frame_from_samples, merge
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+__all__ = ["to_records", "supported"]
+
+
+def _registry() -> dict[str, Adapter]:
+    from . import pingouin_frames, scipy_results, statsmodels_results
+
+    return {**scipy_results.ADAPTERS, **pingouin_frames.ADAPTERS, **statsmodels_results.ADAPTERS}
+
+
+def supported() -> list[str]:
+    """The library functions whose results ``to_records`` reads."""
+    return sorted(_registry())
+
+
+def _identify(obj: Any, source: str | None) -> Adapter:
+    registry = _registry()
+    if source is not None:
+        wanted = source if source in registry else next((k for k in registry if k.rsplit(".", 1)[-1] == source), None)
+        if wanted is None:
+            raise InputError(f"source: {source!r} is not supported; supported: {', '.join(sorted(registry))}")
+        return registry[wanted]
+    from . import pingouin_frames, scipy_results, statsmodels_results
+
+    cls = type(obj).__name__
+    module = type(obj).__module__ or ""
+    if module.startswith("scipy"):
+        if cls in scipy_results.BY_CLASS:
+            return registry[scipy_results.BY_CLASS[cls]]
+        if cls in scipy_results.SHARED_CLASS:
+            names = scipy_results.SHARED_CLASS[cls]
+            raise InputError(f"a scipy {cls} does not say which function made it; pass source= one of {', '.join(names)}")
+    found = statsmodels_results.identify(obj) or pingouin_frames.identify(obj)
+    if found is not None:
+        return registry[found]
+    raise InputError(f"cannot read a {module}.{cls} object; supported: {', '.join(sorted(registry))}")
+
+
+def to_records(
+    obj: Any,
+    source: str | None = None,
+    *,
+    data: "pd.DataFrame | None" = None,
+    columns: Mapping[str, Any] | None = None,
+    samples: Sequence[Any] | None = None,
+    groups: Sequence[str] | None = None,
+    labels: Mapping[str, str] | None = None,
+    n: int | None = None,
+    level: float = 0.95,
+    **options: Any,
+) -> list[Result]:
+    """Records from a scipy, pingouin or statsmodels result.
+
+    ``options`` are what the object does not record but the reading needs:
+    ``mu`` (one-sample t), ``yates`` (2 × 2 chi-square), ``variant``
+    (``"welch"``/``"student"``), ``kind`` (pingouin's ttest: ``t_independent``,
+    ``t_paired`` or ``t_one_sample``), ``ss_type``, ``df``, ``method``,
+    ``alternative``, ``k_items``.
+    """
+    adapter = _identify(obj, source)
+    if data is not None and samples is not None:
+        raise InputError("give data= with columns=, or samples=, not both")
+    if data is not None and not columns:
+        raise InputError("data= needs columns=, the column arguments of the matching analysis (e.g. {'outcome': 'y', 'group': 'g'})")
+    ctx = Context(adapter.name, data, dict(columns or {}), samples, groups, dict(labels or {}), n, level, dict(options))
+    mine = adapter.build(obj, ctx)
+    if not ctx.has_data or adapter.analysis is None:
+        return mine
+    if samples is not None:
+        if adapter.design is None:
+            raise InputError(f"{adapter.name}: pass data= and columns=, not samples=")
+        frame, cols = frame_from_samples(adapter.design, samples, groups)
+    else:
+        frame, cols = data, dict(columns or {})  # type: ignore[assignment]
+    try:
+        ours = adapter.analysis(frame, cols, ctx, mine)
+    except KeyError as exc:
+        raise InputError(f"columns: {adapter.name} needs the column argument {exc.args[0]!r}") from None
+    return merge(mine, ours, ctx, adapter.library, adapter.key)

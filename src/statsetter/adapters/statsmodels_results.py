@@ -1,0 +1,203 @@
+"""statsmodels results → records: OLS/WLS and Logit fits, anova_lm tables,
+pairwise_tukeyhsd results."""
+
+from __future__ import annotations
+
+import math
+import re
+from typing import Any
+
+from ..errors import InputError
+from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
+from ._core import Adapter, Context, absent, provenance
+
+LIB = "statsmodels"
+_INTERCEPT = ("Intercept", "const")
+
+
+def identify(obj: Any) -> str | None:
+    module = type(obj).__module__ or ""
+    cls = type(obj).__name__
+    if module.startswith("statsmodels"):
+        model = getattr(obj, "model", None)
+        model_name = type(model).__name__ if model is not None else ""
+        if model_name in ("OLS", "WLS"):
+            return "statsmodels.OLS"
+        if model_name == "Logit":
+            return "statsmodels.Logit"
+        if cls == "TukeyHSDResults":
+            return "statsmodels.pairwise_tukeyhsd"
+        return None
+    try:
+        import pandas as pd
+    except ImportError:  # pragma: no cover
+        return None
+    if isinstance(obj, pd.DataFrame) and {"sum_sq", "df", "F", "PR(>F)"} <= set(map(str, obj.columns)):
+        return "statsmodels.anova_lm"
+    return None
+
+
+def _base(ctx: Context, kind: str, notes: list[Note], **fields: Any) -> Result:
+    return Result(kind=kind, notes=tuple(notes), provenance=provenance(ctx, LIB, False), **fields)
+
+
+def term_name(name: str) -> str:
+    """``C(species)[T.Chinstrap]`` or ``species[T.Chinstrap]`` → ``species[Chinstrap]``;
+    ``C(a):C(b)`` → ``a × b`` (statsetter's names)."""
+    name = re.sub(r"C\(([^,)]+)(?:,[^)]*)?\)", r"\1", str(name))
+    name = name.replace("[T.", "[")
+    return " × ".join(name.split(":"))
+
+
+def _level(ctx: Context) -> float:
+    return ctx.level
+
+
+def ols(res: Any, ctx: Context) -> list[Result]:
+    import numpy as np
+
+    level = _level(ctx)
+    ci = np.asarray(res.conf_int(alpha=1 - level))
+    names = list(res.model.exog_names)
+    terms = [n for n in names if n not in _INTERCEPT]
+    n = int(res.nobs)
+    weighted = type(res.model).__name__ == "WLS"
+    model = _base(ctx, "linear_model", [], statistic=Statistic("F", float(res.fvalue), (float(res.df_model), float(res.df_resid))),
+                  p=float(res.f_pvalue), n=n, effects=(EffectSize("R2", float(res.rsquared)), EffectSize("R2_adj", float(res.rsquared_adj))),
+                  details={"predictors": " and ".join(term_name(t) for t in terms)})
+    out = [model]
+    y = np.asarray(res.model.endog, dtype=float)
+    X = np.asarray(res.model.exog, dtype=float)
+    for j, name in enumerate(names):
+        if name in _INTERCEPT:
+            continue
+        b = float(np.asarray(res.params)[j])
+        effects: tuple[EffectSize, ...] = ()
+        notes: list[Note] = []
+        if weighted:
+            notes.append(Note("missing", "β is not given for a weighted fit."))
+        else:
+            effects = (EffectSize("beta", b * float(X[:, j].std(ddof=1)) / float(y.std(ddof=1)), method="B·SD(x)/SD(y)"),)
+        out.append(_base(ctx, "linear_coefficient", notes, statistic=Statistic("t", float(np.asarray(res.tvalues)[j]), (float(res.df_resid),)),
+                         p=float(np.asarray(res.pvalues)[j]), n=n,
+                         estimate=Estimate("B", b, se=float(np.asarray(res.bse)[j]), ci=Interval(level, float(ci[j, 0]), float(ci[j, 1]))),
+                         effects=effects, details={"term": term_name(name), "adjusted": len(terms) > 1}))
+    return out
+
+
+def logit(res: Any, ctx: Context) -> list[Result]:
+    import numpy as np
+
+    level = _level(ctx)
+    n = int(res.nobs)
+    llf, llnull = float(res.llf), float(res.llnull)
+    cox_snell = 1 - math.exp(2 * (llnull - llf) / n)
+    nagelkerke = cox_snell / (1 - math.exp(2 * llnull / n))
+    names = list(res.model.exog_names)
+    terms = [t for t in names if t not in _INTERCEPT]
+    model = _base(ctx, "logistic_model", [], statistic=Statistic("chi2", float(res.llr), (float(res.df_model),)), p=float(res.llr_pvalue), n=n,
+                  effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"),), details={"predictors": " and ".join(term_name(t) for t in terms)})
+    ci = np.asarray(res.conf_int(alpha=1 - level))
+    out = [model]
+    for j, name in enumerate(names):
+        if name in _INTERCEPT:
+            continue
+        b = float(np.asarray(res.params)[j])
+        low, high = float(ci[j, 0]), float(ci[j, 1])
+        out.append(_base(ctx, "logistic_coefficient", [], statistic=Statistic("z", float(np.asarray(res.tvalues)[j])), p=float(np.asarray(res.pvalues)[j]), n=n,
+                         estimate=Estimate("B", b, se=float(np.asarray(res.bse)[j]), ci=Interval(level, low, high)),
+                         effects=(EffectSize("OR", math.exp(b), Interval(level, math.exp(low), math.exp(high)), ratio=True),),
+                         details={"term": term_name(name), "adjusted": len(terms) > 1}))
+    return out
+
+
+def anova_lm(frame: Any, ctx: Context) -> list[Result]:
+    rows = [str(i) for i in frame.index]
+    if "Residual" not in rows:
+        raise InputError("statsmodels.anova_lm: no Residual row; pass the table anova_lm returned")
+    typ = 1 if "mean_sq" in frame.columns else (3 if "Intercept" in rows else 2)
+    residual = frame.loc["Residual"]
+    ss_res, df_res = float(residual["sum_sq"]), float(residual["df"])
+    terms = [r for r in rows if r not in ("Residual", "Intercept")]
+    if len(terms) == 1 and typ != 3:
+        row = frame.loc[terms[0]]
+        ss_b, df_b = float(row["sum_sq"]), float(row["df"])
+        ms_w = ss_res / df_res
+        effects = (EffectSize("eta2", ss_b / (ss_b + ss_res)), EffectSize("omega2", (ss_b - df_b * ms_w) / (ss_b + ss_res + ms_w), method="Hays (1963); may be negative"))
+        return [_base(ctx, "anova_oneway", [absent(ctx, ["group summaries", "N"])], statistic=Statistic("F", float(row["F"]), (df_b, df_res)),
+                      p=float(row["PR(>F)"]), effects=effects, n=int(df_b + df_res + 1), details={"variant": "classic"})]
+    if typ == 1:
+        raise InputError("statsmodels.anova_lm: a sequential (type I) table; statsetter reports type II or III sums of squares (typ=2 or typ=3)")
+    out = []
+    for term in terms:
+        row = frame.loc[term]
+        ss = float(row["sum_sq"])
+        name = term_name(term)
+        out.append(_base(ctx, "anova_term", [Note("method", f"Type {'II' if typ == 2 else 'III'} sums of squares, as the table's rows show.")],
+                         statistic=Statistic("F", float(row["F"]), (float(row["df"]), df_res)), p=float(row["PR(>F)"]),
+                         effects=(EffectSize("eta2_p", ss / (ss + ss_res)),), details={"term": name, "interaction": "×" in name, "ss_type": typ}))
+    return out
+
+
+def tukeyhsd(res: Any, ctx: Context) -> list[Result]:
+    import numpy as np
+
+    labels = [str(g) for g in res.groupsunique]
+    pairs = [(i, j) for i in range(len(labels)) for j in range(i + 1, len(labels))]
+    level = 1 - float(res._multicomp.alpha) if hasattr(res, "_multicomp") and hasattr(res._multicomp, "alpha") else ctx.level
+    ci = np.asarray(res.confint)
+    out = []
+    for (i, j), diff, (low, high), p in zip(pairs, np.asarray(res.meandiffs), ci, np.asarray(res.pvalues)):
+        a, b = (i, j) if labels[i] <= labels[j] else (j, i)
+        sign = 1.0 if (a, b) == (j, i) else -1.0  # statsmodels reports mean_j − mean_i; statsetter first − second
+        d, lo, hi = sign * float(diff), *sorted((sign * float(low), sign * float(high)))
+        out.append(_base(ctx, "posthoc_pair", [absent(ctx, ["group n, M and SD"])], p=float(min(max(p, 0.0), 1.0)),
+                         estimate=Estimate("mean difference", d, ci=Interval(level, lo, hi)), groups=(GroupSummary(labels[a]), GroupSummary(labels[b])),
+                         details={"procedure": "Tukey HSD", "comparisons": len(pairs)}))
+    return out
+
+
+def _linear(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses import linear_regression
+
+    return linear_regression(frame, cols["outcome"], cols["predictors"], reference=cols.get("reference"), level=ctx.level, labels=ctx.labels)
+
+
+def _logistic(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses import logistic_regression
+
+    return logistic_regression(frame, cols["outcome"], cols["predictors"], event=cols.get("event"), reference=cols.get("reference"), level=ctx.level, labels=ctx.labels)
+
+
+def _anova(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses import anova_oneway, factorial_anova
+
+    if mine[0].kind == "anova_oneway":
+        return [anova_oneway(frame, cols["outcome"], cols["group"], labels=ctx.labels)]
+    return factorial_anova(frame, cols["outcome"], tuple(cols["factors"]), ss_type=int(mine[0].details["ss_type"]), labels=ctx.labels)  # type: ignore[arg-type]
+
+
+def _tukey(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses import posthoc
+
+    level = mine[0].estimate.ci.level if mine and mine[0].estimate and mine[0].estimate.ci else ctx.level
+    return posthoc(frame, cols["outcome"], cols["group"], "tukey", level=level, labels=ctx.labels)
+
+
+def _term_key(r: Result) -> str:
+    return str(r.details.get("term", r.kind))
+
+
+def _pair_key(r: Result) -> tuple[str, str]:
+    return (r.groups[0].label, r.groups[1].label)
+
+
+ADAPTERS = {
+    a.name: a
+    for a in (
+        Adapter("statsmodels.OLS", LIB, ols, None, _linear, _term_key),
+        Adapter("statsmodels.Logit", LIB, logit, None, _logistic, _term_key),
+        Adapter("statsmodels.anova_lm", LIB, anova_lm, None, _anova, _term_key),
+        Adapter("statsmodels.pairwise_tukeyhsd", LIB, tukeyhsd, "k", _tukey, _pair_key),
+    )
+}
