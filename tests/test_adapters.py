@@ -330,6 +330,12 @@ def test_statsmodels_fits(penguins):
     logit = logistic_regression(penguins, "male", ["body_mass_g", "bill_depth_mm"])
     lfit = smf.logit("male ~ body_mass_g + bill_depth_mm", data=penguins).fit(disp=0)
     assert same_all(to_records(lfit), logit, key, ("statistic", "p", "R2_nagelkerke", "OR.high")) >= 20
+    # WLS with unit weights is OLS: statsetter's (unweighted) analysis is the reference; β is not given for a weighted fit
+    wls = sm.WLS(penguins.body_mass_g, sm.add_constant(penguins[["bill_length_mm"]]), weights=np.ones(len(penguins))).fit()
+    unweighted = linear_regression(penguins, "body_mass_g", ["bill_length_mm"])
+    wrecs = to_records(wls)
+    assert same_all(wrecs, unweighted, key, ("statistic", "p", "estimate.low", "R2")) >= 15
+    assert not wrecs[1].effects and "weighted" in wrecs[1].notes[0].text
     fair = sm.datasets.fair.load_pandas().data
     ours_fair = linear_regression(fair, "affairs", ["age", "yrs_married"])
     fair_fit = sm.OLS(fair.affairs, sm.add_constant(fair[["age", "yrs_married"]])).fit()

@@ -91,6 +91,8 @@ def to_records(
         if adapter.design is None:
             raise InputError(f"{adapter.name}: pass data= and columns=, not samples=")
         frame, cols = frame_from_samples(adapter.design, samples, groups)
+        # labels may name the roles ("outcome", "group", "x" ...) of the columns made from the samples
+        ctx.labels = {**ctx.labels, **{cols[role]: text for role, text in ctx.labels.items() if isinstance(cols.get(role), str)}}
     else:
         frame, cols = data, dict(columns or {})  # type: ignore[assignment]
     try:
