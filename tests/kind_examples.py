@@ -212,4 +212,10 @@ EXAMPLES = {
         variables=(V("scale", "scale", "the scale"),),
         details={"k_items": 8},
     ),
+    "reported": Result(
+        kind="reported",
+        statistic=Statistic("z", 2.5758),
+        p=0.01,
+        effects=(EffectSize("d", 0.4127, Interval(CI, 0.1011, 0.7243)),),
+    ),
 }

@@ -126,6 +126,11 @@ GOLDEN = {
         'α = .84, 95% CI [.81, .87]',
         "Internal consistency of the scale (8 items, N = 200) was Cronbach's α = .84, 95% CI [.81, .87].",
     ),
+    # REPORTING-RULES Numbers: p exact to three decimals, d with its CI (APA 7 §6.36, JARS)
+    'reported': (
+        '<i>z</i> = 2.58, <i>p</i> = .010, <i>d</i> = 0.41, 95% CI [0.10, 0.72]',
+        'z = 2.58, p = .010, d = 0.41, 95% CI [0.10, 0.72].',
+    ),
 }
 
 

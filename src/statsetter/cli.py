@@ -2,8 +2,8 @@
 
 Commands: ``format`` (one result from numbers on the command line),
 ``render`` (JSON files of records), ``fill`` (markers in a chapter),
-``describe`` (a descriptives table from a data file), ``styles`` (list,
-show, check). Every
+``describe`` (a descriptives table from a data file), ``audit`` (a
+manuscript's statistics checked), ``styles`` (list, show, check). Every
 error from user input prints one or two lines and exits with status 2.
 """
 
@@ -133,6 +133,26 @@ def _build_parser() -> argparse.ArgumentParser:
     d.add_argument("--number", type=int, default=1, help="table number (1)")
     d.add_argument("--style", default=None, help="a built-in style name or a TOML file")
     d.add_argument("--out", metavar="FILE", help="its extension picks the format: .md .html .tex .csv .txt .docx (default: text to standard output)")
+
+    a = sub.add_parser(
+        "audit",
+        help="find the statistics in a manuscript, check them and propose house-style text",
+        description="Audit a manuscript (.docx, .md, .txt, .tex): every reported statistic is checked "
+        "(p against the statistic and df, impossible values, the style) and restyled. The file is never "
+        "modified. Exit 0: nothing found; 1: findings; 2: usage or input error. A finding is a reason to look, "
+        "not proof of an error.",
+    )
+    a.add_argument("manuscript", metavar="FILE")
+    a.add_argument("--style", default=None, help="the house style to check against (default apa7)")
+    a.add_argument("--alpha", type=float, default=0.05, help="the significance level for decision checks (0.05)")
+    shape = a.add_mutually_exclusive_group()
+    shape.add_argument("--json", action="store_true", help="one JSON array with every statistic found")
+    shape.add_argument("--csv", action="store_true", help="the same rows as CSV")
+    a.add_argument("--out", metavar="FILE", help="write the JSON or CSV to FILE instead of standard output")
+    a.add_argument("--all", action="store_true", help="list clean statistics in the table too")
+    a.add_argument("--annotate", metavar="OUT.docx", help="write a copy of a .docx with a Word comment on each finding")
+    a.add_argument("--encoding", default="utf-8", help="text encoding of a .md/.txt/.tex file (utf-8)")
+    a.add_argument("--grim-items", type=int, metavar="K", help="run the GRIM test on means, for integer scores summed over K items")
 
     s = sub.add_parser("styles", help="list, show or check style profiles")
     s.add_argument("action", nargs="?", choices=("list", "show", "check"), default="list")
@@ -360,6 +380,31 @@ def _cmd_describe(ns: argparse.Namespace) -> int:
     return 0
 
 
+def _cmd_audit(ns: argparse.Namespace) -> int:
+    from .audit.report import annotate, as_csv, as_json, audit_file, print_table
+
+    if not 0 < ns.alpha < 1:
+        raise InputError(f"--alpha: {ns.alpha:g} is not between 0 and 1")
+    if ns.annotate and not Path(ns.manuscript).suffix.lower() == ".docx":
+        raise InputError("--annotate: comments can be added to a .docx manuscript only")
+    if ns.annotate and not ns.annotate.lower().endswith(".docx"):
+        raise InputError(f"--annotate: {ns.annotate} does not end in .docx")
+    if ns.out and not (ns.json or ns.csv):
+        raise InputError("--out: choose --json or --csv")
+    if ns.grim_items is not None and ns.grim_items < 1:
+        raise InputError("--grim-items: give a whole number of 1 or more")
+    entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items)
+    if ns.json or ns.csv:
+        _emit(as_json(entries) if ns.json else as_csv(entries), ns.out, inputs=[ns.manuscript])
+    else:
+        print_table(entries, everything=ns.all)
+    if ns.annotate:
+        added, elsewhere = annotate(ns.manuscript, entries, ns.annotate)
+        note = f" ({elsewhere} in headers, footers or notes listed only)" if elsewhere else ""
+        sys.stderr.write(f"wrote {ns.annotate} with {added} comment(s){note}\n")
+    return 1 if any(e.findings for e in entries) else 0
+
+
 def _cmd_styles(ns: argparse.Namespace) -> int:
     from .style import builtin_styles, check_style_file, load_style
 
@@ -410,7 +455,7 @@ def main(argv: Sequence[str] | None = None) -> int:
     if ns.command is None:
         parser.print_help()
         return 0
-    handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "describe": _cmd_describe, "styles": _cmd_styles}
+    handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "describe": _cmd_describe, "audit": _cmd_audit, "styles": _cmd_styles}
     try:
         return handlers[ns.command](ns)
     except StatsetterError as exc:

@@ -12,7 +12,7 @@ from ..errors import InputError
 if TYPE_CHECKING:
     from docx.document import Document
 
-__all__ = ["open_docx", "MAX_UNPACKED"]
+__all__ = ["open_docx", "check_docx", "MAX_UNPACKED"]
 
 MAX_UNPACKED = 1 << 30  # 1 GiB unpacked, against zip bombs
 MAX_RATIO = 200  # unpacked / packed, per member of any size above 1 MiB
@@ -22,6 +22,16 @@ _OLE = b"\xd0\xcf\x11\xe0\xa1\xb1\x1a\xe1"
 def open_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> "Document":
     import docx
 
+    p = Path(path)
+    check_docx(p, max_unpacked=max_unpacked)
+    try:
+        return docx.Document(str(p))
+    except Exception as exc:  # python-docx raises several kinds on malformed parts
+        raise InputError(f"{p}: not a readable Word document ({type(exc).__name__})") from None
+
+
+def check_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> None:
+    """Refuse, with a clear message, what is not a safe Word document to read."""
     p = Path(path)
     try:
         head = p.open("rb").read(8)
@@ -49,7 +59,3 @@ def open_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> "Docum
                 raise InputError(f"{p}: unpacks to {total:,} bytes, over the limit of {max_unpacked:,}")
     except zipfile.BadZipFile:
         raise InputError(f"{p}: a damaged zip archive, not a readable .docx") from None
-    try:
-        return docx.Document(str(p))
-    except Exception as exc:  # python-docx raises several kinds on malformed parts
-        raise InputError(f"{p}: not a readable Word document ({type(exc).__name__})") from None

@@ -27,6 +27,7 @@ KINDS: dict[str, str] = {
     "wilcoxon": "Wilcoxon signed-rank test",
     "kruskal_wallis": "Kruskal-Wallis H test",
     "cronbach_alpha": "Cronbach's alpha of a scale",
+    "reported": "a statistic as a manuscript reports it (read by the audit): statistic, p, effect sizes",
 }
 
 FORMS: tuple[str, ...] = ("stats", "sentence")

@@ -81,7 +81,7 @@ class Helpers:
 
     def globals(self) -> dict[str, Callable[..., Any]]:
         names = (
-            "sym stat pv eff ci_of ci_after value est desc cat join count pct number df sided var "
+            "sym stat pv eff effects ci_of ci_after value est desc cat join count pct number df sided var "
             "cap verdict significant direction_word"
         ).split()
         out = {name: getattr(self, name) for name in names}
@@ -179,6 +179,10 @@ class Helpers:
         if with_ci and e.ci is not None:
             out += self._ci_attach + self._ci(r, e.ci, e.name, e.null, f"effects[{i}].ci")
         return out
+
+    def effects(self, r: Result) -> Markup:
+        """Every effect size with its CI, in the record's order."""
+        return self.join(*[Markup(self._effect(r, e, i, True)) for i, e in enumerate(r.effects)])
 
     def value(self, r: Result, path: str, value: float, quantity: str = "default") -> Markup:
         return Markup(self.num.number(value, quantity, held=_held(r, f"{path}.value")))

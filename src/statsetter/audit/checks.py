@@ -1,0 +1,349 @@
+"""Checks on a reported statistic, and its record for the restyled text.
+
+Each finding has a short code. The consistency checks recompute p from the
+statistic and df with interval arithmetic on the printed precision: a
+printed ``t(23) = 2.10`` stands for any t in [2.095, 2.105], so p may be
+anything between the p values of those two ends, and a printed ``p = .03``
+for any p in [.025, .035]; the two intervals must meet. The style checks ask
+the same number engine the renderer uses, so the audit and the generated
+text can never disagree about the style.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass
+from typing import Sequence
+
+from ..records import EffectSize, Interval, Result, Statistic
+from ..style.numbers import Numbers, numbers_for
+from ..style.profile import Style
+from .parsing import Effect, Number, Reported
+
+# code: (what it means, the REPORTING-RULES.md rule and its source)
+CODES: dict[str, tuple[str, str]] = {
+    "p-inconsistent": ("the reported p does not follow from the statistic and df", "Numbers: exact p (APA 7 §6.36); consistency as in Nuijten et al. (2016)"),
+    "decision-error": ("the inconsistency changes the decision at alpha", "Numbers: decision-preserving p (practice)"),
+    "one-sided": ("the p agrees only with a one-sided test; say so if that was the test", "Say which test was run (practice)"),
+    "impossible-r": ("a correlation outside [−1, 1]", "Reporting by test: correlation (practice)"),
+    "impossible-p": ("a p value outside [0, 1]", "Numbers: p (APA 7 §6.36)"),
+    "impossible-value": ("a bounded effect size outside its range", "Numbers: bounded quantities (APA 7 §6.36)"),
+    "negative-statistic": ("a negative F or χ²", "Reporting by test (practice)"),
+    "negative-sd": ("a negative standard deviation", "Descriptives (APA 7 §6.44)"),
+    "ci-reversed": ("a CI whose lower limit is above its upper", "Confidence intervals (APA 7 §6.44)"),
+    "ci-excludes-estimate": ("a CI that does not contain its estimate", "Confidence intervals (APA 7 §6.44)"),
+    "df-not-integer": ("non-integer df where the test needs whole numbers", "Reporting by test (practice; Welch t keeps decimals)"),
+    "leading-zero": ("a leading zero on a quantity that cannot exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
+    "missing-leading-zero": ("no leading zero on a quantity that can exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
+    "decimals": ("decimals other than the style's", "Numbers: decimals (APA 7 §6.36)"),
+    "p-threshold": ("p given as a threshold instead of exactly", "Numbers: exact p (APA 7 §6.36)"),
+    "p-zero": ("p = .000; a p value is never zero", "Numbers: never p = .000 (APA 7 §6.36)"),
+    "spacing": ("no space around an operator", "Statistics in text: spaces around = < > (APA 7 §6.45)"),
+    "hyphen-minus": ("a hyphen or dash where the style has a minus sign", "Numbers: true minus sign (practice; APA examples)"),
+    "italics": ("a Latin symbol not in italics, or a Greek one in italics", "Statistics in text: italic symbols (APA 7 §6.45)"),
+    "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
+}
+
+_LATIN = {"t", "F", "r", "z", "U", "H", "W", "T", "p", "P", "d", "g", "V", "R", "M", "SD", "Mdn", "N", "n"}
+_BOUNDED_EFFECTS = {"V": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_WHOLE_DF = {"F", "chi2", "r", "rs", "H"}
+_RANK_SUMS = {"U", "W", "T"}
+_KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon"}
+
+
+@dataclass(frozen=True, slots=True)
+class Finding:
+    code: str
+    message: str
+    evidence: str = ""
+
+
+# -- consistency ----------------------------------------------------------------
+
+
+def _p_of(symbol: str, value: float, df: tuple[float, ...]) -> float:
+    from ..pvalues import p_from_statistic
+
+    return p_from_statistic("chi2" if symbol == "H" else symbol, value, df)
+
+
+def p_range(rep: Reported) -> tuple[float, float] | None:
+    """The two-sided (upper-tail for F, χ², H) p values the printed statistic allows."""
+    if rep.symbol is None or rep.value is None or rep.op != "=":
+        return None
+    need = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1}.get(rep.symbol)
+    if need is None or len(rep.df) != need or any(d.value <= 0 for d in rep.df):
+        return None
+    df = tuple(d.value for d in rep.df)
+    v, h = abs(rep.value.value), rep.value.half_unit
+    lo, hi = max(v - h, 0.0), v + h
+    if rep.symbol in ("r", "rs"):
+        if lo >= 1:
+            return None
+        hi = min(hi, 1.0)
+    if rep.symbol in ("F", "chi2", "H") and rep.value.value < 0:
+        return None
+    try:
+        return _p_of(rep.symbol, hi, df), _p_of(rep.symbol, lo, df)
+    except Exception:  # a degenerate df or value: no recomputation
+        return None
+
+
+def reported_p_range(rep: Reported, alpha: float) -> tuple[float, float] | None:
+    p = rep.p
+    if p is None:
+        return None
+    if p.op == "ns":
+        return alpha, 1.0
+    assert p.number is not None
+    v, h = p.number.value, p.number.half_unit
+    if p.op == "=":
+        return max(v - h, 0.0), v + h
+    if p.op in ("<", "≤"):
+        return 0.0, v
+    return v, 1.0
+
+
+def _overlap(a: tuple[float, float], b: tuple[float, float]) -> bool:
+    eps = 1e-12
+    return a[0] <= b[1] + eps and b[0] <= a[1] + eps
+
+
+def consistency(rep: Reported, alpha: float) -> list[Finding]:
+    computed, reported = p_range(rep), reported_p_range(rep, alpha)
+    if computed is None or reported is None:
+        return []
+    if _overlap(computed, reported):
+        return []
+    assert rep.p is not None
+    shown = rep.p.op if rep.p.op == "ns" else f"p {rep.p.op} {rep.p.number.text}"  # type: ignore[union-attr]
+    evidence = f"{rep.text[: rep.value.end - rep.start] if rep.value else rep.symbol_text} gives p from {computed[0]:.4g} to {computed[1]:.4g}; reported {shown}"
+    if rep.symbol in ("t", "z", "r", "rs") and _overlap((computed[0] / 2, computed[1] / 2), reported):
+        return [Finding("one-sided", "The reported p matches a one-sided test only; say that the test was one-sided, or report the two-sided p.", evidence)]
+    found = [Finding("p-inconsistent", "The reported p does not follow from the statistic and its df.", evidence)]
+    said_significant = reported[1] <= alpha
+    if (said_significant and computed[0] >= alpha) or (not said_significant and computed[1] < alpha):
+        found.append(Finding("decision-error", f"At alpha = {alpha:g} the recomputed p leads to the other decision.", evidence))
+    return found
+
+
+def impossible(rep: Reported) -> list[Finding]:
+    out = []
+    if rep.p is not None and rep.p.number is not None and not 0 <= rep.p.number.value <= 1:
+        out.append(Finding("impossible-p", "A p value must lie between 0 and 1.", rep.p.number.text))
+    if rep.value is not None:
+        if rep.symbol in ("r", "rs") and abs(rep.value.value) > 1:
+            out.append(Finding("impossible-r", "A correlation must lie between −1 and 1.", rep.value.text))
+        if rep.symbol in ("F", "chi2", "H") and rep.value.value < 0:
+            out.append(Finding("negative-statistic", f"{rep.symbol_text} cannot be negative.", rep.value.text))
+    if rep.symbol in _WHOLE_DF:
+        for d in rep.df:
+            if not float(d.value).is_integer():
+                out.append(Finding("df-not-integer", f"The df of {rep.symbol_text} are whole numbers.", d.text))
+    for e in rep.effects:
+        bounds = _BOUNDED_EFFECTS.get(e.name)
+        if bounds and not bounds[0] <= e.number.value <= bounds[1]:
+            out.append(Finding("impossible-value", f"{e.symbol_text} must lie between {bounds[0]} and {bounds[1]}.", e.number.text))
+    for e in rep.descriptives:
+        if e.name == "SD" and e.number.value < 0:
+            out.append(Finding("negative-sd", "A standard deviation cannot be negative.", e.number.text))
+    intervals = [(e.ci, e.number, e.symbol_text) for e in rep.effects if e.ci is not None]
+    if rep.ci is not None and rep.symbol in ("r", "rs") and rep.value is not None:
+        intervals.append((rep.ci, rep.value, rep.symbol_text))
+    elif rep.ci is not None:
+        intervals.append((rep.ci, None, ""))  # type: ignore[arg-type]
+    for ci, estimate, name in intervals:
+        if ci.low.value > ci.high.value:
+            out.append(Finding("ci-reversed", "The lower limit of the CI is above the upper.", f"[{ci.low.text}, {ci.high.text}]"))
+        elif estimate is not None:
+            slack = max(estimate.half_unit, ci.low.half_unit, ci.high.half_unit)
+            if not ci.low.value - slack <= estimate.value <= ci.high.value + slack:
+                out.append(Finding("ci-excludes-estimate", f"The CI does not contain {name} = {estimate.text}.", f"[{ci.low.text}, {ci.high.text}]"))
+    return out
+
+
+# -- style ----------------------------------------------------------------------
+
+
+def _numbers_with_quantity(rep: Reported) -> list[tuple[Number, str]]:
+    out: list[tuple[Number, str]] = []
+    if rep.value is not None and rep.symbol is not None:
+        out.append((rep.value, rep.symbol))
+    if rep.p is not None and rep.p.number is not None:
+        out.append((rep.p.number, "p"))
+    for e in rep.effects + rep.descriptives:
+        out.append((e.number, e.name))
+        if e.ci is not None:
+            out += [(e.ci.low, e.name), (e.ci.high, e.name)]
+    if rep.ci is not None:
+        q = rep.symbol if rep.symbol in ("r", "rs") else "default"
+        out += [(rep.ci.low, q), (rep.ci.high, q)]  # type: ignore[list-item]
+    return out
+
+
+def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic: Sequence[tuple[int, int]] | None) -> list[Finding]:
+    num = numbers_for(style)
+    mark = style.decimal_mark
+    out: list[Finding] = []
+    zero, no_zero, minus = [], [], []
+    for n, q in _numbers_with_quantity(rep):
+        digits = n.digits
+        if digits.startswith("0" + mark) and num.is_bounded(q):
+            zero.append(n.text)
+        elif digits.startswith(mark) and not num.is_bounded(q):
+            no_zero.append(n.text)
+        if n.sign and n.sign != style.minus:
+            minus.append(n.text)
+    if zero:
+        out.append(Finding("leading-zero", "No leading zero before a quantity that cannot exceed 1.", ", ".join(zero)))
+    if no_zero:
+        out.append(Finding("missing-leading-zero", "A leading zero before a quantity that can exceed 1.", ", ".join(no_zero)))
+    if minus:
+        out.append(Finding("hyphen-minus", f"Write negative numbers with the minus sign {style.minus!r}.", ", ".join(minus)))
+    out += _decimals(rep, num, alpha)
+    p = rep.p
+    if p is not None:
+        floor = style.p.get("floor", 0) or 0
+        ceiling = style.p.get("ceiling", 0) or 0
+        if p.op == "ns" or (p.op in ("<", "≤") and not (floor and math.isclose(p.number.value, floor))) or (  # type: ignore[union-attr]
+            p.op in (">", "≥") and not (ceiling and math.isclose(p.number.value, ceiling))  # type: ignore[union-attr]
+        ):
+            out.append(Finding("p-threshold", "Report the exact p (thresholds only below the style's smallest p).", text[p.start : p.end]))
+        elif p.op == "=" and p.number is not None and p.number.value == 0:
+            out.append(Finding("p-zero", f"A p value is never zero; write p < {num.p(0.0, alpha)[1]}.", text[p.start : p.end]))
+    tight = [text[s:e] for s, e in rep.operators if not (text[s:s + 1].isspace() and text[e - 1 : e].isspace())]
+    if tight:
+        out.append(Finding("spacing", "Put a space on each side of =, < and >.", ", ".join(t.strip() for t in tight)))
+    if italic is not None:
+        out += _italics(rep, text, italic)
+    return out
+
+
+def _decimals(rep: Reported, num: Numbers, alpha: float) -> list[Finding]:
+    wrong = []
+    if rep.value is not None and rep.symbol is not None and rep.symbol not in _RANK_SUMS:
+        want = num.decimals_for(rep.symbol)
+        if rep.value.decimals != want:
+            wrong.append(f"{rep.value.text} ({want} wanted)")
+    for e in rep.effects:
+        want = num.decimals_for(e.name)
+        if e.number.decimals != want:
+            wrong.append(f"{e.number.text} ({want} wanted)")
+    p = rep.p
+    if p is not None and p.op == "=" and p.number is not None and p.number.value > 0:
+        want = num.decimals_for("p")
+        shown = p.number.decimals
+        if shown < want and p.number.value >= (num._p_floor or 0):
+            wrong.append(f"p = {p.number.text} ({want} wanted)")
+        elif shown > want:
+            kept = num.p(p.number.value, alpha)[1]
+            if len(kept.split(num._mark)[-1]) < shown:
+                wrong.append(f"p = {p.number.text} ({want} wanted)")
+    return [Finding("decimals", "Decimals differ from the style's.", "; ".join(wrong))] if wrong else []
+
+
+def _is_italic(at: int, spans: Sequence[tuple[int, int]]) -> bool:
+    return any(s <= at < e for s, e in spans)
+
+
+def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]]) -> list[Finding]:
+    bad = []
+    symbols: list[tuple[int, str]] = []
+    if rep.symbol is not None:
+        symbols.append((rep.symbol_start, rep.symbol_text))
+    if rep.p is not None and rep.p.op != "ns":
+        symbols.append((rep.p.symbol_start, rep.p.symbol_text))
+    for e in rep.effects + rep.descriptives:
+        symbols.append((e.symbol_start, e.symbol_text))
+    for start, symbol in symbols:
+        letters = [(start + i, ch) for i, ch in enumerate(symbol) if ch.isalpha()]
+        if not letters:
+            continue
+        head = letters[0][1]
+        if head.isascii():
+            if symbol.strip() in _LATIN or head in "tFrzUHWTpPdgVRMNn":
+                if not _is_italic(letters[0][0], spans):
+                    bad.append(f"{symbol} (not italic)")
+        elif _is_italic(letters[0][0], spans):
+            bad.append(f"{symbol} (Greek: roman)")
+    return [Finding("italics", "Latin statistical symbols are italic; Greek letters are not.", ", ".join(bad))] if bad else []
+
+
+def grim(rep: Reported, items: int) -> list[Finding]:
+    """GRIM (Brown & Heathers, 2016): a mean of n integer scores (``items``
+    items each) is a multiple of 1/(n·items), so only some printed means are possible."""
+    if rep.n is None:
+        return []
+    n = int(rep.n.value)
+    out = []
+    for e in rep.descriptives:
+        if e.name != "M" or n <= 0 or e.number.decimals == 0:
+            continue
+        total = n * items
+        if total >= 10 ** e.number.decimals:
+            continue  # every printed mean is possible
+        k = round(e.number.value * total)
+        candidates = [c / total for c in (k - 1, k, k + 1)]
+        if not any(abs(c - e.number.value) <= e.number.half_unit + 1e-12 for c in candidates):
+            out.append(Finding("grim", f"A mean of {n} integer scores cannot be {e.number.text}.", f"M = {e.number.text}, n = {n}, {items} item(s)"))
+    return out
+
+
+# -- the record behind the suggestion -----------------------------------------
+
+
+def to_record(rep: Reported, alpha: float = 0.05) -> Result:
+    """The reported statistic as a record, every number held to its printed decimals."""
+    precision: dict[str, int] = {}
+    statistic = None
+    if rep.symbol is not None and rep.value is not None:
+        df = tuple(d.value for d in rep.df)
+        statistic = Statistic(rep.symbol, rep.value.value, df if all(d > 0 for d in df) else ())
+        precision["statistic.value"] = rep.value.decimals
+    p = None
+    if rep.p is not None and rep.p.op == "=" and rep.p.number is not None and 0 < rep.p.number.value <= 1:
+        p = rep.p.number.value
+        precision["p"] = rep.p.number.decimals
+    else:
+        computed = p_range(rep)
+        if computed is not None:
+            p = (computed[0] + computed[1]) / 2 if computed[1] > 0 else None
+    effects = []
+    if rep.symbol in ("r", "rs") and rep.value is not None and abs(rep.value.value) <= 1:
+        ci = _interval(rep.ci, precision, 0)
+        effects.append(EffectSize(rep.symbol, rep.value.value, ci))
+        precision["effects[0].value"] = rep.value.decimals
+    for e in rep.effects:
+        i = len(effects)
+        if e.name == "OR" and e.number.value <= 0:
+            continue
+        effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, i), ratio=e.name == "OR"))
+        precision[f"effects[{i}].value"] = e.number.decimals
+    kind = _KIND.get(rep.symbol or "", "reported")
+    if rep.symbol == "F":
+        kind = "anova_oneway" if {e.name for e in rep.effects} >= {"eta2", "omega2"} else "anova_term"
+    if kind == "chi2_independence" and rep.n is None:
+        kind = "reported"
+    n = int(rep.n.value) if rep.n is not None and rep.n.value >= 0 else None
+    return Result(
+        kind=kind,
+        statistic=statistic,
+        p=p,
+        n=n,
+        effects=tuple(effects),
+        precision=precision,
+        alpha=alpha,
+        details={"with_n": rep.symbol == "chi2" and n is not None},
+    )
+
+
+def _interval(ci, precision: dict[str, int], i: int) -> Interval | None:  # type: ignore[no-untyped-def]
+    if ci is None or ci.low.value > ci.high.value:
+        return None
+    precision[f"effects[{i}].ci.low"] = ci.low.decimals
+    precision[f"effects[{i}].ci.high"] = ci.high.decimals
+    return Interval(ci.level, ci.low.value, ci.high.value)
+
+
+def describe_effect(e: Effect) -> str:
+    return f"{e.symbol_text} = {e.number.text}"

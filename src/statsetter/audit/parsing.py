@@ -1,0 +1,355 @@
+"""Finding reported statistics in running text.
+
+A statistic is a *head* — a test symbol, its degrees of freedom (and N for
+χ²) in parentheses, an operator and a value: ``t(38) = 2.14``,
+``χ2(2, N = 200) = 9.87``, ``F (2,97)=4.51``, ``rs = -.29`` — and the
+clause that follows it up to the next head or the end of the sentence, where
+its p value, confidence interval, effect sizes, df written apart
+(``df = 23``), N or n, M and SD are read. p values outside any clause are
+found on their own. Every number keeps the text it was printed as, so
+decimals and leading zeros can be checked and no digit is invented.
+
+The parser never raises on text: anything it cannot read is left alone.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass, field
+from decimal import Decimal, InvalidOperation
+
+__all__ = ["Number", "PValue", "Interval", "Effect", "Reported", "find_statistics", "symbol_of"]
+
+_MINUS = "-−–‐"  # hyphen-minus, minus, en dash, hyphen: all read as minus
+
+
+@dataclass(frozen=True, slots=True)
+class Number:
+    text: str  # as printed
+    value: float
+    decimals: int
+    start: int
+    end: int
+
+    @property
+    def sign(self) -> str:
+        return self.text[0] if self.text and self.text[0] in _MINUS else ""
+
+    @property
+    def digits(self) -> str:
+        """The printed number without its sign."""
+        return self.text.lstrip(_MINUS).strip()
+
+    @property
+    def half_unit(self) -> float:
+        return 0.5 * 10.0 ** (-self.decimals)
+
+
+@dataclass(frozen=True, slots=True)
+class PValue:
+    op: str  # "=", "<", ">", "≤", "≥", or "ns"
+    number: Number | None
+    start: int
+    end: int
+    symbol_start: int
+    symbol_text: str
+
+
+@dataclass(frozen=True, slots=True)
+class Interval:
+    level: float
+    low: Number
+    high: Number
+    start: int
+    end: int
+
+
+@dataclass(frozen=True, slots=True)
+class Effect:
+    name: str  # canonical: d, g, eta2, eta2_p, omega2, V, phi, R2, R2_adj, beta, OR, M, SD
+    number: Number
+    start: int
+    end: int
+    symbol_start: int
+    symbol_text: str
+    ci: Interval | None = None
+
+
+@dataclass(slots=True)
+class Reported:
+    """One reported statistic: the head (absent for a lone p value) and its clause."""
+
+    symbol: str | None  # canonical: t, F, chi2, r, rs, z, U, H, W, T
+    symbol_text: str
+    symbol_start: int
+    start: int
+    end: int
+    df: tuple[Number, ...] = ()
+    n: Number | None = None
+    op: str = "="
+    value: Number | None = None
+    p: PValue | None = None
+    ci: Interval | None = None  # a CI on the statistic itself (r) or without an effect
+    effects: list[Effect] = field(default_factory=list)
+    descriptives: list[Effect] = field(default_factory=list)
+    operators: list[tuple[int, int]] = field(default_factory=list)  # (start, end) of each operator with its spacing
+    text: str = ""
+
+
+def symbol_of(text: str) -> str | None:
+    t = text.replace(" ", "")
+    low = t.lower()
+    if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2"):
+        return "chi2"
+    if low in ("rs", "rₛ", "r_s", "ρ", "rho"):
+        return "rs"
+    return t if t in ("t", "F", "r", "z", "U", "H", "W", "T") else None
+
+
+def _number_pattern(mark: str) -> str:
+    if mark == ",":
+        return r"[-−–‐]?\s?(?:\d{1,3}(?:[.\u202f\u00a0 ]\d{3})+(?:,\d+)?|\d+(?:,\d+)?|,\d+)"
+    return r"[-−–‐]?\s?(?:\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+)"
+
+
+_SYMBOL = (
+    r"(?:χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
+    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|[tFrzUHWT])"
+)
+_EFFECT_NAMES = [
+    (r"partial\s+(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2_p"),
+    (r"(?:η|eta)\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|η_p\^?2|ηp[²2]|η[²2]_p", "eta2_p"),
+    (r"(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2"),
+    (r"(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2"),
+    (r"Cram[ée]r'?s\s+V|(?<![\w])V", "V"),
+    (r"φ|(?<![\w])phi", "phi"),
+    (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
+    (r"(?<![\w])R\s?(?:[²2]|\^2)", "R2"),
+    (r"β|(?<![\w])beta", "beta"),
+    (r"(?<![\w])OR", "OR"),
+    (r"(?<![\w])d", "d"),
+    (r"(?<![\w])g", "g"),
+    (r"(?<![\w])Mdn", "Mdn"),
+    (r"(?<![\w])M", "M"),
+    (r"(?<![\w])SD", "SD"),
+]
+_DESCRIPTIVE = {"M", "SD", "Mdn"}
+
+
+class _Patterns:
+    def __init__(self, mark: str) -> None:
+        num = _number_pattern(mark)
+        self.mark = mark
+        self.number = re.compile(num)
+        self.head = re.compile(
+            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]])?\s*(?P<op>=|<|>|≤|≥)\s*(?P<num>{num})"
+        )
+        self.p = re.compile(rf"(?<![\w.])(?P<sym>[pP])(?:-value)?\s*(?P<op>=|<|>|≤|≥)\s*(?P<num>{num}(?:[eE][-−]?\d+)?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
+        sep = r"[;]" if mark == "," else r"[,;]"
+        self.ci = re.compile(
+            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|confidence interval)s?\s*[:=,]?\s*"
+            rf"(?:[\[(]\s*(?P<a>{num})\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})\s*[\])]|(?P<a2>{num})\s*(?:to|–|—|-)\s*(?P<b2>{num}))"
+        )
+        self.effect = re.compile(
+            r"(?P<name>" + "|".join(f"(?:{p})" for p, _ in _EFFECT_NAMES) + rf")\s*(?P<op>=)\s*(?P<num>{num})"
+        )
+        self.df = re.compile(rf"(?<![\w])df\s*=\s*(?P<num>{num})")
+        self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*=\s*(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
+        self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n")
+        self.operator = re.compile(r"\s*(?:=|<|>|≤|≥)\s*")
+
+    def to_number(self, text: str, start: int) -> Number | None:
+        raw = text.strip()
+        sign = ""
+        body = raw
+        if body and body[0] in _MINUS:
+            sign, body = body[0], body[1:].strip()
+        if self.mark == ",":
+            body = re.sub(r"[.\u202f\u00a0 ](?=\d{3}(?!\d))", "", body).replace(",", ".")
+        else:
+            body = body.replace(",", "")
+        try:
+            dec = Decimal(body)
+        except InvalidOperation:
+            return None
+        if not dec.is_finite():
+            return None
+        exponent = dec.as_tuple().exponent
+        decimals = max(0, -exponent) if isinstance(exponent, int) else 0
+        value = float(dec)
+        if sign:
+            value = -value
+        offset = text.find(raw)
+        s = start + max(offset, 0)
+        return Number(raw, value, decimals, s, s + len(raw))
+
+
+_CACHE: dict[str, _Patterns] = {}
+
+
+def _patterns(mark: str) -> _Patterns:
+    if mark not in _CACHE:
+        _CACHE[mark] = _Patterns(mark)
+    return _CACHE[mark]
+
+
+def _effect_name(text: str) -> str | None:
+    for pattern, name in _EFFECT_NAMES:
+        if re.fullmatch(pattern, text):
+            return name
+    return None
+
+
+def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], Number | None]:
+    """df numbers and N from the text inside the head's parentheses."""
+    dfs: list[Number] = []
+    n = None
+    sep = ";" if pat.mark == "," else ","
+    pos = 0
+    for part in re.split(rf"\s*[{sep};]\s*", inner):
+        at = inner.find(part, pos)
+        pos = at + len(part)
+        m = re.fullmatch(r"\s*(?:df\s*=\s*)?(.+?)\s*", part)
+        if not part.strip() or m is None:
+            continue
+        nm = pat.n.fullmatch(part.strip())
+        if nm:
+            n = pat.to_number(nm.group("num"), start + at + part.find(nm.group("num")))
+            continue
+        num = pat.to_number(m.group(1), start + at + part.find(m.group(1)))
+        if num is None:
+            return (), None  # not degrees of freedom: leave the head without df
+        dfs.append(num)
+    return tuple(dfs), n
+
+
+def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
+    """Every statistic in ``text``, in order."""
+    pat = _patterns(decimal_mark)
+    heads = [m for m in pat.head.finditer(text) if symbol_of(m.group("sym")) is not None]
+    out: list[Reported] = []
+    taken: list[tuple[int, int]] = []
+    for i, m in enumerate(heads):
+        limit = heads[i + 1].start() if i + 1 < len(heads) else len(text)
+        b = pat.boundary.search(text, m.end(), limit)
+        end = min(b.start() if b else limit, limit, m.end() + 240)
+        rep = _read_head(pat, text, m)
+        if rep is None:
+            continue
+        _read_clause(pat, text, rep, m.end(), end)
+        rep.text = text[rep.start : rep.end]
+        out.append(rep)
+        taken.append((rep.start, rep.end))
+    gaps, at = [], 0
+    for s, e in sorted(taken):
+        if s > at:
+            gaps.append((at, s))
+        at = max(at, e)
+    gaps.append((at, len(text)))
+    for gap_start, gap_end in gaps:  # p values, effect sizes and descriptives outside any head's clause
+        piece = gap_start
+        while piece < gap_end:
+            b = pat.boundary.search(text, piece, gap_end)
+            stop = b.start() if b else gap_end
+            out += _orphans(pat, text, piece, stop)
+            piece = (b.end() if b else gap_end) if stop < gap_end else gap_end
+    out.sort(key=lambda r: r.start)
+    return out
+
+
+def _orphans(pat: _Patterns, text: str, start: int, end: int) -> list[Reported]:
+    """The statistics without a head in one sentence piece: one cluster."""
+    first = [m.start() for regex in (pat.p, pat.effect) for m in [regex.search(text, start, end)] if m is not None]
+    if not first:
+        return []
+    at = min(first)
+    rep = Reported(None, "", at, at, at)
+    _read_clause(pat, text, rep, at, end)
+    if rep.p is None and not rep.effects and not rep.descriptives:
+        return []
+    rep.text = text[rep.start : rep.end]
+    return [rep]
+
+
+def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
+    symbol = symbol_of(m.group("sym"))
+    value = pat.to_number(m.group("num"), m.start("num"))
+    if symbol is None or value is None:
+        return None
+    dfs: tuple[Number, ...] = ()
+    n = None
+    if m.group("inner") is not None:
+        dfs, n = _inner(pat, m.group("inner"), m.start("inner"))
+    rep = Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, m.group("op"), value)
+    rep.operators = _operators(pat, text, m.start(), value.end)
+    return rep
+
+
+def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[int, int]]:
+    return [(o.start(), o.end()) for o in pat.operator.finditer(text, start, end) if o.group().strip()]
+
+
+def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
+    if m.group("ns"):
+        return PValue("ns", None, m.start(), m.end(), m.start(), m.group("ns"))
+    raw = m.group("num")
+    exp = re.search(r"[eE]([-−]?\d+)$", raw)
+    number = pat.to_number(raw[: exp.start()] if exp else raw, m.start("num"))
+    if number is None:
+        return None
+    if exp:
+        scale = 10.0 ** int(exp.group(1).replace("−", "-"))
+        number = Number(raw, number.value * scale, number.decimals - int(exp.group(1).replace("−", "-")), number.start, m.end("num"))
+    return PValue(m.group("op"), number, m.start(), m.end("num"), m.start("sym"), m.group("sym"))
+
+
+def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:
+    events: list[tuple[int, str, re.Match[str]]] = []
+    for kind, regex in (("p", pat.p), ("ci", pat.ci), ("effect", pat.effect), ("df", pat.df), ("n", pat.n)):
+        events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
+    events.sort(key=lambda e: e[0])
+    covered: list[tuple[int, int]] = []
+    last_end = rep.end
+    for at, kind, m in events:
+        if any(s <= at < e for s, e in covered):
+            continue
+        if kind == "p" and rep.p is None:
+            rep.p = _p_value(pat, m)
+        elif kind == "ci":
+            ci = _interval(pat, m)
+            if ci is None:
+                continue
+            target = next((e for e in reversed(rep.effects) if e.ci is None and e.name not in _DESCRIPTIVE), None)
+            if target is not None and rep.effects and rep.effects[-1] is target:
+                rep.effects[-1] = Effect(target.name, target.number, target.start, target.end, target.symbol_start, target.symbol_text, ci)
+            elif rep.ci is None:
+                rep.ci = ci
+        elif kind == "effect":
+            name = _effect_name(m.group("name"))
+            number = pat.to_number(m.group("num"), m.start("num"))
+            if name is None or number is None:
+                continue
+            effect = Effect(name, number, m.start(), number.end, m.start("name"), m.group("name"))
+            (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
+        elif kind == "df" and not rep.df:
+            number = pat.to_number(m.group("num"), m.start("num"))
+            if number is not None:
+                rep.df = (number,)
+        elif kind == "n" and rep.n is None:
+            rep.n = pat.to_number(m.group("num"), m.start("num"))
+        else:
+            continue
+        covered.append((m.start(), m.end()))
+        last_end = max(last_end, m.end())
+        rep.operators += _operators(pat, text, m.start(), m.end())
+    rep.end = last_end
+
+
+def _interval(pat: _Patterns, m: re.Match[str]) -> Interval | None:
+    a, b = (m.group("a"), m.group("b")) if m.group("a") is not None else (m.group("a2"), m.group("b2"))
+    sa, sb = (m.start("a"), m.start("b")) if m.group("a") is not None else (m.start("a2"), m.start("b2"))
+    low, high = pat.to_number(a, sa), pat.to_number(b, sb)
+    level = pat.to_number(m.group("lev"), m.start("lev"))
+    if low is None or high is None or level is None or not 0 < level.value < 100:
+        return None
+    return Interval(level.value / 100, low, high, m.start(), m.end())

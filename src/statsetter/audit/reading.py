@@ -1,0 +1,187 @@
+"""Reading a manuscript into text units with their locations.
+
+A .docx is read straight from its XML (paragraphs of the body and of table
+cells, headers, footers, footnotes and endnotes), keeping which characters
+are italic, so italics can be checked; .md, .txt and .tex are read as text,
+one unit per paragraph (blank-line separated), with Markdown emphasis
+(``*t*``) and LaTeX ``\\textit{}``/``$t$`` taken as italic markers and
+removed from the text the parser sees.
+"""
+
+from __future__ import annotations
+
+import re
+import zipfile
+from dataclasses import dataclass
+from pathlib import Path
+from typing import Iterator
+
+from ..errors import InputError
+
+__all__ = ["Unit", "read_units", "MAX_TEXT_BYTES"]
+
+MAX_TEXT_BYTES = 200 * 1024 * 1024
+_W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
+
+
+@dataclass(frozen=True, slots=True)
+class Unit:
+    location: str
+    text: str
+    italic: tuple[tuple[int, int], ...] | None = None  # None: the format does not say
+    part: str = "word/document.xml"
+    index: int = 0  # the paragraph's position among the part's w:p elements
+
+
+def read_units(path: "str | Path", encoding: str = "utf-8") -> list[Unit]:
+    p = Path(path)
+    suffix = p.suffix.lower()
+    if suffix == ".docx":
+        return list(_docx_units(p))
+    if suffix not in (".md", ".markdown", ".txt", ".text", ".tex"):
+        raise InputError(f"{p}: cannot audit {p.suffix or 'a file without extension'}; statsetter reads .docx, .md, .txt and .tex")
+    try:
+        size = p.stat().st_size
+        if size > MAX_TEXT_BYTES:
+            raise InputError(f"{p}: {size:,} bytes, over the {MAX_TEXT_BYTES:,}-byte limit for a text manuscript")
+        raw = p.read_bytes()
+    except FileNotFoundError:
+        raise InputError(f"{p}: no such file") from None
+    except IsADirectoryError:
+        raise InputError(f"{p}: is a folder") from None
+    except OSError as exc:
+        raise InputError(f"{p}: cannot read ({exc.strerror or exc})") from None
+    if not raw.strip():
+        raise InputError(f"{p}: the file is empty")
+    if raw.startswith(b"PK\x03\x04") or b"\x00" in raw[:4096]:
+        raise InputError(f"{p}: binary contents (a Word file or another binary format?), not {suffix} text")
+    try:
+        text = raw.decode("utf-8-sig" if encoding.lower().replace("-", "") == "utf8" else encoding)
+    except UnicodeDecodeError as exc:
+        raise InputError(f"{p}: not {encoding} text (byte {exc.start}); give the file's encoding with --encoding") from None
+    except LookupError:
+        raise InputError(f"--encoding: unknown encoding {encoding!r}") from None
+    return list(_text_units(text, suffix))
+
+
+_MD_ITALIC = re.compile(r"(?<![*A-Za-z0-9])([*_])(?!\s)([^*_\n]{1,40}?)(?<!\s)\1(?![*A-Za-z0-9])")
+_TEX_ITALIC = re.compile(r"\\textit\{([^{}]{1,40})\}|\\emph\{([^{}]{1,40})\}|\$([^$\n]{1,40})\$")
+
+
+def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ...]]:  # spans kept for a later check
+    """Text without emphasis markers, and the italic spans they marked."""
+    tex = suffix == ".tex"
+    out, spans, at, length = [], [], 0, 0
+    for m in (_TEX_ITALIC if tex else _MD_ITALIC).finditer(text):
+        inner = next(g for g in m.groups() if g is not None) if tex else m.group(2)
+        if tex:
+            inner = inner.replace("\\chi", "χ").replace("^2", "²").replace("\\eta", "η").replace("\\omega", "ω").strip()
+        before = text[at : m.start()]
+        out += [before, inner]
+        length += len(before)
+        if not (tex and inner[:1] in "χηω"):  # $\chi^2$ is math, not italic
+            spans.append((length, length + len(inner)))
+        length += len(inner)
+        at = m.end()
+    out.append(text[at:])
+    return "".join(out), tuple(spans)
+
+
+def _text_units(text: str, suffix: str) -> Iterator[Unit]:
+    line = 1
+    for block in re.split(r"(\n[ \t]*\n)", text):
+        if block.startswith("\n") and not block.strip():
+            line += block.count("\n")
+            continue
+        if block.strip():
+            clean = _strip_marks(block, suffix)[0] if suffix != ".txt" else block
+            yield Unit(f"line {line}", clean, None, "", line)  # italics are checked in .docx only
+        line += block.count("\n")
+
+
+def _docx_units(p: Path) -> Iterator[Unit]:
+    from lxml import etree
+
+    from ..export.docx_input import check_docx
+
+    check_docx(p)
+    try:
+        with zipfile.ZipFile(p) as archive:
+            names = archive.namelist()
+            parts = ["word/document.xml"] + sorted(n for n in names if re.fullmatch(r"word/(header|footer)\d*\.xml|word/(foot|end)notes\.xml", n))
+            for part in parts:
+                try:
+                    root = etree.fromstring(archive.read(part), etree.XMLParser(huge_tree=True, resolve_entities=False, no_network=True))
+                except etree.XMLSyntaxError as exc:
+                    raise InputError(f"{p}: {part} is not well-formed XML ({exc.msg})") from None
+                yield from _part_units(root, part)
+    except zipfile.BadZipFile:
+        raise InputError(f"{p}: a damaged zip archive, not a readable .docx") from None
+
+
+def _place(part: str) -> str:
+    name = part.rsplit("/", 1)[-1].removesuffix(".xml")
+    return {"document": "paragraph", "footnotes": "footnote paragraph", "endnotes": "endnote paragraph"}.get(name, f"{name} paragraph")
+
+
+def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-def]
+    label = _place(part)
+    cells = {}
+    for t, tbl in enumerate(root.iter(f"{_W}tbl"), 1):
+        for r, tr in enumerate((x for x in tbl if x.tag == f"{_W}tr"), 1):
+            for c, tc in enumerate((x for x in tr if x.tag == f"{_W}tc"), 1):
+                cells[tc] = (t, r, c)
+    body_count = 0
+    for index, para in enumerate(root.iter(f"{_W}p")):
+        tc = next(para.iterancestors(f"{_W}tc"), None)
+        if tc is None:
+            body_count += 1
+        text, spans = _paragraph_text(para)
+        if not text.strip():
+            continue
+        if tc is None:
+            location = f"{label} {body_count}"
+        else:
+            t, r, c = cells[tc]
+            location = f"table {t}, row {r}, cell {c}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {c}"
+        yield Unit(location, text, spans, part, index)
+
+
+def _run_italic(run) -> bool:  # type: ignore[no-untyped-def]
+    rpr = run.find(f"{_W}rPr")
+    if rpr is None:
+        return False
+    i = rpr.find(f"{_W}i")
+    if i is None:
+        return False
+    return i.get(f"{_W}val", "true") not in ("0", "false", "off")
+
+
+def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
+    pieces: list[str] = []
+    spans: list[tuple[int, int]] = []
+    length = 0
+    for run in para.iter(f"{_W}r"):
+        if run.getparent() is not None and run.getparent().tag == f"{_W}del":
+            continue
+        italic = _run_italic(run)
+        for node in run:
+            tag = node.tag
+            if tag == f"{_W}t":
+                chunk = node.text or ""
+            elif tag == f"{_W}tab":
+                chunk = "\t"
+            elif tag in (f"{_W}br", f"{_W}cr"):
+                chunk = "\n"
+            elif tag == f"{_W}noBreakHyphen":
+                chunk = "-"
+            else:
+                continue
+            if italic and chunk:
+                if spans and spans[-1][1] == length:
+                    spans[-1] = (spans[-1][0], length + len(chunk))
+                else:
+                    spans.append((length, length + len(chunk)))
+            pieces.append(chunk)
+            length += len(chunk)
+    return "".join(pieces), tuple(spans)

@@ -1,0 +1,173 @@
+"""Auditing a manuscript: every reported statistic, its findings and the
+restyled text, as a terminal table, JSON, CSV or a commented copy of a .docx.
+
+A finding is a reason to look, not proof of an error: one-sided tests,
+corrections and rounding conventions differ, and the text around a number
+may explain it.
+"""
+
+from __future__ import annotations
+
+import csv
+import io
+import json
+from dataclasses import dataclass
+from pathlib import Path
+from typing import Sequence
+
+from ..style.numbers import numbers_for
+from ..style.profile import Style, load_style
+from .checks import CODES, Finding, consistency, grim, impossible, style_findings, to_record
+from .parsing import Reported, find_statistics
+from .reading import Unit, read_units
+
+__all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "annotate", "CAUTION"]
+
+CAUTION = (
+    "A finding is a reason to look, not proof of an error: one-sided tests, corrections and rounding "
+    "conventions differ. Check each against the analysis output, the journal's instructions and, where it matters, a statistician."
+)
+
+
+@dataclass(frozen=True, slots=True)
+class Entry:
+    location: str
+    found: str
+    findings: tuple[Finding, ...]
+    suggestion: str
+    unit: Unit
+    start: int
+    end: int
+
+    @property
+    def codes(self) -> list[str]:
+        return [f.code for f in self.findings]
+
+    @property
+    def message(self) -> str:
+        return " ".join(f"{f.message} ({f.evidence})" if f.evidence else f.message for f in self.findings)
+
+    def row(self) -> dict[str, object]:
+        return {"location": self.location, "found": self.found, "codes": self.codes, "message": self.message, "suggestion": self.suggestion}
+
+
+def _suggest(rep: Reported, style: Style, alpha: float) -> str:
+    from ..rendering.sentences import render
+
+    if rep.symbol is None and not rep.effects:
+        if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
+            return ""
+        num = numbers_for(style)
+        if rep.p.op == "=":
+            held = rep.p.number.decimals
+            op, text = num.p(rep.p.number.value, alpha, held=held) if rep.p.number.value > 0 else num.p(0.0, alpha)
+        else:
+            op, text = {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op), num.p(rep.p.number.value, alpha)[1]
+        from ..rendering.styled import StyledText
+
+        return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
+    try:
+        return render(to_record(rep, alpha), "stats", style).plain()
+    except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
+        return ""
+
+
+def audit_units(
+    units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None
+) -> list[Entry]:
+    resolved = load_style(style)
+    mark = resolved.decimal_mark
+    entries = []
+    for unit in units:
+        for rep in find_statistics(unit.text, mark):
+            findings = impossible(rep) + consistency(rep, alpha) + style_findings(rep, resolved, alpha, unit.text, unit.italic)
+            if grim_items:
+                findings += grim(rep, grim_items)
+            if unit.part:  # a Word paragraph
+                location = f"{unit.location}, characters {rep.start + 1}–{rep.end}"
+            else:  # a text block starting at line unit.index
+                line = unit.index + unit.text.count("\n", 0, rep.start)
+                column = rep.start - (unit.text.rfind("\n", 0, rep.start) + 1) + 1
+                location = f"line {line}, column {column}"
+            entries.append(Entry(location, rep.text, tuple(findings), _suggest(rep, resolved, alpha), unit, rep.start, rep.end))
+    return entries
+
+
+def audit_file(
+    path: "str | Path", style: "Style | str | None" = None, *, alpha: float = 0.05, encoding: str = "utf-8", grim_items: int | None = None
+) -> list[Entry]:
+    """Every statistic in the manuscript at ``path`` (never modified)."""
+    return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items)
+
+
+def as_json(entries: Sequence[Entry]) -> str:
+    return json.dumps([e.row() for e in entries], ensure_ascii=False, indent=1)
+
+
+def as_csv(entries: Sequence[Entry]) -> str:
+    buffer = io.StringIO()
+    writer = csv.writer(buffer, lineterminator="\n")
+    writer.writerow(["location", "found", "codes", "message", "suggestion"])
+    for e in entries:
+        writer.writerow([e.location, e.found, " ".join(e.codes), e.message, e.suggestion])
+    return buffer.getvalue()
+
+
+def print_table(entries: Sequence[Entry], *, everything: bool = False) -> None:
+    from rich.console import Console
+    from rich.table import Table
+
+    console = Console()
+    table = Table(show_lines=False, header_style="bold")
+    for name in ("Location", "Found", "Codes", "Suggestion"):
+        table.add_column(name, overflow="fold")
+    shown = [e for e in entries if everything or e.findings]
+    for e in shown:
+        table.add_row(e.location, e.found, " ".join(e.codes) or "—", e.suggestion if e.findings else "")
+    if shown:
+        console.print(table)
+    flagged = sum(1 for e in entries if e.findings)
+    console.print(f"{len(entries)} statistics found, {flagged} with findings.")
+    if flagged:
+        used = sorted({c for e in entries for c in e.codes})
+        for code in used:
+            console.print(f"  {code}: {CODES[code][0]} [{CODES[code][1]}]", highlight=False)
+    console.print(CAUTION, style="italic")
+
+
+def annotate(source: "str | Path", entries: Sequence[Entry], out: "str | Path") -> tuple[int, int]:
+    """A copy of the .docx with a Word comment on each finding in the body
+    and its tables: (comments added, findings elsewhere, listed only)."""
+    import docx
+    from docx.oxml.ns import qn
+    from docx.text.run import Run
+
+    from ..export.docx_writer import save_document
+
+    document = docx.Document(str(source))
+    paragraphs = list(document.element.body.iter(qn("w:p")))
+    added = elsewhere = 0
+    for e in entries:
+        if not e.findings:
+            continue
+        if e.unit.part != "word/document.xml" or e.unit.index >= len(paragraphs):
+            elsewhere += 1
+            continue
+        p = paragraphs[e.unit.index]
+        runs, at = [], 0
+        for r in p.iter(qn("w:r")):
+            length = sum(len(t.text or "") if t.tag == qn("w:t") else 1 for t in r if t.tag in (qn("w:t"), qn("w:tab"), qn("w:br"), qn("w:cr")))
+            if at < e.end and at + length > e.start and length:
+                runs.append(Run(r, document))  # type: ignore[arg-type]
+            at += length
+        if not runs:
+            elsewhere += 1
+            continue
+        text = f"statsetter: {' '.join(e.codes)}. {e.message}"
+        if e.suggestion:
+            text += f" Suggested: {e.suggestion}"
+        document.add_comment(runs, text=text, author="statsetter", initials="st")
+        added += 1
+    save_document(document, out, inputs=[source])
+    return added, elsewhere
+
