@@ -18,7 +18,7 @@ from typing import Sequence
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
-from .parsing import Effect, Number, Reported
+from .parsing import Number, Reported
 
 # code: (what it means, the REPORTING-RULES.md rule and its source)
 CODES: dict[str, tuple[str, str]] = {
@@ -230,15 +230,11 @@ def _decimals(rep: Reported, num: Numbers, alpha: float) -> list[Finding]:
         if e.number.decimals != want:
             wrong.append(f"{e.number.text} ({want} wanted)")
     p = rep.p
-    if p is not None and p.op == "=" and p.number is not None and p.number.value > 0:
-        want = num.decimals_for("p")
-        shown = p.number.decimals
-        if shown < want and p.number.value >= (num._p_floor or 0):
-            wrong.append(f"p = {p.number.text} ({want} wanted)")
-        elif shown > want:
-            kept = num.p(p.number.value, alpha)[1]
-            if len(kept.split(num._mark)[-1]) < shown:
-                wrong.append(f"p = {p.number.text} ({want} wanted)")
+    if p is not None and p.op == "=" and p.number is not None and 0 < p.number.value <= 1:
+        # in style when some p the printed one stands for prints the same way
+        v, h = p.number.value, p.number.half_unit * 0.999
+        if not any(num.p(c, alpha)[1] == p.number.digits for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1):
+            wrong.append(f"p = {p.number.text} ({num.p(v, alpha)[1]} in the style)")
     return [Finding("decimals", "Decimals differ from the style's.", "; ".join(wrong))] if wrong else []
 
 
@@ -292,8 +288,10 @@ def grim(rep: Reported, items: int) -> list[Finding]:
 # -- the record behind the suggestion -----------------------------------------
 
 
-def to_record(rep: Reported, alpha: float = 0.05) -> Result:
-    """The reported statistic as a record, every number held to its printed decimals."""
+def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) -> Result:
+    """The reported statistic as a record, every number held to its printed
+    decimals. With the style the text is in, a p the style printed with an
+    extra digit (AMA: ``P = .010`` for a p just below .01) keeps that digit."""
     precision: dict[str, int] = {}
     statistic = None
     if rep.symbol is not None and rep.value is not None:
@@ -304,10 +302,10 @@ def to_record(rep: Reported, alpha: float = 0.05) -> Result:
     if rep.p is not None and rep.p.op == "=" and rep.p.number is not None and 0 < rep.p.number.value <= 1:
         p = rep.p.number.value
         precision["p"] = rep.p.number.decimals
+        if style is not None:
+            p = _as_printed(p, rep.p.number, style, alpha)
     else:
-        computed = p_range(rep)
-        if computed is not None:
-            p = (computed[0] + computed[1]) / 2 if computed[1] > 0 else None
+        p = _recomputed_p(rep, alpha)
     effects = []
     if rep.symbol in ("r", "rs") and rep.value is not None and abs(rep.value.value) <= 1:
         ci = _interval(rep.ci, precision, 0)
@@ -337,6 +335,38 @@ def to_record(rep: Reported, alpha: float = 0.05) -> Result:
     )
 
 
+def _as_printed(p: float, printed: Number, style: Style, alpha: float) -> float:
+    """The printed p, or the nearest float that the style prints the same way."""
+    num = numbers_for(style)
+    want = printed.digits
+    for candidate in (p, math.nextafter(p, 0.0), math.nextafter(p, 1.0)):
+        if num.p(candidate, alpha, held=printed.decimals)[1] == want:
+            return candidate
+    return p
+
+
+def _recomputed_p(rep: Reported, alpha: float) -> float | None:
+    """The p for the restyled text when the reported one is not exact: the
+    p recomputed from the statistic, kept inside what the text reported (so
+    "p < .001" stays below .001); with nothing to recompute from, a bound of
+    .001 or less is kept as the largest p below it (and one of .99 or more
+    as the smallest p above it)."""
+    computed, reported = p_range(rep), reported_p_range(rep, alpha)
+    bound = rep.p.number.value if rep.p is not None and rep.p.op in ("<", "≤") and rep.p.number is not None else None
+    if computed is not None:
+        lo, hi = computed
+        if reported is not None and _overlap(computed, reported):
+            lo, hi = max(lo, reported[0]), min(hi, reported[1])
+            if bound is not None:
+                hi = min(hi, math.nextafter(bound, 0.0))
+        return min(max((lo + hi) / 2, 0.0), 1.0)
+    if bound is not None and 0 < bound <= 0.001:
+        return math.nextafter(bound, 0.0)
+    if rep.p is not None and rep.p.op in (">", "≥") and rep.p.number is not None and 0.99 <= rep.p.number.value < 1:
+        return math.nextafter(rep.p.number.value, 1.0)  # "P > .99" stays above .99
+    return None
+
+
 def _interval(ci, precision: dict[str, int], i: int) -> Interval | None:  # type: ignore[no-untyped-def]
     if ci is None or ci.low.value > ci.high.value:
         return None
@@ -344,6 +374,3 @@ def _interval(ci, precision: dict[str, int], i: int) -> Interval | None:  # type
     precision[f"effects[{i}].ci.high"] = ci.high.decimals
     return Interval(ci.level, ci.low.value, ci.high.value)
 
-
-def describe_effect(e: Effect) -> str:
-    return f"{e.symbol_text} = {e.number.text}"

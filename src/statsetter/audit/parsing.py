@@ -121,6 +121,8 @@ _EFFECT_NAMES = [
     (r"(?:η|eta)\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|η_p\^?2|ηp[²2]|η[²2]_p", "eta2_p"),
     (r"(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2"),
     (r"(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2"),
+    (r"(?:ε|epsilon)\s?(?:[²2]|\^2|squared)", "epsilon2"),
+    (r"r_?rb|r\s?(?:rank-biserial)", "r_rb"),
     (r"Cram[ée]r'?s\s+V|(?<![\w])V", "V"),
     (r"φ|(?<![\w])phi", "phi"),
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
@@ -201,25 +203,27 @@ def _effect_name(text: str) -> str | None:
 
 
 def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], Number | None]:
-    """df numbers and N from the text inside the head's parentheses."""
-    dfs: list[Number] = []
+    """df numbers and N from the text inside the head's parentheses: ``38``,
+    ``2, 97``, ``df = 23``, ``2, N = 1,200``. Anything else: no df."""
     n = None
+    found = pat.n.search(inner)
+    rest = inner
+    if found:
+        n = pat.to_number(found.group("num"), start + found.start("num"))
+        rest = inner[: found.start()] + " " * (found.end() - found.start()) + inner[found.end() :]
     sep = ";" if pat.mark == "," else ","
-    pos = 0
-    for part in re.split(rf"\s*[{sep};]\s*", inner):
-        at = inner.find(part, pos)
-        pos = at + len(part)
-        m = re.fullmatch(r"\s*(?:df\s*=\s*)?(.+?)\s*", part)
-        if not part.strip() or m is None:
+    dfs: list[Number] = []
+    for m in re.finditer(rf"[^{sep};]+", rest):
+        part = m.group()
+        if not part.strip():
             continue
-        nm = pat.n.fullmatch(part.strip())
-        if nm:
-            n = pat.to_number(nm.group("num"), start + at + part.find(nm.group("num")))
-            continue
-        num = pat.to_number(m.group(1), start + at + part.find(m.group(1)))
-        if num is None:
-            return (), None  # not degrees of freedom: leave the head without df
-        dfs.append(num)
+        d = re.fullmatch(r"\s*(?:df\s*=\s*)?(\d+(?:[.,]\d+)?)\s*", part)
+        if d is None:
+            return (), n
+        number = pat.to_number(d.group(1), start + m.start() + d.start(1))
+        if number is None:
+            return (), n
+        dfs.append(number)
     return tuple(dfs), n
 
 
@@ -310,13 +314,14 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
     events.sort(key=lambda e: e[0])
     covered: list[tuple[int, int]] = []
     last_end = rep.end
+    ci = None
     for at, kind, m in events:
         if any(s <= at < e for s, e in covered):
             continue
         if kind == "p" and rep.p is None:
             rep.p = _p_value(pat, m)
         elif kind == "ci":
-            ci = _interval(pat, m)
+            ci = _interval(pat, m, text)
             if ci is None:
                 continue
             target = next((e for e in reversed(rep.effects) if e.ci is None and e.name not in _DESCRIPTIVE), None)
@@ -340,16 +345,19 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
         else:
             continue
         covered.append((m.start(), m.end()))
-        last_end = max(last_end, m.end())
+        last_end = max(last_end, m.end(), ci.end if kind == "ci" and ci is not None else 0)
         rep.operators += _operators(pat, text, m.start(), m.end())
     rep.end = last_end
 
 
-def _interval(pat: _Patterns, m: re.Match[str]) -> Interval | None:
+def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
     a, b = (m.group("a"), m.group("b")) if m.group("a") is not None else (m.group("a2"), m.group("b2"))
     sa, sb = (m.start("a"), m.start("b")) if m.group("a") is not None else (m.start("a2"), m.start("b2"))
     low, high = pat.to_number(a, sa), pat.to_number(b, sb)
     level = pat.to_number(m.group("lev"), m.start("lev"))
     if low is None or high is None or level is None or not 0 < level.value < 100:
         return None
-    return Interval(level.value / 100, low, high, m.start(), m.end())
+    end = m.end()
+    if m.group("a") is None and text[m.start() - 1 : m.start()] == "(" and text[end : end + 1] == ")":
+        end += 1  # "(95% CI, 0.04–1.31)": the closing parenthesis belongs to the interval
+    return Interval(level.value / 100, low, high, m.start(), end)

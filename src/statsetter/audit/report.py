@@ -67,7 +67,7 @@ def _suggest(rep: Reported, style: Style, alpha: float) -> str:
 
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
     try:
-        return render(to_record(rep, alpha), "stats", style).plain()
+        return render(to_record(rep, alpha, style), "stats", style).plain()
     except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
         return ""
 

@@ -1,0 +1,358 @@
+"""The audit: reading typed statistics, the checks, the restyled text, the command.
+
+Outside references: critical values of t, F and χ² from the printed tables
+of a standard statistics handbook (recalled from memory, as the tables in the
+appendices of introductory texts print them to three decimals) and scipy's
+distributions; each style check names its REPORTING-RULES.md rule and source
+(``statsetter.audit.checks.CODES``).
+"""
+
+from __future__ import annotations
+
+import json
+
+import docx
+import pytest
+from hypothesis import HealthCheck, given, settings
+from hypothesis import strategies as st
+from scipy import stats
+
+from statsetter import EffectSize, Interval, Result, Statistic, load_style, render
+from statsetter.audit.checks import CODES, p_range
+from statsetter.audit.checks import to_record
+from statsetter.audit.parsing import find_statistics
+from statsetter.audit.reading import Unit
+from statsetter.audit.report import audit_units
+from statsetter.cli import main
+from statsetter.pvalues import p_from_statistic
+
+
+def one(text, mark="."):
+    found = find_statistics(text, mark)
+    assert len(found) == 1, [f.text for f in found]
+    return found[0]
+
+
+def codes(text, style=None, alpha=0.05, italic=None, grim_items=None):
+    entries = audit_units([Unit("test", text, italic)], style, alpha=alpha, grim_items=grim_items)
+    return sorted({c for e in entries for c in e.codes})
+
+
+# -- reading the many typed forms (issue: "Statistics in the many forms people type") --
+
+
+@pytest.mark.parametrize(
+    "text,symbol,df,value,p",
+    [
+        ("t(38) = 2.14, p = .039", "t", [38], 2.14, ("=", 0.039)),
+        ("t (38)=2.14,p=.039", "t", [38], 2.14, ("=", 0.039)),
+        ("t = 2.14, df = 23, p = .04", "t", [23], 2.14, ("=", 0.04)),
+        ("t(17.78) = −1.86, p = .080", "t", [17.78], -1.86, ("=", 0.08)),
+        ("t(17.78) = -1.86, p = .080", "t", [17.78], -1.86, ("=", 0.08)),
+        ("t(17.78) = –1.86, p = .080", "t", [17.78], -1.86, ("=", 0.08)),
+        ("F(2, 97) = 4.51, p < .05", "F", [2, 97], 4.51, ("<", 0.05)),
+        ("F(2,97)=4.51, P = .013", "F", [2, 97], 4.51, ("=", 0.013)),
+        ("χ²(2, N = 200) = 9.87, p = .007", "chi2", [2], 9.87, ("=", 0.007)),
+        ("χ2(1) = 3.20, ns", "chi2", [1], 3.2, ("ns", None)),
+        ("chi-square(1, N = 90) = 4.10, p = 0.046", "chi2", [1], 4.1, ("=", 0.046)),
+        ("X2(1) = 4.10, p = .043", "chi2", [1], 4.1, ("=", 0.043)),
+        ("chi2(3) = 12.00, p = .007", "chi2", [3], 12.0, ("=", 0.007)),
+        ("r(98) = .32, p = .001", "r", [98], 0.32, ("=", 0.001)),
+        ("r = .32, p = .001", "r", [], 0.32, ("=", 0.001)),
+        ("rs(48) = −.29, p = .041", "rs", [48], -0.29, ("=", 0.041)),
+        ("z = 1.96, p = .050", "z", [], 1.96, ("=", 0.05)),
+        ("U = 1,256, p = .012", "U", [], 1256, ("=", 0.012)),
+        ("H(2) = 8.10, p = .017", "H", [2], 8.1, ("=", 0.017)),
+        ("t(38) = 2.14, p = 0.039", "t", [38], 2.14, ("=", 0.039)),
+    ],
+)
+def test_forms(text, symbol, df, value, p):
+    rep = one(text)
+    assert rep.symbol == symbol
+    assert [d.value for d in rep.df] == df
+    assert rep.value.value == pytest.approx(value)
+    assert rep.p.op == p[0]
+    if p[1] is not None:
+        assert rep.p.number.value == pytest.approx(p[1])
+
+
+@pytest.mark.parametrize(
+    "text,name,value,ci",
+    [
+        ("t(38) = 2.14, p = .039, d = 0.68, 95% CI [0.04, 1.31]", "d", 0.68, (0.04, 1.31)),
+        ("t(38) = 2.14, p = .039, d = 0.68, 95% CI: 0.04 to 1.31", "d", 0.68, (0.04, 1.31)),
+        ("t(38) = 2.14, p = .039, d = 0.68 (95% CI, 0.04–1.31)", "d", 0.68, (0.04, 1.31)),
+        ("t(38) = 2.14, p = .039, g = 0.66", "g", 0.66, None),
+        ("F(2, 97) = 4.51, p = .013, η² = .09", "eta2", 0.09, None),
+        ("F(2, 97) = 4.51, p = .013, partial η² = .09", "eta2_p", 0.09, None),
+        ("F(2, 97) = 4.51, p = .013, η²p = .09", "eta2_p", 0.09, None),
+        ("F(2, 97) = 4.51, p = .013, ω² = .07", "omega2", 0.07, None),
+        ("χ²(2, N = 200) = 9.87, p = .007, V = .22", "V", 0.22, None),
+        ("χ²(1, N = 200) = 9.87, p = .002, φ = .22", "phi", 0.22, None),
+        ("F(3, 196) = 20.61, p < .001, R² = .24", "R2", 0.24, None),
+    ],
+)
+def test_effect_sizes_and_intervals(text, name, value, ci):
+    rep = one(text)
+    effect = rep.effects[0]
+    assert effect.name == name and effect.number.value == pytest.approx(value)
+    if ci:
+        assert (effect.ci.low.value, effect.ci.high.value) == pytest.approx(ci)
+
+
+def test_n_and_decimal_comma():
+    rep = one("χ²(2, N = 1,200) = 9.87, p = .007")
+    assert rep.n.value == 1200
+    comma = one("t(38) = 2,14; p = ,039; d = 0,68; 95% CI [0,04; 1,31]", ",")
+    assert comma.value.value == 2.14 and comma.p.number.value == 0.039 and comma.effects[0].ci.high.value == 1.31
+
+
+# -- checks, each against a reference --------------------------------------------
+
+
+def test_consistency_uses_the_printed_precision():
+    # scipy: t(23) = 2.10 gives p = .047 (two-sided); .030 cannot follow, .047 can
+    assert "p-inconsistent" in codes("t(23) = 2.10, p = .030")
+    assert codes("t(23) = 2.10, p = .047") == []
+    # t = 2.1 printed with one decimal stands for [2.05, 2.15]: p from .043 to .052, so p = .050 is consistent
+    lo, hi = p_range(one("t(23) = 2.1, p = .050"))
+    assert lo == pytest.approx(p_from_statistic("t", 2.15, (23,))) and hi == pytest.approx(p_from_statistic("t", 2.05, (23,)))
+    assert "p-inconsistent" not in codes("t(23) = 2.1, p = .050")
+
+
+def test_decision_error_and_one_sided():
+    # scipy: F(1, 40) = 3.10 gives p = .086; reported < .05 changes the decision
+    assert {"p-inconsistent", "decision-error"} <= set(codes("F(1, 40) = 3.10, p = .030"))
+    # t(40) = 1.80: two-sided p = .079, one-sided .040
+    assert "one-sided" in codes("t(40) = 1.80, p = .040") and "p-inconsistent" not in codes("t(40) = 1.80, p = .040")
+    assert "decision-error" in codes("t(40) = 3.50, ns")
+
+
+def test_impossible_values():
+    assert "impossible-r" in codes("r(50) = 1.20, p = .001")
+    assert "impossible-p" in codes("t(20) = 2.00, p = 1.20")
+    assert "negative-statistic" in codes("F(2, 30) = −1.20, p = .320")
+    assert "negative-sd" in codes("M = 4.20, SD = −0.73")
+    assert "ci-reversed" in codes("d = 0.68, 95% CI [1.31, 0.04]")
+    assert "ci-excludes-estimate" in codes("d = 0.68, 95% CI [0.04, 0.50]")
+    assert "df-not-integer" in codes("F(2.5, 30) = 3.20, p = .047")
+    assert "df-not-integer" not in codes("t(17.78) = −1.86, p = .080")  # Welch df keep decimals
+    assert "impossible-value" in codes("χ²(1, N = 50) = 4.00, p = .046, V = 1.30")
+
+
+def test_style_checks_follow_the_style():
+    # REPORTING-RULES Numbers (APA 7 §6.36): no leading zero for p and r; a leading zero for d
+    assert "leading-zero" in codes("r(98) = 0.32, p = .001")
+    assert "missing-leading-zero" in codes("t(38) = 2.14, p = .039, d = .68")
+    assert "p-threshold" in codes("t(38) = 2.14, p < .05")
+    assert "p-threshold" not in codes("t(38) = 5.14, p < .001")
+    assert "p-zero" in codes("t(38) = 5.14, p = .000")
+    assert "spacing" in codes("t(38)=2.14, p=.039")
+    assert "hyphen-minus" in codes("t(38) = -2.14, p = .039")
+    assert "decimals" in codes("t(38) = 2.1, p = .04")
+    assert "decimals" not in codes("t(38) = 1.99, p = .0496")  # the extra digit keeps p below alpha
+    # in AMA 11, P has two decimals and a capital P is right
+    assert codes("t(38) = 2.14, P = .04", "ama11") == []
+    for code in ("leading-zero", "p-threshold", "spacing", "italics", "decimals"):
+        assert "§" in CODES[code][1] or "practice" in CODES[code][1]
+
+
+def test_italics_in_word_text():
+    text = "t(38) = 2.14, p = .039, η² = .09"
+    italic = ((0, 1), (14, 15))  # t and p italic, η roman: clean
+    assert "italics" not in codes(text, italic=italic)
+    assert "italics" in codes(text, italic=((0, 1),))  # p not italic
+    assert "italics" in codes(text, italic=((0, 1), (14, 15), (24, 25)))  # η italic
+
+
+def test_grim():
+    # Brown & Heathers (2016): a mean of 28 integer scores must be k/28; 5.19 is not (5.18 = 145/28 is)
+    assert "grim" in codes("M = 5.19, SD = 1.20, n = 28", grim_items=1)
+    assert "grim" not in codes("M = 5.18, SD = 1.20, n = 28", grim_items=1)
+
+
+def test_handbook_critical_values():
+    # Critical values from the printed tables of a statistics handbook (recalled from memory, three
+    # decimals): at each, the recomputed two-sided (t) or upper-tail (F, χ²) p is the table's alpha.
+    table = [
+        ("t", 2.228, (10,), 0.05), ("t", 2.086, (20,), 0.05), ("t", 2.042, (30,), 0.05), ("t", 3.169, (10,), 0.01),
+        ("F", 4.35, (1, 20), 0.05), ("F", 3.32, (2, 30), 0.05), ("F", 2.76, (3, 60), 0.05),
+        ("chi2", 3.841, (1,), 0.05), ("chi2", 5.991, (2,), 0.05), ("chi2", 11.070, (5,), 0.05), ("chi2", 6.635, (1,), 0.01),
+    ]
+    for symbol, critical, df, alpha in table:
+        assert p_from_statistic(symbol, critical, df) == pytest.approx(alpha, abs=0.0005 if symbol != "F" else 0.001)
+    # and scipy's quantiles print as the table does
+    assert round(stats.t.ppf(0.975, 20), 3) == 2.086 and round(stats.chi2.ppf(0.95, 2), 3) == 5.991 and round(stats.f.ppf(0.95, 2, 30), 2) == 3.32
+    # a value printed at the table's critical value is consistent with p = .050
+    assert "p-inconsistent" not in codes("t(20) = 2.09, p = .050")
+
+
+# -- parse -> render -> parse is an identity on the renderer's own output -------
+
+
+def _record(draw):
+    kind = draw(st.sampled_from(["t_independent", "pearson", "spearman", "chi2_independence", "anova_term", "anova_oneway", "mann_whitney", "kruskal_wallis", "wilcoxon", "reported"]))
+    df1 = draw(st.integers(1, 400))
+    df2 = draw(st.integers(2, 2000))
+    ci = lambda v, w: Interval(0.95, v - w, v + w)  # noqa: E731
+    width = draw(st.floats(0.01, 2.0))
+    if kind == "t_independent":
+        df = draw(st.sampled_from([float(df2), round(draw(st.floats(2.5, 500)), 2)]))
+        t = draw(st.floats(-12, 12).filter(lambda x: abs(x) > 0.001))
+        d = draw(st.floats(-3, 3))
+        return Result(kind=kind, statistic=Statistic("t", t, (df,)), p=p_from_statistic("t", t, (df,)), effects=(EffectSize("d", d, ci(d, width)),))
+    if kind in ("pearson", "spearman"):
+        r = draw(st.floats(-0.99, 0.99))
+        sym = "r" if kind == "pearson" else "rs"
+        low, high = max(r - width / 4, -0.999), min(r + width / 4, 0.999)
+        return Result(kind=kind, statistic=Statistic(sym, r, (float(df2),)), p=p_from_statistic(sym, r, (float(df2),)),
+                      effects=(EffectSize(sym, r, Interval(0.95, low, high)),))
+    if kind in ("chi2_independence", "kruskal_wallis"):
+        x = draw(st.floats(0.01, 80))
+        sym = "chi2" if kind == "chi2_independence" else "H"
+        e = EffectSize("V" if sym == "chi2" else "epsilon2", draw(st.floats(0.001, 0.99)))
+        return Result(kind=kind, statistic=Statistic(sym, x, (float(df1 % 12 + 1),)), p=p_from_statistic("chi2", x, (float(df1 % 12 + 1),)),
+                      n=draw(st.integers(10, 50000)) if sym == "chi2" else None, effects=(e,))
+    if kind in ("anova_term", "anova_oneway"):
+        f = draw(st.floats(0.01, 200))
+        dfs = (float(df1 % 10 + 1), float(df2))
+        effects = (EffectSize("eta2_p" if kind == "anova_term" else "eta2", draw(st.floats(0.001, 0.99))),)
+        if kind == "anova_oneway":
+            effects += (EffectSize("omega2", draw(st.floats(0.001, 0.99))),)
+        return Result(kind=kind, statistic=Statistic("F", f, dfs), p=p_from_statistic("F", f, dfs), effects=effects)
+    if kind in ("mann_whitney", "wilcoxon"):
+        u = float(draw(st.integers(0, 10**6))) + draw(st.sampled_from([0.0, 0.5]))
+        sym = "U" if kind == "mann_whitney" else "T"
+        return Result(kind=kind, statistic=Statistic(sym, u), p=draw(st.floats(1e-9, 1.0)), effects=(EffectSize("r_rb", draw(st.floats(-0.99, 0.99))),))
+    z = draw(st.floats(-8, 8).filter(lambda x: abs(x) > 0.001))
+    g = draw(st.floats(-3, 3))
+    return Result(kind="reported", statistic=Statistic("z", z), p=p_from_statistic("z", z), effects=(EffectSize("g", g, ci(g, width)),))
+
+
+records = st.composite(_record)()
+
+
+@settings(max_examples=400, deadline=None, suppress_health_check=[HealthCheck.too_slow])
+@given(records, st.sampled_from(["apa7", "ama11", "comma"]))
+def test_parse_render_parse_identity(record, style_name):
+    from pathlib import Path
+
+    style = load_style(str(Path(__file__).parent / "styles" / "comma.toml")) if style_name == "comma" else load_style(style_name)
+    text = render(record, "stats", style).plain()
+    rep = one(text, style.decimal_mark)
+    assert rep.text == text
+    again = render(to_record(rep, style=style), "stats", style).plain()
+    assert again == text
+    assert one(again, style.decimal_mark).text == text
+
+
+# -- garbage never crashes the parser -------------------------------------------
+
+_PIECES = st.sampled_from(list("tFrpχ²(),.=<>−-–[]%;: 0123456789dgηVNn\n") + ["CI", "95% CI", "p = ", "t(", "ns", "df = ", "e-5", "chi-square", "η²"])
+
+
+@settings(max_examples=3000, deadline=None)
+@given(st.one_of(st.text(max_size=200), st.lists(_PIECES, max_size=60).map("".join)))
+def test_fuzz_parser_and_checks(text):
+    for rep in find_statistics(text):
+        assert 0 <= rep.start <= rep.end <= len(text)
+    audit_units([Unit("fuzz", text, ((0, len(text) // 2),))])
+
+
+# -- the command ----------------------------------------------------------------
+
+
+CLEAN = "Night-shift drivers slept less, *t*(38) = 2.14, *p* = .039, *d* = 0.68, 95% CI [0.04, 1.31].\n"
+FLAWED = CLEAN + "\nThe groups differed, *t*(23) = 2.10, *p* = .030.\n"
+
+
+def test_exit_status_and_json(tmp_path, capsys):
+    clean = tmp_path / "clean.md"
+    clean.write_text(CLEAN, encoding="utf-8")
+    assert main(["audit", str(clean)]) == 0
+    flawed = tmp_path / "flawed.md"
+    flawed.write_text(FLAWED, encoding="utf-8")
+    capsys.readouterr()
+    assert main(["audit", str(flawed), "--json"]) == 1
+    rows = json.loads(capsys.readouterr().out)
+    assert len(rows) == 2 and all({"location", "found", "codes", "message", "suggestion"} <= set(r) for r in rows)
+    assert rows[0]["codes"] == [] and rows[1]["codes"] == ["p-inconsistent"]
+    assert rows[1]["found"] == "t(23) = 2.10, p = .030" and rows[1]["location"] == "line 3, column 22"
+    assert main(["audit", str(flawed), "--csv"]) == 1
+    assert capsys.readouterr().out.splitlines()[0] == "location,found,codes,message,suggestion"
+    assert flawed.read_text(encoding="utf-8") == FLAWED  # never modified
+
+
+def test_table_output_says_the_caution(tmp_path, capsys):
+    flawed = tmp_path / "flawed.md"
+    flawed.write_text(FLAWED, encoding="utf-8")
+    assert main(["audit", str(flawed)]) == 1
+    out = " ".join(capsys.readouterr().out.split())
+    assert "reason to look, not proof of an error" in out and "p-inconsistent" in out
+
+
+def test_docx_italics_and_comments(tmp_path, capsys):
+    path = tmp_path / "chapter.docx"
+    d = docx.Document()
+    p = d.add_paragraph("Fatigue rose, ")
+    p.add_run("t").italic = True
+    p.add_run("(23) = 2.10, ")
+    p.add_run("p").italic = False
+    p.add_run(" = .030, in the night group.")
+    t = d.add_table(rows=1, cols=1)
+    t.cell(0, 0).text = "r(98) = .32, p = .001"
+    d.save(str(path))
+    before = path.read_bytes()
+    assert main(["audit", str(path), "--json", "--annotate", str(tmp_path / "out.docx")]) == 1
+    rows = json.loads(capsys.readouterr().out)
+    assert rows[0]["codes"] == ["p-inconsistent", "italics"] and rows[0]["location"] == "paragraph 1, characters 15–36"
+    assert rows[1]["location"].startswith("table 1, row 1, cell 1") and "italics" in rows[1]["codes"]
+    annotated = docx.Document(str(tmp_path / "out.docx"))
+    comments = list(annotated.comments)
+    assert len(comments) == 2 and "p-inconsistent" in comments[0].text
+    assert path.read_bytes() == before
+
+
+@pytest.mark.parametrize(
+    "name,content,message",
+    [
+        ("empty.md", b"", "the file is empty"),
+        ("fake.docx", b"just text", "not a Word .docx file"),
+        ("old.docx", b"\xd0\xcf\x11\xe0\xa1\xb1\x1a\xe1" + b"\0" * 100, "password-protected"),
+        ("zip.docx", b"PK\x03\x04garbage", "damaged zip"),
+        ("latin.txt", "t(38) = 2.14, p = .039 – José".encode("cp1252"), "not utf-8 text"),
+        ("word.md", b"PK\x03\x04\x14\x00", "binary contents"),
+        ("notes.pdf", b"%PDF-1.4", "cannot audit .pdf"),
+    ],
+)
+def test_bad_input(tmp_path, capsys, name, content, message):
+    path = tmp_path / name
+    path.write_bytes(content)
+    assert main(["audit", str(path)]) == 2
+    err = capsys.readouterr().err
+    assert message in err and "Traceback" not in err
+
+
+def test_huge_text_is_refused(tmp_path, capsys, monkeypatch):
+    from statsetter.audit import reading
+
+    monkeypatch.setattr(reading, "MAX_TEXT_BYTES", 1000)
+    path = tmp_path / "huge.txt"
+    path.write_text("t(38) = 2.14, p = .039. " * 100, encoding="utf-8")
+    assert main(["audit", str(path)]) == 2
+    assert "over the 1,000-byte limit" in capsys.readouterr().err
+
+
+def test_other_encoding_with_option(tmp_path, capsys):
+    path = tmp_path / "latin.txt"
+    path.write_bytes("Résultats: t(38) = 2.14, p = .039.".encode("cp1252"))
+    assert main(["audit", str(path), "--encoding", "cp1252"]) == 0
+
+
+def test_usage_errors(tmp_path, capsys):
+    path = tmp_path / "a.md"
+    path.write_text(CLEAN, encoding="utf-8")
+    assert main(["audit", str(path), "--annotate", "x.docx"]) == 2
+    assert "a .docx manuscript only" in capsys.readouterr().err
+    assert main(["audit", str(path), "--alpha", "5"]) == 2
+    assert "--alpha: 5 is not between 0 and 1" in capsys.readouterr().err
