@@ -25,6 +25,7 @@ bench: $(STAMP)
 	$(BIN)/python bench/bench_analyses.py
 	$(BIN)/python bench/bench_docx.py
 	$(BIN)/python bench/bench_describe.py
+	$(BIN)/python bench/bench_audit.py
 
 clean:
 	rm -rf $(VENV) dist build demo/out bench/out

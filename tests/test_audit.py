@@ -356,3 +356,17 @@ def test_usage_errors(tmp_path, capsys):
     assert "a .docx manuscript only" in capsys.readouterr().err
     assert main(["audit", str(path), "--alpha", "5"]) == 2
     assert "--alpha: 5 is not between 0 and 1" in capsys.readouterr().err
+
+
+def test_fast_p_equals_scipy_stats():
+    # the audit calls scipy.special directly; scipy.stats' distributions are the reference
+    import random
+
+    from statsetter.audit.checks import _p_of
+
+    rng = random.Random(5)
+    for _ in range(500):
+        symbol = rng.choice(["t", "z", "F", "chi2", "r"])
+        value = rng.uniform(0.01, 0.99) if symbol == "r" else rng.uniform(0.01, 30)
+        df = {"t": (rng.randint(1, 300),), "chi2": (rng.randint(1, 30),), "r": (rng.randint(1, 300),), "F": (rng.randint(1, 9), rng.randint(2, 400)), "z": ()}[symbol]
+        assert _p_of(symbol, value, df) == pytest.approx(p_from_statistic(symbol, value, df), rel=1e-9, abs=1e-15)

@@ -44,7 +44,6 @@ CODES: dict[str, tuple[str, str]] = {
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
 }
 
-_LATIN = {"t", "F", "r", "z", "U", "H", "W", "T", "p", "P", "d", "g", "V", "R", "M", "SD", "Mdn", "N", "n"}
 _BOUNDED_EFFECTS = {"V": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"F", "chi2", "r", "rs", "H"}
 _RANK_SUMS = {"U", "W", "T"}
@@ -62,13 +61,36 @@ class Finding:
 
 
 def _p_of(symbol: str, value: float, df: tuple[float, ...]) -> float:
-    from ..pvalues import p_from_statistic
+    """Two-sided p for t, z and r; upper tail for F, χ² and H (as χ²). The
+    scipy.special distribution functions behind scipy.stats' sf, called
+    directly: the audit computes two per statistic, and the frozen-
+    distribution machinery costs a hundred times the arithmetic."""
+    from scipy import special
 
-    return p_from_statistic("chi2" if symbol == "H" else symbol, value, df)
+    if symbol in ("r", "rs"):
+        if value >= 1:
+            return 0.0
+        t = value * math.sqrt(df[0] / (1 - value * value))
+        return float(min(1.0, 2 * special.stdtr(df[0], -abs(t))))
+    if symbol == "t":
+        return float(min(1.0, 2 * special.stdtr(df[0], -abs(value))))
+    if symbol == "z":
+        return float(min(1.0, 2 * special.ndtr(-abs(value))))
+    if symbol == "F":
+        return float(special.fdtrc(df[0], df[1], value))
+    return float(special.chdtrc(df[0], value))  # χ², and H by its χ² approximation
 
 
 def p_range(rep: Reported) -> tuple[float, float] | None:
     """The two-sided (upper-tail for F, χ², H) p values the printed statistic allows."""
+    if rep.p_range is not None:
+        return rep.p_range if rep.p_range != () else None
+    found = _p_range(rep)
+    rep.p_range = found if found is not None else ()
+    return found
+
+
+def _p_range(rep: Reported) -> tuple[float, float] | None:
     if rep.symbol is None or rep.value is None or rep.op != "=":
         return None
     need = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1}.get(rep.symbol)
@@ -233,7 +255,8 @@ def _decimals(rep: Reported, num: Numbers, alpha: float) -> list[Finding]:
     if p is not None and p.op == "=" and p.number is not None and 0 < p.number.value <= 1:
         # in style when some p the printed one stands for prints the same way
         v, h = p.number.value, p.number.half_unit * 0.999
-        if not any(num.p(c, alpha)[1] == p.number.digits for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1):
+        shown = p.number.digits.removeprefix("0")  # a leading zero is its own finding
+        if not any(num.p(c, alpha)[1].removeprefix("0") == shown for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1):
             wrong.append(f"p = {p.number.text} ({num.p(v, alpha)[1]} in the style)")
     return [Finding("decimals", "Decimals differ from the style's.", "; ".join(wrong))] if wrong else []
 
@@ -242,26 +265,29 @@ def _is_italic(at: int, spans: Sequence[tuple[int, int]]) -> bool:
     return any(s <= at < e for s, e in spans)
 
 
+_ITALIC_NAMES = {"t", "F", "r", "rs", "z", "U", "H", "W", "T", "p", "d", "g", "V", "R2", "M", "SD", "Mdn", "N", "n"}
+_GREEK = "χηωεφβρ"
+
+
 def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]]) -> list[Finding]:
+    """Latin symbols italic, Greek letters roman (APA 7 §6.45); words
+    (chi-square, partial, adjusted) are not checked."""
     bad = []
-    symbols: list[tuple[int, str]] = []
+    symbols: list[tuple[int, str, str]] = []
     if rep.symbol is not None:
-        symbols.append((rep.symbol_start, rep.symbol_text))
+        symbols.append((rep.symbol_start, rep.symbol_text, rep.symbol))
     if rep.p is not None and rep.p.op != "ns":
-        symbols.append((rep.p.symbol_start, rep.p.symbol_text))
+        symbols.append((rep.p.symbol_start, rep.p.symbol_text, "p"))
     for e in rep.effects + rep.descriptives:
-        symbols.append((e.symbol_start, e.symbol_text))
-    for start, symbol in symbols:
-        letters = [(start + i, ch) for i, ch in enumerate(symbol) if ch.isalpha()]
-        if not letters:
-            continue
-        head = letters[0][1]
-        if head.isascii():
-            if symbol.strip() in _LATIN or head in "tFrzUHWTpPdgVRMNn":
-                if not _is_italic(letters[0][0], spans):
-                    bad.append(f"{symbol} (not italic)")
-        elif _is_italic(letters[0][0], spans):
-            bad.append(f"{symbol} (Greek: roman)")
+        symbols.append((e.symbol_start, e.symbol_text, e.name))
+    for start, symbol, name in symbols:
+        greek = next((i for i, ch in enumerate(symbol) if ch in _GREEK), None)
+        if greek is not None:
+            if _is_italic(start + greek, spans):
+                bad.append(f"{symbol} (Greek: roman)")
+        elif name in _ITALIC_NAMES and symbol[:1].isascii() and symbol[:1].isalpha() and len(symbol.split()) == 1:
+            if not _is_italic(start, spans):
+                bad.append(f"{symbol} (not italic)")
     return [Finding("italics", "Latin statistical symbols are italic; Greek letters are not.", ", ".join(bad))] if bad else []
 
 

@@ -94,6 +94,7 @@ class Reported:
     descriptives: list[Effect] = field(default_factory=list)
     operators: list[tuple[int, int]] = field(default_factory=list)  # (start, end) of each operator with its spacing
     text: str = ""
+    p_range: tuple[float, ...] | None = None  # filled by the checks (cache)
 
 
 def symbol_of(text: str) -> str | None:
@@ -261,8 +262,13 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     return out
 
 
+_OPERATOR_OR_NS = re.compile(r"[=<>≤≥]|(?<![\w.])n\.?\s?s\b")
+
+
 def _orphans(pat: _Patterns, text: str, start: int, end: int) -> list[Reported]:
     """The statistics without a head in one sentence piece: one cluster."""
+    if _OPERATOR_OR_NS.search(text, start, end) is None:
+        return []
     first = [m.start() for regex in (pat.p, pat.effect) for m in [regex.search(text, start, end)] if m is not None]
     if not first:
         return []

@@ -94,6 +94,7 @@ def _text_units(text: str, suffix: str) -> Iterator[Unit]:
             line += block.count("\n")
             continue
         if block.strip():
+            block = block.rstrip()
             clean = _strip_marks(block, suffix)[0] if suffix != ".txt" else block
             yield Unit(f"line {line}", clean, None, "", line)  # italics are checked in .docx only
         line += block.count("\n")
