@@ -277,7 +277,7 @@ def test_exit_status_and_json(tmp_path, capsys):
     rows = json.loads(capsys.readouterr().out)
     assert len(rows) == 2 and all({"location", "found", "codes", "message", "suggestion"} <= set(r) for r in rows)
     assert rows[0]["codes"] == [] and rows[1]["codes"] == ["p-inconsistent"]
-    assert rows[1]["found"] == "t(23) = 2.10, p = .030" and rows[1]["location"] == "line 3, column 22"
+    assert rows[1]["found"] == "t(23) = 2.10, p = .030" and rows[1]["location"] == "line 3, characters 22–43"
     assert main(["audit", str(flawed), "--csv"]) == 1
     assert capsys.readouterr().out.splitlines()[0] == "location,found,codes,message,suggestion"
     assert flawed.read_text(encoding="utf-8") == FLAWED  # never modified
@@ -370,3 +370,27 @@ def test_fast_p_equals_scipy_stats():
         value = rng.uniform(0.01, 0.99) if symbol == "r" else rng.uniform(0.01, 30)
         df = {"t": (rng.randint(1, 300),), "chi2": (rng.randint(1, 30),), "r": (rng.randint(1, 300),), "F": (rng.randint(1, 9), rng.randint(2, 400)), "z": ()}[symbol]
         assert _p_of(symbol, value, df) == pytest.approx(p_from_statistic(symbol, value, df), rel=1e-9, abs=1e-15)
+
+
+def test_docx_headers_and_footnotes_are_read(tmp_path):
+    import zipfile
+
+    from statsetter.audit.reading import read_units
+
+    path = tmp_path / "notes.docx"
+    d = docx.Document()
+    d.add_paragraph("Body text without statistics.")
+    d.sections[0].header.paragraphs[0].text = "Running head: t(12) = 2.50, p = .028"
+    d.save(str(path))
+    footnotes = (
+        '<?xml version="1.0" encoding="UTF-8" standalone="yes"?>'
+        '<w:footnotes xmlns:w="http://schemas.openxmlformats.org/wordprocessingml/2006/main">'
+        '<w:footnote w:id="1"><w:p><w:r><w:t>See F(1, 20) = 4.35, p = .050.</w:t></w:r></w:p></w:footnote></w:footnotes>'
+    )
+    with zipfile.ZipFile(path, "a") as archive:
+        archive.writestr("word/footnotes.xml", footnotes)
+    units = read_units(path)
+    where = {u.location: u.text for u in units}
+    assert where["header1 paragraph 1"].startswith("Running head") and where["footnote paragraph 1"].startswith("See F(1, 20)")
+    entries = audit_units(units)
+    assert [e.found for e in entries] == ["t(12) = 2.50, p = .028", "F(1, 20) = 4.35, p = .050"]

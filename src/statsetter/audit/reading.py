@@ -109,7 +109,9 @@ def _docx_units(p: Path) -> Iterator[Unit]:
     try:
         with zipfile.ZipFile(p) as archive:
             names = archive.namelist()
-            parts = ["word/document.xml"] + sorted(n for n in names if re.fullmatch(r"word/(header|footer)\d*\.xml|word/(foot|end)notes\.xml", n))
+            order = {"header": 0, "footer": 1, "footnotes": 2, "endnotes": 3}
+            extra = [n for n in names if re.fullmatch(r"word/(header|footer)\d*\.xml|word/(foot|end)notes\.xml", n)]
+            parts = ["word/document.xml"] + sorted(extra, key=lambda n: (order[re.sub(r"\d*\.xml$", "", n[5:])], n))
             for part in parts:
                 try:
                     root = etree.fromstring(archive.read(part), etree.XMLParser(huge_tree=True, resolve_entities=False, no_network=True))

@@ -88,7 +88,7 @@ def audit_units(
             else:  # a text block starting at line unit.index
                 line = unit.index + unit.text.count("\n", 0, rep.start)
                 column = rep.start - (unit.text.rfind("\n", 0, rep.start) + 1) + 1
-                location = f"line {line}, column {column}"
+                location = f"line {line}, characters {column}–{column + rep.end - rep.start - 1}"
             entries.append(Entry(location, rep.text, tuple(findings), _suggest(rep, resolved, alpha), unit, rep.start, rep.end))
     return entries
 
