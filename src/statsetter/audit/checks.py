@@ -334,14 +334,14 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
         p = _recomputed_p(rep, alpha)
     effects = []
     if rep.symbol in ("r", "rs") and rep.value is not None and abs(rep.value.value) <= 1:
-        ci = _interval(rep.ci, precision, 0)
+        ci = _interval(rep.ci, precision, 0, style, rep.symbol)
         effects.append(EffectSize(rep.symbol, rep.value.value, ci))
         precision["effects[0].value"] = rep.value.decimals
     for e in rep.effects:
         i = len(effects)
         if e.name == "OR" and e.number.value <= 0:
             continue
-        effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, i), ratio=e.name == "OR"))
+        effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, i, style, e.name), ratio=e.name == "OR"))
         precision[f"effects[{i}].value"] = e.number.decimals
     kind = _KIND.get(rep.symbol or "", "reported")
     if rep.symbol == "F":
@@ -393,10 +393,22 @@ def _recomputed_p(rep: Reported, alpha: float) -> float | None:
     return None
 
 
-def _interval(ci, precision: dict[str, int], i: int) -> Interval | None:  # type: ignore[no-untyped-def]
+def _interval(ci, precision: dict[str, int], i: int, style: Style | None, quantity: str) -> Interval | None:  # type: ignore[no-untyped-def]
     if ci is None or ci.low.value > ci.high.value:
         return None
     precision[f"effects[{i}].ci.low"] = ci.low.decimals
     precision[f"effects[{i}].ci.high"] = ci.high.decimals
-    return Interval(ci.level, ci.low.value, ci.high.value)
+    low, high = ci.low.value, ci.high.value
+    if style is not None:  # a limit printed with an added digit (−.005 for a limit near 0) keeps it
+        num = numbers_for(style)
+        null = 1.0 if quantity == "OR" else 0.0
+
+        def as_printed(v: float, printed: Number) -> float:
+            for c in (v, math.nextafter(v, null), math.nextafter(v, -math.inf if v < null else math.inf)):
+                if num.limit(c, quantity, null, held=printed.decimals).lstrip(style.minus + "-") == printed.digits:
+                    return c
+            return v
+
+        low, high = as_printed(low, ci.low), as_printed(high, ci.high)
+    return Interval(ci.level, low, high)
 
