@@ -1,4 +1,8 @@
-"""The demo: INVENTED records rendered in three styles, to the terminal and Markdown."""
+"""The demo, on INVENTED data: generate the data, run the plan (every analysis,
+a descriptives table by group, a correlation table, a results table), write
+Word, Markdown, HTML, LaTeX and JSON, fill an author's chapter, re-render the
+records in two more styles as a co-author would, and audit a manuscript
+excerpt with planted errors."""
 
 from __future__ import annotations
 
@@ -10,10 +14,10 @@ sys.path.insert(0, str(HERE))
 
 import generate  # noqa: E402
 
-from statsetter import load_records, load_style, render  # noqa: E402
-from statsetter.export.docx_writer import results_document, save_document  # noqa: E402
-from statsetter.export.markers import describe, fill_chapter  # noqa: E402
+from statsetter import load_style, render  # noqa: E402
+from statsetter.audit.report import as_json, audit_file, print_table  # noqa: E402
 from statsetter.files import write_atomic  # noqa: E402
+from statsetter.plan import load_plan, run_plan, write_outputs  # noqa: E402
 
 CAUTION = (
     "Invented data. Check every reported result against your journal's instructions, your "
@@ -21,44 +25,34 @@ CAUTION = (
 )
 
 
-def main() -> None:
-    path = generate.main()
-    records = load_records(path.read_text(encoding="utf-8"), source=str(path))
-    styles = [load_style("apa7"), load_style("ama11"), load_style(HERE / "house-comma.toml")]
-    out_dir = HERE / "out"
-    out_dir.mkdir(exist_ok=True)
-    md = ["# statsetter demo: results from an invented driver survey", "", f"*{CAUTION}*", ""]
-    for style in styles:
+def main(plan_path: Path = HERE / "plan.toml") -> int:
+    data = generate.main(plan_path.parent / "data")
+    out = plan_path.parent / "out"
+    out.mkdir(exist_ok=True)
+    generate.make_chapter(out / "chapter-with-markers.docx")
+    plan = load_plan(plan_path)
+    result = write_outputs(plan, run_plan(plan))
+    print(f"{CAUTION}\n")
+    print(f"Data (invented): {data}")
+    print(f"{len(result.records)} results from {len(plan.analyses)} analyses; {len(result.tables)} tables")
+    picks = [r for r in result.records if r.id in ("fatigue_alpha", "fatigue_by_incident", "fatigue_by_shift", "shift_incident")]
+    for style in (load_style("apa7"), load_style("ama11"), load_style(HERE / "house-comma.toml")):
         print(f"\n== {style.title}")
-        md += [f"## {style.title}", ""]
-        for r in records:
-            sentence = render(r, "sentence", style)
-            print(f"[{r.id}] {sentence.plain()}")
-            md += [f"**{r.id}**: {sentence.markdown()}", "", f"Statistics string: {render(r, 'stats', style).markdown()}", ""]
-    target = write_atomic(out_dir / "results.md", "\n".join(md) + "\n")
-    docx_path = save_document(results_document(records, styles[0], title="Results (invented data)"), out_dir / "results.docx")
-    chapter = make_chapter(out_dir / "chapter-with-markers.docx")
-    report = fill_chapter(chapter, records, out_dir / "chapter-filled.docx", styles[0])
-    print(f"\n{CAUTION}")
-    print(f"Records:         {path}")
-    print(f"Markdown:        {target}")
-    print(f"Word results:    {docx_path}")
-    print(f"Chapter markers: {chapter}")
-    print(f"Filled chapter:  {out_dir / 'chapter-filled.docx'} ({'; '.join(describe(report))})")
-
-
-def make_chapter(path: Path) -> Path:
-    """An author's chapter (invented) with result markers of our syntax."""
-    import docx
-
-    d = docx.Document()
-    d.add_heading("Chapter 4: Results (invented data)", level=1)
-    d.add_paragraph("Drivers on rotating shifts reported more fatigue: [[fatigue_by_shift]].")
-    d.add_paragraph("[[sleep_fatigue|sentence]]")
-    d.add_paragraph("The rest-break subsample: [[rest_break_trial]].")
-    d.save(str(path))
-    return path
+        for r in picks:
+            print(f"[{r.id}] {render(r, 'stats', style).plain()}")
+    print("\n== Audit of demo/manuscript-excerpt.md (planted errors)")
+    entries = audit_file(HERE / "manuscript-excerpt.md")
+    print_table(entries)
+    report = write_atomic(out / "audit-report.json", as_json(entries) + "\n")
+    print("\nOutputs:")
+    for what, path in result.written:
+        print(f"  {what:8} {path}")
+    print(f"  {'audit':8} {report} (every statistic of demo/manuscript-excerpt.md, with its findings)")
+    for note in result.notes:
+        if not note.endswith("not used by any marker"):
+            print(f"  {note}")
+    return 0
 
 
 if __name__ == "__main__":
-    main()
+    raise SystemExit(main())

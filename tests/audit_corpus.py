@@ -162,8 +162,8 @@ def planted(rng: random.Random, code: str) -> Planted:
     if code == "ci-excludes-estimate":
         return one(f"t({D}) = {T}, {_p(p)}, d = {_num(d)}, 95% CI [{_num(d + 0.2)}, {_num(d + 0.8)}]")
     if code == "df-not-integer":
-        f, d1, d2 = round(rng.uniform(3, 9), 2), 2.5, rng.randint(40, 90)
-        return one(f"F({d1}, {d2}) = {_num(f)}, {_p(float(stats.f.sf(f, d1, d2)))}")
+        x, df = round(rng.uniform(3, 12), 2), rng.choice([1.5, 2.5, 3.5])
+        return one(f"χ²({df}, N = {rng.randint(60, 400)}) = {_num(x)}, {_p(float(stats.chi2.sf(x, df)))}")
     if code == "leading-zero":
         return one(f"t({D}) = {T}, p = 0{_p_value(p)}" if p >= 0.001 else "r(40) = 0.51, p < .001")
     if code == "missing-leading-zero":

@@ -135,8 +135,10 @@ def test_impossible_values():
     assert "negative-sd" in codes("M = 4.20, SD = −0.73")
     assert "ci-reversed" in codes("d = 0.68, 95% CI [1.31, 0.04]")
     assert "ci-excludes-estimate" in codes("d = 0.68, 95% CI [0.04, 0.50]")
-    assert "df-not-integer" in codes("F(2.5, 30) = 3.20, p = .047")
+    assert "df-not-integer" in codes("χ²(2.5, N = 90) = 3.20, p = .277")
     assert "df-not-integer" not in codes("t(17.78) = −1.86, p = .080")  # Welch df keep decimals
+    assert "df-not-integer" not in codes("F(2, 152.68) = 14.23, p < .001")  # and so do Welch's F
+    assert "p-inconsistent" not in codes("r(238) = .03, Holm-adjusted p = 1.000")  # an adjusted p is not recomputed
     assert "impossible-value" in codes("χ²(1, N = 50) = 4.00, p = .046, V = 1.30")
 
 

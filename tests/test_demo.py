@@ -1,25 +1,75 @@
-"""The demo runs end to end and says its data are invented (common practice: a demo smoke test)."""
+"""End to end: the demo plan runs into a temporary folder; every output exists;
+LibreOffice opens every .docx; every statistic in the Markdown output passes
+the audit with zero findings (the audit issue); re-running after the data
+change updates every output. (Common practice: an end-to-end smoke test; the
+data are the demo's invented survey.)"""
+
+from __future__ import annotations
 
 import re
+import shutil
 import subprocess
 import sys
 from pathlib import Path
 
 import docx
+import pytest
+
+from statsetter.audit.report import audit_file
+from statsetter.cli import main as cli
+from test_docx import pdf_text
 
 ROOT = Path(__file__).resolve().parents[1]
 
 
-def test_demo_runs():
-    proc = subprocess.run([sys.executable, str(ROOT / "demo" / "run_demo.py")], capture_output=True, text=True, check=True)
-    assert "Invented data" in proc.stdout
-    out = ROOT / "demo" / "out"
-    for name in ("results.md", "results.docx", "chapter-filled.docx"):
-        assert (out / name).exists(), name
-    filled = "\n".join(p.text for p in docx.Document(str(out / "chapter-filled.docx")).paragraphs)
-    assert "[[" not in filled and re.search(r"t\(\d+\.\d+\) = \d", filled)
-    from test_docx import pdf_text
+@pytest.fixture(scope="module")
+def run(tmp_path_factory):
+    folder = tmp_path_factory.mktemp("demo")
+    shutil.copy(ROOT / "demo" / "plan.toml", folder / "plan.toml")
+    sys.path.insert(0, str(ROOT / "demo"))
+    import run_demo
 
-    for name in ("results.docx", "chapter-with-markers.docx", "chapter-filled.docx"):
-        assert pdf_text(out / name).strip()  # LibreOffice opens every .docx the demo writes
-    assert (ROOT / "demo" / "data" / "invented_driver_survey.csv").read_text().startswith("# INVENTED DATA")
+    assert run_demo.main(folder / "plan.toml") == 0
+    return folder
+
+
+def test_every_output_exists(run):
+    out = run / "out"
+    for name in ("results.docx", "results.md", "results.html", "results.tex", "records.json", "chapter-with-markers.docx", "chapter-filled.docx", "audit-report.json"):
+        assert (out / name).stat().st_size > 0, name
+    assert (run / "data" / "invented_driver_survey.csv").read_text(encoding="utf-8").startswith("# INVENTED DATA")
+    filled = "\n".join(p.text for p in docx.Document(str(out / "chapter-filled.docx")).paragraphs)
+    assert "[[" not in filled
+    assert "α = ." in filled and re.search(r"t\(\d+\.\d+\) = \d", filled) and len(docx.Document(str(out / "chapter-filled.docx")).tables) == 1
+
+
+def test_libreoffice_opens_every_docx(run):
+    for path in sorted((run / "out").glob("*.docx")):
+        assert pdf_text(path).strip(), path.name
+
+
+def test_markdown_output_passes_the_audit(run):
+    entries = audit_file(run / "out" / "results.md")
+    assert len(entries) >= 50  # the statistics of 22 analyses were found
+    assert [(e.found, e.codes) for e in entries if e.codes] == []
+    symbols = {e.found.split("(")[0].split(" ")[0] for e in entries}
+    assert {"t", "F", "χ²", "r", "rs", "τb", "H", "U", "T", "z"} <= symbols
+
+
+def test_rerun_after_the_data_change_updates_everything(run, capsys):
+    data = run / "data" / "invented_driver_survey.csv"
+    before_md = (run / "out" / "results.md").read_text(encoding="utf-8")
+    before_chapter = "\n".join(p.text for p in docx.Document(str(run / "out" / "chapter-filled.docx")).paragraphs)
+    lines = data.read_text(encoding="utf-8").splitlines()
+    data.write_text("\n".join(lines[:2] + lines[40:]) + "\n", encoding="utf-8")  # 38 drivers fewer
+    assert cli(["run", str(run / "plan.toml")]) == 0
+    after_md = (run / "out" / "results.md").read_text(encoding="utf-8")
+    after_chapter = "\n".join(p.text for p in docx.Document(str(run / "out" / "chapter-filled.docx")).paragraphs)
+    assert after_md != before_md and "*N* = 202" in after_md and "*N* = 240" not in after_md
+    assert after_chapter != before_chapter and "r(200) = " in after_chapter and "n = 202" in after_chapter
+    assert "records.json" in capsys.readouterr().out
+
+
+def test_demo_script_runs():
+    proc = subprocess.run([sys.executable, str(ROOT / "demo" / "run_demo.py")], capture_output=True, text=True, check=True, cwd=ROOT)
+    assert "Invented data" in proc.stdout and "audit-report.json" in proc.stdout

@@ -3,7 +3,8 @@
 Commands: ``format`` (one result from numbers on the command line),
 ``render`` (JSON files of records), ``fill`` (markers in a chapter),
 ``describe`` (a descriptives table from a data file), ``audit`` (a
-manuscript's statistics checked), ``styles`` (list, show, check). Every
+manuscript's statistics checked), ``run`` (an analysis plan), ``styles``
+(list, show, check). Every
 error from user input prints one or two lines and exits with status 2.
 """
 
@@ -153,6 +154,15 @@ def _build_parser() -> argparse.ArgumentParser:
     a.add_argument("--annotate", metavar="OUT.docx", help="write a copy of a .docx with a Word comment on each finding")
     a.add_argument("--encoding", default="utf-8", help="text encoding of a .md/.txt/.tex file (utf-8)")
     a.add_argument("--grim-items", type=int, metavar="K", help="run the GRIM test on means, for integer scores summed over K items")
+
+    rn = sub.add_parser(
+        "run",
+        help="run an analysis plan: every table and paragraph into every output, the chapter filled",
+        description="Run a plan file (TOML; see the README): read the data, score the scales, run every analysis, "
+        "build the tables, write the outputs and fill the chapter's markers. Re-run after the data change.",
+    )
+    rn.add_argument("plan", metavar="PLAN.toml")
+    rn.add_argument("--format", choices=("files", "json"), default="files", help="json: print the records instead of writing the outputs")
 
     s = sub.add_parser("styles", help="list, show or check style profiles")
     s.add_argument("action", nargs="?", choices=("list", "show", "check"), default="list")
@@ -405,6 +415,37 @@ def _cmd_audit(ns: argparse.Namespace) -> int:
     return 1 if any(e.findings for e in entries) else 0
 
 
+def _cmd_run(ns: argparse.Namespace) -> int:
+    from .plan import load_plan, run_plan, write_outputs
+
+    plan = load_plan(ns.plan)
+    if len(plan.analyses) >= 8 and sys.stderr.isatty():
+        from rich.console import Console
+        from rich.progress import Progress
+
+        with Progress(console=Console(stderr=True), transient=True) as bar:
+            task = bar.add_task("analyses", total=len(plan.analyses))
+            result = run_plan(plan, progress=lambda name: bar.update(task, advance=1, description=name))
+    else:
+        result = run_plan(plan)
+    if ns.format == "json":
+        from .records import dump_records
+
+        sys.stdout.write(dump_records(result.records))
+        return 0
+    write_outputs(plan, result)
+    print(f"{len(result.records)} results from {len(plan.analyses)} analyses and {len(plan.scales)} scale(s); {len(result.tables)} table(s)")
+    for what, path in result.written:
+        print(f"  {what:8} {path}")
+    unused = [n for n in result.notes if n.startswith("record '") and n.endswith("not used by any marker")]
+    for note in result.notes:
+        if note not in unused:
+            print(f"  {note}")
+    if unused:
+        print(f"  {len(unused)} record(s) not used by any marker of the chapter (all are in the outputs)")
+    return 1 if result.unknown_markers else 0
+
+
 def _cmd_styles(ns: argparse.Namespace) -> int:
     from .style import builtin_styles, check_style_file, load_style
 
@@ -455,7 +496,7 @@ def main(argv: Sequence[str] | None = None) -> int:
     if ns.command is None:
         parser.print_help()
         return 0
-    handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "describe": _cmd_describe, "audit": _cmd_audit, "styles": _cmd_styles}
+    handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "describe": _cmd_describe, "audit": _cmd_audit, "run": _cmd_run, "styles": _cmd_styles}
     try:
         return handlers[ns.command](ns)
     except StatsetterError as exc:

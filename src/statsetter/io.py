@@ -97,8 +97,14 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str) -> Dat
 
     if suffix in (".csv", ".tsv", ".txt"):
         sep = "\t" if suffix == ".tsv" else ("," if suffix == ".csv" else None)
+        skip = 0  # leading lines starting with "#" are notes about the file (our demo data say they are invented)
+        with p.open(encoding=encoding, errors="replace") as fh:
+            for line in fh:
+                if not line.startswith("#"):
+                    break
+                skip += 1
         try:
-            frame = pd.read_csv(p, sep=sep, encoding=encoding, engine="python" if sep is None else "c")
+            frame = pd.read_csv(p, sep=sep, encoding=encoding, engine="python" if sep is None else "c", skiprows=skip)
         except pd.errors.EmptyDataError:
             raise InputError(f"{p}: no columns to read") from None
         except pd.errors.ParserError as exc:

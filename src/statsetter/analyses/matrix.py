@@ -57,6 +57,7 @@ class CorrelationMatrix:
                             Variable(self.names[j], self.labels.get(self.names[j], self.names[j]), "y"),
                         ),
                         notes=tuple(notes),
+                        details={"p_adjusted": _ADJUST_NAMES[self.adjust]} if self.adjust else {},
                         provenance=prov,
                     )
                 )

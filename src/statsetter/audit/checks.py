@@ -32,7 +32,7 @@ CODES: dict[str, tuple[str, str]] = {
     "negative-sd": ("a negative standard deviation", "Descriptives (APA 7 §6.44)"),
     "ci-reversed": ("a CI whose lower limit is above its upper", "Confidence intervals (APA 7 §6.44)"),
     "ci-excludes-estimate": ("a CI that does not contain its estimate", "Confidence intervals (APA 7 §6.44)"),
-    "df-not-integer": ("non-integer df where the test needs whole numbers", "Reporting by test (practice; Welch t keeps decimals)"),
+    "df-not-integer": ("non-integer df where the test needs whole numbers (χ², r, H)", "Reporting by test (practice; Welch t and F keep decimals)"),
     "leading-zero": ("a leading zero on a quantity that cannot exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
     "missing-leading-zero": ("no leading zero on a quantity that can exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
     "decimals": ("decimals other than the style's", "Numbers: decimals (APA 7 §6.36)"),
@@ -45,9 +45,9 @@ CODES: dict[str, tuple[str, str]] = {
 }
 
 _BOUNDED_EFFECTS = {"V": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
-_WHOLE_DF = {"F", "chi2", "r", "rs", "H"}
+_WHOLE_DF = {"chi2", "r", "rs", "H"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T"}
-_KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon"}
+_KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "tau_b": "kendall", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon"}
 
 
 @dataclass(frozen=True, slots=True)
@@ -132,6 +132,8 @@ def _overlap(a: tuple[float, float], b: tuple[float, float]) -> bool:
 
 
 def consistency(rep: Reported, alpha: float) -> list[Finding]:
+    if rep.p is not None and rep.p.adjusted:
+        return []  # an adjusted p cannot be recomputed from one statistic
     computed, reported = p_range(rep), reported_p_range(rep, alpha)
     if computed is None or reported is None:
         return []
@@ -154,7 +156,7 @@ def impossible(rep: Reported) -> list[Finding]:
     if rep.p is not None and rep.p.number is not None and not 0 <= rep.p.number.value <= 1:
         out.append(Finding("impossible-p", "A p value must lie between 0 and 1.", rep.p.number.text))
     if rep.value is not None:
-        if rep.symbol in ("r", "rs") and abs(rep.value.value) > 1:
+        if rep.symbol in ("r", "rs", "tau_b") and abs(rep.value.value) > 1:
             out.append(Finding("impossible-r", "A correlation must lie between −1 and 1.", rep.value.text))
         if rep.symbol in ("F", "chi2", "H") and rep.value.value < 0:
             out.append(Finding("negative-statistic", f"{rep.symbol_text} cannot be negative.", rep.value.text))
@@ -170,7 +172,7 @@ def impossible(rep: Reported) -> list[Finding]:
         if e.name == "SD" and e.number.value < 0:
             out.append(Finding("negative-sd", "A standard deviation cannot be negative.", e.number.text))
     intervals = [(e.ci, e.number, e.symbol_text) for e in rep.effects if e.ci is not None]
-    if rep.ci is not None and rep.symbol in ("r", "rs") and rep.value is not None:
+    if rep.ci is not None and rep.symbol in ("r", "rs", "tau_b") and rep.value is not None:
         intervals.append((rep.ci, rep.value, rep.symbol_text))
     elif rep.ci is not None:
         intervals.append((rep.ci, None, ""))  # type: ignore[arg-type]
@@ -198,7 +200,7 @@ def _numbers_with_quantity(rep: Reported) -> list[tuple[Number, str]]:
         if e.ci is not None:
             out += [(e.ci.low, e.name), (e.ci.high, e.name)]
     if rep.ci is not None:
-        q = rep.symbol if rep.symbol in ("r", "rs") else "default"
+        q = rep.symbol if rep.symbol in ("r", "rs", "tau_b") else "default"
         out += [(rep.ci.low, q), (rep.ci.high, q)]  # type: ignore[list-item]
     return out
 
@@ -333,7 +335,7 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
     else:
         p = _recomputed_p(rep, alpha)
     effects = []
-    if rep.symbol in ("r", "rs") and rep.value is not None and abs(rep.value.value) <= 1:
+    if rep.symbol in ("r", "rs", "tau_b") and rep.value is not None and abs(rep.value.value) <= 1:
         ci = _interval(rep.ci, precision, 0, style, rep.symbol)
         effects.append(EffectSize(rep.symbol, rep.value.value, ci))
         precision["effects[0].value"] = rep.value.decimals

@@ -53,6 +53,7 @@ class PValue:
     end: int
     symbol_start: int
     symbol_text: str
+    adjusted: bool = False  # "Holm-adjusted p", "corrected p": not recomputable from the statistic alone
 
 
 @dataclass(frozen=True, slots=True)
@@ -79,7 +80,7 @@ class Effect:
 class Reported:
     """One reported statistic: the head (absent for a lone p value) and its clause."""
 
-    symbol: str | None  # canonical: t, F, chi2, r, rs, z, U, H, W, T
+    symbol: str | None  # canonical: t, F, chi2, r, rs, tau_b, z, U, H, W, T
     symbol_text: str
     symbol_start: int
     start: int
@@ -104,6 +105,8 @@ def symbol_of(text: str) -> str | None:
         return "chi2"
     if low in ("rs", "rₛ", "r_s", "ρ", "rho"):
         return "rs"
+    if low.startswith(("τ", "tau")):
+        return "tau_b"
     return t if t in ("t", "F", "r", "z", "U", "H", "W", "T") else None
 
 
@@ -115,7 +118,7 @@ def _number_pattern(mark: str) -> str:
 
 _SYMBOL = (
     r"(?:χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
-    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|[tFrzUHWT])"
+    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzUHWT])"
 )
 _EFFECT_NAMES = [
     (r"partial\s+(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2_p"),
@@ -130,6 +133,8 @@ _EFFECT_NAMES = [
     (r"(?<![\w])R\s?(?:[²2]|\^2)", "R2"),
     (r"β|(?<![\w])beta", "beta"),
     (r"(?<![\w])OR", "OR"),
+    (r"(?<![\w])d_?z", "d_z"),
+    (r"(?<![\w])d_?av", "d_av"),
     (r"(?<![\w])d", "d"),
     (r"(?<![\w])g", "g"),
     (r"(?<![\w])Mdn", "Mdn"),
@@ -299,7 +304,11 @@ def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[in
     return [(o.start(), o.end()) for o in pat.operator.finditer(text, start, end) if o.group().strip()]
 
 
+_ADJUSTED = re.compile(r"(?i:adjusted|corrected|holm|bonferroni|sidak|šidák|fdr|benjamini)[\s-]*$")
+
+
 def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
+    adjusted = bool(_ADJUSTED.search(m.string, max(0, m.start() - 30), m.start()))
     if m.group("ns"):
         return PValue("ns", None, m.start(), m.end(), m.start(), m.group("ns"))
     raw = m.group("num")
@@ -310,7 +319,7 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     if exp:
         scale = 10.0 ** int(exp.group(1).replace("−", "-"))
         number = Number(raw, number.value * scale, number.decimals - int(exp.group(1).replace("−", "-")), number.start, m.end("num"))
-    return PValue(m.group("op"), number, m.start(), m.end("num"), m.start("sym"), m.group("sym"))
+    return PValue(m.group("op"), number, m.start(), m.end("num"), m.start("sym"), m.group("sym"), adjusted)
 
 
 def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:

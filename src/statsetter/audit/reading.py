@@ -68,8 +68,15 @@ _MD_ITALIC = re.compile(r"(?<![*A-Za-z0-9])([*_])(?!\s)([^*_\n]{1,40}?)(?<!\s)\1
 _TEX_ITALIC = re.compile(r"\\textit\{([^{}]{1,40})\}|\\emph\{([^{}]{1,40})\}|\$([^$\n]{1,40})\$")
 
 
+_SUPERSCRIPT = str.maketrans("0123456789+-−", "⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻⁻")
+_PANDOC_SUP = re.compile(r"\^([^\^\s]{1,8})\^")
+_PANDOC_SUB = re.compile(r"~([^~\s]{1,8})~")
+
+
 def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ...]]:  # spans kept for a later check
-    """Text without emphasis markers, and the italic spans they marked."""
+    """Text without emphasis markers, and the italic spans they marked.
+    Markdown's pandoc super- and subscripts become what they print as:
+    ``χ^2^`` is χ², ``r~s~`` is rs."""
     tex = suffix == ".tex"
     out, spans, at, length = [], [], 0, 0
     for m in (_TEX_ITALIC if tex else _MD_ITALIC).finditer(text):
@@ -84,7 +91,10 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         length += len(inner)
         at = m.end()
     out.append(text[at:])
-    return "".join(out), tuple(spans)
+    clean = "".join(out)
+    if not tex:  # after the emphasis, so that *r*~s~ reads rs (spans are not used for Markdown)
+        clean = _PANDOC_SUB.sub(lambda m: m.group(1), _PANDOC_SUP.sub(lambda m: m.group(1).translate(_SUPERSCRIPT), clean))
+    return clean, tuple(spans)
 
 
 def _text_units(text: str, suffix: str) -> Iterator[Unit]:

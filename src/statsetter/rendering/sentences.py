@@ -136,6 +136,8 @@ class Helpers:
         if r.p is None:
             return _EMPTY
         op, text = self.num.p(r.p, r.alpha, held=_held(r, "p"))
+        if not label and r.details.get("p_adjusted"):  # a p adjusted for multiple comparisons says so
+            label = f"{r.details['p_adjusted']}-adjusted"
         prefix = f"{escape(label)} " if label else ""
         return Markup(f"{prefix}{self._p_symbol} {_OPS[op]} {text}")
 

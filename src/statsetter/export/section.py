@@ -1,0 +1,65 @@
+"""A whole results section — a paragraph per record and the tables — in
+Markdown, HTML, LaTeX, Word and JSON, written where a plan says."""
+
+from __future__ import annotations
+
+import html
+from pathlib import Path
+from typing import Sequence
+
+from ..records import Result, dump_records
+from ..rendering.sentences import render
+from ..rendering.tables import TableModel
+from ..style.profile import Style
+from .text_tables import write_table
+
+__all__ = ["CAUTION", "section_text", "write_section"]
+
+CAUTION = (
+    "Prepared with statsetter. Check every result against the analysis output, the target journal's instructions, "
+    "the institution's thesis rules and the ethics approval, and have the analyses reviewed by a qualified statistician."
+)
+
+
+def section_text(records: Sequence[Result], tables: Sequence[TableModel], style: Style, title: str, fmt: str) -> str:
+    """The section as Markdown (``md``), HTML (``html``) or LaTeX (``tex``)."""
+    sentences = [render(r, "sentence", style).to(fmt) for r in records]
+    blocks = [write_table(t, fmt) for t in tables]
+    if fmt == "md":
+        return "\n\n".join([f"# {title}", *sentences, *blocks, f"*{CAUTION}*"]) + "\n"
+    if fmt == "html":
+        body = "\n".join([f"<h1>{html.escape(title)}</h1>", *(f"<p>{s}</p>" for s in sentences), *blocks, f"<p><i>{html.escape(CAUTION)}</i></p>"])
+        return f'<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>{html.escape(title)}</title></head><body>\n{body}\n</body></html>\n'
+    if fmt == "tex":
+        head = "\\documentclass{article}\n\\usepackage{booktabs}\n\\usepackage[T1]{fontenc}\n\\usepackage[utf8]{inputenc}\n\\begin{document}\n"
+        title_tex = title.replace("\\", "\\textbackslash{}").replace("&", "\\&").replace("%", "\\%")
+        return head + "\n\n".join([f"\\section*{{{title_tex}}}", *sentences, *blocks, f"\\emph{{{CAUTION}}}"]) + "\n\\end{document}\n"
+    raise ValueError(f"unknown section format {fmt!r}")
+
+
+def write_section(
+    records: Sequence[Result], tables: Sequence[TableModel], style: Style, title: str, targets: dict[str, Path], inputs: Sequence[Path] = ()
+) -> list[tuple[str, Path]]:
+    """Write each format in ``targets`` (md, html, tex, docx, json): [(format, path)]."""
+    from ..files import write_atomic
+
+    written = []
+    for fmt, path in targets.items():
+        if fmt == "json":
+            write_atomic(path, dump_records(records), inputs=inputs)
+        elif fmt == "docx":
+            from .docx_writer import add_runs, results_document, save_document
+
+            document = results_document(records, style, title=title, tables=tables)
+            add_runs(document.add_paragraph(), render_caution())
+            save_document(document, path, inputs=inputs)
+        else:
+            write_atomic(path, section_text(records, tables, style, title, fmt), inputs=inputs)
+        written.append((fmt, path))
+    return written
+
+
+def render_caution():  # type: ignore[no-untyped-def]
+    from ..rendering.styled import StyledText
+
+    return StyledText.styled(CAUTION, "i")

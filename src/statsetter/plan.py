@@ -1,0 +1,408 @@
+"""The analysis plan: one TOML file of our own format from the data to every
+table and paragraph of a results section.
+
+```toml
+title = "Results"
+style = "apa7"                         # a built-in name or a style file
+[data]
+path = "data/survey.csv"               # .csv .xlsx .sav .dta .parquet
+missing = [-99]                        # codes meaning missing
+labels = { fatigue = "fatigue score" }
+levels = { shift = "nominal" }
+[[scales]]
+name = "fatigue"
+items = ["f1", "f2", "f3"]
+reverse = ["f3"]
+minimum = 1
+maximum = 5
+alpha = true                           # adds a record "<name>_alpha"
+[[analyses]]
+id = "fatigue_by_shift"
+kind = "anova_oneway"                  # a statsetter.analyses function, or "auto"
+outcome = "fatigue"
+group = "shift"
+[[tables]]
+kind = "descriptives"                  # or "results" (analyses = [ids]) or "correlations"
+variables = ["age", "fatigue"]
+by = "shift"
+[outputs]
+folder = "out"
+docx = "results.docx"
+md = "results.md"
+[chapter]
+path = "chapter.docx"                  # [[id]] markers filled into out
+out = "chapter-filled.docx"
+```
+
+Every key is checked: a bad key or value is reported with its line and, for
+an unknown key or variable, the close matches.
+"""
+
+from __future__ import annotations
+
+import difflib
+import inspect
+import re
+import tomllib
+from dataclasses import dataclass, field
+from pathlib import Path
+from typing import TYPE_CHECKING, Any, Callable
+
+from .errors import InputError
+from .records import Result
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+    from .rendering.tables import TableModel
+    from .style.profile import Style
+
+__all__ = ["Plan", "PlanError", "load_plan", "run_plan", "write_outputs", "RunResult", "ANALYSIS_KINDS"]
+
+ANALYSIS_KINDS = (
+    "pearson", "spearman", "kendall", "correlation_matrix", "t_independent", "t_paired", "t_one_sample",
+    "chi_square", "goodness_of_fit", "anova_oneway", "posthoc", "factorial_anova", "linear_regression",
+    "hierarchical_steps", "logistic_regression", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
+    "cronbach_alpha", "auto",
+)
+_TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
+_DATA = {"path", "sheet", "missing", "labels", "levels", "value_labels", "encoding"}
+_SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label"}
+_TABLE = {
+    "descriptives": {"kind", "id", "title", "variables", "by", "tests", "smd", "show", "weights", "suppress_below", "percent_of"},
+    "results": {"kind", "id", "title", "analyses"},
+    "correlations": {"kind", "id", "title", "analysis"},
+}
+_OUTPUTS = {"folder", "docx", "md", "tex", "html", "json"}
+_CHAPTER = {"path", "out"}
+
+
+class PlanError(InputError):
+    """A problem in the plan file, with its line."""
+
+
+@dataclass
+class Plan:
+    path: Path
+    data: dict[str, Any]
+    title: str = "Results"
+    style: str | None = None
+    level: float = 0.95
+    scales: list[dict[str, Any]] = field(default_factory=list)
+    analyses: list[dict[str, Any]] = field(default_factory=list)
+    tables: list[dict[str, Any]] = field(default_factory=list)
+    outputs: dict[str, Any] = field(default_factory=dict)
+    chapter: dict[str, Any] | None = None
+    lines: dict[str, int] = field(default_factory=dict)
+
+    def where(self, key: str) -> str:
+        line = self.lines.get(key) or self.lines.get(key.rsplit(".", 1)[0])
+        return f"{self.path}, line {line}" if line else str(self.path)
+
+    def fail(self, key: str, message: str) -> PlanError:
+        return PlanError(f"{self.where(key)} ({key}): {message}")
+
+    def resolve(self, value: str) -> Path:
+        p = Path(value)
+        return p if p.is_absolute() else self.path.parent / p
+
+
+def _lines(text: str) -> dict[str, int]:
+    """Line numbers of keys as dotted paths: ``analyses[2].outcome``, ``data.path``."""
+    out: dict[str, int] = {}
+    section, counts = "", {}
+    for number, line in enumerate(text.splitlines(), 1):
+        stripped = line.strip()
+        m = re.fullmatch(r"\[\[\s*([\w.]+)\s*\]\](?:\s*#.*)?", stripped)
+        if m:
+            name = m.group(1)
+            counts[name] = counts.get(name, -1) + 1
+            section = f"{name}[{counts[name]}]"
+            out[section] = number
+            continue
+        m = re.fullmatch(r"\[\s*([\w.]+)\s*\](?:\s*#.*)?", stripped)
+        if m:
+            section = m.group(1)
+            out[section] = number
+            continue
+        m = re.match(r"([A-Za-z_][\w-]*)\s*=", stripped)
+        if m:
+            out[f"{section}.{m.group(1)}" if section else m.group(1)] = number
+    return out
+
+
+def _unknown(plan: Plan, where: str, keys: set[str], allowed: set[str]) -> None:
+    for key in sorted(keys - allowed):
+        close = difflib.get_close_matches(key, sorted(allowed), n=2, cutoff=0.6)
+        hint = f"; did you mean {' or '.join(close)}?" if close else f"; allowed: {', '.join(sorted(allowed))}"
+        raise plan.fail(f"{where}.{key}" if where else key, f"unknown key {key!r}{hint}")
+
+
+def load_plan(path: "str | Path") -> Plan:
+    """Read and check a plan file (nothing is computed yet)."""
+    p = Path(path)
+    try:
+        text = p.read_text(encoding="utf-8")
+    except FileNotFoundError:
+        raise PlanError(f"{p}: no such file") from None
+    except (OSError, UnicodeDecodeError) as exc:
+        raise PlanError(f"{p}: cannot read ({exc})") from None
+    try:
+        raw = tomllib.loads(text)
+    except tomllib.TOMLDecodeError as exc:
+        raise PlanError(f"{p}: not valid TOML ({exc})") from None
+    plan = Plan(p, {}, lines=_lines(text))
+    _unknown(plan, "", set(raw), _TOP)
+    data = raw.get("data")
+    if not isinstance(data, dict) or "path" not in data:
+        raise plan.fail("data", "the plan needs a [data] table with a path")
+    _unknown(plan, "data", set(data), _DATA)
+    plan.data = data
+    plan.title = str(raw.get("title", "Results"))
+    plan.style = raw.get("style")
+    plan.level = float(raw.get("level", 0.95))
+    if not 0 < plan.level < 1:
+        raise plan.fail("level", f"{plan.level:g} is not between 0 and 1 (write 0.95 for 95%)")
+    for i, scale in enumerate(raw.get("scales", [])):
+        _unknown(plan, f"scales[{i}]", set(scale), _SCALE)
+        for need in ("name", "items"):
+            if need not in scale:
+                raise plan.fail(f"scales[{i}]", f"a scale needs {need!r}")
+        plan.scales.append(scale)
+    ids: set[str] = set()
+    for i, analysis in enumerate(raw.get("analyses", [])):
+        where = f"analyses[{i}]"
+        for need in ("id", "kind"):
+            if need not in analysis:
+                raise plan.fail(where, f"an analysis needs {need!r}")
+        if analysis["id"] in ids:
+            raise plan.fail(f"{where}.id", f"the id {analysis['id']!r} is used twice")
+        if not re.fullmatch(r"[A-Za-z0-9_.\-]+", str(analysis["id"])):
+            raise plan.fail(f"{where}.id", f"{analysis['id']!r}: ids use letters, digits, _, . and - (they are chapter markers)")
+        ids.add(analysis["id"])
+        kind = analysis["kind"]
+        if kind not in ANALYSIS_KINDS:
+            close = difflib.get_close_matches(str(kind), ANALYSIS_KINDS, n=2)
+            raise plan.fail(f"{where}.kind", f"unknown kind {kind!r}" + (f"; did you mean {' or '.join(close)}?" if close else f"; kinds: {', '.join(ANALYSIS_KINDS)}"))
+        _unknown(plan, where, set(analysis), {"id", "kind"} | set(_parameters(kind)))
+        plan.analyses.append(analysis)
+    for i, table in enumerate(raw.get("tables", [])):
+        kind = table.get("kind")
+        if kind not in _TABLE:
+            raise plan.fail(f"tables[{i}].kind", f"{kind!r} is not one of {', '.join(_TABLE)}")
+        _unknown(plan, f"tables[{i}]", set(table), _TABLE[kind])
+        for ref in table.get("analyses", []) + ([table["analysis"]] if "analysis" in table else []):
+            if ref not in ids:
+                raise plan.fail(f"tables[{i}].analyses", f"no analysis with id {ref!r}")
+        plan.tables.append(table)
+    outputs = raw.get("outputs", {})
+    _unknown(plan, "outputs", set(outputs), _OUTPUTS)
+    plan.outputs = outputs
+    if "chapter" in raw:
+        _unknown(plan, "chapter", set(raw["chapter"]), _CHAPTER)
+        if "path" not in raw["chapter"]:
+            raise plan.fail("chapter", "the chapter needs a path")
+        plan.chapter = raw["chapter"]
+    return plan
+
+
+def _function(kind: str) -> Callable[..., Any]:
+    from . import analyses
+
+    name = {"pearson": "correlate", "spearman": "correlate", "kendall": "correlate", "auto": "analyse"}.get(kind, kind)
+    return getattr(analyses, name)
+
+
+def _parameters(kind: str) -> list[str]:
+    names = [n for n in inspect.signature(_function(kind)).parameters if n != "df"]
+    return [n for n in names if not (kind in ("pearson", "spearman", "kendall") and n == "method")]
+
+
+@dataclass
+class RunResult:
+    records: list[Result]
+    tables: list["TableModel"]
+    written: list[tuple[str, Path]]
+    notes: list[str]
+    unknown_markers: bool = False
+
+
+def _frame(plan: Plan) -> tuple["pd.DataFrame", dict[str, str], dict[str, str], dict[str, Any]]:
+    from .io import read_data
+
+    d = plan.data
+    try:
+        data = read_data(plan.resolve(d["path"]), sheet=d.get("sheet"), missing=d.get("missing"), encoding=d.get("encoding", "utf-8"))
+    except InputError as exc:
+        raise PlanError(f"{plan.where('data.path')}: {exc}") from None
+    frame = data.frame
+    labels = {**data.labels, **d.get("labels", {})}
+    levels = {**data.levels, **d.get("levels", {})}
+    value_labels: dict[str, Any] = dict(data.value_labels)
+    for name, mapping in d.get("value_labels", {}).items():
+        value_labels[name] = {_code(k): v for k, v in mapping.items()}
+    for key, names in (("labels", d.get("labels", {})), ("levels", d.get("levels", {})), ("value_labels", d.get("value_labels", {}))):
+        for name in names:
+            if name not in frame.columns:
+                raise plan.fail(f"data.{key}", _no_column(name, frame))
+    return frame, labels, levels, value_labels
+
+
+def _code(key: str) -> Any:
+    try:
+        return float(key) if "." in key else int(key)
+    except ValueError:
+        return key
+
+
+def _no_column(name: str, frame: "pd.DataFrame") -> str:
+    close = difflib.get_close_matches(str(name), [str(c) for c in frame.columns], n=3, cutoff=0.5)
+    return f"{name}: no such column" + (f"; did you mean {', '.join(close)}?" if close else "")
+
+
+def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunResult:
+    """Compute every scale, analysis and table of the plan (nothing written)."""
+    from .analyses import cronbach_alpha, scale_score
+
+    frame, labels, levels, value_labels = _frame(plan)
+    style = _style(plan)
+    records: list[Result] = []
+    by_id: dict[str, list[Result]] = {}
+    matrices: dict[str, Any] = {}
+    alphas: dict[str, Result] = {}
+    for i, scale in enumerate(plan.scales):
+        name = scale["name"]
+        options = {k: scale[k] for k in ("reverse", "minimum", "maximum") if k in scale}
+        try:
+            frame = frame.assign(**{name: scale_score(frame, scale["items"], scoring=scale.get("scoring", "mean"), **options)})
+            if scale.get("label"):
+                labels[name] = scale["label"]
+            if scale.get("alpha"):
+                record = cronbach_alpha(frame, scale["items"], level=plan.level, scale=labels.get(name, name), labels=labels, **options)
+                record = _with_id(record, f"{name}_alpha")
+                alphas[name] = record
+                records.append(record)
+                by_id[record.id] = [record]  # type: ignore[index]
+        except InputError as exc:
+            raise PlanError(f"{plan.where(f'scales[{i}]')} (scale {name!r}): {exc}") from None
+    for i, analysis in enumerate(plan.analyses):
+        if progress:
+            progress(analysis["id"])
+        kind = analysis["kind"]
+        args = {k: v for k, v in analysis.items() if k not in ("id", "kind")}
+        if "level" in _parameters(kind):
+            args.setdefault("level", plan.level)
+        if "labels" in _parameters(kind):
+            args["labels"] = {**labels, **args.get("labels", {})}
+        if kind == "auto":
+            args["levels"] = {**levels, **args.get("levels", {})}
+        if kind in ("pearson", "spearman", "kendall"):
+            args["method"] = kind
+        try:
+            result = _function(kind)(frame, **args)
+        except (InputError, TypeError) as exc:
+            key = _key_of(analysis, str(exc))
+            raise PlanError(f"{plan.where(f'analyses[{i}].{key}' if key else f'analyses[{i}]')} (analysis {analysis['id']!r}): {exc}") from None
+        if kind == "correlation_matrix":
+            matrices[analysis["id"]] = result
+            result = result.records()
+        found = result if isinstance(result, list) else [result]
+        found = [_with_id(r, analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}") for k, r in enumerate(found)]
+        by_id[analysis["id"]] = found
+        records += found
+    tables = [_table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style) for i, t in enumerate(plan.tables)]
+    tables = [t.with_number(n) for n, t in enumerate(tables, 1)]
+    return RunResult(records, tables, [], [])
+
+
+def _key_of(entry: dict[str, Any], message: str) -> str | None:
+    """The plan key whose value the message is about ("fatigu: no such column" -> outcome)."""
+    token = message.split(":", 1)[0].strip()
+    for key, value in entry.items():
+        values = value if isinstance(value, list) else [value]
+        flat = [x for v in values for x in (v if isinstance(v, list) else [v])]
+        if token in map(str, flat):
+            return key
+    return None
+
+
+def _with_id(record: Result, rid: str) -> Result:
+    from dataclasses import replace
+
+    return replace(record, id=rid)
+
+
+def _style(plan: Plan) -> "Style":
+    from .style import load_style
+
+    value = plan.style
+    if value is None:
+        return load_style(None)
+    candidate = plan.resolve(value)
+    try:
+        return load_style(str(candidate) if str(value).endswith(".toml") else value)
+    except InputError as exc:
+        raise PlanError(f"{plan.where('style')}: {exc}") from None
+
+
+def _table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style):  # type: ignore[no-untyped-def]
+    from .analyses.descriptives import describe
+    from .rendering.record_tables import results_table
+
+    where = f"tables[{i}]"
+    try:
+        if t["kind"] == "descriptives":
+            d = describe(
+                frame, t.get("variables"), by=t.get("by"), levels=levels, value_labels=value_labels, labels=labels, show=t.get("show"),
+                weights=t.get("weights"), tests=bool(t.get("tests")), smd=bool(t.get("smd")), suppress_below=t.get("suppress_below"),
+                percent_of=t.get("percent_of", "valid"), alphas={k: v for k, v in alphas.items() if k in (t.get("variables") or frame.columns)},
+            )
+            return d.table(style, title=t.get("title"))
+        if t["kind"] == "results":
+            chosen = [r for ref in t["analyses"] for r in by_id[ref]]
+            return results_table(chosen, style, title=t.get("title", "Results"))
+        from .rendering.correlation_tables import correlation_table
+
+        if t["analysis"] not in matrices:
+            raise InputError(f"{t['analysis']!r} is not a correlation_matrix analysis")
+        return correlation_table(matrices[t["analysis"]], style, title=t.get("title"))
+    except InputError as exc:
+        raise PlanError(f"{plan.where(where)} (table {i + 1}): {exc}") from None
+
+
+_DEFAULT_OUTPUTS = {"md": "results.md", "docx": "results.docx", "json": "records.json"}
+
+
+def write_outputs(plan: Plan, result: RunResult) -> RunResult:
+    """Write every output of the plan and fill the chapter; the paths in ``written``."""
+    from .export.section import write_section
+
+    style = _style(plan)
+    outputs = {k: v for k, v in plan.outputs.items() if k != "folder"} or dict(_DEFAULT_OUTPUTS)
+    folder = plan.resolve(plan.outputs.get("folder", "out"))
+    try:
+        folder.mkdir(parents=True, exist_ok=True)
+    except OSError as exc:
+        raise plan.fail("outputs.folder", f"cannot create {folder} ({exc.strerror or exc})") from None
+    data_path = plan.resolve(plan.data["path"])
+    targets = {fmt: folder / name for fmt, name in outputs.items()}
+    inputs = [plan.path, data_path] + ([plan.resolve(plan.chapter["path"])] if plan.chapter else [])
+    written = write_section(result.records, result.tables, style, plan.title, targets, inputs)
+    notes: list[str] = []
+    if plan.chapter:
+        from .export.markers import describe, fill_chapter
+
+        source = plan.resolve(plan.chapter["path"])
+        out = folder / plan.chapter.get("out", f"{source.stem}-filled.docx")
+        try:
+            report = fill_chapter(source, result.records, out, style)
+        except InputError as exc:
+            raise PlanError(f"{plan.where('chapter.path')}: {exc}") from None
+        written.append(("chapter", out))
+        notes = list(describe(report))
+        if report.unknown:
+            notes.append("unknown markers were left as they are")
+        result.notes += notes
+        result.unknown_markers = bool(report.unknown)
+    result.written += written
+    return result

@@ -1,0 +1,99 @@
+"""The plan file: validation with lines and close matches, running, outputs.
+
+Data: the Palmer penguins as pingouin bundles them (Gorman, Williams &
+Fraser, 2014); the plan's record must be the one the analysis gives directly,
+whose numbers tests/test_analyses_basic.py checks against scipy.
+"""
+
+from __future__ import annotations
+
+import json
+
+import pingouin as pg
+import pytest
+
+from statsetter.analyses import t_independent
+from statsetter.cli import main
+from statsetter.plan import PlanError, load_plan, run_plan
+
+
+@pytest.fixture
+def folder(tmp_path):
+    pg.read_dataset("penguins").to_csv(tmp_path / "penguins.csv", index=False)
+    return tmp_path
+
+
+def write(folder, text):
+    path = folder / "plan.toml"
+    path.write_text(text, encoding="utf-8")
+    return path
+
+
+GOOD = """title = "Penguins"
+[data]
+path = "penguins.csv"
+labels = { body_mass_g = "body mass" }
+
+[[analyses]]
+id = "mass_by_sex"
+kind = "t_independent"
+outcome = "body_mass_g"
+group = "sex"
+
+[[tables]]
+kind = "descriptives"
+variables = ["body_mass_g", "species"]
+by = "sex"
+
+[outputs]
+folder = "out"
+md = "results.md"
+docx = "results.docx"
+json = "records.json"
+"""
+
+
+def test_plan_runs_and_matches_the_analysis(folder, capsys):
+    path = write(folder, GOOD)
+    result = run_plan(load_plan(path))
+    direct = t_independent(pg.read_dataset("penguins"), "body_mass_g", "sex", labels={"body_mass_g": "body mass"})
+    assert result.records[0].id == "mass_by_sex"
+    assert result.records[0].statistic == direct.statistic and result.records[0].p == direct.p
+    assert result.tables[0].number == 1
+    assert main(["run", str(path)]) == 0
+    out = capsys.readouterr().out
+    assert "results.md" in out and (folder / "out" / "results.docx").exists()
+    md = (folder / "out" / "results.md").read_text(encoding="utf-8")
+    assert "Welch's *t*(323.90) = −8.55" in md and "**Table 1**" in md and "qualified statistician" in md
+    assert main(["run", str(path), "--format", "json"]) == 0
+    assert json.loads(capsys.readouterr().out)[0]["id"] == "mass_by_sex"
+
+
+@pytest.mark.parametrize(
+    "change,message",
+    [
+        (("outcome = \"body_mass_g\"", "outcme = \"body_mass_g\""), "line 9 (analyses[0].outcme): unknown key 'outcme'; did you mean outcome?"),
+        (("kind = \"t_independent\"", "kind = \"t_indep\""), "line 8 (analyses[0].kind): unknown kind 't_indep'; did you mean t_independent?"),
+        (("outcome = \"body_mass_g\"", "outcome = \"body_mass\""), "line 9 (analysis 'mass_by_sex'): body_mass: no such column; did you mean body_mass_g?"),
+        (("labels = { body_mass_g", "labels = { body_mas"), "line 4 (data.labels): body_mas: no such column; did you mean body_mass_g"),
+        (("title = \"Penguins\"", "titel = \"Penguins\""), "line 1 (titel): unknown key 'titel'; did you mean title?"),
+        (("by = \"sex\"", "by = \"sx\""), "(table 1): sx: no such column; did you mean sex"),
+        (("path = \"penguins.csv\"", "path = \"pinguins.csv\""), "line 3: "),
+        (("md = \"results.md\"", "mdd = \"results.md\""), "line 19 (outputs.mdd): unknown key 'mdd'; did you mean md"),
+    ],
+)
+def test_bad_plans_name_the_line(folder, capsys, change, message):
+    path = write(folder, GOOD.replace(*change))
+    assert main(["run", str(path)]) == 2
+    err = capsys.readouterr().err
+    assert message in err and "Traceback" not in err and len(err.strip().splitlines()) <= 2
+    assert not (folder / "out").exists()
+
+
+def test_not_toml_and_no_data(folder):
+    with pytest.raises(PlanError, match="not valid TOML"):
+        load_plan(write(folder, "title = \n"))
+    with pytest.raises(PlanError, match=r"needs a \[data\] table"):
+        load_plan(write(folder, "title = 'x'\n"))
+    with pytest.raises(PlanError, match="used twice"):
+        load_plan(write(folder, GOOD + "\n[[analyses]]\nid = \"mass_by_sex\"\nkind = \"auto\"\noutcome = \"a\"\npredictor = \"b\"\n"))
