@@ -73,3 +73,20 @@ def test_rerun_after_the_data_change_updates_everything(run, capsys):
 def test_demo_script_runs():
     proc = subprocess.run([sys.executable, str(ROOT / "demo" / "run_demo.py")], capture_output=True, text=True, check=True, cwd=ROOT)
     assert "Invented data" in proc.stdout and "audit-report.json" in proc.stdout
+
+
+def test_switching_the_style_changes_the_tables_too(run):
+    # the demo's decimal-comma house style: decimal commas and ';' in text and in every table
+    from statsetter import load_style, render
+    from statsetter.export.text_tables import write_table
+    from statsetter.plan import load_plan, run_plan
+
+    plan = load_plan(run / "plan.toml")
+    plan.style = str(ROOT / "demo" / "house-comma.toml")
+    result = run_plan(plan)
+    tables = [write_table(t, "md") for t in result.tables]
+    assert re.search(r"\d+,\d{2} \(\d+,\d{2}\)", tables[0]) and not re.search(r"\d+\.\d{2} \(\d+\.\d{2}\)", tables[0])  # M (SD)
+    assert re.search(r"\| −?,\d{2}", tables[1]) and not re.search(r"\| −?\.\d{2}", tables[1])  # correlations
+    assert "[0,19; 1,03]" in tables[2] or re.search(r"\[\d,\d{2}; \d,\d{2}\]", tables[2])
+    text = render(result.records[1], "stats", load_style(ROOT / "demo" / "house-comma.toml")).plain()
+    assert re.fullmatch(r"r\(238\) = −,\d\d; 95% CI \[−,\d\d; −,\d\d\]; p < ,001", text)

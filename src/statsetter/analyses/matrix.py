@@ -106,9 +106,10 @@ def correlation_matrix(
     rows = len(X)
     if (miss_count == rows).any():
         raise InputError(f"{columns[int(np.argmax(miss_count == rows))]}: every value is missing")
-    centred = np.where(missing, 0.0, X)
-    centred -= centred.sum(axis=0) / (rows - miss_count)
-    centred[missing] = 0.0
+    # centre on each column's observed mean; missing cells become 0 and drop out of every sum
+    present_mask = ~missing
+    centred = np.zeros_like(X)  # one pass: observed cells minus the column mean, missing cells 0
+    np.subtract(X, X.sum(axis=0, where=present_mask) / (rows - miss_count), out=centred, where=present_mask)
     Sxy = centred.T @ centred
     squares = centred * centred
     if missing.mean() <= SPARSE_BELOW:
@@ -119,8 +120,9 @@ def correlation_matrix(
         indptr = np.concatenate([[0], np.cumsum(miss_count)])
         St = sparse.csr_matrix((np.ones(len(flat)), flat % rows, indptr), shape=(X.shape[1], rows))
         N = rows - miss_count[:, None] - miss_count[None, :] + (St @ St.T).toarray()
+        # column sums of the centred values are 0 up to rounding; the diagonal of Sxy holds the sums of squares
         Sx = centred.sum(axis=0)[:, None] - np.asarray(St @ centred).T
-        Sxx = squares.sum(axis=0)[:, None] - np.asarray(St @ squares).T
+        Sxx = np.diag(Sxy)[:, None] - np.asarray(St @ squares).T
     else:
         M = (~missing).astype(float)
         M32 = M.astype(np.float32)  # counts are exact in float32 below 2^24 rows
