@@ -92,3 +92,25 @@ def test_precision_held_is_respected():
 def test_statistic_only():
     r = Result(kind="t_independent", statistic=Statistic("t", 1.5, (10,)))
     assert render(r, "stats").plain() == "t(10) = 1.50"
+
+
+@pytest.mark.parametrize("style_name", ["apa7", "ama11"])
+def test_compiled_stats_forms_equal_the_template_macros(style_name):
+    # the stats form compiled to Python must say exactly what the Jinja macro says, for every kind
+    from statsetter import load_style
+    from statsetter.rendering import sentences
+    from statsetter.rendering.kinds import KINDS
+
+    style = load_style(style_name)
+    compiled = 0
+    for kind in KINDS:
+        fast = sentences.compiled_stats(style, "en", kind)
+        if fast is None:
+            continue
+        compiled += 1
+        macro = sentences._macros(style, "en", kind).stats
+        record = EXAMPLES[kind]
+        assert sentences._tidy(str(fast(record))) == sentences._tidy(str(macro(record))), kind
+        bare = stripped(record)
+        assert sentences._tidy(str(fast(bare))) == sentences._tidy(str(macro(bare))), kind
+    assert compiled >= len(KINDS) - 2

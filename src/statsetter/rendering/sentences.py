@@ -315,23 +315,74 @@ def _tidy(markup: str) -> str:
 
 def render(record: Result, form: str = "stats", style: "Style | str | None" = None, language: str = "en") -> StyledText:
     """A record as StyledText: ``form`` is ``stats`` or ``sentence``."""
-    if form not in FORMS:
-        raise TemplateError(f"unknown form {form!r}; forms: {', '.join(FORMS)}")
-    resolved = load_style(style)
-    module = _macros(resolved, language, record.kind)
-    macro = getattr(module, form, None)
-    if macro is None:
-        raise TemplateError(f"template {record.kind}.j2 has no macro {form!r}")
-    from jinja2 import TemplateError as JinjaError
-
+    resolved = style if isinstance(style, Style) else load_style(style)
+    fn = _renderer(resolved, language, record.kind, form)
     try:
-        markup = macro(record)
-    except JinjaError as exc:
+        markup = fn(record)
+    except TemplateError:
+        raise
+    except Exception as exc:  # a template expression that does not fit the record
         raise TemplateError(f"template {record.kind}.j2 ({form}) failed: {exc}") from None
     try:
         return StyledText.from_markup(_tidy(str(markup)))
     except ValueError as exc:
         raise TemplateError(f"template {record.kind}.j2 ({form}) produced bad markup: {exc}") from None
+
+
+@lru_cache(maxsize=512)
+def _renderer(style: Style, language: str, kind: str, form: str) -> Callable[[Result], Any]:
+    """The callable behind one (style, kind, form): the template's macro, or,
+    for a stats form that is a single expression of helper calls, that
+    expression compiled to Python once (the same helpers, without the
+    template engine's per-call machinery; tests/test_templates.py checks that
+    both give the same text for every kind)."""
+    if form not in FORMS:
+        raise TemplateError(f"unknown form {form!r}; forms: {', '.join(FORMS)}")
+    module = _macros(style, language, kind)
+    macro = getattr(module, form, None)
+    if macro is None:
+        raise TemplateError(f"template {kind}.j2 has no macro {form!r}")
+    if form == "stats":
+        fast = compiled_stats(style, language, kind)
+        if fast is not None:
+            return fast
+    from jinja2 import TemplateError as JinjaError
+
+    def run(record: Result) -> Any:
+        try:
+            return macro(record)
+        except JinjaError as exc:
+            raise TemplateError(f"template {kind}.j2 ({form}) failed: {exc}") from None
+
+    return run
+
+
+_STATS_MACRO = re.compile(r"\{%-?\s*macro stats\(r\)\s*-?%\}\{\{(?P<expr>.*?)\}\}\{%-?\s*endmacro\s*-?%\}", re.S)
+_STRING = re.compile(r"(\"(?:[^\"\\]|\\.)*\"|'(?:[^'\\]|\\.)*')")
+_WORDS = {"none": "None", "true": "True", "false": "False"}
+
+
+def compiled_stats(style: Style, language: str, kind: str) -> Callable[[Result], Any] | None:
+    """The stats macro as a Python expression over the helpers, or None when
+    the template is more than one expression (then the macro is used)."""
+    source = (templates_dir(language) / f"{kind}.j2").read_text(encoding="utf-8")
+    m = _STATS_MACRO.search(source)
+    if m is None or "|" in _STRING.sub("", m.group("expr")):
+        return None
+    parts = _STRING.split(m.group("expr"))
+    for i in range(0, len(parts), 2):  # outside string literals: Jinja's ~ and lower-case constants
+        parts[i] = re.sub(r"\b(none|true|false)\b", lambda w: _WORDS[w.group(1)], parts[i].replace("~", "+"))
+    try:
+        code = compile("".join(parts).strip(), f"{kind}.j2:stats", "eval")
+    except SyntaxError:
+        return None
+    names = dict(_helpers(style).globals())
+    names["__builtins__"] = {}
+
+    def run(record: Result) -> Any:
+        return eval(code, names, {"r": record})
+
+    return run
 
 
 def render_many(
