@@ -149,3 +149,19 @@ def test_missing_values_always_stated(penguins):
     assert any(n.kind == "missing" and n.text.startswith("No rows dropped") for n in r.notes)
     r = correlate(penguins, "bill_length_mm", "body_mass_g")
     assert any(n.kind == "missing" and "2 of 344 rows dropped" in n.text for n in r.notes)
+
+
+@pytest.mark.parametrize("alternative", ["less", "greater"])
+def test_one_sided_t_tests_match_scipy(penguins, alternative):
+    # scipy.stats: one-sided p; the record keeps no half-open CI
+    from statsetter.analyses import t_independent, t_one_sample
+
+    data = penguins.dropna(subset=["body_mass_g", "sex"])
+    a, b = (data.body_mass_g[data.sex == s].to_numpy() for s in ("female", "male"))
+    for variant, equal in (("welch", False), ("student", True)):
+        r = t_independent(penguins, "body_mass_g", "sex", variant=variant, alternative=alternative)
+        ref = stats.ttest_ind(a, b, equal_var=equal, alternative=alternative)
+        assert r.statistic.value == pytest.approx(ref.statistic, rel=1e-10) and r.p == pytest.approx(ref.pvalue, rel=1e-10)
+        assert r.estimate.ci is None and r.alternative == alternative
+    one = t_one_sample(penguins, "body_mass_g", 4200, alternative=alternative)
+    assert one.p == pytest.approx(stats.ttest_1samp(penguins.body_mass_g.dropna(), 4200, alternative=alternative).pvalue, rel=1e-10)

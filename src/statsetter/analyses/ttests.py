@@ -22,6 +22,44 @@ def _moments(v: "np.ndarray") -> tuple[float, float]:
     return m, float(dev @ dev) / (len(v) - 1)
 
 
+def _finite(level: float, low: float, high: float) -> Interval | None:
+    """The CI of a two-sided test; a one-sided test's interval is open on one
+    side and is left out of the record (its p and the test direction are kept)."""
+    return Interval(level, low, high) if math.isfinite(low) and math.isfinite(high) else None
+
+
+def _two_sample_t(
+    ma: float, va: float, n1: int, mb: float, vb: float, n2: int, pooled: bool, alternative: str, level: float
+) -> tuple[float, float, float, float, float]:
+    """(t, df, p, CI low, CI high) of the mean difference from the groups'
+    moments: Student's pooled SE or Welch's SE with the Welch–Satterthwaite df,
+    as scipy.stats.ttest_ind computes them (the tests compare the two)."""
+    from scipy import special
+
+    if pooled:
+        df = float(n1 + n2 - 2)
+        se = math.sqrt(((n1 - 1) * va + (n2 - 1) * vb) / df * (1 / n1 + 1 / n2))
+    else:
+        qa, qb = va / n1, vb / n2
+        df = (qa + qb) ** 2 / (qa * qa / (n1 - 1) + qb * qb / (n2 - 1))
+        se = math.sqrt(qa + qb)
+    diff = ma - mb
+    t = diff / se
+    if alternative == "two-sided":
+        p = 2 * float(special.stdtr(df, -abs(t)))
+        half = float(special.stdtrit(df, 0.5 + level / 2)) * se
+        low, high = diff - half, diff + half
+    elif alternative == "less":
+        p = float(special.stdtr(df, t))
+        low, high = -math.inf, diff + float(special.stdtrit(df, level)) * se
+    elif alternative == "greater":
+        p = float(special.stdtr(df, -t))
+        low, high = diff - float(special.stdtrit(df, level)) * se, math.inf
+    else:
+        raise InputError(f"alternative: {alternative!r} is not two-sided, less or greater")
+    return t, df, min(p, 1.0), low, high
+
+
 def _levene(a: "np.ndarray", b: "np.ndarray", ma: float, mb: float) -> tuple[float, float]:
     """Levene's test centred on the mean (scipy.stats.levene(center="mean")):
     the one-way ANOVA F of the absolute deviations from each group's mean."""
@@ -60,7 +98,6 @@ def t_independent(
     the two levels of ``group`` (or the two named in ``groups``, in that order).
     Levene's test (centred on the mean) is attached as a note. d uses the
     pooled SD; its CI is the noncentral-t interval; g applies Hedges' exact J."""
-    from scipy import stats
 
     if variant not in ("welch", "student"):
         raise InputError(f"variant: {variant!r} is not welch or student")
@@ -85,9 +122,8 @@ def t_independent(
     (ma, va), (mb, vb) = _moments(a), _moments(b)
     if va == 0 and vb == 0:
         raise InputError(f"{outcome}: zero variance in both groups; the t statistic is undefined")
-    res = stats.ttest_ind(a, b, equal_var=variant == "student", alternative=alternative)
-    ci = res.confidence_interval(level)
     n1, n2 = len(a), len(b)
+    t_value, df_value, p_value, ci_low, ci_high = _two_sample_t(ma, va, n1, mb, vb, n2, variant == "student", alternative, level)
     sp = math.sqrt(((n1 - 1) * va + (n2 - 1) * vb) / (n1 + n2 - 2))
     scale = math.sqrt(1 / n1 + 1 / n2)
     t_pooled = (ma - mb) / (sp * scale)
@@ -106,11 +142,11 @@ def t_independent(
     glabels = [str(x) for x in levels]
     return Result(
         kind="t_independent",
-        statistic=Statistic("t", float(res.statistic), (float(res.df),)),
-        p=float(res.pvalue),
+        statistic=Statistic("t", t_value, (df_value,)),
+        p=p_value,
         alternative=alternative,  # type: ignore[arg-type]
         n=n1 + n2,
-        estimate=Estimate("mean difference", ma - mb, ci=Interval(level, float(ci.low), float(ci.high))),
+        estimate=Estimate("mean difference", ma - mb, ci=_finite(level, ci_low, ci_high)),
         effects=(d, g_),
         groups=(GroupSummary(glabels[0], n=n1, mean=ma, sd=math.sqrt(va)), GroupSummary(glabels[1], n=n2, mean=mb, sd=math.sqrt(vb))),
         variables=c.variables({"outcome": outcome, "group": group}, labels),
@@ -162,7 +198,7 @@ def t_paired(
         p=float(res.pvalue),
         alternative=alternative,  # type: ignore[arg-type]
         n=n,
-        estimate=Estimate("mean difference", float(diff.mean()), ci=Interval(level, float(ci.low), float(ci.high))),
+        estimate=Estimate("mean difference", float(diff.mean()), ci=_finite(level, float(ci.low), float(ci.high))),
         effects=(es,),
         groups=(_summary(labels.get(first, first), a), _summary(labels.get(second, second), b)),
         variables=variables,
@@ -199,7 +235,7 @@ def t_one_sample(
         p=float(res.pvalue),
         alternative=alternative,  # type: ignore[arg-type]
         n=n,
-        estimate=Estimate("mean difference", float(a.mean() - mu), ci=Interval(level, float(ci.low - mu), float(ci.high - mu))),
+        estimate=Estimate("mean difference", float(a.mean() - mu), ci=_finite(level, float(ci.low - mu), float(ci.high - mu))),
         effects=(d,),
         groups=(_summary("sample", a),),
         variables=c.variables({"outcome": outcome}, labels),
