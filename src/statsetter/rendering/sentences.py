@@ -308,7 +308,12 @@ def _helpers(style: Style) -> Helpers:
     return Helpers(style)
 
 
+_UNTIDY = re.compile(r"\s\s|[^\S ]| [,;:)\]]|^\s|\s$")  # what _tidy would change
+
+
 def _tidy(markup: str) -> str:
+    if _UNTIDY.search(markup) is None:  # most statistics strings are tidy already
+        return markup
     text = _SPACE.sub(" ", markup).strip()
     return _SPACE_PUNCT.sub(r"\1", text)
 

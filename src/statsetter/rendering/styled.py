@@ -23,6 +23,13 @@ STYLES: tuple[str, ...] = ("i", "sup", "sub")
 
 _TOKEN = re.compile(r"<(/?)(i|sup|sub)>|&(lt|gt|amp|quot|#\d+|#x[0-9a-fA-F]+);|[<>&]")
 _ENTITY = {"lt": "<", "gt": ">", "amp": "&", "quot": '"'}
+_TAG_SPLIT = re.compile(r"<(/?)(i|sup|sub)>")
+_NO_STYLE: frozenset[str] = frozenset()
+_ONE_STYLE = {name: frozenset((name,)) for name in ("i", "sup", "sub")}
+
+
+def _span_order(s: "Span") -> tuple[int, int]:
+    return (s.start, -s.end)
 
 
 @dataclass(frozen=True, slots=True)
@@ -56,6 +63,31 @@ class StyledText:
     @classmethod
     def from_markup(cls, markup: str) -> "StyledText":
         """Parse the markup; raises ValueError naming the position of a fault."""
+        if "&" not in markup:  # the common case: tags only, split once
+            parts = _TAG_SPLIT.split(markup)
+            texts = parts[::3]
+            if not any("<" in t or ">" in t for t in texts):
+                out_spans: list[Span] = []
+                stack: list[tuple[str, int]] = []
+                length = len(texts[0])
+                for k in range(1, len(parts), 3):
+                    closing, tag = parts[k], parts[k + 1]
+                    if closing:
+                        if not stack or stack[-1][0] != tag:
+                            break  # let the full parser name the fault
+                        _, start = stack.pop()
+                        if length > start:
+                            out_spans.append(Span(start, length, tag))  # type: ignore[arg-type]
+                    else:
+                        stack.append((tag, length))
+                    length += len(parts[k + 2])
+                else:
+                    if not stack:
+                        out_spans.sort(key=_span_order)
+                        made = object.__new__(cls)
+                        object.__setattr__(made, "text", "".join(texts))
+                        object.__setattr__(made, "spans", tuple(out_spans))
+                        return made
         out: list[str] = []
         length = 0
         spans: list[Span] = []
@@ -152,9 +184,20 @@ class StyledText:
     def segments(self) -> Iterator[tuple[str, frozenset[str]]]:
         """Maximal runs of text with one set of styles, in order."""
         text = self.text
-        if not self.spans:
+        spans = self.spans
+        if not spans:
             if text:
                 yield text, frozenset()
+            return
+        if all(a.end <= b.start for a, b in zip(spans, spans[1:])):  # disjoint spans, the common case
+            at = 0
+            for sp in spans:
+                if sp.start > at:
+                    yield text[at : sp.start], _NO_STYLE
+                yield text[sp.start : sp.end], _ONE_STYLE[sp.style]
+                at = sp.end
+            if at < len(text):
+                yield text[at:], _NO_STYLE
             return
         cuts = {0, len(text)}
         for s in self.spans:
@@ -283,7 +326,9 @@ _MD_SPECIAL = re.compile(r"([\\*_^~`])")
 
 
 def _escape_md(text: str) -> str:
-    return _MD_SPECIAL.sub(r"\\\1", text)
+    if "\\" in text or "*" in text or "_" in text or "^" in text or "~" in text or "`" in text:
+        return _MD_SPECIAL.sub(r"\\\1", text)
+    return text
 
 
 def _split_space(text: str) -> tuple[str, str, str]:
