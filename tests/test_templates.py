@@ -114,3 +114,20 @@ def test_compiled_stats_forms_equal_the_template_macros(style_name):
         bare = stripped(record)
         assert sentences._tidy(str(fast(bare))) == sentences._tidy(str(macro(bare))), kind
     assert compiled >= len(KINDS) - 2
+
+
+def test_tidy_skips_only_what_needs_no_tidying():
+    # the quick check in front of _tidy never skips a string the full tidy would change (common practice: a property test)
+    import random
+
+    from statsetter.rendering import sentences
+
+    def full(markup):
+        text = sentences._SPACE.sub(" ", markup).strip()
+        return sentences._SPACE_PUNCT.sub(r"\1", text)
+
+    rng = random.Random(3)
+    alphabet = list("ab ,;:)]1\n\t\u00a0\u202f.")
+    for _ in range(20000):
+        markup = "".join(rng.choice(alphabet) for _ in range(rng.randint(0, 12)))
+        assert sentences._tidy(markup) == full(markup), repr(markup)
