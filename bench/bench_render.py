@@ -43,25 +43,29 @@ def baseline(records: list[Result]) -> list[str]:
     return out
 
 
-def timed(fn) -> float:
-    times = []
-    for _ in range(REPEATS):
-        start = time.perf_counter()
-        fn()
-        times.append(time.perf_counter() - start)
-    return statistics.median(times)
-
-
 def main() -> None:
     records = make_records(N)
     style = load_style("apa7")
     render(records[0], "stats", style)  # warm the template cache
-    base = timed(lambda: baseline(records))
-    print(f"records: {N:,}; median of {REPEATS} runs")
+    runs = {
+        "baseline": lambda: baseline(records),
+        "text": lambda: [render(r, "stats", style).to("text") for r in records],
+        "md": lambda: [render(r, "stats", style).to("md") for r in records],
+    }
+    times: dict[str, list[float]] = {name: [] for name in runs}
+    for _ in range(REPEATS):  # interleaved, so that every variant sees the same machine
+        for name, fn in runs.items():
+            start = time.perf_counter()
+            fn()
+            times[name].append(time.perf_counter() - start)
+    base = statistics.median(times["baseline"])
+    print(f"records: {N:,}; median of {REPEATS} interleaved runs")
     print(f"f-string baseline: {base * 1000:8.1f} ms  ({N / base:,.0f} records/s)")
     for fmt in ("text", "md"):
-        t = timed(lambda: [render(r, "stats", style).to(fmt) for r in records])
-        print(f"statsetter -> {fmt:4}: {t * 1000:8.1f} ms  ({N / t:,.0f} records/s)  ratio to baseline {t / base:5.1f}")
+        t = statistics.median(times[fmt])
+        ratios = sorted(a / b for a, b in zip(times[fmt], times["baseline"]))
+        print(f"statsetter -> {fmt:4}: {t * 1000:8.1f} ms  ({N / t:,.0f} records/s)  ratio to baseline {t / base:5.1f} "
+              f"(per-run ratios {ratios[0]:.1f}-{ratios[-1]:.1f})")
 
 
 if __name__ == "__main__":

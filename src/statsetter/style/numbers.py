@@ -36,11 +36,10 @@ def round_half_up(value: float, decimals: int) -> Decimal:
     return Decimal(repr(float(value))).quantize(quantum, context=_CTX)
 
 
-def _exact_decimals(value: float) -> int:
-    """Decimals needed to show the float's shortest representation in full."""
-    exponent = Decimal(repr(float(value))).as_tuple().exponent
-    assert isinstance(exponent, int)
-    return max(0, -exponent)
+@lru_cache(maxsize=256)
+def _decimal_of(value: float) -> Decimal:
+    """The Decimal of a few recurring constants (alpha, the null of a CI)."""
+    return Decimal(repr(float(value)))
 
 
 PValue = tuple[Literal["=", "<", ">"], str]
@@ -145,11 +144,16 @@ class Numbers:
             decimals += 1
         if held is not None:
             decimals = min(decimals, held)
-        limit = held if held is not None else min(max(_exact_decimals(value), decimals), _MAX_DECIMALS)
+        exact = Decimal(repr(float(value)))  # built once: the decimals it has, and every rounding below
+        if held is not None:
+            limit = held
+        else:
+            exponent = exact.as_tuple().exponent
+            limit = min(max(-exponent if isinstance(exponent, int) and exponent < 0 else 0, decimals), _MAX_DECIMALS)
         below = value < alpha
-        alpha_dec = Decimal(repr(float(alpha)))
+        alpha_dec = _decimal_of(alpha)
         while True:
-            rounded = round_half_up(value, decimals)
+            rounded = exact.quantize(_QUANTUM[decimals], context=_CTX) if decimals < len(_QUANTUM) else round_half_up(value, decimals)
             wrong = (below and rounded >= alpha_dec) or (rounded == 0 and value > 0)
             if not wrong or decimals >= limit:
                 break
@@ -174,7 +178,7 @@ class Numbers:
             decimals = self.decimals_for(quantity)
         if held is not None:
             decimals = min(decimals, held)
-        null_dec = Decimal(repr(float(null)))
+        null_dec = _decimal_of(null)
         rounded = round_half_up(value, decimals)
         if rounded == null_dec and value != null:
             # round at the first significant digit of the distance from the null
