@@ -90,6 +90,12 @@ def test_bad_plans_name_the_line(folder, capsys, change, message):
     assert not (folder / "out").exists()
 
 
+def test_bad_scale_item_names_its_line(folder, capsys):
+    path = write(folder, GOOD.replace("[[analyses]]", "[[scales]]\nname = \"size\"\nitems = [\"bill_length_mm\", \"bill_depht_mm\"]\n\n[[analyses]]", 1))
+    assert main(["run", str(path)]) == 2
+    assert "line 8 (scale 'size'): bill_depht_mm: no such column; did you mean bill_depth_mm" in capsys.readouterr().err
+
+
 def test_not_toml_and_no_data(folder):
     with pytest.raises(PlanError, match="not valid TOML"):
         load_plan(write(folder, "title = \n"))

@@ -284,7 +284,8 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
                 records.append(record)
                 by_id[record.id] = [record]  # type: ignore[index]
         except InputError as exc:
-            raise PlanError(f"{plan.where(f'scales[{i}]')} (scale {name!r}): {exc}") from None
+            key = _key_of(scale, str(exc))
+            raise PlanError(f"{plan.where(f'scales[{i}].{key}' if key else f'scales[{i}]')} (scale {name!r}): {exc}") from None
     for i, analysis in enumerate(plan.analyses):
         if progress:
             progress(analysis["id"])
