@@ -299,3 +299,14 @@ def test_scale_score_shows_as_continuous_with_alpha():
         describe(frame, ["score"], alphas={"score": "high"})
     with pytest.raises(InputError, match="not described"):
         describe(frame, ["score"], alphas={"other": 0.8})
+
+
+def test_a_group_without_values_and_a_group_of_one():
+    # the Total is computed from the groups that have values; one value has no SD (common practice)
+    df = pd.DataFrame({"g": ["a", "a", "b", "b", "b", "c"], "x": [np.nan, np.nan, 1.0, 2.0, 3.5, 9.0]})
+    d = describe(df, ["x"], by="g", levels={"x": "interval"})
+    v = d.variables[0]
+    present = df.x.dropna()
+    assert v.mean[-1] == pytest.approx(present.mean(), rel=1e-12) and v.sd[-1] == pytest.approx(present.std(), rel=1e-12)
+    cells = [c.text for c in d.table().rows[0].cells]
+    assert cells[0] == "—" and cells[2] == "9.00 (—)"

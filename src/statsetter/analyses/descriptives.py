@@ -395,7 +395,8 @@ def _moments(x: "np.ndarray", ok: "np.ndarray", g: _Groups, n: "np.ndarray", ske
         if g.k > 1:
             total_n = ng.sum()
             grand = sums.sum() / total_n
-            ss_total = ss.sum() + float(np.sum(ng * (mean - grand) ** 2))
+            seen = ng > 0  # a group with no values on this variable adds nothing (its mean is NaN)
+            ss_total = float(ss[seen].sum()) + float(np.sum(ng[seen] * (mean[seen] - grand) ** 2))
             mean, ss = np.append(mean, grand), np.append(ss, ss_total)
         out["mean"] = mean
         out["sd"] = np.sqrt(ss / (n - 1))

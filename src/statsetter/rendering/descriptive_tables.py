@@ -63,7 +63,8 @@ class _Layout:
     def centre_spread(self, centre: float, spread: float) -> StyledText:
         if centre != centre:  # NaN: no values in this column
             return StyledText("—")
-        return StyledText(f"{self.num.number(centre, 'M')} ({self.num.number(spread, 'SD')})")
+        shown = self.num.number(spread, "SD") if spread == spread else "—"  # one value: no SD
+        return StyledText(f"{self.num.number(centre, 'M')} ({shown})")
 
     def quartiles(self, v: "VariableSummary", j: int) -> StyledText:
         assert v.median is not None and v.q1 is not None and v.q3 is not None
