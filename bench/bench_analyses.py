@@ -9,23 +9,16 @@
 
 from __future__ import annotations
 
-import statistics
-import time
+
 
 import numpy as np
 import pandas as pd
 from scipy import stats
 
 from statsetter.analyses import anova_oneway, correlation_matrix, t_independent
+from _timing import timed  # noqa: E402  (bench/ is on the path when a benchmark runs)
 
 
-def timed(fn, repeats: int = 5) -> float:
-    times = []
-    for _ in range(repeats):
-        start = time.perf_counter()
-        fn()
-        times.append(time.perf_counter() - start)
-    return statistics.median(times)
 
 
 def main() -> None:

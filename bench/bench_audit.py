@@ -11,10 +11,9 @@ Targets: <= 10 s for 1,000 pages; doubling <= 2.3x the time.
 
 from __future__ import annotations
 
-import statistics
+
 import sys
 import tempfile
-import time
 from pathlib import Path
 
 sys.path.insert(0, str(Path(__file__).resolve().parents[1] / "tests"))
@@ -22,6 +21,7 @@ sys.path.insert(0, str(Path(__file__).resolve().parents[1] / "tests"))
 import audit_corpus  # noqa: E402
 
 from statsetter.audit.report import audit_file  # noqa: E402
+from _timing import timed  # noqa: E402  (bench/ is on the path when a benchmark runs)
 
 FILLER = ("The warehouse rota alternated early, late and night shifts across the four depots, and supervisors "
           "recorded every break in the shift log, which the team checked each week against the scanner data. ") * 5
@@ -47,13 +47,6 @@ def document(path: Path, copies: int) -> int:
     return count
 
 
-def timed(fn, repeats: int = 3) -> float:
-    times = []
-    for _ in range(repeats):
-        start = time.perf_counter()
-        fn()
-        times.append(time.perf_counter() - start)
-    return statistics.median(times)
 
 
 def main() -> None:
@@ -65,8 +58,8 @@ def main() -> None:
         path = folder / f"manuscript-{copies}.docx"
         count = document(path, copies)
         words = sum(len(p.text.split()) for p in docx.Document(str(path)).paragraphs)
-        ours = timed(lambda: audit_file(path))
-        base = timed(lambda: [p.text for p in docx.Document(str(path)).paragraphs])
+        ours = timed(lambda: audit_file(path), 3)
+        base = timed(lambda: [p.text for p in docx.Document(str(path)).paragraphs], 3)
         found = len(audit_file(path))
         results.append(ours)
         print(f"{words / 500:,.0f} pages ({words:,} words), {count:,} statistics ({found:,} found): audit {ours:.2f} s, "

@@ -12,14 +12,14 @@ during the table <= 2x the DataFrame's own size (tracemalloc).
 
 from __future__ import annotations
 
-import statistics
-import time
+
 import tracemalloc
 
 import numpy as np
 import pandas as pd
 
 from statsetter.analyses.descriptives import describe
+from _timing import timed  # noqa: E402  (bench/ is on the path when a benchmark runs)
 
 ROWS = 1_000_000
 
@@ -59,13 +59,6 @@ def baseline(df: pd.DataFrame, nominal: list[str], ordinal: list[str], continuou
     return out
 
 
-def timed(fn, repeats: int = 5) -> float:
-    times = []
-    for _ in range(repeats):
-        start = time.perf_counter()
-        fn()
-        times.append(time.perf_counter() - start)
-    return statistics.median(times)
 
 
 def main() -> None:

@@ -7,15 +7,15 @@ run (target <= 0.2), and the growth when the rows double (target <= 2.3x).
 
 from __future__ import annotations
 
+
 import io
-import statistics
-import time
 
 import docx
 
 from statsetter.export.docx_writer import add_table
 from statsetter.rendering.styled import StyledText
 from statsetter.rendering.tables import Column, Row, TableModel
+from _timing import timed  # noqa: E402  (bench/ is on the path when a benchmark runs)
 
 COLS = 8
 
@@ -52,21 +52,14 @@ def baseline(t: TableModel) -> None:
     d.save(io.BytesIO())
 
 
-def timed(fn, arg, repeats: int = 3) -> float:
-    out = []
-    for _ in range(repeats):
-        start = time.perf_counter()
-        fn(arg)
-        out.append(time.perf_counter() - start)
-    return statistics.median(out)
 
 
 def main() -> None:
     previous = None
     for rows in (1000, 2000, 4000, 8000):
         t = model(rows)
-        a = timed(ours, t, 5)
-        b = timed(baseline, t, 1 if rows >= 4000 else 3)
+        a = timed(lambda: ours(t), 5)
+        b = timed(lambda: baseline(t), 1 if rows >= 4000 else 3)
         growth = f", growth {a / previous:.2f}x" if previous else ""
         print(f"{rows:5,} rows x {COLS}: statsetter {a:6.2f} s, python-docx cell API {b:6.2f} s, ratio {a / b:.3f}{growth}")
         previous = a

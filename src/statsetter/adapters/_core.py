@@ -18,7 +18,7 @@ from dataclasses import dataclass, field, replace
 from typing import TYPE_CHECKING, Any, Callable, Mapping, Sequence
 
 from ..errors import InputError
-from ..records import EffectSize, Note, Provenance, Result
+from ..records import Note, Provenance, Result
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -200,8 +200,19 @@ def _check(m: Result, o: Result, ctx: Context) -> None:
             )
 
 
-def with_effect(effects: Sequence[EffectSize], extra: EffectSize | None) -> tuple[EffectSize, ...]:
-    return tuple(effects) + ((extra,) if extra is not None else ())
+def base(ctx: Context, library: str, kind: str, notes: Sequence[Note], **fields: Any) -> Result:
+    """A record from the object alone; n is the one given alongside unless the object has its own."""
+    return Result(kind=kind, notes=tuple(notes), provenance=provenance(ctx, library, False), n=fields.pop("n", ctx.n), **fields)
+
+
+def pair_key(r: Result) -> tuple[str, str]:
+    """Matches post hoc pairs: the two group labels, in statsetter's order."""
+    return (r.groups[0].label, r.groups[1].label)
+
+
+def term_key(r: Result) -> str:
+    """Matches model terms (the model record itself by its kind)."""
+    return str(r.details.get("term", r.kind))
 
 
 def integral(x: float) -> bool:

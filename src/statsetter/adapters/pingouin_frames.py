@@ -15,7 +15,7 @@ from typing import Any
 
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
-from ._core import Adapter, Context, absent, integral, provenance
+from ._core import Adapter, Context, absent, base, integral, pair_key, term_key
 
 LIB = "pingouin"
 
@@ -58,8 +58,7 @@ def identify(obj: Any) -> str | None:
 
 
 def _base(ctx: Context, kind: str, notes: list[Note], **fields: Any) -> Result:
-    recognised = Note("method", f"Read as a {ctx.source} result.")
-    return Result(kind=kind, notes=(recognised, *notes), provenance=provenance(ctx, LIB, False), n=fields.pop("n", ctx.n), **fields)
+    return base(ctx, LIB, kind, [Note("method", f"Read as a {ctx.source} result."), *notes], **fields)
 
 
 def _one(frame: Any) -> Any:
@@ -418,12 +417,6 @@ def _kruskal(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
     return [kruskal_wallis(frame, cols["outcome"], cols["group"], labels=ctx.labels)]
 
 
-def _pair_key(r: Result) -> tuple[str, str]:
-    return (r.groups[0].label, r.groups[1].label)
-
-
-def _term_key(r: Result) -> str:
-    return str(r.details.get("term", r.kind))
 
 
 def _corr_key(r: Result) -> tuple[str, ...]:
@@ -436,14 +429,14 @@ ADAPTERS = {
         Adapter("pingouin.ttest", LIB, ttest, "two", _ttest),
         Adapter("pingouin.corr", LIB, corr, "xy", _corr),
         Adapter("pingouin.pairwise_corr", LIB, pairwise_corr, None, _corr, _corr_key),
-        Adapter("pingouin.anova", LIB, anova, "k", _anova, _term_key),
+        Adapter("pingouin.anova", LIB, anova, "k", _anova, term_key),
         Adapter("pingouin.welch_anova", LIB, welch_anova, "k", _anova),
-        Adapter("pingouin.pairwise_tukey", LIB, pairwise_tukey, "k", _posthoc("tukey"), _pair_key),
-        Adapter("pingouin.pairwise_gameshowell", LIB, pairwise_gameshowell, "k", _posthoc("games-howell"), _pair_key),
-        Adapter("pingouin.pairwise_tests", LIB, pairwise_tests, "k", _pairwise_tests, _pair_key),
+        Adapter("pingouin.pairwise_tukey", LIB, pairwise_tukey, "k", _posthoc("tukey"), pair_key),
+        Adapter("pingouin.pairwise_gameshowell", LIB, pairwise_gameshowell, "k", _posthoc("games-howell"), pair_key),
+        Adapter("pingouin.pairwise_tests", LIB, pairwise_tests, "k", _pairwise_tests, pair_key),
         Adapter("pingouin.chi2_independence", LIB, chi2_independence, "table", _chi2),
-        Adapter("pingouin.linear_regression", LIB, linear_regression, None, _linear, _term_key),
-        Adapter("pingouin.logistic_regression", LIB, logistic_regression, None, _logistic, _term_key),
+        Adapter("pingouin.linear_regression", LIB, linear_regression, None, _linear, term_key),
+        Adapter("pingouin.logistic_regression", LIB, logistic_regression, None, _logistic, term_key),
         Adapter("pingouin.cronbach_alpha", LIB, cronbach_alpha, "items", _alpha),
         Adapter("pingouin.mwu", LIB, mwu, "two", _mwu),
         Adapter("pingouin.wilcoxon", LIB, wilcoxon, "paired", _wilcoxon),

@@ -12,13 +12,13 @@ from typing import Any
 
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
-from ._core import Adapter, Context, absent, integral, provenance
+from ._core import Adapter, Context, absent, base, integral, pair_key
 
 LIB = "scipy"
 
 
 def _base(ctx: Context, kind: str, notes: list[Note], **fields: Any) -> Result:
-    return Result(kind=kind, notes=tuple(notes), provenance=provenance(ctx, LIB, False), n=fields.pop("n", ctx.n), **fields)
+    return base(ctx, LIB, kind, notes, **fields)
 
 
 def _alt(res: Any, ctx: Context) -> str:
@@ -292,9 +292,6 @@ def _linregress(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
     return linear_regression(frame, cols["y"], [cols["x"]], level=ctx.level, labels=ctx.labels)
 
 
-def _pair_key(r: Result) -> tuple[str, str]:
-    return (r.groups[0].label, r.groups[1].label)
-
 
 ADAPTERS = {
     a.name: a
@@ -308,7 +305,7 @@ ADAPTERS = {
         Adapter("scipy.stats.chi2_contingency", LIB, chi2_contingency, "table", _chi2),
         Adapter("scipy.stats.fisher_exact", LIB, fisher_exact, "table", _fisher),
         Adapter("scipy.stats.f_oneway", LIB, f_oneway, "k", _anova),
-        Adapter("scipy.stats.tukey_hsd", LIB, tukey_hsd, "k", _tukey, _pair_key),
+        Adapter("scipy.stats.tukey_hsd", LIB, tukey_hsd, "k", _tukey, pair_key),
         Adapter("scipy.stats.mannwhitneyu", LIB, mannwhitneyu, "two", _mwu),
         Adapter("scipy.stats.wilcoxon", LIB, wilcoxon, "paired", _wilcoxon),
         Adapter("scipy.stats.kruskal", LIB, kruskal, "k", _kruskal),

@@ -9,7 +9,7 @@ from typing import Any
 
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
-from ._core import Adapter, Context, absent, provenance
+from ._core import Adapter, Context, absent, base, pair_key, term_key
 
 LIB = "statsmodels"
 _INTERCEPT = ("Intercept", "const")
@@ -38,7 +38,7 @@ def identify(obj: Any) -> str | None:
 
 
 def _base(ctx: Context, kind: str, notes: list[Note], **fields: Any) -> Result:
-    return Result(kind=kind, notes=tuple(notes), provenance=provenance(ctx, LIB, False), **fields)
+    return base(ctx, LIB, kind, notes, **{"n": None, **fields})  # statsmodels results carry their own n
 
 
 def term_name(name: str) -> str:
@@ -184,20 +184,14 @@ def _tukey(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
     return posthoc(frame, cols["outcome"], cols["group"], "tukey", level=level, labels=ctx.labels)
 
 
-def _term_key(r: Result) -> str:
-    return str(r.details.get("term", r.kind))
-
-
-def _pair_key(r: Result) -> tuple[str, str]:
-    return (r.groups[0].label, r.groups[1].label)
 
 
 ADAPTERS = {
     a.name: a
     for a in (
-        Adapter("statsmodels.OLS", LIB, ols, None, _linear, _term_key),
-        Adapter("statsmodels.Logit", LIB, logit, None, _logistic, _term_key),
-        Adapter("statsmodels.anova_lm", LIB, anova_lm, None, _anova, _term_key),
-        Adapter("statsmodels.pairwise_tukeyhsd", LIB, tukeyhsd, "k", _tukey, _pair_key),
+        Adapter("statsmodels.OLS", LIB, ols, None, _linear, term_key),
+        Adapter("statsmodels.Logit", LIB, logit, None, _logistic, term_key),
+        Adapter("statsmodels.anova_lm", LIB, anova_lm, None, _anova, term_key),
+        Adapter("statsmodels.pairwise_tukeyhsd", LIB, tukeyhsd, "k", _tukey, pair_key),
     )
 }

@@ -20,7 +20,7 @@ ddof = 1) and quantiles are the weighted inverted CDF (numpy's
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, replace
 from typing import TYPE_CHECKING, Any, Literal, Mapping, Sequence
 
 from ..errors import InputError
@@ -182,11 +182,11 @@ def describe(
             df[name], name, labels.get(name, name), report, chosen[kind], groups, value_labels.get(name), moments=smd and kind == "ordinal"
         )
         if alphas and name in alphas:
-            summary = _replace(summary, alpha=_alpha_value(name, alphas[name]))
+            summary = replace(summary, alpha=_alpha_value(name, alphas[name]))
         if tests:
-            summary = _replace(summary, **_test(df, name, by, kind, labels))  # type: ignore[arg-type]
+            summary = replace(summary, **_test(df, name, by, kind, labels))  # type: ignore[arg-type]
         if smd:
-            summary = _replace(summary, smd=_smd(summary))
+            summary = replace(summary, smd=_smd(summary))
         summaries.append(summary)
     unknown_alpha = sorted(set(alphas or {}) - set(names))
     if unknown_alpha:
@@ -218,12 +218,6 @@ def _alpha_value(name: str, given: "float | Result") -> float:
         return float(given)
     except (TypeError, ValueError):
         raise InputError(f"{name}: α {given!r} is not a number") from None
-
-
-def _replace(summary: VariableSummary, **changes: Any) -> VariableSummary:
-    from dataclasses import replace
-
-    return replace(summary, **changes)
 
 
 def _contents(show: Mapping[str, Sequence[str]] | None) -> dict[str, tuple[str, ...]]:

@@ -15,6 +15,8 @@ from dataclasses import dataclass
 from pathlib import Path
 from typing import Sequence
 
+from ..rendering.sentences import render
+from ..rendering.styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, Finding, consistency, grim, impossible, style_findings, to_record
@@ -52,8 +54,6 @@ class Entry:
 
 
 def _suggest(rep: Reported, style: Style, alpha: float) -> str:
-    from ..rendering.sentences import render
-
     if rep.symbol is None and not rep.effects:
         if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
             return ""
@@ -63,8 +63,6 @@ def _suggest(rep: Reported, style: Style, alpha: float) -> str:
             op, text = num.p(rep.p.number.value, alpha, held=held) if rep.p.number.value > 0 else num.p(0.0, alpha)
         else:
             op, text = {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op), num.p(rep.p.number.value, alpha)[1]
-        from ..rendering.styled import StyledText
-
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
     try:
         return render(to_record(rep, alpha, style), "stats", style).plain()

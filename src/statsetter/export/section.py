@@ -9,6 +9,7 @@ from typing import Sequence
 
 from ..records import Result, dump_records
 from ..rendering.sentences import render
+from ..rendering.styled import StyledText
 from ..rendering.tables import TableModel
 from ..style.profile import Style
 from .text_tables import write_table
@@ -51,15 +52,9 @@ def write_section(
             from .docx_writer import add_runs, results_document, save_document
 
             document = results_document(records, style, title=title, tables=tables)
-            add_runs(document.add_paragraph(), render_caution())
+            add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
             save_document(document, path, inputs=inputs)
         else:
             write_atomic(path, section_text(records, tables, style, title, fmt), inputs=inputs)
         written.append((fmt, path))
     return written
-
-
-def render_caution():  # type: ignore[no-untyped-def]
-    from ..rendering.styled import StyledText
-
-    return StyledText.styled(CAUTION, "i")

@@ -15,7 +15,7 @@ from typing import TYPE_CHECKING
 
 from ..style.numbers import Numbers, numbers_for, round_half_up
 from ..style.profile import Style, load_style
-from .styled import StyledText
+from .styled import StyledText, escape_markup
 from .tables import Column, Row, Spanner, TableModel
 
 if TYPE_CHECKING:
@@ -107,7 +107,7 @@ class _Layout:
         alpha = ""
         if v.alpha is not None:
             alpha = f" ({self.style.symbol('alpha')} = {self.num.number(v.alpha, 'alpha')})"
-        return StyledText.from_markup(f"{_escape(v.label)}{alpha}, {what}")
+        return StyledText.from_markup(f"{escape_markup(v.label)}{alpha}, {what}")
 
     def variable_rows(self, v: "VariableSummary") -> list[Row]:
         n = self.sym("n")
@@ -179,10 +179,6 @@ class _Layout:
         return False
 
 
-def _escape(text: str) -> str:
-    return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
-
-
 def _suppress(counts: "np.ndarray", below: int | None) -> "np.ndarray":
     """Primary suppression of counts from 1 to ``below`` − 1, then secondary
     suppression so that no hidden count can be recovered by subtraction: in
@@ -220,7 +216,7 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
     columns = []
     for j, name in enumerate(d.columns):
         sym = lay.sym("n") if d.by is not None and j < len(d.columns) - 1 else total_sym
-        columns.append(Column(StyledText.from_markup(f"{_escape(name)} ({sym} = {lay.num.integer(d.column_n[j])})")))
+        columns.append(Column(StyledText.from_markup(f"{escape_markup(name)} ({sym} = {lay.num.integer(d.column_n[j])})")))
     if any(v.test is not None for v in d.variables):
         columns.append(Column(StyledText.from_markup(resolved.symbol("p"))))
     if any(v.smd is not None for v in d.variables):
@@ -256,11 +252,11 @@ def _general_note(d: "Description", lay: _Layout) -> StyledText:
         parts.append("Quartiles of ordered categories are the categories at those points of the distribution.")
     if d.weights:
         parts.append(
-            f"Counts, percentages, means, SDs and quartiles are weighted by {_escape(d.weights)}; n are sums of weights, rounded; "
+            f"Counts, percentages, means, SDs and quartiles are weighted by {escape_markup(d.weights)}; n are sums of weights, rounded; "
             "SDs use the sum of weights minus 1 as the denominator; quartiles are weighted (inverted distribution function)."
         )
     if d.dropped_no_group:
-        parts.append(f"{lay.num.integer(d.dropped_no_group)} cases with no value on {_escape(d.by_label or '')} are left out.")
+        parts.append(f"{lay.num.integer(d.dropped_no_group)} cases with no value on {escape_markup(d.by_label or '')} are left out.")
     if d.suppress_below:
         k = lay.num.integer(d.suppress_below)
         parts.append(

@@ -24,6 +24,7 @@ from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style, load_style
 from .kinds import FORMS, KINDS
 from .styled import StyledText
+from .styled import escape_markup as _escape_text
 
 __all__ = ["render", "render_many", "templates_dir"]
 
@@ -284,10 +285,6 @@ def _held(r: Result, path: str) -> int | None:
     if not precision:
         return None
     return precision.get(path)
-
-
-def _escape_text(text: str) -> str:
-    return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
 
 
 @lru_cache(maxsize=256)

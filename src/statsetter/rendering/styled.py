@@ -16,7 +16,7 @@ import re
 from dataclasses import dataclass
 from typing import Iterable, Iterator, Literal
 
-__all__ = ["Span", "StyledText", "STYLES"]
+__all__ = ["Span", "StyledText", "STYLES", "escape_markup"]
 
 SpanStyle = Literal["i", "sup", "sub"]
 STYLES: tuple[str, ...] = ("i", "sup", "sub")
@@ -225,7 +225,7 @@ class StyledText:
 
     def markup(self) -> str:
         """The markup form; ``from_markup(x.markup()) == x``."""
-        return "".join(_wrap(_escape_markup(t), styles, _MARKUP_TAGS) for t, styles in self.segments())
+        return "".join(_wrap(escape_markup(t), styles, _MARKUP_TAGS) for t, styles in self.segments())
 
     def __html__(self) -> str:  # lets Jinja insert a StyledText as markup, unescaped
         return self.markup()
@@ -308,7 +308,8 @@ def _wrap(body: str, styles: frozenset[str], tags: dict[str, tuple[str, str]]) -
     return body
 
 
-def _escape_markup(text: str) -> str:
+def escape_markup(text: str) -> str:
+    """Text made safe to put in markup: & < > as entities."""
     return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
 
 
