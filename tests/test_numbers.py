@@ -217,3 +217,38 @@ def test_ci_never_touches_null_unless_it_is_null(a, b, null):
             assert shown != Decimal(repr(null)), (value, text)
             # and it stays on the same side of the null
             assert (shown > Decimal(repr(null))) == (value > null)
+
+
+# -- the digit-string rounding path against Decimal (reference: Python's decimal
+# module, ROUND_HALF_UP on the float's repr, which is what round_half_up does)
+
+from statsetter.style.numbers import rounded_digits  # noqa: E402
+
+
+def _as_text(digits):
+    negative, whole, frac = digits
+    return ("-" if negative else "") + (f"{whole}.{frac}" if frac else whole)
+
+
+@settings(max_examples=3000, deadline=None)
+@given(st.floats(allow_nan=False, allow_infinity=False), st.integers(0, 30))
+def test_digit_rounding_equals_decimal_everywhere(value, decimals):
+    assert _as_text(rounded_digits(value, decimals)) == format(round_half_up(value, decimals), "f")
+
+
+@settings(max_examples=3000, deadline=None)
+@given(st.integers(-10**6, 10**6), st.integers(0, 10**5), st.integers(0, 6))
+def test_digit_rounding_on_ties(whole, frac, decimals):
+    # values whose repr ends in 5 just after the kept digits: the ties
+    value = float(f"{whole}.{frac:05d}5")
+    assert _as_text(rounded_digits(value, decimals)) == format(round_half_up(value, decimals), "f")
+
+
+def test_p_without_a_floor_in_exponent_notation(tmp_path):
+    # repr gives 3e-05: the exact decimals still decide (no floor in this style)
+    path = tmp_path / "nofloor.toml"
+    path.write_text('name = "nofloor"\nextends = "apa7"\n[p]\nfloor = 0\n', encoding="utf-8")
+    num = numbers_for(load_style(path))
+    assert num.p(3e-05) == ("=", ".00003")
+    assert num.p(0.0) == ("<", ".001")
+    assert num.p(0.04999999999999999) == ("=", ".04999999999999999")  # just below alpha: every digit it has

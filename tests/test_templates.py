@@ -119,15 +119,31 @@ def test_compiled_stats_forms_equal_the_template_macros(style_name):
 def test_tidy_skips_only_what_needs_no_tidying():
     # the quick check in front of _tidy never skips a string the full tidy would change (common practice: a property test)
     import random
+    import re
 
     from statsetter.rendering import sentences
 
     def full(markup):
-        text = sentences._SPACE.sub(" ", markup).strip()
-        return sentences._SPACE_PUNCT.sub(r"\1", text)
+        text = re.sub(r"[ \t\r\n]+", " ", markup).strip(" ")
+        return re.sub(r" +([,;:)\]])(?!\d)", r"\1", text)
 
     rng = random.Random(3)
-    alphabet = list("ab ,;:)]1\n\t\u00a0\u202f.")
+    alphabet = list("ab ,;:)]1\n\t\r\u00a0\u202f\u2009.")
     for _ in range(20000):
         markup = "".join(rng.choice(alphabet) for _ in range(rng.randint(0, 12)))
         assert sentences._tidy(markup) == full(markup), repr(markup)
+
+
+@pytest.mark.parametrize("space", ["\u2009", "\u202f"])
+def test_a_styles_thin_space_survives_both_forms(tmp_path, space):
+    # thousands grouped by a thin or narrow no-break space (a style option; ISO 80000-1
+    # groups digits by a small space) must not become a plain space in either form
+    from statsetter import Result, Statistic, load_style, render
+
+    path = tmp_path / "thin.toml"
+    path.write_text(f'name = "thin"\nextends = "apa7"\n[numbers]\nthousands = "{space}"\n', encoding="utf-8")
+    style = load_style(path)
+    record = Result(kind="chi2_independence", statistic=Statistic("chi2", 12.3, (2,)), p=0.002, n=12345)
+    for form in ("stats", "sentence"):
+        text = render(record, form, style).to("text")
+        assert f"N = 12{space}345" in text, (form, text)

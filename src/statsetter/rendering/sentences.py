@@ -56,22 +56,24 @@ def _environment(language: str) -> Any:
     )
 
 
-_SPACE = re.compile(r"\s+")
+_SPACE = re.compile(r"[ \t\r\n]+")
 _SPACE_PUNCT = re.compile(r" +([,;:)\]])(?!\d)")
 
 
 class Helpers:
-    """What templates may call. Each returns markup (or plain values)."""
+    """What templates may call. The markup helpers return markup as ``str``
+    (numbers and symbols already escaped); :meth:`globals` hands them to
+    Jinja wrapped in :class:`~markupsafe.Markup`, and the compiled stats
+    forms call them directly."""
 
     def __init__(self, style: Style) -> None:
         self.style = style
         self.num: Numbers = numbers_for(style)
         sep = style.list_separator
         self.sep = sep
-        self._join = Markup(f"{sep} ")
-        self._symbols = {k: Markup(v) for k, v in style.symbols.items()}
-        self._symbols["p"] = Markup(style.p["symbol"])
-        self._eq = Markup(" = ")
+        self._join = f"{sep} "
+        self._symbols = dict(style.symbols)
+        self._symbols["p"] = style.p["symbol"]
         self._p_symbol = self._symbols["p"]
         self._levels: dict[float, str] = {}
         ci = style.ci
@@ -80,49 +82,60 @@ class Helpers:
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
 
-    def globals(self) -> dict[str, Callable[..., Any]]:
-        names = (
-            "sym stat pv eff effects ci_of ci_after value est desc cat join count pct number df sided var "
-            "cap verdict significant direction_word"
-        ).split()
-        out = {name: getattr(self, name) for name in names}
+    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df".split()
+    _PLAIN = "var cap verdict significant direction_word".split()
+
+    def raw(self) -> dict[str, Any]:
+        """The names a compiled stats form sees: the markup helpers as they
+        are (returning ``str``) and a join that does not escape."""
+        out: dict[str, Any] = {name: getattr(self, name) for name in self._MARKUP + self._PLAIN}
+        out["join"] = self.join_raw
         out["lsep"] = self._join
+        return out
+
+    def globals(self) -> dict[str, Callable[..., Any]]:
+        """The names a Jinja template sees: markup helpers return Markup, so
+        that autoescaping leaves them alone and escapes everything else."""
+        out: dict[str, Any] = {name: _as_markup(getattr(self, name)) for name in self._MARKUP}
+        out.update({name: getattr(self, name) for name in self._PLAIN})
+        out["join"] = self.join
+        out["lsep"] = Markup(self._join)
         return out
 
     # symbols and plain numbers ------------------------------------------------
 
-    def sym(self, name: str) -> Markup:
+    def sym(self, name: str) -> str:
         found = self._symbols.get(name)
-        return found if found is not None else escape(name)
+        return found if found is not None else _escape_text(name)
 
-    def number(self, value: float, quantity: str = "default", decimals: int | None = None) -> Markup:
-        return Markup(_escape_text(self.num.number(value, quantity, decimals)))
+    def number(self, value: float, quantity: str = "default", decimals: int | None = None) -> str:
+        return _escape_text(self.num.number(value, quantity, decimals))
 
-    def count(self, value: float) -> Markup:
-        return Markup(_escape_text(self.num.integer(value)))
+    def count(self, value: float) -> str:
+        return _escape_text(self.num.integer(value))
 
-    def df(self, value: float) -> Markup:
-        return Markup(_escape_text(self.num.df(value)))
+    def df(self, value: float) -> str:
+        return _escape_text(self.num.df(value))
 
-    def pct(self, value: float, r: Result | None = None, path: str | None = None) -> Markup:
+    def pct(self, value: float, r: Result | None = None, path: str | None = None) -> str:
         held = _held(r, path) if r is not None and path else None
-        return Markup(_escape_text(self.num.percent(value, held=held) + "%"))
+        return _escape_text(self.num.percent(value, held=held) + "%")
 
     # parts of a statistics string ------------------------------------------
 
-    def stat(self, r: Result, n: bool = False, symbol: str | None = None) -> Markup:
+    def stat(self, r: Result, n: bool = False, symbol: str | None = None) -> str:
         """``t(38) = 2.14``; with ``n=True`` the chi-square form ``χ²(2, N = 200) = 9.87``."""
         s = r.statistic
         if s is None:
-            return _EMPTY
+            return ""
         num = self.num
         inside = [num.df(d) for d in s.df]
         if n and r.n is not None:
             inside.append(f"{self.sym('N')} = {num.integer(r.n)}")
         head = self.sym(symbol or s.symbol)
         if inside:
-            head = f"{head}({str.join(self._join, inside)})"
-        return Markup(f"{head} = {self._stat_value(r, s.symbol, s.value)}")
+            head = f"{head}({self._join.join(inside)})"
+        return f"{head} = {self._stat_value(r, s.symbol, s.value)}"
 
     def _stat_value(self, r: Result, symbol: str, value: float) -> str:
         held = _held(r, "statistic.value")
@@ -132,26 +145,27 @@ class Helpers:
             return self.num.number(value, symbol, 1, held=held)
         return self.num.number(value, symbol, held=held)
 
-    def pv(self, r: Result, label: str = "") -> Markup:
+    def pv(self, r: Result, label: str = "") -> str:
         """``p = .039`` (or ``p < .001``), decision-preserving at the record's alpha."""
         if r.p is None:
-            return _EMPTY
+            return ""
         op, text = self.num.p(r.p, r.alpha, held=_held(r, "p"))
         if not label and r.details.get("p_adjusted"):  # a p adjusted for multiple comparisons says so
             label = f"{r.details['p_adjusted']}-adjusted"
-        prefix = f"{escape(label)} " if label else ""
-        return Markup(f"{prefix}{self._p_symbol} {_OPS[op]} {text}")
+        if label:
+            return f"{escape(label)} {self._p_symbol} {_OPS[op]} {text}"
+        return f"{self._p_symbol} {_OPS[op]} {text}"
 
-    def sided(self, r: Result) -> Markup:
+    def sided(self, r: Result) -> str:
         if r.alternative == "two-sided":
-            return _EMPTY
-        return Markup(" (one-sided)")
+            return ""
+        return " (one-sided)"
 
-    def ci_of(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> Markup:
+    def ci_of(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> str:
         """``95% CI [0.04, 1.31]`` in the style's pattern; limits keep the decision."""
         if interval is None:
-            return _EMPTY
-        return Markup(self._ci(r, interval, quantity, null, path))
+            return ""
+        return self._ci(r, interval, quantity, null, path)
 
     def _ci(self, r: Result, interval: Interval, quantity: str, null: float, path: str) -> str:
         held = (_held(r, f"{path}.low"), _held(r, f"{path}.high")) if path and r.precision else (None, None)
@@ -163,18 +177,18 @@ class Helpers:
         pattern = self._ci_pattern_neg if (interval.low < 0 or interval.high < 0) else self._ci_pattern
         return _escape_text(pattern.format(level=level, low=low, high=high, sep=self.sep))
 
-    def ci_after(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> Markup:
+    def ci_after(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> str:
         """The CI attached to the value before it, in the style's way (``, 95% CI [..]`` or `` (95% CI, ..)``)."""
         if interval is None:
-            return _EMPTY
-        return Markup(self._ci_attach + self._ci(r, interval, quantity, null, path))
+            return ""
+        return self._ci_attach + self._ci(r, interval, quantity, null, path)
 
-    def eff(self, r: Result, name: str | None = None, with_ci: bool = True) -> Markup:
+    def eff(self, r: Result, name: str | None = None, with_ci: bool = True) -> str:
         """``d = 0.68, 95% CI [0.04, 1.31]`` for the record's effect size (by name)."""
         for i, e in enumerate(r.effects):
             if name is None or e.name == name:
-                return Markup(self._effect(r, e, i, with_ci))
-        return _EMPTY
+                return self._effect(r, e, i, with_ci)
+        return ""
 
     def _effect(self, r: Result, e: EffectSize, i: int, with_ci: bool) -> str:
         held = _held(r, f"effects[{i}].value") if r.precision else None
@@ -183,30 +197,30 @@ class Helpers:
             out += self._ci_attach + self._ci(r, e.ci, e.name, e.null, f"effects[{i}].ci")
         return out
 
-    def effects(self, r: Result) -> Markup:
+    def effects(self, r: Result) -> str:
         """Every effect size with its CI, in the record's order."""
-        return self.join(*[Markup(self._effect(r, e, i, True)) for i, e in enumerate(r.effects)])
+        return self.join_raw(*[self._effect(r, e, i, True) for i, e in enumerate(r.effects)])
 
-    def value(self, r: Result, path: str, value: float, quantity: str = "default") -> Markup:
-        return Markup(self.num.number(value, quantity, held=_held(r, f"{path}.value")))
+    def value(self, r: Result, path: str, value: float, quantity: str = "default") -> str:
+        return self.num.number(value, quantity, held=_held(r, f"{path}.value"))
 
-    def est(self, r: Result, with_ci: bool = True, symbol: str | None = None, quantity: str | None = None) -> Markup:
+    def est(self, r: Result, with_ci: bool = True, symbol: str | None = None, quantity: str | None = None) -> str:
         """The estimate's value (with its symbol when given) and CI."""
         e = r.estimate
         if e is None:
-            return _EMPTY
+            return ""
         q = quantity or e.name
         out = self.num.number(e.value, q, held=_held(r, "estimate.value"))
         if symbol:
             out = f"{self.sym(symbol)} = {out}"
         if with_ci and e.ci is not None:
             out += self._ci_attach + self._ci(r, e.ci, q, e.null, "estimate.ci")
-        return Markup(out)
+        return out
 
-    def desc(self, r: Result, index: int = 0, parts: str = "mean sd n") -> Markup:
+    def desc(self, r: Result, index: int = 0, parts: str = "mean sd n") -> str:
         """``M = 4.22, SD = 0.73, n = 40`` for group ``index``; absent parts are left out."""
         if index >= len(r.groups):
-            return Markup("")
+            return ""
         g: GroupSummary = r.groups[index]
         out = []
         path = f"groups[{index}]"
@@ -221,26 +235,30 @@ class Helpers:
                 q1, q3 = g.q1, g.q3
                 if q1 is None or q3 is None:
                     continue
-                text = Markup(_escape_text(f"{self.num.number(q1, 'M')}{self.sep} {self.num.number(q3, 'M')}"))
-                text = Markup("[") + text + Markup("]")
+                text = "[" + _escape_text(f"{self.num.number(q1, 'M')}{self.sep} {self.num.number(q3, 'M')}") + "]"
             else:
-                text = Markup(_escape_text(self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))))
-            out.append(self.sym(symbol) + self._eq + text)
+                text = _escape_text(self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}")))
+            out.append(f"{self.sym(symbol)} = {text}")
         return self._join.join(out)
 
-    def cat(self, r: Result, index: int) -> Markup:
+    def cat(self, r: Result, index: int) -> str:
         """``45 (37.5%)`` for category ``index`` of a categorical summary."""
         g = r.groups[index]
         if g.n is None:
-            return Markup("")
+            return ""
         out = self.count(g.n)
         if g.percent is not None:
-            out = out + Markup(" (") + self.pct(g.percent, r, f"groups[{index}].percent") + Markup(")")
+            out = f"{out} ({self.pct(g.percent, r, f'groups[{index}].percent')})"
         return out
 
     def join(self, *parts: Any) -> Markup:
-        """Join the non-empty parts with the style's list separator."""
-        return Markup(str.join(self._join, [p if isinstance(p, Markup) else escape(p) for p in parts if p]))
+        """Join the non-empty parts with the style's list separator (in a
+        template: parts that are not markup are escaped)."""
+        return Markup(self._join.join([p if isinstance(p, Markup) else escape(p) for p in parts if p]))
+
+    def join_raw(self, *parts: str) -> str:
+        """:meth:`join` for parts that are all markup already."""
+        return self._join.join([p for p in parts if p])
 
     # wording ----------------------------------------------------------------
 
@@ -268,8 +286,16 @@ class Helpers:
         return up if value > 0 else down if value < 0 else same
 
 
+def _as_markup(fn: Callable[..., str]) -> Callable[..., Markup]:
+    def wrapped(*args: Any, **kwargs: Any) -> Markup:
+        return Markup(fn(*args, **kwargs))
+
+    wrapped.__name__ = wrapped.__qualname__ = fn.__name__
+    wrapped.__doc__ = fn.__doc__
+    return wrapped
+
+
 _RANK_SUMS = frozenset({"U", "T", "W"})
-_EMPTY = Markup("")
 _OPS = {"=": "=", "<": "&lt;", ">": "&gt;"}
 _GROUP_FIELDS = {"mean": "mean", "sd": "sd", "n": "n", "median": "median", "iqr": "q1", "min": "minimum", "max": "maximum"}
 _GROUP_SYMBOLS = {"mean": "M", "sd": "SD", "n": "n", "median": "Mdn", "iqr": "IQR", "min": "min", "max": "max"}
@@ -305,13 +331,17 @@ def _helpers(style: Style) -> Helpers:
     return Helpers(style)
 
 
-_UNTIDY = re.compile(r"\s\s|[^\S ]| [,;:)\]]|^\s|\s$")  # what _tidy would change
-
-
 def _tidy(markup: str) -> str:
-    if _UNTIDY.search(markup) is None:  # most statistics strings are tidy already
+    """Collapse the templates' whitespace (ASCII space, tab, newline) and drop
+    a space before closing punctuation. Other spaces (a style's thin or
+    no-break space) are the style's and stay."""
+    if not (  # most statistics strings are tidy already: a few substring checks say so
+        "  " in markup or "\n" in markup or "\t" in markup or "\r" in markup
+        or " ," in markup or " ;" in markup or " :" in markup or " )" in markup or " ]" in markup
+        or markup[:1] == " " or markup[-1:] == " "
+    ):
         return markup
-    text = _SPACE.sub(" ", markup).strip()
+    text = _SPACE.sub(" ", markup).strip(" ")
     return _SPACE_PUNCT.sub(r"\1", text)
 
 
@@ -365,20 +395,24 @@ _WORDS = {"none": "None", "true": "True", "false": "False"}
 
 
 def compiled_stats(style: Style, language: str, kind: str) -> Callable[[Result], Any] | None:
-    """The stats macro as a Python expression over the helpers, or None when
-    the template is more than one expression (then the macro is used)."""
+    """The stats macro as a Python expression over the helpers (their plain
+    ``str`` form, :meth:`Helpers.raw`), or None when the template is more
+    than one expression or has a literal Jinja would escape (then the macro
+    is used)."""
     source = (templates_dir(language) / f"{kind}.j2").read_text(encoding="utf-8")
     m = _STATS_MACRO.search(source)
     if m is None or "|" in _STRING.sub("", m.group("expr")):
         return None
     parts = _STRING.split(m.group("expr"))
+    if any(c in literal for literal in parts[1::2] for c in "&<>"):
+        return None  # Jinja would escape these literals; the compiled form would not
     for i in range(0, len(parts), 2):  # outside string literals: Jinja's ~ and lower-case constants
         parts[i] = re.sub(r"\b(none|true|false)\b", lambda w: _WORDS[w.group(1)], parts[i].replace("~", "+"))
     try:
         code = compile("".join(parts).strip(), f"{kind}.j2:stats", "eval")
     except SyntaxError:
         return None
-    names = dict(_helpers(style).globals())
+    names = _helpers(style).raw()
     names["__builtins__"] = {}
 
     def run(record: Result) -> Any:

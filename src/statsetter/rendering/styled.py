@@ -13,8 +13,8 @@ from __future__ import annotations
 
 import html as _html
 import re
-from dataclasses import dataclass
-from typing import Iterable, Iterator, Literal
+from functools import lru_cache
+from typing import Iterable, Iterator, Literal, NamedTuple
 
 __all__ = ["Span", "StyledText", "STYLES", "escape_markup"]
 
@@ -32,8 +32,9 @@ def _span_order(s: "Span") -> tuple[int, int]:
     return (s.start, -s.end)
 
 
-@dataclass(frozen=True, slots=True)
-class Span:
+class Span(NamedTuple):
+    """One styled range of a StyledText: ``text[start:end]`` in ``style``."""
+
     start: int
     end: int
     style: SpanStyle
@@ -65,27 +66,30 @@ class StyledText:
         """Parse the markup; raises ValueError naming the position of a fault."""
         if "&" not in markup:  # the common case: tags only, split once
             parts = _TAG_SPLIT.split(markup)
-            texts = parts[::3]
-            if not any("<" in t or ">" in t for t in texts):
+            text = "".join(parts[::3])
+            if "<" not in text and ">" not in text:
                 out_spans: list[Span] = []
                 stack: list[tuple[str, int]] = []
-                length = len(texts[0])
+                nested = False
+                length = len(parts[0])
                 for k in range(1, len(parts), 3):
-                    closing, tag = parts[k], parts[k + 1]
-                    if closing:
+                    tag = parts[k + 1]
+                    if parts[k]:  # a closing tag
                         if not stack or stack[-1][0] != tag:
                             break  # let the full parser name the fault
-                        _, start = stack.pop()
+                        start = stack.pop()[1]
                         if length > start:
                             out_spans.append(Span(start, length, tag))  # type: ignore[arg-type]
                     else:
+                        nested = nested or bool(stack)
                         stack.append((tag, length))
                     length += len(parts[k + 2])
                 else:
                     if not stack:
-                        out_spans.sort(key=_span_order)
+                        if nested:  # inner spans close first: put them in start order
+                            out_spans.sort(key=_span_order)
                         made = object.__new__(cls)
-                        object.__setattr__(made, "text", "".join(texts))
+                        object.__setattr__(made, "text", text)
                         object.__setattr__(made, "spans", tuple(out_spans))
                         return made
         out: list[str] = []
@@ -232,32 +236,11 @@ class StyledText:
 
     def plain(self) -> str:
         """Plain text: Unicode superscripts and subscripts where they exist."""
-        parts = []
-        for text, styles in self.segments():
-            if "sup" in styles:
-                parts.append(_unicode_script(text, _SUPER, "^"))
-            elif "sub" in styles:
-                parts.append(_unicode_script(text, _SUB, "_"))
-            else:
-                parts.append(text)
-        return "".join(parts)
+        return "".join(_plain_piece(text, styles) if styles else text for text, styles in self.segments())
 
     def markdown(self) -> str:
         """pandoc Markdown: ``*t*``, ``R^2^``, ``r~s~``."""
-        parts = []
-        for text, styles in self.segments():
-            lead, core, trail = _split_space(text)
-            core = _escape_md(core)
-            if "sup" in styles or "sub" in styles:
-                core = core.replace(" ", "\\ ")
-            if "sup" in styles:
-                core = f"^{core}^"
-            if "sub" in styles:
-                core = f"~{core}~"
-            if "i" in styles and core:
-                core = f"*{core}*"
-            parts.append(f"{_escape_md(lead)}{core}{trail}")
-        return "".join(parts)
+        return "".join(_md_piece(text, styles) if styles else _escape_md(text) for text, styles in self.segments())
 
     def html(self) -> str:
         return "".join(_wrap(_html.escape(t, quote=False), styles, _HTML_TAGS) for t, styles in self.segments())
@@ -315,6 +298,32 @@ def escape_markup(text: str) -> str:
 
 _SUPER = dict(zip("0123456789+-−=()niab", "⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻⁻⁼⁽⁾ⁿⁱᵃᵇ"))
 _SUB = dict(zip("0123456789+-−=()aehijklmnoprstuvx", "₀₁₂₃₄₅₆₇₈₉₊₋₋₌₍₎ₐₑₕᵢⱼₖₗₘₙₒₚᵣₛₜᵤᵥₓ"))
+
+
+@lru_cache(maxsize=4096)  # styled pieces are mostly symbols: a few, over and over
+def _plain_piece(text: str, styles: frozenset[str]) -> str:
+    if "sup" in styles:
+        return _unicode_script(text, _SUPER, "^")
+    if "sub" in styles:
+        return _unicode_script(text, _SUB, "_")
+    return text
+
+
+@lru_cache(maxsize=4096)
+def _md_piece(text: str, styles: frozenset[str]) -> str:
+    """A styled piece in pandoc Markdown; spaces at its ends stay outside the
+    markers (pandoc does not close ``*t *``)."""
+    lead, core, trail = _split_space(text)
+    core = _escape_md(core)
+    if "sup" in styles or "sub" in styles:
+        core = core.replace(" ", "\\ ")
+    if "sup" in styles:
+        core = f"^{core}^"
+    if "sub" in styles:
+        core = f"~{core}~"
+    if "i" in styles and core:
+        core = f"*{core}*"
+    return f"{lead}{core}{trail}"
 
 
 def _unicode_script(text: str, table: dict[str, str], marker: str) -> str:

@@ -24,7 +24,7 @@ from .profile import Style
 
 __all__ = ["Numbers", "round_half_up", "numbers_for"]
 
-_CTX = Context(prec=80, rounding=ROUND_HALF_UP)
+_CTX = Context(prec=400, rounding=ROUND_HALF_UP)  # every float to 40 decimals, exactly
 _QUANTUM = [Decimal(1).scaleb(-k) for k in range(0, 40)]
 _MAX_DECIMALS = 30
 
@@ -40,6 +40,88 @@ def round_half_up(value: float, decimals: int) -> Decimal:
 def _decimal_of(value: float) -> Decimal:
     """The Decimal of a few recurring constants (alpha, the null of a CI)."""
     return Decimal(repr(float(value)))
+
+
+Digits = tuple[bool, str, str]  # (negative, whole digits, fraction digits) of a rounded value
+
+
+def exact_digits(value: float) -> Digits:
+    """The float's shortest decimal representation (its repr) as digits."""
+    text = repr(float(value))
+    if "e" in text or "n" in text:  # 1e-05, 1e+16, inf, nan: write it out
+        text = format(Decimal(text), "f")
+    negative = text[0] == "-"
+    whole, _, frac = (text[1:] if negative else text).partition(".")
+    return negative, whole, frac
+
+
+def round_digits(digits: Digits, decimals: int) -> Digits:
+    """Round half up at ``decimals`` places on exact decimal digits: keep
+    them, and add one unit in the last place when the first digit dropped is
+    5 or more (the remainder is then at least half a unit)."""
+    negative, whole, frac = digits
+    if len(frac) <= decimals:
+        return negative, whole, frac + "0" * (decimals - len(frac))
+    keep = frac[:decimals]
+    if frac[decimals] < "5":
+        return negative, whole, keep
+    up = str(int(whole + keep) + 1)
+    if not decimals:
+        return negative, up, ""
+    up = up.rjust(decimals + 1, "0")
+    return negative, up[:-decimals], up[-decimals:]
+
+
+_POW10 = [10.0**k for k in range(16)]  # exact in binary up to 10**22
+
+
+def rounded_digits(value: float, decimals: int) -> Digits:
+    """:func:`round_half_up` as digit strings, without building a Decimal.
+
+    Fast path: Python's fixed-point formatting rounds the binary value
+    correctly. Half up on the repr can differ from it only when a rounding
+    midpoint lies between the binary value and its repr, which are within half
+    an ulp of each other; so when ``value * 10**decimals`` is farther from a
+    midpoint than its own rounding error plus that half ulp (both below
+    ``y * 2**-52``), the two agree. Otherwise, and for large or
+    non-finite values, the repr's digits are rounded (:func:`round_digits`).
+    tests/test_numbers.py checks the result against Decimal, ties included."""
+    if decimals < 16:
+        y = abs(value) * _POW10[decimals]
+        if y < 1e15:
+            frac = y - int(y)
+            if abs(frac - 0.5) > y * 4.5e-16:
+                text = f"{value:.{decimals}f}"
+                negative = text[0] == "-"
+                whole, _, frac_digits = (text[1:] if negative else text).partition(".")
+                return negative, whole, frac_digits
+    return round_digits(exact_digits(value), decimals)
+
+
+def _is_zero(whole: str, frac: str) -> bool:
+    return whole == "0" and frac.count("0") == len(frac)
+
+
+def _digits_text(digits: Digits) -> str:
+    negative, whole, frac = digits
+    text = f"{whole}.{frac}" if frac else whole
+    return "-" + text if negative else text
+
+
+def _at_least(digits: Digits, bound: float) -> bool:
+    """Whether the decimal ``digits`` are >= the decimal the float ``bound``
+    shows. A float comparison decides unless the two floats are equal (float
+    conversion keeps order, so only equality is ambiguous)."""
+    value = float(_digits_text(digits))
+    if value != bound:
+        return value > bound
+    return Decimal(_digits_text(digits)) >= _decimal_of(bound)
+
+
+def _equals(digits: Digits, target: float) -> bool:
+    if target == 0:
+        return _is_zero(digits[1], digits[2])
+    return float(_digits_text(digits)) == target and Decimal(_digits_text(digits)) == _decimal_of(target)
 
 
 PValue = tuple[Literal["=", "<", ">"], str]
@@ -77,12 +159,9 @@ class Numbers:
     def is_bounded(self, quantity: str) -> bool:
         return quantity in self._bounded
 
-    def _compose(self, rounded: Decimal, bounded: bool, group: bool) -> str:
-        text = format(rounded, "f")
-        negative = text.startswith("-")
-        if negative:
-            text = text[1:]
-        whole, _, frac = text.partition(".")
+    def _compose(self, digits: Digits, bounded: bool, group: bool) -> str:
+        negative, whole, frac = digits
+        zero = _is_zero(whole, frac)
         if group and self._thousands and len(whole) > 3 and int(whole) >= self._group_from:
             head = len(whole) % 3 or 3
             parts = [whole[:head]] + [whole[i : i + 3] for i in range(head, len(whole), 3)]
@@ -90,7 +169,7 @@ class Numbers:
         if bounded and whole == "0" and frac:
             whole = ""
         out = f"{whole}{self._mark}{frac}" if frac else whole
-        if negative and rounded != 0:
+        if negative and not zero:
             out = self._minus + out
         return out
 
@@ -110,18 +189,18 @@ class Numbers:
             decimals = self.decimals_for(quantity)
         if held is not None:
             decimals = min(decimals, held)
-        return self._compose(round_half_up(value, decimals), quantity in self._bounded, group)
+        return self._compose(rounded_digits(value, decimals), quantity in self._bounded, group)
 
     def integer(self, value: float) -> str:
         """A count, grouped by thousands (``1,256``)."""
-        return self._compose(round_half_up(value, 0), False, True)
+        return self._compose(rounded_digits(value, 0), False, True)
 
     def df(self, value: float) -> str:
         """Degrees of freedom: whole numbers as such, others with the style's
         decimals (Welch ``17.78``); never grouped by thousands."""
         if float(value).is_integer():
-            return self._compose(round_half_up(value, 0), False, False)
-        return self._compose(round_half_up(value, self._decimals), False, False)
+            return self._compose(rounded_digits(value, 0), False, False)
+        return self._compose(rounded_digits(value, self._decimals), False, False)
 
     def percent(self, value: float, held: int | None = None) -> str:
         return self.number(value, "percent", held=held)
@@ -135,32 +214,29 @@ class Numbers:
             alpha = self._alpha
         floor = self._p_floor
         if floor and value < floor and floor <= alpha:
-            return "<", self._compose(Decimal(repr(floor)), True, False)
+            return "<", self._compose(exact_digits(floor), True, False)
         ceiling = self._p_ceiling
         if ceiling and value > ceiling:
-            return ">", self._compose(Decimal(repr(ceiling)), True, False)
+            return ">", self._compose(exact_digits(ceiling), True, False)
         decimals = self._p_decimals
         if self._p_extra_below and value < self._p_extra_below:
             decimals += 1
         if held is not None:
             decimals = min(decimals, held)
-        exact = Decimal(repr(float(value)))  # built once: the decimals it has, and every rounding below
-        if held is not None:
-            limit = held
-        else:
-            exponent = exact.as_tuple().exponent
-            limit = min(max(-exponent if isinstance(exponent, int) and exponent < 0 else 0, decimals), _MAX_DECIMALS)
+        exact = exact_digits(value)  # built once: the decimals it has, and every rounding below
+        limit = held if held is not None else min(max(len(exact[2]), decimals), _MAX_DECIMALS)
         below = value < alpha
-        alpha_dec = _decimal_of(alpha)
         while True:
-            rounded = exact.quantize(_QUANTUM[decimals], context=_CTX) if decimals < len(_QUANTUM) else round_half_up(value, decimals)
-            wrong = (below and rounded >= alpha_dec) or (rounded == 0 and value > 0)
+            rounded = round_digits(exact, decimals)
+            zero = _is_zero(rounded[1], rounded[2])
+            wrong = (below and _at_least(rounded, alpha)) or (zero and value > 0)
             if not wrong or decimals >= limit:
                 break
             decimals += 1
-        if rounded == 0:
+        if zero:
             # only reachable without a floor (or a held precision): say "<"
-            return "<", self._compose(_QUANTUM[decimals], True, False)
+            unit = (False, "0", "0" * (decimals - 1) + "1") if decimals else (False, "1", "")
+            return "<", self._compose(unit, True, False)
         return "=", self._compose(rounded, True, False)
 
     # -- confidence intervals ------------------------------------------------
@@ -178,15 +254,14 @@ class Numbers:
             decimals = self.decimals_for(quantity)
         if held is not None:
             decimals = min(decimals, held)
-        null_dec = _decimal_of(null)
-        rounded = round_half_up(value, decimals)
-        if rounded == null_dec and value != null:
+        rounded = rounded_digits(value, decimals)
+        if value != null and _equals(rounded, null):
             # round at the first significant digit of the distance from the null
-            distance = Decimal(repr(float(value))) - null_dec
+            distance = Decimal(repr(float(value))) - _decimal_of(null)
             decimals = max(decimals + 1, -distance.adjusted())
             if held is not None:
                 decimals = min(decimals, held)
-            rounded = round_half_up(value, decimals)
+            rounded = rounded_digits(value, decimals)
         return self._compose(rounded, quantity in self._bounded, True)
 
     def interval(
