@@ -54,3 +54,44 @@ def test_markup_round_trip(pieces):
     for chunk, styles in pieces:
         text = text + StyledText.styled(chunk, *sorted(styles))
     assert StyledText.from_markup(text.markup()) == text
+
+
+# markup as the templates write it: text, tags (flat and nested, some empty), no entities
+_pieces = st.lists(
+    st.one_of(
+        st.text(alphabet="ab 1,.−", max_size=4).map(lambda t: ("text", t)),
+        st.sampled_from(["i", "sup", "sub"]).map(lambda t: ("open", t)),
+        st.just(("close", "")),
+    ),
+    max_size=14,
+)
+
+
+def _markup_from(pieces):
+    out, stack = [], []
+    for kind, value in pieces:
+        if kind == "text":
+            out.append(value)
+        elif kind == "open" and value not in stack:
+            stack.append(value)
+            out.append(f"<{value}>")
+        elif kind == "close" and stack:
+            out.append(f"</{stack.pop()}>")
+    out.extend(f"</{tag}>" for tag in reversed(stack))
+    return "".join(out)
+
+
+@settings(max_examples=1000, deadline=None)
+@given(_pieces)
+def test_quick_markup_path_equals_the_full_parser(pieces):
+    # from_markup's split-once path (flat tags, no entities) must give what the full parser
+    # gives, and the segments it records must be the maximal runs computed from the spans
+    from statsetter.rendering.styled import _segments_of
+
+    markup = _markup_from(pieces)
+    quick, full = StyledText.from_markup(markup), StyledText._parse(markup)
+    assert quick.text == full.text and quick == full
+    assert quick.segments() == _segments_of(full.text, full.spans)
+    assert _segments_of(quick.text, quick.spans) == quick.segments()  # spans derived from the segments say the same
+    assert all(a[1] != b[1] for a, b in zip(quick.segments(), quick.segments()[1:]))  # maximal: no two alike in a row
+    assert quick.markdown() == full.markdown() and quick.plain() == full.plain()

@@ -77,8 +77,9 @@ class Helpers:
         self._p_symbol = self._symbols["p"]
         self._levels: dict[float, str] = {}
         ci = style.ci
-        self._ci_pattern: str = ci["pattern"]
-        self._ci_pattern_neg: str = ci.get("pattern_negative", "") or ci["pattern"]
+        # the style's CI patterns escaped once: the numbers put into them never need it
+        self._ci_pattern: str = _escape_text(ci["pattern"])
+        self._ci_pattern_neg: str = _escape_text(ci.get("pattern_negative", "") or ci["pattern"])
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
 
@@ -109,17 +110,17 @@ class Helpers:
         return found if found is not None else _escape_text(name)
 
     def number(self, value: float, quantity: str = "default", decimals: int | None = None) -> str:
-        return _escape_text(self.num.number(value, quantity, decimals))
+        return self.num.number(value, quantity, decimals)  # numbers never hold & < >
 
     def count(self, value: float) -> str:
-        return _escape_text(self.num.integer(value))
+        return self.num.integer(value)
 
     def df(self, value: float) -> str:
-        return _escape_text(self.num.df(value))
+        return self.num.df(value)
 
     def pct(self, value: float, r: Result | None = None, path: str | None = None) -> str:
         held = _held(r, path) if r is not None and path else None
-        return _escape_text(self.num.percent(value, held=held) + "%")
+        return self.num.percent(value, held=held) + "%"
 
     # parts of a statistics string ------------------------------------------
 
@@ -175,7 +176,7 @@ class Helpers:
             level = self.num.number(interval.level * 100, "level", _level_decimals(interval.level))
             self._levels[interval.level] = level
         pattern = self._ci_pattern_neg if (interval.low < 0 or interval.high < 0) else self._ci_pattern
-        return _escape_text(pattern.format(level=level, low=low, high=high, sep=self.sep))
+        return pattern.format(level=level, low=low, high=high, sep=self.sep)
 
     def ci_after(self, r: Result, interval: Interval | None, quantity: str, null: float = 0.0, path: str = "") -> str:
         """The CI attached to the value before it, in the style's way (``, 95% CI [..]`` or `` (95% CI, ..)``)."""
@@ -194,7 +195,7 @@ class Helpers:
         held = _held(r, f"effects[{i}].value") if r.precision else None
         out = f"{self.sym(e.name)} = {self.num.number(e.value, e.name, held=held)}"
         if with_ci and e.ci is not None:
-            out += self._ci_attach + self._ci(r, e.ci, e.name, e.null, f"effects[{i}].ci")
+            out += self._ci_attach + self._ci(r, e.ci, e.name, e.null, f"effects[{i}].ci" if r.precision else "")
         return out
 
     def effects(self, r: Result) -> str:
@@ -235,9 +236,9 @@ class Helpers:
                 q1, q3 = g.q1, g.q3
                 if q1 is None or q3 is None:
                     continue
-                text = "[" + _escape_text(f"{self.num.number(q1, 'M')}{self.sep} {self.num.number(q3, 'M')}") + "]"
+                text = f"[{self.num.number(q1, 'M')}{self.sep} {self.num.number(q3, 'M')}]"
             else:
-                text = _escape_text(self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}")))
+                text = self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))
             out.append(f"{self.sym(symbol)} = {text}")
         return self._join.join(out)
 

@@ -14,7 +14,7 @@ from __future__ import annotations
 import html as _html
 import re
 from functools import lru_cache
-from typing import Iterable, Iterator, Literal, NamedTuple
+from typing import Iterable, Literal, NamedTuple
 
 __all__ = ["Span", "StyledText", "STYLES", "escape_markup"]
 
@@ -43,14 +43,29 @@ class Span(NamedTuple):
 class StyledText:
     """Immutable text with style spans. ``str()`` gives the bare characters."""
 
-    __slots__ = ("text", "spans")
+    __slots__ = ("text", "_spans", "_segments")  # one of the two is kept; the other is derived once when asked for
 
     text: str
-    spans: tuple[Span, ...]
 
     def __init__(self, text: str = "", spans: Iterable[Span] = ()) -> None:
         object.__setattr__(self, "text", text)
-        object.__setattr__(self, "spans", tuple(s for s in spans if s.end > s.start))
+        object.__setattr__(self, "_spans", tuple(s for s in spans if s.end > s.start))
+        object.__setattr__(self, "_segments", None)
+
+    @property
+    def spans(self) -> tuple[Span, ...]:
+        """The style spans, in start order (outer before inner)."""
+        spans = self._spans
+        if spans is None:
+            at = 0
+            made = []
+            for piece, styles in self._segments:  # type: ignore[union-attr]
+                for style in sorted(styles):
+                    made.append(Span(at, at + len(piece), style))  # type: ignore[arg-type]
+                at += len(piece)
+            spans = tuple(made)
+            object.__setattr__(self, "_spans", spans)
+        return spans
 
     def __setattr__(self, name: str, value: object) -> None:
         raise AttributeError("StyledText is immutable")
@@ -64,34 +79,41 @@ class StyledText:
     @classmethod
     def from_markup(cls, markup: str) -> "StyledText":
         """Parse the markup; raises ValueError naming the position of a fault."""
-        if "&" not in markup:  # the common case: tags only, split once
+        if "&" not in markup:  # the common case: flat tags, no entities; split once
             parts = _TAG_SPLIT.split(markup)
-            text = "".join(parts[::3])
-            if "<" not in text and ">" not in text:
-                out_spans: list[Span] = []
-                stack: list[tuple[str, int]] = []
-                nested = False
-                length = len(parts[0])
-                for k in range(1, len(parts), 3):
-                    tag = parts[k + 1]
-                    if parts[k]:  # a closing tag
-                        if not stack or stack[-1][0] != tag:
-                            break  # let the full parser name the fault
-                        start = stack.pop()[1]
-                        if length > start:
-                            out_spans.append(Span(start, length, tag))  # type: ignore[arg-type]
-                    else:
-                        nested = nested or bool(stack)
-                        stack.append((tag, length))
-                    length += len(parts[k + 2])
+            segs: list[tuple[str, frozenset[str]]] = [(parts[0], _NO_STYLE)] if parts[0] else []
+            open_tag = None
+            for k in range(1, len(parts), 3):
+                tag = parts[k + 1]
+                if parts[k]:  # a closing tag
+                    if open_tag != tag:
+                        break  # a fault: the full parser names it
+                    open_tag = None
+                    styles = _NO_STYLE
                 else:
-                    if not stack:
-                        if nested:  # inner spans close first: put them in start order
-                            out_spans.sort(key=_span_order)
-                        made = object.__new__(cls)
-                        object.__setattr__(made, "text", text)
-                        object.__setattr__(made, "spans", tuple(out_spans))
-                        return made
+                    if open_tag is not None:
+                        break  # nested tags: the full parser
+                    open_tag = tag
+                    styles = _ONE_STYLE[tag]
+                piece = parts[k + 2]  # the text after a tag has that tag's style, or none
+                if piece:
+                    if segs and segs[-1][1] is styles:
+                        segs[-1] = (segs[-1][0] + piece, styles)
+                    else:
+                        segs.append((piece, styles))
+            else:
+                text = "".join(parts[::3])
+                if open_tag is None and "<" not in text and ">" not in text:
+                    made = object.__new__(cls)
+                    object.__setattr__(made, "text", text)
+                    object.__setattr__(made, "_spans", None)
+                    object.__setattr__(made, "_segments", tuple(segs))
+                    return made
+        return cls._parse(markup)
+
+    @classmethod
+    def _parse(cls, markup: str) -> "StyledText":
+        """The full parser: entities, and a message naming the fault."""
         out: list[str] = []
         length = 0
         spans: list[Span] = []
@@ -165,11 +187,11 @@ class StyledText:
 
     def __eq__(self, other: object) -> bool:
         if isinstance(other, StyledText):
-            return self.text == other.text and list(self.segments()) == list(other.segments())
+            return self.text == other.text and self.segments() == other.segments()
         return NotImplemented
 
     def __hash__(self) -> int:
-        return hash((self.text, tuple(self.segments())))
+        return hash((self.text, self.segments()))
 
     def __len__(self) -> int:
         return len(self.text)
@@ -185,42 +207,13 @@ class StyledText:
 
     # -- reading ------------------------------------------------------------------
 
-    def segments(self) -> Iterator[tuple[str, frozenset[str]]]:
+    def segments(self) -> tuple[tuple[str, frozenset[str]], ...]:
         """Maximal runs of text with one set of styles, in order."""
-        text = self.text
-        spans = self.spans
-        if not spans:
-            if text:
-                yield text, frozenset()
-            return
-        if all(a.end <= b.start for a, b in zip(spans, spans[1:])):  # disjoint spans, the common case
-            at = 0
-            for sp in spans:
-                if sp.start > at:
-                    yield text[at : sp.start], _NO_STYLE
-                yield text[sp.start : sp.end], _ONE_STYLE[sp.style]
-                at = sp.end
-            if at < len(text):
-                yield text[at:], _NO_STYLE
-            return
-        cuts = {0, len(text)}
-        for s in self.spans:
-            cuts.add(s.start)
-            cuts.add(s.end)
-        points = sorted(cuts)
-        prev_text, prev_styles = "", frozenset()
-        for a, b in zip(points, points[1:]):
-            if a == b:
-                continue
-            styles = frozenset(s.style for s in self.spans if s.start <= a and s.end >= b)
-            if styles == prev_styles:
-                prev_text += text[a:b]
-            else:
-                if prev_text:
-                    yield prev_text, prev_styles
-                prev_text, prev_styles = text[a:b], styles
-        if prev_text:
-            yield prev_text, prev_styles
+        segs = self._segments
+        if segs is None:
+            segs = _segments_of(self.text, self.spans)
+            object.__setattr__(self, "_segments", segs)
+        return segs
 
     def italic_ranges(self) -> list[tuple[int, int]]:
         return [(s.start, s.end) for s in self.spans if s.style == "i"]
@@ -236,11 +229,11 @@ class StyledText:
 
     def plain(self) -> str:
         """Plain text: Unicode superscripts and subscripts where they exist."""
-        return "".join(_plain_piece(text, styles) if styles else text for text, styles in self.segments())
+        return "".join([_plain_piece(text, styles) if styles else text for text, styles in self.segments()])
 
     def markdown(self) -> str:
         """pandoc Markdown: ``*t*``, ``R^2^``, ``r~s~``."""
-        return "".join(_md_piece(text, styles) if styles else _escape_md(text) for text, styles in self.segments())
+        return "".join([_md_piece(text, styles) if styles else _escape_md(text) for text, styles in self.segments()])
 
     def html(self) -> str:
         return "".join(_wrap(_html.escape(t, quote=False), styles, _HTML_TAGS) for t, styles in self.segments())
@@ -275,6 +268,33 @@ class StyledText:
 
     def _repr_latex_(self) -> str:
         return self.latex()
+
+
+def _segments_of(text: str, spans: tuple[Span, ...]) -> tuple[tuple[str, frozenset[str]], ...]:
+    if not spans:
+        return ((text, _NO_STYLE),) if text else ()
+    out: list[tuple[str, frozenset[str]]] = []
+
+    def add(piece: str, styles: frozenset[str]) -> None:
+        if out and out[-1][1] == styles:
+            out[-1] = (out[-1][0] + piece, styles)
+        else:
+            out.append((piece, styles))
+
+    if all(a.end <= b.start for a, b in zip(spans, spans[1:])):  # disjoint spans, the common case
+        at = 0
+        for sp in spans:
+            if sp.start > at:
+                add(text[at : sp.start], _NO_STYLE)
+            add(text[sp.start : sp.end], _ONE_STYLE[sp.style])
+            at = sp.end
+        if at < len(text):
+            add(text[at:], _NO_STYLE)
+        return tuple(out)
+    points = sorted({0, len(text), *(s.start for s in spans), *(s.end for s in spans)})
+    for a, b in zip(points, points[1:]):
+        add(text[a:b], frozenset(s.style for s in spans if s.start <= a and s.end >= b))
+    return tuple(out)
 
 
 _FORMATS = {"text": "plain", "md": "markdown", "html": "html", "tex": "latex", "markup": "markup"}

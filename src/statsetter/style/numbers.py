@@ -11,7 +11,8 @@ Driven only by a :class:`~statsetter.style.profile.Style`:
   unless it is exactly that value; a digit is added instead;
 * the style's minus sign, decimal mark and thousands separator (never in df).
 
-Everything returns plain strings; symbols and italics are the templates' job.
+Everything returns plain strings, never with a character that markup reserves
+(& < >); symbols and italics are the templates' job.
 """
 
 from __future__ import annotations
@@ -73,6 +74,7 @@ def round_digits(digits: Digits, decimals: int) -> Digits:
 
 
 _POW10 = [10.0**k for k in range(16)]  # exact in binary up to 10**22
+_FIXED = [f".{k}f" for k in range(16)]
 
 
 def rounded_digits(value: float, decimals: int) -> Digits:
@@ -91,11 +93,22 @@ def rounded_digits(value: float, decimals: int) -> Digits:
         if y < 1e15:
             frac = y - int(y)
             if abs(frac - 0.5) > y * 4.5e-16:
-                text = f"{value:.{decimals}f}"
-                negative = text[0] == "-"
-                whole, _, frac_digits = (text[1:] if negative else text).partition(".")
-                return negative, whole, frac_digits
+                text = format(value, _FIXED[decimals])
+                if text[0] == "-":
+                    whole, _, frac_digits = text[1:].partition(".")
+                    return True, whole, frac_digits
+                whole, _, frac_digits = text.partition(".")
+                return False, whole, frac_digits
     return round_digits(exact_digits(value), decimals)
+
+
+def _whole_digits(value: float) -> Digits:
+    """Digits of a value rounded to a whole number (a count, whole df)."""
+    if type(value) is int and -10**15 < value < 10**15:
+        return value < 0, str(abs(value)), ""
+    if float(value).is_integer() and abs(value) < 1e15:
+        return value < 0, str(abs(int(value))), ""
+    return rounded_digits(value, 0)
 
 
 def _is_zero(whole: str, frac: str) -> bool:
@@ -145,15 +158,15 @@ class Numbers:
         self._p_floor: float = p.get("floor", 0) or 0
         self._p_ceiling: float = p.get("ceiling", 0) or 0
         self._alpha: float = style.wording.get("alpha", 0.05)
+        self._qdec["percent"] = self._qdec.get("percent", style.percent_decimals)
+        self._qdec["p"] = self._p_decimals
+        if any(c in self._mark + self._thousands + self._minus for c in "&<>"):  # the style's validation allows none
+            raise ValueError("number characters must not be markup")
 
     # -- basic ---------------------------------------------------------------
 
     def decimals_for(self, quantity: str) -> int:
         """The style's decimals for a quantity (``r``, ``d``, ``M`` ...)."""
-        if quantity == "p":
-            return self._p_decimals
-        if quantity == "percent":
-            return self._qdec.get("percent", self.style.percent_decimals)
         return self._qdec.get(quantity, self._decimals)
 
     def is_bounded(self, quantity: str) -> bool:
@@ -161,17 +174,17 @@ class Numbers:
 
     def _compose(self, digits: Digits, bounded: bool, group: bool) -> str:
         negative, whole, frac = digits
-        zero = _is_zero(whole, frac)
-        if group and self._thousands and len(whole) > 3 and int(whole) >= self._group_from:
+        if len(whole) > 3 and group and self._thousands and int(whole) >= self._group_from:
             head = len(whole) % 3 or 3
             parts = [whole[:head]] + [whole[i : i + 3] for i in range(head, len(whole), 3)]
             whole = self._thousands.join(parts)
-        if bounded and whole == "0" and frac:
-            whole = ""
+        elif whole == "0":
+            if negative and frac.count("0") == len(frac):
+                negative = False  # a value that rounds to zero has no sign
+            if bounded and frac:
+                whole = ""
         out = f"{whole}{self._mark}{frac}" if frac else whole
-        if negative and not zero:
-            out = self._minus + out
-        return out
+        return self._minus + out if negative else out
 
     def number(
         self,
@@ -186,20 +199,20 @@ class Numbers:
         grouped, with the style's minus sign and decimal mark. ``held`` caps
         the decimals at those the value was given with."""
         if decimals is None:
-            decimals = self.decimals_for(quantity)
+            decimals = self._qdec.get(quantity, self._decimals)
         if held is not None:
             decimals = min(decimals, held)
         return self._compose(rounded_digits(value, decimals), quantity in self._bounded, group)
 
     def integer(self, value: float) -> str:
         """A count, grouped by thousands (``1,256``)."""
-        return self._compose(rounded_digits(value, 0), False, True)
+        return self._compose(_whole_digits(value), False, True)
 
     def df(self, value: float) -> str:
         """Degrees of freedom: whole numbers as such, others with the style's
         decimals (Welch ``17.78``); never grouped by thousands."""
         if float(value).is_integer():
-            return self._compose(rounded_digits(value, 0), False, False)
+            return self._compose(_whole_digits(value), False, False)
         return self._compose(rounded_digits(value, self._decimals), False, False)
 
     def percent(self, value: float, held: int | None = None) -> str:
@@ -223,16 +236,19 @@ class Numbers:
             decimals += 1
         if held is not None:
             decimals = min(decimals, held)
-        exact = exact_digits(value)  # built once: the decimals it has, and every rounding below
-        limit = held if held is not None else min(max(len(exact[2]), decimals), _MAX_DECIMALS)
         below = value < alpha
-        while True:
-            rounded = round_digits(exact, decimals)
-            zero = _is_zero(rounded[1], rounded[2])
-            wrong = (below and _at_least(rounded, alpha)) or (zero and value > 0)
-            if not wrong or decimals >= limit:
-                break
-            decimals += 1
+        rounded = rounded_digits(value, decimals)
+        zero = _is_zero(rounded[1], rounded[2])
+        if (below and _at_least(rounded, alpha)) or (zero and value > 0):
+            # the decision (or a non-zero p) would be lost: add digits, up to those the value has
+            exact = exact_digits(value)
+            limit = held if held is not None else min(max(len(exact[2]), decimals), _MAX_DECIMALS)
+            while decimals < limit:
+                decimals += 1
+                rounded = round_digits(exact, decimals)
+                zero = _is_zero(rounded[1], rounded[2])
+                if not ((below and _at_least(rounded, alpha)) or (zero and value > 0)):
+                    break
         if zero:
             # only reachable without a floor (or a held precision): say "<"
             unit = (False, "0", "0" * (decimals - 1) + "1") if decimals else (False, "1", "")
