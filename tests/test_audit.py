@@ -279,7 +279,7 @@ def test_exit_status_and_json(tmp_path, capsys):
     rows = json.loads(capsys.readouterr().out)
     assert len(rows) == 2 and all({"location", "found", "codes", "message", "suggestion"} <= set(r) for r in rows)
     assert rows[0]["codes"] == [] and rows[1]["codes"] == ["p-inconsistent"]
-    assert rows[1]["found"] == "t(23) = 2.10, p = .030" and rows[1]["location"] == "line 3, characters 22–43"
+    assert rows[1]["found"] == "t(23) = 2.10, p = .030" and rows[1]["location"] == "line 3, characters 22–47"
     assert main(["audit", str(flawed), "--csv"]) == 1
     assert capsys.readouterr().out.splitlines()[0] == "location,found,codes,message,suggestion"
     assert flawed.read_text(encoding="utf-8") == FLAWED  # never modified
@@ -396,3 +396,37 @@ def test_docx_headers_and_footnotes_are_read(tmp_path):
     assert where["header1 paragraph 1"].startswith("Running head") and where["footnote paragraph 1"].startswith("See F(1, 20)")
     entries = audit_units(units)
     assert [e.found for e in entries] == ["t(12) = 2.50, p = .028", "F(1, 20) = 4.35, p = .050"]
+
+
+def test_markdown_columns_are_the_files_columns(tmp_path, capsys):
+    # a location points at the statistic as written, emphasis and pandoc ^2^ / ~s~ markers
+    # included (common practice: an editor's line:column is the file's)
+    text = ("Intro line.\n\nFirst *r*~s~(48) = .31, *p* = .030, then\n"
+            "a *χ*^2^(2, *N* = 90) = 4.10, *p* = .040 and *t*(23) = 2.10, *p* = .030.\n")
+    path = tmp_path / "cols.md"
+    path.write_text(text, encoding="utf-8")
+    capsys.readouterr()
+    main(["audit", str(path), "--json"])
+    rows = json.loads(capsys.readouterr().out)
+    lines = text.splitlines()
+    assert len(rows) == 3
+    for row in rows:
+        line, chars = row["location"].split(", characters ")
+        first, last = (int(x) for x in chars.split("–"))
+        written = lines[int(line.split()[1]) - 1][first - 1 : last]
+        plain = written.replace("*", "").replace("~", "").replace("^2^", "²")
+        assert plain == row["found"], (row, written)
+        assert written.startswith("*"), written  # the opening marker belongs to the statistic
+
+
+def test_source_index_maps_every_kept_character_back():
+    # every character the parser sees comes from the same character in the file
+    # (or from its superscript, for pandoc ^2^)
+    from statsetter.audit.reading import _text_units
+
+    block = "a *t*(3) = 1, *R*^2^ = .2, *r*~s~ = .1 and _M_ = 2 ^23^ x~ab~y"
+    unit = next(_text_units(block, ".md"))
+    assert unit.text == "a t(3) = 1, R² = .2, rs = .1 and M = 2 ²³ xaby"
+    for i, char in enumerate(unit.text):
+        source = block[unit.source_index(i)]
+        assert source == char or source.translate(str.maketrans("23", "²³")) == char, (i, char, source)

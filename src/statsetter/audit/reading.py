@@ -12,9 +12,10 @@ from __future__ import annotations
 
 import re
 import zipfile
+from bisect import bisect_right
 from dataclasses import dataclass
 from pathlib import Path
-from typing import Iterator
+from typing import Callable, Iterator
 
 from ..errors import InputError
 
@@ -24,13 +25,23 @@ MAX_TEXT_BYTES = 200 * 1024 * 1024
 _W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
 
 
+Trace = tuple[tuple[int, ...], tuple[int, ...]]  # (starts, offsets): from starts[k] on, source = index + offsets[k]
+
+
 @dataclass(frozen=True, slots=True)
 class Unit:
     location: str
     text: str
     italic: tuple[tuple[int, int], ...] | None = None  # None: the format does not say
     part: str = "word/document.xml"
-    index: int = 0  # the paragraph's position among the part's w:p elements
+    index: int = 0  # the paragraph's position among the part's w:p elements (a text block: its first line)
+    origin: tuple[Trace, ...] = ()  # how text maps back to the file's characters (markers removed); () = as is
+
+    def source_index(self, i: int) -> int:
+        """Where character ``i`` of ``text`` is in the block as written."""
+        for starts, offsets in reversed(self.origin):
+            i += offsets[bisect_right(starts, i) - 1]
+        return i
 
 
 def read_units(path: "str | Path", encoding: str = "utf-8") -> list[Unit]:
@@ -73,28 +84,71 @@ _PANDOC_SUP = re.compile(r"\^([^\^\s]{1,8})\^")
 _PANDOC_SUB = re.compile(r"~([^~\s]{1,8})~")
 
 
-def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ...]]:  # spans kept for a later check
-    """Text without emphasis markers, and the italic spans they marked.
-    Markdown's pandoc super- and subscripts become what they print as:
-    ``χ^2^`` is χ², ``r~s~`` is rs."""
+class _Builder:
+    """Text built from pieces, remembering where each piece came from."""
+
+    def __init__(self) -> None:
+        self.parts: list[str] = []
+        self.starts: list[int] = []
+        self.offsets: list[int] = []
+        self.length = 0
+
+    def add(self, piece: str, source: int) -> None:
+        if not piece:
+            return
+        offset = source - self.length
+        if not self.offsets or self.offsets[-1] != offset:
+            self.starts.append(self.length)
+            self.offsets.append(offset)
+        self.parts.append(piece)
+        self.length += len(piece)
+
+    def text(self) -> str:
+        return "".join(self.parts)
+
+    def trace(self) -> Trace | None:
+        """None when nothing moved (no marker was removed)."""
+        if self.offsets in ([], [0]):
+            return None
+        return tuple(self.starts), tuple(self.offsets)
+
+
+def _replace(pattern: re.Pattern[str], text: str, inner: "Callable[[str], str]") -> tuple[str, Trace | None]:
+    """``pattern``'s matches replaced by ``inner(group 1)``, traced."""
+    out = _Builder()
+    at = 0
+    for m in pattern.finditer(text):
+        out.add(text[at : m.start()], at)
+        out.add(inner(m.group(1)), m.start(1))
+        at = m.end()
+    out.add(text[at:], at)
+    return out.text(), out.trace()
+
+
+def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ...], tuple[Trace, ...]]:
+    """Text without emphasis markers, the italic spans they marked (kept for
+    a later check), and how the text maps back to ``text``. Markdown's pandoc
+    super- and subscripts become what they print as: ``χ^2^`` is χ², ``r~s~``
+    is rs."""
     tex = suffix == ".tex"
-    out, spans, at, length = [], [], 0, 0
+    out, spans, at = _Builder(), [], 0
     for m in (_TEX_ITALIC if tex else _MD_ITALIC).finditer(text):
-        inner = next(g for g in m.groups() if g is not None) if tex else m.group(2)
+        group = next(g for g in range(1, 4) if m.group(g) is not None) if tex else 2
+        inner = m.group(group)
         if tex:
             inner = inner.replace("\\chi", "χ").replace("^2", "²").replace("\\eta", "η").replace("\\omega", "ω").strip()
-        before = text[at : m.start()]
-        out += [before, inner]
-        length += len(before)
+        out.add(text[at : m.start()], at)
         if not (tex and inner[:1] in "χηω"):  # $\chi^2$ is math, not italic
-            spans.append((length, length + len(inner)))
-        length += len(inner)
+            spans.append((out.length, out.length + len(inner)))
+        out.add(inner, m.start(group))  # a rewritten TeX group maps to where it starts
         at = m.end()
-    out.append(text[at:])
-    clean = "".join(out)
+    out.add(text[at:], at)
+    clean, traces = out.text(), [out.trace()]
     if not tex:  # after the emphasis, so that *r*~s~ reads rs (spans are not used for Markdown)
-        clean = _PANDOC_SUB.sub(lambda m: m.group(1), _PANDOC_SUP.sub(lambda m: m.group(1).translate(_SUPERSCRIPT), clean))
-    return clean, tuple(spans)
+        clean, sup = _replace(_PANDOC_SUP, clean, lambda g: g.translate(_SUPERSCRIPT))
+        clean, sub = _replace(_PANDOC_SUB, clean, lambda g: g)
+        traces += [sup, sub]
+    return clean, tuple(spans), tuple(t for t in traces if t is not None)
 
 
 def _text_units(text: str, suffix: str) -> Iterator[Unit]:
@@ -105,8 +159,8 @@ def _text_units(text: str, suffix: str) -> Iterator[Unit]:
             continue
         if block.strip():
             block = block.rstrip()
-            clean = _strip_marks(block, suffix)[0] if suffix != ".txt" else block
-            yield Unit(f"line {line}", clean, None, "", line)  # italics are checked in .docx only
+            clean, _, origin = _strip_marks(block, suffix) if suffix != ".txt" else (block, (), ())
+            yield Unit(f"line {line}", clean, None, "", line, origin)  # italics are checked in .docx only
         line += block.count("\n")
 
 

@@ -83,10 +83,13 @@ def audit_units(
                 findings += grim(rep, grim_items)
             if unit.part:  # a Word paragraph
                 location = f"{unit.location}, characters {rep.start + 1}–{rep.end}"
-            else:  # a text block starting at line unit.index
+            else:  # a text block starting at line unit.index; columns as written in the file
                 line = unit.index + unit.text.count("\n", 0, rep.start)
-                column = rep.start - (unit.text.rfind("\n", 0, rep.start) + 1) + 1
-                location = f"line {line}, characters {column}–{column + rep.end - rep.start - 1}"
+                newline = unit.text.rfind("\n", 0, rep.start)
+                line_start = unit.source_index(newline) + 1 if newline >= 0 else 0
+                first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else 0  # opening markers included
+                last = unit.source_index(rep.end - 1) + 1
+                location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
             entries.append(Entry(location, rep.text, tuple(findings), _suggest(rep, resolved, alpha), unit, rep.start, rep.end))
     return entries
 
