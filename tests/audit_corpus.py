@@ -71,8 +71,19 @@ def _t(rng: random.Random, welch: bool = False) -> tuple[float, float, float]:
     return t, df, float(2 * stats.t.sf(abs(t), df))
 
 
+def _groups(rng: random.Random) -> tuple[int, int, float, float]:
+    n1, n2 = rng.randint(12, 90), rng.randint(12, 90)
+    t = round(rng.choice([-1, 1]) * rng.uniform(0.3, 4.5), 2)
+    return n1, n2, t, float(2 * stats.t.sf(abs(t), n1 + n2 - 2))
+
+
 def clean(rng: random.Random) -> str:
-    kind = rng.choice(["t", "t2", "welch", "tcohen", "F", "F2", "chi", "chi2", "r", "rci", "rs", "z", "U", "H", "desc", "descp"])
+    kind = rng.choice(["t", "t2", "welch", "tcohen", "tgroups", "F", "F2", "chi", "chi2", "r", "rci", "rs", "z", "U", "H", "desc", "descp"])
+    if kind == "tgroups":  # group sizes in the sentence: d and g follow from t
+        n1, n2, t, p = _groups(rng)
+        d = t * math.sqrt(1 / n1 + 1 / n2)
+        name, value = rng.choice([("d", d), ("g", d * (1 - 3 / (4 * (n1 + n2 - 2) - 1)))])
+        return f"(n = {n1} and n = {n2}), t({n1 + n2 - 2}) = {_num(t)}, {_p(p)}, {name} = {_num(value)}"
     if kind == "tcohen":  # effect named in words, CI in AMA-like words are off-style, so brackets
         t, df, p = _t(rng)
         d = round(t * math.sqrt(4 / (df + 2)), 2)
@@ -189,13 +200,17 @@ def planted(rng: random.Random, code: str) -> Planted:
         return Planted(text, frozenset() if ok else frozenset({"grim"}))
     if code == "italics":
         return Planted(f"t({D}) = {T}, {_p(p)}", frozenset({"italics"}), docx_only=True)
+    if code == "d-inconsistent":  # d half as large again as t and the group sizes give
+        n1, n2, t, p = _groups(rng)
+        d = t * math.sqrt(1 / n1 + 1 / n2) * 1.5
+        return one(f"(n = {n1} and n = {n2}), t({n1 + n2 - 2}) = {_num(t)}, {_p(p)}, d = {_num(d)}")
     raise ValueError(code)
 
 
 PLANTED_CODES = [
     "p-inconsistent", "decision-error", "one-sided", "impossible-r", "impossible-p", "negative-statistic", "negative-sd",
     "ci-reversed", "ci-excludes-estimate", "df-not-integer", "leading-zero", "missing-leading-zero", "decimals",
-    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics",
+    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics", "d-inconsistent",
 ]
 
 
@@ -227,7 +242,7 @@ def build(seed: int = 2026, clean_count: int = 300, per_code: int = 8) -> list[t
     return paragraphs
 
 
-_ITALIC_SYMBOLS = ("t", "F", "r", "z", "U", "H", "p", "d", "M", "SD", "N", "n", "V")
+_ITALIC_SYMBOLS = ("t", "F", "r", "z", "U", "H", "p", "d", "g", "M", "SD", "N", "n", "V")
 
 
 def italic_spans(text: str, start: int, end: int) -> list[tuple[int, int]]:
@@ -235,7 +250,7 @@ def italic_spans(text: str, start: int, end: int) -> list[tuple[int, int]]:
     import re
 
     out = []
-    for m in re.finditer(r"(?<![A-Za-z])(SD|rs|[tFrzUHpdMNnV])(?=\s*[(=<]|\()", text[start:end]):
+    for m in re.finditer(r"(?<![A-Za-z])(SD|rs|[tFrzUHpdgMNnV])(?=\s*[(=<]|\()", text[start:end]):
         sym = m.group(1)
         s = start + m.start(1)
         out.append((s, s + (1 if sym == "rs" else len(sym))))

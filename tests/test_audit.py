@@ -430,3 +430,58 @@ def test_source_index_maps_every_kept_character_back():
     for i, char in enumerate(unit.text):
         source = block[unit.source_index(i)]
         assert source == char or source.translate(str.maketrans("23", "²³")) == char, (i, char, source)
+
+
+def _penguin_groups():
+    import pingouin as pg
+
+    df = pg.read_dataset("penguins").dropna(subset=["bill_length_mm", "sex"])
+    x = df.loc[df.sex == "male", "bill_length_mm"].to_numpy()
+    y = df.loc[df.sex == "female", "bill_length_mm"].to_numpy()
+    return x, y
+
+
+def test_d_from_t_and_group_sizes_on_open_data():
+    # reference: scipy's Student t and pingouin's Cohen's d and Hedges' g (pooled SD) on
+    # pingouin's bundled penguins data, printed to two decimals as a manuscript would
+    import pingouin as pg
+
+    x, y = _penguin_groups()
+    t = stats.ttest_ind(x, y).statistic
+    d = pg.compute_effsize(x, y, eftype="cohen")
+    g = pg.compute_effsize(x, y, eftype="hedges")
+    df = len(x) + len(y) - 2
+    lead = f"Males (n = {len(x)}) had longer bills than females (n = {len(y)}), "
+    for name, value in (("d", d), ("g", g)):
+        good = f"{lead}t({df}) = {t:.2f}, p < .001, {name} = {value:.2f}."
+        assert "d-inconsistent" not in codes(good), good
+        bad = f"{lead}t({df}) = {t:.2f}, p < .001, {name} = {value + 0.05:.2f}."
+        assert "d-inconsistent" in codes(bad), bad
+    # without group sizes (or with sizes that do not add up to df + 2) d is not checked
+    assert "d-inconsistent" not in codes(f"t({df}) = {t:.2f}, p < .001, d = {d + 0.5:.2f}.")
+    assert "d-inconsistent" not in codes(f"(n = 10, n = 12), t({df}) = {t:.2f}, p < .001, d = {d + 0.5:.2f}.")
+
+
+def test_d_z_from_paired_t_on_open_data():
+    # reference: scipy's paired t on Student's sleep data (recalled from memory, tests/open_data.py);
+    # d_z = mean difference / SD of the differences, computed here with numpy
+    import numpy as np
+
+    from open_data import SLEEP
+
+    diff = SLEEP["drug2"].to_numpy() - SLEEP["drug1"].to_numpy()
+    t = stats.ttest_rel(SLEEP["drug2"], SLEEP["drug1"]).statistic
+    dz = diff.mean() / diff.std(ddof=1)
+    assert "d-inconsistent" not in codes(f"t(9) = {t:.2f}, p = .003, dz = {dz:.2f}")
+    assert "d-inconsistent" in codes(f"t(9) = {t:.2f}, p = .003, dz = {dz * 2:.2f}")
+    assert np.isclose(dz, t / np.sqrt(10))
+
+
+@settings(max_examples=500, deadline=None)
+@given(st.floats(0.01, 8), st.integers(2, 400), st.integers(2, 400), st.integers(1, 3), st.integers(1, 3))
+def test_d_from_t_never_flags_a_correct_d(t, n1, n2, t_decimals, d_decimals):
+    # no false alarms: any d computed from the printed t's true value and rounded as printed passes
+    d = t * (1 / n1 + 1 / n2) ** 0.5
+    text = f"(n = {n1}, n = {n2}), t({n1 + n2 - 2}) = {t:.{t_decimals}f}, p = .5, d = {d:.{d_decimals}f}"
+    found = [c for e in audit_units([Unit("test", text)]) for c in e.codes]
+    assert "d-inconsistent" not in found, text

@@ -42,6 +42,10 @@ CODES: dict[str, tuple[str, str]] = {
     "hyphen-minus": ("a hyphen or dash where the style has a minus sign", "Numbers: true minus sign (practice; APA examples)"),
     "italics": ("a Latin symbol not in italics, or a Greek one in italics", "Statistics in text: italic symbols (APA 7 §6.45)"),
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
+    "d-inconsistent": (
+        "d (or g, d_z) does not follow from t and the group sizes",
+        "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
+    ),
 }
 
 _BOUNDED_EFFECTS = {"V": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
@@ -310,6 +314,58 @@ def grim(rep: Reported, items: int) -> list[Finding]:
         candidates = [c / total for c in (k - 1, k, k + 1)]
         if not any(abs(c - e.number.value) <= e.number.half_unit + 1e-12 for c in candidates):
             out.append(Finding("grim", f"A mean of {n} integer scores cannot be {e.number.text}.", f"M = {e.number.text}, n = {n}, {items} item(s)"))
+    return out
+
+
+def _magnitude(number: Number) -> tuple[float, float]:
+    """The magnitudes a printed number stands for."""
+    v = abs(number.value)
+    return max(0.0, v - number.half_unit), v + number.half_unit
+
+
+def _hedges_j(df: float) -> tuple[float, float]:
+    """Hedges' small-sample factor: exact (gamma functions) and the usual
+    approximation 1 − 3/(4 df − 1); an author may have used either."""
+    exact = math.exp(math.lgamma(df / 2) - 0.5 * math.log(df / 2) - math.lgamma((df - 1) / 2))
+    approx = 1 - 3 / (4 * df - 1)
+    return min(exact, approx), max(exact, approx)
+
+
+def effect_from_t(rep: Reported, sizes: tuple[int, int] | None = None) -> list[Finding]:
+    """d from t, where the design is known: d_z = t/√(df + 1) for a paired or
+    one-sample test; d = t·√(1/n₁ + 1/n₂) (g with Hedges' J) for Student's t
+    when the sentence gives two group sizes that add up to df + 2. Anything
+    else (Welch df, d_av, no group sizes) is not checked: d then depends on
+    what the text does not say."""
+    if rep.symbol != "t" or rep.value is None or len(rep.df) != 1:
+        return []
+    df = rep.df[0].value
+    if not float(df).is_integer() or df < 2:
+        return []
+    t_low, t_high = _magnitude(rep.value)
+    out = []
+    for e in rep.effects:
+        if e.name == "d_z":
+            low = high = 1 / math.sqrt(df + 1)
+            basis = f"t/√{df + 1:.0f}"
+        elif e.name in ("d", "g") and sizes is not None and sizes[0] + sizes[1] - 2 == df:
+            low = high = math.sqrt(1 / sizes[0] + 1 / sizes[1])
+            basis = f"t·√(1/{sizes[0]} + 1/{sizes[1]})"
+            if e.name == "g":
+                j_low, j_high = _hedges_j(df)
+                low, high, basis = low * j_low, high * j_high, f"J·{basis}"
+        else:
+            continue
+        expected = (t_low * low, t_high * high)
+        if not _overlap(expected, _magnitude(e.number)):
+            out.append(
+                Finding(
+                    "d-inconsistent",
+                    f"{e.symbol_text} = {e.number.text} does not follow from t({rep.df[0].text}) = {rep.value.text}: {basis} gives "
+                    f"{expected[0]:.3f} to {expected[1]:.3f} in magnitude.",
+                    f"{e.symbol_text} = {e.number.text}",
+                )
+            )
     return out
 
 

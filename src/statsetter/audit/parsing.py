@@ -267,6 +267,22 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     return out
 
 
+def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int, int] | None:
+    """The two group sizes (``n = 40`` … ``n = 38``) the sentence gives before
+    a statistic, when it gives exactly two."""
+    pat = _patterns(decimal_mark)
+    start = 0
+    for b in pat.boundary.finditer(text, 0, rep.start):
+        start = b.end()
+    found = [m for m in pat.n.finditer(text, start, rep.start) if m.group("sym") == "n"]
+    if len(found) != 2:
+        return None
+    sizes = [pat.to_number(m.group("num"), m.start("num")) for m in found]
+    if any(n is None or n.value < 1 for n in sizes):
+        return None
+    return int(sizes[0].value), int(sizes[1].value)  # type: ignore[union-attr]
+
+
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥]|(?<![\w.])n\.?\s?s\b")
 
 

@@ -19,8 +19,8 @@ from ..rendering.sentences import render
 from ..rendering.styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, Finding, consistency, grim, impossible, style_findings, to_record
-from .parsing import Reported, find_statistics
+from .checks import CODES, Finding, consistency, effect_from_t, grim, impossible, style_findings, to_record
+from .parsing import Reported, find_statistics, group_sizes
 from .reading import Unit, read_units
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "annotate", "CAUTION"]
@@ -79,6 +79,8 @@ def audit_units(
     for unit in units:
         for rep in find_statistics(unit.text, mark):
             findings = impossible(rep) + consistency(rep, alpha) + style_findings(rep, resolved, alpha, unit.text, unit.italic)
+            if rep.symbol == "t" and rep.effects:
+                findings += effect_from_t(rep, group_sizes(unit.text, rep, mark))
             if grim_items:
                 findings += grim(rep, grim_items)
             if unit.part:  # a Word paragraph
