@@ -137,7 +137,9 @@ def test_scipy_correlations(penguins, method, function):
     source = None if method == "pearson" else function.__name__
     n = None if method == "pearson" else len(penguins)
     alone = to_records(res, source, n=n)[0]
-    assert same(alone, ours, ("statistic", "p", "n")) >= 5
+    if method == "kendall":  # τb's SE depends on the ties: no CI from the statistic and n alone, and the notes say so
+        assert alone.effects[0].ci is None and any("samples=" in note.text for note in alone.notes)
+    assert same(alone, ours, ("statistic", "p", "n")) >= (4 if method == "kendall" else 5)
     full = to_records(res, source, samples=[penguins.bill_length_mm, penguins.body_mass_g], groups=["bill_length_mm", "body_mass_g"])[0]
     assert same(full, ours, ("statistic", "p")) >= 5 and full.variables[0].name == "bill_length_mm"
 

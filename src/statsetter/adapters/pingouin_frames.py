@@ -106,7 +106,10 @@ def _corr_record(ctx: Context, method: str, n: int, r: float, p: float, alternat
         raise InputError(f"pingouin correlation method {method!r} is not supported; supported: {', '.join(SYMBOLS)}")
     variables = tuple(Variable(v, ctx.labels.get(v, v), role) for v, role in zip(names, ("x", "y"))) if names else ()
     effect = correlation_effect(method, r, n, ctx.level)
-    note = Note("method", f"The CI is recomputed from the unrounded r and n ({effect.method}); pingouin's CI95 is rounded.")
+    if effect.ci is None:  # Kendall: the SE of τb needs the data
+        note = Note("method", "No CI for τb: its SE depends on the ties in the data, which pingouin's frame does not hold.")
+    else:
+        note = Note("method", f"The CI is recomputed from the unrounded r and n ({effect.method}); pingouin's CI95 is rounded.")
     return _base(ctx, method, [note], statistic=Statistic(SYMBOLS[method], r, (n - 2,) if method != "kendall" else ()), p=p, n=n,
                  alternative=alternative, effects=(effect,), variables=variables)  # type: ignore[arg-type]
 

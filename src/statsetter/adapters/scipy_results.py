@@ -90,6 +90,8 @@ def _correlation(res: Any, ctx: Context, method: str, n: int | None) -> list[Res
             effects = (EffectSize("r", value, Interval(ctx.level, float(ci.low), float(ci.high)), method="Fisher z"),)
         else:
             effects = (correlation_effect(method, value, n, ctx.level),)
+            if method == "kendall":  # with samples= statsetter's own analysis runs and gives the CI
+                notes.append(absent(ctx, ["the CI of τb (its SE depends on the ties in the data: pass samples=)"]))
     else:
         notes.append(absent(ctx, ["n (and so df and the CI)"]))
     df = (n - 2,) if n is not None and method != "kendall" else ()

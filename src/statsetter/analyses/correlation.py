@@ -8,9 +8,10 @@ from typing import TYPE_CHECKING, Literal, Mapping
 from ..errors import InputError
 from ..records import EffectSize, Interval, Result, Statistic
 from . import _common as c
-from .effects import fisher_z_ci
+from .effects import fisher_z_ci, kendall_tau_b_se
 
 if TYPE_CHECKING:
+    import numpy as np
     import pandas as pd
 
 Method = Literal["pearson", "spearman", "kendall"]
@@ -19,16 +20,24 @@ Method = Literal["pearson", "spearman", "kendall"]
 SYMBOLS = {"pearson": "r", "spearman": "rs", "kendall": "tau_b"}
 
 
-def correlation_effect(method: str, value: float, n: int, level: float) -> EffectSize:
+def correlation_effect(
+    method: str, value: float, n: int, level: float, data: "tuple[np.ndarray, np.ndarray] | None" = None
+) -> EffectSize:
     """The correlation as an effect size with its CI: Fisher's z with SE
-    1/√(n − 3) (Pearson), √((1 + rs²/2)/(n − 3)) (Spearman; Bonett & Wright,
-    2000) or √(0.437/(n − 4)) (Kendall; Fieller, Hartley & Pearson, 1957)."""
-    if method == "pearson":
+    1/√(n − 3) (Pearson) or √((1 + rs²/2)/(n − 3)) (Spearman; Bonett &
+    Wright, 2000); for Kendall's τb, Fisher's z with the delta-method SE
+    ASE/(1 − τb²), where ASE is τb's asymptotic SE from the data (ties
+    allowed, :func:`~statsetter.analyses.effects.kendall_tau_b_se`). Without
+    the data τb gets no CI: its SE depends on the ties."""
+    if method == "kendall":
+        if data is None:
+            return EffectSize(SYMBOLS[method], value, None, method="no CI: the SE of τb depends on the ties in the data")
+        _, ase = kendall_tau_b_se(*data)
+        se, name = (ase / (1 - value * value) if abs(value) < 1 else 0.0), "Fisher z, asymptotic SE of τb (delta method; ties allowed)"
+    elif method == "pearson":
         se, name = None, "Fisher z"
-    elif method == "spearman":
-        se, name = math.sqrt((1 + value * value / 2) / (n - 3)), "Fisher z, Bonett & Wright (2000) SE"
     else:
-        se, name = math.sqrt(0.437 / (n - 4)), "Fisher z, Fieller, Hartley & Pearson (1957) SE"
+        se, name = math.sqrt((1 + value * value / 2) / (n - 3)), "Fisher z, Bonett & Wright (2000) SE"
     lo, hi = fisher_z_ci(value, n, level, se)
     return EffectSize(SYMBOLS[method], value, Interval(level, lo, hi), method=name)
 
@@ -43,10 +52,7 @@ def correlate(
     alternative: str = "two-sided",
     labels: Mapping[str, str] | None = None,
 ) -> Result:
-    """A correlation record. Pearson's CI is Fisher's z; Spearman's uses
-    Fisher's z with the Bonett & Wright (2000) SE √((1 + rs²/2)/(n − 3));
-    Kendall's uses Fisher's z with the Fieller, Hartley & Pearson (1957) SE
-    √(0.437/(n − 4)) (formula recalled from memory)."""
+    """A correlation record with its CI (see :func:`correlation_effect`)."""
     from scipy import stats
 
     if method not in ("pearson", "spearman", "kendall"):
@@ -68,7 +74,7 @@ def correlate(
         p=p,
         alternative=alternative,  # type: ignore[arg-type]
         n=n,
-        effects=(correlation_effect(method, value, n, level),),
+        effects=(correlation_effect(method, value, n, level, (a, b) if method == "kendall" else None),),
         variables=c.variables({"x": x, "y": y}, labels),
         notes=c.notes(missing),
         provenance=c.provenance(f"statsetter.analyses.correlate({method})"),

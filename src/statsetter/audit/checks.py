@@ -15,6 +15,7 @@ import math
 from dataclasses import dataclass
 from typing import Sequence
 
+from ..analyses.effects import hedges_j
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
@@ -326,7 +327,7 @@ def _magnitude(number: Number) -> tuple[float, float]:
 def _hedges_j(df: float) -> tuple[float, float]:
     """Hedges' small-sample factor: exact (gamma functions) and the usual
     approximation 1 − 3/(4 df − 1); an author may have used either."""
-    exact = math.exp(math.lgamma(df / 2) - 0.5 * math.log(df / 2) - math.lgamma((df - 1) / 2))
+    exact = hedges_j(df)
     approx = 1 - 3 / (4 * df - 1)
     return min(exact, approx), max(exact, approx)
 
