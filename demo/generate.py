@@ -48,7 +48,7 @@ def make_rows(rng: np.random.Generator) -> list[dict[str, object]]:
             "age": int(age[i]), "service_years": service[i], "sleep_hours": sleep[i],
         }
         row.update({k: int(v[i]) for k, v in items.items()})
-        row.update({"alertness": int(alert[i]), "coffee": int(coffee[i]), "incident": "with incident" if incident[i] else "without incident",
+        row.update({"alertness": int(alert[i]), "coffee": int(coffee[i]), "incident": "drivers with an incident" if incident[i] else "drivers without an incident",
                     "fatigue_before": "" if np.isnan(before[i]) else before[i], "fatigue_after": "" if np.isnan(after[i]) else after[i]})
         rows.append(row)
     return rows

@@ -44,7 +44,7 @@ GOLDEN = {
     # REPORTING-RULES Numbers: true minus U+2212 (practice); t test form (APA 7 ch. 6)
     't_paired': (
         '<i>t</i>(9) = −4.06, <i>p</i> = .003, <i>d</i><sub>z</sub> = −1.28, 95% CI [−2.10, −0.43]',
-        'Extra sleep was lower at condition 1 (M = 0.75, SD = 1.79) than at condition 2 (M = 2.33, SD = 2.00) in 10 pairs; the mean difference was −1.58, 95% CI [−2.46, −0.70], t(9) = −4.06, p = .003, d_z = −1.28, 95% CI [−2.10, −0.43].',
+        'Extra sleep was lower in condition 1 (M = 0.75, SD = 1.79) than in condition 2 (M = 2.33, SD = 2.00) in 10 pairs; the mean difference was −1.58, 95% CI [−2.46, −0.70], t(9) = −4.06, p = .003, d_z = −1.28, 95% CI [−2.10, −0.43].',
     ),
     # REPORTING-RULES Numbers: a CI limit just below 0 keeps a digit (practice); p = .051 stays above .05
     't_one_sample': (
@@ -114,7 +114,7 @@ GOLDEN = {
     # REPORTING-RULES Statistics in text: say which test/approximation (practice)
     'wilcoxon': (
         '<i>T</i> = 10.5, <i>p</i> = .020, <i>r</i><sub>rb</sub> = −.68',
-        'The score tended to be lower for condition 1 (Mdn = 3.00) than for condition 2 (Mdn = 4.50) in 12 pairs, Wilcoxon signed-rank T = 10.5, p = .020, r_rb = −.68 (exact).',
+        'The score tended to be lower in condition 1 (Mdn = 3.00) than in condition 2 (Mdn = 4.50) in 12 pairs, Wilcoxon signed-rank T = 10.5, p = .020, r_rb = −.68 (exact).',
     ),
     # REPORTING-RULES Symbols: ε² Greek roman (APA 7 §6.45)
     'kruskal_wallis': (
