@@ -252,3 +252,27 @@ def test_p_without_a_floor_in_exponent_notation(tmp_path):
     assert num.p(3e-05) == ("=", ".00003")
     assert num.p(0.0) == ("<", ".001")
     assert num.p(0.04999999999999999) == ("=", ".04999999999999999")  # just below alpha: every digit it has
+
+
+# -- never zero: a non-zero B or SE does not print as 0.00 (APA 7 §6.36: more decimals
+# where precision matters; the B and SE quantities are the style's choice, in apa7.toml)
+
+
+@pytest.mark.parametrize(
+    "value, expected",
+    [(-0.003, MINUS + "0.003"), (0.0046, "0.005"), (0.00049, "0.0005"), (0.004999, "0.005"), (0.12, "0.12"), (0.0, "0.00"), (1e-9, "0.00")],
+)
+def test_never_zero_quantities(apa, value, expected):
+    assert apa.number(value, "B") == expected and apa.number(value, "SE") == expected
+    assert apa.number(value, "d") == ("0.00" if abs(value) < 0.005 else f"{value:.2f}")  # d is not such a quantity
+
+
+@settings(max_examples=1000, deadline=None)
+@given(st.floats(min_value=-0.01, max_value=0.01, allow_nan=False).filter(lambda v: abs(v) >= 1e-6))
+def test_never_zero_property(value):
+    num = numbers_for(load_style("apa7"))
+    text = num.number(value, "B")
+    shown = parse(text)
+    assert shown != 0, (value, text)
+    decimals = len(text.split(".")[1])
+    assert abs(shown - Decimal(repr(value))) <= Decimal(1).scaleb(-decimals) / 2

@@ -39,6 +39,7 @@ def write(tmp_path, text):
         ('extends = "apa7"\n[ci]\npattern = "[{low}]"\n', "ci.pattern", "lacks {high}"),
         ('extends = "apa7"\n[numbers]\ndecimal_mark = ","\nthousands = "."\n', "numbers.list_separator", "';'"),
         ('extends = "apa7"\n[wording]\nsignificance = "yes"\n', "wording.significance", "true or false"),
+        ('extends = "apa7"\n[numbers.never_zero]\nquantities = "B"\n', "numbers.never_zero.quantities", "list"),
         ('[numbers]\ndecimals = 2\n', "p", "missing"),
         ("extends = \n", "(file)", "not valid TOML"),
     ],

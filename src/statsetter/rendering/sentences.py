@@ -168,9 +168,9 @@ class Helpers:
             return ""
         return self._ci(r, interval, quantity, null, path)
 
-    def _ci(self, r: Result, interval: Interval, quantity: str, null: float, path: str) -> str:
+    def _ci(self, r: Result, interval: Interval, quantity: str, null: float, path: str, decimals: int | None = None) -> str:
         held = (_held(r, f"{path}.low"), _held(r, f"{path}.high")) if path and r.precision else (None, None)
-        low, high = self.num.interval(interval.low, interval.high, quantity, null, held)
+        low, high = self.num.interval(interval.low, interval.high, quantity, null, held, decimals)
         level = self._levels.get(interval.level)
         if level is None:
             level = self.num.number(interval.level * 100, "level", _level_decimals(interval.level))
@@ -214,8 +214,9 @@ class Helpers:
         out = self.num.number(e.value, q, held=_held(r, "estimate.value"))
         if symbol:
             out = f"{self.sym(symbol)} = {out}"
-        if with_ci and e.ci is not None:
-            out += self._ci_attach + self._ci(r, e.ci, q, e.null, "estimate.ci")
+        if with_ci and e.ci is not None:  # the limits get the estimate's decimals (like values alike, APA 7 §6.36)
+            shown = self.num.shown_decimals(e.value, q, _held(r, "estimate.value"))
+            out += self._ci_attach + self._ci(r, e.ci, q, e.null, "estimate.ci", shown if shown > self.num.decimals_for(q) else None)
         return out
 
     def desc(self, r: Result, index: int = 0, parts: str = "mean sd n") -> str:

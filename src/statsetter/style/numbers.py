@@ -28,6 +28,7 @@ __all__ = ["Numbers", "round_half_up", "numbers_for"]
 _CTX = Context(prec=400, rounding=ROUND_HALF_UP)  # every float to 40 decimals, exactly
 _QUANTUM = [Decimal(1).scaleb(-k) for k in range(0, 40)]
 _MAX_DECIMALS = 30
+_NEVER_ZERO_MAX = 6  # digits added for a never-zero quantity stop here
 
 
 def round_half_up(value: float, decimals: int) -> Decimal:
@@ -148,6 +149,7 @@ class Numbers:
         self._decimals = style.decimals
         self._qdec = dict(style.quantity_decimals)
         self._bounded = style.bounded
+        self._never_zero = style.never_zero
         self._mark = style.decimal_mark
         self._thousands = style.thousands
         self._group_from = style.group_from
@@ -202,7 +204,27 @@ class Numbers:
             decimals = self._qdec.get(quantity, self._decimals)
         if held is not None:
             decimals = min(decimals, held)
-        return self._compose(rounded_digits(value, decimals), quantity in self._bounded, group)
+        digits = rounded_digits(value, decimals)
+        if quantity in self._never_zero and value and held is None and _is_zero(digits[1], digits[2]):
+            digits = rounded_digits(value, self._first_digit(value, decimals))
+        return self._compose(digits, quantity in self._bounded, group)
+
+    def _first_digit(self, value: float, decimals: int) -> int:
+        """The decimals at which a small non-zero value shows its first
+        significant digit (never more than ``_NEVER_ZERO_MAX``)."""
+        first = -Decimal(repr(float(value))).adjusted()
+        return max(decimals + 1, first) if first <= _NEVER_ZERO_MAX else decimals
+
+    def shown_decimals(self, value: float, quantity: str = "default", held: int | None = None) -> int:
+        """The decimals :meth:`number` gives ``value`` (so that a CI can match its estimate)."""
+        decimals = self._qdec.get(quantity, self._decimals)
+        if held is not None:
+            return min(decimals, held)
+        if quantity in self._never_zero and value:
+            digits = rounded_digits(value, decimals)
+            if _is_zero(digits[1], digits[2]):
+                return self._first_digit(value, decimals)
+        return decimals
 
     def integer(self, value: float) -> str:
         """A count, grouped by thousands (``1,256``)."""
@@ -287,10 +309,11 @@ class Numbers:
         quantity: str,
         null: float = 0.0,
         held: tuple[int | None, int | None] = (None, None),
+        decimals: int | None = None,
     ) -> tuple[str, str]:
         return (
-            self.limit(low, quantity, null, held=held[0]),
-            self.limit(high, quantity, null, held=held[1]),
+            self.limit(low, quantity, null, decimals, held=held[0]),
+            self.limit(high, quantity, null, decimals, held=held[1]),
         )
 
 

@@ -129,6 +129,7 @@ SCHEMA: dict[str, Any] = {
         "percent_decimals": _int(0, 3),
         "quantity_decimals": {_ANY: _int(0, 6)},
         "bounded": {"quantities": _text_list},
+        "never_zero": {"quantities": _text_list},
     },
     "p": {
         "symbol": _markup,
@@ -249,6 +250,11 @@ class Style:
     @property
     def bounded(self) -> frozenset[str]:
         return frozenset(self.data["numbers"]["bounded"]["quantities"])
+
+    @property
+    def never_zero(self) -> frozenset[str]:
+        """Quantities whose non-zero values never print as zero (digits are added)."""
+        return frozenset(self.data["numbers"].get("never_zero", {}).get("quantities", ()))
 
     # p
     @property
