@@ -28,6 +28,26 @@ def test_format_computes_p(capsys):
     assert capsys.readouterr().out == "*t*(38) = 2.14, *p* = .039\n"
 
 
+def test_format_warns_when_p_does_not_follow_from_the_statistic(capsys):
+    # the recomputed p of t(38) = 2.14 is .0388 (scipy.stats.t.sf; a handbook t table puts
+    # the two-sided .05 critical value of t(38) near 2.02, recalled from memory): p = .20 cannot be it
+    from scipy import stats
+
+    assert 2 * stats.t.sf(2.14, 38) == pytest.approx(0.0388, abs=5e-5)
+    assert main(["format", "t", "--stat", "2.14", "--df", "38", "--p", "0.2"]) == 0
+    out = capsys.readouterr()
+    assert out.out.strip() == "t(38) = 2.14, p = .200"  # rendered as given
+    assert "warning: p = 0.2 does not follow from t(38) = 2.14" in out.err
+    main(["format", "t", "--stat", "2.14", "--df", "38", "--p", "0.039"])
+    assert capsys.readouterr().err == ""
+    main(["format", "t", "--stat", "2.14", "--df", "38", "--p", "0.0195"])
+    assert "fits a one-sided test" in capsys.readouterr().err
+    main(["format", "t", "--stat", "2.14", "--df", "38", "--p", "0.0195", "--alternative", "greater"])
+    assert capsys.readouterr().err == ""
+    main(["format", "chi2", "--stat", "9.87", "--df", "2", "--n", "200", "--p", "0.007"])  # APA's example pair
+    assert capsys.readouterr().err == ""
+
+
 def test_format_negative_ci_and_style(capsys):
     assert main(["format", "welch-t", "--stat=-1.86", "--df", "17.78", "--p", "0.0796", "--style", "ama11"]) == 0
     assert capsys.readouterr().out == "t(17.78) = \u22121.86, P = .08\n"

@@ -56,6 +56,25 @@ def test_markdown_output_passes_the_audit(run):
     assert {"t", "F", "χ²", "r", "rs", "τb", "H", "U", "T", "z"} <= symbols
 
 
+def test_records_pass_the_p_check_and_a_retyped_p_does_not(run, capsys, tmp_path):
+    # every p statsetter computed follows from its statistic (scipy recomputes it); a p
+    # retyped wrong in the JSON is reported by name, and the rendering still happens
+    import json
+
+    records = run / "out" / "records.json"
+    assert cli(["render", str(records)]) == 0
+    assert capsys.readouterr().err == ""
+    data = json.loads(records.read_text(encoding="utf-8"))
+    items = data["records"] if isinstance(data, dict) else data
+    target = next(r for r in items if r.get("statistic", {}) and r["statistic"].get("symbol") == "t" and r.get("p", 1) < 0.5)
+    target["p"] = min(1.0, target["p"] * 10 + 0.2)
+    bad = tmp_path / "retyped.json"
+    bad.write_text(json.dumps(data), encoding="utf-8")
+    assert cli(["render", str(bad)]) == 0
+    err = capsys.readouterr().err
+    assert f"record {target['id']}" in err and "does not follow from t(" in err
+
+
 def test_rerun_after_the_data_change_updates_everything(run, capsys):
     data = run / "data" / "invented_driver_survey.csv"
     before_md = (run / "out" / "results.md").read_text(encoding="utf-8")

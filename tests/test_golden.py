@@ -84,7 +84,7 @@ GOLDEN = {
     # REPORTING-RULES Statistics in text: B, SE, β, t, p, CI for B (APA 7 ch. 6)
     'linear_coefficient': (
         '<i>B</i> = 0.42, 95% CI [0.22, 0.62], <i>SE</i> = 0.10, β = .31, <i>t</i>(196) = 4.20, <i>p</i> &lt; .001',
-        'Higher x was associated with higher y, holding the other predictors constant, B = 0.42, 95% CI [0.22, 0.62], SE = 0.10, β = .31, t(196) = 4.20, p < .001.',
+        'Higher values of x were associated with higher values of y, holding the other predictors constant, B = 0.42, 95% CI [0.22, 0.62], SE = 0.10, β = .31, t(196) = 4.20, p < .001.',
     ),
     # REPORTING-RULES Statistics in text: R² = .24, F(3, 196) = 20.61, p < .001 (APA 7 ch. 6)
     'linear_model': (
@@ -99,7 +99,7 @@ GOLDEN = {
     # REPORTING-RULES Statistics in text: effect sizes with CIs (JARS-Quant Table 1)
     'logistic_coefficient': (
         '<i>B</i> = 0.85, <i>SE</i> = 0.30, OR = 2.34, 95% CI [1.30, 4.21], <i>z</i> = 2.83, <i>p</i> = .005',
-        'Higher x was associated with higher odds of the event, B = 0.85, SE = 0.30, OR = 2.34, 95% CI [1.30, 4.21], z = 2.83, p = .005.',
+        'Higher values of x were associated with higher odds of the event, B = 0.85, SE = 0.30, OR = 2.34, 95% CI [1.30, 4.21], z = 2.83, p = .005.',
     ),
     # REPORTING-RULES p values: below .001 write p < .001 (APA 7 §6.36)
     'logistic_model': (

@@ -207,10 +207,13 @@ def _format_record(ns: argparse.Namespace):  # -> Result
     elif df:
         raise InputError("--df given without --stat")
     p = ns.p
-    if p is None and statistic is not None and symbol in ("t", "z", "F", "chi2", "r", "rs"):
-        from .pvalues import p_from_statistic
+    if statistic is not None and symbol in ("t", "z", "F", "chi2", "r", "rs"):
+        from .pvalues import p_from_statistic, p_mismatch
 
-        p = p_from_statistic(symbol, statistic.value, df, ns.alternative)
+        if p is None:
+            p = p_from_statistic(symbol, statistic.value, df, ns.alternative)
+        elif 0 <= p <= 1 and _has_scipy() and (why := p_mismatch(symbol, statistic.value, df, p, ns.alternative)):
+            print(f"statsetter format: warning: {why}; rendered as given", file=sys.stderr)
     effects = ()
     if ns.effect:
         name, eq, value = ns.effect.partition("=")
@@ -281,10 +284,46 @@ def _cmd_render(ns: argparse.Namespace) -> int:
     from .style import load_style
 
     style = load_style(ns.style)
-    lines = [render(record, ns.form, style).to(ns.to) for record in _read_records(ns.files)]
+    records = _read_records(ns.files)
+    for where, why in _p_mismatches(records):
+        print(f"statsetter render: warning: {where}: {why}", file=sys.stderr)
+    lines = [render(record, ns.form, style).to(ns.to) for record in records]
     sep = "\n\n" if ns.to in ("md", "tex") else "\n"
     _emit(sep.join(lines), ns.out, inputs=ns.files)
     return 0
+
+
+def _has_scipy() -> bool:
+    from importlib.util import find_spec
+
+    return find_spec("scipy") is not None
+
+
+_OWN_P = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1}  # statistics whose p follows from them and their df
+
+
+def _p_mismatches(records) -> list[tuple[str, str]]:  # type: ignore[no-untyped-def]
+    """Records whose p cannot come from their statistic (a hand-typed or
+    retyped number, say). Adjusted p values and post hoc pairs, whose p comes
+    from another distribution, are not checked."""
+    from .pvalues import p_mismatch
+
+    out: list[tuple[str, str]] = []
+    if not _has_scipy():  # the core install renders without scipy; the check needs it
+        return out
+    for i, r in enumerate(records, 1):
+        s = r.statistic
+        if s is None or r.p is None or r.kind == "posthoc_pair" or r.details.get("p_adjusted"):
+            continue
+        if _OWN_P.get(s.symbol) != len(s.df):
+            continue
+        try:
+            why = p_mismatch(s.symbol, s.value, s.df, r.p, r.alternative)
+        except (InputError, ValueError, ZeroDivisionError):
+            continue
+        if why:
+            out.append((f"record {r.id or i}", why))
+    return out
 
 
 def _read_records(names: Sequence[str]):  # type: ignore[no-untyped-def]

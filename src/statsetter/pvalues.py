@@ -6,7 +6,7 @@ import math
 
 from .errors import InputError
 
-__all__ = ["p_from_statistic"]
+__all__ = ["p_from_statistic", "p_mismatch"]
 
 
 def p_from_statistic(symbol: str, value: float, df: tuple[float, ...] = (), alternative: str = "two-sided") -> float:
@@ -54,3 +54,39 @@ def _two_or_one(upper: float, value: float, alternative: str) -> float:
     if (alternative == "greater") == (value >= 0):
         return float(upper)
     return float(1 - upper)
+
+
+def _half_unit(value: float) -> float:
+    """Half a unit in the last decimal place of a number as typed (its repr)."""
+    text = repr(float(value))
+    if "e" in text:
+        return 0.0
+    return 0.5 * 10.0 ** -len(text.partition(".")[2].rstrip("0") or "")
+
+
+def p_mismatch(symbol: str, value: float, df: tuple[float, ...], p: float, alternative: str = "two-sided") -> str | None:
+    """Why a given p cannot belong to the statistic, or None when it can.
+
+    Interval arithmetic on the decimals the numbers were typed with (as the
+    audit does): ``t = 2.14`` stands for 2.135 to 2.145, and ``p = .04`` for
+    .035 to .045; the p values of the statistic's interval must meet the
+    given one. A p that fits the one-sided test of a two-sided statement is
+    said as such."""
+    h = _half_unit(value)
+    ends = [value - h, value + h]
+    if symbol in ("r", "rs"):
+        ends = [min(max(e, -1.0), 1.0) for e in ends]
+    elif symbol in ("F", "chi2"):
+        ends = [max(e, 0.0) for e in ends]
+    computed = [p_from_statistic(symbol, e, df, alternative) for e in ends]
+    if alternative == "two-sided" and ends[0] < 0 < ends[1]:
+        computed.append(1.0)
+    low, high = min(computed), max(computed)
+    hp = _half_unit(p)
+    eps = 1e-12 + 1e-9 * max(p, high)  # exact records: agreement to the last few digits of a float
+    if low <= p + hp + eps and p - hp <= high + eps:
+        return None
+    shown = f"{symbol}({', '.join(f'{d:g}' for d in df)}) = {value:g}" if df else f"{symbol} = {value:g}"
+    if alternative == "two-sided" and symbol in ("t", "z", "r", "rs") and low / 2 <= p + hp + eps and p - hp <= high / 2 + eps:
+        return f"p = {p:g} fits a one-sided test of {shown} (two-sided p {low:.4g} to {high:.4g}); say --alternative if it was one"
+    return f"p = {p:g} does not follow from {shown}: recomputed p {low:.4g} to {high:.4g}"
