@@ -143,3 +143,19 @@ def test_output_never_overwrites_the_data(files, capsys):
     assert "overwrite an input" in capsys.readouterr().err
     assert copy.read_bytes() == before
     assert pd.read_csv(source).shape == (344, 7)
+
+
+def test_an_id_column_is_left_out_unless_named(tmp_path, capsys):
+    # a column with one text value per row is an identifier, not a variable: tabulating it
+    # would give one row per case (common practice: Table 1 describes variables, never IDs);
+    # leaving it out is said on standard error, and naming it brings it back
+    frame = pg.read_dataset("penguins")[["species", "island", "body_mass_g"]]
+    frame.insert(0, "bird", [f"P{i:03d}" for i in range(len(frame))])
+    path = tmp_path / "birds.csv"
+    frame.to_csv(path, index=False)
+    assert main(["describe", str(path), "--by", "species"]) == 0
+    out = capsys.readouterr()
+    assert "left out: bird: nominal" in out.err and "looks like an identifier" in out.err
+    assert "P001" not in out.out and "island" in out.out
+    assert main(["describe", str(path), "--vars", "bird,island"]) == 0
+    assert "P001" in capsys.readouterr().out

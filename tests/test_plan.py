@@ -103,3 +103,17 @@ def test_not_toml_and_no_data(folder):
         load_plan(write(folder, "title = 'x'\n"))
     with pytest.raises(PlanError, match="used twice"):
         load_plan(write(folder, GOOD + "\n[[analyses]]\nid = \"mass_by_sex\"\nkind = \"auto\"\noutcome = \"a\"\npredictor = \"b\"\n"))
+
+
+def test_a_descriptives_table_without_variables_leaves_out_an_id_column(folder, capsys):
+    # every column by default, but not one that looks like an identifier; the run says so
+    # (common practice: Table 1 describes variables, not case IDs)
+    frame = pg.read_dataset("penguins")[["species", "island", "sex"]]
+    frame.insert(0, "bird", [f"P{i:03d}" for i in range(len(frame))])
+    frame.to_csv(folder / "birds.csv", index=False)
+    path = write(folder, '[data]\npath = "birds.csv"\n\n[[tables]]\nkind = "descriptives"\nby = "sex"\n\n[outputs]\nfolder = "out"\nmd = "t.md"\n')
+    result = run_plan(load_plan(path))
+    assert any(n.startswith("tables[0]: left out bird: nominal") for n in result.notes)
+    assert main(["run", str(path)]) == 0
+    assert "left out bird" in capsys.readouterr().out
+    assert "P001" not in (folder / "out" / "t.md").read_text(encoding="utf-8")

@@ -411,6 +411,8 @@ def _cmd_describe(ns: argparse.Namespace) -> int:
     )
     for level in result.levels:
         sys.stderr.write(("warning: " if level.weak else "level: ") + level.describe() + "\n")
+    for level in result.left_out:
+        sys.stderr.write(f"left out: {level.describe()}; name it in --vars to describe it\n")
     table = result.table(style, number=ns.number, title=ns.title)
     if fmt == "docx":
         import docx

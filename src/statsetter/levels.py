@@ -34,6 +34,7 @@ class LevelReport:
     source: Source
     reason: str
     weak: bool = False
+    identifier: bool = False  # text with nearly one value per row: an ID or free text, not a variable to tabulate
 
     @property
     def dichotomous(self) -> bool:
@@ -66,7 +67,7 @@ def infer_level(series: "pd.Series") -> LevelReport:
         distinct = int(values.nunique())
         reason = f"{distinct} distinct values, not numeric ({series.dtype})"
         if distinct > 2 and len(values) and distinct > max(20, len(values) // 2):
-            return LevelReport(name, "nominal", "inferred", reason + "; looks like an identifier or free text", weak=True)
+            return LevelReport(name, "nominal", "inferred", reason + "; looks like an identifier or free text", weak=True, identifier=True)
         return LevelReport(name, "nominal", "inferred", reason)
     x = series.to_numpy(dtype=float, na_value=np.nan)
     x = x[~np.isnan(x)]

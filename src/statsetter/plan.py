@@ -311,9 +311,10 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
         found = [_with_id(r, analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}") for k, r in enumerate(found)]
         by_id[analysis["id"]] = found
         records += found
-    tables = [_table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style) for i, t in enumerate(plan.tables)]
+    notes: list[str] = []
+    tables = [_table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style, notes) for i, t in enumerate(plan.tables)]
     tables = [t.with_number(n) for n, t in enumerate(tables, 1)]
-    return RunResult(records, tables, [], [])
+    return RunResult(records, tables, [], notes)
 
 
 def _key_of(entry: dict[str, Any], message: str) -> str | None:
@@ -346,7 +347,7 @@ def _style(plan: Plan) -> "Style":
         raise PlanError(f"{plan.where('style')}: {exc}") from None
 
 
-def _table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style):  # type: ignore[no-untyped-def]
+def _table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style, notes):  # type: ignore[no-untyped-def]
     from .analyses.descriptives import describe
     from .rendering.record_tables import results_table
 
@@ -358,6 +359,7 @@ def _table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alp
                 weights=t.get("weights"), tests=bool(t.get("tests")), smd=bool(t.get("smd")), suppress_below=t.get("suppress_below"),
                 percent_of=t.get("percent_of", "valid"), alphas={k: v for k, v in alphas.items() if k in (t.get("variables") or frame.columns)},
             )
+            notes += [f"tables[{i}]: left out {r.describe()}; list it in variables to describe it" for r in d.left_out]
             return d.table(style, title=t.get("title"))
         if t["kind"] == "results":
             chosen = [r for ref in t["analyses"] for r in by_id[ref]]

@@ -90,6 +90,7 @@ class Description:
     suppress_below: int | None = None
     dropped_no_group: int = 0
     notes: tuple[str, ...] = field(default=())
+    left_out: tuple[LevelReport, ...] = field(default=())  # columns not described because they look like identifiers
 
     @property
     def levels(self) -> list[LevelReport]:
@@ -149,6 +150,12 @@ def describe(
         raise InputError(f"suppress_below: {suppress_below!r}; give a whole number of 2 or more")
     chosen = _contents(show)
     found = resolve_levels(df, names, levels, metadata_levels)
+    left_out: tuple[LevelReport, ...] = ()
+    if variables is None:  # every column by default, but not an ID column: one row per case would identify people
+        left_out = tuple(found[n] for n in names if found[n].identifier)
+        names = [n for n in names if not found[n].identifier]
+        if not names:
+            raise InputError(f"describe: every column looks like an identifier ({', '.join(r.name for r in left_out)}); name the variables")
 
     w = _weights(df, weights) if weights is not None else None
     if w is not None and tests:
@@ -204,6 +211,7 @@ def describe(
         percent_of=percent_of,
         suppress_below=suppress_below,
         dropped_no_group=dropped,
+        left_out=left_out,
     )
 
 
