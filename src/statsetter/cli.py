@@ -208,12 +208,10 @@ def _format_record(ns: argparse.Namespace):  # -> Result
         raise InputError("--df given without --stat")
     p = ns.p
     if statistic is not None and symbol in ("t", "z", "F", "chi2", "r", "rs"):
-        from .pvalues import p_from_statistic, p_mismatch
+        from .pvalues import p_from_statistic
 
         if p is None:
             p = p_from_statistic(symbol, statistic.value, df, ns.alternative)
-        elif 0 <= p <= 1 and _has_scipy() and (why := p_mismatch(symbol, statistic.value, df, p, ns.alternative)):
-            print(f"statsetter format: warning: {why}; rendered as given", file=sys.stderr)
     effects = ()
     if ns.effect:
         name, eq, value = ns.effect.partition("=")
@@ -247,7 +245,7 @@ def _format_record(ns: argparse.Namespace):  # -> Result
             groups.append(GroupSummary(parts[0], n=int(parts[1]), mean=float(parts[2]), sd=float(parts[3])))
         except ValueError:
             raise InputError(f"--group: {item!r} has a value that is not a number") from None
-    return Result(
+    record = Result(
         kind=kind,
         statistic=statistic,
         p=p,
@@ -260,6 +258,10 @@ def _format_record(ns: argparse.Namespace):  # -> Result
         details=details,
         alpha=ns.alpha,
     )
+    if ns.p is not None:  # a valid record whose p was given: does it follow from the statistic?
+        for _, why in _p_mismatches([record]):
+            print(f"statsetter format: warning: {why}; rendered as given", file=sys.stderr)
+    return record
 
 
 def _emit(text: str, out: str | None, inputs: Sequence[str] = ()) -> None:

@@ -152,7 +152,7 @@ class StyledText:
             raise ValueError(f"<{tag}> is never closed")
         if pos < len(markup):
             out.append(markup[pos:])
-        spans.sort(key=lambda s: (s.start, -s.end))
+        spans.sort(key=_span_order)
         return cls("".join(out), spans)
 
     @staticmethod
