@@ -77,8 +77,18 @@ def _groups(rng: random.Random) -> tuple[int, int, float, float]:
     return n1, n2, t, float(2 * stats.t.sf(abs(t), n1 + n2 - 2))
 
 
+def _coefficient(rng: random.Random) -> tuple[float, float, int]:
+    se = round(rng.uniform(0.05, 0.6), 2)
+    b = round(rng.choice([-1, 1]) * se * rng.uniform(0.3, 5), 2)
+    return b, se, rng.randint(40, 400)
+
+
 def clean(rng: random.Random) -> str:
-    kind = rng.choice(["t", "t2", "welch", "tcohen", "tgroups", "F", "F2", "chi", "chi2", "r", "rci", "rs", "z", "U", "H", "desc", "descp"])
+    kind = rng.choice(["t", "t2", "welch", "tcohen", "tgroups", "coef", "F", "F2", "chi", "chi2", "r", "rci", "rs", "z", "U", "H", "desc", "descp"])
+    if kind == "coef":  # a regression coefficient: t = B / SE
+        b, se, df = _coefficient(rng)
+        t = b / se
+        return f"B = {_num(b)}, SE = {_num(se)}, t({df}) = {_num(t)}, {_p(float(2 * stats.t.sf(abs(t), df)))}"
     if kind == "tgroups":  # group sizes in the sentence: d and g follow from t
         n1, n2, t, p = _groups(rng)
         d = t * math.sqrt(1 / n1 + 1 / n2)
@@ -200,6 +210,10 @@ def planted(rng: random.Random, code: str) -> Planted:
         return Planted(text, frozenset() if ok else frozenset({"grim"}))
     if code == "italics":
         return Planted(f"t({D}) = {T}, {_p(p)}", frozenset({"italics"}), docx_only=True)
+    if code == "coefficient-inconsistent":  # t half as large again as B / SE
+        b, se, df = _coefficient(rng)
+        t = b / se * 1.5
+        return one(f"B = {_num(b)}, SE = {_num(se)}, t({df}) = {_num(t)}, {_p(float(2 * stats.t.sf(abs(t), df)))}")
     if code == "d-inconsistent":  # d half as large again as t and the group sizes give
         n1, n2, t, p = _groups(rng)
         d = t * math.sqrt(1 / n1 + 1 / n2) * 1.5
@@ -210,7 +224,7 @@ def planted(rng: random.Random, code: str) -> Planted:
 PLANTED_CODES = [
     "p-inconsistent", "decision-error", "one-sided", "impossible-r", "impossible-p", "negative-statistic", "negative-sd",
     "ci-reversed", "ci-excludes-estimate", "df-not-integer", "leading-zero", "missing-leading-zero", "decimals",
-    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics", "d-inconsistent",
+    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics", "d-inconsistent", "coefficient-inconsistent",
 ]
 
 

@@ -485,3 +485,23 @@ def test_d_from_t_never_flags_a_correct_d(t, n1, n2, t_decimals, d_decimals):
     text = f"(n = {n1}, n = {n2}), t({n1 + n2 - 2}) = {t:.{t_decimals}f}, p = .5, d = {d:.{d_decimals}f}"
     found = [c for e in audit_units([Unit("test", text)]) for c in e.codes]
     assert "d-inconsistent" not in found, text
+
+
+def test_coefficient_t_against_b_and_se_on_open_data():
+    # reference: statsmodels OLS on its bundled 'fair' data (affairs on rate_marriage, age,
+    # yrs_married); each coefficient printed as a manuscript would, B and SE to two or three
+    # decimals; t = B / SE holds within the printed precision, and a retyped t is flagged
+    import statsmodels.api as sm
+
+    fair = sm.datasets.fair.load_pandas().data
+    fit = sm.OLS(fair.affairs, sm.add_constant(fair[["rate_marriage", "age", "yrs_married"]])).fit()
+    df = int(fit.df_resid)
+    for name in ("rate_marriage", "age", "yrs_married"):
+        b, se, t = fit.params[name], fit.bse[name], fit.tvalues[name]
+        good = f"For {name}, B = {b:.3f}, SE = {se:.3f}, t({df}) = {t:.2f}, p = {max(fit.pvalues[name], 0.001):.3f}."
+        assert "coefficient-inconsistent" not in codes(good), good
+        bad = f"For {name}, B = {b:.3f}, SE = {se:.3f}, t({df}) = {t * 1.3:.2f}, p = .001."
+        assert "coefficient-inconsistent" in codes(bad), bad
+    # a coefficient from an earlier sentence, or an SE printed as zero, is not used
+    assert "coefficient-inconsistent" not in codes("B = 0.42, SE = 0.10. Then t(30) = 1.20, p = .240.")
+    assert "coefficient-inconsistent" not in codes("B = 0.00, SE = 0.00, t(30) = 1.20, p = .240")

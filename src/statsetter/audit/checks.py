@@ -43,6 +43,10 @@ CODES: dict[str, tuple[str, str]] = {
     "hyphen-minus": ("a hyphen or dash where the style has a minus sign", "Numbers: true minus sign (practice; APA examples)"),
     "italics": ("a Latin symbol not in italics, or a Greek one in italics", "Statistics in text: italic symbols (APA 7 §6.45)"),
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
+    "coefficient-inconsistent": (
+        "t (or z) does not equal B / SE",
+        "Regression: coefficients as B, SE, β, t, p (REPORTING-RULES); the Wald statistic of a coefficient is B / SE (practice)",
+    ),
     "d-inconsistent": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
@@ -368,6 +372,30 @@ def effect_from_t(rep: Reported, sizes: tuple[int, int] | None = None) -> list[F
                 )
             )
     return out
+
+
+def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None) -> list[Finding]:
+    """A coefficient's t (or z) against B / SE, with interval arithmetic on
+    the printed precision of all three."""
+    if coefficient is None or rep.symbol not in ("t", "z") or rep.value is None or rep.op != "=":
+        return []
+    b, se = coefficient
+    se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
+    if se_low <= 0:
+        return []  # an SE printed as 0.00 bounds nothing
+    b_low, b_high = b.value - b.half_unit, b.value + b.half_unit
+    corners = [b_low / se_low, b_low / se_high, b_high / se_low, b_high / se_high]
+    ratio = (min(corners), max(corners))
+    stat = (rep.value.value - rep.value.half_unit, rep.value.value + rep.value.half_unit)
+    if _overlap(ratio, stat):
+        return []
+    return [
+        Finding(
+            "coefficient-inconsistent",
+            f"{rep.symbol} = {rep.value.text} is not B / SE: B = {b.text} and SE = {se.text} give {ratio[0]:.2f} to {ratio[1]:.2f}.",
+            f"B = {b.text}, SE = {se.text}, {rep.symbol} = {rep.value.text}",
+        )
+    ]
 
 
 # -- the record behind the suggestion -----------------------------------------

@@ -162,6 +162,8 @@ class _Patterns:
             r"(?P<name>" + "|".join(f"(?:{p})" for p, _ in _EFFECT_NAMES) + rf")\s*(?P<op>=)\s*(?P<num>{num})"
         )
         self.df = re.compile(rf"(?<![\w])df\s*=\s*(?P<num>{num})")
+        self.coef_b = re.compile(rf"(?<![\w])B\s*=\s*(?P<num>{num})")
+        self.coef_se = re.compile(rf"(?<![\w])SE\s*=\s*(?P<num>{num})")
         self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*=\s*(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n")
         self.operator = re.compile(r"\s*(?:=|<|>|≤|≥)\s*")
@@ -281,6 +283,25 @@ def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int,
     if any(n is None or n.value < 1 for n in sizes):
         return None
     return int(sizes[0].value), int(sizes[1].value)  # type: ignore[union-attr]
+
+
+def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str = ".") -> tuple[Number, Number] | None:
+    """The B and SE a sentence gives before a t or z (``B = 0.42, SE = 0.10,
+    β = .31, t(196) = 4.20``): the last of each between ``since`` (the end of
+    the statistic before) and the statistic, within its sentence."""
+    pat = _patterns(decimal_mark)
+    start = since
+    for b in pat.boundary.finditer(text, since, rep.start):
+        start = b.end()
+    found = {}
+    for name, regex in (("B", pat.coef_b), ("SE", pat.coef_se)):
+        matches = list(regex.finditer(text, start, rep.start))
+        if not matches:
+            return None
+        found[name] = pat.to_number(matches[-1].group("num"), matches[-1].start("num"))
+    if found["B"] is None or found["SE"] is None:
+        return None
+    return found["B"], found["SE"]
 
 
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥]|(?<![\w.])n\.?\s?s\b")

@@ -19,8 +19,8 @@ from ..rendering.sentences import render
 from ..rendering.styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, Finding, consistency, effect_from_t, grim, impossible, style_findings, to_record
-from .parsing import Reported, find_statistics, group_sizes
+from .checks import CODES, Finding, coefficient_ratio, consistency, effect_from_t, grim, impossible, style_findings, to_record
+from .parsing import Reported, coefficient_before, find_statistics, group_sizes
 from .reading import Unit, read_units
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "annotate", "CAUTION"]
@@ -77,10 +77,15 @@ def audit_units(
     mark = resolved.decimal_mark
     entries = []
     for unit in units:
+        previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
         for rep in find_statistics(unit.text, mark):
             findings = impossible(rep) + consistency(rep, alpha) + style_findings(rep, resolved, alpha, unit.text, unit.italic)
             if rep.symbol == "t" and rep.effects:
                 findings += effect_from_t(rep, group_sizes(unit.text, rep, mark))
+            if rep.symbol in ("t", "z"):
+                findings += coefficient_ratio(rep, coefficient_before(unit.text, rep, previous_end, mark))
+            if rep.symbol is not None:
+                previous_end = rep.end
             if grim_items:
                 findings += grim(rep, grim_items)
             if unit.part:  # a Word paragraph
