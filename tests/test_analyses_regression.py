@@ -89,3 +89,42 @@ def test_logistic_against_formula_api(penguins):
 def test_bad_input(penguins, call, message):
     with pytest.raises(InputError, match=message):
         call(penguins)
+
+
+def test_regression_tables_against_the_formula_api(penguins):
+    # every cell of the coefficients table is statsmodels' number (formula interface) put
+    # through the style's number engine; the table has the APA anatomy (REPORTING-RULES
+    # "Tables": a spanner over the CI limits, abbreviations and the model's fit in the note)
+    from statsetter import load_style
+    from statsetter.rendering.regression_tables import regression_table
+    from statsetter.style import numbers_for
+
+    num = numbers_for(load_style("apa7"))
+    records = linear_regression(penguins, "body_mass_g", ["flipper_length_mm", "bill_depth_mm"])
+    data = penguins.dropna(subset=["body_mass_g", "flipper_length_mm", "bill_depth_mm"])
+    ref = smf.ols("body_mass_g ~ flipper_length_mm + bill_depth_mm", data=data).fit()
+    ci = ref.conf_int()
+    table = regression_table(records, "apa7")
+    assert [c.head.text for c in table.columns] == ["B", "SE", "LL", "UL", "β", "t", "p"]
+    assert table.spanners[0].label.text == "95% CI" and (table.spanners[0].start, table.spanners[0].end) == (2, 4)
+    for row, term in zip(table.rows, ("flipper_length_mm", "bill_depth_mm")):
+        cells = [c.text for c in row.cells]
+        assert cells[0] == num.number(ref.params[term], "B") and cells[1] == num.number(ref.bse[term], "SE")
+        assert (cells[2], cells[3]) == num.interval(ci.loc[term, 0], ci.loc[term, 1], "B")
+        assert cells[5] == num.number(ref.tvalues[term], "t")
+        assert cells[6] == "< .001" or cells[6] == num.p(ref.pvalues[term])[1]
+    note = table.general_note.text
+    assert f"N = {int(ref.nobs)}." in note and "LL = lower limit" in note and f"F(2, {int(ref.df_resid)})" in note
+
+    model, *coefs = logistic_regression(penguins, "sex", ["bill_depth_mm", "flipper_length_mm"])
+    data = penguins.dropna(subset=["sex", "bill_depth_mm", "flipper_length_mm"]).assign(male=lambda d: (d.sex == "male").astype(int))
+    lref = smf.logit("male ~ bill_depth_mm + flipper_length_mm", data=data).fit(disp=False)
+    lci = lref.conf_int()
+    logistic = regression_table([model, *coefs], "apa7")
+    assert [c.head.text for c in logistic.columns] == ["B", "SE", "OR", "LL", "UL", "z", "p"]
+    assert logistic.spanners[0].label.text == "95% CI for OR"
+    first = [c.text for c in logistic.rows[0].cells]
+    assert first[2] == num.number(math.exp(lref.params["bill_depth_mm"]), "OR")
+    assert (first[3], first[4]) == num.interval(math.exp(lci.loc["bill_depth_mm", 0]), math.exp(lci.loc["bill_depth_mm", 1]), "OR", 1.0)
+    with pytest.raises(InputError, match="one linear or one logistic regression"):
+        regression_table([model, records[1]], "apa7")

@@ -117,3 +117,12 @@ def test_a_descriptives_table_without_variables_leaves_out_an_id_column(folder, 
     assert main(["run", str(path)]) == 0
     assert "left out bird" in capsys.readouterr().out
     assert "P001" not in (folder / "out" / "t.md").read_text(encoding="utf-8")
+
+
+def test_a_regression_table_needs_a_regression(folder, capsys):
+    # the plan names the table when its analysis is not a regression
+    text = GOOD.replace('[[tables]]\nkind = "descriptives"\nvariables = ["body_mass_g", "species"]\nby = "sex"\n',
+                        '[[tables]]\nkind = "regression"\nanalysis = "mass_by_sex"\n')
+    assert 'kind = "regression"' in text
+    with pytest.raises(PlanError, match=r"\(table 1\): regression table: give the records of one linear or one logistic regression"):
+        run_plan(load_plan(write(folder, text)))

@@ -22,7 +22,7 @@ kind = "anova_oneway"                  # a statsetter.analyses function, or "aut
 outcome = "fatigue"
 group = "shift"
 [[tables]]
-kind = "descriptives"                  # or "results" (analyses = [ids]) or "correlations"
+kind = "descriptives"                  # or "results" (analyses = [ids]), "correlations" or "regression" (analysis = id)
 variables = ["age", "fatigue"]
 by = "shift"
 [outputs]
@@ -72,6 +72,7 @@ _TABLE = {
     "descriptives": {"kind", "id", "title", "variables", "by", "tests", "smd", "show", "weights", "suppress_below", "percent_of"},
     "results": {"kind", "id", "title", "analyses"},
     "correlations": {"kind", "id", "title", "analysis"},
+    "regression": {"kind", "id", "title", "analysis"},
 }
 _OUTPUTS = {"folder", "docx", "md", "tex", "html", "json"}
 _CHAPTER = {"path", "out"}
@@ -364,6 +365,10 @@ def _table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alp
         if t["kind"] == "results":
             chosen = [r for ref in t["analyses"] for r in by_id[ref]]
             return results_table(chosen, style, title=t.get("title", "Results"))
+        if t["kind"] == "regression":
+            from .rendering.regression_tables import regression_table
+
+            return regression_table(by_id[t["analysis"]], style, title=t.get("title"))
         from .rendering.correlation_tables import correlation_table
 
         if t["analysis"] not in matrices:
