@@ -64,6 +64,33 @@ def test_render_files(tmp_path, capsys):
     assert "*r*(98) = .32" in text and "χ^2^(2, *N* = 200) = 9.87" in text
 
 
+def test_render_tables_from_records(tmp_path, capsys):
+    # a co-author's records as one table: a results table (the p under a p head, without the symbol,
+    # as a column head names its quantity: practice) and a regression's coefficients table, in text and Word
+    import pingouin as pg
+
+    from statsetter.analyses import linear_regression
+    from test_docx import pdf_text
+
+    records = tmp_path / "model.json"
+    records.write_text(dump_records(linear_regression(pg.read_dataset("penguins"), "body_mass_g", ["flipper_length_mm", "sex"])))
+    assert main(["render", str(records), "--table", "results", "--to", "md"]) == 0
+    out = capsys.readouterr().out
+    assert "| *p* |" in out and "| < .001 |" in out and "*p* <" not in out
+    assert main(["render", str(records), "--table", "regression", "--title", "Body mass"]) == 0
+    out = capsys.readouterr().out
+    assert "Body mass" in out and "Reference categories: sex = female." in out and "flipper_length_mm" in out
+    word = tmp_path / "table.docx"
+    assert main(["render", str(records), "--table", "regression", "--out", str(word)]) == 0
+    assert "Linear Regression" in pdf_text(word)
+    assert main(["render", str(records), "--title", "x"]) == 2
+    assert "a title is for a table" in capsys.readouterr().err
+    single = tmp_path / "pearson.json"
+    single.write_text(dump_records([EXAMPLES["pearson"]]))
+    assert main(["render", str(single), "--table", "regression"]) == 2
+    assert "one linear or one logistic regression" in capsys.readouterr().err
+
+
 def test_render_refuses_to_overwrite_input(tmp_path, capsys):
     a = tmp_path / "a.json"
     a.write_text(dump_records([EXAMPLES["pearson"]]))

@@ -88,7 +88,7 @@ def test_fill_everywhere(chapter, tmp_path):
     # [[id|table]]: a results table after the paragraph, the marker text gone
     assert d.paragraphs[2].text == "Table 2 shows it: "
     t = d.tables[1]
-    assert [c.text for c in t.rows[1].cells] == ["score_diff", "t(38) = 2.14", "p = .039", "d = 0.68", "[0.04, 1.31]"]
+    assert [c.text for c in t.rows[1].cells] == ["score_diff", "t(38) = 2.14", ".039", "d = 0.68", "[0.04, 1.31]"]  # the p symbol is in the head (practice: a column head names its quantity)
     assert "r(98) = .32" in d.sections[0].header.paragraphs[0].text
     assert "r(98) = .32" in d.sections[0].footer.paragraphs[0].text
     footnotes = zipfile.ZipFile(out).read("word/footnotes.xml").decode()

@@ -97,6 +97,9 @@ def _build_parser() -> argparse.ArgumentParser:
     r = sub.add_parser("render", help="render JSON files of records in one style")
     r.add_argument("files", nargs="+", metavar="FILE", help="JSON files of records (from several authors, say)")
     style_options(r)
+    r.add_argument("--table", choices=("results", "regression"), help="lay the records out as one table instead: a results table "
+                   "(a row per record) or a regression's coefficients table; --out FILE.docx writes Word")
+    r.add_argument("--title", help="the table's title")
 
     fl = sub.add_parser(
         "fill",
@@ -289,6 +292,10 @@ def _cmd_render(ns: argparse.Namespace) -> int:
     records = _read_records(ns.files)
     for where, why in _p_mismatches(records):
         print(f"statsetter render: warning: {where}: {why}", file=sys.stderr)
+    if ns.table:
+        return _render_table(ns, records, style)
+    if ns.title:
+        raise InputError("--title: a title is for a table; add --table results or --table regression")
     lines = [render(record, ns.form, style).to(ns.to) for record in records]
     sep = "\n\n" if ns.to in ("md", "tex") else "\n"
     _emit(sep.join(lines), ns.out, inputs=ns.files)
@@ -326,6 +333,31 @@ def _p_mismatches(records) -> list[tuple[str, str]]:  # type: ignore[no-untyped-
         if why:
             out.append((f"record {r.id or i}", why))
     return out
+
+
+def _render_table(ns: argparse.Namespace, records, style) -> int:  # type: ignore[no-untyped-def]
+    if ns.table == "regression":
+        from .rendering.regression_tables import regression_table
+
+        table = regression_table(records, style, title=ns.title, number=1)
+    else:
+        from .rendering.record_tables import results_table
+
+        table = results_table(records, style, title=ns.title or "Results").with_number(1)
+    if ns.out and ns.out.lower().endswith(".docx"):
+        import docx
+
+        from .export.docx_writer import add_table, save_document
+
+        document = docx.Document()
+        add_table(document, table, style)
+        save_document(document, ns.out, inputs=ns.files)
+        print(f"wrote {ns.out}")
+        return 0
+    from .export.text_tables import write_table
+
+    _emit(write_table(table, ns.to), ns.out, inputs=ns.files)
+    return 0
 
 
 def _read_records(names: Sequence[str]):  # type: ignore[no-untyped-def]

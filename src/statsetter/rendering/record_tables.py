@@ -18,6 +18,17 @@ def _cell(markup: Markup | str) -> StyledText:
     return StyledText.from_markup(str(markup))
 
 
+def _p_cell(h, r: Result) -> StyledText:  # type: ignore[no-untyped-def]
+    """The p under a *p* head: ``.039`` or ``< .001`` (the symbol is in the head);
+    an adjusted p says so."""
+    if r.p is None:
+        return StyledText()
+    op, text = h.num.p(r.p, r.alpha)
+    shown = text if op == "=" else f"{op} {text}"
+    adjusted = r.details.get("p_adjusted")
+    return StyledText(f"{shown} ({adjusted})" if adjusted else shown)
+
+
 def _limits(h, ci, quantity: str, null: float) -> StyledText:  # type: ignore[no-untyped-def]
     """``[low, high]`` under a ``95% CI`` head, decision-preserving like every CI."""
     if ci is None:
@@ -43,7 +54,7 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
                 StyledText(label),
                 (
                     _cell(h.stat(r)),
-                    _cell(h.pv(r)),
+                    _p_cell(h, r),
                     _cell(h.eff(r, with_ci=False) if e is not None else h.est(r, with_ci=False, symbol=r.estimate.name if r.estimate else None)),
                     _limits(h, ci, e.name if e is not None else (r.estimate.name if r.estimate else "default"), e.null if e is not None else 0.0),
                 ),
