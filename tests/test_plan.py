@@ -9,6 +9,7 @@ from __future__ import annotations
 
 import json
 
+import docx
 import pingouin as pg
 import pytest
 
@@ -126,3 +127,17 @@ def test_a_regression_table_needs_a_regression(folder, capsys):
     assert 'kind = "regression"' in text
     with pytest.raises(PlanError, match=r"\(table 1\): regression table: give the records of one linear or one logistic regression"):
         run_plan(load_plan(write(folder, text)))
+
+
+def test_an_automatic_test_choice_is_shown_in_the_run_and_the_section(folder, capsys):
+    # automatic choices are shown, never silent (the project's cautions): the run summary and
+    # every results section name the test chosen and why
+    text = GOOD.replace('kind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"', 'kind = "auto"\noutcome = "body_mass_g"\npredictor = "species"')
+    assert 'kind = "auto"' in text
+    path = write(folder, text)
+    assert main(["run", str(path)]) == 0
+    assert "mass_by_sex: Chosen automatically: one-way ANOVA" in capsys.readouterr().out
+    md = (folder / "out" / "results.md").read_text(encoding="utf-8")
+    assert "*Note on mass\\_by\\_sex.* Chosen automatically: one-way ANOVA" in md and "Check it against the design." in md
+    word = "\n".join(p.text for p in docx.Document(str(folder / "out" / "results.docx")).paragraphs)
+    assert "Note on mass_by_sex. Chosen automatically" in word

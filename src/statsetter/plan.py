@@ -315,6 +315,7 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     notes: list[str] = []
     tables = [_table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style, notes) for i, t in enumerate(plan.tables)]
     tables = [t.with_number(n) for n, t in enumerate(tables, 1)]
+    notes += [f"{r.id}: {note.text}" for r in records for note in r.notes if note.kind == "choice"]  # automatic choices, never silent
     return RunResult(records, tables, [], notes)
 
 

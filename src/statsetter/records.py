@@ -297,7 +297,10 @@ class Variable:
 @dataclass(frozen=True, slots=True)
 class Note:
     """A note attached to a result: an assumption check, a correction applied,
-    missing values dropped, an automatic choice, a method, reduced precision."""
+    missing values dropped, an automatic choice, a method, reduced precision.
+    A ``choice`` is one statsetter made for the author (a test picked from the
+    levels of measurement, a variant deduced from the df); results sections
+    and ``statsetter run`` list every one, so that none is silent."""
 
     kind: NoteKind
     text: str

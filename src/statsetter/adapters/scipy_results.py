@@ -35,7 +35,7 @@ def _t_variant(df: float, ctx: Context) -> tuple[str, Note]:
     if given is not None:
         if given not in ("welch", "student"):
             raise InputError(f"variant: {given!r} is not welch or student")
-        return given, Note("choice", f"{'Welch' if given == 'welch' else 'Student'}'s t test (as given).")
+        return given, Note("method", f"{'Welch' if given == 'welch' else 'Student'}'s t test (as given).")
     if integral(df):
         return "student", Note("choice", "Student's t test (equal variances assumed), as the whole-number df shows; pass variant='welch' if it was Welch's.")
     return "welch", Note("choice", "Welch's t test (variances not assumed equal), as the fractional df shows.")

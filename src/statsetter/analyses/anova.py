@@ -59,7 +59,7 @@ def anova_oneway(
         ),
         variables=c.variables({"outcome": outcome, "group": group}, labels),
         notes=c.notes(
-            Note("choice", "Welch's F test (variances not assumed equal)." if variant == "welch" else "Classic F test (equal variances assumed)."),
+            Note("method", "Welch's F test (variances not assumed equal)." if variant == "welch" else "Classic F test (equal variances assumed)."),
             missing,
         ),
         details={"variant": variant},

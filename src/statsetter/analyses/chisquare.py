@@ -66,7 +66,7 @@ def chi_square(
     ci = Interval(level, math.sqrt((lo + res.dof) / (n * m)) if lo > 0 else 0.0, min(1.0, math.sqrt((hi + res.dof) / (n * m))))
     if ci.low > value:
         ci = Interval(level, 0.0, ci.high)
-    notes = [Note("choice", "Yates' continuity correction applied." if yates and res.dof == 1 else "No continuity correction.")]
+    notes = [Note("method", "Yates' continuity correction applied." if yates and res.dof == 1 else "No continuity correction.")]
     small = int((res.expected_freq < 5).sum())
     if small:
         notes.append(Note("assumption", f"{small} of {r * k} cells have expected counts below 5 (smallest {res.expected_freq.min():.4g})."))

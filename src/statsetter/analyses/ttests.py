@@ -136,7 +136,7 @@ def t_independent(
         extra={"F": lev_f, "df": [1, n1 + n2 - 2], "p": lev_p},
     )
     choice = Note(
-        "choice",
+        "method",
         "Welch's t test (variances not assumed equal)." if variant == "welch" else "Student's t test (equal variances assumed).",
     )
     glabels = [str(x) for x in levels]

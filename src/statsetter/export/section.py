@@ -14,7 +14,7 @@ from ..rendering.tables import TableModel
 from ..style.profile import Style
 from .text_tables import write_table
 
-__all__ = ["CAUTION", "section_text", "write_section"]
+__all__ = ["CAUTION", "automatic_choices", "section_text", "write_section"]
 
 CAUTION = (
     "Prepared with statsetter. Check every result against the analysis output, the target journal's instructions, "
@@ -22,14 +22,27 @@ CAUTION = (
 )
 
 
+def automatic_choices(records: Sequence[Result]) -> list[StyledText]:
+    """One paragraph per choice statsetter made for the author (a test chosen
+    by the levels of measurement), so that no choice is silent."""
+    out = []
+    for r in records:
+        for note in r.notes:
+            if note.kind == "choice":
+                out.append(StyledText.styled(f"Note on {r.id or r.kind}.", "i") + f" {note.text} Check it against the design.")
+    return out
+
+
 def section_text(records: Sequence[Result], tables: Sequence[TableModel], style: Style, title: str, fmt: str) -> str:
     """The section as Markdown (``md``), HTML (``html``) or LaTeX (``tex``)."""
     sentences = [render(r, "sentence", style).to(fmt) for r in records]
-    blocks = [write_table(t, fmt) for t in tables]
+    blocks = [write_table(t, fmt) for t in tables] + [c.to(fmt) for c in automatic_choices(records)]
     if fmt == "md":
         return "\n\n".join([f"# {title}", *sentences, *blocks, f"*{CAUTION}*"]) + "\n"
     if fmt == "html":
-        body = "\n".join([f"<h1>{html.escape(title)}</h1>", *(f"<p>{s}</p>" for s in sentences), *blocks, f"<p><i>{html.escape(CAUTION)}</i></p>"])
+        choices = [f"<p>{c.to('html')}</p>" for c in automatic_choices(records)]
+        body = "\n".join([f"<h1>{html.escape(title)}</h1>", *(f"<p>{s}</p>" for s in sentences), *blocks[: len(tables)], *choices,
+                           f"<p><i>{html.escape(CAUTION)}</i></p>"])
         return f'<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>{html.escape(title)}</title></head><body>\n{body}\n</body></html>\n'
     if fmt == "tex":
         head = "\\documentclass{article}\n\\usepackage{booktabs}\n\\usepackage[T1]{fontenc}\n\\usepackage[utf8]{inputenc}\n\\begin{document}\n"
@@ -52,6 +65,8 @@ def write_section(
             from .docx_writer import add_runs, results_document, save_document
 
             document = results_document(records, style, title=title, tables=tables)
+            for choice in automatic_choices(records):
+                add_runs(document.add_paragraph(), choice)
             add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
             save_document(document, path, inputs=inputs)
         else:
