@@ -159,3 +159,10 @@ def test_an_id_column_is_left_out_unless_named(tmp_path, capsys):
     assert "P001" not in out.out and "island" in out.out
     assert main(["describe", str(path), "--vars", "bird,island"]) == 0
     assert "P001" in capsys.readouterr().out
+    # a case number (every integer from 1 to n once) is an identifier too, not a ratio variable
+    frame.insert(0, "case", range(1, len(frame) + 1))
+    frame.to_csv(path, index=False)
+    assert main(["describe", str(path)]) == 0
+    out = capsys.readouterr()
+    assert "left out: case: nominal (inferred from the values: integer, every value distinct and consecutive (1–344)" in out.err
+    assert "case" not in out.out.split("Note.")[0].replace("cases", "")

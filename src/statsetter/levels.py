@@ -81,6 +81,9 @@ def infer_level(series: "pd.Series") -> LevelReport:
     span = f"{x.min():g}–{x.max():g}"
     if distinct <= 2:
         return LevelReport(name, "nominal", "inferred", f"{distinct} distinct values ({span})")
+    if integral and distinct == x.size >= 20 and x.max() - x.min() + 1 == x.size:
+        return LevelReport(name, "nominal", "inferred", f"integer, every value distinct and consecutive ({span}); looks like a case number",
+                           weak=True, identifier=True)
     if integral and distinct <= ORDINAL_MAX_DISTINCT:
         return LevelReport(name, "ordinal", "inferred", f"integer, {distinct} distinct values {span}", weak=True)
     if integral:
