@@ -48,6 +48,23 @@ def test_libreoffice_opens_every_docx(run):
         assert pdf_text(path).strip(), path.name
 
 
+def test_latex_output_compiles(run, tmp_path):
+    # the LaTeX section compiles with pdflatex (booktabs tables, upgreek's upright Greek letters)
+    # and its text reads back; CI=true requires pdflatex (.ci/run installs it)
+    import os
+
+    if shutil.which("pdflatex") is None or shutil.which("pdftotext") is None:
+        if os.environ.get("CI"):
+            pytest.fail("pdflatex and pdftotext are required in CI; .ci/run installs them")
+        pytest.skip("pdflatex not installed")
+    shutil.copy(run / "out" / "results.tex", tmp_path / "results.tex")
+    done = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "results.tex"], cwd=tmp_path,
+                          capture_output=True, text=True, timeout=300)
+    assert done.returncode == 0, done.stdout[-2000:]
+    text = subprocess.run(["pdftotext", str(tmp_path / "results.pdf"), "-"], check=True, capture_output=True, text=True).stdout
+    assert "Results (invented data)" in text and "Table 1" in text and "statistician" in text  # (pdftotext reads the fi ligature oddly)
+
+
 def test_markdown_output_passes_the_audit(run):
     entries = audit_file(run / "out" / "results.md")
     assert len(entries) >= 50  # the statistics of 22 analyses were found

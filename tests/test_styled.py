@@ -24,7 +24,7 @@ def test_markdown_pandoc():
 def test_html_and_latex():
     assert R2.html() == "<i>R</i><sup>2</sup> = .24, <i>r</i><sub>s</sub> &lt; 1 &amp; more"
     latex = StyledText.from_markup("χ<sup>2</sup> = −1, 95% CI").latex()
-    assert latex == "$\\chi$\\textsuperscript{2} = \\textminus{}1, 95\\% CI"
+    assert latex == "$\\upchi$\\textsuperscript{2} = \\textminus{}1, 95\\% CI"  # Greek roman (APA 7 §6.45), upgreek
 
 
 def test_plain_fallback_for_missing_unicode_subscripts():

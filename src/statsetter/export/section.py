@@ -9,7 +9,7 @@ from typing import Sequence
 
 from ..records import Result, dump_records
 from ..rendering.sentences import render
-from ..rendering.styled import StyledText
+from ..rendering.styled import LATEX_PREAMBLE, StyledText
 from ..rendering.tables import TableModel
 from ..style.profile import Style
 from .text_tables import write_table
@@ -45,7 +45,7 @@ def section_text(records: Sequence[Result], tables: Sequence[TableModel], style:
                            f"<p><i>{html.escape(CAUTION)}</i></p>"])
         return f'<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>{html.escape(title)}</title></head><body>\n{body}\n</body></html>\n'
     if fmt == "tex":
-        head = "\\documentclass{article}\n\\usepackage{booktabs}\n\\usepackage[T1]{fontenc}\n\\usepackage[utf8]{inputenc}\n\\begin{document}\n"
+        head = "\\documentclass{article}\n\\usepackage[T1]{fontenc}\n\\usepackage[utf8]{inputenc}\n" + LATEX_PREAMBLE + "\\begin{document}\n"
         title_tex = title.replace("\\", "\\textbackslash{}").replace("&", "\\&").replace("%", "\\%")
         return head + "\n\n".join([f"\\section*{{{title_tex}}}", *sentences, *blocks, f"\\emph{{{CAUTION}}}"]) + "\n\\end{document}\n"
     raise ValueError(f"unknown section format {fmt!r}")

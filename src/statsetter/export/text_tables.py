@@ -90,7 +90,8 @@ def table_html(t: TableModel) -> str:
 
 
 def table_latex(t: TableModel) -> str:
-    """A booktabs table (\\usepackage{booktabs}); ``\\textsubscript`` needs LaTeX 2015 or later."""
+    """A booktabs table; the document needs ``statsetter.rendering.styled.LATEX_PREAMBLE``
+    (booktabs, upgreek); ``\\textsubscript`` needs LaTeX 2015 or later."""
     ncol = len(t.columns)
     spec = "l" + "".join("r" if c.align == "right" else ("l" if c.align == "left" else "c") for c in t.columns)
     out = ["\\begin{table}[htbp]", "\\centering"]

@@ -370,6 +370,8 @@ def _split_space(text: str) -> tuple[str, str, str]:
     return lead, core, trail
 
 
+# Greek letters are roman (APA 7 §6.45): \upalpha … from the upgreek package; LATEX_PREAMBLE
+# loads it, or falls back to the italic math letters where it is not installed.
 _LATEX = {
     "\\": r"\textbackslash{}",
     "{": r"\{",
@@ -384,15 +386,15 @@ _LATEX = {
     "−": r"\textminus{}",
     "–": "--",
     "—": "---",
-    "χ": r"$\chi$",
-    "η": r"$\eta$",
-    "ω": r"$\omega$",
-    "ε": r"$\varepsilon$",
-    "α": r"$\alpha$",
-    "β": r"$\beta$",
-    "τ": r"$\tau$",
-    "ρ": r"$\rho$",
-    "φ": r"$\varphi$",
+    "χ": r"$\upchi$",
+    "η": r"$\upeta$",
+    "ω": r"$\upomega$",
+    "ε": r"$\upvarepsilon$",
+    "α": r"$\upalpha$",
+    "β": r"$\upbeta$",
+    "τ": r"$\uptau$",
+    "ρ": r"$\uprho$",
+    "φ": r"$\upvarphi$",
     "Δ": r"$\Delta$",
     "×": r"$\times$",
     "≤": r"$\leq$",
@@ -406,3 +408,14 @@ _LATEX_RE = re.compile("|".join(re.escape(k) for k in _LATEX))
 
 def _escape_latex(text: str) -> str:
     return _LATEX_RE.sub(lambda m: _LATEX[m.group(0)], text)
+
+
+_UPRIGHT = ("alpha", "beta", "chi", "eta", "omega", "varepsilon", "tau", "rho", "varphi")
+LATEX_PREAMBLE = (
+    "\\usepackage{booktabs}\n"
+    "\\IfFileExists{upgreek.sty}{\\usepackage{upgreek}}{%\n"
+    + "".join(f"  \\providecommand{{\\up{g}}}{{\\{g}}}%\n" for g in _UPRIGHT)
+    + "}\n"
+)
+"""What a document needs for the LaTeX writers' output: booktabs for tables,
+upgreek for upright Greek letters (italic ones where it is missing)."""
