@@ -92,6 +92,15 @@ def test_records_pass_the_p_check_and_a_retyped_p_does_not(run, capsys, tmp_path
     assert f"record {target['id']}" in err and "does not follow from t(" in err
 
 
+def test_latex_output_passes_the_audit_like_the_markdown(run):
+    # the audit reads statsetter's own LaTeX (upgreek letters, \\textsuperscript, \\textminus{} …)
+    # as it reads the Markdown: the same statistics, zero findings (tables' star notes are not results)
+    tex = audit_file(run / "out" / "results.tex")
+    md = audit_file(run / "out" / "results.md")
+    assert [(e.found, e.codes) for e in tex if e.codes] == []
+    assert sorted(e.found.replace(" & ", " | ") for e in tex) == sorted(e.found for e in md)  # table cells: & in LaTeX, | in Markdown
+
+
 def test_rerun_after_the_data_change_updates_everything(run, capsys):
     data = run / "data" / "invented_driver_survey.csv"
     before_md = (run / "out" / "results.md").read_text(encoding="utf-8")

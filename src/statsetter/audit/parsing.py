@@ -152,7 +152,8 @@ class _Patterns:
         self.head = re.compile(
             rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]])?\s*(?P<op>=|<|>|≤|≥)\s*(?P<num>{num})"
         )
-        self.p = re.compile(rf"(?<![\w.])(?P<sym>[pP])(?:-value)?\s*(?P<op>=|<|>|≤|≥)\s*(?P<num>{num}(?:[eE][-−]?\d+)?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
+        # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
+        self.p = re.compile(rf"(?<![\w.*])(?P<sym>[pP])(?:-value)?\s*(?P<op>=|<|>|≤|≥)\s*(?P<num>{num}(?:[eE][-−]?\d+)?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|confidence interval)s?\s*[:=,]?\s*"

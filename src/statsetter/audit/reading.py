@@ -80,6 +80,18 @@ _TEX_ITALIC = re.compile(r"\\textit\{([^{}]{1,40})\}|\\emph\{([^{}]{1,40})\}|\$(
 
 
 _SUPERSCRIPT = str.maketrans("0123456789+-−", "⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻⁻")
+
+# LaTeX back to the characters it prints (the inverse of the LaTeX writer's escapes)
+_TEX_GREEK = {f"\\{up}{name}": char for name, char in (
+    ("alpha", "α"), ("beta", "β"), ("chi", "χ"), ("eta", "η"), ("omega", "ω"), ("varepsilon", "ε"), ("epsilon", "ε"),
+    ("tau", "τ"), ("rho", "ρ"), ("varphi", "φ"), ("phi", "φ")) for up in ("up", "")}
+_TEX_GREEK.update({"\\Delta": "Δ", "\\times": "×", "\\leq": "≤", "\\geq": "≥", "\\pm": "±", "\\le": "≤", "\\ge": "≥"})
+_TEX_MATH_WORD = re.compile("|".join(re.escape(k) for k in sorted(_TEX_GREEK, key=len, reverse=True)) + r"(?![A-Za-z])")
+_TEX_CHARS = {"\\textminus{}": "−", "\\textless{}": "<", "\\textgreater{}": ">", "\\%": "%", "\\&": "&", "\\_": "_", "\\#": "#",
+              "\\$": "$", "---": "—", "--": "–", "~": " "}
+_TEX_CHAR = re.compile("(" + "|".join(re.escape(k) for k in sorted(_TEX_CHARS, key=len, reverse=True)) + ")")
+_TEX_SUP = re.compile(r"\\textsuperscript\{([^{}]{1,8})\}")
+_TEX_SUB = re.compile(r"\\textsubscript\{([^{}]{1,8})\}")
 _PANDOC_SUP = re.compile(r"\^([^\^\s]{1,8})\^")
 _PANDOC_SUB = re.compile(r"~([^~\s]{1,8})~")
 
@@ -135,19 +147,25 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     for m in (_TEX_ITALIC if tex else _MD_ITALIC).finditer(text):
         group = next(g for g in range(1, 4) if m.group(g) is not None) if tex else 2
         inner = m.group(group)
+        greek = False
         if tex:
-            inner = inner.replace("\\chi", "χ").replace("^2", "²").replace("\\eta", "η").replace("\\omega", "ω").strip()
+            inner = _TEX_MATH_WORD.sub(lambda w: _TEX_GREEK[w.group(0)], inner).replace("^2", "²").replace("^{2}", "²").strip()
+            greek = group == 3 and inner[:1] in "αβχηωετρφΔ"  # $\upchi$, $\chi^2$: math Greek, not italic
         out.add(text[at : m.start()], at)
-        if not (tex and inner[:1] in "χηω"):  # $\chi^2$ is math, not italic
+        if not greek:
             spans.append((out.length, out.length + len(inner)))
         out.add(inner, m.start(group))  # a rewritten TeX group maps to where it starts
         at = m.end()
     out.add(text[at:], at)
     clean, traces = out.text(), [out.trace()]
-    if not tex:  # after the emphasis, so that *r*~s~ reads rs (spans are not used for Markdown)
-        clean, sup = _replace(_PANDOC_SUP, clean, lambda g: g.translate(_SUPERSCRIPT))
-        clean, sub = _replace(_PANDOC_SUB, clean, lambda g: g)
-        traces += [sup, sub]
+    # after the emphasis, so that *r*~s~ and \textit{r}\textsubscript{s} read rs (spans are not used for text files)
+    sup_pattern, sub_pattern = (_TEX_SUP, _TEX_SUB) if tex else (_PANDOC_SUP, _PANDOC_SUB)
+    clean, sup = _replace(sup_pattern, clean, lambda g: g.translate(_SUPERSCRIPT))
+    clean, sub = _replace(sub_pattern, clean, lambda g: g)
+    traces += [sup, sub]
+    if tex:  # \textminus{}, \%, \textless{} … as the characters they print
+        clean, chars = _replace(_TEX_CHAR, clean, lambda g: _TEX_CHARS[g])
+        traces.append(chars)
     return clean, tuple(spans), tuple(t for t in traces if t is not None)
 
 
