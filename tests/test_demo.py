@@ -92,6 +92,14 @@ def test_records_pass_the_p_check_and_a_retyped_p_does_not(run, capsys, tmp_path
     assert f"record {target['id']}" in err and "does not follow from t(" in err
 
 
+def test_word_output_passes_the_audit_italics_included(run):
+    # the Word section: every statistic found, none with a finding, the italics check included
+    # (Latin symbols italic, Greek roman: APA 7 §6.45)
+    entries = audit_file(run / "out" / "results.docx")
+    assert len(entries) >= 60
+    assert [(e.found, e.codes) for e in entries if e.codes] == []
+
+
 def test_latex_output_passes_the_audit_like_the_markdown(run):
     # the audit reads statsetter's own LaTeX (upgreek letters, \\textsuperscript, \\textminus{} …)
     # as it reads the Markdown: the same statistics, zero findings (tables' star notes are not results)
