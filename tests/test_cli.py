@@ -83,6 +83,9 @@ def test_render_tables_from_records(tmp_path, capsys):
     word = tmp_path / "table.docx"
     assert main(["render", str(records), "--table", "regression", "--out", str(word)]) == 0
     assert "Linear Regression" in pdf_text(word)
+    sentences = tmp_path / "sentences.docx"
+    assert main(["render", str(records), "--form", "sentence", "--out", str(sentences)]) == 0  # Word, a paragraph per record
+    assert "holding the other predictors constant" in pdf_text(sentences)
     assert main(["render", str(records), "--title", "x"]) == 2
     assert "a title is for a table" in capsys.readouterr().err
     single = tmp_path / "pearson.json"

@@ -296,6 +296,12 @@ def _cmd_render(ns: argparse.Namespace) -> int:
         return _render_table(ns, records, style)
     if ns.title:
         raise InputError("--title: a title is for a table; add --table results or --table regression")
+    if ns.out and ns.out.lower().endswith(".docx"):  # Word: a paragraph per record, with real italics and scripts
+        from .export.docx_writer import results_document, save_document
+
+        save_document(results_document(records, style, form=ns.form), ns.out, inputs=ns.files)
+        print(f"wrote {ns.out}")
+        return 0
     lines = [render(record, ns.form, style).to(ns.to) for record in records]
     sep = "\n\n" if ns.to in ("md", "tex") else "\n"
     _emit(sep.join(lines), ns.out, inputs=ns.files)
