@@ -28,6 +28,15 @@ def test_format_computes_p(capsys):
     assert capsys.readouterr().out == "*t*(38) = 2.14, *p* = .039\n"
 
 
+def test_format_into_word(tmp_path, capsys):
+    # --out FILE.docx is a Word document (italic symbols as runs), not text under a .docx name
+    from test_docx import pdf_text
+
+    out = tmp_path / "one.docx"
+    assert main(["format", "t", "--stat", "2.14", "--df", "38", "--p", "0.039", "--out", str(out)]) == 0
+    assert "t(38) = 2.14, p = .039" in pdf_text(out)
+
+
 def test_format_warns_when_p_does_not_follow_from_the_statistic(capsys):
     # the recomputed p of t(38) = 2.14 is .0388 (scipy.stats.t.sf; a handbook t table puts
     # the two-sided .05 critical value of t(38) near 2.02, recalled from memory): p = .20 cannot be it

@@ -280,6 +280,12 @@ def _cmd_format(ns: argparse.Namespace) -> int:
     from .rendering.sentences import render
 
     record = _format_record(ns)
+    if ns.out and ns.out.lower().endswith(".docx"):
+        from .export.docx_writer import results_document, save_document
+
+        save_document(results_document([record], ns.style, form=ns.form), ns.out)
+        print(f"wrote {ns.out}")
+        return 0
     _emit(render(record, ns.form, ns.style).to(ns.to), ns.out)
     return 0
 
