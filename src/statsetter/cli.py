@@ -267,6 +267,15 @@ def _format_record(ns: argparse.Namespace):  # -> Result
     return record
 
 
+def _word(records, style, form: str, out: str, inputs: Sequence[str] = ()) -> int:  # type: ignore[no-untyped-def]
+    """A Word document with a paragraph per record (real italics and scripts)."""
+    from .export.docx_writer import results_document, save_document
+
+    save_document(results_document(records, style, form=form), out, inputs=inputs)
+    print(f"wrote {out}")
+    return 0
+
+
 def _emit(text: str, out: str | None, inputs: Sequence[str] = ()) -> None:
     if out:
         from .files import write_atomic
@@ -281,11 +290,7 @@ def _cmd_format(ns: argparse.Namespace) -> int:
 
     record = _format_record(ns)
     if ns.out and ns.out.lower().endswith(".docx"):
-        from .export.docx_writer import results_document, save_document
-
-        save_document(results_document([record], ns.style, form=ns.form), ns.out)
-        print(f"wrote {ns.out}")
-        return 0
+        return _word([record], ns.style, ns.form, ns.out)
     _emit(render(record, ns.form, ns.style).to(ns.to), ns.out)
     return 0
 
@@ -302,12 +307,8 @@ def _cmd_render(ns: argparse.Namespace) -> int:
         return _render_table(ns, records, style)
     if ns.title:
         raise InputError("--title: a title is for a table; add --table results or --table regression")
-    if ns.out and ns.out.lower().endswith(".docx"):  # Word: a paragraph per record, with real italics and scripts
-        from .export.docx_writer import results_document, save_document
-
-        save_document(results_document(records, style, form=ns.form), ns.out, inputs=ns.files)
-        print(f"wrote {ns.out}")
-        return 0
+    if ns.out and ns.out.lower().endswith(".docx"):
+        return _word(records, style, ns.form, ns.out, ns.files)
     lines = [render(record, ns.form, style).to(ns.to) for record in records]
     sep = "\n\n" if ns.to in ("md", "tex") else "\n"
     _emit(sep.join(lines), ns.out, inputs=ns.files)
