@@ -128,3 +128,6 @@ def test_regression_tables_against_the_formula_api(penguins):
     assert (first[3], first[4]) == num.interval(math.exp(lci.loc["bill_depth_mm", 0]), math.exp(lci.loc["bill_depth_mm", 1]), "OR", 1.0)
     with pytest.raises(InputError, match="one linear or one logistic regression"):
         regression_table([model, records[1]], "apa7")
+    other = linear_regression(penguins, "bill_length_mm", ["flipper_length_mm"])
+    with pytest.raises(InputError, match="the records hold 2 regressions"):
+        regression_table(records + other, "apa7")

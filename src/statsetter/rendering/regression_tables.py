@@ -31,7 +31,11 @@ def regression_table(
     if not (linear or kinds <= set(_LOGISTIC)) or not kinds & {"linear_coefficient", "logistic_coefficient"}:
         raise InputError("regression table: give the records of one linear or one logistic regression (its coefficients, and its model)")
     coefficients = [r for r in records if r.kind.endswith("_coefficient")]
-    model = next((r for r in records if r.kind.endswith("_model")), None)
+    models = [r for r in records if r.kind.endswith("_model")]
+    outcomes = {v.name for r in coefficients for v in r.variables if v.role == "outcome"}
+    if len(models) > 1 or len(outcomes) > 1:
+        raise InputError(f"regression table: the records hold {max(len(models), len(outcomes))} regressions; give the records of one")
+    model = models[0] if models else None
 
     def head(symbol: str) -> StyledText:
         return StyledText.from_markup(resolved.symbol(symbol))
