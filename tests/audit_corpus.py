@@ -210,6 +210,11 @@ def planted(rng: random.Random, code: str) -> Planted:
         return Planted(text, frozenset() if ok else frozenset({"grim"}))
     if code == "italics":
         return Planted(f"t({D}) = {T}, {_p(p)}", frozenset({"italics"}), docx_only=True)
+    if code == "effect-inconsistent":  # partial η² far above what F and its df allow
+        df1, df2 = rng.randint(1, 4), rng.randint(40, 300)
+        f = round(rng.uniform(2.5, 8), 2)
+        eta = f * df1 / (f * df1 + df2)
+        return one(f"F({df1}, {df2}) = {_num(f)}, {_p(float(stats.f.sf(f, df1, df2)))}, partial η² = {_num(min(eta * 2 + 0.05, 0.95), 2, True)}")
     if code == "coefficient-inconsistent":  # t half as large again as B / SE
         b, se, df = _coefficient(rng)
         t = b / se * 1.5
@@ -224,7 +229,7 @@ def planted(rng: random.Random, code: str) -> Planted:
 PLANTED_CODES = [
     "p-inconsistent", "decision-error", "one-sided", "impossible-r", "impossible-p", "negative-statistic", "negative-sd",
     "ci-reversed", "ci-excludes-estimate", "df-not-integer", "leading-zero", "missing-leading-zero", "decimals",
-    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics", "d-inconsistent", "coefficient-inconsistent",
+    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics", "d-inconsistent", "coefficient-inconsistent", "effect-inconsistent",
 ]
 
 

@@ -505,3 +505,24 @@ def test_coefficient_t_against_b_and_se_on_open_data():
     # a coefficient from an earlier sentence, or an SE printed as zero, is not used
     assert "coefficient-inconsistent" not in codes("B = 0.42, SE = 0.10. Then t(30) = 1.20, p = .240.")
     assert "coefficient-inconsistent" not in codes("B = 0.00, SE = 0.00, t(30) = 1.20, p = .240")
+
+
+def test_eta_and_v_against_f_and_chi2_on_open_data():
+    # reference: pingouin's two-way ANOVA (partial η², 'np2') and its chi-square test of independence
+    # (Cramér's V) on the bundled penguins data, printed as a manuscript would
+    import pingouin as pg
+
+    penguins = pg.read_dataset("penguins").dropna(subset=["body_mass_g", "species", "sex"])
+    aov = pg.anova(data=penguins, dv="body_mass_g", between=["species", "sex"], effsize="np2", detailed=True)
+    resid = int(aov.loc[aov.Source == "Residual", "DF"].iloc[0])
+    for _, row in aov[aov.Source != "Residual"].iterrows():
+        good = f"F({int(row.DF)}, {resid}) = {row.F:.2f}, p = .5, partial η² = {row.np2:.2f}"
+        assert "effect-inconsistent" not in codes(good), good
+        bad = f"F({int(row.DF)}, {resid}) = {row.F:.2f}, p = .5, partial η² = {min(row.np2 + 0.1, 0.99):.2f}"
+        assert "effect-inconsistent" in codes(bad), bad
+        assert "effect-inconsistent" not in codes(f"F({int(row.DF)}, {resid}) = {row.F:.2f}, p = .5, η² = {row.np2 / 2:.2f}")  # η² ≤ η²p
+    _, _, tests = pg.chi2_independence(penguins, x="species", y="island")
+    pearson = tests[tests.test == "pearson"].iloc[0]
+    text = f"χ²({int(pearson.dof)}, N = {len(penguins)}) = {pearson.chi2:.2f}, p < .001, V = {pearson.cramer:.2f}"
+    assert "effect-inconsistent" not in codes(text), text
+    assert "effect-inconsistent" in codes(text.replace(f"V = {pearson.cramer:.2f}", "V = .10"))

@@ -47,6 +47,10 @@ CODES: dict[str, tuple[str, str]] = {
         "t (or z) does not equal B / SE",
         "Regression: coefficients as B, SE, β, t, p (REPORTING-RULES); the Wald statistic of a coefficient is B / SE (practice)",
     ),
+    "effect-inconsistent": (
+        "η²p (or η², V, φ) does not fit F or χ² and its df",
+        "Effect sizes (JARS-Quant); η²p = F·df₁/(F·df₁ + df₂), η² ≤ η²p; V ≥ √(χ²/(N·df)) (definitions; practice)",
+    ),
     "d-inconsistent": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
@@ -371,6 +375,36 @@ def effect_from_t(rep: Reported, sizes: tuple[int, int] | None = None) -> list[F
                     f"{e.symbol_text} = {e.number.text}",
                 )
             )
+    return out
+
+
+def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
+    """η²p against F(df₁, df₂): η²p = F·df₁/(F·df₁ + df₂) whenever F is the
+    ratio of the effect's and its error term's mean squares, so with whole
+    df (Welch's F and corrected df are left alone); η² can only be smaller.
+    V or φ against χ²(df, N): V = √(χ²/(N·m)) with m = min(rows, columns) − 1,
+    between 1 and df, so V is at least √(χ²/(N·df)) (a Yates-corrected χ²
+    is smaller than the one V is computed from, so only this bound is
+    checked)."""
+    if rep.value is None or rep.op != "=" or rep.value.value < 0:
+        return []
+    low, high = max(rep.value.value - rep.value.half_unit, 0.0), rep.value.value + rep.value.half_unit
+    out = []
+    if rep.symbol == "F" and len(rep.df) == 2 and all(float(d.value).is_integer() and d.value > 0 for d in rep.df):
+        df1, df2 = rep.df[0].value, rep.df[1].value
+        bound = (low * df1 / (low * df1 + df2), high * df1 / (high * df1 + df2))
+        for e in rep.effects:
+            shown = (e.number.value - e.number.half_unit, e.number.value + e.number.half_unit)
+            if (e.name == "eta2_p" and not _overlap(bound, shown)) or (e.name == "eta2" and shown[0] > bound[1] + 1e-12):
+                relation = "F·df₁/(F·df₁ + df₂) gives" if e.name == "eta2_p" else "η² cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at"
+                out.append(Finding("effect-inconsistent", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
+                                   f"{rep.value.text}: {relation} {bound[0]:.3f} to {bound[1]:.3f}.", f"{e.symbol_text} = {e.number.text}"))
+    elif rep.symbol == "chi2" and len(rep.df) == 1 and rep.n is not None and rep.n.value > 0 and rep.df[0].value >= 1:
+        least = math.sqrt(low / (rep.n.value * rep.df[0].value))
+        for e in rep.effects:
+            if e.name in ("V", "phi") and e.number.value >= 0 and e.number.value + e.number.half_unit < least - 1e-12:
+                out.append(Finding("effect-inconsistent", f"{e.symbol_text} = {e.number.text} is too small for χ²({rep.df[0].text}, N = {rep.n.text}) = "
+                                   f"{rep.value.text}: √(χ²/(N·df)) is already {least:.3f}.", f"{e.symbol_text} = {e.number.text}"))
     return out
 
 

@@ -19,7 +19,7 @@ from ..rendering.sentences import render
 from ..rendering.styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, Finding, coefficient_ratio, consistency, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Reported, coefficient_before, find_statistics, group_sizes
 from .reading import Unit, read_units
 
@@ -84,6 +84,8 @@ def audit_units(
                 findings += effect_from_t(rep, group_sizes(unit.text, rep, mark))
             if rep.symbol in ("t", "z"):
                 findings += coefficient_ratio(rep, coefficient_before(unit.text, rep, previous_end, mark))
+            if rep.symbol in ("F", "chi2") and rep.effects:
+                findings += effect_from_f_or_chi2(rep)
             if rep.symbol is not None:
                 previous_end = rep.end
             if grim_items:
