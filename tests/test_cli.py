@@ -103,6 +103,13 @@ def test_render_tables_from_records(tmp_path, capsys):
     assert "one linear or one logistic regression" in capsys.readouterr().err
 
 
+def test_render_refuses_an_empty_file(tmp_path, capsys):
+    empty = tmp_path / "empty.json"
+    empty.write_text("[]")
+    assert main(["render", str(empty)]) == 2
+    assert f"{empty}: holds no records" in capsys.readouterr().err
+
+
 def test_render_refuses_to_overwrite_input(tmp_path, capsys):
     a = tmp_path / "a.json"
     a.write_text(dump_records([EXAMPLES["pearson"]]))

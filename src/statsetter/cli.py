@@ -384,7 +384,10 @@ def _read_records(names: Sequence[str]):  # type: ignore[no-untyped-def]
             raise InputError(f"{name}: no such file") from None
         except (OSError, UnicodeDecodeError) as exc:
             raise InputError(f"{name}: cannot read ({exc})") from None
-        out.extend(load_records(text, source=name))
+        found = load_records(text, source=name)
+        if not found:
+            raise InputError(f"{name}: holds no records")
+        out.extend(found)
     return out
 
 
