@@ -71,3 +71,32 @@ def test_bad_input(penguins):
         posthoc(penguins, "bill_length_mm", "species", "scheffe")  # type: ignore[arg-type]
     with pytest.raises(InputError, match="one level"):
         factorial_anova(penguins.assign(one="x"), "body_mass_g", ("species", "one"))
+
+
+def test_anova_table_against_statsmodels(penguins):
+    # every cell of the ANOVA table is statsmodels' anova_lm (Type II) number put through the
+    # style's engine: df, F, p and partial η² = SS / (SS + SS_error); an Error row with its df
+    import statsmodels.api as sm
+    import statsmodels.formula.api as smf
+
+    from statsetter import load_style
+    from statsetter.rendering.anova_tables import anova_table
+    from statsetter.style import numbers_for
+
+    num = numbers_for(load_style("apa7"))
+    terms = factorial_anova(penguins, "body_mass_g", ["species", "sex"], ss_type=2)
+    data = penguins.dropna(subset=["body_mass_g", "species", "sex"])
+    ref = sm.stats.anova_lm(smf.ols("body_mass_g ~ C(species) * C(sex)", data=data).fit(), typ=2)
+    table = anova_table(terms, "apa7")
+    assert [c.head.text for c in table.columns] == ["df", "F", "p", "η2p"]
+    rows = {r.stub.text: [c.text for c in r.cells] for r in table.rows}
+    for term, key in (("species", "C(species)"), ("sex", "C(sex)"), ("species × sex", "C(species):C(sex)")):
+        label = next(name for name in rows if name.replace(" ", "") == term.replace(" ", "") or name == term)
+        df, f, p, eta = rows[label]
+        assert df == num.df(ref.loc[key, "df"]) and f == num.number(ref.loc[key, "F"], "F")
+        assert p == "< .001" or p == num.p(ref.loc[key, "PR(>F)"])[1]
+        ss = ref.loc[key, "sum_sq"]
+        assert eta == num.number(ss / (ss + ref.loc["Residual", "sum_sq"]), "eta2_p")
+    assert rows["Error"][0] == num.df(ref.loc["Residual", "df"])
+    with pytest.raises(InputError, match="one factorial ANOVA"):
+        anova_table([], "apa7")

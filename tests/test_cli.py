@@ -103,6 +103,18 @@ def test_render_tables_from_records(tmp_path, capsys):
     assert "one linear or one logistic regression" in capsys.readouterr().err
 
 
+def test_render_anova_table(tmp_path, capsys):
+    import pingouin as pg
+
+    from statsetter.analyses import factorial_anova
+
+    path = tmp_path / "anova.json"
+    path.write_text(dump_records(factorial_anova(pg.read_dataset("penguins"), "body_mass_g", ["species", "sex"])))
+    assert main(["render", str(path), "--table", "anova", "--to", "md"]) == 0
+    out = capsys.readouterr().out
+    assert "| Source | *df* | *F* | *p* |" in out and "| Error | 327 |" in out
+
+
 def test_render_refuses_an_empty_file(tmp_path, capsys):
     empty = tmp_path / "empty.json"
     empty.write_text("[]")

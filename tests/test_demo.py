@@ -140,7 +140,8 @@ def test_switching_the_style_changes_the_tables_too(run):
     tables = [write_table(t, "md") for t in result.tables]
     assert re.search(r"\d+,\d{2} \(\d+,\d{2}\)", tables[0]) and not re.search(r"\d+\.\d{2} \(\d+\.\d{2}\)", tables[0])  # M (SD)
     assert re.search(r"\| −?,\d{2}", tables[1]) and not re.search(r"\| −?\.\d{2}", tables[1])  # correlations
-    regression, results = tables[2], tables[4]
+    anova, regression, results = tables[2], tables[3], tables[5]
+    assert re.search(r"\| \d+,\d{2} \| [<,]", anova)  # F | p in the ANOVA table
     assert re.search(r"\| −?\d,\d{2,3} \| \d,\d{2,3} \|", regression) and "*F*(4; " in regression  # B | SE, and the model's fit
     assert "[0,19; 1,03]" in results or re.search(r"\[\d,\d{2}; \d,\d{2}\]", results)
     text = render(result.records[1], "stats", load_style(ROOT / "demo" / "house-comma.toml")).plain()

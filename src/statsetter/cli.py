@@ -97,8 +97,8 @@ def _build_parser() -> argparse.ArgumentParser:
     r = sub.add_parser("render", help="render JSON files of records in one style")
     r.add_argument("files", nargs="+", metavar="FILE", help="JSON files of records (from several authors, say)")
     style_options(r)
-    r.add_argument("--table", choices=("results", "regression"), help="lay the records out as one table instead: a results table "
-                   "(a row per record) or a regression's coefficients table; --out FILE.docx writes Word")
+    r.add_argument("--table", choices=("results", "regression", "anova"), help="lay the records out as one table instead: a results table "
+                   "(a row per record), a regression's coefficients table or an ANOVA's table; --out FILE.docx writes Word")
     r.add_argument("--title", help="the table's title")
 
     fl = sub.add_parser(
@@ -306,7 +306,7 @@ def _cmd_render(ns: argparse.Namespace) -> int:
     if ns.table:
         return _render_table(ns, records, style)
     if ns.title:
-        raise InputError("--title: a title is for a table; add --table results or --table regression")
+        raise InputError("--title: a title is for a table; add --table results, regression or anova")
     if ns.out and ns.out.lower().endswith(".docx"):
         return _word(records, style, ns.form, ns.out, ns.files)
     lines = [render(record, ns.form, style).to(ns.to) for record in records]
@@ -353,6 +353,10 @@ def _render_table(ns: argparse.Namespace, records, style) -> int:  # type: ignor
         from .rendering.regression_tables import regression_table
 
         table = regression_table(records, style, title=ns.title, number=1)
+    elif ns.table == "anova":
+        from .rendering.anova_tables import anova_table
+
+        table = anova_table(records, style, title=ns.title, number=1)
     else:
         from .rendering.record_tables import results_table
 

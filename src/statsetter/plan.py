@@ -22,7 +22,7 @@ kind = "anova_oneway"                  # a statsetter.analyses function, or "aut
 outcome = "fatigue"
 group = "shift"
 [[tables]]
-kind = "descriptives"                  # or "results" (analyses = [ids]), "correlations" or "regression" (analysis = id)
+kind = "descriptives"                  # or "results" (analyses = [ids]), "correlations", "regression" or "anova" (analysis = id)
 variables = ["age", "fatigue"]
 by = "shift"
 [outputs]
@@ -73,6 +73,7 @@ _TABLE = {
     "results": {"kind", "id", "title", "analyses"},
     "correlations": {"kind", "id", "title", "analysis"},
     "regression": {"kind", "id", "title", "analysis"},
+    "anova": {"kind", "id", "title", "analysis"},
 }
 _OUTPUTS = {"folder", "docx", "md", "tex", "html", "json"}
 _CHAPTER = {"path", "out"}
@@ -370,6 +371,10 @@ def _table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alp
             from .rendering.regression_tables import regression_table
 
             return regression_table(by_id[t["analysis"]], style, title=t.get("title"))
+        if t["kind"] == "anova":
+            from .rendering.anova_tables import anova_table
+
+            return anova_table(by_id[t["analysis"]], style, title=t.get("title"))
         from .rendering.correlation_tables import correlation_table
 
         if t["analysis"] not in matrices:

@@ -7,6 +7,7 @@ from typing import Sequence
 from markupsafe import Markup
 
 from ..records import Result
+from ..style.numbers import Numbers
 from ..style.profile import Style, load_style
 from .kinds import KINDS
 from .sentences import _helpers
@@ -18,12 +19,12 @@ def _cell(markup: Markup | str) -> StyledText:
     return StyledText.from_markup(str(markup))
 
 
-def _p_cell(h, r: Result) -> StyledText:  # type: ignore[no-untyped-def]
-    """The p under a *p* head: ``.039`` or ``< .001`` (the symbol is in the head);
-    an adjusted p says so."""
+def p_cell(num: Numbers, r: Result) -> StyledText:
+    """A record's p under a *p* head: ``.039`` or ``< .001`` (the symbol is in
+    the head); an adjusted p says so. Shared by every table of records."""
     if r.p is None:
         return StyledText()
-    op, text = h.num.p(r.p, r.alpha)
+    op, text = num.p(r.p, r.alpha)
     shown = text if op == "=" else f"{op} {text}"
     adjusted = r.details.get("p_adjusted")
     return StyledText(f"{shown} ({adjusted})" if adjusted else shown)
@@ -54,7 +55,7 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
                 StyledText(label),
                 (
                     _cell(h.stat(r)),
-                    _p_cell(h, r),
+                    p_cell(h.num, r),
                     _cell(h.eff(r, with_ci=False) if e is not None else h.est(r, with_ci=False, symbol=r.estimate.name if r.estimate else None)),
                     _limits(h, ci, e.name if e is not None else (r.estimate.name if r.estimate else "default"), e.null if e is not None else 0.0),
                 ),

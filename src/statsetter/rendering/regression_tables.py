@@ -11,6 +11,7 @@ from ..errors import InputError
 from ..records import Result
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
+from .record_tables import p_cell
 from .sentences import render
 from .styled import StyledText
 from .tables import Column, Row, Spanner, TableModel
@@ -74,11 +75,7 @@ def regression_table(
             cells.append(_number(num, beta.value if beta else None, "beta"))
         s = r.statistic
         cells.append(_number(num, s.value if s else None, s.symbol if s else "t"))
-        if r.p is None:
-            cells.append(StyledText())
-        else:
-            op, text = num.p(r.p, r.alpha)
-            cells.append(StyledText(text if op == "=" else f"{op} {text}"))
+        cells.append(p_cell(num, r))
         rows.append(Row(StyledText(predictor.display if predictor else str(r.details.get("term", ""))), tuple(cells)))
         ref = r.details.get("reference")
         if ref and ref not in references:
