@@ -22,6 +22,26 @@ def same_file(a: "str | Path", b: "str | Path") -> bool:
     return a.resolve() == b.resolve()
 
 
+def read_start(path: "str | Path", limit: int | None = None) -> bytes:
+    """The first ``limit`` bytes of a file (all of it when None), or an
+    InputError naming the file: no such file, a folder, unreadable, empty.
+    The one place the readers (data files, manuscripts, Word documents) turn
+    an unreadable path into a message."""
+    p = Path(path)
+    try:
+        with p.open("rb") as fh:
+            data = fh.read() if limit is None else fh.read(limit)
+    except FileNotFoundError:
+        raise InputError(f"{p}: no such file") from None
+    except IsADirectoryError:
+        raise InputError(f"{p}: is a folder, not a file") from None
+    except OSError as exc:
+        raise InputError(f"{p}: cannot read ({exc.strerror or exc})") from None
+    if not data:
+        raise InputError(f"{p}: the file is empty")
+    return data
+
+
 def write_atomic(path: "str | Path", data: "str | bytes", *, inputs: Iterable["str | Path"] = ()) -> Path:
     """Write ``data`` to ``path`` through a temporary file in the same folder.
     Refuses when ``path`` is one of ``inputs``; the old file is untouched on failure."""

@@ -14,6 +14,7 @@ from pathlib import Path
 from typing import TYPE_CHECKING, Any, Mapping, Sequence
 
 from .errors import InputError
+from .files import read_start
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -36,17 +37,7 @@ class Dataset:
 
 
 def _check_magic(path: Path, suffix: str) -> None:
-    try:
-        with path.open("rb") as fh:
-            head = fh.read(4096)
-    except FileNotFoundError:
-        raise InputError(f"{path}: no such file") from None
-    except IsADirectoryError:
-        raise InputError(f"{path}: is a folder, not a data file") from None
-    except OSError as exc:
-        raise InputError(f"{path}: cannot read ({exc.strerror or exc})") from None
-    if not head:
-        raise InputError(f"{path}: the file is empty")
+    head = read_start(path, 4096)
     expected = {
         ".xlsx": (head.startswith(b"PK\x03\x04"), "an Excel .xlsx workbook (a zip file)"),
         ".sav": (head[:4] in (b"$FL2", b"$FL3"), "an SPSS .sav file"),

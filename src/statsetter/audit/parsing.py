@@ -270,13 +270,19 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     return out
 
 
+def _sentence_start(pat: _Patterns, text: str, since: int, at: int) -> int:
+    """Where the sentence holding position ``at`` begins (not before ``since``)."""
+    start = since
+    for b in pat.boundary.finditer(text, since, at):
+        start = b.end()
+    return start
+
+
 def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int, int] | None:
     """The two group sizes (``n = 40`` … ``n = 38``) the sentence gives before
     a statistic, when it gives exactly two."""
     pat = _patterns(decimal_mark)
-    start = 0
-    for b in pat.boundary.finditer(text, 0, rep.start):
-        start = b.end()
+    start = _sentence_start(pat, text, 0, rep.start)
     found = [m for m in pat.n.finditer(text, start, rep.start) if m.group("sym") == "n"]
     if len(found) != 2:
         return None
@@ -291,9 +297,7 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     β = .31, t(196) = 4.20``): the last of each between ``since`` (the end of
     the statistic before) and the statistic, within its sentence."""
     pat = _patterns(decimal_mark)
-    start = since
-    for b in pat.boundary.finditer(text, since, rep.start):
-        start = b.end()
+    start = _sentence_start(pat, text, since, rep.start)
     found = {}
     for name, regex in (("B", pat.coef_b), ("SE", pat.coef_se)):
         matches = list(regex.finditer(text, start, rep.start))

@@ -18,6 +18,7 @@ from pathlib import Path
 from typing import Callable, Iterator
 
 from ..errors import InputError
+from ..files import read_start
 
 __all__ = ["Unit", "read_units", "MAX_TEXT_BYTES"]
 
@@ -51,17 +52,9 @@ def read_units(path: "str | Path", encoding: str = "utf-8") -> list[Unit]:
         return list(_docx_units(p))
     if suffix not in (".md", ".markdown", ".txt", ".text", ".tex"):
         raise InputError(f"{p}: cannot audit {p.suffix or 'a file without extension'}; statsetter reads .docx, .md, .txt and .tex")
-    try:
-        size = p.stat().st_size
-        if size > MAX_TEXT_BYTES:
-            raise InputError(f"{p}: {size:,} bytes, over the {MAX_TEXT_BYTES:,}-byte limit for a text manuscript")
-        raw = p.read_bytes()
-    except FileNotFoundError:
-        raise InputError(f"{p}: no such file") from None
-    except IsADirectoryError:
-        raise InputError(f"{p}: is a folder") from None
-    except OSError as exc:
-        raise InputError(f"{p}: cannot read ({exc.strerror or exc})") from None
+    if p.is_file() and p.stat().st_size > MAX_TEXT_BYTES:
+        raise InputError(f"{p}: {p.stat().st_size:,} bytes, over the {MAX_TEXT_BYTES:,}-byte limit for a text manuscript")
+    raw = read_start(p)
     if not raw.strip():
         raise InputError(f"{p}: the file is empty")
     if raw.startswith(b"PK\x03\x04") or b"\x00" in raw[:4096]:

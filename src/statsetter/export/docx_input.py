@@ -8,6 +8,7 @@ from pathlib import Path
 from typing import TYPE_CHECKING
 
 from ..errors import InputError
+from ..files import read_start
 
 if TYPE_CHECKING:
     from docx.document import Document
@@ -33,14 +34,7 @@ def open_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> "Docum
 def check_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> None:
     """Refuse, with a clear message, what is not a safe Word document to read."""
     p = Path(path)
-    try:
-        head = p.open("rb").read(8)
-    except FileNotFoundError:
-        raise InputError(f"{p}: no such file") from None
-    except OSError as exc:
-        raise InputError(f"{p}: cannot read ({exc.strerror})") from None
-    if not head:
-        raise InputError(f"{p}: the file is empty")
+    head = read_start(p, 8)
     if head == _OLE:
         raise InputError(f"{p}: password-protected (encrypted) or an old binary .doc; save it as an unprotected .docx")
     if not head.startswith(b"PK"):
