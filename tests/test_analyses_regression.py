@@ -44,7 +44,7 @@ def test_linear_against_formula_api(penguins):
     flipper = coefs[0]
     beta = ref.params["flipper_length_mm"] * data.flipper_length_mm.std() / data.body_mass_g.std()
     assert flipper.effect("beta").value == pytest.approx(beta, rel=REL)
-    assert "reference level Adelie" in " ".join(n.text for n in model.notes)
+    assert "reference category Adelie" in " ".join(n.text for n in model.notes)
 
 
 def test_hierarchical_f_change(penguins):

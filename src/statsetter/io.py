@@ -9,7 +9,8 @@ author are turned into missing values before anything is computed.
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field
+import re
+from dataclasses import dataclass, field, replace
 from pathlib import Path
 from typing import TYPE_CHECKING, Any, Mapping, Sequence
 
@@ -34,6 +35,7 @@ class Dataset:
     levels: Mapping[str, str] = field(default_factory=dict)
     value_labels: Mapping[str, Mapping[Any, str]] = field(default_factory=dict)
     labels: Mapping[str, str] = field(default_factory=dict)
+    notes: tuple[str, ...] = ()  # what the reader chose or changed (delimiter, decimal mark, infinite values)
 
 
 def _check_magic(path: Path, suffix: str) -> None:
@@ -59,16 +61,21 @@ def read_data(
     sheet: "str | int | None" = None,
     missing: "Sequence[Any] | Mapping[str, Sequence[Any]] | None" = None,
     encoding: str = "utf-8",
+    sep: str | None = None,
+    decimal: str | None = None,
 ) -> Dataset:
     """Read a data file; ``missing`` lists codes (for every column, or per
-    column) that mean a missing value, such as −99."""
+    column) that mean a missing value, such as −99. A delimited text file's
+    delimiter (comma, semicolon, tab or bar) and decimal mark are detected
+    unless ``sep`` and ``decimal`` are given; ``notes`` says what was chosen.
+    Infinite numbers are treated as missing, with a note per variable."""
     p = Path(path)
     suffix = p.suffix.lower()
     if suffix not in READERS:
         raise InputError(f"{p}: unknown data format {p.suffix or '(no extension)'!r}; statsetter reads {', '.join(READERS)}")
     _check_magic(p, suffix)
     try:
-        data = _read(p, suffix, sheet, encoding)
+        data = _read(p, suffix, sheet, encoding, sep, decimal)
     except InputError:
         raise
     except UnicodeDecodeError as exc:
@@ -79,28 +86,95 @@ def read_data(
     if data.frame.columns.duplicated().any():
         raise InputError(f"{p}: column {data.frame.columns[data.frame.columns.duplicated()][0]!r} appears twice")
     if missing:
-        data = Dataset(_apply_missing(data.frame, missing, p), p, data.levels, data.value_labels, data.labels)
-    return data
+        data = replace(data, frame=_apply_missing(data.frame, missing, p))
+    return _finite(data)
 
 
-def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str) -> Dataset:
+def _finite(data: Dataset) -> Dataset:
+    """Infinite values (inf, −inf) are not measurements: each numeric column's
+    are set missing, and a note names the column and the count."""
+    import numpy as np
+    import pandas as pd
+
+    frame, notes = data.frame, list(data.notes)
+    changed = {}
+    for name in frame.columns:
+        s = frame[name]
+        if pd.api.types.is_float_dtype(s):
+            bad = np.isinf(s.to_numpy(dtype=float, na_value=np.nan))
+            if bad.any():
+                changed[name] = s.mask(bad)
+                notes.append(f"{name}: {int(bad.sum())} infinite value(s) treated as missing (first in row {int(np.argmax(bad)) + 1})")
+    if not changed:
+        return data
+    return replace(data, frame=frame.assign(**changed), notes=tuple(notes))
+
+
+_DELIMITERS = {",": "comma", ";": "semicolon", "\t": "tab", "|": "bar"}
+_DECIMAL_COMMA = re.compile(r"\s*-?\d+,\d+\s*")
+
+
+def _sniff(lines: list[str], sep: str | None, decimal: str | None) -> tuple[str, str, list[str]]:
+    """The delimiter and decimal mark of delimited text, from its first lines:
+    the delimiter that splits every line into the same number (> 1) of fields
+    (the most fields wins), outside quotes; a decimal comma when the delimiter
+    is not a comma and fields look like 12,5."""
+    import csv
+
+    notes = []
+    if sep is None:
+        best, width = ",", 1
+        for cand in _DELIMITERS:
+            counts = {len(row) for row in csv.reader(lines, delimiter=cand) if row}
+            if len(counts) == 1 and (n := counts.pop()) > width:
+                best, width = cand, n
+        sep = best
+        notes.append(f"delimiter: {_DELIMITERS[sep]} (detected; give sep to choose)")
+    if decimal is None:
+        decimal = "."
+        if sep != ",":
+            fields = [f for row in csv.reader(lines[1:], delimiter=sep) for f in row]
+            if any(_DECIMAL_COMMA.fullmatch(f) for f in fields):
+                decimal = ","
+                notes.append("decimal mark: comma (detected from values such as 12,5; give decimal to choose)")
+    return sep, decimal, notes
+
+
+def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str, sep: str | None = None, decimal: str | None = None) -> Dataset:
+    import csv
+
     import pandas as pd
 
     if suffix in (".csv", ".tsv", ".txt"):
-        sep = "\t" if suffix == ".tsv" else ("," if suffix == ".csv" else None)
-        skip = 0  # leading lines starting with "#" are notes about the file (our demo data say they are invented)
-        with p.open(encoding=encoding, errors="replace") as fh:
+        if sep is None and suffix == ".tsv":
+            sep = "\t"
+        if sep is not None and sep not in _DELIMITERS and sep != "\t":
+            raise InputError(f"{p}: sep {sep!r} is not one of , ; | or a tab")
+        if decimal is not None and decimal not in (".", ","):
+            raise InputError(f"{p}: decimal {decimal!r} is not . or ,")
+        skip, head = 0, []  # leading lines starting with "#" are notes about the file (our demo data say they are invented)
+        with p.open(encoding=encoding, errors="replace", newline="") as fh:
             for line in fh:
-                if not line.startswith("#"):
+                if line.startswith("#") and not head:
+                    skip += 1
+                    continue
+                head.append(line)
+                if len(head) >= 50:
                     break
-                skip += 1
+        sep, decimal, notes = _sniff(head, sep, decimal)
+        header = next(csv.reader(head[:1], delimiter=sep), [])
+        seen: set[str] = set()
+        for col in (h.strip() for h in header):
+            if col in seen and col:
+                raise InputError(f"{p}: column {col!r} appears twice in the header (line {skip + 1}); rename one")
+            seen.add(col)
         try:
-            frame = pd.read_csv(p, sep=sep, encoding=encoding, engine="python" if sep is None else "c", skiprows=skip)
+            frame = pd.read_csv(p, sep=sep, decimal=decimal, encoding=encoding, skiprows=skip)
         except pd.errors.EmptyDataError:
             raise InputError(f"{p}: no columns to read") from None
         except pd.errors.ParserError as exc:
             raise InputError(f"{p}: {str(exc).strip().splitlines()[0]}") from None
-        return Dataset(frame, p)
+        return Dataset(frame, p, notes=tuple(notes))
     if suffix == ".xlsx":
         book = pd.ExcelFile(p, engine="openpyxl")
         if sheet is not None and not isinstance(sheet, int) and sheet not in book.sheet_names:

@@ -9,6 +9,7 @@ and which is flagged as weak where a wrong guess is likely.
 
 from __future__ import annotations
 
+import re
 from dataclasses import dataclass
 from typing import TYPE_CHECKING, Literal, Mapping
 
@@ -81,9 +82,6 @@ def infer_level(series: "pd.Series") -> LevelReport:
     span = f"{x.min():g}–{x.max():g}"
     if distinct <= 2:
         return LevelReport(name, "nominal", "inferred", f"{distinct} distinct values ({span})")
-    if integral and distinct == x.size >= 20 and x.max() - x.min() + 1 == x.size:
-        return LevelReport(name, "nominal", "inferred", f"integer, every value distinct and consecutive ({span}); looks like a case number",
-                           weak=True, identifier=True)
     if integral and distinct <= ORDINAL_MAX_DISTINCT:
         return LevelReport(name, "ordinal", "inferred", f"integer, {distinct} distinct values {span}", weak=True)
     if integral:
@@ -91,15 +89,46 @@ def infer_level(series: "pd.Series") -> LevelReport:
     return LevelReport(name, "interval", "inferred", f"numeric with fractions, {distinct} distinct values")
 
 
+_ID_NAME = re.compile(r"(?:^|[\W_])(?:id|ids|ident|identifier|case|caseno|case_?id|record|respondent|participant|subject|patient|serial)(?:[\W_]?(?:no|nr|num|number|id|code))?(?:$|[\W_])", re.I)
+
+
+def identifier_reason(series: "pd.Series", label: str | None = None) -> str | None:
+    """Why ``series`` looks like a case identifier, or None: every value
+    distinct (at least 20 rows) and either named or labelled as an ID, or
+    integers in file order (increasing) or consecutive, whatever their range."""
+    import numpy as np
+    import pandas as pd
+
+    values = series.dropna()
+    if len(values) < 20 or isinstance(series.dtype, pd.CategoricalDtype) or not values.is_unique:
+        return None
+    if pd.api.types.is_numeric_dtype(series) and not pd.api.types.is_bool_dtype(series):
+        x = values.to_numpy(dtype=float)
+        if np.all(x == np.floor(x)):
+            if x.max() - x.min() + 1 == x.size:
+                return f"integer, every value distinct and consecutive ({x.min():g}–{x.max():g}); looks like a case number"
+            if values.is_monotonic_increasing:
+                return f"integer, every value distinct and increasing in file order ({x.min():g}–{x.max():g}); looks like a case number"
+    if _ID_NAME.search(str(series.name)):
+        return "every value distinct and the name says it identifies cases"
+    if label is not None and _ID_NAME.search(label):
+        return "every value distinct and the label says it identifies cases"
+    return None
+
+
 def resolve_levels(
     df: "pd.DataFrame",
     names: list[str],
     declared: Mapping[str, str] | None = None,
     metadata: Mapping[str, str] | None = None,
+    labels: Mapping[str, str] | None = None,
 ) -> dict[str, LevelReport]:
-    """Each variable's level: declared, else from the file's metadata, else inferred."""
+    """Each variable's level: declared, else from the file's metadata, else
+    inferred; a column that looks like a case identifier is flagged as one
+    unless its level is declared."""
     declared = declared or {}
     metadata = metadata or {}
+    labels = labels or {}
     unknown = sorted(set(declared) - set(df.columns))
     if unknown:
         from .analyses._common import column
@@ -113,4 +142,8 @@ def resolve_levels(
             out[name] = LevelReport(name, check_level(name, metadata[name]), "metadata", "the data file's measurement level")
         else:
             out[name] = infer_level(df[name])
+        if name not in declared and not out[name].identifier:
+            why = identifier_reason(df[name], labels.get(name))
+            if why:
+                out[name] = LevelReport(name, "nominal", "inferred", why, weak=True, identifier=True)
     return out

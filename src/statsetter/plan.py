@@ -66,7 +66,7 @@ ANALYSIS_KINDS = (
     "cronbach_alpha", "auto",
 )
 _TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
-_DATA = {"path", "sheet", "missing", "labels", "levels", "value_labels", "encoding"}
+_DATA = {"path", "sheet", "missing", "labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
 _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label"}
 _TABLE = {
     "descriptives": {"kind", "id", "title", "variables", "by", "tests", "smd", "show", "weights", "suppress_below", "percent_of"},
@@ -229,25 +229,118 @@ class RunResult:
     unknown_markers: bool = False
 
 
-def _frame(plan: Plan) -> tuple["pd.DataFrame", dict[str, str], dict[str, str], dict[str, Any]]:
+@dataclass
+class _Data:
+    """The plan's data and what is known about each column."""
+
+    frame: "pd.DataFrame"
+    labels: dict[str, str]
+    declared: dict[str, str]          # levels the plan declares
+    metadata: dict[str, str]          # levels the data file gives
+    value_labels: dict[str, Any]
+    identifiers: list[str]
+    notes: list[str]
+
+    @property
+    def levels(self) -> dict[str, str]:
+        return {**self.metadata, **self.declared}
+
+
+def _frame(plan: Plan) -> _Data:
     from .io import read_data
 
     d = plan.data
     try:
-        data = read_data(plan.resolve(d["path"]), sheet=d.get("sheet"), missing=d.get("missing"), encoding=d.get("encoding", "utf-8"))
+        data = read_data(plan.resolve(d["path"]), sheet=d.get("sheet"), missing=d.get("missing"), encoding=d.get("encoding", "utf-8"),
+                         sep=d.get("sep"), decimal=d.get("decimal"))
     except InputError as exc:
         raise PlanError(f"{plan.where('data.path')}: {exc}") from None
     frame = data.frame
+    for key in ("labels", "levels", "value_labels"):
+        if not isinstance(d.get(key, {}), dict):
+            raise plan.fail(f"data.{key}", f"{key} must be a table (name = value), not {type(d[key]).__name__}")
+    if not isinstance(d.get("identifiers", []), list):
+        raise plan.fail("data.identifiers", "identifiers must be a list of column names")
     labels = {**data.labels, **d.get("labels", {})}
-    levels = {**data.levels, **d.get("levels", {})}
     value_labels: dict[str, Any] = dict(data.value_labels)
     for name, mapping in d.get("value_labels", {}).items():
+        if not isinstance(mapping, dict):
+            raise plan.fail("data.value_labels", f"{name}: value labels must be a table (code = \"label\")")
         value_labels[name] = {_code(k): v for k, v in mapping.items()}
-    for key, names in (("labels", d.get("labels", {})), ("levels", d.get("levels", {})), ("value_labels", d.get("value_labels", {}))):
+    for key, names in (("labels", d.get("labels", {})), ("levels", d.get("levels", {})), ("value_labels", d.get("value_labels", {})),
+                       ("identifiers", d.get("identifiers", []))):
         for name in names:
             if name not in frame.columns:
                 raise plan.fail(f"data.{key}", _no_column(name, frame))
-    return frame, labels, levels, value_labels
+    from .levels import check_level
+
+    for name, level in d.get("levels", {}).items():
+        try:
+            check_level(name, level)
+        except InputError as exc:
+            raise plan.fail("data.levels", str(exc)) from None
+    return _Data(frame, labels, dict(d.get("levels", {})), dict(data.levels), value_labels, list(d.get("identifiers", [])), list(data.notes))
+
+
+# Arguments that name a grouping variable, and those that name its categories.
+_FACTOR_ROLES = ("group", "row", "column", "variable", "factors", "predictor")
+_CATEGORY_ARGS = ("groups", "event", "reference", "proportions")
+
+
+def _coded(data: _Data, frame: "pd.DataFrame") -> "pd.DataFrame":
+    """The analyses' frame: every nominal column that has value labels, or is
+    declared (or marked in the file) nominal, as a categorical named by its
+    labels in code order."""
+    from .coding import factor
+    from .levels import infer_level
+
+    out = {}
+    for name in frame.columns:
+        level = data.levels.get(name)
+        if level is None and name in data.value_labels:
+            level = infer_level(frame[name]).level
+        if level == "nominal" and (name in data.value_labels or name in data.levels):
+            out[name] = factor(frame[name], data.value_labels.get(name))
+    return frame.assign(**out) if out else frame
+
+
+def _arguments(data: _Data, frame: "pd.DataFrame", args: dict[str, Any], kind: str) -> tuple["pd.DataFrame", dict[str, Any]]:
+    """Grouping columns with value labels become factors for this analysis
+    (ordered when ordinal), and categories named by code become labels."""
+    import pandas as pd
+
+    from .coding import factor, label_codes
+
+    roles = [v for k in _FACTOR_ROLES if k in args for v in (args[k] if isinstance(args[k], list) else [args[k]])]
+    if "event" in args and "outcome" in args:
+        roles.append(args["outcome"])
+    extra = {}
+    for name in roles:
+        if isinstance(name, str) and name in frame.columns and name in data.value_labels and not isinstance(frame[name].dtype, pd.CategoricalDtype):
+            if kind == "auto":
+                continue
+            extra[name] = factor(frame[name], data.value_labels[name], ordered=data.levels.get(name) == "ordinal")
+    frame = frame.assign(**extra) if extra else frame
+    args = dict(args)
+    group = args.get("group") or args.get("outcome")
+    if "groups" in args and isinstance(args["groups"], list) and isinstance(args.get("group"), str):
+        codes = label_codes(data.value_labels.get(args["group"]))
+        args["groups"] = [codes.get(_text(g), g) for g in args["groups"]]
+    if "event" in args and isinstance(group, str):
+        codes = label_codes(data.value_labels.get(args["outcome"]))
+        args["event"] = codes.get(_text(args["event"]), args["event"])
+    if isinstance(args.get("reference"), dict):
+        args["reference"] = {k: label_codes(data.value_labels.get(k)).get(_text(v), v) for k, v in args["reference"].items()}
+    if isinstance(args.get("proportions"), dict) and isinstance(args.get("variable"), str):
+        codes = label_codes(data.value_labels.get(args["variable"]))
+        args["proportions"] = {codes.get(_text(k), k): v for k, v in args["proportions"].items()}
+    return frame, args
+
+
+def _text(value: Any) -> str:
+    from .coding import category_text
+
+    return category_text(value)
 
 
 def _code(key: str) -> Any:
@@ -266,7 +359,8 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     """Compute every scale, analysis and table of the plan (nothing written)."""
     from .analyses import cronbach_alpha, scale_score
 
-    frame, labels, levels, value_labels = _frame(plan)
+    data = _frame(plan)
+    frame, labels, levels, value_labels = data.frame, data.labels, data.levels, data.value_labels
     style = _style(plan)
     records: list[Result] = []
     by_id: dict[str, list[Result]] = {}
@@ -288,6 +382,7 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
         except InputError as exc:
             key = _key_of(scale, str(exc))
             raise PlanError(f"{plan.where(f'scales[{i}].{key}' if key else f'scales[{i}]')} (scale {name!r}): {exc}") from None
+    coded = _coded(data, frame)
     for i, analysis in enumerate(plan.analyses):
         if progress:
             progress(analysis["id"])
@@ -297,12 +392,13 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
             args.setdefault("level", plan.level)
         if "labels" in _parameters(kind):
             args["labels"] = {**labels, **args.get("labels", {})}
-        if kind == "auto":
+        if "levels" in _parameters(kind):
             args["levels"] = {**levels, **args.get("levels", {})}
         if kind in ("pearson", "spearman", "kendall"):
             args["method"] = kind
         try:
-            result = _function(kind)(frame, **args)
+            used, args = _arguments(data, coded, args, kind)
+            result = _function(kind)(used, **args)
         except (InputError, TypeError) as exc:
             key = _key_of(analysis, str(exc))
             raise PlanError(f"{plan.where(f'analyses[{i}].{key}' if key else f'analyses[{i}]')} (analysis {analysis['id']!r}): {exc}") from None
@@ -314,7 +410,8 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
         by_id[analysis["id"]] = found
         records += found
     notes: list[str] = []
-    tables = [_table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style, notes) for i, t in enumerate(plan.tables)]
+    notes += [f"data: {note}" for note in data.notes]
+    tables = [_table(plan, t, i, frame, labels, data, by_id, matrices, alphas, style, notes) for i, t in enumerate(plan.tables)]
     tables = [t.with_number(n) for n, t in enumerate(tables, 1)]
     notes += [f"{r.id}: {note.text}" for r in records for note in r.notes if note.kind == "choice"]  # automatic choices, never silent
     return RunResult(records, tables, [], notes)
@@ -350,15 +447,20 @@ def _style(plan: Plan) -> "Style":
         raise PlanError(f"{plan.where('style')}: {exc}") from None
 
 
-def _table(plan, t, i, frame, labels, levels, value_labels, by_id, matrices, alphas, style, notes):  # type: ignore[no-untyped-def]
+def _table(plan, t, i, frame, labels, data, by_id, matrices, alphas, style, notes):  # type: ignore[no-untyped-def]
     from .analyses.descriptives import describe
     from .rendering.record_tables import results_table
 
     where = f"tables[{i}]"
     try:
         if t["kind"] == "descriptives":
+            variables = t.get("variables")
+            if variables is None and data.identifiers:
+                variables = [str(c) for c in frame.columns if c not in (t.get("by"), t.get("weights")) and c not in data.identifiers]
+                notes += [f"tables[{i}]: left out {k} (declared an identifier in data.identifiers)" for k in data.identifiers]
             d = describe(
-                frame, t.get("variables"), by=t.get("by"), levels=levels, value_labels=value_labels, labels=labels, show=t.get("show"),
+                frame, variables, by=t.get("by"), levels=data.declared,
+                metadata_levels=data.metadata, value_labels=data.value_labels, labels=labels, show=t.get("show"),
                 weights=t.get("weights"), tests=bool(t.get("tests")), smd=bool(t.get("smd")), suppress_below=t.get("suppress_below"),
                 percent_of=t.get("percent_of", "valid"), alphas={k: v for k, v in alphas.items() if k in (t.get("variables") or frame.columns)},
             )

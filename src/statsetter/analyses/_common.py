@@ -5,6 +5,7 @@ from __future__ import annotations
 import difflib
 from typing import TYPE_CHECKING, Any, Mapping, Sequence
 
+from ..coding import _code_key, categories, category_text, find_categories
 from ..errors import InputError
 from ..records import Note, Provenance, Variable
 
@@ -34,6 +35,8 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
 
 def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note]:
     """Rows complete on ``names``, and a note saying how many were dropped."""
+    import pandas as pd
+
     for n in names:
         column(df, n)
     if len(set(names)) != len(names):
@@ -44,6 +47,9 @@ def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", 
         if count == len(sub):
             raise InputError(f"{n}: every value is missing")
     complete = sub.dropna() if any(absent.values()) else sub
+    for n in names:  # a category with no complete row is not a group of the analysis
+        if isinstance(complete[n].dtype, pd.CategoricalDtype) and len(complete[n].cat.categories) > complete[n].nunique():
+            complete = complete.assign(**{n: complete[n].cat.remove_unused_categories()})
     dropped = len(sub) - len(complete)
     if dropped:
         note = Note("missing", f"{dropped} of {len(sub)} rows dropped for missing values on {', '.join(names)} (listwise).")
@@ -112,7 +118,11 @@ def split_by(values: "pd.Series", groups: "pd.Series") -> tuple[list[object], li
     else:
         codes, uniq = pd.factorize(groups, sort=False)
         uniques = list(uniq)
-    order = sorted(range(len(uniques)), key=lambda k: str(uniques[k]))
+    if isinstance(groups.dtype, pd.CategoricalDtype):  # code order, as the value labels list them
+        rank = {cat: i for i, cat in enumerate(groups.cat.categories.tolist())}
+        order = sorted(range(len(uniques)), key=lambda k: rank.get(uniques[k], len(rank)))
+    else:
+        order = sorted(range(len(uniques)), key=lambda k: _code_key(uniques[k]))
     y = values.to_numpy(dtype=float)
     if len(uniques) == 2:
         mask = codes == order[0]
@@ -132,3 +142,17 @@ def grouped(df: "pd.DataFrame", outcome: str, group: str, test: str, min_n: int 
         if len(values) < min_n:
             raise InputError(f"{group} = {level}: n = {len(values)}; each group needs at least {min_n} values")
     return levels, samples, missing
+
+
+def two_levels(data: "pd.DataFrame", group: str, groups: Sequence[object] | None, test: str) -> list[Any]:
+    """The two groups to compare: the ones named (by label or code), else the
+    only two present, in code order."""
+    present = categories(data[group])
+    if groups is not None:
+        if len(groups) != 2:
+            raise InputError(f"groups: name exactly two levels of {group}, got {len(groups)}")
+        return find_categories(group, groups, present, role="group")
+    if len(present) != 2:
+        shown = ", ".join(category_text(v) for v in present[:6]) + (" …" if len(present) > 6 else "")
+        raise InputError(f"{group}: {len(present)} group{'' if len(present) == 1 else 's'} with data ({shown}); a {test} needs exactly two (name them with groups=[...])")
+    return present

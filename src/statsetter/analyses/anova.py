@@ -4,6 +4,7 @@ from __future__ import annotations
 
 from typing import TYPE_CHECKING, Literal, Mapping
 
+from ..coding import category_text
 from ..errors import InputError
 from ..records import EffectSize, GroupSummary, Note, Result, Statistic
 from . import _common as c
@@ -55,7 +56,7 @@ def anova_oneway(
         n=n,
         effects=(EffectSize("eta2", eta2), EffectSize("omega2", omega2, method="Hays (1963); may be negative")),
         groups=tuple(
-            GroupSummary(str(lev), n=len(v), mean=float(v.mean()), sd=float(v.std(ddof=1))) for lev, v in zip(levels, samples)
+            GroupSummary(category_text(lev), n=len(v), mean=float(v.mean()), sd=float(v.std(ddof=1))) for lev, v in zip(levels, samples)
         ),
         variables=c.variables({"outcome": outcome, "group": group}, labels),
         notes=c.notes(

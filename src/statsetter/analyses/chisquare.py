@@ -5,6 +5,7 @@ from __future__ import annotations
 import math
 from typing import TYPE_CHECKING, Mapping
 
+from ..coding import category_text
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
 from . import _common as c
@@ -69,11 +70,12 @@ def chi_square(
     notes = [Note("method", "Yates' continuity correction applied." if yates and res.dof == 1 else "No continuity correction.")]
     small = int((res.expected_freq < 5).sum())
     if small:
-        notes.append(Note("assumption", f"{small} of {r * k} cells have expected counts below 5 (smallest {res.expected_freq.min():.4g})."))
+        fisher = " Fisher's exact test is reported as well." if (r, k) == (2, 2) else ""
+        notes.append(Note("assumption", f"{small} of {r * k} cells have expected counts below 5 (smallest {res.expected_freq.min():.4g}).{fisher}"))
     if missing:
         notes.append(missing)
     cells = tuple(
-        GroupSummary(f"{a} / {b}", n=int(table.loc[a, b])) for a in table.index for b in table.columns
+        GroupSummary(f"{category_text(a)} / {category_text(b)}", n=int(table.loc[a, b])) for a in table.index for b in table.columns
     )
     variables = c.variables({"row": row, "column": column}, labels)
     out = [
@@ -132,7 +134,7 @@ def goodness_of_fit(
 
     data, missing = c.listwise(df, [variable])
     observed = data[variable].value_counts()
-    unknown = sorted(set(map(str, observed.index)) - set(map(str, proportions)))
+    unknown = sorted(set(map(category_text, observed.index)) - set(map(category_text, proportions)))
     if unknown:
         raise InputError(f"{variable}: categories {', '.join(unknown)} have no expected proportion")
     total = sum(proportions.values())
@@ -141,8 +143,8 @@ def goodness_of_fit(
     if len(proportions) < 2:
         raise InputError(f"{variable}: a goodness-of-fit test needs at least 2 categories")
     keys = list(proportions)
-    lookup = {str(k): int(v) for k, v in observed.items()}
-    obs = [lookup.get(str(k), 0) for k in keys]
+    lookup = {category_text(k): int(v) for k, v in observed.items()}
+    obs = [lookup.get(category_text(k), 0) for k in keys]
     n = sum(obs)
     res = stats.chisquare(obs, f_exp=[n * proportions[k] for k in keys])
     return Result(
@@ -150,7 +152,7 @@ def goodness_of_fit(
         statistic=Statistic("chi2", float(res.statistic), (len(keys) - 1,)),
         p=float(res.pvalue),
         n=n,
-        groups=tuple(GroupSummary(str(k), n=o, percent=100 * o / n) for k, o in zip(keys, obs)),
+        groups=tuple(GroupSummary(category_text(k), n=o, percent=100 * o / n) for k, o in zip(keys, obs)),
         variables=c.variables({"variable": variable}, labels),
         notes=c.notes(missing),
         details={"expected": "given"},

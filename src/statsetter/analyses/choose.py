@@ -37,7 +37,13 @@ def analyse(
     from .ranks import kruskal_wallis, mann_whitney
     from .ttests import t_independent
 
+    from ..levels import identifier_reason
+
     levels = levels or {}
+    for name in (outcome, predictor):
+        why = None if name in levels else identifier_reason(c.column(df, name), (labels or {}).get(name))
+        if why:
+            raise InputError(f"{name}: {why}; no automatic test for a case identifier (declare its level to use it)")
     lo, why_o = level_of(c.column(df, outcome), levels.get(outcome))
     lp, why_p = level_of(c.column(df, predictor), levels.get(predictor))
     continuous = ("interval", "ratio")

@@ -149,7 +149,7 @@ def describe(
     if suppress_below is not None and (int(suppress_below) != suppress_below or suppress_below < 2):
         raise InputError(f"suppress_below: {suppress_below!r}; give a whole number of 2 or more")
     chosen = _contents(show)
-    found = resolve_levels(df, names, levels, metadata_levels)
+    found = resolve_levels(df, names, levels, metadata_levels, labels)
     left_out: tuple[LevelReport, ...] = ()
     if variables is None:  # every column by default, but not an ID column: one row per case would identify people
         left_out = tuple(found[n] for n in names if found[n].identifier)

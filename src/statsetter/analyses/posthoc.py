@@ -6,6 +6,7 @@ import math
 from itertools import combinations
 from typing import TYPE_CHECKING, Literal, Mapping
 
+from ..coding import category_text
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
@@ -72,7 +73,7 @@ def posthoc(
             f"Pairwise Student t tests, {_NAMES[procedure]}-adjusted p over {m} comparisons; "
             + (f"CIs at the Bonferroni-adjusted level {ci_level:.4g}." if procedure == "bonferroni" else "CIs unadjusted."),
         )
-    summaries = [GroupSummary(str(lev), n=len(v), mean=float(v.mean()), sd=float(v.std(ddof=1))) for lev, v in zip(levels, samples)]
+    summaries = [GroupSummary(category_text(lev), n=len(v), mean=float(v.mean()), sd=float(v.std(ddof=1))) for lev, v in zip(levels, samples)]
     variables = c.variables({"outcome": outcome, "group": group}, labels)
     out = []
     for i, j, diff, p, low, high in rows:

@@ -4,6 +4,7 @@ from __future__ import annotations
 
 from typing import TYPE_CHECKING, Literal, Mapping, Sequence
 
+from ..coding import category_text
 from ..errors import InputError
 from ..records import EffectSize, GroupSummary, Note, Result, Statistic
 from . import _common as c
@@ -26,13 +27,11 @@ def _median_summary(label: str, v: "np.ndarray") -> GroupSummary:
 def _two_groups(df: "pd.DataFrame", outcome: str, group: str, groups: Sequence[object] | None, test: str):  # type: ignore[no-untyped-def]
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
-    levels = list(groups) if groups is not None else sorted(data[group].unique().tolist(), key=str)
-    if len(levels) != 2:
-        raise InputError(f"{group}: {len(levels)} group(s) with data; a {test} needs exactly two (name them with groups=[...])")
+    levels = c.two_levels(data, group, groups, test)
     samples = [y[data[group] == lev].to_numpy() for lev in levels]
     for lev, v in zip(levels, samples):
         if len(v) < 1:
-            raise InputError(f"{group} = {lev}: no values")
+            raise InputError(f"{group} = {category_text(lev)}: no values")
     return levels, samples, missing
 
 
@@ -68,9 +67,9 @@ def mann_whitney(
         alternative=alternative,  # type: ignore[arg-type]
         n=len(a) + len(b),
         effects=(EffectSize("r_rb", r, method="rank-biserial r = 2U/(n1 n2) - 1 (Kerby, 2014)"),),
-        groups=(_median_summary(str(levels[0]), a), _median_summary(str(levels[1]), b)),
+        groups=(_median_summary(category_text(levels[0]), a), _median_summary(category_text(levels[1]), b)),
         variables=c.variables({"outcome": outcome, "group": group}, labels),
-        notes=c.notes(Note("method", f"p from the {_WORDS[method]}; U is that of {levels[0]}."), missing),
+        notes=c.notes(Note("method", f"p from the {_WORDS[method]}; U is that of {category_text(levels[0])}."), missing),
         details={"method": _WORDS[method]},
         provenance=c.provenance("statsetter.analyses.mann_whitney"),
     )
@@ -147,7 +146,7 @@ def kruskal_wallis(
         p=float(res.pvalue),
         n=n,
         effects=(EffectSize("epsilon2", h * (n + 1) / (n * n - 1), method="H(n + 1)/(n^2 - 1) (Tomczak & Tomczak, 2014)"),),
-        groups=tuple(_median_summary(str(lev), v) for lev, v in zip(levels, samples)),
+        groups=tuple(_median_summary(category_text(lev), v) for lev, v in zip(levels, samples)),
         variables=c.variables({"outcome": outcome, "group": group}, labels),
         notes=c.notes(Note("method", "p from the chi-square approximation, corrected for ties."), missing),
         details={"method": "chi-square approximation"},

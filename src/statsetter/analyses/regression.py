@@ -6,6 +6,7 @@ import math
 import warnings
 from typing import TYPE_CHECKING, Mapping, Sequence
 
+from ..coding import categories, category_text, factor, find_category
 from ..errors import InputError
 from ..records import EffectSize, Estimate, Interval, Note, Result, Statistic, Variable
 from . import _common as c
@@ -14,38 +15,60 @@ if TYPE_CHECKING:
     import pandas as pd
 
 
-def _design(data: "pd.DataFrame", predictors: Sequence[str], reference: Mapping[str, object]):  # type: ignore[no-untyped-def]
-    """Numeric predictors as they are; others dummy-coded against a reference
-    level (the given one, else the first in sorted order). Returns the design
-    matrix (with a constant), a list of (column, predictor, level, reference)
-    and the notes saying which reference was used."""
+def _design(data: "pd.DataFrame", predictors: Sequence[str], reference: Mapping[str, object], levels: Mapping[str, str] | None = None):  # type: ignore[no-untyped-def]
+    """The design matrix (with a constant). A predictor that is nominal — a
+    pandas categorical, text, or declared nominal in ``levels`` — enters as
+    k − 1 indicators against a reference category (the one given, by label or
+    code, else the first in code order); an ordinal predictor enters as its
+    numeric scores (an ordered categorical as 1…k), which is an automatic
+    choice and said so; other numeric predictors enter as they are. Returns
+    the matrix, a list of (column, predictor, level, reference) and notes."""
     import numpy as np
     import pandas as pd
 
+    levels = levels or {}
     cols: dict[str, np.ndarray] = {"const": np.ones(len(data))}
     meta: list[tuple[str, str, object | None, object | None]] = []
     notes: list[Note] = []
     for p in predictors:
         s = data[p]
-        if pd.api.types.is_numeric_dtype(s) and not pd.api.types.is_bool_dtype(s):
+        declared = levels.get(p)
+        categorical = isinstance(s.dtype, pd.CategoricalDtype)
+        ordered = categorical and bool(s.dtype.ordered)
+        numeric = pd.api.types.is_numeric_dtype(s) and not pd.api.types.is_bool_dtype(s) and not categorical
+        if declared == "ordinal" or (ordered and declared is None):
+            if ordered or categorical:
+                s = pd.Series(s.cat.codes.astype(float) + 1, index=s.index, name=p)
+                how = f"scored 1–{len(data[p].cat.categories)} in category order"
+            elif not numeric:
+                raise InputError(f"{p}: declared ordinal but its values are text; give it codes or declare it nominal")
+            else:
+                how = "its codes as numbers"
+            notes.append(Note("choice", f"{p} is ordinal: entered as one numeric term ({how}), a linear trend across its categories; "
+                                        f"declare it nominal (levels = {{{p} = \"nominal\"}}) to enter it as categories."))
+            numeric = True
+        elif declared == "nominal" or categorical:
+            numeric = False
+            if not categorical:
+                s = factor(s)
+        if numeric:
             if s.nunique() < 2:
                 raise InputError(f"{p}: constant predictor (every value is {s.iloc[0]!r}); it cannot be estimated")
             cols[p] = s.to_numpy(dtype=float)
             meta.append((p, p, None, None))
             continue
-        levels = sorted(s.unique().tolist(), key=str)
-        if len(levels) < 2:
-            raise InputError(f"{p}: constant predictor (one level, {levels[0]!r}); it cannot be estimated")
-        ref = reference.get(p, levels[0])
-        if ref not in levels:
-            raise InputError(f"{p}: reference level {ref!r} is not among {', '.join(map(str, levels))}")
-        for lev in levels:
+        present = categories(s)
+        if len(present) < 2:
+            raise InputError(f"{p}: constant predictor (one level, {category_text(present[0])!r}); it cannot be estimated")
+        ref = find_category(p, reference[p], present, role="reference category") if p in reference else present[0]
+        for lev in present:
             if lev == ref:
                 continue
-            name = f"{p}[{lev}]"
+            name = f"{p}[{category_text(lev)}]"
             cols[name] = (s == lev).to_numpy(dtype=float)
-            meta.append((name, p, lev, ref))
-        notes.append(Note("method", f"{p} dummy-coded; reference level {ref}."))
+            meta.append((name, p, category_text(lev), category_text(ref)))
+        how = "given" if p in reference else "the first in code order" if categorical or declared else "the first in sorted order"
+        notes.append(Note("method", f"{p} entered as {len(present) - 1} indicator terms (dummy coding); reference category {category_text(ref)} ({how})."))
     X = pd.DataFrame(cols, index=data.index)
     rank = np.linalg.matrix_rank(X.to_numpy())
     if rank < X.shape[1]:
@@ -54,6 +77,16 @@ def _design(data: "pd.DataFrame", predictors: Sequence[str], reference: Mapping[
             if np.linalg.matrix_rank(X.iloc[:, :j].to_numpy()) < j:
                 raise InputError(f"{X.columns[j - 1]}: perfectly collinear with the other predictors")
     return X, meta, notes
+
+
+def _check_names(predictors: Sequence[str], reference: Mapping[str, object] | None, levels: Mapping[str, str] | None) -> None:
+    from ..levels import check_level
+
+    for p in reference or {}:
+        if p not in predictors:
+            raise InputError(f"{p}: a reference category is given, but {p} is not a predictor")
+    for p, lev in (levels or {}).items():
+        check_level(p, lev)
 
 
 def _labels(names: Sequence[str], labels: Mapping[str, str] | None) -> str:
@@ -68,6 +101,7 @@ def linear_regression(
     predictors: Sequence[str],
     *,
     reference: Mapping[str, object] | None = None,
+    levels: Mapping[str, str] | None = None,
     level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
@@ -81,7 +115,8 @@ def linear_regression(
     y = c.numeric(data, outcome)
     if y.nunique() < 2:
         raise InputError(f"{outcome}: zero variance; a regression is undefined")
-    X, meta, coding = _design(data, predictors, reference or {})
+    _check_names(predictors, reference, levels)
+    X, meta, coding = _design(data, predictors, reference or {}, levels)
     if len(data) <= X.shape[1]:
         raise InputError(f"{outcome}: {len(data)} complete rows for {X.shape[1]} coefficients")
     fit = sm.OLS(y.to_numpy(), X).fit()
@@ -130,6 +165,7 @@ def hierarchical_steps(
     steps: Sequence[Sequence[str]],
     *,
     reference: Mapping[str, object] | None = None,
+    levels: Mapping[str, str] | None = None,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
     """One record per step after the first: ΔR² and the F test of the change,
@@ -140,6 +176,7 @@ def hierarchical_steps(
     if len(steps) < 2:
         raise InputError("steps: a hierarchical regression needs at least two steps")
     everything = [p for step in steps for p in step]
+    _check_names(everything, reference, levels)
     data, missing = c.listwise(df, [outcome, *everything])
     y = c.numeric(data, outcome).to_numpy()
     out = []
@@ -147,7 +184,7 @@ def hierarchical_steps(
     used: list[str] = []
     for i, step in enumerate(steps, 1):
         used = used + list(step)
-        X, _, _ = _design(data, used, reference or {})
+        X, _, _ = _design(data, used, {k: v for k, v in (reference or {}).items() if k in used}, levels)
         fit = sm.OLS(y, X).fit()
         if previous is not None:
             dk = fit.df_model - previous.df_model
@@ -178,6 +215,7 @@ def logistic_regression(
     *,
     event: object | None = None,
     reference: Mapping[str, object] | None = None,
+    levels: Mapping[str, str] | None = None,
     level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
@@ -189,14 +227,14 @@ def logistic_regression(
     import statsmodels.api as sm
 
     data, missing = c.listwise(df, [outcome, *predictors])
-    levels = sorted(data[outcome].unique().tolist(), key=str)
-    if len(levels) != 2:
-        raise InputError(f"{outcome}: {len(levels)} distinct values; a logistic regression needs a binary outcome")
-    event = levels[1] if event is None else event
-    if event not in levels:
-        raise InputError(f"{outcome}: event {event!r} is not among {', '.join(map(str, levels))}")
+    present = categories(data[outcome])
+    if len(present) != 2:
+        raise InputError(f"{outcome}: {len(present)} distinct values; a logistic regression needs a binary outcome")
+    event = present[1] if event is None else find_category(outcome, event, present, role="event")
     y = (data[outcome] == event).to_numpy(dtype=float)
-    X, meta, coding = _design(data, predictors, reference or {})
+    event = category_text(event)
+    _check_names(predictors, reference, levels)
+    X, meta, coding = _design(data, predictors, reference or {}, levels)
     with warnings.catch_warnings():
         warnings.simplefilter("error")
         try:

@@ -5,6 +5,7 @@ from __future__ import annotations
 import math
 from typing import TYPE_CHECKING, Literal, Mapping, Sequence
 
+from ..coding import category_text
 from ..errors import InputError
 from ..records import Estimate, GroupSummary, Interval, Note, Result, Statistic
 from . import _common as c
@@ -103,22 +104,12 @@ def t_independent(
         raise InputError(f"variant: {variant!r} is not welch or student")
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
-    if groups is not None:
-        levels = list(groups)
-        if len(levels) != 2:
-            raise InputError(f"groups: name exactly two levels of {group}, got {len(levels)}")
-        g = data[group]
-        a, b = (y[g == lev].to_numpy() for lev in levels)
-    else:
-        levels, samples = c.split_by(y, data[group])
-        if len(levels) < 2:
-            raise InputError(f"{group}: {len(levels)} group(s) with data; a t test needs two")
-        if len(levels) > 2:
-            raise InputError(f"{group}: {len(levels)} groups ({', '.join(map(str, levels[:5]))}); name two with groups=[...] or use an ANOVA")
-        a, b = samples
+    levels = c.two_levels(data, group, groups, "t test (or an ANOVA for more)")
+    g = data[group]
+    a, b = (y[g == lev].to_numpy() for lev in levels)
     for lev, v in zip(levels, (a, b)):
         if len(v) < 2:
-            raise InputError(f"{group} = {lev}: n = {len(v)}; each group needs at least 2 values")
+            raise InputError(f"{group} = {category_text(lev)}: n = {len(v)}; each group needs at least 2 values")
     (ma, va), (mb, vb) = _moments(a), _moments(b)
     if va == 0 and vb == 0:
         raise InputError(f"{outcome}: zero variance in both groups; the t statistic is undefined")
@@ -139,7 +130,7 @@ def t_independent(
         "method",
         "Welch's t test (variances not assumed equal)." if variant == "welch" else "Student's t test (equal variances assumed).",
     )
-    glabels = [str(x) for x in levels]
+    glabels = [category_text(x) for x in levels]
     return Result(
         kind="t_independent",
         statistic=Statistic("t", t_value, (df_value,)),
