@@ -49,7 +49,8 @@ GOLDEN = {
     # REPORTING-RULES Numbers: a CI limit just below 0 keeps a digit (practice); p = .051 stays above .05
     't_one_sample': (
         '<i>t</i>(49) = 2.00, <i>p</i> = .051, <i>d</i> = 0.28, 95% CI [−0.001, 0.56]',
-        'The mean of the score (M = 4.20, SD = 0.71, n = 50) was above the test value of 4.00; the difference was 0.20, 95% CI [−0.001, 0.40], t(49) = 2.00, p = .051, d = 0.28, 95% CI [−0.001, 0.56].',
+        # p = .051: no direction asserted; compatible with no difference at alpha (ASA statement, Wasserstein & Lazar, 2016)
+        'The mean of the score (M = 4.20, SD = 0.71, n = 50) was compared with the test value of 4.00; the difference was 0.20, 95% CI [−0.001, 0.40], t(49) = 2.00, p = .051, d = 0.28, 95% CI [−0.001, 0.56], compatible with no difference at α = .05.',
     ),
     # REPORTING-RULES Statistics in text: χ²(2, N = 200) = 9.87, p = .007, V = .22 (APA 7 ch. 6)
     'chi2_independence': (

@@ -147,3 +147,19 @@ def test_a_styles_thin_space_survives_both_forms(tmp_path, space):
     for form in ("stats", "sentence"):
         text = render(record, form, style).to("text")
         assert f"N = 12{space}345" in text, (form, text)
+
+
+NULL_KINDS = ["t_independent", "t_paired", "t_one_sample", "mann_whitney", "wilcoxon", "pearson", "spearman", "kendall",
+              "posthoc_pair", "linear_coefficient", "logistic_coefficient"]
+
+
+@pytest.mark.parametrize("kind", NULL_KINDS)
+def test_a_null_result_asserts_no_direction(kind):
+    # ASA statement on p values (Wasserstein & Lazar, 2016); REPORTING-RULES "Added after the first review":
+    # a result with p >= alpha is not described with a direction or as a difference, nor as evidence of absence
+    r = dataclasses.replace(EXAMPLES[kind], p=0.40)
+    text = render(r, "sentence").plain()
+    assert "compatible with no" in text and "α = .05" in text, text
+    assert not re.search(r"\b(higher|lower|positive|negative|differed|tended|above|below|no effect|proven)\b", text), text
+    significant = render(dataclasses.replace(EXAMPLES[kind], p=0.001), "sentence").plain()
+    assert "compatible with no" not in significant

@@ -66,7 +66,7 @@ ANALYSIS_KINDS = (
     "cronbach_alpha", "auto",
 )
 _TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
-_DATA = {"path", "sheet", "missing", "labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
+_DATA = {"path", "sheet", "missing", "labels", "table_labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
 _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label"}
 _TABLE = {
     "descriptives": {"kind", "id", "title", "variables", "by", "tests", "smd", "show", "weights", "suppress_below", "percent_of"},
@@ -234,7 +234,8 @@ class _Data:
     """The plan's data and what is known about each column."""
 
     frame: "pd.DataFrame"
-    labels: dict[str, str]
+    labels: dict[str, str]            # prose labels (inside sentences)
+    table_labels: dict[str, str]      # table labels (stubs and heads)
     declared: dict[str, str]          # levels the plan declares
     metadata: dict[str, str]          # levels the data file gives
     value_labels: dict[str, Any]
@@ -256,18 +257,22 @@ def _frame(plan: Plan) -> _Data:
     except InputError as exc:
         raise PlanError(f"{plan.where('data.path')}: {exc}") from None
     frame = data.frame
-    for key in ("labels", "levels", "value_labels"):
+    for key in ("labels", "levels", "value_labels", "table_labels"):
         if not isinstance(d.get(key, {}), dict):
             raise plan.fail(f"data.{key}", f"{key} must be a table (name = value), not {type(d[key]).__name__}")
     if not isinstance(d.get("identifiers", []), list):
         raise plan.fail("data.identifiers", "identifiers must be a list of column names")
-    labels = {**data.labels, **d.get("labels", {})}
+    from .records import prose_label, table_label
+
+    given = d.get("labels", {})
+    labels = {**{k: prose_label(v) for k, v in data.labels.items()}, **given}  # a file's variable labels are table labels
+    tables = {**{k: table_label(v) for k, v in given.items()}, **data.labels, **d.get("table_labels", {})}
     value_labels: dict[str, Any] = dict(data.value_labels)
     for name, mapping in d.get("value_labels", {}).items():
         if not isinstance(mapping, dict):
             raise plan.fail("data.value_labels", f"{name}: value labels must be a table (code = \"label\")")
         value_labels[name] = {_code(k): v for k, v in mapping.items()}
-    for key, names in (("labels", d.get("labels", {})), ("levels", d.get("levels", {})), ("value_labels", d.get("value_labels", {})),
+    for key, names in (("labels", d.get("labels", {})), ("table_labels", d.get("table_labels", {})), ("levels", d.get("levels", {})), ("value_labels", d.get("value_labels", {})),
                        ("identifiers", d.get("identifiers", []))):
         for name in names:
             if name not in frame.columns:
@@ -279,7 +284,7 @@ def _frame(plan: Plan) -> _Data:
             check_level(name, level)
         except InputError as exc:
             raise plan.fail("data.levels", str(exc)) from None
-    return _Data(frame, labels, dict(d.get("levels", {})), dict(data.levels), value_labels, list(d.get("identifiers", [])), list(data.notes))
+    return _Data(frame, labels, tables, dict(d.get("levels", {})), dict(data.levels), value_labels, list(d.get("identifiers", [])), list(data.notes))
 
 
 # Arguments that name a grouping variable, and those that name its categories.
@@ -322,18 +327,27 @@ def _arguments(data: _Data, frame: "pd.DataFrame", args: dict[str, Any], kind: s
             extra[name] = factor(frame[name], data.value_labels[name], ordered=data.levels.get(name) == "ordinal")
     frame = frame.assign(**extra) if extra else frame
     args = dict(args)
-    group = args.get("group") or args.get("outcome")
-    if "groups" in args and isinstance(args["groups"], list) and isinstance(args.get("group"), str):
-        codes = label_codes(data.value_labels.get(args["group"]))
-        args["groups"] = [codes.get(_text(g), g) for g in args["groups"]]
-    if "event" in args and isinstance(group, str):
-        codes = label_codes(data.value_labels.get(args["outcome"]))
-        args["event"] = codes.get(_text(args["event"]), args["event"])
+
+    def named(column: Any, value: Any, role: str) -> Any:
+        """The label a code stands for; a value that is neither is refused, listing both."""
+        if not isinstance(column, str) or column not in data.value_labels:
+            return value
+        codes = label_codes(data.value_labels[column])
+        if _text(value) in codes:
+            return codes[_text(value)]
+        if _text(value) in codes.values():
+            return value
+        shown = ", ".join(f"{label} (code {code})" for code, label in codes.items())
+        raise InputError(f"{column}: {role} {value!r} is neither a value label nor a code; the categories are {shown}")
+
+    if isinstance(args.get("groups"), list):
+        args["groups"] = [named(args.get("group"), g, "group") for g in args["groups"]]
+    if "event" in args:
+        args["event"] = named(args.get("outcome"), args["event"], "event")
     if isinstance(args.get("reference"), dict):
-        args["reference"] = {k: label_codes(data.value_labels.get(k)).get(_text(v), v) for k, v in args["reference"].items()}
-    if isinstance(args.get("proportions"), dict) and isinstance(args.get("variable"), str):
-        codes = label_codes(data.value_labels.get(args["variable"]))
-        args["proportions"] = {codes.get(_text(k), k): v for k, v in args["proportions"].items()}
+        args["reference"] = {k: named(k, v, "reference category") for k, v in args["reference"].items()}
+    if isinstance(args.get("proportions"), dict):
+        args["proportions"] = {named(args.get("variable"), k, "category"): v for k, v in args["proportions"].items()}
     return frame, args
 
 
@@ -373,6 +387,7 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
             frame = frame.assign(**{name: scale_score(frame, scale["items"], scoring=scale.get("scoring", "mean"), **options)})
             if scale.get("label"):
                 labels[name] = scale["label"]
+                data.table_labels.setdefault(name, scale["label"][:1].upper() + scale["label"][1:])
             if scale.get("alpha"):
                 record = cronbach_alpha(frame, scale["items"], level=plan.level, scale=labels.get(name, name), labels=labels, **options)
                 record = _with_id(record, f"{name}_alpha")
@@ -406,7 +421,8 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
             matrices[analysis["id"]] = result
             result = result.records()
         found = result if isinstance(result, list) else [result]
-        found = [_with_id(r, analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}") for k, r in enumerate(found)]
+        found = [_with_id(_with_table_labels(r, labels, data.table_labels), analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}")
+                 for k, r in enumerate(found)]
         by_id[analysis["id"]] = found
         records += found
     notes: list[str] = []
@@ -426,6 +442,23 @@ def _key_of(entry: dict[str, Any], message: str) -> str | None:
         if token in map(str, flat):
             return key
     return None
+
+
+def _with_table_labels(record: Result, prose: dict[str, str], tables: dict[str, str]) -> Result:
+    """Each variable of the record with its table label beside its prose one
+    (a category term "x = level" keeps its level)."""
+    from dataclasses import replace
+
+    changed = []
+    for v in record.variables:
+        head = tables.get(v.name)
+        if head and v.table_label is None:
+            said = prose.get(v.name, v.name)
+            if v.label and v.label != said and v.label.startswith(said + " = "):
+                head = head + v.label[len(said):]
+            v = replace(v, table_label=head)
+        changed.append(v)
+    return replace(record, variables=tuple(changed))
 
 
 def _with_id(record: Result, rid: str) -> Result:
@@ -460,7 +493,7 @@ def _table(plan, t, i, frame, labels, data, by_id, matrices, alphas, style, note
                 notes += [f"tables[{i}]: left out {k} (declared an identifier in data.identifiers)" for k in data.identifiers]
             d = describe(
                 frame, variables, by=t.get("by"), levels=data.declared,
-                metadata_levels=data.metadata, value_labels=data.value_labels, labels=labels, show=t.get("show"),
+                metadata_levels=data.metadata, value_labels=data.value_labels, labels={**{k: v[:1].upper() + v[1:] for k, v in labels.items()}, **data.table_labels}, show=t.get("show"),
                 weights=t.get("weights"), tests=bool(t.get("tests")), smd=bool(t.get("smd")), suppress_below=t.get("suppress_below"),
                 percent_of=t.get("percent_of", "valid"), alphas={k: v for k, v in alphas.items() if k in (t.get("variables") or frame.columns)},
             )

@@ -14,6 +14,7 @@ source); the renderer never prints more decimals than that.
 from __future__ import annotations
 
 import json
+import re
 import math
 from dataclasses import dataclass, field, fields
 from types import MappingProxyType
@@ -31,6 +32,8 @@ __all__ = [
     "EffectSize",
     "GroupSummary",
     "Variable",
+    "prose_label",
+    "table_label",
     "Note",
     "Provenance",
     "Result",
@@ -272,26 +275,60 @@ class GroupSummary:
 
 @dataclass(frozen=True, slots=True)
 class Variable:
-    """A variable taking part in the result: column name, the label to print,
-    its role (``outcome``, ``group``, ``x``, ``y``, ``predictor``, ``item`` ...)
-    and its level of measurement when known."""
+    """A variable taking part in the result: column name, its label in prose
+    (reads inside a sentence: "maximum heart rate"), its role (``outcome``,
+    ``group``, ``x``, ``y``, ``predictor``, ``item`` ...), its level of
+    measurement when known, and its label in tables (sentence case, may carry
+    a unit: "Maximum heart rate (bpm)"). Either label is derived from the
+    other when only one is given (:func:`prose_label`, :func:`table_label`)."""
 
     name: str
     label: str | None = None
     role: str | None = None
     level: Level | None = None
+    table_label: str | None = None
     extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
 
     def validate(self, path: str) -> None:
         _text(f"{path}.name", self.name, optional=False)
         _text(f"{path}.label", self.label)
+        _text(f"{path}.table_label", self.table_label)
         _text(f"{path}.role", self.role)
         _choice(f"{path}.level", self.level, get_args(Level), optional=True)
         _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
 
     @property
     def display(self) -> str:
-        return self.label or self.name
+        """The label for prose."""
+        if self.label:
+            return self.label
+        return prose_label(self.table_label) if self.table_label else self.name
+
+    @property
+    def heading(self) -> str:
+        """The label for tables."""
+        if self.table_label:
+            return self.table_label
+        return table_label(self.label) if self.label and self.label != self.name else self.name
+
+
+_UNIT = re.compile(r"\s*\([^()]*\)\s*$")
+
+
+def prose_label(text: str) -> str:
+    """A table label read inside a sentence: a trailing parenthesised unit
+    dropped ("Age (years)" → "age"), the first word in lower case unless it
+    is an acronym or a name with capitals inside ("BMI", "HbA1c")."""
+    text = _UNIT.sub("", text).strip() or text
+    first, _, rest = text.partition(" ")
+    if first[:1].isupper() and not any(ch.isupper() for ch in first[1:]):
+        first = first[:1].lower() + first[1:]
+    return f"{first} {rest}" if rest else first
+
+
+def table_label(text: str) -> str:
+    """A prose label as a table stub or head: the first letter capitalised."""
+    return text[:1].upper() + text[1:] if text else text
 
 
 @dataclass(frozen=True, slots=True)

@@ -152,7 +152,7 @@ def linear_regression(
                     Variable(pred, labels.get(pred, pred) if lev is None else f"{labels.get(pred, pred)} = {lev}", "predictor"),
                     Variable(outcome, labels.get(outcome, outcome), "outcome"),
                 ),
-                details={"term": name, "adjusted": len(meta) > 1, **({"reference": f"{labels.get(pred, pred)} = {ref}"} if ref is not None else {})},
+                details={"term": name, "adjusted": len(meta) > 1, **({"reference": f"{labels.get(pred, pred)} = {ref}", "category": f"{lev}", "reference_category": f"{ref}"} if ref is not None else {})},
                 provenance=prov,
             )
         )
@@ -280,7 +280,7 @@ def logistic_regression(
                     Variable(outcome, labels.get(outcome, outcome), "outcome"),
                 ),
                 details={"term": name, "event": f"{event}", "adjusted": len(meta) > 1,
-                         **({"reference": f"{labels.get(pred, pred)} = {ref}"} if ref is not None else {})},
+                         **({"reference": f"{labels.get(pred, pred)} = {ref}", "category": f"{lev}", "reference_category": f"{ref}"} if ref is not None else {})},
                 provenance=prov,
             )
         )

@@ -35,7 +35,7 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
     rows = []
     for r in records:
         s = r.statistic
-        source = r.details.get("term") if r.kind == "anova_term" else (r.variable("group").display if r.variable("group") else "Groups")
+        source = r.details.get("term") if r.kind == "anova_term" else (r.variable("group").heading if r.variable("group") else "Groups")
         effect = r.effect(effect_name)
         rows.append(Row(StyledText(str(source)), (
             StyledText(num.df(s.df[0]) if s is not None else ""),
@@ -49,7 +49,7 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
     method = next((n.text for n in records[0].notes if n.kind == "method"), "")
     n = records[0].n
     note = (StyledText.from_markup(f"{resolved.symbol('N')} = {num.integer(n)}. ") if n else StyledText()) + (f"{method} " if method else "")
-    note = note + f"Outcome: {outcome.display if outcome else 'the outcome'}."
+    note = note + f"Outcome: {outcome.heading if outcome else 'the outcome'}."
     return TableModel(
         title=StyledText(title or f"Analysis of Variance of {outcome.display if outcome else 'the Outcome'}"),
         columns=(Column(head("df")), Column(head("F")), Column(head("p")), Column(head(effect_name))),

@@ -76,7 +76,7 @@ def regression_table(
         s = r.statistic
         cells.append(_number(num, s.value if s else None, s.symbol if s else "t"))
         cells.append(p_cell(num, r))
-        rows.append(Row(StyledText(predictor.display if predictor else str(r.details.get("term", ""))), tuple(cells)))
+        rows.append(Row(StyledText(predictor.heading if predictor else str(r.details.get("term", ""))), tuple(cells)))
         ref = r.details.get("reference")
         if ref and ref not in references:
             references.append(ref)

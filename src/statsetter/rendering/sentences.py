@@ -83,8 +83,8 @@ class Helpers:
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
 
-    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df".split()
-    _PLAIN = "var cap verdict significant direction_word".split()
+    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible".split()
+    _PLAIN = "var cap verdict significant direction_word null".split()
 
     def raw(self) -> dict[str, Any]:
         """The names a compiled stats form sees: the markup helpers as they
@@ -274,6 +274,25 @@ class Helpers:
 
     def significant(self, r: Result) -> bool:
         return r.p is not None and r.p < r.alpha
+
+    def null(self, r: Result) -> bool:
+        """True when the result does not reach the record's alpha (p ≥ alpha),
+        or, without a p, when the interval of its estimate (else its first
+        effect size) includes the null value: sentences then assert no
+        direction (ASA statement on p values, 2016; REPORTING-RULES.md)."""
+        if r.p is not None:
+            return r.p >= r.alpha
+        for interval, null in ((r.estimate.ci, r.estimate.null) if r.estimate else (None, 0.0),
+                               *((e.ci, e.null) for e in r.effects[:1])):
+            if interval is not None:
+                return interval.low <= null <= interval.high
+        return False
+
+    def compatible(self, r: Result, noun: str = "difference") -> str:
+        """``compatible with no difference at α = .05``: how a null result is
+        read, in our own words (never "no effect", never evidence of absence)."""
+        said = "not statistically significant and " if self.significance_wording else ""
+        return f"{said}compatible with no {escape(noun)} at {self.sym('alpha')} = {self.num.number(r.alpha, 'alpha')}"
 
     def verdict(self, r: Result) -> str:
         """``statistically significant`` / ``not statistically significant`` when

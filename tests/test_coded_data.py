@@ -1,0 +1,239 @@
+"""Coded research data: numeric codes, value labels, levels, identifiers and
+user-missing codes, as SPSS and spreadsheet users hand them over.
+
+Data (none invented here):
+- HEART: the Cleveland heart-disease records of the UCI repository as pingouin
+  bundles them (``pg.read_dataset("chi2_independence")``; Detrano et al.,
+  1989). Written to an SPSS file with pyreadstat, with the value labels of
+  the UCI data dictionary for chest-pain type and sex (re-based to the 0–3
+  and 0/1 codes of this file; the wording of the labels is recalled from
+  memory — the tests check that labels travel, not what they mean), the
+  measurement levels an SPSS user would set, a variable label per column and
+  a case number 1001–1303 as SPSS exports often carry.
+- PENGUINS: the Palmer penguins as pingouin bundles them (Gorman, Williams &
+  Fraser, 2014), whose 11 missing sexes are written as the user-missing code
+  −99, declared as such in the .sav.
+References: statsmodels' formula interface with ``C(x, Treatment(reference=…))``
+for every model (df, F and each coefficient to 1e-8), pandas for counts.
+"""
+
+from __future__ import annotations
+
+import math
+import re
+
+import numpy as np
+import pandas as pd
+import pingouin as pg
+import pyreadstat
+import pytest
+import statsmodels.formula.api as smf
+
+from statsetter import render
+from statsetter.errors import InputError
+from statsetter.io import read_data
+from statsetter.plan import PlanError, load_plan, run_plan
+
+CP = {0: "typical angina", 1: "atypical angina", 2: "non-anginal pain", 3: "asymptomatic"}
+SEX = {0: "female patients", 1: "male patients"}
+TARGET = {0: "no heart disease", 1: "heart disease"}
+TOL = 1e-8
+
+
+@pytest.fixture(scope="module")
+def heart() -> pd.DataFrame:
+    return pg.read_dataset("chi2_independence")
+
+
+@pytest.fixture(scope="module")
+def folder(tmp_path_factory, heart):
+    folder = tmp_path_factory.mktemp("coded")
+    frame = heart.copy()
+    frame.insert(0, "id", np.arange(1001, 1001 + len(frame)))
+    pyreadstat.write_sav(
+        frame, str(folder / "heart.sav"),
+        column_labels={"id": "Patient number", "age": "Age (years)", "sex": "Sex", "cp": "Chest pain type",
+                       "thalach": "Maximum heart rate (bpm)", "chol": "Serum cholesterol (mg/dl)", "target": "Diagnosis"},
+        variable_value_labels={"cp": CP, "sex": SEX, "target": TARGET},
+        variable_measure={"id": "nominal", "cp": "nominal", "sex": "nominal", "target": "nominal", "age": "scale",
+                          "thalach": "scale", "chol": "scale"},
+    )
+    penguins = pg.read_dataset("penguins")
+    coded = penguins.assign(sex=penguins.sex.map({"female": 1, "male": 2}).fillna(-99),
+                            species=penguins.species.map({"Adelie": 1, "Chinstrap": 2, "Gentoo": 3}))
+    coded = coded.drop(columns=["island"])
+    pyreadstat.write_sav(
+        coded, str(folder / "penguins.sav"),
+        variable_value_labels={"sex": {1: "female penguins", 2: "male penguins", -99: "not recorded"},
+                               "species": {1: "Adelie", 2: "Chinstrap", 3: "Gentoo"}},
+        missing_ranges={"sex": [-99]},
+        variable_measure={"sex": "nominal", "species": "nominal", "body_mass_g": "scale"},
+    )
+    return folder
+
+
+def plan_run(folder, body: str):
+    path = folder / "plan.toml"
+    path.write_text(body, encoding="utf-8")
+    return run_plan(load_plan(path))
+
+
+def by_id(result, rid):
+    return next(r for r in result.records if r.id == rid)
+
+
+HEADER = '[data]\npath = "heart.sav"\n'
+
+
+def test_a_nominal_predictor_from_the_file_is_dummy_coded(folder, heart):
+    # reference: statsmodels' formula interface, C(cp, Treatment(reference=0)) (the first code)
+    out = plan_run(folder, HEADER + '[[analyses]]\nid = "hr"\nkind = "linear_regression"\noutcome = "thalach"\npredictors = ["cp", "age"]\n')
+    ref = smf.ols("thalach ~ C(cp, Treatment(reference=0)) + age", data=heart).fit()
+    model = by_id(out, "hr")
+    assert model.statistic.df == (4.0, 298.0)
+    assert model.statistic.value == pytest.approx(ref.fvalue, rel=TOL)
+    assert model.effect("R2").value == pytest.approx(ref.rsquared, rel=TOL)
+    coefs = [r for r in out.records if r.kind == "linear_coefficient"]
+    assert len(coefs) == 4
+    for code in (1, 2, 3):
+        r = next(c for c in coefs if c.details["term"] == f"cp[{CP[code]}]")
+        term = f"C(cp, Treatment(reference=0))[T.{code}]"
+        assert r.estimate.value == pytest.approx(ref.params[term], rel=TOL)
+        assert r.estimate.se == pytest.approx(ref.bse[term], rel=TOL)
+        assert r.p == pytest.approx(ref.pvalues[term], rel=TOL)
+    notes = " ".join(n.text for n in model.notes)
+    assert "cp entered as 3 indicator terms" in notes and "reference category typical angina (the first in code order)" in notes
+    text = " ".join(render(r, "sentence").plain() for r in out.records)
+    # the SPSS variable label is the table label; prose drops the unit and lower-cases the first word
+    assert "Maximum heart rate was higher for atypical angina than for typical angina (chest pain type)" in text
+    assert "A linear regression of maximum heart rate on chest pain type and age" in text
+    assert model.variable("outcome").heading == "Maximum heart rate (bpm)"
+    atypical = next(c for c in coefs if c.details["term"] == "cp[atypical angina]")
+    assert atypical.variable("predictor").heading == "Chest pain type = atypical angina"
+
+
+@pytest.mark.parametrize("given", ['"asymptomatic"', "3"])
+def test_the_reference_is_named_by_label_or_code(folder, heart, given):
+    out = plan_run(folder, HEADER + f'[[analyses]]\nid = "hr"\nkind = "linear_regression"\noutcome = "thalach"\n'
+                                    f'predictors = ["cp", "age"]\nreference = {{ cp = {given} }}\n')
+    ref = smf.ols("thalach ~ C(cp, Treatment(reference=3)) + age", data=heart).fit()
+    r = next(c for c in out.records if c.details.get("term") == "cp[typical angina]")
+    assert r.estimate.value == pytest.approx(ref.params["C(cp, Treatment(reference=3))[T.0]"], rel=TOL)
+    assert (r.details["category"], r.details["reference_category"]) == ("typical angina", "asymptomatic")
+
+
+def test_groups_and_events_by_label_or_code_and_labels_in_sentences(folder, heart):
+    out = plan_run(folder, HEADER + """
+[[analyses]]
+id = "chol_sex"
+kind = "t_independent"
+outcome = "chol"
+group = "sex"
+groups = ["male patients", 0]
+
+[[analyses]]
+id = "disease"
+kind = "logistic_regression"
+outcome = "target"
+predictors = ["age", "sex"]
+event = "heart disease"
+
+[[analyses]]
+id = "hr_cp"
+kind = "anova_oneway"
+outcome = "thalach"
+group = "cp"
+
+[[analyses]]
+id = "pairs"
+kind = "posthoc"
+outcome = "thalach"
+group = "cp"
+
+[[analyses]]
+id = "sex_cp"
+kind = "chi_square"
+row = "sex"
+column = "cp"
+""")
+    t = by_id(out, "chol_sex")
+    male, female = heart.chol[heart.sex == 1], heart.chol[heart.sex == 0]
+    assert [g.label for g in t.groups] == ["male patients", "female patients"]
+    assert (t.groups[0].n, t.groups[1].n) == (len(male), len(female))
+    assert t.groups[0].mean == pytest.approx(male.mean(), rel=TOL)
+    logit = smf.logit("target ~ age + C(sex)", data=heart).fit(disp=False)
+    coef = next(r for r in out.records if r.details.get("term") == "sex[male patients]")
+    assert coef.estimate.value == pytest.approx(logit.params["C(sex)[T.1]"], rel=1e-6)
+    sentences = [render(r, "sentence").plain() for r in out.records]
+    joined = " ".join(sentences)
+    names = set(CP.values()) | set(SEX.values()) | set(TARGET.values())
+    for r in out.records:  # every group is named by its value label, never by a code such as "1" or "2.0"
+        for g in r.groups:
+            assert all(part in names for part in g.label.split(" / ")), (r.id, g.label)
+    assert not re.search(r"\b(?:in|than|between|and|for) -?\d+(?:\.0)? ", joined)
+    assert "typical angina" in joined and "female patients" in joined
+    assert "The odds of diagnosis (heart disease) were lower for male patients than for female patients (sex)" in joined
+    assert "The difference in maximum heart rate between atypical angina and non-anginal pain was" in joined  # p = .271: no direction
+    chi = by_id(out, "sex_cp")
+    counts = pd.crosstab(heart.sex, heart.cp)
+    assert next(g.n for g in chi.groups if g.label == "female patients / asymptomatic") == counts.loc[0, 3]
+
+
+def test_an_unknown_category_lists_labels_and_codes(folder):
+    with pytest.raises(PlanError, match=r"women.*female patients \(code 0\), male patients \(code 1\)"):
+        plan_run(folder, HEADER + '[[analyses]]\nid = "t"\nkind = "t_independent"\noutcome = "chol"\ngroup = "sex"\ngroups = ["women", "men"]\n')
+
+
+def test_the_case_number_is_left_out_of_table_1(folder):
+    out = plan_run(folder, HEADER + '[[tables]]\nkind = "descriptives"\nby = "sex"\n')
+    stubs = [row.stub.plain() for row in out.tables[0].rows]
+    assert not any("Patient number" in s or s.startswith("id") for s in stubs)
+    assert any("left out id" in n for n in out.notes)
+    assert any("typical angina" in s for s in stubs)
+
+
+def test_an_ordinal_predictor_enters_as_scores_and_says_so(folder, heart):
+    # reference: statsmodels OLS with cp as a number (the linear trend the note describes)
+    out = plan_run(folder, HEADER + '[[analyses]]\nid = "hr"\nkind = "linear_regression"\noutcome = "thalach"\n'
+                                    'predictors = ["cp", "age"]\nlevels = { cp = "ordinal" }\n')
+    ref = smf.ols("thalach ~ cp + age", data=heart).fit()
+    model = by_id(out, "hr")
+    assert model.statistic.df == (2.0, 300.0)
+    assert model.statistic.value == pytest.approx(ref.fvalue, rel=TOL)
+    assert any(n.kind == "choice" and "cp is ordinal" in n.text and 'nominal' in n.text for n in model.notes)
+    assert any("cp is ordinal" in n for n in out.notes)  # in the run's summary too
+
+
+def test_user_missing_codes_are_missing_in_every_analysis(folder):
+    # reference: the penguins' 11 missing sexes (palmerpenguins documentation: 333 complete of 344)
+    body = '[data]\npath = "penguins.sav"\n[[analyses]]\nid = "mass"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n'
+    out = plan_run(folder, body)
+    t = by_id(out, "mass")
+    assert [g.label for g in t.groups] == ["female penguins", "male penguins"]
+    assert (t.groups[0].n, t.groups[1].n) == (165, 168)
+    assert "not recorded" not in render(t, "sentence").plain()
+
+
+def test_semicolon_csv_with_decimal_commas(tmp_path, heart):
+    # what European spreadsheet programs export: ';' between fields, ',' as the decimal mark
+    path = tmp_path / "heart.csv"
+    heart.to_csv(path, sep=";", decimal=",", index=False)
+    data = read_data(path)
+    assert list(data.frame.columns) == list(heart.columns)
+    assert np.allclose(data.frame.oldpeak, heart.oldpeak)
+    assert any("semicolon" in n for n in data.notes) and any("decimal mark: comma" in n for n in data.notes)
+    assert not pd.api.types.is_numeric_dtype(read_data(path, sep=";", decimal=".").frame.oldpeak)  # an override is obeyed
+    tab = tmp_path / "heart.txt"
+    heart.to_csv(tab, sep="\t", index=False)
+    assert list(read_data(tab).frame.columns) == list(heart.columns)
+
+
+def test_duplicate_headers_and_infinite_values(tmp_path):
+    path = tmp_path / "d.csv"
+    path.write_text("age,age,score\n1,2,3\n", encoding="utf-8")
+    with pytest.raises(InputError, match="'age' appears twice"):
+        read_data(path)
+    path.write_text("g,y\n" + "".join(f"{'ab'[i % 2]},{'inf' if i == 3 else i}\n" for i in range(30)), encoding="utf-8")
+    data = read_data(path)
+    assert data.frame.y.isna().sum() == 1 and any("y: 1 infinite value(s) treated as missing (first in row 4)" in n for n in data.notes)
+    assert math.isfinite(data.frame.y.max())
