@@ -237,3 +237,32 @@ def test_duplicate_headers_and_infinite_values(tmp_path):
     data = read_data(path)
     assert data.frame.y.isna().sum() == 1 and any("y: 1 infinite value(s) treated as missing (first in row 4)" in n for n in data.notes)
     assert math.isfinite(data.frame.y.max())
+
+
+def test_adapters_keep_the_names_a_fit_carries(heart):
+    # statsmodels' formula interface names its outcome (endog_names) and terms (exog_names);
+    # a categorical term C(x)[T.b] is level b of x against the reference the formula states
+    from statsetter.adapters import to_records
+
+    fit = smf.ols("thalach ~ C(cp, Treatment(reference=3)) + age", data=heart).fit()
+    records = to_records(fit, labels={"thalach": "maximum heart rate", "cp": "chest pain type"})
+    text = " ".join(render(r, "sentence").plain() for r in records)
+    assert "A linear regression of maximum heart rate on chest pain type and age" in text
+    assert "Maximum heart rate was lower for 0 than for 3 (chest pain type)" in text
+    assert "the predictor" not in text and "the outcome" not in text
+    logit = smf.logit("target ~ age + C(sex)", data=heart).fit(disp=False)
+    sex = next(r for r in to_records(logit) if r.details["term"] == "sex[1]")
+    assert (sex.details["category"], sex.details["reference_category"]) == ("1", "0")  # the level no column names
+
+
+def test_scipy_objects_take_names_without_samples(heart):
+    # scipy's results carry no names: labels= by role name the variables, and without them a warning asks
+    from scipy import stats
+
+    from statsetter.adapters import to_records
+
+    res = stats.pearsonr(heart.chol, heart.thalach)
+    r = to_records(res, labels={"x": "serum cholesterol", "y": "maximum heart rate"})[0]
+    assert render(r, "sentence").plain().startswith("The correlation between serum cholesterol and maximum heart rate")
+    with pytest.warns(UserWarning, match=r"labels=\{'x': '...', 'y': '...'\}"):
+        to_records(res)

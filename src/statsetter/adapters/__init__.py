@@ -84,8 +84,9 @@ def to_records(
     if data is not None and not columns:
         raise InputError("data= needs columns=, the column arguments of the matching analysis (e.g. {'outcome': 'y', 'group': 'g'})")
     ctx = Context(adapter.name, data, dict(columns or {}), samples, groups, dict(labels or {}), n, level, dict(options))
-    mine = adapter.build(obj, ctx)
+    mine = _named(adapter.build(obj, ctx), ctx)
     if not ctx.has_data or adapter.analysis is None:
+        _ask_for_names(mine, adapter.name)
         return mine
     if samples is not None:
         if adapter.design is None:
@@ -100,3 +101,39 @@ def to_records(
     except KeyError as exc:
         raise InputError(f"columns: {adapter.name} needs the column argument {exc.args[0]!r}") from None
     return merge(mine, ours, ctx, adapter.library, adapter.key)
+
+
+# The roles each kind's sentence names; an object that carries no names gets them from labels=.
+_ROLES = {
+    "pearson": ("x", "y"), "spearman": ("x", "y"), "kendall": ("x", "y"),
+    "t_independent": ("outcome",), "t_paired": ("outcome",), "t_one_sample": ("outcome",), "mann_whitney": ("outcome",),
+    "wilcoxon": ("outcome",), "kruskal_wallis": ("outcome", "group"), "anova_oneway": ("outcome", "group"), "posthoc_pair": ("outcome",),
+    "chi2_independence": ("row", "column"), "fisher_exact": ("row", "column"), "chi2_goodness_of_fit": ("variable",),
+    "linear_model": ("outcome",), "logistic_model": ("outcome",), "linear_coefficient": ("predictor", "outcome"),
+    "logistic_coefficient": ("predictor", "outcome"),
+}
+
+
+def _named(records: list[Result], ctx: Context) -> list[Result]:
+    """Variables the object does not name, from ``labels=`` keyed by role
+    ("x", "y", "outcome", "group", "row", "column", "predictor")."""
+    from dataclasses import replace
+
+    from ..records import Variable
+
+    out = []
+    for r in records:
+        have = {v.role for v in r.variables}
+        extra = tuple(Variable(role, ctx.labels[role], role) for role in _ROLES.get(r.kind, ()) if role not in have and role in ctx.labels)
+        out.append(replace(r, variables=r.variables + extra) if extra else r)
+    return out
+
+
+def _ask_for_names(records: list[Result], source: str) -> None:
+    """A warning when a sentence would have to say "the outcome" or "the first variable"."""
+    import warnings
+
+    missing = sorted({role for r in records for role in _ROLES.get(r.kind, ()) if role not in {v.role for v in r.variables}})
+    if missing:
+        example = ", ".join(f"{role!r}: '...'" for role in missing)
+        warnings.warn(f"{source}: the result does not name its variables; pass labels={{{example}}} so that sentences name them", stacklevel=3)

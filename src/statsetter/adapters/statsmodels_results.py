@@ -8,7 +8,7 @@ import re
 from typing import Any
 
 from ..errors import InputError
-from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
+from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from ._core import Adapter, Context, absent, base, pair_key, term_key
 
 LIB = "statsmodels"
@@ -53,6 +53,66 @@ def _level(ctx: Context) -> float:
     return ctx.level
 
 
+_CATEGORY_TERM = re.compile(r"^(?:C\((?P<var>[^,()]+)(?P<opts>,.*)?\)|(?P<plain>[^\[\]]+))\[T\.(?P<level>.+)\]$")
+_REFERENCE = re.compile(r"reference\s*=\s*['\"]?([^'\")]+)['\"]?")
+
+
+def _names(res: Any, ctx: Context, names: list[str]) -> tuple[Variable | None, dict[str, tuple[Variable, dict[str, str]]]]:
+    """The outcome and each term as variables, named from the fit (the
+    formula's terms or ``exog_names``, ``endog_names``) and labelled by
+    ``labels=``: a categorical term ``C(x)[T.b]`` becomes level b of x against
+    x's reference category (the formula's ``reference=``, else the level no
+    column names, in sorted order)."""
+    labels = ctx.labels
+    outcome_name = getattr(res.model, "endog_names", None)
+    outcome_name = outcome_name if isinstance(outcome_name, str) and outcome_name not in ("y", "endog") else None
+    outcome = labels.get("outcome") or (labels.get(outcome_name) if outcome_name else None)
+    outcome_var = Variable(outcome_name or "outcome", outcome or outcome_name, "outcome") if (outcome or outcome_name) else None
+    seen: dict[str, list[str]] = {}
+    parsed = {}
+    for name in names:
+        m = _CATEGORY_TERM.match(str(name))
+        if m:
+            var = (m.group("var") or m.group("plain")).strip()
+            seen.setdefault(var, []).append(m.group("level"))
+            parsed[name] = (var, m.group("level"), m.group("opts") or "")
+    out: dict[str, tuple[Variable, dict[str, str]]] = {}
+    for name in names:
+        if name in _INTERCEPT:
+            continue
+        if name in parsed:
+            var, level, opts = parsed[name]
+            ref = _REFERENCE.search(opts)
+            reference = ref.group(1).strip() if ref else _missing_level(res, var, seen[var])
+            label = labels.get(var, var)
+            extra = {"category": level, **({"reference_category": reference, "reference": f"{label} = {reference}"} if reference else {})}
+            out[name] = (Variable(var, f"{label} = {level}", "predictor"), extra)
+        elif str(name) in labels or re.fullmatch(r"[A-Za-z_][\w.]*", str(name)):
+            out[name] = (Variable(str(name), labels.get(str(name), str(name)), "predictor"), {})
+    return outcome_var, out
+
+
+def _missing_level(res: Any, var: str, levels: list[str]) -> str | None:
+    """The level of ``var`` in the fit's data that no column names (the reference)."""
+    frame = getattr(getattr(res.model, "data", None), "frame", None)
+    if frame is None or var not in getattr(frame, "columns", ()):
+        return None
+    from ..coding import categories, category_text
+
+    rest = [category_text(v) for v in categories(frame[var]) if category_text(v) not in levels]
+    return rest[0] if len(rest) == 1 else None
+
+
+def _predictors(terms: list[str], named: dict[str, tuple[Variable, dict[str, str]]], labels: Any) -> str:
+    shown: list[str] = []
+    for t in terms:
+        v = named[t][0].name if t in named else term_name(t)
+        text = labels.get(v, v)
+        if text not in shown:
+            shown.append(text)
+    return shown[0] if len(shown) == 1 else ", ".join(shown[:-1]) + " and " + shown[-1]
+
+
 def ols(res: Any, ctx: Context) -> list[Result]:
     import numpy as np
 
@@ -62,9 +122,10 @@ def ols(res: Any, ctx: Context) -> list[Result]:
     terms = [n for n in names if n not in _INTERCEPT]
     n = int(res.nobs)
     weighted = type(res.model).__name__ == "WLS"
+    outcome, named = _names(res, ctx, names)
     model = _base(ctx, "linear_model", [], statistic=Statistic("F", float(res.fvalue), (float(res.df_model), float(res.df_resid))),
                   p=float(res.f_pvalue), n=n, effects=(EffectSize("R2", float(res.rsquared)), EffectSize("R2_adj", float(res.rsquared_adj))),
-                  details={"predictors": " and ".join(term_name(t) for t in terms)})
+                  details={"predictors": _predictors(terms, named, ctx.labels)}, variables=(outcome,) if outcome else ())
     out = [model]
     y = np.asarray(res.model.endog, dtype=float)
     X = np.asarray(res.model.exog, dtype=float)
@@ -81,7 +142,8 @@ def ols(res: Any, ctx: Context) -> list[Result]:
         out.append(_base(ctx, "linear_coefficient", notes, statistic=Statistic("t", float(np.asarray(res.tvalues)[j]), (float(res.df_resid),)),
                          p=float(np.asarray(res.pvalues)[j]), n=n,
                          estimate=Estimate("B", b, se=float(np.asarray(res.bse)[j]), ci=Interval(level, float(ci[j, 0]), float(ci[j, 1]))),
-                         effects=effects, details={"term": term_name(name), "adjusted": len(terms) > 1}))
+                         effects=effects, details={"term": term_name(name), "adjusted": len(terms) > 1, **named.get(name, (None, {}))[1]},
+                         variables=_coefficient_variables(named.get(name), outcome)))
     return out
 
 
@@ -95,8 +157,10 @@ def logit(res: Any, ctx: Context) -> list[Result]:
     nagelkerke = cox_snell / (1 - math.exp(2 * llnull / n))
     names = list(res.model.exog_names)
     terms = [t for t in names if t not in _INTERCEPT]
+    outcome, named = _names(res, ctx, names)
     model = _base(ctx, "logistic_model", [], statistic=Statistic("chi2", float(res.llr), (float(res.df_model),)), p=float(res.llr_pvalue), n=n,
-                  effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"),), details={"predictors": " and ".join(term_name(t) for t in terms)})
+                  effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"),), details={"predictors": _predictors(terms, named, ctx.labels)},
+                  variables=(outcome,) if outcome else ())
     ci = np.asarray(res.conf_int(alpha=1 - level))
     out = [model]
     for j, name in enumerate(names):
@@ -107,8 +171,13 @@ def logit(res: Any, ctx: Context) -> list[Result]:
         out.append(_base(ctx, "logistic_coefficient", [], statistic=Statistic("z", float(np.asarray(res.tvalues)[j])), p=float(np.asarray(res.pvalues)[j]), n=n,
                          estimate=Estimate("B", b, se=float(np.asarray(res.bse)[j]), ci=Interval(level, low, high)),
                          effects=(EffectSize("OR", math.exp(b), Interval(level, math.exp(low), math.exp(high)), ratio=True),),
-                         details={"term": term_name(name), "adjusted": len(terms) > 1}))
+                         details={"term": term_name(name), "adjusted": len(terms) > 1, **named.get(name, (None, {}))[1]},
+                         variables=_coefficient_variables(named.get(name), outcome)))
     return out
+
+
+def _coefficient_variables(named: "tuple[Variable, dict[str, str]] | None", outcome: Variable | None) -> tuple[Variable, ...]:
+    return tuple(v for v in ((named[0] if named else None), outcome) if v is not None)
 
 
 def anova_lm(frame: Any, ctx: Context) -> list[Result]:
