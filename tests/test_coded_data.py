@@ -251,7 +251,7 @@ def test_adapters_keep_the_names_a_fit_carries(heart):
     assert "Maximum heart rate was lower for 0 than for 3 (chest pain type)" in text
     assert "the predictor" not in text and "the outcome" not in text
     logit = smf.logit("target ~ age + C(sex)", data=heart).fit(disp=False)
-    sex = next(r for r in to_records(logit) if r.details["term"] == "sex[1]")
+    sex = next(r for r in to_records(logit) if r.details.get("term") == "sex[1]")
     assert (sex.details["category"], sex.details["reference_category"]) == ("1", "0")  # the level no column names
 
 
