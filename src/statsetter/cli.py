@@ -19,7 +19,12 @@ from .errors import InputError, StatsetterError
 
 __all__ = ["main"]
 
-EXIT_USAGE = 2
+# The exit-status contract (README, "Exit status"), the same for every command.
+EXIT_OK = 0           # success; nothing found
+EXIT_FINDINGS = 1     # audit findings, unknown markers
+EXIT_USAGE = 2        # a usage or input error (bad file, plan, data, option)
+EXIT_ENVIRONMENT = 3  # disk full, permission denied, a missing optional dependency
+EXIT_INTERNAL = 4     # a bug in statsetter: one line here, the traceback in a log file
 
 # short names for ``statsetter format``; values are (kind, statistic symbol, details)
 _FORMAT_KINDS: dict[str, tuple[str, str | None, dict[str, str]]] = {
@@ -63,6 +68,7 @@ def _build_parser() -> argparse.ArgumentParser:
         description="Statistical results as manuscript-ready text and tables, in a chosen reporting style.",
     )
     parser.add_argument("--version", action="store_true", help="print the version and exit")
+    parser.add_argument("--debug", action="store_true", help="print the full traceback of an internal error")
     sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=_Parser)
 
     def style_options(p: argparse.ArgumentParser) -> None:
@@ -382,12 +388,12 @@ def _read_records(names: Sequence[str]):  # type: ignore[no-untyped-def]
 
     out = []
     for name in names:
+        from .files import read_input
+
         try:
-            text = Path(name).read_text(encoding="utf-8")
-        except FileNotFoundError:
-            raise InputError(f"{name}: no such file") from None
-        except (OSError, UnicodeDecodeError) as exc:
-            raise InputError(f"{name}: cannot read ({exc})") from None
+            text = read_input(name, "records").decode("utf-8")
+        except UnicodeDecodeError as exc:
+            raise InputError(f"{name}: not UTF-8 text (byte {exc.start})") from None
         found = load_records(text, source=name)
         if not found:
             raise InputError(f"{name}: holds no records")
@@ -592,16 +598,84 @@ def main(argv: Sequence[str] | None = None) -> int:
         parser.print_help()
         return 0
     handlers = {"format": _cmd_format, "render": _cmd_render, "fill": _cmd_fill, "describe": _cmd_describe, "audit": _cmd_audit, "run": _cmd_run, "styles": _cmd_styles}
+    from .errors import EnvironmentFailure, MissingExtra
+    from .files import inputs_scope
+
+    previous = _on_terminate()
     try:
-        return handlers[ns.command](ns)
+        with inputs_scope():
+            return handlers[ns.command](ns)
+    except EnvironmentFailure as exc:
+        sys.stderr.write(f"statsetter {ns.command}: error: {exc}\n")
+        return EXIT_ENVIRONMENT
     except StatsetterError as exc:
         sys.stderr.write(f"statsetter {ns.command}: error: {exc}\n")
         return EXIT_USAGE
     except KeyboardInterrupt:
-        sys.stderr.write("statsetter: interrupted\n")
+        sys.stderr.write("statsetter: interrupted; nothing was left half-written\n")
         return 130
     except BrokenPipeError:
         return 0
+    except ModuleNotFoundError as exc:
+        sys.stderr.write(f"statsetter {ns.command}: error: {MissingExtra(exc.name or str(exc), f'statsetter {ns.command}')}\n")
+        return EXIT_ENVIRONMENT
+    except MemoryError:
+        sys.stderr.write(f"statsetter {ns.command}: error: out of memory; the input is too large for this machine\n")
+        return EXIT_ENVIRONMENT
+    except OSError as exc:
+        where = f" ({exc.filename})" if exc.filename else ""
+        sys.stderr.write(f"statsetter {ns.command}: error: {exc.strerror or exc}{where}\n")
+        return EXIT_ENVIRONMENT
+    except RecursionError:
+        sys.stderr.write(f"statsetter {ns.command}: error: the input is nested too deeply to read\n")
+        return EXIT_USAGE
+    except Exception:  # a bug: one line, the traceback in a log file
+        return _internal_error(ns)
+    finally:
+        _restore(previous)
+
+
+def _on_terminate():  # type: ignore[no-untyped-def]
+    """SIGTERM (a killed run) unwinds like Ctrl-C, so that staged outputs are removed."""
+    import signal
+    import threading
+
+    if threading.current_thread() is not threading.main_thread():
+        return None
+
+    def stop(signum, frame):  # type: ignore[no-untyped-def]
+        raise KeyboardInterrupt
+
+    try:
+        return signal.signal(signal.SIGTERM, stop)
+    except (ValueError, OSError):  # pragma: no cover - not the main thread of the interpreter
+        return None
+
+
+def _restore(previous) -> None:  # type: ignore[no-untyped-def]
+    import signal
+
+    if previous is not None:
+        signal.signal(signal.SIGTERM, previous)
+
+
+def _internal_error(ns: argparse.Namespace) -> int:
+    import tempfile
+    import time
+    import traceback
+
+    text = traceback.format_exc()
+    if getattr(ns, "debug", False):
+        sys.stderr.write(text)
+    try:
+        fd, log = tempfile.mkstemp(prefix=f"statsetter-{ns.command}-{time.strftime('%Y%m%d-%H%M%S')}-", suffix=".log")
+        with open(fd, "w", encoding="utf-8") as fh:
+            fh.write(f"statsetter {ns.command}: internal error\nargs: {sys.argv[1:]}\n\n{text}")
+        where = f"the full traceback is in {log}"
+    except OSError:
+        where = "the traceback could not be saved"
+    sys.stderr.write(f"statsetter {ns.command}: internal error (a bug in statsetter, not in your input); {where}; rerun with --debug to print it\n")
+    return EXIT_INTERNAL
 
 
 if __name__ == "__main__":

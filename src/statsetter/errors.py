@@ -7,7 +7,7 @@ two lines and exits with status 2; no traceback reaches a user.
 
 from __future__ import annotations
 
-__all__ = ["StatsetterError", "RecordError", "StyleError", "TemplateError", "InputError"]
+__all__ = ["StatsetterError", "RecordError", "StyleError", "TemplateError", "InputError", "EnvironmentFailure", "MissingExtra", "EXTRAS"]
 
 
 class StatsetterError(Exception):
@@ -37,3 +37,24 @@ class TemplateError(StatsetterError):
 
 class InputError(StatsetterError, ValueError):
     """Bad input data, file or command-line value; the message names it."""
+
+
+class EnvironmentFailure(StatsetterError):
+    """Not the input's fault: a full disk, a folder without permission, a
+    missing optional dependency. The CLI exits with status 3."""
+
+
+# Which extra installs each optional module.
+EXTRAS = {
+    "numpy": "analyses", "scipy": "analyses", "pandas": "analyses", "statsmodels": "analyses", "pingouin": "analyses",
+    "docx": "docx", "lxml": "docx", "openpyxl": "files", "pyreadstat": "files", "pyarrow": "files",
+}
+
+
+class MissingExtra(EnvironmentFailure):
+    """An optional dependency is not installed; the message names the extra."""
+
+    def __init__(self, module: str, doing: str = "this") -> None:
+        extra = EXTRAS.get(module.split(".")[0], "all")
+        self.module = module
+        super().__init__(f"{doing} needs {module.split('.')[0]}, which is not installed; install it with: pip install 'statsetter[{extra}]'")

@@ -75,7 +75,7 @@ _TABLE = {
     "regression": {"kind", "id", "title", "analysis"},
     "anova": {"kind", "id", "title", "analysis"},
 }
-_OUTPUTS = {"folder", "docx", "md", "tex", "html", "json"}
+_OUTPUTS = {"folder", "docx", "md", "tex", "html", "json", "allow_outside"}
 _CHAPTER = {"path", "out"}
 
 
@@ -143,18 +143,21 @@ def _unknown(plan: Plan, where: str, keys: set[str], allowed: set[str]) -> None:
 def load_plan(path: "str | Path") -> Plan:
     """Read and check a plan file (nothing is computed yet)."""
     p = Path(path)
+    from .files import read_input
+
     try:
-        text = p.read_text(encoding="utf-8")
-    except FileNotFoundError:
-        raise PlanError(f"{p}: no such file") from None
-    except (OSError, UnicodeDecodeError) as exc:
-        raise PlanError(f"{p}: cannot read ({exc})") from None
+        text = read_input(p, "plan").decode("utf-8")
+    except InputError as exc:
+        raise PlanError(str(exc)) from None
+    except UnicodeDecodeError as exc:
+        raise PlanError(f"{p}: not UTF-8 text (byte {exc.start})") from None
     try:
         raw = tomllib.loads(text)
     except tomllib.TOMLDecodeError as exc:
         raise PlanError(f"{p}: not valid TOML ({exc})") from None
     plan = Plan(p, {}, lines=_lines(text))
     _unknown(plan, "", set(raw), _TOP)
+    _check_shapes(plan, raw)
     data = raw.get("data")
     if not isinstance(data, dict) or "path" not in data:
         raise plan.fail("data", "the plan needs a [data] table with a path")
@@ -205,7 +208,96 @@ def load_plan(path: "str | Path") -> Plan:
         if "path" not in raw["chapter"]:
             raise plan.fail("chapter", "the chapter needs a path")
         plan.chapter = raw["chapter"]
+    _check_targets(plan)
     return plan
+
+
+def _check_targets(plan: Plan) -> None:
+    """Outputs stay inside the plan's folder (unless ``allow_outside = true``),
+    never share a path, and are never one of the plan's inputs."""
+    import os
+
+    if not isinstance(plan.outputs.get("allow_outside", False), bool):
+        raise plan.fail("outputs.allow_outside", "allow_outside must be true or false")
+    for key, value in plan.outputs.items():
+        if key != "allow_outside" and not isinstance(value, str):
+            raise plan.fail(f"outputs.{key}", f"{key} must be a file name in quotes, not {type(value).__name__}")
+    home = os.path.realpath(plan.path.parent)
+    seen: dict[str, str] = {}
+    inputs = {os.path.normcase(os.path.realpath(plan.path)): "the plan itself", os.path.normcase(os.path.realpath(plan.resolve(plan.data["path"]))): "the data file"}
+    if plan.chapter:
+        inputs[os.path.normcase(os.path.realpath(plan.resolve(plan.chapter["path"])))] = "the chapter"
+    if plan.style and str(plan.style).endswith(".toml"):
+        inputs[os.path.normcase(os.path.realpath(plan.resolve(plan.style)))] = "the style file"
+    for key, path in _targets(plan).items():
+        real = os.path.normcase(os.path.realpath(path))
+        where = "outputs.folder" if key == "folder" else f"chapter.out" if key == "chapter" else f"outputs.{key}"
+        if not plan.outputs.get("allow_outside") and os.path.commonpath([home, os.path.realpath(path)]) != home:
+            raise plan.fail(where, f"{path} is outside the plan's folder {home}; write allow_outside = true under [outputs] to allow it")
+        if key == "folder":
+            continue
+        if real in inputs:
+            raise plan.fail(where, f"{path} is {inputs[real]}; an output never replaces an input")
+        if real in seen:
+            raise plan.fail(where, f"{path} is also the path of {seen[real]}; give each output its own file")
+        seen[real] = where
+
+
+def _targets(plan: Plan) -> dict[str, Path]:
+    """Every path the plan writes: the folder, each output, the filled chapter."""
+    outputs = {k: v for k, v in plan.outputs.items() if k not in ("folder", "allow_outside")} or dict(_DEFAULT_OUTPUTS)
+    folder = plan.resolve(plan.outputs.get("folder", "out"))
+    out: dict[str, Path] = {"folder": folder, **{fmt: folder / name for fmt, name in outputs.items()}}
+    if plan.chapter:
+        source = plan.resolve(plan.chapter["path"])
+        out["chapter"] = folder / plan.chapter.get("out", f"{source.stem}-filled.docx")
+    return out
+
+
+_TYPE_WORDS = {str: "text in quotes", dict: "a table (name = value, or [section])", list: "a list [...]", bool: "true or false"}
+
+
+def _check_shapes(plan: Plan, raw: dict[str, Any]) -> None:
+    """Every key holds the kind of TOML value it needs, or the line is named."""
+
+    def need(key: str, value: Any, kinds: tuple[type, ...]) -> None:
+        if not isinstance(value, kinds) or (isinstance(value, bool) and bool not in kinds):
+            words = " or ".join(_TYPE_WORDS.get(k, "a number") for k in kinds)
+            raise plan.fail(key, f"{key.rsplit('.', 1)[-1]} must be {words}, not {value!r}"[:300])
+
+    for key, kinds in (("title", (str,)), ("style", (str,)), ("level", (int, float)), ("alpha", (int, float)),
+                       ("data", (dict,)), ("outputs", (dict,)), ("chapter", (dict,))):
+        if key in raw:
+            need(key, raw[key], kinds)
+    for key in ("scales", "analyses", "tables"):
+        if key in raw:
+            need(key, raw[key], (list,))
+            for i, entry in enumerate(raw[key]):
+                if not isinstance(entry, dict):
+                    raise plan.fail(f"{key}[{i}]", f"each entry of {key} must be a table ([[{key}]] with keys), not {entry!r}"[:300])
+    data = raw.get("data", {})
+    for key, kinds in (("path", (str,)), ("sheet", (str, int)), ("missing", (list, dict)), ("labels", (dict,)), ("table_labels", (dict,)),
+                       ("levels", (dict,)), ("value_labels", (dict,)), ("encoding", (str,)), ("identifiers", (list,)), ("sep", (str,)), ("decimal", (str,))):
+        if key in data:
+            need(f"data.{key}", data[key], kinds)
+    for key in ("labels", "table_labels", "levels"):
+        for name, value in data.get(key, {}).items():
+            need(f"data.{key}", value, (str,))
+    for name, level in data.get("levels", {}).items():
+        from .levels import LEVELS
+
+        if level not in LEVELS:
+            raise plan.fail("data.levels", f"{name}: level {level!r} is not one of {', '.join(LEVELS)}")
+    for i, entry in enumerate(raw.get("analyses", [])):
+        for key in ("id", "kind"):
+            if key in entry:
+                need(f"analyses[{i}].{key}", entry[key], (str,))
+        if isinstance(entry.get("levels"), dict):
+            from .levels import LEVELS
+
+            for name, level in entry["levels"].items():
+                if level not in LEVELS:
+                    raise plan.fail(f"analyses[{i}].levels", f"{name}: level {level!r} is not one of {', '.join(LEVELS)}")
 
 
 def _function(kind: str) -> Callable[..., Any]:
@@ -526,32 +618,35 @@ def write_outputs(plan: Plan, result: RunResult) -> RunResult:
     """Write every output of the plan and fill the chapter; the paths in ``written``."""
     from .export.section import write_section
 
+    from .errors import EnvironmentFailure
+    from .files import transaction
+
     style = _style(plan)
-    outputs = {k: v for k, v in plan.outputs.items() if k != "folder"} or dict(_DEFAULT_OUTPUTS)
-    folder = plan.resolve(plan.outputs.get("folder", "out"))
+    paths = _targets(plan)
+    folder = paths.pop("folder")
+    chapter_out = paths.pop("chapter", None)
     try:
         folder.mkdir(parents=True, exist_ok=True)
     except OSError as exc:
-        raise plan.fail("outputs.folder", f"cannot create {folder} ({exc.strerror or exc})") from None
+        raise EnvironmentFailure(f"{plan.where('outputs.folder')}: cannot create {folder} ({exc.strerror or exc})") from None
     data_path = plan.resolve(plan.data["path"])
-    targets = {fmt: folder / name for fmt, name in outputs.items()}
     inputs = [plan.path, data_path] + ([plan.resolve(plan.chapter["path"])] if plan.chapter else [])
-    written = write_section(result.records, result.tables, style, plan.title, targets, inputs)
     notes: list[str] = []
-    if plan.chapter:
-        from .export.markers import describe, fill_chapter
+    with transaction():  # every output, or none: the previous run's files stay until all are written
+        written = write_section(result.records, result.tables, style, plan.title, paths, inputs)
+        if plan.chapter and chapter_out is not None:
+            from .export.markers import describe, fill_chapter
 
-        source = plan.resolve(plan.chapter["path"])
-        out = folder / plan.chapter.get("out", f"{source.stem}-filled.docx")
-        try:
-            report = fill_chapter(source, result.records, out, style)
-        except InputError as exc:
-            raise PlanError(f"{plan.where('chapter.path')}: {exc}") from None
-        written.append(("chapter", out))
-        notes = list(describe(report))
-        if report.unknown:
-            notes.append("unknown markers were left as they are")
-        result.notes += notes
-        result.unknown_markers = bool(report.unknown)
+            source = plan.resolve(plan.chapter["path"])
+            try:
+                report = fill_chapter(source, result.records, chapter_out, style)
+            except InputError as exc:
+                raise PlanError(f"{plan.where('chapter.path')}: {exc}") from None
+            written.append(("chapter", chapter_out))
+            notes = list(describe(report))
+            if report.unknown:
+                notes.append("unknown markers were left as they are")
+            result.unknown_markers = bool(report.unknown)
+    result.notes += notes
     result.written += written
     return result

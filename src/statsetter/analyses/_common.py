@@ -30,7 +30,12 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
         raise InputError(f"{name}: not numeric (dtype {s.dtype}); a numeric outcome is required")
     if s.notna().sum() == 0:
         raise InputError(f"{name}: every value is missing")
-    return s.astype(float)
+    x = s.astype(float)
+    infinite = x.abs() == float("inf")
+    if infinite.any():
+        first = int(infinite.to_numpy().argmax()) + 1
+        raise InputError(f"{name}: {int(infinite.sum())} infinite value(s) (first in row {first}); set them missing or correct them")
+    return x
 
 
 def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note]:

@@ -28,8 +28,12 @@ def _ncx2_limits(chi2: float, df: int, level: float) -> tuple[float, float]:
         if f(0.0) < 0:
             return 0.0
         hi = max(1.0, chi2)
-        while f(hi) > 0:
+        for _ in range(64):  # bracket the root; the bound is reached only for absurd inputs
+            if not f(hi) > 0:
+                break
             hi *= 2
+        else:
+            raise InputError(f"chi-square = {chi2:g}, df = {df}: the interval search did not converge")
         return optimize.brentq(f, 0.0, hi, xtol=1e-12, maxiter=500)
 
     return solve(1 - alpha), solve(alpha)

@@ -5,12 +5,14 @@ from __future__ import annotations
 import math
 from typing import TYPE_CHECKING
 
+from ..errors import InputError
 from ..records import EffectSize, Interval
 
 if TYPE_CHECKING:
     import numpy as np
 
 NCT_METHOD = "noncentral t (Steiger & Fouladi, 1997)"
+_MAX_DOUBLINGS = 64  # a bracket of 2^64 around t: far beyond any finite statistic
 
 
 def nct_ci(t: float, df: float, level: float) -> tuple[float, float]:
@@ -19,6 +21,8 @@ def nct_ci(t: float, df: float, level: float) -> tuple[float, float]:
     from scipy import optimize, stats
 
     alpha = (1 - level) / 2
+    if not (math.isfinite(t) and math.isfinite(df) and df > 0):
+        raise InputError(f"t = {t!r} with df = {df!r}: no interval can be computed for a statistic that is not finite")
 
     def cdf(ncp: float) -> float:
         value = float(stats.nct.cdf(t, df, ncp))
@@ -30,13 +34,21 @@ def nct_ci(t: float, df: float, level: float) -> tuple[float, float]:
         f = lambda ncp: cdf(ncp) - target  # noqa: E731
         step = 1.0
         lo = hi = t
-        while f(lo) < 0:
+        for _ in range(_MAX_DOUBLINGS):  # bracket the root; the bound is reached only for absurd inputs
+            if not f(lo) < 0:
+                break
             lo -= step
             step *= 2
+        else:
+            raise InputError(f"t = {t:g}, df = {df:g}: the interval search did not converge")
         step = 1.0
-        while f(hi) > 0:
+        for _ in range(_MAX_DOUBLINGS):
+            if not f(hi) > 0:
+                break
             hi += step
             step *= 2
+        else:
+            raise InputError(f"t = {t:g}, df = {df:g}: the interval search did not converge")
         return optimize.brentq(f, lo, hi, xtol=1e-13, rtol=1e-15, maxiter=500)
 
     return solve(1 - alpha), solve(alpha)

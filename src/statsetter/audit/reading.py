@@ -54,7 +54,7 @@ def read_units(path: "str | Path", encoding: str = "utf-8") -> list[Unit]:
         raise InputError(f"{p}: cannot audit {p.suffix or 'a file without extension'}; statsetter reads .docx, .md, .txt and .tex")
     if p.is_file() and p.stat().st_size > MAX_TEXT_BYTES:
         raise InputError(f"{p}: {p.stat().st_size:,} bytes, over the {MAX_TEXT_BYTES:,}-byte limit for a text manuscript")
-    raw = read_start(p)
+    raw = read_start(p, kind="manuscript")
     if not raw.strip():
         raise InputError(f"{p}: the file is empty")
     if raw.startswith(b"PK\x03\x04") or b"\x00" in raw[:4096]:

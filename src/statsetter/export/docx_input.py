@@ -34,7 +34,7 @@ def open_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> "Docum
 def check_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> None:
     """Refuse, with a clear message, what is not a safe Word document to read."""
     p = Path(path)
-    head = read_start(p, 8)
+    head = read_start(p, 8, kind="chapter")
     if head == _OLE:
         raise InputError(f"{p}: password-protected (encrypted) or an old binary .doc; save it as an unprotected .docx")
     if not head.startswith(b"PK"):

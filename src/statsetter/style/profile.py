@@ -16,7 +16,7 @@ from pathlib import Path
 from types import MappingProxyType
 from typing import Any, Callable, Mapping
 
-from ..errors import StyleError
+from ..errors import InputError, StyleError
 
 __all__ = ["Style", "load_style", "builtin_styles", "check_style_file"]
 
@@ -336,12 +336,16 @@ def _resolve(data: dict[str, Any], source: str, base_dir: Path | None, seen: tup
 
 def _read_file(path: Path, referrer: str | None = None) -> tuple[dict[str, Any], str]:
     source = str(path)
-    try:
-        text = path.read_text(encoding="utf-8")
-    except FileNotFoundError:
+    from ..files import read_input
+
+    if not path.exists():
         where = f" (named in {referrer})" if referrer else ""
-        raise StyleError(source, "(file)", f"no such style file{where}") from None
-    except (OSError, UnicodeDecodeError) as exc:
+        raise StyleError(source, "(file)", f"no such style file{where}")
+    try:
+        text = read_input(path, "style").decode("utf-8")
+    except InputError as exc:
+        raise StyleError(source, "(file)", str(exc).split(": ", 1)[-1]) from None
+    except UnicodeDecodeError as exc:
         raise StyleError(source, "(file)", f"cannot read: {exc}") from None
     return _read_toml(text, source), source
 
