@@ -601,6 +601,9 @@ def main(argv: Sequence[str] | None = None) -> int:
     from .errors import EnvironmentFailure, MissingExtra
     from .files import inputs_scope
 
+    import warnings
+
+    warnings.formatwarning = lambda message, category, *rest: f"statsetter {ns.command}: warning: {message}\n"  # one line, no source
     previous = _on_terminate()
     try:
         with inputs_scope():

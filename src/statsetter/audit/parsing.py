@@ -179,6 +179,8 @@ class _Patterns:
             body = re.sub(r"[.\u202f\u00a0 ](?=\d{3}(?!\d))", "", body).replace(",", ".")
         else:
             body = body.replace(",", "")
+        if len(body) > _MAX_DIGITS:  # not a statistic anyone typed; never converted (int-digit limits, overflow)
+            return None
         try:
             dec = Decimal(body)
         except InvalidOperation:
@@ -196,6 +198,7 @@ class _Patterns:
 
 
 _CACHE: dict[str, _Patterns] = {}
+_MAX_DIGITS = 100
 
 
 def _patterns(mark: str) -> _Patterns:
@@ -359,7 +362,10 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     if number is None:
         return None
     if exp:
-        scale = 10.0 ** int(exp.group(1).replace("−", "-"))
+        power = int(exp.group(1).replace("−", "-")[:5])
+        if abs(power) > 300:  # p = 1e400 or 1e-400: not a probability anyone computed
+            return None
+        scale = 10.0 ** power
         number = Number(raw, number.value * scale, number.decimals - int(exp.group(1).replace("−", "-")), number.start, m.end("num"))
     return PValue(m.group("op"), number, m.start(), m.end("num"), m.start("sym"), m.group("sym"), adjusted)
 

@@ -10,6 +10,7 @@ not split across pages. Runs use the document's own Normal style and fonts.
 from __future__ import annotations
 
 from pathlib import Path
+import re
 from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
@@ -28,10 +29,26 @@ __all__ = ["add_runs", "add_table", "results_document", "save_document"]
 _WNS = "http://schemas.openxmlformats.org/wordprocessingml/2006/main"
 
 
+_NOT_XML = re.compile("[\x00-\x08\x0b\x0c\x0e-\x1f\ufffe\uffff\ud800-\udfff]")
+
+
+def xml_safe(text: str) -> str:
+    """``text`` without the characters XML 1.0 forbids (control characters
+    such as those pasted from other programs), which Word cannot store; a
+    warning names the text they were removed from."""
+    if not _NOT_XML.search(text):
+        return text
+    import warnings
+
+    clean = _NOT_XML.sub("", text)
+    warnings.warn(f"removed control characters that Word cannot store from {clean[:60]!r}", stacklevel=2)
+    return clean
+
+
 def add_runs(paragraph: "Paragraph", text: StyledText) -> None:
     """Append ``text`` to ``paragraph`` as runs: italic, superscript, subscript."""
     for chunk, styles in text.segments():
-        run = paragraph.add_run(chunk)
+        run = paragraph.add_run(xml_safe(chunk))
         if "i" in styles:
             run.italic = True
         if "sup" in styles:
@@ -51,7 +68,7 @@ def _run_xml(text: StyledText) -> str:
             elif "sub" in styles:
                 props += '<w:vertAlign w:val="subscript"/>'
             props += "</w:rPr>"
-        out.append(f'<w:r>{props}<w:t xml:space="preserve">{_escape(chunk)}</w:t></w:r>')
+        out.append(f'<w:r>{props}<w:t xml:space="preserve">{_escape(xml_safe(chunk))}</w:t></w:r>')
     return "".join(out)
 
 
@@ -217,7 +234,7 @@ def results_document(
     resolved = load_style(style)
     document = docx.Document(str(base)) if base is not None else docx.Document()
     if title:
-        document.add_heading(title, level=1)
+        document.add_heading(xml_safe(title), level=1)
     for record in records:
         add_runs(document.add_paragraph(), render(record, form, resolved))
     for number, table in enumerate(tables, 1):

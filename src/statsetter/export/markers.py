@@ -83,7 +83,9 @@ def _set_text(run, text: str) -> None:  # type: ignore[no-untyped-def]
         t = OxmlElement("w:t")
         run.append(t)
         ts = [t]
-    ts[0].text = text
+    from .docx_writer import xml_safe
+
+    ts[0].text = xml_safe(text)
     ts[0].set("{http://www.w3.org/XML/1998/namespace}space", "preserve")
     for extra in ts[1:]:
         run.remove(extra)

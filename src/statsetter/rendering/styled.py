@@ -352,11 +352,15 @@ def _unicode_script(text: str, table: dict[str, str], marker: str) -> str:
     return f"{marker}{text}"
 
 
-_MD_SPECIAL = re.compile(r"([\\*_^~`])")
+# pandoc's backslash escapes: emphasis, super/subscripts, code, raw HTML (<), links ([ ]), entities (&), table cells (|)
+# ("<" only where a tag could start, "&" where an entity could, "[" "]" where a link, note or span could:
+# "p < .001" and "95% CI [.84, .89]" stay as they are)
+_MD_SPECIAL = re.compile(r"([\\*_^~`|]|<(?=[A-Za-z/!?])|&(?=[A-Za-z#])|\[(?=[\^@])|\](?=[(\[{]))")
+_MD_TRIGGERS = frozenset("\\*_^~`<[]&|")
 
 
 def _escape_md(text: str) -> str:
-    if "\\" in text or "*" in text or "_" in text or "^" in text or "~" in text or "`" in text:
+    if not _MD_TRIGGERS.isdisjoint(text):
         return _MD_SPECIAL.sub(r"\\\1", text)
     return text
 
