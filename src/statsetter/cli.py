@@ -139,6 +139,8 @@ def _build_parser() -> argparse.ArgumentParser:
     d.add_argument("--missing", metavar="CODE,...", help="values meaning missing in every column, e.g. -99,-98")
     d.add_argument("--sheet", help="Excel sheet name (default: the first)")
     d.add_argument("--encoding", default="utf-8", help="text encoding of a CSV file (utf-8)")
+    d.add_argument("--sep", choices=[",", ";", "tab", "|"], help="the delimiter of a text data file (default: detected, and said)")
+    d.add_argument("--decimal", choices=[".", ","], help="the decimal mark of a text data file (default: detected, and said)")
     d.add_argument("--title", help="table title")
     d.add_argument("--number", type=int, default=1, help="table number (1)")
     d.add_argument("--style", default=None, help="a built-in style name or a TOML file")
@@ -451,7 +453,10 @@ def _cmd_describe(ns: argparse.Namespace) -> int:
         if not fmt:
             raise InputError(f"--out: {ns.out}: unknown extension; use one of {', '.join(_TABLE_FORMATS)}")
     style = load_style(ns.style)
-    data = read_data(ns.data, sheet=ns.sheet, missing=_codes(ns.missing), encoding=ns.encoding)
+    data = read_data(ns.data, sheet=ns.sheet, missing=_codes(ns.missing), encoding=ns.encoding,
+                     sep="\t" if ns.sep == "tab" else ns.sep, decimal=ns.decimal)
+    for note in data.notes:
+        sys.stderr.write(f"data: {note}\n")
     show = {k: [i.strip() for i in v.split(",")] for k, v in _pairs(ns.show, "--show").items()}
     labels = {**data.labels, **_pairs(ns.label, "--label")}
     result = describe(

@@ -14,6 +14,7 @@ The parser never raises on text: anything it cannot read is left alone.
 
 from __future__ import annotations
 
+import bisect
 import re
 from dataclasses import dataclass, field
 from decimal import Decimal, InvalidOperation
@@ -150,24 +151,24 @@ class _Patterns:
         self.mark = mark
         self.number = re.compile(num)
         self.head = re.compile(
-            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]])?\s*(?P<op>=|<|>|≤|≥)\s*(?P<num>{num})"
+            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]])?\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num})"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
-        self.p = re.compile(rf"(?<![\w.*])(?P<sym>[pP])(?:-value)?\s*(?P<op>=|<|>|≤|≥)\s*(?P<num>{num}(?:[eE][-−]?\d+)?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
+        self.p = re.compile(rf"(?<![\w.*])(?P<sym>[pP])(?:-value)?\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num}(?:[eE][-−]?\d+)?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
-            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|confidence interval)s?\s*[:=,]?\s*"
-            rf"(?:[\[(]\s*(?P<a>{num})\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})\s*[\])]|(?P<a2>{num})\s*(?:to|–|—|-)\s*(?P<b2>{num}))"
+            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval)s?\s*+[:=,]?\s*+"
+            rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
         self.effect = re.compile(
-            r"(?P<name>" + "|".join(f"(?:{p})" for p, _ in _EFFECT_NAMES) + rf")\s*(?P<op>=)\s*(?P<num>{num})"
+            r"(?P<name>" + "|".join(f"(?:{p})" for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
         )
-        self.df = re.compile(rf"(?<![\w])df\s*=\s*(?P<num>{num})")
-        self.coef_b = re.compile(rf"(?<![\w])B\s*=\s*(?P<num>{num})")
-        self.coef_se = re.compile(rf"(?<![\w])SE\s*=\s*(?P<num>{num})")
-        self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*=\s*(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
+        self.df = re.compile(rf"(?<![\w])df\s*+=\s*+(?P<num>{num})")
+        self.coef_b = re.compile(rf"(?<![\w])B\s*+=\s*+(?P<num>{num})")
+        self.coef_se = re.compile(rf"(?<![\w])SE\s*+=\s*+(?P<num>{num})")
+        self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n")
-        self.operator = re.compile(r"\s*(?:=|<|>|≤|≥)\s*")
+        self.operator = re.compile(r"\s*+(?:=|<|>|≤|≥)\s*+")
 
     def to_number(self, text: str, start: int) -> Number | None:
         raw = text.strip()
@@ -273,20 +274,53 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     return out
 
 
+class _Index:
+    """Sentence boundaries and ``n =`` positions of one text, found once, so
+    that the sentence-level checks of many statistics in one paragraph stay
+    linear in its length (bisect instead of a rescan per statistic)."""
+
+    def __init__(self, pat: _Patterns, text: str) -> None:
+        self.text = text
+        self.ends = [b.end() for b in pat.boundary.finditer(text)]
+        self.n_at: list[int] = []
+        self.n_match: list[re.Match[str]] = []
+        for m in pat.n.finditer(text):
+            if m.group("sym") == "n":
+                self.n_at.append(m.start())
+                self.n_match.append(m)
+
+
+_LAST_INDEX: list[tuple[str, _Index]] = []
+
+
+def _index(pat: _Patterns, text: str) -> _Index:
+    for key, found in _LAST_INDEX:
+        if key is text or (len(key) == len(text) and key == text):
+            return found
+    found = _Index(pat, text)
+    _LAST_INDEX[:] = [(text, found)]
+    return found
+
+
 def _sentence_start(pat: _Patterns, text: str, since: int, at: int) -> int:
-    """Where the sentence holding position ``at`` begins (not before ``since``)."""
-    start = since
-    for b in pat.boundary.finditer(text, since, at):
-        start = b.end()
-    return start
+    """Where the sentence holding position ``at`` begins (not before ``since``):
+    the end of the last boundary that ends at or before ``at`` … found by bisection."""
+    ends = _index(pat, text).ends
+    k = bisect.bisect_right(ends, at) - 1
+    # a boundary counts when it lies wholly between since and at, as finditer(text, since, at) would find it
+    while k >= 0 and ends[k] > at:
+        k -= 1
+    return max(since, ends[k]) if k >= 0 and ends[k] >= since else since
 
 
 def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int, int] | None:
     """The two group sizes (``n = 40`` … ``n = 38``) the sentence gives before
     a statistic, when it gives exactly two."""
     pat = _patterns(decimal_mark)
+    index = _index(pat, text)
     start = _sentence_start(pat, text, 0, rep.start)
-    found = [m for m in pat.n.finditer(text, start, rep.start) if m.group("sym") == "n"]
+    lo, hi = bisect.bisect_left(index.n_at, start), bisect.bisect_left(index.n_at, rep.start)
+    found = [m for m in index.n_match[lo:hi] if m.end() <= rep.start]
     if len(found) != 2:
         return None
     sizes = [pat.to_number(m.group("num"), m.start("num")) for m in found]

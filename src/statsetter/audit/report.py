@@ -78,6 +78,7 @@ def audit_units(
     entries = []
     for unit in units:
         previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
+        counted, lines, newline = 0, 0, -1  # newlines before position `counted`, and the last of them (one pass per unit)
         for rep in find_statistics(unit.text, mark):
             findings = impossible(rep) + consistency(rep, alpha) + style_findings(rep, resolved, alpha, unit.text, unit.italic)
             if rep.symbol == "t" and rep.effects:
@@ -93,8 +94,12 @@ def audit_units(
             if unit.part:  # a Word paragraph
                 location = f"{unit.location}, characters {rep.start + 1}–{rep.end}"
             else:  # a text block starting at line unit.index; columns as written in the file
-                line = unit.index + unit.text.count("\n", 0, rep.start)
-                newline = unit.text.rfind("\n", 0, rep.start)
+                if rep.start > counted:
+                    lines += unit.text.count("\n", counted, rep.start)
+                    found = unit.text.rfind("\n", counted, rep.start)
+                    newline = found if found >= 0 else newline
+                    counted = rep.start
+                line = unit.index + lines
                 line_start = unit.source_index(newline) + 1 if newline >= 0 else 0
                 first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else 0  # opening markers included
                 last = unit.source_index(rep.end - 1) + 1
