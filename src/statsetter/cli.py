@@ -502,7 +502,7 @@ def _cmd_audit(ns: argparse.Namespace) -> int:
     if not 0 < ns.alpha < 1:
         raise InputError(f"--alpha: {ns.alpha:g} is not between 0 and 1")
     if ns.annotate and not Path(ns.manuscript).suffix.lower() == ".docx":
-        raise InputError("--annotate: comments can be added to a .docx manuscript only")
+        raise InputError(f"--annotate: {ns.manuscript}: comments can be added to a .docx manuscript only (save it as .docx)")
     if ns.annotate and not ns.annotate.lower().endswith(".docx"):
         raise InputError(f"--annotate: {ns.annotate} does not end in .docx")
     if ns.out and not (ns.json or ns.csv):

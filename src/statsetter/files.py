@@ -165,14 +165,34 @@ def transaction() -> Iterator[None]:
         if len(set(targets)) != len(targets):
             dup = next(t for t in targets if targets.count(t) > 1)
             raise InputError(f"{dup}: two outputs have the same path")
-        for tmp, target in staged.pending:
-            os.replace(tmp, target)
-        staged.pending.clear()
+        blocked = _block_signals()
+        try:  # the renames are not interrupted half-way by Ctrl-C or a kill
+            for tmp, target in staged.pending:
+                os.replace(tmp, target)
+            staged.pending.clear()
+        finally:
+            _unblock_signals(blocked)
     finally:
         _STAGING.reset(token)
         for tmp, _ in staged.pending:
             with contextlib.suppress(OSError):
                 os.unlink(tmp)
+
+
+def _block_signals() -> "set[int] | None":
+    import signal
+    import threading
+
+    if threading.current_thread() is not threading.main_thread() or not hasattr(signal, "pthread_sigmask"):
+        return None
+    return signal.pthread_sigmask(signal.SIG_BLOCK, {signal.SIGINT, signal.SIGTERM})
+
+
+def _unblock_signals(previous: "set[int] | None") -> None:
+    import signal
+
+    if previous is not None:
+        signal.pthread_sigmask(signal.SIG_SETMASK, previous)
 
 
 def check_output(path: "str | Path", inputs: Iterable["str | Path"] = ()) -> Path:

@@ -83,6 +83,8 @@ def read_data(
     except Exception as exc:  # the readers raise many kinds; the message names the file
         first = str(exc).strip().splitlines()[0] if str(exc).strip() else type(exc).__name__
         raise InputError(f"{p}: cannot read as {READERS[suffix]} ({first})") from None
+    if len(data.frame) == 0:
+        raise InputError(f"{p}: no rows of data (only a header, or nothing)")
     if data.frame.columns.duplicated().any():
         raise InputError(f"{p}: column {data.frame.columns[data.frame.columns.duplicated()][0]!r} appears twice")
     if missing:

@@ -155,6 +155,8 @@ def load_plan(path: "str | Path") -> Plan:
         raw = tomllib.loads(text)
     except tomllib.TOMLDecodeError as exc:
         raise PlanError(f"{p}: not valid TOML ({exc})") from None
+    except RecursionError:
+        raise PlanError(f"{p}: nested too deeply to read") from None
     plan = Plan(p, {}, lines=_lines(text))
     _unknown(plan, "", set(raw), _TOP)
     _check_shapes(plan, raw)

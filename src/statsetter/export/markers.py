@@ -68,7 +68,20 @@ def _persist(part) -> None:  # type: ignore[no-untyped-def]
 
 
 def _runs(paragraph) -> list:  # type: ignore[no-untyped-def]
-    return [r for r in paragraph.iter(f"{_W}r") if r.getparent() is paragraph or r.getparent().tag == f"{_W}hyperlink"]
+    """The paragraph's own runs, also inside tracked insertions, hyperlinks,
+    inline content controls, smart tags and simple fields; not those of a
+    paragraph nested in it (a text box has its own) nor deleted ones."""
+    out = []
+    for r in paragraph.iter(f"{_W}r"):
+        node = r.getparent()
+        while node is not None and node is not paragraph and node.tag not in _STOP:
+            node = node.getparent()
+        if node is paragraph:
+            out.append(r)
+    return out
+
+
+_STOP = frozenset({f"{_W}p", f"{_W}del", f"{_W}moveFrom", f"{_W}txbxContent"})
 
 
 def _run_text(run) -> str:  # type: ignore[no-untyped-def]

@@ -53,13 +53,39 @@ def _one_of(*allowed: Any) -> Callable[[Any], str | None]:
     return check
 
 
+MAX_TEXT = 200  # characters in any text value of a style (README, "Limits")
+
+
+def _long(v: str) -> str | None:
+    return f"{v[:40]!r}… is {len(v):,} characters long; a style's texts are at most {MAX_TEXT}" if len(v) > MAX_TEXT else None
+
+
 def _text(v: Any) -> str | None:
-    return None if isinstance(v, str) else f"{v!r} is not allowed; use a text string"
+    return _long(v) if isinstance(v, str) else f"{v!r} is not allowed; use a text string"
+
+
+def _fields(v: str, allowed: tuple[str, ...]) -> str | None:
+    """Placeholders of a pattern: only the allowed names, with no format spec or conversion."""
+    import string
+
+    shown = " ".join("{" + a + "}" for a in allowed)
+    try:
+        parts = list(string.Formatter().parse(v))
+    except ValueError:
+        return f"{v!r} has an unbalanced brace; placeholders: {shown}"
+    for _, name, spec, conversion in parts:
+        if name is None:
+            continue
+        if name not in allowed or spec or conversion:
+            return f"{v!r}: {{{name}{'!' + conversion if conversion else ''}{':' + spec if spec else ''}}} is not a placeholder; placeholders: {shown}"
+    return None
 
 
 def _markup(v: Any) -> str | None:
     if not isinstance(v, str):
         return f"{v!r} is not allowed; use a text string"
+    if _long(v):
+        return _long(v)
     from ..rendering.styled import StyledText  # local: render imports style
 
     try:
@@ -92,6 +118,9 @@ def _pattern(v: Any) -> str | None:
         return f"{v!r} is not allowed; use a text string"
     if v == "":
         return None
+    problem = _long(v) or _fields(v, ("level", "low", "high", "sep"))
+    if problem:
+        return problem
     for needed in ("{low}", "{high}"):
         if needed not in v:
             return f"{v!r} lacks {needed}; placeholders: {{level}} {{low}} {{high}} {{sep}}"
@@ -105,6 +134,9 @@ def _pattern(v: Any) -> str | None:
 def _attach(v: Any) -> str | None:
     if not isinstance(v, str):
         return f"{v!r} is not allowed; use a text string"
+    problem = _long(v) or _fields(v, ("sep",))
+    if problem:
+        return problem
     try:
         v.format(sep=",")
     except (KeyError, IndexError, ValueError):
@@ -298,6 +330,8 @@ def _read_toml(text: str, source: str) -> dict[str, Any]:
         return tomllib.loads(text)
     except tomllib.TOMLDecodeError as exc:
         raise StyleError(source, "(file)", f"not valid TOML: {exc}") from None
+    except RecursionError:
+        raise StyleError(source, "(file)", "nested too deeply to read") from None
 
 
 def _raw_builtin(name: str) -> tuple[dict[str, Any], str]:

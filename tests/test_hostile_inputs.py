@@ -1,0 +1,573 @@
+"""Hostile inputs for every command: bad files, bad plans, bad data, outputs
+aimed at inputs, full disks, killed runs.
+
+Each case asserts the exit status of the README's contract (2 for a usage or
+input error, 3 for the environment), a message naming the file, line or
+variable, no traceback, every file in the folder byte-identical afterwards
+except the outputs the case expects, and no temporary files left behind.
+The data are the Palmer penguins as pingouin bundles them (Gorman, Williams
+& Fraser, 2014); the hostile parts are made here.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import os
+import signal
+import subprocess
+import sys
+import zipfile
+from pathlib import Path
+from typing import Callable
+
+import pingouin as pg
+import pytest
+
+from statsetter.cli import main
+
+ROOT = Path(__file__).resolve().parents[1]
+RECORD = ('[{"schema": "statsetter.result", "version": 1, "kind": "pearson", "id": "r1", '
+          '"statistic": {"symbol": "r", "value": 0.3, "df": [98]}, "p": 0.0024, "n": 100}]')
+GOOD_PLAN = """[data]
+path = "d.csv"
+[[analyses]]
+id = "mass"
+kind = "t_independent"
+outcome = "body_mass_g"
+group = "sex"
+[outputs]
+folder = "out"
+md = "r.md"
+json = "r.json"
+"""
+
+
+def _snapshot(folder: Path) -> dict[str, str]:
+    out = {}
+    for p in sorted(folder.rglob("*")):
+        if p.is_file() and not p.is_symlink():
+            out[str(p.relative_to(folder))] = hashlib.sha256(p.read_bytes()).hexdigest()
+    return out
+
+
+@pytest.fixture
+def box(tmp_path, monkeypatch):
+    """A folder with a good data file, plan, records file, style, manuscript and chapter."""
+    monkeypatch.chdir(tmp_path)
+    pg.read_dataset("penguins").to_csv(tmp_path / "d.csv", index=False)
+    (tmp_path / "plan.toml").write_text(GOOD_PLAN, encoding="utf-8")
+    (tmp_path / "r.json").write_text(RECORD, encoding="utf-8")
+    (tmp_path / "rj.docx").write_text(RECORD, encoding="utf-8")  # records in a file named like a Word document
+    (tmp_path / "house.toml").write_text('extends = "apa7"\n[numbers]\ndecimal_mark = ","\nthousands = "."\nlist_separator = ";"\n', encoding="utf-8")
+    (tmp_path / "m.md").write_text("The groups differed, t(38) = 2.14, p = .039.\n", encoding="utf-8")
+    import docx
+
+    document = docx.Document()
+    document.add_paragraph("As shown, [[r1]].")
+    document.save(tmp_path / "c.docx")
+    return tmp_path
+
+
+def _run(args: list[str], capsys) -> tuple[int, str, str]:
+    code = main(args)
+    out, err = capsys.readouterr()
+    return code, out, err
+
+
+# ---------------------------------------------------------------------------
+# unreadable inputs, for every command that reads a file
+
+def _make(kind: str, name: str, box: Path) -> str:
+    p = box / name
+    if kind == "missing":
+        pass
+    elif kind == "folder":
+        p.mkdir()
+    elif kind == "fifo":
+        os.mkfifo(p)
+    elif kind == "device":
+        p.symlink_to("/dev/zero")
+    elif kind == "empty":
+        p.write_bytes(b"")
+    elif kind == "binary":
+        p.write_bytes(bytes(range(256)) * 8)
+    elif kind == "latin1":
+        p.write_bytes("caf\xe9 = 1\n".encode("latin-1"))
+    return name
+
+
+BAD_FILES = ["missing", "folder", "fifo", "device", "empty", "binary", "latin1"]
+READERS: dict[str, Callable[[str], list[str]]] = {
+    "audit-md": lambda f: ["audit", f],
+    "audit-docx": lambda f: ["audit", f],
+    "render": lambda f: ["render", f],
+    "fill-chapter": lambda f: ["fill", f, "--records", "r.json", "--out", "o.docx"],
+    "fill-records": lambda f: ["fill", "c.docx", "--records", f, "--out", "o.docx"],
+    "describe-csv": lambda f: ["describe", f],
+    "describe-sav": lambda f: ["describe", f],
+    "run": lambda f: ["run", f],
+    "styles-check": lambda f: ["styles", "check", f],
+    "format-style": lambda f: ["format", "t", "--stat", "2", "--df", "3", "--style", f],
+}
+SUFFIX = {"audit-md": ".md", "audit-docx": ".docx", "render": ".json", "fill-chapter": ".docx", "fill-records": ".json",
+          "describe-csv": ".csv", "describe-sav": ".sav", "run": ".toml", "styles-check": ".toml", "format-style": ".toml"}
+
+
+@pytest.mark.parametrize("kind", BAD_FILES)
+@pytest.mark.parametrize("reader", list(READERS))
+def test_unreadable_inputs_are_refused_by_name(box, capsys, reader, kind):
+    if kind == "latin1" and SUFFIX[reader] in (".docx", ".sav"):
+        kind = "binary"
+    name = _make(kind, f"bad{SUFFIX[reader]}", box)
+    before = _snapshot(box)
+    code, out, err = _run(READERS[reader](name), capsys)
+    assert code == 2, (code, err)
+    assert name in err and "Traceback" not in err + out, err
+    assert len(err.strip().splitlines()) <= 3, err
+    assert _snapshot(box) == before
+    assert not list(box.glob(".*.tmp")) and not (box / "o.docx").exists()
+
+
+def test_a_style_that_extends_a_device_is_refused(box, capsys):
+    (box / "zero.toml").symlink_to("/dev/zero")
+    (box / "s.toml").write_text('extends = "zero.toml"\n', encoding="utf-8")
+    code, _, err = _run(["format", "t", "--stat", "2", "--df", "3", "--style", "s.toml"], capsys)
+    assert code == 2 and "zero.toml" in err and "not a regular file" in err
+
+
+def test_size_limits_are_checked(box, capsys, monkeypatch):
+    # README "Limits": each kind of input has a limit, checked before or while reading
+    from statsetter import files
+
+    monkeypatch.setitem(files.LIMITS, "manuscript", 100)
+    (box / "big.md").write_text("t(3) = 2.0, p = .14. " * 20, encoding="utf-8")
+    code, _, err = _run(["audit", "big.md"], capsys)
+    assert code == 2 and "big.md" in err and "limit" in err
+
+
+# ---------------------------------------------------------------------------
+# outputs aimed at inputs
+
+OVERWRITES = [
+    (["describe", "d.csv", "--out", "d.csv"], "d.csv"),
+    (["describe", "d.csv", "--out", "./sub/../d.csv"], "d.csv"),
+    (["render", "r.json", "--out", "r.json"], "r.json"),
+    (["render", "r.json", "--style", "house.toml", "--out", "house.toml"], "house.toml"),
+    (["render", "r.json", "--out", "r.json", "--table", "results"], "r.json"),
+    (["audit", "m.md", "--json", "--out", "m.md"], "m.md"),
+    (["audit", "m.md", "--style", "house.toml", "--csv", "--out", "house.toml"], "house.toml"),
+    (["fill", "c.docx", "--records", "rj.docx", "--out", "rj.docx"], "rj.docx"),
+    (["fill", "c.docx", "--records", "r.json", "--out", "c.docx"], "c.docx"),
+    (["fill", "c.docx", "--records", "r.json", "--style", "house.toml", "--out", "house.toml"], "house.toml"),
+    (["format", "t", "--stat", "2", "--df", "3", "--style", "house.toml", "--out", "house.toml"], "house.toml"),
+    (["describe", "d.csv", "--out", "link.csv"], "link.csv"),
+]
+
+
+@pytest.mark.parametrize("args, target", OVERWRITES)
+def test_no_output_replaces_an_input(box, capsys, args, target):
+    (box / "sub").mkdir()
+    (box / "link.csv").symlink_to(box / "d.csv")
+    if "link.csv" in args:  # the data read through a symbolic link; the output names the file itself
+        args, target = ["describe", "link.csv", "--out", "d.csv"], "d.csv"
+    before = _snapshot(box)
+    code, out, err = _run(args, capsys)
+    assert code == 2, err
+    assert ("overwrite" in err or "does not end in .docx" in err) and target in err and "Traceback" not in err
+    assert _snapshot(box) == before
+
+
+@pytest.mark.parametrize("key, value, message", [
+    ("[chapter]", 'path = "c.docx"\nout = "../d.csv"', "the data file"),
+    ("[outputs]", 'md = "../plan.toml"', "the plan itself"),
+    ("[outputs]", 'json = "../house.toml"\nallow_outside = true', ""),
+    ("[outputs]", 'md = "x"\nhtml = "x"', "also the path of"),
+    ("[outputs]", 'md = "../../elsewhere.md"', "outside the plan's folder"),
+    ("[outputs]", 'folder = "/tmp"', "outside the plan's folder"),
+    ("[outputs]", 'md = 3', "must be a file name"),
+    ("[outputs]", 'allow_outside = "yes"', "true or false"),
+])
+def test_plan_outputs_stay_in_their_folder_and_off_inputs(box, capsys, key, value, message):
+    style_line = 'style = "house.toml"\n' if "house" in value else ""
+    text = style_line + GOOD_PLAN.replace('[outputs]\nfolder = "out"\nmd = "r.md"\njson = "r.json"\n', "")
+    folder = "" if "folder" in value else 'folder = "out"\n'
+    text += "\n[outputs]\n" + folder + (value if key == "[outputs]" else "") + "\n"
+    if key == "[chapter]":
+        text += f"[chapter]\n{value}\n"
+    (box / "plan.toml").write_text(text, encoding="utf-8")
+    before = _snapshot(box)
+    code, out, err = _run(["run", "plan.toml"], capsys)
+    assert code == 2, (out, err)
+    assert "plan.toml, line" in err and message in err and "Traceback" not in err
+    assert _snapshot(box) == before and not (box / "out").exists()
+
+
+# ---------------------------------------------------------------------------
+# bad plans: every value of the wrong kind names its line
+
+BAD_PLANS = [
+    ('[data]\npath = "d.csv"\nlevels = "text"\n', "levels must be a table"),
+    ('analyses = 5\n[data]\npath = "d.csv"\n', "analyses must be a list"),
+    ('[data]\npath = "d.csv"\nlabels = 3\n', "labels must be a table"),
+    ('data = 1\n', "data must be a table"),
+    ('[data]\npath = 7\n', "path must be text"),
+    ('[data]\npath = "d.csv"\nlevels = { body_mass_g = "cardinal" }\n', "'cardinal' is not one of"),
+    ('[data]\npath = "d.csv"\nlevels = { body_mass_g = 3 }\n', "must be text"),
+    ('[data]\npath = "d.csv"\nmissing = "x"\n', "missing must be a list"),
+    ('[data]\npath = "d.csv"\nvalue_labels = { sex = 1 }\n', "value labels must be a table"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = 5\nkind = "t_independent"\n', "id must be text"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_test"\n', "unknown kind"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass"\ngroup = "sex"\n', "no such column"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcom = "x"\n', "did you mean outcome"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a b"\nkind = "t_independent"\n', "ids use letters"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\n[[analyses]]\nid = "a"\nkind = "t_paired"\n', "used twice"),
+    ('[data]\npath = "d.csv"\n[[tables]]\nkind = "pie"\n', "is not one of"),
+    ('[data]\npath = "d.csv"\n[[tables]]\nkind = "results"\nanalyses = ["nope"]\n', "no analysis with id"),
+    ('tables = [1]\n[data]\npath = "d.csv"\n', "each entry of tables"),
+    ('title = ["x"]\n[data]\npath = "d.csv"\n', "title must be text"),
+    ('level = 95\n[data]\npath = "d.csv"\n', "not between 0 and 1"),
+    ('[data\npath = "d.csv"\n', "not valid TOML"),
+    ('[data]\npath = "nothere.csv"\n', "no such file"),
+    ('[data]\npath = "d.csv"\nsep = ":"\n', "sep"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "species"\n', "3 groups"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "species"\ngroup = "sex"\n', "not numeric"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\ngroups = ["female", "x"]\n', "'x'"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "linear_regression"\noutcome = "body_mass_g"\npredictors = ["sex"]\nreference = { sex = "x" }\n', "reference category 'x'"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "logistic_regression"\noutcome = "sex"\npredictors = ["body_mass_g"]\nevent = "x"\n', "event 'x'"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "linear_regression"\noutcome = "body_mass_g"\npredictors = ["sex"]\nlevels = { sex = "cardinal" }\n', "'cardinal' is not one of"),
+    ('[data]\npath = "d.csv"\nidentifiers = "x"\n', "identifiers must be a list"),
+]
+
+
+@pytest.mark.parametrize("text, message", BAD_PLANS)
+def test_bad_plans_name_the_line(box, capsys, text, message):
+    (box / "plan.toml").write_text(text, encoding="utf-8")
+    before = _snapshot(box)
+    code, out, err = _run(["run", "plan.toml"], capsys)
+    assert code == 2, (out, err)
+    assert "plan.toml" in err and message in err and "Traceback" not in err, err
+    assert _snapshot(box) == before and not (box / "out").exists()
+
+
+# ---------------------------------------------------------------------------
+# bad data
+
+def _csv(box: Path, text: str) -> None:
+    (box / "x.csv").write_text(text, encoding="utf-8")
+
+
+BAD_DATA = [
+    ("g,y\n" + "".join(f"{'ab'[i % 2]},{'inf' if i in (3, 8) else i % 7 + 0.5}\n" for i in range(40)), ["describe", "x.csv", "--by", "g", "--tests"], 0, "2 infinite value(s)"),
+    ("age,age\n1,2\n", ["describe", "x.csv"], 2, "'age' appears twice"),
+    ("a;b\n1,5;2\n3,5;4\n", ["describe", "x.csv"], 0, "decimal mark: comma"),
+    ("y,g\n1,a\n2,a\n3,a\n", ["describe", "x.csv", "--by", "g", "--tests"], 2, "g: 1 group"),
+    ("y\n\n", ["describe", "x.csv"], 2, "x.csv"),
+    ("", ["describe", "x.csv"], 2, "empty"),
+    ("y,g\n1,a\n", ["describe", "x.csv", "--by", "nope"], 2, "nope"),
+    ("y,g\n1,a\n", ["describe", "x.csv", "--vars", "zz"], 2, "zz"),
+    ("y,g\n1,a\n", ["describe", "x.csv", "--level", "y=cardinal"], 2, "cardinal"),
+    ("y,g\n1,a\n", ["describe", "x.csv", "--weights", "g"], 2, "g"),
+    ("y,w\n1,-1\n2,1\n", ["describe", "x.csv", "--weights", "w"], 2, "w: negative"),
+    ("y,g\n1,\x01bad\n2,ok\n", ["describe", "x.csv", "--by", "g", "--out", "t.docx"], 0, "control characters"),
+    ("y,g\n1,<script>x</script>\n2,ok\n", ["describe", "x.csv", "--by", "g", "--out", "t.md"], 0, ""),
+]
+
+
+@pytest.mark.parametrize("text, args, status, message", BAD_DATA)
+def test_bad_data(box, capsys, text, args, status, message):
+    _csv(box, text)
+    before = _snapshot(box)
+    code, out, err = _run(args, capsys)
+    assert code == status, (out, err)
+    assert message in err + out and "Traceback" not in err
+    after = _snapshot(box)
+    assert {k: v for k, v in after.items() if k in before} == before
+    if "<script>" in text:
+        import re
+
+        assert not re.search(r"(?<!\\)<script>", (box / "t.md").read_text(encoding="utf-8"))
+
+
+def test_infinite_values_in_a_plan_are_missing_with_a_note(box, capsys):
+    frame = pg.read_dataset("penguins")
+    frame.loc[[5, 9], "body_mass_g"] = float("inf")
+    frame.to_csv(box / "d.csv", index=False)
+    code, out, err = _run(["run", "plan.toml"], capsys)
+    assert code == 0, err
+    assert "body_mass_g: 2 infinite value(s) treated as missing" in out
+
+
+def test_infinite_values_through_the_api_are_refused_by_name():
+    import pandas as pd
+
+    from statsetter.analyses import t_independent
+    from statsetter.errors import InputError
+
+    frame = pd.DataFrame({"y": [1.0, 2.0, float("inf"), 4.0, 5.0, 6.0], "g": list("aabbab")})
+    with pytest.raises(InputError, match=r"y: 1 infinite value\(s\) \(first in row 3\)"):
+        t_independent(frame, "y", "g")
+
+
+# ---------------------------------------------------------------------------
+# bad manuscripts and Word files
+
+def _docx_with(box: Path, name: str, xml_body: str, doctype: bool = False, extra: dict[str, bytes] | None = None) -> str:
+    import docx
+
+    document = docx.Document()
+    document.add_paragraph("x")
+    document.save(box / "base.docx")
+    with zipfile.ZipFile(box / "base.docx") as src, zipfile.ZipFile(box / name, "w") as dst:
+        for item in src.infolist():
+            data = src.read(item.filename)
+            if item.filename == "word/document.xml":
+                text = data.decode("utf-8")
+                head, _, rest = text.partition("<w:body>")
+                text = head + "<w:body>" + xml_body + rest.split("</w:body>", 1)[-1].join(["", ""]) if False else head + "<w:body>" + xml_body + "<w:sectPr/></w:body></w:document>"
+                if doctype:
+                    text = text.replace("?>", '?><!DOCTYPE w:document [<!ENTITY e "x">]>', 1)
+                data = text.encode("utf-8")
+            dst.writestr(item, data)
+        for extra_name, blob in (extra or {}).items():
+            dst.writestr(extra_name, blob, compress_type=zipfile.ZIP_DEFLATED)
+    (box / "base.docx").unlink()
+    return name
+
+
+MANUSCRIPTS = [
+    ("t(20) = 2.1, p = 1e400. And F(2, 30) = " + "9" * 5000 + ", p = .01.\n", 1),
+    ("t" + " " * 100_000 + "(3) = 2.0\n", None),
+    ("p = " * 20_000 + "\n", None),
+    ("χ²(" + "9" * 200 + ") = 3.2, p = .07\n", None),
+    ("r(98) = 1.7, p = .01\n", 1),
+    ("\x00binary\n", 2),
+    ("t(3) = 2.0, p = .14. " * 5 + "\ud800".encode("utf-8", "surrogatepass").decode("utf-8", "replace"), None),
+]
+
+
+@pytest.mark.parametrize("text, status", MANUSCRIPTS)
+def test_strange_manuscripts(box, capsys, text, status):
+    (box / "s.md").write_text(text, encoding="utf-8", errors="surrogatepass")
+    code, out, err = _run(["audit", "s.md"], capsys)
+    assert "Traceback" not in err and code in ((0, 1) if status is None else (status,)), (code, err[-500:])
+
+
+@pytest.mark.parametrize("command", [["audit"], ["fill", "--records", "r.json", "--out", "o.docx"]])
+def test_a_doctype_is_refused_or_kept_intact(box, capsys, command):
+    name = _docx_with(box, "dt.docx", '<w:p><w:r><w:t>[[r1]] t(3) = 2.0, p = .14</w:t></w:r></w:p>', doctype=True)
+    args = [command[0], name] + command[1:]
+    code, out, err = _run(args, capsys)
+    assert "Traceback" not in err
+    if code == 2:
+        assert "dt.docx" in err
+    elif command[0] == "fill":  # filled: the copy must still be a readable Word document
+        import docx
+
+        docx.Document(str(box / "o.docx"))
+
+
+def test_a_macro_enabled_document_is_refused_for_annotation(box, capsys):
+    import shutil
+
+    shutil.copy(box / "c.docx", box / "c.docm")
+    code, _, err = _run(["audit", "c.docm", "--annotate", "a.docx"], capsys)
+    assert code == 2 and "c.docm" in err and "Traceback" not in err
+
+
+def test_a_zip_bomb_is_refused(box, capsys):
+    name = _docx_with(box, "bomb.docx", "<w:p/>", extra={"word/media/big.bin": b"\0" * (60 << 20)})
+    code, _, err = _run(["audit", name], capsys)
+    assert code == 2 and "bomb.docx" in err
+
+
+@pytest.mark.parametrize("place", ["ins", "sdt", "textbox"])
+def test_markers_inside_tracked_changes_and_controls_are_filled_or_reported(box, capsys, place):
+    run = '<w:r><w:t>[[r1]]</w:t></w:r>'
+    body = {
+        "ins": f'<w:p><w:ins w:id="1" w:author="a" w:date="2026-01-01T00:00:00Z">{run}</w:ins></w:p>',
+        "sdt": f'<w:sdt><w:sdtContent><w:p>{run}</w:p></w:sdtContent></w:sdt>',
+        "textbox": f'<w:p><w:r><w:pict><v:shape xmlns:v="urn:schemas-microsoft-com:vml"><v:textbox><w:txbxContent><w:p>{run}</w:p></w:txbxContent></v:textbox></v:shape></w:pict></w:r></w:p>',
+    }[place]
+    name = _docx_with(box, f"{place}.docx", body)
+    code, out, err = _run(["fill", name, "--records", "r.json", "--out", "o.docx"], capsys)
+    assert "Traceback" not in err
+    assert code == 0 and "filled 1 marker(s)" in out, (code, out, err)
+    import docx
+
+    assert "[[r1]]" not in "".join(t.text or "" for t in docx.Document(str(box / "o.docx")).element.body.iter(
+        "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}t"))
+
+
+# ---------------------------------------------------------------------------
+# bad styles and bad numbers on the command line
+
+BAD_STYLES = [
+    ('extends = "apa7"\n[ci]\npattern = "{low:>5000000000}"\n', "ci.pattern"),
+    ('extends = "apa7"\nx = ' + "[" * 10_000 + "]" * 10_000 + "\n", "s.toml"),
+    ('extends = "s.toml"\n', "s.toml"),
+    ('extends = "nope"\n', "nope"),
+    ('extends = "apa7"\n[numbers]\ndecimals = "two"\n', "decimals"),
+    ('extends = "apa7"\n[numbers]\ndecimals = 1000\n', "decimals"),
+    ('extends = "apa7"\n[p]\nsymbol = "' + "p" * 5000 + '"\n', "symbol"),
+    ('extends = "apa7"\n[colours]\nx = 1\n', "colours"),
+    ("[[[\n", "s.toml"),
+]
+
+
+@pytest.mark.parametrize("text, message", BAD_STYLES)
+def test_bad_styles(box, capsys, text, message):
+    (box / "s.toml").write_text(text, encoding="utf-8")
+    for args in (["styles", "check", "s.toml"], ["format", "t", "--stat", "2", "--df", "3", "--style", "s.toml"]):
+        code, out, err = _run(args, capsys)
+        assert code == 2 and message in err and "Traceback" not in err, (args, code, err[-400:])
+
+
+BAD_NUMBERS = [
+    ["format", "t", "--stat", "nan", "--df", "3"],
+    ["format", "t", "--stat", "inf", "--df", "3"],
+    ["format", "t", "--stat", "2", "--df", "-1"],
+    ["format", "t", "--stat", "2", "--df", "0"],
+    ["format", "t", "--stat", "2", "--df", "3", "--p", "2"],
+    ["format", "t", "--stat", "2", "--df", "3", "--effect", "d=abc"],
+    ["format", "t", "--stat", "2", "--df", "3", "--effect", "d=0.5", "--effect-ci", "0.9,0.1"],
+    ["format", "t", "--stat", "1e400", "--df", "3"],
+    ["format", "t", "--stat", "9" * 5000, "--df", "3"],
+    ["format", "r", "--stat", "1.5", "--df", "30"],
+    ["format", "nosuchkind", "--stat", "2"],
+    ["format", "chi2", "--stat", "-3", "--df", "2"],
+    ["describe", "d.csv", "--suppress-below", "-2"],
+    ["audit", "m.md", "--alpha", "3"],
+    ["audit", "m.md", "--grim-items", "0"],
+    ["render", "r.json", "--to", "pdf"],
+    ["render", "r.json", "--out", "."],
+    ["describe", "d.csv", "--out", "t.xyz"],
+]
+
+
+@pytest.mark.parametrize("args", BAD_NUMBERS)
+def test_bad_command_line_values(box, capsys, args):
+    before = _snapshot(box)
+    try:
+        code, out, err = _run(args, capsys)
+    except SystemExit as exc:  # argparse's own refusal
+        code, err = exc.code, capsys.readouterr().err
+    assert code == 2, (args, code, err)
+    assert "Traceback" not in err and err.strip()
+    assert _snapshot(box) == before
+
+
+# ---------------------------------------------------------------------------
+# the environment: full disk, unwritable folder, missing extra, an internal error
+
+def test_a_full_disk_is_an_environment_failure(box, capsys, monkeypatch):
+    import errno
+
+    real = os.fdopen
+
+    def full(fd, *a, **k):  # a file whose writes fail as on a full disk
+        handle = real(fd, *a, **k)
+
+        def write(data):
+            raise OSError(errno.ENOSPC, "No space left on device")
+
+        handle.write = write
+        return handle
+
+    monkeypatch.setattr("statsetter.files.os.fdopen", full)
+    before = _snapshot(box)
+    code, _, err = _run(["run", "plan.toml"], capsys)
+    assert code == 3 and "No space left on device" in err and "Traceback" not in err
+    monkeypatch.undo()
+    assert _snapshot(box) == before and not list((box / "out").glob("*"))
+
+
+@pytest.mark.skipif(os.geteuid() == 0, reason="root writes anywhere; the folder permission cannot be tested as root")
+def test_an_unwritable_folder(box, capsys):
+    (box / "ro").mkdir()
+    (box / "ro").chmod(0o500)
+    code, _, err = _run(["describe", "d.csv", "--out", "ro/t.md"], capsys)
+    assert code == 3 and "ro" in err
+
+
+def test_a_read_only_output_folder_as_root_is_still_refused_cleanly(box, capsys, monkeypatch):
+    import errno
+
+    def denied(*a, **k):
+        raise PermissionError(errno.EACCES, "Permission denied", str(box / "out"))
+
+    monkeypatch.setattr("statsetter.files.tempfile.mkstemp", denied)
+    code, _, err = _run(["describe", "d.csv", "--out", "t.md"], capsys)
+    assert code == 3 and "Permission denied" in err and "Traceback" not in err
+
+
+def test_a_missing_extra_names_it(box, capsys, monkeypatch):
+    import builtins
+
+    real = builtins.__import__
+
+    def no_docx(name, *a, **k):
+        if name == "docx" or name.startswith("docx."):
+            raise ModuleNotFoundError("No module named 'docx'", name="docx")
+        return real(name, *a, **k)
+
+    monkeypatch.setattr(builtins, "__import__", no_docx)
+    code, _, err = _run(["format", "t", "--stat", "2", "--df", "3", "--out", "x.docx"], capsys)
+    assert code == 3 and "pip install 'statsetter[docx]'" in err
+
+
+def test_an_internal_error_is_one_line_and_a_log(box, capsys, monkeypatch):
+    def boom(*a, **k):
+        raise ZeroDivisionError("planted")
+
+    monkeypatch.setattr("statsetter.cli._cmd_format", boom)
+    code, _, err = _run(["format", "t", "--stat", "2", "--df", "3"], capsys)
+    assert code == 4 and "internal error" in err and "Traceback" not in err
+    log = Path(err.split("the full traceback is in ", 1)[1].split(";", 1)[0])
+    assert "ZeroDivisionError: planted" in log.read_text(encoding="utf-8")
+    log.unlink()
+    code, _, err = _run(["--debug", "format", "t", "--stat", "2", "--df", "3"], capsys)
+    assert code == 4 and "Traceback" in err
+    Path(err.split("the full traceback is in ", 1)[1].split(";", 1)[0]).unlink()
+
+
+# ---------------------------------------------------------------------------
+# killed and concurrent runs (separate processes)
+
+def _cli(*args: str, cwd: Path) -> subprocess.Popen:
+    return subprocess.Popen([sys.executable, "-m", "statsetter", *args], cwd=cwd, stdout=subprocess.PIPE, stderr=subprocess.PIPE, text=True)
+
+
+@pytest.mark.parametrize("sig", [signal.SIGTERM, signal.SIGINT])
+def test_a_killed_run_leaves_the_previous_outputs(box, sig):
+    assert _cli("run", "plan.toml", cwd=box).wait(timeout=120) == 0
+    before = _snapshot(box)
+    (box / "plan.toml").write_text(GOOD_PLAN.replace('kind = "t_independent"', 'kind = "t_independent"\nlevel = 0.9'), encoding="utf-8")
+    before["plan.toml"] = _snapshot(box)["plan.toml"]
+    import time
+
+    for delay in (0.3, 0.8, 1.5):  # at start-up, while computing, around the writes
+        proc = _cli("run", "plan.toml", cwd=box)
+        time.sleep(delay)
+        proc.send_signal(sig)
+        out, err = proc.communicate(timeout=120)
+        assert "Traceback" not in err, err
+        after = _snapshot(box)
+        assert not list(box.rglob(".*.tmp"))
+        outputs = {"out/r.md", "out/r.json"}
+        changed = {k for k in outputs if after.get(k) != before.get(k)}
+        # all or nothing: either every output is the previous run's, or every one is the new run's
+        assert changed in (set(), outputs), (delay, proc.returncode, changed)
+        assert {k: v for k, v in after.items() if k not in outputs} == {k: v for k, v in before.items() if k not in outputs}
+        if proc.returncode != 0 and changed:  # the signal came after the last rename: the run had finished
+            assert "interrupted" in err or proc.returncode < 0
+        before = after
+
+
+def test_two_concurrent_runs_on_one_plan(box):
+    procs = [_cli("run", "plan.toml", cwd=box) for _ in range(2)]
+    results = [p.communicate(timeout=180) for p in procs]
+    assert all(p.returncode == 0 for p in procs), results
+    assert not list(box.rglob(".*.tmp"))
+    import json
+
+    json.loads((box / "out" / "r.json").read_text(encoding="utf-8"))  # whole, not interleaved
