@@ -644,7 +644,10 @@ def main(argv: Sequence[str] | None = None) -> int:
 
 
 def _on_terminate():  # type: ignore[no-untyped-def]
-    """SIGTERM (a killed run) unwinds like Ctrl-C, so that staged outputs are removed."""
+    """On SIGTERM or Ctrl-C: remove this process's temporary outputs, say so
+    and exit at once (128 + the signal). Renames are never cut half-way: the
+    writers block these signals around them."""
+    import os
     import signal
     import threading
 
@@ -652,10 +655,18 @@ def _on_terminate():  # type: ignore[no-untyped-def]
         return None
 
     def stop(signum, frame):  # type: ignore[no-untyped-def]
-        raise KeyboardInterrupt
+        from .files import remove_temporaries
+
+        remove_temporaries()
+        try:
+            sys.stderr.write("statsetter: interrupted; nothing was left half-written\n")
+            sys.stderr.flush()
+        except (OSError, ValueError):
+            pass
+        os._exit(128 + signum)
 
     try:
-        return signal.signal(signal.SIGTERM, stop)
+        return {sig: signal.signal(sig, stop) for sig in (signal.SIGTERM, signal.SIGINT)}
     except (ValueError, OSError):  # pragma: no cover - not the main thread of the interpreter
         return None
 
@@ -663,8 +674,8 @@ def _on_terminate():  # type: ignore[no-untyped-def]
 def _restore(previous) -> None:  # type: ignore[no-untyped-def]
     import signal
 
-    if previous is not None:
-        signal.signal(signal.SIGTERM, previous)
+    for sig, handler in (previous or {}).items():
+        signal.signal(sig, handler)
 
 
 def _internal_error(ns: argparse.Namespace) -> int:

@@ -145,6 +145,17 @@ def same_file(a: "str | Path", b: "str | Path") -> bool:
     return os.path.normcase(os.path.realpath(a)) == os.path.normcase(os.path.realpath(b))
 
 
+_LIVE: set[str] = set()  # temporary files not yet renamed or removed
+
+
+def remove_temporaries() -> None:
+    """Remove every temporary output file of this process (on a kill)."""
+    for tmp in list(_LIVE):
+        with contextlib.suppress(OSError):
+            os.unlink(tmp)
+        _LIVE.discard(tmp)
+
+
 class _Staged:
     def __init__(self) -> None:
         self.pending: list[tuple[str, Path]] = []  # (temporary file, target)
@@ -169,6 +180,7 @@ def transaction() -> Iterator[None]:
         try:  # the renames are not interrupted half-way by Ctrl-C or a kill
             for tmp, target in staged.pending:
                 os.replace(tmp, target)
+                _LIVE.discard(tmp)
             staged.pending.clear()
         finally:
             _unblock_signals(blocked)
@@ -177,6 +189,7 @@ def transaction() -> Iterator[None]:
         for tmp, _ in staged.pending:
             with contextlib.suppress(OSError):
                 os.unlink(tmp)
+            _LIVE.discard(tmp)
 
 
 def _block_signals() -> "set[int] | None":
@@ -215,7 +228,12 @@ def write_atomic(path: "str | Path", data: "str | bytes", *, inputs: Iterable["s
     target = check_output(path, inputs)
     folder = target.parent if str(target.parent) else Path(".")
     raw = data.encode("utf-8") if isinstance(data, str) else data
-    fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
+    blocked = _block_signals()  # a kill between creating and recording the temporary file would leave it behind
+    try:
+        fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
+        _LIVE.add(tmp)
+    finally:
+        _unblock_signals(blocked)
     staged = _STAGING.get()
     try:
         with os.fdopen(fd, "wb") as fh:
@@ -223,9 +241,15 @@ def write_atomic(path: "str | Path", data: "str | bytes", *, inputs: Iterable["s
         if staged is not None:
             staged.pending.append((tmp, target))
         else:
-            os.replace(tmp, target)
+            blocked = _block_signals()
+            try:
+                os.replace(tmp, target)
+                _LIVE.discard(tmp)
+            finally:
+                _unblock_signals(blocked)
     except BaseException:
         with contextlib.suppress(OSError):
             os.unlink(tmp)
+        _LIVE.discard(tmp)
         raise
     return target
