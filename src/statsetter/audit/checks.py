@@ -78,20 +78,16 @@ def _p_of(symbol: str, value: float, df: tuple[float, ...]) -> float:
     scipy.special distribution functions behind scipy.stats' sf, called
     directly: the audit computes two per statistic, and the frozen-
     distribution machinery costs a hundred times the arithmetic."""
-    from scipy import special
+    from ..pvalues import upper_tail
 
     if symbol in ("r", "rs"):
         if value >= 1:
             return 0.0
         t = value * math.sqrt(df[0] / (1 - value * value))
-        return float(min(1.0, 2 * special.stdtr(df[0], -abs(t))))
-    if symbol == "t":
-        return float(min(1.0, 2 * special.stdtr(df[0], -abs(value))))
-    if symbol == "z":
-        return float(min(1.0, 2 * special.ndtr(-abs(value))))
-    if symbol == "F":
-        return float(special.fdtrc(df[0], df[1], value))
-    return float(special.chdtrc(df[0], value))  # χ², and H by its χ² approximation
+        return min(1.0, 2 * upper_tail("t", t, df))
+    if symbol in ("t", "z"):
+        return min(1.0, 2 * upper_tail(symbol, value, df))
+    return upper_tail(symbol, value, df)  # F; χ², and H by its χ² approximation
 
 
 def p_range(rep: Reported) -> tuple[float, float] | None:
@@ -118,8 +114,12 @@ def _p_range(rep: Reported) -> tuple[float, float] | None:
         hi = min(hi, 1.0)
     if rep.symbol in ("F", "chi2", "H") and rep.value.value < 0:
         return None
+    from ..errors import MissingExtra
+
     try:
         return _p_of(rep.symbol, hi, df), _p_of(rep.symbol, lo, df)
+    except MissingExtra:  # never skip the p checks silently
+        raise
     except Exception:  # a degenerate df or value: no recomputation
         return None
 
