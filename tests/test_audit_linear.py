@@ -1,0 +1,110 @@
+"""The audit's parser does work linear in the length of a manuscript, and
+never fails or stalls on any text.
+
+Work is counted, not timed: every call of a compiled pattern of the parser
+is wrapped, and the characters each call is given to scan (endpos − pos) are
+added up, as are the characters the report counts newlines over. A rescan of
+a paragraph per statistic, the quadratic shape found before, shows as work
+growing with the square of the input. The shapes are the pathological ones
+of the hardening issue: many statistics on one line, a symbol followed by a
+long run of spaces, and a line of random statistical fragments.
+"""
+
+from __future__ import annotations
+
+import random
+import re
+import time
+
+import pytest
+from hypothesis import HealthCheck, given, settings
+from hypothesis import strategies as st
+
+from statsetter.audit import parsing
+from statsetter.audit.reading import Unit
+from statsetter.audit.report import audit_units
+
+
+class _Counting:
+    def __init__(self, regex: re.Pattern[str], tally: list[int]) -> None:
+        self.regex, self.tally = regex, tally
+
+    def _span(self, text: str, pos: int = 0, endpos: int | None = None) -> tuple[int, int]:
+        end = len(text) if endpos is None else min(endpos, len(text))
+        self.tally[0] += max(0, end - pos)
+        return pos, end
+
+    def finditer(self, text, pos=0, endpos=None):  # type: ignore[no-untyped-def]
+        pos, end = self._span(text, pos, endpos)
+        return self.regex.finditer(text, pos, end)
+
+    def search(self, text, pos=0, endpos=None):  # type: ignore[no-untyped-def]
+        pos, end = self._span(text, pos, endpos)
+        return self.regex.search(text, pos, end)
+
+    def match(self, text, pos=0, endpos=None):  # type: ignore[no-untyped-def]
+        pos, end = self._span(text, pos, endpos)
+        return self.regex.match(text, pos, end)
+
+    def __getattr__(self, name):  # type: ignore[no-untyped-def]
+        return getattr(self.regex, name)
+
+
+def _work(text: str, monkeypatch) -> int:
+    tally = [0]
+    pat = parsing._Patterns(".")
+    for name, value in vars(pat).items():
+        if isinstance(value, re.Pattern):
+            setattr(pat, name, _Counting(value, tally))
+    monkeypatch.setitem(parsing._CACHE, ".", pat)
+    for name in ("_OPERATOR_OR_NS", "_ADJUSTED"):
+        if isinstance(getattr(parsing, name, None), re.Pattern):
+            monkeypatch.setattr(parsing, name, _Counting(getattr(parsing, name), tally))
+    parsing._LAST_INDEX.clear()
+    audit_units([Unit("line 1", text, None, "", 1)])
+    return tally[0]
+
+
+def _many(k: int) -> str:
+    return ", ".join("t(30) = 2.10, p = .044, d = 0.77" for _ in range(300 * k))
+
+
+def _spaces(k: int) -> str:
+    return ("t" + " " * 400) * (40 * k) + "(3) = 2.0"
+
+
+def _fragments(k: int) -> str:
+    rng = random.Random(7)
+    parts = ["t(", "p =", "95% CI [", "F(2,", "r =", "n =", ".05", "and", "(", ")", "M =", "SD =", "2.1", "χ²(", "d ="]
+    return " ".join(rng.choice(parts) for _ in range(3000 * k))
+
+
+@pytest.mark.parametrize("shape", [_many, _spaces, _fragments])
+def test_work_grows_linearly(shape, monkeypatch):
+    work = [_work(shape(k), monkeypatch) for k in (1, 2, 4, 8)]
+    sizes = [len(shape(k)) for k in (1, 2, 4, 8)]
+    for k, w in zip((2, 4, 8), work[1:]):
+        assert w <= 1.15 * k * work[0], (shape.__name__, work)  # doubling the input at most doubles the work
+    assert all(w <= 60 * n for w, n in zip(work, sizes)), (work, sizes)  # a bounded number of passes over the text
+
+
+_TOKENS = st.sampled_from([
+    "t", "F", "r", "χ²", "p", "P", "d", "η²", "V", "N", "n", "M", "SD", "B", "SE", "df", "CI", "95%", "ns", "z", "U", "H",
+    "(", ")", "[", "]", "=", "<", ">", "≤", ",", ";", ".", " ", "  ", "\n", "−", "-", "e", "E", "0", "1", "2.5", ".05",
+    ".000", "1e400", "9" * 120, "1,234", "to", "and", "*", "_", "^2", "\u00a0", "rs", "τb", "partial", "adj.", "R²",
+])
+
+
+@settings(max_examples=20_000, deadline=None, suppress_health_check=[HealthCheck.too_slow], database=None)
+@given(st.lists(_TOKENS, max_size=60).map("".join) | st.text(max_size=200))
+def test_the_parser_never_fails_or_stalls(text):
+    start = time.perf_counter()
+    audit_units([Unit("line 1", text, None, "", 1)])
+    assert time.perf_counter() - start < 0.05 or _slow_again(text)
+
+
+def _slow_again(text: str) -> bool:
+    """A first call may pay for imports or a garbage collection: time it once more."""
+    start = time.perf_counter()
+    audit_units([Unit("line 1", text, None, "", 1)])
+    return time.perf_counter() - start < 0.05
