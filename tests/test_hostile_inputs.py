@@ -571,3 +571,36 @@ def test_two_concurrent_runs_on_one_plan(box):
     import json
 
     json.loads((box / "out" / "r.json").read_text(encoding="utf-8"))  # whole, not interleaved
+
+
+def test_a_table_marker_in_a_cell_leaves_the_cell_ending_in_a_paragraph(box, capsys):
+    # Office Open XML (ECMA-376 §17.4.66, memory): a table cell's last child must be a paragraph
+    name = _docx_with(box, "cell.docx", '<w:tbl><w:tr><w:tc><w:p><w:r><w:t>[[r1|table]]</w:t></w:r></w:p></w:tc></w:tr></w:tbl><w:p/>')
+    code, out, err = _run(["fill", name, "--records", "r.json", "--out", "o.docx"], capsys)
+    assert code == 0 and "filled 1 marker(s)" in out, err
+    import docx
+
+    body = docx.Document(str(box / "o.docx")).element.body
+    W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
+    cell = next(body.iter(f"{W}tc"))
+    assert cell[-1].tag == f"{W}p" and any(child.tag == f"{W}tbl" for child in cell)
+
+
+def test_markers_in_comments_are_filled(box, capsys):
+    comments = ('<?xml version="1.0" encoding="UTF-8" standalone="yes"?><w:comments xmlns:w="http://schemas.openxmlformats.org/wordprocessingml/2006/main">'
+                '<w:comment w:id="0" w:author="a"><w:p><w:r><w:t>see [[r1]]</w:t></w:r></w:p></w:comment></w:comments>')
+    name = _docx_with(box, "com.docx", '<w:p><w:r><w:t>text</w:t></w:r></w:p>', extra={"word/comments.xml": comments.encode()})
+    with zipfile.ZipFile(box / name) as z:
+        rels = z.read("word/_rels/document.xml.rels").decode()
+        types = z.read("[Content_Types].xml").decode()
+        items = {i.filename: z.read(i.filename) for i in z.infolist()}
+    rels = rels.replace("</Relationships>", '<Relationship Id="rIdC" Type="http://schemas.openxmlformats.org/officeDocument/2006/relationships/comments" Target="comments.xml"/></Relationships>')
+    types = types.replace("</Types>", '<Override PartName="/word/comments.xml" ContentType="application/vnd.openxmlformats-officedocument.wordprocessingml.comments+xml"/></Types>')
+    items["word/_rels/document.xml.rels"], items["[Content_Types].xml"] = rels.encode(), types.encode()
+    with zipfile.ZipFile(box / name, "w") as z:
+        for k, v in items.items():
+            z.writestr(k, v)
+    code, out, err = _run(["fill", name, "--records", "r.json", "--out", "o.docx"], capsys)
+    assert code == 0 and "filled 1 marker(s)" in out, (out, err)
+    with zipfile.ZipFile(box / "o.docx") as z:
+        assert "[[r1]]" not in z.read("word/comments.xml").decode()

@@ -37,7 +37,7 @@ class FillReport:
 
 
 def _parts(document) -> Iterator[tuple[str, object]]:  # type: ignore[no-untyped-def]
-    """(name, root element) of the body, headers, footers and footnotes."""
+    """(name, root element) of the body, headers, footers, footnotes, endnotes and comments."""
     yield "body", document.element.body
     seen = set()
     for rel in document.part.rels.values():
@@ -45,7 +45,7 @@ def _parts(document) -> Iterator[tuple[str, object]]:  # type: ignore[no-untyped
         if target is None or id(target) in seen:
             continue
         name = str(target.partname)
-        if any(k in name for k in ("header", "footer", "footnotes", "endnotes")):
+        if any(k in name for k in ("header", "footer", "footnotes", "endnotes", "comments")):
             seen.add(id(target))
             element = getattr(target, "element", None)
             if element is None:
@@ -143,7 +143,12 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
             _remove_span(runs, texts, m.start(), m.end())
             from docx.oxml import parse_xml
 
-            paragraph.addnext(parse_xml(table_xml))
+            table = parse_xml(table_xml)
+            paragraph.addnext(table)
+            if paragraph.getparent() is not None and paragraph.getparent().tag == f"{_W}tc":
+                from docx.oxml import OxmlElement
+
+                table.addnext(OxmlElement("w:p"))  # Word needs a cell to end in a paragraph
             continue
         text = lookup(key, form)
         if text is None:
