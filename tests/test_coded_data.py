@@ -266,3 +266,28 @@ def test_scipy_objects_take_names_without_samples(heart):
     assert render(r, "sentence").plain().startswith("The correlation between serum cholesterol and maximum heart rate")
     with pytest.warns(UserWarning, match=r"labels=\{'x': '...', 'y': '...'\}"):
         to_records(res)
+
+
+@pytest.mark.parametrize("share, scored, note", [
+    (None, 9, "scored from complete items only; 3 of 12 rows have no score"),
+    (0.9, 11, "at least 90% of the 11 items are present (prorated from the items present); 2 of 12 rows prorated, 1 have no score"),
+    (0.8, 12, "3 of 12 rows prorated, 0 have no score"),
+])
+def test_scale_scores_follow_the_missing_item_rule(tmp_path, share, scored, note):
+    # data: pingouin's cronbach_wide_missing (real-statistics.com example): 12 people, 11 binary items, 4 values missing;
+    # reference: pandas' row means over the present items (the prorated mean), and their count
+    data = pg.read_dataset("cronbach_wide_missing")
+    data.to_csv(tmp_path / "items.csv", index=False)
+    items = [f"Q{i}" for i in range(1, 12)]
+    rule = f"min_share = {share}\n" if share else ""
+    (tmp_path / "plan.toml").write_text(
+        '[data]\npath = "items.csv"\n[[scales]]\nname = "total"\nscoring = "sum"\nitems = ' + repr(items).replace("'", '"') + "\n" + rule, encoding="utf-8")
+    from statsetter.analyses import scale_score
+
+    out = run_plan(load_plan(tmp_path / "plan.toml"))
+    assert any(note in n for n in out.notes), out.notes
+    score = scale_score(data, items, scoring="sum", min_share=share)
+    assert score.notna().sum() == scored
+    present = data[items].notna().sum(axis=1)
+    keep = present >= (share or 1) * 11 - 1e-9
+    assert np.allclose(score[keep], data[items].mean(axis=1)[keep] * 11)

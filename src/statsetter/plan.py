@@ -67,7 +67,7 @@ ANALYSIS_KINDS = (
 )
 _TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
 _DATA = {"path", "sheet", "missing", "labels", "table_labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
-_SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label"}
+_SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label", "min_share"}
 _TABLE = {
     "descriptives": {"kind", "id", "title", "variables", "by", "tests", "smd", "show", "weights", "suppress_below", "percent_of"},
     "results": {"kind", "id", "title", "analyses"},
@@ -466,6 +466,7 @@ def _no_column(name: str, frame: "pd.DataFrame") -> str:
 def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunResult:
     """Compute every scale, analysis and table of the plan (nothing written)."""
     from .analyses import cronbach_alpha, scale_score
+    from .analyses.scales import scoring_note
 
     data = _frame(plan)
     frame, labels, levels, value_labels = data.frame, data.labels, data.levels, data.value_labels
@@ -478,7 +479,8 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
         name = scale["name"]
         options = {k: scale[k] for k in ("reverse", "minimum", "maximum") if k in scale}
         try:
-            frame = frame.assign(**{name: scale_score(frame, scale["items"], scoring=scale.get("scoring", "mean"), **options)})
+            frame = frame.assign(**{name: scale_score(frame, scale["items"], scoring=scale.get("scoring", "mean"), min_share=scale.get("min_share"), **options)})
+            data.notes.append(scoring_note(frame, scale["items"], name, scale.get("min_share")))
             if scale.get("label"):
                 labels[name] = scale["label"]
                 data.table_labels.setdefault(name, scale["label"][:1].upper() + scale["label"][1:])

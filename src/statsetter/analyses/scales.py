@@ -40,15 +40,37 @@ def scale_score(
     minimum: float | None = None,
     maximum: float | None = None,
     scoring: Literal["mean", "sum"] = "mean",
+    min_share: float | None = None,
 ) -> "pd.Series":
     """Per-row mean or sum of the items after reversing ``reverse``
-    (x → minimum + maximum − x); a row missing any item scores missing."""
+    (x → minimum + maximum − x). By default a row missing any item scores
+    missing; with ``min_share`` (say 0.8) a row with at least that share of
+    its items present is scored from them — the mean of the present items,
+    or for a sum that mean times the number of items (prorated)."""
     if scoring not in ("mean", "sum"):
         raise InputError(f"scoring: {scoring!r} is not mean or sum")
+    if min_share is not None and not (isinstance(min_share, (int, float)) and 0 < min_share <= 1):
+        raise InputError(f"min_share: {min_share!r} is not a share between 0 and 1 (0.8 for 80% of the items)")
     frame = _items(df, items, reverse, minimum, maximum)
-    complete = frame.notna().all(axis=1)
-    score = frame.mean(axis=1) if scoring == "mean" else frame.sum(axis=1)
-    return score.where(complete)
+    present = frame.notna().sum(axis=1)
+    enough = present == len(items) if min_share is None else present >= min_share * len(items) - 1e-9
+    mean = frame.mean(axis=1)
+    score = mean if scoring == "mean" else mean * len(items)
+    return score.where(enough & (present > 0))
+
+
+def scoring_note(df: "pd.DataFrame", items: Sequence[str], name: str, min_share: float | None = None) -> str:
+    """What the missing-item rule did: how many rows lost their score, how many were prorated."""
+    present = df[list(items)].notna().sum(axis=1)
+    k = len(items)
+    if min_share is None:
+        lost = int((present < k).sum())
+        return f"{name}: scored from complete items only; {lost} of {len(df)} rows have no score (an item missing)."
+    enough = present >= min_share * k - 1e-9
+    lost = int((~enough | (present == 0)).sum())
+    prorated = int((enough & (present < k) & (present > 0)).sum())
+    return (f"{name}: scored when at least {min_share:.0%} of the {k} items are present (prorated from the items present); "
+            f"{prorated} of {len(df)} rows prorated, {lost} have no score.")
 
 
 def cronbach_alpha(
