@@ -37,6 +37,7 @@ from statsetter.plan import PlanError, load_plan, run_plan
 CP = {0: "typical angina", 1: "atypical angina", 2: "non-anginal pain", 3: "asymptomatic"}
 SEX = {0: "female patients", 1: "male patients"}
 TARGET = {0: "no heart disease", 1: "heart disease"}
+SLOPE = {0: "upsloping", 1: "flat", 2: "downsloping"}  # slope of the peak exercise ST segment
 TOL = 1e-8
 
 
@@ -54,8 +55,8 @@ def folder(tmp_path_factory, heart):
         frame, str(folder / "heart.sav"),
         column_labels={"id": "Patient number", "age": "Age (years)", "sex": "Sex", "cp": "Chest pain type",
                        "thalach": "Maximum heart rate (bpm)", "chol": "Serum cholesterol (mg/dl)", "target": "Diagnosis"},
-        variable_value_labels={"cp": CP, "sex": SEX, "target": TARGET},
-        variable_measure={"id": "nominal", "cp": "nominal", "sex": "nominal", "target": "nominal", "age": "scale",
+        variable_value_labels={"cp": CP, "sex": SEX, "target": TARGET, "slope": SLOPE},
+        variable_measure={"id": "nominal", "cp": "nominal", "sex": "nominal", "target": "nominal", "age": "scale", "slope": "ordinal",
                           "thalach": "scale", "chol": "scale"},
     )
     penguins = pg.read_dataset("penguins")
@@ -291,3 +292,12 @@ def test_scale_scores_follow_the_missing_item_rule(tmp_path, share, scored, note
     present = data[items].notna().sum(axis=1)
     keep = present >= (share or 1) * 11 - 1e-9
     assert np.allclose(score[keep], data[items].mean(axis=1)[keep] * 11)
+
+
+def test_a_labelled_ordinal_variable_is_summarised_by_its_categories(folder, heart):
+    # reference: numpy's median and type-7 quartiles of the codes (all fall on whole codes here), named by their labels
+    out = plan_run(folder, HEADER + '[[tables]]\nkind = "descriptives"\nvariables = ["slope"]\n')
+    row = out.tables[0].rows[0]
+    q1, median, q3 = np.percentile(heart.slope, [25, 50, 75])
+    assert row.stub.plain().startswith("slope, Mdn (IQR)")
+    assert row.cells[0].plain() == f"{SLOPE[int(median)]} ({SLOPE[int(q1)]}–{SLOPE[int(q3)]})"

@@ -134,6 +134,9 @@ def describe(
     1 to that number minus one; ``alphas`` puts Cronbach's α beside scale scores.
     """
     import numpy as np
+    import pandas as pd
+
+    from ..coding import factor
 
     labels = dict(labels or {})
     value_labels = value_labels or {}
@@ -185,8 +188,12 @@ def describe(
     for name in names:
         report = found[name]
         kind = "continuous" if report.level in ("interval", "ratio") else report.level
+        series, named = df[name], value_labels.get(name)
+        if kind == "ordinal" and named and pd.api.types.is_numeric_dtype(series):
+            # a labelled ordinal variable: its median and quartiles are categories, shown by label
+            series, named = factor(series, named, ordered=True), None
         summary = _summarise(
-            df[name], name, labels.get(name, name), report, chosen[kind], groups, value_labels.get(name), moments=smd and kind == "ordinal"
+            series, name, labels.get(name, name), report, chosen[kind], groups, named, moments=smd and kind == "ordinal"
         )
         if alphas and name in alphas:
             summary = replace(summary, alpha=_alpha_value(name, alphas[name]))
