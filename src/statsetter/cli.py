@@ -4,8 +4,9 @@ Commands: ``format`` (one result from numbers on the command line),
 ``render`` (JSON files of records), ``fill`` (markers in a chapter),
 ``describe`` (a descriptives table from a data file), ``audit`` (a
 manuscript's statistics checked), ``run`` (an analysis plan), ``styles``
-(list, show, check). Every
-error from user input prints one or two lines and exits with status 2.
+(list, show, check). Exit status: 0 success, 1 findings or unknown markers,
+2 a usage or input error, 3 the environment (disk, permission, a missing
+extra), 4 an internal error; no traceback reaches a user.
 """
 
 from __future__ import annotations
@@ -66,6 +67,8 @@ def _build_parser() -> argparse.ArgumentParser:
     parser = _Parser(
         prog="statsetter",
         description="Statistical results as manuscript-ready text and tables, in a chosen reporting style.",
+        epilog="exit status: 0 success or nothing found; 1 audit findings or unknown markers; 2 a usage or input error; "
+        "3 the environment (disk full, permission, a missing optional dependency); 4 an internal error (traceback in a log file).",
     )
     parser.add_argument("--version", action="store_true", help="print the version and exit")
     parser.add_argument("--debug", action="store_true", help="print the full traceback of an internal error")
