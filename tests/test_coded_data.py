@@ -301,3 +301,19 @@ def test_a_labelled_ordinal_variable_is_summarised_by_its_categories(folder, hea
     q1, median, q3 = np.percentile(heart.slope, [25, 50, 75])
     assert row.stub.plain().startswith("slope, Mdn (IQR)")
     assert row.cells[0].plain() == f"{SLOPE[int(median)]} ({SLOPE[int(q1)]}–{SLOPE[int(q3)]})"
+
+
+def test_small_expected_counts_are_stated(heart):
+    # UCI heart data: only 4 patients have resting ECG code 2, so a table of sex by that code has small expected counts;
+    # reference: scipy.stats.contingency.expected_freq on pandas' crosstab
+    from scipy.stats.contingency import expected_freq
+
+    from statsetter.analyses import chi_square
+
+    frame = heart.assign(ecg2=np.where(heart.restecg == 2, "ECG code 2", "other ECG codes"))
+    records = chi_square(frame, "sex", "ecg2")
+    expected = expected_freq(pd.crosstab(frame.sex, frame.ecg2).to_numpy())
+    note = next(n.text for n in records[0].notes if n.kind == "assumption")
+    small = int((expected < 5).sum())
+    assert f"{small} of 4 cells have expected counts below 5 (smallest {expected.min():.4g})" in note
+    assert "Fisher's exact test is reported as well" in note and records[1].kind == "fisher_exact"
