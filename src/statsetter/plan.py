@@ -517,6 +517,8 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
             matrices[analysis["id"]] = result
             result = result.records()
         found = result if isinstance(result, list) else [result]
+        if kind == "auto":  # a level the data file gave is not one the author declared: say where it came from
+            found = [_level_sources(r, data, analysis) for r in found]
         found = [_with_id(_with_table_labels(r, labels, data.table_labels), analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}")
                  for k, r in enumerate(found)]
         by_id[analysis["id"]] = found
@@ -538,6 +540,21 @@ def _key_of(entry: dict[str, Any], message: str) -> str | None:
         if token in map(str, flat):
             return key
     return None
+
+
+def _level_sources(record: Result, data: _Data, analysis: dict[str, Any]) -> Result:
+    from dataclasses import replace
+
+    notes = []
+    for note in record.notes:
+        text = note.text
+        if note.kind == "choice":
+            for name in (analysis.get("outcome"), analysis.get("predictor")):
+                if name in data.metadata and name not in data.declared and name not in analysis.get("levels", {}):
+                    text = text.replace(f"{name} is {data.metadata[name]} (declared)", f"{name} is {data.metadata[name]} (the data file's measurement level)")
+            note = replace(note, text=text)
+        notes.append(note)
+    return replace(record, notes=tuple(notes))
 
 
 def _with_table_labels(record: Result, prose: dict[str, str], tables: dict[str, str]) -> Result:
