@@ -5,6 +5,7 @@ back with pdftotext (poppler). In CI a missing LibreOffice fails the run.
 """
 
 import os
+import re
 import shutil
 import subprocess
 import zipfile
@@ -62,9 +63,10 @@ def test_table_rules_are_horizontal_only(written):
     doc = docx.Document(str(path))
     tbl = doc.tables[0]._tbl
     # no vertical rules anywhere
-    for edge in ("left", "right", "insideV"):
-        for el in tbl.iter(f"{W}{edge}"):
-            assert el.get(qn("w:val")) == "nil"
+    for borders in [*tbl.iter(f"{W}tblBorders"), *tbl.iter(f"{W}tcBorders")]:  # (tblCellMar's left/right are margins)
+        for edge in ("left", "right", "insideV"):
+            for el in borders.findall(f"{W}{edge}"):
+                assert el.get(qn("w:val")) == "nil"
     rows = tbl.findall(f"{W}tr")
     def ruled(row, edge):
         return [c.find(f"{W}tcPr/{W}tcBorders/{W}{edge}").get(qn("w:val")) == "single" for c in row.findall(f"{W}tc")]
@@ -158,3 +160,37 @@ def test_decimal_alignment_when_the_style_asks(tmp_path):
     assert 'w:val="decimal"' not in zipfile.ZipFile(centred).read("word/document.xml").decode()
     assert "3.50" in pdf_text(centred)
     assert "3.50" in pdf_text(path)
+
+
+
+def test_column_widths_keep_words_whole_when_rendered(tmp_path):
+    # issue: stub labels broke inside words ("Predict/or", "asymptomati/c"); every Word table now has explicit, fixed
+    # column widths within the text width. Checked as a reader sees it: LibreOffice -> PDF -> text, every word of
+    # four letters or more of the stub and the cells whole. Data: the UCI heart-disease records pingouin ships.
+    import pingouin as pg
+
+    from statsetter.analyses import describe, linear_regression
+    from statsetter.export.docx_writer import add_table, results_document, save_document
+    from statsetter.rendering.regression_tables import regression_table
+
+    heart = pg.read_dataset("chi2_independence").assign(
+        cp=lambda f: f.cp.map({0: "typical angina", 1: "atypical angina", 2: "non-anginal pain", 3: "asymptomatic"}),
+        sex=lambda f: f.sex.map({0: "female patients", 1: "male patients"}))
+    labels = {"thalach": "Maximum heart rate (bpm)", "chol": "Serum cholesterol (mg/dl)", "cp": "Chest pain type", "age": "Age (years)"}
+    tables = [describe(heart, ["age", "cp", "chol", "thalach"], by="sex", labels=labels, tests=True).table("apa7"),
+              regression_table(linear_regression(heart, "thalach", ["cp", "age", "sex"], labels=labels), "apa7")]
+    document = results_document([], "apa7", title="Results")
+    for t in tables:
+        add_table(document, t, "apa7")
+    path = tmp_path / "widths.docx"
+    save_document(document, path)
+    xml = zipfile.ZipFile(path).read("word/document.xml").decode()
+    grids = re.findall(r"<w:tblGrid>(.*?)</w:tblGrid>", xml)
+    assert len(grids) == 2 and '<w:tblLayout w:type="fixed"/>' in xml
+    for grid in grids:
+        widths = [int(w) for w in re.findall(r'w:w="(\d+)"', grid)]
+        assert widths and sum(widths) <= 9360  # 6.5 inches: US Letter less 1-inch margins (APA 7 §2.22)
+    text = " ".join(pdf_text(path).split())
+    words = {w for t in tables for row in t.rows for cell in (row.stub, *row.cells)
+             for w in re.findall(r"[A-Za-z][A-Za-z-]{3,}", cell.plain())}
+    assert words and all(w in text for w in words), sorted(w for w in words if w not in text)

@@ -93,8 +93,70 @@ _JC = {"left": "left", "right": "right"}
 _DECIMAL_TAB = '<w:tabs><w:tab w:val="decimal" w:pos="{pos}"/></w:tabs>'
 
 
-def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1, decimal_at: int = 0) -> str:
+# Column widths from content (twips, 1/1440 inch). A character of 11–12 pt
+# Times or Calibri is about half an em wide; digits are exactly that. The
+# estimate errs wide so that no word breaks inside itself in Word or LibreOffice.
+_CHAR = 1  # widths are measured in twips by _chars
+_MARGIN = 100  # each cell's left and right margin, set in the table so that Word and LibreOffice agree
+_PAD = 2 * 144  # both cell margins, as LibreOffice's default (0.1 inch) in case it ignores the table's own
+_HANG = 240  # continuation lines of a wrapped stub label are indented this much
+TEXT_WIDTH = 8640  # 6 inches: python-docx's default page (8.5 in less 1.25 in margins)
+
+
+_KEEP = re.compile(r"([<>=≤≥−]) ")
+_BREAKS = re.compile(r"[ \t\n\u2002\u2003\u2009]+|(?<=[–—/-])")  # a line may break at a space (not a no-break one) or after a dash or slash
+
+
+_EM = 240  # twips in an em of 12 pt type
+# Advance widths in ems, Times-like (Liberation Serif and Times New Roman share them): digits and most
+# lower-case letters are half an em, capitals wider, spaces and points narrower.
+_NARROW = dict.fromkeys(" .,:;'!|il()[]", 0.28) | {"\u2009": 0.17, "\u00a0": 0.25, "\u202f": 0.17}
+_WIDE = dict.fromkeys("mwMW—\u2003", 0.95) | dict.fromkeys("<>=≤≥+×−–", 0.6)
+
+
+def _chars(text: str) -> int:
+    """The width of ``text`` in twips at 12 pt, over-estimated by a tenth."""
+    ems = 0.0
+    for ch in text:
+        ems += _NARROW.get(ch) or _WIDE.get(ch) or (0.72 if ch.isupper() else 0.5)
+    return int(ems * _EM * 1.1)
+
+
+def _column_widths(table: TableModel, text_width: int) -> list[int]:
+    """Each column's width: wide enough for its longest word (stub labels and
+    heads wrap between words, never inside one), as wide as its widest
+    content where the text width allows, and never wider in sum than the
+    text width unless the longest words alone need more."""
+    ncols = len(table.columns) + 1
+    longest = [0] * ncols  # the longest word
+    natural = [0] * ncols  # the longest text, unwrapped
+    stub_rows = [("\u2003" * r.indent) + r.stub.plain() for r in table.rows]
+    split = _BREAKS.split
+    for j, texts in enumerate([[table.stub_head.plain(), *stub_rows]] + [[c.head.plain()] + [r.cells[k].plain() for r in table.rows if k < len(r.cells)]
+                                                                          for k, c in enumerate(table.columns)]):
+        for i, text in enumerate(texts):
+            words = [w for w in split(_KEEP.sub(r"\1", text)) if w] or [""]  # "< .001", "= 2": a symbol stays with its value
+            lead = _chars(text) - _chars(text.lstrip("\u2003")) if j == 0 else 0
+            longest[j] = max(longest[j], lead + max(_chars(w) for w in words))
+            # a head may wrap (it is short words); a body cell's numbers should not
+            natural[j] = max(natural[j], max(_chars(w) for w in words) if i == 0 and j > 0 else _chars(text))
+    low = [_PAD + _CHAR * c + (_HANG if j == 0 else 0) for j, c in enumerate(longest)]
+    want = [max(lo, _PAD + _CHAR * c) for lo, c in zip(low, natural)]
+    if sum(want) <= text_width:
+        return want
+    if sum(low) >= text_width:  # even the longest words do not fit: shrink all alike to the page
+        return [int(w * text_width / sum(low)) for w in low]
+    spare = text_width - sum(low)
+    extra = [w - lo for w, lo in zip(want, low)]
+    total = sum(extra)
+    widths = [lo + int(spare * e / total) for lo, e in zip(low, extra)]
+    return widths
+
+
+def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1, decimal_at: int = 0, width: int = 0, hang: bool = False) -> str:
     grid = f'<w:gridSpan w:val="{span}"/>' if span > 1 else ""
+    if width:
+        grid = f'<w:tcW w:w="{width}" w:type="dxa"/>' + grid
     if align == "decimal" and decimal_at:
         # decimal alignment: a decimal tab stop and a leading tab (APA 7 §7.13 allows either)
         ppr = _DECIMAL_TAB.format(pos=decimal_at) + '<w:jc w:val="left"/>'
@@ -102,36 +164,43 @@ def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int =
     else:
         ppr = f'<w:jc w:val="{_JC.get(align, "center")}"/>'
         runs = _run_xml(text)
+    if hang:
+        ppr = f'<w:ind w:left="{_HANG}" w:hanging="{_HANG}"/>' + ppr
     return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr>{ppr}</w:pPr>{runs}</w:p></w:tc>"
 
 
-def _table_xml(table: TableModel, number_align: str = "center") -> str:
-    """The whole w:tbl as one string, parsed once: fast for tables of thousands of rows."""
+def _table_xml(table: TableModel, number_align: str = "center", text_width: int = TEXT_WIDTH) -> str:
+    """The whole w:tbl as one string, parsed once: fast for tables of thousands
+    of rows. Column widths are explicit and fixed (``_column_widths``), so
+    that Word and LibreOffice lay the table out alike."""
     ncols = len(table.columns) + 1
+    widths = _column_widths(table, text_width)
     head_rows = 2 if table.spanners else 1
     header = "<w:trPr><w:cantSplit/><w:tblHeader/></w:trPr>"
     parts = [
-        f'<w:tbl xmlns:w="{_WNS}"><w:tblPr><w:tblW w:w="0" w:type="auto"/><w:tblBorders>'
+        f'<w:tbl xmlns:w="{_WNS}"><w:tblPr><w:tblW w:w="{sum(widths)}" w:type="dxa"/><w:tblBorders>'
         + "".join(_NIL_XML.format(e) for e in ("top", "left", "bottom", "right", "insideH", "insideV"))
-        + '</w:tblBorders><w:tblLook w:val="0000"/></w:tblPr><w:tblGrid>'
-        + "<w:gridCol/>" * ncols
+        + '</w:tblBorders><w:tblLayout w:type="fixed"/>'
+        + f'<w:tblCellMar><w:left w:w="{_MARGIN}" w:type="dxa"/><w:right w:w="{_MARGIN}" w:type="dxa"/></w:tblCellMar>'
+        + '<w:tblLook w:val="0000"/></w:tblPr><w:tblGrid>'
+        + "".join(f'<w:gridCol w:w="{w}"/>' for w in widths)
         + "</w:tblGrid>"
     ]
     if table.spanners:
-        cells = [_cell_xml(StyledText(), "left", True, False)]
+        cells = [_cell_xml(StyledText(), "left", True, False, width=widths[0])]
         j = 0
         for sp in sorted(table.spanners, key=lambda sp: sp.start):
-            cells += [_cell_xml(StyledText(), "center", True, False) for _ in range(sp.start - j)]
-            cells.append(_cell_xml(sp.label, "center", True, True, sp.end - sp.start))
+            cells += [_cell_xml(StyledText(), "center", True, False, width=widths[k + 1]) for k in range(j, sp.start)]
+            cells.append(_cell_xml(sp.label, "center", True, True, sp.end - sp.start, width=sum(widths[sp.start + 1 : sp.end + 1])))
             j = sp.end
-        cells += [_cell_xml(StyledText(), "center", True, False) for _ in range(len(table.columns) - j)]
+        cells += [_cell_xml(StyledText(), "center", True, False, width=widths[k + 1]) for k in range(j, len(table.columns))]
         parts.append(f"<w:tr>{header}{''.join(cells)}</w:tr>")
     spanned = {j for sp in table.spanners for j in range(sp.start + 1, sp.end + 1)}
     heads = [table.stub_head] + [c.head for c in table.columns]
     parts.append(
         f"<w:tr>{header}"
         + "".join(
-            _cell_xml(h, "left" if j == 0 else "center", head_rows == 1 or j in spanned, True) for j, h in enumerate(heads)
+            _cell_xml(h, "left" if j == 0 else "center", head_rows == 1 or j in spanned, True, width=widths[j]) for j, h in enumerate(heads)
         )
         + "</w:tr>"
     )
@@ -142,11 +211,11 @@ def _table_xml(table: TableModel, number_align: str = "center") -> str:
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
-        cells = [_cell_xml(stub, "left", False, bottom)]
+        cells = [_cell_xml(stub, "left", False, bottom, width=widths[0], hang=True)]
         if row.cells:
-            cells += [_cell_xml(c, a, False, bottom, 1, 60 * width) for c, a in zip(row.cells, aligns)]
+            cells += [_cell_xml(c, a, False, bottom, 1, 60 * width, widths[k + 1]) for k, (c, a) in enumerate(zip(row.cells, aligns))]
         else:
-            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns)))
+            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), width=sum(widths[1:])))
         parts.append(f"<w:tr>{body}{''.join(cells)}</w:tr>")
     parts.append("</w:tbl>")
     return "".join(parts)
@@ -201,10 +270,15 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
         title = title_case(table.title)
         add_runs(p, StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans))
     anchor = document.add_paragraph()  # the table goes before this, notes after it
+    section = document.sections[-1]
+    try:  # the text width of the page the table is on, in twips (EMU / 635)
+        text_width = int((section.page_width - section.left_margin - section.right_margin) / 635)
+    except TypeError:  # a section without page size: python-docx's default page
+        text_width = TEXT_WIDTH
     if len(table.rows) <= _SPLICE_ABOVE:
-        anchor._p.addprevious(parse_xml(_table_xml(table, align)))
+        anchor._p.addprevious(parse_xml(_table_xml(table, align, text_width)))
     else:
-        anchor = _splice(document, anchor, _table_xml(table, align))
+        anchor = _splice(document, anchor, _table_xml(table, align, text_width))
     parts = table.note_parts()
     if parts:
         add_runs(anchor, parts[0])
@@ -233,6 +307,11 @@ def results_document(
 
     resolved = load_style(style)
     document = docx.Document(str(base)) if base is not None else docx.Document()
+    if base is None:  # a new manuscript: 1-inch margins (APA 7 §2.22); an author's own document keeps its page
+        from docx.shared import Inches
+
+        for section in document.sections:
+            section.left_margin = section.right_margin = section.top_margin = section.bottom_margin = Inches(1)
     if title:
         document.add_heading(xml_safe(title), level=1)
     for record in records:
