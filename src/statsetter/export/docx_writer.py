@@ -10,6 +10,7 @@ not split across pages. Runs use the document's own Normal style and fonts.
 from __future__ import annotations
 
 from pathlib import Path
+import functools
 import re
 from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
@@ -103,6 +104,16 @@ _HANG = 240  # continuation lines of a wrapped stub label are indented this much
 TEXT_WIDTH = 8640  # 6 inches: python-docx's default page (8.5 in less 1.25 in margins)
 
 
+@functools.lru_cache(maxsize=1 << 16)
+def _longest_word(text: str) -> int:
+    """The width of the longest piece of ``text`` a line cannot break inside."""
+    if not _BREAKABLE.search(text):
+        return _chars(text)
+    words = [w for w in _BREAKS.split(_KEEP.sub(r"\1", text)) if w]  # "< .001", "= 2": a symbol stays with its value
+    return max((_chars(w) for w in words), default=0)
+
+
+_BREAKABLE = re.compile(r"[ \t\n\u2002\u2003\u2009–—/-]")
 _KEEP = re.compile(r"([<>=≤≥−]) ")
 _BREAKS = re.compile(r"[ \t\n\u2002\u2003\u2009]+|(?<=[–—/-])")  # a line may break at a space (not a no-break one) or after a dash or slash
 
@@ -114,6 +125,7 @@ _NARROW = dict.fromkeys(" .,:;'!|il()[]", 0.28) | {"\u2009": 0.17, "\u00a0": 0.2
 _WIDE = dict.fromkeys("mwMW—\u2003", 0.95) | dict.fromkeys("<>=≤≥+×−–", 0.6)
 
 
+@functools.lru_cache(maxsize=1 << 16)
 def _chars(text: str) -> int:
     """The width of ``text`` in twips at 12 pt, over-estimated by a tenth."""
     ems = 0.0
@@ -131,15 +143,17 @@ def _column_widths(table: TableModel, text_width: int) -> list[int]:
     longest = [0] * ncols  # the longest word
     natural = [0] * ncols  # the longest text, unwrapped
     stub_rows = [("\u2003" * r.indent) + r.stub.plain() for r in table.rows]
-    split = _BREAKS.split
     for j, texts in enumerate([[table.stub_head.plain(), *stub_rows]] + [[c.head.plain()] + [r.cells[k].plain() for r in table.rows if k < len(r.cells)]
                                                                           for k, c in enumerate(table.columns)]):
         for i, text in enumerate(texts):
-            words = [w for w in split(_KEEP.sub(r"\1", text)) if w] or [""]  # "< .001", "= 2": a symbol stays with its value
-            lead = _chars(text) - _chars(text.lstrip("\u2003")) if j == 0 else 0
-            longest[j] = max(longest[j], lead + max(_chars(w) for w in words))
+            word = _longest_word(text)
+            lead = _chars(text) - _chars(text.lstrip("\u2003")) if j == 0 and text.startswith("\u2003") else 0
+            if lead + word > longest[j]:
+                longest[j] = lead + word
             # a head may wrap (it is short words); a body cell's numbers should not
-            natural[j] = max(natural[j], max(_chars(w) for w in words) if i == 0 and j > 0 else _chars(text))
+            whole = word if i == 0 and j > 0 else _chars(text)
+            if whole > natural[j]:
+                natural[j] = whole
     low = [_PAD + _CHAR * c + (_HANG if j == 0 else 0) for j, c in enumerate(longest)]
     want = [max(lo, _PAD + _CHAR * c) for lo, c in zip(low, natural)]
     if sum(want) <= text_width:
@@ -211,11 +225,12 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
-        cells = [_cell_xml(stub, "left", False, bottom, width=widths[0], hang=True)]
+        # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
+        cells = [_cell_xml(stub, "left", False, bottom, hang=True)]
         if row.cells:
-            cells += [_cell_xml(c, a, False, bottom, 1, 60 * width, widths[k + 1]) for k, (c, a) in enumerate(zip(row.cells, aligns))]
+            cells += [_cell_xml(c, a, False, bottom, 1, 60 * width) for c, a in zip(row.cells, aligns)]
         else:
-            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), width=sum(widths[1:])))
+            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns)))
         parts.append(f"<w:tr>{body}{''.join(cells)}</w:tr>")
     parts.append("</w:tbl>")
     return "".join(parts)
