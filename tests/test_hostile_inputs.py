@@ -500,17 +500,8 @@ def test_a_read_only_output_folder_as_root_is_still_refused_cleanly(box, capsys,
     assert code == 3 and "Permission denied" in err and "Traceback" not in err
 
 
-def test_a_missing_extra_names_it(box, capsys, monkeypatch):
-    import builtins
-
-    real = builtins.__import__
-
-    def no_docx(name, *a, **k):
-        if name == "docx" or name.startswith("docx."):
-            raise ModuleNotFoundError("No module named 'docx'", name="docx")
-        return real(name, *a, **k)
-
-    monkeypatch.setattr(builtins, "__import__", no_docx)
+def test_a_missing_extra_names_it(box, capsys, without_module):
+    without_module("docx")
     code, _, err = _run(["format", "t", "--stat", "2", "--df", "3", "--out", "x.docx"], capsys)
     assert code == 3 and "pip install 'statsetter[docx]'" in err
 

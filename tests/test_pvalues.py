@@ -25,18 +25,9 @@ def test_against_scipy_stats(value, df):
     assert p_from_statistic("t", -value, (df,)) == pytest.approx(min(1.0, 2 * stats.t.sf(value, df)), rel=1e-12, abs=1e-300)
 
 
-def test_missing_scipy_names_the_extra(monkeypatch):
-    import builtins
-
+def test_missing_scipy_names_the_extra(without_module):
     from statsetter.errors import MissingExtra
 
-    real = builtins.__import__
-
-    def no_scipy(name, *a, **k):
-        if name == "scipy" or name.startswith("scipy."):
-            raise ModuleNotFoundError("No module named 'scipy'", name="scipy")
-        return real(name, *a, **k)
-
-    monkeypatch.setattr(builtins, "__import__", no_scipy)
+    without_module("scipy")
     with pytest.raises(MissingExtra, match=r"statsetter\[analyses\]"):
         upper_tail("t", 2.0, (10,))
