@@ -595,3 +595,9 @@ def test_markers_in_comments_are_filled(box, capsys):
     assert code == 0 and "filled 1 marker(s)" in out, (out, err)
     with zipfile.ZipFile(box / "o.docx") as z:
         assert "[[r1]]" not in z.read("word/comments.xml").decode()
+
+
+def test_the_audit_without_scipy_stops_instead_of_skipping_its_p_checks(box, capsys, without_module):
+    without_module("scipy")
+    code, out, err = _run(["audit", "m.md"], capsys)
+    assert code == 3 and "pip install 'statsetter[analyses]'" in err and "Traceback" not in err
