@@ -317,3 +317,18 @@ def test_small_expected_counts_are_stated(heart):
     small = int((expected < 5).sum())
     assert f"{small} of 4 cells have expected counts below 5 (smallest {expected.min():.4g})" in note
     assert "Fisher's exact test is reported as well" in note and records[1].kind == "fisher_exact"
+
+
+def test_pingouin_frames_keep_their_names():
+    # pingouin's linear_regression names its terms ('names'), anova its factor ('Source'); the outcome, which neither
+    # frame records, comes from labels=. Data: pingouin's Big Five sample (Dolan et al., 2009) and the penguins.
+    from statsetter.adapters import to_records
+
+    d = pg.read_dataset("pairwise_corr")
+    records = to_records(pg.linear_regression(d[["Extraversion", "Openness"]], d["Neuroticism"]),
+                         labels={"outcome": "neuroticism", "Openness": "openness", "Extraversion": "extraversion"})
+    text = " ".join(render(r, "sentence").plain() for r in records)
+    assert "A linear regression of neuroticism on extraversion and openness" in text
+    assert "Higher values of openness were associated with higher values of neuroticism" in text
+    anova = to_records(pg.anova(data=pg.read_dataset("penguins"), dv="body_mass_g", between="species"), labels={"outcome": "body mass"})
+    assert render(anova[0], "sentence").plain().startswith("A one-way analysis of variance of body mass across species")

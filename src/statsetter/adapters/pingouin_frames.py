@@ -14,7 +14,7 @@ import math
 from typing import Any
 
 from ..errors import InputError
-from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
+from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from ._core import Adapter, Context, absent, base, integral, pair_key, term_key
 
 LIB = "pingouin"
@@ -100,7 +100,6 @@ def ttest(frame: Any, ctx: Context) -> list[Result]:
 
 def _corr_record(ctx: Context, method: str, n: int, r: float, p: float, alternative: str, names: tuple[str, str] | None) -> Result:
     from ..analyses.correlation import SYMBOLS, correlation_effect
-    from ..records import Variable
 
     if method not in SYMBOLS:
         raise InputError(f"pingouin correlation method {method!r} is not supported; supported: {', '.join(SYMBOLS)}")
@@ -130,12 +129,19 @@ def _term_name(source: str) -> str:
     return " × ".join(part.strip() for part in str(source).split("*"))
 
 
+def _group(ctx: Context, frame: Any) -> tuple[Variable, ...]:
+    """A one-way ANOVA's grouping variable, named by the frame's ``Source``, and its outcome from labels=."""
+    source = str(frame["Source"].iloc[0]) if "Source" in frame.columns else None
+    group = (Variable(source, ctx.labels.get(source, ctx.labels.get("group", source)), "group"),) if source else ()
+    return _outcome(ctx) + group
+
+
 def anova(frame: Any, ctx: Context) -> list[Result]:
     if "SS" not in frame.columns:  # one-way, not detailed
         row = _one(frame)
         return [_base(ctx, "anova_oneway", [absent(ctx, ["ω²", "group summaries"])],
                       statistic=Statistic("F", float(row["F"]), (float(row["ddof1"]), float(row["ddof2"]))), p=float(row["p_unc"]),
-                      effects=(EffectSize("eta2", float(row["np2"])),), details={"variant": "classic"})]
+                      effects=(EffectSize("eta2", float(row["np2"])),), details={"variant": "classic"}, variables=_group(ctx, frame))]
     sources = [str(s) for s in frame["Source"]]
     residual = frame.iloc[-1]
     if sources[-1] == "Within" and len(sources) == 2:  # one-way, detailed: SS give η² and ω²
@@ -143,7 +149,7 @@ def anova(frame: Any, ctx: Context) -> list[Result]:
         ss_b, ss_w, df_b, ms_w = float(term["SS"]), float(residual["SS"]), float(term["DF"]), float(residual["MS"])
         effects = (EffectSize("eta2", ss_b / (ss_b + ss_w)), EffectSize("omega2", (ss_b - df_b * ms_w) / (ss_b + ss_w + ms_w), method="Hays (1963); may be negative"))
         return [_base(ctx, "anova_oneway", [absent(ctx, ["group summaries"])], statistic=Statistic("F", float(term["F"]), (df_b, float(residual["DF"]))),
-                      p=float(term["p_unc"]), effects=effects, details={"variant": "classic"})]
+                      p=float(term["p_unc"]), effects=effects, details={"variant": "classic"}, variables=_group(ctx, frame))]
     ss_type = ctx.option("ss_type")
     notes = [] if ss_type is not None else [Note("method", "The sums-of-squares type is not in the pingouin result (its default is II); pass ss_type= to state it.")]
     out = []
@@ -264,7 +270,8 @@ def linear_regression(frame: Any, ctx: Context) -> list[Result]:
     terms = [str(x) for x in frame["names"] if str(x) != "Intercept"]
     model = _base(ctx, "linear_model", [Note("method", "F and its p computed from the unrounded R² and the model's df.")],
                   statistic=Statistic("F", f, (float(df_model), float(df_resid))), p=float(stats.f.sf(f, df_model, df_resid)), n=n,
-                  effects=(EffectSize("R2", r2), EffectSize("R2_adj", r2_adj)), details={"predictors": " and ".join(terms)})
+                  effects=(EffectSize("R2", r2), EffectSize("R2_adj", r2_adj)), details={"predictors": _joined([ctx.labels.get(t, t) for t in terms])},
+                  variables=_outcome(ctx))
     out = [model]
     level = ctx.level
     if not math.isclose(level, 0.95):
@@ -274,8 +281,22 @@ def linear_regression(frame: Any, ctx: Context) -> list[Result]:
             continue
         out.append(_base(ctx, "linear_coefficient", [absent(ctx, ["β"])], statistic=Statistic("t", float(row["T"]), (float(df_resid),)), p=float(row["pval"]), n=n,
                          estimate=Estimate("B", float(row["coef"]), se=float(row["se"]), ci=Interval(0.95, float(row["CI2.5"]), float(row["CI97.5"]))),
-                         details={"term": str(row["names"]), "adjusted": len(terms) > 1}))
+                         details={"term": str(row["names"]), "adjusted": len(terms) > 1}, variables=_predictor(ctx, str(row["names"]))))
     return out
+
+
+def _joined(names: list[str]) -> str:
+    return names[0] if len(names) == 1 else ", ".join(names[:-1]) + " and " + names[-1]
+
+
+def _outcome(ctx: Context) -> tuple[Variable, ...]:
+    """The outcome, which pingouin's regression frames do not name: from labels= ("outcome")."""
+    return (Variable("outcome", ctx.labels["outcome"], "outcome"),) if "outcome" in ctx.labels else ()
+
+
+def _predictor(ctx: Context, name: str) -> tuple[Variable, ...]:
+    """A coefficient's predictor, named by the frame's ``names`` column (and labels=), and the outcome."""
+    return (Variable(name, ctx.labels.get(name, name), "predictor"),) + _outcome(ctx)
 
 
 def logistic_regression(frame: Any, ctx: Context) -> list[Result]:
@@ -289,7 +310,7 @@ def logistic_regression(frame: Any, ctx: Context) -> list[Result]:
                          statistic=Statistic("z", float(row["z"])), p=float(row["pval"]),
                          estimate=Estimate("B", b, se=float(row["se"]), ci=Interval(0.95, low, high)),
                          effects=(EffectSize("OR", math.exp(b), Interval(0.95, math.exp(low), math.exp(high)), ratio=True),),
-                         details={"term": str(row["names"]), "adjusted": len(terms) > 1}))
+                         details={"term": str(row["names"]), "adjusted": len(terms) > 1}, variables=_predictor(ctx, str(row["names"]))))
     return out
 
 
