@@ -601,3 +601,16 @@ def test_the_audit_without_scipy_stops_instead_of_skipping_its_p_checks(box, cap
     without_module("scipy")
     code, out, err = _run(["audit", "m.md"], capsys)
     assert code == 3 and "pip install 'statsetter[analyses]'" in err and "Traceback" not in err
+
+
+def test_a_spreadsheet_with_a_far_cell_is_refused_before_loading(box, capsys):
+    from openpyxl import Workbook
+
+    book = Workbook()
+    sheet = book.active
+    sheet["A1"], sheet["B1"], sheet["A2"], sheet["B2"] = "y", "g", 1, "a"
+    sheet["XFD1048576"] = 1  # one value at the last column and row
+    book.save(box / "far.xlsx")
+    assert (box / "far.xlsx").stat().st_size < 20_000
+    code, _, err = _run(["describe", "far.xlsx"], capsys)
+    assert code == 2 and "far.xlsx" in err and "over the limit" in err

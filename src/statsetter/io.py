@@ -178,6 +178,7 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str, sep: s
             raise InputError(f"{p}: {str(exc).strip().splitlines()[0]}") from None
         return Dataset(frame, p, notes=tuple(notes))
     if suffix == ".xlsx":
+        _check_sheet_size(p, sheet)
         book = pd.ExcelFile(p, engine="openpyxl")
         if sheet is not None and not isinstance(sheet, int) and sheet not in book.sheet_names:
             raise InputError(f"{p}: no sheet {sheet!r}; sheets: {', '.join(map(str, book.sheet_names))}")
@@ -197,6 +198,33 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str, sep: s
         if frame[name].dtype == object or pd.api.types.is_string_dtype(frame[name]):
             frame[name] = frame[name].mask(frame[name] == "")
     return Dataset(frame, p, levels, dict(meta.variable_value_labels or {}), labels)
+
+
+MAX_CELLS = 50_000_000  # a worksheet's declared dimensions (rows × columns) above this are refused before loading
+
+
+def _check_sheet_size(p: Path, sheet: "str | int | None") -> None:
+    """Refuse a worksheet whose declared dimensions would make a data frame of
+    more than MAX_CELLS cells (one value at the last row and column of a 5 KB
+    file would otherwise be loaded as 17 billion cells)."""
+    from openpyxl import load_workbook
+
+    book = load_workbook(p, read_only=True, data_only=True)
+    try:
+        names = book.sheetnames
+        if isinstance(sheet, int):
+            name = names[sheet] if -len(names) <= sheet < len(names) else None
+        else:
+            name = sheet if sheet is not None else (names[0] if names else None)
+        if name is None or name not in names:
+            return  # the reader names the missing sheet
+        ws = book[name]
+        rows, cols = ws.max_row or 0, ws.max_column or 0
+        if rows * cols > MAX_CELLS:
+            raise InputError(f"{p}: sheet {name!r} declares {rows:,} rows × {cols:,} columns, over the limit of {MAX_CELLS:,} cells; "
+                             "delete the stray cells far from the data or save the data as CSV")
+    finally:
+        book.close()
 
 
 def _apply_missing(frame: "pd.DataFrame", missing: "Sequence[Any] | Mapping[str, Sequence[Any]]", p: Path) -> "pd.DataFrame":
