@@ -332,3 +332,19 @@ def test_pingouin_frames_keep_their_names():
     assert "Higher values of openness were associated with higher values of neuroticism" in text
     anova = to_records(pg.anova(data=pg.read_dataset("penguins"), dv="body_mass_g", between="species"), labels={"outcome": "body mass"})
     assert render(anova[0], "sentence").plain().startswith("A one-way analysis of variance of body mass across species")
+
+
+def test_scipy_objects_take_group_names_without_samples():
+    # scipy's ttest_ind and mannwhitneyu carry no names; groups= names the two groups in the order they were passed
+    # (the sign of t is first minus second: scipy's documentation). Data: the penguins as pingouin bundles them.
+    from scipy import stats
+
+    from statsetter.adapters import to_records
+
+    p = pg.read_dataset("penguins").dropna(subset=["sex", "body_mass_g"])
+    female, male = p.body_mass_g[p.sex == "female"], p.body_mass_g[p.sex == "male"]
+    names = {"groups": ["female penguins", "male penguins"], "labels": {"outcome": "body mass"}}
+    t = to_records(stats.ttest_ind(female, male, equal_var=False), "ttest_ind", **names)[0]
+    assert render(t, "sentence").plain().startswith("Body mass was lower in female penguins than in male penguins; the mean difference was")
+    u = to_records(stats.mannwhitneyu(female, male), **names)[0]
+    assert render(u, "sentence").plain().startswith("Body mass was compared between female penguins and male penguins, Mann–Whitney")

@@ -611,10 +611,15 @@ def main(argv: Sequence[str] | None = None) -> int:
 
     import warnings
 
-    warnings.formatwarning = lambda message, category, *rest: f"statsetter {ns.command}: warning: {message}\n"  # one line, no source
+    def show(message, category, *rest) -> None:  # type: ignore[no-untyped-def]  # one line, no source, every time
+        sys.stderr.write(f"statsetter {ns.command}: warning: {message}\n")
+
     previous = _on_terminate()
     try:
-        with inputs_scope():
+        with inputs_scope(), warnings.catch_warnings():
+            warnings.simplefilter("ignore")  # libraries' runtime and deprecation warnings are not for the user
+            warnings.simplefilter("always", UserWarning)  # ours (a removed character, a p that does not follow) always are
+            warnings.showwarning = show
             return handlers[ns.command](ns)
     except EnvironmentFailure as exc:
         sys.stderr.write(f"statsetter {ns.command}: error: {exc}\n")

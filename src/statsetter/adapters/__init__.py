@@ -121,12 +121,23 @@ def _named(records: list[Result], ctx: Context) -> list[Result]:
 
     from ..records import Variable
 
+    from ..records import GroupSummary
+
     out = []
     for r in records:
         have = {v.role for v in r.variables}
         extra = tuple(Variable(role, ctx.labels[role], role) for role in _ROLES.get(r.kind, ()) if role not in have and role in ctx.labels)
-        out.append(replace(r, variables=r.variables + extra) if extra else r)
+        if extra:
+            r = replace(r, variables=r.variables + extra)
+        if ctx.groups and not r.groups and ctx.samples is None and r.kind in _TWO_GROUPS:
+            if len(ctx.groups) != 2:
+                raise InputError(f"groups: {len(ctx.groups)} name(s) given; a {r.kind.replace('_', ' ')} compares two groups")
+            r = replace(r, groups=tuple(GroupSummary(str(g)) for g in ctx.groups))  # names only: the object has no group numbers
+        out.append(r)
     return out
+
+
+_TWO_GROUPS = frozenset({"t_independent", "t_paired", "mann_whitney", "wilcoxon"})
 
 
 def _ask_for_names(records: list[Result], source: str) -> None:

@@ -83,7 +83,7 @@ class Helpers:
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
 
-    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible".split()
+    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible paren".split()
     _PLAIN = "var cap verdict significant direction_word null".split()
 
     def raw(self) -> dict[str, Any]:
@@ -242,6 +242,10 @@ class Helpers:
                 text = self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))
             out.append(f"{self.sym(symbol)} = {text}")
         return self._join.join(out)
+
+    def paren(self, text: str) -> str:
+        """`` (text)`` after a group's name, or nothing when there is nothing to say."""
+        return f" ({text})" if text else ""
 
     def cat(self, r: Result, index: int) -> str:
         """``45 (37.5%)`` for category ``index`` of a categorical summary."""
