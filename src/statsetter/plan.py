@@ -233,7 +233,7 @@ def _check_targets(plan: Plan) -> None:
         inputs[os.path.normcase(os.path.realpath(plan.resolve(plan.style)))] = "the style file"
     for key, path in _targets(plan).items():
         real = os.path.normcase(os.path.realpath(path))
-        where = "outputs.folder" if key == "folder" else f"chapter.out" if key == "chapter" else f"outputs.{key}"
+        where = "outputs.folder" if key == "folder" else "chapter.out" if key == "chapter" else f"outputs.{key}"
         if not plan.outputs.get("allow_outside") and os.path.commonpath([home, os.path.realpath(path)]) != home:
             raise plan.fail(where, f"{path} is outside the plan's folder {home}; write allow_outside = true under [outputs] to allow it")
         if key == "folder":
@@ -469,7 +469,7 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     from .analyses.scales import scoring_note
 
     data = _frame(plan)
-    frame, labels, levels, value_labels = data.frame, data.labels, data.levels, data.value_labels
+    frame, labels, levels = data.frame, data.labels, data.levels
     style = _style(plan)
     records: list[Result] = []
     by_id: dict[str, list[Result]] = {}

@@ -97,7 +97,6 @@ _DECIMAL_TAB = '<w:tabs><w:tab w:val="decimal" w:pos="{pos}"/></w:tabs>'
 # Column widths from content (twips, 1/1440 inch). A character of 11–12 pt
 # Times or Calibri is about half an em wide; digits are exactly that. The
 # estimate errs wide so that no word breaks inside itself in Word or LibreOffice.
-_CHAR = 1  # widths are measured in twips by _chars
 _MARGIN = 100  # each cell's left and right margin, set in the table so that Word and LibreOffice agree
 _PAD = 2 * 144  # both cell margins, as LibreOffice's default (0.1 inch) in case it ignores the table's own
 _HANG = 240  # continuation lines of a wrapped stub label are indented this much
@@ -154,8 +153,8 @@ def _column_widths(table: TableModel, text_width: int) -> list[int]:
             whole = word if i == 0 and j > 0 else _chars(text)
             if whole > natural[j]:
                 natural[j] = whole
-    low = [_PAD + _CHAR * c + (_HANG if j == 0 else 0) for j, c in enumerate(longest)]
-    want = [max(lo, _PAD + _CHAR * c) for lo, c in zip(low, natural)]
+    low = [_PAD + c + (_HANG if j == 0 else 0) for j, c in enumerate(longest)]
+    want = [max(lo, _PAD + c) for lo, c in zip(low, natural)]
     if sum(want) <= text_width:
         return want
     if sum(low) >= text_width:  # even the longest words do not fit: shrink all alike to the page
@@ -187,7 +186,6 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     """The whole w:tbl as one string, parsed once: fast for tables of thousands
     of rows. Column widths are explicit and fixed (``_column_widths``), so
     that Word and LibreOffice lay the table out alike."""
-    ncols = len(table.columns) + 1
     widths = _column_widths(table, text_width)
     head_rows = 2 if table.spanners else 1
     header = "<w:trPr><w:cantSplit/><w:tblHeader/></w:trPr>"
