@@ -51,5 +51,11 @@ def check_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> None:
                     raise InputError(f"{p}: {info.filename} unpacks {info.file_size // max(info.compress_size, 1)}× its packed size; refusing (zip bomb?)")
             if total > max_unpacked:
                 raise InputError(f"{p}: unpacks to {total:,} bytes, over the limit of {max_unpacked:,}")
+            for info in archive.infolist():  # Word never writes a DOCTYPE; one would be lost (or break) on saving
+                if info.filename.endswith((".xml", ".rels")):
+                    with archive.open(info) as part:
+                        if b"<!DOCTYPE" in part.read(1024).upper():
+                            raise InputError(f"{p}: {info.filename} declares a DOCTYPE, which Word documents do not have; "
+                                             "open and save it in Word or LibreOffice first")
     except zipfile.BadZipFile:
         raise InputError(f"{p}: a damaged zip archive, not a readable .docx") from None
