@@ -611,3 +611,10 @@ def test_a_spreadsheet_with_a_far_cell_is_refused_before_loading(box, capsys):
     assert (box / "far.xlsx").stat().st_size < 20_000
     code, _, err = _run(["describe", "far.xlsx"], capsys)
     assert code == 2 and "far.xlsx" in err and "over the limit" in err
+
+
+@pytest.mark.parametrize("text", ["[" * 100_000 + "]" * 100_000, '{"kind": ' + "[" * 50_000 + "]" * 50_000 + "}", "[1, 2]", '{"records": 3}', "null"])
+def test_strange_records_files(box, capsys, text):
+    (box / "odd.json").write_text(text, encoding="utf-8")
+    code, _, err = _run(["render", "odd.json"], capsys)
+    assert code == 2 and "odd.json" in err and "Traceback" not in err, err

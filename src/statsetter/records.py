@@ -589,6 +589,8 @@ def load_records(text: str, *, source: str = "<records>") -> list[Result]:
         data = json.loads(text)
     except json.JSONDecodeError as exc:
         raise InputError(f"{source}: not valid JSON (line {exc.lineno}, column {exc.colno}): {exc.msg}") from None
+    except RecursionError:
+        raise InputError(f"{source}: nested too deeply to be a file of records") from None
     if isinstance(data, Mapping):
         data = data.get("records", [data]) if "kind" not in data else [data]
     if not isinstance(data, list):
