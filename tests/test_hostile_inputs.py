@@ -618,3 +618,13 @@ def test_strange_records_files(box, capsys, text):
     (box / "odd.json").write_text(text, encoding="utf-8")
     code, _, err = _run(["render", "odd.json"], capsys)
     assert code == 2 and "odd.json" in err and "Traceback" not in err, err
+
+
+def test_the_data_limit_is_counted_while_reading(box, capsys, monkeypatch):
+    # README "Limits": the limit holds while a CSV is read, not only by the size the file system reports
+    from statsetter import files
+
+    monkeypatch.setattr(files, "check_input", lambda path, kind="data": __import__("pathlib").Path(path))  # as if st_size lied
+    monkeypatch.setitem(files.LIMITS, "data", 1000)
+    code, _, err = _run(["describe", "d.csv"], capsys)
+    assert code == 2 and "d.csv" in err and "over the limit" in err

@@ -9,6 +9,7 @@ author are turned into missing values before anything is computed.
 
 from __future__ import annotations
 
+import io
 import re
 from dataclasses import dataclass, field, replace
 from pathlib import Path
@@ -36,6 +37,27 @@ class Dataset:
     value_labels: Mapping[str, Mapping[Any, str]] = field(default_factory=dict)
     labels: Mapping[str, str] = field(default_factory=dict)
     notes: tuple[str, ...] = ()  # what the reader chose or changed (delimiter, decimal mark, infinite values)
+
+
+class _Bounded(io.RawIOBase):
+    """A binary file that refuses to be read past the data size limit."""
+
+    def __init__(self, raw: Any, path: Path) -> None:
+        from .files import LIMITS
+
+        self.raw, self.path, self.left = raw, path, LIMITS["data"]
+
+    def readable(self) -> bool:
+        return True
+
+    def readinto(self, buffer: Any) -> int:
+        n = self.raw.readinto(buffer)
+        self.left -= n or 0
+        if self.left < 0:
+            from .files import LIMITS
+
+            raise InputError(f"{self.path}: over the limit of {LIMITS['data'] >> 20:,} MiB for a data file")
+        return n
 
 
 def _check_magic(path: Path, suffix: str) -> None:
@@ -171,7 +193,8 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str, sep: s
                 raise InputError(f"{p}: column {col!r} appears twice in the header (line {skip + 1}); rename one")
             seen.add(col)
         try:
-            frame = pd.read_csv(p, sep=sep, decimal=decimal, encoding=encoding, skiprows=skip)
+            with p.open("rb") as raw:  # counted while reading: the size limit holds whatever the file system says
+                frame = pd.read_csv(_Bounded(raw, p), sep=sep, decimal=decimal, encoding=encoding, skiprows=skip)
         except pd.errors.EmptyDataError:
             raise InputError(f"{p}: no columns to read") from None
         except pd.errors.ParserError as exc:
