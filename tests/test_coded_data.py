@@ -348,3 +348,23 @@ def test_scipy_objects_take_group_names_without_samples():
     assert render(t, "sentence").plain().startswith("Body mass was lower in female penguins than in male penguins; the mean difference was")
     u = to_records(stats.mannwhitneyu(female, male), **names)[0]
     assert render(u, "sentence").plain().startswith("Body mass was compared between female penguins and male penguins, Mann–Whitney")
+
+
+def test_table_labels_through_the_api(heart):
+    # a variable has a prose label (labels=) and a table label (table_labels=), in every analysis of the API and
+    # in the record's JSON; statsmodels' formula interface is the reference for the numbers
+    from statsetter.analyses import anova_oneway, linear_regression
+    from statsetter.records import Result
+
+    frame = heart.assign(cp=heart.cp.map(CP))
+    prose, tables = {"thalach": "maximum heart rate", "cp": "chest pain type"}, {"thalach": "Maximum heart rate (bpm)", "cp": "Chest pain type"}
+    model, *coefs = linear_regression(frame, "thalach", ["cp", "age"], labels=prose, table_labels=tables)
+    ref = smf.ols("thalach ~ C(cp, Treatment(reference='typical angina')) + age", data=frame).fit()
+    assert model.statistic.value == pytest.approx(ref.fvalue, rel=TOL)
+    assert (model.variable("outcome").display, model.variable("outcome").heading) == ("maximum heart rate", "Maximum heart rate (bpm)")
+    atypical = next(c for c in coefs if c.details["term"] == "cp[atypical angina]")
+    assert atypical.variable("predictor").heading == "Chest pain type = atypical angina"
+    again = Result.from_json(atypical.to_json())
+    assert again.variable("predictor").table_label == "Chest pain type = atypical angina"
+    one_way = anova_oneway(frame, "thalach", "cp", labels=prose, table_labels=tables)
+    assert one_way.variable("group").heading == "Chest pain type"

@@ -49,7 +49,7 @@ from pathlib import Path
 from typing import TYPE_CHECKING, Any, Callable
 
 from .errors import InputError
-from .records import Result
+from .records import Result, with_table_labels
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -519,7 +519,7 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
         found = result if isinstance(result, list) else [result]
         if kind == "auto":  # a level the data file gave is not one the author declared: say where it came from
             found = [_level_sources(r, data, analysis) for r in found]
-        found = [_with_id(_with_table_labels(r, labels, data.table_labels), analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}")
+        found = [_with_id(with_table_labels(r, data.table_labels, labels), analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}")
                  for k, r in enumerate(found)]
         by_id[analysis["id"]] = found
         records += found
@@ -555,23 +555,6 @@ def _level_sources(record: Result, data: _Data, analysis: dict[str, Any]) -> Res
             note = replace(note, text=text)
         notes.append(note)
     return replace(record, notes=tuple(notes))
-
-
-def _with_table_labels(record: Result, prose: dict[str, str], tables: dict[str, str]) -> Result:
-    """Each variable of the record with its table label beside its prose one
-    (a category term "x = level" keeps its level)."""
-    from dataclasses import replace
-
-    changed = []
-    for v in record.variables:
-        head = tables.get(v.name)
-        if head and v.table_label is None:
-            said = prose.get(v.name, v.name)
-            if v.label and v.label != said and v.label.startswith(said + " = "):
-                head = head + v.label[len(said):]
-            v = replace(v, table_label=head)
-        changed.append(v)
-    return replace(record, variables=tuple(changed))
 
 
 def _with_id(record: Result, rid: str) -> Result:

@@ -16,7 +16,7 @@ from __future__ import annotations
 import json
 import re
 import math
-from dataclasses import dataclass, field, fields
+from dataclasses import dataclass, field, fields, replace
 from types import MappingProxyType
 from typing import Any, Literal, Mapping, TypeVar, get_args
 
@@ -34,6 +34,7 @@ __all__ = [
     "Variable",
     "prose_label",
     "table_label",
+    "with_table_labels",
     "Note",
     "Provenance",
     "Result",
@@ -324,6 +325,21 @@ def prose_label(text: str) -> str:
     if first[:1].isupper() and not any(ch.isupper() for ch in first[1:]):
         first = first[:1].lower() + first[1:]
     return f"{first} {rest}" if rest else first
+
+
+def with_table_labels(record: "Result", tables: Mapping[str, str], prose: Mapping[str, str] | None = None) -> "Result":
+    """``record`` with each variable's table label (by column name) beside its
+    prose label; a category term "x = level" keeps its level."""
+    changed = []
+    for v in record.variables:
+        head = tables.get(v.name)
+        if head and v.table_label is None:
+            said = (prose or {}).get(v.name, v.name)
+            if v.label and v.label != said and v.label.startswith(said + " = "):
+                head = head + v.label[len(said):]
+            v = replace(v, table_label=head)
+        changed.append(v)
+    return replace(record, variables=tuple(changed))
 
 
 def table_label(text: str) -> str:
