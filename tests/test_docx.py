@@ -194,3 +194,34 @@ def test_column_widths_keep_words_whole_when_rendered(tmp_path):
     words = {w for t in tables for row in t.rows for cell in (row.stub, *row.cells)
              for w in re.findall(r"[A-Za-z][A-Za-z-]{3,}", cell.plain())}
     assert words and all(w in text for w in words), sorted(w for w in words if w not in text)
+
+
+def test_a_table_caption_never_stands_alone_at_a_page_foot(tmp_path):
+    # issue: the number and title could be stranded at the foot of a page while the table began on the next.
+    # Checked as rendered: documents whose caption falls at every position near the first page's foot, converted by
+    # LibreOffice; the page holding "Table 1" also holds the table's first stub (pdftotext, page by page).
+    soffice = shutil.which("soffice") or shutil.which("libreoffice")
+    if soffice is None or shutil.which("pdftotext") is None:
+        if os.environ.get("CI"):
+            pytest.fail("LibreOffice (soffice) and pdftotext are required in CI; .ci/run installs them")
+        pytest.skip("LibreOffice or pdftotext not installed")
+    from statsetter.export.docx_writer import add_table, results_document, save_document
+    from statsetter.rendering.record_tables import results_table
+
+    table = results_table([EXAMPLES["t_independent"], EXAMPLES["chi2_independence"]], "apa7").with_number(1)
+    first_stub = table.rows[0].stub.plain().split()[0]
+    paths = []
+    for filler in range(18, 30):  # (without keep-with-next, 21 to 25 strand the caption on page 1)
+        document = results_document([], "apa7")
+        for i in range(filler):
+            document.add_paragraph(f"Filler paragraph {i + 1} of the results text.")
+        add_table(document, table, "apa7")
+        path = tmp_path / f"foot{filler}.docx"
+        save_document(document, path)
+        paths.append(path)
+    subprocess.run([soffice, "--headless", "--convert-to", "pdf", "--outdir", str(tmp_path), *map(str, paths)],
+                   check=True, capture_output=True, timeout=300, env={**os.environ, "HOME": str(tmp_path)})
+    for path in paths:
+        pages = subprocess.run(["pdftotext", str(path.with_suffix(".pdf")), "-"], check=True, capture_output=True, text=True).stdout.split("\f")
+        holding = [k for k, page in enumerate(pages) if "Table 1" in page]
+        assert len(holding) == 1 and first_stub in pages[holding[0]], (path.name, holding)

@@ -277,9 +277,11 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
 
     if table.number is not None:
         p = document.add_paragraph()
+        p.paragraph_format.keep_with_next = True  # the number and title never stand alone at a page foot
         p.add_run(f"Table {table.number}").bold = True
     if table.title:
         p = document.add_paragraph()
+        p.paragraph_format.keep_with_next = True
         title = title_case(table.title)
         add_runs(p, StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans))
     anchor = document.add_paragraph()  # the table goes before this, notes after it
