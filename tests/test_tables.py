@@ -24,13 +24,17 @@ def test_markdown():
     md = write_table(model(), "md")
     assert md.startswith("**Table 1**\n\n*Scores by Group*\n")
     assert "| Variable | Group A: *M* | Group A: *SD* | Group B: *M* | Group B: *SD* |" in md
-    assert "*Note.* *M* = mean; *SD* = standard deviation. ^a^ One case excluded." in md
+    # APA 7 §7.14: general, specific and probability notes each begin on a new line (a paragraph of its own in pandoc)
+    assert "\n\n*Note.* *M* = mean; *SD* = standard deviation.\n\n^a^ One case excluded.\n" in md
 
 
 def test_html_has_only_horizontal_rules():
     html = write_table(model(), "html")
     assert "border-left" not in html and "border-right" not in html
     assert 'colspan="2"' in html and "<i>Note.</i>" in html
+    # the number and title are the table's caption, above it and flush left (APA 7 §7.7)
+    assert '<caption style="caption-side:top;text-align:left"><b>Table 1</b><br><i>Scores by Group</i></caption>' in html
+    assert html.count("<p>") == 2  # the general and the specific note, each a paragraph of its own
 
 
 def test_latex_booktabs():

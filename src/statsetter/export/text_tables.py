@@ -31,9 +31,8 @@ def table_markdown(t: TableModel) -> str:
         stub = ("&nbsp;&nbsp;&nbsp;&nbsp;" * row.indent) + row.stub.markdown()
         cells = [c.markdown() for c in row.cells] if row.cells else [""] * len(t.columns)
         out.append("| " + " | ".join(_md_cell(c) for c in [stub] + cells) + " |")
-    notes = t.note_parts()
-    if notes:
-        out += ["", " ".join(n.markdown() for n in notes)]
+    for note in t.note_parts():  # general, specific and probability notes each start a line (APA 7 §7.14)
+        out += ["", note.markdown()]
     return "\n".join(out) + "\n"
 
 
@@ -48,11 +47,11 @@ def _md_cell(text: str) -> str:
 
 def table_html(t: TableModel) -> str:
     out = ['<div class="statsetter-table">']
-    if t.number is not None:
-        out.append(f"<p><b>Table {t.number}</b></p>")
-    if t.title:
-        out.append(f"<p><i>{title_case(t.title).html()}</i></p>")
     out.append('<table style="border-collapse:collapse;border-top:1px solid black;border-bottom:1px solid black">')
+    if t.number is not None or t.title:  # number and title above the table, flush left (APA 7 §7.7), as its caption
+        caption = [f"<b>Table {t.number}</b>"] if t.number is not None else []
+        caption += [f"<i>{title_case(t.title).html()}</i>"] if t.title else []
+        out.append('<caption style="caption-side:top;text-align:left">' + "<br>".join(caption) + "</caption>")
     out.append("<thead>")
     ncol = len(t.columns)
     if t.spanners:
