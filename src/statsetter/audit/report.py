@@ -8,6 +8,8 @@ may explain it.
 
 from __future__ import annotations
 
+import re
+
 import csv
 import io
 import json
@@ -70,6 +72,9 @@ def _suggest(rep: Reported, style: Style, alpha: float) -> str:
         return ""
 
 
+_LONG_NUMBER = re.compile(r"\d{101,}")
+
+
 def audit_units(
     units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None
 ) -> list[Entry]:
@@ -77,6 +82,12 @@ def audit_units(
     mark = resolved.decimal_mark
     entries = []
     for unit in units:
+        long = _LONG_NUMBER.search(unit.text)
+        if long:  # not a statistic anyone typed: said, with its place, and not read
+            import warnings
+
+            where = unit.location if unit.part else f"line {unit.index + unit.text.count(chr(10), 0, long.start())}"
+            warnings.warn(f"{where}: a number of {len(long.group()):,} digits is not read as a statistic", stacklevel=2)
         previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
         counted, lines, newline = 0, 0, -1  # newlines before position `counted`, and the last of them (one pass per unit)
         for rep in find_statistics(unit.text, mark):
