@@ -22,12 +22,18 @@ from test_tables import model
 W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
 
 
-def pdf_text(path):
+def office():
+    """LibreOffice's soffice; the test fails in CI without it (and pdftotext), and is skipped elsewhere."""
     soffice = shutil.which("soffice") or shutil.which("libreoffice")
     if soffice is None or shutil.which("pdftotext") is None:
         if os.environ.get("CI"):
             pytest.fail("LibreOffice (soffice) and pdftotext are required in CI; .ci/run installs them")
         pytest.skip("LibreOffice or pdftotext not installed")
+    return soffice
+
+
+def pdf_text(path):
+    soffice = office()
     out = path.parent
     subprocess.run([soffice, "--headless", "--convert-to", "pdf", "--outdir", str(out), str(path)],
                    check=True, capture_output=True, timeout=180, env={**os.environ, "HOME": str(out)})
@@ -200,11 +206,7 @@ def test_a_table_caption_never_stands_alone_at_a_page_foot(tmp_path):
     # issue: the number and title could be stranded at the foot of a page while the table began on the next.
     # Checked as rendered: documents whose caption falls at every position near the first page's foot, converted by
     # LibreOffice; the page holding "Table 1" also holds the table's first stub (pdftotext, page by page).
-    soffice = shutil.which("soffice") or shutil.which("libreoffice")
-    if soffice is None or shutil.which("pdftotext") is None:
-        if os.environ.get("CI"):
-            pytest.fail("LibreOffice (soffice) and pdftotext are required in CI; .ci/run installs them")
-        pytest.skip("LibreOffice or pdftotext not installed")
+    soffice = office()
     from statsetter.export.docx_writer import add_table, results_document, save_document
     from statsetter.rendering.record_tables import results_table
 
