@@ -19,7 +19,7 @@ from .errors import InputError
 if TYPE_CHECKING:
     import pandas as pd
 
-__all__ = ["category_text", "categories", "factor", "find_category", "label_codes"]
+__all__ = ["category_text", "categories", "factor", "find_category", "joined", "label_codes"]
 
 
 def category_text(value: Any) -> str:
@@ -95,6 +95,11 @@ def find_category(variable: str, given: Any, present: Sequence[Any], codes: Mapp
     inverse = {label: code for code, label in codes.items()}
     shown = [f"{category_text(p)} (code {inverse[category_text(p)]})" if category_text(p) in inverse else category_text(p) for p in present]
     raise InputError(f"{variable}: {role} {given!r} is not among {', '.join(shown)}")
+
+
+def joined(names: Sequence[str]) -> str:
+    """``a``, ``a and b``, ``a, b and c``: names listed in a sentence."""
+    return names[0] if len(names) == 1 else ", ".join(names[:-1]) + " and " + names[-1]
 
 
 def find_categories(variable: str, given: Iterable[Any], present: Sequence[Any], codes: Mapping[str, str] | None = None, role: str = "category") -> list[Any]:

@@ -371,19 +371,11 @@ def _frame(plan: Plan) -> _Data:
         for name in names:
             if name not in frame.columns:
                 raise plan.fail(f"data.{key}", _no_column(name, frame))
-    from .levels import check_level
-
-    for name, level in d.get("levels", {}).items():
-        try:
-            check_level(name, level)
-        except InputError as exc:
-            raise plan.fail("data.levels", str(exc)) from None
     return _Data(frame, labels, tables, dict(d.get("levels", {})), dict(data.levels), value_labels, list(d.get("identifiers", [])), list(data.notes))
 
 
 # Arguments that name a grouping variable, and those that name its categories.
 _FACTOR_ROLES = ("group", "row", "column", "variable", "factors", "predictor")
-_CATEGORY_ARGS = ("groups", "event", "reference", "proportions")
 
 
 def _coded(data: _Data, frame: "pd.DataFrame") -> "pd.DataFrame":
@@ -408,16 +400,14 @@ def _arguments(data: _Data, frame: "pd.DataFrame", args: dict[str, Any], kind: s
     (ordered when ordinal), and categories named by code become labels."""
     import pandas as pd
 
-    from .coding import factor, label_codes
+    from .coding import category_text, factor, label_codes
 
     roles = [v for k in _FACTOR_ROLES if k in args for v in (args[k] if isinstance(args[k], list) else [args[k]])]
     if "event" in args and "outcome" in args:
         roles.append(args["outcome"])
     extra = {}
-    for name in roles:
+    for name in roles if kind != "auto" else ():  # auto reads ordinal codes as numbers; nominal ones are factors already
         if isinstance(name, str) and name in frame.columns and name in data.value_labels and not isinstance(frame[name].dtype, pd.CategoricalDtype):
-            if kind == "auto":
-                continue
             extra[name] = factor(frame[name], data.value_labels[name], ordered=data.levels.get(name) == "ordinal")
     frame = frame.assign(**extra) if extra else frame
     args = dict(args)
@@ -427,9 +417,9 @@ def _arguments(data: _Data, frame: "pd.DataFrame", args: dict[str, Any], kind: s
         if not isinstance(column, str) or column not in data.value_labels:
             return value
         codes = label_codes(data.value_labels[column])
-        if _text(value) in codes:
-            return codes[_text(value)]
-        if _text(value) in codes.values():
+        if category_text(value) in codes:
+            return codes[category_text(value)]
+        if category_text(value) in codes.values():
             return value
         shown = ", ".join(f"{label} (code {code})" for code, label in codes.items())
         raise InputError(f"{column}: {role} {value!r} is neither a value label nor a code; the categories are {shown}")
@@ -443,12 +433,6 @@ def _arguments(data: _Data, frame: "pd.DataFrame", args: dict[str, Any], kind: s
     if isinstance(args.get("proportions"), dict):
         args["proportions"] = {named(args.get("variable"), k, "category"): v for k, v in args["proportions"].items()}
     return frame, args
-
-
-def _text(value: Any) -> str:
-    from .coding import category_text
-
-    return category_text(value)
 
 
 def _code(key: str) -> Any:

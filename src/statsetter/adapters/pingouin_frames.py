@@ -14,6 +14,7 @@ import math
 from typing import Any
 
 from ..errors import InputError
+from ..coding import joined
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from ._core import Adapter, Context, absent, base, integral, pair_key, term_key
 
@@ -270,7 +271,7 @@ def linear_regression(frame: Any, ctx: Context) -> list[Result]:
     terms = [str(x) for x in frame["names"] if str(x) != "Intercept"]
     model = _base(ctx, "linear_model", [Note("method", "F and its p computed from the unrounded R² and the model's df.")],
                   statistic=Statistic("F", f, (float(df_model), float(df_resid))), p=float(stats.f.sf(f, df_model, df_resid)), n=n,
-                  effects=(EffectSize("R2", r2), EffectSize("R2_adj", r2_adj)), details={"predictors": _joined([ctx.labels.get(t, t) for t in terms])},
+                  effects=(EffectSize("R2", r2), EffectSize("R2_adj", r2_adj)), details={"predictors": joined([ctx.labels.get(t, t) for t in terms])},
                   variables=_outcome(ctx))
     out = [model]
     level = ctx.level
@@ -283,10 +284,6 @@ def linear_regression(frame: Any, ctx: Context) -> list[Result]:
                          estimate=Estimate("B", float(row["coef"]), se=float(row["se"]), ci=Interval(0.95, float(row["CI2.5"]), float(row["CI97.5"]))),
                          details={"term": str(row["names"]), "adjusted": len(terms) > 1}, variables=_predictor(ctx, str(row["names"]))))
     return out
-
-
-def _joined(names: list[str]) -> str:
-    return names[0] if len(names) == 1 else ", ".join(names[:-1]) + " and " + names[-1]
 
 
 def _outcome(ctx: Context) -> tuple[Variable, ...]:

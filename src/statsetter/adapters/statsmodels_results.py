@@ -7,6 +7,7 @@ import math
 import re
 from typing import Any
 
+from ..coding import joined
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from ._core import Adapter, Context, absent, base, pair_key, term_key
@@ -110,7 +111,7 @@ def _predictors(terms: list[str], named: dict[str, tuple[Variable, dict[str, str
         text = labels.get(v, v)
         if text not in shown:
             shown.append(text)
-    return shown[0] if len(shown) == 1 else ", ".join(shown[:-1]) + " and " + shown[-1]
+    return joined(shown)
 
 
 def ols(res: Any, ctx: Context) -> list[Result]:

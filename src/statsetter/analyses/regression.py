@@ -6,7 +6,7 @@ import math
 import warnings
 from typing import TYPE_CHECKING, Mapping, Sequence
 
-from ..coding import categories, category_text, factor, find_category
+from ..coding import categories, category_text, factor, find_category, joined
 from ..errors import InputError
 from ..records import EffectSize, Estimate, Interval, Note, Result, Statistic, Variable
 from . import _common as c
@@ -91,8 +91,7 @@ def _check_names(predictors: Sequence[str], reference: Mapping[str, object] | No
 
 def _labels(names: Sequence[str], labels: Mapping[str, str] | None) -> str:
     labels = labels or {}
-    shown = [labels.get(n, n) for n in names]
-    return shown[0] if len(shown) == 1 else ", ".join(shown[:-1]) + " and " + shown[-1]
+    return joined([labels.get(n, n) for n in names])
 
 
 def linear_regression(
