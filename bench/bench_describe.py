@@ -13,6 +13,7 @@ during the table <= 2x the DataFrame's own size (tracemalloc).
 from __future__ import annotations
 
 
+from statsetter import table
 import tracemalloc
 
 import numpy as np
@@ -70,11 +71,11 @@ def main() -> None:
     names = nominal + ordinal + continuous
 
     def ours() -> None:
-        describe(df, names, by="group", levels=levels).table()
+        table(describe(df, names, group="group", levels=levels))
 
     # the two compute the same numbers (checked once, outside the timing)
     ref = baseline(df, nominal, ordinal, continuous)
-    got = {v.name: v for v in describe(df, names, by="group", levels=levels).variables}
+    got = {v.name: v for v in describe(df, names, group="group", levels=levels).variables}
     np.testing.assert_array_equal(got["nom3"].counts[:-1], ref[6].unstack().to_numpy()[:, :-1])
     np.testing.assert_allclose(got["ord2"].median[:-1], ref[20].xs(0.5, level=1)["ord2"].to_numpy())
     np.testing.assert_allclose(got["con4"].sd[:-1], ref[24][("con4", "std")].to_numpy(), rtol=1e-10)

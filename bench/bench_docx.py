@@ -13,7 +13,7 @@ import io
 import docx
 
 from statsetter.export.docx_writer import add_table
-from statsetter.rendering.styled import StyledText
+from statsetter.styled import StyledText
 from statsetter.rendering.tables import Column, Row, TableModel
 from _timing import timed  # noqa: E402  (bench/ is on the path when a benchmark runs)
 

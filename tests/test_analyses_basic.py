@@ -27,7 +27,7 @@ def penguins():
 
 
 def test_student_sleep_paired():
-    r = t_paired(SLEEP, "drug1", "drug2", outcome_label="extra sleep")
+    r = t_paired(SLEEP, "drug1", "drug2", outcome_label="extra sleep").main
     # published (memory): t(9) = -4.06, p = .0028
     assert render(r, "stats").plain().startswith("t(9) = \u22124.06, p = .003")
     assert round(r.p, 4) == 0.0028
@@ -41,7 +41,7 @@ def test_student_sleep_paired():
 def test_noncentral_t_interval_meets_its_definition():
     # Steiger & Fouladi (1997): the limits are the ncp values at which the observed t
     # is the 97.5th and 2.5th percentile of the noncentral t distribution.
-    r = t_paired(SLEEP, "drug1", "drug2")
+    r = t_paired(SLEEP, "drug1", "drug2").main
     d = r.effects[0]
     n = 10
     t = r.statistic.value
@@ -52,7 +52,7 @@ def test_noncentral_t_interval_meets_its_definition():
 
 @pytest.mark.parametrize("variant", ["welch", "student"])
 def test_independent_against_scipy(penguins, variant):
-    r = t_independent(penguins, "body_mass_g", "sex", variant=variant)
+    r = t_independent(penguins, "body_mass_g", "sex", variant=variant).main
     data = penguins.dropna(subset=["body_mass_g", "sex"])
     a = data.body_mass_g[data.sex == "female"]
     b = data.body_mass_g[data.sex == "male"]
@@ -77,7 +77,7 @@ def test_independent_against_scipy(penguins, variant):
 
 
 def test_one_sample_against_scipy(penguins):
-    r = t_one_sample(penguins, "flipper_length_mm", 200)
+    r = t_one_sample(penguins, "flipper_length_mm", 200).main
     x = penguins.flipper_length_mm.dropna()
     ref = stats.ttest_1samp(x, 200)
     assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
@@ -87,7 +87,7 @@ def test_one_sample_against_scipy(penguins):
 
 
 def test_pearson_against_scipy(penguins):
-    r = correlate(penguins, "bill_length_mm", "flipper_length_mm")
+    r = correlate(penguins, "bill_length_mm", "flipper_length_mm").main
     data = penguins[["bill_length_mm", "flipper_length_mm"]].dropna()
     ref = stats.pearsonr(data.bill_length_mm, data.flipper_length_mm)
     ci = ref.confidence_interval()  # scipy's interval is Fisher's z
@@ -100,7 +100,7 @@ def test_pearson_against_scipy(penguins):
 def test_spearman_and_kendall(penguins):
     data = penguins[["bill_length_mm", "body_mass_g"]].dropna()
     n = len(data)
-    r = correlate(penguins, "bill_length_mm", "body_mass_g", "spearman")
+    r = correlate(penguins, "bill_length_mm", "body_mass_g", coefficient="spearman").main
     ref = stats.spearmanr(data.bill_length_mm, data.body_mass_g)
     assert r.statistic.value == pytest.approx(ref.statistic, rel=REL)
     assert r.p == pytest.approx(ref.pvalue, rel=REL)
@@ -109,7 +109,7 @@ def test_spearman_and_kendall(penguins):
     z = stats.norm.ppf(0.975)
     expected = (math.tanh(math.atanh(ref.statistic) - z * se), math.tanh(math.atanh(ref.statistic) + z * se))
     assert (r.effects[0].ci.low, r.effects[0].ci.high) == pytest.approx(expected, rel=REL)
-    k = correlate(penguins, "bill_length_mm", "body_mass_g", "kendall")
+    k = correlate(penguins, "bill_length_mm", "body_mass_g", coefficient="kendall").main
     kref = stats.kendalltau(data.bill_length_mm, data.body_mass_g)
     assert k.statistic.value == pytest.approx(kref.statistic, rel=REL)
     assert k.p == pytest.approx(kref.pvalue, rel=REL)
@@ -152,7 +152,7 @@ def test_kendall_ci_with_ties_against_the_jackknife():
         assert tau == pytest.approx(stats.kendalltau(x, y).statistic, rel=REL)
         assert se == pytest.approx(_jackknife_se(x, y), rel=0.05)
     # the record's CI is Fisher's z with the delta-method SE ASE / (1 − τb²)
-    r = correlate(fair, "rate_marriage", "religious", "kendall")
+    r = correlate(fair, "rate_marriage", "religious", coefficient="kendall").main
     tau, se = kendall_tau_b_se(fair.rate_marriage.to_numpy(float), fair.religious.to_numpy(float))
     z = stats.norm.ppf(0.975)
     half = z * se / (1 - tau**2)
@@ -163,7 +163,7 @@ def test_three_decimal_style_prints_correct_third_decimals(tmp_path, penguins):
     # no borrowed rounding: the record holds unrounded limits, so a 3-decimal style is exact
     house = tmp_path / "three.toml"
     house.write_text('extends = "apa7"\n[numbers]\ndecimals = 3\n')
-    r = t_independent(penguins, "body_mass_g", "sex")
+    r = t_independent(penguins, "body_mass_g", "sex").main
     d = r.effect("d")
     text = render(r, "stats", str(house)).plain()
     assert f"{abs(d.ci.low):.3f}" in text and f"{abs(d.ci.high):.3f}" in text
@@ -172,14 +172,14 @@ def test_three_decimal_style_prints_correct_third_decimals(tmp_path, penguins):
 @pytest.mark.parametrize(
     "call, message",
     [
-        (lambda df: t_independent(df, "species", "sex"), "species: not numeric"),
-        (lambda df: t_independent(df, "body_mass_g", "species"), "3 groups"),
-        (lambda df: t_independent(df.assign(one="a"), "body_mass_g", "one"), "one: 1 group with data"),
-        (lambda df: t_independent(df.head(40).assign(g=["a"] + ["b"] * 39), "body_mass_g", "g"), "n = 1"),
-        (lambda df: t_one_sample(df.assign(k=1.0), "k", 0), "zero variance"),
-        (lambda df: correlate(df.assign(e=np.nan), "e", "body_mass_g"), "every value is missing"),
-        (lambda df: correlate(df, "bill_lenght_mm", "body_mass_g"), "did you mean bill_length_mm"),
-        (lambda df: correlate(df.assign(k=2.0), "k", "body_mass_g"), "k: zero variance"),
+        (lambda df: t_independent(df, "species", "sex").main, "species: not numeric"),
+        (lambda df: t_independent(df, "body_mass_g", "species").main, "3 groups"),
+        (lambda df: t_independent(df.assign(one="a"), "body_mass_g", "one").main, "one: 1 group with data"),
+        (lambda df: t_independent(df.head(40).assign(g=["a"] + ["b"] * 39), "body_mass_g", "g").main, "n = 1"),
+        (lambda df: t_one_sample(df.assign(k=1.0), "k", 0).main, "zero variance"),
+        (lambda df: correlate(df.assign(e=np.nan), "e", "body_mass_g").main, "every value is missing"),
+        (lambda df: correlate(df, "bill_lenght_mm", "body_mass_g").main, "did you mean bill_length_mm"),
+        (lambda df: correlate(df.assign(k=2.0), "k", "body_mass_g").main, "k: zero variance"),
     ],
 )
 def test_bad_input_names_the_variable(penguins, call, message):
@@ -189,9 +189,9 @@ def test_bad_input_names_the_variable(penguins, call, message):
 
 def test_missing_values_always_stated(penguins):
     # issue text: how many rows were dropped is always stated in a note (practice)
-    r = t_paired(SLEEP, "drug1", "drug2")
+    r = t_paired(SLEEP, "drug1", "drug2").main
     assert any(n.kind == "missing" and n.text.startswith("No rows dropped") for n in r.notes)
-    r = correlate(penguins, "bill_length_mm", "body_mass_g")
+    r = correlate(penguins, "bill_length_mm", "body_mass_g").main
     assert any(n.kind == "missing" and "2 of 344 rows dropped" in n.text for n in r.notes)
 
 
@@ -203,9 +203,9 @@ def test_one_sided_t_tests_match_scipy(penguins, alternative):
     data = penguins.dropna(subset=["body_mass_g", "sex"])
     a, b = (data.body_mass_g[data.sex == s].to_numpy() for s in ("female", "male"))
     for variant, equal in (("welch", False), ("student", True)):
-        r = t_independent(penguins, "body_mass_g", "sex", variant=variant, alternative=alternative)
+        r = t_independent(penguins, "body_mass_g", "sex", variant=variant, alternative=alternative).main
         ref = stats.ttest_ind(a, b, equal_var=equal, alternative=alternative)
         assert r.statistic.value == pytest.approx(ref.statistic, rel=1e-10) and r.p == pytest.approx(ref.pvalue, rel=1e-10)
         assert r.estimate.ci is None and r.alternative == alternative
-    one = t_one_sample(penguins, "body_mass_g", 4200, alternative=alternative)
+    one = t_one_sample(penguins, "body_mass_g", 4200, alternative=alternative).main
     assert one.p == pytest.approx(stats.ttest_1samp(penguins.body_mass_g.dropna(), 4200, alternative=alternative).pvalue, rel=1e-10)

@@ -27,7 +27,7 @@ def penguins():
 
 
 def test_matrix_against_scipy_pairwise(penguins):
-    m = correlation_matrix(penguins, COLS)
+    m = correlation_matrix(penguins, COLS).main
     for i in range(4):
         for j in range(i + 1, 4):
             pair = penguins[[COLS[i], COLS[j]]].dropna()
@@ -37,20 +37,20 @@ def test_matrix_against_scipy_pairwise(penguins):
             assert m.r[i, j] == pytest.approx(ref.statistic, rel=REL)
             assert m.p[i, j] == pytest.approx(ref.pvalue, rel=1e-8)
             assert (m.low[i, j], m.high[i, j]) == pytest.approx((ci.low, ci.high), rel=1e-9)
-    assert len(m.records()) == 6
+    assert len(m.pairs()) == 6
 
 
 def test_matrix_adjustment(penguins):
-    raw = correlation_matrix(penguins, COLS)
-    adj = correlation_matrix(penguins, COLS, adjust="holm")
+    raw = correlation_matrix(penguins, COLS).main
+    adj = correlation_matrix(penguins, COLS, adjust="holm").main
     iu = np.triu_indices(4, 1)
     assert adj.p[iu] == pytest.approx(multipletests(raw.p[iu], method="holm")[1], rel=REL)
-    assert "Holm-adjusted" in adj.records()[0].notes[1].text
+    assert "Holm-adjusted" in adj.pairs()[0].notes[1].text
 
 
 def test_spearman_matrix_complete_data(penguins):
     complete = penguins.dropna(subset=COLS)
-    m = correlation_matrix(complete, COLS, method="spearman")
+    m = correlation_matrix(complete, COLS, coefficient="spearman").main
     ref = stats.spearmanr(complete[COLS])
     assert m.r[np.triu_indices(4, 1)] == pytest.approx(ref.statistic[np.triu_indices(4, 1)], rel=REL)
 
@@ -85,18 +85,18 @@ def test_levels():
 
 def test_matrix_bad_input(penguins):
     with pytest.raises(InputError, match="at least two"):
-        correlation_matrix(penguins, ["bill_length_mm"])
+        correlation_matrix(penguins, ["bill_length_mm"]).main
     with pytest.raises(InputError, match="zero variance"):
-        correlation_matrix(penguins.assign(k=1.0), ["k", "body_mass_g"])
+        correlation_matrix(penguins.assign(k=1.0), ["k", "body_mass_g"]).main
     with pytest.raises(InputError, match="not numeric"):
-        correlation_matrix(penguins, ["species", "body_mass_g"])
+        correlation_matrix(penguins, ["species", "body_mass_g"]).main
 
 
 def test_dense_and_sparse_paths_agree(penguins, monkeypatch):
     from statsetter.analyses import matrix
 
-    sparse = correlation_matrix(penguins, COLS)
+    sparse = correlation_matrix(penguins, COLS).main
     monkeypatch.setattr(matrix, "SPARSE_BELOW", -1.0)
-    dense = correlation_matrix(penguins, COLS)
+    dense = correlation_matrix(penguins, COLS).main
     assert np.array_equal(sparse.n, dense.n)
     assert sparse.r == pytest.approx(dense.r, rel=1e-12)

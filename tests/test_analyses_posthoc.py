@@ -11,6 +11,7 @@ from scipy import stats
 from statsmodels.stats.multitest import multipletests
 
 from statsetter import InputError, render
+from statsetter.errors import FormerUse
 from statsetter.analyses import factorial_anova, posthoc
 
 REL = 1e-10
@@ -27,7 +28,7 @@ def samples(df):
 
 
 def test_tukey(penguins):
-    rs = posthoc(penguins, "bill_length_mm", "species", "tukey")
+    rs = posthoc(penguins, "bill_length_mm", "species", adjust="tukey")
     ref = stats.tukey_hsd(*samples(penguins))
     ci = ref.confidence_interval()
     for r, (i, j) in zip(rs, [(0, 1), (0, 2), (1, 2)]):
@@ -38,7 +39,7 @@ def test_tukey(penguins):
 
 
 def test_games_howell_against_pingouin(penguins):
-    rs = posthoc(penguins, "bill_length_mm", "species", "games-howell")
+    rs = posthoc(penguins, "bill_length_mm", "species", adjust="games-howell")
     ref = pg.pairwise_gameshowell(penguins, dv="bill_length_mm", between="species")
     for r, (_, row) in zip(rs, ref.iterrows()):
         assert r.estimate.value == pytest.approx(row["diff"], rel=REL)
@@ -46,7 +47,7 @@ def test_games_howell_against_pingouin(penguins):
 
 
 def test_holm_against_multipletests(penguins):
-    rs = posthoc(penguins, "bill_length_mm", "species", "holm")
+    rs = posthoc(penguins, "bill_length_mm", "species", adjust="holm")
     s = samples(penguins)
     raw = [stats.ttest_ind(s[i], s[j]).pvalue for i, j in [(0, 1), (0, 2), (1, 2)]]
     adjusted = multipletests(raw, method="holm")[1]
@@ -67,8 +68,10 @@ def test_factorial_against_pingouin(penguins, ss_type):
 
 
 def test_bad_input(penguins):
-    with pytest.raises(InputError, match="procedure"):
-        posthoc(penguins, "bill_length_mm", "species", "scheffe")  # type: ignore[arg-type]
+    with pytest.raises(InputError, match="adjust: 'scheffe' is not one of tukey"):
+        posthoc(penguins, "bill_length_mm", "species", adjust="scheffe")  # type: ignore[arg-type]
+    with pytest.warns(FormerUse, match="adjust="), pytest.raises(InputError, match="adjust: 'scheffe'"):
+        posthoc(penguins, "bill_length_mm", "species", "scheffe")  # the former fourth positional argument
     with pytest.raises(InputError, match="one level"):
         factorial_anova(penguins.assign(one="x"), "body_mass_g", ("species", "one"))
 

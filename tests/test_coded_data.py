@@ -186,7 +186,7 @@ def test_an_unknown_category_lists_labels_and_codes(folder):
 
 
 def test_the_case_number_is_left_out_of_table_1(folder):
-    out = plan_run(folder, HEADER + '[[tables]]\nkind = "descriptives"\nby = "sex"\n')
+    out = plan_run(folder, HEADER + '[[tables]]\nkind = "descriptives"\ngroup = "sex"\n')
     stubs = [row.stub.plain() for row in out.tables[0].rows]
     assert not any("Patient number" in s or s.startswith("id") for s in stubs)
     assert any("left out id" in n for n in out.notes)
@@ -366,5 +366,5 @@ def test_table_labels_through_the_api(heart):
     assert atypical.variable("predictor").heading == "Chest pain type = atypical angina"
     again = Result.from_json(atypical.to_json())
     assert again.variable("predictor").table_label == "Chest pain type = atypical angina"
-    one_way = anova_oneway(frame, "thalach", "cp", labels=prose, table_labels=tables)
+    one_way = anova_oneway(frame, "thalach", "cp", labels=prose, table_labels=tables).main
     assert one_way.variable("group").heading == "Chest pain type"

@@ -33,7 +33,7 @@ def files(tmp_path_factory):
 
 @pytest.mark.parametrize("name", ["penguins.csv", "penguins.xlsx", "penguins.parquet", "penguins.dta", "penguins.sav"])
 def test_every_data_format(files, name, capsys):
-    assert main(["describe", str(files / name), "--by", "species", "--vars", "sex,body_mass_g", "--out", str(files / f"{name}.md")]) == 0
+    assert main(["describe", str(files / name), "--group", "species", "--vars", "sex,body_mass_g", "--out", str(files / f"{name}.md")]) == 0
     captured = capsys.readouterr()
     assert "level: sex: nominal (" in captured.err
     md = (files / f"{name}.md").read_text(encoding="utf-8")
@@ -50,7 +50,7 @@ def test_extension_picks_the_format(files, suffix, probe, capsys):
 
 def test_docx_table_opens_in_libreoffice(files, capsys):
     out = files / "table1.docx"
-    assert main(["describe", str(files / "penguins.csv"), "--by", "sex", "--tests", "--smd", "--vars", "species,body_mass_g", "--out", str(out)]) == 0
+    assert main(["describe", str(files / "penguins.csv"), "--group", "sex", "--compare", "--smd", "--vars", "species,body_mass_g", "--out", str(out)]) == 0
     table = docx.Document(str(out)).tables[0]
     assert [row.cells[0].text for row in table.rows[:2]].count("Variable") == 1  # the stub head, under the spanner row
     text = pdf_text(out)
@@ -81,7 +81,7 @@ def test_missing_codes(tmp_path, capsys):
     "setup,args,message",
     [
         (lambda d: None, ["--vars", "body_mas"], "body_mas: no such column; did you mean body_mass_g"),
-        (lambda d: None, ["--by", "specie"], "specie: no such column; did you mean species"),
+        (lambda d: None, ["--group", "specie"], "specie: no such column; did you mean species"),
         (lambda d: None, ["--weights", "body_mass_g"], "missing weight(s)"),
         (lambda d: None, ["--level", "sex"], "--level: expected NAME=VALUE"),
         (lambda d: None, ["--out", "x.pdf"], "unknown extension"),
@@ -153,7 +153,7 @@ def test_an_id_column_is_left_out_unless_named(tmp_path, capsys):
     frame.insert(0, "bird", [f"P{i:03d}" for i in range(len(frame))])
     path = tmp_path / "birds.csv"
     frame.to_csv(path, index=False)
-    assert main(["describe", str(path), "--by", "species"]) == 0
+    assert main(["describe", str(path), "--group", "species"]) == 0
     out = capsys.readouterr()
     assert "left out: bird: nominal" in out.err and "looks like an identifier" in out.err
     assert "P001" not in out.out and "island" in out.out

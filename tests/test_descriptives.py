@@ -16,6 +16,7 @@ Outside references:
 
 from __future__ import annotations
 
+from statsetter import table
 from decimal import Decimal
 
 import numpy as np
@@ -26,7 +27,7 @@ import statsmodels.api as sm
 from scipy import stats
 
 from statsetter import InputError
-from statsetter.analyses.descriptives import describe
+from statsetter.analyses import describe
 from statsetter.export.text_tables import write_table
 from statsetter.levels import infer_level
 
@@ -46,7 +47,7 @@ def by_name(description, name):
 
 
 def test_penguins_against_the_published_summary(penguins):
-    d = describe(penguins, ["species", "sex", "body_mass_g", "bill_length_mm"], show={"continuous": ["mean_sd", "median_iqr", "range"]})
+    d = describe(penguins, ["species", "sex", "body_mass_g", "bill_length_mm"], show={"continuous": ["mean_sd", "median_iqr", "range"]}).main
     species = by_name(d, "species")
     assert dict(zip(species.categories, species.counts[0])) == {"Adelie": 152, "Chinstrap": 68, "Gentoo": 124}
     sex = by_name(d, "sex")
@@ -61,7 +62,7 @@ def test_penguins_against_the_published_summary(penguins):
 
 def test_fair_by_group_against_plain_pandas(fair):
     levels = {"rate_marriage": "ordinal", "occupation": "nominal", "age": "interval", "affairs": "ratio"}
-    d = describe(fair, list(levels), by="religious", levels=levels, show={"continuous": ["mean_sd", "median_iqr", "range", "skew"], "ordinal": ["median_iqr", "counts"]})
+    d = describe(fair, list(levels), group="religious", levels=levels, show={"continuous": ["mean_sd", "median_iqr", "range", "skew"], "ordinal": ["median_iqr", "counts"]}).main
     groups = fair.groupby("religious")
     order = sorted(fair.religious.unique())
     assert d.columns == tuple(f"{g:g}" for g in order) + ("Total",)
@@ -94,7 +95,7 @@ def test_ordinal_quartiles_from_counts_match_numpy_on_awkward_sizes():
     rng = np.random.default_rng(7)
     for n in (1, 2, 3, 4, 5, 10, 11, 101):
         x = rng.integers(1, 6, size=n).astype(float)
-        v = describe(pd.DataFrame({"x": x}), levels={"x": "ordinal"}).variables[0]
+        v = describe(pd.DataFrame({"x": x}), levels={"x": "ordinal"}).main.variables[0]
         np.testing.assert_allclose([v.q1[0], v.median[0], v.q3[0]], np.quantile(x, [0.25, 0.5, 0.75]))
 
 
@@ -102,8 +103,8 @@ def test_weights_against_statsmodels_and_numpy(fair):
     from statsmodels.stats.weightstats import DescrStatsW
 
     w = fair.yrs_married.to_numpy()  # any positive column will do as weights
-    d = describe(fair, ["affairs", "occupation", "rate_marriage"], by="children", weights="yrs_married",
-                 levels={"rate_marriage": "ordinal", "occupation": "nominal"}, show={"continuous": ["mean_sd", "median_iqr"]})
+    d = describe(fair, ["affairs", "occupation", "rate_marriage"], group="children", weights="yrs_married",
+                 levels={"rate_marriage": "ordinal", "occupation": "nominal"}, show={"continuous": ["mean_sd", "median_iqr"]}).main
     affairs = by_name(d, "affairs")
     ref = DescrStatsW(fair.affairs, weights=w, ddof=1)
     np.testing.assert_allclose([affairs.mean[-1], affairs.sd[-1]], [ref.mean, ref.std], rtol=1e-12)
@@ -119,31 +120,31 @@ def test_weights_against_statsmodels_and_numpy(fair):
     occupation = by_name(d, "occupation")
     np.testing.assert_allclose(occupation.counts[-1], fair.groupby("occupation").yrs_married.sum().to_numpy())
     np.testing.assert_allclose(d.column_n[-1], w.sum())
-    note = d.table().general_note.text
+    note = table(d).general_note.text
     assert "weighted by yrs_married" in note
 
 
 def test_tests_per_row_match_scipy_and_pingouin(penguins):
-    d = describe(penguins, ["island", "body_mass_g", "sex"], by="species", tests=True)
+    d = describe(penguins, ["island", "body_mass_g", "sex"], group="species", compare=True).main
     clean = penguins.dropna(subset=["island"])
     chi2 = stats.chi2_contingency(pd.crosstab(clean.species, clean.island), correction=False)
     assert by_name(d, "island").test.p == pytest.approx(chi2.pvalue, rel=1e-10)
     welch = pg.welch_anova(data=penguins.dropna(subset=["body_mass_g"]), dv="body_mass_g", between="species")
     assert by_name(d, "body_mass_g").test.p == pytest.approx(welch["p_unc"].iloc[0], rel=1e-8)
     rated = penguins.assign(mass_rank=penguins.body_mass_g.rank())
-    d2 = describe(rated, ["bill_depth_mm"], by="sex", tests=True, levels={"bill_depth_mm": "ordinal"})
+    d2 = describe(rated, ["bill_depth_mm"], group="sex", compare=True, levels={"bill_depth_mm": "ordinal"}).main
     clean = rated.dropna(subset=["sex", "bill_depth_mm"])
     u = stats.mannwhitneyu(*[g.bill_depth_mm for _, g in clean.groupby("sex")])
     assert d2.variables[0].test.p == pytest.approx(u.pvalue, rel=1e-8)
-    table = d.table()
-    letters = dict(table.specific_notes)
+    laid = table(d)
+    letters = dict(laid.specific_notes)
     assert letters["a"].text == "χ2 test of independence." and letters["b"].text == "Welch's one-way ANOVA."
-    p_cells = [row.cells[-1].text for row in table.rows if row.cells and row.cells[-1].text]
+    p_cells = [row.cells[-1].text for row in laid.rows if row.cells and row.cells[-1].text]
     assert p_cells == ["< .001a", "< .001b", ".976a"]
 
 
 def test_standardised_differences(penguins):
-    d = describe(penguins, ["body_mass_g", "island", "species"], by="sex", smd=True)
+    d = describe(penguins, ["body_mass_g", "island", "species"], group="sex", smd=True).main
     clean = penguins.dropna(subset=["sex"])
     f, m = (clean[clean.sex == s] for s in ("female", "male"))
     mass = by_name(d, "body_mass_g")
@@ -151,12 +152,12 @@ def test_standardised_differences(penguins):
     expected = abs(f.body_mass_g.mean() - m.body_mass_g.mean()) / np.sqrt((f.body_mass_g.var() + m.body_mass_g.var()) / 2)
     assert mass.smd == pytest.approx(expected, rel=1e-12)
     # Yang & Dalton (2012) with two categories reduces to the proportions formula
-    two = describe(clean.assign(biscoe=np.where(clean.island == "Biscoe", "yes", "no")), ["biscoe"], by="sex", smd=True).variables[0]
+    two = describe(clean.assign(biscoe=np.where(clean.island == "Biscoe", "yes", "no")), ["biscoe"], group="sex", smd=True).main.variables[0]
     p1, p2 = (g.island.eq("Biscoe").mean() for g in (f, m))
     assert two.smd == pytest.approx(abs(p1 - p2) / np.sqrt((p1 * (1 - p1) + p2 * (1 - p2)) / 2), rel=1e-12)
     assert by_name(d, "species").smd >= 0
     with pytest.raises(InputError, match="exactly two"):
-        describe(penguins, ["body_mass_g"], by="species", smd=True)
+        describe(penguins, ["body_mass_g"], group="species", smd=True).main
 
 
 def counts_in(table):
@@ -165,27 +166,27 @@ def counts_in(table):
 
 def test_suppression_is_off_by_default_and_hides_recoverable_cells():
     df = pd.DataFrame({"g": ["a"] * 30 + ["b"] * 30, "x": ["p"] * 27 + ["q"] * 2 + ["r"] + ["p"] * 20 + ["q"] * 10})
-    plain = describe(df, ["x"], by="g").table()
+    plain = table(describe(df, ["x"], group="g").main)
     assert not any("<" in c for c in counts_in(plain)) and "confidentiality" not in plain.general_note.text
-    d = describe(df, ["x"], by="g", suppress_below=5)
-    table = d.table()
-    cells = [[c.text for c in row.cells] for row in table.rows[1:]]  # rows p, q, r; columns a, b, Total
+    d = describe(df, ["x"], group="g", suppress_below=5).main
+    laid = table(d)
+    cells = [[c.text for c in row.cells] for row in laid.rows[1:]]  # rows p, q, r; columns a, b, Total
     hidden = np.array([[c.startswith("< 5") for c in row] for row in cells])
     assert hidden[1, 0] and hidden[2, 0]  # q and r in group a are 2 and 1
     for line in list(hidden) + list(hidden.T):  # no row or column with exactly one hidden count
         assert line.sum() != 1
-    assert "cannot be recovered by subtraction" in table.general_note.text
+    assert "cannot be recovered by subtraction" in laid.general_note.text
     with pytest.raises(InputError, match="suppress_below"):
-        describe(df, ["x"], suppress_below=1)
+        describe(df, ["x"], suppress_below=1).main
 
 
 def test_notes_define_abbreviations_and_rounding(penguins):
-    d = describe(penguins, ["island", "body_mass_g", "bill_depth_mm"], levels={"bill_depth_mm": "ordinal"})
-    note = d.table().general_note.text
+    d = describe(penguins, ["island", "body_mass_g", "bill_depth_mm"], levels={"bill_depth_mm": "ordinal"}).main
+    note = table(d).general_note.text
     for defined in ("M = mean", "SD = standard deviation", "Mdn = median", "IQR = interquartile range", "n = number", "N = number"):
         assert defined in note
     assert "may not total 100 because of rounding" in note  # 48.8 + 36.0 + 15.1 = 99.9
-    exact = describe(pd.DataFrame({"x": ["a", "a", "b", "b"]})).table().general_note.text
+    exact = table(describe(pd.DataFrame({"x": ["a", "a", "b", "b"]})).main).general_note.text
     assert "rounding" not in exact and "M = mean" not in exact
 
 
@@ -197,7 +198,7 @@ def test_levels_from_categoricals_and_inference():
         "flag": [0, 1, 1, 0],
         "weight": [61.5, 70.25, 80.0, 55.5],
     })
-    d = describe(df)
+    d = describe(df).main
     levels = {v.name: v.level for v in d.variables}
     assert levels["agree"].level == "ordinal" and levels["agree"].source == "categorical"
     assert by_name(d, "colour").categories == ("red", "blue")  # category order, not sorted
@@ -206,7 +207,7 @@ def test_levels_from_categoricals_and_inference():
     assert levels["flag"].level == "nominal" and levels["flag"].dichotomous
     assert levels["weight"].level == "interval" and not levels["weight"].weak
     agree = by_name(d, "agree")
-    cell = d.table().rows[0].cells[0].text
+    cell = table(d).rows[0].cells[0].text
     # quartiles of ordered categories by the inverted CDF, as numpy's method="inverted_cdf"
     positions = np.quantile([0, 1, 2, 1], [0.25, 0.5, 0.75], method="inverted_cdf")
     assert agree.positions and list(positions) == [0, 1, 1] and cell == "mid (low–mid)"
@@ -228,55 +229,55 @@ def test_sav_metadata_levels_and_value_labels(tmp_path):
     data = read_data(path)
     assert data.levels == {"shift": "nominal", "rested": "ordinal", "hours": "interval"}
     assert data.labels["hours"] == "Sleep (hours)"
-    d = describe(data.frame, metadata_levels=data.levels, value_labels=data.value_labels, labels=data.labels)
+    d = describe(data.frame, metadata_levels=data.levels, value_labels=data.value_labels, labels=data.labels).main
     assert {v.name: v.level.source for v in d.variables} == {"shift": "metadata", "rested": "metadata", "hours": "metadata"}
     assert by_name(d, "shift").categories == ("Night", "Day", "Rotating")  # value-label order
-    declared = describe(data.frame, levels={"rested": "interval"}, metadata_levels=data.levels)
+    declared = describe(data.frame, levels={"rested": "interval"}, metadata_levels=data.levels).main
     assert by_name(declared, "rested").level.source == "declared"
 
 
 def test_writers_and_missing_row(penguins):
-    d = describe(penguins, ["sex", "body_mass_g"], by="species")
-    table = d.table(number=2)
-    md = write_table(table, "md")
+    d = describe(penguins, ["sex", "body_mass_g"], group="species").main
+    laid = table(d, number=2)
+    md = write_table(laid, "md")
     assert "**Table 2**" in md and "| &nbsp;&nbsp;&nbsp;&nbsp;Missing | 6 | 0 | 5 | 11 |" in md
     assert "*n* = 152" in md and "*N* = 344" in md
-    csv = write_table(table, "csv")
+    csv = write_table(laid, "csv")
     assert csv.splitlines()[0].startswith("Variable,")
-    assert "\\textit{M}" in write_table(table, "tex")
-    assert "<i>SD</i>" in write_table(table, "html")
+    assert "\\textit{M}" in write_table(laid, "tex")
+    assert "<i>SD</i>" in write_table(laid, "html")
     # percentages are of the cases with a value: 73 of the 146 sexed Adelie penguins
     assert "73 (50.0)" in md
 
 
 def test_bad_input(penguins):
     with pytest.raises(InputError, match="body_mas: no such column; did you mean body_mass_g"):
-        describe(penguins, ["body_mas"])
+        describe(penguins, ["body_mas"]).main
     with pytest.raises(InputError, match="at least two"):
-        describe(penguins.assign(one="x"), ["sex"], by="one")
+        describe(penguins.assign(one="x"), ["sex"], group="one").main
     with pytest.raises(InputError, match="missing weight"):
-        describe(penguins, ["sex"], weights="body_mass_g")
+        describe(penguins, ["sex"], weights="body_mass_g").main
     with pytest.raises(InputError, match="negative"):
-        describe(penguins.assign(w=-1.0), ["sex"], weights="w")
+        describe(penguins.assign(w=-1.0), ["sex"], weights="w").main
     with pytest.raises(InputError, match="level 'metric'"):
-        describe(penguins, ["sex"], levels={"sex": "metric"})
+        describe(penguins, ["sex"], levels={"sex": "metric"}).main
     with pytest.raises(InputError, match="show.continuous"):
-        describe(penguins, ["body_mass_g"], show={"continuous": ["mode"]})
+        describe(penguins, ["body_mass_g"], show={"continuous": ["mode"]}).main
     with pytest.raises(InputError, match="cannot be interval"):
-        describe(penguins, ["sex"], levels={"sex": "interval"})
+        describe(penguins, ["sex"], levels={"sex": "interval"}).main
     with pytest.raises(InputError, match="name the grouping variable"):
-        describe(penguins, ["sex"], tests=True)
+        describe(penguins, ["sex"], compare=True).main
     with pytest.raises(InputError, match="survey design"):
-        describe(penguins.assign(w=1.0), ["sex"], by="species", weights="w", tests=True)
+        describe(penguins.assign(w=1.0), ["sex"], group="species", weights="w", compare=True).main
 
 
 def test_percentages_are_exactly_rounded_half_up():
     # 1 of 8 = 12.5 %: with one decimal that stays 12.5; 1 of 16 = 6.25 % -> 6.3 (half up), not 6.2
-    d = describe(pd.DataFrame({"x": ["a"] + ["b"] * 15}))
-    cells = counts_in(d.table())
+    d = describe(pd.DataFrame({"x": ["a"] + ["b"] * 15})).main
+    cells = counts_in(table(d))
     assert "1 (6.3)" in cells and "15 (93.8)" in cells
     assert Decimal("6.3") + Decimal("93.8") != 100  # and so the rounding note appears
-    assert "rounding" in d.table().general_note.text
+    assert "rounding" in table(d).general_note.text
 
 
 def test_scale_score_shows_as_continuous_with_alpha():
@@ -287,26 +288,26 @@ def test_scale_score_shows_as_continuous_with_alpha():
     items.columns = [f"item{c}" for c in items.columns]
     names = list(items.columns)
     frame = items.assign(score=scale_score(items, names))
-    record = cronbach_alpha(frame, names)
+    record = cronbach_alpha(frame, names).main
     reference = pg.cronbach_alpha(items)[0]
-    from_record = describe(frame, ["score"], alphas={"score": record})
-    from_number = describe(frame, ["score"], alphas={"score": reference})
+    from_record = describe(frame, ["score"], alphas={"score": record}).main
+    from_number = describe(frame, ["score"], alphas={"score": reference}).main
     assert from_record.variables[0].alpha == pytest.approx(reference, rel=1e-10)
     assert from_record.variables[0].level.level == "interval"
     expected = f"{reference:.2f}".lstrip("0")
-    assert from_record.table().rows[0].stub.text == from_number.table().rows[0].stub.text == f"score (α = {expected}), M (SD)"
+    assert table(from_record).rows[0].stub.text == table(from_number).rows[0].stub.text == f"score (α = {expected}), M (SD)"
     with pytest.raises(InputError, match="not a number"):
-        describe(frame, ["score"], alphas={"score": "high"})
+        describe(frame, ["score"], alphas={"score": "high"}).main
     with pytest.raises(InputError, match="not described"):
-        describe(frame, ["score"], alphas={"other": 0.8})
+        describe(frame, ["score"], alphas={"other": 0.8}).main
 
 
 def test_a_group_without_values_and_a_group_of_one():
     # the Total is computed from the groups that have values; one value has no SD (common practice)
     df = pd.DataFrame({"g": ["a", "a", "b", "b", "b", "c"], "x": [np.nan, np.nan, 1.0, 2.0, 3.5, 9.0]})
-    d = describe(df, ["x"], by="g", levels={"x": "interval"})
+    d = describe(df, ["x"], group="g", levels={"x": "interval"}).main
     v = d.variables[0]
     present = df.x.dropna()
     assert v.mean[-1] == pytest.approx(present.mean(), rel=1e-12) and v.sd[-1] == pytest.approx(present.std(), rel=1e-12)
-    cells = [c.text for c in d.table().rows[0].cells]
+    cells = [c.text for c in table(d).rows[0].cells]
     assert cells[0] == "—" and cells[2] == "9.00 (—)"

@@ -4,6 +4,7 @@ Every .docx written here is converted to PDF by LibreOffice headless and read
 back with pdftotext (poppler). In CI a missing LibreOffice fails the run.
 """
 
+from statsetter import table
 import os
 import re
 import shutil
@@ -183,7 +184,7 @@ def test_column_widths_keep_words_whole_when_rendered(tmp_path):
         cp=lambda f: f.cp.map({0: "typical angina", 1: "atypical angina", 2: "non-anginal pain", 3: "asymptomatic"}),
         sex=lambda f: f.sex.map({0: "female patients", 1: "male patients"}))
     labels = {"thalach": "Maximum heart rate (bpm)", "chol": "Serum cholesterol (mg/dl)", "cp": "Chest pain type", "age": "Age (years)"}
-    tables = [describe(heart, ["age", "cp", "chol", "thalach"], by="sex", labels=labels, tests=True).table("apa7"),
+    tables = [table(describe(heart, ["age", "cp", "chol", "thalach"], group="sex", labels=labels, compare=True).main, "apa7"),
               regression_table(linear_regression(heart, "thalach", ["cp", "age", "sex"], labels=labels), "apa7")]
     document = results_document([], "apa7", title="Results")
     for t in tables:

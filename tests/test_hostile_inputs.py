@@ -257,19 +257,19 @@ def _csv(box: Path, text: str) -> None:
 
 
 BAD_DATA = [
-    ("g,y\n" + "".join(f"{'ab'[i % 2]},{'inf' if i in (3, 8) else i % 7 + 0.5}\n" for i in range(40)), ["describe", "x.csv", "--by", "g", "--tests"], 0, "2 infinite value(s)"),
+    ("g,y\n" + "".join(f"{'ab'[i % 2]},{'inf' if i in (3, 8) else i % 7 + 0.5}\n" for i in range(40)), ["describe", "x.csv", "--group", "g", "--compare"], 0, "2 infinite value(s)"),
     ("age,age\n1,2\n", ["describe", "x.csv"], 2, "'age' appears twice"),
     ("a;b\n1,5;2\n3,5;4\n", ["describe", "x.csv"], 0, "decimal mark: comma"),
-    ("y,g\n1,a\n2,a\n3,a\n", ["describe", "x.csv", "--by", "g", "--tests"], 2, "g: 1 group"),
+    ("y,g\n1,a\n2,a\n3,a\n", ["describe", "x.csv", "--group", "g", "--compare"], 2, "g: 1 group"),
     ("y\n\n", ["describe", "x.csv"], 2, "x.csv"),
     ("", ["describe", "x.csv"], 2, "empty"),
-    ("y,g\n1,a\n", ["describe", "x.csv", "--by", "nope"], 2, "nope"),
+    ("y,g\n1,a\n", ["describe", "x.csv", "--group", "nope"], 2, "nope"),
     ("y,g\n1,a\n", ["describe", "x.csv", "--vars", "zz"], 2, "zz"),
     ("y,g\n1,a\n", ["describe", "x.csv", "--level", "y=cardinal"], 2, "cardinal"),
     ("y,g\n1,a\n", ["describe", "x.csv", "--weights", "g"], 2, "g"),
     ("y,w\n1,-1\n2,1\n", ["describe", "x.csv", "--weights", "w"], 2, "w: negative"),
-    ("y,g\n1,\x01bad\n2,ok\n", ["describe", "x.csv", "--by", "g", "--out", "t.docx"], 0, "control characters"),
-    ("y,g\n1,<script>x</script>\n2,ok\n", ["describe", "x.csv", "--by", "g", "--out", "t.md"], 0, ""),
+    ("y,g\n1,\x01bad\n2,ok\n", ["describe", "x.csv", "--group", "g", "--out", "t.docx"], 0, "control characters"),
+    ("y,g\n1,<script>x</script>\n2,ok\n", ["describe", "x.csv", "--group", "g", "--out", "t.md"], 0, ""),
 ]
 
 
@@ -305,7 +305,7 @@ def test_infinite_values_through_the_api_are_refused_by_name():
 
     frame = pd.DataFrame({"y": [1.0, 2.0, float("inf"), 4.0, 5.0, 6.0], "g": list("aabbab")})
     with pytest.raises(InputError, match=r"y: 1 infinite value\(s\) \(first in row 3\)"):
-        t_independent(frame, "y", "g")
+        t_independent(frame, "y", "g").main
 
 
 # ---------------------------------------------------------------------------
@@ -509,7 +509,7 @@ def test_an_internal_error_is_one_line_and_a_log(box, capsys, monkeypatch):
     def boom(*a, **k):
         raise ZeroDivisionError("planted")
 
-    monkeypatch.setattr("statsetter.cli._cmd_format", boom)
+    monkeypatch.setattr("statsetter.cli.format.run", boom)
     code, _, err = _run(["format", "t", "--stat", "2", "--df", "3"], capsys)
     assert code == 4 and "internal error" in err and "Traceback" not in err
     log = Path(err.split("the full traceback is in ", 1)[1].split(";", 1)[0])

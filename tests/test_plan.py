@@ -44,7 +44,7 @@ group = "sex"
 [[tables]]
 kind = "descriptives"
 variables = ["body_mass_g", "species"]
-by = "sex"
+group = "sex"
 
 [outputs]
 folder = "out"
@@ -57,7 +57,7 @@ json = "records.json"
 def test_plan_runs_and_matches_the_analysis(folder, capsys):
     path = write(folder, GOOD)
     result = run_plan(load_plan(path))
-    direct = t_independent(pg.read_dataset("penguins"), "body_mass_g", "sex", labels={"body_mass_g": "body mass"})
+    direct = t_independent(pg.read_dataset("penguins"), "body_mass_g", "sex", labels={"body_mass_g": "body mass"}).main
     assert result.records[0].id == "mass_by_sex"
     assert result.records[0].statistic == direct.statistic and result.records[0].p == direct.p
     assert result.tables[0].number == 1
@@ -78,7 +78,7 @@ def test_plan_runs_and_matches_the_analysis(folder, capsys):
         (("outcome = \"body_mass_g\"", "outcome = \"body_mass\""), "line 9 (analysis 'mass_by_sex'): body_mass: no such column; did you mean body_mass_g?"),
         (("labels = { body_mass_g", "labels = { body_mas"), "line 4 (data.labels): body_mas: no such column; did you mean body_mass_g"),
         (("title = \"Penguins\"", "titel = \"Penguins\""), "line 1 (titel): unknown key 'titel'; did you mean title?"),
-        (("by = \"sex\"", "by = \"sx\""), "(table 1): sx: no such column; did you mean sex"),
+        (("species\"]\ngroup = \"sex\"", "species\"]\ngroup = \"sx\""), "(table 1): sx: no such column; did you mean sex"),
         (("path = \"penguins.csv\"", "path = \"pinguins.csv\""), "line 3: "),
         (("md = \"results.md\"", "mdd = \"results.md\""), "line 19 (outputs.mdd): unknown key 'mdd'; did you mean md"),
     ],
@@ -112,7 +112,7 @@ def test_a_descriptives_table_without_variables_leaves_out_an_id_column(folder, 
     frame = pg.read_dataset("penguins")[["species", "island", "sex"]]
     frame.insert(0, "bird", [f"P{i:03d}" for i in range(len(frame))])
     frame.to_csv(folder / "birds.csv", index=False)
-    path = write(folder, '[data]\npath = "birds.csv"\n\n[[tables]]\nkind = "descriptives"\nby = "sex"\n\n[outputs]\nfolder = "out"\nmd = "t.md"\n')
+    path = write(folder, '[data]\npath = "birds.csv"\n\n[[tables]]\nkind = "descriptives"\ngroup = "sex"\n\n[outputs]\nfolder = "out"\nmd = "t.md"\n')
     result = run_plan(load_plan(path))
     assert any(n.startswith("tables[0]: left out bird: nominal") for n in result.notes)
     assert main(["run", str(path)]) == 0
@@ -122,7 +122,7 @@ def test_a_descriptives_table_without_variables_leaves_out_an_id_column(folder, 
 
 def test_a_regression_table_needs_a_regression(folder, capsys):
     # the plan names the table when its analysis is not a regression
-    text = GOOD.replace('[[tables]]\nkind = "descriptives"\nvariables = ["body_mass_g", "species"]\nby = "sex"\n',
+    text = GOOD.replace('[[tables]]\nkind = "descriptives"\nvariables = ["body_mass_g", "species"]\ngroup = "sex"\n',
                         '[[tables]]\nkind = "regression"\nanalysis = "mass_by_sex"\n')
     assert 'kind = "regression"' in text
     with pytest.raises(PlanError, match=r"\(table 1\): regression table: give the records of one linear or one logistic regression"):

@@ -86,7 +86,7 @@ def _markup_from(pieces):
 def test_quick_markup_path_equals_the_full_parser(pieces):
     # from_markup's split-once path (flat tags, no entities) must give what the full parser
     # gives, and the segments it records must be the maximal runs computed from the spans
-    from statsetter.rendering.styled import _segments_of
+    from statsetter.styled import _segments_of
 
     markup = _markup_from(pieces)
     quick, full = StyledText.from_markup(markup), StyledText._parse(markup)

@@ -1,6 +1,7 @@
 """statsetter: statistical results as manuscript-ready text and tables.
 
-The public surface: the record types, styles, StyledText and ``render``.
+The public surface: the record types, styles, StyledText, ``render`` (a
+record as text) and ``table`` (records as a table).
 Importing this package loads neither pingouin, statsmodels nor matplotlib;
 analyses load them when they run.
 """
@@ -9,6 +10,8 @@ from __future__ import annotations
 
 from .errors import InputError, RecordError, StatsetterError, StyleError, TemplateError
 from .records import (
+    CorrelationMatrix,
+    Description,
     EffectSize,
     Estimate,
     GroupSummary,
@@ -21,14 +24,17 @@ from .records import (
     dump_records,
     load_records,
 )
+from .rendering.layout import table
 from .rendering.sentences import render
-from .rendering.styled import StyledText
+from .styled import StyledText
 from .style import Style, builtin_styles, load_style
 
-__version__ = "0.1.0"
+from ._version import __version__
 
 __all__ = [
     "Result",
+    "Description",
+    "CorrelationMatrix",
     "Statistic",
     "Interval",
     "Estimate",
@@ -40,6 +46,7 @@ __all__ = [
     "dump_records",
     "load_records",
     "render",
+    "table",
     "StyledText",
     "Style",
     "load_style",

@@ -6,11 +6,13 @@ codebook given in the plan). Before an analysis, a categorical variable is
 turned into a pandas categorical whose categories are the labels, in code
 order, so that every model dummy-codes it, every sentence and table names its
 groups by label, and the first category in code order is the default
-reference. Users may name a category by its label or by its code.
+reference. Users may name a category by its label or by its code. `column`
+finds a data column by name, or names the close matches.
 """
 
 from __future__ import annotations
 
+import difflib
 import math
 from typing import TYPE_CHECKING, Any, Iterable, Mapping, Sequence
 
@@ -104,3 +106,12 @@ def joined(names: Sequence[str]) -> str:
 
 def find_categories(variable: str, given: Iterable[Any], present: Sequence[Any], codes: Mapping[str, str] | None = None, role: str = "category") -> list[Any]:
     return [find_category(variable, g, present, codes, role) for g in given]
+
+
+def column(df: "pd.DataFrame", name: str) -> "pd.Series":
+    if name not in df.columns:
+        names = [str(c) for c in df.columns]
+        close = [n for n in names if str(name).lower() in n.lower()][:3] or difflib.get_close_matches(str(name), names, n=3, cutoff=0.5)
+        hint = f"; did you mean {', '.join(close)}?" if close else ""
+        raise InputError(f"{name}: no such column{hint}")
+    return df[name]

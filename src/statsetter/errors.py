@@ -7,7 +7,7 @@ two lines and exits with status 2; no traceback reaches a user.
 
 from __future__ import annotations
 
-__all__ = ["StatsetterError", "RecordError", "StyleError", "TemplateError", "InputError", "EnvironmentFailure", "MissingExtra", "EXTRAS"]
+__all__ = ["StatsetterError", "RecordError", "StyleError", "TemplateError", "InputError", "EnvironmentFailure", "MissingExtra", "FormerName", "FormerUse", "EXTRAS"]
 
 
 class StatsetterError(Exception):
@@ -58,3 +58,13 @@ class MissingExtra(EnvironmentFailure):
         extra = EXTRAS.get(module.split(".")[0], "all")
         self.module = module
         super().__init__(f"{doing} needs {module.split('.')[0]}, which is not installed; install it with: pip install 'statsetter[{extra}]'")
+
+
+class FormerName(UserWarning):
+    """A plan key, option or keyword given by the name it had before this
+    release: it still works, for one release."""
+
+
+class FormerUse(DeprecationWarning):
+    """A keyword or return shape of the Python API as it was before this
+    release: it still works, for one release."""

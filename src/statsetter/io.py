@@ -254,7 +254,7 @@ def _apply_missing(frame: "pd.DataFrame", missing: "Sequence[Any] | Mapping[str,
     if isinstance(missing, Mapping):
         for name in missing:
             if name not in frame.columns:
-                from .analyses._common import column
+                from .coding import column
 
                 column(frame, name)
         per = {k: list(v) for k, v in missing.items()}

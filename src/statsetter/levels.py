@@ -10,41 +10,18 @@ and which is flagged as weak where a wrong guess is likely.
 from __future__ import annotations
 
 import re
-from dataclasses import dataclass
-from typing import TYPE_CHECKING, Literal, Mapping
+from typing import TYPE_CHECKING, Mapping
 
 from .errors import InputError
+from .records.summaries import Level, LevelReport
 
 if TYPE_CHECKING:
     import pandas as pd
 
-Level = Literal["nominal", "ordinal", "interval", "ratio"]
 LEVELS: tuple[Level, ...] = ("nominal", "ordinal", "interval", "ratio")
-Source = Literal["declared", "metadata", "categorical", "inferred"]
 
 # Integer-valued with at most this many distinct values reads as a rating scale.
 ORDINAL_MAX_DISTINCT = 10
-
-
-@dataclass(frozen=True, slots=True)
-class LevelReport:
-    """A variable's level, where it came from and why."""
-
-    name: str
-    level: Level
-    source: Source
-    reason: str
-    weak: bool = False
-    identifier: bool = False  # text with nearly one value per row: an ID or free text, not a variable to tabulate
-
-    @property
-    def dichotomous(self) -> bool:
-        return self.level == "nominal" and self.reason.startswith("2 distinct")
-
-    def describe(self) -> str:
-        flag = "; a weak guess: declare the level" if self.weak else ""
-        why = f"inferred from the values: {self.reason}" if self.source == "inferred" else self.reason
-        return f"{self.name}: {self.level} ({why}{flag})"
 
 
 def check_level(name: str, level: str) -> Level:
@@ -131,7 +108,7 @@ def resolve_levels(
     labels = labels or {}
     unknown = sorted(set(declared) - set(df.columns))
     if unknown:
-        from .analyses._common import column
+        from .coding import column
 
         column(df, unknown[0])
     out = {}

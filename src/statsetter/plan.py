@@ -44,12 +44,12 @@ import difflib
 import inspect
 import re
 import tomllib
-from dataclasses import dataclass, field
+from dataclasses import dataclass, field, replace
 from pathlib import Path
 from typing import TYPE_CHECKING, Any, Callable
 
 from .errors import InputError
-from .records import Result, with_table_labels
+from .records import CorrelationMatrix, Description, Record, Result, name_records, with_table_labels
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -61,15 +61,16 @@ __all__ = ["Plan", "PlanError", "load_plan", "run_plan", "write_outputs", "RunRe
 
 ANALYSIS_KINDS = (
     "pearson", "spearman", "kendall", "correlation_matrix", "t_independent", "t_paired", "t_one_sample",
-    "chi_square", "goodness_of_fit", "anova_oneway", "posthoc", "factorial_anova", "linear_regression",
+    "chi_square", "fisher_exact", "goodness_of_fit", "anova_oneway", "posthoc", "factorial_anova", "linear_regression",
     "hierarchical_steps", "logistic_regression", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
     "cronbach_alpha", "auto",
 )
+_TABLE_RENAMED = {"descriptives": {"by": "group", "tests": "compare"}}
 _TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
 _DATA = {"path", "sheet", "missing", "labels", "table_labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
 _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label", "min_share"}
 _TABLE = {
-    "descriptives": {"kind", "id", "title", "variables", "by", "tests", "smd", "show", "weights", "suppress_below", "percent_of"},
+    "descriptives": {"kind", "id", "title", "variables", "group", "compare", "smd", "show", "weights", "suppress_below", "percent_of"},
     "results": {"kind", "id", "title", "analyses"},
     "correlations": {"kind", "id", "title", "analysis"},
     "regression": {"kind", "id", "title", "analysis"},
@@ -133,6 +134,26 @@ def _lines(text: str) -> dict[str, int]:
     return out
 
 
+def _renamed(plan: Plan, where: str, entry: dict[str, Any], renamed: dict[str, str]) -> None:
+    """Accept a key's former name for one release, with a warning naming the line."""
+    import warnings
+
+    from .errors import FormerName
+
+    for old, new in renamed.items():
+        if old in entry:
+            if new in entry:
+                raise plan.fail(f"{where}.{old}", f"{old!r} is the former name of {new!r}; give one of them")
+            warnings.warn(f"{plan.where(f'{where}.{old}')}: {old!r} is now {new!r}; the former name will stop working in the next release", FormerName, stacklevel=2)
+            entry[new] = entry.pop(old)
+
+
+def _renamed_keys(kind: str) -> dict[str, str]:
+    from .analyses import RENAMED
+
+    return RENAMED.get(kind, {})
+
+
 def _unknown(plan: Plan, where: str, keys: set[str], allowed: set[str]) -> None:
     for key in sorted(keys - allowed):
         close = difflib.get_close_matches(key, sorted(allowed), n=2, cutoff=0.6)
@@ -191,10 +212,14 @@ def load_plan(path: "str | Path") -> Plan:
         if kind not in ANALYSIS_KINDS:
             close = difflib.get_close_matches(str(kind), ANALYSIS_KINDS, n=2)
             raise plan.fail(f"{where}.kind", f"unknown kind {kind!r}" + (f"; did you mean {' or '.join(close)}?" if close else f"; kinds: {', '.join(ANALYSIS_KINDS)}"))
+        _renamed(plan, where, analysis, _renamed_keys(kind))
+        if kind == "chi_square" and isinstance(analysis.get("variant"), bool):
+            analysis["variant"] = "yates" if analysis["variant"] else "pearson"
         _unknown(plan, where, set(analysis), {"id", "kind"} | set(_parameters(kind)))
         plan.analyses.append(analysis)
     for i, table in enumerate(raw.get("tables", [])):
         kind = table.get("kind")
+        _renamed(plan, f"tables[{i}]", table, _TABLE_RENAMED.get(kind, {}))
         if kind not in _TABLE:
             raise plan.fail(f"tables[{i}].kind", f"{kind!r} is not one of {', '.join(_TABLE)}")
         _unknown(plan, f"tables[{i}]", set(table), _TABLE[kind])
@@ -305,18 +330,16 @@ def _check_shapes(plan: Plan, raw: dict[str, Any]) -> None:
 def _function(kind: str) -> Callable[..., Any]:
     from . import analyses
 
-    name = {"pearson": "correlate", "spearman": "correlate", "kendall": "correlate", "auto": "analyse"}.get(kind, kind)
-    return getattr(analyses, name)
+    return getattr(analyses, {"auto": "analyse"}.get(kind, kind))
 
 
 def _parameters(kind: str) -> list[str]:
-    names = [n for n in inspect.signature(_function(kind)).parameters if n != "df"]
-    return [n for n in names if not (kind in ("pearson", "spearman", "kendall") and n == "method")]
+    return [n for n in inspect.signature(_function(kind)).parameters if n != "df"]
 
 
 @dataclass
 class RunResult:
-    records: list[Result]
+    records: list[Record]
     tables: list["TableModel"]
     written: list[tuple[str, Path]]
     notes: list[str]
@@ -448,16 +471,28 @@ def _no_column(name: str, frame: "pd.DataFrame") -> str:
 
 
 def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunResult:
-    """Compute every scale, analysis and table of the plan (nothing written)."""
+    """Compute every scale, analysis and table of the plan (nothing written):
+    data -> records -> tables, each step a function of the one before."""
+    data = _frame(plan)
+    records = _records(plan, data, progress)
+    tables = _tables(plan, records, _style(plan))
+    notes = [f"data: {note}" for note in data.notes]
+    where = {t.get("id") or f"table_{i + 1}": f"tables[{i}]" for i, t in enumerate(plan.tables)}
+    notes += [f"{where.get(r.id or '', r.id)}: left out {lev.describe()}; list it in variables to describe it"
+              for r in records if isinstance(r, Description) for lev in r.left_out]
+    notes += [f"{r.id}: {note.text}" for r in records if isinstance(r, Result) for note in r.notes if note.kind == "choice"]  # never silent
+    return RunResult(records, tables, [], notes)
+
+
+def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None) -> list[Record]:
+    """The records of the plan: scale reliabilities, analyses (each record
+    named from its analysis id by ``records.name_records``), then the
+    Descriptions of the descriptives tables."""
     from .analyses import cronbach_alpha, scale_score
     from .analyses.scales import scoring_note
 
-    data = _frame(plan)
     frame, labels, levels = data.frame, data.labels, data.levels
-    style = _style(plan)
-    records: list[Result] = []
-    by_id: dict[str, list[Result]] = {}
-    matrices: dict[str, Any] = {}
+    records: list[Record] = []
     alphas: dict[str, Result] = {}
     for i, scale in enumerate(plan.scales):
         name = scale["name"]
@@ -469,14 +504,13 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
                 labels[name] = scale["label"]
                 data.table_labels.setdefault(name, scale["label"][:1].upper() + scale["label"][1:])
             if scale.get("alpha"):
-                record = cronbach_alpha(frame, scale["items"], level=plan.level, scale=labels.get(name, name), labels=labels, **options)
-                record = _with_id(record, f"{name}_alpha")
-                alphas[name] = record
-                records.append(record)
-                by_id[record.id] = [record]  # type: ignore[index]
+                record = cronbach_alpha(frame, scale["items"], level=plan.level, scale=labels.get(name, name), labels=labels, **options).main
+                alphas[name] = replace(record, id=f"{name}_alpha")
+                records.append(alphas[name])
         except InputError as exc:
             key = _key_of(scale, str(exc))
             raise PlanError(f"{plan.where(f'scales[{i}].{key}' if key else f'scales[{i}]')} (scale {name!r}): {exc}") from None
+    data.frame = frame
     coded = _coded(data, frame)
     for i, analysis in enumerate(plan.analyses):
         if progress:
@@ -489,30 +523,81 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
             args["labels"] = {**labels, **args.get("labels", {})}
         if "levels" in _parameters(kind):
             args["levels"] = {**levels, **args.get("levels", {})}
-        if kind in ("pearson", "spearman", "kendall"):
-            args["method"] = kind
         try:
             used, args = _arguments(data, coded, args, kind)
             result = _function(kind)(used, **args)
         except (InputError, TypeError) as exc:
             key = _key_of(analysis, str(exc))
             raise PlanError(f"{plan.where(f'analyses[{i}].{key}' if key else f'analyses[{i}]')} (analysis {analysis['id']!r}): {exc}") from None
-        if kind == "correlation_matrix":
-            matrices[analysis["id"]] = result
-            result = result.records()
-        found = result if isinstance(result, list) else [result]
+        found = list(result) if isinstance(result, (list, tuple)) else [result]
         if kind == "auto":  # a level the data file gave is not one the author declared: say where it came from
             found = [_level_sources(r, data, analysis) for r in found]
-        found = [_with_id(with_table_labels(r, data.table_labels, labels), analysis["id"] if k == 0 else f"{analysis['id']}_{k + 1}")
-                 for k, r in enumerate(found)]
-        by_id[analysis["id"]] = found
-        records += found
-    notes: list[str] = []
-    notes += [f"data: {note}" for note in data.notes]
-    tables = [_table(plan, t, i, frame, labels, data, by_id, matrices, alphas, style, notes) for i, t in enumerate(plan.tables)]
-    tables = [t.with_number(n) for n, t in enumerate(tables, 1)]
-    notes += [f"{r.id}: {note.text}" for r in records for note in r.notes if note.kind == "choice"]  # automatic choices, never silent
-    return RunResult(records, tables, [], notes)
+        found = [with_table_labels(r, data.table_labels, labels) if isinstance(r, Result) else r for r in found]
+        records += name_records(analysis["id"], found)
+    for i, t in enumerate(plan.tables):
+        if t["kind"] == "descriptives":
+            records.append(_description(plan, t, i, data, alphas))
+    return records
+
+
+def _description(plan: Plan, t: dict[str, Any], i: int, data: _Data, alphas: dict[str, Result]) -> Description:
+    from .analyses.descriptives import describe
+
+    frame, labels = data.frame, data.labels
+    variables = t.get("variables")
+    if variables is None and data.identifiers:
+        variables = [str(c) for c in frame.columns if c not in (t.get("group"), t.get("weights")) and c not in data.identifiers]
+        data.notes.extend(f"tables[{i}]: left out {k} (declared an identifier in data.identifiers)" for k in data.identifiers)
+    try:
+        d = describe(
+            frame, variables, group=t.get("group"), levels=data.declared,
+            metadata_levels=data.metadata, value_labels=data.value_labels,
+            labels={**{k: v[:1].upper() + v[1:] for k, v in labels.items()}, **data.table_labels}, show=t.get("show"),
+            weights=t.get("weights"), compare=bool(t.get("compare")), smd=bool(t.get("smd")), suppress_below=t.get("suppress_below"),
+            percent_of=t.get("percent_of", "valid"), alphas={k: v for k, v in alphas.items() if k in (t.get("variables") or frame.columns)},
+        )
+    except InputError as exc:
+        raise PlanError(f"{plan.where(f'tables[{i}]')} (table {i + 1}): {exc}") from None
+    return replace(d, id=t.get("id") or f"table_{i + 1}")
+
+
+def _tables(plan: Plan, records: list[Record], style: "Style") -> list["TableModel"]:
+    """Each table of the plan laid out from the records it names."""
+    from .rendering.layout import table
+
+    by_id: dict[str, list[Record]] = {}
+    for r in records:
+        by_id.setdefault((r.id or "").split(":", 1)[0], []).append(r)
+    descriptions = iter([r for r in records if isinstance(r, Description)])
+    out = []
+    for i, t in enumerate(plan.tables):
+        try:
+            if t["kind"] == "descriptives":
+                made = table(next(descriptions), style, title=t.get("title"))
+            elif t["kind"] == "results":
+                made = table([r for ref in t["analyses"] for r in by_id[ref] if isinstance(r, Result)], style, title=t.get("title", "Results"))
+            elif t["kind"] == "correlations":
+                matrix = [r for r in by_id[t["analysis"]] if isinstance(r, CorrelationMatrix)]
+                if not matrix:
+                    raise InputError(f"{t['analysis']!r} is not a correlation_matrix analysis")
+                made = table(matrix[0], style, title=t.get("title"))
+            else:
+                made = _model_table(t["kind"], by_id[t["analysis"]], style, t.get("title"))
+        except InputError as exc:
+            raise PlanError(f"{plan.where(f'tables[{i}]')} (table {i + 1}): {exc}") from None
+        out.append(made.with_number(i + 1))
+    return out
+
+
+def _model_table(kind: str, records: list[Record], style: "Style", title: str | None) -> "TableModel":
+    results = [r for r in records if isinstance(r, Result)]
+    if kind == "regression":
+        from .rendering.regression_tables import regression_table
+
+        return regression_table(results, style, title=title)
+    from .rendering.anova_tables import anova_table
+
+    return anova_table(results, style, title=title)
 
 
 def _key_of(entry: dict[str, Any], message: str) -> str | None:
@@ -541,12 +626,6 @@ def _level_sources(record: Result, data: _Data, analysis: dict[str, Any]) -> Res
     return replace(record, notes=tuple(notes))
 
 
-def _with_id(record: Result, rid: str) -> Result:
-    from dataclasses import replace
-
-    return replace(record, id=rid)
-
-
 def _style(plan: Plan) -> "Style":
     from .style import load_style
 
@@ -560,51 +639,12 @@ def _style(plan: Plan) -> "Style":
         raise PlanError(f"{plan.where('style')}: {exc}") from None
 
 
-def _table(plan, t, i, frame, labels, data, by_id, matrices, alphas, style, notes):  # type: ignore[no-untyped-def]
-    from .analyses.descriptives import describe
-    from .rendering.record_tables import results_table
-
-    where = f"tables[{i}]"
-    try:
-        if t["kind"] == "descriptives":
-            variables = t.get("variables")
-            if variables is None and data.identifiers:
-                variables = [str(c) for c in frame.columns if c not in (t.get("by"), t.get("weights")) and c not in data.identifiers]
-                notes += [f"tables[{i}]: left out {k} (declared an identifier in data.identifiers)" for k in data.identifiers]
-            d = describe(
-                frame, variables, by=t.get("by"), levels=data.declared,
-                metadata_levels=data.metadata, value_labels=data.value_labels, labels={**{k: v[:1].upper() + v[1:] for k, v in labels.items()}, **data.table_labels}, show=t.get("show"),
-                weights=t.get("weights"), tests=bool(t.get("tests")), smd=bool(t.get("smd")), suppress_below=t.get("suppress_below"),
-                percent_of=t.get("percent_of", "valid"), alphas={k: v for k, v in alphas.items() if k in (t.get("variables") or frame.columns)},
-            )
-            notes += [f"tables[{i}]: left out {r.describe()}; list it in variables to describe it" for r in d.left_out]
-            return d.table(style, title=t.get("title"))
-        if t["kind"] == "results":
-            chosen = [r for ref in t["analyses"] for r in by_id[ref]]
-            return results_table(chosen, style, title=t.get("title", "Results"))
-        if t["kind"] == "regression":
-            from .rendering.regression_tables import regression_table
-
-            return regression_table(by_id[t["analysis"]], style, title=t.get("title"))
-        if t["kind"] == "anova":
-            from .rendering.anova_tables import anova_table
-
-            return anova_table(by_id[t["analysis"]], style, title=t.get("title"))
-        from .rendering.correlation_tables import correlation_table
-
-        if t["analysis"] not in matrices:
-            raise InputError(f"{t['analysis']!r} is not a correlation_matrix analysis")
-        return correlation_table(matrices[t["analysis"]], style, title=t.get("title"))
-    except InputError as exc:
-        raise PlanError(f"{plan.where(where)} (table {i + 1}): {exc}") from None
-
-
 _DEFAULT_OUTPUTS = {"md": "results.md", "docx": "results.docx", "json": "records.json"}
 
 
 def write_outputs(plan: Plan, result: RunResult) -> RunResult:
     """Write every output of the plan and fill the chapter; the paths in ``written``."""
-    from .export.section import write_section
+    from .export.section import results_of, write_section
 
     from .errors import EnvironmentFailure
     from .files import transaction
@@ -627,7 +667,7 @@ def write_outputs(plan: Plan, result: RunResult) -> RunResult:
 
             source = plan.resolve(plan.chapter["path"])
             try:
-                report = fill_chapter(source, result.records, chapter_out, style)
+                report = fill_chapter(source, results_of(result.records), chapter_out, style)
             except InputError as exc:
                 raise PlanError(f"{plan.where('chapter.path')}: {exc}") from None
             written.append(("chapter", chapter_out))

@@ -51,7 +51,7 @@ class Context:
 def version_of(library: str) -> dict[str, str]:
     import importlib
 
-    from .. import __version__
+    from .._version import __version__
 
     module = importlib.import_module(library)
     return {library: str(getattr(module, "__version__", "?")), "statsetter": __version__}

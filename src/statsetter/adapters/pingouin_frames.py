@@ -357,7 +357,7 @@ def kruskal(frame: Any, ctx: Context) -> list[Result]:
 
 
 def _ttest(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import t_independent, t_one_sample, t_paired
+    from ..analyses.ttests import t_independent, t_one_sample, t_paired
 
     r = mine[0]
     if r.kind == "t_independent":
@@ -368,15 +368,16 @@ def _ttest(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
 
 
 def _corr(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import correlate
+    from ..analyses.correlation import correlate
 
     if len(mine) == 1 and not mine[0].variables:
-        return [correlate(frame, cols["x"], cols["y"], mine[0].kind, alternative=mine[0].alternative, level=ctx.level, labels=ctx.labels)]  # type: ignore[arg-type]
+        return [correlate(frame, cols["x"], cols["y"], coefficient=mine[0].kind, alternative=mine[0].alternative, level=ctx.level, labels=ctx.labels)]  # type: ignore[arg-type]
     return [correlate(frame, r.variables[0].name, r.variables[1].name, r.kind, alternative=r.alternative, level=ctx.level, labels=ctx.labels) for r in mine]  # type: ignore[arg-type]
 
 
 def _anova(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import anova_oneway, factorial_anova
+    from ..analyses.anova import anova_oneway
+    from ..analyses.posthoc import factorial_anova
 
     if mine[0].kind == "anova_oneway":
         return [anova_oneway(frame, cols["outcome"], cols["group"], variant=mine[0].details.get("variant", "classic"), labels=ctx.labels)]
@@ -385,9 +386,9 @@ def _anova(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
 
 def _posthoc(procedure: str):  # type: ignore[no-untyped-def]
     def run(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-        from ..analyses import posthoc
+        from ..analyses.posthoc import posthoc
 
-        return posthoc(frame, cols["outcome"], cols["group"], procedure, level=ctx.level, labels=ctx.labels)  # type: ignore[arg-type]
+        return posthoc(frame, cols["outcome"], cols["group"], adjust=procedure, level=ctx.level, labels=ctx.labels)  # type: ignore[arg-type]
 
     return run
 
@@ -397,43 +398,43 @@ def _pairwise_tests(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
 
 
 def _chi2(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import chi_square
+    from ..analyses.chisquare import chi_square
 
-    return chi_square(frame, cols["row"], cols["column"], yates=bool(mine[0].details.get("yates")), level=ctx.level, labels=ctx.labels)[:1]
+    return chi_square(frame, cols["row"], cols["column"], variant="yates" if mine[0].details.get("yates") else "pearson", level=ctx.level, labels=ctx.labels)[:1]
 
 
 def _linear(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import linear_regression
+    from ..analyses.regression import linear_regression
 
     return linear_regression(frame, cols["outcome"], cols["predictors"], level=ctx.level, labels=ctx.labels)
 
 
 def _logistic(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import logistic_regression
+    from ..analyses.regression import logistic_regression
 
     return logistic_regression(frame, cols["outcome"], cols["predictors"], event=cols.get("event"), level=ctx.level, labels=ctx.labels)
 
 
 def _alpha(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import cronbach_alpha as alpha
+    from ..analyses.scales import cronbach_alpha as alpha
 
     return [alpha(frame, cols["items"], reverse=cols.get("reverse", ()), minimum=cols.get("minimum"), maximum=cols.get("maximum"), level=ctx.level, labels=ctx.labels)]
 
 
 def _mwu(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import mann_whitney
+    from ..analyses.ranks import mann_whitney
 
-    return [mann_whitney(frame, cols["outcome"], cols["group"], groups=cols.get("groups"), method=ctx.option("method", "auto"), alternative=mine[0].alternative, labels=ctx.labels)]
+    return [mann_whitney(frame, cols["outcome"], cols["group"], groups=cols.get("groups"), variant=ctx.option("method", "auto"), alternative=mine[0].alternative, labels=ctx.labels)]
 
 
 def _wilcoxon(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import wilcoxon_signed_rank
+    from ..analyses.ranks import wilcoxon_signed_rank
 
-    return [wilcoxon_signed_rank(frame, cols["first"], cols["second"], method=ctx.option("method", "auto"), alternative=mine[0].alternative, labels=ctx.labels)]
+    return [wilcoxon_signed_rank(frame, cols["first"], cols["second"], variant=ctx.option("method", "auto"), alternative=mine[0].alternative, labels=ctx.labels)]
 
 
 def _kruskal(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import kruskal_wallis
+    from ..analyses.ranks import kruskal_wallis
 
     return [kruskal_wallis(frame, cols["outcome"], cols["group"], labels=ctx.labels)]
 

@@ -212,32 +212,32 @@ def linregress(res: Any, ctx: Context) -> list[Result]:
 
 
 def _t_ind(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import t_independent
+    from ..analyses.ttests import t_independent
 
     return [t_independent(frame, cols["outcome"], cols["group"], groups=cols.get("groups"), variant=mine[0].details["variant"],
                           alternative=mine[0].alternative, level=ctx.level, labels=ctx.labels)]
 
 
 def _t_rel(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import t_paired
+    from ..analyses.ttests import t_paired
 
     return [t_paired(frame, cols["first"], cols["second"], effect=ctx.option("effect", "d_z"), alternative=mine[0].alternative, level=ctx.level, labels=ctx.labels)]
 
 
 def _t_1samp(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import t_one_sample
+    from ..analyses.ttests import t_one_sample
 
     return [t_one_sample(frame, cols["outcome"], float(ctx.option("mu")), alternative=mine[0].alternative, level=ctx.level, labels=ctx.labels)]
 
 
 def _corr(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import correlate
+    from ..analyses.correlation import correlate
 
-    return [correlate(frame, cols["x"], cols["y"], mine[0].kind, alternative=mine[0].alternative, level=ctx.level, labels=ctx.labels)]  # type: ignore[arg-type]
+    return [correlate(frame, cols["x"], cols["y"], coefficient=mine[0].kind, alternative=mine[0].alternative, level=ctx.level, labels=ctx.labels)]  # type: ignore[arg-type]
 
 
 def _chi2(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import chi_square
+    from ..analyses.chisquare import chi_square
 
     yates = ctx.option("yates")
     if yates is None:  # 2 × 2 without a stated correction: the one that reproduces the statistic
@@ -245,11 +245,11 @@ def _chi2(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
         if math.isclose(plain[0].statistic.value, mine[0].statistic.value, rel_tol=1e-6):  # type: ignore[union-attr]
             return plain[:1]
         yates = True
-    return chi_square(frame, cols["row"], cols["column"], yates=bool(yates), level=ctx.level, labels=ctx.labels)[:1]
+    return chi_square(frame, cols["row"], cols["column"], variant="yates" if yates else "pearson", level=ctx.level, labels=ctx.labels)[:1]
 
 
 def _fisher(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import chi_square
+    from ..analyses.chisquare import chi_square
 
     found = [r for r in chi_square(frame, cols["row"], cols["column"], level=ctx.level, labels=ctx.labels) if r.kind == "fisher_exact"]
     if not found:
@@ -258,38 +258,38 @@ def _fisher(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
 
 
 def _anova(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import anova_oneway
+    from ..analyses.anova import anova_oneway
 
     return [anova_oneway(frame, cols["outcome"], cols["group"], variant=mine[0].details.get("variant", "classic"), labels=ctx.labels)]
 
 
 def _tukey(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import posthoc
+    from ..analyses.posthoc import posthoc
 
-    return posthoc(frame, cols["outcome"], cols["group"], "tukey", level=ctx.level, labels=ctx.labels)
+    return posthoc(frame, cols["outcome"], cols["group"], adjust="tukey", level=ctx.level, labels=ctx.labels)
 
 
 def _mwu(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import mann_whitney
+    from ..analyses.ranks import mann_whitney
 
-    return [mann_whitney(frame, cols["outcome"], cols["group"], groups=cols.get("groups"), method=ctx.option("method", "auto"),
+    return [mann_whitney(frame, cols["outcome"], cols["group"], groups=cols.get("groups"), variant=ctx.option("method", "auto"),
                          alternative=mine[0].alternative, labels=ctx.labels)]
 
 
 def _wilcoxon(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import wilcoxon_signed_rank
+    from ..analyses.ranks import wilcoxon_signed_rank
 
-    return [wilcoxon_signed_rank(frame, cols["first"], cols["second"], method=ctx.option("method", "auto"), alternative=mine[0].alternative, labels=ctx.labels)]
+    return [wilcoxon_signed_rank(frame, cols["first"], cols["second"], variant=ctx.option("method", "auto"), alternative=mine[0].alternative, labels=ctx.labels)]
 
 
 def _kruskal(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import kruskal_wallis
+    from ..analyses.ranks import kruskal_wallis
 
     return [kruskal_wallis(frame, cols["outcome"], cols["group"], labels=ctx.labels)]
 
 
 def _linregress(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import linear_regression
+    from ..analyses.regression import linear_regression
 
     return linear_regression(frame, cols["y"], [cols["x"]], level=ctx.level, labels=ctx.labels)
 

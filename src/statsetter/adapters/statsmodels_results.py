@@ -228,19 +228,20 @@ def tukeyhsd(res: Any, ctx: Context) -> list[Result]:
 
 
 def _linear(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import linear_regression
+    from ..analyses.regression import linear_regression
 
     return linear_regression(frame, cols["outcome"], cols["predictors"], reference=cols.get("reference"), level=ctx.level, labels=ctx.labels)
 
 
 def _logistic(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import logistic_regression
+    from ..analyses.regression import logistic_regression
 
     return logistic_regression(frame, cols["outcome"], cols["predictors"], event=cols.get("event"), reference=cols.get("reference"), level=ctx.level, labels=ctx.labels)
 
 
 def _anova(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import anova_oneway, factorial_anova
+    from ..analyses.anova import anova_oneway
+    from ..analyses.posthoc import factorial_anova
 
     if mine[0].kind == "anova_oneway":
         return [anova_oneway(frame, cols["outcome"], cols["group"], labels=ctx.labels)]
@@ -248,10 +249,10 @@ def _anova(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
 
 
 def _tukey(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
-    from ..analyses import posthoc
+    from ..analyses.posthoc import posthoc
 
     level = mine[0].estimate.ci.level if mine and mine[0].estimate and mine[0].estimate.ci else ctx.level
-    return posthoc(frame, cols["outcome"], cols["group"], "tukey", level=level, labels=ctx.labels)
+    return posthoc(frame, cols["outcome"], cols["group"], adjust="tukey", level=level, labels=ctx.labels)
 
 
 

@@ -1,69 +1,107 @@
 """Analyses from data: DataFrame columns in, exact unrounded records out.
 
+Every function here returns :class:`~statsetter.records.Records`: a list of
+records, the main one first (a test; a model, then its coefficients; a
+Description; a correlation matrix, then its pairs). The shared keywords:
+``variant`` (which form of a test: welch/student, classic/welch,
+pearson/yates, auto/exact/asymptotic), ``adjust`` (the multiple-comparison
+procedure), ``alternative`` (two-sided, less, greater), ``level`` (the CI's),
+``labels`` and ``table_labels`` (prose and table names of the variables).
+Paired tests take wide columns (``first``, ``second``) or long data
+(``outcome``, ``subject``, ``within``).
+
 Each function loads numpy, scipy and pandas when called, never on
 ``import statsetter``.
 """
 
 import functools as _functools
 import inspect as _inspect
+import warnings as _warnings
 from typing import Any as _Any, Callable as _Callable
 
-from .anova import anova_oneway
-from .chisquare import chi_square, goodness_of_fit
-from .choose import analyse, level_of
-from .correlation import correlate
-from .descriptives import Description, describe
-from .matrix import CorrelationMatrix, correlation_matrix
-from .posthoc import factorial_anova, posthoc
-from .ranks import kruskal_wallis, mann_whitney, wilcoxon_signed_rank
-from .regression import hierarchical_steps, linear_regression, logistic_regression
-from .scales import cronbach_alpha, scale_score
-from .ttests import t_independent, t_one_sample, t_paired
+from ..errors import FormerUse as _FormerUse
+from . import anova as _anova, chisquare as _chisquare, choose as _choose, correlation as _correlation, descriptives as _descriptives
+from . import matrix as _matrix, posthoc as _posthoc, ranks as _ranks, regression as _regression, scales as _scales, ttests as _ttests
+from .choose import level_of
+from .scales import scale_score
 
-__all__ = [
-    "analyse",
-    "describe",
-    "Description",
-    "level_of",
-    "CorrelationMatrix",
-    "correlation_matrix",
-    "posthoc",
-    "factorial_anova",
-    "linear_regression",
-    "hierarchical_steps",
-    "logistic_regression",
-    "kruskal_wallis",
-    "mann_whitney",
-    "wilcoxon_signed_rank",
-    "cronbach_alpha",
-    "scale_score",
-    "anova_oneway", "chi_square", "goodness_of_fit", "correlate", "t_independent", "t_paired", "t_one_sample"]
+# Former keyword names, accepted for one release with a warning: {function: {old: new}}.
+RENAMED: dict[str, dict[str, str]] = {
+    "posthoc": {"procedure": "adjust"},
+    "chi_square": {"yates": "variant"},
+    "mann_whitney": {"method": "variant"},
+    "wilcoxon_signed_rank": {"method": "variant"},
+    "correlation_matrix": {"method": "coefficient"},
+    "correlate": {"method": "coefficient"},
+    "describe": {"by": "group", "tests": "compare"},
+}
+_VALUES = {("chi_square", "yates"): lambda v: ("yates" if v else "pearson") if isinstance(v, bool) else v}
 
 
+def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
+    """``fn`` returning Records, taking ``table_labels`` (labels for tables:
+    sentence case, may carry a unit) and, for one release, its former keywords."""
+    from ..records import Records, Result, with_table_labels
 
-def _with_table_labels(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
-    """Give ``fn`` a keyword ``table_labels``: labels for tables (sentence case,
-    may carry a unit: "Maximum heart rate (bpm)") beside ``labels``, the prose
-    labels of sentences. Without it a table label is derived from the prose one."""
-    from ..records import Result, with_table_labels
+    name = fn.__name__
+    renamed = RENAMED.get(name, {})
 
     @_functools.wraps(fn)
-    def call(*args: _Any, table_labels: "dict[str, str] | None" = None, **kwargs: _Any) -> _Any:
+    def call(*args: _Any, table_labels: "dict[str, str] | None" = None, **kwargs: _Any) -> Records:
+        for old, new in renamed.items():
+            if old in kwargs:
+                if new in kwargs:
+                    raise TypeError(f"{name}: {old}= is the former name of {new}=; give one of them")
+                _warnings.warn(f"{name}: {old}= is now {new}=", _FormerUse, stacklevel=2)
+                kwargs[new] = _VALUES.get((name, old), lambda v: v)(kwargs.pop(old))
+        if name == "posthoc" and len(args) == 4:  # the procedure was once the fourth positional argument
+            _warnings.warn("posthoc: give the procedure as adjust=", _FormerUse, stacklevel=2)
+            args, kwargs["adjust"] = args[:3], args[3]
+        if name == "correlate" and len(args) == 4:
+            _warnings.warn("correlate: give the coefficient as coefficient=", _FormerUse, stacklevel=2)
+            args, kwargs["coefficient"] = args[:3], args[3]
         out = fn(*args, **kwargs)
-        if not table_labels:
-            return out
-        prose = kwargs.get("labels")
-        if isinstance(out, Result):
-            return with_table_labels(out, table_labels, prose)
-        return [with_table_labels(r, table_labels, prose) for r in out]
+        found = list(out) if isinstance(out, (list, tuple)) else [out]
+        if name == "correlation_matrix":
+            found += out.pairs()
+        if table_labels:
+            found = [with_table_labels(r, table_labels, kwargs.get("labels")) if isinstance(r, Result) else r for r in found]
+        return Records(found)
 
     signature = _inspect.signature(fn)
     extra = _inspect.Parameter("table_labels", _inspect.Parameter.KEYWORD_ONLY, default=None, annotation="Mapping[str, str] | None")
-    call.__signature__ = signature.replace(parameters=[*signature.parameters.values(), extra])  # type: ignore[attr-defined]
+    call.__signature__ = signature.replace(  # type: ignore[attr-defined]
+        parameters=[*signature.parameters.values(), extra], return_annotation="Records")
     return call
 
 
-for _name in ("anova_oneway", "chi_square", "goodness_of_fit", "analyse", "correlate", "posthoc", "factorial_anova", "kruskal_wallis",
-              "mann_whitney", "wilcoxon_signed_rank", "hierarchical_steps", "linear_regression", "logistic_regression", "cronbach_alpha",
-              "t_independent", "t_one_sample", "t_paired"):
-    globals()[_name] = _with_table_labels(globals()[_name])
+analyse = _public(_choose.analyse)
+anova_oneway = _public(_anova.anova_oneway)
+chi_square = _public(_chisquare.chi_square)
+fisher_exact = _public(_chisquare.fisher_exact)
+goodness_of_fit = _public(_chisquare.goodness_of_fit)
+correlate = _public(_correlation.correlate)
+pearson = _public(_correlation.pearson)
+spearman = _public(_correlation.spearman)
+kendall = _public(_correlation.kendall)
+correlation_matrix = _public(_matrix.correlation_matrix)
+describe = _public(_descriptives.describe)
+posthoc = _public(_posthoc.posthoc)
+factorial_anova = _public(_posthoc.factorial_anova)
+kruskal_wallis = _public(_ranks.kruskal_wallis)
+mann_whitney = _public(_ranks.mann_whitney)
+wilcoxon_signed_rank = _public(_ranks.wilcoxon_signed_rank)
+linear_regression = _public(_regression.linear_regression)
+hierarchical_steps = _public(_regression.hierarchical_steps)
+logistic_regression = _public(_regression.logistic_regression)
+cronbach_alpha = _public(_scales.cronbach_alpha)
+t_independent = _public(_ttests.t_independent)
+t_paired = _public(_ttests.t_paired)
+t_one_sample = _public(_ttests.t_one_sample)
+
+__all__ = [
+    "analyse", "describe", "level_of", "correlation_matrix", "correlate", "pearson", "spearman", "kendall",
+    "t_independent", "t_paired", "t_one_sample", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
+    "anova_oneway", "posthoc", "factorial_anova", "chi_square", "fisher_exact", "goodness_of_fit",
+    "linear_regression", "hierarchical_steps", "logistic_regression", "cronbach_alpha", "scale_score", "RENAMED",
+]

@@ -2,24 +2,14 @@
 
 from __future__ import annotations
 
-import difflib
 from typing import TYPE_CHECKING, Any, Mapping, Sequence
 
-from ..coding import _code_key, categories, category_text, find_categories
+from ..coding import _code_key, categories, category_text, column, find_categories
 from ..errors import InputError
 from ..records import Note, Provenance, Variable
 
 if TYPE_CHECKING:
     import pandas as pd
-
-
-def column(df: "pd.DataFrame", name: str) -> "pd.Series":
-    if name not in df.columns:
-        names = [str(c) for c in df.columns]
-        close = [n for n in names if str(name).lower() in n.lower()][:3] or difflib.get_close_matches(str(name), names, n=3, cutoff=0.5)
-        hint = f"; did you mean {', '.join(close)}?" if close else ""
-        raise InputError(f"{name}: no such column{hint}")
-    return df[name]
 
 
 def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
@@ -83,7 +73,7 @@ def provenance(source: str, *, statsmodels: bool = False) -> Provenance:
         versions["pandas"] = pandas.__version__
     except ImportError:  # pragma: no cover - pandas is a dependency of the analyses
         pass
-    from .. import __version__
+    from .._version import __version__
 
     versions["statsetter"] = __version__
     return Provenance(source, versions)
@@ -161,3 +151,53 @@ def two_levels(data: "pd.DataFrame", group: str, groups: Sequence[object] | None
         shown = ", ".join(category_text(v) for v in present[:6]) + (" …" if len(present) > 6 else "")
         raise InputError(f"{group}: {len(present)} group{'' if len(present) == 1 else 's'} with data ({shown}); a {test} needs exactly two (name them with groups=[...])")
     return present
+
+
+def long_pairs(
+    df: "pd.DataFrame", outcome: str, subject: str, within: str, conditions: Sequence[object] | None, labels: Mapping[str, str] | None
+) -> tuple["pd.DataFrame", str, str, dict[str, str], str]:
+    """Long data (one row per subject and condition) as two wide columns, one
+    per condition of ``within`` (its two categories in order, or the two
+    ``conditions`` named): the frame, the two column names, labels naming the
+    conditions, and the outcome's label. A subject measured twice in one
+    condition is an error naming it; a subject missing a condition has a
+    missing value there (dropped listwise, and said so)."""
+    for name in (outcome, subject, within):
+        column(df, name)
+    present = categories(df[within].dropna())
+    chosen = find_categories(within, conditions, present, role="condition") if conditions is not None else present
+    if len(chosen) != 2:
+        listed = ", ".join(category_text(v) for v in present)
+        raise InputError(f"{within}: {len(chosen)} conditions ({listed}); a paired test compares two: name them with conditions=[first, second]")
+    rows = df[df[within].isin(chosen) & df[subject].notna()]
+    twice = rows.duplicated([subject, within], keep=False)
+    if twice.any():
+        first = rows[twice].iloc[0]
+        raise InputError(f"{subject}: subject {category_text(first[subject])} has more than one row in condition {category_text(first[within])} of {within}")
+    wide = rows.pivot(index=subject, columns=within, values=outcome)
+    names = [f"{within}={category_text(v)}" for v in chosen]
+    wide = wide.reindex(columns=list(chosen))
+    wide.columns = names
+    labels = dict(labels or {})
+    # a condition coded by a number is named with its variable ("group 1"), never as a bare code
+    numbered = all(category_text(v).replace(".", "", 1).lstrip("-").isdigit() for v in chosen)
+    prefix = f"{labels.get(within, within)} " if numbered else ""
+    named = {n: labels.get(n, prefix + category_text(v)) for n, v in zip(names, chosen)}
+    return wide.reset_index(drop=True), names[0], names[1], {**labels, **named}, labels.get(outcome, outcome)
+
+
+def paired_columns(test, df, first, second, outcome, subject, within, conditions, labels, outcome_label):  # type: ignore[no-untyped-def]
+    """A paired test's data as two wide columns: ``first`` and ``second`` as
+    given, or long data (``outcome``, ``subject``, ``within``) pivoted by
+    :func:`long_pairs`. A mix of the two, or half of either, is refused."""
+    if outcome is None and subject is None and within is None:
+        if first is None or second is None:
+            raise InputError(f"{test}: name the two columns (first, second), or outcome, subject and within for long data")
+        return df, first, second, labels, outcome_label
+    if first is not None or second is not None:
+        raise InputError("first, second: give two columns (wide data) or outcome, subject and within (long data), not both")
+    for key, value in (("outcome", outcome), ("subject", subject), ("within", within)):
+        if value is None:
+            raise InputError(f"{key}: long data need outcome, subject and within")
+    frame, a, b, named, label = long_pairs(df, outcome, subject, within, conditions, labels)
+    return frame, a, b, named, outcome_label or label

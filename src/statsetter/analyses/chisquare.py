@@ -3,7 +3,7 @@
 from __future__ import annotations
 
 import math
-from typing import TYPE_CHECKING, Mapping
+from typing import Literal, Mapping, TYPE_CHECKING
 
 from ..coding import category_text
 from ..errors import InputError
@@ -44,17 +44,21 @@ def chi_square(
     row: str,
     column: str,
     *,
-    yates: bool = False,
+    variant: Literal["pearson", "yates"] = "pearson",
     level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
     """The χ² test of independence of two categorical columns, with Cramér's V
-    (φ for 2 × 2) and its CI. Yates' correction only when asked (stated). Cells
+    (φ for 2 × 2) and its CI. ``variant="yates"`` applies Yates' continuity
+    correction to a 2 × 2 table (stated); the default is Pearson's χ². Cells
     with expected counts below 5 are noted, and for a 2 × 2 table Fisher's exact
     test (conditional maximum-likelihood odds ratio with its exact CI) is added."""
     import pandas as pd
     from scipy import stats
 
+    if variant not in ("pearson", "yates"):
+        raise InputError(f"variant: {variant!r} is not pearson or yates")
+    yates = variant == "yates"
     data, missing = c.listwise(df, [row, column])
     table = pd.crosstab(data[row], data[column])
     r, k = table.shape
@@ -101,13 +105,36 @@ def chi_square(
     return out
 
 
-def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | None = None) -> Result:  # type: ignore[no-untyped-def]
+def fisher_exact(
+    df: "pd.DataFrame",
+    row: str,
+    column: str,
+    *,
+    alternative: str = "two-sided",
+    level: float = 0.95,
+    labels: Mapping[str, str] | None = None,
+) -> Result:
+    """Fisher's exact test of a 2 × 2 table of two categorical columns, with
+    the conditional maximum-likelihood odds ratio and its exact CI (the odds
+    of the first column category in the first row category over the second)."""
+    import pandas as pd
+
+    data, missing = c.listwise(df, [row, column])
+    table = pd.crosstab(data[row], data[column])
+    if table.shape != (2, 2):
+        raise InputError(f"{row} × {column}: a {table.shape[0]} × {table.shape[1]} table; Fisher's exact test here needs 2 × 2")
+    return fisher_exact_table(table.to_numpy(), c.variables({"row": row, "column": column}, labels), level, missing, alternative)
+
+
+def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | None = None, alternative: str = "two-sided") -> Result:  # type: ignore[no-untyped-def]
     from scipy import stats
     from scipy.stats.contingency import odds_ratio
 
-    p = stats.fisher_exact(counts).pvalue
+    if alternative not in ("two-sided", "less", "greater"):
+        raise InputError(f"alternative: {alternative!r} is not two-sided, less or greater")
+    p = stats.fisher_exact(counts, alternative=alternative).pvalue
     orr = odds_ratio(counts, kind="conditional")
-    ci = orr.confidence_interval(level)
+    ci = orr.confidence_interval(level, alternative=alternative)  # one-sided tests get the one-sided interval
     high = float(ci.high)
     estimate = Estimate(
         "OR",
@@ -118,10 +145,15 @@ def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | N
     return Result(
         kind="fisher_exact",
         p=float(p),
+        alternative=alternative,  # type: ignore[arg-type]
         n=int(counts.sum()),
         estimate=estimate,
         variables=variables,
-        notes=c.notes(Note("method", "Conditional maximum-likelihood odds ratio with its exact CI."), missing),
+        notes=c.notes(
+            Note("method", "Conditional maximum-likelihood odds ratio with its exact CI."
+                 + ("" if math.isfinite(high) else f" The CI has no finite upper limit (lower limit {float(ci.low):.4g}); it is left out.")),
+            missing,
+        ),
         provenance=c.provenance("statsetter.analyses.fisher_exact"),
     )
 

@@ -63,7 +63,7 @@ def analyse(
         else:
             records, test = [kruskal_wallis(df, outcome, predictor, labels=labels)], f"Kruskal–Wallis test (ordinal outcome, {k} groups)"
     elif "nominal" not in (lo, lp):
-        records, test = [correlate(df, predictor, outcome, "spearman", labels=labels)], "Spearman correlation (ordinal variable involved)"
+        records, test = [correlate(df, predictor, outcome, coefficient="spearman", labels=labels)], "Spearman correlation (ordinal variable involved)"
     else:
         raise InputError(f"{outcome} ({lo}) by {predictor} ({lp}): no automatic test; name the test instead")
     note = Note("choice", f"Chosen automatically: {test}, because {outcome} is {lo} ({why_o}) and {predictor} is {lp} ({why_p}).")

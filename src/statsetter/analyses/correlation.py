@@ -8,7 +8,8 @@ from typing import TYPE_CHECKING, Literal, Mapping
 from ..errors import InputError
 from ..records import EffectSize, Interval, Result, Statistic
 from . import _common as c
-from .effects import fisher_z_ci, kendall_tau_b_se
+from ..formulas import fisher_z_ci
+from .effects import kendall_tau_b_se
 
 if TYPE_CHECKING:
     import numpy as np
@@ -46,17 +47,20 @@ def correlate(
     df: "pd.DataFrame",
     x: str,
     y: str,
-    method: Method = "pearson",
     *,
+    coefficient: Method = "pearson",
     level: float = 0.95,
     alternative: str = "two-sided",
     labels: Mapping[str, str] | None = None,
 ) -> Result:
-    """A correlation record with its CI (see :func:`correlation_effect`)."""
+    """A correlation record with its CI (see :func:`correlation_effect`);
+    ``coefficient`` is pearson, spearman or kendall (the functions of those
+    names are this one with the coefficient chosen)."""
     from scipy import stats
 
+    method = coefficient
     if method not in ("pearson", "spearman", "kendall"):
-        raise InputError(f"method: {method!r} is not pearson, spearman or kendall")
+        raise InputError(f"coefficient: {method!r} is not pearson, spearman or kendall")
     data, missing = c.listwise(df, [x, y])
     a, b = c.numeric(data, x).to_numpy(), c.numeric(data, y).to_numpy()
     n = len(a)
@@ -79,3 +83,18 @@ def correlate(
         notes=c.notes(missing),
         provenance=c.provenance(f"statsetter.analyses.correlate({method})"),
     )
+
+
+def pearson(df: "pd.DataFrame", x: str, y: str, *, level: float = 0.95, alternative: str = "two-sided", labels: Mapping[str, str] | None = None) -> Result:
+    """Pearson's r with its Fisher-z CI."""
+    return correlate(df, x, y, coefficient="pearson", level=level, alternative=alternative, labels=labels)
+
+
+def spearman(df: "pd.DataFrame", x: str, y: str, *, level: float = 0.95, alternative: str = "two-sided", labels: Mapping[str, str] | None = None) -> Result:
+    """Spearman's rs with its CI (Fisher z, Bonett & Wright SE)."""
+    return correlate(df, x, y, coefficient="spearman", level=level, alternative=alternative, labels=labels)
+
+
+def kendall(df: "pd.DataFrame", x: str, y: str, *, level: float = 0.95, alternative: str = "two-sided", labels: Mapping[str, str] | None = None) -> Result:
+    """Kendall's τb with its CI (Fisher z, asymptotic SE; ties allowed)."""
+    return correlate(df, x, y, coefficient="kendall", level=level, alternative=alternative, labels=labels)

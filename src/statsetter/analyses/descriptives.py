@@ -20,20 +20,17 @@ ddof = 1) and quantiles are the weighted inverted CDF (numpy's
 
 from __future__ import annotations
 
-from dataclasses import dataclass, field, replace
+from dataclasses import replace
 from typing import TYPE_CHECKING, Any, Literal, Mapping, Sequence
 
 from ..errors import InputError
-from ..levels import LevelReport, resolve_levels
-from ..records import Result
+from ..levels import resolve_levels
+from ..records import Description, LevelReport, Result, VariableSummary
 from . import _common as c
 
 if TYPE_CHECKING:
     import numpy as np
     import pandas as pd
-
-    from ..rendering.tables import TableModel
-    from ..style.profile import Style
 
 # What each level can show; the first entries are the defaults.
 CONTENTS: dict[str, tuple[str, ...]] = {
@@ -45,91 +42,31 @@ DEFAULT_SHOW: dict[str, tuple[str, ...]] = {"nominal": ("counts",), "ordinal": (
 _SMALL_RANGE = 1_000  # integer-valued data spanning at most this many values are counted, not sorted
 
 
-@dataclass(frozen=True, eq=False)
-class VariableSummary:
-    """One variable's numbers, one entry per column (groups, then Total)."""
-
-    name: str
-    label: str
-    level: LevelReport
-    show: tuple[str, ...]
-    n: "np.ndarray"
-    missing: "np.ndarray"
-    categories: tuple[str, ...] = ()
-    counts: "np.ndarray | None" = None  # columns × categories
-    mean: "np.ndarray | None" = None
-    sd: "np.ndarray | None" = None
-    median: "np.ndarray | None" = None
-    q1: "np.ndarray | None" = None
-    q3: "np.ndarray | None" = None
-    minimum: "np.ndarray | None" = None
-    maximum: "np.ndarray | None" = None
-    skew: "np.ndarray | None" = None
-    positions: bool = False  # quartiles are positions of ordered categories
-    alpha: float | None = None
-    test: Result | None = None
-    test_name: str | None = None
-    smd: float | None = None
-
-    @property
-    def kind(self) -> str:
-        return "continuous" if self.level.level in ("interval", "ratio") else self.level.level
-
-
-@dataclass(frozen=True, eq=False)
-class Description:
-    """The numbers of a descriptives table; ``table()`` lays them out in a style."""
-
-    variables: tuple[VariableSummary, ...]
-    columns: tuple[str, ...]
-    column_n: "np.ndarray"
-    by: str | None = None
-    by_label: str | None = None
-    weights: str | None = None
-    percent_of: Literal["valid", "all"] = "valid"
-    suppress_below: int | None = None
-    dropped_no_group: int = 0
-    notes: tuple[str, ...] = field(default=())
-    left_out: tuple[LevelReport, ...] = field(default=())  # columns not described because they look like identifiers
-
-    @property
-    def levels(self) -> list[LevelReport]:
-        return [v.level for v in self.variables]
-
-    def report(self) -> list[str]:
-        """One line per variable: its level, where the level came from and why."""
-        return [v.level.describe() for v in self.variables]
-
-    def table(self, style: "Style | str | None" = None, *, number: int | None = None, title: str | None = None) -> "TableModel":
-        from ..rendering.descriptive_tables import descriptive_table
-
-        return descriptive_table(self, style, number=number, title=title)
-
-
 def describe(
     df: "pd.DataFrame",
     variables: Sequence[str] | None = None,
     *,
-    by: str | None = None,
+    group: str | None = None,
     levels: Mapping[str, str] | None = None,
     metadata_levels: Mapping[str, str] | None = None,
     value_labels: Mapping[str, Mapping[Any, str]] | None = None,
     labels: Mapping[str, str] | None = None,
     show: Mapping[str, Sequence[str]] | None = None,
     weights: str | None = None,
-    tests: bool = False,
+    compare: bool = False,
     smd: bool = False,
     suppress_below: int | None = None,
     percent_of: Literal["valid", "all"] = "valid",
     alphas: Mapping[str, "float | Result"] | None = None,
 ) -> Description:
-    """Describe ``variables`` (default: every column but ``by`` and ``weights``)
-    by their level of measurement, overall and per group of ``by``.
+    """Describe ``variables`` (default: every column but ``group`` and ``weights``)
+    by their level of measurement, overall and per category of ``group`` (the
+    grouping variable: one column per category, then Total).
 
     ``levels`` declares levels; ``metadata_levels`` and ``value_labels`` come
     from the data file (see ``statsetter.io.read_data``); ``show`` picks what
     each level reports (keys nominal, ordinal, continuous; values from
-    ``CONTENTS``); ``tests`` adds a p per row chosen by level; ``smd`` adds the
+    ``CONTENTS``); ``compare`` adds a p per row from a test chosen by level; ``smd`` adds the
     standardised difference (two groups); ``suppress_below`` hides counts from
     1 to that number minus one; ``alphas`` puts Cronbach's α beside scale scores.
     """
@@ -140,13 +77,13 @@ def describe(
 
     labels = dict(labels or {})
     value_labels = value_labels or {}
-    names = list(variables) if variables is not None else [str(n) for n in df.columns if n not in (by, weights)]
+    names = list(variables) if variables is not None else [str(n) for n in df.columns if n not in (group, weights)]
     if not names:
         raise InputError("describe: no variables to describe")
-    for name in names + [n for n in (by, weights) if n is not None]:
+    for name in names + [n for n in (group, weights) if n is not None]:
         c.column(df, name)
-    if by is not None and by in names:
-        raise InputError(f"{by}: the grouping variable is also listed among the variables")
+    if group is not None and group in names:
+        raise InputError(f"{group}: the grouping variable is also listed among the variables")
     if percent_of not in ("valid", "all"):
         raise InputError(f"percent_of: {percent_of!r} is not valid or all")
     if suppress_below is not None and (int(suppress_below) != suppress_below or suppress_below < 2):
@@ -154,30 +91,30 @@ def describe(
     chosen = _contents(show)
     found = resolve_levels(df, names, levels, metadata_levels, labels)
     left_out: tuple[LevelReport, ...] = ()
-    if variables is None:  # every column by default, but not an ID column: one row per case would identify people
+    if variables is None:  # every column group default, but not an ID column: one row per case would identify people
         left_out = tuple(found[n] for n in names if found[n].identifier)
         names = [n for n in names if not found[n].identifier]
         if not names:
             raise InputError(f"describe: every column looks like an identifier ({', '.join(r.name for r in left_out)}); name the variables")
 
     w = _weights(df, weights) if weights is not None else None
-    if w is not None and tests:
-        raise InputError(f"{weights}: tests with survey weights need the survey design; run the tests unweighted or leave them out")
-    if by is not None:
-        codes, group_names = _codes(df[by], value_labels.get(by))
+    if w is not None and compare:
+        raise InputError(f"{weights}: tests with survey weights need the survey design; compare the groups unweighted or leave the p values out")
+    if group is not None:
+        codes, group_names = _codes(df[group], value_labels.get(group))
         keep = codes >= 0
         dropped = int((~keep).sum())
         if len(group_names) < 2 or len(np.unique(codes[keep])) < 2:
-            raise InputError(f"{by}: {len(np.unique(codes[keep]))} group(s) with data; a grouping variable needs at least two")
+            raise InputError(f"{group}: {len(np.unique(codes[keep]))} group(s) with data; a grouping variable needs at least two")
         if smd and len(group_names) != 2:
-            raise InputError(f"{by}: {len(group_names)} groups; the standardised difference needs exactly two")
+            raise InputError(f"{group}: {len(group_names)} groups; the standardised difference needs exactly two")
         if dropped:
             df = df[keep]
             codes = codes[keep]
             w = w[keep] if w is not None else None
     else:
-        if tests or smd:
-            raise InputError("tests and smd compare groups; name the grouping variable (by)")
+        if compare or smd:
+            raise InputError("compare and smd compare groups; name the grouping variable (group)")
         codes, group_names, dropped = np.zeros(len(df), dtype=np.intp), [], 0
     if len(df) == 0:
         raise InputError("describe: no rows to describe")
@@ -190,15 +127,15 @@ def describe(
         kind = "continuous" if report.level in ("interval", "ratio") else report.level
         series, named = df[name], value_labels.get(name)
         if kind == "ordinal" and named and pd.api.types.is_numeric_dtype(series):
-            # a labelled ordinal variable: its median and quartiles are categories, shown by label
+            # a labelled ordinal variable: its median and quartiles are categories, shown group label
             series, named = factor(series, named, ordered=True), None
         summary = _summarise(
             series, name, labels.get(name, name), report, chosen[kind], groups, named, moments=smd and kind == "ordinal"
         )
         if alphas and name in alphas:
             summary = replace(summary, alpha=_alpha_value(name, alphas[name]))
-        if tests:
-            summary = replace(summary, **_test(df, name, by, kind, labels))  # type: ignore[arg-type]
+        if compare:
+            summary = replace(summary, **_test(df, name, group, kind, labels))  # type: ignore[arg-type]
         if smd:
             summary = replace(summary, smd=_smd(summary))
         summaries.append(summary)
@@ -207,23 +144,26 @@ def describe(
         raise InputError(f"{unknown_alpha[0]}: α given for a variable that is not described")
 
     column_n = groups.column_n()
-    columns = tuple(str(g) for g in group_names) + ("Total",) if by is not None else ("Total",)
+    columns = tuple(str(g) for g in group_names) + ("Total",) if group is not None else ("Total",)
     return Description(
         tuple(summaries),
         columns,
         column_n,
-        by=by,
-        by_label=labels.get(by, by) if by else None,
+        group=group,
+        group_label=labels.get(group, group) if group else None,
         weights=weights,
         percent_of=percent_of,
         suppress_below=suppress_below,
         dropped_no_group=dropped,
         left_out=left_out,
+        provenance=c.provenance("statsetter.analyses.describe"),
     )
 
 
 def _alpha_value(name: str, given: "float | Result") -> float:
     """α from a number or from a cronbach_alpha record."""
+    if isinstance(given, list) and given:  # the Records cronbach_alpha returns
+        given = given[0]
     if isinstance(given, Result):
         found = next((e.value for e in given.effects if e.name == "alpha"), None)
         if found is None:
@@ -503,17 +443,17 @@ def _valid(x: "np.ndarray", ok: "np.ndarray", g: _Groups) -> tuple["np.ndarray",
     return x[ok], g.codes[ok], None if g.w is None else g.w[ok]
 
 
-def _test(df: "pd.DataFrame", name: str, by: str | None, kind: str, labels: Mapping[str, str]) -> dict[str, Any]:
-    """The comparison across groups chosen by level (stated in the table note)."""
+def _test(df: "pd.DataFrame", name: str, group: str | None, kind: str, labels: Mapping[str, str]) -> dict[str, Any]:
+    """The comparison across groups chosen group level (stated in the table note)."""
     from .anova import anova_oneway
     from .chisquare import chi_square
     from .ranks import kruskal_wallis, mann_whitney
     from .ttests import t_independent
 
-    assert by is not None
-    k = df[by].dropna().nunique()
+    assert group is not None
+    k = df[group].dropna().nunique()
     if kind == "nominal":
-        records = chi_square(df, by, name, labels=labels)
+        records = chi_square(df, group, name, labels=labels)
         fisher = next((r for r in records if r.kind == "fisher_exact"), None)
         small = any(n.kind == "assumption" and "expected counts below 5" in n.text for n in records[0].notes)
         if fisher is not None and small:
@@ -521,11 +461,11 @@ def _test(df: "pd.DataFrame", name: str, by: str | None, kind: str, labels: Mapp
         return {"test": records[0], "test_name": "χ<sup>2</sup> test of independence"}
     if kind == "ordinal":
         if k == 2:
-            return {"test": mann_whitney(df, name, by, labels=labels), "test_name": "Mann–Whitney <i>U</i> test"}
-        return {"test": kruskal_wallis(df, name, by, labels=labels), "test_name": "Kruskal–Wallis <i>H</i> test"}
+            return {"test": mann_whitney(df, name, group, labels=labels), "test_name": "Mann–Whitney <i>U</i> test"}
+        return {"test": kruskal_wallis(df, name, group, labels=labels), "test_name": "Kruskal–Wallis <i>H</i> test"}
     if k == 2:
-        return {"test": t_independent(df, name, by, labels=labels), "test_name": "Welch's <i>t</i> test"}
-    return {"test": anova_oneway(df, name, by, variant="welch", labels=labels), "test_name": "Welch's one-way ANOVA"}
+        return {"test": t_independent(df, name, group, labels=labels), "test_name": "Welch's <i>t</i> test"}
+    return {"test": anova_oneway(df, name, group, variant="welch", labels=labels), "test_name": "Welch's one-way ANOVA"}
 
 
 def _smd(v: VariableSummary) -> float:

@@ -2,73 +2,24 @@
 
 from __future__ import annotations
 
-from dataclasses import dataclass
 from typing import TYPE_CHECKING, Literal, Mapping, Sequence
 
 from ..errors import InputError
-from ..records import EffectSize, Interval, Note, Result, Statistic, Variable
+from ..records import ADJUST_NAMES as _ADJUST_NAMES, CorrelationMatrix
 from . import _common as c
 
 if TYPE_CHECKING:
-    import numpy as np
     import pandas as pd
 
 Adjust = Literal["holm", "bonferroni", "fdr_bh"]
 SPARSE_BELOW = 0.1  # share of missing cells below which the sparse correction path is used
-_ADJUST_NAMES = {"holm": "Holm", "bonferroni": "Bonferroni", "fdr_bh": "Benjamini–Hochberg"}
-
-
-@dataclass(frozen=True, eq=False)
-class CorrelationMatrix:
-    """r, p, CI limits and n for every pair (square arrays; the diagonal is r = 1)."""
-
-    names: tuple[str, ...]
-    method: str
-    r: "np.ndarray"
-    p: "np.ndarray"
-    low: "np.ndarray"
-    high: "np.ndarray"
-    n: "np.ndarray"
-    level: float
-    adjust: str | None
-    labels: Mapping[str, str]
-
-    def records(self) -> list[Result]:
-        """One record per pair (upper triangle, in column order)."""
-        kind, symbol = ("pearson", "r") if self.method == "pearson" else ("spearman", "rs")
-        notes = [Note("missing", "Pairwise-complete observations; n per pair.")]
-        if self.adjust:
-            notes.append(Note("correction", f"p values {_ADJUST_NAMES[self.adjust]}-adjusted over {len(self.names) * (len(self.names) - 1) // 2} pairs."))
-        prov = c.provenance(f"statsetter.analyses.correlation_matrix({self.method})")
-        out = []
-        k = len(self.names)
-        for i in range(k):
-            for j in range(i + 1, k):
-                n = int(self.n[i, j])
-                out.append(
-                    Result(
-                        kind=kind,
-                        statistic=Statistic(symbol, float(self.r[i, j]), (n - 2,)),
-                        p=float(self.p[i, j]),
-                        n=n,
-                        effects=(EffectSize(symbol, float(self.r[i, j]), Interval(self.level, float(self.low[i, j]), float(self.high[i, j])), method="Fisher z"),),
-                        variables=(
-                            Variable(self.names[i], self.labels.get(self.names[i], self.names[i]), "x"),
-                            Variable(self.names[j], self.labels.get(self.names[j], self.names[j]), "y"),
-                        ),
-                        notes=tuple(notes),
-                        details={"p_adjusted": _ADJUST_NAMES[self.adjust]} if self.adjust else {},
-                        provenance=prov,
-                    )
-                )
-        return out
 
 
 def correlation_matrix(
     df: "pd.DataFrame",
     columns: Sequence[str],
     *,
-    method: Literal["pearson", "spearman"] = "pearson",
+    coefficient: Literal["pearson", "spearman"] = "pearson",
     level: float = 0.95,
     adjust: Adjust | None = None,
     labels: Mapping[str, str] | None = None,
@@ -80,6 +31,7 @@ def correlation_matrix(
     import numpy as np
     from scipy import stats
 
+    method = coefficient
     if len(columns) < 2:
         raise InputError("columns: a correlation matrix needs at least two variables")
     if len(set(columns)) != len(columns):
@@ -100,7 +52,7 @@ def correlation_matrix(
     if method == "spearman":
         X = pd.DataFrame(X).rank().to_numpy()
     elif method != "pearson":
-        raise InputError(f"method: {method!r} is not pearson or spearman")
+        raise InputError(f"coefficient: {method!r} is not pearson or spearman")
     missing = np.isnan(X)
     miss_count = missing.sum(axis=0)
     rows = len(X)
@@ -167,4 +119,7 @@ def correlation_matrix(
         p[iu] = adj
         p[(iu[1], iu[0])] = adj
     np.fill_diagonal(p, 0.0)
-    return CorrelationMatrix(tuple(columns), method, r, p, low, high, N.astype(int), level, adjust, dict(labels or {}))
+    return CorrelationMatrix(
+        tuple(columns), method, r, p, low, high, N.astype(int), level, adjust, dict(labels or {}),
+        provenance=c.provenance(f"statsetter.analyses.correlation_matrix({method})"),
+    )

@@ -22,8 +22,8 @@ def posthoc(
     df: "pd.DataFrame",
     outcome: str,
     group: str,
-    procedure: Procedure = "tukey",
     *,
+    adjust: Procedure = "tukey",
     level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
@@ -31,12 +31,13 @@ def posthoc(
     sorted order), its CI and the adjusted p. Tukey HSD (scipy); Games–Howell
     (Welch SEs and df, studentized range); pairwise Student t tests with Holm
     or Bonferroni adjustment (Bonferroni CIs at the adjusted level; Holm CIs
-    unadjusted, stated)."""
+    unadjusted, stated). ``adjust`` names the procedure."""
     import numpy as np
     from scipy import stats
 
+    procedure = adjust
     if procedure not in _NAMES:
-        raise InputError(f"procedure: {procedure!r} is not one of {', '.join(_NAMES)}")
+        raise InputError(f"adjust: {procedure!r} is not one of {', '.join(_NAMES)}")
     levels, samples, missing = c.grouped(df, outcome, group, "a comparison")
     k = len(samples)
     pairs = list(combinations(range(k), 2))

@@ -41,7 +41,7 @@ def mann_whitney(
     group: str,
     *,
     groups: Sequence[object] | None = None,
-    method: PMethod = "auto",
+    variant: PMethod = "auto",
     alternative: str = "two-sided",
     labels: Mapping[str, str] | None = None,
 ) -> Result:
@@ -49,11 +49,14 @@ def mann_whitney(
     (positive when the first group tends to be higher; Kerby, 2014). ``auto``
     means exact when a group has at most 8 values and there are no ties
     (scipy's rule), the normal approximation with a tie correction otherwise;
-    the method used is stated."""
+    the method used is stated. ``variant`` is auto, exact or asymptotic."""
     import numpy as np
     from scipy import stats
 
     levels, (a, b), missing = _two_groups(df, outcome, group, groups, "Mann–Whitney test")
+    method = variant
+    if method not in ("auto", "exact", "asymptotic"):
+        raise InputError(f"variant: {method!r} is not auto, exact or asymptotic")
     if method == "auto":
         ties = len(np.unique(np.concatenate([a, b]))) < len(a) + len(b)
         method = "exact" if min(len(a), len(b)) <= 8 and not ties else "asymptotic"
@@ -77,10 +80,14 @@ def mann_whitney(
 
 def wilcoxon_signed_rank(
     df: "pd.DataFrame",
-    first: str,
-    second: str,
+    first: str | None = None,
+    second: str | None = None,
     *,
-    method: PMethod = "auto",
+    outcome: str | None = None,
+    subject: str | None = None,
+    within: str | None = None,
+    conditions: Sequence[object] | None = None,
+    variant: PMethod = "auto",
     alternative: str = "two-sided",
     labels: Mapping[str, str] | None = None,
     outcome_label: str | None = None,
@@ -88,9 +95,12 @@ def wilcoxon_signed_rank(
     """Wilcoxon signed-rank test of ``first`` − ``second`` (zero differences
     dropped). T is the smaller signed-rank sum; the matched-pairs rank-biserial
     r = (W+ − W−)/(W+ + W−) (Kerby, 2014). ``auto`` means exact for up to 50
-    non-zero differences without ties, the normal approximation otherwise."""
+    non-zero differences without ties, the normal approximation otherwise
+    (``variant`` is auto, exact or asymptotic). Long data: as ``t_paired``."""
     import numpy as np
     from scipy import stats
+
+    df, first, second, labels, outcome_label = c.paired_columns("wilcoxon_signed_rank", df, first, second, outcome, subject, within, conditions, labels, outcome_label)
 
     data, missing = c.listwise(df, [first, second])
     a, b = c.numeric(data, first).to_numpy(), c.numeric(data, second).to_numpy()
@@ -100,6 +110,9 @@ def wilcoxon_signed_rank(
         raise InputError(f"{first} − {second}: every difference is zero; the test is undefined")
     ranks = stats.rankdata(np.abs(nz))
     w_plus, w_minus = float(ranks[nz > 0].sum()), float(ranks[nz < 0].sum())
+    method = variant
+    if method not in ("auto", "exact", "asymptotic"):
+        raise InputError(f"variant: {method!r} is not auto, exact or asymptotic")
     if method == "auto":
         ties = len(np.unique(np.abs(nz))) < len(nz)
         method = "exact" if len(nz) <= 50 and not ties else "asymptotic"

@@ -149,9 +149,13 @@ def t_independent(
 
 def t_paired(
     df: "pd.DataFrame",
-    first: str,
-    second: str,
+    first: str | None = None,
+    second: str | None = None,
     *,
+    outcome: str | None = None,
+    subject: str | None = None,
+    within: str | None = None,
+    conditions: Sequence[object] | None = None,
     effect: Literal["d_z", "d_av"] = "d_z",
     level: float = 0.95,
     alternative: str = "two-sided",
@@ -160,8 +164,14 @@ def t_paired(
 ) -> Result:
     """Paired t test of ``first`` − ``second``. d_z = mean difference / SD of
     the differences, with the noncentral-t CI; d_av = mean difference / mean
-    of the two SDs (Cumming, 2012), reported without an interval."""
+    of the two SDs (Cumming, 2012), reported without an interval.
+
+    Wide data name the two columns (``first``, ``second``); long data (a row
+    per subject and condition) name ``outcome``, ``subject`` and ``within``,
+    and the two ``conditions`` when ``within`` has more."""
     from scipy import stats
+
+    df, first, second, labels, outcome_label = c.paired_columns("t_paired", df, first, second, outcome, subject, within, conditions, labels, outcome_label)
 
     if effect not in ("d_z", "d_av"):
         raise InputError(f"effect: {effect!r} is not d_z or d_av")

@@ -15,7 +15,7 @@ import math
 from dataclasses import dataclass
 from typing import Sequence
 
-from ..analyses.effects import hedges_j
+from ..formulas import hedges_j
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style

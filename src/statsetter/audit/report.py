@@ -18,7 +18,7 @@ from pathlib import Path
 from typing import Sequence
 
 from ..rendering.sentences import render
-from ..rendering.styled import StyledText
+from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record

@@ -15,7 +15,7 @@ import re
 from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
-from ..rendering.styled import StyledText
+from ..styled import StyledText
 from ..rendering.tables import TableModel, title_case
 
 if TYPE_CHECKING:

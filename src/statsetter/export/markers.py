@@ -17,7 +17,8 @@ from pathlib import Path
 from typing import TYPE_CHECKING, Iterable, Iterator, Sequence
 
 from ..errors import InputError
-from ..rendering.styled import StyledText
+from ..records.naming import ID_PATTERN
+from ..styled import StyledText
 
 if TYPE_CHECKING:
     from ..records import Result
@@ -25,7 +26,7 @@ if TYPE_CHECKING:
 
 __all__ = ["MARKER", "FillReport", "fill_chapter"]
 
-MARKER = re.compile(r"\[\[\s*([A-Za-z0-9_.\-]+)\s*(?:\|\s*(stats|sentence|table)\s*)?\]\]")
+MARKER = re.compile(r"\[\[\s*(" + ID_PATTERN + r")\s*(?:\|\s*(stats|sentence|table)\s*)?\]\]")
 _W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
 
 

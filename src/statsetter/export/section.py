@@ -7,14 +7,14 @@ import html
 from pathlib import Path
 from typing import Sequence
 
-from ..records import Result, dump_records
+from ..records import Record, Result, dump_records
 from ..rendering.sentences import render
-from ..rendering.styled import LATEX_PREAMBLE, StyledText
+from ..styled import LATEX_PREAMBLE, StyledText
 from ..rendering.tables import TableModel
 from ..style.profile import Style
 from .text_tables import write_table
 
-__all__ = ["CAUTION", "automatic_choices", "section_text", "write_section"]
+__all__ = ["CAUTION", "automatic_choices", "results_of", "section_text", "write_section"]
 
 CAUTION = (
     "Prepared with statsetter. Check every result against the analysis output, the target journal's instructions, "
@@ -33,8 +33,14 @@ def automatic_choices(records: Sequence[Result]) -> list[StyledText]:
     return out
 
 
-def section_text(records: Sequence[Result], tables: Sequence[TableModel], style: Style, title: str, fmt: str) -> str:
+def results_of(records: Sequence[Record]) -> list[Result]:
+    """The records that have a sentence (a Description or a correlation matrix is a table)."""
+    return [r for r in records if isinstance(r, Result)]
+
+
+def section_text(records: Sequence[Record], tables: Sequence[TableModel], style: Style, title: str, fmt: str) -> str:
     """The section as Markdown (``md``), HTML (``html``) or LaTeX (``tex``)."""
+    records = results_of(records)
     sentences = [render(r, "sentence", style).to(fmt) for r in records]
     blocks = [write_table(t, fmt) for t in tables] + [c.to(fmt) for c in automatic_choices(records)]
     if fmt == "md":
@@ -52,7 +58,7 @@ def section_text(records: Sequence[Result], tables: Sequence[TableModel], style:
 
 
 def write_section(
-    records: Sequence[Result], tables: Sequence[TableModel], style: Style, title: str, targets: dict[str, Path], inputs: Sequence[Path] = ()
+    records: Sequence[Record], tables: Sequence[TableModel], style: Style, title: str, targets: dict[str, Path], inputs: Sequence[Path] = ()
 ) -> list[tuple[str, Path]]:
     """Write each format in ``targets`` (md, html, tex, docx, json): [(format, path)]."""
     from ..files import write_atomic
@@ -64,8 +70,8 @@ def write_section(
         elif fmt == "docx":
             from .docx_writer import add_runs, results_document, save_document
 
-            document = results_document(records, style, title=title, tables=tables)
-            for choice in automatic_choices(records):
+            document = results_document(results_of(records), style, title=title, tables=tables)
+            for choice in automatic_choices(results_of(records)):
                 add_runs(document.add_paragraph(), choice)
             add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
             save_document(document, path, inputs=inputs)

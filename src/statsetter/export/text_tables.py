@@ -11,7 +11,7 @@ from __future__ import annotations
 import csv
 import io
 
-from ..rendering.styled import StyledText
+from ..styled import StyledText
 from ..rendering.tables import TableModel, title_case
 
 __all__ = ["table_markdown", "table_html", "table_latex", "table_csv", "table_text", "write_table"]
@@ -89,7 +89,7 @@ def table_html(t: TableModel) -> str:
 
 
 def table_latex(t: TableModel) -> str:
-    """A booktabs table; the document needs ``statsetter.rendering.styled.LATEX_PREAMBLE``
+    """A booktabs table; the document needs ``statsetter.styled.LATEX_PREAMBLE``
     (booktabs, upgreek); ``\\textsubscript`` needs LaTeX 2015 or later."""
     ncol = len(t.columns)
     spec = "l" + "".join("r" if c.align == "right" else ("l" if c.align == "left" else "c") for c in t.columns)

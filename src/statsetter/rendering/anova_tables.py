@@ -12,7 +12,7 @@ from ..records import Result
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .record_tables import p_cell
-from .styled import StyledText
+from ..styled import StyledText
 from .tables import Column, Row, TableModel
 
 

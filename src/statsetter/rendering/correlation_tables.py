@@ -9,11 +9,11 @@ from typing import TYPE_CHECKING
 
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .styled import StyledText
+from ..styled import StyledText
 from .tables import Column, Row, TableModel
 
 if TYPE_CHECKING:
-    from ..analyses.matrix import CorrelationMatrix
+    from ..records import CorrelationMatrix
 
 
 def correlation_table(m: "CorrelationMatrix", style: "Style | str | None" = None, *, title: str | None = None, number: int | None = None) -> TableModel:

@@ -15,13 +15,13 @@ from typing import TYPE_CHECKING
 
 from ..style.numbers import Numbers, numbers_for, round_half_up
 from ..style.profile import Style, load_style
-from .styled import StyledText, escape_markup
+from ..styled import StyledText, escape_markup
 from .tables import Column, Row, Spanner, TableModel
 
 if TYPE_CHECKING:
     import numpy as np
 
-    from ..analyses.descriptives import Description, VariableSummary
+    from ..records import Description, VariableSummary
 
 _OPS = {"=": "", "<": "&lt; ", ">": "&gt; "}
 _ABBREVIATIONS = {
@@ -215,15 +215,15 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
     total_sym = lay.sym("N")
     columns = []
     for j, name in enumerate(d.columns):
-        sym = lay.sym("n") if d.by is not None and j < len(d.columns) - 1 else total_sym
+        sym = lay.sym("n") if d.group is not None and j < len(d.columns) - 1 else total_sym
         columns.append(Column(StyledText.from_markup(f"{escape_markup(name)} ({sym} = {lay.num.integer(d.column_n[j])})")))
     if any(v.test is not None for v in d.variables):
         columns.append(Column(StyledText.from_markup(resolved.symbol("p"))))
     if any(v.smd is not None for v in d.variables):
         columns.append(Column(StyledText.from_markup(lay.sym("SMD"))))
-    spanners = (Spanner(StyledText(d.by_label or d.by or ""), 0, len(d.columns) - 1),) if d.by is not None else ()
+    spanners = (Spanner(StyledText(d.group_label or d.group or ""), 0, len(d.columns) - 1),) if d.group is not None else ()
     if title is None:
-        title = f"Characteristics of the sample by {d.by_label}" if d.by is not None else "Characteristics of the sample"
+        title = f"Characteristics of the sample by {d.group_label}" if d.group is not None else "Characteristics of the sample"
     return TableModel(
         title=StyledText(title),
         columns=tuple(columns),
@@ -256,7 +256,7 @@ def _general_note(d: "Description", lay: _Layout) -> StyledText:
             "SDs use the sum of weights minus 1 as the denominator; quartiles are weighted (inverted distribution function)."
         )
     if d.dropped_no_group:
-        parts.append(f"{lay.num.integer(d.dropped_no_group)} cases with no value on {escape_markup(d.by_label or '')} are left out.")
+        parts.append(f"{lay.num.integer(d.dropped_no_group)} cases with no value on {escape_markup(d.group_label or '')} are left out.")
     if d.suppress_below:
         k = lay.num.integer(d.suppress_below)
         parts.append(

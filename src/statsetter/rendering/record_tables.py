@@ -11,7 +11,7 @@ from ..style.numbers import Numbers
 from ..style.profile import Style, load_style
 from .kinds import KINDS
 from .sentences import _helpers
-from .styled import StyledText
+from ..styled import StyledText
 from .tables import Column, Row, TableModel
 
 

@@ -13,7 +13,7 @@ from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .record_tables import p_cell
 from .sentences import render
-from .styled import StyledText
+from ..styled import StyledText
 from .tables import Column, Row, Spanner, TableModel
 
 _LINEAR = ("linear_model", "linear_coefficient")

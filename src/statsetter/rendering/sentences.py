@@ -23,8 +23,8 @@ from ..records import EffectSize, GroupSummary, Interval, Result
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style, load_style
 from .kinds import FORMS, KINDS
-from .styled import StyledText
-from .styled import escape_markup as _escape_text
+from ..styled import StyledText
+from ..styled import escape_markup as _escape_text
 
 __all__ = ["render", "render_many", "templates_dir"]
 

@@ -13,7 +13,7 @@ from dataclasses import dataclass, field
 from typing import Literal
 
 from ..errors import InputError
-from .styled import StyledText
+from ..styled import StyledText
 
 __all__ = ["Column", "Spanner", "Row", "TableModel", "styled", "title_case"]
 

@@ -86,7 +86,7 @@ def _markup(v: Any) -> str | None:
         return f"{v!r} is not allowed; use a text string"
     if _long(v):
         return _long(v)
-    from ..rendering.styled import StyledText  # local: render imports style
+    from ..styled import StyledText
 
     try:
         StyledText.from_markup(v)

@@ -20,7 +20,7 @@ from dataclasses import dataclass, field, fields, replace
 from types import MappingProxyType
 from typing import Any, Literal, Mapping, TypeVar, get_args
 
-from .errors import RecordError
+from ..errors import RecordError
 
 __all__ = [
     "SCHEMA",
@@ -38,8 +38,6 @@ __all__ = [
     "Note",
     "Provenance",
     "Result",
-    "dump_records",
-    "load_records",
 ]
 
 SCHEMA = "statsetter.result"
@@ -590,31 +588,3 @@ def _from_plain(cls: type[T], data: Mapping[str, Any], path: str) -> T:
     except TypeError as exc:
         raise RecordError(path, f"incomplete: {exc}") from None
     return obj
-
-
-def dump_records(records: list[Result] | tuple[Result, ...], *, indent: int | None = 2) -> str:
-    """Records as a JSON array (each with its schema and version)."""
-    return json.dumps([r.to_dict() for r in records], ensure_ascii=False, indent=indent)
-
-
-def load_records(text: str, *, source: str = "<records>") -> list[Result]:
-    """Records from JSON text: an array of records, or a single record object."""
-    from .errors import InputError
-
-    try:
-        data = json.loads(text)
-    except json.JSONDecodeError as exc:
-        raise InputError(f"{source}: not valid JSON (line {exc.lineno}, column {exc.colno}): {exc.msg}") from None
-    except RecursionError:
-        raise InputError(f"{source}: nested too deeply to be a file of records") from None
-    if isinstance(data, Mapping):
-        data = data.get("records", [data]) if "kind" not in data else [data]
-    if not isinstance(data, list):
-        raise InputError(f"{source}: expected a JSON array of records")
-    out = []
-    for i, item in enumerate(data):
-        try:
-            out.append(Result.from_dict(item, where=f"record {i + 1}"))
-        except RecordError as exc:
-            raise InputError(f"{source}: {exc}") from None
-    return out

@@ -1,0 +1,54 @@
+"""The ``statsetter`` command: one module per command, one error layer.
+
+Commands: ``format`` (one result from numbers on the command line),
+``render`` (JSON files of records), ``records`` (list the records in a file),
+``fill`` (markers in a chapter), ``describe`` (a descriptives table from a
+data file), ``audit`` (a manuscript's statistics checked), ``run`` (an
+analysis plan), ``styles`` (list, show, check). The exit status follows one
+contract for every command (``cli/exits.py``); no traceback reaches a user.
+"""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from typing import Sequence
+
+from . import audit, describe, fill, format, records, render, run, styles
+from .exits import EPILOG, EXIT_ENVIRONMENT, EXIT_FINDINGS, EXIT_INTERNAL, EXIT_OK, EXIT_USAGE, Parser, guarded
+
+__all__ = ["main", "EXIT_OK", "EXIT_FINDINGS", "EXIT_USAGE", "EXIT_ENVIRONMENT", "EXIT_INTERNAL"]
+
+COMMANDS = (format, render, records, fill, describe, audit, run, styles)
+
+
+def build_parser() -> argparse.ArgumentParser:
+    parser = Parser(
+        prog="statsetter",
+        description="Statistical results as manuscript-ready text and tables, in a chosen reporting style.",
+        epilog=EPILOG,
+    )
+    parser.add_argument("--version", action="store_true", help="print the version and exit")
+    parser.add_argument("--debug", action="store_true", help="print the full traceback of an internal error")
+    sub = parser.add_subparsers(dest="command", metavar="COMMAND", parser_class=Parser)
+    for command in COMMANDS:
+        command.add(sub)
+    return parser
+
+
+def main(argv: Sequence[str] | None = None) -> int:
+    parser = build_parser()
+    ns = parser.parse_args(argv)
+    if ns.version:
+        from .._version import __version__
+
+        print(f"statsetter {__version__}")
+        return EXIT_OK
+    if ns.command is None:
+        parser.print_help()
+        return EXIT_OK
+    return guarded(ns, ns.handler)
+
+
+if __name__ == "__main__":
+    sys.exit(main())

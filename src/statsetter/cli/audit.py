@@ -1,0 +1,58 @@
+"""``statsetter audit``: the statistics a manuscript reports, checked."""
+
+from __future__ import annotations
+
+import argparse
+import sys
+from pathlib import Path
+
+from ..errors import InputError
+from .shared import emit
+
+
+def add(sub) -> None:  # type: ignore[no-untyped-def]
+    a = sub.add_parser(
+        "audit",
+        help="find the statistics in a manuscript, check them and propose house-style text",
+        description="Audit a manuscript (.docx, .md, .txt, .tex): every reported statistic is checked "
+        "(p against the statistic and df, impossible values, the style) and restyled. The file is never "
+        "modified. Exit 0: nothing found; 1: findings; 2: usage or input error. A finding is a reason to look, "
+        "not proof of an error.",
+    )
+    a.add_argument("manuscript", metavar="FILE")
+    a.add_argument("--style", default=None, help="the house style to check against (default apa7)")
+    a.add_argument("--alpha", type=float, default=0.05, help="the significance level for decision checks (0.05)")
+    shape = a.add_mutually_exclusive_group()
+    shape.add_argument("--json", action="store_true", help="one JSON array with every statistic found")
+    shape.add_argument("--csv", action="store_true", help="the same rows as CSV")
+    a.add_argument("--out", metavar="FILE", help="write the JSON or CSV to FILE instead of standard output")
+    a.add_argument("--all", action="store_true", help="list clean statistics in the table too")
+    a.add_argument("--annotate", metavar="OUT.docx", help="write a copy of a .docx with a Word comment on each finding")
+    a.add_argument("--encoding", default="utf-8", help="text encoding of a .md/.txt/.tex file (utf-8)")
+    a.add_argument("--grim-items", type=int, metavar="K", help="run the GRIM test on means, for integer scores summed over K items")
+    a.set_defaults(handler=run)
+
+
+def run(ns: argparse.Namespace) -> int:
+    from ..audit.report import annotate, as_csv, as_json, audit_file, print_table
+
+    if not 0 < ns.alpha < 1:
+        raise InputError(f"--alpha: {ns.alpha:g} is not between 0 and 1")
+    if ns.annotate and not Path(ns.manuscript).suffix.lower() == ".docx":
+        raise InputError(f"--annotate: {ns.manuscript}: comments can be added to a .docx manuscript only (save it as .docx)")
+    if ns.annotate and not ns.annotate.lower().endswith(".docx"):
+        raise InputError(f"--annotate: {ns.annotate} does not end in .docx")
+    if ns.out and not (ns.json or ns.csv):
+        raise InputError("--out: choose --json or --csv")
+    if ns.grim_items is not None and ns.grim_items < 1:
+        raise InputError("--grim-items: give a whole number of 1 or more")
+    entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items)
+    if ns.json or ns.csv:
+        emit(as_json(entries) if ns.json else as_csv(entries), ns.out, inputs=[ns.manuscript])
+    else:
+        print_table(entries, everything=ns.all)
+    if ns.annotate:
+        added, elsewhere = annotate(ns.manuscript, entries, ns.annotate)
+        note = f" ({elsewhere} in headers, footers or notes listed only)" if elsewhere else ""
+        sys.stderr.write(f"wrote {ns.annotate} with {added} comment(s){note}\n")
+    return 1 if any(e.findings for e in entries) else 0

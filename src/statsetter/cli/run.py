@@ -1,0 +1,49 @@
+"""``statsetter run``: an analysis plan, from data to every output."""
+
+from __future__ import annotations
+
+import argparse
+import sys
+
+
+def add(sub) -> None:  # type: ignore[no-untyped-def]
+    rn = sub.add_parser(
+        "run",
+        help="run an analysis plan: every table and paragraph into every output, the chapter filled",
+        description="Run a plan file (TOML; see the README): read the data, score the scales, run every analysis, "
+        "build the tables, write the outputs and fill the chapter's markers. Re-run after the data change.",
+    )
+    rn.add_argument("plan", metavar="PLAN.toml")
+    rn.add_argument("--format", choices=("files", "json"), default="files", help="json: print the records instead of writing the outputs")
+    rn.set_defaults(handler=run)
+
+
+def run(ns: argparse.Namespace) -> int:
+    from ..plan import load_plan, run_plan, write_outputs
+
+    plan = load_plan(ns.plan)
+    if len(plan.analyses) >= 8 and sys.stderr.isatty():
+        from rich.console import Console
+        from rich.progress import Progress
+
+        with Progress(console=Console(stderr=True), transient=True) as bar:
+            task = bar.add_task("analyses", total=len(plan.analyses))
+            result = run_plan(plan, progress=lambda name: bar.update(task, advance=1, description=name))
+    else:
+        result = run_plan(plan)
+    if ns.format == "json":
+        from ..records import dump_records
+
+        sys.stdout.write(dump_records(result.records))
+        return 0
+    write_outputs(plan, result)
+    print(f"{len(result.records)} results from {len(plan.analyses)} analyses and {len(plan.scales)} scale(s); {len(result.tables)} table(s)")
+    for what, path in result.written:
+        print(f"  {what:8} {path}")
+    unused = [n for n in result.notes if n.startswith("record '") and n.endswith("not used by any marker")]
+    for note in result.notes:
+        if note not in unused:
+            print(f"  {note}")
+    if unused:
+        print(f"  {len(unused)} record(s) not used by any marker of the chapter (all are in the outputs)")
+    return 1 if result.unknown_markers else 0

@@ -1,0 +1,379 @@
+"""Records that summarise many variables at once: a Table 1's numbers
+(:class:`Description`) and a correlation matrix (:class:`CorrelationMatrix`).
+
+Like :class:`~statsetter.records.result.Result` they are produced by sources
+(``statsetter.analyses``), consumed by sinks (``statsetter.rendering``), hold
+exact unrounded numbers and round-trip through JSON with the schema and
+version of every record; ``kind`` tells them apart in a file. Their numbers
+are numpy arrays (numpy is imported when one is built from JSON); a missing
+number (a group without data) is NaN in memory and ``null`` in JSON.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, field, fields
+from typing import TYPE_CHECKING, Any, Literal, Mapping
+
+from ..errors import RecordError
+from .result import SCHEMA, SCHEMA_VERSION, EffectSize, Interval, Note, Provenance, Result, Statistic, Variable
+
+if TYPE_CHECKING:
+    import numpy as np
+
+__all__ = ["LevelReport", "VariableSummary", "Description", "CorrelationMatrix", "ADJUST_NAMES"]
+
+Level = Literal["nominal", "ordinal", "interval", "ratio"]
+Source = Literal["declared", "metadata", "categorical", "inferred"]
+ADJUST_NAMES = {"holm": "Holm", "bonferroni": "Bonferroni", "fdr_bh": "Benjamini–Hochberg"}
+
+
+@dataclass(frozen=True, slots=True)
+class LevelReport:
+    """A variable's level of measurement, where it came from and why."""
+
+    name: str
+    level: Level
+    source: Source
+    reason: str
+    weak: bool = False
+    identifier: bool = False  # text with nearly one value per row: an ID or free text, not a variable to tabulate
+
+    @property
+    def dichotomous(self) -> bool:
+        return self.level == "nominal" and self.reason.startswith("2 distinct")
+
+    def describe(self) -> str:
+        flag = "; a weak guess: declare the level" if self.weak else ""
+        why = f"inferred from the values: {self.reason}" if self.source == "inferred" else self.reason
+        return f"{self.name}: {self.level} ({why}{flag})"
+
+
+_ARRAYS = ("n", "missing", "counts", "mean", "sd", "median", "q1", "q3", "minimum", "maximum", "skew")
+
+
+@dataclass(frozen=True, eq=False)
+class VariableSummary:
+    """One variable's numbers, one entry per column (groups, then Total);
+    ``counts`` is columns × categories."""
+
+    name: str
+    label: str
+    level: LevelReport
+    show: tuple[str, ...]
+    n: "np.ndarray"
+    missing: "np.ndarray"
+    categories: tuple[str, ...] = ()
+    counts: "np.ndarray | None" = None
+    mean: "np.ndarray | None" = None
+    sd: "np.ndarray | None" = None
+    median: "np.ndarray | None" = None
+    q1: "np.ndarray | None" = None
+    q3: "np.ndarray | None" = None
+    minimum: "np.ndarray | None" = None
+    maximum: "np.ndarray | None" = None
+    skew: "np.ndarray | None" = None
+    positions: bool = False  # quartiles are positions of ordered categories
+    alpha: float | None = None
+    test: Result | None = None
+    test_name: str | None = None
+    smd: float | None = None
+
+    @property
+    def kind(self) -> str:
+        return "continuous" if self.level.level in ("interval", "ratio") else self.level.level
+
+    def to_dict(self) -> dict[str, Any]:
+        out: dict[str, Any] = {"name": self.name, "label": self.label, "level": _plain(self.level), "show": list(self.show)}
+        for f in fields(self):
+            value = getattr(self, f.name)
+            if f.name in out or value is None:
+                continue
+            if f.name in _ARRAYS:
+                out[f.name] = _array_out(value)
+            elif isinstance(value, Result):
+                out[f.name] = value.to_dict()
+            elif isinstance(value, tuple):
+                if value:
+                    out[f.name] = [str(v) for v in value]
+            elif isinstance(value, bool):
+                if value:
+                    out[f.name] = True
+            elif isinstance(value, str):
+                out[f.name] = value
+            else:
+                out[f.name] = float(value)
+        return out
+
+    @classmethod
+    def from_dict(cls, data: Mapping[str, Any], where: str) -> "VariableSummary":
+        data = _mapping(where, data)
+        kwargs: dict[str, Any] = {}
+        for key, value in data.items():
+            if key in _ARRAYS:
+                value = _array_in(f"{where}.{key}", value)
+            elif key == "level":
+                value = _object(LevelReport, f"{where}.level", value)
+            elif key == "test":
+                value = Result.from_dict(value, where=f"{where}.test")
+            elif key in ("show", "categories"):
+                value = tuple(str(v) for v in _list(f"{where}.{key}", value))
+            kwargs[key] = value
+        return _object(cls, where, kwargs)
+
+
+@dataclass(frozen=True, eq=False)
+class Description:
+    """The numbers of a descriptives table ("Table 1"): one
+    :class:`VariableSummary` per variable; columns are the categories of ``group`` in
+    order, then Total (the only column without a grouping variable).
+
+    Lay it out with ``statsetter.table(description, style)``.
+    """
+
+    variables: tuple[VariableSummary, ...]
+    columns: tuple[str, ...]
+    column_n: "np.ndarray"
+    group: str | None = None
+    group_label: str | None = None
+    weights: str | None = None
+    percent_of: Literal["valid", "all"] = "valid"
+    suppress_below: int | None = None
+    dropped_no_group: int = 0
+    notes: tuple[str, ...] = field(default=())
+    left_out: tuple[LevelReport, ...] = field(default=())  # columns not described because they look like identifiers
+    id: str | None = None
+    provenance: Provenance | None = None
+    kind: str = field(default="descriptives", init=False)
+
+    @property
+    def levels(self) -> list[LevelReport]:
+        return [v.level for v in self.variables]
+
+    def report(self) -> list[str]:
+        """One line per variable: its level, where the level came from and why."""
+        return [v.level.describe() for v in self.variables]
+
+    def tests(self) -> list[Result]:
+        """The records of the tests beside the rows (empty without tests)."""
+        return [v.test for v in self.variables if v.test is not None]
+
+    def to_dict(self) -> dict[str, Any]:
+        out: dict[str, Any] = {"schema": SCHEMA, "version": SCHEMA_VERSION, "kind": self.kind}
+        if self.id:
+            out["id"] = self.id
+        out["columns"] = list(self.columns)
+        out["column_n"] = _array_out(self.column_n)
+        out["variables"] = [v.to_dict() for v in self.variables]
+        for name in ("group", "group_label", "weights", "suppress_below"):
+            if getattr(self, name) is not None:
+                out[name] = getattr(self, name)
+        if self.percent_of != "valid":
+            out["percent_of"] = self.percent_of
+        if self.dropped_no_group:
+            out["dropped_no_group"] = self.dropped_no_group
+        if self.notes:
+            out["notes"] = list(self.notes)
+        if self.left_out:
+            out["left_out"] = [_plain(r) for r in self.left_out]
+        if self.provenance is not None:
+            out["provenance"] = _provenance_out(self.provenance)
+        return out
+
+    @classmethod
+    def from_dict(cls, data: Mapping[str, Any], *, where: str = "record") -> "Description":
+        data = _header(data, where, "descriptives")
+        kwargs: dict[str, Any] = {}
+        for key, value in data.items():
+            if key == "variables":
+                value = tuple(VariableSummary.from_dict(v, f"{where}.variables[{i}]") for i, v in enumerate(_list(f"{where}.variables", value)))
+            elif key == "column_n":
+                value = _array_in(f"{where}.column_n", value)
+            elif key in ("columns", "notes"):
+                value = tuple(str(v) for v in _list(f"{where}.{key}", value))
+            elif key == "left_out":
+                value = tuple(_object(LevelReport, f"{where}.left_out[{i}]", v) for i, v in enumerate(_list(f"{where}.left_out", value)))
+            elif key == "provenance":
+                value = _provenance_in(f"{where}.provenance", value)
+            kwargs[key] = value
+        made = _object(cls, where, kwargs)
+        if len(made.column_n) != len(made.columns):
+            raise RecordError(f"{where}.column_n", f"{len(made.column_n)} entries for {len(made.columns)} columns")
+        return made
+
+
+@dataclass(frozen=True, eq=False)
+class CorrelationMatrix:
+    """r, p (adjusted when ``adjust`` names a method), CI limits and n for
+    every pair of ``names`` (square arrays; the diagonal is r = 1, p = 0).
+
+    ``pairs()`` gives one :class:`Result` per pair; ``statsetter.table``
+    lays the matrix out.
+    """
+
+    names: tuple[str, ...]
+    method: str
+    r: "np.ndarray"
+    p: "np.ndarray"
+    low: "np.ndarray"
+    high: "np.ndarray"
+    n: "np.ndarray"
+    level: float
+    adjust: str | None
+    labels: Mapping[str, str]
+    id: str | None = None
+    provenance: Provenance | None = None
+    kind: str = field(default="correlation_matrix", init=False)
+
+    def pairs(self) -> list[Result]:
+        """One record per pair (upper triangle, in column order); with an id,
+        a pair's id is ``id:x~y``."""
+        kind, symbol = ("pearson", "r") if self.method == "pearson" else ("spearman", "rs")
+        notes = [Note("missing", "Pairwise-complete observations; n per pair.")]
+        if self.adjust:
+            notes.append(Note("correction", f"p values {ADJUST_NAMES[self.adjust]}-adjusted over {len(self.names) * (len(self.names) - 1) // 2} pairs."))
+        out = []
+        k = len(self.names)
+        for i in range(k):
+            for j in range(i + 1, k):
+                n = int(self.n[i, j])
+                x, y = self.names[i], self.names[j]
+                out.append(
+                    Result(
+                        kind=kind,
+                        statistic=Statistic(symbol, float(self.r[i, j]), (n - 2,)),
+                        p=float(self.p[i, j]),
+                        n=n,
+                        effects=(EffectSize(symbol, float(self.r[i, j]), Interval(self.level, float(self.low[i, j]), float(self.high[i, j])), method="Fisher z"),),
+                        variables=(Variable(x, self.labels.get(x, x), "x"), Variable(y, self.labels.get(y, y), "y")),
+                        notes=tuple(notes),
+                        details={"p_adjusted": ADJUST_NAMES[self.adjust]} if self.adjust else {},
+                        provenance=self.provenance,
+                        id=f"{self.id}:{x}~{y}" if self.id else None,
+                    )
+                )
+        return out
+
+    def to_dict(self) -> dict[str, Any]:
+        out: dict[str, Any] = {"schema": SCHEMA, "version": SCHEMA_VERSION, "kind": self.kind}
+        if self.id:
+            out["id"] = self.id
+        out.update(names=list(self.names), method=self.method, level=self.level)
+        if self.adjust:
+            out["adjust"] = self.adjust
+        if self.labels:
+            out["labels"] = dict(self.labels)
+        for name in ("r", "p", "low", "high", "n"):
+            out[name] = _array_out(getattr(self, name))
+        if self.provenance is not None:
+            out["provenance"] = _provenance_out(self.provenance)
+        return out
+
+    @classmethod
+    def from_dict(cls, data: Mapping[str, Any], *, where: str = "record") -> "CorrelationMatrix":
+        data = _header(data, where, "correlation_matrix")
+        kwargs: dict[str, Any] = {"adjust": None, "labels": {}}
+        for key, value in data.items():
+            if key in ("r", "p", "low", "high", "n"):
+                value = _array_in(f"{where}.{key}", value)
+            elif key == "names":
+                value = tuple(str(v) for v in _list(f"{where}.names", value))
+            elif key == "provenance":
+                value = _provenance_in(f"{where}.provenance", value)
+            elif key == "labels":
+                value = dict(_mapping(f"{where}.labels", value))
+            kwargs[key] = value
+        made = _object(cls, where, kwargs)
+        k = len(made.names)
+        for name in ("r", "p", "low", "high", "n"):
+            if getattr(made, name).shape != (k, k):
+                raise RecordError(f"{where}.{name}", f"expected {k} × {k} numbers for {k} variables")
+        if made.adjust is not None and made.adjust not in ADJUST_NAMES:
+            raise RecordError(f"{where}.adjust", f"{made.adjust!r} is not one of {', '.join(ADJUST_NAMES)}")
+        return made
+
+
+# --------------------------------------------------------------------------
+# JSON helpers
+
+
+def _array_out(a: Any) -> Any:
+    """A numpy array as nested lists; NaN as None, integral arrays as ints."""
+    if a is None:
+        return None
+    if getattr(a, "dtype", None) is not None and a.dtype.kind in "iub":
+        return a.tolist()
+    return [_array_out(v) for v in a] if getattr(a, "ndim", 0) > 1 else [None if math.isnan(v) else v for v in a.tolist()]
+
+
+def _array_in(where: str, value: Any) -> "np.ndarray":
+    import numpy as np
+
+    if value is None:
+        return None  # type: ignore[return-value]
+    try:
+        out = np.array(value, dtype=float)  # None -> nan
+    except (TypeError, ValueError):
+        raise RecordError(where, "expected numbers (a list, or a list of lists)") from None
+    if out.ndim == 0 or np.isinf(out).any():
+        raise RecordError(where, "expected a list of finite numbers")
+    if all(type(v) is int for v in _flat(value)):  # written from an integer array: read back as one
+        return out.astype(np.int64)
+    return out
+
+
+def _flat(value: Any) -> list[Any]:
+    return [x for v in value for x in _flat(v)] if isinstance(value, list) else [value]
+
+
+def _plain(obj: Any) -> dict[str, Any]:
+    return {f.name: getattr(obj, f.name) for f in fields(obj) if getattr(obj, f.name) not in (None, False)}
+
+
+def _provenance_out(p: Provenance) -> dict[str, Any]:
+    out = {"source": p.source}
+    if p.versions:
+        out["versions"] = dict(p.versions)  # type: ignore[assignment]
+    return out
+
+
+def _provenance_in(where: str, value: Any) -> Provenance:
+    value = _mapping(where, value)
+    made = _object(Provenance, where, dict(value))
+    made.validate(where)
+    return made
+
+
+def _header(data: Any, where: str, kind: str) -> dict[str, Any]:
+    data = dict(_mapping(where, data))
+    if data.pop("schema", SCHEMA) != SCHEMA:
+        raise RecordError(f"{where}.schema", f"not {SCHEMA!r}")
+    version = data.pop("version", SCHEMA_VERSION)
+    if not isinstance(version, int) or isinstance(version, bool) or version > SCHEMA_VERSION:
+        raise RecordError(f"{where}.version", f"{version!r} is not a schema version this release reads")
+    if data.pop("kind", kind) != kind:
+        raise RecordError(f"{where}.kind", f"not {kind!r}")
+    return data
+
+
+def _mapping(where: str, value: Any) -> Mapping[str, Any]:
+    if not isinstance(value, Mapping):
+        raise RecordError(where, f"expected an object, got {type(value).__name__}")
+    return value
+
+
+def _list(where: str, value: Any) -> list[Any]:
+    if not isinstance(value, list):
+        raise RecordError(where, f"expected a list, got {type(value).__name__}")
+    return value
+
+
+def _object(cls: type, where: str, kwargs: Mapping[str, Any]) -> Any:
+    known = {f.name for f in fields(cls) if f.init}
+    unknown = sorted(set(kwargs) - known)
+    if unknown:
+        raise RecordError(f"{where}.{unknown[0]}", "not a field of this record")
+    try:
+        return cls(**kwargs)
+    except TypeError as exc:
+        raise RecordError(where, f"incomplete: {exc}") from None
