@@ -16,7 +16,7 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
     r.add_argument("files", nargs="+", metavar="FILE", help="JSON files of records (from several authors, say)")
     style_options(r)
     r.add_argument("--id", action="append", default=[], metavar="ID", dest="ids",
-                   help="render only this record, or every record of this analysis (repeatable; see 'statsetter records FILE')")
+                   help="render only this record and its parts (model gives model, model:age ...; repeatable; see 'statsetter records FILE')")
     r.add_argument("--table", choices=("auto", "results", "regression", "anova"), help="lay the records out as one table instead: "
                    "auto (by the records), a results table (a row per record), a regression's coefficients table or an ANOVA's table; "
                    "--out FILE.docx writes Word")
@@ -25,8 +25,9 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
 
 
 def select(records, ids):  # type: ignore[no-untyped-def]
-    """The records named by ``ids``, in the order given: an exact id, or an
-    analysis id for all of its records. An unknown id is an error listing close ones."""
+    """The records named by ``ids``, in the order given: ``model`` gives the
+    record ``model`` and all of its parts (``model:age`` ...), ``model:age``
+    that one. An unknown id is an error listing close ones."""
     if not ids:
         return records
     import difflib
@@ -34,7 +35,7 @@ def select(records, ids):  # type: ignore[no-untyped-def]
     out = []
     known = [str(r.id) for r in records if r.id]
     for rid in ids:
-        found = [r for r in records if r.id == rid] or [r for r in records if (r.id or "").split(":", 1)[0] == rid]
+        found = [r for r in records if r.id == rid or (r.id or "").startswith(rid + ":")]
         if not found:
             close = difflib.get_close_matches(rid, known, n=3, cutoff=0.6)
             raise InputError(f"--id: no record {rid!r}" + (f"; did you mean {', '.join(close)}?" if close else "; list them with 'statsetter records FILE'"))
