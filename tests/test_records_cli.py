@@ -76,3 +76,17 @@ def test_plan_former_keys_warn_with_their_line(tmp_path, penguins, capsys):
     assert "plan.toml, line 14: 'by' is now 'group'" in err
     text = (tmp_path / "out" / "r.md").read_text(encoding="utf-8")
     assert "Holm" in text and "by Sex" in text.replace("by sex", "by Sex")
+
+
+def test_a_chapter_marker_names_a_part_by_its_id(tmp_path, records_file):
+    # [[model:term]] and [[matrix:x~y]] are markers like any other: filled from the record of that id
+    import docx
+
+    chapter = tmp_path / "chapter.docx"
+    d = docx.Document()
+    d.add_paragraph("Flipper length predicted mass, [[mass:flipper_length_mm]]; bills: [[bills:bill_length_mm~bill_depth_mm]].")
+    d.save(chapter)
+    out = tmp_path / "filled.docx"
+    assert main(["fill", str(chapter), "--records", str(records_file), "--out", str(out)]) == 0
+    text = docx.Document(out).paragraphs[0].text
+    assert "[[" not in text and "B = " in text and "r(340) = −.24" in text
