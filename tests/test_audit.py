@@ -152,7 +152,7 @@ def test_style_checks_follow_the_style():
     assert "spacing" in codes("t(38)=2.14, p=.039")
     assert "hyphen-minus" in codes("t(38) = -2.14, p = .039")
     assert "decimals" in codes("t(38) = 2.1, p = .04")
-    assert "decimals" not in codes("t(38) = 1.99, p = .0496")  # the extra digit keeps p below alpha
+    assert "decimals" in codes("t(38) = 1.99, p = .0496")  # APA: three decimals at most; the suggestion keeps the decision
     # in AMA 11, P has two decimals and a capital P is right
     assert codes("t(38) = 2.14, P = .04", "ama11") == []
     for code in ("leading-zero", "p-threshold", "spacing", "italics", "decimals"):

@@ -67,10 +67,11 @@ GOLDEN = {
         '<i>p</i> = .028, OR = 3.45, 95% CI [1.10, 10.84]',
         "Fisher's exact test of exposure and outcome (N = 60) gave p = .028, OR = 3.45, 95% CI [1.10, 10.84].",
     ),
-    # REPORTING-RULES Statistics in text: F(2, 97) = 4.51, p = .013, η² = .09 (APA 7 ch. 6)
+    # REPORTING-RULES Statistics in text: F(2, 97) = 4.51, p = .013, η² = .09 (APA 7 ch. 6); the serial comma in a list of
+    # three or more, "B (…), and C (…)" (REPORTING-RULES Wording, APA 7 §6.3)
     'anova_oneway': (
         '<i>F</i>(2, 97) = 4.51, <i>p</i> = .013, η<sup>2</sup> = .09, ω<sup>2</sup> = .07',
-        'A one-way analysis of variance of the score across the groups gave F(2, 97) = 4.51, p = .013, η² = .09, ω² = .07. Group means were A (M = 3.10, SD = 1.00, n = 33), B (M = 3.50, SD = 1.10, n = 33) and C (M = 3.80, SD = 0.90, n = 34).',
+        'A one-way analysis of variance of the score across the groups gave F(2, 97) = 4.51, p = .013, η² = .09, ω² = .07. Group means were A (M = 3.10, SD = 1.00, n = 33), B (M = 3.50, SD = 1.10, n = 33), and C (M = 3.80, SD = 0.90, n = 34).',
     ),
     # REPORTING-RULES Symbols: η²p with subscript p, real super/subscript (APA 7 §6.45)
     'anova_term': (

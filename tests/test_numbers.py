@@ -103,10 +103,13 @@ def test_minus_sign(apa):
         (0.0004, ("<", ".001")),  # never p = .000
         (0.001, ("=", ".001")),
         (0.5, ("=", ".500")),
-        (0.04996, ("=", ".04996")),  # .050 would read as not below .05: digits are added
-        (0.0496, ("=", ".0496")),
+        (0.04996, ("<", ".05")),  # .050 would read as not below .05: the threshold keeps the decision (docs/reporting-rules.md)
+        (0.0496, ("<", ".05")),
+        (0.0494, ("=", ".049")),
         (0.05, ("=", ".050")),
-        (1.0, ("=", "1.000")),
+        (0.9994, ("=", ".999")),
+        (0.9996, (">", ".999")),  # never p = 1.000 (docs/reporting-rules.md, p values)
+        (1.0, (">", ".999")),
     ],
 )
 def test_p_apa(apa, p, expected):
@@ -120,7 +123,8 @@ def test_p_apa(apa, p, expected):
         (0.0049, ("=", ".005")),  # three digits below .01
         (0.0004, ("<", ".001")),
         (0.995, (">", ".99")),
-        (0.0496, ("=", ".0496")),  # AMA: more digits where rounding would cross .05
+        (0.0496, ("<", ".05")),  # AMA: one more digit where two would cross .05 (.050 still does), then P < .05
+        (0.0494, ("=", ".049")),  # the one more digit keeps it
     ],
 )
 def test_p_ama(ama, p, expected):
@@ -128,8 +132,9 @@ def test_p_ama(ama, p, expected):
 
 
 def test_p_other_alpha(apa):
-    # at alpha = .01, p = .0096 must not print as .010
-    assert apa.p(0.0096, 0.01) == ("=", ".0096")
+    # at alpha = .01, p = .0096 must not print as .010: p < .01
+    assert apa.p(0.0096, 0.01) == ("<", ".01")
+    assert apa.p(0.0094, 0.01) == ("=", ".009")
 
 
 # -- decision-preserving CI limits (REPORTING-RULES, Numbers: the CI case is practice)
@@ -247,7 +252,7 @@ def test_digit_rounding_on_ties(whole, frac, decimals):
 def test_p_without_a_floor_in_exponent_notation(tmp_path):
     # repr gives 3e-05: the exact decimals still decide (no floor in this style)
     path = tmp_path / "nofloor.toml"
-    path.write_text('name = "nofloor"\nextends = "apa7"\n[p]\nfloor = 0\n', encoding="utf-8")
+    path.write_text('name = "nofloor"\nextends = "apa7"\n[p]\nfloor = 0\nnear_alpha_digits = 17\n', encoding="utf-8")
     num = numbers_for(load_style(path))
     assert num.p(3e-05) == ("=", ".00003")
     assert num.p(0.0) == ("<", ".001")
@@ -260,7 +265,7 @@ def test_p_without_a_floor_in_exponent_notation(tmp_path):
 
 @pytest.mark.parametrize(
     "value, expected",
-    [(-0.003, MINUS + "0.003"), (0.0046, "0.005"), (0.00049, "0.0005"), (0.004999, "0.005"), (0.12, "0.12"), (0.0, "0.00"), (1e-9, "0.00")],
+    [(-0.003, MINUS + "0.003"), (0.0046, "0.005"), (0.00049, "0.0005"), (0.004999, "0.005"), (0.12, "0.12"), (0.0, "0.00"), (1e-9, "0.000000001"), (4e-13, "0.00")],
 )
 def test_never_zero_quantities(apa, value, expected):
     assert apa.number(value, "B") == expected and apa.number(value, "SE") == expected
@@ -276,3 +281,31 @@ def test_never_zero_property(value):
     assert shown != 0, (value, text)
     decimals = len(text.split(".")[1])
     assert abs(shown - Decimal(repr(value))) <= Decimal(1).scaleb(-decimals) / 2
+
+
+# -- the small rules of issue 17: a ratio's limit, never-zero everywhere, the serial comma
+
+
+def test_a_ratio_limit_never_prints_as_zero(apa):
+    # an odds ratio's CI limit of 0.001 is not "0.00": as with 1, digits are added (REPORTING-RULES Numbers; practice)
+    assert apa.interval(0.001, 3.2, "OR", null=1.0) == ("0.001", "3.20")
+    assert apa.interval(0.0004, 0.02, "OR", null=1.0) == ("0.0004", "0.02")
+    assert apa.interval(0.25, 3.2, "OR", null=1.0) == ("0.25", "3.20")
+
+
+def test_never_zero_holds_in_format_tables_and_sentences(capsys):
+    from statsetter.cli import main
+
+    assert main(["format", "coef", "--stat", "5", "--df", "100", "--estimate", "0.0000004", "--estimate-ci=0.0000001,0.0000007"]) == 0
+    assert capsys.readouterr().out.startswith("B = 0.0000004, 95% CI [0.0000001, 0.0000007]")
+
+
+def test_serial_comma_is_a_style_choice(tmp_path):
+    from kind_examples import EXAMPLES
+    from statsetter import render
+
+    apa = render(EXAMPLES["anova_oneway"], "sentence", "apa7").plain()
+    assert "n = 33), and C (" in apa  # APA 7 §6.3
+    path = tmp_path / "noserial.toml"
+    path.write_text('name = "noserial"\nextends = "apa7"\n[wording]\nserial_comma = false\n', encoding="utf-8")
+    assert "n = 33) and C (" in render(EXAMPLES["anova_oneway"], "sentence", load_style(path)).plain()

@@ -510,7 +510,7 @@ def _recomputed_p(rep: Reported, alpha: float) -> float | None:
     if bound is not None and 0 < bound <= 0.001:
         return math.nextafter(bound, 0.0)
     if rep.p is not None and rep.p.op in (">", "≥") and rep.p.number is not None and 0.99 <= rep.p.number.value < 1:
-        return math.nextafter(rep.p.number.value, 1.0)  # "P > .99" stays above .99
+        return math.nextafter((rep.p.number.value + 1) / 2, 1.0)  # "P > .99" stays above .99 and above what rounds to it
     return None
 
 

@@ -117,7 +117,7 @@ def _format_record(ns: argparse.Namespace):  # -> Result
     estimate = None
     if ns.estimate is not None:
         ci = Interval(level, *_pair(ns.estimate_ci, "--estimate-ci")) if ns.estimate_ci else None
-        name = {"fisher_exact": "OR"}.get(kind, "estimate")
+        name = {"fisher_exact": "OR", "linear_coefficient": "B", "logistic_coefficient": "B"}.get(kind, "estimate")
         estimate = Estimate(name, ns.estimate, ci=ci, ratio=name == "OR")
     variables = []
     for item in ns.label:

@@ -82,9 +82,10 @@ class Helpers:
         self._ci_pattern_neg: str = _escape_text(ci.get("pattern_negative", "") or ci["pattern"])
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
+        self._serial: bool = bool(style.wording.get("serial_comma", True))
 
     _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible paren".split()
-    _PLAIN = "var cap verdict significant direction_word null".split()
+    _PLAIN = "var cap verdict significant direction_word null and_next predictors".split()
 
     def raw(self) -> dict[str, Any]:
         """The names a compiled stats form sees: the markup helpers as they
@@ -267,6 +268,26 @@ class Helpers:
         return self._join.join([p for p in parts if p])
 
     # wording ----------------------------------------------------------------
+
+    def and_next(self, loop: Any) -> str:
+        """What follows an item of a list in a sentence, given the template's
+        ``loop``: ", " between items, " and " before the last of two, ", and "
+        before the last of three or more with the style's serial comma."""
+        if loop.last:
+            return ""
+        if loop.revindex == 2:
+            return ", and " if self._serial and loop.length > 2 else " and "
+        return ", "
+
+    def predictors(self, r: Result) -> str:
+        """A model's predictors listed in a sentence, from its variables (or
+        the list its details give)."""
+        names = [v.display for v in r.variables if v.role == "predictor"]
+        if not names:
+            return str(r.details.get("predictors", ""))
+        if len(names) < 3:
+            return " and ".join(names)
+        return ", ".join(names[:-1]) + (", and " if self._serial else " and ") + names[-1]
 
     def var(self, r: Result, role: str, fallback: str = "") -> str:
         v = r.variable(role)

@@ -28,7 +28,7 @@ __all__ = ["Numbers", "round_half_up", "numbers_for"]
 _CTX = Context(prec=400, rounding=ROUND_HALF_UP)  # every float to 40 decimals, exactly
 _QUANTUM = [Decimal(1).scaleb(-k) for k in range(0, 40)]
 _MAX_DECIMALS = 30
-_NEVER_ZERO_MAX = 6  # digits added for a never-zero quantity stop here
+_NEVER_ZERO_MAX = 12  # digits added for a never-zero quantity stop here (a value below 1e-12 is rescaled by the author)
 
 
 def round_half_up(value: float, decimals: int) -> Decimal:
@@ -159,6 +159,7 @@ class Numbers:
         self._p_extra_below: float = p.get("extra_digit_below", 0) or 0
         self._p_floor: float = p.get("floor", 0) or 0
         self._p_ceiling: float = p.get("ceiling", 0) or 0
+        self._p_near_alpha: int | None = p.get("near_alpha_digits")  # None: add digits until the decision reads right
         self._alpha: float = style.wording.get("alpha", 0.05)
         self._qdec["percent"] = self._qdec.get("percent", style.percent_decimals)
         self._qdec["p"] = self._p_decimals
@@ -251,8 +252,8 @@ class Numbers:
         if floor and value < floor and floor <= alpha:
             return "<", self._compose(exact_digits(floor), True, False)
         ceiling = self._p_ceiling
-        if ceiling and value > ceiling:
-            return ">", self._compose(exact_digits(ceiling), True, False)
+        if ceiling and value > ceiling and not _equals(rounded_digits(value, self._p_decimals), ceiling):
+            return ">", self._compose(exact_digits(ceiling), True, False)  # p = .9996 is p > .999, never p = 1.000
         decimals = self._p_decimals
         if self._p_extra_below and value < self._p_extra_below:
             decimals += 1
@@ -262,15 +263,20 @@ class Numbers:
         rounded = rounded_digits(value, decimals)
         zero = _is_zero(rounded[1], rounded[2])
         if (below and _at_least(rounded, alpha)) or (zero and value > 0):
-            # the decision (or a non-zero p) would be lost: add digits, up to those the value has
+            # the decision (or a non-zero p) would be lost: add digits, up to those the value has, or up
+            # to the style's near_alpha_digits and then say "p < alpha"
             exact = exact_digits(value)
             limit = held if held is not None else min(max(len(exact[2]), decimals), _MAX_DECIMALS)
+            if self._p_near_alpha is not None and held is None and not zero:
+                limit = min(limit, decimals + self._p_near_alpha)
             while decimals < limit:
                 decimals += 1
                 rounded = round_digits(exact, decimals)
                 zero = _is_zero(rounded[1], rounded[2])
                 if not ((below and _at_least(rounded, alpha)) or (zero and value > 0)):
                     break
+        if below and _at_least(rounded, alpha) and self._p_near_alpha is not None and held is None:
+            return "<", self._compose(exact_digits(alpha), True, False)
         if zero:
             # only reachable without a floor (or a held precision): say "<"
             unit = (False, "0", "0" * (decimals - 1) + "1") if decimals else (False, "1", "")
@@ -293,6 +299,12 @@ class Numbers:
         if held is not None:
             decimals = min(decimals, held)
         rounded = rounded_digits(value, decimals)
+        if null == 1.0 and value > 0 and _is_zero(rounded[1], rounded[2]):
+            # a ratio's limit is never 0 (as it is never 1 unless it is): round at its first significant digit
+            decimals = max(decimals + 1, -Decimal(repr(float(value))).adjusted())
+            if held is not None:
+                decimals = min(decimals, held)
+            rounded = rounded_digits(value, decimals)
         if value != null and _equals(rounded, null):
             # round at the first significant digit of the distance from the null
             distance = Decimal(repr(float(value))) - _decimal_of(null)

@@ -169,6 +169,7 @@ SCHEMA: dict[str, Any] = {
         "extra_digit_below": _float(0, 0.5),
         "floor": _float(0, 0.5),
         "ceiling": _float(0, 1),
+        "near_alpha_digits": _int(0, 17),
         "table_stars": _fraction_list,
     },
     "ci": {
@@ -180,6 +181,7 @@ SCHEMA: dict[str, Any] = {
     "wording": {
         "significance": _bool,
         "alpha": _float(0.0001, 0.5),
+        "serial_comma": _bool,
     },
     "symbols": {_ANY: _markup},
     "tables": {
