@@ -16,7 +16,7 @@ from scipy import stats
 from statsetter import CorrelationMatrix, Description, Result, render, table
 from statsetter.analyses import (
     chi_square, correlate, correlation_matrix, cronbach_alpha, describe, fisher_exact, kendall, linear_regression, mann_whitney,
-    pearson, spearman, t_independent, t_paired, wilcoxon_signed_rank,
+    pearson, spearman, t_independent, t_one_sample, t_paired, wilcoxon_signed_rank,
 )
 from statsetter.errors import FormerUse, InputError
 from statsetter.records import Records, dump_records, load_records, name_records
@@ -180,3 +180,17 @@ def test_table_lays_out_any_record(penguins):
     with pytest.raises(InputError, match="no records"):
         table([])
     assert isinstance(t.main, Result)
+
+
+def test_one_sample_test_of_one_condition_in_long_data():
+    # the drug-2 condition of R's sleep data against 0: R's t.test(extra[group == 2]) gives t = 3.6799158948 (Rscript here)
+    long = t_one_sample(SLEEP, "extra", 0, subject="ID", within="group", condition="2").main
+    direct = stats.ttest_1samp(SLEEP.extra[10:], 0)
+    assert long.statistic.value == pytest.approx(direct.statistic, rel=1e-12) and long.n == 10
+    assert long.statistic.value == pytest.approx(3.6799158948, rel=1e-10)
+    with pytest.raises(InputError, match="condition: long data need"):
+        t_one_sample(SLEEP, "extra", 0, within="group")
+    with pytest.raises(InputError, match="group: condition '3' is not among 1, 2"):
+        t_one_sample(SLEEP, "extra", 0, within="group", condition="3")
+    with pytest.raises(InputError, match="subject 1 has more than one row"):
+        t_one_sample(pd.concat([SLEEP, SLEEP.iloc[[10]]]), "extra", 0, subject="ID", within="group", condition="2")

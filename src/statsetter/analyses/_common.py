@@ -4,7 +4,7 @@ from __future__ import annotations
 
 from typing import TYPE_CHECKING, Any, Mapping, Sequence
 
-from ..coding import _code_key, categories, category_text, column, find_categories
+from ..coding import _code_key, categories, category_text, column, find_categories, find_category
 from ..errors import InputError
 from ..records import Note, Provenance, Variable
 
@@ -201,3 +201,22 @@ def paired_columns(test, df, first, second, outcome, subject, within, conditions
             raise InputError(f"{key}: long data need outcome, subject and within")
     frame, a, b, named, label = long_pairs(df, outcome, subject, within, conditions, labels)
     return frame, a, b, named, outcome_label or label
+
+
+def one_condition(df, outcome, subject, within, condition):  # type: ignore[no-untyped-def]
+    """The rows of one ``condition`` of ``within`` in long data (all rows when
+    neither is given); with ``subject``, a subject with two rows there is an error."""
+    if within is None and condition is None:
+        if subject is not None:
+            raise InputError("subject: long data also need within and the condition to test")
+        return df
+    if within is None or condition is None:
+        raise InputError(f"{'condition' if within is not None else 'within'}: long data need within and the condition to test")
+    column(df, within)
+    chosen = find_category(within, condition, categories(df[within].dropna()), role="condition")
+    rows = df[df[within] == chosen]
+    if subject is not None:
+        twice = rows[subject].duplicated(keep=False) & rows[subject].notna()
+        if twice.any():
+            raise InputError(f"{subject}: subject {category_text(rows[subject][twice].iloc[0])} has more than one row in condition {category_text(chosen)} of {within}")
+    return rows

@@ -213,13 +213,20 @@ def t_one_sample(
     outcome: str,
     mu: float,
     *,
+    subject: str | None = None,
+    within: str | None = None,
+    condition: object | None = None,
     level: float = 0.95,
     alternative: str = "two-sided",
     labels: Mapping[str, str] | None = None,
 ) -> Result:
-    """One-sample t test of ``outcome`` against ``mu``; d = (M − mu) / SD with the noncentral-t CI."""
+    """One-sample t test of ``outcome`` against ``mu``; d = (M − mu) / SD with
+    the noncentral-t CI. In long data (a row per subject and condition), name
+    ``within`` and the ``condition`` to test (``subject`` checks that each
+    subject has one row in it)."""
     from scipy import stats
 
+    df = c.one_condition(df, outcome, subject, within, condition)
     data, missing = c.listwise(df, [outcome])
     a = c.numeric(data, outcome).to_numpy()
     n = len(a)
