@@ -113,7 +113,7 @@ def test_regression_tables_against_the_formula_api(penguins):
         assert (cells[2], cells[3]) == num.interval(ci.loc[term, 0], ci.loc[term, 1], "B")
         assert cells[5] == num.number(ref.tvalues[term], "t")
         assert cells[6] == "< .001" or cells[6] == num.p(ref.pvalues[term])[1]
-    note = table.general_note.text
+    note = table.general_note.text.replace("\u00a0", " ")
     assert f"N = {int(ref.nobs)}." in note and "LL = lower limit" in note and f"F(2, {int(ref.df_resid)})" in note
 
     model, *coefs = logistic_regression(penguins, "sex", ["bill_depth_mm", "flipper_length_mm"])

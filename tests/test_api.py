@@ -194,3 +194,11 @@ def test_one_sample_test_of_one_condition_in_long_data():
         t_one_sample(SLEEP, "extra", 0, within="group", condition="3")
     with pytest.raises(InputError, match="subject 1 has more than one row"):
         t_one_sample(pd.concat([SLEEP, SLEEP.iloc[[10]]]), "extra", 0, subject="ID", within="group", condition="2")
+
+
+def test_the_correlation_table_names_its_adjustment(penguins):
+    # the procedure by its name, not the keyword ("Holm", not "holm"), with the number of comparisons
+    m = correlation_matrix(penguins, ["bill_length_mm", "bill_depth_mm", "body_mass_g"], adjust="holm").main
+    assert "p values Holm-adjusted for 3 comparisons." in table(m).general_note.plain()
+    bh = correlation_matrix(penguins, ["bill_length_mm", "bill_depth_mm", "body_mass_g"], adjust="fdr_bh").main
+    assert "Benjamini–Hochberg-adjusted" in table(bh).general_note.plain()

@@ -25,7 +25,7 @@ def test_format_t(capsys):
 def test_format_computes_p(capsys):
     # scipy.stats.t: two-sided p of t(38) = 2.14 is 0.0388 -> .039
     assert main(["format", "t", "--stat", "2.14", "--df", "38", "--to", "md"]) == 0
-    assert capsys.readouterr().out == "*t*(38) = 2.14, *p* = .039\n"
+    assert capsys.readouterr().out == "*t*(38)\u00a0=\u00a02.14, *p*\u00a0=\u00a0.039\n"  # no-break spaces inside a statistic (APA style profile)
 
 
 def test_format_into_word(tmp_path, capsys):
@@ -69,7 +69,7 @@ def test_render_files(tmp_path, capsys):
     b.write_text(dump_records([EXAMPLES["chi2_independence"]]))
     out = tmp_path / "out.md"
     assert main(["render", str(a), str(b), "--to", "md", "--out", str(out)]) == 0
-    text = out.read_text()
+    text = out.read_text().replace("\u00a0", " ")  # the no-break spaces inside statistics read as spaces here
     assert "*r*(98) = .32" in text and "χ^2^(2, *N* = 200) = 9.87" in text
 
 

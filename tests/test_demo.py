@@ -38,7 +38,7 @@ def test_every_output_exists(run):
     for name in ("results.docx", "results.md", "results.html", "results.tex", "records.json", "chapter-with-markers.docx", "chapter-filled.docx", "audit-report.json"):
         assert (out / name).stat().st_size > 0, name
     assert (run / "data" / "invented_driver_survey.csv").read_text(encoding="utf-8").startswith("# INVENTED DATA")
-    filled = "\n".join(p.text for p in docx.Document(str(out / "chapter-filled.docx")).paragraphs)
+    filled = "\n".join(p.text for p in docx.Document(str(out / "chapter-filled.docx")).paragraphs).replace("\u00a0", " ")
     assert "[[" not in filled
     assert "α = ." in filled and re.search(r"t\(\d+\.\d+\) = \d", filled) and len(docx.Document(str(out / "chapter-filled.docx")).tables) == 1
 
@@ -69,7 +69,7 @@ def test_markdown_output_passes_the_audit(run):
     entries = audit_file(run / "out" / "results.md")
     assert len(entries) >= 50  # the statistics of 22 analyses were found
     assert [(e.found, e.codes) for e in entries if e.codes] == []
-    symbols = {e.found.split("(")[0].split(" ")[0] for e in entries}
+    symbols = {e.found.split("(")[0].split()[0] for e in entries}
     assert {"t", "F", "χ²", "r", "rs", "τb", "H", "U", "T", "z"} <= symbols
 
 
@@ -116,8 +116,8 @@ def test_rerun_after_the_data_change_updates_everything(run, capsys):
     lines = data.read_text(encoding="utf-8").splitlines()
     data.write_text("\n".join(lines[:2] + lines[40:]) + "\n", encoding="utf-8")  # 38 drivers fewer
     assert cli(["run", str(run / "plan.toml")]) == 0
-    after_md = (run / "out" / "results.md").read_text(encoding="utf-8")
-    after_chapter = "\n".join(p.text for p in docx.Document(str(run / "out" / "chapter-filled.docx")).paragraphs)
+    after_md = (run / "out" / "results.md").read_text(encoding="utf-8").replace("\u00a0", " ")
+    after_chapter = "\n".join(p.text for p in docx.Document(str(run / "out" / "chapter-filled.docx")).paragraphs).replace("\u00a0", " ")
     assert after_md != before_md and "*N* = 202" in after_md and "*N* = 240" not in after_md
     assert after_chapter != before_chapter and "r(200) = " in after_chapter and "n = 202" in after_chapter
     assert "records.json" in capsys.readouterr().out

@@ -81,18 +81,18 @@ def test_fill_everywhere(chapter, tmp_path):
     d = docx.Document(str(out))
     first = d.paragraphs[0]
     assert first.text.startswith("Scores differed The score was higher")
-    assert first.text.endswith("as expected; see r(98) = .32, 95% CI [.13, .49], p = .001.")
+    assert first.text.replace("\u00a0", " ").endswith("as expected; see r(98) = .32, 95% CI [.13, .49], p = .001.")
     assert first.runs[0].text == "Scores differed " and not first.runs[0].bold  # surrounding formatting kept
     assert [r.text for r in first.runs if r.italic][:3] == ["M", "SD", "n"]
-    assert d.tables[0].cell(0, 0).text == "r(98) = .32, 95% CI [.13, .49], p = .001"
+    assert d.tables[0].cell(0, 0).text.replace("\u00a0", " ") == "r(98) = .32, 95% CI [.13, .49], p = .001"
     # [[id|table]]: a results table after the paragraph, the marker text gone
     assert d.paragraphs[2].text == "Table 2 shows it: "
     t = d.tables[1]
-    assert [c.text for c in t.rows[1].cells] == ["score_diff", "t(38) = 2.14", ".039", "d = 0.68", "[0.04, 1.31]"]  # the p symbol is in the head (practice: a column head names its quantity)
-    assert "r(98) = .32" in d.sections[0].header.paragraphs[0].text
-    assert "r(98) = .32" in d.sections[0].footer.paragraphs[0].text
+    assert [c.text.replace("\u00a0", " ") for c in t.rows[1].cells] == ["score_diff", "t(38) = 2.14", ".039", "d = 0.68", "[0.04, 1.31]"]  # the p symbol is in the head (practice: a column head names its quantity)
+    assert "r(98)\u00a0=\u00a0.32" in d.sections[0].header.paragraphs[0].text
+    assert "r(98)\u00a0=\u00a0.32" in d.sections[0].footer.paragraphs[0].text
     footnotes = zipfile.ZipFile(out).read("word/footnotes.xml").decode()
-    assert "[[corr]]" not in footnotes and "= .32" in footnotes
+    assert "[[corr]]" not in footnotes and "=\u00a0.32" in footnotes
     text = pdf_text(out)
     assert "t(38) = 2.14" in text.replace("\n", " ") and "Unknown [[nope]] stays." in text
 

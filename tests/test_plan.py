@@ -64,7 +64,7 @@ def test_plan_runs_and_matches_the_analysis(folder, capsys):
     assert main(["run", str(path)]) == 0
     out = capsys.readouterr().out
     assert "results.md" in out and (folder / "out" / "results.docx").exists()
-    md = (folder / "out" / "results.md").read_text(encoding="utf-8")
+    md = (folder / "out" / "results.md").read_text(encoding="utf-8").replace("\u00a0", " ")
     assert "Welch's *t*(323.90) = −8.55" in md and "**Table 1**" in md and "qualified statistician" in md
     assert main(["run", str(path), "--format", "json"]) == 0
     assert json.loads(capsys.readouterr().out)[0]["id"] == "mass_by_sex"

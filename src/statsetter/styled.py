@@ -228,8 +228,10 @@ class StyledText:
         return self.markup()
 
     def plain(self) -> str:
-        """Plain text: Unicode superscripts and subscripts where they exist."""
-        return "".join([_plain_piece(text, styles) if styles else text for text, styles in self.segments()])
+        """Plain text: Unicode superscripts and subscripts where they exist; the
+        no-break spaces that keep a statistic together elsewhere are plain
+        spaces here (a terminal does not break lines at them)."""
+        return "".join([_plain_piece(text, styles) if styles else text for text, styles in self.segments()]).replace("\u00a0", " ")
 
     def markdown(self) -> str:
         """pandoc Markdown: ``*t*``, ``R^2^``, ``r~s~``."""
@@ -406,6 +408,8 @@ _LATEX = {
     "±": r"$\pm$",
     "<": r"\textless{}",
     ">": r"\textgreater{}",
+    "\u00a0": "~",  # the no-break space that keeps a statistic together
+    "\u202f": r"\,",  # a thin no-break space
 }
 _LATEX_RE = re.compile("|".join(re.escape(k) for k in _LATEX))
 

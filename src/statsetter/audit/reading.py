@@ -81,7 +81,7 @@ _TEX_GREEK = {f"\\{up}{name}": char for name, char in (
 _TEX_GREEK.update({"\\Delta": "Δ", "\\times": "×", "\\leq": "≤", "\\geq": "≥", "\\pm": "±", "\\le": "≤", "\\ge": "≥"})
 _TEX_MATH_WORD = re.compile("|".join(re.escape(k) for k in sorted(_TEX_GREEK, key=len, reverse=True)) + r"(?![A-Za-z])")
 _TEX_CHARS = {"\\textminus{}": "−", "\\textless{}": "<", "\\textgreater{}": ">", "\\%": "%", "\\&": "&", "\\_": "_", "\\#": "#",
-              "\\$": "$", "---": "—", "--": "–", "~": " "}
+              "\\$": "$", "---": "—", "--": "–", "~": "\u00a0", "\\,": "\u202f"}  # ~ and \, print no-break spaces
 _TEX_CHAR = re.compile("(" + "|".join(re.escape(k) for k in sorted(_TEX_CHARS, key=len, reverse=True)) + ")")
 _TEX_SUP = re.compile(r"\\textsuperscript\{([^{}]{1,8})\}")
 _TEX_SUB = re.compile(r"\\textsubscript\{([^{}]{1,8})\}")

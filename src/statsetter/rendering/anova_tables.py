@@ -48,7 +48,8 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
     outcome = records[0].variable("outcome")
     method = next((n.text for n in records[0].notes if n.kind == "method"), "")
     n = records[0].n
-    note = (StyledText.from_markup(f"{resolved.symbol('N')} = {num.integer(n)}. ") if n else StyledText()) + (f"{method} " if method else "")
+    nb = resolved.keep_together
+    note = (StyledText.from_markup(f"{resolved.symbol('N')}{nb}={nb}{num.integer(n)}. ") if n else StyledText()) + (f"{method} " if method else "")
     note = note + f"Outcome: {outcome.heading if outcome else 'the outcome'}."
     return TableModel(
         title=StyledText(title or f"Analysis of Variance of {outcome.display if outcome else 'the Outcome'}"),

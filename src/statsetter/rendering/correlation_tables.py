@@ -7,6 +7,7 @@ from __future__ import annotations
 
 from typing import TYPE_CHECKING
 
+from ..records import ADJUST_NAMES
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from ..styled import StyledText
@@ -40,7 +41,7 @@ def correlation_table(m: "CorrelationMatrix", style: "Style | str | None" = None
     sym = StyledText.from_markup(resolved.symbol(symbol)).plain()
     general = f"Pairwise-complete observations; n = {min(ns):,}" + (f" to {max(ns):,}." if len(ns) > 1 else ".") if ns else ""
     if m.adjust:
-        general += f" {p} values adjusted ({m.adjust})."
+        general += f" {p} values {ADJUST_NAMES.get(m.adjust, m.adjust)}-adjusted for {len(m.names) * (len(m.names) - 1) // 2} comparisons."
     return TableModel(
         title=StyledText(title or f"Correlations ({sym}) Between the Variables"),
         columns=tuple(Column(StyledText(str(j + 1))) for j in range(k)),

@@ -106,7 +106,8 @@ class _Layout:
     def stub(self, v: "VariableSummary", what: str) -> StyledText:
         alpha = ""
         if v.alpha is not None:
-            alpha = f" ({self.style.symbol('alpha')} = {self.num.number(v.alpha, 'alpha')})"
+            eq = f"{self.style.keep_together}={self.style.keep_together}"
+            alpha = f" ({self.style.symbol('alpha')}{eq}{self.num.number(v.alpha, 'alpha')})"
         return StyledText.from_markup(f"{escape_markup(v.label)}{alpha}, {what}")
 
     def variable_rows(self, v: "VariableSummary") -> list[Row]:
@@ -216,7 +217,8 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
     columns = []
     for j, name in enumerate(d.columns):
         sym = lay.sym("n") if d.group is not None and j < len(d.columns) - 1 else total_sym
-        columns.append(Column(StyledText.from_markup(f"{escape_markup(name)} ({sym} = {lay.num.integer(d.column_n[j])})")))
+        nb = resolved.keep_together  # "(n = 93)" never breaks in a head
+        columns.append(Column(StyledText.from_markup(f"{escape_markup(name)} ({sym}{nb}={nb}{lay.num.integer(d.column_n[j])})")))
     if any(v.test is not None for v in d.variables):
         columns.append(Column(StyledText.from_markup(resolved.symbol("p"))))
     if any(v.smd is not None for v in d.variables):

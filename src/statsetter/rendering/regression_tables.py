@@ -81,7 +81,8 @@ def regression_table(
         if ref and ref not in references:
             references.append(ref)
 
-    note = StyledText.from_markup(f"{resolved.symbol('N')} = {num.integer(model.n)}. ") if model is not None and model.n else StyledText()
+    nb = resolved.keep_together
+    note = StyledText.from_markup(f"{resolved.symbol('N')}{nb}={nb}{num.integer(model.n)}. ") if model is not None and model.n else StyledText()
     note = note + "CI = confidence interval; LL = lower limit; UL = upper limit."
     if not linear:
         note = note + " OR = odds ratio."

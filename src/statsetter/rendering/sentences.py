@@ -83,6 +83,12 @@ class Helpers:
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
         self._serial: bool = bool(style.wording.get("serial_comma", True))
+        # inside a statistic ("t(38) = 2.14", "p < .001", "95% CI [a, b]", "n = 93") the style's unbreakable space
+        nb = style.keep_together
+        self._nb = nb
+        self._eq = f"{nb}={nb}"
+        self._ci_pattern = self._ci_pattern.replace(" ", nb)
+        self._ci_pattern_neg = self._ci_pattern_neg.replace(" ", nb)
 
     _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible paren".split()
     _PLAIN = "var cap verdict significant direction_word null and_next predictors".split()
@@ -93,6 +99,7 @@ class Helpers:
         out: dict[str, Any] = {name: getattr(self, name) for name in self._MARKUP + self._PLAIN}
         out["join"] = self.join_raw
         out["lsep"] = self._join
+        out["eq"] = self._eq
         return out
 
     def globals(self) -> dict[str, Callable[..., Any]]:
@@ -102,6 +109,7 @@ class Helpers:
         out.update({name: getattr(self, name) for name in self._PLAIN})
         out["join"] = self.join
         out["lsep"] = Markup(self._join)
+        out["eq"] = Markup(self._eq)  # " = " inside a statistic, with the style's unbreakable spaces
         return out
 
     # symbols and plain numbers ------------------------------------------------
@@ -133,11 +141,11 @@ class Helpers:
         num = self.num
         inside = [num.df(d) for d in s.df]
         if n and r.n is not None:
-            inside.append(f"{self.sym('N')} = {num.integer(r.n)}")
+            inside.append(f"{self.sym('N')}{self._eq}{num.integer(r.n)}")
         head = self.sym(symbol or s.symbol)
         if inside:
             head = f"{head}({self._join.join(inside)})"
-        return f"{head} = {self._stat_value(r, s.symbol, s.value)}"
+        return f"{head}{self._eq}{self._stat_value(r, s.symbol, s.value)}"
 
     def _stat_value(self, r: Result, symbol: str, value: float) -> str:
         held = _held(r, "statistic.value")
@@ -155,8 +163,8 @@ class Helpers:
         if not label and r.details.get("p_adjusted"):  # a p adjusted for multiple comparisons says so
             label = f"{r.details['p_adjusted']}-adjusted"
         if label:
-            return f"{escape(label)} {self._p_symbol} {_OPS[op]} {text}"
-        return f"{self._p_symbol} {_OPS[op]} {text}"
+            return f"{escape(label)} {self._p_symbol}{self._nb}{_OPS[op]}{self._nb}{text}"
+        return f"{self._p_symbol}{self._nb}{_OPS[op]}{self._nb}{text}"
 
     def sided(self, r: Result) -> str:
         if r.alternative == "two-sided":
@@ -194,7 +202,7 @@ class Helpers:
 
     def _effect(self, r: Result, e: EffectSize, i: int, with_ci: bool) -> str:
         held = _held(r, f"effects[{i}].value") if r.precision else None
-        out = f"{self.sym(e.name)} = {self.num.number(e.value, e.name, held=held)}"
+        out = f"{self.sym(e.name)}{self._eq}{self.num.number(e.value, e.name, held=held)}"
         if with_ci and e.ci is not None:
             out += self._ci_attach + self._ci(r, e.ci, e.name, e.null, f"effects[{i}].ci" if r.precision else "")
         return out
@@ -214,7 +222,7 @@ class Helpers:
         q = quantity or e.name
         out = self.num.number(e.value, q, held=_held(r, "estimate.value"))
         if symbol:
-            out = f"{self.sym(symbol)} = {out}"
+            out = f"{self.sym(symbol)}{self._eq}{out}"
         if with_ci and e.ci is not None:  # the limits get the estimate's decimals (like values alike, APA 7 §6.36)
             shown = self.num.shown_decimals(e.value, q, _held(r, "estimate.value"))
             out += self._ci_attach + self._ci(r, e.ci, q, e.null, "estimate.ci", shown if shown > self.num.decimals_for(q) else None)
@@ -238,10 +246,10 @@ class Helpers:
                 q1, q3 = g.q1, g.q3
                 if q1 is None or q3 is None:
                     continue
-                text = f"[{self.num.number(q1, 'M')}{self.sep} {self.num.number(q3, 'M')}]"
+                text = f"[{self.num.number(q1, 'M')}{self.sep}{self._nb}{self.num.number(q3, 'M')}]"
             else:
                 text = self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))
-            out.append(f"{self.sym(symbol)} = {text}")
+            out.append(f"{self.sym(symbol)}{self._eq}{text}")
         return self._join.join(out)
 
     def paren(self, text: str) -> str:
@@ -317,7 +325,7 @@ class Helpers:
         """``compatible with no difference at α = .05``: how a null result is
         read, in our own words (never "no effect", never evidence of absence)."""
         said = "not statistically significant and " if self.significance_wording else ""
-        return f"{said}compatible with no {escape(noun)} at {self.sym('alpha')} = {self.num.number(r.alpha, 'alpha')}"
+        return f"{said}compatible with no {escape(noun)} at {self.sym('alpha')}{self._eq}{self.num.number(r.alpha, 'alpha')}"
 
     def verdict(self, r: Result) -> str:
         """``statistically significant`` / ``not statistically significant`` when

@@ -162,6 +162,7 @@ SCHEMA: dict[str, Any] = {
         "quantity_decimals": {_ANY: _int(0, 6)},
         "bounded": {"quantities": _text_list},
         "never_zero": {"quantities": _text_list},
+        "keep_together": _one_of("space", "nbsp", "thin"),
     },
     "p": {
         "symbol": _markup,
@@ -284,6 +285,12 @@ class Style:
     @property
     def bounded(self) -> frozenset[str]:
         return frozenset(self.data["numbers"]["bounded"]["quantities"])
+
+    @property
+    def keep_together(self) -> str:
+        """The space inside a statistic ("n = 93", "p < .001"): a no-break
+        space, a thin no-break space or a plain one, as ``[numbers] keep_together`` says."""
+        return {"space": " ", "nbsp": "\u00a0", "thin": "\u202f"}[self.data["numbers"].get("keep_together", "space")]
 
     @property
     def never_zero(self) -> frozenset[str]:
