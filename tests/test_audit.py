@@ -291,6 +291,7 @@ def test_table_output_says_the_caution(tmp_path, capsys):
     assert main(["audit", str(flawed)]) == 1
     out = " ".join(capsys.readouterr().out.split())
     assert "reason to look, not proof of an error" in out and "p-inconsistent" in out
+    assert "with their sources: docs/reporting-rules.md" in out
 
 
 def test_docx_italics_and_comments(tmp_path, capsys):

@@ -27,6 +27,8 @@ from .reading import Unit, read_units
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "annotate", "CAUTION"]
 
+RULES = "docs/reporting-rules.md in statsetter's source"
+
 CAUTION = (
     "A finding is a reason to look, not proof of an error: one-sided tests, corrections and rounding "
     "conventions differ. Check each against the analysis output, the journal's instructions and, where it matters, a statistician."
@@ -158,6 +160,7 @@ def print_table(entries: Sequence[Entry], *, everything: bool = False) -> None:
         used = sorted({c for e in entries for c in e.codes})
         for code in used:
             console.print(f"  {code}: {CODES[code][0]} [{CODES[code][1]}]", highlight=False)
+        console.print(f"  The rules in brackets, with their sources: {RULES}", highlight=False)
     console.print(CAUTION, style="italic")
 
 
