@@ -202,3 +202,23 @@ def test_the_correlation_table_names_its_adjustment(penguins):
     assert "p values Holm-adjusted for 3 comparisons." in table(m).general_note.plain()
     bh = correlation_matrix(penguins, ["bill_length_mm", "bill_depth_mm", "body_mass_g"], adjust="fdr_bh").main
     assert "Benjamini–Hochberg-adjusted" in table(bh).general_note.plain()
+
+
+def test_the_correlation_table_has_means_sds_and_the_right_n(penguins):
+    # after APA 7's sample correlation table: M and SD columns, lower triangle, no column holding only a dash;
+    # N when no value is missing, the pairwise n otherwise
+    cols = ["bill_length_mm", "bill_depth_mm", "body_mass_g"]
+    m = correlation_matrix(penguins, cols).main
+    laid = table(m)
+    assert [c.head.plain() for c in laid.columns] == ["M", "SD", "1", "2"]
+    first = penguins[cols[0]].dropna()
+    assert laid.rows[0].cells[0].plain() == f"{first.mean():.2f}" and laid.rows[0].cells[1].plain() == f"{first.std(ddof=1):.2f}"  # pandas
+    assert [c.plain() for c in laid.rows[0].cells[2:]] == ["—", ""] and laid.rows[2].cells[3].plain() == "−.47***"
+    assert "n = 342 for every pair" in laid.general_note.plain() and "observed values" in laid.general_note.plain()
+    complete = table(correlation_matrix(penguins.dropna(), cols).main)
+    assert complete.general_note.plain().startswith("N = 333.")
+    from statsetter.rendering.correlation_tables import correlation_table
+
+    assert [c.head.plain() for c in correlation_table(m, means=False).columns] == ["1", "2"]
+    back = load_records(dump_records([m]))[0]
+    assert (back.mean == m.mean).all() and back.rows == 344

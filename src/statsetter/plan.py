@@ -72,7 +72,7 @@ _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", 
 _TABLE = {
     "descriptives": {"kind", "id", "title", "variables", "group", "compare", "smd", "show", "weights", "suppress_below", "percent_of"},
     "results": {"kind", "id", "title", "analyses"},
-    "correlations": {"kind", "id", "title", "analysis"},
+    "correlations": {"kind", "id", "title", "analysis", "means"},
     "regression": {"kind", "id", "title", "analysis"},
     "anova": {"kind", "id", "title", "analysis"},
 }
@@ -580,7 +580,9 @@ def _tables(plan: Plan, records: list[Record], style: "Style") -> list["TableMod
                 matrix = [r for r in by_id[t["analysis"]] if isinstance(r, CorrelationMatrix)]
                 if not matrix:
                     raise InputError(f"{t['analysis']!r} is not a correlation_matrix analysis")
-                made = table(matrix[0], style, title=t.get("title"))
+                from .rendering.correlation_tables import correlation_table
+
+                made = correlation_table(matrix[0], style, title=t.get("title"), means=t.get("means", True))
             else:
                 made = _model_table(t["kind"], by_id[t["analysis"]], style, t.get("title"))
         except InputError as exc:

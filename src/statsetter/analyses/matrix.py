@@ -49,6 +49,8 @@ def correlation_matrix(
         if not pd.api.types.is_numeric_dtype(dtype) or pd.api.types.is_bool_dtype(dtype):
             raise InputError(f"{name}: not numeric (dtype {dtype}); correlations need numeric variables")
     X = df[list(columns)].to_numpy(dtype=float)
+    with np.errstate(invalid="ignore"):
+        means, sds = np.nanmean(X, axis=0), np.nanstd(X, axis=0, ddof=1)  # of the variables as measured, also for rs
     if method == "spearman":
         X = pd.DataFrame(X).rank().to_numpy()
     elif method != "pearson":
@@ -122,4 +124,5 @@ def correlation_matrix(
     return CorrelationMatrix(
         tuple(columns), method, r, p, low, high, N.astype(int), level, adjust, dict(labels or {}),
         provenance=c.provenance(f"statsetter.analyses.correlation_matrix({method})"),
+        mean=means, sd=sds, rows=rows,
     )

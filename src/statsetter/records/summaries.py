@@ -223,6 +223,9 @@ class CorrelationMatrix:
     labels: Mapping[str, str]
     id: str | None = None
     provenance: Provenance | None = None
+    mean: "np.ndarray | None" = None  # each variable's mean and SD over its observed values
+    sd: "np.ndarray | None" = None
+    rows: int | None = None  # the rows of the data: with every pair's n equal to it, no value was missing
     kind: str = field(default="correlation_matrix", init=False)
 
     def pairs(self) -> list[Result]:
@@ -263,8 +266,11 @@ class CorrelationMatrix:
             out["adjust"] = self.adjust
         if self.labels:
             out["labels"] = dict(self.labels)
-        for name in ("r", "p", "low", "high", "n"):
-            out[name] = _array_out(getattr(self, name))
+        for name in ("r", "p", "low", "high", "n", "mean", "sd"):
+            if getattr(self, name) is not None:
+                out[name] = _array_out(getattr(self, name))
+        if self.rows is not None:
+            out["rows"] = self.rows
         if self.provenance is not None:
             out["provenance"] = _provenance_out(self.provenance)
         return out
@@ -274,7 +280,7 @@ class CorrelationMatrix:
         data = _header(data, where, "correlation_matrix")
         kwargs: dict[str, Any] = {"adjust": None, "labels": {}}
         for key, value in data.items():
-            if key in ("r", "p", "low", "high", "n"):
+            if key in ("r", "p", "low", "high", "n", "mean", "sd"):
                 value = _array_in(f"{where}.{key}", value)
             elif key == "names":
                 value = tuple(str(v) for v in _list(f"{where}.names", value))
@@ -288,6 +294,9 @@ class CorrelationMatrix:
         for name in ("r", "p", "low", "high", "n"):
             if getattr(made, name).shape != (k, k):
                 raise RecordError(f"{where}.{name}", f"expected {k} × {k} numbers for {k} variables")
+        for name in ("mean", "sd"):
+            if getattr(made, name) is not None and getattr(made, name).shape != (k,):
+                raise RecordError(f"{where}.{name}", f"expected {k} numbers for {k} variables")
         if made.adjust is not None and made.adjust not in ADJUST_NAMES:
             raise RecordError(f"{where}.adjust", f"{made.adjust!r} is not one of {', '.join(ADJUST_NAMES)}")
         return made

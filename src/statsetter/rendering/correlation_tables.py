@@ -1,13 +1,14 @@
-"""A correlation matrix as a table (REPORTING-RULES.md "Tables"): variables
-numbered in the stub, numbers as column heads, the lower triangle only, an
-em dash on the diagonal, asterisks for p by the style's thresholds with the
-probability note, and n per pair in the note when it varies."""
+"""A correlation matrix as a table (docs/reporting-rules.md "Tables", after
+APA 7's sample correlation table): variables numbered in the stub, their M
+and SD, numbers as column heads, the lower triangle only, an em dash on the
+diagonal, asterisks for p by the style's thresholds with the probability
+note, N in the note when no value is missing, else the range of n per pair."""
 
 from __future__ import annotations
 
 from typing import TYPE_CHECKING
 
-from ..records import ADJUST_NAMES
+from ..records import ADJUST_NAMES, table_label
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from ..styled import StyledText
@@ -17,38 +18,52 @@ if TYPE_CHECKING:
     from ..records import CorrelationMatrix
 
 
-def correlation_table(m: "CorrelationMatrix", style: "Style | str | None" = None, *, title: str | None = None, number: int | None = None) -> TableModel:
+def correlation_table(
+    m: "CorrelationMatrix", style: "Style | str | None" = None, *, title: str | None = None, number: int | None = None, means: bool = True
+) -> TableModel:
+    """Variables numbered in the stub, their M and SD (``means=False`` leaves
+    them out, as does a matrix that has none), then one column per variable
+    but the last (whose column would hold only its dash)."""
     resolved = load_style(style)
     num = numbers_for(resolved)
     stars = sorted(resolved.p.get("table_stars", [0.05, 0.01, 0.001]), reverse=True)
     symbol = "r" if m.method == "pearson" else "rs"
     k = len(m.names)
+    show = means and m.mean is not None and m.sd is not None
     rows = []
     for i, name in enumerate(m.names):
-        cells = []
-        for j in range(k):
+        cells = [StyledText(num.number(float(m.mean[i]), "M")), StyledText(num.number(float(m.sd[i]), "SD"))] if show else []  # type: ignore[index]
+        for j in range(k - 1):
             if j < i:
                 mark = "*" * sum(m.p[i, j] < s for s in stars)
                 cells.append(StyledText(num.number(float(m.r[i, j]), symbol) + mark))
-            elif j == i:
-                cells.append(StyledText("—"))
             else:
-                cells.append(StyledText())
-        rows.append(Row(StyledText(f"{i + 1}. {m.labels.get(name, name)}"), tuple(cells)))
+                cells.append(StyledText("—" if j == i else ""))
+        rows.append(Row(StyledText(f"{i + 1}. {table_label(m.labels.get(name, name))}"), tuple(cells)))  # a stub in sentence case
     p = resolved.symbol("p")
-    star_note = " ".join(f"{'*' * (n + 1)}{p} &lt; {num.number(s, 'p', _decimals(s))}." for n, s in enumerate(stars))
+    nb = resolved.keep_together
+    star_note = " ".join(f"{'*' * (n + 1)}{p}{nb}&lt;{nb}{num.number(s, 'p', _decimals(s))}." for n, s in enumerate(stars))
     ns = {int(m.n[i, j]) for i in range(k) for j in range(i)}
     sym = StyledText.from_markup(resolved.symbol(symbol)).plain()
-    general = f"Pairwise-complete observations; n = {min(ns):,}" + (f" to {max(ns):,}." if len(ns) > 1 else ".") if ns else ""
+    if ns == {m.rows}:  # no value missing: the whole sample
+        general = f"{resolved.symbol('N')}{nb}={nb}{num.integer(min(ns))}."
+    elif ns:
+        general = f"Pairwise-complete observations; {resolved.symbol('n')}{nb}={nb}{num.integer(min(ns))}"
+        general += f" to {num.integer(max(ns))}." if len(ns) > 1 else " for every pair."
+    else:
+        general = ""
+    if show and ns != {m.rows}:
+        general += f" {resolved.symbol('M')} and {resolved.symbol('SD')} are of each variable's observed values."
     if m.adjust:
-        general += f" {p} values {ADJUST_NAMES.get(m.adjust, m.adjust)}-adjusted for {len(m.names) * (len(m.names) - 1) // 2} comparisons."
+        general += f" {p} values {ADJUST_NAMES.get(m.adjust, m.adjust)}-adjusted for {k * (k - 1) // 2} comparisons."
+    heads = ([Column(StyledText.from_markup(resolved.symbol("M"))), Column(StyledText.from_markup(resolved.symbol("SD")))] if show else [])
     return TableModel(
         title=StyledText(title or f"Correlations ({sym}) Between the Variables"),
-        columns=tuple(Column(StyledText(str(j + 1))) for j in range(k)),
+        columns=tuple(heads + [Column(StyledText(str(j + 1))) for j in range(k - 1)]),
         rows=tuple(rows),
         stub_head=StyledText("Variable"),
         number=number,
-        general_note=StyledText.from_markup(general.replace("n =", f"{resolved.symbol('n')} =", 1)) if general else None,
+        general_note=StyledText.from_markup(general.strip()) if general else None,
         probability_note=StyledText.from_markup(star_note),
     )
 
