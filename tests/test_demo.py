@@ -6,6 +6,7 @@ data are the demo's invented survey.)"""
 
 from __future__ import annotations
 
+import os
 import re
 import shutil
 import subprocess
@@ -142,7 +143,46 @@ def test_switching_the_style_changes_the_tables_too(run):
     assert re.search(r"\| −?,\d{2}", tables[1]) and not re.search(r"\| −?\.\d{2}", tables[1])  # correlations
     anova, regression, results = tables[2], tables[3], tables[5]
     assert re.search(r"\| \d+,\d{2} \| [<,]", anova)  # F | p in the ANOVA table
-    assert re.search(r"\| −?\d,\d{2,3} \| \d,\d{2,3} \|", regression) and "*F*(4; " in regression  # B | SE, and the model's fit
-    assert "[0,19; 1,03]" in results or re.search(r"\[\d,\d{2}; \d,\d{2}\]", results)
+    assert re.search(r"\| −?\d,\d{2,3} \| \d,\d{2,3} \|", regression) and "*F*(4;\u00a0" in regression  # B | SE, and the model's fit
+    assert re.search(r"\[\d,\d{2};\s\d,\d{2}\]", results)  # the CI's limits joined by the house separator (and a no-break space)
     text = render(result.records[1], "stats", load_style(ROOT / "demo" / "house-comma.toml")).plain()
     assert re.fullmatch(r"r\(\d+\) = −,\d\d; 95% CI \[−,\d\d; −,\d\d\]; p < ,001", text)
+
+
+def test_what_a_reader_sees_in_the_word_outputs(run):
+    # issue-level checks on the rendered pages (LibreOffice -> PDF -> text and PNG): every stub word of four
+    # letters or more whole; a table's number, title and first lines on one page; no line of text ending inside
+    # a statistic. One PNG per page that starts a table is kept in the temp folder as an artefact to look at.
+    import tempfile
+
+    from test_docx import office
+
+    soffice = office()
+    artefacts = Path(tempfile.gettempdir()) / "statsetter-artefacts"
+    artefacts.mkdir(exist_ok=True)
+    md = (run / "out" / "results.md").read_text(encoding="utf-8")
+    stubs = [line.split("|")[1] for line in md.splitlines() if line.startswith("| ") and not line.startswith("| Variable")]
+    words = {w for s in stubs for w in re.findall(r"[A-Za-z]{4,}", s.replace("&nbsp;", " ")) if w != "nbsp"}
+    assert len(words) > 20
+    for name in ("results.docx", "chapter-filled.docx"):
+        path = run / "out" / name
+        subprocess.run([soffice, "--headless", "--convert-to", "pdf", "--outdir", str(run / "out"), str(path)],
+                       check=True, capture_output=True, timeout=180, env={**os.environ, "HOME": str(run)})
+        pdf = path.with_suffix(".pdf")
+        pages = int(re.search(r"Pages:\s+(\d+)", subprocess.run(["pdfinfo", str(pdf)], capture_output=True, text=True, check=True).stdout).group(1))
+        texts = [subprocess.run(["pdftotext", "-f", str(i), "-l", str(i), str(pdf), "-"], capture_output=True, text=True, check=True).stdout
+                 for i in range(1, pages + 1)]
+        whole = " ".join(texts)
+        if name == "results.docx":
+            found = set(re.findall(r"[A-Za-z]+", whole))
+            assert sorted(words - found) == [], "stub words broken or missing in the rendered tables"
+        for i, text in enumerate(texts, 1):
+            lines = [line.strip() for line in text.splitlines() if line.strip()]
+            for k, line in enumerate(lines):
+                if re.fullmatch(r"Table \d+", line):
+                    assert len(lines) - k >= 4, f"{name} page {i}: {line} ends its page"
+                    subprocess.run(["pdftoppm", "-r", "60", "-png", "-f", str(i), "-l", str(i), str(pdf),
+                                    str(artefacts / f"{path.stem}-{line.replace(' ', '')}")], check=True, timeout=120)
+            broken = [line for line in lines if len(line) > 40 and re.search(r"(\s[=<>]|\sp|\bCI|\d+%)$", line)]
+            assert broken == [], f"{name} page {i}: a statistic broken at a line end"
+    assert len(list(artefacts.glob("results-Table*.png"))) >= 3

@@ -182,7 +182,7 @@ def test_suppression_is_off_by_default_and_hides_recoverable_cells():
 
 def test_notes_define_abbreviations_and_rounding(penguins):
     d = describe(penguins, ["island", "body_mass_g", "bill_depth_mm"], levels={"bill_depth_mm": "ordinal"}).main
-    note = table(d).general_note.text
+    note = table(d).general_note.plain()  # (the note keeps "M = mean" together with no-break spaces; plain shows spaces)
     for defined in ("M = mean", "SD = standard deviation", "Mdn = median", "IQR = interquartile range", "n = number", "N = number"):
         assert defined in note
     assert "may not total 100 because of rounding" in note  # 48.8 + 36.0 + 15.1 = 99.9

@@ -74,7 +74,7 @@ class _Layout:
             names = v.categories
             return StyledText(f"{names[int(v.median[j])]} ({names[int(v.q1[j])]}–{names[int(v.q3[j])]})")
         q1, q3 = self.num.number(v.q1[j], "Mdn"), self.num.number(v.q3[j], "Mdn")
-        inner = f"{q1}{self.sep} {q3}" if v.q1[j] < 0 else f"{q1}–{q3}"
+        inner = f"{q1}{self.sep}{self.style.keep_together}{q3}" if v.q1[j] < 0 else f"{q1}–{q3}"
         return StyledText(f"{self.num.number(v.median[j], 'Mdn')} ({inner})")
 
     def span(self, v: "VariableSummary", j: int) -> StyledText:
@@ -82,7 +82,7 @@ class _Layout:
         if v.minimum[j] != v.minimum[j]:
             return StyledText("—")
         lo, hi = self.num.number(v.minimum[j], "M"), self.num.number(v.maximum[j], "M")
-        return StyledText(f"{lo}{self.sep} {hi}" if v.minimum[j] < 0 else f"{lo}–{hi}")
+        return StyledText(f"{lo}{self.sep}{self.style.keep_together}{hi}" if v.minimum[j] < 0 else f"{lo}–{hi}")
 
     # -- rows --------------------------------------------------------------
 
@@ -240,7 +240,8 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
 
 def _general_note(d: "Description", lay: _Layout) -> StyledText:
     parts = []
-    defined = [f"{lay.style.symbol(a) if a != 'SMD' else 'SMD'} = {_ABBREVIATIONS[a]}" for a in lay.used]
+    nb = lay.style.keep_together  # "M = mean" is not split at a line end either
+    defined = [f"{lay.style.symbol(a) if a != 'SMD' else 'SMD'}{nb}={nb}{_ABBREVIATIONS[a]}" for a in lay.used]
     if defined:
         parts.append("; ".join(defined) + ".")
     if any(v.counts is not None for v in d.variables):

@@ -35,7 +35,7 @@ def _limits(h, ci, quantity: str, null: float) -> StyledText:  # type: ignore[no
     if ci is None:
         return StyledText()
     low, high = h.num.interval(ci.low, ci.high, quantity, null)
-    return StyledText(f"[{low}{h.sep} {high}]")
+    return StyledText(f"[{low}{h.sep}{h.style.keep_together}{high}]")
 
 
 def results_table(records: Sequence[Result], style: "Style | str | None" = None, title: str = "Results") -> TableModel:
@@ -67,5 +67,5 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
         stub_head=StyledText("Result"),
         columns=(Column(StyledText("Statistic")), Column(_cell(resolved.symbol("p"))), Column(StyledText("Effect size")), Column(StyledText(f"{pct}% CI"))),
         rows=tuple(rows),
-        general_note=StyledText("CI = confidence interval."),
+        general_note=StyledText(f"CI{resolved.keep_together}={resolved.keep_together}confidence interval."),
     )

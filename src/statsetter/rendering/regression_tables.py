@@ -83,9 +83,9 @@ def regression_table(
 
     nb = resolved.keep_together
     note = StyledText.from_markup(f"{resolved.symbol('N')}{nb}={nb}{num.integer(model.n)}. ") if model is not None and model.n else StyledText()
-    note = note + "CI = confidence interval; LL = lower limit; UL = upper limit."
+    note = note + f"CI{nb}={nb}confidence interval; LL{nb}={nb}lower limit; UL{nb}={nb}upper limit."
     if not linear:
-        note = note + " OR = odds ratio."
+        note = note + f" OR{nb}={nb}odds ratio."
     if references:
         note = note + " Reference categories: " + "; ".join(references) + "."
     if model is not None:

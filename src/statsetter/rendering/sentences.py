@@ -144,7 +144,7 @@ class Helpers:
             inside.append(f"{self.sym('N')}{self._eq}{num.integer(r.n)}")
         head = self.sym(symbol or s.symbol)
         if inside:
-            head = f"{head}({self._join.join(inside)})"
+            head = f"{head}({(self.sep + self._nb).join(inside)})"  # "F(2, 128.22)" keeps together too
         return f"{head}{self._eq}{self._stat_value(r, s.symbol, s.value)}"
 
     def _stat_value(self, r: Result, symbol: str, value: float) -> str:
