@@ -65,7 +65,6 @@ ANALYSIS_KINDS = (
     "hierarchical_steps", "logistic_regression", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
     "cronbach_alpha", "auto",
 )
-_TABLE_RENAMED = {"descriptives": {"by": "group", "tests": "compare"}}
 _TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
 _DATA = {"path", "sheet", "missing", "labels", "table_labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
 _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label", "min_share"}
@@ -134,24 +133,20 @@ def _lines(text: str) -> dict[str, int]:
     return out
 
 
-def _renamed(plan: Plan, where: str, entry: dict[str, Any], renamed: dict[str, str]) -> None:
-    """Accept a key's former name for one release, with a warning naming the line."""
+def _renamed(plan: Plan, where: str, entry: dict[str, Any], function: str) -> None:
+    """Accept a key's former name (the analyses' ``RENAMED`` for ``function``)
+    for one release, with a warning naming the line."""
     import warnings
 
+    from .analyses import RENAMED, renamed_value
     from .errors import FormerName
 
-    for old, new in renamed.items():
+    for old, new in RENAMED.get(function, {}).items():
         if old in entry:
             if new in entry:
                 raise plan.fail(f"{where}.{old}", f"{old!r} is the former name of {new!r}; give one of them")
             warnings.warn(f"{plan.where(f'{where}.{old}')}: {old!r} is now {new!r}; the former name will stop working in the next release", FormerName, stacklevel=2)
-            entry[new] = entry.pop(old)
-
-
-def _renamed_keys(kind: str) -> dict[str, str]:
-    from .analyses import RENAMED
-
-    return RENAMED.get(kind, {})
+            entry[new] = renamed_value(function, old, entry.pop(old))
 
 
 def _unknown(plan: Plan, where: str, keys: set[str], allowed: set[str]) -> None:
@@ -212,14 +207,12 @@ def load_plan(path: "str | Path") -> Plan:
         if kind not in ANALYSIS_KINDS:
             close = difflib.get_close_matches(str(kind), ANALYSIS_KINDS, n=2)
             raise plan.fail(f"{where}.kind", f"unknown kind {kind!r}" + (f"; did you mean {' or '.join(close)}?" if close else f"; kinds: {', '.join(ANALYSIS_KINDS)}"))
-        _renamed(plan, where, analysis, _renamed_keys(kind))
-        if kind == "chi_square" and isinstance(analysis.get("variant"), bool):
-            analysis["variant"] = "yates" if analysis["variant"] else "pearson"
+        _renamed(plan, where, analysis, kind)
         _unknown(plan, where, set(analysis), {"id", "kind"} | set(_parameters(kind)))
         plan.analyses.append(analysis)
     for i, table in enumerate(raw.get("tables", [])):
         kind = table.get("kind")
-        _renamed(plan, f"tables[{i}]", table, _TABLE_RENAMED.get(kind, {}))
+        _renamed(plan, f"tables[{i}]", table, "describe" if kind == "descriptives" else "")
         if kind not in _TABLE:
             raise plan.fail(f"tables[{i}].kind", f"{kind!r} is not one of {', '.join(_TABLE)}")
         _unknown(plan, f"tables[{i}]", set(table), _TABLE[kind])

@@ -38,6 +38,11 @@ RENAMED: dict[str, dict[str, str]] = {
 _VALUES = {("chi_square", "yates"): lambda v: ("yates" if v else "pearson") if isinstance(v, bool) else v}
 
 
+def renamed_value(function: str, old: str, value: _Any) -> _Any:
+    """The value a former keyword's value stands for under its new name (``yates=True`` -> ``variant="yates"``)."""
+    return _VALUES.get((function, old), lambda v: v)(value)
+
+
 def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
     """``fn`` returning Records, taking ``table_labels`` (labels for tables:
     sentence case, may carry a unit) and, for one release, its former keywords."""
@@ -53,7 +58,7 @@ def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
                 if new in kwargs:
                     raise TypeError(f"{name}: {old}= is the former name of {new}=; give one of them")
                 _warnings.warn(f"{name}: {old}= is now {new}=", _FormerUse, stacklevel=2)
-                kwargs[new] = _VALUES.get((name, old), lambda v: v)(kwargs.pop(old))
+                kwargs[new] = renamed_value(name, old, kwargs.pop(old))
         if name == "posthoc" and len(args) == 4:  # the procedure was once the fourth positional argument
             _warnings.warn("posthoc: give the procedure as adjust=", _FormerUse, stacklevel=2)
             args, kwargs["adjust"] = args[:3], args[3]

@@ -16,7 +16,7 @@ from dataclasses import dataclass, field, fields
 from typing import TYPE_CHECKING, Any, Literal, Mapping
 
 from ..errors import RecordError
-from .result import SCHEMA, SCHEMA_VERSION, EffectSize, Interval, Note, Provenance, Result, Statistic, Variable
+from .result import SCHEMA, SCHEMA_VERSION, EffectSize, Interval, Note, Provenance, Result, Statistic, Variable, _from_plain, _to_plain
 
 if TYPE_CHECKING:
     import numpy as np
@@ -340,15 +340,11 @@ def _plain(obj: Any) -> dict[str, Any]:
 
 
 def _provenance_out(p: Provenance) -> dict[str, Any]:
-    out = {"source": p.source}
-    if p.versions:
-        out["versions"] = dict(p.versions)  # type: ignore[assignment]
-    return out
+    return _to_plain(p)
 
 
 def _provenance_in(where: str, value: Any) -> Provenance:
-    value = _mapping(where, value)
-    made = _object(Provenance, where, dict(value))
+    made = _from_plain(Provenance, value, where)
     made.validate(where)
     return made
 

@@ -40,6 +40,7 @@ class _Layout:
         self.d, self.style = d, style
         self.num: Numbers = numbers_for(style)
         self.sep = style.data["numbers"]["list_separator"]
+        self.nb = style.keep_together  # the space inside "n = 93", "M = mean", "−1.20; 0.40"
         self.used: list[str] = []  # abbreviations in order of first use
         self.tests: dict[str, str] = {}  # test name -> note letter
         self.rounding = False
@@ -74,7 +75,7 @@ class _Layout:
             names = v.categories
             return StyledText(f"{names[int(v.median[j])]} ({names[int(v.q1[j])]}–{names[int(v.q3[j])]})")
         q1, q3 = self.num.number(v.q1[j], "Mdn"), self.num.number(v.q3[j], "Mdn")
-        inner = f"{q1}{self.sep}{self.style.keep_together}{q3}" if v.q1[j] < 0 else f"{q1}–{q3}"
+        inner = f"{q1}{self.sep}{self.nb}{q3}" if v.q1[j] < 0 else f"{q1}–{q3}"
         return StyledText(f"{self.num.number(v.median[j], 'Mdn')} ({inner})")
 
     def span(self, v: "VariableSummary", j: int) -> StyledText:
@@ -82,7 +83,7 @@ class _Layout:
         if v.minimum[j] != v.minimum[j]:
             return StyledText("—")
         lo, hi = self.num.number(v.minimum[j], "M"), self.num.number(v.maximum[j], "M")
-        return StyledText(f"{lo}{self.sep}{self.style.keep_together}{hi}" if v.minimum[j] < 0 else f"{lo}–{hi}")
+        return StyledText(f"{lo}{self.sep}{self.nb}{hi}" if v.minimum[j] < 0 else f"{lo}–{hi}")
 
     # -- rows --------------------------------------------------------------
 
@@ -106,8 +107,7 @@ class _Layout:
     def stub(self, v: "VariableSummary", what: str) -> StyledText:
         alpha = ""
         if v.alpha is not None:
-            eq = f"{self.style.keep_together}={self.style.keep_together}"
-            alpha = f" ({self.style.symbol('alpha')}{eq}{self.num.number(v.alpha, 'alpha')})"
+            alpha = f" ({self.style.symbol('alpha')}{self.nb}={self.nb}{self.num.number(v.alpha, 'alpha')})"
         return StyledText.from_markup(f"{escape_markup(v.label)}{alpha}, {what}")
 
     def variable_rows(self, v: "VariableSummary") -> list[Row]:
@@ -217,7 +217,7 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
     columns = []
     for j, name in enumerate(d.columns):
         sym = lay.sym("n") if d.group is not None and j < len(d.columns) - 1 else total_sym
-        nb = resolved.keep_together  # "(n = 93)" never breaks in a head
+        nb = lay.nb  # "(n = 93)" never breaks in a head
         columns.append(Column(StyledText.from_markup(f"{escape_markup(name)} ({sym}{nb}={nb}{lay.num.integer(d.column_n[j])})")))
     if any(v.test is not None for v in d.variables):
         columns.append(Column(StyledText.from_markup(resolved.symbol("p"))))
@@ -240,7 +240,7 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
 
 def _general_note(d: "Description", lay: _Layout) -> StyledText:
     parts = []
-    nb = lay.style.keep_together  # "M = mean" is not split at a line end either
+    nb = lay.nb  # "M = mean" is not split at a line end either
     defined = [f"{lay.style.symbol(a) if a != 'SMD' else 'SMD'}{nb}={nb}{_ABBREVIATIONS[a]}" for a in lay.used]
     if defined:
         parts.append("; ".join(defined) + ".")
