@@ -163,7 +163,8 @@ def test_decimal_alignment_when_the_style_asks(tmp_path):
     path = save_document(results_document([], str(house), tables=[model()]), tmp_path / "dec.docx")
     xml = zipfile.ZipFile(path).read("word/document.xml").decode()
     assert xml.count('w:val="decimal"') == 4  # one tab stop per number cell
-    centred = save_document(results_document([], None, tables=[model()]), tmp_path / "cen.docx")
+    (tmp_path / "centre.toml").write_text('extends = "apa7"\n[tables]\nnumber_align = "center"\n')
+    centred = save_document(results_document([], str(tmp_path / "centre.toml"), tables=[model()]), tmp_path / "cen.docx")
     assert 'w:val="decimal"' not in zipfile.ZipFile(centred).read("word/document.xml").decode()
     assert "3.50" in pdf_text(centred)
     assert "3.50" in pdf_text(path)

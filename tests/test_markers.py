@@ -86,9 +86,12 @@ def test_fill_everywhere(chapter, tmp_path):
     assert [r.text for r in first.runs if r.italic][:3] == ["M", "SD", "n"]
     assert d.tables[0].cell(0, 0).text.replace("\u00a0", " ") == "r(98) = .32, 95% CI [.13, .49], p = .001"
     # [[id|table]]: a results table after the paragraph, the marker text gone
-    assert d.paragraphs[2].text == "Table 2 shows it: "
+    # ... with its number (first table placed: Table 1) and a title, flush left and kept with the table
+    assert [p.text for p in d.paragraphs[2:5]] == ["Table 2 shows it: ", "Table 1", "The Score by Group"]
+    assert d.paragraphs[3].runs[0].bold and d.paragraphs[3].paragraph_format.keep_with_next and d.paragraphs[4].runs[0].italic
     t = d.tables[1]
-    assert [c.text.replace("\u00a0", " ") for c in t.rows[1].cells] == ["score_diff", "t(38) = 2.14", ".039", "d = 0.68", "[0.04, 1.31]"]  # the p symbol is in the head (practice: a column head names its quantity)
+    cells = [c.text.replace("\u00a0", " ").strip() for c in t.rows[1].cells]  # .strip(): a tab before a decimal-aligned number
+    assert cells == ["The score by group", "t(38) = 2.14", ".039", "d = 0.68", "[0.04, 1.31]"]  # the p symbol is in the head (practice: a column head names its quantity)
     assert "r(98)\u00a0=\u00a0.32" in d.sections[0].header.paragraphs[0].text
     assert "r(98)\u00a0=\u00a0.32" in d.sections[0].footer.paragraphs[0].text
     footnotes = zipfile.ZipFile(out).read("word/footnotes.xml").decode()
@@ -109,7 +112,7 @@ def test_cli_fill(chapter, tmp_path, capsys):
     code = main(["fill", str(chapter), "--records", str(recs), "--out", str(out)])
     captured = capsys.readouterr()
     assert code == 1  # an unknown marker is a finding
-    assert "unknown marker [[nope]]" in captured.out and "'spare' is not used" in captured.out
+    assert "unknown marker [[nope]]" in captured.out and "not placed by any marker: spare" in captured.out
     assert out.exists()
     assert "r(98) = .32" in pdf_text(out)
 

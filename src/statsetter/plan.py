@@ -49,7 +49,10 @@ from pathlib import Path
 from typing import TYPE_CHECKING, Any, Callable
 
 from .errors import InputError
+from .styled import StyledText
 from .records import CorrelationMatrix, Description, Record, Result, name_records, with_table_labels
+from .rendering.compose import PLACES, Block, Shown
+from .style.profile import PAPERS
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -75,7 +78,9 @@ _TABLE = {
     "regression": {"kind", "id", "title", "analysis"},
     "anova": {"kind", "id", "title", "analysis"},
 }
-_OUTPUTS = {"folder", "docx", "md", "tex", "html", "json", "allow_outside"}
+_OUTPUTS = {"folder", "docx", "md", "tex", "html", "json", "notes", "allow_outside", "caution", "paper"}
+_OUTPUT_OPTIONS = {"allow_outside": bool, "caution": bool, "paper": str}  # outputs keys that are not files
+_RESERVED_IDS = ("table", "ref")  # chapter markers [[table:ID]] and [[ref:ID]]
 _CHAPTER = {"path", "out"}
 
 
@@ -202,14 +207,19 @@ def load_plan(path: "str | Path") -> Plan:
             raise plan.fail(f"{where}.id", f"the id {analysis['id']!r} is used twice")
         if not re.fullmatch(r"[A-Za-z0-9_.\-]+", str(analysis["id"])):
             raise plan.fail(f"{where}.id", f"{analysis['id']!r}: ids use letters, digits, _, . and - (they are chapter markers)")
+        if analysis["id"] in _RESERVED_IDS:
+            raise plan.fail(f"{where}.id", f"{analysis['id']!r} is kept for the chapter markers [[table:ID]] and [[ref:ID]]; choose another id")
         ids.add(analysis["id"])
         kind = analysis["kind"]
         if kind not in ANALYSIS_KINDS:
             close = difflib.get_close_matches(str(kind), ANALYSIS_KINDS, n=2)
             raise plan.fail(f"{where}.kind", f"unknown kind {kind!r}" + (f"; did you mean {' or '.join(close)}?" if close else f"; kinds: {', '.join(ANALYSIS_KINDS)}"))
         _renamed(plan, where, analysis, kind)
-        _unknown(plan, where, set(analysis), {"id", "kind"} | set(_parameters(kind)))
+        _unknown(plan, where, set(analysis), {"id", "kind", "place"} | set(_parameters(kind)))
+        if analysis.get("place", "text") not in PLACES:
+            raise plan.fail(f"{where}.place", f"{analysis['place']!r} is not one of {', '.join(PLACES)} (where the result goes: its sentence, a table, or both)")
         plan.analyses.append(analysis)
+    table_ids: set[str] = set()
     for i, table in enumerate(raw.get("tables", [])):
         kind = table.get("kind")
         _renamed(plan, f"tables[{i}]", table, "describe" if kind == "descriptives" else "")
@@ -219,6 +229,10 @@ def load_plan(path: "str | Path") -> Plan:
         for ref in table.get("analyses", []) + ([table["analysis"]] if "analysis" in table else []):
             if ref not in ids:
                 raise plan.fail(f"tables[{i}].analyses", f"no analysis with id {ref!r}")
+        table_id = str(table.get("id") or f"table_{i + 1}")
+        if not re.fullmatch(r"[A-Za-z0-9_.\-]+", table_id) or table_id in table_ids:
+            raise plan.fail(f"tables[{i}].id", f"{table_id!r}: a table id is used once and uses letters, digits, _, . and - (it is a chapter marker)")
+        table_ids.add(table_id)
         plan.tables.append(table)
     outputs = raw.get("outputs", {})
     _unknown(plan, "outputs", set(outputs), _OUTPUTS)
@@ -237,10 +251,13 @@ def _check_targets(plan: Plan) -> None:
     never share a path, and are never one of the plan's inputs."""
     import os
 
-    if not isinstance(plan.outputs.get("allow_outside", False), bool):
-        raise plan.fail("outputs.allow_outside", "allow_outside must be true or false")
+    for key, kind in _OUTPUT_OPTIONS.items():
+        if key in plan.outputs and not isinstance(plan.outputs[key], kind):
+            raise plan.fail(f"outputs.{key}", f"{key} must be {'true or false' if kind is bool else 'text in quotes'}")
+    if plan.outputs.get("paper", "letter") not in PAPERS:
+        raise plan.fail("outputs.paper", f"{plan.outputs['paper']!r} is not one of {', '.join(PAPERS)}")
     for key, value in plan.outputs.items():
-        if key != "allow_outside" and not isinstance(value, str):
+        if key not in _OUTPUT_OPTIONS and not isinstance(value, str):
             raise plan.fail(f"outputs.{key}", f"{key} must be a file name in quotes, not {type(value).__name__}")
     home = os.path.realpath(plan.path.parent)
     seen: dict[str, str] = {}
@@ -265,7 +282,8 @@ def _check_targets(plan: Plan) -> None:
 
 def _targets(plan: Plan) -> dict[str, Path]:
     """Every path the plan writes: the folder, each output, the filled chapter."""
-    outputs = {k: v for k, v in plan.outputs.items() if k not in ("folder", "allow_outside")} or dict(_DEFAULT_OUTPUTS)
+    outputs = {k: v for k, v in plan.outputs.items() if k != "folder" and k not in _OUTPUT_OPTIONS and k != "notes"} or dict(_DEFAULT_OUTPUTS)
+    outputs["notes"] = plan.outputs.get("notes", "run-notes.md")
     folder = plan.resolve(plan.outputs.get("folder", "out"))
     out: dict[str, Path] = {"folder": folder, **{fmt: folder / name for fmt, name in outputs.items()}}
     if plan.chapter:
@@ -332,11 +350,17 @@ def _parameters(kind: str) -> list[str]:
 
 @dataclass
 class RunResult:
+    """What a plan computed: the records, the tables in the order the section
+    shows them (numbered), the section's blocks, the tables by id (for the
+    chapter's markers), the paths written and the run's notes."""
+
     records: list[Record]
     tables: list["TableModel"]
     written: list[tuple[str, Path]]
     notes: list[str]
     unknown_markers: bool = False
+    blocks: list[Block] = field(default_factory=list)
+    table_ids: dict[str, "TableModel"] = field(default_factory=dict)
 
 
 @dataclass
@@ -466,15 +490,20 @@ def _no_column(name: str, frame: "pd.DataFrame") -> str:
 def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunResult:
     """Compute every scale, analysis and table of the plan (nothing written):
     data -> records -> tables, each step a function of the one before."""
+    from .rendering.compose import compose
+
     data = _frame(plan)
     records = _records(plan, data, progress)
-    tables = _tables(plan, records, _style(plan))
-    notes = [f"data: {note}" for note in data.notes]
+    style = _style(plan)
+    shown = _tables(plan, records, style)
+    section = compose(records, shown, style, {a["id"]: a["place"] for a in plan.analyses if "place" in a})
+    tables = [b for b in section.blocks if not isinstance(b, StyledText)]
+    notes = [f"data: {note}" for note in data.notes] + list(section.notes)
     where = {t.get("id") or f"table_{i + 1}": f"tables[{i}]" for i, t in enumerate(plan.tables)}
     notes += [f"{where.get(r.id or '', r.id)}: left out {lev.describe()}; list it in variables to describe it"
               for r in records if isinstance(r, Description) for lev in r.left_out]
     notes += [f"{r.id}: {note.text}" for r in records if isinstance(r, Result) for note in r.notes if note.kind == "choice"]  # never silent
-    return RunResult(records, tables, [], notes)
+    return RunResult(records, tables, [], notes, blocks=list(section.blocks), table_ids=dict(section.tables))
 
 
 def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None) -> list[Record]:
@@ -509,7 +538,7 @@ def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None) ->
         if progress:
             progress(analysis["id"])
         kind = analysis["kind"]
-        args = {k: v for k, v in analysis.items() if k not in ("id", "kind")}
+        args = {k: v for k, v in analysis.items() if k not in ("id", "kind", "place")}
         if "level" in _parameters(kind):
             args.setdefault("level", plan.level)
         if "labels" in _parameters(kind):
@@ -554,8 +583,9 @@ def _description(plan: Plan, t: dict[str, Any], i: int, data: _Data, alphas: dic
     return replace(d, id=t.get("id") or f"table_{i + 1}")
 
 
-def _tables(plan: Plan, records: list[Record], style: "Style") -> list["TableModel"]:
-    """Each table of the plan laid out from the records it names."""
+def _tables(plan: Plan, records: list[Record], style: "Style") -> list[Shown]:
+    """Each table of the plan laid out from the records it names (numbered
+    later, in the order the section shows them)."""
     from .rendering.layout import table
 
     by_id: dict[str, list[Record]] = {}
@@ -564,9 +594,12 @@ def _tables(plan: Plan, records: list[Record], style: "Style") -> list["TableMod
     descriptions = iter([r for r in records if isinstance(r, Description)])
     out = []
     for i, t in enumerate(plan.tables):
+        sources = tuple(t.get("analyses", ())) + ((t["analysis"],) if "analysis" in t else ())
         try:
             if t["kind"] == "descriptives":
-                made = table(next(descriptions), style, title=t.get("title"))
+                d = next(descriptions)
+                made = table(d, style, title=t.get("title"))
+                sources = (d.id or "",)
             elif t["kind"] == "results":
                 made = table([r for ref in t["analyses"] for r in by_id[ref] if isinstance(r, Result)], style, title=t.get("title", "Results"))
             elif t["kind"] == "correlations":
@@ -580,7 +613,7 @@ def _tables(plan: Plan, records: list[Record], style: "Style") -> list["TableMod
                 made = _model_table(t["kind"], by_id[t["analysis"]], style, t.get("title"))
         except InputError as exc:
             raise PlanError(f"{plan.where(f'tables[{i}]')} (table {i + 1}): {exc}") from None
-        out.append(made.with_number(i + 1))
+        out.append(Shown(str(t.get("id") or f"table_{i + 1}"), made, sources, t["kind"]))
     return out
 
 
@@ -639,7 +672,7 @@ _DEFAULT_OUTPUTS = {"md": "results.md", "docx": "results.docx", "json": "records
 
 def write_outputs(plan: Plan, result: RunResult) -> RunResult:
     """Write every output of the plan and fill the chapter; the paths in ``written``."""
-    from .export.section import results_of, write_section
+    from .export.section import write_section
 
     from .errors import EnvironmentFailure
     from .files import transaction
@@ -656,13 +689,13 @@ def write_outputs(plan: Plan, result: RunResult) -> RunResult:
     inputs = [plan.path, data_path] + ([plan.resolve(plan.chapter["path"])] if plan.chapter else [])
     notes: list[str] = []
     with transaction():  # every output, or none: the previous run's files stay until all are written
-        written = write_section(result.records, result.tables, style, plan.title, paths, inputs)
+        written = []
         if plan.chapter and chapter_out is not None:
             from .export.markers import describe, fill_chapter
 
             source = plan.resolve(plan.chapter["path"])
             try:
-                report = fill_chapter(source, results_of(result.records), chapter_out, style)
+                report = fill_chapter(source, result.records, chapter_out, style, tables=result.table_ids)
             except InputError as exc:
                 raise PlanError(f"{plan.where('chapter.path')}: {exc}") from None
             written.append(("chapter", chapter_out))
@@ -670,6 +703,8 @@ def write_outputs(plan: Plan, result: RunResult) -> RunResult:
             if report.unknown:
                 notes.append("unknown markers were left as they are")
             result.unknown_markers = bool(report.unknown)
+        written[:0] = write_section(result.blocks, result.records, style, plan.title, paths, inputs, notes=result.notes + notes,
+                                    caution=bool(plan.outputs.get("caution")), paper=plan.outputs.get("paper"))
     result.notes += notes
     result.written += written
     return result

@@ -180,6 +180,12 @@ class StyledText:
             self.spans + tuple(Span(s.start + shift, s.end + shift, s.style) for s in other.spans),
         )
 
+    def split_at(self, at: int) -> tuple["StyledText", "StyledText"]:
+        """The text before and from ``at``, each with its part of the spans."""
+        head = [Span(s.start, min(s.end, at), s.style) for s in self.spans if s.start < at]
+        tail = [Span(max(s.start, at) - at, s.end - at, s.style) for s in self.spans if s.end > at]
+        return StyledText(self.text[:at], head), StyledText(self.text[at:], tail)
+
     def __radd__(self, other: str) -> "StyledText":
         if isinstance(other, str):
             return StyledText(other) + self
@@ -420,7 +426,7 @@ def _escape_latex(text: str) -> str:
 
 _UPRIGHT = ("alpha", "beta", "chi", "eta", "omega", "varepsilon", "tau", "rho", "varphi")
 LATEX_PREAMBLE = (
-    "\\usepackage{booktabs}\n"
+    "\\usepackage{booktabs}\n\\usepackage{tabularx}\n\\usepackage{graphicx}\n"
     "\\IfFileExists{upgreek.sty}{\\usepackage{upgreek}}{%\n"
     + "".join(f"  \\providecommand{{\\up{g}}}{{\\{g}}}%\n" for g in _UPRIGHT)
     + "}\n"

@@ -83,6 +83,7 @@ _TEX_MATH_WORD = re.compile("|".join(re.escape(k) for k in sorted(_TEX_GREEK, ke
 _TEX_CHARS = {"\\textminus{}": "−", "\\textless{}": "<", "\\textgreater{}": ">", "\\%": "%", "\\&": "&", "\\_": "_", "\\#": "#",
               "\\$": "$", "---": "—", "--": "–", "~": "\u00a0", "\\,": "\u202f"}  # ~ and \, print no-break spaces
 _TEX_CHAR = re.compile("(" + "|".join(re.escape(k) for k in sorted(_TEX_CHARS, key=len, reverse=True)) + ")")
+_TEX_BOX = re.compile(r"\\rlap\{([^{}]{0,40})\}(?:\\phantom\{[^{}]{0,40}\})?")
 _TEX_SUP = re.compile(r"\\textsuperscript\{([^{}]{1,8})\}")
 _TEX_SUB = re.compile(r"\\textsubscript\{([^{}]{1,8})\}")
 _PANDOC_SUP = re.compile(r"\^([^\^\s]{1,8})\^")
@@ -156,9 +157,11 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     clean, sup = _replace(sup_pattern, clean, lambda g: g.translate(_SUPERSCRIPT))
     clean, sub = _replace(sub_pattern, clean, lambda g: g)
     traces += [sup, sub]
-    if tex:  # \textminus{}, \%, \textless{} … as the characters they print
+    if tex:  # \textminus{}, \%, \textless{} … as the characters they print; a decimal-aligned cell's
+        # \rlap{.14}\phantom{.001} (statsetter's tables) as the digits it prints once
+        clean, boxes = _replace(_TEX_BOX, clean, lambda g: g)
         clean, chars = _replace(_TEX_CHAR, clean, lambda g: _TEX_CHARS[g])
-        traces.append(chars)
+        traces += [boxes, chars]
     return clean, tuple(spans), tuple(t for t in traces if t is not None)
 
 

@@ -16,7 +16,7 @@ from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
 from ..styled import StyledText
-from ..rendering.tables import TableModel, title_case
+from ..rendering.tables import TableModel, split_decimal, title_case
 
 if TYPE_CHECKING:
     from docx.document import Document
@@ -159,33 +159,61 @@ def _column_widths(table: TableModel, text_width: int) -> list[int]:
         return want
     if sum(low) >= text_width:  # even the longest words do not fit: shrink all alike to the page
         return [int(w * text_width / sum(low)) for w in low]
+    # the numbers first (a cell that wraps mid-value is hard to read), then the stub, whose labels wrap between words
     spare = text_width - sum(low)
-    extra = [w - lo for w, lo in zip(want, low)]
-    total = sum(extra)
-    widths = [lo + int(spare * e / total) for lo, e in zip(low, extra)]
-    return widths
+    extra = [w - lo for w, lo in zip(want[1:], low[1:])]
+    if spare >= sum(extra):
+        return [min(want[0], low[0] + spare - sum(extra))] + want[1:]
+    total = sum(extra) or 1
+    return [low[0]] + [lo + int(spare * e / total) for lo, e in zip(low[1:], extra)]
 
 
-def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1, decimal_at: int = 0, width: int = 0, hang: bool = False) -> str:
+def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1, decimal_at: int = 0, width: int = 0,
+              hang: bool = False, line: int = 240) -> str:
+    """One cell: its width, borders, and a paragraph spaced ``line`` (240 =
+    single) with no first-line indent whatever the document's Normal style
+    says; a decimal tab stop at ``decimal_at`` aligns a number on its mark."""
     grid = f'<w:gridSpan w:val="{span}"/>' if span > 1 else ""
     if width:
         grid = f'<w:tcW w:w="{width}" w:type="dxa"/>' + grid
+    spacing = f'<w:spacing w:before="0" w:after="0" w:line="{line}" w:lineRule="auto"/>'
+    indent = f'<w:ind w:left="{_HANG}" w:hanging="{_HANG}"/>' if hang else '<w:ind w:left="0" w:firstLine="0"/>'
     if align == "decimal" and decimal_at:
-        # decimal alignment: a decimal tab stop and a leading tab (APA 7 §7.13 allows either)
-        ppr = _DECIMAL_TAB.format(pos=decimal_at) + '<w:jc w:val="left"/>'
-        runs = "<w:r><w:tab/></w:r>" + _run_xml(text)
-    else:
-        ppr = f'<w:jc w:val="{_JC.get(align, "center")}"/>'
+        # a decimal tab stop: in a table cell Word and LibreOffice align the text on it with no tab character
+        # (a leading tab would jump past it); APA 7 §7.13 allows decimal alignment (memory)
+        ppr = _DECIMAL_TAB.format(pos=decimal_at) + spacing + indent + '<w:jc w:val="left"/>'
         runs = _run_xml(text)
-    if hang:
-        ppr = f'<w:ind w:left="{_HANG}" w:hanging="{_HANG}"/>' + ppr
+    else:
+        ppr = spacing + indent + f'<w:jc w:val="{_JC.get(align, "center")}"/>'
+        runs = _run_xml(text)
     return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr>{ppr}</w:pPr>{runs}</w:p></w:tc>"
 
 
-def _table_xml(table: TableModel, number_align: str = "center", text_width: int = TEXT_WIDTH) -> str:
+def _decimal_tabs(table: TableModel, widths: list[int], mark: str) -> list[int]:
+    """Per column, the decimal tab stop (twips from the cell's text start)
+    that centres the column's numbers aligned on ``mark``; 0 for a column
+    that is not aligned so."""
+    tabs = []
+    for j, aligned in enumerate(table.decimal_columns(mark)):
+        if not aligned:
+            tabs.append(0)
+            continue
+        left = right = 0
+        for row in table.rows:
+            if row.cells and row.cells[j].text.strip() not in ("", "—", "–"):
+                a, b = split_decimal(row.cells[j], mark)
+                left, right = max(left, _chars(a.plain())), max(right, _chars(b.plain()))
+        area = widths[j + 1] - 2 * _MARGIN
+        tabs.append(max(left, (area - left - right) // 2 + left))
+    return tabs
+
+
+def _table_xml(table: TableModel, number_align: str = "center", text_width: int = TEXT_WIDTH, *, mark: str = ".", line: int = 240) -> str:
     """The whole w:tbl as one string, parsed once: fast for tables of thousands
     of rows. Column widths are explicit and fixed (``_column_widths``), so
-    that Word and LibreOffice lay the table out alike."""
+    that Word and LibreOffice lay the table out alike; with ``number_align``
+    ``decimal`` columns of numbers align on the decimal ``mark``; cell
+    paragraphs are spaced ``line`` (240 = single)."""
     widths = _column_widths(table, text_width)
     head_rows = 2 if table.spanners else 1
     header = "<w:trPr><w:cantSplit/><w:tblHeader/></w:trPr>"
@@ -199,36 +227,36 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         + "</w:tblGrid>"
     ]
     if table.spanners:
-        cells = [_cell_xml(StyledText(), "left", True, False, width=widths[0])]
+        cells = [_cell_xml(StyledText(), "left", True, False, line=line, width=widths[0])]
         j = 0
         for sp in sorted(table.spanners, key=lambda sp: sp.start):
-            cells += [_cell_xml(StyledText(), "center", True, False, width=widths[k + 1]) for k in range(j, sp.start)]
-            cells.append(_cell_xml(sp.label, "center", True, True, sp.end - sp.start, width=sum(widths[sp.start + 1 : sp.end + 1])))
+            cells += [_cell_xml(StyledText(), "center", True, False, line=line, width=widths[k + 1]) for k in range(j, sp.start)]
+            cells.append(_cell_xml(sp.label, "center", True, True, sp.end - sp.start, line=line, width=sum(widths[sp.start + 1 : sp.end + 1])))
             j = sp.end
-        cells += [_cell_xml(StyledText(), "center", True, False, width=widths[k + 1]) for k in range(j, len(table.columns))]
+        cells += [_cell_xml(StyledText(), "center", True, False, line=line, width=widths[k + 1]) for k in range(j, len(table.columns))]
         parts.append(f"<w:tr>{header}{''.join(cells)}</w:tr>")
     spanned = {j for sp in table.spanners for j in range(sp.start + 1, sp.end + 1)}
     heads = [table.stub_head] + [c.head for c in table.columns]
     parts.append(
         f"<w:tr>{header}"
         + "".join(
-            _cell_xml(h, "left" if j == 0 else "center", head_rows == 1 or j in spanned, True, width=widths[j]) for j, h in enumerate(heads)
+            _cell_xml(h, "left" if j == 0 else "center", head_rows == 1 or j in spanned, True, line=line, width=widths[j]) for j, h in enumerate(heads)
         )
         + "</w:tr>"
     )
     body = "<w:trPr><w:cantSplit/></w:trPr>"
-    aligns = ["decimal" if number_align == "decimal" and c.align in ("center", "decimal") else c.align for c in table.columns]
-    width = max((len(c.text) for row in table.rows for c in row.cells), default=4)
+    tabs = _decimal_tabs(table, widths, mark) if number_align == "decimal" else [0] * len(table.columns)
     last = len(table.rows) - 1
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
-        cells = [_cell_xml(stub, "left", False, bottom, hang=True)]
+        cells = [_cell_xml(stub, "left", False, bottom, hang=True, line=line)]
         if row.cells:
-            cells += [_cell_xml(c, a, False, bottom, 1, 60 * width) for c, a in zip(row.cells, aligns)]
+            cells += [_cell_xml(c, "decimal" if tab and c.text.strip() not in ("", "—", "–") else col.align, False, bottom, 1, tab, line=line)
+                      for c, col, tab in zip(row.cells, table.columns, tabs)]
         else:
-            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns)))
+            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), line=line))
         parts.append(f"<w:tr>{body}{''.join(cells)}</w:tr>")
     parts.append("</w:tbl>")
     return "".join(parts)
@@ -266,6 +294,38 @@ def _splice(document: "Document", anchor: "Paragraph", table_xml: str) -> "Parag
     return document.add_paragraph()
 
 
+def _paragraph_xml(text: StyledText, keep_next: bool = False, bold: bool = False) -> str:
+    """A flush-left paragraph (no first-line indent whatever Normal says)."""
+    keep = "<w:keepNext/>" if keep_next else ""
+    runs = f'<w:r><w:rPr><w:b/></w:rPr><w:t>{_escape(text.text)}</w:t></w:r>' if bold else _run_xml(text)
+    return f'<w:p xmlns:w="{_WNS}"><w:pPr>{keep}<w:ind w:left="0" w:firstLine="0"/></w:pPr>{runs}</w:p>'
+
+
+def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH) -> list[str]:
+    """A table as Word XML elements in order: the number (bold) and title
+    (italic, title case) paragraphs, kept with the table; the w:tbl; one
+    paragraph per note part (general, specific, probability)."""
+    out = []
+    if table.number is not None:
+        out.append(_paragraph_xml(StyledText(f"Table {table.number}"), keep_next=True, bold=True))
+    if table.title:
+        title = title_case(table.title)
+        out.append(_paragraph_xml(StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans), keep_next=True))
+    line = round(240 * style.manuscript.get("table_line_spacing", 1.0))
+    out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=line))
+    out += [_paragraph_xml(part) for part in table.note_parts()]
+    return out
+
+
+def text_width_of(document: "Document") -> int:
+    """The text width of the document's last section, in twips."""
+    section = document.sections[-1]
+    try:
+        return int((section.page_width - section.left_margin - section.right_margin) / 635)  # EMU per twip
+    except TypeError:  # a section without page size: python-docx's default page
+        return TEXT_WIDTH
+
+
 def add_table(document: "Document", table: TableModel, style: "Style | str | None" = None) -> None:
     """Write the table number, title, table and notes at the end of ``document``.
     The style's ``tables.number_align`` (``center`` or ``decimal``) places the numbers."""
@@ -273,48 +333,31 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
 
     from ..style.profile import load_style
 
-    align = load_style(style).tables.get("number_align", "center")
-
-    if table.number is not None:
-        p = document.add_paragraph()
-        p.paragraph_format.keep_with_next = True  # the number and title never stand alone at a page foot
-        p.add_run(f"Table {table.number}").bold = True
-    if table.title:
-        p = document.add_paragraph()
-        p.paragraph_format.keep_with_next = True
-        title = title_case(table.title)
-        add_runs(p, StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans))
-    anchor = document.add_paragraph()  # the table goes before this, notes after it
-    section = document.sections[-1]
-    try:  # the text width of the page the table is on, in twips (EMU / 635)
-        text_width = int((section.page_width - section.left_margin - section.right_margin) / 635)
-    except TypeError:  # a section without page size: python-docx's default page
-        text_width = TEXT_WIDTH
-    if len(table.rows) <= _SPLICE_ABOVE:
-        anchor._p.addprevious(parse_xml(_table_xml(table, align, text_width)))
-    else:
-        anchor = _splice(document, anchor, _table_xml(table, align, text_width))
-    parts = table.note_parts()
-    if parts:
-        add_runs(anchor, parts[0])
-        for part in parts[1:]:
-            add_runs(document.add_paragraph(), part)
-    else:
-        anchor._p.getparent().remove(anchor._p)
+    anchor = document.add_paragraph()  # the parts go before it
+    for xml in table_parts(table, load_style(style), text_width_of(document)):
+        if xml.startswith("<w:tbl") and len(table.rows) > _SPLICE_ABOVE:
+            anchor = _splice(document, anchor, xml)
+        else:
+            anchor._p.addprevious(parse_xml(xml))
+    anchor._p.getparent().remove(anchor._p)
 
 
 def results_document(
-    records: Sequence["Result"],
+    blocks: Sequence["Result | StyledText | TableModel"],
     style: "Style | str | None" = None,
     *,
     title: str | None = None,
     tables: Iterable[TableModel] = (),
     base: "str | Path | None" = None,
     form: str = "sentence",
+    paper: str | None = None,
 ) -> "Document":
-    """A document with a heading, one paragraph per record and the tables,
-    numbered in order of appearance. ``base`` is a .docx whose styles (and
-    content) are kept; the results are appended after its content."""
+    """A results document: a heading, then ``blocks`` in order — a record as
+    a paragraph in ``form``, a StyledText as a paragraph, a TableModel as a
+    table — then ``tables``. Tables without a number are numbered in order of
+    appearance. A new document takes the style's manuscript page
+    (``[manuscript]``; ``paper`` overrides its paper); ``base`` is an author's
+    .docx whose page, styles and content are kept, the results appended."""
     import docx
 
     from ..rendering.sentences import render
@@ -322,18 +365,90 @@ def results_document(
 
     resolved = load_style(style)
     document = docx.Document(str(base)) if base is not None else docx.Document()
-    if base is None:  # a new manuscript: 1-inch margins (APA 7 §2.22); an author's own document keeps its page
-        from docx.shared import Inches
-
-        for section in document.sections:
-            section.left_margin = section.right_margin = section.top_margin = section.bottom_margin = Inches(1)
+    if base is None:
+        manuscript_page(document, resolved, paper)
     if title:
         document.add_heading(xml_safe(title), level=1)
-    for record in records:
-        add_runs(document.add_paragraph(), render(record, form, resolved))
-    for number, table in enumerate(tables, 1):
-        add_table(document, table.with_number(number), resolved)
+    number = 0
+    for block in [*blocks, *tables]:
+        if isinstance(block, TableModel):
+            number = block.number if block.number is not None else number + 1
+            add_table(document, block.with_number(number), resolved)
+        else:
+            add_runs(document.add_paragraph(), block if isinstance(block, StyledText) else render(block, form, resolved))
     return document
+
+
+_PAPER = {"letter": (12240, 15840), "a4": (11906, 16838)}  # twips
+
+
+def manuscript_page(document: "Document", style: "Style", paper: str | None = None) -> None:
+    """Give a new document the style's manuscript page: paper and margins,
+    the body font and size, line spacing, first-line indent, headings in the
+    body font (black, bold, centred or flush left) and the page number."""
+    from docx.enum.text import WD_ALIGN_PARAGRAPH
+    from docx.shared import Inches, Pt, RGBColor, Twips
+
+    m = style.manuscript
+    width, height = _PAPER[paper or m.get("paper", "letter")]
+    margin = Inches(m.get("margin_in", 1.0))
+    for section in document.sections:
+        section.page_width, section.page_height = Twips(width), Twips(height)
+        section.left_margin = section.right_margin = section.top_margin = section.bottom_margin = margin
+        section.header_distance = section.footer_distance = Inches(0.5)
+    if not m:
+        return
+    normal = document.styles["Normal"]
+    _font(normal, m.get("font"), m.get("font_size"))
+    fmt = normal.paragraph_format
+    fmt.line_spacing = m.get("line_spacing", 1.0)
+    fmt.space_before = fmt.space_after = Pt(0)
+    fmt.first_line_indent = Inches(m.get("first_line_indent_in", 0))
+    for level in (1, 2):
+        heading = document.styles[f"Heading {level}"]
+        _font(heading, m.get("font"), m.get("font_size"))
+        heading.font.bold = bool(m.get("headings_bold", True))
+        heading.font.italic = False
+        heading.font.color.rgb = RGBColor(0, 0, 0)
+        hf = heading.paragraph_format
+        hf.alignment = WD_ALIGN_PARAGRAPH.CENTER if m.get(f"heading_{level}", "left") == "center" else WD_ALIGN_PARAGRAPH.LEFT
+        hf.space_before = hf.space_after = Pt(0)
+        hf.line_spacing = m.get("line_spacing", 1.0)
+        hf.first_line_indent = Inches(0)
+        hf.keep_with_next = True
+    where = m.get("page_number", "none")
+    if where != "none":
+        section = document.sections[0]
+        part = section.header if where.startswith("top") else section.footer
+        p = part.paragraphs[0]
+        p.paragraph_format.alignment = WD_ALIGN_PARAGRAPH.RIGHT if where.endswith("right") else WD_ALIGN_PARAGRAPH.CENTER
+        p.paragraph_format.first_line_indent = Inches(0)
+        _page_field(p)
+
+
+def _font(style, name: str | None, size: float | None) -> None:  # type: ignore[no-untyped-def]
+    """Set a Word style's font; theme fonts (which win over a named one) are removed."""
+    from docx.shared import Pt
+
+    if name:
+        style.font.name = name
+        fonts = style.element.rPr.rFonts
+        for attr in ("asciiTheme", "hAnsiTheme", "eastAsiaTheme", "cstheme"):
+            fonts.attrib.pop(f"{{{_WNS}}}{attr}", None)
+        fonts.set(f"{{{_WNS}}}eastAsia", name)
+        fonts.set(f"{{{_WNS}}}cs", name)
+    if size:
+        style.font.size = Pt(size)
+
+
+def _page_field(paragraph: "Paragraph") -> None:
+    """A PAGE field: Word and LibreOffice show the page's number."""
+    from docx.oxml import parse_xml
+
+    for xml in ('<w:r xmlns:w="{0}"><w:fldChar w:fldCharType="begin"/></w:r>', '<w:r xmlns:w="{0}"><w:instrText xml:space="preserve"> PAGE </w:instrText></w:r>',
+                '<w:r xmlns:w="{0}"><w:fldChar w:fldCharType="separate"/></w:r>', '<w:r xmlns:w="{0}"><w:t>1</w:t></w:r>',
+                '<w:r xmlns:w="{0}"><w:fldChar w:fldCharType="end"/></w:r>'):
+        paragraph._p.append(parse_xml(xml.format(_WNS)))
 
 
 def save_document(document: "Document", path: "str | Path", *, inputs: Iterable["str | Path"] = ()) -> Path:

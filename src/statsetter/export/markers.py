@@ -1,8 +1,14 @@
 """Result markers in an author's own chapter, filled from records.
 
 A marker is ``[[id]]`` (the statistics string), ``[[id|sentence]]``,
-``[[id|stats]]`` or ``[[id|table]]`` (a results table placed after the
-paragraph), where ``id`` is a record's ``id``. Markers are found in body
+``[[id|stats]]`` or ``[[id|table]]`` (the record's results table placed after
+the paragraph), where ``id`` is a record's ``id``; ``[[table:ID]]`` places a
+whole table — one the plan defines, by its id, or the table of an analysis's
+records (Table 1, correlations, regression, ANOVA) — and ``[[ref:ID]]`` writes
+"Table N" for it. Tables are numbered in the order they appear in the chapter,
+so references follow when tables move; each comes with its number, title and
+notes. A paragraph that held only a table marker is replaced by the table.
+Markers are found in body
 paragraphs, table cells, headers, footers and footnotes, also when Word has
 split them across runs; the text around a marker keeps its formatting, and the
 inserted runs take the formatting of the run the marker starts in.
@@ -14,14 +20,15 @@ import copy
 import re
 from dataclasses import dataclass, field
 from pathlib import Path
-from typing import TYPE_CHECKING, Iterable, Iterator, Sequence
+from typing import TYPE_CHECKING, Any, Iterable, Iterator, Mapping, Sequence
 
 from ..errors import InputError
 from ..records.naming import ID_PATTERN
 from ..styled import StyledText
 
 if TYPE_CHECKING:
-    from ..records import Result
+    from ..records import Record, Result
+    from ..rendering.tables import TableModel
     from ..style.profile import Style
 
 __all__ = ["MARKER", "FillReport", "fill_chapter"]
@@ -32,7 +39,7 @@ _W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
 
 @dataclass
 class FillReport:
-    filled: list[tuple[str, str]] = field(default_factory=list)  # (id, where)
+    filled: list[tuple[str, str]] = field(default_factory=list)  # (id, where); a table marker's id is "table:ID"
     unknown: list[tuple[str, str]] = field(default_factory=list)
     unused: list[str] = field(default_factory=list)
 
@@ -125,6 +132,15 @@ def _styled_runs(template, text: StyledText) -> list:  # type: ignore[no-untyped
     return out
 
 
+def _marker(m: "re.Match[str]") -> tuple[str, str]:
+    """(key, form) of a marker: ``[[table:ID]]`` is (ID, "whole"), ``[[ref:ID]]`` (ID, "ref")."""
+    key, form = m.group(1), m.group(2) or "stats"
+    for prefix, kind in (("table:", "whole"), ("ref:", "ref")):
+        if key.startswith(prefix) and m.group(2) is None:
+            return key[len(prefix):], kind
+    return key, form
+
+
 def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set[str]) -> None:  # type: ignore[no-untyped-def]
     runs = _runs(paragraph)
     texts = [_run_text(r) for r in runs]
@@ -132,24 +148,22 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
     if "[[" not in full:
         return
     matches = list(MARKER.finditer(full))
+    tables_after = False
     for m in reversed(matches):
-        key, form = m.group(1), m.group(2) or "stats"
-        if form == "table":
-            table_xml = lookup(key, form)
-            if table_xml is None:
+        key, form = _marker(m)
+        if form in ("table", "whole"):
+            parts = lookup(key, form)
+            if parts is None:
                 report.unknown.append((m.group(0), where))
                 continue
             used.add(key)
-            report.filled.append((key, where))
+            report.filled.append((f"table:{key}" if form == "whole" else key, where))
             _remove_span(runs, texts, m.start(), m.end())
             from docx.oxml import parse_xml
 
-            table = parse_xml(table_xml)
-            paragraph.addnext(table)
-            if paragraph.getparent() is not None and paragraph.getparent().tag == f"{_W}tc":
-                from docx.oxml import OxmlElement
-
-                table.addnext(OxmlElement("w:p"))  # Word needs a cell to end in a paragraph
+            for xml in reversed(parts):
+                paragraph.addnext(parse_xml(xml))
+            tables_after = True
             continue
         text = lookup(key, form)
         if text is None:
@@ -184,6 +198,27 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
         # markers are replaced from the last to the first: an earlier marker
         # touches only runs up to ``first``, whose text (now ``head``) is kept
         # current, so its offsets stay valid
+    if tables_after:
+        parent = paragraph.getparent()
+        if parent is not None and parent.tag == f"{_W}tc" and parent[-1].tag == f"{_W}tbl":
+            from docx.oxml import OxmlElement
+
+            parent.append(OxmlElement("w:p"))  # Word needs a cell to end in a paragraph
+        if not "".join(texts).strip() and parent is not None and parent.tag != f"{_W}tc":
+            parent.remove(paragraph)  # the paragraph held only the marker: the table takes its place
+
+
+def _table_numbers(roots: Iterable) -> dict[tuple[str, str], int]:  # type: ignore[type-arg]
+    """Each placed table's number, in the order the markers appear."""
+    numbers: dict[tuple[str, str], int] = {}
+    for root in roots:
+        for paragraph in root.iter(f"{_W}p"):
+            text = "".join(_run_text(r) for r in _runs(paragraph))
+            for m in MARKER.finditer(text) if "[[" in text else ():
+                key, form = _marker(m)
+                if form in ("table", "whole"):
+                    numbers.setdefault((form, key), len(numbers) + 1)
+    return numbers
 
 
 def _remove_span(runs, texts, start: int, end: int) -> None:  # type: ignore[no-untyped-def]
@@ -200,12 +235,15 @@ def _remove_span(runs, texts, start: int, end: int) -> None:  # type: ignore[no-
 
 def fill_chapter(
     chapter: "str | Path",
-    records: Sequence["Result"],
+    records: Sequence["Record"],
     out: "str | Path",
     style: "Style | str | None" = None,
+    *,
+    tables: "Mapping[str, TableModel] | None" = None,
 ) -> FillReport:
-    """Fill every marker of ``chapter`` from ``records`` (by ``id``) and write
-    ``out``; the chapter itself is never modified."""
+    """Fill every marker of ``chapter`` from ``records`` (by ``id``) and
+    ``tables`` (by id, for ``[[table:ID]]``) and write ``out``; the chapter
+    itself is never modified."""
     from ..files import same_file
     from ..rendering.sentences import render
     from ..style.profile import load_style
@@ -216,35 +254,64 @@ def fill_chapter(
         raise InputError(f"{out}: the output would overwrite the chapter; choose another output path")
     resolved = load_style(style)
     by_id: dict[str, "Result"] = {}
+    from ..records import Result
+
     for r in records:
-        if r.id is None:
+        if r.id is None or not isinstance(r, Result):  # a Description or a matrix is placed as a whole table
             continue
         if r.id in by_id:
             raise InputError(f"records: id {r.id!r} is used twice")
         by_id[r.id] = r
-    cache: dict[tuple[str, str], StyledText] = {}
+    from ..rendering.compose import analysis_of, subject
+    from ..rendering.layout import table as lay_out
+    from .docx_writer import table_parts, text_width_of
+
+    by_analysis: dict[str, list["Record"]] = {}
+    for r in records:
+        by_analysis.setdefault(analysis_of(r), []).append(r)
+    document = open_docx(chapter)
+    parts = list(_parts(document))
+    numbers = _table_numbers(root for _, root in parts)
+    width = text_width_of(document)
+    cache: dict[tuple[str, str], Any] = {}
+
+    def whole(key: str) -> "TableModel | None":
+        if tables and key in tables:
+            return tables[key]
+        if key in by_analysis:
+            return lay_out(by_analysis[key], resolved)
+        return None
 
     def lookup(key: str, form: str):  # type: ignore[no-untyped-def]
-        if key not in by_id:
-            return None
-        if (key, form) not in cache:
+        if (key, form) in cache:
+            return cache[(key, form)]
+        made: Any = None
+        if form == "ref":
+            number = numbers.get(("whole", key)) or numbers.get(("table", key))
+            made = StyledText(f"Table {number}") if number is not None else None
+        elif form == "whole":
+            t = whole(key)
+            made = table_parts(t.with_number(numbers[("whole", key)]), resolved, width) if t is not None else None
+        elif key in by_id:
+            r = by_id[key]
             if form == "table":
                 from ..rendering.record_tables import results_table
-                from .docx_writer import _table_xml
 
-                cache[(key, form)] = _table_xml(results_table([by_id[key]], resolved), resolved.tables.get("number_align", "center"))
+                title = subject(r)
+                t = results_table([r], resolved, title=title[:1].upper() + title[1:]).with_number(numbers[("table", key)])
+                made = table_parts(t, resolved, width)
             else:
-                cache[(key, form)] = render(by_id[key], form, resolved)
-        return cache[(key, form)]
+                made = render(r, form, resolved)
+        cache[(key, form)] = made
+        return made
 
-    document = open_docx(chapter)
     report = FillReport()
     used: set[str] = set()
-    for name, root in _parts(document):
-        for i, paragraph in enumerate(root.iter(f"{_W}p")):
+    for name, root in parts:
+        for i, paragraph in enumerate(list(root.iter(f"{_W}p"))):
             in_table = any(a.tag == f"{_W}tc" for a in paragraph.iterancestors())
             _fill_paragraph(paragraph, lookup, f"{name} paragraph {i + 1}{' (table cell)' if in_table else ''}", report, used)
-    report.unused = sorted(set(by_id) - used)
+    report.unused = sorted(set(by_id) - used - {r.id for k in used if k in by_analysis for r in by_analysis[k] if r.id})
     save_document(document, out, inputs=[chapter])
     return report
 
@@ -253,5 +320,6 @@ def describe(report: FillReport) -> Iterable[str]:
     yield f"filled {len(report.filled)} marker(s)"
     for marker, where in report.unknown:
         yield f"unknown marker {marker} in {where} (left as it is)"
-    for key in report.unused:
-        yield f"record {key!r} is not used by any marker"
+    if report.unused:
+        shown = ", ".join(report.unused[:8]) + (f" and {len(report.unused) - 8} more" if len(report.unused) > 8 else "")
+        yield f"{len(report.unused)} record(s) not placed by any marker: {shown}"

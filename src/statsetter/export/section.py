@@ -1,5 +1,6 @@
-"""A whole results section — a paragraph per record and the tables — in
-Markdown, HTML, LaTeX, Word and JSON, written where a plan says."""
+"""A whole results section — its paragraphs and tables in reading order
+(``rendering.compose``) — in Markdown, HTML, LaTeX, Word and JSON, and the
+run's notes beside it, written where a plan says."""
 
 from __future__ import annotations
 
@@ -8,13 +9,13 @@ from pathlib import Path
 from typing import Sequence
 
 from ..records import Record, Result, dump_records
-from ..rendering.sentences import render
+from ..rendering.compose import Block
 from ..styled import LATEX_PREAMBLE, StyledText
 from ..rendering.tables import TableModel
 from ..style.profile import Style
 from .text_tables import write_table
 
-__all__ = ["CAUTION", "automatic_choices", "results_of", "section_text", "write_section"]
+__all__ = ["CAUTION", "results_of", "run_notes", "section_text", "write_section"]
 
 CAUTION = (
     "Prepared with statsetter. Check every result against the analysis output, the target journal's instructions, "
@@ -22,60 +23,81 @@ CAUTION = (
 )
 
 
-def automatic_choices(records: Sequence[Result]) -> list[StyledText]:
-    """One paragraph per choice statsetter made for the author (a test chosen
-    by the levels of measurement), so that no choice is silent."""
-    out = []
-    for r in records:
-        for note in r.notes:
-            if note.kind == "choice":
-                out.append(StyledText.styled(f"Note on {r.id or r.kind}.", "i") + f" {note.text} Check it against the design.")
-    return out
-
-
 def results_of(records: Sequence[Record]) -> list[Result]:
     """The records that have a sentence (a Description or a correlation matrix is a table)."""
     return [r for r in records if isinstance(r, Result)]
 
 
-def section_text(records: Sequence[Record], tables: Sequence[TableModel], style: Style, title: str, fmt: str) -> str:
-    """The section as Markdown (``md``), HTML (``html``) or LaTeX (``tex``)."""
-    records = results_of(records)
-    sentences = [render(r, "sentence", style).to(fmt) for r in records]
-    blocks = [write_table(t, fmt) for t in tables] + [c.to(fmt) for c in automatic_choices(records)]
+def run_notes(notes: Sequence[str], title: str) -> str:
+    """The run's notes as Markdown — automatic choices, dropped rows, tables
+    made, markers filled — kept out of the manuscript, with the caution."""
+    lines = [f"# Run notes: {title}", "", CAUTION, ""]
+    lines += [f"- {note}" for note in notes] or ["- nothing to note"]
+    return "\n".join(lines) + "\n"
+
+
+def _latex_head(style: Style, paper: str | None) -> str:
+    m = style.manuscript
+    size = (paper or m.get("paper", "letter")) + "paper"
+    spacing = {1.0: "", 1.5: "\\onehalfspacing\n", 2.0: "\\doublespacing\n"}.get(float(m.get("line_spacing", 1.0)), "")
+    return (
+        "\\documentclass[12pt]{article}\n\\usepackage[T1]{fontenc}\n\\usepackage[utf8]{inputenc}\n"
+        + f"\\usepackage[{size},margin={m.get('margin_in', 1.0):g}in]{{geometry}}\n\\usepackage{{setspace}}\n"
+        + LATEX_PREAMBLE + "\\begin{document}\n" + spacing
+        # flush left, ragged right (APA 7 §2.23), the first-line indent kept; long statistics that must not break stretch the spaces
+        + f"\\raggedright\\setlength{{\\parindent}}{{{m.get('first_line_indent_in', 0.5):g}in}}\\setlength{{\\emergencystretch}}{{3em}}\n"
+    )
+
+
+def _text(block: Block, fmt: str, style: Style) -> str:
+    if isinstance(block, TableModel):
+        return write_table(block, fmt, style)
+    return block.to(fmt)
+
+
+def section_text(blocks: Sequence[Block], style: Style, title: str, fmt: str, *, caution: bool = False, paper: str | None = None) -> str:
+    """The section as Markdown (``md``), HTML (``html``) or LaTeX (``tex``):
+    paragraphs and tables in order; the caution line only when asked."""
     if fmt == "md":
-        return "\n\n".join([f"# {title}", *sentences, *blocks, f"*{CAUTION}*"]) + "\n"
+        parts = [f"# {title}", *(_text(b, fmt, style) for b in blocks)] + ([f"*{CAUTION}*"] if caution else [])
+        return "\n\n".join(p.rstrip("\n") for p in parts) + "\n"
     if fmt == "html":
-        choices = [f"<p>{c.to('html')}</p>" for c in automatic_choices(records)]
-        body = "\n".join([f"<h1>{html.escape(title)}</h1>", *(f"<p>{s}</p>" for s in sentences), *blocks[: len(tables)], *choices,
-                           f"<p><i>{html.escape(CAUTION)}</i></p>"])
-        return f'<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>{html.escape(title)}</title></head><body>\n{body}\n</body></html>\n'
+        body = [f"<h1>{html.escape(title)}</h1>"] + [_text(b, fmt, style) if isinstance(b, TableModel) else f"<p>{b.to('html')}</p>" for b in blocks]
+        body += [f"<p><i>{html.escape(CAUTION)}</i></p>"] if caution else []
+        m = style.manuscript
+        css = (f"body{{font-family:'{m.get('font', 'serif')}',serif;font-size:{m.get('font_size', 12):g}pt;line-height:{m.get('line_spacing', 1.5):g};"
+               f"max-width:6.5in;margin:1in auto}}p{{text-indent:{m.get('first_line_indent_in', 0):g}in;margin:0}}h1{{text-align:center;font-size:1em}}"
+               ".statsetter-table p,table{text-indent:0;line-height:1.2}table{margin:0.5em 0}")
+        return (f'<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>{html.escape(title)}</title>'
+                f"<style>{css}</style></head><body>\n" + "\n".join(body) + "\n</body></html>\n")
     if fmt == "tex":
-        head = "\\documentclass{article}\n\\usepackage[T1]{fontenc}\n\\usepackage[utf8]{inputenc}\n" + LATEX_PREAMBLE + "\\begin{document}\n"
         title_tex = title.replace("\\", "\\textbackslash{}").replace("&", "\\&").replace("%", "\\%")
-        return head + "\n\n".join([f"\\section*{{{title_tex}}}", *sentences, *blocks, f"\\emph{{{CAUTION}}}"]) + "\n\\end{document}\n"
+        parts = [f"\\section*{{{title_tex}}}", *(_text(b, fmt, style) for b in blocks)] + ([f"\\emph{{{CAUTION}}}"] if caution else [])
+        return _latex_head(style, paper) + "\n\n".join(parts) + "\n\\end{document}\n"
     raise ValueError(f"unknown section format {fmt!r}")
 
 
 def write_section(
-    records: Sequence[Record], tables: Sequence[TableModel], style: Style, title: str, targets: dict[str, Path], inputs: Sequence[Path] = ()
+    blocks: Sequence[Block], records: Sequence[Record], style: Style, title: str, targets: dict[str, Path], inputs: Sequence[Path] = (), *,
+    notes: Sequence[str] = (), caution: bool = False, paper: str | None = None,
 ) -> list[tuple[str, Path]]:
-    """Write each format in ``targets`` (md, html, tex, docx, json): [(format, path)]."""
+    """Write each format in ``targets`` (md, html, tex, docx, json, notes): [(format, path)]."""
     from ..files import write_atomic
 
     written = []
     for fmt, path in targets.items():
         if fmt == "json":
             write_atomic(path, dump_records(records), inputs=inputs)
+        elif fmt == "notes":
+            write_atomic(path, run_notes(notes, title), inputs=inputs)
         elif fmt == "docx":
             from .docx_writer import add_runs, results_document, save_document
 
-            document = results_document(results_of(records), style, title=title, tables=tables)
-            for choice in automatic_choices(results_of(records)):
-                add_runs(document.add_paragraph(), choice)
-            add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
+            document = results_document(blocks, style, title=title, paper=paper)
+            if caution:
+                add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
             save_document(document, path, inputs=inputs)
         else:
-            write_atomic(path, section_text(records, tables, style, title, fmt), inputs=inputs)
+            write_atomic(path, section_text(blocks, style, title, fmt, caution=caution, paper=paper), inputs=inputs)
         written.append((fmt, path))
     return written

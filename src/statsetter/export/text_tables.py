@@ -10,9 +10,13 @@ from __future__ import annotations
 
 import csv
 import io
+from typing import TYPE_CHECKING
 
 from ..styled import StyledText
-from ..rendering.tables import TableModel, title_case
+from ..rendering.tables import TableModel, split_decimal, title_case
+
+if TYPE_CHECKING:
+    from ..style.profile import Style
 
 __all__ = ["table_markdown", "table_html", "table_latex", "table_csv", "table_text", "write_table"]
 
@@ -88,44 +92,86 @@ def table_html(t: TableModel) -> str:
     return "\n".join(out) + "\n"
 
 
-def table_latex(t: TableModel) -> str:
-    """A booktabs table; the document needs ``statsetter.styled.LATEX_PREAMBLE``
-    (booktabs, upgreek); ``\\textsubscript`` needs LaTeX 2015 or later."""
+_LATEX_SPACE = 6 * 20  # \\tabcolsep, the space on each side of a column (6 pt), in twips
+
+
+def table_latex(t: TableModel, style: "Style | None" = None) -> str:
+    """A booktabs table: number (bold) and title (italic) flush left above it
+    (APA 7 §7.7), the stub a ragged-right column that wraps between words with
+    a hanging indent (tabularx, to the line width), columns of single numbers
+    aligned on the decimal mark where the style asks, notes below in a
+    minipage. A table whose numbers alone are wider than the page is scaled to
+    it (the last resort). The document needs ``statsetter.styled.LATEX_PREAMBLE``.
+
+    Decimal alignment keeps each number in one cell (so the table reads as
+    written): in a right-aligned column the part after the mark is set in a box
+    of no width (``\\rlap``) followed by an invisible copy of the column's
+    longest such part (``\\phantom``), so every mark falls at the same place."""
+    from .docx_writer import _HANG, _column_widths, _longest_word
+
+    mark = style.decimal_mark if style is not None else "."
+    decimal = t.decimal_columns(mark) if style is not None and style.tables.get("number_align") == "decimal" else (False,) * len(t.columns)
+    widths = _column_widths(t, 10**9)
+    stub_least = max((_longest_word(r.stub.plain()) for r in t.rows), default=0) + _HANG
+    # twips: with the stub at its longest word, do the numbers fit the narrowest page (A4, 1-inch margins: 6.27 in)?
+    too_wide = stub_least + sum(widths[1:]) + 2 * len(widths) * _LATEX_SPACE > 9030
     ncol = len(t.columns)
-    spec = "l" + "".join("r" if c.align == "right" else ("l" if c.align == "left" else "c") for c in t.columns)
-    out = ["\\begin{table}[htbp]", "\\centering"]
+    longest = [""] * ncol
+    for row in t.rows:
+        for j, c in enumerate(row.cells):
+            if decimal[j] and c.text.strip() not in ("", "—", "–"):
+                right = split_decimal(c, mark)[1]
+                if len(right.text) > len(longest[j]):
+                    longest[j] = right.latex()
+    spec = "".join("r" if d or c.align == "right" else ("l" if c.align == "left" else "c") for c, d in zip(t.columns, decimal))
+    stub = ">{\\raggedright\\arraybackslash\\hangindent=1em\\hangafter=1}X" if not too_wide else "l"
+    out = ["\\begin{table}[htbp]", "\\raggedright"]
     if t.number is not None:
-        out.append(f"\\textbf{{Table {t.number}}}\\par")
+        out.append(f"\\textbf{{Table {t.number}}}\\par\\smallskip")
     if t.title:
         out.append(f"\\textit{{{title_case(t.title).latex()}}}\\par\\medskip")
-    out.append(f"\\begin{{tabular}}{{{spec}}}")
+    if too_wide:  # set at its own width, scaled down to the line only if wider (LaTeX measures it)
+        out += ["\\sbox0{%", f"\\begin{{tabular}}{{@{{}}{stub}{spec}@{{}}}}"]
+    else:
+        out.append(f"\\begin{{tabularx}}{{\\linewidth}}{{@{{}}{stub}{spec}@{{}}}}")
     out.append("\\toprule")
+
+    def centred(text: str, j: int) -> str:
+        return f"\\multicolumn{{1}}{{c}}{{{text}}}" if decimal[j] and text else text
+
     if t.spanners:
-        cells = [""]
+        cells = [""] * (ncol + 1)
         rules = []
-        j = 0
+        skip: set[int] = set()
         for s in sorted(t.spanners, key=lambda s: s.start):
-            cells += [""] * (s.start - j)
-            cells.append(f"\\multicolumn{{{s.end - s.start}}}{{c}}{{{s.label.latex()}}}")
+            cells[s.start + 1] = f"\\multicolumn{{{s.end - s.start}}}{{c}}{{{s.label.latex()}}}"
+            skip |= set(range(s.start + 2, s.end + 1))
             rules.append(f"\\cmidrule(lr){{{s.start + 2}-{s.end + 1}}}")
-            j = s.end
-        cells += [""] * (ncol - j)
-        out.append(" & ".join(cells) + " \\\\")
+        out.append(" & ".join(c for k, c in enumerate(cells) if k not in skip) + " \\\\")
         out.append(" ".join(rules))
-    out.append(" & ".join([t.stub_head.latex()] + [c.head.latex() for c in t.columns]) + " \\\\")
+    out.append(" & ".join([t.stub_head.latex()] + [centred(c.head.latex(), j) for j, c in enumerate(t.columns)]) + " \\\\")
     out.append("\\midrule")
     for row in t.rows:
-        stub = ("\\quad " * row.indent) + row.stub.latex()
+        stub_text = ("\\quad " * row.indent) + row.stub.latex()
         if row.cells:
-            out.append(" & ".join([stub] + [c.latex() for c in row.cells]) + " \\\\")
+            cells = [stub_text]
+            for j, c in enumerate(row.cells):
+                if not decimal[j]:
+                    cells.append(c.latex())
+                elif c.text.strip() in ("", "—", "–"):
+                    cells.append(centred(c.latex(), j))
+                else:
+                    left, right = split_decimal(c, mark)
+                    cells.append(f"{left.latex()}\\rlap{{{right.latex()}}}\\phantom{{{longest[j]}}}")
+            out.append(" & ".join(cells) + " \\\\")
         else:
-            out.append(f"\\multicolumn{{{ncol + 1}}}{{l}}{{{stub}}} \\\\")
+            out.append(f"\\multicolumn{{{ncol + 1}}}{{l}}{{{stub_text}}} \\\\")
     out.append("\\bottomrule")
-    out.append("\\end{tabular}")
+    out.append("\\end{tabular}}\\ifdim\\wd0>\\linewidth\\resizebox{\\linewidth}{!}{\\usebox0}\\else\\usebox0\\fi" if too_wide else "\\end{tabularx}")
     notes = t.note_parts()
     if notes:
         out.append("\\par\\medskip")
-        out.append("\\begin{minipage}{\\linewidth}\\raggedright " + " ".join(n.latex() for n in notes) + "\\end{minipage}")
+        out.append("\\begin{minipage}{\\linewidth}\\raggedright\\setlength{\\parindent}{0pt}" + "\\par ".join(n.latex() for n in notes) + "\\end{minipage}")
     out.append("\\end{table}")
     return "\n".join(out) + "\n"
 
@@ -168,9 +214,11 @@ def table_text(t: TableModel) -> str:
 _WRITERS = {"md": table_markdown, "html": table_html, "tex": table_latex, "csv": table_csv, "text": table_text}
 
 
-def write_table(t: TableModel, fmt: str) -> str:
-    try:
-        return _WRITERS[fmt](t)
-    except KeyError:
-        raise ValueError(f"unknown table format {fmt!r}; formats: {', '.join(_WRITERS)}") from None
+def write_table(t: TableModel, fmt: str, style: "Style | None" = None) -> str:
+    """The table in ``fmt``; LaTeX aligns numbers on the ``style``'s decimal mark where it asks."""
+    if fmt not in _WRITERS:
+        raise ValueError(f"unknown table format {fmt!r}; formats: {', '.join(_WRITERS)}")
+    if fmt == "tex":
+        return table_latex(t, style)
+    return _WRITERS[fmt](t)
 

@@ -48,6 +48,11 @@ def table(source: "Record | Iterable[Record]", style: "Style | str | None" = Non
         from .anova_tables import anova_table
 
         return anova_table(records, style, title=title, number=number)
+    if kinds == {"posthoc_pair"}:
+        from .record_tables import posthoc_table
+
+        made = posthoc_table(records, style, title=title or "Pairwise Comparisons")
+        return made.with_number(number) if number is not None else made
     from .record_tables import results_table
 
     made = results_table(records, style, title=title or "Results")

@@ -38,18 +38,52 @@ def _limits(h, ci, quantity: str, null: float) -> StyledText:  # type: ignore[no
     return StyledText(f"[{low}{h.sep}{h.style.keep_together}{high}]")
 
 
+def subject(r: Result) -> str:
+    """What a result is about, in prose: "fatigue score by shift pattern",
+    "hours slept and fatigue score", "the week before and after the trial"."""
+    def named(*roles: str) -> list[str]:
+        return [v.display for v in r.variables if v.role in roles]
+
+    outcome = named("outcome", "y", "column", "scale", "variable")
+    by = named("group", "factor", "predictor", "x", "row")
+    if r.kind in ("pearson", "spearman", "kendall"):
+        return " and ".join(named("x") + named("y"))
+    if r.kind in ("t_paired", "wilcoxon"):
+        first, second = named("first"), named("second")
+        if first and second:
+            return f"{outcome[0] + ', ' if outcome else ''}{first[0]} and {second[0]}"
+    if r.kind.startswith("chi2_independence") or r.kind == "fisher_exact":
+        return " and ".join(named("row") + named("column"))
+    if outcome and by:
+        return f"{outcome[0]} by {' and '.join(dict.fromkeys(by))}"
+    return (outcome or by or [r.kind.replace("_", " ")])[0]
+
+
+def row_label(r: Result, named_twice: bool = False) -> str:
+    """A results table's stub for a record: what it is about, in sentence
+    case, and the test when two rows are about the same thing."""
+    label = subject(r)
+    label = label[:1].upper() + label[1:]
+    if named_twice:
+        test = KINDS.get(r.kind, r.kind).split(" (")[0]
+        variant = r.details.get("variant")
+        label += f" ({variant.capitalize()} {test})" if variant in ("welch", "student") else f" ({test})"
+    return label
+
+
 def results_table(records: Sequence[Result], style: "Style | str | None" = None, title: str = "Results") -> TableModel:
     """Each record's statistic (with df), p, first effect size and its CI, in the style."""
     resolved = load_style(style)
     h = _helpers(resolved)
     rows = []
     level = None
-    for r in records:
+    subjects = [subject(r) for r in records]
+    for r, about in zip(records, subjects):
         e = r.effects[0] if r.effects else None
         ci = e.ci if e is not None else (r.estimate.ci if r.estimate is not None else None)
         if ci is not None:
             level = level or ci.level
-        label = r.id or KINDS.get(r.kind, r.kind)
+        label = row_label(r, subjects.count(about) > 1)
         rows.append(
             Row(
                 StyledText(label),
@@ -69,3 +103,40 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
         rows=tuple(rows),
         general_note=StyledText(f"CI{resolved.keep_together}={resolved.keep_together}confidence interval."),
     )
+
+
+def posthoc_table(records: Sequence[Result], style: "Style | str | None" = None, title: str = "Pairwise Comparisons") -> TableModel:
+    """Post hoc pairs: each comparison (first vs. second group), the mean
+    difference with its CI and the adjusted p; the procedure in the note."""
+    resolved = load_style(style)
+    h = _helpers(resolved)
+    rows, level = [], 0.95
+    for r in records:
+        e = r.estimate
+        if e is not None and e.ci is not None:
+            level = e.ci.level
+        label = " vs. ".join(g.label for g in r.groups) or row_label(r)
+        rows.append(Row(StyledText(label[:1].upper() + label[1:]), (
+            _cell(h.est(r, with_ci=False)), _limits(h, e.ci if e is not None else None, e.name if e is not None else "default", 0.0), p_cell(h.num, r))))
+    first = records[0]
+    procedure = first.details.get("procedure")
+    k = first.details.get("comparisons", len(records))
+    nb = resolved.keep_together
+    note = StyledText.from_markup(
+        f"{resolved.symbol('difference')}{nb}={nb}mean difference (first group minus second); CI{nb}={nb}confidence interval. "
+        + (f"{procedure}: {resolved.symbol('p')} values adjusted for {k} comparisons." if procedure else "")
+    )
+    for n in first.notes:  # the analysis says whether its CIs are adjusted
+        if n.kind == "correction" and "; CI" in n.text:
+            note = note + " " + n.text.split("; ", 1)[-1]
+    if procedure in ("Tukey HSD", "Games–Howell"):
+        note = note + " The CIs hold for the family of comparisons (studentized range)."
+    pct = f"{round(level * 100):g}"
+    return TableModel(
+        title=StyledText(title),
+        stub_head=StyledText("Comparison"),
+        columns=(Column(_cell(resolved.symbol("difference"))), Column(StyledText(f"{pct}% CI")), Column(_cell(resolved.symbol("p")))),
+        rows=tuple(rows),
+        general_note=note,
+    )
+

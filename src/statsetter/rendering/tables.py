@@ -9,13 +9,14 @@ italics and superscripts survive into every format.
 
 from __future__ import annotations
 
+import re
 from dataclasses import dataclass, field
 from typing import Literal
 
 from ..errors import InputError
 from ..styled import StyledText
 
-__all__ = ["Column", "Spanner", "Row", "TableModel", "styled", "title_case"]
+__all__ = ["Column", "Spanner", "Row", "TableModel", "split_decimal", "styled", "title_case"]
 
 # APA 7 §6.17 (memory): in title case, words of three letters or fewer stay
 # lowercase when they are conjunctions, articles or prepositions, unless first.
@@ -33,6 +34,32 @@ def title_case(text: StyledText) -> StyledText:
     return StyledText(cased, text.spans) if len(cased) == len(text.text) else text
 
 Align = Literal["left", "center", "right", "decimal"]
+
+_DASHES = frozenset({"", "—", "–", "-", "−"})
+_NUMBER = re.compile(r"(?:[<>≤≥][ \u00a0\u202f]?)?[−+-]?(?:\d[\d,. \u00a0\u202f\u2009]*)?[.,]?\d+")
+
+
+def _number_shape(cell: StyledText, mark: str) -> str:
+    """``number``, ``dash`` (a dash or blank) or ``text``; trailing stars
+    and superscript note letters do not count."""
+    text = cell.text.strip()
+    if text in _DASHES:
+        return "dash"
+    end = len(text)
+    sup = {i for s in cell.spans if s.style == "sup" for i in range(s.start, s.end)}
+    while end and (text[end - 1] == "*" or end - 1 in sup):
+        end -= 1
+    return "number" if _NUMBER.fullmatch(text[:end]) and ", " not in text and "; " not in text else "text"
+
+
+def split_decimal(cell: StyledText, mark: str = ".") -> tuple[StyledText, StyledText]:
+    """A number cut before its decimal mark: ("−0", ".44"), ("< ", ".001"),
+    ("240", ""); a cell without a mark before a digit is all integer part."""
+    text = cell.text
+    for i, ch in enumerate(text):
+        if ch == mark and i + 1 < len(text) and text[i + 1].isdigit():
+            return cell.split_at(i)
+    return cell, StyledText()
 
 
 def styled(value: "StyledText | str") -> StyledText:
@@ -111,6 +138,21 @@ class TableModel:
             span = next((s for s in self.spanners if s.start <= j < s.end), None)
             out.append(span.label + ": " + col.head if span is not None else col.head)
         return out
+
+    def decimal_columns(self, mark: str = ".") -> tuple[bool, ...]:
+        """For each column: does it hold single numbers ("2.14", "< .001",
+        "−0.44", ".74***", "240") and dashes or blanks only, so that its
+        cells align on the decimal ``mark``? Columns of compound cells
+        ("2.40 (0.59)", "[0.19, 1.03]") and text stay centred."""
+        out = []
+        for j, col in enumerate(self.columns):
+            if col.align in ("left", "right"):
+                out.append(False)
+                continue
+            cells = [r.cells[j] for r in self.rows if r.cells]
+            kinds = [_number_shape(c, mark) for c in cells]
+            out.append("text" not in kinds and "number" in kinds)
+        return tuple(out)
 
     def note_parts(self) -> list[StyledText]:
         """The notes in order: ``Note.`` + general, specific (superscript letters), probability."""

@@ -145,6 +145,7 @@ def _attach(v: Any) -> str | None:
 
 
 _ANY = "*"  # a table whose keys are free, each value checked by the given check
+PAPERS = ("letter", "a4")
 
 SCHEMA: dict[str, Any] = {
     "name": _text,
@@ -191,6 +192,19 @@ SCHEMA: dict[str, Any] = {
         "number_align": _one_of("center", "decimal"),
         "font": _text,
         "font_size": _float(0, 30),
+    },
+    "manuscript": {
+        "paper": _one_of(*PAPERS),
+        "margin_in": _float(0.5, 2),
+        "font": _text,
+        "font_size": _float(8, 16),
+        "line_spacing": _float(1, 3),
+        "table_line_spacing": _float(1, 3),
+        "first_line_indent_in": _float(0, 1),
+        "heading_1": _one_of("center", "left"),
+        "heading_2": _one_of("center", "left"),
+        "headings_bold": _bool,
+        "page_number": _one_of("top right", "bottom center", "none"),
     },
 }
 
@@ -317,6 +331,12 @@ class Style:
     @property
     def tables(self) -> Mapping[str, Any]:
         return self.data.get("tables", MappingProxyType({}))
+
+    @property
+    def manuscript(self) -> Mapping[str, Any]:
+        """The page of a results document the style writes (``[manuscript]``):
+        paper, margins, font, spacing, indent, headings, page number."""
+        return self.data.get("manuscript", MappingProxyType({}))
 
     def symbol(self, name: str) -> str:
         """The markup for a symbol; a name the style does not define is used as is."""
