@@ -72,11 +72,14 @@ def make_chapter(path: Path) -> Path:
 
     d = docx.Document()
     d.add_heading("Chapter 4: Results (invented data)", level=1)
+    d.add_paragraph("[[ref:table_1]] describes the drivers; [[ref:correlations]] gives the correlations of age, service, sleep and fatigue.")
+    d.add_paragraph("[[table:table_1]]")
     d.add_paragraph("Fatigue scale reliability: [[fatigue_alpha]].")
     d.add_paragraph("Drivers who had an incident reported more fatigue: [[fatigue_by_incident]].")
     d.add_paragraph("[[sleep_fatigue|sentence]]")
     d.add_paragraph("Fatigue across shift patterns: [[fatigue_by_shift]]. [[fatigue_by_shift|table]]")
     d.add_paragraph("The rest-break trial: [[rest_break_trial|sentence]]")
+    d.add_paragraph("[[table:correlations]]")
     d.save(str(path))
     return path
 

@@ -41,7 +41,8 @@ def test_every_output_exists(run):
     assert (run / "data" / "invented_driver_survey.csv").read_text(encoding="utf-8").startswith("# INVENTED DATA")
     filled = "\n".join(p.text for p in docx.Document(str(out / "chapter-filled.docx")).paragraphs).replace("\u00a0", " ")
     assert "[[" not in filled
-    assert "α = ." in filled and re.search(r"t\(\d+\.\d+\) = \d", filled) and len(docx.Document(str(out / "chapter-filled.docx")).tables) == 1
+    assert "α = ." in filled and re.search(r"t\(\d+\.\d+\) = \d", filled) and len(docx.Document(str(out / "chapter-filled.docx")).tables) == 3
+    assert "Table 1 describes the drivers; Table 3 gives the correlations" in filled  # [[ref:ID]] follows the chapter's order
 
 
 def test_libreoffice_opens_every_docx(run):

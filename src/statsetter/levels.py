@@ -1,7 +1,7 @@
 """Levels of measurement: declared, read from the data file, or inferred.
 
 What a table reports for a variable follows its level (Stevens, 1946;
-REPORTING-RULES.md "Levels of measurement"). A level comes, in this order,
+docs/reporting-rules.md "Levels of measurement"). A level comes, in this order,
 from the author's declaration, from the file's metadata (SPSS measurement
 levels, pandas categoricals), or from an inference whose reason is reported
 and which is flagged as weak where a wrong guess is likely.

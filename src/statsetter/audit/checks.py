@@ -21,7 +21,7 @@ from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
 from .parsing import Number, Reported
 
-# code: (what it means, the REPORTING-RULES.md rule and its source)
+# code: (what it means, the docs/reporting-rules.md rule and its source)
 CODES: dict[str, tuple[str, str]] = {
     "p-inconsistent": ("the reported p does not follow from the statistic and df", "Numbers: exact p (APA 7 §6.36); consistency as in Nuijten et al. (2016)"),
     "decision-error": ("the inconsistency changes the decision at alpha", "Numbers: decision-preserving p (practice)"),
@@ -45,7 +45,7 @@ CODES: dict[str, tuple[str, str]] = {
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
     "coefficient-inconsistent": (
         "t (or z) does not equal B / SE",
-        "Regression: coefficients as B, SE, β, t, p (REPORTING-RULES); the Wald statistic of a coefficient is B / SE (practice)",
+        "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE (practice)",
     ),
     "effect-inconsistent": (
         "η²p (or η², V, φ) does not fit F or χ² and its df",

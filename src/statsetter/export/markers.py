@@ -278,8 +278,10 @@ def fill_chapter(
     def whole(key: str) -> "TableModel | None":
         if tables and key in tables:
             return tables[key]
-        if key in by_analysis:
-            return lay_out(by_analysis[key], resolved)
+        if key in by_analysis:  # a Description or a correlation matrix is its table; other records are laid out together
+            found = by_analysis[key]
+            whole_records = [r for r in found if not isinstance(r, Result)]
+            return lay_out(whole_records[0] if whole_records else found, resolved)
         return None
 
     def lookup(key: str, form: str):  # type: ignore[no-untyped-def]

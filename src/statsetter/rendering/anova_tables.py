@@ -1,4 +1,4 @@
-"""An analysis of variance as a table (REPORTING-RULES.md "Tables" and
+"""An analysis of variance as a table (docs/reporting-rules.md "Tables" and
 "ANOVA"): one row per source (each term of a factorial ANOVA, or the group
 factor of a one-way ANOVA) with df, F, p and the effect size, the error df
 in its own row, and the sums of squares and the outcome in the note."""

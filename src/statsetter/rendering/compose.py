@@ -81,6 +81,9 @@ def compose(
     notes: list[str] = []
     placed: set[str] = set()
     every = {t.id: t.model for t in tables}
+    for t in tables:  # a table that shows one analysis is also found by the analysis's id ([[table:fatigue_model]])
+        if len(t.sources) == 1:
+            every.setdefault(t.sources[0], t.model)
     number = 0
 
     def put(t: Shown, lead: Iterable[StyledText] = ()) -> None:

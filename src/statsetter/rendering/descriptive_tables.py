@@ -1,6 +1,6 @@
 """The descriptives table ("Table 1") as a TableModel, in a style.
 
-Rows follow REPORTING-RULES.md "Tables": categorical rows as n (%) under the
+Rows follow docs/reporting-rules.md "Tables": categorical rows as n (%) under the
 variable's name, continuous rows as M (SD), ordinal rows as Mdn (IQR). Column
 heads carry each group's n and the Total's N; a spanner names the grouping
 variable. The note defines every abbreviation the table uses, says what the
@@ -268,5 +268,5 @@ def _general_note(d: "Description", lay: _Layout) -> StyledText:
         )
     tested = [v for v in d.variables if v.test is not None]
     if tested:
-        parts.append(f"Each {lay.style.symbol('p')} value is from the test named under its letter.")
+        parts.append(f"Each {lay.style.symbol('p')}{lay.style.keep_together}value is from the test named under its letter.")
     return StyledText.from_markup(" ".join(parts)) if parts else StyledText()

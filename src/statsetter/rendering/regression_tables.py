@@ -1,4 +1,4 @@
-"""A regression as a coefficients table (REPORTING-RULES.md "Tables" and
+"""A regression as a coefficients table (docs/reporting-rules.md "Tables" and
 "Regression"): one row per predictor with B, SE, the CI of B (or of the odds
 ratio) under a spanner, β (linear) or OR (logistic), t or z, and p; the
 model's fit, the N and the reference categories in the note."""

@@ -312,7 +312,7 @@ class Helpers:
         """True when the result does not reach the record's alpha (p ≥ alpha),
         or, without a p, when the interval of its estimate (else its first
         effect size) includes the null value: sentences then assert no
-        direction (ASA statement on p values, 2016; REPORTING-RULES.md)."""
+        direction (ASA statement on p values, 2016; docs/reporting-rules.md)."""
         if r.p is not None:
             return r.p >= r.alpha
         for interval, null in ((r.estimate.ci, r.estimate.null) if r.estimate else (None, 0.0),
