@@ -70,6 +70,13 @@ def test_latex_output_compiles(run, tmp_path):
     log = (tmp_path / "results.log").read_text(encoding="latin-1")
     over = [float(m) for m in re.findall(r"Overfull \\hbox \(([\d.]+)pt too wide\)", log)]
     assert not [o for o in over if o > 1], over
+    # point 2: numbers align on the decimal mark in LaTeX too; the post hoc tables' p values (".970", "< .001", all
+    # three decimals) end at one x position, as pdftotext -bbox reads the compiled page
+    bbox = subprocess.run(["pdftotext", "-bbox", str(tmp_path / "results.pdf"), "-"], check=True, capture_output=True, text=True).stdout
+    ends: dict[float, int] = {}
+    for x1 in re.findall(r'<word xMin="[\d.]+" yMin="[\d.]+" xMax="([\d.]+)" yMax="[\d.]+">\.\d{3}</word>', bbox):
+        ends[round(float(x1) * 2) / 2] = ends.get(round(float(x1) * 2) / 2, 0) + 1
+    assert max(ends.values()) >= 3, ends
 
 
 def test_markdown_output_passes_the_audit(run):
