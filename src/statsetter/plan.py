@@ -80,7 +80,8 @@ _TABLE = {
 }
 _OUTPUTS = {"folder", "docx", "md", "tex", "html", "json", "notes", "allow_outside", "caution", "paper"}
 _OUTPUT_OPTIONS = {"allow_outside": bool, "caution": bool, "paper": str}  # outputs keys that are not files
-_RESERVED_IDS = ("table", "ref")  # chapter markers [[table:ID]] and [[ref:ID]]
+_RESERVED_IDS = ("table", "ref")
+_MARKER_ID = re.compile(r"[A-Za-z0-9_.\-]+")  # an analysis or table id: a chapter marker's key  # chapter markers [[table:ID]] and [[ref:ID]]
 _CHAPTER = {"path", "out"}
 
 
@@ -205,7 +206,7 @@ def load_plan(path: "str | Path") -> Plan:
                 raise plan.fail(where, f"an analysis needs {need!r}")
         if analysis["id"] in ids:
             raise plan.fail(f"{where}.id", f"the id {analysis['id']!r} is used twice")
-        if not re.fullmatch(r"[A-Za-z0-9_.\-]+", str(analysis["id"])):
+        if not _MARKER_ID.fullmatch(str(analysis["id"])):
             raise plan.fail(f"{where}.id", f"{analysis['id']!r}: ids use letters, digits, _, . and - (they are chapter markers)")
         if analysis["id"] in _RESERVED_IDS:
             raise plan.fail(f"{where}.id", f"{analysis['id']!r} is kept for the chapter markers [[table:ID]] and [[ref:ID]]; choose another id")
@@ -230,7 +231,7 @@ def load_plan(path: "str | Path") -> Plan:
             if ref not in ids:
                 raise plan.fail(f"tables[{i}].analyses", f"no analysis with id {ref!r}")
         table_id = str(table.get("id") or f"table_{i + 1}")
-        if not re.fullmatch(r"[A-Za-z0-9_.\-]+", table_id) or table_id in table_ids:
+        if not _MARKER_ID.fullmatch(table_id) or table_id in table_ids:
             raise plan.fail(f"tables[{i}].id", f"{table_id!r}: a table id is used once and uses letters, digits, _, . and - (it is a chapter marker)")
         table_ids.add(table_id)
         plan.tables.append(table)

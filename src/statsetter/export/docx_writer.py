@@ -16,7 +16,7 @@ from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
 from ..styled import StyledText
-from ..rendering.tables import TableModel, split_decimal, title_case
+from ..rendering.tables import TableModel, blank_or_dash, split_decimal, title_case
 
 if TYPE_CHECKING:
     from docx.document import Document
@@ -200,7 +200,7 @@ def _decimal_tabs(table: TableModel, widths: list[int], mark: str) -> list[int]:
             continue
         left = right = 0
         for row in table.rows:
-            if row.cells and row.cells[j].text.strip() not in ("", "—", "–"):
+            if row.cells and not blank_or_dash(row.cells[j]):
                 a, b = split_decimal(row.cells[j], mark)
                 left, right = max(left, _chars(a.plain())), max(right, _chars(b.plain()))
         area = widths[j + 1] - 2 * _MARGIN
@@ -253,7 +253,7 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
         cells = [_cell_xml(stub, "left", False, bottom, hang=True, line=line)]
         if row.cells:
-            cells += [_cell_xml(c, "decimal" if tab and c.text.strip() not in ("", "—", "–") else col.align, False, bottom, 1, tab, line=line)
+            cells += [_cell_xml(c, "decimal" if tab and not blank_or_dash(c) else col.align, False, bottom, 1, tab, line=line)
                       for c, col, tab in zip(row.cells, table.columns, tabs)]
         else:
             cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), line=line))

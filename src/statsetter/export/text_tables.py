@@ -13,7 +13,7 @@ import io
 from typing import TYPE_CHECKING
 
 from ..styled import StyledText
-from ..rendering.tables import TableModel, split_decimal, title_case
+from ..rendering.tables import TableModel, blank_or_dash, split_decimal, title_case
 
 if TYPE_CHECKING:
     from ..style.profile import Style
@@ -119,7 +119,7 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
     longest = [""] * ncol
     for row in t.rows:
         for j, c in enumerate(row.cells):
-            if decimal[j] and c.text.strip() not in ("", "—", "–"):
+            if decimal[j] and not blank_or_dash(c):
                 right = split_decimal(c, mark)[1]
                 if len(right.text) > len(longest[j]):
                     longest[j] = right.latex()
@@ -158,7 +158,7 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
             for j, c in enumerate(row.cells):
                 if not decimal[j]:
                     cells.append(c.latex())
-                elif c.text.strip() in ("", "—", "–"):
+                elif blank_or_dash(c):
                     cells.append(centred(c.latex(), j))
                 else:
                     left, right = split_decimal(c, mark)

@@ -149,17 +149,11 @@ def _table_for(analysis: str, found: list[Record], style: "Style", lay_out) -> S
     return Shown(analysis, model, (analysis,), kind)
 
 
-def _listing(style: "Style", names: Sequence[str]) -> str:
-    serial = bool(style.wording.get("serial_comma", True))
-    if len(names) < 3:
-        return " and ".join(names)
-    return ", ".join(names[:-1]) + (", and " if serial else " and ") + names[-1]
-
-
 def _callout(t: Shown, number: int, by_analysis: Mapping[str, list[Record]], style: "Style") -> StyledText:
     """One sentence that sends the reader to the table (written once per table)."""
     found = [r for s in t.sources for r in by_analysis.get(s, [])]
     results = [r for r in found if isinstance(r, Result)]
+    listing = _helpers(style).listing
     head = f"Table {number}"
     if t.kind == "descriptives":
         d = next((r for r in found if isinstance(r, Description)), None)
@@ -167,8 +161,8 @@ def _callout(t: Shown, number: int, by_analysis: Mapping[str, list[Record]], sty
         return StyledText(f"{head} describes the sample{group}.")
     if t.kind == "correlations":
         m = next((r for r in found if isinstance(r, CorrelationMatrix)), None)
-        names = _listing(style, [m.labels.get(n, n) for n in m.names]) if m is not None else "the variables"
-        what = _listing(style, ["means", "standard deviations", "correlations"]) if any(c.head.plain() == "M" for c in t.model.columns) else "correlations"
+        names = listing([m.labels.get(n, n) for n in m.names]) if m is not None else "the variables"
+        what = listing(["means", "standard deviations", "correlations"]) if any(c.head.plain() == "M" for c in t.model.columns) else "correlations"
         return StyledText(f"{head} gives the {what} of {names}.")
     if t.kind == "regression" and results:
         model = next((r for r in results if r.kind in _SUMMARY), results[0])
@@ -178,7 +172,7 @@ def _callout(t: Shown, number: int, by_analysis: Mapping[str, list[Record]], sty
     if results and results[0].kind == "posthoc_pair":
         return StyledText(f"{head} gives every pair.")
     if results:
-        return StyledText(f"{head} gives the tests of {_listing(style, list(dict.fromkeys(subject(r) for r in results)))}.")
+        return StyledText(f"{head} gives the tests of {listing(list(dict.fromkeys(subject(r) for r in results)))}.")
     return StyledText(f"{head} gives {t.model.title.plain()[:1].lower() + t.model.title.plain()[1:]}.")
 
 
@@ -195,7 +189,7 @@ def _pairs_summary(pairs: Sequence[Result], style: "Style") -> StyledText:
     if not below:
         return StyledText.from_markup(f"{lead}none {p_below}.")
     count = "all" if len(below) == len(pairs) else _NUMBER_WORDS.get(len(below), str(len(below)))
-    return StyledText.from_markup(f"{lead}{count} {p_below}: {escape_markup(_listing(style, below))}.")
+    return StyledText.from_markup(f"{lead}{count} {p_below}: {escape_markup(h.listing(below))}.")
 
 
 _NUMBER_WORDS = dict(enumerate("zero one two three four five six seven eight nine".split()))  # APA 7 §6.32: words below 10

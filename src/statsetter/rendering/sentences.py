@@ -291,8 +291,10 @@ class Helpers:
         """A model's predictors listed in a sentence, from its variables (or
         the list its details give)."""
         names = [v.display for v in r.variables if v.role == "predictor"]
-        if not names:
-            return str(r.details.get("predictors", ""))
+        return self.listing(names) if names else str(r.details.get("predictors", ""))
+
+    def listing(self, names: "list[str]") -> str:
+        """Items in a sentence: "a and b", "a, b, and c" (the style's serial comma)."""
         if len(names) < 3:
             return " and ".join(names)
         return ", ".join(names[:-1]) + (", and " if self._serial else " and ") + names[-1]

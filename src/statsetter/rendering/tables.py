@@ -16,7 +16,7 @@ from typing import Literal
 from ..errors import InputError
 from ..styled import StyledText
 
-__all__ = ["Column", "Spanner", "Row", "TableModel", "split_decimal", "styled", "title_case"]
+__all__ = ["Column", "Spanner", "Row", "TableModel", "blank_or_dash", "split_decimal", "styled", "title_case"]
 
 # APA 7 §6.17 (memory): in title case, words of three letters or fewer stay
 # lowercase when they are conjunctions, articles or prepositions, unless first.
@@ -43,13 +43,18 @@ def _number_shape(cell: StyledText, mark: str) -> str:
     """``number``, ``dash`` (a dash or blank) or ``text``; trailing stars
     and superscript note letters do not count."""
     text = cell.text.strip()
-    if text in _DASHES:
+    if blank_or_dash(cell):
         return "dash"
     end = len(text)
     sup = {i for s in cell.spans if s.style == "sup" for i in range(s.start, s.end)}
     while end and (text[end - 1] == "*" or end - 1 in sup):
         end -= 1
     return "number" if _NUMBER.fullmatch(text[:end]) and ", " not in text and "; " not in text else "text"
+
+
+def blank_or_dash(cell: StyledText) -> bool:
+    """A cell holding nothing or only a dash: centred, not aligned on a mark."""
+    return cell.text.strip() in _DASHES
 
 
 def split_decimal(cell: StyledText, mark: str = ".") -> tuple[StyledText, StyledText]:
