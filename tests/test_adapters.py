@@ -201,12 +201,13 @@ def test_scipy_anova_tukey_and_ranks(penguins):
 def test_scipy_linregress(penguins):
     ours = linear_regression(penguins, "body_mass_g", ["bill_length_mm"])
     res = stats.linregress(penguins.bill_length_mm, penguins.body_mass_g)
-    model, coefficient = to_records(res, n=len(penguins), labels={"x": "bill_length_mm"})
-    assert same(model, ours[0], ("statistic", "p", "R2", "R2_adj", "df1")) >= 6
-    assert same(coefficient, ours[1], ("statistic", "estimate", "estimate.se", "estimate.low", "beta")) >= 8
+    model, intercept, coefficient = to_records(res, n=len(penguins), labels={"x": "bill_length_mm"})
+    assert same(model, ours[0], ("statistic", "p", "R2", "R2_adj", "df1", "R2.low", "R2.high")) >= 8
+    assert same(intercept, ours[1], ("statistic", "p", "estimate", "estimate.se", "estimate.low", "estimate.high")) >= 6
+    assert same(coefficient, ours[2], ("statistic", "estimate", "estimate.se", "estimate.low", "beta")) >= 8
     full = to_records(res, samples=[penguins.bill_length_mm, penguins.body_mass_g], groups=["bill_length_mm", "body_mass_g"])
-    assert [r.kind for r in full] == ["linear_model", "linear_coefficient"]
-    assert same(full[1], ours[1], ("statistic", "beta")) >= 8
+    assert [r.kind for r in full] == ["linear_model", "linear_coefficient", "linear_coefficient"]
+    assert same(full[2], ours[2], ("statistic", "beta")) >= 8
 
 
 # -- pingouin ------------------------------------------------------------------
@@ -311,14 +312,15 @@ def test_pingouin_regressions(penguins):
     key = lambda r: r.details.get("term", r.kind)  # noqa: E731
     assert same_all(to_records(frame), ours, key, ("statistic", "p")) >= 20
     full = to_records(frame, data=penguins, columns={"outcome": "body_mass_g", "predictors": ["bill_length_mm", "flipper_length_mm"]})
-    assert same_all(full, ours, key, ("statistic",)) >= 25 and all(r.effects for r in full[1:])
+    assert same_all(full, ours, key, ("statistic",)) >= 25 and all(r.effects for r in full[1:] if not r.details.get("intercept"))
+    assert full[1].details["intercept"] and not full[1].effects  # the intercept: B, SE, t, p and CI, no β
     logit = logistic_regression(penguins, "male", ["body_mass_g", "bill_depth_mm"])
     # pingouin fits with scikit-learn's newton-cg, by default to tol 1e-8 (estimates within about 1e-9 of the
     # maximum-likelihood fit); asked for tol 1e-12 it converges, and the records agree to 1e-10
     lframe = pg.logistic_regression(penguins[["body_mass_g", "bill_depth_mm"]], penguins.male, tol=1e-12, max_iter=10000)
     assert same_all(to_records(lframe), logit, key, ("statistic", "p", "OR", "OR.low", "estimate.se")) >= 16
     lfull = to_records(lframe, data=penguins, columns={"outcome": "male", "predictors": ["body_mass_g", "bill_depth_mm"]})
-    assert [r.kind for r in lfull] == ["logistic_model", "logistic_coefficient", "logistic_coefficient"]
+    assert [r.kind for r in lfull] == ["logistic_model"] + ["logistic_coefficient"] * 3
 
 
 # -- statsmodels ---------------------------------------------------------------
@@ -337,7 +339,7 @@ def test_statsmodels_fits(penguins):
     unweighted = linear_regression(penguins, "body_mass_g", ["bill_length_mm"])
     wrecs = to_records(wls)
     assert same_all(wrecs, unweighted, key, ("statistic", "p", "estimate.low", "R2")) >= 15
-    assert not wrecs[1].effects and "weighted" in wrecs[1].notes[0].text
+    assert wrecs[1].details["intercept"] and not wrecs[2].effects and "weighted" in wrecs[2].notes[0].text
     fair = sm.datasets.fair.load_pandas().data
     ours_fair = linear_regression(fair, "affairs", ["age", "yrs_married"])
     fair_fit = sm.OLS(fair.affairs, sm.add_constant(fair[["age", "yrs_married"]])).fit()

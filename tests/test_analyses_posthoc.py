@@ -91,15 +91,33 @@ def test_anova_table_against_statsmodels(penguins):
     data = penguins.dropna(subset=["body_mass_g", "species", "sex"])
     ref = sm.stats.anova_lm(smf.ols("body_mass_g ~ C(species) * C(sex)", data=data).fit(), typ=2)
     table = anova_table(terms, "apa7")
-    assert [c.head.text for c in table.columns] == ["df", "F", "p", "η2p"]
+    assert [c.head.text for c in table.columns] == ["SS", "df", "MS", "F", "p", "η2p", "95% CI"]
     rows = {r.stub.text: [c.text for c in r.cells] for r in table.rows}
     for term, key in (("species", "C(species)"), ("sex", "C(sex)"), ("species × sex", "C(species):C(sex)")):
-        label = next(name for name in rows if name.replace(" ", "") == term.replace(" ", "") or name == term)
-        df, f, p, eta = rows[label]
+        label = term[:1].upper() + term[1:]  # stubs in sentence case (APA 7 §7.12, memory)
+        ss_cell, df, ms, f, p, eta, ci = rows[label]
+        ss = ref.loc[key, "sum_sq"]
+        assert ss_cell == num.number(ss, "SS") and ms == num.number(ss / ref.loc[key, "df"], "SS")
         assert df == num.df(ref.loc[key, "df"]) and f == num.number(ref.loc[key, "F"], "F")
         assert p == "< .001" or p == num.p(ref.loc[key, "PR(>F)"])[1]
-        ss = ref.loc[key, "sum_sq"]
         assert eta == num.number(ss / (ss + ref.loc["Residual", "sum_sq"]), "eta2_p")
-    assert rows["Error"][0] == num.df(ref.loc["Residual", "df"])
+        assert ci.startswith("[") and ci.endswith("]")
+    error = ref.loc["Residual"]
+    assert rows["Error"][:3] == [num.number(error["sum_sq"], "SS"), num.df(error["df"]), num.number(error["sum_sq"] / error["df"], "SS")]
+    # the corrected total: Σ(y − ȳ)² on N − 1 df; Type II rows of an unbalanced design do not add up to it, and the note says so
+    total = ((data.body_mass_g - data.body_mass_g.mean()) ** 2).sum()
+    assert rows["Total"][:2] == [num.number(total, "SS"), num.df(len(data) - 1)]
+    assert "do not add up to the total" in table.general_note.text
+    # one-way (R's PlantGrowth, anova(lm(weight ~ group)): SS 3.76634 and 10.49209 on 2 and 27 df): rows that add up, no such note
+    from open_data import PLANTS
+
+    from statsetter.analyses import anova_oneway
+
+    oneway = anova_table([anova_oneway(PLANTS, "weight", "group").main], "apa7")
+    rows = {r.stub.text: [c.text for c in r.cells] for r in oneway.rows}
+    assert rows["Group"][:3] == ["3.77", "2", "1.88"] and rows["Error"][:3] == ["10.49", "27", "0.39"] and rows["Total"][:2] == ["14.26", "29"]
+    assert "add up" not in oneway.general_note.text and [c.head.text for c in oneway.columns][-2:] == ["η2", "95% CI"]
+    welch = anova_table([anova_oneway(PLANTS, "weight", "group", variant="welch").main], "apa7")
+    assert [c.head.text for c in welch.columns] == ["F", "df1", "df2", "p", "η2", "95% CI"] and "Error" not in [r.stub.text for r in welch.rows]
     with pytest.raises(InputError, match="one factorial ANOVA"):
         anova_table([], "apa7")

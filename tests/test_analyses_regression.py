@@ -31,7 +31,7 @@ def test_linear_against_formula_api(penguins):
     assert model.statistic.value == pytest.approx(ref.fvalue, rel=REL)
     assert model.statistic.df == (ref.df_model, ref.df_resid)
     assert model.p == pytest.approx(ref.f_pvalue, rel=REL)
-    names = {"flipper_length_mm": "flipper_length_mm", "species[Chinstrap]": "C(species)[T.Chinstrap]",
+    names = {"Intercept": "Intercept", "flipper_length_mm": "flipper_length_mm", "species[Chinstrap]": "C(species)[T.Chinstrap]",
              "species[Gentoo]": "C(species)[T.Gentoo]"}
     ci = ref.conf_int()
     for r in coefs:
@@ -41,14 +41,15 @@ def test_linear_against_formula_api(penguins):
         assert r.statistic.value == pytest.approx(ref.tvalues[term], rel=REL)
         assert r.p == pytest.approx(ref.pvalues[term], rel=REL)
         assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.loc[term, 0], ci.loc[term, 1]), rel=REL)
-    flipper = coefs[0]
+    flipper = coefs[1]
     beta = ref.params["flipper_length_mm"] * data.flipper_length_mm.std() / data.body_mass_g.std()
     assert flipper.effect("beta").value == pytest.approx(beta, rel=REL)
     assert "reference category Adelie" in " ".join(n.text for n in model.notes)
 
 
 def test_hierarchical_f_change(penguins):
-    (step,) = hierarchical_steps(penguins, "body_mass_g", [["flipper_length_mm"], ["species", "sex"]])
+    step, *models = hierarchical_steps(penguins, "body_mass_g", [["flipper_length_mm"], ["species", "sex"]])
+    assert [(r.kind, r.details.get("step")) for r in models if r.kind == "linear_model"] == [("linear_model", 1), ("linear_model", 2)]
     data = penguins.dropna(subset=["body_mass_g", "flipper_length_mm", "species", "sex"])
     small = smf.ols("body_mass_g ~ flipper_length_mm", data=data).fit()
     big = smf.ols("body_mass_g ~ flipper_length_mm + C(species) + C(sex)", data=data).fit()
@@ -67,12 +68,13 @@ def test_logistic_against_formula_api(penguins):
     n = ref.nobs
     nagelkerke = (1 - math.exp(2 / n * (ref.llnull - ref.llf))) / (1 - math.exp(2 / n * ref.llnull))
     assert model.effect("R2_nagelkerke").value == pytest.approx(nagelkerke, rel=1e-9)
-    for r in coefs:
+    assert coefs[0].details["intercept"] and coefs[0].estimate.value == pytest.approx(ref.params["Intercept"], rel=1e-7)
+    for r in coefs[1:]:
         term = r.details["term"]
         assert r.estimate.value == pytest.approx(ref.params[term], rel=1e-7)
         assert r.effect("OR").value == pytest.approx(math.exp(ref.params[term]), rel=1e-7)
         assert r.statistic.value == pytest.approx(ref.tvalues[term], rel=1e-7)
-    assert "OR = " in render(coefs[0], "stats").plain()
+    assert "OR = " in render(coefs[1], "stats").plain()
 
 
 @pytest.mark.parametrize(
@@ -94,7 +96,8 @@ def test_bad_input(penguins, call, message):
 def test_regression_tables_against_the_formula_api(penguins):
     # every cell of the coefficients table is statsmodels' number (formula interface) put
     # through the style's number engine; the table has the APA anatomy (REPORTING-RULES
-    # "Tables": a spanner over the CI limits, abbreviations and the model's fit in the note)
+    # "Tables": the intercept first, a spanner over the CI limits, abbreviations and the
+    # model's fit in the note)
     from statsetter import load_style
     from statsetter.rendering.regression_tables import regression_table
     from statsetter.style import numbers_for
@@ -107,14 +110,18 @@ def test_regression_tables_against_the_formula_api(penguins):
     table = regression_table(records, "apa7")
     assert [c.head.text for c in table.columns] == ["B", "SE", "LL", "UL", "β", "t", "p"]
     assert table.spanners[0].label.text == "95% CI" and (table.spanners[0].start, table.spanners[0].end) == (2, 4)
-    for row, term in zip(table.rows, ("flipper_length_mm", "bill_depth_mm")):
+    assert [r.stub.text for r in table.rows] == ["Intercept", "Flipper_length_mm", "Bill_depth_mm"]
+    for row, term in zip(table.rows, ("Intercept", "flipper_length_mm", "bill_depth_mm")):
         cells = [c.text for c in row.cells]
         assert cells[0] == num.number(ref.params[term], "B") and cells[1] == num.number(ref.bse[term], "SE")
         assert (cells[2], cells[3]) == num.interval(ci.loc[term, 0], ci.loc[term, 1], "B")
         assert cells[5] == num.number(ref.tvalues[term], "t")
         assert cells[6] == "< .001" or cells[6] == num.p(ref.pvalues[term])[1]
+    assert table.rows[0].cells[4].text == ""  # no β for the intercept
     note = table.general_note.text.replace("\u00a0", " ")
     assert f"N = {int(ref.nobs)}." in note and "LL = lower limit" in note and f"F(2, {int(ref.df_resid)})" in note
+    no_intercept = regression_table(records, load_style(_style_file("[tables]\nintercept = false\n")))
+    assert [r.stub.text for r in no_intercept.rows] == ["Flipper_length_mm", "Bill_depth_mm"]
 
     model, *coefs = logistic_regression(penguins, "sex", ["bill_depth_mm", "flipper_length_mm"])
     data = penguins.dropna(subset=["sex", "bill_depth_mm", "flipper_length_mm"]).assign(male=lambda d: (d.sex == "male").astype(int))
@@ -123,11 +130,66 @@ def test_regression_tables_against_the_formula_api(penguins):
     logistic = regression_table([model, *coefs], "apa7")
     assert [c.head.text for c in logistic.columns] == ["B", "SE", "OR", "LL", "UL", "z", "p"]
     assert logistic.spanners[0].label.text == "95% CI for OR"
-    first = [c.text for c in logistic.rows[0].cells]
+    first = [c.text for c in logistic.rows[1].cells]
     assert first[2] == num.number(math.exp(lref.params["bill_depth_mm"]), "OR")
     assert (first[3], first[4]) == num.interval(math.exp(lci.loc["bill_depth_mm", 0]), math.exp(lci.loc["bill_depth_mm", 1]), "OR", 1.0)
-    with pytest.raises(InputError, match="one linear or one logistic regression"):
+    assert logistic.rows[0].cells[0].text == num.number(lref.params["Intercept"], "B") and logistic.rows[0].cells[2].text == ""
+    with pytest.raises(InputError, match="linear or of logistic regressions"):
         regression_table([model, records[1]], "apa7")
     other = linear_regression(penguins, "bill_length_mm", ["flipper_length_mm"])
-    with pytest.raises(InputError, match="the records hold 2 regressions"):
+    with pytest.raises(InputError, match="2 outcomes"):
         regression_table(records + other, "apa7")
+
+
+def _style_file(body):
+    import tempfile
+    from pathlib import Path
+
+    path = Path(tempfile.mkdtemp()) / "house.toml"
+    path.write_text('extends = "apa7"\n' + body)
+    return str(path)
+
+
+def test_nominal_predictors_are_headed_with_their_reference_and_columns_keep_one_decimals(penguins):
+    # APA 7 sample regression tables (practice): a nominal predictor's categories indented under
+    # its name, the reference category marked; like values in a column get like decimals
+    from statsetter.records.naming import name_records
+    from statsetter.rendering.regression_tables import regression_table
+
+    records = name_records("m", linear_regression(penguins, "bill_length_mm", ["body_mass_g", "species"]))
+    table = regression_table(records, "apa7")
+    stubs = [(r.stub.text, r.indent, r.heading) for r in table.rows]
+    assert stubs == [("Intercept", 0, False), ("Body_mass_g", 0, False), ("Species", 0, True), ("Adelie (ref.)", 1, False),
+                     ("Chinstrap", 1, False), ("Gentoo", 1, False)]
+    assert table.rows[3].cells[0].text == "—" and "ref. = reference category" in table.general_note.text.replace("\u00a0", " ")
+    b = [r.cells[0].text for r in table.rows if r.cells and r.cells[0].text != "—"]
+    decimals = {len(x.split(".")[1]) for x in b}
+    # body_mass_g's B is about 0.004: never printed as 0.00, so the whole column shows three decimals
+    assert decimals == {3}, b
+
+
+def test_hierarchical_models_side_by_side_against_the_formula_api(penguins):
+    # each step's model is statsmodels' fit of the same rows; ΔR² and ΔF are compare_f_test's
+    from statsetter import load_style
+    from statsetter.records.naming import name_records
+    from statsetter.rendering.regression_tables import regression_table
+    from statsetter.style import numbers_for
+
+    num = numbers_for(load_style("apa7"))
+    records = name_records("steps", hierarchical_steps(penguins, "body_mass_g", [["flipper_length_mm"], ["species"]]))
+    data = penguins.dropna(subset=["body_mass_g", "flipper_length_mm", "species"])
+    small = smf.ols("body_mass_g ~ flipper_length_mm", data=data).fit()
+    big = smf.ols("body_mass_g ~ flipper_length_mm + C(species)", data=data).fit()
+    table = regression_table(records, "apa7")
+    assert [s.label.text for s in table.spanners] == ["Model 1", "Model 2"]
+    assert [c.head.text for c in table.columns] == ["B", "95% CI", "β", "p"] * 2
+    rows = {r.stub.text: [c.text for c in r.cells] for r in table.rows}
+    assert rows["Flipper_length_mm"][0] == num.number(small.params["flipper_length_mm"], "B")
+    assert rows["Flipper_length_mm"][4] == num.number(big.params["flipper_length_mm"], "B")
+    assert rows["Gentoo"][:4] == ["", "", "", ""] and rows["Gentoo"][4] == num.number(big.params["C(species)[T.Gentoo]"], "B")
+    assert rows["Adelie (ref.)"] == ["", "", "", "", "—", "", "", ""]
+    assert rows["R2"][0] == num.number(small.rsquared, "R2") and rows["R2"][4] == num.number(big.rsquared, "R2")
+    f, p, dk = big.compare_f_test(small)
+    assert rows["ΔR2"][4] == num.number(big.rsquared - small.rsquared, "delta_R2")
+    assert rows["ΔF (df)"][4] == f"{num.number(f, 'F')} ({int(dk)}, {int(big.df_resid)})" and rows["ΔF (df)"][7] == "< .001"
+    assert rows["N"] == [str(int(big.nobs)), "", "", "", str(int(big.nobs)), "", "", ""]

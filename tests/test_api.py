@@ -142,7 +142,7 @@ def test_former_keywords_still_work_with_a_warning(penguins):
 
 def test_ids_say_what_a_record_is_and_survive_a_change_of_data(penguins):
     model = name_records("mass", linear_regression(penguins, "body_mass_g", ["flipper_length_mm", "species"]))
-    assert [r.id for r in model] == ["mass", "mass:flipper_length_mm", "mass:species.Chinstrap", "mass:species.Gentoo"]
+    assert [r.id for r in model] == ["mass", "mass:intercept", "mass:flipper_length_mm", "mass:species.Chinstrap", "mass:species.Gentoo"]
     fewer = name_records("mass", linear_regression(penguins[penguins.island != "Torgersen"], "body_mass_g", ["flipper_length_mm", "species"]))
     assert [r.id for r in fewer] == [r.id for r in model]  # other data, same ids
     matrix = name_records("traits", correlation_matrix(penguins, ["bill_length_mm", "body_mass_g", "flipper_length_mm"]))
@@ -222,3 +222,22 @@ def test_the_correlation_table_has_means_sds_and_the_right_n(penguins):
     assert [c.head.plain() for c in correlation_table(m, means=False).columns] == ["1", "2"]
     back = load_records(dump_records([m]))[0]
     assert (back.mean == m.mean).all() and back.rows == 344
+
+
+def test_the_correlation_table_can_give_each_r_its_interval_underneath(penguins):
+    # APA 7's sample correlation table (practice): each r's CI in brackets on the row under it;
+    # the limits are Fisher-z limits, here against scipy's pearsonr(...).confidence_interval()
+    from scipy import stats
+
+    from statsetter.rendering.correlation_tables import correlation_table
+
+    cols = ["bill_length_mm", "bill_depth_mm", "body_mass_g"]
+    data = penguins.dropna(subset=cols)
+    m = correlation_matrix(data, cols).main
+    laid = correlation_table(m, intervals=True)
+    assert [r.stub.plain() for r in laid.rows] == ["1. Bill_length_mm", "2. Bill_depth_mm", "", "3. Body_mass_g", ""]
+    ci = stats.pearsonr(data.body_mass_g, data.bill_depth_mm).confidence_interval(0.95)
+    low, high = (f"{x:.2f}".replace("-", "−").replace("0.", ".", 1) for x in (ci.low, ci.high))
+    assert laid.rows[4].cells[3].plain() == f"[{low}, {high}]"  # under r(3, 2), after the M and SD columns
+    assert [c.plain() for c in laid.rows[4].cells[:2]] == ["", ""]  # no M or SD on the interval row
+    assert "Values in brackets are the 95% CI of each r." in laid.general_note.plain()

@@ -95,7 +95,7 @@ def test_a_nominal_predictor_from_the_file_is_dummy_coded(folder, heart):
     assert model.statistic.value == pytest.approx(ref.fvalue, rel=TOL)
     assert model.effect("R2").value == pytest.approx(ref.rsquared, rel=TOL)
     coefs = [r for r in out.records if r.kind == "linear_coefficient"]
-    assert len(coefs) == 4
+    assert len(coefs) == 5 and coefs[0].details["intercept"]
     for code in (1, 2, 3):
         r = next(c for c in coefs if c.details["term"] == f"cp[{CP[code]}]")
         term = f"C(cp, Treatment(reference=0))[T.{code}]"

@@ -127,7 +127,7 @@ def test_a_regression_table_needs_a_regression(folder, capsys):
     text = GOOD.replace('[[tables]]\nkind = "descriptives"\nvariables = ["body_mass_g", "species"]\ngroup = "sex"\n',
                         '[[tables]]\nkind = "regression"\nanalysis = "mass_by_sex"\n')
     assert 'kind = "regression"' in text
-    with pytest.raises(PlanError, match=r"\(table 1\): regression table: give the records of one linear or one logistic regression"):
+    with pytest.raises(PlanError, match=r"\(table 1\): regression table: give the records of linear or of logistic regressions"):
         run_plan(load_plan(write(folder, text)))
 
 

@@ -31,11 +31,11 @@ def test_records_lists_every_id_with_a_description(records_file, capsys):
     assert main(["records", str(records_file)]) == 0
     lines = capsys.readouterr().out.splitlines()
     ids = [line.split()[0] for line in lines]
-    assert ids == ["mass", "mass:flipper_length_mm", "mass:species.Chinstrap", "mass:species.Gentoo", "bills",
+    assert ids == ["mass", "mass:intercept", "mass:flipper_length_mm", "mass:species.Chinstrap", "mass:species.Gentoo", "bills",
                    "bills:bill_length_mm~bill_depth_mm", "table_1"]
     assert "linear regression model" in lines[0] and "n = 342" in lines[0]  # 344 penguins, 2 without flipper length
-    assert "species = Chinstrap" in lines[2]
-    assert "correlation matrix of 2 variables" in lines[4] and "descriptives of 1 variable(s) by sex" in lines[6]
+    assert "intercept" in lines[1].lower() and "species = Chinstrap" in lines[3]
+    assert "correlation matrix of 2 variables" in lines[5] and "descriptives of 1 variable(s) by sex" in lines[7]
 
 
 def test_render_by_id_exact_or_a_whole_analysis(records_file, capsys):

@@ -1,6 +1,7 @@
 """Formulas shared by the analyses and the audit: the noncentral-t interval
-of a standardised difference, Hedges' exact J, Fisher's z interval of r.
-Plain numbers in, plain numbers out; scipy is imported on use."""
+of a standardised difference, the noncentral-F interval of a proportion of
+variance explained, Hedges' exact J, Fisher's z interval of r. Plain numbers
+in, plain numbers out; scipy is imported on use."""
 
 from __future__ import annotations
 
@@ -8,7 +9,7 @@ import math
 
 from .errors import InputError
 
-__all__ = ["nct_ci", "hedges_j", "fisher_z_ci"]
+__all__ = ["nct_ci", "ncf_ci", "variance_explained_ci", "hedges_j", "fisher_z_ci"]
 
 _MAX_DOUBLINGS = 64  # a bracket of 2^64 around t: far beyond any finite statistic
 
@@ -16,7 +17,7 @@ _MAX_DOUBLINGS = 64  # a bracket of 2^64 around t: far beyond any finite statist
 def nct_ci(t: float, df: float, level: float) -> tuple[float, float]:
     """Limits of the noncentrality parameter: values whose noncentral t
     distribution puts ``t`` at the upper and lower (1 - level) / 2 quantile."""
-    from scipy import optimize, stats
+    from scipy import stats
 
     alpha = (1 - level) / 2
     if not (math.isfinite(t) and math.isfinite(df) and df > 0):
@@ -30,26 +31,58 @@ def nct_ci(t: float, df: float, level: float) -> tuple[float, float]:
 
     def solve(target: float) -> float:
         f = lambda ncp: cdf(ncp) - target  # noqa: E731
-        step = 1.0
-        lo = hi = t
-        for _ in range(_MAX_DOUBLINGS):  # bracket the root; the bound is reached only for absurd inputs
-            if not f(lo) < 0:
-                break
-            lo -= step
-            step *= 2
-        else:
-            raise InputError(f"t = {t:g}, df = {df:g}: the interval search did not converge")
-        step = 1.0
-        for _ in range(_MAX_DOUBLINGS):
-            if not f(hi) > 0:
-                break
-            hi += step
-            step *= 2
-        else:
-            raise InputError(f"t = {t:g}, df = {df:g}: the interval search did not converge")
-        return optimize.brentq(f, lo, hi, xtol=1e-13, rtol=1e-15, maxiter=500)
+        return _root(f, _widen(f, t, -1.0, f"t = {t:g}, df = {df:g}"), _widen(f, t, 1.0, f"t = {t:g}, df = {df:g}"))
 
     return solve(1 - alpha), solve(alpha)
+
+
+def _widen(f, start: float, direction: float, what: str) -> float:  # type: ignore[no-untyped-def]
+    """A point beyond the root of the decreasing ``f`` on the side ``direction``
+    points to (f < 0 below a root for direction −1 is the bracket's lower end)."""
+    step, x = 1.0, start
+    for _ in range(_MAX_DOUBLINGS):  # the bound is reached only for absurd inputs
+        if (f(x) >= 0) if direction < 0 else (f(x) <= 0):
+            return x
+        x += direction * step
+        step *= 2
+    raise InputError(f"{what}: the interval search did not converge")
+
+
+def _root(f, low: float, high: float) -> float:  # type: ignore[no-untyped-def]
+    from scipy import optimize
+
+    return float(optimize.brentq(f, low, high, xtol=1e-13, rtol=1e-15, maxiter=500))
+
+
+def ncf_ci(F: float, df1: float, df2: float, level: float) -> tuple[float, float]:
+    """Limits of the noncentrality parameter λ of an F(df1, df2) statistic:
+    the λ whose noncentral F puts ``F`` at its upper and lower (1 − level)/2
+    quantile, 0 where even λ = 0 puts it lower (Steiger, 2004, Psychological
+    Methods 9, 164–182)."""
+    from scipy import special
+
+    if not (math.isfinite(F) and F >= 0 and df1 > 0 and df2 > 0 and math.isfinite(df2)):
+        raise InputError(f"F = {F!r} with df = ({df1!r}, {df2!r}): no interval can be computed")
+    alpha = (1 - level) / 2
+    what = f"F({df1:g}, {df2:g}) = {F:g}"
+
+    def limit(target: float) -> float:
+        f = lambda ncp: float(special.ncfdtr(df1, df2, ncp, F)) - target  # noqa: E731 (decreasing in λ)
+        if f(0.0) <= 0:
+            return 0.0
+        return _root(f, 0.0, _widen(f, max(F * df1, 1.0), 1.0, what))
+
+    return limit(1 - alpha), limit(alpha)
+
+
+def variance_explained_ci(F: float, df1: float, df2: float, level: float) -> tuple[float, float]:
+    """CI of a population proportion of variance explained (η², partial η²,
+    ω², R²) from its F test: λ / (λ + df1 + df2 + 1) at each limit of λ
+    (Steiger, 2004, eq. 17 ff.; for a partial effect df1 + df2 + 1 stands
+    for the N of the effect and its error alone)."""
+    n = df1 + df2 + 1
+    low, high = ncf_ci(F, df1, df2, level)
+    return low / (low + n), high / (high + n)
 
 
 def hedges_j(df: float) -> float:

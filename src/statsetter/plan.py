@@ -74,7 +74,7 @@ _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", 
 _TABLE = {
     "descriptives": {"kind", "id", "title", "variables", "group", "compare", "smd", "show", "weights", "suppress_below", "percent_of"},
     "results": {"kind", "id", "title", "analyses"},
-    "correlations": {"kind", "id", "title", "analysis", "means"},
+    "correlations": {"kind", "id", "title", "analysis", "means", "intervals"},
     "regression": {"kind", "id", "title", "analysis"},
     "anova": {"kind", "id", "title", "analysis"},
 }
@@ -514,6 +514,8 @@ def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None) ->
     from .analyses import cronbach_alpha, scale_score
     from .analyses.scales import scoring_note
 
+    style = _style(plan)
+
     frame, labels, levels = data.frame, data.labels, data.levels
     records: list[Record] = []
     alphas: dict[str, Result] = {}
@@ -542,6 +544,11 @@ def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None) ->
         args = {k: v for k, v in analysis.items() if k not in ("id", "kind", "place")}
         if "level" in _parameters(kind):
             args.setdefault("level", plan.level)
+        if "variance_level" in style.ci:  # the style's level for η²-type intervals (Steiger's 90% convention, say)
+            if "variance_level" in _parameters(kind):
+                args.setdefault("variance_level", style.ci["variance_level"])
+            elif kind in ("anova_oneway", "factorial_anova"):  # their only intervals are of η²-type effects
+                args.setdefault("level", style.ci["variance_level"])
         if "labels" in _parameters(kind):
             args["labels"] = {**labels, **args.get("labels", {})}
         if "levels" in _parameters(kind):
@@ -609,7 +616,7 @@ def _tables(plan: Plan, records: list[Record], style: "Style") -> list[Shown]:
                     raise InputError(f"{t['analysis']!r} is not a correlation_matrix analysis")
                 from .rendering.correlation_tables import correlation_table
 
-                made = correlation_table(matrix[0], style, title=t.get("title"), means=t.get("means", True))
+                made = correlation_table(matrix[0], style, title=t.get("title"), means=t.get("means", True), intervals=t.get("intervals", False))
             else:
                 made = _model_table(t["kind"], by_id[t["analysis"]], style, t.get("title"))
         except InputError as exc:

@@ -16,6 +16,7 @@ from typing import Any
 from ..errors import InputError
 from ..coding import joined
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
+from ..analyses.effects import variance_explained
 from ._core import Adapter, Context, absent, base, integral, pair_key, term_key
 
 LIB = "pingouin"
@@ -148,19 +149,22 @@ def anova(frame: Any, ctx: Context) -> list[Result]:
     if sources[-1] == "Within" and len(sources) == 2:  # one-way, detailed: SS give η² and ω²
         term = frame.iloc[0]
         ss_b, ss_w, df_b, ms_w = float(term["SS"]), float(residual["SS"]), float(term["DF"]), float(residual["MS"])
-        effects = (EffectSize("eta2", ss_b / (ss_b + ss_w)), EffectSize("omega2", (ss_b - df_b * ms_w) / (ss_b + ss_w + ms_w), method="Hays (1963); may be negative"))
-        return [_base(ctx, "anova_oneway", [absent(ctx, ["group summaries"])], statistic=Statistic("F", float(term["F"]), (df_b, float(residual["DF"]))),
-                      p=float(term["p_unc"]), effects=effects, details={"variant": "classic"}, variables=_group(ctx, frame))]
+        f, df_w = float(term["F"]), float(residual["DF"])
+        effects = (variance_explained("eta2", ss_b / (ss_b + ss_w), f, df_b, df_w, ctx.level),
+                   variance_explained("omega2", (ss_b - df_b * ms_w) / (ss_b + ss_w + ms_w), f, df_b, df_w, ctx.level, "Hays (1963); may be negative"))
+        return [_base(ctx, "anova_oneway", [absent(ctx, ["group summaries"])], statistic=Statistic("F", f, (df_b, df_w)),
+                      p=float(term["p_unc"]), effects=effects, details={"variant": "classic", "ss": ss_b, "ss_error": ss_w, "df_error": df_w}, variables=_group(ctx, frame))]
     ss_type = ctx.option("ss_type")
     notes = [] if ss_type is not None else [Note("method", "The sums-of-squares type is not in the pingouin result (its default is II); pass ss_type= to state it.")]
     out = []
     for _, row in frame.iloc[:-1].iterrows():
         term = _term_name(row["Source"])
-        details: dict[str, Any] = {"term": term, "interaction": "×" in term}
+        details: dict[str, Any] = {"term": term, "interaction": "×" in term, "ss": float(row["SS"]), "ss_error": float(residual["SS"])}
         if ss_type is not None:
             details["ss_type"] = int(ss_type)
         out.append(_base(ctx, "anova_term", list(notes), statistic=Statistic("F", float(row["F"]), (float(row["DF"]), float(residual["DF"]))),
-                         p=float(row["p_unc"]), effects=(EffectSize("eta2_p", float(row["np2"])),), details=details))
+                         p=float(row["p_unc"]), effects=(variance_explained("eta2_p", float(row["np2"]), float(row["F"]), float(row["DF"]), float(residual["DF"]), ctx.level),),
+                         details=details))
     return out
 
 
@@ -271,18 +275,19 @@ def linear_regression(frame: Any, ctx: Context) -> list[Result]:
     terms = [str(x) for x in frame["names"] if str(x) != "Intercept"]
     model = _base(ctx, "linear_model", [Note("method", "F and its p computed from the unrounded R² and the model's df.")],
                   statistic=Statistic("F", f, (float(df_model), float(df_resid))), p=float(stats.f.sf(f, df_model, df_resid)), n=n,
-                  effects=(EffectSize("R2", r2), EffectSize("R2_adj", r2_adj)), details={"predictors": joined([ctx.labels.get(t, t) for t in terms])},
+                  effects=(variance_explained("R2", r2, f, df_model, df_resid, ctx.level), EffectSize("R2_adj", r2_adj)), details={"predictors": joined([ctx.labels.get(t, t) for t in terms])},
                   variables=_outcome(ctx))
     out = [model]
     level = ctx.level
     if not math.isclose(level, 0.95):
         raise InputError("pingouin.linear_regression: its CI columns are 95% intervals; pass level=0.95")
     for _, row in frame.iterrows():
-        if str(row["names"]) == "Intercept":
-            continue
-        out.append(_base(ctx, "linear_coefficient", [absent(ctx, ["β"])], statistic=Statistic("t", float(row["T"]), (float(df_resid),)), p=float(row["pval"]), n=n,
+        intercept = str(row["names"]) == "Intercept"
+        out.append(_base(ctx, "linear_coefficient", [] if intercept else [absent(ctx, ["β"])], statistic=Statistic("t", float(row["T"]), (float(df_resid),)),
+                         p=float(row["pval"]), n=n,
                          estimate=Estimate("B", float(row["coef"]), se=float(row["se"]), ci=Interval(0.95, float(row["CI2.5"]), float(row["CI97.5"]))),
-                         details={"term": str(row["names"]), "adjusted": len(terms) > 1}, variables=_predictor(ctx, str(row["names"]))))
+                         details={"term": "Intercept", "intercept": True} if intercept else {"term": str(row["names"]), "adjusted": len(terms) > 1},
+                         variables=_outcome(ctx) if intercept else _predictor(ctx, str(row["names"]))))
     return out
 
 
@@ -300,14 +305,14 @@ def logistic_regression(frame: Any, ctx: Context) -> list[Result]:
     out = []
     terms = [str(x) for x in frame["names"] if str(x) != "Intercept"]
     for _, row in frame.iterrows():
-        if str(row["names"]) == "Intercept":
-            continue
+        intercept = str(row["names"]) == "Intercept"
         b, low, high = float(row["coef"]), float(row["CI2.5"]), float(row["CI97.5"])
         out.append(_base(ctx, "logistic_coefficient", [absent(ctx, ["the model's likelihood-ratio χ² and Nagelkerke R²", "n"])],
                          statistic=Statistic("z", float(row["z"])), p=float(row["pval"]),
                          estimate=Estimate("B", b, se=float(row["se"]), ci=Interval(0.95, low, high)),
-                         effects=(EffectSize("OR", math.exp(b), Interval(0.95, math.exp(low), math.exp(high)), ratio=True),),
-                         details={"term": str(row["names"]), "adjusted": len(terms) > 1}, variables=_predictor(ctx, str(row["names"]))))
+                         effects=() if intercept else (EffectSize("OR", math.exp(b), Interval(0.95, math.exp(low), math.exp(high)), ratio=True),),
+                         details={"term": "Intercept", "intercept": True} if intercept else {"term": str(row["names"]), "adjusted": len(terms) > 1},
+                         variables=_outcome(ctx) if intercept else _predictor(ctx, str(row["names"]))))
     return out
 
 

@@ -12,6 +12,7 @@ from typing import Any
 
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
+from ..analyses.effects import variance_explained
 from ._core import Adapter, Context, absent, base, integral, pair_key
 
 LIB = "scipy"
@@ -189,14 +190,14 @@ def linregress(res: Any, ctx: Context) -> list[Result]:
 
     b, se, r = float(res.slope), float(res.stderr), float(res.rvalue)
     t = b / se
-    n = ctx.n
+    n = ctx.n if ctx.n is not None or not ctx.samples else len(ctx.samples[0])
     notes = [] if n is not None else [absent(ctx, ["n (and so df, adjusted R² and the CI of B)"])]
     df_resid = n - 2 if n is not None else None
     ci = None
     if df_resid is not None:
         half = float(stats.t.ppf(0.5 + ctx.level / 2, df_resid)) * se
         ci = Interval(ctx.level, b - half, b + half)
-    effects = [EffectSize("R2", r * r)]
+    effects = [EffectSize("R2", r * r) if df_resid is None else variance_explained("R2", r * r, t * t, 1, df_resid, ctx.level)]
     if n is not None:
         effects.append(EffectSize("R2_adj", 1 - (1 - r * r) * (n - 1) / (n - 2)))
     x = ctx.labels.get("x", "x")
@@ -205,7 +206,13 @@ def linregress(res: Any, ctx: Context) -> list[Result]:
     coefficient = _base(ctx, "linear_coefficient", list(notes), statistic=Statistic("t", t, (df_resid,) if df_resid else ()), p=float(res.pvalue),
                         estimate=Estimate("B", b, se=se, ci=ci), effects=(EffectSize("beta", r, method="B·SD(x)/SD(y)"),),
                         details={"term": x, "adjusted": False})
-    return [model, coefficient]
+    out = [model]
+    if df_resid is not None:  # the intercept's t and CI need the residual df
+        a, se_a = float(res.intercept), float(res.intercept_stderr)
+        half = float(stats.t.ppf(0.5 + ctx.level / 2, df_resid)) * se_a
+        out.append(_base(ctx, "linear_coefficient", [], statistic=Statistic("t", a / se_a, (df_resid,)), p=float(2 * stats.t.sf(abs(a / se_a), df_resid)),
+                         estimate=Estimate("B", a, se=se_a, ci=Interval(ctx.level, a - half, a + half)), details={"term": "Intercept", "intercept": True}))
+    return out + [coefficient]
 
 
 # -- running statsetter's analysis on the data given ------------------------------

@@ -10,6 +10,7 @@ from typing import Any
 from ..coding import joined
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
+from ..analyses.effects import variance_explained
 from ._core import Adapter, Context, absent, base, pair_key, term_key
 
 LIB = "statsmodels"
@@ -125,17 +126,22 @@ def ols(res: Any, ctx: Context) -> list[Result]:
     weighted = type(res.model).__name__ == "WLS"
     outcome, named = _names(res, ctx, names)
     model = _base(ctx, "linear_model", [], statistic=Statistic("F", float(res.fvalue), (float(res.df_model), float(res.df_resid))),
-                  p=float(res.f_pvalue), n=n, effects=(EffectSize("R2", float(res.rsquared)), EffectSize("R2_adj", float(res.rsquared_adj))),
+                  p=float(res.f_pvalue), n=n, effects=(variance_explained("R2", float(res.rsquared), float(res.fvalue), float(res.df_model), float(res.df_resid), level),
+                                                         EffectSize("R2_adj", float(res.rsquared_adj))),
                   details={"predictors": _predictors(terms, named, ctx.labels)}, variables=(outcome,) if outcome else ())
     out = [model]
     y = np.asarray(res.model.endog, dtype=float)
     X = np.asarray(res.model.exog, dtype=float)
     for j, name in enumerate(names):
-        if name in _INTERCEPT:
-            continue
         b = float(np.asarray(res.params)[j])
         effects: tuple[EffectSize, ...] = ()
         notes: list[Note] = []
+        if name in _INTERCEPT:
+            out.append(_base(ctx, "linear_coefficient", [], statistic=Statistic("t", float(np.asarray(res.tvalues)[j]), (float(res.df_resid),)),
+                             p=float(np.asarray(res.pvalues)[j]), n=n,
+                             estimate=Estimate("B", b, se=float(np.asarray(res.bse)[j]), ci=Interval(level, float(ci[j, 0]), float(ci[j, 1]))),
+                             details={"term": "Intercept", "intercept": True}, variables=(outcome,) if outcome else ()))
+            continue
         if weighted:
             notes.append(Note("missing", "β is not given for a weighted fit."))
         else:
@@ -165,15 +171,14 @@ def logit(res: Any, ctx: Context) -> list[Result]:
     ci = np.asarray(res.conf_int(alpha=1 - level))
     out = [model]
     for j, name in enumerate(names):
-        if name in _INTERCEPT:
-            continue
         b = float(np.asarray(res.params)[j])
         low, high = float(ci[j, 0]), float(ci[j, 1])
+        intercept = name in _INTERCEPT
         out.append(_base(ctx, "logistic_coefficient", [], statistic=Statistic("z", float(np.asarray(res.tvalues)[j])), p=float(np.asarray(res.pvalues)[j]), n=n,
                          estimate=Estimate("B", b, se=float(np.asarray(res.bse)[j]), ci=Interval(level, low, high)),
-                         effects=(EffectSize("OR", math.exp(b), Interval(level, math.exp(low), math.exp(high)), ratio=True),),
-                         details={"term": term_name(name), "adjusted": len(terms) > 1, **named.get(name, (None, {}))[1]},
-                         variables=_coefficient_variables(named.get(name), outcome)))
+                         effects=() if intercept else (EffectSize("OR", math.exp(b), Interval(level, math.exp(low), math.exp(high)), ratio=True),),
+                         details={"term": "Intercept", "intercept": True} if intercept else {"term": term_name(name), "adjusted": len(terms) > 1, **named.get(name, (None, {}))[1]},
+                         variables=((outcome,) if outcome else ()) if intercept else _coefficient_variables(named.get(name), outcome)))
     return out
 
 
@@ -193,9 +198,11 @@ def anova_lm(frame: Any, ctx: Context) -> list[Result]:
         row = frame.loc[terms[0]]
         ss_b, df_b = float(row["sum_sq"]), float(row["df"])
         ms_w = ss_res / df_res
-        effects = (EffectSize("eta2", ss_b / (ss_b + ss_res)), EffectSize("omega2", (ss_b - df_b * ms_w) / (ss_b + ss_res + ms_w), method="Hays (1963); may be negative"))
-        return [_base(ctx, "anova_oneway", [absent(ctx, ["group summaries", "N"])], statistic=Statistic("F", float(row["F"]), (df_b, df_res)),
-                      p=float(row["PR(>F)"]), effects=effects, n=int(df_b + df_res + 1), details={"variant": "classic"})]
+        f = float(row["F"])
+        effects = (variance_explained("eta2", ss_b / (ss_b + ss_res), f, df_b, df_res, ctx.level),
+                   variance_explained("omega2", (ss_b - df_b * ms_w) / (ss_b + ss_res + ms_w), f, df_b, df_res, ctx.level, "Hays (1963); may be negative"))
+        return [_base(ctx, "anova_oneway", [absent(ctx, ["group summaries", "N"])], statistic=Statistic("F", f, (df_b, df_res)),
+                      p=float(row["PR(>F)"]), effects=effects, n=int(df_b + df_res + 1), details={"variant": "classic", "ss": ss_b, "ss_error": ss_res, "df_error": df_res})]
     if typ == 1:
         raise InputError("statsmodels.anova_lm: a sequential (type I) table; statsetter reports type II or III sums of squares (typ=2 or typ=3)")
     out = []
@@ -205,7 +212,8 @@ def anova_lm(frame: Any, ctx: Context) -> list[Result]:
         name = term_name(term)
         out.append(_base(ctx, "anova_term", [Note("method", f"Type {'II' if typ == 2 else 'III'} sums of squares, as the table's rows show.")],
                          statistic=Statistic("F", float(row["F"]), (float(row["df"]), df_res)), p=float(row["PR(>F)"]),
-                         effects=(EffectSize("eta2_p", ss / (ss + ss_res)),), details={"term": name, "interaction": "×" in name, "ss_type": typ}))
+                         effects=(variance_explained("eta2_p", ss / (ss + ss_res), float(row["F"]), float(row["df"]), df_res, ctx.level),),
+                         details={"term": name, "interaction": "×" in name, "ss_type": typ, "ss": ss, "ss_error": ss_res}))
     return out
 
 

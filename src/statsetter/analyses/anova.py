@@ -6,8 +6,10 @@ from typing import TYPE_CHECKING, Literal, Mapping
 
 from ..coding import category_text
 from ..errors import InputError
-from ..records import EffectSize, GroupSummary, Note, Result, Statistic
+from ..formulas import variance_explained_ci
+from ..records import EffectSize, GroupSummary, Interval, Note, Result, Statistic
 from . import _common as c
+from .effects import NCF_METHOD
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -19,11 +21,15 @@ def anova_oneway(
     group: str,
     *,
     variant: Literal["classic", "welch"] = "classic",
+    level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> Result:
     """F test of ``outcome`` across the levels of ``group``. η² = SS_between /
     SS_total; ω² = (SS_between − df_between · MS_within) / (SS_total + MS_within)
-    (Hays, 1963), both from the classic decomposition (also for Welch's F)."""
+    (Hays, 1963), both from the classic decomposition (also for Welch's F),
+    with the noncentral-F interval of the classic F at ``level`` (Steiger,
+    2004): one interval, since both estimate the same population proportion.
+    The sums of squares go into ``details`` for the ANOVA table."""
     from scipy import stats
 
     if variant not in ("classic", "welch"):
@@ -41,6 +47,9 @@ def anova_oneway(
     ms_w = (ss_t - ss_b) / (n - k)
     eta2 = ss_b / ss_t
     omega2 = (ss_b - (k - 1) * ms_w) / (ss_t + ms_w)
+    classic_f = (ss_b / (k - 1)) / ms_w
+    interval = variance_explained_ci(classic_f, k - 1, n - k, level)
+    same = "" if variant == "classic" else "from the classic F"
     if variant == "classic":
         dfs = (k - 1, n - k)
     else:
@@ -54,7 +63,10 @@ def anova_oneway(
         statistic=Statistic("F", float(res.statistic), dfs),
         p=float(res.pvalue),
         n=n,
-        effects=(EffectSize("eta2", eta2), EffectSize("omega2", omega2, method="Hays (1963); may be negative")),
+        effects=(
+            EffectSize("eta2", eta2, Interval(level, *interval), method="; ".join(m for m in (same, NCF_METHOD) if m)),
+            EffectSize("omega2", omega2, Interval(level, *interval), method="Hays (1963); may be negative; " + NCF_METHOD),
+        ),
         groups=tuple(
             GroupSummary(category_text(lev), n=len(v), mean=float(v.mean()), sd=float(v.std(ddof=1))) for lev, v in zip(levels, samples)
         ),
@@ -63,6 +75,6 @@ def anova_oneway(
             Note("method", "Welch's F test (variances not assumed equal)." if variant == "welch" else "Classic F test (equal variances assumed)."),
             missing,
         ),
-        details={"variant": variant},
+        details={"variant": variant, "ss": ss_b, "ss_error": ss_w, "df_error": n - k},
         provenance=c.provenance(f"statsetter.analyses.anova_oneway({variant})"),
     )

@@ -6,13 +6,23 @@ from __future__ import annotations
 import math
 from typing import TYPE_CHECKING
 
-from ..formulas import hedges_j, nct_ci
+from ..formulas import hedges_j, nct_ci, variance_explained_ci
 from ..records import EffectSize, Interval
 
 if TYPE_CHECKING:
     import numpy as np
 
 NCT_METHOD = "noncentral t (Steiger & Fouladi, 1997)"
+NCF_METHOD = "CI by the noncentral F (Steiger, 2004)"
+
+
+def variance_explained(name: str, value: float, F: float, df1: float, df2: float, level: float, method: str = "") -> EffectSize:
+    """η², partial η², ω² or R² with the CI of the population proportion of
+    variance explained, from the F test of the same effect."""
+    low, high = variance_explained_ci(F, df1, df2, level)
+    return EffectSize(name, value, Interval(level, low, high), method="; ".join(m for m in (method, NCF_METHOD) if m))
+
+
 def d_from_t(name: str, t: float, df: float, scale: float, level: float) -> EffectSize:
     """d = t · scale, with the noncentral-t interval scaled the same way."""
     lo, hi = nct_ci(t, df, level)

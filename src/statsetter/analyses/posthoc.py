@@ -3,13 +3,15 @@
 from __future__ import annotations
 
 import math
+from dataclasses import replace
 from itertools import combinations
 from typing import TYPE_CHECKING, Literal, Mapping
 
 from ..coding import category_text
 from ..errors import InputError
-from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
+from ..records import Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
+from .effects import d_from_t, hedges_g, variance_explained
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -78,12 +80,19 @@ def posthoc(
     variables = c.variables({"outcome": outcome, "group": group}, labels)
     out = []
     for i, j, diff, p, low, high in rows:
+        a, b = samples[i], samples[j]
+        pooled = math.sqrt(((len(a) - 1) * a.var(ddof=1) + (len(b) - 1) * b.var(ddof=1)) / (len(a) + len(b) - 2))
+        scale = math.sqrt(1 / len(a) + 1 / len(b))
+        g = hedges_g(d_from_t("d", diff / (pooled * scale), len(a) + len(b) - 2, scale, level), len(a) + len(b) - 2) if pooled > 0 else None
+        if g is not None:
+            g = replace(g, method=f"pooled SD of the two groups; {g.method}; CI not adjusted for multiplicity")
         out.append(
             Result(
                 kind="posthoc_pair",
                 p=float(np.clip(p, 0, 1)),
                 n=summaries[i].n + summaries[j].n,  # type: ignore[operator]
-                estimate=Estimate("mean difference", diff, ci=Interval(level if procedure != "bonferroni" else level, low, high)),
+                estimate=Estimate("mean difference", diff, ci=Interval(level, low, high)),
+                effects=(g,) if g is not None else (),
                 groups=(summaries[i], summaries[j]),
                 variables=variables,
                 notes=c.notes(note, missing),
@@ -100,11 +109,14 @@ def factorial_anova(
     factors: tuple[str, str],
     *,
     ss_type: Literal[2, 3] = 2,
+    level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
     """Two-way between-subjects ANOVA with the interaction; one record per
-    term with F, p and partial η² = SS / (SS + SS_residual). Type II or III
-    sums of squares (Type III with sum-to-zero contrasts), stated."""
+    term with F, p and partial η² = SS / (SS + SS_residual) with its
+    noncentral-F interval at ``level`` (Steiger, 2004). Type II or III sums of
+    squares (Type III with sum-to-zero contrasts), stated; the term's, the
+    error's and the corrected total sums of squares go into ``details``."""
     import statsmodels.formula.api as smf
     from statsmodels.stats.anova import anova_lm
 
@@ -122,6 +134,7 @@ def factorial_anova(
     table = anova_lm(fit, typ=ss_type)
     ss_res = float(table.loc["Residual", "sum_sq"])
     df_res = float(table.loc["Residual", "df"])
+    ss_total = float(((frame["y_"] - frame["y_"].mean()) ** 2).sum())
     labels = labels or {}
     la, lb = labels.get(a, a), labels.get(b, b)
     names = {f"C(a_{coding})": (la, False), f"C(b_{coding})": (lb, False), f"C(a_{coding}):C(b_{coding})": (f"{la} × {lb}", True)}
@@ -135,10 +148,10 @@ def factorial_anova(
                 statistic=Statistic("F", float(row["F"]), (float(row["df"]), df_res)),
                 p=float(row["PR(>F)"]),
                 n=int(fit.nobs),
-                effects=(EffectSize("eta2_p", ss / (ss + ss_res)),),
+                effects=(variance_explained("eta2_p", ss / (ss + ss_res), float(row["F"]), float(row["df"]), df_res, level),),
                 variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"), Variable(a, la, "factor"), Variable(b, lb, "factor")),
                 notes=c.notes(Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else ".")), missing),
-                details={"term": label, "interaction": interaction, "ss_type": ss_type},
+                details={"term": label, "interaction": interaction, "ss_type": ss_type, "ss": ss, "ss_error": ss_res, "ss_total": ss_total},
                 provenance=c.provenance("statsetter.analyses.factorial_anova", statsmodels=True),
             )
         )

@@ -9,7 +9,9 @@ from typing import TYPE_CHECKING, Mapping, Sequence
 from ..coding import categories, category_text, factor, find_category, joined
 from ..errors import InputError
 from ..records import EffectSize, Estimate, Interval, Note, Result, Statistic, Variable
+from ..formulas import variance_explained_ci
 from . import _common as c
+from .effects import NCF_METHOD, variance_explained
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -94,48 +96,43 @@ def _labels(names: Sequence[str], labels: Mapping[str, str] | None) -> str:
     return joined([labels.get(n, n) for n in names])
 
 
-def linear_regression(
-    df: "pd.DataFrame",
-    outcome: str,
-    predictors: Sequence[str],
-    *,
-    reference: Mapping[str, object] | None = None,
-    levels: Mapping[str, str] | None = None,
-    level: float = 0.95,
-    labels: Mapping[str, str] | None = None,
-) -> list[Result]:
-    """OLS of ``outcome`` on ``predictors``: the model record first, then one
-    record per coefficient (B, SE, CI, t, p, and β = B·SD(x)/SD(y))."""
-    import statsmodels.api as sm
+def _intercept(kind: str, fit, name: str, level: float, outcome: Variable, prov, **extra) -> Result:  # type: ignore[no-untyped-def]
+    """The constant of a fitted model as a coefficient record (B, SE, CI, t or
+    z, p; no β): the predicted outcome where every predictor is 0, or at
+    the reference categories."""
+    ci = fit.conf_int(1 - level)
+    return Result(
+        kind=kind,
+        statistic=Statistic("t", float(fit.tvalues[name]), (float(fit.df_resid),)) if kind == "linear_coefficient" else Statistic("z", float(fit.tvalues[name])),
+        p=float(fit.pvalues[name]),
+        n=int(fit.nobs),
+        estimate=Estimate("B", float(fit.params[name]), se=float(fit.bse[name]), ci=Interval(level, float(ci.loc[name, 0]), float(ci.loc[name, 1]))),
+        variables=(outcome,),
+        details={"term": "Intercept", "intercept": True, **extra},
+        provenance=prov,
+    )
 
-    if not predictors:
-        raise InputError("predictors: at least one is needed")
-    data, missing = c.listwise(df, [outcome, *predictors])
-    y = c.numeric(data, outcome)
-    if y.nunique() < 2:
-        raise InputError(f"{outcome}: zero variance; a regression is undefined")
-    _check_names(predictors, reference, levels)
-    X, meta, coding = _design(data, predictors, reference or {}, levels)
-    if len(data) <= X.shape[1]:
-        raise InputError(f"{outcome}: {len(data)} complete rows for {X.shape[1]} coefficients")
-    fit = sm.OLS(y.to_numpy(), X).fit()
+
+def _ols_records(fit, X, y, meta, predictors, outcome: str, labels: Mapping[str, str], level: float, variance_level: float,
+                 notes: Sequence[Note | None], prov, step: int | None = None) -> list[Result]:  # type: ignore[no-untyped-def]
+    """The model record, the intercept, then one record per coefficient."""
     ci = fit.conf_int(1 - level)
     sd_y = float(y.std(ddof=1))
-    prov = c.provenance("statsetter.analyses.linear_regression", statsmodels=True)
-    labels = labels or {}
+    at = {"step": step} if step is not None else {}
+    outcome_var = Variable(outcome, labels.get(outcome, outcome), "outcome")
     model = Result(
         kind="linear_model",
         statistic=Statistic("F", float(fit.fvalue), (float(fit.df_model), float(fit.df_resid))),
         p=float(fit.f_pvalue),
         n=int(fit.nobs),
-        effects=(EffectSize("R2", float(fit.rsquared)), EffectSize("R2_adj", float(fit.rsquared_adj))),
-        variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"),)
-        + tuple(Variable(p, labels.get(p, p), "predictor") for p in predictors),
-        notes=c.notes(*coding, missing),
-        details={"predictors": _labels(predictors, labels)},
+        effects=(variance_explained("R2", float(fit.rsquared), float(fit.fvalue), float(fit.df_model), float(fit.df_resid), variance_level),
+                 EffectSize("R2_adj", float(fit.rsquared_adj))),
+        variables=(outcome_var,) + tuple(Variable(p, labels.get(p, p), "predictor") for p in predictors),
+        notes=c.notes(*notes),
+        details={"predictors": _labels(predictors, labels), **at},
         provenance=prov,
     )
-    out = [model]
+    out = [model, _intercept("linear_coefficient", fit, "const", level, outcome_var, prov, **at)]
     for name, pred, lev, ref in meta:
         sd_x = float(X[name].std(ddof=1))
         out.append(
@@ -149,13 +146,46 @@ def linear_regression(
                 effects=(EffectSize("beta", float(fit.params[name]) * sd_x / sd_y, method="B·SD(x)/SD(y)"),),
                 variables=(
                     Variable(pred, labels.get(pred, pred) if lev is None else f"{labels.get(pred, pred)} = {lev}", "predictor"),
-                    Variable(outcome, labels.get(outcome, outcome), "outcome"),
+                    outcome_var,
                 ),
-                details={"term": name, "adjusted": len(meta) > 1, **({"reference": f"{labels.get(pred, pred)} = {ref}", "category": f"{lev}", "reference_category": f"{ref}"} if ref is not None else {})},
+                details={"term": name, "adjusted": len(meta) > 1, **at,
+                         **({"reference": f"{labels.get(pred, pred)} = {ref}", "category": f"{lev}", "reference_category": f"{ref}"} if ref is not None else {})},
                 provenance=prov,
             )
         )
     return out
+
+
+def linear_regression(
+    df: "pd.DataFrame",
+    outcome: str,
+    predictors: Sequence[str],
+    *,
+    reference: Mapping[str, object] | None = None,
+    levels: Mapping[str, str] | None = None,
+    level: float = 0.95,
+    variance_level: float | None = None,
+    labels: Mapping[str, str] | None = None,
+) -> list[Result]:
+    """OLS of ``outcome`` on ``predictors``: the model record first (R² with
+    its noncentral-F interval at ``variance_level``, default ``level``), the
+    intercept, then one record per coefficient (B, SE, CI, t, p, and
+    β = B·SD(x)/SD(y))."""
+    import statsmodels.api as sm
+
+    if not predictors:
+        raise InputError("predictors: at least one is needed")
+    data, missing = c.listwise(df, [outcome, *predictors])
+    y = c.numeric(data, outcome)
+    if y.nunique() < 2:
+        raise InputError(f"{outcome}: zero variance; a regression is undefined")
+    _check_names(predictors, reference, levels)
+    X, meta, coding = _design(data, predictors, reference or {}, levels)
+    if len(data) <= X.shape[1]:
+        raise InputError(f"{outcome}: {len(data)} complete rows for {X.shape[1]} coefficients")
+    fit = sm.OLS(y.to_numpy(), X).fit()
+    prov = c.provenance("statsetter.analyses.linear_regression", statsmodels=True)
+    return _ols_records(fit, X, y, meta, predictors, outcome, labels or {}, level, variance_level or level, [*coding, missing], prov)
 
 
 def hierarchical_steps(
@@ -165,10 +195,16 @@ def hierarchical_steps(
     *,
     reference: Mapping[str, object] | None = None,
     levels: Mapping[str, str] | None = None,
+    level: float = 0.95,
+    variance_level: float | None = None,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
-    """One record per step after the first: ΔR² and the F test of the change,
-    all steps on the same complete rows."""
+    """Models entered in steps, all on the same complete rows: first one
+    record per step after the first (ΔR² with its interval, and the F test of
+    the change), then each step's model, intercept and coefficients
+    (``details.step``), for a table of the models side by side. The ΔR²
+    interval is the noncentral-F interval of the added block's partial
+    effect, times 1 − R² of the step before (which it treats as fixed)."""
     import statsmodels.api as sm
     from scipy import stats
 
@@ -177,34 +213,47 @@ def hierarchical_steps(
     everything = [p for step in steps for p in step]
     _check_names(everything, reference, levels)
     data, missing = c.listwise(df, [outcome, *everything])
-    y = c.numeric(data, outcome).to_numpy()
-    out = []
+    y = c.numeric(data, outcome)
+    if y.nunique() < 2:
+        raise InputError(f"{outcome}: zero variance; a regression is undefined")
+    labels = labels or {}
+    variance_level = variance_level or level
+    changes: list[Result] = []
+    models: list[Result] = []
     previous = None
     used: list[str] = []
+    prov = c.provenance("statsetter.analyses.hierarchical_steps", statsmodels=True)
     for i, step in enumerate(steps, 1):
         used = used + list(step)
-        X, _, _ = _design(data, used, {k: v for k, v in (reference or {}).items() if k in used}, levels)
-        fit = sm.OLS(y, X).fit()
+        X, meta, coding = _design(data, used, {k: v for k, v in (reference or {}).items() if k in used}, levels)
+        if len(data) <= X.shape[1]:
+            raise InputError(f"{outcome}: {len(data)} complete rows for {X.shape[1]} coefficients at step {i}")
+        fit = sm.OLS(y.to_numpy(), X).fit()
+        models += _ols_records(fit, X, y, meta, used, outcome, labels, level, variance_level, [*coding, missing] if i == len(steps) else [], prov, step=i)
         if previous is not None:
             dk = fit.df_model - previous.df_model
             dr2 = fit.rsquared - previous.rsquared
             f = (dr2 / dk) / ((1 - fit.rsquared) / fit.df_resid)
             p = float(stats.f.sf(f, dk, fit.df_resid))
-            out.append(
+            low, high = variance_explained_ci(float(f), float(dk), float(fit.df_resid), variance_level)
+            scale = 1 - previous.rsquared
+            changes.append(
                 Result(
                     kind="linear_step",
                     statistic=Statistic("F_change", float(f), (float(dk), float(fit.df_resid))),
                     p=p,
                     n=int(fit.nobs),
-                    effects=(EffectSize("delta_R2", float(dr2)), EffectSize("R2", float(fit.rsquared))),
-                    variables=(Variable(outcome, (labels or {}).get(outcome, outcome), "outcome"),),
+                    effects=(EffectSize("delta_R2", float(dr2), Interval(variance_level, low * scale, high * scale),
+                                        method=f"{NCF_METHOD} of the added block's partial effect, times 1 − R² of step {i - 1}"),
+                             EffectSize("R2", float(fit.rsquared))),
+                    variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"),),
                     notes=c.notes(missing),
                     details={"step": i, "added": _labels(step, labels)},
-                    provenance=c.provenance("statsetter.analyses.hierarchical_steps", statsmodels=True),
+                    provenance=prov,
                 )
             )
         previous = fit
-    return out
+    return changes + models
 
 
 def logistic_regression(
@@ -264,6 +313,7 @@ def logistic_regression(
             provenance=prov,
         )
     ]
+    out.append(_intercept("logistic_coefficient", fit, "const", level, out[0].variables[0], prov, event=f"{event}"))
     for name, pred, lev, ref in meta:
         b = float(fit.params[name])
         out.append(

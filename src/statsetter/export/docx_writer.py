@@ -186,7 +186,8 @@ def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int =
     else:
         ppr = spacing + indent + f'<w:jc w:val="{_JC.get(align, "center")}"/>'
         runs = _run_xml(text)
-    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr>{ppr}</w:pPr>{runs}</w:p></w:tc>"
+    # every row keeps with the next, the last with the note: a table and its note are not parted by a page break
+    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr><w:keepNext/>{ppr}</w:pPr>{runs}</w:p></w:tc>"
 
 
 def _decimal_tabs(table: TableModel, widths: list[int], mark: str) -> list[int]:

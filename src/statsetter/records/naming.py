@@ -27,12 +27,16 @@ def record_key(record: Result) -> str:
     """What a record is about, as an id part: a coefficient's predictor (and
     category), a term's factors, a pair's two names, a step's number."""
     kind, details = record.kind, record.details
+    model = f"model{details['step']}" if "step" in details and kind != "linear_step" else ""  # a step's model, intercept and coefficients
     if kind.endswith("_coefficient"):
         predictor = record.variable("predictor")
         if predictor is None or str(details.get("term", "")).lower() in ("intercept", "const"):
-            return "intercept"
+            return f"{model}.intercept" if model else "intercept"
         category = details.get("category")
-        return _slug(predictor.name) + (f".{_slug(category)}" if category is not None else "")
+        key = _slug(predictor.name) + (f".{_slug(category)}" if category is not None else "")
+        return f"{model}.{key}" if model else key
+    if model:
+        return model
     if kind == "anova_term":
         factors = [v for v in record.variables if v.role == "factor"]
         if details.get("interaction"):

@@ -115,7 +115,7 @@ def compose(
                 every[made.id] = made.model
                 notes.append(f"{analysis}: shown in a table made for it ({made.model.title.plain()}); place = \"text\" writes sentences instead")
         if where in ("text", "both") or analysis not in showing:
-            blocks.extend(render(r, "sentence", style) for r in results)
+            blocks.extend(render(r, "sentence", style) for r in _in_text(results))
             for t in showing.get(analysis, []):
                 put(t)
             continue
@@ -128,6 +128,14 @@ def compose(
     for t in tables:  # a table whose analyses were all placed in the text still appears
         put(t)
     return Composed(tuple(blocks), every, tuple(notes))
+
+
+def _in_text(results: list[Result]) -> list[Result]:
+    """The records an analysis placed in the text writes as sentences: not
+    an intercept (its table has it), and of a hierarchical regression only
+    the steps' changes (each step's model and coefficients are its table)."""
+    steps = any(r.kind == "linear_step" for r in results)
+    return [r for r in results if not r.details.get("intercept") and not (steps and r.kind != "linear_step")]
 
 
 def _table_for(analysis: str, found: list[Record], style: "Style", lay_out) -> Shown | None:  # type: ignore[no-untyped-def]
@@ -145,7 +153,7 @@ def _table_for(analysis: str, found: list[Record], style: "Style", lay_out) -> S
         title = subject(results[0])[:1].upper() + subject(results[0])[1:]
     model = lay_out(results, style, title=title)
     kinds = {r.kind for r in results}
-    kind = "regression" if kinds & {"linear_coefficient", "logistic_coefficient"} else "anova" if kinds == {"anova_term"} else "results"
+    kind = "regression" if kinds & {"linear_coefficient", "logistic_coefficient"} else "anova" if kinds in ({"anova_term"}, {"anova_oneway"}) else "results"
     return Shown(analysis, model, (analysis,), kind)
 
 

@@ -8,10 +8,11 @@ from __future__ import annotations
 
 from typing import TYPE_CHECKING
 
-from ..records import ADJUST_NAMES, table_label
+from ..records import ADJUST_NAMES, Interval, table_label
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from ..styled import StyledText
+from .record_tables import interval_cell
 from .tables import Column, Row, TableModel
 
 if TYPE_CHECKING:
@@ -19,11 +20,14 @@ if TYPE_CHECKING:
 
 
 def correlation_table(
-    m: "CorrelationMatrix", style: "Style | str | None" = None, *, title: str | None = None, number: int | None = None, means: bool = True
+    m: "CorrelationMatrix", style: "Style | str | None" = None, *, title: str | None = None, number: int | None = None, means: bool = True,
+    intervals: bool = False,
 ) -> TableModel:
     """Variables numbered in the stub, their M and SD (``means=False`` leaves
     them out, as does a matrix that has none), then one column per variable
-    but the last (whose column would hold only its dash)."""
+    but the last (whose column would hold only its dash). ``intervals=True``
+    puts each r's CI in brackets on a row of its own under it, as APA 7's
+    sample correlation table does."""
     resolved = load_style(style)
     num = numbers_for(resolved)
     stars = sorted(resolved.p.get("table_stars", [0.05, 0.01, 0.001]), reverse=True)
@@ -40,6 +44,14 @@ def correlation_table(
             else:
                 cells.append(StyledText("—" if j == i else ""))
         rows.append(Row(StyledText(f"{i + 1}. {table_label(m.labels.get(name, name))}"), tuple(cells)))  # a stub in sentence case
+        if intervals and i > 0:
+            limits = [StyledText()] * (2 if show else 0)
+            for j in range(k - 1):
+                if j < i:
+                    limits.append(interval_cell(num, resolved, Interval(m.level, float(m.low[i, j]), float(m.high[i, j])), symbol))
+                else:
+                    limits.append(StyledText())
+            rows.append(Row(StyledText(), tuple(limits)))
     p = resolved.symbol("p")
     nb = resolved.keep_together
     star_note = " ".join(f"{'*' * (n + 1)}{p}{nb}&lt;{nb}{num.number(s, 'p', _decimals(s))}." for n, s in enumerate(stars))
@@ -54,6 +66,8 @@ def correlation_table(
         general = ""
     if show and ns != {m.rows}:
         general += f" {resolved.symbol('M')} and {resolved.symbol('SD')} are of each variable's observed values."
+    if intervals:
+        general += f" Values in brackets are the {m.level * 100:g}% CI of each {resolved.symbol(symbol)}."
     if m.adjust:
         general += f" {p} values {ADJUST_NAMES.get(m.adjust, m.adjust)}-adjusted for {k * (k - 1) // 2} comparisons."
     heads = ([Column(StyledText.from_markup(resolved.symbol("M"))), Column(StyledText.from_markup(resolved.symbol("SD")))] if show else [])

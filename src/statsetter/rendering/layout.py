@@ -16,7 +16,7 @@ if TYPE_CHECKING:
 
 __all__ = ["table"]
 
-_REGRESSION = {"linear_model", "linear_coefficient", "logistic_model", "logistic_coefficient"}
+_REGRESSION = {"linear_model", "linear_coefficient", "linear_step", "logistic_model", "logistic_coefficient"}
 
 
 def table(source: "Record | Iterable[Record]", style: "Style | str | None" = None, *, number: int | None = None, title: str | None = None) -> TableModel:
@@ -44,7 +44,7 @@ def table(source: "Record | Iterable[Record]", style: "Style | str | None" = Non
         from .regression_tables import regression_table
 
         return regression_table(records, style, title=title, number=number)
-    if kinds == {"anova_term"}:
+    if kinds == {"anova_term"} or (kinds == {"anova_oneway"} and len(records) == 1):
         from .anova_tables import anova_table
 
         return anova_table(records, style, title=title, number=number)

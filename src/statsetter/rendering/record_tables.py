@@ -6,7 +6,7 @@ from typing import Sequence
 
 from markupsafe import Markup
 
-from ..records import Result
+from ..records import Interval, Result
 from ..style.numbers import Numbers
 from ..style.profile import Style, load_style
 from .kinds import KINDS
@@ -30,12 +30,12 @@ def p_cell(num: Numbers, r: Result) -> StyledText:
     return StyledText(f"{shown} ({adjusted})" if adjusted else shown)
 
 
-def _limits(h, ci, quantity: str, null: float) -> StyledText:  # type: ignore[no-untyped-def]
+def interval_cell(num: Numbers, style: Style, ci: "Interval | None", quantity: str, null: float = 0.0, decimals: int | None = None) -> StyledText:
     """``[low, high]`` under a ``95% CI`` head, decision-preserving like every CI."""
     if ci is None:
         return StyledText()
-    low, high = h.num.interval(ci.low, ci.high, quantity, null)
-    return StyledText(f"[{low}{h.sep}{h.style.keep_together}{high}]")
+    low, high = num.interval(ci.low, ci.high, quantity, null, decimals=decimals)
+    return StyledText(f"[{low}{style.list_separator}{style.keep_together}{high}]")
 
 
 def subject(r: Result) -> str:
@@ -91,7 +91,7 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
                     _cell(h.stat(r)),
                     p_cell(h.num, r),
                     _cell(h.eff(r, with_ci=False) if e is not None else h.est(r, with_ci=False, symbol=r.estimate.name if r.estimate else None)),
-                    _limits(h, ci, e.name if e is not None else (r.estimate.name if r.estimate else "default"), e.null if e is not None else 0.0),
+                    interval_cell(h.num, resolved, ci, e.name if e is not None else (r.estimate.name if r.estimate else "default"), e.null if e is not None else 0.0),
                 ),
             )
         )
@@ -117,7 +117,7 @@ def posthoc_table(records: Sequence[Result], style: "Style | str | None" = None,
             level = e.ci.level
         label = " vs. ".join(g.label for g in r.groups) or row_label(r)
         rows.append(Row(StyledText(label[:1].upper() + label[1:]), (
-            _cell(h.est(r, with_ci=False)), _limits(h, e.ci if e is not None else None, e.name if e is not None else "default", 0.0), p_cell(h.num, r))))
+            _cell(h.est(r, with_ci=False)), interval_cell(h.num, resolved, e.ci if e is not None else None, e.name if e is not None else "default"), p_cell(h.num, r))))
     first = records[0]
     procedure = first.details.get("procedure")
     k = first.details.get("comparisons", len(records))

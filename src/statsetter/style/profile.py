@@ -179,6 +179,7 @@ SCHEMA: dict[str, Any] = {
         "pattern_negative": _pattern,
         "attach": _attach,
         "label": _text,
+        "variance_level": _float(0.5, 0.999),
     },
     "wording": {
         "significance": _bool,
@@ -190,6 +191,7 @@ SCHEMA: dict[str, Any] = {
         "number_bold": _bool,
         "title_italic": _bool,
         "number_align": _one_of("center", "decimal"),
+        "intercept": _bool,
         "font": _text,
         "font_size": _float(0, 30),
     },
