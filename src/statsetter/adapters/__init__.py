@@ -126,7 +126,7 @@ def _named(records: list[Result], ctx: Context) -> list[Result]:
     out = []
     for r in records:
         have = {v.role for v in r.variables}
-        extra = tuple(Variable(role, ctx.labels[role], role) for role in _ROLES.get(r.kind, ()) if role not in have and role in ctx.labels)
+        extra = tuple(Variable(role, ctx.labels[role], role) for role in _roles(r) if role not in have and role in ctx.labels)
         if extra:
             r = replace(r, variables=r.variables + extra)
         if ctx.groups and not r.groups and ctx.samples is None and r.kind in _TWO_GROUPS:
@@ -140,11 +140,17 @@ def _named(records: list[Result], ctx: Context) -> list[Result]:
 _TWO_GROUPS = frozenset({"t_independent", "t_paired", "mann_whitney", "wilcoxon"})
 
 
+def _roles(r: Result) -> tuple[str, ...]:
+    """The roles a record's sentence names (an intercept names no predictor)."""
+    roles = _ROLES.get(r.kind, ())
+    return tuple(x for x in roles if x != "predictor") if r.details.get("intercept") else roles
+
+
 def _ask_for_names(records: list[Result], source: str) -> None:
     """A warning when a sentence would have to say "the outcome" or "the first variable"."""
     import warnings
 
-    missing = sorted({role for r in records for role in _ROLES.get(r.kind, ()) if role not in {v.role for v in r.variables}})
+    missing = sorted({role for r in records for role in _roles(r) if role not in {v.role for v in r.variables}})
     if missing:
         example = ", ".join(f"{role!r}: '...'" for role in missing)
         warnings.warn(f"{source}: the result does not name its variables; pass labels={{{example}}} so that sentences name them", stacklevel=3)

@@ -12,7 +12,7 @@ from ..style.profile import Style, load_style
 from .kinds import KINDS
 from .sentences import _helpers
 from ..styled import StyledText
-from .tables import Column, Row, TableModel
+from .tables import Column, Row, Spanner, TableModel
 
 
 def _cell(markup: Markup | str) -> StyledText:
@@ -111,13 +111,17 @@ def posthoc_table(records: Sequence[Result], style: "Style | str | None" = None,
     resolved = load_style(style)
     h = _helpers(resolved)
     rows, level = [], 0.95
+    effect = all(r.effect("g") is not None for r in records)  # Hedges' g of each pair, with its own interval
     for r in records:
         e = r.estimate
         if e is not None and e.ci is not None:
             level = e.ci.level
         label = " vs. ".join(g.label for g in r.groups) or row_label(r)
-        rows.append(Row(StyledText(label[:1].upper() + label[1:]), (
-            _cell(h.est(r, with_ci=False)), interval_cell(h.num, resolved, e.ci if e is not None else None, e.name if e is not None else "default"), p_cell(h.num, r))))
+        cells = [_cell(h.est(r, with_ci=False)), interval_cell(h.num, resolved, e.ci if e is not None else None, e.name if e is not None else "default")]
+        if effect:
+            g = r.effect("g")
+            cells += [StyledText(h.num.number(g.value, "g")), interval_cell(h.num, resolved, g.ci, "g")]
+        rows.append(Row(StyledText(label[:1].upper() + label[1:]), (*cells, p_cell(h.num, r))))
     first = records[0]
     procedure = first.details.get("procedure")
     k = first.details.get("comparisons", len(records))
@@ -130,13 +134,20 @@ def posthoc_table(records: Sequence[Result], style: "Style | str | None" = None,
         if n.kind == "correction" and "; CI" in n.text:
             note = note + " " + n.text.split("; ", 1)[-1]
     if procedure in ("Tukey HSD", "Games–Howell"):
-        note = note + " The CIs hold for the family of comparisons (studentized range)."
+        note = note + " The CIs of the differences hold for the family of comparisons (studentized range)."
     pct = f"{round(level * 100):g}"
+    columns = [Column(_cell(resolved.symbol("difference"))), Column(StyledText(f"{pct}% CI"))]
+    spanners: tuple[Spanner, ...] = ()
+    if effect:
+        columns += [Column(_cell(resolved.symbol("g"))), Column(StyledText(f"{pct}% CI"))]
+        spanners = (Spanner(StyledText("Mean difference"), 0, 2), Spanner(StyledText("Standardized difference"), 2, 4))
+        note = note + StyledText.from_markup(f" {resolved.symbol('g')}: Hedges' {resolved.symbol('g')} from the two groups' pooled SD; its CI is not adjusted.")
     return TableModel(
         title=StyledText(title),
         stub_head=StyledText("Comparison"),
-        columns=(Column(_cell(resolved.symbol("difference"))), Column(StyledText(f"{pct}% CI")), Column(_cell(resolved.symbol("p")))),
+        columns=(*columns, Column(_cell(resolved.symbol("p")))),
         rows=tuple(rows),
+        spanners=spanners,
         general_note=note,
     )
 
