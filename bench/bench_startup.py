@@ -1,0 +1,48 @@
+"""Start-up: the CPU time of a fresh process for `statsetter --help` and for
+`statsetter format` of one t test whose p statsetter computes, against the
+floor of any command-line tool built on a template engine, a process that
+only imports jinja2. Runs take turns (floor, help, format) so that all see
+the same machine; each ratio is the median of the per-run ratios. Targets
+(issue: speed): --help ≤ 3×, format ≤ 4×."""
+
+from __future__ import annotations
+
+import os
+import resource
+import statistics
+import subprocess
+import sys
+
+RUNS = 9
+FLOOR = [sys.executable, "-c", "import jinja2"]
+HELP = [sys.executable, "-m", "statsetter", "--help"]
+FORMAT = [sys.executable, "-m", "statsetter", "format", "t", "--stat", "2.14", "--df", "38", "--effect", "d=0.68", "--effect-ci", "0.04,1.31"]
+
+
+def cpu(command: list[str]) -> float:
+    """User + system CPU seconds of one run of ``command`` (its own process tree)."""
+    before = resource.getrusage(resource.RUSAGE_CHILDREN)
+    subprocess.run(command, check=True, stdout=subprocess.DEVNULL, env={**os.environ, "PYTHONDONTWRITEBYTECODE": "1"})
+    after = resource.getrusage(resource.RUSAGE_CHILDREN)
+    return (after.ru_utime - before.ru_utime) + (after.ru_stime - before.ru_stime)
+
+
+def main() -> None:
+    for command in (FLOOR, HELP, FORMAT):  # warm the file cache and the bytecode
+        cpu(command)
+    floor, helps, formats = [], [], []
+    for _ in range(RUNS):
+        floor.append(cpu(FLOOR))
+        helps.append(cpu(HELP))
+        formats.append(cpu(FORMAT))
+    f = statistics.median(floor)
+    print(f"start-up CPU, median of {RUNS} interleaved runs")
+    print(f"python -c 'import jinja2' (floor): {f * 1000:7.1f} ms")
+    for name, runs, target in (("statsetter --help", helps, 3), ("statsetter format t ...", formats, 4)):
+        ratios = [m / b for m, b in zip(runs, floor)]
+        print(f"{name:26s}: {statistics.median(runs) * 1000:7.1f} ms  ratio to floor {statistics.median(ratios):4.1f} "
+              f"(per-run {min(ratios):.1f}-{max(ratios):.1f}; target {target})")
+
+
+if __name__ == "__main__":
+    main()
