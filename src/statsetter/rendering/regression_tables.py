@@ -56,9 +56,9 @@ def _models(records: Sequence[Result]) -> list[_Model]:
             group.change = r
         else:
             group.model = r
-    order = list(groups)
-    return [groups[k] for k in sorted(order, key=lambda k: (order.index(next(o for o in order if o[0] == k[0])), k[1] if isinstance(k[1], int) else 0))
-            if groups[k].coefficients]
+    analyses = list(dict.fromkeys(analysis for analysis, _ in groups))  # in the order given; a hierarchy's steps in step order
+    ordered = sorted(groups, key=lambda k: (analyses.index(k[0]), k[1] if isinstance(k[1], int) else 0))
+    return [groups[k] for k in ordered if groups[k].coefficients]
 
 
 def _column_decimals(num: Numbers, values: list[float], quantity: str) -> int:
