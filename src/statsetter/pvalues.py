@@ -1,10 +1,15 @@
-"""p values from a test statistic and its degrees of freedom.
+"""p values from a test statistic and its degrees of freedom, in pure Python.
 
-Through ``scipy.special``'s distribution functions (stdtr, ndtr, fdtrc,
-chdtrc), the functions behind ``scipy.stats``' survival functions, called
-directly: the same numbers (tests/test_pvalues.py compares them over a grid
-to 1e-12) for a fraction of the import time. scipy is loaded on the first
-call; without it the error names the extra that installs it."""
+The upper tails of t, F and χ² are regularized incomplete beta and gamma
+functions, computed here by their continued fractions (modified Lentz) and
+the series of P(a, x); the factor x^a (1 − x)^b / B(a, b) (and x^a e^(−x) /
+Γ(a)) is formed from log1p of its deviation from the centre with Stirling's
+series, so that no two large logarithms cancel when the df run to thousands.
+The normal tail is erfc. No numpy or scipy: `statsetter format` starts as
+fast as the template engine allows, and the base install computes p values.
+tests/test_pvalues.py compares them with scipy.stats over a grid: within
+1e-12 relative up to df = 1,000 and 5e-12 at df = 100,000 (where the
+continued fraction near its mean loses a few digits)."""
 
 from __future__ import annotations
 
@@ -14,28 +19,120 @@ from .errors import InputError
 
 __all__ = ["p_from_statistic", "p_mismatch", "upper_tail"]
 
+_LN_2PI = math.log(2 * math.pi)
+# Stirling's series for ln Γ(z) − [(z − ½) ln z − z + ½ ln 2π]: B₂ₖ / (2k(2k − 1) z^(2k−1))
+_STIRLING = (1 / 12, -1 / 360, 1 / 1260, -1 / 1680, 1 / 1188, -691 / 360360, 1 / 156, -3617 / 122400)
+_LARGE = 10.0  # from here on Stirling's series (8 terms) is exact to below 1e-17
+_EPS = 1e-16
+_TINY = 1e-300
+_MAX_TERMS = 100_000
 
-def _special():  # type: ignore[no-untyped-def]
-    try:
-        from scipy import special
-    except ModuleNotFoundError:
-        from .errors import MissingExtra
 
-        raise MissingExtra("scipy", "computing p values") from None
-    return special
+def _stirling(z: float) -> float:
+    """ln Γ(z) − [(z − ½) ln z − z + ½ ln 2π] for z ≥ 10."""
+    inv, sq, total = 1 / z, 1 / (z * z), 0.0
+    for c in _STIRLING:
+        total += c * inv
+        inv *= sq
+    return total
+
+
+def _beta_prefix(a: float, b: float, x: float, y: float) -> float:
+    """ln of x^a y^b / B(a, b), with y = 1 − x, and no large logs cancelling:
+    where a (or b) is large, x(a + b)/a = 1 + d/a enters through log1p."""
+    if a < _LARGE and b < _LARGE:
+        return a * math.log(x) + b * math.log(y) - (math.lgamma(a) + math.lgamma(b) - math.lgamma(a + b))
+    if a >= _LARGE and b >= _LARGE:
+        d = x * b - y * a  # x(a + b) − a
+        return (a * math.log1p(d / a) + b * math.log1p(-d / b) + 0.5 * math.log(a * b / (a + b)) - 0.5 * _LN_2PI
+                - (_stirling(a) + _stirling(b) - _stirling(a + b)))
+    if b >= _LARGE:  # make a the large one
+        a, b, x, y = b, a, y, x
+    d = x * b - y * a
+    return (a * math.log1p(d / a) - 0.5 * math.log1p(b / a) + b * math.log(y * (a + b)) - b - math.lgamma(b)
+            - _stirling(a) + _stirling(a + b))
+
+
+def _beta_fraction(a: float, b: float, x: float) -> float:
+    """1 / (1 + d1/(1 + d2/(1 + …))), the continued fraction of I_x(a, b)
+    divided by x^a y^b / (a B(a, b)), by the modified Lentz method (written
+    out: the audit computes thousands of p values)."""
+    h = c = 1.0
+    d = 0.0
+    for m in range(_MAX_TERMS):
+        for num in (-(a + m) * (a + b + m) * x / ((a + 2 * m) * (a + 2 * m + 1)),
+                    (m + 1) * (b - m - 1) * x / ((a + 2 * m + 1) * (a + 2 * m + 2))):
+            d = 1 + num * d
+            d = 1 / (d if abs(d) > _TINY else _TINY)
+            c = 1 + num / c
+            if abs(c) < _TINY:
+                c = _TINY
+            h *= c * d
+        if abs(c * d - 1) < _EPS:
+            return 1 / h
+    raise ArithmeticError("incomplete beta: the continued fraction did not converge")
+
+
+def _ibeta(a: float, b: float, x: float, y: float) -> float:
+    """I_x(a, b), the regularized incomplete beta function, y = 1 − x given exactly."""
+    if x <= 0:
+        return 0.0
+    if y <= 0:
+        return 1.0
+    if x > (a + 1) / (a + b + 2):  # the fraction converges fast on the other side
+        return 1 - math.exp(_beta_prefix(b, a, y, x)) * _beta_fraction(b, a, y) / b
+    return math.exp(_beta_prefix(a, b, x, y)) * _beta_fraction(a, b, x) / a
+
+
+def _gamma_prefix(a: float, x: float) -> float:
+    """ln of x^a e^(−x) / Γ(a), through log1p((x − a)/a) where a is large."""
+    if a >= _LARGE:
+        d = x - a
+        return a * math.log1p(d / a) - d + 0.5 * math.log(a) - 0.5 * _LN_2PI - _stirling(a)
+    return a * math.log(x) - x - math.lgamma(a)
+
+
+def _gamma_upper(a: float, x: float) -> float:
+    """Q(a, x), the regularized upper incomplete gamma function."""
+    if x <= 0:
+        return 1.0
+    if x < a + 1:  # the series of P converges fast, and Q = 1 − P is not small here
+        term = total = 1 / a
+        n = a
+        while abs(term) > abs(total) * _EPS:
+            n += 1
+            term *= x / n
+            total += term
+        return 1 - math.exp(_gamma_prefix(a, x)) * total
+    b = x + 1 - a  # the continued fraction of Q (modified Lentz): 1 / (b − 1(1 − a)/(b + 2 − 2(2 − a)/(b + 4 − …)))
+    c, d = 1 / _TINY, 1 / b
+    h = d
+    for i in range(1, _MAX_TERMS):
+        num = -i * (i - a)
+        b += 2
+        d = num * d + b
+        d = 1 / (d if abs(d) > _TINY else _TINY)
+        c = b + num / c
+        if abs(c) < _TINY:
+            c = _TINY
+        h *= d * c
+        if abs(d * c - 1) < _EPS:
+            return math.exp(_gamma_prefix(a, x)) * h
+    raise ArithmeticError("incomplete gamma: the continued fraction did not converge")
 
 
 def upper_tail(symbol: str, value: float, df: tuple[float, ...] = ()) -> float:
     """P(statistic ≥ |value|) for t and z (one tail of |value|), P(statistic ≥
     value) for F and χ² (H as χ²)."""
-    special = _special()
     if symbol == "t":
-        return float(special.stdtr(df[0], -abs(value)))
+        s = value * value
+        return 0.5 * _ibeta(df[0] / 2, 0.5, df[0] / (df[0] + s), s / (df[0] + s))
     if symbol == "z":
-        return float(special.ndtr(-abs(value)))
+        return 0.5 * math.erfc(abs(value) / math.sqrt(2))
     if symbol in ("F", "F_change"):
-        return float(special.fdtrc(df[0], df[1], value))
-    return float(special.chdtrc(df[0], value))
+        u = df[0] * value
+        return _ibeta(df[1] / 2, df[0] / 2, df[1] / (df[1] + u), u / (df[1] + u))
+    return _gamma_upper(df[0] / 2, value / 2)
 
 
 def p_from_statistic(symbol: str, value: float, df: tuple[float, ...] = (), alternative: str = "two-sided") -> float:
@@ -47,6 +144,12 @@ def p_from_statistic(symbol: str, value: float, df: tuple[float, ...] = (), alte
     def need(k: int) -> None:
         if len(df) != k:
             raise InputError(f"{symbol}: needs {k} degree(s) of freedom, got {len(df)}")
+        for i, d in enumerate(df):
+            if not (math.isfinite(d) and d > 0):
+                raise InputError(f"{symbol}: df[{i}] = {d:g} is not a positive number of degrees of freedom")
+
+    if not math.isfinite(value):
+        raise InputError(f"{symbol} = {value!r} is not a finite number; no p can be computed from it")
 
     if symbol in ("r", "rs"):
         need(1)
