@@ -36,10 +36,16 @@ def main(plan_path: Path = HERE / "plan.toml") -> int:
     print(f"Data (invented): {data}")
     print(f"{len(result.records)} results from {len(plan.analyses)} analyses; {len(result.tables)} tables")
     picks = [r for r in result.records if r.id in ("fatigue_alpha", "fatigue_by_incident", "fatigue_by_shift", "shift_incident")]
-    for style in (load_style("apa7"), load_style("ama11"), load_style(HERE / "house-comma.toml")):
-        print(f"\n== {style.title}")
-        for r in picks:
-            print(f"[{r.id}] {render(r, 'stats', style).plain()}")
+    styles = (load_style("apa7"), load_style("ama11"), load_style(HERE / "house-comma.toml"))
+    print("\n== The same results in " + "; ".join(s.title for s in styles))
+    width = max(len(s.name) for s in styles)
+    for r in picks:  # each result in each style, one under the other
+        print(f"[{r.id}]")
+        for style in styles:
+            print(f"  {style.name:{width}}  {render(r, 'stats', style).plain()}")
+    sentence = next(r for r in result.records if r.id == "fatigue_by_incident")
+    for style in styles[:2]:
+        print(f"  {style.name:{width}}  {render(sentence, 'sentence', style).plain()}")
     print("\n== Audit of demo/manuscript-excerpt.md (planted errors)")
     entries = audit_file(HERE / "manuscript-excerpt.md")
     print_table(entries)

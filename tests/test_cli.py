@@ -59,7 +59,7 @@ def test_format_warns_when_p_does_not_follow_from_the_statistic(capsys):
 
 def test_format_negative_ci_and_style(capsys):
     assert main(["format", "welch-t", "--stat=-1.86", "--df", "17.78", "--p", "0.0796", "--style", "ama11"]) == 0
-    assert capsys.readouterr().out == "t(17.78) = \u22121.86, P = .08\n"
+    assert capsys.readouterr().out == "t\u2081\u2087.\u2087\u2088 = \u22121.86, P = .08\n"  # AMA 11: df as a subscript (memory)
 
 
 def test_render_files(tmp_path, capsys):

@@ -72,9 +72,9 @@ def test_labels_are_escaped():
 
 
 def test_ama_style_changes_every_number():
-    # AMA 11 (memory): P italic capital, two digits, CI as (95% CI, a-b)
+    # AMA 11 (memory): P italic capital, two digits, df as a subscript, CI as (95% CI, a-b)
     text = render(EXAMPLES["t_independent"], "stats", "ama11")
-    assert text.markup().replace("\u00a0", " ") == "<i>t</i>(38) = 2.14, <i>P</i> = .04, <i>d</i> = 0.68 (95% CI, 0.04-1.31)"
+    assert text.markup().replace("\u00a0", " ") == "<i>t</i><sub>38</sub> = 2.14, <i>P</i> = .04, <i>d</i> = 0.68 (95% CI, 0.04-1.31)"
 
 
 def test_decimal_comma_style():

@@ -357,6 +357,8 @@ def _md_piece(text: str, styles: frozenset[str]) -> str:
 def _unicode_script(text: str, table: dict[str, str], marker: str) -> str:
     if all(c in table for c in text):
         return "".join(table[c] for c in text)
+    if any(c.isdigit() for c in text) and all(c in table or c in ".,; " for c in text):  # df as subscripts: F₂,₂₃₇, t₃₀.₇₁
+        return "".join(table.get(c, c) for c in text)
     return f"{marker}{text}"
 
 

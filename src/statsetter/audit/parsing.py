@@ -151,7 +151,8 @@ class _Patterns:
         self.mark = mark
         self.number = re.compile(num)
         self.head = re.compile(
-            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]])?\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num})"
+            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}}))?"
+            rf"\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num})"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
         self.p = re.compile(rf"(?<![\w.*])(?P<sym>[pP])(?:-value)?\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num}(?:[eE][-−]?\d+)?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
@@ -198,6 +199,7 @@ class _Patterns:
         return Number(raw, value, decimals, s, s + len(raw))
 
 
+_SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789")
 _CACHE: dict[str, _Patterns] = {}
 _MAX_DIGITS = 100
 
@@ -374,6 +376,8 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     n = None
     if m.group("inner") is not None:
         dfs, n = _inner(pat, m.group("inner"), m.start("inner"))
+    elif m.group("sub") is not None:  # df as subscripts (AMA 11): t₃₈, F₂,₂₃₇; one character each, so positions hold
+        dfs, n = _inner(pat, m.group("sub").translate(_SUBSCRIPT_DIGITS), m.start("sub"))
     rep = Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, m.group("op"), value)
     rep.operators = _operators(pat, text, m.start(), value.end)
     return rep

@@ -107,7 +107,7 @@ def run(ns: argparse.Namespace) -> int:
     else:
         from ..export.text_tables import write_table
 
-        emit(write_table(table, fmt), ns.out, inputs=[ns.data])
+        emit(write_table(table, fmt, style), ns.out, inputs=[ns.data])
     if ns.out:
         print(f"wrote {ns.out}")
     return 0

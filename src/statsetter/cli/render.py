@@ -66,7 +66,7 @@ def run(ns: argparse.Namespace) -> int:
     from ..export.text_tables import write_table
 
     numbers = {id(r): k for k, r in enumerate(others, 1)}  # tables numbered in order
-    lines = [render(r, ns.form, style).to(ns.to) if isinstance(r, Result) else write_table(table(r, style, number=numbers[id(r)]), ns.to)
+    lines = [render(r, ns.form, style).to(ns.to) if isinstance(r, Result) else write_table(table(r, style, number=numbers[id(r)]), ns.to, style)
              for r in records]
     sep = "\n\n" if ns.to in ("md", "tex") or others else "\n"
     emit(sep.join(lines), ns.out, inputs=ns.files)
@@ -95,5 +95,5 @@ def _table(ns: argparse.Namespace, records, style) -> int:  # type: ignore[no-un
         return 0
     from ..export.text_tables import write_table
 
-    emit(write_table(made, ns.to), ns.out, inputs=ns.files)
+    emit(write_table(made, ns.to, style), ns.out, inputs=ns.files)
     return 0

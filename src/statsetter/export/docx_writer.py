@@ -307,11 +307,17 @@ def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH)
     (italic, title case) paragraphs, kept with the table; the w:tbl; one
     paragraph per note part (general, specific, probability)."""
     out = []
-    if table.number is not None:
-        out.append(_paragraph_xml(StyledText(f"Table {table.number}"), keep_next=True, bold=True))
-    if table.title:
-        title = title_case(table.title)
-        out.append(_paragraph_xml(StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans), keep_next=True))
+    if style.tables.get("caption") == "one_line" and (table.number is not None or table.title):  # AMA: "Table 5. Title"
+        label = f"Table {table.number}." if table.number is not None else ""
+        title = title_case(table.title) if table.title else StyledText()
+        runs = (f'<w:r><w:rPr><w:b/></w:rPr><w:t xml:space="preserve">{_escape(label)} </w:t></w:r>' if label else "") + _run_xml(title)
+        out.append(f'<w:p xmlns:w="{_WNS}"><w:pPr><w:keepNext/><w:ind w:left="0" w:firstLine="0"/></w:pPr>{runs}</w:p>')
+    else:
+        if table.number is not None:
+            out.append(_paragraph_xml(StyledText(f"Table {table.number}"), keep_next=True, bold=True))
+        if table.title:
+            title = title_case(table.title)
+            out.append(_paragraph_xml(StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans), keep_next=True))
     line = round(240 * style.manuscript.get("table_line_spacing", 1.0))
     out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=line))
     out += [_paragraph_xml(part) for part in table.note_parts()]

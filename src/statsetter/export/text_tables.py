@@ -21,12 +21,20 @@ if TYPE_CHECKING:
 __all__ = ["table_markdown", "table_html", "table_latex", "table_csv", "table_text", "write_table"]
 
 
-def table_markdown(t: TableModel) -> str:
+def _one_line(style: "Style | None") -> bool:
+    """AMA's caption, "Table 5. Title" on one line, rather than APA's number over an italic title."""
+    return style is not None and style.tables.get("caption") == "one_line"
+
+
+def table_markdown(t: TableModel, one_line: bool = False) -> str:
     out = []
-    if t.number is not None:
-        out += [f"**Table {t.number}**", ""]
-    if t.title:
-        out += [_italic(title_case(t.title)).markdown(), ""]
+    if one_line and (t.number is not None or t.title):
+        out += [" ".join(([f"**Table {t.number}.**"] if t.number is not None else []) + ([title_case(t.title).markdown()] if t.title else [])), ""]
+    else:
+        if t.number is not None:
+            out += [f"**Table {t.number}**", ""]
+        if t.title:
+            out += [_italic(title_case(t.title)).markdown(), ""]
     heads = [t.stub_head.markdown()] + [h.markdown() for h in t.heads_with_spanners()]
     out.append("| " + " | ".join(_md_cell(h) for h in heads) + " |")
     aligns = [":---"] + [":---:" if c.align in ("center", "decimal") else ("---:" if c.align == "right" else ":---") for c in t.columns]
@@ -49,13 +57,15 @@ def _md_cell(text: str) -> str:
     return text.replace("|", "\\|") or " "
 
 
-def table_html(t: TableModel) -> str:
+def table_html(t: TableModel, one_line: bool = False) -> str:
     out = ['<div class="statsetter-table">']
     out.append('<table style="border-collapse:collapse;border-top:1px solid black;border-bottom:1px solid black">')
     if t.number is not None or t.title:  # number and title above the table, flush left (APA 7 §7.7), as its caption
-        caption = [f"<b>Table {t.number}</b>"] if t.number is not None else []
-        caption += [f"<i>{title_case(t.title).html()}</i>"] if t.title else []
-        out.append('<caption style="caption-side:top;text-align:left">' + "<br>".join(caption) + "</caption>")
+        if one_line:
+            caption = " ".join(([f"<b>Table {t.number}.</b>"] if t.number is not None else []) + ([title_case(t.title).html()] if t.title else []))
+        else:
+            caption = "<br>".join(([f"<b>Table {t.number}</b>"] if t.number is not None else []) + ([f"<i>{title_case(t.title).html()}</i>"] if t.title else []))
+        out.append('<caption style="caption-side:top;text-align:left">' + caption + "</caption>")
     out.append("<thead>")
     ncol = len(t.columns)
     if t.spanners:
@@ -126,10 +136,14 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
     spec = "".join("r" if d or c.align == "right" else ("l" if c.align == "left" else "c") for c, d in zip(t.columns, decimal))
     stub = ">{\\raggedright\\arraybackslash\\hangindent=1em\\hangafter=1}X" if not too_wide else "l"
     out = ["\\begin{table}[htbp]", "\\raggedright"]
-    if t.number is not None:
-        out.append(f"\\textbf{{Table {t.number}}}\\par\\smallskip")
-    if t.title:
-        out.append(f"\\textit{{{title_case(t.title).latex()}}}\\par\\medskip")
+    if _one_line(style) and (t.number is not None or t.title):
+        out.append(" ".join(([f"\\textbf{{Table {t.number}.}}"] if t.number is not None else []) + ([title_case(t.title).latex()] if t.title else []))
+                   + "\\par\\medskip")
+    else:
+        if t.number is not None:
+            out.append(f"\\textbf{{Table {t.number}}}\\par\\smallskip")
+        if t.title:
+            out.append(f"\\textit{{{title_case(t.title).latex()}}}\\par\\medskip")
     if too_wide:  # set at its own width, scaled down to the line only if wider (LaTeX measures it)
         out += ["\\sbox0{%", f"\\begin{{tabular}}{{@{{}}{stub}{spec}@{{}}}}"]
     else:
@@ -186,7 +200,7 @@ def table_csv(t: TableModel) -> str:
     return buf.getvalue()
 
 
-def table_text(t: TableModel) -> str:
+def table_text(t: TableModel, one_line: bool = False) -> str:
     """A fixed-width table for the terminal, with horizontal rules only."""
     heads = [t.stub_head.plain()] + [h.plain() for h in t.heads_with_spanners()]
     body = [
@@ -202,10 +216,13 @@ def table_text(t: TableModel) -> str:
 
     rule = "─" * (sum(widths) + 2 * (len(widths) - 1))
     out = []
-    if t.number is not None:
-        out.append(f"Table {t.number}")
-    if t.title:
-        out.append(t.title.plain())
+    if one_line and (t.number is not None or t.title):
+        out.append(" ".join(([f"Table {t.number}."] if t.number is not None else []) + ([t.title.plain()] if t.title else [])))
+    else:
+        if t.number is not None:
+            out.append(f"Table {t.number}")
+        if t.title:
+            out.append(t.title.plain())
     out += [rule, line(heads), rule] + [line(b) for b in body] + [rule]
     out += [n.plain() for n in t.note_parts()]
     return "\n".join(out) + "\n"
@@ -220,5 +237,7 @@ def write_table(t: TableModel, fmt: str, style: "Style | None" = None) -> str:
         raise ValueError(f"unknown table format {fmt!r}; formats: {', '.join(_WRITERS)}")
     if fmt == "tex":
         return table_latex(t, style)
-    return _WRITERS[fmt](t)
+    if fmt == "csv":
+        return table_csv(t)
+    return _WRITERS[fmt](t, one_line=_one_line(style))  # type: ignore[call-arg]
 

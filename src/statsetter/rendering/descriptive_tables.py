@@ -16,6 +16,7 @@ from typing import TYPE_CHECKING
 from ..style.numbers import Numbers, numbers_for, round_half_up
 from ..style.profile import Style, load_style
 from ..styled import StyledText, escape_markup
+from .sentences import eponyms
 from .tables import Column, Row, Spanner, TableModel
 
 if TYPE_CHECKING:
@@ -113,7 +114,7 @@ class _Layout:
     def variable_rows(self, v: "VariableSummary") -> list[Row]:
         n = self.sym("n")
         if v.kind == "nominal":
-            return self.category_rows(v, self.stub(v, f"{n} (%)"))
+            return self.category_rows(v, self.stub(v, self.style.symbols.get("n_percent", f"{n} (%)")))
         rows: list[Row] = []
         first = True
         if v.kind == "continuous" and v.mean is not None and "mean_sd" in v.show:
@@ -234,7 +235,7 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
         number=number,
         spanners=spanners,
         general_note=_general_note(d, lay),
-        specific_notes=tuple((letter, StyledText.from_markup(f"{name}.")) for name, letter in lay.tests.items()),
+        specific_notes=tuple((letter, StyledText.from_markup(eponyms(f"{name}.", lay.style))) for name, letter in lay.tests.items()),
     )
 
 

@@ -10,7 +10,7 @@ from ..records import Interval, Result
 from ..style.numbers import Numbers
 from ..style.profile import Style, load_style
 from .kinds import KINDS
-from .sentences import _helpers
+from .sentences import _helpers, eponyms
 from ..styled import StyledText
 from .tables import Column, Row, Spanner, TableModel
 
@@ -31,11 +31,15 @@ def p_cell(num: Numbers, r: Result) -> StyledText:
 
 
 def interval_cell(num: Numbers, style: Style, ci: "Interval | None", quantity: str, null: float = 0.0, decimals: int | None = None) -> StyledText:
-    """``[low, high]`` under a ``95% CI`` head, decision-preserving like every CI."""
+    """A CI under a ``95% CI`` head in the style's cell form (``[low, high]``
+    in APA 7, ``low-high`` in AMA 11), decision-preserving like every CI."""
     if ci is None:
         return StyledText()
     low, high = num.interval(ci.low, ci.high, quantity, null, decimals=decimals)
-    return StyledText(f"[{low}{style.list_separator}{style.keep_together}{high}]")
+    cell = style.ci.get("cell") or "[{low}{sep} {high}]"
+    if ci.low < 0 or ci.high < 0:
+        cell = style.ci.get("cell_negative") or cell
+    return StyledText(cell.replace(" ", style.keep_together).format(low=low, high=high, sep=style.list_separator, level=""))
 
 
 def subject(r: Result) -> str:
@@ -141,7 +145,7 @@ def posthoc_table(records: Sequence[Result], style: "Style | str | None" = None,
     if effect:
         columns += [Column(_cell(resolved.symbol("g"))), Column(StyledText(f"{pct}% CI"))]
         spanners = (Spanner(StyledText("Mean difference"), 0, 2), Spanner(StyledText("Standardized difference"), 2, 4))
-        note = note + StyledText.from_markup(f" {resolved.symbol('g')}: Hedges' {resolved.symbol('g')} from the two groups' pooled SD; its CI is not adjusted.")
+        note = note + StyledText.from_markup(eponyms(f" {resolved.symbol('g')}: Hedges' {resolved.symbol('g')} from the two groups' pooled SD; its CI is not adjusted.", resolved))
     return TableModel(
         title=StyledText(title),
         stub_head=StyledText("Comparison"),

@@ -83,6 +83,8 @@ class Helpers:
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
         self._serial: bool = bool(style.wording.get("serial_comma", True))
+        self._mean_sd: bool = style.wording.get("descriptives", "symbols") == "mean_sd"
+        self._df_sub: bool = style.data["numbers"].get("df_form", "parentheses") == "subscript"
         # inside a statistic ("t(38) = 2.14", "p < .001", "95% CI [a, b]", "n = 93") the style's unbreakable space
         nb = style.keep_together
         self._nb = nb
@@ -143,7 +145,9 @@ class Helpers:
         if n and r.n is not None:
             inside.append(f"{self.sym('N')}{self._eq}{num.integer(r.n)}")
         head = self.sym(symbol or s.symbol)
-        if inside:
+        if inside and self._df_sub:  # AMA: t₃₈, F₂,₂₃₇ (N stays in the text)
+            head = f"{head}<sub>{self.sep.join(num.df(d) for d in s.df)}</sub>" if s.df else head
+        elif inside:
             head = f"{head}({(self.sep + self._nb).join(inside)})"  # "F(2, 128.22)" keeps together too
         return f"{head}{self._eq}{self._stat_value(r, s.symbol, s.value)}"
 
@@ -229,12 +233,19 @@ class Helpers:
         return out
 
     def desc(self, r: Result, index: int = 0, parts: str = "mean sd n") -> str:
-        """``M = 4.22, SD = 0.73, n = 40`` for group ``index``; absent parts are left out."""
+        """``M = 4.22, SD = 0.73, n = 40`` for group ``index`` (AMA: ``mean [SD],
+        4.22 [0.73]; n = 40``, brackets since it stands in parentheses);
+        absent parts are left out."""
         if index >= len(r.groups):
             return ""
         g: GroupSummary = r.groups[index]
         out = []
         path = f"groups[{index}]"
+        if self._mean_sd and g.mean is not None and g.sd is not None and "mean" in parts.split() and "sd" in parts.split():
+            m = self.num.number(g.mean, "M", held=_held(r, f"{path}.mean"))
+            sd = self.num.number(g.sd, "SD", held=_held(r, f"{path}.sd"))
+            out.append(f"mean [SD], {m} [{sd}]")
+            parts = " ".join(p for p in parts.split() if p not in ("mean", "sd"))
         for part in parts.split():
             v = getattr(g, _GROUP_FIELDS[part])
             if v is None:
@@ -250,7 +261,7 @@ class Helpers:
             else:
                 text = self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))
             out.append(f"{self.sym(symbol)}{self._eq}{text}")
-        return self._join.join(out)
+        return ("; " if self._mean_sd and out and out[0].startswith("mean [SD]") else self._join).join(out)
 
     def paren(self, text: str) -> str:
         """`` (text)`` after a group's name, or nothing when there is nothing to say."""
@@ -401,6 +412,17 @@ def _tidy(markup: str) -> str:
     return _SPACE_PUNCT.sub(r"\1", text)
 
 
+_POSSESSIVE = re.compile(r"\b(Welch|Student|Fisher|Cronbach|Kendall|Pearson|Spearman|Cohen|Levene|Bartlett|Tukey|Mauchly|Hedges)(?:'s|&#39;s|'|&#39;)(?=[\s\u00a0\u202f<])")
+
+
+def eponyms(text: str, style: Style) -> str:
+    """Methods named after people as the style writes them: "Welch's t test"
+    (APA 7) or "Welch t test" (AMA 11 drops the possessive)."""
+    if style.wording.get("possessive", True) or ("'" not in text and "&#39;" not in text):
+        return text
+    return _POSSESSIVE.sub(r"\1", text)
+
+
 def render(record: Result, form: str = "stats", style: "Style | str | None" = None, language: str = "en") -> StyledText:
     """A record as StyledText: ``form`` is ``stats`` or ``sentence``."""
     resolved = style if isinstance(style, Style) else load_style(style)
@@ -412,7 +434,7 @@ def render(record: Result, form: str = "stats", style: "Style | str | None" = No
     except Exception as exc:  # a template expression that does not fit the record
         raise TemplateError(f"template {record.kind}.j2 ({form}) failed: {exc}") from None
     try:
-        return StyledText.from_markup(_tidy(str(markup)))
+        return StyledText.from_markup(eponyms(_tidy(str(markup)), resolved))
     except ValueError as exc:
         raise TemplateError(f"template {record.kind}.j2 ({form}) produced bad markup: {exc}") from None
 

@@ -164,6 +164,7 @@ SCHEMA: dict[str, Any] = {
         "bounded": {"quantities": _text_list},
         "never_zero": {"quantities": _text_list},
         "keep_together": _one_of("space", "nbsp", "thin"),
+        "df_form": _one_of("parentheses", "subscript"),
     },
     "p": {
         "symbol": _markup,
@@ -179,12 +180,16 @@ SCHEMA: dict[str, Any] = {
         "pattern_negative": _pattern,
         "attach": _attach,
         "label": _text,
+        "cell": _pattern,
+        "cell_negative": _pattern,
         "variance_level": _float(0.5, 0.999),
     },
     "wording": {
         "significance": _bool,
         "alpha": _float(0.0001, 0.5),
         "serial_comma": _bool,
+        "possessive": _bool,
+        "descriptives": _one_of("symbols", "mean_sd"),
     },
     "symbols": {_ANY: _markup},
     "tables": {
@@ -192,6 +197,7 @@ SCHEMA: dict[str, Any] = {
         "title_italic": _bool,
         "number_align": _one_of("center", "decimal"),
         "intercept": _bool,
+        "caption": _one_of("two_lines", "one_line"),
         "font": _text,
         "font_size": _float(0, 30),
     },
