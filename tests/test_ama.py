@@ -78,3 +78,12 @@ def test_tables_one_line_caption_range_cells_and_no_percent_head():
     assert "<w:b/>" in word and "Table 2. </w:t>" in word and "Pairwise Comparisons" in word and "<w:i/>" not in word
     sample = table(describe(penguins, ["species", "body_mass_g"]).main, AMA)
     assert any("No. (%)" in r.stub.text for r in sample.rows)
+
+
+def test_alpha_as_the_significance_level_keeps_no_leading_zero():
+    # AMA 11 (memory): no leading zero on α as the significance level, while Cronbach α keeps it
+    import dataclasses
+
+    null = dataclasses.replace(EXAMPLES["kendall"], p=0.30)
+    assert "compatible with no correlation at α = .05" in plain(null, "sentence")
+    assert "α = 0.84" in plain(EXAMPLES["cronbach_alpha"])

@@ -193,7 +193,7 @@ def _pairs_summary(pairs: Sequence[Result], style: "Style") -> StyledText:
     procedure = first.details.get("procedure", "adjusted")
     below = [" vs. ".join(g.label for g in r.groups) for r in pairs if r.p is not None and r.p < r.alpha]
     lead = escape_markup(f"Of the {_NUMBER_WORDS.get(len(pairs), len(pairs))} pairwise comparisons of {subject(first)} ({procedure}), ")
-    p_below = f"had an adjusted {style.symbol('p')} below {h.num.number(first.alpha, 'alpha')}"
+    p_below = f"had an adjusted {style.symbol('p')} below {h.num.number(first.alpha, 'alpha_level')}"
     if not below:
         return StyledText.from_markup(f"{lead}none {p_below}.")
     count = "all" if len(below) == len(pairs) else _NUMBER_WORDS.get(len(below), str(len(below)))

@@ -145,7 +145,7 @@ class Helpers:
         if n and r.n is not None:
             inside.append(f"{self.sym('N')}{self._eq}{num.integer(r.n)}")
         head = self.sym(symbol or s.symbol)
-        if inside and self._df_sub:  # AMA: t₃₈, F₂,₂₃₇ (N stays in the text)
+        if inside and self._df_sub and not head.endswith("</sub>"):  # AMA: t₃₈, F₂,₂₃₇ (N stays in the text); rs keeps (238)
             head = f"{head}<sub>{self.sep.join(num.df(d) for d in s.df)}</sub>" if s.df else head
         elif inside:
             head = f"{head}({(self.sep + self._nb).join(inside)})"  # "F(2, 128.22)" keeps together too
@@ -338,7 +338,7 @@ class Helpers:
         """``compatible with no difference at α = .05``: how a null result is
         read, in our own words (never "no effect", never evidence of absence)."""
         said = "not statistically significant and " if self.significance_wording else ""
-        return f"{said}compatible with no {escape(noun)} at {self.sym('alpha')}{self._eq}{self.num.number(r.alpha, 'alpha')}"
+        return f"{said}compatible with no {escape(noun)} at {self.sym('alpha')}{self._eq}{self.num.number(r.alpha, 'alpha_level')}"
 
     def verdict(self, r: Result) -> str:
         """``statistically significant`` / ``not statistically significant`` when
