@@ -88,7 +88,7 @@ def test_render_tables_from_records(tmp_path, capsys):
     assert "| *p* |" in out and "| < .001 |" in out and "*p* <" not in out
     assert main(["render", str(records), "--table", "regression", "--title", "Body mass"]) == 0
     out = capsys.readouterr().out
-    assert "Body mass" in out and "female (ref.)" in out and "ref. = reference category" in out and "Flipper_length_mm" in out
+    assert "Body Mass" in out and "female (ref.)" in out and "ref. = reference category" in out and "Flipper_length_mm" in out
     word = tmp_path / "table.docx"
     assert main(["render", str(records), "--table", "regression", "--out", str(word)]) == 0
     assert "Linear Regression" in pdf_text(word)

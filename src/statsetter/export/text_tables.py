@@ -217,12 +217,12 @@ def table_text(t: TableModel, one_line: bool = False) -> str:
     rule = "─" * (sum(widths) + 2 * (len(widths) - 1))
     out = []
     if one_line and (t.number is not None or t.title):
-        out.append(" ".join(([f"Table {t.number}."] if t.number is not None else []) + ([t.title.plain()] if t.title else [])))
+        out.append(" ".join(([f"Table {t.number}."] if t.number is not None else []) + ([title_case(t.title).plain()] if t.title else [])))
     else:
         if t.number is not None:
             out.append(f"Table {t.number}")
         if t.title:
-            out.append(t.title.plain())
+            out.append(title_case(t.title).plain())
     out += [rule, line(heads), rule] + [line(b) for b in body] + [rule]
     out += [n.plain() for n in t.note_parts()]
     return "\n".join(out) + "\n"

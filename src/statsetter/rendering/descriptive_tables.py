@@ -119,7 +119,7 @@ class _Layout:
         first = True
         if v.kind == "continuous" and v.mean is not None and "mean_sd" in v.show:
             assert v.sd is not None
-            what = f"{self.sym('M')} ({self.sym('SD')})"
+            what = self.style.symbols.get("mean_sd", f"{self.sym('M')} ({self.sym('SD')})")
             cells = [self.centre_spread(v.mean[j], v.sd[j]) for j in range(self.groups)]
             rows.append(Row(self.stub(v, what), tuple(cells + self.extra(v, True))))
             first = False
