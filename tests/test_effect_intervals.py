@@ -108,3 +108,20 @@ def test_each_post_hoc_pair_carries_hedges_g_as_the_t_test_of_the_two_groups_doe
         assert g.value == pytest.approx(ref.value, rel=1e-10)
         assert (g.ci.low, g.ci.high) == pytest.approx((ref.ci.low, ref.ci.high), rel=1e-8)
         assert "not adjusted" in g.method
+
+
+def test_a_published_worked_example_of_the_noncentrality_limits():
+    # effectsize's documentation (R package effectsize 0.4.5, rdocumentation.org, page of chisq_to_phi, section on
+    # CIs) prints eta_squared(aov(mpg ~ factor(gear) + factor(cyl), mtcars[1:7, ])): partial η² .58, 90% CI [0.00, 0.84]
+    # for gear and .46, 90% CI [0.00, 0.78] for cyl. Its sequential F values, from R's anova() on the same seven cars
+    # (Rscript here): gear F(1, 3) = 20.70107142857 / 5.041666666667, cyl F(2, 3) = 6.36125 / 5.041666666667.
+    # That package maps each λ limit to λ / (λ + df_error); statsetter maps it to λ / (λ + df1 + df2 + 1)
+    # (Steiger, 2004): the same λ limits give the published numbers under its mapping and ours under ours.
+    mse = 5.041666666667
+    for ss, df1, eta, high in ((20.70107142857, 1, 0.58, 0.84), (12.7225, 2, 0.46, 0.78)):
+        F = ss / df1 / mse
+        assert round(ss / (ss + 3 * mse), 2) == eta
+        low_l, high_l = ncf_ci(F, df1, 3, 0.90)
+        assert low_l == 0.0 and round(high_l / (high_l + 3), 2) == high  # the published mapping
+        ours = variance_explained_ci(F, df1, 3, 0.90)
+        assert ours == (0.0, high_l / (high_l + df1 + 3 + 1))
