@@ -193,3 +193,33 @@ def test_hierarchical_models_side_by_side_against_the_formula_api(penguins):
     assert rows["ΔR2"][4] == num.number(big.rsquared - small.rsquared, "delta_R2")
     assert rows["ΔF (df)"][4] == f"{num.number(f, 'F')} ({int(dk)}, {int(big.df_resid)})" and rows["ΔF (df)"][7] == "< .001"
     assert rows["N"] == [str(int(big.nobs)), "", "", "", str(int(big.nobs)), "", "", ""]
+
+
+def test_logistic_models_side_by_side_and_the_styles_pseudo_r2(penguins):
+    # two logistic regressions of one outcome side by side: every B and OR is statsmodels' (formula interface);
+    # the fit rows give χ² (df) with its p and the style's pseudo-R²: Nagelkerke (1991) by default, McFadden's
+    # (1974) = statsmodels' prsquared when the style asks for it
+    from statsetter import load_style
+    from statsetter.records.naming import name_records
+    from statsetter.rendering.regression_tables import regression_table
+    from statsetter.style import numbers_for
+
+    num = numbers_for(load_style("apa7"))
+    data = penguins.dropna(subset=["sex", "bill_depth_mm", "body_mass_g"]).assign(male=lambda d: (d.sex == "male").astype(int))
+    small = name_records("a", logistic_regression(data, "sex", ["bill_depth_mm"]))
+    big = name_records("b", logistic_regression(data, "sex", ["bill_depth_mm", "body_mass_g"]))
+    ref_small = smf.logit("male ~ bill_depth_mm", data=data).fit(disp=False)
+    ref_big = smf.logit("male ~ bill_depth_mm + body_mass_g", data=data).fit(disp=False)
+    assert big[0].effect("R2_mcfadden").value == pytest.approx(ref_big.prsquared, rel=1e-9)
+    table = regression_table(small + big, "apa7")
+    assert [s.label.text for s in table.spanners] == ["Model 1", "Model 2"]
+    assert [c.head.text for c in table.columns] == ["B", "OR", "95% CI", "p"] * 2
+    rows = {r.stub.text: [c.text for c in r.cells] for r in table.rows}
+    assert rows["Bill_depth_mm"][0] == num.number(ref_small.params["bill_depth_mm"], "B")
+    assert rows["Bill_depth_mm"][5] == num.number(math.exp(ref_big.params["bill_depth_mm"]), "OR")
+    assert rows["χ2 (df)"][0] == f"{num.number(ref_small.llr, 'chi2')} (1)" and rows["χ2 (df)"][7] == "< .001"
+    assert rows["Nagelkerke R2"][4] == num.number(big[0].effect("R2_nagelkerke").value, "R2_nagelkerke")
+    mcfadden = regression_table(small + big, load_style(_style_file("[wording]\npseudo_r2 = \"mcfadden\"\n")))
+    rows = {r.stub.text: [c.text for c in r.cells] for r in mcfadden.rows}
+    assert rows["McFadden R2"][4] == num.number(ref_big.prsquared, "R2_mcfadden")
+    assert "McFadden R² = " in render(big[0], "stats", load_style(_style_file("[wording]\npseudo_r2 = \"mcfadden\"\n"))).plain()

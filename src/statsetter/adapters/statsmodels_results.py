@@ -166,7 +166,7 @@ def logit(res: Any, ctx: Context) -> list[Result]:
     terms = [t for t in names if t not in _INTERCEPT]
     outcome, named = _names(res, ctx, names)
     model = _base(ctx, "logistic_model", [], statistic=Statistic("chi2", float(res.llr), (float(res.df_model),)), p=float(res.llr_pvalue), n=n,
-                  effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"),), details={"predictors": _predictors(terms, named, ctx.labels)},
+                  effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"), EffectSize("R2_mcfadden", float(res.prsquared), method="McFadden (1974): 1 − ln L / ln L0")), details={"predictors": _predictors(terms, named, ctx.labels)},
                   variables=(outcome,) if outcome else ())
     ci = np.asarray(res.conf_int(alpha=1 - level))
     out = [model]

@@ -306,7 +306,7 @@ def logistic_regression(
             statistic=Statistic("chi2", float(fit.llr), (float(fit.df_model),)),
             p=float(fit.llr_pvalue),
             n=n,
-            effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"),),
+            effects=(EffectSize("R2_nagelkerke", nagelkerke, method="Nagelkerke (1991)"), EffectSize("R2_mcfadden", 1 - ll1 / ll0, method="McFadden (1974): 1 − ln L / ln L0")),
             variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"),),
             notes=c.notes(Note("method", f"{outcome} = {event} coded 1."), *coding, missing),
             details={"predictors": _labels(predictors, labels), "event": f"{event}"},

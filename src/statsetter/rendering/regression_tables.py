@@ -274,11 +274,12 @@ def _fit_rows(models: list[_Model], num: Numbers, style: Style, linear: bool, wi
     def n(m: _Model):  # type: ignore[no-untyped-def]
         return (num.integer(m.model.n) if m.model is not None and m.model.n else None), None
 
+    pseudo = f"R2_{style.wording.get('pseudo_r2', 'nagelkerke')}"
     if linear:
         made = [row(style.symbol("R2"), lambda m: effect(m, "R2")), row(style.symbol("R2_adj")[:1].upper() + style.symbol("R2_adj")[1:], lambda m: effect(m, "R2_adj")),
                 row(style.symbol("delta_R2"), lambda m: effect(m, "delta_R2", "change")), row(style.symbol("F_change") + " (<i>df</i>)", change)]
     else:
-        made = [row(style.symbol("chi2") + " (<i>df</i>)", chi2), row(style.symbol("R2_nagelkerke"), lambda m: effect(m, "R2_nagelkerke"))]
+        made = [row(style.symbol("chi2") + " (<i>df</i>)", chi2), row(style.symbol(pseudo), lambda m: effect(m, pseudo))]
     made.append(row(style.symbol("N"), n))
     return [r for r in made if r is not None]
 

@@ -84,6 +84,7 @@ class Helpers:
         self.significance_wording: bool = bool(style.wording.get("significance", False))
         self._serial: bool = bool(style.wording.get("serial_comma", True))
         self._mean_sd: bool = style.wording.get("descriptives", "symbols") == "mean_sd"
+        self._pseudo = f"R2_{style.wording.get('pseudo_r2', 'nagelkerke')}"
         self._df_sub: bool = style.data["numbers"].get("df_form", "parentheses") == "subscript"
         # inside a statistic ("t(38) = 2.14", "p < .001", "95% CI [a, b]", "n = 93") the style's unbreakable space
         nb = style.keep_together
@@ -93,7 +94,7 @@ class Helpers:
         self._ci_pattern_neg = self._ci_pattern_neg.replace(" ", nb)
 
     _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible paren".split()
-    _PLAIN = "var cap verdict significant direction_word null and_next predictors".split()
+    _PLAIN = "var cap verdict significant direction_word null and_next predictors pseudo_r2".split()
 
     def raw(self) -> dict[str, Any]:
         """The names a compiled stats form sees: the markup helpers as they
@@ -231,6 +232,10 @@ class Helpers:
             shown = self.num.shown_decimals(e.value, q, _held(r, "estimate.value"))
             out += self._ci_attach + self._ci(r, e.ci, q, e.null, "estimate.ci", shown if shown > self.num.decimals_for(q) else None)
         return out
+
+    def pseudo_r2(self) -> str:
+        """The pseudo-R² a logistic model reports in this style: R2_nagelkerke or R2_mcfadden."""
+        return self._pseudo
 
     def desc(self, r: Result, index: int = 0, parts: str = "mean sd n") -> str:
         """``M = 4.22, SD = 0.73, n = 40`` for group ``index`` (AMA: ``mean [SD],

@@ -190,6 +190,7 @@ SCHEMA: dict[str, Any] = {
         "serial_comma": _bool,
         "possessive": _bool,
         "descriptives": _one_of("symbols", "mean_sd"),
+        "pseudo_r2": _one_of("nagelkerke", "mcfadden"),
     },
     "symbols": {_ANY: _markup},
     "tables": {
