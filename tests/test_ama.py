@@ -68,7 +68,7 @@ def test_tables_one_line_caption_range_cells_and_no_percent_head():
     penguins = pg.read_dataset("penguins")
     pairs = table(posthoc(penguins, "body_mass_g", "species"), AMA, number=2)
     md = write_table(pairs, "md", AMA).replace("\u00a0", " ")
-    assert md.startswith("**Table 2.** Pairwise Comparisons\n") and "−1,507.53 to −1,243.18" in md
+    assert md.startswith("**Table 2.** Pairwise Comparisons\n") and "−1507.53 to −1243.18" in md
     apa = write_table(table(posthoc(penguins, "body_mass_g", "species"), APA, number=2), "md", APA).replace("\u00a0", " ")
     assert apa.startswith("**Table 2**\n\n*Pairwise Comparisons*") and "[−1,507.53, −1,243.18]" in apa
     assert write_table(pairs, "text", AMA).startswith("Table 2. Pairwise Comparisons\n")
@@ -87,3 +87,12 @@ def test_alpha_as_the_significance_level_keeps_no_leading_zero():
     null = dataclasses.replace(EXAMPLES["kendall"], p=0.30)
     assert "compatible with no correlation at α = .05" in plain(null, "sentence")
     assert "α = 0.84" in plain(EXAMPLES["cronbach_alpha"])
+
+
+def test_thin_spaces_group_digits_from_five_digits_on():
+    # AMA 11 (memory): 1507 and 13 071 (a thin space, U+2009), where APA 7 writes 1,507 and 13,071
+    from statsetter.style.numbers import numbers_for
+
+    ama, apa = numbers_for(AMA), numbers_for(APA)
+    assert (ama.integer(1507), ama.integer(13071), ama.number(143401583.99, "SS")) == ("1507", "13\u2009071", "143\u2009401\u2009583.99")
+    assert (apa.integer(1507), apa.integer(13071)) == ("1,507", "13,071")

@@ -418,6 +418,7 @@ _LATEX = {
     ">": r"\textgreater{}",
     "\u00a0": "~",  # the no-break space that keeps a statistic together
     "\u202f": r"\,",  # a thin no-break space
+    "\u2009": r"\,",  # a thin space (AMA digit groups)
 }
 _LATEX_RE = re.compile("|".join(re.escape(k) for k in _LATEX))
 

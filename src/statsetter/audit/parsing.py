@@ -114,7 +114,7 @@ def symbol_of(text: str) -> str | None:
 def _number_pattern(mark: str) -> str:
     if mark == ",":
         return r"[-−–‐]?\s?(?:\d{1,3}(?:[.\u202f\u00a0 ]\d{3})+(?:,\d+)?|\d+(?:,\d+)?|,\d+)"
-    return r"[-−–‐]?\s?(?:\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+)"
+    return r"[-−–‐]?\s?(?:\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d{1,3}(?:[\u2009\u202f]\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+)"
 
 
 _SYMBOL = (
@@ -180,7 +180,7 @@ class _Patterns:
         if self.mark == ",":
             body = re.sub(r"[.\u202f\u00a0 ](?=\d{3}(?!\d))", "", body).replace(",", ".")
         else:
-            body = body.replace(",", "")
+            body = body.replace(",", "").replace("\u2009", "").replace("\u202f", "")  # 1,256 or 13 071 (thin spaces, AMA)
         if len(body) > _MAX_DIGITS:  # not a statistic anyone typed; never converted (int-digit limits, overflow)
             return None
         try:
