@@ -125,3 +125,22 @@ def test_a_published_worked_example_of_the_noncentrality_limits():
         assert low_l == 0.0 and round(high_l / (high_l + 3), 2) == high  # the published mapping
         ours = variance_explained_ci(F, df1, 3, 0.90)
         assert ours == (0.0, high_l / (high_l + df1 + 3 + 1))
+
+
+def test_a_style_can_ask_for_ninety_percent_intervals_of_variance_explained(tmp_path):
+    # [ci] variance_level = 0.90 (Steiger's convention for a one-sided F test): η²-type intervals at 90% in a
+    # plan's run, while the interval of B stays at the plan's 95%; the sentence says the level it shows
+    from statsetter import render
+    from statsetter.plan import load_plan, run_plan
+
+    pg.read_dataset("penguins").to_csv(tmp_path / "d.csv", index=False)
+    (tmp_path / "ninety.toml").write_text('extends = "apa7"\n[ci]\nvariance_level = 0.90\n', encoding="utf-8")
+    (tmp_path / "plan.toml").write_text(
+        'style = "ninety.toml"\n[data]\npath = "d.csv"\n'
+        '[[analyses]]\nid = "mass"\nkind = "anova_oneway"\noutcome = "body_mass_g"\ngroup = "species"\n'
+        '[[analyses]]\nid = "fit"\nkind = "linear_regression"\noutcome = "body_mass_g"\npredictors = ["flipper_length_mm"]\n',
+        encoding="utf-8")
+    records = {r.id: r for r in run_plan(load_plan(tmp_path / "plan.toml")).records}
+    assert records["mass"].effect("eta2").ci.level == 0.90 and records["fit"].effect("R2").ci.level == 0.90
+    assert records["fit:flipper_length_mm"].estimate.ci.level == 0.95
+    assert "η² = .67, 90% CI [" in render(records["mass"], "stats").plain()

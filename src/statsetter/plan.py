@@ -542,13 +542,13 @@ def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None) ->
             progress(analysis["id"])
         kind = analysis["kind"]
         args = {k: v for k, v in analysis.items() if k not in ("id", "kind", "place")}
-        if "level" in _parameters(kind):
-            args.setdefault("level", plan.level)
         if "variance_level" in style.ci:  # the style's level for η²-type intervals (Steiger's 90% convention, say)
             if "variance_level" in _parameters(kind):
                 args.setdefault("variance_level", style.ci["variance_level"])
             elif kind in ("anova_oneway", "factorial_anova"):  # their only intervals are of η²-type effects
                 args.setdefault("level", style.ci["variance_level"])
+        if "level" in _parameters(kind):
+            args.setdefault("level", plan.level)
         if "labels" in _parameters(kind):
             args["labels"] = {**labels, **args.get("labels", {})}
         if "levels" in _parameters(kind):
