@@ -22,6 +22,7 @@ import pytest
 from statsetter import load_style
 from statsetter.analyses import (
     anova_oneway,
+    chi_square,
     correlation_matrix,
     describe,
     factorial_anova,
@@ -53,7 +54,7 @@ KINDS = {
     "oneway": "ANOVA tables: one-way source table with η² and its noncentral-F CI",
     "welch": "ANOVA tables: Welch's ANOVA in its own form (F, df1, df2, p, η²)",
     "posthoc": "Post hoc pairs: mean difference and g with their CIs under spanners, adjusted p",
-    "results": "Results table: rows by subject and test, statistic with df, p, effect size and CI",
+    "results": "Results table: rows by subject and test, statistic with df (χ² with N), p, effect size and CI",
 }
 
 
@@ -84,7 +85,7 @@ def build(kind: str, data, style):  # type: ignore[no-untyped-def]
         return table(posthoc(data, "body_mass_g", "species"), style, number=9)
     if kind == "results":
         rs = [t_independent(data, "body_mass_g", "sex").main, anova_oneway(data, "body_mass_g", "island").main,
-              anova_oneway(data, "body_mass_g", "island", variant="welch").main]
+              anova_oneway(data, "body_mass_g", "island", variant="welch").main, chi_square(data, "species", "island").main]
         return table(rs, style, number=10)
     raise AssertionError(kind)
 

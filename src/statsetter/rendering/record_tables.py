@@ -92,7 +92,7 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
             Row(
                 StyledText(label),
                 (
-                    _cell(h.stat(r)),
+                    _cell(h.stat(r, n=r.statistic is not None and r.statistic.symbol == "chi2")),  # χ²(2, N = 240) (APA 7 ch. 6)
                     p_cell(h.num, r),
                     _cell(h.eff(r, with_ci=False) if e is not None else h.est(r, with_ci=False, symbol=r.estimate.name if r.estimate else None)),
                     interval_cell(h.num, resolved, ci, e.name if e is not None else (r.estimate.name if r.estimate else "default"), e.null if e is not None else 0.0),
