@@ -64,3 +64,21 @@ def test_title_case():
     # APA 7 §6.17 (memory): minor words of three letters or fewer stay lowercase unless first
     assert title_case(StyledText("means of fatigue by shift and sleep")).text == "Means of Fatigue by Shift and Sleep"
     assert title_case(StyledText("the pH of water")).text == "The pH of Water"  # mixed case kept
+
+
+def test_the_results_table_keeps_a_mean_difference_out_of_the_effect_size_column():
+    # issue (tables) point 5: χ² with its N; a mean difference or coefficient without an effect size in an
+    # Estimate column of its own (with its CI), an odds ratio under Effect size; no Estimate column when no
+    # record needs one
+    from kind_examples import EXAMPLES
+    from statsetter.rendering.record_tables import results_table
+
+    mixed = results_table([EXAMPLES["chi2_independence"], EXAMPLES["posthoc_pair"], EXAMPLES["fisher_exact"]])
+    assert [c.head.plain() for c in mixed.columns] == ["Statistic", "p", "Estimate", "95% CI", "Effect size", "95% CI"]
+    assert [s.label.plain() for s in mixed.spanners] == ["Estimate", "Effect size"]
+    chi2, pair, fisher = ([c.plain().replace("\u00a0", " ") for c in r.cells] for r in mixed.rows)
+    assert chi2[0] == "χ²(2, N = 200) = 9.87" and chi2[4] == "V = .22"
+    assert pair[2] == "M_diff = 0.70" and pair[3] == "[0.13, 1.27]" and pair[4] == ""
+    assert fisher[2] == "" and fisher[4] == "OR = 3.45"
+    plain = results_table([EXAMPLES["chi2_independence"], EXAMPLES["t_independent"]])
+    assert [c.head.plain() for c in plain.columns] == ["Statistic", "p", "Effect size", "95% CI"]

@@ -76,35 +76,51 @@ def row_label(r: Result, named_twice: bool = False) -> str:
 
 
 def results_table(records: Sequence[Result], style: "Style | str | None" = None, title: str = "Results") -> TableModel:
-    """Each record's statistic (with df), p, first effect size and its CI, in the style."""
+    """Each record's statistic (with df; χ² with N), p, first effect size and
+    its CI, in the style. A record with an estimate but no effect size (a
+    mean difference, a coefficient) shows it in an Estimate column of its
+    own with its CI, never under Effect size."""
     resolved = load_style(style)
     h = _helpers(resolved)
+    def plain_estimate(r: Result) -> bool:  # a mean difference or coefficient, not a ratio such as an OR (an effect size)
+        return not r.effects and r.estimate is not None and not r.estimate.ratio
+
+    estimates = any(plain_estimate(r) for r in records)
     rows = []
     level = None
     subjects = [subject(r) for r in records]
     for r, about in zip(records, subjects):
         e = r.effects[0] if r.effects else None
-        ci = e.ci if e is not None else (r.estimate.ci if r.estimate is not None else None)
-        if ci is not None:
-            level = level or ci.level
-        label = row_label(r, subjects.count(about) > 1)
-        rows.append(
-            Row(
-                StyledText(label),
-                (
-                    _cell(h.stat(r, n=r.statistic is not None and r.statistic.symbol == "chi2")),  # χ²(2, N = 240) (APA 7 ch. 6)
-                    p_cell(h.num, r),
-                    _cell(h.eff(r, with_ci=False) if e is not None else h.est(r, with_ci=False, symbol=r.estimate.name if r.estimate else None)),
-                    interval_cell(h.num, resolved, ci, e.name if e is not None else (r.estimate.name if r.estimate else "default"), e.null if e is not None else 0.0),
-                ),
-            )
-        )
+        cells = [_cell(h.stat(r, n=r.statistic is not None and r.statistic.symbol == "chi2")), p_cell(h.num, r)]  # χ²(2, N = 240) (APA 7 ch. 6)
+        shown = r.estimate if plain_estimate(r) else None
+        if estimates:
+            symbol = "difference" if shown is not None and shown.name == "mean difference" else (shown.name if shown is not None else None)
+            cells += [_cell(h.est(r, with_ci=False, symbol=symbol)) if shown is not None else StyledText(),
+                      interval_cell(h.num, resolved, shown.ci if shown is not None else None, shown.name if shown is not None else "default")]
+        ratio = r.estimate if e is None and shown is None else None  # an odds ratio without effect sizes: shown as the effect size
+        if e is not None:
+            cells += [_cell(h.eff(r, with_ci=False)), interval_cell(h.num, resolved, e.ci, e.name, e.null)]
+        elif ratio is not None:
+            cells += [_cell(h.est(r, with_ci=False, symbol=ratio.name)), interval_cell(h.num, resolved, ratio.ci, ratio.name, 1.0 if ratio.ratio else 0.0)]
+        else:
+            cells += [StyledText(), StyledText()]
+        for ci in ((e.ci if e is not None else None), (r.estimate.ci if r.estimate is not None else None)):
+            if ci is not None:
+                level = level or ci.level
+        rows.append(Row(StyledText(row_label(r, subjects.count(about) > 1)), tuple(cells)))
     pct = f"{round((level or 0.95) * 100):g}"
+    columns = [Column(StyledText("Statistic")), Column(_cell(resolved.symbol("p")))]
+    spanners: tuple[Spanner, ...] = ()
+    if estimates:
+        columns += [Column(StyledText("Estimate")), Column(StyledText(f"{pct}% CI"))]
+        spanners = (Spanner(StyledText("Estimate"), 2, 4), Spanner(StyledText("Effect size"), 4, 6))
+    columns += [Column(StyledText("Effect size")), Column(StyledText(f"{pct}% CI"))]
     return TableModel(
         title=StyledText(title),
         stub_head=StyledText("Result"),
-        columns=(Column(StyledText("Statistic")), Column(_cell(resolved.symbol("p"))), Column(StyledText("Effect size")), Column(StyledText(f"{pct}% CI"))),
+        columns=tuple(columns),
         rows=tuple(rows),
+        spanners=spanners,
         general_note=StyledText(f"CI{resolved.keep_together}={resolved.keep_together}confidence interval."),
     )
 
