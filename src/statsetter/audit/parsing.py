@@ -108,6 +108,8 @@ def symbol_of(text: str) -> str | None:
         return "rs"
     if low.startswith(("τ", "tau")):
         return "tau_b"
+    if t in ("ΔF", "∆F"):  # an F test of a change (ΔR²): read as F
+        return "F"
     return t if t in ("t", "F", "r", "z", "U", "H", "W", "T") else None
 
 
@@ -117,8 +119,13 @@ def _number_pattern(mark: str) -> str:
     return r"[-−–‐]?\s?(?:\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d{1,3}(?:[\u2009\u202f]\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+)"
 
 
+# a number's power of ten as authors type it: 2.35e-3, 2.1E−04, 2.1 × 10⁻⁴, 2.1×10^-4, 2.1 x 10−4 (one number, never two)
+_EXPONENT = r"(?:\s?[eE][-−+]?\d{1,3}(?![\d.])|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?[-−⁻]?[\d⁰¹²³⁴⁵⁶⁷⁸⁹]{1,3}(?![\d.]))"
+_EXPONENT_SPLIT = re.compile(r"^(?P<m>.*?)(?:\s?[eE](?P<e1>[-−+]?\d{1,3})|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?(?P<e2>[-−⁻]?[\d⁰¹²³⁴⁵⁶⁷⁸⁹]{1,3}))$")
+_SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--")
+
 _SYMBOL = (
-    r"(?:χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
+    r"(?:Δ\s?F|χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
     r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzUHWT])"
 )
 _EFFECT_NAMES = [
@@ -151,11 +158,11 @@ class _Patterns:
         self.mark = mark
         self.number = re.compile(num)
         self.head = re.compile(
-            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}}))?"
-            rf"\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num})"
+            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
+            rf"\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num}{_EXPONENT}?)"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
-        self.p = re.compile(rf"(?<![\w.*])(?P<sym>[pP])(?:-value)?\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num}(?:[eE][-−]?\d+)?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
+        self.p = re.compile(rf"(?<![\w.*])(?P<sym>[pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|b(?=\s*+\.?\d))\s*+(?P<num>{num}{_EXPONENT}?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval)s?\s*+[:=,]?\s*+"
@@ -164,7 +171,7 @@ class _Patterns:
         self.effect = re.compile(
             r"(?P<name>" + "|".join(f"(?:{p})" for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
         )
-        self.df = re.compile(rf"(?<![\w])df\s*+=\s*+(?P<num>{num})")
+        self.df = re.compile(rf"(?<![\w])df\s*+[=:]?\s*+(?P<num>{num})(?![\d.,]\d)")
         self.coef_b = re.compile(rf"(?<![\w])B\s*+=\s*+(?P<num>{num})")
         self.coef_se = re.compile(rf"(?<![\w])SE\s*+=\s*+(?P<num>{num})")
         self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
@@ -173,6 +180,14 @@ class _Patterns:
 
     def to_number(self, text: str, start: int) -> Number | None:
         raw = text.strip()
+        power = _EXPONENT_SPLIT.match(raw) if ("e" in raw or "E" in raw or "10" in raw) else None
+        if power is not None and power.group("m").strip():
+            base = self.to_number(power.group("m"), start)
+            exponent = (power.group("e1") or power.group("e2")).translate(_SUPERSCRIPT)
+            if base is None or abs(int(exponent)) > 300:  # 1e400: not a number anyone computed
+                return None
+            decimals = max(0, base.decimals - int(exponent))
+            return Number(raw, base.value * 10.0 ** int(exponent), decimals, base.start, base.start + len(raw))
         sign = ""
         body = raw
         if body and body[0] in _MINUS:
@@ -227,6 +242,7 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
         n = pat.to_number(found.group("num"), start + found.start("num"))
         rest = inner[: found.start()] + " " * (found.end() - found.start()) + inner[found.end() :]
     sep = ";" if pat.mark == "," else ","
+    rest = re.sub(r"(?<=\d)\s?[–—-]\s?(?=\d)", lambda d: sep.ljust(len(d.group()), " "), rest)  # F(3–51): df by a dash
     dfs: list[Number] = []
     for m in re.finditer(rf"[^{sep};]+", rest):
         part = m.group()
@@ -378,6 +394,14 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
         dfs, n = _inner(pat, m.group("inner"), m.start("inner"))
     elif m.group("sub") is not None:  # df as subscripts (AMA 11): t₃₈, F₂,₂₃₇; one character each, so positions hold
         dfs, n = _inner(pat, m.group("sub").translate(_SUBSCRIPT_DIGITS), m.start("sub"))
+    elif m.group("bare") is not None:  # "F1,23 = 4.50": df run on after the F
+        dfs, n = _inner(pat, m.group("bare"), m.start("bare"))
+    if symbol == "chi2" and len(dfs) == 2 and n is None and dfs[1].value > dfs[0].value:  # χ²(2; 415): df and N
+        dfs, n = dfs[:1], dfs[1]
+    inner = m.group("inner")
+    if symbol in ("t", "r", "rs") and len(dfs) == 2 and inner and pat.mark == "." and re.fullmatch(r"\s*\d{1,3},\d{3}\s*", inner):
+        one = pat.to_number(inner, m.start("inner"))  # t(1,198): one df with a thousands comma, as a t or r has one
+        dfs = (one,) if one is not None else dfs
     rep = Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, m.group("op"), value)
     rep.operators = _operators(pat, text, m.start(), value.end)
     return rep
@@ -394,18 +418,12 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     adjusted = bool(_ADJUSTED.search(m.string, max(0, m.start() - 30), m.start()))
     if m.group("ns"):
         return PValue("ns", None, m.start(), m.end(), m.start(), m.group("ns"))
-    raw = m.group("num")
-    exp = re.search(r"[eE]([-−]?\d+)$", raw)
-    number = pat.to_number(raw[: exp.start()] if exp else raw, m.start("num"))
+    number = pat.to_number(m.group("num"), m.start("num"))
     if number is None:
         return None
-    if exp:
-        power = int(exp.group(1).replace("−", "-")[:5])
-        if abs(power) > 300:  # p = 1e400 or 1e-400: not a probability anyone computed
-            return None
-        scale = 10.0 ** power
-        number = Number(raw, number.value * scale, number.decimals - int(exp.group(1).replace("−", "-")), number.start, m.end("num"))
-    return PValue(m.group("op"), number, m.start(), m.end("num"), m.start("sym"), m.group("sym"), adjusted)
+    op = m.group("op")
+    op = "<" if op == "b" else op[-1] if len(op) > 1 else op  # "p b 0.01": a "<" garbled by a PDF copy; "p = < .001" means "<"
+    return PValue(op, number, m.start(), m.end("num"), m.start("sym"), m.group("sym"), adjusted)
 
 
 def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:

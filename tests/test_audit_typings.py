@@ -1,0 +1,76 @@
+"""The audit reads statistics as authors type them (issue: the audit on real
+manuscripts, point 1), kind by kind: df split by a dash, df and N split by a
+semicolon, df written apart without "=", "p = < .001", "P value =",
+scientific notation in its common forms (read as one number), ΔF, a "<"
+garbled to "b" by a PDF copy, F with its df run on (F1,23), subscript df,
+thin and no-break spaces, a line break inside a statistic, a thousands comma
+in a single df. Each case is built here with its own numbers (not those of
+any publication) and its p computed with scipy, so a consistent typing must
+raise no p finding and the same typing with a wrong p must raise one.
+"""
+
+import pytest
+from scipy import stats
+
+from statsetter.audit.parsing import find_statistics
+from statsetter.audit.report import audit_units
+from statsetter.audit.reading import Unit
+
+
+def p3(p):
+    return f"{p:.3f}".lstrip("0")
+
+
+T = stats.t.sf(2.61, 44) * 2          # t(44) = 2.61
+F = stats.f.sf(3.87, 2, 61)           # F(2, 61) = 3.87
+C = stats.chi2.sf(7.42, 3)            # χ²(3) = 7.42
+SMALL = stats.t.sf(4.62, 57) * 2      # t(57) = 4.62, p about 2e-5
+TINY_F = stats.f.sf(0.00412, 1, 40)   # F(1, 40) = 4.12e-3
+
+CASES = [
+    # (text, symbol, df, N, value, p op, p value)
+    (f"F (2–61) = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    (f"F(2 - 61) = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    (f"χ²(3; 250) = 7.42; p = {p3(C)}", "chi2", (3,), 250, 7.42, "=", float(p3(C))),
+    (f"t=2.61, df 44, p={p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
+    ("t(57) = 4.62, p = < .001", "t", (57,), None, 4.62, "<", 0.001),
+    (f"t(44) = 2.61, P value = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
+    (f"F(1, 40) = 4.12e-3, p = {stats.f.sf(0.00412, 1, 40):.2f}", "F", (1, 40), None, 0.00412, "=", round(TINY_F, 2)),
+    (f"t(57) = 4.62, p = {SMALL / 1e-5:.1f} × 10⁻⁵", "t", (57,), None, 4.62, "=", round(SMALL / 1e-5, 1) * 1e-5),
+    (f"t(57) = 4.62, p = {SMALL / 1e-5:.1f}×10^-5", "t", (57,), None, 4.62, "=", round(SMALL / 1e-5, 1) * 1e-5),
+    (f"t(57) = 4.62, p = {SMALL / 1e-5:.1f} x 10−5", "t", (57,), None, 4.62, "=", round(SMALL / 1e-5, 1) * 1e-5),
+    (f"t(57) = 4.62, p = {SMALL / 1e-5:.1f}E-05", "t", (57,), None, 4.62, "=", round(SMALL / 1e-5, 1) * 1e-5),
+    (f"ΔF (2, 61) = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    ("t(57) = 4.62, p b 0.001", "t", (57,), None, 4.62, "<", 0.001),
+    (f"F2,61 = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    (f"t₄₄ = 2.61, P = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
+    (f"F(2,\u200961)\u00a0=\u00a03.87, p\u00a0=\u00a0{p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    (f"t(44) =\n2.61, p = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
+    (f"t(1,044) = 2.61, p = {p3(stats.t.sf(2.61, 1044) * 2)}", "t", (1044,), None, 2.61, "=", float(p3(stats.t.sf(2.61, 1044) * 2))),
+]
+
+
+@pytest.mark.parametrize("text, symbol, df, n, value, op, p", CASES)
+def test_each_typing_is_read(text, symbol, df, n, value, op, p):
+    (rep,) = [r for r in find_statistics(text) if r.symbol is not None]
+    assert rep.symbol == symbol and tuple(d.value for d in rep.df) == df
+    assert (rep.n.value if rep.n else None) == n
+    assert rep.value.value == pytest.approx(value, rel=1e-12)  # one number, never two
+    assert rep.p.op == op and rep.p.number.value == pytest.approx(p, rel=1e-9)
+
+
+def codes(text):
+    (entry,) = audit_units([Unit("case", text)])
+    return set(entry.codes)
+
+
+@pytest.mark.parametrize("text", [c[0] for c in CASES])
+def test_a_consistent_typing_raises_no_p_finding(text):
+    assert not codes(text) & {"p-inconsistent", "decision-error", "impossible-p", "impossible-value"}
+
+
+def test_a_wrong_p_in_such_a_typing_is_found():
+    assert "p-inconsistent" in codes("F (2–61) = 3.87, p = .20")
+    assert "p-inconsistent" in codes("t=2.61, df 44, p=.20")
+    assert "p-inconsistent" in codes("t(57) = 4.62, p = 2.1 × 10⁻²")
+    assert "p-inconsistent" in codes("F2,61 = 3.87, p = .20")
