@@ -277,11 +277,15 @@ def test_exit_status_and_json(tmp_path, capsys):
     capsys.readouterr()
     assert main(["audit", str(flawed), "--json"]) == 1
     rows = json.loads(capsys.readouterr().out)
-    assert len(rows) == 2 and all({"location", "found", "codes", "message", "suggestion"} <= set(r) for r in rows)
-    assert rows[0]["codes"] == [] and rows[1]["codes"] == ["p-inconsistent"]
-    assert rows[1]["found"] == "t(23) = 2.10, p = .030" and rows[1]["location"] == "line 3, characters 22–47"
+    assert len(rows) == 2 and all({"location", "found", "severity", "codes", "message", "suggestion"} <= set(r) for r in rows)
+    # errors first: the inconsistent p, then the clean statistic (no suggestion unless --suggest-all)
+    assert rows[0]["codes"] == ["p-inconsistent"] and rows[0]["severity"] == "error" and rows[1]["codes"] == [] and rows[1]["suggestion"] == ""
+    assert rows[0]["found"] == "t(23) = 2.10, p = .030" and rows[0]["location"] == "line 3, characters 22–47"
+    assert rows[0]["suggestion"] == "t(23) = 2.10, p = .047 (p recomputed)"  # never the p found wrong
     assert main(["audit", str(flawed), "--csv"]) == 1
-    assert capsys.readouterr().out.splitlines()[0] == "location,found,codes,message,suggestion"
+    assert capsys.readouterr().out.splitlines()[0] == "location,found,severity,codes,message,suggestion"
+    assert main(["audit", str(flawed), "--json", "--suggest-all"]) == 1
+    assert all(r["suggestion"] for r in json.loads(capsys.readouterr().out))
     assert flawed.read_text(encoding="utf-8") == FLAWED  # never modified
 
 
@@ -312,7 +316,8 @@ def test_docx_italics_and_comments(tmp_path, capsys):
     assert rows[1]["location"].startswith("table 1, row 1, cell 1") and "italics" in rows[1]["codes"]
     annotated = docx.Document(str(tmp_path / "out.docx"))
     comments = list(annotated.comments)
-    assert len(comments) == 2 and "p-inconsistent" in comments[0].text
+    # a plain sentence, the severity first, no codes
+    assert len(comments) == 2 and comments[0].text.startswith("Error: The reported p does not follow") and "p-inconsistent" not in comments[0].text
     assert path.read_bytes() == before
 
 
@@ -527,3 +532,18 @@ def test_eta_and_v_against_f_and_chi2_on_open_data():
     text = f"χ²({int(pearson.dof)}, N = {len(penguins)}) = {pearson.chi2:.2f}, p < .001, V = {pearson.cramer:.2f}"
     assert "effect-inconsistent" not in codes(text), text
     assert "effect-inconsistent" in codes(text.replace(f"V = {pearson.cramer:.2f}", "V = .10"))
+
+
+def test_severity_orders_and_filters_the_findings(tmp_path, capsys):
+    # an impossible or inconsistent number is an error, a one-sided fit a warning, a house-style matter a style
+    # finding; --min-severity keeps the graver ones; APA 7's "two or three decimals" for p raises nothing
+    text = "A t(38) = 2.14, p=.039 here.\n\nB t(38) = 2.14, p = .20 there.\n\nC t(38) = 2.14, p = .04 too.\n\nD t(38) = 1.80, p = .040.\n"
+    path = tmp_path / "m.md"
+    path.write_text(text, encoding="utf-8")
+    assert main(["audit", str(path), "--json"]) == 1
+    rows = json.loads(capsys.readouterr().out)
+    assert [r["severity"] for r in rows] == ["error", "warning", "style", ""]
+    assert [r["found"][:13] for r in rows] == ["t(38) = 2.14,", "t(38) = 1.80,", "t(38) = 2.14,", "t(38) = 2.14,"]
+    assert rows[0]["found"].endswith(".20") and rows[2]["codes"] == ["spacing"] and rows[3]["found"].endswith(".04")
+    assert main(["audit", str(path), "--json", "--min-severity", "warning"]) == 1
+    assert [r["severity"] for r in json.loads(capsys.readouterr().out)] == ["error", "warning", "", ""]

@@ -57,6 +57,21 @@ CODES: dict[str, tuple[str, str]] = {
     ),
 }
 
+# how much a finding matters: an error is a number that cannot be right (an impossible value, a p that no
+# reading of the statistic gives, a verdict that changes at alpha); a warning is one that fits only under an
+# unstated reading (a one-sided test, unreported rounding) or an effect size that does not fit its test; a
+# style finding is a matter of the house style
+SEVERITIES = ("error", "warning", "style")
+SEVERITY: dict[str, str] = {
+    "p-inconsistent": "error", "decision-error": "error", "impossible-r": "error", "impossible-p": "error",
+    "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
+    "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
+    "one-sided": "warning", "coefficient-inconsistent": "warning", "effect-inconsistent": "warning", "d-inconsistent": "warning",
+    "p-zero": "warning",
+    "leading-zero": "style", "missing-leading-zero": "style", "decimals": "style", "p-threshold": "style",
+    "spacing": "style", "hyphen-minus": "style", "italics": "style",
+}
+
 _BOUNDED_EFFECTS = {"V": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T"}
@@ -68,6 +83,10 @@ class Finding:
     code: str
     message: str
     evidence: str = ""
+
+    @property
+    def severity(self) -> str:
+        return SEVERITY.get(self.code, "warning")
 
 
 # -- consistency ----------------------------------------------------------------
@@ -237,7 +256,7 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
         out.append(Finding("missing-leading-zero", "A leading zero before a quantity that can exceed 1.", ", ".join(no_zero)))
     if minus:
         out.append(Finding("hyphen-minus", f"Write negative numbers with the minus sign {style.minus!r}.", ", ".join(minus)))
-    out += _decimals(rep, num, alpha)
+    out += _decimals(rep, num, alpha, int(style.p.get("accept_decimals", 99)))
     p = rep.p
     if p is not None:
         floor = style.p.get("floor", 0) or 0
@@ -256,7 +275,9 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
     return out
 
 
-def _decimals(rep: Reported, num: Numbers, alpha: float) -> list[Finding]:
+def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> list[Finding]:
+    """Numbers printed with other decimals than the style's; a p may have as
+    few as ``accept`` decimals (the style's [p] accept_decimals)."""
     wrong = []
     if rep.value is not None and rep.symbol is not None and rep.symbol not in _RANK_SUMS:
         want = num.decimals_for(rep.symbol)
@@ -271,7 +292,9 @@ def _decimals(rep: Reported, num: Numbers, alpha: float) -> list[Finding]:
         # in style when some p the printed one stands for prints the same way
         v, h = p.number.value, p.number.half_unit * 0.999
         shown = p.number.digits.removeprefix("0")  # a leading zero is its own finding
-        if not any(num.p(c, alpha)[1].removeprefix("0") == shown for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1):
+        fewer = p.number.decimals if accept <= p.number.decimals < num.decimals_for("p") else None  # APA 7 §6.36: two or three decimals
+        if not any(num.p(c, alpha, held=fewer)[1].removeprefix("0") == shown
+                   for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1):
             wrong.append(f"p = {p.number.text} ({num.p(v, alpha)[1]} in the style)")
     return [Finding("decimals", "Decimals differ from the style's.", "; ".join(wrong))] if wrong else []
 

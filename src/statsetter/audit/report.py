@@ -13,15 +13,16 @@ import re
 import csv
 import io
 import json
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 from pathlib import Path
 from typing import Sequence
 
+from ..pvalues import p_from_statistic
 from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, SEVERITIES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Reported, coefficient_before, find_statistics, group_sizes
 from .reading import Unit, read_units
 
@@ -50,26 +51,50 @@ class Entry:
         return [f.code for f in self.findings]
 
     @property
+    def severity(self) -> str:
+        """The gravest of the findings ("error", "warning", "style"), "" for none."""
+        return min((f.severity for f in self.findings), key=SEVERITIES.index, default="")
+
+    def at_least(self, severity: str) -> "Entry":
+        """The entry with only the findings of ``severity`` or graver."""
+        keep = SEVERITIES.index(severity)
+        return replace(self, findings=tuple(f for f in self.findings if SEVERITIES.index(f.severity) <= keep))
+
+    def comment(self) -> str:
+        """A Word comment in plain sentences, the severity first."""
+        text = f"{self.severity.capitalize()}: " + " ".join(f"{f.message} ({f.evidence})" if f.evidence else f.message for f in self.findings)
+        return text + (f" Suggested: {self.suggestion}" if self.suggestion else "")
+
+    @property
     def message(self) -> str:
         return " ".join(f"{f.message} ({f.evidence})" if f.evidence else f.message for f in self.findings)
 
     def row(self) -> dict[str, object]:
-        return {"location": self.location, "found": self.found, "codes": self.codes, "message": self.message, "suggestion": self.suggestion}
+        return {"location": self.location, "found": self.found, "severity": self.severity, "codes": self.codes, "message": self.message,
+                "suggestion": self.suggestion}
 
 
-def _suggest(rep: Reported, style: Style, alpha: float) -> str:
+def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Finding] = ()) -> str:
+    """The statistic restyled. A p the audit found not to follow from the
+    statistic is never repeated: the suggestion carries the p recomputed from
+    the printed statistic and df, and says so."""
     if rep.symbol is None and not rep.effects:
         if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
             return ""
         num = numbers_for(style)
+        held = rep.p.number.decimals
         if rep.p.op == "=":
-            held = rep.p.number.decimals
             op, text = num.p(rep.p.number.value, alpha, held=held) if rep.p.number.value > 0 else num.p(0.0, alpha)
-        else:
-            op, text = {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op), num.p(rep.p.number.value, alpha)[1]
+        else:  # a threshold keeps the decimals it was given: "p < .05", never "p < .050"
+            op, text = {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op), num.number(rep.p.number.value, "p", held)
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
     try:
-        return render(to_record(rep, alpha, style), "stats", style).plain()
+        record = to_record(rep, alpha, style)
+        if any(f.code == "p-inconsistent" for f in findings) and record.statistic is not None and record.statistic.df:
+            recomputed = p_from_statistic(record.statistic.symbol, record.statistic.value, record.statistic.df)
+            record = replace(record, p=recomputed, precision={k: v for k, v in record.precision.items() if k != "p"})
+            return render(record, "stats", style).plain() + " (p recomputed)"
+        return render(record, "stats", style).plain()
     except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
         return ""
 
@@ -78,8 +103,11 @@ _LONG_NUMBER = re.compile(r"\d{101,}")
 
 
 def audit_units(
-    units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None
+    units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None,
+    suggest_all: bool = False,
 ) -> list[Entry]:
+    """Every statistic of the units with its findings; a suggestion for each
+    statistic with findings (for every statistic with ``suggest_all``)."""
     resolved = load_style(style)
     mark = resolved.decimal_mark
     entries = []
@@ -117,15 +145,17 @@ def audit_units(
                 first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else 0  # opening markers included
                 last = unit.source_index(rep.end - 1) + 1
                 location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
-            entries.append(Entry(location, rep.text, tuple(findings), _suggest(rep, resolved, alpha), unit, rep.start, rep.end))
+            suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
+            entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end))
     return entries
 
 
 def audit_file(
-    path: "str | Path", style: "Style | str | None" = None, *, alpha: float = 0.05, encoding: str = "utf-8", grim_items: int | None = None
+    path: "str | Path", style: "Style | str | None" = None, *, alpha: float = 0.05, encoding: str = "utf-8", grim_items: int | None = None,
+    suggest_all: bool = False,
 ) -> list[Entry]:
     """Every statistic in the manuscript at ``path`` (never modified)."""
-    return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items)
+    return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items, suggest_all=suggest_all)
 
 
 def as_json(entries: Sequence[Entry]) -> str:
@@ -135,9 +165,9 @@ def as_json(entries: Sequence[Entry]) -> str:
 def as_csv(entries: Sequence[Entry]) -> str:
     buffer = io.StringIO()
     writer = csv.writer(buffer, lineterminator="\n")
-    writer.writerow(["location", "found", "codes", "message", "suggestion"])
+    writer.writerow(["location", "found", "severity", "codes", "message", "suggestion"])
     for e in entries:
-        writer.writerow([e.location, e.found, " ".join(e.codes), e.message, e.suggestion])
+        writer.writerow([e.location, e.found, e.severity, " ".join(e.codes), e.message, e.suggestion])
     return buffer.getvalue()
 
 
@@ -147,21 +177,28 @@ def print_table(entries: Sequence[Entry], *, everything: bool = False) -> None:
 
     console = Console()
     table = Table(show_lines=False, header_style="bold")
-    for name in ("Location", "Found", "Codes", "Suggestion"):
+    for name in ("Location", "Found", "Severity", "Codes", "Suggestion"):
         table.add_column(name, overflow="fold")
-    shown = [e for e in entries if everything or e.findings]
+    shown = by_severity([e for e in entries if everything or e.findings])
     for e in shown:
-        table.add_row(e.location, e.found, " ".join(e.codes) or "—", e.suggestion if e.findings else "")
+        table.add_row(e.location, e.found, e.severity or "—", " ".join(e.codes) or "—", e.suggestion if e.findings else "")
     if shown:
         console.print(table)
     flagged = sum(1 for e in entries if e.findings)
-    console.print(f"{len(entries)} statistics found, {flagged} with findings.")
+    counts = ", ".join(f"{sum(1 for e in entries if e.severity == s)} {s}" for s in SEVERITIES)
+    console.print(f"{len(entries)} statistics found, {flagged} with findings (gravest finding: {counts}).")
     if flagged:
         used = sorted({c for e in entries for c in e.codes})
         for code in used:
             console.print(f"  {code}: {CODES[code][0]} [{CODES[code][1]}]", highlight=False)
         console.print(f"  The rules in brackets, with their sources: {RULES}", highlight=False)
     console.print(CAUTION, style="italic")
+
+
+def by_severity(entries: Sequence[Entry]) -> list[Entry]:
+    """Errors first, then warnings, then style findings, then clean statistics; document order within each."""
+    order = {s: i for i, s in enumerate(SEVERITIES)}
+    return sorted(entries, key=lambda e: order.get(e.severity, len(SEVERITIES)))
 
 
 def annotate(source: "str | Path", entries: Sequence[Entry], out: "str | Path") -> tuple[int, int]:
@@ -192,10 +229,7 @@ def annotate(source: "str | Path", entries: Sequence[Entry], out: "str | Path") 
         if not runs:
             elsewhere += 1
             continue
-        text = f"statsetter: {' '.join(e.codes)}. {e.message}"
-        if e.suggestion:
-            text += f" Suggested: {e.suggestion}"
-        document.add_comment(runs, text=text, author="statsetter", initials="st")
+        document.add_comment(runs, text=e.comment(), author="statsetter", initials="st")
         added += 1
     save_document(document, out, inputs=[source])
     return added, elsewhere

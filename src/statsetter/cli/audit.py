@@ -27,6 +27,9 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
     shape.add_argument("--csv", action="store_true", help="the same rows as CSV")
     a.add_argument("--out", metavar="FILE", help="write the JSON or CSV to FILE instead of standard output")
     a.add_argument("--all", action="store_true", help="list clean statistics in the table too")
+    a.add_argument("--min-severity", choices=("error", "warning", "style"), default="style",
+                   help="report findings of this severity or graver: error, warning or style (the default, everything)")
+    a.add_argument("--suggest-all", action="store_true", help="restyle every statistic in the suggestions, not only those with findings")
     a.add_argument("--annotate", metavar="OUT.docx", help="write a copy of a .docx with a Word comment on each finding")
     a.add_argument("--encoding", default="utf-8", help="text encoding of a .md/.txt/.tex file (utf-8)")
     a.add_argument("--grim-items", type=int, metavar="K", help="run the GRIM test on means, for integer scores summed over K items")
@@ -34,7 +37,7 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
 
 
 def run(ns: argparse.Namespace) -> int:
-    from ..audit.report import annotate, as_csv, as_json, audit_file, print_table
+    from ..audit.report import annotate, as_csv, as_json, audit_file, by_severity, print_table
 
     if not 0 < ns.alpha < 1:
         raise InputError(f"--alpha: {ns.alpha:g} is not between 0 and 1")
@@ -46,7 +49,8 @@ def run(ns: argparse.Namespace) -> int:
         raise InputError("--out: choose --json or --csv")
     if ns.grim_items is not None and ns.grim_items < 1:
         raise InputError("--grim-items: give a whole number of 1 or more")
-    entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items)
+    entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items, suggest_all=ns.suggest_all)
+    entries = by_severity([e.at_least(ns.min_severity) for e in entries])
     if ns.json or ns.csv:
         emit(as_json(entries) if ns.json else as_csv(entries), ns.out, inputs=[ns.manuscript])
     else:

@@ -173,6 +173,7 @@ SCHEMA: dict[str, Any] = {
         "floor": _float(0, 0.5),
         "ceiling": _float(0, 1),
         "near_alpha_digits": _int(0, 17),
+        "accept_decimals": _int(1, 6),
         "table_stars": _fraction_list,
     },
     "ci": {
