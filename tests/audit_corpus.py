@@ -157,14 +157,14 @@ def planted(rng: random.Random, code: str) -> Planted:
     T, D = _num(t), f"{int(df)}"
     d = round(t * math.sqrt(4 / (df + 2)), 2)
     one = lambda text, *codes: Planted(text, frozenset(codes or (code,)))  # noqa: E731
-    if code == "p-inconsistent":
+    if code == "p-does-not-follow":
         wrong = p * 0.25 if p > 0.01 else p * 3  # far from p and from p/2 (a one-sided p)
         return one(f"t({D}) = {T}, p = {_num(wrong, 3, True)}")
-    if code == "decision-error":
+    if code == "verdict-changes":
         t2, df2, p2 = _t(rng)
         while p2 < 0.1:
             t2, df2, p2 = _t(rng)
-        return one(f"t({int(df2)}) = {_num(t2)}, p = .03{rng.randint(0, 9)}", "p-inconsistent", "decision-error")
+        return one(f"t({int(df2)}) = {_num(t2)}, p = .03{rng.randint(0, 9)}", "p-does-not-follow", "verdict-changes")
     if code == "one-sided":
         t3, df3, p3 = _t(rng)
         while not 0.06 < p3 < 0.095:
@@ -210,16 +210,16 @@ def planted(rng: random.Random, code: str) -> Planted:
         return Planted(text, frozenset() if ok else frozenset({"grim"}))
     if code == "italics":
         return Planted(f"t({D}) = {T}, {_p(p)}", frozenset({"italics"}), docx_only=True)
-    if code == "effect-inconsistent":  # partial η² far above what F and its df allow
+    if code == "effect-does-not-fit":  # partial η² far above what F and its df allow
         df1, df2 = rng.randint(1, 4), rng.randint(40, 300)
         f = round(rng.uniform(2.5, 8), 2)
         eta = f * df1 / (f * df1 + df2)
         return one(f"F({df1}, {df2}) = {_num(f)}, {_p(float(stats.f.sf(f, df1, df2)))}, partial η² = {_num(min(eta * 2 + 0.05, 0.95), 2, True)}")
-    if code == "coefficient-inconsistent":  # t half as large again as B / SE
+    if code == "coefficient-does-not-fit":  # t half as large again as B / SE
         b, se, df = _coefficient(rng)
         t = b / se * 1.5
         return one(f"B = {_num(b)}, SE = {_num(se)}, t({df}) = {_num(t)}, {_p(float(2 * stats.t.sf(abs(t), df)))}")
-    if code == "d-inconsistent":  # d half as large again as t and the group sizes give
+    if code == "d-does-not-fit":  # d half as large again as t and the group sizes give
         n1, n2, t, p = _groups(rng)
         d = t * math.sqrt(1 / n1 + 1 / n2) * 1.5
         return one(f"(n = {n1} and n = {n2}), t({n1 + n2 - 2}) = {_num(t)}, {_p(p)}, d = {_num(d)}")
@@ -227,9 +227,9 @@ def planted(rng: random.Random, code: str) -> Planted:
 
 
 PLANTED_CODES = [
-    "p-inconsistent", "decision-error", "one-sided", "impossible-r", "impossible-p", "negative-statistic", "negative-sd",
+    "p-does-not-follow", "verdict-changes", "one-sided", "impossible-r", "impossible-p", "negative-statistic", "negative-sd",
     "ci-reversed", "ci-excludes-estimate", "df-not-integer", "leading-zero", "missing-leading-zero", "decimals",
-    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics", "d-inconsistent", "coefficient-inconsistent", "effect-inconsistent",
+    "p-threshold", "p-zero", "spacing", "hyphen-minus", "grim", "italics", "d-does-not-fit", "coefficient-does-not-fit", "effect-does-not-fit",
 ]
 
 

@@ -112,20 +112,20 @@ def test_n_and_decimal_comma():
 
 def test_consistency_uses_the_printed_precision():
     # scipy: t(23) = 2.10 gives p = .047 (two-sided); .030 cannot follow, .047 can
-    assert "p-inconsistent" in codes("t(23) = 2.10, p = .030")
+    assert "p-does-not-follow" in codes("t(23) = 2.10, p = .030")
     assert codes("t(23) = 2.10, p = .047") == []
     # t = 2.1 printed with one decimal stands for [2.05, 2.15]: p from .043 to .052, so p = .050 is consistent
     lo, hi = p_range(one("t(23) = 2.1, p = .050"))
     assert lo == pytest.approx(p_from_statistic("t", 2.15, (23,))) and hi == pytest.approx(p_from_statistic("t", 2.05, (23,)))
-    assert "p-inconsistent" not in codes("t(23) = 2.1, p = .050")
+    assert "p-does-not-follow" not in codes("t(23) = 2.1, p = .050")
 
 
 def test_decision_error_and_one_sided():
     # scipy: F(1, 40) = 3.10 gives p = .086; reported < .05 changes the decision
-    assert {"p-inconsistent", "decision-error"} <= set(codes("F(1, 40) = 3.10, p = .030"))
+    assert {"p-does-not-follow", "verdict-changes"} <= set(codes("F(1, 40) = 3.10, p = .030"))
     # t(40) = 1.80: two-sided p = .079, one-sided .040
-    assert "one-sided" in codes("t(40) = 1.80, p = .040") and "p-inconsistent" not in codes("t(40) = 1.80, p = .040")
-    assert "decision-error" in codes("t(40) = 3.50, ns")
+    assert "one-sided" in codes("t(40) = 1.80, p = .040") and "p-does-not-follow" not in codes("t(40) = 1.80, p = .040")
+    assert "verdict-changes" in codes("t(40) = 3.50, ns")
 
 
 def test_impossible_values():
@@ -138,7 +138,7 @@ def test_impossible_values():
     assert "df-not-integer" in codes("χ²(2.5, N = 90) = 3.20, p = .277")
     assert "df-not-integer" not in codes("t(17.78) = −1.86, p = .080")  # Welch df keep decimals
     assert "df-not-integer" not in codes("F(2, 152.68) = 14.23, p < .001")  # and so do Welch's F
-    assert "p-inconsistent" not in codes("r(238) = .03, Holm-adjusted p = 1.000")  # an adjusted p is not recomputed
+    assert "p-does-not-follow" not in codes("r(238) = .03, Holm-adjusted p = 1.000")  # an adjusted p is not recomputed
     assert "impossible-value" in codes("χ²(1, N = 50) = 4.00, p = .046, V = 1.30")
 
 
@@ -186,7 +186,7 @@ def test_handbook_critical_values():
     # and scipy's quantiles print as the table does
     assert round(stats.t.ppf(0.975, 20), 3) == 2.086 and round(stats.chi2.ppf(0.95, 2), 3) == 5.991 and round(stats.f.ppf(0.95, 2, 30), 2) == 3.32
     # a value printed at the table's critical value is consistent with p = .050
-    assert "p-inconsistent" not in codes("t(20) = 2.09, p = .050")
+    assert "p-does-not-follow" not in codes("t(20) = 2.09, p = .050")
 
 
 # -- parse -> render -> parse is an identity on the renderer's own output -------
@@ -279,7 +279,7 @@ def test_exit_status_and_json(tmp_path, capsys):
     rows = json.loads(capsys.readouterr().out)
     assert len(rows) == 2 and all({"location", "found", "severity", "codes", "message", "suggestion"} <= set(r) for r in rows)
     # errors first: the inconsistent p, then the clean statistic (no suggestion unless --suggest-all)
-    assert rows[0]["codes"] == ["p-inconsistent"] and rows[0]["severity"] == "error" and rows[1]["codes"] == [] and rows[1]["suggestion"] == ""
+    assert rows[0]["codes"] == ["p-does-not-follow"] and rows[0]["severity"] == "error" and rows[1]["codes"] == [] and rows[1]["suggestion"] == ""
     assert rows[0]["found"] == "t(23) = 2.10, p = .030" and rows[0]["location"] == "line 3, characters 22–47"
     assert rows[0]["suggestion"] == "t(23) = 2.10, p = .047 (p recomputed)"  # never the p found wrong
     assert main(["audit", str(flawed), "--csv"]) == 1
@@ -294,7 +294,7 @@ def test_table_output_says_the_caution(tmp_path, capsys):
     flawed.write_text(FLAWED, encoding="utf-8")
     assert main(["audit", str(flawed)]) == 1
     out = " ".join(capsys.readouterr().out.split())
-    assert "reason to look, not proof of an error" in out and "p-inconsistent" in out
+    assert "reason to look, not proof of an error" in out and "p-does-not-follow" in out
     assert "with their sources: docs/reporting-rules.md" in out
 
 
@@ -312,12 +312,12 @@ def test_docx_italics_and_comments(tmp_path, capsys):
     before = path.read_bytes()
     assert main(["audit", str(path), "--json", "--annotate", str(tmp_path / "out.docx")]) == 1
     rows = json.loads(capsys.readouterr().out)
-    assert rows[0]["codes"] == ["p-inconsistent", "italics"] and rows[0]["location"] == "paragraph 1, characters 15–36"
+    assert rows[0]["codes"] == ["p-does-not-follow", "italics"] and rows[0]["location"] == "paragraph 1, characters 15–36"
     assert rows[1]["location"].startswith("table 1, row 1, cell 1") and "italics" in rows[1]["codes"]
     annotated = docx.Document(str(tmp_path / "out.docx"))
     comments = list(annotated.comments)
     # a plain sentence, the severity first, no codes
-    assert len(comments) == 2 and comments[0].text.startswith("Error: The reported p does not follow") and "p-inconsistent" not in comments[0].text
+    assert len(comments) == 2 and comments[0].text.startswith("Error: The reported p does not follow") and "p-does-not-follow" not in comments[0].text
     assert path.read_bytes() == before
 
 
@@ -460,12 +460,12 @@ def test_d_from_t_and_group_sizes_on_open_data():
     lead = f"Males (n = {len(x)}) had longer bills than females (n = {len(y)}), "
     for name, value in (("d", d), ("g", g)):
         good = f"{lead}t({df}) = {t:.2f}, p < .001, {name} = {value:.2f}."
-        assert "d-inconsistent" not in codes(good), good
+        assert "d-does-not-fit" not in codes(good), good
         bad = f"{lead}t({df}) = {t:.2f}, p < .001, {name} = {value + 0.05:.2f}."
-        assert "d-inconsistent" in codes(bad), bad
+        assert "d-does-not-fit" in codes(bad), bad
     # without group sizes (or with sizes that do not add up to df + 2) d is not checked
-    assert "d-inconsistent" not in codes(f"t({df}) = {t:.2f}, p < .001, d = {d + 0.5:.2f}.")
-    assert "d-inconsistent" not in codes(f"(n = 10, n = 12), t({df}) = {t:.2f}, p < .001, d = {d + 0.5:.2f}.")
+    assert "d-does-not-fit" not in codes(f"t({df}) = {t:.2f}, p < .001, d = {d + 0.5:.2f}.")
+    assert "d-does-not-fit" not in codes(f"(n = 10, n = 12), t({df}) = {t:.2f}, p < .001, d = {d + 0.5:.2f}.")
 
 
 def test_d_z_from_paired_t_on_open_data():
@@ -478,8 +478,8 @@ def test_d_z_from_paired_t_on_open_data():
     diff = SLEEP["drug2"].to_numpy() - SLEEP["drug1"].to_numpy()
     t = stats.ttest_rel(SLEEP["drug2"], SLEEP["drug1"]).statistic
     dz = diff.mean() / diff.std(ddof=1)
-    assert "d-inconsistent" not in codes(f"t(9) = {t:.2f}, p = .003, dz = {dz:.2f}")
-    assert "d-inconsistent" in codes(f"t(9) = {t:.2f}, p = .003, dz = {dz * 2:.2f}")
+    assert "d-does-not-fit" not in codes(f"t(9) = {t:.2f}, p = .003, dz = {dz:.2f}")
+    assert "d-does-not-fit" in codes(f"t(9) = {t:.2f}, p = .003, dz = {dz * 2:.2f}")
     assert np.isclose(dz, t / np.sqrt(10))
 
 
@@ -490,7 +490,7 @@ def test_d_from_t_never_flags_a_correct_d(t, n1, n2, t_decimals, d_decimals):
     d = t * (1 / n1 + 1 / n2) ** 0.5
     text = f"(n = {n1}, n = {n2}), t({n1 + n2 - 2}) = {t:.{t_decimals}f}, p = .5, d = {d:.{d_decimals}f}"
     found = [c for e in audit_units([Unit("test", text)]) for c in e.codes]
-    assert "d-inconsistent" not in found, text
+    assert "d-does-not-fit" not in found, text
 
 
 def test_coefficient_t_against_b_and_se_on_open_data():
@@ -505,12 +505,12 @@ def test_coefficient_t_against_b_and_se_on_open_data():
     for name in ("rate_marriage", "age", "yrs_married"):
         b, se, t = fit.params[name], fit.bse[name], fit.tvalues[name]
         good = f"For {name}, B = {b:.3f}, SE = {se:.3f}, t({df}) = {t:.2f}, p = {max(fit.pvalues[name], 0.001):.3f}."
-        assert "coefficient-inconsistent" not in codes(good), good
+        assert "coefficient-does-not-fit" not in codes(good), good
         bad = f"For {name}, B = {b:.3f}, SE = {se:.3f}, t({df}) = {t * 1.3:.2f}, p = .001."
-        assert "coefficient-inconsistent" in codes(bad), bad
+        assert "coefficient-does-not-fit" in codes(bad), bad
     # a coefficient from an earlier sentence, or an SE printed as zero, is not used
-    assert "coefficient-inconsistent" not in codes("B = 0.42, SE = 0.10. Then t(30) = 1.20, p = .240.")
-    assert "coefficient-inconsistent" not in codes("B = 0.00, SE = 0.00, t(30) = 1.20, p = .240")
+    assert "coefficient-does-not-fit" not in codes("B = 0.42, SE = 0.10. Then t(30) = 1.20, p = .240.")
+    assert "coefficient-does-not-fit" not in codes("B = 0.00, SE = 0.00, t(30) = 1.20, p = .240")
 
 
 def test_eta_and_v_against_f_and_chi2_on_open_data():
@@ -523,15 +523,15 @@ def test_eta_and_v_against_f_and_chi2_on_open_data():
     resid = int(aov.loc[aov.Source == "Residual", "DF"].iloc[0])
     for _, row in aov[aov.Source != "Residual"].iterrows():
         good = f"F({int(row.DF)}, {resid}) = {row.F:.2f}, p = .5, partial η² = {row.np2:.2f}"
-        assert "effect-inconsistent" not in codes(good), good
+        assert "effect-does-not-fit" not in codes(good), good
         bad = f"F({int(row.DF)}, {resid}) = {row.F:.2f}, p = .5, partial η² = {min(row.np2 + 0.1, 0.99):.2f}"
-        assert "effect-inconsistent" in codes(bad), bad
-        assert "effect-inconsistent" not in codes(f"F({int(row.DF)}, {resid}) = {row.F:.2f}, p = .5, η² = {row.np2 / 2:.2f}")  # η² ≤ η²p
+        assert "effect-does-not-fit" in codes(bad), bad
+        assert "effect-does-not-fit" not in codes(f"F({int(row.DF)}, {resid}) = {row.F:.2f}, p = .5, η² = {row.np2 / 2:.2f}")  # η² ≤ η²p
     _, _, tests = pg.chi2_independence(penguins, x="species", y="island")
     pearson = tests[tests.test == "pearson"].iloc[0]
     text = f"χ²({int(pearson.dof)}, N = {len(penguins)}) = {pearson.chi2:.2f}, p < .001, V = {pearson.cramer:.2f}"
-    assert "effect-inconsistent" not in codes(text), text
-    assert "effect-inconsistent" in codes(text.replace(f"V = {pearson.cramer:.2f}", "V = .10"))
+    assert "effect-does-not-fit" not in codes(text), text
+    assert "effect-does-not-fit" in codes(text.replace(f"V = {pearson.cramer:.2f}", "V = .10"))
 
 
 def test_severity_orders_and_filters_the_findings(tmp_path, capsys):
@@ -547,3 +547,16 @@ def test_severity_orders_and_filters_the_findings(tmp_path, capsys):
     assert rows[0]["found"].endswith(".20") and rows[2]["codes"] == ["spacing"] and rows[3]["found"].endswith(".04")
     assert main(["audit", str(path), "--json", "--min-severity", "warning"]) == 1
     assert [r["severity"] for r in json.loads(capsys.readouterr().out)] == ["error", "warning", "", ""]
+
+
+def test_every_finding_code_is_documented_in_the_readme():
+    # the README's table names every code with its severity (and the former name of a renamed one)
+    from pathlib import Path
+
+    from statsetter.audit.checks import CODES, FORMER_CODES, SEVERITY
+
+    readme = (Path(__file__).resolve().parents[1] / "README.md").read_text(encoding="utf-8")
+    for code in CODES:
+        row = next((line for line in readme.splitlines() if line.startswith(f"| `{code}` |")), None)
+        assert row is not None and f"| {SEVERITY[code]} |" in row, code
+        assert code not in FORMER_CODES or f"`{FORMER_CODES[code]}`" in row

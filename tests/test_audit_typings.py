@@ -66,11 +66,11 @@ def codes(text):
 
 @pytest.mark.parametrize("text", [c[0] for c in CASES])
 def test_a_consistent_typing_raises_no_p_finding(text):
-    assert not codes(text) & {"p-inconsistent", "decision-error", "impossible-p", "impossible-value"}
+    assert not codes(text) & {"p-does-not-follow", "verdict-changes", "impossible-p", "impossible-value"}
 
 
 def test_a_wrong_p_in_such_a_typing_is_found():
-    assert "p-inconsistent" in codes("F (2–61) = 3.87, p = .20")
-    assert "p-inconsistent" in codes("t=2.61, df 44, p=.20")
-    assert "p-inconsistent" in codes("t(57) = 4.62, p = 2.1 × 10⁻²")
-    assert "p-inconsistent" in codes("F2,61 = 3.87, p = .20")
+    assert "p-does-not-follow" in codes("F (2–61) = 3.87, p = .20")
+    assert "p-does-not-follow" in codes("t=2.61, df 44, p=.20")
+    assert "p-does-not-follow" in codes("t(57) = 4.62, p = 2.1 × 10⁻²")
+    assert "p-does-not-follow" in codes("F2,61 = 3.87, p = .20")

@@ -604,7 +604,7 @@ def test_the_audit_checks_p_values_without_scipy(box, capsys, without_module):
     assert code == 0 and "Traceback" not in err
     (box / "wrong.md").write_text("The groups differed, t(38) = 2.14, p = .39.\n", encoding="utf-8")
     code, out, err = _run(["audit", "wrong.md"], capsys)
-    assert code == 1 and "p-inconsistent" in out and "Traceback" not in err
+    assert code == 1 and "p-does-not-follow" in out and "Traceback" not in err
 
 
 def test_a_spreadsheet_with_a_far_cell_is_refused_before_loading(box, capsys):

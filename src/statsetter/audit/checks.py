@@ -23,8 +23,8 @@ from .parsing import Number, Reported
 
 # code: (what it means, the docs/reporting-rules.md rule and its source)
 CODES: dict[str, tuple[str, str]] = {
-    "p-inconsistent": ("the reported p does not follow from the statistic and df", "Numbers: exact p (APA 7 §6.36); consistency as in Nuijten et al. (2016)"),
-    "decision-error": ("the inconsistency changes the decision at alpha", "Numbers: decision-preserving p (practice)"),
+    "p-does-not-follow": ("the reported p does not follow from the statistic and df", "Numbers: exact p (APA 7 §6.36); consistency as in Nuijten et al. (2016)"),
+    "verdict-changes": ("with the recomputed p the verdict at alpha is the other one", "Numbers: decision-preserving p (practice)"),
     "one-sided": ("the p agrees only with a one-sided test; say so if that was the test", "Say which test was run (practice)"),
     "impossible-r": ("a correlation outside [−1, 1]", "Reporting by test: correlation (practice)"),
     "impossible-p": ("a p value outside [0, 1]", "Numbers: p (APA 7 §6.36)"),
@@ -43,15 +43,15 @@ CODES: dict[str, tuple[str, str]] = {
     "hyphen-minus": ("a hyphen or dash where the style has a minus sign", "Numbers: true minus sign (practice; APA examples)"),
     "italics": ("a Latin symbol not in italics, or a Greek one in italics", "Statistics in text: italic symbols (APA 7 §6.45)"),
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
-    "coefficient-inconsistent": (
+    "coefficient-does-not-fit": (
         "t (or z) does not equal B / SE",
         "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE (practice)",
     ),
-    "effect-inconsistent": (
+    "effect-does-not-fit": (
         "η²p (or η², V, φ) does not fit F or χ² and its df",
         "Effect sizes (JARS-Quant); η²p = F·df₁/(F·df₁ + df₂), η² ≤ η²p; V ≥ √(χ²/(N·df)) (definitions; practice)",
     ),
-    "d-inconsistent": (
+    "d-does-not-fit": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
     ),
@@ -63,13 +63,20 @@ CODES: dict[str, tuple[str, str]] = {
 # style finding is a matter of the house style
 SEVERITIES = ("error", "warning", "style")
 SEVERITY: dict[str, str] = {
-    "p-inconsistent": "error", "decision-error": "error", "impossible-r": "error", "impossible-p": "error",
+    "p-does-not-follow": "error", "verdict-changes": "error", "impossible-r": "error", "impossible-p": "error",
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
-    "one-sided": "warning", "coefficient-inconsistent": "warning", "effect-inconsistent": "warning", "d-inconsistent": "warning",
+    "one-sided": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
     "p-zero": "warning",
     "leading-zero": "style", "missing-leading-zero": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
+}
+
+# the codes of the release before, in the words of a well-known checker; read and written beside the new ones
+# (JSON "former_codes") for one release
+FORMER_CODES: dict[str, str] = {
+    "p-does-not-follow": "p-inconsistent", "verdict-changes": "decision-error", "coefficient-does-not-fit": "coefficient-inconsistent",
+    "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
 _BOUNDED_EFFECTS = {"V": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
@@ -176,10 +183,10 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     evidence = f"{rep.text[: rep.value.end - rep.start] if rep.value else rep.symbol_text} gives p from {computed[0]:.4g} to {computed[1]:.4g}; reported {shown}"
     if rep.symbol in ("t", "z", "r", "rs") and _overlap((computed[0] / 2, computed[1] / 2), reported):
         return [Finding("one-sided", "The reported p matches a one-sided test only; say that the test was one-sided, or report the two-sided p.", evidence)]
-    found = [Finding("p-inconsistent", "The reported p does not follow from the statistic and its df.", evidence)]
+    found = [Finding("p-does-not-follow", "The reported p does not follow from the statistic and its df.", evidence)]
     said_significant = reported[1] <= alpha
     if (said_significant and computed[0] >= alpha) or (not said_significant and computed[1] < alpha):
-        found.append(Finding("decision-error", f"At alpha = {alpha:g} the recomputed p leads to the other decision.", evidence))
+        found.append(Finding("verdict-changes", f"At alpha = {alpha:g} the recomputed p leads to the other decision.", evidence))
     return found
 
 
@@ -392,7 +399,7 @@ def effect_from_t(rep: Reported, sizes: tuple[int, int] | None = None) -> list[F
         if not _overlap(expected, _magnitude(e.number)):
             out.append(
                 Finding(
-                    "d-inconsistent",
+                    "d-does-not-fit",
                     f"{e.symbol_text} = {e.number.text} does not follow from t({rep.df[0].text}) = {rep.value.text}: {basis} gives "
                     f"{expected[0]:.3f} to {expected[1]:.3f} in magnitude.",
                     f"{e.symbol_text} = {e.number.text}",
@@ -420,13 +427,13 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
             shown = (e.number.value - e.number.half_unit, e.number.value + e.number.half_unit)
             if (e.name == "eta2_p" and not _overlap(bound, shown)) or (e.name == "eta2" and shown[0] > bound[1] + 1e-12):
                 relation = "F·df₁/(F·df₁ + df₂) gives" if e.name == "eta2_p" else "η² cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at"
-                out.append(Finding("effect-inconsistent", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
+                out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {bound[0]:.3f} to {bound[1]:.3f}.", f"{e.symbol_text} = {e.number.text}"))
     elif rep.symbol == "chi2" and len(rep.df) == 1 and rep.n is not None and rep.n.value > 0 and rep.df[0].value >= 1:
         least = math.sqrt(low / (rep.n.value * rep.df[0].value))
         for e in rep.effects:
             if e.name in ("V", "phi") and e.number.value >= 0 and e.number.value + e.number.half_unit < least - 1e-12:
-                out.append(Finding("effect-inconsistent", f"{e.symbol_text} = {e.number.text} is too small for χ²({rep.df[0].text}, N = {rep.n.text}) = "
+                out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} is too small for χ²({rep.df[0].text}, N = {rep.n.text}) = "
                                    f"{rep.value.text}: √(χ²/(N·df)) is already {least:.3f}.", f"{e.symbol_text} = {e.number.text}"))
     return out
 
@@ -448,7 +455,7 @@ def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None) 
         return []
     return [
         Finding(
-            "coefficient-inconsistent",
+            "coefficient-does-not-fit",
             f"{rep.symbol} = {rep.value.text} is not B / SE: B = {b.text} and SE = {se.text} give {ratio[0]:.2f} to {ratio[1]:.2f}.",
             f"B = {b.text}, SE = {se.text}, {rep.symbol} = {rep.value.text}",
         )

@@ -22,7 +22,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, SEVERITIES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Reported, coefficient_before, find_statistics, group_sizes
 from .reading import Unit, read_units
 
@@ -71,7 +71,7 @@ class Entry:
 
     def row(self) -> dict[str, object]:
         return {"location": self.location, "found": self.found, "severity": self.severity, "codes": self.codes, "message": self.message,
-                "suggestion": self.suggestion}
+                "suggestion": self.suggestion, "former_codes": [FORMER_CODES.get(c, c) for c in self.codes]}
 
 
 def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Finding] = ()) -> str:
@@ -90,7 +90,7 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
     try:
         record = to_record(rep, alpha, style)
-        if any(f.code == "p-inconsistent" for f in findings) and record.statistic is not None and record.statistic.df:
+        if any(f.code == "p-does-not-follow" for f in findings) and record.statistic is not None and record.statistic.df:
             recomputed = p_from_statistic(record.statistic.symbol, record.statistic.value, record.statistic.df)
             record = replace(record, p=recomputed, precision={k: v for k, v in record.precision.items() if k != "p"})
             return render(record, "stats", style).plain() + " (p recomputed)"
