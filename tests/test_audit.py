@@ -560,3 +560,17 @@ def test_every_finding_code_is_documented_in_the_readme():
         row = next((line for line in readme.splitlines() if line.startswith(f"| `{code}` |")), None)
         assert row is not None and f"| {SEVERITY[code]} |" in row, code
         assert code not in FORMER_CODES or f"`{FORMER_CODES[code]}`" in row
+
+
+def test_a_procedure_named_in_the_paragraph_excuses_an_adjusted_p(tmp_path, capsys):
+    # issue (audit) point 3: Tukey, Scheffé, Dunnett, Šidák, an FDR procedure … named anywhere in the paragraph make its
+    # p values adjusted ones: a note, not a finding; the same p in a paragraph naming none is found
+    path = tmp_path / "m.md"
+    for named in ("Pairs were compared with Scheffé's method.", "The false discovery rate was controlled.", "Dunnett contrasts against control."):
+        path.write_text(f"{named} The drug groups differed, t(40) = 2.10, p = .11.\n", encoding="utf-8")
+        assert main(["audit", str(path), "--json"]) == 0
+        (row,) = json.loads(capsys.readouterr().out)
+        assert row["codes"] == [] and "read as adjusted" in row["notes"][0]
+    path.write_text("The drug groups differed, t(40) = 2.10, p = .11.\n", encoding="utf-8")
+    assert main(["audit", str(path), "--json"]) == 1
+    assert "p-does-not-follow" in json.loads(capsys.readouterr().out)[0]["codes"]

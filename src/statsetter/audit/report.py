@@ -45,6 +45,7 @@ class Entry:
     unit: Unit
     start: int
     end: int
+    notes: tuple[str, ...] = ()  # what the audit assumed instead of finding (say, a p adjusted by a procedure the text names)
 
     @property
     def codes(self) -> list[str]:
@@ -71,7 +72,7 @@ class Entry:
 
     def row(self) -> dict[str, object]:
         return {"location": self.location, "found": self.found, "severity": self.severity, "codes": self.codes, "message": self.message,
-                "suggestion": self.suggestion, "former_codes": [FORMER_CODES.get(c, c) for c in self.codes]}
+                "suggestion": self.suggestion, "former_codes": [FORMER_CODES.get(c, c) for c in self.codes], "notes": list(self.notes)}
 
 
 def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Finding] = ()) -> str:
@@ -100,6 +101,12 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
 
 
 _LONG_NUMBER = re.compile(r"\d{101,}")
+# a multiple-comparison procedure named in the paragraph (or the table's note): its p values are adjusted and
+# cannot be recomputed from one statistic
+_PROCEDURE = re.compile(
+    r"(?i:\bTukey|\bHSD\b|Scheff[ée]|Dunnett|[ŠS]id[áa]k|Games[-–\s]Howell|Bonferroni|\bHolm\b|Hochberg|\bFDR\b|false discovery rate"
+    r"|adjusted p|p[- ]values? (?:were |was )?(?:adjusted|corrected)|corrected for multiple)"
+)
 
 
 def audit_units(
@@ -145,8 +152,15 @@ def audit_units(
                 first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else 0  # opening markers included
                 last = unit.source_index(rep.end - 1) + 1
                 location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
+            notes: tuple[str, ...] = ()
+            if any(f.code == "p-does-not-follow" for f in findings):
+                named = _PROCEDURE.search(unit.text)
+                if named is not None:  # the text says its p values are adjusted: a note, not a finding
+                    findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
+                    notes = (f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
+                             f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.",)
             suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
-            entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end))
+            entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, notes))
     return entries
 
 
@@ -187,6 +201,9 @@ def print_table(entries: Sequence[Entry], *, everything: bool = False) -> None:
     flagged = sum(1 for e in entries if e.findings)
     counts = ", ".join(f"{sum(1 for e in entries if e.severity == s)} {s}" for s in SEVERITIES)
     console.print(f"{len(entries)} statistics found, {flagged} with findings (gravest finding: {counts}).")
+    adjusted = sum(1 for e in entries if e.notes)
+    if adjusted:
+        console.print(f"{adjusted} p value(s) read as adjusted by a procedure their paragraph names, not checked (the notes in --json say which).")
     if flagged:
         used = sorted({c for e in entries for c in e.codes})
         for code in used:
