@@ -574,3 +574,29 @@ def test_a_procedure_named_in_the_paragraph_excuses_an_adjusted_p(tmp_path, caps
     path.write_text("The drug groups differed, t(40) = 2.10, p = .11.\n", encoding="utf-8")
     assert main(["audit", str(path), "--json"]) == 1
     assert "p-does-not-follow" in json.loads(capsys.readouterr().out)[0]["codes"]
+
+
+def test_italics_are_judged_only_where_the_manuscript_italicises_some_symbols(tmp_path, capsys):
+    # issue (audit) point 4: a Word manuscript with every symbol plain made a choice (no italics findings unless
+    # --check-italics); one that italicises some symbols and not others is inconsistent (findings)
+    import docx
+
+    def write(name, italic_first):
+        d = docx.Document()
+        for i, (sym, rest) in enumerate((("t", "(38) = 2.14, "), ("t", "(40) = 2.10, "))):
+            p = d.add_paragraph("Groups differed, ")
+            p.add_run(sym).italic = italic_first and i == 0
+            p.add_run(rest)
+            p.add_run("p").italic = italic_first and i == 0
+            p.add_run(" = .039" if i == 0 else " = .042")
+        d.save(str(tmp_path / name))
+        return str(tmp_path / name)
+
+    plain = write("plain.docx", False)
+    assert main(["audit", plain, "--json"]) == 0 and capsys.readouterr()
+    assert main(["audit", plain, "--json", "--check-italics"]) == 1
+    assert any("italics" in r["codes"] for r in json.loads(capsys.readouterr().out))
+    mixed = write("mixed.docx", True)
+    assert main(["audit", mixed, "--json"]) == 1
+    flagged = {r["found"][:5]: "italics" in r["codes"] for r in json.loads(capsys.readouterr().out)}
+    assert flagged == {"t(38)": False, "t(40)": True}  # the plain one among italic ones

@@ -111,13 +111,16 @@ _PROCEDURE = re.compile(
 
 def audit_units(
     units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None,
-    suggest_all: bool = False,
+    suggest_all: bool = False, check_italics: bool = False,
 ) -> list[Entry]:
     """Every statistic of the units with its findings; a suggestion for each
-    statistic with findings (for every statistic with ``suggest_all``)."""
+    statistic with findings (for every statistic with ``suggest_all``).
+    Italics are judged only where the manuscript italicises some statistical
+    symbols (then the others are inconsistent) or when ``check_italics``."""
     resolved = load_style(style)
     mark = resolved.decimal_mark
     entries = []
+    italic_seen = False  # does the manuscript italicise any statistical symbol?
     for unit in units:
         long = _LONG_NUMBER.search(unit.text)
         if long:  # not a statistic anyone typed: said, with its place, and not read
@@ -137,6 +140,7 @@ def audit_units(
                 findings += effect_from_f_or_chi2(rep)
             if rep.symbol is not None:
                 previous_end = rep.end
+                italic_seen = italic_seen or bool(unit.italic and any(s <= rep.symbol_start < e for s, e in unit.italic))
             if grim_items:
                 findings += grim(rep, grim_items)
             if unit.part:  # a Word paragraph
@@ -161,15 +165,24 @@ def audit_units(
                              f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.",)
             suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
             entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, notes))
+    if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
+        entries = [_without(e, "italics", suggest_all) for e in entries]
     return entries
+
+
+def _without(e: Entry, code: str, suggest_all: bool) -> Entry:
+    kept = tuple(f for f in e.findings if f.code != code)
+    if len(kept) == len(e.findings):
+        return e
+    return replace(e, findings=kept, suggestion=e.suggestion if kept or suggest_all else "")
 
 
 def audit_file(
     path: "str | Path", style: "Style | str | None" = None, *, alpha: float = 0.05, encoding: str = "utf-8", grim_items: int | None = None,
-    suggest_all: bool = False,
+    suggest_all: bool = False, check_italics: bool = False,
 ) -> list[Entry]:
     """Every statistic in the manuscript at ``path`` (never modified)."""
-    return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items, suggest_all=suggest_all)
+    return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items, suggest_all=suggest_all, check_italics=check_italics)
 
 
 def as_json(entries: Sequence[Entry]) -> str:

@@ -29,6 +29,8 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
     a.add_argument("--all", action="store_true", help="list clean statistics in the table too")
     a.add_argument("--min-severity", choices=("error", "warning", "style"), default="style",
                    help="report findings of this severity or graver: error, warning or style (the default, everything)")
+    a.add_argument("--check-italics", action="store_true",
+                   help="flag every statistical symbol not in italics (by default only where the manuscript italicises some and not others)")
     a.add_argument("--suggest-all", action="store_true", help="restyle every statistic in the suggestions, not only those with findings")
     a.add_argument("--annotate", metavar="OUT.docx", help="write a copy of a .docx with a Word comment on each finding")
     a.add_argument("--encoding", default="utf-8", help="text encoding of a .md/.txt/.tex file (utf-8)")
@@ -49,7 +51,8 @@ def run(ns: argparse.Namespace) -> int:
         raise InputError("--out: choose --json or --csv")
     if ns.grim_items is not None and ns.grim_items < 1:
         raise InputError("--grim-items: give a whole number of 1 or more")
-    entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items, suggest_all=ns.suggest_all)
+    entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items, suggest_all=ns.suggest_all,
+                         check_italics=ns.check_italics)
     entries = by_severity([e.at_least(ns.min_severity) for e in entries])
     if ns.json or ns.csv:
         emit(as_json(entries) if ns.json else as_csv(entries), ns.out, inputs=[ns.manuscript])
