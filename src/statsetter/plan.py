@@ -494,8 +494,8 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     from .rendering.compose import compose
 
     data = _frame(plan)
-    records = _records(plan, data, progress)
     style = _style(plan)
+    records = _records(plan, data, progress, style)
     shown = _tables(plan, records, style)
     section = compose(records, shown, style, {a["id"]: a["place"] for a in plan.analyses if "place" in a})
     tables = [b for b in section.blocks if not isinstance(b, StyledText)]
@@ -507,14 +507,12 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     return RunResult(records, tables, [], notes, blocks=list(section.blocks), table_ids=dict(section.tables))
 
 
-def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None) -> list[Record]:
+def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None, style: "Style") -> list[Record]:
     """The records of the plan: scale reliabilities, analyses (each record
     named from its analysis id by ``records.name_records``), then the
     Descriptions of the descriptives tables."""
     from .analyses import cronbach_alpha, scale_score
     from .analyses.scales import scoring_note
-
-    style = _style(plan)
 
     frame, labels, levels = data.frame, data.labels, data.levels
     records: list[Record] = []

@@ -71,14 +71,12 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
         if sums:
             ss_error = float(records[0].details["ss_error"])
             rows.append(Row(StyledText("Error"), (_ss(num, ss_error, ss_dec), StyledText(num.df(df_error)), _ss(num, ss_error / df_error, ss_dec), *blank)))
-            ss_total = records[0].details.get("ss_total")
-            ss_total = float(ss_total) if isinstance(ss_total, (int, float)) else sum(float(r.details["ss"]) for r in records) + ss_error
-            df_total = df_error + sum(r.statistic.df[0] for r in records if r.statistic is not None)
+            parts = sum(float(r.details["ss"]) for r in records) + ss_error  # the rows' sums of squares
+            given = records[0].details.get("ss_total")
+            ss_total = float(given) if isinstance(given, (int, float)) else parts
             n = records[0].n
-            if n:
-                df_total = n - 1
+            df_total = n - 1 if n else df_error + sum(r.statistic.df[0] for r in records if r.statistic is not None)
             rows.append(Row(StyledText("Total"), (_ss(num, ss_total, ss_dec), StyledText(num.df(df_total)), StyledText(), *blank)))
-            parts = sum(float(r.details["ss"]) for r in records) + ss_error
             if abs(parts - ss_total) > 1e-9 * max(abs(ss_total), 1):
                 total_note = (" The sums of squares of the rows do not add up to the total: with unequal cell sizes, "
                               f"Type {'II' if records[0].details.get('ss_type') == 2 else 'III'} sums of squares are not a partition of it.")

@@ -101,7 +101,7 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
         if e is not None:
             cells += [_cell(h.eff(r, with_ci=False)), interval_cell(h.num, resolved, e.ci, e.name, e.null)]
         elif ratio is not None:
-            cells += [_cell(h.est(r, with_ci=False, symbol=ratio.name)), interval_cell(h.num, resolved, ratio.ci, ratio.name, 1.0 if ratio.ratio else 0.0)]
+            cells += [_cell(h.est(r, with_ci=False, symbol=ratio.name)), interval_cell(h.num, resolved, ratio.ci, ratio.name, 1.0)]
         else:
             cells += [StyledText(), StyledText()]
         for ci in ((e.ci if e is not None else None), (r.estimate.ci if r.estimate is not None else None)):

@@ -145,16 +145,13 @@ def _stubs(keys: list[tuple[str, str | None]], models: list[_Model]) -> list[tup
 
 
 def _one_model(m: _Model, keys, num: Numbers, style: Style, linear: bool):  # type: ignore[no-untyped-def]
-    def head(symbol: str) -> StyledText:
-        return StyledText.from_markup(style.symbol(symbol))
-
     found = list(m.coefficients.values())
     level = next((r.estimate.ci.level for r in found if r.estimate is not None and r.estimate.ci is not None), 0.95)
     b_dec = _column_decimals(num, [r.estimate.value for r in found if r.estimate is not None], "B")
     se_dec = _column_decimals(num, [r.estimate.se for r in found if r.estimate is not None and r.estimate.se is not None], "SE")
-    columns = [Column(head("B")), Column(head("SE"))] + ([] if linear else [Column(head("OR"))])
-    columns += [Column(StyledText("LL")), Column(StyledText("UL"))] + ([Column(head("beta"))] if linear else [])
-    columns += [Column(head("t" if linear else "z")), Column(head("p"))]
+    columns = [Column(_head(style, "B")), Column(_head(style, "SE"))] + ([] if linear else [Column(_head(style, "OR"))])
+    columns += [Column(StyledText("LL")), Column(StyledText("UL"))] + ([Column(_head(style, "beta"))] if linear else [])
+    columns += [Column(_head(style, "t" if linear else "z")), Column(_head(style, "p"))]
     first_ci = 2 if linear else 3
     rows = []
     for k, stub in _stubs(keys, [m]):
@@ -194,15 +191,16 @@ def _one_model(m: _Model, keys, num: Numbers, style: Style, linear: bool):  # ty
     return columns, rows, [Spanner(StyledText(ci_head), first_ci, first_ci + 2)], note
 
 
-def _side_by_side(models: list[_Model], keys, num: Numbers, style: Style, linear: bool):  # type: ignore[no-untyped-def]
-    def head(symbol: str) -> StyledText:
-        return StyledText.from_markup(style.symbol(symbol))
+def _head(style: Style, symbol: str) -> StyledText:
+    return StyledText.from_markup(style.symbol(symbol))
 
+
+def _side_by_side(models: list[_Model], keys, num: Numbers, style: Style, linear: bool):  # type: ignore[no-untyped-def]
     nb = style.keep_together
     found = [r for m in models for r in m.coefficients.values()]
     level = next((r.estimate.ci.level for r in found if r.estimate is not None and r.estimate.ci is not None), 0.95)
     pct = f"{level * 100:g}% CI"
-    per = [head("B"), StyledText(pct), head("beta"), head("p")] if linear else [head("B"), head("OR"), StyledText(pct), head("p")]
+    per = [_head(style, "B"), StyledText(pct), _head(style, "beta"), _head(style, "p")] if linear else [_head(style, "B"), _head(style, "OR"), StyledText(pct), _head(style, "p")]
     width = len(per)
     columns = [Column(h) for _ in models for h in per]
     spanners = [Spanner(StyledText(f"Model {m.model.details.get('step', i + 1) if m.model is not None else i + 1}"), i * width, (i + 1) * width)
