@@ -25,8 +25,9 @@ from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Reported, coefficient_before, find_statistics, group_sizes
 from .reading import Unit, read_units
+from .word import restyled
 
-__all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "annotate", "CAUTION"]
+__all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "CAUTION"]
 
 RULES = "docs/reporting-rules.md in statsetter's source"
 
@@ -46,6 +47,8 @@ class Entry:
     start: int
     end: int
     notes: tuple[str, ...] = ()  # what the audit assumed instead of finding (say, a p adjusted by a procedure the text names)
+    revision: StyledText | None = None  # the house-style text for a tracked change (asked for with restyle=True); None: left as typed
+    kept: str = ""  # why a statistic with a different house-style text is left as typed
 
     @property
     def codes(self) -> list[str]:
@@ -61,9 +64,22 @@ class Entry:
         keep = SEVERITIES.index(severity)
         return replace(self, findings=tuple(f for f in self.findings if SEVERITIES.index(f.severity) <= keep))
 
-    def comment(self) -> str:
-        """A Word comment in plain sentences, the severity first."""
-        text = f"{self.severity.capitalize()}: " + " ".join(f"{f.message} ({f.evidence})" if f.evidence else f.message for f in self.findings)
+    def comment(self, findings: Sequence[Finding] | None = None, *, revised: bool = False, kept: str | None = None) -> str:
+        """A Word comment in plain sentences, the severity first (on
+        ``findings``, by default all of them); a statistic revised in the
+        house style says so, one left as typed says why."""
+        chosen = self.findings if findings is None else tuple(findings)
+        severity = min((f.severity for f in chosen), key=SEVERITIES.index, default="note")
+        said, seen = [], set()
+        for f in chosen:  # one sentence per finding; evidence shared with the one before is not repeated
+            evidence = f" ({f.evidence})" if f.evidence and f.evidence not in seen else ""
+            said.append(f"{f.message.rstrip('.')}{evidence}.")
+            seen.add(f.evidence)
+        text = f"{severity.capitalize()}: " + " ".join(said)
+        if revised:
+            text += " The statistic is restyled in the tracked change; its numbers are as reported."
+        elif kept or (kept is None and self.kept):
+            text += f" Not restyled: {kept or self.kept}."
         return text + (f" Suggested: {self.suggestion}" if self.suggestion else "")
 
     @property
@@ -111,15 +127,16 @@ _PROCEDURE = re.compile(
 
 def audit_units(
     units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None,
-    suggest_all: bool = False, check_italics: bool = False,
+    suggest_all: bool = False, check_italics: bool = False, restyle: bool = False,
 ) -> list[Entry]:
     """Every statistic of the units with its findings; a suggestion for each
-    statistic with findings (for every statistic with ``suggest_all``).
+    statistic with findings (for every statistic with ``suggest_all``); with
+    ``restyle``, the house-style text a tracked change can put in its place.
     Italics are judged only where the manuscript italicises some statistical
     symbols (then the others are inconsistent) or when ``check_italics``."""
     resolved = load_style(style)
     mark = resolved.decimal_mark
-    entries = []
+    entries, reps = [], []
     italic_seen = False  # does the manuscript italicise any statistical symbol?
     for unit in units:
         long = _LONG_NUMBER.search(unit.text)
@@ -165,8 +182,12 @@ def audit_units(
                              f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.",)
             suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
             entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, notes))
+            reps.append(rep)
     if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
         entries = [_without(e, "italics", suggest_all) for e in entries]
+    if restyle:
+        entries = [replace(e, revision=new, kept=why) for e, (new, why) in
+                   ((e, restyled(rep, resolved, alpha, e.findings)) for e, rep in zip(entries, reps))]
     return entries
 
 
@@ -179,10 +200,11 @@ def _without(e: Entry, code: str, suggest_all: bool) -> Entry:
 
 def audit_file(
     path: "str | Path", style: "Style | str | None" = None, *, alpha: float = 0.05, encoding: str = "utf-8", grim_items: int | None = None,
-    suggest_all: bool = False, check_italics: bool = False,
+    suggest_all: bool = False, check_italics: bool = False, restyle: bool = False,
 ) -> list[Entry]:
     """Every statistic in the manuscript at ``path`` (never modified)."""
-    return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items, suggest_all=suggest_all, check_italics=check_italics)
+    return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items, suggest_all=suggest_all, check_italics=check_italics,
+                       restyle=restyle)
 
 
 def as_json(entries: Sequence[Entry]) -> str:
@@ -229,38 +251,3 @@ def by_severity(entries: Sequence[Entry]) -> list[Entry]:
     """Errors first, then warnings, then style findings, then clean statistics; document order within each."""
     order = {s: i for i, s in enumerate(SEVERITIES)}
     return sorted(entries, key=lambda e: order.get(e.severity, len(SEVERITIES)))
-
-
-def annotate(source: "str | Path", entries: Sequence[Entry], out: "str | Path") -> tuple[int, int]:
-    """A copy of the .docx with a Word comment on each finding in the body
-    and its tables: (comments added, findings elsewhere, listed only)."""
-    import docx
-    from docx.oxml.ns import qn
-    from docx.text.run import Run
-
-    from ..export.docx_writer import save_document
-
-    document = docx.Document(str(source))
-    paragraphs = list(document.element.body.iter(qn("w:p")))
-    added = elsewhere = 0
-    for e in entries:
-        if not e.findings:
-            continue
-        if e.unit.part != "word/document.xml" or e.unit.index >= len(paragraphs):
-            elsewhere += 1
-            continue
-        p = paragraphs[e.unit.index]
-        runs, at = [], 0
-        for r in p.iter(qn("w:r")):
-            length = sum(len(t.text or "") if t.tag == qn("w:t") else 1 for t in r if t.tag in (qn("w:t"), qn("w:tab"), qn("w:br"), qn("w:cr")))
-            if at < e.end and at + length > e.start and length:
-                runs.append(Run(r, document))  # type: ignore[arg-type]
-            at += length
-        if not runs:
-            elsewhere += 1
-            continue
-        document.add_comment(runs, text=e.comment(), author="statsetter", initials="st")
-        added += 1
-    save_document(document, out, inputs=[source])
-    return added, elsewhere
-

@@ -33,26 +33,34 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
                    help="flag every statistical symbol not in italics (by default only where the manuscript italicises some and not others)")
     a.add_argument("--suggest-all", action="store_true", help="restyle every statistic in the suggestions, not only those with findings")
     a.add_argument("--annotate", metavar="OUT.docx", help="write a copy of a .docx with a Word comment on each finding")
+    a.add_argument("--revise", metavar="OUT.docx",
+                   help="write a copy of a .docx with each statistic restyled as a tracked change (author statsetter) and a comment "
+                   "on each finding the restyling does not settle")
     a.add_argument("--encoding", default="utf-8", help="text encoding of a .md/.txt/.tex file (utf-8)")
     a.add_argument("--grim-items", type=int, metavar="K", help="run the GRIM test on means, for integer scores summed over K items")
     a.set_defaults(handler=run)
 
 
 def run(ns: argparse.Namespace) -> int:
-    from ..audit.report import annotate, as_csv, as_json, audit_file, by_severity, print_table
+    from ..audit.report import as_csv, as_json, audit_file, by_severity, print_table
+    from ..audit.word import annotate, revise
 
     if not 0 < ns.alpha < 1:
         raise InputError(f"--alpha: {ns.alpha:g} is not between 0 and 1")
-    if ns.annotate and not Path(ns.manuscript).suffix.lower() == ".docx":
-        raise InputError(f"--annotate: {ns.manuscript}: comments can be added to a .docx manuscript only (save it as .docx)")
-    if ns.annotate and not ns.annotate.lower().endswith(".docx"):
-        raise InputError(f"--annotate: {ns.annotate} does not end in .docx")
+    for option, target in (("--annotate", ns.annotate), ("--revise", ns.revise)):
+        if target and not Path(ns.manuscript).suffix.lower() == ".docx":
+            raise InputError(f"{option}: {ns.manuscript}: a copy with comments or revisions can be made of a .docx manuscript only (save it as .docx)")
+        if target and not target.lower().endswith(".docx"):
+            raise InputError(f"{option}: {target} does not end in .docx")
+    if ns.annotate and ns.revise and Path(ns.annotate).resolve() == Path(ns.revise).resolve():
+        raise InputError(f"--annotate and --revise: give two different files, not {ns.revise} twice")
     if ns.out and not (ns.json or ns.csv):
         raise InputError("--out: choose --json or --csv")
     if ns.grim_items is not None and ns.grim_items < 1:
         raise InputError("--grim-items: give a whole number of 1 or more")
     entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items, suggest_all=ns.suggest_all,
-                         check_italics=ns.check_italics)
+                         check_italics=ns.check_italics, restyle=bool(ns.revise))
+    every = entries
     entries = by_severity([e.at_least(ns.min_severity) for e in entries])
     if ns.json or ns.csv:
         emit(as_json(entries) if ns.json else as_csv(entries), ns.out, inputs=[ns.manuscript])
@@ -62,4 +70,9 @@ def run(ns: argparse.Namespace) -> int:
         added, elsewhere = annotate(ns.manuscript, entries, ns.annotate)
         note = f" ({elsewhere} in headers, footers or notes listed only)" if elsewhere else ""
         sys.stderr.write(f"wrote {ns.annotate} with {added} comment(s){note}\n")
+    if ns.revise:  # every statistic is restyled; comments follow --min-severity
+        counts = revise(ns.manuscript, [e.at_least(ns.min_severity) for e in every], ns.revise)
+        sys.stderr.write(f"wrote {ns.revise}: {counts['revised']} statistic(s) restyled as tracked changes, {counts['commented']} comment(s), "
+                         f"{counts['kept']} left as typed (their comments say why)"
+                         + (f", {counts['elsewhere']} in headers, footers or notes listed only" if counts["elsewhere"] else "") + "\n")
     return 1 if any(e.findings for e in entries) else 0

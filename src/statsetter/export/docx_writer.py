@@ -21,6 +21,7 @@ from ..rendering.tables import TableModel, blank_or_dash, split_decimal, title_c
 if TYPE_CHECKING:
     from docx.document import Document
     from docx.text.paragraph import Paragraph
+    from docx.text.run import Run
 
     from ..records import Result
     from ..style.profile import Style
@@ -49,13 +50,17 @@ def xml_safe(text: str) -> str:
 def add_runs(paragraph: "Paragraph", text: StyledText) -> None:
     """Append ``text`` to ``paragraph`` as runs: italic, superscript, subscript."""
     for chunk, styles in text.segments():
-        run = paragraph.add_run(xml_safe(chunk))
-        if "i" in styles:
-            run.italic = True
-        if "sup" in styles:
-            run.font.superscript = True
-        elif "sub" in styles:
-            run.font.subscript = True
+        style_run(paragraph.add_run(xml_safe(chunk)), styles)
+
+
+def style_run(run: "Run", styles: frozenset[str]) -> None:
+    """Italic, superscript or subscript as the text's styles say."""
+    if "i" in styles:
+        run.italic = True
+    if "sup" in styles:
+        run.font.superscript = True
+    elif "sub" in styles:
+        run.font.subscript = True
 
 
 def _run_xml(text: StyledText) -> str:

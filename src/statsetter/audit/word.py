@@ -1,0 +1,338 @@
+"""Copies of a Word manuscript that carry the audit: a comment on each
+finding, or the house style as tracked changes an editor can accept.
+
+Both write a new file and never touch the manuscript. A revision replaces a
+statistic's characters by its restyled text as one deletion and one
+insertion (``w:del`` + ``w:ins``, author "statsetter"), the new text in runs
+that keep the replaced text's font and carry italics, superscripts and
+subscripts. A statistic is revised only when the restyled text keeps every
+number and word the author typed (to the printed precision); a p the audit
+doubts is never changed by a revision, it gets a comment.
+"""
+
+from __future__ import annotations
+
+import copy
+import re
+from datetime import datetime, timezone
+from pathlib import Path
+from typing import TYPE_CHECKING, Sequence
+
+from ..styled import StyledText
+from .checks import Finding
+from .parsing import Reported
+
+if TYPE_CHECKING:
+    from ..style.profile import Style
+    from .report import Entry
+
+__all__ = ["annotate", "restyled", "revise", "AUTHOR"]
+
+AUTHOR = "statsetter"
+_W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
+_TEXT_NODES = {f"{_W}t": None, f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
+_EMPTY_NODES = {f"{_W}rPr", f"{_W}lastRenderedPageBreak", f"{_W}softHyphen"}  # nothing the reader counts, safe to move
+# findings about the p itself: a revision must then leave the p as the author typed it
+_P_DOUBTS = {"p-does-not-follow", "verdict-changes", "one-sided", "impossible-p"}
+# words the parser reads as notation, which the restyled text writes as symbols
+_NOTATION_WORDS = {"df", "ns", "chi", "square", "squared", "eta", "partial", "omega", "cohen", "hedges", "ci", "cis", "sd", "se",
+                   "rho", "tau", "phi", "cramér", "cramer", "value", "confidence", "interval"}
+_WORD = re.compile(r"[^\W\d_]{2,}")
+_DIGITS = re.compile(r"\d+(?:[.,]\d+)*|[.,]\d+")
+_P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
+
+
+# -- the restyled text of one statistic ---------------------------------------------
+
+
+def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding]) -> tuple[StyledText | None, str]:
+    """The statistic in the house style for a revision, or None and why not.
+
+    The author's numbers are kept (rounded only where the style rounds); a
+    p given as a threshold or as zero may become the exact p the style asks
+    for unless a finding doubts the p."""
+    from ..rendering.sentences import render
+    from .checks import to_record
+
+    try:
+        new = render(to_record(rep, alpha, style), "stats", style)
+    except Exception:  # noqa: BLE001 - a record the renderer cannot take (an impossible value): left as typed
+        return None, "the statistic cannot be restyled"
+    plain = new.plain()
+    old = rep.text
+    if plain == old and not any(f.code == "italics" for f in findings):
+        return None, ""
+    lost = _lost_word(rep, old, plain)
+    if lost:
+        return None, f"the restyled text would drop \u201c{lost}\u201d"
+    doubted = any(f.code in _P_DOUBTS for f in findings)
+    why = _numbers_kept(rep, old, new, style.decimal_mark, doubted)
+    return (None, why) if why else (new, "")
+
+
+def _lost_word(rep: Reported, old: str, new: str) -> str:
+    kept = {w.lower() for w in _WORD.findall(new)} | _NOTATION_WORDS
+    for w in _WORD.findall(old):
+        if w.lower() not in kept:
+            return w
+    return ""
+
+
+def _value(token: str, mark: str) -> tuple[float, int]:
+    if mark == ",":
+        token = token.replace(".", "").replace(",", ".")
+    else:
+        token = token.replace(",", "")
+    return float(token), len(token.partition(".")[2])
+
+
+_SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789", "⁰¹²³⁴⁵⁶⁷⁸⁹\u2009\u202f")
+
+
+def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: bool) -> str:
+    """"" when ``new`` has the numbers of ``old`` to their printed precision
+    (the 2 of a symbol such as η2 aside), else why not."""
+    if any(n is not None and re.search(r"[eE×⁻^]", n.text) for n in (rep.value, rep.p.number if rep.p else None)):
+        return "a power of ten is left as typed"
+    blank = list(old)
+    for at, symbol in [(rep.symbol_start, rep.symbol_text)] + [(e.symbol_start, e.symbol_text) for e in rep.effects + rep.descriptives]:
+        for i in range(max(at - rep.start, 0), min(at - rep.start + len(symbol), len(blank))):
+            blank[i] = " "
+    old_p = rep.p.number if rep.p is not None else None
+    if old_p is not None:
+        blank[old_p.start - rep.start : old_p.end - rep.start] = " " * (old_p.end - old_p.start)
+    old_text = "".join(blank).translate(_SUBSCRIPT_DIGITS)
+    new_text = "".join(" " * len(t) if "sup" in styles else t for t, styles in new.segments()).translate(_SUBSCRIPT_DIGITS)
+    new_p = _P_IN_TEXT.search(new_text)
+    if new_p is not None:
+        new_text = new_text[: new_p.start(2)] + " " * len(new_p.group(2)) + new_text[new_p.end(2) :]
+    olds = sorted(_value(t, mark) for t in _DIGITS.findall(old_text))
+    news = sorted(_value(t, mark) for t in _DIGITS.findall(new_text))
+    if len(olds) != len(news) or any(abs(a - b) > 0.5 * 10.0**-da + 0.5 * 10.0**-db + 1e-12 for (a, da), (b, db) in zip(olds, news)):
+        return "the restyled text would change a number"
+    if old_p is None:
+        return "" if new_p is None or (rep.p is not None and rep.p.op == "ns") else "the restyled text would add a p value"
+    if new_p is None:
+        return "the restyled text would drop the p value"
+    value, places = _value(new_p.group(2), mark)
+    same = new_p.group(1) == rep.p.op and abs(value - old_p.value) <= old_p.half_unit + 0.5 * 10.0**-places + 1e-12  # type: ignore[union-attr]
+    exactable = rep.p.op != "=" or old_p.value < 0.001  # type: ignore[union-attr]
+    if not same and (doubted or not exactable):
+        return "the restyled text would change the reported p"
+    return ""
+
+
+# -- runs -------------------------------------------------------------------------------
+
+
+def _node_length(node) -> int:  # type: ignore[no-untyped-def]
+    tag = node.tag
+    if tag not in _TEXT_NODES:
+        return 0
+    return len(node.text or "") if _TEXT_NODES[tag] is None else 1
+
+
+def _runs(p):  # type: ignore[no-untyped-def]
+    """The paragraph's runs as the reader counts them (deleted text skipped): [(run, start, end)]."""
+    out, at = [], 0
+    for r in p.iter(f"{_W}r"):
+        parent = r.getparent()
+        if parent is not None and parent.tag == f"{_W}del":
+            continue
+        n = sum(_node_length(c) for c in r)
+        out.append((r, at, at + n))
+        at += n
+    return out
+
+
+def _split(run, k: int) -> None:  # type: ignore[no-untyped-def]
+    """Cut ``run`` after its k-th character: the rest goes into a copy placed after it."""
+    right = copy.deepcopy(run)
+    at = 0
+    for left_node, right_node in zip([c for c in run if c.tag != f"{_W}rPr"], [c for c in right if c.tag != f"{_W}rPr"]):
+        n = _node_length(left_node)
+        if at + n <= k:
+            right.remove(right_node)
+        elif at >= k:
+            run.remove(left_node)
+        else:  # the cut falls inside this w:t
+            cut = k - at
+            left_node.text, right_node.text = left_node.text[:cut], right_node.text[cut:]
+            for node in (left_node, right_node):
+                node.set("{http://www.w3.org/XML/1998/namespace}space", "preserve")
+        at += n
+    run.addnext(right)
+
+
+def _span_runs(p, start: int, end: int):  # type: ignore[no-untyped-def]
+    """The runs that hold exactly characters start..end of the paragraph, cut
+    where needed; None when they are not plain runs side by side (a field, a
+    hyperlink, a picture inside the statistic)."""
+    for at in (start, end):
+        for r, s, e in _runs(p):
+            if s < at < e:
+                _split(r, at - s)
+                break
+    inside = [r for r, s, e in _runs(p) if start <= s and e <= end and e > s]
+    if not inside or inside[0].getparent() is not inside[-1].getparent():
+        return None
+    siblings, node = [], inside[0]
+    while node is not None:
+        siblings.append(node)
+        if node is inside[-1]:
+            break
+        node = node.getnext()
+    for node in siblings:
+        if node.tag == f"{_W}r":
+            if any(c.tag not in _TEXT_NODES and c.tag not in _EMPTY_NODES for c in node):
+                return None
+        elif node.tag not in (f"{_W}proofErr", f"{_W}bookmarkStart", f"{_W}bookmarkEnd"):
+            return None
+    return siblings
+
+
+_LOOK_IGNORED = {f"{_W}{t}" for t in ("i", "iCs", "vertAlign", "lang", "noProof", "rPrChange", "spellStart", "proofErr")}
+
+
+def _look(run) -> bytes:  # type: ignore[no-untyped-def]
+    """The run's formatting apart from what a statistic's text sets (italics,
+    super/subscript) and what does not show (language, proofing)."""
+    from lxml import etree
+
+    rpr = run.find(f"{_W}rPr")
+    if rpr is None:
+        return b""
+    return b"".join(etree.tostring(c) for c in rpr if c.tag not in _LOOK_IGNORED)
+
+
+def _new_runs(text: StyledText, model):  # type: ignore[no-untyped-def]
+    """Runs for ``text`` with the font of the run ``model``: italics and
+    vertical alignment from the text, everything else from the model."""
+    from docx.oxml import OxmlElement
+    from docx.text.run import Run
+
+    from ..export.docx_writer import style_run, xml_safe
+
+    base = model.find(f"{_W}rPr")
+    out = []
+    for chunk, styles in text.segments():
+        r = OxmlElement("w:r")
+        if base is not None:
+            rpr = copy.deepcopy(base)
+            for tag in ("i", "iCs", "vertAlign", "rPrChange"):
+                for old in rpr.findall(f"{_W}{tag}"):
+                    rpr.remove(old)
+            r.append(rpr)
+        run = Run(r, None)  # type: ignore[arg-type]
+        run.text = xml_safe(chunk)
+        style_run(run, styles)
+        out.append(r)
+    return out
+
+
+# -- writers ---------------------------------------------------------------------------------
+
+
+def _comment(document, first, last, text: str) -> None:  # type: ignore[no-untyped-def]
+    from docx.text.run import Run
+
+    document.add_comment([Run(first, document), Run(last, document)], text=text, author=AUTHOR, initials="st")
+
+
+def annotate(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path") -> tuple[int, int]:
+    """A copy of the .docx with a Word comment on each finding in the body
+    and its tables: (comments added, findings elsewhere, listed only)."""
+    import docx
+    from docx.oxml.ns import qn
+
+    from ..export.docx_writer import save_document
+
+    document = docx.Document(str(source))
+    paragraphs = list(document.element.body.iter(qn("w:p")))
+    added = elsewhere = 0
+    for e in sorted(entries, key=lambda e: (e.unit.index, -e.start)):
+        if not e.findings:
+            continue
+        if e.unit.part != "word/document.xml" or e.unit.index >= len(paragraphs):
+            elsewhere += 1
+            continue
+        runs = [r for r, s, t in _runs(paragraphs[e.unit.index]) if s < e.end and t > e.start]
+        if not runs:
+            elsewhere += 1
+            continue
+        _comment(document, runs[0], runs[-1], e.comment())
+        added += 1
+    save_document(document, out, inputs=[source])
+    return added, elsewhere
+
+
+def revise(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path", *, when: datetime | None = None) -> dict[str, int]:
+    """A copy of the .docx with every statistic that has a restyled text
+    (``Entry.revision``) replaced by it as a tracked change, and a comment on
+    each statistic whose findings the revision does not settle (an error or
+    a warning, or a style finding on a statistic left as typed). Returns the
+    counts: revised, commented, kept (restyling would lose something),
+    elsewhere (headers, footers, notes: listed only)."""
+    import docx
+    from docx.oxml.ns import qn
+
+    from ..export.docx_writer import save_document
+
+    document = docx.Document(str(source))
+    body = document.element.body
+    paragraphs = list(body.iter(qn("w:p")))
+    ids = [int(v) for el in document.element.iter() for k, v in el.attrib.items() if k == qn("w:id") and v.lstrip("-").isdigit()]
+    next_id = max(ids, default=0) + 1
+    stamp = (when or datetime.now(timezone.utc)).strftime("%Y-%m-%dT%H:%M:%SZ")
+    counts = {"revised": 0, "commented": 0, "kept": 0, "elsewhere": 0}
+    for e in sorted(entries, key=lambda e: (e.unit.index, -e.start)):  # right to left: earlier offsets stay valid
+        change = e.revision
+        open_findings = [f for f in e.findings if f.severity != "style" or change is None]
+        if change is None and not e.findings:
+            continue
+        if e.unit.part != "word/document.xml" or e.unit.index >= len(paragraphs):
+            counts["elsewhere"] += 1
+            continue
+        runs = _span_runs(paragraphs[e.unit.index], e.start, e.end)
+        why = e.kept
+        if runs is None or (change is not None and len({_look(r) for r in runs if r.tag == f"{_W}r"}) > 1):
+            why = "a field, link or picture lies inside the statistic" if runs is None else "parts of it are in different fonts or emphasis"
+            runs = [r for r, s, t in _runs(paragraphs[e.unit.index]) if s < e.end and t > e.start]
+            change = None
+            open_findings = list(e.findings)
+        if not runs:
+            counts["elsewhere"] += 1
+            continue
+        if open_findings or (why and e.revision is not None):
+            text = e.comment(open_findings, revised=change is not None, kept=why)
+            _comment(document, runs[0], runs[-1], text)
+            counts["commented"] += 1
+        if change is None:
+            counts["kept"] += bool(e.kept or e.findings)
+            continue
+        model = next(r for r in runs if r.tag == f"{_W}r")
+        deletion = _tracked("w:del", next_id, stamp)
+        insertion = _tracked("w:ins", next_id + 1, stamp)
+        next_id += 2
+        runs[0].addprevious(deletion)
+        for node in runs:
+            deletion.append(node)
+            for t in node.iter(f"{_W}t"):
+                t.tag = f"{_W}delText"
+        for r in _new_runs(change, model):
+            insertion.append(r)
+        deletion.addnext(insertion)
+        counts["revised"] += 1
+    save_document(document, out, inputs=[source])
+    return counts
+
+
+def _tracked(tag: str, number: int, stamp: str):  # type: ignore[no-untyped-def]
+    from docx.oxml import OxmlElement
+    from docx.oxml.ns import qn
+
+    el = OxmlElement(tag)
+    el.set(qn("w:id"), str(number))
+    el.set(qn("w:author"), AUTHOR)
+    el.set(qn("w:date"), stamp)
+    return el

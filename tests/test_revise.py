@@ -1,0 +1,175 @@
+"""`statsetter audit --revise`: the house style as tracked changes in a copy of
+a Word manuscript. Checked the way an editor would: LibreOffice opens the
+copy, accepting every change (an lxml pass, as Word's "Accept All" does)
+leaves text whose audit has no style findings, rejecting every change gives
+back the manuscript's text, and no number the author typed is changed."""
+
+from __future__ import annotations
+
+import copy
+import hashlib
+import re
+import zipfile
+
+import docx
+import pytest
+from lxml import etree
+
+from statsetter.audit.report import audit_file
+from statsetter.cli import main
+from test_docx import pdf_text
+
+W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
+
+
+def _manuscript(path):
+    """A chapter typed the way authors type (practice): plain symbols, no
+    spaces, hyphens for minus signs, leading zeros, thresholds, a statistic
+    split over runs by an italic symbol, one in a table cell."""
+    d = docx.Document()
+    d.add_paragraph("Results")
+    p = d.add_paragraph("The trained group scored higher, ")
+    p.add_run("t").italic = True
+    p.add_run("(28)=2.21, p=0.036, d=0.80, than controls.")
+    d.add_paragraph("Recall fell, F(2, 87) = 2.50, p = .02, and the interaction held, F(1, 31) = 4.52, MSE = 2.10, p = .041.")
+    d.add_paragraph("Region and attitude were associated, χ2(2, N = 200) = 9.87, p < .01; scores rose, t(30)=-2.14, p=0.040.")
+    p = d.add_paragraph("Age correlated with recall, r(48) = .31, p = .028, 95% CI [.04, .54]; a part in bold, ")
+    p.add_run("t(40) = 3.10, ").bold = True
+    p.add_run("p = .0035.")
+    d.add_paragraph("Attention improved, t(25)=1.20, p<.05.")  # a threshold that no reading of t gives (p = .24)
+    d.add_table(rows=1, cols=2)
+    d.tables[0].cell(0, 0).text = "Condition"
+    d.tables[0].cell(0, 1).text = "t(20)=3.50, p=.002"
+    d.save(str(path))
+    return path
+
+
+def _decided(path, out, accept: bool):
+    """The revised copy with every tracked change accepted (or rejected)."""
+    with zipfile.ZipFile(path) as z:
+        parts = {n: z.read(n) for n in z.namelist()}
+    root = etree.fromstring(parts["word/document.xml"])
+    drop, keep = (f"{W}del", f"{W}ins") if accept else (f"{W}ins", f"{W}del")
+    for el in list(root.iter(drop)):
+        el.getparent().remove(el)
+    for el in list(root.iter(keep)):
+        parent, at = el.getparent(), el.getparent().index(el)
+        for child in reversed(list(el)):
+            parent.insert(at, child)
+        parent.remove(el)
+    for t in root.iter(f"{W}delText"):
+        t.tag = f"{W}t"
+    parts["word/document.xml"] = etree.tostring(root, xml_declaration=True, encoding="UTF-8", standalone=True)
+    with zipfile.ZipFile(out, "w") as z:
+        for name, data in parts.items():
+            z.writestr(name, data)
+    return out
+
+
+def _texts(path):
+    d = docx.Document(str(path))
+    return [p.text for p in d.paragraphs] + [c.text for t in d.tables for row in t.rows for c in row.cells]
+
+
+@pytest.fixture(scope="module")
+def revised(tmp_path_factory):
+    tmp = tmp_path_factory.mktemp("revise")
+    source = _manuscript(tmp / "chapter.docx")
+    before = hashlib.sha256(source.read_bytes()).hexdigest()
+    code = main(["audit", str(source), "--revise", str(tmp / "revised.docx"), "--json", "--out", str(tmp / "audit.json")])
+    assert code == 1
+    assert hashlib.sha256(source.read_bytes()).hexdigest() == before  # the manuscript is never modified
+    return source, tmp / "revised.docx"
+
+
+def test_revisions_are_tracked_changes_by_statsetter(revised):
+    _, out = revised
+    root = etree.fromstring(zipfile.ZipFile(out).read("word/document.xml"))
+    deletions, insertions = list(root.iter(f"{W}del")), list(root.iter(f"{W}ins"))
+    assert len(deletions) == len(insertions) == 6
+    for el in deletions + insertions:
+        assert el.get(f"{W}author") == "statsetter"
+        assert re.fullmatch(r"\d{4}-\d\d-\d\dT\d\d:\d\d:\d\dZ", el.get(f"{W}date"))
+    ids = [el.get(f"{W}id") for el in deletions + insertions]
+    assert len(set(ids)) == len(ids)
+    assert all(el.find(f"{W}r/{W}t") is None for el in deletions)  # deleted text is w:delText, as Word writes it
+    # italics and superscripts as real runs: the inserted p is italic, the 2 of χ² a superscript
+    runs = [r for el in insertions for r in el.iter(f"{W}r")]
+    italic = {"".join(r.itertext()) for r in runs if r.find(f"{W}rPr/{W}i") is not None}
+    assert {"t", "p", "d", "χ"} - {"χ"} <= italic and "χ" not in italic  # Greek is upright (APA 7 §6.45)
+    assert any(r.find(f"{W}rPr/{W}vertAlign").get(f"{W}val") == "superscript" for r in runs if r.find(f"{W}rPr/{W}vertAlign") is not None)
+
+
+def test_libreoffice_opens_the_copy_and_shows_both_texts(revised):
+    _, out = revised
+    text = pdf_text(out)
+    flat = re.sub(r"\s+", " ", text)
+    assert "t(30)=-2.14" in flat and "t(30) = −2.14, p = .040" in flat  # the deletion and the insertion both shown
+
+
+def test_accepting_all_leaves_no_style_findings_where_it_revised(revised, tmp_path):
+    source, out = revised
+    accepted = _decided(out, tmp_path / "accepted.docx", accept=True)
+    entries = audit_file(accepted)
+    assert len(entries) == 9
+    for e in entries:
+        style = [f.code for f in e.findings if f.severity == "style"]
+        if "MSE" in e.found or "3.10" in e.found or "1.20" in e.found:  # left as typed: a word the style would drop; a
+            # statistic half in bold; a doubted p (a revision never turns "p<.05" into the recomputed p = .24)
+            assert style
+        else:
+            assert style == [], (e.found, style)
+    text = " ".join(_texts(accepted)).replace("\u00a0", " ")  # statsetter keeps a statistic on one line with no-break spaces
+    # the author's numbers stand: the doubted p (.02) is not replaced by a recomputed one
+    assert "F(2, 87) = 2.50, p = .02" in text
+    assert "χ2(2, N = 200) = 9.87, p = .007" in text  # a threshold becomes the exact p, where no finding doubts the p
+    assert "t(28) = 2.21, p = .036, d = 0.80" in text
+    assert "t(20) = 3.50, p = .002" in text
+
+
+def test_rejecting_all_gives_back_the_manuscript(revised, tmp_path):
+    source, out = revised
+    rejected = _decided(out, tmp_path / "rejected.docx", accept=False)
+    assert _texts(rejected) == _texts(source)
+
+
+def test_comments_on_what_the_revision_does_not_settle(revised):
+    _, out = revised
+    comments = {c.text for c in docx.Document(str(out)).comments}
+    assert len(comments) == 4
+    assert any(c.startswith("Error:") and "t(25)=1.20" in c and "would change the reported p" in c for c in comments)
+    error = next(c for c in comments if c.startswith("Error:") and "F(2, 87)" in c)
+    assert "F(2, 87) = 2.50" in error and ".088 (p recomputed)" in error and "numbers are as reported" in error
+    assert any(c.startswith("Style:") and "would drop \u201cMSE\u201d" in c for c in comments)
+    assert any("different fonts or emphasis" in c for c in comments)
+    for c in comments:  # plain sentences, no raw codes
+        assert not re.search(r"\b[a-z]+-[a-z]+-[a-z]+\b", c.replace("p-value", "")), c
+
+
+def test_revise_needs_a_docx_and_a_new_file(tmp_path, capsys):
+    source = _manuscript(tmp_path / "chapter.docx")
+    md = tmp_path / "chapter.md"
+    md.write_text("t(20)=3.50, p=.002\n")
+    assert main(["audit", str(md), "--revise", str(tmp_path / "x.docx")]) == 2
+    assert main(["audit", str(source), "--revise", str(tmp_path / "x.txt")]) == 2
+    assert main(["audit", str(source), "--revise", str(source)]) == 2  # never over the manuscript
+    assert main(["audit", str(source), "--revise", str(tmp_path / "a.docx"), "--annotate", str(tmp_path / "a.docx")]) == 2
+    assert "--revise" in capsys.readouterr().err
+
+
+def test_a_field_inside_a_statistic_is_left_alone(tmp_path):
+    """A statistic whose characters include a field (here a hyperlink around
+    the p) is not rewritten: the comment says why."""
+    d = docx.Document()
+    p = d.add_paragraph("Scores rose, t(30)=-2.14, ")
+    link = copy.deepcopy(p.runs[0]._r)
+    hyper = etree.SubElement(p._p, f"{W}hyperlink")
+    hyper.append(link)
+    link.find(f"{W}t").text = "p=0.040"
+    p.add_run(".")
+    d.save(str(tmp_path / "f.docx"))
+    assert main(["audit", str(tmp_path / "f.docx"), "--revise", str(tmp_path / "out.docx")]) == 1
+    root = etree.fromstring(zipfile.ZipFile(tmp_path / "out.docx").read("word/document.xml"))
+    assert list(root.iter(f"{W}ins")) == []
+    assert "Scores rose, t(30)=-2.14, p=0.040." in _texts(tmp_path / "out.docx")[0]
+    assert any("field, link or picture" in c.text for c in docx.Document(str(tmp_path / "out.docx")).comments)
