@@ -12,7 +12,7 @@ text can never disagree about the style.
 from __future__ import annotations
 
 import math
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 from typing import Sequence
 
 from ..formulas import hedges_j
@@ -126,7 +126,18 @@ def p_range(rep: Reported) -> tuple[float, float] | None:
 
 
 def _p_range(rep: Reported) -> tuple[float, float] | None:
-    if rep.symbol is None or rep.value is None or rep.op != "=":
+    """A statistic given as a bound ("F < 1", common for small F) allows
+    every p beyond the bound's."""
+    if rep.symbol is None or rep.value is None:
+        return None
+    if rep.op in ("<", "≤", ">", "≥"):
+        if rep.symbol not in ("F", "chi2", "H") or rep.value.value <= 0:
+            return None
+        bound = _p_range(replace(rep, op="=", value=replace(rep.value, decimals=15), p_range=None))
+        if bound is None:
+            return None
+        return (bound[0], 1.0) if rep.op in ("<", "≤") else (0.0, bound[1])
+    if rep.op != "=":
         return None
     need = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1}.get(rep.symbol)
     if need is None or len(rep.df) != need or any(d.value <= 0 for d in rep.df):

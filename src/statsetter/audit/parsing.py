@@ -158,7 +158,7 @@ class _Patterns:
         self.mark = mark
         self.number = re.compile(num)
         self.head = re.compile(
-            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]\n]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
+            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
             rf"\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num}{_EXPONENT}?)"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
@@ -175,7 +175,7 @@ class _Patterns:
         self.coef_b = re.compile(rf"(?<![\w])B\s*+=\s*+(?P<num>{num})")
         self.coef_se = re.compile(rf"(?<![\w])SE\s*+=\s*+(?P<num>{num})")
         self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
-        self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n")
+        self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s))")
         self.operator = re.compile(r"\s*+(?:=|<|>|≤|≥)\s*+")
 
     def to_number(self, text: str, start: int) -> Number | None:

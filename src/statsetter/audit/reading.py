@@ -37,6 +37,7 @@ class Unit:
     part: str = "word/document.xml"
     index: int = 0  # the paragraph's position among the part's w:p elements (a text block: its first line)
     origin: tuple[Trace, ...] = ()  # how text maps back to the file's characters (markers removed); () = as is
+    cell: tuple[int, int, int] | None = None  # (table, row, column), all from 1, for a table cell's paragraph in Word
 
     def source_index(self, i: int) -> int:
         """Where character ``i`` of ``text`` is in the block as written."""
@@ -220,12 +221,13 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         text, spans = _paragraph_text(para)
         if not text.strip():
             continue
+        cell = None
         if tc is None:
             location = f"{label} {body_count}"
         else:
-            t, r, c = cells[tc]
+            cell = t, r, c = cells[tc]
             location = f"table {t}, row {r}, cell {c}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {c}"
-        yield Unit(location, text, spans, part, index)
+        yield Unit(location, text, spans, part, index, cell=cell)
 
 
 def _run_italic(run) -> bool:  # type: ignore[no-untyped-def]

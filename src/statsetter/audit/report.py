@@ -15,15 +15,16 @@ import io
 import json
 from dataclasses import dataclass, replace
 from pathlib import Path
-from typing import Sequence
+from typing import Iterator, Sequence
 
 from ..pvalues import p_from_statistic
 from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
-from .parsing import Reported, coefficient_before, find_statistics, group_sizes
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .parsing import Number, Reported, coefficient_before, find_statistics, group_sizes
+from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
 from .word import restyled
 
@@ -49,6 +50,7 @@ class Entry:
     notes: tuple[str, ...] = ()  # what the audit assumed instead of finding (say, a p adjusted by a procedure the text names)
     revision: StyledText | None = None  # the house-style text for a tracked change (asked for with restyle=True); None: left as typed
     kept: str = ""  # why a statistic with a different house-style text is left as typed
+    checked: str = ""  # what the consistency check recomputed (the df, and the reading of it when the context gave it)
 
     @property
     def codes(self) -> list[str]:
@@ -88,7 +90,8 @@ class Entry:
 
     def row(self) -> dict[str, object]:
         return {"location": self.location, "found": self.found, "severity": self.severity, "codes": self.codes, "message": self.message,
-                "suggestion": self.suggestion, "former_codes": [FORMER_CODES.get(c, c) for c in self.codes], "notes": list(self.notes)}
+                "suggestion": self.suggestion, "former_codes": [FORMER_CODES.get(c, c) for c in self.codes], "notes": list(self.notes),
+                "recomputed": self.checked}
 
 
 def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Finding] = ()) -> str:
@@ -125,6 +128,91 @@ _PROCEDURE = re.compile(
 )
 
 
+@dataclass(frozen=True, slots=True)
+class _Item:
+    unit: Unit
+    rep: Reported  # what the consistency checks see (a table row's p and df included)
+    local: Reported | None  # the statistic as typed in the unit's text, for the style checks; None for a table row's numbers
+    readings: tuple[Reading, ...] = ()  # the df its context allows, when it has none
+    how: str = ""  # where its parts were found, when not in one piece of text
+    context: str = ""  # the text around it that may name a procedure (paragraph; a table's caption, cells and note)
+
+
+_SIZE_TOTAL = re.compile(r"(?<![\w])N\s*=\s*(\d{1,6})(?![\d.,]\d)")
+
+
+def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
+    """The statistics of the units in document order: a paragraph's as the
+    parser finds them, a table's read cell by cell and row by row."""
+    i = 0
+    last_total: int | None = None  # the last "N = …" of the text before: the sample a df may come from
+    while i < len(units):
+        unit = units[i]
+        if unit.cell is None:
+            totals = [int(m.group(1)) for m in _SIZE_TOTAL.finditer(unit.text)]
+            for rep in find_statistics(unit.text, mark):
+                readings: tuple[Reading, ...] = ()
+                if rep.symbol in ("t", "r", "rs") and not rep.df:
+                    sizes = group_sizes(unit.text, rep, mark)
+                    total = totals[0] if totals else last_total
+                    readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, "in the paragraph" if totals else "earlier in the text"))
+                yield _Item(unit, rep, rep, readings, context=unit.text)
+            last_total = totals[-1] if totals else last_total
+            i += 1
+            continue
+        j = i
+        while j < len(units) and units[j].cell is not None and units[j].cell[0] == unit.cell[0] and units[j].part == unit.part:  # type: ignore[index]
+            j += 1
+        body = [u.text for u in units[max(0, i - 2) : i] if u.cell is None and u.part == unit.part]
+        note = units[j].text if j < len(units) and units[j].cell is None and units[j].part == unit.part else ""
+        caption = " ".join(body)
+        cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
+        context = " ".join([caption, note] + [u.text for u in units[i:j]])
+        found, used = table_statistics(cells, caption, mark)
+        taken = {id(t.local) for t in found if t.local is not None}
+        items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context) for t in found]
+        items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in used | taken]
+        yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
+        i = j
+
+
+def _consistency(item: _Item, alpha: float) -> tuple[list[Finding], str]:
+    """Consistency findings and what was recomputed; a statistic without df is
+    recomputed under each df its context allows, and a finding is made only
+    when none fits."""
+    rep = item.rep
+    if rep.df or not item.readings:
+        return consistency(rep, alpha), _recomputed(rep, "")
+    tried: list[tuple[Reported, list[Finding], Reading]] = []
+    for reading in item.readings:
+        candidate = replace(rep, df=tuple(Number(f"{d:g}", d, 0, rep.start, rep.start) for d in reading.df), p_range=None)
+        found = consistency(candidate, alpha)
+        if not _recomputed(candidate, ""):
+            continue
+        if not found:
+            return [], _recomputed(candidate, reading.assumption)
+        tried.append((candidate, found, reading))
+    if not tried:
+        return [], ""
+    candidate, found, _ = tried[0]
+    readings = "; ".join(r.assumption for _, _, r in tried)
+    return ([Finding(f.code, f.message, f"{f.evidence}; no reading of the df fits: {readings}") for f in found],
+            _recomputed(candidate, tried[0][2].assumption))
+
+
+def _recomputed(rep: Reported, assumption: str) -> str:
+    """What the consistency check recomputed, to reproduce a finding ("" when nothing was)."""
+    computed = p_range(rep)
+    if computed is None or rep.p is None or rep.value is None:
+        return ""
+    df = ", ".join(f"{d.value:g}" for d in rep.df)
+    said = f"p recomputed from {rep.symbol}({df}) {rep.op} {rep.value.text}: {computed[0]:.4g} to {computed[1]:.4g}"
+    return said + (f", with {assumption}" if assumption else "")
+
+
+_ONE_SIDED_SAID = re.compile(r"(?i)one[- ]?(?:tailed|sided)|directional")
+
+
 def audit_units(
     units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None,
     suggest_all: bool = False, check_italics: bool = False, restyle: bool = False,
@@ -145,49 +233,61 @@ def audit_units(
 
             where = unit.location if unit.part else f"line {unit.index + unit.text.count(chr(10), 0, long.start())}"
             warnings.warn(f"{where}: a number of {len(long.group()):,} digits is not read as a statistic", stacklevel=2)
-        previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
-        counted, lines, newline = 0, 0, -1  # newlines before position `counted`, and the last of them (one pass per unit)
-        for rep in find_statistics(unit.text, mark):
-            findings = impossible(rep) + consistency(rep, alpha) + style_findings(rep, resolved, alpha, unit.text, unit.italic)
-            if rep.symbol == "t" and rep.effects:
-                findings += effect_from_t(rep, group_sizes(unit.text, rep, mark))
-            if rep.symbol in ("t", "z"):
-                findings += coefficient_ratio(rep, coefficient_before(unit.text, rep, previous_end, mark))
-            if rep.symbol in ("F", "chi2") and rep.effects:
-                findings += effect_from_f_or_chi2(rep)
-            if rep.symbol is not None:
-                previous_end = rep.end
-                italic_seen = italic_seen or bool(unit.italic and any(s <= rep.symbol_start < e for s, e in unit.italic))
-            if grim_items:
-                findings += grim(rep, grim_items)
-            if unit.part:  # a Word paragraph
-                location = f"{unit.location}, characters {rep.start + 1}–{rep.end}"
-            else:  # a text block starting at line unit.index; columns as written in the file
-                if rep.start > counted:
-                    lines += unit.text.count("\n", counted, rep.start)
-                    found = unit.text.rfind("\n", counted, rep.start)
-                    newline = found if found >= 0 else newline
-                    counted = rep.start
-                line = unit.index + lines
-                line_start = unit.source_index(newline) + 1 if newline >= 0 else 0
-                first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else 0  # opening markers included
-                last = unit.source_index(rep.end - 1) + 1
-                location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
-            notes: tuple[str, ...] = ()
-            if any(f.code == "p-does-not-follow" for f in findings):
-                named = _PROCEDURE.search(unit.text)
-                if named is not None:  # the text says its p values are adjusted: a note, not a finding
-                    findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
-                    notes = (f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
-                             f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.",)
-            suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
-            entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, notes))
-            reps.append(rep)
+    current: Unit | None = None
+    for item in _items(units, mark):
+        unit, rep, local = item.unit, item.rep, item.local
+        if unit is not current:
+            current = unit
+            previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
+            counted, lines, newline = 0, 0, -1  # newlines before position `counted`, and the last of them (one pass per unit)
+        consistent, checked = _consistency(item, alpha)
+        findings = impossible(rep) + consistent
+        if local is not None:
+            findings += style_findings(local, resolved, alpha, unit.text, unit.italic)
+            if local.symbol == "t" and local.effects:
+                findings += effect_from_t(local, group_sizes(unit.text, local, mark))
+            if local.symbol in ("t", "z"):
+                findings += coefficient_ratio(local, coefficient_before(unit.text, local, previous_end, mark))
+            if local.symbol is not None:
+                previous_end = local.end
+                italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
+        if rep.symbol in ("F", "chi2") and rep.effects:
+            findings += effect_from_f_or_chi2(rep)
+        if grim_items:
+            findings += grim(rep, grim_items)
+        if unit.part:  # a Word paragraph
+            location = f"{unit.location}, characters {rep.start + 1}–{rep.end}"
+        else:  # a text block starting at line unit.index; columns as written in the file
+            if rep.start > counted:
+                lines += unit.text.count("\n", counted, rep.start)
+                found = unit.text.rfind("\n", counted, rep.start)
+                newline = found if found >= 0 else newline
+                counted = rep.start
+            line = unit.index + lines
+            line_start = unit.source_index(newline) + 1 if newline >= 0 else 0
+            first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else 0  # opening markers included
+            last = unit.source_index(rep.end - 1) + 1
+            location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
+        notes: list[str] = [f"Read from a table: {item.how.removeprefix('read from the table' + chr(39) + 's row: ')}."] if item.how else []
+        if any(f.code == "p-does-not-follow" for f in findings):
+            named = _PROCEDURE.search(item.context)
+            if named is not None:  # the text says its p values are adjusted: a note, not a finding
+                findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
+                notes.append(f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
+                             f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.")
+        if any(f.code == "one-sided" for f in findings):
+            said = _ONE_SIDED_SAID.search(unit.text, max(0, rep.start - 120), min(len(unit.text), rep.end + 40))
+            if said is not None:  # the text says the test was one-sided, and the p fits one
+                findings = [f for f in findings if f.code != "one-sided"]
+                notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")
+        suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
+        entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), checked=checked))
+        reps.append(local)
     if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
         entries = [_without(e, "italics", suggest_all) for e in entries]
-    if restyle:
+    if restyle:  # a table row's bare numbers are never rewritten
         entries = [replace(e, revision=new, kept=why) for e, (new, why) in
-                   ((e, restyled(rep, resolved, alpha, e.findings)) for e, rep in zip(entries, reps))]
+                   ((e, restyled(rep, resolved, alpha, e.findings) if rep is not None else (None, "")) for e, rep in zip(entries, reps))]
     return entries
 
 

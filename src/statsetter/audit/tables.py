@@ -1,0 +1,222 @@
+"""Statistics spread over a table's cells, and the df a statistic's context gives.
+
+Authors put one test in one row: the statistic under a head named *t*, *F*
+or χ², its p under *p*, *P*, *p value* or *Sig.*, its df under *df* (or
+*df(num)* and *df(den)*, or the df of the table's Residuals/Error row), the
+group sizes in the header ("Control (n = 30)") or the caption ("N = 42").
+A statistic typed whole in a cell ("F (1,56) = 3.0") may have its p in a
+cell further along the row. This module reads such rows into the same
+`Reported` statistics the text parser gives, and lists the df readings a
+statistic without df allows (``df_readings``), each with the assumption it
+makes, so that a finding is reported only when no reading fits.
+"""
+
+from __future__ import annotations
+
+import re
+from dataclasses import dataclass, replace
+from typing import Sequence
+
+from .parsing import Number, PValue, Reported, _patterns
+from .reading import Unit
+
+__all__ = ["TableStatistic", "table_statistics", "df_readings", "sizes_in", "caption_sizes", "Reading"]
+
+_FOOTNOTE = re.compile(r"(?<=\S)(?:\s*[*†‡§]+|(?<=value)[a-d]|(?<=values)[a-d])$")
+_ROLES = (
+    (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
+    (re.compile(r"F(?:[- ]?(?:values?|ratio))?"), "F"),
+    (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
+    (re.compile(r"r"), "r"),
+    (re.compile(r"[zZ]"), "z"),
+    (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\))?|P\s*\(2-tailed\))"), "p"),
+    (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
+    (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
+    (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
+)
+_STAT_ROLES = {"t", "F", "chi2", "r", "z"}
+_ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)\s*")
+_BARE = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?:[*†‡§]+|[a-d])?\s*")
+_NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
+_SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
+
+
+def _role(text: str) -> str | None:
+    head = _FOOTNOTE.sub("", text.strip()).strip()
+    for pattern, role in _ROLES:
+        if pattern.fullmatch(head):
+            return role
+    return None
+
+
+def sizes_in(text: str) -> list[int]:
+    """The ``n = …``/``N = …`` numbers in a text, in order."""
+    return [int(m.group(1)) for m in _SIZE.finditer(text)]
+
+
+_PER_GROUP = re.compile(r"(?i)\s*(?:per|in each|each)\b")
+
+
+def caption_sizes(text: str) -> tuple[list[int], int | None]:
+    """Group sizes (``n = 30``; ``n = 21 per group`` is two of 21) and the
+    total (``N = 42``) a caption or paragraph gives."""
+    groups, total = [], None
+    for m in _SIZE.finditer(text):
+        if m.group(0).lstrip()[0] == "N":
+            total = int(m.group(1)) if total is None else max(total, int(m.group(1)))
+        else:
+            groups.append(int(m.group(1)))
+            if _PER_GROUP.match(text, m.end()):
+                groups.append(int(m.group(1)))
+    return groups, total
+
+
+@dataclass(frozen=True, slots=True)
+class Reading:
+    df: tuple[float, ...]
+    assumption: str  # how the df was read: "df = 45 + 45 − 2 (Student's t; the group sizes in the table)"
+
+
+def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str) -> list[Reading]:
+    """The df a t or r without df may have, from group sizes and a total N;
+    each reading says what it assumes."""
+    out: list[Reading] = []
+    if symbol == "t":
+        if len(groups) == 2:
+            a, b = groups
+            out.append(Reading((a + b - 2.0,), f"df = {a} + {b} − 2 = {a + b - 2} (Student's t; the group sizes {where})"))
+        if len(groups) == 1:
+            out.append(Reading((groups[0] - 1.0,), f"df = {groups[0]} − 1 (one-sample or paired t; n {where})"))
+        if total is not None and total > 2:
+            out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (two independent groups; N {where})"))
+            out.append(Reading((total - 1.0,), f"df = N − 1 = {total - 1} (one-sample or paired t; N {where})"))
+    elif symbol in ("r", "rs") and total is not None and total > 2:
+        out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (N {where})"))
+    seen, unique = set(), []
+    for r in out:
+        if r.df not in seen:
+            seen.add(r.df)
+            unique.append(r)
+    return unique
+
+
+@dataclass(frozen=True, slots=True)
+class TableStatistic:
+    unit: Unit  # the cell the statistic is in (its value's cell for a row statistic)
+    rep: Reported  # what the checks see: p and df from sibling cells included
+    local: Reported | None  # the statistic as typed in its cell (for the style checks), None for a row of bare numbers
+    how: str  # where its parts were found
+    readings: tuple[Reading, ...] = ()
+
+
+def _number(text: str, mark: str) -> tuple[str, Number] | None:
+    m = _BARE.fullmatch(text)
+    if m is None:
+        return None
+    num = _patterns(mark).to_number(m.group("num"), m.start("num"))
+    if num is None:
+        return None
+    return (m.group("op") or "=").strip(), num
+
+
+def _p_cell(text: str, mark: str) -> PValue | None:
+    if _NS.fullmatch(text):
+        return PValue("ns", None, 0, len(text), 0, text.strip())
+    found = _number(text, mark)
+    if found is None or not 0 <= found[1].value <= 1:
+        return None
+    op, num = found
+    return PValue(op, num, num.start, num.end, num.start, "")
+
+
+def _error_df(rows, roles: dict[int, str], mark: str) -> float | None:  # type: ignore[no-untyped-def]
+    """The df in the df column of the table's Residuals (Error, Within) row."""
+    column = next((k for k, v in roles.items() if v == "df"), None)
+    for row in rows.values():
+        first = row[min(row)][0].text
+        if column in row and _ERROR_ROW.fullmatch(first):
+            found = _number(row[column][0].text, mark)
+            return found[1].value if found is not None else None
+    return None
+
+
+def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str) -> tuple[list[TableStatistic], set[int]]:
+    """The statistics of one table: ``cells`` are (row, column, unit, the
+    statistics the text parser found in it). Returns the statistics and the
+    ids of parsed statistics that became part of another (a lone p in the
+    cell after a statistic)."""
+    rows: dict[int, dict[int, tuple[Unit, list[Reported]]]] = {}
+    for r, c, unit, reps in cells:
+        rows.setdefault(r, {})[c] = (unit, reps)
+    roles: dict[int, str] = {}
+    groups, total = caption_sizes(caption)
+    found: list[TableStatistic] = []
+    used: set[int] = set()
+    for r in sorted(rows):
+        row = rows[r]
+        header = {c: _role(u.text) for c, (u, _) in row.items()}
+        stat_cells = {c for c, role in header.items() if role is not None}
+        numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
+        heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
+        if stat_cells and not heads_in_row and not any(numbers[c] is not None for c in stat_cells if roles.get(c) in _STAT_ROLES):
+            roles = {c: role for c, role in header.items() if role is not None}  # a header row (also one partway down the table)
+        if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES):
+            sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
+            if sizes:
+                groups = sizes
+            continue
+        # a statistic whose value sits alone under a head named t, F, χ², r or z
+        for c, role in roles.items():
+            if role not in _STAT_ROLES or numbers.get(c) is None or c not in row:
+                continue
+            op, value = numbers[c]  # type: ignore[misc]
+            unit = row[c][0]
+            p_col = next((k for k, v in roles.items() if v == "p"), None)
+            p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
+            df: tuple[Number, ...] = ()
+            how = f"the {role if role != 'chi2' else 'χ²'} column"
+            for name in ("df",):
+                k = next((k for k, v in roles.items() if v == name), None)
+                if k is not None and k in row and numbers.get(k) is not None:
+                    df = (numbers[k][1],)  # type: ignore[index]
+                    how += ", the df column"
+            k1, k2 = (next((k for k, v in roles.items() if v == name), None) for name in ("df1", "df2"))
+            if k1 in row and k2 in row and numbers.get(k1) is not None and numbers.get(k2) is not None:  # type: ignore[operator]
+                df = (numbers[k1][1], numbers[k2][1])  # type: ignore[index]
+                how += ", the df(num) and df(den) columns"
+            error_df = _error_df(rows, roles, mark) if role == "F" and len(df) == 1 else None
+            if error_df is not None:
+                df = (df[0], Number(f"{error_df:g}", error_df, 0, 0, 0))
+                how += ", the error row's df"
+            if p is not None:
+                how += ", the p column"
+            label = {"chi2": "χ²"}.get(role, role)
+            rep = Reported(role, label, value.start, value.start, value.end, df, None, op, value, p)
+            p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
+            rep.text = f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
+            readings = () if df else tuple(df_readings(role, groups, total, "in the table"))
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings))
+        # a statistic typed whole in a cell, its p further along the row
+        ordered = sorted(row)
+        for i, c in enumerate(ordered):
+            unit, reps = row[c]
+            for rep in reps:
+                if rep.symbol is None:
+                    continue
+                merged, how = rep, ""
+                if rep.p is None and rep is reps[-1]:
+                    for k in ordered[i + 1 :]:
+                        other_unit, other = row[k]
+                        if any(o.symbol is not None for o in other):
+                            break
+                        lone = next((o for o in other if o.p is not None), None)
+                        p = lone.p if lone is not None else _p_cell(other_unit.text, mark) if roles.get(k) == "p" else None
+                        if p is not None:
+                            if lone is not None:
+                                used.add(id(lone))
+                            merged = replace(rep, p=p, p_range=None, text=f"{rep.text}, {other_unit.text.strip()}")
+                            how = "the p in a later cell of the row"
+                            break
+                readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table"))
+                found.append(TableStatistic(unit, merged, rep, how, readings))
+    return found, used

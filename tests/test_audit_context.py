@@ -1,0 +1,107 @@
+"""The df and p a statistic's context gives: table rows (a p in a later cell,
+columns named t, df, p, Sig., df(num)/df(den), the error row of an ANOVA
+table, group sizes in the header), the paragraph's N, a one-tailed test
+said in the sentence, "F < 1", and line breaks inside a statistic. The
+expected p values are scipy's (computed here), never typed in."""
+
+from __future__ import annotations
+
+import docx
+from scipy import stats
+
+from statsetter.audit.reading import Unit
+from statsetter.audit.report import audit_file, audit_units
+
+P_CODES = {"p-does-not-follow", "verdict-changes", "one-sided"}
+
+
+def _p_findings(e):
+    return P_CODES & set(e.codes)
+
+
+def _doc(path, paragraphs=(), tables=()):
+    d = docx.Document()
+    for text in paragraphs:
+        d.add_paragraph(text)
+    for caption, rows in tables:
+        d.add_paragraph(caption)
+        t = d.add_table(rows=len(rows), cols=max(len(r) for r in rows))
+        for i, row in enumerate(rows):
+            for j, cell in enumerate(row):
+                t.cell(i, j).text = cell
+        d.add_paragraph("Note. Invented for this test.")
+    d.save(str(path))
+    return path
+
+
+def _p2(t, df):
+    return 2 * stats.t.sf(abs(t), df)
+
+
+def test_a_t_column_with_group_sizes_in_the_header(tmp_path):
+    good = f"{_p2(2.10, 58):.3f}"
+    rows = [("Measure", "Treatment (n = 30)", "Control (n = 30)", "t", "P value"),
+            ("Anxiety", "10.1 ± 2.0", "11.2 ± 2.1", "2.10", good),
+            ("Sleep", "6.1 ± 1.0", "6.0 ± 1.2", "2.10", "0.300")]
+    entries = audit_file(_doc(tmp_path / "a.docx", tables=[("Table 1 Outcomes", rows)]))
+    first, second = [e for e in entries if e.found.startswith("t")]
+    assert first.findings == () and "45" not in first.checked and "30 + 30 − 2 = 58" in first.checked
+    assert "p-does-not-follow" in second.codes
+    assert "no reading of the df fits" in second.message and "58" in second.message
+
+
+def test_a_df_column_and_sig_column(tmp_path):
+    rows = [("Station", "t", "df", "Sig."), ("One", "1.20", "20", f"{_p2(1.20, 20):.3f}"), ("Two", "2.50", "20", "0.500")]
+    entries = [e for e in audit_file(_doc(tmp_path / "b.docx", tables=[("Table 2", rows)])) if e.found.startswith("t")]
+    assert [e.codes for e in entries] == [[], ["p-does-not-follow", "verdict-changes"]]
+    assert entries[0].found.startswith("t(20) = 1.20")
+
+
+def test_an_anova_table_takes_the_error_rows_df(tmp_path):
+    p = stats.f.sf(4.20, 2, 57)
+    rows = [("Source", "SS", "df", "MS", "F", "p"), ("Group", "84.0", "2", "42.0", "4.20", f"{p:.3f}"),
+            ("Residuals", "570.0", "57", "10.0", "", "")]
+    (e,) = [e for e in audit_file(_doc(tmp_path / "c.docx", tables=[("Table 3", rows)])) if e.found.startswith("F")]
+    assert e.found.startswith("F(2, 57) = 4.20") and e.findings == ()
+    assert "error row" in e.notes[0]
+
+
+def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
+    rows = [("Effect", "Test", "Size", "p"),
+            ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),
+            ("Outcome", "Mean", "Mean", "t", "p"),
+            ("Score", "3.1", "3.4", "1.50", "0.900")]
+    entries = audit_file(_doc(tmp_path / "d.docx", tables=[("Table 4 (n = 21 per group)", rows)]))
+    f = next(e for e in entries if e.found.startswith("F"))
+    assert f.found == "F (1,40) = 9.10, p = .25" and "p-does-not-follow" in f.codes
+    assert not any(e.found == "p = .25" for e in entries)  # the p is part of the F, not a statistic of its own
+    t = next(e for e in entries if e.found.startswith("t"))
+    assert "21 + 21 − 2 = 40" in t.checked and "p-does-not-follow" in t.codes
+
+
+def test_the_paragraphs_n_gives_the_df_and_no_reading_is_a_guess():
+    right = f"{_p2(2.40, 66):.3f}"
+    units = [Unit("p1", f"Sixty-eight adults took part (N = 68). Scores rose, t = 2.40, p = {right}."),
+             Unit("p2", "A second comparison, t = 2.40, p = .400.")]
+    first, second = [e for e in audit_units(units) if e.found.startswith("t")]
+    (third,) = audit_units([Unit("p3", "Without any sample size, t = 9.99, p = .50.")])
+    assert not _p_findings(first) and "N − 2 = 66" in first.checked
+    assert "p-does-not-follow" in second.codes and "earlier in the text" in second.message
+    assert not _p_findings(third) and third.checked == ""  # no df anywhere: nothing recomputed, nothing claimed
+
+
+def test_one_tailed_said_in_the_sentence_is_a_note():
+    p1 = stats.t.sf(1.80, 40)
+    units = [Unit("p1", f"As predicted, t(40) = 1.80, p = {p1:.3f}, one-tailed."), Unit("p2", f"Scores rose, t(40) = 1.80, p = {p1:.3f}.")]
+    said, unsaid = audit_units(units)
+    assert not _p_findings(said) and "one-sided" in said.notes[0]
+    assert _p_findings(unsaid) == {"one-sided"}
+
+
+def test_f_below_one_and_line_breaks():
+    units = [Unit("p1", "The interaction was not reliable, F (1, 56) < 1, n.s., nor was the main effect, F (1,\n56) = 0.50, p = .48."),
+             Unit("p2", "Reliable, F(1, 56) < 1, p < .01.")]
+    below, broken, wrong = audit_units(units)
+    assert not _p_findings(below) and below.checked.endswith("to 1")
+    assert broken.found.startswith("F (1,\n56) = 0.50") and not _p_findings(broken)
+    assert "p-does-not-follow" in wrong.codes  # an F below 1 can never give p < .01
