@@ -105,3 +105,15 @@ def test_f_below_one_and_line_breaks():
     assert not _p_findings(below) and below.checked.endswith("to 1")
     assert broken.found.startswith("F (1,\n56) = 0.50") and not _p_findings(broken)
     assert "p-does-not-follow" in wrong.codes  # an F below 1 can never give p < .01
+
+
+def test_a_named_procedure_excuses_only_a_p_larger_than_the_unadjusted():
+    """Every multiple-comparison adjustment makes p larger (Bonferroni: p·m; Holm, Šidák, Tukey, Scheffé alike), so a
+    p below the unadjusted one is wrong whatever the paragraph names (practice; the definitions of the procedures)."""
+    unadjusted = _p2(2.52, 17)
+    larger = min(1.0, 3 * unadjusted)
+    units = [Unit("p1", f"Comparisons were Bonferroni-corrected: t(17) = 2.52, p = {larger:.3f}."),
+             Unit("p2", "Comparisons were Bonferroni-corrected: t(17) = 2.52, p < .001.")]
+    excused, wrong = audit_units(units)
+    assert not _p_findings(excused) and "adjusted" in excused.notes[0]
+    assert "p-does-not-follow" in wrong.codes

@@ -22,7 +22,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
@@ -210,6 +210,14 @@ def _recomputed(rep: Reported, assumption: str) -> str:
     return said + (f", with {assumption}" if assumption else "")
 
 
+def _above_unadjusted(rep: Reported, alpha: float) -> bool:
+    """Whether the reported p could be an adjusted one: every multiple-comparison
+    adjustment (Bonferroni, Holm, Šidák, Tukey, Scheffé, FDR) makes p larger,
+    so a p below the unadjusted one is wrong whatever procedure the text names."""
+    computed, reported = p_range(rep), reported_p_range(rep, alpha)
+    return computed is None or reported is None or reported[1] >= computed[0]
+
+
 _ONE_SIDED_SAID = re.compile(r"(?i)one[- ]?(?:tailed|sided)|directional")
 
 
@@ -269,7 +277,7 @@ def audit_units(
             last = unit.source_index(rep.end - 1) + 1
             location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
         notes: list[str] = [f"Read from a table: {item.how.removeprefix('read from the table' + chr(39) + 's row: ')}."] if item.how else []
-        if any(f.code == "p-does-not-follow" for f in findings):
+        if any(f.code == "p-does-not-follow" for f in findings) and _above_unadjusted(rep, alpha):
             named = _PROCEDURE.search(item.context)
             if named is not None:  # the text says its p values are adjusted: a note, not a finding
                 findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]

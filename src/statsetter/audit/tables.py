@@ -41,8 +41,11 @@ _NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
 _SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
 
 
+_MARKS = str.maketrans("", "", "#¶‖∆ᵃᵇᶜᵈ")  # footnote marks authors put inside a head: "P# value", "P∆ value"
+
+
 def _role(text: str) -> str | None:
-    head = _FOOTNOTE.sub("", text.strip()).strip()
+    head = _FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip()
     for pattern, role in _ROLES:
         if pattern.fullmatch(head):
             return role
