@@ -117,3 +117,25 @@ def test_a_named_procedure_excuses_only_a_p_larger_than_the_unadjusted():
     excused, wrong = audit_units(units)
     assert not _p_findings(excused) and "adjusted" in excused.notes[0]
     assert "p-does-not-follow" in wrong.codes
+
+
+def test_decimal_commas_are_read_as_typed_and_said():
+    """A manuscript typed with decimal commas (as in German, French or Dutch practice) is read as typed: the p is
+    checked, and against APA 7 (a decimal point) each comma is a style finding; the choice is said."""
+    from pathlib import Path
+
+    from statsetter.audit.report import reading_mark
+    from statsetter.style.profile import load_style
+
+    p = _p2(2.14, 38)
+    text = f"Die Gruppen unterschieden sich, t(38) = 2,14; p = {p:.3f}".replace(".", ",") + "; d = 0,68. Ohne Unterschied: t(38) = 0,50; p = 0,02."
+    units = [Unit("p1", text)]
+    mark, said = reading_mark(units, load_style("apa7"))
+    assert mark == "," and "decimal commas" in said
+    first, second = [e for e in audit_units(units) if e.found.startswith("t")]
+    assert not _p_findings(first) and "decimal-mark" in first.codes and "2,14" in first.checked
+    assert "p-does-not-follow" in second.codes
+    comma_style = Path(__file__).parent / "styles" / "comma.toml"
+    assert "decimal-mark" not in audit_units(units, str(comma_style))[0].codes  # the style itself has decimal commas
+    forced = audit_units(units, decimal_mark=".")[0]  # asked to read points: "2,14" is then the number 2 followed by a comma
+    assert "t(38) = 2:" in forced.checked

@@ -173,3 +173,15 @@ def test_a_field_inside_a_statistic_is_left_alone(tmp_path):
     assert list(root.iter(f"{W}ins")) == []
     assert "Scores rose, t(30)=-2.14, p=0.040." in _texts(tmp_path / "out.docx")[0]
     assert any("field, link or picture" in c.text for c in docx.Document(str(tmp_path / "out.docx")).comments)
+
+
+def test_decimal_commas_become_the_styles_points(tmp_path):
+    """A chapter typed with decimal commas, revised into APA 7: the numbers are kept, their marks become points."""
+    d = docx.Document()
+    d.add_paragraph("Die Gruppen unterschieden sich, t(38) = 2,14; p = 0,039; d = 0,68.")
+    d.save(str(tmp_path / "de.docx"))
+    assert main(["audit", str(tmp_path / "de.docx"), "--revise", str(tmp_path / "out.docx")]) == 1
+    accepted = _decided(tmp_path / "out.docx", tmp_path / "accepted.docx", accept=True)
+    text = _texts(accepted)[0].replace("\u00a0", " ")
+    assert "t(38) = 2.14, p = .039, d = 0.68" in text
+    assert [e.codes for e in audit_file(accepted)] == [[]]

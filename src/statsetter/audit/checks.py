@@ -35,6 +35,7 @@ CODES: dict[str, tuple[str, str]] = {
     "ci-excludes-estimate": ("a CI that does not contain its estimate", "Confidence intervals (APA 7 §6.44)"),
     "df-not-integer": ("non-integer df where the test needs whole numbers (χ², r, H)", "Reporting by test (practice; Welch t and F keep decimals)"),
     "leading-zero": ("a leading zero on a quantity that cannot exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
+    "decimal-mark": ("decimals typed with another mark than the style's (a comma for a point, or the reverse)", "Numbers: decimal mark (the style's numbers section; APA 7 uses a point)"),
     "missing-leading-zero": ("no leading zero on a quantity that can exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
     "decimals": ("decimals other than the style's", "Numbers: decimals (APA 7 §6.36)"),
     "p-threshold": ("p given as a threshold instead of exactly", "Numbers: exact p (APA 7 §6.36)"),
@@ -68,7 +69,7 @@ SEVERITY: dict[str, str] = {
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
     "one-sided": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
     "p-zero": "warning",
-    "leading-zero": "style", "missing-leading-zero": "style", "decimals": "style", "p-threshold": "style",
+    "leading-zero": "style", "missing-leading-zero": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
 }
 
@@ -255,10 +256,18 @@ def _numbers_with_quantity(rep: Reported) -> list[tuple[Number, str]]:
     return out
 
 
-def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic: Sequence[tuple[int, int]] | None) -> list[Finding]:
+def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic: Sequence[tuple[int, int]] | None,
+                   read_mark: str | None = None) -> list[Finding]:
+    """Style findings; ``read_mark`` is the decimal mark the text was read with
+    (a number typed with another mark than the style's is a finding)."""
     num = numbers_for(style)
     mark = style.decimal_mark
     out: list[Finding] = []
+    if read_mark is not None and read_mark != mark:
+        other = [n.text for n, _ in _numbers_with_quantity(rep) if n.decimals and read_mark in n.digits]
+        if other:
+            out.append(Finding("decimal-mark", f"Write decimals with the style's decimal mark {mark!r}.", ", ".join(other)))
+        mark = read_mark  # the leading-zero checks below look at the number as typed
     zero, no_zero, minus = [], [], []
     for n, q in _numbers_with_quantity(rep):
         digits = n.digits
@@ -309,7 +318,8 @@ def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> li
     if p is not None and p.op == "=" and p.number is not None and 0 < p.number.value <= 1:
         # in style when some p the printed one stands for prints the same way
         v, h = p.number.value, p.number.half_unit * 0.999
-        shown = p.number.digits.removeprefix("0")  # a leading zero is its own finding
+        shown = p.number.digits.replace(",", num.style.decimal_mark).replace(".", num.style.decimal_mark).removeprefix("0")
+        # (a leading zero and a decimal mark other than the style's are findings of their own)
         fewer = p.number.decimals if accept <= p.number.decimals < num.decimals_for("p") else None  # APA 7 §6.36: two or three decimals
         if not any(num.p(c, alpha, held=fewer)[1].removeprefix("0") == shown
                    for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1):

@@ -17,9 +17,10 @@ from __future__ import annotations
 import bisect
 import re
 from dataclasses import dataclass, field
+from typing import Iterable
 from decimal import Decimal, InvalidOperation
 
-__all__ = ["Number", "PValue", "Interval", "Effect", "Reported", "find_statistics", "symbol_of"]
+__all__ = ["Number", "PValue", "Interval", "Effect", "Reported", "find_statistics", "symbol_of", "decimal_mark_of"]
 
 _MINUS = "-−–‐"  # hyphen-minus, minus, en dash, hyphen: all read as minus
 
@@ -256,6 +257,25 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
             return (), n
         dfs.append(number)
     return tuple(dfs), n
+
+
+# a number after "=", "<" or ">" whose decimals can only be decimals: "p = 0,03", "t = 2,14", "p < ,05" (a comma before
+# exactly three digits may be a thousands separator, "N = 1,200", and is no evidence either way)
+_COMMA_DECIMAL = re.compile(r"[=<>]\s*[-−]?(?:0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)")
+_POINT_DECIMAL = re.compile(r"[=<>]\s*[-−]?\d*\.\d+(?!\d|,\d)")
+
+
+def decimal_mark_of(texts: "Iterable[str]") -> tuple[str, int, int] | None:
+    """The decimal mark a manuscript's statistics are typed with, from the
+    numbers after =, < and > that only a decimal mark explains: (mark,
+    comma-typed count, point-typed count), or None when they do not say."""
+    commas = points = 0
+    for text in texts:
+        commas += len(_COMMA_DECIMAL.findall(text))
+        points += len(_POINT_DECIMAL.findall(text))
+    if commas == points:
+        return None
+    return ("," if commas > points else "."), commas, points
 
 
 def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:

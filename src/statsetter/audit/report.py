@@ -23,7 +23,7 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
-from .parsing import Number, Reported, coefficient_before, find_statistics, group_sizes
+from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
 from .word import restyled
@@ -210,6 +210,23 @@ def _recomputed(rep: Reported, assumption: str) -> str:
     return said + (f", with {assumption}" if assumption else "")
 
 
+def reading_mark(units: Sequence[Unit], style: Style, requested: str = "auto") -> tuple[str, str]:
+    """The decimal mark to read the manuscript with, and why (said to the user)."""
+    if requested in (".", ","):
+        return requested, f"numbers read with the decimal mark {requested!r} (as asked)"
+    if requested != "auto":
+        from ..errors import InputError
+
+        raise InputError(f"--decimal-mark: {requested!r} is not '.', ',' or 'auto'")
+    found = decimal_mark_of(u.text for u in units)
+    if found is None or found[0] == style.decimal_mark:
+        return style.decimal_mark, ""
+    mark, commas, points = found
+    kind = "commas" if mark == "," else "points"
+    return mark, (f"numbers read with decimal {kind}: the manuscript types {max(commas, points)} numbers with a decimal {kind[:-1]} "
+                  f"and {min(commas, points)} the other way (--decimal-mark to choose)")
+
+
 def _above_unadjusted(rep: Reported, alpha: float) -> bool:
     """Whether the reported p could be an adjusted one: every multiple-comparison
     adjustment (Bonferroni, Holm, Šidák, Tukey, Scheffé, FDR) makes p larger,
@@ -223,15 +240,18 @@ _ONE_SIDED_SAID = re.compile(r"(?i)one[- ]?(?:tailed|sided)|directional")
 
 def audit_units(
     units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None,
-    suggest_all: bool = False, check_italics: bool = False, restyle: bool = False,
+    suggest_all: bool = False, check_italics: bool = False, restyle: bool = False, decimal_mark: str = "auto",
 ) -> list[Entry]:
     """Every statistic of the units with its findings; a suggestion for each
     statistic with findings (for every statistic with ``suggest_all``); with
     ``restyle``, the house-style text a tracked change can put in its place.
     Italics are judged only where the manuscript italicises some statistical
-    symbols (then the others are inconsistent) or when ``check_italics``."""
+    symbols (then the others are inconsistent) or when ``check_italics``.
+    Numbers are read with ``decimal_mark`` ("." or ","); "auto" reads them
+    as the manuscript types them (`reading_mark`), and a mark other than the
+    style's is then a style finding."""
     resolved = load_style(style)
-    mark = resolved.decimal_mark
+    mark = reading_mark(units, resolved, decimal_mark)[0]
     entries, reps = [], []
     italic_seen = False  # does the manuscript italicise any statistical symbol?
     for unit in units:
@@ -251,7 +271,7 @@ def audit_units(
         consistent, checked = _consistency(item, alpha)
         findings = impossible(rep) + consistent
         if local is not None:
-            findings += style_findings(local, resolved, alpha, unit.text, unit.italic)
+            findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark)
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
             if local.symbol in ("t", "z"):
@@ -295,7 +315,7 @@ def audit_units(
         entries = [_without(e, "italics", suggest_all) for e in entries]
     if restyle:  # a table row's bare numbers are never rewritten
         entries = [replace(e, revision=new, kept=why) for e, (new, why) in
-                   ((e, restyled(rep, resolved, alpha, e.findings) if rep is not None else (None, "")) for e, rep in zip(entries, reps))]
+                   ((e, restyled(rep, resolved, alpha, e.findings, mark) if rep is not None else (None, "")) for e, rep in zip(entries, reps))]
     return entries
 
 
@@ -308,11 +328,11 @@ def _without(e: Entry, code: str, suggest_all: bool) -> Entry:
 
 def audit_file(
     path: "str | Path", style: "Style | str | None" = None, *, alpha: float = 0.05, encoding: str = "utf-8", grim_items: int | None = None,
-    suggest_all: bool = False, check_italics: bool = False, restyle: bool = False,
+    suggest_all: bool = False, check_italics: bool = False, restyle: bool = False, decimal_mark: str = "auto",
 ) -> list[Entry]:
     """Every statistic in the manuscript at ``path`` (never modified)."""
     return audit_units(read_units(path, encoding), style, alpha=alpha, grim_items=grim_items, suggest_all=suggest_all, check_italics=check_italics,
-                       restyle=restyle)
+                       restyle=restyle, decimal_mark=decimal_mark)
 
 
 def as_json(entries: Sequence[Entry]) -> str:

@@ -45,7 +45,7 @@ _P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
 # -- the restyled text of one statistic ---------------------------------------------
 
 
-def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding]) -> tuple[StyledText | None, str]:
+def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding], read_mark: str | None = None) -> tuple[StyledText | None, str]:
     """The statistic in the house style for a revision, or None and why not.
 
     The author's numbers are kept (rounded only where the style rounds); a
@@ -66,7 +66,7 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     if lost:
         return None, f"the restyled text would drop \u201c{lost}\u201d"
     doubted = any(f.code in _P_DOUBTS for f in findings)
-    why = _numbers_kept(rep, old, new, style.decimal_mark, doubted)
+    why = _numbers_kept(rep, old, new, read_mark or style.decimal_mark, doubted, style.decimal_mark)
     return (None, why) if why else (new, "")
 
 
@@ -89,7 +89,7 @@ def _value(token: str, mark: str) -> tuple[float, int]:
 _SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789", "⁰¹²³⁴⁵⁶⁷⁸⁹\u2009\u202f")
 
 
-def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: bool) -> str:
+def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: bool, new_mark: str) -> str:
     """"" when ``new`` has the numbers of ``old`` to their printed precision
     (the 2 of a symbol such as η2 aside), else why not."""
     if any(n is not None and re.search(r"[eE×⁻^]", n.text) for n in (rep.value, rep.p.number if rep.p else None)):
@@ -107,14 +107,14 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     if new_p is not None:
         new_text = new_text[: new_p.start(2)] + " " * len(new_p.group(2)) + new_text[new_p.end(2) :]
     olds = sorted(_value(t, mark) for t in _DIGITS.findall(old_text))
-    news = sorted(_value(t, mark) for t in _DIGITS.findall(new_text))
+    news = sorted(_value(t, new_mark) for t in _DIGITS.findall(new_text))
     if len(olds) != len(news) or any(abs(a - b) > 0.5 * 10.0**-da + 0.5 * 10.0**-db + 1e-12 for (a, da), (b, db) in zip(olds, news)):
         return "the restyled text would change a number"
     if old_p is None:
         return "" if new_p is None or (rep.p is not None and rep.p.op == "ns") else "the restyled text would add a p value"
     if new_p is None:
         return "the restyled text would drop the p value"
-    value, places = _value(new_p.group(2), mark)
+    value, places = _value(new_p.group(2), new_mark)
     same = new_p.group(1) == rep.p.op and abs(value - old_p.value) <= old_p.half_unit + 0.5 * 10.0**-places + 1e-12  # type: ignore[union-attr]
     exactable = rep.p.op != "=" or old_p.value < 0.001  # type: ignore[union-attr]
     if not same and (doubted or not exactable):

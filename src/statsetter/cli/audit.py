@@ -36,13 +36,17 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
     a.add_argument("--revise", metavar="OUT.docx",
                    help="write a copy of a .docx with each statistic restyled as a tracked change (author statsetter) and a comment "
                    "on each finding the restyling does not settle")
+    a.add_argument("--decimal-mark", choices=("auto", ".", ","), default="auto",
+                   help="the decimal mark the manuscript is typed with (auto: as its numbers show; a mark other than the style's is a finding)")
     a.add_argument("--encoding", default="utf-8", help="text encoding of a .md/.txt/.tex file (utf-8)")
     a.add_argument("--grim-items", type=int, metavar="K", help="run the GRIM test on means, for integer scores summed over K items")
     a.set_defaults(handler=run)
 
 
 def run(ns: argparse.Namespace) -> int:
-    from ..audit.report import as_csv, as_json, audit_file, by_severity, print_table
+    from ..audit.reading import read_units
+    from ..audit.report import as_csv, as_json, audit_units, by_severity, print_table, reading_mark
+    from ..style.profile import load_style
     from ..audit.word import annotate, revise
 
     if not 0 < ns.alpha < 1:
@@ -58,8 +62,13 @@ def run(ns: argparse.Namespace) -> int:
         raise InputError("--out: choose --json or --csv")
     if ns.grim_items is not None and ns.grim_items < 1:
         raise InputError("--grim-items: give a whole number of 1 or more")
-    entries = audit_file(ns.manuscript, ns.style, alpha=ns.alpha, encoding=ns.encoding, grim_items=ns.grim_items, suggest_all=ns.suggest_all,
-                         check_italics=ns.check_italics, restyle=bool(ns.revise))
+    units = read_units(ns.manuscript, ns.encoding)
+    style = load_style(ns.style)
+    said = reading_mark(units, style, ns.decimal_mark)[1]
+    if said:  # an automatic choice is shown, never silent
+        sys.stderr.write(f"statsetter audit: {said}\n")
+    entries = audit_units(units, style, alpha=ns.alpha, grim_items=ns.grim_items, suggest_all=ns.suggest_all,
+                          check_italics=ns.check_italics, restyle=bool(ns.revise), decimal_mark=ns.decimal_mark)
     every = entries
     entries = by_severity([e.at_least(ns.min_severity) for e in entries])
     if ns.json or ns.csv:
