@@ -60,6 +60,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
         return None, "the statistic cannot be restyled"
     plain = new.plain()
     old = rep.text
+    if not plain.strip():  # a lone "n.s." or the like: nothing the style writes in its place
+        return None, ""
     if plain == old and not any(f.code == "italics" for f in findings):
         return None, ""
     lost = _lost_word(rep, old, plain)
@@ -110,6 +112,8 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     news = sorted(_value(t, new_mark) for t in _DIGITS.findall(new_text))
     if len(olds) != len(news) or any(abs(a - b) > 0.5 * 10.0**-da + 0.5 * 10.0**-db + 1e-12 for (a, da), (b, db) in zip(olds, news)):
         return "the restyled text would change a number"
+    if any(a != 0 and b == 0 for (a, _), (b, _) in zip(olds, news)):
+        return "the style's decimals would round a number to zero"
     if old_p is None:
         return "" if new_p is None or (rep.p is not None and rep.p.op == "ns") else "the restyled text would add a p value"
     if new_p is None:
