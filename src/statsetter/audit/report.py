@@ -315,7 +315,8 @@ def audit_units(
         entries = [_without(e, "italics", suggest_all) for e in entries]
     if restyle:  # a table row's bare numbers are never rewritten
         entries = [replace(e, revision=new, kept=why) for e, (new, why) in
-                   ((e, restyled(rep, resolved, alpha, e.findings, mark) if rep is not None else (None, "")) for e, rep in zip(entries, reps))]
+                   ((e, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic) if rep is not None else (None, ""))
+                    for e, rep in zip(entries, reps))]
     return entries
 
 

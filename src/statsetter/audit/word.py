@@ -45,7 +45,8 @@ _P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
 # -- the restyled text of one statistic ---------------------------------------------
 
 
-def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding], read_mark: str | None = None) -> tuple[StyledText | None, str]:
+def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding], read_mark: str | None = None,
+             italic: Sequence[tuple[int, int]] | None = None) -> tuple[StyledText | None, str]:
     """The statistic in the house style for a revision, or None and why not.
 
     The author's numbers are kept (rounded only where the style rounds); a
@@ -62,7 +63,7 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     old = rep.text
     if not plain.strip():  # a lone "n.s." or the like: nothing the style writes in its place
         return None, ""
-    if plain == old and not any(f.code == "italics" for f in findings):
+    if plain == old and not any(f.code == "italics" for f in findings) and not _italics_differ(rep, new, italic):
         return None, ""
     lost = _lost_word(rep, old, plain)
     if lost:
@@ -70,6 +71,18 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     doubted = any(f.code in _P_DOUBTS for f in findings)
     why = _numbers_kept(rep, old, new, read_mark or style.decimal_mark, doubted, style.decimal_mark)
     return (None, why) if why else (new, "")
+
+
+def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, int]] | None) -> bool:
+    """Whether the text's italics (Word's runs; None: the format does not say)
+    differ from the restyled text's at the statistic's symbols."""
+    if italic is None:
+        return False
+    symbols = [(rep.symbol_start, rep.symbol_text)] if rep.symbol is not None else []
+    if rep.p is not None and rep.p.symbol_text:
+        symbols.append((rep.p.symbol_start, rep.p.symbol_text))
+    styled = {new.text[a:b] for a, b in new.italic_ranges()}
+    return any(any(s <= at < e for s, e in italic) != (text in styled) for at, text in symbols)
 
 
 def _lost_word(rep: Reported, old: str, new: str) -> str:
