@@ -139,3 +139,25 @@ def test_decimal_commas_are_read_as_typed_and_said():
     assert "decimal-mark" not in audit_units(units, str(comma_style))[0].codes  # the style itself has decimal commas
     forced = audit_units(units, decimal_mark=".")[0]  # asked to read points: "2,14" is then the number 2 followed by a comma
     assert "t(38) = 2:" in forced.checked
+
+
+def test_a_procedure_named_in_the_tables_note_excuses_its_p(tmp_path):
+    """Post hoc rows whose note says the p values are Tukey-adjusted: an adjusted p (larger than the unadjusted one)
+    is a note, not a finding; the same table without the note gives a finding."""
+    unadjusted = _p2(2.60, 40)
+    rows = [("Pair", "t", "df", "p"), ("A vs B", "2.60", "40", f"{min(1, 2.4 * unadjusted):.3f}")]
+
+    def entry(note):
+        d = docx.Document()
+        d.add_paragraph("Table 5 Pairwise comparisons")
+        t = d.add_table(rows=2, cols=4)
+        for i, row in enumerate(rows):
+            for j, cell in enumerate(row):
+                t.cell(i, j).text = cell
+        d.add_paragraph(note)
+        d.save(str(tmp_path / "n.docx"))
+        return next(e for e in audit_file(tmp_path / "n.docx") if e.found.startswith("t"))
+
+    excused = entry("Note. p values are adjusted by Tukey's HSD.")
+    assert not _p_findings(excused) and any("Tukey" in n for n in excused.notes)
+    assert "p-does-not-follow" in entry("Note. Two-sided tests.").codes

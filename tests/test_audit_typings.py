@@ -47,6 +47,12 @@ CASES = [
     (f"F(2,\u200961)\u00a0=\u00a03.87, p\u00a0=\u00a0{p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
     (f"t(44) =\n2.61, p = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
     (f"t(1,044) = 2.61, p = {p3(stats.t.sf(2.61, 1044) * 2)}", "t", (1044,), None, 2.61, "=", float(p3(stats.t.sf(2.61, 1044) * 2))),
+    (f"t[44] = 2.61, p = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
+    (f"F = 3.87, df = 2, 61, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    (f"F = 3.87, df = 2/61, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    (f"t (df = 44) = 2.61, p = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
+    (f"chi square (3, N = 250) = 7.42, p = {p3(C)}", "chi2", (3,), 250, 7.42, "=", float(p3(C))),
+    (f"Z = 2.61, p = {p3(stats.norm.sf(2.61) * 2)}", "z", (), None, 2.61, "=", float(p3(stats.norm.sf(2.61) * 2))),
 ]
 
 
@@ -74,3 +80,19 @@ def test_a_wrong_p_in_such_a_typing_is_found():
     assert "p-does-not-follow" in codes("t=2.61, df 44, p=.20")
     assert "p-does-not-follow" in codes("t(57) = 4.62, p = 2.1 × 10⁻²")
     assert "p-does-not-follow" in codes("F2,61 = 3.87, p = .20")
+
+
+def test_a_correlation_with_its_n_beside_it_is_checked_with_n_minus_2():
+    r = 0.31
+    t = r * (58 / (1 - r * r)) ** 0.5
+    p = stats.t.sf(t, 58) * 2  # r with n = 60: df = 58 (the t form of Pearson's r)
+    (good,) = audit_units([Unit("a", f"r = .31, n = 60, p = {p3(p)}")])
+    (bad,) = audit_units([Unit("b", "r = .31, n = 60, p = .200")])
+    assert not set(good.codes) & {"p-does-not-follow"} and "N − 2 = 58" in good.checked and "r(58)" in good.checked
+    assert "p-does-not-follow" in bad.codes
+
+
+def test_spelled_out_greek_effect_sizes():
+    names = {r.effects[0].name for text in ("partial eta squared = .12", "omega squared = .05", "Cramer's V = .21", "eta squared = .08")
+             for r in find_statistics(text)}
+    assert names == {"eta2_p", "omega2", "V", "eta2"}

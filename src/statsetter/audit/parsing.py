@@ -111,6 +111,8 @@ def symbol_of(text: str) -> str | None:
         return "tau_b"
     if t in ("ΔF", "∆F"):  # an F test of a change (ΔR²): read as F
         return "F"
+    if t == "Z":  # "Z = 2.50", as SPSS prints the normal approximation of rank tests
+        return "z"
     return t if t in ("t", "F", "r", "z", "U", "H", "W", "T") else None
 
 
@@ -127,7 +129,7 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--"
 
 _SYMBOL = (
     r"(?:Δ\s?F|χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
-    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzUHWT])"
+    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzZUHWT])"
 )
 _EFFECT_NAMES = [
     (r"partial\s+(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2_p"),
@@ -172,7 +174,8 @@ class _Patterns:
         self.effect = re.compile(
             r"(?P<name>" + "|".join(f"(?:{p})" for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
         )
-        self.df = re.compile(rf"(?<![\w])df\s*+[=:]?\s*+(?P<num>{num})(?![\d.,]\d)")
+        sep2 = r"[;/]" if mark == "," else r"[,;/]"
+        self.df = re.compile(rf"(?<![\w])df\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)")
         self.coef_b = re.compile(rf"(?<![\w])B\s*+=\s*+(?P<num>{num})")
         self.coef_se = re.compile(rf"(?<![\w])SE\s*+=\s*+(?P<num>{num})")
         self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
@@ -477,8 +480,9 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
         elif kind == "df" and not rep.df:
             number = pat.to_number(m.group("num"), m.start("num"))
+            second = pat.to_number(m.group("num2"), m.start("num2")) if m.group("num2") and rep.symbol == "F" else None
             if number is not None:
-                rep.df = (number,)
+                rep.df = (number, second) if second is not None else (number,)  # "F = 4.51, df = 2, 97": both df of an F
         elif kind == "n" and rep.n is None:
             rep.n = pat.to_number(m.group("num"), m.start("num"))
         else:

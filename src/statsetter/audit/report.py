@@ -154,8 +154,9 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                 readings: tuple[Reading, ...] = ()
                 if rep.symbol in ("t", "r", "rs") and not rep.df:
                     sizes = group_sizes(unit.text, rep, mark)
-                    total = totals[0] if totals else last_total
-                    readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, "in the paragraph" if totals else "earlier in the text"))
+                    total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
+                    where = "beside it" if rep.n is not None else "in the paragraph" if totals else "earlier in the text"
+                    readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where))
                 yield _Item(unit, rep, rep, readings, context=unit.text)
             last_total = totals[-1] if totals else last_total
             i += 1
@@ -205,8 +206,8 @@ def _recomputed(rep: Reported, assumption: str) -> str:
     computed = p_range(rep)
     if computed is None or rep.p is None or rep.value is None:
         return ""
-    df = ", ".join(f"{d.value:g}" for d in rep.df)
-    said = f"p recomputed from {rep.symbol}({df}) {rep.op} {rep.value.text}: {computed[0]:.4g} to {computed[1]:.4g}"
+    df = f"({', '.join(f'{d.value:g}' for d in rep.df)})" if rep.df else ""
+    said = f"p recomputed from {rep.symbol}{df} {rep.op} {rep.value.text}: {computed[0]:.4g} to {computed[1]:.4g}"
     return said + (f", with {assumption}" if assumption else "")
 
 
