@@ -155,6 +155,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     groups, total = caption_sizes(caption)
     found: list[TableStatistic] = []
     used: set[int] = set()
+    error_dfs: dict[int, float | None] = {}
     for r in sorted(rows):
         row = rows[r]
         header = {c: _role(u.text) for c, (u, _) in row.items()}
@@ -187,7 +188,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if k1 in row and k2 in row and numbers.get(k1) is not None and numbers.get(k2) is not None:  # type: ignore[operator]
                 df = (numbers[k1][1], numbers[k2][1])  # type: ignore[index]
                 how += ", the df(num) and df(den) columns"
-            error_df = _error_df(rows, roles, mark) if role == "F" and len(df) == 1 else None
+            if role == "F" and len(df) == 1 and id(roles) not in error_dfs:  # once per header, not once per row
+                error_dfs[id(roles)] = _error_df(rows, roles, mark)
+            error_df = error_dfs.get(id(roles)) if role == "F" and len(df) == 1 else None
             if error_df is not None:
                 df = (df[0], Number(f"{error_df:g}", error_df, 0, 0, 0))
                 how += ", the error row's df"
