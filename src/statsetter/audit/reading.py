@@ -230,14 +230,13 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         yield Unit(location, text, spans, part, index, cell=cell)
 
 
+_RPR_I = f"{_W}rPr/{_W}i"
+_VAL = f"{_W}val"
+
+
 def _run_italic(run) -> bool:  # type: ignore[no-untyped-def]
-    rpr = run.find(f"{_W}rPr")
-    if rpr is None:
-        return False
-    i = rpr.find(f"{_W}i")
-    if i is None:
-        return False
-    return i.get(f"{_W}val", "true") not in ("0", "false", "off")
+    i = run.find(_RPR_I)
+    return i is not None and i.get(_VAL, "true") not in ("0", "false", "off")
 
 
 def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]

@@ -138,6 +138,7 @@ class _Item:
     context: str = ""  # the text around it that may name a procedure (paragraph; a table's caption, cells and note)
 
 
+_DIGIT = re.compile(r"\d")
 _SIZE_TOTAL = re.compile(r"(?<![\w])N\s*=\s*(\d{1,6})(?![\d.,]\d)")
 
 
@@ -149,6 +150,9 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
     while i < len(units):
         unit = units[i]
         if unit.cell is None:
+            if _DIGIT.search(unit.text) is None and "n.s" not in unit.text and "ns" not in unit.text:  # no statistic without a digit
+                i += 1
+                continue
             totals = [int(m.group(1)) for m in _SIZE_TOTAL.finditer(unit.text)]
             for rep in find_statistics(unit.text, mark):
                 readings: tuple[Reading, ...] = ()
