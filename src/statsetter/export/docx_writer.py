@@ -64,6 +64,8 @@ def style_run(run: "Run", styles: frozenset[str]) -> None:
 
 
 def _run_xml(text: StyledText) -> str:
+    if not text.spans:  # plain text, the common case in a table's body: one run
+        return f'<w:r><w:t xml:space="preserve">{_escape(xml_safe(text.text))}</w:t></w:r>' if text.text else ""
     out = []
     for chunk, styles in text.segments():
         props = ""
@@ -82,6 +84,7 @@ _RULE_XML = '<w:{0} w:val="single" w:sz="8" w:space="0" w:color="000000"/>'
 _NIL_XML = '<w:{0} w:val="nil"/>'
 
 
+@functools.lru_cache(maxsize=None)
 def _borders(top: bool, bottom: bool) -> str:
     return (
         "<w:tcBorders>"
@@ -146,9 +149,12 @@ def _column_widths(table: TableModel, text_width: int) -> list[int]:
     ncols = len(table.columns) + 1
     longest = [0] * ncols  # the longest word
     natural = [0] * ncols  # the longest text, unwrapped
-    stub_rows = [("\u2003" * r.indent) + r.stub.plain() for r in table.rows]
-    for j, texts in enumerate([[table.stub_head.plain(), *stub_rows]] + [[c.head.plain()] + [r.cells[k].plain() for r in table.rows if k < len(r.cells)]
-                                                                          for k, c in enumerate(table.columns)]):
+    def plain(t: StyledText) -> str:
+        return t.plain() if t.spans else t.text.replace("\u00a0", " ")
+
+    stub_rows = [("\u2003" * r.indent) + plain(r.stub) for r in table.rows]
+    for j, texts in enumerate([[plain(table.stub_head), *stub_rows]] + [[plain(c.head)] + [plain(r.cells[k]) for r in table.rows if k < len(r.cells)]
+                                                                         for k, c in enumerate(table.columns)]):
         for i, text in enumerate(texts):
             word = _longest_word(text)
             lead = _chars(text) - _chars(text.lstrip("\u2003")) if j == 0 and text.startswith("\u2003") else 0
@@ -181,18 +187,29 @@ def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int =
     grid = f'<w:gridSpan w:val="{span}"/>' if span > 1 else ""
     if width:
         grid = f'<w:tcW w:w="{width}" w:type="dxa"/>' + grid
+    # every row keeps with the next, the last with the note: a table and its note are not parted by a page break
+    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr><w:keepNext/>{_ppr(align, decimal_at, hang, line)}</w:pPr>{_run_xml(text)}</w:p></w:tc>"
+
+
+@functools.lru_cache(maxsize=1024)
+def _ppr(align: str, decimal_at: int, hang: bool, line: int) -> str:
+    """A cell paragraph's properties (few distinct ones per table, so built once each)."""
     spacing = f'<w:spacing w:before="0" w:after="0" w:line="{line}" w:lineRule="auto"/>'
     indent = f'<w:ind w:left="{_HANG}" w:hanging="{_HANG}"/>' if hang else '<w:ind w:left="0" w:firstLine="0"/>'
     if align == "decimal" and decimal_at:
         # a decimal tab stop: in a table cell Word and LibreOffice align the text on it with no tab character
         # (a leading tab would jump past it); APA 7 §7.13 allows decimal alignment (memory)
-        ppr = _DECIMAL_TAB.format(pos=decimal_at) + spacing + indent + '<w:jc w:val="left"/>'
-        runs = _run_xml(text)
-    else:
-        ppr = spacing + indent + f'<w:jc w:val="{_JC.get(align, "center")}"/>'
-        runs = _run_xml(text)
-    # every row keeps with the next, the last with the note: a table and its note are not parted by a page break
-    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr><w:keepNext/>{ppr}</w:pPr>{runs}</w:p></w:tc>"
+        return _DECIMAL_TAB.format(pos=decimal_at) + spacing + indent + '<w:jc w:val="left"/>'
+    return spacing + indent + f'<w:jc w:val="{_JC.get(align, "center")}"/>'
+
+
+@functools.lru_cache(maxsize=1 << 16)
+def _split_plain(text: str, mark: str) -> tuple[str, str]:
+    """Plain text cut before its decimal mark (as ``split_decimal`` cuts a StyledText)."""
+    for i, ch in enumerate(text):
+        if ch == mark and i + 1 < len(text) and text[i + 1].isdigit():
+            return text[:i], text[i:]
+    return text, ""
 
 
 def _decimal_tabs(table: TableModel, widths: list[int], mark: str) -> list[int]:
@@ -207,8 +224,13 @@ def _decimal_tabs(table: TableModel, widths: list[int], mark: str) -> list[int]:
         left = right = 0
         for row in table.rows:
             if row.cells and not blank_or_dash(row.cells[j]):
-                a, b = split_decimal(row.cells[j], mark)
-                left, right = max(left, _chars(a.plain())), max(right, _chars(b.plain()))
+                cell = row.cells[j]
+                if cell.spans:  # superscripts and the like: measured as printed
+                    a, b = split_decimal(cell, mark)
+                    a_text, b_text = a.plain(), b.plain()
+                else:
+                    a_text, b_text = _split_plain(cell.text, mark)
+                left, right = max(left, _chars(a_text)), max(right, _chars(b_text))
         area = widths[j + 1] - 2 * _MARGIN
         tabs.append(max(left, (area - left - right) // 2 + left))
     return tabs
@@ -268,36 +290,40 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     return "".join(parts)
 
 
-_SPLICE_ABOVE = 300  # rows; larger tables are spliced into the serialised body
+_PLACEHOLDER = "statsetter-table"
+_PLACEHOLDER_RE = re.compile(rb"<\?statsetter-table (\d+)\?>")
 
 
-def _splice(document: "Document", anchor: "Paragraph", table_xml: str) -> "Paragraph":
-    """Insert a large table by re-parsing the document body with the table's
-    XML in place: lxml moves big subtrees between documents in quadratic time,
-    a parse is linear. Returns the (new) anchor paragraph."""
-    from docx.oxml import parse_xml
-    from docx.text.paragraph import Paragraph
+def _place_table(document: "Document", anchor: "Paragraph", table_xml: str) -> None:
+    """Put a table before ``anchor`` without parsing it into the tree: a
+    processing instruction marks its place, and the document part writes
+    the table's XML there when it is serialised (on any save). A table of
+    thousands of rows is then written once, as text, never parsed or
+    re-serialised (lxml also moves big subtrees between documents in
+    quadratic time)."""
     from lxml import etree
 
-    token = "statsetter-table-anchor"
-    anchor._p.set(f"{{{_WNS}}}rsidR", "00000000")
-    anchor.add_run(token)
-    xml = etree.tostring(document.element, encoding="unicode")
-    inner = table_xml.replace(f' xmlns:w="{_WNS}"', "", 1)
-    at = xml.index(token)
-    start = xml.rindex("<w:p ", 0, at)
-    end = xml.index("</w:p>", at) + len("</w:p>")
-    root = parse_xml(xml[:start] + inner + '<w:p><w:pPr/></w:p>' + xml[end:])
-    document.part._element = root
-    document._element = root  # type: ignore[attr-defined]
-    document._Document__body = None  # type: ignore[attr-defined]  # python-docx caches the body
-    body = root.body
-    last_p = body.findall(f"{{{_WNS}}}p")
-    # the fresh paragraph right after the table
-    for p in last_p[::-1]:
-        if p.getprevious() is not None and p.getprevious().tag == f"{{{_WNS}}}tbl" and len(p) == 1:
-            return Paragraph(p, document._body)  # type: ignore[attr-defined]
-    return document.add_paragraph()
+    part = document.part
+    pending: list[bytes] = part.__dict__.setdefault("_statsetter_tables", [])
+    anchor._p.addprevious(etree.ProcessingInstruction(_PLACEHOLDER, str(len(pending))))
+    pending.append(table_xml.replace(f' xmlns:w="{_WNS}"', "", 1).encode("utf-8"))
+    if not getattr(part, "_statsetter_deferred", False):
+        part.__class__ = _deferred_part_class(type(part))
+
+
+_DEFERRED: dict[type, type] = {}
+
+
+def _deferred_part_class(base: type) -> type:
+    """The document part's class with a blob that writes the pending tables in place."""
+    if base not in _DEFERRED:
+
+        def blob(self) -> bytes:  # type: ignore[no-untyped-def]
+            tables = self.__dict__.get("_statsetter_tables", [])
+            return _PLACEHOLDER_RE.sub(lambda m: tables[int(m.group(1))], base.blob.fget(self))  # type: ignore[attr-defined]
+
+        _DEFERRED[base] = type(f"Deferred{base.__name__}", (base,), {"blob": property(blob), "_statsetter_deferred": True})
+    return _DEFERRED[base]
 
 
 def _paragraph_xml(text: StyledText, keep_next: bool = False, bold: bool = False) -> str:
@@ -347,8 +373,8 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
 
     anchor = document.add_paragraph()  # the parts go before it
     for xml in table_parts(table, load_style(style), text_width_of(document)):
-        if xml.startswith("<w:tbl") and len(table.rows) > _SPLICE_ABOVE:
-            anchor = _splice(document, anchor, xml)
+        if xml.startswith("<w:tbl"):
+            _place_table(document, anchor, xml)
         else:
             anchor._p.addprevious(parse_xml(xml))
     anchor._p.getparent().remove(anchor._p)

@@ -42,6 +42,8 @@ _NUMBER = re.compile(r"(?:[<>≤≥][ \u00a0\u202f]?)?[−+-]?(?:\d[\d,. \u00a0\
 def _number_shape(cell: StyledText, mark: str) -> str:
     """``number``, ``dash`` (a dash or blank) or ``text``; trailing stars
     and superscript note letters do not count."""
+    if not cell.spans:
+        return _plain_shape(cell.text)
     text = cell.text.strip()
     if blank_or_dash(cell):
         return "dash"
@@ -50,6 +52,14 @@ def _number_shape(cell: StyledText, mark: str) -> str:
     while end and (text[end - 1] == "*" or end - 1 in sup):
         end -= 1
     return "number" if _NUMBER.fullmatch(text[:end]) and ", " not in text and "; " not in text else "text"
+
+
+def _plain_shape(raw: str) -> str:
+    """``_number_shape`` of text without styles."""
+    text = raw.strip()
+    if text in _DASHES:
+        return "dash"
+    return "number" if _NUMBER.fullmatch(text.rstrip("*")) and ", " not in text and "; " not in text else "text"
 
 
 def blank_or_dash(cell: StyledText) -> bool:
