@@ -13,10 +13,25 @@ import statistics
 import subprocess
 import sys
 
-RUNS = 9
+RUNS = 7
 FLOOR = [sys.executable, "-c", "import jinja2"]
 HELP = [sys.executable, "-m", "statsetter", "--help"]
 FORMAT = [sys.executable, "-m", "statsetter", "format", "t", "--stat", "2.14", "--df", "38", "--effect", "d=0.68", "--effect-ci", "0.04,1.31"]
+PLAN = os.path.join(os.path.dirname(os.path.abspath(__file__)), "..", "demo", "plan.toml")
+RUN = [sys.executable, "-m", "statsetter", "run", "--format", "json", PLAN]
+_LIBRARIES = (  # the third-party modules a run of the plan imports, printed by a run itself
+    "import sys, runpy\nsys.argv = ['statsetter', 'run', '--format', 'json', sys.argv[1]]\n"
+    "import contextlib, io\nwith contextlib.redirect_stdout(io.StringIO()):\n"
+    "    try:\n        runpy.run_module('statsetter', run_name='__main__')\n    except SystemExit:\n        pass\n"
+    "roots = set(sys.stdlib_module_names) | {'statsetter', '__main__', '_distutils_hack'}\n"
+    "print(' '.join(sorted(m for m in list(sys.modules) if m.split('.')[0] not in roots and not m.split('.')[0].startswith('_'))))"
+)
+
+
+def libraries() -> list[str]:
+    """A command that imports every library module the demo plan's run imports, and nothing else."""
+    found = subprocess.run([sys.executable, "-c", _LIBRARIES, PLAN], check=True, capture_output=True, text=True).stdout.split()
+    return [sys.executable, "-c", "import importlib\nfor m in %r:\n    try:\n        importlib.import_module(m)\n    except Exception:\n        pass" % found]
 
 
 def cpu(command: list[str]) -> float:
@@ -28,13 +43,16 @@ def cpu(command: list[str]) -> float:
 
 
 def main() -> None:
-    for command in (FLOOR, HELP, FORMAT):  # warm the file cache and the bytecode
+    imports = libraries()
+    for command in (FLOOR, HELP, FORMAT, imports, RUN):  # warm the file cache and the bytecode
         cpu(command)
-    floor, helps, formats = [], [], []
+    floor, helps, formats, library, plans = [], [], [], [], []
     for _ in range(RUNS):
         floor.append(cpu(FLOOR))
         helps.append(cpu(HELP))
         formats.append(cpu(FORMAT))
+        library.append(cpu(imports))
+        plans.append(cpu(RUN))
     f = statistics.median(floor)
     print(f"start-up CPU, median of {RUNS} interleaved runs")
     print(f"python -c 'import jinja2' (floor): {f * 1000:7.1f} ms")
@@ -42,6 +60,9 @@ def main() -> None:
         ratios = [m / b for m, b in zip(runs, floor)]
         print(f"{name:26s}: {statistics.median(runs) * 1000:7.1f} ms  ratio to floor {statistics.median(ratios):4.1f} "
               f"(per-run {min(ratios):.1f}-{max(ratios):.1f}; target {target})")
+    ratios = [m / b for m, b in zip(plans, library)]
+    print(f"statsetter run demo/plan.toml: {statistics.median(plans) * 1000:7.1f} ms; importing its libraries {statistics.median(library) * 1000:7.1f} ms; "
+          f"ratio {statistics.median(ratios):.2f} (per-run {min(ratios):.2f}-{max(ratios):.2f}; target 1.2)")
 
 
 if __name__ == "__main__":

@@ -14,6 +14,7 @@ import math
 from typing import Any
 
 from ..errors import InputError
+from ..formulas import studentized_range_quantile
 from ..coding import joined
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from ..analyses.effects import variance_explained
@@ -192,22 +193,20 @@ def _pairs(frame: Any, ctx: Context, procedure: str, p_column: str, half_width: 
 
 
 def pairwise_tukey(frame: Any, ctx: Context) -> list[Result]:
-    from scipy import stats
 
     def half(row: Any, k: int) -> float | None:
         if ctx.n is None and ctx.option("df") is None:
             return None
         df = ctx.option("df") or ctx.n - k  # type: ignore[operator]
-        return float(stats.studentized_range.ppf(ctx.level, k, df)) / math.sqrt(2) * float(row["se"])
+        return float(studentized_range_quantile(ctx.level, k, df)) / math.sqrt(2) * float(row["se"])
 
     return _pairs(frame, ctx, "Tukey HSD", "p_tukey", half)
 
 
 def pairwise_gameshowell(frame: Any, ctx: Context) -> list[Result]:
-    from scipy import stats
 
     def half(row: Any, k: int) -> float:
-        return float(stats.studentized_range.ppf(ctx.level, k, float(row["df"]))) / math.sqrt(2) * float(row["se"])
+        return float(studentized_range_quantile(ctx.level, k, float(row["df"]))) / math.sqrt(2) * float(row["se"])
 
     return _pairs(frame, ctx, "Games–Howell", "pval", half)
 

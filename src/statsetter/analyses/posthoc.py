@@ -9,6 +9,7 @@ from typing import TYPE_CHECKING, Literal, Mapping
 
 from ..coding import category_text
 from ..errors import InputError
+from ..formulas import studentized_range_quantile
 from ..records import Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 from .effects import d_from_t, hedges_g, variance_explained
@@ -45,11 +46,17 @@ def posthoc(
     pairs = list(combinations(range(k), 2))
     rows: list[tuple[int, int, float, float, float, float]] = []  # i, j, diff, p, low, high
     note = None
-    if procedure == "tukey":
-        res = stats.tukey_hsd(*samples)
-        ci = res.confidence_interval(level)
-        for i, j in pairs:
-            rows.append((i, j, float(res.statistic[i, j]), float(res.pvalue[i, j]), float(ci.low[i, j]), float(ci.high[i, j])))
+    if procedure == "tukey":  # Tukey–Kramer: the pooled within-group variance, one studentized-range p per pair
+        sizes = np.array([len(v) for v in samples], dtype=float)
+        means = np.array([v.mean() for v in samples])
+        dfe = float(sizes.sum() - k)
+        mse = float(sum((len(v) - 1) * v.var(ddof=1) for v in samples)) / dfe
+        first, second = (np.array(ix) for ix in zip(*pairs))
+        diffs = means[first] - means[second]
+        se = np.sqrt(mse / 2 * (1 / sizes[first] + 1 / sizes[second]))
+        p_values = stats.studentized_range.sf(np.abs(diffs) / se, k, dfe)  # all pairs in one vectorised call
+        half = float(studentized_range_quantile(level, k, dfe)) * se
+        rows = [(i, j, float(d), float(p), float(d - h), float(d + h)) for (i, j), d, p, h in zip(pairs, diffs, p_values, half)]
     elif procedure == "games-howell":
         for i, j in pairs:
             a, b = samples[i], samples[j]
@@ -59,7 +66,7 @@ def posthoc(
             diff = float(a.mean() - b.mean())
             q = abs(diff) / se * math.sqrt(2)
             p = float(stats.studentized_range.sf(q, k, dfw))
-            half = float(stats.studentized_range.ppf(level, k, dfw)) / math.sqrt(2) * se
+            half = float(studentized_range_quantile(level, k, dfw)) / math.sqrt(2) * se
             rows.append((i, j, diff, min(p, 1.0), diff - half, diff + half))
     else:
         from statsmodels.stats.multitest import multipletests
@@ -117,7 +124,7 @@ def factorial_anova(
     noncentral-F interval at ``level`` (Steiger, 2004). Type II or III sums of
     squares (Type III with sum-to-zero contrasts), stated; the term's, the
     error's and the corrected total sums of squares go into ``details``."""
-    import statsmodels.formula.api as smf
+    from statsmodels.formula.api import ols
     from statsmodels.stats.anova import anova_lm
 
     if ss_type not in (2, 3):
@@ -130,7 +137,7 @@ def factorial_anova(
             raise InputError(f"{f}: one level with data; a factor needs at least two")
     frame = data.rename(columns={outcome: "y_", a: "a_", b: "b_"})
     coding = ", Sum" if ss_type == 3 else ""
-    fit = smf.ols(f"y_ ~ C(a_{coding}) * C(b_{coding})", data=frame).fit()
+    fit = ols(f"y_ ~ C(a_{coding}) * C(b_{coding})", data=frame).fit()
     table = anova_lm(fit, typ=ss_type)
     ss_res = float(table.loc["Residual", "sum_sq"])
     df_res = float(table.loc["Residual", "df"])

@@ -171,7 +171,7 @@ def linear_regression(
     its noncentral-F interval at ``variance_level``, default ``level``), the
     intercept, then one record per coefficient (B, SE, CI, t, p, and
     β = B·SD(x)/SD(y))."""
-    import statsmodels.api as sm
+    from statsmodels.regression.linear_model import OLS
 
     if not predictors:
         raise InputError("predictors: at least one is needed")
@@ -183,7 +183,7 @@ def linear_regression(
     X, meta, coding = _design(data, predictors, reference or {}, levels)
     if len(data) <= X.shape[1]:
         raise InputError(f"{outcome}: {len(data)} complete rows for {X.shape[1]} coefficients")
-    fit = sm.OLS(y.to_numpy(), X).fit()
+    fit = OLS(y.to_numpy(), X).fit()
     prov = c.provenance("statsetter.analyses.linear_regression", statsmodels=True)
     return _ols_records(fit, X, y, meta, predictors, outcome, labels or {}, level, variance_level or level, [*coding, missing], prov)
 
@@ -205,7 +205,7 @@ def hierarchical_steps(
     (``details.step``), for a table of the models side by side. The ΔR²
     interval is the noncentral-F interval of the added block's partial
     effect, times 1 − R² of the step before (which it treats as fixed)."""
-    import statsmodels.api as sm
+    from statsmodels.regression.linear_model import OLS
     from scipy import stats
 
     if len(steps) < 2:
@@ -228,7 +228,7 @@ def hierarchical_steps(
         X, meta, coding = _design(data, used, {k: v for k, v in (reference or {}).items() if k in used}, levels)
         if len(data) <= X.shape[1]:
             raise InputError(f"{outcome}: {len(data)} complete rows for {X.shape[1]} coefficients at step {i}")
-        fit = sm.OLS(y.to_numpy(), X).fit()
+        fit = OLS(y.to_numpy(), X).fit()
         models += _ols_records(fit, X, y, meta, used, outcome, labels, level, variance_level, [*coding, missing] if i == len(steps) else [], prov, step=i)
         if previous is not None:
             dk = fit.df_model - previous.df_model
@@ -272,7 +272,7 @@ def logistic_regression(
     ratio χ², Nagelkerke R²) and one record per coefficient (B, SE, OR with
     its CI, Wald z, p)."""
     import numpy as np
-    import statsmodels.api as sm
+    from statsmodels.discrete.discrete_model import Logit
 
     data, missing = c.listwise(df, [outcome, *predictors])
     present = categories(data[outcome])
@@ -286,7 +286,7 @@ def logistic_regression(
     with warnings.catch_warnings():
         warnings.simplefilter("error")
         try:
-            fit = sm.Logit(y, X).fit(disp=False, maxiter=200)
+            fit = Logit(y, X).fit(disp=False, maxiter=200)
         except Exception as exc:  # statsmodels signals separation by a warning or an error
             if "separation" in str(exc).lower() or "singular" in str(exc).lower() or "overflow" in str(exc).lower():
                 raise InputError(f"{outcome}: perfect separation by {', '.join(predictors)}; the odds ratios are infinite") from None
