@@ -16,6 +16,7 @@ from __future__ import annotations
 import json
 import re
 import math
+from collections import deque
 from dataclasses import dataclass, field, fields, replace
 from types import MappingProxyType
 from typing import Any, Literal, Mapping, TypeVar, get_args
@@ -48,6 +49,7 @@ Level = Literal["nominal", "ordinal", "interval", "ratio"]
 NoteKind = Literal["assumption", "correction", "missing", "choice", "method", "precision", "caution"]
 
 _EMPTY: Mapping[str, Any] = MappingProxyType({})
+_LEVELS, _NOTE_KINDS, _ALTERNATIVES = get_args(Level), get_args(NoteKind), get_args(Alternative)
 
 
 # --------------------------------------------------------------------------
@@ -55,6 +57,8 @@ _EMPTY: Mapping[str, Any] = MappingProxyType({})
 
 
 def _number(path: str, value: Any, *, optional: bool = True) -> float | None:
+    if type(value) is float and math.isfinite(value):  # the common case, checked first
+        return value
     if value is None:
         if optional:
             return None
@@ -112,7 +116,9 @@ def _text(path: str, value: Any, optional: bool = True) -> str | None:
 
 
 def _frozen_map(path: str, value: Any) -> Mapping[str, Any]:
-    if value is None:
+    if value is None or value is _EMPTY:
+        return _EMPTY
+    if type(value) is dict and not value:
         return _EMPTY
     if not isinstance(value, Mapping):
         raise RecordError(path, f"{value!r} is not a mapping")
@@ -124,6 +130,15 @@ def _frozen_map(path: str, value: Any) -> Mapping[str, Any]:
 
 def _set(obj: Any, name: str, value: Any) -> None:
     object.__setattr__(obj, name, value)
+
+
+# the few shared parts (a provenance, a note) validated most recently, by identity: a batch of records (the pairs of a
+# correlation matrix) shares them, and a frozen part once valid stays valid
+_RECENT: "deque[Any]" = deque(maxlen=8)
+
+
+def _seen_valid(item: Any) -> bool:
+    return any(item is seen for seen in _RECENT)
 
 
 # --------------------------------------------------------------------------
@@ -293,7 +308,7 @@ class Variable:
         _text(f"{path}.label", self.label)
         _text(f"{path}.table_label", self.table_label)
         _text(f"{path}.role", self.role)
-        _choice(f"{path}.level", self.level, get_args(Level), optional=True)
+        _choice(f"{path}.level", self.level, _LEVELS, optional=True)
         _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
 
     @property
@@ -358,7 +373,7 @@ class Note:
     extra: Mapping[str, Any] = field(default_factory=lambda: _EMPTY, compare=False)
 
     def validate(self, path: str) -> None:
-        _choice(f"{path}.kind", self.kind, get_args(NoteKind))
+        _choice(f"{path}.kind", self.kind, _NOTE_KINDS)
         _text(f"{path}.text", self.text, optional=False)
         _set(self, "extra", _frozen_map(f"{path}.extra", self.extra))
 
@@ -423,7 +438,7 @@ class Result:
         if p is not None and not 0 <= p <= 1:
             raise RecordError("p", f"{p:g} is outside [0, 1]")
         _set(self, "p", p)
-        _choice("alternative", self.alternative, get_args(Alternative))
+        _choice("alternative", self.alternative, _ALTERNATIVES)
         _set(self, "n", _count("n", self.n))
         if self.estimate is not None:
             _check_type("estimate", self.estimate, Estimate).validate("estimate")
@@ -438,12 +453,17 @@ class Result:
                 items = ()
             if not isinstance(items, (tuple, list)):
                 raise RecordError(name, f"expected a list, got {type(items).__name__}")
-            items = tuple(items)
+            if type(items) is not tuple:
+                items = tuple(items)
+                _set(self, name, items)
             for i, item in enumerate(items):
-                _check_type(f"{name}[{i}]", item, kind).validate(f"{name}[{i}]")
-            _set(self, name, items)
-        if self.provenance is not None:
+                if not _seen_valid(item):
+                    _check_type(f"{name}[{i}]", item, kind).validate(f"{name}[{i}]")
+                    if kind is Note:
+                        _RECENT.append(item)
+        if self.provenance is not None and not _seen_valid(self.provenance):
             _check_type("provenance", self.provenance, Provenance).validate("provenance")
+            _RECENT.append(self.provenance)
         details = _frozen_map("details", self.details)
         for key, value in details.items():
             if value is not None and not isinstance(value, (str, int, float, bool)):
