@@ -21,6 +21,7 @@ test: $(STAMP)
 	$(BIN)/python -m pytest
 
 bench: $(STAMP)
+	$(BIN)/python -m pip install -q -e '.[bench]'
 	$(BIN)/python bench/bench_startup.py
 	$(BIN)/python bench/bench_render.py
 	$(BIN)/python bench/bench_analyses.py
