@@ -123,6 +123,24 @@ GOLDEN = {
         '<i>H</i>(2) = 7.81, <i>p</i> = .020, ε<sup>2</sup> = .08',
         'A Kruskal–Wallis test of the score across the groups gave H(2) = 7.81, p = .020, ε² = .08.',
     ),
+    # REPORTING-RULES Reporting by test: chi-square with df and N (APA 7 §6.43); the OR is roman (APA 7 §6.45); the variant named (practice)
+    'mcnemar': (
+        'χ<sup>2</sup>(1, <i>N</i> = 80) = 20.02, <i>p</i> &lt; .001, OR = 5.00, 95% CI [2.31, 12.37]',
+        "Of 80 pairs, 20 (25.0%) were “yes” at before and 52 (65.0%) at after; McNemar's test (chi-square with continuity correction) "
+        "gave χ²(1, N = 80) = 20.02, p < .001, OR = 5.00, 95% CI [2.31, 12.37].",
+    ),
+    # REPORTING-RULES Symbols: Latin statistical symbols italic (APA 7 §6.45): Q
+    'cochran_q': (
+        '<i>Q</i>(2) = 6.71, <i>p</i> = .035',
+        "Cochran's Q test of one proportion across 3 measurements of 20 people gave Q(2) = 6.71, p = .035. "
+        "The counts of “energetic” were Monday 6 (30.0%), Wednesday 13 (65.0%), and Friday 14 (70.0%).",
+    ),
+    # REPORTING-RULES Numbers: Kendall's W cannot exceed 1, no leading zero (APA 7 §6.36)
+    'friedman': (
+        'χ<sup>2</sup>(2) = 11.14, <i>p</i> = .004, <i>W</i> = .25',
+        "A Friedman test of 3 related measurements of 22 people gave χ²(2) = 11.14, p = .004, W = .25. Medians were round out "
+        "(Mdn = 5.50, IQR = [5.41, 5.65]), narrow angle (Mdn = 5.53, IQR = [5.46, 5.60]), and wide angle (Mdn = 5.45, IQR = [5.35, 5.55]).",
+    ),
     # REPORTING-RULES Numbers: α drops the leading zero (APA 7 §6.36)
     'cronbach_alpha': (
         'α = .84, 95% CI [.81, .87]',

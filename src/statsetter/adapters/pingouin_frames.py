@@ -35,6 +35,8 @@ _SIGNATURES: list[tuple[frozenset[str], str]] = [
     (frozenset({"U_val", "p_val", "RBC"}), "pingouin.mwu"),
     (frozenset({"W_val", "p_val", "RBC"}), "pingouin.wilcoxon"),
     (frozenset({"Source", "ddof1", "H", "p_unc"}), "pingouin.kruskal"),
+    (frozenset({"Source", "W", "ddof1", "Q", "p_unc"}), "pingouin.friedman"),
+    (frozenset({"Source", "dof", "Q", "p_unc"}), "pingouin.cochran"),
     (frozenset({"Source", "SS", "DF", "MS", "F", "p_unc"}), "pingouin.anova"),
     (frozenset({"Source", "ddof1", "ddof2", "F", "p_unc", "np2"}), "pingouin.anova"),
 ]
@@ -357,6 +359,19 @@ def kruskal(frame: Any, ctx: Context) -> list[Result]:
                   p=float(row["p_unc"]))]
 
 
+def friedman(frame: Any, ctx: Context) -> list[Result]:
+    row = _one(frame)
+    return [_base(ctx, "friedman", [Note("method", "pingouin's Q is Friedman's chi-square statistic."), absent(ctx, ["n and medians"])],
+                  statistic=Statistic("chi2", float(row["Q"]), (float(row["ddof1"]),)), p=float(row["p_unc"]),
+                  effects=(EffectSize("kendall_w", float(row["W"]), method="Kendall's W (pingouin)"),))]
+
+
+def cochran(frame: Any, ctx: Context) -> list[Result]:
+    row = _one(frame)
+    return [_base(ctx, "cochran_q", [absent(ctx, ["n and the counts per measurement"])], statistic=Statistic("Q", float(row["Q"]), (float(row["dof"]),)),
+                  p=float(row["p_unc"]))]
+
+
 # -- statsetter's analysis of the data given -----------------------------------
 
 
@@ -467,5 +482,7 @@ ADAPTERS = {
         Adapter("pingouin.mwu", LIB, mwu, "two", _mwu),
         Adapter("pingouin.wilcoxon", LIB, wilcoxon, "paired", _wilcoxon),
         Adapter("pingouin.kruskal", LIB, kruskal, "k", _kruskal),
+        Adapter("pingouin.friedman", LIB, friedman),  # read as printed; long data with subjects are not merged
+        Adapter("pingouin.cochran", LIB, cochran),
     )
 }

@@ -80,10 +80,10 @@ FORMER_CODES: dict[str, str] = {
     "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
-_BOUNDED_EFFECTS = {"V": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
-_WHOLE_DF = {"chi2", "r", "rs", "H"}  # t and F may have fractional df (Welch; sphericity corrections)
+_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T"}
-_KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "tau_b": "kendall", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon"}
+_KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "tau_b": "kendall", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon", "Q": "cochran_q"}
 
 
 @dataclass(frozen=True, slots=True)
@@ -140,7 +140,7 @@ def _p_range(rep: Reported) -> tuple[float, float] | None:
         return (bound[0], 1.0) if rep.op in ("<", "≤") else (0.0, bound[1])
     if rep.op != "=":
         return None
-    need = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1}.get(rep.symbol)
+    need = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1, "Q": 1}.get(rep.symbol)
     if need is None or len(rep.df) != need or any(d.value <= 0 for d in rep.df):
         return None
     df = tuple(d.value for d in rep.df)
@@ -150,7 +150,7 @@ def _p_range(rep: Reported) -> tuple[float, float] | None:
         if lo >= 1:
             return None
         hi = min(hi, 1.0)
-    if rep.symbol in ("F", "chi2", "H") and rep.value.value < 0:
+    if rep.symbol in ("F", "chi2", "H", "Q") and rep.value.value < 0:
         return None
     from ..errors import MissingExtra
 
@@ -209,7 +209,7 @@ def impossible(rep: Reported) -> list[Finding]:
     if rep.value is not None:
         if rep.symbol in ("r", "rs", "tau_b") and abs(rep.value.value) > 1:
             out.append(Finding("impossible-r", "A correlation must lie between −1 and 1.", rep.value.text))
-        if rep.symbol in ("F", "chi2", "H") and rep.value.value < 0:
+        if rep.symbol in ("F", "chi2", "H", "Q") and rep.value.value < 0:
             out.append(Finding("negative-statistic", f"{rep.symbol_text} cannot be negative.", rep.value.text))
     if rep.symbol in _WHOLE_DF:
         for d in rep.df:

@@ -113,7 +113,7 @@ def symbol_of(text: str) -> str | None:
         return "F"
     if t == "Z":  # "Z = 2.50", as SPSS prints the normal approximation of rank tests
         return "z"
-    return t if t in ("t", "F", "r", "z", "U", "H", "W", "T") else None
+    return t if t in ("t", "F", "r", "z", "U", "H", "W", "T", "Q") else None
 
 
 def _number_pattern(mark: str) -> str:
@@ -129,7 +129,7 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--"
 
 _SYMBOL = (
     r"(?:Δ\s?F|χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
-    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzZUHWT])"
+    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzZUHWTQ])"
 )
 _EFFECT_NAMES = [
     (r"partial\s+(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2_p"),
@@ -148,6 +148,7 @@ _EFFECT_NAMES = [
     (r"(?<![\w])d_?av", "d_av"),
     (r"(?<![\w])d", "d"),
     (r"(?<![\w])g", "g"),
+    (r"Kendall'?s\s+W|(?<![\w])W(?=\s*=\s*0?[.,]\d)", "kendall_w"),  # W below 1 with decimals: Kendall's W, not a rank sum
     (r"(?<![\w])Mdn", "Mdn"),
     (r"(?<![\w])M", "M"),
     (r"(?<![\w])SD", "SD"),
@@ -281,10 +282,15 @@ def decimal_mark_of(texts: "Iterable[str]") -> tuple[str, int, int] | None:
     return ("," if commas > points else "."), commas, points
 
 
+def _kendall_w(m: re.Match[str]) -> bool:
+    """A "W = .25" (no df, a value below 1 with decimals) is Kendall's W, an effect size, not a Wilcoxon rank sum."""
+    return m.group("sym") == "W" and m.group("inner") is None and re.fullmatch(r"0?[.,]\d+", m.group("num").strip()) is not None
+
+
 def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     """Every statistic in ``text``, in order."""
     pat = _patterns(decimal_mark)
-    heads = [m for m in pat.head.finditer(text) if symbol_of(m.group("sym")) is not None]
+    heads = [m for m in pat.head.finditer(text) if symbol_of(m.group("sym")) is not None and not _kendall_w(m)]
     out: list[Reported] = []
     taken: list[tuple[int, int]] = []
     for i, m in enumerate(heads):

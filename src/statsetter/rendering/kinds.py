@@ -26,6 +26,9 @@ KINDS: dict[str, str] = {
     "mann_whitney": "Mann-Whitney U test",
     "wilcoxon": "Wilcoxon signed-rank test",
     "kruskal_wallis": "Kruskal-Wallis H test",
+    "mcnemar": "McNemar's test of a binary outcome measured twice (details.method: exact or chi-square, corrected or not)",
+    "cochran_q": "Cochran's Q test of a binary outcome measured k times",
+    "friedman": "Friedman's test of k related measurements, with Kendall's W",
     "cronbach_alpha": "Cronbach's alpha of a scale",
     "reported": "a statistic as a manuscript reports it (read by the audit): statistic, p, effect sizes",
 }

@@ -52,7 +52,7 @@ def subject(r: Result) -> str:
     by = named("group", "factor", "predictor", "x", "row")
     if r.kind in ("pearson", "spearman", "kendall"):
         return " and ".join(named("x") + named("y"))
-    if r.kind in ("t_paired", "wilcoxon"):
+    if r.kind in ("t_paired", "wilcoxon", "mcnemar"):
         first, second = named("first"), named("second")
         if first and second:
             return f"{outcome[0] + ', ' if outcome else ''}{first[0]} and {second[0]}"
@@ -60,7 +60,13 @@ def subject(r: Result) -> str:
         return " and ".join(named("row") + named("column"))
     if outcome and by:
         return f"{outcome[0]} by {' and '.join(dict.fromkeys(by))}"
-    return (outcome or by or [r.kind.replace("_", " ")])[0]
+    measured = [v.display for v in r.variables if (v.role or "").startswith("measurement ")]
+    if measured:  # the measurements of a repeated design, in order
+        return ", ".join(measured)
+    return (outcome or by or [_TEST_NAMES.get(r.kind, r.kind.replace("_", " "))])[0]
+
+
+_TEST_NAMES = {"mcnemar": "McNemar's test", "cochran_q": "Cochran's Q test", "friedman": "Friedman test"}
 
 
 def row_label(r: Result, named_twice: bool = False) -> str:

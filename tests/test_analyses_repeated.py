@@ -1,0 +1,152 @@
+"""McNemar's test, Cochran's Q and Friedman's test with Kendall's W, against
+R and a second Python library.
+
+Data: pingouin's bundled 'chi2_mcnemar' and 'cochran' datasets; the
+rounding-times data of R's ?friedman.test example (Hollander & Wolfe),
+typed here from that help page (the expected values are R's output on
+exactly these numbers, so a typing slip could not make the test wrong).
+R 4.x was run on this machine (values printed with 15 digits):
+mcnemar.test(table(X, Y)) with and without correct, binom.test(b, b + c),
+friedman.test(RoundingTimes), and Cochran's Q by its formula in R code.
+Second libraries: statsmodels' mcnemar and cochrans_q, pingouin's cochran
+and friedman."""
+
+from __future__ import annotations
+
+import numpy as np
+import pandas as pd
+import pingouin as pg
+import pytest
+
+from statsetter import InputError, render
+from statsetter.analyses import cochran_q, friedman, mcnemar
+from statsetter.audit.reading import Unit
+from statsetter.audit.report import audit_units
+
+R = {  # R 4.x, run here
+    "mcnemar_corrected": (20.0208333333333, 7.66030209405742e-06),
+    "mcnemar_uncorrected": (21.3333333333333, 3.85961643692845e-06),
+    "binom_p": 3.30526670921928e-06,
+    "binom_ci": (0.69777758647012, 0.925189139600407),
+    "friedman": (11.1428571428571, 2, 0.00380504077551136),
+    "cochran": (6.70588235294118, 2, 0.0349813164243501),
+}
+ROUNDING = np.array([5.40, 5.50, 5.55, 5.85, 5.70, 5.75, 5.20, 5.60, 5.50, 5.55, 5.50, 5.40, 5.90, 5.85, 5.70, 5.45, 5.55, 5.60, 5.40, 5.40, 5.35,
+                     5.45, 5.50, 5.35, 5.25, 5.15, 5.00, 5.85, 5.80, 5.70, 5.25, 5.20, 5.10, 5.65, 5.55, 5.45, 5.60, 5.35, 5.45, 5.05, 5.00, 4.95,
+                     5.50, 5.50, 5.40, 5.45, 5.55, 5.50, 5.55, 5.55, 5.35, 5.45, 5.50, 5.55, 5.50, 5.45, 5.25, 5.65, 5.60, 5.40, 5.70, 5.65, 5.55,
+                     6.30, 6.30, 6.25]).reshape(22, 3)
+
+
+@pytest.fixture(scope="module")
+def pairs():
+    return pg.read_dataset("chi2_mcnemar")
+
+
+@pytest.fixture(scope="module")
+def energetic():
+    long = pg.read_dataset("cochran")
+    return long, long.pivot(index="Subject", columns="Time", values="Energetic")
+
+
+@pytest.mark.parametrize("variant, key", [("corrected", "mcnemar_corrected"), ("uncorrected", "mcnemar_uncorrected")])
+def test_mcnemar_chi_square_equals_r(pairs, variant, key):
+    (r,) = mcnemar(pairs, "treatment_X", "treatment_Y", variant=variant)
+    chi2, p = R[key]
+    assert r.statistic.value == pytest.approx(chi2, rel=1e-12) and r.statistic.df == (1,)
+    assert r.p == pytest.approx(p, rel=1e-9)
+    assert r.details["b"] + r.details["c"] == 48 and r.n == 80
+
+
+def test_mcnemar_exact_and_the_discordant_odds_ratio_equal_r(pairs):
+    (r,) = mcnemar(pairs, "treatment_X", "treatment_Y", variant="exact")
+    assert r.statistic is None and r.p == pytest.approx(R["binom_p"], rel=1e-9)
+    low, high = R["binom_ci"]  # binom.test's Clopper–Pearson limits of b/(b + c), as odds
+    odds = r.effects[0]
+    assert odds.value == pytest.approx(40 / 8) and odds.ci.low == pytest.approx(low / (1 - low), rel=1e-9)
+    assert odds.ci.high == pytest.approx(high / (1 - high), rel=1e-9)
+    assert "exact p" in render(r, "stats").plain()
+
+
+def test_mcnemar_auto_chooses_and_says_so(pairs):
+    (r,) = mcnemar(pairs, "treatment_X", "treatment_Y")
+    assert r.details["method"] == "chi-square with continuity correction"  # 48 discordant pairs: at least 25
+    assert any("chosen: 48 discordant pairs" in n.text for n in r.notes)
+    small = pairs.iloc[:30]
+    (s,) = mcnemar(small, "treatment_X", "treatment_Y")
+    assert s.details["method"].startswith("exact")
+
+
+def test_mcnemar_equals_statsmodels(pairs):
+    from statsmodels.stats.contingency_tables import mcnemar as sm_mcnemar
+
+    table = pd.crosstab(pairs["treatment_X"], pairs["treatment_Y"]).to_numpy()
+    for exact, correction, variant in ((False, True, "corrected"), (False, False, "uncorrected"), (True, False, "exact")):
+        ref = sm_mcnemar(table, exact=exact, correction=correction)
+        (r,) = mcnemar(pairs, "treatment_X", "treatment_Y", variant=variant)
+        assert r.p == pytest.approx(ref.pvalue, rel=1e-9)
+
+
+def test_cochran_q_equals_r_statsmodels_and_pingouin(energetic):
+    from statsmodels.stats.contingency_tables import cochrans_q
+
+    long, wide = energetic
+    (r,) = cochran_q(wide, list(wide.columns))
+    q, df, p = R["cochran"]
+    assert r.statistic.value == pytest.approx(q, rel=1e-12) and r.statistic.df == (df,) and r.p == pytest.approx(p, rel=1e-9)
+    sm = cochrans_q(wide.to_numpy())
+    assert r.statistic.value == pytest.approx(sm.statistic, rel=1e-12)
+    ref = pg.cochran(long, dv="Energetic", within="Time", subject="Subject")
+    assert r.statistic.value == pytest.approx(float(ref["Q"].iloc[0]), rel=1e-12)
+    assert r.p == pytest.approx(float(ref["p_unc"].iloc[0] if "p_unc" in ref else ref["p-unc"].iloc[0]), rel=1e-9)
+
+
+def test_friedman_and_kendalls_w_equal_r_and_pingouin():
+    df = pd.DataFrame(ROUNDING, columns=["round out", "narrow angle", "wide angle"])
+    (r,) = friedman(df, list(df.columns))
+    chi2, k1, p = R["friedman"]
+    assert r.statistic.value == pytest.approx(chi2, rel=1e-12) and r.statistic.df == (k1,) and r.p == pytest.approx(p, rel=1e-9)
+    assert r.effects[0].value == pytest.approx(chi2 / (22 * 2), rel=1e-12)  # W = χ²/(n(k − 1)), by definition
+    long = df.reset_index().melt(id_vars="index", var_name="method", value_name="time")
+    ref = pg.friedman(long, dv="time", within="method", subject="index")
+    assert r.effects[0].value == pytest.approx(float(ref["W"].iloc[0]), rel=1e-9)
+
+
+def test_sentences_and_refusals(pairs):
+    (r,) = mcnemar(pairs, "treatment_X", "treatment_Y", labels={"treatment_X": "treatment X", "treatment_Y": "treatment Y"})
+    text = render(r, "sentence").plain()
+    assert text.startswith("Of 80 pairs, 20 (25.0%) were “True” at treatment X and 52 (65.0%) at treatment Y; McNemar's test")
+    three = pairs.assign(treatment_Y=np.where(pairs.index % 3 == 0, "maybe", pairs["treatment_Y"].astype(str)))
+    with pytest.raises(InputError, match="two values"):
+        mcnemar(three.assign(treatment_X=pairs["treatment_X"].astype(str)), "treatment_X", "treatment_Y")
+    same = pairs.assign(treatment_Y=pairs["treatment_X"])
+    with pytest.raises(InputError, match="no pair changed"):
+        mcnemar(same, "treatment_X", "treatment_Y")
+    with pytest.raises(InputError, match="at least three"):
+        friedman(pd.DataFrame(ROUNDING[:, :2], columns=["a", "b"]), ["a", "b"])
+
+
+def test_the_audit_reads_and_checks_them():
+    """The audit recomputes McNemar's and Friedman's χ² and Cochran's Q from their printed df (R's values above)."""
+    good = [Unit("a", "Cochran's Q test gave Q(2) = 6.71, p = .035."), Unit("b", "A Friedman test gave χ2(2) = 11.14, p = .004, W = .25.")]
+    for e in audit_units(good):
+        assert not {"p-does-not-follow"} & set(e.codes) and e.checked
+    (bad,) = audit_units([Unit("c", "Cochran's Q test gave Q(2) = 6.71, p = .35.")])
+    assert "p-does-not-follow" in bad.codes
+
+
+def test_pingouin_results_read_as_records_equal_the_analyses(energetic):
+    """pingouin.cochran and pingouin.friedman frames, read by the adapters, give the statistic, df, p (and W) of the
+    analyses from the same data."""
+    from statsetter.adapters import to_records
+
+    long, wide = energetic
+    (read,) = to_records(pg.cochran(long, dv="Energetic", within="Time", subject="Subject"))
+    (mine,) = cochran_q(wide, list(wide.columns))
+    assert read.kind == "cochran_q" and read.statistic.value == pytest.approx(mine.statistic.value, rel=1e-12)
+    assert read.statistic.df == mine.statistic.df and read.p == pytest.approx(mine.p, rel=1e-9)
+    df = pd.DataFrame(ROUNDING, columns=["round out", "narrow angle", "wide angle"])
+    melted = df.reset_index().melt(id_vars="index", var_name="method", value_name="time")
+    (read,) = to_records(pg.friedman(melted, dv="time", within="method", subject="index"))
+    (mine,) = friedman(df, list(df.columns))
+    assert read.kind == "friedman" and read.statistic.value == pytest.approx(mine.statistic.value, rel=1e-12)
+    assert read.p == pytest.approx(mine.p, rel=1e-9) and read.effects[0].value == pytest.approx(mine.effects[0].value, rel=1e-9)
