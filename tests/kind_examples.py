@@ -234,6 +234,16 @@ EXAMPLES = {
                 GroupSummary("wide angle", n=22, median=5.45, q1=5.35, q3=5.55)),
         details={"k": 3},
     ),
+    "anova_rm": Result(
+        kind="anova_rm",
+        statistic=Statistic("F", 5.2007, (2.0830, 16.6639)),
+        p=0.0167,
+        n=9,
+        effects=(EffectSize("eta2_g", 0.3464), EffectSize("eta2_p", 0.3940)),
+        groups=(GroupSummary("before", n=9, mean=4.13, sd=0.48), GroupSummary("after a week", n=9, mean=4.29, sd=1.50)),
+        variables=(V("mood", "outcome", "the mood score"),),
+        details={"k": 2, "correction": "Greenhouse–Geisser correction", "epsilon": 0.6943},
+    ),
     "cronbach_alpha": Result(
         kind="cronbach_alpha",
         n=200,

@@ -23,7 +23,7 @@ from statsetter.analyses import cochran_q, friedman, mcnemar
 from statsetter.audit.reading import Unit
 from statsetter.audit.report import audit_units
 
-R = {  # R 4.x, run here
+R = {  # R 4.x, run here (tests/r_reference.R reproduces these)
     "mcnemar_corrected": (20.0208333333333, 7.66030209405742e-06),
     "mcnemar_uncorrected": (21.3333333333333, 3.85961643692845e-06),
     "binom_p": 3.30526670921928e-06,
@@ -150,3 +150,57 @@ def test_pingouin_results_read_as_records_equal_the_analyses(energetic):
     (mine,) = friedman(df, list(df.columns))
     assert read.kind == "friedman" and read.statistic.value == pytest.approx(mine.statistic.value, rel=1e-12)
     assert read.p == pytest.approx(mine.p, rel=1e-9) and read.effects[0].value == pytest.approx(mine.effects[0].value, rel=1e-9)
+
+
+# R 4.x, run here on pingouin's 'rm_anova_wide' (the 9 people with all four measurements): anova(lm(Y ~ 1), M = ~cond, X = ~1,
+# idata = data.frame(cond = factor(colnames(Y))), test = "Spherical") and mauchly.test(...) on the same fit
+R_RM = {"F": 5.20065155117859, "df": (3, 24), "p": 0.00655714189447163, "gg": 0.6943, "p_gg": 0.0166993073368506, "hf": 0.9434,
+        "p_hf": 0.00778268990882709, "mauchly_w": 0.3067837341417, "mauchly_p": 0.16336494372}
+
+
+@pytest.fixture(scope="module")
+def weeks():
+    return pg.read_dataset("rm_anova_wide")
+
+
+def test_rm_anova_equals_r_anova_mlm(weeks):
+    from statsetter.analyses import rm_anova
+
+    (none,) = rm_anova(weeks, list(weeks.columns), correction="none")
+    assert none.statistic.value == pytest.approx(R_RM["F"], rel=1e-12) and none.statistic.df == R_RM["df"]
+    assert none.p == pytest.approx(R_RM["p"], rel=1e-9) and none.n == 9
+    assert none.details["epsilon_gg"] == pytest.approx(R_RM["gg"], abs=5e-5) and none.details["epsilon_hf"] == pytest.approx(R_RM["hf"], abs=5e-5)
+    assert none.details["mauchly_w"] == pytest.approx(R_RM["mauchly_w"], rel=1e-9)
+    assert none.details["mauchly_p"] == pytest.approx(R_RM["mauchly_p"], rel=1e-9)
+    (gg,) = rm_anova(weeks, list(weeks.columns), correction="gg")
+    (hf,) = rm_anova(weeks, list(weeks.columns), correction="hf")
+    assert gg.p == pytest.approx(R_RM["p_gg"], rel=1e-9) and hf.p == pytest.approx(R_RM["p_hf"], rel=1e-9)
+    assert gg.statistic.df[0] == pytest.approx(3 * gg.details["epsilon_gg"]) and gg.statistic.df[1] == pytest.approx(24 * gg.details["epsilon_gg"])
+
+
+def test_rm_anova_equals_pingouin_and_statsmodels(weeks):
+    from statsmodels.stats.anova import AnovaRM
+
+    from statsetter.analyses import rm_anova
+
+    (r,) = rm_anova(weeks, list(weeks.columns), correction="gg")
+    ref = pg.rm_anova(weeks, correction=True)
+    assert r.p == pytest.approx(float(ref["p_GG_corr"].iloc[0]), rel=1e-9)
+    assert r.effects[0].value == pytest.approx(float(ref["ng2"].iloc[0]), rel=1e-9)  # generalized η²
+    assert r.details["epsilon_gg"] == pytest.approx(float(ref["eps"].iloc[0]), rel=1e-9)
+    long = weeks.dropna().reset_index().melt(id_vars="index", var_name="week", value_name="score")
+    sm = AnovaRM(long, "score", "index", within=["week"]).fit().anova_table
+    assert r.details["p_uncorrected"] == pytest.approx(float(sm["Pr > F"].iloc[0]), rel=1e-9)
+    (from_long,) = rm_anova(long, outcome="score", subject="index", within="week", correction="gg")
+    assert from_long.statistic.value == pytest.approx(r.statistic.value, rel=1e-12)  # long data give the same test
+
+
+def test_rm_anova_auto_rule_and_sentence(weeks):
+    from statsetter.analyses import rm_anova
+
+    (r,) = rm_anova(weeks, list(weeks.columns))
+    assert r.details["correction"] == "Greenhouse–Geisser correction"  # ε̂ = .69 < .75
+    assert any("below 0.75" in n.text for n in r.notes)
+    assert render(r, "stats").plain() == "F(2.08, 16.66) = 5.20, p = .017, ε = .69, η²_G = .35"
+    with pytest.raises(InputError, match="rows for"):
+        rm_anova(pd.concat([weeks.reset_index().melt(id_vars="index")] * 2), outcome="value", subject="index", within="variable")

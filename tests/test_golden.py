@@ -141,6 +141,12 @@ GOLDEN = {
         "A Friedman test of 3 related measurements of 22 people gave χ²(2) = 11.14, p = .004, W = .25. Medians were round out "
         "(Mdn = 5.50, IQR = [5.41, 5.65]), narrow angle (Mdn = 5.53, IQR = [5.46, 5.60]), and wide angle (Mdn = 5.45, IQR = [5.35, 5.55]).",
     ),
+    # REPORTING-RULES Reporting by test: corrected df with ε (practice); η²G with its subscript; ε Greek roman (APA 7 §6.45)
+    'anova_rm': (
+        '<i>F</i>(2.08, 16.66) = 5.20, <i>p</i> = .017, ε = .69, η<sup>2</sup><sub>G</sub> = .35',
+        "A repeated-measures ANOVA of the mood score across 2 measurements of 9 people (Greenhouse–Geisser correction) gave "
+        "F(2.08, 16.66) = 5.20, p = .017, ε = .69, η²_G = .35. The means were before (M = 4.13, SD = 0.48) and after a week (M = 4.29, SD = 1.50).",
+    ),
     # REPORTING-RULES Numbers: α drops the leading zero (APA 7 §6.36)
     'cronbach_alpha': (
         'α = .84, 95% CI [.81, .87]',

@@ -100,6 +100,7 @@ wilcoxon_signed_rank = _public(_ranks.wilcoxon_signed_rank)
 mcnemar = _public(_repeated.mcnemar)
 cochran_q = _public(_repeated.cochran_q)
 friedman = _public(_repeated.friedman)
+rm_anova = _public(_repeated.rm_anova)
 linear_regression = _public(_regression.linear_regression)
 hierarchical_steps = _public(_regression.hierarchical_steps)
 logistic_regression = _public(_regression.logistic_regression)
@@ -111,7 +112,7 @@ t_one_sample = _public(_ttests.t_one_sample)
 __all__ = [
     "analyse", "describe", "level_of", "correlation_matrix", "correlate", "pearson", "spearman", "kendall",
     "t_independent", "t_paired", "t_one_sample", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
-    "mcnemar", "cochran_q", "friedman",
+    "mcnemar", "cochran_q", "friedman", "rm_anova",
     "anova_oneway", "posthoc", "factorial_anova", "chi_square", "fisher_exact", "goodness_of_fit",
     "linear_regression", "hierarchical_steps", "logistic_regression", "cronbach_alpha", "scale_score", "RENAMED",
 ]

@@ -29,6 +29,7 @@ KINDS: dict[str, str] = {
     "mcnemar": "McNemar's test of a binary outcome measured twice (details.method: exact or chi-square, corrected or not)",
     "cochran_q": "Cochran's Q test of a binary outcome measured k times",
     "friedman": "Friedman's test of k related measurements, with Kendall's W",
+    "anova_rm": "one-way repeated-measures ANOVA with sphericity correction (details.correction, epsilon)",
     "cronbach_alpha": "Cronbach's alpha of a scale",
     "reported": "a statistic as a manuscript reports it (read by the audit): statistic, p, effect sizes",
 }

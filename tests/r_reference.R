@@ -1,0 +1,31 @@
+# The R outputs stored as constants in tests/test_analyses_repeated.py and tests/test_analyses_posthoc.py,
+# produced by this script (R 4.x, base packages only). Re-run it to check them:
+#   python -c "import pingouin as pg; [pg.read_dataset(n).to_csv(f'/tmp/{n}.csv', index=False) for n in ('chi2_mcnemar', 'cochran', 'rm_anova_wide')]"
+#   Rscript tests/r_reference.R
+options(digits = 15)
+
+# McNemar on pingouin's chi2_mcnemar
+m <- read.csv("/tmp/chi2_mcnemar.csv"); t <- table(m$treatment_X, m$treatment_Y)
+a <- mcnemar.test(t); b <- mcnemar.test(t, correct = FALSE); bt <- binom.test(t[1, 2], t[1, 2] + t[2, 1])
+cat("mcnemar corrected", a$statistic, a$p.value, "uncorrected", b$statistic, b$p.value, "\n")
+cat("binom p", bt$p.value, "ci", bt$conf.int, "\n")
+
+# Friedman on the rounding-times example of ?friedman.test, as typed in the test
+RoundingTimes <- matrix(c(5.40, 5.50, 5.55, 5.85, 5.70, 5.75, 5.20, 5.60, 5.50, 5.55, 5.50, 5.40, 5.90, 5.85, 5.70, 5.45, 5.55, 5.60,
+                          5.40, 5.40, 5.35, 5.45, 5.50, 5.35, 5.25, 5.15, 5.00, 5.85, 5.80, 5.70, 5.25, 5.20, 5.10, 5.65, 5.55, 5.45,
+                          5.60, 5.35, 5.45, 5.05, 5.00, 4.95, 5.50, 5.50, 5.40, 5.45, 5.55, 5.50, 5.55, 5.55, 5.35, 5.45, 5.50, 5.55,
+                          5.50, 5.45, 5.25, 5.65, 5.60, 5.40, 5.70, 5.65, 5.55, 6.30, 6.30, 6.25), nrow = 22, byrow = TRUE)
+f <- friedman.test(RoundingTimes); cat("friedman", f$statistic, f$parameter, f$p.value, "\n")
+
+# Cochran's Q by its formula on pingouin's cochran data
+q <- read.csv("/tmp/cochran.csv"); w <- reshape(q, idvar = "Subject", timevar = "Time", direction = "wide"); X <- as.matrix(w[, -1]); k <- ncol(X)
+C <- colSums(X); R <- rowSums(X); Tt <- sum(X); Q <- (k - 1) * (k * sum(C^2) - Tt^2) / (k * Tt - sum(R^2))
+cat("cochran", Q, k - 1, pchisq(Q, k - 1, lower.tail = FALSE), "\n")
+
+# One-way repeated-measures ANOVA with sphericity on pingouin's rm_anova_wide (complete rows)
+Y <- as.matrix(read.csv("/tmp/rm_anova_wide.csv")); fit <- lm(Y ~ 1); idata <- data.frame(cond = factor(colnames(Y)))
+print(unclass(anova(fit, M = ~cond, X = ~1, idata = idata, test = "Spherical")))
+print(mauchly.test(fit, M = ~cond, X = ~1, idata = idata))
+
+# Tukey HSD on PlantGrowth, and ptukey at statsetter's quantiles (df >= 5) are in tests/test_analyses_posthoc.py:
+print(TukeyHSD(aov(weight ~ group, data = PlantGrowth))$group, digits = 15)
