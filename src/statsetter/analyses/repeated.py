@@ -16,6 +16,7 @@ from ..records import EffectSize, GroupSummary, Interval, Note, Result, Statisti
 from . import _common as c
 
 if TYPE_CHECKING:
+    import numpy as np
     import pandas as pd
 
 McNemarVariant = Literal["auto", "exact", "corrected", "uncorrected"]
@@ -167,7 +168,7 @@ def friedman(df: "pd.DataFrame", columns: Sequence[str], *, labels: Mapping[str,
 RMCorrection = Literal["auto", "gg", "hf", "none"]
 
 
-def _mauchly(S: "np.ndarray", m: float, k: int) -> tuple[float, float, float, float]:  # type: ignore[name-defined]
+def _mauchly(S: "np.ndarray", m: float, k: int) -> tuple[float, float, float, float]:
     """Mauchly's W of the contrasts' covariance ``S`` (m residual df) with its
     χ² and p, the p with the second-order term as R's mauchly.test computes
     it — which has k (the measurements) where Anderson's series has k − 1 in
