@@ -244,6 +244,15 @@ EXAMPLES = {
         variables=(V("mood", "outcome", "the mood score"),),
         details={"k": 2, "correction": "Greenhouse–Geisser correction", "epsilon": 0.6943},
     ),
+    "simple_slope": Result(
+        kind="simple_slope",
+        statistic=Statistic("t", -5.6606, (28,)),
+        p=4.579e-06,
+        n=32,
+        estimate=Estimate("slope", -0.057756, se=0.010203, ci=Interval(CI, -0.078656, -0.036856)),
+        variables=(V("mpg", "outcome", "fuel economy"), V("hp", "predictor", "horsepower"), V("wt", "moderator", "weight")),
+        details={"moderator_value": 2.2388, "at": "the mean − 1 SD"},
+    ),
     "cronbach_alpha": Result(
         kind="cronbach_alpha",
         n=200,

@@ -29,3 +29,13 @@ print(mauchly.test(fit, M = ~cond, X = ~1, idata = idata))
 
 # Tukey HSD on PlantGrowth, and ptukey at statsetter's quantiles (df >= 5) are in tests/test_analyses_posthoc.py:
 print(TukeyHSD(aov(weight ~ group, data = PlantGrowth))$group, digits = 15)
+
+# Moderation on mtcars (tests/test_analyses_moderation.py)
+d <- mtcars; d$hp_c <- d$hp - mean(d$hp); d$wt_c <- d$wt - mean(d$wt)
+f <- lm(mpg ~ hp_c * wt_c, data = d); print(coef(summary(f))); cat("r2", summary(f)$r.squared, "\n")
+for (v in c(mean(d$wt) - sd(d$wt), mean(d$wt), mean(d$wt) + sd(d$wt))) {
+  g <- lm(mpg ~ hp * I(wt - v), data = d); cat("slope at", v, coef(summary(g))["hp", ], confint(g)["hp", ], "\n") }
+V <- vcov(f); b <- coef(f); tc <- qt(0.975, f$df.residual)
+tfun <- function(m) (b["hp_c"] + b["hp_c:wt_c"] * m) / sqrt(V["hp_c", "hp_c"] + 2 * m * V["hp_c", "hp_c:wt_c"] + m^2 * V["hp_c:wt_c", "hp_c:wt_c"])
+g <- function(m) abs(tfun(m)) - tc
+cat("jn", uniroot(g, c(0, 2), tol = 1e-13)$root + mean(d$wt), uniroot(g, c(2, 100), tol = 1e-13)$root + mean(d$wt), "\n")

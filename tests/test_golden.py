@@ -147,6 +147,12 @@ GOLDEN = {
         "A repeated-measures ANOVA of the mood score across 2 measurements of 9 people (Greenhouse–Geisser correction) gave "
         "F(2.08, 16.66) = 5.20, p = .017, ε = .69, η²_G = .35. The means were before (M = 4.13, SD = 0.48) and after a week (M = 4.29, SD = 1.50).",
     ),
+    # REPORTING-RULES Regression: B with its CI, SE, t, p (docs/reporting-rules.md); a simple slope says at which moderator value (practice)
+    'simple_slope': (
+        '<i>B</i> = −0.06, 95% CI [−0.08, −0.04], <i>SE</i> = 0.01, <i>t</i>(28) = −5.66, <i>p</i> &lt; .001',
+        "At weight = 2.24 (the mean − 1 SD), the slope of fuel economy on horsepower was B = −0.06, 95% CI [−0.08, −0.04], SE = 0.01, "
+        "t(28) = −5.66, p < .001.",
+    ),
     # REPORTING-RULES Numbers: α drops the leading zero (APA 7 §6.36)
     'cronbach_alpha': (
         'α = .84, 95% CI [.81, .87]',

@@ -21,6 +21,7 @@ KINDS: dict[str, str] = {
     "linear_coefficient": "one coefficient of a linear regression",
     "linear_model": "a linear regression model as a whole",
     "linear_step": "a step of a hierarchical linear regression",
+    "simple_slope": "a predictor's slope at one value of a moderator (details.moderator_value, details.at)",
     "logistic_coefficient": "one coefficient of a logistic regression",
     "logistic_model": "a logistic regression model as a whole",
     "mann_whitney": "Mann-Whitney U test",
