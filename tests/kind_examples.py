@@ -253,6 +253,22 @@ EXAMPLES = {
         variables=(V("mpg", "outcome", "fuel economy"), V("hp", "predictor", "horsepower"), V("wt", "moderator", "weight")),
         details={"moderator_value": 2.2388, "at": "the mean − 1 SD"},
     ),
+    "mediation_path": Result(
+        kind="mediation_path",
+        statistic=Statistic("t", 5.9379, (98,)),
+        p=4.391e-08,
+        n=100,
+        estimate=Estimate("B", 0.561015, se=0.094480, ci=Interval(CI, 0.373522, 0.748509)),
+        variables=(V("X", "predictor", "training hours"), V("M", "mediator", "self-efficacy"), V("Y", "outcome", "performance")),
+        details={"path": "a"},
+    ),
+    "mediation_indirect": Result(
+        kind="mediation_indirect",
+        n=100,
+        estimate=Estimate("indirect effect", 0.356522, ci=Interval(CI, 0.2194, 0.5360)),
+        variables=(V("X", "predictor", "training hours"), V("M", "mediator", "self-efficacy"), V("Y", "outcome", "performance")),
+        details={"method": "percentile bootstrap, 5,000 resamples, seed 20240601"},
+    ),
     "cronbach_alpha": Result(
         kind="cronbach_alpha",
         n=200,

@@ -39,3 +39,10 @@ V <- vcov(f); b <- coef(f); tc <- qt(0.975, f$df.residual)
 tfun <- function(m) (b["hp_c"] + b["hp_c:wt_c"] * m) / sqrt(V["hp_c", "hp_c"] + 2 * m * V["hp_c", "hp_c:wt_c"] + m^2 * V["hp_c:wt_c", "hp_c:wt_c"])
 g <- function(m) abs(tfun(m)) - tc
 cat("jn", uniroot(g, c(0, 2), tol = 1e-13)$root + mean(d$wt), uniroot(g, c(2, 100), tol = 1e-13)$root + mean(d$wt), "\n")
+
+# Mediation paths on pingouin's mediation data (tests/test_analyses_mediation.py):
+#   python -c "import pingouin as pg; pg.read_dataset('mediation').to_csv('/tmp/mediation.csv', index=False)"
+d <- read.csv("/tmp/mediation.csv")
+cat("a", coef(summary(lm(M ~ X, d)))["X", ], confint(lm(M ~ X, d))["X", ], "\n")
+b <- coef(summary(lm(Y ~ X + M, d))); cat("b", b["M", ], "\n"); cat("c'", b["X", ], "\n")
+cat("c", coef(summary(lm(Y ~ X, d)))["X", ], "\n")

@@ -153,6 +153,17 @@ GOLDEN = {
         "At weight = 2.24 (the mean − 1 SD), the slope of fuel economy on horsepower was B = −0.06, 95% CI [−0.08, −0.04], SE = 0.01, "
         "t(28) = −5.66, p < .001.",
     ),
+    # REPORTING-RULES Regression: B with its CI, SE, t, p; a mediation path named (a, b, c, c′) and worded as an association (practice)
+    'mediation_path': (
+        '<i>B</i> = 0.56, 95% CI [0.37, 0.75], <i>SE</i> = 0.09, <i>t</i>(98) = 5.94, <i>p</i> &lt; .001',
+        "Path a, from training hours to self-efficacy, was B = 0.56, 95% CI [0.37, 0.75], SE = 0.09, t(98) = 5.94, p < .001.",
+    ),
+    # REPORTING-RULES Confidence intervals: the indirect effect with its bootstrap CI, resamples and seed stated (practice)
+    'mediation_indirect': (
+        '<i>ab</i> = 0.36, 95% CI [0.22, 0.54]',
+        "The indirect effect of training hours on performance through self-efficacy was ab = 0.36, 95% CI [0.22, 0.54] "
+        "(percentile bootstrap, 5,000 resamples, seed 20240601); the interval excludes zero.",
+    ),
     # REPORTING-RULES Numbers: α drops the leading zero (APA 7 §6.36)
     'cronbach_alpha': (
         'α = .84, 95% CI [.81, .87]',

@@ -1,0 +1,73 @@
+"""Simple mediation against R and pingouin on pingouin's bundled 'mediation' data (X → M → Y, 100 rows).
+
+R 4.x, run here (tests/r_reference.R): the paths are coefficients of lm(M ~ X), lm(Y ~ X + M) and lm(Y ~ X). The
+bootstrap CI of a·b is a random quantity: it is checked for reproducibility under its seed, against pingouin's
+mediation_analysis (its own resampling, so within Monte Carlo error), and for its coverage of the indirect effect."""
+
+from __future__ import annotations
+
+import pingouin as pg
+import pytest
+
+from statsetter import InputError, render
+from statsetter.analyses import mediation
+
+R_PATHS = {  # B, SE, t, p
+    "a": (0.561015316123459, 0.0944804804289862, 5.93789652186551, 4.39136170381895e-08),
+    "b": (0.635494587191664, 0.1005339414705, 6.32119439361822, 7.92264206387168e-09),
+    "c′": (0.0396039204186703, 0.109648438254307, 0.361190009171102, 0.718742902217027),
+    "c": (0.396126117146749, 0.111159788092407, 3.56357387814963, 0.000567112849082344),
+}
+
+
+@pytest.fixture(scope="module")
+def data():
+    return pg.read_dataset("mediation")
+
+
+@pytest.fixture(scope="module")
+def fitted(data):
+    return mediation(data, "X", "M", "Y")
+
+
+def test_paths_equal_r(fitted):
+    paths = {r.details["path"]: r for r in fitted if r.kind == "mediation_path"}
+    for path, (b, se, t, p) in R_PATHS.items():
+        r = paths[path]
+        assert r.estimate.value == pytest.approx(b, rel=1e-10) and r.estimate.se == pytest.approx(se, rel=1e-9)
+        assert r.statistic.value == pytest.approx(t, rel=1e-9) and r.p == pytest.approx(p, rel=1e-7)
+    assert (paths["a"].estimate.ci.low, paths["a"].estimate.ci.high) == pytest.approx((0.373521877625811, 0.748508754621108), rel=1e-9)
+
+
+def test_indirect_effect_and_its_bootstrap(data, fitted):
+    indirect = fitted[-1]
+    assert indirect.kind == "mediation_indirect"
+    assert indirect.estimate.value == pytest.approx(R_PATHS["a"][0] * R_PATHS["b"][0], rel=1e-10)
+    assert indirect.details["n_boot"] == 5000 and "seed" in indirect.details["method"]
+    again = mediation(data, "X", "M", "Y")[-1]
+    assert (again.estimate.ci.low, again.estimate.ci.high) == (indirect.estimate.ci.low, indirect.estimate.ci.high)  # the seed reproduces it
+    ref = pg.mediation_analysis(data=data, x="X", m="M", y="Y", seed=42, n_boot=5000)
+    row = ref[ref["path"] == "Indirect"].iloc[0]
+    assert float(row["coef"]) == pytest.approx(indirect.estimate.value, rel=1e-9)
+    width = indirect.estimate.ci.high - indirect.estimate.ci.low
+    assert abs(float(row["CI2.5"]) - indirect.estimate.ci.low) < 0.1 * width  # two independent resamplings agree within Monte Carlo error
+    assert abs(float(row["CI97.5"]) - indirect.estimate.ci.high) < 0.1 * width
+    bc = mediation(data, "X", "M", "Y", bias_corrected=True)[-1]
+    assert "bias-corrected" in bc.details["method"] and bc.estimate.ci.low < bc.estimate.value < bc.estimate.ci.high
+
+
+def test_wording_and_cautions(fitted):
+    indirect = fitted[-1]
+    text = render(indirect, "sentence").plain()
+    assert text.startswith("The indirect effect of X on Y through M was ab = 0.36, 95% CI [") and "excludes zero" in text
+    assert any("cannot establish" in n.text for n in indirect.notes)
+    assert any("proportion mediated" in n.text for n in indirect.notes)
+    for r in fitted:
+        assert "cause" not in render(r, "sentence").plain().lower()
+
+
+def test_refusals(data):
+    with pytest.raises(InputError, match="too few"):
+        mediation(data, "X", "M", "Y", n_boot=200)
+    with pytest.raises(InputError, match="named twice"):
+        mediation(data, "X", "X", "Y")
