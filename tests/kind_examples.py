@@ -269,6 +269,13 @@ EXAMPLES = {
         variables=(V("X", "predictor", "training hours"), V("M", "mediator", "self-efficacy"), V("Y", "outcome", "performance")),
         details={"method": "percentile bootstrap, 5,000 resamples, seed 20240601"},
     ),
+    "adjusted_mean": Result(
+        kind="adjusted_mean",
+        n=9,
+        estimate=Estimate("adjusted mean", 23.783, se=2.6757, ci=Interval(CI, 18.326, 29.240)),
+        variables=(V("Scores", "outcome", "the score"), V("Method", "factor", "the method")),
+        details={"level": "method A", "at": "income = 48.8"},
+    ),
     "cronbach_alpha": Result(
         kind="cronbach_alpha",
         n=200,

@@ -46,3 +46,10 @@ d <- read.csv("/tmp/mediation.csv")
 cat("a", coef(summary(lm(M ~ X, d)))["X", ], confint(lm(M ~ X, d))["X", ], "\n")
 b <- coef(summary(lm(Y ~ X + M, d))); cat("b", b["M", ], "\n"); cat("c'", b["X", ], "\n")
 cat("c", coef(summary(lm(Y ~ X, d)))["X", ], "\n")
+
+# ANCOVA on pingouin's ancova data (tests/test_analyses_ancova.py):
+#   python -c "import pingouin as pg; pg.read_dataset('ancova').to_csv('/tmp/ancova.csv', index=False)"
+d <- read.csv("/tmp/ancova.csv"); d$Method <- factor(d$Method)
+f <- lm(Scores ~ Method + Income, d); print(drop1(f, test = "F"))
+p <- predict(f, data.frame(Method = levels(d$Method), Income = mean(d$Income)), se.fit = TRUE, interval = "confidence"); print(cbind(p$fit, se = p$se.fit))
+print(anova(f, lm(Scores ~ Method * Income, d)))

@@ -164,6 +164,11 @@ GOLDEN = {
         "The indirect effect of training hours on performance through self-efficacy was ab = 0.36, 95% CI [0.22, 0.54] "
         "(percentile bootstrap, 5,000 resamples, seed 20240601); the interval excludes zero.",
     ),
+    # REPORTING-RULES Descriptives: M with its CI and SE; the adjustment said (practice)
+    'adjusted_mean': (
+        '<i>M</i> = 23.78, 95% CI [18.33, 29.24], <i>SE</i> = 2.68',
+        "The adjusted mean of the score for method A, at income = 48.8, was M = 23.78, 95% CI [18.33, 29.24], SE = 2.68.",
+    ),
     # REPORTING-RULES Numbers: α drops the leading zero (APA 7 §6.36)
     'cronbach_alpha': (
         'α = .84, 95% CI [.81, .87]',

@@ -1,0 +1,62 @@
+"""ANCOVA against R and pingouin on pingouin's bundled 'ancova' data (Scores by Method, adjusted for Income; 36 rows).
+
+R 4.x, run here (tests/r_reference.R): drop1(lm(Scores ~ Method + Income), test = "F") for the terms (Type II; with
+sum-to-zero contrasts the same, as a model without interactions has Type II = Type III), predict(..., se.fit = TRUE,
+interval = "confidence") at the mean income for the adjusted means, and anova() against Method * Income for the
+homogeneity of slopes. Second library: pingouin.ancova."""
+
+from __future__ import annotations
+
+import pingouin as pg
+import pytest
+
+from statsetter import InputError
+from statsetter.analyses import ancova
+
+R_TERMS = {"Method": (3, 571.0298833451, 3.33648, 0.03194), "Income": (1, 1678.3526873611, 29.41944, 6.3671e-06)}
+R_MEANS = [  # fit, lwr, upr, se (levels A-D)
+    (23.7830251197603, 18.3259775469338, 29.2400726925869, 2.67566148311920),
+    (30.0538405213900, 24.4329505560070, 35.6747304867730, 2.75599554163984),
+    (21.3332346415783, 16.4572065094122, 26.2092627737444, 2.39078008570207),
+    (18.5972728455015, 13.6136424276491, 23.5809032633538, 2.44353888750174),
+]
+R_SLOPES = (3, 0.88368, 0.4615)
+
+
+@pytest.fixture(scope="module")
+def data():
+    return pg.read_dataset("ancova")
+
+
+@pytest.mark.parametrize("ss_type", [2, 3])
+def test_terms_equal_r_and_pingouin(data, ss_type):
+    rs = ancova(data, "Scores", "Method", ["Income"], ss_type=ss_type)
+    terms = {r.details["term"]: r for r in rs if r.kind == "anova_term"}
+    for term, (df1, ss, F, p) in R_TERMS.items():
+        r = terms[term]
+        assert r.statistic.df == (df1, 31) and r.details["ss"] == pytest.approx(ss, rel=1e-10)
+        assert r.statistic.value == pytest.approx(F, rel=1e-5) and r.p == pytest.approx(p, rel=1e-3)  # R printed 6 significant digits
+    ref = pg.ancova(data=data, dv="Scores", covar="Income", between="Method")
+    assert terms["Method"].effects[0].value == pytest.approx(float(ref["np2"].iloc[0]), rel=1e-9)
+    assert terms["Method"].p == pytest.approx(float(ref["p_unc"].iloc[0]), rel=1e-9)
+
+
+def test_adjusted_means_equal_r(data):
+    means = [r for r in ancova(data, "Scores", "Method", ["Income"]) if r.kind == "adjusted_mean"]
+    assert [m.details["level"] for m in means] == ["A", "B", "C", "D"]
+    for m, (fit, low, high, se) in zip(means, R_MEANS):
+        assert m.estimate.value == pytest.approx(fit, rel=1e-12) and m.estimate.se == pytest.approx(se, rel=1e-10)
+        assert (m.estimate.ci.low, m.estimate.ci.high) == pytest.approx((low, high), rel=1e-10)
+
+
+def test_homogeneity_of_slopes_is_said(data):
+    (term, *_) = ancova(data, "Scores", "Method", ["Income"])
+    note = next(n.text for n in term.notes if n.text.startswith("Homogeneity"))
+    assert "F(3, 28) = 0.8837, p = 0.4615" in note and "misdescribes" not in note
+
+
+def test_refusals(data):
+    with pytest.raises(InputError, match="at least one"):
+        ancova(data, "Scores", "Method", [])
+    with pytest.raises(InputError, match="ss_type"):
+        ancova(data, "Scores", "Method", ["Income"], ss_type=1)
