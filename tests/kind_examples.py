@@ -274,7 +274,7 @@ EXAMPLES = {
         n=9,
         estimate=Estimate("adjusted mean", 23.783, se=2.6757, ci=Interval(CI, 18.326, 29.240)),
         variables=(V("Scores", "outcome", "the score"), V("Method", "factor", "the method")),
-        details={"level": "method A", "at": "income = 48.8"},
+        details={"level": "method A", "at": "income\u00a0=\u00a048.8"},
     ),
     "cronbach_alpha": Result(
         kind="cronbach_alpha",

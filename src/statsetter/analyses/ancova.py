@@ -91,7 +91,7 @@ def ancova(
     means = {z: float(frame[z].mean()) for z in cov_names}
     grid = pd.DataFrame({"g_": [category_text(v) for v in levels], **{z: [m] * len(levels) for z, m in means.items()}})
     predicted = fit.get_prediction(grid).summary_frame(alpha=1 - level)
-    at = ", ".join(f"{shown[cov]} = {means[z]:.4g}" for z, cov in zip(cov_names, covariates))
+    at = ", ".join(f"{shown[cov]}\u00a0=\u00a0{means[z]:.4g}" for z, cov in zip(cov_names, covariates))  # kept on one line
     for lev, (_, row) in zip(levels, predicted.iterrows()):
         group_n = int((frame["g_"] == category_text(lev)).sum())
         out.append(Result(
