@@ -66,7 +66,9 @@ def subject(r: Result) -> str:
     return (outcome or by or [_TEST_NAMES.get(r.kind, r.kind.replace("_", " "))])[0]
 
 
-_TEST_NAMES = {"mcnemar": "McNemar's test", "cochran_q": "Cochran's Q test", "friedman": "Friedman test"}
+_TEST_NAMES = {"mcnemar": "McNemar's test", "cochran_q": "Cochran's Q test", "friedman": "Friedman test", "anova_rm": "repeated-measures ANOVA",
+               "simple_slope": "simple slope", "mediation_path": "mediation path", "mediation_indirect": "indirect effect",
+               "adjusted_mean": "adjusted mean"}
 
 
 def row_label(r: Result, named_twice: bool = False) -> str:
@@ -75,7 +77,7 @@ def row_label(r: Result, named_twice: bool = False) -> str:
     label = subject(r)
     label = label[:1].upper() + label[1:]
     if named_twice:
-        test = KINDS.get(r.kind, r.kind).split(" (")[0]
+        test = _TEST_NAMES.get(r.kind) or KINDS.get(r.kind, r.kind).split(" (")[0]
         variant = r.details.get("variant")
         label += f" ({variant.capitalize()} {test})" if variant in ("welch", "student") else f" ({test})"
     return label
