@@ -60,3 +60,14 @@ def test_refusals(data):
         ancova(data, "Scores", "Method", [])
     with pytest.raises(InputError, match="ss_type"):
         ancova(data, "Scores", "Method", ["Income"], ss_type=1)
+
+
+def test_pingouin_ancova_read_equals_the_analysis(data):
+    from statsetter.adapters import to_records
+
+    read = [r for r in to_records(pg.ancova(data=data, dv="Scores", covar="Income", between="Method"), ss_type=2)]
+    mine = [r for r in ancova(data, "Scores", "Method", ["Income"]) if r.kind == "anova_term"]
+    assert [r.kind for r in read] == ["anova_term", "anova_term"]
+    for a, b in zip(read, mine):
+        assert a.statistic.value == pytest.approx(b.statistic.value, rel=1e-9) and a.statistic.df == b.statistic.df
+        assert a.p == pytest.approx(b.p, rel=1e-9) and a.effects[0].value == pytest.approx(b.effects[0].value, rel=1e-9)

@@ -71,3 +71,19 @@ def test_refusals(data):
         mediation(data, "X", "M", "Y", n_boot=200)
     with pytest.raises(InputError, match="named twice"):
         mediation(data, "X", "X", "Y")
+
+
+def test_pingouin_mediation_read_and_where_it_differs(data, fitted):
+    """pingouin's frame gives a, c, c′ and the indirect effect equal to ours; its "Y ~ M" row is the regression of Y on M
+    alone (0.654, not R's b = 0.635 with X held constant), so it is not read as path b."""
+    from statsetter.adapters import to_records
+
+    frame = pg.mediation_analysis(data=data, x="X", m="M", y="Y", seed=42, n_boot=2000)
+    read = {r.details.get("path", "ab"): r for r in to_records(frame)}
+    assert set(read) == {"a", "c", "c′", "ab"}
+    mine = {r.details["path"]: r for r in fitted}
+    for path in ("a", "c", "c′"):
+        assert read[path].estimate.value == pytest.approx(mine[path].estimate.value, rel=1e-9)
+    assert read["ab"].estimate.value == pytest.approx(mine["a·b"].estimate.value, rel=1e-9)
+    pingouin_b = float(frame.iloc[1]["coef"])
+    assert pingouin_b == pytest.approx(0.654173, abs=1e-6) and abs(pingouin_b - R_PATHS["b"][0]) > 0.01

@@ -204,3 +204,14 @@ def test_rm_anova_auto_rule_and_sentence(weeks):
     assert render(r, "stats").plain() == "F(2.08, 16.66) = 5.20, p = .017, ε = .69, η²_G = .35"
     with pytest.raises(InputError, match="rows for"):
         rm_anova(pd.concat([weeks.reset_index().melt(id_vars="index")] * 2), outcome="value", subject="index", within="variable")
+
+
+def test_pingouin_rm_anova_read_equals_the_analysis(weeks):
+    from statsetter.adapters import to_records
+    from statsetter.analyses import rm_anova
+
+    (read,) = to_records(pg.rm_anova(weeks, correction=True))
+    (mine,) = rm_anova(weeks, list(weeks.columns), correction="gg")
+    assert read.kind == "anova_rm" and read.statistic.df == pytest.approx(mine.statistic.df, rel=1e-9)
+    assert read.p == pytest.approx(mine.p, rel=1e-9) and read.effects[0].value == pytest.approx(mine.effects[0].value, rel=1e-9)
+    assert read.details["mauchly_p"] == pytest.approx(mine.details["mauchly_p"], rel=1e-9)

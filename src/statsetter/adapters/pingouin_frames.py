@@ -36,6 +36,9 @@ _SIGNATURES: list[tuple[frozenset[str], str]] = [
     (frozenset({"W_val", "p_val", "RBC"}), "pingouin.wilcoxon"),
     (frozenset({"Source", "ddof1", "H", "p_unc"}), "pingouin.kruskal"),
     (frozenset({"Source", "W", "ddof1", "Q", "p_unc"}), "pingouin.friedman"),
+    (frozenset({"Source", "ddof1", "ddof2", "F", "p_unc", "ng2"}), "pingouin.rm_anova"),
+    (frozenset({"Source", "SS", "DF", "F", "p_unc", "np2"}), "pingouin.ancova"),
+    (frozenset({"path", "coef", "se", "pval", "CI2.5", "CI97.5"}), "pingouin.mediation_analysis"),
     (frozenset({"Source", "dof", "Q", "p_unc"}), "pingouin.cochran"),
     (frozenset({"Source", "SS", "DF", "MS", "F", "p_unc"}), "pingouin.anova"),
     (frozenset({"Source", "ddof1", "ddof2", "F", "p_unc", "np2"}), "pingouin.anova"),
@@ -366,6 +369,46 @@ def friedman(frame: Any, ctx: Context) -> list[Result]:
                   effects=(EffectSize("kendall_w", float(row["W"]), method="Kendall's W (pingouin)"),))]
 
 
+def rm_anova(frame: Any, ctx: Context) -> list[Result]:
+    """One within factor: the Greenhouse–Geisser-corrected test when pingouin gives it (correction=True), else uncorrected."""
+    row = _one(frame)
+    df1, df2 = float(row["ddof1"]), float(row["ddof2"])
+    eps = float(row["eps"]) if "eps" in frame.columns and "p_GG_corr" in frame.columns else None
+    details: dict[str, Any] = {"k": int(df1) + 1, "p_uncorrected": float(row["p_unc"]), "df1_uncorrected": df1, "df2_uncorrected": df2}
+    if eps is not None:
+        details.update(correction="Greenhouse–Geisser correction", epsilon=eps, epsilon_gg=eps)
+    else:
+        details["correction"] = "no sphericity correction"
+    if "W_spher" in frame.columns:
+        details.update(mauchly_w=float(row["W_spher"]), mauchly_p=float(row["p_spher"]))
+    notes = [absent(ctx, ["n and the means", "the Huynh–Feldt ε", "η²p"])]
+    return [_base(ctx, "anova_rm", notes, statistic=Statistic("F", float(row["F"]), (df1 * (eps or 1.0), df2 * (eps or 1.0))),
+                  p=float(row["p_GG_corr"]) if eps is not None else float(row["p_unc"]),
+                  effects=(EffectSize("eta2_g", float(row["ng2"]), method="generalized η² (pingouin)"),), details=details)]
+
+
+def mediation_analysis(frame: Any, ctx: Context) -> list[Result]:
+    """Paths a, c, c′ and the indirect effect. pingouin's "Y ~ M" row is the regression of Y on M alone, not the b path
+    (Y on M with X held constant), so it is not read as b; the bootstrap settings are not in the frame."""
+    rows = {str(r["path"]): r for _, r in frame.iterrows()}
+    out = []
+    for name, path in (("Total", "c"), ("Direct", "c′")):
+        if name in rows:
+            r = rows[name]
+            out.append(_base(ctx, "mediation_path", [], estimate=Estimate("B", float(r["coef"]), se=float(r["se"]),
+                             ci=Interval(ctx.level, float(r["CI2.5"]), float(r["CI97.5"]))), p=float(r["pval"]), details={"path": path}))
+    first = str(frame["path"].iloc[0])  # pingouin lists "M ~ X" (path a) first
+    if first not in ("Total", "Direct", "Indirect"):
+        r = rows[first]
+        out.insert(0, _base(ctx, "mediation_path", [], estimate=Estimate("B", float(r["coef"]), se=float(r["se"]),
+                            ci=Interval(ctx.level, float(r["CI2.5"]), float(r["CI97.5"]))), p=float(r["pval"]), details={"path": "a"}))
+    if "Indirect" in rows:
+        r = rows["Indirect"]
+        out.append(_base(ctx, "mediation_indirect", [Note("method", "pingouin's bootstrap CI; its resamples and seed are not in the result.")],
+                         estimate=Estimate("indirect effect", float(r["coef"]), ci=Interval(ctx.level, float(r["CI2.5"]), float(r["CI97.5"])))))
+    return out
+
+
 def cochran(frame: Any, ctx: Context) -> list[Result]:
     row = _one(frame)
     return [_base(ctx, "cochran_q", [absent(ctx, ["n and the counts per measurement"])], statistic=Statistic("Q", float(row["Q"]), (float(row["dof"]),)),
@@ -484,5 +527,8 @@ ADAPTERS = {
         Adapter("pingouin.kruskal", LIB, kruskal, "k", _kruskal),
         Adapter("pingouin.friedman", LIB, friedman),  # read as printed; long data with subjects are not merged
         Adapter("pingouin.cochran", LIB, cochran),
+        Adapter("pingouin.rm_anova", LIB, rm_anova),
+        Adapter("pingouin.ancova", LIB, anova),  # the terms of an ANCOVA table, as an ANOVA table's
+        Adapter("pingouin.mediation_analysis", LIB, mediation_analysis),
     )
 }
