@@ -215,3 +215,27 @@ def test_pingouin_rm_anova_read_equals_the_analysis(weeks):
     assert read.kind == "anova_rm" and read.statistic.df == pytest.approx(mine.statistic.df, rel=1e-9)
     assert read.p == pytest.approx(mine.p, rel=1e-9) and read.effects[0].value == pytest.approx(mine.effects[0].value, rel=1e-9)
     assert read.details["mauchly_p"] == pytest.approx(mine.details["mauchly_p"], rel=1e-9)
+
+
+# R 4.x, run here: pairwise.t.test(y, cond, paired = TRUE, p.adjust.method = "holm" / "bonferroni") on the same 9 people,
+# and t.test(Before, 1 week, paired = TRUE, conf.level = 1 - .05/6) for a Bonferroni-level CI
+R_HOLM = {("Before", "1 week"): 0.78135935387769417, ("Before", "2 week"): 0.04039541130205948, ("Before", "3 week"): 0.00432666025805935,
+          ("1 week", "2 week"): 0.514156943221195, ("1 week", "3 week"): 0.120374788323789, ("2 week", "3 week"): 0.591952129430062}
+R_BONF = {("Before", "2 week"): 0.04847449356247138, ("1 week", "3 week"): 0.180562182485683}
+
+
+def test_rm_anova_pairwise_paired_tests_equal_r(weeks):
+    from statsetter.analyses import rm_anova
+
+    main, *pairs = rm_anova(weeks, list(weeks.columns), pairwise="holm")
+    assert main.kind == "anova_rm" and len(pairs) == 6
+    for r in pairs:
+        key = (r.groups[0].label, r.groups[1].label)
+        assert r.p == pytest.approx(R_HOLM[key], rel=1e-9) and r.kind == "posthoc_pair"
+    bonf = {(r.groups[0].label, r.groups[1].label): r for r in rm_anova(weeks, list(weeks.columns), pairwise="bonferroni")[1:]}
+    for key, p in R_BONF.items():
+        assert bonf[key].p == pytest.approx(p, rel=1e-9)
+    first = bonf[("Before", "1 week")]
+    assert (first.estimate.ci.low, first.estimate.ci.high) == pytest.approx((-2.04071642222507, 1.72960531111396), rel=1e-9)
+    assert first.statistic.value == pytest.approx(-0.287062496720373, rel=1e-9)
+    assert "Holm-adjusted" in render(pairs[0], "sentence").plain()

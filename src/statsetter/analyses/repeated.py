@@ -12,7 +12,7 @@ from typing import TYPE_CHECKING, Literal, Mapping, Sequence
 
 from ..coding import category_text
 from ..errors import InputError
-from ..records import EffectSize, GroupSummary, Interval, Note, Result, Statistic
+from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic
 from . import _common as c
 
 if TYPE_CHECKING:
@@ -216,8 +216,10 @@ def rm_anova(
     subject: str | None = None,
     within: str | None = None,
     correction: RMCorrection = "auto",
+    pairwise: str | None = None,
+    level: float = 0.95,
     labels: Mapping[str, str] | None = None,
-) -> Result:
+) -> "Result | list[Result]":
     """One-way repeated-measures ANOVA: F for the measurements against the
     measurement × person error; Mauchly's test of sphericity; the
     Greenhouse–Geisser ε̂ and the Huynh–Feldt ε̃ (Huynh & Feldt, 1976, the
@@ -228,7 +230,10 @@ def rm_anova(
     Effect sizes: generalized η² (η²G = SS_effect / (SS_effect + SS_persons
     + SS_error); Olejnik & Algina, 2003; Bakeman, 2005) and partial η². Wide
     data (``columns``) or long (``outcome``, ``subject``, ``within``); people
-    with a missing measurement are dropped."""
+    with a missing measurement are dropped. ``pairwise`` ("holm" or
+    "bonferroni") adds every pair of measurements as paired t tests with
+    adjusted p, the mean difference's CI (at the Bonferroni-adjusted level
+    for Bonferroni; unadjusted for Holm, said) and d_z; the test first."""
     import numpy as np
     from scipy import stats
 
@@ -281,7 +286,7 @@ def rm_anova(
     variables = c.variables({f"measurement {i + 1}": col for i, col in enumerate(columns)}, labels)
     if measured:
         variables = c.variables({"outcome": measured}, labels) + variables
-    return Result(
+    main = Result(
         kind="anova_rm",
         statistic=Statistic("F", F, (df1 * eps, df2 * eps)),
         p=p_value,
@@ -294,3 +299,47 @@ def rm_anova(
         details=details,
         provenance=c.provenance("statsetter.analyses.rm_anova"),
     )
+    if pairwise is None:
+        return main
+    return [main, *_paired_pairs(Y, groups, variables, pairwise, level, missing)]
+
+
+def _paired_pairs(Y, groups, variables, adjust: str, level: float, missing: Note | None) -> list[Result]:  # type: ignore[no-untyped-def]
+    """Every pair of measurements: paired t tests, Holm- or Bonferroni-adjusted."""
+    from itertools import combinations
+
+    import numpy as np
+    from scipy import stats
+    from statsmodels.stats.multitest import multipletests
+
+    if adjust not in ("holm", "bonferroni"):
+        raise InputError(f"pairwise: {adjust!r} is not holm or bonferroni")
+    pairs = list(combinations(range(Y.shape[1]), 2))
+    tests = [stats.ttest_rel(Y[:, i], Y[:, j]) for i, j in pairs]
+    adjusted = multipletests([t.pvalue for t in tests], method=adjust)[1]
+    m = len(pairs)
+    ci_level = 1 - (1 - level) / m if adjust == "bonferroni" else level
+    name = {"holm": "Holm", "bonferroni": "Bonferroni"}[adjust]
+    note = Note("correction", f"Paired t tests between the measurements, {name}-adjusted p over {m} pairs; "
+                              + (f"CIs at the Bonferroni-adjusted level {ci_level:.4g}." if adjust == "bonferroni" else "CIs unadjusted."))
+    out = []
+    for (i, j), t, p in zip(pairs, tests, adjusted):
+        d = Y[:, i] - Y[:, j]
+        n = len(d)
+        se = float(d.std(ddof=1) / np.sqrt(n))
+        half = float(stats.t.ppf(0.5 + ci_level / 2, n - 1)) * se
+        mean = float(d.mean())
+        out.append(Result(
+            kind="posthoc_pair",
+            statistic=Statistic("t", float(t.statistic), (n - 1.0,)),
+            p=float(min(p, 1.0)),
+            n=n,
+            estimate=Estimate("mean difference", mean, se=se, ci=Interval(ci_level, mean - half, mean + half)),
+            effects=(EffectSize("d_z", mean / float(d.std(ddof=1)), method="mean difference / SD of the differences"),),
+            groups=(groups[i], groups[j]),
+            variables=variables,
+            notes=c.notes(note, missing),
+            details={"procedure": f"paired t tests, {name}-adjusted", "comparisons": m},
+            provenance=c.provenance("statsetter.analyses.rm_anova(pairwise)", statsmodels=True),
+        ))
+    return out
