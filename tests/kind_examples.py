@@ -276,6 +276,21 @@ EXAMPLES = {
         variables=(V("Scores", "outcome", "the score"), V("Method", "factor", "the method")),
         details={"level": "method A", "at": "income\u00a0=\u00a048.8"},
     ),
+    "mixed_model": Result(
+        kind="mixed_model",
+        n=108,
+        effects=(EffectSize("ICC", 0.4322),),
+        variables=(V("distance", "outcome", "the distance"), V("Subject", "group", "children")),
+        details={"method": "REML", "groups": 27, "log_likelihood": -218.7563, "aic": 447.5125, "bic": 460.7823},
+    ),
+    "model_comparison": Result(
+        kind="model_comparison",
+        statistic=Statistic("chi2", 8.5331, (1,)),
+        p=0.003488,
+        n=108,
+        variables=(V("distance", "outcome", "the distance"), V("Sex", "predictor", "sex")),
+        details={"added": "sex", "aic_reduced": 451.3895, "aic_full": 444.8565},
+    ),
     "cronbach_alpha": Result(
         kind="cronbach_alpha",
         n=200,

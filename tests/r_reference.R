@@ -60,3 +60,11 @@ long <- data.frame(y = as.vector(as.matrix(Y)), cond = factor(rep(colnames(Y), e
 print(pairwise.t.test(long$y, long$cond, paired = TRUE, p.adjust.method = "holm")$p.value)
 print(pairwise.t.test(long$y, long$cond, paired = TRUE, p.adjust.method = "bonferroni")$p.value)
 tt <- t.test(Y[, 1], Y[, 2], paired = TRUE, conf.level = 1 - 0.05 / 6); cat("ci12 bonf", tt$conf.int, tt$statistic, "\n")
+
+# Linear mixed models (tests/test_analyses_multilevel.py): nlme's Orthodont, written to tests/data/orthodont.csv
+library(nlme); data(Orthodont)
+m <- lme(distance ~ age + Sex, random = ~1 | Subject, data = Orthodont, method = "REML"); print(summary(m)$tTable); print(VarCorr(m))
+cat("ll", logLik(m), "AIC", AIC(m), "BIC", BIC(m), "\n")
+m0 <- lme(distance ~ 1, random = ~1 | Subject, data = Orthodont, method = "REML"); v <- as.numeric(VarCorr(m0)[, 1]); cat("icc", v[1] / (v[1] + v[2]), "\n")
+print(anova(lme(distance ~ age, random = ~1 | Subject, data = Orthodont, method = "ML"), lme(distance ~ age + Sex, random = ~1 | Subject, data = Orthodont, method = "ML")))
+s <- lme(distance ~ age, random = ~age | Subject, data = Orthodont, method = "REML"); print(summary(s)$tTable); print(VarCorr(s))

@@ -169,6 +169,17 @@ GOLDEN = {
         '<i>M</i> = 23.78, 95% CI [18.33, 29.24], <i>SE</i> = 2.68',
         "The adjusted mean of the score for method A, at income = 48.8, was M = 23.78, 95% CI [18.33, 29.24], SE = 2.68.",
     ),
+    # REPORTING-RULES Numbers: an ICC cannot exceed 1, no leading zero (APA 7 §6.36); the estimation method said (practice)
+    'mixed_model': (
+        'ICC = .43',
+        "A linear mixed model of the distance with a random intercept for each of 27 children, estimated by REML (N = 108), had a "
+        "log-likelihood of −218.76 (AIC = 447.51, BIC = 460.78). The intraclass correlation of the intercept-only model was ICC = .43.",
+    ),
+    # REPORTING-RULES Reporting by test: chi-square with its df (APA 7 §6.43); the test named (practice)
+    'model_comparison': (
+        'χ<sup>2</sup>(1) = 8.53, <i>p</i> = .003',
+        "Adding sex to the model of the distance gave χ²(1) = 8.53, p = .003 (likelihood-ratio test; AIC 451.39 and 444.86).",
+    ),
     # REPORTING-RULES Numbers: α drops the leading zero (APA 7 §6.36)
     'cronbach_alpha': (
         'α = .84, 95% CI [.81, .87]',

@@ -22,7 +22,7 @@ from typing import Any as _Any, Callable as _Callable
 from ..errors import FormerUse as _FormerUse
 from . import anova as _anova, chisquare as _chisquare, choose as _choose, correlation as _correlation, descriptives as _descriptives
 from . import matrix as _matrix, posthoc as _posthoc, ranks as _ranks, regression as _regression, repeated as _repeated, scales as _scales
-from . import ancova as _ancova, mediation as _mediation, moderation as _moderation, ttests as _ttests
+from . import ancova as _ancova, mediation as _mediation, multilevel as _multilevel, moderation as _moderation, ttests as _ttests
 from .choose import level_of
 from .scales import scale_score
 
@@ -104,6 +104,8 @@ rm_anova = _public(_repeated.rm_anova)
 moderation = _public(_moderation.moderation)
 mediation = _public(_mediation.mediation)
 ancova = _public(_ancova.ancova)
+mixed_model = _public(_multilevel.mixed_model)
+compare_models = _public(_multilevel.compare_models)
 linear_regression = _public(_regression.linear_regression)
 hierarchical_steps = _public(_regression.hierarchical_steps)
 logistic_regression = _public(_regression.logistic_regression)
@@ -115,7 +117,7 @@ t_one_sample = _public(_ttests.t_one_sample)
 __all__ = [
     "analyse", "describe", "level_of", "correlation_matrix", "correlate", "pearson", "spearman", "kendall",
     "t_independent", "t_paired", "t_one_sample", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
-    "mcnemar", "cochran_q", "friedman", "rm_anova", "moderation", "mediation", "ancova",
+    "mcnemar", "cochran_q", "friedman", "rm_anova", "moderation", "mediation", "ancova", "mixed_model", "compare_models",
     "anova_oneway", "posthoc", "factorial_anova", "chi_square", "fisher_exact", "goodness_of_fit",
     "linear_regression", "hierarchical_steps", "logistic_regression", "cronbach_alpha", "scale_score", "RENAMED",
 ]

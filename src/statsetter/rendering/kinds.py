@@ -24,6 +24,8 @@ KINDS: dict[str, str] = {
     "mediation_path": "one path of a simple mediation model (details.path: a, b, c or c′)",
     "mediation_indirect": "the indirect effect a·b of a mediation with its bootstrap CI (details.n_boot, seed, method)",
     "adjusted_mean": "an ANCOVA's adjusted (estimated marginal) mean of one group at the covariate means",
+    "mixed_model": "a linear mixed model as a whole (details: method, groups, log_likelihood, aic, bic, variances; ICC)",
+    "model_comparison": "a likelihood-ratio test of nested models fitted by ML (details.added)",
     "simple_slope": "a predictor's slope at one value of a moderator (details.moderator_value, details.at)",
     "logistic_coefficient": "one coefficient of a logistic regression",
     "logistic_model": "a logistic regression model as a whole",

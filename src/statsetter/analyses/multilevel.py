@@ -1,0 +1,179 @@
+"""Multilevel (mixed-effects) linear models through statsmodels' MixedLM.
+
+`mixed_model` fits the outcome on fixed predictors with a random intercept
+per group and, on request, random slopes. The model record gives the
+estimation method (REML or ML), the log-likelihood, AIC and BIC (counted as
+R's nlme counts them: the fixed coefficients plus the variance parameters,
+BIC with n − p observations under REML), the variance components and the
+ICC of the intercept-only model; one record per fixed effect gives B, SE,
+z, p and the Wald CI — statsmodels tests fixed effects with z (a normal
+approximation; R's lme uses t with containment df, which gives slightly
+larger p in small samples), said in every record. `compare_models` fits two
+nested models by ML and gives the likelihood-ratio test.
+"""
+
+from __future__ import annotations
+
+import math
+from typing import TYPE_CHECKING, Literal, Mapping, Sequence
+
+from ..errors import InputError
+from ..records import EffectSize, Estimate, Interval, Note, Result, Statistic, Variable
+from . import _common as c
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+Method = Literal["REML", "ML"]
+_Z_NOTE = Note("method", "Fixed effects tested with z (statsmodels' normal approximation; R's lme uses t with containment df).")
+
+
+def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: str, slopes: Sequence[str], method: Method,  # type: ignore[no-untyped-def]
+         reference: Mapping[str, object] | None = None):
+    import warnings
+
+    import numpy as np
+    from statsmodels.regression.mixed_linear_model import MixedLM
+
+    from .regression import _design
+
+    y = c.numeric(data, outcome).to_numpy(dtype=float)
+    if predictors:
+        X, meta, coding = _design(data, list(predictors), dict(reference or {}), None)
+        X = np.asarray(X, dtype=float)
+    else:
+        X, meta, coding = np.ones((len(y), 1)), [], []
+    Z = np.column_stack([np.ones(len(y)), *[c.numeric(data, s).to_numpy(dtype=float) for s in slopes]])
+    with warnings.catch_warnings(record=True) as caught:
+        warnings.simplefilter("always")
+        fit = MixedLM(y, X, groups=data[group].to_numpy(), exog_re=Z).fit(reml=method == "REML")
+    problems = [str(w.message).split("\n")[0] for w in caught if "converge" in str(w.message).lower() or "singular" in str(w.message).lower()
+                or "boundary" in str(w.message).lower()]
+    return fit, meta, coding, problems, X.shape[1], Z.shape[1]
+
+
+def _information(fit, n: int, p: int, q: int, method: Method) -> tuple[float, float, float]:  # type: ignore[no-untyped-def]
+    """log-likelihood, AIC and BIC as R's nlme counts them: k = p fixed + q(q + 1)/2 random + 1 residual parameters."""
+    ll = float(fit.llf)
+    k = p + q * (q + 1) // 2 + 1
+    n_eff = n - p if method == "REML" else n
+    return ll, -2 * ll + 2 * k, -2 * ll + k * math.log(n_eff)
+
+
+def mixed_model(
+    df: "pd.DataFrame",
+    outcome: str,
+    predictors: Sequence[str],
+    group: str,
+    *,
+    random_slopes: Sequence[str] = (),
+    method: Method = "REML",
+    reference: Mapping[str, object] | None = None,
+    level: float = 0.95,
+    labels: Mapping[str, str] | None = None,
+) -> list[Result]:
+    """The model record, then one record per fixed effect (intercept first;
+    a nominal predictor as indicators against its ``reference`` category, as
+    in `linear_regression`)."""
+    from scipy import stats
+
+    if method not in ("REML", "ML"):
+        raise InputError(f"method: {method!r} is not REML or ML")
+    names = [outcome, *predictors, group, *[s for s in random_slopes if s not in predictors]]
+    data, missing = c.listwise(df, list(dict.fromkeys(names)))
+    if data[group].nunique() < 2:
+        raise InputError(f"{group}: one group; a multilevel model needs several")
+    fit, meta, coding, problems, p, q = _fit(data, outcome, predictors, group, random_slopes, method, reference)
+    null, *_ = _fit(data, outcome, [], group, (), method)
+    import numpy as np
+
+    tau, sigma2 = float(np.asarray(null.cov_re)[0, 0]), float(null.scale)
+    ll, aic, bic = _information(fit, len(data), p, q, method)
+    cov_re = np.asarray(fit.cov_re)
+    re_names = ["intercept", *random_slopes]
+    components: dict[str, object] = {f"variance_{re_names[i]}": float(cov_re[i, i]) for i in range(q)}
+    for i in range(q):
+        for j in range(i + 1, q):
+            components[f"correlation_{re_names[i]}_{re_names[j]}"] = float(cov_re[i, j] / math.sqrt(cov_re[i, i] * cov_re[j, j]))
+    components["variance_residual"] = float(fit.scale)
+    named = dict(labels or {})
+    variables = (Variable(outcome, named.get(outcome, outcome), "outcome"), *(Variable(v, named.get(v, v), "predictor") for v in predictors),
+                 Variable(group, named.get(group, group), "group"))
+    groups = int(data[group].nunique())
+    notes = [Note("method", f"Linear mixed model by {method} (statsmodels MixedLM): random intercept"
+                            + (f" and slope(s) of {', '.join(named.get(s, s) for s in random_slopes)}" if random_slopes else "")
+                            + f" for {named.get(group, group)} ({groups} groups)."), _Z_NOTE]
+    notes += [Note("caution", f"Fit warning: {w}") for w in dict.fromkeys(problems)]
+    prov = c.provenance("statsetter.analyses.mixed_model", statsmodels=True)
+    model = Result(
+        kind="mixed_model",
+        n=len(data),
+        effects=(EffectSize("ICC", tau / (tau + sigma2), method="intercept-only model: τ₀₀ / (τ₀₀ + σ²)"),),
+        variables=variables,
+        notes=c.notes(*notes, *coding, missing),  # type: ignore[arg-type]
+        details={"method": method, "groups": groups, "log_likelihood": ll, "aic": aic, "bic": bic, **components},
+        provenance=prov,
+    )
+    out = [model]
+    crit = float(stats.norm.ppf(0.5 + level / 2))
+    for i, (term, source, category, ref) in enumerate([("Intercept", "Intercept", None, None), *meta]):
+        b, se = float(np.asarray(fit.fe_params)[i]), float(np.asarray(fit.bse_fe)[i])
+        z = b / se
+        shown = named.get(source, source)
+        details: dict[str, object] = {"term": term, "intercept": i == 0, "adjusted": len(meta) > 1, "multilevel": True}
+        if category is not None:
+            details.update(category=category, reference_category=ref)
+            shown = f"{shown} = {category}"
+        out.append(Result(
+            kind="linear_coefficient",
+            statistic=Statistic("z", z),
+            p=float(2 * stats.norm.sf(abs(z))),
+            n=len(data),
+            estimate=Estimate("B", b, se=se, ci=Interval(level, b - crit * se, b + crit * se)),
+            variables=(Variable(outcome, named.get(outcome, outcome), "outcome"), Variable(source, shown, "predictor")),
+            notes=c.notes(_Z_NOTE, missing),
+            details=details,
+            provenance=prov,
+        ))
+    return out
+
+
+def compare_models(
+    df: "pd.DataFrame",
+    outcome: str,
+    reduced: Sequence[str],
+    full: Sequence[str],
+    group: str,
+    *,
+    random_slopes: Sequence[str] = (),
+    labels: Mapping[str, str] | None = None,
+) -> Result:
+    """The likelihood-ratio test of nested models, both fitted by ML on the
+    same complete rows: χ² = 2(LL_full − LL_reduced) on the difference in
+    parameters; AIC and BIC of both in the details."""
+    from scipy import stats
+
+    if not set(reduced) < set(full):
+        raise InputError("reduced: its predictors must be a proper subset of full's (nested models)")
+    names = [outcome, *full, group, *[s for s in random_slopes if s not in full]]
+    data, missing = c.listwise(df, list(dict.fromkeys(names)))
+    small, _, _, _, p0, q = _fit(data, outcome, reduced, group, random_slopes, "ML")
+    large, _, _, _, p1, _ = _fit(data, outcome, full, group, random_slopes, "ML")
+    ll0, aic0, bic0 = _information(small, len(data), p0, q, "ML")
+    ll1, aic1, bic1 = _information(large, len(data), p1, q, "ML")
+    chi2 = max(2 * (ll1 - ll0), 0.0)
+    dof = p1 - p0
+    named = dict(labels or {})
+    added = [v for v in full if v not in reduced]
+    return Result(
+        kind="model_comparison",
+        statistic=Statistic("chi2", chi2, (float(dof),)),
+        p=float(stats.chi2.sf(chi2, dof)),
+        n=len(data),
+        variables=(Variable(outcome, named.get(outcome, outcome), "outcome"), *(Variable(v, named.get(v, v), "predictor") for v in added)),
+        notes=c.notes(Note("method", "Likelihood-ratio test of nested linear mixed models, both fitted by ML (REML likelihoods of models with "
+                                     "different fixed effects are not comparable)."), missing),
+        details={"added": ", ".join(named.get(v, v) for v in added), "aic_reduced": aic0, "aic_full": aic1, "bic_reduced": bic0, "bic_full": bic1,
+                 "log_likelihood_reduced": ll0, "log_likelihood_full": ll1},
+        provenance=c.provenance("statsetter.analyses.compare_models", statsmodels=True),
+    )

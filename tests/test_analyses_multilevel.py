@@ -1,0 +1,77 @@
+"""Linear mixed models against R's nlme on its bundled Orthodont data (tests/data/orthodont.csv, written by R from
+nlme::Orthodont: Potthoff & Roy's dental distances, 27 children at ages 8-14).
+
+R 4.x, run here (tests/r_reference.R): lme(distance ~ age + Sex, random = ~1 | Subject, method = "REML") — fixed
+effects, VarCorr, logLik, AIC, BIC; the ICC from lme(distance ~ 1, ...); anova() of the ML fits with and without Sex;
+lme(distance ~ age, random = ~age | Subject). statsmodels' optimiser stops within about 1e-6 of nlme's, so the
+comparisons allow that; R tests fixed effects with t and containment df, statsmodels with z (said in the records), so
+the p values are checked as z-based from R's own B and SE."""
+
+from __future__ import annotations
+
+from pathlib import Path
+
+import pandas as pd
+import pytest
+from scipy import stats
+
+from statsetter import InputError, render
+from statsetter.analyses import compare_models, mixed_model
+
+DATA = pd.read_csv(Path(__file__).parent / "data" / "orthodont.csv")
+R_FIXED = {"Intercept": (17.706712962962946, 0.8339224740383283), "age": (0.660185185185185, 0.0616059162953231),
+           "Sex[Female]": (-2.321022727272724, 0.7614168487388825)}
+R_VAR = {"intercept": 3.26678372462296, "residual": 2.04945601819663}
+R_FIT = {"ll": -218.756253914003, "aic": 447.512507828005, "bic": 460.782309578793, "icc": 0.432167724955421}
+R_LRT = {"chi2": 8.53305700539363, "aic": (451.389542099057, 444.856485093663), "bic": (462.118067007554, 458.267141229284)}
+R_SLOPES = {"intercept": 5.4150875813665893, "age": 0.0512695453550223, "corr": -0.609, "residual": 1.7162040035045012, "se_age": 0.0712532638707265}
+
+
+@pytest.fixture(scope="module")
+def fitted():
+    return mixed_model(DATA, "distance", ["age", "Sex"], "Subject", reference={"Sex": "Male"})
+
+
+def test_fixed_effects_equal_nlme(fitted):
+    model, *coefficients = fitted
+    assert model.kind == "mixed_model" and model.n == 108 and model.details["groups"] == 27
+    for r in coefficients:
+        b, se = R_FIXED[r.details["term"]]
+        assert r.estimate.value == pytest.approx(b, rel=1e-6) and r.estimate.se == pytest.approx(se, rel=1e-5)
+        assert r.statistic.symbol == "z" and r.p == pytest.approx(2 * stats.norm.sf(abs(b / se)), rel=1e-3)
+        assert any("z" in n.text and "containment" in n.text for n in r.notes)
+
+
+def test_variances_fit_indices_and_icc_equal_nlme(fitted):
+    model = fitted[0]
+    assert model.details["variance_intercept"] == pytest.approx(R_VAR["intercept"], rel=1e-4)  # optimiser tolerance: 1.6e-5 apart
+    assert model.details["variance_residual"] == pytest.approx(R_VAR["residual"], rel=1e-5)
+    assert model.details["log_likelihood"] == pytest.approx(R_FIT["ll"], rel=1e-8)
+    assert model.details["aic"] == pytest.approx(R_FIT["aic"], rel=1e-8) and model.details["bic"] == pytest.approx(R_FIT["bic"], rel=1e-8)
+    assert model.effects[0].value == pytest.approx(R_FIT["icc"], rel=1e-5)
+
+
+def test_random_slopes_equal_nlme():
+    model, _, age = mixed_model(DATA, "distance", ["age"], "Subject", random_slopes=["age"])
+    assert model.details["variance_intercept"] == pytest.approx(R_SLOPES["intercept"], rel=1e-5)
+    assert model.details["variance_age"] == pytest.approx(R_SLOPES["age"], rel=1e-5)
+    assert model.details["correlation_intercept_age"] == pytest.approx(R_SLOPES["corr"], abs=5e-4)  # R prints 3 decimals
+    assert model.details["variance_residual"] == pytest.approx(R_SLOPES["residual"], rel=1e-5)
+    assert age.estimate.se == pytest.approx(R_SLOPES["se_age"], rel=1e-5)
+
+
+def test_likelihood_ratio_test_equals_nlme_anova():
+    (r,) = compare_models(DATA, "distance", ["age"], ["age", "Sex"], "Subject")
+    assert r.statistic.value == pytest.approx(R_LRT["chi2"], rel=1e-6) and r.statistic.df == (1,)
+    assert (r.details["aic_reduced"], r.details["aic_full"]) == pytest.approx(R_LRT["aic"], rel=1e-8)
+    assert (r.details["bic_reduced"], r.details["bic_full"]) == pytest.approx(R_LRT["bic"], rel=1e-8)
+    assert render(r, "sentence").plain().startswith("Adding Sex to the model of distance gave χ²(1) = 8.53, p = .003 (likelihood-ratio test")
+    with pytest.raises(InputError, match="proper subset"):
+        compare_models(DATA, "distance", ["age", "Sex"], ["age"], "Subject")
+
+
+def test_sentences(fitted):
+    text = render(fitted[0], "sentence").plain()
+    assert "estimated by REML" in text and "ICC = .43" in text and "AIC = 447.51" in text
+    sex = next(r for r in fitted if r.details.get("category"))
+    assert render(sex, "sentence").plain().startswith("Distance was lower for Female than for Male")
