@@ -68,3 +68,10 @@ cat("ll", logLik(m), "AIC", AIC(m), "BIC", BIC(m), "\n")
 m0 <- lme(distance ~ 1, random = ~1 | Subject, data = Orthodont, method = "REML"); v <- as.numeric(VarCorr(m0)[, 1]); cat("icc", v[1] / (v[1] + v[2]), "\n")
 print(anova(lme(distance ~ age, random = ~1 | Subject, data = Orthodont, method = "ML"), lme(distance ~ age + Sex, random = ~1 | Subject, data = Orthodont, method = "ML")))
 s <- lme(distance ~ age, random = ~age | Subject, data = Orthodont, method = "REML"); print(summary(s)$tTable); print(VarCorr(s))
+
+# Mixed ANOVA (tests/test_analyses_repeated.py): python -c "import pingouin as pg; pg.read_dataset('mixed_anova').to_csv('/tmp/mixed.csv', index=False)"
+d <- read.csv("/tmp/mixed.csv")
+w <- reshape(d, idvar = c("Subject", "Group"), timevar = "Time", direction = "wide"); Y <- as.matrix(w[, grep("Scores", names(w))])
+fit <- lm(Y ~ factor(w$Group)); idata <- data.frame(time = factor(colnames(Y)))
+print(unclass(anova(fit, M = ~time, X = ~1, idata = idata, test = "Spherical"))); print(mauchly.test(fit, M = ~time, X = ~1, idata = idata))
+d$Subject <- factor(d$Subject); print(summary(aov(Scores ~ Group * Time + Error(Subject / Time), data = d)))

@@ -239,3 +239,31 @@ def test_rm_anova_pairwise_paired_tests_equal_r(weeks):
     assert (first.estimate.ci.low, first.estimate.ci.high) == pytest.approx((-2.04071642222507, 1.72960531111396), rel=1e-9)
     assert first.statistic.value == pytest.approx(-0.287062496720373, rel=1e-9)
     assert "Holm-adjusted" in render(pairs[0], "sentence").plain()
+
+
+# R 4.x, run here on pingouin's 'mixed_anova' data (60 people, Group × Time): anova(lm(Y ~ g), M = ~time, X = ~1, idata, test =
+# "Spherical") for the within terms, mauchly.test on the same fit, and summary(aov(Scores ~ Group*Time + Error(Subject/Time)))
+R_MIXED = {"time": (4.02739419088839, 0.0203694126175162, 0.0204376569694461), "inter": (2.72799558684055, 0.0695448074363938, 0.0696550310191486),
+           "group": (5.05171, 0.02842), "gg": 0.9981, "hf": 1.0337, "mauchly_w": 0.9981167307382, "mauchly_p": 0.947693844217}
+
+
+def test_mixed_anova_equals_r_and_pingouin():
+    from statsetter.analyses import mixed_anova
+
+    d = pg.read_dataset("mixed_anova")
+    group, time, inter = mixed_anova(d, "Scores", "Subject", "Time", "Group", correction="none")
+    assert group.statistic.df == (1, 58) and group.statistic.value == pytest.approx(R_MIXED["group"][0], rel=1e-5)
+    assert group.p == pytest.approx(R_MIXED["group"][1], rel=1e-3)  # R printed 5 significant digits
+    for r, key in ((time, "time"), (inter, "inter")):
+        F, p, p_gg = R_MIXED[key]
+        assert r.statistic.df == (2, 116) and r.statistic.value == pytest.approx(F, rel=1e-9) and r.p == pytest.approx(p, rel=1e-8)
+        assert r.details["epsilon_gg"] == pytest.approx(R_MIXED["gg"], abs=5e-5)
+    assert any("Huynh–Feldt ε = 1.034" in n.text for n in time.notes)  # R's Lecoutre-corrected value, before the cap at 1
+    assert any("W = 0.9981" in n.text and "p = 0.9477" in n.text for n in time.notes)
+    gg_time = mixed_anova(d, "Scores", "Subject", "Time", "Group", correction="gg")[1]
+    assert gg_time.p == pytest.approx(R_MIXED["time"][2], rel=1e-9)
+    ref = pg.mixed_anova(d, dv="Scores", within="Time", subject="Subject", between="Group")
+    for r, (_, row) in zip((group, time, inter), ref.iterrows()):
+        assert r.effects[0].value == pytest.approx(float(row["np2"]), rel=1e-6) and r.p == pytest.approx(float(row["p_unc"]), rel=1e-4)
+    with pytest.raises(InputError, match="more than one group"):
+        mixed_anova(d.assign(Group=np.where((d.index // 60) % 2, "a", "b")), "Scores", "Subject", "Time", "Group")

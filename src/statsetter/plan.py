@@ -66,7 +66,7 @@ ANALYSIS_KINDS = (
     "pearson", "spearman", "kendall", "correlation_matrix", "t_independent", "t_paired", "t_one_sample",
     "chi_square", "fisher_exact", "goodness_of_fit", "anova_oneway", "posthoc", "factorial_anova", "linear_regression",
     "hierarchical_steps", "logistic_regression", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
-    "mcnemar", "cochran_q", "friedman", "rm_anova", "moderation", "mediation", "ancova", "mixed_model", "compare_models", "cronbach_alpha", "auto",
+    "mcnemar", "cochran_q", "friedman", "rm_anova", "mixed_anova", "moderation", "mediation", "ancova", "mixed_model", "compare_models", "cronbach_alpha", "auto",
 )
 _TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
 _DATA = {"path", "sheet", "missing", "labels", "table_labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}

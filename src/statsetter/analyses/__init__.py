@@ -101,6 +101,7 @@ mcnemar = _public(_repeated.mcnemar)
 cochran_q = _public(_repeated.cochran_q)
 friedman = _public(_repeated.friedman)
 rm_anova = _public(_repeated.rm_anova)
+mixed_anova = _public(_repeated.mixed_anova)
 moderation = _public(_moderation.moderation)
 mediation = _public(_mediation.mediation)
 ancova = _public(_ancova.ancova)
@@ -117,7 +118,7 @@ t_one_sample = _public(_ttests.t_one_sample)
 __all__ = [
     "analyse", "describe", "level_of", "correlation_matrix", "correlate", "pearson", "spearman", "kendall",
     "t_independent", "t_paired", "t_one_sample", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
-    "mcnemar", "cochran_q", "friedman", "rm_anova", "moderation", "mediation", "ancova", "mixed_model", "compare_models",
+    "mcnemar", "cochran_q", "friedman", "rm_anova", "mixed_anova", "moderation", "mediation", "ancova", "mixed_model", "compare_models",
     "anova_oneway", "posthoc", "factorial_anova", "chi_square", "fisher_exact", "goodness_of_fit",
     "linear_regression", "hierarchical_steps", "logistic_regression", "cronbach_alpha", "scale_score", "RENAMED",
 ]
