@@ -168,6 +168,33 @@ def friedman(df: "pd.DataFrame", columns: Sequence[str], *, labels: Mapping[str,
 RMCorrection = Literal["auto", "gg", "hf", "none"]
 
 
+_CORRECTIONS = {"none": "no sphericity correction", "gg": "Greenhouse–Geisser correction", "hf": "Huynh–Feldt correction"}
+
+
+def _contrasts(k: int) -> "np.ndarray":
+    """k − 1 orthonormal contrasts of k measurements (from a QR of the centring matrix)."""
+    import numpy as np
+
+    return np.linalg.qr(np.eye(k) - 1.0 / k)[0][:, : k - 1]
+
+
+def _sphericity(S: "np.ndarray", m: float, k: int, correction: str) -> tuple[float, float, tuple[float, float, float, float] | None, float, str]:
+    """From the contrasts' covariance ``S`` with ``m`` residual df: the
+    Greenhouse–Geisser ε̂, the Huynh–Feldt ε̃ as R's anova.mlm computes it
+    (((m + 1)pε̂ − 2)/(p(m − pε̂)): the original formula for one group,
+    Lecoutre's correction for several), Mauchly's test, and the ε and name
+    of the correction ``correction`` chooses (auto: GG below .75, else HF)."""
+    import numpy as np
+
+    p = k - 1
+    gg = float(np.trace(S) ** 2 / (p * np.trace(S @ S)))
+    hf_raw = ((m + 1) * p * gg - 2) / (p * (m - p * gg))
+    mauchly = _mauchly(S, m, k) if p > 1 and m >= p else None
+    chosen = correction if correction != "auto" else ("none" if p == 1 else "gg" if gg < GG_BELOW else "hf")
+    eps = {"none": 1.0, "gg": gg, "hf": min(1.0, hf_raw)}[chosen]
+    return gg, hf_raw, mauchly, eps, _CORRECTIONS[chosen]
+
+
 def _mauchly(S: "np.ndarray", m: float, k: int) -> tuple[float, float, float, float]:
     """Mauchly's W of the contrasts' covariance ``S`` (m residual df) with its
     χ² and p, the p with the second-order term as R's mauchly.test computes
@@ -255,21 +282,11 @@ def rm_anova(
     if ss_error <= 0:
         raise InputError(f"{', '.join(columns)}: no error variance (every person changes alike); F is undefined")
     F = (ss_effect / df1) / (ss_error / df2)
-    # sphericity: the covariance of k − 1 orthonormal contrasts (Helmert-like, from a QR of the centring matrix)
-    contrasts = np.linalg.qr(np.eye(k) - 1.0 / k)[0][:, : k - 1]
-    S = np.cov(Y @ contrasts, rowvar=False).reshape(k - 1, k - 1)
     p = k - 1
-    gg = float(np.trace(S) ** 2 / (p * np.trace(S @ S)))
-    hf = min(1.0, (n * p * gg - 2) / (p * (n - 1 - p * gg)))
-    mauchly = None
-    if p > 1 and n > p:
-        mauchly = _mauchly(S, n - 1.0, k)
-    chosen = correction
-    if chosen == "auto":
-        chosen = "none" if p == 1 else ("gg" if gg < GG_BELOW else "hf")
-    eps = {"none": 1.0, "gg": gg, "hf": hf}[chosen]
+    S = np.cov(Y @ _contrasts(k), rowvar=False).reshape(p, p)
+    gg, hf_raw, mauchly, eps, name = _sphericity(S, n - 1.0, k, correction)
+    hf = min(1.0, hf_raw)
     p_value = float(stats.f.sf(F, df1 * eps, df2 * eps))
-    name = {"none": "no sphericity correction", "gg": "Greenhouse–Geisser correction", "hf": "Huynh–Feldt correction"}[chosen]
     notes = [Note("assumption", (f"Mauchly's test of sphericity: W = {mauchly[0]:.4g}, χ²({mauchly[2]:g}) = {mauchly[1]:.4g}, p = {mauchly[3]:.4g}; "
                                  if mauchly else "Two measurements: sphericity holds by definition; ")
                   + f"Greenhouse–Geisser ε = {gg:.4g}, Huynh–Feldt ε = {hf:.4g} (Huynh & Feldt, 1976).")]
@@ -374,8 +391,7 @@ def mixed_anova(
 
     if correction not in ("auto", "gg", "hf", "none"):
         raise InputError(f"correction: {correction!r} is not auto, gg, hf or none")
-    for name in (between,):
-        c.column(df, name)
+    c.column(df, between)
     per_person = df.groupby(subject, observed=True)[between].nunique()
     if (per_person > 1).any():
         raise InputError(f"{between}: person {per_person[per_person > 1].index[0]!r} is in more than one group; {between} must be between subjects")
@@ -390,8 +406,7 @@ def mixed_anova(
     if G < 2:
         raise InputError(f"{between}: one group with complete data; a mixed ANOVA needs at least two")
     p = k - 1
-    C = np.linalg.qr(np.eye(k) - 1.0 / k)[0][:, :p]
-    T = Y @ C
+    T = Y @ _contrasts(k)
     member = [g == lev for lev in levels]
     n_j = np.array([m.sum() for m in member], dtype=float)
     means = np.array([T[m].mean(axis=0) for m in member])
@@ -406,14 +421,8 @@ def mixed_anova(
     s_means = np.array([s[m].mean() for m in member])
     ss_between = k * float((n_j * (s_means - s.mean()) ** 2).sum())
     ss_persons = k * float(sum(((s[m] - s_means[j]) ** 2).sum() for j, m in enumerate(member)))
-    S = E / dfe
-    gg = float(np.trace(S) ** 2 / (p * np.trace(S @ S)))
-    hf_raw = ((dfe + 1) * p * gg - 2) / (p * (dfe - p * gg))
+    gg, hf_raw, mauchly, eps, name = _sphericity(E / dfe, float(dfe), k, correction)
     hf = min(1.0, hf_raw)
-    mauchly = _mauchly(S, float(dfe), k) if p > 1 and dfe > p else None
-    chosen = correction if correction != "auto" else ("none" if p == 1 else "gg" if gg < GG_BELOW else "hf")
-    eps = {"none": 1.0, "gg": gg, "hf": hf}[chosen]
-    name = {"none": "no sphericity correction", "gg": "Greenhouse–Geisser correction", "hf": "Huynh–Feldt correction"}[chosen]
     named = dict(labels or {})
     shown = {v: named.get(v, v) for v in (outcome, within, between)}
     variables = (Variable(outcome, shown[outcome], "outcome"), Variable(between, shown[between], "factor"), Variable(within, shown[within], "factor"))

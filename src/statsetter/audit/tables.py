@@ -179,11 +179,10 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
             df: tuple[Number, ...] = ()
             how = f"the {role if role != 'chi2' else 'χ²'} column"
-            for name in ("df",):
-                k = next((k for k, v in roles.items() if v == name), None)
-                if k is not None and k in row and numbers.get(k) is not None:
-                    df = (numbers[k][1],)  # type: ignore[index]
-                    how += ", the df column"
+            k = next((k for k, v in roles.items() if v == "df"), None)
+            if k is not None and k in row and numbers.get(k) is not None:
+                df = (numbers[k][1],)  # type: ignore[index]
+                how += ", the df column"
             k1, k2 = (next((k for k, v in roles.items() if v == name), None) for name in ("df1", "df2"))
             if k1 in row and k2 in row and numbers.get(k1) is not None and numbers.get(k2) is not None:  # type: ignore[operator]
                 df = (numbers[k1][1], numbers[k2][1])  # type: ignore[index]
