@@ -75,3 +75,12 @@ w <- reshape(d, idvar = c("Subject", "Group"), timevar = "Time", direction = "wi
 fit <- lm(Y ~ factor(w$Group)); idata <- data.frame(time = factor(colnames(Y)))
 print(unclass(anova(fit, M = ~time, X = ~1, idata = idata, test = "Spherical"))); print(mauchly.test(fit, M = ~time, X = ~1, idata = idata))
 d$Subject <- factor(d$Subject); print(summary(aov(Scores ~ Group * Time + Error(Subject / Time), data = d)))
+
+# Two within factors (tests/test_analyses_repeated.py): python -c "import pingouin as pg; pg.read_dataset('rm_anova2').to_csv('/tmp/rm_anova2.csv', index=False)"
+d <- read.csv("/tmp/rm_anova2.csv"); d$cell <- paste(d$Time, d$Metric, sep = ".")
+w <- reshape(d[, c("Subject", "cell", "Performance")], idvar = "Subject", timevar = "cell", direction = "wide")
+Y <- as.matrix(w[, -1]); cells <- sub("Performance.", "", colnames(Y)); fit <- lm(Y ~ 1)
+idata <- data.frame(Time = factor(sub("\\..*", "", cells)), Metric = factor(sub(".*\\.", "", cells)))
+print(anova(fit, idata = idata, X = ~1, M = ~Time, test = "Spherical"))
+print(anova(fit, idata = idata, X = ~Time, M = ~Time + Metric, test = "Spherical")); print(mauchly.test(fit, idata = idata, X = ~Time, M = ~Time + Metric))
+print(anova(fit, idata = idata, X = ~Time + Metric, M = ~Time * Metric, test = "Spherical")); print(mauchly.test(fit, idata = idata, X = ~Time + Metric, M = ~Time * Metric))

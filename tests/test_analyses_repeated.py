@@ -267,3 +267,41 @@ def test_mixed_anova_equals_r_and_pingouin():
         assert r.effects[0].value == pytest.approx(float(row["np2"]), rel=1e-6) and r.p == pytest.approx(float(row["p_unc"]), rel=1e-4)
     with pytest.raises(InputError, match="more than one group"):
         mixed_anova(d.assign(Group=np.where((d.index // 60) % 2, "a", "b")), "Scores", "Subject", "Time", "Group")
+
+
+# R's anova.mlm (test = "Spherical") per term of pingouin's rm_anova2 (idata Time × Metric; X/M as in tests/r_reference.R) and
+# mauchly.test: F, uncorrected p, GG-corrected p, GG ε, HF ε, Mauchly's W and p
+R_TWO_WITHIN = {
+    "Time": (33.85228, 0.0002536076605591, 0.0002536076605591, 1.0, 1.0, None, None),
+    "Metric": (26.95919, 3.853838575239e-06, 5.232460290389e-06, 0.9691, 1.0, 0.9681178957938, 0.878441799168),  # R prints HF 1.2307 before the cap
+    "Time × Metric": (12.63227, 0.0003734768614557, 0.001707935329771, 0.7272, 0.8312, 0.6247989838361, 0.152391680462),
+}
+
+
+def test_two_within_factors_equal_r_anova_mlm_and_pingouin():
+    from statsetter.analyses import rm_anova
+
+    d = pg.read_dataset("rm_anova2")
+    terms = rm_anova(d, outcome="Performance", subject="Subject", within=["Time", "Metric"], correction="none")
+    assert [t.details["term"] for t in terms] == list(R_TWO_WITHIN)
+    gg = rm_anova(d, outcome="Performance", subject="Subject", within=["Time", "Metric"], correction="gg")
+    for r, g, (term, (F, p, p_gg, e_gg, e_hf, w, p_w)) in zip(terms, gg, R_TWO_WITHIN.items()):
+        assert r.statistic.value == pytest.approx(F, rel=1e-6) and r.p == pytest.approx(p, rel=1e-9)
+        assert g.p == pytest.approx(p_gg, rel=1e-9)
+        assert r.details["epsilon_gg"] == pytest.approx(e_gg, abs=5e-5) and r.details["epsilon_hf"] == pytest.approx(e_hf, abs=5e-5)
+        assert r.details.get("mauchly_w") == (None if w is None else pytest.approx(w, rel=1e-9))
+        assert r.details.get("mauchly_p") == (None if p_w is None else pytest.approx(p_w, rel=1e-9))
+    # the interaction's corrected df as R's GG: 2 × 0.7272 and 18 × 0.7272
+    assert gg[2].statistic.df == pytest.approx((2 * 0.727166420, 18 * 0.727166420), rel=1e-7)
+    ref = pg.rm_anova(d, dv="Performance", within=["Time", "Metric"], subject="Subject")  # generalized η² as pingouin's ng2
+    for r, (_, row) in zip(terms, ref.iterrows()):
+        assert r.effects[1].name == "eta2_g" and r.effects[1].value == pytest.approx(float(row["ng2"]), rel=1e-9)
+    # the auto rule per term: Metric (ε .97) Huynh–Feldt, the interaction (ε .73) Greenhouse–Geisser
+    auto = rm_anova(d, outcome="Performance", subject="Subject", within=["Time", "Metric"])
+    assert [t.details["correction"] for t in auto] == ["no sphericity correction", "Huynh–Feldt correction", "Greenhouse–Geisser correction"]
+    text = render(auto[2], "sentence").plain()
+    assert "F(1.45, 13.09) = 12.63" in text and "ε = .73" in text and "interaction" in text
+    with pytest.raises(InputError, match="one row per person and cell"):
+        rm_anova(pd.concat([d, d.iloc[:1]]), outcome="Performance", subject="Subject", within=["Time", "Metric"])
+    with pytest.raises(InputError, match="long data"):
+        rm_anova(d, outcome="Performance", subject="Subject", within=["Time", "Metric"], pairwise="holm")

@@ -241,7 +241,7 @@ def rm_anova(
     *,
     outcome: str | None = None,
     subject: str | None = None,
-    within: str | None = None,
+    within: str | Sequence[str] | None = None,
     correction: RMCorrection = "auto",
     pairwise: str | None = None,
     level: float = 0.95,
@@ -260,12 +260,25 @@ def rm_anova(
     with a missing measurement are dropped. ``pairwise`` ("holm" or
     "bonferroni") adds every pair of measurements as paired t tests with
     adjusted p, the mean difference's CI (at the Bonferroni-adjusted level
-    for Bonferroni; unadjusted for Holm, said) and d_z; the test first."""
+    for Bonferroni; unadjusted for Holm, said) and d_z; the test first.
+
+    Two within-subjects factors (long data, ``within=[a, b]``): a list of
+    term records (a, b, a × b), each tested against its own term × person
+    error with its own sphericity test and correction (see `_two_within`)."""
     import numpy as np
     from scipy import stats
 
     if correction not in ("auto", "gg", "hf", "none"):
         raise InputError(f"correction: {correction!r} is not auto, gg, hf or none")
+    if within is not None and not isinstance(within, str):
+        factors = list(within)
+        if len(factors) == 2:
+            if pairwise is not None or columns is not None or not (outcome and subject):
+                raise InputError("rm_anova: two within factors need long data (outcome=, subject=, within=[a, b]) and no pairwise=")
+            return _two_within(df, outcome, subject, (factors[0], factors[1]), correction, level, labels)
+        if len(factors) != 1:
+            raise InputError(f"within: {len(factors)} factors given; one or two within-subjects factors are supported")
+        within = factors[0]
     wide, columns, measured = _wide(df, columns, outcome, subject, within, "rm_anova")
     if len(columns) < 2:
         raise InputError("columns: a repeated-measures ANOVA needs at least two measurements")
@@ -319,6 +332,100 @@ def rm_anova(
     if pairwise is None:
         return main
     return [main, *_paired_pairs(Y, groups, variables, pairwise, level, missing)]
+
+
+def _levels(values: "pd.Series") -> list[object]:
+    """A factor's levels in the data's order: a categorical's own order, else sorted."""
+    import pandas as pd
+
+    if isinstance(values.dtype, pd.CategoricalDtype):
+        return [v for v in values.cat.categories if (values == v).any()]
+    return sorted(values.dropna().unique(), key=lambda v: (str(type(v)), v))
+
+
+def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[str, str], correction: RMCorrection, level: float,
+                labels: Mapping[str, str] | None) -> list[Result]:
+    """Two within-subjects factors by the contrast route of R's anova.mlm
+    (``idata`` with ``X``/``M`` per term): each person's a × b measurements
+    are projected on orthonormal contrasts of the term (A: C_a ⊗ 1/√b, B:
+    1/√a ⊗ C_b, A × B: C_a ⊗ C_b); SS = n‖mean‖², its error the trace of the
+    projections' residual cross-products (df p and p(n − 1)); each term's ε
+    and Mauchly's test from the projections' covariance. η²G (all factors
+    manipulated; Olejnik & Algina, 2003) divides by the term's SS plus the
+    people's and every error SS."""
+    import numpy as np
+    from scipy import stats
+
+    from .effects import variance_explained
+
+    a, b = factors
+    for name in (outcome, subject, a, b):
+        c.column(df, name)
+    if a == b:
+        raise InputError(f"within: {a} is named twice")
+    counts = df.groupby([subject, a, b], observed=True).size()
+    if (counts > 1).any():
+        who, x, y = counts[counts > 1].index[0]
+        raise InputError(f"{subject} {who!r}: {int(counts.max())} rows for {a} {x!r} and {b} {y!r}; one row per person and cell is needed")
+    la, lb = _levels(df[a]), _levels(df[b])
+    if len(la) < 2 or len(lb) < 2:
+        raise InputError(f"{a if len(la) < 2 else b}: one level; a within-subjects factor needs at least two")
+    wide = df.pivot(index=subject, columns=[a, b], values=outcome).reindex(columns=[(x, y) for x in la for y in lb])
+    cells = [f"{category_text(x)} × {category_text(y)}" for x in la for y in lb]
+    wide.columns = cells
+    data, missing = c.listwise(wide, cells)
+    Y = np.column_stack([c.numeric(data, col).to_numpy(dtype=float) for col in cells])
+    n = Y.shape[0]
+    if n < 3:
+        raise InputError(f"{outcome}: {n} person(s) with every cell measured; a repeated-measures ANOVA needs at least three")
+    ka, kb = len(la), len(lb)
+    ua, ub = np.full((ka, 1), ka**-0.5), np.full((kb, 1), kb**-0.5)
+    Ca, Cb = _contrasts(ka), _contrasts(kb)
+    named = dict(labels or {})
+    shown = {v: named.get(v, v) for v in (outcome, a, b)}
+    fitted = []
+    for label, M, interaction in ((shown[a], np.kron(Ca, ub), False), (shown[b], np.kron(ua, Cb), False),
+                                  (f"{shown[a]} × {shown[b]}", np.kron(Ca, Cb), True)):
+        T = Y @ M
+        mean = T.mean(axis=0)
+        E = (T - mean).T @ (T - mean)
+        fitted.append((label, interaction, n * float(mean @ mean), float(np.trace(E)), E, M.shape[1]))
+    ss_persons = ka * kb * float(((Y.mean(axis=1) - Y.mean()) ** 2).sum())
+    errors = sum(f[3] for f in fitted)
+    variables = (Variable(outcome, shown[outcome], "outcome"), Variable(a, shown[a], "factor"), Variable(b, shown[b], "factor"))
+    prov = c.provenance("statsetter.analyses.rm_anova")
+    out = []
+    for label, interaction, ss, ss_error, E, p in fitted:
+        if ss_error <= 0:
+            raise InputError(f"{label}: no error variance (every person changes alike); F is undefined")
+        df1, df2 = float(p), float(p * (n - 1))
+        gg, hf_raw, mauchly, eps, name = _sphericity(E / (n - 1), n - 1.0, p + 1, correction)
+        hf = min(1.0, hf_raw)
+        F = (ss / df1) / (ss_error / df2)
+        notes = [Note("assumption", f"{label}: " + (f"Mauchly's test of sphericity: W = {mauchly[0]:.4g}, χ²({mauchly[2]:g}) = {mauchly[1]:.4g}, "
+                                                    f"p = {mauchly[3]:.4g}; Greenhouse–Geisser ε = {gg:.4g}, Huynh–Feldt ε = {hf:.4g} "
+                                                    "(Huynh & Feldt, 1976)." if mauchly else "two levels; sphericity holds by definition."))]
+        if correction == "auto" and p > 1:
+            notes.append(Note("choice", f"{label}: {name} reported: the Greenhouse–Geisser ε is {'below' if gg < GG_BELOW else 'at least'} "
+                                        f"{GG_BELOW} (Girden, 1992; practice). Name the rule you follow."))
+        details: dict[str, object] = {"term": label, "interaction": interaction, "ss": ss, "ss_error": ss_error, "correction": name,
+                                      "epsilon": eps, "epsilon_gg": gg, "epsilon_hf": hf, "df1_uncorrected": df1, "df2_uncorrected": df2,
+                                      "p_uncorrected": float(stats.f.sf(F, df1, df2)), "eta2_g": ss / (ss + ss_persons + errors)}
+        if mauchly:
+            details.update(mauchly_w=mauchly[0], mauchly_p=mauchly[3])
+        out.append(Result(
+            kind="anova_term",
+            statistic=Statistic("F", F, (df1 * eps, df2 * eps)),
+            p=float(stats.f.sf(F, df1 * eps, df2 * eps)),
+            n=n,
+            effects=(variance_explained("eta2_p", ss / (ss + ss_error), F, df1, df2, level),
+                     EffectSize("eta2_g", ss / (ss + ss_persons + errors), method="generalized η² (Olejnik & Algina, 2003)")),
+            variables=variables,
+            notes=c.notes(*notes, missing),  # type: ignore[arg-type]
+            details=details,
+            provenance=prov,
+        ))
+    return out
 
 
 def _paired_pairs(Y, groups, variables, adjust: str, level: float, missing: Note | None) -> list[Result]:  # type: ignore[no-untyped-def]
