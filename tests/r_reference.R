@@ -84,3 +84,11 @@ idata <- data.frame(Time = factor(sub("\\..*", "", cells)), Metric = factor(sub(
 print(anova(fit, idata = idata, X = ~1, M = ~Time, test = "Spherical"))
 print(anova(fit, idata = idata, X = ~Time, M = ~Time + Metric, test = "Spherical")); print(mauchly.test(fit, idata = idata, X = ~Time, M = ~Time + Metric))
 print(anova(fit, idata = idata, X = ~Time + Metric, M = ~Time * Metric, test = "Spherical")); print(mauchly.test(fit, idata = idata, X = ~Time + Metric, M = ~Time * Metric))
+
+# Simple effects after the mixed ANOVA (the /tmp/mixed.csv written above): anova.mlm per group, anova(lm) per measurement
+d <- read.csv("/tmp/mixed.csv")
+for (g in sort(unique(d$Group))) {
+  s <- d[d$Group == g, ]; w <- reshape(s[, c("Subject", "Time", "Scores")], idvar = "Subject", timevar = "Time", direction = "wide")
+  Y <- as.matrix(w[, -1]); fit <- lm(Y ~ 1); print(anova(fit, M = ~time, X = ~1, idata = data.frame(time = factor(colnames(Y))), test = "Spherical"))
+}
+for (t in sort(unique(d$Time))) { a <- anova(lm(Scores ~ Group, data = d[d$Time == t, ])); cat(t, a$`F value`[1], a$`Pr(>F)`[1], "\n") }

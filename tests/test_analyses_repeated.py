@@ -305,3 +305,33 @@ def test_two_within_factors_equal_r_anova_mlm_and_pingouin():
         rm_anova(pd.concat([d, d.iloc[:1]]), outcome="Performance", subject="Subject", within=["Time", "Metric"])
     with pytest.raises(InputError, match="long data"):
         rm_anova(d, outcome="Performance", subject="Subject", within=["Time", "Metric"], pairwise="holm")
+
+
+# R (tests/r_reference.R, pingouin's mixed_anova): anova.mlm of each group's people (F, uncorrected p, HF-corrected p) and
+# anova(lm(Scores ~ Group)) at each measurement (F, p)
+R_SIMPLE_WITHIN = {"Control": (0.0825605883968686, 0.920863659100823, 0.9208636591008),
+                   "Meditation": (6.93711353737643, 0.00198970815187459, 0.002101167297894)}
+R_SIMPLE_BETWEEN = {"August": (0.0998698825735329, 0.753120305493897), "January": (2.05556791157307, 0.157019977775615),
+                    "June": (7.53113069606599, 0.00805764069447003)}
+
+
+def test_mixed_anova_simple_effects_equal_r():
+    from statsetter.analyses import mixed_anova
+
+    d = pg.read_dataset("mixed_anova")
+    out = mixed_anova(d, "Scores", "Subject", "Time", "Group", correction="hf", simple="both")
+    assert [r.kind for r in out] == ["anova_term"] * 3 + ["anova_rm"] * 2 + ["anova_oneway"] * 3
+    for r, (group, (F, p, p_hf)) in zip(out[3:5], R_SIMPLE_WITHIN.items()):
+        assert r.details["where"] == f"where Group is {group}" and r.n == 30
+        assert r.statistic.value == pytest.approx(F, rel=1e-9) and r.p == pytest.approx(p_hf, rel=1e-9)
+        assert r.details["p_uncorrected"] == pytest.approx(p, rel=1e-9)
+    for r, (time, (F, p)) in zip(out[5:], R_SIMPLE_BETWEEN.items()):
+        assert r.details["where"] == f"where Time is {time}" and r.statistic.df == (1, 58)
+        assert r.statistic.value == pytest.approx(F, rel=1e-9) and r.p == pytest.approx(p, rel=1e-9)
+    assert all("one of 5" in r.notes[-1].text and "not adjusted" in r.notes[-1].text for r in out[3:])
+    assert not any("__" in n.text for r in out for n in r.notes)  # no internal column names in what users read
+    text = render(out[6], "sentence").plain()
+    assert text.startswith("A one-way analysis of variance of Scores across Group where Time is January gave F(1, 58) = 2.06, p = .157")
+    assert len(mixed_anova(d, "Scores", "Subject", "Time", "Group", simple="within")) == 5
+    with pytest.raises(InputError, match="simple"):
+        mixed_anova(d, "Scores", "Subject", "Time", "Group", simple="all")

@@ -477,6 +477,7 @@ def mixed_anova(
     between: str,
     *,
     correction: RMCorrection = "auto",
+    simple: Literal["within", "between", "both"] | None = None,
     level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
@@ -490,7 +491,14 @@ def mixed_anova(
     correction for groups, as R computes it (((N − g + 1)pε̂ − 2)/(p(N − g −
     pε̂)); recalled from memory and checked against R's output), and the
     correction chosen as in `rm_anova`. Effect sizes: η²p with its
-    noncentral-F interval (uncorrected df) and η²G."""
+    noncentral-F interval (uncorrected df) and η²G.
+
+    ``simple`` adds simple-effects follow-ups after the three terms:
+    ``within``, the within factor in each group (a repeated-measures ANOVA of
+    that group's people, its own error term and sphericity correction);
+    ``between``, the groups at each measurement (a one-way ANOVA); ``both``.
+    Each uses its own error term, not the omnibus one, and p is not adjusted
+    for the number of simple effects (said in a note)."""
     import numpy as np
     from scipy import stats
 
@@ -498,16 +506,20 @@ def mixed_anova(
 
     if correction not in ("auto", "gg", "hf", "none"):
         raise InputError(f"correction: {correction!r} is not auto, gg, hf or none")
+    if simple not in (None, "within", "between", "both"):
+        raise InputError(f"simple: {simple!r} is not within, between or both")
     c.column(df, between)
     per_person = df.groupby(subject, observed=True)[between].nunique()
     if (per_person > 1).any():
         raise InputError(f"{between}: person {per_person[per_person > 1].index[0]!r} is in more than one group; {between} must be between subjects")
     wide, columns, _ = _wide(df, None, outcome, subject, within, "mixed_anova")
     groups_of = df.groupby(subject, observed=True)[between].first()
-    wide = wide.assign(**{"__group__": groups_of.reindex(wide.index).to_numpy()})
-    data, missing = c.listwise(wide, [*columns, "__group__"])
+    if between in columns:
+        raise InputError(f"{between}: also a level of {within}; rename one of them")
+    wide = wide.assign(**{between: groups_of.reindex(wide.index).to_numpy()})
+    data, missing = c.listwise(wide, [*columns, between])
     Y = np.column_stack([c.numeric(data, col).to_numpy(dtype=float) for col in columns])
-    g = data["__group__"].map(category_text).to_numpy()
+    g = data[between].map(category_text).to_numpy()
     levels = sorted(set(g))
     N, k, G = Y.shape[0], Y.shape[1], len(levels)
     if G < 2:
@@ -563,4 +575,37 @@ def mixed_anova(
             details=details,
             provenance=prov,
         ))
+    if simple:
+        out += _simple_effects(data, columns, g, levels, simple, shown, variables, (outcome, between), correction, level, labels)
+    return out
+
+
+def _simple_effects(data: "pd.DataFrame", columns: list[str], g: "np.ndarray", levels: list[str], simple: str, shown: Mapping[str, str],
+                    variables: tuple[Variable, ...], names: tuple[str, str], correction: RMCorrection, level: float,
+                    labels: Mapping[str, str] | None) -> list[Result]:
+    """The mixed ANOVA's simple effects: the within factor in each group, the groups at each measurement."""
+    from dataclasses import replace
+
+    import pandas as pd
+
+    from .anova import anova_oneway
+
+    outcome, between = names
+    within = variables[2].name
+    m = (len(levels) if simple in ("within", "both") else 0) + (len(columns) if simple in ("between", "both") else 0)
+    note = Note("correction", f"Simple effect, one of {m}: tested with its own error term, not the omnibus one; p not adjusted for the {m} simple "
+                              "effects (name the adjustment you apply).")
+    out: list[Result] = []
+    if simple in ("within", "both"):
+        for lev in levels:
+            r = rm_anova(data.loc[g == lev], columns, correction=correction, level=level, labels=labels)
+            assert isinstance(r, Result)
+            out.append(replace(r, variables=(variables[0], variables[2]) + r.variables, notes=r.notes + (note,),
+                               details={**r.details, "where": f"where {shown[between]} is {lev}", "simple_effect": within}))
+    if simple in ("between", "both"):
+        for col in columns:
+            frame = pd.DataFrame({outcome: data[col].to_numpy(dtype=float), between: g})
+            r = anova_oneway(frame, outcome, between, level=level, labels=labels)
+            out.append(replace(r, variables=r.variables + (variables[2],), notes=r.notes + (note,),
+                               details={**r.details, "where": f"where {shown[within]} is {col}", "simple_effect": between}))
     return out
