@@ -5,7 +5,7 @@ ten patients, as printed in R's datasets::sleep (recalled from memory, then chec
 `Rscript -e 'print(sleep)'` on the development machine, R 4.x). SLEEP_LONG is
 the same data in R's own long form: extra, group ("1", "2"), ID.
 
-MTCARS: mpg, wt and hp of R's datasets::mtcars (Henderson & Velleman, 1981),
+MTCARS: mpg, wt, hp and cyl of R's datasets::mtcars (Henderson & Velleman, 1981),
 and PLANTS: R's datasets::PlantGrowth (Dobson, 1983), both printed by
 `Rscript -e 'deparse(...)'` on the development machine (R 4.x).
 """
@@ -35,6 +35,7 @@ MTCARS = pd.DataFrame(
                2.465, 3.52, 3.435, 3.84, 3.845, 1.935, 2.14, 1.513, 3.17, 2.77, 3.57, 2.78],
         "hp": [110, 110, 93, 110, 175, 105, 245, 62, 95, 123, 123, 180, 180, 180, 205, 215, 230, 66, 52, 65, 97, 150, 150, 245, 175, 66, 91,
                113, 264, 175, 335, 109],
+        "cyl": [6, 6, 4, 6, 8, 6, 8, 4, 4, 6, 6, 8, 8, 8, 8, 8, 8, 4, 4, 4, 4, 8, 8, 8, 8, 4, 4, 4, 8, 6, 8, 4],
     }
 )
 

@@ -92,3 +92,7 @@ for (g in sort(unique(d$Group))) {
   Y <- as.matrix(w[, -1]); fit <- lm(Y ~ 1); print(anova(fit, M = ~time, X = ~1, idata = data.frame(time = factor(colnames(Y))), test = "Spherical"))
 }
 for (t in sort(unique(d$Time))) { a <- anova(lm(Scores ~ Group, data = d[d$Time == t, ])); cat(t, a$`F value`[1], a$`Pr(>F)`[1], "\n") }
+
+# Moderation by a categorical moderator (tests/test_analyses_moderation.py), R's mtcars
+print(summary(lm(mpg ~ factor(cyl) / hp, data = mtcars))$coefficients); print(summary(lm(mpg ~ hp * factor(cyl), data = mtcars))$coefficients)
+print(anova(lm(mpg ~ hp + factor(cyl), data = mtcars), lm(mpg ~ hp * factor(cyl), data = mtcars)))

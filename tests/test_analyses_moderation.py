@@ -69,5 +69,39 @@ def test_chosen_values_and_refusals():
     # the slope at a value does not depend on centring: the same as R's lm(mpg ~ hp * I(wt - 3))
     centred = [r for r in moderation(MTCARS, "mpg", "hp", "wt", at=[3.0]) if r.kind == "simple_slope"][0]
     assert slopes[1].estimate.value == pytest.approx(centred.estimate.value, rel=1e-10)
-    with pytest.raises(InputError):
+    with pytest.raises(InputError, match="category '1.513 t' has 1 case"):  # text moderator: categorical, one car per weight
         moderation(MTCARS.assign(wt=MTCARS["wt"].astype(str) + " t"), "mpg", "hp", "wt")
+    with pytest.raises(InputError, match="at= does not apply"):
+        moderation(MTCARS.assign(cyl=MTCARS["cyl"].astype(str)), "mpg", "hp", "cyl", at=[4])
+
+
+# R 4.x (tests/r_reference.R): lm(mpg ~ factor(cyl)/hp) for the slope of hp within each cylinder count (estimate, SE),
+# lm(mpg ~ hp * factor(cyl)) for the products, anova() of the models without and with them for the joint test
+R_CYL_SLOPES = {"4": (-0.11277588781944897, 0.0457469486877913), "6": (-0.00761326860841404, 0.0509624306416543),
+            "8": (-0.01424412150890258, 0.0164770846223563)}
+R_CYL_PRODUCTS = {"6": (0.1051626192110350, 0.0684832289772382), "8": (0.0985317663105465, 0.0486238381032976)}
+R_CYL_JOINT = (2.10991, 0.14153)  # F(2, 26), p as R prints them
+
+
+def test_categorical_moderator_equals_r():
+    cars = MTCARS.assign(cyl=MTCARS["cyl"].astype(str))
+    rs = moderation(cars, "mpg", "hp", "cyl", labels={"mpg": "fuel economy", "hp": "horsepower", "cyl": "cylinders"})
+    slopes = [r for r in rs if r.kind == "simple_slope"]
+    assert [s.details["category"] for s in slopes] == list(R_CYL_SLOPES)
+    for s, (b, se) in zip(slopes, R_CYL_SLOPES.values()):
+        assert s.estimate.value == pytest.approx(b, rel=1e-10) and s.estimate.se == pytest.approx(se, rel=1e-10)
+        assert s.statistic.df == (26,) and s.statistic.value == pytest.approx(b / se, rel=1e-10)
+    products = [r for r in rs if r.details.get("interaction") and r.kind == "linear_coefficient"]
+    for r, (b, se) in zip(products, R_CYL_PRODUCTS.values()):
+        assert r.estimate.value == pytest.approx(b, rel=1e-10) and r.estimate.se == pytest.approx(se, rel=1e-10)
+    joint = next(r for r in rs if r.kind == "anova_term")
+    assert joint.statistic.df == (2, 26) and joint.statistic.value == pytest.approx(R_CYL_JOINT[0], abs=5e-6) and joint.p == pytest.approx(R_CYL_JOINT[1], abs=5e-6)
+    assert render(slopes[0], "sentence").plain() == ("Where cylinders was 4, the slope of fuel economy on horsepower was B = −0.11, 95% CI [−0.21, −0.02], "
+                                                     "SE = 0.05, t(26) = −2.47, p = .021.")
+    assert "Johnson–Neyman region does not apply" in slopes[0].notes[0].text
+    # numbers with two values are read as categories (said); the slope for cyl 4 against the rest is the same slope as above
+    two = moderation(MTCARS.assign(four=(MTCARS["cyl"] == 4).astype(int)), "mpg", "hp", "four")
+    two_slopes = [r for r in two if r.kind == "simple_slope"]
+    assert [s.details["category"] for s in two_slopes] == ["0", "1"] and not any(r.kind == "anova_term" for r in two)
+    assert two_slopes[1].estimate.value == pytest.approx(R_CYL_SLOPES["4"][0], rel=1e-10)
+    assert any(n.kind == "choice" and "two values" in n.text for n in two_slopes[0].notes)

@@ -10,7 +10,7 @@ from __future__ import annotations
 import math
 from typing import TYPE_CHECKING, Literal, Mapping, Sequence
 
-from ..coding import category_text
+from ..coding import categories, category_text
 from ..errors import InputError
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
@@ -334,15 +334,6 @@ def rm_anova(
     return [main, *_paired_pairs(Y, groups, variables, pairwise, level, missing)]
 
 
-def _levels(values: "pd.Series") -> list[object]:
-    """A factor's levels in the data's order: a categorical's own order, else sorted."""
-    import pandas as pd
-
-    if isinstance(values.dtype, pd.CategoricalDtype):
-        return [v for v in values.cat.categories if (values == v).any()]
-    return sorted(values.dropna().unique(), key=lambda v: (str(type(v)), v))
-
-
 def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[str, str], correction: RMCorrection, level: float,
                 labels: Mapping[str, str] | None) -> list[Result]:
     """Two within-subjects factors by the contrast route of R's anova.mlm
@@ -367,7 +358,7 @@ def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[s
     if (counts > 1).any():
         who, x, y = counts[counts > 1].index[0]
         raise InputError(f"{subject} {who!r}: {int(counts.max())} rows for {a} {x!r} and {b} {y!r}; one row per person and cell is needed")
-    la, lb = _levels(df[a]), _levels(df[b])
+    la, lb = categories(df[a]), categories(df[b])
     if len(la) < 2 or len(lb) < 2:
         raise InputError(f"{a if len(la) < 2 else b}: one level; a within-subjects factor needs at least two")
     wide = df.pivot(index=subject, columns=[a, b], values=outcome).reindex(columns=[(x, y) for x in la for y in lb])
