@@ -96,3 +96,6 @@ for (t in sort(unique(d$Time))) { a <- anova(lm(Scores ~ Group, data = d[d$Time 
 # Moderation by a categorical moderator (tests/test_analyses_moderation.py), R's mtcars
 print(summary(lm(mpg ~ factor(cyl) / hp, data = mtcars))$coefficients); print(summary(lm(mpg ~ hp * factor(cyl), data = mtcars))$coefficients)
 print(anova(lm(mpg ~ hp + factor(cyl), data = mtcars), lm(mpg ~ hp * factor(cyl), data = mtcars)))
+
+# Parallel mediators (tests/test_analyses_mediation.py): python -c "import pingouin as pg; pg.read_dataset('mediation').to_csv('/tmp/mediation.csv', index=False)"
+d <- read.csv("/tmp/mediation.csv"); for (f in list(M ~ X, Mbin ~ X, Y ~ X + M + Mbin, Y ~ X)) print(summary(lm(f, data = d))$coefficients)

@@ -87,3 +87,35 @@ def test_pingouin_mediation_read_and_where_it_differs(data, fitted):
     assert read["ab"].estimate.value == pytest.approx(mine["a·b"].estimate.value, rel=1e-9)
     pingouin_b = float(frame.iloc[1]["coef"])
     assert pingouin_b == pytest.approx(0.654173, abs=1e-6) and abs(pingouin_b - R_PATHS["b"][0]) > 0.01
+
+
+# R 4.x (tests/r_reference.R): lm(M ~ X), lm(Mbin ~ X), lm(Y ~ X + M + Mbin), lm(Y ~ X) on pingouin's mediation data (B, SE)
+R_PARALLEL = {("a", "M"): (0.561015316123459, 0.0944804804289862), ("a", "Mbin"): (-0.00514967274660285, 0.0289619959180415),
+              ("b", "M"): (0.6350524614769854, 0.101062609063712), ("b", "Mbin"): (-0.0635998169587974, 0.329688737087289),
+              ("c", None): (0.396126117146749, 0.111159788092407), ("c′", None): (0.0395244414721756, 0.110197458124629)}
+
+
+def test_parallel_mediators_equal_r_and_pingouin(data):
+    rs = mediation(data, "X", ["M", "Mbin"], "Y")
+    paths = [r for r in rs if r.kind == "mediation_path"]
+    assert [(r.details["path"], r.details.get("mediator")) for r in paths] == list(R_PARALLEL)
+    for r, (b, se) in zip(paths, R_PARALLEL.values()):
+        assert r.estimate.value == pytest.approx(b, rel=1e-10) and r.estimate.se == pytest.approx(se, rel=1e-10)
+    specific = [r for r in rs if r.kind == "mediation_indirect"]
+    assert [r.details["path"] for r in specific] == ["a·b", "a·b", "total indirect"]
+    assert specific[0].estimate.value == pytest.approx(R_PARALLEL[("a", "M")][0] * R_PARALLEL[("b", "M")][0], rel=1e-10)
+    assert specific[2].estimate.value == pytest.approx(specific[0].estimate.value + specific[1].estimate.value, rel=1e-12)
+    # pingouin's "Indirect M" is the same a·b; its CI (5,000 resamples, its own seed) within Monte Carlo error of ours
+    ref = pg.mediation_analysis(data, x="X", m=["M", "Mbin"], y="Y", n_boot=5000, seed=1).set_index("path")
+    assert specific[0].estimate.value == pytest.approx(float(ref.loc["Indirect M", "coef"]), rel=1e-6)
+    assert specific[0].estimate.ci.low == pytest.approx(float(ref.loc["Indirect M", "CI2.5"]), abs=0.03)
+    assert specific[0].estimate.ci.high == pytest.approx(float(ref.loc["Indirect M", "CI97.5"]), abs=0.03)
+    # pingouin fits a binary mediator's path a by logistic regression (log-odds); ours is OLS, as a·b needs, and says so
+    assert float(ref.loc["Mbin ~ X", "coef"]) != pytest.approx(R_PARALLEL[("a", "Mbin")][0], abs=1e-3)
+    assert any("linear probability model" in n.text for n in paths[1].notes) and not any("linear probability" in n.text for n in paths[0].notes)
+    text = " ".join(render(r, "sentence").plain() for r in rs)
+    assert "Path b, from M to Y with X and the other mediators held constant" in text
+    assert "The direct path c′, from X to Y with M and Mbin held constant" in text
+    assert "The total indirect effect of X on Y through M and Mbin was ab = 0.36, 95% CI [0.21, 0.53]" in text
+    with pytest.raises(InputError, match="named twice"):
+        mediation(data, "X", ["M", "M"], "Y")

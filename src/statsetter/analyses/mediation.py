@@ -12,7 +12,7 @@ from __future__ import annotations
 from typing import TYPE_CHECKING, Mapping, Sequence
 
 from ..errors import InputError
-from ..records import Estimate, Interval, Note, Result, Statistic
+from ..records import Estimate, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 
 if TYPE_CHECKING:
@@ -40,7 +40,7 @@ def _ols(X: "np.ndarray", y: "np.ndarray") -> tuple["np.ndarray", "np.ndarray", 
 def mediation(
     df: "pd.DataFrame",
     x: str,
-    mediator: str,
+    mediator: str | Sequence[str],
     y: str,
     *,
     covariates: Sequence[str] = (),
@@ -53,35 +53,55 @@ def mediation(
     """Paths a, b, c and c′ (B, SE, t, p, CI; covariates in every model),
     then the indirect effect a·b with its bootstrap CI (``n_boot``
     resamples of the rows, ``seed``; percentile limits, or bias-corrected
-    with ``bias_corrected``)."""
+    with ``bias_corrected``).
+
+    Several mediators (a list) are parallel mediators (Preacher & Hayes,
+    2008): a path a and b for each (b and c′ from one model of ``y`` on
+    ``x`` and every mediator), a specific indirect effect a·b for each and
+    the total indirect effect (their sum), all from the same resamples."""
     import numpy as np
     from scipy import stats
 
     if n_boot < 1000:
         raise InputError(f"n_boot: {n_boot} resamples are too few for a 95% interval's limits; use at least 1,000 (5,000 by default)")
-    names = [x, mediator, y, *covariates]
+    mediators = [mediator] if isinstance(mediator, str) else list(mediator)
+    if not mediators:
+        raise InputError("mediator: at least one is needed")
+    names = [x, *mediators, y, *covariates]
     if len(set(names)) != len(names):
         raise InputError(f"{', '.join(names)}: a variable is named twice")
     data, missing = c.listwise(df, names)
     cols = {name: c.numeric(data, name).to_numpy(dtype=float) for name in names}
-    n = len(data)
-    if n < len(covariates) + 4:
+    n, k = len(data), len(mediators)
+    if n < len(covariates) + k + 4:
         raise InputError(f"{n} complete rows: too few for the mediation models")
     ones = np.ones(n)
     Z = [cols[v] for v in covariates]
     Xa = np.column_stack([ones, cols[x], *Z])
-    Xb = np.column_stack([ones, cols[x], cols[mediator], *Z])
-    ya, yb = cols[mediator], cols[y]
-    a_coef, a_se, a_df = _ols(Xa, ya)
+    Xb = np.column_stack([ones, cols[x], *[cols[m] for m in mediators], *Z])
+    M, yb = np.column_stack([cols[m] for m in mediators]), cols[y]
+    fits_a = [_ols(Xa, M[:, i]) for i in range(k)]
     b_coef, b_se, b_df = _ols(Xb, yb)
     c_coef, c_se, c_df = _ols(Xa, yb)
-    paths = [("a", f"{x} → {mediator}", a_coef[1], a_se[1], a_df), ("b", f"{mediator} → {y}, given {x}", b_coef[2], b_se[2], b_df),
-             ("c", f"{x} → {y} (total)", c_coef[1], c_se[1], c_df), ("c′", f"{x} → {y}, given {mediator} (direct)", b_coef[1], b_se[1], b_df)]
-    variables = c.variables({"predictor": x, "mediator": mediator, "outcome": y}, labels)
+    held = " and ".join(mediators)
+    paths = [("a", m, f"{x} → {m}", fits_a[i][0][1], fits_a[i][1][1], fits_a[i][2]) for i, m in enumerate(mediators)]
+    paths += [("b", m, f"{m} → {y}, given {x}" + (" and the other mediators" if k > 1 else ""), b_coef[2 + i], b_se[2 + i], b_df)
+              for i, m in enumerate(mediators)]
+    paths += [("c", None, f"{x} → {y} (total)", c_coef[1], c_se[1], c_df), ("c′", None, f"{x} → {y}, given {held} (direct)", b_coef[1], b_se[1], b_df)]
     caution = Note("caution", CAUTION)
+    binary = [m for m in mediators if len(np.unique(cols[m])) == 2]
+    linear = Note("method", f"{', '.join(binary)} has two values; its path a is a linear probability model (OLS), as the indirect "
+                            "effect a·b assumes; a logistic path a would give a·b on a different scale.") if binary else None
     prov = c.provenance("statsetter.analyses.mediation")
+
+    def variables(focus: str | None) -> tuple[Variable, ...]:
+        """The predictor, the mediator in focus (or every mediator) and the outcome."""
+        named = dict(labels or {})
+        return tuple(Variable(v, named.get(v, v), role) for v, role in
+                     [(x, "predictor"), *[(m, "mediator") for m in ([focus] if focus else mediators)], (y, "outcome")])
+
     out = []
-    for path, what, est, se, dfe in paths:
+    for path, focus, what, est, se, dfe in paths:
         t = float(est / se)
         crit = float(stats.t.ppf(0.5 + level / 2, dfe))
         out.append(Result(
@@ -90,43 +110,51 @@ def mediation(
             p=float(2 * stats.t.sf(abs(t), dfe)),
             n=n,
             estimate=Estimate("B", float(est), se=float(se), ci=Interval(level, float(est - crit * se), float(est + crit * se))),
-            variables=variables,
-            notes=c.notes(caution, missing),
-            details={"path": path, "describes": what},
+            variables=variables(focus),
+            notes=c.notes(caution, linear if focus in binary else None, missing),
+            details={"path": path, "describes": what, **({"mediator": focus} if focus and k > 1 else {})},
             provenance=prov,
         ))
-    indirect = float(a_coef[1] * b_coef[2])
+    a = np.array([f[0][1] for f in fits_a])
+    effects = a * b_coef[2:2 + k]
     rng = np.random.default_rng(seed)
-    boot = np.empty(n_boot)
+    boot = np.empty((n_boot, k))
     for i in range(n_boot):
         rows = rng.integers(0, n, n)
-        a_i = np.linalg.lstsq(Xa[rows], ya[rows], rcond=None)[0][1]
-        b_i = np.linalg.lstsq(Xb[rows], yb[rows], rcond=None)[0][2]
+        a_i = np.linalg.lstsq(Xa[rows], M[rows], rcond=None)[0][1]
+        b_i = np.linalg.lstsq(Xb[rows], yb[rows], rcond=None)[0][2:2 + k]
         boot[i] = a_i * b_i
     tail = (1 - level) / 2
-    if bias_corrected:
-        z0 = float(stats.norm.ppf(np.mean(boot < indirect)))
-        zc = float(stats.norm.ppf(1 - tail))
-        qs = (float(stats.norm.cdf(2 * z0 - zc)), float(stats.norm.cdf(2 * z0 + zc)))
-        method = f"bias-corrected bootstrap, {n_boot:,} resamples, seed {seed}"
-    else:
-        qs = (tail, 1 - tail)
-        method = f"percentile bootstrap, {n_boot:,} resamples, seed {seed}"
-    low, high = (float(v) for v in np.quantile(boot, qs))
+    kind = "bias-corrected" if bias_corrected else "percentile"
+    method = f"{kind} bootstrap, {n_boot:,} resamples, seed {seed}"
     total = float(c_coef[1])
-    details: dict[str, object] = {"path": "a·b", "n_boot": n_boot, "seed": seed, "method": method}
-    notes = [caution, Note("method", f"Indirect effect a·b with a {method}; the CI, not a p value, is the test.")]
-    if total != 0 and indirect / total > 0:
-        details["proportion_mediated"] = indirect / total
-        notes.append(Note("caution", "The proportion mediated (a·b / c) is unstable unless the total effect is large and is "
-                                     "not a share of a causal effect unless the causal assumptions hold; report it with care."))
-    out.append(Result(
-        kind="mediation_indirect",
-        n=n,
-        estimate=Estimate("indirect effect", indirect, ci=Interval(level, low, high)),
-        variables=variables,
-        notes=c.notes(*notes, missing),  # type: ignore[arg-type]
-        details=details,
-        provenance=prov,
-    ))
+    estimates = [(m, float(effects[i]), boot[:, i]) for i, m in enumerate(mediators)]
+    if k > 1:
+        estimates.append((None, float(effects.sum()), boot.sum(axis=1)))
+    for focus, indirect, draws in estimates:
+        if bias_corrected:
+            z0 = float(stats.norm.ppf(np.mean(draws < indirect)))
+            zc = float(stats.norm.ppf(1 - tail))
+            qs = (float(stats.norm.cdf(2 * z0 - zc)), float(stats.norm.cdf(2 * z0 + zc)))
+        else:
+            qs = (tail, 1 - tail)
+        low, high = (float(v) for v in np.quantile(draws, qs))
+        details: dict[str, object] = {"path": "a·b" if focus or k == 1 else "total indirect", "n_boot": n_boot, "seed": seed, "method": method}
+        if focus and k > 1:
+            details["mediator"] = focus
+        notes = [caution, Note("method", f"{'Indirect effect a·b' if focus or k == 1 else 'Total indirect effect (the sum of the specific a·b)'} "
+                                         f"with a {method}; the CI, not a p value, is the test.")]
+        if total != 0 and indirect / total > 0:
+            details["proportion_mediated"] = indirect / total
+            notes.append(Note("caution", "The proportion mediated (a·b / c) is unstable unless the total effect is large and is "
+                                         "not a share of a causal effect unless the causal assumptions hold; report it with care."))
+        out.append(Result(
+            kind="mediation_indirect",
+            n=n,
+            estimate=Estimate("indirect effect", indirect, ci=Interval(level, low, high)),
+            variables=variables(focus),
+            notes=c.notes(*notes, missing),  # type: ignore[arg-type]
+            details=details,
+            provenance=prov,
+        ))
     return out

@@ -94,7 +94,7 @@ class Helpers:
         self._ci_pattern_neg = self._ci_pattern_neg.replace(" ", nb)
 
     _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible paren".split()
-    _PLAIN = "var cap verdict significant direction_word null and_next predictors pseudo_r2".split()
+    _PLAIN = "var var_list cap verdict significant direction_word null and_next predictors pseudo_r2".split()
 
     def raw(self) -> dict[str, Any]:
         """The names a compiled stats form sees: the markup helpers as they
@@ -318,6 +318,11 @@ class Helpers:
     def var(self, r: Result, role: str, fallback: str = "") -> str:
         v = r.variable(role)
         return v.display if v is not None else fallback
+
+    def var_list(self, r: Result, role: str, fallback: str = "") -> str:
+        """Every variable in ``role``, listed ("a and b")."""
+        names = [v.display for v in r.variables if v.role == role]
+        return self.listing(names) if names else fallback
 
     def cap(self, text: Any) -> Markup:
         text = Markup(escape(text))
