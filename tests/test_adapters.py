@@ -392,7 +392,7 @@ def test_unsupported_objects_list_what_is_supported():
         to_records(stats.ttest_ind([1.0, 2, 3, 4], [2.0, 3, 4, 6]), "t_test")
     with pytest.raises(InputError, match="not supported"):
         to_records(pd.DataFrame({"x": [1]}).assign(n=1, r=0.5, CI95=[[0.1, 0.7]], p_val=0.1).set_axis(["shepherd"]))
-    assert len(supported()) == 38  # pingouin friedman, cochran, rm_anova, ancova and mediation_analysis added with the new designs
+    assert len(supported()) == 43  # the designs added pingouin friedman, cochran, rm_anova, ancova, mediation_analysis, mixed_anova and statsmodels AnovaRM, MixedLM, mcnemar, cochrans_q
 
 
 def test_minimum_versions_are_declared():

@@ -37,6 +37,7 @@ _SIGNATURES: list[tuple[frozenset[str], str]] = [
     (frozenset({"Source", "ddof1", "H", "p_unc"}), "pingouin.kruskal"),
     (frozenset({"Source", "W", "ddof1", "Q", "p_unc"}), "pingouin.friedman"),
     (frozenset({"Source", "ddof1", "ddof2", "F", "p_unc", "ng2"}), "pingouin.rm_anova"),
+    (frozenset({"Source", "SS", "DF1", "DF2", "MS", "F", "p_unc", "np2"}), "pingouin.mixed_anova"),
     (frozenset({"Source", "SS", "DF", "F", "p_unc", "np2"}), "pingouin.ancova"),
     (frozenset({"path", "coef", "se", "pval", "CI2.5", "CI97.5"}), "pingouin.mediation_analysis"),
     (frozenset({"Source", "dof", "Q", "p_unc"}), "pingouin.cochran"),
@@ -369,8 +370,53 @@ def friedman(frame: Any, ctx: Context) -> list[Result]:
                   effects=(EffectSize("kendall_w", float(row["W"]), method="Kendall's W (pingouin)"),))]
 
 
+def _within_term(ctx: Context, name: str, row: Any, df1: float, df2: float, effects: tuple[EffectSize, ...], extra: dict[str, Any]) -> Result:
+    """A within-subjects term: Greenhouse–Geisser-corrected when pingouin gives the corrected p, else uncorrected (its ε kept)."""
+    import math
+
+    corrected = "p_GG_corr" in row.index and not math.isnan(float(row["p_GG_corr"]))
+    eps = float(row["eps"]) if "eps" in row.index and not math.isnan(float(row["eps"])) else None
+    details: dict[str, Any] = {"term": name, "interaction": "×" in name, "p_uncorrected": float(row["p_unc"]), "df1_uncorrected": df1,
+                               "df2_uncorrected": df2, **extra}
+    if corrected and eps is not None:
+        details.update(correction="Greenhouse–Geisser correction", epsilon=eps, epsilon_gg=eps)
+    else:
+        details.update(correction="no sphericity correction", **({"epsilon_gg": eps} if eps is not None else {}))
+    if "W_spher" in row.index and not math.isnan(float(row["W_spher"])):
+        details.update(mauchly_w=float(row["W_spher"]), mauchly_p=float(row["p_spher"]))
+    e = eps if corrected and eps is not None else 1.0
+    return _base(ctx, "anova_term", [absent(ctx, ["n", "the Huynh–Feldt ε"])], statistic=Statistic("F", float(row["F"]), (df1 * e, df2 * e)),
+                 p=float(row["p_GG_corr"]) if corrected else float(row["p_unc"]), effects=effects, details=details)
+
+
+def mixed_anova(frame: Any, ctx: Context) -> list[Result]:
+    """pingouin's mixed_anova: the between term, the within term and the interaction (pingouin calls it "Interaction")."""
+    rows = [r for _, r in frame.iterrows()]
+    if len(rows) != 3:
+        raise InputError(f"expected pingouin's three-row mixed_anova table, got {len(rows)} rows")
+    between, within = str(rows[0]["Source"]), str(rows[1]["Source"])
+    out = []
+    for row, name in zip(rows, (between, within, f"{between} × {within}")):
+        df1, df2 = float(row["DF1"]), float(row["DF2"])
+        effects = (variance_explained("eta2_p", float(row["np2"]), float(row["F"]), df1, df2, ctx.level),)
+        if name == between:
+            out.append(_base(ctx, "anova_term", [absent(ctx, ["n"])], statistic=Statistic("F", float(row["F"]), (df1, df2)), p=float(row["p_unc"]),
+                             effects=effects, details={"term": name, "interaction": False, "ss": float(row["SS"])}))
+        else:
+            out.append(_within_term(ctx, name, row, df1, df2, effects, {"ss": float(row["SS"])}))
+    return out
+
+
 def rm_anova(frame: Any, ctx: Context) -> list[Result]:
-    """One within factor: the Greenhouse–Geisser-corrected test when pingouin gives it (correction=True), else uncorrected."""
+    """One within factor: the Greenhouse–Geisser-corrected test when pingouin gives it (correction=True), else uncorrected.
+    Two within factors: a term record each (pingouin's "a * b" is the interaction), corrected where pingouin gives p_GG_corr."""
+    if len(frame) > 1:
+        out = []
+        for _, row in frame.iterrows():
+            name = " × ".join(part.strip() for part in str(row["Source"]).split("*"))
+            out.append(_within_term(ctx, name, row, float(row["ddof1"]), float(row["ddof2"]),
+                                    (EffectSize("eta2_g", float(row["ng2"]), method="generalized η² (pingouin)"),), {}))
+        return out
     row = _one(frame)
     df1, df2 = float(row["ddof1"]), float(row["ddof2"])
     eps = float(row["eps"]) if "eps" in frame.columns and "p_GG_corr" in frame.columns else None
@@ -416,6 +462,24 @@ def cochran(frame: Any, ctx: Context) -> list[Result]:
 
 
 # -- statsetter's analysis of the data given -----------------------------------
+
+
+def _rm(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses.repeated import rm_anova
+
+    correction = "gg" if any(r.details.get("correction", "").startswith("Greenhouse") for r in mine) else "none"
+    if len(mine) > 1 and correction == "gg" and any(r.details.get("correction", "").startswith("no") for r in mine):
+        raise InputError("pingouin.rm_anova: some terms corrected and some not; read it without data=")
+    out = rm_anova(frame, outcome=cols["outcome"], subject=cols["subject"], within=cols["within"], correction=correction, level=ctx.level,
+                   labels=ctx.labels)
+    return out if isinstance(out, list) else [out]
+
+
+def _mixed_anova(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses.repeated import mixed_anova
+
+    correction = "gg" if mine[1].details.get("correction", "").startswith("Greenhouse") else "none"
+    return mixed_anova(frame, cols["outcome"], cols["subject"], cols["within"], cols["between"], correction=correction, level=ctx.level, labels=ctx.labels)
 
 
 def _ttest(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
@@ -527,7 +591,8 @@ ADAPTERS = {
         Adapter("pingouin.kruskal", LIB, kruskal, "k", _kruskal),
         Adapter("pingouin.friedman", LIB, friedman),  # read as printed; long data with subjects are not merged
         Adapter("pingouin.cochran", LIB, cochran),
-        Adapter("pingouin.rm_anova", LIB, rm_anova),
+        Adapter("pingouin.rm_anova", LIB, rm_anova, None, _rm, term_key),
+        Adapter("pingouin.mixed_anova", LIB, mixed_anova, None, _mixed_anova, term_key),
         Adapter("pingouin.ancova", LIB, anova),  # the terms of an ANCOVA table, as an ANOVA table's
         Adapter("pingouin.mediation_analysis", LIB, mediation_analysis),
     )

@@ -1,5 +1,7 @@
 """statsmodels results → records: OLS/WLS and Logit fits, anova_lm tables,
-pairwise_tukeyhsd results."""
+pairwise_tukeyhsd results, AnovaRM, MixedLM fits, and the mcnemar and
+cochrans_q bunches (these do not say which function made them: pass
+``source=``)."""
 
 from __future__ import annotations
 
@@ -29,6 +31,12 @@ def identify(obj: Any) -> str | None:
             return "statsmodels.Logit"
         if cls == "TukeyHSDResults":
             return "statsmodels.pairwise_tukeyhsd"
+        if cls == "AnovaResults" and hasattr(obj, "anova_table"):
+            return "statsmodels.AnovaRM"
+        if model_name == "MixedLM":
+            return "statsmodels.MixedLM"
+        if cls == "_Bunch":
+            raise InputError("a statsmodels bunch does not say which test made it; pass source='statsmodels.mcnemar' or 'statsmodels.cochrans_q'")
         return None
     try:
         import pandas as pd
@@ -235,6 +243,108 @@ def tukeyhsd(res: Any, ctx: Context) -> list[Result]:
     return out
 
 
+def anova_rm(res: Any, ctx: Context) -> list[Result]:
+    """AnovaRM's table: uncorrected F tests (statsmodels gives no sphericity test or correction: said)."""
+    table = res.anova_table
+    note = Note("method", "statsmodels' AnovaRM: uncorrected F; it gives no sphericity test or correction (pass the data to add them).")
+    rows = [(term_name(str(name)), row) for name, row in table.iterrows()]
+    out = []
+    for name, row in rows:
+        df1, df2 = float(row["Num DF"]), float(row["Den DF"])
+        statistic = Statistic("F", float(row["F Value"]), (df1, df2))
+        details: dict[str, Any] = {"correction": "no sphericity correction", "df1_uncorrected": df1, "df2_uncorrected": df2}
+        if len(rows) == 1:
+            out.append(_base(ctx, "anova_rm", [note], statistic=statistic, p=float(row["Pr > F"]), details={"k": int(df1) + 1, **details}))
+        else:
+            out.append(_base(ctx, "anova_term", [note], statistic=statistic, p=float(row["Pr > F"]),
+                             details={"term": name, "interaction": "×" in name, **details}))
+    return out
+
+
+def mixed_lm(res: Any, ctx: Context) -> list[Result]:
+    """A MixedLM fit: the model (method, groups, log-likelihood, AIC and BIC as R's nlme counts the parameters, variance
+    components) and each fixed effect with its z test and Wald CI. The ICC needs the intercept-only model: pass the data."""
+    import numpy as np
+    from scipy import stats
+
+    from ..analyses.multilevel import Z_NOTE
+
+    method = "REML" if getattr(res, "method", "REML") == "REML" else "ML"
+    names = list(res.model.exog_names)
+    p, q = len(names), int(np.asarray(res.cov_re).shape[0])
+    n = int(res.nobs)
+    ll = float(res.llf)
+    k = p + q * (q + 1) // 2 + 1
+    aic, bic = -2 * ll + 2 * k, -2 * ll + k * math.log(n - p if method == "REML" else n)
+    cov_re = np.asarray(res.cov_re)
+    re_names = ["intercept", *[term_name(str(v)) for v in list(getattr(res.cov_re, "index", range(q)))[1:]]]  # statsmodels calls the intercept "Group"
+    components: dict[str, Any] = {f"variance_{re_names[i]}": float(cov_re[i, i]) for i in range(q)}
+    for i in range(q):
+        for j in range(i + 1, q):
+            components[f"correlation_{re_names[i]}_{re_names[j]}"] = float(cov_re[i, j] / math.sqrt(cov_re[i, i] * cov_re[j, j]))
+    components["variance_residual"] = float(res.scale)
+    outcome, named = _names(res, ctx, names)
+    model = _base(ctx, "mixed_model", [Note("method", f"Linear mixed model by {method} (statsmodels MixedLM)."), Z_NOTE, absent(ctx, ["the ICC"])],
+                  n=n, details={"method": method, "groups": len(res.model.group_labels), "log_likelihood": ll, "aic": aic, "bic": bic, **components},
+                  variables=(outcome,) if outcome else ())
+    crit = float(stats.norm.ppf(0.5 + ctx.level / 2))
+    out = [model]
+    fe, se = np.asarray(res.fe_params), np.asarray(res.bse_fe)
+    for j, name in enumerate(names):
+        b, s_e = float(fe[j]), float(se[j])
+        intercept = name in _INTERCEPT
+        out.append(_base(ctx, "linear_coefficient", [Z_NOTE], statistic=Statistic("z", b / s_e), p=float(2 * stats.norm.sf(abs(b / s_e))), n=n,
+                         estimate=Estimate("B", b, se=s_e, ci=Interval(ctx.level, b - crit * s_e, b + crit * s_e)),
+                         details={"term": "Intercept", "intercept": True, "multilevel": True} if intercept else
+                         {"term": term_name(name), "adjusted": p > 2, "multilevel": True, **named.get(name, (None, {}))[1]},
+                         variables=((outcome,) if outcome else ()) if intercept else _coefficient_variables(named.get(name), outcome)))
+    return out
+
+
+def mcnemar(res: Any, ctx: Context) -> list[Result]:
+    """statsmodels' mcnemar bunch. It does not record how it was computed: ``variant`` ("exact", "corrected" or
+    "uncorrected", as its exact= and correction= were) is needed; for the exact test its statistic is min(b, c)."""
+    variant = ctx.option("variant")
+    if variant not in ("exact", "corrected", "uncorrected"):
+        raise InputError("statsmodels.mcnemar: pass variant='exact', 'corrected' or 'uncorrected' (the result does not record exact= and correction=)")
+    method = {"exact": "exact binomial test of the discordant pairs", "corrected": "chi-square with continuity correction",
+              "uncorrected": "chi-square without continuity correction"}[variant]
+    statistic = None if variant == "exact" else Statistic("chi2", float(res.statistic), (1,))
+    return [_base(ctx, "mcnemar", [absent(ctx, ["n", "the discordant pairs and their odds ratio"])], statistic=statistic, p=float(res.pvalue),
+                  details={"method": method, "variant": variant})]
+
+
+def cochrans_q(res: Any, ctx: Context) -> list[Result]:
+    return [_base(ctx, "cochran_q", [absent(ctx, ["n and the counts per measurement"])], statistic=Statistic("Q", float(res.statistic), (float(res.df),)),
+                  p=float(res.pvalue))]
+
+
+def _rm(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses.repeated import rm_anova
+
+    out = rm_anova(frame, outcome=cols["outcome"], subject=cols["subject"], within=cols["within"], correction="none", level=ctx.level, labels=ctx.labels)
+    return out if isinstance(out, list) else [out]
+
+
+def _mixed(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses.multilevel import mixed_model
+
+    return mixed_model(frame, cols["outcome"], cols.get("predictors", []), cols["group"], random_slopes=cols.get("random_slopes", ()),
+                       method=mine[0].details["method"], reference=cols.get("reference"), level=ctx.level, labels=ctx.labels)
+
+
+def _mcnemar(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses.repeated import mcnemar as ours
+
+    return [ours(frame, cols["first"], cols["second"], variant=ctx.option("variant"), level=ctx.level, labels=ctx.labels)]
+
+
+def _cochran(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
+    from ..analyses.repeated import cochran_q
+
+    return [cochran_q(frame, cols["columns"], labels=ctx.labels)]
+
+
 def _linear(frame, cols, ctx, mine):  # type: ignore[no-untyped-def]
     from ..analyses.regression import linear_regression
 
@@ -272,5 +382,9 @@ ADAPTERS = {
         Adapter("statsmodels.Logit", LIB, logit, None, _logistic, term_key),
         Adapter("statsmodels.anova_lm", LIB, anova_lm, None, _anova, term_key),
         Adapter("statsmodels.pairwise_tukeyhsd", LIB, tukeyhsd, "k", _tukey, pair_key),
+        Adapter("statsmodels.AnovaRM", LIB, anova_rm, None, _rm, term_key),
+        Adapter("statsmodels.MixedLM", LIB, mixed_lm, None, _mixed, term_key),
+        Adapter("statsmodels.mcnemar", LIB, mcnemar, None, _mcnemar),
+        Adapter("statsmodels.cochrans_q", LIB, cochrans_q, None, _cochran),
     )
 }

@@ -25,7 +25,7 @@ if TYPE_CHECKING:
     import pandas as pd
 
 Method = Literal["REML", "ML"]
-_Z_NOTE = Note("method", "Fixed effects tested with z (statsmodels' normal approximation; R's lme uses t with containment df).")
+Z_NOTE = Note("method", "Fixed effects tested with z (statsmodels' normal approximation; R's lme uses t with containment df).")
 
 
 def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: str, slopes: Sequence[str], method: Method,  # type: ignore[no-untyped-def]
@@ -102,7 +102,7 @@ def mixed_model(
     groups = int(data[group].nunique())
     notes = [Note("method", f"Linear mixed model by {method} (statsmodels MixedLM): random intercept"
                             + (f" and slope(s) of {', '.join(named.get(s, s) for s in random_slopes)}" if random_slopes else "")
-                            + f" for {named.get(group, group)} ({groups} groups)."), _Z_NOTE]
+                            + f" for {named.get(group, group)} ({groups} groups)."), Z_NOTE]
     notes += [Note("caution", f"Fit warning: {w}") for w in dict.fromkeys(problems)]
     prov = c.provenance("statsetter.analyses.mixed_model", statsmodels=True)
     model = Result(
@@ -131,7 +131,7 @@ def mixed_model(
             n=len(data),
             estimate=Estimate("B", b, se=se, ci=Interval(level, b - crit * se, b + crit * se)),
             variables=(Variable(outcome, named.get(outcome, outcome), "outcome"), Variable(source, shown, "predictor")),
-            notes=c.notes(_Z_NOTE, missing),
+            notes=c.notes(Z_NOTE, missing),
             details=details,
             provenance=prov,
         ))
