@@ -99,3 +99,8 @@ print(anova(lm(mpg ~ hp + factor(cyl), data = mtcars), lm(mpg ~ hp * factor(cyl)
 
 # Parallel mediators (tests/test_analyses_mediation.py): python -c "import pingouin as pg; pg.read_dataset('mediation').to_csv('/tmp/mediation.csv', index=False)"
 d <- read.csv("/tmp/mediation.csv"); for (f in list(M ~ X, Mbin ~ X, Y ~ X + M + Mbin, Y ~ X)) print(summary(lm(f, data = d))$coefficients)
+
+# Mixed-model comparison table (tests/test_analyses_multilevel.py): the interaction model against the additive one, ML fits
+library(nlme)
+a <- lme(distance ~ age + Sex, random = ~1 | Subject, data = Orthodont, method = "ML"); b <- lme(distance ~ age * Sex, random = ~1 | Subject, data = Orthodont, method = "ML")
+print(anova(a, b))

@@ -75,3 +75,30 @@ def test_sentences(fitted):
     assert "estimated by REML" in text and "ICC = .43" in text and "AIC = 447.51" in text
     sex = next(r for r in fitted if r.details.get("category"))
     assert render(sex, "sentence").plain().startswith("Distance was lower for Female than for Male")
+
+
+# R 4.x, nlme (tests/r_reference.R): anova() of the ML fits distance ~ age + Sex and distance ~ age * Sex
+R_INTERACTION = {"aic": 440.639058019510, "bic": 456.731845382255, "ll": -214.319529009755, "chi2": 6.21742707415297, "p": 0.0126}
+
+
+def test_tables_of_a_mixed_model_and_of_nested_comparisons():
+    from statsetter import table
+    from statsetter.export.text_tables import table_text
+
+    teeth = DATA.assign(age_girls=DATA["age"] * (DATA["Sex"] == "Female"))
+    first = compare_models(teeth, "distance", ["age"], ["age", "Sex"], "Subject")
+    second = compare_models(teeth, "distance", ["age", "Sex"], ["age", "Sex", "age_girls"], "Subject", labels={"age_girls": "age × girl"})
+    assert second.statistic.value == pytest.approx(R_INTERACTION["chi2"], rel=1e-5) and second.p == pytest.approx(R_INTERACTION["p"], abs=5e-5)
+    lines = table_text(table([*first, *second], "apa7")).splitlines()
+    rows = {line.split()[0] + line.split()[1]: line for line in lines if line.startswith("Model ")}
+    # R's printed values, rounded to the table's two decimals: Model 1 and 2 from R_LRT, Model 3 from R_INTERACTION
+    assert "451.39" in rows["Model1"] and "462.12" in rows["Model1"]
+    assert all(v in rows["Model2"] for v in ("444.86", "458.27", f"{R_LRT['chi2']:.2f}", ".003"))
+    assert all(v in rows["Model3"] for v in ("Age × girl", "−214.32", "440.64", "456.73", "6.22", ".013"))
+    fitted_table = table_text(table(mixed_model(DATA, "distance", ["age", "Sex"], "Subject", reference={"Sex": "Male"}), "apa7"))
+    b, se = R_FIXED["age"]
+    age_row = next(line for line in fitted_table.splitlines() if line.strip().startswith("Age"))
+    assert f"{b:.2f}" in age_row and f"{se:.2f}" in age_row
+    assert f"{R_VAR['intercept']:.2f}" in next(line for line in fitted_table.splitlines() if "Intercept variance" in line)
+    assert f"{R_FIT['icc']:.2f}".lstrip("0") in next(line for line in fitted_table.splitlines() if "ICC" in line)
+    assert f"{R_FIT['aic']:.2f}" in next(line for line in fitted_table.splitlines() if line.strip().startswith("AIC"))

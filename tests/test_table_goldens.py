@@ -55,7 +55,11 @@ KINDS = {
     "welch": "ANOVA tables: Welch's ANOVA in its own form (F, df1, df2, p, η²)",
     "posthoc": "Post hoc pairs: mean difference and g with their CIs under spanners, adjusted p",
     "results": "Results table: rows by subject and test, statistic with df (χ² with N), p, effect size and CI",
+    # nlme's Orthodont (tests/data/orthodont.csv): fixed effects, then random effects and fit under heading rows
+    "mixed": "Multilevel models: fixed effects with z and the CI; variances, slope correlation, ICC; log-likelihood, AIC, BIC, groups",
+    "comparison": "Multilevel models: nested ML fits, log-likelihood, AIC, BIC and the likelihood-ratio test against the model above",
 }
+ORTHODONT = Path(__file__).parent / "data" / "orthodont.csv"
 
 
 @pytest.fixture(scope="module")
@@ -87,6 +91,19 @@ def build(kind: str, data, style):  # type: ignore[no-untyped-def]
         rs = [t_independent(data, "body_mass_g", "sex").main, anova_oneway(data, "body_mass_g", "island").main,
               anova_oneway(data, "body_mass_g", "island", variant="welch").main, chi_square(data, "species", "island").main]
         return table(rs, style, number=10)
+    if kind in ("mixed", "comparison"):
+        import pandas as pd
+
+        from statsetter.analyses import compare_models, mixed_model
+
+        teeth = pd.read_csv(ORTHODONT)
+        teeth["age_girls"] = teeth["age"] * (teeth["Sex"] == "Female")
+        named = {"distance": "pituitary–fissure distance", "age": "age", "age_girls": "age × girl"}
+        if kind == "mixed":
+            return table(mixed_model(teeth, "distance", ["age", "Sex"], "Subject", random_slopes=["age"], reference={"Sex": "Male"}, labels=named),
+                         style, number=11)
+        return table([*compare_models(teeth, "distance", ["age"], ["age", "Sex"], "Subject", labels=named),
+                      *compare_models(teeth, "distance", ["age", "Sex"], ["age", "Sex", "age_girls"], "Subject", labels=named)], style, number=12)
     raise AssertionError(kind)
 
 

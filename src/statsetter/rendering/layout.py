@@ -1,7 +1,9 @@
 """``table``: any record, or the records of one analysis, laid out as a
 TableModel in a style: a Description as a Table 1, a correlation matrix as
 its lower triangle, one regression's records as its coefficients table, one
-ANOVA's as its source table, any other records one row each."""
+ANOVA's as its source table, one mixed model's as its fixed and random
+effects, model comparisons as a comparison table, any other records one
+row each."""
 
 from __future__ import annotations
 
@@ -40,6 +42,14 @@ def table(source: "Record | Iterable[Record]", style: "Style | str | None" = Non
         if not isinstance(r, Result):
             raise InputError(f"table: record {i + 1} is a {r.kind} record; lay it out on its own")
     kinds = {r.kind for r in records}
+    if "mixed_model" in kinds and kinds <= {"mixed_model", "linear_coefficient"}:
+        from .multilevel_tables import mixed_model_table
+
+        return mixed_model_table(records, style, title=title, number=number)
+    if kinds == {"model_comparison"}:
+        from .multilevel_tables import comparison_table
+
+        return comparison_table(records, style, title=title, number=number)
     if kinds <= _REGRESSION and kinds & {"linear_coefficient", "logistic_coefficient"}:
         from .regression_tables import regression_table
 
