@@ -335,3 +335,25 @@ def test_mixed_anova_simple_effects_equal_r():
     assert len(mixed_anova(d, "Scores", "Subject", "Time", "Group", simple="within")) == 5
     with pytest.raises(InputError, match="simple"):
         mixed_anova(d, "Scores", "Subject", "Time", "Group", simple="all")
+
+
+def test_the_audit_checks_sphericity_corrected_f():
+    """Corrected df keep df₂/df₁ whole and, with ε printed, df/ε whole; η²p follows from F and the df ratio.
+    Sources: R's anova.mlm output above (rm_anova2, the interaction: GG ε .7272, corrected p .001708, uncorrected p
+    .000373); a question on stats.stackexchange.com (no. 89071, CC BY-SA) typing F(2, 10) = 12.534 corrected with
+    ε = .638 as F(1.276, 6.380) and its partial η² as .71483974."""
+    ok = [Unit("a", "With the Greenhouse–Geisser correction, F(1.45, 13.09) = 12.63, p = .002, ε = .73, η²p = .58."),
+          Unit("b", "After the correction, F(1.276, 6.380) = 12.534, ε = .638, partial eta squared = .71.")]
+    for e in audit_units(ok):
+        assert not set(e.codes) - {"decimals"}, (e.found, e.codes)  # three-decimal F and ε are a style matter only
+    uncorrected_p, wrong_df, wrong_eps, wrong_eta = audit_units([
+        Unit("c", "With the Greenhouse–Geisser correction, F(1.45, 13.09) = 12.63, p < .001."),  # the uncorrected p beside corrected df
+        Unit("d", "With the Greenhouse–Geisser correction, F(1.45, 15.09) = 12.63, p = .002."),  # df₂ mistyped: 15.09/1.45 is not whole
+        Unit("e", "With the Greenhouse–Geisser correction, F(1.45, 13.09) = 12.63, p = .002, ε = .63."),
+        Unit("f", "With the Greenhouse–Geisser correction, F(1.45, 13.09) = 12.63, p = .002, η²p = .30.")])
+    assert "p-does-not-follow" in uncorrected_p.codes
+    assert "corrected-df" in wrong_df.codes and "corrected-df" in wrong_eps.codes and "corrected-df" not in wrong_eta.codes
+    assert "effect-does-not-fit" in wrong_eta.codes
+    # Welch's F keeps a whole df₁: neither check applies
+    (welch,) = audit_units([Unit("g", "Welch's test gave F(2, 71.35) = 3.20, p = .047.")])
+    assert "corrected-df" not in welch.codes

@@ -44,6 +44,8 @@ CODES: dict[str, tuple[str, str]] = {
     "hyphen-minus": ("a hyphen or dash where the style has a minus sign", "Numbers: true minus sign (practice; APA examples)"),
     "italics": ("a Latin symbol not in italics, or a Greek one in italics", "Statistics in text: italic symbols (APA 7 §6.45)"),
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
+    "corrected-df": ("sphericity-corrected df that no single ε and whole uncorrected df give",
+                     "Repeated-measures ANOVA: corrected df are ε × the uncorrected df (Greenhouse & Geisser, 1959; definition)"),
     "coefficient-does-not-fit": (
         "t (or z) does not equal B / SE",
         "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE (practice)",
@@ -68,7 +70,7 @@ SEVERITY: dict[str, str] = {
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
     "one-sided": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
-    "p-zero": "warning",
+    "p-zero": "warning", "corrected-df": "warning",
     "leading-zero": "style", "missing-leading-zero": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
 }
@@ -441,9 +443,10 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
         return []
     low, high = max(rep.value.value - rep.value.half_unit, 0.0), rep.value.value + rep.value.half_unit
     out = []
-    if rep.symbol == "F" and len(rep.df) == 2 and all(float(d.value).is_integer() and d.value > 0 for d in rep.df):
-        df1, df2 = rep.df[0].value, rep.df[1].value
-        bound = (low * df1 / (low * df1 + df2), high * df1 / (high * df1 + df2))
+    whole = len(rep.df) == 2 and all(float(d.value).is_integer() for d in rep.df)
+    if rep.symbol == "F" and len(rep.df) == 2 and all(d.value > 0 for d in rep.df) and (whole or _sphericity_corrected(rep)):
+        (l1, h1), (l2, h2) = (_df_range(d) for d in rep.df)
+        bound = (low * l1 / (low * l1 + h2), high * h1 / (high * h1 + l2))
         for e in rep.effects:
             shown = (e.number.value - e.number.half_unit, e.number.value + e.number.half_unit)
             if (e.name == "eta2_p" and not _overlap(bound, shown)) or (e.name == "eta2" and shown[0] > bound[1] + 1e-12):
@@ -456,6 +459,43 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
             if e.name in ("V", "phi") and e.number.value >= 0 and e.number.value + e.number.half_unit < least - 1e-12:
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} is too small for χ²({rep.df[0].text}, N = {rep.n.text}) = "
                                    f"{rep.value.text}: √(χ²/(N·df)) is already {least:.3f}.", f"{e.symbol_text} = {e.number.text}"))
+    return out
+
+
+def _df_range(d: Number) -> tuple[float, float]:
+    """A df as printed: exact when whole, else ± half its last digit."""
+    return (d.value, d.value) if float(d.value).is_integer() else (d.value - d.half_unit, d.value + d.half_unit)
+
+
+def _sphericity_corrected(rep: Reported) -> bool:
+    """F(ε·df₁, ε·df₂): both df fractional (Welch's F keeps a whole df₁)."""
+    return len(rep.df) == 2 and not any(float(d.value).is_integer() for d in rep.df)
+
+
+def corrected_df(rep: Reported) -> list[Finding]:
+    """A sphericity-corrected F(ε·df₁, ε·df₂) keeps the ratio df₂/df₁ of the
+    uncorrected test, a whole number (n − 1, or N − g with groups); with ε
+    printed, df₁/ε and df₂/ε are whole numbers too. Each is checked with the
+    printed precision of every number."""
+    if rep.symbol != "F" or not _sphericity_corrected(rep):
+        return []
+    (l1, h1), (l2, h2) = (_df_range(d) for d in rep.df)
+    out = []
+    if l1 > 0 and math.floor(h2 / l1 + 1e-9) < math.ceil(l2 / h1 - 1e-9):
+        out.append(Finding("corrected-df", f"F({rep.df[0].text}, {rep.df[1].text}): sphericity-corrected df keep a whole-number ratio df₂/df₁ "
+                                           f"(the error df per effect df), but {rep.df[1].text}/{rep.df[0].text} lies between {l2 / h1:.3f} and "
+                                           f"{h2 / l1:.3f}.", f"F({rep.df[0].text}, {rep.df[1].text})"))
+    for e in rep.effects:
+        if e.name != "epsilon" or not 0 < e.number.value <= 1:
+            continue
+        le, he = e.number.value - e.number.half_unit, e.number.value + e.number.half_unit
+        if le <= 0:
+            continue
+        ranges = [(l1 / he, h1 / le), (l2 / he, h2 / le)]
+        if any(math.floor(b + 1e-9) < max(1, math.ceil(a - 1e-9)) for a, b in ranges):
+            out.append(Finding("corrected-df", f"F({rep.df[0].text}, {rep.df[1].text}) with {e.symbol_text} = {e.number.text}: the corrected df divided "
+                                               f"by ε should give the whole df of the uncorrected test, but give {l1 / he:.2f}–{h1 / le:.2f} and "
+                                               f"{l2 / he:.2f}–{h2 / le:.2f}.", f"{e.symbol_text} = {e.number.text}"))
     return out
 
 

@@ -137,6 +137,7 @@ _EFFECT_NAMES = [
     (r"(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2"),
     (r"(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2"),
     (r"(?:ε|epsilon)\s?(?:[²2]|\^2|squared)", "epsilon2"),
+    (r"(?:ε|epsilon)(?!\s?(?:[²2]|\^2|squared))", "epsilon"),  # a sphericity correction's ε (GG or HF)
     (r"r_?rb|r\s?(?:rank-biserial)", "r_rb"),
     (r"Cram[ée]r'?s\s+V|(?<![\w])V", "V"),
     (r"φ|(?<![\w])phi", "phi"),

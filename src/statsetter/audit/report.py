@@ -22,7 +22,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, corrected_df, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
@@ -286,6 +286,8 @@ def audit_units(
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
         if rep.symbol in ("F", "chi2") and rep.effects:
             findings += effect_from_f_or_chi2(rep)
+        if rep.symbol == "F":
+            findings += corrected_df(rep)
         if grim_items:
             findings += grim(rep, grim_items)
         if unit.part:  # a Word paragraph
