@@ -357,3 +357,19 @@ def test_the_audit_checks_sphericity_corrected_f():
     # Welch's F keeps a whole df₁: neither check applies
     (welch,) = audit_units([Unit("g", "Welch's test gave F(2, 71.35) = 3.20, p = .047.")])
     assert "corrected-df" not in welch.codes
+
+
+def test_mixed_anova_from_wide_data_equals_long():
+    """Wide data as SPSS keeps it (a row per person, a column per measurement, a group column) give the same terms."""
+    from statsetter.analyses import mixed_anova
+
+    d = pg.read_dataset("mixed_anova")
+    wide = d.pivot(index=["Subject", "Group"], columns="Time", values="Scores").reset_index()
+    for long_term, wide_term in zip(mixed_anova(d, "Scores", "Subject", "Time", "Group", simple="both"),
+                                    mixed_anova(wide, "Scores", within="Time", between="Group", columns=["August", "January", "June"], simple="both")):
+        assert wide_term.statistic == long_term.statistic and wide_term.p == long_term.p
+        assert render(wide_term, "sentence").plain() == render(long_term, "sentence").plain()
+    with pytest.raises(InputError, match="not both"):
+        mixed_anova(wide, "Scores", "Subject", between="Group", columns=["August", "January", "June"])
+    with pytest.raises(InputError, match="between"):
+        mixed_anova(wide, columns=["August", "January", "June"])

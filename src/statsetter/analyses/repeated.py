@@ -462,11 +462,12 @@ def _paired_pairs(Y, groups, variables, adjust: str, level: float, missing: Note
 
 def mixed_anova(
     df: "pd.DataFrame",
-    outcome: str,
-    subject: str,
-    within: str,
-    between: str,
+    outcome: str | None = None,
+    subject: str | None = None,
+    within: str | None = None,
+    between: str | None = None,
     *,
+    columns: Sequence[str] | None = None,
     correction: RMCorrection = "auto",
     simple: Literal["within", "between", "both"] | None = None,
     level: float = 0.95,
@@ -489,7 +490,13 @@ def mixed_anova(
     that group's people, its own error term and sphericity correction);
     ``between``, the groups at each measurement (a one-way ANOVA); ``both``.
     Each uses its own error term, not the omnibus one, and p is not adjusted
-    for the number of simple effects (said in a note)."""
+    for the number of simple effects (said in a note).
+
+    Wide data (a row per person, as SPSS keeps it): ``columns`` are the
+    measurements and ``between`` the group column; ``outcome`` and
+    ``within`` then only name the outcome and the within factor in the
+    text (default "the outcome" and "measurement"), and ``subject`` is not
+    given."""
     import numpy as np
     from scipy import stats
 
@@ -499,6 +506,20 @@ def mixed_anova(
         raise InputError(f"correction: {correction!r} is not auto, gg, hf or none")
     if simple not in (None, "within", "between", "both"):
         raise InputError(f"simple: {simple!r} is not within, between or both")
+    if between is None:
+        raise InputError("between: the between-subjects factor (a group column) is needed")
+    if columns is not None:
+        if subject is not None:
+            raise InputError("mixed_anova: give columns= (wide data) or subject= with outcome= and within= (long data), not both")
+        for name in (*columns, between):
+            c.column(df, name)
+        outcome, within, subject = outcome or "the outcome", within or "measurement", "\0person"
+        if len({*columns, between, outcome, within}) != len(columns) + 3:
+            raise InputError(f"{', '.join(columns)}: the measurements, {between}, the outcome's and the factor's names must differ")
+        df = df[[*columns, between]].rename_axis(None).reset_index(drop=True).rename_axis(subject).reset_index() \
+            .melt(id_vars=[subject, between], value_vars=list(columns), var_name=within, value_name=outcome)
+    elif not (outcome and subject and within):
+        raise InputError("mixed_anova: give outcome=, subject= and within= (long data) or columns= (wide data)")
     c.column(df, between)
     per_person = df.groupby(subject, observed=True)[between].nunique()
     if (per_person > 1).any():
