@@ -6,7 +6,13 @@ age, years of service, hours slept before the last shift, an 8-item fatigue
 scale scored 1-5 (items 3 and 6 reverse-keyed), a 1-7 alertness rating,
 cups of coffee a day, and whether they had a safety incident in the last
 year — plus a before/after fatigue score for 40 drivers in a rest-break
-trial. Every number comes from a random generator.
+trial. Added for the repeated-measures and multilevel designs (drawn after
+everything above, so the earlier columns keep their values): the trial's
+arm (extra breaks or the usual rota, 20 each), a follow-up fatigue score a
+month later, whether the driver felt drowsy at the wheel in the week
+before, after and at follow-up, alertness ratings at the start, middle and
+end of a shift, each driver's rota team (24 teams) and a reaction-time
+test score. Every number comes from a random generator.
 """
 
 from __future__ import annotations
@@ -41,6 +47,18 @@ def make_rows(rng: np.random.Generator) -> list[dict[str, object]]:
     trial[rng.choice(n, 40, replace=False)] = True
     before = np.where(trial, (latent + rng.normal(0, 0.3, n)).clip(1, 5).round(2), np.nan)
     after = np.where(trial, (before - 0.25 + rng.normal(0, 0.35, n)).clip(1, 5).round(2), np.nan)
+    # the later additions, in this order, after every draw above
+    in_trial = np.flatnonzero(trial)
+    arm = np.full(n, "", dtype=object)
+    arm[in_trial] = rng.permutation(["extra breaks"] * 20 + ["usual rota"] * 20)
+    gain = np.where(arm == "extra breaks", 0.25, -0.05)
+    after = np.where(trial, (before - gain + rng.normal(0, 0.3, n)).clip(1, 5).round(2), np.nan)
+    followup = np.where(trial, (after - 0.5 * gain + rng.normal(0, 0.3, n)).clip(1, 5).round(2), np.nan)
+    drowsy = [np.where(trial, rng.random(n) < 1 / (1 + np.exp(-(score - 3.1) * 2.2)), False) for score in (before, after, followup)]
+    shift_alert = [np.clip(np.rint(6.2 - 0.9 * (latent - 2) - drop + rng.normal(0, 0.8, n)), 1, 7) for drop in (0.0, 0.4, 1.1)]
+    team = rng.integers(1, 25, n)
+    team_effect = rng.normal(0, 14, 25)
+    reaction = (265 + 12 * (latent - 2.3) + 0.6 * (age - 44) + team_effect[team] + rng.normal(0, 18, n)).round()
     rows = []
     for i in range(n):
         row: dict[str, object] = {
@@ -50,6 +68,10 @@ def make_rows(rng: np.random.Generator) -> list[dict[str, object]]:
         row.update({k: int(v[i]) for k, v in items.items()})
         row.update({"alertness": int(alert[i]), "coffee": int(coffee[i]), "incident": "drivers with an incident" if incident[i] else "drivers without an incident",
                     "fatigue_before": "" if np.isnan(before[i]) else before[i], "fatigue_after": "" if np.isnan(after[i]) else after[i]})
+        row.update({"trial_arm": arm[i], "fatigue_followup": "" if np.isnan(followup[i]) else followup[i]})
+        row.update({f"drowsy_{when}": ("yes" if d[i] else "no") if trial[i] else "" for when, d in zip(("before", "after", "followup"), drowsy)})
+        row.update({f"alert_{when}": int(a[i]) for when, a in zip(("start", "middle", "end"), shift_alert)})
+        row.update({"team": f"T{team[i]:02d}", "reaction_ms": int(reaction[i])})
         rows.append(row)
     return rows
 

@@ -104,3 +104,7 @@ d <- read.csv("/tmp/mediation.csv"); for (f in list(M ~ X, Mbin ~ X, Y ~ X + M +
 library(nlme)
 a <- lme(distance ~ age + Sex, random = ~1 | Subject, data = Orthodont, method = "ML"); b <- lme(distance ~ age * Sex, random = ~1 | Subject, data = Orthodont, method = "ML")
 print(anova(a, b))
+
+# The error strata of the two-within design (the /tmp/rm_anova2.csv above)
+d <- read.csv("/tmp/rm_anova2.csv"); d$Subject <- factor(d$Subject)
+print(summary(aov(Performance ~ Time * Metric + Error(Subject / (Time * Metric)), data = d)))

@@ -373,3 +373,28 @@ def test_mixed_anova_from_wide_data_equals_long():
         mixed_anova(wide, "Scores", "Subject", between="Group", columns=["August", "January", "June"])
     with pytest.raises(InputError, match="between"):
         mixed_anova(wide, columns=["August", "January", "June"])
+
+
+def test_source_tables_of_repeated_designs_have_an_error_row_per_stratum():
+    """Each within term over its own error: R's summary(aov(Performance ~ Time*Metric + Error(Subject/(Time*Metric))))
+    on rm_anova2 prints the residual SS 220.4 (Time), 455.8 (Metric) and 159.9 (Time:Metric) on 9, 18 and 18 df
+    (tests/r_reference.R); the GG-corrected df of the interaction are those of R_TWO_WITHIN."""
+    from statsetter import table
+    from statsetter.analyses import mixed_anova, rm_anova
+    from statsetter.export.text_tables import table_text
+
+    d2 = pg.read_dataset("rm_anova2")
+    text = table_text(table(rm_anova(d2, outcome="Performance", subject="Subject", within=["Time", "Metric"], correction="none"), "apa7"))
+    rows = {line.split("  ")[0].strip(): line for line in text.splitlines() if line.startswith(("Time", "Metric", "Error"))}
+    assert "220.35" in rows["Error (Time)"] and " 9 " in rows["Error (Time)"]
+    assert "455.77" in rows["Error (Metric)"] and " 18 " in rows["Error (Metric)"]
+    assert "159.90" in rows["Error (Time × Metric)"] and " 18 " in rows["Error (Time × Metric)"]
+    corrected = table_text(table(rm_anova(d2, outcome="Performance", subject="Subject", within=["Time", "Metric"], correction="gg"), "apa7"))
+    assert "13.09" in next(line for line in corrected.splitlines() if line.startswith("Error (Time × Metric)"))
+    assert "Time × Metric: Greenhouse–Geisser correction, ε = .73 (df, MS and p corrected)" in " ".join(corrected.split())
+    mixed = table_text(table(mixed_anova(pg.read_dataset("mixed_anova"), "Scores", "Subject", "Time", "Group", correction="none"), "apa7"))
+    lines = [line.split("  ")[0].strip() for line in mixed.splitlines()]
+    assert lines.index("Error (between subjects)") == lines.index("Group") + 1
+    assert lines.index("Error (within subjects)") == lines.index("Group × Time") + 1 and "Total" not in lines
+    between_error = next(line for line in mixed.splitlines() if line.startswith("Error (between"))
+    assert " 58 " in between_error  # N − g: 60 people in 2 groups

@@ -172,7 +172,7 @@ GOLDEN = {
     # REPORTING-RULES Numbers: an ICC cannot exceed 1, no leading zero (APA 7 §6.36); the estimation method said (practice)
     'mixed_model': (
         'ICC = .43',
-        "A linear mixed model of the distance with a random intercept for each of 27 children, estimated by REML (N = 108), had a "
+        "A linear mixed model of the distance with a random intercept for children (27 groups), estimated by REML (N = 108), had a "
         "log-likelihood of −218.76 (AIC = 447.51, BIC = 460.78). The intraclass correlation of the intercept-only model was ICC = .43.",
     ),
     # REPORTING-RULES Reporting by test: chi-square with its df (APA 7 §6.43); the test named (practice)

@@ -22,7 +22,7 @@ kind = "anova_oneway"                  # a statsetter.analyses function, or "aut
 outcome = "fatigue"
 group = "shift"
 [[tables]]
-kind = "descriptives"                  # or "results" (analyses = [ids]), "correlations", "regression" or "anova" (analysis = id)
+kind = "descriptives"                  # or "results" (analyses = [ids]), "correlations", "regression", "anova" or "multilevel" (analysis = id)
 variables = ["age", "fatigue"]
 by = "shift"
 [outputs]
@@ -77,6 +77,7 @@ _TABLE = {
     "correlations": {"kind", "id", "title", "analysis", "means", "intervals"},
     "regression": {"kind", "id", "title", "analysis"},
     "anova": {"kind", "id", "title", "analysis"},
+    "multilevel": {"kind", "id", "title", "analysis"},
 }
 _OUTPUTS = {"folder", "docx", "md", "tex", "html", "json", "notes", "allow_outside", "caution", "paper"}
 _OUTPUT_OPTIONS = {"allow_outside": bool, "caution": bool, "paper": str}  # outputs keys that are not files
@@ -629,9 +630,16 @@ def _model_table(kind: str, records: list[Record], style: "Style", title: str | 
         from .rendering.regression_tables import regression_table
 
         return regression_table(results, style, title=title)
+    if kind == "multilevel":
+        from .rendering.layout import table
+
+        if not {r.kind for r in results} & {"mixed_model", "model_comparison"}:
+            raise InputError("a multilevel table needs a mixed_model or compare_models analysis")
+        return table(results, style, title=title)
     from .rendering.anova_tables import anova_table
 
-    return anova_table(results, style, title=title)
+    terms = [r for r in results if r.kind == "anova_term" and not r.details.get("simple_effect")]  # a mixed ANOVA's simple effects follow in the text
+    return anova_table(terms or results, style, title=title)
 
 
 def _key_of(entry: dict[str, Any], message: str) -> str | None:

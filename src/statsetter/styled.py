@@ -414,6 +414,7 @@ _LATEX = {
     "≤": r"$\leq$",
     "≥": r"$\geq$",
     "±": r"$\pm$",
+    "′": r"\ensuremath{'}",  # the prime of c′ (a mediation's direct path)
     "<": r"\textless{}",
     ">": r"\textgreater{}",
     "\u00a0": "~",  # the no-break space that keeps a statistic together

@@ -86,6 +86,12 @@ def paired_variables(first: str, second: str, labels: Mapping[str, str], outcome
     return ((Variable(outcome, outcome, "outcome"),) + found) if outcome else found
 
 
+def measured_variables(columns: Sequence[str], labels: Mapping[str, str] | None, outcome_label: str | None) -> tuple[Variable, ...]:
+    """The measurements of a repeated design, in order, led by the outcome when it is named."""
+    found = variables({f"measurement {i + 1}": name for i, name in enumerate(columns)}, labels)
+    return ((Variable(outcome_label, outcome_label, "outcome"),) + found) if outcome_label else found
+
+
 def notes(*items: Note | None) -> tuple[Note, ...]:
     return tuple(n for n in items if n is not None)
 

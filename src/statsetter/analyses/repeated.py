@@ -97,7 +97,7 @@ def mcnemar(
     )
 
 
-def cochran_q(df: "pd.DataFrame", columns: Sequence[str], *, labels: Mapping[str, str] | None = None) -> Result:
+def cochran_q(df: "pd.DataFrame", columns: Sequence[str], *, outcome_label: str | None = None, labels: Mapping[str, str] | None = None) -> Result:
     """Cochran's Q test that k binary measurements of the same people share
     one proportion: Q = (k − 1)(k ΣC_j² − T²) / (kT − ΣR_i²) with column
     totals C_j, row totals R_i and grand total T; χ²(k − 1) approximation."""
@@ -124,14 +124,14 @@ def cochran_q(df: "pd.DataFrame", columns: Sequence[str], *, labels: Mapping[str
         p=float(stats.chi2.sf(q, k - 1)),
         n=len(m),
         groups=groups,
-        variables=c.variables({f"measurement {i + 1}": name for i, name in enumerate(columns)}, labels),
+        variables=c.measured_variables(columns, labels, outcome_label),
         notes=c.notes(Note("method", "Cochran's Q with the chi-square approximation."), missing),
         details={"k": k, "value": category_text(values[1])},
         provenance=c.provenance("statsetter.analyses.cochran_q"),
     )
 
 
-def friedman(df: "pd.DataFrame", columns: Sequence[str], *, labels: Mapping[str, str] | None = None) -> Result:
+def friedman(df: "pd.DataFrame", columns: Sequence[str], *, outcome_label: str | None = None, labels: Mapping[str, str] | None = None) -> Result:
     """Friedman's test of k related measurements (ranks within each person,
     corrected for ties; χ²(k − 1) approximation, as scipy and R compute it)
     with Kendall's W = χ²_F / (n(k − 1)) (Tomczak & Tomczak, 2014)."""
@@ -158,7 +158,7 @@ def friedman(df: "pd.DataFrame", columns: Sequence[str], *, labels: Mapping[str,
         n=n,
         effects=(EffectSize("kendall_w", chi2 / (n * (k - 1)), method="Kendall's W = chi2 / (n(k - 1)) (Tomczak & Tomczak, 2014)"),),
         groups=groups,
-        variables=c.variables({f"measurement {i + 1}": name for i, name in enumerate(columns)}, labels),
+        variables=c.measured_variables(columns, labels, outcome_label),
         notes=c.notes(Note("method", "Friedman's test, ranks within each person corrected for ties, chi-square approximation."), missing),
         details={"k": k},
         provenance=c.provenance("statsetter.analyses.friedman"),
@@ -245,6 +245,7 @@ def rm_anova(
     correction: RMCorrection = "auto",
     pairwise: str | None = None,
     level: float = 0.95,
+    outcome_label: str | None = None,
     labels: Mapping[str, str] | None = None,
 ) -> "Result | list[Result]":
     """One-way repeated-measures ANOVA: F for the measurements against the
@@ -313,7 +314,7 @@ def rm_anova(
                                   "ss_persons": ss_persons}
     if mauchly:
         details.update(mauchly_w=mauchly[0], mauchly_p=mauchly[3])
-    variables = c.variables({f"measurement {i + 1}": col for i, col in enumerate(columns)}, labels)
+    variables = c.measured_variables(columns, labels, None if measured else outcome_label)
     if measured:
         variables = c.variables({"outcome": measured}, labels) + variables
     main = Result(

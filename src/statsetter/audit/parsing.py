@@ -181,7 +181,9 @@ class _Patterns:
         self.coef_b = re.compile(rf"(?<![\w])B\s*+=\s*+(?P<num>{num})")
         self.coef_se = re.compile(rf"(?<![\w])SE\s*+=\s*+(?P<num>{num})")
         self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
-        self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s))")
+        # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
+        self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
+                                   r"|(?<=\\\\)[ \t]*\n")
         self.operator = re.compile(r"\s*+(?:=|<|>|≤|≥)\s*+")
 
     def to_number(self, text: str, start: int) -> Number | None:

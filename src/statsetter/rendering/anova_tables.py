@@ -27,7 +27,8 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
         raise InputError("ANOVA table: give the terms of one factorial ANOVA or the record of one one-way ANOVA")
     errors = {r.statistic.df[1] for r in records if r.statistic is not None and len(r.statistic.df) == 2}
     outcomes = {v.name for r in records for v in r.variables if v.role == "outcome"}
-    if len(errors) > 1 or len(outcomes) > 1:
+    strata = _strata(records)
+    if len(outcomes) > 1 or (len(errors) > 1 and strata is None):
         raise InputError("ANOVA table: the records hold more than one ANOVA; give the records of one")
     effect_name = "eta2_p" if kinds == {"anova_term"} else "eta2"
     welch = records[0].details.get("variant") == "welch"
@@ -47,7 +48,9 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
         columns.append(Column(StyledText(f"{level * 100:g}% CI")))
     ss_dec = _decimals(num, [v for r in records for v in (r.details.get("ss"), r.details.get("ss_error")) if isinstance(v, (int, float))]) if sums else 0
 
+    nb = resolved.keep_together
     rows = []
+    last_of = {id(group[-1]): group for group in (strata or [])}
     for r in records:
         s = r.statistic
         source = _source(r)
@@ -64,8 +67,22 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
         if level is not None:
             cells.append(interval_cell(num, resolved, effect.ci if effect is not None else None, effect_name))
         rows.append(Row(StyledText(str(source)), tuple(cells)))
+        if id(r) in last_of:  # a repeated-measures or mixed design: each error term after its effects
+            group = last_of[id(r)]
+            ss_error, df_error = float(r.details["ss_error"]), r.statistic.df[1] if r.statistic is not None else 1.0
+            label = "Error (between subjects)" if group[0].details.get("epsilon") is None else "Error (" + " + ".join(_source(g) for g in group) + ")" \
+                if len(strata or []) > 2 else "Error (within subjects)"
+            rows.append(Row(StyledText(label), (_ss(num, ss_error, ss_dec), StyledText(num.df(df_error)), _ss(num, ss_error / df_error, ss_dec),
+                                                *([StyledText()] * (len(columns) - 3)))))
     blank = [StyledText()] * (len(columns) - 3)
     total_note = ""
+    if strata is not None:
+        errors = set()
+        corrected = [r for r in records if isinstance(r.details.get("epsilon"), (int, float)) and float(r.details["epsilon"]) < 1]
+        if corrected:
+            total_note = " Within-subjects " + "; ".join(dict.fromkeys(
+                f"{_source(r)}: {r.details.get('correction', 'sphericity correction')}, ε{nb}={nb}{num.number(float(r.details['epsilon']), 'epsilon')}"
+                for r in corrected)) + " (df, MS and p corrected)."
     if errors and not welch:
         df_error = errors.pop()
         if sums:
@@ -85,7 +102,6 @@ def anova_table(records: Sequence[Result], style: "Style | str | None" = None, *
     outcome = records[0].variable("outcome")
     method = next((n.text for n in records[0].notes if n.kind == "method"), "")
     n = records[0].n
-    nb = resolved.keep_together
     note = (StyledText.from_markup(f"{resolved.symbol('N')}{nb}={nb}{num.integer(n)}. ") if n else StyledText()) + (f"{method} " if method else "")
     note = note + f"Outcome: {outcome.heading if outcome else 'the outcome'}."
     if level is not None:
@@ -113,6 +129,21 @@ def _source(r: Result) -> str:
     if r.details.get("interaction") and factors:
         return table_label(" × ".join(v.heading for v in factors))
     return table_label(next((v.heading for v in factors if term in (v.display, v.label, v.name)), term))
+
+
+def _strata(records: Sequence[Result]) -> "list[list[Result]] | None":
+    """The terms of a repeated-measures or mixed design grouped by their error
+    term (consecutive terms with one SS and df of error); None for one error."""
+    if not all(isinstance(r.details.get("ss_error"), (int, float)) and r.statistic is not None and len(r.statistic.df) == 2 for r in records):
+        return None
+    groups: list[list[Result]] = []
+    for r in records:
+        key = (round(float(r.details["ss_error"]), 9), r.statistic.df[1])  # type: ignore[union-attr]
+        if groups and (round(float(groups[-1][0].details["ss_error"]), 9), groups[-1][0].statistic.df[1]) == key:  # type: ignore[union-attr]
+            groups[-1].append(r)
+        else:
+            groups.append([r])
+    return groups if len(groups) > 1 else None
 
 
 def _decimals(num: Numbers, values: list[float]) -> int:

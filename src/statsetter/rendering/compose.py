@@ -27,7 +27,7 @@ __all__ = ["Block", "Composed", "PLACES", "Shown", "analysis_of", "compose", "su
 Block = Union[StyledText, TableModel]
 PLACES = ("text", "table", "both")
 _TABLE_FIRST = {"posthoc_pair", "correlation_matrix"}  # kinds that go to a table unless placed otherwise
-_SUMMARY = {"linear_model", "logistic_model"}  # a model's fit stays in the text beside its coefficients table
+_SUMMARY = {"linear_model", "logistic_model", "mixed_model"}  # a model's fit stays in the text beside its coefficients table
 
 
 @dataclass(frozen=True)
@@ -120,8 +120,9 @@ def compose(
                 put(t)
             continue
         lead = [render(r, "sentence", style) for r in results if r.kind in _SUMMARY]
-        if kinds & {"posthoc_pair"}:
-            lead = [_pairs_summary(results, style)]
+        if kinds & {"posthoc_pair"}:  # the test the pairs follow (a repeated-measures ANOVA), then which pairs differ
+            lead = [render(r, "sentence", style) for r in results if r.kind != "posthoc_pair"] + \
+                [_pairs_summary([r for r in results if r.kind == "posthoc_pair"], style)]
         for t in showing[analysis]:
             put(t, lead)
             lead = []
@@ -172,15 +173,22 @@ def _callout(t: Shown, number: int, by_analysis: Mapping[str, list[Record]], sty
         names = listing([m.labels.get(n, n) for n in m.names]) if m is not None else "the variables"
         what = listing(["means", "standard deviations", "correlations"]) if any(c.head.plain() == "M" for c in t.model.columns) else "correlations"
         return StyledText(f"{head} gives the {what} of {names}.")
+    mixed = next((r for r in results if r.kind == "mixed_model"), None)
+    if mixed is not None:
+        return StyledText(f"{head} gives the fixed and random effects of the linear mixed model of {subject(mixed).split(' by ')[0]}.")
+    if results and all(r.kind == "model_comparison" for r in results):
+        return StyledText(f"{head} compares the nested models of {subject(results[0]).split(' by ')[0]}.")
     if t.kind == "regression" and results:
         model = next((r for r in results if r.kind in _SUMMARY), results[0])
         return StyledText(f"{head} gives the coefficients of the {'logistic' if 'logistic' in model.kind else 'linear'} regression of {subject(model).split(' by ')[0]}.")
     if t.kind == "anova" and results:
         return StyledText(f"{head} gives the analysis of variance of {subject(results[0])}.")
-    if results and results[0].kind == "posthoc_pair":
+    if results and results[-1].kind == "posthoc_pair":
         return StyledText(f"{head} gives every pair.")
     if results:
-        return StyledText(f"{head} gives the tests of {listing(list(dict.fromkeys(subject(r) for r in results)))}.")
+        tests = [r for r in results if r.kind != "posthoc_pair"] or results
+        pairs = " with their pairwise comparisons" if len(tests) < len(results) else ""
+        return StyledText(f"{head} gives the tests of {listing(list(dict.fromkeys(subject(r) for r in tests)))}{pairs}.")
     return StyledText(f"{head} gives {t.model.title.plain()[:1].lower() + t.model.title.plain()[1:]}.")
 
 
@@ -192,7 +200,7 @@ def _pairs_summary(pairs: Sequence[Result], style: "Style") -> StyledText:
     first = pairs[0]
     procedure = first.details.get("procedure", "adjusted")
     below = [" vs. ".join(g.label for g in r.groups) for r in pairs if r.p is not None and r.p < r.alpha]
-    lead = escape_markup(f"Of the {_NUMBER_WORDS.get(len(pairs), len(pairs))} pairwise comparisons of {subject(first)} ({procedure}), ")
+    lead = escape_markup(f"Of the {_NUMBER_WORDS.get(len(pairs), len(pairs))} pairwise comparisons of {subject(first, family=True)} ({procedure}), ")
     p_below = f"had an adjusted {style.symbol('p')} below {h.num.number(first.alpha, 'alpha_level')}"
     if not below:
         return StyledText.from_markup(f"{lead}none {p_below}.")

@@ -42,9 +42,12 @@ def interval_cell(num: Numbers, style: Style, ci: "Interval | None", quantity: s
     return StyledText(cell.replace(" ", style.keep_together).format(low=low, high=high, sep=style.list_separator, level=""))
 
 
-def subject(r: Result) -> str:
+def subject(r: Result, family: bool = False) -> str:
     """What a result is about, in prose: "fatigue score by shift pattern",
-    "hours slept and fatigue score", "the week before and after the trial"."""
+    "hours slept and fatigue score", "the week before and after the trial";
+    a pair of repeated measurements "fatigue: before vs. after", or with
+    ``family`` what its family of pairs compares ("fatigue: before, after
+    and a month later")."""
     def named(*roles: str) -> list[str]:
         return [v.display for v in r.variables if v.role in roles]
 
@@ -58,11 +61,15 @@ def subject(r: Result) -> str:
             return f"{outcome[0] + ', ' if outcome else ''}{first[0]} and {second[0]}"
     if r.kind.startswith("chi2_independence") or r.kind == "fisher_exact":
         return " and ".join(named("row") + named("column"))
+    if r.kind == "posthoc_pair" and len(r.groups) == 2 and not by and not family:  # two measurements of the same people
+        pair = f"{r.groups[0].label} vs. {r.groups[1].label}"
+        return f"{outcome[0]}: {pair}" if outcome else pair
     if outcome and by:
         return f"{outcome[0]} by {' and '.join(dict.fromkeys(by))}"
     measured = [v.display for v in r.variables if (v.role or "").startswith("measurement ")]
     if measured:  # the measurements of a repeated design, in order
-        return ", ".join(measured)
+        listed = ", ".join(measured[:-1]) + f" and {measured[-1]}" if len(measured) > 1 else measured[0]
+        return f"{outcome[0]}: {listed}" if outcome else listed
     return (outcome or by or [_TEST_NAMES.get(r.kind, r.kind.replace("_", " "))])[0]
 
 
@@ -129,8 +136,16 @@ def results_table(records: Sequence[Result], style: "Style | str | None" = None,
         columns=tuple(columns),
         rows=tuple(rows),
         spanners=spanners,
-        general_note=StyledText(f"CI{resolved.keep_together}={resolved.keep_together}confidence interval."),
+        general_note=StyledText(f"CI{resolved.keep_together}={resolved.keep_together}confidence interval.") + _adjusted_note(records, resolved),
     )
+
+
+def _adjusted_note(records: Sequence[Result], style: Style) -> StyledText:
+    """Which pairs' p are adjusted, and how (a results table may hold the pairs of a post hoc procedure)."""
+    procedures = list(dict.fromkeys(str(r.details["procedure"]) for r in records if r.kind == "posthoc_pair" and r.details.get("procedure")))
+    if not procedures:
+        return StyledText()
+    return StyledText.from_markup(f" Pairwise comparisons: {style.symbol('p')} adjusted ({'; '.join(procedures)}).")
 
 
 def posthoc_table(records: Sequence[Result], style: "Style | str | None" = None, title: str = "Pairwise Comparisons") -> TableModel:
