@@ -102,6 +102,8 @@ def make_chapter(path: Path) -> Path:
     d.add_paragraph("Fatigue across shift patterns: [[fatigue_by_shift]]. [[fatigue_by_shift|table]]")
     d.add_paragraph("The rest-break trial: [[rest_break_trial|sentence]]")
     d.add_paragraph("[[table:correlations]]")
+    d.add_paragraph("Across the trial's three measurements: [[trial_weeks|sentence]] Reaction times of drivers in the same rota team were alike: "
+                    "[[reaction_teams]]. [[table:reaction_teams]]")
     d.save(str(path))
     return path
 

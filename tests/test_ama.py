@@ -40,6 +40,11 @@ def test_no_possessive_eponyms():
     assert plain(EXAMPLES["fisher_exact"], "sentence").startswith("Fisher exact test")
     assert "Student t₃₈" in plain(EXAMPLES["t_independent"], "sentence")
     assert "Kendall rank correlation" in plain(EXAMPLES["kendall"], "sentence")
+    assert "McNemar test" in plain(EXAMPLES["mcnemar"], "sentence") and "McNemar's test" in plain(EXAMPLES["mcnemar"], "sentence", APA)
+    assert plain(EXAMPLES["cochran_q"], "sentence").startswith("Cochran Q test")
+    # no kind keeps an eponym's possessive in AMA 11
+    for kind, record in EXAMPLES.items():
+        assert "'s " not in plain(record, "sentence") and "’s " not in plain(record, "sentence"), kind
 
 
 def test_mean_sd_in_text():

@@ -41,8 +41,10 @@ def test_every_output_exists(run):
     assert (run / "data" / "invented_driver_survey.csv").read_text(encoding="utf-8").startswith("# INVENTED DATA")
     filled = "\n".join(p.text for p in docx.Document(str(out / "chapter-filled.docx")).paragraphs).replace("\u00a0", " ")
     assert "[[" not in filled
-    assert "α = ." in filled and re.search(r"t\(\d+\.\d+\) = \d", filled) and len(docx.Document(str(out / "chapter-filled.docx")).tables) == 3
+    assert "α = ." in filled and re.search(r"t\(\d+\.\d+\) = \d", filled) and len(docx.Document(str(out / "chapter-filled.docx")).tables) == 4
     assert "Table 1 describes the drivers; Table 3 gives the correlations" in filled  # [[ref:ID]] follows the chapter's order
+    # markers place the new designs too: a repeated-measures sentence, a mixed model's summary and its table
+    assert "A repeated-measures ANOVA of fatigue across 3 measurements of 40 people" in filled and "ICC = ." in filled
 
 
 def test_libreoffice_opens_every_docx(run):

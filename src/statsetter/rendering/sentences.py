@@ -422,7 +422,7 @@ def _tidy(markup: str) -> str:
     return _SPACE_PUNCT.sub(r"\1", text)
 
 
-_POSSESSIVE = re.compile(r"\b(Welch|Student|Fisher|Cronbach|Kendall|Pearson|Spearman|Cohen|Levene|Bartlett|Tukey|Mauchly|Hedges)(?:'s|&#39;s|'|&#39;)(?=[\s\u00a0\u202f<])")
+_POSSESSIVE = re.compile(r"\b(Welch|Student|Fisher|Cronbach|Kendall|Pearson|Spearman|Cohen|Levene|Bartlett|Tukey|Mauchly|Hedges|McNemar|Cochran|Friedman|Mann|Wilcoxon|Greenhouse|Huynh)(?:'s|&#39;s|'|&#39;)(?=[\s\u00a0\u202f<])")
 
 
 def eponyms(text: str, style: Style) -> str:
