@@ -108,3 +108,15 @@ print(anova(a, b))
 # The error strata of the two-within design (the /tmp/rm_anova2.csv above)
 d <- read.csv("/tmp/rm_anova2.csv"); d$Subject <- factor(d$Subject)
 print(summary(aov(Performance ~ Time * Metric + Error(Subject / (Time * Metric)), data = d)))
+
+# Two-factor ANCOVA (tests/test_analyses_ancova.py): python -c "import pingouin as pg; pg.read_dataset('penguins').to_csv('/tmp/penguins.csv', index=False)"
+d <- na.omit(read.csv("/tmp/penguins.csv")[, c("body_mass_g", "species", "sex", "flipper_length_mm")]); d <- d[d$sex != "", ]
+full <- lm(body_mass_g ~ species * sex + flipper_length_mm, data = d); mse <- deviance(full) / df.residual(full)
+type2 <- function(small, big) { ss <- deviance(small) - deviance(big); k <- df.residual(small) - df.residual(big); f <- ss / k / mse
+  c(ss = ss, df = k, F = f, p = pf(f, k, df.residual(full), lower.tail = FALSE)) }
+add <- lm(body_mass_g ~ species + sex + flipper_length_mm, data = d)
+print(rbind(species = type2(lm(body_mass_g ~ sex + flipper_length_mm, data = d), add), sex = type2(lm(body_mass_g ~ species + flipper_length_mm, data = d), add),
+            inter = type2(add, full), flipper = type2(lm(body_mass_g ~ species * sex, data = d), full)))
+g <- expand.grid(species = sort(unique(d$species)), sex = sort(unique(d$sex)), flipper_length_mm = mean(d$flipper_length_mm))
+p <- predict(full, newdata = g, se.fit = TRUE); print(cbind(g[, 1:2], fit = p$fit, se = p$se.fit))
+options(contrasts = c("contr.sum", "contr.poly")); print(drop1(lm(body_mass_g ~ species * sex + flipper_length_mm, data = d), . ~ ., test = "F"))

@@ -71,3 +71,35 @@ def test_pingouin_ancova_read_equals_the_analysis(data):
     for a, b in zip(read, mine):
         assert a.statistic.value == pytest.approx(b.statistic.value, rel=1e-9) and a.statistic.df == b.statistic.df
         assert a.p == pytest.approx(b.p, rel=1e-9) and a.effects[0].value == pytest.approx(b.effects[0].value, rel=1e-9)
+
+
+# R 4.x (tests/r_reference.R) on pingouin's penguins with sex recorded (N = 333): body_mass_g ~ species * sex + flipper_length_mm.
+# Type II by comparing nested lm fits (each F over the full model's MSE, 326 df): SS, F; Type III by drop1 with contr.sum: SS, F;
+# predict() at the mean flipper length for each cell: adjusted mean, SE.
+R_TYPE2 = {"species": (13141805.68267456, 79.5923238104380), "sex": (17189576.39695891, 208.2146645273748),
+           "species × sex": (1739988.56963311, 10.5381054175285), "flipper_length_mm": (4389048.88757908, 53.1638663232680)}
+R_TYPE3 = {"species": (12626072.618727, 76.46883), "sex": (12747945.104762, 154.41388), "species × sex": (1739988.569633, 10.53811),
+           "flipper_length_mm": (4389048.887579, 53.16387)}
+R_CELLS = {"Adelie, female": (3638.68728903517, 50.0064356789022), "Adelie, male": (4218.77213934566, 41.3376948074169),
+           "Chinstrap, female": (3716.32658780202, 55.6858065701113), "Chinstrap, male": (3960.58753667627, 49.3653368957154),
+           "Gentoo, female": (4439.23634829037, 50.1139065077851), "Gentoo, male": (5063.35529991955, 68.5191510446905)}
+
+
+def test_two_factor_ancova_equals_r():
+    from statsetter import render
+
+    d = pg.read_dataset("penguins")
+    out = ancova(d, "body_mass_g", ["species", "sex"], ["flipper_length_mm"])
+    terms = [r for r in out if r.kind == "anova_term"]
+    assert [t.details["term"] for t in terms] == list(R_TYPE2)
+    for t, (ss, F) in zip(terms, R_TYPE2.values()):
+        assert t.details["ss"] == pytest.approx(ss, rel=1e-9) and t.statistic.value == pytest.approx(F, rel=1e-9) and t.statistic.df[1] == 326
+    assert terms[2].details["interaction"] and "interaction" in render(terms[2], "sentence").plain()
+    for t, (ss, F) in zip(ancova(d, "body_mass_g", ["species", "sex"], ["flipper_length_mm"], ss_type=3), R_TYPE3.values()):
+        assert t.details["ss"] == pytest.approx(ss, rel=1e-9) and t.statistic.value == pytest.approx(F, rel=1e-6)
+    cells = {r.details["level"]: r for r in out if r.kind == "adjusted_mean"}
+    assert set(cells) == set(R_CELLS)
+    for level, (mean, se) in R_CELLS.items():
+        assert cells[level].estimate.value == pytest.approx(mean, rel=1e-10) and cells[level].estimate.se == pytest.approx(se, rel=1e-9)
+    with pytest.raises(InputError, match="one or two"):
+        ancova(d, "body_mass_g", ["species", "sex", "island"], ["flipper_length_mm"])

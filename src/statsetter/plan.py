@@ -417,7 +417,7 @@ def _frame(plan: Plan) -> _Data:
 
 
 # Arguments that name a grouping variable, and those that name its categories.
-_FACTOR_ROLES = ("group", "row", "column", "variable", "factors", "predictor", "within", "between", "moderator")
+_FACTOR_ROLES = ("group", "row", "column", "variable", "factor", "factors", "predictor", "within", "between", "moderator")
 
 
 def _coded(data: _Data, frame: "pd.DataFrame") -> "pd.DataFrame":

@@ -1,9 +1,10 @@
-"""Analysis of covariance: one factor and one or more numeric covariates.
+"""Analysis of covariance: one or two factors and one or more numeric covariates.
 
 Each term (the factor, each covariate) is an `anova_term` record with F, p
 and η²p with its noncentral-F interval, from Type II or Type III sums of
-squares (stated; Type III with sum-to-zero contrasts). The factor's
-adjusted (estimated marginal) means, each at the covariates' means, are
+squares (stated; Type III with sum-to-zero contrasts); two factors enter
+with their interaction. The adjusted (estimated marginal) means of each
+level — of each cell with two factors — at the covariates' means are
 `adjusted_mean` records with their SE and CI. The homogeneity of the
 regression slopes (the factor × covariate interaction) is tested and said
 in a note: when it fails, one common slope misdescribes the data.
@@ -26,54 +27,68 @@ if TYPE_CHECKING:
 def ancova(
     df: "pd.DataFrame",
     outcome: str,
-    factor: str,
+    factor: str | Sequence[str],
     covariates: Sequence[str],
     *,
     ss_type: Literal[2, 3] = 2,
     level: float = 0.95,
     labels: Mapping[str, str] | None = None,
 ) -> list[Result]:
-    """``outcome`` by ``factor`` adjusted for ``covariates``: one record per
-    term, then one adjusted mean per level of the factor."""
+    """``outcome`` by ``factor`` (one name, or two for a factorial design
+    with their interaction) adjusted for ``covariates``: one record per
+    term, then one adjusted mean per level of the factor (per cell)."""
     import pandas as pd
     from statsmodels.formula.api import ols
     from statsmodels.stats.anova import anova_lm
 
     if ss_type not in (2, 3):
         raise InputError(f"ss_type: {ss_type!r} is not 2 or 3")
+    factors = [factor] if isinstance(factor, str) else list(factor)
+    if not 1 <= len(factors) <= 2:
+        raise InputError(f"factor: {len(factors)} factors given; one or two are supported")
     covariates = list(covariates)
     if not covariates:
-        raise InputError("covariates: an ANCOVA needs at least one (without: anova_oneway)")
-    data, missing = c.listwise(df, [outcome, factor, *covariates])
+        raise InputError("covariates: an ANCOVA needs at least one (without: anova_oneway or factorial_anova)")
+    data, missing = c.listwise(df, [outcome, *factors, *covariates])
     c.numeric(data, outcome)
     for cov in covariates:
         c.numeric(data, cov)
-    levels = sorted(data[factor].unique(), key=lambda v: (str(type(v)), v))
-    if len(levels) < 2:
-        raise InputError(f"{factor}: one level with data; a factor needs at least two")
-    frame = pd.DataFrame({"y_": data[outcome].astype(float), "g_": data[factor].map(category_text)}, index=data.index)
+    levels_of = [sorted(data[f].unique(), key=lambda v: (str(type(v)), v)) for f in factors]
+    for f, levels in zip(factors, levels_of):
+        if len(levels) < 2:
+            raise InputError(f"{f}: one level with data; a factor needs at least two")
+    frame = pd.DataFrame({"y_": data[outcome].astype(float)}, index=data.index)
+    group_names = [f"g{i}_" for i in range(len(factors))]
+    for name, f in zip(group_names, factors):
+        frame[name] = data[f].map(category_text)
     cov_names = [f"z{i}_" for i in range(len(covariates))]
     for name, cov in zip(cov_names, covariates):
         frame[name] = data[cov].astype(float)
     coding = ", Sum" if ss_type == 3 else ""
-    rhs = " + ".join([f"C(g_{coding})", *cov_names])
+    group_terms = [f"C({g}{coding})" for g in group_names]
+    rhs = " + ".join([" * ".join(group_terms), *cov_names])
     fit = ols(f"y_ ~ {rhs}", data=frame).fit()
     table = anova_lm(fit, typ=ss_type)
     ss_res, df_res = float(table.loc["Residual", "sum_sq"]), float(table.loc["Residual", "df"])
-    # homogeneity of regression slopes: the factor × covariate products added
-    full = ols(f"y_ ~ {rhs} + " + " + ".join(f"C(g_{coding}):{z}" for z in cov_names), data=frame).fit()
+    # homogeneity of regression slopes: each factor's products with each covariate added
+    full = ols(f"y_ ~ {rhs} + " + " + ".join(f"{g}:{z}" for g in group_terms for z in cov_names), data=frame).fit()
     f_slopes, p_slopes, df_slopes = full.compare_f_test(fit)
     named = dict(labels or {})
-    shown = {factor: named.get(factor, factor), **{cov: named.get(cov, cov) for cov in covariates}}
-    slopes_note = Note("assumption", f"Homogeneity of regression slopes ({shown[factor]} × covariates): F({df_slopes:g}, {full.df_resid:g}) = "
+    shown = {name: named.get(name, name) for name in (*factors, *covariates)}
+    both = " × ".join(shown[f] for f in factors)
+    slopes_note = Note("assumption", f"Homogeneity of regression slopes ({both} × covariates): F({df_slopes:g}, {full.df_resid:g}) = "
                                      f"{f_slopes:.4g}, p = {p_slopes:.4g}" + (" — the slopes differ between groups; one common slope misdescribes "
                                                                                "the data." if p_slopes < 0.05 else "."))
     ss_note = Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else "."))
-    variables = (Variable(outcome, named.get(outcome, outcome), "outcome"), Variable(factor, shown[factor], "factor"),
+    variables = (Variable(outcome, named.get(outcome, outcome), "outcome"), *(Variable(f, shown[f], "factor") for f in factors),
                  *(Variable(cov, shown[cov], "covariate") for cov in covariates))
     prov = c.provenance("statsetter.analyses.ancova", statsmodels=True)
+    terms = [(t, shown[f], False) for t, f in zip(group_terms, factors)]
+    if len(factors) == 2:
+        terms.append((":".join(group_terms), both, True))
+    terms += [(z, shown[cov], False) for z, cov in zip(cov_names, covariates)]
     out = []
-    for term, label in [(f"C(g_{coding})", shown[factor]), *((z, shown[cov]) for z, cov in zip(cov_names, covariates))]:
+    for term, label, interaction in terms:
         row = table.loc[term]
         ss = float(row["sum_sq"])
         out.append(Result(
@@ -84,16 +99,20 @@ def ancova(
             effects=(variance_explained("eta2_p", ss / (ss + ss_res), float(row["F"]), float(row["df"]), df_res, level),),
             variables=variables,
             notes=c.notes(ss_note, slopes_note, missing),
-            details={"term": label, "interaction": False, "ss_type": ss_type, "ss": ss, "ss_error": ss_res, "covariate": term != f"C(g_{coding})",
+            details={"term": label, "interaction": interaction, "ss_type": ss_type, "ss": ss, "ss_error": ss_res, "covariate": term in cov_names,
                      "adjusted_for": ", ".join(shown[cv] for cv in covariates)},
             provenance=prov,
         ))
     means = {z: float(frame[z].mean()) for z in cov_names}
-    grid = pd.DataFrame({"g_": [category_text(v) for v in levels], **{z: [m] * len(levels) for z, m in means.items()}})
+    from itertools import product
+
+    cells = [cell for cell in product(*[[category_text(v) for v in levels] for levels in levels_of])
+             if ((frame[group_names] == list(cell)).all(axis=1)).any()]
+    grid = pd.DataFrame({**{g: [cell[i] for cell in cells] for i, g in enumerate(group_names)}, **{z: [m] * len(cells) for z, m in means.items()}})
     predicted = fit.get_prediction(grid).summary_frame(alpha=1 - level)
     at = ", ".join(f"{shown[cov]}\u00a0=\u00a0{means[z]:.4g}" for z, cov in zip(cov_names, covariates))  # kept on one line
-    for lev, (_, row) in zip(levels, predicted.iterrows()):
-        group_n = int((frame["g_"] == category_text(lev)).sum())
+    for cell, (_, row) in zip(cells, predicted.iterrows()):
+        group_n = int((frame[group_names] == list(cell)).all(axis=1).sum())
         out.append(Result(
             kind="adjusted_mean",
             n=group_n,
@@ -101,7 +120,7 @@ def ancova(
                               ci=Interval(level, float(row["mean_ci_lower"]), float(row["mean_ci_upper"]))),
             variables=variables,
             notes=c.notes(Note("method", f"Estimated marginal mean at the covariate means ({at})."), missing),
-            details={"level": category_text(lev), "at": at},
+            details={"level": ", ".join(cell), "at": at},
             provenance=prov,
         ))
     return out
