@@ -2,13 +2,14 @@
 
 from __future__ import annotations
 
-from typing import TYPE_CHECKING, Any, Mapping, Sequence
+from typing import TYPE_CHECKING, Any, Iterable, Mapping, Sequence
 
 from ..coding import _code_key, categories, category_text, column, find_categories, find_category
 from ..errors import InputError
-from ..records import Note, Provenance, Variable
+from ..records import GroupSummary, Note, Provenance, Variable
 
 if TYPE_CHECKING:
+    import numpy as np
     import pandas as pd
 
 
@@ -90,6 +91,18 @@ def measured_variables(columns: Sequence[str], labels: Mapping[str, str] | None,
     """The measurements of a repeated design, in order, led by the outcome when it is named."""
     found = variables({f"measurement {i + 1}": name for i, name in enumerate(columns)}, labels)
     return ((Variable(outcome_label, outcome_label, "outcome"),) + found) if outcome_label else found
+
+
+def cell_groups(rows: "Iterable[tuple[str, str, np.ndarray]]") -> tuple[GroupSummary, ...]:
+    """The cells of a two-factor design as groups: "a × b" with n, mean and SD
+    and the two levels in ``extra["cell"]`` (what an interaction figure draws)."""
+    out = []
+    for first, second, values in rows:
+        v = values[values == values]  # NaN is not equal to itself
+        if len(v):
+            out.append(GroupSummary(f"{first} × {second}", n=int(len(v)), mean=float(v.mean()), sd=float(v.std(ddof=1)) if len(v) > 1 else None,
+                                    extra={"cell": [first, second]}))
+    return tuple(out)
 
 
 def notes(*items: Note | None) -> tuple[Note, ...]:

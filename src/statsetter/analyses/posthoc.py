@@ -7,7 +7,7 @@ from dataclasses import replace
 from itertools import combinations
 from typing import TYPE_CHECKING, Literal, Mapping
 
-from ..coding import category_text
+from ..coding import categories, category_text
 from ..errors import InputError
 from ..formulas import studentized_range_quantile
 from ..records import Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
@@ -145,6 +145,9 @@ def factorial_anova(
     labels = labels or {}
     la, lb = labels.get(a, a), labels.get(b, b)
     names = {f"C(a_{coding})": (la, False), f"C(b_{coding})": (lb, False), f"C(a_{coding}):C(b_{coding})": (f"{la} × {lb}", True)}
+    y = frame["y_"].to_numpy(dtype=float)
+    cells = c.cell_groups((category_text(x), category_text(z), y[((frame["a_"] == x) & (frame["b_"] == z)).to_numpy()])
+                          for x in categories(frame["a_"]) for z in categories(frame["b_"]))
     out = []
     for term, (label, interaction) in names.items():
         row = table.loc[term]
@@ -159,6 +162,7 @@ def factorial_anova(
                 variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"), Variable(a, la, "factor"), Variable(b, lb, "factor")),
                 notes=c.notes(Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else ".")), missing),
                 details={"term": label, "interaction": interaction, "ss_type": ss_type, "ss": ss, "ss_error": ss_res, "ss_total": ss_total},
+                groups=cells if interaction else (),
                 provenance=c.provenance("statsetter.analyses.factorial_anova", statsmodels=True),
             )
         )

@@ -384,6 +384,7 @@ def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[s
         fitted.append((label, interaction, n * float(mean @ mean), float(np.trace(E)), E, M.shape[1]))
     ss_persons = ka * kb * float(((Y.mean(axis=1) - Y.mean()) ** 2).sum())
     errors = sum(f[3] for f in fitted)
+    cells = c.cell_groups((category_text(x), category_text(y), Y[:, i * kb + j]) for i, x in enumerate(la) for j, y in enumerate(lb))
     variables = (Variable(outcome, shown[outcome], "outcome"), Variable(a, shown[a], "factor"), Variable(b, shown[b], "factor"))
     prov = c.provenance("statsetter.analyses.rm_anova")
     out = []
@@ -415,6 +416,7 @@ def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[s
             variables=variables,
             notes=c.notes(*notes, missing),  # type: ignore[arg-type]
             details=details,
+            groups=cells if interaction else (),
             provenance=prov,
         ))
     return out
@@ -569,6 +571,7 @@ def mixed_anova(
         (shown[within], ss_within, float(p), ss_err, float(p * dfe), False, eps),
         (f"{shown[between]} × {shown[within]}", ss_inter, float(p * (G - 1)), ss_err, float(p * dfe), True, eps),
     ]
+    cells = c.cell_groups((lev, col, Y[g == lev, j]) for lev in levels for j, col in enumerate(columns))
     out = []
     for i, (label, ss, df1, ss_error, df2, interaction, e) in enumerate(terms):
         F = (ss / df1) / (ss_error / df2)
@@ -586,6 +589,7 @@ def mixed_anova(
             variables=variables,
             notes=c.notes(*notes, missing),  # type: ignore[arg-type]
             details=details,
+            groups=cells if interaction else (),
             provenance=prov,
         ))
     if simple:

@@ -203,6 +203,19 @@ SCHEMA: dict[str, Any] = {
         "font": _text,
         "font_size": _float(0, 30),
     },
+    "figures": {
+        "caption": _one_of("two_lines", "one_line"),
+        "font": _text,
+        "font_size": _float(8, 14),
+        "width_in": _float(2, 7.5),
+        "height_in": _float(1.5, 9),
+        "dpi": _int(150, 1200),
+        "means": _one_of("points", "bars"),
+        "palette": _text_list,
+        "markers": _text_list,
+        "line_styles": _text_list,
+        "grid": _bool,
+    },
     "manuscript": {
         "paper": _one_of(*PAPERS),
         "margin_in": _float(0.5, 2),
@@ -341,6 +354,13 @@ class Style:
     @property
     def tables(self) -> Mapping[str, Any]:
         return self.data.get("tables", MappingProxyType({}))
+
+    @property
+    def figures(self) -> Mapping[str, Any]:
+        """How figures are drawn and captioned (``[figures]``): caption form,
+        sans-serif font and size at print size, width, dpi, bars or points for
+        means, a greyscale-safe palette with markers and line styles."""
+        return self.data.get("figures", MappingProxyType({}))
 
     @property
     def manuscript(self) -> Mapping[str, Any]:
