@@ -47,7 +47,7 @@ class EnvironmentFailure(StatsetterError):
 # Which extra installs each optional module.
 EXTRAS = {
     "numpy": "analyses", "scipy": "analyses", "pandas": "analyses", "statsmodels": "analyses", "pingouin": "analyses",
-    "docx": "docx", "lxml": "docx", "openpyxl": "files", "pyreadstat": "files", "pyarrow": "files",
+    "docx": "docx", "lxml": "docx", "openpyxl": "files", "pyreadstat": "files", "pyarrow": "files", "matplotlib": "figures",
 }
 
 

@@ -1,0 +1,296 @@
+"""Records as figures (docs/reporting-rules.md "Figures"): what is drawn,
+with which error bars, under which number, title and note — a FigureModel,
+as a TableModel is a table. Nothing here draws: `export.figure_files` does,
+with matplotlib, only when a figure is written.
+
+Kinds: ``means`` (group or measurement means with the 95% CI of each mean,
+as points or bars), ``interaction`` (the cell means of a two-factor design,
+a line per level of the first factor across the second, with CIs),
+``scatter`` (the points of a correlation or simple regression with the
+least-squares line and its 95% confidence band; the only kind that needs the
+data), ``forest`` (regression coefficients with their CIs; odds ratios on a
+log axis). A record without the numbers a kind needs is refused.
+"""
+
+from __future__ import annotations
+
+import math
+from dataclasses import dataclass, field, replace
+from typing import TYPE_CHECKING, Any, Sequence
+
+from ..errors import InputError
+from ..records import Result, table_label
+from ..styled import StyledText
+
+if TYPE_CHECKING:
+    import pandas as pd
+
+    from ..style.profile import Style
+
+__all__ = ["FIGURE_KINDS", "FigureModel", "Series", "figure"]
+
+FIGURE_KINDS = ("means", "interaction", "scatter", "forest")
+
+
+@dataclass(frozen=True)
+class Series:
+    """One line or set of points: positions (category indexes, or x values),
+    values, and the interval of each value (absent for raw points)."""
+
+    name: str
+    x: tuple[float, ...]
+    y: tuple[float, ...]
+    low: tuple[float, ...] = ()
+    high: tuple[float, ...] = ()
+
+
+@dataclass(frozen=True)
+class FigureModel:
+    """A figure as the reader meets it: its kind, number, title (title case),
+    note, the axes' labels (markup: statistical symbols in italics), the
+    categories along the category axis, the series drawn, and alt text.
+    ``files`` holds the written files (format → path relative to the
+    document) once the figure is drawn."""
+
+    kind: str
+    title: StyledText
+    note: StyledText
+    x_label: str
+    y_label: str
+    series: tuple[Series, ...]
+    categories: tuple[str, ...] = ()
+    alt: str = ""
+    number: int | None = None
+    id: str | None = None
+    legend: str = ""  # the title of the legend (the factor whose levels are the lines)
+    log_scale: bool = False
+    reference: float | None = None
+    band: tuple[tuple[float, ...], tuple[float, ...], tuple[float, ...]] | None = None  # x, lower, upper of a confidence band
+    files: dict[str, str] = field(default_factory=dict, compare=False)
+
+    def with_number(self, number: int) -> "FigureModel":
+        return replace(self, number=number)
+
+    def with_files(self, files: dict[str, str]) -> "FigureModel":
+        return replace(self, files=dict(files))
+
+
+def _t_quantile(level: float, df: float) -> float:
+    from scipy.special import stdtrit
+
+    return float(stdtrit(df, 0.5 + level / 2))
+
+
+def _mean_ci(n: int | None, mean: float | None, sd: float | None, level: float, what: str) -> tuple[float, float]:
+    if n is None or mean is None or sd is None or n < 2:
+        raise InputError(f"figure: {what} has no n, mean and SD; the error bars (the CI of the mean) need all three")
+    half = _t_quantile(level, n - 1) * sd / math.sqrt(n)
+    return mean - half, mean + half
+
+
+def _outcome(r: Result) -> str:
+    v = r.variable("outcome")
+    return table_label(v.heading) if v is not None else "Value"
+
+
+def _title(text: str) -> StyledText:
+    from .tables import title_case
+
+    return title_case(StyledText(text[:1].upper() + text[1:]))
+
+
+def _note(style: "Style", text: str) -> StyledText:
+    return StyledText.from_markup(text)
+
+
+def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95) -> FigureModel:
+    """Each group's (or measurement's) mean with the CI of that mean, from the groups' n, M and SD."""
+    withgroups = [r for r in records if r.groups]
+    if not withgroups:
+        raise InputError("figure (means): the records have no groups; a means figure needs groups with n, M and SD")
+    r = withgroups[0]
+    names, ys, lows, highs = [], [], [], []
+    for g in r.groups:
+        low, high = _mean_ci(g.n, g.mean, g.sd, level, f"group {g.label!r}")
+        names.append(g.label)
+        ys.append(float(g.mean))  # type: ignore[arg-type]
+        lows.append(low)
+        highs.append(high)
+    outcome = _outcome(r)
+    by = r.variable("group") or r.variable("factor")
+    repeated = r.kind in ("anova_rm", "t_paired")
+    axis = table_label(by.heading) if by is not None else ("Measurement" if repeated else "Group")
+    pct = f"{level * 100:g}%"
+    note = (f"<i>Note.</i> Points show means; error bars show {pct} confidence intervals of each mean (<i>t</i> distribution, "
+            f"from each group's <i>n</i>, <i>M</i> and <i>SD</i>).")
+    if repeated:
+        note += " The same people were measured each time: the intervals are those of each mean alone and do not show the precision of the differences."
+    if style.figures.get("means") == "bars":
+        note = note.replace("Points show means", "Bars show means")
+    title = f"Mean {outcome.lower() if outcome[1:2].islower() else outcome} by {axis.lower() if axis[1:2].islower() else axis}"
+    return FigureModel(
+        kind="means",
+        title=_title(title),
+        note=_note(style, note),
+        x_label=axis,
+        y_label=f"{outcome} (<i>M</i>)",
+        series=(Series(outcome, tuple(float(i) for i in range(len(names))), tuple(ys), tuple(lows), tuple(highs)),),
+        categories=tuple(names),
+        alt=f"{title}: " + "; ".join(f"{n} {y:.3g} ({a:.3g} to {b:.3g})" for n, y, a, b in zip(names, ys, lows, highs)),
+    )
+
+
+def interaction_figure(records: Sequence[Result], style: "Style", level: float = 0.95) -> FigureModel:
+    """The cell means of a two-factor design (the interaction record's groups), a line per level of the first factor."""
+    cells = next((r for r in records if r.details.get("interaction") and any("cell" in g.extra for g in r.groups)), None)
+    if cells is None:
+        raise InputError("figure (interaction): no interaction record with cell means; use factorial_anova, mixed_anova or rm_anova with two factors")
+    factors = [v for v in cells.variables if v.role == "factor"]
+    lines = list(dict.fromkeys(g.extra["cell"][0] for g in cells.groups))
+    across = list(dict.fromkeys(g.extra["cell"][1] for g in cells.groups))
+    series = []
+    summary = []
+    for line in lines:
+        xs, ys, lows, highs = [], [], [], []
+        for g in cells.groups:
+            if g.extra["cell"][0] != line:
+                continue
+            low, high = _mean_ci(g.n, g.mean, g.sd, level, f"cell {g.label!r}")
+            xs.append(float(across.index(g.extra["cell"][1])))
+            ys.append(float(g.mean))  # type: ignore[arg-type]
+            lows.append(low)
+            highs.append(high)
+            summary.append(f"{g.label} {g.mean:.3g}")
+        series.append(Series(str(line), tuple(xs), tuple(ys), tuple(lows), tuple(highs)))
+    outcome = _outcome(cells)
+    first = table_label(factors[0].heading) if factors else "First factor"
+    second = table_label(factors[1].heading) if len(factors) > 1 else "Second factor"
+    within = cells.details.get("epsilon") is not None or cells.kind == "anova_rm"
+    note = (f"<i>Note.</i> Points show cell means, a line for each level of {first.lower() if first[1:2].islower() else first}; "
+            f"error bars show {level * 100:g}% confidence intervals of each cell mean.")
+    if within:
+        note += " Measurements of the same people are joined; the intervals do not show the precision of within-person differences."
+    title = f"Mean {outcome.lower() if outcome[1:2].islower() else outcome} by {first.lower() if first[1:2].islower() else first} and {second.lower() if second[1:2].islower() else second}"
+    return FigureModel(
+        kind="interaction",
+        title=_title(title),
+        note=_note(style, note),
+        x_label=second,
+        y_label=f"{outcome} (<i>M</i>)",
+        series=tuple(series),
+        categories=tuple(str(a) for a in across),
+        legend=first,
+        alt=f"{title}: " + "; ".join(summary),
+    )
+
+
+def scatter_figure(records: Sequence[Result], data: "pd.DataFrame", style: "Style", level: float = 0.95) -> FigureModel:
+    """The points of x and y with the least-squares line and its confidence band; the record names x and y."""
+    import numpy as np
+
+    r = next((r for r in records if r.kind in ("pearson", "spearman", "kendall", "linear_model", "linear_coefficient")), None)
+    if r is None:
+        raise InputError("figure (scatter): needs a correlation or a simple regression record")
+    x_var = r.variable("x") or r.variable("predictor")
+    y_var = r.variable("y") or r.variable("outcome")
+    if x_var is None or y_var is None:
+        raise InputError("figure (scatter): the record does not name its two variables")
+    for v in (x_var, y_var):
+        if v.name not in data.columns:
+            raise InputError(f"figure (scatter): {v.name}: not a column of the data given")
+    frame = data[[x_var.name, y_var.name]].apply(lambda s: s.astype(float)).dropna()
+    x, y = frame[x_var.name].to_numpy(), frame[y_var.name].to_numpy()
+    n = len(x)
+    if n < 3:
+        raise InputError(f"figure (scatter): {n} complete pairs; a line and its band need at least three")
+    b, a = np.polyfit(x, y, 1)
+    resid = y - (a + b * x)
+    s = math.sqrt(float(resid @ resid) / (n - 2))
+    grid = np.linspace(float(x.min()), float(x.max()), 101)
+    se = s * np.sqrt(1 / n + (grid - x.mean()) ** 2 / float(((x - x.mean()) ** 2).sum()))
+    crit = _t_quantile(level, n - 2)
+    fit = a + b * grid
+    xl, yl = table_label(x_var.heading), table_label(y_var.heading)
+    title = f"{yl} and {xl.lower() if xl[1:2].islower() else xl}"
+    note = (f"<i>Note.</i> Each point is one case (<i>N</i> = {n}); the line is the least-squares regression line, "
+            f"the shaded band its {level * 100:g}% confidence band.")
+    return FigureModel(
+        kind="scatter",
+        title=_title(title),
+        note=_note(style, note),
+        x_label=xl,
+        y_label=yl,
+        series=(Series("cases", tuple(float(v) for v in x), tuple(float(v) for v in y)),
+                Series("line", (float(grid[0]), float(grid[-1])), (float(fit[0]), float(fit[-1])))),
+        band=(tuple(float(v) for v in grid), tuple(float(v) for v in fit - crit * se), tuple(float(v) for v in fit + crit * se)),
+        alt=f"{title}: {n} points; line y = {a:.3g} + {b:.3g}x",
+    )
+
+
+def forest_figure(records: Sequence[Result], style: "Style") -> FigureModel:
+    """Coefficients (B, or OR on a log axis) with their CIs, intercept left out, top to bottom in the model's order."""
+    coefficients = [r for r in records if r.kind in ("linear_coefficient", "logistic_coefficient") and not r.details.get("intercept")]
+    if not coefficients:
+        raise InputError("figure (forest): no coefficients in the records")
+    logistic = coefficients[0].kind == "logistic_coefficient"
+    names, ys, lows, highs = [], [], [], []
+    level = 0.95
+    for r in coefficients:
+        shown = r.effect("OR") if logistic else r.estimate
+        if shown is None or shown.ci is None:
+            raise InputError(f"figure (forest): {r.details.get('term', r.kind)} has no {'odds ratio' if logistic else 'B'} with a CI")
+        v = r.variable("predictor")
+        label = table_label(v.heading) if v is not None else str(r.details.get("term", ""))
+        names.append(label)
+        ys.append(float(shown.value))
+        lows.append(float(shown.ci.low))
+        highs.append(float(shown.ci.high))
+        level = shown.ci.level
+    outcome = _outcome(coefficients[0])
+    symbol = "OR" if logistic else "<i>B</i>"
+    note = (f"<i>Note.</i> Points show {'odds ratios' if logistic else 'unstandardized coefficients (<i>B</i>)'}; error bars show their "
+            f"{level * 100:g}% confidence intervals; the vertical line marks no association ({'OR = 1' if logistic else '<i>B</i> = 0'})."
+            + (" The axis is logarithmic." if logistic else ""))
+    title = f"{'Odds ratios' if logistic else 'Coefficients'} of the {'logistic' if logistic else 'linear'} regression of {outcome.lower() if outcome[1:2].islower() else outcome}"
+    return FigureModel(
+        kind="forest",
+        title=_title(title),
+        note=_note(style, note),
+        x_label=f"{symbol} ({level * 100:g}% CI)",
+        y_label="",
+        series=(Series("coefficients", tuple(ys), tuple(float(i) for i in range(len(names))), tuple(lows), tuple(highs)),),
+        categories=tuple(names),
+        alt=f"{title}: " + "; ".join(f"{n} {y:.3g} ({a:.3g} to {b:.3g})" for n, y, a, b in zip(names, ys, lows, highs)),
+        log_scale=logistic,
+        reference=1.0 if logistic else 0.0,
+    )
+
+
+def figure(records: "Result | Sequence[Result]", kind: str, style: "Style | str | None" = None, *, data: "pd.DataFrame | None" = None,
+           title: str | None = None, note: str | None = None, number: int | None = None, level: float = 0.95, id: str | None = None) -> FigureModel:
+    """The figure of ``kind`` for ``records`` in ``style``; ``data`` only for a scatter plot; ``title`` and ``note`` (markup)
+    replace the generated ones (a given note is added after the generated one, which says what the error bars show)."""
+    from ..style.profile import load_style
+
+    resolved = load_style(style)
+    found = [records] if isinstance(records, Result) else [r for r in records if isinstance(r, Result)]
+    if not found:
+        raise InputError("figure: no result records to draw")
+    if kind not in FIGURE_KINDS:
+        raise InputError(f"figure: kind {kind!r} is not one of {', '.join(FIGURE_KINDS)}")
+    made: Any
+    if kind == "means":
+        made = means_figure(found, resolved, level)
+    elif kind == "interaction":
+        made = interaction_figure(found, resolved, level)
+    elif kind == "scatter":
+        if data is None:
+            raise InputError("figure (scatter): pass the data; a scatter plot draws the points, which a record does not hold")
+        made = scatter_figure(found, data, resolved, level)
+    else:
+        made = forest_figure(found, resolved)
+    if title:
+        made = replace(made, title=_title(title), alt=title + made.alt[made.alt.find(":"):] if ":" in made.alt else title)
+    if note:
+        made = replace(made, note=made.note + " " + StyledText.from_markup(note))
+    return replace(made, number=number, id=id)
