@@ -104,6 +104,8 @@ def make_chapter(path: Path) -> Path:
     d.add_paragraph("[[table:correlations]]")
     d.add_paragraph("Across the trial's three measurements: [[trial_weeks|sentence]] Reaction times of drivers in the same rota team were alike: "
                     "[[reaction_teams]]. [[table:reaction_teams]]")
+    d.add_paragraph("[[ref:fig_trial]] shows fatigue in both arms of the trial.")
+    d.add_paragraph("[[figure:fig_trial]]")
     d.save(str(path))
     return path
 

@@ -600,3 +600,16 @@ def test_italics_are_judged_only_where_the_manuscript_italicises_some_symbols(tm
     assert main(["audit", mixed, "--json"]) == 1
     flagged = {r["found"][:5]: "italics" in r["codes"] for r in json.loads(capsys.readouterr().out)}
     assert flagged == {"t(38)": False, "t(40)": True}  # the plain one among italic ones
+
+
+def test_a_p_above_the_ceiling_stays_above_it_when_restyled():
+    # found by the property test above: F(3, 2) = 0.02 printed "P > .99" in AMA 11 came back as "P = .99", because the
+    # p recomputed from the printed F (.9948 to .9969) was not held above what prints as .99
+    from statsetter import EffectSize, Result, Statistic
+    from statsetter.pvalues import p_from_statistic
+
+    style = load_style("ama11")
+    record = Result(kind="anova_term", statistic=Statistic("F", 0.015625, (3.0, 2.0)), p=p_from_statistic("F", 0.015625, (3.0, 2.0)),
+                    effects=(EffectSize("eta2_p", 0.5),))
+    text = render(record, "stats", style).plain()
+    assert "P > .99" in text and render(to_record(one(text, "."), style=style), "stats", style).plain() == text

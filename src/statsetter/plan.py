@@ -57,6 +57,7 @@ from .style.profile import PAPERS
 if TYPE_CHECKING:
     import pandas as pd
 
+    from .rendering.figures import FigureModel
     from .rendering.tables import TableModel
     from .style.profile import Style
 
@@ -68,7 +69,8 @@ ANALYSIS_KINDS = (
     "hierarchical_steps", "logistic_regression", "mann_whitney", "wilcoxon_signed_rank", "kruskal_wallis",
     "mcnemar", "cochran_q", "friedman", "rm_anova", "mixed_anova", "moderation", "mediation", "ancova", "mixed_model", "compare_models", "cronbach_alpha", "auto",
 )
-_TOP = {"title", "style", "data", "scales", "analyses", "tables", "outputs", "chapter", "level", "alpha"}
+_TOP = {"title", "style", "data", "scales", "analyses", "tables", "figures", "outputs", "chapter", "level", "alpha"}
+_FIGURE = {"kind", "id", "analysis", "title", "note"}
 _DATA = {"path", "sheet", "missing", "labels", "table_labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
 _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label", "min_share"}
 _TABLE = {
@@ -100,6 +102,7 @@ class Plan:
     scales: list[dict[str, Any]] = field(default_factory=list)
     analyses: list[dict[str, Any]] = field(default_factory=list)
     tables: list[dict[str, Any]] = field(default_factory=list)
+    figures: list[dict[str, Any]] = field(default_factory=list)
     outputs: dict[str, Any] = field(default_factory=dict)
     chapter: dict[str, Any] | None = None
     lines: dict[str, int] = field(default_factory=dict)
@@ -236,6 +239,24 @@ def load_plan(path: "str | Path") -> Plan:
             raise plan.fail(f"tables[{i}].id", f"{table_id!r}: a table id is used once and uses letters, digits, _, . and - (it is a chapter marker)")
         table_ids.add(table_id)
         plan.tables.append(table)
+    from .rendering.figures import FIGURE_KINDS
+
+    for i, fig in enumerate(raw.get("figures", [])):
+        where = f"figures[{i}]"
+        _unknown(plan, where, set(fig), _FIGURE)
+        if fig.get("kind") not in FIGURE_KINDS:
+            raise plan.fail(f"{where}.kind", f"{fig.get('kind')!r} is not one of {', '.join(FIGURE_KINDS)}")
+        if fig.get("analysis") not in ids:
+            raise plan.fail(f"{where}.analysis", f"no analysis with id {fig.get('analysis')!r} (a figure draws the records of one analysis)")
+        for key in ("title", "note", "id"):
+            if key in fig and not isinstance(fig[key], str):
+                raise plan.fail(f"{where}.{key}", f"{key} must be text in quotes")
+        figure_id = str(fig.get("id") or f"figure_{i + 1}")
+        if not _MARKER_ID.fullmatch(figure_id) or figure_id in table_ids:
+            raise plan.fail(f"{where}.id", f"{figure_id!r}: a figure id is used once, not by a table, and uses letters, digits, _, . and - "
+                                           "(it names the figure's files and its chapter marker)")
+        table_ids.add(figure_id)
+        plan.figures.append({**fig, "id": figure_id})
     outputs = raw.get("outputs", {})
     _unknown(plan, "outputs", set(outputs), _OUTPUTS)
     plan.outputs = outputs
@@ -309,7 +330,7 @@ def _check_shapes(plan: Plan, raw: dict[str, Any]) -> None:
                        ("data", (dict,)), ("outputs", (dict,)), ("chapter", (dict,))):
         if key in raw:
             need(key, raw[key], kinds)
-    for key in ("scales", "analyses", "tables"):
+    for key in ("scales", "analyses", "tables", "figures"):
         if key in raw:
             need(key, raw[key], (list,))
             for i, entry in enumerate(raw[key]):
@@ -363,6 +384,7 @@ class RunResult:
     unknown_markers: bool = False
     blocks: list[Block] = field(default_factory=list)
     table_ids: dict[str, "TableModel"] = field(default_factory=dict)
+    figure_ids: dict[str, "FigureModel"] = field(default_factory=dict)
 
 
 @dataclass
@@ -498,14 +520,32 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     style = _style(plan)
     records = _records(plan, data, progress, style)
     shown = _tables(plan, records, style)
-    section = compose(records, shown, style, {a["id"]: a["place"] for a in plan.analyses if "place" in a})
+    drawn = _figures(plan, records, data, style)
+    section = compose(records, shown, style, {a["id"]: a["place"] for a in plan.analyses if "place" in a}, figures=drawn)
     tables = [b for b in section.blocks if not isinstance(b, StyledText)]
     notes = [f"data: {note}" for note in data.notes] + list(section.notes)
     where = {t.get("id") or f"table_{i + 1}": f"tables[{i}]" for i, t in enumerate(plan.tables)}
     notes += [f"{where.get(r.id or '', r.id)}: left out {lev.describe()}; list it in variables to describe it"
               for r in records if isinstance(r, Description) for lev in r.left_out]
     notes += [f"{r.id}: {note.text}" for r in records if isinstance(r, Result) for note in r.notes if note.kind == "choice"]  # never silent
-    return RunResult(records, tables, [], notes, blocks=list(section.blocks), table_ids=dict(section.tables))
+    return RunResult(records, tables, [], notes, blocks=list(section.blocks), table_ids=dict(section.tables),
+                     figure_ids={f.id or "": f for _, f in drawn})
+
+
+def _figures(plan: Plan, records: list[Record], data: _Data, style: "Style") -> list[tuple[str, "FigureModel"]]:
+    """Each figure of the plan from the records of its analysis (a scatter plot also from the data): (analysis id, model)."""
+    from .rendering.figures import figure
+
+    out = []
+    for i, fig in enumerate(plan.figures):
+        found = [r for r in records if (r.id or "").split(":", 1)[0] == fig["analysis"] and isinstance(r, Result)]
+        try:
+            made = figure(found, fig["kind"], style, data=data.frame if fig["kind"] == "scatter" else None, title=fig.get("title"),
+                          note=fig.get("note"), level=plan.level, id=fig["id"])
+        except InputError as exc:
+            raise PlanError(f"{plan.where(f'figures[{i}]')} (figure {fig['id']!r}): {exc}") from None
+        out.append((fig["analysis"], made))
+    return out
 
 
 def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None, style: "Style") -> list[Record]:
@@ -704,12 +744,25 @@ def write_outputs(plan: Plan, result: RunResult) -> RunResult:
     notes: list[str] = []
     with transaction():  # every output, or none: the previous run's files stay until all are written
         written = []
+        if result.figure_ids:
+            from .export.figure_files import write_figure
+            from .rendering.figures import FigureModel
+
+            blocks = []
+            for block in result.blocks:
+                if isinstance(block, FigureModel):
+                    block = write_figure(block, style, folder, block.id or f"figure_{block.number}", inputs=inputs)
+                    written += [(f"figure {fmt}", folder / name) for fmt, name in block.files.items()]
+                    result.figure_ids[block.id or ""] = block
+                blocks.append(block)
+            result.blocks = blocks
         if plan.chapter and chapter_out is not None:
             from .export.markers import describe, fill_chapter
 
             source = plan.resolve(plan.chapter["path"])
             try:
-                report = fill_chapter(source, result.records, chapter_out, style, tables=result.table_ids)
+                report = fill_chapter(source, result.records, chapter_out, style, tables=result.table_ids, figures=result.figure_ids,
+                                      figure_root=folder)
             except InputError as exc:
                 raise PlanError(f"{plan.where('chapter.path')}: {exc}") from None
             written.append(("chapter", chapter_out))

@@ -519,8 +519,14 @@ def mixed_anova(
         outcome, within, subject = outcome or "the outcome", within or "measurement", "\0person"
         if len({*columns, between, outcome, within}) != len(columns) + 3:
             raise InputError(f"{', '.join(columns)}: the measurements, {between}, the outcome's and the factor's names must differ")
-        df = df[[*columns, between]].rename_axis(None).reset_index(drop=True).rename_axis(subject).reset_index() \
-            .melt(id_vars=[subject, between], value_vars=list(columns), var_name=within, value_name=outcome)
+        import pandas as pd
+
+        named_columns = {col: (labels or {}).get(col, col) for col in columns}  # the measurements as the text names them, in order
+        if len(set(named_columns.values())) != len(columns):
+            named_columns = {col: col for col in columns}
+        df = df[[*columns, between]].rename(columns=named_columns).rename_axis(None).reset_index(drop=True).rename_axis(subject).reset_index() \
+            .melt(id_vars=[subject, between], value_vars=list(named_columns.values()), var_name=within, value_name=outcome)
+        df[within] = pd.Categorical(df[within], categories=list(named_columns.values()))
     elif not (outcome and subject and within):
         raise InputError("mixed_anova: give outcome=, subject= and within= (long data) or columns= (wide data)")
     c.column(df, between)

@@ -599,6 +599,10 @@ def _recomputed_p(rep: Reported, alpha: float) -> float | None:
                 hi = min(hi, math.nextafter(bound, 0.0))
             if bound is not None and abs(bound - alpha) < 1e-12 and max(lo, alpha - 0.0005) < hi:
                 lo = max(lo, alpha - 0.0005)  # "p < .05" where p rounds to .050 (a style's near-alpha rule) stays that kind of p
+            if rep.p is not None and rep.p.op in (">", "≥") and rep.p.number is not None:
+                above = rep.p.number.value + rep.p.number.half_unit  # "P > .99": above what prints as .99
+                if above < hi:
+                    lo = max(lo, above)
         return min(max((lo + hi) / 2, 0.0), 1.0)
     if bound is not None and 0 < bound <= 0.001:
         return math.nextafter(bound, 0.0)

@@ -333,22 +333,28 @@ def _paragraph_xml(text: StyledText, keep_next: bool = False, bold: bool = False
     return f'<w:p xmlns:w="{_WNS}"><w:pPr>{keep}<w:ind w:left="0" w:firstLine="0"/></w:pPr>{runs}</w:p>'
 
 
+def caption_xml(name: str, number: int | None, title: StyledText, one_line: bool) -> list[str]:
+    """The caption above a table or figure, kept with what follows: "Table 5" in bold and the title in italic on the
+    next line (APA 7), or "Table 5. Title" on one line (AMA 11)."""
+    if one_line:
+        if number is None and not title:
+            return []
+        label = f"{name} {number}." if number is not None else ""
+        runs = (f'<w:r><w:rPr><w:b/></w:rPr><w:t xml:space="preserve">{_escape(label)} </w:t></w:r>' if label else "") + _run_xml(title)
+        return [f'<w:p xmlns:w="{_WNS}"><w:pPr><w:keepNext/><w:ind w:left="0" w:firstLine="0"/></w:pPr>{runs}</w:p>']
+    out = []
+    if number is not None:
+        out.append(_paragraph_xml(StyledText(f"{name} {number}"), keep_next=True, bold=True))
+    if title:
+        out.append(_paragraph_xml(StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans), keep_next=True))
+    return out
+
+
 def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH) -> list[str]:
     """A table as Word XML elements in order: the number (bold) and title
     (italic, title case) paragraphs, kept with the table; the w:tbl; one
     paragraph per note part (general, specific, probability)."""
-    out = []
-    if style.tables.get("caption") == "one_line" and (table.number is not None or table.title):  # AMA: "Table 5. Title"
-        label = f"Table {table.number}." if table.number is not None else ""
-        title = title_case(table.title) if table.title else StyledText()
-        runs = (f'<w:r><w:rPr><w:b/></w:rPr><w:t xml:space="preserve">{_escape(label)} </w:t></w:r>' if label else "") + _run_xml(title)
-        out.append(f'<w:p xmlns:w="{_WNS}"><w:pPr><w:keepNext/><w:ind w:left="0" w:firstLine="0"/></w:pPr>{runs}</w:p>')
-    else:
-        if table.number is not None:
-            out.append(_paragraph_xml(StyledText(f"Table {table.number}"), keep_next=True, bold=True))
-        if table.title:
-            title = title_case(table.title)
-            out.append(_paragraph_xml(StyledText(title.text, title.spans + StyledText.styled(title.text, "i").spans), keep_next=True))
+    out = caption_xml("Table", table.number, title_case(table.title) if table.title else StyledText(), style.tables.get("caption") == "one_line")
     line = round(240 * style.manuscript.get("table_line_spacing", 1.0))
     out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=line))
     out += [_paragraph_xml(part) for part in table.note_parts()]
@@ -389,11 +395,13 @@ def results_document(
     base: "str | Path | None" = None,
     form: str = "sentence",
     paper: str | None = None,
+    figure_root: "str | Path | None" = None,
 ) -> "Document":
     """A results document: a heading, then ``blocks`` in order — a record as
     a paragraph in ``form``, a StyledText as a paragraph, a TableModel as a
     table — then ``tables``. Tables without a number are numbered in order of
-    appearance. A new document takes the style's manuscript page
+    appearance. A FigureModel is placed with its caption (its PNG read from
+    ``figure_root`` when it was written, else drawn). A new document takes the style's manuscript page
     (``[manuscript]``; ``paper`` overrides its paper); ``base`` is an author's
     .docx whose page, styles and content are kept, the results appended."""
     import docx
@@ -407,11 +415,18 @@ def results_document(
         manuscript_page(document, resolved, paper)
     if title:
         document.add_heading(xml_safe(title), level=1)
+    from ..rendering.figures import FigureModel
+
     number = 0
     for block in [*blocks, *tables]:
         if isinstance(block, TableModel):
             number = block.number if block.number is not None else number + 1
             add_table(document, block.with_number(number), resolved)
+        elif isinstance(block, FigureModel):
+            from .figure_blocks import add_figure
+
+            png = block.files.get("png")
+            add_figure(document, block, resolved, block.png if block.png is not None else (Path(figure_root or ".") / png if png else None))
         else:
             add_runs(document.add_paragraph(), block if isinstance(block, StyledText) else render(block, form, resolved))
     return document

@@ -84,7 +84,8 @@ def _figure(model: "FigureModel", style: "Style") -> Any:
         if bars:
             ax.set_ylim(bottom=0)
         if model.kind == "interaction":
-            ax.legend(frameon=False, fontsize=size, title=_text(model.legend) or None, title_fontsize=size)
+            ax.legend(frameon=False, fontsize=size, title=_text(model.legend) or None, title_fontsize=size, loc="lower center",
+                      bbox_to_anchor=(0.5, 1.0), ncol=min(count, 4))  # above the plot, clear of the data
     elif model.kind == "scatter":
         points, line = model.series
         ax.scatter(points.x, points.y, s=14, facecolors="none", edgecolors="#404040", linewidths=0.7, gid="points")
@@ -131,13 +132,16 @@ def draw(model: "FigureModel", style: "Style", fmt: str) -> bytes:
 
 
 def write_figure(model: "FigureModel", style: "Style", folder: "str | Path", stem: str, formats: Iterable[str] = FORMATS, *,
-                 inputs: Iterable["str | Path"] = ()) -> dict[str, Path]:
-    """Write the figure as ``<stem>.<format>`` files in ``folder`` (atomically); {format: path}."""
+                 inputs: Iterable["str | Path"] = ()) -> "FigureModel":
+    """Write the figure as ``<stem>.<format>`` files in ``folder`` (atomically, with the other outputs of a run);
+    the model with those file names and its PNG bytes, for the documents that show it."""
     from ..files import write_atomic
 
     folder = Path(folder)
     folder.mkdir(parents=True, exist_ok=True)
-    written = {}
+    files, png = {}, None
     for fmt in formats:
-        written[fmt] = write_atomic(folder / f"{stem}.{fmt}", draw(model, style, fmt), inputs=inputs)
-    return written
+        data = draw(model, style, fmt)
+        files[fmt] = write_atomic(folder / f"{stem}.{fmt}", data, inputs=inputs).name
+        png = data if fmt == "png" else png
+    return model.with_files(files, png)

@@ -28,6 +28,7 @@ from ..styled import StyledText
 
 if TYPE_CHECKING:
     from ..records import Record, Result
+    from ..rendering.figures import FigureModel
     from ..rendering.tables import TableModel
     from ..style.profile import Style
 
@@ -133,9 +134,9 @@ def _styled_runs(template, text: StyledText) -> list:  # type: ignore[no-untyped
 
 
 def _marker(m: "re.Match[str]") -> tuple[str, str]:
-    """(key, form) of a marker: ``[[table:ID]]`` is (ID, "whole"), ``[[ref:ID]]`` (ID, "ref")."""
+    """(key, form) of a marker: ``[[table:ID]]`` is (ID, "whole"), ``[[figure:ID]]`` (ID, "figure"), ``[[ref:ID]]`` (ID, "ref")."""
     key, form = m.group(1), m.group(2) or "stats"
-    for prefix, kind in (("table:", "whole"), ("ref:", "ref")):
+    for prefix, kind in (("table:", "whole"), ("ref:", "ref"), ("figure:", "figure")):
         if key.startswith(prefix) and m.group(2) is None:
             return key[len(prefix):], kind
     return key, form
@@ -151,18 +152,18 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
     tables_after = False
     for m in reversed(matches):
         key, form = _marker(m)
-        if form in ("table", "whole"):
+        if form in ("table", "whole", "figure"):
             parts = lookup(key, form)
             if parts is None:
                 report.unknown.append((m.group(0), where))
                 continue
             used.add(key)
-            report.filled.append((f"table:{key}" if form == "whole" else key, where))
+            report.filled.append((f"{'figure' if form == 'figure' else 'table'}:{key}" if form != "table" else key, where))
             _remove_span(runs, texts, m.start(), m.end())
             from docx.oxml import parse_xml
 
             for xml in reversed(parts):
-                paragraph.addnext(parse_xml(xml))
+                paragraph.addnext(parse_xml(xml) if isinstance(xml, str) else xml)
             tables_after = True
             continue
         text = lookup(key, form)
@@ -209,7 +210,7 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
 
 
 def _table_numbers(roots: Iterable) -> dict[tuple[str, str], int]:  # type: ignore[type-arg]
-    """Each placed table's number, in the order the markers appear."""
+    """Each placed table's and figure's number, in the order the markers appear (two series)."""
     numbers: dict[tuple[str, str], int] = {}
     for root in roots:
         for paragraph in root.iter(f"{_W}p"):
@@ -217,7 +218,9 @@ def _table_numbers(roots: Iterable) -> dict[tuple[str, str], int]:  # type: igno
             for m in MARKER.finditer(text) if "[[" in text else ():
                 key, form = _marker(m)
                 if form in ("table", "whole"):
-                    numbers.setdefault((form, key), len(numbers) + 1)
+                    numbers.setdefault((form, key), sum(1 for k in numbers if k[0] != "figure") + 1)
+                elif form == "figure":  # figures are numbered in their own series
+                    numbers.setdefault((form, key), sum(1 for k in numbers if k[0] == "figure") + 1)
     return numbers
 
 
@@ -240,10 +243,13 @@ def fill_chapter(
     style: "Style | str | None" = None,
     *,
     tables: "Mapping[str, TableModel] | None" = None,
+    figures: "Mapping[str, FigureModel] | None" = None,
+    figure_root: "str | Path | None" = None,
 ) -> FillReport:
-    """Fill every marker of ``chapter`` from ``records`` (by ``id``) and
-    ``tables`` (by id, for ``[[table:ID]]``) and write ``out``; the chapter
-    itself is never modified."""
+    """Fill every marker of ``chapter`` from ``records`` (by ``id``),
+    ``tables`` (by id, for ``[[table:ID]]``) and ``figures`` (by id, for
+    ``[[figure:ID]]``; their PNG files under ``figure_root``, else drawn) and
+    write ``out``; the chapter itself is never modified."""
     from ..files import same_file
     from ..rendering.sentences import render
     from ..style.profile import load_style
@@ -291,6 +297,11 @@ def fill_chapter(
         if form == "ref":
             number = numbers.get(("whole", key)) or numbers.get(("table", key))
             made = StyledText(f"Table {number}") if number is not None else None
+            if made is None and ("figure", key) in numbers:
+                made = StyledText(f"Figure {numbers[('figure', key)]}")
+        elif form == "figure":
+            f = (figures or {}).get(key)
+            made = _figure_parts(document, f.with_number(numbers[("figure", key)]), resolved, width, figure_root) if f is not None else None
         elif form == "whole":
             t = whole(key)
             made = table_parts(t.with_number(numbers[("whole", key)]), resolved, width) if t is not None else None
@@ -316,6 +327,16 @@ def fill_chapter(
     report.unused = sorted(set(by_id) - used - {r.id for k in used if k in by_analysis for r in by_analysis[k] if r.id})
     save_document(document, out, inputs=[chapter])
     return report
+
+
+def _figure_parts(document, model: "FigureModel", style: "Style", width: int, root: "str | Path | None") -> list:  # type: ignore[no-untyped-def,type-arg]
+    """A figure as Word XML elements for a ``[[figure:ID]]`` marker: its written PNG when there is one, else drawn."""
+    from .figure_blocks import figure_parts
+
+    png = model.files.get("png")
+    found = Path(root) / png if png is not None and root is not None else None
+    image = model.png if model.png is not None else (found if found is not None and found.exists() else None)
+    return figure_parts(document, model, style, image, width)
 
 
 def describe(report: FillReport) -> Iterable[str]:

@@ -11,6 +11,7 @@ from typing import Sequence
 from ..records import Record, Result, dump_records
 from ..rendering.compose import Block
 from ..styled import LATEX_PREAMBLE, StyledText
+from ..rendering.figures import FigureModel
 from ..rendering.tables import TableModel
 from ..style.profile import Style
 from .text_tables import write_table
@@ -52,6 +53,10 @@ def _latex_head(style: Style, paper: str | None) -> str:
 def _text(block: Block, fmt: str, style: Style) -> str:
     if isinstance(block, TableModel):
         return write_table(block, fmt, style)
+    if isinstance(block, FigureModel):
+        from .figure_blocks import figure_text
+
+        return figure_text(block, fmt, style)
     return block.to(fmt)
 
 
@@ -62,7 +67,7 @@ def section_text(blocks: Sequence[Block], style: Style, title: str, fmt: str, *,
         parts = [f"# {title}", *(_text(b, fmt, style) for b in blocks)] + ([f"*{CAUTION}*"] if caution else [])
         return "\n\n".join(p.rstrip("\n") for p in parts) + "\n"
     if fmt == "html":
-        body = [f"<h1>{html.escape(title)}</h1>"] + [_text(b, fmt, style) if isinstance(b, TableModel) else f"<p>{b.to('html')}</p>" for b in blocks]
+        body = [f"<h1>{html.escape(title)}</h1>"] + [_text(b, fmt, style) if isinstance(b, (TableModel, FigureModel)) else f"<p>{b.to('html')}</p>" for b in blocks]
         body += [f"<p><i>{html.escape(CAUTION)}</i></p>"] if caution else []
         m = style.manuscript
         css = (f"body{{font-family:'{m.get('font', 'serif')}',serif;font-size:{m.get('font_size', 12):g}pt;line-height:{m.get('line_spacing', 1.5):g};"
@@ -93,7 +98,7 @@ def write_section(
         elif fmt == "docx":
             from .docx_writer import add_runs, results_document, save_document
 
-            document = results_document(blocks, style, title=title, paper=paper)
+            document = results_document(blocks, style, title=title, paper=paper, figure_root=path.parent)
             if caution:
                 add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
             save_document(document, path, inputs=inputs)

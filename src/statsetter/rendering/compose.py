@@ -5,7 +5,9 @@ Each analysis goes where the plan places it — ``text`` (its sentences),
 ``both``. By default an analysis that a table shows is not repeated in the
 text, and post hoc pairs and correlation matrices go to a table (one made for
 them when the plan names none) with one summary sentence. Descriptive tables
-come first; tables are numbered in the order they appear.
+come first; tables are numbered in the order they appear. Figures follow
+the analysis they draw, each with a sentence that sends the reader to it,
+numbered in their own series.
 """
 
 from __future__ import annotations
@@ -17,14 +19,15 @@ from ..records import CorrelationMatrix, Description, Record, Result
 from ..styled import StyledText
 from .record_tables import subject
 from .sentences import _helpers, render
+from .figures import FigureModel
 from .tables import TableModel
 
 if TYPE_CHECKING:
     from ..style.profile import Style
 
-__all__ = ["Block", "Composed", "PLACES", "Shown", "analysis_of", "compose", "subject"]
+__all__ = ["Block", "Composed", "PLACES", "Shown", "analysis_of", "compose", "subject"]  # figures: rendering.figures
 
-Block = Union[StyledText, TableModel]
+Block = Union[StyledText, TableModel, FigureModel]
 PLACES = ("text", "table", "both")
 _TABLE_FIRST = {"posthoc_pair", "correlation_matrix"}  # kinds that go to a table unless placed otherwise
 _SUMMARY = {"linear_model", "logistic_model", "mixed_model"}  # a model's fit stays in the text beside its coefficients table
@@ -63,6 +66,7 @@ def compose(
     tables: Sequence[Shown],
     style: "Style",
     place: Mapping[str, str] | None = None,
+    figures: Sequence[tuple[str, FigureModel]] = (),
 ) -> Composed:
     """The section's blocks in reading order, its tables by id, and a note for
     every table made for an analysis the plan did not give one (automatic
@@ -103,6 +107,18 @@ def compose(
     for t in tables:  # the sample first
         if t.kind == "descriptives":
             put(t)
+    drawn: dict[str, list[FigureModel]] = {}
+    for source, f in figures:
+        drawn.setdefault(source, []).append(f)
+    figure_number = 0
+
+    def show(source: str) -> None:
+        nonlocal figure_number
+        for f in drawn.pop(source, []):
+            figure_number += 1
+            blocks.append(StyledText(f"Figure {figure_number} shows the {f.about or f.title.plain()}."))
+            blocks.append(f.with_number(figure_number))
+
     for analysis, found in by_analysis.items():
         results = [r for r in found if isinstance(r, Result)]
         kinds = {r.kind for r in found}
@@ -118,6 +134,7 @@ def compose(
             blocks.extend(render(r, "sentence", style) for r in _in_text(results))
             for t in showing.get(analysis, []):
                 put(t)
+            show(analysis)
             continue
         lead = [render(r, "sentence", style) for r in results if r.kind in _SUMMARY]
         if kinds & {"posthoc_pair"}:  # the test the pairs follow (a repeated-measures ANOVA), then which pairs differ
@@ -126,8 +143,11 @@ def compose(
         for t in showing[analysis]:
             put(t, lead)
             lead = []
+        show(analysis)
     for t in tables:  # a table whose analyses were all placed in the text still appears
         put(t)
+    for source in list(drawn):  # a figure of records no analysis placed (a plan's own)
+        show(source)
     return Composed(tuple(blocks), every, tuple(notes))
 
 

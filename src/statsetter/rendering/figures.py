@@ -62,17 +62,19 @@ class FigureModel:
     alt: str = ""
     number: int | None = None
     id: str | None = None
+    about: str = ""  # what the figure shows, in prose ("mean fatigue by shift pattern"), for the sentence that calls it out
     legend: str = ""  # the title of the legend (the factor whose levels are the lines)
     log_scale: bool = False
     reference: float | None = None
     band: tuple[tuple[float, ...], tuple[float, ...], tuple[float, ...]] | None = None  # x, lower, upper of a confidence band
     files: dict[str, str] = field(default_factory=dict, compare=False)
+    png: bytes | None = field(default=None, compare=False, repr=False)  # the drawn PNG, once written (Word embeds it)
 
     def with_number(self, number: int) -> "FigureModel":
         return replace(self, number=number)
 
-    def with_files(self, files: dict[str, str]) -> "FigureModel":
-        return replace(self, files=dict(files))
+    def with_files(self, files: dict[str, str], png: bytes | None = None) -> "FigureModel":
+        return replace(self, files=dict(files), png=png if png is not None else self.png)
 
 
 def _t_quantile(level: float, df: float) -> float:
@@ -97,6 +99,11 @@ def _title(text: str) -> StyledText:
     from .tables import title_case
 
     return title_case(StyledText(text[:1].upper() + text[1:]))
+
+
+def _prose(text: str) -> str:
+    """A title in sentence case as prose: its first letter lower case unless it starts an acronym or a name kept capitalised."""
+    return text[:1].lower() + text[1:] if text[1:2].islower() else text
 
 
 def _note(style: "Style", text: str) -> StyledText:
@@ -130,6 +137,7 @@ def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95)
     title = f"Mean {outcome.lower() if outcome[1:2].islower() else outcome} by {axis.lower() if axis[1:2].islower() else axis}"
     return FigureModel(
         kind="means",
+        about=_prose(title),
         title=_title(title),
         note=_note(style, note),
         x_label=axis,
@@ -173,6 +181,7 @@ def interaction_figure(records: Sequence[Result], style: "Style", level: float =
     title = f"Mean {outcome.lower() if outcome[1:2].islower() else outcome} by {first.lower() if first[1:2].islower() else first} and {second.lower() if second[1:2].islower() else second}"
     return FigureModel(
         kind="interaction",
+        about=_prose(title),
         title=_title(title),
         note=_note(style, note),
         x_label=second,
@@ -216,6 +225,7 @@ def scatter_figure(records: Sequence[Result], data: "pd.DataFrame", style: "Styl
             f"the shaded band its {level * 100:g}% confidence band.")
     return FigureModel(
         kind="scatter",
+        about=f"relation between {_prose(yl)} and {_prose(xl)}",
         title=_title(title),
         note=_note(style, note),
         x_label=xl,
@@ -254,6 +264,7 @@ def forest_figure(records: Sequence[Result], style: "Style") -> FigureModel:
     title = f"{'Odds ratios' if logistic else 'Coefficients'} of the {'logistic' if logistic else 'linear'} regression of {outcome.lower() if outcome[1:2].islower() else outcome}"
     return FigureModel(
         kind="forest",
+        about=_prose(title),
         title=_title(title),
         note=_note(style, note),
         x_label=f"{symbol} ({level * 100:g}% CI)",
@@ -290,7 +301,7 @@ def figure(records: "Result | Sequence[Result]", kind: str, style: "Style | str 
     else:
         made = forest_figure(found, resolved)
     if title:
-        made = replace(made, title=_title(title), alt=title + made.alt[made.alt.find(":"):] if ":" in made.alt else title)
+        made = replace(made, title=_title(title), about=_prose(title), alt=title + made.alt[made.alt.find(":"):] if ":" in made.alt else title)
     if note:
         made = replace(made, note=made.note + " " + StyledText.from_markup(note))
     return replace(made, number=number, id=id)
