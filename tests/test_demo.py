@@ -62,6 +62,8 @@ def test_latex_output_compiles(run, tmp_path):
             pytest.fail("pdflatex and pdftotext are required in CI; .ci/run installs them")
         pytest.skip("pdflatex not installed")
     shutil.copy(run / "out" / "results.tex", tmp_path / "results.tex")
+    for drawn in (run / "out").glob("fig_*.pdf"):  # the figures \includegraphics reads
+        shutil.copy(drawn, tmp_path / drawn.name)
     done = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "results.tex"], cwd=tmp_path,
                           capture_output=True, text=True, timeout=300)
     assert done.returncode == 0, done.stdout[-2000:]

@@ -522,7 +522,9 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     shown = _tables(plan, records, style)
     drawn = _figures(plan, records, data, style)
     section = compose(records, shown, style, {a["id"]: a["place"] for a in plan.analyses if "place" in a}, figures=drawn)
-    tables = [b for b in section.blocks if not isinstance(b, StyledText)]
+    from .rendering.tables import TableModel
+
+    tables = [b for b in section.blocks if isinstance(b, TableModel)]
     notes = [f"data: {note}" for note in data.notes] + list(section.notes)
     where = {t.get("id") or f"table_{i + 1}": f"tables[{i}]" for i, t in enumerate(plan.tables)}
     notes += [f"{where.get(r.id or '', r.id)}: left out {lev.describe()}; list it in variables to describe it"

@@ -258,9 +258,9 @@ def forest_figure(records: Sequence[Result], style: "Style") -> FigureModel:
         level = shown.ci.level
     outcome = _outcome(coefficients[0])
     symbol = "OR" if logistic else "<i>B</i>"
+    null = "an odds ratio of one" if logistic else "a coefficient of zero"
     note = (f"<i>Note.</i> Points show {'odds ratios' if logistic else 'unstandardized coefficients (<i>B</i>)'}; error bars show their "
-            f"{level * 100:g}% confidence intervals; the vertical line marks no association ({'OR = 1' if logistic else '<i>B</i> = 0'})."
-            + (" The axis is logarithmic." if logistic else ""))
+            f"{level * 100:g}% confidence intervals; the dashed line marks no association ({null})." + (" The axis is logarithmic." if logistic else ""))
     title = f"{'Odds ratios' if logistic else 'Coefficients'} of the {'logistic' if logistic else 'linear'} regression of {outcome.lower() if outcome[1:2].islower() else outcome}"
     return FigureModel(
         kind="forest",
