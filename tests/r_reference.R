@@ -120,3 +120,6 @@ print(rbind(species = type2(lm(body_mass_g ~ sex + flipper_length_mm, data = d),
 g <- expand.grid(species = sort(unique(d$species)), sex = sort(unique(d$sex)), flipper_length_mm = mean(d$flipper_length_mm))
 p <- predict(full, newdata = g, se.fit = TRUE); print(cbind(g[, 1:2], fit = p$fit, se = p$se.fit))
 options(contrasts = c("contr.sum", "contr.poly")); print(drop1(lm(body_mass_g ~ species * sex + flipper_length_mm, data = d), . ~ ., test = "F"))
+
+# The 95% CI of each PlantGrowth group's mean (tests/test_figures.py)
+for (g in c("ctrl", "trt1", "trt2")) print(t.test(PlantGrowth$weight[PlantGrowth$group == g])$conf.int)

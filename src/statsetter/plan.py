@@ -49,7 +49,6 @@ from pathlib import Path
 from typing import TYPE_CHECKING, Any, Callable
 
 from .errors import InputError
-from .styled import StyledText
 from .records import CorrelationMatrix, Description, Record, Result, name_records, with_table_labels
 from .rendering.compose import PLACES, Block, Shown
 from .style.profile import PAPERS

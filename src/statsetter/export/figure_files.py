@@ -7,7 +7,7 @@ that no series depends on colour. No grid, no top or right frame line, no
 shadows (APA 7 §7.24–7.26, memory). Statistical symbols in axis labels are
 italic (matplotlib mathtext). Output is deterministic: no dates in the
 files, SVG text kept as text. The drawn artists carry ids (``means-0``,
-``errorbar-0``, ``line``, ``band``) that tests and readers of the SVG can find.
+``errorbar-0``, ``bar-0-1``, ``line``, ``band``) that tests and readers of the SVG can find.
 """
 
 from __future__ import annotations
@@ -71,7 +71,8 @@ def _figure(model: "FigureModel", style: "Style") -> Any:
             err = [[y - lo for y, lo in zip(s.y, s.low)], [hi - y for y, hi in zip(s.y, s.high)]]
             colour = palette[i % len(palette)]
             if bars:
-                ax.bar(xs, s.y, width=0.6, color="#d9d9d9", edgecolor="#000000", linewidth=0.8, gid=f"bars-{i}")
+                for j, patch in enumerate(ax.bar(xs, s.y, width=0.6, color="#d9d9d9", edgecolor="#000000", linewidth=0.8)):
+                    patch.set_gid(f"bar-{i}-{j}")
                 made = ax.errorbar(xs, s.y, yerr=err, fmt="none", ecolor="#000000", elinewidth=1, capsize=4)
             else:
                 made = ax.errorbar(xs, s.y, yerr=err, fmt=markers[i % len(markers)], color=colour, ecolor=colour, elinewidth=1, capsize=4,
