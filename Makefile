@@ -28,6 +28,7 @@ bench: $(STAMP)
 	$(BIN)/python bench/bench_docx.py
 	$(BIN)/python bench/bench_describe.py
 	$(BIN)/python bench/bench_audit.py
+	$(BIN)/python bench/bench_figures.py
 
 clean:
 	rm -rf $(VENV) dist build demo/out bench/out

@@ -1,7 +1,8 @@
 """statsetter: statistical results as manuscript-ready text and tables.
 
 The public surface: the record types, styles, StyledText, ``render`` (a
-record as text) and ``table`` (records as a table).
+record as text), ``table`` (records as a table) and ``figure`` (records as
+a figure, drawn by ``statsetter.export.figure_files`` with matplotlib).
 Importing this package loads neither pingouin, statsmodels nor matplotlib;
 analyses load them when they run.
 """
@@ -24,6 +25,7 @@ from .records import (
     dump_records,
     load_records,
 )
+from .rendering.figures import figure
 from .rendering.layout import table
 from .rendering.sentences import render
 from .styled import StyledText
@@ -47,6 +49,7 @@ __all__ = [
     "load_records",
     "render",
     "table",
+    "figure",
     "StyledText",
     "Style",
     "load_style",
