@@ -123,3 +123,4 @@ options(contrasts = c("contr.sum", "contr.poly")); print(drop1(lm(body_mass_g ~ 
 
 # The 95% CI of each PlantGrowth group's mean (tests/test_figures.py)
 for (g in c("ctrl", "trt1", "trt2")) print(t.test(PlantGrowth$weight[PlantGrowth$group == g])$conf.int)
+for (g in c("ctrl", "trt1", "trt2")) print(quantile(PlantGrowth$weight[PlantGrowth$group == g], c(.25, .5, .75)))

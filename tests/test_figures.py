@@ -253,3 +253,46 @@ def test_a_plan_without_matplotlib_exits_3_and_writes_nothing(tmp_path):
     done = subprocess.run([sys.executable, "-c", code], capture_output=True, text=True, timeout=600)
     assert done.returncode == 3 and "statsetter[figures]" in done.stderr and "Traceback" not in done.stderr
     assert sorted(p.name for p in (tmp_path / "out").iterdir()) == ["chapter-with-markers.docx"]  # nothing half-written
+
+
+# R 4.x (tests/r_reference.R): quantile(PlantGrowth$weight[PlantGrowth$group == g], c(.25, .5, .75)), type 7
+R_PLANT_QUARTILES = {"ctrl": (4.5500, 5.1550, 5.2925), "trt1": (4.2075, 4.5500, 4.8700), "trt2": (5.2675, 5.4350, 5.7350)}
+
+
+def test_medians_with_interquartile_ranges_for_a_rank_test():
+    from statsetter.analyses import kruskal_wallis
+
+    model = figure(kruskal_wallis(PLANTS, "weight", "group"), "means", APA)
+    assert model.title.plain() == "Median Weight by Group" and "interquartile range" in model.note.plain()
+    svg = draw(model, APA, "svg").decode()
+    y_of = _axis(svg, "y")
+    for (x1, a, x2, b), (px, py), (q1, median, q3) in zip(_bars(svg, "errorbar-0"), _marks(svg, "means-0"), R_PLANT_QUARTILES.values()):
+        assert abs(py - y_of(median)) < 0.5 and abs(min(a, b) - y_of(q3)) < 0.5 and abs(max(a, b) - y_of(q1)) < 0.5
+
+
+def test_a_table_1_variable_as_grouped_percentages_with_its_suppression():
+    import dataclasses
+
+    import pandas as pd
+
+    from statsetter.analyses import describe
+
+    d = pg.read_dataset("penguins")
+    described = describe(d, ["species", "island", "body_mass_g"], group="sex").main
+    model = figure(described, "categories", APA, variable="island")
+    expected = pd.crosstab(d["sex"], d["island"], normalize="index") * 100  # pandas, independently of statsetter
+    for s in model.series:
+        assert list(s.y) == pytest.approx(list(expected.loc[s.name, list(model.categories)]), rel=1e-12)
+    svg = draw(model, APA, "svg").decode()
+    y_of = _axis(svg, "y")
+    for i, s in enumerate(model.series):
+        for j, pct in enumerate(s.y):
+            corners = [float(v) for v in re.findall(r"[ML] [\d.]+ ([\d.]+)", _groups(svg, f"bar-{i}-{j}"))]
+            assert abs(min(corners) - y_of(pct)) < 0.5
+    assert model.legend == "Sex" and model.title.plain() == "Island by Sex"
+    # counts the table suppresses for confidentiality are not drawn either
+    hidden = dataclasses.replace(described, suppress_below=60)
+    small = figure(hidden, "categories", APA, variable="island")
+    assert any(math.isnan(p) for s in small.series for p in s.y) and "To protect confidentiality" in small.note.plain()
+    with pytest.raises(InputError, match="no categorical variable"):
+        figure(described, "categories", APA, variable="body_mass_g")

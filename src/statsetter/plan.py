@@ -69,7 +69,7 @@ ANALYSIS_KINDS = (
     "mcnemar", "cochran_q", "friedman", "rm_anova", "mixed_anova", "moderation", "mediation", "ancova", "mixed_model", "compare_models", "cronbach_alpha", "auto",
 )
 _TOP = {"title", "style", "data", "scales", "analyses", "tables", "figures", "outputs", "chapter", "level", "alpha"}
-_FIGURE = {"kind", "id", "analysis", "title", "note"}
+_FIGURE = {"kind", "id", "analysis", "table", "variable", "title", "note"}
 _DATA = {"path", "sheet", "missing", "labels", "table_labels", "levels", "value_labels", "encoding", "identifiers", "sep", "decimal"}
 _SCALE = {"name", "items", "reverse", "minimum", "maximum", "scoring", "alpha", "label", "min_share"}
 _TABLE = {
@@ -245,7 +245,12 @@ def load_plan(path: "str | Path") -> Plan:
         _unknown(plan, where, set(fig), _FIGURE)
         if fig.get("kind") not in FIGURE_KINDS:
             raise plan.fail(f"{where}.kind", f"{fig.get('kind')!r} is not one of {', '.join(FIGURE_KINDS)}")
-        if fig.get("analysis") not in ids:
+        if fig.get("kind") == "categories":
+            described = [str(t.get("id") or f"table_{j + 1}") for j, t in enumerate(plan.tables) if t.get("kind") == "descriptives"]
+            if fig.get("table") not in described:
+                raise plan.fail(f"{where}.table", f"no descriptives table with id {fig.get('table')!r} (a categories figure draws one variable "
+                                                  f"of a Table 1; descriptives tables: {', '.join(described) or 'none'})")
+        elif fig.get("analysis") not in ids:
             raise plan.fail(f"{where}.analysis", f"no analysis with id {fig.get('analysis')!r} (a figure draws the records of one analysis)")
         for key in ("title", "note", "id"):
             if key in fig and not isinstance(fig[key], str):
@@ -539,13 +544,14 @@ def _figures(plan: Plan, records: list[Record], data: _Data, style: "Style") -> 
 
     out = []
     for i, fig in enumerate(plan.figures):
-        found = [r for r in records if (r.id or "").split(":", 1)[0] == fig["analysis"] and isinstance(r, Result)]
+        source = fig.get("table") if fig["kind"] == "categories" else fig["analysis"]
+        found = [r for r in records if (r.id or "").split(":", 1)[0] == source and isinstance(r, (Result, Description))]
         try:
             made = figure(found, fig["kind"], style, data=data.frame if fig["kind"] == "scatter" else None, title=fig.get("title"),
-                          note=fig.get("note"), level=plan.level, id=fig["id"])
+                          note=fig.get("note"), level=plan.level, id=fig["id"], variable=fig.get("variable"))
         except InputError as exc:
             raise PlanError(f"{plan.where(f'figures[{i}]')} (figure {fig['id']!r}): {exc}") from None
-        out.append((fig["analysis"], made))
+        out.append((str(source), made))
     return out
 
 

@@ -87,6 +87,21 @@ def _figure(model: "FigureModel", style: "Style") -> Any:
         if model.kind == "interaction":
             ax.legend(frameon=False, fontsize=size, title=_text(model.legend) or None, title_fontsize=size, loc="lower center",
                       bbox_to_anchor=(0.5, 1.0), ncol=min(count, 4))  # above the plot, clear of the data
+    elif model.kind == "categories":
+        count = len(model.series)
+        width = 0.8 / max(count, 1)
+        hatches = ["", "//", "..", "xx", "\\\\", "--"]
+        for i, s in enumerate(model.series):
+            xs = [x + (i - (count - 1) / 2) * width for x in s.x]
+            bars = ax.bar(xs, s.y, width=width * 0.95, color=palette[i % len(palette)] if count == 1 else ["#ffffff", "#bfbfbf", "#7f7f7f", "#404040"][i % 4],
+                          edgecolor="#000000", linewidth=0.8, hatch=hatches[i % len(hatches)] if count > 4 else None, label=s.name)
+            for j, patch in enumerate(bars):
+                patch.set_gid(f"bar-{i}-{j}")
+        ax.set_xticks(range(len(model.categories)), [_text(c) for c in model.categories])
+        ax.set_ylim(0, 100)
+        if count > 1:
+            ax.legend(frameon=False, fontsize=size, title=_text(model.legend) or None, title_fontsize=size, loc="lower center",
+                      bbox_to_anchor=(0.5, 1.0), ncol=min(count, 4))
     elif model.kind == "scatter":
         points, line = model.series
         ax.scatter(points.x, points.y, s=14, facecolors="none", edgecolors="#404040", linewidths=0.7, gid="points")

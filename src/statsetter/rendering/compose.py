@@ -104,9 +104,6 @@ def compose(
         blocks.extend(lead or [callout])
         blocks.append(model)
 
-    for t in tables:  # the sample first
-        if t.kind == "descriptives":
-            put(t)
     drawn: dict[str, list[FigureModel]] = {}
     for source, f in figures:
         drawn.setdefault(source, []).append(f)
@@ -119,6 +116,10 @@ def compose(
             blocks.append(StyledText(f"Figure {figure_number} shows the {f.about or f.title.plain()}."))
             blocks.append(f.with_number(figure_number))
 
+    for t in tables:  # the sample first, with the figures drawn from it
+        if t.kind == "descriptives":
+            put(t)
+            show(t.id)
     for analysis, found in by_analysis.items():
         results = [r for r in found if isinstance(r, Result)]
         kinds = {r.kind for r in found}

@@ -9,7 +9,10 @@ a line per level of the first factor across the second, with CIs),
 ``scatter`` (the points of a correlation or simple regression with the
 least-squares line and its 95% confidence band; the only kind that needs the
 data), ``forest`` (regression coefficients with their CIs; odds ratios on a
-log axis). A record without the numbers a kind needs is refused.
+log axis), ``categories`` (a Table 1's categorical variable as grouped bars
+of the percentage in each category per group; counts the table suppresses
+for confidentiality are not drawn either). A record without the numbers a
+kind needs is refused.
 """
 
 from __future__ import annotations
@@ -25,11 +28,12 @@ from ..styled import StyledText
 if TYPE_CHECKING:
     import pandas as pd
 
+    from ..records import Description
     from ..style.profile import Style
 
 __all__ = ["FIGURE_KINDS", "FigureModel", "Series", "figure"]
 
-FIGURE_KINDS = ("means", "interaction", "scatter", "forest")
+FIGURE_KINDS = ("means", "interaction", "scatter", "forest", "categories")
 
 
 @dataclass(frozen=True)
@@ -111,18 +115,20 @@ def _note(style: "Style", text: str) -> StyledText:
 
 
 def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95) -> FigureModel:
-    """Each group's (or measurement's) mean with the CI of that mean, from the groups' n, M and SD."""
+    """Each group's (or measurement's) mean with the CI of that mean, from the groups' n, M and SD; for a rank test's
+    groups (medians and quartiles, no means) each median with its interquartile range."""
     withgroups = [r for r in records if r.groups]
     if not withgroups:
         raise InputError("figure (means): the records have no groups; a means figure needs groups with n, M and SD")
     r = withgroups[0]
+    medians = all(g.mean is None and g.median is not None and g.q1 is not None and g.q3 is not None for g in r.groups)
     names, ys, lows, highs = [], [], [], []
     for g in r.groups:
-        low, high = _mean_ci(g.n, g.mean, g.sd, level, f"group {g.label!r}")
+        low, high = (g.q1, g.q3) if medians else _mean_ci(g.n, g.mean, g.sd, level, f"group {g.label!r}")
         names.append(g.label)
-        ys.append(float(g.mean))  # type: ignore[arg-type]
-        lows.append(low)
-        highs.append(high)
+        ys.append(float(g.median if medians else g.mean))  # type: ignore[arg-type]
+        lows.append(float(low))  # type: ignore[arg-type]
+        highs.append(float(high))  # type: ignore[arg-type]
     outcome = _outcome(r)
     by = r.variable("group") or r.variable("factor")
     repeated = r.kind in ("anova_rm", "t_paired")
@@ -130,18 +136,20 @@ def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95)
     pct = f"{level * 100:g}%"
     note = (f"<i>Note.</i> Points show means; error bars show {pct} confidence intervals of each mean (<i>t</i> distribution, "
             f"from each group's <i>n</i>, <i>M</i> and <i>SD</i>).")
+    if medians:  # a rank test's groups: medians with their interquartile ranges
+        note = "<i>Note.</i> Points show medians; error bars show the interquartile range (first to third quartile) of each group."
     if repeated:
         note += " The same people were measured each time: the intervals are those of each mean alone and do not show the precision of the differences."
     if style.figures.get("means") == "bars":
-        note = note.replace("Points show means", "Bars show means")
-    title = f"Mean {outcome.lower() if outcome[1:2].islower() else outcome} by {axis.lower() if axis[1:2].islower() else axis}"
+        note = note.replace("Points show", "Bars show")
+    title = f"{'Median' if medians else 'Mean'} {outcome.lower() if outcome[1:2].islower() else outcome} by {axis.lower() if axis[1:2].islower() else axis}"
     return FigureModel(
         kind="means",
         about=_prose(title),
         title=_title(title),
         note=_note(style, note),
         x_label=axis,
-        y_label=f"{outcome} (<i>M</i>)",
+        y_label=f"{outcome} ({'<i>Mdn</i>' if medians else '<i>M</i>'})",
         series=(Series(outcome, tuple(float(i) for i in range(len(names))), tuple(ys), tuple(lows), tuple(highs)),),
         categories=tuple(names),
         alt=f"{title}: " + "; ".join(f"{n} {y:.3g} ({a:.3g} to {b:.3g})" for n, y, a, b in zip(names, ys, lows, highs)),
@@ -277,18 +285,76 @@ def forest_figure(records: Sequence[Result], style: "Style") -> FigureModel:
     )
 
 
+def categories_figure(description: "Description", variable: str | None, style: "Style") -> FigureModel:
+    """A categorical variable of a Table 1: the percentage of each group (or of everyone) in each category, with the
+    table's own base (valid or all responses) and its suppression of small counts."""
+    import numpy as np
+
+    from .descriptive_tables import _suppress
+
+    found = [v for v in description.variables if v.counts is not None and (variable is None or v.name == variable)]
+    if not found:
+        names = ", ".join(v.name for v in description.variables if v.counts is not None) or "none"
+        raise InputError(f"figure (categories): {variable or 'the description'}: no categorical variable of that name (categorical: {names})")
+    v = found[0]
+    counts = np.asarray(v.counts, dtype=float)
+    base = np.asarray(v.n, dtype=float) + (np.asarray(v.missing, dtype=float) if description.percent_of == "all" else 0.0)
+    hidden = _suppress(counts, description.suppress_below) if description.suppress_below else np.zeros(counts.shape, bool)
+    columns = list(description.columns)
+    keep = [j for j, c in enumerate(columns) if not (len(columns) > 1 and j == len(columns) - 1)]  # groups, not Total, when there are groups
+    series = []
+    for j in keep:
+        pct = [float(counts[j, k] / base[j] * 100) if base[j] and not hidden[j, k] else math.nan for k in range(len(v.categories))]
+        series.append(Series(columns[j], tuple(float(k) for k in range(len(v.categories))), tuple(pct)))
+    label = table_label(v.label)
+    by = table_label(description.group_label or "Group")
+    grouped = len(keep) > 1
+    note = (f"<i>Note.</i> Bars show the percentage of {'each group' if grouped else 'the sample'} in each category "
+            f"({'of valid responses' if description.percent_of == 'valid' else 'of all cases, missing included'}).")
+    if hidden.any():
+        note += f" To protect confidentiality, counts below {description.suppress_below} are not drawn, as the table does not show them."
+    title = f"{label} by {by.lower() if by[1:2].islower() else by}" if grouped else label
+    return FigureModel(
+        kind="categories",
+        about=_prose(f"percentage in each category of {_prose(label)}" + (f" by {_prose(by)}" if grouped else "")),
+        title=_title(title),
+        note=_note(style, note),
+        x_label=label,
+        y_label="Percentage",
+        series=tuple(series),
+        categories=tuple(v.categories),
+        legend=by if grouped else "",
+        alt=f"{title}: " + "; ".join(f"{s.name}: " + ", ".join(f"{c} {p:.1f}%" for c, p in zip(v.categories, s.y) if p == p) for s in series),
+    )
+
+
 def figure(records: "Result | Sequence[Result]", kind: str, style: "Style | str | None" = None, *, data: "pd.DataFrame | None" = None,
-           title: str | None = None, note: str | None = None, number: int | None = None, level: float = 0.95, id: str | None = None) -> FigureModel:
-    """The figure of ``kind`` for ``records`` in ``style``; ``data`` only for a scatter plot; ``title`` and ``note`` (markup)
-    replace the generated ones (a given note is added after the generated one, which says what the error bars show)."""
+           title: str | None = None, note: str | None = None, number: int | None = None, level: float = 0.95, id: str | None = None,
+           variable: str | None = None) -> FigureModel:
+    """The figure of ``kind`` for ``records`` in ``style``; ``data`` only for a scatter plot; a Description (Table 1)
+    with kind ``categories`` and the ``variable`` to draw (default: its first categorical one); ``title`` replaces the
+    generated one and ``note`` (markup) follows the generated note, which says what the error bars show."""
     from ..style.profile import load_style
 
+    from ..records import Description
+
     resolved = load_style(style)
+    if kind not in FIGURE_KINDS:
+        raise InputError(f"figure: kind {kind!r} is not one of {', '.join(FIGURE_KINDS)}")
+    described = records if isinstance(records, Description) else next((r for r in records if isinstance(r, Description)), None) \
+        if not isinstance(records, Result) else None
+    if kind == "categories" or described is not None:
+        if kind != "categories" or described is None:
+            raise InputError("figure: a descriptives table (Description) is drawn as kind 'categories', and kind 'categories' needs one")
+        made = categories_figure(described, variable, resolved)
+        if title:
+            made = replace(made, title=_title(title), about=_prose(title))
+        if note:
+            made = replace(made, note=made.note + " " + StyledText.from_markup(note))
+        return replace(made, number=number, id=id)
     found = [records] if isinstance(records, Result) else [r for r in records if isinstance(r, Result)]
     if not found:
         raise InputError("figure: no result records to draw")
-    if kind not in FIGURE_KINDS:
-        raise InputError(f"figure: kind {kind!r} is not one of {', '.join(FIGURE_KINDS)}")
     made: Any
     if kind == "means":
         made = means_figure(found, resolved, level)
