@@ -296,3 +296,35 @@ def test_a_table_1_variable_as_grouped_percentages_with_its_suppression():
     assert any(math.isnan(p) for s in small.series for p in s.y) and "To protect confidentiality" in small.note.plain()
     with pytest.raises(InputError, match="no categorical variable"):
         figure(described, "categories", APA, variable="body_mass_g")
+
+
+def test_a_house_style_sets_the_figures_and_bad_settings_are_refused(tmp_path):
+    from statsetter import StyleError
+
+    house = tmp_path / "house.toml"
+    house.write_text('name = "house"\ntitle = "House"\nextends = "apa7"\n[figures]\nfont_size = 12\nwidth_in = 3.25\ndpi = 600\n'
+                     'palette = ["#000000", "#555555"]\n', encoding="utf-8")
+    style = load_style(house)
+    svg = draw(figure(anova_oneway(PLANTS, "weight", "group"), "means", style), style, "svg").decode()
+    assert 'width="234pt"' in svg.replace(".0pt", "pt") or 'width="234pt"' in svg  # 3.25 inches
+    assert "font-size: 12px" in svg
+    from PIL import Image
+    import io
+
+    with Image.open(io.BytesIO(draw(figure(anova_oneway(PLANTS, "weight", "group"), "means", style), style, "png"))) as im:
+        assert im.size == (1950, 2400) and round(im.info["dpi"][0]) == 600
+    bad = tmp_path / "bad.toml"
+    bad.write_text('name = "bad"\ntitle = "Bad"\nextends = "apa7"\n[figures]\nfont_size = 30\n', encoding="utf-8")
+    with pytest.raises(StyleError, match="font_size"):
+        load_style(bad)
+
+
+def test_scatter_refuses_text_columns_and_too_few_points():
+    d = pg.read_dataset("penguins")
+    record = pearson(d, "flipper_length_mm", "body_mass_g")
+    with pytest.raises(InputError, match="not a column"):
+        figure(record, "scatter", APA, data=d.drop(columns=["body_mass_g"]))
+    with pytest.raises(InputError, match="complete pairs"):
+        figure(record, "scatter", APA, data=d.head(2))
+    with pytest.raises(InputError, match="body_mass_g: not numeric"):
+        figure(record, "scatter", APA, data=d.assign(body_mass_g="heavy"))

@@ -145,3 +145,36 @@ def test_an_automatic_test_choice_is_shown_in_the_run_and_the_section(folder, ca
     assert "Chosen automatically" not in md and "- mass_by_sex: Chosen automatically: one-way ANOVA" in notes
     word = "\n".join(p.text for p in docx.Document(str(folder / "out" / "results.docx")).paragraphs)
     assert "Chosen automatically" not in word and "One-way analysis of variance" in word or "one-way analysis of variance" in word
+
+
+FIGURE = "\n[[figures]]\nkind = \"means\"\nanalysis = \"mass_by_sex\"\n"
+
+
+def test_a_plan_figure_is_written_beside_the_documents(folder, capsys):
+    path = write(folder, GOOD.replace("[outputs]", FIGURE + "\n[[figures]]\nkind = \"categories\"\ntable = \"table_1\"\nvariable = \"species\"\n\n[outputs]"))
+    assert main(["run", str(path)]) == 0
+    out = folder / "out"
+    assert {p.name for p in out.glob("figure_*")} == {f"figure_{i}.{x}" for i in (1, 2) for x in ("png", "svg", "pdf")}
+    md = (out / "results.md").read_text(encoding="utf-8")
+    assert "**Figure 1**" in md and "](figure_2.png)" in md and "Figure 1 shows the percentage in each category of species by sex." in md
+    assert md.index("**Table 1**") < md.index("**Figure 1**") < md.index("Welch's")  # the Table 1 figure follows Table 1
+
+
+@pytest.mark.parametrize(
+    "figure,message",
+    [
+        ("\n[[figures]]\nkind = \"pie\"\nanalysis = \"mass_by_sex\"\n", "(figures[0].kind): 'pie' is not one of means, interaction, scatter, forest, categories"),
+        ("\n[[figures]]\nkind = \"means\"\nanalysis = \"mass\"\n", "(figures[0].analysis): no analysis with id 'mass'"),
+        ("\n[[figures]]\nkind = \"means\"\nanalysis = \"mass_by_sex\"\ncolour = \"red\"\n", "(figures[0].colour): unknown key 'colour'"),
+        ("\n[[figures]]\nkind = \"categories\"\ntable = \"table_9\"\nvariable = \"species\"\n", "(figures[0].table): no descriptives table with id 'table_9'"),
+        ("\n[[figures]]\nkind = \"interaction\"\nanalysis = \"mass_by_sex\"\n", "(figure 'figure_1'): figure (interaction): no interaction record with cell means"),
+        ("\n[[figures]]\nid = \"table_1\"\nkind = \"means\"\nanalysis = \"mass_by_sex\"\n", "(figures[0].id): 'table_1': a figure id is used once, not by a table"),
+        ("\n[[figures]]\nkind = \"categories\"\ntable = \"table_1\"\nvariable = \"body_mass_g\"\n", "no categorical variable of that name"),
+    ],
+)
+def test_bad_figures_name_the_line_and_write_nothing(folder, capsys, figure, message):
+    path = write(folder, GOOD.replace("[outputs]", figure + "\n[outputs]"))
+    assert main(["run", str(path)]) == 2
+    err = capsys.readouterr().err
+    assert message in err and "Traceback" not in err
+    assert not (folder / "out").exists()

@@ -215,7 +215,12 @@ def scatter_figure(records: Sequence[Result], data: "pd.DataFrame", style: "Styl
     for v in (x_var, y_var):
         if v.name not in data.columns:
             raise InputError(f"figure (scatter): {v.name}: not a column of the data given")
-    frame = data[[x_var.name, y_var.name]].apply(lambda s: s.astype(float)).dropna()
+    import pandas as pd
+
+    for v in (x_var, y_var):
+        if not pd.api.types.is_numeric_dtype(data[v.name]) or pd.api.types.is_bool_dtype(data[v.name]):
+            raise InputError(f"figure (scatter): {v.name}: not numeric (dtype {data[v.name].dtype}); a scatter plot needs two numeric columns")
+    frame = data[[x_var.name, y_var.name]].astype(float).dropna()
     x, y = frame[x_var.name].to_numpy(), frame[y_var.name].to_numpy()
     n = len(x)
     if n < 3:
