@@ -103,3 +103,9 @@ def test_two_factor_ancova_equals_r():
         assert cells[level].estimate.value == pytest.approx(mean, rel=1e-10) and cells[level].estimate.se == pytest.approx(se, rel=1e-9)
     with pytest.raises(InputError, match="one or two"):
         ancova(d, "body_mass_g", ["species", "sex", "island"], ["flipper_length_mm"])
+
+
+def test_two_factor_ancova_refuses_an_empty_cell():
+    d = pg.read_dataset("penguins")
+    with pytest.raises(InputError, match="the cell Gentoo × male has no cases"):
+        ancova(d[~((d.species == "Gentoo") & (d.sex == "male"))], "body_mass_g", ["species", "sex"], ["flipper_length_mm"])

@@ -305,6 +305,8 @@ def test_two_within_factors_equal_r_anova_mlm_and_pingouin():
         rm_anova(pd.concat([d, d.iloc[:1]]), outcome="Performance", subject="Subject", within=["Time", "Metric"])
     with pytest.raises(InputError, match="long data"):
         rm_anova(d, outcome="Performance", subject="Subject", within=["Time", "Metric"], pairwise="holm")
+    with pytest.raises(InputError, match="Performance: not numeric"):  # the column named, not a cell of the design
+        rm_anova(d.assign(Performance="high"), outcome="Performance", subject="Subject", within=["Time", "Metric"])
 
 
 # R (tests/r_reference.R, pingouin's mixed_anova): anova.mlm of each group's people (F, uncorrected p, HF-corrected p) and

@@ -57,6 +57,13 @@ def ancova(
     for f, levels in zip(factors, levels_of):
         if len(levels) < 2:
             raise InputError(f"{f}: one level with data; a factor needs at least two")
+    if len(factors) == 2:
+        present = data.groupby(factors, observed=True).size()
+        for x in levels_of[0]:
+            for z in levels_of[1]:
+                if (x, z) not in present.index:
+                    raise InputError(f"{factors[0]} × {factors[1]}: the cell {category_text(x)} × {category_text(z)} has no cases; "
+                                     "a two-factor ANCOVA with the interaction needs every cell")
     frame = pd.DataFrame({"y_": data[outcome].astype(float)}, index=data.index)
     group_names = [f"g{i}_" for i in range(len(factors))]
     for name, f in zip(group_names, factors):

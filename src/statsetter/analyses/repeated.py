@@ -353,6 +353,7 @@ def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[s
     a, b = factors
     for name in (outcome, subject, a, b):
         c.column(df, name)
+    c.numeric(df, outcome)
     if a == b:
         raise InputError(f"within: {a} is named twice")
     counts = df.groupby([subject, a, b], observed=True).size()
