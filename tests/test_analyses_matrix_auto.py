@@ -138,3 +138,22 @@ def test_auto_choice_for_related_samples():
                 levels={"Energetic": "nominal"})
     with pytest.raises(InputError, match="more than one row"):
         analyse(SLEEP_LONG.assign(ID=1), "extra", "group", subject="ID")
+
+
+def test_pair_records_made_in_a_batch_equal_validated_ones_and_bad_arrays_are_refused(penguins):
+    """The pairs are made without validating each record again (the arrays are checked as a whole): each must equal the
+    record the validating constructor makes from the same fields, and a matrix with impossible numbers is refused."""
+    import dataclasses
+
+    from statsetter import RecordError, Result
+    from statsetter.analyses.matrix import correlation_matrix as raw
+
+    m = raw(penguins, ["bill_length_mm", "bill_depth_mm", "flipper_length_mm", "body_mass_g"], adjust="holm")
+    for r in m.pairs():
+        again = Result(**{f.name: getattr(r, f.name) for f in dataclasses.fields(Result)})
+        assert again == r and again.to_dict() == r.to_dict() and r.details["p_adjusted"] == "Holm"
+    for name, value in (("r", 1.5), ("p", -0.1), ("n", 2.5), ("low", float("nan"))):
+        array = np.array(getattr(m, name), dtype=float).copy()
+        array[0, 1] = array[1, 0] = value
+        with pytest.raises(RecordError, match="pair bill_length_mm~bill_depth_mm"):
+            dataclasses.replace(m, **{name: array}).pairs()

@@ -483,6 +483,25 @@ class Result:
         _set(self, "alpha", alpha)
         _set(self, "extra", _frozen_map("extra", self.extra))
 
+    @classmethod
+    def _checked_batch(cls, shared: Mapping[str, Any], varying: tuple[str, ...]) -> Any:
+        """A maker of records whose every part statsetter has already checked (a batch built from arrays
+        validated as a whole, each shared part validated once): ``make(*values)`` sets the ``varying`` fields
+        from ``values`` and every other field from ``shared`` or its default, without validating again.
+        Only for statsetter's own code, which must check what it passes; never for outside input."""
+        setter, new = object.__setattr__, object.__new__
+        fixed = tuple((name, shared[name] if name in shared else default()) for name, default in _RESULT_DEFAULTS if name not in varying)
+
+        def make(*values: Any) -> "Result":
+            obj = new(cls)
+            for name, value in fixed:
+                setter(obj, name, value)
+            for name, value in zip(varying, values):
+                setter(obj, name, value)
+            return obj
+
+        return make
+
     # convenience -----------------------------------------------------------
 
     def effect(self, name: str | None = None) -> EffectSize | None:
@@ -608,3 +627,16 @@ def _from_plain(cls: type[T], data: Mapping[str, Any], path: str) -> T:
     except TypeError as exc:
         raise RecordError(path, f"incomplete: {exc}") from None
     return obj
+
+
+def _default_of(f: Any) -> Any:
+    from dataclasses import MISSING
+
+    if f.default_factory is not MISSING:
+        return f.default_factory
+    if f.default is not MISSING:
+        return lambda: f.default
+    return lambda: None
+
+
+_RESULT_DEFAULTS = tuple((f.name, _default_of(f)) for f in fields(Result))

@@ -230,32 +230,44 @@ class CorrelationMatrix:
 
     def pairs(self) -> list[Result]:
         """One record per pair (upper triangle, in column order); with an id,
-        a pair's id is ``id:x~y``."""
+        a pair's id is ``id:x~y``. The arrays are checked once as a whole
+        (finite, r and the limits in [−1, 1] around r, p in [0, 1], whole n),
+        and each shared part (variables, notes, provenance) once; the records
+        are then made without checking each again."""
+        import numpy as np
+        from types import MappingProxyType
+
         kind, symbol = ("pearson", "r") if self.method == "pearson" else ("spearman", "rs")
+        k = len(self.names)
+        upper = np.triu_indices(k, 1)
+        r, p, low, high, n = (np.asarray(a, dtype=float)[upper] for a in (self.r, self.p, self.low, self.high, self.n))
+        bad = ~(np.isfinite(r) & np.isfinite(p) & np.isfinite(low) & np.isfinite(high) & (np.abs(r) <= 1) & (p >= 0) & (p <= 1)
+                & (low <= r + 1e-12) & (r <= high + 1e-12) & (low >= -1) & (high <= 1) & (n == np.round(n)) & (n >= 3))
+        if bad.any():
+            at = int(np.flatnonzero(bad)[0])
+            i, j = int(upper[0][at]), int(upper[1][at])
+            raise RecordError(f"pair {self.names[i]}~{self.names[j]}", f"r = {r[at]:g}, p = {p[at]:g}, CI [{low[at]:g}, {high[at]:g}], n = {n[at]:g} "
+                                                                         "are not a correlation's numbers")
+        if not 0 < self.level < 1:
+            raise RecordError("level", f"{self.level:g} is outside (0, 1)")
         notes = [Note("missing", "Pairwise-complete observations; n per pair.")]
         if self.adjust:
-            notes.append(Note("correction", f"p values {ADJUST_NAMES[self.adjust]}-adjusted over {len(self.names) * (len(self.names) - 1) // 2} pairs."))
-        out = []
-        k = len(self.names)
-        for i in range(k):
-            for j in range(i + 1, k):
-                n = int(self.n[i, j])
-                x, y = self.names[i], self.names[j]
-                out.append(
-                    Result(
-                        kind=kind,
-                        statistic=Statistic(symbol, float(self.r[i, j]), (n - 2,)),
-                        p=float(self.p[i, j]),
-                        n=n,
-                        effects=(EffectSize(symbol, float(self.r[i, j]), Interval(self.level, float(self.low[i, j]), float(self.high[i, j])), method="Fisher z"),),
-                        variables=(Variable(x, self.labels.get(x, x), "x"), Variable(y, self.labels.get(y, y), "y")),
-                        notes=tuple(notes),
-                        details={"p_adjusted": ADJUST_NAMES[self.adjust]} if self.adjust else {},
-                        provenance=self.provenance,
-                        id=f"{self.id}:{x}~{y}" if self.id else None,
-                    )
-                )
-        return out
+            notes.append(Note("correction", f"p values {ADJUST_NAMES[self.adjust]}-adjusted over {k * (k - 1) // 2} pairs."))
+        variables = [(Variable(x, self.labels.get(x, x), "x"), Variable(x, self.labels.get(x, x), "y")) for x in self.names]
+        for pair in variables:
+            for v in pair:
+                v.validate("variables")
+        for note in notes:
+            note.validate("notes")
+        if self.provenance is not None:
+            self.provenance.validate("provenance")
+        shared = {"kind": kind, "notes": tuple(notes), "provenance": self.provenance,
+                  "details": MappingProxyType({"p_adjusted": ADJUST_NAMES[self.adjust]} if self.adjust else {})}
+        make = Result._checked_batch(shared, ("statistic", "p", "n", "effects", "variables", "id"))
+        method, level, names, prefix = "Fisher z", float(self.level), self.names, self.id
+        return [make(Statistic(symbol, rv, (int(nv) - 2,)), pv, int(nv), (EffectSize(symbol, rv, Interval(level, lo, hi), method=method),),
+                     (variables[i][0], variables[j][1]), f"{prefix}:{names[i]}~{names[j]}" if prefix else None)
+                for i, j, rv, pv, lo, hi, nv in zip(upper[0].tolist(), upper[1].tolist(), r.tolist(), p.tolist(), low.tolist(), high.tolist(), n.tolist())]
 
     def to_dict(self) -> dict[str, Any]:
         out: dict[str, Any] = {"schema": SCHEMA, "version": SCHEMA_VERSION, "kind": self.kind}
