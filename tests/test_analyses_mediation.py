@@ -119,3 +119,25 @@ def test_parallel_mediators_equal_r_and_pingouin(data):
     assert "The total indirect effect of X on Y through M and Mbin was ab = 0.36, 95% CI [0.21, 0.53]" in text
     with pytest.raises(InputError, match="named twice"):
         mediation(data, "X", ["M", "M"], "Y")
+
+
+def test_the_batched_resamples_equal_one_least_squares_fit_per_resample(data):
+    """The bootstrap solves every resample's normal equations at once from counts of the rows; each a·b must equal
+    numpy's lstsq on that resample's rows, drawn the same way (rng.integers(0, n, n) per resample, in order)."""
+    import numpy as np
+
+    from statsetter.analyses.mediation import _resampled
+
+    n = len(data)
+    ones = np.ones(n)
+    Xa = np.column_stack([ones, data["X"]])
+    Xb = np.column_stack([ones, data["X"], data["M"], data["Mbin"]])
+    M = np.column_stack([data["M"], data["Mbin"]]).astype(float)
+    y = data["Y"].to_numpy(dtype=float)
+    batched = _resampled(Xa, M, Xb, y, 2, 1200, np.random.default_rng(3))
+    rng = np.random.default_rng(3)
+    for i in range(1200):
+        rows = rng.integers(0, n, n)
+        a = np.linalg.lstsq(Xa[rows], M[rows], rcond=None)[0][1]
+        b = np.linalg.lstsq(Xb[rows], y[rows], rcond=None)[0][2:4]
+        assert batched[i] == pytest.approx(a * b, rel=1e-9, abs=1e-12)

@@ -37,6 +37,30 @@ def _ols(X: "np.ndarray", y: "np.ndarray") -> tuple["np.ndarray", "np.ndarray", 
     return beta, np.sqrt(np.diag(cov)), float(dfe)
 
 
+def _resampled(Xa: "np.ndarray", M: "np.ndarray", Xb: "np.ndarray", yb: "np.ndarray", k: int, n_boot: int, rng: "np.random.Generator") -> "np.ndarray":
+    """a·b of each mediator in each resample of the rows (drawn as ``rng.integers(0, n, n)`` per resample, in order),
+    by the normal equations of every resample at once: each resample is a vector of counts of the rows, so
+    X'WX and X'Wy are the counts times the rows' cross-products (batches keep the memory bounded)."""
+    import numpy as np
+
+    n = len(yb)
+    out = np.empty((n_boot, k))
+    pa, pb = Xa.shape[1], Xb.shape[1]
+    cross_a = (Xa[:, :, None] * Xa[:, None, :]).reshape(n, pa * pa)
+    cross_b = (Xb[:, :, None] * Xb[:, None, :]).reshape(n, pb * pb)
+    rhs_a, rhs_b = Xa[:, :, None] * M[:, None, :], Xb * yb[:, None]
+    chunk = max(1, min(n_boot, 4_000_000 // max(n, 1)))
+    for start in range(0, n_boot, chunk):
+        size = min(chunk, n_boot - start)
+        rows = rng.integers(0, n, (size, n))
+        counts = np.zeros((size, n))
+        np.add.at(counts, (np.repeat(np.arange(size), n), rows.ravel()), 1.0)
+        a = np.linalg.solve((counts @ cross_a).reshape(size, pa, pa), np.einsum("bn,npk->bpk", counts, rhs_a))[:, 1, :]
+        b = np.linalg.solve((counts @ cross_b).reshape(size, pb, pb), (counts @ rhs_b)[:, :, None])[:, 2:2 + k, 0]
+        out[start:start + size] = a * b
+    return out
+
+
 def mediation(
     df: "pd.DataFrame",
     x: str,
@@ -117,13 +141,7 @@ def mediation(
         ))
     a = np.array([f[0][1] for f in fits_a])
     effects = a * b_coef[2:2 + k]
-    rng = np.random.default_rng(seed)
-    boot = np.empty((n_boot, k))
-    for i in range(n_boot):
-        rows = rng.integers(0, n, n)
-        a_i = np.linalg.lstsq(Xa[rows], M[rows], rcond=None)[0][1]
-        b_i = np.linalg.lstsq(Xb[rows], yb[rows], rcond=None)[0][2:2 + k]
-        boot[i] = a_i * b_i
+    boot = _resampled(Xa, M, Xb, yb, k, n_boot, np.random.default_rng(seed))
     tail = (1 - level) / 2
     kind = "bias-corrected" if bias_corrected else "percentile"
     method = f"{kind} bootstrap, {n_boot:,} resamples, seed {seed}"
