@@ -328,3 +328,11 @@ def test_scatter_refuses_text_columns_and_too_few_points():
         figure(record, "scatter", APA, data=d.head(2))
     with pytest.raises(InputError, match="body_mass_g: not numeric"):
         figure(record, "scatter", APA, data=d.assign(body_mass_g="heavy"))
+
+
+def test_labels_with_dollars_and_tex_characters_draw():
+    # a dollar sign would start matplotlib's mathtext; labels are the author's words and are drawn as typed
+    model = figure(anova_oneway(PLANTS, "weight", "group", labels={"weight": "cost ($) per $ & 50%", "group": "type_{a} #1"}), "means", APA)
+    for fmt in ("svg", "png", "pdf"):
+        assert draw(model, APA, fmt)
+    assert "Cost (\\$) per \\$ &amp; 50%" in draw(model, APA, "svg").decode()

@@ -31,11 +31,14 @@ _ITALIC = re.compile(r"<i>(.*?)</i>")
 
 def _text(markup: str) -> str:
     """Markup to matplotlib text: <i>M</i> as mathtext italic, other tags dropped."""
+    import html
+
     def italic(m: "re.Match[str]") -> str:
-        inner = m.group(1).replace(" ", r"\ ")
+        inner = re.sub(r"([\\{}_^%#&~])", r"\\\1", m.group(1)).replace(" ", r"\ ")
         return f"$\\mathit{{{inner}}}$"
 
-    return re.sub(r"</?[a-z]+>", "", _ITALIC.sub(italic, markup))
+    text = markup.replace("$", "\\$")  # a dollar in a label is a dollar, not the start of mathtext
+    return html.unescape(re.sub(r"</?[a-z]+>", "", _ITALIC.sub(italic, text)))
 
 
 def _matplotlib() -> Any:
