@@ -115,12 +115,12 @@ def test_auto_choice_for_related_samples():
     from statsetter.analyses import cochran_q, mcnemar, rm_anova, t_paired
 
     (paired,) = analyse(SLEEP_LONG, "extra", "group", subject="ID")
-    direct = t_paired(SLEEP_LONG, outcome="extra", subject="ID", within="group")
+    direct = t_paired(SLEEP_LONG, outcome="extra", subject="ID", within="group").main
     assert paired.kind == "t_paired" and paired.statistic.value == pytest.approx(direct.statistic.value, rel=1e-12)
     assert paired.notes[0].kind == "choice" and "paired t test" in paired.notes[0].text and "within-subjects factor with 2" in paired.notes[0].text
     long = pg.read_dataset("rm_anova_wide").dropna().reset_index(names="id").melt(id_vars="id", var_name="time", value_name="score")
     (rm,) = analyse(long, "score", "time", subject="id")
-    assert rm.kind == "anova_rm" and rm.p == pytest.approx(rm_anova(long, outcome="score", subject="id", within="time").p, rel=1e-12)
+    assert rm.kind == "anova_rm" and rm.p == pytest.approx(rm_anova(long, outcome="score", subject="id", within="time").main.p, rel=1e-12)
     (ranked,) = analyse(long, "score", "time", subject="id", levels={"score": "ordinal"})
     assert ranked.kind == "friedman" and "Friedman" in ranked.notes[0].text
     (two_ranked,) = analyse(SLEEP_LONG, "extra", "group", subject="ID", levels={"extra": "ordinal"})
@@ -128,11 +128,11 @@ def test_auto_choice_for_related_samples():
     energy = pg.read_dataset("cochran")
     (q,) = analyse(energy, "Energetic", "Time", subject="Subject")
     wide = energy.pivot(index="Subject", columns="Time", values="Energetic")
-    assert q.kind == "cochran_q" and q.statistic.value == pytest.approx(cochran_q(wide, list(wide.columns)).statistic.value, rel=1e-12)
+    assert q.kind == "cochran_q" and q.statistic.value == pytest.approx(cochran_q(wide, list(wide.columns)).main.statistic.value, rel=1e-12)
     pairs = pg.read_dataset("chi2_mcnemar")
     made_long = pairs.melt(id_vars="subject", var_name="treatment", value_name="improved")
     (m,) = analyse(made_long, "improved", "treatment", subject="subject")
-    assert m.kind == "mcnemar" and m.p == pytest.approx(mcnemar(pairs, "treatment_X", "treatment_Y").p, rel=1e-12)
+    assert m.kind == "mcnemar" and m.p == pytest.approx(mcnemar(pairs, "treatment_X", "treatment_Y").main.p, rel=1e-12)
     with pytest.raises(InputError, match="3 categories across related samples"):
         analyse(energy.assign(Energetic=energy["Energetic"] + (energy["Subject"] % 3 == 0)), "Energetic", "Time", subject="Subject",
                 levels={"Energetic": "nominal"})

@@ -86,10 +86,10 @@ def test_tables_of_a_mixed_model_and_of_nested_comparisons():
     from statsetter.export.text_tables import table_text
 
     teeth = DATA.assign(age_girls=DATA["age"] * (DATA["Sex"] == "Female"))
-    first = compare_models(teeth, "distance", ["age"], ["age", "Sex"], "Subject")
-    second = compare_models(teeth, "distance", ["age", "Sex"], ["age", "Sex", "age_girls"], "Subject", labels={"age_girls": "age × girl"})
+    first = compare_models(teeth, "distance", ["age"], ["age", "Sex"], "Subject").main
+    second = compare_models(teeth, "distance", ["age", "Sex"], ["age", "Sex", "age_girls"], "Subject", labels={"age_girls": "age × girl"}).main
     assert second.statistic.value == pytest.approx(R_INTERACTION["chi2"], rel=1e-5) and second.p == pytest.approx(R_INTERACTION["p"], abs=5e-5)
-    lines = table_text(table([*first, *second], "apa7")).splitlines()
+    lines = table_text(table([first, second], "apa7")).splitlines()
     rows = {line.split()[0] + line.split()[1]: line for line in lines if line.startswith("Model ")}
     # R's printed values, rounded to the table's two decimals: Model 1 and 2 from R_LRT, Model 3 from R_INTERACTION
     assert "451.39" in rows["Model1"] and "462.12" in rows["Model1"]

@@ -74,7 +74,7 @@ def _marks(svg: str, gid: str) -> list[tuple[float, float]]:
 
 
 def test_means_points_and_error_bars_sit_at_their_values():
-    record = anova_oneway(PLANTS, "weight", "group")
+    record = anova_oneway(PLANTS, "weight", "group").main
     model = figure(record, "means", APA)
     svg = draw(model, APA, "svg").decode()
     y_of = _axis(svg, "y")
@@ -96,7 +96,7 @@ def test_bars_when_the_style_says_so_start_at_zero():
     svg = draw(model, bars_style, "svg").decode()
     y_of = _axis(svg, "y")
     assert "Bars show means" in model.note.plain()
-    for j, g in enumerate(anova_oneway(PLANTS, "weight", "group").groups):
+    for j, g in enumerate(anova_oneway(PLANTS, "weight", "group").main.groups):
         corners = [float(v) for v in re.findall(r"[ML] [\d.]+ ([\d.]+)", _groups(svg, f"bar-0-{j}"))]
         assert abs(min(corners) - y_of(g.mean)) < 0.5 and abs(max(corners) - y_of(0.0)) < 0.5  # the bar's top at M, its foot at 0
 
