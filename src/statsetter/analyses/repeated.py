@@ -195,6 +195,23 @@ def _sphericity(S: "np.ndarray", m: float, k: int, correction: str) -> tuple[flo
     return gg, hf_raw, mauchly, eps, _CORRECTIONS[chosen]
 
 
+def _epsilons(gg: float, hf: float) -> str:
+    return f"Greenhouse–Geisser ε = {gg:.4g}, Huynh–Feldt ε = {hf:.4g} (Huynh & Feldt, 1976)."
+
+
+def _sphericity_notes(prefix: str, gg: float, hf: float, mauchly: tuple[float, float, float, float] | None, name: str, chosen: bool,
+                      alone: str) -> list[Note]:
+    """The assumption note (Mauchly's test and both ε, or ``alone`` without a test) and, when the rule ``chosen`` the
+    correction, the note that says so; ``prefix`` names the term."""
+    test = (f"Mauchly's test of sphericity: W = {mauchly[0]:.4g}, χ²({mauchly[2]:g}) = {mauchly[1]:.4g}, p = {mauchly[3]:.4g}; "
+            + _epsilons(gg, hf)) if mauchly else alone
+    notes = [Note("assumption", prefix + test)]
+    if chosen:
+        said = f"{name} reported: the Greenhouse–Geisser ε is {'below' if gg < GG_BELOW else 'at least'} {GG_BELOW} (Girden, 1992; practice). Name the rule you follow."
+        notes.append(Note("choice", prefix + said if prefix else said[:1].upper() + said[1:]))
+    return notes
+
+
 def _mauchly(S: "np.ndarray", m: float, k: int) -> tuple[float, float, float, float]:
     """Mauchly's W of the contrasts' covariance ``S`` (m residual df) with its
     χ² and p, the p with the second-order term as R's mauchly.test computes
@@ -301,12 +318,8 @@ def rm_anova(
     gg, hf_raw, mauchly, eps, name = _sphericity(S, n - 1.0, k, correction)
     hf = min(1.0, hf_raw)
     p_value = float(stats.f.sf(F, df1 * eps, df2 * eps))
-    notes = [Note("assumption", (f"Mauchly's test of sphericity: W = {mauchly[0]:.4g}, χ²({mauchly[2]:g}) = {mauchly[1]:.4g}, p = {mauchly[3]:.4g}; "
-                                 if mauchly else "Two measurements: sphericity holds by definition; ")
-                  + f"Greenhouse–Geisser ε = {gg:.4g}, Huynh–Feldt ε = {hf:.4g} (Huynh & Feldt, 1976).")]
-    if correction == "auto" and p > 1:
-        notes.append(Note("choice", f"{name[0].upper() + name[1:]} reported: the Greenhouse–Geisser ε is {'below' if gg < GG_BELOW else 'at least'} "
-                                    f"{GG_BELOW} (Girden, 1992; practice). Name the rule you follow."))
+    notes = _sphericity_notes("", gg, hf, mauchly, name, correction == "auto" and p > 1,
+                              "Two measurements: sphericity holds by definition; " + _epsilons(gg, hf))
     named = dict(labels or {})
     groups = tuple(GroupSummary(named.get(col, col), n=n, mean=float(Y[:, j].mean()), sd=float(Y[:, j].std(ddof=1))) for j, col in enumerate(columns))
     details: dict[str, object] = {"k": k, "correction": name, "epsilon": eps, "epsilon_gg": gg, "epsilon_hf": hf, "df1_uncorrected": df1,
@@ -396,12 +409,8 @@ def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[s
         gg, hf_raw, mauchly, eps, name = _sphericity(E / (n - 1), n - 1.0, p + 1, correction)
         hf = min(1.0, hf_raw)
         F = (ss / df1) / (ss_error / df2)
-        notes = [Note("assumption", f"{label}: " + (f"Mauchly's test of sphericity: W = {mauchly[0]:.4g}, χ²({mauchly[2]:g}) = {mauchly[1]:.4g}, "
-                                                    f"p = {mauchly[3]:.4g}; Greenhouse–Geisser ε = {gg:.4g}, Huynh–Feldt ε = {hf:.4g} "
-                                                    "(Huynh & Feldt, 1976)." if mauchly else "two levels; sphericity holds by definition."))]
-        if correction == "auto" and p > 1:
-            notes.append(Note("choice", f"{label}: {name} reported: the Greenhouse–Geisser ε is {'below' if gg < GG_BELOW else 'at least'} "
-                                        f"{GG_BELOW} (Girden, 1992; practice). Name the rule you follow."))
+        notes = _sphericity_notes(f"{label}: ", gg, hf, mauchly, name, correction == "auto" and p > 1,
+                                  "two levels; sphericity holds by definition.")
         details: dict[str, object] = {"term": label, "interaction": interaction, "ss": ss, "ss_error": ss_error, "correction": name,
                                       "epsilon": eps, "epsilon_gg": gg, "epsilon_hf": hf, "df1_uncorrected": df1, "df2_uncorrected": df2,
                                       "p_uncorrected": float(stats.f.sf(F, df1, df2)), "eta2_g": ss / (ss + ss_persons + errors)}

@@ -49,6 +49,12 @@ def _matplotlib() -> Any:
     return matplotlib
 
 
+def _legend(ax: Any, model: "FigureModel", size: float, count: int) -> None:
+    """The series' legend above the plot, clear of the data, titled by the factor whose levels they are."""
+    ax.legend(frameon=False, fontsize=size, title=_text(model.legend) or None, title_fontsize=size, loc="lower center",
+              bbox_to_anchor=(0.5, 1.0), ncol=min(count, 4))
+
+
 def _figure(model: "FigureModel", style: "Style") -> Any:
     _matplotlib()
     from matplotlib.figure import Figure
@@ -88,8 +94,7 @@ def _figure(model: "FigureModel", style: "Style") -> Any:
         if bars:
             ax.set_ylim(bottom=0)
         if model.kind == "interaction":
-            ax.legend(frameon=False, fontsize=size, title=_text(model.legend) or None, title_fontsize=size, loc="lower center",
-                      bbox_to_anchor=(0.5, 1.0), ncol=min(count, 4))  # above the plot, clear of the data
+            _legend(ax, model, size, count)
     elif model.kind == "categories":
         count = len(model.series)
         width = 0.8 / max(count, 1)
@@ -103,8 +108,7 @@ def _figure(model: "FigureModel", style: "Style") -> Any:
         ax.set_xticks(range(len(model.categories)), [_text(c) for c in model.categories])
         ax.set_ylim(0, 100)
         if count > 1:
-            ax.legend(frameon=False, fontsize=size, title=_text(model.legend) or None, title_fontsize=size, loc="lower center",
-                      bbox_to_anchor=(0.5, 1.0), ncol=min(count, 4))
+            _legend(ax, model, size, count)
     elif model.kind == "scatter":
         points, line = model.series
         ax.scatter(points.x, points.y, s=14, facecolors="none", edgecolors="#404040", linewidths=0.7, gid="points")

@@ -110,8 +110,9 @@ def _prose(text: str) -> str:
     return text[:1].lower() + text[1:] if text[1:2].islower() else text
 
 
-def _note(style: "Style", text: str) -> StyledText:
-    return StyledText.from_markup(text)
+def _lower(text: str) -> str:
+    """A label inside a sentence or title: lower case unless it starts with an acronym ("BMI", "Age" → "age")."""
+    return text.lower() if text[1:2].islower() else text
 
 
 def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95) -> FigureModel:
@@ -142,12 +143,12 @@ def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95)
         note += " The same people were measured each time: the intervals are those of each mean alone and do not show the precision of the differences."
     if style.figures.get("means") == "bars":
         note = note.replace("Points show", "Bars show")
-    title = f"{'Median' if medians else 'Mean'} {outcome.lower() if outcome[1:2].islower() else outcome} by {axis.lower() if axis[1:2].islower() else axis}"
+    title = f"{'Median' if medians else 'Mean'} {_lower(outcome)} by {_lower(axis)}"
     return FigureModel(
         kind="means",
         about=_prose(title),
         title=_title(title),
-        note=_note(style, note),
+        note=StyledText.from_markup(note),
         x_label=axis,
         y_label=f"{outcome} ({'<i>Mdn</i>' if medians else '<i>M</i>'})",
         series=(Series(outcome, tuple(float(i) for i in range(len(names))), tuple(ys), tuple(lows), tuple(highs)),),
@@ -182,16 +183,16 @@ def interaction_figure(records: Sequence[Result], style: "Style", level: float =
     first = table_label(factors[0].heading) if factors else "First factor"
     second = table_label(factors[1].heading) if len(factors) > 1 else "Second factor"
     within = cells.details.get("epsilon") is not None or cells.kind == "anova_rm"
-    note = (f"<i>Note.</i> Points show cell means, a line for each level of {first.lower() if first[1:2].islower() else first}; "
+    note = (f"<i>Note.</i> Points show cell means, a line for each level of {_lower(first)}; "
             f"error bars show {level * 100:g}% confidence intervals of each cell mean.")
     if within:
         note += " Measurements of the same people are joined; the intervals do not show the precision of within-person differences."
-    title = f"Mean {outcome.lower() if outcome[1:2].islower() else outcome} by {first.lower() if first[1:2].islower() else first} and {second.lower() if second[1:2].islower() else second}"
+    title = f"Mean {_lower(outcome)} by {_lower(first)} and {_lower(second)}"
     return FigureModel(
         kind="interaction",
         about=_prose(title),
         title=_title(title),
-        note=_note(style, note),
+        note=StyledText.from_markup(note),
         x_label=second,
         y_label=f"{outcome} (<i>M</i>)",
         series=tuple(series),
@@ -233,14 +234,14 @@ def scatter_figure(records: Sequence[Result], data: "pd.DataFrame", style: "Styl
     crit = _t_quantile(level, n - 2)
     fit = a + b * grid
     xl, yl = table_label(x_var.heading), table_label(y_var.heading)
-    title = f"{yl} and {xl.lower() if xl[1:2].islower() else xl}"
+    title = f"{yl} and {_lower(xl)}"
     note = (f"<i>Note.</i> Each point is one case (<i>N</i> = {n}); the line is the least-squares regression line, "
             f"the shaded band its {level * 100:g}% confidence band.")
     return FigureModel(
         kind="scatter",
         about=f"relation between {_prose(yl)} and {_prose(xl)}",
         title=_title(title),
-        note=_note(style, note),
+        note=StyledText.from_markup(note),
         x_label=xl,
         y_label=yl,
         series=(Series("cases", tuple(float(v) for v in x), tuple(float(v) for v in y)),
@@ -274,12 +275,12 @@ def forest_figure(records: Sequence[Result], style: "Style") -> FigureModel:
     null = "an odds ratio of one" if logistic else "a coefficient of zero"
     note = (f"<i>Note.</i> Points show {'odds ratios' if logistic else 'unstandardized coefficients (<i>B</i>)'}; error bars show their "
             f"{level * 100:g}% confidence intervals; the dashed line marks no association ({null})." + (" The axis is logarithmic." if logistic else ""))
-    title = f"{'Odds ratios' if logistic else 'Coefficients'} of the {'logistic' if logistic else 'linear'} regression of {outcome.lower() if outcome[1:2].islower() else outcome}"
+    title = f"{'Odds ratios' if logistic else 'Coefficients'} of the {'logistic' if logistic else 'linear'} regression of {_lower(outcome)}"
     return FigureModel(
         kind="forest",
         about=_prose(title),
         title=_title(title),
-        note=_note(style, note),
+        note=StyledText.from_markup(note),
         x_label=f"{symbol} ({level * 100:g}% CI)",
         y_label="",
         series=(Series("coefficients", tuple(ys), tuple(float(i) for i in range(len(names))), tuple(lows), tuple(highs)),),
@@ -318,12 +319,12 @@ def categories_figure(description: "Description", variable: str | None, style: "
             f"({'of valid responses' if description.percent_of == 'valid' else 'of all cases, missing included'}).")
     if hidden.any():
         note += f" To protect confidentiality, counts below {description.suppress_below} are not drawn, as the table does not show them."
-    title = f"{label} by {by.lower() if by[1:2].islower() else by}" if grouped else label
+    title = f"{label} by {_lower(by)}" if grouped else label
     return FigureModel(
         kind="categories",
         about=_prose(f"percentage in each category of {_prose(label)}" + (f" by {_prose(by)}" if grouped else "")),
         title=_title(title),
-        note=_note(style, note),
+        note=StyledText.from_markup(note),
         x_label=label,
         y_label="Percentage",
         series=tuple(series),
@@ -339,29 +340,22 @@ def figure(records: "Result | Sequence[Result]", kind: str, style: "Style | str 
     """The figure of ``kind`` for ``records`` in ``style``; ``data`` only for a scatter plot; a Description (Table 1)
     with kind ``categories`` and the ``variable`` to draw (default: its first categorical one); ``title`` replaces the
     generated one and ``note`` (markup) follows the generated note, which says what the error bars show."""
-    from ..style.profile import load_style
-
     from ..records import Description
+    from ..style.profile import load_style
 
     resolved = load_style(style)
     if kind not in FIGURE_KINDS:
         raise InputError(f"figure: kind {kind!r} is not one of {', '.join(FIGURE_KINDS)}")
-    described = records if isinstance(records, Description) else next((r for r in records if isinstance(r, Description)), None) \
-        if not isinstance(records, Result) else None
-    if kind == "categories" or described is not None:
-        if kind != "categories" or described is None:
-            raise InputError("figure: a descriptives table (Description) is drawn as kind 'categories', and kind 'categories' needs one")
-        made = categories_figure(described, variable, resolved)
-        if title:
-            made = replace(made, title=_title(title), about=_prose(title))
-        if note:
-            made = replace(made, note=made.note + " " + StyledText.from_markup(note))
-        return replace(made, number=number, id=id)
-    found = [records] if isinstance(records, Result) else [r for r in records if isinstance(r, Result)]
-    if not found:
+    items = [records] if isinstance(records, (Result, Description)) else list(records)
+    found = [r for r in items if isinstance(r, Result)]
+    described = next((r for r in items if isinstance(r, Description)), None)
+    if (kind == "categories") != (described is not None):
+        raise InputError("figure: a descriptives table (Description) is drawn as kind 'categories', and kind 'categories' needs one")
+    if not found and described is None:
         raise InputError("figure: no result records to draw")
-    made: Any
-    if kind == "means":
+    if described is not None:
+        made: Any = categories_figure(described, variable, resolved)
+    elif kind == "means":
         made = means_figure(found, resolved, level)
     elif kind == "interaction":
         made = interaction_figure(found, resolved, level)
