@@ -587,8 +587,8 @@ def _recomputed_p(rep: Reported, alpha: float) -> float | None:
     """The p for the restyled text when the reported one is not exact: the
     p recomputed from the statistic, kept inside what the text reported (so
     "p < .001" stays below .001); with nothing to recompute from, a bound of
-    .001 or less is kept as the largest p below it (and one of .99 or more
-    as the smallest p above it)."""
+    .001 or less, or at alpha, is kept as the largest p below it (and one of
+    .99 or more as the smallest p above it)."""
     computed, reported = p_range(rep), reported_p_range(rep, alpha)
     bound = rep.p.number.value if rep.p is not None and rep.p.op in ("<", "≤") and rep.p.number is not None else None
     if computed is not None:
@@ -604,8 +604,8 @@ def _recomputed_p(rep: Reported, alpha: float) -> float | None:
                 if above < hi:
                     lo = max(lo, above)
         return min(max((lo + hi) / 2, 0.0), 1.0)
-    if bound is not None and 0 < bound <= 0.001:
-        return math.nextafter(bound, 0.0)
+    if bound is not None and (0 < bound <= 0.001 or abs(bound - alpha) < 1e-12):
+        return math.nextafter(bound, 0.0)  # "p < .001" stays below .001; "p < .05" stays a p that rounds to .050 below alpha
     if rep.p is not None and rep.p.op in (">", "≥") and rep.p.number is not None and 0.99 <= rep.p.number.value < 1:
         return math.nextafter((rep.p.number.value + 1) / 2, 1.0)  # "P > .99" stays above .99 and above what rounds to it
     return None
