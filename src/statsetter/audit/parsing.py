@@ -131,28 +131,30 @@ _SYMBOL = (
     r"(?:Δ\s?F|χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
     r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzZUHWTQ])"
 )
+# Every alternative starts with a literal character and a name that must not follow a letter says so right after it
+# ("V(?<![\w]V)"): the regex engine then looks for the first characters with a fast scan instead of trying every position.
 _EFFECT_NAMES = [
     (r"partial\s+(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2_p"),
-    (r"(?:η|eta)\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|η_p\^?2|ηp[²2]|η[²2]_p", "eta2_p"),
-    (r"(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2"),
-    (r"(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2"),
-    (r"(?:ε|epsilon)\s?(?:[²2]|\^2|squared)", "epsilon2"),
-    (r"(?:ε|epsilon)(?!\s?(?:[²2]|\^2|squared))", "epsilon"),  # a sphericity correction's ε (GG or HF)
+    (r"η\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|eta\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|η_p\^?2|ηp[²2]|η[²2]_p", "eta2_p"),
+    (r"η\s?(?:[²2]|\^2|squared)|eta\s?(?:[²2]|\^2|squared)", "eta2"),
+    (r"ω\s?(?:[²2]|\^2|squared)|omega\s?(?:[²2]|\^2|squared)", "omega2"),
+    (r"ε\s?(?:[²2]|\^2|squared)|epsilon\s?(?:[²2]|\^2|squared)", "epsilon2"),
+    (r"ε(?!\s?(?:[²2]|\^2|squared))|epsilon(?!\s?(?:[²2]|\^2|squared))", "epsilon"),  # a sphericity correction's ε (GG or HF)
     (r"r_?rb|r\s?(?:rank-biserial)", "r_rb"),
-    (r"Cram[ée]r'?s\s+V|(?<![\w])V", "V"),
-    (r"φ|(?<![\w])phi", "phi"),
+    (r"Cram[ée]r'?s\s+V|V(?<![\w]V)", "V"),
+    (r"φ|p(?<![\w]p)hi", "phi"),
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
-    (r"(?<![\w])R\s?(?:[²2]|\^2)", "R2"),
-    (r"β|(?<![\w])beta", "beta"),
-    (r"(?<![\w])OR", "OR"),
-    (r"(?<![\w])d_?z", "d_z"),
-    (r"(?<![\w])d_?av", "d_av"),
-    (r"(?<![\w])d", "d"),
-    (r"(?<![\w])g", "g"),
-    (r"Kendall'?s\s+W|(?<![\w])W(?=\s*=\s*0?[.,]\d)", "kendall_w"),  # W below 1 with decimals: Kendall's W, not a rank sum
-    (r"(?<![\w])Mdn", "Mdn"),
-    (r"(?<![\w])M", "M"),
-    (r"(?<![\w])SD", "SD"),
+    (r"R(?<![\w]R)\s?(?:[²2]|\^2)", "R2"),
+    (r"β|b(?<![\w]b)eta", "beta"),
+    (r"O(?<![\w]O)R", "OR"),
+    (r"d(?<![\w]d)_?z", "d_z"),
+    (r"d(?<![\w]d)_?av", "d_av"),
+    (r"d(?<![\w]d)", "d"),
+    (r"g(?<![\w]g)", "g"),
+    (r"Kendall'?s\s+W|W(?<![\w]W)(?=\s*=\s*0?[.,]\d)", "kendall_w"),  # W below 1 with decimals: Kendall's W, not a rank sum
+    (r"M(?<![\w]M)dn", "Mdn"),
+    (r"M(?<![\w]M)", "M"),
+    (r"S(?<![\w]S)D", "SD"),
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
 
@@ -174,7 +176,7 @@ class _Patterns:
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
         self.effect = re.compile(
-            r"(?P<name>" + "|".join(f"(?:{p})" for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
+            r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
         )
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         self.df = re.compile(rf"(?<![\w])df\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)")
@@ -182,8 +184,9 @@ class _Patterns:
         self.coef_se = re.compile(rf"(?<![\w])SE\s*+=\s*+(?P<num>{num})")
         self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
-        self.boundary = re.compile(r"(?<=[^\d\s])\.(?=\s+[A-Z(])|(?<=\d)\.(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
-                                   r"|(?<=\\\\)[ \t]*\n")
+        # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan)
+        self.boundary = re.compile(r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
+                                   r"|[ \t\n](?<=\\\\[ \t\n])(?:(?<=\n)|[ \t]*\n)")
         self.operator = re.compile(r"\s*+(?:=|<|>|≤|≥)\s*+")
 
     def to_number(self, text: str, start: int) -> Number | None:
@@ -233,9 +236,12 @@ def _patterns(mark: str) -> _Patterns:
     return _CACHE[mark]
 
 
+_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _EFFECT_NAMES]
+
+
 def _effect_name(text: str) -> str | None:
-    for pattern, name in _EFFECT_NAMES:
-        if re.fullmatch(pattern, text):
+    for pattern, name in _EFFECT_FULL:
+        if pattern.fullmatch(text):
             return name
     return None
 
