@@ -407,6 +407,34 @@ def test_docx_headers_and_footnotes_are_read(tmp_path):
     assert [e.found for e in entries] == ["t(12) = 2.50, p = .028", "F(1, 20) = 4.35, p = .050"]
 
 
+def test_word_text_italics_deletions_and_cells_as_wordprocessingml_defines_them():
+    # ECMA-376 Part 1, 17.3.2 (run properties), 17.13.5 (revisions): a run's italics are its own rPr's w:i
+    # (w:val "0"/"false"/"off" turns it off); a paragraph mark's rPr and a tracked change's old rPr
+    # (w:rPrChange) do not italicise text; runs inside w:del are deleted text; a nested table's cell is the innermost
+    from lxml import etree
+
+    from statsetter.audit.reading import _part_units
+
+    body = (
+        '<w:document xmlns:w="http://schemas.openxmlformats.org/wordprocessingml/2006/main"><w:body>'
+        '<w:p><w:pPr><w:rPr><w:i/></w:rPr></w:pPr>'
+        '<w:r><w:rPr><w:i/></w:rPr><w:t>t</w:t></w:r><w:r><w:t xml:space="preserve">(38) = 2.14, </w:t></w:r>'
+        '<w:r><w:rPr><w:i w:val="0"/></w:rPr><w:t>p</w:t></w:r><w:r><w:t xml:space="preserve"> = .039</w:t></w:r>'
+        '<w:del w:id="1" w:author="A"><w:r><w:t>, d = 9.99</w:t></w:r></w:del>'
+        '<w:r><w:rPr><w:rPrChange w:id="2" w:author="A"><w:rPr><w:i/></w:rPr></w:rPrChange></w:rPr><w:t>, plain</w:t></w:r>'
+        '<w:r><w:rPr><w:i w:val="true"/></w:rPr><w:t>d</w:t><w:tab/><w:t>x</w:t></w:r></w:p>'
+        '<w:tbl><w:tr><w:tc><w:p><w:r><w:t>outer</w:t></w:r></w:p>'
+        '<w:tbl><w:tr><w:tc><w:p><w:r><w:t>a</w:t></w:r></w:p></w:tc><w:tc><w:p><w:r><w:t>inner</w:t></w:r></w:p></w:tc></w:tr></w:tbl>'
+        '</w:tc></w:tr></w:tbl></w:body></w:document>'
+    )
+    units = list(_part_units(etree.fromstring(body), "word/document.xml"))
+    first = units[0]
+    assert first.text == "t(38) = 2.14, p = .039, plaind\tx"
+    assert first.italic == ((0, 1), (len("t(38) = 2.14, p = .039, plain"), len(first.text)))
+    assert [(u.location, u.text) for u in units[1:]] == [
+        ("table 1, row 1, cell 1", "outer"), ("table 2, row 1, cell 1", "a"), ("table 2, row 1, cell 2", "inner")]
+
+
 def test_markdown_columns_are_the_files_columns(tmp_path, capsys):
     # a location points at the statistic as written, emphasis and pandoc ^2^ / ~s~ markers
     # included (common practice: an editor's line:column is the file's)

@@ -127,10 +127,20 @@ _EXPONENT = r"(?:\s?[eE][-−+]?\d{1,3}(?![\d.])|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?
 _EXPONENT_SPLIT = re.compile(r"^(?P<m>.*?)(?:\s?[eE](?P<e1>[-−+]?\d{1,3})|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?(?P<e2>[-−⁻]?[\d⁰¹²³⁴⁵⁶⁷⁸⁹]{1,3}))$")
 _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--")
 
-_SYMBOL = (
-    r"(?:Δ\s?F|χ\s?[²2]|χ\^2|(?i:chi)[- ]?(?i:square[d]?|2|²)|X\s?²|X\^2|X2(?=\s*\()"
-    r"|r[sₛ](?![A-Za-z])|r_s|ρ|(?i:rho)|τ_?b?|(?i:tau)(?:_?b)?|[tFrzZUHWTQ])"
-)
+# each alternative starts with a literal character; `_guarded` puts the "not after a letter or point" test right after it
+_SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)", r"X\s?²", r"X\^2",
+            r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
+            "t", "F", "r", "z", "Z", "U", "H", "W", "T", "Q")
+
+
+def _guarded(alternatives: "Iterable[str]", before: str) -> str:
+    """The alternatives, each not preceded by a character of ``before``: the
+    lookbehind follows the literal first character, so that the regex engine
+    scans for the first characters quickly instead of trying every position."""
+    return "|".join(f"{a[0]}(?<![{before}]{re.escape(a[0])}){a[1:]}" for a in alternatives)
+
+
+_SYMBOL = _guarded(_SYMBOLS, r"\w.")
 # Every alternative starts with a literal character and a name that must not follow a letter says so right after it
 # ("V(?<![\w]V)"): the regex engine then looks for the first characters with a fast scan instead of trying every position.
 _EFFECT_NAMES = [
@@ -165,11 +175,12 @@ class _Patterns:
         self.mark = mark
         self.number = re.compile(num)
         self.head = re.compile(
-            rf"(?<![\w.])(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
+            rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
             rf"\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num}{_EXPONENT}?)"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
-        self.p = re.compile(rf"(?<![\w.*])(?P<sym>[pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|b(?=\s*+\.?\d))\s*+(?P<num>{num}{_EXPONENT}?)|(?<![\w.])(?P<ns>n\.\s?s\.|ns)(?![\w])")
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|b(?=\s*+\.?\d))\s*+(?P<num>{num}{_EXPONENT}?)"
+                            r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval)s?\s*+[:=,]?\s*+"
@@ -191,6 +202,11 @@ class _Patterns:
 
     def to_number(self, text: str, start: int) -> Number | None:
         raw = text.strip()
+        if _PLAIN.fullmatch(raw) and self.mark == ".":  # "2.14", ".039", "38": float() reads these exactly as Decimal would
+            point = raw.find(".")
+            offset = text.find(raw)
+            s = start + max(offset, 0)
+            return Number(raw, float(raw), len(raw) - point - 1 if point >= 0 else 0, s, s + len(raw))
         power = _EXPONENT_SPLIT.match(raw) if ("e" in raw or "E" in raw or "10" in raw) else None
         if power is not None and power.group("m").strip():
             base = self.to_number(power.group("m"), start)
@@ -225,6 +241,7 @@ class _Patterns:
         return Number(raw, value, decimals, s, s + len(raw))
 
 
+_PLAIN = re.compile(r"\d{1,15}(?:\.\d{1,15})?|\.\d{1,15}")
 _SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789")
 _CACHE: dict[str, _Patterns] = {}
 _MAX_DIGITS = 100
@@ -449,19 +466,21 @@ def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[in
     return [(o.start(), o.end()) for o in pat.operator.finditer(text, start, end) if o.group().strip()]
 
 
+_ADJUSTED_WORDS = ("adjusted", "corrected", "holm", "bonferroni", "sidak", "šidák", "fdr", "benjamini")  # a cheap test first
 _ADJUSTED = re.compile(r"(?i:adjusted|corrected|holm|bonferroni|sidak|šidák|fdr|benjamini)[\s-]*$")
 
 
 def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
-    adjusted = bool(_ADJUSTED.search(m.string, max(0, m.start() - 30), m.start()))
-    if m.group("ns"):
-        return PValue("ns", None, m.start(), m.end(), m.start(), m.group("ns"))
+    before = m.string[max(0, m.start() - 30) : m.start()].lower()
+    adjusted = any(word in before for word in _ADJUSTED_WORDS) and bool(_ADJUSTED.search(m.string, max(0, m.start() - 30), m.start()))
+    if m.group("op") is None:  # "ns"
+        return PValue("ns", None, m.start(), m.end(), m.start(), m.group())
     number = pat.to_number(m.group("num"), m.start("num"))
     if number is None:
         return None
     op = m.group("op")
     op = "<" if op == "b" else op[-1] if len(op) > 1 else op  # "p b 0.01": a "<" garbled by a PDF copy; "p = < .001" means "<"
-    return PValue(op, number, m.start(), m.end("num"), m.start("sym"), m.group("sym"), adjusted)
+    return PValue(op, number, m.start(), m.end("num"), m.start(), m.group()[0], adjusted)
 
 
 def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:

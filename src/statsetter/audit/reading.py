@@ -208,62 +208,60 @@ def _place(part: str) -> str:
 
 def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-def]
     label = _place(part)
-    cells = {}
+    in_cell = {}  # every paragraph inside a table cell → (table, row, column); the innermost cell wins
     for t, tbl in enumerate(root.iter(f"{_W}tbl"), 1):
         for r, tr in enumerate((x for x in tbl if x.tag == f"{_W}tr"), 1):
             for c, tc in enumerate((x for x in tr if x.tag == f"{_W}tc"), 1):
-                cells[tc] = (t, r, c)
+                for para in tc.iter(f"{_W}p"):
+                    in_cell[para] = (t, r, c)
     body_count = 0
     for index, para in enumerate(root.iter(f"{_W}p")):
-        tc = next(para.iterancestors(f"{_W}tc"), None)
-        if tc is None:
+        cell = in_cell.get(para)
+        if cell is None:
             body_count += 1
         text, spans = _paragraph_text(para)
         if not text.strip():
             continue
-        cell = None
-        if tc is None:
+        if cell is None:
             location = f"{label} {body_count}"
         else:
-            cell = t, r, c = cells[tc]
+            t, r, c = cell
             location = f"table {t}, row {r}, cell {c}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {c}"
         yield Unit(location, text, spans, part, index, cell=cell)
 
 
-_RPR_I = f"{_W}rPr/{_W}i"
 _VAL = f"{_W}val"
-
-
-def _run_italic(run) -> bool:  # type: ignore[no-untyped-def]
-    i = run.find(_RPR_I)
-    return i is not None and i.get(_VAL, "true") not in ("0", "false", "off")
+_R, _T, _DEL, _I, _RPR = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}rPr"
+_CHUNKS = {f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
 
 
 def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
+    """A paragraph's text (deleted runs left out) and the spans of its italic runs, in one walk over its runs and their text."""
     pieces: list[str] = []
     spans: list[tuple[int, int]] = []
     length = 0
-    for run in para.iter(f"{_W}r"):
-        if run.getparent() is not None and run.getparent().tag == f"{_W}del":
+    italic, skip, run = False, True, None  # text outside a run is not read
+    for node in para.iter(_R, _T, _I, *_CHUNKS):
+        tag = node.tag
+        if tag == _R:
+            parent = node.getparent()
+            run, skip, italic = node, parent is not None and parent.tag == _DEL, False
             continue
-        italic = _run_italic(run)
-        for node in run:
-            tag = node.tag
-            if tag == f"{_W}t":
-                chunk = node.text or ""
-            elif tag == f"{_W}tab":
-                chunk = "\t"
-            elif tag in (f"{_W}br", f"{_W}cr"):
-                chunk = "\n"
-            elif tag == f"{_W}noBreakHyphen":
-                chunk = "-"
+        if tag == _I:  # italic when it sits in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
+            props = node.getparent()
+            if props is not None and props.tag == _RPR and props.getparent() is run:
+                italic = node.get(_VAL, "true") not in ("0", "false", "off")
+            continue
+        if skip:
+            continue
+        chunk = (node.text or "") if tag == _T else _CHUNKS[tag]
+        if not chunk:
+            continue
+        if italic:
+            if spans and spans[-1][1] == length:
+                spans[-1] = (spans[-1][0], length + len(chunk))
             else:
-                continue
-            if italic and chunk:
-                if spans and spans[-1][1] == length:
-                    spans[-1] = (spans[-1][0], length + len(chunk))
-                else:
-                    spans.append((length, length + len(chunk)))
-            pieces.append(chunk)
-            length += len(chunk)
+                spans.append((length, length + len(chunk)))
+        pieces.append(chunk)
+        length += len(chunk)
     return "".join(pieces), tuple(spans)
