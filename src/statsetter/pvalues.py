@@ -59,15 +59,21 @@ def _beta_fraction(a: float, b: float, x: float) -> float:
     out: the audit computes thousands of p values)."""
     h = c = 1.0
     d = 0.0
-    for m in range(_MAX_TERMS):
-        for num in (-(a + m) * (a + b + m) * x / ((a + 2 * m) * (a + 2 * m + 1)),
-                    (m + 1) * (b - m - 1) * x / ((a + 2 * m + 1) * (a + 2 * m + 2))):
-            d = 1 + num * d
-            d = 1 / (d if abs(d) > _TINY else _TINY)
-            c = 1 + num / c
-            if abs(c) < _TINY:
-                c = _TINY
-            h *= c * d
+    for m in range(_MAX_TERMS):  # the two steps of each m written out (the same operations in the same order)
+        num = -(a + m) * (a + b + m) * x / ((a + 2 * m) * (a + 2 * m + 1))
+        d = 1 + num * d
+        d = 1 / (d if abs(d) > _TINY else _TINY)
+        c = 1 + num / c
+        if abs(c) < _TINY:
+            c = _TINY
+        h *= c * d
+        num = (m + 1) * (b - m - 1) * x / ((a + 2 * m + 1) * (a + 2 * m + 2))
+        d = 1 + num * d
+        d = 1 / (d if abs(d) > _TINY else _TINY)
+        c = 1 + num / c
+        if abs(c) < _TINY:
+            c = _TINY
+        h *= c * d
         if abs(c * d - 1) < _EPS:
             return 1 / h
     raise ArithmeticError("incomplete beta: the continued fraction did not converge")

@@ -419,7 +419,7 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     return found["B"], found["SE"]
 
 
-_OPERATOR_OR_NS = re.compile(r"[=<>≤≥]|(?<![\w.])n\.?\s?s\b")
+_OPERATOR_OR_NS = re.compile(r"[=<>≤≥n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
 
 
 def _orphans(pat: _Patterns, text: str, start: int, end: int) -> list[Reported]:
