@@ -103,10 +103,9 @@ class Finding:
 
 
 def _p_of(symbol: str, value: float, df: tuple[float, ...]) -> float:
-    """Two-sided p for t, z and r; upper tail for F, χ² and H (as χ²). The
-    scipy.special distribution functions behind scipy.stats' sf, called
-    directly: the audit computes two per statistic, and the frozen-
-    distribution machinery costs a hundred times the arithmetic."""
+    """Two-sided p for t, z and r; upper tail for F, χ² and H (as χ²), from
+    statsetter's own distribution functions (pvalues.py): the audit computes
+    two per statistic."""
     from ..pvalues import upper_tail
 
     if symbol in ("r", "rs"):

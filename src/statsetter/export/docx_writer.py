@@ -16,7 +16,7 @@ from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
 from ..styled import StyledText
-from ..rendering.tables import TableModel, blank_or_dash, split_decimal, title_case
+from ..rendering.tables import _DASHES, DIGITS_AS_ZERO, TableModel, blank_or_dash, split_decimal, title_case
 
 if TYPE_CHECKING:
     from docx.document import Document
@@ -32,6 +32,7 @@ _WNS = "http://schemas.openxmlformats.org/wordprocessingml/2006/main"
 
 
 _NOT_XML = re.compile("[\x00-\x08\x0b\x0c\x0e-\x1f\ufffe\uffff\ud800-\udfff]")
+_NEEDS_CARE = re.compile("[&<>\x00-\x08\x0b\x0c\x0e-\x1f\ufffe\uffff\ud800-\udfff]")  # to escape, or not storable
 
 
 def xml_safe(text: str) -> str:
@@ -132,16 +133,24 @@ _NARROW = dict.fromkeys(" .,:;'!|il()[]", 0.28) | {"\u2009": 0.17, "\u00a0": 0.2
 _WIDE = dict.fromkeys("mwMW—\u2003", 0.95) | dict.fromkeys("<>=≤≥+×−–", 0.6)
 
 
+class _Advance(dict):  # type: ignore[type-arg]
+    """A character's advance width in ems, looked up once per distinct character."""
+
+    def __missing__(self, ch: str) -> float:
+        width = self[ch] = _NARROW.get(ch) or _WIDE.get(ch) or (0.72 if ch.isupper() else 0.5)
+        return width
+
+
+_ADVANCE = _Advance()
+
+
 @functools.lru_cache(maxsize=1 << 16)
 def _chars(text: str) -> int:
     """The width of ``text`` in twips at 12 pt, over-estimated by a tenth."""
-    ems = 0.0
-    for ch in text:
-        ems += _NARROW.get(ch) or _WIDE.get(ch) or (0.72 if ch.isupper() else 0.5)
-    return int(ems * _EM * 1.1)
+    return int(sum(map(_ADVANCE.__getitem__, text), 0.0) * _EM * 1.1)
 
 
-def _column_widths(table: TableModel, text_width: int) -> list[int]:
+def _column_widths(table: TableModel, text_width: int, shapes: "list[tuple[set[str], list[StyledText]]] | None" = None) -> list[int]:
     """Each column's width: wide enough for its longest word (stub labels and
     heads wrap between words, never inside one), as wide as its widest
     content where the text width allows, and never wider in sum than the
@@ -152,9 +161,8 @@ def _column_widths(table: TableModel, text_width: int) -> list[int]:
     def plain(t: StyledText) -> str:
         return t.plain() if t.spans else t.text.replace("\u00a0", " ")
 
-    stub_rows = [("\u2003" * r.indent) + plain(r.stub) for r in table.rows]
-    for j, texts in enumerate([[plain(table.stub_head), *stub_rows]] + [[plain(c.head)] + [plain(r.cells[k]) for r in table.rows if k < len(r.cells)]
-                                                                         for k, c in enumerate(table.columns)]):
+    stub_rows = [("\u2003" * r.indent) + plain(r.stub).translate(_SHAPE) for r in table.rows]  # widths by shape (digits as 0s)
+    for j, texts in enumerate([[plain(table.stub_head), *stub_rows]] + [[plain(c.head)] for c in table.columns]):
         for i, text in enumerate(texts):
             word = _longest_word(text)
             lead = _chars(text) - _chars(text.lstrip("\u2003")) if j == 0 and text.startswith("\u2003") else 0
@@ -162,6 +170,12 @@ def _column_widths(table: TableModel, text_width: int) -> list[int]:
                 longest[j] = lead + word
             # a head may wrap (it is short words); a body cell's numbers should not
             whole = word if i == 0 and j > 0 else _chars(text)
+            if whole > natural[j]:
+                natural[j] = whole
+    for j, (distinct, styled) in enumerate(shapes if shapes is not None else _body_shapes(table), 1):  # the body: each shape measured once
+        for whole, word in [_measure_shape(shape, "")[:2] for shape in distinct] + [(_chars(c.plain()), _longest_word(c.plain())) for c in styled]:
+            if word > longest[j]:
+                longest[j] = word
             if whole > natural[j]:
                 natural[j] = whole
     low = [_PAD + c + (_HANG if j == 0 else 0) for j, c in enumerate(longest)]
@@ -184,11 +198,20 @@ def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int =
     """One cell: its width, borders, and a paragraph spaced ``line`` (240 =
     single) with no first-line indent whatever the document's Normal style
     says; a decimal tab stop at ``decimal_at`` aligns a number on its mark."""
+    return _cell_open(align, top, bottom, span, decimal_at, width, hang, line) + _run_xml(text) + _CELL_CLOSE
+
+
+_CELL_CLOSE = "</w:p></w:tc>"
+
+
+@functools.lru_cache(maxsize=4096)
+def _cell_open(align: str, top: bool, bottom: bool, span: int, decimal_at: int, width: int, hang: bool, line: int) -> str:
+    """A cell's XML up to its paragraph's runs (few distinct ones per table, so built once each)."""
     grid = f'<w:gridSpan w:val="{span}"/>' if span > 1 else ""
     if width:
         grid = f'<w:tcW w:w="{width}" w:type="dxa"/>' + grid
     # every row keeps with the next, the last with the note: a table and its note are not parted by a page break
-    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr><w:keepNext/>{_ppr(align, decimal_at, hang, line)}</w:pPr>{_run_xml(text)}</w:p></w:tc>"
+    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr><w:keepNext/>{_ppr(align, decimal_at, hang, line)}</w:pPr>"
 
 
 @functools.lru_cache(maxsize=1024)
@@ -203,34 +226,56 @@ def _ppr(align: str, decimal_at: int, hang: bool, line: int) -> str:
     return spacing + indent + f'<w:jc w:val="{_JC.get(align, "center")}"/>'
 
 
-@functools.lru_cache(maxsize=1 << 16)
 def _split_plain(text: str, mark: str) -> tuple[str, str]:
     """Plain text cut before its decimal mark (as ``split_decimal`` cuts a StyledText)."""
-    for i, ch in enumerate(text):
-        if ch == mark and i + 1 < len(text) and text[i + 1].isdigit():
+    i = text.find(mark) if mark else -1
+    while i >= 0:
+        if i + 1 < len(text) and text[i + 1].isdigit():
             return text[:i], text[i:]
+        i = text.find(mark, i + 1)
     return text, ""
 
 
-def _decimal_tabs(table: TableModel, widths: list[int], mark: str) -> list[int]:
+_SHAPE = DIGITS_AS_ZERO  # every digit is half an em wide: a cell's width depends on its shape only
+
+
+def _body_shapes(table: TableModel) -> list[tuple[set[str], list[StyledText]]]:
+    """Per column, the distinct shapes of its plain body cells (digits as 0s:
+    a column of thousands of numbers has a handful) and its styled cells."""
+    out: list[tuple[set[str], list[StyledText]]] = []
+    for k in range(len(table.columns)):
+        cells = [r.cells[k] for r in table.rows if k < len(r.cells)]
+        styled = [c for c in cells if c.spans]
+        out.append(({c.text.translate(_SHAPE) for c in cells if not c.spans} if styled else {c.text.translate(_SHAPE) for c in cells}, styled))
+    return out
+
+
+@functools.lru_cache(maxsize=1 << 12)
+def _measure_shape(shape: str, mark: str) -> tuple[int, int, int, int]:
+    """A plain body cell's shape in twips: its width and its longest unbreakable
+    piece (no-break spaces measured as spaces, as ``_column_widths`` wraps
+    them), and the widths before and from its decimal ``mark`` as typed."""
+    shown = shape.replace("\u00a0", " ")
+    a, b = _split_plain(shape, mark)
+    return _chars(shown), _longest_word(shown), _chars(a), _chars(b)
+
+
+def _decimal_tabs(table: TableModel, widths: list[int], mark: str, shapes: "list[tuple[set[str], list[StyledText]]] | None" = None) -> list[int]:
     """Per column, the decimal tab stop (twips from the cell's text start)
     that centres the column's numbers aligned on ``mark``; 0 for a column
     that is not aligned so."""
     tabs = []
-    for j, aligned in enumerate(table.decimal_columns(mark)):
+    for j, (aligned, (distinct, styled)) in enumerate(zip(table.decimal_columns(mark), shapes if shapes is not None else _body_shapes(table))):
         if not aligned:
             tabs.append(0)
             continue
-        left = right = 0
-        for row in table.rows:
-            if row.cells and not blank_or_dash(row.cells[j]):
-                cell = row.cells[j]
-                if cell.spans:  # superscripts and the like: measured as printed
-                    a, b = split_decimal(cell, mark)
-                    a_text, b_text = a.plain(), b.plain()
-                else:
-                    a_text, b_text = _split_plain(cell.text, mark)
-                left, right = max(left, _chars(a_text)), max(right, _chars(b_text))
+        parts = [_measure_shape(shape, mark)[2:] for shape in distinct if shape.strip() not in _DASHES]
+        for cell in styled:  # superscripts and the like: measured as printed
+            if not blank_or_dash(cell):
+                a, b = split_decimal(cell, mark)
+                parts.append((_chars(a.plain()), _chars(b.plain())))
+        left = max((a for a, _ in parts), default=0)
+        right = max((b for _, b in parts), default=0)
         area = widths[j + 1] - 2 * _MARGIN
         tabs.append(max(left, (area - left - right) // 2 + left))
     return tabs
@@ -242,7 +287,8 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     that Word and LibreOffice lay the table out alike; with ``number_align``
     ``decimal`` columns of numbers align on the decimal ``mark``; cell
     paragraphs are spaced ``line`` (240 = single)."""
-    widths = _column_widths(table, text_width)
+    shapes = _body_shapes(table)
+    widths = _column_widths(table, text_width, shapes)
     head_rows = 2 if table.spanners else 1
     header = "<w:trPr><w:cantSplit/><w:tblHeader/></w:trPr>"
     parts = [
@@ -273,16 +319,19 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         + "</w:tr>"
     )
     body = "<w:trPr><w:cantSplit/></w:trPr>"
-    tabs = _decimal_tabs(table, widths, mark) if number_align == "decimal" else [0] * len(table.columns)
+    tabs = _decimal_tabs(table, widths, mark, shapes) if number_align == "decimal" else [0] * len(table.columns)
     last = len(table.rows) - 1
+    # body cells whose text needs no escaping or cleaning (checked once over all of them) are written as they are
+    plain_safe = not _NEEDS_CARE.search("\n".join(c.text for r in table.rows for c in r.cells))
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
         cells = [_cell_xml(stub, "left", False, bottom, hang=True, line=line)]
         if row.cells:
-            cells += [_cell_xml(c, "decimal" if tab and not blank_or_dash(c) else col.align, False, bottom, 1, tab, line=line)
-                      for c, col, tab in zip(row.cells, table.columns, tabs)]
+            cells += [_cell_open("decimal" if tab and not blank_or_dash(c) else col.align, False, bottom, 1, tab, 0, False, line)
+                      + (_run_xml(c) if c.spans or not plain_safe else f'<w:r><w:t xml:space="preserve">{c.text}</w:t></w:r>' if c.text else "")
+                      + _CELL_CLOSE for c, col, tab in zip(row.cells, table.columns, tabs)]
         else:
             cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), line=line))
         parts.append(f"<w:tr>{body}{''.join(cells)}</w:tr>")

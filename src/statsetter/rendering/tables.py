@@ -9,6 +9,7 @@ italics and superscripts survive into every format.
 
 from __future__ import annotations
 
+import functools
 import re
 from dataclasses import dataclass, field
 from typing import Literal
@@ -54,8 +55,16 @@ def _number_shape(cell: StyledText, mark: str) -> str:
     return "number" if _NUMBER.fullmatch(text[:end]) and ", " not in text and "; " not in text else "text"
 
 
+DIGITS_AS_ZERO = str.maketrans("123456789", "000000000")  # a number's shape: what layout decisions depend on
+
+
 def _plain_shape(raw: str) -> str:
-    """``_number_shape`` of text without styles."""
+    """``_number_shape`` of text without styles (decided once per shape: digits as 0s)."""
+    return _shape_kind(raw.translate(DIGITS_AS_ZERO))
+
+
+@functools.lru_cache(maxsize=4096)
+def _shape_kind(raw: str) -> str:
     text = raw.strip()
     if text in _DASHES:
         return "dash"
