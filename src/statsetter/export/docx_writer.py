@@ -11,6 +11,7 @@ from __future__ import annotations
 
 from pathlib import Path
 import functools
+import io
 import re
 from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
@@ -281,9 +282,13 @@ def _decimal_tabs(table: TableModel, widths: list[int], mark: str, shapes: "list
     return tabs
 
 
-def _table_xml(table: TableModel, number_align: str = "center", text_width: int = TEXT_WIDTH, *, mark: str = ".", line: int = 240) -> str:
+def _table_xml(table: TableModel, number_align: str = "center", text_width: int = TEXT_WIDTH, *, mark: str = ".", line: int = 240,
+               declare: bool = True) -> bytes:
     """The whole w:tbl as one string, parsed once: fast for tables of thousands
-    of rows. Column widths are explicit and fixed (``_column_widths``), so
+    of rows, UTF-8 encoded row by row into one buffer (no second copy of
+    the whole). ``declare`` puts the namespace declaration on the w:tbl (to
+    parse it alone); a table written into a document part goes without.
+    Column widths are explicit and fixed (``_column_widths``), so
     that Word and LibreOffice lay the table out alike; with ``number_align``
     ``decimal`` columns of numbers align on the decimal ``mark``; cell
     paragraphs are spaced ``line`` (240 = single)."""
@@ -292,7 +297,7 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     head_rows = 2 if table.spanners else 1
     header = "<w:trPr><w:cantSplit/><w:tblHeader/></w:trPr>"
     parts = [
-        f'<w:tbl xmlns:w="{_WNS}"><w:tblPr><w:tblW w:w="{sum(widths)}" w:type="dxa"/><w:tblBorders>'
+        (f'<w:tbl xmlns:w="{_WNS}">' if declare else "<w:tbl>") + f'<w:tblPr><w:tblW w:w="{sum(widths)}" w:type="dxa"/><w:tblBorders>'
         + "".join(_NIL_XML.format(e) for e in ("top", "left", "bottom", "right", "insideH", "insideV"))
         + '</w:tblBorders><w:tblLayout w:type="fixed"/>'
         + f'<w:tblCellMar><w:left w:w="{_MARGIN}" w:type="dxa"/><w:right w:w="{_MARGIN}" w:type="dxa"/></w:tblCellMar>'
@@ -318,6 +323,8 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         )
         + "</w:tr>"
     )
+    out = io.BytesIO()
+    out.write("".join(parts).encode())
     body = "<w:trPr><w:cantSplit/></w:trPr>"
     tabs = _decimal_tabs(table, widths, mark, shapes) if number_align == "decimal" else [0] * len(table.columns)
     last = len(table.rows) - 1
@@ -334,16 +341,16 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
                       + _CELL_CLOSE for c, col, tab in zip(row.cells, table.columns, tabs)]
         else:
             cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), line=line))
-        parts.append(f"<w:tr>{body}{''.join(cells)}</w:tr>")
-    parts.append("</w:tbl>")
-    return "".join(parts)
+        out.write(f"<w:tr>{body}{''.join(cells)}</w:tr>".encode())
+    out.write(b"</w:tbl>")
+    return out.getvalue()
 
 
 _PLACEHOLDER = "statsetter-table"
 _PLACEHOLDER_RE = re.compile(rb"<\?statsetter-table (\d+)\?>")
 
 
-def _place_table(document: "Document", anchor: "Paragraph", table_xml: str) -> None:
+def _place_table(document: "Document", anchor: "Paragraph", table_xml: bytes) -> None:
     """Put a table before ``anchor`` without parsing it into the tree: a
     processing instruction marks its place, and the document part writes
     the table's XML there when it is serialised (on any save). A table of
@@ -355,7 +362,7 @@ def _place_table(document: "Document", anchor: "Paragraph", table_xml: str) -> N
     part = document.part
     pending: list[bytes] = part.__dict__.setdefault("_statsetter_tables", [])
     anchor._p.addprevious(etree.ProcessingInstruction(_PLACEHOLDER, str(len(pending))))
-    pending.append(table_xml.replace(f' xmlns:w="{_WNS}"', "", 1).encode("utf-8"))
+    pending.append(table_xml)  # UTF-8, without a namespace declaration of its own (the part declares w:)
     if not getattr(part, "_statsetter_deferred", False):
         part.__class__ = _deferred_part_class(type(part))
 
@@ -399,13 +406,16 @@ def caption_xml(name: str, number: int | None, title: StyledText, one_line: bool
     return out
 
 
-def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH) -> list[str]:
+def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH, *, declare: bool = True) -> "list[str | bytes]":
     """A table as Word XML elements in order: the number (bold) and title
-    (italic, title case) paragraphs, kept with the table; the w:tbl; one
-    paragraph per note part (general, specific, probability)."""
-    out = caption_xml("Table", table.number, title_case(table.title) if table.title else StyledText(), style.tables.get("caption") == "one_line")
+    (italic, title case) paragraphs (str), kept with the table; the w:tbl
+    (UTF-8 bytes; with ``declare`` False, without its namespace declaration,
+    to be written into a part); one paragraph per note part (general,
+    specific, probability)."""
+    out: "list[str | bytes]" = list(caption_xml("Table", table.number, title_case(table.title) if table.title else StyledText(),
+                                                style.tables.get("caption") == "one_line"))
     line = round(240 * style.manuscript.get("table_line_spacing", 1.0))
-    out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=line))
+    out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=line, declare=declare))
     out += [_paragraph_xml(part) for part in table.note_parts()]
     return out
 
@@ -427,8 +437,8 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
     from ..style.profile import load_style
 
     anchor = document.add_paragraph()  # the parts go before it
-    for xml in table_parts(table, load_style(style), text_width_of(document)):
-        if xml.startswith("<w:tbl"):
+    for xml in table_parts(table, load_style(style), text_width_of(document), declare=False):
+        if isinstance(xml, bytes):
             _place_table(document, anchor, xml)
         else:
             anchor._p.addprevious(parse_xml(xml))

@@ -163,7 +163,7 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
             from docx.oxml import parse_xml
 
             for xml in reversed(parts):
-                paragraph.addnext(parse_xml(xml) if isinstance(xml, str) else xml)
+                paragraph.addnext(parse_xml(xml) if isinstance(xml, (str, bytes)) else xml)
             tables_after = True
             continue
         text = lookup(key, form)
