@@ -29,6 +29,7 @@ bench: $(STAMP)
 	$(BIN)/python bench/bench_describe.py
 	$(BIN)/python bench/bench_audit.py
 	$(BIN)/python bench/bench_figures.py
+	$(BIN)/python bench/bench_scaling.py
 
 clean:
 	rm -rf $(VENV) dist build demo/out bench/out
