@@ -489,18 +489,7 @@ class Result:
         validated as a whole, each shared part validated once): ``make(*values)`` sets the ``varying`` fields
         from ``values`` and every other field from ``shared`` or its default, without validating again.
         Only for statsetter's own code, which must check what it passes; never for outside input."""
-        setter, new = object.__setattr__, object.__new__
-        fixed = tuple((name, shared[name] if name in shared else default()) for name, default in _RESULT_DEFAULTS if name not in varying)
-
-        def make(*values: Any) -> "Result":
-            obj = new(cls)
-            for name, value in fixed:
-                setter(obj, name, value)
-            for name, value in zip(varying, values):
-                setter(obj, name, value)
-            return obj
-
-        return make
+        return _unchecked_maker(cls, shared, varying)
 
     # convenience -----------------------------------------------------------
 
@@ -637,6 +626,23 @@ def _default_of(f: Any) -> Any:
     if f.default is not MISSING:
         return lambda: f.default
     return lambda: None
+
+
+def _unchecked_maker(cls: type, shared: Mapping[str, Any], varying: tuple[str, ...]) -> Any:
+    """``make(*values)``: an instance of the frozen, slotted dataclass ``cls``
+    with the ``varying`` fields from ``values`` and every other field from
+    ``shared`` or its default, set without ``__init__`` or validation —
+    written out as one function (each slot set through its own descriptor,
+    no loop), for parts and records made by the ten thousand from arrays
+    already checked as a whole (``Result._checked_batch``)."""
+    names = [f.name for f in fields(cls)]
+    fixed = {f.name: shared[f.name] if f.name in shared else _default_of(f)() for f in fields(cls) if f.name not in varying}
+    scope: dict[str, Any] = {"new": object.__new__, "cls": cls, **{f"set_{n}": getattr(cls, n).__set__ for n in names},
+                             **{f"fixed_{n}": v for n, v in fixed.items()}}
+    args = ", ".join(f"v_{n}" for n in varying)
+    body = "".join(f"    set_{n}(obj, fixed_{n})\n" for n in fixed) + "".join(f"    set_{n}(obj, v_{n})\n" for n in varying)
+    exec(f"def make({args}):\n    obj = new(cls)\n{body}    return obj\n", scope)  # names are the dataclass's own fields
+    return scope["make"]
 
 
 _RESULT_DEFAULTS = tuple((f.name, _default_of(f)) for f in fields(Result))
