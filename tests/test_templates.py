@@ -163,3 +163,29 @@ def test_a_null_result_asserts_no_direction(kind):
     assert not re.search(r"\b(higher|lower|positive|negative|differed|tended|above|below|no effect|proven)\b", text), text
     significant = render(dataclasses.replace(EXAMPLES[kind], p=0.001), "sentence").plain()
     assert "compatible with no" not in significant
+
+
+def test_compiled_templates_are_kept_between_runs_and_a_bad_cache_is_no_error(tmp_path, monkeypatch):
+    # Jinja's bytecode cache: an entry per template, matched by the source's checksum; a damaged entry is compiled
+    # afresh, and where no cache folder can be made the templates are compiled each run (practice: caches never fail a run)
+    from jinja2 import FileSystemLoader
+    from jinja2.bccache import FileSystemBytecodeCache
+    from jinja2.sandbox import ImmutableSandboxedEnvironment
+
+    from statsetter.rendering.sentences import _bytecode_cache, templates_dir
+
+    def environment():
+        return ImmutableSandboxedEnvironment(loader=FileSystemLoader(str(templates_dir("en"))), bytecode_cache=_bytecode_cache(str(tmp_path)))
+
+    first = environment().get_template("t_independent.j2").module
+    entries = list(tmp_path.iterdir())
+    assert len(entries) == 1
+    entries[0].write_bytes(b"not a compiled template")
+    again = environment().get_template("t_independent.j2").module
+    assert dir(again) == dir(first)
+
+    def refuse(self):
+        raise RuntimeError("no temporary folder")
+
+    monkeypatch.setattr(FileSystemBytecodeCache, "_get_default_cache_dir", refuse)
+    assert _bytecode_cache() is None

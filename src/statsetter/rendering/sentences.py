@@ -42,7 +42,9 @@ def templates_dir(language: str = "en") -> Path:
 
 
 @lru_cache(maxsize=8)
+@lru_cache(maxsize=8)
 def _environment(language: str) -> Any:
+    """One template environment per language (it keeps each template compiled once per process)."""
     from jinja2 import FileSystemLoader, StrictUndefined
     from jinja2.sandbox import ImmutableSandboxedEnvironment
 
@@ -53,7 +55,34 @@ def _environment(language: str) -> Any:
         trim_blocks=True,
         lstrip_blocks=True,
         keep_trailing_newline=False,
+        bytecode_cache=_bytecode_cache(),
     )
+
+
+def _bytecode_cache(directory: str | None = None) -> Any:
+    """Compiled templates kept between runs in Jinja's own per-user folder
+    under the temporary directory (created private, owner checked, entries
+    matched by the template file's checksum), or in ``directory``; None where
+    no such folder can be used, and a failing read or write is never an error."""
+    from jinja2 import FileSystemBytecodeCache
+
+    class Quiet(FileSystemBytecodeCache):
+        def load_bytecode(self, bucket: Any) -> None:
+            try:
+                super().load_bytecode(bucket)
+            except Exception:  # unreadable or damaged: compiled afresh
+                bucket.reset()
+
+        def dump_bytecode(self, bucket: Any) -> None:
+            try:
+                super().dump_bytecode(bucket)
+            except Exception:  # read-only or full: not kept
+                pass
+
+    try:
+        return Quiet(directory)
+    except Exception:  # no usable temporary folder
+        return None
 
 
 _SPACE = re.compile(r"[ \t\r\n]+")
