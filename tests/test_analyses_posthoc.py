@@ -6,6 +6,8 @@ statsmodels' multipletests for Holm.
 """
 
 import math
+
+import numpy as np
 import pingouin as pg
 import pytest
 from scipy import stats
@@ -34,7 +36,10 @@ def test_tukey(penguins):
     ci = ref.confidence_interval()
     for r, (i, j) in zip(rs, [(0, 1), (0, 2), (1, 2)]):
         assert r.estimate.value == pytest.approx(ref.statistic[i, j], rel=REL)
-        assert r.p == pytest.approx(ref.pvalue[i, j], rel=REL, abs=1e-300)
+        if ref.pvalue[i, j] > 1e-10:  # scipy's nested quadrature is exact to about 1e-11 absolute
+            assert r.p == pytest.approx(ref.pvalue[i, j], rel=REL)
+        else:  # scipy prints 0; at 20 digits (mpmath 1.4.1, tests/mp_reference.py; its error estimate 5e-5 relative)
+            assert r.p == pytest.approx({(0, 1): 1.26985830911679e-71, (0, 2): 1.59920408851874e-75}[(i, j)], rel=1e-4)
         assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.low[i, j], ci.high[i, j]), rel=REL)
     assert "Tukey HSD" in render(rs[0], "sentence").plain()
 
@@ -203,8 +208,11 @@ def test_studentized_range_quantile_against_r(p, k, df, q, r):
     ptukey drifts by about 1e-3 — the k = 2 test below shows ours is the right one there)."""
     from statsetter.formulas import studentized_range_quantile
 
+    from statsetter.formulas import studentized_range_sf
+
     assert studentized_range_quantile(p, k, df) == pytest.approx(q, rel=1e-9)
     assert r == pytest.approx(p, abs=1e-6)
+    assert 1 - studentized_range_sf(q, k, df)[0] == pytest.approx(r, abs=2e-7)  # R's ptukey at the same q, to R's own accuracy
 
 
 @pytest.mark.parametrize("df", [2, 3, 5, 27, 1000])
@@ -214,3 +222,28 @@ def test_studentized_range_quantile_of_two_means_is_a_t_quantile(p, df):
     from statsetter.formulas import studentized_range_quantile
 
     assert studentized_range_quantile(p, 2, df) == pytest.approx(math.sqrt(2) * stats.t.ppf((1 + p) / 2, df), rel=1e-9)
+
+
+@pytest.mark.parametrize("df", [1, 1.5, 2, 3, 5, 10, 27, 120, 1000, 1e5])
+def test_studentized_range_of_two_means_is_a_t_tail(df):
+    """For two means the studentized range is √2·|t| (definition), so P(Q > q) = 2·P(t > q/√2), scipy's t, to 1e-9
+    relative from p near 1 down to p = 1e-280 — a check of both integrals, their tails included."""
+    from statsetter.formulas import studentized_range_sf
+
+    qs = np.array([0.1, 0.5, 1, 2, 3, 4, 5, 6, 8, 12, 20, 30, 40])
+    exact = 2 * stats.t.sf(qs / math.sqrt(2), df)
+    keep = exact > 1e-280
+    assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-9)
+
+
+@pytest.mark.parametrize("k", [3, 5, 10, 20])
+@pytest.mark.parametrize("df", [2, 5, 27, 120, 1000])
+def test_studentized_range_against_scipy(k, df):
+    """scipy's studentized_range (nested adaptive quadrature, exact to about 1e-11 absolute): the same p where it is
+    above 1e-6 (below that scipy's relative error grows)."""
+    from statsetter.formulas import studentized_range_sf
+
+    qs = np.array([0.5, 1, 2, 3, 4, 5, 6, 8])
+    ref = stats.studentized_range.sf(qs, k, df)
+    keep = ref > 1e-6
+    assert studentized_range_sf(qs[keep], k, df) == pytest.approx(ref[keep], rel=1e-8, abs=1e-11)

@@ -9,7 +9,7 @@ from typing import TYPE_CHECKING, Literal, Mapping
 
 from ..coding import categories, category_text
 from ..errors import InputError
-from ..formulas import studentized_range_quantile
+from ..formulas import studentized_range_quantile, studentized_range_sf
 from ..records import Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 from .effects import d_from_t, hedges_g, variance_explained
@@ -54,7 +54,7 @@ def posthoc(
         first, second = (np.array(ix) for ix in zip(*pairs))
         diffs = means[first] - means[second]
         se = np.sqrt(mse / 2 * (1 / sizes[first] + 1 / sizes[second]))
-        p_values = stats.studentized_range.sf(np.abs(diffs) / se, k, dfe)  # all pairs in one vectorised call
+        p_values = studentized_range_sf(np.abs(diffs) / se, k, dfe)  # all pairs in one vectorised call
         half = float(studentized_range_quantile(level, k, dfe)) * se
         rows = [(i, j, float(d), float(p), float(d - h), float(d + h)) for (i, j), d, p, h in zip(pairs, diffs, p_values, half)]
     elif procedure == "games-howell":
@@ -65,7 +65,7 @@ def posthoc(
             dfw = (va + vb) ** 2 / (va**2 / (len(a) - 1) + vb**2 / (len(b) - 1))
             diff = float(a.mean() - b.mean())
             q = abs(diff) / se * math.sqrt(2)
-            p = float(stats.studentized_range.sf(q, k, dfw))
+            p = float(studentized_range_sf(q, k, dfw)[0])
             half = float(studentized_range_quantile(level, k, dfw)) / math.sqrt(2) * se
             rows.append((i, j, diff, min(p, 1.0), diff - half, diff + half))
     else:
