@@ -58,7 +58,7 @@ elif job == "correlation":
 elif job == "audit":
     from pathlib import Path
     from statsetter.audit.report import audit_file
-    path = Path({out!r}) / f"manuscript-{{size}}-pages.docx"
+    path = Path({out!r}) / f"audit-{{size}}-pages.docx"
     run = lambda: audit_file(path)
 else:
     import bench_docx
@@ -83,30 +83,14 @@ print(json.dumps({{"time": statistics.median(times), "peak": peak, "input": befo
 
 def _manuscript(pages: int) -> None:
     """A generated manuscript of about ``pages`` pages (bench_audit's document at a fraction or multiple of its size)."""
-    path = OUT / f"manuscript-{pages}-pages.docx"
+    path = OUT / f"audit-{pages}-pages.docx"
     if path.exists():
         return
     sys.path[:0] = [str(HERE), str(HERE.parent / "tests")]
-    import docx
-
-    import audit_corpus
     import bench_audit
 
-    share = pages / 1000
-    paragraphs = audit_corpus.build(seed=11, clean_count=round(9506 * share), per_code=max(1, round(26 * share)))
-    d = docx.Document()
-    for i, (text, spans) in enumerate(paragraphs):
-        p = d.add_paragraph()
-        at = 0
-        for s, e in sorted(x for start, end, item in spans for x in audit_corpus.italic_spans(text, start, end)):
-            p.add_run(text[at:s])
-            p.add_run(text[s:e]).italic = True
-            at = e
-        p.add_run(text[at:])
-        if i % 5 < 4:
-            d.add_paragraph(bench_audit.FILLER)
     OUT.mkdir(exist_ok=True)
-    d.save(str(path))
+    bench_audit.document(path, pages / 1000)
 
 
 def measure(job: str, size: int) -> dict[str, float]:
