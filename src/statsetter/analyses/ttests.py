@@ -106,7 +106,8 @@ def t_independent(
     y = c.numeric(data, outcome)
     levels = c.two_levels(data, group, groups, "t test (or an ANOVA for more)")
     g = data[group]
-    a, b = (y[g == lev].to_numpy() for lev in levels)
+    by_level = dict(zip(*c.split_by(y, g)))  # the group column encoded once
+    a, b = (by_level[lev] if lev in by_level else y[g == lev].to_numpy() for lev in levels)
     for lev, v in zip(levels, (a, b)):
         if len(v) < 2:
             raise InputError(f"{group} = {category_text(lev)}: n = {len(v)}; each group needs at least 2 values")
