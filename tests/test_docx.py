@@ -75,14 +75,47 @@ def test_table_rules_are_horizontal_only(written):
             for el in borders.findall(f"{W}{edge}"):
                 assert el.get(qn("w:val")) == "nil"
     rows = tbl.findall(f"{W}tr")
-    def ruled(row, edge):
-        return [c.find(f"{W}tcPr/{W}tcBorders/{W}{edge}").get(qn("w:val")) == "single" for c in row.findall(f"{W}tc")]
+    def ruled(row, edge):  # a cell without borders of its own has the table's: none
+        found = [c.find(f"{W}tcPr/{W}tcBorders/{W}{edge}") for c in row.findall(f"{W}tc")]
+        return [el is not None and el.get(qn("w:val")) == "single" for el in found]
     assert all(ruled(rows[0], "top"))  # above the column heads
     assert all(ruled(rows[1], "bottom"))  # below the column heads
     assert all(ruled(rows[-1], "bottom"))  # at the bottom
     assert ruled(rows[0], "bottom")[1:] == [True, True]  # under each spanner (merged cells)
     assert not any(ruled(rows[-1], "top")) or len(rows) == 3
     assert xml.count("<w:tblHeader/>") == 2 and xml.count("<w:cantSplit/>") == len(rows)
+
+
+def test_table_cells_take_one_paragraph_style(written, tmp_path):
+    # one style for table text instead of the same direct formatting on every cell (practice: Word's own table
+    # styles work so): based on the text's default style, single-spaced with no space around and no first-line
+    # indent whatever Normal says (the manuscript page's Normal is double-spaced and indented), kept with the next
+    from statsetter.export.docx_writer import add_table, add_table_text_style
+
+    path, _ = written
+    doc = docx.Document(str(path))
+    style = doc.styles.element.get_by_id("StatsetterTableText")
+    assert style is not None and style.find(f"{W}basedOn").get(qn("w:val")) == "Normal"
+    spacing = style.find(f"{W}pPr/{W}spacing")
+    assert (spacing.get(qn("w:line")), spacing.get(qn("w:before")), spacing.get(qn("w:after"))) == ("240", "0", "0")
+    assert style.find(f"{W}pPr/{W}ind").get(qn("w:firstLine")) == "0" and style.find(f"{W}pPr/{W}keepNext") is not None
+    cells = list(doc.tables[0]._tbl.iter(f"{W}tc"))
+    assert cells and all(p.find(f"{W}pPr/{W}pStyle").get(qn("w:val")) == "StatsetterTableText" for c in cells for p in c.iter(f"{W}p"))
+
+    # a house style's table line spacing gets a style of its own; a style already in the document (edited by its
+    # author, say) is kept as it is and not added twice
+    house = tmp_path / "double.toml"
+    house.write_text('name = "double"\nextends = "apa7"\n[manuscript]\ntable_line_spacing = 2.0\n', encoding="utf-8")
+    doc = docx.Document()
+    add_table(doc, model(), str(house))
+    add_table(doc, model(), str(house))
+    ids = [s.get(qn("w:styleId")) for s in doc.styles.element.findall(f"{W}style")]
+    assert ids.count("StatsetterTableText480") == 1 and "StatsetterTableText" not in ids
+    assert doc.styles.element.get_by_id("StatsetterTableText480").find(f"{W}pPr/{W}spacing").get(qn("w:line")) == "480"
+    edited = doc.styles.element.get_by_id("StatsetterTableText480")
+    edited.find(f"{W}pPr/{W}spacing").set(qn("w:line"), "360")
+    assert add_table_text_style(doc, 480) == "StatsetterTableText480"
+    assert doc.styles.element.get_by_id("StatsetterTableText480").find(f"{W}pPr/{W}spacing").get(qn("w:line")) == "360"
 
 
 def test_table_number_title_and_note(written):

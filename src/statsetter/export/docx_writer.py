@@ -88,6 +88,9 @@ _NIL_XML = '<w:{0} w:val="nil"/>'
 
 @functools.lru_cache(maxsize=None)
 def _borders(top: bool, bottom: bool) -> str:
+    """A ruled cell's borders; a cell without a rule has none of its own (the table's borders are all nil)."""
+    if not (top or bottom):
+        return ""
     return (
         "<w:tcBorders>"
         + (_RULE_XML if top else _NIL_XML).format("top")
@@ -96,6 +99,39 @@ def _borders(top: bool, bottom: bool) -> str:
         + _NIL_XML.format("right")
         + "</w:tcBorders>"
     )
+
+
+TABLE_TEXT = "StatsetterTableText"  # the style id of table cells' paragraphs
+
+
+def table_style_id(line: int) -> str:
+    return TABLE_TEXT if line == 240 else f"{TABLE_TEXT}{line}"
+
+
+def add_table_text_style(document: "Document", line: int = 240) -> str:
+    """The paragraph style of table cells, added to ``document`` once: based
+    on its default paragraph style (so the font is the text's), spaced
+    ``line`` (240 = single) with no space before or after and no first-line
+    indent whatever that style says, each paragraph kept with the next (a
+    table and its note are not parted by a page break). One style instead
+    of the same properties on every cell: smaller files, and an editor can
+    change a manuscript's table text in one place. A style of that id already
+    in the document (a chapter filled twice, or edited) is kept as it is."""
+    from docx.oxml import parse_xml
+
+    style_id = table_style_id(line)
+    styles = document.styles.element
+    if styles.get_by_id(style_id) is not None:
+        return style_id
+    default = next((st.get(f"{{{_WNS}}}styleId") for st in styles.findall(f"{{{_WNS}}}style")
+                    if st.get(f"{{{_WNS}}}type") == "paragraph" and st.get(f"{{{_WNS}}}default") in ("1", "true", "on")), None)
+    name = "Table text (statsetter)" if line == 240 else f"Table text, line {line / 240:g} (statsetter)"
+    based = f'<w:basedOn w:val="{_escape(default, {chr(34): "&quot;"})}"/>' if default else ""
+    styles.append(parse_xml(
+        f'<w:style xmlns:w="{_WNS}" w:type="paragraph" w:customStyle="1" w:styleId="{style_id}"><w:name w:val="{name}"/>{based}'
+        f'<w:pPr><w:keepNext/><w:spacing w:before="0" w:after="0" w:line="{line}" w:lineRule="auto"/>'
+        '<w:ind w:left="0" w:firstLine="0"/></w:pPr></w:style>'))
+    return style_id
 
 
 _JC = {"left": "left", "right": "right"}
@@ -211,20 +247,21 @@ def _cell_open(align: str, top: bool, bottom: bool, span: int, decimal_at: int, 
     grid = f'<w:gridSpan w:val="{span}"/>' if span > 1 else ""
     if width:
         grid = f'<w:tcW w:w="{width}" w:type="dxa"/>' + grid
-    # every row keeps with the next, the last with the note: a table and its note are not parted by a page break
-    return f"<w:tc><w:tcPr>{grid}{_borders(top, bottom)}</w:tcPr><w:p><w:pPr><w:keepNext/>{_ppr(align, decimal_at, hang, line)}</w:pPr>"
+    props = grid + _borders(top, bottom)
+    return f"<w:tc>{f'<w:tcPr>{props}</w:tcPr>' if props else ''}<w:p><w:pPr>{_ppr(align, decimal_at, hang, line)}</w:pPr>"
 
 
 @functools.lru_cache(maxsize=1024)
 def _ppr(align: str, decimal_at: int, hang: bool, line: int) -> str:
-    """A cell paragraph's properties (few distinct ones per table, so built once each)."""
-    spacing = f'<w:spacing w:before="0" w:after="0" w:line="{line}" w:lineRule="auto"/>'
-    indent = f'<w:ind w:left="{_HANG}" w:hanging="{_HANG}"/>' if hang else '<w:ind w:left="0" w:firstLine="0"/>'
+    """A cell paragraph's properties (few distinct ones per table, so built once each): the table text style
+    (``add_table_text_style``: spacing, no first-line indent, kept with the next), then what differs by cell."""
+    style = f'<w:pStyle w:val="{table_style_id(line)}"/>'
+    indent = f'<w:ind w:left="{_HANG}" w:hanging="{_HANG}"/>' if hang else ""
     if align == "decimal" and decimal_at:
         # a decimal tab stop: in a table cell Word and LibreOffice align the text on it with no tab character
         # (a leading tab would jump past it); APA 7 §7.13 allows decimal alignment (memory)
-        return _DECIMAL_TAB.format(pos=decimal_at) + spacing + indent + '<w:jc w:val="left"/>'
-    return spacing + indent + f'<w:jc w:val="{_JC.get(align, "center")}"/>'
+        return style + _DECIMAL_TAB.format(pos=decimal_at) + indent + '<w:jc w:val="left"/>'
+    return style + indent + f'<w:jc w:val="{_JC.get(align, "center")}"/>'
 
 
 def _split_plain(text: str, mark: str) -> tuple[str, str]:
@@ -408,16 +445,23 @@ def caption_xml(name: str, number: int | None, title: StyledText, one_line: bool
 
 def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH, *, declare: bool = True) -> "list[str | bytes]":
     """A table as Word XML elements in order: the number (bold) and title
-    (italic, title case) paragraphs (str), kept with the table; the w:tbl
+    (italic, title case) paragraphs (str), kept with the table; the w:tbl,
+    whose cells take the table text style (``add_table_text_style`` puts it
+    into the document that receives the table)
     (UTF-8 bytes; with ``declare`` False, without its namespace declaration,
     to be written into a part); one paragraph per note part (general,
     specific, probability)."""
     out: "list[str | bytes]" = list(caption_xml("Table", table.number, title_case(table.title) if table.title else StyledText(),
                                                 style.tables.get("caption") == "one_line"))
-    line = round(240 * style.manuscript.get("table_line_spacing", 1.0))
-    out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=line, declare=declare))
+    out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=table_line(style),
+                          declare=declare))
     out += [_paragraph_xml(part) for part in table.note_parts()]
     return out
+
+
+def table_line(style: "Style") -> int:
+    """The line spacing of table cells in twentieths of a point per line (240 = single), from the style."""
+    return round(240 * style.manuscript.get("table_line_spacing", 1.0))
 
 
 def text_width_of(document: "Document") -> int:
@@ -436,8 +480,10 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
 
     from ..style.profile import load_style
 
+    resolved = load_style(style)
+    add_table_text_style(document, table_line(resolved))
     anchor = document.add_paragraph()  # the parts go before it
-    for xml in table_parts(table, load_style(style), text_width_of(document), declare=False):
+    for xml in table_parts(table, resolved, text_width_of(document), declare=False):
         if isinstance(xml, bytes):
             _place_table(document, anchor, xml)
         else:

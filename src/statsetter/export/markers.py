@@ -270,7 +270,7 @@ def fill_chapter(
         by_id[r.id] = r
     from ..rendering.compose import analysis_of, subject
     from ..rendering.layout import table as lay_out
-    from .docx_writer import table_parts, text_width_of
+    from .docx_writer import add_table_text_style, table_line, table_parts, text_width_of
 
     by_analysis: dict[str, list["Record"]] = {}
     for r in records:
@@ -304,6 +304,8 @@ def fill_chapter(
             made = _figure_parts(document, f.with_number(numbers[("figure", key)]), resolved, width, figure_root) if f is not None else None
         elif form == "whole":
             t = whole(key)
+            if t is not None:
+                add_table_text_style(document, table_line(resolved))
             made = table_parts(t.with_number(numbers[("whole", key)]), resolved, width) if t is not None else None
         elif key in by_id:
             r = by_id[key]
@@ -312,6 +314,7 @@ def fill_chapter(
 
                 title = subject(r)
                 t = results_table([r], resolved, title=title[:1].upper() + title[1:]).with_number(numbers[("table", key)])
+                add_table_text_style(document, table_line(resolved))
                 made = table_parts(t, resolved, width)
             else:
                 made = render(r, form, resolved)
