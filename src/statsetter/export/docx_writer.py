@@ -17,7 +17,7 @@ from xml.sax.saxutils import escape as _escape
 from typing import TYPE_CHECKING, Iterable, Sequence
 
 from ..styled import StyledText
-from ..rendering.tables import _DASHES, DIGITS_AS_ZERO, TableModel, blank_or_dash, split_decimal, title_case
+from ..rendering.tables import _DASHES, DIGITS_AS_ZERO, TableModel, _number_shape, _shape_kind, blank_or_dash, split_decimal, title_case
 
 if TYPE_CHECKING:
     from docx.document import Document
@@ -298,12 +298,25 @@ def _measure_shape(shape: str, mark: str) -> tuple[int, int, int, int]:
     return _chars(shown), _longest_word(shown), _chars(a), _chars(b)
 
 
+def _decimal_columns(table: TableModel, shapes: "list[tuple[set[str], list[StyledText]]]", mark: str) -> list[bool]:
+    """``TableModel.decimal_columns`` decided from each column's distinct shapes (the same answer, each shape once)."""
+    out = []
+    for col, (distinct, styled) in zip(table.columns, shapes):
+        if col.align in ("left", "right"):
+            out.append(False)
+            continue
+        kinds = {_shape_kind(shape) for shape in distinct} | {_number_shape(c, mark) for c in styled}
+        out.append("text" not in kinds and "number" in kinds)
+    return out
+
+
 def _decimal_tabs(table: TableModel, widths: list[int], mark: str, shapes: "list[tuple[set[str], list[StyledText]]] | None" = None) -> list[int]:
     """Per column, the decimal tab stop (twips from the cell's text start)
     that centres the column's numbers aligned on ``mark``; 0 for a column
     that is not aligned so."""
     tabs = []
-    for j, (aligned, (distinct, styled)) in enumerate(zip(table.decimal_columns(mark), shapes if shapes is not None else _body_shapes(table))):
+    shapes = shapes if shapes is not None else _body_shapes(table)
+    for j, (aligned, (distinct, styled)) in enumerate(zip(_decimal_columns(table, shapes, mark), shapes)):
         if not aligned:
             tabs.append(0)
             continue
@@ -367,15 +380,21 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     last = len(table.rows) - 1
     # body cells whose text needs no escaping or cleaning (checked once over all of them) are written as they are
     plain_safe = not _NEEDS_CARE.search("\n".join(c.text for r in table.rows for c in r.cells))
+    # each column's cell openings, made once: (a number on its decimal tab, a dash or blank centred) × (last row or not)
+    openings = [[(_cell_open("decimal" if tab else col.align, False, bottom, 1, tab, 0, False, line),
+                  _cell_open(col.align, False, bottom, 1, tab, 0, False, line)) for col, tab in zip(table.columns, tabs)]
+                for bottom in (False, True)]
+    run_open, run_close = '<w:r><w:t xml:space="preserve">', "</w:t></w:r>" + _CELL_CLOSE
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
         cells = [_cell_xml(stub, "left", False, bottom, hang=True, line=line)]
         if row.cells:
-            cells += [_cell_open("decimal" if tab and not blank_or_dash(c) else col.align, False, bottom, 1, tab, 0, False, line)
-                      + (_run_xml(c) if c.spans or not plain_safe else f'<w:r><w:t xml:space="preserve">{c.text}</w:t></w:r>' if c.text else "")
-                      + _CELL_CLOSE for c, col, tab in zip(row.cells, table.columns, tabs)]
+            opened = openings[bottom]
+            cells += [(opening[1] if c.text.strip() in _DASHES else opening[0])
+                      + (_run_xml(c) + _CELL_CLOSE if c.spans or not plain_safe else run_open + c.text + run_close if c.text else _CELL_CLOSE)
+                      for c, opening in zip(row.cells, opened)]
         else:
             cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), line=line))
         out.write(f"<w:tr>{body}{''.join(cells)}</w:tr>".encode())
