@@ -232,9 +232,9 @@ def _column_widths(table: TableModel, text_width: int, shapes: "list[tuple[set[s
 
 def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1, decimal_at: int = 0, width: int = 0,
               hang: bool = False, line: int = 240) -> str:
-    """One cell: its width, borders, and a paragraph spaced ``line`` (240 =
-    single) with no first-line indent whatever the document's Normal style
-    says; a decimal tab stop at ``decimal_at`` aligns a number on its mark."""
+    """One cell: its width, its rules, and a paragraph in the table text style
+    for ``line`` (240 = single; ``add_table_text_style``); a decimal tab stop
+    at ``decimal_at`` aligns a number on its mark."""
     return _cell_open(align, top, bottom, span, decimal_at, width, hang, line) + _run_xml(text) + _CELL_CLOSE
 
 
@@ -284,7 +284,8 @@ def _body_shapes(table: TableModel) -> list[tuple[set[str], list[StyledText]]]:
     for k in range(len(table.columns)):
         cells = [r.cells[k] for r in table.rows if k < len(r.cells)]
         styled = [c for c in cells if c.spans]
-        out.append(({c.text.translate(_SHAPE) for c in cells if not c.spans} if styled else {c.text.translate(_SHAPE) for c in cells}, styled))
+        plain = [c for c in cells if not c.spans] if styled else cells
+        out.append(({c.text.translate(_SHAPE) for c in plain}, styled))
     return out
 
 
