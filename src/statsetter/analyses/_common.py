@@ -21,10 +21,12 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
         raise InputError(f"{name}: not numeric (dtype {s.dtype}); a numeric outcome is required")
     if s.notna().sum() == 0:
         raise InputError(f"{name}: every value is missing")
+    import numpy as np
+
     x = s.astype(float)
-    infinite = x.abs() == float("inf")
+    infinite = np.isinf(x.to_numpy())
     if infinite.any():
-        first = int(infinite.to_numpy().argmax()) + 1
+        first = int(infinite.argmax()) + 1
         raise InputError(f"{name}: {int(infinite.sum())} infinite value(s) (first in row {first}); set them missing or correct them")
     return x
 
@@ -158,10 +160,10 @@ def grouped(df: "pd.DataFrame", outcome: str, group: str, test: str, min_n: int 
     return levels, samples, missing
 
 
-def two_levels(data: "pd.DataFrame", group: str, groups: Sequence[object] | None, test: str) -> list[Any]:
+def two_levels(data: "pd.DataFrame", group: str, groups: Sequence[object] | None, test: str, present: "list[Any] | None" = None) -> list[Any]:
     """The two groups to compare: the ones named (by label or code), else the
-    only two present, in code order."""
-    present = categories(data[group])
+    only two present, in code order (``present``: the groups found already)."""
+    present = categories(data[group]) if present is None else present
     if groups is not None:
         if len(groups) != 2:
             raise InputError(f"groups: name exactly two levels of {group}, got {len(groups)}")

@@ -104,9 +104,10 @@ def t_independent(
         raise InputError(f"variant: {variant!r} is not welch or student")
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
-    levels = c.two_levels(data, group, groups, "t test (or an ANOVA for more)")
     g = data[group]
-    by_level = dict(zip(*c.split_by(y, g)))  # the group column encoded once
+    found, samples = c.split_by(y, g)  # the group column encoded once: its groups in code order and their values
+    levels = c.two_levels(data, group, groups, "t test (or an ANOVA for more)", present=found)
+    by_level = dict(zip(found, samples))
     a, b = (by_level[lev] if lev in by_level else y[g == lev].to_numpy() for lev in levels)
     for lev, v in zip(levels, (a, b)):
         if len(v) < 2:
