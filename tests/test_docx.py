@@ -112,6 +112,12 @@ def test_table_cells_take_one_paragraph_style(written, tmp_path):
     ids = [s.get(qn("w:styleId")) for s in doc.styles.element.findall(f"{W}style")]
     assert ids.count("StatsetterTableText480") == 1 and "StatsetterTableText" not in ids
     assert doc.styles.element.get_by_id("StatsetterTableText480").find(f"{W}pPr/{W}spacing").get(qn("w:line")) == "480"
+    # LibreOffice writes its Normal style without marking it default: the table text is still based on it
+    libre = docx.Document()
+    for st in libre.styles.element.findall(f"{W}style"):
+        st.attrib.pop(qn("w:default"), None)
+    add_table_text_style(libre, 240)
+    assert libre.styles.element.get_by_id("StatsetterTableText").find(f"{W}basedOn").get(qn("w:val")) == "Normal"
     edited = doc.styles.element.get_by_id("StatsetterTableText480")
     edited.find(f"{W}pPr/{W}spacing").set(qn("w:line"), "360")
     assert add_table_text_style(doc, 480) == "StatsetterTableText480"

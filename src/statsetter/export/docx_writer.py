@@ -125,6 +125,8 @@ def add_table_text_style(document: "Document", line: int = 240) -> str:
         return style_id
     default = next((st.get(f"{{{_WNS}}}styleId") for st in styles.findall(f"{{{_WNS}}}style")
                     if st.get(f"{{{_WNS}}}type") == "paragraph" and st.get(f"{{{_WNS}}}default") in ("1", "true", "on")), None)
+    if default is None and styles.get_by_id("Normal") is not None:  # LibreOffice writes Normal without marking it default
+        default = "Normal"
     name = "Table text (statsetter)" if line == 240 else f"Table text, line {line / 240:g} (statsetter)"
     based = f'<w:basedOn w:val="{_escape(default, {chr(34): "&quot;"})}"/>' if default else ""
     styles.append(parse_xml(
