@@ -108,7 +108,7 @@ def t_independent(
     found, samples = c.split_by(y, g)  # the group column encoded once: its groups in code order and their values
     levels = c.two_levels(data, group, groups, "t test (or an ANOVA for more)", present=found)
     by_level = dict(zip(found, samples))
-    a, b = (by_level[lev] if lev in by_level else y[g == lev].to_numpy() for lev in levels)
+    a, b = (by_level[lev] for lev in levels)  # two_levels picks from the groups found
     for lev, v in zip(levels, (a, b)):
         if len(v) < 2:
             raise InputError(f"{group} = {category_text(lev)}: n = {len(v)}; each group needs at least 2 values")

@@ -293,6 +293,11 @@ def fill_chapter(
     def lookup(key: str, form: str):  # type: ignore[no-untyped-def]
         if (key, form) in cache:
             return cache[(key, form)]
+        def placed(t: "TableModel") -> list:  # type: ignore[type-arg]
+            """A table's Word parts, its cells' paragraph style put into the chapter first."""
+            add_table_text_style(document, table_line(resolved))
+            return table_parts(t, resolved, width)
+
         made: Any = None
         if form == "ref":
             number = numbers.get(("whole", key)) or numbers.get(("table", key))
@@ -304,9 +309,7 @@ def fill_chapter(
             made = _figure_parts(document, f.with_number(numbers[("figure", key)]), resolved, width, figure_root) if f is not None else None
         elif form == "whole":
             t = whole(key)
-            if t is not None:
-                add_table_text_style(document, table_line(resolved))
-            made = table_parts(t.with_number(numbers[("whole", key)]), resolved, width) if t is not None else None
+            made = placed(t.with_number(numbers[("whole", key)])) if t is not None else None
         elif key in by_id:
             r = by_id[key]
             if form == "table":
@@ -314,8 +317,7 @@ def fill_chapter(
 
                 title = subject(r)
                 t = results_table([r], resolved, title=title[:1].upper() + title[1:]).with_number(numbers[("table", key)])
-                add_table_text_style(document, table_line(resolved))
-                made = table_parts(t, resolved, width)
+                made = placed(t)
             else:
                 made = render(r, form, resolved)
         cache[(key, form)] = made
