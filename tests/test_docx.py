@@ -199,6 +199,46 @@ def test_large_table_is_written_in_place(tmp_path):
     assert b"statsetter-table" not in zipfile.ZipFile(tmp_path / "again.docx").read("word/document.xml")
 
 
+def test_every_kind_of_row_is_written_alike(tmp_path):
+    # rows of plain numbers are written from one list of pieces (the fast way); rows with a dash, a blank, an italic
+    # cell, fewer cells or a padded text are written cell by cell: every cell must come out the same either way, and
+    # text starting or ending with white space keeps it (xml:space="preserve", which is left off elsewhere)
+    from lxml import etree
+
+    from statsetter.rendering.tables import Column, Row, TableModel, styled
+
+    bodies = [("1.25", "0.50"), ("—", "0.40"), ("", "0.30"), ("<i>x</i>", "0.20"), (), (" 7.00", "8.00 "), ("3.10", "0.10")]
+    rows = tuple(Row(styled(f"row {i}"), tuple(styled(x) for x in b), indent=i % 2, heading=not b) for i, b in enumerate(bodies))
+    t = TableModel(title=styled("Mixed"), columns=(Column(styled("A")), Column(styled("B"))), rows=rows, stub_head=styled("Row"))
+    for padded in (True, False):
+        table = t if padded else TableModel(title=t.title, columns=t.columns, rows=rows[:5] + rows[6:], stub_head=t.stub_head)
+        path = save_document(results_document([], tables=[table]), tmp_path / f"mixed{padded}.docx")
+        tbl = docx.Document(str(path)).tables[0]
+        got = [[c.text for c in r.cells] for r in tbl.rows][1:]
+        want = [["\u2003" * r.indent + r.stub.text] + ([c.text for c in r.cells] or [""]) for r in table.rows]
+        assert [g[: len(w)] for g, w in zip(got, want)] == want
+        xml = zipfile.ZipFile(path).read("word/document.xml").decode()
+        texts = re.findall(r"<w:t( xml:space=\"preserve\")?>([^<]*)</w:t>", xml)
+        assert all(kept for kept, text in texts if text[:1].isspace() or text[-1:].isspace())  # white space kept where it matters
+        assert any(not kept for kept, _ in texts)  # and left off where it does not
+        number_props: dict[int, set[bytes]] = {}  # per column, the paragraph properties of its number cells
+        for r, row in zip(tbl._tbl.findall(f"{W}tr")[1:], table.rows):
+            cells = r.findall(f"{W}tc")
+            props = [c.find(f"{W}p/{W}pPr") for c in cells]
+            assert props[0].find(f"{W}jc").get(qn("w:val")) == "left"
+            assert all(p.find(f"{W}pStyle").get(qn("w:val")) == "StatsetterTableText" for p in props)
+            for k, (cell, p) in enumerate(zip(row.cells, props[1:])):
+                if cell.text.strip() in ("", "—"):
+                    assert p.find(f"{W}jc").get(qn("w:val")) == "center"  # a dash or blank centred
+                elif not cell.spans:
+                    number_props.setdefault(k, set()).add(etree.tostring(p))
+            last = row is table.rows[-1]
+            assert all((c.find(f"{W}tcPr/{W}tcBorders/{W}bottom") is not None) == last for c in cells)
+        assert all(len(v) == 1 for v in number_props.values()) and len(number_props) == 2  # the same for every number
+        rendered = pdf_text(path)
+        assert "3.10" in rendered and "1.25" in rendered and ("7.00" in rendered) == padded
+
+
 def test_decimal_alignment_when_the_style_asks(tmp_path):
     # APA 7 §7.13 (memory): numbers may be centred or aligned on the decimal point
     house = tmp_path / "decimal.toml"

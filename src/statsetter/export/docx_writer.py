@@ -14,7 +14,7 @@ import functools
 import io
 import re
 from xml.sax.saxutils import escape as _escape
-from typing import TYPE_CHECKING, Iterable, Sequence
+from typing import TYPE_CHECKING, Iterable, NamedTuple, Sequence
 
 from ..styled import StyledText
 from ..rendering.tables import _DASHES, DIGITS_AS_ZERO, TableModel, _number_shape, _shape_kind, blank_or_dash, split_decimal, title_case
@@ -65,9 +65,19 @@ def style_run(run: "Run", styles: frozenset[str]) -> None:
         run.font.subscript = True
 
 
+def _t_open(text: str) -> str:
+    """A w:t's opening tag: ``xml:space="preserve"`` only where the text starts or ends with white space (any
+    Unicode white space, to be safe), which Word would otherwise drop (memory); most cells are numbers, and
+    the XML is smaller without it."""
+    return '<w:t xml:space="preserve">' if text and (text[0].isspace() or text[-1].isspace()) else "<w:t>"
+
+
+_LINE_EDGE_SPACE = re.compile(r"\n(?:(?<=[^\S\n]\n)|[^\S\n])")  # a line break after or before white space (literal first)
+
+
 def _run_xml(text: StyledText) -> str:
     if not text.spans:  # plain text, the common case in a table's body: one run
-        return f'<w:r><w:t xml:space="preserve">{_escape(xml_safe(text.text))}</w:t></w:r>' if text.text else ""
+        return f'<w:r>{_t_open(text.text)}{_escape(xml_safe(text.text))}</w:t></w:r>' if text.text else ""
     out = []
     for chunk, styles in text.segments():
         props = ""
@@ -78,7 +88,7 @@ def _run_xml(text: StyledText) -> str:
             elif "sub" in styles:
                 props += '<w:vertAlign w:val="subscript"/>'
             props += "</w:rPr>"
-        out.append(f'<w:r>{props}<w:t xml:space="preserve">{_escape(xml_safe(chunk))}</w:t></w:r>')
+        out.append(f'<w:r>{props}{_t_open(chunk)}{_escape(xml_safe(chunk))}</w:t></w:r>')
     return "".join(out)
 
 
@@ -189,7 +199,7 @@ def _chars(text: str) -> int:
     return int(sum(map(_ADVANCE.__getitem__, text), 0.0) * _EM * 1.1)
 
 
-def _column_widths(table: TableModel, text_width: int, shapes: "list[tuple[set[str], list[StyledText]]] | None" = None) -> list[int]:
+def _column_widths(table: TableModel, text_width: int, shapes: "list[_Column] | None" = None) -> list[int]:
     """Each column's width: wide enough for its longest word (stub labels and
     heads wrap between words, never inside one), as wide as its widest
     content where the text width allows, and never wider in sum than the
@@ -211,7 +221,7 @@ def _column_widths(table: TableModel, text_width: int, shapes: "list[tuple[set[s
             whole = word if i == 0 and j > 0 else _chars(text)
             if whole > natural[j]:
                 natural[j] = whole
-    for j, (distinct, styled) in enumerate(shapes if shapes is not None else _body_shapes(table), 1):  # the body: each shape measured once
+    for j, (distinct, styled, *_) in enumerate(shapes if shapes is not None else _body_shapes(table), 1):  # the body: each shape measured once
         for whole, word in [_measure_shape(shape, "")[:2] for shape in distinct] + [(_chars(c.plain()), _longest_word(c.plain())) for c in styled]:
             if word > longest[j]:
                 longest[j] = word
@@ -279,15 +289,30 @@ def _split_plain(text: str, mark: str) -> tuple[str, str]:
 _SHAPE = DIGITS_AS_ZERO  # every digit is half an em wide: a cell's width depends on its shape only
 
 
-def _body_shapes(table: TableModel) -> list[tuple[set[str], list[StyledText]]]:
-    """Per column, the distinct shapes of its plain body cells (digits as 0s:
-    a column of thousands of numbers has a handful) and its styled cells."""
-    out: list[tuple[set[str], list[StyledText]]] = []
+class _Column(NamedTuple):
+    """What a column's body cells are, found in one pass over them (``_body_shapes``)."""
+
+    shapes: set[str]  # the distinct shapes of its plain cells (digits as 0s: a column of thousands of numbers has a handful)
+    styled: list[StyledText]  # its cells with italics, superscripts or subscripts
+    safe: bool  # no plain cell needs escaping or cleaning (``_NEEDS_CARE``)
+    padded: bool  # some plain cell may start or end with white space Word would drop (``_t_open``)
+
+
+def _body_shapes(table: TableModel) -> list[_Column]:
+    """Per column, its plain cells' shapes and what they need, and its styled cells."""
+    out: list[_Column] = []
     for k in range(len(table.columns)):
         cells = [r.cells[k] for r in table.rows if k < len(r.cells)]
         styled = [c for c in cells if c.spans]
-        plain = [c for c in cells if not c.spans] if styled else cells
-        out.append(({c.text.translate(_SHAPE) for c in plain}, styled))
+        texts = [c.text for c in cells if not c.spans] if styled else [c.text for c in cells]
+        joined = "\n".join(texts)  # one call for the whole column (a call per cell costs more than the work)
+        if joined.count("\n") == max(len(texts) - 1, 0):  # no cell holds a line break: lines are cells
+            shapes = set(joined.translate(_SHAPE).split("\n")) if texts else set()
+            padded = _LINE_EDGE_SPACE.search(f"\n{joined}\n") is not None
+        else:
+            shapes = {t.translate(_SHAPE) for t in texts}
+            padded = any(_t_open(t) != "<w:t>" for t in texts)
+        out.append(_Column(shapes, styled, _NEEDS_CARE.search(joined) is None, padded))
     return out
 
 
@@ -301,10 +326,10 @@ def _measure_shape(shape: str, mark: str) -> tuple[int, int, int, int]:
     return _chars(shown), _longest_word(shown), _chars(a), _chars(b)
 
 
-def _decimal_columns(table: TableModel, shapes: "list[tuple[set[str], list[StyledText]]]", mark: str) -> list[bool]:
+def _decimal_columns(table: TableModel, shapes: "list[_Column]", mark: str) -> list[bool]:
     """``TableModel.decimal_columns`` decided from each column's distinct shapes (the same answer, each shape once)."""
     out = []
-    for col, (distinct, styled) in zip(table.columns, shapes):
+    for col, (distinct, styled, *_) in zip(table.columns, shapes):
         if col.align in ("left", "right"):
             out.append(False)
             continue
@@ -313,13 +338,13 @@ def _decimal_columns(table: TableModel, shapes: "list[tuple[set[str], list[Style
     return out
 
 
-def _decimal_tabs(table: TableModel, widths: list[int], mark: str, shapes: "list[tuple[set[str], list[StyledText]]] | None" = None) -> list[int]:
+def _decimal_tabs(table: TableModel, widths: list[int], mark: str, shapes: "list[_Column] | None" = None) -> list[int]:
     """Per column, the decimal tab stop (twips from the cell's text start)
     that centres the column's numbers aligned on ``mark``; 0 for a column
     that is not aligned so."""
     tabs = []
     shapes = shapes if shapes is not None else _body_shapes(table)
-    for j, (aligned, (distinct, styled)) in enumerate(zip(_decimal_columns(table, shapes, mark), shapes)):
+    for j, (aligned, (distinct, styled, *_)) in enumerate(zip(_decimal_columns(table, shapes, mark), shapes)):
         if not aligned:
             tabs.append(0)
             continue
@@ -382,25 +407,47 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     tabs = _decimal_tabs(table, widths, mark, shapes) if number_align == "decimal" else [0] * len(table.columns)
     last = len(table.rows) - 1
     # body cells whose text needs no escaping or cleaning (checked once over all of them) are written as they are
-    plain_safe = not _NEEDS_CARE.search("\n".join(c.text for r in table.rows for c in r.cells))
+    plain_safe = all(column.safe for column in shapes)
     # each column's cell openings, made once: (a number on its decimal tab, a dash or blank centred) × (last row or not)
     openings = [[(_cell_open("decimal" if tab else col.align, False, bottom, 1, tab, 0, False, line),
                   _cell_open(col.align, False, bottom, 1, tab, 0, False, line)) for col, tab in zip(table.columns, tabs)]
                 for bottom in (False, True)]
-    run_open, run_close = '<w:r><w:t xml:space="preserve">', "</w:t></w:r>" + _CELL_CLOSE
+    # xml:space="preserve" on every cell's text only when some cell starts or ends with white space (``_t_open``)
+    run_open = '<w:r><w:t xml:space="preserve">' if any(column.padded for column in shapes) else "<w:r><w:t>"
+    run_close = "</w:t></w:r>" + _CELL_CLOSE
+    ncols = len(table.columns)
+    # a row whose cells are all plain text, safe as it is, neither dash nor blank (most rows of a big table) is the same
+    # XML around its texts as every such row: one list of the pieces between the texts (and one for the last row), the
+    # row's stub and texts put into its slots, joined
+    careful = {k for k, column in enumerate(shapes) if column.styled or any(x.strip() in _DASHES for x in column.shapes)}
+    templates = []
+    for opened in openings:
+        pieces = ["<w:tr>" + body, ""]
+        for k, opening in enumerate(opened):
+            pieces += [(run_close if k else "") + opening[0] + run_open, ""]
+        templates.append(pieces + [(run_close if opened else "") + "</w:tr>"])
+    stub_open = [_cell_open("left", False, bottom, 1, 0, 0, True, line) for bottom in (False, True)]
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
+        stub_xml = stub_open[bottom] + _run_xml(stub) + _CELL_CLOSE
+        cells = row.cells
+        if plain_safe and len(cells) == ncols and not any(cells[k].spans or cells[k].text.strip() in _DASHES for k in careful):
+            row_xml = templates[bottom][:]
+            row_xml[1] = stub_xml
+            row_xml[3:-1:2] = [c.text for c in cells]
+            out.write("".join(row_xml).encode())
+            continue
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
-        cells = [_cell_xml(stub, "left", False, bottom, hang=True, line=line)]
-        if row.cells:
+        parts = [stub_xml]
+        if cells:
             opened = openings[bottom]
-            cells += [(opening[1] if c.text.strip() in _DASHES else opening[0])
+            parts += [(opening[1] if c.text.strip() in _DASHES else opening[0])
                       + (_run_xml(c) + _CELL_CLOSE if c.spans or not plain_safe else run_open + c.text + run_close if c.text else _CELL_CLOSE)
-                      for c, opening in zip(row.cells, opened)]
+                      for c, opening in zip(cells, opened)]
         else:
-            cells.append(_cell_xml(StyledText(), "left", False, bottom, len(table.columns), line=line))
-        out.write(f"<w:tr>{body}{''.join(cells)}</w:tr>".encode())
+            parts.append(_cell_xml(StyledText(), "left", False, bottom, ncols, line=line))
+        out.write(f"<w:tr>{body}{''.join(parts)}</w:tr>".encode())
     out.write(b"</w:tbl>")
     return out.getvalue()
 
