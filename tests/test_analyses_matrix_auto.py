@@ -157,3 +157,33 @@ def test_pair_records_made_in_a_batch_equal_validated_ones_and_bad_arrays_are_re
         array[0, 1] = array[1, 0] = value
         with pytest.raises(RecordError, match="pair bill_length_mm~bill_depth_mm"):
             dataclasses.replace(m, **{name: array}).pairs()
+
+
+def test_the_garbage_collector_is_left_as_it_was(penguins, monkeypatch):
+    """Pairs are made with Python's cyclic collector paused (a batch of records holds no cycles): it must run again
+    afterwards, stay off where the caller had turned it off, and run again when making the batch fails."""
+    import gc
+
+    from statsetter import RecordError
+    from statsetter.analyses.matrix import correlation_matrix as raw
+
+    m = raw(penguins, ["bill_length_mm", "bill_depth_mm", "flipper_length_mm"])
+    assert gc.isenabled()
+    assert len(m.pairs()) == 3 and gc.isenabled()
+    gc.disable()
+    try:
+        m.pairs()
+        assert not gc.isenabled()
+    finally:
+        gc.enable()
+    import statsetter.records.summaries as summaries
+
+    def failing(*_):
+        def make(*_):
+            raise RecordError("pair", "made to fail inside the batch")
+        return make
+
+    monkeypatch.setattr(summaries, "_unchecked_maker", failing)
+    with pytest.raises(RecordError, match="made to fail"):
+        m.pairs()
+    assert gc.isenabled()

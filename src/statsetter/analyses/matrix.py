@@ -62,7 +62,9 @@ def correlation_matrix(
         raise InputError(f"{columns[int(np.argmax(miss_count == rows))]}: every value is missing")
     # centre on each column's observed mean; missing cells become 0 and drop out of every sum
     present_mask = ~missing
-    centred = np.zeros_like(X)  # one pass: observed cells minus the column mean, missing cells 0
+    # one pass: observed cells minus the column mean, missing cells 0; in row order (C), whatever the frame's layout,
+    # as the sparse products below read it (in column order they would copy it whole first)
+    centred = np.zeros(X.shape)
     np.subtract(X, X.sum(axis=0, where=present_mask) / (rows - miss_count), out=centred, where=present_mask)
     Sxy = centred.T @ centred
     squares = centred * centred

@@ -13,13 +13,15 @@ source); the renderer never prints more decimals than that.
 
 from __future__ import annotations
 
+import contextlib
+import gc
 import json
 import re
 import math
 from collections import deque
 from dataclasses import dataclass, field, fields, replace
 from types import MappingProxyType
-from typing import Any, Literal, Mapping, TypeVar, get_args
+from typing import Any, Iterator, Literal, Mapping, TypeVar, get_args
 
 from ..errors import RecordError
 
@@ -643,6 +645,22 @@ def _unchecked_maker(cls: type, shared: Mapping[str, Any], varying: tuple[str, .
     body = "".join(f"    set_{n}(obj, fixed_{n})\n" for n in fixed) + "".join(f"    set_{n}(obj, v_{n})\n" for n in varying)
     exec(f"def make({args}):\n    obj = new(cls)\n{body}    return obj\n", scope)  # names are the dataclass's own fields
     return scope["make"]
+
+
+@contextlib.contextmanager
+def _collector_paused() -> Iterator[None]:
+    """Python's cyclic garbage collector paused while a batch of records is
+    made: records hold no reference cycles, and twenty thousand of them kept
+    in a list would otherwise set off collections that walk every object of
+    the process (half the time of making 19,900 correlation pairs). Resumed
+    afterwards if it was running; nothing it would have found is lost."""
+    running = gc.isenabled()
+    gc.disable()
+    try:
+        yield
+    finally:
+        if running:
+            gc.enable()
 
 
 _RESULT_DEFAULTS = tuple((f.name, _default_of(f)) for f in fields(Result))

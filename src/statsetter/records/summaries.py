@@ -16,7 +16,7 @@ from dataclasses import dataclass, field, fields
 from typing import TYPE_CHECKING, Any, Literal, Mapping
 
 from ..errors import RecordError
-from .result import SCHEMA, SCHEMA_VERSION, EffectSize, Interval, Note, Provenance, Result, Statistic, Variable, _from_plain, _to_plain, _unchecked_maker
+from .result import SCHEMA, SCHEMA_VERSION, EffectSize, Interval, Note, Provenance, Result, Statistic, Variable, _collector_paused, _from_plain, _to_plain, _unchecked_maker
 
 if TYPE_CHECKING:
     import numpy as np
@@ -268,9 +268,11 @@ class CorrelationMatrix:
         statistic = _unchecked_maker(Statistic, {"symbol": symbol}, ("value", "df"))
         effect = _unchecked_maker(EffectSize, {"name": symbol, "method": "Fisher z"}, ("value", "ci"))
         interval = _unchecked_maker(Interval, {"level": level}, ("low", "high"))
-        return [make(statistic(rv, (int(nv) - 2,)), pv, int(nv), (effect(rv, interval(lo, hi)),),
-                     (variables[i][0], variables[j][1]), f"{prefix}:{names[i]}~{names[j]}" if prefix else None)
-                for i, j, rv, pv, lo, hi, nv in zip(upper[0].tolist(), upper[1].tolist(), r.tolist(), p.tolist(), low.tolist(), high.tolist(), n.tolist())]
+        with _collector_paused():
+            return [make(statistic(rv, (int(nv) - 2,)), pv, int(nv), (effect(rv, interval(lo, hi)),),
+                         (variables[i][0], variables[j][1]), f"{prefix}:{names[i]}~{names[j]}" if prefix else None)
+                    for i, j, rv, pv, lo, hi, nv in zip(upper[0].tolist(), upper[1].tolist(), r.tolist(), p.tolist(), low.tolist(), high.tolist(),
+                                                        n.tolist())]
 
     def to_dict(self) -> dict[str, Any]:
         out: dict[str, Any] = {"schema": SCHEMA, "version": SCHEMA_VERSION, "kind": self.kind}
