@@ -124,3 +124,8 @@ options(contrasts = c("contr.sum", "contr.poly")); print(drop1(lm(body_mass_g ~ 
 # The 95% CI of each PlantGrowth group's mean (tests/test_figures.py)
 for (g in c("ctrl", "trt1", "trt2")) print(t.test(PlantGrowth$weight[PlantGrowth$group == g])$conf.int)
 for (g in c("ctrl", "trt1", "trt2")) print(quantile(PlantGrowth$weight[PlantGrowth$group == g], c(.25, .5, .75)))
+
+# p values adjusted for multiple comparisons on R's airquality example (tests/test_analyses_posthoc.py)
+pw <- pairwise.t.test(airquality$Ozone, factor(airquality$Month), p.adjust.method = "none")$p.value
+p <- pw[lower.tri(pw, diag = TRUE)]; p <- p[!is.na(p)]
+options(digits = 17); print(p); for (m in c("holm", "bonferroni", "BH")) print(p.adjust(p, m))

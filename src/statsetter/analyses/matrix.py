@@ -116,9 +116,9 @@ def correlation_matrix(
     half = zc / np.sqrt(N - 3)
     low, high = np.tanh(z - half), np.tanh(z + half)
     if adjust:
-        from statsmodels.stats.multitest import multipletests
+        from ..formulas import adjusted_p
 
-        adj = multipletests(p[iu], method=adjust)[1]
+        adj = adjusted_p(p[iu], adjust)
         p = p.copy()
         p[iu] = adj
         p[(iu[1], iu[0])] = adj

@@ -9,7 +9,7 @@ from typing import TYPE_CHECKING, Literal, Mapping
 
 from ..coding import categories, category_text
 from ..errors import InputError
-from ..formulas import studentized_range_quantile, studentized_range_sf
+from ..formulas import adjusted_p, studentized_range_quantile, studentized_range_sf
 from ..records import Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 from .effects import d_from_t, hedges_g, variance_explained
@@ -69,10 +69,8 @@ def posthoc(
             half = float(studentized_range_quantile(level, k, dfw)) / math.sqrt(2) * se
             rows.append((i, j, diff, min(p, 1.0), diff - half, diff + half))
     else:
-        from statsmodels.stats.multitest import multipletests
-
         raw = [stats.ttest_ind(samples[i], samples[j]) for i, j in pairs]
-        adjusted = multipletests([r.pvalue for r in raw], method=procedure)[1]
+        adjusted = adjusted_p([r.pvalue for r in raw], procedure)
         m = len(pairs)
         ci_level = 1 - (1 - level) / m if procedure == "bonferroni" else level
         for (i, j), r, p in zip(pairs, raw, adjusted):

@@ -12,6 +12,7 @@ from typing import TYPE_CHECKING, Literal, Mapping, Sequence
 
 from ..coding import categories, category_text
 from ..errors import InputError
+from ..formulas import adjusted_p
 from ..records import EffectSize, Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 
@@ -438,13 +439,12 @@ def _paired_pairs(Y, groups, variables, adjust: str, level: float, missing: Note
 
     import numpy as np
     from scipy import stats
-    from statsmodels.stats.multitest import multipletests
 
     if adjust not in ("holm", "bonferroni"):
         raise InputError(f"pairwise: {adjust!r} is not holm or bonferroni")
     pairs = list(combinations(range(Y.shape[1]), 2))
     tests = [stats.ttest_rel(Y[:, i], Y[:, j]) for i, j in pairs]
-    adjusted = multipletests([t.pvalue for t in tests], method=adjust)[1]
+    adjusted = adjusted_p([t.pvalue for t in tests], adjust)
     m = len(pairs)
     ci_level = 1 - (1 - level) / m if adjust == "bonferroni" else level
     name = {"holm": "Holm", "bonferroni": "Bonferroni"}[adjust]
