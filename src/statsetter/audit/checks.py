@@ -15,7 +15,9 @@ import math
 from dataclasses import dataclass, replace
 from typing import Sequence
 
+from ..errors import MissingExtra
 from ..formulas import hedges_j
+from ..pvalues import upper_tail
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
@@ -106,8 +108,6 @@ def _p_of(symbol: str, value: float, df: tuple[float, ...]) -> float:
     """Two-sided p for t, z and r; upper tail for F, χ² and H (as χ²), from
     statsetter's own distribution functions (pvalues.py): the audit computes
     two per statistic."""
-    from ..pvalues import upper_tail
-
     if symbol in ("r", "rs"):
         if value >= 1:
             return 0.0
@@ -127,6 +127,9 @@ def p_range(rep: Reported) -> tuple[float, float] | None:
     return found
 
 
+_DF_NEEDED = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1, "Q": 1}  # the df a statistic's p needs
+
+
 def _p_range(rep: Reported) -> tuple[float, float] | None:
     """A statistic given as a bound ("F < 1", common for small F) allows
     every p beyond the bound's."""
@@ -141,7 +144,7 @@ def _p_range(rep: Reported) -> tuple[float, float] | None:
         return (bound[0], 1.0) if rep.op in ("<", "≤") else (0.0, bound[1])
     if rep.op != "=":
         return None
-    need = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1, "Q": 1}.get(rep.symbol)
+    need = _DF_NEEDED.get(rep.symbol)
     if need is None or len(rep.df) != need or any(d.value <= 0 for d in rep.df):
         return None
     df = tuple(d.value for d in rep.df)
@@ -153,8 +156,6 @@ def _p_range(rep: Reported) -> tuple[float, float] | None:
         hi = min(hi, 1.0)
     if rep.symbol in ("F", "chi2", "H", "Q") and rep.value.value < 0:
         return None
-    from ..errors import MissingExtra
-
     try:
         return _p_of(rep.symbol, hi, df), _p_of(rep.symbol, lo, df)
     except MissingExtra:  # never skip the p checks silently

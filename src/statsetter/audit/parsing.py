@@ -190,10 +190,11 @@ class _Patterns:
             r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
         )
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
-        self.df = re.compile(rf"(?<![\w])df\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)")
-        self.coef_b = re.compile(rf"(?<![\w])B\s*+=\s*+(?P<num>{num})")
-        self.coef_se = re.compile(rf"(?<![\w])SE\s*+=\s*+(?P<num>{num})")
-        self.n = re.compile(r"(?<![\w])(?P<sym>[Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
+        self.df = re.compile(rf"d(?<![\w]d)f\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)")
+        # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
+        self.coef_b = re.compile(rf"B(?<![\w]B)\s*+=\s*+(?P<num>{num})")
+        self.coef_se = re.compile(rf"S(?<![\w]S)E\s*+=\s*+(?P<num>{num})")
+        self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
         # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan)
         self.boundary = re.compile(r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
@@ -263,6 +264,11 @@ def _effect_name(text: str) -> str | None:
     return None
 
 
+_DF_DASH = re.compile(r"(?<=\d)\s?[–—-]\s?(?=\d)")
+_DF_PARTS = {sep: re.compile(rf"[^{sep};]+") for sep in ",;"}
+_DF_PART = re.compile(r"\s*(?:df\s*=\s*)?(\d+(?:[.,]\d+)?)\s*")
+
+
 def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], Number | None]:
     """df numbers and N from the text inside the head's parentheses: ``38``,
     ``2, 97``, ``df = 23``, ``2, N = 1,200``. Anything else: no df."""
@@ -273,13 +279,14 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
         n = pat.to_number(found.group("num"), start + found.start("num"))
         rest = inner[: found.start()] + " " * (found.end() - found.start()) + inner[found.end() :]
     sep = ";" if pat.mark == "," else ","
-    rest = re.sub(r"(?<=\d)\s?[–—-]\s?(?=\d)", lambda d: sep.ljust(len(d.group()), " "), rest)  # F(3–51): df by a dash
+    if "–" in rest or "—" in rest or "-" in rest:
+        rest = _DF_DASH.sub(lambda d: sep.ljust(len(d.group()), " "), rest)  # F(3–51): df by a dash
     dfs: list[Number] = []
-    for m in re.finditer(rf"[^{sep};]+", rest):
+    for m in _DF_PARTS[sep].finditer(rest):
         part = m.group()
         if not part.strip():
             continue
-        d = re.fullmatch(r"\s*(?:df\s*=\s*)?(\d+(?:[.,]\d+)?)\s*", part)
+        d = _DF_PART.fullmatch(part)
         if d is None:
             return (), n
         number = pat.to_number(d.group(1), start + m.start() + d.start(1))
@@ -485,8 +492,10 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
 
 def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:
     events: list[tuple[int, str, re.Match[str]]] = []
+    percent = text.find("%", start, end) >= 0  # no interval without its level's percent sign: its search skipped
     for kind, regex in (("p", pat.p), ("ci", pat.ci), ("effect", pat.effect), ("df", pat.df), ("n", pat.n)):
-        events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
+        if kind != "ci" or percent:
+            events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
     events.sort(key=lambda e: e[0])
     covered: list[tuple[int, int]] = []
     last_end = rep.end
