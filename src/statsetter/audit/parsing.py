@@ -15,6 +15,7 @@ The parser never raises on text: anything it cannot read is left alone.
 from __future__ import annotations
 
 import bisect
+import functools
 import re
 from dataclasses import dataclass, field
 from typing import Iterable
@@ -100,6 +101,7 @@ class Reported:
     p_range: tuple[float, ...] | None = None  # filled by the checks (cache)
 
 
+@functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
 def symbol_of(text: str) -> str | None:
     t = text.replace(" ", "")
     low = t.lower()
@@ -257,6 +259,7 @@ def _patterns(mark: str) -> _Patterns:
 _EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _EFFECT_NAMES]
 
 
+@functools.lru_cache(maxsize=4096)  # likewise its effect names: each tried against the patterns once
 def _effect_name(text: str) -> str | None:
     for pattern, name in _EFFECT_FULL:
         if pattern.fullmatch(text):
