@@ -20,6 +20,17 @@ for df in (2e4, 1e5, 1e6, 1e7, 1e9, 1e11):
         F, d1 = mpmath.mpf(3), mpmath.mpf(f1)
         print("F", 3.0, (f1, df), float(mpmath.betainc(nu / 2, d1 / 2, 0, nu / (nu + d1 * F), regularized=True)))
 
+# The moderate-df table (test_moderate_df_against_50_digits): t and F on 1 or 2 df where the expansion is taken
+for df in (31, 40, 97, 240, 1000, 5000):
+    nu = mpmath.mpf(df)
+    for v in (0.35, 1.2, 2.01, 3.3, 5.5):
+        t = mpmath.mpf(v)
+        if float(t * t / (nu + t * t)) < 0.29:
+            print("t", v, (df,), float(mpmath.betainc(nu / 2, mpmath.mpf(1) / 2, 0, nu / (nu + t * t), regularized=True) / 2))
+    for f1 in (1, 2):
+        F, d1 = mpmath.mpf(4.2), mpmath.mpf(f1)
+        print("F", 4.2, (f1, df), float(mpmath.betainc(nu / 2, d1 / 2, 0, nu / (nu + d1 * F), regularized=True)))
+
 # The Tukey p of penguins' bill length, Adelie against Chinstrap and against Gentoo (tests/test_analyses_posthoc.py::
 # test_tukey): the studentized range of 3 means with 339 df beyond q = 32.85523755886251 and q = 34.27698041151575, P = ∫ f(s) T(q·s) ds with s = √(χ²/df) and
 # T(w) = 3 ∫ φ(z) Φ(z − w)(2Φ(z) − Φ(z − w)) dz (the range of three normals; a² − (a − b)² = b(2a − b) keeps the digits),

@@ -9,6 +9,10 @@ Where a t or F has one df of 20,000 or more, x = ν / (ν + t²) lies so near
 1 that a fraction in x loses the digits of y = 1 − x; there DiDonato and
 Morris's asymptotic expansion for large a (TOMS 708's BGRAT) reads ln x from
 y, and F's numerator df above 2 is brought down by exact positive steps.
+The expansion is also taken where TOMS 708 takes it (b ≤ 1 < 15 < a, y <
+0.29: most t tests with more than 30 df, F on 1 or 2 df), with Q(½, z) =
+erfc √z and Q(1, z) = e^(−z) in closed form: a few terms instead of a long
+fraction, and more accurate than the fraction there.
 The normal tail is erfc. No numpy or scipy: `statsetter format` starts as
 fast as the template engine allows, and the base install computes p values.
 tests/test_pvalues.py compares them with scipy.stats over a grid (df up to
@@ -24,6 +28,7 @@ from .errors import InputError
 __all__ = ["p_from_statistic", "p_mismatch", "upper_tail"]
 
 _LN_2PI = math.log(2 * math.pi)
+_SQRT_PI = math.sqrt(math.pi)
 # Stirling's series for ln Γ(z) − [(z − ½) ln z − z + ½ ln 2π]: B₂ₖ / (2k(2k − 1) z^(2k−1))
 _STIRLING = (1 / 12, -1 / 360, 1 / 1260, -1 / 1680, 1 / 1188, -691 / 360360, 1 / 156, -3617 / 122400)
 _LARGE = 10.0  # from here on Stirling's series (8 terms) is exact to below 1e-17
@@ -90,7 +95,13 @@ def _log_gamma_ratio(b: float, a: float) -> float:
 
 
 def _upper_gamma_scaled(a: float, x: float) -> float:
-    """Q(a, x) divided by x^a e^(−x) / Γ(a) (finite where that factor underflows)."""
+    """Q(a, x) divided by x^a e^(−x) / Γ(a) (finite where that factor underflows);
+    in closed form for a = ½ (Q = erfc √x: a t, or an F on 1 df) and a = 1 (Q = e^(−x): an F on 2 df)."""
+    if a == 0.5 and 0 < x < 700:  # erfc keeps its relative accuracy down to its underflow near x = 708
+        root = math.sqrt(x)
+        return math.erfc(root) * math.exp(x) * _SQRT_PI / root
+    if a == 1:
+        return 1 / x
     if x < a + 1:
         prefix = math.exp(_gamma_prefix(a, x))
         return _gamma_upper(a, x) / prefix
@@ -139,6 +150,10 @@ def _large_a(a: float, b: float, y: float) -> float | None:
     return None
 
 
+# TOMS 708 (BRATIO) uses the expansion for b ≤ 1 < 15 < a and y < 0.29: a t with more than 30 df below t² = 0.41 ν, an F on
+# 1 or 2 df likewise. Against 80-digit values (3,000 cases, a from 12 to 15,000, y from 1e-6 to 0.29) it is within 1.5e-14
+# relative for p above 1e-20 (the continued fraction in x: 8.3e-13, its digits of y lost) and 2-5 times as fast.
+_BGRAT_A, _BGRAT_Y = 15.0, 0.29
 _LARGE_DF = 2e4  # from here (a ≥ 10⁴) a t or F with one df this large goes through the expansion
 _MAX_STEPS = 50_000  # F's numerator df / 2 above 1 is brought down by at most this many exact steps (about 1 µs each)
 
@@ -156,6 +171,10 @@ def _ibeta(a: float, b: float, x: float, y: float) -> float:
         found = _large_a(a, b0, y)
         if found is not None:
             return min(1.0, found + math.fsum(math.exp(_beta_prefix(a, b0 + k, x, y)) / (b0 + k) for k in range(steps)))
+    if b <= 1 and a >= _BGRAT_A and y < _BGRAT_Y:  # where TOMS 708 itself takes the expansion: a few terms, not a long fraction
+        found = _large_a(a, b, y)
+        if found is not None:
+            return found
     if x > (a + 1) / (a + b + 2):  # the fraction converges fast on the other side
         return 1 - math.exp(_beta_prefix(b, a, y, x)) * _beta_fraction(b, a, y) / b
     return math.exp(_beta_prefix(a, b, x, y)) * _beta_fraction(a, b, x) / a
