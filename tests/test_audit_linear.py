@@ -57,7 +57,7 @@ def _work(text: str, monkeypatch) -> int:
         if isinstance(value, re.Pattern):
             setattr(pat, name, _Counting(value, tally))
     monkeypatch.setitem(parsing._CACHE, ".", pat)
-    for name in ("_OPERATOR_OR_NS", "_ADJUSTED"):
+    for name in ("_OPERATOR_OR_NS", "_ADJUSTED", "_OPERATOR"):
         if isinstance(getattr(parsing, name, None), re.Pattern):
             monkeypatch.setattr(parsing, name, _Counting(getattr(parsing, name), tally))
     parsing._LAST_INDEX.clear()
@@ -109,3 +109,18 @@ def _slow_again(text: str) -> bool:
     start = time.perf_counter()
     audit_units([Unit("line 1", text, None, "", 1)])
     return time.perf_counter() - start < 0.05
+
+
+_SPACED_OPERATOR = re.compile(r"\s*+(?:=|<|>|≤|≥)\s*+")  # the definition: an operator with the white space on each side
+
+
+@settings(max_examples=5_000, deadline=None, database=None)
+@given(st.text(alphabet="= <>≤≥\t\u00a0\u2009\nab1.,(", max_size=30), st.data())
+def test_operators_are_found_as_their_definition_reads(text, data):
+    """The spacing check's operators are found operator first (the regex engine's fast scan) and the space before each
+    walked back by hand: the same spans as the one-pattern definition on any text and any part of it."""
+    start = data.draw(st.integers(0, len(text)))
+    end = data.draw(st.integers(start, len(text)))
+    assert parsing._operators(parsing._patterns("."), text, start, end) == [
+        (o.start(), o.end()) for o in _SPACED_OPERATOR.finditer(text, start, end)]
+

@@ -201,7 +201,6 @@ class _Patterns:
         # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan)
         self.boundary = re.compile(r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
                                    r"|[ \t\n](?<=\\\\[ \t\n])(?:(?<=\n)|[ \t]*\n)")
-        self.operator = re.compile(r"\s*+(?:=|<|>|≤|≥)\s*+")
 
     def to_number(self, text: str, start: int) -> Number | None:
         raw = text.strip()
@@ -472,8 +471,21 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     return rep
 
 
+_OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
+
+
 def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[int, int]]:
-    return [(o.start(), o.end()) for o in pat.operator.finditer(text, start, end) if o.group().strip()]
+    """(start, end) of each operator between ``start`` and ``end`` with the white space on each side of it (the space
+    before it back to the end of the operator before), as the style's spacing check reads them."""
+    out = []
+    floor = start
+    for o in _OPERATOR.finditer(text, start, end):
+        at = o.start()
+        while at > floor and text[at - 1].isspace():
+            at -= 1
+        floor = o.end()
+        out.append((at, floor))
+    return out
 
 
 _ADJUSTED_WORDS = ("adjusted", "corrected", "holm", "bonferroni", "sidak", "šidák", "fdr", "benjamini")  # a cheap test first
