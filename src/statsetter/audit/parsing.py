@@ -346,6 +346,8 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         at = max(at, e)
     gaps.append((at, len(text)))
     for gap_start, gap_end in gaps:  # p values, effect sizes and descriptives outside any head's clause
+        if _OPERATOR_OR_NS.search(text, gap_start, gap_end) is None:  # none in any of its sentences (most gaps: ", and ")
+            continue
         piece = gap_start
         while piece < gap_end:
             b = pat.boundary.search(text, piece, gap_end)
