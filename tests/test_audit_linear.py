@@ -124,3 +124,27 @@ def test_operators_are_found_as_their_definition_reads(text, data):
     assert parsing._operators(parsing._patterns("."), text, start, end) == [
         (o.start(), o.end()) for o in _SPACED_OPERATOR.finditer(text, start, end)]
 
+
+
+def test_the_audit_leaves_the_garbage_collector_as_it_was(tmp_path):
+    """Reading and checking run with Python's cyclic collector paused (their objects hold no cycles): it runs again
+    afterwards, also when the manuscript is refused, and stays off where the caller had turned it off."""
+    import gc
+
+    from statsetter import InputError
+    from statsetter.audit.report import audit_file
+
+    page = tmp_path / "results.md"
+    page.write_text("The groups differed, t(38) = 2.14, p = .039.\n", encoding="utf-8")
+    assert len(audit_file(page)) == 1 and gc.isenabled()
+    binary = tmp_path / "binary.md"
+    binary.write_bytes(b"PK\x03\x04 not text")
+    with pytest.raises(InputError):
+        audit_file(binary)
+    assert gc.isenabled()
+    gc.disable()
+    try:
+        audit_file(page)
+        assert not gc.isenabled()
+    finally:
+        gc.enable()

@@ -18,6 +18,7 @@ from pathlib import Path
 from typing import Iterator, Sequence
 
 from ..pvalues import p_from_statistic
+from ..records.result import _collector_paused
 from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
@@ -255,6 +256,15 @@ def audit_units(
     Numbers are read with ``decimal_mark`` ("." or ","); "auto" reads them
     as the manuscript types them (`reading_mark`), and a mark other than the
     style's is then a style finding."""
+    with _collector_paused():  # the audit's objects hold no reference cycles; collections over them are wasted work
+        return _audit_units(units, style, alpha=alpha, grim_items=grim_items, suggest_all=suggest_all, check_italics=check_italics,
+                            restyle=restyle, decimal_mark=decimal_mark)
+
+
+def _audit_units(
+    units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None,
+    suggest_all: bool = False, check_italics: bool = False, restyle: bool = False, decimal_mark: str = "auto",
+) -> list[Entry]:
     resolved = load_style(style)
     mark = reading_mark(units, resolved, decimal_mark)[0]
     entries, reps = [], []
