@@ -114,7 +114,7 @@ def main() -> None:
     import docx
 
     folder = Path(tempfile.mkdtemp())
-    results = []
+    results, floors = [], []
     for copies in (1, 2):
         path = folder / f"manuscript-{copies}.docx"
         count = document(path, copies)
@@ -123,10 +123,12 @@ def main() -> None:
         low, again, floor_ratio = paired(lambda: floor(path), lambda: audit_file(path), 3)
         found = len(audit_file(path))
         results.append(ours)
+        floors.append(low)
         print(f"{words / 500:,.0f} pages ({words:,} words), {count:,} statistics ({found:,} found): audit {ours:.2f} s, "
               f"python-docx reading the paragraphs' text {base:.2f} s, ratio {ratio:.2f}; "
               f"lxml + one regex (floor) {low:.2f} s, ratio {floor_ratio:.1f} (target 4)")
-    print(f"doubling the document: {results[1] / results[0]:.2f}x the time (target <= 2.3); 1,000 pages in {results[0]:.2f} s (target <= 10)")
+    print(f"doubling the document: {results[1] / results[0]:.2f}x the time (target <= 2.3; the floor's own doubling {floors[1] / floors[0]:.2f}x); "
+          f"1,000 pages in {results[0]:.2f} s (target <= 10)")
 
 
 if __name__ == "__main__":
