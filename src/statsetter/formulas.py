@@ -2,7 +2,7 @@
 of a standardised difference, the noncentral-F interval of a proportion of
 variance explained, Hedges' exact J, Fisher's z interval of r, the studentized
 range, p values adjusted for multiple comparisons. Plain numbers in, plain
-numbers out; scipy is imported on use.""" 
+numbers out; scipy is imported on use."""
 
 from __future__ import annotations
 

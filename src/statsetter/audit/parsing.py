@@ -515,8 +515,8 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
     events: list[tuple[int, str, re.Match[str]]] = []
     # a search is skipped where the clause lacks what its pattern must contain: an interval its level's percent sign,
     # an effect size and an n their "=", a df written apart its "df"
-    percent, equals, df = (text.find(part, start, end) >= 0 for part in ("%", "=", "df"))
-    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, percent), ("effect", pat.effect, equals), ("df", pat.df, df),
+    percent, equals, df_apart = (text.find(part, start, end) >= 0 for part in ("%", "=", "df"))
+    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, percent), ("effect", pat.effect, equals), ("df", pat.df, df_apart),
                                 ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
