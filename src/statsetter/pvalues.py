@@ -10,9 +10,11 @@ Where a t or F has one df of 20,000 or more, x = ν / (ν + t²) lies so near
 Morris's asymptotic expansion for large a (TOMS 708's BGRAT) reads ln x from
 y, and F's numerator df above 2 is brought down by exact positive steps.
 The expansion is also taken where TOMS 708 takes it (b ≤ 1 < 15 < a, y <
-0.29: most t tests with more than 30 df, F on 1 or 2 df), with Q(½, z) =
-erfc √z and Q(1, z) = e^(−z) in closed form: a few terms instead of a long
-fraction, and more accurate than the fraction there.
+0.29, p not near 1: most t tests with more than 30 df, F on 1 or 2 df), with
+Q(½, z) = erfc √z and Q(1, z) = e^(−z) in closed form: a few terms instead
+of a long fraction, and more accurate than the fraction there. Where p lies
+near 1 (y < 0.1 and (ya)^b ≤ 0.7), at any df, its complement is computed by
+the fraction on the other side, to the last digit.
 The normal tail is erfc. No numpy or scipy: `statsetter format` starts as
 fast as the template engine allows, and the base install computes p values.
 tests/test_pvalues.py compares them with scipy.stats over a grid (df up to
@@ -150,8 +152,8 @@ def _large_a(a: float, b: float, y: float) -> float | None:
     return None
 
 
-# TOMS 708 (BRATIO) uses the expansion for b ≤ 1 < 15 < a and y < 0.29: a t with more than 30 df below t² = 0.41 ν, an F on
-# 1 or 2 df likewise. Against 80-digit values (3,000 cases, a from 12 to 15,000, y from 1e-6 to 0.29) it is within 1.5e-14
+# TOMS 708 (BRATIO) uses the expansion for b ≤ 1 < 15 < a and y < 0.29, except where y < 0.1 and (ya)^b ≤ 0.7 (its power series
+# there): a t with more than 30 df between t² ≈ 1 and 0.41 ν, an F on 1 or 2 df likewise. Against 80-digit values (3,000 cases, a from 12 to 15,000, y from 1e-6 to 0.29) it is within 1.5e-14
 # relative for p above 1e-20 (the continued fraction in x: 8.3e-13, its digits of y lost) and 2-5 times as fast.
 _BGRAT_A, _BGRAT_Y = 15.0, 0.29
 _LARGE_DF = 2e4  # from here (a ≥ 10⁴) a t or F with one df this large goes through the expansion
@@ -164,14 +166,17 @@ def _ibeta(a: float, b: float, x: float, y: float) -> float:
         return 0.0
     if y <= 0:
         return 1.0
-    if a >= _LARGE_DF / 2 and b <= _MAX_STEPS and b < a:
+    near_one = y < 0.1 and y * a <= 1 and (y * a) ** b <= 0.7  # p near 1: its complement, by the fraction on the other side (TOMS: BPSER)
+    if a >= _LARGE_DF / 2 and b <= _MAX_STEPS and b < a and not (b <= 1 and near_one):
         # b brought into (0, 1] by I_x(a, b + 1) = I_x(a, b) + x^a y^b / (b B(a, b)), every step positive
         steps = math.ceil(b) - 1
         b0 = b - steps
         found = _large_a(a, b0, y)
         if found is not None:
             return min(1.0, found + math.fsum(math.exp(_beta_prefix(a, b0 + k, x, y)) / (b0 + k) for k in range(steps)))
-    if b <= 1 and a >= _BGRAT_A and y < _BGRAT_Y:  # where TOMS 708 itself takes the expansion: a few terms, not a long fraction
+    if b <= 1 and a >= _BGRAT_A and y < _BGRAT_Y and not near_one:
+        # where TOMS 708 itself takes the expansion (a few terms, not a long fraction); not for a statistic so small that
+        # the p lies near 1, whose complement the fraction on the other side computes to its last digit
         found = _large_a(a, b, y)
         if found is not None:
             return found
