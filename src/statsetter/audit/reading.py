@@ -48,11 +48,15 @@ class Unit:
 
 
 def read_units(path: "str | Path", encoding: str = "utf-8") -> list[Unit]:
+    with _collector_paused():  # tens of thousands of units, no reference cycles: collections over them are wasted
+        return _read_units(path, encoding)
+
+
+def _read_units(path: "str | Path", encoding: str) -> list[Unit]:
     p = Path(path)
     suffix = p.suffix.lower()
     if suffix == ".docx":
-        with _collector_paused():  # tens of thousands of units, no reference cycles: collections over them are wasted
-            return list(_docx_units(p))
+        return list(_docx_units(p))
     if suffix not in (".md", ".markdown", ".txt", ".text", ".tex"):
         raise InputError(f"{p}: cannot audit {p.suffix or 'a file without extension'}; statsetter reads .docx, .md, .txt and .tex")
     if p.is_file() and p.stat().st_size > MAX_TEXT_BYTES:
@@ -68,8 +72,7 @@ def read_units(path: "str | Path", encoding: str = "utf-8") -> list[Unit]:
         raise InputError(f"{p}: not {encoding} text (byte {exc.start}); give the file's encoding with --encoding") from None
     except LookupError:
         raise InputError(f"--encoding: unknown encoding {encoding!r}") from None
-    with _collector_paused():
-        return list(_text_units(text, suffix))
+    return list(_text_units(text, suffix))
 
 
 _MD_ITALIC = re.compile(r"(?<![*A-Za-z0-9])([*_])(?!\s)([^*_\n]{1,40}?)(?<!\s)\1(?![*A-Za-z0-9])")
