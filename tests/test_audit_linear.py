@@ -17,7 +17,7 @@ import re
 import time
 
 import pytest
-from hypothesis import HealthCheck, given, settings
+from hypothesis import HealthCheck, example, given, settings
 from hypothesis import strategies as st
 
 from statsetter.audit import parsing
@@ -124,6 +124,46 @@ def test_operators_are_found_as_their_definition_reads(text, data):
     assert parsing._operators(parsing._patterns("."), text, start, end) == [
         (o.start(), o.end()) for o in _SPACED_OPERATOR.finditer(text, start, end)]
 
+
+@settings(max_examples=3_000, deadline=None, database=None)
+@given(st.lists(st.tuples(st.integers(0, 40), st.integers(0, 40)), max_size=8), st.integers(-2, 45))
+def test_italic_positions_by_bisection_are_those_of_the_spans(spans, at):
+    """A position is italic when some span holds it: bisecting the merged spans answers as testing each span does,
+    whatever their order, overlaps or emptiness (a Unit's spans are public)."""
+    from statsetter.audit.checks import _Italic
+
+    assert (at in _Italic(tuple(spans))) == any(s <= at < e for s, e in spans)
+
+
+@settings(max_examples=3_000, deadline=None, database=None)
+@given(st.lists(st.one_of(st.text(alphabet="0123456789٣", max_size=160), st.text(alphabet="a .²\n", max_size=130)), max_size=5))
+@example(["a", "1" * 101])  # a run of exactly 101 that begins right after a tested position
+@example(["\n" * 100, "٣" * 101, "a"])
+def test_digit_shortcuts_read_as_the_patterns_do(parts):
+    """The audit's cheap tests for a digit and for a run of more than 100 digits (every 101st character first) find
+    what the patterns \\d and \\d{101,} find, Unicode digits included."""
+    from statsetter.audit.report import _DIGIT, _LONG_NUMBER, _has_digit, _long_number
+
+    text = "".join(parts)
+    found, expected = _long_number(text), _LONG_NUMBER.search(text)
+    assert (found and found.span()) == (expected and expected.span())
+    assert _has_digit(text) == (_DIGIT.search(text) is not None)
+
+
+@settings(max_examples=3_000, deadline=None, database=None)
+@given(st.lists(st.sampled_from(["adjusted", "Holm", "BONFERRONI", "šidák", "fdr", "-", " ", "\u2009", "x", "K", "İ", ",", "d"]),
+                max_size=12).map("".join))
+def test_adjusted_p_is_found_as_the_pattern_reads(before):
+    """A p is read as adjusted when a procedure's word ends right before it (white space and hyphens between): the
+    cheap test of the last letter first gives what the pattern alone gives."""
+    text = before + "p = .04"
+    found = [r for r in parsing.find_statistics(text) if r.p is not None]
+    if not found:  # a p run on after a word ("adjustedp") is no p
+        assert re.search(r"\w$", before)
+        return
+    (rep,) = found
+    window = text[max(0, len(before) - 30) : len(before)]
+    assert rep.p.adjusted == bool(parsing._ADJUSTED.search(window) and any(w in window.lower() for w in parsing._ADJUSTED_WORDS))
 
 
 def test_the_audit_leaves_the_garbage_collector_as_it_was(tmp_path):

@@ -11,6 +11,8 @@ text can never disagree about the style.
 
 from __future__ import annotations
 
+import bisect
+import functools
 import math
 from dataclasses import dataclass, replace
 from typing import Sequence
@@ -323,18 +325,62 @@ def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> li
         shown = p.number.digits.replace(",", num.style.decimal_mark).replace(".", num.style.decimal_mark).removeprefix("0")
         # (a leading zero and a decimal mark other than the style's are findings of their own)
         fewer = p.number.decimals if accept <= p.number.decimals < num.decimals_for("p") else None  # APA 7 §6.36: two or three decimals
-        if not any(num.p(c, alpha, held=fewer)[1].removeprefix("0") == shown
-                   for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1):
+        if not _p_prints_as(num, v, h, alpha, fewer, shown):
             wrong.append(f"p = {p.number.text} ({num.p(v, alpha)[1]} in the style)")
     return [Finding("decimals", "Decimals differ from the style's.", "; ".join(wrong))] if wrong else []
 
 
-def _is_italic(at: int, spans: Sequence[tuple[int, int]]) -> bool:
-    return any(s <= at < e for s, e in spans)
+@functools.lru_cache(maxsize=4096)  # a manuscript prints the same few hundred p values again and again
+def _p_prints_as(num: Numbers, v: float, h: float, alpha: float, held: int | None, shown: str) -> bool:
+    """Whether some p the printed one stands for (v ± h) prints as ``shown`` in the style."""
+    return any(num.p(c, alpha, held=held)[1].removeprefix("0") == shown
+               for c in (v, math.nextafter(v, 0.0), math.nextafter(v, 1.0), v - h, v + h) if 0 < c <= 1)
+
+
+class _Italic:
+    """The italic spans of one paragraph as sorted, merged starts and ends: whether a position is italic by bisection
+    (a paragraph's statistics ask a few times each; the spans may come in any order, overlapping)."""
+
+    def __init__(self, spans: Sequence[tuple[int, int]]) -> None:
+        self.spans = spans
+        self.starts: list[int] = []
+        self.ends: list[int] = []
+        for s, e in sorted(x for x in spans if x[0] < x[1]):
+            if self.ends and s <= self.ends[-1]:
+                self.ends[-1] = max(self.ends[-1], e)
+            else:
+                self.starts.append(s)
+                self.ends.append(e)
+
+    def __contains__(self, at: int) -> bool:
+        k = bisect.bisect_right(self.starts, at) - 1
+        return k >= 0 and at < self.ends[k]
+
+
+_LAST_ITALIC: list[_Italic] = []
+
+
+def _italic(spans: Sequence[tuple[int, int]]) -> _Italic:
+    if _LAST_ITALIC and _LAST_ITALIC[0].spans is spans:
+        return _LAST_ITALIC[0]
+    _LAST_ITALIC[:] = [_Italic(spans)]
+    return _LAST_ITALIC[0]
 
 
 _ITALIC_NAMES = {"t", "F", "r", "rs", "z", "U", "H", "W", "T", "p", "d", "g", "V", "R2", "M", "SD", "Mdn", "N", "n"}
 _GREEK = "χηωεφβρ"
+
+
+@functools.lru_cache(maxsize=1024)  # a manuscript types its symbols a few ways
+def _italic_rule(symbol: str, name: str) -> int | None:
+    """Where a symbol's Greek letter is (≥ 0: it must be roman), −1 for a Latin symbol that must be italic, None for
+    a word (chi-square, partial, adjusted) or a symbol not checked."""
+    greek = next((i for i, ch in enumerate(symbol) if ch in _GREEK), None)
+    if greek is not None:
+        return greek
+    if name in _ITALIC_NAMES and symbol[:1].isascii() and symbol[:1].isalpha() and len(symbol.split()) == 1:
+        return -1
+    return None
 
 
 def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]]) -> list[Finding]:
@@ -348,14 +394,16 @@ def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]]) -> list
         symbols.append((rep.p.symbol_start, rep.p.symbol_text, "p"))
     for e in rep.effects + rep.descriptives:
         symbols.append((e.symbol_start, e.symbol_text, e.name))
+    italic = _italic(spans)
     for start, symbol, name in symbols:
-        greek = next((i for i, ch in enumerate(symbol) if ch in _GREEK), None)
-        if greek is not None:
-            if _is_italic(start + greek, spans):
+        rule = _italic_rule(symbol, name)
+        if rule is None:
+            continue
+        if rule >= 0:
+            if start + rule in italic:
                 bad.append(f"{symbol} (Greek: roman)")
-        elif name in _ITALIC_NAMES and symbol[:1].isascii() and symbol[:1].isalpha() and len(symbol.split()) == 1:
-            if not _is_italic(start, spans):
-                bad.append(f"{symbol} (not italic)")
+        elif start not in italic:
+            bad.append(f"{symbol} (not italic)")
     return [Finding("italics", "Latin statistical symbols are italic; Greek letters are not.", ", ".join(bad))] if bad else []
 
 

@@ -206,11 +206,14 @@ class _Patterns:
 
     def to_number(self, text: str, start: int) -> Number | None:
         raw = text.strip()
-        if _PLAIN.fullmatch(raw) and self.mark == ".":  # "2.14", ".039", "38": float() reads these exactly as Decimal would
-            point = raw.find(".")
+        plain = _PLAIN.fullmatch(raw) if self.mark == "." else None
+        if plain is not None:  # "2.14", ".039", "38", "−.26": float() reads these exactly as Decimal would
+            body = plain.group(2)
+            point = body.find(".")
+            value = -float(body) if plain.group(1) else float(body)
             offset = text.find(raw)
             s = start + max(offset, 0)
-            return _new_number(raw, float(raw), len(raw) - point - 1 if point >= 0 else 0, s, s + len(raw))
+            return _new_number(raw, value, len(body) - point - 1 if point >= 0 else 0, s, s + len(raw))
         power = _EXPONENT_SPLIT.match(raw) if ("e" in raw or "E" in raw or "10" in raw) else None
         if power is not None and power.group("m").strip():
             base = self.to_number(power.group("m"), start)
@@ -245,9 +248,12 @@ class _Patterns:
         return Number(raw, value, decimals, s, s + len(raw))
 
 
-# a Number set slot by slot, without the frozen dataclass's __init__ (half the cost; 40,000 of them per 1,000 pages)
+# Numbers, p values and effects set slot by slot, without the frozen dataclass's __init__ (a third to half the cost;
+# 40,000 Numbers per 1,000 pages)
 _new_number = _unchecked_maker(Number, {}, ("text", "value", "decimals", "start", "end"))
-_PLAIN = re.compile(r"\d{1,15}(?:\.\d{1,15})?|\.\d{1,15}")
+_new_p = _unchecked_maker(PValue, {}, ("op", "number", "start", "end", "symbol_start", "symbol_text", "adjusted"))
+_new_effect = _unchecked_maker(Effect, {}, ("name", "number", "start", "end", "symbol_start", "symbol_text", "ci"))
+_PLAIN = re.compile(r"(?:([-−–‐])\s?)?(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})")  # a sign, as the general path reads it, and digits
 _SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789")
 _CACHE: dict[str, _Patterns] = {}
 _MAX_DIGITS = 100
@@ -275,9 +281,24 @@ _DF_PARTS = {sep: re.compile(rf"[^{sep};]+") for sep in ",;"}
 _DF_PART = re.compile(r"\s*(?:df\s*=\s*)?(\d+(?:[.,]\d+)?)\s*")
 
 
+# the df as most heads give them, "38", "40.95", "2, 97" (read with a decimal point): the same Numbers as the general path below
+_DF_PLAIN = re.compile(r"\s*(\d{1,15}(?:\.\d{1,15})?)\s*(?:,\s*(\d{1,15}(?:\.\d{1,15})?)\s*)?")
+
+
+def _plain_number(m: re.Match[str], group: int, start: int) -> Number:
+    raw = m.group(group)
+    point = raw.find(".")
+    return _new_number(raw, float(raw), len(raw) - point - 1 if point >= 0 else 0, start + m.start(group), start + m.end(group))
+
+
 def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], Number | None]:
     """df numbers and N from the text inside the head's parentheses: ``38``,
     ``2, 97``, ``df = 23``, ``2, N = 1,200``. Anything else: no df."""
+    if pat.mark == ".":
+        plain = _DF_PLAIN.fullmatch(inner)
+        if plain is not None:
+            first = _plain_number(plain, 1, start)
+            return ((first, _plain_number(plain, 2, start)) if plain.group(2) is not None else (first,)), None
     n = None
     found = pat.n.search(inner)
     rest = inner
@@ -314,6 +335,8 @@ def decimal_mark_of(texts: "Iterable[str]") -> tuple[str, int, int] | None:
     comma-typed count, point-typed count), or None when they do not say."""
     commas = points = 0
     for text in texts:
+        if "=" not in text and "<" not in text and ">" not in text:  # what both patterns start with (most prose has none)
+            continue
         commas += len(_COMMA_DECIMAL.findall(text))
         points += len(_POINT_DECIMAL.findall(text))
     if commas == points:
@@ -499,8 +522,14 @@ _ADJUSTED = re.compile(r"(?i:adjusted|corrected|holm|bonferroni|sidak|šidák|fd
 
 
 def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
-    before = m.string[max(0, m.start() - 30) : m.start()].lower()
-    adjusted = any(word in before for word in _ADJUSTED_WORDS) and bool(_ADJUSTED.search(m.string, max(0, m.start() - 30), m.start()))
+    text, at = m.string, m.start()
+    last = at - 1  # the character before the white space and hyphens before the p: a word of _ADJUSTED must end there
+    while last >= 0 and (text[last] == "-" or text[last].isspace()):
+        last -= 1
+    adjusted = False
+    if last >= 0 and (text[last] in "dmikrDMIKR" or not text[last].isascii()):  # the last letters of _ADJUSTED_WORDS (a cheap test first)
+        before = text[max(0, at - 30) : at].lower()
+        adjusted = any(word in before for word in _ADJUSTED_WORDS) and bool(_ADJUSTED.search(text, max(0, at - 30), at))
     if m.group("op") is None:  # "ns"
         return PValue("ns", None, m.start(), m.end(), m.start(), m.group())
     number = pat.to_number(m.group("num"), m.start("num"))
@@ -508,16 +537,16 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
         return None
     op = m.group("op")
     op = "<" if op == "b" else op[-1] if len(op) > 1 else op  # "p b 0.01": a "<" garbled by a PDF copy; "p = < .001" means "<"
-    return PValue(op, number, m.start(), m.end("num"), m.start(), m.group()[0], adjusted)
+    return _new_p(op, number, at, m.end("num"), at, text[at], adjusted)
 
 
 def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:
     events: list[tuple[int, str, re.Match[str]]] = []
     # a search is skipped where the clause lacks what its pattern must contain: an interval its level's percent sign,
     # an effect size and an n their "=", a df written apart its "df"
-    percent, equals, df_apart = (text.find(part, start, end) >= 0 for part in ("%", "=", "df"))
-    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, percent), ("effect", pat.effect, equals), ("df", pat.df, df_apart),
-                                ("n", pat.n, equals)):
+    equals = text.find("=", start, end) >= 0
+    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
+                                ("df", pat.df, text.find("df", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
     events.sort(key=lambda e: e[0])
@@ -535,7 +564,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
                 continue
             target = next((e for e in reversed(rep.effects) if e.ci is None and e.name not in _DESCRIPTIVE), None)
             if target is not None and rep.effects and rep.effects[-1] is target:
-                rep.effects[-1] = Effect(target.name, target.number, target.start, target.end, target.symbol_start, target.symbol_text, ci)
+                rep.effects[-1] = _new_effect(target.name, target.number, target.start, target.end, target.symbol_start, target.symbol_text, ci)
             elif rep.ci is None:
                 rep.ci = ci
         elif kind == "effect":
@@ -543,7 +572,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
             number = pat.to_number(m.group("num"), m.start("num"))
             if name is None or number is None:
                 continue
-            effect = Effect(name, number, m.start(), number.end, m.start("name"), m.group("name"))
+            effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
         elif kind == "df" and not rep.df:
             number = pat.to_number(m.group("num"), m.start("num"))
