@@ -12,7 +12,8 @@ y, and F's numerator df above 2 is brought down by exact positive steps.
 The expansion is also taken where TOMS 708 takes it (b ≤ 1 < 15 < a, y <
 0.29, p not near 1: most t tests with more than 30 df, F on 1 or 2 df), with
 Q(½, z) = erfc √z and Q(1, z) = e^(−z) in closed form: a few terms instead
-of a long fraction, and more accurate than the fraction there. Where p lies
+of a long fraction, and more accurate than the fraction there (its
+coefficients depend on b alone and are made once per b). Where p lies
 near 1 (y < 0.1 and (ya)^b ≤ 0.7), at any df, its complement is computed by
 the fraction on the other side, to the last digit.
 The normal tail is erfc. No numpy or scipy: `statsetter format` starts as
@@ -113,6 +114,32 @@ def _upper_gamma_scaled(a: float, x: float) -> float:
 _BGRAT_TERMS = 30
 
 
+_BGRAT_D: dict[float, tuple[float, ...]] = {}  # the expansion's coefficients by b (a t: ½; an F on 1 or 2 df: ½ or 1)
+
+
+def _bgrat_coefficients(b: float) -> tuple[float, ...]:
+    """The coefficients d₁ … d₃₀ of the expansion, which depend on b alone: made once per b (their recurrence is
+    quadratic in the number of terms) by the same operations in the same order as term by term."""
+    found = _BGRAT_D.get(b)
+    if found is None:
+        c: list[float] = []
+        d: list[float] = []
+        cn, n2 = 1.0, 0.0
+        for n in range(1, _BGRAT_TERMS + 1):
+            n2 += 2
+            cn /= n2 * (n2 + 1)
+            c.append(cn)
+            s, coef = 0.0, b - n
+            for i in range(1, n):
+                s += coef * c[i - 1] * d[n - 1 - i]
+                coef += b
+            d.append((b - 1) * cn + s / n)
+        found = tuple(d)
+        if len(_BGRAT_D) < 256:  # b is ½ or 1 for t and F on 1 or 2 df; other values come from F's exact steps
+            _BGRAT_D[b] = found
+    return found
+
+
 def _large_a(a: float, b: float, y: float) -> float | None:
     """I_x(a, b), x = 1 − y, for a large and 0 < b ≤ 1, by the asymptotic
     expansion of DiDonato and Morris (ACM TOMS 18:360–373, 1992, Algorithm
@@ -128,22 +155,14 @@ def _large_a(a: float, b: float, y: float) -> float | None:
     log_u = -z + b * math.log(z) - math.lgamma(b) - _log_gamma_ratio(b, a) - b * math.log(nu)
     j = _upper_gamma_scaled(b, z)  # Q(b, z) / (z^b e^(−z) / Γ(b))
     v, t2 = 0.25 / (nu * nu), 0.25 * lnx * lnx
-    total, t, cn, n2 = j, 1.0, 1.0, 0.0
-    c: list[float] = []
-    d: list[float] = []
-    for n in range(1, _BGRAT_TERMS + 1):
+    total, t, n2 = j, 1.0, 0.0
+    d = _bgrat_coefficients(b)
+    for n in range(_BGRAT_TERMS):
         bp2n = b + n2
         j = (bp2n * (bp2n + 1) * j + (z + bp2n + 1) * t) * v
         n2 += 2
         t *= t2
-        cn /= n2 * (n2 + 1)
-        c.append(cn)
-        s, coef = 0.0, b - n
-        for i in range(1, n):
-            s += coef * c[i - 1] * d[n - 1 - i]
-            coef += b
-        d.append((b - 1) * cn + s / n)
-        dj = d[-1] * j
+        dj = d[n] * j
         total += dj
         if total <= 0:
             return None
