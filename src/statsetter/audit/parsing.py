@@ -550,11 +550,11 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
     events.sort(key=lambda e: e[0])
-    covered: list[tuple[int, int]] = []
+    covered = -1  # the furthest end of the matches read so far: each began at or before this event (events in order of start)
     last_end = rep.end
     ci = None
     for at, kind, m in events:
-        if any(s <= at < e for s, e in covered):
+        if at < covered:  # inside a match already read
             continue
         if kind == "p" and rep.p is None:
             rep.p = _p_value(pat, m)
@@ -583,7 +583,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
             rep.n = pat.to_number(m.group("num"), m.start("num"))
         else:
             continue
-        covered.append((m.start(), m.end()))
+        covered = max(covered, m.end())
         last_end = max(last_end, m.end(), ci.end if kind == "ci" and ci is not None else 0)
         rep.operators += _operators(pat, text, m.start(), m.end())
     rep.end = last_end
