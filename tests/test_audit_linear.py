@@ -166,6 +166,20 @@ def test_adjusted_p_is_found_as_the_pattern_reads(before):
     assert rep.p.adjusted == bool(parsing._ADJUSTED.search(window) and any(w in window.lower() for w in parsing._ADJUSTED_WORDS))
 
 
+_COMMA_TYPED = re.compile(r"[=<>]\s*[-−]?(?:0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)")  # the definitions, one kind each
+_POINT_TYPED = re.compile(r"[=<>]\s*[-−]?\d*\.\d+(?!\d|,\d)")
+
+
+@settings(max_examples=5_000, deadline=None, database=None)
+@given(st.text(alphabet="=<> -−0123456789,.p", max_size=40))
+def test_decimal_marks_are_counted_as_two_patterns_count_them(text):
+    """The decimal mark is chosen from one scan for numbers typed with a comma or a point: the counts of what a
+    pattern for each kind finds on its own, on any text."""
+    found = parsing.decimal_mark_of([text])
+    commas, points = len(_COMMA_TYPED.findall(text)), len(_POINT_TYPED.findall(text))
+    assert found == (None if commas == points else ("," if commas > points else ".", commas, points))
+
+
 def test_the_audit_leaves_the_garbage_collector_as_it_was(tmp_path):
     """Reading and checking run with Python's cyclic collector paused (their objects hold no cycles): it runs again
     afterwards, also when the manuscript is refused, and stays off where the caller had turned it off."""

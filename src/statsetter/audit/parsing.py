@@ -323,10 +323,12 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
     return tuple(dfs), n
 
 
-# a number after "=", "<" or ">" whose decimals can only be decimals: "p = 0,03", "t = 2,14", "p < ,05" (a comma before
-# exactly three digits may be a thousands separator, "N = 1,200", and is no evidence either way)
-_COMMA_DECIMAL = re.compile(r"[=<>]\s*[-−]?(?:0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)")
-_POINT_DECIMAL = re.compile(r"[=<>]\s*[-−]?\d*\.\d+(?!\d|,\d)")
+# a number after "=", "<" or ">" whose decimals can only be decimals, typed with a comma (the first group: "p = 0,03",
+# "t = 2,14", "p < ,05"; a comma before exactly three digits may be a thousands separator, "N = 1,200", and is no
+# evidence either way) or with a point (the second: "p = .03", "t = 2.14"); the two kinds in one scan — after the
+# operator and sign, a number's first mark decides which can match (never both), and no match holds another operator,
+# so the scan finds what two patterns, one for each kind, would find (tests/test_audit_linear.py)
+_DECIMAL_TYPED = re.compile(r"[=<>]\s*[-−]?(?:(0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)|(\d*\.\d+)(?!\d|,\d))")
 
 
 def decimal_mark_of(texts: "Iterable[str]") -> tuple[str, int, int] | None:
@@ -335,10 +337,13 @@ def decimal_mark_of(texts: "Iterable[str]") -> tuple[str, int, int] | None:
     comma-typed count, point-typed count), or None when they do not say."""
     commas = points = 0
     for text in texts:
-        if "=" not in text and "<" not in text and ">" not in text:  # what both patterns start with (most prose has none)
+        if "=" not in text and "<" not in text and ">" not in text:  # what the pattern starts with (most prose has none)
             continue
-        commas += len(_COMMA_DECIMAL.findall(text))
-        points += len(_POINT_DECIMAL.findall(text))
+        for comma, _ in _DECIMAL_TYPED.findall(text):
+            if comma:
+                commas += 1
+            else:
+                points += 1
     if commas == points:
         return None
     return ("," if commas > points else "."), commas, points

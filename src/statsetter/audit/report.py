@@ -18,7 +18,7 @@ from pathlib import Path
 from typing import Iterator, Sequence
 
 from ..pvalues import p_from_statistic
-from ..records.result import _collector_paused
+from ..records.result import _collector_paused, _unchecked_maker
 from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
@@ -172,7 +172,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
                     where = "beside it" if rep.n is not None else "in the paragraph" if totals else "earlier in the text"
                     readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where))
-                yield _Item(unit, rep, rep, readings, context=unit.text)
+                yield _new_item(unit, rep, rep, readings, "", unit.text)
             last_total = totals[-1] if totals else last_total
             i += 1
             continue
@@ -190,6 +190,12 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in used | taken]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
+
+
+# a statistic's item and entry set slot by slot (the frozen dataclasses' __init__ costs a few microseconds; 10,000 per 1,000 pages)
+_new_item = _unchecked_maker(_Item, {}, ("unit", "rep", "local", "readings", "how", "context"))
+_new_entry = _unchecked_maker(Entry, {}, ("location", "found", "findings", "suggestion", "unit", "start", "end", "notes", "revision", "kept",
+                                          "checked"))
 
 
 def _consistency(item: _Item, alpha: float) -> tuple[list[Finding], str]:
@@ -336,7 +342,7 @@ def _audit_units(
                 findings = [f for f in findings if f.code != "one-sided"]
                 notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")
         suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
-        entries.append(Entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), checked=checked))
+        entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", checked))
         reps.append(local)
     if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
         entries = [_without(e, "italics", suggest_all) for e in entries]
