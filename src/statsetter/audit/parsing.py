@@ -508,17 +508,31 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
 _OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
 
 
+_LAST_OPERATORS: list = [None, [], []]  # the last text's operators: the text, where each starts, where its white space after it ends
+
+
 def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[int, int]]:
     """(start, end) of each operator between ``start`` and ``end`` with the white space on each side of it (the space
-    before it back to the end of the operator before), as the style's spacing check reads them."""
+    before it back to the end of the operator before), as the style's spacing check reads them. The text's operators
+    are found once (a statistic asks for those of its head and of each part of its clause): white space holds no
+    operator, so those of a stretch are the text's that start in it, their white space cut at its end."""
+    if _LAST_OPERATORS[0] is not text:
+        starts, ends = [], []
+        for o in _OPERATOR.finditer(text):
+            starts.append(o.start())
+            ends.append(o.end())
+        _LAST_OPERATORS[:] = [text, starts, ends]
+    _, starts, ends = _LAST_OPERATORS
     out = []
     floor = start
-    for o in _OPERATOR.finditer(text, start, end):
-        at = o.start()
+    k = bisect.bisect_left(starts, start)
+    while k < len(starts) and starts[k] < end:
+        at = starts[k]
         while at > floor and text[at - 1].isspace():
             at -= 1
-        floor = o.end()
+        floor = min(ends[k], end)
         out.append((at, floor))
+        k += 1
     return out
 
 
