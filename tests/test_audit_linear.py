@@ -166,6 +166,17 @@ def test_adjusted_p_is_found_as_the_pattern_reads(before):
     assert rep.p.adjusted == bool(parsing._ADJUSTED.search(window) and any(w in window.lower() for w in parsing._ADJUSTED_WORDS))
 
 
+@settings(max_examples=5_000, deadline=None, database=None)
+@given(st.text(alphabet="\\ \t\n.A1(|-)*•a", max_size=40), st.data())
+def test_sentence_ends_without_a_latex_row_are_the_same(text, data):
+    """A text without a LaTeX row end (two backslashes) is split into sentences by the pattern without that
+    alternative: the same ends as the whole pattern's, over any part of the text."""
+    pat = parsing._patterns(".")
+    start = data.draw(st.integers(0, len(text)))
+    end = data.draw(st.integers(start, len(text)))
+    assert [m.span() for m in pat.boundary_in(text).finditer(text, start, end)] == [m.span() for m in pat.boundary.finditer(text, start, end)]
+
+
 _COMMA_TYPED = re.compile(r"[=<>]\s*[-−]?(?:0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)")  # the definitions, one kind each
 _POINT_TYPED = re.compile(r"[=<>]\s*[-−]?\d*\.\d+(?!\d|,\d)")
 
