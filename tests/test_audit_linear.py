@@ -213,3 +213,53 @@ def test_the_audit_leaves_the_garbage_collector_as_it_was(tmp_path):
         assert not gc.isenabled()
     finally:
         gc.enable()
+
+
+def test_audits_in_threads_read_as_one_alone():
+    """The audit remembers a few things of the last text it read (its operators, sentence ends, italic spans); audits
+    running in threads at once, switching as often as the interpreter allows, find what each finds alone with nothing
+    remembered."""
+    import sys
+    import threading
+
+    def symbols(text: str) -> tuple[tuple[int, int], ...]:  # every Latin symbol italic, as a careful author types them
+        return tuple((m.start(), m.start() + 1) for m in re.finditer(r"(?<![\w.])[tpdFrVMn](?=\s*[(=<])", text))
+
+    sentences = [
+        ("a", "The groups differed, t(38) = 2.14, p = .039, d = 0.69, and F(2, 97)=4.51, p=.013, η² = .09."),
+        ("b", "Scores correlated, r(48) = −.31, p = .028; χ2(2, N = 200) = 9.87, p = .007, V = .16, M = 3.10, SD = 0.90."),
+        ("c", "No difference appeared, t(120) = 0.84, p = .40, 95% CI [−0.21, 0.52], n = 122."),
+    ]
+    texts = [(name, text, symbols(text)) for name, text in sentences]
+
+    def run(name: str, text: str, italic: tuple[tuple[int, int], ...]) -> list[tuple[str, tuple[str, ...], str]]:
+        return [(e.found, tuple(e.codes), e.suggestion) for e in audit_units([Unit(name, text, italic)], check_italics=True)]
+
+    def fresh(name: str, text: str, italic: tuple[tuple[int, int], ...]) -> list[tuple[str, tuple[str, ...], str]]:
+        from statsetter.audit import checks
+
+        checks._LAST_ITALIC[0] = None  # nothing remembered: as the text's first audit in a new process
+        parsing._LAST_OPERATORS[0] = (None, [], [])
+        parsing._LAST_INDEX.clear()
+        return run(name, text, italic)
+
+    alone = {name: fresh(name, text, italic) for name, text, italic in texts}
+    assert all(alone.values()) and any(codes for found in alone.values() for _, codes, _ in found)
+    seen: dict[str, list] = {name: [] for name, _, _ in texts}
+
+    def worker(name: str, text: str, italic: tuple[tuple[int, int], ...]) -> None:
+        for _ in range(60):
+            seen[name].append(run(name, text, italic))
+
+    interval = sys.getswitchinterval()
+    sys.setswitchinterval(1e-6)
+    try:
+        threads = [threading.Thread(target=worker, args=t) for t in texts for _ in range(2)]
+        for t in threads:
+            t.start()
+        for t in threads:
+            t.join()
+    finally:
+        sys.setswitchinterval(interval)
+    for name, runs in seen.items():
+        assert len(runs) == 120 and all(r == alone[name] for r in runs), name

@@ -357,14 +357,15 @@ class _Italic:
         return k >= 0 and at < self.ends[k]
 
 
-_LAST_ITALIC: list[_Italic] = []
+_LAST_ITALIC: list[_Italic | None] = [None]  # the last paragraph's, read and replaced whole
 
 
 def _italic(spans: Sequence[tuple[int, int]]) -> _Italic:
-    if _LAST_ITALIC and _LAST_ITALIC[0].spans is spans:
-        return _LAST_ITALIC[0]
-    _LAST_ITALIC[:] = [_Italic(spans)]
-    return _LAST_ITALIC[0]
+    found = _LAST_ITALIC[0]
+    if found is None or found.spans is not spans:
+        found = _Italic(spans)
+        _LAST_ITALIC[0] = found
+    return found
 
 
 _ITALIC_NAMES = {"t", "F", "r", "rs", "z", "U", "H", "W", "T", "p", "d", "g", "V", "R2", "M", "SD", "Mdn", "N", "n"}

@@ -516,7 +516,8 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
 _OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
 
 
-_LAST_OPERATORS: list = [None, [], []]  # the last text's operators: the text, where each starts, where its white space after it ends
+# the last text's operators: (the text, where each starts, where the white space after each ends), read and replaced whole
+_LAST_OPERATORS: list[tuple[str | None, list[int], list[int]]] = [(None, [], [])]
 
 
 def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[int, int]]:
@@ -524,13 +525,13 @@ def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[in
     before it back to the end of the operator before), as the style's spacing check reads them. The text's operators
     are found once (a statistic asks for those of its head and of each part of its clause): white space holds no
     operator, so those of a stretch are the text's that start in it, their white space cut at its end."""
-    if _LAST_OPERATORS[0] is not text:
+    known, starts, ends = _LAST_OPERATORS[0]
+    if known is not text:
         starts, ends = [], []
         for o in _OPERATOR.finditer(text):
             starts.append(o.start())
             ends.append(o.end())
-        _LAST_OPERATORS[:] = [text, starts, ends]
-    _, starts, ends = _LAST_OPERATORS
+        _LAST_OPERATORS[0] = (text, starts, ends)
     out = []
     floor = start
     k = bisect.bisect_left(starts, start)
