@@ -60,7 +60,7 @@ def _work(text: str, monkeypatch) -> int:
     for name in ("_OPERATOR_OR_NS", "_ADJUSTED", "_OPERATOR"):
         if isinstance(getattr(parsing, name, None), re.Pattern):
             monkeypatch.setattr(parsing, name, _Counting(getattr(parsing, name), tally))
-    parsing._LAST_INDEX.clear()
+    parsing._LAST_INDEX[0] = None
     audit_units([Unit("line 1", text, None, "", 1)])
     return tally[0]
 
@@ -239,8 +239,8 @@ def test_audits_in_threads_read_as_one_alone():
         from statsetter.audit import checks
 
         checks._LAST_ITALIC[0] = None  # nothing remembered: as the text's first audit in a new process
-        parsing._LAST_OPERATORS[0] = (None, [], [])
-        parsing._LAST_INDEX.clear()
+        parsing._LAST_OPERATORS[0] = None
+        parsing._LAST_INDEX[0] = None
         return run(name, text, italic)
 
     alone = {name: fresh(name, text, italic) for name, text, italic in texts}

@@ -23,7 +23,7 @@ from ..pvalues import upper_tail
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
-from .parsing import Number, Reported
+from .parsing import Number, Reported, _remembered
 
 # code: (what it means, the docs/reporting-rules.md rule and its source)
 CODES: dict[str, tuple[str, str]] = {
@@ -342,7 +342,6 @@ class _Italic:
     (a paragraph's statistics ask a few times each; the spans may come in any order, overlapping)."""
 
     def __init__(self, spans: Sequence[tuple[int, int]]) -> None:
-        self.spans = spans
         self.starts: list[int] = []
         self.ends: list[int] = []
         for s, e in sorted(x for x in spans if x[0] < x[1]):
@@ -357,15 +356,11 @@ class _Italic:
         return k >= 0 and at < self.ends[k]
 
 
-_LAST_ITALIC: list[_Italic | None] = [None]  # the last paragraph's, read and replaced whole
+_LAST_ITALIC: list = [None]  # (the last paragraph's spans, their _Italic)
 
 
 def _italic(spans: Sequence[tuple[int, int]]) -> _Italic:
-    found = _LAST_ITALIC[0]
-    if found is None or found.spans is not spans:
-        found = _Italic(spans)
-        _LAST_ITALIC[0] = found
-    return found
+    return _remembered(_LAST_ITALIC, spans, lambda: _Italic(spans))
 
 
 _ITALIC_NAMES = {"t", "F", "r", "rs", "z", "U", "H", "W", "T", "p", "d", "g", "V", "R2", "M", "SD", "Mdn", "N", "n"}

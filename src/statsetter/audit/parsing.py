@@ -18,13 +18,14 @@ import bisect
 import functools
 import re
 from dataclasses import dataclass, field
-from typing import Iterable
+from typing import Callable, Iterable, TypeVar
 from decimal import Decimal, InvalidOperation
 
 from ..records.result import _unchecked_maker
 
 __all__ = ["Number", "PValue", "Interval", "Effect", "Reported", "find_statistics", "symbol_of", "decimal_mark_of"]
 
+T = TypeVar("T")
 _MINUS = "-−–‐"  # hyphen-minus, minus, en dash, hyphen: all read as minus
 
 
@@ -292,20 +293,13 @@ _DF_PART = re.compile(r"\s*(?:df\s*=\s*)?(\d+(?:[.,]\d+)?)\s*")
 _DF_PLAIN = re.compile(r"\s*(\d{1,15}(?:\.\d{1,15})?)\s*(?:,\s*(\d{1,15}(?:\.\d{1,15})?)\s*)?")
 
 
-def _plain_number(m: re.Match[str], group: int, start: int) -> Number:
-    raw = m.group(group)
-    point = raw.find(".")
-    return _new_number(raw, float(raw), len(raw) - point - 1 if point >= 0 else 0, start + m.start(group), start + m.end(group))
-
-
 def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], Number | None]:
     """df numbers and N from the text inside the head's parentheses: ``38``,
     ``2, 97``, ``df = 23``, ``2, N = 1,200``. Anything else: no df."""
     if pat.mark == ".":
         plain = _DF_PLAIN.fullmatch(inner)
         if plain is not None:
-            first = _plain_number(plain, 1, start)
-            return ((first, _plain_number(plain, 2, start)) if plain.group(2) is not None else (first,)), None
+            return tuple(pat.to_number(plain.group(g), start + plain.start(g)) for g in (1, 2) if plain.group(g) is not None), None  # type: ignore[misc]
     n = None
     found = pat.n.search(inner)
     rest = inner
@@ -414,16 +408,22 @@ class _Index:
                 self.n_match.append(m)
 
 
-_LAST_INDEX: list[tuple[str, _Index]] = []
+def _remembered(slot: list, key: object, make: "Callable[[], T]") -> "T":
+    """What ``make`` made for ``key`` the last time (the same object), or what it makes now: a memory of one entry for
+    the text (or spans) a paragraph's statistics ask about in turn, held in ``slot`` as one pair, read and replaced
+    whole (so that audits in threads never mix two texts' pieces)."""
+    held = slot[0]
+    if held is None or held[0] is not key:
+        held = (key, make())
+        slot[0] = held
+    return held[1]
+
+
+_LAST_INDEX: list = [None]  # (text, its _Index)
 
 
 def _index(pat: _Patterns, text: str) -> _Index:
-    for key, found in _LAST_INDEX:
-        if key is text or (len(key) == len(text) and key == text):
-            return found
-    found = _Index(pat, text)
-    _LAST_INDEX[:] = [(text, found)]
-    return found
+    return _remembered(_LAST_INDEX, text, lambda: _Index(pat, text))
 
 
 def _sentence_start(pat: _Patterns, text: str, since: int, at: int) -> int:
@@ -516,8 +516,15 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
 _OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
 
 
-# the last text's operators: (the text, where each starts, where the white space after each ends), read and replaced whole
-_LAST_OPERATORS: list[tuple[str | None, list[int], list[int]]] = [(None, [], [])]
+_LAST_OPERATORS: list = [None]  # (text, (where each operator starts, where the white space after it ends))
+
+
+def _operator_spans(text: str) -> tuple[list[int], list[int]]:
+    starts, ends = [], []
+    for o in _OPERATOR.finditer(text):
+        starts.append(o.start())
+        ends.append(o.end())
+    return starts, ends
 
 
 def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[int, int]]:
@@ -525,13 +532,7 @@ def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[in
     before it back to the end of the operator before), as the style's spacing check reads them. The text's operators
     are found once (a statistic asks for those of its head and of each part of its clause): white space holds no
     operator, so those of a stretch are the text's that start in it, their white space cut at its end."""
-    known, starts, ends = _LAST_OPERATORS[0]
-    if known is not text:
-        starts, ends = [], []
-        for o in _OPERATOR.finditer(text):
-            starts.append(o.start())
-            ends.append(o.end())
-        _LAST_OPERATORS[0] = (text, starts, ends)
+    starts, ends = _remembered(_LAST_OPERATORS, text, lambda: _operator_spans(text))
     out = []
     floor = start
     k = bisect.bisect_left(starts, start)
