@@ -18,13 +18,14 @@ V_METHOD = "noncentral chi-square (Smithson, 2003)"
 
 def _ncx2_limits(chi2: float, df: int, level: float) -> tuple[float, float]:
     """Noncentrality limits λ at which the observed χ² is the upper and lower
-    (1 − level)/2 quantile; a limit below 0 is set to 0."""
-    from scipy import optimize, stats
+    (1 − level)/2 quantile; a limit below 0 is set to 0. The CDFs are
+    scipy.special's chndtr and chdtr, which scipy.stats' ncx2 and chi2 call."""
+    from scipy import optimize, special
 
     alpha = (1 - level) / 2
 
     def solve(target: float) -> float:
-        f = lambda lam: stats.ncx2.cdf(chi2, df, lam) - target if lam > 0 else stats.chi2.cdf(chi2, df) - target  # noqa: E731
+        f = lambda lam: special.chndtr(chi2, df, lam) - target if lam > 0 else special.chdtr(df, chi2) - target  # noqa: E731
         if f(0.0) < 0:
             return 0.0
         hi = max(1.0, chi2)
