@@ -39,7 +39,7 @@ def test_tukey(penguins):
         if ref.pvalue[i, j] > 1e-10:  # scipy's nested quadrature is exact to about 1e-11 absolute
             assert r.p == pytest.approx(ref.pvalue[i, j], rel=REL)
         else:  # scipy prints 0; at 20 digits (mpmath 1.4.1, tests/mp_reference.py; its error estimate 5e-5 relative)
-            assert r.p == pytest.approx({(0, 1): 1.26985830911679e-71, (0, 2): 1.59920408851874e-75}[(i, j)], rel=1e-4)
+            assert r.p == pytest.approx({(0, 1): 1.26985830911679e-71, (0, 2): 1.59920408851874e-75}[(i, j)], rel=1e-4, abs=0)
         assert (r.estimate.ci.low, r.estimate.ci.high) == pytest.approx((ci.low[i, j], ci.high[i, j]), rel=REL)
     assert "Tukey HSD" in render(rs[0], "sentence").plain()
 
@@ -233,7 +233,33 @@ def test_studentized_range_of_two_means_is_a_t_tail(df):
     qs = np.array([0.1, 0.5, 1, 2, 3, 4, 5, 6, 8, 12, 20, 30, 40])
     exact = 2 * stats.t.sf(qs / math.sqrt(2), df)
     keep = exact > 1e-280
-    assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-9)
+    assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-9, abs=0)
+
+
+@pytest.mark.parametrize("df", [5, 8, 12, 19, 24, 40, 100, 1000])
+def test_studentized_range_far_tail_of_two_means(df):
+    """The same definition (P(Q > q) = 2·P(t > q/√2), scipy's t) out to q = 1000, where the integrand's mass lies near
+    s = 0, below the grid's bulk: to 1e-12 relative (a grid that stopped at a quarter of the mass's peak lost up to
+    1e-8 of p on 12-19 df)."""
+    from statsetter.formulas import studentized_range_sf
+
+    qs = np.array([2, 6, 10, 20, 40, 60, 100, 200, 300, 1000.0])
+    exact = 2 * stats.t.sf(qs / math.sqrt(2), df)
+    keep = exact > 1e-280
+    assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-12, abs=0)
+    assert [studentized_range_sf(q, 2, df)[0] for q in qs[keep]] == pytest.approx(exact[keep], rel=1e-12, abs=0)  # each alone
+
+
+@pytest.mark.parametrize("k", [5, 20, 100])
+@pytest.mark.parametrize("df", [5, 19, 150])
+def test_studentized_range_p_does_not_depend_on_the_other_pairs(k, df):
+    """Tukey's p values come from one call for all pairs: each q's p is the one it has alone, whatever the other q's
+    (one grid made for the largest q lost up to 2e-7 of the others' p on 5 df)."""
+    from statsetter.formulas import studentized_range_sf
+
+    qs = np.array([3.0, 6.0, 10.0, 20.0])
+    alone = np.array([studentized_range_sf(q, k, df)[0] for q in qs])
+    assert studentized_range_sf(np.append(qs, 120.0), k, df)[:4] == pytest.approx(alone, rel=1e-13, abs=0)
 
 
 @pytest.mark.parametrize("k", [3, 5, 10, 20])
