@@ -236,18 +236,18 @@ def test_studentized_range_of_two_means_is_a_t_tail(df):
     assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-9, abs=0)
 
 
-@pytest.mark.parametrize("df", [5, 8, 12, 19, 24, 40, 100, 1000])
+@pytest.mark.parametrize("df", [1, 1.5, 2, 3, 5, 8, 12, 19, 24, 40, 100, 1000])
 def test_studentized_range_far_tail_of_two_means(df):
     """The same definition (P(Q > q) = 2·P(t > q/√2), scipy's t) out to q = 1000, where the integrand's mass lies near
-    s = 0, below the grid's bulk: to 1e-12 relative (a grid that stopped at a quarter of the mass's peak lost up to
-    1e-8 of p on 12-19 df)."""
+    s = 0, below the grid's bulk: to 1e-11 relative (a grid that stopped at a quarter of the mass's peak lost up to
+    1e-8 of p on 12-19 df; one dense only up to 4/q lost 4e-3 of p = .003 on 1 df)."""
     from statsetter.formulas import studentized_range_sf
 
     qs = np.array([2, 6, 10, 20, 40, 60, 100, 200, 300, 1000.0])
     exact = 2 * stats.t.sf(qs / math.sqrt(2), df)
     keep = exact > 1e-280
-    assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-12, abs=0)
-    assert [studentized_range_sf(q, 2, df)[0] for q in qs[keep]] == pytest.approx(exact[keep], rel=1e-12, abs=0)  # each alone
+    assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-11, abs=0)
+    assert [studentized_range_sf(q, 2, df)[0] for q in qs[keep]] == pytest.approx(exact[keep], rel=1e-11, abs=0)  # each alone
 
 
 @pytest.mark.parametrize("k", [5, 20, 100])
