@@ -82,6 +82,31 @@ def test_bad_input(penguins):
         factorial_anova(penguins.assign(one="x"), "body_mass_g", ("species", "one"))
 
 
+def test_groups_without_variance_are_named_not_a_crash(penguins):
+    """Penguin species whose bill lengths are made constant (the kind of column a coding error leaves): Games–Howell
+    names the two groups without variance, Tukey says no group varies — an InputError (exit 2), not a division by zero
+    or a NaN p the record refuses."""
+    flat = penguins.dropna(subset=["bill_length_mm"]).copy()
+    for species, value in (("Adelie", 38.0), ("Chinstrap", 48.0)):
+        flat.loc[flat.species == species, "bill_length_mm"] = value
+    with pytest.raises(InputError, match="bill_length_mm: zero variance in groups Adelie and Chinstrap"):
+        posthoc(flat, "bill_length_mm", "species", adjust="games-howell")
+    flat.loc[flat.species == "Gentoo", "bill_length_mm"] = 47.0
+    with pytest.raises(InputError, match="bill_length_mm: zero variance within every group"):
+        posthoc(flat, "bill_length_mm", "species", adjust="tukey")
+    rs = posthoc(flat.assign(bill_length_mm=penguins.bill_length_mm), "bill_length_mm", "species", adjust="tukey")
+    assert len(rs) == 3
+
+
+@pytest.mark.parametrize("df", [5.0, 500.0, math.inf])
+def test_studentized_range_at_the_ends(df):
+    """P(Q > q) is 1 for q <= 0 (a range is never negative), 0 for q = inf, NaN for NaN — alone or among other q."""
+    from statsetter.formulas import studentized_range_sf
+
+    p = studentized_range_sf(np.array([-1.0, 0.0, math.inf, math.nan, 3.0]), 4, df)
+    assert p[:3].tolist() == [1.0, 1.0, 0.0] and math.isnan(p[3]) and 0 < p[4] < 1
+
+
 def test_anova_table_against_statsmodels(penguins):
     # every cell of the ANOVA table is statsmodels' anova_lm (Type II) number put through the
     # style's engine: df, F, p and partial η² = SS / (SS + SS_error); an Error row with its df

@@ -196,8 +196,12 @@ def studentized_range_sf(q: "float | np.ndarray", k: int, df: float) -> "np.ndar
 
     qs = np.atleast_1d(np.asarray(q, dtype=float))
     if math.isinf(df):
-        return _range_tail(qs, k)
-    return np.array([_range_sf(x, k, df) for x in qs.tolist()])
+        inner = qs[(qs > 0) & np.isfinite(qs)]
+        found = dict(zip(inner.tolist(), _range_tail(inner, k).tolist())) if len(inner) else {}
+    else:
+        found = {x: _range_sf(x, k, df) for x in qs.tolist() if 0 < x < math.inf}
+    # the range is never below 0 (P = 1 at q <= 0) nor infinite (P = 0 at q = inf: groups without variance)
+    return np.array([found[x] if x in found else math.nan if x != x else 1.0 if x <= 0 else 0.0 for x in qs.tolist()])
 
 
 def _range_sf(q: float, k: int, df: float) -> float:
