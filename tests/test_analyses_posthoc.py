@@ -261,14 +261,15 @@ def test_studentized_range_of_two_means_is_a_t_tail(df):
     assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-9, abs=0)
 
 
-@pytest.mark.parametrize("df", [1, 1.5, 2, 3, 5, 8, 12, 19, 24, 40, 100, 1000])
+@pytest.mark.parametrize("df", [1, 1.5, 2, 3, 3.1, 3.3, 4.2, 5, 5.5, 8, 12, 19, 24, 40, 100, 1000])
 def test_studentized_range_far_tail_of_two_means(df):
     """The same definition (P(Q > q) = 2·P(t > q/√2), scipy's t) out to q = 1000, where the integrand's mass lies near
     s = 0, below the grid's bulk: to 1e-11 relative (a grid that stopped at a quarter of the mass's peak lost up to
-    1e-8 of p on 12-19 df; one dense only up to 4/q lost 4e-3 of p = .003 on 1 df)."""
+    1e-8 of p on 12-19 df; one dense only up to 4/q lost 4e-3 of p = .003 on 1 df; equal panels near s = 0 on a
+    fractional df between 3 and 5 lost 2e-10)."""
     from statsetter.formulas import studentized_range_sf
 
-    qs = np.array([2, 6, 10, 20, 40, 60, 100, 200, 300, 1000.0])
+    qs = np.array([0.5, 2, 4, 6.18, 10, 20, 40, 60, 100, 200, 300, 1000.0])
     exact = 2 * stats.t.sf(qs / math.sqrt(2), df)
     keep = exact > 1e-280
     assert studentized_range_sf(qs[keep], 2, df) == pytest.approx(exact[keep], rel=1e-11, abs=0)
