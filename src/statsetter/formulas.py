@@ -121,10 +121,9 @@ def studentized_range_quantile(level: float, k: int, df: float) -> float:
     starting value in the form of Copenhaver & Holland (1988; its constants
     recalled from memory — only the start, the root is exact and tested
     against R's qtukey), with bisection as the fallback."""
-    import numpy as np
 
     def gap(q: float) -> float:
-        return 1.0 - (float(_range_tail(np.array([q]), k)[0]) if math.isinf(df) else _range_sf(q, k, df)) - level
+        return 1.0 - float(studentized_range_sf(q, k, df)[0]) - level
 
     a = _q_start(level, k, df)
     b = a * 1.02
@@ -195,13 +194,12 @@ def studentized_range_sf(q: "float | np.ndarray", k: int, df: float) -> "np.ndar
     import numpy as np
 
     qs = np.atleast_1d(np.asarray(q, dtype=float))
-    if math.isinf(df):
-        inner = qs[(qs > 0) & np.isfinite(qs)]
-        found = dict(zip(inner.tolist(), _range_tail(inner, k).tolist())) if len(inner) else {}
-    else:
-        found = {x: _range_sf(x, k, df) for x in qs.tolist() if 0 < x < math.inf}
     # the range is never below 0 (P = 1 at q <= 0) nor infinite (P = 0 at q = inf: groups without variance)
-    return np.array([found[x] if x in found else math.nan if x != x else 1.0 if x <= 0 else 0.0 for x in qs.tolist()])
+    out = np.where(np.isnan(qs), math.nan, np.where(qs > 0, 0.0, 1.0))
+    inner = (qs > 0) & np.isfinite(qs)
+    if inner.any():
+        out[inner] = _range_tail(qs[inner], k) if math.isinf(df) else [_range_sf(x, k, df) for x in qs[inner].tolist()]
+    return out
 
 
 def _range_sf(q: float, k: int, df: float) -> float:
