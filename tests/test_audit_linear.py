@@ -118,11 +118,11 @@ _SPACED_OPERATOR = re.compile(r"\s*+(?:=|<|>|≤|≥)\s*+")  # the definition: a
 @given(st.text(alphabet="= <>≤≥\t\u00a0\u2009\nab1.,(", max_size=30), st.data())
 def test_operators_are_found_as_their_definition_reads(text, data):
     """The spacing check's operators are found operator first (the regex engine's fast scan) and the space before each
-    walked back by hand: the same spans as the one-pattern definition on any text and any part of it."""
-    start = data.draw(st.integers(0, len(text)))
-    end = data.draw(st.integers(start, len(text)))
-    assert parsing._operators(parsing._patterns("."), text, start, end) == [
-        (o.start(), o.end()) for o in _SPACED_OPERATOR.finditer(text, start, end)]
+    walked back by hand, for all the stretches of a statistic (head and parts) in one pass: the same spans as the
+    one-pattern definition run on each stretch in turn, on any text and any stretches of it."""
+    cuts = sorted(data.draw(st.lists(st.integers(0, len(text)), max_size=8)))
+    spans = list(zip(cuts[::2], cuts[1::2]))  # in order, not overlapping (they may touch or be empty)
+    assert parsing._operators(text, spans) == [(o.start(), o.end()) for s, e in spans for o in _SPACED_OPERATOR.finditer(text, s, e)]
 
 
 @settings(max_examples=3_000, deadline=None, database=None)
@@ -263,3 +263,18 @@ def test_audits_in_threads_read_as_one_alone():
         sys.setswitchinterval(interval)
     for name, runs in seen.items():
         assert len(runs) == 120 and all(r == alone[name] for r in runs), name
+
+
+@settings(max_examples=3_000, deadline=None, database=None)
+@given(st.text(alphabet=" -−.,0123456789eE×x^⁻\u2009\u202f", max_size=14), st.integers(0, 500), st.sampled_from(".,"))
+def test_numbers_remembered_are_those_read_afresh(text, start, mark):
+    """A printed form is read once and remembered by its text; its Number at another place is the fresh reading's,
+    moved: the same text, value, decimals and span as reading it anew there."""
+    pat = parsing._patterns(mark)
+    first = pat.to_number(text, 0)
+    again = pat.to_number(text, start)
+    fresh = pat._to_number(text, start)
+    assert again == fresh
+    assert (first is None) == (fresh is None)
+    if fresh is not None and fresh.value == fresh.value:
+        assert (first.text, first.value, first.decimals) == (fresh.text, fresh.value, fresh.decimals)

@@ -178,6 +178,7 @@ class _Patterns:
     def __init__(self, mark: str) -> None:
         num = _number_pattern(mark)
         self.mark = mark
+        self.read: dict[str, tuple[str, float, int, int, int] | None] = {}  # to_number's readings of printed forms, by text
         self.number = re.compile(num)
         self.head = re.compile(
             rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
@@ -213,6 +214,19 @@ class _Patterns:
         return self.boundary if "\\\\" in text else self.prose_boundary
 
     def to_number(self, text: str, start: int) -> Number | None:
+        """The number printed as ``text``, which starts at ``start`` of the paragraph (None: not a number)."""
+        read = self.read.get(text, _UNREAD)
+        if read is _UNREAD:  # each printed form is read once (a manuscript prints ".001", "95" or "2.14" many times)
+            number = self._to_number(text, 0)  # a number's place is start + where it lies in text, whatever start is
+            read = None if number is None else (number.text, number.value, number.decimals, number.start, number.end)
+            if len(self.read) >= _READ_MEMORY:
+                self.read.clear()
+            self.read[text] = read
+        if read is None:
+            return None
+        return _new_number(read[0], read[1], read[2], start + read[3], start + read[4])
+
+    def _to_number(self, text: str, start: int) -> Number | None:
         raw = text.strip()
         plain = _PLAIN.fullmatch(raw) if self.mark == "." else None
         if plain is not None:  # "2.14", ".039", "38", "−.26": float() reads these exactly as Decimal would
@@ -224,7 +238,7 @@ class _Patterns:
             return _new_number(raw, value, len(body) - point - 1 if point >= 0 else 0, s, s + len(raw))
         power = _EXPONENT_SPLIT.match(raw) if ("e" in raw or "E" in raw or "10" in raw) else None
         if power is not None and power.group("m").strip():
-            base = self.to_number(power.group("m"), start)
+            base = self._to_number(power.group("m"), start)
             exponent = (power.group("e1") or power.group("e2")).translate(_SUPERSCRIPT)
             if base is None or abs(int(exponent)) > 300:  # 1e400: not a number anyone computed
                 return None
@@ -260,7 +274,16 @@ class _Patterns:
 # 40,000 Numbers per 1,000 pages)
 _new_number = _unchecked_maker(Number, {}, ("text", "value", "decimals", "start", "end"))
 _new_p = _unchecked_maker(PValue, {}, ("op", "number", "start", "end", "symbol_start", "symbol_text", "adjusted"))
+_new_interval = _unchecked_maker(Interval, {}, ("level", "low", "high", "start", "end"))
 _new_effect = _unchecked_maker(Effect, {}, ("name", "number", "start", "end", "symbol_start", "symbol_text", "ci"))
+def _digits(raw: str, start: int) -> Number:
+    """A number of digits with at most one decimal point (no sign, no space), as `_Patterns.to_number` reads it."""
+    point = raw.find(".")
+    return _new_number(raw, float(raw), len(raw) - point - 1 if point >= 0 else 0, start, start + len(raw))
+
+
+_UNREAD = object()
+_READ_MEMORY = 16384  # printed forms remembered (then forgotten all at once): a few MB at most
 _PLAIN = re.compile(r"(?:([-−–‐])\s?)?(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})")  # a sign, as the general path reads it, and digits
 _SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789")
 _CACHE: dict[str, _Patterns] = {}
@@ -299,7 +322,7 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
     if pat.mark == ".":
         plain = _DF_PLAIN.fullmatch(inner)
         if plain is not None:
-            return tuple(pat.to_number(plain.group(g), start + plain.start(g)) for g in (1, 2) if plain.group(g) is not None), None  # type: ignore[misc]
+            return tuple(_digits(plain.group(g), start + plain.start(g)) for g in (1, 2) if plain.group(g) is not None), None
     n = None
     found = pat.n.search(inner)
     rest = inner
@@ -508,9 +531,7 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     if symbol in ("t", "r", "rs") and len(dfs) == 2 and inner and pat.mark == "." and re.fullmatch(r"\s*\d{1,3},\d{3}\s*", inner):
         one = pat.to_number(inner, m.start("inner"))  # t(1,198): one df with a thousands comma, as a t or r has one
         dfs = (one,) if one is not None else dfs
-    rep = Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, m.group("op"), value)
-    rep.operators = _operators(pat, text, m.start(), value.end)
-    return rep
+    return Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, m.group("op"), value)
 
 
 _OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
@@ -527,22 +548,26 @@ def _operator_spans(text: str) -> tuple[list[int], list[int]]:
     return starts, ends
 
 
-def _operators(pat: _Patterns, text: str, start: int, end: int) -> list[tuple[int, int]]:
-    """(start, end) of each operator between ``start`` and ``end`` with the white space on each side of it (the space
-    before it back to the end of the operator before), as the style's spacing check reads them. The text's operators
-    are found once (a statistic asks for those of its head and of each part of its clause): white space holds no
-    operator, so those of a stretch are the text's that start in it, their white space cut at its end."""
+def _operators(text: str, spans: list[tuple[int, int]]) -> list[tuple[int, int]]:
+    """(start, end) of each operator in the stretches ``spans`` (in order, not overlapping) with the white space on each
+    side of it (the space before it back to the end of the operator before, or the stretch's start), as the style's
+    spacing check reads them. The text's operators are found once (a paragraph's statistics ask in turn): white space
+    holds no operator, so those of a stretch are the text's that start in it, their white space cut at its end."""
     starts, ends = _remembered(_LAST_OPERATORS, text, lambda: _operator_spans(text))
     out = []
-    floor = start
-    k = bisect.bisect_left(starts, start)
-    while k < len(starts) and starts[k] < end:
-        at = starts[k]
-        while at > floor and text[at - 1].isspace():
-            at -= 1
-        floor = min(ends[k], end)
-        out.append((at, floor))
-        k += 1
+    count = len(starts)
+    k = bisect.bisect_left(starts, spans[0][0]) if spans else count
+    for start, end in spans:
+        while k < count and starts[k] < start:
+            k += 1
+        floor = start
+        while k < count and starts[k] < end:
+            at = starts[k]
+            while at > floor and text[at - 1].isspace():
+                at -= 1
+            floor = min(ends[k], end)
+            out.append((at, floor))
+            k += 1
     return out
 
 
@@ -579,6 +604,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
     events.sort(key=lambda e: e[0])
+    spans = [(rep.start, rep.end)]  # the head (the operators of each part read are added to its own)
     covered = -1  # the furthest end of the matches read so far: each began at or before this event (events in order of start)
     last_end = rep.end
     ci = None
@@ -614,8 +640,9 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
             continue
         covered = max(covered, m.end())
         last_end = max(last_end, m.end(), ci.end if kind == "ci" and ci is not None else 0)
-        rep.operators += _operators(pat, text, m.start(), m.end())
+        spans.append((m.start(), m.end()))
     rep.end = last_end
+    rep.operators = _operators(text, spans)
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
@@ -628,4 +655,4 @@ def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
     end = m.end()
     if m.group("a") is None and text[m.start() - 1 : m.start()] == "(" and text[end : end + 1] == ")":
         end += 1  # "(95% CI, 0.04–1.31)": the closing parenthesis belongs to the interval
-    return Interval(level.value / 100, low, high, m.start(), end)
+    return _new_interval(level.value / 100, low, high, m.start(), end)
