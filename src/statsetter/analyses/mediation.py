@@ -53,8 +53,7 @@ def _resampled(Xa: "np.ndarray", M: "np.ndarray", Xb: "np.ndarray", yb: "np.ndar
     for start in range(0, n_boot, chunk):
         size = min(chunk, n_boot - start)
         rows = rng.integers(0, n, (size, n))
-        counts = np.zeros((size, n))
-        np.add.at(counts, (np.repeat(np.arange(size), n), rows.ravel()), 1.0)
+        counts = np.bincount((rows + (np.arange(size) * n)[:, None]).ravel(), minlength=size * n).reshape(size, n).astype(float)
         a = np.linalg.solve((counts @ cross_a).reshape(size, pa, pa), np.einsum("bn,npk->bpk", counts, rhs_a))[:, 1, :]
         b = np.linalg.solve((counts @ cross_b).reshape(size, pb, pb), (counts @ rhs_b)[:, :, None])[:, 2:2 + k, 0]
         out[start:start + size] = a * b
