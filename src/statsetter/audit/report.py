@@ -27,7 +27,7 @@ from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio,
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
-from .word import restyled
+from .word import _UNMADE, house_text, restyled
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "CAUTION"]
 
@@ -95,10 +95,10 @@ class Entry:
                 "recomputed": self.checked}
 
 
-def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Finding] = ()) -> str:
-    """The statistic restyled. A p the audit found not to follow from the
-    statistic is never repeated: the suggestion carries the p recomputed from
-    the printed statistic and df, and says so."""
+def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Finding] = (), house: "StyledText | None | object" = _UNMADE) -> str:
+    """The statistic restyled (``house``: its `house_text`, when made already). A p the audit found not to follow
+    from the statistic is never repeated: the suggestion carries the p recomputed from the printed statistic and df,
+    and says so."""
     if rep.symbol is None and not rep.effects:
         if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
             return ""
@@ -109,9 +109,13 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         else:  # a threshold keeps the decimals it was given: "p < .05", never "p < .050"
             op, text = {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op), num.number(rep.p.number.value, "p", held)
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
+    doubted = any(f.code == "p-does-not-follow" for f in findings)
+    if not doubted:
+        new = house_text(rep, style, alpha) if house is _UNMADE else house
+        return new.plain() if isinstance(new, StyledText) else ""  # a record the renderer cannot take: no suggestion
     try:
         record = to_record(rep, alpha, style)
-        if any(f.code == "p-does-not-follow" for f in findings) and record.statistic is not None and record.statistic.df:
+        if doubted and record.statistic is not None and record.statistic.df:
             recomputed = p_from_statistic(record.statistic.symbol, record.statistic.value, record.statistic.df)
             record = replace(record, p=recomputed, precision={k: v for k, v in record.precision.items() if k != "p"})
             return render(record, "stats", style).plain() + " (p recomputed)"
@@ -283,7 +287,7 @@ def _audit_units(
 ) -> list[Entry]:
     resolved = load_style(style)
     mark = reading_mark(units, resolved, decimal_mark)[0]
-    entries, reps = [], []
+    entries, reps, houses = [], [], []
     italic_seen = False  # does the manuscript italicise any statistical symbol?
     for unit in units:
         long = _long_number(unit.text)
@@ -341,15 +345,17 @@ def _audit_units(
             if said is not None:  # the text says the test was one-sided, and the p fits one
                 findings = [f for f in findings if f.code != "one-sided"]
                 notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")
-        suggestion = _suggest(rep, resolved, alpha, findings) if findings or suggest_all else ""
+        house = house_text(rep, resolved, alpha) if restyle and local is rep and (findings or suggest_all) else _UNMADE  # made once for both
+        suggestion = _suggest(rep, resolved, alpha, findings, house) if findings or suggest_all else ""
         entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", checked))
         reps.append(local)
+        houses.append(house)
     if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
         entries = [_without(e, "italics", suggest_all) for e in entries]
     if restyle:  # a table row's bare numbers are never rewritten
         entries = [replace(e, revision=new, kept=why) for e, (new, why) in
-                   ((e, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic) if rep is not None else (None, ""))
-                    for e, rep in zip(entries, reps))]
+                   ((e, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic, house) if rep is not None else (None, ""))
+                    for e, rep, house in zip(entries, reps, houses))]
     return entries
 
 

@@ -26,7 +26,7 @@ if TYPE_CHECKING:
     from ..style.profile import Style
     from .report import Entry
 
-__all__ = ["annotate", "restyled", "revise", "AUTHOR"]
+__all__ = ["annotate", "house_text", "restyled", "revise", "AUTHOR"]
 
 AUTHOR = "statsetter"
 _W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
@@ -45,19 +45,31 @@ _P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
 # -- the restyled text of one statistic ---------------------------------------------
 
 
-def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding], read_mark: str | None = None,
-             italic: Sequence[tuple[int, int]] | None = None) -> tuple[StyledText | None, str]:
-    """The statistic in the house style for a revision, or None and why not.
-
-    The author's numbers are kept (rounded only where the style rounds); a
-    p given as a threshold or as zero may become the exact p the style asks
-    for unless a finding doubts the p."""
+def house_text(rep: Reported, style: "Style", alpha: float) -> StyledText | None:
+    """The statistic as the style writes it (its numbers to their printed precision), or None when the renderer
+    cannot take its record (an impossible value)."""
     from ..rendering.sentences import render
     from .checks import to_record
 
     try:
-        new = render(to_record(rep, alpha, style), "stats", style)
-    except Exception:  # noqa: BLE001 - a record the renderer cannot take (an impossible value): left as typed
+        return render(to_record(rep, alpha, style), "stats", style)
+    except Exception:  # noqa: BLE001 - a record the renderer cannot take: no text in the style
+        return None
+
+
+_UNMADE = object()  # restyled's house text not made beforehand
+
+
+def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding], read_mark: str | None = None,
+             italic: Sequence[tuple[int, int]] | None = None, house: "StyledText | None | object" = _UNMADE) -> tuple[StyledText | None, str]:
+    """The statistic in the house style for a revision, or None and why not;
+    ``house`` is `house_text` of the statistic when the caller made it already.
+
+    The author's numbers are kept (rounded only where the style rounds); a
+    p given as a threshold or as zero may become the exact p the style asks
+    for unless a finding doubts the p."""
+    new = house_text(rep, style, alpha) if house is _UNMADE else house
+    if not isinstance(new, StyledText):  # left as typed
         return None, "the statistic cannot be restyled"
     plain = new.plain()
     old = rep.text
