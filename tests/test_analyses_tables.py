@@ -117,3 +117,33 @@ def test_anova_against_pingouin(penguins, variant):
 def test_bad_input(penguins, call, message):
     with pytest.raises(InputError, match=message):
         call(penguins)
+
+
+def test_cross_counts_are_pandas_crosstab():
+    """The χ² and Fisher tables are counted in one pass (statsetter.analyses._common.cross_counts); on every pair of
+    columns with at most 12 levels of pingouin's penguins and tips data (text, numbers, booleans), as they are and as
+    categoricals in reversed order with an unused category, the same levels in the same order and the same counts as
+    pandas.crosstab."""
+    import itertools
+
+    import numpy as np
+    import pandas as pd
+
+    from statsetter.analyses import _common
+
+    compared = 0
+    for name in ("penguins", "tips"):
+        frame = pg.read_dataset(name)
+        columns = [c for c in frame.columns if frame[c].nunique() <= 12]
+        for c in list(columns):
+            levels = sorted(frame[c].dropna().unique().tolist(), reverse=True)
+            frame[f"{c} (categorical)"] = pd.Categorical(frame[c], categories=levels + ["unused"] if isinstance(levels[0], str) else levels + [-1])
+            columns.append(f"{c} (categorical)")
+        for a, b in itertools.permutations(columns, 2):
+            data = frame[[a, b]].dropna()
+            expected, found = pd.crosstab(data[a], data[b]), _common.cross_counts(data, a, b)
+            assert list(found.index) == list(expected.index) and list(found.columns) == list(expected.columns), (name, a, b)
+            assert (found.index.name, found.columns.name) == (a, b)
+            assert np.array_equal(found.to_numpy(), expected.to_numpy()) and found.to_numpy().dtype == expected.to_numpy().dtype, (name, a, b)
+            compared += 1
+    assert compared == 30 + 90  # penguins: 3 such columns and their categoricals (6 × 5 pairs); tips: 5 (10 × 9)

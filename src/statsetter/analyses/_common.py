@@ -160,6 +160,25 @@ def grouped(df: "pd.DataFrame", outcome: str, group: str, test: str, min_n: int 
     return levels, samples, missing
 
 
+def cross_counts(data: "pd.DataFrame", row: str, column: str) -> "pd.DataFrame":
+    """The counts of ``row`` × ``column`` (no missing values) as pandas' crosstab lays them out — a categorical's
+    categories in their order, other values sorted, categories without a case left out, a pair of levels without a
+    case counted 0 — counted in one pass (crosstab's pivot machinery took 10-40 ms a table)."""
+    import numpy as np
+    import pandas as pd
+
+    def coded(s: "pd.Series") -> tuple["np.ndarray", "pd.Index"]:
+        if isinstance(s.dtype, pd.CategoricalDtype):
+            return s.cat.codes.to_numpy().astype(np.intp), s.cat.categories
+        codes, uniques = pd.factorize(s, sort=True)
+        return codes, pd.Index(uniques)
+
+    (rc, rows), (cc, cols) = coded(data[row]), coded(data[column])
+    counts = np.bincount(rc * len(cols) + cc, minlength=len(rows) * len(cols)).reshape(len(rows), len(cols))
+    keep_rows, keep_cols = counts.sum(axis=1) > 0, counts.sum(axis=0) > 0
+    return pd.DataFrame(counts[keep_rows][:, keep_cols], index=rows[keep_rows].rename(row), columns=cols[keep_cols].rename(column))
+
+
 def two_levels(data: "pd.DataFrame", group: str, groups: Sequence[object] | None, test: str, present: "list[Any] | None" = None) -> list[Any]:
     """The two groups to compare: the ones named (by label or code), else the
     only two present, in code order (``present``: the groups found already)."""

@@ -54,14 +54,13 @@ def chi_square(
     correction to a 2 × 2 table (stated); the default is Pearson's χ². Cells
     with expected counts below 5 are noted, and for a 2 × 2 table Fisher's exact
     test (conditional maximum-likelihood odds ratio with its exact CI) is added."""
-    import pandas as pd
     from scipy import stats
 
     if variant not in ("pearson", "yates"):
         raise InputError(f"variant: {variant!r} is not pearson or yates")
     yates = variant == "yates"
     data, missing = c.listwise(df, [row, column])
-    table = pd.crosstab(data[row], data[column])
+    table = c.cross_counts(data, row, column)
     r, k = table.shape
     if r < 2 or k < 2:
         raise InputError(f"{row} × {column}: a {r} × {k} table; a test of independence needs at least 2 × 2")
@@ -118,10 +117,9 @@ def fisher_exact(
     """Fisher's exact test of a 2 × 2 table of two categorical columns, with
     the conditional maximum-likelihood odds ratio and its exact CI (the odds
     of the first column category in the first row category over the second)."""
-    import pandas as pd
 
     data, missing = c.listwise(df, [row, column])
-    table = pd.crosstab(data[row], data[column])
+    table = c.cross_counts(data, row, column)
     if table.shape != (2, 2):
         raise InputError(f"{row} × {column}: a {table.shape[0]} × {table.shape[1]} table; Fisher's exact test here needs 2 × 2")
     return fisher_exact_table(table.to_numpy(), c.variables({"row": row, "column": column}, labels), level, missing, alternative)
