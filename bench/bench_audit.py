@@ -5,13 +5,15 @@ The manuscript is the invented test corpus (tests/audit_corpus.py) grown to
 about 150 words between them (about 500 words a page), each drawn anew from
 invented sentence parts, and a results table (t, df, p per row) about every
 20 pages. Timed: the whole
-audit (reading, parsing, checks, restyled suggestions), median of 3; the same
-for a document twice as long; and, as baselines in the same run (paired),
-python-docx merely reading every paragraph's text of each file, and the
-floor of the job: lxml reading the document's XML into paragraph texts plus
-one pass of a statistic-head regex over them.
-Targets: <= 10 s for 1,000 pages; doubling <= 2.3x the time; the issue's
-target of <= 4x the lxml + regex floor is reported, not yet met.
+audit (reading, parsing, checks, restyled suggestions); the same for a
+document twice as long; and, as baselines in the same run (paired: the two
+take turns), python-docx merely reading every paragraph's text of each file
+(three pairs), and the floor of the job: lxml reading the document's XML
+into paragraph texts plus one pass of a statistic-head regex over them
+(seven pairs: the floor is short and the machine noisy). The audit's time
+and its doubling are the medians of its runs paired with the floor.
+Targets: <= 10 s for 1,000 pages; doubling <= 2.1x the time (the issue's);
+<= 4x the lxml + regex floor (reported; not yet met).
 """
 
 from __future__ import annotations
@@ -120,14 +122,14 @@ def main() -> None:
         count = document(path, copies)
         words = sum(len(p.text.split()) for p in docx.Document(str(path)).paragraphs)
         base, ours, ratio = paired(lambda: [p.text for p in docx.Document(str(path)).paragraphs], lambda: audit_file(path), 3)
-        low, again, floor_ratio = paired(lambda: floor(path), lambda: audit_file(path), 3)
+        low, again, floor_ratio = paired(lambda: floor(path), lambda: audit_file(path), 7)  # the floor is short and noisy: seven pairs
         found = len(audit_file(path))
-        results.append(ours)
+        results.append(again)
         floors.append(low)
         print(f"{words / 500:,.0f} pages ({words:,} words), {count:,} statistics ({found:,} found): audit {ours:.2f} s, "
               f"python-docx reading the paragraphs' text {base:.2f} s, ratio {ratio:.2f}; "
-              f"lxml + one regex (floor) {low:.2f} s, ratio {floor_ratio:.1f} (target 4)")
-    print(f"doubling the document: {results[1] / results[0]:.2f}x the time (target <= 2.3; the floor's own doubling {floors[1] / floors[0]:.2f}x); "
+              f"lxml + one regex (floor) {low:.2f} s against the audit's {again:.2f} s, ratio {floor_ratio:.1f} (target 4)")
+    print(f"doubling the document: {results[1] / results[0]:.2f}x the time (target <= 2.1; the floor's own doubling {floors[1] / floors[0]:.2f}x); "
           f"1,000 pages in {results[0]:.2f} s (target <= 10)")
 
 
