@@ -348,8 +348,9 @@ def _audit_units(
         house = house_text(rep, resolved, alpha) if restyle and local is rep and (findings or suggest_all) else _UNMADE  # made once for both
         suggestion = _suggest(rep, resolved, alpha, findings, house) if findings or suggest_all else ""
         entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", checked))
-        reps.append(local)
-        houses.append(house)
+        if restyle:  # what a revision needs (held only then: the parsed statistics are most of an audit's memory)
+            reps.append(local)
+            houses.append(house)
     if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
         entries = [_without(e, "italics", suggest_all) for e in entries]
     if restyle:  # a table row's bare numbers are never rewritten
