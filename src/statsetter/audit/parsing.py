@@ -276,6 +276,8 @@ _new_number = _unchecked_maker(Number, {}, ("text", "value", "decimals", "start"
 _new_p = _unchecked_maker(PValue, {}, ("op", "number", "start", "end", "symbol_start", "symbol_text", "adjusted"))
 _new_interval = _unchecked_maker(Interval, {}, ("level", "low", "high", "start", "end"))
 _new_effect = _unchecked_maker(Effect, {}, ("name", "number", "start", "end", "symbol_start", "symbol_text", "ci"))
+
+
 def _digits(raw: str, start: int) -> Number:
     """A number of digits with at most one decimal point (no sign, no space), as `_Patterns.to_number` reads it."""
     point = raw.find(".")
