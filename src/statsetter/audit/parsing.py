@@ -278,12 +278,6 @@ _new_interval = _unchecked_maker(Interval, {}, ("level", "low", "high", "start",
 _new_effect = _unchecked_maker(Effect, {}, ("name", "number", "start", "end", "symbol_start", "symbol_text", "ci"))
 
 
-def _digits(raw: str, start: int) -> Number:
-    """A number of digits with at most one decimal point (no sign, no space), as `_Patterns.to_number` reads it."""
-    point = raw.find(".")
-    return _new_number(raw, float(raw), len(raw) - point - 1 if point >= 0 else 0, start, start + len(raw))
-
-
 _UNREAD = object()
 _READ_MEMORY = 16384  # printed forms remembered (then forgotten all at once): a few MB at most
 _PLAIN = re.compile(r"(?:([-−–‐])\s?)?(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})")  # a sign, as the general path reads it, and digits
@@ -324,7 +318,7 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
     if pat.mark == ".":
         plain = _DF_PLAIN.fullmatch(inner)
         if plain is not None:
-            return tuple(_digits(plain.group(g), start + plain.start(g)) for g in (1, 2) if plain.group(g) is not None), None
+            return tuple(pat.to_number(plain.group(g), start + plain.start(g)) for g in (1, 2) if plain.group(g) is not None), None  # type: ignore[misc]
     n = None
     found = pat.n.search(inner)
     rest = inner
