@@ -147,3 +147,40 @@ def test_cross_counts_are_pandas_crosstab():
             assert np.array_equal(found.to_numpy(), expected.to_numpy()) and found.to_numpy().dtype == expected.to_numpy().dtype, (name, a, b)
             compared += 1
     assert compared == 30 + 90  # penguins: 3 such columns and their categoricals (6 × 5 pairs); tips: 5 (10 × 9)
+
+
+def test_listwise_is_pandas_dropna():
+    """Rows complete on the named columns (statsetter.analyses._common.listwise, which reads each column's missing values
+    itself and takes rows by position) are those of pandas' own ``df[names].dropna()``, column types kept, unused
+    categories of a categorical dropped: on every pair and triple of columns of pingouin's penguins (missing numbers and
+    text) and of the same data with text as categoricals, numbers as nullable Int64 and Float64, and text as object
+    columns with None."""
+    import itertools
+
+    import pandas as pd
+
+    from statsetter.analyses import _common
+
+    frame = pg.read_dataset("penguins")
+    frame["sex (categorical)"] = pd.Categorical(frame["sex"], categories=["male", "female", "unused"])
+    frame["species (categorical)"] = pd.Categorical(frame["species"])
+    frame["body mass (Int64)"] = frame["body_mass_g"].astype("Int64")
+    frame["bill (Float64)"] = frame["bill_length_mm"].astype("Float64")
+    frame["sex (object)"] = frame["sex"].astype(object).where(frame["sex"].notna(), None)
+    compared = dropped = 0
+    for size in (1, 2, 3):
+        for names in itertools.combinations(frame.columns, size):
+            expected = frame[list(names)].dropna()
+            for n in names:
+                if isinstance(expected[n].dtype, pd.CategoricalDtype):
+                    expected[n] = expected[n].cat.remove_unused_categories()
+            found, note = _common.listwise(frame, list(names))
+            pd.testing.assert_frame_equal(found, expected, check_exact=True)
+            assert (f"{len(frame) - len(found)} of {len(frame)} rows dropped" in note.text) == (len(found) < len(frame))
+            compared += 1
+            dropped += len(found) < len(frame)
+    assert compared == 12 + 66 + 220 and dropped > 200
+    with pytest.raises(InputError, match="bill_length_mm: every value is missing"):
+        _common.listwise(frame.assign(bill_length_mm=float("nan")), ["species", "bill_length_mm"])
+    with pytest.raises(InputError, match="2 columns have this name"):
+        _common.listwise(pd.concat([frame[["species"]], frame[["species"]]], axis=1), ["species"])

@@ -33,20 +33,24 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
 
 def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note]:
     """Rows complete on ``names``, and a note saying how many were dropped."""
+    import numpy as np
     import pandas as pd
 
-    for n in names:
-        column(df, n)
+    columns = [column(df, n) for n in names]
     if len(set(names)) != len(names):
         raise InputError(f"{', '.join(names)}: the same variable is named twice")
-    sub = df[list(names)]
-    absent = {n: int(sub[n].isna().sum()) for n in names}
-    for n, count in absent.items():
-        if count == len(sub):
+    for n, s in zip(names, columns):
+        if s.ndim > 1:
+            raise InputError(f"{n}: {s.shape[1]} columns have this name; rename them so that each is named once")
+    sub = df.take([df.columns.get_loc(n) for n in names], axis=1)  # by position: a quarter of df[names]'s time
+    masks = [_missing(s) for s in columns]
+    for n, mask in zip(names, masks):
+        if (0 if mask is None else int(np.count_nonzero(mask))) == len(sub):
             raise InputError(f"{n}: every value is missing")
-    complete = sub.dropna() if any(absent.values()) else sub
-    for n in names:  # a category with no complete row is not a group of the analysis
-        if isinstance(complete[n].dtype, pd.CategoricalDtype) and len(complete[n].cat.categories) > complete[n].nunique():
+    gaps = [m for m in masks if m is not None and m.any()]
+    complete = sub.take(np.flatnonzero(~np.logical_or.reduce(gaps))) if gaps else sub  # the rows dropna keeps
+    for n, s in zip(names, columns):  # a category with no complete row is not a group of the analysis
+        if isinstance(s.dtype, pd.CategoricalDtype) and len(complete[n].cat.categories) > complete[n].nunique():
             complete = complete.assign(**{n: complete[n].cat.remove_unused_categories()})
     dropped = len(sub) - len(complete)
     if dropped:
@@ -54,6 +58,19 @@ def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", 
     else:
         note = Note("missing", f"No rows dropped for missing values on {', '.join(names)} (n = {len(sub)}).")
     return complete, note
+
+
+def _missing(s: "pd.Series") -> "np.ndarray | None":
+    """Which values of ``s`` are missing, as ``isna`` says (None: its dtype holds no missing value; a float column read
+    by numpy directly)."""
+    import numpy as np
+
+    kind = s.dtype.kind if isinstance(s.dtype, np.dtype) else ""
+    if kind in ("i", "u", "b"):
+        return None
+    if kind == "f":
+        return np.isnan(s.to_numpy())
+    return np.asarray(s.array.isna())
 
 
 def variables(roles: Mapping[str, str], labels: Mapping[str, str] | None) -> tuple[Variable, ...]:
