@@ -58,8 +58,8 @@ def test_statsmodels_mixedlm_equals_the_analysis():
     model, *coefficients = to_records(fit)
     ours = mixed_model(ORTHODONT, "distance", ["age", "Sex"], "Subject", reference={"Sex": "Female"})
     assert model.kind == "mixed_model" and model.details["method"] == "REML" and model.details["groups"] == 27 and model.n == 108
-    for key in ("log_likelihood", "aic", "bic", "variance_intercept", "variance_residual"):
-        assert model.details[key] == pytest.approx(ours[0].details[key], rel=1e-6)
+    for key in ("log_likelihood", "aic", "bic", "variance_intercept", "variance_residual"):  # statsmodels' optimiser stops
+        assert model.details[key] == pytest.approx(ours[0].details[key], rel=1e-4)  # 1.6e-5 short of the exact maximum
     by_term = {o.details["term"]: o for o in ours[1:]}
     assert sorted(c.details["term"] for c in coefficients) == sorted(by_term) == ["Intercept", "Sex[Male]", "age"]
     for c in coefficients:
@@ -71,6 +71,9 @@ def test_statsmodels_mixedlm_equals_the_analysis():
                                                       "reference": {"Sex": "Female"}})
     assert merged[0].effects[0].name == "ICC" and merged[0].effects[0].value == pytest.approx(ours[0].effects[0].value, rel=1e-9)
     assert "z = " in render(merged[2], "stats").plain()
+    with pytest.raises(InputError, match="do not reproduce"):  # other data: the coefficients move far beyond the optimisers' 1e-5
+        to_records(fit, data=ORTHODONT.assign(distance=ORTHODONT["distance"] * 1.01), columns={"outcome": "distance", "predictors": ["age", "Sex"],
+                                                                                          "group": "Subject", "reference": {"Sex": "Female"}})
 
 
 def test_statsmodels_bunches_need_their_source():

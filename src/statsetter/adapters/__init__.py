@@ -100,7 +100,7 @@ def to_records(
         ours = adapter.analysis(frame, cols, ctx, mine)
     except KeyError as exc:
         raise InputError(f"columns: {adapter.name} needs the column argument {exc.args[0]!r}") from None
-    return merge(mine, ours, ctx, adapter.library, adapter.key)
+    return merge(mine, ours, ctx, adapter.library, adapter.key, adapter.leading)
 
 
 # The roles each kind's sentence names; an object that carries no names gets them from labels=.

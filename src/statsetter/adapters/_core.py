@@ -120,6 +120,7 @@ def merge(
     ctx: Context,
     library: str,
     key: Callable[[Result], Any] | None = None,
+    leading: tuple[str, float] = ("statistic", AGREE),
 ) -> list[Result]:
     """The analysis' records with the object's numbers put back in."""
     if key is not None:
@@ -138,7 +139,7 @@ def merge(
         if m is None:  # computed from the data only (a model record the object lacks, say)
             out.append(replace(o, notes=o.notes + (Note("method", f"Not in the {ctx.source} result; computed by statsetter from the data given."),)))
             continue
-        _check(m, o, ctx)
+        _check(m, o, ctx, *leading)
         effects = list(o.effects)
         for e in m.effects:
             at = next((i for i, x in enumerate(effects) if x.name == e.name), None)
@@ -177,11 +178,14 @@ def _statistic(m: Result, o: Result):  # type: ignore[no-untyped-def]
     return m.statistic
 
 
-def _check(m: Result, o: Result, ctx: Context) -> None:
+def _check(m: Result, o: Result, ctx: Context, first: str = "statistic", agree: float = AGREE) -> None:
     """The object's leading number (statistic, else estimate, else first
-    effect, else p) must be what the data give."""
+    effect, else p; the estimate first when ``first`` says so) must be what
+    the data give, to ``agree`` relative."""
     pairs: list[tuple[str, float, float]] = []
-    if m.statistic is not None and o.statistic is not None:
+    if first == "estimate" and m.estimate is not None and o.estimate is not None and m.estimate.name == o.estimate.name:
+        pairs.append((m.estimate.name, m.estimate.value, o.estimate.value))
+    elif m.statistic is not None and o.statistic is not None:
         pairs.append((m.statistic.symbol, m.statistic.value, o.statistic.value))
     elif m.estimate is not None and o.estimate is not None and m.estimate.name == o.estimate.name:
         pairs.append((m.estimate.name, m.estimate.value, o.estimate.value))
@@ -193,7 +197,7 @@ def _check(m: Result, o: Result, ctx: Context) -> None:
     if not pairs and m.p is not None and o.p is not None:
         pairs.append(("p", m.p, o.p))
     for name, a, b in pairs:
-        if not close(a, b):
+        if not close(a, b, agree):
             raise InputError(
                 f"the data given do not reproduce the {ctx.source} result ({name} = {a:.6g} in the object, "
                 f"{b:.6g} from the data); pass the data and options it was computed with"
@@ -230,3 +234,4 @@ class Adapter:
     design: str | None = None  # how samples become a frame (see frame_from_samples)
     analysis: Callable[["pd.DataFrame", dict[str, Any], Context, list[Result]], list[Result]] | None = None
     key: Callable[[Result], Any] | None = None
+    leading: tuple[str, float] = ("statistic", AGREE)  # the number the data must reproduce (see _check), and how closely

@@ -1,31 +1,45 @@
-"""Multilevel (mixed-effects) linear models through statsmodels' MixedLM.
+"""Multilevel (mixed-effects) linear models.
 
 `mixed_model` fits the outcome on fixed predictors with a random intercept
-per group and, on request, random slopes. The model record gives the
-estimation method (REML or ML), the log-likelihood, AIC and BIC (counted as
-R's nlme counts them: the fixed coefficients plus the variance parameters,
-BIC with n − p observations under REML), the variance components and the
-ICC of the intercept-only model; one record per fixed effect gives B, SE,
-z, p and the Wald CI — statsmodels tests fixed effects with z (a normal
-approximation; R's lme uses t with containment df, which gives slightly
-larger p in small samples), said in every record. `compare_models` fits two
-nested models by ML and gives the likelihood-ratio test.
+per group and, on request, random slopes. A random-intercept model is fitted
+here by its profiled likelihood, maximised exactly (`_intercept_fit`: R's
+nlme to 1e-9 where its own optimiser stops); with random slopes, by
+statsmodels' MixedLM. The model record gives the estimation method (REML or
+ML), the log-likelihood, AIC and BIC (counted as R's nlme counts them: the
+fixed coefficients plus the variance parameters, BIC with n − p observations
+under REML), the variance components and the ICC of the intercept-only
+model; one record per fixed effect gives B, SE, z, p and the Wald CI —
+fixed effects are tested with z (a normal approximation, as statsmodels
+tests them; R's lme uses t with containment df, which gives slightly larger
+p in small samples), said in every record. `compare_models` fits two nested
+models by ML and gives the likelihood-ratio test.
 """
-
 from __future__ import annotations
 
 import math
-from typing import TYPE_CHECKING, Literal, Mapping, Sequence
+from typing import TYPE_CHECKING, Literal, Mapping, NamedTuple, Sequence
 
 from ..errors import InputError
 from ..records import EffectSize, Estimate, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 
 if TYPE_CHECKING:
+    import numpy as np
     import pandas as pd
 
 Method = Literal["REML", "ML"]
-Z_NOTE = Note("method", "Fixed effects tested with z (statsmodels' normal approximation; R's lme uses t with containment df).")
+Z_NOTE = Note("method", "Fixed effects tested with z (a normal approximation, as statsmodels tests them; R's lme uses t with containment df).")
+
+
+class _Fitted(NamedTuple):
+    """What the records need of a fitted model: fixed effects and their SEs, the random effects' covariance, the
+    residual variance and the log-likelihood (statsmodels' results have these attributes too)."""
+
+    fe_params: "np.ndarray"
+    bse_fe: "np.ndarray"
+    cov_re: "np.ndarray"
+    scale: float
+    llf: float
 
 
 def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: str, slopes: Sequence[str], method: Method,  # type: ignore[no-untyped-def]
@@ -33,7 +47,6 @@ def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: s
     import warnings
 
     import numpy as np
-    from statsmodels.regression.mixed_linear_model import MixedLM
 
     from .regression import _design
 
@@ -43,6 +56,16 @@ def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: s
         X = np.asarray(X, dtype=float)
     else:
         X, meta, coding = np.ones((len(y), 1)), [], []
+    if not slopes:  # a random intercept: its profiled likelihood, maximised exactly
+        if len(y) <= X.shape[1]:
+            raise InputError(f"{outcome}: {len(y)} complete rows for {X.shape[1]} fixed coefficients; a mixed model needs more rows")
+        try:
+            fit, problems = _intercept_fit(y, X, data[group].to_numpy(), method == "REML")
+        except InputError as exc:
+            raise InputError(f"{outcome}: {exc}") from None
+        return fit, meta, coding, problems, X.shape[1], 1
+    from statsmodels.regression.mixed_linear_model import MixedLM
+
     Z = np.column_stack([np.ones(len(y)), *[c.numeric(data, s).to_numpy(dtype=float) for s in slopes]])
     with warnings.catch_warnings(record=True) as caught:
         warnings.simplefilter("always")
@@ -50,6 +73,68 @@ def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: s
     problems = [str(w.message).split("\n")[0] for w in caught if "converge" in str(w.message).lower() or "singular" in str(w.message).lower()
                 or "boundary" in str(w.message).lower()]
     return fit, meta, coding, problems, X.shape[1], Z.shape[1]
+
+
+def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml: bool) -> tuple[_Fitted, list[str]]:
+    """A random-intercept model y = Xβ + u_group + e by ML or REML, with the variance ratio θ = τ²/σ² as the one
+    parameter: for each θ, β and σ² have closed forms (generalised least squares through each group's sums, as in
+    Searle, Casella & McCulloch, *Variance Components*, 1992, ch. 6), and the profiled log-likelihood
+    −½[Σ log(1 + n_i θ) + d log(2π q(θ)/d) + d (+ log|A(θ)| under REML)], d = n (ML) or n − p (REML), q the
+    generalised residual sum of squares and A = X'Ṽ⁻¹X, is maximised where its derivative in θ (in closed form)
+    is zero: Brent's root to full precision, from the sign changes on a grid of θ from 10⁻⁸ to 10⁸ (the best
+    of them; θ = 0, a group variance of zero, when none beats it). SEs of β are √diag(σ² A⁻¹), as R's nlme
+    (and lme4) give them (statsmodels' bse_fe come from the observed information of all parameters together,
+    up to a few per cent apart with three groups); the log-likelihood is nlme's and statsmodels'
+    (tests/test_analyses_multilevel.py)."""
+    import numpy as np
+    from scipy import optimize
+
+    codes = np.unique(groups, return_inverse=True)[1].ravel()
+    n, p = X.shape
+    counts = np.bincount(codes).astype(float)
+    sums_x = np.stack([np.bincount(codes, X[:, j], len(counts)) for j in range(p)], axis=1)  # each group's column sums
+    sums_y = np.bincount(codes, y, len(counts))
+    xtx, xty, yty = X.T @ X, X.T @ y, float(y @ y)
+    d = n - p if reml else n
+
+    def solved(theta: float) -> tuple["np.ndarray", "np.ndarray", float, "np.ndarray"]:
+        w = theta / (1.0 + counts * theta)  # Ṽ_i⁻¹ = I − w_i 11' within group i
+        A = xtx - (sums_x * w[:, None]).T @ sums_x
+        b = xty - sums_x.T @ (w * sums_y)
+        beta = np.linalg.solve(A, b)
+        return A, beta, yty - float(w @ (sums_y * sums_y)) - float(b @ beta), 1.0 / (1.0 + counts * theta)
+
+    def loglik(theta: float) -> float:
+        A, _, q, shrink = solved(theta)
+        value = -float(np.log(shrink).sum()) + d * math.log(2 * math.pi * q / d) + d
+        return -0.5 * (value + (float(np.linalg.slogdet(A)[1]) if reml else 0.0))
+
+    def slope(theta: float) -> float:
+        A, beta, q, shrink = solved(theta)
+        residual_sums = sums_y - sums_x @ beta
+        dq = -float(((shrink * residual_sums) ** 2).sum())  # dq/dθ: dw_i/dθ = shrink_i², β at its optimum (envelope)
+        g = float((counts * shrink).sum()) + d * dq / q
+        if reml:  # d log|A| / dθ = tr(A⁻¹ dA/dθ), dA/dθ = −Σ shrink_i² s_i s_i'
+            g -= float(np.trace(np.linalg.solve(A, (sums_x * (shrink * shrink)[:, None]).T @ sums_x)))
+        return -0.5 * g
+
+    if solved(0.0)[2] <= 1e-12 * yty:  # no residual even without groups: nothing for a variance to explain
+        raise InputError("the fixed effects fit the outcome exactly (no residual variance): there is no variance to split between groups")
+    grid = [0.0, *np.logspace(-8, 8, 33).tolist()]
+    slopes = [slope(t) for t in grid]
+    roots = [optimize.brentq(slope, a, b, xtol=1e-300, rtol=4 * np.finfo(float).eps, maxiter=200)
+             for a, b, fa, fb in zip(grid, grid[1:], slopes, slopes[1:]) if fa > 0 >= fb]
+    unsettled = slopes[-1] > 0  # still rising at θ = 10⁸: the residual variance is all but 0 within groups
+    theta = max([0.0, *roots, *([grid[-1]] if unsettled else [])], key=loglik)
+    problems = []
+    if theta == 0.0:
+        problems.append("the group variance is estimated at 0, on the boundary of its range: the groups add no variance beyond the residual")
+    elif unsettled and theta == grid[-1]:
+        problems.append("the variance ratio did not settle below 10⁸: the residual variance within groups is near 0")
+    A, beta, q, _ = solved(theta)
+    scale = q / d
+    cov = scale * np.linalg.inv(A)
+    return _Fitted(beta, np.sqrt(np.diag(cov)), np.array([[theta * scale]]), scale, loglik(theta)), problems
 
 
 def _information(fit, n: int, p: int, q: int, method: Method) -> tuple[float, float, float]:  # type: ignore[no-untyped-def]
@@ -100,11 +185,12 @@ def mixed_model(
     variables = (Variable(outcome, named.get(outcome, outcome), "outcome"), *(Variable(v, named.get(v, v), "predictor") for v in predictors),
                  Variable(group, named.get(group, group), "group"))
     groups = int(data[group].nunique())
-    notes = [Note("method", f"Linear mixed model by {method} (statsmodels MixedLM): random intercept"
+    fitted_by = "statsmodels MixedLM" if random_slopes else "profiled likelihood, maximised exactly"
+    notes = [Note("method", f"Linear mixed model by {method} ({fitted_by}): random intercept"
                             + (f" and slope(s) of {', '.join(named.get(s, s) for s in random_slopes)}" if random_slopes else "")
                             + f" for {named.get(group, group)} ({groups} groups)."), Z_NOTE]
     notes += [Note("caution", f"Fit warning: {w}") for w in dict.fromkeys(problems)]
-    prov = c.provenance("statsetter.analyses.mixed_model", statsmodels=True)
+    prov = c.provenance("statsetter.analyses.mixed_model", statsmodels=bool(random_slopes))
     model = Result(
         kind="mixed_model",
         n=len(data),
@@ -175,5 +261,5 @@ def compare_models(
                                      "different fixed effects are not comparable)."), missing),
         details={"added": ", ".join(named.get(v, v) for v in added), "aic_reduced": aic0, "aic_full": aic1, "bic_reduced": bic0, "bic_full": bic1,
                  "log_likelihood_reduced": ll0, "log_likelihood_full": ll1},
-        provenance=c.provenance("statsetter.analyses.compare_models", statsmodels=True),
+        provenance=c.provenance("statsetter.analyses.compare_models", statsmodels=bool(random_slopes)),
     )
