@@ -14,17 +14,17 @@ if TYPE_CHECKING:
 
 
 def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
+    import numpy as np
     import pandas as pd
 
     s = column(df, name)
-    if not pd.api.types.is_numeric_dtype(s) or pd.api.types.is_bool_dtype(s):
+    if not pd.api.types.is_numeric_dtype(s.dtype) or pd.api.types.is_bool_dtype(s.dtype):
         raise InputError(f"{name}: not numeric (dtype {s.dtype}); a numeric outcome is required")
-    if s.notna().sum() == 0:
+    x = s if s.dtype == np.float64 else s.astype(float)  # missing values (NA of nullable integers too) become NaN
+    values = x.to_numpy()
+    if np.isnan(values).all():
         raise InputError(f"{name}: every value is missing")
-    import numpy as np
-
-    x = s.astype(float)
-    infinite = np.isinf(x.to_numpy())
+    infinite = np.isinf(values)
     if infinite.any():
         first = int(infinite.argmax()) + 1
         raise InputError(f"{name}: {int(infinite.sum())} infinite value(s) (first in row {first}); set them missing or correct them")
