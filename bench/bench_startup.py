@@ -39,7 +39,9 @@ _LIBRARIES = (  # the third-party modules a run of the plan imports, printed by 
 
 
 def libraries() -> list[str]:
-    """A command that imports every library module the demo plan's run imports, and nothing else."""
+    """A command that imports every library module the demo plan's run imports, and nothing else (run with BLAS on one
+    thread, as statsetter's command runs it: with the default threads, importing numpy spends about 0.1 s more CPU in
+    threads that wait busily, and the floor would flatter the run's CPU ratio)."""
     found = subprocess.run([sys.executable, "-c", _LIBRARIES, PLAN], check=True, capture_output=True, text=True, env=_ENV).stdout.split()
     return [sys.executable, "-c", "import importlib\nfor m in %r:\n    try:\n        importlib.import_module(m)\n    except Exception:\n        pass" % found]
 
@@ -49,12 +51,15 @@ _CACHE = tempfile.mkdtemp(prefix="statsetter-bench-bytecode-")
 _ENV = {**{k: v for k, v in os.environ.items() if k != "PYTHONDONTWRITEBYTECODE"}, "PYTHONPYCACHEPREFIX": _CACHE}
 
 
-def cpu(command: list[str]) -> float:
+_ONE_BLAS_THREAD = {name: os.environ.get(name, "1") for name in ("OPENBLAS_NUM_THREADS", "MKL_NUM_THREADS", "VECLIB_MAXIMUM_THREADS")}
+
+
+def cpu(command: list[str], env: dict[str, str] | None = None) -> float:
     """User + system CPU seconds of one run of ``command`` (its own process tree); its wall time is kept in _WALL
     (a process whose BLAS threads wait busily uses more CPU than the time a user waits)."""
     before = resource.getrusage(resource.RUSAGE_CHILDREN)
     start = time.perf_counter()
-    subprocess.run(command, check=True, stdout=subprocess.DEVNULL, env=_ENV)
+    subprocess.run(command, check=True, stdout=subprocess.DEVNULL, env=env or _ENV)
     _WALL.setdefault(tuple(command), []).append(time.perf_counter() - start)
     after = resource.getrusage(resource.RUSAGE_CHILDREN)
     return (after.ru_utime - before.ru_utime) + (after.ru_stime - before.ru_stime)
@@ -62,14 +67,15 @@ def cpu(command: list[str]) -> float:
 
 def main() -> None:
     imports = libraries()
+    blas = {**_ENV, **_ONE_BLAS_THREAD}  # the libraries' floor as the run imports them
     for command in (FLOOR, HELP, FORMAT, imports, RUN):  # warm the file cache and the bytecode
-        cpu(command)
+        cpu(command, blas if command is imports else None)
     floor, helps, formats, library, plans = [], [], [], [], []
     for _ in range(RUNS):
         floor.append(cpu(FLOOR))
         helps.append(cpu(HELP))
         formats.append(cpu(FORMAT))
-        library.append(cpu(imports))
+        library.append(cpu(imports, blas))
         plans.append(cpu(RUN))
     f = statistics.median(floor)
     print(f"start-up CPU, median of {RUNS} interleaved runs")
