@@ -96,17 +96,26 @@ def _labels(names: Sequence[str], labels: Mapping[str, str] | None) -> str:
     return joined([labels.get(n, n) for n in names])
 
 
-def _intercept(kind: str, fit, name: str, level: float, outcome: Variable, prov, **extra) -> Result:  # type: ignore[no-untyped-def]
+def _terms(fit, level: float) -> dict[str, tuple[float, float, float, float, float, float]]:  # type: ignore[no-untyped-def]
+    """Each term's B, SE, t (or z), p and CI limits as floats, read from the fit once (each attribute of a statsmodels
+    fit is wrapped into a new pandas Series on every access)."""
+    ci = fit.conf_int(1 - level)
+    rows = zip(fit.params.index, fit.params.to_numpy(), fit.bse.to_numpy(), fit.tvalues.to_numpy(), fit.pvalues.to_numpy(),
+               ci.iloc[:, 0].to_numpy(), ci.iloc[:, 1].to_numpy())
+    return {str(name): (float(b), float(se), float(t), float(p), float(lo), float(hi)) for name, b, se, t, p, lo, hi in rows}
+
+
+def _intercept(kind: str, fit, name: str, level: float, outcome: Variable, prov, terms=None, **extra) -> Result:  # type: ignore[no-untyped-def]
     """The constant of a fitted model as a coefficient record (B, SE, CI, t or
     z, p; no β): the predicted outcome where every predictor is 0, or at
     the reference categories."""
-    ci = fit.conf_int(1 - level)
+    b, se, t, p, lo, hi = (terms or _terms(fit, level))[name]
     return Result(
         kind=kind,
-        statistic=Statistic("t", float(fit.tvalues[name]), (float(fit.df_resid),)) if kind == "linear_coefficient" else Statistic("z", float(fit.tvalues[name])),
-        p=float(fit.pvalues[name]),
+        statistic=Statistic("t", t, (float(fit.df_resid),)) if kind == "linear_coefficient" else Statistic("z", t),
+        p=p,
         n=int(fit.nobs),
-        estimate=Estimate("B", float(fit.params[name]), se=float(fit.bse[name]), ci=Interval(level, float(ci.loc[name, 0]), float(ci.loc[name, 1]))),
+        estimate=Estimate("B", b, se=se, ci=Interval(level, lo, hi)),
         variables=(outcome,),
         details={"term": "Intercept", "intercept": True, **extra},
         provenance=prov,
@@ -116,7 +125,8 @@ def _intercept(kind: str, fit, name: str, level: float, outcome: Variable, prov,
 def _ols_records(fit, X, y, meta, predictors, outcome: str, labels: Mapping[str, str], level: float, variance_level: float,
                  notes: Sequence[Note | None], prov, step: int | None = None) -> list[Result]:  # type: ignore[no-untyped-def]
     """The model record, the intercept, then one record per coefficient."""
-    ci = fit.conf_int(1 - level)
+    terms = _terms(fit, level)
+    df_resid = float(fit.df_resid)
     sd_y = float(y.std(ddof=1))
     at = {"step": step} if step is not None else {}
     outcome_var = Variable(outcome, labels.get(outcome, outcome), "outcome")
@@ -132,18 +142,18 @@ def _ols_records(fit, X, y, meta, predictors, outcome: str, labels: Mapping[str,
         details={"predictors": _labels(predictors, labels), **at},
         provenance=prov,
     )
-    out = [model, _intercept("linear_coefficient", fit, "const", level, outcome_var, prov, **at)]
+    out = [model, _intercept("linear_coefficient", fit, "const", level, outcome_var, prov, terms, **at)]
     for name, pred, lev, ref in meta:
         sd_x = float(X[name].std(ddof=1))
+        b, se, t, p, lo, hi = terms[name]
         out.append(
             Result(
                 kind="linear_coefficient",
-                statistic=Statistic("t", float(fit.tvalues[name]), (float(fit.df_resid),)),
-                p=float(fit.pvalues[name]),
+                statistic=Statistic("t", t, (df_resid,)),
+                p=p,
                 n=int(fit.nobs),
-                estimate=Estimate("B", float(fit.params[name]), se=float(fit.bse[name]),
-                                  ci=Interval(level, float(ci.loc[name, 0]), float(ci.loc[name, 1]))),
-                effects=(EffectSize("beta", float(fit.params[name]) * sd_x / sd_y, method="B·SD(x)/SD(y)"),),
+                estimate=Estimate("B", b, se=se, ci=Interval(level, lo, hi)),
+                effects=(EffectSize("beta", b * sd_x / sd_y, method="B·SD(x)/SD(y)"),),
                 variables=(
                     Variable(pred, labels.get(pred, pred) if lev is None else f"{labels.get(pred, pred)} = {lev}", "predictor"),
                     outcome_var,
@@ -297,7 +307,7 @@ def logistic_regression(
     ll0, ll1 = float(fit.llnull), float(fit.llf)
     cox_snell = 1 - math.exp((2 / n) * (ll0 - ll1))
     nagelkerke = cox_snell / (1 - math.exp((2 / n) * ll0))
-    ci = fit.conf_int(1 - level)
+    terms = _terms(fit, level)
     labels = labels or {}
     prov = c.provenance("statsetter.analyses.logistic_regression", statsmodels=True)
     out = [
@@ -313,17 +323,17 @@ def logistic_regression(
             provenance=prov,
         )
     ]
-    out.append(_intercept("logistic_coefficient", fit, "const", level, out[0].variables[0], prov, event=f"{event}"))
+    out.append(_intercept("logistic_coefficient", fit, "const", level, out[0].variables[0], prov, terms, event=f"{event}"))
     for name, pred, lev, ref in meta:
-        b = float(fit.params[name])
+        b, se, z, p, lo, hi = terms[name]
         out.append(
             Result(
                 kind="logistic_coefficient",
-                statistic=Statistic("z", float(fit.tvalues[name])),
-                p=float(fit.pvalues[name]),
+                statistic=Statistic("z", z),
+                p=p,
                 n=n,
-                estimate=Estimate("B", b, se=float(fit.bse[name]), ci=Interval(level, float(ci.loc[name, 0]), float(ci.loc[name, 1]))),
-                effects=(EffectSize("OR", math.exp(b), Interval(level, math.exp(ci.loc[name, 0]), math.exp(ci.loc[name, 1])), ratio=True),),
+                estimate=Estimate("B", b, se=se, ci=Interval(level, lo, hi)),
+                effects=(EffectSize("OR", math.exp(b), Interval(level, math.exp(lo), math.exp(hi)), ratio=True),),
                 variables=(
                     Variable(pred, labels.get(pred, pred) if lev is None else f"{labels.get(pred, pred)} = {lev}", "predictor"),
                     Variable(outcome, labels.get(outcome, outcome), "outcome"),
