@@ -14,11 +14,11 @@ from typing import TYPE_CHECKING
 from .errors import InputError
 
 if TYPE_CHECKING:
-    from typing import Sequence
+    from typing import Callable, Sequence
 
     import numpy as np
 
-__all__ = ["nct_ci", "ncf_ci", "variance_explained_ci", "hedges_j", "fisher_z_ci", "adjusted_p"]
+__all__ = ["nct_ci", "ncf_ci", "variance_explained_ci", "hedges_j", "fisher_z_ci", "adjusted_p", "conditional_odds_ratio"]
 
 _MAX_DOUBLINGS = 64  # a bracket of 2^64 around t: far beyond any finite statistic
 
@@ -295,6 +295,59 @@ def _q_start(p: float, c: int, v: float) -> float:
     if v < 120:
         q += -1.214 / v + 1.208 * t / v
     return t * (q * math.log(c - 1.0) + 1.4142)
+
+
+def conditional_odds_ratio(table: "Sequence[Sequence[int]]", level: float, alternative: str = "two-sided") -> tuple[float, float, float]:
+    """The conditional maximum-likelihood odds ratio of a 2 × 2 table [[a, b], [c, d]] and its exact CI (Cornfield,
+    1956): given the margins, a follows Fisher's noncentral hypergeometric distribution with odds ratio ψ; the
+    estimate is the ψ whose mean is a, the lower limit the ψ with P(X ≥ a) = α and the upper the ψ with P(X ≤ a) = α
+    (α = (1 − level)/2 for a two-sided interval, 1 − level for a one-sided one, whose other limit is 0 or ∞), each a
+    root in ln ψ by Brent's method to full precision. The distribution is one vector of log-weights over a's support
+    (log binomial coefficients), so each trial ψ costs a few array operations: the same numbers as scipy's
+    odds_ratio(kind="conditional") to 3e-9 (where scipy's absolute tolerance of 1e-13 on ψ is the difference: ψ near
+    1e-4) in a fifteenth of the time (tests/test_analyses_tables.py). A table with an empty row or column has no
+    odds ratio (nan) and an interval from 0 to ∞."""
+    import numpy as np
+    from scipy import optimize, special
+
+    (a, b), (c, d) = ((int(x) for x in row) for row in table)
+    if min(a, b, c, d) < 0:
+        raise InputError("a 2 × 2 table of counts cannot hold a negative count")
+    total, row, col = a + b + c + d, a + b, a + c
+    if 0 in (row, total - row, col, total - col):  # nothing to estimate; every ψ fits (as scipy says it)
+        return math.nan, 0.0, math.inf
+    xs = np.arange(max(0, row + col - total), min(row, col) + 1, dtype=float)
+    log_weight = (special.gammaln(row + 1) - special.gammaln(xs + 1) - special.gammaln(row - xs + 1)
+                  + special.gammaln(total - row + 1) - special.gammaln(col - xs + 1) - special.gammaln(total - row - col + xs + 1))
+    below, above = xs <= a, xs >= a
+
+    def pmf(log_psi: float) -> "np.ndarray":
+        t = log_weight + xs * log_psi
+        w = np.exp(t - t.max())
+        return w / w.sum()
+
+    def root(f: "Callable[[float], float]") -> float:  # f rises with ln ψ; bracket by doubling steps from ψ = 1, as scipy does
+        lo, hi = -1.0, 1.0
+        while f(lo) > 0:
+            lo *= 2
+        while f(hi) < 0:
+            hi *= 2
+        return math.exp(optimize.brentq(f, lo, hi, xtol=1e-300, rtol=4 * np.finfo(float).eps, maxiter=500))
+
+    def lower(alpha: float) -> float:
+        return 0.0 if a == xs[0] else root(lambda g: float(pmf(g)[above].sum()) - alpha)
+
+    def upper(alpha: float) -> float:
+        return math.inf if a == xs[-1] else root(lambda g: alpha - float(pmf(g)[below].sum()))
+
+    estimate = 0.0 if a == xs[0] else math.inf if a == xs[-1] else root(lambda g: float(pmf(g) @ xs) - a)
+    if alternative == "two-sided":
+        return estimate, lower((1 - level) / 2), upper((1 - level) / 2)
+    if alternative == "less":
+        return estimate, 0.0, upper(1 - level)
+    if alternative == "greater":
+        return estimate, lower(1 - level), math.inf
+    raise InputError(f"alternative: {alternative!r} is not two-sided, less or greater")
 
 
 def adjusted_p(p: "Sequence[float] | np.ndarray", method: str) -> "np.ndarray":

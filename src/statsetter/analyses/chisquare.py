@@ -127,18 +127,17 @@ def fisher_exact(
 
 def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | None = None, alternative: str = "two-sided") -> Result:  # type: ignore[no-untyped-def]
     from scipy import stats
-    from scipy.stats.contingency import odds_ratio
+
+    from ..formulas import conditional_odds_ratio
 
     if alternative not in ("two-sided", "less", "greater"):
         raise InputError(f"alternative: {alternative!r} is not two-sided, less or greater")
     p = stats.fisher_exact(counts, alternative=alternative).pvalue
-    orr = odds_ratio(counts, kind="conditional")
-    ci = orr.confidence_interval(level, alternative=alternative)  # one-sided tests get the one-sided interval
-    high = float(ci.high)
+    value, low, high = conditional_odds_ratio(counts, level, alternative)  # one-sided tests get the one-sided interval
     estimate = Estimate(
         "OR",
-        float(orr.statistic),
-        ci=Interval(level, float(ci.low), high) if math.isfinite(high) else None,
+        value,
+        ci=Interval(level, low, high) if math.isfinite(high) else None,
         ratio=True,
     )
     return Result(
@@ -150,7 +149,7 @@ def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | N
         variables=variables,
         notes=c.notes(
             Note("method", "Conditional maximum-likelihood odds ratio with its exact CI."
-                 + ("" if math.isfinite(high) else f" The CI has no finite upper limit (lower limit {float(ci.low):.4g}); it is left out.")),
+                 + ("" if math.isfinite(high) else f" The CI has no finite upper limit (lower limit {low:.4g}); it is left out.")),
             missing,
         ),
         provenance=c.provenance("statsetter.analyses.fisher_exact"),
