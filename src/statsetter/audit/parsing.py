@@ -414,17 +414,25 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
 class _Index:
     """Sentence boundaries and ``n =`` positions of one text, found once, so
     that the sentence-level checks of many statistics in one paragraph stay
-    linear in its length (bisect instead of a rescan per statistic)."""
+    linear in its length (bisect instead of a rescan per statistic); the
+    boundaries only when a check asks for them."""
 
     def __init__(self, pat: _Patterns, text: str) -> None:
         self.text = text
-        self.ends = [b.end() for b in pat.boundary_in(text).finditer(text)]
+        self.pat = pat
+        self._ends: list[int] | None = None
         self.n_at: list[int] = []
         self.n_match: list[re.Match[str]] = []
         for m in pat.n.finditer(text):
             if m.group("sym") == "n":
                 self.n_at.append(m.start())
                 self.n_match.append(m)
+
+    @property
+    def ends(self) -> list[int]:
+        if self._ends is None:
+            self._ends = [b.end() for b in self.pat.boundary_in(self.text).finditer(self.text)]
+        return self._ends
 
 
 def _remembered(slot: list, key: object, make: "Callable[[], T]") -> "T":
@@ -461,6 +469,8 @@ def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int,
     a statistic, when it gives exactly two."""
     pat = _patterns(decimal_mark)
     index = _index(pat, text)
+    if bisect.bisect_left(index.n_at, rep.start) < 2:  # fewer than two "n =" before it in the whole text
+        return None
     start = _sentence_start(pat, text, 0, rep.start)
     lo, hi = bisect.bisect_left(index.n_at, start), bisect.bisect_left(index.n_at, rep.start)
     found = [m for m in index.n_match[lo:hi] if m.end() <= rep.start]
@@ -476,6 +486,8 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     """The B and SE a sentence gives before a t or z (``B = 0.42, SE = 0.10,
     β = .31, t(196) = 4.20``): the last of each between ``since`` (the end of
     the statistic before) and the statistic, within its sentence."""
+    if text.find("SE", since, rep.start) < 0 or text.find("B", since, rep.start) < 0:  # what both patterns must contain
+        return None
     pat = _patterns(decimal_mark)
     start = _sentence_start(pat, text, since, rep.start)
     found = {}
