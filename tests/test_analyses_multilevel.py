@@ -166,3 +166,26 @@ def test_a_group_variance_of_zero_is_said():
                 for t in (1e-3, 1e-6, 1e-9)]
         assert near[0] < near[1] < near[2] <= model.details["log_likelihood"] + 1e-9
         assert near[2] == pytest.approx(model.details["log_likelihood"], rel=1e-8)
+
+
+def test_degenerate_random_intercept_designs_are_said():
+    """Designs the likelihood cannot settle, on Orthodont's rows: one row per group (the two variances cannot be told
+    apart: an error naming the group), an outcome the fixed effects fit exactly (an error), an outcome constant within
+    each child (the residual variance all but 0: a fit warning), and scaled by 1e12 and 1e-12 (the same ICC and
+    coefficients scaled: the fit does not depend on units)."""
+    import numpy as np
+
+    with pytest.raises(InputError, match="Subject: every group has one row"):
+        mixed_model(DATA.assign(Subject=np.arange(len(DATA))), "distance", ["age"], "Subject")
+    with pytest.raises(InputError, match="distance: the fixed effects fit the outcome exactly"):
+        mixed_model(DATA.assign(distance=3 + 2 * DATA["age"]), "distance", ["age"], "Subject")
+    child_mean = DATA.groupby("Subject")["distance"].transform("mean")
+    model, *_ = mixed_model(DATA.assign(distance=child_mean), "distance", ["age"], "Subject")
+    assert any("did not settle" in n.text for n in model.notes)
+    base, _, age = mixed_model(DATA, "distance", ["age"], "Subject")
+    for factor in (1e12, 1e-12):
+        scaled, _, scaled_age = mixed_model(DATA.assign(distance=DATA["distance"] * factor), "distance", ["age"], "Subject")
+        assert scaled.effects[0].value == pytest.approx(base.effects[0].value, rel=1e-9)
+        assert scaled_age.estimate.value == pytest.approx(age.estimate.value * factor, rel=1e-9)
+        # REML: the likelihood of n − p error contrasts, each scaled by the factor
+        assert scaled.details["log_likelihood"] == pytest.approx(base.details["log_likelihood"] - (len(DATA) - 2) * np.log(factor), rel=1e-9)

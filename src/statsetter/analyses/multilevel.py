@@ -50,6 +50,8 @@ def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: s
 
     from .regression import _design
 
+    if not data[group].duplicated().any():
+        raise InputError(f"{group}: every group has one row; the group and residual variances cannot be told apart")
     y = c.numeric(data, outcome).to_numpy(dtype=float)
     if predictors:
         X, meta, coding = _design(data, list(predictors), dict(reference or {}), None)
