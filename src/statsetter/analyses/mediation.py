@@ -54,7 +54,7 @@ def _resampled(Xa: "np.ndarray", M: "np.ndarray", Xb: "np.ndarray", yb: "np.ndar
         size = min(chunk, n_boot - start)
         rows = rng.integers(0, n, (size, n))
         counts = np.bincount((rows + (np.arange(size) * n)[:, None]).ravel(), minlength=size * n).reshape(size, n).astype(float)
-        a = np.linalg.solve((counts @ cross_a).reshape(size, pa, pa), np.einsum("bn,npk->bpk", counts, rhs_a))[:, 1, :]
+        a = np.linalg.solve((counts @ cross_a).reshape(size, pa, pa), (counts @ rhs_a.reshape(n, -1)).reshape(size, pa, k))[:, 1, :]
         b = np.linalg.solve((counts @ cross_b).reshape(size, pb, pb), (counts @ rhs_b)[:, :, None])[:, 2:2 + k, 0]
         out[start:start + size] = a * b
     return out
