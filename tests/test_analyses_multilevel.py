@@ -171,8 +171,8 @@ def test_a_group_variance_of_zero_is_said():
 def test_degenerate_random_intercept_designs_are_said():
     """Designs the likelihood cannot settle, on Orthodont's rows: one row per group (the two variances cannot be told
     apart: an error naming the group), an outcome the fixed effects fit exactly (an error), an outcome constant within
-    each child (the residual variance all but 0: a fit warning), and scaled by 1e12 and 1e-12 (the same ICC and
-    coefficients scaled: the fit does not depend on units)."""
+    each child (the residual variance all but 0: a fit warning); shifted by 1e6 (the same variances) and scaled by
+    1e12 and 1e-12 (the same ICC and coefficients scaled: the fit does not depend on units)."""
     import numpy as np
 
     with pytest.raises(InputError, match="Subject: every group has one row"):
@@ -183,6 +183,12 @@ def test_degenerate_random_intercept_designs_are_said():
     model, *_ = mixed_model(DATA.assign(distance=child_mean), "distance", ["age"], "Subject")
     assert any("did not settle" in n.text for n in model.notes)
     base, _, age = mixed_model(DATA, "distance", ["age"], "Subject")
+    # an outcome far from 0: the fit never forms y'y (whose large terms would cancel), so a shift of 1e6 moves the
+    # variances by no more than rounding (the normal equations' q lost them to 5e-5 here)
+    shifted, _, shifted_age = mixed_model(DATA.assign(distance=DATA["distance"] + 1e6), "distance", ["age"], "Subject")
+    assert shifted.details["variance_intercept"] == pytest.approx(base.details["variance_intercept"], rel=1e-11)
+    assert shifted.details["variance_residual"] == pytest.approx(base.details["variance_residual"], rel=1e-11)
+    assert shifted_age.estimate.value == pytest.approx(age.estimate.value, rel=1e-9)
     for factor in (1e12, 1e-12):
         scaled, _, scaled_age = mixed_model(DATA.assign(distance=DATA["distance"] * factor), "distance", ["age"], "Subject")
         assert scaled.effects[0].value == pytest.approx(base.effects[0].value, rel=1e-9)

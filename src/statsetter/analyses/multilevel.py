@@ -14,6 +14,7 @@ tests them; R's lme uses t with containment df, which gives slightly larger
 p in small samples), said in every record. `compare_models` fits two nested
 models by ML and gives the likelihood-ratio test.
 """
+
 from __future__ import annotations
 
 import math
@@ -79,8 +80,9 @@ def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: s
 
 def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml: bool) -> tuple[_Fitted, list[str]]:
     """A random-intercept model y = Xβ + u_group + e by ML or REML, with the variance ratio θ = τ²/σ² as the one
-    parameter: for each θ, β and σ² have closed forms (generalised least squares through each group's sums, as in
-    Searle, Casella & McCulloch, *Variance Components*, 1992, ch. 6), and the profiled log-likelihood
+    parameter: for each θ, β and σ² have closed forms (generalised least squares, as in Searle, Casella & McCulloch,
+    *Variance Components*, 1992, ch. 6: here ordinary least squares by QR after a part of each group's mean is taken
+    off the data, which is that GLS), and the profiled log-likelihood
     −½[Σ log(1 + n_i θ) + d log(2π q(θ)/d) + d (+ log|A(θ)| under REML)], d = n (ML) or n − p (REML), q the
     generalised residual sum of squares and A = X'Ṽ⁻¹X, is maximised where its derivative in θ (in closed form)
     is zero: Brent's root to full precision, from the sign changes on a grid of θ from 10⁻⁸ to 10⁸ (the best
@@ -89,38 +91,42 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
     up to a few per cent apart with three groups); the log-likelihood is nlme's and statsmodels'
     (tests/test_analyses_multilevel.py)."""
     import numpy as np
-    from scipy import optimize
+    from scipy import linalg, optimize
 
     codes = np.unique(groups, return_inverse=True)[1].ravel()
     n, p = X.shape
     counts = np.bincount(codes).astype(float)
     sums_x = np.stack([np.bincount(codes, X[:, j], len(counts)) for j in range(p)], axis=1)  # each group's column sums
     sums_y = np.bincount(codes, y, len(counts))
-    xtx, xty, yty = X.T @ X, X.T @ y, float(y @ y)
+    mean_x, mean_y = (sums_x / counts[:, None])[codes], (sums_y / counts)[codes]
     d = n - p if reml else n
 
-    def solved(theta: float) -> tuple["np.ndarray", "np.ndarray", float, "np.ndarray"]:
-        w = theta / (1.0 + counts * theta)  # Ṽ_i⁻¹ = I − w_i 11' within group i
-        A = xtx - (sums_x * w[:, None]).T @ sums_x
-        b = xty - sums_x.T @ (w * sums_y)
-        beta = np.linalg.solve(A, b)
-        return A, beta, yty - float(w @ (sums_y * sums_y)) - float(b @ beta), 1.0 / (1.0 + counts * theta)
+    def solved(theta: float) -> tuple["np.ndarray", "np.ndarray", float, "np.ndarray", "np.ndarray"]:
+        """β, the triangular factor R of A = X'Ṽ⁻¹X, q, each group's 1/(1 + n_i θ) and its residuals' sum: least
+        squares on the data with a part λ_i = 1 − 1/√(1 + n_i θ) of each group's mean taken off (Ṽ⁻¹ = T'T for
+        that T), by QR, so that neither X'X nor y'y is formed (their large terms would cancel)."""
+        shrink = 1.0 / (1.0 + counts * theta)
+        part = (1.0 - np.sqrt(shrink))[codes]
+        Q, R = np.linalg.qr(X - part[:, None] * mean_x)
+        z = y - part * mean_y
+        beta = linalg.solve_triangular(R, Q.T @ z)
+        r = z - (X - part[:, None] * mean_x) @ beta
+        return beta, R, float(r @ r), shrink, sums_y - sums_x @ beta
 
     def loglik(theta: float) -> float:
-        A, _, q, shrink = solved(theta)
+        _, R, q, shrink, _ = solved(theta)
         value = -float(np.log(shrink).sum()) + d * math.log(2 * math.pi * q / d) + d
-        return -0.5 * (value + (float(np.linalg.slogdet(A)[1]) if reml else 0.0))
+        return -0.5 * (value + (2.0 * float(np.log(np.abs(np.diag(R))).sum()) if reml else 0.0))
 
     def slope(theta: float) -> float:
-        A, beta, q, shrink = solved(theta)
-        residual_sums = sums_y - sums_x @ beta
+        _, R, q, shrink, residual_sums = solved(theta)
         dq = -float(((shrink * residual_sums) ** 2).sum())  # dq/dθ: dw_i/dθ = shrink_i², β at its optimum (envelope)
         g = float((counts * shrink).sum()) + d * dq / q
-        if reml:  # d log|A| / dθ = tr(A⁻¹ dA/dθ), dA/dθ = −Σ shrink_i² s_i s_i'
-            g -= float(np.trace(np.linalg.solve(A, (sums_x * (shrink * shrink)[:, None]).T @ sums_x)))
+        if reml:  # d log|A| / dθ = tr(A⁻¹ dA/dθ) = −‖R⁻ᵀ (shrink_i s_i)‖², dA/dθ = −Σ shrink_i² s_i s_i'
+            g -= float((linalg.solve_triangular(R, (sums_x * shrink[:, None]).T, trans="T") ** 2).sum())
         return -0.5 * g
 
-    if solved(0.0)[2] <= 1e-12 * yty:  # no residual even without groups: nothing for a variance to explain
+    if solved(0.0)[2] <= 1e-20 * float(((y - y.mean()) ** 2).sum()):  # no residual even without groups: nothing to split
         raise InputError("the fixed effects fit the outcome exactly (no residual variance): there is no variance to split between groups")
     grid = [0.0, *np.logspace(-8, 8, 33).tolist()]
     slopes = [slope(t) for t in grid]
@@ -133,9 +139,10 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
         problems.append("the group variance is estimated at 0, on the boundary of its range: the groups add no variance beyond the residual")
     elif unsettled and theta == grid[-1]:
         problems.append("the variance ratio did not settle below 10⁸: the residual variance within groups is near 0")
-    A, beta, q, _ = solved(theta)
+    beta, R, q, _, _ = solved(theta)
     scale = q / d
-    cov = scale * np.linalg.inv(A)
+    inverse = linalg.solve_triangular(R, np.eye(p))  # A⁻¹ = R⁻¹ R⁻ᵀ
+    cov = scale * (inverse @ inverse.T)
     return _Fitted(beta, np.sqrt(np.diag(cov)), np.array([[theta * scale]]), scale, loglik(theta)), problems
 
 
