@@ -171,8 +171,9 @@ def test_a_group_variance_of_zero_is_said():
 def test_degenerate_random_intercept_designs_are_said():
     """Designs the likelihood cannot settle, on Orthodont's rows: one row per group (the two variances cannot be told
     apart: an error naming the group), an outcome the fixed effects fit exactly (an error), an outcome constant within
-    each child (the residual variance all but 0: a fit warning); shifted by 1e6 (the same variances) and scaled by
-    1e12 and 1e-12 (the same ICC and coefficients scaled: the fit does not depend on units)."""
+    each child (the residual variance all but 0: a fit warning); shifted by 1e6 (the same variances), scaled by 1e12
+    and 1e-12 (the same ICC and coefficients scaled: the fit does not depend on units), and with the groups labelled
+    by numbers and text in one column (the same fit)."""
     import numpy as np
 
     with pytest.raises(InputError, match="Subject: every group has one row"):
@@ -189,6 +190,9 @@ def test_degenerate_random_intercept_designs_are_said():
     assert shifted.details["variance_intercept"] == pytest.approx(base.details["variance_intercept"], rel=1e-11)
     assert shifted.details["variance_residual"] == pytest.approx(base.details["variance_residual"], rel=1e-11)
     assert shifted_age.estimate.value == pytest.approx(age.estimate.value, rel=1e-9)
+    mixed_labels = DATA.assign(Subject=[int(s[1:]) if s.startswith("M") else s for s in DATA["Subject"].astype(str)])  # 1, 2 … and "F01" …
+    relabelled, *_ = mixed_model(mixed_labels, "distance", ["age"], "Subject")
+    assert relabelled.details["groups"] == 27 and relabelled.details["variance_intercept"] == pytest.approx(base.details["variance_intercept"], rel=1e-12)
     for factor in (1e12, 1e-12):
         scaled, _, scaled_age = mixed_model(DATA.assign(distance=DATA["distance"] * factor), "distance", ["age"], "Subject")
         assert scaled.effects[0].value == pytest.approx(base.effects[0].value, rel=1e-9)

@@ -91,9 +91,10 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
     up to a few per cent apart with three groups); the log-likelihood is nlme's and statsmodels'
     (tests/test_analyses_multilevel.py)."""
     import numpy as np
+    import pandas as pd
     from scipy import linalg, optimize
 
-    codes = np.unique(groups, return_inverse=True)[1].ravel()
+    codes = pd.factorize(groups)[0]  # group labels of any types (codes as 1, 2 and text "x" in one column)
     n, p = X.shape
     counts = np.bincount(codes).astype(float)
     sums_x = np.stack([np.bincount(codes, X[:, j], len(counts)) for j in range(p)], axis=1)  # each group's column sums
