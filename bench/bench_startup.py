@@ -23,6 +23,8 @@ import sys
 import tempfile
 import time
 
+from statsetter.cli import _BLAS_THREADS
+
 RUNS = 7
 FLOOR = [sys.executable, "-c", "import jinja2"]
 HELP = [sys.executable, "-m", "statsetter", "--help"]
@@ -51,7 +53,7 @@ _CACHE = tempfile.mkdtemp(prefix="statsetter-bench-bytecode-")
 _ENV = {**{k: v for k, v in os.environ.items() if k != "PYTHONDONTWRITEBYTECODE"}, "PYTHONPYCACHEPREFIX": _CACHE}
 
 
-_ONE_BLAS_THREAD = {name: os.environ.get(name, "1") for name in ("OPENBLAS_NUM_THREADS", "MKL_NUM_THREADS", "VECLIB_MAXIMUM_THREADS")}
+_ONE_BLAS_THREAD = {name: os.environ.get(name, "1") for name in _BLAS_THREADS}  # what the command sets
 
 
 def cpu(command: list[str], env: dict[str, str] | None = None) -> float:

@@ -108,10 +108,11 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
         that T), by QR, so that neither X'X nor y'y is formed (their large terms would cancel)."""
         shrink = 1.0 / (1.0 + counts * theta)
         part = (1.0 - np.sqrt(shrink))[codes]
-        Q, R = np.linalg.qr(X - part[:, None] * mean_x)
+        design = X - part[:, None] * mean_x
+        Q, R = np.linalg.qr(design)
         z = y - part * mean_y
         beta = linalg.solve_triangular(R, Q.T @ z)
-        r = z - (X - part[:, None] * mean_x) @ beta
+        r = z - design @ beta
         return beta, R, float(r @ r), shrink, sums_y - sums_x @ beta
 
     def loglik(theta: float) -> float:

@@ -105,11 +105,11 @@ def _terms(fit, level: float) -> dict[str, tuple[float, float, float, float, flo
     return {str(name): (float(b), float(se), float(t), float(p), float(lo), float(hi)) for name, b, se, t, p, lo, hi in rows}
 
 
-def _intercept(kind: str, fit, name: str, level: float, outcome: Variable, prov, terms=None, **extra) -> Result:  # type: ignore[no-untyped-def]
+def _intercept(kind: str, fit, name: str, level: float, outcome: Variable, prov, terms, **extra) -> Result:  # type: ignore[no-untyped-def]
     """The constant of a fitted model as a coefficient record (B, SE, CI, t or
     z, p; no β): the predicted outcome where every predictor is 0, or at
     the reference categories."""
-    b, se, t, p, lo, hi = (terms or _terms(fit, level))[name]
+    b, se, t, p, lo, hi = terms[name]
     return Result(
         kind=kind,
         statistic=Statistic("t", t, (float(fit.df_resid),)) if kind == "linear_coefficient" else Statistic("z", t),
