@@ -178,3 +178,44 @@ def test_bad_figures_name_the_line_and_write_nothing(folder, capsys, figure, mes
     err = capsys.readouterr().err
     assert message in err and "Traceback" not in err
     assert not (folder / "out").exists()
+
+
+def test_run_leaves_the_collector_as_it_found_it(folder, capsys):
+    # the command freezes what exists before each analysis (the collector's full passes then skip the libraries'
+    # modules) and unfreezes afterwards: a program or test that calls main() keeps a collector that frees its cycles
+    import gc
+
+    path = write(folder, GOOD.replace("[[tables]]", "[[analyses]]\nid = \"mass_by_species\"\nkind = \"anova_oneway\"\n"
+                                      "outcome = \"body_mass_g\"\ngroup = \"species\"\n\n[[tables]]"))
+    frozen = []
+    from statsetter.cli import run as command
+
+    settled = command._settled
+    command._settled = lambda name="": (settled(name), frozen.append(gc.get_freeze_count()))  # type: ignore[assignment]
+    try:
+        assert main(["run", str(path), "--format", "json"]) == 0
+    finally:
+        command._settled = settled  # type: ignore[assignment]
+    assert len(frozen) == 3 and all(n > 0 for n in frozen)  # frozen before the data are read and before each of the two analyses
+    assert gc.get_freeze_count() == 0  # and nothing left frozen
+    with_settling = capsys.readouterr().out
+    assert json.loads(with_settling) == [r.to_dict() for r in run_plan(load_plan(path)).records]  # the same records
+
+
+def test_the_process_entry_freezes_on_its_way_out(monkeypatch, capsys):
+    # statsetter's process (console script, python -m) freezes its objects as it ends: the interpreter's exit then
+    # neither walks nor frees them one by one; main() itself, called from a program, does not
+    import gc
+
+    from statsetter.cli import entry
+
+    monkeypatch.setattr("sys.argv", ["statsetter", "--version"])
+    assert gc.get_freeze_count() == 0
+    main(["--version"])
+    assert gc.get_freeze_count() == 0
+    try:
+        assert entry() == 0
+        assert gc.get_freeze_count() > 0
+    finally:
+        gc.unfreeze()
+    assert "statsetter" in capsys.readouterr().out

@@ -60,5 +60,18 @@ def main(argv: Sequence[str] | None = None) -> int:
     return guarded(ns, ns.handler)
 
 
+def entry() -> int:
+    """The ``statsetter`` process: ``main`` and then, as the process is about to end, every object the collector
+    tracks frozen — the interpreter's exit then neither walks them in its last collections nor frees them one by one
+    (the operating system takes the memory back; files are closed and exit handlers run as always). Exiting, a run of
+    the demo plan spent 0.3 s of CPU on that: as much as all its analyses."""
+    import gc
+
+    try:
+        return main()
+    finally:
+        gc.freeze()
+
+
 if __name__ == "__main__":
-    sys.exit(main())
+    sys.exit(entry())

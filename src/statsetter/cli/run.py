@@ -3,7 +3,12 @@
 from __future__ import annotations
 
 import argparse
+import gc
 import sys
+from typing import TYPE_CHECKING
+
+if TYPE_CHECKING:
+    from ..plan import Plan, RunResult
 
 
 def add(sub) -> None:  # type: ignore[no-untyped-def]
@@ -18,19 +23,43 @@ def add(sub) -> None:  # type: ignore[no-untyped-def]
     rn.set_defaults(handler=run)
 
 
+def _settled(analysis: str = "") -> None:
+    """Before the data are read and before each analysis: the young objects' cycles collected, and what is left (the
+    modules imported so far, the libraries' among them, which the analyses import lazily; the data; the records so
+    far) frozen, so that the collector's full passes, which the libraries' imports set off, do not walk them again and
+    again (on the demo plan, 0.18 s of CPU)."""
+    gc.collect(1)
+    gc.freeze()
+
+
+def _computed(plan: "Plan") -> "RunResult":
+    """The plan run, with a progress bar on a terminal; the collector as before afterwards."""
+    from ..plan import run_plan
+
+    _settled()
+    try:
+        if len(plan.analyses) >= 8 and sys.stderr.isatty():
+            from rich.console import Console
+            from rich.progress import Progress
+
+            with Progress(console=Console(stderr=True), transient=True) as bar:
+                task = bar.add_task("analyses", total=len(plan.analyses))
+
+                def advanced(name: str) -> None:
+                    _settled(name)
+                    bar.update(task, advance=1, description=name)
+
+                return run_plan(plan, progress=advanced)
+        return run_plan(plan, progress=_settled)
+    finally:
+        gc.unfreeze()
+
+
 def run(ns: argparse.Namespace) -> int:
-    from ..plan import load_plan, run_plan, write_outputs
+    from ..plan import load_plan, write_outputs
 
     plan = load_plan(ns.plan)
-    if len(plan.analyses) >= 8 and sys.stderr.isatty():
-        from rich.console import Console
-        from rich.progress import Progress
-
-        with Progress(console=Console(stderr=True), transient=True) as bar:
-            task = bar.add_task("analyses", total=len(plan.analyses))
-            result = run_plan(plan, progress=lambda name: bar.update(task, advance=1, description=name))
-    else:
-        result = run_plan(plan)
+    result = _computed(plan)
     if ns.format == "json":
         from ..records import dump_records
 
