@@ -180,22 +180,20 @@ def test_bad_figures_name_the_line_and_write_nothing(folder, capsys, figure, mes
     assert not (folder / "out").exists()
 
 
-def test_run_leaves_the_collector_as_it_found_it(folder, capsys):
-    # the command freezes what exists before each analysis (the collector's full passes then skip the libraries'
-    # modules) and unfreezes afterwards: a program or test that calls main() keeps a collector that frees its cycles
+def test_run_leaves_the_collector_as_it_found_it(folder, capsys, monkeypatch):
+    # the command freezes what exists before the data and each analysis (the collector's full passes then skip the
+    # libraries' modules) and unfreezes afterwards: a program or test that calls main() keeps a collector that frees
+    # its cycles
     import gc
+
+    from statsetter.cli import run as command
 
     path = write(folder, GOOD.replace("[[tables]]", "[[analyses]]\nid = \"mass_by_species\"\nkind = \"anova_oneway\"\n"
                                       "outcome = \"body_mass_g\"\ngroup = \"species\"\n\n[[tables]]"))
     frozen = []
-    from statsetter.cli import run as command
-
     settled = command._settled
-    command._settled = lambda name="": (settled(name), frozen.append(gc.get_freeze_count()))  # type: ignore[assignment]
-    try:
-        assert main(["run", str(path), "--format", "json"]) == 0
-    finally:
-        command._settled = settled  # type: ignore[assignment]
+    monkeypatch.setattr(command, "_settled", lambda name="": (settled(name), frozen.append(gc.get_freeze_count())))
+    assert main(["run", str(path), "--format", "json"]) == 0
     assert len(frozen) == 3 and all(n > 0 for n in frozen)  # frozen before the data are read and before each of the two analyses
     assert gc.get_freeze_count() == 0  # and nothing left frozen
     with_settling = capsys.readouterr().out
