@@ -217,3 +217,23 @@ def test_the_process_entry_freezes_on_its_way_out(monkeypatch, capsys):
     finally:
         gc.unfreeze()
     assert "statsetter" in capsys.readouterr().out
+
+
+def test_the_process_writes_every_output_whole_before_it_exits(folder, capsys):
+    # the process freezes its objects as it ends (cli.entry): every file a run writes is complete on disk — the same
+    # Markdown as a run in this process, a Word document python-docx opens, records that load
+    import subprocess
+    import sys
+
+    path = write(folder, GOOD)
+    proc = subprocess.run([sys.executable, "-m", "statsetter", "run", str(path)], capture_output=True, text=True, cwd=folder)
+    assert proc.returncode == 0, proc.stderr
+    out = folder / "out"
+    md = (out / "results.md").read_text(encoding="utf-8")
+    records = json.loads((out / "records.json").read_text(encoding="utf-8"))
+    paragraphs = [p.text for p in docx.Document(str(out / "results.docx")).paragraphs]
+    out.rename(folder / "subprocess-out")
+    assert main(["run", str(path)]) == 0
+    assert md == (out / "results.md").read_text(encoding="utf-8")
+    assert records == json.loads((out / "records.json").read_text(encoding="utf-8"))
+    assert paragraphs == [p.text for p in docx.Document(str(out / "results.docx")).paragraphs] and any("8.55" in p for p in paragraphs)
