@@ -52,7 +52,7 @@ def libraries(freeze: str = "") -> list[str]:
     frees them one by one); "each", frozen after every module — the import as cheap as the collector allows, its
     full passes walking only the newest module's objects."""
     found = subprocess.run([sys.executable, "-c", _LIBRARIES, PLAN], check=True, capture_output=True, text=True, env=_ENV).stdout.split()
-    each, end = ("\n    gc.freeze()", "") if freeze == "each" else ("", "\ngc.freeze()") if freeze == "exit" else ("", "")
+    each, end = {"each": ("\n    gc.freeze()", ""), "exit": ("", "\ngc.freeze()")}.get(freeze, ("", ""))
     return [sys.executable, "-c", "import gc, importlib\nfor m in %r:\n    try:\n        importlib.import_module(m)\n    except Exception:\n        pass%s%s"
             % (found, each, end)]
 
