@@ -117,15 +117,33 @@ def fisher_z_ci(r: float, n: int, level: float, se: float | None = None) -> tupl
 def studentized_range_quantile(level: float, k: int, df: float) -> float:
     """The ``level`` quantile of the studentized range of ``k`` means with
     ``df`` error df (Tukey's critical q): the root of the CDF
-    (``studentized_range_sf``) minus ``level``, by the secant method from a
-    starting value in the form of Copenhaver & Holland (1988; its constants
-    recalled from memory — only the start, the root is exact and tested
-    against R's qtukey), with bisection as the fallback."""
+    (``studentized_range_sf``) minus ``level``, from a starting value in the
+    form of Copenhaver & Holland (1988; its constants recalled from memory —
+    only the start, the root is exact and tested against R's qtukey). On
+    finite df each exact evaluation of the CDF makes the s-grid for its q,
+    and the next q is the root of the CDF with that grid held
+    (``_held_gap``: a trial q costs one exp over the grid's nodes, not the
+    range's tail), until the exact CDF is within 1e-13 of ``level``: two or
+    three exact evaluations where the secant method alone took six or seven.
+    The secant method on the exact CDF, then bisection, are the fallbacks."""
 
     def gap(q: float) -> float:
         return 1.0 - float(studentized_range_sf(q, k, df)[0]) - level
 
-    a = _q_start(level, k, df)
+    # (above 1,000 df the grid of s is narrow, ±8/√(2·df), and the start, which ignores df from 120 on, can lie
+    # outside it: the root on infinite df, cheap and within about 1/df of this one, starts there)
+    a = _q_start(level, k, df) if df <= 1000 or math.isinf(df) else studentized_range_quantile(level, k, math.inf)
+    if not math.isinf(df):  # (on infinite df the CDF is one integral, as cheap as a held one)
+        for _ in range(8):
+            held, here = _held_gap(level, k, df, a)
+            if abs(here) < 1e-13:
+                return a
+            b = _held_root(held, a)
+            if b is None:
+                break
+            if abs(b - a) <= 1e-12 * b:  # the exact gap at a asks for a step within the CDF's own accuracy (1e-12 at 10⁶ df)
+                return b
+            a = b
     b = a * 1.02
     fa, fb = gap(a), gap(b)
     for _ in range(30):
@@ -146,6 +164,48 @@ def studentized_range_quantile(level: float, k: int, df: float) -> float:
         if high - low <= 1e-13 * high:
             break
     return (low + high) / 2
+
+
+def _held_root(gap: "Callable[[float], float]", q0: float) -> float | None:
+    """The root of a held CDF's gap by the secant method from ``q0``; None when it does not settle."""
+    a, b = q0, q0 * 1.001
+    fa, fb = gap(a), gap(b)
+    for _ in range(50):
+        if fb == fa or not math.isfinite(fb):
+            return None
+        a, b, fa = b, b - fb * (b - a) / (fb - fa), fb
+        if not b > 0:
+            return None
+        if abs(b - a) <= 1e-14 * b:
+            return b
+        fb = gap(b)
+    return None
+
+
+def _held_gap(level: float, k: int, df: float, q0: float) -> "tuple[Callable[[float], float], float]":
+    """1 − P(Q > q) − level for q near ``q0`` on the grid of s made for q0, its nodes held in w = q0·s, and its exact
+    value at q0: P(Q > q) = ∫ T(q0·σ) f(q0·σ/q) q0/q dσ (s = q0·σ/q), so the range's tail T at the nodes is
+    computed once and each q costs one exp over them; at q0 it is ``_range_sf`` (the same terms), near it the same
+    quadrature of a density moved by q/q0, as good as the grid's reach (its bulk spans about ±8 SDs of s, ±8/√(2·df))."""
+    import numpy as np
+    from scipy import special
+
+    held: list = []
+    here = 1.0 - _range_sf(q0, k, df, held) - level
+    cut = held.pop(0)
+    h = df / 2
+    log_density = math.log(2) + h * math.log(h) - special.gammaln(h)
+    sigma = np.concatenate([s for s, _, _ in held])
+    weighted = np.concatenate([ws * tail for _, ws, tail in held])
+    log_sigma = np.log(sigma)
+
+    def gap(q: float) -> float:
+        r = q0 / q
+        s = sigma * r
+        below = float(special.gammainc(h, h * (cut * r) ** 2)) if cut else 0.0
+        return 1.0 - level - below - r * float(weighted @ np.exp(log_density + (df - 1) * (log_sigma + math.log(r)) - h * s * s))
+
+    return gap, here
 
 
 _GL16 = None  # Gauss–Legendre nodes and weights of order 16, made on first use
@@ -217,9 +277,10 @@ def studentized_range_sf(q: "float | np.ndarray", k: int, df: float) -> "np.ndar
     return out
 
 
-def _range_sf(q: float, k: int, df: float) -> float:
+def _range_sf(q: float, k: int, df: float, held: list | None = None) -> float:
     """P(Q > q) at one q on a grid of s made for it: one grid for several q, made for the largest, lost up to 2e-7 of
-    the others' p (df = 5)."""
+    the others' p (df = 5). ``held``, when given, receives the cut below which the tail is taken as 1 (0: none), then
+    the nodes, weights and range's tails of each stretch summed (``_held_gap``)."""
     import numpy as np
     from scipy import special
 
@@ -236,7 +297,7 @@ def _range_sf(q: float, k: int, df: float) -> float:
     edges = sorted({start, lo, hi} | {x for x in (4 * peak, negligible / q if q > 0 else hi) if start < x < hi})
     count = _panel_count(q, df)
     pieces = [(a, b, lambda a=a, b=b: _panels(a, b, count)) for a, b in zip(edges, edges[1:])]
-    below = 0.0  # the mass of s below the grid, where q·s is so small that the range's tail is 1
+    below, cut = 0.0, 0.0  # the mass of s below the grid, where q·s is so small that the range's tail is 1
     if df < 5:  # s^(df − 1) is not smooth enough at 0 (a fractional power below 4 cost up to 2e-10 of p on 3.1 to 3.3 df,
         # equal panels): panels shrinking geometrically towards it carry the first stretch
         first, cut = _shrinking(edges[1], edges[0])
@@ -249,7 +310,10 @@ def _range_sf(q: float, k: int, df: float) -> float:
 
     def over(nodes: "tuple[np.ndarray, np.ndarray]") -> float:
         s, ws = nodes
-        return float(_range_tail(q * s, k) @ (ws * np.exp(log_density + (df - 1) * np.log(s) - h * s * s)))
+        tail = _range_tail(q * s, k)
+        if held is not None:
+            held.append((s, ws, tail))
+        return float(tail @ (ws * np.exp(log_density + (df - 1) * np.log(s) - h * s * s)))
 
     # the most a stretch [a, b] of s can add is its mass times the range's tail at q·a (the tail falls as w grows):
     # the stretches taken from the largest such bound down, while it is above 1e-17 of the p so far (s beyond the
@@ -257,6 +321,8 @@ def _range_sf(q: float, k: int, df: float) -> float:
     bounds = [min(float(special.gammainc(h, h * b * b)), float(special.gammaincc(h, h * a * a)))
               * (1.0 if a == 0 else float(_range_tail(np.array([q * a]), k)[0])) for a, b, _ in pieces]
     p = below
+    if held is not None:
+        held.append(cut)
     for bound, (_, _, nodes) in sorted(zip(bounds, pieces), key=lambda x: -x[0]):
         if p > 0 and bound <= 1e-17 * p:
             break
