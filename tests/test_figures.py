@@ -168,6 +168,23 @@ def test_png_size_dpi_and_the_three_files(tmp_path):
     assert draw(model, APA, "svg") == draw(model, APA, "svg")  # deterministic: no dates, fixed ids
 
 
+@pytest.mark.parametrize("kind", ["means", "interaction", "forest", "scatter"])
+def test_one_figure_saved_three_ways_is_each_format_drawn_afresh(tmp_path, kind):
+    """write_figure builds and lays out a figure once and saves it as PNG, SVG and PDF: each file has the bytes of
+    that format drawn from a figure of its own (open data: PlantGrowth, penguins, a logistic and a linear regression)."""
+    penguins = pg.read_dataset("penguins")
+    made = {"means": lambda: (anova_oneway(PLANTS, "weight", "group"), None),
+            "interaction": lambda: (factorial_anova(penguins, "body_mass_g", ("species", "sex")), None),
+            "forest": lambda: (logistic_regression(penguins, "sex", ["bill_depth_mm", "bill_length_mm"]), None),
+            "scatter": lambda: (pearson(penguins, "flipper_length_mm", "body_mass_g"), penguins)}[kind]
+    records, data = made()
+    model = figure(records, kind, APA, data=data) if data is not None else figure(records, kind, APA)
+    written = write_figure(model, APA, tmp_path, kind)
+    for fmt in ("png", "svg", "pdf"):
+        assert (tmp_path / f"{kind}.{fmt}").read_bytes() == draw(model, APA, fmt), fmt
+    assert written.png == draw(model, APA, "png")
+
+
 def test_word_picture_with_alt_text_and_caption(tmp_path):
     from statsetter.export.docx_writer import results_document, save_document
 
