@@ -10,26 +10,31 @@ from ..records import EffectSize, Interval, Note, Result
 from . import _common as c
 
 if TYPE_CHECKING:
+    import numpy as np
     import pandas as pd
 
 
-def _items(df: "pd.DataFrame", items: Sequence[str], reverse: Sequence[str], minimum: float | None, maximum: float | None):  # type: ignore[no-untyped-def]
+def _items(df: "pd.DataFrame", items: Sequence[str], reverse: Sequence[str], minimum: float | None, maximum: float | None) -> "np.ndarray":
+    """The items' values as one rows × items array of floats (missing: NaN), the reverse-keyed ones reversed."""
+    import numpy as np
+
     if len(items) < 2:
         raise InputError(f"items: {len(items)} item(s); a scale needs at least two")
     unknown = [r for r in reverse if r not in items]
     if unknown:
         raise InputError(f"reverse: {', '.join(unknown)} not among the items")
-    frame = df[[c.numeric(df, i).name for i in items]].astype(float).copy()
+    values = np.column_stack([c.numeric(df, i).to_numpy(dtype=float) for i in items])
     if reverse:
         if minimum is None or maximum is None:
             raise InputError("reverse-keyed items need the item minimum and maximum")
         for name in reverse:
-            col = frame[name]
+            j = list(items).index(name)
+            col = values[:, j]
             outside = col[(col < minimum) | (col > maximum)]
             if len(outside):
-                raise InputError(f"{name}: value {outside.iloc[0]:g} is outside the item range {minimum:g}–{maximum:g}")
-            frame[name] = minimum + maximum - col
-    return frame
+                raise InputError(f"{name}: value {outside[0]:g} is outside the item range {minimum:g}–{maximum:g}")
+            values[:, j] = minimum + maximum - col
+    return values
 
 
 def scale_score(
@@ -47,21 +52,27 @@ def scale_score(
     missing; with ``min_share`` (say 0.8) a row with at least that share of
     its items present is scored from them — the mean of the present items,
     or for a sum that mean times the number of items (prorated)."""
+    import numpy as np
+    import pandas as pd
+
     if scoring not in ("mean", "sum"):
         raise InputError(f"scoring: {scoring!r} is not mean or sum")
     if min_share is not None and not (isinstance(min_share, (int, float)) and 0 < min_share <= 1):
         raise InputError(f"min_share: {min_share!r} is not a share between 0 and 1 (0.8 for 80% of the items)")
-    frame = _items(df, items, reverse, minimum, maximum)
-    present = frame.notna().sum(axis=1)
+    values = _items(df, items, reverse, minimum, maximum)
+    present = np.count_nonzero(~np.isnan(values), axis=1)
     enough = present == len(items) if min_share is None else present >= min_share * len(items) - 1e-9
-    mean = frame.mean(axis=1)
+    with np.errstate(invalid="ignore", divide="ignore"):  # a row without items: 0/0, scored missing below
+        mean = np.nansum(values, axis=1) / present
     score = mean if scoring == "mean" else mean * len(items)
-    return score.where(enough & (present > 0))
+    return pd.Series(np.where(enough & (present > 0), score, np.nan), index=df.index)
 
 
 def scoring_note(df: "pd.DataFrame", items: Sequence[str], name: str, min_share: float | None = None) -> str:
     """What the missing-item rule did: how many rows lost their score, how many were prorated."""
-    present = df[list(items)].notna().sum(axis=1)
+    import numpy as np
+
+    present = sum(np.asarray(c.column(df, i).notna()) for i in items)
     k = len(items)
     if min_share is None:
         lost = int((present < k).sum())
@@ -86,32 +97,32 @@ def cronbach_alpha(
 ) -> Result:
     """Cronbach's α on complete rows, with Feldt's (1965) F-based interval and
     the corrected item–total correlation of every item (in ``details``)."""
-    from scipy import stats
+    import numpy as np
+    from scipy import special
 
-    frame = _items(df, items, reverse, minimum, maximum)
-    complete = frame.dropna()
+    values = _items(df, items, reverse, minimum, maximum)
+    complete = values[~np.isnan(values).any(axis=1)]
     n, k = complete.shape
     if n < 3:
         raise InputError(f"items: {n} complete row(s); α needs at least 3")
-    variances = complete.var(ddof=1)
+    variances = complete.var(axis=0, ddof=1)
     if (variances == 0).any():
-        raise InputError(f"{variances[variances == 0].index[0]}: zero variance; α is undefined")
+        raise InputError(f"{items[int(np.flatnonzero(variances == 0)[0])]}: zero variance; α is undefined")
     total = complete.sum(axis=1)
     alpha = k / (k - 1) * (1 - variances.sum() / total.var(ddof=1))
     df1, df2 = n - 1, (n - 1) * (k - 1)
     g = (1 - level) / 2
-    low = 1 - (1 - alpha) * stats.f.ppf(1 - g, df1, df2)
-    high = 1 - (1 - alpha) * stats.f.ppf(g, df1, df2)
+    low = 1 - (1 - alpha) * special.fdtri(df1, df2, 1 - g)  # the F quantiles (scipy.stats.f.ppf computes these)
+    high = 1 - (1 - alpha) * special.fdtri(df1, df2, g)
     details: dict[str, object] = {"k_items": k}
-    for item in complete.columns:
-        rest = total - complete[item]
-        details[f"item_total_r.{item}"] = float(complete[item].corr(rest))
-    dropped = len(frame) - n
+    for j, item in enumerate(items):
+        details[f"item_total_r.{item}"] = float(np.corrcoef(complete[:, j], total - complete[:, j])[0, 1])
+    dropped = len(values) - n
     notes = [Note("method", "α CI by Feldt (1965); corrected item–total r per item in details.")]
     if reverse:
         notes.append(Note("method", f"Reverse-keyed: {', '.join(reverse)} (x → {minimum:g} + {maximum:g} − x)."))
     if dropped:
-        notes.append(Note("missing", f"{dropped} of {len(frame)} rows dropped for missing items (listwise)."))
+        notes.append(Note("missing", f"{dropped} of {len(values)} rows dropped for missing items (listwise)."))
     from ..records import Variable
 
     return Result(
