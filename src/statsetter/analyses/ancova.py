@@ -113,16 +113,17 @@ def ancova(
     means = {z: float(frame[z].mean()) for z in cov_names}
     from itertools import product
 
-    cells = [cell for cell in product(*[[category_text(v) for v in levels] for levels in levels_of])
-             if ((frame[group_names] == list(cell)).all(axis=1)).any()]
+    from collections import Counter
+
+    sizes = Counter(zip(*(frame[g].tolist() for g in group_names)))  # each cell's rows, counted once
+    cells = [cell for cell in product(*[[category_text(v) for v in levels] for levels in levels_of]) if sizes[cell]]
     grid = pd.DataFrame({**{g: [cell[i] for cell in cells] for i, g in enumerate(group_names)}, **{z: [m] * len(cells) for z, m in means.items()}})
     predicted = fit.get_prediction(grid).summary_frame(alpha=1 - level)
     at = ", ".join(f"{shown[cov]}\u00a0=\u00a0{means[z]:.4g}" for z, cov in zip(cov_names, covariates))  # kept on one line
     for cell, (_, row) in zip(cells, predicted.iterrows()):
-        group_n = int((frame[group_names] == list(cell)).all(axis=1).sum())
         out.append(Result(
             kind="adjusted_mean",
-            n=group_n,
+            n=sizes[cell],
             estimate=Estimate("adjusted mean", float(row["mean"]), se=float(row["mean_se"]),
                               ci=Interval(level, float(row["mean_ci_lower"]), float(row["mean_ci_upper"]))),
             variables=variables,

@@ -149,7 +149,8 @@ def factorial_anova(
     la, lb = labels.get(a, a), labels.get(b, b)
     names = {f"C(a_{coding})": (la, False), f"C(b_{coding})": (lb, False), f"C(a_{coding}):C(b_{coding})": (f"{la} × {lb}", True)}
     y = frame["y_"].to_numpy(dtype=float)
-    cells = c.cell_groups((category_text(x), category_text(z), y[((frame["a_"] == x) & (frame["b_"] == z)).to_numpy()])
+    in_a, in_b = frame["a_"].to_numpy(), frame["b_"].to_numpy()
+    cells = c.cell_groups((category_text(x), category_text(z), y[(in_a == x) & (in_b == z)])
                           for x in categories(frame["a_"]) for z in categories(frame["b_"]))
     out = []
     for term, (label, interaction) in names.items():
