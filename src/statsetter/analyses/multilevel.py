@@ -130,8 +130,24 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
 
     if solved(0.0)[2] <= 1e-20 * float(((y - y.mean()) ** 2).sum()):  # no residual even without groups: nothing to split
         raise InputError("the fixed effects fit the outcome exactly (no residual variance): there is no variance to split between groups")
+    def slopes_at(thetas: "np.ndarray") -> list[float]:
+        """``slope`` at every θ of a grid at once (its designs' QR as one batch; the same sums, θ by θ)."""
+        shrink = 1.0 / (1.0 + np.outer(thetas, counts))
+        part = (1.0 - np.sqrt(shrink))[:, codes]
+        design = X[None, :, :] - part[:, :, None] * mean_x[None, :, :]
+        Q, R = np.linalg.qr(design)
+        z = y[None, :] - part * mean_y[None, :]
+        beta = np.linalg.solve(R, np.einsum("mnp,mn->mp", Q, z)[:, :, None])[:, :, 0]
+        r = z - np.einsum("mnp,mp->mn", design, beta)
+        q = np.einsum("mn,mn->m", r, r)
+        dq = -(((shrink * (sums_y[None, :] - beta @ sums_x.T)) ** 2).sum(axis=1))
+        g = (counts[None, :] * shrink).sum(axis=1) + d * dq / q
+        if reml:
+            g -= (np.linalg.solve(np.swapaxes(R, 1, 2), np.swapaxes(sums_x[None, :, :] * shrink[:, :, None], 1, 2)) ** 2).sum(axis=(1, 2))
+        return (-0.5 * g).tolist()
+
     grid = [0.0, *np.logspace(-8, 8, 33).tolist()]
-    slopes = [slope(t) for t in grid]
+    slopes = slopes_at(np.array(grid))
     roots = [optimize.brentq(slope, a, b, xtol=1e-300, rtol=4 * np.finfo(float).eps, maxiter=200)
              for a, b, fa, fb in zip(grid, grid[1:], slopes, slopes[1:]) if fa > 0 >= fb]
     unsettled = slopes[-1] > 0  # still rising at θ = 10⁸: the residual variance is all but 0 within groups
