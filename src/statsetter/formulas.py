@@ -132,6 +132,8 @@ def studentized_range_quantile(level: float, k: int, df: float) -> float:
 
     # (above 1,000 df the grid of s is narrow, ±8/√(2·df), and the start, which ignores df from 120 on, can lie
     # outside it: the root on infinite df, cheap and within about 1/df of this one, starts there)
+    if df >= _AS_INFINITE and not math.isinf(df):
+        return studentized_range_quantile(level, k, math.inf)
     a = _q_start(level, k, df) if df <= 1000 or math.isinf(df) else studentized_range_quantile(level, k, math.inf)
     if not math.isinf(df):  # (on infinite df the CDF is one integral, as cheap as a held one)
         for _ in range(8):
@@ -194,18 +196,43 @@ def _held_gap(level: float, k: int, df: float, q0: float) -> "tuple[Callable[[fl
     here = 1.0 - _range_sf(q0, k, df, held) - level
     cut = held.pop(0)
     h = df / 2
-    log_density = math.log(2) + h * math.log(h) - special.gammaln(h)
     sigma = np.concatenate([s for s, _, _ in held])
     weighted = np.concatenate([ws * tail for _, ws, tail in held])
-    log_sigma = np.log(sigma)
 
     def gap(q: float) -> float:
         r = q0 / q
-        s = sigma * r
         below = float(special.gammainc(h, h * (cut * r) ** 2)) if cut else 0.0
-        return 1.0 - level - below - r * float(weighted @ np.exp(log_density + (df - 1) * (log_sigma + math.log(r)) - h * s * s))
+        return 1.0 - level - below - r * float(weighted @ np.exp(_log_s_density(sigma * r, df)))
 
     return gap, here
+
+
+_AS_INFINITE = 1e15  # error df from here on are infinite: P(Q > q) moves by about 1/df of itself, below 1e-13
+
+
+def _log_s_density(s: "np.ndarray", df: float) -> "np.ndarray":
+    """ln of the density of s = √(χ²_df / df) at each s: ln 2 + h ln h − ln Γ(h) + (2h − 1) ln s − h s², h = df/2.
+    From h = 50 on, as ln 2 + ½ ln(h/2π) − ε(h) − ln s + h·[2(ln(1 + u) − u) − u²], u = s − 1, ε Stirling's
+    remainder of ln Γ: in the first form terms of size h cancel to the density's few units, which had cost about
+    df·3e-16 of p (2e-10 at 10⁶ df, 3e-3 at 10¹²); ln(1 + u) − u by its series where |u| < 0.1, where s's mass lies
+    on many df (the difference of the two would keep only the digits of u below its square)."""
+    import numpy as np
+    from scipy import special
+
+    from .pvalues import _stirling
+
+    h = df / 2
+    if h < 50:
+        return math.log(2) + h * math.log(h) - float(special.gammaln(h)) + (df - 1) * np.log(s) - h * s * s
+    u = s - 1.0
+    small = np.abs(u) < 0.1
+    near = np.where(small, u, 0.0)
+    series = np.zeros_like(near)
+    for j in range(17, 1, -1):  # Σ_{j ≥ 2} (−1)^(j+1) u^j / j by Horner, to u^17 (below 1e-17 of the sum at |u| = 0.1)
+        series = series * near + (1.0 if j % 2 else -1.0) / j
+    with np.errstate(invalid="ignore", divide="ignore"):  # (the direct form only where |u| >= 0.1)
+        deviation = np.where(small, series * near * near, np.log1p(u) - u)
+    return math.log(2) + 0.5 * math.log(h / (2 * math.pi)) - _stirling(h) - np.log(s) + h * (2 * deviation - u * u)
 
 
 _GL16 = None  # Gauss–Legendre nodes and weights of order 16, made on first use
@@ -257,11 +284,14 @@ def _range_tail(w: "np.ndarray", k: int) -> "np.ndarray":
 
 def studentized_range_sf(q: "float | np.ndarray", k: int, df: float) -> "np.ndarray":
     """P(Q > q) for the studentized range Q of ``k`` means with ``df`` error
-    df (df = inf: known variance), for each q: the range's tail
-    (``_range_tail``) at q·s averaged over s = √(χ²_df / df), both integrals
-    by composite Gauss–Legendre, s on a grid of each q's own (``_range_sf``).
-    Exact where it can be checked: for k = 2 it is 2·P(t_df > q/√2) to 1e-9
-    relative down to p = 1e-280 (to 1e-12 from 5 df up, q up to 1,000);
+    df (df = inf: known variance; from 10¹⁵ df on, the same), for each q:
+    the range's tail (``_range_tail``) at q·s averaged over s = √(χ²_df /
+    df), both integrals by composite Gauss–Legendre, s on a grid of each q's
+    own (``_range_sf``), its density without terms of size df that cancel
+    (``_log_s_density``). Exact where it can be checked: for k = 2 it is
+    2·P(t_df > q/√2) to 1e-9 relative down to p = 1e-280 (to 1e-12 from 5
+    df up to 10⁸, q up to 1,000; to 1e-10 beyond, where the nodes' own
+    rounding is 1e-16 of a spread of s of 1/√(2·df));
     within 1e-8 of scipy's studentized_range
     (nested adaptive quadrature) where scipy is exact, and within R's own
     2e-7 of its ptukey; p values scipy prints as 0 against 20-digit mpmath
@@ -273,7 +303,7 @@ def studentized_range_sf(q: "float | np.ndarray", k: int, df: float) -> "np.ndar
     out = np.where(np.isnan(qs), math.nan, np.where(qs > 0, 0.0, 1.0))
     inner = (qs > 0) & np.isfinite(qs)
     if inner.any():
-        out[inner] = _range_tail(qs[inner], k) if math.isinf(df) else [_range_sf(x, k, df) for x in qs[inner].tolist()]
+        out[inner] = _range_tail(qs[inner], k) if df >= _AS_INFINITE else [_range_sf(x, k, df) for x in qs[inner].tolist()]
     return out
 
 
@@ -306,14 +336,13 @@ def _range_sf(q: float, k: int, df: float, held: list | None = None) -> float:
     else:  # below the grid: where it matters (a huge q on few df, its mass near s = 0), panels shrinking towards 0;
         # under their lowest cut (start/4¹⁰) lies at most 4⁻⁵⁰ of the mass below start (s^(df − 1), df >= 5): left out
         pieces.append((0.0, start, lambda: _shrinking(start, 0.0)[0]))
-    log_density = math.log(2) + h * math.log(h) - special.gammaln(h)
 
     def over(nodes: "tuple[np.ndarray, np.ndarray]") -> float:
         s, ws = nodes
         tail = _range_tail(q * s, k)
         if held is not None:
             held.append((s, ws, tail))
-        return float(tail @ (ws * np.exp(log_density + (df - 1) * np.log(s) - h * s * s)))
+        return float(tail @ (ws * np.exp(_log_s_density(s, df))))
 
     # the most a stretch [a, b] of s can add is its mass times the range's tail at q·a (the tail falls as w grows):
     # the stretches taken from the largest such bound down, while it is above 1e-17 of the p so far (s beyond the
