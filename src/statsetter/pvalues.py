@@ -38,6 +38,7 @@ _LARGE = 10.0  # from here on Stirling's series (8 terms) is exact to below 1e-1
 _EPS = 1e-16
 _TINY = 1e-300
 _MAX_TERMS = 100_000
+_MAX_DF = 1e15  # no data give more degrees of freedom (and t's tail near 0 fails from 10¹⁷ on)
 
 
 def _stirling(z: float) -> float:
@@ -249,7 +250,13 @@ def _gamma_fraction(a: float, x: float) -> float:
 
 def upper_tail(symbol: str, value: float, df: tuple[float, ...] = ()) -> float:
     """P(statistic ≥ |value|) for t and z (one tail of |value|), P(statistic ≥
-    value) for F and χ² (H as χ²)."""
+    value) for F and χ² (H as χ²). df above 10¹⁵ are refused (InputError):
+    no data give them, and there t's tail near 0 and F's with its numerator
+    df there would be wrong (exact to 1e-12 up to 10¹⁵ df for t, F's
+    denominator and χ² where the statistic's own rounding allows, up to 10⁶
+    for F's numerator: tests/test_pvalues.py)."""
+    if df and max(df) > _MAX_DF:
+        raise InputError(f"{symbol}: {max(df):g} degrees of freedom are more than any data give (above 10¹⁵)")
     if symbol == "t":
         s = value * value
         return 0.5 * _ibeta(df[0] / 2, 0.5, df[0] / (df[0] + s), s / (df[0] + s))
@@ -273,6 +280,8 @@ def p_from_statistic(symbol: str, value: float, df: tuple[float, ...] = (), alte
         for i, d in enumerate(df):
             if not (math.isfinite(d) and d > 0):
                 raise InputError(f"{symbol}: df[{i}] = {d:g} is not a positive number of degrees of freedom")
+            if d > _MAX_DF:
+                raise InputError(f"{symbol}: df[{i}] = {d:g} is more degrees of freedom than any data give (above 10¹⁵); check the value")
 
     if not math.isfinite(value):
         raise InputError(f"{symbol} = {value!r} is not a finite number; no p can be computed from it")
