@@ -205,3 +205,21 @@ def test_degrees_of_freedom_beyond_any_data_are_refused():
     with pytest.raises(InputError, match="10¹⁵"):
         upper_tail("t", 0.5, (1e17,))
     assert p_from_statistic("t", 0.5, (1e15,)) == pytest.approx(2 * stats.t.sf(0.5, 1e15), rel=1e-12)
+
+
+def test_statistics_far_out_in_a_tail_give_a_p_not_an_error():
+    """A statistic too large (or too small) for its tail to be written: every p in [0, 1], the same as scipy's where
+    scipy's is above 1e-300 (to 1e-7: p values of 1e-190 and below, on 10⁹ df, differ there), 0 or 1 where it is not
+    — before, χ² = 1e308, χ² = 1e-9 on 10¹⁵ df, t = 10¹⁵ on 38 df and F = 10³⁰⁰ on many df stopped with a math
+    error or a fraction that did not converge (found by feeding `statsetter format` such values)."""
+    cases = [("t", v, (df,)) for v in (10, 300, 1e5, 1e15, 1e200) for df in (1, 38, 1e4, 1e9)]
+    cases += [("F", v, (d1, df)) for v in (1e-300, 1e-8, 50, 1e8, 1e300) for d1 in (1, 3, 20, 1e4) for df in (3, 38, 1e4, 1e9)]
+    cases += [("chi2", v, (df,)) for v in (1e-9, 500, 1e8, 1e308) for df in (1, 38, 1e6, 1e15)]
+    scipy_tail = {"t": lambda v, df: stats.t.sf(v, *df), "F": lambda v, df: stats.f.sf(v, *df), "chi2": lambda v, df: stats.chi2.sf(v, *df)}
+    for symbol, value, df in cases:
+        ours, ref = upper_tail(symbol, value, df), scipy_tail[symbol](value, df)
+        assert 0.0 <= ours <= 1.0, (symbol, value, df, ours)
+        if ref > 1e-300:
+            assert ours == pytest.approx(ref, rel=1e-7), (symbol, value, df)
+        else:
+            assert ours <= 1e-300, (symbol, value, df, ours)

@@ -38,6 +38,7 @@ _LARGE = 10.0  # from here on Stirling's series (8 terms) is exact to below 1e-1
 _EPS = 1e-16
 _TINY = 1e-300
 _MAX_TERMS = 100_000
+_LOG_NEGLIGIBLE = -760.0  # a prefix below e^−760 (the fractions it multiplies are at most about 1) leaves nothing a double holds
 _MAX_DF = 1e15  # no data give more degrees of freedom (and t's tail near 0 fails from 10¹⁷ on)
 
 
@@ -50,6 +51,14 @@ def _stirling(z: float) -> float:
     return total
 
 
+def _log_of_ratio(d: float, a: float, ratio: float) -> float:
+    """ln(1 + d/a) for ratio = 1 + d/a: through log1p where the ratio is near 1 (its digits are in d), directly where it
+    is not (then d/a can round to −1 when the ratio is tiny: a statistic far out in a tail); −inf for a ratio of 0."""
+    if d > -0.5 * a:
+        return math.log1p(d / a)
+    return math.log(ratio) if ratio > 0 else -math.inf
+
+
 def _beta_prefix(a: float, b: float, x: float, y: float) -> float:
     """ln of x^a y^b / B(a, b), with y = 1 − x, and no large logs cancelling:
     where a (or b) is large, x(a + b)/a = 1 + d/a enters through log1p."""
@@ -57,12 +66,12 @@ def _beta_prefix(a: float, b: float, x: float, y: float) -> float:
         return a * math.log(x) + b * math.log(y) - (math.lgamma(a) + math.lgamma(b) - math.lgamma(a + b))
     if a >= _LARGE and b >= _LARGE:
         d = x * b - y * a  # x(a + b) − a
-        return (a * math.log1p(d / a) + b * math.log1p(-d / b) + 0.5 * math.log(a * b / (a + b)) - 0.5 * _LN_2PI
-                - (_stirling(a) + _stirling(b) - _stirling(a + b)))
+        return (a * _log_of_ratio(d, a, x * (a + b) / a) + b * _log_of_ratio(-d, b, y * (a + b) / b) + 0.5 * math.log(a * b / (a + b))
+                - 0.5 * _LN_2PI - (_stirling(a) + _stirling(b) - _stirling(a + b)))
     if b >= _LARGE:  # make a the large one
         a, b, x, y = b, a, y, x
     d = x * b - y * a
-    return (a * math.log1p(d / a) - 0.5 * math.log1p(b / a) + b * math.log(y * (a + b)) - b - math.lgamma(b)
+    return (a * _log_of_ratio(d, a, x * (a + b) / a) - 0.5 * math.log1p(b / a) + b * math.log(y * (a + b)) - b - math.lgamma(b)
             - _stirling(a) + _stirling(a + b))
 
 
@@ -147,7 +156,10 @@ def _large_a(a: float, b: float, y: float) -> float | None:
     708, their BGRAT; ν = a + (b − 1)/2, z = −ν ln x): Q(b, z) and a series in
     1/ν². It reads ln x from y, where the continued fraction in x loses the
     digits of a y far below 1 (a t or F with hundreds of thousands of df).
-    None when the expansion does not settle (the caller falls back)."""
+    None when the expansion does not settle (the caller falls back), or
+    where x rounds to 0 (y = 1: a statistic beyond any double's reach)."""
+    if y >= 1:
+        return None
     lnx = math.log1p(-y)
     nu = a + 0.5 * (b - 1)
     z = -nu * lnx
@@ -201,15 +213,17 @@ def _ibeta(a: float, b: float, x: float, y: float) -> float:
         if found is not None:
             return found
     if x > (a + 1) / (a + b + 2):  # the fraction converges fast on the other side
-        return 1 - math.exp(_beta_prefix(b, a, y, x)) * _beta_fraction(b, a, y) / b
-    return math.exp(_beta_prefix(a, b, x, y)) * _beta_fraction(a, b, x) / a
+        prefix = _beta_prefix(b, a, y, x)
+        return 1.0 if prefix < _LOG_NEGLIGIBLE else 1 - math.exp(prefix) * _beta_fraction(b, a, y) / b
+    prefix = _beta_prefix(a, b, x, y)
+    return 0.0 if prefix < _LOG_NEGLIGIBLE else math.exp(prefix) * _beta_fraction(a, b, x) / a
 
 
 def _gamma_prefix(a: float, x: float) -> float:
     """ln of x^a e^(−x) / Γ(a), through log1p((x − a)/a) where a is large."""
     if a >= _LARGE:
         d = x - a
-        return a * math.log1p(d / a) - d + 0.5 * math.log(a) - 0.5 * _LN_2PI - _stirling(a)
+        return a * _log_of_ratio(d, a, x / a) - d + 0.5 * math.log(a) - 0.5 * _LN_2PI - _stirling(a)
     return a * math.log(x) - x - math.lgamma(a)
 
 
@@ -225,7 +239,8 @@ def _gamma_upper(a: float, x: float) -> float:
             term *= x / n
             total += term
         return 1 - math.exp(_gamma_prefix(a, x)) * total
-    return math.exp(_gamma_prefix(a, x)) * _gamma_fraction(a, x)
+    prefix = _gamma_prefix(a, x)
+    return 0.0 if prefix < _LOG_NEGLIGIBLE else math.exp(prefix) * _gamma_fraction(a, x)
 
 
 def _gamma_fraction(a: float, x: float) -> float:
