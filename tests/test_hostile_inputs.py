@@ -308,6 +308,43 @@ def test_infinite_values_through_the_api_are_refused_by_name():
         t_independent(frame, "y", "g").main
 
 
+@pytest.mark.parametrize("command", [["run", "plan.toml"], ["describe", "d.csv", "--by", "sex"]])
+def test_values_too_large_to_square_are_refused_by_name(box, capsys, command):
+    """A value beyond ±1e100 (no measurement comes near; squared and summed, one of 1e308 overflowed to inf and
+    several analyses and the descriptives table stopped with internal errors, found by feeding them such data) is
+    refused with its column, row and value; a run then writes nothing."""
+    frame = pg.read_dataset("penguins")
+    frame.loc[7, "body_mass_g"] = 1e150
+    frame.to_csv(box / "d.csv", index=False)
+    code, out, err = _run(command, capsys)
+    assert code == 2 and "body_mass_g: 1e+150 in row 8 is beyond ±1e100" in err and "Traceback" not in err
+    assert not (box / "out").exists()
+
+
+def test_degenerate_data_in_the_api_are_refused_by_name():
+    """Through the API too: a huge value, a mediator with one value, and a bootstrap on too few rows each name what
+    is wrong (before: an overflow, and numpy's "Singular matrix" as an internal error)."""
+    import numpy as np
+    import pandas as pd
+
+    from statsetter import load_style
+    from statsetter.analyses import mediation, t_independent
+    from statsetter.errors import InputError
+    from statsetter.style.numbers import numbers_for
+
+    with pytest.raises(InputError, match=r"y: 1e\+200 in row 2 is beyond"):
+        t_independent(pd.DataFrame({"y": [1.0, 1e200, 3.0, 4.0, 5.0, 6.0], "g": list("aabbab")}), "y", "g").main
+    penguins = pg.read_dataset("penguins").dropna(subset=["bill_length_mm", "flipper_length_mm", "body_mass_g"])
+    with pytest.raises(InputError, match="every complete row has the same value"):
+        mediation(penguins.assign(m=5e-324), "bill_length_mm", "m", "body_mass_g")
+    rng = np.random.default_rng(1)
+    few = pd.DataFrame({"x": rng.normal(size=5), "m": rng.normal(size=5), "y": rng.normal(size=5)})
+    with pytest.raises(InputError, match="5 complete rows: some bootstrap resamples"):
+        mediation(few, "x", "m", "y")
+    numbers = numbers_for(load_style("apa7"))
+    assert numbers.number(float("inf")) == "∞" and numbers.number(float("-inf")) == "−∞"
+
+
 # ---------------------------------------------------------------------------
 # bad manuscripts and Word files
 

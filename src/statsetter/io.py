@@ -114,6 +114,10 @@ def read_data(
     return _finite(data)
 
 
+HUGE_POWER = 100
+HUGE = 10.0**HUGE_POWER  # no measurement comes near; squared and summed over any data, values up to here stay finite
+
+
 def _finite(data: Dataset) -> Dataset:
     """Infinite values (inf, −inf) are not measurements: each numeric column's
     are set missing, and a note names the column and the count."""
@@ -129,6 +133,12 @@ def _finite(data: Dataset) -> Dataset:
             name, bad = frame.columns[floats[k]], np.isinf(block[:, k])
             changed[name] = frame[name].mask(bad)
             notes.append(f"{name}: {int(bad.sum())} infinite value(s) treated as missing (first in row {int(np.argmax(bad)) + 1})")
+        with np.errstate(invalid="ignore"):
+            huge = (np.abs(block) > HUGE) & np.isfinite(block)
+        for k in np.flatnonzero(huge.any(axis=0)):
+            row = int(np.argmax(huge[:, k]))
+            raise InputError(f"{data.path}: {frame.columns[floats[k]]}: {block[row, k]:g} in row {row + 1} is beyond ±1e{HUGE_POWER}, "
+                             "where sums of squares overflow; correct it, or rescale the variable (thousands instead of units)")
     if not changed:
         return data
     return replace(data, frame=frame.assign(**changed), notes=tuple(notes))

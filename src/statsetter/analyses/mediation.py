@@ -33,7 +33,10 @@ def _ols(X: "np.ndarray", y: "np.ndarray") -> tuple["np.ndarray", "np.ndarray", 
     resid = y - X @ beta
     dfe = len(y) - X.shape[1]
     sigma2 = float(resid @ resid) / dfe
-    cov = sigma2 * np.linalg.inv(X.T @ X)
+    try:
+        cov = sigma2 * np.linalg.inv(X.T @ X)
+    except np.linalg.LinAlgError:
+        raise InputError("the predictors of a mediation model are collinear (one is a combination of the others); drop or combine them") from None
     return beta, np.sqrt(np.diag(cov)), float(dfe)
 
 
@@ -54,8 +57,12 @@ def _resampled(Xa: "np.ndarray", M: "np.ndarray", Xb: "np.ndarray", yb: "np.ndar
         size = min(chunk, n_boot - start)
         rows = rng.integers(0, n, (size, n))
         counts = np.bincount((rows + (np.arange(size) * n)[:, None]).ravel(), minlength=size * n).reshape(size, n).astype(float)
-        a = np.linalg.solve((counts @ cross_a).reshape(size, pa, pa), (counts @ rhs_a.reshape(n, -1)).reshape(size, pa, k))[:, 1, :]
-        b = np.linalg.solve((counts @ cross_b).reshape(size, pb, pb), (counts @ rhs_b)[:, :, None])[:, 2:2 + k, 0]
+        try:
+            a = np.linalg.solve((counts @ cross_a).reshape(size, pa, pa), (counts @ rhs_a.reshape(n, -1)).reshape(size, pa, k))[:, 1, :]
+            b = np.linalg.solve((counts @ cross_b).reshape(size, pb, pb), (counts @ rhs_b)[:, :, None])[:, 2:2 + k, 0]
+        except np.linalg.LinAlgError:  # a resample drew too few distinct rows for its models (few rows to draw from)
+            raise InputError(f"{n} complete rows: some bootstrap resamples repeat so few of them that a model has no unique fit; "
+                             "the bootstrap needs more rows") from None
         out[start:start + size] = a * b
     return out
 
@@ -98,6 +105,9 @@ def mediation(
     n, k = len(data), len(mediators)
     if n < len(covariates) + k + 4:
         raise InputError(f"{n} complete rows: too few for the mediation models")
+    for name in names:
+        if np.ptp(cols[name]) == 0:
+            raise InputError(f"{name}: every complete row has the same value ({cols[name][0]:g}); no path through it can be estimated")
     ones = np.ones(n)
     Z = [cols[v] for v in covariates]
     Xa = np.column_stack([ones, cols[x], *Z])

@@ -201,6 +201,8 @@ class Numbers:
         """A number in the style: rounded half up, leading zero by quantity,
         grouped, with the style's minus sign and decimal mark. ``held`` caps
         the decimals at those the value was given with."""
+        if value in (float("inf"), float("-inf")):
+            return "∞" if value > 0 else self.style.minus + "∞"
         if decimals is None:
             decimals = self._qdec.get(quantity, self._decimals)
         if held is not None:
