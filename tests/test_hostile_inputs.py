@@ -310,14 +310,14 @@ def test_infinite_values_through_the_api_are_refused_by_name():
 
 @pytest.mark.parametrize("command", [["run", "plan.toml"], ["describe", "d.csv", "--by", "sex"]])
 def test_values_too_large_to_square_are_refused_by_name(box, capsys, command):
-    """A value beyond ±1e100 (no measurement comes near; squared and summed, one of 1e308 overflowed to inf and
+    """A value beyond ±1e50 (no measurement comes near; squared and summed, one of 1e308 overflowed to inf and
     several analyses and the descriptives table stopped with internal errors, found by feeding them such data) is
     refused with its column, row and value; a run then writes nothing."""
     frame = pg.read_dataset("penguins")
     frame.loc[7, "body_mass_g"] = 1e150
     frame.to_csv(box / "d.csv", index=False)
     code, out, err = _run(command, capsys)
-    assert code == 2 and "body_mass_g: 1e+150 in row 8 is beyond ±1e100" in err and "Traceback" not in err
+    assert code == 2 and "body_mass_g: 1e+150 in row 8 is beyond ±1e50" in err and "Traceback" not in err
     assert not (box / "out").exists()
 
 
@@ -343,6 +343,25 @@ def test_degenerate_data_in_the_api_are_refused_by_name():
         mediation(few, "x", "m", "y")
     numbers = numbers_for(load_style("apa7"))
     assert numbers.number(float("inf")) == "∞" and numbers.number(float("-inf")) == "−∞"
+
+
+def test_three_pairs_give_a_correlation_without_an_interval_and_vanishing_squares_are_named():
+    """Three pairs: r (and rs) with no CI, said — the Fisher z SE 1/√(n − 3) had divided by zero (an internal error on
+    a pilot's three cases). An outcome whose squares vanish in double precision (values near 1e-200): the two-way
+    ANOVA and the mixed model say so instead of statsmodels' or numpy's own errors."""
+    from statsetter.analyses import factorial_anova, mixed_model, pearson, spearman
+    from statsetter.errors import InputError
+
+    penguins = pg.read_dataset("penguins").dropna(subset=["bill_length_mm", "body_mass_g", "sex"])
+    three = penguins.head(3)
+    for analysis in (pearson, spearman):
+        r = analysis(three, "bill_length_mm", "body_mass_g")
+        assert r.n == 3 and r.effects[0].ci is None and "more than 3 pairs" in r.effects[0].method
+    tiny = penguins.assign(body_mass_g=penguins.body_mass_g * 1e-200)
+    with pytest.raises(InputError, match="cannot be fitted to these data"):
+        factorial_anova(tiny, "body_mass_g", ("species", "sex"))
+    with pytest.raises(InputError, match="too small to square"):
+        mixed_model(tiny, "body_mass_g", ["bill_length_mm"], "island")
 
 
 # ---------------------------------------------------------------------------

@@ -114,8 +114,8 @@ def read_data(
     return _finite(data)
 
 
-HUGE_POWER = 100
-HUGE = 10.0**HUGE_POWER  # no measurement comes near; squared and summed over any data, values up to here stay finite
+HUGE_POWER = 50
+HUGE = 10.0**HUGE_POWER  # no measurement comes near; raised to the fourth power (Welch's df, kurtosis) and summed, values up to here stay finite
 
 
 def _finite(data: Dataset) -> Dataset:
@@ -138,7 +138,7 @@ def _finite(data: Dataset) -> Dataset:
         for k in np.flatnonzero(huge.any(axis=0)):
             row = int(np.argmax(huge[:, k]))
             raise InputError(f"{data.path}: {frame.columns[floats[k]]}: {block[row, k]:g} in row {row + 1} is beyond ±1e{HUGE_POWER}, "
-                             "where sums of squares overflow; correct it, or rescale the variable (thousands instead of units)")
+                             "where sums of its powers overflow; correct it, or rescale the variable (thousands instead of units)")
     if not changed:
         return data
     return replace(data, frame=frame.assign(**changed), notes=tuple(notes))

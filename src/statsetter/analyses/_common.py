@@ -32,9 +32,29 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
     huge = np.abs(values) > HUGE
     if huge.any():
         first = int(huge.argmax())
-        raise InputError(f"{name}: {values[first]:g} in row {first + 1} is beyond ±1e{HUGE_POWER}, where sums of squares overflow; "
+        raise InputError(f"{name}: {values[first]:g} in row {first + 1} is beyond ±1e{HUGE_POWER}, where sums of its powers overflow; "
                          "correct it, or rescale the variable (thousands instead of units)")
     return x
+
+
+def formula_anova(formula: str, frame: "pd.DataFrame", ss_type: int, outcome: str) -> tuple[Any, "pd.DataFrame"]:
+    """statsmodels' OLS fit of ``formula`` and its Type II or III table; data it cannot fit (a term without variance,
+    values whose squares vanish) refused by name instead of statsmodels' own error."""
+    import numpy as np
+    from statsmodels.formula.api import ols
+    from statsmodels.stats.anova import anova_lm
+
+    try:
+        fit = ols(formula, data=frame).fit()
+        table = anova_lm(fit, typ=ss_type)
+    except (ValueError, np.linalg.LinAlgError) as exc:
+        problem = str(exc).splitlines()[0]
+    else:
+        if np.isfinite(table["F"].drop("Residual").to_numpy(dtype=float)).all():
+            return fit, table
+        problem = "an F is not a number: a term or the residuals have no variance in double precision"
+    raise InputError(f"{outcome}: the model cannot be fitted to these data ({problem}); look for a constant or collinear variable, "
+                     "or values too small to square")
 
 
 def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note]:

@@ -39,7 +39,6 @@ def ancova(
     term, then one adjusted mean per level of the factor (per cell)."""
     import pandas as pd
     from statsmodels.formula.api import ols
-    from statsmodels.stats.anova import anova_lm
 
     if ss_type not in (2, 3):
         raise InputError(f"ss_type: {ss_type!r} is not 2 or 3")
@@ -74,8 +73,7 @@ def ancova(
     coding = ", Sum" if ss_type == 3 else ""
     group_terms = [f"C({g}{coding})" for g in group_names]
     rhs = " + ".join([" * ".join(group_terms), *cov_names])
-    fit = ols(f"y_ ~ {rhs}", data=frame).fit()
-    table = anova_lm(fit, typ=ss_type)
+    fit, table = c.formula_anova(f"y_ ~ {rhs}", frame, ss_type, outcome)
     ss_res, df_res = float(table.loc["Residual", "sum_sq"]), float(table.loc["Residual", "df"])
     # homogeneity of regression slopes: each factor's products with each covariate added
     full = ols(f"y_ ~ {rhs} + " + " + ".join(f"{g}:{z}" for g in group_terms for z in cov_names), data=frame).fit()

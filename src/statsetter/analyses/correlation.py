@@ -35,6 +35,8 @@ def correlation_effect(
             return EffectSize(SYMBOLS[method], value, None, method="no CI: the SE of τb depends on the ties in the data")
         _, ase = kendall_tau_b_se(*data)
         se, name = (ase / (1 - value * value) if abs(value) < 1 else 0.0), "Fisher z, asymptotic SE of τb (delta method; ties allowed)"
+    elif n <= 3:  # the Fisher z SE, 1/√(n − 3) (or Bonett & Wright's), needs a fourth pair
+        return EffectSize(SYMBOLS[method], value, None, method=f"no CI: the Fisher z interval needs more than 3 pairs ({n} here)")
     elif method == "pearson":
         se, name = None, "Fisher z"
     else:

@@ -78,6 +78,9 @@ def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: s
     return fit, meta, coding, problems, X.shape[1], Z.shape[1]
 
 
+_NO_RESIDUAL = "the residuals' sum of squares is 0 in double precision: the outcome's values are too small, or the model fits them exactly"
+
+
 def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml: bool) -> tuple[_Fitted, list[str]]:
     """A random-intercept model y = Xβ + u_group + e by ML or REML, with the variance ratio θ = τ²/σ² as the one
     parameter: for each θ, β and σ² have closed forms (generalised least squares, as in Searle, Casella & McCulloch,
@@ -122,6 +125,8 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
 
     def slope(theta: float) -> float:
         _, R, q, shrink, residual_sums = solved(theta)
+        if not q > 0:  # (values so small that their squares vanish)
+            raise InputError(_NO_RESIDUAL)
         dq = -float(((shrink * residual_sums) ** 2).sum())  # dq/dθ: dw_i/dθ = shrink_i², β at its optimum (envelope)
         g = float((counts * shrink).sum()) + d * dq / q
         if reml:  # d log|A| / dθ = tr(A⁻¹ dA/dθ) = −‖R⁻ᵀ (shrink_i s_i)‖², dA/dθ = −Σ shrink_i² s_i s_i'
@@ -129,7 +134,7 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
         return -0.5 * g
 
     if solved(0.0)[2] <= 1e-20 * float(((y - y.mean()) ** 2).sum()):  # no residual even without groups: nothing to split
-        raise InputError("the fixed effects fit the outcome exactly (no residual variance): there is no variance to split between groups")
+        raise InputError("the fixed effects fit the outcome exactly, or its values are too small to square in double precision (no residual variance): there is no variance to split between groups")
     def slopes_at(thetas: "np.ndarray") -> list[float]:
         """``slope`` at every θ of a grid at once (its designs' QR as one batch; the same sums, θ by θ)."""
         shrink = 1.0 / (1.0 + np.outer(thetas, counts))
@@ -140,6 +145,8 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
         beta = np.linalg.solve(R, np.einsum("mnp,mn->mp", Q, z)[:, :, None])[:, :, 0]
         r = z - np.einsum("mnp,mp->mn", design, beta)
         q = np.einsum("mn,mn->m", r, r)
+        if not (q > 0).all():
+            raise InputError(_NO_RESIDUAL)
         dq = -(((shrink * (sums_y[None, :] - beta @ sums_x.T)) ** 2).sum(axis=1))
         g = (counts[None, :] * shrink).sum(axis=1) + d * dq / q
         if reml:

@@ -127,9 +127,6 @@ def factorial_anova(
     noncentral-F interval at ``level`` (Steiger, 2004). Type II or III sums of
     squares (Type III with sum-to-zero contrasts), stated; the term's, the
     error's and the corrected total sums of squares go into ``details``."""
-    from statsmodels.formula.api import ols
-    from statsmodels.stats.anova import anova_lm
-
     if ss_type not in (2, 3):
         raise InputError(f"ss_type: {ss_type!r} is not 2 or 3")
     a, b = factors
@@ -140,8 +137,7 @@ def factorial_anova(
             raise InputError(f"{f}: one level with data; a factor needs at least two")
     frame = data.rename(columns={outcome: "y_", a: "a_", b: "b_"})
     coding = ", Sum" if ss_type == 3 else ""
-    fit = ols(f"y_ ~ C(a_{coding}) * C(b_{coding})", data=frame).fit()
-    table = anova_lm(fit, typ=ss_type)
+    fit, table = c.formula_anova(f"y_ ~ C(a_{coding}) * C(b_{coding})", frame, ss_type, outcome)
     ss_res = float(table.loc["Residual", "sum_sq"])
     df_res = float(table.loc["Residual", "df"])
     ss_total = float(((frame["y_"] - frame["y_"].mean()) ** 2).sum())
