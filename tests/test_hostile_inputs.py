@@ -355,7 +355,7 @@ def test_three_pairs_give_a_correlation_without_an_interval_and_vanishing_square
     penguins = pg.read_dataset("penguins").dropna(subset=["bill_length_mm", "body_mass_g", "sex"])
     three = penguins.head(3)
     for analysis in (pearson, spearman):
-        r = analysis(three, "bill_length_mm", "body_mass_g")
+        r = analysis(three, "bill_length_mm", "body_mass_g").main
         assert r.n == 3 and r.effects[0].ci is None and "more than 3 pairs" in r.effects[0].method
     tiny = penguins.assign(body_mass_g=penguins.body_mass_g * 1e-200)
     with pytest.raises(InputError, match="cannot be fitted to these data"):
