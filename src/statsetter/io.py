@@ -19,6 +19,7 @@ from .errors import InputError
 from .files import read_start
 
 if TYPE_CHECKING:
+    import numpy as np
     import pandas as pd
 
 __all__ = ["Dataset", "read_data", "READERS"]
@@ -114,8 +115,20 @@ def read_data(
     return _finite(data)
 
 
-HUGE_POWER = 50
-HUGE = 10.0**HUGE_POWER  # no measurement comes near; raised to the fourth power (Welch's df, kurtosis) and summed, values up to here stay finite
+_HUGE_POWER = 50
+_HUGE = 10.0**_HUGE_POWER  # no measurement comes near; raised to the fourth power (Welch's df, kurtosis) and summed, values up to here stay finite
+
+
+def refuse_huge(name: str, values: "np.ndarray") -> None:
+    """InputError naming the first finite value of ``values`` (a column called ``name``) beyond ±1e50, and its row."""
+    import numpy as np
+
+    with np.errstate(invalid="ignore"):
+        huge = (np.abs(values) > _HUGE) & np.isfinite(values)
+    if huge.any():
+        row = int(np.argmax(huge))
+        raise InputError(f"{name}: {values[row]:g} in row {row + 1} is beyond ±1e{_HUGE_POWER}, where sums of its powers overflow; "
+                         "correct it, or rescale the variable (thousands instead of units)")
 
 
 def _finite(data: Dataset) -> Dataset:
@@ -129,16 +142,13 @@ def _finite(data: Dataset) -> Dataset:
     floats = [j for j, dtype in enumerate(frame.dtypes) if pd.api.types.is_float_dtype(dtype)]
     if floats:  # the float columns' values as one array, looked at once (most files have no infinite value)
         block = frame.iloc[:, floats].to_numpy(dtype=float, na_value=np.nan)
-        for k in np.flatnonzero(np.isinf(block).any(axis=0)):
-            name, bad = frame.columns[floats[k]], np.isinf(block[:, k])
+        infinite = np.isinf(block)
+        for k in np.flatnonzero(infinite.any(axis=0)):
+            name, bad = frame.columns[floats[k]], infinite[:, k]
             changed[name] = frame[name].mask(bad)
             notes.append(f"{name}: {int(bad.sum())} infinite value(s) treated as missing (first in row {int(np.argmax(bad)) + 1})")
-        with np.errstate(invalid="ignore"):
-            huge = (np.abs(block) > HUGE) & np.isfinite(block)
-        for k in np.flatnonzero(huge.any(axis=0)):
-            row = int(np.argmax(huge[:, k]))
-            raise InputError(f"{data.path}: {frame.columns[floats[k]]}: {block[row, k]:g} in row {row + 1} is beyond ±1e{HUGE_POWER}, "
-                             "where sums of its powers overflow; correct it, or rescale the variable (thousands instead of units)")
+        for k, j in enumerate(floats):
+            refuse_huge(f"{data.path}: {frame.columns[j]}", block[:, k])
     if not changed:
         return data
     return replace(data, frame=frame.assign(**changed), notes=tuple(notes))

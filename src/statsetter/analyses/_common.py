@@ -6,7 +6,7 @@ from typing import TYPE_CHECKING, Any, Iterable, Mapping, Sequence
 
 from ..coding import _code_key, categories, category_text, column, find_categories, find_category
 from ..errors import InputError
-from ..io import HUGE, HUGE_POWER
+from ..io import refuse_huge
 from ..records import GroupSummary, Note, Provenance, Variable
 
 if TYPE_CHECKING:
@@ -29,11 +29,7 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
     if infinite.any():
         first = int(infinite.argmax()) + 1
         raise InputError(f"{name}: {int(infinite.sum())} infinite value(s) (first in row {first}); set them missing or correct them")
-    huge = np.abs(values) > HUGE
-    if huge.any():
-        first = int(huge.argmax())
-        raise InputError(f"{name}: {values[first]:g} in row {first + 1} is beyond ±1e{HUGE_POWER}, where sums of its powers overflow; "
-                         "correct it, or rescale the variable (thousands instead of units)")
+    refuse_huge(name, values)
     return x
 
 

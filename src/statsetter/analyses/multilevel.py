@@ -135,6 +135,7 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
 
     if solved(0.0)[2] <= 1e-20 * float(((y - y.mean()) ** 2).sum()):  # no residual even without groups: nothing to split
         raise InputError("the fixed effects fit the outcome exactly, or its values are too small to square in double precision (no residual variance): there is no variance to split between groups")
+
     def slopes_at(thetas: "np.ndarray") -> list[float]:
         """``slope`` at every θ of a grid at once (its designs' QR as one batch; the same sums, θ by θ)."""
         shrink = 1.0 / (1.0 + np.outer(thetas, counts))
