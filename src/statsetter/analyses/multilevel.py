@@ -123,21 +123,13 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
         value = -float(np.log(shrink).sum()) + d * math.log(2 * math.pi * q / d) + d
         return -0.5 * (value + (2.0 * float(np.log(np.abs(np.diag(R))).sum()) if reml else 0.0))
 
-    def slope(theta: float) -> float:
-        _, R, q, shrink, residual_sums = solved(theta)
-        if not q > 0:  # (values so small that their squares vanish)
-            raise InputError(_NO_RESIDUAL)
-        dq = -float(((shrink * residual_sums) ** 2).sum())  # dq/dθ: dw_i/dθ = shrink_i², β at its optimum (envelope)
-        g = float((counts * shrink).sum()) + d * dq / q
-        if reml:  # d log|A| / dθ = tr(A⁻¹ dA/dθ) = −‖R⁻ᵀ (shrink_i s_i)‖², dA/dθ = −Σ shrink_i² s_i s_i'
-            g -= float((linalg.solve_triangular(R, (sums_x * shrink[:, None]).T, trans="T") ** 2).sum())
-        return -0.5 * g
-
     if solved(0.0)[2] <= 1e-20 * float(((y - y.mean()) ** 2).sum()):  # no residual even without groups: nothing to split
         raise InputError("the fixed effects fit the outcome exactly, or its values are too small to square in double precision (no residual variance): there is no variance to split between groups")
 
     def slopes_at(thetas: "np.ndarray") -> list[float]:
-        """``slope`` at every θ of a grid at once (its designs' QR as one batch; the same sums, θ by θ)."""
+        """The log-likelihood's derivative in θ at each of ``thetas``, their designs' QR as one batch: with β at its
+        optimum (envelope), dq/dθ = −Σ (shrink_i · residual sum_i)² and, under REML, d log|A|/dθ = tr(A⁻¹ dA/dθ) =
+        −‖R⁻ᵀ (shrink_i s_i)‖² (dA/dθ = −Σ shrink_i² s_i s_i')."""
         shrink = 1.0 / (1.0 + np.outer(thetas, counts))
         part = (1.0 - np.sqrt(shrink))[:, codes]
         design = X[None, :, :] - part[:, :, None] * mean_x[None, :, :]
@@ -156,7 +148,7 @@ def _intercept_fit(y: "np.ndarray", X: "np.ndarray", groups: "np.ndarray", reml:
 
     grid = [0.0, *np.logspace(-8, 8, 33).tolist()]
     slopes = slopes_at(np.array(grid))
-    roots = [optimize.brentq(slope, a, b, xtol=1e-300, rtol=4 * np.finfo(float).eps, maxiter=200)
+    roots = [optimize.brentq(lambda t: slopes_at(np.array([t]))[0], a, b, xtol=1e-300, rtol=4 * np.finfo(float).eps, maxiter=200)
              for a, b, fa, fb in zip(grid, grid[1:], slopes, slopes[1:]) if fa > 0 >= fb]
     unsettled = slopes[-1] > 0  # still rising at θ = 10⁸: the residual variance is all but 0 within groups
     theta = max([0.0, *roots, *([grid[-1]] if unsettled else [])], key=loglik)
