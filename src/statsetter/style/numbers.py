@@ -215,8 +215,7 @@ class Numbers:
     def _first_digit(self, value: float, decimals: int) -> int:
         """The decimals at which a small non-zero value shows its first
         significant digit (never more than ``_NEVER_ZERO_MAX``)."""
-        first = -Decimal(repr(float(value))).adjusted()
-        return max(decimals + 1, first) if first <= _NEVER_ZERO_MAX else decimals
+        return _more_decimals(decimals, -Decimal(repr(float(value))).adjusted(), None)
 
     def shown_decimals(self, value: float, quantity: str = "default", held: int | None = None) -> int:
         """The decimals :meth:`number` gives ``value`` (so that a CI can match its estimate)."""
@@ -303,16 +302,12 @@ class Numbers:
         rounded = rounded_digits(value, decimals)
         if null == 1.0 and value > 0 and _is_zero(rounded[1], rounded[2]):
             # a ratio's limit is never 0 (as it is never 1 unless it is): round at its first significant digit
-            decimals = max(decimals + 1, -Decimal(repr(float(value))).adjusted())
-            if held is not None:
-                decimals = min(decimals, held)
+            decimals = _more_decimals(decimals, -Decimal(repr(float(value))).adjusted(), held)
             rounded = rounded_digits(value, decimals)
         if value != null and _equals(rounded, null):
             # round at the first significant digit of the distance from the null
             distance = Decimal(repr(float(value))) - _decimal_of(null)
-            decimals = max(decimals + 1, -distance.adjusted())
-            if held is not None:
-                decimals = min(decimals, held)
+            decimals = _more_decimals(decimals, -distance.adjusted(), held)
             rounded = rounded_digits(value, decimals)
         return self._compose(rounded, quantity in self._bounded, True)
 
@@ -329,6 +324,16 @@ class Numbers:
             self.limit(low, quantity, null, decimals, held=held[0]),
             self.limit(high, quantity, null, decimals, held=held[1]),
         )
+
+
+def _more_decimals(decimals: int, first: int, held: int | None) -> int:
+    """The decimals at which a limit shows the first significant digit ``first`` (of itself, or of its distance from
+    the null), one more than ``decimals`` at least; none added beyond ``_NEVER_ZERO_MAX`` (a limit of 1e-300 is not
+    written with 300 zeros: the author rescales), and never more than the ``held`` decimals of a copied number."""
+    if first > _NEVER_ZERO_MAX:
+        return decimals
+    more = max(decimals + 1, first)
+    return more if held is None else min(more, held)
 
 
 @lru_cache(maxsize=64)
