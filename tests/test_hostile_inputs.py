@@ -676,11 +676,92 @@ def test_a_spreadsheet_with_a_far_cell_is_refused_before_loading(box, capsys):
     assert code == 2 and "far.xlsx" in err and "over the limit" in err
 
 
-@pytest.mark.parametrize("text", ["[" * 100_000 + "]" * 100_000, '{"kind": ' + "[" * 50_000 + "]" * 50_000 + "}", "[1, 2]", '{"records": 3}', "null"])
+@pytest.mark.parametrize("text", ["[" * 100_000 + "]" * 100_000, '{"kind": ' + "[" * 50_000 + "]" * 50_000 + "}", "[1, 2]", '{"records": 3}', "null",
+                                  # a kind that is an object or a list (found by mutating the demo's records.json: an internal error before)
+                                  '[{"kind": {}}]', '[{"kind": [1], "p": 0.5}]'])
 def test_strange_records_files(box, capsys, text):
     (box / "odd.json").write_text(text, encoding="utf-8")
     code, _, err = _run(["render", "odd.json"], capsys)
-    assert code == 2 and "odd.json" in err and "Traceback" not in err, err
+    assert code == 2 and "odd.json" in err and "Traceback" not in err and "internal error" not in err, err
+
+
+def _penguin_table_one() -> list:
+    """A Table 1 of the Palmer penguins by sex (a nominal, an interval and an ordinal row, with tests) as records.json holds it."""
+    import json
+
+    from statsetter.analyses.descriptives import describe
+    from statsetter.records import dump_records
+
+    frame = pg.read_dataset("penguins").assign(mass_band=lambda d: d.body_mass_g // 1000)
+    table = describe(frame, ["island", "bill_length_mm", "mass_band"], group="sex", levels={"mass_band": "ordinal"},
+                     show={"interval": ["mean_sd", "median_iqr", "range"]}, compare=True)
+    return json.loads(dump_records([table]))
+
+
+def _penguin_matrix() -> list:
+    """The correlations of the penguins' four measurements as records.json holds them."""
+    import json
+
+    from statsetter.analyses.matrix import correlation_matrix
+    from statsetter.records import dump_records
+
+    measures = ["bill_length_mm", "bill_depth_mm", "flipper_length_mm", "body_mass_g"]
+    return json.loads(dump_records([correlation_matrix(pg.read_dataset("penguins"), measures)]))
+
+
+def _mutated(path: tuple, value: object) -> list:
+    records = _penguin_matrix() if path[0] == "matrix" else _penguin_table_one()
+    path = path[1:] if path[0] == "matrix" else path
+    parent = records[0]
+    for key in path[:-1]:
+        parent = parent[key]
+    if value is _GONE:
+        del parent[path[-1]]
+    else:
+        parent[path[-1]] = value
+    return records
+
+
+_GONE = object()
+
+
+@pytest.mark.parametrize("path, value, named", [
+    (("variables", 0, "missing"), [[0, 0, 0], [0, 0, 0]], "variables[0].missing"),
+    (("variables", 0, "counts"), [[1, 2], [3, 4], [5, 6]], "variables[0].counts"),
+    (("variables", 0, "counts"), _GONE, "variables[0].counts"),
+    (("variables", 0, "level"), [{}], "variables[0].level"),
+    (("variables", 1, "label"), -1, "variables[1].label"),
+    (("variables", 1, "mean"), [42.1, 45.9], "variables[1].mean"),
+    (("variables", 1, "minimum"), _GONE, "variables[1].minimum"),
+    (("variables", 2, "q3"), _GONE, "variables[2].q3"),
+    (("variables", 2, "n"), _GONE, "variables[2].n"),
+    (("variables", 1, "smd"), "large", "variables[1].smd"),
+    (("column_n",), [165, 168], "column_n"),
+    (("matrix", "r"), None, ".r"),
+    (("matrix", "method"), "kendall", ".method"),
+    (("matrix", "level"), "95%", ".level"),
+    (("matrix", "labels"), {"body_mass_g": 3}, ".labels.body_mass_g"),
+    (("matrix", "rows"), -4, ".rows"),
+])
+def test_a_table_one_read_from_json_is_checked_against_what_its_rows_print(box, capsys, path, value, named):
+    """A Table 1 or a correlation matrix (each found by mutating the demo's records.json: an internal error of `render`
+    before, a table reading a field that the JSON gave in another shape, or not at all)."""
+    import json
+
+    (box / "t1.json").write_text(json.dumps(_mutated(path, value)), encoding="utf-8")
+    for args in (["render", "t1.json"], ["render", "t1.json", "--to", "md"], ["records", "t1.json"]):
+        code, _, err = _run(args, capsys)
+        assert code == 2 and "t1.json" in err and named in err and "internal error" not in err, (args, err)
+    (box / "t1.json").write_text(json.dumps(_penguin_table_one() + _penguin_matrix()), encoding="utf-8")  # unmutated, they render
+    code, out, err = _run(["render", "t1.json", "--to", "md"], capsys)
+    assert code == 0 and "Biscoe" in out and "Mann–Whitney" in out and "Body\\_mass\\_g" in out, err  # the matrix's row (Markdown escapes the underscores)
+
+
+def test_records_lists_a_variable_without_a_label_by_its_name(box, capsys):
+    (box / "nolabel.json").write_text('{"kind": "t_independent", "statistic": {"symbol": "t", "value": 2.1, "df": [38]}, "p": 0.042, '
+                                      '"variables": [{"name": "bill_length_mm", "role": "outcome"}]}', encoding="utf-8")
+    code, out, err = _run(["records", "nolabel.json"], capsys)
+    assert code == 0 and "bill_length_mm" in out, err
 
 
 def test_the_data_limit_is_counted_while_reading(box, capsys, monkeypatch):

@@ -26,7 +26,7 @@ def describe(record) -> str:  # type: ignore[no-untyped-def]
     if isinstance(record, CorrelationMatrix):
         return f"{record.method} correlation matrix of {len(record.names)} variables (a table; its pairs are records of their own)"
     what = KINDS.get(record.kind, record.kind).split(" (")[0]
-    names = [v.label for v in record.variables if v.role != "item"][:3]
+    names = [v.label or v.name for v in record.variables if v.role != "item"][:3]  # a label is optional
     term = record.details.get("term")
     about = f": {', '.join(names)}" if names else ""
     if term and record.kind == "anova_term":

@@ -23,7 +23,8 @@ def dump_records(records: Iterable[Record], *, indent: int | None = 2) -> str:
 
 def record_from_dict(data: Mapping[str, Any], *, where: str = "record") -> Record:
     """One record of any kind from its JSON object."""
-    cls = _SUMMARIES.get(data.get("kind")) if isinstance(data, Mapping) else None
+    kind = data.get("kind") if isinstance(data, Mapping) else None
+    cls = _SUMMARIES.get(kind) if isinstance(kind, str) else None  # any other kind (a list, an object) is Result's to refuse
     return cls.from_dict(data, where=where) if cls is not None else Result.from_dict(data, where=where)
 
 

@@ -12,7 +12,7 @@ number (a group without data) is NaN in memory and ``null`` in JSON.
 from __future__ import annotations
 
 import math
-from dataclasses import dataclass, field, fields
+from dataclasses import MISSING, dataclass, field, fields
 from typing import TYPE_CHECKING, Any, Literal, Mapping
 
 from ..errors import RecordError
@@ -121,6 +121,49 @@ class VariableSummary:
             kwargs[key] = value
         return _object(cls, where, kwargs)
 
+    def check(self, columns: int, where: str) -> None:
+        """RecordError unless the variable (read from JSON) is what its table row needs: text for its name and label, a
+        known level, ``n`` and ``missing`` and every other array with one entry per column (``counts`` one row per
+        column and one entry per category), the numbers its kind and ``show`` print, quartiles of ordered categories
+        that name a category, and numbers where the test's name, α and SMD go."""
+        import numpy as np
+
+        for name in ("name", "label"):
+            if not isinstance(getattr(self, name), str):
+                raise RecordError(f"{where}.{name}", f"{getattr(self, name)!r} is not text")
+        if not isinstance(self.level, LevelReport) or self.level.level not in ("nominal", "ordinal", "interval", "ratio"):
+            raise RecordError(f"{where}.level", "expected a level of nominal, ordinal, interval or ratio")
+        for name in _ARRAYS:
+            value = getattr(self, name)
+            want = (columns, len(self.categories)) if name == "counts" else (columns,)
+            if value is None:
+                if name in ("n", "missing"):
+                    raise RecordError(f"{where}.{name}", f"required: {columns} numbers, one per column")
+                continue
+            if value.shape != want:
+                raise RecordError(f"{where}.{name}", f"expected {' × '.join(map(str, want))} numbers (shape {value.shape} given)")
+        if (self.n < 0).any() or (self.missing < 0).any():
+            raise RecordError(f"{where}.n", "a count is negative")
+        needed = {"nominal": ("counts",), "ordinal": ("median", "q1", "q3") + (("counts",) if "counts" in self.show else ())}.get(self.kind, ())
+        needed += tuple(name for option, names in (("mean_sd", ("mean", "sd")), ("median_iqr", ("median", "q1", "q3")), ("range", ("minimum", "maximum")))
+                        if option in self.show and not (option == "mean_sd" and self.mean is None) for name in names)
+        for name in needed:
+            if getattr(self, name) is None:
+                raise RecordError(f"{where}.{name}", f"required for {'an' if self.kind == 'ordinal' else 'a'} {self.kind} variable showing "
+                                  f"{', '.join(self.show) or 'its default rows'}")
+        if self.positions:
+            for name in ("median", "q1", "q3"):
+                value = getattr(self, name)
+                shown = value[~np.isnan(value)] if value is not None else np.array([])
+                if ((shown != np.round(shown)) | (shown < 0) | (shown >= len(self.categories))).any():
+                    raise RecordError(f"{where}.{name}", f"a quartile of ordered categories is the position of one of its {len(self.categories)} categories")
+        if self.test_name is not None and not isinstance(self.test_name, str):
+            raise RecordError(f"{where}.test_name", f"{self.test_name!r} is not text")
+        for name in ("alpha", "smd"):
+            value = getattr(self, name)
+            if value is not None and (isinstance(value, bool) or not isinstance(value, (int, float)) or not math.isfinite(value)):
+                raise RecordError(f"{where}.{name}", f"{value!r} is not a finite number")
+
 
 @dataclass(frozen=True, eq=False)
 class Description:
@@ -197,8 +240,10 @@ class Description:
                 value = _provenance_in(f"{where}.provenance", value)
             kwargs[key] = value
         made = _object(cls, where, kwargs)
-        if len(made.column_n) != len(made.columns):
-            raise RecordError(f"{where}.column_n", f"{len(made.column_n)} entries for {len(made.columns)} columns")
+        if made.column_n is None or made.column_n.shape != (len(made.columns),):
+            raise RecordError(f"{where}.column_n", f"expected {len(made.columns)} numbers, one per column")
+        for i, v in enumerate(made.variables):
+            v.check(len(made.columns), f"{where}.variables[{i}]")
         return made
 
 
@@ -309,8 +354,17 @@ class CorrelationMatrix:
         made = _object(cls, where, kwargs)
         k = len(made.names)
         for name in ("r", "p", "low", "high", "n"):
-            if getattr(made, name).shape != (k, k):
+            if getattr(made, name) is None or getattr(made, name).shape != (k, k):
                 raise RecordError(f"{where}.{name}", f"expected {k} × {k} numbers for {k} variables")
+        if made.method not in ("pearson", "spearman"):
+            raise RecordError(f"{where}.method", f"{made.method!r} is not pearson or spearman")
+        if isinstance(made.level, bool) or not isinstance(made.level, (int, float)) or not 0 < made.level < 1:
+            raise RecordError(f"{where}.level", f"{made.level!r} is not a confidence level between 0 and 1")
+        for name, label in made.labels.items():
+            if not isinstance(label, str):
+                raise RecordError(f"{where}.labels.{name}", f"{label!r} is not text")
+        if made.rows is not None and (isinstance(made.rows, bool) or not isinstance(made.rows, int) or made.rows < 0):
+            raise RecordError(f"{where}.rows", f"{made.rows!r} is not a number of rows")
         for name in ("mean", "sd"):
             if getattr(made, name) is not None and getattr(made, name).shape != (k,):
                 raise RecordError(f"{where}.{name}", f"expected {k} numbers for {k} variables")
@@ -391,11 +445,12 @@ def _list(where: str, value: Any) -> list[Any]:
 
 
 def _object(cls: type, where: str, kwargs: Mapping[str, Any]) -> Any:
+    kwargs = _mapping(where, kwargs)  # (a level or a left-out column given as a list, say)
     known = {f.name for f in fields(cls) if f.init}
     unknown = sorted(set(kwargs) - known)
     if unknown:
         raise RecordError(f"{where}.{unknown[0]}", "not a field of this record")
-    try:
-        return cls(**kwargs)
-    except TypeError as exc:
-        raise RecordError(where, f"incomplete: {exc}") from None
+    absent = [f.name for f in fields(cls) if f.init and f.default is MISSING and f.default_factory is MISSING and f.name not in kwargs]
+    if absent:
+        raise RecordError(f"{where}.{absent[0]}", "required, and not given")
+    return cls(**kwargs)
