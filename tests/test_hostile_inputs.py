@@ -236,6 +236,17 @@ BAD_PLANS = [
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "logistic_regression"\noutcome = "sex"\npredictors = ["body_mass_g"]\nevent = "x"\n', "event 'x'"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "linear_regression"\noutcome = "body_mass_g"\npredictors = ["sex"]\nlevels = { sex = "cardinal" }\n', "'cardinal' is not one of"),
     ('[data]\npath = "d.csv"\nidentifiers = "x"\n', "identifiers must be a list"),
+    # a scale's keys of the wrong kind (a label given as true had been an internal error; found by mutating the demo's plan)
+    ('[data]\npath = "d.csv"\n[[scales]]\nname = "size"\nitems = ["bill_length_mm", "bill_depth_mm"]\nlabel = true\n', "scales[0].label): label must be text"),
+    ('[data]\npath = "d.csv"\n[[scales]]\nname = "size"\nitems = ["bill_length_mm", 3]\n', "each of items must be a column's name"),
+    ('[data]\npath = "d.csv"\n[[scales]]\nname = "size"\nitems = ["bill_length_mm", "bill_depth_mm"]\nminimum = "1"\n', "minimum must be a number, not '1'"),
+    ('[data]\npath = "d.csv"\n[[scales]]\nname = "size"\nitems = ["bill_length_mm", "bill_depth_mm"]\nalpha = 1\n', "alpha must be true or false"),
+    ('[data]\npath = "d.csv"\n[[scales]]\nname = 5\nitems = ["bill_length_mm", "bill_depth_mm"]\n', "name must be text"),
+    ('level = "95%"\n[data]\npath = "d.csv"\n', "level must be a number, not '95%'"),  # "a number or a number" before
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\nlabels = "mass"\n',
+     "analyses[0].labels): labels must be a table"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\nlabels = { sex = 1 }\n',
+     "labels must be text in quotes, not 1"),
 ]
 
 

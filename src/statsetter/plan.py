@@ -327,7 +327,7 @@ def _check_shapes(plan: Plan, raw: dict[str, Any]) -> None:
 
     def need(key: str, value: Any, kinds: tuple[type, ...]) -> None:
         if not isinstance(value, kinds) or (isinstance(value, bool) and bool not in kinds):
-            words = " or ".join(_TYPE_WORDS.get(k, "a number") for k in kinds)
+            words = " or ".join(dict.fromkeys(_TYPE_WORDS.get(k, "a number") for k in kinds))  # (int and float: "a number" once)
             raise plan.fail(key, f"{key.rsplit('.', 1)[-1]} must be {words}, not {value!r}"[:300])
 
     for key, kinds in (("title", (str,)), ("style", (str,)), ("level", (int, float)), ("alpha", (int, float)),
@@ -353,10 +353,24 @@ def _check_shapes(plan: Plan, raw: dict[str, Any]) -> None:
 
         if level not in LEVELS:
             raise plan.fail("data.levels", f"{name}: level {level!r} is not one of {', '.join(LEVELS)}")
+    for i, scale in enumerate(raw.get("scales", [])):
+        for key, kinds in (("name", (str,)), ("label", (str,)), ("scoring", (str,)), ("items", (list,)), ("reverse", (list,)),
+                           ("minimum", (int, float)), ("maximum", (int, float)), ("min_share", (int, float)), ("alpha", (bool,))):
+            if key in scale:
+                need(f"scales[{i}].{key}", scale[key], kinds)
+        for key in ("items", "reverse"):
+            for item in scale.get(key, []):
+                if not isinstance(item, str):
+                    raise plan.fail(f"scales[{i}].{key}", f"each of {key} must be a column's name in quotes, not {item!r}"[:300])
     for i, entry in enumerate(raw.get("analyses", [])):
         for key in ("id", "kind"):
             if key in entry:
                 need(f"analyses[{i}].{key}", entry[key], (str,))
+        for key in ("labels", "levels"):  # merged with the data's own before the analysis sees them
+            if key in entry:
+                need(f"analyses[{i}].{key}", entry[key], (dict,))
+                for value in entry[key].values():
+                    need(f"analyses[{i}].{key}", value, (str,))
         if isinstance(entry.get("levels"), dict):
             from .levels import LEVELS
 
