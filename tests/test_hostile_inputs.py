@@ -247,6 +247,19 @@ BAD_PLANS = [
      "analyses[0].labels): labels must be a table"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\nlabels = { sex = 1 }\n',
      "labels must be text in quotes, not 1"),
+    # every analysis key against its parameter's annotation (a list given for mu, one factor for a two-way ANOVA: internal errors before)
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_one_sample"\noutcome = "body_mass_g"\nmu = ["sex", "species"]\n',
+     "analyses[0].mu): mu must be a number, not ['sex', 'species']"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "factorial_anova"\noutcome = "body_mass_g"\nfactors = ["sex"]\n',
+     "factors must be a list of 2, not ['sex']"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "linear_regression"\noutcome = "body_mass_g"\npredictors = "bill_length_mm"\n',
+     "predictors must be a list [...], not 'bill_length_mm'"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "anova_oneway"\noutcome = "body_mass_g"\ngroup = "species"\nvariant = "xyz"\n',
+     "variant must be one of 'classic', 'welch', not 'xyz'"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "posthoc"\noutcome = "body_mass_g"\ngroup = "species"\nadjust = "holmes"\n',
+     "adjust must be one of 'tukey', 'games-howell', 'holm', 'bonferroni', not 'holmes'"),  # an alias of the analysis's module
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\nlevel = "95"\n',
+     "level must be a number, not '95'"),
 ]
 
 
@@ -330,6 +343,15 @@ def test_values_too_large_to_square_are_refused_by_name(box, capsys, command):
     code, out, err = _run(command, capsys)
     assert code == 2 and "body_mass_g: 1e+150 in row 8 is beyond ±1e50" in err and "Traceback" not in err
     assert not (box / "out").exists()
+
+
+@pytest.mark.parametrize("factors", [["sex"], "sex", ["sex", "species", "island"]])
+def test_a_two_way_anova_through_the_api_names_a_wrong_number_of_factors(factors):
+    from statsetter.analyses import factorial_anova
+    from statsetter.errors import InputError
+
+    with pytest.raises(InputError, match="a two-way ANOVA takes two factors"):
+        factorial_anova(pg.read_dataset("penguins"), "body_mass_g", factors)
 
 
 def test_degenerate_data_in_the_api_are_refused_by_name():

@@ -158,6 +158,71 @@ def _renamed(plan: Plan, where: str, entry: dict[str, Any], function: str) -> No
             entry[new] = renamed_value(function, old, entry.pop(old))
 
 
+def _wrong_kinds(plan: Plan, where: str, entry: dict[str, Any], kind: str) -> None:
+    """Each key of an analysis holds the kind of TOML value its parameter's annotation asks for (text, a number, a
+    list of column names, a table of labels, one of a few words), or the line is named: the analyses' own checks
+    are of the data, not of the plan's types (a list given for a number had been an internal error)."""
+    import sys
+
+    function = _function(kind)
+    module = sys.modules[function.__module__]
+    for name, parameter in inspect.signature(function).parameters.items():
+        if name in entry and isinstance(parameter.annotation, str):
+            wanted = _wanted(parameter.annotation, entry[name], module)
+            if wanted is not None:
+                raise plan.fail(f"{where}.{name}", f"{name} must be {wanted}, not {entry[name]!r}"[:300])
+
+
+def _alternatives(annotation: str, separator: str) -> list[str]:
+    """The parts of ``annotation`` split at ``separator`` outside brackets."""
+    parts, depth, start = [], 0, 0
+    for i, ch in enumerate(annotation):
+        depth += ch == "["
+        depth -= ch == "]"
+        if depth == 0 and annotation.startswith(separator, i):
+            parts.append(annotation[start:i].strip())
+            start = i + len(separator)
+    return parts + [annotation[start:].strip()]
+
+
+def _wanted(annotation: str, value: Any, module: Any) -> str | None:
+    """None when ``value`` can be what ``annotation`` (a parameter's, as written) asks for; else what it asks, in words."""
+    import ast
+    import typing
+
+    words = []
+    for part in _alternatives(annotation, "|"):
+        head, _, inner = part.partition("[")
+        inner = inner[:-1]
+        if part == "None":
+            continue
+        if part == "object":
+            return None
+        if part in ("str", "float", "int", "bool"):
+            number = isinstance(value, (int, float)) and not isinstance(value, bool)
+            if {"str": isinstance(value, str), "float": number, "int": number and isinstance(value, int), "bool": isinstance(value, bool)}[part]:
+                return None
+            words.append({"str": "text in quotes", "float": "a number", "int": "a whole number", "bool": "true or false"}[part])
+        elif head in ("Sequence", "tuple"):
+            items = _alternatives(inner, ",") if head == "tuple" else None
+            if isinstance(value, list) and (items is None or len(items) == len(value)) and all(
+                    _wanted(items[i] if items else inner, v, module) is None for i, v in enumerate(value)):
+                return None
+            words.append(f"a list of {len(items)}" if items else "a list [...]")
+        elif head == "Mapping":
+            if isinstance(value, dict) and all(_wanted(_alternatives(inner, ",")[1], v, module) is None for v in value.values()):
+                return None
+            words.append("a table (name = value)")
+        else:  # Literal[...] written out, or a Literal alias of the analysis's module; another name is the analysis's to check
+            allowed = ast.literal_eval(f"({inner},)") if head == "Literal" else typing.get_args(getattr(module, part, None))
+            if head != "Literal" and typing.get_origin(getattr(module, part, None)) is not typing.Literal:
+                return None
+            if value in allowed and type(value) in {type(a) for a in allowed}:
+                return None
+            words.append("one of " + ", ".join(repr(a) for a in allowed))
+    return " or ".join(dict.fromkeys(words)) or None
+
+
 def _unknown(plan: Plan, where: str, keys: set[str], allowed: set[str]) -> None:
     for key in sorted(keys - allowed):
         close = difflib.get_close_matches(key, sorted(allowed), n=2, cutoff=0.6)
@@ -220,6 +285,7 @@ def load_plan(path: "str | Path") -> Plan:
             raise plan.fail(f"{where}.kind", f"unknown kind {kind!r}" + (f"; did you mean {' or '.join(close)}?" if close else f"; kinds: {', '.join(ANALYSIS_KINDS)}"))
         _renamed(plan, where, analysis, kind)
         _unknown(plan, where, set(analysis), {"id", "kind", "place"} | set(_parameters(kind)))
+        _wrong_kinds(plan, where, analysis, kind)
         if analysis.get("place", "text") not in PLACES:
             raise plan.fail(f"{where}.place", f"{analysis['place']!r} is not one of {', '.join(PLACES)} (where the result goes: its sentence, a table, or both)")
         plan.analyses.append(analysis)

@@ -129,6 +129,8 @@ def factorial_anova(
     error's and the corrected total sums of squares go into ``details``."""
     if ss_type not in (2, 3):
         raise InputError(f"ss_type: {ss_type!r} is not 2 or 3")
+    if isinstance(factors, str) or len(factors) != 2:
+        raise InputError(f"factors: {list(factors) if not isinstance(factors, str) else factors!r}: a two-way ANOVA takes two factors")
     a, b = factors
     data, missing = c.listwise(df, [outcome, a, b])
     c.numeric(data, outcome)
