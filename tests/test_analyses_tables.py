@@ -8,6 +8,7 @@ definitions of V's noncentral chi-square interval (Smithson, 2003).
 
 import warnings
 
+import pandas as pd
 import pingouin as pg
 import pytest
 from scipy import stats
@@ -221,3 +222,31 @@ def test_conditional_odds_ratio_equals_scipy():
     assert compared == 3 * 256 + 6 * 93
     with pytest.raises(InputError, match="negative"):
         conditional_odds_ratio([[1, -2], [3, 4]], 0.95)
+
+
+def test_an_empty_cell_gives_fisher_without_an_infinite_odds_ratio():
+    """A 2 × 2 table with an empty cell (no women with atypical angina among the Cleveland records' first two chest-pain
+    types, the female cases of type 1 left out: 39, 0 / 104, 32): the conditional MLE of the odds ratio is infinite, as
+    scipy's odds_ratio says; the chi-square and Fisher records are made (an internal error before: an infinite
+    estimate), Fisher's p equals scipy's fisher_exact, and the note gives the CI's lower limit (scipy's) and says that
+    neither the odds ratio nor its CI is reported."""
+    import math
+
+    from scipy.stats.contingency import odds_ratio
+
+    from statsetter import render
+
+    heart = pg.read_dataset("chi2_independence")
+    two = heart[heart.cp.isin([0, 1]) & ~((heart.sex == 0) & (heart.cp == 1))]
+    records = chi_square(two, "sex", "cp")
+    fisher = next(r for r in records if r.kind == "fisher_exact")
+    table = [[39, 0], [104, 32]]
+    assert pd.crosstab(two.sex, two.cp).to_numpy().tolist() == table
+    assert fisher.estimate is None
+    assert fisher.p == pytest.approx(stats.fisher_exact(table).pvalue, rel=1e-12)
+    reference = odds_ratio(table, kind="conditional")
+    assert math.isinf(reference.statistic)
+    low = reference.confidence_interval(0.95).low
+    method = next(n.text for n in fisher.notes if n.kind == "method")
+    assert "odds ratio is infinite" in method and f"{low:.4g}" in method and "neither is reported" in method
+    assert render(fisher, "sentence", "apa7").plain() == "Fisher's exact test of sex and cp (N = 175) gave p < .001."

@@ -354,6 +354,22 @@ def test_a_two_way_anova_through_the_api_names_a_wrong_number_of_factors(factors
         factorial_anova(pg.read_dataset("penguins"), "body_mass_g", factors)
 
 
+def test_messages_about_coded_data_read_as_sentences():
+    """Found by mutating coded SPSS files of the Cleveland heart records: a constant predictor's value had been shown
+    as numpy's repr ("np.float64(63.0)"), and a variable with too few values in a correlation matrix as a pair of
+    itself ("age, age: 2 complete pairs")."""
+    import numpy as np
+
+    from statsetter.analyses import correlation_matrix, linear_regression
+    from statsetter.errors import InputError
+
+    heart = pg.read_dataset("chi2_independence")
+    with pytest.raises(InputError, match=r"^age: constant predictor \(every value is 63\); it cannot be estimated$"):
+        linear_regression(heart.assign(age=np.float64(63.0)), "thalach", ["age", "sex"])
+    with pytest.raises(InputError, match=r"^age: 2 value\(s\); a correlation needs at least 4$"):
+        correlation_matrix(heart.assign(age=np.where(heart.index < 2, 63.0, np.nan)), ["age", "thalach", "chol"])
+
+
 def test_degenerate_data_in_the_api_are_refused_by_name():
     """Through the API too: a huge value, a mediator with one value, and a bootstrap on too few rows each name what
     is wrong (before: an overflow, and numpy's "Singular matrix" as an internal error)."""

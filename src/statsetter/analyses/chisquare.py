@@ -134,12 +134,14 @@ def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | N
         raise InputError(f"alternative: {alternative!r} is not two-sided, less or greater")
     p = stats.fisher_exact(counts, alternative=alternative).pvalue
     value, low, high = conditional_odds_ratio(counts, level, alternative)  # one-sided tests get the one-sided interval
-    estimate = Estimate(
-        "OR",
-        value,
-        ci=Interval(level, low, high) if math.isfinite(high) else None,
-        ratio=True,
-    )
+    if math.isinf(value):  # an empty cell where the odds ratio goes to infinity: no number a record (or a reader) can hold
+        estimate, said = None, (f" The odds ratio is infinite (a cell of the table is empty; the CI's lower limit is {low:.4g}, "
+                                "its upper limit infinite): neither is reported.")
+    elif math.isnan(value):  # an empty row or column: every odds ratio fits
+        estimate, said = None, " The odds ratio is undefined (a row or column of the table is empty): it is not reported."
+    else:
+        estimate = Estimate("OR", value, ci=Interval(level, low, high) if math.isfinite(high) else None, ratio=True)
+        said = "" if math.isfinite(high) else f" The CI has no finite upper limit (lower limit {low:.4g}); it is left out."
     return Result(
         kind="fisher_exact",
         p=float(p),
@@ -148,8 +150,7 @@ def fisher_exact_table(counts, variables, level: float = 0.95, missing: Note | N
         estimate=estimate,
         variables=variables,
         notes=c.notes(
-            Note("method", "Conditional maximum-likelihood odds ratio with its exact CI."
-                 + ("" if math.isfinite(high) else f" The CI has no finite upper limit (lower limit {low:.4g}); it is left out.")),
+            Note("method", "Conditional maximum-likelihood odds ratio with its exact CI." + said),
             missing,
         ),
         provenance=c.provenance("statsetter.analyses.fisher_exact"),

@@ -95,6 +95,8 @@ def correlation_matrix(
     small = N < 4
     if small.any():
         i, j = np.argwhere(small)[0]
+        if i == j:  # a variable's own pairs are its values
+            raise InputError(f"{columns[i]}: {int(N[i, i])} value(s); a correlation needs at least 4")
         raise InputError(f"{columns[i]}, {columns[j]}: {int(N[i, j])} complete pairs; at least 4 are needed")
     constant = np.isnan(r)
     if constant.any():
