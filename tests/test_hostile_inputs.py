@@ -294,6 +294,8 @@ BAD_DATA = [
     ("y,w\n1,-1\n2,1\n", ["describe", "x.csv", "--weights", "w"], 2, "w: negative"),
     ("y,g\n1,\x01bad\n2,ok\n", ["describe", "x.csv", "--group", "g", "--out", "t.docx"], 0, "control characters"),
     ("y,g\n1,<script>x</script>\n2,ok\n", ["describe", "x.csv", "--group", "g", "--out", "t.md"], 0, ""),
+    ("y,g\n1,a\n2,b\n", ["describe", "x.csv", "--compare"], 2, "--compare compares groups; name the grouping variable with --group"),
+    ("y,g\n1,a\n2,b\n", ["describe", "x.csv", "--smd"], 2, "--smd compares groups; name the grouping variable with --group"),
 ]
 
 

@@ -73,6 +73,8 @@ def run(ns: argparse.Namespace) -> int:
         fmt = TABLE_FORMATS.get(Path(ns.out).suffix.lower(), "")
         if not fmt:
             raise InputError(f"--out: {ns.out}: unknown extension; use one of {', '.join(TABLE_FORMATS)}")
+    if (ns.compare or ns.smd) and not ns.group:  # said before the data are read, in the command's own words
+        raise InputError(f"{'--compare' if ns.compare else '--smd'} compares groups; name the grouping variable with --group")
     style = load_style(ns.style)
     data = read_data(ns.data, sheet=ns.sheet, missing=_codes(ns.missing), encoding=ns.encoding,
                      sep="\t" if ns.sep == "tab" else ns.sep, decimal=ns.decimal)
