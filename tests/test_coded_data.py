@@ -368,3 +368,28 @@ def test_table_labels_through_the_api(heart):
     assert again.variable("predictor").table_label == "Chest pain type = atypical angina"
     one_way = anova_oneway(frame, "thalach", "cp", labels=prose, table_labels=tables).main
     assert one_way.variable("group").heading == "Chest pain type"
+
+
+def test_text_values_with_spaces_around_them_are_one_category(tmp_path):
+    """Data entered by hand often carry stray spaces (" male", "male "): the Palmer penguins' sex, padded in a third of
+    the rows and blank (spaces only) in two, is read as the same two categories with the spaces trimmed, the blank ones
+    missing, and a note saying so (before: "male", " male" and "male " were three categories of a Table 1 and three
+    groups to a t test). Reference: pandas' counts of the unpadded column."""
+    from statsetter.analyses import describe, t_independent
+
+    penguins = pg.read_dataset("penguins")  # 11 sexes missing: left missing, and not counted as trimmed
+    padded = penguins.assign(sex=[v if v != v else f" {v}" if i % 3 == 0 else f"{v}  " if i % 3 == 1 else v for i, v in enumerate(penguins.sex)])
+    padded.loc[[5, 9], "sex"] = "   "
+    padded.to_csv(tmp_path / "padded.csv", index=False)
+    data = read_data(tmp_path / "padded.csv")
+    expected = penguins.sex.drop(index=[5, 9]).value_counts()
+    assert data.frame.sex.value_counts().to_dict() == expected.to_dict()
+    assert data.frame.sex.isna().sum() == 2 + 11
+    note = next(n for n in data.notes if n.startswith("sex:"))
+    spaced = sum(1 for v in padded.sex if v == v and v != v.strip() and v.strip())
+    assert spaced == 219 and f"{spaced} text value(s) with spaces around them trimmed (first {padded.sex[0]!r} in row 1)" in note
+    assert "2 value(s) of spaces only treated as missing (first in row 6)" in note
+    table = describe(data.frame, ["sex"]).main
+    assert list(table.variables[0].categories) == ["female", "male"]
+    test = t_independent(data.frame, "body_mass_g", "sex").main
+    assert test.n == penguins.dropna(subset=["sex", "body_mass_g"]).shape[0] - 2

@@ -110,9 +110,39 @@ def read_data(
         raise InputError(f"{p}: no rows of data (only a header, or nothing)")
     if data.frame.columns.duplicated().any():
         raise InputError(f"{p}: column {data.frame.columns[data.frame.columns.duplicated()][0]!r} appears twice")
+    data = _trimmed(data)
     if missing:
         data = replace(data, frame=_apply_missing(data.frame, missing, p))
     return _finite(data)
+
+
+def _trimmed(data: Dataset) -> Dataset:
+    """Text values with white space before or after them are the same values trimmed (" male" and "male " had been
+    three categories with "male"), and a value of white space only is missing; a note per column says how many."""
+    import pandas as pd
+
+    changed, notes = {}, list(data.notes)
+    for name in data.frame.columns:
+        s = data.frame[name]
+        if not (pd.api.types.is_string_dtype(s.dtype) or s.dtype == object) or isinstance(s.dtype, pd.CategoricalDtype):
+            continue
+        text = s.map(lambda v: v if isinstance(v, str) else None) if s.dtype == object else s  # (an object column may mix in numbers)
+        stripped = text.str.strip()
+        spaced = ((stripped != text) & text.notna()).fillna(False).to_numpy(dtype=bool)  # (a missing value is not unequal to itself here)
+        if not spaced.any():
+            continue
+        blank = (stripped == "").fillna(False).to_numpy(dtype=bool)
+        changed[name] = s.mask(spaced, stripped.mask(blank))
+        said = []
+        trimmed = spaced & ~blank
+        if trimmed.any():
+            said.append(f"{int(trimmed.sum())} text value(s) with spaces around them trimmed (first {text[trimmed].iloc[0]!r} in row {int(trimmed.argmax()) + 1})")
+        if blank.any():
+            said.append(f"{int(blank.sum())} value(s) of spaces only treated as missing (first in row {int(blank.argmax()) + 1})")
+        notes.append(f"{name}: " + "; ".join(said))
+    if not changed:
+        return data
+    return replace(data, frame=data.frame.assign(**changed), notes=tuple(notes))
 
 
 _HUGE_POWER = 50
