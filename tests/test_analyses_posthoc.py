@@ -384,3 +384,27 @@ def test_studentized_range_on_many_df_keeps_its_digits(df):
 
     qs = np.array([0.5, 2, 3, 4, 6, 8])
     assert studentized_range_sf(qs, 2, df) == pytest.approx(2 * stats.t.sf(qs / math.sqrt(2), df), rel=1e-12, abs=0)
+
+
+def test_a_two_way_design_with_empty_cells_is_refused_by_its_cells(penguins):
+    """Chinstraps were measured on Dream only and Gentoos on Biscoe only (Gorman et al.'s penguins; pandas' crosstab
+    below): species × island has four empty cells, where the interaction's terms cannot be estimated. statsmodels fits
+    such a design with a warning and prints sums of squares for it — on five penguins (sex × species, two cells empty)
+    it gave the interaction F(2, 1) = 0.06 and species an SS above the total SS; on species × island its Fs were nan.
+    Now the empty cells are named; a collinear covariate in an ANCOVA is refused by the design's rank."""
+    import pandas as pd
+
+    from statsetter.analyses import ancova
+
+    crosstab = pd.crosstab(penguins.species, penguins.island)
+    empty = sorted(f"{s} × {i}" for s in crosstab.index for i in crosstab.columns if crosstab.loc[s, i] == 0)
+    assert empty == ["Chinstrap × Biscoe", "Chinstrap × Torgersen", "Gentoo × Dream", "Gentoo × Torgersen"]
+    with pytest.raises(InputError) as caught:
+        factorial_anova(penguins, "body_mass_g", ["species", "island"])
+    assert all(cell in str(caught.value) for cell in empty) and "4 of 9 cells empty" in str(caught.value)
+    five = penguins.sample(5, random_state=3)
+    assert pd.crosstab(five.sex, five.species).to_numpy().min() == 0
+    with pytest.raises(InputError, match=r"sex × species: no case in female × Adelie, female × Chinstrap \(2 of 6 cells empty\)"):
+        factorial_anova(five, "body_mass_g", ["sex", "species"])
+    with pytest.raises(InputError, match="its 5 coefficients have rank 4: a term repeats others"):
+        ancova(penguins.assign(flipper_cm=penguins.flipper_length_mm / 10), "body_mass_g", "species", ["flipper_length_mm", "flipper_cm"])

@@ -138,6 +138,17 @@ def factorial_anova(
         if data[f].nunique() < 2:
             raise InputError(f"{f}: one level with data; a factor needs at least two")
     frame = data.rename(columns={outcome: "y_", a: "a_", b: "b_"})
+    y = frame["y_"].to_numpy(dtype=float)
+    in_a, in_b = frame["a_"].to_numpy(), frame["b_"].to_numpy()
+    levels_a, levels_b = categories(frame["a_"]), categories(frame["b_"])
+    cells = c.cell_groups((category_text(x), category_text(z), y[(in_a == x) & (in_b == z)]) for x in levels_a for z in levels_b)
+    if len(cells) < len(levels_a) * len(levels_b):  # the interaction's terms are not all estimable: statsmodels' F and SS are then wrong
+        seen = {cell.label for cell in cells}
+        empty = [f"{category_text(x)} × {category_text(z)}" for x in levels_a for z in levels_b if f"{category_text(x)} × {category_text(z)}" not in seen]
+        raise InputError(f"{a} × {b}: no case in {', '.join(empty[:4])}{' …' if len(empty) > 4 else ''} ({len(empty)} of {len(levels_a) * len(levels_b)} "
+                         "cells empty); a two-way ANOVA with the interaction needs a case in every cell — merge or leave out a level")
+    if len(y) <= len(cells):
+        raise InputError(f"{outcome}: {len(y)} rows for {len(cells)} cells of {a} × {b}; a two-way ANOVA needs more rows than cells (error df)")
     coding = ", Sum" if ss_type == 3 else ""
     fit, table = c.formula_anova(f"y_ ~ C(a_{coding}) * C(b_{coding})", frame, ss_type, outcome)
     ss_res = float(table.loc["Residual", "sum_sq"])
@@ -146,10 +157,6 @@ def factorial_anova(
     labels = labels or {}
     la, lb = labels.get(a, a), labels.get(b, b)
     names = {f"C(a_{coding})": (la, False), f"C(b_{coding})": (lb, False), f"C(a_{coding}):C(b_{coding})": (f"{la} × {lb}", True)}
-    y = frame["y_"].to_numpy(dtype=float)
-    in_a, in_b = frame["a_"].to_numpy(), frame["b_"].to_numpy()
-    cells = c.cell_groups((category_text(x), category_text(z), y[(in_a == x) & (in_b == z)])
-                          for x in categories(frame["a_"]) for z in categories(frame["b_"]))
     out = []
     for term, (label, interaction) in names.items():
         row = table.loc[term]
