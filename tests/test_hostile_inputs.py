@@ -370,6 +370,15 @@ def test_messages_about_coded_data_read_as_sentences():
         linear_regression(heart.assign(age=np.float64(63.0)), "thalach", ["age", "sex"])
     with pytest.raises(InputError, match=r"^age: 2 value\(s\); a correlation needs at least 4$"):
         correlation_matrix(heart.assign(age=np.where(heart.index < 2, 63.0, np.nan)), ["age", "thalach", "chol"])
+    # repeated measures in long form (pingouin's rm_anova data): a person's id as the data give it, not numpy's repr
+    from statsetter.analyses import mixed_anova, rm_anova
+
+    long = pg.read_dataset("rm_anova")
+    with pytest.raises(InputError, match=r"^Subject 1: 4 rows for Disgustingness 'High'; one row per person and measurement is needed$"):
+        rm_anova(long.iloc[list(range(len(long))) + [0, 1]], outcome="DesireToKill", subject="Subject", within="Disgustingness")
+    with pytest.raises(InputError, match=r"^Gender: person 1 is in more than one group"):
+        mixed_anova(long.assign(Gender=np.where(long.index % 2 == 0, "Female", "Male")), outcome="DesireToKill", subject="Subject",
+                    within="Disgustingness", between="Gender")
 
 
 def test_degenerate_data_in_the_api_are_refused_by_name():

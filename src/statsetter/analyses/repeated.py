@@ -247,7 +247,7 @@ def _wide(df: "pd.DataFrame", columns: Sequence[str] | None, outcome: str | None
     counts = df.groupby([subject, within], observed=True).size()
     if (counts > 1).any():
         who, what = counts[counts > 1].index[0]
-        raise InputError(f"{subject} {who!r}: {int(counts.max())} rows for {within} {what!r}; one row per person and measurement is needed")
+        raise InputError(f"{subject} {category_text(who)}: {int(counts.max())} rows for {within} {category_text(what)!r}; one row per person and measurement is needed")
     wide = df.pivot(index=subject, columns=within, values=outcome)
     wide.columns = [category_text(v) for v in wide.columns]
     return wide, list(wide.columns), outcome
@@ -373,7 +373,7 @@ def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[s
     counts = df.groupby([subject, a, b], observed=True).size()
     if (counts > 1).any():
         who, x, y = counts[counts > 1].index[0]
-        raise InputError(f"{subject} {who!r}: {int(counts.max())} rows for {a} {x!r} and {b} {y!r}; one row per person and cell is needed")
+        raise InputError(f"{subject} {category_text(who)}: {int(counts.max())} rows for {a} {category_text(x)!r} and {b} {category_text(y)!r}; one row per person and cell is needed")
     la, lb = categories(df[a]), categories(df[b])
     if len(la) < 2 or len(lb) < 2:
         raise InputError(f"{a if len(la) < 2 else b}: one level; a within-subjects factor needs at least two")
@@ -542,7 +542,7 @@ def mixed_anova(
     c.column(df, between)
     per_person = df.groupby(subject, observed=True)[between].nunique()
     if (per_person > 1).any():
-        raise InputError(f"{between}: person {per_person[per_person > 1].index[0]!r} is in more than one group; {between} must be between subjects")
+        raise InputError(f"{between}: person {category_text(per_person[per_person > 1].index[0])} is in more than one group; {between} must be between subjects")
     wide, columns, _ = _wide(df, None, outcome, subject, within, "mixed_anova")
     groups_of = df.groupby(subject, observed=True)[between].first()
     if between in columns:
