@@ -211,3 +211,20 @@ def test_revising_real_typings(tmp_path):
     clean = [e for e in after if e.location.split(",")[0] in changed_paragraphs and not {f.code for f in e.findings if f.severity == "style"}]
     assert len(clean) >= 0.8 * len([e for e in after if e.location.split(",")[0] in changed_paragraphs])
     assert _texts(_decided(tmp_path / "out.docx", tmp_path / "rejected.docx", accept=False)) == texts
+
+
+def test_an_f_revised_into_ama_keeps_its_two_df(tmp_path):
+    """AMA 11 writes an F's two df as one subscript, F₂,₉₇: the check that a revision keeps every number had read that
+    subscript as the one number 297 and left every F with df as typed ("would change a number"). Revised into AMA
+    and accepted, the F carries its df as subscripts, its p as the style prints it; a χ² with N is left as typed,
+    its comment saying that the style's form has no place for N."""
+    d = docx.Document()
+    d.add_paragraph("Fatigue differed across depots, F(2, 97) = 4.51, p = .013.")
+    d.add_paragraph("Shift and incidents were associated, χ2(2, N = 200) = 9.87, p = .007.")
+    d.save(str(tmp_path / "apa.docx"))
+    main(["audit", str(tmp_path / "apa.docx"), "--style", "ama11", "--revise", str(tmp_path / "out.docx")])
+    accepted = _texts(_decided(tmp_path / "out.docx", tmp_path / "accepted.docx", accept=True))
+    assert accepted[0].replace("\u00a0", " ").endswith("F2,97 = 4.51, P = .01.")  # (the subscript is a run's property, not its text)
+    assert accepted[1] == "Shift and incidents were associated, χ2(2, N = 200) = 9.87, p = .007."
+    kept = [e.kept for e in audit_file(tmp_path / "apa.docx", "ama11", restyle=True)]
+    assert kept == ["", "the style's form of this statistic has no place for every number typed here (N beside a χ², say)"]

@@ -114,6 +114,7 @@ def _value(token: str, mark: str) -> tuple[float, int]:
 
 
 _SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789", "⁰¹²³⁴⁵⁶⁷⁸⁹\u2009\u202f")
+_SUBSCRIPT_COMMA = re.compile(r"(?<=[₀-₉]),(?=\s?[₀-₉])")
 
 
 def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: bool, new_mark: str) -> str:
@@ -128,13 +129,17 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     old_p = rep.p.number if rep.p is not None else None
     if old_p is not None:
         blank[old_p.start - rep.start : old_p.end - rep.start] = " " * (old_p.end - old_p.start)
-    old_text = "".join(blank).translate(_SUBSCRIPT_DIGITS)
-    new_text = "".join(" " * len(t) if "sup" in styles else t for t, styles in new.segments()).translate(_SUBSCRIPT_DIGITS)
+    # (a subscript's comma parts two df, F₂,₉₇: apart, not one number 297, on both sides)
+    old_text = _SUBSCRIPT_COMMA.sub(" ", "".join(blank)).translate(_SUBSCRIPT_DIGITS)
+    new_text = "".join(" " * len(t) if "sup" in styles else t.replace(",", " ") if "sub" in styles else t
+                       for t, styles in new.segments()).translate(_SUBSCRIPT_DIGITS)
     new_p = _P_IN_TEXT.search(new_text)
     if new_p is not None:
         new_text = new_text[: new_p.start(2)] + " " * len(new_p.group(2)) + new_text[new_p.end(2) :]
     olds = sorted(_value(t, mark) for t in _DIGITS.findall(old_text))
     news = sorted(_value(t, new_mark) for t in _DIGITS.findall(new_text))
+    if len(olds) > len(news):
+        return "the style's form of this statistic has no place for every number typed here (N beside a χ², say)"
     if len(olds) != len(news) or any(abs(a - b) > 0.5 * 10.0**-da + 0.5 * 10.0**-db + 1e-12 for (a, da), (b, db) in zip(olds, news)):
         return "the restyled text would change a number"
     if any(a != 0 and b == 0 for (a, _), (b, _) in zip(olds, news)):
