@@ -44,6 +44,8 @@ CODES: dict[str, tuple[str, str]] = {
     "decimals": ("decimals other than the style's", "Numbers: decimals (APA 7 §6.36)"),
     "p-threshold": ("p given as a threshold instead of exactly", "Numbers: exact p (APA 7 §6.36)"),
     "p-zero": ("p = .000; a p value is never zero", "Numbers: never p = .000 (APA 7 §6.36)"),
+    "p-symbol": ("p in the other case than the style's (APA 7 writes p, AMA 11 writes P)",
+                 "Statistics in text: the p symbol (APA 7 §6.45, lowercase italic p; AMA 11 §19.5, capital P — memory)"),
     "spacing": ("no space around an operator", "Statistics in text: spaces around = < > (APA 7 §6.45)"),
     "hyphen-minus": ("a hyphen or dash where the style has a minus sign", "Numbers: true minus sign (practice; APA examples)"),
     "italics": ("a Latin symbol not in italics, or a Greek one in italics", "Statistics in text: italic symbols (APA 7 §6.45)"),
@@ -75,7 +77,7 @@ SEVERITY: dict[str, str] = {
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
     "one-sided": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning",
-    "leading-zero": "style", "missing-leading-zero": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
+    "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
 }
 
@@ -298,12 +300,23 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
             out.append(Finding("p-threshold", "Report the exact p (thresholds only below the style's smallest p).", text[p.start : p.end]))
         elif p.op == "=" and p.number is not None and p.number.value == 0:
             out.append(Finding("p-zero", f"A p value is never zero; write p < {num.p(0.0, alpha)[1]}.", text[p.start : p.end]))
+        letter = _p_letter(style)
+        if p.symbol_text in ("p", "P") and p.symbol_text != letter and letter in ("p", "P"):
+            out.append(Finding("p-symbol", f"Write the p value's symbol as {letter}, as the style does.", text[p.start : p.end]))
     tight = [text[s:e] for s, e in rep.operators if not (text[s:s + 1].isspace() and text[e - 1 : e].isspace())]
     if tight:
         out.append(Finding("spacing", "Put a space on each side of =, < and >.", ", ".join(t.strip() for t in tight)))
     if italic is not None:
         out += _italics(rep, text, italic)
     return out
+
+
+@functools.lru_cache(maxsize=16)  # (a Style is hashed by identity; an audit asks for every p)
+def _p_letter(style: Style) -> str:
+    """The letter the style writes for p ("p" or "P"), without its markup."""
+    from ..styled import StyledText
+
+    return StyledText.from_markup(style.symbol("p")).plain()
 
 
 def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> list[Finding]:

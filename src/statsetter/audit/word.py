@@ -37,7 +37,7 @@ _P_DOUBTS = {"p-does-not-follow", "verdict-changes", "one-sided", "impossible-p"
 # words the parser reads as notation, which the restyled text writes as symbols
 _NOTATION_WORDS = {"df", "ns", "chi", "square", "squared", "eta", "partial", "omega", "cohen", "hedges", "ci", "cis", "sd", "se",
                    "rho", "tau", "phi", "cramér", "cramer", "value", "confidence", "interval"}
-_WORD = re.compile(r"[^\W\d_]{2,}")
+_WORD = re.compile(r"[^\W\d_⁰¹²³⁴⁵⁶⁷⁸⁹₀₁₂₃₄₅₆₇₈₉]{2,}")  # (super- and subscript digits are not letters: F₂ and χ²₂ are no words)
 _DIGITS = re.compile(r"\d+(?:[.,]\d+)*|[.,]\d+")
 _P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
 
