@@ -228,3 +228,22 @@ def test_an_f_revised_into_ama_keeps_its_two_df(tmp_path):
     assert accepted[1] == "Shift and incidents were associated, χ2(2, N = 200) = 9.87, p = .007."
     kept = [e.kept for e in audit_file(tmp_path / "apa.docx", "ama11", restyle=True)]
     assert kept == ["", "the style's form of this statistic has no place for every number typed here (N beside a χ², say)"]
+
+
+def test_a_chapter_typed_in_ama_is_revised_into_apa(tmp_path):
+    """An editor standardising a co-author's AMA-typed chapter into APA 7: each P is a p-symbol finding, and the
+    revision, accepted, writes the df in parentheses and p in lower case (before, F₂, t₃₈ and χ²₂ had been read as
+    words the restyling would drop, and every such statistic was left as typed)."""
+    d = docx.Document()
+    typed = ["Fatigue differed across depots (F₂,₉₇ = 4.51, P = .01).", "Shift and incidents were associated (χ²₂ = 9.87, P = .007).",
+             "Night drivers slept less (t₃₈ = 2.14, P = .04)."]
+    for t in typed:
+        d.add_paragraph(t)
+    d.save(str(tmp_path / "ama.docx"))
+    found = audit_file(tmp_path / "ama.docx", "apa7")
+    assert [e.codes for e in found] == [["p-symbol"]] * 3
+    main(["audit", str(tmp_path / "ama.docx"), "--revise", str(tmp_path / "out.docx")])
+    accepted = [t.replace("\u00a0", " ") for t in _texts(_decided(tmp_path / "out.docx", tmp_path / "accepted.docx", accept=True))]
+    assert accepted == ["Fatigue differed across depots (F(2, 97) = 4.51, p = .01).", "Shift and incidents were associated (χ2(2) = 9.87, p = .007).",
+                        "Night drivers slept less (t(38) = 2.14, p = .04)."]  # (χ²'s 2 is a superscript run)
+    assert [e.codes for e in audit_file(tmp_path / "accepted.docx", "apa7")] == [[]] * 3
