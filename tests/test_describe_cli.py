@@ -166,3 +166,30 @@ def test_an_id_column_is_left_out_unless_named(tmp_path, capsys):
     out = capsys.readouterr()
     assert "left out: case: nominal (inferred from the values: integer, every value distinct and consecutive (1–344)" in out.err
     assert "case" not in out.out.split("Note.")[0].replace("cases", "")
+
+
+def test_labels_with_latex_specials_compile(tmp_path, capsys):
+    """The penguins' species renamed to labels full of LaTeX's special characters (% & # _ $ { } ~ ^ \\) and a
+    measurement named "50% & more": the Table 1 written as .tex compiles with pdflatex under statsetter's own preamble
+    and its text reads back (CI=true requires pdflatex, as the demo's LaTeX test does)."""
+    import os
+    import shutil
+    import subprocess
+
+    if shutil.which("pdflatex") is None or shutil.which("pdftotext") is None:
+        if os.environ.get("CI"):
+            pytest.fail("pdflatex and pdftotext are required in CI; .ci/run installs them")
+        pytest.skip("pdflatex not installed")
+    from statsetter.export.section import _latex_head
+    from statsetter.style import load_style
+
+    names = {"Adelie": "a_b & 50% #1", "Chinstrap": "$5 {x} ~y^2", "Gentoo": "back\\slash \\textbf{z}"}
+    penguins = pg.read_dataset("penguins").dropna().assign(species=lambda d: d.species.map(names))
+    penguins.rename(columns={"bill_length_mm": "50% & more"}).to_csv(tmp_path / "d.csv", index=False)
+    assert main(["describe", str(tmp_path / "d.csv"), "--group", "species", "--compare", "--vars", "50% & more,sex", "--out", str(tmp_path / "t.tex")]) == 0
+    body = (tmp_path / "t.tex").read_text(encoding="utf-8")
+    (tmp_path / "w.tex").write_text(_latex_head(load_style("apa7"), None) + body + "\n\\end{document}\n", encoding="utf-8")
+    done = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "w.tex"], cwd=tmp_path, capture_output=True, text=True, timeout=300)
+    assert done.returncode == 0, done.stdout[-2000:]
+    text = subprocess.run(["pdftotext", str(tmp_path / "w.pdf"), "-"], check=True, capture_output=True, text=True).stdout
+    assert "50% & more" in text and "#1" in text and "$5" in text and "back\\slash" in text, text
