@@ -246,7 +246,7 @@ BAD_PLANS = [
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\nlabels = "mass"\n',
      "analyses[0].labels): labels must be a table"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\nlabels = { sex = 1 }\n',
-     "labels must be text in quotes, not 1"),
+     "labels must be a table (name = text in quotes), not {'sex': 1}"),
     # every analysis key against its parameter's annotation (a list given for mu, one factor for a two-way ANOVA: internal errors before)
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_one_sample"\noutcome = "body_mass_g"\nmu = ["sex", "species"]\n',
      "analyses[0].mu): mu must be a number, not ['sex', 'species']"),

@@ -210,9 +210,10 @@ def _wanted(annotation: str, value: Any, module: Any) -> str | None:
                 return None
             words.append(f"a list of {len(items)}" if items else "a list [...]")
         elif head == "Mapping":
-            if isinstance(value, dict) and all(_wanted(_alternatives(inner, ",")[1], v, module) is None for v in value.values()):
+            kind = _alternatives(inner, ",")[1]
+            if isinstance(value, dict) and all(_wanted(kind, v, module) is None for v in value.values()):
                 return None
-            words.append("a table (name = value)")
+            words.append(f"a table (name = {'value' if kind == 'object' else _wanted(kind, None, module)})")
         else:  # Literal[...] written out, or a Literal alias of the analysis's module; another name is the analysis's to check
             allowed = ast.literal_eval(f"({inner},)") if head == "Literal" else typing.get_args(getattr(module, part, None))
             if head != "Literal" and typing.get_origin(getattr(module, part, None)) is not typing.Literal:
@@ -432,11 +433,6 @@ def _check_shapes(plan: Plan, raw: dict[str, Any]) -> None:
         for key in ("id", "kind"):
             if key in entry:
                 need(f"analyses[{i}].{key}", entry[key], (str,))
-        for key in ("labels", "levels"):  # merged with the data's own before the analysis sees them
-            if key in entry:
-                need(f"analyses[{i}].{key}", entry[key], (dict,))
-                for value in entry[key].values():
-                    need(f"analyses[{i}].{key}", value, (str,))
         if isinstance(entry.get("levels"), dict):
             from .levels import LEVELS
 

@@ -55,9 +55,9 @@ def _design(data: "pd.DataFrame", predictors: Sequence[str], reference: Mapping[
                 s = factor(s)
         if numeric:
             if s.nunique() < 2:
-                value = s.dropna().iloc[0] if s.notna().any() else "missing"
-                raise InputError(f"{p}: constant predictor (every value is {value:g}); it cannot be estimated" if isinstance(value, (int, float))
-                                 else f"{p}: constant predictor (every value is {value}); it cannot be estimated")
+                value = s.dropna().iloc[0]  # (the rows are complete: listwise)
+                shown = f"{value:g}" if isinstance(value, (int, float)) else value
+                raise InputError(f"{p}: constant predictor (every value is {shown}); it cannot be estimated")
             cols[p] = s.to_numpy(dtype=float)
             meta.append((p, p, None, None))
             continue
