@@ -16,7 +16,7 @@ from dataclasses import MISSING, dataclass, field, fields
 from typing import TYPE_CHECKING, Any, Literal, Mapping
 
 from ..errors import RecordError
-from .result import SCHEMA, SCHEMA_VERSION, EffectSize, Interval, Note, Provenance, Result, Statistic, Variable, _collector_paused, _from_plain, _to_plain, _unchecked_maker
+from .result import _LEVELS, SCHEMA, SCHEMA_VERSION, EffectSize, Interval, Note, Provenance, Result, Statistic, Variable, _collector_paused, _from_plain, _to_plain, _unchecked_maker
 
 if TYPE_CHECKING:
     import numpy as np
@@ -131,7 +131,7 @@ class VariableSummary:
         for name in ("name", "label"):
             if not isinstance(getattr(self, name), str):
                 raise RecordError(f"{where}.{name}", f"{getattr(self, name)!r} is not text")
-        if not isinstance(self.level, LevelReport) or self.level.level not in ("nominal", "ordinal", "interval", "ratio"):
+        if not isinstance(self.level, LevelReport) or self.level.level not in _LEVELS:
             raise RecordError(f"{where}.level", "expected a level of nominal, ordinal, interval or ratio")
         for name in _ARRAYS:
             value = getattr(self, name)
@@ -161,7 +161,7 @@ class VariableSummary:
             raise RecordError(f"{where}.test_name", f"{self.test_name!r} is not text")
         for name in ("alpha", "smd"):
             value = getattr(self, name)
-            if value is not None and (isinstance(value, bool) or not isinstance(value, (int, float)) or not math.isfinite(value)):
+            if value is not None and not _finite_number(value):
                 raise RecordError(f"{where}.{name}", f"{value!r} is not a finite number")
 
 
@@ -358,7 +358,7 @@ class CorrelationMatrix:
                 raise RecordError(f"{where}.{name}", f"expected {k} × {k} numbers for {k} variables")
         if made.method not in ("pearson", "spearman"):
             raise RecordError(f"{where}.method", f"{made.method!r} is not pearson or spearman")
-        if isinstance(made.level, bool) or not isinstance(made.level, (int, float)) or not 0 < made.level < 1:
+        if not _finite_number(made.level) or not 0 < made.level < 1:
             raise RecordError(f"{where}.level", f"{made.level!r} is not a confidence level between 0 and 1")
         for name, label in made.labels.items():
             if not isinstance(label, str):
@@ -442,6 +442,11 @@ def _list(where: str, value: Any) -> list[Any]:
     if not isinstance(value, list):
         raise RecordError(where, f"expected a list, got {type(value).__name__}")
     return value
+
+
+def _finite_number(value: Any) -> bool:
+    """Whether a value read from JSON is a finite number (true and false are not)."""
+    return not isinstance(value, bool) and isinstance(value, (int, float)) and math.isfinite(value)
 
 
 def _object(cls: type, where: str, kwargs: Mapping[str, Any]) -> Any:
