@@ -16,7 +16,7 @@ import pytest
 from docx.oxml.ns import qn
 
 from kind_examples import EXAMPLES
-from statsetter import render
+from statsetter import StyledText, render
 from statsetter.export.docx_writer import results_document, save_document
 from test_tables import model
 
@@ -312,3 +312,65 @@ def test_a_table_caption_never_stands_alone_at_a_page_foot(tmp_path):
         pages = subprocess.run(["pdftotext", str(path.with_suffix(".pdf")), "-"], check=True, capture_output=True, text=True).stdout.split("\f")
         holding = [k for k, page in enumerate(pages) if "Table 1" in page]
         assert len(holding) == 1 and first_stub in pages[holding[0]], (path.name, holding)
+
+
+def _pdf_pages(path):
+    """Each page of ``path`` converted by LibreOffice: (landscape?, text), from pdfinfo's page sizes and pdftotext."""
+    pdf_text(path)
+    pdf = path.with_suffix(".pdf")
+    info = subprocess.run(["pdfinfo", "-f", "1", "-l", "999", str(pdf)], check=True, capture_output=True, text=True).stdout
+    sizes = [(float(w), float(h)) for w, h in re.findall(r"Page\s+\d+ size:\s+([\d.]+) x ([\d.]+)", info)]
+    texts = subprocess.run(["pdftotext", str(pdf), "-"], check=True, capture_output=True, text=True).stdout.split("\f")
+    return [(w > h, text) for (w, h), text in zip(sizes, texts)]
+
+
+def _species_by_island():
+    """A Table 1 of pingouin's penguins by species × island: five groups, Total and p — wider than a portrait page."""
+    import pingouin as pg
+
+    from statsetter.analyses import describe
+
+    d = pg.read_dataset("penguins")
+    d["group"] = d.species + " " + d.island
+    labels = {"bill_length_mm": "Bill length measured from the tip to the base of the skull (mm)", "flipper_length_mm": "Flipper (mm)"}
+    return table(describe(d, ["bill_length_mm", "flipper_length_mm", "sex"], group="group", labels=labels, compare=True).main, "apa7")
+
+
+def test_a_table_too_wide_for_the_page_is_set_on_landscape_pages(tmp_path):
+    # issue: a Table 1 whose numbers alone need more than the portrait text width was shrunk to it, and LibreOffice
+    # broke numbers inside themselves ("188.8" / "0"). Now such a table goes on landscape pages of its own (a course
+    # guide to APA 7: a table's page may be turned "if doing so is helpful",
+    # https://www.nathanwhudson.com/courses/apa-style/tables-figures/), with a warning; the text before and after keeps
+    # its portrait pages and the page numbers run on. Checked as rendered: page sizes (pdfinfo) and text (pdftotext).
+    wide = _species_by_island()
+    narrow = table(EXAMPLES["t_independent"], "apa7")
+    with pytest.warns(UserWarning, match=r"Table 1 is set on landscape pages: its columns need \d+\.\d in, the page's text is 6\.5 in"):
+        document = results_document([StyledText("Text before the wide table. " * 30), wide, StyledText("Text after the wide table. " * 30), narrow],
+                                    "apa7", title="Results")
+    path = save_document(document, tmp_path / "mixed.docx")
+    pages = _pdf_pages(path)
+    turned = [k for k, (landscape, _) in enumerate(pages) if landscape]
+    assert turned and turned == list(range(turned[0], turned[-1] + 1))  # one run of landscape pages
+    assert "Table 1" in pages[turned[0]][1] and "Table 1" not in "".join(t for _, t in pages[:turned[0]])
+    assert "Text before" in pages[0][1] and not pages[0][0]
+    after = next(k for k, (_, text) in enumerate(pages) if "Text after" in text)
+    table2 = next(k for k, (_, text) in enumerate(pages) if "Table 2" in text)
+    assert after > turned[-1] and not pages[after][0] and not pages[table2][0]
+    assert [text.split()[0] for _, text in pages if text.strip()] == [str(k + 1) for k in range(len(pages))]  # APA's page number, top right
+    shown = " ".join(t for _, t in pages[turned[0]:turned[-1] + 1]).split()
+    numbers = {n for row in wide.rows for c in row.cells for n in re.findall(r"\d[\d,.]*\d|\d", c.plain())}
+    assert numbers and {n for n in numbers if not any(n in word for word in shown)} == set()  # no number broken inside itself
+
+
+def test_a_document_that_is_one_wide_table_is_one_landscape_page(tmp_path):
+    # issue: a wide Table 1 written alone (statsetter describe --out table.docx) must not leave an empty page after it
+    import warnings
+
+    from statsetter.export.docx_writer import add_table
+
+    document = docx.Document()
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        add_table(document, _species_by_island(), "apa7")
+    pages = _pdf_pages(save_document(document, tmp_path / "alone.docx"))
+    assert [landscape for landscape, _ in pages] == [True] and "Characteristics of the Sample" in pages[0][1]

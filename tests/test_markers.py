@@ -151,3 +151,37 @@ def test_zip_that_is_not_word_and_zip_bomb(tmp_path):
         f.writestr("word/document.xml", "x" * 5000)
     with pytest.raises(InputError, match="over the limit"):
         open_docx(big, max_unpacked=1000)
+
+
+def test_a_wide_table_placed_in_a_chapter_turns_only_its_own_pages(tmp_path):
+    # issue: a wide table filled into an author's chapter was shrunk to the portrait text and its numbers broke inside
+    # themselves. Now it goes on landscape pages of its own between the chapter's portrait pages; the chapter's first
+    # page keeps its different first-page header; a copy in a table cell (which cannot turn) is shrunk with a warning.
+    from test_docx import _pdf_pages, _species_by_island
+
+    d = docx.Document()
+    d.sections[0].different_first_page_header_footer = True
+    d.sections[0].first_page_header.paragraphs[0].text = "FIRST PAGE HEADER"
+    d.sections[0].header.paragraphs[0].text = "RUNNING HEAD"
+    d.add_paragraph("Opening text of the chapter. " * 40)
+    d.add_paragraph("[[table:wide]]")
+    d.add_paragraph("Closing text of the chapter. " * 40)
+    d.add_table(rows=1, cols=1).cell(0, 0).text = "[[table:wide]]"
+    d.add_paragraph("The last words.")
+    chapter = tmp_path / "chapter.docx"
+    d.save(str(chapter))
+    out = tmp_path / "filled.docx"
+    with pytest.warns(UserWarning) as caught:
+        fill_chapter(chapter, [], out, "apa7", tables={"wide": _species_by_island()})
+    said = [str(w.message) for w in caught]
+    assert any("is set on landscape pages" in m for m in said) and any("wrap inside a word" in m for m in said), said
+    pages = _pdf_pages(out)
+    kinds = [landscape for landscape, _ in pages]
+    first_turned = kinds.index(True)
+    assert "Opening text" in pages[0][1] and "FIRST PAGE HEADER" in pages[0][1] and not kinds[0]
+    assert "Characteristics of the Sample" in pages[first_turned][1] and "Opening text" not in pages[first_turned][1]
+    after = [k for k, (_, text) in enumerate(pages) if "Closing text" in text]
+    assert after and all(not kinds[k] and k > first_turned for k in after)
+    assert all("FIRST PAGE HEADER" not in text for _, text in pages[1:])  # only the chapter's first page has that header
+    assert all("RUNNING HEAD" in text for _, text in pages[1:])
+    assert kinds.count(True) == 1 and not kinds[-1]  # the copy in the table cell stays on the portrait pages

@@ -13,8 +13,9 @@ from pathlib import Path
 import functools
 import io
 import re
+import warnings
 from xml.sax.saxutils import escape as _escape
-from typing import TYPE_CHECKING, Iterable, NamedTuple, Sequence
+from typing import TYPE_CHECKING, Any, Iterable, NamedTuple, Sequence
 
 from ..styled import StyledText
 from ..rendering.tables import _DASHES, DIGITS_AS_ZERO, TableModel, _number_shape, _shape_kind, blank_or_dash, split_decimal, title_case
@@ -42,8 +43,6 @@ def xml_safe(text: str) -> str:
     warning names the text they were removed from."""
     if not _NOT_XML.search(text):
         return text
-    import warnings
-
     clean = _NOT_XML.sub("", text)
     warnings.warn(f"removed control characters that Word cannot store from {clean[:60]!r}", stacklevel=2)
     return clean
@@ -204,6 +203,26 @@ def _column_widths(table: TableModel, text_width: int, shapes: "list[_Column] | 
     heads wrap between words, never inside one), as wide as its widest
     content where the text width allows, and never wider in sum than the
     text width unless the longest words alone need more."""
+    return _fit(*_least_and_natural(table, shapes if shapes is not None else _body_shapes(table)), text_width)
+
+
+def _fit(low: list[int], want: list[int], text_width: int) -> list[int]:
+    """Column widths between each column's least (``low``) and natural (``want``) width, for ``text_width``."""
+    if sum(want) <= text_width:
+        return want
+    if sum(low) >= text_width:  # even the longest words do not fit: shrink all alike to the page
+        return [int(w * text_width / sum(low)) for w in low]
+    # the numbers first (a cell that wraps mid-value is hard to read), then the stub, whose labels wrap between words
+    spare = text_width - sum(low)
+    extra = [w - lo for w, lo in zip(want[1:], low[1:])]
+    if spare >= sum(extra):
+        return [min(want[0], low[0] + spare - sum(extra))] + want[1:]
+    total = sum(extra) or 1
+    return [low[0]] + [lo + int(spare * e / total) for lo, e in zip(low[1:], extra)]
+
+
+def _least_and_natural(table: TableModel, shapes: "list[_Column]") -> tuple[list[int], list[int]]:
+    """Per column (the stub first), the least width that breaks no word and the width of its longest text unwrapped."""
     ncols = len(table.columns) + 1
     longest = [0] * ncols  # the longest word
     natural = [0] * ncols  # the longest text, unwrapped
@@ -221,25 +240,14 @@ def _column_widths(table: TableModel, text_width: int, shapes: "list[_Column] | 
             whole = word if i == 0 and j > 0 else _chars(text)
             if whole > natural[j]:
                 natural[j] = whole
-    for j, (distinct, styled, *_) in enumerate(shapes if shapes is not None else _body_shapes(table), 1):  # the body: each shape measured once
+    for j, (distinct, styled, *_) in enumerate(shapes, 1):  # the body: each shape measured once
         for whole, word in [_measure_shape(shape, "")[:2] for shape in distinct] + [(_chars(c.plain()), _longest_word(c.plain())) for c in styled]:
             if word > longest[j]:
                 longest[j] = word
             if whole > natural[j]:
                 natural[j] = whole
     low = [_PAD + c + (_HANG if j == 0 else 0) for j, c in enumerate(longest)]
-    want = [max(lo, _PAD + c) for lo, c in zip(low, natural)]
-    if sum(want) <= text_width:
-        return want
-    if sum(low) >= text_width:  # even the longest words do not fit: shrink all alike to the page
-        return [int(w * text_width / sum(low)) for w in low]
-    # the numbers first (a cell that wraps mid-value is hard to read), then the stub, whose labels wrap between words
-    spare = text_width - sum(low)
-    extra = [w - lo for w, lo in zip(want[1:], low[1:])]
-    if spare >= sum(extra):
-        return [min(want[0], low[0] + spare - sum(extra))] + want[1:]
-    total = sum(extra) or 1
-    return [low[0]] + [lo + int(spare * e / total) for lo, e in zip(low[1:], extra)]
+    return low, [max(lo, _PAD + c) for lo, c in zip(low, natural)]
 
 
 def _cell_xml(text: StyledText, align: str, top: bool, bottom: bool, span: int = 1, decimal_at: int = 0, width: int = 0,
@@ -361,7 +369,7 @@ def _decimal_tabs(table: TableModel, widths: list[int], mark: str, shapes: "list
 
 
 def _table_xml(table: TableModel, number_align: str = "center", text_width: int = TEXT_WIDTH, *, mark: str = ".", line: int = 240,
-               declare: bool = True) -> bytes:
+               declare: bool = True, shapes: "list[_Column] | None" = None, widths: "list[int] | None" = None) -> bytes:
     """The whole w:tbl as one string, parsed once: fast for tables of thousands
     of rows, UTF-8 encoded row by row into one buffer (no second copy of
     the whole). ``declare`` puts the namespace declaration on the w:tbl (to
@@ -369,9 +377,10 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     Column widths are explicit and fixed (``_column_widths``), so
     that Word and LibreOffice lay the table out alike; with ``number_align``
     ``decimal`` columns of numbers align on the decimal ``mark``; cell
-    paragraphs are spaced ``line`` (240 = single)."""
-    shapes = _body_shapes(table)
-    widths = _column_widths(table, text_width, shapes)
+    paragraphs are spaced ``line`` (240 = single). ``shapes`` and ``widths``, when the caller has them, are not
+    found again."""
+    shapes = shapes if shapes is not None else _body_shapes(table)
+    widths = widths if widths is not None else _column_widths(table, text_width, shapes)
     head_rows = 2 if table.spanners else 1
     header = "<w:trPr><w:cantSplit/><w:tblHeader/></w:trPr>"
     parts = [
@@ -512,20 +521,47 @@ def caption_xml(name: str, number: int | None, title: StyledText, one_line: bool
     return out
 
 
-def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH, *, declare: bool = True) -> "list[str | bytes]":
+def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH, *, declare: bool = True,
+                before: Any = None) -> "list[str | bytes]":
     """A table as Word XML elements in order: the number (bold) and title
     (italic, title case) paragraphs (str), kept with the table; the w:tbl,
     whose cells take the table text style (``add_table_text_style`` puts it
     into the document that receives the table)
     (UTF-8 bytes; with ``declare`` False, without its namespace declaration,
     to be written into a part); one paragraph per note part (general,
-    specific, probability)."""
+    specific, probability).
+
+    ``before`` is the element of a document's body the parts will be put
+    before: the text width of its page replaces ``text_width``, and a table
+    whose columns cannot keep their words whole in that width goes on
+    landscape pages of its own (``pages.turned``), with a warning that says
+    so. A table too wide even then, or not in a document's body (a table
+    cell), is shrunk to the width with a warning that some of its cells
+    wrap inside a word."""
+    from . import pages
+
+    shapes = _body_shapes(table)
+    low, want = _least_and_natural(table, shapes)
+    least = sum(low)
+    section = pages.section_of(before) if before is not None else None
+    width = pages.text_width(section) if section is not None else text_width
+    wide = pages.text_width(section, landscape=True) if section is not None else width
+    name = f"Table {table.number}" if table.number is not None else "A table"
+    turn = least > width and wide > width
+    if turn:
+        warnings.warn(f"{name} is set on landscape pages: its columns need {least / 1440:.1f} in, the page's text is "
+                      f"{width / 1440:.1f} in wide", stacklevel=2)
+        width = wide
+    if least > width:
+        warnings.warn(f"{name} is wider than the {'landscape ' if turn else ''}page's text ({least / 1440:.1f} in against "
+                      f"{width / 1440:.1f} in): some of its cells wrap inside a word; fewer columns or shorter labels would read "
+                      "better", stacklevel=2)
     out: "list[str | bytes]" = list(caption_xml("Table", table.number, title_case(table.title) if table.title else StyledText(),
                                                 style.tables.get("caption") == "one_line"))
-    out.append(_table_xml(table, style.tables.get("number_align", "center"), text_width, mark=style.decimal_mark, line=table_line(style),
-                          declare=declare))
+    out.append(_table_xml(table, style.tables.get("number_align", "center"), width, mark=style.decimal_mark, line=table_line(style),
+                          declare=declare, shapes=shapes, widths=_fit(low, want, width)))
     out += [_paragraph_xml(part) for part in table.note_parts()]
-    return out
+    return pages.turned(out, section, opening=before.getprevious() is None) if turn else out
 
 
 def table_line(style: "Style") -> int:
@@ -552,7 +588,7 @@ def add_table(document: "Document", table: TableModel, style: "Style | str | Non
     resolved = load_style(style)
     add_table_text_style(document, table_line(resolved))
     anchor = document.add_paragraph()  # the parts go before it
-    for xml in table_parts(table, resolved, text_width_of(document), declare=False):
+    for xml in table_parts(table, resolved, declare=False, before=anchor._p):
         if isinstance(xml, bytes):
             _place_table(document, anchor, xml)
         else:
@@ -679,10 +715,14 @@ def _page_field(paragraph: "Paragraph") -> None:
 
 
 def save_document(document: "Document", path: "str | Path", *, inputs: Iterable["str | Path"] = ()) -> Path:
-    """Save through a temporary file; never over an input."""
+    """Save through a temporary file; never over an input. A table turned to landscape that ends the document takes
+    the last page with it (``pages.settle``)."""
     import io
 
     from ..files import write_atomic
+    from .pages import settle
+
+    settle(document.element.body)
 
     buffer = io.BytesIO()
     document.save(buffer)

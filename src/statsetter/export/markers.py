@@ -153,7 +153,7 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
     for m in reversed(matches):
         key, form = _marker(m)
         if form in ("table", "whole", "figure"):
-            parts = lookup(key, form)
+            parts = lookup(key, form, paragraph)
             if parts is None:
                 report.unknown.append((m.group(0), where))
                 continue
@@ -290,14 +290,18 @@ def fill_chapter(
             return lay_out(whole_records[0] if whole_records else found, resolved)
         return None
 
-    def lookup(key: str, form: str):  # type: ignore[no-untyped-def]
-        if (key, form) in cache:
-            return cache[(key, form)]
-        def placed(t: "TableModel") -> list:  # type: ignore[type-arg]
-            """A table's Word parts, its cells' paragraph style put into the chapter first."""
+    def lookup(key: str, form: str, at: Any = None):  # type: ignore[no-untyped-def]
+        """What a marker stands for; a table's Word parts for a marker in paragraph ``at`` (they go after it)."""
+        def placed(t: "TableModel | None") -> list | None:  # type: ignore[type-arg]
+            """A table's Word parts for its place (a page of the chapter's), its cells' paragraph style put into the chapter first."""
+            if t is None:
+                return None
             add_table_text_style(document, table_line(resolved))
-            return table_parts(t, resolved, width)
+            return table_parts(t, resolved, width, before=at.getnext() if at is not None else None)
 
+        if (key, form) in cache:
+            made = cache[(key, form)]
+            return placed(made) if form in ("whole", "table") else made
         made: Any = None
         if form == "ref":
             number = numbers.get(("whole", key)) or numbers.get(("table", key))
@@ -309,19 +313,18 @@ def fill_chapter(
             made = _figure_parts(document, f.with_number(numbers[("figure", key)]), resolved, width, figure_root) if f is not None else None
         elif form == "whole":
             t = whole(key)
-            made = placed(t.with_number(numbers[("whole", key)])) if t is not None else None
+            made = t.with_number(numbers[("whole", key)]) if t is not None else None
         elif key in by_id:
             r = by_id[key]
             if form == "table":
                 from ..rendering.record_tables import results_table
 
                 title = subject(r)
-                t = results_table([r], resolved, title=title[:1].upper() + title[1:]).with_number(numbers[("table", key)])
-                made = placed(t)
+                made = results_table([r], resolved, title=title[:1].upper() + title[1:]).with_number(numbers[("table", key)])
             else:
                 made = render(r, form, resolved)
-        cache[(key, form)] = made
-        return made
+        cache[(key, form)] = made  # a table is cached as its model: its parts depend on the page it goes on
+        return placed(made) if form in ("whole", "table") else made
 
     report = FillReport()
     used: set[str] = set()
