@@ -185,3 +185,19 @@ def test_a_wide_table_placed_in_a_chapter_turns_only_its_own_pages(tmp_path):
     assert all("FIRST PAGE HEADER" not in text for _, text in pages[1:])  # only the chapter's first page has that header
     assert all("RUNNING HEAD" in text for _, text in pages[1:])
     assert kinds.count(True) == 1 and not kinds[-1]  # the copy in the table cell stays on the portrait pages
+
+
+@pytest.mark.parametrize("width", ["abc", "", "1e9", "8.5in"])
+def test_a_page_size_that_is_not_a_number_of_twips_does_not_stop_a_fill(tmp_path, width):
+    # found by a fuzz of chapters with hostile section properties: python-docx's page_width raised ValueError on
+    # w:pgSz w="abc" and the fill ended in an internal error; a measure with a unit ("8.5in") is OOXML's own
+    from docx.oxml.ns import qn
+
+    d = docx.Document()
+    d.add_paragraph("[[score_diff|table]]")
+    d.sections[0]._sectPr.find(qn("w:pgSz")).set(qn("w:w"), width)
+    chapter = tmp_path / "chapter.docx"
+    d.save(str(chapter))
+    report = fill_chapter(chapter, RECORDS, tmp_path / "filled.docx")
+    assert [key for key, _ in report.filled] == ["score_diff"]
+    assert len(docx.Document(str(tmp_path / "filled.docx")).tables) == 1

@@ -570,12 +570,11 @@ def table_line(style: "Style") -> int:
 
 
 def text_width_of(document: "Document") -> int:
-    """The text width of the document's last section, in twips."""
-    section = document.sections[-1]
-    try:
-        return int((section.page_width - section.left_margin - section.right_margin) / 635)  # EMU per twip
-    except TypeError:  # a section without page size: python-docx's default page
-        return TEXT_WIDTH
+    """The text width of the document's last section, in twips (``pages.text_width``: a page size or margin that is
+    missing or not a measure counts as python-docx's default page)."""
+    from .pages import text_width
+
+    return text_width(document.sections[-1]._sectPr)
 
 
 def add_table(document: "Document", table: TableModel, style: "Style | str | None" = None) -> None:

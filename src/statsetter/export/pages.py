@@ -41,13 +41,24 @@ def text_width(sect: Any, landscape: bool = False) -> int:
     """The text width in twips of the page ``sect`` describes, or of the same page turned to ``landscape``."""
     size = sect.find(f"{_W}pgSz") if sect is not None else None
     margins = sect.find(f"{_W}pgMar") if sect is not None else None
-    w, h = _LETTER
-    if size is not None:
-        w, h = int(size.get(f"{_W}w", w)), int(size.get(f"{_W}h", h))
-    left, right = _SIDES
-    if margins is not None:
-        left, right = int(margins.get(f"{_W}left", left)), int(margins.get(f"{_W}right", right))
-    return (max(w, h) if landscape else w) - left - right
+    w, h = (_twips(size, "w", _LETTER[0]), _twips(size, "h", _LETTER[1])) if size is not None else _LETTER
+    left, right = (_twips(margins, "left", _SIDES[0]), _twips(margins, "right", _SIDES[1])) if margins is not None else _SIDES
+    return max((max(w, h) if landscape else w) - left - right, 1440)
+
+
+_UNITS = {"in": 1440.0, "pt": 20.0, "pc": 240.0, "pi": 240.0, "mm": 1440 / 25.4, "cm": 1440 / 2.54}
+
+
+def _twips(element: Any, name: str, default: int) -> int:
+    """A measure of the page in twips: a number, or a number with a unit ("8.5in", OOXML's universal measure);
+    the default when it is neither (a file written by hand or by a faulty program)."""
+    text = (element.get(f"{_W}{name}") or "").strip()
+    unit = _UNITS.get(text[-2:], 1.0) if text[-2:].isalpha() else 1.0
+    try:
+        value = float(text[:-2] if text[-2:].isalpha() else text) * unit
+    except ValueError:
+        return default
+    return int(value) if 0 <= value < 1e6 else default
 
 
 def _ending(sect: Any) -> str:
@@ -84,7 +95,7 @@ def turned(parts: "list[str | bytes]", sect: Any, opening: bool = False) -> "lis
         size = etree.Element(f"{_W}pgSz", {f"{_W}w": str(_LETTER[0]), f"{_W}h": str(_LETTER[1])})
         earlier = [e for e in wide if e.tag in {f"{_W}{t}" for t in ("headerReference", "footerReference", "footnotePr", "endnotePr", "type")}]
         wide.insert(wide.index(earlier[-1]) + 1 if earlier else 0, size)
-    w, h = int(size.get(f"{_W}w")), int(size.get(f"{_W}h"))
+    w, h = _twips(size, "w", _LETTER[0]), _twips(size, "h", _LETTER[1])
     size.set(f"{_W}w", str(max(w, h)))
     size.set(f"{_W}h", str(min(w, h)))
     size.set(f"{_W}orient", "landscape")
