@@ -278,3 +278,22 @@ def test_numbers_remembered_are_those_read_afresh(text, start, mark):
     assert (first is None) == (fresh is None)
     if fresh is not None and fresh.value == fresh.value:
         assert (first.text, first.value, first.decimals) == (fresh.text, fresh.value, fresh.decimals)
+
+
+def test_a_consistent_statistic_costs_one_p_and_says_its_range_when_asked(monkeypatch):
+    # speed: a statistic whose printed value gives a p inside the reported one needs no range ends (p falls as the
+    # statistic grows, so the range holds that p); the range is computed when `checked` is read (the JSON's
+    # `recomputed`) and is the one the two ends give: scipy.stats.t.sf(x, 38) * 2 is 0.038408 at 2.145 and 0.039269 at
+    # 2.135 (computed with scipy 1.x for this test); t(38) = 1.14 gives .261, not .039.
+    from statsetter.audit import checks
+
+    calls = []
+    real = checks._p_of
+    monkeypatch.setattr(checks, "_p_of", lambda *a: calls.append(a) or real(*a))
+    [good] = audit_units([Unit("p 1", "It differed, t(38) = 2.14, p = .039.", None, "", 0)], "apa7")
+    assert calls == [("t", 2.14, (38.0,))] and good.findings == ()  # its printed value only
+    calls.clear()
+    [bad] = audit_units([Unit("p 1", "It did not, t(38) = 1.14, p = .039.", None, "", 0)], "apa7")
+    assert len(calls) == 3 and "p-does-not-follow" in bad.codes  # the printed value, then the range's two ends
+    calls.clear()
+    assert good.checked == "p recomputed from t(38) = 2.14: 0.03841 to 0.03927" and [round(a[1], 12) for a in calls] == [2.145, 2.135]

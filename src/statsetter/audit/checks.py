@@ -146,12 +146,26 @@ def _p_range(rep: Reported) -> tuple[float, float] | None:
         if bound is None:
             return None
         return (bound[0], 1.0) if rep.op in ("<", "≤") else (0.0, bound[1])
-    if rep.op != "=":
+    bounds = _printed_bounds(rep)
+    if bounds is None:
+        return None
+    lo, _, hi, df = bounds
+    try:
+        return _p_of(rep.symbol, hi, df), _p_of(rep.symbol, lo, df)  # type: ignore[arg-type]
+    except MissingExtra:  # never skip the p checks silently
+        raise
+    except Exception:  # a degenerate df or value: no recomputation
+        return None
+
+
+def _printed_bounds(rep: Reported) -> tuple[float, float, float, tuple[float, ...]] | None:
+    """(low, printed, high, df) of a statistic given with "=" whose p can be recomputed: the values its printed
+    precision stands for (|value| ± half a unit of its last digit; an r up to 1)."""
+    if rep.symbol is None or rep.value is None or rep.op != "=":
         return None
     need = _DF_NEEDED.get(rep.symbol)
     if need is None or len(rep.df) != need or any(d.value <= 0 for d in rep.df):
         return None
-    df = tuple(d.value for d in rep.df)
     v, h = abs(rep.value.value), rep.value.half_unit
     lo, hi = max(v - h, 0.0), v + h
     if rep.symbol in ("r", "rs"):
@@ -160,12 +174,25 @@ def _p_range(rep: Reported) -> tuple[float, float] | None:
         hi = min(hi, 1.0)
     if rep.symbol in ("F", "chi2", "H", "Q") and rep.value.value < 0:
         return None
+    return lo, min(v, hi), hi, tuple(d.value for d in rep.df)
+
+
+def _fits_as_printed(rep: Reported, reported: tuple[float, float]) -> bool:
+    """Whether the p of the statistic's printed value lies in the reported p's range: then the range of p the
+    printed statistic allows (``p_range``, which holds it: p falls as the statistic grows) meets the reported one,
+    and its two ends need not be computed — one p instead of two for the most statistics, which are consistent."""
+    if rep.p_range is not None:
+        return False  # the range is known: the caller uses it
+    bounds = _printed_bounds(rep)
+    if bounds is None:
+        return False
     try:
-        return _p_of(rep.symbol, hi, df), _p_of(rep.symbol, lo, df)
-    except MissingExtra:  # never skip the p checks silently
+        p = _p_of(rep.symbol, bounds[1], bounds[3])  # type: ignore[arg-type]
+    except MissingExtra:
         raise
-    except Exception:  # a degenerate df or value: no recomputation
-        return None
+    except Exception:
+        return False
+    return reported[0] - 1e-12 <= p <= reported[1] + 1e-12
 
 
 def reported_p_range(rep: Reported, alpha: float) -> tuple[float, float] | None:
@@ -191,8 +218,11 @@ def _overlap(a: tuple[float, float], b: tuple[float, float]) -> bool:
 def consistency(rep: Reported, alpha: float) -> list[Finding]:
     if rep.p is not None and rep.p.adjusted:
         return []  # an adjusted p cannot be recomputed from one statistic
-    computed, reported = p_range(rep), reported_p_range(rep, alpha)
-    if computed is None or reported is None:
+    reported = reported_p_range(rep, alpha)
+    if reported is None or _fits_as_printed(rep, reported):
+        return []
+    computed = p_range(rep)
+    if computed is None:
         return []
     if _overlap(computed, reported):
         return []

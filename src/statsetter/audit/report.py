@@ -51,7 +51,13 @@ class Entry:
     notes: tuple[str, ...] = ()  # what the audit assumed instead of finding (say, a p adjusted by a procedure the text names)
     revision: StyledText | None = None  # the house-style text for a tracked change (asked for with restyle=True); None: left as typed
     kept: str = ""  # why a statistic with a different house-style text is left as typed
-    checked: str = ""  # what the consistency check recomputed (the df, and the reading of it when the context gave it)
+    recheck: "tuple[Reported, str] | None" = None  # the statistic (with the df read) and the reading the consistency check used
+
+    @property
+    def checked(self) -> str:
+        """What the consistency check recomputed (the df, and the reading of it when the context gave it), said when
+        asked: the p range's ends of a consistent statistic are computed only then (``checks.consistency``)."""
+        return _recomputed(*self.recheck) if self.recheck is not None else ""
 
     @property
     def codes(self) -> list[str]:
@@ -199,16 +205,15 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
 # a statistic's item and entry set slot by slot (the frozen dataclasses' __init__ costs a few microseconds; 10,000 per 1,000 pages)
 _new_item = _unchecked_maker(_Item, {}, ("unit", "rep", "local", "readings", "how", "context"))
 _new_entry = _unchecked_maker(Entry, {}, ("location", "found", "findings", "suggestion", "unit", "start", "end", "notes", "revision", "kept",
-                                          "checked"))
+                                          "recheck"))
 
 
-def _consistency(item: _Item, alpha: float) -> tuple[list[Finding], str]:
-    """Consistency findings and what was recomputed; a statistic without df is
-    recomputed under each df its context allows, and a finding is made only
-    when none fits."""
+def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Reported, str] | None]":
+    """Consistency findings and the statistic and reading recomputed (for ``Entry.checked``); a statistic without df
+    is recomputed under each df its context allows, and a finding is made only when none fits."""
     rep = item.rep
     if rep.df or not item.readings:
-        return consistency(rep, alpha), _recomputed(rep, "")
+        return consistency(rep, alpha), (rep, "")
     tried: list[tuple[Reported, list[Finding], Reading]] = []
     for reading in item.readings:
         candidate = replace(rep, df=tuple(Number(f"{d:g}", d, 0, rep.start, rep.start) for d in reading.df), p_range=None)
@@ -216,14 +221,14 @@ def _consistency(item: _Item, alpha: float) -> tuple[list[Finding], str]:
         if not _recomputed(candidate, ""):
             continue
         if not found:
-            return [], _recomputed(candidate, reading.assumption)
+            return [], (candidate, reading.assumption)
         tried.append((candidate, found, reading))
     if not tried:
-        return [], ""
+        return [], None
     candidate, found, _ = tried[0]
     readings = "; ".join(r.assumption for _, _, r in tried)
     return ([Finding(f.code, f.message, f"{f.evidence}; no reading of the df fits: {readings}") for f in found],
-            _recomputed(candidate, tried[0][2].assumption))
+            (candidate, tried[0][2].assumption))
 
 
 def _recomputed(rep: Reported, assumption: str) -> str:
@@ -303,7 +308,7 @@ def _audit_units(
             current = unit
             previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
             counted, lines, newline = 0, 0, -1  # newlines before position `counted`, and the last of them (one pass per unit)
-        consistent, checked = _consistency(item, alpha)
+        consistent, recheck = _consistency(item, alpha)
         findings = impossible(rep) + consistent
         if local is not None:
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark)
@@ -347,7 +352,7 @@ def _audit_units(
                 notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")
         house = house_text(rep, resolved, alpha) if restyle and local is rep and (findings or suggest_all) else _UNMADE  # made once for both
         suggestion = _suggest(rep, resolved, alpha, findings, house) if findings or suggest_all else ""
-        entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", checked))
+        entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", recheck))
         if restyle:  # what a revision needs (held only then: the parsed statistics are most of an audit's memory)
             reps.append(local)
             houses.append(house)

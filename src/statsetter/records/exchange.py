@@ -4,7 +4,8 @@ with its schema and version; ``kind`` says which class reads it back."""
 from __future__ import annotations
 
 import json
-from typing import Any, Iterable, Mapping, Union
+from collections.abc import Mapping
+from typing import Any, Iterable, Union
 
 from ..errors import InputError, RecordError
 from .result import Result
