@@ -20,6 +20,7 @@ for every model (df, F and each coefficient to 1e-8), pandas for counts.
 from __future__ import annotations
 
 import math
+from pathlib import Path
 import re
 
 import numpy as np
@@ -393,3 +394,18 @@ def test_text_values_with_spaces_around_them_are_one_category(tmp_path):
     assert list(table.variables[0].categories) == ["female", "male"]
     test = t_independent(data.frame, "body_mass_g", "sex").main
     assert test.n == penguins.dropna(subset=["sex", "body_mass_g"]).shape[0] - 2
+
+
+def test_a_stata_file_whose_columns_are_all_missing_says_so_for_every_type(capsys):
+    # a real Stata file from statsmodels' own test data (iolib/tests/results/data_missing.dta: one row, Stata's
+    # missing value in a float, double, byte, int and long column): the byte/int/long columns are read as objects
+    # holding None, and had been "nominal (0 distinct values, not numeric (object))" beside the floats' warning
+    import statsmodels
+
+    from statsetter.cli import main
+
+    path = Path(statsmodels.__file__).parent / "iolib" / "tests" / "results" / "data_missing.dta"
+    assert main(["describe", str(path)]) == 0
+    said = capsys.readouterr().err
+    for name in ("float_miss", "double_miss", "byte_miss", "int_miss", "long_miss"):
+        assert f"warning: {name}: nominal (inferred from the values: every value is missing; a weak guess" in said, said

@@ -42,6 +42,8 @@ def infer_level(series: "pd.Series") -> LevelReport:
         return LevelReport(name, "nominal", "categorical", "unordered categorical")
     if not pd.api.types.is_numeric_dtype(series) or pd.api.types.is_bool_dtype(series):
         values = series.dropna()
+        if values.empty:  # a text or object column with no value at all (Stata's missing bytes read as None)
+            return LevelReport(name, "nominal", "inferred", "every value is missing", weak=True)
         distinct = int(values.nunique())
         reason = f"{distinct} distinct values, not numeric ({series.dtype})"
         if distinct > 2 and len(values) and distinct > max(20, len(values) // 2):
