@@ -14,6 +14,7 @@ with every title and a number of every table found in its text.
 from __future__ import annotations
 
 import os
+import re
 from pathlib import Path
 
 import pingouin as pg
@@ -157,3 +158,36 @@ def test_every_latex_golden_compiles(tmp_path):
     assert done.returncode == 0, done.stdout[-2000:]
     assert len(list(GOLDEN.glob("*.tex"))) == len(KINDS) * len(STYLES)
     assert "Overfull \\hbox" not in (tmp_path / "all.log").read_text(encoding="latin-1")
+
+
+def test_a_table_far_wider_than_the_page_is_turned_in_latex_too(tmp_path):
+    # issue: a Table 1 by five groups with Total and p (pingouin's penguins by species × island) was scaled down to the
+    # portrait text, its stub unwrapped, to type of about 6 pt. Now it goes on a landscape page (sidewaystable, with a
+    # warning), its stub wrapping, at full size; it compiles with pdflatex without an overfull line on A4 and US Letter
+    # at 12 pt, and every number of it is in the PDF's text. (A table only a little too wide — the regression golden —
+    # stays in portrait, scaled by a few per cent.)
+    import shutil
+    import subprocess
+
+    from statsetter.styled import LATEX_PREAMBLE
+    from test_docx import _species_by_island
+
+    if shutil.which("pdflatex") is None:
+        if os.environ.get("CI"):
+            pytest.fail("pdflatex is required in CI; .ci/run installs it")
+        pytest.skip("pdflatex not installed")
+    wide = _species_by_island().with_number(1)
+    with pytest.warns(UserWarning, match=r"Table 1 is set on a landscape page \(sidewaystable\): its columns need \d+\.\d in"):
+        tex = write_table(wide, "tex", load_style("apa7"))
+    assert "\\begin{sidewaystable}" in tex and "\\begin{tabularx}{\\linewidth}" in tex and "resizebox" not in tex
+    assert "sidewaystable" not in (GOLDEN / "regression-apa7.tex").read_text(encoding="utf-8")
+    for paper in ("a4paper", "letterpaper"):
+        (tmp_path / "wide.tex").write_text(f"\\documentclass[12pt]{{article}}\n\\usepackage[{paper},margin=1in]{{geometry}}\n" + LATEX_PREAMBLE
+                                           + "\\begin{document}\nText before.\n\n" + tex + "\nText after.\n\\end{document}\n", encoding="utf-8")
+        done = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "wide.tex"], cwd=tmp_path, capture_output=True,
+                              text=True, timeout=300)
+        assert done.returncode == 0, done.stdout[-2000:]
+        assert "Overfull \\hbox" not in (tmp_path / "wide.log").read_text(encoding="latin-1"), paper
+        shown = subprocess.run(["pdftotext", str(tmp_path / "wide.pdf"), "-"], capture_output=True, text=True, check=True).stdout.split()
+        numbers = {n for row in wide.rows for c in row.cells for n in re.findall(r"\d[\d,.]*\d|\d", c.plain())}
+        assert numbers and {n for n in numbers if not any(n in word for word in shown)} == set(), paper

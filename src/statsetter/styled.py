@@ -430,10 +430,10 @@ def _escape_latex(text: str) -> str:
 
 _UPRIGHT = ("alpha", "beta", "chi", "eta", "omega", "varepsilon", "tau", "rho", "varphi")
 LATEX_PREAMBLE = (
-    "\\usepackage{booktabs}\n\\usepackage{tabularx}\n\\usepackage{graphicx}\n"
+    "\\usepackage{booktabs}\n\\usepackage{tabularx}\n\\usepackage{graphicx}\n\\usepackage{rotating}\n"
     "\\IfFileExists{upgreek.sty}{\\usepackage{upgreek}}{%\n"
     + "".join(f"  \\providecommand{{\\up{g}}}{{\\{g}}}%\n" for g in _UPRIGHT)
     + "}\n"
 )
-"""What a document needs for the LaTeX writers' output: booktabs for tables,
-upgreek for upright Greek letters (italic ones where it is missing)."""
+"""What a document needs for the LaTeX writers' output: booktabs and tabularx for tables, rotating for a table on a
+landscape page, graphicx for figures, upgreek for upright Greek letters (italic ones where it is missing)."""

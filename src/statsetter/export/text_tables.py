@@ -10,6 +10,7 @@ from __future__ import annotations
 
 import csv
 import io
+import warnings
 from typing import TYPE_CHECKING
 
 from ..styled import StyledText
@@ -103,6 +104,7 @@ def table_html(t: TableModel, one_line: bool = False) -> str:
 
 
 _LATEX_SPACE = 6 * 20  # \\tabcolsep, the space on each side of a column (6 pt), in twips
+_PORTRAIT, _LANDSCAPE = 9030, 12960  # twips: the text width of the narrowest portrait page (A4) and landscape one (US Letter), 1-inch margins
 
 
 def table_latex(t: TableModel, style: "Style | None" = None) -> str:
@@ -110,21 +112,35 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
     (APA 7 §7.7), the stub a ragged-right column that wraps between words with
     a hanging indent (tabularx, to the line width), columns of single numbers
     aligned on the decimal mark where the style asks, notes below in a
-    minipage. A table whose numbers alone are wider than the page is scaled to
-    it (the last resort). The document needs ``statsetter.styled.LATEX_PREAMBLE``.
+    minipage. A head wider than its column's numbers is stacked on lines
+    (``_stacked_head``), as Word wraps it. A table whose numbers and the
+    stub's longest word are wider than a portrait page's text is scaled to
+    it, down to 85%; a wider one goes on a landscape page of its own
+    (rotating's ``sidewaystable``; a course guide to APA 7 allows a table's
+    page to be turned), scaled to that page's text if it must be (the last
+    resort). The document needs ``statsetter.styled.LATEX_PREAMBLE``.
 
     Decimal alignment keeps each number in one cell (so the table reads as
     written): in a right-aligned column the part after the mark is set in a box
     of no width (``\\rlap``) followed by an invisible copy of the column's
     longest such part (``\\phantom``), so every mark falls at the same place."""
-    from .docx_writer import _HANG, _column_widths, _longest_word
+    from .docx_writer import _HANG, _PAD, _column_widths, _longest_word
 
     mark = style.decimal_mark if style is not None else "."
     decimal = t.decimal_columns(mark) if style is not None and style.tables.get("number_align") == "decimal" else (False,) * len(t.columns)
     widths = _column_widths(t, 10**9)
     stub_least = max((_longest_word(r.stub.plain()) for r in t.rows), default=0) + _HANG
-    # twips: with the stub at its longest word, do the numbers fit the narrowest page (A4, 1-inch margins: 6.27 in)?
-    too_wide = stub_least + sum(widths[1:]) + 2 * len(widths) * _LATEX_SPACE > 9030
+    # twips: the table with its stub wrapped at its longest word, with LaTeX's column space (not Word's cell margins)
+    # and without the tenth ``_chars`` adds so that Word never breaks a word (the goldens' tables as LaTeX set them
+    # measured 0.88–0.98 of the rest). A table up to a sixth wider than the portrait text is scaled to it (to 85% or
+    # more: 10 pt type at 12), a wider one turned; one wider than its page's text is set at its own width, the stub
+    # wrapping at its longest word, and scaled down to the line (LaTeX measures it)
+    least = (stub_least + sum(w - _PAD for w in widths[1:])) / 1.1 + 2 * len(widths) * _LATEX_SPACE
+    turned = least > _PORTRAIT / 0.85
+    too_wide = least > (_LANDSCAPE if turned else _PORTRAIT)
+    if turned:
+        name = f"Table {t.number}" if t.number is not None else "A table"
+        warnings.warn(f"{name} is set on a landscape page (sidewaystable): its columns need {least / 1440:.1f} in", stacklevel=2)
     ncol = len(t.columns)
     longest = [""] * ncol
     for row in t.rows:
@@ -134,8 +150,8 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
                 if len(right.text) > len(longest[j]):
                     longest[j] = right.latex()
     spec = "".join("r" if d or c.align == "right" else ("l" if c.align == "left" else "c") for c, d in zip(t.columns, decimal))
-    stub = ">{\\raggedright\\arraybackslash\\hangindent=1em\\hangafter=1}X" if not too_wide else "l"
-    out = ["\\begin{table}[htbp]", "\\raggedright"]
+    stub = ">{\\raggedright\\arraybackslash\\hangindent=1em\\hangafter=1}" + (f"p{{{stub_least / 20:.1f}pt}}" if too_wide else "X")
+    out = ["\\begin{sidewaystable}" if turned else "\\begin{table}[htbp]", "\\raggedright"]
     if _one_line(style) and (t.number is not None or t.title):
         out.append(" ".join(([f"\\textbf{{Table {t.number}.}}"] if t.number is not None else []) + ([title_case(t.title).latex()] if t.title else []))
                    + "\\par\\medskip")
@@ -163,7 +179,8 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
             rules.append(f"\\cmidrule(lr){{{s.start + 2}-{s.end + 1}}}")
         out.append(" & ".join(c for k, c in enumerate(cells) if k not in skip) + " \\\\")
         out.append(" ".join(rules))
-    out.append(" & ".join([t.stub_head.latex()] + [centred(c.head.latex(), j) for j, c in enumerate(t.columns)]) + " \\\\")
+    out.append(" & ".join([t.stub_head.latex()] + [centred(_stacked_head(c.head, widths[j + 1] - _PAD), j) for j, c in enumerate(t.columns)])
+               + " \\\\")
     out.append("\\midrule")
     for row in t.rows:
         stub_text = ("\\quad " * row.indent) + row.stub.latex()
@@ -186,8 +203,29 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
     if notes:
         out.append("\\par\\medskip")
         out.append("\\begin{minipage}{\\linewidth}\\raggedright\\setlength{\\parindent}{0pt}" + "\\par ".join(n.latex() for n in notes) + "\\end{minipage}")
-    out.append("\\end{table}")
+    out.append("\\end{sidewaystable}" if turned else "\\end{table}")
     return "\n".join(out) + "\n"
+
+
+def _stacked_head(head: StyledText, width: int) -> str:
+    """A column head in LaTeX, its words (no-break spaces hold theirs together) on as many lines as keep each within
+    ``width`` twips (the column's numbers, or its longest word), centred in a tabular of its own."""
+    from .docx_writer import _chars
+
+    text = head.text
+    if " " not in text or _chars(head.plain()) <= width:
+        return head.latex()
+    lines, start, last = [], 0, -1  # each line's text range; ``last``: the latest space the current line may end at
+    for at in [i for i, ch in enumerate(text) if ch == " "] + [len(text)]:
+        if last > start and _chars(text[start:at].replace("\u00a0", " ")) > width:
+            lines.append((start, last))
+            start = last + 1
+        last = at
+    lines.append((start, len(text)))
+    if len(lines) == 1:
+        return head.latex()
+    pieces = [head.split_at(b)[0].split_at(a)[1].latex() for a, b in lines]
+    return "\\begin{tabular}[b]{@{}c@{}}" + " \\\\ ".join(pieces) + "\\end{tabular}"
 
 
 def table_csv(t: TableModel) -> str:
