@@ -191,3 +191,27 @@ def test_a_table_far_wider_than_the_page_is_turned_in_latex_too(tmp_path):
         shown = subprocess.run(["pdftotext", str(tmp_path / "wide.pdf"), "-"], capture_output=True, text=True, check=True).stdout.split()
         numbers = {n for row in wide.rows for c in row.cells for n in re.findall(r"\d[\d,.]*\d|\d", c.plain())}
         assert numbers and {n for n in numbers if not any(n in word for word in shown)} == set(), paper
+
+
+def test_a_row_label_that_starts_with_a_bracket_compiles(tmp_path):
+    # found by a fuzz of Table 1 labels: a stub starting with "[" right after a row's "\\" or a rule was read as their
+    # optional length ("! Missing number, treated as zero") and pdflatex stopped; labels such as "[R] item 4" are typed
+    import shutil
+    import subprocess
+
+    from statsetter.analyses import describe
+    from statsetter.styled import LATEX_PREAMBLE
+
+    if shutil.which("pdflatex") is None:
+        if os.environ.get("CI"):
+            pytest.fail("pdflatex is required in CI; .ci/run installs it")
+        pytest.skip("pdflatex not installed")
+    d = pg.read_dataset("penguins")
+    t = table(describe(d, ["bill_length_mm", "sex"], group="species", labels={"bill_length_mm": "[R] bill length (mm)", "sex": "[sex]"}).main,
+              "apa7")
+    tex = write_table(t, "tex", load_style("apa7"))
+    (tmp_path / "b.tex").write_text("\\documentclass{article}\n" + LATEX_PREAMBLE + "\\begin{document}\n" + tex + "\n\\end{document}\n", encoding="utf-8")
+    done = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "b.tex"], cwd=tmp_path, capture_output=True, text=True, timeout=300)
+    assert done.returncode == 0, done.stdout[-1500:]
+    shown = subprocess.run(["pdftotext", str(tmp_path / "b.pdf"), "-"], capture_output=True, text=True, check=True).stdout
+    assert "[R] bill length" in shown and "[sex], n (%)" in shown

@@ -179,11 +179,11 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
             rules.append(f"\\cmidrule(lr){{{s.start + 2}-{s.end + 1}}}")
         out.append(" & ".join(c for k, c in enumerate(cells) if k not in skip) + " \\\\")
         out.append(" ".join(rules))
-    out.append(" & ".join([t.stub_head.latex()] + [centred(_stacked_head(c.head, widths[j + 1] - _PAD), j) for j, c in enumerate(t.columns)])
+    out.append(" & ".join([_line_start(t.stub_head.latex())] + [centred(_stacked_head(c.head, widths[j + 1] - _PAD), j) for j, c in enumerate(t.columns)])
                + " \\\\")
     out.append("\\midrule")
     for row in t.rows:
-        stub_text = ("\\quad " * row.indent) + row.stub.latex()
+        stub_text = _line_start(("\\quad " * row.indent) + row.stub.latex())
         if row.cells:
             cells = [stub_text]
             for j, c in enumerate(row.cells):
@@ -205,6 +205,12 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
         out.append("\\begin{minipage}{\\linewidth}\\raggedright\\setlength{\\parindent}{0pt}" + "\\par ".join(n.latex() for n in notes) + "\\end{minipage}")
     out.append("\\end{sidewaystable}" if turned else "\\end{table}")
     return "\n".join(out) + "\n"
+
+
+def _line_start(text: str) -> str:
+    """A row's first cell: one that starts with "[" is read by the ``\\\\`` or rule before it as its optional argument
+    (a length: "Missing number"), so an empty group goes first."""
+    return "{}" + text if text.startswith("[") else text
 
 
 def _stacked_head(head: StyledText, width: int) -> str:
