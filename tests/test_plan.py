@@ -237,3 +237,19 @@ def test_the_process_writes_every_output_whole_before_it_exits(folder, capsys):
     assert md == (out / "results.md").read_text(encoding="utf-8")
     assert records == json.loads((out / "records.json").read_text(encoding="utf-8"))
     assert paragraphs == [p.text for p in docx.Document(str(out / "results.docx")).paragraphs] and any("8.55" in p for p in paragraphs)
+
+
+def test_a_table_set_on_landscape_pages_is_said_in_the_run_notes(tmp_path, capsys):
+    # "automatic choices are shown": a Table 1 of pingouin's penguins by species × island (five groups, Total, p) is
+    # too wide for a portrait page; the Word and LaTeX writers turn it, the terminal says so, and so do the run's notes
+    data = pg.read_dataset("penguins")
+    data["group"] = data.species + " " + data.island
+    data.to_csv(tmp_path / "penguins.csv", index=False)
+    path = write(tmp_path, '[data]\npath = "penguins.csv"\nlabels = { bill_length_mm = "Bill length measured from the tip (mm)" }\n\n'
+                 '[[tables]]\nkind = "descriptives"\nvariables = ["bill_length_mm", "flipper_length_mm", "sex"]\ngroup = "group"\n'
+                 'compare = true\n\n[outputs]\nfolder = "out"\ndocx = "results.docx"\ntex = "results.tex"\nnotes = "notes.md"\n')
+    assert main(["run", str(path)]) == 0
+    err = capsys.readouterr().err
+    assert "Table 1 is set on landscape pages" in err and "Table 1 is set on a landscape page (sidewaystable)" in err
+    notes = (tmp_path / "out" / "notes.md").read_text(encoding="utf-8")
+    assert "- results.docx: Table 1 is set on landscape pages" in notes and "- results.tex: Table 1 is set on a landscape page" in notes

@@ -86,23 +86,36 @@ def write_section(
     blocks: Sequence[Block], records: Sequence[Record], style: Style, title: str, targets: dict[str, Path], inputs: Sequence[Path] = (), *,
     notes: Sequence[str] = (), caution: bool = False, paper: str | None = None,
 ) -> list[tuple[str, Path]]:
-    """Write each format in ``targets`` (md, html, tex, docx, json, notes): [(format, path)]."""
+    """Write each format in ``targets`` (md, html, tex, docx, json, notes): [(format, path)]. What the writers
+    chose and said as a warning (a wide table set on landscape pages) is said on the terminal as ever and added to
+    the notes, which are written last."""
+    import warnings
+
     from ..files import write_atomic
 
     written = []
-    for fmt, path in targets.items():
-        if fmt == "json":
-            write_atomic(path, dump_records(records), inputs=inputs)
-        elif fmt == "notes":
-            write_atomic(path, run_notes(notes, title), inputs=inputs)
-        elif fmt == "docx":
-            from .docx_writer import add_runs, results_document, save_document
+    said = list(notes)
+    for fmt, path in sorted(targets.items(), key=lambda item: item[0] == "notes"):
+        if fmt == "notes":
+            write_atomic(path, run_notes(said, title), inputs=inputs)
+            written.append((fmt, path))
+            continue
+        with warnings.catch_warnings(record=True) as caught:
+            warnings.simplefilter("always")
+            if fmt == "json":
+                write_atomic(path, dump_records(records), inputs=inputs)
+            elif fmt == "docx":
+                from .docx_writer import add_runs, results_document, save_document
 
-            document = results_document(blocks, style, title=title, paper=paper, figure_root=path.parent)
-            if caution:
-                add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
-            save_document(document, path, inputs=inputs)
-        else:
-            write_atomic(path, section_text(blocks, style, title, fmt, caution=caution, paper=paper), inputs=inputs)
+                document = results_document(blocks, style, title=title, paper=paper, figure_root=path.parent)
+                if caution:
+                    add_runs(document.add_paragraph(), StyledText.styled(CAUTION, "i"))
+                save_document(document, path, inputs=inputs)
+            else:
+                write_atomic(path, section_text(blocks, style, title, fmt, caution=caution, paper=paper), inputs=inputs)
+        for w in caught:  # each said again where the caller listens, ours noted once per format
+            warnings.warn_explicit(w.message, w.category, w.filename, w.lineno)
+            if issubclass(w.category, UserWarning) and f"{path.name}: {w.message}" not in said and "statsetter" in w.filename:
+                said.append(f"{path.name}: {w.message}")
         written.append((fmt, path))
-    return written
+    return sorted(written, key=lambda item: list(targets).index(item[0]))
