@@ -374,3 +374,17 @@ def test_a_document_that_is_one_wide_table_is_one_landscape_page(tmp_path):
         add_table(document, _species_by_island(), "apa7")
     pages = _pdf_pages(save_document(document, tmp_path / "alone.docx"))
     assert [landscape for landscape, _ in pages] == [True] and "Characteristics of the Sample" in pages[0][1]
+
+
+def test_two_wide_tables_in_a_row_leave_no_empty_page_between(tmp_path):
+    # found looking at every table kind in Word: two turned tables one after the other had an empty portrait page
+    # between them (the first's landscape section ended, a portrait section of one empty paragraph, then the second's)
+    import warnings
+
+    wide = _species_by_island()
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        document = results_document([StyledText("Before."), wide, wide.with_number(2), StyledText("After.")], "apa7")
+    pages = _pdf_pages(save_document(document, tmp_path / "two.docx"))
+    assert all(text.split() != [str(k + 1)] for k, (_, text) in enumerate(pages))  # no page with only its number
+    assert [landscape for landscape, _ in pages] == [False, True, True, False]

@@ -83,7 +83,8 @@ def _later(sect: Any) -> Any:
 def turned(parts: "list[str | bytes]", sect: Any, opening: bool = False) -> "list[str | bytes]":
     """``parts`` (a table's caption, table and notes) on landscape pages of
     their own: a paragraph ending the text's section before them (its page
-    as it was; none when they ``opening`` the document), one ending a
+    as it was; none when they open the document or follow another turned
+    table — ``opening`` —, so that no empty page comes between), one ending a
     landscape section after them; the section that follows (``sect``,
     changed in place) starts a new page and goes on numbering."""
     before = copy.deepcopy(sect)
@@ -112,12 +113,16 @@ def settle(body: Any) -> None:
     if last is None or last.tag != f"{_W}sectPr":
         return
     ending = last.getprevious()
-    spacing = ending.find(f"{_W}pPr/{_W}spacing") if ending is not None and ending.tag == f"{_W}p" else None
-    if spacing is None or spacing.get(f"{_W}line") != "20" or ending.find(f"{_W}r") is not None:  # not an ending ``_ending`` made
+    if not landscape_ending(ending):
         return
-    sect = ending.find(f"{_W}pPr/{_W}sectPr")
-    size = sect.find(f"{_W}pgSz") if sect is not None else None
-    if size is None or size.get(f"{_W}orient") != "landscape":
-        return
-    body.replace(last, sect)
+    body.replace(last, ending.find(f"{_W}pPr/{_W}sectPr"))
     body.remove(ending)
+
+
+def landscape_ending(element: Any) -> bool:
+    """Whether ``element`` is the paragraph ``turned`` put after a table to end its landscape section."""
+    spacing = element.find(f"{_W}pPr/{_W}spacing") if element is not None and element.tag == f"{_W}p" else None
+    if spacing is None or spacing.get(f"{_W}line") != "20" or element.find(f"{_W}r") is not None:
+        return False
+    size = element.find(f"{_W}pPr/{_W}sectPr/{_W}pgSz")
+    return size is not None and size.get(f"{_W}orient") == "landscape"
