@@ -171,7 +171,10 @@ def _longest_word(text: str) -> int:
 
 _BREAKABLE = re.compile(r"[ \t\n\u2002\u2003\u2009–—/-]")
 _KEEP = re.compile(r"([<>=≤≥−]) ")
-_BREAKS = re.compile(r"[ \t\n\u2002\u2003\u2009]+|(?<=[–—/-])")  # a line may break at a space (not a no-break one) or after a dash or slash
+# a line may break at a space (not a no-break one) or after a dash or slash — but not at spaces before a closing
+# bracket, a point, comma, colon, semicolon, "!", "?" or "/": Unicode's line breaking (UAX #14, rule LB13), which Word and
+# LibreOffice follow, keeps those with what comes before even across spaces (so "[.79, .84]" is one piece)
+_BREAKS = re.compile(r"[ \t\n\u2002\u2003\u2009]++(?![.,:;!?)\]}/])|(?<=[–—/-])")
 
 
 _EM = 240  # twips in an em of 12 pt type
@@ -227,7 +230,7 @@ def _least_and_natural(table: TableModel, shapes: "list[_Column]") -> tuple[list
     longest = [0] * ncols  # the longest word
     natural = [0] * ncols  # the longest text, unwrapped
     def plain(t: StyledText) -> str:
-        return t.plain() if t.spans else t.text.replace("\u00a0", " ")
+        return t.text.replace(_SOFT, ", ")
 
     stub_rows = [("\u2003" * r.indent) + plain(r.stub).translate(_SHAPE) for r in table.rows]  # widths by shape (digits as 0s)
     for j, texts in enumerate([[plain(table.stub_head), *stub_rows]] + [[plain(c.head)] for c in table.columns]):
@@ -241,7 +244,7 @@ def _least_and_natural(table: TableModel, shapes: "list[_Column]") -> tuple[list
             if whole > natural[j]:
                 natural[j] = whole
     for j, (distinct, styled, *_) in enumerate(shapes, 1):  # the body: each shape measured once
-        for whole, word in [_measure_shape(shape, "")[:2] for shape in distinct] + [(_chars(c.plain()), _longest_word(c.plain())) for c in styled]:
+        for whole, word in [_measure_shape(shape, "")[:2] for shape in distinct] + [(_chars(t), _longest_word(t)) for t in (plain(c) for c in styled)]:
             if word > longest[j]:
                 longest[j] = word
             if whole > natural[j]:
@@ -295,6 +298,16 @@ def _split_plain(text: str, mark: str) -> tuple[str, str]:
 
 
 _SHAPE = DIGITS_AS_ZERO  # every digit is half an em wide: a cell's width depends on its shape only
+# A no-break space after a comma (between an interval's limits, "[.79, .84]", or two df) is written into a Word table as
+# a plain space: a narrow column may wrap there, and widths are measured so. The others (after "<" or "=", inside
+# "(n = 44)") hold: Word and LibreOffice never break at them, and would break a number instead when the column is
+# narrower than the piece they hold together, so they are measured whole.
+_SOFT = ",\u00a0"
+
+
+def _softened(text: StyledText) -> StyledText:
+    """``text`` with each no-break space after a comma a plain space (``_SOFT``; the same length, spans kept)."""
+    return StyledText(text.text.replace(_SOFT, ", "), text.spans) if _SOFT in text.text else text
 
 
 class _Column(NamedTuple):
@@ -304,6 +317,7 @@ class _Column(NamedTuple):
     styled: list[StyledText]  # its cells with italics, superscripts or subscripts
     safe: bool  # no plain cell needs escaping or cleaning (``_NEEDS_CARE``)
     padded: bool  # some plain cell may start or end with white space Word would drop (``_t_open``)
+    soft: bool  # some cell holds a no-break space after a comma, written as a plain space (``_SOFT``)
 
 
 def _body_shapes(table: TableModel) -> list[_Column]:
@@ -320,16 +334,17 @@ def _body_shapes(table: TableModel) -> list[_Column]:
         else:
             shapes = {t.translate(_SHAPE) for t in texts}
             padded = any(_t_open(t) != "<w:t>" for t in texts)
-        out.append(_Column(shapes, styled, _NEEDS_CARE.search(joined) is None, padded))
+        out.append(_Column(shapes, styled, _NEEDS_CARE.search(joined) is None, padded, _SOFT in joined or any(_SOFT in c.text for c in styled)))
     return out
 
 
 @functools.lru_cache(maxsize=1 << 12)
 def _measure_shape(shape: str, mark: str) -> tuple[int, int, int, int]:
     """A plain body cell's shape in twips: its width and its longest unbreakable
-    piece (no-break spaces measured as spaces, as ``_column_widths`` wraps
-    them), and the widths before and from its decimal ``mark`` as typed."""
-    shown = shape.replace("\u00a0", " ")
+    piece (a no-break space after a comma is written as a space, ``_SOFT``;
+    the others hold as Word and LibreOffice hold them), and the widths before
+    and from its decimal ``mark`` as typed."""
+    shown = shape.replace(_SOFT, ", ")
     a, b = _split_plain(shape, mark)
     return _chars(shown), _longest_word(shown), _chars(a), _chars(b)
 
@@ -397,7 +412,7 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         j = 0
         for sp in sorted(table.spanners, key=lambda sp: sp.start):
             cells += [_cell_xml(StyledText(), "center", True, False, line=line, width=widths[k + 1]) for k in range(j, sp.start)]
-            cells.append(_cell_xml(sp.label, "center", True, True, sp.end - sp.start, line=line, width=sum(widths[sp.start + 1 : sp.end + 1])))
+            cells.append(_cell_xml(_softened(sp.label), "center", True, True, sp.end - sp.start, line=line, width=sum(widths[sp.start + 1 : sp.end + 1])))
             j = sp.end
         cells += [_cell_xml(StyledText(), "center", True, False, line=line, width=widths[k + 1]) for k in range(j, len(table.columns))]
         parts.append(f"<w:tr>{header}{''.join(cells)}</w:tr>")
@@ -406,7 +421,8 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     parts.append(
         f"<w:tr>{header}"
         + "".join(
-            _cell_xml(h, "left" if j == 0 else "center", head_rows == 1 or j in spanned, True, line=line, width=widths[j]) for j, h in enumerate(heads)
+            _cell_xml(_softened(h), "left" if j == 0 else "center", head_rows == 1 or j in spanned, True, line=line, width=widths[j])
+            for j, h in enumerate(heads)
         )
         + "</w:tr>"
     )
@@ -425,6 +441,7 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     run_open = '<w:r><w:t xml:space="preserve">' if any(column.padded for column in shapes) else "<w:r><w:t>"
     run_close = "</w:t></w:r>" + _CELL_CLOSE
     ncols = len(table.columns)
+    soft = {k for k, column in enumerate(shapes) if column.soft}
     # a row whose cells are all plain text, safe as it is, neither dash nor blank (most rows of a big table) is the same
     # XML around its texts as every such row: one list of the pieces between the texts (and one for the last row), the
     # row's stub and texts put into its slots, joined
@@ -439,12 +456,12 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     for i, row in enumerate(table.rows):
         bottom = i == last
         stub = StyledText("\u2003" * row.indent) + row.stub if row.indent else row.stub
-        stub_xml = stub_open[bottom] + _run_xml(stub) + _CELL_CLOSE
+        stub_xml = stub_open[bottom] + _run_xml(_softened(stub)) + _CELL_CLOSE
         cells = row.cells
         if plain_safe and len(cells) == ncols and not any(cells[k].spans or cells[k].text.strip() in _DASHES for k in careful):
             row_xml = templates[bottom][:]
             row_xml[1] = stub_xml
-            row_xml[3:-1:2] = [c.text for c in cells]
+            row_xml[3:-1:2] = [c.text.replace(_SOFT, ", ") if k in soft else c.text for k, c in enumerate(cells)] if soft else [c.text for c in cells]
             out.write("".join(row_xml).encode())
             continue
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
@@ -452,7 +469,7 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         if cells:
             opened = openings[bottom]
             parts += [(opening[1] if c.text.strip() in _DASHES else opening[0])
-                      + (_run_xml(c) + _CELL_CLOSE if c.spans or not plain_safe else run_open + c.text + run_close if c.text else _CELL_CLOSE)
+                      + (_run_xml(_softened(c)) + _CELL_CLOSE if c.spans or not plain_safe else run_open + _softened(c).text + run_close if c.text else _CELL_CLOSE)
                       for c, opening in zip(cells, opened)]
         else:
             parts.append(_cell_xml(StyledText(), "left", False, bottom, ncols, line=line))
@@ -547,12 +564,14 @@ def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH,
     width = pages.text_width(section) if section is not None else text_width
     wide = pages.text_width(section, landscape=True) if section is not None else width
     name = f"Table {table.number}" if table.number is not None else "A table"
-    turn = least > width and wide > width
+    # (the least widths are over-estimated by a tenth, ``_chars``: within that, ``_fit`` shrinks the columns alike and
+    # every word still fits; beyond it, the page is turned)
+    turn = least > width * 1.1 and wide > width
     if turn:
         warnings.warn(f"{name} is set on landscape pages: its columns need {least / 1440:.1f} in, the page's text is "
                       f"{width / 1440:.1f} in wide", stacklevel=2)
         width = wide
-    if least > width:
+    if least > width * 1.1:
         warnings.warn(f"{name} is wider than the {'landscape ' if turn else ''}page's text ({least / 1440:.1f} in against "
                       f"{width / 1440:.1f} in): some of its cells wrap inside a word; fewer columns or shorter labels would read "
                       "better", stacklevel=2)
