@@ -129,7 +129,7 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
     mark = style.decimal_mark if style is not None else "."
     decimal = t.decimal_columns(mark) if style is not None and style.tables.get("number_align") == "decimal" else (False,) * len(t.columns)
     widths = _column_widths(t, 10**9)
-    stub_least = max((_longest_word(r.stub.plain()) for r in t.rows), default=0) + _HANG
+    stub_least = max((_longest_word(r.stub.text) for r in t.rows), default=0) + _HANG
     # twips: the table with its stub wrapped at its longest word, with LaTeX's column space (not Word's cell margins)
     # and without the tenth ``_chars`` adds so that Word never breaks a word (the goldens' tables as LaTeX set them
     # measured 0.88–0.98 of the rest). A table up to a sixth wider than the portrait text is scaled to it (to 85% or
