@@ -6,6 +6,8 @@ References: scipy.stats (mannwhitneyu, wilcoxon, kruskal), pingouin (mwu's
 RBC, cronbach_alpha) and the published formulas named beside each check.
 """
 
+import re
+
 import numpy as np
 import pandas as pd
 import pingouin as pg
@@ -107,3 +109,24 @@ def test_rank_bad_input(penguins):
         wilcoxon_signed_rank(SLEEP.assign(x=SLEEP.drug1), "drug1", "x").main
     with pytest.raises(InputError, match="not numeric"):
         kruskal_wallis(penguins, "island", "species").main
+
+
+def test_medians_of_whole_number_scores_print_as_whole_numbers_in_table_and_text():
+    # a supervisor reading "Mdn = 2.00" of party sizes: medians and quartiles of whole-number data are whole (or
+    # halves, or quarters), and Table 1 and the sentences now print the digits they have, the same in both:
+    # pingouin's tips (Bryant & Smith, 1995 — memory): party size by sex, medians 2 and 2 (numpy.median; practice: R's
+    # median gives the same), quartiles 2 and 3. Ratings in half points (pingouin's rm_anova, DesireToKill: 0, 0.5,
+    # … 10) keep the style's decimals.
+    import pingouin as pg
+
+    from statsetter import render, table
+    from statsetter.analyses import describe, kruskal_wallis, mann_whitney
+
+    tips = pg.read_dataset("tips")
+    said = render(mann_whitney(tips, "size", "sex", labels={"size": "party size"}).main, "sentence", "apa7").plain()
+    assert "(Mdn = 2, n = 87)" in said and "(Mdn = 2, n = 157)" in said
+    t = table(describe(tips, ["size"], group="sex", levels={"size": "ordinal"}).main, "apa7")
+    assert [c.plain() for c in t.rows[0].cells[:3]] == ["2 (2–3)", "2 (2–3)", "2 (2–3)"]
+    ratings = pg.read_dataset("rm_anova").dropna(subset=["DesireToKill"])
+    said = render(kruskal_wallis(ratings, "DesireToKill", "Region").main, "sentence", "apa7").plain()
+    assert all(re.fullmatch(r"\d+\.\d\d", m) for m in re.findall(r"Mdn = ([\d.]+)", said)), said

@@ -24,6 +24,22 @@ def _median_summary(label: str, v: "np.ndarray") -> GroupSummary:
     return GroupSummary(label, n=len(v), median=float(np.median(v)), q1=float(q1), q3=float(q3))
 
 
+def score_precision(samples: "Sequence[np.ndarray]", groups: "Sequence[GroupSummary]") -> dict[str, int]:
+    """Held decimals for the groups' medians and quartiles when every value is a whole number (a score, a rating, a
+    count): such medians are whole or halves and such quartiles whole, halves or quarters, so "Mdn = 6" where the
+    style's "6.00" would print digits the data do not have — 0 decimals when all of them are whole, 1 when all are
+    whole or halves, as Table 1 prints an ordinal row (``descriptive_tables``); the same for every group."""
+    import numpy as np
+
+    if not samples or not all(len(v) and np.array_equal(v, np.floor(v)) for v in samples):
+        return {}
+    values = [x for g in groups for x in (g.median, g.q1, g.q3) if x is not None]
+    for decimals, step in ((0, 1.0), (1, 0.5)):
+        if values and all((x / step).is_integer() for x in values):
+            return {f"groups[{i}].{name}": decimals for i in range(len(groups)) for name in ("median", "q1", "q3")}
+    return {}
+
+
 def _two_groups(df: "pd.DataFrame", outcome: str, group: str, groups: Sequence[object] | None, test: str):  # type: ignore[no-untyped-def]
     data, missing = c.listwise(df, [outcome, group])
     y = c.numeric(data, outcome)
@@ -70,7 +86,8 @@ def mann_whitney(
         alternative=alternative,  # type: ignore[arg-type]
         n=len(a) + len(b),
         effects=(EffectSize("r_rb", r, method="rank-biserial r = 2U/(n1 n2) - 1 (Kerby, 2014)"),),
-        groups=(_median_summary(category_text(levels[0]), a), _median_summary(category_text(levels[1]), b)),
+        groups=(summaries := (_median_summary(category_text(levels[0]), a), _median_summary(category_text(levels[1]), b))),
+        precision=score_precision((a, b), summaries),
         variables=c.variables({"outcome": outcome, "group": group}, labels),
         notes=c.notes(Note("method", f"p from the {_WORDS[method]}; U is that of {category_text(levels[0])}."), missing),
         details={"method": _WORDS[method]},
@@ -127,7 +144,8 @@ def wilcoxon_signed_rank(
         alternative=alternative,  # type: ignore[arg-type]
         n=len(nz),
         effects=(EffectSize("r_rb", (w_plus - w_minus) / (w_plus + w_minus), method="matched-pairs rank-biserial r (Kerby, 2014)"),),
-        groups=(_median_summary(labels.get(first, first), a), _median_summary(labels.get(second, second), b)),
+        groups=(summaries := (_median_summary(labels.get(first, first), a), _median_summary(labels.get(second, second), b))),
+        precision=score_precision((a, b), summaries),
         variables=variables,
         notes=c.notes(
             Note("method", f"p from the {_WORDS[method]}; {dropped} zero difference(s) dropped."),
@@ -159,7 +177,8 @@ def kruskal_wallis(
         p=float(res.pvalue),
         n=n,
         effects=(EffectSize("epsilon2", h * (n + 1) / (n * n - 1), method="H(n + 1)/(n^2 - 1) (Tomczak & Tomczak, 2014)"),),
-        groups=tuple(_median_summary(category_text(lev), v) for lev, v in zip(levels, samples)),
+        groups=(summaries := tuple(_median_summary(category_text(lev), v) for lev, v in zip(levels, samples))),
+        precision=score_precision(samples, summaries),
         variables=c.variables({"outcome": outcome, "group": group}, labels),
         notes=c.notes(Note("method", "p from the chi-square approximation, corrected for ties."), missing),
         details={"method": "chi-square approximation"},

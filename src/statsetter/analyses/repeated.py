@@ -147,6 +147,8 @@ def friedman(df: "pd.DataFrame", columns: Sequence[str], *, outcome_label: str |
     n, k = len(arrays[0]), len(arrays)
     if n < 2:
         raise InputError(f"{', '.join(columns)}: {n} complete row(s); Friedman's test needs at least two people")
+    from .ranks import score_precision
+
     res = stats.friedmanchisquare(*arrays)
     chi2 = float(res.statistic)
     named = dict(labels or {})
@@ -159,6 +161,7 @@ def friedman(df: "pd.DataFrame", columns: Sequence[str], *, outcome_label: str |
         n=n,
         effects=(EffectSize("kendall_w", chi2 / (n * (k - 1)), method="Kendall's W = chi2 / (n(k - 1)) (Tomczak & Tomczak, 2014)"),),
         groups=groups,
+        precision=score_precision(arrays, groups),
         variables=c.measured_variables(columns, labels, outcome_label),
         notes=c.notes(Note("method", "Friedman's test, ranks within each person corrected for ties, chi-square approximation."), missing),
         details={"k": k},

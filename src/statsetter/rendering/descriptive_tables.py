@@ -68,16 +68,28 @@ class _Layout:
         shown = self.num.number(spread, "SD") if spread == spread else "—"  # one value: no SD
         return StyledText(f"{self.num.number(centre, 'M')} ({shown})")
 
-    def quartiles(self, v: "VariableSummary", j: int) -> StyledText:
+    def quartiles(self, v: "VariableSummary", j: int, decimals: int | None = None) -> StyledText:
         assert v.median is not None and v.q1 is not None and v.q3 is not None
         if v.median[j] != v.median[j]:
             return StyledText("—")
         if v.positions:
             names = v.categories
             return StyledText(f"{names[int(v.median[j])]} ({names[int(v.q1[j])]}–{names[int(v.q3[j])]})")
-        q1, q3 = self.num.number(v.q1[j], "Mdn"), self.num.number(v.q3[j], "Mdn")
+        q1, q3 = self.num.number(v.q1[j], "Mdn", decimals), self.num.number(v.q3[j], "Mdn", decimals)
         inner = f"{q1}{self.sep}{self.nb}{q3}" if v.q1[j] < 0 else f"{q1}–{q3}"
-        return StyledText(f"{self.num.number(v.median[j], 'Mdn')} ({inner})")
+        return StyledText(f"{self.num.number(v.median[j], 'Mdn', decimals)} ({inner})")
+
+    def scored_decimals(self, v: "VariableSummary") -> int | None:
+        """The decimals an ordinal variable's quartiles have, when fewer than the style's: scores in whole numbers
+        have whole, half or quarter quartiles (by interpolation between two scores), so "2 (2–3)" or "2.5 (2.0–3.0)"
+        where "2.00 (2.00–3.00)" would print digits the data do not have; the same for every column of the row."""
+        if v.kind != "ordinal" or v.positions or v.median is None or v.q1 is None or v.q3 is None:
+            return None
+        values = [float(x) for a in (v.median, v.q1, v.q3) for x in a if x == x]
+        for decimals, step in ((0, 1.0), (1, 0.5)):
+            if values and all((x / step).is_integer() for x in values):
+                return min(decimals, self.num.decimals_for("Mdn"))
+        return None
 
     def span(self, v: "VariableSummary", j: int) -> StyledText:
         assert v.minimum is not None and v.maximum is not None
@@ -125,7 +137,8 @@ class _Layout:
             first = False
         if v.kind == "ordinal" or "median_iqr" in v.show:
             what = f"{self.sym('Mdn')} ({self.sym('IQR')})"
-            cells = [self.quartiles(v, j) for j in range(self.groups)]
+            decimals = self.scored_decimals(v)
+            cells = [self.quartiles(v, j, decimals) for j in range(self.groups)]
             label = self.stub(v, what) if first else StyledText.from_markup(what)
             rows.append(Row(label, tuple(cells + self.extra(v, first)), indent=0 if first else 1))
             first = False
