@@ -223,3 +223,16 @@ def test_logistic_models_side_by_side_and_the_styles_pseudo_r2(penguins):
     rows = {r.stub.text: [c.text for c in r.cells] for r in mcfadden.rows}
     assert rows["McFadden R2"][4] == num.number(ref_big.prsquared, "R2_mcfadden")
     assert "McFadden R² = " in render(big[0], "stats", load_style(_style_file("[wording]\npseudo_r2 = \"mcfadden\"\n"))).plain()
+
+
+def test_a_small_coefficient_has_its_se_with_the_same_decimals():
+    # read aloud: "B = −0.001, 95% CI [−0.297, 0.295], SE = 0.15" mixed decimals within one coefficient; like values
+    # alike (APA 7 §6.36, memory): the SE takes the decimals the small B was given. pingouin's tips, tip on total
+    # bill, party size, sex and time; B and SE of time (Lunch) from statsmodels' OLS on the same model.
+    tips = pg.read_dataset("tips")
+    fit = smf.ols("tip ~ total_bill + size + C(sex) + C(time)", data=tips).fit()
+    b, se = fit.params["C(time)[T.Lunch]"], fit.bse["C(time)[T.Lunch]"]
+    assert round(b, 3) == -0.001 and round(se, 3) == 0.150
+    records = linear_regression(tips, "tip", ["total_bill", "size", "sex", "time"])
+    lunch = next(r for r in records if r.details.get("category") == "Lunch")
+    assert "B = −0.001, 95% CI [−0.297, 0.295], SE = 0.150, β = .00" in render(lunch, "sentence", "apa7").plain()

@@ -122,7 +122,7 @@ class Helpers:
         self._ci_pattern = self._ci_pattern.replace(" ", nb)
         self._ci_pattern_neg = self._ci_pattern_neg.replace(" ", nb)
 
-    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est desc cat count pct number df compatible paren".split()
+    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est se desc cat count pct number df compatible paren".split()
     _PLAIN = "var var_list cap verdict significant direction_word null and_next predictors pseudo_r2".split()
 
     def raw(self) -> dict[str, Any]:
@@ -261,6 +261,16 @@ class Helpers:
             shown = self.num.shown_decimals(e.value, q, _held(r, "estimate.value"))
             out += self._ci_attach + self._ci(r, e.ci, q, e.null, "estimate.ci", shown if shown > self.num.decimals_for(q) else None)
         return out
+
+    def se(self, r: Result, quantity: str = "B") -> str:
+        """``SE = 0.15``: the estimate's standard error, with the estimate's decimals where a small estimate was given
+        more than the style's (B = −0.001, SE = 0.151: like values alike, APA 7 §6.36); "" without one."""
+        e = r.estimate
+        if e is None or e.se is None:
+            return ""
+        shown = self.num.shown_decimals(e.value, quantity, _held(r, "estimate.value"))
+        wider = shown if shown > self.num.decimals_for(quantity) else None
+        return f"{self.sym('SE')}{self._eq}{self.num.number(e.se, 'SE', wider, held=_held(r, 'estimate.se'))}"
 
     def pseudo_r2(self) -> str:
         """The pseudo-R² a logistic model reports in this style: R2_nagelkerke or R2_mcfadden."""
