@@ -59,7 +59,7 @@ def _md_cell(text: str) -> str:
 
 
 def table_html(t: TableModel, one_line: bool = False) -> str:
-    out = ['<div class="statsetter-table">']
+    out = ['<div class="statsetter-table" style="overflow-x:auto">']  # a table wider than the window scrolls inside its box
     out.append('<table style="border-collapse:collapse;border-top:1px solid black;border-bottom:1px solid black">')
     if t.number is not None or t.title:  # number and title above the table, flush left (APA 7 §7.7), as its caption
         if one_line:
