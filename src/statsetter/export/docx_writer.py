@@ -230,7 +230,7 @@ def _least_and_natural(table: TableModel, shapes: "list[_Column]") -> tuple[list
     longest = [0] * ncols  # the longest word
     natural = [0] * ncols  # the longest text, unwrapped
     def plain(t: StyledText) -> str:
-        return t.text.replace(_SOFT, ", ")
+        return _soft_text(t.text)
 
     stub_rows = [("\u2003" * r.indent) + plain(r.stub).translate(_SHAPE) for r in table.rows]  # widths by shape (digits as 0s)
     for j, texts in enumerate([[plain(table.stub_head), *stub_rows]] + [[plain(c.head)] for c in table.columns]):
@@ -298,16 +298,23 @@ def _split_plain(text: str, mark: str) -> tuple[str, str]:
 
 
 _SHAPE = DIGITS_AS_ZERO  # every digit is half an em wide: a cell's width depends on its shape only
-# A no-break space after a comma (between an interval's limits, "[.79, .84]", or two df) is written into a Word table as
-# a plain space: a narrow column may wrap there, and widths are measured so. The others (after "<" or "=", inside
-# "(n = 44)") hold: Word and LibreOffice never break at them, and would break a number instead when the column is
-# narrower than the piece they hold together, so they are measured whole.
-_SOFT = ",\u00a0"
+# A no-break space after a comma (between an interval's limits, "[.79, .84]", or two df) or before the "to" of a range
+# (AMA's "−0.36 to 0.21") is written into a Word table as a plain space: a narrow column may wrap there ("−0.36" /
+# "to 0.21"), and widths are measured so. The others (after "<" or "=", inside "(n = 44)") hold: Word and LibreOffice
+# never break at them, and would break a number instead when the column is narrower than the piece they hold
+# together, so they are measured whole.
+_SOFT = re.compile(",\u00a0|\u00a0(?=to\u00a0)")
+
+
+def _soft_text(text: str) -> str:
+    """``text`` with its soft no-break spaces (``_SOFT``) plain ones: the same length."""
+    return _SOFT.sub(lambda m: m.group().replace("\u00a0", " "), text) if "\u00a0" in text else text
 
 
 def _softened(text: StyledText) -> StyledText:
-    """``text`` with each no-break space after a comma a plain space (``_SOFT``; the same length, spans kept)."""
-    return StyledText(text.text.replace(_SOFT, ", "), text.spans) if _SOFT in text.text else text
+    """``text`` with its soft no-break spaces plain ones (``_soft_text``; the same length, so its spans hold)."""
+    soft = _soft_text(text.text)
+    return StyledText(soft, text.spans) if soft != text.text else text
 
 
 class _Column(NamedTuple):
@@ -317,7 +324,7 @@ class _Column(NamedTuple):
     styled: list[StyledText]  # its cells with italics, superscripts or subscripts
     safe: bool  # no plain cell needs escaping or cleaning (``_NEEDS_CARE``)
     padded: bool  # some plain cell may start or end with white space Word would drop (``_t_open``)
-    soft: bool  # some cell holds a no-break space after a comma, written as a plain space (``_SOFT``)
+    soft: bool  # some cell holds a soft no-break space, written as a plain one (``_SOFT``)
 
 
 def _body_shapes(table: TableModel) -> list[_Column]:
@@ -334,17 +341,17 @@ def _body_shapes(table: TableModel) -> list[_Column]:
         else:
             shapes = {t.translate(_SHAPE) for t in texts}
             padded = any(_t_open(t) != "<w:t>" for t in texts)
-        out.append(_Column(shapes, styled, _NEEDS_CARE.search(joined) is None, padded, _SOFT in joined or any(_SOFT in c.text for c in styled)))
+        out.append(_Column(shapes, styled, _NEEDS_CARE.search(joined) is None, padded, _SOFT.search(joined) is not None or any(_SOFT.search(c.text) for c in styled)))
     return out
 
 
 @functools.lru_cache(maxsize=1 << 12)
 def _measure_shape(shape: str, mark: str) -> tuple[int, int, int, int]:
     """A plain body cell's shape in twips: its width and its longest unbreakable
-    piece (a no-break space after a comma is written as a space, ``_SOFT``;
+    piece (a soft no-break space is written as a plain one, ``_SOFT``;
     the others hold as Word and LibreOffice hold them), and the widths before
     and from its decimal ``mark`` as typed."""
-    shown = shape.replace(_SOFT, ", ")
+    shown = _soft_text(shape)
     a, b = _split_plain(shape, mark)
     return _chars(shown), _longest_word(shown), _chars(a), _chars(b)
 
@@ -461,7 +468,7 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         if plain_safe and len(cells) == ncols and not any(cells[k].spans or cells[k].text.strip() in _DASHES for k in careful):
             row_xml = templates[bottom][:]
             row_xml[1] = stub_xml
-            row_xml[3:-1:2] = [c.text.replace(_SOFT, ", ") if k in soft else c.text for k, c in enumerate(cells)] if soft else [c.text for c in cells]
+            row_xml[3:-1:2] = [_soft_text(c.text) if k in soft else c.text for k, c in enumerate(cells)] if soft else [c.text for c in cells]
             out.write("".join(row_xml).encode())
             continue
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
