@@ -344,7 +344,7 @@ def test_a_table_too_wide_for_the_page_is_set_on_landscape_pages(tmp_path):
     # its portrait pages and the page numbers run on. Checked as rendered: page sizes (pdfinfo) and text (pdftotext).
     wide = _species_by_island()
     narrow = table(EXAMPLES["t_independent"], "apa7")
-    with pytest.warns(UserWarning, match=r"Table 1 is set on landscape pages: its columns need \d+\.\d in, the page's text is 6\.5 in"):
+    with pytest.warns(UserWarning, match=r"Table 1 is set on landscape pages: its columns need \d+\.\d in at the least and \d+\.\d in unwrapped; the page's text is 6\.5 in"):
         document = results_document([StyledText("Text before the wide table. " * 30), wide, StyledText("Text after the wide table. " * 30), narrow],
                                     "apa7", title="Results")
     path = save_document(document, tmp_path / "mixed.docx")

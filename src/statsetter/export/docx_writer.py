@@ -155,7 +155,10 @@ _DECIMAL_TAB = '<w:tabs><w:tab w:val="decimal" w:pos="{pos}"/></w:tabs>'
 # Times or Calibri is about half an em wide; digits are exactly that. The
 # estimate errs wide so that no word breaks inside itself in Word or LibreOffice.
 _MARGIN = 100  # each cell's left and right margin, set in the table so that Word and LibreOffice agree
-_PAD = 2 * 144  # both cell margins, as LibreOffice's default (0.1 inch) in case it ignores the table's own
+# both cell margins as LibreOffice's default (0.1 inch), wider than the table's own: the slack keeps numbers whole in an
+# author's chapter set in a wider font than the Times-like advances ``_chars`` assumes (with the table's own 2 × 100,
+# the demo's chapter in DejaVu Sans broke "7.95" as "7" / ".95": tried and reverted)
+_PAD = 2 * 144
 _HANG = 240  # continuation lines of a wrapped stub label are indented this much
 TEXT_WIDTH = 8640  # 6 inches: python-docx's default page (8.5 in less 1.25 in margins)
 
@@ -571,12 +574,13 @@ def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH,
     width = pages.text_width(section) if section is not None else text_width
     wide = pages.text_width(section, landscape=True) if section is not None else width
     name = f"Table {table.number}" if table.number is not None else "A table"
-    # (the least widths are over-estimated by a tenth, ``_chars``: within that, ``_fit`` shrinks the columns alike and
-    # every word still fits; beyond it, the page is turned)
-    turn = least > width * 1.1 and wide > width
+    # turned when the least widths exceed the page's text beyond the tenth ``_chars`` over-estimates them by (within
+    # it, ``_fit`` shrinks the columns alike and every word still fits), or when the table's natural width is more than
+    # 1.6 times the text: in portrait most of its cells would wrap (a Table 1 of five groups, its stub on eight lines)
+    turn = (least > width * 1.1 or sum(want) > width * 1.6) and wide > width
     if turn:
-        warnings.warn(f"{name} is set on landscape pages: its columns need {least / 1440:.1f} in, the page's text is "
-                      f"{width / 1440:.1f} in wide", stacklevel=2)
+        warnings.warn(f"{name} is set on landscape pages: its columns need {least / 1440:.1f} in at the least and "
+                      f"{sum(want) / 1440:.1f} in unwrapped; the page's text is {width / 1440:.1f} in wide", stacklevel=2)
         width = wide
     if least > width * 1.1:
         warnings.warn(f"{name} is wider than the {'landscape ' if turn else ''}page's text ({least / 1440:.1f} in against "
