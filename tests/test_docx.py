@@ -388,3 +388,20 @@ def test_two_wide_tables_in_a_row_leave_no_empty_page_between(tmp_path):
     pages = _pdf_pages(save_document(document, tmp_path / "two.docx"))
     assert all(text.split() != [str(k + 1)] for k, (_, text) in enumerate(pages))  # no page with only its number
     assert [landscape for landscape, _ in pages] == [False, True, True, False]
+
+
+def test_a_long_stub_label_does_not_turn_the_page():
+    # a questionnaire item as a variable's label is meant to wrap in the stub: its unwrapped width must not count
+    # towards turning a table that fits (pingouin's penguins by species, three groups)
+    import warnings
+
+    from statsetter.analyses import describe
+
+    import pingouin as pg
+
+    item = "I felt tired during my shift even after a full night's sleep and a rest break, on most days of the week"
+    t = table(describe(pg.read_dataset("penguins"), ["bill_length_mm", "sex"], group="species", labels={"bill_length_mm": item}).main, "apa7")
+    with warnings.catch_warnings(record=True) as said:
+        warnings.simplefilter("always")
+        document = results_document([t], "apa7")
+    assert [str(w.message) for w in said] == [] and 'w:orient="landscape"' not in document.element.xml

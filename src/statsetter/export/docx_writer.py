@@ -575,9 +575,9 @@ def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH,
     wide = pages.text_width(section, landscape=True) if section is not None else width
     name = f"Table {table.number}" if table.number is not None else "A table"
     # turned when the least widths exceed the page's text beyond the tenth ``_chars`` over-estimates them by (within
-    # it, ``_fit`` shrinks the columns alike and every word still fits), or when the table's natural width is more than
-    # 1.6 times the text: in portrait most of its cells would wrap (a Table 1 of five groups, its stub on eight lines)
-    turn = (least > width * 1.1 or sum(want) > width * 1.6) and wide > width
+    # it, ``_fit`` shrinks the columns alike and every word still fits), or when its columns' natural width (the stub's
+    # least: long labels are meant to wrap) is more than 1.6 times the text: in portrait most of its cells would wrap
+    turn = (least > width * 1.1 or low[0] + sum(want[1:]) > width * 1.6) and wide > width
     if turn:
         warnings.warn(f"{name} is set on landscape pages: its columns need {least / 1440:.1f} in at the least and "
                       f"{sum(want) / 1440:.1f} in unwrapped; the page's text is {width / 1440:.1f} in wide", stacklevel=2)
