@@ -14,7 +14,6 @@ with every title and a number of every table found in its text.
 from __future__ import annotations
 
 import os
-import re
 from pathlib import Path
 
 import pingouin as pg
@@ -140,23 +139,29 @@ def test_every_table_kind_in_word_opens_in_libreoffice(penguins, style_name, tmp
     # every number and every word of four letters or more whole as LibreOffice sets it (issue: the ANOVA tables' CIs,
     # "[.79, .84]", had been measured as if a line could break before ".84"; Unicode's line breaking (UAX #14, LB13)
     # keeps a point with what comes before, so LibreOffice broke the number instead: "[.79, ." / "84]")
-    shown = text.split()
-    pieces = {n for t in made for row in t.rows for c in (row.stub, *row.cells) for n in re.findall(r"[A-Za-z]{4,}|\.?\d[\d,.]*\d", c.plain())}
-    assert pieces and sorted(n for n in pieces if not any(n in word for word in shown)) == []
+    from test_docx import broken
+
+    assert broken([c.plain() for t in made for row in t.rows for c in (row.stub, *row.cells)], text.split(), words=True) == []
 
 
-def test_every_latex_golden_compiles(tmp_path):
-    # the LaTeX goldens, both styles, in one document with statsetter's preamble: pdflatex must finish without
-    # an error and without an overfull line (a too-wide table is scaled to the line); CI installs pdflatex
+def _require_pdflatex() -> None:
+    """pdflatex, or the test fails in CI (.ci/run installs it) and is skipped elsewhere."""
     import shutil
-    import subprocess
-
-    from statsetter.styled import LATEX_PREAMBLE
 
     if shutil.which("pdflatex") is None:
         if os.environ.get("CI"):
             pytest.fail("pdflatex is required in CI; .ci/run installs it")
         pytest.skip("pdflatex not installed")
+
+
+def test_every_latex_golden_compiles(tmp_path):
+    # the LaTeX goldens, both styles, in one document with statsetter's preamble: pdflatex must finish without
+    # an error and without an overfull line (a too-wide table is scaled to the line); CI installs pdflatex
+    import subprocess
+
+    from statsetter.styled import LATEX_PREAMBLE
+
+    _require_pdflatex()
     body = "\n\\clearpage\n".join(p.read_text(encoding="utf-8") for p in sorted(GOLDEN.glob("*.tex")))
     (tmp_path / "all.tex").write_text("\\documentclass{article}\n\\usepackage[margin=1in]{geometry}\n" + LATEX_PREAMBLE
                                       + "\\begin{document}\n" + body + "\n\\end{document}\n", encoding="utf-8")
@@ -172,16 +177,12 @@ def test_a_table_far_wider_than_the_page_is_turned_in_latex_too(tmp_path):
     # warning), its stub wrapping, at full size; it compiles with pdflatex without an overfull line on A4 and US Letter
     # at 12 pt, and every number of it is in the PDF's text. (A table only a little too wide — the regression golden —
     # stays in portrait, scaled by a few per cent.)
-    import shutil
     import subprocess
 
     from statsetter.styled import LATEX_PREAMBLE
-    from test_docx import _species_by_island
+    from test_docx import _species_by_island, broken
 
-    if shutil.which("pdflatex") is None:
-        if os.environ.get("CI"):
-            pytest.fail("pdflatex is required in CI; .ci/run installs it")
-        pytest.skip("pdflatex not installed")
+    _require_pdflatex()
     wide = _species_by_island().with_number(1)
     with pytest.warns(UserWarning, match=r"Table 1 is set on a landscape page \(sidewaystable\): its columns need \d+\.\d in"):
         tex = write_table(wide, "tex", load_style("apa7"))
@@ -195,23 +196,18 @@ def test_a_table_far_wider_than_the_page_is_turned_in_latex_too(tmp_path):
         assert done.returncode == 0, done.stdout[-2000:]
         assert "Overfull \\hbox" not in (tmp_path / "wide.log").read_text(encoding="latin-1"), paper
         shown = subprocess.run(["pdftotext", str(tmp_path / "wide.pdf"), "-"], capture_output=True, text=True, check=True).stdout.split()
-        numbers = {n for row in wide.rows for c in row.cells for n in re.findall(r"\d[\d,.]*\d|\d", c.plain())}
-        assert numbers and {n for n in numbers if not any(n in word for word in shown)} == set(), paper
+        assert broken([c.plain() for row in wide.rows for c in row.cells], shown) == [], paper
 
 
 def test_a_row_label_that_starts_with_a_bracket_compiles(tmp_path):
     # found by a fuzz of Table 1 labels: a stub starting with "[" right after a row's "\\" or a rule was read as their
     # optional length ("! Missing number, treated as zero") and pdflatex stopped; labels such as "[R] item 4" are typed
-    import shutil
     import subprocess
 
     from statsetter.analyses import describe
     from statsetter.styled import LATEX_PREAMBLE
 
-    if shutil.which("pdflatex") is None:
-        if os.environ.get("CI"):
-            pytest.fail("pdflatex is required in CI; .ci/run installs it")
-        pytest.skip("pdflatex not installed")
+    _require_pdflatex()
     d = pg.read_dataset("penguins")
     t = table(describe(d, ["bill_length_mm", "sex"], group="species", labels={"bill_length_mm": "[R] bill length (mm)", "sex": "[sex]"}).main,
               "apa7")

@@ -26,18 +26,17 @@ def _median_summary(label: str, v: "np.ndarray") -> GroupSummary:
 
 def score_precision(samples: "Sequence[np.ndarray]", groups: "Sequence[GroupSummary]") -> dict[str, int]:
     """Held decimals for the groups' medians and quartiles when every value is a whole number (a score, a rating, a
-    count): such medians are whole or halves and such quartiles whole, halves or quarters, so "Mdn = 6" where the
-    style's "6.00" would print digits the data do not have — 0 decimals when all of them are whole, 1 when all are
-    whole or halves, as Table 1 prints an ordinal row (``descriptive_tables``); the same for every group."""
+    count): ``score_decimals`` of them all, as Table 1 prints an ordinal row; the same for every group."""
     import numpy as np
+
+    from ..style.numbers import score_decimals
 
     if not samples or not all(len(v) and np.array_equal(v, np.floor(v)) for v in samples):
         return {}
-    values = [x for g in groups for x in (g.median, g.q1, g.q3) if x is not None]
-    for decimals, step in ((0, 1.0), (1, 0.5)):
-        if values and all((x / step).is_integer() for x in values):
-            return {f"groups[{i}].{name}": decimals for i in range(len(groups)) for name in ("median", "q1", "q3")}
-    return {}
+    decimals = score_decimals(x for g in groups for x in (g.median, g.q1, g.q3) if x is not None)
+    if decimals is None:
+        return {}
+    return {f"groups[{i}].{name}": decimals for i in range(len(groups)) for name in ("median", "q1", "q3")}
 
 
 def _two_groups(df: "pd.DataFrame", outcome: str, group: str, groups: Sequence[object] | None, test: str):  # type: ignore[no-untyped-def]

@@ -232,11 +232,8 @@ def _least_and_natural(table: TableModel, shapes: "list[_Column]") -> tuple[list
     ncols = len(table.columns) + 1
     longest = [0] * ncols  # the longest word
     natural = [0] * ncols  # the longest text, unwrapped
-    def plain(t: StyledText) -> str:
-        return _soft_text(t.text)
-
-    stub_rows = [("\u2003" * r.indent) + plain(r.stub).translate(_SHAPE) for r in table.rows]  # widths by shape (digits as 0s)
-    for j, texts in enumerate([[plain(table.stub_head), *stub_rows]] + [[plain(c.head)] for c in table.columns]):
+    stub_rows = [("\u2003" * r.indent) + _soft_text(r.stub.text).translate(_SHAPE) for r in table.rows]  # widths by shape (digits as 0s)
+    for j, texts in enumerate([[_soft_text(table.stub_head.text), *stub_rows]] + [[_soft_text(c.head.text)] for c in table.columns]):
         for i, text in enumerate(texts):
             word = _longest_word(text)
             lead = _chars(text) - _chars(text.lstrip("\u2003")) if j == 0 and text.startswith("\u2003") else 0
@@ -247,7 +244,7 @@ def _least_and_natural(table: TableModel, shapes: "list[_Column]") -> tuple[list
             if whole > natural[j]:
                 natural[j] = whole
     for j, (distinct, styled, *_) in enumerate(shapes, 1):  # the body: each shape measured once
-        for whole, word in [_measure_shape(shape, "")[:2] for shape in distinct] + [(_chars(t), _longest_word(t)) for t in (plain(c) for c in styled)]:
+        for whole, word in [_measure_shape(shape, "")[:2] for shape in distinct] + [(_chars(t), _longest_word(t)) for t in (_soft_text(c.text) for c in styled)]:
             if word > longest[j]:
                 longest[j] = word
             if whole > natural[j]:

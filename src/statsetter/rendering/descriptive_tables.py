@@ -80,16 +80,14 @@ class _Layout:
         return StyledText(f"{self.num.number(v.median[j], 'Mdn', decimals)} ({inner})")
 
     def scored_decimals(self, v: "VariableSummary") -> int | None:
-        """The decimals an ordinal variable's quartiles have, when fewer than the style's: scores in whole numbers
-        have whole, half or quarter quartiles (by interpolation between two scores), so "2 (2–3)" or "2.5 (2.0–3.0)"
-        where "2.00 (2.00–3.00)" would print digits the data do not have; the same for every column of the row."""
+        """The decimals an ordinal variable's quartiles have (``score_decimals``), when fewer than the style's: "2 (2–3)"
+        or "2.5 (2.0–3.0)"; the same for every column of the row."""
+        from ..style.numbers import score_decimals
+
         if v.kind != "ordinal" or v.positions or v.median is None or v.q1 is None or v.q3 is None:
             return None
-        values = [float(x) for a in (v.median, v.q1, v.q3) for x in a if x == x]
-        for decimals, step in ((0, 1.0), (1, 0.5)):
-            if values and all((x / step).is_integer() for x in values):
-                return min(decimals, self.num.decimals_for("Mdn"))
-        return None
+        decimals = score_decimals(x for a in (v.median, v.q1, v.q3) for x in a)
+        return None if decimals is None else min(decimals, self.num.decimals_for("Mdn"))
 
     def span(self, v: "VariableSummary", j: int) -> StyledText:
         assert v.minimum is not None and v.maximum is not None

@@ -19,7 +19,7 @@ from __future__ import annotations
 
 from decimal import ROUND_HALF_UP, Context, Decimal
 from functools import lru_cache
-from typing import Literal
+from typing import Iterable, Literal
 
 from .profile import Style
 
@@ -29,6 +29,17 @@ _CTX = Context(prec=400, rounding=ROUND_HALF_UP)  # every float to 40 decimals, 
 _QUANTUM = [Decimal(1).scaleb(-k) for k in range(0, 40)]
 _MAX_DECIMALS = 30
 _NEVER_ZERO_MAX = 12  # digits added for a never-zero quantity stop here (a value below 1e-12 is rescaled by the author)
+
+
+def score_decimals(values: "Iterable[float]") -> int | None:
+    """The decimals that medians and quartiles of whole-number scores have: 0 when all are whole, 1 when all are whole
+    or halves (by interpolation between two scores), None otherwise or without values — so "2 (2–3)" or "Mdn = 6"
+    where a style's "2.00" would print digits the data do not have."""
+    found = [float(x) for x in values if x == x]
+    for decimals, step in ((0, 1.0), (1, 0.5)):
+        if found and all((x / step).is_integer() for x in found):
+            return decimals
+    return None
 
 
 def round_half_up(value: float, decimals: int) -> Decimal:
