@@ -109,3 +109,59 @@ def test_two_factor_ancova_refuses_an_empty_cell():
     d = pg.read_dataset("penguins")
     with pytest.raises(InputError, match="the cell Gentoo × male has no cases"):
         ancova(d[~((d.species == "Gentoo") & (d.sex == "male"))], "body_mass_g", ["species", "sex"], ["flipper_length_mm"])
+
+
+def _exact_rss(columns, y):
+    """The residual sum of squares of y on an intercept and ``columns``, in exact rational arithmetic (every double is a
+    fraction): the normal equations solved by Gauss–Jordan elimination over fractions."""
+    from fractions import Fraction
+
+    import numpy as np
+
+    x = [[Fraction(v) for v in row] for row in np.column_stack([np.ones(len(y)), *columns]).tolist()]
+    yy = [Fraction(v) for v in y.tolist()]
+    p = len(x[0])
+    a = [[sum(r[i] * r[j] for r in x) for j in range(p)] + [sum(r[i] * v for r, v in zip(x, yy))] for i in range(p)]
+    for i in range(p):
+        for k in range(p):
+            if k != i and a[k][i]:
+                f = a[k][i] / a[i][i]
+                a[k] = [u - f * w for u, w in zip(a[k], a[i])]
+    b = [a[i][p] / a[i][i] for i in range(p)]
+    return sum((v - sum(c * w for c, w in zip(row, b))) ** 2 for row, v in zip(x, yy))
+
+
+def test_type2_sums_of_squares_equal_exact_arithmetic():
+    """Type II sums of squares (each term's fall in the residual sum of squares, as R's car::Anova defines them) on
+    pingouin's penguins, body mass by species × sex with flipper length and bill depth, against the same differences
+    computed exactly in fractions: within 2e-14 of them (measured: 1e-15 to 6e-15; statsmodels' anova_lm, used before,
+    was 4e-14 to 1.2e-13 off)."""
+    import pandas as pd
+
+    d = pg.read_dataset("penguins").dropna(subset=["body_mass_g", "species", "sex", "flipper_length_mm", "bill_depth_mm"])
+    y = d.body_mass_g.to_numpy(float)
+    species = list(pd.get_dummies(d.species, drop_first=True).to_numpy(float).T)
+    sex = list(pd.get_dummies(d.sex, drop_first=True).to_numpy(float).T)
+    both = [a * b for a in species for b in sex]
+    flipper, depth = d.flipper_length_mm.to_numpy(float), d.bill_depth_mm.to_numpy(float)
+    full = _exact_rss([*species, *sex, *both, flipper, depth], y)
+    exact = {"flipper_length_mm": _exact_rss([*species, *sex, *both, depth], y) - full,
+             "bill_depth_mm": _exact_rss([*species, *sex, *both, flipper], y) - full,
+             "species": _exact_rss([*sex, flipper, depth], y) - _exact_rss([*species, *sex, flipper, depth], y),
+             "species × sex": _exact_rss([*species, *sex, flipper, depth], y) - full}
+    terms = {r.details["term"]: r for r in ancova(d, "body_mass_g", ["species", "sex"], ["flipper_length_mm", "bill_depth_mm"]) if r.kind == "anova_term"}
+    for term, ss in exact.items():
+        assert terms[term].details["ss"] == pytest.approx(float(ss), rel=2e-14, abs=0), term
+    assert terms["species"].details["ss_error"] == pytest.approx(float(full), rel=2e-14, abs=0)
+
+
+def test_slopes_that_cannot_be_tested_are_said(data):
+    """Method B with one pupil (the first nine rows of pingouin's data): B's own slope is not estimable, so the slopes'
+    model adds nothing over one common slope — the note says the test is not possible instead of printing F(0, …) = nan."""
+    import warnings
+
+    with warnings.catch_warnings():
+        warnings.simplefilter("error")
+        term = ancova(data.head(9), "Scores", "Method", ["Income"])[0]
+    note = next(n.text for n in term.notes if n.text.startswith("Homogeneity"))
+    assert "not testable here" in note and "adds 0" in note and "nan" not in note

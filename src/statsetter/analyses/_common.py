@@ -33,36 +33,6 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
     return x
 
 
-def formula_anova(formula: str, frame: "pd.DataFrame", ss_type: int, outcome: str) -> tuple[Any, "pd.DataFrame"]:
-    """statsmodels' OLS fit of ``formula`` and its Type II or III table; data it cannot fit (aliased terms, no error
-    df, a term without variance, values whose squares vanish) refused by name instead of statsmodels' own error or
-    its warning and a table of wrong sums of squares."""
-    import warnings
-
-    import numpy as np
-    from statsmodels.formula.api import ols
-    from statsmodels.stats.anova import anova_lm
-
-    try:
-        with warnings.catch_warnings():  # (a rank-deficient design is warned of; it is refused below, by name)
-            warnings.simplefilter("ignore")
-            fit = ols(formula, data=frame).fit()
-        width = fit.model.exog.shape[1]
-        if fit.model.rank < width:
-            problem = f"its {width} coefficients have rank {fit.model.rank}: a term repeats others"
-        elif fit.df_resid <= 0:
-            problem = f"{int(fit.nobs)} rows for {width} coefficients: no error df"
-        else:
-            table = anova_lm(fit, typ=ss_type)
-            if np.isfinite(table["F"].drop("Residual").to_numpy(dtype=float)).all():
-                return fit, table
-            problem = "an F is not a number: a term or the residuals have no variance in double precision"
-    except (ValueError, np.linalg.LinAlgError) as exc:
-        problem = str(exc).splitlines()[0]
-    raise InputError(f"{outcome}: the model cannot be fitted to these data ({problem}); look for a constant or collinear variable, "
-                     "or values too small to square")
-
-
 def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note]:
     """Rows complete on ``names``, and a note saying how many were dropped."""
     import numpy as np

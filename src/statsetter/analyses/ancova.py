@@ -12,6 +12,9 @@ in a note: when it fails, one common slope misdescribes the data.
 
 from __future__ import annotations
 
+import itertools
+import math
+from collections import Counter
 from typing import TYPE_CHECKING, Literal, Mapping, Sequence
 
 from ..coding import category_text
@@ -19,6 +22,7 @@ from ..errors import InputError
 from ..records import Estimate, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 from .effects import variance_explained
+from .sums_of_squares import Term, added_terms_test, anova_table, coded_factor, design, predictions, product
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -37,8 +41,7 @@ def ancova(
     """``outcome`` by ``factor`` (one name, or two for a factorial design
     with their interaction) adjusted for ``covariates``: one record per
     term, then one adjusted mean per level of the factor (per cell)."""
-    import pandas as pd
-    from statsmodels.formula.api import ols
+    import numpy as np
 
     if ss_type not in (2, 3):
         raise InputError(f"ss_type: {ss_type!r} is not 2 or 3")
@@ -63,67 +66,60 @@ def ancova(
                 if (x, z) not in present.index:
                     raise InputError(f"{factors[0]} × {factors[1]}: the cell {category_text(x)} × {category_text(z)} has no cases; "
                                      "a two-factor ANCOVA with the interaction needs every cell")
-    frame = pd.DataFrame({"y_": data[outcome].astype(float)}, index=data.index)
-    group_names = [f"g{i}_" for i in range(len(factors))]
-    for name, f in zip(group_names, factors):
-        frame[name] = data[f].map(category_text)
-    cov_names = [f"z{i}_" for i in range(len(covariates))]
-    for name, cov in zip(cov_names, covariates):
-        frame[name] = data[cov].astype(float)
-    coding = ", Sum" if ss_type == 3 else ""
-    group_terms = [f"C({g}{coding})" for g in group_names]
-    rhs = " + ".join([" * ".join(group_terms), *cov_names])
-    fit, table = c.formula_anova(f"y_ ~ {rhs}", frame, ss_type, outcome)
-    ss_res, df_res = float(table.loc["Residual", "sum_sq"]), float(table.loc["Residual", "df"])
+    y = data[outcome].to_numpy(dtype=float)
+    group_values = [data[f].map(category_text).to_numpy() for f in factors]
+    group_levels = [[category_text(v) for v in levels] for levels in levels_of]
+    groups = [coded_factor(f"g{i}", values, levels, ss_type == 3) for i, (values, levels) in enumerate(zip(group_values, group_levels))]
+    covariate_values = [data[cov].to_numpy(dtype=float) for cov in covariates]
+    slopes = [Term(f"z{i}", frozenset([f"z{i}"]), values[:, None]) for i, values in enumerate(covariate_values)]
+    model = [*groups, *([product(*groups)] if len(groups) == 2 else []), *slopes]
+    table = anova_table(y, model, ss_type, outcome)
+    ss_res, df_res = table.ss_error, float(table.df_error)
     # homogeneity of regression slopes: each factor's products with each covariate added
-    full = ols(f"y_ ~ {rhs} + " + " + ".join(f"{g}:{z}" for g in group_terms for z in cov_names), data=frame).fit()
-    f_slopes, p_slopes, df_slopes = full.compare_f_test(fit)
+    f_slopes, df_slopes, df_full, p_slopes = added_terms_test(y, table, model, [product(g, z) for g in groups for z in slopes])
     named = dict(labels or {})
     shown = {name: named.get(name, name) for name in (*factors, *covariates)}
     both = " × ".join(shown[f] for f in factors)
-    slopes_note = Note("assumption", f"Homogeneity of regression slopes ({both} × covariates): F({df_slopes:g}, {full.df_resid:g}) = "
-                                     f"{f_slopes:.4g}, p = {p_slopes:.4g}" + (" — the slopes differ between groups; one common slope misdescribes "
-                                                                               "the data." if p_slopes < 0.05 else "."))
+    if math.isnan(p_slopes):  # the slopes' model leaves no error df (or adds nothing): no test
+        slopes_note = Note("assumption", f"Homogeneity of regression slopes ({both} × covariates): not testable here — the model with "
+                                         f"group-specific slopes leaves {df_full} error df and adds {df_slopes}; check the slopes by plotting them.")
+    else:
+        slopes_note = Note("assumption", f"Homogeneity of regression slopes ({both} × covariates): F({df_slopes}, {df_full}) = {f_slopes:.4g}, "
+                                         f"p = {p_slopes:.4g}" + (" — the slopes differ between groups; one common slope misdescribes the data."
+                                                                  if p_slopes < 0.05 else "."))
     ss_note = Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else "."))
     variables = (Variable(outcome, named.get(outcome, outcome), "outcome"), *(Variable(f, shown[f], "factor") for f in factors),
                  *(Variable(cov, shown[cov], "covariate") for cov in covariates))
-    prov = c.provenance("statsetter.analyses.ancova", statsmodels=True)
-    terms = [(t, shown[f], False) for t, f in zip(group_terms, factors)]
-    if len(factors) == 2:
-        terms.append((":".join(group_terms), both, True))
-    terms += [(z, shown[cov], False) for z, cov in zip(cov_names, covariates)]
+    prov = c.provenance("statsetter.analyses.ancova")
+    term_labels = [*(shown[f] for f in factors), *([both] if len(factors) == 2 else []), *(shown[cov] for cov in covariates)]
     out = []
-    for term, label, interaction in terms:
-        row = table.loc[term]
-        ss = float(row["sum_sq"])
+    for term, label in zip(model, term_labels):
+        row = table.rows[term.name]
         out.append(Result(
             kind="anova_term",
-            statistic=Statistic("F", float(row["F"]), (float(row["df"]), df_res)),
-            p=float(row["PR(>F)"]),
-            n=int(fit.nobs),
-            effects=(variance_explained("eta2_p", ss / (ss + ss_res), float(row["F"]), float(row["df"]), df_res, level),),
+            statistic=Statistic("F", row.F, (float(row.df), df_res)),
+            p=row.p,
+            n=table.nobs,
+            effects=(variance_explained("eta2_p", row.ss / (row.ss + ss_res), row.F, float(row.df), df_res, level),),
             variables=variables,
             notes=c.notes(ss_note, slopes_note, missing),
-            details={"term": label, "interaction": interaction, "ss_type": ss_type, "ss": ss, "ss_error": ss_res, "covariate": term in cov_names,
-                     "adjusted_for": ", ".join(shown[cv] for cv in covariates)},
+            details={"term": label, "interaction": len(term.parts) > 1, "ss_type": ss_type, "ss": row.ss, "ss_error": ss_res,
+                     "covariate": term in slopes, "adjusted_for": ", ".join(shown[cv] for cv in covariates)},
             provenance=prov,
         ))
-    means = {z: float(frame[z].mean()) for z in cov_names}
-    from itertools import product
-
-    from collections import Counter
-
-    sizes = Counter(zip(*(frame[g].tolist() for g in group_names)))  # each cell's rows, counted once
-    cells = [cell for cell in product(*[[category_text(v) for v in levels] for levels in levels_of]) if sizes[cell]]
-    grid = pd.DataFrame({**{g: [cell[i] for cell in cells] for i, g in enumerate(group_names)}, **{z: [m] * len(cells) for z, m in means.items()}})
-    predicted = fit.get_prediction(grid).summary_frame(alpha=1 - level)
-    at = ", ".join(f"{shown[cov]}\u00a0=\u00a0{means[z]:.4g}" for z, cov in zip(cov_names, covariates))  # kept on one line
-    for cell, (_, row) in zip(cells, predicted.iterrows()):
+    means = [float(values.mean()) for values in covariate_values]
+    sizes = Counter(zip(*(values.tolist() for values in group_values)))  # each cell's rows, counted once
+    cells = [cell for cell in itertools.product(*group_levels) if sizes[cell]]
+    at_cells = [coded_factor(g.name, np.array([cell[i] for cell in cells], dtype=object), levels, ss_type == 3)
+                for i, (g, levels) in enumerate(zip(groups, group_levels))]
+    at_means = [Term(z.name, z.parts, np.full((len(cells), 1), m)) for z, m in zip(slopes, means)]
+    predicted = predictions(table, design([*at_cells, *([product(*at_cells)] if len(at_cells) == 2 else []), *at_means]), level)
+    at = ", ".join(f"{shown[cov]}\u00a0=\u00a0{m:.4g}" for m, cov in zip(means, covariates))  # kept on one line
+    for cell, (mean, se, low, high) in zip(cells, predicted):
         out.append(Result(
             kind="adjusted_mean",
             n=sizes[cell],
-            estimate=Estimate("adjusted mean", float(row["mean"]), se=float(row["mean_se"]),
-                              ci=Interval(level, float(row["mean_ci_lower"]), float(row["mean_ci_upper"]))),
+            estimate=Estimate("adjusted mean", mean, se=se, ci=Interval(level, low, high)),
             variables=variables,
             notes=c.notes(Note("method", f"Estimated marginal mean at the covariate means ({at})."), missing),
             details={"level": ", ".join(cell), "at": at},

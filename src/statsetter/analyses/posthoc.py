@@ -13,6 +13,7 @@ from ..formulas import adjusted_p, studentized_range_quantile, studentized_range
 from ..records import Estimate, GroupSummary, Interval, Note, Result, Statistic, Variable
 from . import _common as c
 from .effects import d_from_t, hedges_g, variance_explained
+from .sums_of_squares import anova_table, coded_factor, product
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -142,37 +143,37 @@ def factorial_anova(
     in_a, in_b = frame["a_"].to_numpy(), frame["b_"].to_numpy()
     levels_a, levels_b = categories(frame["a_"]), categories(frame["b_"])
     cells = c.cell_groups((category_text(x), category_text(z), y[(in_a == x) & (in_b == z)]) for x in levels_a for z in levels_b)
-    if len(cells) < len(levels_a) * len(levels_b):  # the interaction's terms are not all estimable: statsmodels' F and SS are then wrong
+    if len(cells) < len(levels_a) * len(levels_b):  # the interaction's terms are not all estimable: the cells named
         seen = {cell.label for cell in cells}
         empty = [f"{category_text(x)} × {category_text(z)}" for x in levels_a for z in levels_b if f"{category_text(x)} × {category_text(z)}" not in seen]
         raise InputError(f"{a} × {b}: no case in {', '.join(empty[:4])}{' …' if len(empty) > 4 else ''} ({len(empty)} of {len(levels_a) * len(levels_b)} "
                          "cells empty); a two-way ANOVA with the interaction needs a case in every cell — merge or leave out a level")
     if len(y) <= len(cells):
         raise InputError(f"{outcome}: {len(y)} rows for {len(cells)} cells of {a} × {b}; a two-way ANOVA needs more rows than cells (error df)")
-    coding = ", Sum" if ss_type == 3 else ""
-    fit, table = c.formula_anova(f"y_ ~ C(a_{coding}) * C(b_{coding})", frame, ss_type, outcome)
-    ss_res = float(table.loc["Residual", "sum_sq"])
-    df_res = float(table.loc["Residual", "df"])
-    ss_total = float(((frame["y_"] - frame["y_"].mean()) ** 2).sum())
+    sum_to_zero = ss_type == 3
+    factor_a, factor_b = coded_factor("a", in_a, levels_a, sum_to_zero), coded_factor("b", in_b, levels_b, sum_to_zero)
+    table = anova_table(y, [factor_a, factor_b, product(factor_a, factor_b)], ss_type, outcome)
+    ss_res, df_res = table.ss_error, float(table.df_error)
+    ss_total = float(((y - y.mean()) ** 2).sum())
     labels = labels or {}
     la, lb = labels.get(a, a), labels.get(b, b)
-    names = {f"C(a_{coding})": (la, False), f"C(b_{coding})": (lb, False), f"C(a_{coding}):C(b_{coding})": (f"{la} × {lb}", True)}
+    names = {"a": (la, False), "b": (lb, False), "a:b": (f"{la} × {lb}", True)}
     out = []
     for term, (label, interaction) in names.items():
-        row = table.loc[term]
-        ss = float(row["sum_sq"])
+        row = table.rows[term]
+        ss = row.ss
         out.append(
             Result(
                 kind="anova_term",
-                statistic=Statistic("F", float(row["F"]), (float(row["df"]), df_res)),
-                p=float(row["PR(>F)"]),
-                n=int(fit.nobs),
-                effects=(variance_explained("eta2_p", ss / (ss + ss_res), float(row["F"]), float(row["df"]), df_res, level),),
+                statistic=Statistic("F", row.F, (float(row.df), df_res)),
+                p=row.p,
+                n=table.nobs,
+                effects=(variance_explained("eta2_p", ss / (ss + ss_res), row.F, float(row.df), df_res, level),),
                 variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"), Variable(a, la, "factor"), Variable(b, lb, "factor")),
                 notes=c.notes(Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else ".")), missing),
                 details={"term": label, "interaction": interaction, "ss_type": ss_type, "ss": ss, "ss_error": ss_res, "ss_total": ss_total},
                 groups=cells if interaction else (),
-                provenance=c.provenance("statsetter.analyses.factorial_anova", statsmodels=True),
+                provenance=c.provenance("statsetter.analyses.factorial_anova"),
             )
         )
     return out
