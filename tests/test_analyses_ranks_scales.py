@@ -130,3 +130,37 @@ def test_medians_of_whole_number_scores_print_as_whole_numbers_in_table_and_text
     ratings = pg.read_dataset("rm_anova").dropna(subset=["DesireToKill"])
     said = render(kruskal_wallis(ratings, "DesireToKill", "Region").main, "sentence", "apa7").plain()
     assert all(re.fullmatch(r"\d+\.\d\d", m) for m in re.findall(r"Mdn = ([\d.]+)", said)), said
+
+
+def test_ama_spells_medians_out_as_it_does_means():
+    """AMA 11 spells the statistic out where APA abbreviates it — "Mean (SD)" heads and "mean [SD], 2.83 [1.16]" in
+    sentences (the AMA profile; JMIR's guidelines, which follow AMA, write "mean 19, SD 2") — and its ranges take a
+    hyphen as its CI cells do ("64 (55-72)"; memory). Medians now follow: a Table 1 row "Median (IQR)" with "2 (2-3)",
+    its note defining only the abbreviations the table shows (SD and IQR, not M and Mdn), and "(median, 2; n = 87)" or
+    "(median [IQR], 2 [2-3]; …)" in sentences. Before: "Mdn (IQR)" beside "Mean (SD)", "Mdn = 2" in the text and a note
+    defining M and Mdn, which the table never printed. On pingouin's tips (party size by sex and by day)."""
+    from statsetter import table
+    from statsetter.analyses import describe, friedman
+
+    tips = pg.read_dataset("tips")
+    t = table(describe(tips, ["total_bill", "size"], group="sex", levels={"size": "ordinal"}).main, "ama11")
+    stubs = [r.stub.plain() for r in t.rows]
+    assert stubs[0].endswith("Mean (SD)") and stubs[1].endswith("Median (IQR)"), stubs
+    assert [c.plain() for c in t.rows[1].cells[:3]] == ["2 (2-3)", "2 (2-3)", "2 (2-3)"]
+    note = t.general_note.plain()
+    assert "SD = standard deviation" in note and "IQR = interquartile range" in note
+    assert "M = mean" not in note and "Mdn = median" not in note, note
+    said = render(mann_whitney(tips, "size", "sex", labels={"size": "party size"}).main, "sentence", "ama11").plain()
+    assert "(median, 2; n = 87)" in said and "Mdn" not in said, said
+    wide = tips.assign(row=tips.index // 4, seat=tips.index % 4).pivot(index="row", columns="seat", values="size").dropna()
+    wide.columns = ["first", "second", "third", "fourth"]
+    said = render(friedman(wide, list(wide.columns))[0], "sentence", "ama11").plain()
+    assert re.search(r"first \(median \[IQR\], \d \[\d-\d\]\)", said) and "Mdn" not in said, said
+    apa = render(mann_whitney(tips, "size", "sex").main, "sentence", "apa7").plain()
+    assert "(Mdn = 2, n = 87)" in apa  # APA unchanged
+    from statsetter.rendering.figures import means_figure
+    from statsetter.style.profile import load_style
+
+    ranks = [mann_whitney(tips, "size", "sex").main]
+    assert means_figure(ranks, load_style("ama11")).y_label == "Size (median)"  # the axis as the table and text say it
+    assert means_figure(ranks, load_style("apa7")).y_label == "Size (<i>Mdn</i>)"

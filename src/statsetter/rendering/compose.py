@@ -192,7 +192,7 @@ def _callout(t: Shown, number: int, by_analysis: Mapping[str, list[Record]], sty
     if t.kind == "correlations":
         m = next((r for r in found if isinstance(r, CorrelationMatrix)), None)
         names = listing([m.labels.get(n, n) for n in m.names]) if m is not None else "the variables"
-        what = listing(["means", "standard deviations", "correlations"]) if any(c.head.plain() == "M" for c in t.model.columns) else "correlations"
+        what = listing(["means", "standard deviations", "correlations"]) if any(c.head.plain() in ("M", "Mean") for c in t.model.columns) else "correlations"
         return StyledText(f"{head} gives the {what} of {names}.")
     mixed = next((r for r in results if r.kind == "mixed_model"), None)
     if mixed is not None:

@@ -64,13 +64,15 @@ def correlation_table(
         general += f" to {num.integer(max(ns))}." if len(ns) > 1 else " for every pair."
     else:
         general = ""
+    mean = "Mean" if resolved.wording.get("descriptives") == "mean_sd" else resolved.symbol("M")  # AMA spells it out
     if show and ns != {m.rows}:
-        general += f" {resolved.symbol('M')} and {resolved.symbol('SD')} are of each variable's observed values."
+        general += f" {mean} and {resolved.symbol('SD')} are of each variable's observed values."
     if intervals:
-        general += f" Values in brackets are the {m.level * 100:g}% CI of each {resolved.symbol(symbol)}."
+        where = "Values in brackets are" if resolved.data["ci"].get("cell", "[").startswith("[") else "The values beneath each coefficient give"
+        general += f" {where} the {m.level * 100:g}% CI of each {resolved.symbol(symbol)}."  # (AMA's cells have no brackets)
     if m.adjust:
         general += f" {p} values {ADJUST_NAMES.get(m.adjust, m.adjust)}-adjusted for {k * (k - 1) // 2} comparisons."
-    heads = ([Column(StyledText.from_markup(resolved.symbol("M"))), Column(StyledText.from_markup(resolved.symbol("SD")))] if show else [])
+    heads = ([Column(StyledText.from_markup(mean)), Column(StyledText.from_markup(resolved.symbol("SD")))] if show else [])
     return TableModel(
         title=StyledText(title or f"Correlations ({sym}) Between the Variables"),
         columns=tuple(heads + [Column(StyledText(str(j + 1))) for j in range(k - 1)]),

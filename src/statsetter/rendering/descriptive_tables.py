@@ -10,6 +10,7 @@ p (specific notes, superscript letters), and states weighting and suppression.
 
 from __future__ import annotations
 
+import re
 from decimal import Decimal
 from typing import TYPE_CHECKING
 
@@ -53,6 +54,18 @@ class _Layout:
             self.used.append(name)
         return self.style.symbol(name) if name != "SMD" else "SMD"
 
+    def head(self, key: str, symbols: tuple[str, ...]) -> str:
+        """A row's statistic as the style names it (``key`` of its symbols: AMA's "Mean (SD)"), else the symbols'
+        "M (SD)"; the abbreviations it shows are defined in the note (AMA's "Mean (SD)" defines SD, not M)."""
+        given = self.style.symbols.get(key)
+        if given is None:
+            return f"{self.sym(symbols[0])} ({self.sym(symbols[1])})"
+        plain = re.sub(r"<[^>]+>", "", given)
+        for name in symbols:
+            if re.search(rf"(?<!\w){re.escape(re.sub(r'<[^>]+>', '', self.style.symbol(name)))}(?!\w)", plain):
+                self.sym(name)
+        return given
+
     # -- cells -------------------------------------------------------------
 
     def count(self, n: float, of: float, hidden: bool) -> StyledText:
@@ -76,8 +89,7 @@ class _Layout:
             names = v.categories
             return StyledText(f"{names[int(v.median[j])]} ({names[int(v.q1[j])]}–{names[int(v.q3[j])]})")
         q1, q3 = self.num.number(v.q1[j], "Mdn", decimals), self.num.number(v.q3[j], "Mdn", decimals)
-        inner = f"{q1}{self.sep}{self.nb}{q3}" if v.q1[j] < 0 else f"{q1}–{q3}"
-        return StyledText(f"{self.num.number(v.median[j], 'Mdn', decimals)} ({inner})")
+        return StyledText(f"{self.num.number(v.median[j], 'Mdn', decimals)} ({self.num.span(q1, q3, v.q1[j] < 0, self.nb)})")
 
     def scored_decimals(self, v: "VariableSummary") -> int | None:
         """The decimals an ordinal variable's quartiles have (``score_decimals``), when fewer than the style's: "2 (2–3)"
@@ -94,7 +106,7 @@ class _Layout:
         if v.minimum[j] != v.minimum[j]:
             return StyledText("—")
         lo, hi = self.num.number(v.minimum[j], "M"), self.num.number(v.maximum[j], "M")
-        return StyledText(f"{lo}{self.sep}{self.nb}{hi}" if v.minimum[j] < 0 else f"{lo}–{hi}")
+        return StyledText(self.num.span(lo, hi, v.minimum[j] < 0, self.nb))
 
     # -- rows --------------------------------------------------------------
 
@@ -129,12 +141,12 @@ class _Layout:
         first = True
         if v.kind == "continuous" and v.mean is not None and "mean_sd" in v.show:
             assert v.sd is not None
-            what = self.style.symbols.get("mean_sd", f"{self.sym('M')} ({self.sym('SD')})")
+            what = self.head("mean_sd", ("M", "SD"))
             cells = [self.centre_spread(v.mean[j], v.sd[j]) for j in range(self.groups)]
             rows.append(Row(self.stub(v, what), tuple(cells + self.extra(v, True))))
             first = False
         if v.kind == "ordinal" or "median_iqr" in v.show:
-            what = f"{self.sym('Mdn')} ({self.sym('IQR')})"
+            what = self.head("median_iqr", ("Mdn", "IQR"))
             decimals = self.scored_decimals(v)
             cells = [self.quartiles(v, j, decimals) for j in range(self.groups)]
             label = self.stub(v, what) if first else StyledText.from_markup(what)

@@ -144,13 +144,15 @@ def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95)
     if style.figures.get("means") == "bars":
         note = note.replace("Points show", "Bars show")
     title = f"{'Median' if medians else 'Mean'} {_lower(outcome)} by {_lower(axis)}"
+    spelled = style.wording.get("descriptives") == "mean_sd"  # AMA: "mean", "median" in words, as its tables and text
+    centre = ("median" if medians else "mean") if spelled else style.symbol("Mdn" if medians else "M")
     return FigureModel(
         kind="means",
         about=_prose(title),
         title=_title(title),
         note=StyledText.from_markup(note),
         x_label=axis,
-        y_label=f"{outcome} ({'<i>Mdn</i>' if medians else '<i>M</i>'})",
+        y_label=f"{outcome} ({centre})",
         series=(Series(outcome, tuple(float(i) for i in range(len(names))), tuple(ys), tuple(lows), tuple(highs)),),
         categories=tuple(names),
         alt=f"{title}: " + "; ".join(f"{n} {y:.3g} ({a:.3g} to {b:.3g})" for n, y, a, b in zip(names, ys, lows, highs)),

@@ -278,8 +278,8 @@ class Helpers:
 
     def desc(self, r: Result, index: int = 0, parts: str = "mean sd n") -> str:
         """``M = 4.22, SD = 0.73, n = 40`` for group ``index`` (AMA: ``mean [SD],
-        4.22 [0.73]; n = 40``, brackets since it stands in parentheses);
-        absent parts are left out."""
+        4.22 [0.73]; n = 40``, brackets since it stands in parentheses, and
+        ``median, 2; n = 40``); absent parts are left out."""
         if index >= len(r.groups):
             return ""
         g: GroupSummary = r.groups[index]
@@ -290,6 +290,14 @@ class Helpers:
             sd = self.num.number(g.sd, "SD", held=_held(r, f"{path}.sd"))
             out.append(f"mean [SD], {m} [{sd}]")
             parts = " ".join(p for p in parts.split() if p not in ("mean", "sd"))
+        if self._mean_sd and g.median is not None and "median" in parts.split():  # words, not Mdn: "median, 2" (AMA)
+            median = self.num.number(g.median, "Mdn", held=_held(r, f"{path}.median"))
+            if "iqr" in parts.split() and g.q1 is not None and g.q3 is not None:  # "median [IQR], 2 [1-3]"
+                q1, q3 = self.quartile(r, index, "q1"), self.quartile(r, index, "q3")
+                out.append(f"median [IQR], {median} [{self.num.span(q1, q3, g.q1 < 0, self._nb)}]")
+            else:
+                out.append(f"median, {median}")
+            parts = " ".join(p for p in parts.split() if p not in ("median", "iqr"))
         for part in parts.split():
             v = getattr(g, _GROUP_FIELDS[part])
             if v is None:
@@ -301,11 +309,16 @@ class Helpers:
                 q1, q3 = g.q1, g.q3
                 if q1 is None or q3 is None:
                     continue
-                text = f"[{self.num.number(q1, 'M')}{self.sep}{self._nb}{self.num.number(q3, 'M')}]"
+                text = f"[{self.quartile(r, index, 'q1')}{self.sep}{self._nb}{self.quartile(r, index, 'q3')}]"
             else:
                 text = self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))
             out.append(f"{self.sym(symbol)}{self._eq}{text}")
-        return ("; " if self._mean_sd and out and out[0].startswith("mean [SD]") else self._join).join(out)
+        return ("; " if self._mean_sd and out and out[0].startswith(("mean [SD]", "median,")) else self._join).join(out)
+
+    def quartile(self, r: Result, index: int, which: str) -> str:
+        """A group's first or third quartile, with the decimals its median has (a whole-number score's "2", as
+        Table 1 prints it)."""
+        return self.num.number(getattr(r.groups[index], which), "Mdn", held=_held(r, f"groups[{index}].{which}"))
 
     def paren(self, text: str) -> str:
         """`` (text)`` after a group's name, or nothing when there is nothing to say."""

@@ -337,6 +337,15 @@ class Numbers:
         )
 
 
+    def span(self, low: str, high: str, negative: bool, space: str) -> str:
+        """Two printed limits joined as the style joins a range ("2–3"; AMA "2-3"); from a negative number by the list
+        separator, or by "to" where the dash is a hyphen, since a dash would read as a minus ("−1.20, 0.40"; AMA
+        "−1.2 to 0.4"); ``space`` is the style's space inside a statistic."""
+        dash = self.style.data["numbers"].get("range_dash", "\u2013")
+        if not negative:
+            return f"{low}{dash}{high}"
+        return f"{low}{space}to{space}{high}" if dash == "-" else f"{low}{self.style.data['numbers']['list_separator']}{space}{high}"
+
 def _more_decimals(decimals: int, first: int, held: int | None) -> int:
     """The decimals at which a limit shows the first significant digit ``first`` (of itself, or of its distance from
     the null), one more than ``decimals`` at least; none added beyond ``_NEVER_ZERO_MAX`` (a limit of 1e-300 is not

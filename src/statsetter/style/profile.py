@@ -165,6 +165,7 @@ SCHEMA: dict[str, Any] = {
         "never_zero": {"quantities": _text_list},
         "keep_together": _one_of("space", "nbsp", "thin"),
         "df_form": _one_of("parentheses", "subscript"),
+        "range_dash": _one_of("\u2013", "-"),
     },
     "p": {
         "symbol": _markup,
