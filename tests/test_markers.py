@@ -187,6 +187,30 @@ def test_a_wide_table_placed_in_a_chapter_turns_only_its_own_pages(tmp_path):
     assert kinds.count(True) == 1 and not kinds[-1]  # the copy in the table cell stays on the portrait pages
 
 
+def test_wide_tables_in_consecutive_marker_paragraphs_leave_no_empty_page(tmp_path):
+    # found rendering a chapter: two wide tables whose markers stood in consecutive paragraphs had an empty portrait
+    # page between them (each marker paragraph went to its table, and the portrait section between them held
+    # nothing); now the empty section is removed as the document is saved: portrait, landscape, landscape, portrait
+    import warnings
+
+    from test_docx import _pdf_pages, _species_by_island
+
+    d = docx.Document()
+    d.add_paragraph("The sample is described first.")
+    d.add_paragraph("[[table:one]]")
+    d.add_paragraph("[[table:two]]")
+    d.add_paragraph("After both tables the text goes on.")
+    chapter = tmp_path / "chapter.docx"
+    d.save(str(chapter))
+    wide = _species_by_island()
+    with warnings.catch_warnings():
+        warnings.simplefilter("ignore")
+        fill_chapter(chapter, [], tmp_path / "filled.docx", "apa7", tables={"one": wide, "two": wide})
+    pages = _pdf_pages(tmp_path / "filled.docx")
+    assert [landscape for landscape, _ in pages] == [False, True, True, False], [t[:60] for _, t in pages]
+    assert "Table 1" in pages[1][1] and "Table 2" in pages[2][1] and "After both tables" in pages[3][1]
+
+
 @pytest.mark.parametrize("width", ["abc", "", "1e9", "8.5in"])
 def test_a_page_size_that_is_not_a_number_of_twips_does_not_stop_a_fill(tmp_path, width):
     # found by a fuzz of chapters with hostile section properties: python-docx's page_width raised ValueError on

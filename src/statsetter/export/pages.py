@@ -105,10 +105,14 @@ def turned(parts: "list[str | bytes]", sect: Any, opening: bool = False) -> "lis
 
 
 def settle(body: Any) -> None:
-    """Give the document's last section the landscape page when a turned
-    table ends the document: the paragraph ``turned`` put after it (the
-    last thing in ``body``) is removed and its page becomes the body's, so
-    no empty page follows the table."""
+    """Leave no empty page around turned tables: a section with nothing in it
+    between two turned tables (two table markers in consecutive paragraphs,
+    each paragraph gone to its table) is removed; and when a turned table
+    ends the document, the paragraph ``turned`` put after it (the last thing
+    in ``body``) is removed and its page becomes the body's last."""
+    for ending in [e for e in body if _ending_of(e, "portrait")]:
+        if _ending_of(ending.getprevious(), "landscape"):
+            body.remove(ending)
     last = body[-1] if len(body) else None
     if last is None or last.tag != f"{_W}sectPr":
         return
@@ -121,8 +125,14 @@ def settle(body: Any) -> None:
 
 def landscape_ending(element: Any) -> bool:
     """Whether ``element`` is the paragraph ``turned`` put after a table to end its landscape section."""
+    return _ending_of(element, "landscape")
+
+
+def _ending_of(element: Any, orientation: str) -> bool:
+    """Whether ``element`` is a one-point paragraph ``turned`` put in to end a section of that page orientation."""
     spacing = element.find(f"{_W}pPr/{_W}spacing") if element is not None and element.tag == f"{_W}p" else None
     if spacing is None or spacing.get(f"{_W}line") != "20" or element.find(f"{_W}r") is not None:
         return False
-    size = element.find(f"{_W}pPr/{_W}sectPr/{_W}pgSz")
-    return size is not None and size.get(f"{_W}orient") == "landscape"
+    sect = element.find(f"{_W}pPr/{_W}sectPr")
+    size = sect.find(f"{_W}pgSz") if sect is not None else None
+    return sect is not None and ((size is not None and size.get(f"{_W}orient") == "landscape") == (orientation == "landscape"))
