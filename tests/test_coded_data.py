@@ -300,8 +300,21 @@ def test_a_labelled_ordinal_variable_is_summarised_by_its_categories(folder, hea
     out = plan_run(folder, HEADER + '[[tables]]\nkind = "descriptives"\nvariables = ["slope"]\n')
     row = out.tables[0].rows[0]
     q1, median, q3 = np.percentile(heart.slope, [25, 50, 75])
-    assert row.stub.plain().startswith("slope, Mdn (IQR)")
+    assert row.stub.plain().startswith("Slope, Mdn (IQR)")
     assert row.cells[0].plain() == f"{SLOPE[int(median)]} ({SLOPE[int(q1)]}–{SLOPE[int(q3)]})"
+
+
+def test_a_rank_test_names_the_category_of_a_coded_median(folder, heart):
+    # read as a supervisor would: Table 1 named the slope's median "flat", the Mann–Whitney sentence said "Mdn = 1" — a
+    # bare code. Now a median that is a code is followed by its label, in the same place as the number; numpy's median of
+    # the codes in each diagnosis group is the reference
+    out = plan_run(folder, HEADER + '[[analyses]]\nid = "slope_dx"\nkind = "mann_whitney"\noutcome = "slope"\ngroup = "target"\n')
+    said = render(by_id(out, "slope_dx"), "sentence", "apa7").plain()
+    for code, name in TARGET.items():
+        median = np.median(heart.slope[heart.target == code])
+        assert median.is_integer() and f"{name} (Mdn = {int(median)} [{SLOPE[int(median)]}]" in said, said
+    ama = render(by_id(out, "slope_dx"), "sentence", "ama11").plain()
+    assert f"(median, {int(np.median(heart.slope[heart.target == 0]))} [" in ama, ama
 
 
 def test_small_expected_counts_are_stated(heart):

@@ -156,7 +156,7 @@ def test_an_id_column_is_left_out_unless_named(tmp_path, capsys):
     assert main(["describe", str(path), "--group", "species"]) == 0
     out = capsys.readouterr()
     assert "left out: bird: nominal" in out.err and "looks like an identifier" in out.err
-    assert "P001" not in out.out and "island" in out.out
+    assert "P001" not in out.out and "Island" in out.out
     assert main(["describe", str(path), "--vars", "bird,island"]) == 0
     assert "P001" in capsys.readouterr().out
     # a case number (every integer from 1 to n once) is an identifier too, not a ratio variable

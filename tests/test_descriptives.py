@@ -295,7 +295,7 @@ def test_scale_score_shows_as_continuous_with_alpha():
     assert from_record.variables[0].alpha == pytest.approx(reference, rel=1e-10)
     assert from_record.variables[0].level.level == "interval"
     expected = f"{reference:.2f}".lstrip("0")
-    assert table(from_record).rows[0].stub.text == table(from_number).rows[0].stub.text == f"score (α\u00a0=\u00a0{expected}), M (SD)"
+    assert table(from_record).rows[0].stub.text == table(from_number).rows[0].stub.text == f"Score (α\u00a0=\u00a0{expected}), M (SD)"
     with pytest.raises(InputError, match="not a number"):
         describe(frame, ["score"], alphas={"score": "high"}).main
     with pytest.raises(InputError, match="not described"):
@@ -311,3 +311,16 @@ def test_a_group_without_values_and_a_group_of_one():
     assert v.mean[-1] == pytest.approx(present.mean(), rel=1e-12) and v.sd[-1] == pytest.approx(present.std(), rel=1e-12)
     cells = [c.text for c in table(d).rows[0].cells]
     assert cells[0] == "—" and cells[2] == "9.00 (—)"
+
+
+def test_stubs_of_unlabelled_plain_names_start_with_a_capital():
+    """Read as a supervisor would: Table 1 of pingouin's penguins by sex had stubs "species, n (%)" and "island" beside
+    labelled ones starting with a capital, and the spanner "sex". A column without a label whose name is plain lowercase
+    words now starts with a capital as a stub does (APA tables write stubs in sentence case — practice); names that are
+    not plain words (bill_length_mm) and labels stay as they are."""
+    d = pg.read_dataset("penguins")
+    t = table(describe(d, ["species", "island", "bill_length_mm", "flipper_length_mm"], group="sex",
+                       labels={"flipper_length_mm": "flipper length (mm)"}).main, "apa7")
+    stubs = [r.stub.plain() for r in t.rows if r.indent == 0]
+    assert [s.split(",")[0] for s in stubs] == ["Species", "Island", "bill_length_mm", "Flipper length (mm)"], stubs
+    assert t.spanners[0].label.plain() == "Sex"

@@ -684,12 +684,32 @@ def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None, st
         found = list(result) if isinstance(result, (list, tuple)) else [result]
         if kind == "auto":  # a level the data file gave is not one the author declared: say where it came from
             found = [_level_sources(r, data, analysis) for r in found]
-        found = [with_table_labels(r, data.table_labels, labels) if isinstance(r, Result) else r for r in found]
+        found = [_median_categories(with_table_labels(r, data.table_labels, labels), data) if isinstance(r, Result) else r for r in found]
         records += name_records(analysis["id"], found)
     for i, t in enumerate(plan.tables):
         if t["kind"] == "descriptives":
             records.append(_description(plan, t, i, data, alphas))
     return records
+
+
+_MEASURED = ("outcome", "first", "second")  # the roles of what a rank test's medians are of (and "measurement N")
+
+
+def _median_categories(r: Result, data: _Data) -> Result:
+    """``r`` with each group's median named by the category its code stands for (``extra["median_label"]``: "Mdn = 4
+    [Moderate]" in a sentence, as Table 1 names it) when the measured variables share one set of value labels (an
+    ordinal scale's, or the items of one scale) and the median is a code; a median between two codes is left as a
+    number."""
+    from .coding import category_text, label_codes
+
+    measured = [v.name for v in r.variables if v.role in _MEASURED or v.role.startswith("measurement")]
+    scales = [data.value_labels.get(name) for name in measured if name in data.frame.columns]
+    if not r.groups or not scales or any(not m or m != scales[0] for m in scales):
+        return r
+    codes = label_codes(scales[0])
+    named = [replace(g, extra={**g.extra, "median_label": codes[category_text(g.median)]})
+             if g.median is not None and float(g.median).is_integer() and category_text(g.median) in codes else g for g in r.groups]
+    return replace(r, groups=tuple(named)) if any(a is not b for a, b in zip(named, r.groups)) else r
 
 
 def _description(plan: Plan, t: dict[str, Any], i: int, data: _Data, alphas: dict[str, Result]) -> Description:

@@ -131,7 +131,7 @@ class _Layout:
         alpha = ""
         if v.alpha is not None:
             alpha = f" ({self.style.symbol('alpha')}{self.nb}={self.nb}{self.num.number(v.alpha, 'alpha')})"
-        return StyledText.from_markup(f"{escape_markup(v.label)}{alpha}, {what}")
+        return StyledText.from_markup(f"{escape_markup(_named(v.label, v.name))}{alpha}, {what}")
 
     def variable_rows(self, v: "VariableSummary") -> list[Row]:
         n = self.sym("n")
@@ -247,7 +247,7 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
         columns.append(Column(StyledText.from_markup(resolved.symbol("p"))))
     if any(v.smd is not None for v in d.variables):
         columns.append(Column(StyledText.from_markup(lay.sym("SMD"))))
-    spanners = (Spanner(StyledText(d.group_label or d.group or ""), 0, len(d.columns) - 1),) if d.group is not None else ()
+    spanners = (Spanner(StyledText(_named(d.group_label or d.group or "", d.group or "")), 0, len(d.columns) - 1),) if d.group is not None else ()
     if title is None:
         title = f"Characteristics of the sample by {d.group_label}" if d.group is not None else "Characteristics of the sample"
     return TableModel(
@@ -260,6 +260,19 @@ def descriptive_table(d: "Description", style: "Style | str | None" = None, *, n
         general_note=_general_note(d, lay),
         specific_notes=tuple((letter, StyledText.from_markup(eponyms(f"{name}.", lay.style))) for name, letter in lay.tests.items()),
     )
+
+
+_PLAIN_WORDS = re.compile(r"[a-z]+(?: [a-z]+)*")
+
+
+def _named(label: str, name: str) -> str:
+    """A stub's or spanner's name in sentence case, as a stub starts: a label with its first letter capital (labels are
+    often written for the middle of a sentence, "flipper length (mm)"; not "pH" or "iPhone", whose second letter is a
+    capital), and a column without one whose name is plain lowercase words ("age", "sex"); any other name (bmi_z, QID4,
+    TVnews) as it is."""
+    if label == name and not _PLAIN_WORDS.fullmatch(name):
+        return label
+    return label[:1].upper() + label[1:] if label[:1].islower() and not label[1:2].isupper() else label
 
 
 def _general_note(d: "Description", lay: _Layout) -> StyledText:
