@@ -413,3 +413,25 @@ def test_a_long_stub_label_does_not_turn_the_page():
         warnings.simplefilter("always")
         document = results_document([t], "apa7")
     assert [str(w.message) for w in said] == [] and 'w:orient="landscape"' not in document.element.xml
+
+
+@pytest.mark.parametrize("style", ["apa7", "ama11"])
+def test_a_range_of_numbers_is_not_broken_after_its_dash(tmp_path, style):
+    # seen in LibreOffice: a Table 1 row of medians with their quartiles wrapped as "15.38 (12.09–" / "21.75)" — a line
+    # is filled greedily and may break after a dash. Now a cell that wraps breaks its line before the range
+    # ("15.38" / "(12.09–21.75)"), its column holds the range whole, and a cell that fits stays on one line. pingouin's
+    # tips by day, every continuous variable with its median and quartiles; AMA's hyphen too.
+    import pingouin as pg
+
+    from statsetter.analyses import describe
+
+    tips = pg.read_dataset("tips")
+    t1 = table(describe(tips, ["total_bill", "tip"], group="day", show={"continuous": ["mean_sd", "median_iqr"]}, compare=True).main, style)
+    document = results_document([StyledText("Text.")], style, title="Results", tables=[t1])
+    pages = _pdf_pages(save_document(document, tmp_path / "ranges.docx"))
+    lines = [line.strip() for _, text in pages for line in text.splitlines()]
+    assert not [line for line in lines if re.search(r"\d[–-]$", line)], lines
+    ranges = [c.plain().split(" ", 1)[1] for row in t1.rows for c in row.cells if re.search(r"\d[–-]\d", c.plain())]
+    assert ranges and all(r in lines or any(r in line for line in lines) for r in ranges)  # each range whole on a line
+    assert any(re.fullmatch(r"\d\.\d\d \(\d\.\d\d[–-]\d\.\d\d\)", c.plain()) and c.plain() in " ".join(lines)
+               for row in t1.rows for c in row.cells)  # a short cell stays on one line

@@ -176,8 +176,13 @@ _BREAKABLE = re.compile(r"[ \t\n\u2002\u2003\u2009–—/-]")
 _KEEP = re.compile(r"([<>=≤≥−]) ")
 # a line may break at a space (not a no-break one) or after a dash or slash — but not at spaces before a closing
 # bracket, a point, comma, colon, semicolon, "!", "?" or "/": Unicode's line breaking (UAX #14, rule LB13), which Word and
-# LibreOffice follow, keeps those with what comes before even across spaces (so "[.79, .84]" is one piece)
-_BREAKS = re.compile(r"[ \t\n\u2002\u2003\u2009]++(?![.,:;!?)\]}/])|(?<=[–—/-])")
+# LibreOffice follow, keeps those with what comes before even across spaces (so "[.79, .84]" is one piece). A range of
+# numbers ("(2.00–3.00)", AMA's "2.1-3.4") is measured as one piece: a cell that wraps breaks its line before the range
+# (``_RANGE_SPACE``), so its column must hold the range whole
+_BREAKS = re.compile(r"[ \t\n\u2002\u2003\u2009]++(?![.,:;!?)\]}/])|(?<=[–—/-])(?![\d.−])")
+# the space before a range of numbers in a cell, "15.38 (12.09–21.75)" (digits or, in a shape, 0s): where a cell that
+# wraps breaks its line (Word and LibreOffice fill a line greedily and would break after the dash: "(12.09–" / "21.75)")
+_RANGE_SPACE = re.compile(r" (?=\(?[−-]?\d[\d.,]*[–-][−-]?\d)")
 
 
 _EM = 240  # twips in an em of 12 pt type
@@ -449,6 +454,9 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
     run_close = "</w:t></w:r>" + _CELL_CLOSE
     ncols = len(table.columns)
     soft = {k for k, column in enumerate(shapes) if column.soft}
+    # per column, the shapes of its plain cells that wrap in its width before a range of numbers (``_RANGE_SPACE``)
+    ranges = {k: wrapping for k, column in enumerate(shapes)
+              if (wrapping := {shape for shape in column.shapes if _measure_shape(shape, "")[0] + 2 * _MARGIN > widths[k + 1] and _RANGE_SPACE.search(shape)})}
     # a row whose cells are all plain text, safe as it is, neither dash nor blank (most rows of a big table) is the same
     # XML around its texts as every such row: one list of the pieces between the texts (and one for the last row), the
     # row's stub and texts put into its slots, joined
@@ -469,6 +477,8 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
             row_xml = templates[bottom][:]
             row_xml[1] = stub_xml
             row_xml[3:-1:2] = [_soft_text(c.text) if k in soft else c.text for k, c in enumerate(cells)] if soft else [c.text for c in cells]
+            for k, wrapping in ranges.items():
+                row_xml[3 + 2 * k] = _range_line(row_xml[3 + 2 * k], wrapping)
             out.write("".join(row_xml).encode())
             continue
         # body cells carry no width of their own: the grid and the head rows' widths fix the layout (smaller XML)
@@ -476,13 +486,24 @@ def _table_xml(table: TableModel, number_align: str = "center", text_width: int 
         if cells:
             opened = openings[bottom]
             parts += [(opening[1] if c.text.strip() in _DASHES else opening[0])
-                      + (_run_xml(_softened(c)) + _CELL_CLOSE if c.spans or not plain_safe else run_open + _softened(c).text + run_close if c.text else _CELL_CLOSE)
-                      for c, opening in zip(cells, opened)]
+                      + (_run_xml(_softened(c)) + _CELL_CLOSE if c.spans or not (plain_safe or k in ranges) else run_open
+                         + _range_line(_softened(c).text if plain_safe else _escape(xml_safe(_softened(c).text)), ranges.get(k, ())) + run_close
+                         if c.text else _CELL_CLOSE)
+                      for k, (c, opening) in enumerate(zip(cells, opened))]
         else:
             parts.append(_cell_xml(StyledText(), "left", False, bottom, ncols, line=line))
         out.write(f"<w:tr>{body}{''.join(parts)}</w:tr>".encode())
     out.write(b"</w:tbl>")
     return out.getvalue()
+
+
+def _range_line(text: str, wrapping: "set[str] | tuple[()]") -> str:
+    """A plain cell's text (as written into its w:t) with a line break before its range of numbers when its shape
+    wraps so (``wrapping``): "15.38" / "(12.09–21.75)"."""
+    if not wrapping or text.translate(_SHAPE) not in wrapping:
+        return text
+    at = _RANGE_SPACE.search(text)
+    return text if at is None else f"{text[:at.start()]}</w:t><w:br/><w:t>{text[at.end():]}"
 
 
 _PLACEHOLDER = "statsetter-table"
