@@ -422,3 +422,42 @@ def test_a_stata_file_whose_columns_are_all_missing_says_so_for_every_type(capsy
     said = capsys.readouterr().err
     for name in ("float_miss", "double_miss", "byte_miss", "int_miss", "long_miss"):
         assert f"warning: {name}: nominal (inferred from the values: every value is missing; a weak guess" in said, said
+
+
+def test_a_table_of_labelled_categories_wraps_them_in_word_and_latex(tmp_path):
+    # read on the ANES 1996 pilot (statsmodels' anes96; the value labels are those of its dataset notes): Table 1's
+    # ordinal rows print the categories at the quartiles, "Weak Democrat (Strong Democrat–Independent-Democrat)". Word
+    # had turned the table to a landscape page for their unwrapped width, and LaTeX had set them in columns that do not
+    # wrap, the whole table scaled down to a small type on a landscape page. Now a column of words wraps between them
+    # as the stub does: in portrait, at full size, in both (pdflatex: no overfull line, no scaling)
+    import subprocess
+    import warnings
+
+    import statsmodels.api as sm
+    from test_docx import _pdf_pages
+    from test_table_goldens import _require_pdflatex
+
+    from statsetter import StyledText, load_style, table
+    from statsetter.analyses import describe
+    from statsetter.coding import factor
+    from statsetter.export.docx_writer import results_document, save_document
+    from statsetter.export.text_tables import table_latex
+    from statsetter.styled import LATEX_PREAMBLE
+
+    d = sm.datasets.anes96.load_pandas().data
+    party = {0: "Strong Democrat", 1: "Weak Democrat", 2: "Independent-Democrat", 3: "Independent-Independent",
+             4: "Independent-Republican", 5: "Weak Republican", 6: "Strong Republican"}
+    d = d.assign(PID=factor(d.PID, party, ordered=True), vote=d.vote.map({0: "Clinton", 1: "Dole"}))
+    t = table(describe(d, ["age", "PID"], group="vote", levels={"PID": "ordinal"}, labels={"PID": "party identification"}).main, "apa7")
+    assert any("Strong Democrat" in c.plain() for row in t.rows for c in row.cells)
+    with warnings.catch_warnings():
+        warnings.simplefilter("error")  # no "set on landscape pages" warning from either writer
+        document = results_document([StyledText("Text.")], "apa7", title="Results", tables=[t])
+        tex = table_latex(t, load_style("apa7"))
+    assert [landscape for landscape, _ in _pdf_pages(save_document(document, tmp_path / "party.docx"))] == [False]
+    assert "sidewaystable" not in tex and "resizebox" not in tex and "\\hsize=" in tex  # the category columns share the line
+    _require_pdflatex()
+    (tmp_path / "party.tex").write_text("\\documentclass{article}\n" + LATEX_PREAMBLE + "\\begin{document}\n" + tex + "\\end{document}\n")
+    subprocess.run(["pdflatex", "-interaction=nonstopmode", "party.tex"], cwd=tmp_path, capture_output=True, timeout=120)
+    log = (tmp_path / "party.log").read_text(errors="replace")
+    assert (tmp_path / "party.pdf").exists() and "Overfull" not in log

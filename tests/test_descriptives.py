@@ -324,3 +324,20 @@ def test_stubs_of_unlabelled_plain_names_start_with_a_capital():
     stubs = [r.stub.plain() for r in t.rows if r.indent == 0]
     assert [s.split(",")[0] for s in stubs] == ["Species", "Island", "bill_length_mm", "Flipper length (mm)"], stubs
     assert t.spanners[0].label.plain() == "Sex"
+
+
+def test_compare_an_ordered_categorical_by_its_categories_positions():
+    # found by fuzzing: describe(compare=True) of an ordinal variable held as an ordered pandas categorical (as R and
+    # pyreadstat hand them over) stopped with "not numeric (dtype category)". Its Mann–Whitney test now compares the
+    # categories' positions: scipy's mannwhitneyu on the codes is the reference (statsmodels' anes96, party
+    # identification by expected vote; labels from its dataset notes)
+    from statsetter.coding import factor
+
+    d = sm.datasets.anes96.load_pandas().data
+    party = dict(enumerate(["Strong Democrat", "Weak Democrat", "Independent-Democrat", "Independent-Independent",
+                            "Independent-Republican", "Weak Republican", "Strong Republican"]))
+    d = d.assign(PID=factor(d.PID, party, ordered=True), vote=d.vote.map({0: "Clinton", 1: "Dole"}))
+    v = describe(d, ["PID"], group="vote", levels={"PID": "ordinal"}, compare=True).main.variables[0]
+    codes = d.PID.cat.codes
+    expected = stats.mannwhitneyu(codes[d.vote == "Clinton"], codes[d.vote == "Dole"], method="asymptotic").pvalue
+    assert v.test_name.startswith("Mann") and v.test.p == pytest.approx(expected, rel=1e-12)

@@ -95,3 +95,27 @@ def test_quick_markup_path_equals_the_full_parser(pieces):
     assert _segments_of(quick.text, quick.spans) == quick.segments()  # spans derived from the segments say the same
     assert all(a[1] != b[1] for a, b in zip(quick.segments(), quick.segments()[1:]))  # maximal: no two alike in a row
     assert quick.markdown() == full.markdown() and quick.plain() == full.plain()
+
+
+def test_latex_prints_bars_and_typed_hyphens_as_typed(tmp_path):
+    # found by fuzzing Table 1 with category labels as people type them: in LaTeX's default font encoding a bare "|"
+    # prints as an em dash, and typed hyphens next to each other or to a dash join into one longer dash ("--" an en
+    # dash, "–--" an em dash). Now "|" is \textbar and a hyphen or dash before another is closed by {}; checked as
+    # pdflatex prints them (pdftotext)
+    import shutil
+    import subprocess
+
+    from test_table_goldens import _require_pdflatex
+
+    from statsetter.styled import LATEX_PREAMBLE
+
+    typed = ["yes | no", "-- (not asked)", "1–-- 2", "1–—2", "well-being"]
+    assert StyledText("a|b").latex() == "a\\textbar{}b" and StyledText("--").latex() == "-{}-"
+    _require_pdflatex()
+    if shutil.which("pdftotext") is None:
+        pytest.skip("pdftotext not installed")
+    body = "\\par\n".join(StyledText(t).latex() for t in typed)
+    (tmp_path / "t.tex").write_text("\\documentclass{article}\n" + LATEX_PREAMBLE + "\\begin{document}\n" + body + "\n\\end{document}\n")
+    subprocess.run(["pdflatex", "-interaction=nonstopmode", "t.tex"], cwd=tmp_path, capture_output=True, timeout=120)
+    lines = [x.strip() for x in subprocess.run(["pdftotext", str(tmp_path / "t.pdf"), "-"], capture_output=True, text=True).stdout.splitlines() if x.strip()]
+    assert lines[:5] == typed, lines

@@ -417,15 +417,19 @@ _LATEX = {
     "′": r"\ensuremath{'}",  # the prime of c′ (a mediation's direct path)
     "<": r"\textless{}",
     ">": r"\textgreater{}",
+    "|": r"\textbar{}",  # (a bare | is an em dash in LaTeX's default font encoding)
+    "-": "-{}",  # only a hyphen before another (below): typed "--" are two hyphens, not LaTeX's en dash
     "\u00a0": "~",  # the no-break space that keeps a statistic together
     "\u202f": r"\,",  # a thin no-break space
     "\u2009": r"\,",  # a thin space (AMA digit groups)
 }
-_LATEX_RE = re.compile("|".join(re.escape(k) for k in _LATEX))
+_LATEX_RE = re.compile("|".join(re.escape(k) + ("(?=-)" if k == "-" else "") for k in _LATEX))
 
 
 def _escape_latex(text: str) -> str:
-    return _LATEX_RE.sub(lambda m: _LATEX[m.group(0)], text)
+    # a dash before a hyphen or another dash is closed by {} (as a hyphen before a hyphen is, in _LATEX): LaTeX would
+    # join their hyphens into one longer dash
+    return _LATEX_RE.sub(lambda m: _LATEX[m.group(0)] + ("{}" if m.group(0) in "–—" and text.startswith(("-", "–", "—"), m.end()) else ""), text)
 
 
 _UPRIGHT = ("alpha", "beta", "chi", "eta", "omega", "varepsilon", "tau", "rho", "varphi")

@@ -450,6 +450,8 @@ def _test(df: "pd.DataFrame", name: str, group: str | None, kind: str, labels: M
     from .ranks import kruskal_wallis, mann_whitney
     from .ttests import t_independent
 
+    import pandas as pd
+
     assert group is not None
     k = df[group].dropna().nunique()
     if kind == "nominal":
@@ -460,6 +462,10 @@ def _test(df: "pd.DataFrame", name: str, group: str | None, kind: str, labels: M
             return {"test": fisher, "test_name": "Fisher's exact test"}
         return {"test": records[0], "test_name": "χ<sup>2</sup> test of independence"}
     if kind == "ordinal":
+        column = df[name]
+        if isinstance(column.dtype, pd.CategoricalDtype):  # ordered categories (labels): the rank tests compare their positions
+            positions = column.cat.codes.astype(float)
+            df = df.assign(**{name: positions.where(positions >= 0)})
         if k == 2:
             return {"test": mann_whitney(df, name, group, labels=labels), "test_name": "Mann–Whitney <i>U</i> test"}
         return {"test": kruskal_wallis(df, name, group, labels=labels), "test_name": "Kruskal–Wallis <i>H</i> test"}

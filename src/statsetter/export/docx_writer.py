@@ -332,6 +332,15 @@ class _Column(NamedTuple):
     soft: bool  # some cell holds a soft no-break space, written as a plain one (``_SOFT``)
 
 
+_WORDS = re.compile(r"[^\W\d_]{3,}.*?\b[^\W\d_]{3,}")  # two words of three letters or more (not a number's "(ref.)")
+
+
+def word_columns(shapes: "list[_Column]") -> list[bool]:
+    """Per body column, whether it holds words (a labelled ordinal's categories, "Moderate (Slightly liberal–Moderate)"),
+    which wrap between them, rather than numbers."""
+    return [any(_WORDS.search(x) for x in column.shapes) or any(_WORDS.search(c.text) for c in column.styled) for column in shapes]
+
+
 def _body_shapes(table: TableModel) -> list[_Column]:
     """Per column, its plain cells' shapes and what they need, and its styled cells."""
     out: list[_Column] = []
@@ -595,7 +604,9 @@ def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH,
     # turned when the least widths exceed the page's text beyond the tenth ``_chars`` over-estimates them by (within
     # it, ``_fit`` shrinks the columns alike and every word still fits), or when its columns' natural width (the stub's
     # least: long labels are meant to wrap) is more than 1.6 times the text: in portrait most of its cells would wrap
-    turn = (least > width * 1.1 or low[0] + sum(want[1:]) > width * 1.6) and wide > width
+    # (a column of words — a labelled ordinal's categories — counted at its least too: it wraps between them)
+    natural = low[0] + sum(lo if words else wa for lo, wa, words in zip(low[1:], want[1:], word_columns(shapes)))
+    turn = (least > width * 1.1 or natural > width * 1.6) and wide > width
     if turn:
         warnings.warn(f"{name} is set on landscape pages: its columns need {least / 1440:.1f} in at the least and "
                       f"{sum(want) / 1440:.1f} in unwrapped; the page's text is {width / 1440:.1f} in wide", stacklevel=2)

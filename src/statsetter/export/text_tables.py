@@ -124,11 +124,16 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
     written): in a right-aligned column the part after the mark is set in a box
     of no width (``\\rlap``) followed by an invisible copy of the column's
     longest such part (``\\phantom``), so every mark falls at the same place."""
-    from .docx_writer import _HANG, _PAD, _column_widths, _longest_word
+    from .docx_writer import _HANG, _PAD, _body_shapes, _least_and_natural, _longest_word, word_columns
 
     mark = style.decimal_mark if style is not None else "."
     decimal = t.decimal_columns(mark) if style is not None and style.tables.get("number_align") == "decimal" else (False,) * len(t.columns)
-    widths = _column_widths(t, 10**9)
+    shapes = _body_shapes(t)
+    low, widths = _least_and_natural(t, shapes)  # each column's least and natural (unwrapped) width, in Word's measure
+    # a column of words (a labelled ordinal's categories: "Moderate (Slightly liberal–Moderate)") wraps between them in a
+    # width of its own, as in Word; a column of numbers keeps its natural width
+    words = [w and not d for w, d in zip(word_columns(shapes), decimal)]  # (a column aligned on its decimal mark keeps it)
+    widths = [widths[0]] + [lo if w else na for lo, na, w in zip(low[1:], widths[1:], words)]
     stub_least = max((_longest_word(r.stub.text) for r in t.rows), default=0) + _HANG
     # twips: the table with its stub wrapped at its longest word, with LaTeX's column space (not Word's cell margins)
     # and without the tenth ``_chars`` adds so that Word never breaks a word (the goldens' tables as LaTeX set them
@@ -149,8 +154,19 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
                 right = split_decimal(c, mark)[1]
                 if len(right.text) > len(longest[j]):
                     longest[j] = right.latex()
-    spec = "".join("r" if d or c.align == "right" else ("l" if c.align == "left" else "c") for c, d in zip(t.columns, decimal))
-    stub = ">{\\raggedright\\arraybackslash\\hangindent=1em\\hangafter=1}" + (f"p{{{stub_least / 20:.1f}pt}}" if too_wide else "X")
+    natural = _least_and_natural(t, shapes)[1]
+    page = _LANDSCAPE if turned else _PORTRAIT
+    wrapped = _wrapped_widths(low, natural, words, stub_least, page, _PAD)
+    # the stub and the columns of words share what the numbers leave of the line (tabularx's X columns, each's share
+    # of it — \hsize — in proportion to the widths estimated for a portrait or landscape page); a table too wide for
+    # its page sets them at their least widths and is scaled
+    numbers = sum((na - _PAD) / 1.1 for na, w in zip(natural[1:], words) if not w) + 2 * len(natural) * _LATEX_SPACE
+    shares = [max(stub_least, page - numbers - sum(wrapped))] + [w for w, word in zip(wrapped, words) if word]
+    factors = iter(len(shares) * x / sum(shares) for x in shares)
+    hang = "\\raggedright\\arraybackslash\\hangindent=1em\\hangafter=1"
+    stub = f">{{{hang}}}p{{{stub_least / 20:.1f}pt}}" if too_wide else f">{{\\hsize={next(factors):.3f}\\hsize{hang}}}X" if any(words) else f">{{{hang}}}X"
+    spec = "".join((_WRAPPING[c.align == "left"] % (wrapped[j] / 20) if too_wide else _SHARED[c.align == "left"] % next(factors)) if words[j]
+                   else "r" if d or c.align == "right" else ("l" if c.align == "left" else "c") for j, (c, d) in enumerate(zip(t.columns, decimal)))
     out = ["\\begin{sidewaystable}" if turned else "\\begin{table}[htbp]", "\\raggedright"]
     if _one_line(style) and (t.number is not None or t.title):
         out.append(" ".join(([f"\\textbf{{Table {t.number}.}}"] if t.number is not None else []) + ([title_case(t.title).latex()] if t.title else []))
@@ -205,6 +221,24 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
         out.append("\\begin{minipage}{\\linewidth}\\raggedright\\setlength{\\parindent}{0pt}" + "\\par ".join(n.latex() for n in notes) + "\\end{minipage}")
     out.append("\\end{sidewaystable}" if turned else "\\end{table}")
     return "\n".join(out) + "\n"
+
+
+_WRAPPING = {False: ">{\\centering\\arraybackslash}p{%.1fpt}", True: ">{\\raggedright\\arraybackslash}p{%.1fpt}"}
+_SHARED = {False: ">{\\hsize=%.3f\\hsize\\centering\\arraybackslash}X", True: ">{\\hsize=%.3f\\hsize\\raggedright\\arraybackslash}X"}
+
+
+def _wrapped_widths(low: list[int], natural: list[int], words: list[bool], stub_least: int, page: int, pad: int) -> list[int]:
+    """Per body column, the width in twips of LaTeX's text (Word's padding and tenth taken off) of a column of words:
+    its least width and, of the page's text the stub's least, the numbers and the columns' space leave, shares in
+    proportion to what each needs to be unwrapped, up to that (0 for a column of numbers)."""
+    # (least widths keep the tenth Word's measure adds: a column of words at its least in LaTeX's own widths would
+    # overflow wherever the estimate falls short, as it does for "|" or "~")
+    body = [float(lo - pad) for lo in low[1:]], [max(lo - pad, (na - pad) / 1.1) for lo, na in zip(low[1:], natural[1:])]
+    fixed = stub_least + sum(na for na, w in zip(body[1], words) if not w) + 2 * (len(low)) * _LATEX_SPACE
+    need = [na - lo if w else 0.0 for lo, na, w in zip(*body, words)]
+    spare = max(0.0, page - fixed - sum(lo for lo, w in zip(body[0], words) if w))
+    share = min(1.0, spare / sum(need)) if sum(need) > 0 else 0.0
+    return [int(lo + share * n) if w else 0 for lo, n, w in zip(body[0], need, words)]
 
 
 def _line_start(text: str) -> str:
