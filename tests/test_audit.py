@@ -167,6 +167,15 @@ def test_italics_in_word_text():
     assert "italics" in codes(text, italic=((0, 1), (14, 15), (24, 25)))  # η italic
 
 
+def test_a_symbol_the_style_writes_upright_is_not_an_italics_finding():
+    # AMA 11 writes SD upright, as in its "Mean (SD)" heads (the ama11 profile; memory), and statsetter's AMA output
+    # prints "SD = 0.73" so: against AMA that is no italics finding, against APA 7 (which italicises SD) it is one
+    text = "t(38) = 2.14, p = .039, M = 4.22, SD = 0.73"
+    italic = ((0, 1), (14, 15), (24, 25))  # t, p and M italic, SD roman
+    assert "italics" not in codes(text, "ama11", italic=italic)
+    assert "italics" in codes(text, "apa7", italic=italic)
+
+
 def test_grim():
     # Brown & Heathers (2016): a mean of 28 integer scores must be k/28; 5.19 is not (5.18 = 145/28 is)
     assert "grim" in codes("M = 5.19, SD = 1.20, n = 28", grim_items=1)

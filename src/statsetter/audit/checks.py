@@ -337,8 +337,14 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
     if tight:
         out.append(Finding("spacing", "Put a space on each side of =, < and >.", ", ".join(t.strip() for t in tight)))
     if italic is not None:
-        out += _italics(rep, text, italic)
+        out += _italics(rep, text, italic, _roman(style))
     return out
+
+
+@functools.lru_cache(maxsize=16)
+def _roman(style: Style) -> frozenset[str]:
+    """The checked Latin symbols the style writes upright (AMA 11's SD), which the italics check leaves alone."""
+    return frozenset(name for name in _ITALIC_NAMES if "<i>" not in style.symbol(name))
 
 
 @functools.lru_cache(maxsize=16)  # (a Style is hashed by identity; an audit asks for every p)
@@ -422,9 +428,9 @@ def _italic_rule(symbol: str, name: str) -> int | None:
     return None
 
 
-def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]]) -> list[Finding]:
+def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]], roman: frozenset[str] = frozenset()) -> list[Finding]:
     """Latin symbols italic, Greek letters roman (APA 7 §6.45); words
-    (chi-square, partial, adjusted) are not checked."""
+    (chi-square, partial, adjusted) and the symbols the style writes upright (``roman``) are not checked."""
     bad = []
     symbols: list[tuple[int, str, str]] = []
     if rep.symbol is not None:
@@ -436,7 +442,7 @@ def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]]) -> list
     italic = _italic(spans)
     for start, symbol, name in symbols:
         rule = _italic_rule(symbol, name)
-        if rule is None:
+        if rule is None or (rule < 0 and name in roman):
             continue
         if rule >= 0:
             if start + rule in italic:
