@@ -6,6 +6,7 @@ scipy.stats.f for the F change, and Nagelkerke's (1991) R² formula.
 """
 
 import math
+import re
 
 import pingouin as pg
 import pytest
@@ -236,3 +237,22 @@ def test_a_small_coefficient_has_its_se_with_the_same_decimals():
     records = linear_regression(tips, "tip", ["total_bill", "size", "sex", "time"])
     lunch = next(r for r in records if r.details.get("category") == "Lunch")
     assert "B = −0.001, 95% CI [−0.297, 0.295], SE = 0.150, β = .00" in render(lunch, "sentence", "apa7").plain()
+
+
+def test_a_null_odds_ratio_sentence_names_the_ratio_first():
+    # read aloud on the ANES 1996 pilot (statsmodels' anes96): "The odds ratio of age for expected vote, holding the
+    # other predictors constant, was B = 0.004, SE = 0.005, OR = 1.00 …" — the sentence named the odds ratio and gave
+    # B first. Now the ratio it names comes first, then B, SE, z and p (both styles); the audit reads it back clean
+    import statsmodels.api as sm
+
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    d = sm.datasets.anes96.load_pandas().data.assign(vote=lambda f: f.vote.map({0: "Clinton", 1: "Dole"}))
+    records = logistic_regression(d, "vote", ["age", "educ", "selfLR"], event="Dole")
+    age = next(r for r in records if r.kind == "logistic_coefficient" and r.details.get("term") == "age")
+    for style in ("apa7", "ama11"):
+        said = render(age, "sentence", style).plain()
+        assert said.startswith("The odds ratio of age") and re.search(r"was OR = 1\.00[ ,(]", said), said
+        assert said.index("OR =") < said.index("B =") < said.index("z =")
+        assert not [e for e in audit_units([Unit("s", said)], style) if e.findings]
