@@ -129,11 +129,11 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
     mark = style.decimal_mark if style is not None else "."
     decimal = t.decimal_columns(mark) if style is not None and style.tables.get("number_align") == "decimal" else (False,) * len(t.columns)
     shapes = _body_shapes(t)
-    low, widths = _least_and_natural(t, shapes)  # each column's least and natural (unwrapped) width, in Word's measure
+    low, natural = _least_and_natural(t, shapes)  # each column's least and natural (unwrapped) width, in Word's measure
     # a column of words (a labelled ordinal's categories: "Moderate (Slightly liberal–Moderate)") wraps between them in a
     # width of its own, as in Word; a column of numbers keeps its natural width
     words = [w and not d for w, d in zip(word_columns(shapes), decimal)]  # (a column aligned on its decimal mark keeps it)
-    widths = [widths[0]] + [lo if w else na for lo, na, w in zip(low[1:], widths[1:], words)]
+    widths = [natural[0]] + [lo if w else na for lo, na, w in zip(low[1:], natural[1:], words)]
     stub_least = max((_longest_word(r.stub.text) for r in t.rows), default=0) + _HANG
     # twips: the table with its stub wrapped at its longest word, with LaTeX's column space (not Word's cell margins)
     # and without the tenth ``_chars`` adds so that Word never breaks a word (the goldens' tables as LaTeX set them
@@ -154,7 +154,6 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
                 right = split_decimal(c, mark)[1]
                 if len(right.text) > len(longest[j]):
                     longest[j] = right.latex()
-    natural = _least_and_natural(t, shapes)[1]
     page = _LANDSCAPE if turned else _PORTRAIT
     wrapped = _wrapped_widths(low, natural, words, stub_least, page, _PAD)
     # the stub and the columns of words share what the numbers leave of the line (tabularx's X columns, each's share

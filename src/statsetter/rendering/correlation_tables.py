@@ -64,7 +64,7 @@ def correlation_table(
         general += f" to {num.integer(max(ns))}." if len(ns) > 1 else " for every pair."
     else:
         general = ""
-    mean = "Mean" if resolved.wording.get("descriptives") == "mean_sd" else resolved.symbol("M")  # AMA spells it out
+    mean = "Mean" if resolved.spells_out else resolved.symbol("M")  # AMA spells it out
     if show and ns != {m.rows}:
         general += f" {mean} and {resolved.symbol('SD')} are of each variable's observed values."
     if intervals:

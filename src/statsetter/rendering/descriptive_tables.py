@@ -60,9 +60,9 @@ class _Layout:
         given = self.style.symbols.get(key)
         if given is None:
             return f"{self.sym(symbols[0])} ({self.sym(symbols[1])})"
-        plain = re.sub(r"<[^>]+>", "", given)
+        plain = StyledText.from_markup(given).plain()
         for name in symbols:
-            if re.search(rf"(?<!\w){re.escape(re.sub(r'<[^>]+>', '', self.style.symbol(name)))}(?!\w)", plain):
+            if re.search(rf"(?<!\w){re.escape(StyledText.from_markup(self.style.symbol(name)).plain())}(?!\w)", plain):
                 self.sym(name)
         return given
 

@@ -144,8 +144,7 @@ def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95)
     if style.figures.get("means") == "bars":
         note = note.replace("Points show", "Bars show")
     title = f"{'Median' if medians else 'Mean'} {_lower(outcome)} by {_lower(axis)}"
-    spelled = style.wording.get("descriptives") == "mean_sd"  # AMA: "mean", "median" in words, as its tables and text
-    centre = ("median" if medians else "mean") if spelled else style.symbol("Mdn" if medians else "M")
+    centre = ("median" if medians else "mean") if style.spells_out else style.symbol("Mdn" if medians else "M")  # AMA: words
     return FigureModel(
         kind="means",
         about=_prose(title),

@@ -112,7 +112,7 @@ class Helpers:
         self._ci_attach = _escape_text(ci["attach"].format(sep=sep))
         self.significance_wording: bool = bool(style.wording.get("significance", False))
         self._serial: bool = bool(style.wording.get("serial_comma", True))
-        self._mean_sd: bool = style.wording.get("descriptives", "symbols") == "mean_sd"
+        self._mean_sd: bool = style.spells_out
         self._pseudo = f"R2_{style.wording.get('pseudo_r2', 'nagelkerke')}"
         self._df_sub: bool = style.data["numbers"].get("df_form", "parentheses") == "subscript"
         # inside a statistic ("t(38) = 2.14", "p < .001", "95% CI [a, b]", "n = 93") the style's unbreakable space
@@ -285,11 +285,13 @@ class Helpers:
         g: GroupSummary = r.groups[index]
         out = []
         path = f"groups[{index}]"
+        worded = False  # a part in words (AMA: "mean [SD], …", "median, …") is followed by a semicolon
         if self._mean_sd and g.mean is not None and g.sd is not None and "mean" in parts.split() and "sd" in parts.split():
             m = self.num.number(g.mean, "M", held=_held(r, f"{path}.mean"))
             sd = self.num.number(g.sd, "SD", held=_held(r, f"{path}.sd"))
             out.append(f"mean [SD], {m} [{sd}]")
             parts = " ".join(p for p in parts.split() if p not in ("mean", "sd"))
+            worded = True
         named = g.extra.get("median_label")  # the category a coded median stands for: "4 [Moderate]"
         if self._mean_sd and g.median is not None and "median" in parts.split():  # words, not Mdn: "median, 2" (AMA)
             median = self.num.number(g.median, "Mdn", held=0 if named else _held(r, f"{path}.median")) + (f" [{_escape_text(named)}]" if named else "")
@@ -299,6 +301,7 @@ class Helpers:
             else:
                 out.append(f"median, {median}")
             parts = " ".join(p for p in parts.split() if p not in ("median", "iqr"))
+            worded = True
         for part in parts.split():
             v = getattr(g, _GROUP_FIELDS[part])
             if v is None:
@@ -316,7 +319,7 @@ class Helpers:
             else:
                 text = self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))
             out.append(f"{self.sym(symbol)}{self._eq}{text}")
-        return ("; " if self._mean_sd and out and out[0].startswith(("mean [SD]", "median,")) else self._join).join(out)
+        return ("; " if worded else self._join).join(out)  # after a worded part ("mean [SD], 2.86 [0.59]") a semicolon
 
     def quartile(self, r: Result, index: int, which: str) -> str:
         """A group's first or third quartile, with the decimals its median has (a whole-number score's "2", as

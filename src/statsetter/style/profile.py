@@ -325,6 +325,12 @@ class Style:
         return frozenset(self.data["numbers"]["bounded"]["quantities"])
 
     @property
+    def spells_out(self) -> bool:
+        """Whether the style writes descriptive statistics in words ("mean [SD], 2.86 [0.59]", "Median (IQR)", an axis's
+        "mean": AMA 11) rather than as symbols (M, Mdn): ``[wording] descriptives = "mean_sd"``."""
+        return self.data["wording"].get("descriptives", "symbols") == "mean_sd"
+
+    @property
     def keep_together(self) -> str:
         """The space inside a statistic ("n = 93", "p < .001"): a no-break
         space, a thin no-break space or a plain one, as ``[numbers] keep_together`` says."""
