@@ -164,3 +164,35 @@ def test_ama_spells_medians_out_as_it_does_means():
     ranks = [mann_whitney(tips, "size", "sex").main]
     assert means_figure(ranks, load_style("ama11")).y_label == "Size (median)"  # the axis as the table and text say it
     assert means_figure(ranks, load_style("apa7")).y_label == "Size (<i>Mdn</i>)"
+
+
+def test_medians_without_quartiles_print_the_digits_the_medians_have():
+    # read aloud on the ANES 1996 pilot (statsmodels' anes96): days a week of TV news (whole numbers) by education.
+    # Every median is a whole day, but one group's first quartile falls between two scores (2.75, numpy's default
+    # percentile, as R's type 7 — practice), and the sentence, which gives medians only, had printed "Mdn = 5.00".
+    # The medians now take the decimals of the medians alone; where a sentence gives a median with its quartiles, the
+    # median takes theirs ("Mdn = 6.00, IQR = [2.75, 7.00]"), so the three agree.
+    import statsmodels.api as sm
+
+    from statsetter.rendering.sentences import Helpers
+    from statsetter.style.profile import load_style
+
+    d = sm.datasets.anes96.load_pandas().data
+    r = kruskal_wallis(d, "TVnews", "educ").main
+    medians = {str(g.label): np.median(d.TVnews[d.educ == float(g.label)]) for g in r.groups}
+    assert all(float(m).is_integer() for m in medians.values())
+    assert any(not float(g.q1).is_integer() and not (2 * g.q1).is_integer() for g in r.groups)  # 2.75 in some group
+    said = render(r, "sentence", "apa7").plain()
+    printed = re.findall(r"\(Mdn = ([\d.]+), n = \d+\)", said)
+    assert printed == [f"{m:.0f}" for m in medians.values()], said
+    ama = render(r, "sentence", "ama11").plain()
+    assert re.findall(r"\(median, ([\d.]+); n = \d+\)", ama) == printed, ama
+    i = next(i for i, g in enumerate(r.groups) if not (2 * g.q1).is_integer())
+    both = Helpers(load_style("apa7")).desc(r, i, "median iqr")
+    assert re.fullmatch(r"Mdn = \d\.\d\d, IQR = \[\d\.\d\d, \d\.\d\d\]", _plain(both)), both
+
+
+def _plain(markup: str) -> str:
+    from statsetter.styled import StyledText
+
+    return StyledText.from_markup(markup).plain()

@@ -26,17 +26,20 @@ def _median_summary(label: str, v: "np.ndarray") -> GroupSummary:
 
 def score_precision(samples: "Sequence[np.ndarray]", groups: "Sequence[GroupSummary]") -> dict[str, int]:
     """Held decimals for the groups' medians and quartiles when every value is a whole number (a score, a rating, a
-    count): ``score_decimals`` of them all, as Table 1 prints an ordinal row; the same for every group."""
+    count), the same for every group: the quartiles' are ``score_decimals`` of medians and quartiles together, as Table
+    1 prints an ordinal row; the medians' of the medians alone (whole, or halves), for a sentence that gives medians
+    without quartiles — "Mdn = 5", not "5.00" because some quartile fell between scores. A sentence that gives both
+    prints the median with its quartiles' decimals (`sentences`)."""
     import numpy as np
 
     from ..style.numbers import score_decimals
 
     if not samples or not all(len(v) and np.array_equal(v, np.floor(v)) for v in samples):
         return {}
-    decimals = score_decimals(x for g in groups for x in (g.median, g.q1, g.q3) if x is not None)
-    if decimals is None:
-        return {}
-    return {f"groups[{i}].{name}": decimals for i in range(len(groups)) for name in ("median", "q1", "q3")}
+    medians = score_decimals(g.median for g in groups if g.median is not None)
+    quartiles = score_decimals(x for g in groups for x in (g.median, g.q1, g.q3) if x is not None)
+    decimals = {"median": medians, "q1": quartiles, "q3": quartiles}
+    return {f"groups[{i}].{name}": d for i in range(len(groups)) for name, d in decimals.items() if d is not None}
 
 
 def _two_groups(df: "pd.DataFrame", outcome: str, group: str, groups: Sequence[object] | None, test: str):  # type: ignore[no-untyped-def]

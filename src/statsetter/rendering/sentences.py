@@ -293,9 +293,11 @@ class Helpers:
             parts = " ".join(p for p in parts.split() if p not in ("mean", "sd"))
             worded = True
         named = g.extra.get("median_label")  # the category a coded median stands for: "4 [Moderate]"
+        quartiled = "iqr" in parts.split() and g.q1 is not None and g.q3 is not None
+        median_held = 0 if named else _held(r, f"{path}.{'q1' if quartiled else 'median'}")  # beside its quartiles, their decimals
         if self._mean_sd and g.median is not None and "median" in parts.split():  # words, not Mdn: "median, 2" (AMA)
-            median = self.num.number(g.median, "Mdn", held=0 if named else _held(r, f"{path}.median")) + (f" [{_escape_text(named)}]" if named else "")
-            if "iqr" in parts.split() and g.q1 is not None and g.q3 is not None:  # "median [IQR], 2 [1-3]"
+            median = self.num.number(g.median, "Mdn", held=median_held) + (f" [{_escape_text(named)}]" if named else "")
+            if quartiled:  # "median [IQR], 2 [1-3]"
                 q1, q3 = self.quartile(r, index, "q1"), self.quartile(r, index, "q3")
                 out.append(f"median [IQR], {median} [{self.num.span(q1, q3, g.q1 < 0, self._nb)}]")
             else:
@@ -314,8 +316,8 @@ class Helpers:
                 if q1 is None or q3 is None:
                     continue
                 text = f"[{self.quartile(r, index, 'q1')}{self.sep}{self._nb}{self.quartile(r, index, 'q3')}]"
-            elif part == "median" and named:  # a code, printed as one, with its category
-                text = f"{self.num.number(v, symbol, held=0)} [{_escape_text(named)}]"
+            elif part == "median":  # a code is printed as one, with its category
+                text = self.num.number(v, symbol, held=median_held) + (f" [{_escape_text(named)}]" if named else "")
             else:
                 text = self.num.number(v, symbol, held=_held(r, f"{path}.{_GROUP_FIELDS[part]}"))
             out.append(f"{self.sym(symbol)}{self._eq}{text}")
