@@ -461,3 +461,33 @@ def test_a_table_of_labelled_categories_wraps_them_in_word_and_latex(tmp_path):
     subprocess.run(["pdflatex", "-interaction=nonstopmode", "party.tex"], cwd=tmp_path, capture_output=True, timeout=120)
     log = (tmp_path / "party.log").read_text(errors="replace")
     assert (tmp_path / "party.pdf").exists() and "Overfull" not in log
+
+
+def test_groups_labelled_by_answers_or_bare_codes_are_named_with_their_variable(tmp_path):
+    # read aloud on Fair's (1978) affairs survey as statsmodels ships it (sm.datasets.fair): age by whether any time
+    # was spent in affairs, coded 0/1 as such data come, once with the value labels "no"/"yes" (as .sav files carry
+    # them) and once without. The sentence had read "Age was lower in no (M = 28.39, …) than in yes" — and "in 0 …
+    # than in 1" with bare codes; such a group is now named with its variable, as Table 1's spanner names it ("any
+    # affair: no"), and the run's notes say so and how to name the groups. Labels that name groups stay as they are.
+    # Means: pandas on the same columns.
+    import statsmodels.api as sm
+
+    from statsetter.analyses import t_independent
+
+    d = sm.datasets.fair.load_pandas().data
+    d = d.assign(any_affair=(d.affairs > 0).astype(int))
+    no, yes = d.age[d.any_affair == 0].mean(), d.age[d.any_affair == 1].mean()
+    said = render(t_independent(d, "age", "any_affair", labels={"any_affair": "any affair"}).main, "sentence", "apa7").plain()
+    assert re.search(rf"lower in any affair: 0 \(M = {no:.2f}, .*\) than in any affair: 1 \(M = {yes:.2f}, ", said), said
+    d.to_csv(tmp_path / "fair.csv", index=False)
+    out = plan_run(tmp_path, '[data]\npath = "fair.csv"\nlabels = { any_affair = "any affair" }\n'
+                   'value_labels = { any_affair = { 0 = "no", 1 = "yes" }, religious = { 1 = "not religious", 2 = "mildly religious", '
+                   '3 = "fairly religious", 4 = "strongly religious" } }\n'
+                   '[[analyses]]\nid = "age_affair"\nkind = "t_independent"\noutcome = "age"\ngroup = "any_affair"\n'
+                   '[[analyses]]\nid = "age_religious"\nkind = "anova_oneway"\noutcome = "age"\ngroup = "religious"\n')
+    said = " ".join(render(r, "sentence", "apa7").plain() for r in out.records)
+    assert re.search(rf"lower in any affair: no \(M = {no:.2f}, .*\) than in any affair: yes \(M = {yes:.2f}, ", said), said
+    assert "Group means were not religious (M = " in said  # labels that name their groups are left alone
+    assert [n for n in out.notes if "name no group" in n] == [
+        "age_affair: the groups of any affair are labelled 'no', 'yes', which name no group in a sentence; the sentences write "
+        "'any affair: no'. Value labels that name the groups (data.value_labels) read better"]

@@ -610,8 +610,28 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     notes += [f"{where.get(r.id or '', r.id)}: left out {lev.describe()}; list it in variables to describe it"
               for r in records if isinstance(r, Description) for lev in r.left_out]
     notes += [f"{r.id}: {note.text}" for r in records if isinstance(r, Result) for note in r.notes if note.kind == "choice"]  # never silent
+    notes += _unnamed_groups(records)
     return RunResult(records, tables, [], notes, blocks=list(section.blocks), table_ids=dict(section.tables),
                      figure_ids={f.id or "": f for _, f in drawn})
+
+
+def _unnamed_groups(records: list[Record]) -> list[str]:
+    """A note for each analysis whose groups are labelled by answers or bare codes ("no", "1"), which name no group in
+    a sentence: the sentences then name them with their variable ("any affair: no"), and the note says so."""
+    from .rendering.sentences import names_no_group
+
+    out, seen = [], set()
+    for r in records:
+        v = r.variable("group") if isinstance(r, Result) else None
+        analysis = (r.id or "").split(":", 1)[0]
+        if v is None or analysis in seen:
+            continue
+        bare = [str(g.label) for g in r.groups if names_no_group(str(g.label))]
+        if bare:
+            seen.add(analysis)
+            out.append(f"{analysis}: the groups of {v.display} are labelled {', '.join(repr(b) for b in bare)}, which name no group in a "
+                       f"sentence; the sentences write '{v.display}: {bare[0]}'. Value labels that name the groups (data.value_labels) read better")
+    return out
 
 
 def _figures(plan: Plan, records: list[Record], data: _Data, style: "Style") -> list[tuple[str, "FigureModel"]]:

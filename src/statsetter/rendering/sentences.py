@@ -123,7 +123,7 @@ class Helpers:
         self._ci_pattern_neg = self._ci_pattern_neg.replace(" ", nb)
 
     _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est se desc cat count pct number df compatible paren".split()
-    _PLAIN = "var var_list cap verdict significant direction_word null and_next predictors pseudo_r2".split()
+    _PLAIN = "var var_list group cap verdict significant direction_word null and_next predictors pseudo_r2".split()
 
     def raw(self) -> dict[str, Any]:
         """The names a compiled stats form sees: the markup helpers as they
@@ -379,6 +379,15 @@ class Helpers:
         v = r.variable(role)
         return v.display if v is not None else fallback
 
+    def group(self, r: Result, index: int) -> str:
+        """Group ``index``'s name in a sentence: its label, or, where the label names no group by itself — an answer
+        ("no", "yes", "true", "absent") or a bare number (a code without a value label) — the grouping variable's
+        name with it, as Table 1's spanner gives it: "lower in any affair: no (M = …) than in any affair: yes", not
+        "lower in no than in yes". (A value label that names the group, "no affair", is printed as it is.)"""
+        label = str(r.groups[index].label)
+        v = r.variable("group")
+        return f"{v.display}: {label}" if v is not None and names_no_group(label) else label
+
     def var_list(self, r: Result, role: str, fallback: str = "") -> str:
         """Every variable in ``role``, listed ("a and b")."""
         names = [v.display for v in r.variables if v.role == role]
@@ -441,6 +450,17 @@ _GROUP_SYMBOLS = {"mean": "M", "sd": "SD", "n": "n", "median": "Mdn", "iqr": "IQ
 def _level_decimals(level: float) -> int:
     pct = round(level * 100, 6)
     return 0 if pct.is_integer() else len(repr(pct).split(".")[1])
+
+
+_ANSWERS = frozenset("yes no y n true false present absent".split())  # labels that answer a question, naming no group
+_BARE_NUMBER = re.compile(r"[-+−]?\d+(?:[.,]\d+)?")
+
+
+def names_no_group(label: str) -> bool:
+    """Whether a group's label names no group in a sentence by itself: an answer ("no", "Yes", "absent") or a bare
+    number (a code without a value label)."""
+    label = label.strip()
+    return label.lower() in _ANSWERS or _BARE_NUMBER.fullmatch(label) is not None
 
 
 def _held(r: Result, path: str) -> int | None:
