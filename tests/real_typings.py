@@ -245,6 +245,8 @@ SOURCES.update({
                           "a doctoral thesis, p. 247 (Nottingham eTheses, via yumpu)"),
 })
 
+SOURCES["corpapers-ws"] = ("https://corpapers.com/70-page19", "a paper on orientation discrimination in Williams syndrome, p. 19 (shared on corpapers)")
+
 
 def _t(df: float, value: str, p: str) -> Stat:
     return Stat("t", (df,), value, p)
@@ -336,4 +338,15 @@ HELD_OUT: tuple[Text | Table, ...] = (
          "for backgrounds initially presented with negative than positive objects (F(1,89) =\n15.16, p < .001). Planned contrasts revealed "
          "significantly greater general\nrecognition of emotional than neutral objects (F(1,89) = 20.94, p < .001)",
          (_f(1, 89, "3.75", "= .06"), _f(1, 89, "15.16", "< .001"), _f(1, 89, "20.94", "< .001"))),
+    # (added later: its df broken across lines, no spaces around the operators, and a bound "F<1" with no p)
+    Text("corpapers-ws", "response type was significant, F(1, 40)=19.09, p<.001, partial η2=.32, due to\nincreased accuracy on the „different’ "
+         "responses. There was also a significant\ninteraction between size ratio and response type, F(4, 160)=5.85, p<.001, partial\n"
+         "η2=.13, which is investigated below. The interaction between response type and group\nwas not significant, F(1, 40)=2.43, p=.13, "
+         "partial η2=.06, and the 3-way interaction\nbetween response type, size ratio, and group was also not significant, F(4, 160)=1.14,\n"
+         "p=.34, partial η2=.03.",
+         (_f(1, 40, "19.09", "< .001"), _f(4, 160, "5.85", "< .001"), _f(1, 40, "2.43", "= .13"), _f(4, 160, "1.14", "= .34"))),
+    Text("corpapers-ws", "main effect of ratio for „same’ responses, reported in terms of the linear contrast, F(1,\n41)=44.28, p<.001, partial "
+         "η2=.52. This contrasted to the results of the analysis of the\n„different’ response, where the main effect of size ratio was not "
+         "significant, reported\nin terms of the linear contrast, F<1.",
+         (_f(1, 41, "44.28", "< .001"),)),
 )

@@ -6,6 +6,8 @@ expected p values are scipy's (computed here), never typed in."""
 
 from __future__ import annotations
 
+import re
+
 import docx
 from scipy import stats
 
@@ -105,6 +107,24 @@ def test_f_below_one_and_line_breaks():
     assert not _p_findings(below) and below.checked.endswith("to 1")
     assert broken.found.startswith("F (1,\n56) = 0.50") and not _p_findings(broken)
     assert "p-does-not-follow" in wrong.codes  # an F below 1 can never give p < .01
+
+
+def test_a_statistic_given_as_a_bound_keeps_it_in_every_suggestion():
+    """Authors write an F below 1 as "F < 1" (practice; the PLOS ONE table of tests/real_typings.py, source pmc4476782,
+    prints "F (1,56) < 1 | η2 = .002 | n.s."). Read on such typings, the audit had suggested "F(1, 56) = 1, p = .661":
+    the bound turned into a value, a p made up from it (the midpoint of the p values the bound allows), and a decimals
+    finding on the bound's "1". The suggestion and the tracked change now keep the operator and print no p the text
+    did not give; the bound is no rounding to find decimals in; a p that cannot follow is still found."""
+    units = [Unit("p1", "The sound factor had no effect, F (1,56) < 1, η2 = .002, n.s."), Unit("p2", "The effect: F(1,56)<1."),
+             Unit("p3", "Reliable, F(1, 56) < 1, p < .01."), Unit("p4", "Also F(1, 56) < 1, p = .45.")]
+    entries = audit_units(units, suggest_all=True, restyle=True)
+    suggestions = [e.suggestion for e in entries]
+    assert suggestions == ["F(1, 56) < 1, η² = .00", "F(1, 56) < 1", "F(1, 56) < 1", "F(1, 56) < 1, p = .45"], suggestions
+    revisions = [e.revision.plain() if e.revision is not None else None for e in entries]
+    assert revisions == [None, "F(1, 56) < 1", None, None], revisions  # p1: the style's two decimals would make η2 = .002 zero
+    assert "round a number to zero" in entries[0].kept
+    assert not any(re.search(r"(?<![\d.])1 \(2 wanted\)", e.message) for e in entries), [e.message for e in entries]
+    assert "spacing" in entries[1].codes and "p-does-not-follow" in entries[2].codes
 
 
 def test_a_named_procedure_excuses_only_a_p_larger_than_the_unadjusted():

@@ -53,6 +53,10 @@ CASES = [
     (f"t (df = 44) = 2.61, p = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
     (f"chi square (3, N = 250) = 7.42, p = {p3(C)}", "chi2", (3,), 250, 7.42, "=", float(p3(C))),
     (f"Z = 2.61, p = {p3(stats.norm.sf(2.61) * 2)}", "z", (), None, 2.61, "=", float(p3(stats.norm.sf(2.61) * 2))),
+    # the Greek capital Χ (U+03A7), as a symbol font types chi: "Χ2(1, N = 80) = 0.09, p > .90" in a course handout posted
+    # online (https://www.sweetstudy.com/files/note4results-docx-7564693), "Χ^{2}_{critical}" on Anglia Ruskin University's
+    # biostatistics pages (http://web.anglia.ac.uk/numbers/biostatistics/one_way_chi_square/how.html); it had not been read
+    (f"Χ2(3, N = 250) = 7.42, p = {p3(C)}", "chi2", (3,), 250, 7.42, "=", float(p3(C))),
 ]
 
 
@@ -96,3 +100,21 @@ def test_spelled_out_greek_effect_sizes():
     names = {r.effects[0].name for text in ("partial eta squared = .12", "omega squared = .05", "Cramer's V = .21", "eta squared = .08")
              for r in find_statistics(text)}
     assert names == {"eta2_p", "omega2", "V", "eta2"}
+
+
+def test_df_spaced_otherwise_than_the_style_is_a_spacing_finding_and_is_restyled():
+    """APA 7 writes the df right after the symbol, a space after each comma: "F(1, 85)", "χ2(1, N = 80)" (its examples;
+    practice). Real authors type "F(1,85)" (a Nottingham thesis and a Stroop thesis in tests/real_typings.py), "t (38)"
+    and "χ2(1,N = 80)": each is now a spacing finding, and the revision restyles it — before, "F(1,85)" read as the one
+    number 1,85 to the check that a revision keeps every number, and such a statistic was always left as typed.
+    Subscript df (AMA's form) are not this check's; the numbers are this test's own, their p computed with scipy."""
+    f, t = stats.f.sf(2.10, 1, 85), stats.t.sf(2.10, 38) * 2
+    chi = stats.chi2.sf(4.20, 1)
+    units = [Unit("p1", f"Also F(1,85) = 2.10, p = {p3(f)}."), Unit("p2", f"And t (38) = 2.10, p = {p3(t)}."),
+             Unit("p3", f"And χ2(1,N = 80) = 4.20, p = {p3(chi)}."), Unit("p4", f"And F(1, 85) = 2.10, p = {p3(f)}."),
+             Unit("p5", f"And F₁,₈₅ = 2.10, p = {p3(f)}.")]
+    entries = audit_units(units, restyle=True)
+    assert [e.codes for e in entries] == [["spacing"], ["spacing"], ["spacing"], [], []]
+    assert [e.findings[0].evidence for e in entries[:3]] == ["F(1,85)", "t (38)", "χ2(1,N = 80)"]
+    assert [e.revision.plain() if e.revision is not None else None for e in entries[:3]] == [
+        f"F(1, 85) = 2.10, p = {p3(f)}", f"t(38) = 2.10, p = {p3(t)}", f"χ²(1, N = 80) = 4.20, p = {p3(chi)}"]  # (² a superscript in Word)

@@ -334,11 +334,31 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
         if p.symbol_text in ("p", "P") and p.symbol_text != letter and letter in ("p", "P"):
             out.append(Finding("p-symbol", f"Write the p value's symbol as {letter}, as the style does.", text[p.start : p.end]))
     tight = [text[s:e] for s, e in rep.operators if not (text[s:s + 1].isspace() and text[e - 1 : e].isspace())]
-    if tight:
-        out.append(Finding("spacing", "Put a space on each side of =, < and >.", ", ".join(t.strip() for t in tight)))
+    apart = _df_spacing(rep, text) if style.data["numbers"].get("df_form", "parentheses") == "parentheses" else ""
+    if tight or apart:
+        said = ["Put a space on each side of =, < and >."] if tight else []
+        said += ["Write the df as the style does: the parenthesis right after the symbol, a space after the comma."] if apart else []
+        out.append(Finding("spacing", " ".join(said), ", ".join([t.strip() for t in tight] + ([apart] if apart else []))))
     if italic is not None:
         out += _italics(rep, text, italic, _roman(style))
     return out
+
+
+def _df_spacing(rep: Reported, text: str) -> str:
+    """The head's symbol and df as typed when they are spaced otherwise than "F(1, 56)": a space before the
+    parenthesis ("F (1, 56)") or none after a comma between df ("F(1,56)") (APA 7's examples; practice); "" if not."""
+    if not rep.df or rep.symbol_start < 0:
+        return ""
+    gap = text[rep.symbol_start + len(rep.symbol_text) : rep.df[0].start]
+    if gap.strip() not in ("(", "["):  # df typed otherwise (subscripts, "F2, 97"): not this check's to judge
+        return ""
+    last = rep.n if rep.n is not None and rep.n.start > rep.df[-1].end else rep.df[-1]
+    commas = [text[a.end : b.start] for a, b in zip(rep.df, rep.df[1:])]
+    if last is rep.n:  # "χ2(1,N = 80)"
+        commas.append(text[rep.df[-1].end : rep.df[-1].end + 2])
+    if gap[:1].isspace() or any(c[:1] in (",", ";") and not c[1:2].isspace() for c in commas):
+        return text[rep.symbol_start : last.end + 1]
+    return ""
 
 
 @functools.lru_cache(maxsize=16)
@@ -359,7 +379,7 @@ def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> li
     """Numbers printed with other decimals than the style's; a p may have as
     few as ``accept`` decimals (the style's [p] accept_decimals)."""
     wrong = []
-    if rep.value is not None and rep.symbol is not None and rep.symbol not in _RANK_SUMS:
+    if rep.value is not None and rep.symbol is not None and rep.symbol not in _RANK_SUMS and rep.op == "=":  # ("F < 1": a bound, not a rounding)
         want = num.decimals_for(rep.symbol)
         if rep.value.decimals != want:
             wrong.append(f"{rep.value.text} ({want} wanted)")
@@ -635,7 +655,7 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
         precision["p"] = rep.p.number.decimals
         if style is not None:
             p = _as_printed(p, rep.p.number, style, alpha)
-    else:
+    elif rep.op == "=":  # (a statistic given as a bound, "F < 1", gives no p to print: none is made up from the bound)
         p = _recomputed_p(rep, alpha)
     effects = []
     if rep.symbol in ("r", "rs", "tau_b") and rep.value is not None and abs(rep.value.value) <= 1:

@@ -133,7 +133,9 @@ _EXPONENT_SPLIT = re.compile(r"^(?P<m>.*?)(?:\s?[eE](?P<e1>[-−+]?\d{1,3})|\s?[
 _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--")
 
 # each alternative starts with a literal character; `_guarded` puts the "not after a letter or point" test right after it
-_SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)", r"X\s?²", r"X\^2",
+# (Χ: the Greek capital chi, as some symbol fonts and keyboards type it)
+_SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
+            r"X\s?²", r"X\^2",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
             "t", "F", "r", "z", "Z", "U", "H", "W", "T", "Q")
 

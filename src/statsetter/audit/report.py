@@ -27,7 +27,7 @@ from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio,
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
-from .word import _UNMADE, house_text, restyled
+from .word import _UNMADE, house_text, restyled, threshold_p
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "CAUTION"]
 
@@ -108,14 +108,15 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
     if rep.symbol is None and not rep.effects:
         if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
             return ""
+        if rep.p.op != "=":
+            return threshold_p(rep, style).plain()  # type: ignore[union-attr]
         num = numbers_for(style)
-        held = rep.p.number.decimals
-        if rep.p.op == "=":
-            op, text = num.p(rep.p.number.value, alpha, held=held) if rep.p.number.value > 0 else num.p(0.0, alpha)
-        else:  # a threshold keeps the decimals it was given: "p < .05", never "p < .050"
-            op, text = {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op), num.number(rep.p.number.value, "p", held)
+        op, text = num.p(rep.p.number.value, alpha, held=rep.p.number.decimals) if rep.p.number.value > 0 else num.p(0.0, alpha)
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
     doubted = any(f.code == "p-does-not-follow" for f in findings)
+    if rep.op != "=":  # a bound ("F < 1") gives no p to recompute: its text without the doubted p
+        new = house_text(rep, style, alpha, with_p=False) if doubted or house is _UNMADE else house
+        return new.plain() if isinstance(new, StyledText) else ""
     if not doubted:
         new = house_text(rep, style, alpha) if house is _UNMADE else house
         return new.plain() if isinstance(new, StyledText) else ""  # a record the renderer cannot take: no suggestion

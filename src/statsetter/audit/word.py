@@ -18,6 +18,7 @@ from datetime import datetime, timezone
 from pathlib import Path
 from typing import TYPE_CHECKING, Sequence
 
+from ..style.numbers import numbers_for
 from ..styled import StyledText
 from .checks import Finding
 from .parsing import Reported
@@ -45,16 +46,51 @@ _P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
 # -- the restyled text of one statistic ---------------------------------------------
 
 
-def house_text(rep: Reported, style: "Style", alpha: float) -> StyledText | None:
+def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = True) -> StyledText | None:
     """The statistic as the style writes it (its numbers to their printed precision), or None when the renderer
-    cannot take its record (an impossible value)."""
+    cannot take its record (an impossible value). A statistic given as a bound ("F < 1") keeps its operator and
+    the p as the author gave it (a threshold, "p > .05"; none with ``with_p`` False): a bound gives no p to print."""
     from ..rendering.sentences import render
     from .checks import to_record
 
     try:
-        return render(to_record(rep, alpha, style), "stats", style)
+        text = render(to_record(rep, alpha, style), "stats", style)
     except Exception:  # noqa: BLE001 - a record the renderer cannot take: no text in the style
         return None
+    return text if rep.op == "=" else _bounded(text, rep, style, with_p)
+
+
+def threshold_p(rep: Reported, style: "Style", space: str = " ") -> StyledText | None:
+    """The author's p given as a threshold, in the style ("p < .05", never "p < .050": it keeps its decimals); None
+    for an exact p, "n.s." or none."""
+    p = rep.p
+    if p is None or p.op in ("=", "ns") or p.number is None or not 0 <= p.number.value <= 1:
+        return None
+    op = {"≤": "&lt;", "≥": "&gt;", "<": "&lt;", ">": "&gt;"}[p.op]
+    return StyledText.from_markup(f"{style.symbol('p')}{space}{op}{space}{numbers_for(style).number(p.number.value, 'p', p.number.decimals)}")
+
+
+def _bounded(text: StyledText, rep: Reported, style: "Style", with_p: bool) -> StyledText | None:
+    """A bound's record text with the statistic's "=" (the first outside parentheses and brackets, after its df and
+    N) as the author's operator ("F(1, 56) < 1"), and their threshold p after the bound; None where no such "=" is."""
+    depth = 0
+    for i, ch in enumerate(text.text):
+        if ch in "([":
+            depth += 1
+        elif ch in ")]":
+            depth -= 1
+        elif ch == "=" and depth == 0:  # one character for one: the style's spans keep their places
+            text = StyledText(text.text[:i] + rep.op + text.text[i + 1 :], text.spans)
+            p = threshold_p(rep, style, style.keep_together) if with_p else None
+            if p is None:
+                return text
+            end = _VALUE_END.match(text.text, i + 1).end()  # type: ignore[union-attr]
+            head, tail = text.split_at(end)
+            return head + f"{style.list_separator} " + p + tail
+    return None
+
+
+_VALUE_END = re.compile(r"\s*[^\s,;)\]]*")
 
 
 _UNMADE = object()  # restyled's house text not made beforehand
@@ -126,6 +162,8 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     for at, symbol in [(rep.symbol_start, rep.symbol_text)] + [(e.symbol_start, e.symbol_text) for e in rep.effects + rep.descriptives]:
         for i in range(max(at - rep.start, 0), min(at - rep.start + len(symbol), len(blank))):
             blank[i] = " "
+    for a, b in zip(rep.df, rep.df[1:]):  # "F(1,56)": two df, not the number 1,56
+        blank[a.end - rep.start : b.start - rep.start] = " " * (b.start - a.end)
     old_p = rep.p.number if rep.p is not None else None
     if old_p is not None:
         blank[old_p.start - rep.start : old_p.end - rep.start] = " " * (old_p.end - old_p.start)
