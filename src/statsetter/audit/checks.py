@@ -46,7 +46,7 @@ CODES: dict[str, tuple[str, str]] = {
     "p-zero": ("p = .000; a p value is never zero", "Numbers: never p = .000 (APA 7 §6.36)"),
     "p-symbol": ("p in the other case than the style's (APA 7 writes p, AMA 11 writes P)",
                  "Statistics in text: the p symbol (APA 7 §6.45, lowercase italic p; AMA 11 §19.5, capital P — memory)"),
-    "spacing": ("no space around an operator", "Statistics in text: spaces around = < > (APA 7 §6.45)"),
+    "spacing": ("no space around an operator, or df spaced otherwise than F(1, 56)", "Statistics in text: spaces around = < > (APA 7 §6.45); df as in its examples, F(1, 56)"),
     "hyphen-minus": ("a hyphen or dash where the style has a minus sign", "Numbers: true minus sign (practice; APA examples)"),
     "italics": ("a Latin symbol not in italics, or a Greek one in italics", "Statistics in text: italic symbols (APA 7 §6.45)"),
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
