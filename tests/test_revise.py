@@ -172,7 +172,7 @@ def test_a_field_inside_a_statistic_is_left_alone(tmp_path):
     root = etree.fromstring(zipfile.ZipFile(tmp_path / "out.docx").read("word/document.xml"))
     assert list(root.iter(f"{W}ins")) == []
     assert "Scores rose, t(30)=-2.14, p=0.040." in _texts(tmp_path / "out.docx")[0]
-    assert any("field, link or picture" in c.text for c in docx.Document(str(tmp_path / "out.docx")).comments)
+    assert any("field, link, picture or equation" in c.text for c in docx.Document(str(tmp_path / "out.docx")).comments)
 
 
 def test_decimal_commas_become_the_styles_points(tmp_path):
@@ -247,3 +247,68 @@ def test_a_chapter_typed_in_ama_is_revised_into_apa(tmp_path):
     assert accepted == ["Fatigue differed across depots (F(2, 97) = 4.51, p = .01).", "Shift and incidents were associated (χ2(2) = 9.87, p = .007).",
                         "Night drivers slept less (t(38) = 2.14, p = .04)."]  # (χ²'s 2 is a superscript run)
     assert [e.codes for e in audit_file(tmp_path / "accepted.docx", "apa7")] == [[]] * 3
+
+
+def _equation_manuscript(path):
+    """Statistics typed as Word equations, in the Office Math XML Word writes (ECMA-376 Part 1, §22.1: m:oMath holds
+    math runs m:r with their text in m:t; "(38)" is a delimiter object m:d whose parentheses are properties — the
+    default begChr "(" and endChr ")" — around its part m:e; χ² a superscript object m:sSup). The numbers are this
+    test's own; F(2, 97) = 4.51 gives p = .013 (scipy), so "p = .001" is wrong."""
+    M, W_NS = "http://schemas.openxmlformats.org/officeDocument/2006/math", W[1:-1]
+
+    def el(tag, *kids):
+        ns, name = tag.split(":")
+        e = etree.Element(f"{{{M if ns == 'm' else W_NS}}}{name}")
+        e.extend(kids)
+        return e
+
+    def run(text):
+        t = el("m:t")
+        t.text = text
+        return el("m:r", t)
+
+    def around(*parts):
+        return el("m:d", el("m:dPr"), *(el("m:e", *p) for p in parts))
+
+    d = docx.Document()
+    for before, math, after in (
+        ("Night drivers slept less, ", [run("t"), around([run("38")]), run("=2.14")], ", p = .039."),
+        ("Shifts differed, ", [run("F"), around([run("2, 97")]), run("=4.51, "), run("p"), run("=.001")], "."),
+        ("Incidents and shifts were associated, ", [el("m:sSup", el("m:sSupPr"), el("m:e", run("χ")), el("m:sup", run("2"))),
+                                                    around([run("2, "), run("N"), run("=200")]), run("=9.87, "), run("p"), run("=.007")], "."),
+    ):
+        p = d.add_paragraph(before)
+        p._p.append(el("m:oMath", *math))
+        p.add_run(after)
+    d.save(str(path))
+    return path
+
+
+def test_statistics_typed_as_word_equations_are_read_and_left_as_typed(tmp_path):
+    """Authors who type statistics with Word's equation editor: the reader had read only w:t text, so every statistic
+    in an equation was invisible to the audit, and a revision of a paragraph holding one would have put its changes in
+    the wrong place. Equations are now read as they show ("t(38)=2.14", the delimiter's parentheses and the
+    superscript's 2 included), their p checked; the equation spaces its operators itself (no spacing finding inside
+    it); a revision leaves an equation as typed with a comment saying why, and the comments' ranges stand beside the
+    equation, never inside it. LibreOffice opens both copies and prints the equations' text."""
+    from statsetter.audit.reading import read_units
+
+    source = _equation_manuscript(tmp_path / "equations.docx")
+    found = audit_file(source)
+    assert [e.found for e in found] == ["t(38)=2.14, p = .039", "F(2, 97)=4.51, p=.001", "χ2(2, N=200)=9.87, p=.007"]
+    assert [e.codes for e in found] == [["italics"], ["p-does-not-follow"], ["italics"]]  # italics: the typed p; a slanted χ
+    assert "0.01334 to 0.01346" in found[1].message
+    before = [u.text for u in read_units(source)]
+    main(["audit", str(source), "--revise", str(tmp_path / "revised.docx")])
+    main(["audit", str(source), "--annotate", str(tmp_path / "annotated.docx")])
+    for out in ("revised.docx", "annotated.docx"):
+        assert [u.text for u in read_units(tmp_path / out)] == before  # not a character moved
+        root = etree.fromstring(zipfile.ZipFile(tmp_path / out).read("word/document.xml"))
+        math = "{http://schemas.openxmlformats.org/officeDocument/2006/math}"
+        assert not [x for x in root.iter(f"{math}oMath") for y in x.iter() if y.tag.startswith(W)
+                    and y.tag.rsplit("}", 1)[1] in ("commentRangeStart", "commentRangeEnd", "ins", "del")]
+        assert len(list(root.iter(f"{W}commentRangeStart"))) == 3
+        assert "t(38)" in re.sub(r"\s", "", pdf_text(tmp_path / out))
+    assert not list(etree.fromstring(zipfile.ZipFile(tmp_path / "revised.docx").read("word/document.xml")).iter(f"{W}ins"))
+    comments = zipfile.ZipFile(tmp_path / "revised.docx").read("word/comments.xml").decode()
+    assert comments.count("equation lies inside the statistic") == 3

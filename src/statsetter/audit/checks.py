@@ -293,9 +293,10 @@ def _numbers_with_quantity(rep: Reported) -> list[tuple[Number, str]]:
 
 
 def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic: Sequence[tuple[int, int]] | None,
-                   read_mark: str | None = None) -> list[Finding]:
+                   read_mark: str | None = None, equations: Sequence[tuple[int, int]] = ()) -> list[Finding]:
     """Style findings; ``read_mark`` is the decimal mark the text was read with
-    (a number typed with another mark than the style's is a finding)."""
+    (a number typed with another mark than the style's is a finding). Inside a Word equation (``equations``: their spans)
+    the equation spaces operators and df itself: no spacing finding there."""
     num = numbers_for(style)
     mark = style.decimal_mark
     out: list[Finding] = []
@@ -333,12 +334,16 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
         letter = _p_letter(style)
         if p.symbol_text in ("p", "P") and p.symbol_text != letter and letter in ("p", "P"):
             out.append(Finding("p-symbol", f"Write the p value's symbol as {letter}, as the style does.", text[p.start : p.end]))
-    tight = [text[s:e] for s, e in rep.operators if not (text[s:s + 1].isspace() and text[e - 1 : e].isspace())]
+    tight = [(s, e) for s, e in rep.operators if not (text[s:s + 1].isspace() and text[e - 1 : e].isspace())]
+    if tight and equations:
+        tight = [(s, e) for s, e in tight if not any(a <= s < b for a, b in equations)]
     apart = _df_spacing(rep, text) if style.data["numbers"].get("df_form", "parentheses") == "parentheses" else ""
+    if apart and any(a <= rep.symbol_start < b for a, b in equations):
+        apart = ""
     if tight or apart:
         said = ["Put a space on each side of =, < and >."] if tight else []
         said += ["Write the df as the style does: the parenthesis right after the symbol, a space after the comma."] if apart else []
-        out.append(Finding("spacing", " ".join(said), ", ".join([t.strip() for t in tight] + ([apart] if apart else []))))
+        out.append(Finding("spacing", " ".join(said), ", ".join([text[s:e].strip() for s, e in tight] + ([apart] if apart else []))))
     if italic is not None:
         out += _italics(rep, text, italic, _roman(style))
     return out

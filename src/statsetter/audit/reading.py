@@ -39,6 +39,7 @@ class Unit:
     index: int = 0  # the paragraph's position among the part's w:p elements (a text block: its first line)
     origin: tuple[Trace, ...] = ()  # how text maps back to the file's characters (markers removed); () = as is
     cell: tuple[int, int, int] | None = None  # (table, row, column), all from 1, for a table cell's paragraph in Word
+    math: tuple[tuple[int, int], ...] = ()  # (start, end) of each Word equation's text: spaced by the equation, not the author
 
     def source_index(self, i: int) -> int:
         """Where character ``i`` of ``text`` is in the block as written."""
@@ -225,7 +226,7 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         cell = in_cell.get(para)
         if cell is None:
             body_count += 1
-        text, spans = _paragraph_text(para)
+        text, spans, math = _paragraph_text(para)
         if not text.strip():
             continue
         if cell is None:
@@ -233,22 +234,70 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         else:
             t, r, c = cell
             location = f"table {t}, row {r}, cell {c}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {c}"
-        yield Unit(location, text, spans, part, index, cell=cell)
+        yield Unit(location, text, spans, part, index, cell=cell, math=math)
 
 
 _VAL = f"{_W}val"
 _R, _T, _DEL, _I, _RPR = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}rPr"
 _CHUNKS = {f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
+_M = "{http://schemas.openxmlformats.org/officeDocument/2006/math}"
+OMATH = f"{_M}oMath"  # an equation (Office Math), inline or in an equation paragraph (m:oMathPara holds them)
+_M_R, _M_T, _M_D, _M_E, _M_VAL = f"{_M}r", f"{_M}t", f"{_M}d", f"{_M}e", f"{_M}val"
+_M_PLAIN = {"p", "b"}  # m:sty: plain (upright) and bold; the others (none, i, bi) are italic, as Word sets math
 
 
-def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
-    """A paragraph's text (deleted runs left out) and the spans of its italic runs, in one walk over its runs and their text."""
+def math_text(node) -> list[tuple[str, bool]]:  # type: ignore[no-untyped-def]
+    """An equation's text as it reads, in pieces (text, italic): its runs in order, a delimiter's characters around
+    its parts ("t(38)" is a run "t" and a delimiter around "38", whose parentheses are properties, not text: the
+    default "(" and ")", parts apart by "|"), a superscript after its base ("χ2")."""
+    out: list[tuple[str, bool]] = []
+    for child in node:
+        tag = child.tag
+        if tag == _M_R:
+            sty = child.find(f"{_M}rPr/{_M}sty")
+            italic = child.find(f"{_M}rPr/{_M}nor") is None and (sty is None or sty.get(_M_VAL) not in _M_PLAIN)
+            out += [(t.text or "", italic) for t in child.iter(_M_T)]
+        elif tag == _M_D:
+            props = child.find(f"{_M}dPr")
+
+            def char(name: str, default: str) -> str:
+                found = props.find(f"{_M}{name}") if props is not None else None
+                return default if found is None else found.get(_M_VAL, "")
+
+            out.append((char("begChr", "("), False))
+            for i, part in enumerate(c for c in child if c.tag == _M_E):
+                if i:
+                    out.append((char("sepChr", "|"), False))
+                out += math_text(part)
+            out.append((char("endChr", ")"), False))
+        elif not tag.endswith("Pr") and isinstance(tag, str) and tag.startswith(_M):  # sSup, sSub, e, sup, sub, f, num, …
+            out += math_text(child)
+    return out
+
+
+def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
+    """A paragraph's text (deleted runs left out), the spans of its italic runs and of its equations, in one walk over
+    its runs and their text."""
     pieces: list[str] = []
     spans: list[tuple[int, int]] = []
+    math: list[tuple[int, int]] = []
     length = 0
     italic, skip, run = False, True, None  # text outside a run is not read
-    for node in para.iter(_R, _T, _I, *_CHUNKS):
+    for node in para.iter(_R, _T, _I, OMATH, *_CHUNKS):
         tag = node.tag
+        if tag == OMATH:  # an equation: its text as it reads (its own runs are not w:r, w:t)
+            skip = True
+            begin = length
+            for chunk, slanted in math_text(node):
+                if chunk and slanted:
+                    if spans and spans[-1][1] == length:
+                        spans[-1] = (spans[-1][0], length + len(chunk))
+                    else:
+                        spans.append((length, length + len(chunk)))
+                pieces.append(chunk)
+                length += len(chunk)
+            math.append((begin, length))
+            continue
         if tag == _R:
             parent = node.getparent()
             run, skip, italic = node, parent is not None and parent.tag == _DEL, False
@@ -270,4 +319,4 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...]]:  # type: i
                 spans.append((length, length + len(chunk)))
         pieces.append(chunk)
         length += len(chunk)
-    return "".join(pieces), tuple(spans)
+    return "".join(pieces), tuple(spans), tuple(math)

@@ -22,6 +22,7 @@ from ..style.numbers import numbers_for
 from ..styled import StyledText
 from .checks import Finding
 from .parsing import Reported
+from .reading import OMATH, math_text
 
 if TYPE_CHECKING:
     from ..style.profile import Style
@@ -31,6 +32,7 @@ __all__ = ["annotate", "house_text", "restyled", "revise", "AUTHOR"]
 
 AUTHOR = "statsetter"
 _W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
+_OMATH_PARA = OMATH + "Para"
 _TEXT_NODES = {f"{_W}t": None, f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
 _EMPTY_NODES = {f"{_W}rPr", f"{_W}lastRenderedPageBreak", f"{_W}softHyphen"}  # nothing the reader counts, safe to move
 # findings about the p itself: a revision must then leave the p as the author typed it
@@ -205,16 +207,35 @@ def _node_length(node) -> int:  # type: ignore[no-untyped-def]
 
 
 def _runs(p):  # type: ignore[no-untyped-def]
-    """The paragraph's runs as the reader counts them (deleted text skipped): [(run, start, end)]."""
+    """The paragraph's runs as the reader counts them (deleted text skipped), an equation as one piece (its text as
+    `math_text` reads it): [(run or m:oMath, start, end)]."""
     out, at = [], 0
-    for r in p.iter(f"{_W}r"):
-        parent = r.getparent()
-        if parent is not None and parent.tag == f"{_W}del":
-            continue
-        n = sum(_node_length(c) for c in r)
+    for r in p.iter(f"{_W}r", OMATH):
+        if r.tag == OMATH:
+            n = sum(len(text) for text, _ in math_text(r))
+        else:
+            parent = r.getparent()
+            if parent is not None and parent.tag == f"{_W}del":
+                continue
+            n = sum(_node_length(c) for c in r)
         out.append((r, at, at + n))
         at += n
     return out
+
+
+def _anchor(node, before: bool):  # type: ignore[no-untyped-def]
+    """A run to hang a comment's range on: ``node`` itself, or for an equation an empty run put before (after) it
+    beside the equation, or beside its equation paragraph (m:oMathPara), where runs may stand."""
+    if node.tag != OMATH:
+        return node
+    from docx.oxml import OxmlElement
+
+    parent = node.getparent()
+    if parent is not None and parent.tag == _OMATH_PARA:
+        node = parent
+    run = OxmlElement("w:r")
+    (node.addprevious if before else node.addnext)(run)
+    return run
 
 
 def _split(run, k: int) -> None:  # type: ignore[no-untyped-def]
@@ -240,6 +261,8 @@ def _span_runs(p, start: int, end: int):  # type: ignore[no-untyped-def]
     """The runs that hold exactly characters start..end of the paragraph, cut
     where needed; None when they are not plain runs side by side (a field, a
     hyperlink, a picture inside the statistic)."""
+    if any(r.tag == OMATH for r, s, e in _runs(p) if s < end and e > start):  # an equation is not cut or restyled
+        return None
     for at in (start, end):
         for r, s, e in _runs(p):
             if s < at < e:
@@ -308,6 +331,7 @@ def _new_runs(text: StyledText, model):  # type: ignore[no-untyped-def]
 def _comment(document, first, last, text: str) -> None:  # type: ignore[no-untyped-def]
     from docx.text.run import Run
 
+    first, last = _anchor(first, True), _anchor(last, False)
     document.add_comment([Run(first, document), Run(last, document)], text=text, author=AUTHOR, initials="st")
 
 
@@ -368,7 +392,7 @@ def revise(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path", 
         runs = _span_runs(paragraphs[e.unit.index], e.start, e.end)
         why = e.kept
         if runs is None or (change is not None and len({_look(r) for r in runs if r.tag == f"{_W}r"}) > 1):
-            why = "a field, link or picture lies inside the statistic" if runs is None else "parts of it are in different fonts or emphasis"
+            why = "a field, link, picture or equation lies inside the statistic" if runs is None else "parts of it are in different fonts or emphasis"
             runs = [r for r, s, t in _runs(paragraphs[e.unit.index]) if s < e.end and t > e.start]
             change = None
             open_findings = list(e.findings)
