@@ -275,6 +275,14 @@ def math_text(node) -> list[tuple[str, bool]]:  # type: ignore[no-untyped-def]
     return out
 
 
+def _slanted(spans: list[tuple[int, int]], start: int, end: int) -> None:
+    """Characters start..end are italic: the last span grown when they follow it, else a new one."""
+    if spans and spans[-1][1] == start:
+        spans[-1] = (spans[-1][0], end)
+    else:
+        spans.append((start, end))
+
+
 def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
     """A paragraph's text (deleted runs left out), the spans of its italic runs and of its equations, in one walk over
     its runs and their text."""
@@ -290,10 +298,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
             begin = length
             for chunk, slanted in math_text(node):
                 if chunk and slanted:
-                    if spans and spans[-1][1] == length:
-                        spans[-1] = (spans[-1][0], length + len(chunk))
-                    else:
-                        spans.append((length, length + len(chunk)))
+                    _slanted(spans, length, length + len(chunk))
                 pieces.append(chunk)
                 length += len(chunk)
             math.append((begin, length))
@@ -313,10 +318,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
         if not chunk:
             continue
         if italic:
-            if spans and spans[-1][1] == length:
-                spans[-1] = (spans[-1][0], length + len(chunk))
-            else:
-                spans.append((length, length + len(chunk)))
+            _slanted(spans, length, length + len(chunk))
         pieces.append(chunk)
         length += len(chunk)
     return "".join(pieces), tuple(spans), tuple(math)
