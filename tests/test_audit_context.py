@@ -114,17 +114,24 @@ def test_a_statistic_given_as_a_bound_keeps_it_in_every_suggestion():
     prints "F (1,56) < 1 | η2 = .002 | n.s."). Read on such typings, the audit had suggested "F(1, 56) = 1, p = .661":
     the bound turned into a value, a p made up from it (the midpoint of the p values the bound allows), and a decimals
     finding on the bound's "1". The suggestion and the tracked change now keep the operator and print no p the text
-    did not give; the bound is no rounding to find decimals in; a p that cannot follow is still found."""
+    did not give (a p the audit doubts gives way to the p the bound allows, said so); the bound is no rounding to find
+    decimals in; a p that cannot follow is still found."""
     units = [Unit("p1", "The sound factor had no effect, F (1,56) < 1, η2 = .002, n.s."), Unit("p2", "The effect: F(1,56)<1."),
              Unit("p3", "Reliable, F(1, 56) < 1, p < .01."), Unit("p4", "Also F(1, 56) < 1, p = .45.")]
     entries = audit_units(units, suggest_all=True, restyle=True)
     suggestions = [e.suggestion for e in entries]
-    assert suggestions == ["F(1, 56) < 1, η² = .00", "F(1, 56) < 1", "F(1, 56) < 1", "F(1, 56) < 1, p = .45"], suggestions
+    # p3's "p < .01" cannot follow from any F below 1: its suggestion gives the p the bound allows, rounded outwards so
+    # that it stays true (scipy: P(F(1, 56) > 1) = .3216, so "p > .321"), and says where it comes from
+    assert stats.f.sf(1, 1, 56) > 0.321
+    assert suggestions == ["F(1, 56) < 1, η² = .00", "F(1, 56) < 1", "F(1, 56) < 1, p > .321 (p from the bound)",
+                           "F(1, 56) < 1, p = .45"], suggestions
     revisions = [e.revision.plain() if e.revision is not None else None for e in entries]
     assert revisions == [None, "F(1, 56) < 1", None, None], revisions  # p1: the style's two decimals would make η2 = .002 zero
     assert "round a number to zero" in entries[0].kept
     assert not any(re.search(r"(?<![\d.])1 \(2 wanted\)", e.message) for e in entries), [e.message for e in entries]
     assert "spacing" in entries[1].codes and "p-does-not-follow" in entries[2].codes
+    above = audit_units([Unit("p1", "Large, F(2, 40) > 10, p = .20.")], suggest_all=True)[0]  # P(F(2, 40) > 10) = .0003
+    assert stats.f.sf(10, 2, 40) < 0.001 and above.suggestion == "F(2, 40) > 10, p < .001 (p from the bound)"
 
 
 def test_a_named_procedure_excuses_only_a_p_larger_than_the_unadjusted():

@@ -27,7 +27,7 @@ from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio,
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
-from .word import _UNMADE, house_text, restyled, threshold_p
+from .word import _P_IN_TEXT, _UNMADE, house_text, restyled, threshold_p
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "CAUTION"]
 
@@ -114,9 +114,11 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         op, text = num.p(rep.p.number.value, alpha, held=rep.p.number.decimals) if rep.p.number.value > 0 else num.p(0.0, alpha)
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
     doubted = any(f.code == "p-does-not-follow" for f in findings)
-    if rep.op != "=":  # a bound ("F < 1") gives no p to recompute: its text without the doubted p
-        new = house_text(rep, style, alpha, with_p=False) if doubted or house is _UNMADE else house
-        return new.plain() if isinstance(new, StyledText) else ""
+    if rep.op != "=":  # a bound ("F < 1") gives no exact p: a doubted p is replaced by the p the bound allows, and says so
+        new = house_text(rep, style, alpha, with_p=not doubted) if doubted or house is _UNMADE else house
+        if not isinstance(new, StyledText):
+            return ""
+        return new.plain() + (" (p from the bound)" if doubted and _P_IN_TEXT.search(new.plain()) else "")
     if not doubted:
         new = house_text(rep, style, alpha) if house is _UNMADE else house
         return new.plain() if isinstance(new, StyledText) else ""  # a record the renderer cannot take: no suggestion

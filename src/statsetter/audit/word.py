@@ -14,6 +14,7 @@ from __future__ import annotations
 
 import copy
 import re
+from dataclasses import replace
 from datetime import datetime, timezone
 from pathlib import Path
 from typing import TYPE_CHECKING, Sequence
@@ -51,15 +52,42 @@ _P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
 def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = True) -> StyledText | None:
     """The statistic as the style writes it (its numbers to their printed precision), or None when the renderer
     cannot take its record (an impossible value). A statistic given as a bound ("F < 1") keeps its operator and
-    the p as the author gave it (a threshold, "p > .05"; none with ``with_p`` False): a bound gives no p to print."""
+    the p as the author gave it (a threshold, "p > .05"); with ``with_p`` False — the author's p doubted — the p the
+    bound allows instead ("F(1, 56) < 1, p > .32"): a bound gives no exact p to print."""
     from ..rendering.sentences import render
     from .checks import to_record
 
     try:
-        text = render(to_record(rep, alpha, style), "stats", style)
+        record = to_record(rep, alpha, style)
+        if rep.op != "=" and not with_p:  # (an exact p the author gave, doubted, is not repeated either)
+            record = replace(record, p=None, precision={k: v for k, v in record.precision.items() if k != "p"})
+        text = render(record, "stats", style)
     except Exception:  # noqa: BLE001 - a record the renderer cannot take: no text in the style
         return None
-    return text if rep.op == "=" else _bounded(text, rep, style, with_p)
+    if rep.op == "=":
+        return text
+    return _bounded(text, rep, style, threshold_p(rep, style, style.keep_together) if with_p else _allowed_p(rep, style))
+
+
+def _allowed_p(rep: Reported, style: "Style") -> StyledText | None:
+    """The p a bound allows, rounded outwards so that it stays true: below F < 1 on (1, 56) df every p exceeds
+    .3216, "p > .32"; above F > 10, every p is below that F's p, rounded up. None when the rounding leaves nothing
+    to say (p > .00 or p < 1.00)."""
+    import math
+
+    from .checks import p_range
+
+    allowed = p_range(rep)
+    if allowed is None:
+        return None
+    num = numbers_for(style)
+    unit = 10.0 ** num.decimals_for("p")
+    above = rep.op in ("<", "≤")  # a statistic below its bound: p above the bound's p
+    edge = math.floor(allowed[0] * unit) / unit if above else math.ceil(allowed[1] * unit) / unit
+    if not 0 < edge < 1:
+        return None
+    op = "&gt;" if above else "&lt;"
+    return StyledText.from_markup(f"{style.symbol('p')}{style.keep_together}{op}{style.keep_together}{num.number(edge, 'p', num.decimals_for('p'))}")
 
 
 def threshold_p(rep: Reported, style: "Style", space: str = " ") -> StyledText | None:
@@ -72,9 +100,9 @@ def threshold_p(rep: Reported, style: "Style", space: str = " ") -> StyledText |
     return StyledText.from_markup(f"{style.symbol('p')}{space}{op}{space}{numbers_for(style).number(p.number.value, 'p', p.number.decimals)}")
 
 
-def _bounded(text: StyledText, rep: Reported, style: "Style", with_p: bool) -> StyledText | None:
+def _bounded(text: StyledText, rep: Reported, style: "Style", p: StyledText | None) -> StyledText | None:
     """A bound's record text with the statistic's "=" (the first outside parentheses and brackets, after its df and
-    N) as the author's operator ("F(1, 56) < 1"), and their threshold p after the bound; None where no such "=" is."""
+    N) as the author's operator ("F(1, 56) < 1"), and the p ``p`` after the bound; None where no such "=" is."""
     depth = 0
     for i, ch in enumerate(text.text):
         if ch in "([":
@@ -83,7 +111,6 @@ def _bounded(text: StyledText, rep: Reported, style: "Style", with_p: bool) -> S
             depth -= 1
         elif ch == "=" and depth == 0:  # one character for one: the style's spans keep their places
             text = StyledText(text.text[:i] + rep.op + text.text[i + 1 :], text.spans)
-            p = threshold_p(rep, style, style.keep_together) if with_p else None
             if p is None:
                 return text
             end = _VALUE_END.match(text.text, i + 1).end()  # type: ignore[union-attr]
