@@ -39,7 +39,7 @@ class Unit:
     index: int = 0  # the paragraph's position among the part's w:p elements (a text block: its first line)
     origin: tuple[Trace, ...] = ()  # how text maps back to the file's characters (markers removed); () = as is
     cell: tuple[int, int, int] | None = None  # (table, row, column), all from 1, for a table cell's paragraph in Word
-    math: tuple[tuple[int, int], ...] = ()  # (start, end) of each Word equation's text: spaced by the equation, not the author
+    equations: tuple[tuple[int, int], ...] = ()  # (start, end) of each Word equation's text: spaced by the equation, not the author
 
     def source_index(self, i: int) -> int:
         """Where character ``i`` of ``text`` is in the block as written."""
@@ -226,7 +226,7 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         cell = in_cell.get(para)
         if cell is None:
             body_count += 1
-        text, spans, math = _paragraph_text(para)
+        text, spans, equations = _paragraph_text(para)
         if not text.strip():
             continue
         if cell is None:
@@ -234,7 +234,7 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         else:
             t, r, c = cell
             location = f"table {t}, row {r}, cell {c}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {c}"
-        yield Unit(location, text, spans, part, index, cell=cell, math=math)
+        yield Unit(location, text, spans, part, index, cell=cell, equations=equations)
 
 
 _VAL = f"{_W}val"
@@ -270,7 +270,7 @@ def math_text(node) -> list[tuple[str, bool]]:  # type: ignore[no-untyped-def]
                     out.append((char("sepChr", "|"), False))
                 out += math_text(part)
             out.append((char("endChr", ")"), False))
-        elif not tag.endswith("Pr") and isinstance(tag, str) and tag.startswith(_M):  # sSup, sSub, e, sup, sub, f, num, …
+        elif isinstance(tag, str) and tag.startswith(_M) and not tag.endswith("Pr"):  # sSup, sSub, e, sup, sub, f, num, … (not a comment)
             out += math_text(child)
     return out
 

@@ -314,7 +314,7 @@ def _audit_units(
         consistent, recheck = _consistency(item, alpha)
         findings = impossible(rep) + consistent
         if local is not None:
-            findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.math)
+            findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
             if local.symbol in ("t", "z"):
