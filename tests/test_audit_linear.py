@@ -215,6 +215,47 @@ def test_the_audit_leaves_the_garbage_collector_as_it_was(tmp_path):
         gc.enable()
 
 
+def test_the_audits_objects_do_not_wait_in_the_young_generation(tmp_path):
+    """The objects an audit makes while the collector is paused are placed in the oldest generation as it resumes, so
+    that the first young collection afterwards does not walk them all (thousands per page); objects the program froze
+    itself stay frozen (the audit then leaves the generations alone), and a collection still frees cycles made
+    during the audit. The same for records made in a batch (``_collector_paused``)."""
+    import gc
+    import weakref
+
+    from statsetter.audit.report import audit_file
+
+    page = tmp_path / "results.md"
+    page.write_text("The groups differed, t(38) = 2.14, p = .039, d = 0.68.\n\n" * 400, encoding="utf-8")
+
+    class Cyclic:
+        pass
+
+    gc.collect()
+    entries = audit_file(page)
+    assert len(entries) == 400 and gc.isenabled() and gc.get_freeze_count() == 0
+    assert any(o is entries[-1] for o in gc.get_objects(generation=2))  # placed in the oldest generation at once
+    held = Cyclic()  # an object the program freezes: the collector no longer lists it
+    gc.freeze()
+    try:
+        again = audit_file(page)
+        assert len(again) == 400 and not any(o is held for o in gc.get_objects())  # still frozen: nothing thawed
+    finally:
+        gc.unfreeze()
+    assert any(o is held for o in gc.get_objects())
+
+    from statsetter.records.result import _collector_paused
+
+    with _collector_paused():
+        a = Cyclic()
+        a.self = a  # type: ignore[attr-defined]
+        gone = weakref.ref(a)
+        del a
+    assert gone() is not None
+    gc.collect()
+    assert gone() is None
+
+
 def test_audits_in_threads_read_as_one_alone():
     """The audit remembers a few things of the last text it read (its operators, sentence ends, italic spans); audits
     running in threads at once, switching as often as the interpreter allows, find what each finds alone with nothing
