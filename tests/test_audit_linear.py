@@ -217,7 +217,7 @@ def test_the_audit_leaves_the_garbage_collector_as_it_was(tmp_path):
 
 def test_the_audits_objects_do_not_wait_in_the_young_generation(tmp_path):
     """The objects an audit makes while the collector is paused are placed in the oldest generation as it resumes, so
-    that the first young collection afterwards does not walk them all (thousands per page); objects the program froze
+    that the first young collection afterwards does not walk them all (a batch of more than 10,000); objects the program froze
     itself stay frozen (the audit then leaves the generations alone), and a collection still frees cycles made
     during the audit. The same for records made in a batch (``_collector_paused``)."""
     import gc
@@ -226,20 +226,20 @@ def test_the_audits_objects_do_not_wait_in_the_young_generation(tmp_path):
     from statsetter.audit.report import audit_file
 
     page = tmp_path / "results.md"
-    page.write_text("The groups differed, t(38) = 2.14, p = .039, d = 0.68.\n\n" * 400, encoding="utf-8")
+    page.write_text("The groups differed, t(38) = 2.14, p = .039, d = 0.68.\n\n" * 1000, encoding="utf-8")
 
     class Cyclic:
         pass
 
     gc.collect()
     entries = audit_file(page)
-    assert len(entries) == 400 and gc.isenabled() and gc.get_freeze_count() == 0
+    assert len(entries) == 1000 and gc.isenabled() and gc.get_freeze_count() == 0
     assert any(o is entries[-1] for o in gc.get_objects(generation=2))  # placed in the oldest generation at once
     held = Cyclic()  # an object the program freezes: the collector no longer lists it
     gc.freeze()
     try:
         again = audit_file(page)
-        assert len(again) == 400 and not any(o is held for o in gc.get_objects())  # still frozen: nothing thawed
+        assert len(again) == 1000 and not any(o is held for o in gc.get_objects())  # still frozen: nothing thawed
     finally:
         gc.unfreeze()
     assert any(o is held for o in gc.get_objects())

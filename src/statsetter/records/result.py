@@ -663,15 +663,16 @@ def _collector_paused() -> Iterator[None]:
     The objects made meanwhile go straight to the oldest generation (a freeze
     and a thaw: two list splices), where the young collection the resumed
     collector would start at once would move them only after walking them all
-    (a fifteenth of an audit of 1,000 pages); not when the program froze
-    objects itself, which the thaw would release."""
+    (a fifteenth of an audit of 1,000 pages); only for a batch of more than
+    10,000 objects, and not when the program froze objects itself, which the
+    thaw would release (counting them walks them all: after the batch's count)."""
     running = gc.isenabled()
     gc.disable()
     try:
         yield
     finally:
         if running:
-            if gc.get_freeze_count() == 0:
+            if gc.get_count()[0] > 10_000 and gc.get_freeze_count() == 0:
                 gc.freeze()
                 gc.unfreeze()
             gc.enable()
