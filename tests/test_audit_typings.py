@@ -57,6 +57,12 @@ CASES = [
     # online (https://www.sweetstudy.com/files/note4results-docx-7564693), "Χ^{2}_{critical}" on Anglia Ruskin University's
     # biostatistics pages (http://web.anglia.ac.uk/numbers/biostatistics/one_way_chi_square/how.html); it had not been read
     (f"Χ2(3, N = 250) = 7.42, p = {p3(C)}", "chi2", (3,), 250, 7.42, "=", float(p3(C))),
+    # R's printed tests pasted into the text: "X-squared = 1.0066, df = 1, p-value = 0.3157" (chisq.test, as Boston
+    # University's PH717 module page shows it: https://sphweb.bumc.bu.edu/otlt/MPH-Modules/PH717-QuantCore/
+    # PH717_ComparingFrequencies/PH717_ComparingFrequencies6.html), X-squared had not been read as χ²; a Welch ANOVA
+    # (oneway.test) prints "F = …, num df = 2.00, denom df = 40.5" (memory), whose second df had been lost
+    (f"X-squared = 7.42, df = 3, p-value = {C:.4f}", "chi2", (3,), None, 7.42, "=", round(C, 4)),
+    (f"F = 3.87, num df = 2.00, denom df = 61.0, p-value = {F:.4f}", "F", (2, 61), None, 3.87, "=", round(F, 4)),
 ]
 
 
@@ -94,6 +100,25 @@ def test_a_correlation_with_its_n_beside_it_is_checked_with_n_minus_2():
     (bad,) = audit_units([Unit("b", "r = .31, n = 60, p = .200")])
     assert not set(good.codes) & {"p-does-not-follow"} and "N − 2 = 58" in good.checked and "r(58)" in good.checked
     assert "p-does-not-follow" in bad.codes
+
+
+def test_a_whole_v_is_the_signed_rank_sum_and_one_with_decimals_cramers_v():
+    """R's wilcox.test names a paired or one-sample test's statistic V, the sum of the positive ranks ("V = 5, p-value =
+    0.0391"; the litteR package's wrapper of it: "Extract test statistic V", https://rdrr.io/cran/litteR/man/wilcoxon.html):
+    read as Cramér's V it had been an impossible value, an error the author had not made. A whole V is read as that
+    test's statistic (no p to recompute without its n), one with decimals stays Cramér's V, checked as before."""
+    (rank,) = audit_units([Unit("a", "Pain fell after the session (V = 5, p-value = 0.0391).")])
+    assert rank.found == "V = 5, p-value = 0.0391" and rank.suggestion == "V = 5, p = .039"
+    assert rank.codes == ["leading-zero", "decimals"] and [f.evidence for f in rank.findings] == ["0.0391", "p = 0.0391 (.039 in the style)"]
+    (clean,) = audit_units([Unit("a", "Pain fell after the session (V = 5, p = .039).")])
+    assert clean.found == "V = 5, p = .039" and not clean.codes
+    (zero,) = [r for r in find_statistics("All differences fell the same way, V = 0, p = .008.") if r.symbol is not None]
+    assert zero.symbol == "V" and zero.value.value == 0
+    chi = stats.chi2.sf(9.87, 2)
+    (assoc,) = audit_units([Unit("b", f"χ²(2, N = 200) = 9.87, p = {p3(chi)}, V = .22")])
+    assert [e.name for e in find_statistics(assoc.found)[0].effects] == ["V"] and not assoc.codes
+    (wrong,) = audit_units([Unit("c", f"χ²(2, N = 200) = 9.87, p = {p3(chi)}, Cramér's V = 1.22")])
+    assert "impossible-value" in wrong.codes
 
 
 def test_spelled_out_greek_effect_sizes():

@@ -90,8 +90,9 @@ FORMER_CODES: dict[str, str] = {
 
 _BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
-_RANK_SUMS = {"U", "W", "T"}
-_KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "tau_b": "kendall", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon", "Q": "cochran_q"}
+_RANK_SUMS = {"U", "W", "T", "V"}
+_KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "tau_b": "kendall", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon",
+         "V": "wilcoxon", "Q": "cochran_q"}
 
 
 @dataclass(frozen=True, slots=True)

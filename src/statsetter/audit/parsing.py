@@ -108,7 +108,7 @@ class Reported:
 def symbol_of(text: str) -> str | None:
     t = text.replace(" ", "")
     low = t.lower()
-    if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2"):
+    if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2", "x-squared", "xsquared"):  # X-squared: as R prints χ²
         return "chi2"
     if low in ("rs", "rₛ", "r_s", "ρ", "rho"):
         return "rs"
@@ -118,7 +118,7 @@ def symbol_of(text: str) -> str | None:
         return "F"
     if t == "Z":  # "Z = 2.50", as SPSS prints the normal approximation of rank tests
         return "z"
-    return t if t in ("t", "F", "r", "z", "U", "H", "W", "T", "Q") else None
+    return t if t in ("t", "F", "r", "z", "U", "H", "W", "T", "Q", "V") else None
 
 
 def _number_pattern(mark: str) -> str:
@@ -135,9 +135,9 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--"
 # each alternative starts with a literal character; `_guarded` puts the "not after a letter or point" test right after it
 # (Χ: the Greek capital chi, as some symbol fonts and keyboards type it)
 _SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
-            r"X\s?²", r"X\^2",
+            r"X\s?²", r"X\^2", r"X[- ]squared",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
-            "t", "F", "r", "z", "Z", "U", "H", "W", "T", "Q")
+            "t", "F", "r", "z", "Z", "U", "H", "W", "T", "Q", "V")
 
 
 def _guarded(alternatives: "Iterable[str]", before: str) -> str:
@@ -371,15 +371,20 @@ def decimal_mark_of(texts: "Iterable[str]") -> tuple[str, int, int] | None:
     return ("," if commas > points else "."), commas, points
 
 
-def _kendall_w(m: re.Match[str]) -> bool:
-    """A "W = .25" (no df, a value below 1 with decimals) is Kendall's W, an effect size, not a Wilcoxon rank sum."""
-    return m.group("sym") == "W" and m.group("inner") is None and re.fullmatch(r"0?[.,]\d+", m.group("num").strip()) is not None
+def _an_effect(m: re.Match[str]) -> bool:
+    """A "W = .25" (no df, a value below 1 with decimals) is Kendall's W, an effect size, not a Wilcoxon rank sum; a V is
+    a test statistic only as a whole number ("V = 5, p-value = .039": the signed-rank sum, as R's wilcox.test names it),
+    with decimals Cramér's V ("V = .22")."""
+    sym = m.group("sym")
+    if sym == "W":
+        return m.group("inner") is None and re.fullmatch(r"0?[.,]\d+", m.group("num").strip()) is not None
+    return sym == "V" and (m.group("inner") is not None or not m.group("num").strip().isdigit())
 
 
 def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     """Every statistic in ``text``, in order."""
     pat = _patterns(decimal_mark)
-    heads = [m for m in pat.head.finditer(text) if symbol_of(m.group("sym")) is not None and not _kendall_w(m)]
+    heads = [m for m in pat.head.finditer(text) if symbol_of(m.group("sym")) is not None and not _an_effect(m)]
     boundary = pat.boundary_in(text)
     out: list[Reported] = []
     taken: list[tuple[int, int]] = []
@@ -618,6 +623,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
     covered = -1  # the furthest end of the matches read so far: each began at or before this event (events in order of start)
     last_end = rep.end
     ci = None
+    clause_df = False  # the df were read from the clause ("df = 2"), not the head
     for at, kind, m in events:
         if at < covered:  # inside a match already read
             continue
@@ -639,11 +645,16 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
                 continue
             effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
-        elif kind == "df" and not rep.df:
+        elif kind == "df" and (not rep.df or (clause_df and rep.symbol == "F" and len(rep.df) == 1)):
             number = pat.to_number(m.group("num"), m.start("num"))
             second = pat.to_number(m.group("num2"), m.start("num2")) if m.group("num2") and rep.symbol == "F" else None
-            if number is not None:
+            if number is None:
+                continue
+            if rep.df:  # "F = 3.2, num df = 2.00, denom df = 40.5" (as R prints a Welch ANOVA): the F's second df
+                rep.df = (rep.df[0], number)
+            else:
                 rep.df = (number, second) if second is not None else (number,)  # "F = 4.51, df = 2, 97": both df of an F
+                clause_df = True
         elif kind == "n" and rep.n is None:
             rep.n = pat.to_number(m.group("num"), m.start("num"))
         else:

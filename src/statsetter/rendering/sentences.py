@@ -183,7 +183,7 @@ class Helpers:
 
     def _stat_value(self, r: Result, symbol: str, value: float) -> str:
         held = _held(r, "statistic.value")
-        if symbol in _RANK_SUMS:  # U, T, W: whole numbers print whole (practice)
+        if symbol in _RANK_SUMS:  # U, T, W, V: whole numbers print whole (practice)
             if float(value).is_integer():
                 return self.num.integer(value)
             return self.num.number(value, symbol, 1, held=held)
@@ -441,7 +441,7 @@ def _as_markup(fn: Callable[..., str]) -> Callable[..., Markup]:
     return wrapped
 
 
-_RANK_SUMS = frozenset({"U", "T", "W"})
+_RANK_SUMS = frozenset({"U", "T", "W", "V"})
 _OPS = {"=": "=", "<": "&lt;", ">": "&gt;"}
 _GROUP_FIELDS = {"mean": "mean", "sd": "sd", "n": "n", "median": "median", "iqr": "q1", "min": "minimum", "max": "maximum"}
 _GROUP_SYMBOLS = {"mean": "M", "sd": "SD", "n": "n", "median": "Mdn", "iqr": "IQR", "min": "min", "max": "max"}
