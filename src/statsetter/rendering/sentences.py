@@ -42,7 +42,6 @@ def templates_dir(language: str = "en") -> Path:
 
 
 @lru_cache(maxsize=8)
-@lru_cache(maxsize=8)
 def _environment(language: str) -> Any:
     """One template environment per language (it keeps each template compiled once per process)."""
     from jinja2 import FileSystemLoader, StrictUndefined
