@@ -33,6 +33,9 @@ SOURCES = {
     "lboro-12017007": ("https://repository.lboro.ac.uk/ndownloader/articles/12017007/versions/1", "analysis output published with a data set (Loughborough University repository)"),
     "york-bland": ("http://www-users.york.ac.uk/~mb55/msc/ytustats/chi2ex4.htm", "a university statistics course's worked answer (open course page)"),
     "hyperstat": ("https://davidmlane.com/hyperstat/B147521.html", "HyperStat online textbook, reporting results (open textbook)"),
+    "bu-ph717": ("https://sphweb.bumc.bu.edu/otlt/MPH-Modules/PH717-QuantCore/PH717_ComparingFrequencies/PH717_ComparingFrequencies6.html",
+                 "a public-health course module, R's chi-squared test printed (Boston University, open course page)"),
+    "issuhub-5518": ("https://issuhub.com/view/index?id=5518&pageIndex=342", "a research-methods textbook quoting a study's ANOVAs, p. 342 (issuhub)"),
 }
 
 
@@ -117,6 +120,12 @@ ITEMS: tuple[Text | Table, ...] = (
          (Stat("t", (), "2.93", "= .019", df_printed=False), Stat("t", (), "0.26", "= .803", df_printed=False))),
     Text("york-bland", "The invalid chi-squared test would give chi-squared = 6.00, df = 1, P = 0.014.",
          (Stat("chi2", (1,), "6.00", "= 0.014"),)),
+    # added in the eighteenth session with R's printed names and the "[df]" typing in view
+    Text("bu-ph717", "Pearson's Chi-squared test\n\ndata: salarytable\n\nX-squared = 1.0066, df = 1, p-value = 0.3157",
+         (Stat("chi2", (1,), "1.0066", "= 0.3157"),)),
+    Text("issuhub-5518", "The authors reported, however, that there were significant differences for only two of the ANOV As (two\nquestions) "
+         "among the three courses, Developing thinking: F=7.34 [df](2, 102), p<0.001;\nand Expressing ideas: F=5.40 [df] (2, 98), p<0.01.",
+         (_f(2, 102, "7.34", "< 0.001"), _f(2, 98, "5.40", "< 0.01"))),
     Text("hyperstat", "was significantly greater than 0.50, χ²(1, N = 100) = 5.29, p = 0.021.",
          (Stat("chi2", (1,), "5.29", "= 0.021"),)),
     Table("pmc10908010", "Analyses of repeated measures (MSC n = 25, TAU n = 22)",

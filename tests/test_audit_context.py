@@ -123,8 +123,9 @@ def test_a_statistic_given_as_a_bound_keeps_it_in_every_suggestion():
     # p3's "p < .01" cannot follow from any F below 1: its suggestion gives the p the bound allows, rounded outwards so
     # that it stays true (scipy: P(F(1, 56) > 1) = .3216, so "p > .321"), and says where it comes from
     assert stats.f.sf(1, 1, 56) > 0.321
-    assert suggestions == ["F(1, 56) < 1, η² = .00", "F(1, 56) < 1", "F(1, 56) < 1, p > .321 (p from the bound)",
-                           "F(1, 56) < 1, p = .45"], suggestions
+    # p1's "n.s." is made the p the bound allows too (the style asks for a p; a bound gives that one), said so
+    assert suggestions == ["F(1, 56) < 1, p > .321, η² = .00 (p from the bound)", "F(1, 56) < 1",
+                           "F(1, 56) < 1, p > .321 (p from the bound)", "F(1, 56) < 1, p = .45"], suggestions
     revisions = [e.revision.plain() if e.revision is not None else None for e in entries]
     assert revisions == [None, "F(1, 56) < 1", None, None], revisions  # p1: the style's two decimals would make η2 = .002 zero
     assert "round a number to zero" in entries[0].kept

@@ -121,6 +121,17 @@ def test_a_whole_v_is_the_signed_rank_sum_and_one_with_decimals_cramers_v():
     assert "impossible-value" in wrong.codes
 
 
+def test_df_named_in_brackets_after_the_value_are_read():
+    """"F=7.34 [df](2, 102), p<0.001" (a research-methods textbook quoting a study's ANOVAs: issuhub-5518 in
+    tests/real_typings.py): the df had not been read, so neither F was checked; F(2, 102) = 7.34 gives p = .00105 (scipy),
+    not below .001 — the quoted p does not follow — while F(2, 98) = 5.40 gives .006, below .01."""
+    text = "Developing thinking: F=7.34 [df](2, 102), p<0.001;\nand Expressing ideas: F=5.40 [df] (2, 98), p<0.01."
+    first, second = audit_units([Unit("a", text)])
+    assert [tuple(d.value for d in r.df) for r in find_statistics(text) if r.symbol] == [(2, 102), (2, 98)]
+    assert stats.f.sf(7.345, 2, 102) > 0.001 and "p-does-not-follow" in first.codes
+    assert stats.f.sf(5.405, 2, 98) < 0.01 and "p-does-not-follow" not in second.codes and second.suggestion.startswith("F(2, 98) = 5.40")
+
+
 def test_spelled_out_greek_effect_sizes():
     names = {r.effects[0].name for text in ("partial eta squared = .12", "omega squared = .05", "Cramer's V = .21", "eta squared = .08")
              for r in find_statistics(text)}

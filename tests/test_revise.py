@@ -312,3 +312,40 @@ def test_statistics_typed_as_word_equations_are_read_and_left_as_typed(tmp_path)
     assert not list(etree.fromstring(zipfile.ZipFile(tmp_path / "revised.docx").read("word/document.xml")).iter(f"{W}ins"))
     comments = zipfile.ZipFile(tmp_path / "revised.docx").read("word/comments.xml").decode()
     assert comments.count("equation lies inside the statistic") == 3
+
+
+def test_ns_and_thresholds_are_never_dropped_nor_a_doubted_ns_overwritten():
+    """What the author said of p survives the suggestion and the revision: a threshold or "ns" where no p can be
+    recomputed (no df) stays as typed in the suggestion — it had been dropped ("F = 5.40") — and a revision may not
+    delete it; "ns" beside a statistic whose p is below alpha is a finding, not a style slip, and is not overwritten
+    by the recomputed p (it had been: t(38) = 2.10, "ns" -> "p = .043"); where the p is replaced (a threshold or
+    "ns" made exact, a bound's "ns" made the p the bound allows), the comment says which p is new. The p values
+    here are scipy's: t(38) = 2.10 gives .042; F(1, 56) = 1 gives .3216."""
+    from scipy import stats
+
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    def one(text, style="apa7"):
+        (entry,) = audit_units([Unit("p", text)], style, restyle=True, suggest_all=True)
+        return entry
+
+    assert one("F = 5.40, p < .01").suggestion == "F = 5.40, p < .01"
+    assert one("F = 5.40, p < .01", "ama11").revision.plain() == "F = 5.40, P < .01"  # the symbol restyled, the threshold kept
+    no_df = one("t = 2.1, ns")
+    assert no_df.suggestion == "t = 2.1, ns" and no_df.revision is None
+    assert one("U = 45, n.s.").suggestion == "U = 45, n.s."
+    assert 0.04 < 2 * stats.t.sf(2.10, 38) < 0.05
+    doubted = one("t(38) = 2.10, ns")
+    assert {"p-does-not-follow", "verdict-changes"} <= set(doubted.codes)
+    assert doubted.revision is None and doubted.kept == "the restyled text would change the reported p"
+    assert doubted.suggestion == "t(38) = 2.10, p = .042 (p recomputed)"
+    made_exact = one("t(38) = 2.14, p < .05")
+    assert made_exact.revision.plain() == "t(38) = 2.14, p = .039"
+    assert "except the p, which is recomputed from the statistic and its df (the text gave \u201cp < .05\u201d)" in made_exact.comment(revised=True)
+    assert stats.f.sf(1, 1, 56) > 0.321
+    bound = one("F(1, 56) < 1, ns")
+    assert bound.suggestion == "F(1, 56) < 1, p > .321 (p from the bound)" and bound.revision.plain() == "F(1, 56) < 1, p > .321"
+    assert "which is the p the bound allows (the text gave \u201cns\u201d)" in bound.comment(revised=True)
+    kept = one("t(38) = 2.14, p = .039, d = 0.70")
+    assert kept.revision is None and "its numbers are as reported." in kept.comment(revised=True)

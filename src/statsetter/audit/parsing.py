@@ -198,7 +198,7 @@ class _Patterns:
             r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
         )
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
-        self.df = re.compile(rf"d(?<![\w]d)f\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)")
+        self.df = re.compile(rf"d(?<![\w]d)f\]?\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         self.coef_b = re.compile(rf"B(?<![\w]B)\s*+=\s*+(?P<num>{num})")
         self.coef_se = re.compile(rf"S(?<![\w]S)E\s*+=\s*+(?P<num>{num})")

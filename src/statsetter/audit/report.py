@@ -86,10 +86,21 @@ class Entry:
             seen.add(f.evidence)
         text = f"{severity.capitalize()}: " + " ".join(said)
         if revised:
-            text += " The statistic is restyled in the tracked change; its numbers are as reported."
+            text += f" The statistic is restyled in the tracked change; {self._numbers_said()}"
         elif kept or (kept is None and self.kept):
             text += f" Not restyled: {kept or self.kept}."
         return text + (f" Suggested: {self.suggestion}" if self.suggestion else "")
+
+    def _numbers_said(self) -> str:
+        """Whether the revision keeps the reported numbers, or which p it puts in place of a threshold or "ns"."""
+        new = _P_IN_TEXT.search(self.revision.plain()) if self.revision is not None else None
+        old = _P_IN_TEXT.search(self.found)
+        if new is None or (old is not None and old.group(1) == new.group(1) and _same_number(old.group(2), new.group(2))):
+            return "its numbers are as reported."
+        ns = _NS.search(self.found)
+        given = old.group() if old is not None else ns.group() if ns is not None else "another p"
+        source = "the p the bound allows" if "(p from the bound)" in self.suggestion else "recomputed from the statistic and its df"
+        return f"its numbers are as reported except the p, which is {source} (the text gave \u201c{given}\u201d)."
 
     @property
     def message(self) -> str:
@@ -109,16 +120,18 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
             return ""
         if rep.p.op != "=":
-            return threshold_p(rep, style).plain()  # type: ignore[union-attr]
+            kept = threshold_p(rep, style)
+            return kept.plain() if kept is not None else ""
         num = numbers_for(style)
         op, text = num.p(rep.p.number.value, alpha, held=rep.p.number.decimals) if rep.p.number.value > 0 else num.p(0.0, alpha)
         return StyledText.from_markup(style.symbol("p")).plain() + f" {op} {text}"
     doubted = any(f.code == "p-does-not-follow" for f in findings)
-    if rep.op != "=":  # a bound ("F < 1") gives no exact p: a doubted p is replaced by the p the bound allows, and says so
+    if rep.op != "=":  # a bound ("F < 1") gives no exact p: a doubted p or "ns" is replaced by the p the bound allows, and says so
         new = house_text(rep, style, alpha, with_p=not doubted) if doubted or house is _UNMADE else house
         if not isinstance(new, StyledText):
             return ""
-        return new.plain() + (" (p from the bound)" if doubted and _P_IN_TEXT.search(new.plain()) else "")
+        allowed = doubted or (rep.p is not None and rep.p.op == "ns")
+        return new.plain() + (" (p from the bound)" if allowed and _P_IN_TEXT.search(new.plain()) else "")
     if not doubted:
         new = house_text(rep, style, alpha) if house is _UNMADE else house
         return new.plain() if isinstance(new, StyledText) else ""  # a record the renderer cannot take: no suggestion
@@ -131,6 +144,15 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         return render(record, "stats", style).plain()
     except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
         return ""
+
+
+_NS = re.compile(r"(?<![\w.])n\.?\s?s\b\.?")  # "ns", "n.s.", "n. s."
+
+
+def _same_number(old: str, new: str) -> bool:
+    """Whether two printings of a p stand for the same value (the revision's rounded to the style's decimals)."""
+    a, b = (float(x.replace(",", ".")) for x in (old, new))
+    return abs(a - b) <= 0.5 * 10.0 ** -len(old.replace(",", ".").partition(".")[2]) + 0.5 * 10.0 ** -len(new.replace(",", ".").partition(".")[2]) + 1e-12
 
 
 _LONG_NUMBER = re.compile(r"\d{101,}")

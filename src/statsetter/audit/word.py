@@ -64,9 +64,15 @@ def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = Tr
         text = render(record, "stats", style)
     except Exception:  # noqa: BLE001 - a record the renderer cannot take: no text in the style
         return None
+    ns = rep.p is not None and rep.p.op == "ns"
     if rep.op == "=":
+        if record.p is None and rep.symbol is not None:  # no p to recompute (no df; a rank sum): the author's threshold
+            # or "ns" kept ("ns" as typed: the style has no form of its own for it)
+            kept = StyledText(rep.p.symbol_text) if ns else threshold_p(rep, style, style.keep_together)  # type: ignore[union-attr]
+            return text if kept is None else _bounded(text, "=", style, kept) or text
         return text
-    return _bounded(text, rep, style, threshold_p(rep, style, style.keep_together) if with_p else _allowed_p(rep, style))
+    # a bound's "ns", like a doubted p, becomes the p the bound allows ("F(1, 56) < 1, p > .32"): true, and what the style asks
+    return _bounded(text, rep.op, style, threshold_p(rep, style, style.keep_together) if with_p and not ns else _allowed_p(rep, style))
 
 
 def _allowed_p(rep: Reported, style: "Style") -> StyledText | None:
@@ -91,18 +97,24 @@ def _allowed_p(rep: Reported, style: "Style") -> StyledText | None:
 
 
 def threshold_p(rep: Reported, style: "Style", space: str = " ") -> StyledText | None:
-    """The author's p given as a threshold, in the style ("p < .05", never "p < .050": it keeps its decimals); None
-    for an exact p, "n.s." or none."""
+    """The author's p given as a threshold, in the style ("p < .05", never "p < .050": it keeps its decimals; "p < .000",
+    as some programs print a p below .0005, as the style's smallest p, "p < .001"); None for an exact p, "n.s." or none,
+    and for "p > 1", which no p meets."""
     p = rep.p
     if p is None or p.op in ("=", "ns") or p.number is None or not 0 <= p.number.value <= 1:
         return None
+    if p.op in (">", "≥") and p.number.value == 1:
+        return None
     op = {"≤": "&lt;", "≥": "&gt;", "<": "&lt;", ">": "&gt;"}[p.op]
-    return StyledText.from_markup(f"{style.symbol('p')}{space}{op}{space}{numbers_for(style).number(p.number.value, 'p', p.number.decimals)}")
+    num = numbers_for(style)
+    shown = num.p(0.0, 0.05)[1] if p.number.value == 0 else num.number(p.number.value, "p", p.number.decimals)
+    return StyledText.from_markup(f"{style.symbol('p')}{space}{op}{space}{shown}")
 
 
-def _bounded(text: StyledText, rep: Reported, style: "Style", p: StyledText | None) -> StyledText | None:
-    """A bound's record text with the statistic's "=" (the first outside parentheses and brackets, after its df and
-    N) as the author's operator ("F(1, 56) < 1"), and the p ``p`` after the bound; None where no such "=" is."""
+def _bounded(text: StyledText, op: str, style: "Style", p: StyledText | None) -> StyledText | None:
+    """A record's text with the statistic's "=" (the first outside parentheses and brackets, after its df and N) as
+    the author's operator ``op`` ("F(1, 56) < 1"), and the p ``p`` after the statistic's value; None where no such
+    "=" is."""
     depth = 0
     for i, ch in enumerate(text.text):
         if ch in "([":
@@ -110,7 +122,7 @@ def _bounded(text: StyledText, rep: Reported, style: "Style", p: StyledText | No
         elif ch in ")]":
             depth -= 1
         elif ch == "=" and depth == 0:  # one character for one: the style's spans keep their places
-            text = StyledText(text.text[:i] + rep.op + text.text[i + 1 :], text.spans)
+            text = StyledText(text.text[:i] + op + text.text[i + 1 :], text.spans)
             if p is None:
                 return text
             end = _VALUE_END.match(text.text, i + 1).end()  # type: ignore[union-attr]
@@ -212,7 +224,12 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     if any(a != 0 and b == 0 for (a, _), (b, _) in zip(olds, news)):
         return "the style's decimals would round a number to zero"
     if old_p is None:
-        return "" if new_p is None or (rep.p is not None and rep.p.op == "ns") else "the restyled text would add a p value"
+        if rep.p is None:
+            return "" if new_p is None else "the restyled text would add a p value"
+        if new_p is None:  # "ns" where no p can be recomputed: the author's statement about p stays
+            return "" if rep.p.symbol_text in new.plain() else "the restyled text would drop the p value"
+        # "ns" becomes the exact p the style asks for, unless a finding doubts it: "t(38) = 2.10, ns" is no style slip
+        return "the restyled text would change the reported p" if doubted else ""
     if new_p is None:
         return "the restyled text would drop the p value"
     value, places = _value(new_p.group(2), new_mark)
