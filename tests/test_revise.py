@@ -136,7 +136,9 @@ def test_rejecting_all_gives_back_the_manuscript(revised, tmp_path):
 def test_comments_on_what_the_revision_does_not_settle(revised):
     _, out = revised
     comments = {c.text for c in docx.Document(str(out)).comments}
-    assert len(comments) == 4
+    assert len(comments) == 5
+    # the χ² whose "p < .01" the revision makes exact: a note names the p the text gave
+    assert any(c.startswith("Note:") and "\u201cp < .01\u201d" in c and "χ²(2, N = 200) = 9.87, p = .007" in c for c in comments)
     assert any(c.startswith("Error:") and "t(25)=1.20" in c and "would change the reported p" in c for c in comments)
     error = next(c for c in comments if c.startswith("Error:") and "F(2, 87)" in c)
     assert "F(2, 87) = 2.50" in error and ".088 (p recomputed)" in error and "numbers are as reported" in error
@@ -341,11 +343,26 @@ def test_ns_and_thresholds_are_never_dropped_nor_a_doubted_ns_overwritten():
     assert doubted.revision is None and doubted.kept == "the restyled text would change the reported p"
     assert doubted.suggestion == "t(38) = 2.10, p = .042 (p recomputed)"
     made_exact = one("t(38) = 2.14, p < .05")
-    assert made_exact.revision.plain() == "t(38) = 2.14, p = .039"
+    assert made_exact.revision.plain() == "t(38) = 2.14, p = .039" and made_exact.p_given == "p < .05"
+    assert one("t(38)=2.14, p=0.039").p_given == "" and one("t(38) = 2.14, p-value = 0.0392").p_given == ""  # restyled, not replaced
     assert "except the p, which is recomputed from the statistic and its df (the text gave \u201cp < .05\u201d)" in made_exact.comment(revised=True)
     assert stats.f.sf(1, 1, 56) > 0.321
     bound = one("F(1, 56) < 1, ns")
     assert bound.suggestion == "F(1, 56) < 1, p > .321 (p from the bound)" and bound.revision.plain() == "F(1, 56) < 1, p > .321"
-    assert "which is the p the bound allows (the text gave \u201cns\u201d)" in bound.comment(revised=True)
+    assert bound.p_given == "ns" and "which is the p the bound allows (the text gave \u201cns\u201d)" in bound.comment(revised=True)
     kept = one("t(38) = 2.14, p = .039, d = 0.70")
     assert kept.revision is None and "its numbers are as reported." in kept.comment(revised=True)
+
+
+def test_a_revision_that_puts_a_p_the_text_did_not_give_is_commented(tmp_path):
+    """A threshold made the exact p leaves no finding open, but the tracked change carries a number the author did not
+    type: it gets a comment that says so (it had none); a p merely restyled gets none."""
+    path = tmp_path / "m.docx"
+    d = docx.Document()
+    d.add_paragraph("Training helped, t(38) = 2.14, p < .05, and practice did too, t(38)=2.14, p=0.039.")
+    d.save(str(path))
+    out = tmp_path / "revised.docx"
+    assert main(["audit", "--revise", str(out), str(path)]) == 1
+    comments = [c.text for c in docx.Document(str(out)).comments]
+    assert comments == ["Note: The statistic is restyled in the tracked change; its numbers are as reported except the p, which is "
+                        "recomputed from the statistic and its df (the text gave \u201cp < .05\u201d). Suggested: t(38) = 2.14, p = .039"]

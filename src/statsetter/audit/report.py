@@ -52,6 +52,7 @@ class Entry:
     revision: StyledText | None = None  # the house-style text for a tracked change (asked for with restyle=True); None: left as typed
     kept: str = ""  # why a statistic with a different house-style text is left as typed
     recheck: "tuple[Reported, str] | None" = None  # the statistic (with the df read) and the reading the consistency check used
+    p_given: str = ""  # the p as typed ("p < .05", "ns") when the revision puts another in its place; "" when it keeps it
 
     @property
     def checked(self) -> str:
@@ -84,21 +85,19 @@ class Entry:
             evidence = f" ({f.evidence})" if f.evidence and f.evidence not in seen else ""
             said.append(f"{f.message.rstrip('.')}{evidence}.")
             seen.add(f.evidence)
-        text = f"{severity.capitalize()}: " + " ".join(said)
         if revised:
-            text += f" The statistic is restyled in the tracked change; {self._numbers_said()}"
+            said.append(f"The statistic is restyled in the tracked change; {self._numbers_said()}")
         elif kept or (kept is None and self.kept):
-            text += f" Not restyled: {kept or self.kept}."
-        return text + (f" Suggested: {self.suggestion}" if self.suggestion else "")
+            said.append(f"Not restyled: {kept or self.kept}.")
+        if self.suggestion:
+            said.append(f"Suggested: {self.suggestion}")
+        return f"{severity.capitalize()}: " + " ".join(said)
 
     def _numbers_said(self) -> str:
         """Whether the revision keeps the reported numbers, or which p it puts in place of a threshold or "ns"."""
-        new = _P_IN_TEXT.search(self.revision.plain()) if self.revision is not None else None
-        old = _P_IN_TEXT.search(self.found)
-        if new is None or (old is not None and old.group(1) == new.group(1) and _same_number(old.group(2), new.group(2))):
+        given = self.p_given
+        if not given:
             return "its numbers are as reported."
-        ns = _NS.search(self.found)
-        given = old.group() if old is not None else ns.group() if ns is not None else "another p"
         source = "the p the bound allows" if "(p from the bound)" in self.suggestion else "recomputed from the statistic and its df"
         return f"its numbers are as reported except the p, which is {source} (the text gave \u201c{given}\u201d)."
 
@@ -144,15 +143,6 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         return render(record, "stats", style).plain()
     except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
         return ""
-
-
-_NS = re.compile(r"(?<![\w.])n\.?\s?s\b\.?")  # "ns", "n.s.", "n. s."
-
-
-def _same_number(old: str, new: str) -> bool:
-    """Whether two printings of a p stand for the same value (the revision's rounded to the style's decimals)."""
-    a, b = (float(x.replace(",", ".")) for x in (old, new))
-    return abs(a - b) <= 0.5 * 10.0 ** -len(old.replace(",", ".").partition(".")[2]) + 0.5 * 10.0 ** -len(new.replace(",", ".").partition(".")[2]) + 1e-12
 
 
 _LONG_NUMBER = re.compile(r"\d{101,}")
@@ -384,10 +374,28 @@ def _audit_units(
     if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
         entries = [_without(e, "italics", suggest_all) for e in entries]
     if restyle:  # a table row's bare numbers are never rewritten
-        entries = [replace(e, revision=new, kept=why) for e, (new, why) in
-                   ((e, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic, house) if rep is not None else (None, ""))
+        entries = [replace(e, revision=new, kept=why, p_given=_p_given(rep, e.unit.text, new, resolved)) for e, rep, (new, why) in
+                   ((e, rep, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic, house) if rep is not None else (None, ""))
                     for e, rep, house in zip(entries, reps, houses))]
     return entries
+
+
+def _p_given(rep: "Reported | None", text: str, new: "StyledText | None", style: Style) -> str:
+    """The p as the text gave it ("p < .05", "n.s.") when the revision ``new`` puts another p in its place — a threshold
+    or "ns" made the exact p the style asks for, or the p a bound allows; "" when it keeps the reported p (restyled,
+    rounded as the style rounds) or gives none."""
+    if new is None or rep is None or rep.p is None:
+        return ""
+    shown = _P_IN_TEXT.search(new.plain())
+    if shown is None:
+        return ""
+    given = text[rep.p.start : rep.p.end]
+    if rep.p.op == "ns" or rep.p.number is None:
+        return given
+    value = float(shown.group(2).replace(style.decimal_mark, "."))
+    places = len(shown.group(2).replace(style.decimal_mark, ".").partition(".")[2])
+    same_op = shown.group(1) == {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op)
+    return "" if same_op and abs(value - rep.p.number.value) <= rep.p.number.half_unit + 0.5 * 10.0**-places + 1e-12 else given
 
 
 def _without(e: Entry, code: str, suggest_all: bool) -> Entry:

@@ -410,7 +410,8 @@ def revise(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path", 
     """A copy of the .docx with every statistic that has a restyled text
     (``Entry.revision``) replaced by it as a tracked change, and a comment on
     each statistic whose findings the revision does not settle (an error or
-    a warning, or a style finding on a statistic left as typed). Returns the
+    a warning, or a style finding on a statistic left as typed) or whose
+    revision puts a p the text did not give (a threshold made exact). Returns the
     counts: revised, commented, kept (restyling would lose something),
     elsewhere (headers, footers, notes: listed only)."""
     import docx
@@ -443,7 +444,7 @@ def revise(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path", 
         if not runs:
             counts["elsewhere"] += 1
             continue
-        if open_findings or (why and e.revision is not None):
+        if open_findings or (why and e.revision is not None) or (change is not None and e.p_given):
             text = e.comment(open_findings, revised=change is not None, kept=why)
             _comment(document, runs[0], runs[-1], text)
             counts["commented"] += 1
