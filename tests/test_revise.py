@@ -365,4 +365,4 @@ def test_a_revision_that_puts_a_p_the_text_did_not_give_is_commented(tmp_path):
     assert main(["audit", "--revise", str(out), str(path)]) == 1
     comments = [c.text for c in docx.Document(str(out)).comments]
     assert comments == ["Note: The statistic is restyled in the tracked change; its numbers are as reported except the p, which is "
-                        "recomputed from the statistic and its df (the text gave \u201cp < .05\u201d). Suggested: t(38) = 2.14, p = .039"]
+                        "recomputed from the statistic and its df (the text gave \u201cp < .05\u201d). Suggested: t(38) = 2.14, p = .039 (p recomputed)"]

@@ -131,9 +131,12 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
             return ""
         allowed = doubted or (rep.p is not None and rep.p.op == "ns")
         return new.plain() + (" (p from the bound)" if allowed and _P_IN_TEXT.search(new.plain()) else "")
-    if not doubted:
+    if not doubted:  # a p the text did not give (none, a threshold or "ns" made exact) is marked as recomputed
         new = house_text(rep, style, alpha) if house is _UNMADE else house
-        return new.plain() if isinstance(new, StyledText) else ""  # a record the renderer cannot take: no suggestion
+        if not isinstance(new, StyledText):
+            return ""  # a record the renderer cannot take: no suggestion
+        added = _P_IN_TEXT.search(new.plain()) is not None and (rep.p is None or _p_given(rep, new, style) != "")
+        return new.plain() + (" (p recomputed)" if added else "")
     try:
         record = to_record(rep, alpha, style)
         if doubted and record.statistic is not None and record.statistic.df:
@@ -374,13 +377,13 @@ def _audit_units(
     if not (check_italics or italic_seen):  # plain symbols throughout: a choice of the manuscript, not an inconsistency
         entries = [_without(e, "italics", suggest_all) for e in entries]
     if restyle:  # a table row's bare numbers are never rewritten
-        entries = [replace(e, revision=new, kept=why, p_given=_p_given(rep, e.unit.text, new, resolved)) for e, rep, (new, why) in
+        entries = [replace(e, revision=new, kept=why, p_given=_p_given(rep, new, resolved)) for e, rep, (new, why) in
                    ((e, rep, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic, house) if rep is not None else (None, ""))
                     for e, rep, house in zip(entries, reps, houses))]
     return entries
 
 
-def _p_given(rep: "Reported | None", text: str, new: "StyledText | None", style: Style) -> str:
+def _p_given(rep: "Reported | None", new: "StyledText | None", style: Style) -> str:
     """The p as the text gave it ("p < .05", "n.s.") when the revision ``new`` puts another p in its place — a threshold
     or "ns" made the exact p the style asks for, or the p a bound allows; "" when it keeps the reported p (restyled,
     rounded as the style rounds) or gives none."""
@@ -389,7 +392,7 @@ def _p_given(rep: "Reported | None", text: str, new: "StyledText | None", style:
     shown = _P_IN_TEXT.search(new.plain())
     if shown is None:
         return ""
-    given = text[rep.p.start : rep.p.end]
+    given = rep.text[rep.p.start - rep.start : rep.p.end - rep.start]
     if rep.p.op == "ns" or rep.p.number is None:
         return given
     value = float(shown.group(2).replace(style.decimal_mark, "."))
