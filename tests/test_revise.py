@@ -333,6 +333,8 @@ def test_ns_and_thresholds_are_never_dropped_nor_a_doubted_ns_overwritten():
         return entry
 
     assert one("F = 5.40, p < .01").suggestion == "F = 5.40, p < .01"
+    assert one("t(38) = 2.14").suggestion == "t(38) = 2.14, p = .039 (p recomputed)"  # a p the text did not give is marked
+    assert one("t(38) = 2.14, p = .039").suggestion == "t(38) = 2.14, p = .039"
     assert one("F = 5.40, p < .01", "ama11").revision.plain() == "F = 5.40, P < .01"  # the symbol restyled, the threshold kept
     no_df = one("t = 2.1, ns")
     assert no_df.suggestion == "t = 2.1, ns" and no_df.revision is None
