@@ -63,6 +63,13 @@ CASES = [
     # (oneway.test) prints "F = …, num df = 2.00, denom df = 40.5" (memory), whose second df had been lost
     (f"X-squared = 7.42, df = 3, p-value = {C:.4f}", "chi2", (3,), None, 7.42, "=", round(C, 4)),
     (f"F = 3.87, num df = 2.00, denom df = 61.0, p-value = {F:.4f}", "F", (2, 61), None, 3.87, "=", round(F, 4)),
+    # df abbreviated "d.f.", or after their numbers ("(44 df)", "with 2 and 61 df"), as older and biomedical texts write
+    # them, and split by a slash inside the parentheses, "F(2/61)" (practice, from memory)
+    (f"chi-square = 7.42, d.f. = 3, P = {p3(C)}", "chi2", (3,), None, 7.42, "=", float(p3(C))),
+    (f"t = 2.61 (44 df), p = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
+    (f"F = 3.87 with 2 and 61 df, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    (f"χ² = 7.42, 3 d.f., p = {p3(C)}", "chi2", (3,), None, 7.42, "=", float(p3(C))),
+    (f"F(2/61) = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
 ]
 
 
@@ -83,6 +90,17 @@ def codes(text):
 @pytest.mark.parametrize("text", [c[0] for c in CASES])
 def test_a_consistent_typing_raises_no_p_finding(text):
     assert not codes(text) & {"p-does-not-follow", "verdict-changes", "impossible-p", "impossible-value"}
+
+
+def test_numbers_before_df_are_read_only_as_df():
+    """A number before "df" is its df only when nothing names the df after it ("t = 2.14 df = 23": the 23), and only on
+    one line; a t's own value is never read as its df."""
+    (rep,) = [r for r in find_statistics("t = 2.61, df = 44, p = .012") if r.symbol]
+    assert [d.value for d in rep.df] == [44]
+    (rep,) = [r for r in find_statistics("p = .05, t = 2.61\ndf = 44") if r.symbol]
+    assert [d.value for d in rep.df] == [44]
+    (rep,) = [r for r in find_statistics("t = 2.61 df = 44") if r.symbol]
+    assert [d.value for d in rep.df] == [44]
 
 
 def test_a_wrong_p_in_such_a_typing_is_found():

@@ -198,7 +198,9 @@ class _Patterns:
             r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
         )
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
-        self.df = re.compile(rf"d(?<![\w]d)f\]?\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)")
+        # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
+        self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
+                             rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++d\.?f\b\.?(?!\s*[=:(\d])")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         self.coef_b = re.compile(rf"B(?<![\w]B)\s*+=\s*+(?P<num>{num})")
         self.coef_se = re.compile(rf"S(?<![\w]S)E\s*+=\s*+(?P<num>{num})")
@@ -305,7 +307,7 @@ def _effect_name(text: str) -> str | None:
     return None
 
 
-_DF_DASH = re.compile(r"(?<=\d)\s?[–—-]\s?(?=\d)")
+_DF_DASH = re.compile(r"(?<=\d)\s?[–—/-]\s?(?=\d)")  # (a slash too: "F(1/38)")
 _DF_PARTS = {sep: re.compile(rf"[^{sep};]+") for sep in ",;"}
 _DF_PART = re.compile(r"\s*(?:df\s*=\s*)?(\d+(?:[.,]\d+)?)\s*")
 
@@ -328,8 +330,8 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
         n = pat.to_number(found.group("num"), start + found.start("num"))
         rest = inner[: found.start()] + " " * (found.end() - found.start()) + inner[found.end() :]
     sep = ";" if pat.mark == "," else ","
-    if "–" in rest or "—" in rest or "-" in rest:
-        rest = _DF_DASH.sub(lambda d: sep.ljust(len(d.group()), " "), rest)  # F(3–51): df by a dash
+    if "–" in rest or "—" in rest or "-" in rest or "/" in rest:
+        rest = _DF_DASH.sub(lambda d: sep.ljust(len(d.group()), " "), rest)  # F(3–51), F(3/51): df by a dash or slash
     dfs: list[Number] = []
     for m in _DF_PARTS[sep].finditer(rest):
         part = m.group()
@@ -615,7 +617,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
     # an effect size and an n their "=", a df written apart its "df"
     equals = text.find("=", start, end) >= 0
     for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
-                                ("df", pat.df, text.find("df", start, end) >= 0), ("n", pat.n, equals)):
+                                ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
     events.sort(key=lambda e: e[0])
@@ -646,8 +648,9 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
             effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
         elif kind == "df" and (not rep.df or (clause_df and rep.symbol == "F" and len(rep.df) == 1)):
-            number = pat.to_number(m.group("num"), m.start("num"))
-            second = pat.to_number(m.group("num2"), m.start("num2")) if m.group("num2") and rep.symbol == "F" else None
+            first, other = ("num", "num2") if m.group("num") is not None else ("pre", "pre2")
+            number = pat.to_number(m.group(first), m.start(first))
+            second = pat.to_number(m.group(other), m.start(other)) if m.group(other) and rep.symbol == "F" else None
             if number is None:
                 continue
             if rep.df:  # "F = 3.2, num df = 2.00, denom df = 40.5" (as R prints a Welch ANOVA): the F's second df
