@@ -172,3 +172,43 @@ def test_df_spaced_otherwise_than_the_style_is_a_spacing_finding_and_is_restyled
     assert [e.findings[0].evidence for e in entries[:3]] == ["F(1,85)", "t (38)", "χ2(1,N = 80)"]
     assert [e.revision.plain() if e.revision is not None else None for e in entries[:3]] == [
         f"F(1, 85) = 2.10, p = {p3(f)}", f"t(38) = 2.10, p = {p3(t)}", f"χ²(1, N = 80) = 4.20, p = {p3(chi)}"]  # (² a superscript in Word)
+
+
+def _wald(ratio, se):
+    """A ratio's Wald 95% CI and two-sided p from its log and the log's SE (the normal approximation; scipy)."""
+    import math
+
+    z = stats.norm.ppf(0.975)
+    return math.exp(math.log(ratio) - z * se), math.exp(math.log(ratio) + z * se), 2 * stats.norm.sf(abs(math.log(ratio)) / se)
+
+
+def test_ratios_are_read_and_their_ci_and_p_must_agree():
+    """Public-health texts report adjusted odds, hazard, risk and incidence-rate ratios ("aOR = 2.31, 95% CI [1.20,
+    4.40], p = .012"; practice): read as ratios (null 1, above 0), a CI and a p of one Wald test agree (Altman & Bland,
+    2011, BMJ: the p from the CI); these numbers are the test's own, the CI and p computed with scipy. A p clearly below
+    .05 with a CI holding 1, or clearly above with a CI excluding it, is a warning; near the null, where an exact or
+    likelihood-ratio p beside a Wald CI can part from it, nothing is said; the author's order (ratio, CI, p) is kept."""
+    lo, hi, p = _wald(2.31, 0.33)
+    text = f"aOR = 2.31, 95% CI [{lo:.2f}, {hi:.2f}], p = {p3(p)}"
+    (entry,) = audit_units([Unit("a", text)], suggest_all=True)
+    (rep,) = find_statistics(text)
+    assert [(e.name, e.number.value) for e in rep.effects] == [("aOR", 2.31)] and not entry.codes
+    assert entry.suggestion == text  # the ratio first, the p after it, as typed
+    for name in ("HR", "adjusted HR", "RR", "aRR", "IRR", "OR"):
+        (r,) = find_statistics(f"{name} = 1.45, 95% CI [1.10, 1.91], p = .008")
+        assert len(r.effects) == 1 and r.effects[0].ci is not None, name
+    lo, hi, p = _wald(1.52, 0.23)  # CI [0.97, 2.39], p = .069: consistent
+    assert p > 0.05 and lo < 1 and not audit_units([Unit("b", f"OR = 1.52, 95% CI [{lo:.2f}, {hi:.2f}], p = {p3(p)}")])[0].codes
+    wrong = audit_units([Unit("c", f"OR = 1.52, 95% CI [{lo:.2f}, {hi:.2f}], p = .003")])[0]
+    assert wrong.codes == ["ci-p-disagree"] and wrong.severity == "warning" and "the CI includes 1" in wrong.message
+    excluded = audit_units([Unit("d", "HR = 1.45, 95% CI [1.10, 1.91], p = .21")])[0]
+    assert excluded.codes == ["ci-p-disagree"] and "the CI excludes 1" in excluded.message
+    assert not audit_units([Unit("e", f"OR = 1.52, 95% CI [{lo:.2f}, {hi:.2f}], p = .04")])[0].codes  # near the null: not said
+    assert not audit_units([Unit("f", "OR = 1.52, 95% CI [1.00, 2.35], p = .003")])[0].codes  # 1.00 may be above 1
+    t_ci = audit_units([Unit("g", "t(38) = 3.10, p = .004, 95% CI [-0.10, 1.31]")])[0]  # a t's own CI: a mean difference
+    assert "ci-p-disagree" in t_ci.codes
+    assert audit_units([Unit("h", "t(38) = 3.10, p = .004, d = 0.98, 95% CI [−0.02, 1.95]")])[0].codes == []  # d's CI: not checked
+    impossible = audit_units([Unit("i", "OR = 0.00, 95% CI [-0.20, 0.90]")])[0]
+    assert "impossible-value" in impossible.codes
+    said = audit_units([Unit("j", "As the one-tailed test predicted, HR = 1.45, 95% CI [1.10, 1.91], p = .21.")])[0]
+    assert "ci-p-disagree" not in said.codes

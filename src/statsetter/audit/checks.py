@@ -60,6 +60,10 @@ CODES: dict[str, tuple[str, str]] = {
         "η²p (or η², V, φ) does not fit F or χ² and its df",
         "Effect sizes (JARS-Quant); η²p = F·df₁/(F·df₁ + df₂), η² ≤ η²p; V ≥ √(χ²/(N·df)) (definitions; practice)",
     ),
+    "ci-p-disagree": (
+        "the p and the CI disagree about the null value (one says significant, the other not)",
+        "Confidence intervals and p from the same test agree (Altman & Bland, 2011, BMJ, How to obtain the P value from a confidence interval)",
+    ),
     "d-does-not-fit": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
@@ -76,7 +80,7 @@ SEVERITY: dict[str, str] = {
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
     "one-sided": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
-    "p-zero": "warning", "corrected-df": "warning",
+    "p-zero": "warning", "corrected-df": "warning", "ci-p-disagree": "warning",
     "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
 }
@@ -91,6 +95,7 @@ FORMER_CODES: dict[str, str] = {
 _BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
+RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0
 _KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "tau_b": "kendall", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon",
          "V": "wilcoxon", "Q": "cochran_q"}
 
@@ -239,6 +244,44 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     return found
 
 
+def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
+    """A p and a CI of the same result that disagree about the null value (Altman & Bland, 2011: a CI and a p from one
+    test agree): a p clearly below 1 − the CI's level (at most half of it) while the CI holds the null inside, or
+    clearly above (at least twice it) while the CI lies wholly on one side. Each limit stands for what its printed
+    digits allow and a p for its printed range, and the margin leaves alone what different methods give near the null
+    (a Fisher or likelihood-ratio p beside a Wald interval, a profile interval beside a Wald p) — a warning, not an
+    error. The CIs checked: a ratio's (OR, HR, RR and their adjusted forms; null 1) and a t's or z's own (a mean
+    difference or coefficient; null 0); not d's or g's, whose intervals are often approximations that part from the
+    t test's p near the null."""
+    p = rep.p
+    if p is None or p.adjusted or (p.number is None and p.op != "ns"):
+        return []
+    found = [(e.ci, 1.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name in RATIOS]
+    if rep.ci is not None and rep.symbol in ("t", "z"):
+        found.append((rep.ci, 0.0, "the estimate"))
+    out = []
+    for ci, null, name in found:
+        threshold = 1.0 - ci.level
+        if not 0 < threshold < 1 or ci.low.value > ci.high.value:
+            continue
+        if p.op == "ns":
+            significant, not_significant = False, False  # "ns" says no more than p >= alpha: no margin
+        else:
+            v, h = p.number.value, p.number.half_unit  # type: ignore[union-attr]
+            significant = (p.op in ("<", "≤") and v <= threshold / 2) or (p.op == "=" and v + h <= threshold / 2)
+            not_significant = (p.op in (">", "≥") and v >= 2 * threshold) or (p.op == "=" and v - h >= 2 * threshold)
+        inside = ci.low.value + ci.low.half_unit < null < ci.high.value - ci.high.half_unit
+        outside = null < ci.low.value - ci.low.half_unit or null > ci.high.value + ci.high.half_unit
+        if (significant and inside) or (not_significant and outside):
+            said = "includes" if inside else "excludes"
+            shown = "ns" if p.op == "ns" else f"p {p.op} {p.number.text}"  # type: ignore[union-attr]
+            out.append(Finding("ci-p-disagree", f"The p and the {ci.level * 100:g}% CI of {name} disagree: the CI {said} {null:g}, the p is clearly "
+                               f"{'below' if significant else 'above'} {threshold:g}; check both, or say which method gave each.",
+                               f"{shown}; {ci.level * 100:g}% CI [{ci.low.text}, {ci.high.text}]"))
+            break
+    return out
+
+
 def impossible(rep: Reported) -> list[Finding]:
     out = []
     if rep.p is not None and rep.p.number is not None and not 0 <= rep.p.number.value <= 1:
@@ -256,6 +299,8 @@ def impossible(rep: Reported) -> list[Finding]:
         bounds = _BOUNDED_EFFECTS.get(e.name)
         if bounds and not bounds[0] <= e.number.value <= bounds[1]:
             out.append(Finding("impossible-value", f"{e.symbol_text} must lie between {bounds[0]} and {bounds[1]}.", e.number.text))
+        if e.name in RATIOS and (e.number.value <= 0 or (e.ci is not None and e.ci.low.value < 0)):
+            out.append(Finding("impossible-value", f"A ratio ({e.symbol_text}) and its CI lie above 0.", e.number.text))
     for e in rep.descriptives:
         if e.name == "SD" and e.number.value < 0:
             out.append(Finding("negative-sd", "A standard deviation cannot be negative.", e.number.text))
@@ -670,9 +715,9 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
         precision["effects[0].value"] = rep.value.decimals
     for e in rep.effects:
         i = len(effects)
-        if e.name == "OR" and e.number.value <= 0:
+        if e.name in RATIOS and e.number.value <= 0:
             continue
-        effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, i, style, e.name), ratio=e.name == "OR"))
+        effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, i, style, e.name), ratio=e.name in RATIOS))
         precision[f"effects[{i}].value"] = e.number.decimals
     kind = _KIND.get(rep.symbol or "", "reported")
     if rep.symbol == "F":
@@ -688,7 +733,8 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
         effects=tuple(effects),
         precision=precision,
         alpha=alpha,
-        details={"with_n": rep.symbol == "chi2" and n is not None},
+        details={"with_n": rep.symbol == "chi2" and n is not None,
+                 "p_last": rep.symbol is None and rep.p is not None and bool(rep.effects) and rep.p.start > rep.effects[0].start},
     )
 
 
@@ -738,7 +784,7 @@ def _interval(ci, precision: dict[str, int], i: int, style: Style | None, quanti
     low, high = ci.low.value, ci.high.value
     if style is not None:  # a limit printed with an added digit (−.005 for a limit near 0) keeps it
         num = numbers_for(style)
-        null = 1.0 if quantity == "OR" else 0.0
+        null = 1.0 if quantity in RATIOS else 0.0
 
         def as_printed(v: float, printed: Number) -> float:
             for c in (v, math.nextafter(v, null), math.nextafter(v, -math.inf if v < null else math.inf)):

@@ -73,7 +73,7 @@ class Interval:
 
 @dataclass(frozen=True, slots=True)
 class Effect:
-    name: str  # canonical: d, g, eta2, eta2_p, omega2, V, phi, R2, R2_adj, beta, OR, M, SD
+    name: str  # canonical: d, g, eta2, eta2_p, omega2, V, phi, R2, R2_adj, beta, OR (aOR, HR, aHR, RR, aRR, IRR), M, SD
     number: Number
     start: int
     end: int
@@ -163,7 +163,14 @@ _EFFECT_NAMES = [
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
     (r"R(?<![\w]R)\s?(?:[²2]|\^2)", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
+    # ratios as public-health texts type them: adjusted odds, hazard, risk and incidence-rate ratios
+    (r"a(?<![\w]a)OR|A(?<![\w]A)OR|a(?<![\w]a)dj(?:usted)?\.?\s+OR", "aOR"),
+    (r"a(?<![\w]a)HR|A(?<![\w]A)HR|a(?<![\w]a)dj(?:usted)?\.?\s+HR", "aHR"),
+    (r"a(?<![\w]a)RR|A(?<![\w]A)RR|a(?<![\w]a)dj(?:usted)?\.?\s+RR", "aRR"),
     (r"O(?<![\w]O)R", "OR"),
+    (r"H(?<![\w]H)R", "HR"),
+    (r"I(?<![\w]I)RR", "IRR"),
+    (r"R(?<![\w]R)R", "RR"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
     (r"d(?<![\w]d)", "d"),

@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, coefficient_ratio, corrected_df, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, coefficient_ratio, corrected_df, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
@@ -337,6 +337,10 @@ def _audit_units(
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
+        if (rep.ci is not None or rep.effects) and rep.p is not None:
+            disagree = ci_p_agreement(rep, alpha)
+            if disagree and not _ONE_SIDED_SAID.search(unit.text, max(0, rep.start - 120), rep.end + 40):  # a one-tailed p: no disagreement
+                findings += disagree
         if rep.symbol in ("F", "chi2") and rep.effects:
             findings += effect_from_f_or_chi2(rep)
         if rep.symbol == "F":

@@ -66,10 +66,15 @@ def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = Tr
         return None
     ns = rep.p is not None and rep.p.op == "ns"
     if rep.op == "=":
-        if record.p is None and rep.symbol is not None:  # no p to recompute (no df; a rank sum): the author's threshold
-            # or "ns" kept ("ns" as typed: the style has no form of its own for it)
-            kept = StyledText(rep.p.symbol_text) if ns else threshold_p(rep, style, style.keep_together)  # type: ignore[union-attr]
-            return text if kept is None else _bounded(text, "=", style, kept) or text
+        if record.p is None and rep.p is not None and (rep.symbol is not None or rep.effects):  # no p to recompute (no df;
+            # a rank sum; effect sizes alone): the author's threshold or "ns" kept ("ns" as typed: the style has no form for it)
+            kept = StyledText(rep.p.symbol_text) if ns else threshold_p(rep, style, style.keep_together)
+            if kept is None:
+                return text
+            if rep.symbol is None:  # where the text put it, before or after the effect sizes
+                joint = StyledText(f"{style.list_separator} ")
+                return text + joint + kept if record.details.get("p_last") else kept + joint + text
+            return _bounded(text, "=", style, kept) or text
         return text
     # a bound's "ns", like a doubted p, becomes the p the bound allows ("F(1, 56) < 1, p > .32"): true, and what the style asks
     return _bounded(text, rep.op, style, threshold_p(rep, style, style.keep_together) if with_p and not ns else _allowed_p(rep, style))
