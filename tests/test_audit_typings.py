@@ -212,3 +212,39 @@ def test_ratios_are_read_and_their_ci_and_p_must_agree():
     assert "impossible-value" in impossible.codes
     said = audit_units([Unit("j", "As the one-tailed test predicted, HR = 1.45, 95% CI [1.10, 1.91], p = .21.")])[0]
     assert "ci-p-disagree" not in said.codes
+
+
+def test_a_table_of_ratios_with_their_cis_is_read_and_checked(tmp_path):
+    """Public-health tables give a ratio with its 95% CI in one cell and its p in the next column, crude and adjusted
+    side by side. The rows here are BMC Geriatrics 2021, Table 3 (https://bmcgeriatr.biomedcentral.com/articles/
+    10.1186/s12877-021-02124-x/tables/3, open access; its footnote letters kept): every ratio read, each paired with the
+    p column to its right, and none found to disagree with its p; the last row is this test's own, its two pairs made
+    to disagree, and both are found."""
+    import docx
+
+    from statsetter.audit.report import audit_file
+
+    rows = [("Risk factor", "", "Dependent No. (%)", "Crude ORa (95%CI)", "P valueb", "Adjusted ORa (95%CI)c", "P valued"),
+            ("Age (years)", "60–64", "98 (16.6)", "1", "–", "1", "–"),
+            ("", "65–69", "191 (20.5)", "1.3 (1.0–1.7)", "0.06", "1.2 (0.9–1.5)", "0.33"),
+            ("", "70–74", "95 (25.6)", "1.7 (1.3–2.4)", "0.001", "1.6 (1.1–2.2)", "0.007"),
+            ("", "80–84", "39 (27.9)", "1.9 (1.3–3.0)", "0.003", "1.5 (1.0–2.4)", "0.078"),
+            ("Sex", "Male", "155 (13.5)", "0.3 (0.3–0.4)", "< 0.001", "0.4 (0.3–0.5)", "< 0.001"),
+            ("Diabetes mellitus", "Yes", "204 (25.8)", "1.2 (1.0–1.5)", "0.07", "–", "–"),
+            ("This test's own", "row", "1 (1)", "1.6 (1.2–2.1)", "0.40", "2.0 (0.8–5.0)", "0.001")]
+    d = docx.Document()
+    d.add_paragraph("Table 3 Risk factors of dependency")
+    table = d.add_table(rows=len(rows), cols=7)
+    for i, row in enumerate(rows):
+        for j, text in enumerate(row):
+            table.rows[i].cells[j].text = text
+    path = tmp_path / "ratios.docx"
+    d.save(str(path))
+    entries = audit_file(path)
+    read = {(e.location.split(",")[1].strip(), e.found): e.codes for e in entries}
+    assert len(read) == 11  # five real crude ratios, four real adjusted ones, and the test's own two
+    assert read[("row 3", "OR = 1.3, 95% CI [1.0, 1.7], p = 0.06")] == []
+    assert read[("row 5", "aOR = 1.5, 95% CI [1.0, 2.4], p = 0.078")] == []
+    assert [found for (row, found), codes in read.items() if codes] == [
+        "OR = 1.6, 95% CI [1.2, 2.1], p = 0.40", "aOR = 2.0, 95% CI [0.8, 5.0], p = 0.001"]
+    assert all(codes == ["ci-p-disagree"] for codes in read.values() if codes)

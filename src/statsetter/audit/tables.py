@@ -17,7 +17,7 @@ import re
 from dataclasses import dataclass, replace
 from typing import Sequence
 
-from .parsing import Number, PValue, Reported, _patterns
+from .parsing import Effect, Interval, Number, PValue, Reported, _patterns
 from .reading import Unit
 
 __all__ = ["TableStatistic", "table_statistics", "df_readings", "sizes_in", "caption_sizes", "Reading"]
@@ -35,6 +35,30 @@ _ROLES = (
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
 )
 _STAT_ROLES = {"t", "F", "chi2", "r", "z"}
+# a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
+# "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
+_RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr)[a-d*†‡§]?\s*\(\s*95\s?%\s?ci\s*\)[a-d*†‡§]?")
+_RATIO_CELL = re.compile(r"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[*†‡§a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
+                         r"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[*†‡§a-d]*\s*")
+
+
+def _ratio_role(head: str) -> str | None:
+    """"ratio:OR" (aOR, HR, aHR, RR, aRR, IRR) for a column of ratios with their 95% CIs, None otherwise."""
+    m = _RATIO_HEAD.fullmatch(head)
+    if m is None:
+        return None
+    name = m.group("name").upper()
+    adjusted = m.group("adj") is not None or re.search(r"(?i)\badjusted\b|\bmultivariable\b", head) is not None
+    return f"ratio:{'a' if adjusted and name != 'IRR' else ''}{name}"
+
+
+def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
+    m = _RATIO_CELL.fullmatch(text)
+    if m is None:
+        return None
+    read = _patterns(mark).to_number
+    found = tuple(read(m.group(g), m.start(g)) for g in ("est", "lo", "hi"))
+    return found if all(n is not None for n in found) else None  # type: ignore[return-value]
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)\s*")
 _BARE = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?:[*†‡§]+|[a-d])?\s*")
 _NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
@@ -49,7 +73,7 @@ def _role(text: str) -> str | None:
     for pattern, role in _ROLES:
         if pattern.fullmatch(head):
             return role
-    return None
+    return _ratio_role(head) if "95" in head else None
 
 
 def sizes_in(text: str) -> list[int]:
@@ -164,11 +188,30 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
         if stat_cells and not heads_in_row and not any(numbers[c] is not None for c in stat_cells if roles.get(c) in _STAT_ROLES):
             roles = {c: role for c, role in header.items() if role is not None}  # a header row (also one partway down the table)
-        if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES):
+        ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
+        if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES) and not any(ratios.values()):
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
             if sizes:
                 groups = sizes
             continue
+        # a ratio and its CI in one cell, its p in the next p column to the right (a crude and an adjusted pair side by side)
+        for c, cell in ratios.items():
+            if cell is None:
+                continue
+            estimate, low, high = cell
+            unit = row[c][0]
+            p_col = next((k for k in sorted(roles) if k > c and roles[k] == "p"), None)
+            later = next((k for k in sorted(roles) if k > c and roles[k].startswith("ratio:")), None)
+            if p_col is not None and later is not None and later < p_col:
+                p_col = None  # the p beyond the next ratio column is that one's
+            p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
+            name = roles[c].removeprefix("ratio:")
+            ci = Interval(0.95, low, high, low.start, high.end)
+            effect = Effect(name, estimate, estimate.start, high.end, estimate.start, name, ci)
+            rep = Reported(None, "", estimate.start, estimate.start, high.end, p=p, effects=[effect])
+            p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
+            rep.text = f"{name} = {estimate.text}, 95% CI [{low.text}, {high.text}]{p_text}"
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) column" + (", the p column" if p else "")))
         # a statistic whose value sits alone under a head named t, F, χ², r or z
         for c, role in roles.items():
             if role not in _STAT_ROLES or numbers.get(c) is None or c not in row:
