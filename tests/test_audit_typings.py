@@ -248,3 +248,36 @@ def test_a_table_of_ratios_with_their_cis_is_read_and_checked(tmp_path):
     assert [found for (row, found), codes in read.items() if codes] == [
         "OR = 1.6, 95% CI [1.2, 2.1], p = 0.40", "aOR = 2.0, 95% CI [0.8, 5.0], p = 0.001"]
     assert all(codes == ["ci-p-disagree"] for codes in read.values() if codes)
+
+
+def test_a_second_real_table_of_ratios_raises_nothing(tmp_path):
+    """Scientific Reports 2023, Table 2 (https://www.nature.com/articles/s41598-023-43474-3/tables/2, open access):
+    univariable and multivariable ORs with three-decimal CIs and four-decimal p values, some starred; all 20 read,
+    none found to disagree with its p (the CIs and p of one logistic regression agree)."""
+    import docx
+
+    from statsetter.audit.report import audit_file
+
+    rows = [("", "Univariable", "", "Multivariable", ""), ("", "OR (95% CI)", "p value", "OR (95% CI)", "p value"),
+            ("Age", "1.017 (1.009–1.026)", "< .0001*", "1.005 (0.992–1.018)", "0.4392"),
+            ("Female", "0.778 (0.593–1.021)", "0.0701*", "0.747 (0.533–1.048)", "0.0909"),
+            ("Lower middle", "0.976 (0.679–1.402)", "0.8949", "1.22 (0.826–1.804)", "0.3179"),
+            ("Upper middle", "0.552 (0.366–0.832)", "0.0045", "0.764 (0.482–1.211)", "0.2521"),
+            ("Upper", "0.654 (0.442–0.969)", "0.0342", "0.947 (0.6–1.494)", "0.814"),
+            ("High school", "0.635 (0.453–0.892)", "0.0088", "0.848 (0.538–1.338)", "0.4782"),
+            ("≥ College or graduate school", "0.484 (0.327–0.716)", "0.0003", "0.731 (0.43–1.243)", "0.2477"),
+            ("Drinking", "0.739 (0.559–0.976)", "0.0328*", "0.779 (0.568–1.069)", "0.1215"),
+            ("Rural", "1.507 (1.123–2.022)", "0.0062*", "1.198 (0.871–1.648)", "0.2675"),
+            ("Yes (3,4)", "1.837 (1.396–2.419)", "< .0001*", "1.391 (1.013–1.912)", "0.0417")]
+    d = docx.Document()
+    d.add_paragraph("Table 2 Univariable and multivariable logistic regression analyses of the risk factors")
+    table = d.add_table(rows=len(rows), cols=5)
+    for i, row in enumerate(rows):
+        for j, text in enumerate(row):
+            table.rows[i].cells[j].text = text
+    path = tmp_path / "ratios.docx"
+    d.save(str(path))
+    entries = audit_file(path)
+    assert len(entries) == 20
+    assert [e.found for e in entries if e.codes] == []
+    assert "OR = 1.391, 95% CI [1.013, 1.912], p = 0.0417" in [e.found for e in entries]
