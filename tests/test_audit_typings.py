@@ -248,6 +248,8 @@ def test_a_table_of_ratios_with_their_cis_is_read_and_checked(tmp_path):
     assert [found for (row, found), codes in read.items() if codes] == [
         "OR = 1.6, 95% CI [1.2, 2.1], p = 0.40", "aOR = 2.0, 95% CI [0.8, 5.0], p = 0.001"]
     assert all(codes == ["ci-p-disagree"] for codes in read.values() if codes)
+    own = next(e for e in entries if e.found.startswith("OR = 1.6"))
+    assert own.suggestion == "OR = 1.6, 95% CI [1.2, 2.1], p = .40"  # the p after the ratio, as the row reads
 
 
 def test_a_second_real_table_of_ratios_raises_nothing(tmp_path):

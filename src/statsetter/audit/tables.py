@@ -205,6 +205,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if p_col is not None and later is not None and later < p_col:
                 p_col = None  # the p beyond the next ratio column is that one's
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
+            if p is not None:  # placed after the CI, as the row reads (its own cell's offsets would put it first)
+                p = replace(p, start=high.end + 2, end=high.end + 2 + p.end - p.start, symbol_start=high.end + 2)
             name = roles[c].removeprefix("ratio:")
             ci = Interval(0.95, low, high, low.start, high.end)
             effect = Effect(name, estimate, estimate.start, high.end, estimate.start, name, ci)
