@@ -214,16 +214,29 @@ def test_ratios_are_read_and_their_ci_and_p_must_agree():
     assert "ci-p-disagree" not in said.codes
 
 
+def _audited_table(tmp_path, caption, rows):
+    """The audit of a Word document holding ``caption`` and a table of ``rows`` (python-docx)."""
+    import docx
+
+    from statsetter.audit.report import audit_file
+
+    d = docx.Document()
+    d.add_paragraph(caption)
+    table = d.add_table(rows=len(rows), cols=len(rows[0]))
+    for i, row in enumerate(rows):
+        for j, text in enumerate(row):
+            table.rows[i].cells[j].text = text
+    path = tmp_path / "ratios.docx"
+    d.save(str(path))
+    return audit_file(path)
+
+
 def test_a_table_of_ratios_with_their_cis_is_read_and_checked(tmp_path):
     """Public-health tables give a ratio with its 95% CI in one cell and its p in the next column, crude and adjusted
     side by side. The rows here are BMC Geriatrics 2021, Table 3 (https://bmcgeriatr.biomedcentral.com/articles/
     10.1186/s12877-021-02124-x/tables/3, open access; its footnote letters kept): every ratio read, each paired with the
     p column to its right, and none found to disagree with its p; the last row is this test's own, its two pairs made
     to disagree, and both are found."""
-    import docx
-
-    from statsetter.audit.report import audit_file
-
     rows = [("Risk factor", "", "Dependent No. (%)", "Crude ORa (95%CI)", "P valueb", "Adjusted ORa (95%CI)c", "P valued"),
             ("Age (years)", "60–64", "98 (16.6)", "1", "–", "1", "–"),
             ("", "65–69", "191 (20.5)", "1.3 (1.0–1.7)", "0.06", "1.2 (0.9–1.5)", "0.33"),
@@ -232,15 +245,7 @@ def test_a_table_of_ratios_with_their_cis_is_read_and_checked(tmp_path):
             ("Sex", "Male", "155 (13.5)", "0.3 (0.3–0.4)", "< 0.001", "0.4 (0.3–0.5)", "< 0.001"),
             ("Diabetes mellitus", "Yes", "204 (25.8)", "1.2 (1.0–1.5)", "0.07", "–", "–"),
             ("This test's own", "row", "1 (1)", "1.6 (1.2–2.1)", "0.40", "2.0 (0.8–5.0)", "0.001")]
-    d = docx.Document()
-    d.add_paragraph("Table 3 Risk factors of dependency")
-    table = d.add_table(rows=len(rows), cols=7)
-    for i, row in enumerate(rows):
-        for j, text in enumerate(row):
-            table.rows[i].cells[j].text = text
-    path = tmp_path / "ratios.docx"
-    d.save(str(path))
-    entries = audit_file(path)
+    entries = _audited_table(tmp_path, "Table 3 Risk factors of dependency", rows)
     read = {(e.location.split(",")[1].strip(), e.found): e.codes for e in entries}
     assert len(read) == 11  # five real crude ratios, four real adjusted ones, and the test's own two
     assert read[("row 3", "OR = 1.3, 95% CI [1.0, 1.7], p = 0.06")] == []
@@ -256,10 +261,6 @@ def test_a_second_real_table_of_ratios_raises_nothing(tmp_path):
     """Scientific Reports 2023, Table 2 (https://www.nature.com/articles/s41598-023-43474-3/tables/2, open access):
     univariable and multivariable ORs with three-decimal CIs and four-decimal p values, some starred; all 20 read,
     none found to disagree with its p (the CIs and p of one logistic regression agree)."""
-    import docx
-
-    from statsetter.audit.report import audit_file
-
     rows = [("", "Univariable", "", "Multivariable", ""), ("", "OR (95% CI)", "p value", "OR (95% CI)", "p value"),
             ("Age", "1.017 (1.009–1.026)", "< .0001*", "1.005 (0.992–1.018)", "0.4392"),
             ("Female", "0.778 (0.593–1.021)", "0.0701*", "0.747 (0.533–1.048)", "0.0909"),
@@ -271,15 +272,7 @@ def test_a_second_real_table_of_ratios_raises_nothing(tmp_path):
             ("Drinking", "0.739 (0.559–0.976)", "0.0328*", "0.779 (0.568–1.069)", "0.1215"),
             ("Rural", "1.507 (1.123–2.022)", "0.0062*", "1.198 (0.871–1.648)", "0.2675"),
             ("Yes (3,4)", "1.837 (1.396–2.419)", "< .0001*", "1.391 (1.013–1.912)", "0.0417")]
-    d = docx.Document()
-    d.add_paragraph("Table 2 Univariable and multivariable logistic regression analyses of the risk factors")
-    table = d.add_table(rows=len(rows), cols=5)
-    for i, row in enumerate(rows):
-        for j, text in enumerate(row):
-            table.rows[i].cells[j].text = text
-    path = tmp_path / "ratios.docx"
-    d.save(str(path))
-    entries = audit_file(path)
+    entries = _audited_table(tmp_path, "Table 2 Univariable and multivariable logistic regression analyses of the risk factors", rows)
     assert len(entries) == 20
     assert [e.found for e in entries if e.codes] == []
     assert "OR = 1.391, 95% CI [1.013, 1.912], p = 0.0417" in [e.found for e in entries]

@@ -27,7 +27,7 @@ from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, co
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
-from .word import _P_IN_TEXT, _UNMADE, house_text, restyled, threshold_p
+from .word import _P_IN_TEXT, _UNMADE, house_text, restyled, same_p, threshold_p
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "CAUTION"]
 
@@ -287,6 +287,11 @@ def _above_unadjusted(rep: Reported, alpha: float) -> bool:
 _ONE_SIDED_SAID = re.compile(r"(?i)one[- ]?(?:tailed|sided)|directional")
 
 
+def _one_sided_said(text: str, rep: Reported) -> "re.Match[str] | None":
+    """Where the text around a statistic says its test was one-tailed (the 120 characters before it to 40 after)."""
+    return _ONE_SIDED_SAID.search(text, max(0, rep.start - 120), min(len(text), rep.end + 40))
+
+
 def audit_units(
     units: Sequence[Unit], style: "Style | str | None" = None, *, alpha: float = 0.05, grim_items: int | None = None,
     suggest_all: bool = False, check_italics: bool = False, restyle: bool = False, decimal_mark: str = "auto",
@@ -339,7 +344,7 @@ def _audit_units(
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
         if (rep.ci is not None or rep.effects) and rep.p is not None:
             disagree = ci_p_agreement(rep, alpha)
-            if disagree and not _ONE_SIDED_SAID.search(unit.text, max(0, rep.start - 120), rep.end + 40):  # a one-tailed p: no disagreement
+            if disagree and _one_sided_said(unit.text, rep) is None:  # a one-tailed p: no disagreement
                 findings += disagree
         if rep.symbol in ("F", "chi2") and rep.effects:
             findings += effect_from_f_or_chi2(rep)
@@ -368,7 +373,7 @@ def _audit_units(
                 notes.append(f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
                              f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.")
         if any(f.code == "one-sided" for f in findings):
-            said = _ONE_SIDED_SAID.search(unit.text, max(0, rep.start - 120), min(len(unit.text), rep.end + 40))
+            said = _one_sided_said(unit.text, rep)
             if said is not None:  # the text says the test was one-sided, and the p fits one
                 findings = [f for f in findings if f.code != "one-sided"]
                 notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")
@@ -397,12 +402,7 @@ def _p_given(rep: "Reported | None", new: "StyledText | None", style: Style) -> 
     if shown is None:
         return ""
     given = rep.text[rep.p.start - rep.start : rep.p.end - rep.start]
-    if rep.p.op == "ns" or rep.p.number is None:
-        return given
-    value = float(shown.group(2).replace(style.decimal_mark, "."))
-    places = len(shown.group(2).replace(style.decimal_mark, ".").partition(".")[2])
-    same_op = shown.group(1) == {"≤": "<", "≥": ">"}.get(rep.p.op, rep.p.op)
-    return "" if same_op and abs(value - rep.p.number.value) <= rep.p.number.half_unit + 0.5 * 10.0**-places + 1e-12 else given
+    return "" if same_p(rep.p, shown, style.decimal_mark) else given
 
 
 def _without(e: Entry, code: str, suggest_all: bool) -> Entry:

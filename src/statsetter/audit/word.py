@@ -22,7 +22,7 @@ from typing import TYPE_CHECKING, Sequence
 from ..style.numbers import numbers_for
 from ..styled import StyledText
 from .checks import Finding
-from .parsing import Reported
+from .parsing import PValue, Reported
 from .reading import OMATH, math_text
 
 if TYPE_CHECKING:
@@ -237,12 +237,20 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
         return "the restyled text would change the reported p" if doubted else ""
     if new_p is None:
         return "the restyled text would drop the p value"
-    value, places = _value(new_p.group(2), new_mark)
-    same = new_p.group(1) == rep.p.op and abs(value - old_p.value) <= old_p.half_unit + 0.5 * 10.0**-places + 1e-12  # type: ignore[union-attr]
+    same = same_p(rep.p, new_p, new_mark)  # type: ignore[arg-type]
     exactable = rep.p.op != "=" or old_p.value < 0.001  # type: ignore[union-attr]
     if not same and (doubted or not exactable):
         return "the restyled text would change the reported p"
     return ""
+
+
+def same_p(p: PValue, shown: "re.Match[str]", mark: str) -> bool:
+    """Whether a p the style prints (``shown``: a match of _P_IN_TEXT) is the reported ``p`` restyled: the same
+    operator and a value its printed precision allows, rounded as the style rounds."""
+    if p.number is None:
+        return False
+    value, places = _value(shown.group(2), mark)
+    return shown.group(1) == p.op and abs(value - p.number.value) <= p.number.half_unit + 0.5 * 10.0**-places + 1e-12
 
 
 # -- runs -------------------------------------------------------------------------------
