@@ -214,6 +214,70 @@ def test_ratios_are_read_and_their_ci_and_p_must_agree():
     assert "ci-p-disagree" not in said.codes
 
 
+# Ratios as real texts type them without "=": quotations of published papers collected in BMJ Evidence-Based
+# Medicine's table "Example uses of ORs" (https://ebm.bmj.com/highwire/markup/145451/expansion), and JMIR's
+# "Guidelines for Reporting Statistics" (https://support.jmir.org/hc/en-us/articles/360019690851), its own example; and
+# BMJ Open 2018;8:e017385, abstract (http://bmjopen.bmj.com/cgi/content/full/8/1/e017385): a name, its abbreviation, "="
+RATIOS_TYPED = [
+    ("significantly associated with non-CVD (adjusted HR (aHR)=1.29, 95% CI 1.16 to 1.44) and all-cause (aHR=1.24, 95% CI "
+     "1.14 to 1.39), but not cancer (aHR=1.15, 95% CI 0.96 to 1.38)", [("aHR", 1.29, 1.16, 1.44), ("aHR", 1.24, 1.14, 1.39),
+                                                                     ("aHR", 1.15, 0.96, 1.38)]),
+    ("Both 30-day mortality (OR, 0.76; 95% CI, 0.73 to 0.80) and 90-day mortality (OR, 0.73; 95% CI, 0.70 to 0.76) were "
+     "significantly lower for azithromycin users.", [("OR", 0.76, 0.73, 0.80), ("OR", 0.73, 0.70, 0.76)]),
+    ("are 8.3 times more likely to be aware of the vaccine (AOR: 8.32, 95% CI: 2 to 39, p<0.01).", [("aOR", 8.32, 2, 39)]),
+    ("had a 7-fold increased risk of early stent thrombosis vs patients in the lowest tertile (OR, 7.63; 95% CI, 4.18 to 13.91).",
+     [("OR", 7.63, 4.18, 13.91)]),
+    ("was associated with a 19% decrease in the odds of telomere shortening (unadjusted odds ratio, 0.81; 95% CI, 0.69 to 0.95).",
+     [("OR", 0.81, 0.69, 0.95)]),
+    ("separate each statistic with a semicolon. For example: (P=.50; OR 2.72, 95% CI 0.45-2.6).", [("OR", 2.72, 0.45, 2.6)]),
+]
+
+
+@pytest.mark.parametrize("text, ratios", RATIOS_TYPED)
+def test_ratios_typed_without_equals_are_read_with_their_cis(text, ratios):
+    """AMA's and NEJM's "OR, 0.76; 95% CI, 0.73 to 0.80", "AOR: 8.32", "OR 2.72" and the spelled-out "odds ratio, 0.81"
+    are ratios with their CIs (they had not been read at all: no check could see them)."""
+    got = [(e.name, e.number.value, e.ci.low.value, e.ci.high.value) for r in find_statistics(text) for e in r.effects if e.ci]
+    assert got == ratios
+
+
+def test_what_the_ratios_typed_without_equals_say_is_checked():
+    """Read, they are checked as any ratio: JMIR's own example puts the OR (2.72) above its CI's upper limit (2.6) —
+    found; a p that the CI contradicts is found (invented numbers: the CI 0.73 to 0.80 excludes 1, so p = .40 cannot be
+    its Wald test's); the real typings above raise nothing else."""
+    assert "ci-excludes-estimate" in codes(RATIOS_TYPED[-1][0])
+    assert "ci-p-disagree" in codes("Mortality was lower (OR, 0.76; 95% CI, 0.73 to 0.80; P = .40).")
+    assert codes("Mortality was lower (OR, 0.76; 95% CI, 0.73 to 0.80; P < .001).") == {"p-symbol"}  # AMA's capital P in APA
+    for text, _ in RATIOS_TYPED[:4]:
+        assert not {"ci-excludes-estimate", "ci-p-disagree", "impossible-value"} & set(codes(text)), text
+    # an odds ratio spelled out "of" its number, and a hazard ratio with its CI in AMA's form
+    (rep,) = find_statistics("An odds ratio of 1.7 (95% confidence interval [CI], 1.05 to 2.8) favoured the treatment.")
+    assert [(e.name, e.number.value, e.ci.low.value) for e in rep.effects] == [("OR", 1.7, 1.05)]
+    (rep,) = find_statistics("associated with the outcome (odds ratio [OR], 1.52; 95% CI, 1.08-2.14; P = .02)")  # (practice)
+    assert [(e.name, e.number.value, e.ci.high.value) for e in rep.effects] == [("OR", 1.52, 2.14)]
+    (rep,) = find_statistics("Survival was longer (HR, 0.72; 95% CI, 0.55-0.94; P = .02).")
+    assert [(e.name, e.number.value, e.ci.high.value) for e in rep.effects] == [("HR", 0.72, 0.94)] and rep.p.number.value == 0.02
+
+
+def test_a_ratio_typed_in_words_is_restyled_only_where_no_meaning_is_lost():
+    """A CI's "to" and a ratio's spelled-out name are notation, which the house style writes its own way (the revision
+    had been refused: "would drop 'to'"); "unadjusted" is the author's word, and keeps the statistic as typed."""
+    (e,) = audit_units([Unit("a", "Mortality was lower (OR, 0.76; 95% CI, 0.73 to 0.80; P = .40).")], restyle=True)
+    assert e.revision is not None and e.revision.plain() == "OR = 0.76, 95% CI [0.73, 0.80], p = .40"
+    (e,) = audit_units([Unit("b", "lower (adjusted odds ratio, 0.81; 95% CI, 0.69 to 0.95, p=.03)")], restyle=True)
+    assert e.revision is not None and e.revision.plain() == "aOR = 0.81, 95% CI [0.69, 0.95], p = .03"
+    (e,) = audit_units([Unit("c", "lower (unadjusted odds ratio, 0.81; 95% CI, 0.69 to 0.95, p=.03)")], restyle=True)
+    assert e.revision is None and "unadjusted" in e.kept
+
+
+def test_words_that_only_look_like_a_ratio_without_equals_are_not_read():
+    """Capital "OR" as a word, a ratio's name before a whole number (a count, a reference category), and "risk of" are
+    not ratios (no decimals: a ratio is printed with them)."""
+    for text in ("Either arm A OR arm B was chosen.", "the OR 2 times higher", "HR 1 (reference)", "AND/OR 3 items",
+                 "the risk of 2.5 falls a year", "a relative risk reduction of 0.3"):
+        assert not [e for r in find_statistics(text) for e in r.effects], text
+
+
 def _audited_table(tmp_path, caption, rows):
     """The audit of a Word document holding ``caption`` and a table of ``rows`` (python-docx)."""
     import docx

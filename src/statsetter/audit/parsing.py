@@ -163,14 +163,16 @@ _EFFECT_NAMES = [
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
     (r"R(?<![\w]R)\s?(?:[²2]|\^2)", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
-    # ratios as public-health texts type them: adjusted odds, hazard, risk and incidence-rate ratios
-    (r"a(?<![\w]a)OR|A(?<![\w]A)OR|a(?<![\w]a)dj(?:usted)?\.?\s+OR", "aOR"),
-    (r"a(?<![\w]a)HR|A(?<![\w]A)HR|a(?<![\w]a)dj(?:usted)?\.?\s+HR", "aHR"),
-    (r"a(?<![\w]a)RR|A(?<![\w]A)RR|a(?<![\w]a)dj(?:usted)?\.?\s+RR", "aRR"),
-    (r"O(?<![\w]O)R", "OR"),
-    (r"H(?<![\w]H)R", "HR"),
-    (r"I(?<![\w]I)RR", "IRR"),
-    (r"R(?<![\w]R)R", "RR"),
+    # ratios as public-health texts type them: adjusted odds, hazard, risk and incidence-rate ratios, abbreviated or
+    # spelled out (every ratio's name, and no other, ends in "R", "ratio" or "risk": the effect pattern reads a ratio
+    # also without "=", as "OR, 0.76", "AOR: 8.32", "OR 2.72" and "odds ratio of 1.7")
+    (r"a(?<![\w]a)OR|A(?<![\w]A)OR|a(?<![\w]a)dj(?:usted)?\.?\s+OR|a(?<![\w]a)djusted\s+odds\s+ratio", "aOR"),
+    (r"a(?<![\w]a)HR|A(?<![\w]A)HR|a(?<![\w]a)dj(?:usted)?\.?\s+HR|a(?<![\w]a)djusted\s+hazard\s+ratio", "aHR"),
+    (r"a(?<![\w]a)RR|A(?<![\w]A)RR|a(?<![\w]a)dj(?:usted)?\.?\s+RR|a(?<![\w]a)djusted\s+(?:risk\s+ratio|relative\s+risk)", "aRR"),
+    (r"O(?<![\w]O)R|o(?<![\w]o)dds\s+ratio|O(?<![\w]O)dds\s+ratio|u(?<![\w]u)nadjusted\s+odds\s+ratio|c(?<![\w]c)rude\s+odds\s+ratio", "OR"),
+    (r"H(?<![\w]H)R|h(?<![\w]h)azard\s+ratio|H(?<![\w]H)azard\s+ratio", "HR"),
+    (r"I(?<![\w]I)RR|i(?<![\w]i)ncidence[-\s]rate\s+ratio|I(?<![\w]I)ncidence[-\s]rate\s+ratio", "IRR"),
+    (r"R(?<![\w]R)R|r(?<![\w]r)isk\s+ratio|R(?<![\w]R)isk\s+ratio|r(?<![\w]r)elative\s+risk|R(?<![\w]R)elative\s+risk", "RR"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
     (r"d(?<![\w]d)", "d"),
@@ -181,6 +183,11 @@ _EFFECT_NAMES = [
     (r"S(?<![\w]S)D", "SD"),
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
+# after a ratio's name, its abbreviation in parentheses or brackets ("adjusted HR (aHR)=1.29", "odds ratio [OR], 1.52")
+_RATIO_ABBREVIATED = r"(?:(?:(?<=R)|(?<=ratio)|(?<=risk))\s*+[(\[]a?[A-Z]{1,3}[)\]])"
+# after a ratio's name, its number without "=": a comma or colon ("OR, 0.76", AMA's form; "AOR: 8.32"), "of" ("odds ratio
+# of 1.7") or a space ("OR 2.72"), and a number with decimals (not "OR 2 times", nor a count)
+_RATIO_WITHOUT_EQUALS = r"(?:(?<=R)|(?<=R[)\]])|(?<=ratio)|(?<=risk))(?:\s*+[:,]|\s++of\b|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)"
 
 
 class _Patterns:
@@ -198,11 +205,11 @@ class _Patterns:
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
-            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval)s?\s*+[:=,]?\s*+"
+            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,]?\s*+"
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
         self.effect = re.compile(
-            r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})"
+            r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf"){_RATIO_ABBREVIATED}?(?:\s*+(?P<op>=)|{_RATIO_WITHOUT_EQUALS})\s*+(?P<num>{num})"
         )
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
@@ -415,7 +422,7 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         at = max(at, e)
     gaps.append((at, len(text)))
     for gap_start, gap_end in gaps:  # p values, effect sizes and descriptives outside any head's clause
-        if _OPERATOR_OR_NS.search(text, gap_start, gap_end) is None:  # none in any of its sentences (most gaps: ", and ")
+        if not _anything_in(text, gap_start, gap_end):  # none in any of its sentences (most gaps: ", and ")
             continue
         piece = gap_start
         while piece < gap_end:
@@ -518,11 +525,17 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
 
 
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
+_RATIO_BARE = re.compile(r"R(?<=[OHR]R)|o(?<=ratio)|k(?<=risk)")  # where a ratio may be typed without "=" (then the pattern decides)
+
+
+def _anything_in(text: str, start: int, end: int) -> bool:
+    """Whether text[start:end] may hold a p, an effect size or a descriptive: an operator, "ns", or a ratio's name."""
+    return _OPERATOR_OR_NS.search(text, start, end) is not None or _RATIO_BARE.search(text, start, end) is not None
 
 
 def _orphans(pat: _Patterns, text: str, start: int, end: int) -> list[Reported]:
     """The statistics without a head in one sentence piece: one cluster."""
-    if _OPERATOR_OR_NS.search(text, start, end) is None:
+    if not _anything_in(text, start, end):
         return []
     first = [m.start() for regex in (pat.p, pat.effect) for m in [regex.search(text, start, end)] if m is not None]
     if not first:
@@ -621,9 +634,10 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
 def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:
     events: list[tuple[int, str, re.Match[str]]] = []
     # a search is skipped where the clause lacks what its pattern must contain: an interval its level's percent sign,
-    # an effect size and an n their "=", a df written apart its "df"
+    # an effect size its "=" or a ratio's name, an n its "=", a df written apart its "df"
     equals = text.find("=", start, end) >= 0
-    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
+    effects = equals or _RATIO_BARE.search(text, start, end) is not None
+    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, effects),
                                 ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]

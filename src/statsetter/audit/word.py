@@ -21,7 +21,7 @@ from typing import TYPE_CHECKING, Sequence
 
 from ..style.numbers import numbers_for
 from ..styled import StyledText
-from .checks import Finding
+from .checks import RATIOS, Finding
 from .parsing import PValue, Reported
 from .reading import OMATH, math_text
 
@@ -180,11 +180,23 @@ def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, 
 
 
 def _lost_word(rep: Reported, old: str, new: str) -> str:
+    """The first word of ``old`` that ``new`` drops, other than notation: a CI's "to" between its limits ("95% CI, 0.73
+    to 0.80") and the words of a ratio's spelled-out name ("odds ratio" for OR, "adjusted" in aOR) are notation there;
+    "unadjusted" or "crude" are the author's and keep the text as typed."""
     kept = {w.lower() for w in _WORD.findall(new)} | _NOTATION_WORDS
-    for w in _WORD.findall(old):
-        if w.lower() not in kept:
-            return w
+    spans = [(ci.low.end, ci.high.start) for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
+    spans += [(e.symbol_start, e.symbol_start + len(e.symbol_text)) for e in rep.effects if e.name in RATIOS]
+    for m in _WORD.finditer(old):
+        w = m.group().lower()
+        if w in kept:
+            continue
+        at = rep.start + m.start()
+        if not any(a <= at < b for a, b in spans) or w not in _RATIO_AND_RANGE_WORDS:
+            return m.group()
     return ""
+
+
+_RATIO_AND_RANGE_WORDS = frozenset({"to", "odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj"})
 
 
 def _value(token: str, mark: str) -> tuple[float, int]:
