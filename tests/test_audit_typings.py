@@ -70,6 +70,11 @@ CASES = [
     (f"F = 3.87 with 2 and 61 df, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
     (f"χ² = 7.42, 3 d.f., p = {p3(C)}", "chi2", (3,), None, 7.42, "=", float(p3(C))),
     (f"F(2/61) = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
+    # R's summary of a linear model, its last line pasted as printed (riptutorial's "Linear regression on the mtcars
+    # dataset", https://riptutorial.com/r/example/2738/linear-regression-on-the-mtcars-dataset, and dummies.com's "How to
+    # evaluate linear data with R": lm(mpg ~ wt, mtcars)); the F, its df and the p had none of them been read
+    ("F-statistic: 91.38 on 1 and 30 DF,  p-value: 1.294e-10", "F", (1, 30), None, 91.38, "=", 1.294e-10),
+    (f"F-statistic: 3.87 on 2 and 61 DF,  p-value: {F:.4g}", "F", (2, 61), None, 3.87, "=", float(f"{F:.4g}")),
 ]
 
 
@@ -90,6 +95,19 @@ def codes(text):
 @pytest.mark.parametrize("text", [c[0] for c in CASES])
 def test_a_consistent_typing_raises_no_p_finding(text):
     assert not codes(text) & {"p-does-not-follow", "verdict-changes", "impossible-p", "impossible-value"}
+
+
+def test_a_p_after_value_and_a_colon_is_read_and_restyled_as_given():
+    """"p-value: 0.000285" (R's way, and authors' who copy it: "statistically significant (p-value: 0.000285)", a
+    tutorial on mtcars) is a p; an exact p below the smallest the style prints is the reported p restyled ("p < .001"),
+    not a recomputed one (the suggestion had said "(p recomputed)"); a colon elsewhere ("p: note") is not read."""
+    (rep,) = find_statistics("which is statistically significant (p-value: 0.000285).")
+    assert rep.p.op == "=" and rep.p.number.value == 0.000285
+    (e,) = audit_units([Unit("a", "F(1, 30) = 16.86, p = 0.000285")], suggest_all=True)
+    assert e.suggestion == "F(1, 30) = 16.86, p < .001" and "p-does-not-follow" not in e.codes
+    (e,) = audit_units([Unit("b", "t(40) = 5.2, p = .04")], suggest_all=True)  # p = 6.2e-6 (scipy): recomputed, and said so
+    assert e.suggestion == "t(40) = 5.2, p < .001 (p recomputed)"
+    assert not find_statistics("p: see the note; F-statistics: below")
 
 
 def test_numbers_before_df_are_read_only_as_df():

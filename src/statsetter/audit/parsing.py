@@ -106,7 +106,7 @@ class Reported:
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
 def symbol_of(text: str) -> str | None:
-    t = text.replace(" ", "")
+    t = text.replace(" ", "").removesuffix("-statistic")
     low = t.lower()
     if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2", "x-squared", "xsquared"):  # X-squared: as R prints χ²
         return "chi2"
@@ -137,6 +137,7 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--"
 _SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
             r"X\s?²", r"X\^2", r"X[- ]squared",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
+            r"F-statistic", r"t-statistic", r"z-statistic",  # as R's summary of a linear model prints the F ("F-statistic: 4.51")
             "t", "F", "r", "z", "Z", "U", "H", "W", "T", "Q", "V")
 
 
@@ -198,10 +199,10 @@ class _Patterns:
         self.number = re.compile(num)
         self.head = re.compile(
             rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
-            rf"\s*+(?P<op>=|<|>|≤|≥)\s*+(?P<num>{num}{_EXPONENT}?)"
+            rf"\s*+(?P<op>=|<|>|≤|≥|:(?<=c:))\s*+(?P<num>{num}{_EXPONENT}?)"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|b(?=\s*+\.?\d))\s*+(?P<num>{num}{_EXPONENT}?)"
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|b(?=\s*+\.?\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
@@ -214,7 +215,7 @@ class _Patterns:
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
         self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
-                             rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++d\.?f\b\.?(?!\s*[=:(\d])")
+                             rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         self.coef_b = re.compile(rf"B(?<![\w]B)\s*+=\s*+(?P<num>{num})")
         self.coef_se = re.compile(rf"S(?<![\w]S)E\s*+=\s*+(?P<num>{num})")
@@ -526,11 +527,13 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
 
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
 _RATIO_BARE = re.compile(r"R(?<=[OHR]R)|o(?<=ratio)|k(?<=risk)")  # where a ratio may be typed without "=" (then the pattern decides)
+_WITHOUT_OPERATOR = re.compile(r"R(?<=[OHR]R)|o(?<=ratio)|k(?<=risk)|:(?<=value:)|:(?<=values:)")  # a ratio's name, or "p-value:"
 
 
 def _anything_in(text: str, start: int, end: int) -> bool:
-    """Whether text[start:end] may hold a p, an effect size or a descriptive: an operator, "ns", or a ratio's name."""
-    return _OPERATOR_OR_NS.search(text, start, end) is not None or _RATIO_BARE.search(text, start, end) is not None
+    """Whether text[start:end] may hold a p, an effect size or a descriptive: an operator, "ns", a ratio's name or a
+    colon after "value"."""
+    return _OPERATOR_OR_NS.search(text, start, end) is not None or _WITHOUT_OPERATOR.search(text, start, end) is not None
 
 
 def _orphans(pat: _Patterns, text: str, start: int, end: int) -> list[Reported]:
@@ -568,7 +571,8 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     if symbol in ("t", "r", "rs") and len(dfs) == 2 and inner and pat.mark == "." and re.fullmatch(r"\s*\d{1,3},\d{3}\s*", inner):
         one = pat.to_number(inner, m.start("inner"))  # t(1,198): one df with a thousands comma, as a t or r has one
         dfs = (one,) if one is not None else dfs
-    return Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, m.group("op"), value)
+    op = m.group("op")
+    return Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, "=" if op == ":" else op, value)
 
 
 _OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
@@ -627,7 +631,8 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     if number is None:
         return None
     op = m.group("op")
-    op = "<" if op == "b" else op[-1] if len(op) > 1 else op  # "p b 0.01": a "<" garbled by a PDF copy; "p = < .001" means "<"
+    # "p b 0.01": a "<" garbled by a PDF copy; "p = < .001" means "<"; "p-value: 0.013" (as R's summary of lm prints it) "="
+    op = "<" if op == "b" else "=" if op == ":" else op[-1] if len(op) > 1 else op
     return _new_p(op, number, at, m.end("num"), at, text[at], adjusted)
 
 
@@ -638,7 +643,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int)
     equals = text.find("=", start, end) >= 0
     effects = equals or _RATIO_BARE.search(text, start, end) is not None
     for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, effects),
-                                ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0), ("n", pat.n, equals)):
+                                ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
     events.sort(key=lambda e: e[0])

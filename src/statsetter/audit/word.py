@@ -262,7 +262,14 @@ def same_p(p: PValue, shown: "re.Match[str]", mark: str) -> bool:
     if p.number is None:
         return False
     value, places = _value(shown.group(2), mark)
-    return shown.group(1) == p.op and abs(value - p.number.value) <= p.number.half_unit + 0.5 * 10.0**-places + 1e-12
+    op = shown.group(1)
+    if (value <= 0.001 if op == "<" else value >= 0.99 if op == ">" else False) and p.op in ("=", op):
+        # a p beyond the smallest (largest) p the styles print (APA and AMA: .001; .999 and .99), all its printed precision
+        # allows: "p = 0.000285" and "p = .000" are "p < .001" restyled, "p = 1.000" is "p > .999"; "p = 0" is not
+        slack = p.number.half_unit if p.op == "=" else 0.0
+        if (p.number.value + slack <= value) if op == "<" else (p.number.value - slack >= value):
+            return True
+    return op == p.op and abs(value - p.number.value) <= p.number.half_unit + 0.5 * 10.0**-places + 1e-12
 
 
 # -- runs -------------------------------------------------------------------------------
