@@ -73,6 +73,32 @@ def test_factorial_against_pingouin(penguins, ss_type):
     assert "Type II" in render(rs[0], "sentence").plain() or ss_type == 3
 
 
+def test_unequal_and_tiny_cells_are_said(penguins):
+    """With unequal cells the Type II and Type III tests of a main effect can differ (penguins, species × sex: cells of
+    34 to 73; pingouin's anova gives both), which the records say; pingouin's anova2_unbalanced (Diet × Exercise, cells
+    of 4, 1, 1 and 4 cases) also has cells of a single case and small cells (a caution: unstable means, and counts
+    that can identify people). pingouin's balanced anova2 (4 cases in each of 6 cells) has no unequal-cells note, and
+    its small cells are still said."""
+    two, three = (factorial_anova(penguins, "body_mass_g", ("species", "sex"), ss_type=t) for t in (2, 3))
+    assert abs(two[0].statistic.value - three[0].statistic.value) > 1  # species: the two types differ here
+    assert any(n.text.startswith("Cell sizes are unequal (34 to 73 cases") for n in two[0].notes)
+    assert not [n for n in two[0].notes if n.kind == "caution"]
+    data = pg.read_dataset("anova2_unbalanced")
+    two, three = (factorial_anova(data, "Scores", ("Diet", "Exercise"), ss_type=t) for t in (2, 3))
+    for t, rs in ((2, two), (3, three)):
+        ref = pg.anova(data, dv="Scores", between=["Diet", "Exercise"], ss_type=t)
+        assert [r.statistic.value for r in rs] == pytest.approx(list(ref["F"].iloc[:3]), rel=1e-9)
+    notes = {n.kind: n.text for n in two[0].notes if n.kind in ("assumption", "caution")}
+    texts = [n.text for n in two[0].notes]
+    assert any(t.startswith("Cell sizes are unequal (1 to 4 cases") and "Type II was used; Type III" in t for t in texts)
+    assert any(t.startswith("2 cell(s) hold a single case (High × Moderate, Low × High)") for t in texts)
+    assert notes["caution"].startswith("4 of 4 cells have fewer than 5 cases (High × Moderate 1, Low × High 1, ")
+    assert any("Type III was used; Type II" in n.text for n in three[0].notes)
+    balanced = factorial_anova(pg.read_dataset("anova2"), "Yield", ("Blend", "Crop"))
+    kinds = [n.text.split(" (")[0] for n in balanced[0].notes if n.kind in ("assumption", "caution")]
+    assert kinds == ["6 of 6 cells have fewer than 5 cases"]
+
+
 def test_bad_input(penguins):
     with pytest.raises(InputError, match="adjust: 'scheffe' is not one of tukey"):
         posthoc(penguins, "bill_length_mm", "species", adjust="scheffe")  # type: ignore[arg-type]

@@ -253,3 +253,19 @@ def test_a_table_set_on_landscape_pages_is_said_in_the_run_notes(tmp_path, capsy
     assert "Table 1 is set on landscape pages" in err and "Table 1 is set on a landscape page (sidewaystable)" in err
     notes = (tmp_path / "out" / "notes.md").read_text(encoding="utf-8")
     assert "- results.docx: Table 1 is set on landscape pages" in notes and "- results.tex: Table 1 is set on a landscape page" in notes
+
+
+def test_assumption_checks_and_cautions_reach_the_run_notes(tmp_path, capsys):
+    """An analysis's assumption checks and cautions had been only in the records: pingouin's anova2_unbalanced (cells of
+    4, 1, 1 and 4 cases) gives the unequal cells, the single-case cells and the small cells, once each although three
+    records (one per term) carry them, on the terminal and in the run's notes; nothing of them enters the manuscript."""
+    pg.read_dataset("anova2_unbalanced").to_csv(tmp_path / "diet.csv", index=False)
+    path = write(tmp_path, '[data]\npath = "diet.csv"\n\n[[analyses]]\nid = "diet_exercise"\nkind = "factorial_anova"\n'
+                 'outcome = "Scores"\nfactors = ["Diet", "Exercise"]\n\n[outputs]\nfolder = "out"\nmd = "results.md"\nnotes = "notes.md"\n')
+    assert main(["run", str(path)]) == 0
+    printed = capsys.readouterr().out
+    notes = (tmp_path / "out" / "notes.md").read_text(encoding="utf-8")
+    for start in ("diet_exercise: Cell sizes are unequal (1 to 4 cases", "diet_exercise: 2 cell(s) hold a single case",
+                  "diet_exercise: 4 of 4 cells have fewer than 5 cases"):
+        assert printed.count(start) == 1 and notes.count(f"- {start}") == 1
+    assert "Cell sizes" not in (tmp_path / "out" / "results.md").read_text(encoding="utf-8")

@@ -610,9 +610,26 @@ def run_plan(plan: Plan, progress: Callable[[str], None] | None = None) -> RunRe
     notes += [f"{where.get(r.id or '', r.id)}: left out {lev.describe()}; list it in variables to describe it"
               for r in records if isinstance(r, Description) for lev in r.left_out]
     notes += [f"{r.id}: {note.text}" for r in records if isinstance(r, Result) for note in r.notes if note.kind == "choice"]  # never silent
+    notes += _checks_and_cautions(records)
     notes += _unnamed_groups(records)
     return RunResult(records, tables, [], notes, blocks=list(section.blocks), table_ids=dict(section.tables),
                      figure_ids={f.id or "": f for _, f in drawn})
+
+
+def _checks_and_cautions(records: list[Record]) -> list[str]:
+    """Each analysis's assumption checks and cautions (sphericity, expected counts, small or unequal cells, a model's
+    fit warnings, what mediation cannot show), once per analysis: they belong to the author, not the manuscript's
+    text, and had been only in the records."""
+    carriers: dict[tuple[str, str], list[str]] = {}  # (analysis, text): the records that carry it
+    count: dict[str, int] = {}  # records per analysis
+    for r in records:
+        if isinstance(r, Result):
+            analysis = (r.id or "").split(":")[0]
+            count[analysis] = count.get(analysis, 0) + 1
+            for text in dict.fromkeys(n.text for n in r.notes if n.kind in ("assumption", "caution")):
+                carriers.setdefault((analysis, text), []).append(r.id or "")
+    # named by the analysis when all its records carry the note (a factorial ANOVA's cells), else by the first record
+    return [f"{analysis if len(ids) == count[analysis] else ids[0]}: {text}" for (analysis, text), ids in carriers.items()]
 
 
 def _unnamed_groups(records: list[Record]) -> list[str]:

@@ -114,6 +114,33 @@ def posthoc(
     return out
 
 
+def _cell_notes(cells: "tuple[GroupSummary, ...]", ss_type: int, la: str, lb: str) -> list[Note]:
+    """What unequal and tiny cells mean for a two-way ANOVA, said where they occur: with unequal cells the main effects'
+    tests depend on the type of sums of squares (Type II tests each assuming no interaction, Type III weighs the
+    cells equally; they agree only in a balanced design — practice: Maxwell & Delaney, *Designing Experiments and
+    Analyzing Data*, ch. 7, memory); a cell of one case adds nothing to the error variance and its mean is that one
+    observation; cells under 5 cases make unstable means, and published they can identify people."""
+    sizes = [cell.n for cell in cells]
+    out = []
+    if min(sizes) != max(sizes):
+        smallest = min(cells, key=lambda cell: cell.n)
+        used, other = ("II", "Type III (each main effect averaged over the other factor's cells, weighed equally)") if ss_type == 2 else \
+            ("III", "Type II (each main effect tested assuming no interaction)")
+        out.append(Note("assumption", f"Cell sizes are unequal ({min(sizes)} to {max(sizes)} cases; smallest: {smallest.label}), so the tests of "
+                                      f"{la} and {lb} depend on the type of sums of squares: Type {used} was used; {other} can give other "
+                                      "F values. Say which type you report."))
+    single = [cell.label for cell in cells if cell.n == 1]
+    if single:
+        out.append(Note("assumption", f"{len(single)} cell(s) hold a single case ({', '.join(single[:4])}{' …' if len(single) > 4 else ''}): "
+                                      "such a cell adds nothing to the error variance, and its mean is that one observation."))
+    small = [f"{cell.label} {cell.n}" for cell in sorted(cells, key=lambda cell: cell.n) if cell.n < 5]
+    if small:
+        out.append(Note("caution", f"{len(small)} of {len(cells)} cells have fewer than 5 cases ({', '.join(small[:6])}{' …' if len(small) > 6 else ''}): "
+                                   "their means are unstable, and cell means or counts this small, published, can identify people; "
+                                   "check the ethics approval's rules on small cells."))
+    return out
+
+
 def factorial_anova(
     df: "pd.DataFrame",
     outcome: str,
@@ -170,7 +197,8 @@ def factorial_anova(
                 n=table.nobs,
                 effects=(variance_explained("eta2_p", ss / (ss + ss_res), row.F, float(row.df), df_res, level),),
                 variables=(Variable(outcome, labels.get(outcome, outcome), "outcome"), Variable(a, la, "factor"), Variable(b, lb, "factor")),
-                notes=c.notes(Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else ".")), missing),
+                notes=c.notes(Note("method", f"Type {'II' if ss_type == 2 else 'III'} sums of squares" + (" with sum-to-zero contrasts." if ss_type == 3 else ".")),
+                              *_cell_notes(cells, ss_type, la, lb), missing),
                 details={"term": label, "interaction": interaction, "ss_type": ss_type, "ss": ss, "ss_error": ss_res, "ss_total": ss_total},
                 groups=cells if interaction else (),
                 provenance=c.provenance("statsetter.analyses.factorial_anova"),
