@@ -548,6 +548,11 @@ def test_coefficient_t_against_b_and_se_on_open_data():
         assert "coefficient-does-not-fit" not in codes(good), good
         bad = f"For {name}, B = {b:.3f}, SE = {se:.3f}, t({df}) = {t * 1.3:.2f}, p = .001."
         assert "coefficient-does-not-fit" in codes(bad), bad
+        # the coefficient as "b" and its error as "SE B" or "SEB", as APA's tables and many texts name them (practice);
+        # the B of "SE B" is not the coefficient
+        for typed in (f"b = {b:.3f}, SE = {se:.3f}", f"B = {b:.3f}, SE B = {se:.3f}", f"b = {b:.3f}, SEB = {se:.3f}"):
+            assert "coefficient-does-not-fit" not in codes(f"For {name}, {typed}, t({df}) = {t:.2f}, p = .001."), typed
+            assert "coefficient-does-not-fit" in codes(f"For {name}, {typed}, t({df}) = {t * 1.3:.2f}, p = .001."), typed
     # a coefficient from an earlier sentence, or an SE printed as zero, is not used
     assert "coefficient-does-not-fit" not in codes("B = 0.42, SE = 0.10. Then t(30) = 1.20, p = .240.")
     assert "coefficient-does-not-fit" not in codes("B = 0.00, SE = 0.00, t(30) = 1.20, p = .240")

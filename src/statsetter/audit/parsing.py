@@ -217,8 +217,9 @@ class _Patterns:
         self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
                              rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
-        self.coef_b = re.compile(rf"B(?<![\w]B)\s*+=\s*+(?P<num>{num})")
-        self.coef_se = re.compile(rf"S(?<![\w]S)E\s*+=\s*+(?P<num>{num})")
+        # the unstandardised coefficient as "B" or "b", its standard error as "SE", "SE B" or "SEB"
+        self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+=\s*+(?P<num>{num})")  # (not the B of "SE B")
+        self.coef_se = re.compile(rf"S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+=\s*+(?P<num>{num})")
         self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
         # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan)
@@ -510,7 +511,7 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     """The B and SE a sentence gives before a t or z (``B = 0.42, SE = 0.10,
     β = .31, t(196) = 4.20``): the last of each between ``since`` (the end of
     the statistic before) and the statistic, within its sentence."""
-    if text.find("SE", since, rep.start) < 0 or text.find("B", since, rep.start) < 0:  # what both patterns must contain
+    if text.find("SE", since, rep.start) < 0 or (text.find("B", since, rep.start) < 0 and text.find("b", since, rep.start) < 0):  # (both patterns')
         return None
     pat = _patterns(decimal_mark)
     start = _sentence_start(pat, text, since, rep.start)
