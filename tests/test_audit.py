@@ -558,6 +558,29 @@ def test_coefficient_t_against_b_and_se_on_open_data():
     assert "coefficient-does-not-fit" not in codes("B = 0.00, SE = 0.00, t(30) = 1.20, p = .240")
 
 
+def test_a_logistic_coefficients_wald_and_odds_ratio_against_b_and_se_on_open_data():
+    """A logistic coefficient as SPSS users report it, "B = 2.83, SE = 1.26, Wald = 5.03, p = .025, OR = 16.88"
+    (practice): reference statsmodels' Logit on its bundled spector data (Spector & Mazzeo, 1980: GRADE on GPA, TUCE,
+    PSI), Wald = z², p from χ²(1), OR = exp(B) and its Wald CI. Printed so, nothing is found; a retyped Wald, a p that
+    χ²(1) does not give, or an OR that is not exp(B) is; a Wald without B and SE beside it (a factor's several df) is
+    not checked against χ²(1)."""
+    import math
+
+    import statsmodels.api as sm
+
+    spector = sm.datasets.spector.load_pandas().data
+    fit = sm.Logit(spector.GRADE, sm.add_constant(spector[["GPA", "TUCE", "PSI"]])).fit(disp=0)
+    for name in ("GPA", "TUCE", "PSI"):
+        b, se, z, p = fit.params[name], fit.bse[name], fit.tvalues[name], fit.pvalues[name]
+        lo, hi = math.exp(b - 1.959964 * se), math.exp(b + 1.959964 * se)
+        good = f"{name} (B = {b:.2f}, SE = {se:.2f}, Wald = {z * z:.2f}, p = {p:.3f}, OR = {math.exp(b):.2f}, 95% CI [{lo:.2f}, {hi:.2f}])."
+        assert not set(codes(good)) & {"coefficient-does-not-fit", "p-does-not-follow", "ci-p-disagree"}, good
+        assert "coefficient-does-not-fit" in codes(good.replace(f"Wald = {z * z:.2f}", f"Wald = {z * z * 1.5:.2f}"))
+        assert "p-does-not-follow" in codes(good.replace(f"p = {p:.3f}", f"p = {min(p * 3, 0.9):.3f}"))
+        assert "coefficient-does-not-fit" in codes(good.replace(f"OR = {math.exp(b):.2f}", f"OR = {math.exp(b) * 1.2:.2f}"))
+    assert "p-does-not-follow" not in codes("Group predicted passing, Wald = 6.13, p = .047.")  # χ²(2) gives .047
+
+
 def test_eta_and_v_against_f_and_chi2_on_open_data():
     # reference: pingouin's two-way ANOVA (partial η², 'np2') and its chi-square test of independence
     # (Cramér's V) on the bundled penguins data, printed as a manuscript would

@@ -358,3 +358,24 @@ def test_a_second_real_table_of_ratios_raises_nothing(tmp_path):
     assert len(entries) == 20
     assert [e.found for e in entries if e.codes] == []
     assert "OR = 1.391, 95% CI [1.013, 1.912], p = 0.0417" in [e.found for e in entries]
+
+
+def test_a_logistic_models_wald_column_is_read_with_its_df_and_sig(tmp_path):
+    """SPSS's "Variables in the Equation" typed into a manuscript (B, S.E., Wald, df, Sig., Exp(B); practice): the Wald
+    column is a χ² with the df beside it, its p under Sig. Reference: statsmodels' Logit on its bundled spector data
+    (Spector & Mazzeo, 1980), Wald = z², printed to three decimals as SPSS prints them; one row's Sig. retyped (.045
+    for .025) is found, the others are not."""
+    import math
+
+    import statsmodels.api as sm
+
+    spector = sm.datasets.spector.load_pandas().data
+    fit = sm.Logit(spector.GRADE, sm.add_constant(spector[["GPA", "TUCE", "PSI"]])).fit(disp=0)
+    rows = [["", "B", "S.E.", "Wald", "df", "Sig.", "Exp(B)"]]
+    for name in ("GPA", "TUCE", "PSI"):
+        b, se, z, p = fit.params[name], fit.bse[name], fit.tvalues[name], fit.pvalues[name]
+        rows.append([name, f"{b:.3f}", f"{se:.3f}", f"{z * z:.3f}", "1", f"{p:.3f}".lstrip("0"), f"{math.exp(b):.3f}"])
+    rows[3][5] = ".045"  # PSI: Wald 4.990 on 1 df gives p = .0255
+    entries = _audited_table(tmp_path, "Table 2\nLogistic regression of the grade on GPA, TUCE and PSI", rows)
+    assert [e.found.split(",")[0] for e in entries] == [f"χ²(1) = {row[3]}" for row in rows[1:]]
+    assert [e.codes for e in entries] == [[], [], ["p-does-not-follow"]]

@@ -53,8 +53,9 @@ CODES: dict[str, tuple[str, str]] = {
     "corrected-df": ("sphericity-corrected df that no single ε and whole uncorrected df give",
                      "Repeated-measures ANOVA: corrected df are ε × the uncorrected df (Greenhouse & Geisser, 1959; definition)"),
     "coefficient-does-not-fit": (
-        "t (or z) does not equal B / SE",
-        "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE (practice)",
+        "t (or z) does not equal B / SE, a Wald χ² (B / SE)², or an odds ratio exp(B)",
+        "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE, its χ² form "
+        "(B / SE)² on 1 df, and a logistic coefficient's odds ratio exp(B) (definitions; practice)",
     ),
     "effect-does-not-fit": (
         "η²p (or η², V, φ) does not fit F or χ² and its df",
@@ -663,10 +664,10 @@ def corrected_df(rep: Reported) -> list[Finding]:
     return out
 
 
-def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None) -> list[Finding]:
-    """A coefficient's t (or z) against B / SE, with interval arithmetic on
-    the printed precision of all three."""
-    if coefficient is None or rep.symbol not in ("t", "z") or rep.value is None or rep.op != "=":
+def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None, wald: bool = False) -> list[Finding]:
+    """A coefficient's t (or z) against B / SE, its Wald χ² (``wald``) against (B / SE)², and an odds ratio beside it
+    against exp(B), with interval arithmetic on the printed precision of all of them."""
+    if coefficient is None or rep.value is None or rep.op != "=" or not (rep.symbol in ("t", "z") or (wald and rep.symbol == "chi2")):
         return []
     b, se = coefficient
     se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
@@ -676,15 +677,22 @@ def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None) 
     corners = [b_low / se_low, b_low / se_high, b_high / se_low, b_high / se_high]
     ratio = (min(corners), max(corners))
     stat = (rep.value.value - rep.value.half_unit, rep.value.value + rep.value.half_unit)
-    if _overlap(ratio, stat):
-        return []
-    return [
-        Finding(
-            "coefficient-does-not-fit",
-            f"{rep.symbol} = {rep.value.text} is not B / SE: B = {b.text} and SE = {se.text} give {ratio[0]:.2f} to {ratio[1]:.2f}.",
-            f"B = {b.text}, SE = {se.text}, {rep.symbol} = {rep.value.text}",
-        )
-    ]
+    out = []
+    if rep.symbol == "chi2":  # the Wald χ² of one coefficient: (B / SE)²
+        squared = (0.0 if ratio[0] <= 0 <= ratio[1] else min(ratio[0] ** 2, ratio[1] ** 2), max(ratio[0] ** 2, ratio[1] ** 2))
+        if not _overlap(squared, stat):
+            out.append(Finding("coefficient-does-not-fit", f"Wald = {rep.value.text} is not (B / SE)²: B = {b.text} and SE = {se.text} give "
+                                                            f"{squared[0]:.2f} to {squared[1]:.2f}.", f"B = {b.text}, SE = {se.text}, Wald = {rep.value.text}"))
+    elif not _overlap(ratio, stat):
+        out.append(Finding("coefficient-does-not-fit", f"{rep.symbol} = {rep.value.text} is not B / SE: B = {b.text} and SE = {se.text} give "
+                                                        f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"B = {b.text}, SE = {se.text}, {rep.symbol} = {rep.value.text}"))
+    odds = next((e for e in rep.effects if e.name in ("OR", "aOR")), None)
+    if odds is not None and b_high < 700:  # the odds ratio of a logistic coefficient is exp(B)
+        expected = (math.exp(b_low), math.exp(b_high))
+        if not _overlap(expected, (odds.number.value - odds.number.half_unit, odds.number.value + odds.number.half_unit)):
+            out.append(Finding("coefficient-does-not-fit", f"{odds.symbol_text} = {odds.number.text} is not exp(B): B = {b.text} gives "
+                                                            f"{expected[0]:.3g} to {expected[1]:.3g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}"))
+    return out
 
 
 # -- the record behind the suggestion -----------------------------------------

@@ -108,7 +108,7 @@ class Reported:
 def symbol_of(text: str) -> str | None:
     t = text.replace(" ", "").removesuffix("-statistic")
     low = t.lower()
-    if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2", "x-squared", "xsquared"):  # X-squared: as R prints χ²
+    if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2", "x-squared", "xsquared", "wald"):  # X-squared: as R prints χ²
         return "chi2"
     if low in ("rs", "rₛ", "r_s", "ρ", "rho"):
         return "rs"
@@ -138,6 +138,7 @@ _SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:
             r"X\s?²", r"X\^2", r"X[- ]squared",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
             r"F-statistic", r"t-statistic", r"z-statistic",  # as R's summary of a linear model prints the F ("F-statistic: 4.51")
+            r"Wald(?!\s*(?:χ|[Cc]hi|X))",  # a logistic coefficient's Wald χ² as SPSS names it ("Wald = 6.13"; "Wald χ²(1)" is read at its χ²)
             "t", "F", "r", "z", "Z", "U", "H", "W", "T", "Q", "V")
 
 
@@ -505,6 +506,11 @@ def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int,
     if any(n is None or n.value < 1 for n in sizes):
         return None
     return int(sizes[0].value), int(sizes[1].value)  # type: ignore[union-attr]
+
+
+def is_wald(text: str, rep: Reported) -> bool:
+    """Whether ``rep`` is a coefficient's Wald χ² ("Wald = 6.13", "Wald χ² = 6.13"): its square root is |B| / SE."""
+    return rep.symbol == "chi2" and (rep.symbol_text.startswith("Wald") or text[max(0, rep.symbol_start - 6) : rep.symbol_start].rstrip().endswith("Wald"))
 
 
 def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str = ".") -> tuple[Number, Number] | None:

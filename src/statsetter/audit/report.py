@@ -24,7 +24,7 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, coefficient_ratio, corrected_df, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
-from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes
+from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import Reading, df_readings, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, restyled, same_p, threshold_p
@@ -193,6 +193,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                 i += 1
                 continue
             totals = [int(m.group(1)) for m in _SIZE_TOTAL.finditer(unit.text)]
+            previous_end = 0  # the end of the last statistic with a head (a B and SE are looked for after it)
             for rep in find_statistics(unit.text, mark):
                 readings: tuple[Reading, ...] = ()
                 if rep.symbol in ("t", "r", "rs") and not rep.df:
@@ -200,7 +201,10 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
                     where = "beside it" if rep.n is not None else "in the paragraph" if totals else "earlier in the text"
                     readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where))
+                elif rep.symbol == "chi2" and not rep.df and is_wald(unit.text, rep) and coefficient_before(unit.text, rep, previous_end, mark):
+                    readings = (_ONE_COEFFICIENT,)
                 yield _new_item(unit, rep, rep, readings, "", unit.text)
+                previous_end = rep.end if rep.symbol is not None else previous_end
             last_total = totals[-1] if totals else last_total
             i += 1
             continue
@@ -219,6 +223,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
 
+
+_ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
 
 # a statistic's item and entry set slot by slot (the frozen dataclasses' __init__ costs a few microseconds; 10,000 per 1,000 pages)
 _new_item = _unchecked_maker(_Item, {}, ("unit", "rep", "local", "readings", "how", "context"))
@@ -337,8 +343,8 @@ def _audit_units(
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
-            if local.symbol in ("t", "z"):
-                findings += coefficient_ratio(local, coefficient_before(unit.text, local, previous_end, mark))
+            if local.symbol in ("t", "z") or (local.symbol == "chi2" and is_wald(unit.text, local)):
+                findings += coefficient_ratio(local, coefficient_before(unit.text, local, previous_end, mark), wald=local.symbol == "chi2")
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))

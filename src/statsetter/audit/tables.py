@@ -27,6 +27,7 @@ _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
     (re.compile(r"F(?:[- ]?(?:values?|ratio))?"), "F"),
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
+    (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "chi2"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ]"), "z"),
     (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\))?|P\s*\(2-tailed\))"), "p"),
