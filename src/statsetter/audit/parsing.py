@@ -137,9 +137,10 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--"
 _SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
             r"X\s?²", r"X\^2", r"X[- ]squared",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
-            r"F-statistic", r"t-statistic", r"z-statistic",  # as R's summary of a linear model prints the F ("F-statistic: 4.51")
-            r"Wald(?!\s*(?:χ|[Cc]hi|X))",  # a logistic coefficient's Wald χ² as SPSS names it ("Wald = 6.13"; "Wald χ²(1)" is read at its χ²)
-            "t", "F", "r", "z", "Z", "U", "H", "W", "T", "Q", "V")
+            # "F-statistic" as R's summary of a linear model prints it ("F-statistic: 4.51"), and a logistic coefficient's Wald χ²
+            # as SPSS names it ("Wald = 6.13"; "Wald χ²(1)" is read at its χ²): optional tails of one alternative each, so that
+            # the engine tries no more alternatives at every "t" of the prose
+            r"t(?:-statistic)?", r"F(?:-statistic)?", "r", r"z(?:-statistic)?", "Z", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
 
 
 def _guarded(alternatives: "Iterable[str]", before: str) -> str:
@@ -165,16 +166,6 @@ _EFFECT_NAMES = [
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
     (r"R(?<![\w]R)\s?(?:[²2]|\^2)", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
-    # ratios as public-health texts type them: adjusted odds, hazard, risk and incidence-rate ratios, abbreviated or
-    # spelled out (every ratio's name, and no other, ends in "R", "ratio" or "risk": the effect pattern reads a ratio
-    # also without "=", as "OR, 0.76", "AOR: 8.32", "OR 2.72" and "odds ratio of 1.7")
-    (r"a(?<![\w]a)OR|A(?<![\w]A)OR|a(?<![\w]a)dj(?:usted)?\.?\s+OR|a(?<![\w]a)djusted\s+odds\s+ratio", "aOR"),
-    (r"a(?<![\w]a)HR|A(?<![\w]A)HR|a(?<![\w]a)dj(?:usted)?\.?\s+HR|a(?<![\w]a)djusted\s+hazard\s+ratio", "aHR"),
-    (r"a(?<![\w]a)RR|A(?<![\w]A)RR|a(?<![\w]a)dj(?:usted)?\.?\s+RR|a(?<![\w]a)djusted\s+(?:risk\s+ratio|relative\s+risk)", "aRR"),
-    (r"O(?<![\w]O)R|o(?<![\w]o)dds\s+ratio|O(?<![\w]O)dds\s+ratio|u(?<![\w]u)nadjusted\s+odds\s+ratio|c(?<![\w]c)rude\s+odds\s+ratio", "OR"),
-    (r"H(?<![\w]H)R|h(?<![\w]h)azard\s+ratio|H(?<![\w]H)azard\s+ratio", "HR"),
-    (r"I(?<![\w]I)RR|i(?<![\w]i)ncidence[-\s]rate\s+ratio|I(?<![\w]I)ncidence[-\s]rate\s+ratio", "IRR"),
-    (r"R(?<![\w]R)R|r(?<![\w]r)isk\s+ratio|R(?<![\w]R)isk\s+ratio|r(?<![\w]r)elative\s+risk|R(?<![\w]R)elative\s+risk", "RR"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
     (r"d(?<![\w]d)", "d"),
@@ -183,6 +174,26 @@ _EFFECT_NAMES = [
     (r"M(?<![\w]M)dn", "Mdn"),
     (r"M(?<![\w]M)", "M"),
     (r"S(?<![\w]S)D", "SD"),
+]
+# ratios as public-health texts type them: adjusted odds, hazard, risk and incidence-rate ratios, abbreviated or spelled
+# out. Every ratio's name, and no other, ends in "R", "ratio" or "risk", and a ratio is read also without "=" ("OR,
+# 0.76", "AOR: 8.32", "OR 2.72", "odds ratio of 1.7"): a pattern of their own, searched only where a capital R or the
+# words are (the other effect sizes' pattern keeps its fast scan and its one test after a name, "=")
+_RATIOS = [
+    (r"a(?<![\w]a)OR|A(?<![\w]A)OR|a(?<![\w]a)dj(?:usted)?\.?\s+OR", "aOR"),
+    (r"a(?<![\w]a)HR|A(?<![\w]A)HR|a(?<![\w]a)dj(?:usted)?\.?\s+HR", "aHR"),
+    (r"a(?<![\w]a)RR|A(?<![\w]A)RR|a(?<![\w]a)dj(?:usted)?\.?\s+RR", "aRR"),
+    (r"O(?<![\w]O)R", "OR"),
+    (r"H(?<![\w]H)R", "HR"),
+    (r"I(?<![\w]I)RR", "IRR"),
+    (r"R(?<![\w]R)R", "RR"),
+    (r"a(?<![\w]a)djusted\s+odds\s+ratio", "aOR"),
+    (r"a(?<![\w]a)djusted\s+hazard\s+ratio", "aHR"),
+    (r"a(?<![\w]a)djusted\s+(?:risk\s+ratio|relative\s+risk)", "aRR"),
+    (r"[oO](?<![\w][oO])dds\s+ratio|u(?<![\w]u)nadjusted\s+odds\s+ratio|c(?<![\w]c)rude\s+odds\s+ratio", "OR"),
+    (r"[hH](?<![\w][hH])azard\s+ratio", "HR"),
+    (r"[iI](?<![\w][iI])ncidence[-\s]rate\s+ratio", "IRR"),
+    (r"[rR](?<![\w][rR])isk\s+ratio|[rR](?<![\w][rR])elative\s+risk", "RR"),
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
 # after a ratio's name, its abbreviation in parentheses or brackets ("adjusted HR (aHR)=1.29", "odds ratio [OR], 1.52")
@@ -210,9 +221,8 @@ class _Patterns:
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,]?\s*+"
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
-        self.effect = re.compile(
-            r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf"){_RATIO_ABBREVIATED}?(?:\s*+(?P<op>=)|{_RATIO_WITHOUT_EQUALS})\s*+(?P<num>{num})"
-        )
+        self.effect = re.compile(r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})")
+        self.ratio = re.compile(r"(?P<name>" + "|".join(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:\s*+(?P<op>=)|{_RATIO_WITHOUT_EQUALS})\s*+(?P<num>{num})")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
         self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
@@ -313,7 +323,7 @@ def _patterns(mark: str) -> _Patterns:
     return _CACHE[mark]
 
 
-_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _EFFECT_NAMES]
+_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _RATIOS + _EFFECT_NAMES]
 
 
 @functools.lru_cache(maxsize=4096)  # likewise its effect names: each tried against the patterns once
@@ -405,6 +415,7 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     pat = _patterns(decimal_mark)
     heads = [m for m in pat.head.finditer(text) if symbol_of(m.group("sym")) is not None and not _an_effect(m)]
     boundary = pat.boundary_in(text)
+    rare = _rare_words(text)
     out: list[Reported] = []
     taken: list[tuple[int, int]] = []
     for i, m in enumerate(heads):
@@ -414,7 +425,7 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         rep = _read_head(pat, text, m)
         if rep is None:
             continue
-        _read_clause(pat, text, rep, m.end(), end)
+        _read_clause(pat, text, rep, m.end(), end, rare)
         rep.text = text[rep.start : rep.end]
         out.append(rep)
         taken.append((rep.start, rep.end))
@@ -425,13 +436,13 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         at = max(at, e)
     gaps.append((at, len(text)))
     for gap_start, gap_end in gaps:  # p values, effect sizes and descriptives outside any head's clause
-        if not _anything_in(text, gap_start, gap_end):  # none in any of its sentences (most gaps: ", and ")
+        if not _anything_in(text, gap_start, gap_end, rare):  # none in any of its sentences (most gaps: ", and ")
             continue
         piece = gap_start
         while piece < gap_end:
             b = boundary.search(text, piece, gap_end)
             stop = b.start() if b else gap_end
-            out += _orphans(pat, text, piece, stop)
+            out += _orphans(pat, text, piece, stop, rare)
             piece = (b.end() if b else gap_end) if stop < gap_end else gap_end
     out.sort(key=lambda r: r.start)
     return out
@@ -533,26 +544,43 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
 
 
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
-_RATIO_BARE = re.compile(r"R(?<=[OHR]R)|o(?<=ratio)|k(?<=risk)")  # where a ratio may be typed without "=" (then the pattern decides)
-_WITHOUT_OPERATOR = re.compile(r"R(?<=[OHR]R)|o(?<=ratio)|k(?<=risk)|:(?<=value:)|:(?<=values:)")  # a ratio's name, or "p-value:"
+_RATIO_BARE = re.compile(r"R(?<=[OHR]R)")  # where a ratio's abbreviation may stand without "=" (then the pattern decides)
 
 
-def _anything_in(text: str, start: int, end: int) -> bool:
+def _abbreviated_ratio(text: str, start: int, end: int) -> bool:
+    return text.find("R", start, end) >= 0 and _RATIO_BARE.search(text, start, end) is not None  # (a capital R is rare in prose)
+
+
+def _ratio_words(text: str, start: int, end: int) -> bool:
+    return text.find("ratio", start, end) >= 0 or text.find("risk", start, end) >= 0
+
+
+def _rare_words(text: str) -> bool:
+    """Whether a paragraph has what only a few statistics are typed with (a capital R of OR, HR or RR; "ratio", "risk";
+    "value:"): looked for once a paragraph, so that most clauses and gaps are spared the searches for them."""
+    return "R" in text or "ratio" in text or "risk" in text or "value" in text
+
+
+def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
     """Whether text[start:end] may hold a p, an effect size or a descriptive: an operator, "ns", a ratio's name or a
-    colon after "value"."""
-    return _OPERATOR_OR_NS.search(text, start, end) is not None or _WITHOUT_OPERATOR.search(text, start, end) is not None
+    colon after "value" (plain searches for the words: a pattern of common letters would slow every gap's scan)."""
+    return _OPERATOR_OR_NS.search(text, start, end) is not None or rare and (
+        _abbreviated_ratio(text, start, end) or _ratio_words(text, start, end) or text.find("value:", start, end) >= 0
+        or text.find("values:", start, end) >= 0)
 
 
-def _orphans(pat: _Patterns, text: str, start: int, end: int) -> list[Reported]:
+def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True) -> list[Reported]:
     """The statistics without a head in one sentence piece: one cluster."""
-    if not _anything_in(text, start, end):
+    if not _anything_in(text, start, end, rare):
         return []
-    first = [m.start() for regex in (pat.p, pat.effect) for m in [regex.search(text, start, end)] if m is not None]
+    ratios = rare and (_abbreviated_ratio(text, start, end) or _ratio_words(text, start, end))
+    first = [m.start() for regex in ((pat.p, pat.effect, pat.ratio) if ratios else (pat.p, pat.effect))
+             for m in [regex.search(text, start, end)] if m is not None]
     if not first:
         return []
     at = min(first)
     rep = Reported(None, "", at, at, at)
-    _read_clause(pat, text, rep, at, end)
+    _read_clause(pat, text, rep, at, end, rare)
     if rep.p is None and not rep.effects and not rep.descriptives:
         return []
     rep.text = text[rep.start : rep.end]
@@ -643,13 +671,14 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     return _new_p(op, number, at, m.end("num"), at, text[at], adjusted)
 
 
-def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int) -> None:
+def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int, rare: bool = True) -> None:
     events: list[tuple[int, str, re.Match[str]]] = []
     # a search is skipped where the clause lacks what its pattern must contain: an interval its level's percent sign,
-    # an effect size its "=" or a ratio's name, an n its "=", a df written apart its "df"
+    # an effect size and an n their "=", a ratio its name, a df written apart its "df"
     equals = text.find("=", start, end) >= 0
-    effects = equals or _RATIO_BARE.search(text, start, end) is not None
-    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, effects),
+    ratios = rare and (_abbreviated_ratio(text, start, end) or _ratio_words(text, start, end))
+    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
+                                ("effect", pat.ratio, ratios),
                                 ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
