@@ -266,8 +266,15 @@ def test_what_the_ratios_typed_without_equals_say_is_checked():
     assert "ci-excludes-estimate" in codes(RATIOS_TYPED[-1][0])
     assert "ci-p-disagree" in codes("Mortality was lower (OR, 0.76; 95% CI, 0.73 to 0.80; P = .40).")
     assert codes("Mortality was lower (OR, 0.76; 95% CI, 0.73 to 0.80; P < .001).") == {"p-symbol"}  # AMA's capital P in APA
-    for text, _ in RATIOS_TYPED[:4]:
-        assert not {"ci-excludes-estimate", "ci-p-disagree", "impossible-value"} & set(codes(text)), text
+    # a p belongs to the ratio it follows, not to the next one of the sentence (which had been read into one statistic
+    # with it, and said to disagree with a p it does not have)
+    first, second = audit_units([Unit("two", "Both 30-day mortality (OR, 0.76; 95% CI, 0.73 to 0.80; P = .40) and 90-day "
+                                             "mortality (OR, 0.73; 95% CI, 0.70 to 0.76) were lower.")])
+    assert "ci-p-disagree" in first.codes and first.found.endswith("P = .40") and second.codes == []
+    for text, ratios in RATIOS_TYPED[:5]:  # each ratio a statistic of its own, checked with its own CI
+        entries = audit_units([Unit("case", text)])
+        assert len(entries) == len(ratios), text
+        assert not {"ci-excludes-estimate", "ci-p-disagree", "impossible-value"} & {c for e in entries for c in e.codes}, text
     # an odds ratio spelled out "of" its number, and a hazard ratio with its CI in AMA's form
     (rep,) = find_statistics("An odds ratio of 1.7 (95% confidence interval [CI], 1.05 to 2.8) favoured the treatment.")
     assert [(e.name, e.number.value, e.ci.low.value) for e in rep.effects] == [("OR", 1.7, 1.05)]

@@ -570,21 +570,27 @@ def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
 
 
 def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True) -> list[Reported]:
-    """The statistics without a head in one sentence piece: one cluster."""
-    if not _anything_in(text, start, end, rare):
-        return []
-    ratios = rare and (_abbreviated_ratio(text, start, end) or _ratio_words(text, start, end))
-    first = [m.start() for regex in ((pat.p, pat.effect, pat.ratio) if ratios else (pat.p, pat.effect))
-             for m in [regex.search(text, start, end)] if m is not None]
-    if not first:
-        return []
-    at = min(first)
-    rep = Reported(None, "", at, at, at)
-    _read_clause(pat, text, rep, at, end, rare)
-    if rep.p is None and not rep.effects and not rep.descriptives:
-        return []
-    rep.text = text[rep.start : rep.end]
-    return [rep]
+    """The statistics without a head in one sentence piece: a cluster each, a new one where an effect size of a name
+    the cluster has already read comes again ("(OR, 0.76; 95% CI, 0.73 to 0.80) and … (OR, 0.73; 95% CI, …)": two)."""
+    out: list[Reported] = []
+    while start < end:
+        if not _anything_in(text, start, end, rare):
+            break
+        ratios = rare and (_abbreviated_ratio(text, start, end) or _ratio_words(text, start, end))
+        first = [m.start() for regex in ((pat.p, pat.effect, pat.ratio) if ratios else (pat.p, pat.effect))
+                 for m in [regex.search(text, start, end)] if m is not None]
+        if not first:
+            break
+        at = min(first)
+        rep = Reported(None, "", at, at, at)
+        again = _read_clause(pat, text, rep, at, end, rare)
+        if rep.p is not None or rep.effects or rep.descriptives:
+            rep.text = text[rep.start : rep.end]
+            out.append(rep)
+        if again is None or again <= start:
+            break
+        start = again
+    return out
 
 
 def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
@@ -671,7 +677,9 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     return _new_p(op, number, at, m.end("num"), at, text[at], adjusted)
 
 
-def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int, rare: bool = True) -> None:
+def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int, rare: bool = True) -> int | None:
+    """The p, CI, effect sizes, df and n of ``rep``'s clause, text[start:end], read into it; for a statistic without a
+    head, the position where an effect size of a name already read comes again (a statistic of its own), else None."""
     events: list[tuple[int, str, re.Match[str]]] = []
     # a search is skipped where the clause lacks what its pattern must contain: an interval its level's percent sign,
     # an effect size and an n their "=", a ratio its name, a df written apart its "df"
@@ -688,6 +696,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     last_end = rep.end
     ci = None
     clause_df = False  # the df were read from the clause ("df = 2"), not the head
+    again = None  # where an effect size of a name already read comes again (a statistic without a head: a new one)
     for at, kind, m in events:
         if at < covered:  # inside a match already read
             continue
@@ -707,6 +716,9 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
             number = pat.to_number(m.group("num"), m.start("num"))
             if name is None or number is None:
                 continue
+            if rep.symbol is None and name not in _DESCRIPTIVE and any(e.name == name for e in rep.effects):
+                again = at
+                break
             effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
         elif kind == "df" and (not rep.df or (clause_df and rep.symbol == "F" and len(rep.df) == 1)):
@@ -729,6 +741,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
         spans.append((m.start(), m.end()))
     rep.end = last_end
     rep.operators = _operators(text, spans)
+    return again
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
