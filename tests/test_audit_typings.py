@@ -108,6 +108,9 @@ def test_a_p_after_value_and_a_colon_is_read_and_restyled_as_given():
     (e,) = audit_units([Unit("b", "t(40) = 5.2, p = .04")], suggest_all=True)  # p = 6.2e-6 (scipy): recomputed, and said so
     assert e.suggestion == "t(40) = 5.2, p < .001 (p recomputed)"
     assert not find_statistics("p: see the note; F-statistics: below")
+    # the line restyled (its "statistic", "on" and "and" are notation), unless a power of ten is in it
+    (e,) = audit_units([Unit("c", "F-statistic: 16.86 on 1 and 30 DF,  p-value: 0.000285")], restyle=True)
+    assert e.revision is not None and e.revision.plain() == "F(1, 30) = 16.86, p < .001"
 
 
 def test_numbers_before_df_are_read_only_as_df():

@@ -181,22 +181,29 @@ def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, 
 
 def _lost_word(rep: Reported, old: str, new: str) -> str:
     """The first word of ``old`` that ``new`` drops, other than notation: a CI's "to" between its limits ("95% CI, 0.73
-    to 0.80") and the words of a ratio's spelled-out name ("odds ratio" for OR, "adjusted" in aOR) are notation there;
-    "unadjusted" or "crude" are the author's and keep the text as typed."""
+    to 0.80"), the words of a ratio's spelled-out name ("odds ratio" for OR, "adjusted" in aOR), the "statistic" of
+    R's "F-statistic" and the words around df written after the value ("on 1 and 30 DF") are notation there;
+    "unadjusted" or "crude" are the author's and keep the statistic as typed."""
     kept = {w.lower() for w in _WORD.findall(new)} | _NOTATION_WORDS
-    spans = [(ci.low.end, ci.high.start) for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
-    spans += [(e.symbol_start, e.symbol_start + len(e.symbol_text)) for e in rep.effects if e.name in RATIOS]
+    places = [(ci.low.end, ci.high.start, _RANGE_WORDS) for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
+    places += [(e.symbol_start, e.symbol_start + len(e.symbol_text), _RATIO_WORDS) for e in rep.effects if e.name in RATIOS]
+    places.append((rep.symbol_start, rep.symbol_start + len(rep.symbol_text), _SYMBOL_WORDS))
+    if rep.df and rep.value is not None and rep.df[0].start > rep.value.end:  # "F-statistic: 4.51 on 2 and 97 DF"
+        places.append((rep.value.end, rep.df[-1].end, _DF_WORDS))
     for m in _WORD.finditer(old):
         w = m.group().lower()
         if w in kept:
             continue
         at = rep.start + m.start()
-        if not any(a <= at < b for a, b in spans) or w not in _RATIO_AND_RANGE_WORDS:
+        if not any(a <= at < b and w in words for a, b, words in places):
             return m.group()
     return ""
 
 
-_RATIO_AND_RANGE_WORDS = frozenset({"to", "odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj"})
+_RANGE_WORDS = frozenset({"to"})
+_RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj"})
+_SYMBOL_WORDS = frozenset({"statistic"})
+_DF_WORDS = frozenset({"on", "and", "with", "df"})
 
 
 def _value(token: str, mark: str) -> tuple[float, int]:
