@@ -218,6 +218,9 @@ def test_ama_caption_on_one_line():
     html = figure_text(model, "html", APA)
     assert html.startswith('<figure class="statsetter-figure"><figcaption><b>Figure 2</b>') and 'src="f.svg"' in html and "alt=" in html
     assert "\\includegraphics[width=\\linewidth]{f.pdf}" in figure_text(model, "tex", APA)
+    # APA's legend starts with an italic "Note."; AMA's has none (its tables' footnotes neither: tests/golden/tables)
+    assert model.note.plain().startswith("Points show means")
+    assert figure(anova_oneway(PLANTS, "weight", "group"), "means", APA).note.plain().startswith("Note. Points show means")
 
 
 def test_records_without_the_numbers_are_refused():

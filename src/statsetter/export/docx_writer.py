@@ -619,7 +619,7 @@ def table_parts(table: TableModel, style: "Style", text_width: int = TEXT_WIDTH,
                                                 style.tables.get("caption") == "one_line"))
     out.append(_table_xml(table, style.tables.get("number_align", "center"), width, mark=style.decimal_mark, line=table_line(style),
                           declare=declare, shapes=shapes, widths=_fit(low, want, width)))
-    out += [_paragraph_xml(part) for part in table.note_parts()]
+    out += [_paragraph_xml(part) for part in table.note_parts(style.note_label())]
     return pages.turned(out, section, opening=before.getprevious() is None or pages.landscape_ending(before.getprevious())) if turn else out
 
 

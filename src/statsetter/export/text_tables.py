@@ -27,7 +27,7 @@ def _one_line(style: "Style | None") -> bool:
     return style is not None and style.tables.get("caption") == "one_line"
 
 
-def table_markdown(t: TableModel, one_line: bool = False) -> str:
+def table_markdown(t: TableModel, one_line: bool = False, note_label: str = "Note.") -> str:
     out = []
     if one_line and (t.number is not None or t.title):
         out += [" ".join(([f"**Table {t.number}.**"] if t.number is not None else []) + ([title_case(t.title).markdown()] if t.title else [])), ""]
@@ -44,7 +44,7 @@ def table_markdown(t: TableModel, one_line: bool = False) -> str:
         stub = ("&nbsp;&nbsp;&nbsp;&nbsp;" * row.indent) + row.stub.markdown()
         cells = [c.markdown() for c in row.cells] if row.cells else [""] * len(t.columns)
         out.append("| " + " | ".join(_md_cell(c) for c in [stub] + cells) + " |")
-    for note in t.note_parts():  # general, specific and probability notes each start a line (APA 7 §7.14)
+    for note in t.note_parts(note_label):  # general, specific and probability notes each start a line (APA 7 §7.14)
         out += ["", note.markdown()]
     return "\n".join(out) + "\n"
 
@@ -58,7 +58,7 @@ def _md_cell(text: str) -> str:
     return text.replace("|", "\\|") or " "
 
 
-def table_html(t: TableModel, one_line: bool = False) -> str:
+def table_html(t: TableModel, one_line: bool = False, note_label: str = "Note.") -> str:
     out = ['<div class="statsetter-table" style="overflow-x:auto">']  # a table wider than the window scrolls inside its box
     out.append('<table style="border-collapse:collapse;border-top:1px solid black;border-bottom:1px solid black">')
     if t.number is not None or t.title:  # number and title above the table, flush left (APA 7 §7.7), as its caption
@@ -97,7 +97,7 @@ def table_html(t: TableModel, one_line: bool = False) -> str:
         out.append("<tr>" + "".join(cells) + "</tr>")
     out.append("</tbody>")
     out.append("</table>")
-    for part in t.note_parts():
+    for part in t.note_parts(note_label):
         out.append(f"<p>{part.html()}</p>")
     out.append("</div>")
     return "\n".join(out) + "\n"
@@ -214,7 +214,7 @@ def table_latex(t: TableModel, style: "Style | None" = None) -> str:
             out.append(f"\\multicolumn{{{ncol + 1}}}{{l}}{{{stub_text}}} \\\\")
     out.append("\\bottomrule")
     out.append("\\end{tabular}}\\ifdim\\wd0>\\linewidth\\resizebox{\\linewidth}{!}{\\usebox0}\\else\\usebox0\\fi" if too_wide else "\\end{tabularx}")
-    notes = t.note_parts()
+    notes = t.note_parts(style.note_label() if style is not None else "Note.")
     if notes:
         out.append("\\par\\medskip")
         out.append("\\begin{minipage}{\\linewidth}\\raggedright\\setlength{\\parindent}{0pt}" + "\\par ".join(n.latex() for n in notes) + "\\end{minipage}")
@@ -277,7 +277,7 @@ def table_csv(t: TableModel) -> str:
     return buf.getvalue()
 
 
-def table_text(t: TableModel, one_line: bool = False) -> str:
+def table_text(t: TableModel, one_line: bool = False, note_label: str = "Note.") -> str:
     """A fixed-width table for the terminal, with horizontal rules only."""
     heads = [t.stub_head.plain()] + [h.plain() for h in t.heads_with_spanners()]
     body = [
@@ -301,7 +301,7 @@ def table_text(t: TableModel, one_line: bool = False) -> str:
         if t.title:
             out.append(title_case(t.title).plain())
     out += [rule, line(heads), rule] + [line(b) for b in body] + [rule]
-    out += [n.plain() for n in t.note_parts()]
+    out += [n.plain() for n in t.note_parts(note_label)]
     return "\n".join(out) + "\n"
 
 
@@ -316,5 +316,5 @@ def write_table(t: TableModel, fmt: str, style: "Style | None" = None) -> str:
         return table_latex(t, style)
     if fmt == "csv":
         return table_csv(t)
-    return _WRITERS[fmt](t, one_line=_one_line(style))  # type: ignore[call-arg]
+    return _WRITERS[fmt](t, one_line=_one_line(style), note_label=style.note_label() if style is not None else "Note.")  # type: ignore[call-arg]
 

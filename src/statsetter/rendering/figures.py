@@ -81,6 +81,12 @@ class FigureModel:
         return replace(self, files=dict(files), png=png if png is not None else self.png)
 
 
+def _labelled(note: str, style: "Style") -> StyledText:
+    """A figure's note after the style's label (APA's italic "Note.", none in AMA's legends)."""
+    label = style.note_label("figures")
+    return StyledText.from_markup(f"<i>{label}</i> {note}" if label else note)
+
+
 def _t_quantile(level: float, df: float) -> float:
     from scipy.special import stdtrit
 
@@ -135,10 +141,10 @@ def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95)
     repeated = r.kind in ("anova_rm", "t_paired")
     axis = table_label(by.heading) if by is not None else ("Measurement" if repeated else "Group")
     pct = f"{level * 100:g}%"
-    note = (f"<i>Note.</i> Points show means; error bars show {pct} confidence intervals of each mean (<i>t</i> distribution, "
+    note = (f"Points show means; error bars show {pct} confidence intervals of each mean (<i>t</i> distribution, "
             f"from each group's <i>n</i>, <i>M</i> and <i>SD</i>).")
     if medians:  # a rank test's groups: medians with their interquartile ranges
-        note = "<i>Note.</i> Points show medians; error bars show the interquartile range (first to third quartile) of each group."
+        note = "Points show medians; error bars show the interquartile range (first to third quartile) of each group."
     if repeated:
         note += " The same people were measured each time: the intervals are those of each mean alone and do not show the precision of the differences."
     if style.figures.get("means") == "bars":
@@ -149,7 +155,7 @@ def means_figure(records: Sequence[Result], style: "Style", level: float = 0.95)
         kind="means",
         about=_prose(title),
         title=_title(title),
-        note=StyledText.from_markup(note),
+        note=_labelled(note, style),
         x_label=axis,
         y_label=f"{outcome} ({centre})",
         series=(Series(outcome, tuple(float(i) for i in range(len(names))), tuple(ys), tuple(lows), tuple(highs)),),
@@ -184,7 +190,7 @@ def interaction_figure(records: Sequence[Result], style: "Style", level: float =
     first = table_label(factors[0].heading) if factors else "First factor"
     second = table_label(factors[1].heading) if len(factors) > 1 else "Second factor"
     within = cells.details.get("epsilon") is not None or cells.kind == "anova_rm"
-    note = (f"<i>Note.</i> Points show cell means, a line for each level of {_lower(first)}; "
+    note = (f"Points show cell means, a line for each level of {_lower(first)}; "
             f"error bars show {level * 100:g}% confidence intervals of each cell mean.")
     if within:
         note += " Measurements of the same people are joined; the intervals do not show the precision of within-person differences."
@@ -193,7 +199,7 @@ def interaction_figure(records: Sequence[Result], style: "Style", level: float =
         kind="interaction",
         about=_prose(title),
         title=_title(title),
-        note=StyledText.from_markup(note),
+        note=_labelled(note, style),
         x_label=second,
         y_label=f"{outcome} (<i>M</i>)",
         series=tuple(series),
@@ -236,13 +242,13 @@ def scatter_figure(records: Sequence[Result], data: "pd.DataFrame", style: "Styl
     fit = a + b * grid
     xl, yl = table_label(x_var.heading), table_label(y_var.heading)
     title = f"{yl} and {_lower(xl)}"
-    note = (f"<i>Note.</i> Each point is one case (<i>N</i> = {n}); the line is the least-squares regression line, "
+    note = (f"Each point is one case (<i>N</i> = {n}); the line is the least-squares regression line, "
             f"the shaded band its {level * 100:g}% confidence band.")
     return FigureModel(
         kind="scatter",
         about=f"relation between {_prose(yl)} and {_prose(xl)}",
         title=_title(title),
-        note=StyledText.from_markup(note),
+        note=_labelled(note, style),
         x_label=xl,
         y_label=yl,
         series=(Series("cases", tuple(float(v) for v in x), tuple(float(v) for v in y)),
@@ -274,14 +280,14 @@ def forest_figure(records: Sequence[Result], style: "Style") -> FigureModel:
     outcome = _outcome(coefficients[0])
     symbol = "OR" if logistic else "<i>B</i>"
     null = "an odds ratio of one" if logistic else "a coefficient of zero"
-    note = (f"<i>Note.</i> Points show {'odds ratios' if logistic else 'unstandardized coefficients (<i>B</i>)'}; error bars show their "
+    note = (f"Points show {'odds ratios' if logistic else 'unstandardized coefficients (<i>B</i>)'}; error bars show their "
             f"{level * 100:g}% confidence intervals; the dashed line marks no association ({null})." + (" The axis is logarithmic." if logistic else ""))
     title = f"{'Odds ratios' if logistic else 'Coefficients'} of the {'logistic' if logistic else 'linear'} regression of {_lower(outcome)}"
     return FigureModel(
         kind="forest",
         about=_prose(title),
         title=_title(title),
-        note=StyledText.from_markup(note),
+        note=_labelled(note, style),
         x_label=f"{symbol} ({level * 100:g}% CI)",
         y_label="",
         series=(Series("coefficients", tuple(ys), tuple(float(i) for i in range(len(names))), tuple(lows), tuple(highs)),),
@@ -316,7 +322,7 @@ def categories_figure(description: "Description", variable: str | None, style: "
     label = table_label(v.label)
     by = table_label(description.group_label or "Group")
     grouped = len(keep) > 1
-    note = (f"<i>Note.</i> Bars show the percentage of {'each group' if grouped else 'the sample'} in each category "
+    note = (f"Bars show the percentage of {'each group' if grouped else 'the sample'} in each category "
             f"({'of valid responses' if description.percent_of == 'valid' else 'of all cases, missing included'}).")
     if hidden.any():
         note += f" To protect confidentiality, counts below {description.suppress_below} are not drawn, as the table does not show them."
@@ -325,7 +331,7 @@ def categories_figure(description: "Description", variable: str | None, style: "
         kind="categories",
         about=_prose(f"percentage in each category of {_prose(label)}" + (f" by {_prose(by)}" if grouped else "")),
         title=_title(title),
-        note=StyledText.from_markup(note),
+        note=_labelled(note, style),
         x_label=label,
         y_label="Percentage",
         series=tuple(series),

@@ -178,15 +178,16 @@ class TableModel:
             out.append("text" not in kinds and "number" in kinds)
         return tuple(out)
 
-    def note_parts(self) -> list[StyledText]:
-        """The notes in order: ``Note.`` + general, specific (superscript letters), probability."""
+    def note_parts(self, label: str = "Note.") -> list[StyledText]:
+        """The notes in order: ``label`` (the style's: APA's italic "Note.", AMA's none) + general, specific
+        (superscript letters), probability."""
         parts: list[StyledText] = []
         if self.general_note:
-            parts.append(StyledText.styled("Note.", "i") + " " + self.general_note)
+            parts.append(self.general_note)
         for letter, text in self.specific_notes:
             parts.append(StyledText.styled(letter, "sup") + " " + text)
         if self.probability_note:
             parts.append(self.probability_note)
-        if parts and not self.general_note:
-            parts[0] = StyledText.styled("Note.", "i") + " " + parts[0]
+        if parts and label:
+            parts[0] = StyledText.styled(label, "i") + " " + parts[0]
         return parts

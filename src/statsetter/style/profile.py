@@ -201,11 +201,13 @@ SCHEMA: dict[str, Any] = {
         "number_align": _one_of("center", "decimal"),
         "intercept": _bool,
         "caption": _one_of("two_lines", "one_line"),
+        "note_label": _text,
         "font": _text,
         "font_size": _float(0, 30),
     },
     "figures": {
         "caption": _one_of("two_lines", "one_line"),
+        "note_label": _text,
         "font": _text,
         "font_size": _float(8, 14),
         "width_in": _float(2, 7.5),
@@ -374,6 +376,11 @@ class Style:
         """The page of a results document the style writes (``[manuscript]``):
         paper, margins, font, spacing, indent, headings, page number."""
         return self.data.get("manuscript", MappingProxyType({}))
+
+    def note_label(self, what: str = "tables") -> str:
+        """The word before a table's or figure's general note: APA's italic "Note." (APA 7 §7.14); "" where the style
+        puts its notes without one (AMA 11: footnotes below the table, memory)."""
+        return str(self.data.get(what, {}).get("note_label", "Note."))
 
     def symbol(self, name: str) -> str:
         """The markup for a symbol; a name the style does not define is used as is."""
