@@ -528,7 +528,7 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     """The B and SE a sentence gives before a t or z (``B = 0.42, SE = 0.10,
     β = .31, t(196) = 4.20``): the last of each between ``since`` (the end of
     the statistic before) and the statistic, within its sentence."""
-    if text.find("SE", since, rep.start) < 0 or (text.find("B", since, rep.start) < 0 and text.find("b", since, rep.start) < 0):  # (both patterns')
+    if text.find("SE", since, rep.start) < 0 or (text.find("B", since, rep.start) < 0 and text.find("b", since, rep.start) < 0):  # what the patterns must contain
         return None
     pat = _patterns(decimal_mark)
     start = _sentence_start(pat, text, since, rep.start)
