@@ -581,6 +581,22 @@ def test_a_logistic_coefficients_wald_and_odds_ratio_against_b_and_se_on_open_da
     assert "p-does-not-follow" not in codes("Group predicted passing, Wald = 6.13, p = .047.")  # χ²(2) gives .047
 
 
+def test_a_suggestion_never_repeats_a_p_found_wrong():
+    """The README's promise, for the statistics without df: a z's p is recomputed (it needs none; the suggestion had
+    kept the p found wrong), a Wald χ² beside its B and SE is suggested on its 1 df with the recomputed p, and a t whose
+    df the text does not give, under none of the df it allows, is suggested without a p, saying why. p from scipy:
+    z = 2.58 gives .0099; χ²(1) = 6.13 gives .0133."""
+    def suggestion(text):
+        (e,) = audit_units([Unit("s", text)])
+        return e.suggestion
+
+    assert suggestion("The effect held, z = 2.58, p = .04.") == "z = 2.58, p = .010 (p recomputed)"
+    assert suggestion("Age predicted passing (B = 0.52, SE = 0.21, Wald = 6.13, p = .13, OR = 1.68).") == \
+        "χ²(1) = 6.13, p = .013, OR = 1.68 (p recomputed)"
+    assert suggestion("In all, N = 90 took part; the groups differed, t = 2.10, p = .30.") == \
+        "t = 2.10 (p left out: no df the text allows gives the reported p)"
+
+
 def test_eta_and_v_against_f_and_chi2_on_open_data():
     # reference: pingouin's two-way ANOVA (partial η², 'np2') and its chi-square test of independence
     # (Cramér's V) on the bundled penguins data, printed as a manuscript would

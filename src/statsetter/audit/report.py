@@ -139,10 +139,13 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         return new.plain() + (" (p recomputed)" if added else "")
     try:
         record = to_record(rep, alpha, style)
-        if doubted and record.statistic is not None and record.statistic.df:
+        if doubted and record.statistic is not None and (record.statistic.df or record.statistic.symbol == "z"):  # (a z needs none)
             recomputed = p_from_statistic(record.statistic.symbol, record.statistic.value, record.statistic.df)
             record = replace(record, p=recomputed, precision={k: v for k, v in record.precision.items() if k != "p"})
             return render(record, "stats", style).plain() + " (p recomputed)"
+        if doubted:  # no df, and none of those the text allows gives the p: no p to offer in its place
+            record = replace(record, p=None, precision={k: v for k, v in record.precision.items() if k != "p"})
+            return render(record, "stats", style).plain() + " (p left out: no df the text allows gives the reported p)"
         return render(record, "stats", style).plain()
     except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
         return ""
@@ -384,7 +387,10 @@ def _audit_units(
                 findings = [f for f in findings if f.code != "one-sided"]
                 notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")
         house = house_text(rep, resolved, alpha) if restyle and local is rep and (findings or suggest_all) else _UNMADE  # made once for both
-        suggestion = _suggest(rep, resolved, alpha, findings, house) if findings or suggest_all else ""
+        # a Wald χ² beside its B and SE has 1 df, whether typed or not: suggested with it (a t's df read from group sizes or N
+        # are assumptions, said in the JSON's `recomputed`, and stay out of the suggestion)
+        basis = recheck[0] if recheck is not None and item.readings == (_ONE_COEFFICIENT,) else rep
+        suggestion = _suggest(basis, resolved, alpha, findings, house if basis is rep else _UNMADE) if findings or suggest_all else ""
         entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", recheck))
         if restyle:  # what a revision needs (held only then: the parsed statistics are most of an audit's memory)
             reps.append(local)
