@@ -372,9 +372,11 @@ def test_a_second_real_table_of_ratios_raises_nothing(tmp_path):
 
 def test_a_logistic_models_wald_column_is_read_with_its_df_and_sig(tmp_path):
     """SPSS's "Variables in the Equation" typed into a manuscript (B, S.E., Wald, df, Sig., Exp(B); practice): the Wald
-    column is a χ² with the df beside it, its p under Sig. Reference: statsmodels' Logit on its bundled spector data
-    (Spector & Mazzeo, 1980), Wald = z², printed to three decimals as SPSS prints them; one row's Sig. retyped (.045
-    for .025) is found, the others are not."""
+    column is a χ² with the df beside it, its p under Sig., checked against (B / SE)² and its Exp(B) against exp(B).
+    Reference: statsmodels' Logit on its bundled spector data (Spector & Mazzeo, 1980), Wald = z², printed to three
+    decimals as SPSS prints them; one row's Sig. retyped (.045 for .025), and two rows (named X2 and X3, as predictors
+    often are: "X2" is no χ² head there) with a Wald or an Exp(B) that B and SE do not give, are found; the others
+    are not."""
     import math
 
     import statsmodels.api as sm
@@ -386,6 +388,9 @@ def test_a_logistic_models_wald_column_is_read_with_its_df_and_sig(tmp_path):
         b, se, z, p = fit.params[name], fit.bse[name], fit.tvalues[name], fit.pvalues[name]
         rows.append([name, f"{b:.3f}", f"{se:.3f}", f"{z * z:.3f}", "1", f"{p:.3f}".lstrip("0"), f"{math.exp(b):.3f}"])
     rows[3][5] = ".045"  # PSI: Wald 4.990 on 1 df gives p = .0255
+    rows.append(["X2", rows[3][1], rows[3][2], "7.990", "1", ".005", rows[3][6]])  # a Wald that is not (B / SE)²
+    rows.append(["X3", rows[3][1], rows[3][2], rows[3][3], "1", ".025", "12.790"])  # an Exp(B) that is not exp(B)
     entries = _audited_table(tmp_path, "Table 2\nLogistic regression of the grade on GPA, TUCE and PSI", rows)
-    assert [e.found.split(",")[0] for e in entries] == [f"χ²(1) = {row[3]}" for row in rows[1:]]
-    assert [e.codes for e in entries] == [[], [], ["p-does-not-follow"]]
+    assert [e.found.split(",")[0] for e in entries] == [f"Wald(1) = {row[3]}" for row in rows[1:]]
+    assert [e.codes for e in entries] == [[], [], ["p-does-not-follow"], ["coefficient-does-not-fit"], ["coefficient-does-not-fit"]]
+    assert "not (B / SE)²" in entries[3].message and "Exp(B) = 12.790 is not exp(B)" in entries[4].message

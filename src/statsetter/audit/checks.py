@@ -691,7 +691,7 @@ def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None, 
         expected = (math.exp(b_low), math.exp(b_high))
         if not _overlap(expected, (odds.number.value - odds.number.half_unit, odds.number.value + odds.number.half_unit)):
             out.append(Finding("coefficient-does-not-fit", f"{odds.symbol_text} = {odds.number.text} is not exp(B): B = {b.text} gives "
-                                                            f"{expected[0]:.3g} to {expected[1]:.3g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}"))
+                                                            f"{expected[0]:.4g} to {expected[1]:.4g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}"))
     return out
 
 

@@ -25,7 +25,7 @@ from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, coefficient_ratio, corrected_df, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes, is_wald
-from .tables import Reading, df_readings, table_statistics
+from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, restyled, same_p, threshold_p
 
@@ -168,6 +168,7 @@ class _Item:
     readings: tuple[Reading, ...] = ()  # the df its context allows, when it has none
     how: str = ""  # where its parts were found, when not in one piece of text
     context: str = ""  # the text around it that may name a procedure (paragraph; a table's caption, cells and note)
+    coefficient: "tuple[Number, Number] | None" = None  # a table row's B and SE beside its Wald
 
 
 _DIGIT = re.compile(r"\d")
@@ -205,8 +206,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     where = "beside it" if rep.n is not None else "in the paragraph" if totals else "earlier in the text"
                     readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where))
                 elif rep.symbol == "chi2" and not rep.df and is_wald(unit.text, rep) and coefficient_before(unit.text, rep, previous_end, mark):
-                    readings = (_ONE_COEFFICIENT,)
-                yield _new_item(unit, rep, rep, readings, "", unit.text)
+                    readings = (ONE_COEFFICIENT,)
+                yield _new_item(unit, rep, rep, readings, "", unit.text, None)
                 previous_end = rep.end if rep.symbol is not None else previous_end
             last_total = totals[-1] if totals else last_total
             i += 1
@@ -221,16 +222,15 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
         found, used = table_statistics(cells, caption, mark)
         taken = {id(t.local) for t in found if t.local is not None}
-        items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context) for t in found]
+        items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient) for t in found]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in used | taken]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
 
 
-_ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
 
 # a statistic's item and entry set slot by slot (the frozen dataclasses' __init__ costs a few microseconds; 10,000 per 1,000 pages)
-_new_item = _unchecked_maker(_Item, {}, ("unit", "rep", "local", "readings", "how", "context"))
+_new_item = _unchecked_maker(_Item, {}, ("unit", "rep", "local", "readings", "how", "context", "coefficient"))
 _new_entry = _unchecked_maker(Entry, {}, ("location", "found", "findings", "suggestion", "unit", "start", "end", "notes", "revision", "kept",
                                           "recheck"))
 
@@ -351,6 +351,8 @@ def _audit_units(
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
+        if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns
+            findings += coefficient_ratio(rep, item.coefficient, wald=True)
         if (rep.ci is not None or rep.effects) and rep.p is not None:
             disagree = ci_p_agreement(rep, alpha)
             if disagree and _one_sided_said(unit.text, rep) is None:  # a one-tailed p: no disagreement
@@ -389,7 +391,7 @@ def _audit_units(
         house = house_text(rep, resolved, alpha) if restyle and local is rep and (findings or suggest_all) else _UNMADE  # made once for both
         # a Wald χ² beside its B and SE has 1 df, whether typed or not: suggested with it (a t's df read from group sizes or N
         # are assumptions, said in the JSON's `recomputed`, and stay out of the suggestion)
-        basis = recheck[0] if recheck is not None and item.readings == (_ONE_COEFFICIENT,) else rep
+        basis = recheck[0] if recheck is not None and item.readings == (ONE_COEFFICIENT,) else rep
         suggestion = _suggest(basis, resolved, alpha, findings, house if basis is rep else _UNMADE) if findings or suggest_all else ""
         entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", recheck))
         if restyle:  # what a revision needs (held only then: the parsed statistics are most of an audit's memory)

@@ -27,7 +27,10 @@ _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
     (re.compile(r"F(?:[- ]?(?:values?|ratio))?"), "F"),
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
-    (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "chi2"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
+    (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "wald"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
+    (re.compile(r"B"), "B"),  # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B))
+    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?"), "SE"),
+    (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ]"), "z"),
     (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\))?|P\s*\(2-tailed\))"), "p"),
@@ -35,7 +38,7 @@ _ROLES = (
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
 )
-_STAT_ROLES = {"t", "F", "chi2", "r", "z"}
+_STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald"}
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 _RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr)[a-d*†‡§]?\s*\(\s*95\s?%\s?ci\s*\)[a-d*†‡§]?")
@@ -135,6 +138,7 @@ class TableStatistic:
     local: Reported | None  # the statistic as typed in its cell (for the style checks), None for a row of bare numbers
     how: str  # where its parts were found
     readings: tuple[Reading, ...] = ()
+    coefficient: tuple[Number, Number] | None = None  # a Wald's B and SE from their columns (checked: Wald = (B / SE)², OR = exp(B))
 
 
 def _number(text: str, mark: str) -> tuple[str, Number] | None:
@@ -168,6 +172,22 @@ def _error_df(rows, roles: dict[int, str], mark: str) -> float | None:  # type: 
     return None
 
 
+ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
+
+
+def _coefficient_cells(row, roles: dict[int, str], numbers) -> "tuple[tuple[Number, Number] | None, list[Effect]]":  # type: ignore[no-untyped-def]
+    """A Wald row's B and SE, and its Exp(B) as an odds ratio, from their columns."""
+    cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB") and k in row and numbers.get(k) is not None}
+    if "B" not in cols or "SE" not in cols:
+        return None, []
+    b, se = numbers[cols["B"]][1], numbers[cols["SE"]][1]
+    effects = []
+    if "expB" in cols:
+        ratio = numbers[cols["expB"]][1]
+        effects.append(Effect("OR", ratio, ratio.start, ratio.end, ratio.start, "Exp(B)", None))
+    return (b, se), effects
+
+
 def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str) -> tuple[list[TableStatistic], set[int]]:
     """The statistics of one table: ``cells`` are (row, column, unit, the
     statistics the text parser found in it). Returns the statistics and the
@@ -187,8 +207,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         stat_cells = {c for c, role in header.items() if role is not None}
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
         heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
-        if stat_cells and not heads_in_row and not any(numbers[c] is not None for c in stat_cells if roles.get(c) in _STAT_ROLES):
-            roles = {c: role for c, role in header.items() if role is not None}  # a header row (also one partway down the table)
+        if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
+            # a header row (also one partway down the table): heads and no number (a row of a predictor named "X2" is data)
+            roles = {c: role for c, role in header.items() if role is not None}
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES) and not any(ratios.values()):
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
@@ -241,12 +262,19 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 how += ", the error row's df"
             if p is not None:
                 how += ", the p column"
-            label = {"chi2": "χ²"}.get(role, role)
-            rep = Reported(role, label, value.start, value.start, value.end, df, None, op, value, p)
+            coefficient, effects = _coefficient_cells(row, roles, numbers) if role == "wald" else (None, [])
+            if coefficient is not None:
+                how += ", the B and SE columns" + (", the Exp(B) column" if effects else "")
+            symbol = "chi2" if role == "wald" else role
+            label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
+            rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
             p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
             rep.text = f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
-            readings = () if df else tuple(df_readings(role, groups, total, "in the table"))
-            found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings))
+            if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
+                readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
+            else:
+                readings = tuple(df_readings(role, groups, total, "in the table"))
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
         # a statistic typed whole in a cell, its p further along the row
         ordered = sorted(row)
         for i, c in enumerate(ordered):
