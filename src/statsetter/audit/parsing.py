@@ -557,9 +557,9 @@ def _ratio_words(text: str, start: int, end: int) -> bool:
 
 
 def _rare_words(text: str) -> bool:
-    """Whether a paragraph has what only a few statistics are typed with (a capital R of OR, HR or RR; "ratio", "risk";
-    "value:"): looked for once a paragraph, so that most clauses and gaps are spared the searches for them."""
-    return "R" in text or "ratio" in text or "risk" in text or "value" in text
+    """Whether a paragraph has what only a few statistics are typed with (OR, HR, RR and the ratios ending in them;
+    "ratio", "risk"; "value:"): looked for once a paragraph, so that most clauses and gaps are spared the searches."""
+    return ("R" in text and ("OR" in text or "HR" in text or "RR" in text)) or "ratio" in text or "risk" in text or "value" in text
 
 
 def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
