@@ -664,10 +664,10 @@ def corrected_df(rep: Reported) -> list[Finding]:
     return out
 
 
-def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None, wald: bool = False) -> list[Finding]:
-    """A coefficient's t (or z) against B / SE, its Wald χ² (``wald``) against (B / SE)², and an odds ratio beside it
-    against exp(B), with interval arithmetic on the printed precision of all of them."""
-    if coefficient is None or rep.value is None or rep.op != "=" or not (rep.symbol in ("t", "z") or (wald and rep.symbol == "chi2")):
+def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None) -> list[Finding]:
+    """A coefficient's t (or z) against B / SE, its Wald χ² (the only χ² given a coefficient) against (B / SE)², and an
+    odds ratio beside it against exp(B), with interval arithmetic on the printed precision of all of them."""
+    if coefficient is None or rep.value is None or rep.op != "=" or rep.symbol not in ("t", "z", "chi2"):
         return []
     b, se = coefficient
     se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
@@ -679,13 +679,11 @@ def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None, 
     stat = (rep.value.value - rep.value.half_unit, rep.value.value + rep.value.half_unit)
     out = []
     if rep.symbol == "chi2":  # the Wald χ² of one coefficient: (B / SE)²
-        squared = (0.0 if ratio[0] <= 0 <= ratio[1] else min(ratio[0] ** 2, ratio[1] ** 2), max(ratio[0] ** 2, ratio[1] ** 2))
-        if not _overlap(squared, stat):
-            out.append(Finding("coefficient-does-not-fit", f"Wald = {rep.value.text} is not (B / SE)²: B = {b.text} and SE = {se.text} give "
-                                                            f"{squared[0]:.2f} to {squared[1]:.2f}.", f"B = {b.text}, SE = {se.text}, Wald = {rep.value.text}"))
-    elif not _overlap(ratio, stat):
-        out.append(Finding("coefficient-does-not-fit", f"{rep.symbol} = {rep.value.text} is not B / SE: B = {b.text} and SE = {se.text} give "
-                                                        f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"B = {b.text}, SE = {se.text}, {rep.symbol} = {rep.value.text}"))
+        ratio = (0.0 if ratio[0] <= 0 <= ratio[1] else min(ratio[0] ** 2, ratio[1] ** 2), max(ratio[0] ** 2, ratio[1] ** 2))
+    name, what = ("Wald", "(B / SE)²") if rep.symbol == "chi2" else (rep.symbol, "B / SE")
+    if not _overlap(ratio, stat):
+        out.append(Finding("coefficient-does-not-fit", f"{name} = {rep.value.text} is not {what}: B = {b.text} and SE = {se.text} give "
+                                                        f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"B = {b.text}, SE = {se.text}, {name} = {rep.value.text}"))
     odds = next((e for e in rep.effects if e.name in ("OR", "aOR")), None)
     if odds is not None and b_high < 700:  # the odds ratio of a logistic coefficient is exp(B)
         expected = (math.exp(b_low), math.exp(b_high))

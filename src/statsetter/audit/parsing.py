@@ -556,6 +556,11 @@ def _ratio_words(text: str, start: int, end: int) -> bool:
     return text.find("ratio", start, end) >= 0 or text.find("risk", start, end) >= 0
 
 
+def _ratios_in(text: str, start: int, end: int, rare: bool) -> bool:
+    """Whether text[start:end] may hold a ratio (its paragraph having the rare words at all)."""
+    return rare and (_abbreviated_ratio(text, start, end) or _ratio_words(text, start, end))
+
+
 def _rare_words(text: str) -> bool:
     """Whether a paragraph has what only a few statistics are typed with (OR, HR, RR and the ratios ending in them;
     "ratio", "risk"; "value:"): looked for once a paragraph, so that most clauses and gaps are spared the searches."""
@@ -565,9 +570,8 @@ def _rare_words(text: str) -> bool:
 def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
     """Whether text[start:end] may hold a p, an effect size or a descriptive: an operator, "ns", a ratio's name or a
     colon after "value" (plain searches for the words: a pattern of common letters would slow every gap's scan)."""
-    return _OPERATOR_OR_NS.search(text, start, end) is not None or rare and (
-        _abbreviated_ratio(text, start, end) or _ratio_words(text, start, end) or text.find("value:", start, end) >= 0
-        or text.find("values:", start, end) >= 0)
+    return (_OPERATOR_OR_NS.search(text, start, end) is not None or _ratios_in(text, start, end, rare)
+            or rare and (text.find("value:", start, end) >= 0 or text.find("values:", start, end) >= 0))
 
 
 def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True) -> list[Reported]:
@@ -577,7 +581,7 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
     again only once passed: a piece of thousands of clusters stays linear ("OR 1.5 " 20,000 times had taken minutes)."""
     if not _anything_in(text, start, end, rare):
         return []
-    ratios = rare and (_abbreviated_ratio(text, start, end) or _ratio_words(text, start, end))
+    ratios = _ratios_in(text, start, end, rare)
     following = {regex: regex.search(text, start, end) for regex in ((pat.p, pat.effect, pat.ratio) if ratios else (pat.p, pat.effect))}
     out: list[Reported] = []
     while start < end:
@@ -689,7 +693,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     # a search is skipped where the clause lacks what its pattern must contain: an interval its level's percent sign,
     # an effect size and an n their "=", a ratio its name, a df written apart its "df"
     equals = text.find("=", start, end) >= 0
-    ratios = rare and (_abbreviated_ratio(text, start, end) or _ratio_words(text, start, end))
+    ratios = _ratios_in(text, start, end, rare)
     for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
                                 ("effect", pat.ratio, ratios),
                                 ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0), ("n", pat.n, equals)):

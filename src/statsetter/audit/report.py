@@ -347,12 +347,12 @@ def _audit_units(
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
             if local.symbol in ("t", "z") or (local.symbol == "chi2" and is_wald(unit.text, local)):
-                findings += coefficient_ratio(local, coefficient_before(unit.text, local, previous_end, mark), wald=local.symbol == "chi2")
+                findings += coefficient_ratio(local, coefficient_before(unit.text, local, previous_end, mark))
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
         if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns
-            findings += coefficient_ratio(rep, item.coefficient, wald=True)
+            findings += coefficient_ratio(rep, item.coefficient)
         if (rep.ci is not None or rep.effects) and rep.p is not None:
             disagree = ci_p_agreement(rep, alpha)
             if disagree and _one_sided_said(unit.text, rep) is None:  # a one-tailed p: no disagreement
