@@ -697,3 +697,20 @@ def test_a_p_above_the_ceiling_stays_above_it_when_restyled():
                     effects=(EffectSize("eta2_p", 0.5),))
     text = render(record, "stats", style).plain()
     assert "P > .99" in text and render(to_record(one(text, "."), style=style), "stats", style).plain() == text
+
+
+def test_prose_without_a_digit_is_not_parsed_but_a_bare_ns_is(monkeypatch):
+    """A paragraph without a digit can hold a statistic only as a bare "ns" (a p of its own): it is read when it has one
+    ("n. s." too, which the parser reads and the cheap test before it had missed), not for every word with an "ns" in
+    it ("conditions", "sessions"), which had sent most paragraphs of prose to the parser."""
+    from statsetter.audit import report
+
+    read = []
+    parse = report.find_statistics
+    monkeypatch.setattr(report, "find_statistics", lambda text, mark=".": read.append(text) or parse(text, mark))
+    prose = "Participants in both conditions attended four sessions; the means of the transport questions are below."
+    units = [Unit("line 1", prose, None, ""), Unit("line 3", "The difference was n. s. in the pilot.", None, "", 3),
+             Unit("line 5", "Both were n.s. in the trial.", None, "", 5)]
+    entries = audit_units(units)
+    assert read == [units[1].text, units[2].text]
+    assert [e.found for e in entries] == ["n. s.", "n.s."]

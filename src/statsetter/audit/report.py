@@ -182,6 +182,9 @@ def _has_digit(text: str) -> bool:
 def _long_number(text: str) -> "re.Match[str] | None":
     """A run of more than 100 digits: every run of 101 characters holds one of every 101st, so those are tested first."""
     return _LONG_NUMBER.search(text) if _DIGIT.search(text[::101]) is not None else None
+# "ns", "n.s." or "n. s." as the parser reads a p (a word of its own), more loosely: a paragraph without a digit is read only
+# when it has one (not for every "sessions" or "conditions" of the prose, which had sent most digitless paragraphs to the parser)
+_NS = re.compile(r"n(?<![\w.]n)\.?\s?s(?!\w)")
 _SIZE_TOTAL = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,6})(?![\d.,]\d)")  # the literal first: the engine's fast scan
 
 
@@ -193,7 +196,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
     while i < len(units):
         unit = units[i]
         if unit.cell is None:
-            if not _has_digit(unit.text) and "n.s" not in unit.text and "ns" not in unit.text:  # no statistic without a digit
+            if not _has_digit(unit.text) and _NS.search(unit.text) is None:  # no statistic without a digit, but for a bare "ns"
                 i += 1
                 continue
             totals = [int(m.group(1)) for m in _SIZE_TOTAL.finditer(unit.text)]
