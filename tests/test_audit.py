@@ -592,7 +592,7 @@ def test_a_suggestion_never_repeats_a_p_found_wrong():
 
     assert suggestion("The effect held, z = 2.58, p = .04.") == "z = 2.58, p = .010 (p recomputed)"
     assert suggestion("Age predicted passing (B = 0.52, SE = 0.21, Wald = 6.13, p = .13, OR = 1.68).") == \
-        "χ²(1) = 6.13, p = .013, OR = 1.68 (p recomputed)"
+        "Wald χ²(1) = 6.13, p = .013, OR = 1.68 (p recomputed)"
     assert suggestion("In all, N = 90 took part; the groups differed, t = 2.10, p = .30.") == \
         "t = 2.10 (p left out: no df the text allows gives the reported p)"
 
@@ -714,3 +714,19 @@ def test_prose_without_a_digit_is_not_parsed_but_a_bare_ns_is(monkeypatch):
     entries = audit_units(units)
     assert read == [units[1].text, units[2].text]
     assert [e.found for e in entries] == ["n. s.", "n.s."]
+
+
+def test_a_wald_typed_by_its_name_keeps_the_name_when_restyled():
+    """ "Wald = 6.13", as SPSS users type a logistic coefficient's test, is a χ²: its suggestion and its revision say
+    "Wald χ²" (the revision had been refused, the restyled text dropping "Wald", and the suggestion had read as a χ²
+    test of another kind). Typed "Wald χ² = 6.13", the name stays outside the statistic and is left as it is."""
+    def entry(text, style="apa7"):
+        (e,) = audit_units([Unit("s", text)], style, suggest_all=True, restyle=True)
+        return e
+
+    e = entry("Age predicted passing (B = 0.52, SE = 0.21, Wald = 6.13, p = .013, OR = 1.68).")
+    assert e.suggestion == "Wald χ²(1) = 6.13, p = .013, OR = 1.68"  # on its 1 df beside B and SE
+    assert e.revision.plain() == "Wald χ² = 6.13, p = .013, OR = 1.68" and e.kept == ""  # no df the author did not type
+    assert entry("The group factor, Wald = 12.40, p = .002.", "ama11").suggestion == "Wald χ² = 12.40, P = .002"
+    typed = entry("Age was a predictor (Wald χ2 = 6.13, df = 1, p = 0.013).")
+    assert typed.found == "χ2 = 6.13, df = 1, p = 0.013" and typed.revision.plain() == "χ²(1) = 6.13, p = .013"

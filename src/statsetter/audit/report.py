@@ -27,7 +27,7 @@ from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, co
 from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
 from .reading import Unit, read_units
-from .word import _P_IN_TEXT, _UNMADE, house_text, restyled, same_p, threshold_p
+from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
 
 __all__ = ["Entry", "audit_file", "audit_units", "as_json", "as_csv", "CAUTION"]
 
@@ -142,11 +142,11 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         if doubted and record.statistic is not None and (record.statistic.df or record.statistic.symbol == "z"):  # (a z needs none)
             recomputed = p_from_statistic(record.statistic.symbol, record.statistic.value, record.statistic.df)
             record = replace(record, p=recomputed, precision={k: v for k, v in record.precision.items() if k != "p"})
-            return render(record, "stats", style).plain() + " (p recomputed)"
+            return named(rep, render(record, "stats", style)).plain() + " (p recomputed)"
         if doubted:  # no df, and none of those the text allows gives the p: no p to offer in its place
             record = replace(record, p=None, precision={k: v for k, v in record.precision.items() if k != "p"})
-            return render(record, "stats", style).plain() + " (p left out: no df the text allows gives the reported p)"
-        return render(record, "stats", style).plain()
+            return named(rep, render(record, "stats", style)).plain() + " (p left out: no df the text allows gives the reported p)"
+        return named(rep, render(record, "stats", style)).plain()
     except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
         return ""
 

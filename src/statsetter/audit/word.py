@@ -53,7 +53,19 @@ def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = Tr
     """The statistic as the style writes it (its numbers to their printed precision), or None when the renderer
     cannot take its record (an impossible value). A statistic given as a bound ("F < 1") keeps its operator and
     the p as the author gave it (a threshold, "p > .05"); with ``with_p`` False — the author's p doubted — the p the
-    bound allows instead ("F(1, 56) < 1, p > .32"): a bound gives no exact p to print."""
+    bound allows instead ("F(1, 56) < 1, p > .32"): a bound gives no exact p to print. A coefficient's χ² typed as its
+    name alone ("Wald = 6.13") keeps the name before the symbol ("Wald χ²(1) = 6.13"): the reader is told which χ²."""
+    text = _house_text(rep, style, alpha, with_p)
+    return None if text is None else named(rep, text)
+
+
+def named(rep: Reported, text: StyledText) -> StyledText:
+    """``text``, the statistic restyled, after the name its χ² was typed with alone ("Wald = 6.13": "Wald χ²(1) =
+    6.13"); else as it is."""
+    return StyledText("Wald ") + text if rep.symbol == "chi2" and rep.symbol_text.startswith("Wald") else text
+
+
+def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> StyledText | None:
     from ..rendering.sentences import render
     from .checks import to_record
 
