@@ -200,6 +200,21 @@ def test_decimal_marks_are_counted_as_two_patterns_count_them(text):
     assert found == (None if commas == points else ("," if commas > points else ".", commas, points))
 
 
+@settings(max_examples=3_000, deadline=None, database=None)
+@given(st.lists(st.text(alphabet="=<> -−0123456789,.pt", max_size=30), min_size=1, max_size=4))
+def test_the_style_point_is_kept_without_counting_as_counting_says(texts):
+    """Against a style with a decimal point, a manuscript without a number only a decimal comma explains is read with
+    the point without counting its numbers: the mark and message the full count gives, on any text."""
+    from statsetter import load_style
+    from statsetter.audit.report import reading_mark
+
+    units = [Unit("line 1", t, None, "", 1) for t in texts]
+    found = parsing.decimal_mark_of(texts)
+    expected = "," if found is not None and found[0] == "," else "."
+    mark, said = reading_mark(units, load_style("apa7"))
+    assert mark == expected and (said != "") == (expected == ",")
+
+
 def test_the_audit_leaves_the_garbage_collector_as_it_was(tmp_path):
     """Reading and checking run with Python's cyclic collector paused (their objects hold no cycles): it runs again
     afterwards, also when the manuscript is refused, and stays off where the caller had turned it off."""

@@ -271,6 +271,13 @@ def _recomputed(rep: Reported, assumption: str) -> str:
     return said + (f", with {assumption}" if assumption else "")
 
 
+# a number after "=", "<" or ">" that only a decimal comma explains: parsing's _DECIMAL_TYPED with its point-typed
+# alternative left out (each match starts at its one operator, so this finds one where that pattern counts one), and the
+# comma before a digit it needs, looked for first
+_COMMA_TYPED = re.compile(r"[=<>]\s*[-−]?(?:0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)")
+_COMMA_DIGIT = re.compile(r",\d")
+
+
 def reading_mark(units: Sequence[Unit], style: Style, requested: str = "auto") -> tuple[str, str]:
     """The decimal mark to read the manuscript with, and why (said to the user)."""
     if requested in (".", ","):
@@ -279,6 +286,8 @@ def reading_mark(units: Sequence[Unit], style: Style, requested: str = "auto") -
         from ..errors import InputError
 
         raise InputError(f"--decimal-mark: {requested!r} is not '.', ',' or 'auto'")
+    if style.decimal_mark == "." and not any(_COMMA_DIGIT.search(u.text) and _COMMA_TYPED.search(u.text) for u in units):
+        return ".", ""  # no number typed with a decimal comma: the style's point (the points left uncounted: a third of the time)
     found = decimal_mark_of(u.text for u in units)
     if found is None or found[0] == style.decimal_mark:
         return style.decimal_mark, ""

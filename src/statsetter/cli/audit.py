@@ -64,11 +64,11 @@ def run(ns: argparse.Namespace) -> int:
         raise InputError("--grim-items: give a whole number of 1 or more")
     units = read_units(ns.manuscript, ns.encoding)
     style = load_style(ns.style)
-    said = reading_mark(units, style, ns.decimal_mark)[1]
+    mark, said = reading_mark(units, style, ns.decimal_mark)
     if said:  # an automatic choice is shown, never silent
         sys.stderr.write(f"statsetter audit: {said}\n")
     entries = audit_units(units, style, alpha=ns.alpha, grim_items=ns.grim_items, suggest_all=ns.suggest_all,
-                          check_italics=ns.check_italics, restyle=bool(ns.revise), decimal_mark=ns.decimal_mark)
+                          check_italics=ns.check_italics, restyle=bool(ns.revise), decimal_mark=mark)  # (the mark chosen once)
     every = entries
     entries = by_severity([e.at_least(ns.min_severity) for e in entries])
     if ns.json or ns.csv:
