@@ -368,3 +368,54 @@ def test_a_revision_that_puts_a_p_the_text_did_not_give_is_commented(tmp_path):
     comments = [c.text for c in docx.Document(str(out)).comments]
     assert comments == ["Note: The statistic is restyled in the tracked change; its numbers are as reported except the p, which is "
                         "recomputed from the statistic and its df (the text gave \u201cp < .05\u201d). Suggested: t(38) = 2.14, p = .039 (p recomputed)"]
+
+
+def test_df_set_as_subscripts_are_read_in_word_markdown_and_latex(tmp_path):
+    """AMA 11 sets df as subscripts, "t₃₈ = 2.14". In Word they are subscript runs (or an equation's subscript), in
+    Markdown ~38~, in LaTeX \\textsubscript{38}: the readers had taken their digits as plain ("t38 = 2.14"), no statistic,
+    and a manuscript in AMA style — statsetter's own among them — lost its t, F and χ² tests to the audit. Read as the
+    subscript digits they print as, they are the tests' df. Analyses of pingouin's penguins data (Palmer Station,
+    Gorman et al., 2014), written by statsetter in AMA 11 to each format and audited in AMA 11: every test found with
+    its df, its p recomputed, nothing flagged; and a paragraph an author typed in Word with subscript runs and an
+    equation (m:sSub), numbers this test's own: t(38) = 2.14 gives p = .039 (scipy), so "P = .004" is wrong."""
+    import pingouin as pg
+
+    from statsetter.analyses import anova_oneway, chi_square, t_independent
+    from statsetter.records import dump_records
+
+    penguins = pg.read_dataset("penguins")
+    two = penguins[penguins["species"] != "Gentoo"]
+    records = [t_independent(two, "body_mass_g", "species").main, anova_oneway(penguins, "flipper_length_mm", "species").main,
+               chi_square(penguins, "island", "species")[0], chi_square(penguins, "sex", "species")[0]]
+    source = tmp_path / "records.json"
+    source.write_text(dump_records(records), encoding="utf-8")
+    for name, extra in (("out.docx", ["--out"]), ("out.md", ["--to", "md", "--out"]), ("out.tex", ["--to", "tex", "--out"])):
+        assert main(["render", "--style", "ama11", "--form", "sentence", *extra, str(tmp_path / name), str(source)]) == 0
+        entries = audit_file(tmp_path / name, "ama11")
+        heads = [e for e in entries if e.found[:1] in "tFχ"]
+        assert len(heads) == 4, (name, [e.found for e in entries])
+        assert all(e.checked and e.codes == [] for e in heads), (name, [(e.found, e.codes, e.checked) for e in heads])
+        assert "₂" in heads[-1].found  # χ²₂: the df kept as they print
+
+    d = docx.Document()
+    p = d.add_paragraph("Night drivers slept less, ")
+    p.add_run("t").italic = True
+    p.add_run("38").font.subscript = True
+    p.add_run(" = 2.14, ")
+    p.add_run("P").italic = True
+    p.add_run(" = .004.")
+    M = "http://schemas.openxmlformats.org/officeDocument/2006/math"
+
+    def el(name, *kids, text=None):
+        e = etree.Element(f"{{{M}}}{name}")
+        e.extend(kids)
+        e.text = text
+        return e
+
+    q = d.add_paragraph("Shifts differed, ")
+    q._p.append(el("oMath", el("sSub", el("e", el("r", el("t", text="F"))), el("sub", el("r", el("t", text="2,97")))), el("r", el("t", text="=4.51"))))
+    q.add_run(", P = .01.")
+    d.save(str(tmp_path / "typed.docx"))
+    found = audit_file(tmp_path / "typed.docx", "ama11")
+    assert [e.found for e in found] == ["t₃₈ = 2.14, P = .004", "F₂,₉₇=4.51, P = .01"]
+    assert "p-does-not-follow" in found[0].codes and "p-does-not-follow" not in found[1].codes  # F(2, 97) = 4.51: p = .013

@@ -81,6 +81,10 @@ _TEX_ITALIC = re.compile(r"\\textit\{([^{}]{1,40})\}|\\emph\{([^{}]{1,40})\}|\$(
 
 
 _SUPERSCRIPT = str.maketrans("0123456789+-−", "⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻⁻")
+# digits set as subscripts (a Word run or equation's, Markdown's ~38~, LaTeX's \textsubscript{38}) read as the subscript
+# digits they print as, one character each: "t₃₈", the df as AMA 11 sets them, which the parser reads (as plain digits,
+# "t38", they had been no statistic: a manuscript in AMA style, statsetter's own among them, lost its t and χ² tests)
+_SUBSCRIPT = str.maketrans("0123456789", "₀₁₂₃₄₅₆₇₈₉")
 
 # LaTeX back to the characters it prints (the inverse of the LaTeX writer's escapes)
 _TEX_GREEK = {f"\\{up}{name}": char for name, char in (
@@ -163,7 +167,7 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     # after the emphasis, so that *r*~s~ and \textit{r}\textsubscript{s} read rs (spans are not used for text files)
     sup_pattern, sub_pattern = (_TEX_SUP, _TEX_SUB) if tex else (_PANDOC_SUP, _PANDOC_SUB)
     clean, sup = _replace(sup_pattern, clean, lambda g: g.translate(_SUPERSCRIPT))
-    clean, sub = _replace(sub_pattern, clean, lambda g: g)
+    clean, sub = _replace(sub_pattern, clean, lambda g: g.translate(_SUBSCRIPT))
     traces += [sup, sub]
     if tex:  # \textminus{}, \%, \textless{} … as the characters they print; a decimal-aligned cell's
         # \rlap{.14}\phantom{.001} (statsetter's tables) as the digits it prints once
@@ -238,11 +242,11 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
 
 
 _VAL = f"{_W}val"
-_R, _T, _DEL, _I, _RPR = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}rPr"
+_R, _T, _DEL, _I, _RPR, _VERT = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}rPr", f"{_W}vertAlign"
 _CHUNKS = {f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
 _M = "{http://schemas.openxmlformats.org/officeDocument/2006/math}"
 OMATH = f"{_M}oMath"  # an equation (Office Math), inline or in an equation paragraph (m:oMathPara holds them)
-_M_R, _M_T, _M_D, _M_E, _M_VAL = f"{_M}r", f"{_M}t", f"{_M}d", f"{_M}e", f"{_M}val"
+_M_R, _M_T, _M_D, _M_E, _M_SUB, _M_VAL = f"{_M}r", f"{_M}t", f"{_M}d", f"{_M}e", f"{_M}sub", f"{_M}val"
 _M_PLAIN = {"p", "b"}  # m:sty: plain (upright) and bold; the others (none, i, bi) are italic, as Word sets math
 
 
@@ -270,7 +274,9 @@ def math_text(node) -> list[tuple[str, bool]]:  # type: ignore[no-untyped-def]
                     out.append((char("sepChr", "|"), False))
                 out += math_text(part)
             out.append((char("endChr", ")"), False))
-        elif isinstance(tag, str) and tag.startswith(_M) and not tag.endswith("Pr"):  # sSup, sSub, e, sup, sub, f, num, … (not a comment)
+        elif tag == _M_SUB:  # a subscript's digits as the subscript digits they print as
+            out += [(text.translate(_SUBSCRIPT), italic) for text, italic in math_text(child)]
+        elif isinstance(tag, str) and tag.startswith(_M) and not tag.endswith("Pr"):  # sSup, sSub, e, sup, f, num, … (not a comment)
             out += math_text(child)
     return out
 
@@ -284,14 +290,14 @@ def _slanted(spans: list[tuple[int, int]], start: int, end: int) -> None:
 
 
 def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
-    """A paragraph's text (deleted runs left out), the spans of its italic runs and of its equations, in one walk over
-    its runs and their text."""
+    """A paragraph's text (deleted runs left out; a subscript run's digits as subscript digits), the spans of its italic
+    runs and of its equations, in one walk over its runs and their text."""
     pieces: list[str] = []
     spans: list[tuple[int, int]] = []
     math: list[tuple[int, int]] = []
     length = 0
-    italic, skip, run = False, True, None  # text outside a run is not read
-    for node in para.iter(_R, _T, _I, OMATH, *_CHUNKS):
+    italic, lowered, skip, run = False, False, True, None  # text outside a run is not read
+    for node in para.iter(_R, _T, _I, _VERT, OMATH, *_CHUNKS):
         tag = node.tag
         if tag == OMATH:  # an equation: its text as it reads (its own runs are not w:r, w:t)
             skip = True
@@ -305,18 +311,23 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
             continue
         if tag == _R:
             parent = node.getparent()
-            run, skip, italic = node, parent is not None and parent.tag == _DEL, False
+            run, skip, italic, lowered = node, parent is not None and parent.tag == _DEL, False, False
             continue
-        if tag == _I:  # italic when it sits in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
+        if tag == _I or tag == _VERT:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
             props = node.getparent()
             if props is not None and props.tag == _RPR and props.getparent() is run:
-                italic = node.get(_VAL, "true") not in ("0", "false", "off")
+                if tag == _I:
+                    italic = node.get(_VAL, "true") not in ("0", "false", "off")
+                else:
+                    lowered = node.get(_VAL) == "subscript"
             continue
         if skip:
             continue
         chunk = (node.text or "") if tag == _T else _CHUNKS[tag]
         if not chunk:
             continue
+        if lowered:
+            chunk = chunk.translate(_SUBSCRIPT)
         if italic:
             _slanted(spans, length, length + len(chunk))
         pieces.append(chunk)
