@@ -12,7 +12,7 @@ from __future__ import annotations
 
 import re
 import zipfile
-from bisect import bisect_right
+from bisect import bisect_left, bisect_right
 from dataclasses import dataclass
 from pathlib import Path
 from typing import Callable, Iterator
@@ -178,16 +178,192 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
 
 
 def _text_units(text: str, suffix: str) -> Iterator[Unit]:
-    line = 1
+    line, tables = 1, 0
     for block in re.split(r"(\n[ \t]*\n)", text):
         if block.startswith("\n") and not block.strip():
             line += block.count("\n")
             continue
         if block.strip():
             block = block.rstrip()
-            clean, _, origin = _strip_marks(block, suffix) if suffix != ".txt" else (block, (), ())
-            yield Unit(f"line {line}", clean, None, "", line, origin)  # italics are checked in .docx only
+            rows = block.split("\n")
+            if suffix in (".md", ".markdown") and len(rows) >= 2 and _PIPE_RULE.fullmatch(rows[1]) and all("|" in r for r in rows):
+                tables += 1
+                yield from _pipe_table_units(rows, line, tables)
+            elif suffix == ".tex" and _TABULAR.search(block):
+                for unit in _tex_table_units(block, line, tables + 1):
+                    tables = unit.cell[0] if unit.cell is not None else tables
+                    yield unit
+            else:
+                clean, _, origin = _strip_marks(block, suffix) if suffix != ".txt" else (block, (), ())
+                yield Unit(f"line {line}", clean, None, "", line, origin)  # italics are checked in .docx only
         line += block.count("\n")
+
+
+# a LaTeX table's body: tabular (and its starred, tabularx and longtable kinds) with the groups after its name (tabularx's
+# width, the column spec); inside a cell, a nested tabular (a header cell of two lines) and a row's rules
+_TABULAR = re.compile(r"\\begin\{(tabularx|tabular\*|tabular|longtable|array)\}")
+_TEX_RULES = re.compile(r"\s*(?:\\(?:toprule|midrule|bottomrule|hline|endhead|endfirsthead|endfoot|endlastfoot)\b"
+                        r"|\\(?:cline|cmidrule)(?:\([^)]*\))?\{[^{}]*\}|\\addlinespace(?:\[[^\]]*\])?)")
+_TEX_CELL = re.compile(r"\\multicolumn\{\d+\}\{(?:[^{}]|\{[^{}]*\})*\}(?=\{)|\\begin\{tabular\}(?:\[[^\]]*\])?\{(?:[^{}]|\{(?:[^{}]|\{[^{}]*\})*\})*\}"
+                       r"|\\end\{tabular\}|\\\\")
+
+
+def _cell_text(raw: str) -> tuple[str, "Trace | None"]:
+    """A LaTeX cell's text without what sets it out: a \\multicolumn's content kept (its braces dropped), a nested
+    tabular's begin and end and its line breaks dropped; traced."""
+    out, at = _Builder(), 0
+    m = _TEX_CELL.search(raw)
+    while m is not None:
+        out.add(raw[at : m.start()], at)
+        at = m.end()
+        if m.group().startswith("\\multicolumn"):
+            close = _skip_group(raw, at)  # the content's group: kept, its braces not
+            out.add(raw[at + 1 : close - 1], at + 1)
+            at = close
+        m = _TEX_CELL.search(raw, at)
+    out.add(raw[at:], at)
+    return out.text(), out.trace()
+
+
+def _skip_group(text: str, i: int, limit: int = 4096) -> int:
+    """The position after the brace group (or the [option]) starting at ``text[i]`` (white space before it skipped),
+    looked for within ``limit`` characters (a column spec or a cell is short; an unclosed one is not read as one)."""
+    while i < len(text) and text[i].isspace():
+        i += 1
+    stop = min(len(text), i + limit)
+    if i < stop and text[i] == "[":
+        end = text.find("]", i, stop)
+        return stop if end < 0 else end + 1
+    depth = 0
+    for m in _BRACE.finditer(text, i, stop):
+        depth += 1 if m.group() == "{" else -1 if m.group() == "}" else 0
+        if depth == 0:
+            return m.end()
+    return stop
+
+
+_BRACE = re.compile(r"\\.|[{}]", re.S)  # an escaped character (\{ is text) or a brace
+_TABULAR_TOKEN = re.compile(r"\\\\|\\begin\{|\\end\{|\\.|[{}&]", re.S)
+
+
+def _tex_cells(body: str) -> list[list[tuple[int, int]]]:
+    """The (start, end) of each cell of each row of a tabular's body: a row ends at \\\\ and a cell at &, both only outside
+    braces and nested environments (a header cell's own tabular); an escaped \\& is text."""
+    rows: list[list[tuple[int, int]]] = []
+    cells: list[tuple[int, int]] = []
+    depth = env = start = 0
+    skip_to = 0
+    for m in _TABULAR_TOKEN.finditer(body):
+        if m.start() < skip_to:
+            continue
+        token = m.group()
+        if token == "\\\\" and depth == 0 and env == 0:
+            cells.append((start, m.start()))
+            rows.append(cells)
+            cells, start = [], m.end()
+            if body.startswith("[", start):  # \\[2pt]
+                start = skip_to = _skip_group(body, start)
+        elif token == "\\begin{":
+            env += 1
+            depth += 1
+        elif token == "\\end{":
+            env -= 1
+            depth += 1
+        elif token == "{":
+            depth += 1
+        elif token == "}":
+            depth -= 1
+        elif token == "&" and depth == 0 and env == 0:
+            cells.append((start, m.start()))
+            start = m.end()
+    if body[start:].strip():
+        cells.append((start, len(body)))
+    if cells:
+        rows.append(cells)
+    return rows
+
+
+def _tex_table_units(block: str, line: int, table: int) -> Iterator[Unit]:
+    """A LaTeX block with tables: its text around them as units, each tabular's cells as a table's units (as
+    ``_pipe_table_units`` makes them), the rules left out. Each cell's text maps back to its place in its line."""
+    at = 0
+    breaks = [m.start() for m in re.finditer("\n", block)]  # where each line ends: a cell's line and column by bisection
+    for begin in _TABULAR.finditer(block):
+        if begin.start() < at:  # a tabular nested in a cell of the one before
+            continue
+        body_start = begin.end()
+        for _ in range(2 if begin.group(1) in ("tabularx", "tabular*") else 1):
+            body_start = _skip_group(block, body_start)
+        end = block.find(f"\\end{{{begin.group(1)}}}", body_start)
+        end = len(block) if end < 0 else end
+        yield from _tex_piece(block, at, begin.start(), line)
+        r = 0
+        for cells in _tex_cells(block[body_start:end]):
+            texts = []
+            for a, b in cells:
+                a += body_start
+                b += body_start
+                rule = _TEX_RULES.match(block, a, b)
+                while rule is not None and rule.end() > a:
+                    a = rule.end()
+                    rule = _TEX_RULES.match(block, a, b)
+                raw = block[a:b]
+                a += len(raw) - len(raw.lstrip())
+                texts.append((a, raw.strip()))
+            if not any(t for _, t in texts):
+                continue
+            r += 1
+            for c, (a, raw) in enumerate(texts, 1):
+                if not raw:
+                    continue
+                unwrapped, outer = _cell_text(raw)
+                clean, _, origin = _strip_marks(unwrapped, ".tex")
+                if not clean.strip():
+                    continue
+                k = bisect_left(breaks, a)  # the newlines before the cell
+                row_start = breaks[k - 1] + 1 if k else 0
+                where = line + k
+                traces = (((0,), (a - row_start,)),) + ((outer,) if outer is not None else ()) + origin
+                yield Unit(f"line {where}", clean, None, "", where, traces, cell=(table, r, c))
+        table += 1
+        at = block.find("\n", end) + 1 if block.find("\n", end) >= 0 else len(block)
+    yield from _tex_piece(block, at, len(block), line)
+
+
+def _tex_piece(block: str, start: int, end: int, line: int) -> Iterator[Unit]:
+    """The text of block[start:end] (whole lines around a table) as one unit, if it holds any."""
+    start = block.rfind("\n", 0, start) + 1 if start else 0
+    piece = block[start:end]
+    if piece.strip():
+        clean, _, origin = _strip_marks(piece, ".tex")
+        where = line + block.count("\n", 0, start)
+        yield Unit(f"line {where}", clean, None, "", where, origin)
+
+
+# a pipe table (Markdown as pandoc reads it): a header row, then a rule of dashes (colons for alignment), then rows
+_PIPE_RULE = re.compile(r"[ \t]*\|?[ \t]*:?-+:?[ \t]*(?:\|[ \t]*:?-+:?[ \t]*)*\|?[ \t]*")
+_PIPE = re.compile(r"(?<!\\)\|")  # a cell's border (an escaped \| is text)
+
+
+def _pipe_table_units(rows: list[str], line: int, table: int) -> Iterator[Unit]:
+    """A pipe table's cells, each a unit with its (table, row, column) as a Word table's cell has them (the rule left
+    out of the count), read as a paragraph is: a statistic and the p in a later column of its row are one statistic,
+    a value under a head named t or F with its df and p columns is one (tables.table_statistics). Each cell's text
+    maps back to its place in its line (``origin``: the cell's start first)."""
+    for k, row in enumerate(rows):
+        if k == 1:
+            continue
+        edges = [m.start() for m in _PIPE.finditer(row)]
+        stripped = row.lstrip()
+        bounds = ([-1] if not stripped.startswith("|") else []) + edges + ([len(row)] if not row.rstrip().endswith("|") or not edges else [])
+        for c, (a, b) in enumerate(zip(bounds, bounds[1:]), 1):
+            raw = row[a + 1 : b]
+            if not raw.strip():
+                continue
+            start = a + 1 + len(raw) - len(raw.lstrip())
+            raw = raw.strip()
+            clean, _, origin = _strip_marks(raw, ".md")
+            yield Unit(f"line {line + k}", clean, None, "", line + k, (((0,), (start,)), *origin), cell=(table, k if k else 1, c))
 
 
 def _docx_units(p: Path) -> Iterator[Unit]:

@@ -224,9 +224,9 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
         found, used = table_statistics(cells, caption, mark)
-        taken = {id(t.local) for t in found if t.local is not None}
+        read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient) for t in found]
-        items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in used | taken]
+        items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
 
@@ -346,6 +346,7 @@ def _audit_units(
             where = unit.location if unit.part else f"line {unit.index + unit.text.count(chr(10), 0, long.start())}"
             warnings.warn(f"{where}: a number of {len(long.group()):,} digits is not read as a statistic", stacklevel=2)
     current: Unit | None = None
+    named_in: "tuple[str | None, re.Match[str] | None]" = (None, None)  # the procedure a context names, for the last context asked
     for item in _items(units, mark):
         unit, rep, local = item.unit, item.rep, item.local
         if unit is not current:
@@ -385,12 +386,15 @@ def _audit_units(
                 counted = rep.start
             line = unit.index + lines
             line_start = unit.source_index(newline) + 1 if newline >= 0 else 0
-            first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else 0  # opening markers included
+            # opening markers included (a pipe table's cell starts where its origin's first trace puts it)
+            first = unit.source_index(rep.start - 1) + 1 if rep.start > 0 else unit.origin[0][1][0] if unit.cell is not None else 0
             last = unit.source_index(rep.end - 1) + 1
             location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
         notes: list[str] = [f"Read from a table: {item.how.removeprefix('read from the table' + chr(39) + 's row: ')}."] if item.how else []
         if any(f.code == "p-does-not-follow" for f in findings) and _above_unadjusted(rep, alpha):
-            named = _PROCEDURE.search(item.context)
+            if item.context is not named_in[0]:  # a table's items share their context: searched once, not once an item
+                named_in = (item.context, _PROCEDURE.search(item.context))
+            named = named_in[1]
             if named is not None:  # the text says its p values are adjusted: a note, not a finding
                 findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
                 notes.append(f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
