@@ -68,6 +68,33 @@ def test_an_anova_table_takes_the_error_rows_df(tmp_path):
     assert "error row" in e.notes[0]
 
 
+def test_a_mixed_anova_table_takes_each_effects_own_error_row(tmp_path):
+    """A mixed design's table has an error row per stratum, after its effects ("Error (between subjects)", "Error
+    (within subjects)", SPSS's "Error(Time)"): each F takes the df of the first error row below it (the table had
+    read none of them, a name with its stratum being no error row, and had left every F without its second df). The
+    numbers: pingouin's mixed_anova of its bundled mixed_anova data (Scores by Group between and Time within, 60
+    subjects), printed to two decimals; the p values scipy's from those df; one retyped wrong."""
+    import pingouin as pg
+
+    data = pg.read_dataset("mixed_anova")
+    a = pg.mixed_anova(data, dv="Scores", between="Group", within="Time", subject="Subject", correction=False).set_index("Source")
+
+    def row(name, wrong=False):
+        f, df1, df2 = a.loc[name, "F"], int(a.loc[name, "DF1"]), int(a.loc[name, "DF2"])
+        p = stats.f.sf(round(f, 2), df1, df2)
+        return (name, f"{a.loc[name, 'SS']:.2f}", str(df1), f"{a.loc[name, 'MS']:.2f}", f"{f:.2f}", f"{p / 3 if wrong else p:.3f}"), (df1, df2)
+
+    group, time, both = row("Group"), row("Time"), row("Interaction", wrong=True)
+    for between, within in (("Error (between subjects)", "Error (within subjects)"), ("Error(Group)", "Error(Time)")):
+        rows = [("Source", "SS", "df", "MS", "F", "p"), group[0], (between, "62.70", str(group[1][1]), "1.08", "", ""),
+                time[0], both[0], (within, "109.86", str(time[1][1]), "0.95", "", "")]
+        entries = [e for e in audit_file(_doc(tmp_path / "m.docx", tables=[("Table 4 Scores by group and time", rows)]))
+                   if e.found.startswith("F")]
+        assert [e.found.split(" =")[0] for e in entries] == ["F(1, 58)", "F(2, 116)", "F(2, 116)"], between
+        assert [bool(_p_findings(e)) for e in entries] == [False, False, True] and "p-does-not-follow" in entries[2].codes, [e.codes for e in entries]
+        assert all("error row" in e.notes[0] for e in entries)
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

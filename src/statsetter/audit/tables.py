@@ -13,6 +13,8 @@ makes, so that a finding is reported only when no reading fits.
 
 from __future__ import annotations
 
+import bisect
+import math
 import re
 from dataclasses import dataclass, replace
 from typing import Sequence
@@ -63,7 +65,9 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
     read = _patterns(mark).to_number
     found = tuple(read(m.group(g), m.start(g)) for g in ("est", "lo", "hi"))
     return found if all(n is not None for n in found) else None  # type: ignore[return-value]
-_ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)\s*")
+# an error term's row: "Residuals", "Error", "Within groups", and an error named for its stratum as mixed and
+# repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
+_ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
 _BARE = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?:[*†‡§]+|[a-d])?\s*")
 _NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
 _SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
@@ -161,15 +165,23 @@ def _p_cell(text: str, mark: str) -> PValue | None:
     return PValue(op, num, num.start, num.end, num.start, "")
 
 
-def _error_df(rows, roles: dict[int, str], mark: str) -> float | None:  # type: ignore[no-untyped-def]
-    """The df in the df column of the table's Residuals (Error, Within) row."""
+def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, float | None]]:  # type: ignore[no-untyped-def]
+    """(row, df) of each Residuals (Error, Within) row of the table, the df from its df column, in order."""
     column = next((k for k, v in roles.items() if v == "df"), None)
-    for row in rows.values():
-        first = row[min(row)][0].text
-        if column in row and _ERROR_ROW.fullmatch(first):
+    out = []
+    for r in sorted(rows):
+        row = rows[r]
+        if column in row and _ERROR_ROW.fullmatch(row[min(row)][0].text):
             found = _number(row[column][0].text, mark)
-            return found[1].value if found is not None else None
-    return None
+            out.append((r, found[1].value if found is not None else None))
+    return out
+
+
+def _error_df(errors: list[tuple[int, float | None]], r: int) -> float | None:
+    """The df of the error term of the effect in row ``r``: the first error row below it (an effect's error follows
+    its effects: "Error (between subjects)" after the between-subjects effects, R's Residuals last), else the last above."""
+    k = bisect.bisect_right(errors, (r, math.inf))
+    return errors[k][1] if k < len(errors) else errors[-1][1] if errors else None
 
 
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
@@ -200,7 +212,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     groups, total = caption_sizes(caption)
     found: list[TableStatistic] = []
     used: set[int] = set()
-    error_dfs: dict[int, float | None] = {}
+    error_dfs: dict[int, list[tuple[int, float | None]]] = {}
     for r in sorted(rows):
         row = rows[r]
         header = {c: _role(u.text) for c, (u, _) in row.items()}
@@ -255,8 +267,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 df = (numbers[k1][1], numbers[k2][1])  # type: ignore[index]
                 how += ", the df(num) and df(den) columns"
             if role == "F" and len(df) == 1 and id(roles) not in error_dfs:  # once per header, not once per row
-                error_dfs[id(roles)] = _error_df(rows, roles, mark)
-            error_df = error_dfs.get(id(roles)) if role == "F" and len(df) == 1 else None
+                error_dfs[id(roles)] = _error_dfs(rows, roles, mark)
+            error_df = _error_df(error_dfs[id(roles)], r) if role == "F" and len(df) == 1 else None
             if error_df is not None:
                 df = (df[0], Number(f"{error_df:g}", error_df, 0, 0, 0))
                 how += ", the error row's df"
