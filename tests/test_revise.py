@@ -419,3 +419,17 @@ def test_df_set_as_subscripts_are_read_in_word_markdown_and_latex(tmp_path):
     found = audit_file(tmp_path / "typed.docx", "ama11")
     assert [e.found for e in found] == ["t₃₈ = 2.14, P = .004", "F₂,₉₇=4.51, P = .01"]
     assert "p-does-not-follow" in found[0].codes and "p-does-not-follow" not in found[1].codes  # F(2, 97) = 4.51: p = .013
+
+
+def test_long_subscript_df_are_read_in_markdown_and_latex(tmp_path):
+    """A corrected F's df set as subscripts run to ten characters and more ("1.67,65.31", as statsetter's AMA 11 writes
+    a Huynh–Feldt-corrected repeated-measures F): Markdown's ~…~ and LaTeX's \\textsubscript{…} were read only up to
+    eight, and such an F was no statistic. The p is scipy's for F(1.67, 65.31) = 3.67."""
+    from scipy import stats
+
+    p = f"{stats.f.sf(3.67, 1.67, 65.31):.2f}".lstrip("0")
+    (tmp_path / "f.md").write_text(f"The means differed, *F*~1.67,65.31~ = 3.67, *P* = {p}.\n", encoding="utf-8")
+    (tmp_path / "f.tex").write_text(f"The means differed, \\textit{{F}}\\textsubscript{{1.67,65.31}}~=~3.67, \\textit{{P}}~=~{p}.\n", encoding="utf-8")
+    for name in ("f.md", "f.tex"):
+        (e,) = audit_file(tmp_path / name, "ama11")
+        assert e.found.startswith("F₁.₆₇,₆₅.₃₁") and "F(1.67, 65.31)" in e.checked and e.codes == [], (name, e.found, e.codes)

@@ -96,10 +96,10 @@ _TEX_CHARS = {"\\textminus{}": "−", "\\textless{}": "<", "\\textgreater{}": ">
               "\\$": "$", "---": "—", "--": "–", "~": "\u00a0", "\\,": "\u202f"}  # ~ and \, print no-break spaces
 _TEX_CHAR = re.compile("(" + "|".join(re.escape(k) for k in sorted(_TEX_CHARS, key=len, reverse=True)) + ")")
 _TEX_BOX = re.compile(r"\\rlap\{([^{}]{0,40})\}(?:\\phantom\{[^{}]{0,40}\})?")
-_TEX_SUP = re.compile(r"\\textsuperscript\{([^{}]{1,8})\}")
-_TEX_SUB = re.compile(r"\\textsubscript\{([^{}]{1,8})\}")
-_PANDOC_SUP = re.compile(r"\^([^\^\s]{1,8})\^")
-_PANDOC_SUB = re.compile(r"~([^~\s]{1,8})~")
+_TEX_SUP = re.compile(r"\\textsuperscript\{([^{}]{1,24})\}")
+_TEX_SUB = re.compile(r"\\textsubscript\{([^{}]{1,24})\}")
+_PANDOC_SUP = re.compile(r"\^([^\^\s]{1,24})\^")
+_PANDOC_SUB = re.compile(r"~([^~\s]{1,24})~")  # (long enough for a corrected F's df: 1.67,65.31)
 
 
 class _Builder:
