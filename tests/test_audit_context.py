@@ -95,6 +95,31 @@ def test_a_mixed_anova_table_takes_each_effects_own_error_row(tmp_path):
         assert all("error row" in e.notes[0] for e in entries)
 
 
+def test_a_coefficients_table_checks_t_against_b_and_se_and_takes_no_two_group_df(tmp_path):
+    """A model's coefficients table (B, SE, t, p without a df column): each t is checked against B / SE of its row,
+    as a sentence's is, and is not given the df of a two-group t from an N near the table (N − 2: a regression's
+    residual df are N minus its coefficients; the Markdown and LaTeX copies of statsetter's own regression table had
+    been recomputed on N − 2 where the N stood close enough, the Word copy not). statsmodels' OLS of its bundled Longley
+    data (16 years, six predictors: 9 residual df), printed as APA's table prints it; one t retyped."""
+    import statsmodels.api as sm
+
+    d = sm.datasets.longley.load_pandas()
+    fit = sm.OLS(d.endog, sm.add_constant(d.exog)).fit()
+    rows = [("Predictor", "B", "SE", "t", "p")]
+    for name in fit.params.index:
+        t = round(fit.tvalues[name], 2)
+        rows.append((name, f"{fit.params[name]:.3f}", f"{fit.bse[name]:.3f}", f"{t:.2f}", f"{2 * stats.t.sf(abs(t), fit.df_resid):.3f}"))
+    retyped = [r if r[0] != "UNEMP" else (r[0], r[1], r[2], "-2.14", r[4]) for r in rows]
+    for table, wrong in ((rows, set()), (retyped, {"UNEMP"})):
+        path = _doc(tmp_path / "coef.docx", paragraphs=["Employment was modelled on six predictors (N = 16)."],
+                    tables=[("Table 5 Coefficients of the model", table)])
+        entries = [e for e in audit_file(path) if e.found.startswith("t")]
+        assert len(entries) == 7
+        assert all("B and SE columns" in e.notes[0] and "two independent groups" not in e.checked for e in entries)
+        flagged = {table[k + 1][0] for k, e in enumerate(entries) if "coefficient-does-not-fit" in e.codes}
+        assert flagged == wrong, [(e.found, e.codes) for e in entries]
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

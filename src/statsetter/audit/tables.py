@@ -222,6 +222,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
             # a header row (also one partway down the table): heads and no number (a row of a predictor named "X2" is data)
             roles = {c: role for c, role in header.items() if role is not None}
+        coefficients = "B" in roles.values() or "SE" in roles.values()  # a model's coefficients table
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES) and not any(ratios.values()):
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
@@ -274,7 +275,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 how += ", the error row's df"
             if p is not None:
                 how += ", the p column"
-            coefficient, effects = _coefficient_cells(row, roles, numbers) if role == "wald" else (None, [])
+            coefficient, effects = _coefficient_cells(row, roles, numbers) if role in ("wald", "t", "z") else (None, [])
+            effects = effects if role == "wald" else []  # (a linear model's row has no odds ratio)
             if coefficient is not None:
                 how += ", the B and SE columns" + (", the Exp(B) column" if effects else "")
             symbol = "chi2" if role == "wald" else role
@@ -284,6 +286,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             rep.text = f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
             if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
                 readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
+            elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
+                readings = ()
             else:
                 readings = tuple(df_readings(role, groups, total, "in the table"))
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
