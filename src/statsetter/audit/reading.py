@@ -85,6 +85,9 @@ _SUPERSCRIPT = str.maketrans("0123456789+-−", "⁰¹²³⁴⁵⁶⁷⁸⁹⁺�
 # digits they print as, one character each: "t₃₈", the df as AMA 11 sets them, which the parser reads (as plain digits,
 # "t38", they had been no statistic: a manuscript in AMA style, statsetter's own among them, lost its t and χ² tests)
 _SUBSCRIPT = str.maketrans("0123456789", "₀₁₂₃₄₅₆₇₈₉")
+# a Word run set as a subscript or superscript: its digits (a superscript's signs too) as the characters it prints as —
+# "χ²" as Markdown's χ^2^ reads, and a citation's superscript number no longer run on into a p ("p = .03" and ⁴, not .034)
+_SCRIPTS = {"subscript": _SUBSCRIPT, "superscript": _SUPERSCRIPT}
 
 # LaTeX back to the characters it prints (the inverse of the LaTeX writer's escapes)
 _TEX_GREEK = {f"\\{up}{name}": char for name, char in (
@@ -422,7 +425,7 @@ _R, _T, _DEL, _I, _RPR, _VERT = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}
 _CHUNKS = {f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
 _M = "{http://schemas.openxmlformats.org/officeDocument/2006/math}"
 OMATH = f"{_M}oMath"  # an equation (Office Math), inline or in an equation paragraph (m:oMathPara holds them)
-_M_R, _M_T, _M_D, _M_E, _M_SUB, _M_VAL = f"{_M}r", f"{_M}t", f"{_M}d", f"{_M}e", f"{_M}sub", f"{_M}val"
+_M_R, _M_T, _M_D, _M_E, _M_SUB, _M_SUP, _M_VAL = f"{_M}r", f"{_M}t", f"{_M}d", f"{_M}e", f"{_M}sub", f"{_M}sup", f"{_M}val"
 _M_PLAIN = {"p", "b"}  # m:sty: plain (upright) and bold; the others (none, i, bi) are italic, as Word sets math
 
 
@@ -450,8 +453,8 @@ def math_text(node) -> list[tuple[str, bool]]:  # type: ignore[no-untyped-def]
                     out.append((char("sepChr", "|"), False))
                 out += math_text(part)
             out.append((char("endChr", ")"), False))
-        elif tag == _M_SUB:  # a subscript's digits as the subscript digits they print as
-            out += [(text.translate(_SUBSCRIPT), italic) for text, italic in math_text(child)]
+        elif tag == _M_SUB or tag == _M_SUP:  # a script's digits as the characters they print as
+            out += [(text.translate(_SUBSCRIPT if tag == _M_SUB else _SUPERSCRIPT), italic) for text, italic in math_text(child)]
         elif isinstance(tag, str) and tag.startswith(_M) and not tag.endswith("Pr"):  # sSup, sSub, e, sup, f, num, … (not a comment)
             out += math_text(child)
     return out
@@ -472,7 +475,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
     spans: list[tuple[int, int]] = []
     math: list[tuple[int, int]] = []
     length = 0
-    italic, lowered, skip, run = False, False, True, None  # text outside a run is not read
+    italic, lowered, skip, run = False, None, True, None  # text outside a run is not read; lowered: a script's characters
     for node in para.iter(_R, _T, _I, _VERT, OMATH, *_CHUNKS):
         tag = node.tag
         if tag == OMATH:  # an equation: its text as it reads (its own runs are not w:r, w:t)
@@ -487,7 +490,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
             continue
         if tag == _R:
             parent = node.getparent()
-            run, skip, italic, lowered = node, parent is not None and parent.tag == _DEL, False, False
+            run, skip, italic, lowered = node, parent is not None and parent.tag == _DEL, False, None
             continue
         if tag == _I or tag == _VERT:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
             props = node.getparent()
@@ -495,7 +498,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
                 if tag == _I:
                     italic = node.get(_VAL, "true") not in ("0", "false", "off")
                 else:
-                    lowered = node.get(_VAL) == "subscript"
+                    lowered = _SCRIPTS.get(node.get(_VAL, ""))
             continue
         if skip:
             continue
@@ -503,7 +506,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
         if not chunk:
             continue
         if lowered:
-            chunk = chunk.translate(_SUBSCRIPT)
+            chunk = chunk.translate(lowered)
         if italic:
             _slanted(spans, length, length + len(chunk))
         pieces.append(chunk)

@@ -169,7 +169,7 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     old = rep.text
     if not plain.strip():  # a lone "n.s." or the like: nothing the style writes in its place
         return None, ""
-    if plain == old and not any(f.code == "italics" for f in findings) and not _italics_differ(rep, new, italic):
+    if _as_read(plain) == _as_read(old) and not any(f.code == "italics" for f in findings) and not _italics_differ(rep, new, italic):
         return None, ""
     lost = _lost_word(rep, old, plain)
     if lost:
@@ -177,6 +177,17 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     doubted = any(f.code in _P_DOUBTS for f in findings)
     why = _numbers_kept(rep, old, new, read_mark or style.decimal_mark, doubted, style.decimal_mark)
     return (None, why) if why else (new, "")
+
+
+# a letter set as a script: the reader sees a Word run's digits as scripts, not its letters (η² and a subscript p read
+# "η²p"), so a letter's script is not a difference it can see
+_LETTER_SCRIPTS = str.maketrans("ₐₑₕᵢⱼₖₗₘₙₒₚᵣₛₜᵤᵥₓ", "aehijklmnoprstuvx")
+
+
+def _as_read(text: str) -> str:
+    """``text`` as the audit can compare a statistic's restyled text with the typed one: a no-break space as a space
+    (plain() has none: it is the style's choice of space, not a change), a script letter as its letter."""
+    return text.replace("\u00a0", " ").translate(_LETTER_SCRIPTS)
 
 
 def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, int]] | None) -> bool:
