@@ -407,3 +407,27 @@ def test_a_long_table_is_read_in_linear_work(tmp_path, monkeypatch):
             assert len(entries) in (300, 1200) and all("p-does-not-follow" in e.codes for e in entries), path
             work.append(tally[0])
         assert work[1] <= 4.5 * work[0], (small.suffix, work)
+
+
+_TABLE_TOKENS = st.sampled_from([
+    "|", " | ", "|---|", ":--:", "---", "\\|", "&", " & ", "\\&", "\\\\", "\\\\[2pt]", "{", "}", "\\begin{tabular}{ll}", "\\end{tabular}",
+    "\\begin{tabularx}{\\linewidth}{lX}", "\\end{tabularx}", "\\multicolumn{2}{c}{", "\\midrule", "\\toprule", "%", "\\%", "~", "^2^", "~38~",
+    "\\textsubscript{38}", "\\textit{t}", "*t*", "\n", "\n\n", " ", "t(38) = 2.14", "p = .04", ".044", "2.10", "F", "df", "χ²", "Error (within)",
+])
+
+
+@settings(max_examples=3_000, deadline=None, database=None)
+@given(st.lists(_TABLE_TOKENS, max_size=40).map("".join), st.sampled_from([".md", ".tex"]))
+def test_tables_in_markdown_and_latex_never_fail_and_map_back_inside_the_text(text, suffix):
+    """Pipe tables and tabulars of any shape (unclosed, nested, empty cells, rules, comments): the reader never fails,
+    every unit's characters map back to places inside the text, and the audit of its units never fails."""
+    from statsetter.audit.reading import _text_units, _uncommented
+
+    source = _uncommented(text) if suffix == ".tex" else text
+    units = list(_text_units(source, suffix))
+    lines = source.split("\n")
+    for unit in units:
+        rest = "\n".join(lines[unit.index - 1:])  # a unit's places count from its first line's start (a cell's too)
+        assert all(0 <= unit.source_index(i) < len(rest) and (unit.text[i] == rest[unit.source_index(i)] or unit.text[i] != "\n")
+                   for i in range(len(unit.text))), (unit, rest)
+    audit_units(units)

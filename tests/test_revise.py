@@ -467,3 +467,18 @@ def test_a_manuscript_already_in_the_house_style_gets_no_tracked_change(tmp_path
     d.save(str(tmp_path / "cited.docx"))
     (e,) = audit_file(tmp_path / "cited.docx")
     assert e.found == "t(38) = 2.14, p = .039" and e.codes == []  # t(38) = 2.14: p = .039 (scipy); not ".0394"
+
+
+def test_latex_comments_are_not_read(tmp_path):
+    """A LaTeX comment is not printed, so a statistic in one is none (authors keep an earlier analysis's numbers in
+    comments: they had been audited as if printed, and flagged). The comment is blanked in place — a line that is all
+    comment does not end the paragraph, as it does not in LaTeX — and every place the audit gives stays the file's.
+    Numbers this test's own: t(38) = 2.14 gives p = .039, t(20) = 1.20 gives p = .242 (scipy)."""
+    source = tmp_path / "c.tex"
+    source.write_text("Night drivers slept less, $t$(38)~=~2.14,\n% t(38) = 2.41, p = .5 (before exclusions)\n"
+                      "$p$~=~.039, and 95\\% of them said so. % p = .5 was a typo\n\n"
+                      "\\begin{tabular}{lll}\n\\toprule\n% an old header\nMeasure & $t$ & $df$ & $p$ \\\\\n% \\midrule\n\\midrule\n"
+                      "Sleep & 1.20 & 20 & .242 \\\\ % checked twice\n% Old & 9.99 & 20 & .5 \\\\\n\\bottomrule\n\\end{tabular}\n", encoding="utf-8")
+    entries = audit_file(source)
+    assert [(e.location, e.codes) for e in entries] == [("line 1, characters 27–95", []), ("line 11, characters 9–12", [])]
+    assert entries[1].found == "t(20) = 1.20, p = .242" and "t(20) = 1.20" in entries[1].checked

@@ -73,7 +73,17 @@ def _read_units(path: "str | Path", encoding: str) -> list[Unit]:
         raise InputError(f"{p}: not {encoding} text (byte {exc.start}); give the file's encoding with --encoding") from None
     except LookupError:
         raise InputError(f"--encoding: unknown encoding {encoding!r}") from None
-    return list(_text_units(text, suffix))
+    return list(_text_units(_uncommented(text) if suffix == ".tex" else text, suffix))
+
+
+def _uncommented(tex: str) -> str:
+    """LaTeX without its comments, which are not printed: each blanked, character for character, so that every place
+    stays where it is (a line that is all comment by zero-width spaces: a line of spaces would end the paragraph)."""
+    return _TEX_COMMENT.sub(lambda m: ("\u200b" if m.group(1) is not None else " ") * len(m.group()), tex)
+
+
+_BLANK = " \t\n\r\u200b"  # white space and a comment's blanks
+_TEX_COMMENT = re.compile(r"(?m:^([ \t]*))?(?<!\\)%[^\n]*")  # from an unescaped % to the line's end (\% prints a percent sign)
 
 
 _MD_ITALIC = re.compile(r"(?<![*A-Za-z0-9])([*_])(?!\s)([^*_\n]{1,40}?)(?<!\s)\1(?![*A-Za-z0-9])")
@@ -205,7 +215,7 @@ def _text_units(text: str, suffix: str) -> Iterator[Unit]:
 # a LaTeX table's body: tabular (and its starred, tabularx and longtable kinds) with the groups after its name (tabularx's
 # width, the column spec); inside a cell, a nested tabular (a header cell of two lines) and a row's rules
 _TABULAR = re.compile(r"\\begin\{(tabularx|tabular\*|tabular|longtable|array)\}")
-_TEX_RULES = re.compile(r"\s*(?:\\(?:toprule|midrule|bottomrule|hline|endhead|endfirsthead|endfoot|endlastfoot)\b"
+_TEX_RULES = re.compile(r"[\s\u200b]*(?:\\(?:toprule|midrule|bottomrule|hline|endhead|endfirsthead|endfoot|endlastfoot)\b"
                         r"|\\(?:cline|cmidrule)(?:\([^)]*\))?\{[^{}]*\}|\\addlinespace(?:\[[^\]]*\])?)")
 _TEX_CELL = re.compile(r"\\multicolumn\{\d+\}\{(?:[^{}]|\{[^{}]*\})*\}(?=\{)|\\begin\{tabular\}(?:\[[^\]]*\])?\{(?:[^{}]|\{(?:[^{}]|\{[^{}]*\})*\})*\}"
                        r"|\\end\{tabular\}|\\\\")
@@ -311,8 +321,8 @@ def _tex_table_units(block: str, line: int, table: int) -> Iterator[Unit]:
                     a = rule.end()
                     rule = _TEX_RULES.match(block, a, b)
                 raw = block[a:b]
-                a += len(raw) - len(raw.lstrip())
-                texts.append((a, raw.strip()))
+                a += len(raw) - len(raw.lstrip(_BLANK))
+                texts.append((a, raw.strip(_BLANK)))
             if not any(t for _, t in texts):
                 continue
             r += 1
@@ -334,8 +344,7 @@ def _tex_table_units(block: str, line: int, table: int) -> Iterator[Unit]:
 
 
 def _tex_piece(block: str, start: int, end: int, line: int) -> Iterator[Unit]:
-    """The text of block[start:end] (whole lines around a table) as one unit, if it holds any."""
-    start = block.rfind("\n", 0, start) + 1 if start else 0
+    """The text of block[start:end] (whole lines around a table: ``start`` is a line's start) as one unit, if it holds any."""
     piece = block[start:end]
     if piece.strip():
         clean, _, origin = _strip_marks(piece, ".tex")
