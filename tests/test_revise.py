@@ -469,7 +469,7 @@ def test_a_manuscript_already_in_the_house_style_gets_no_tracked_change(tmp_path
     assert e.found == "t(38) = 2.14, p = .039" and e.codes == []  # t(38) = 2.14: p = .039 (scipy); not ".0394"
 
 
-def test_latex_comments_are_not_read(tmp_path):
+def test_latex_and_markdown_comments_are_not_read(tmp_path):
     """A LaTeX comment is not printed, so a statistic in one is none (authors keep an earlier analysis's numbers in
     comments: they had been audited as if printed, and flagged). The comment is blanked in place — a line that is all
     comment does not end the paragraph, as it does not in LaTeX — and every place the audit gives stays the file's.
@@ -482,3 +482,8 @@ def test_latex_comments_are_not_read(tmp_path):
     entries = audit_file(source)
     assert [(e.location, e.codes) for e in entries] == [("line 1, characters 27–95", []), ("line 11, characters 9–12", [])]
     assert entries[1].found == "t(20) = 1.20, p = .242" and "t(20) = 1.20" in entries[1].checked
+    md = tmp_path / "c.md"  # Markdown's comments are HTML's, also unprinted
+    md.write_text("Night drivers slept less, *t*(38) = 2.14, <!-- was t(38) = 2.41, p = .5 -->\n*p* = .039.\n\n<!--\n"
+                  "Old results: t(20) = 9.99, p = .5\n-->\nMood did not differ, *t*(20) = 1.20, *p* = .242.\n", encoding="utf-8")
+    assert [(e.location, e.found, e.codes) for e in audit_file(md)] == [
+        ("line 1, characters 27–86", "t(38) = 2.14, \np = .039", []), ("line 7, characters 22–47", "t(20) = 1.20, p = .242", [])]

@@ -73,7 +73,14 @@ def _read_units(path: "str | Path", encoding: str) -> list[Unit]:
         raise InputError(f"{p}: not {encoding} text (byte {exc.start}); give the file's encoding with --encoding") from None
     except LookupError:
         raise InputError(f"--encoding: unknown encoding {encoding!r}") from None
-    return list(_text_units(_uncommented(text) if suffix == ".tex" else text, suffix))
+    if suffix == ".tex":
+        text = _uncommented(text)
+    elif suffix in (".md", ".markdown"):  # an HTML comment is not printed either: blanked as LaTeX's are, its lines kept
+        text = _HTML_COMMENT.sub(lambda m: re.sub(r"[^\n]", "\u200b", m.group()), text)
+    return list(_text_units(text, suffix))
+
+
+_HTML_COMMENT = re.compile(r"<!--.*?-->", re.S)
 
 
 def _uncommented(tex: str) -> str:

@@ -409,7 +409,7 @@ def _audit_units(
         # are assumptions, said in the JSON's `recomputed`, and stay out of the suggestion)
         basis = recheck[0] if recheck is not None and item.readings == (ONE_COEFFICIENT,) else rep
         suggestion = _suggest(basis, resolved, alpha, findings, house if basis is rep else _UNMADE) if findings or suggest_all else ""
-        entries.append(_new_entry(location, rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", recheck))
+        entries.append(_new_entry(location, rep.text.replace("\u200b", "") if "\u200b" in rep.text else rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", recheck))
         if restyle:  # what a revision needs (held only then: the parsed statistics are most of an audit's memory)
             reps.append(local)
             houses.append(house)
