@@ -487,3 +487,52 @@ def test_latex_and_markdown_comments_are_not_read(tmp_path):
                   "Old results: t(20) = 9.99, p = .5\n-->\nMood did not differ, *t*(20) = 1.20, *p* = .242.\n", encoding="utf-8")
     assert [(e.location, e.found, e.codes) for e in audit_file(md)] == [
         ("line 1, characters 27–86", "t(38) = 2.14, \np = .039", []), ("line 7, characters 22–47", "t(20) = 1.20, p = .242", [])]
+
+
+def test_greek_typed_in_the_symbol_font_is_read_and_restyled(tmp_path):
+    """Older manuscripts type Greek with Word's Symbol font: a "c" set in Symbol prints χ, and Insert > Symbol puts a
+    w:sym (font Symbol, char F068: η). Both had been read as their Latin letters or not at all, and the χ² test with
+    them; they are now the Greek letters they print, a w:sym one character as the revision counts it, and the restyled
+    text is written in the text's own font (Symbol would print its letters as Greek ones: "t" as τ). A w:sym of
+    another font (Wingdings) is not read, and the places after it hold. Numbers this test's own, their p scipy's:
+    χ²(2) = 6.30 gives .043, F(2, 97) = 4.51 gives .013, t(38) = 2.14 gives .039."""
+    from docx.oxml import OxmlElement
+    from docx.oxml.ns import qn
+
+    def symbol_run(paragraph, text):
+        run = paragraph.add_run(text)
+        fonts = OxmlElement("w:rFonts")
+        fonts.set(qn("w:ascii"), "Symbol")
+        fonts.set(qn("w:hAnsi"), "Symbol")
+        run._r.get_or_add_rPr().append(fonts)
+
+    def sym(paragraph, font, char):
+        node = OxmlElement("w:sym")
+        node.set(qn("w:font"), font)
+        node.set(qn("w:char"), char)
+        paragraph.add_run()._r.append(node)
+
+    d = docx.Document()
+    p = d.add_paragraph("Counts differed, ")
+    symbol_run(p, "c")
+    p.add_run("2").font.superscript = True
+    p.add_run("(2, N = 80) = 6.30, p = .043.")
+    q = d.add_paragraph("The effect size was ")
+    sym(q, "Symbol", "F068")
+    q.add_run("2").font.superscript = True
+    q.add_run(" = .11, and the test F(2, 97) = 4.51, p = .013.")
+    w = d.add_paragraph("A wingding ")
+    sym(w, "Wingdings", "F0E0")
+    w.add_run(" then t(38) = 2.14, p = .039.")
+    d.save(str(tmp_path / "symbol.docx"))
+    found = audit_file(tmp_path / "symbol.docx")
+    assert [(e.found, e.location) for e in found] == [
+        ("χ²(2, N = 80) = 6.30, p = .043", "paragraph 1, characters 18–47"), ("η² = .11", "paragraph 2, characters 21–28"),
+        ("F(2, 97) = 4.51, p = .013", "paragraph 2, characters 44–68"), ("t(38) = 2.14, p = .039", "paragraph 3, characters 18–39")]
+    assert all(e.codes == [] for e in found) and "chi2(2) = 6.3" in found[0].checked
+    main(["audit", str(tmp_path / "symbol.docx"), "--revise", str(tmp_path / "revised.docx")])
+    with zipfile.ZipFile(tmp_path / "revised.docx") as z:
+        body = etree.fromstring(z.read("word/document.xml"))
+    inserted = [r for ins in body.iter(f"{W}ins") for r in ins.iter(f"{W}r")]
+    assert "".join(t.text for r in inserted for t in r.iter(f"{W}t")).replace("\u00a0", " ").startswith("χ2(2, N = 80) = 6.30, p = .043")
+    assert not [f for r in inserted for f in r.iter(f"{W}rFonts") if "Symbol" in f.attrib.values()]

@@ -476,6 +476,26 @@ def math_text(node) -> list[tuple[str, bool]]:  # type: ignore[no-untyped-def]
     return out
 
 
+# Word's Symbol font, as older manuscripts type Greek with it (a "c" set in Symbol prints χ): its letters and the signs
+# of a statistic, from the font's encoding, as the Unicode characters they print as
+_SYMBOL_FONT = str.maketrans(
+    "ABCDEFGHIKLMNOPQRSTUWXYZabcdefghijklmnopqrstuvwxyz-\u00a3\u00b3\u00b1\u00b4\u00b9\u00bb\u00b0",
+    "ΑΒΧΔΕΦΓΗΙΚΛΜΝΟΠΘΡΣΤΥΩΞΨΖαβχδεφγηιϕκλμνοπθρστυϖωξψζ−≤≥±×≠≈°")
+_SYM, _FONTS = f"{_W}sym", f"{_W}rFonts"
+_FONT_ATTRS = (f"{_W}ascii", f"{_W}hAnsi")
+
+
+def symbol_text(node) -> str:  # type: ignore[no-untyped-def]
+    """The character a w:sym (Insert > Symbol) prints, when its font is Symbol; "" for another font's (not read)."""
+    if node.get(f"{_W}font") != "Symbol":
+        return ""
+    try:
+        code = int(node.get(f"{_W}char", ""), 16) & 0xFF  # "F063": the font's own code 0x63, in the private-use area
+    except ValueError:
+        return ""
+    return chr(code).translate(_SYMBOL_FONT) if 0x20 < code < 0x7F or code >= 0xA0 else ""
+
+
 def _slanted(spans: list[tuple[int, int]], start: int, end: int) -> None:
     """Characters start..end are italic: the last span grown when they follow it, else a new one."""
     if spans and spans[-1][1] == start:
@@ -492,7 +512,8 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
     math: list[tuple[int, int]] = []
     length = 0
     italic, lowered, skip, run = False, None, True, None  # text outside a run is not read; lowered: a script's characters
-    for node in para.iter(_R, _T, _I, _VERT, OMATH, *_CHUNKS):
+    symbol = False  # the run is set in the Symbol font
+    for node in para.iter(_R, _T, _I, _VERT, _FONTS, _SYM, OMATH, *_CHUNKS):
         tag = node.tag
         if tag == OMATH:  # an equation: its text as it reads (its own runs are not w:r, w:t)
             skip = True
@@ -506,21 +527,25 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
             continue
         if tag == _R:
             parent = node.getparent()
-            run, skip, italic, lowered = node, parent is not None and parent.tag == _DEL, False, None
+            run, skip, italic, lowered, symbol = node, parent is not None and parent.tag == _DEL, False, None, False
             continue
-        if tag == _I or tag == _VERT:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
+        if tag == _I or tag == _VERT or tag == _FONTS:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
             props = node.getparent()
             if props is not None and props.tag == _RPR and props.getparent() is run:
                 if tag == _I:
                     italic = node.get(_VAL, "true") not in ("0", "false", "off")
-                else:
+                elif tag == _VERT:
                     lowered = _SCRIPTS.get(node.get(_VAL, ""))
+                else:
+                    symbol = any(node.get(a) == "Symbol" for a in _FONT_ATTRS)
             continue
         if skip:
             continue
-        chunk = (node.text or "") if tag == _T else _CHUNKS[tag]
+        chunk = (node.text or "") if tag == _T else symbol_text(node) if tag == _SYM else _CHUNKS[tag]
         if not chunk:
             continue
+        if symbol and tag == _T:
+            chunk = chunk.translate(_SYMBOL_FONT)
         if lowered:
             chunk = chunk.translate(lowered)
         if italic:

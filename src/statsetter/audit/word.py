@@ -23,7 +23,7 @@ from ..style.numbers import numbers_for
 from ..styled import StyledText
 from .checks import RATIOS, Finding
 from .parsing import PValue, Reported
-from .reading import OMATH, math_text
+from .reading import _SYM, OMATH, math_text, symbol_text
 
 if TYPE_CHECKING:
     from ..style.profile import Style
@@ -308,7 +308,7 @@ def same_p(p: PValue, shown: "re.Match[str]", mark: str) -> bool:
 def _node_length(node) -> int:  # type: ignore[no-untyped-def]
     tag = node.tag
     if tag not in _TEXT_NODES:
-        return 0
+        return len(symbol_text(node)) if tag == _SYM else 0  # a Symbol-font w:sym is one character, as the reader reads it
     return len(node.text or "") if _TEXT_NODES[tag] is None else 1
 
 
@@ -403,7 +403,13 @@ def _look(run) -> bytes:  # type: ignore[no-untyped-def]
     rpr = run.find(f"{_W}rPr")
     if rpr is None:
         return b""
-    return b"".join(etree.tostring(c) for c in rpr if c.tag not in _LOOK_IGNORED)
+    return b"".join(etree.tostring(c) for c in rpr if c.tag not in _LOOK_IGNORED and not _symbol_font(c))
+
+
+def _symbol_font(props) -> bool:  # type: ignore[no-untyped-def]
+    """Whether ``props`` (a run property) sets the Symbol font: a Greek letter typed with it is read as the letter, and
+    the restyled text writes the letter in the text's own font."""
+    return props.tag == f"{_W}rFonts" and any(props.get(f"{_W}{a}") == "Symbol" for a in ("ascii", "hAnsi", "cs", "eastAsia"))
 
 
 def _new_runs(text: StyledText, model):  # type: ignore[no-untyped-def]
@@ -423,6 +429,9 @@ def _new_runs(text: StyledText, model):  # type: ignore[no-untyped-def]
             for tag in ("i", "iCs", "vertAlign", "rPrChange"):
                 for old in rpr.findall(f"{_W}{tag}"):
                     rpr.remove(old)
+            for fonts in rpr.findall(f"{_W}rFonts"):  # the restyled text is Unicode: a Symbol font would print it as other letters
+                if _symbol_font(fonts):
+                    rpr.remove(fonts)
             r.append(rpr)
         run = Run(r, None)  # type: ignore[arg-type]
         run.text = xml_safe(chunk)
