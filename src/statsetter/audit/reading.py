@@ -415,13 +415,21 @@ def _place(part: str) -> str:
 def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-def]
     label = _place(part)
     in_cell = {}  # every paragraph inside a table cell → (table, row, column); the innermost cell wins
-    for t, tbl in enumerate(root.iter(f"{_W}tbl"), 1):
+    fallback = set()  # a text box's paragraphs as drawn for older readers (mc:Fallback): the same as its mc:Choice's
+    t = 0
+    for tbl in root.iter(f"{_W}tbl", _FALLBACK):
+        if tbl.tag == _FALLBACK:
+            fallback.update(tbl.iter(_P))
+            continue
+        t += 1
         for r, tr in enumerate((x for x in tbl if x.tag == f"{_W}tr"), 1):
             for c, tc in enumerate((x for x in tr if x.tag == f"{_W}tc"), 1):
-                for para in tc.iter(f"{_W}p"):
+                for para in tc.iter(_P):
                     in_cell[para] = (t, r, c)
     body_count = 0
-    for index, para in enumerate(root.iter(f"{_W}p")):
+    for index, para in enumerate(root.iter(_P)):
+        if fallback and para in fallback:
+            continue
         cell = in_cell.get(para)
         if cell is None:
             body_count += 1
@@ -437,6 +445,17 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
 
 
 _VAL = f"{_W}val"
+_P = f"{_W}p"
+_FALLBACK = "{http://schemas.openxmlformats.org/markup-compatibility/2006}Fallback"
+
+
+def owner(node, parent=None):  # type: ignore[no-untyped-def]
+    """The paragraph ``node`` (a run or an equation) belongs to: the nearest w:p above it — a text box's own paragraph
+    for a run of its text, not the paragraph that holds the text box, whose text it is not."""
+    node = node.getparent() if parent is None else parent
+    while node is not None and node.tag != _P:
+        node = node.getparent()
+    return node
 _R, _T, _DEL, _I, _RPR, _VERT = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}rPr", f"{_W}vertAlign"
 _CHUNKS = {f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
 _M = "{http://schemas.openxmlformats.org/officeDocument/2006/math}"
@@ -517,6 +536,8 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
         tag = node.tag
         if tag == OMATH:  # an equation: its text as it reads (its own runs are not w:r, w:t)
             skip = True
+            if owner(node) is not para:  # in a text box: that paragraph's
+                continue
             begin = length
             for chunk, slanted in math_text(node):
                 if chunk and slanted:
@@ -527,7 +548,8 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
             continue
         if tag == _R:
             parent = node.getparent()
-            run, skip, italic, lowered, symbol = node, parent is not None and parent.tag == _DEL, False, None, False
+            own = parent is para or owner(node, parent) is para  # (a text box's runs are its own paragraphs')
+            run, skip, italic, lowered, symbol = node, not own or parent.tag == _DEL, False, None, False
             continue
         if tag == _I or tag == _VERT or tag == _FONTS:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
             props = node.getparent()

@@ -23,7 +23,7 @@ from ..style.numbers import numbers_for
 from ..styled import StyledText
 from .checks import RATIOS, Finding
 from .parsing import PValue, Reported
-from .reading import _SYM, OMATH, math_text, symbol_text
+from .reading import _SYM, OMATH, math_text, owner, symbol_text
 
 if TYPE_CHECKING:
     from ..style.profile import Style
@@ -317,6 +317,8 @@ def _runs(p):  # type: ignore[no-untyped-def]
     `math_text` reads it): [(run or m:oMath, start, end)]."""
     out, at = [], 0
     for r in p.iter(f"{_W}r", OMATH):
+        if r.getparent() is not p and owner(r) is not p:  # a text box's: its own paragraph's, as the reader reads it
+            continue
         if r.tag == OMATH:
             n = sum(len(text) for text, _ in math_text(r))
         else:
