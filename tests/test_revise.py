@@ -566,3 +566,28 @@ def test_a_text_box_is_read_once_as_its_own_paragraph(tmp_path):
                 "fallback" if any("Fallback" in a.tag for a in c.iterancestors()) else "") for c in body.iter(f"{W}del", f"{W}ins")]
     assert changes == [("t(38) = 2.14, p = 0.039", ""), ("t(38) = 2.14, p = .039", ""), ("F(2, 97) = 4.51, p = 0.013", ""),
                        ("F(2, 97) = 4.51, p = .013", ""), ("r(40) = 0.31, p = .046", ""), ("r(40) = .31, p = .046", "")]
+
+
+def test_text_a_tracked_move_took_away_is_not_read(tmp_path):
+    """A manuscript with tracked changes: a moved sentence stands at its new place (w:moveTo) and, struck through, at
+    its old one (w:moveFrom), as a deletion does (w:del). Only the new place is the text: the old one had been read as
+    well, and its statistic reported twice. Numbers this test's own."""
+    d = docx.Document()
+    p = d.add_paragraph("Before. ")
+    W_NS = W[1:-1]
+    p._p.append(etree.fromstring(f'<w:moveFrom xmlns:w="{W_NS}" w:id="1" w:author="A" w:date="2026-01-01T00:00:00Z"><w:r>'
+                                 '<w:t xml:space="preserve">Moved: t(38) = 2.14, p = .039. </w:t></w:r></w:moveFrom>'))
+    p.add_run("Between, r(40) = 0.31, p = .046. ")
+    p._p.append(etree.fromstring(f'<w:moveTo xmlns:w="{W_NS}" w:id="2" w:author="A" w:date="2026-01-01T00:00:00Z"><w:r>'
+                                 '<w:t xml:space="preserve">Moved: t(38) = 2.14, p = .039.</w:t></w:r></w:moveTo>'))
+    d.save(str(tmp_path / "moved.docx"))
+    assert [(e.location, e.found) for e in audit_file(tmp_path / "moved.docx")] == [
+        ("paragraph 1, characters 18–39", "r(40) = 0.31, p = .046"), ("paragraph 1, characters 49–70", "t(38) = 2.14, p = .039")]
+    main(["audit", str(tmp_path / "moved.docx"), "--revise", str(tmp_path / "revised.docx")])  # r's leading zero; italics
+    with zipfile.ZipFile(tmp_path / "revised.docx") as z:
+        body = etree.fromstring(z.read("word/document.xml"))
+    changes = [(c.getparent().tag, "".join(t.text for t in c.iter(f"{W}t", f"{W}delText")).replace("\u00a0", " "))
+               for c in body.iter(f"{W}del", f"{W}ins")]
+    assert [text for _, text in changes] == ["r(40) = 0.31, p = .046", "r(40) = .31, p = .046", "Moved: t(38) = 2.14, p = .039" [7:],
+                                             "t(38) = 2.14, p = .039"]
+    assert changes[2][0] == changes[3][0] == f"{W}moveTo"  # the moved statistic revised at its new place, in the move

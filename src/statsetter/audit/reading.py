@@ -457,6 +457,7 @@ def owner(node, parent=None):  # type: ignore[no-untyped-def]
         node = node.getparent()
     return node
 _R, _T, _DEL, _I, _RPR, _VERT = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}rPr", f"{_W}vertAlign"
+REMOVED = frozenset({_DEL, f"{_W}moveFrom"})  # a tracked deletion, and the place a tracked move took text from: not the text
 _CHUNKS = {f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
 _M = "{http://schemas.openxmlformats.org/officeDocument/2006/math}"
 OMATH = f"{_M}oMath"  # an equation (Office Math), inline or in an equation paragraph (m:oMathPara holds them)
@@ -549,7 +550,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
         if tag == _R:
             parent = node.getparent()
             own = parent is para or owner(node, parent) is para  # (a text box's runs are its own paragraphs')
-            run, skip, italic, lowered, symbol = node, not own or parent.tag == _DEL, False, None, False
+            run, skip, italic, lowered, symbol = node, not own or parent.tag in REMOVED, False, None, False
             continue
         if tag == _I or tag == _VERT or tag == _FONTS:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
             props = node.getparent()
