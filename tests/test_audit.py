@@ -730,3 +730,20 @@ def test_a_wald_typed_by_its_name_keeps_the_name_when_restyled():
     assert entry("The group factor, Wald = 12.40, p = .002.", "ama11").suggestion == "Wald χ² = 12.40, P = .002"
     typed = entry("Age was a predictor (Wald χ2 = 6.13, df = 1, p = 0.013).")
     assert typed.found == "χ2 = 6.13, df = 1, p = 0.013" and typed.revision.plain() == "χ²(1) = 6.13, p = .013"
+
+
+def test_a_power_of_ten_at_a_sentence_end_is_one_number():
+    """A p printed with its power of ten ends many sentences ("P = 4.2 × 10⁻⁶."): the full stop after the exponent had
+    stopped the exponent being read (it was taken for a decimal point), and the p read as 4.2, an impossible p and a
+    wrong one. An en dash as the exponent's minus ("10–6", as Word's autocorrection leaves a hyphen) is read too. The
+    p is scipy's for t(98) = 4.81, printed in each typing."""
+    p = 2 * stats.t.sf(4.81, 98)
+    mantissa, exponent = f"{p:.1e}".split("e")
+    power = int(exponent)
+    for typed in (f"{mantissa} × 10−{-power}", f"{mantissa} × 10–{-power}", f"{mantissa} × 10^{power}", f"{mantissa}e{power}",
+                  f"{mantissa} x 10-{-power}", f"{mantissa} × 10" + str(power).translate(str.maketrans("-0123456789", "⁻⁰¹²³⁴⁵⁶⁷⁸⁹"))):
+        (e,) = audit_units([Unit("s", f"Night shifts mattered, t(98) = 4.81, p = {typed}.")])
+        assert e.found == f"t(98) = 4.81, p = {typed}", typed
+        assert not {"impossible-p", "p-does-not-follow"} & set(e.codes), (typed, e.codes)
+    (bad,) = audit_units([Unit("s", f"Night shifts mattered, t(98) = 4.81, p = {mantissa} × 10–{-power + 2}.")])  # 100 times too small
+    assert "p-does-not-follow" in bad.codes

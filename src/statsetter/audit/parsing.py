@@ -128,9 +128,11 @@ def _number_pattern(mark: str) -> str:
 
 
 # a number's power of ten as authors type it: 2.35e-3, 2.1E−04, 2.1 × 10⁻⁴, 2.1×10^-4, 2.1 x 10−4 (one number, never two)
-_EXPONENT = r"(?:\s?[eE][-−+]?\d{1,3}(?![\d.])|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?[-−⁻]?[\d⁰¹²³⁴⁵⁶⁷⁸⁹]{1,3}(?![\d.]))"
-_EXPONENT_SPLIT = re.compile(r"^(?P<m>.*?)(?:\s?[eE](?P<e1>[-−+]?\d{1,3})|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?(?P<e2>[-−⁻]?[\d⁰¹²³⁴⁵⁶⁷⁸⁹]{1,3}))$")
-_SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−", "0123456789--")
+# (a sentence's full stop may follow: "p = 2.1 × 10⁻⁴." — only a decimal point with a digit after it may not, nor a digit;
+# the exponent's minus may be typed as an en dash, "10–4", as Word's autocorrection leaves it)
+_EXPONENT = r"(?:\s?[eE][-−–+]?\d{1,3}(?!\d|\.\d)|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?[-−–⁻]?[\d⁰¹²³⁴⁵⁶⁷⁸⁹]{1,3}(?!\d|\.\d))"
+_EXPONENT_SPLIT = re.compile(r"^(?P<m>.*?)(?:\s?[eE](?P<e1>[-−–+]?\d{1,3})|\s?[×x]\s?10\s?(?:\^|\*\*)?\s?(?P<e2>[-−–⁻]?[\d⁰¹²³⁴⁵⁶⁷⁸⁹]{1,3}))$")
+_SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−–", "0123456789---")
 
 # each alternative starts with a literal character; `_guarded` puts the "not after a letter or point" test right after it
 # (Χ: the Greek capital chi, as some symbol fonts and keyboards type it)
