@@ -120,6 +120,39 @@ def test_a_coefficients_table_checks_t_against_b_and_se_and_takes_no_two_group_d
         assert flagged == wrong, [(e.found, e.codes) for e in entries]
 
 
+def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp_path):
+    """SPSS's Independent Samples Test table puts Levene's F and its Sig. before the t, its df and "Sig. (2-tailed)",
+    in two rows (equal variances assumed and not). Each statistic takes the df and p columns between it and the next
+    statistic's (the t had taken Levene's Sig. as its p — a false "does not follow" on SPSS's most common table — and
+    Levene's F the t's df). Numbers: pingouin's penguins, body mass of Adelie females and males (Palmer Station),
+    Levene's test centred on the mean as SPSS computes it, Student's and Welch's t from scipy, printed as SPSS prints
+    them; then one Sig. (2-tailed) retyped."""
+    import pingouin as pg
+
+    penguins = pg.read_dataset("penguins")
+    adelie = penguins[(penguins["species"] == "Adelie")].dropna(subset=["sex", "body_mass_g"])
+    f, m = (adelie.loc[adelie["sex"] == s, "body_mass_g"].to_numpy() for s in ("female", "male"))
+    levene = stats.levene(f, m, center="mean")
+    student, welch = stats.ttest_ind(f, m), stats.ttest_ind(f, m, equal_var=False)
+    nu = len(f) + len(m) - 2
+    va, vb = f.var(ddof=1) / len(f), m.var(ddof=1) / len(m)
+    welch_df = (va + vb) ** 2 / (va ** 2 / (len(f) - 1) + vb ** 2 / (len(m) - 1))
+
+    def sig(p):
+        return f"{p:.3f}".lstrip("0") if p >= 0.001 else "<.001"
+
+    header = ("", "", "F", "Sig.", "t", "df", "Sig. (2-tailed)", "Mean Difference")
+    rows = [header, ("Body mass", "Equal variances assumed", f"{levene.statistic:.3f}", sig(levene.pvalue), f"{student.statistic:.3f}",
+                     str(nu), sig(student.pvalue), f"{f.mean() - m.mean():.2f}"),
+            ("", "Equal variances not assumed", "", "", f"{welch.statistic:.3f}", f"{welch_df:.3f}", sig(welch.pvalue), f"{f.mean() - m.mean():.2f}")]
+    entries = audit_file(_doc(tmp_path / "spss.docx", tables=[("Independent Samples Test", rows)]))
+    assert [e.found.split(" =")[0] for e in entries] == ["F", f"t({nu})", f"t({welch_df:.3f})"]
+    assert [e.codes for e in entries] == [[], [], []] and all("Sig" not in e.found for e in entries)
+    retyped = [rows[0], rows[1][:6] + (".049",) + rows[1][7:], rows[2]]
+    flagged = [e.codes for e in audit_file(_doc(tmp_path / "spss2.docx", tables=[("Independent Samples Test", retyped)]))]
+    assert "p-does-not-follow" in flagged[1] and flagged[0] == flagged[2] == []
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

@@ -165,6 +165,18 @@ def _p_cell(text: str, mark: str) -> PValue | None:
     return PValue(op, num, num.start, num.end, num.start, "")
 
 
+def _own_column(roles: dict[int, str], column: int, role: str) -> int | None:
+    """The column of ``role`` (p, df …) that belongs to the statistic in ``column``: one between it and the statistic
+    columns on either side, the nearest to its right first (SPSS's Independent Samples Test puts Levene's F and its
+    Sig. before the t and its df and "Sig. (2-tailed)": each statistic its own), else the nearest to its left."""
+    stats = sorted(k for k, v in roles.items() if v in _STAT_ROLES or v == "wald")
+    before = max((k for k in stats if k < column), default=-1)
+    after = min((k for k in stats if k > column), default=1 << 30)
+    right = [k for k in sorted(roles) if column < k < after and roles[k] == role]
+    left = [k for k in sorted(roles) if before < k < column and roles[k] == role]
+    return right[0] if right else left[-1] if left else None
+
+
 def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, float | None]]:  # type: ignore[no-untyped-def]
     """(row, df) of each Residuals (Error, Within) row of the table, the df from its df column, in order."""
     column = next((k for k, v in roles.items() if v == "df"), None)
@@ -255,15 +267,15 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 continue
             op, value = numbers[c]  # type: ignore[misc]
             unit = row[c][0]
-            p_col = next((k for k, v in roles.items() if v == "p"), None)
+            p_col = _own_column(roles, c, "p")
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
             df: tuple[Number, ...] = ()
             how = f"the {role if role != 'chi2' else 'χ²'} column"
-            k = next((k for k, v in roles.items() if v == "df"), None)
+            k = _own_column(roles, c, "df")
             if k is not None and k in row and numbers.get(k) is not None:
                 df = (numbers[k][1],)  # type: ignore[index]
                 how += ", the df column"
-            k1, k2 = (next((k for k, v in roles.items() if v == name), None) for name in ("df1", "df2"))
+            k1, k2 = (_own_column(roles, c, name) for name in ("df1", "df2"))
             if k1 in row and k2 in row and numbers.get(k1) is not None and numbers.get(k2) is not None:  # type: ignore[operator]
                 df = (numbers[k1][1], numbers[k2][1])  # type: ignore[index]
                 how += ", the df(num) and df(den) columns"
