@@ -9,6 +9,8 @@ from __future__ import annotations
 import re
 
 import docx
+import numpy as np
+import pandas as pd
 from scipy import stats
 
 from statsetter.audit.reading import Unit
@@ -151,6 +153,44 @@ def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp
     retyped = [rows[0], rows[1][:6] + (".049",) + rows[1][7:], rows[2]]
     flagged = [e.codes for e in audit_file(_doc(tmp_path / "spss2.docx", tables=[("Independent Samples Test", retyped)]))]
     assert "p-does-not-follow" in flagged[1] and flagged[0] == flagged[2] == []
+
+
+def test_spss_chi_square_tests_table_is_read_by_its_rows_names(tmp_path):
+    """SPSS's Chi-Square Tests table gives each χ² under "Value", named by its row (Pearson Chi-Square, Continuity
+    Correction, Likelihood Ratio, Linear-by-Linear Association), its p under "Asymptotic Significance (2-sided)", and
+    Fisher's exact test in Exact Sig. columns: the table had not been read at all. Each χ² is now read with its row's
+    df and asymptotic p (an Exact Sig. is not its p; Fisher's row and "N of Valid Cases" are no χ²). Numbers: sex by
+    diagnosis in pingouin's chi2_independence data (the UCI heart-disease set, 303 patients): Pearson's and Yates's χ²
+    and the likelihood ratio from scipy's chi2_contingency, linear-by-linear as (N − 1)·r², Fisher's p from scipy;
+    printed as SPSS prints them; then one asymptotic p retyped."""
+    import pingouin as pg
+
+    data = pg.read_dataset("chi2_independence")
+    table = pd.crosstab(data["sex"], data["target"]).to_numpy()
+    pearson = stats.chi2_contingency(table, correction=False)
+    yates = stats.chi2_contingency(table, correction=True)
+    ratio = stats.chi2_contingency(table, correction=False, lambda_="log-likelihood")
+    linear = (len(data) - 1) * np.corrcoef(data["sex"], data["target"])[0, 1] ** 2
+    fisher = stats.fisher_exact(table).pvalue
+
+    def sig(p):
+        return f"{p:.3f}".lstrip("0") if p >= 0.001 else "<.001"
+
+    rows = [("", "Value", "df", "Asymptotic Significance (2-sided)", "Exact Sig. (2-sided)", "Exact Sig. (1-sided)"),
+            ("Pearson Chi-Square", f"{pearson.statistic:.3f}a", "1", sig(pearson.pvalue), "", ""),
+            ("Continuity Correctionb", f"{yates.statistic:.3f}", "1", sig(yates.pvalue), "", ""),
+            ("Likelihood Ratio", f"{ratio.statistic:.3f}", "1", sig(ratio.pvalue), "", ""),
+            ("Fisher's Exact Test", "", "", "", sig(fisher), sig(fisher / 2)),
+            ("Linear-by-Linear Association", f"{linear:.3f}", "1", sig(stats.chi2.sf(linear, 1)), "", ""),
+            ("N of Valid Cases", str(len(data)), "", "", "", "")]
+    entries = audit_file(_doc(tmp_path / "chi.docx", tables=[("Chi-Square Tests", rows)]))
+    assert [e.found.split(" =")[0] for e in entries] == ["χ²(1)"] * 4 and [e.codes for e in entries] == [[]] * 4
+    assert all(e.checked.startswith("p recomputed from chi2(1)") for e in entries)
+    assert [e.notes[0].split("its row, ")[1].split(",")[0] for e in entries] == ["Pearson Chi-Square", "Continuity Correctionb",
+                                                                              "Likelihood Ratio", "Linear-by-Linear Association"]
+    retyped = [r if r[0] != "Likelihood Ratio" else r[:3] + (".049",) + r[4:] for r in rows]
+    codes = [e.codes for e in audit_file(_doc(tmp_path / "chi2.docx", tables=[("Chi-Square Tests", retyped)]))]
+    assert ["p-does-not-follow" in c for c in codes] == [False, False, True, False]
 
 
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):

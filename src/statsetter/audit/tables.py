@@ -36,11 +36,17 @@ _ROLES = (
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ]"), "z"),
     (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\))?|P\s*\(2-tailed\))"), "p"),
+    # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
+    # the χ²'s own p), and its statistics under "Value", each named by its row (_CHI_ROW)
+    (re.compile(r"(?i)asymp(?:\.|totic)\s*sig(?:\.|nificance)\s*(?:\(2-sided\))?"), "p"),
+    (re.compile(r"(?i)value"), "value"),
     (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
 )
 _STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald"}
+# the rows of SPSS's Chi-Square Tests whose Value is a χ² (footnote letters after their names, as SPSS prints them)
+_CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|continuity\s+correction|linear[- ]by[- ]linear\s+association)[a-d]?\s*")
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 _RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr)[a-d*†‡§]?\s*\(\s*95\s?%\s?ci\s*\)[a-d*†‡§]?")
@@ -169,7 +175,7 @@ def _own_column(roles: dict[int, str], column: int, role: str) -> int | None:
     """The column of ``role`` (p, df …) that belongs to the statistic in ``column``: one between it and the statistic
     columns on either side, the nearest to its right first (SPSS's Independent Samples Test puts Levene's F and its
     Sig. before the t and its df and "Sig. (2-tailed)": each statistic its own), else the nearest to its left."""
-    stats = sorted(k for k, v in roles.items() if v in _STAT_ROLES or v == "wald")
+    stats = sorted(k for k, v in roles.items() if v in _STAT_ROLES or v == "value")
     before = max((k for k in stats if k < column), default=-1)
     after = min((k for k in stats if k > column), default=1 << 30)
     right = [k for k in sorted(roles) if column < k < after and roles[k] == role]
@@ -236,7 +242,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             roles = {c: role for c, role in header.items() if role is not None}
         coefficients = "B" in roles.values() or "SE" in roles.values()  # a model's coefficients table
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
-        if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES) and not any(ratios.values()):
+        if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
             if sizes:
                 groups = sizes
@@ -263,6 +269,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) column" + (", the p column" if p else "")))
         # a statistic whose value sits alone under a head named t, F, χ², r or z
         for c, role in roles.items():
+            by_row = role == "value"
+            if by_row:  # a χ² when its row names one
+                role = "chi2" if _CHI_ROW.fullmatch(row[min(row)][0].text) else ""
             if role not in _STAT_ROLES or numbers.get(c) is None or c not in row:
                 continue
             op, value = numbers[c]  # type: ignore[misc]
@@ -270,7 +279,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             p_col = _own_column(roles, c, "p")
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
             df: tuple[Number, ...] = ()
-            how = f"the {role if role != 'chi2' else 'χ²'} column"
+            how = f"the {role if role != 'chi2' else 'χ²'} column" if not by_row else f"the Value column (a χ² as its row, {row[min(row)][0].text.strip()}, names it)"
             k = _own_column(roles, c, "df")
             if k is not None and k in row and numbers.get(k) is not None:
                 df = (numbers[k][1],)  # type: ignore[index]
