@@ -193,6 +193,32 @@ def test_spss_chi_square_tests_table_is_read_by_its_rows_names(tmp_path):
     assert ["p-does-not-follow" in c for c in codes] == [False, False, True, False]
 
 
+def test_spss_coefficients_table_with_its_two_header_rows(tmp_path):
+    """SPSS's Coefficients table has a header of two rows: "t" and "Sig." in the first, "B" and "Std. Error" (under
+    "Unstandardized Coefficients") in the second. The second row's heads had replaced the first's (t and Sig. lost:
+    nothing read); they are now added to them, "Std. Error" is the SE, and each t is checked against B / SE and its
+    Sig. read. statsmodels' OLS of its bundled Longley data, printed as SPSS prints it (three decimals, ".000"); one t
+    retyped."""
+    import statsmodels.api as sm
+
+    d = sm.datasets.longley.load_pandas()
+    fit = sm.OLS(d.endog, sm.add_constant(d.exog[["GNP", "UNEMP", "ARMED"]])).fit()
+    beta = fit.params * d.exog[["GNP", "UNEMP", "ARMED"]].std() / d.endog.std()
+
+    def spss(x):
+        return f"{x:.3f}".replace("0.", ".", 1) if abs(x) < 1 else f"{x:.3f}"
+
+    rows = [("Model", "", "Unstandardized Coefficients", "", "Standardized Coefficients", "t", "Sig."), ("", "", "B", "Std. Error", "Beta", "", "")]
+    for k, name in enumerate(fit.params.index):
+        rows.append(("1" if k == 0 else "", "(Constant)" if name == "const" else name, spss(fit.params[name]), spss(fit.bse[name]),
+                     "" if name == "const" else spss(beta[name]), spss(fit.tvalues[name]), spss(fit.pvalues[name])))
+    entries = audit_file(_doc(tmp_path / "coef.docx", tables=[("Coefficients", rows)]))
+    assert len(entries) == 4 and all(e.codes == [] and "the B and SE columns" in e.notes[0] and "the p column" in e.notes[0] for e in entries)
+    retyped = rows[:3] + [rows[3][:5] + ("9.999",) + rows[3][6:]] + rows[4:]
+    codes = [e.codes for e in audit_file(_doc(tmp_path / "coef2.docx", tables=[("Coefficients", retyped)]))]
+    assert ["coefficient-does-not-fit" in c for c in codes] == [False, True, False, False]
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

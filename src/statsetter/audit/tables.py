@@ -31,7 +31,7 @@ _ROLES = (
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
     (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "wald"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
     (re.compile(r"B"), "B"),  # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B))
-    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?"), "SE"),
+    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Error"), "SE"),
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ]"), "z"),
@@ -231,6 +231,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     found: list[TableStatistic] = []
     used: set[int] = set()
     error_dfs: dict[int, list[tuple[int, float | None]]] = {}
+    header_above = False  # the row before was a header row
     for r in sorted(rows):
         row = rows[r]
         header = {c: _role(u.text) for c, (u, _) in row.items()}
@@ -238,8 +239,14 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
         heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
         if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
-            # a header row (also one partway down the table): heads and no number (a row of a predictor named "X2" is data)
-            roles = {c: role for c, role in header.items() if role is not None}
+            # a header row (also one partway down the table): heads and no number (a row of a predictor named "X2" is data);
+            # the second row of a two-row header adds its heads to the first's (SPSS's Coefficients: "t", "Sig." above,
+            # "B", "Std. Error" under "Unstandardized Coefficients" below)
+            found_heads = {c: role for c, role in header.items() if role is not None}
+            roles = {**roles, **found_heads} if header_above else found_heads
+            header_above = True
+        else:
+            header_above = False
         coefficients = "B" in roles.values() or "SE" in roles.values()  # a model's coefficients table
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
