@@ -219,6 +219,38 @@ def test_spss_coefficients_table_with_its_two_header_rows(tmp_path):
     assert ["coefficient-does-not-fit" in c for c in codes] == [False, True, False, False]
 
 
+def test_spss_correlations_table_reads_each_coefficient_with_the_sig_and_n_below_it(tmp_path):
+    """SPSS's Correlations table: under each variable a "Pearson Correlation" row (Spearman's: "Correlation Coefficient"
+    under "Spearman's rho"), then "Sig. (2-tailed)" and "N" rows, a column per variable. It had not been read; each
+    coefficient is now a statistic with the p and N below it in its column (df = N − 2), the diagonal's 1 none.
+    Numbers: three measurements of statsmodels' bundled Longley data (16 years), Pearson's r and Spearman's ρ with
+    their p from scipy, printed as SPSS prints them; one Sig. retyped."""
+    import statsmodels.api as sm
+
+    data = sm.datasets.longley.load_pandas().exog[["GNP", "UNEMP", "ARMED"]]
+    names = list(data.columns)
+
+    def matrix(kind, retype=None):
+        rows = [("", "", *names)]
+        for a in names:
+            coefficient = [("1" if a == b else f"{(stats.pearsonr if kind == 'pearson' else stats.spearmanr)(data[a], data[b])[0]:.3f}") for b in names]
+            sig = ["" if a == b else f"{(stats.pearsonr if kind == 'pearson' else stats.spearmanr)(data[a], data[b])[1]:.3f}" for b in names]
+            if retype == a:
+                sig = [x if not x else ".001" for x in sig]
+            label = "Pearson Correlation" if kind == "pearson" else "Correlation Coefficient"
+            rows += [(a, label, *coefficient), ("", "Sig. (2-tailed)", *sig), ("", "N", *["16"] * len(names))]
+        if kind == "spearman":
+            rows = [("Spearman's rho", *r[1:]) if k == 1 else r for k, r in enumerate(rows)]
+        return rows
+
+    for kind, symbol in (("pearson", "r"), ("spearman", "rs")):
+        entries = audit_file(_doc(tmp_path / f"{kind}.docx", tables=[("Correlations", matrix(kind))]))
+        assert len(entries) == 6 and all(e.found.startswith(f"{symbol}(14) = ") and e.codes == [] and e.checked for e in entries), \
+            [(e.found, e.codes) for e in entries]
+    codes = [e.codes for e in audit_file(_doc(tmp_path / "retyped.docx", tables=[("Correlations", matrix("pearson", retype="UNEMP"))]))]
+    assert sum("p-does-not-follow" in c for c in codes) >= 1 and sum(c == [] for c in codes) >= 3
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

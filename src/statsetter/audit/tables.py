@@ -342,4 +342,44 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                             break
                 readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table"))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
-    return found, used
+    return found + _correlation_rows(rows, mark), used
+
+
+# SPSS's Correlations table: under each variable a row of coefficients ("Pearson Correlation", or Spearman's and Kendall's
+# "Correlation Coefficient"), then its "Sig. (2-tailed)" and its "N", each column a pair of variables
+_COEFFICIENT_ROW = re.compile(r"(?i)\s*(?:pearson\s+correlation|correlation\s+coefficient)\s*")
+_SPEARMAN = re.compile(r"(?i)spearman|rho")
+_SIG_ROW = re.compile(r"(?i)\s*sig\.?\s*\(2-tailed\)\s*")
+_N_ROW = re.compile(r"(?i)\s*n\s*")
+
+
+def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """The coefficients of a correlation matrix laid out as SPSS lays it out: each with the p of the Sig. (2-tailed) row
+    and the N of the N row below it in its column (df = N − 2), Spearman's where the table names it (its rows are
+    "Correlation Coefficient" under "Spearman's rho"); a coefficient without a p below it (the diagonal's 1) is none."""
+    order = sorted(rows)
+    found: list[TableStatistic] = []
+    spearman = False
+    for k, r in enumerate(order):
+        row = rows[r]
+        columns = sorted(row)
+        spearman = spearman or any(_SPEARMAN.search(row[c][0].text) for c in columns[:2])
+        label = next((c for c in columns[:2] if _COEFFICIENT_ROW.fullmatch(row[c][0].text)), None)
+        if label is None or k + 2 >= len(order):
+            continue
+        sig, n = rows[order[k + 1]], rows[order[k + 2]]
+        if not any(c in sig and _SIG_ROW.fullmatch(sig[c][0].text) for c in columns[:2]) or not any(c in n and _N_ROW.fullmatch(n[c][0].text) for c in columns[:2]):
+            continue
+        symbol = "rs" if spearman and "pearson" not in row[label][0].text.lower() else "r"
+        for c in columns:
+            if c <= label:
+                continue
+            value, p, size = _number(row[c][0].text, mark), _p_cell(sig[c][0].text, mark) if c in sig else None, _number(n[c][0].text, mark) if c in n else None
+            if value is None or p is None or size is None or size[1].value < 3:
+                continue
+            df = Number(f"{size[1].value - 2:g}", size[1].value - 2, 0, 0, 0)
+            unit = row[c][0]
+            rep = Reported(symbol, symbol, value[1].start, value[1].start, value[1].end, (df,), None, value[0], value[1], p)
+            rep.text = f"{symbol}({df.text}) {value[0]} {value[1].text}, p {p.op} {p.number.text}" if p.number is not None else ""
+            found.append(TableStatistic(unit, rep, None, "read from the table's row: the coefficient, the Sig. (2-tailed) and N rows below it in its column (df = N − 2)"))
+    return found
