@@ -251,6 +251,42 @@ def test_spss_correlations_table_reads_each_coefficient_with_the_sig_and_n_below
     assert sum("p-does-not-follow" in c for c in codes) >= 1 and sum(c == [] for c in codes) >= 3
 
 
+def test_spss_within_subjects_table_takes_each_corrections_error_df(tmp_path):
+    """SPSS's Tests of Within-Subjects Effects gives the effect's F in four rows (Sphericity Assumed, Greenhouse-Geisser,
+    Huynh-Feldt, Lower-bound), each with its corrected df, and its error term "Error(time)" in four rows likewise: each
+    F takes the error df of its own correction (the first error row below had been given to all four — a false "p does
+    not follow" for every corrected row), and SPSS's regression ANOVA its "Residual" in the second column. Numbers:
+    pingouin's rm_anova_wide data (four weeks, complete cases), its F and sums of squares, the Greenhouse-Geisser and
+    Huynh-Feldt ε from pingouin and the lower bound 1/(k − 1), the p values scipy's; one corrected Sig. retyped."""
+    import pingouin as pg
+
+    data = pg.read_dataset("rm_anova_wide").dropna()
+    a = pg.rm_anova(data, detailed=True).set_index("Source")
+    f, df1, df2 = a.loc["Within", "F"], a.loc["Within", "DF"], a.loc["Error", "DF"]
+    eps = {"Sphericity Assumed": 1.0, "Greenhouse-Geisser": pg.epsilon(data, correction="gg"), "Huynh-Feldt": pg.epsilon(data, correction="hf"),
+           "Lower-bound": 1 / df1}
+
+    def rows(wrong=""):
+        out = [("Source", "", "Type III Sum of Squares", "df", "Mean Square", "F", "Sig.")]
+        for k, (name, e) in enumerate(eps.items()):
+            p = stats.f.sf(round(f, 3), round(df1 * e, 3), round(df2 * e, 3))
+            out.append(("time" if k == 0 else "", name, f"{a.loc['Within', 'SS']:.3f}", f"{df1 * e:.3f}", f"{a.loc['Within', 'SS'] / (df1 * e):.3f}",
+                        f"{f:.3f}", f"{p / 4 if name == wrong else p:.3f}"))
+        for k, (name, e) in enumerate(eps.items()):
+            out.append(("Error(time)" if k == 0 else "", name, f"{a.loc['Error', 'SS']:.3f}", f"{df2 * e:.3f}", f"{a.loc['Error', 'SS'] / (df2 * e):.3f}", "", ""))
+        return out
+
+    entries = audit_file(_doc(tmp_path / "within.docx", tables=[("Tests of Within-Subjects Effects", rows())]))
+    assert [e.found.split(" =")[0] for e in entries] == [f"F({df1 * e:.3f}, {float(f'{df2 * e:.3f}'):g})" for e in eps.values()]
+    assert all(e.codes == [] for e in entries)
+    codes = [e.codes for e in audit_file(_doc(tmp_path / "within2.docx", tables=[("Tests of Within-Subjects Effects", rows("Huynh-Feldt"))]))]
+    assert ["p-does-not-follow" in c for c in codes] == [False, False, True, False]
+    regression = [("Model", "", "Sum of Squares", "df", "Mean Square", "F", "Sig."), ("1", "Regression", "40.21", "4", "10.05", "42.04", ".000"),
+                  ("", "Residual", "56.19", "235", ".239", "", ""), ("", "Total", "96.40", "239", "", "", "")]
+    (e,) = audit_file(_doc(tmp_path / "anova.docx", tables=[("ANOVA", regression)]))
+    assert e.found.startswith("F(4, 235) = 42.04") and e.codes == []
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

@@ -183,23 +183,52 @@ def _own_column(roles: dict[int, str], column: int, role: str) -> int | None:
     return right[0] if right else left[-1] if left else None
 
 
-def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, float | None]]:  # type: ignore[no-untyped-def]
-    """(row, df) of each Residuals (Error, Within) row of the table, the df from its df column, in order."""
+# the sub-rows of SPSS's repeated-measures tables: an effect's F and its error term, each under the same correction
+_CORRECTION = re.compile(r"(?i)\s*(sphericity\s+assumed|greenhouse[-–\s]?geisser|huynh[-–\s]?feldt|lower[-–\s]?bound)\s*")
+
+
+def _correction(row) -> str:  # type: ignore[no-untyped-def]
+    """The correction a row's first or second cell names ("greenhouse-geisser"), "" for none (an empty cell is no
+    unit: the row of a correction under its effect or error term starts at its second cell)."""
+    for c in (1, 2):
+        m = _CORRECTION.fullmatch(row[c][0].text) if c in row else None
+        if m:
+            return re.sub(r"[-–\s]+", "-", m.group(1).lower())
+    return ""
+
+
+def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, int, str, float | None]]:  # type: ignore[no-untyped-def]
+    """(row, block, correction, df) of each Residuals (Error, Within) row of the table in order, the df from its df
+    column; an error term's block takes the rows under it that name only a correction (SPSS's "Error(time)" and its
+    Greenhouse-Geisser, Huynh-Feldt and Lower-bound rows)."""
     column = next((k for k, v in roles.items() if v == "df"), None)
-    out = []
+    out: list[tuple[int, int, str, float | None]] = []
+    block, open_block = 0, False
     for r in sorted(rows):
         row = rows[r]
-        if column in row and _ERROR_ROW.fullmatch(row[min(row)][0].text):
-            found = _number(row[column][0].text, mark)
-            out.append((r, found[1].value if found is not None else None))
+        first = row[min(row)][0].text  # (an empty cell is no unit: SPSS's "Residual" under "1 | Regression" is in the second column)
+        if _ERROR_ROW.fullmatch(first):
+            block, open_block = block + 1, True
+        elif not (open_block and _CORRECTION.fullmatch(first)):  # a correction's row under the error term
+            open_block = False
+            continue
+        found = _number(row[column][0].text, mark) if column in row else None
+        out.append((r, block, _correction(row), found[1].value if found is not None else None))
     return out
 
 
-def _error_df(errors: list[tuple[int, float | None]], r: int) -> float | None:
-    """The df of the error term of the effect in row ``r``: the first error row below it (an effect's error follows
-    its effects: "Error (between subjects)" after the between-subjects effects, R's Residuals last), else the last above."""
+def _error_df(errors: list[tuple[int, int, str, float | None]], r: int, correction: str) -> float | None:
+    """The df of the error term of the effect in row ``r``: its row in the first error block below the effect (an
+    effect's error follows its effects: "Error (between subjects)" after the between-subjects effects, R's Residuals
+    last), else in the last above — the row of the effect's correction when it names one (a Greenhouse-Geisser F takes
+    the Greenhouse-Geisser error df), else the block's first."""
     k = bisect.bisect_right(errors, (r, math.inf))
-    return errors[k][1] if k < len(errors) else errors[-1][1] if errors else None
+    if not errors:
+        return None
+    block = errors[k][1] if k < len(errors) else errors[-1][1]
+    rows = [e for e in errors if e[1] == block]
+    same = [e for e in rows if e[2] == correction] if correction else []
+    return (same or rows)[0][3] if not correction or same else None
 
 
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
@@ -230,7 +259,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     groups, total = caption_sizes(caption)
     found: list[TableStatistic] = []
     used: set[int] = set()
-    error_dfs: dict[int, list[tuple[int, float | None]]] = {}
+    error_dfs: dict[int, list[tuple[int, int, str, float | None]]] = {}
     header_above = False  # the row before was a header row
     for r in sorted(rows):
         row = rows[r]
@@ -297,7 +326,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 how += ", the df(num) and df(den) columns"
             if role == "F" and len(df) == 1 and id(roles) not in error_dfs:  # once per header, not once per row
                 error_dfs[id(roles)] = _error_dfs(rows, roles, mark)
-            error_df = _error_df(error_dfs[id(roles)], r) if role == "F" and len(df) == 1 else None
+            error_df = _error_df(error_dfs[id(roles)], r, _correction(row)) if role == "F" and len(df) == 1 else None
             if error_df is not None:
                 df = (df[0], Number(f"{error_df:g}", error_df, 0, 0, 0))
                 how += ", the error row's df"
