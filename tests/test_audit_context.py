@@ -287,6 +287,38 @@ def test_spss_within_subjects_table_takes_each_corrections_error_df(tmp_path):
     assert e.found.startswith("F(4, 235) = 42.04") and e.codes == []
 
 
+def test_spss_test_statistics_tables_are_read_down_their_columns(tmp_path):
+    """SPSS's Test Statistics tables lay a test down a column: Mann–Whitney's and Wilcoxon's "Z" with "Asymp. Sig.
+    (2-tailed)", Kruskal–Wallis' "Kruskal-Wallis H" and Friedman's "Chi-Square" each with "df" and "Asymp. Sig." below.
+    They had not been read; each is now a statistic with the df and p of its column. Numbers: pingouin's penguins
+    (Adelie body mass by sex: Mann–Whitney's z, tie-corrected, as SPSS computes it; flipper length by species:
+    Kruskal–Wallis from scipy) and rm_anova_wide (Friedman from scipy); one p retyped."""
+    import pingouin as pg
+
+    penguins = pg.read_dataset("penguins").dropna(subset=["sex", "body_mass_g", "flipper_length_mm"])
+    adelie = penguins[penguins["species"] == "Adelie"]
+    f, m = (adelie.loc[adelie["sex"] == s, "body_mass_g"].to_numpy() for s in ("female", "male"))
+    u = stats.mannwhitneyu(f, m).statistic
+    n1, n2 = len(f), len(m)
+    _, counts = np.unique(np.concatenate([f, m]), return_counts=True)
+    n = n1 + n2
+    z = (u - n1 * n2 / 2) / np.sqrt(n1 * n2 / 12 * ((n + 1) - (counts ** 3 - counts).sum() / (n * (n - 1))))
+    kw = stats.kruskal(*(g["flipper_length_mm"].to_numpy() for _, g in penguins.groupby("species")))
+    weeks = pg.read_dataset("rm_anova_wide").dropna()
+    fr = stats.friedmanchisquare(*(weeks[c] for c in weeks.columns))
+
+    def sig(p):
+        return f"{p:.3f}".lstrip("0") if p >= 0.001 else ".000"
+
+    tables = [("Test Statistics", [("", "body mass"), ("Mann-Whitney U", f"{u:.3f}"), ("Z", f"{z:.3f}"), ("Asymp. Sig. (2-tailed)", sig(2 * stats.norm.sf(abs(z))))]),
+              ("Test Statistics", [("", "flipper length"), ("Kruskal-Wallis H", f"{kw.statistic:.3f}"), ("df", "2"), ("Asymp. Sig.", sig(kw.pvalue))]),
+              ("Test Statistics", [("N", str(len(weeks))), ("Chi-Square", f"{fr.statistic:.3f}"), ("df", "3"), ("Asymp. Sig.", sig(fr.pvalue))])]
+    entries = audit_file(_doc(tmp_path / "tests.docx", tables=tables))
+    assert [e.found.split(" =")[0] for e in entries] == ["z", "H(2)", "χ²(3)"] and all(e.codes == [] and e.checked for e in entries)
+    retyped = tables[:2] + [("Test Statistics", tables[2][1][:3] + [("Asymp. Sig.", ".500")])]
+    assert ["p-does-not-follow" in e.codes for e in audit_file(_doc(tmp_path / "tests2.docx", tables=retyped))] == [False, False, True]
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

@@ -371,7 +371,45 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                             break
                 readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table"))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
-    return found + _correlation_rows(rows, mark), used
+    return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark), used
+
+
+# SPSS's Test Statistics tables lay a test out down a column, a row for each of its parts: the Mann–Whitney and Wilcoxon
+# tests' "Z", Kruskal–Wallis' "Kruskal-Wallis H" (older versions: "Chi-Square"), Friedman's "Chi-Square", each with its
+# "df" and "Asymp. Sig." rows below
+_STAT_ROW = {"z": re.compile(r"(?i)\s*z\s*"), "H": re.compile(r"(?i)\s*kruskal[-–\s]wallis\s+h\s*"),
+             "chi2": re.compile(r"(?i)\s*chi[-–\s]?square\s*")}
+_ASYMP_ROW = re.compile(r"(?i)\s*asymp(?:\.|totic)\s*sig(?:\.|nificance)?\s*(?:\((?:2-tailed|2-sided(?: test)?)\))?\s*")
+_DF_ROW = re.compile(r"(?i)\s*df\s*")
+
+
+def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """The tests of a table laid out down its columns, as SPSS's Test Statistics tables are: in each column, a z, H or
+    χ² row with the df row and the Asymp. Sig. row of the same column (a table without an Asymp. Sig. row is none)."""
+    labels = {r: row[1][0].text for r, row in rows.items() if 1 in row}
+    sig = next((r for r, text in labels.items() if _ASYMP_ROW.fullmatch(text)), None)
+    if sig is None:
+        return []
+    df_row = next((r for r, text in labels.items() if _DF_ROW.fullmatch(text)), None)
+    found: list[TableStatistic] = []
+    for r, text in labels.items():
+        symbol = next((name for name, pattern in _STAT_ROW.items() if pattern.fullmatch(text)), None)
+        if symbol is None:
+            continue
+        for c in sorted(rows[r]):
+            if c == 1 or c not in rows[sig]:
+                continue
+            value, p = _number(rows[r][c][0].text, mark), _p_cell(rows[sig][c][0].text, mark)
+            size = _number(rows[df_row][c][0].text, mark) if df_row is not None and c in rows[df_row] else None
+            if value is None or p is None or (symbol != "z" and size is None):
+                continue
+            df = () if symbol == "z" else (size[1],)  # type: ignore[index]
+            label = {"chi2": "χ²"}.get(symbol, symbol)
+            rep = Reported(symbol, label, value[1].start, value[1].start, value[1].end, df, None, value[0], value[1], p)
+            rep.text = f"{label}{'(' + df[0].text + ')' if df else ''} {value[0]} {value[1].text}, p {p.op} {p.number.text}" if p.number is not None else ""
+            found.append(TableStatistic(rows[r][c][0], rep, None, f"read from the table's row: the {text.strip()} row" + (", the df row" if df else "")
+                                        + ", the Asymp. Sig. row, in its column"))
+    return found
 
 
 # SPSS's Correlations table: under each variable a row of coefficients ("Pearson Correlation", or Spearman's and Kendall's
