@@ -14,7 +14,6 @@ makes, so that a finding is reported only when no reading fits.
 from __future__ import annotations
 
 import bisect
-import math
 import re
 from dataclasses import dataclass, replace
 from typing import Sequence
@@ -197,38 +196,38 @@ def _correction(row) -> str:  # type: ignore[no-untyped-def]
     return ""
 
 
-def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, int, str, float | None]]:  # type: ignore[no-untyped-def]
-    """(row, block, correction, df) of each Residuals (Error, Within) row of the table in order, the df from its df
-    column; an error term's block takes the rows under it that name only a correction (SPSS's "Error(time)" and its
-    Greenhouse-Geisser, Huynh-Feldt and Lower-bound rows)."""
+def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, float | None, dict[str, float | None]]]:  # type: ignore[no-untyped-def]
+    """The table's error terms (Residuals, Error, Within rows) in order: (row, df, the df of each correction) — an
+    error term takes the rows under it that name only a correction (SPSS's "Error(time)" and its Greenhouse-Geisser,
+    Huynh-Feldt and Lower-bound rows); each df from the df column."""
     column = next((k for k, v in roles.items() if v == "df"), None)
-    out: list[tuple[int, int, str, float | None]] = []
-    block, open_block = 0, False
+    out: list[tuple[int, float | None, dict[str, float | None]]] = []
+    open_block = False
     for r in sorted(rows):
         row = rows[r]
         first = row[min(row)][0].text  # (an empty cell is no unit: SPSS's "Residual" under "1 | Regression" is in the second column)
-        if _ERROR_ROW.fullmatch(first):
-            block, open_block = block + 1, True
-        elif not (open_block and _CORRECTION.fullmatch(first)):  # a correction's row under the error term
-            open_block = False
-            continue
         found = _number(row[column][0].text, mark) if column in row else None
-        out.append((r, block, _correction(row), found[1].value if found is not None else None))
+        df = found[1].value if found is not None else None
+        if _ERROR_ROW.fullmatch(first):
+            out.append((r, df, {_correction(row): df} if _correction(row) else {}))
+            open_block = True
+        elif open_block and _CORRECTION.fullmatch(first):  # a correction's row under the error term
+            out[-1][2].setdefault(_correction(row), df)
+        else:
+            open_block = False
     return out
 
 
-def _error_df(errors: list[tuple[int, int, str, float | None]], r: int, correction: str) -> float | None:
-    """The df of the error term of the effect in row ``r``: its row in the first error block below the effect (an
-    effect's error follows its effects: "Error (between subjects)" after the between-subjects effects, R's Residuals
-    last), else in the last above — the row of the effect's correction when it names one (a Greenhouse-Geisser F takes
-    the Greenhouse-Geisser error df), else the block's first."""
-    k = bisect.bisect_right(errors, (r, math.inf))
+def _error_df(errors: list[tuple[int, float | None, dict[str, float | None]]], r: int, correction: str) -> float | None:
+    """The df of the error term of the effect in row ``r``: the first error term below the effect (an effect's error
+    follows its effects: "Error (between subjects)" after the between-subjects effects, R's Residuals last), else the
+    last above — its row of the effect's correction when the effect names one (a Greenhouse-Geisser F takes the
+    Greenhouse-Geisser error df; None when the error term has no such row), else its first row."""
     if not errors:
         return None
-    block = errors[k][1] if k < len(errors) else errors[-1][1]
-    rows = [e for e in errors if e[1] == block]
-    same = [e for e in rows if e[2] == correction] if correction else []
-    return (same or rows)[0][3] if not correction or same else None
+    k = bisect.bisect_right(errors, r, key=lambda e: e[0])
+    _, df, corrected = errors[k] if k < len(errors) else errors[-1]
+    return corrected.get(correction) if correction else df
 
 
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
@@ -259,7 +258,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     groups, total = caption_sizes(caption)
     found: list[TableStatistic] = []
     used: set[int] = set()
-    error_dfs: dict[int, list[tuple[int, int, str, float | None]]] = {}
+    error_dfs: dict[int, list[tuple[int, float | None, dict[str, float | None]]]] = {}
     header_above = False  # the row before was a header row
     for r in sorted(rows):
         row = rows[r]
