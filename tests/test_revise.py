@@ -591,3 +591,19 @@ def test_text_a_tracked_move_took_away_is_not_read(tmp_path):
     assert [text for _, text in changes] == ["r(40) = 0.31, p = .046", "r(40) = .31, p = .046", "Moved: t(38) = 2.14, p = .039" [7:],
                                              "t(38) = 2.14, p = .039"]
     assert changes[2][0] == changes[3][0] == f"{W}moveTo"  # the moved statistic revised at its new place, in the move
+
+
+def test_hidden_text_is_not_read(tmp_path):
+    """Hidden text (Font > Hidden, w:vanish) is not printed: a statistic in it is none (authors hide an earlier
+    analysis's numbers), and the places after it hold for a revision. Numbers this test's own."""
+    d = docx.Document()
+    p = d.add_paragraph("Before. ")
+    p.add_run("Old: t(38) = 2.41, p = .5. ").font.hidden = True
+    p.add_run("Now: r(40) = 0.31, p = .046.")
+    d.save(str(tmp_path / "hidden.docx"))
+    assert [(e.location, e.found) for e in audit_file(tmp_path / "hidden.docx")] == [("paragraph 1, characters 14–35", "r(40) = 0.31, p = .046")]
+    main(["audit", str(tmp_path / "hidden.docx"), "--revise", str(tmp_path / "revised.docx")])
+    with zipfile.ZipFile(tmp_path / "revised.docx") as z:
+        body = etree.fromstring(z.read("word/document.xml"))
+    assert ["".join(t.text for t in c.iter(f"{W}t", f"{W}delText")).replace("\u00a0", " ") for c in body.iter(f"{W}del", f"{W}ins")] == \
+        ["r(40) = 0.31, p = .046", "r(40) = .31, p = .046"]

@@ -458,6 +458,18 @@ def owner(node, parent=None):  # type: ignore[no-untyped-def]
     return node
 _R, _T, _DEL, _I, _RPR, _VERT = f"{_W}r", f"{_W}t", f"{_W}del", f"{_W}i", f"{_W}rPr", f"{_W}vertAlign"
 REMOVED = frozenset({_DEL, f"{_W}moveFrom"})  # a tracked deletion, and the place a tracked move took text from: not the text
+_VANISH = f"{_W}vanish"
+
+
+def _on(toggle) -> bool:  # type: ignore[no-untyped-def]
+    """Whether a run property that is on or off (w:i, w:vanish) is on: present, and not set to 0, false or off."""
+    return toggle.get(_VAL, "true") not in ("0", "false", "off")
+
+
+def hidden(run) -> bool:  # type: ignore[no-untyped-def]
+    """Whether a run is hidden text (w:vanish in its own properties), which Word does not print: not read."""
+    toggle = run.find(f"{_RPR}/{_VANISH}")
+    return toggle is not None and _on(toggle)
 _CHUNKS = {f"{_W}tab": "\t", f"{_W}br": "\n", f"{_W}cr": "\n", f"{_W}noBreakHyphen": "-"}
 _M = "{http://schemas.openxmlformats.org/officeDocument/2006/math}"
 OMATH = f"{_M}oMath"  # an equation (Office Math), inline or in an equation paragraph (m:oMathPara holds them)
@@ -533,7 +545,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
     length = 0
     italic, lowered, skip, run = False, None, True, None  # text outside a run is not read; lowered: a script's characters
     symbol = False  # the run is set in the Symbol font
-    for node in para.iter(_R, _T, _I, _VERT, _FONTS, _SYM, OMATH, *_CHUNKS):
+    for node in para.iter(_R, _T, _I, _VERT, _FONTS, _VANISH, _SYM, OMATH, *_CHUNKS):
         tag = node.tag
         if tag == OMATH:  # an equation: its text as it reads (its own runs are not w:r, w:t)
             skip = True
@@ -552,11 +564,13 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
             own = parent is para or owner(node, parent) is para  # (a text box's runs are its own paragraphs')
             run, skip, italic, lowered, symbol = node, not own or parent.tag in REMOVED, False, None, False
             continue
-        if tag == _I or tag == _VERT or tag == _FONTS:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
+        if tag == _I or tag == _VERT or tag == _FONTS or tag == _VANISH:  # as set in the properties of the current run (not a paragraph mark's, not a tracked change's old ones)
             props = node.getparent()
             if props is not None and props.tag == _RPR and props.getparent() is run:
-                if tag == _I:
-                    italic = node.get(_VAL, "true") not in ("0", "false", "off")
+                if tag == _VANISH:  # hidden text is not printed
+                    skip = skip or _on(node)
+                elif tag == _I:
+                    italic = _on(node)
                 elif tag == _VERT:
                     lowered = _SCRIPTS.get(node.get(_VAL, ""))
                 else:

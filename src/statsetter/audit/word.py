@@ -23,7 +23,7 @@ from ..style.numbers import numbers_for
 from ..styled import StyledText
 from .checks import RATIOS, Finding
 from .parsing import PValue, Reported
-from .reading import _SYM, OMATH, REMOVED, math_text, owner, symbol_text
+from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_text
 
 if TYPE_CHECKING:
     from ..style.profile import Style
@@ -323,7 +323,7 @@ def _runs(p):  # type: ignore[no-untyped-def]
             n = sum(len(text) for text, _ in math_text(r))
         else:
             parent = r.getparent()
-            if parent is not None and parent.tag in REMOVED:
+            if parent is not None and parent.tag in REMOVED or hidden(r):  # (not read: counted as nothing)
                 continue
             n = sum(_node_length(c) for c in r)
         out.append((r, at, at + n))
