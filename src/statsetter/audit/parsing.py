@@ -382,7 +382,17 @@ def _inner(pat: _Patterns, inner: str, start: int) -> tuple[tuple[Number, ...], 
 # evidence either way) or with a point (the second: "p = .03", "t = 2.14"); the two kinds in one scan — after the
 # operator and sign, a number's first mark decides which can match (never both), and no match holds another operator,
 # so the scan finds what two patterns, one for each kind, would find (tests/test_audit_linear.py)
-_DECIMAL_TYPED = re.compile(r"[=<>]\s*[-−]?(?:(0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)|(\d*\.\d+)(?!\d|,\d))")
+_COMMA_NUMBER = r"(0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)"
+_DECIMAL_TYPED = re.compile(rf"[=<>]\s*[-−]?(?:{_COMMA_NUMBER}|(\d*\.\d+)(?!\d|,\d))")
+# the first kind alone, and the comma before a digit it needs, looked for first (each match of the pattern above starts
+# at its one operator, so this finds a number where that pattern counts one typed with a comma)
+_COMMA_TYPED = re.compile(rf"[=<>]\s*[-−]?{_COMMA_NUMBER}")
+_COMMA_DIGIT = re.compile(r",\d")
+
+
+def comma_typed(text: str) -> bool:
+    """Whether ``text`` has a number after =, < or > that only a decimal comma explains (decimal_mark_of counts one)."""
+    return _COMMA_DIGIT.search(text) is not None and _COMMA_TYPED.search(text) is not None
 
 
 def decimal_mark_of(texts: "Iterable[str]") -> tuple[str, int, int] | None:

@@ -514,7 +514,12 @@ _SYMBOL_FONT = str.maketrans(
     "ABCDEFGHIKLMNOPQRSTUWXYZabcdefghijklmnopqrstuvwxyz-\u00a3\u00b3\u00b1\u00b4\u00b9\u00bb\u00b0",
     "ΑΒΧΔΕΦΓΗΙΚΛΜΝΟΠΘΡΣΤΥΩΞΨΖαβχδεφγηιϕκλμνοπθρστυϖωξψζ−≤≥±×≠≈°")
 _SYM, _FONTS = f"{_W}sym", f"{_W}rFonts"
-_FONT_ATTRS = (f"{_W}ascii", f"{_W}hAnsi")
+_FONT_ATTRS = (f"{_W}ascii", f"{_W}hAnsi")  # the fonts of Latin letters
+
+
+def symbol_font(props) -> bool:  # type: ignore[no-untyped-def]
+    """Whether ``props`` (a run property) sets the Symbol font for Latin letters: they print as Greek ones."""
+    return props.tag == _FONTS and any(props.get(a) == "Symbol" for a in _FONT_ATTRS)
 
 
 def symbol_text(node) -> str:  # type: ignore[no-untyped-def]
@@ -574,7 +579,7 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
                 elif tag == _VERT:
                     lowered = _SCRIPTS.get(node.get(_VAL, ""))
                 else:
-                    symbol = any(node.get(a) == "Symbol" for a in _FONT_ATTRS)
+                    symbol = symbol_font(node)
             continue
         if skip:
             continue

@@ -24,7 +24,7 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, coefficient_ratio, corrected_df, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
-from .parsing import Number, Reported, coefficient_before, decimal_mark_of, find_statistics, group_sizes, is_wald
+from .parsing import Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -271,13 +271,6 @@ def _recomputed(rep: Reported, assumption: str) -> str:
     return said + (f", with {assumption}" if assumption else "")
 
 
-# a number after "=", "<" or ">" that only a decimal comma explains: parsing's _DECIMAL_TYPED with its point-typed
-# alternative left out (each match starts at its one operator, so this finds one where that pattern counts one), and the
-# comma before a digit it needs, looked for first
-_COMMA_TYPED = re.compile(r"[=<>]\s*[-−]?(?:0?,\d+|[1-9]\d*,(?:\d{1,2}|\d{4,}))(?![\d,]|\.\d)")
-_COMMA_DIGIT = re.compile(r",\d")
-
-
 def reading_mark(units: Sequence[Unit], style: Style, requested: str = "auto") -> tuple[str, str]:
     """The decimal mark to read the manuscript with, and why (said to the user)."""
     if requested in (".", ","):
@@ -286,7 +279,7 @@ def reading_mark(units: Sequence[Unit], style: Style, requested: str = "auto") -
         from ..errors import InputError
 
         raise InputError(f"--decimal-mark: {requested!r} is not '.', ',' or 'auto'")
-    if style.decimal_mark == "." and not any(_COMMA_DIGIT.search(u.text) and _COMMA_TYPED.search(u.text) for u in units):
+    if style.decimal_mark == "." and not any(comma_typed(u.text) for u in units):
         return ".", ""  # no number typed with a decimal comma: the style's point (the points left uncounted: a third of the time)
     found = decimal_mark_of(u.text for u in units)
     if found is None or found[0] == style.decimal_mark:

@@ -170,6 +170,12 @@ def _p_cell(text: str, mark: str) -> PValue | None:
     return PValue(op, num, num.start, num.end, num.start, "")
 
 
+def _table_text(label: str, df: "tuple[Number, ...]", op: str, value: Number, p: PValue | None) -> str:
+    """A statistic read from a table's cells as one text: "t(38) = 2.14, p = .039" ("ns" as the table gives it)."""
+    p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
+    return f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
+
+
 def _own_column(roles: dict[int, str], column: int, role: str) -> int | None:
     """The column of ``role`` (p, df …) that belongs to the statistic in ``column``: one between it and the statistic
     columns on either side, the nearest to its right first (SPSS's Independent Samples Test puts Levene's F and its
@@ -338,8 +344,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
-            p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
-            rep.text = f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
+            rep.text = _table_text(label, df, op, value, p)
             if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
                 readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
@@ -405,7 +410,7 @@ def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no
             df = () if symbol == "z" else (size[1],)  # type: ignore[index]
             label = {"chi2": "χ²"}.get(symbol, symbol)
             rep = Reported(symbol, label, value[1].start, value[1].start, value[1].end, df, None, value[0], value[1], p)
-            rep.text = f"{label}{'(' + df[0].text + ')' if df else ''} {value[0]} {value[1].text}, p {p.op} {p.number.text}" if p.number is not None else ""
+            rep.text = _table_text(label, df, value[0], value[1], p)
             found.append(TableStatistic(rows[r][c][0], rep, None, f"read from the table's row: the {text.strip()} row" + (", the df row" if df else "")
                                         + ", the Asymp. Sig. row, in its column"))
     return found
@@ -446,6 +451,6 @@ def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[
             df = Number(f"{size[1].value - 2:g}", size[1].value - 2, 0, 0, 0)
             unit = row[c][0]
             rep = Reported(symbol, symbol, value[1].start, value[1].start, value[1].end, (df,), None, value[0], value[1], p)
-            rep.text = f"{symbol}({df.text}) {value[0]} {value[1].text}, p {p.op} {p.number.text}" if p.number is not None else ""
+            rep.text = _table_text(symbol, (df,), value[0], value[1], p)
             found.append(TableStatistic(unit, rep, None, "read from the table's row: the coefficient, the Sig. (2-tailed) and N rows below it in its column (df = N − 2)"))
     return found

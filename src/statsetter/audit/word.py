@@ -23,7 +23,7 @@ from ..style.numbers import numbers_for
 from ..styled import StyledText
 from .checks import RATIOS, Finding
 from .parsing import PValue, Reported
-from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_text
+from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_font, symbol_text
 
 if TYPE_CHECKING:
     from ..style.profile import Style
@@ -405,13 +405,7 @@ def _look(run) -> bytes:  # type: ignore[no-untyped-def]
     rpr = run.find(f"{_W}rPr")
     if rpr is None:
         return b""
-    return b"".join(etree.tostring(c) for c in rpr if c.tag not in _LOOK_IGNORED and not _symbol_font(c))
-
-
-def _symbol_font(props) -> bool:  # type: ignore[no-untyped-def]
-    """Whether ``props`` (a run property) sets the Symbol font: a Greek letter typed with it is read as the letter, and
-    the restyled text writes the letter in the text's own font."""
-    return props.tag == f"{_W}rFonts" and any(props.get(f"{_W}{a}") == "Symbol" for a in ("ascii", "hAnsi", "cs", "eastAsia"))
+    return b"".join(etree.tostring(c) for c in rpr if c.tag not in _LOOK_IGNORED and not symbol_font(c))  # (Greek typed in Symbol is read as Greek; the restyled text writes it in the text's font)
 
 
 def _new_runs(text: StyledText, model):  # type: ignore[no-untyped-def]
@@ -432,7 +426,7 @@ def _new_runs(text: StyledText, model):  # type: ignore[no-untyped-def]
                 for old in rpr.findall(f"{_W}{tag}"):
                     rpr.remove(old)
             for fonts in rpr.findall(f"{_W}rFonts"):  # the restyled text is Unicode: a Symbol font would print it as other letters
-                if _symbol_font(fonts):
+                if symbol_font(fonts):
                     rpr.remove(fonts)
             r.append(rpr)
         run = Run(r, None)  # type: ignore[arg-type]
