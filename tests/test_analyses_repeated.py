@@ -375,6 +375,13 @@ def test_mixed_anova_from_wide_data_equals_long():
         mixed_anova(wide, "Scores", "Subject", between="Group", columns=["August", "January", "June"])
     with pytest.raises(InputError, match="between"):
         mixed_anova(wide, columns=["August", "January", "June"])
+    # a missing measurement drops its person in both forms (the wide rows read as they stand, not melted and pivoted back)
+    holed = wide.assign(June=wide["June"].mask(wide.index == 4))
+    (long_group, *_), (wide_group, *_) = (mixed_anova(d[~((d["Subject"] == wide.loc[4, "Subject"]) & (d["Time"] == "June"))], "Scores", "Subject", "Time", "Group"),
+                                          mixed_anova(holed, "Scores", within="Time", between="Group", columns=["August", "January", "June"]))
+    assert wide_group.statistic == long_group.statistic and wide_group.n == long_group.n == len(wide) - 1
+    with pytest.raises(InputError, match="June: 2 columns have this name"):
+        mixed_anova(pd.concat([wide, wide[["June"]]], axis=1), between="Group", columns=["August", "January", "June"])
 
 
 def test_source_tables_of_repeated_designs_have_an_error_row_per_stratum():

@@ -67,7 +67,7 @@ def chi_square(
     counts = table.to_numpy()
     res = stats.chi2_contingency(counts, correction=yates)
     n = int(counts.sum())
-    uncorrected = stats.chi2_contingency(counts, correction=False).statistic
+    uncorrected = stats.chi2_contingency(counts, correction=False).statistic if yates else res.statistic
     m = min(r, k) - 1
     name = "phi" if (r, k) == (2, 2) else "V"
     value = math.sqrt(uncorrected / (n * m))
@@ -82,9 +82,8 @@ def chi_square(
         notes.append(Note("assumption", f"{small} of {r * k} cells have expected counts below 5 (smallest {res.expected_freq.min():.4g}).{fisher}"))
     if missing:
         notes.append(missing)
-    cells = tuple(
-        GroupSummary(f"{category_text(a)} / {category_text(b)}", n=int(table.loc[a, b])) for a in table.index for b in table.columns
-    )
+    cells = tuple(GroupSummary(f"{category_text(a)} / {category_text(b)}", n=int(counts[i, j]))
+                  for i, a in enumerate(table.index) for j, b in enumerate(table.columns))
     variables = c.variables({"row": row, "column": column}, labels)
     out = [
         Result(

@@ -528,8 +528,9 @@ def mixed_anova(
         if subject is not None:
             raise InputError("mixed_anova: give columns= (wide data) or subject= with outcome= and within= (long data), not both")
         for name in (*columns, between):
-            c.column(df, name)
-        outcome, within, subject = outcome or "the outcome", within or "measurement", "\0person"
+            if c.column(df, name).ndim > 1:
+                raise InputError(f"{name}: {df[name].shape[1]} columns have this name; rename them so that each is named once")
+        outcome, within = outcome or "the outcome", within or "measurement"
         if len({*columns, between, outcome, within}) != len(columns) + 3:
             raise InputError(f"{', '.join(columns)}: the measurements, {between}, the outcome's and the factor's names must differ")
         import pandas as pd
@@ -537,20 +538,24 @@ def mixed_anova(
         named_columns = {col: (labels or {}).get(col, col) for col in columns}  # the measurements as the text names them, in order
         if len(set(named_columns.values())) != len(columns):
             named_columns = {col: col for col in columns}
-        df = df[[*columns, between]].rename(columns=named_columns).rename_axis(None).reset_index(drop=True).rename_axis(subject).reset_index() \
-            .melt(id_vars=[subject, between], value_vars=list(named_columns.values()), var_name=within, value_name=outcome)
-        df[within] = pd.Categorical(df[within], categories=list(named_columns.values()))
+        # the rows are the people already: the measurements renamed as the text names them, each person's group beside
+        wide = pd.DataFrame({category_text(named): df[col].array for col, named in named_columns.items()})
+        columns = list(wide.columns)
+        if between in columns:
+            raise InputError(f"{between}: also a level of {within}; rename one of them")
+        wide = wide.assign(**{between: df[between].to_numpy()})
     elif not (outcome and subject and within):
         raise InputError("mixed_anova: give outcome=, subject= and within= (long data) or columns= (wide data)")
-    c.column(df, between)
-    per_person = df.groupby(subject, observed=True)[between].nunique()
-    if (per_person > 1).any():
-        raise InputError(f"{between}: person {category_text(per_person[per_person > 1].index[0])} is in more than one group; {between} must be between subjects")
-    wide, columns, _ = _wide(df, None, outcome, subject, within, "mixed_anova")
-    groups_of = df.groupby(subject, observed=True)[between].first()
-    if between in columns:
-        raise InputError(f"{between}: also a level of {within}; rename one of them")
-    wide = wide.assign(**{between: groups_of.reindex(wide.index).to_numpy()})
+    else:
+        c.column(df, between)
+        per_person = df.groupby(subject, observed=True)[between].nunique()
+        if (per_person > 1).any():
+            raise InputError(f"{between}: person {category_text(per_person[per_person > 1].index[0])} is in more than one group; {between} must be between subjects")
+        wide, columns, _ = _wide(df, None, outcome, subject, within, "mixed_anova")
+        groups_of = df.groupby(subject, observed=True)[between].first()
+        if between in columns:
+            raise InputError(f"{between}: also a level of {within}; rename one of them")
+        wide = wide.assign(**{between: groups_of.reindex(wide.index).to_numpy()})
     data, missing = c.listwise(wide, [*columns, between])
     Y = np.column_stack([c.numeric(data, col).to_numpy(dtype=float) for col in columns])
     g = data[between].map(category_text).to_numpy()
