@@ -359,3 +359,40 @@ HELD_OUT: tuple[Text | Table, ...] = (
          "significant, reported\nin terms of the linear contrast, F<1.",
          (_f(1, 41, "44.28", "< .001"),)),
 )
+
+# -- a third set: text copied out of publishers' PDFs, whose copy garbles the operators ("¼" for "=", "b" for "<", "N" for
+# ">"), as an editor or a meta-researcher pastes it; collected after the reader had been taught those garbles
+
+SOURCES.update({
+    "tandf-jia-2026": ("https://doi.org/10.1080/10447318.2026.2622580",
+                       "Jia et al. (2026), International Journal of Human–Computer Interaction, pp. 10 and 13, as copied from the "
+                       "publisher's PDF (the copy shared in a public repository)"),
+    "dss-jost-2017": ("https://doi.org/10.1016/j.dss.2017.09.003",
+                      "Jošt et al. (2017), Decision Support Systems, section 6.2, as copied from the publisher's PDF (the copy shared "
+                      "in a public repository)"),
+})
+
+COPIED: tuple[Text | Table, ...] = (
+    Text("tandf-jia-2026", "As shown in Figure 5, both the main effects of query scope, F(1, 393) ¼ 3163.43, p < 0.001, and interface "
+         "condition, F(3, 393) ¼ 16.06, p < 0.001, on SA accuracy were significant. In addition, there was a\nsignificant interaction "
+         "between query scope and interface type, F(3, 393) ¼ 6.28, p < 0.001. Post-hoc\ncomparisons showed that, across all interface "
+         "types, participants’ SA accuracy was significantly higher\nfor object-specific queries than for global queries, all ps < 0.001.",
+         (_f(1, 393, "3163.43", "< 0.001"), _f(3, 393, "16.06", "< 0.001"), _f(3, 393, "6.28", "< 0.001"))),
+    Text("tandf-jia-2026", "SA accuracy in object-specific queries was significantly affected by interface type, F(1, 393) ¼ 12.79,\n"
+         "p < 0.001, target density, F(1, 1971) ¼ 857.75, p < 0.001, and SA level, F(2, 1971) ¼ 458.21, p < 0.001.\nThe interaction "
+         "between target density and SA level was also significant, F(2, 1971) ¼ 28.16, p < 0.001.\nHowever, no significant "
+         "interactions were found between target density and interface type, F(3, 1971)\n¼ 1.28, p ¼ 0.281, or between SA level and "
+         "interface type, F(6, 1971) ¼ 0.43, p ¼ 0.860.",
+         (_f(1, 393, "12.79", "< 0.001"), _f(1, 1971, "857.75", "< 0.001"), _f(2, 1971, "458.21", "< 0.001"), _f(2, 1971, "28.16", "< 0.001"),
+          _f(3, 1971, "1.28", "= 0.281"), _f(6, 1971, "0.43", "= 0.860"))),
+    Text("tandf-jia-2026", "Participants’ SA accuracy in response to global queries was significantly influenced by SA level, F(2,\n"
+         "4353) ¼ 125.83, p < 0.001, interface type, F(3, 393) ¼ 2.86, p ¼ 0.037, and fire precedence, F(1, 4353) ¼\n6.58, p ¼ 0.010. "
+         "A significant interaction was also observed between SA level and fire precedence, F(2,\n4353) ¼ 72.90, p < 0.001. However, "
+         "the interaction between interface type and fire precedence, F(3,\n4353) ¼ 1.01, p ¼ 0.385, as well as the interaction "
+         "between SA level and interface type, F(6, 4353) ¼\n0.89, p ¼ 0.499, were not statistically significant.",
+         (_f(2, 4353, "125.83", "< 0.001"), _f(3, 393, "2.86", "= 0.037"), _f(1, 4353, "6.58", "= 0.010"), _f(2, 4353, "72.90", "< 0.001"),
+          _f(3, 4353, "1.01", "= 0.385"), _f(6, 4353, "0.89", "= 0.499"))),
+    Text("dss-jost-2017", "PU was evaluated significantly higher in the case of OH as well (average rank = 61.70), compared to those "
+         "that used C (average rank = 22.93), U = 79.00, p b 0.001. Therefore, it can be concluded that the participants perceived OH "
+         "as being easier to use and more useful than C.", (Stat("U", (), "79.00", "< 0.001"),)),
+)

@@ -1,8 +1,8 @@
 """The audit reads statistics as authors type them (issue: the audit on real
 manuscripts, point 1), kind by kind: df split by a dash, df and N split by a
 semicolon, df written apart without "=", "p = < .001", "P value =",
-scientific notation in its common forms (read as one number), ΔF, a "<"
-garbled to "b" by a PDF copy, F with its df run on (F1,23), subscript df,
+scientific notation in its common forms (read as one number), ΔF, "<", ">"
+and "=" garbled to "b", "N" and "¼" by a PDF copy, F with its df run on (F1,23), subscript df,
 thin and no-break spaces, a line break inside a statistic, a thousands comma
 in a single df. Each case is built here with its own numbers (not those of
 any publication) and its p computed with scipy, so a consistent typing must
@@ -42,6 +42,12 @@ CASES = [
     (f"t(57) = 4.62, p = {SMALL / 1e-5:.1f}E-05", "t", (57,), None, 4.62, "=", round(SMALL / 1e-5, 1) * 1e-5),
     (f"ΔF (2, 61) = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
     ("t(57) = 4.62, p b 0.001", "t", (57,), None, 4.62, "<", 0.001),
+    # the other operators a copy from a publisher's PDF garbles: ">" as "N" ("(p N 0.05)", Jošt et al., 2017, Decision
+    # Support Systems, https://doi.org/10.1016/j.dss.2017.09.003) and "=" as "¼" ("F(3, 1971) ¼ 1.28, p ¼ 0.281", Jia et
+    # al., 2026, International Journal of Human–Computer Interaction, https://doi.org/10.1080/10447318.2026.2622580):
+    # neither statistic had been read
+    ("t(44) = 2.61, p N 0.01", "t", (44,), None, 2.61, ">", 0.01),
+    (f"F(2, 61) ¼ 3.87, p ¼ {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
     (f"F2,61 = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
     (f"t₄₄ = 2.61, P = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
     (f"F(2,\u200961)\u00a0=\u00a03.87, p\u00a0=\u00a0{p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
@@ -394,3 +400,39 @@ def test_a_logistic_models_wald_column_is_read_with_its_df_and_sig(tmp_path):
     assert [e.found.split(",")[0] for e in entries] == [f"Wald(1) = {row[3]}" for row in rows[1:]]
     assert [e.codes for e in entries] == [[], [], ["p-does-not-follow"], ["coefficient-does-not-fit"], ["coefficient-does-not-fit"]]
     assert "not (B / SE)²" in entries[3].message and "Exp(B) = 12.790 is not exp(B)" in entries[4].message
+
+
+def _entries(text, style="apa7"):
+    return {e.found: e for e in audit_units([Unit("case", text)], style)}
+
+
+def test_a_bound_shared_by_several_statistics_checks_each():
+    """"ps < .05", "all ps < .001", "both p < .01", "p's > .20": one bound for the p of several statistics, as
+    psychology papers type it (practice; "all ps < 0.001" dozens of times in Jia et al., 2026, International Journal of
+    Human–Computer Interaction, https://doi.org/10.1080/10447318.2026.2622580). Each statistic before it in its
+    sentence without a p of its own is checked against it — a summary that one of them contradicts had passed unseen —
+    and none of them takes its text (its suggestion still gives its own p). Numbers here are our own; p by scipy."""
+    t1, t2 = stats.t.sf(1.10, 38) * 2, stats.t.sf(3.25, 40) * 2  # .278, .002
+    assert t1 > .05 > t2
+    found = _entries("The groups differed, t(38) = 1.10 and t(40) = 3.25, ps < .05.")
+    assert found["t(38) = 1.10"].codes == ["p-does-not-follow", "verdict-changes"] and found["t(40) = 3.25"].codes == []
+    assert "reported ps < .05" in found["t(38) = 1.10"].findings[0].evidence
+    assert found["t(40) = 3.25"].checked.endswith("against ps < .05")
+    # the forms: all, both, each; P's and Ps (AMA's capital); a bound above
+    for text in ("t(38) = 1.10 and t(40) = 3.25, all ps < .05.", "t(38) = 1.10 and t(40) = 3.25 (both p < .05).",
+                 "t(38) = 1.10 and t(40) = 3.25; all Ps < .05.", "t(38) = 1.10 and t(40) = 3.25, p's < .05."):
+        assert "p-does-not-follow" in _entries(text)["t(38) = 1.10"].codes, text
+    assert _entries("Neither was, t(38) = 1.10 and t(40) = 0.90, ps > .27.")["t(38) = 1.10"].codes == []
+    assert _entries("Neither was, t(38) = 1.10 and t(40) = 3.25, ps > .27.")["t(40) = 3.25"].codes[0] == "p-does-not-follow"
+
+
+def test_a_shared_bound_reaches_only_its_own_statistics():
+    """Only statistics without their own p, in its sentence, before it and after any earlier bound there; a list of
+    p's ("ps = .03 and .04") is no bound; a bound with no statistic before it checks nothing."""
+    assert _entries("t(38) = 1.10, p = .28, and t(40) = 3.25, ps < .05.")["t(38) = 1.10, p = .28"].codes == []
+    assert _entries("The first was t(38) = 1.10. The second, t(40) = 3.25, ps < .05.")["t(38) = 1.10"].codes == []
+    split = _entries("t(38) = 2.50 and t(40) = 3.25, ps < .05, whereas t(30) = 0.50 and t(31) = 0.90, ps > .30.")
+    assert all(e.codes == [] for e in split.values()) and len(split) == 4
+    assert "against ps > .30" in split["t(31) = 0.90"].checked and "against ps < .05" in split["t(38) = 2.50"].checked
+    assert _entries("t(38) = 1.10 and t(40) = 3.25, ps = .28 and .002, respectively.")["t(38) = 1.10"].checked == ""
+    assert [r for r in find_statistics("All ps < .001 (Table 2); see the code: keep = ps > .5") if r.symbol] == []

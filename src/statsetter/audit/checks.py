@@ -203,7 +203,7 @@ def _fits_as_printed(rep: Reported, reported: tuple[float, float]) -> bool:
 
 
 def reported_p_range(rep: Reported, alpha: float) -> tuple[float, float] | None:
-    p = rep.p
+    p = rep.p if rep.p is not None else rep.shared_p
     if p is None:
         return None
     if p.op == "ns":
@@ -233,8 +233,9 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
         return []
     if _overlap(computed, reported):
         return []
-    assert rep.p is not None
-    shown = rep.p.op if rep.p.op == "ns" else f"p {rep.p.op} {rep.p.number.text}"  # type: ignore[union-attr]
+    given = rep.p if rep.p is not None else rep.shared_p
+    assert given is not None
+    shown = given.op if given.op == "ns" else f"{'p' if given is rep.p else given.symbol_text} {given.op} {given.number.text}"  # type: ignore[union-attr]
     evidence = f"{rep.text[: rep.value.end - rep.start] if rep.value else rep.symbol_text} gives p from {computed[0]:.4g} to {computed[1]:.4g}; reported {shown}"
     if rep.symbol in ("t", "z", "r", "rs") and _overlap((computed[0] / 2, computed[1] / 2), reported):
         return [Finding("one-sided", "The reported p matches a one-sided test only; say that the test was one-sided, or report the two-sided p.", evidence)]

@@ -102,6 +102,7 @@ class Reported:
     operators: list[tuple[int, int]] = field(default_factory=list)  # (start, end) of each operator with its spacing
     text: str = ""
     p_range: tuple[float, ...] | None = None  # filled by the checks (cache)
+    shared_p: PValue | None = None  # a bound on the p of several statistics ("ps < .05"): checked, never rewritten
 
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
@@ -213,27 +214,32 @@ class _Patterns:
         self.number = re.compile(num)
         self.head = re.compile(
             rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
-            rf"\s*+(?P<op>=|<|>|≤|≥|:(?<=c:))\s*+(?P<num>{num}{_EXPONENT}?)"
+            rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:))\s*+(?P<num>{num}{_EXPONENT}?)"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|b(?=\s*+\.?\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
+        # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
+        # p < .01", "each p-value ≤ .01" ("ps = .03 and .04" lists p's: not read)
+        self.shared_p = re.compile(rf"(?P<sym>[pP](?<![\w.*'’][pP])(?:s|['’]s|(?:(?<=[aA]ll\s[pP])(?<!\w[aA]ll\s[pP])|(?<=[bB]oth\s[pP])"
+                                   rf"(?<!\w[bB]oth\s[pP])|(?<=[eE]ach\s[pP])(?<!\w[eE]ach\s[pP]))(?:s|['’]s|[- ]?values?)?))(?![\w'’])"
+                                   rf"\s*+(?P<op>[<>≤≥]|[bN](?=\s*+\.?\d))\s*+(?P<num>{num}{_EXPONENT}?)")
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
-            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,]?\s*+"
+            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,¼]?\s*+"
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
-        self.effect = re.compile(r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>=)\s*+(?P<num>{num})")
-        self.ratio = re.compile(r"(?P<name>" + "|".join(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:\s*+(?P<op>=)|{_RATIO_WITHOUT_EQUALS})\s*+(?P<num>{num})")
+        self.effect = re.compile(r"(?P<name>" + "|".join(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{num})")
+        self.ratio = re.compile(r"(?P<name>" + "|".join(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})\s*+(?P<num>{num})")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
-        self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
+        self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
                              rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         # the unstandardised coefficient as "B" or "b", its standard error as "SE", "SE B" or "SEB"
-        self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+=\s*+(?P<num>{num})")  # (not the B of "SE B")
-        self.coef_se = re.compile(rf"S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+=\s*+(?P<num>{num})")
-        self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+=\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
+        self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+[=¼]\s*+(?P<num>{num})")  # (not the B of "SE B")
+        self.coef_se = re.compile(rf"S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<num>{num})")
+        self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+[=¼]\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
         # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan)
         prose = r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
@@ -458,7 +464,27 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
             out += _orphans(pat, text, piece, stop, rare)
             piece = (b.end() if b else gap_end) if stop < gap_end else gap_end
     out.sort(key=lambda r: r.start)
+    bare = next((r.start for r in out if r.symbol is not None and r.p is None), None)  # (most statistics carry their p)
+    if bare is not None:
+        _share(pat, text, out, bare)
     return out
+
+
+def _share(pat: _Patterns, text: str, out: list[Reported], since: int) -> None:
+    """Each bound shared by several statistics ("ps < .05") given to the statistics without a p of their own before it in
+    its sentence (after any bound before it there): the checks test each against it, and none of them takes its text.
+    ``since``: where the first statistic without a p starts."""
+    starts = [r.start for r in out]
+    for m in pat.shared_p.finditer(text, since):
+        number = pat.to_number(m.group("num"), m.start("num"))
+        if number is None or not 0 < number.value <= 1:
+            continue
+        shared = _new_p(_GARBLED.get(m.group("op"), m.group("op")), number, m.start(), m.end(), m.start(), m.group("sym"), False)
+        first = max(_sentence_start(pat, text, 0, m.start()), since)
+        for rep in out[bisect.bisect_left(starts, first) : bisect.bisect_left(starts, m.start())]:
+            if rep.symbol is not None and rep.p is None and rep.end <= m.start():
+                rep.shared_p = shared
+        since = m.end()
 
 
 class _Index:
@@ -556,7 +582,8 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     return found["B"], found["SE"]
 
 
-_OPERATOR_OR_NS = re.compile(r"[=<>≤≥n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
+_OPERATOR_OR_NS = re.compile(r"[=<>≤≥¼n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
+_GARBLED_P = re.compile(r"[bN](?<=[pP]\s[bN])\s*+\.?\d")  # "p b 0.01", "P N .05" (see _GARBLED; "¼" is in _OPERATOR_OR_NS)
 _RATIO_BARE = re.compile(r"R(?<=[OHR]R)")  # where a ratio's abbreviation may stand without "=" (then the pattern decides)
 
 
@@ -575,15 +602,18 @@ def _ratios_in(text: str, start: int, end: int, rare: bool) -> bool:
 
 def _rare_words(text: str) -> bool:
     """Whether a paragraph has what only a few statistics are typed with (OR, HR, RR and the ratios ending in them;
-    "ratio", "risk"; "value:"): looked for once a paragraph, so that most clauses and gaps are spared the searches."""
-    return ("R" in text and ("OR" in text or "HR" in text or "RR" in text)) or "ratio" in text or "risk" in text or "value" in text
+    "ratio", "risk"; "value:"; an operator garbled by a copy from a PDF, _GARBLED): looked for once a paragraph, so that
+    most clauses and gaps are spared the searches."""
+    return (("R" in text and ("OR" in text or "HR" in text or "RR" in text)) or "ratio" in text or "risk" in text or "value" in text
+            or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text)
 
 
 def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
     """Whether text[start:end] may hold a p, an effect size or a descriptive: an operator, "ns", a ratio's name or a
     colon after "value" (plain searches for the words: a pattern of common letters would slow every gap's scan)."""
     return (_OPERATOR_OR_NS.search(text, start, end) is not None or _ratios_in(text, start, end, rare)
-            or rare and (text.find("value:", start, end) >= 0 or text.find("values:", start, end) >= 0))
+            or rare and (text.find("value:", start, end) >= 0 or text.find("values:", start, end) >= 0
+                         or _GARBLED_P.search(text, start, end) is not None))
 
 
 def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True) -> list[Reported]:
@@ -634,7 +664,7 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
         one = pat.to_number(inner, m.start("inner"))  # t(1,198): one df with a thousands comma, as a t or r has one
         dfs = (one,) if one is not None else dfs
     op = m.group("op")
-    return Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, "=" if op == ":" else op, value)
+    return Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, "=" if op in (":", "¼") else op, value)
 
 
 _OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
@@ -678,6 +708,11 @@ _ADJUSTED_WORDS = ("adjusted", "corrected", "holm", "bonferroni", "sidak", "šid
 _ADJUSTED = re.compile(r"(?i:adjusted|corrected|holm|bonferroni|sidak|šidák|fdr|benjamini)[\s-]*$")
 
 
+# operators as a copy from a PDF garbles them (Elsevier's "p b 0.01" for "<", "p N 0.05" for ">"; Taylor & Francis's
+# "F(1, 393) ¼ 12.79" for "="), and "p-value: 0.013" (as R's summary of lm prints it) for "="; "p = < .001" means "<"
+_GARBLED = {"b": "<", "N": ">", "¼": "=", ":": "="}
+
+
 def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     text, at = m.string, m.start()
     last = at - 1  # the character before the white space and hyphens before the p: a word of _ADJUSTED must end there
@@ -693,8 +728,7 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     if number is None:
         return None
     op = m.group("op")
-    # "p b 0.01": a "<" garbled by a PDF copy; "p = < .001" means "<"; "p-value: 0.013" (as R's summary of lm prints it) "="
-    op = "<" if op == "b" else "=" if op == ":" else op[-1] if len(op) > 1 else op
+    op = _GARBLED.get(op, op[-1] if len(op) > 1 else op)
     return _new_p(op, number, at, m.end("num"), at, text[at], adjusted)
 
 
@@ -704,7 +738,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     events: list[tuple[int, str, re.Match[str]]] = []
     # a search is skipped where the clause lacks what its pattern must contain: an interval its level's percent sign,
     # an effect size and an n their "=", a ratio its name, a df written apart its "df"
-    equals = text.find("=", start, end) >= 0
+    equals = text.find("=", start, end) >= 0 or (rare and text.find("¼", start, end) >= 0)
     ratios = _ratios_in(text, start, end, rare)
     for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
                                 ("effect", pat.ratio, ratios),

@@ -264,10 +264,12 @@ def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Repor
 def _recomputed(rep: Reported, assumption: str) -> str:
     """What the consistency check recomputed, to reproduce a finding ("" when nothing was)."""
     computed = p_range(rep)
-    if computed is None or rep.p is None or rep.value is None:
+    if computed is None or (rep.p is None and rep.shared_p is None) or rep.value is None:
         return ""
     df = f"({', '.join(f'{d.value:g}' for d in rep.df)})" if rep.df else ""
     said = f"p recomputed from {rep.symbol}{df} {rep.op} {rep.value.text}: {computed[0]:.4g} to {computed[1]:.4g}"
+    if rep.p is None and rep.shared_p is not None and rep.shared_p.number is not None:  # checked against a bound it shares
+        said += f", against {rep.shared_p.symbol_text} {rep.shared_p.op} {rep.shared_p.number.text}"
     return said + (f", with {assumption}" if assumption else "")
 
 
