@@ -478,6 +478,26 @@ def test_source_index_maps_every_kept_character_back():
         assert source == char or source.translate(str.maketrans("23", "²³")) == char, (i, char, source)
 
 
+def test_inline_html_in_markdown_is_read_as_it_prints(tmp_path, capsys):
+    """Markdown converted from a PDF or Word keeps HTML tags: "χ<sup>2</sup> (5, N = 5473) = 65.149, p b 0.001" (McLeod
+    & Dolezel, 2018, Decision Support Systems, https://doi.org/10.1016/j.dss.2018.02.007, its PDF converted to Markdown
+    in a public repository: its χ² had not been read), t<sub>38</sub> (AMA's subscript df) and <i>p</i> (italic) read
+    as ^2^, ~38~ and *p* are (the tags not left in the text); the locations point at the file's columns, tags included."""
+    from statsetter.audit.reading import _text_units
+
+    block = "χ<sup>2</sup> (5, N = 5473) = 65.149, p b 0.001; <i>t</i><sub>38</sub> = 2.10, <em>P</em> = .04; signi<sup>fi</sup>cant"
+    unit = next(_text_units(block, ".md"))
+    assert unit.text == "χ² (5, N = 5473) = 65.149, p b 0.001; t₃₈ = 2.10, P = .04; significant"
+    path = tmp_path / "converted.md"
+    path.write_text(block + "\n", encoding="utf-8")
+    capsys.readouterr()
+    main(["audit", str(path), "--json"])
+    rows = {row["found"]: row for row in json.loads(capsys.readouterr().out)}
+    assert set(rows) == {"χ² (5, N = 5473) = 65.149, p b 0.001", "t₃₈ = 2.10, P = .04"}
+    assert rows["χ² (5, N = 5473) = 65.149, p b 0.001"]["location"] == f"line 1, characters 1–{block.index(' 0.001') + 6}"
+    assert "p-does-not-follow" not in rows["t₃₈ = 2.10, P = .04"]["codes"]  # t(38) = 2.10 gives p = .042
+
+
 def _penguin_groups():
     import pingouin as pg
 

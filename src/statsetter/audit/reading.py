@@ -93,7 +93,8 @@ _BLANK = " \t\n\r\u200b"  # white space and a comment's blanks
 _TEX_COMMENT = re.compile(r"(?m:^([ \t]*))?(?<!\\)%[^\n]*")  # from an unescaped % to the line's end (\% prints a percent sign)
 
 
-_MD_ITALIC = re.compile(r"(?<![*A-Za-z0-9])([*_])(?!\s)([^*_\n]{1,40}?)(?<!\s)\1(?![*A-Za-z0-9])")
+# *t*, _t_, and inline HTML's <i>t</i> and <em>t</em> (Markdown converted from Word or a PDF often carries HTML tags)
+_MD_ITALIC = re.compile(r"(?<![*A-Za-z0-9])([*_])(?!\s)([^*_\n]{1,40}?)(?<!\s)\1(?![*A-Za-z0-9])|<(i|em)>([^<>\n]{1,40})</\3>")
 _TEX_ITALIC = re.compile(r"\\textit\{([^{}]{1,40})\}|\\emph\{([^{}]{1,40})\}|\$([^$\n]{1,40})\$")
 
 
@@ -118,8 +119,9 @@ _TEX_CHAR = re.compile("(" + "|".join(re.escape(k) for k in sorted(_TEX_CHARS, k
 _TEX_BOX = re.compile(r"\\rlap\{([^{}]{0,40})\}(?:\\phantom\{[^{}]{0,40}\})?")
 _TEX_SUP = re.compile(r"\\textsuperscript\{([^{}]{1,24})\}")
 _TEX_SUB = re.compile(r"\\textsubscript\{([^{}]{1,24})\}")
-_PANDOC_SUP = re.compile(r"\^([^\^\s]{1,24})\^")
-_PANDOC_SUB = re.compile(r"~([^~\s]{1,24})~")  # (long enough for a corrected F's df: 1.67,65.31)
+# pandoc's χ^2^ and t~38~, and inline HTML's χ<sup>2</sup> and t<sub>38</sub>
+_PANDOC_SUP = re.compile(r"\^([^\^\s]{1,24})\^|<sup>([^<>\n]{1,24})</sup>")
+_PANDOC_SUB = re.compile(r"~([^~\s]{1,24})~|<sub>([^<>\n]{1,24})</sub>")  # (long enough for a corrected F's df: 1.67,65.31)
 
 
 class _Builder:
@@ -152,12 +154,13 @@ class _Builder:
 
 
 def _replace(pattern: re.Pattern[str], text: str, inner: "Callable[[str], str]") -> tuple[str, Trace | None]:
-    """``pattern``'s matches replaced by ``inner(group 1)``, traced."""
+    """``pattern``'s matches replaced by ``inner(the group that matched)``, traced."""
     out = _Builder()
     at = 0
     for m in pattern.finditer(text):
+        group = m.lastindex or 0
         out.add(text[at : m.start()], at)
-        out.add(inner(m.group(1)), m.start(1))
+        out.add(inner(m.group(group)), m.start(group))
         at = m.end()
     out.add(text[at:], at)
     return out.text(), out.trace()
@@ -171,7 +174,7 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     tex = suffix == ".tex"
     out, spans, at = _Builder(), [], 0
     for m in (_TEX_ITALIC if tex else _MD_ITALIC).finditer(text):
-        group = next(g for g in range(1, 4) if m.group(g) is not None) if tex else 2
+        group = next(g for g in range(1, 4) if m.group(g) is not None) if tex else 2 if m.group(2) is not None else 4
         inner = m.group(group)
         greek = False
         if tex:
