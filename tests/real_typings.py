@@ -367,6 +367,9 @@ SOURCES.update({
     "tandf-jia-2026": ("https://doi.org/10.1080/10447318.2026.2622580",
                        "Jia et al. (2026), International Journal of Human–Computer Interaction, pp. 10 and 13, as copied from the "
                        "publisher's PDF (the copy shared in a public repository)"),
+    "biopsych-adams-2022": ("https://doi.org/10.1016/j.biopsych.2021.07.024",
+                            "Adams et al. (2022), Biological Psychiatry 91:202–215, p. 204, open access (CC BY), as copied from the "
+                            "publisher's PDF (the copy shared in a public repository)"),
     "dss-jost-2017": ("https://doi.org/10.1016/j.dss.2017.09.003",
                       "Jošt et al. (2017), Decision Support Systems, section 6.2, as copied from the publisher's PDF (the copy shared "
                       "in a public repository)"),
@@ -392,6 +395,11 @@ COPIED: tuple[Text | Table, ...] = (
          "between SA level and interface type, F(6, 4353) ¼\n0.89, p ¼ 0.499, were not statistically significant.",
          (_f(2, 4353, "125.83", "< 0.001"), _f(3, 393, "2.86", "= 0.037"), _f(1, 4353, "6.58", "= 0.010"), _f(2, 4353, "72.90", "< 0.001"),
           _f(3, 4353, "1.01", "= 0.385"), _f(6, 4353, "0.89", "= 0.499"))),
+    # "<" copied as "," ("×" as "3"), the df run on after the F
+    Text("biopsych-adams-2022", "A repeated-measures analysis of variance (between-subjects factor, group; within-subjects factors, eyes "
+         "open/closed and frequency band) demonstrated a significant interaction of frequency 3 group (F3,573 = 6.59, p , .001) but not "
+         "of eyes 3 group (F1,191 = 0.05, p = .8) or of frequency 3 eyes 3 group (F3,573 = 0.4, p = .8).",
+         (_f(3, 573, "6.59", "< .001"), _f(1, 191, "0.05", "= .8"), _f(3, 573, "0.4", "= .8"))),
     Text("dss-jost-2017", "PU was evaluated significantly higher in the case of OH as well (average rank = 61.70), compared to those "
          "that used C (average rank = 22.93), U = 79.00, p b 0.001. Therefore, it can be concluded that the participants perceived OH "
          "as being easier to use and more useful than C.", (Stat("U", (), "79.00", "< 0.001"),)),

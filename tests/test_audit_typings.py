@@ -47,6 +47,12 @@ CASES = [
     # al., 2026, International Journal of Human–Computer Interaction, https://doi.org/10.1080/10447318.2026.2622580):
     # neither statistic had been read
     ("t(44) = 2.61, p N 0.01", "t", (44,), None, 2.61, ">", 0.01),
+    # and another publisher's copy (Adams et al., 2022, Biological Psychiatry, https://doi.org/10.1016/j.biopsych.2021.07.024:
+    # "(F3,573 = 6.59, p , .001)", "(p . .2)"), whose "=" is "5" in other copies (memory); read for a p only, as the same
+    # copies turn a minus into "2" ("Z = 22.77" for −2.77 there) and a statistic's number can no longer be trusted
+    ("t(44) = 2.61, p , .05", "t", (44,), None, 2.61, "<", 0.05),
+    ("t(44) = 2.61, p . .01", "t", (44,), None, 2.61, ">", 0.01),
+    (f"t(44) = 2.61, p 5 {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
     (f"F(2, 61) ¼ 3.87, p ¼ {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
     (f"F2,61 = 3.87, p = {p3(F)}", "F", (2, 61), None, 3.87, "=", float(p3(F))),
     (f"t₄₄ = 2.61, P = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),

@@ -217,7 +217,7 @@ class _Patterns:
             rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:))\s*+(?P<num>{num}{_EXPONENT}?)"
         )
         # not after "*": "*p < .05. **p < .01." is a table's probability note, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
         # p < .01", "each p-value ≤ .01" ("ps = .03 and .04" lists p's: not read)
@@ -583,7 +583,7 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
 
 
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥¼n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
-_GARBLED_P = re.compile(r"[bN](?<=[pP]\s[bN])\s*+\.?\d")  # "p b 0.01", "P N .05" (see _GARBLED; "¼" is in _OPERATOR_OR_NS)
+_GARBLED_P = re.compile(r"[bN,5.](?<=[pP]\s[bN,5.])\s*+\.?\d")  # "p b 0.01", "P N .05", "p , .05" (see _GARBLED; "¼" is in _OPERATOR_OR_NS)
 _RATIO_BARE = re.compile(r"R(?<=[OHR]R)")  # where a ratio's abbreviation may stand without "=" (then the pattern decides)
 
 
@@ -605,7 +605,7 @@ def _rare_words(text: str) -> bool:
     "ratio", "risk"; "value:"; an operator garbled by a copy from a PDF, _GARBLED): looked for once a paragraph, so that
     most clauses and gaps are spared the searches."""
     return (("R" in text and ("OR" in text or "HR" in text or "RR" in text)) or "ratio" in text or "risk" in text or "value" in text
-            or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text)
+            or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 
 def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
@@ -709,8 +709,10 @@ _ADJUSTED = re.compile(r"(?i:adjusted|corrected|holm|bonferroni|sidak|šidák|fd
 
 
 # operators as a copy from a PDF garbles them (Elsevier's "p b 0.01" for "<", "p N 0.05" for ">"; Taylor & Francis's
-# "F(1, 393) ¼ 12.79" for "="), and "p-value: 0.013" (as R's summary of lm prints it) for "="; "p = < .001" means "<"
-_GARBLED = {"b": "<", "N": ">", "¼": "=", ":": "="}
+# "F(1, 393) ¼ 12.79" for "="; the APA's and others' "p , .05" for "<", "p . .2" for ">" and "p 5 .03" for "=", read for a p only, whose
+# number is never negative: their copies also turn a minus into "2"), and "p-value: 0.013" (as R's summary of lm prints
+# it) for "="; "p = < .001" means "<"
+_GARBLED = {"b": "<", "N": ">", "¼": "=", ":": "=", ",": "<", "5": "=", ".": ">"}
 
 
 def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:

@@ -253,8 +253,9 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     for a, b in zip(rep.df, rep.df[1:]):  # "F(1,56)": two df, not the number 1,56
         blank[a.end - rep.start : b.start - rep.start] = " " * (b.start - a.end)
     old_p = rep.p.number if rep.p is not None else None
-    if old_p is not None:
-        blank[old_p.start - rep.start : old_p.end - rep.start] = " " * (old_p.end - old_p.start)
+    if old_p is not None:  # the p with its operator (a PDF copy's "p 5 .039" has a digit for its "=")
+        at = min(rep.p.start, old_p.start) - rep.start  # type: ignore[union-attr]
+        blank[at : old_p.end - rep.start] = " " * (old_p.end - rep.start - at)
     # (a subscript's comma parts two df, F₂,₉₇: apart, not one number 297, on both sides)
     old_text = _SUBSCRIPT_COMMA.sub(" ", "".join(blank)).translate(_SUBSCRIPT_DIGITS)
     new_text = "".join(" " * len(t) if "sup" in styles else t.replace(",", " ") if "sub" in styles else t
