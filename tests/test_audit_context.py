@@ -230,15 +230,15 @@ def test_spss_correlations_table_reads_each_coefficient_with_the_sig_and_n_below
     data = sm.datasets.longley.load_pandas().exog[["GNP", "UNEMP", "ARMED"]]
     names = list(data.columns)
 
-    def matrix(kind, retype=None):
+    def matrix(kind, retype=None, tails=2):
         rows = [("", "", *names)]
         for a in names:
             coefficient = [("1" if a == b else f"{(stats.pearsonr if kind == 'pearson' else stats.spearmanr)(data[a], data[b])[0]:.3f}") for b in names]
-            sig = ["" if a == b else f"{(stats.pearsonr if kind == 'pearson' else stats.spearmanr)(data[a], data[b])[1]:.3f}" for b in names]
+            sig = ["" if a == b else f"{(stats.pearsonr if kind == 'pearson' else stats.spearmanr)(data[a], data[b])[1] / (3 - tails):.3f}" for b in names]
             if retype == a:
                 sig = [x if not x else ".001" for x in sig]
             label = "Pearson Correlation" if kind == "pearson" else "Correlation Coefficient"
-            rows += [(a, label, *coefficient), ("", "Sig. (2-tailed)", *sig), ("", "N", *["16"] * len(names))]
+            rows += [(a, label, *coefficient), ("", f"Sig. ({tails}-tailed)", *sig), ("", "N", *["16"] * len(names))]
         if kind == "spearman":
             rows = [("Spearman's rho", *r[1:]) if k == 1 else r for k, r in enumerate(rows)]
         return rows
@@ -249,6 +249,11 @@ def test_spss_correlations_table_reads_each_coefficient_with_the_sig_and_n_below
             [(e.found, e.codes) for e in entries]
     codes = [e.codes for e in audit_file(_doc(tmp_path / "retyped.docx", tables=[("Correlations", matrix("pearson", retype="UNEMP"))]))]
     assert sum("p-does-not-follow" in c for c in codes) >= 1 and sum(c == [] for c in codes) >= 3
+    # one-tailed tests asked for: SPSS prints "Sig. (1-tailed)", half the two-sided p (scipy's, halved): read, and each p
+    # that fits a one-sided test only is a note saying so, not a warning (it had not been read at all)
+    entries = audit_file(_doc(tmp_path / "one.docx", tables=[("Correlations", matrix("pearson", tails=1))]))
+    assert len(entries) == 6 and all(e.codes == [] and e.checked for e in entries), [(e.found, e.codes) for e in entries]
+    assert sum(any("one-sided test, as the text says" in n for n in e.notes) for e in entries) >= 4
 
 
 def test_spss_within_subjects_table_takes_each_corrections_error_df(tmp_path):

@@ -300,7 +300,7 @@ def _above_unadjusted(rep: Reported, alpha: float) -> bool:
     return computed is None or reported is None or reported[1] >= computed[0]
 
 
-_ONE_SIDED_SAID = re.compile(r"(?i)one[- ]?(?:tailed|sided)|directional")
+_ONE_SIDED_SAID = re.compile(r"(?i)(?:one|(?<![\d.])1)[- ]?(?:tailed|sided)|directional")
 
 
 def _one_sided_said(text: str, rep: Reported) -> "re.Match[str] | None":
@@ -395,7 +395,7 @@ def _audit_units(
                 notes.append(f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
                              f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.")
         if any(f.code == "one-sided" for f in findings):
-            said = _one_sided_said(unit.text, rep)
+            said = _one_sided_said(unit.text, rep) or (_ONE_SIDED_SAID.search(item.how) if item.how else None)  # (a table's "Sig. (1-tailed)")
             if said is not None:  # the text says the test was one-sided, and the p fits one
                 findings = [f for f in findings if f.code != "one-sided"]
                 notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")

@@ -420,14 +420,16 @@ def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no
 # "Correlation Coefficient"), then its "Sig. (2-tailed)" and its "N", each column a pair of variables
 _COEFFICIENT_ROW = re.compile(r"(?i)\s*(?:pearson\s+correlation|correlation\s+coefficient)\s*")
 _SPEARMAN = re.compile(r"(?i)spearman|rho")
-_SIG_ROW = re.compile(r"(?i)\s*sig\.?\s*\(2-tailed\)\s*")
+_SIG_ROW = re.compile(r"(?i)\s*sig\.?\s*\(([12])-tailed\)\s*")
 _N_ROW = re.compile(r"(?i)\s*n\s*")
 
 
 def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
     """The coefficients of a correlation matrix laid out as SPSS lays it out: each with the p of the Sig. (2-tailed) row
     and the N of the N row below it in its column (df = N − 2), Spearman's where the table names it (its rows are
-    "Correlation Coefficient" under "Spearman's rho"); a coefficient without a p below it (the diagonal's 1) is none."""
+    "Correlation Coefficient" under "Spearman's rho"); a coefficient without a p below it (the diagonal's 1) is none.
+    A Sig. (1-tailed) row, as SPSS prints it when asked for one-tailed tests, says so in how it was read: its p fits a
+    one-sided test, which the audit notes instead of warning."""
     order = sorted(rows)
     found: list[TableStatistic] = []
     spearman = False
@@ -439,7 +441,8 @@ def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[
         if label is None or k + 2 >= len(order):
             continue
         sig, n = rows[order[k + 1]], rows[order[k + 2]]
-        if not any(c in sig and _SIG_ROW.fullmatch(sig[c][0].text) for c in columns[:2]) or not any(c in n and _N_ROW.fullmatch(n[c][0].text) for c in columns[:2]):
+        tails = next((m.group(1) for c in columns[:2] if c in sig for m in [_SIG_ROW.fullmatch(sig[c][0].text)] if m), None)
+        if tails is None or not any(c in n and _N_ROW.fullmatch(n[c][0].text) for c in columns[:2]):
             continue
         symbol = "rs" if spearman and "pearson" not in row[label][0].text.lower() else "r"
         for c in columns:
@@ -452,5 +455,5 @@ def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[
             unit = row[c][0]
             rep = Reported(symbol, symbol, value[1].start, value[1].start, value[1].end, (df,), None, value[0], value[1], p)
             rep.text = _table_text(symbol, (df,), value[0], value[1], p)
-            found.append(TableStatistic(unit, rep, None, "read from the table's row: the coefficient, the Sig. (2-tailed) and N rows below it in its column (df = N − 2)"))
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: the coefficient, the Sig. ({tails}-tailed) and N rows below it in its column (df = N − 2)"))
     return found
