@@ -18,7 +18,7 @@ import docx
 import pytest
 from scipy import stats
 
-from real_typings import COPIED, HELD_OUT, ITEMS, SOURCES, Stat, Text
+from real_typings import COPIED, HELD_OUT, ITEMS, SOURCES, Stat, Table, Text
 from statsetter.audit.report import audit_file
 
 FLAGS = {"p-does-not-follow", "one-sided"}
@@ -171,6 +171,16 @@ def test_text_copied_from_publishers_pdfs_is_read(copied, tmp_path):
     assert retyped != COPIED[1].text
     ((_, _, entry, _),) = [row for row in _measure((Text(COPIED[1].source, retyped, COPIED[1].stats[4:5]),), tmp_path / "retyped.docx")]
     assert entry is not None and "p-does-not-follow" in entry.codes
+
+
+def test_a_finding_on_a_tables_statistic_quotes_its_whole_value(measured):
+    """The evidence of a p that does not follow quotes the statistic up to its value's end: for a statistic made from a
+    table's cells it had been cut at the cell's own offsets ("t = 0 gives p …" for t = 0.438)."""
+    flagged = [(s, e) for item, s, e, _ in measured if isinstance(item, Table) and e is not None and "p-does-not-follow" in e.codes]
+    assert len(flagged) >= 5
+    for s, e in flagged:
+        evidence = next(f.evidence for f in e.findings if f.code == "p-does-not-follow")
+        assert _norm(s.value).lstrip("<>") in _norm(evidence.split(" gives p")[0]), (s, evidence)
 
 
 def test_the_set_is_real_and_large_enough():

@@ -222,6 +222,18 @@ def _overlap(a: tuple[float, float], b: tuple[float, float]) -> bool:
     return a[0] <= b[1] + eps and b[0] <= a[1] + eps
 
 
+def _up_to_value(rep: Reported) -> str:
+    """The statistic's text up to its value's end, "t(38) = 2.10": by the value's place in the text where the text is the
+    text's own, by the value's printed form where it was made from a table's cells (their places are the cells')."""
+    if rep.value is None:
+        return rep.symbol_text
+    end = rep.value.end - rep.start
+    if rep.text[end - len(rep.value.text) : end] != rep.value.text:
+        found = rep.text.find(rep.value.text)
+        end = found + len(rep.value.text) if found >= 0 else len(rep.text)
+    return rep.text[:end]
+
+
 def consistency(rep: Reported, alpha: float) -> list[Finding]:
     if rep.p is not None and rep.p.adjusted:
         return []  # an adjusted p cannot be recomputed from one statistic
@@ -236,7 +248,7 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     given = rep.p if rep.p is not None else rep.shared_p
     assert given is not None
     shown = given.op if given.op == "ns" else f"{'p' if given is rep.p else given.symbol_text} {given.op} {given.number.text}"  # type: ignore[union-attr]
-    evidence = f"{rep.text[: rep.value.end - rep.start] if rep.value else rep.symbol_text} gives p from {computed[0]:.4g} to {computed[1]:.4g}; reported {shown}"
+    evidence = f"{_up_to_value(rep)} gives p from {computed[0]:.4g} to {computed[1]:.4g}; reported {shown}"
     if rep.symbol in ("t", "z", "r", "rs") and _overlap((computed[0] / 2, computed[1] / 2), reported):
         return [Finding("one-sided", "The reported p matches a one-sided test only; say that the test was one-sided, or report the two-sided p.", evidence)]
     found = [Finding("p-does-not-follow", "The reported p does not follow from the statistic and its df.", evidence)]

@@ -81,8 +81,27 @@ _SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
 _MARKS = str.maketrans("", "", "#¶‖∆ᵃᵇᶜᵈ")  # footnote marks authors put inside a head: "P# value", "P∆ value"
 
 
+# a head whose cells give the statistic with its df, "t test (df)" over "3.48 (33)", "F (df)" over "4.21 (1, 38)" (public-health
+# and psychiatry tables: JMIR 2024;26:e53001, Table 3); its cells read by _VALUE_DF
+_DF_IN_HEAD = re.compile(r"(?i)\s*\(\s*(?:df|d\.f\.)\s*\)\s*$")
+_VALUE_DF = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[*†‡§]*\s*\(\s*(?P<df>\d+(?:\.\d+)?)"
+                       r"(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*(?:[*†‡§]+|[a-d])?\s*")
+
+
+def _value_df(text: str, mark: str) -> "tuple[tuple[str, Number], tuple[Number, ...]] | None":
+    """A cell's statistic and its df, "3.48 (33)" or "4.21 (1, 38)" (under a head such as "t test (df)")."""
+    m = _VALUE_DF.fullmatch(text)
+    if m is None:
+        return None
+    read = _patterns(mark).to_number
+    value, dfs = read(m.group("num"), m.start("num")), [read(m.group(g), m.start(g)) for g in ("df", "df2") if m.group(g) is not None]
+    if value is None or any(d is None for d in dfs):
+        return None
+    return ((m.group("op") or "=").strip(), value), tuple(dfs)  # type: ignore[arg-type]
+
+
 def _role(text: str) -> str | None:
-    head = _FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip()
+    head = _DF_IN_HEAD.sub("", _FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip())
     for pattern, role in _ROLES:
         if pattern.fullmatch(head):
             return role
@@ -261,6 +280,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     for r, c, unit, reps in cells:
         rows.setdefault(r, {})[c] = (unit, reps)
     roles: dict[int, str] = {}
+    with_df: set[int] = set()  # the columns whose head says their cells give the df ("t test (df)")
     groups, total = caption_sizes(caption)
     found: list[TableStatistic] = []
     used: set[int] = set()
@@ -278,9 +298,16 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             # "B", "Std. Error" under "Unstandardized Coefficients" below)
             found_heads = {c: role for c, role in header.items() if role is not None}
             roles = {**roles, **found_heads} if header_above else found_heads
+            heads_df = {c for c in found_heads if found_heads[c] in _STAT_ROLES and _DF_IN_HEAD.search(row[c][0].text)}
+            with_df = (with_df - set(found_heads)) | heads_df if header_above else heads_df
             header_above = True
         else:
             header_above = False
+        cell_dfs: dict[int, tuple[Number, ...]] = {}
+        for c in with_df & set(row):
+            read = _value_df(row[c][0].text, mark)
+            if read is not None:
+                numbers[c], cell_dfs[c] = read
         coefficients = "B" in roles.values() or "SE" in roles.values()  # a model's coefficients table
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
@@ -322,7 +349,10 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             df: tuple[Number, ...] = ()
             how = f"the {role if role != 'chi2' else 'χ²'} column" if not by_row else f"the Value column (a χ² as its row, {row[min(row)][0].text.strip()}, names it)"
             k = _own_column(roles, c, "df")
-            if k is not None and k in row and numbers.get(k) is not None:
+            if c in cell_dfs:
+                df = cell_dfs[c]
+                how += " with its df"
+            elif k is not None and k in row and numbers.get(k) is not None:
                 df = (numbers[k][1],)  # type: ignore[index]
                 how += ", the df column"
             k1, k2 = (_own_column(roles, c, name) for name in ("df1", "df2"))
