@@ -478,6 +478,26 @@ def test_source_index_maps_every_kept_character_back():
         assert source == char or source.translate(str.maketrans("23", "²³")) == char, (i, char, source)
 
 
+def test_tex_math_is_read_as_it_prints(tmp_path, capsys):
+    """A LaTeX manuscript types its statistics in math (practice): AMA's subscript df as $t_{38}$ and $F_{2,97}$, partial
+    η² as $\\eta_p^2$ or $\\eta^2_p$, Spearman's $r_s$, an italic $\\mathit{t}$, a power of ten $10^{-4}$ — each had
+    been left as TeX (t_{38} and \\mathit{t} read as no statistic). Our own numbers; p by scipy."""
+    from statsetter.audit.reading import _text_units
+
+    block = ("$t_{38} = 2.14$, $P = .04$; $F_{2,97} = 4.51$, $P = .01$; $\\eta_p^2 = .09$; $r_s(98) = .29$; "
+             "$\\mathit{t}(38) = 2.10$, $\\mathit{p} = .042$; $p = 4.2 \\times 10^{-6}$")
+    assert next(_text_units(block, ".tex")).text == ("t₃₈ = 2.14, P = .04; F₂,₉₇ = 4.51, P = .01; ηp² = .09; rs(98) = .29; "
+                                                     "t(38) = 2.10, p = .042; p = 4.2 × 10⁻⁶")
+    path = tmp_path / "ama.tex"
+    path.write_text(block + "\n", encoding="utf-8")
+    capsys.readouterr()
+    main(["audit", str(path), "--json", "--style", "ama11"])
+    rows = {row["found"]: row for row in json.loads(capsys.readouterr().out)}
+    assert {"t₃₈ = 2.14, P = .04", "F₂,₉₇ = 4.51, P = .01; ηp² = .09", "rs(98) = .29", "t(38) = 2.10, p = .042"} <= set(rows)
+    assert stats.t.sf(2.14, 38) * 2 == pytest.approx(.039, abs=.0005) and stats.f.sf(4.51, 2, 97) < .015
+    assert all("p-does-not-follow" not in row["codes"] and row["recomputed"] for found, row in rows.items() if found.startswith(("t", "F")))
+
+
 def test_inline_html_in_markdown_is_read_as_it_prints(tmp_path, capsys):
     """Markdown converted from a PDF or Word keeps HTML tags: "χ<sup>2</sup> (5, N = 5473) = 65.149, p b 0.001" (McLeod
     & Dolezel, 2018, Decision Support Systems, https://doi.org/10.1016/j.dss.2018.02.007, its PDF converted to Markdown

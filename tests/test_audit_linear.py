@@ -413,7 +413,8 @@ _TABLE_TOKENS = st.sampled_from([
     "|", " | ", "|---|", ":--:", "---", "\\|", "&", " & ", "\\&", "\\\\", "\\\\[2pt]", "{", "}", "\\begin{tabular}{ll}", "\\end{tabular}",
     "\\begin{tabularx}{\\linewidth}{lX}", "\\end{tabularx}", "\\multicolumn{2}{c}{", "\\midrule", "\\toprule", "%", "\\%", "~", "^2^", "~38~",
     "\\textsubscript{38}", "\\textit{t}", "*t*", "\n", "\n\n", " ", "t(38) = 2.14", "p = .04", ".044", "2.10", "F", "df", "χ²", "Error (within)",
-    "<sup>", "</sup>", "<sub>38</sub>", "<i>", "</i>", "<em>t</em>", "¼", "ps < .05", "p N 0.05",
+    "<sup>", "</sup>", "<sub>38</sub>", "<i>", "</i>", "<em>t</em>", "¼", "ps < .05", "p N 0.05", "$", "$t_{38}", "_{2,97}", "^{-4}",
+    "\\mathit{t}", "\\eta_p^2", "\\text{", "_",
 ])
 
 

@@ -166,6 +166,27 @@ def _replace(pattern: re.Pattern[str], text: str, inner: "Callable[[str], str]")
     return out.text(), out.trace()
 
 
+_TEX_WRAPPED = re.compile(r"\\(?:mathit|mathrm|mathsf|mathnormal|textit|textrm|text|operatorname)\s*\{([^{}]*)\}")
+_TEX_SCRIPT = re.compile(r"([_^])(?:\{([^{}]{1,24})\}|([0-9A-Za-z]))")
+_DF_DIGITS = re.compile(r"[\d.,;\s]+")
+
+
+def _tex_script(m: "re.Match[str]") -> str:
+    body = m.group(2) if m.group(2) is not None else m.group(3)
+    if m.group(1) == "^":  # ^2, ^{2}, ^{-4}: their digits and signs as superscripts (χ², 10⁻⁴); letters as they are
+        return body.translate(_SUPERSCRIPT)
+    return body.translate(_SUBSCRIPT) if _DF_DIGITS.fullmatch(body) else body  # t_{38}, F_{2,97}: AMA's df; η_p, r_s: ηp, rs
+
+
+def _tex_math(inner: str) -> str:
+    """A TeX math group (or italic text) as it prints: Greek commands as letters, \\mathit{t} and \\text{ns} as their
+    letters, sub- and superscripts as what they show (``$t_{38} = 2.14$`` is t₃₈ = 2.14, ``$\\eta_p^2$`` ηp²), TeX's
+    spaces as spaces."""
+    inner = _TEX_WRAPPED.sub(lambda w: w.group(1), _TEX_MATH_WORD.sub(lambda w: _TEX_GREEK[w.group(0)], inner))
+    inner = _TEX_SCRIPT.sub(_tex_script, inner)
+    return inner.replace("\\,", "\u202f").replace("\\;", " ").replace("\\ ", " ").replace("\\!", "").strip()
+
+
 def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ...], tuple[Trace, ...]]:
     """Text without emphasis markers, the italic spans they marked (kept for
     a later check), and how the text maps back to ``text``. Markdown's pandoc
@@ -178,7 +199,7 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         inner = m.group(group)
         greek = False
         if tex:
-            inner = _TEX_MATH_WORD.sub(lambda w: _TEX_GREEK[w.group(0)], inner).replace("^2", "²").replace("^{2}", "²").strip()
+            inner = _tex_math(inner)
             greek = group == 3 and inner[:1] in "αβχηωετρφΔ"  # $\upchi$, $\chi^2$: math Greek, not italic
         out.add(text[at : m.start()], at)
         if not greek:
