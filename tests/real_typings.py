@@ -20,6 +20,7 @@ from dataclasses import dataclass
 
 # the sources, with what they are
 SOURCES = {
+    "pmc5826355": ("https://pmc.ncbi.nlm.nih.gov/articles/PMC5826355/table/T3", "Table 3, a three-way mixed ANOVA's F ratios (PMC, open access)"),
     "pmc10949125": ("https://pmc.ncbi.nlm.nih.gov/articles/PMC10949125/table/table3", "J Med Internet Res 2024;26:e53001, Table 3 (PMC, open access)"),
     "osf-vibrm": ("https://osf.io/vibrm/wiki/home", "a laboratory's results page of a registered replication report (OSF)"),
     "authorea-630743": ("https://flame-challenge.authorea.com/users/597901/articles/630743/download_zip", "a preprint on stress and creativity (Authorea)"),
@@ -275,6 +276,20 @@ ITEMS: tuple[Text | Table, ...] = (
               (33, "2.30", ".03"), (62, "1.40", ".17"), (29, "–0.10", ".92"), (33, "0.68", ".50"), (62, "1.31", ".20"), (29, "–1.14", ".17"),
               (33, "6.45", "< .001"), (62, "2.69", ".009"), (29, "–0.05", ".96"), (33, "3.73", "< .001"), (62, "1.70", ".09"), (29, "1.05", ".30"),
               (33, "4.11", "< .001"), (62, "2.08", ".04"), (29, "1.23", ".23")))),
+    # (added in the twenty-first session: the df in the column's head, "F-ratio (1, 18)"; none had been read)
+    Table("pmc5826355", "ANOVA results (three-way mixed ANOVA) for the control vs. patient comparison of gray matter outcomes.",
+          (('', 'Between-subject', '', 'Within-subject', '', '', ''),
+           ('', 'Group', '', 'Group*ROI', '', 'Group*TP*ROI', ''),
+           ('', 'F-ratio (1, 18)', 'p-value', 'F-ratio (35, 630)', 'p-value', 'F-ratio (35, 630)', 'p-value'),
+           ('GFA', '6.205', '0.023*', '2.340', '<0.001*', '2.235', '<0.001*'),
+           ('PA', '6.256', '0.022*', '2.218', '<0.001*', '1.669', '0.010*'),
+           ('RTAP', '1.548', '0.229', '1.249', '0.157', '1.326', '0.102'),
+           ('RTPP', '2.064', '0.168', '2.152', '<0.001*', '1.843', '0.003*'),
+           ('MSD', '2.681', '0.119', '2.601', '<0.001*', '0.552', '0.990'),
+           ('FA', '7.346', '0.014*', '2.082', '<0.001*', '2.731', '<0.001*'),
+           ('MD', '0.186', '0.671', '1.825', '0.003*', '1.105', '0.314')),
+          tuple(_f(a, b, v, p, printed=False) for a, b, v, p in (
+              (1, 18, '6.205', '= 0.023'), (35, 630, '2.340', '<0.001'), (35, 630, '2.235', '<0.001'), (1, 18, '6.256', '= 0.022'), (35, 630, '2.218', '<0.001'), (35, 630, '1.669', '= 0.010'), (1, 18, '1.548', '= 0.229'), (35, 630, '1.249', '= 0.157'), (35, 630, '1.326', '= 0.102'), (1, 18, '2.064', '= 0.168'), (35, 630, '2.152', '<0.001'), (35, 630, '1.843', '= 0.003'), (1, 18, '2.681', '= 0.119'), (35, 630, '2.601', '<0.001'), (35, 630, '0.552', '= 0.990'), (1, 18, '7.346', '= 0.014'), (35, 630, '2.082', '<0.001'), (35, 630, '2.731', '<0.001'), (1, 18, '0.186', '= 0.671'), (35, 630, '1.825', '= 0.003'), (35, 630, '1.105', '= 0.314')))),
 )
 
 # -- a second set, collected after the table reader and the context rules were written, to measure them on text

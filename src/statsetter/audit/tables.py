@@ -84,6 +84,15 @@ _MARKS = str.maketrans("", "", "#¶‖∆ᵃᵇᶜᵈ")  # footnote marks author
 # a head whose cells give the statistic with its df, "t test (df)" over "3.48 (33)", "F (df)" over "4.21 (1, 38)" (public-health
 # and psychiatry tables: JMIR 2024;26:e53001, Table 3); its cells read by _VALUE_DF
 _DF_IN_HEAD = re.compile(r"(?i)\s*\(\s*(?:df|d\.f\.)\s*\)\s*$")
+# a head that gives the column's df itself, "F-ratio (1, 18)", "t (38)", "χ2 (2)" (PMC5826355, Table 3)
+_DFS_IN_HEAD = re.compile(r"\s*\(\s*(?P<df>\d+(?:\.\d+)?)(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*$")
+
+
+def _head_dfs(text: str) -> tuple[Number, ...]:
+    m = _DFS_IN_HEAD.search(_FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip())
+    if m is None:
+        return ()
+    return tuple(Number(m.group(g), float(m.group(g)), len(m.group(g).partition(".")[2]), 0, 0) for g in ("df", "df2") if m.group(g) is not None)
 _VALUE_DF = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[*†‡§]*\s*\(\s*(?P<df>\d+(?:\.\d+)?)"
                        r"(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*(?:[*†‡§]+|[a-d])?\s*")
 
@@ -101,7 +110,7 @@ def _value_df(text: str, mark: str) -> "tuple[tuple[str, Number], tuple[Number, 
 
 
 def _role(text: str) -> str | None:
-    head = _DF_IN_HEAD.sub("", _FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip())
+    head = _DFS_IN_HEAD.sub("", _DF_IN_HEAD.sub("", _FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip()))
     for pattern, role in _ROLES:
         if pattern.fullmatch(head):
             return role
@@ -281,6 +290,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         rows.setdefault(r, {})[c] = (unit, reps)
     roles: dict[int, str] = {}
     with_df: set[int] = set()  # the columns whose head says their cells give the df ("t test (df)")
+    head_dfs: dict[int, tuple[Number, ...]] = {}  # the df a column's head gives ("F-ratio (1, 18)")
     groups, total = caption_sizes(caption)
     found: list[TableStatistic] = []
     used: set[int] = set()
@@ -300,6 +310,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             roles = {**roles, **found_heads} if header_above else found_heads
             heads_df = {c for c in found_heads if found_heads[c] in _STAT_ROLES and _DF_IN_HEAD.search(row[c][0].text)}
             with_df = (with_df - set(found_heads)) | heads_df if header_above else heads_df
+            given = {c: _head_dfs(row[c][0].text) for c in found_heads if found_heads[c] in _STAT_ROLES}
+            head_dfs = {**{c: d for c, d in head_dfs.items() if c not in found_heads}, **given} if header_above else given
             header_above = True
         else:
             header_above = False
@@ -352,6 +364,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if c in cell_dfs:
                 df = cell_dfs[c]
                 how += " with its df"
+            elif head_dfs.get(c):
+                df = head_dfs[c]
+                how += " with the df its head gives"
             elif k is not None and k in row and numbers.get(k) is not None:
                 df = (numbers[k][1],)  # type: ignore[index]
                 how += ", the df column"
