@@ -440,5 +440,13 @@ def test_a_shared_bound_reaches_only_its_own_statistics():
     split = _entries("t(38) = 2.50 and t(40) = 3.25, ps < .05, whereas t(30) = 0.50 and t(31) = 0.90, ps > .30.")
     assert all(e.codes == [] for e in split.values()) and len(split) == 4
     assert "against ps > .30" in split["t(31) = 0.90"].checked and "against ps < .05" in split["t(38) = 2.50"].checked
-    assert _entries("t(38) = 1.10 and t(40) = 3.25, ps = .28 and .002, respectively.")["t(38) = 1.10"].checked == ""
+    # a list of p's, one for each statistic in order ("ps = .28 and .002, respectively"), gives each its own; a list of
+    # another length than the statistics' gives none
+    listed = _entries("t(38) = 1.10 and t(40) = 3.25, ps = .28 and .002, respectively.")
+    assert listed["t(38) = 1.10"].checked.endswith("against ps = .28") and listed["t(40) = 3.25"].checked.endswith("against ps = .002")
+    assert all(e.codes == [] for e in listed.values())
+    swapped = _entries("t(38) = 1.10 and t(40) = 3.25, ps = .002 and .28, respectively.")
+    assert all("p-does-not-follow" in e.codes for e in swapped.values())
+    assert _entries("t(38) = 1.10 and t(40) = 3.25, ps = .28, .002 and .5.")["t(38) = 1.10"].checked == ""
+    assert _entries("t(38) = 1.10 and t(40) = 3.25, ps = .28.")["t(38) = 1.10"].checked == ""
     assert [r for r in find_statistics("All ps < .001 (Table 2); see the code: keep = ps > .5") if r.symbol] == []

@@ -223,7 +223,9 @@ class _Patterns:
         # p < .01", "each p-value ≤ .01" ("ps = .03 and .04" lists p's: not read)
         self.shared_p = re.compile(rf"(?P<sym>[pP](?<![\w.*'’][pP])(?:s|['’]s|(?:(?<=[aA]ll\s[pP])(?<!\w[aA]ll\s[pP])|(?<=[bB]oth\s[pP])"
                                    rf"(?<!\w[bB]oth\s[pP])|(?<=[eE]ach\s[pP])(?<!\w[eE]ach\s[pP]))(?:s|['’]s|[- ]?values?)?))(?![\w'’])"
-                                   rf"\s*+(?P<op>[<>≤≥]|[bN](?=\s*+\.?\d))\s*+(?P<num>{num}{_EXPONENT}?)")
+                                   rf"\s*+(?P<op>[<>≤≥]|[bN](?=\s*+\.?\d)|=(?=\s*+{num}\s*+(?:[,;&]|and\s)))\s*+(?P<num>{num}{_EXPONENT}?)")
+        # the rest of a list of p's in order ("ps = .042 and .002, respectively"; "ps = .03, .04, and .20")
+        self.p_list = re.compile(rf"\s*+(?:[,;]\s*+(?:and\s++)?|and\s++|&\s*+)(?P<num>{num})(?![\d])")
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,¼]?\s*+"
@@ -473,18 +475,29 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
 def _share(pat: _Patterns, text: str, out: list[Reported], since: int) -> None:
     """Each bound shared by several statistics ("ps < .05") given to the statistics without a p of their own before it in
     its sentence (after any bound before it there): the checks test each against it, and none of them takes its text.
+    A list of p's ("ps = .042 and .002, respectively") is given to them in order, and only when it names one p for each.
     ``since``: where the first statistic without a p starts."""
     starts = [r.start for r in out]
     for m in pat.shared_p.finditer(text, since):
-        number = pat.to_number(m.group("num"), m.start("num"))
-        if number is None or not 0 < number.value <= 1:
-            continue
-        shared = _new_p(_GARBLED.get(m.group("op"), m.group("op")), number, m.start(), m.end(), m.start(), m.group("sym"), False)
         first = max(_sentence_start(pat, text, 0, m.start()), since)
-        for rep in out[bisect.bisect_left(starts, first) : bisect.bisect_left(starts, m.start())]:
-            if rep.symbol is not None and rep.p is None and rep.end <= m.start():
-                rep.shared_p = shared
-        since = m.end()
+        bare = [r for r in out[bisect.bisect_left(starts, first) : bisect.bisect_left(starts, m.start())]
+                if r.symbol is not None and r.p is None and r.end <= m.start()]
+        numbers = [pat.to_number(m.group("num"), m.start("num"))]
+        end = m.end()
+        if m.group("op") == "=":
+            while (more := pat.p_list.match(text, end)) is not None:
+                numbers.append(pat.to_number(more.group("num"), more.start("num")))
+                end = more.end()
+            if len(numbers) != len(bare):
+                since = end
+                continue
+        if any(n is None or not 0 < n.value <= 1 for n in numbers):
+            continue
+        op = _GARBLED.get(m.group("op"), m.group("op"))
+        for k, rep in enumerate(bare):
+            number = numbers[k if op == "=" else 0]
+            rep.shared_p = _new_p(op, number, m.start(), end, m.start(), m.group("sym"), False)  # type: ignore[arg-type]
+        since = end
 
 
 class _Index:
