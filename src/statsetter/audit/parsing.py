@@ -102,7 +102,7 @@ class Reported:
     operators: list[tuple[int, int]] = field(default_factory=list)  # (start, end) of each operator with its spacing
     text: str = ""
     p_range: tuple[float, ...] | None = None  # filled by the checks (cache)
-    shared_p: PValue | None = None  # a bound on the p of several statistics ("ps < .05"): checked, never rewritten
+    shared_p: PValue | None = None  # its p given for several statistics ("ps < .05", "ps = .04 and .002"): checked, never rewritten
 
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
@@ -220,7 +220,7 @@ class _Patterns:
         self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*][pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
-        # p < .01", "each p-value ≤ .01" ("ps = .03 and .04" lists p's: not read)
+        # p < .01", "each p-value ≤ .01"; or their p's listed in order, "ps = .03 and .04" (an "=" only before a list)
         self.shared_p = re.compile(rf"(?P<sym>[pP](?<![\w.*'’][pP])(?:s|['’]s|(?:(?<=[aA]ll\s[pP])(?<!\w[aA]ll\s[pP])|(?<=[bB]oth\s[pP])"
                                    rf"(?<!\w[bB]oth\s[pP])|(?<=[eE]ach\s[pP])(?<!\w[eE]ach\s[pP]))(?:s|['’]s|[- ]?values?)?))(?![\w'’])"
                                    rf"\s*+(?P<op>[<>≤≥]|[bN](?=\s*+\.?\d)|=(?=\s*+{num}\s*+(?:[,;&]|and\s)))\s*+(?P<num>{num}{_EXPONENT}?)")
@@ -722,9 +722,9 @@ _ADJUSTED = re.compile(r"(?i:adjusted|corrected|holm|bonferroni|sidak|šidák|fd
 
 
 # operators as a copy from a PDF garbles them (Elsevier's "p b 0.01" for "<", "p N 0.05" for ">"; Taylor & Francis's
-# "F(1, 393) ¼ 12.79" for "="; the APA's and others' "p , .05" for "<", "p . .2" for ">" and "p 5 .03" for "=", read for a p only, whose
-# number is never negative: their copies also turn a minus into "2"), and "p-value: 0.013" (as R's summary of lm prints
-# it) for "="; "p = < .001" means "<"
+# "F(1, 393) ¼ 12.79" for "="; others' "p , .05" for "<", "p . .2" for ">" and "p 5 .03" for "=", read for a p only,
+# whose number is never negative: those copies also turn a minus into "2"), and "p-value: 0.013" (as R's summary of lm
+# prints it) for "="; "p = < .001" means "<"
 _GARBLED = {"b": "<", "N": ">", "¼": "=", ":": "=", ",": "<", "5": "=", ".": ">"}
 
 
