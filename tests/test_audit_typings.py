@@ -450,3 +450,21 @@ def test_a_shared_bound_reaches_only_its_own_statistics():
     assert _entries("t(38) = 1.10 and t(40) = 3.25, ps = .28, .002 and .5.")["t(38) = 1.10"].checked == ""
     assert _entries("t(38) = 1.10 and t(40) = 3.25, ps = .28.")["t(38) = 1.10"].checked == ""
     assert [r for r in find_statistics("All ps < .001 (Table 2); see the code: keep = ps > .5") if r.symbol] == []
+
+
+def test_a_plural_head_is_several_statistics_each_checked():
+    """"Fs(1, 38) = 4.41 and 5.20, ps = .042 and .028, respectively", "ts(38) > 2.50, ps < .02": several tests of the
+    same df under one plural symbol (practice; "Fs < 1, ps > .44" in a paper's text as stored in a public repository,
+    no df). Each value is a statistic of its own with the head's df, checked against its p from the list or
+    the shared bound; none is restyled (the sentence's plural has no single-statistic form). A plural without df checks
+    nothing; "rs" stays Spearman's. Numbers our own; p by scipy."""
+    assert stats.f.sf(4.41, 1, 38) == pytest.approx(.042, abs=.0005) and stats.f.sf(1.20, 1, 38) > .05
+    listed = _entries("Both were reliable, Fs(1, 38) = 4.41 and 5.20, ps = .042 and .028, respectively.")
+    assert set(listed) == {"Fs(1, 38) = 4.41", "F(1, 38) = 5.20"} and all(e.codes == [] and e.checked for e in listed.values())
+    bounded = _entries("Fs(1, 38) = 4.41 and 1.20, ps < .05.")
+    assert bounded["F(1, 38) = 1.20"].codes[0] == "p-does-not-follow" and bounded["Fs(1, 38) = 4.41"].codes == []
+    assert "ts(38) > 2.50" in _entries("ts(38) > 2.50, ps < .02")  # read as one statistic (a bound, as a single t's is)
+    assert _entries("Fs < 1, ps > .44")["Fs < 1"].checked == ""
+    (e,) = audit_units([Unit("case", "Fs(1, 38) = 4.41 and 1.20, ps < .05.")], restyle=True)[:1]
+    assert e.revision is None
+    assert [r.symbol for r in find_statistics("rs(98) = .29, p = .003")] == ["rs"]

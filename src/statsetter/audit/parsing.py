@@ -103,6 +103,7 @@ class Reported:
     text: str = ""
     p_range: tuple[float, ...] | None = None  # filled by the checks (cache)
     shared_p: PValue | None = None  # its p given for several statistics ("ps < .05", "ps = .04 and .002"): checked, never rewritten
+    plural: bool = False  # one of several values of a plural head ("Fs(1, 38) = 4.41 and 5.20"): checked, never rewritten
 
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
@@ -119,6 +120,8 @@ def symbol_of(text: str) -> str | None:
         return "F"
     if t == "Z":  # "Z = 2.50", as SPSS prints the normal approximation of rank tests
         return "z"
+    if t in ("Fs", "ts"):  # several tests of the same df: "Fs(1, 38) = 4.41 and 5.20", "ts(38) > 2.50"
+        return t[0]
     return t if t in ("t", "F", "r", "z", "U", "H", "W", "T", "Q", "V") else None
 
 
@@ -143,7 +146,7 @@ _SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:
             # "F-statistic" as R's summary of a linear model prints it ("F-statistic: 4.51"), and a logistic coefficient's Wald χ²
             # as SPSS names it ("Wald = 6.13"; "Wald χ²(1)" is read at its χ²): optional tails of one alternative each, so that
             # the engine tries no more alternatives at every "t" of the prose
-            r"t(?:-statistic)?", r"F(?:-statistic)?", "r", r"z(?:-statistic)?", "Z", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
+            r"t(?:-statistic|s)?", r"F(?:-statistic|s)?", "r", r"z(?:-statistic)?", "Z", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
 
 
 def _guarded(alternatives: "Iterable[str]", before: str) -> str:
@@ -450,6 +453,9 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         rep.text = text[rep.start : rep.end]
         out.append(rep)
         taken.append((rep.start, rep.end))
+        if rep.symbol_text in ("Fs", "ts") and rep.value is not None:  # a plural head: its other values, each a statistic of its own
+            rep.plural = True
+            out += _more_values(pat, text, rep)
     gaps, at = [], 0
     for s, e in sorted(taken):
         if s > at:
@@ -469,6 +475,21 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     bare = next((r.start for r in out if r.symbol is not None and r.p is None), None)  # (most statistics carry their p)
     if bare is not None:
         _share(pat, text, out, bare)
+    return out
+
+
+def _more_values(pat: _Patterns, text: str, rep: Reported) -> list[Reported]:
+    """The further values of a plural head, "Fs(1, 38) = 4.41 and 5.20" or "ts(38) = 2.10, 2.50, and 3.00": each with the
+    head's df and operator, its text made as a table's statistic's is (its place: its number)."""
+    out, at = [], rep.value.end  # type: ignore[union-attr]
+    while (m := pat.p_list.match(text, at)) is not None:
+        value = pat.to_number(m.group("num"), m.start("num"))
+        if value is None:
+            break
+        more = Reported(rep.symbol, rep.symbol_text, value.start, value.start, value.end, rep.df, rep.n, rep.op, value, plural=True)
+        more.text = f"{rep.symbol}{'(' + ', '.join(d.text for d in rep.df) + ')' if rep.df else ''} {rep.op} {value.text}"
+        out.append(more)
+        at = m.end()
     return out
 
 

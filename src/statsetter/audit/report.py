@@ -210,7 +210,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where))
                 elif rep.symbol == "chi2" and not rep.df and is_wald(unit.text, rep) and coefficient_before(unit.text, rep, previous_end, mark):
                     readings = (ONE_COEFFICIENT,)
-                yield _new_item(unit, rep, rep, readings, "", unit.text, None)
+                yield _new_item(unit, rep, None if rep.plural else rep, readings, "", unit.text, None)  # (a plural head's: not restyled)
                 previous_end = rep.end if rep.symbol is not None else previous_end
             last_total = totals[-1] if totals else last_total
             i += 1
