@@ -463,7 +463,13 @@ def test_a_plural_head_is_several_statistics_each_checked():
     assert set(listed) == {"Fs(1, 38) = 4.41", "F(1, 38) = 5.20"} and all(e.codes == [] and e.checked for e in listed.values())
     bounded = _entries("Fs(1, 38) = 4.41 and 1.20, ps < .05.")
     assert bounded["F(1, 38) = 1.20"].codes[0] == "p-does-not-follow" and bounded["Fs(1, 38) = 4.41"].codes == []
-    assert "ts(38) > 2.50" in _entries("ts(38) > 2.50, ps < .02")  # read as one statistic (a bound, as a single t's is)
+    # a lower bound on t (two-sided p below p(2.50) = .0169, scipy) checks the p it is given; an upper bound ("t < 1")
+    # says nothing of |t| and checks nothing
+    assert stats.t.sf(2.50, 38) * 2 == pytest.approx(.0169, abs=.0001)
+    assert _entries("ts(38) > 2.50, ps < .02")["ts(38) > 2.50"].codes == []
+    assert _entries("ts(38) > 2.50, ps > .30")["ts(38) > 2.50"].codes[0] == "p-does-not-follow"
+    assert "p-does-not-follow" in _entries("t(38) > 2.50, p > .30")["t(38) > 2.50, p > .30"].codes
+    assert _entries("t(38) < 1, p > .30")["t(38) < 1, p > .30"].checked == ""
     assert _entries("Fs < 1, ps > .44")["Fs < 1"].checked == ""
     (e,) = audit_units([Unit("case", "Fs(1, 38) = 4.41 and 1.20, ps < .05.")], restyle=True)[:1]
     assert e.revision is None

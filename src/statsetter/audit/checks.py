@@ -142,12 +142,14 @@ _DF_NEEDED = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1, "H": 1, "Q": 1
 
 
 def _p_range(rep: Reported) -> tuple[float, float] | None:
-    """A statistic given as a bound ("F < 1", common for small F) allows
-    every p beyond the bound's."""
+    """A statistic given as a bound ("F < 1", common for small F; "t(38) > 2.50", as several tests are summed up)
+    allows every p beyond the bound's (a t or z only as a lower bound of a positive value: "t < 1" says nothing of
+    |t|)."""
     if rep.symbol is None or rep.value is None:
         return None
     if rep.op in ("<", "≤", ">", "≥"):
-        if rep.symbol not in ("F", "chi2", "H") or rep.value.value <= 0:
+        one_sided_bound = rep.symbol in ("t", "z") and rep.op in (">", "≥")
+        if (rep.symbol not in ("F", "chi2", "H") and not one_sided_bound) or rep.value.value <= 0:
             return None
         bound = _p_range(replace(rep, op="=", value=replace(rep.value, decimals=15), p_range=None))
         if bound is None:
