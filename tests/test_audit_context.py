@@ -122,6 +122,29 @@ def test_a_coefficients_table_checks_t_against_b_and_se_and_takes_no_two_group_d
         assert flagged == wrong, [(e.found, e.codes) for e in entries]
 
 
+def test_a_coefficients_b_and_se_in_one_cell_are_read_as_the_columns_are(tmp_path):
+    """A regression table with B and its SE in one cell under "B (SE)", β, t and p (as psychology and sociology tables
+    print it; practice): each t is checked against B / SE of its cell, and none is given a two-group df (the t's had
+    been recomputed on N − 2 from the caption's N, and B / SE not checked). statsmodels' OLS of its bundled Longley data
+    (16 years, six predictors), printed to three decimals; one t retyped."""
+    import statsmodels.api as sm
+
+    d = sm.datasets.longley.load_pandas()
+    fit = sm.OLS(d.endog, sm.add_constant(d.exog)).fit()
+    rows = [("Predictor", "B (SE)", "t", "p")]
+    for name in fit.params.index:
+        t = round(fit.tvalues[name], 2)
+        rows.append((name, f"{fit.params[name]:.3f} ({fit.bse[name]:.3f})", f"{t:.2f}", f"{2 * stats.t.sf(abs(t), fit.df_resid):.3f}"))
+    retyped = [r if r[0] != "UNEMP" else (r[0], r[1], "-2.14", r[3]) for r in rows]
+    for table, wrong in ((rows, set()), (retyped, {"UNEMP"})):
+        path = _doc(tmp_path / "bse.docx", paragraphs=["Employment was modelled on six predictors (N = 16)."],
+                    tables=[("Table 5 Coefficients of the model", table)])
+        entries = [e for e in audit_file(path) if e.found.startswith("t")]
+        assert len(entries) == 7 and all("two independent groups" not in e.checked and "N − 2" not in e.checked for e in entries)
+        flagged = {table[k + 1][0] for k, e in enumerate(entries) if "coefficient-does-not-fit" in e.codes}
+        assert flagged == wrong, [(e.found, e.codes) for e in entries]
+
+
 def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp_path):
     """SPSS's Independent Samples Test table puts Levene's F and its Sig. before the t, its df and "Sig. (2-tailed)",
     in two rows (equal variances assumed and not). Each statistic takes the df and p columns between it and the next

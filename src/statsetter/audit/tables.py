@@ -29,6 +29,9 @@ _ROLES = (
     (re.compile(r"F(?:[- ]?(?:values?|ratio))?"), "F"),
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
     (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "wald"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
+    # a coefficient with its standard error in one cell, "0.52 (0.21)" under "B (SE)" (regression tables in psychology and
+    # sociology; practice)
+    (re.compile(r"(?i)(?:b|estimate|coefficient|coef\.?)\s*\(\s*S\.?E\.?(?:\s?B)?\s*\)"), "BSE"),
     (re.compile(r"B"), "B"),  # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B))
     (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Error"), "SE"),
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
@@ -267,9 +270,19 @@ def _error_df(errors: list[tuple[int, float | None, dict[str, float | None]]], r
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
 
 
-def _coefficient_cells(row, roles: dict[int, str], numbers) -> "tuple[tuple[Number, Number] | None, list[Effect]]":  # type: ignore[no-untyped-def]
-    """A Wald row's B and SE, and its Exp(B) as an odds ratio, from their columns."""
+_VALUE_SE = re.compile(r"\s*(?P<b>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[*†‡§]*\s*\(\s*(?P<se>\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*[*†‡§]*\s*")
+
+
+def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple[tuple[Number, Number] | None, list[Effect]]":  # type: ignore[no-untyped-def]
+    """A Wald row's (or a t's or z's) B and SE, and its Exp(B) as an odds ratio, from their columns, or B and SE from
+    one cell under "B (SE)"."""
     cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB") and k in row and numbers.get(k) is not None}
+    both = next((k for k, role in roles.items() if role == "BSE" and k in row), None)
+    if ("B" not in cols or "SE" not in cols) and both is not None:  # "0.52 (0.21)" under "B (SE)"
+        m = _VALUE_SE.fullmatch(row[both][0].text)
+        read = _patterns(mark).to_number
+        b_se = (read(m.group("b"), m.start("b")), read(m.group("se"), m.start("se"))) if m else (None, None)
+        return (b_se, []) if None not in b_se else (None, [])  # type: ignore[return-value]
     if "B" not in cols or "SE" not in cols:
         return None, []
     b, se = numbers[cols["B"]][1], numbers[cols["SE"]][1]
@@ -320,7 +333,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             read = _value_df(row[c][0].text, mark)
             if read is not None:
                 numbers[c], cell_dfs[c] = read
-        coefficients = "B" in roles.values() or "SE" in roles.values()  # a model's coefficients table
+        coefficients = "B" in roles.values() or "SE" in roles.values() or "BSE" in roles.values()  # a model's coefficients table
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
@@ -382,7 +395,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 how += ", the error row's df"
             if p is not None:
                 how += ", the p column"
-            coefficient, effects = _coefficient_cells(row, roles, numbers) if role in ("wald", "t", "z") else (None, [])
+            coefficient, effects = _coefficient_cells(row, roles, numbers, mark) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role == "wald" else []  # (a linear model's row has no odds ratio)
             if coefficient is not None:
                 how += ", the B and SE columns" + (", the Exp(B) column" if effects else "")
