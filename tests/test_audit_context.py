@@ -135,6 +135,14 @@ def test_a_coefficients_b_and_se_in_one_cell_are_read_as_the_columns_are(tmp_pat
     for name in fit.params.index:
         t = round(fit.tvalues[name], 2)
         rows.append((name, f"{fit.params[name]:.3f} ({fit.bse[name]:.3f})", f"{t:.2f}", f"{2 * stats.t.sf(abs(t), fit.df_resid):.3f}"))
+    # only β beside t and p: still a model's table, its t's given no two-group df (they had drawn five false "p does not
+    # follow" findings on N − 2 = 14 instead of the model's 9 residual df)
+    standardised = [("Predictor", "β", "t", "p")] + [(r[0], "" if r[0] == "const" else f"{fit.params[r[0]] * d.exog[r[0]].std() / d.endog.std():.2f}",
+                                                      r[2], r[3]) for r in rows[1:]]
+    path = _doc(tmp_path / "beta.docx", paragraphs=["Employment was modelled on six predictors (N = 16)."],
+                tables=[("Table 5 Coefficients of the model", standardised)])
+    entries = [e for e in audit_file(path) if e.found.startswith("t")]
+    assert len(entries) == 7 and all(e.codes == [] and "N − 2" not in e.checked for e in entries), [(e.found, e.codes) for e in entries]
     retyped = [r if r[0] != "UNEMP" else (r[0], r[1], "-2.14", r[3]) for r in rows]
     for table, wrong in ((rows, set()), (retyped, {"UNEMP"})):
         path = _doc(tmp_path / "bse.docx", paragraphs=["Employment was modelled on six predictors (N = 16)."],

@@ -32,6 +32,8 @@ _ROLES = (
     # a coefficient with its standard error in one cell, "0.52 (0.21)" under "B (SE)" (regression tables in psychology and
     # sociology; practice)
     (re.compile(r"(?i)(?:b|estimate|coefficient|coef\.?)\s*\(\s*S\.?E\.?(?:\s?B)?\s*\)"), "BSE"),
+    # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
+    (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:\s+coefficients?)?"), "beta"),
     (re.compile(r"B"), "B"),  # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B))
     (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Error"), "SE"),
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
@@ -333,7 +335,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             read = _value_df(row[c][0].text, mark)
             if read is not None:
                 numbers[c], cell_dfs[c] = read
-        coefficients = "B" in roles.values() or "SE" in roles.values() or "BSE" in roles.values()  # a model's coefficients table
+        coefficients = not {"B", "SE", "BSE", "beta"}.isdisjoint(roles.values())  # a model's coefficients table
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
