@@ -153,6 +153,28 @@ def test_a_coefficients_b_and_se_in_one_cell_are_read_as_the_columns_are(tmp_pat
         assert flagged == wrong, [(e.found, e.codes) for e in entries]
 
 
+def test_a_coefficients_t_in_a_sentence_takes_no_two_group_df():
+    """The same in text: "β = −0.61, t = −4.14, p = .003" after "N = 16" is a model's coefficient, whose t has the model's
+    residual df (9 on Longley's six predictors), not N − 2: it had drawn a false "p does not follow" on 14 df. A t
+    without a coefficient beside it still takes the df its context gives. Numbers: statsmodels' OLS of Longley."""
+    import statsmodels.api as sm
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    d = sm.datasets.longley.load_pandas()
+    fit = sm.OLS(d.endog, sm.add_constant(d.exog)).fit()
+    beta = {k: fit.params[k] * d.exog[k].std() / d.endog.std() for k in ("UNEMP", "ARMED")}
+    t = {k: round(fit.tvalues[k], 2) for k in beta}
+    p = {k: f"{2 * stats.t.sf(abs(t[k]), fit.df_resid):.3f}".lstrip("0") for k in beta}
+    text = (f"Employment was modelled on six predictors (N = 16). Unemployment predicted it, β = {beta['UNEMP']:.2f}, t = {t['UNEMP']:.2f}, "
+            f"p = {p['UNEMP']}, as did the armed forces, β = {beta['ARMED']:.2f}, t = {t['ARMED']:.2f}, p = {p['ARMED']}.")
+    assert all(2 * stats.t.sf(abs(v), 14) < float(p[k]) / 1.5 for k, v in t.items())  # on N − 2 = 14 df they would not fit
+    entries = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("t")]
+    assert len(entries) == 2 and all("p-does-not-follow" not in e.codes for e in entries), [(e.found, e.codes) for e in entries]
+    (e,) = [e for e in audit_units([Unit("c", "Men (n = 20) and women (n = 20) differed, t = 2.10, p = .42.")]) if e.found.startswith("t")]
+    assert "p-does-not-follow" in e.codes and "20 + 20 − 2" in e.checked
+
+
 def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp_path):
     """SPSS's Independent Samples Test table puts Levene's F and its Sig. before the t, its df and "Sig. (2-tailed)",
     in two rows (equal variances assumed and not). Each statistic takes the df and p columns between it and the next

@@ -188,6 +188,16 @@ _NS = re.compile(r"n(?<![\w.]n)\.?\s?s(?!\w)")
 _SIZE_TOTAL = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,6})(?![\d.,]\d)")  # the literal first: the engine's fast scan
 
 
+# a coefficient named just before a t ("β = −0.61, t = −4.14", "b = 0.52, SE = 0.21, t = 2.48"): the t is a model's
+_COEFFICIENT_NEAR = re.compile(r"(?:β|[Bb]eta|(?<![\w.])[Bb](?![\w.]))\s*[=¼]")
+
+
+def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
+    """Whether a t without df is a model's coefficient's: a β or B in its own clause or in the 120 characters before
+    it (not before the value of the statistic ahead of it)."""
+    return any(e.name == "beta" for e in rep.effects) or _COEFFICIENT_NEAR.search(text, max(previous_end, rep.start - 120), rep.start) is not None
+
+
 def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
     """The statistics of the units in document order: a paragraph's as the
     parser finds them, a table's read cell by cell and row by row."""
@@ -201,9 +211,12 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                 continue
             totals = [int(m.group(1)) for m in _SIZE_TOTAL.finditer(unit.text)]
             previous_end = 0  # the end of the last statistic with a head (a B and SE are looked for after it)
+            previous_value = 0  # the end of its value (a β before a t may stand in the clause of the statistic before)
             for rep in find_statistics(unit.text, mark):
                 readings: tuple[Reading, ...] = ()
-                if rep.symbol in ("t", "r", "rs") and not rep.df:
+                if rep.symbol == "t" and not rep.df and _a_coefficients_t(unit.text, rep, previous_value):
+                    pass  # a model's coefficient: its df are the model's residual df, which no N and no group sizes give
+                elif rep.symbol in ("t", "r", "rs") and not rep.df:
                     sizes = group_sizes(unit.text, rep, mark)
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
                     where = "beside it" if rep.n is not None else "in the paragraph" if totals else "earlier in the text"
@@ -212,6 +225,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     readings = (ONE_COEFFICIENT,)
                 yield _new_item(unit, rep, None if rep.plural else rep, readings, "", unit.text, None)  # (a plural head's: not restyled)
                 previous_end = rep.end if rep.symbol is not None else previous_end
+                previous_value = rep.value.end if rep.symbol is not None and rep.value is not None else previous_value
             last_total = totals[-1] if totals else last_total
             i += 1
             continue
