@@ -175,6 +175,25 @@ def test_a_coefficients_t_in_a_sentence_takes_no_two_group_df():
     assert "p-does-not-follow" in e.codes and "20 + 20 − 2" in e.checked
 
 
+def test_a_partial_correlation_takes_no_df_from_the_n():
+    """A correlation with covariates partialled out has N − 2 − k df: "the partial correlation controlling for age, sex
+    and income was r = .40, p = .039" in a sample of N = 30 (p from scipy on 25 df) had been recomputed on N − 2 = 28
+    and flagged; it is read, not given that df. The same r as a plain correlation still is."""
+    import math
+
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    p = 2 * stats.t.sf(0.40 * math.sqrt(25 / (1 - 0.16)), 25)
+    assert f"{p:.3f}" == "0.039"
+    for text in ("In the sample (N = 30), the partial correlation controlling for age, sex and income was r = .40, p = .039.",
+                 "In the sample (N = 30), partial r = .40, p = .039, adjusting for age."):
+        (e,) = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("r")]
+        assert "p-does-not-follow" not in e.codes and e.checked == "", text
+    (e,) = audit_units([Unit("c", "In the sample (N = 30), the correlation was r = .40, p = .039.")])
+    assert "p-does-not-follow" in e.codes and "N − 2 = 28" in e.checked
+
+
 def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp_path):
     """SPSS's Independent Samples Test table puts Levene's F and its Sig. before the t, its df and "Sig. (2-tailed)",
     in two rows (equal variances assumed and not). Each statistic takes the df and p columns between it and the next

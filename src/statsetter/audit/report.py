@@ -192,6 +192,10 @@ _SIZE_TOTAL = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,6})(?![\d.,]\d)")  # the lite
 _COEFFICIENT_NEAR = re.compile(r"(?:β|[Bb]eta|(?<![\w.])[Bb](?![\w.]))\s*[=¼]")
 
 
+# a correlation with covariates partialled out ("partial r", "controlling for age and sex"): its df are not N − 2
+_PARTIAL = re.compile(r"(?i)\bpartial\b|\bsemi-?partial\b|\bcontroll?(?:ing|ed) for\b|\badjust(?:ing|ed) for\b")
+
+
 def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
     """Whether a t without df is a model's coefficient's: a β or B in its own clause or in the 120 characters before
     it (not before the value of the statistic ahead of it)."""
@@ -216,6 +220,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                 readings: tuple[Reading, ...] = ()
                 if rep.symbol == "t" and not rep.df and _a_coefficients_t(unit.text, rep, previous_value):
                     pass  # a model's coefficient: its df are the model's residual df, which no N and no group sizes give
+                elif rep.symbol in ("r", "rs") and not rep.df and _PARTIAL.search(unit.text, max(previous_value, rep.start - 160), rep.start):
+                    pass  # a partial correlation: N − 2 less one df for each covariate, which the N does not say
                 elif rep.symbol in ("t", "r", "rs") and not rep.df:
                     sizes = group_sizes(unit.text, rep, mark)
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
