@@ -194,6 +194,22 @@ def test_a_partial_correlation_takes_no_df_from_the_n():
     assert "p-does-not-follow" in e.codes and "N − 2 = 28" in e.checked
 
 
+def test_a_welch_t_without_df_takes_no_student_df_from_the_group_sizes():
+    """"Welch's t = 2.10, p = .046" with n = 20 and 20 (p from scipy on Welch's 25 df; Student's 38 df give .042) had been
+    recomputed on 38 df and flagged; a t said to be Welch's (or with equal variances not assumed) is not given the
+    group sizes' df. The same sentence without Welch still is."""
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    assert f"{2 * stats.t.sf(2.10, 25):.3f}" == "0.046" and f"{2 * stats.t.sf(2.10, 38):.3f}" == "0.042"
+    for text in ("Men (n = 20) and women (n = 20) differed, Welch's t = 2.10, p = .046.",
+                 "Men (n = 20) and women (n = 20) differed, t = 2.10, p = .046 (equal variances not assumed)."):
+        (e,) = audit_units([Unit("c", text)])
+        assert "p-does-not-follow" not in e.codes and e.checked == "", text
+    (e,) = audit_units([Unit("c", "Men (n = 20) and women (n = 20) differed, t = 2.10, p = .046.")])
+    assert "p-does-not-follow" in e.codes and "20 + 20 − 2" in e.checked
+
+
 def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp_path):
     """SPSS's Independent Samples Test table puts Levene's F and its Sig. before the t, its df and "Sig. (2-tailed)",
     in two rows (equal variances assumed and not). Each statistic takes the df and p columns between it and the next

@@ -196,6 +196,10 @@ _COEFFICIENT_NEAR = re.compile(r"(?:β|[Bb]eta|(?<![\w.])[Bb](?![\w.]))\s*[=¼]"
 _PARTIAL = re.compile(r"(?i)\bpartial\b|\bsemi-?partial\b|\bcontroll?(?:ing|ed) for\b|\badjust(?:ing|ed) for\b")
 
 
+# a t said to be Welch's: its df are not the group sizes' n₁ + n₂ − 2
+_WELCH = re.compile(r"(?i)\bwelch|unequal variances|equal variances (?:were )?not assumed|separate[- ]variances?")
+
+
 def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
     """Whether a t without df is a model's coefficient's: a β or B in its own clause or in the 120 characters before
     it (not before the value of the statistic ahead of it)."""
@@ -222,6 +226,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     pass  # a model's coefficient: its df are the model's residual df, which no N and no group sizes give
                 elif rep.symbol in ("r", "rs") and not rep.df and _PARTIAL.search(unit.text, max(previous_value, rep.start - 160), rep.start):
                     pass  # a partial correlation: N − 2 less one df for each covariate, which the N does not say
+                elif rep.symbol == "t" and not rep.df and _WELCH.search(unit.text, max(previous_value, rep.start - 160), rep.end + 60):
+                    pass  # Welch's t: its df lie anywhere from the smaller group's n − 1 to n₁ + n₂ − 2, which no size fixes
                 elif rep.symbol in ("t", "r", "rs") and not rep.df:
                     sizes = group_sizes(unit.text, rep, mark)
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
