@@ -23,7 +23,7 @@ def _p_findings(e):
     return P_CODES & set(e.codes)
 
 
-def _doc(path, paragraphs=(), tables=()):
+def _doc(path, paragraphs=(), tables=(), note="Note. Invented for this test."):
     d = docx.Document()
     for text in paragraphs:
         d.add_paragraph(text)
@@ -33,7 +33,7 @@ def _doc(path, paragraphs=(), tables=()):
         for i, row in enumerate(rows):
             for j, cell in enumerate(row):
                 t.cell(i, j).text = cell
-        d.add_paragraph("Note. Invented for this test.")
+        d.add_paragraph(note)
     d.save(str(path))
     return path
 
@@ -208,6 +208,16 @@ def test_a_welch_t_without_df_takes_no_student_df_from_the_group_sizes():
         assert "p-does-not-follow" not in e.codes and e.checked == "", text
     (e,) = audit_units([Unit("c", "Men (n = 20) and women (n = 20) differed, t = 2.10, p = .046.")])
     assert "p-does-not-follow" in e.codes and "20 + 20 − 2" in e.checked
+
+
+def test_a_tables_welch_ts_take_no_student_df_from_its_group_sizes(tmp_path):
+    """A table of t tests with group sizes in its header and a note saying the tests are Welch's: the t's are not given
+    n₁ + n₂ − 2 (p from scipy on 25 df, as above); without the note they are."""
+    rows = [("", "Control (n = 20)", "Treatment (n = 20)", "t", "p"), ("Score", "3.1 (1.0)", "3.8 (1.1)", "2.10", ".046")]
+    for note, flagged in (("Note. Our own numbers.", True), ("Note. Welch's t tests (equal variances not assumed).", False)):
+        path = _doc(tmp_path / "welch.docx", tables=[("Table 2 Scores of the two groups", rows)], note=note)
+        (e,) = audit_file(path)
+        assert ("p-does-not-follow" in e.codes) is flagged, (note, e.codes)
 
 
 def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp_path):

@@ -250,6 +250,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
         found, used = table_statistics(cells, caption, mark)
+        if _WELCH.search(caption) or _WELCH.search(note):  # Welch's t's: their df are not the table's group sizes'
+            found = [replace(t, readings=()) if t.rep.symbol == "t" and not t.rep.df else t for t in found]
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient) for t in found]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
