@@ -499,6 +499,11 @@ def test_a_named_procedure_excuses_only_a_p_larger_than_the_unadjusted():
     excused, wrong = audit_units(units)
     assert not _p_findings(excused) and "adjusted" in excused.notes[0]
     assert "p-does-not-follow" in wrong.codes
+    # a correction said without naming the procedure ("after correction for multiple comparisons", "multiple-comparison
+    # correction") is an adjustment too (it had drawn a "p does not follow")
+    for said in ("after correction for multiple comparisons", "(multiple-comparison correction applied)", "correcting for multiple tests"):
+        (e,) = audit_units([Unit("p3", f"t(17) = 2.52, p = {larger:.3f} {said}.")])
+        assert not _p_findings(e) and "adjusted" in e.notes[0], said
 
 
 def test_decimal_commas_are_read_as_typed_and_said():

@@ -156,7 +156,8 @@ _LONG_NUMBER = re.compile(r"\d{101,}")
 # cannot be recomputed from one statistic
 _PROCEDURE = re.compile(
     r"(?i:\bTukey|\bHSD\b|Scheff[ée]|Dunnett|[ŠS]id[áa]k|Games[-–\s]Howell|Bonferroni|\bHolm\b|Hochberg|\bFDR\b|false discovery rate"
-    r"|adjusted p|p[- ]values? (?:were |was )?(?:adjusted|corrected)|corrected for multiple)"
+    r"|adjusted p|p[- ]values? (?:were |was )?(?:adjusted|corrected)|corrected for multiple|correct(?:ion|ing) for multiple"
+    r"|multiple[- ]comparisons? correction|multiple[- ]testing correction)"
 )
 
 
