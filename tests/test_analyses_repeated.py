@@ -361,6 +361,25 @@ def test_the_audit_checks_sphericity_corrected_f():
     assert "corrected-df" not in welch.codes
 
 
+def test_a_corrected_p_beside_the_uncorrected_df_is_a_warning_not_an_error():
+    """Authors often print the uncorrected df with the Greenhouse–Geisser p: "F(3, 24) = 5.20, p = .017, ε = .69". The
+    p does not follow from F(3, 24) (it gives .007) and had been an error with a changed verdict; it is the corrected
+    test's, which the audit now says (a warning: give the corrected df). A p that no ε gives stays an error. Numbers:
+    pingouin's rm_anova on its bundled rm_anova_wide data (F = 5.20, uncorrected p = .0066, GG p = .0167, ε = .694)."""
+    table = pg.rm_anova(pg.read_dataset("rm_anova_wide"), correction=True)
+    F, gg, eps = float(table["F"].iloc[0]), float(table["p_GG_corr"].iloc[0]), float(table["eps"].iloc[0])
+    p_text, eps_text = f"{gg:.3f}".lstrip("0"), f"{eps:.2f}".lstrip("0")
+    assert (p_text, eps_text) == (".017", ".69")
+    (e,) = audit_units([Unit("a", f"The effect of time was reliable (Greenhouse–Geisser), F(3, 24) = {F:.2f}, p = {p_text}, ε = {eps_text}.")])
+    assert e.codes == ["uncorrected-df"] and e.severity == "warning" and "ε from 0.685 to 0.695" in e.message
+    (e,) = audit_units([Unit("b", f"With the Greenhouse–Geisser correction, F(3, 24) = {F:.2f}, p = {p_text}.")])
+    assert e.codes == ["uncorrected-df"]
+    (e,) = audit_units([Unit("c", f"With the Greenhouse–Geisser correction, F(3, 24) = {F:.2f}, p = .30.")])
+    assert "p-does-not-follow" in e.codes and "uncorrected-df" not in e.codes
+    (e,) = audit_units([Unit("d", f"F(3, 24) = {F:.2f}, p = {p_text}.")])  # no correction named: an error
+    assert "p-does-not-follow" in e.codes
+
+
 def test_mixed_anova_from_wide_data_equals_long():
     """Wide data as SPSS keeps it (a row per person, a column per measurement, a group column) give the same terms."""
     from statsetter.analyses import mixed_anova

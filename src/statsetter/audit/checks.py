@@ -52,6 +52,9 @@ CODES: dict[str, tuple[str, str]] = {
     "grim": ("a mean impossible for integer data with this n (GRIM test)", "Brown & Heathers (2016)"),
     "corrected-df": ("sphericity-corrected df that no single ε and whole uncorrected df give",
                      "Repeated-measures ANOVA: corrected df are ε × the uncorrected df (Greenhouse & Geisser, 1959; definition)"),
+    "uncorrected-df": ("a sphericity-corrected p beside the uncorrected df: report the corrected df with it",
+                       "Repeated-measures ANOVA: the corrected test is F(ε·df₁, ε·df₂) (Greenhouse & Geisser, 1959; definition); "
+                       "report the df of the test whose p is given (practice)"),
     "coefficient-does-not-fit": (
         "t (or z) does not equal B / SE, a Wald χ² (B / SE)², or an odds ratio exp(B)",
         "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE, its χ² form "
@@ -81,7 +84,7 @@ SEVERITY: dict[str, str] = {
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
     "one-sided": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
-    "p-zero": "warning", "corrected-df": "warning", "ci-p-disagree": "warning",
+    "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
     "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
 }
@@ -650,6 +653,28 @@ def _df_range(d: Number) -> tuple[float, float]:
 def _sphericity_corrected(rep: Reported) -> bool:
     """F(ε·df₁, ε·df₂): both df fractional (Welch's F keeps a whole df₁)."""
     return len(rep.df) == 2 and not any(float(d.value).is_integer() for d in rep.df)
+
+
+def corrected_p_fits(rep: Reported, alpha: float) -> "tuple[float, float] | None":
+    """For an F printed with whole (uncorrected) df beside a p that does not follow from them, in a text that names a
+    sphericity correction: the range of ε (the printed ε's, else 1/df₁ to 1, the lower bound to none) under which
+    F(ε·df₁, ε·df₂) gives a p the reported one allows; None when none does."""
+    if rep.symbol != "F" or len(rep.df) != 2 or rep.op != "=" or not all(float(d.value).is_integer() and d.value > 0 for d in rep.df):
+        return None
+    reported = reported_p_range(rep, alpha)
+    if reported is None:
+        return None
+    given = next((e for e in rep.effects if e.name == "epsilon" and 0 < e.number.value <= 1), None)
+    low, high = ((max(given.number.value - given.number.half_unit, 1e-6), min(given.number.value + given.number.half_unit, 1.0))
+                 if given is not None else (1 / rep.df[0].value, 1.0))
+    ends = []
+    for eps in (low, high):
+        df = tuple(Number(f"{d.value * eps:.6g}", d.value * eps, 6, d.start, d.end) for d in rep.df)
+        ends.append(p_range(replace(rep, df=df, p_range=None, effects=[])))
+    if any(e is None for e in ends):
+        return None
+    computed = (min(e[0] for e in ends), max(e[1] for e in ends))  # type: ignore[index]
+    return (low, high) if _overlap(computed, reported) else None
 
 
 def corrected_df(rep: Reported) -> list[Finding]:

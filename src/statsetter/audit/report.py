@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, coefficient_ratio, corrected_df, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
 from .reading import Unit, read_units
@@ -197,6 +197,8 @@ _COEFFICIENT_NEAR = re.compile(r"(?:β|[Bb]eta|(?<![\w.])[Bb](?![\w.]))\s*[=¼]"
 _PARTIAL = re.compile(r"(?i)\bpartial\b|\bsemi-?partial\b|\bcontroll?(?:ing|ed) for\b|\badjust(?:ing|ed) for\b")
 
 
+# a sphericity correction named near an F ("Greenhouse–Geisser", "Huynh-Feldt", "lower-bound", ε)
+_SPHERICITY_SAID = re.compile(r"(?i)greenhouse|geisser|huynh|feldt|lower[- ]bound|sphericity|ε|epsilon")
 # a t said to be Welch's: its df are not the group sizes' n₁ + n₂ − 2
 _WELCH = re.compile(r"(?i)\bwelch|unequal variances|equal variances (?:were )?not assumed|separate[- ]variances?")
 
@@ -423,6 +425,14 @@ def _audit_units(
                 findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
                 notes.append(f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
                              f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.")
+        if rep.symbol == "F" and any(f.code == "p-does-not-follow" for f in findings) and \
+                _SPHERICITY_SAID.search(unit.text, max(0, rep.start - 200), min(len(unit.text), rep.end + 80)):
+            eps = corrected_p_fits(rep, alpha)
+            if eps is not None:  # the p is the corrected test's, printed beside the uncorrected df
+                evidence = next(f.evidence for f in findings if f.code == "p-does-not-follow")
+                findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
+                findings.append(Finding("uncorrected-df", f"The p fits the sphericity-corrected test (ε from {eps[0]:.3g} to {eps[1]:.3g}), "
+                                                          "not the df printed: give the corrected df, F(ε·df₁, ε·df₂).", evidence))
         if any(f.code == "one-sided" for f in findings):
             said = _one_sided_said(unit.text, rep) or (_ONE_SIDED_SAID.search(item.how) if item.how else None)  # (a table's "Sig. (1-tailed)")
             if said is not None:  # the text says the test was one-sided, and the p fits one
