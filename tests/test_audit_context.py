@@ -506,6 +506,24 @@ def test_a_named_procedure_excuses_only_a_p_larger_than_the_unadjusted():
         assert not _p_findings(e) and "adjusted" in e.notes[0], said
 
 
+def test_a_p_from_another_method_is_noted_not_checked():
+    """A p said to come from another method than the statistic's distribution — Fisher's exact test beside a χ² (as
+    medical papers give it for small cells), a permutation, bootstrap or Monte Carlo p — cannot be recomputed from the
+    statistic: a note, not a finding (it had been an error with a changed verdict). "exact p" alone is an exactly
+    printed p, still checked. Numbers: scipy's Fisher exact test and χ² on one 2 × 2 table of our own."""
+    table = [[12, 4], [6, 14]]
+    chi2 = stats.chi2_contingency(table, correction=False).statistic
+    fisher = stats.fisher_exact(table).pvalue
+    asymptotic = stats.chi2.sf(chi2, 1)
+    assert abs(fisher - asymptotic) > 0.002  # the two p's differ beyond the printed precision
+    base, p = f"χ²(1, N = 36) = {chi2:.2f}", f"{fisher:.3f}".lstrip("0")
+    for said in (f", p = {p} (Fisher's exact test)", f", Fisher's exact p = {p}", f", permutation p = {p}"):
+        (e,) = audit_units([Unit("a", base + said)])
+        assert "p-does-not-follow" not in e.codes and "another method" in e.notes[0], said
+    (e,) = audit_units([Unit("b", f"{base}, exact p = {p}")])
+    assert "p-does-not-follow" in e.codes
+
+
 def test_decimal_commas_are_read_as_typed_and_said():
     """A manuscript typed with decimal commas (as in German, French or Dutch practice) is read as typed: the p is
     checked, and against APA 7 (a decimal point) each comma is a style finding; the choice is said."""

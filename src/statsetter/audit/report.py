@@ -197,6 +197,11 @@ _COEFFICIENT_NEAR = re.compile(r"(?:β|[Bb]eta|(?<![\w.])[Bb](?![\w.]))\s*[=¼]"
 _PARTIAL = re.compile(r"(?i)\bpartial\b|\bsemi-?partial\b|\bcontroll?(?:ing|ed) for\b|\badjust(?:ing|ed) for\b")
 
 
+# a p said to come from another method than the statistic's distribution: Fisher's exact test beside a χ², a
+# permutation, bootstrap or Monte Carlo p (practice)
+# ("exact p" alone is not one: authors say so of a p printed exactly, not as a threshold)
+_OTHER_P = re.compile(r"(?i)\bexact (?:test|two-sided|one-sided|binomial|method)|\bfisher|mid-p|permutation|bootstrap|monte[- ]carlo|simulated"
+                      r"|randomi[sz]ation test|resampl")
 # a sphericity correction named near an F ("Greenhouse–Geisser", "Huynh-Feldt", "lower-bound", ε)
 _SPHERICITY_SAID = re.compile(r"(?i)greenhouse|geisser|huynh|feldt|lower[- ]bound|sphericity|ε|epsilon")
 # a t said to be Welch's: its df are not the group sizes' n₁ + n₂ − 2
@@ -425,6 +430,12 @@ def _audit_units(
                 findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
                 notes.append(f"The p differs from the one recomputed from the statistic alone; the text names a multiple-comparison "
                              f"procedure (\"{named.group()}\"), so it is read as adjusted and not checked.")
+        if any(f.code == "p-does-not-follow" for f in findings) and rep.p is not None:
+            method = _OTHER_P.search(unit.text, max(0, rep.p.start - 60), min(len(unit.text), rep.p.end + 40))
+            if method is not None:  # an exact, permutation or resampled p: not the statistic's distribution's
+                findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
+                notes.append(f"The p differs from the one recomputed from the statistic's distribution; the text says it came from "
+                             f"another method (\"{method.group()}\"), so it is not checked against it.")
         if rep.symbol == "F" and any(f.code == "p-does-not-follow" for f in findings) and \
                 _SPHERICITY_SAID.search(unit.text, max(0, rep.start - 200), min(len(unit.text), rep.end + 80)):
             eps = corrected_p_fits(rep, alpha)
