@@ -200,7 +200,7 @@ _PARTIAL = re.compile(r"(?i)\bpartial\b|\bsemi-?partial\b|\bcontroll?(?:ing|ed) 
 # a p said to come from another method than the statistic's distribution: Fisher's exact test beside a χ², a
 # permutation, bootstrap or Monte Carlo p (practice)
 # ("exact p" alone is not one: authors say so of a p printed exactly, not as a threshold)
-_OTHER_P = re.compile(r"(?i)\bexact (?:test|two-sided|one-sided|binomial|method)|\bfisher|mid-p|permutation|bootstrap|monte[- ]carlo|simulated"
+_OTHER_P = re.compile(r"(?i)\bexact (?:test|two-sided|one-sided|binomial|method)|\bfisher|mid-p|permutation|bootstrap|monte[- ]carlo|simulated p"
                       r"|randomi[sz]ation test|resampl")
 # a sphericity correction named near an F ("Greenhouse–Geisser", "Huynh-Feldt", "lower-bound", ε)
 _SPHERICITY_SAID = re.compile(r"(?i)greenhouse|geisser|huynh|feldt|lower[- ]bound|sphericity|ε|epsilon")
