@@ -94,10 +94,13 @@ _DFS_IN_HEAD = re.compile(r"\s*\(\s*(?P<df>\d+(?:\.\d+)?)(?:\s*[,;]\s*(?P<df2>\d
 
 
 def _head_dfs(text: str) -> tuple[Number, ...]:
+    """The df a column's head gives, "F-ratio (1, 18)": (1, 18); () for none."""
     m = _DFS_IN_HEAD.search(_FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip())
     if m is None:
         return ()
     return tuple(Number(m.group(g), float(m.group(g)), len(m.group(g).partition(".")[2]), 0, 0) for g in ("df", "df2") if m.group(g) is not None)
+
+
 _VALUE_DF = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[*†‡§]*\s*\(\s*(?P<df>\d+(?:\.\d+)?)"
                        r"(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*(?:[*†‡§]+|[a-d])?\s*")
 
