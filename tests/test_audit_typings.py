@@ -474,3 +474,10 @@ def test_a_plural_head_is_several_statistics_each_checked():
     (e,) = audit_units([Unit("case", "Fs(1, 38) = 4.41 and 1.20, ps < .05.")], restyle=True)[:1]
     assert e.revision is None
     assert [r.symbol for r in find_statistics("rs(98) = .29, p = .003")] == ["rs"]
+
+
+def test_a_plural_p_after_one_statistic_is_not_its_own():
+    """"F(1, 38) = 0.50 for A, while B and C were significant, ps < .05": one statistic before a plural p — the p's are
+    of effects the sentence does not give; the F is not checked against them (it would have been flagged)."""
+    (e,) = audit_units([Unit("case", "F(1, 38) = 0.50 for A, while B and C were significant, ps < .05.")])
+    assert e.codes == [] and e.checked == ""

@@ -496,13 +496,15 @@ def _more_values(pat: _Patterns, text: str, rep: Reported) -> list[Reported]:
 def _share(pat: _Patterns, text: str, out: list[Reported], since: int) -> None:
     """Each bound shared by several statistics ("ps < .05") given to the statistics without a p of their own before it in
     its sentence (after any bound before it there): the checks test each against it, and none of them takes its text.
-    A list of p's ("ps = .042 and .002, respectively") is given to them in order, and only when it names one p for each.
+    A list of p's ("ps = .042 and .002, respectively") is given to them in order, and only when it names one p for each;
+    a bound only when at least two statistics share it (or a plural head stands for several).
     ``since``: where the first statistic without a p starts."""
     starts = [r.start for r in out]
     for m in pat.shared_p.finditer(text, since):
         first = max(_sentence_start(pat, text, 0, m.start()), since)
-        bare = [r for r in out[bisect.bisect_left(starts, first) : bisect.bisect_left(starts, m.start())]
-                if r.symbol is not None and r.p is None and r.end <= m.start()]
+        window = out[bisect.bisect_left(starts, first) : bisect.bisect_left(starts, m.start())]
+        bare = [r for r in window if r.symbol is not None and r.p is None and r.end <= m.start()]
+        took = sum(1 for r in window if r.symbol is not None and r.p is not None and m.start() <= r.p.start < m.end())  # "both p < .05" read as the last one's
         numbers = [pat.to_number(m.group("num"), m.start("num"))]
         end = m.end()
         if m.group("op") == "=":
@@ -512,8 +514,8 @@ def _share(pat: _Patterns, text: str, out: list[Reported], since: int) -> None:
             if len(numbers) != len(bare):
                 since = end
                 continue
-        if any(n is None or not 0 < n.value <= 1 for n in numbers):
-            continue
+        if any(n is None or not 0 < n.value <= 1 for n in numbers) or (len(bare) + took < 2 and not any(r.plural for r in bare)):
+            continue  # (one statistic before a plural p: the p's are of others the sentence does not give, "… while B and C were, ps < .05")
         op = _GARBLED.get(m.group("op"), m.group("op"))
         for k, rep in enumerate(bare):
             number = numbers[k if op == "=" else 0]
