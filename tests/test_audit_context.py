@@ -506,6 +506,23 @@ def test_a_named_procedure_excuses_only_a_p_larger_than_the_unadjusted():
         assert not _p_findings(e) and "adjusted" in e.notes[0], said
 
 
+def test_a_new_study_does_not_take_the_n_of_the_one_before():
+    """A multi-study paper: "N = 200" in Study 1, then under the heading "Study 2" a t without df on 27 students; the t
+    had been recomputed on 198 df from Study 1's N and flagged (its p, .046, is Welch's or Student's on 25 df, scipy).
+    A heading or paragraph that begins another study ("Study 2", "Experiment 3", "In Study 2, …") ends the N before."""
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    assert f"{_p2(2.10, 25):.3f}" == "0.046"
+    before = [Unit("p1", "In Study 1, 200 adults took part (N = 200).", None, "", 1)]
+    result = [Unit("p3", "Twenty-seven students took part. The groups differed, t = 2.10, p = .046.", None, "", 3)]
+    for heading in ("Study 2", "Experiment 2: Method", "In Study 2, students took part."):
+        (e,) = audit_units(before + [Unit("p2", heading, None, "", 2)] + result)
+        assert e.codes == [] and e.checked == "", heading
+    (e,) = audit_units(before + result)  # no new study said: the N before is the sample's, as before
+    assert "N − 2 = 198" in e.checked
+
+
 def test_a_p_from_another_method_is_noted_not_checked():
     """A p said to come from another method than the statistic's distribution — Fisher's exact test beside a χ² (as
     medical papers give it for small cells), a permutation, bootstrap or Monte Carlo p — cannot be recomputed from the

@@ -189,6 +189,10 @@ _NS = re.compile(r"n(?<![\w.]n)\.?\s?s(?!\w)")
 _SIZE_TOTAL = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,6})(?![\d.,]\d)")  # the literal first: the engine's fast scan
 
 
+# a heading or paragraph that begins another study's report: the N of the text before is not its sample's
+_NEW_SAMPLE = re.compile(r"\s*(?:(?:In|For)\s+)?(?:Study|Experiment|Sample|Phase)\s+(?:\d+[a-z]?|[IVX]+|One|Two|Three|Four|Five)\b")
+
+
 # a coefficient named just before a t ("β = −0.61, t = −4.14", "b = 0.52, SE = 0.21, t = 2.48"): the t is a model's
 _COEFFICIENT_NEAR = re.compile(r"(?:β|[Bb]eta|(?<![\w.])[Bb](?![\w.]))\s*[=¼]")
 
@@ -222,6 +226,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
     while i < len(units):
         unit = units[i]
         if unit.cell is None:
+            if _NEW_SAMPLE.match(unit.text):  # "Study 2", "Experiment 3: Method", "In Study 2, …": the N before is another sample's
+                last_total = None
             if not _has_digit(unit.text) and _NS.search(unit.text) is None:  # no statistic without a digit, but for a bare "ns"
                 i += 1
                 continue
