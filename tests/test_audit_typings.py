@@ -481,3 +481,16 @@ def test_a_plural_p_after_one_statistic_is_not_its_own():
     of effects the sentence does not give; the F is not checked against them (it would have been flagged)."""
     (e,) = audit_units([Unit("case", "F(1, 38) = 0.50 for A, while B and C were significant, ps < .05.")])
     assert e.codes == [] and e.checked == ""
+
+
+def test_one_group_size_given_for_each_group_is_two():
+    """"(n = 20 per group)", "(n = 20 each)": one size for each of two groups — the t had been left unchecked (two "n ="
+    had been needed); now it is recomputed on 20 + 20 − 2 = 38 df (p by scipy: .042)."""
+    assert f"{stats.t.sf(2.10, 38) * 2:.3f}" == "0.042"
+    for said in ("n = 20 per group", "n = 20 each", "n = 20 in each condition"):
+        (e,) = audit_units([Unit("case", f"Participants ({said}) differed, t = 2.10, p = .042.")])
+        assert e.codes == [] and "20 + 20 − 2 = 38" in e.checked, said
+        (e,) = audit_units([Unit("case", f"Participants ({said}) differed, t = 2.10, p = .42.")])
+        assert "p-does-not-follow" in e.codes, said
+    (e,) = audit_units([Unit("case", "Participants (n = 20) improved, t = 2.10, p = .049.")])  # one n, not said per group
+    assert e.checked == ""

@@ -576,16 +576,22 @@ def _sentence_start(pat: _Patterns, text: str, since: int, at: int) -> int:
     return max(since, ends[k]) if k >= 0 and ends[k] >= since else since
 
 
+_EACH_GROUP = re.compile(r"\s*(?:per (?:group|condition|arm)|in each (?:group|condition|arm)|each)\b")
+
+
 def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int, int] | None:
     """The two group sizes (``n = 40`` … ``n = 38``) the sentence gives before
-    a statistic, when it gives exactly two."""
+    a statistic, when it gives exactly two; one given for each group (``n = 20
+    per group``, ``n = 20 each``) is two alike."""
     pat = _patterns(decimal_mark)
     index = _index(pat, text)
-    if bisect.bisect_left(index.n_at, rep.start) < 2:  # fewer than two "n =" before it in the whole text
+    if bisect.bisect_left(index.n_at, rep.start) < 1:  # no "n =" before it in the whole text
         return None
     start = _sentence_start(pat, text, 0, rep.start)
     lo, hi = bisect.bisect_left(index.n_at, start), bisect.bisect_left(index.n_at, rep.start)
     found = [m for m in index.n_match[lo:hi] if m.end() <= rep.start]
+    if len(found) == 1 and _EACH_GROUP.match(text, found[0].end()):
+        found = found * 2
     if len(found) != 2:
         return None
     sizes = [pat.to_number(m.group("num"), m.start("num")) for m in found]
