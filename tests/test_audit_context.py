@@ -194,10 +194,11 @@ def test_a_partial_correlation_takes_no_df_from_the_n():
     assert "p-does-not-follow" in e.codes and "N − 2 = 28" in e.checked
 
 
-def test_a_welch_t_without_df_takes_no_student_df_from_the_group_sizes():
+def test_a_welch_t_without_df_is_checked_over_the_df_welch_allows():
     """"Welch's t = 2.10, p = .046" with n = 20 and 20 (p from scipy on Welch's 25 df; Student's 38 df give .042) had been
-    recomputed on 38 df and flagged; a t said to be Welch's (or with equal variances not assumed) is not given the
-    group sizes' df. The same sentence without Welch still is."""
+    recomputed on 38 df and flagged; a t said to be Welch's (or with equal variances not assumed) is checked against
+    every df Welch's test allows, from the smaller group's n − 1 (19: p = .049) to n₁ + n₂ − 2 (38), and flagged only
+    when no df between them gives its p. The same sentence without Welch is Student's."""
     from statsetter.audit.reading import Unit
     from statsetter.audit.report import audit_units
 
@@ -205,7 +206,10 @@ def test_a_welch_t_without_df_takes_no_student_df_from_the_group_sizes():
     for text in ("Men (n = 20) and women (n = 20) differed, Welch's t = 2.10, p = .046.",
                  "Men (n = 20) and women (n = 20) differed, t = 2.10, p = .046 (equal variances not assumed)."):
         (e,) = audit_units([Unit("c", text)])
-        assert "p-does-not-follow" not in e.codes and e.checked == "", text
+        assert "p-does-not-follow" not in e.codes and "from 19" in e.checked, text
+    (e,) = audit_units([Unit("c", "Men (n = 20) and women (n = 20) differed, Welch's t = 2.10, p = .46.")])
+    assert "p-does-not-follow" in e.codes and "0.0498 over those df" in e.findings[0].evidence
+    assert f"{2 * stats.t.sf(2.095, 19):.4f}" == "0.0498"  # (t printed as 2.10 stands for 2.095 to 2.105)
     (e,) = audit_units([Unit("c", "Men (n = 20) and women (n = 20) differed, t = 2.10, p = .046.")])
     assert "p-does-not-follow" in e.codes and "20 + 20 − 2" in e.checked
 

@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
 from .reading import Unit, read_units
@@ -241,7 +241,12 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                 elif rep.symbol in ("r", "rs") and not rep.df and _PARTIAL.search(unit.text, max(previous_value, rep.start - 160), rep.start):
                     pass  # a partial correlation: N − 2 less one df for each covariate, which the N does not say
                 elif rep.symbol == "t" and not rep.df and _WELCH.search(unit.text, max(previous_value, rep.start - 160), rep.end + 60):
-                    pass  # Welch's t: its df lie anywhere from the smaller group's n − 1 to n₁ + n₂ − 2, which no size fixes
+                    # Welch's t: its df lie anywhere from the smaller group's n − 1 to n₁ + n₂ − 2 — a range, checked as one
+                    sizes = group_sizes(unit.text, rep, mark)
+                    if sizes and min(sizes) >= 2:
+                        low, high = min(sizes) - 1.0, sizes[0] + sizes[1] - 2.0
+                        readings = (Reading((low,), f"Welch's df, somewhere from {low:g} (the smaller group's n − 1) to {high:g} (n₁ + n₂ − 2); "
+                                                    "the group sizes beside it", high),)
                 elif rep.symbol in ("t", "r", "rs") and not rep.df:
                     sizes = group_sizes(unit.text, rep, mark)
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
@@ -280,6 +285,9 @@ _new_entry = _unchecked_maker(Entry, {}, ("location", "found", "findings", "sugg
                                           "recheck"))
 
 
+_SPAN = re.compile(r"gives p from \S+ to \S+;")
+
+
 def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Reported, str] | None]":
     """Consistency findings and the statistic and reading recomputed (for ``Entry.checked``); a statistic without df
     is recomputed under each df its context allows, and a finding is made only when none fits."""
@@ -289,7 +297,19 @@ def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Repor
     tried: list[tuple[Reported, list[Finding], Reading]] = []
     for reading in item.readings:
         candidate = replace(rep, df=tuple(Number(f"{d:g}", d, 0, rep.start, rep.start) for d in reading.df), p_range=None)
-        found = consistency(candidate, alpha)
+        if reading.df_high is not None:  # a df anywhere in a range: p moves monotonically with the df, so its ends bound it
+            high = replace(rep, df=(Number(f"{reading.df_high:g}", reading.df_high, 0, rep.start, rep.start),), p_range=None)
+            ends, reported = (p_range(candidate), p_range(high)), reported_p_range(rep, alpha)
+            if ends[0] is None or ends[1] is None or reported is None:
+                continue
+            span = (min(e[0] for e in ends), max(e[1] for e in ends))  # type: ignore[index]
+            if _overlap(span, reported):
+                return [], (high, reading.assumption)
+            candidate = high  # (the findings' codes from n₁ + n₂ − 2, which gives the smallest p's; their evidence the whole span)
+            found = [Finding(f.code, f.message, _SPAN.sub(f"gives p from {span[0]:.4g} to {span[1]:.4g} over those df;", f.evidence, count=1))
+                     for f in consistency(candidate, alpha)]
+        else:
+            found = consistency(candidate, alpha)
         if not _recomputed(candidate, ""):
             continue
         if not found:

@@ -151,6 +151,7 @@ def caption_sizes(text: str) -> tuple[list[int], int | None]:
 class Reading:
     df: tuple[float, ...]
     assumption: str  # how the df was read: "df = 45 + 45 − 2 (Student's t; the group sizes in the table)"
+    df_high: float | None = None  # a df anywhere from df[0] to this (Welch's t: from the smaller group's n − 1 to n₁ + n₂ − 2)
 
 
 def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str) -> list[Reading]:
