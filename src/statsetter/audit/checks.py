@@ -667,14 +667,18 @@ def corrected_p_fits(rep: Reported, alpha: float) -> "tuple[float, float] | None
     given = next((e for e in rep.effects if e.name == "epsilon" and 0 < e.number.value <= 1), None)
     low, high = ((max(given.number.value - given.number.half_unit, 1e-6), min(given.number.value + given.number.half_unit, 1.0))
                  if given is not None else (1 / rep.df[0].value, 1.0))
-    ends = []
-    for eps in (low, high):
-        df = tuple(Number(f"{d.value * eps:.6g}", d.value * eps, 6, d.start, d.end) for d in rep.df)
-        ends.append(p_range(replace(rep, df=df, p_range=None, effects=[])))
-    if any(e is None for e in ends):
+    computed = p_span(replace(rep, effects=[]), [tuple(d.value * eps for d in rep.df) for eps in (low, high)])
+    return (low, high) if computed is not None and _overlap(computed, reported) else None
+
+
+def p_span(rep: Reported, ends: "Sequence[tuple[float, ...]]") -> "tuple[float, float] | None":
+    """The p values the printed statistic allows over every df from one of ``ends`` to the other (p moves monotonically
+    with the df, so the ends bound it): a Welch t's df between the smaller group's n − 1 and n₁ + n₂ − 2, a corrected
+    F's ε·df between the lower bound and none. None when an end gives no p."""
+    found = [p_range(replace(rep, df=tuple(Number(f"{v:.6g}", v, 6, rep.start, rep.start) for v in df), p_range=None)) for df in ends]
+    if any(f is None for f in found):
         return None
-    computed = (min(e[0] for e in ends), max(e[1] for e in ends))  # type: ignore[index]
-    return (low, high) if _overlap(computed, reported) else None
+    return min(f[0] for f in found), max(f[1] for f in found)  # type: ignore[index]
 
 
 def corrected_df(rep: Reported) -> list[Finding]:

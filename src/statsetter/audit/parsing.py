@@ -478,6 +478,13 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     return out
 
 
+def statistic_text(label: str, df: "tuple[Number, ...]", op: str, value: Number, p: PValue | None) -> str:
+    """A statistic made from its parts (a table's cells, a plural head's further value) as one text: "t(38) = 2.14,
+    p = .039" ("ns" as the table gives it)."""
+    p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
+    return f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
+
+
 def _more_values(pat: _Patterns, text: str, rep: Reported) -> list[Reported]:
     """The further values of a plural head, "Fs(1, 38) = 4.41 and 5.20" or "ts(38) = 2.10, 2.50, and 3.00": each with the
     head's df and operator, its text made as a table's statistic's is (its place: its number)."""
@@ -487,7 +494,7 @@ def _more_values(pat: _Patterns, text: str, rep: Reported) -> list[Reported]:
         if value is None:
             break
         more = Reported(rep.symbol, rep.symbol_text, value.start, value.start, value.end, rep.df, rep.n, rep.op, value, plural=True)
-        more.text = f"{rep.symbol}{'(' + ', '.join(d.text for d in rep.df) + ')' if rep.df else ''} {rep.op} {value.text}"
+        more.text = statistic_text(rep.symbol, rep.df, rep.op, value, None)  # type: ignore[arg-type]
         out.append(more)
         at = m.end()
     return out

@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, p_span, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
 from .reading import Unit, read_units
@@ -297,12 +297,11 @@ def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Repor
     tried: list[tuple[Reported, list[Finding], Reading]] = []
     for reading in item.readings:
         candidate = replace(rep, df=tuple(Number(f"{d:g}", d, 0, rep.start, rep.start) for d in reading.df), p_range=None)
-        if reading.df_high is not None:  # a df anywhere in a range: p moves monotonically with the df, so its ends bound it
+        if reading.df_high is not None:  # a df anywhere in a range
             high = replace(rep, df=(Number(f"{reading.df_high:g}", reading.df_high, 0, rep.start, rep.start),), p_range=None)
-            ends, reported = (p_range(candidate), p_range(high)), reported_p_range(rep, alpha)
-            if ends[0] is None or ends[1] is None or reported is None:
+            span, reported = p_span(rep, [reading.df, (reading.df_high,)]), reported_p_range(rep, alpha)
+            if span is None or reported is None:
                 continue
-            span = (min(e[0] for e in ends), max(e[1] for e in ends))  # type: ignore[index]
             if _overlap(span, reported):
                 return [], (high, reading.assumption)
             candidate = high  # (the findings' codes from n₁ + n₂ − 2, which gives the smallest p's; their evidence the whole span)

@@ -18,7 +18,7 @@ import re
 from dataclasses import dataclass, replace
 from typing import Sequence
 
-from .parsing import Effect, Interval, Number, PValue, Reported, _patterns
+from .parsing import Effect, Interval, Number, PValue, Reported, _patterns, statistic_text
 from .reading import Unit
 
 __all__ = ["TableStatistic", "table_statistics", "df_readings", "sizes_in", "caption_sizes", "Reading"]
@@ -95,7 +95,7 @@ _DFS_IN_HEAD = re.compile(r"\s*\(\s*(?P<df>\d+(?:\.\d+)?)(?:\s*[,;]\s*(?P<df2>\d
 
 def _head_dfs(text: str) -> tuple[Number, ...]:
     """The df a column's head gives, "F-ratio (1, 18)": (1, 18); () for none."""
-    m = _DFS_IN_HEAD.search(_FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip())
+    m = _DFS_IN_HEAD.search(_head_text(text))
     if m is None:
         return ()
     return tuple(Number(m.group(g), float(m.group(g)), len(m.group(g).partition(".")[2]), 0, 0) for g in ("df", "df2") if m.group(g) is not None)
@@ -117,8 +117,15 @@ def _value_df(text: str, mark: str) -> "tuple[tuple[str, Number], tuple[Number, 
     return ((m.group("op") or "=").strip(), value), tuple(dfs)  # type: ignore[arg-type]
 
 
+def _head_text(text: str) -> str:
+    """A column head without footnote marks."""
+    return _FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip()
+
+
 def _role(text: str) -> str | None:
-    head = _DFS_IN_HEAD.sub("", _DF_IN_HEAD.sub("", _FOOTNOTE.sub("", text.translate(_MARKS).strip()).strip()))
+    head = _head_text(text)
+    if head.endswith(")"):  # (every cell of every row is asked: the df suffixes only where one can stand)
+        head = _DFS_IN_HEAD.sub("", _DF_IN_HEAD.sub("", head))
     for pattern, role in _ROLES:
         if pattern.fullmatch(head):
             return role
@@ -205,12 +212,6 @@ def _p_cell(text: str, mark: str) -> PValue | None:
         return None
     op, num = found
     return PValue(op, num, num.start, num.end, num.start, "")
-
-
-def _table_text(label: str, df: "tuple[Number, ...]", op: str, value: Number, p: PValue | None) -> str:
-    """A statistic read from a table's cells as one text: "t(38) = 2.14, p = .039" ("ns" as the table gives it)."""
-    p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
-    return f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
 
 
 def _own_column(roles: dict[int, str], column: int, role: str) -> int | None:
@@ -408,7 +409,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
-            rep.text = _table_text(label, df, op, value, p)
+            rep.text = statistic_text(label, df, op, value, p)
             if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
                 readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
@@ -474,7 +475,7 @@ def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no
             df = () if symbol == "z" else (size[1],)  # type: ignore[index]
             label = {"chi2": "χ²"}.get(symbol, symbol)
             rep = Reported(symbol, label, value[1].start, value[1].start, value[1].end, df, None, value[0], value[1], p)
-            rep.text = _table_text(label, df, value[0], value[1], p)
+            rep.text = statistic_text(label, df, value[0], value[1], p)
             found.append(TableStatistic(rows[r][c][0], rep, None, f"read from the table's row: the {text.strip()} row" + (", the df row" if df else "")
                                         + ", the Asymp. Sig. row, in its column"))
     return found
@@ -518,6 +519,6 @@ def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[
             df = Number(f"{size[1].value - 2:g}", size[1].value - 2, 0, 0, 0)
             unit = row[c][0]
             rep = Reported(symbol, symbol, value[1].start, value[1].start, value[1].end, (df,), None, value[0], value[1], p)
-            rep.text = _table_text(symbol, (df,), value[0], value[1], p)
+            rep.text = statistic_text(symbol, (df,), value[0], value[1], p)
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: the coefficient, the Sig. ({tails}-tailed) and N rows below it in its column (df = N − 2)"))
     return found
