@@ -98,7 +98,8 @@ def read_data(
         raise InputError(f"{p}: unknown data format {p.suffix or '(no extension)'!r}; statsetter reads {', '.join(READERS)}")
     _check_magic(p, suffix)
     try:
-        data = _read(p, suffix, sheet, encoding, sep, decimal)
+        with _text_storage(p):
+            data = _read(p, suffix, sheet, encoding, sep, decimal)
     except InputError:
         raise
     except UnicodeDecodeError as exc:
@@ -116,6 +117,30 @@ def read_data(
     return _finite(data)
 
 
+_LOOKED_AT_ONE_BY_ONE = 5_000  # a text column of up to this many rows is searched for spaced values in Python (a first
+# vectorised pass costs the string kernels' start-up, about half a millisecond a column; the loop ~0.2 µs a value)
+
+
+_SMALL_FILE = 2 << 20  # bytes: a data file up to this size keeps its text columns as Python strings
+
+
+def _text_storage(p: Path) -> Any:
+    """Where pandas keeps a file's text columns: in Python strings for a small file (a survey's hundreds or thousands
+    of rows), in Arrow's otherwise. The values, their dtype (``str``) and every result are the same either way (the
+    base install, without pyarrow, has only the first); what differs is the cost: each operation on an Arrow column
+    pays a fixed price and the first ones start Arrow's kernels and memory pool (about 20 ms of the demo plan's run,
+    a tenth of its own work), while Python strings cost more per value (three times Arrow's at a million rows)."""
+    import contextlib
+
+    import pandas as pd
+
+    try:
+        small = p.stat().st_size <= _SMALL_FILE
+    except OSError:
+        small = False
+    return pd.option_context("mode.string_storage", "python") if small else contextlib.nullcontext()
+
+
 def _trimmed(data: Dataset) -> Dataset:
     """Text values with white space before or after them are the same values trimmed (" male" and "male " had been
     three categories with "male"), and a value of white space only is missing; a note per column says how many."""
@@ -126,6 +151,8 @@ def _trimmed(data: Dataset) -> Dataset:
         s = data.frame[name]
         if not (pd.api.types.is_string_dtype(s.dtype) or s.dtype == object) or isinstance(s.dtype, pd.CategoricalDtype):
             continue
+        if len(s) <= _LOOKED_AT_ONE_BY_ONE and not any(isinstance(v, str) and v != v.strip() for v in s.tolist()):
+            continue  # (Python's str.strip and Arrow's trim take off the same characters, so this asks what the rest would)
         text = s.map(lambda v: v if isinstance(v, str) else None) if s.dtype == object else s  # (an object column may mix in numbers)
         stripped = text.str.strip()
         spaced = ((stripped != text) & text.notna()).fillna(False).to_numpy(dtype=bool)  # (a missing value is not unequal to itself here)

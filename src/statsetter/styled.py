@@ -11,7 +11,6 @@ runs.
 
 from __future__ import annotations
 
-import html as _html
 import re
 from functools import lru_cache
 from typing import Iterable, Literal, NamedTuple
@@ -26,6 +25,11 @@ _ENTITY = {"lt": "<", "gt": ">", "amp": "&", "quot": '"'}
 _TAG_SPLIT = re.compile(r"<(/?)(i|sup|sub)>")
 _NO_STYLE: frozenset[str] = frozenset()
 _ONE_STYLE = {name: frozenset((name,)) for name in ("i", "sup", "sub")}
+
+
+def _escape_html(text: str) -> str:
+    """``html.escape(text, quote=False)``, without importing the html module and its entity table (2 ms of a run)."""
+    return text.replace("&", "&amp;").replace("<", "&lt;").replace(">", "&gt;")
 
 
 def _span_order(s: "Span") -> tuple[int, int]:
@@ -244,7 +248,7 @@ class StyledText:
         return "".join([_md_piece(text, styles) if styles else _escape_md(text) for text, styles in self.segments()])
 
     def html(self) -> str:
-        return "".join(_wrap(_html.escape(t, quote=False), styles, _HTML_TAGS) for t, styles in self.segments())
+        return "".join(_wrap(_escape_html(t), styles, _HTML_TAGS) for t, styles in self.segments())
 
     def latex(self) -> str:
         parts = []

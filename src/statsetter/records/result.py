@@ -355,6 +355,8 @@ def with_table_labels(record: "Result", tables: Mapping[str, str], prose: Mappin
                 head = head + v.label[len(said):]
             v = replace(v, table_label=head)
         changed.append(v)
+    if all(a is b for a, b in zip(changed, record.variables)):  # nothing to label: the record itself, not a copy validated again
+        return record
     return replace(record, variables=tuple(changed))
 
 
