@@ -114,3 +114,20 @@ def test_load_records_errors_name_the_record():
 def test_dump_and_load_many():
     rs = [full_record(), Result(kind="pearson", statistic=Statistic("r", 0.3, (98,)), p=0.002, n=100)]
     assert load_records(dump_records(rs)) == rs
+
+
+def test_a_part_validated_before_is_still_refused_in_the_wrong_place():
+    """Parts validated once are not validated again when a record is copied with replace() (half the parts a run
+    validates had been), but where each part stands is checked every time: a note once valid in ``notes`` is refused
+    in ``groups`` (before, a recently seen note had skipped that check)."""
+    from dataclasses import replace
+
+    note = Note("method", "Welch's t test.")
+    record = Result("t_independent", notes=(note,), groups=(GroupSummary("a", n=3),))
+    assert replace(record, id="x").notes[0] is note
+    with pytest.raises(RecordError) as info:
+        Result("t_independent", groups=(note,))  # type: ignore[arg-type]
+    assert info.value.field == "groups[0]"
+    with pytest.raises(RecordError) as info:
+        replace(record, groups=(GroupSummary("b", n=-1),))  # a new part is validated
+    assert info.value.field == "groups[0].n"
