@@ -522,3 +522,5 @@ def test_a_small_files_text_kept_in_python_strings_gives_the_records_arrows_give
                    *describe(frame, ["island", "sex", "body_mass_g"], group="species", compare=True)]
         out[storage] = dump_records(records)
     assert out["python"] == out["pyarrow"]
+    with pd.option_context("mode.string_storage", "python"):  # as `statsetter run` computes: a large file's text stays Arrow's
+        assert read_data(tmp_path / "penguins.csv").frame.species.dtype.storage == "pyarrow"

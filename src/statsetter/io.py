@@ -126,19 +126,18 @@ _SMALL_FILE = 2 << 20  # bytes: a data file up to this size keeps its text colum
 
 def _text_storage(p: Path) -> Any:
     """Where pandas keeps a file's text columns: in Python strings for a small file (a survey's hundreds or thousands
-    of rows), in Arrow's otherwise. The values, their dtype (``str``) and every result are the same either way (the
-    base install, without pyarrow, has only the first); what differs is the cost: each operation on an Arrow column
-    pays a fixed price and the first ones start Arrow's kernels and memory pool (about 20 ms of the demo plan's run,
-    a tenth of its own work), while Python strings cost more per value (three times Arrow's at a million rows)."""
-    import contextlib
-
+    of rows), in Arrow's otherwise (when pyarrow is installed: pandas' own choice, "auto"). The values, their dtype
+    (``str``) and every result are the same either way (the base install, without pyarrow, has only the first); what
+    differs is the cost: each operation on an Arrow column pays a fixed price and the first array starts Arrow's
+    memory pool (1 to 10 ms), about 20 ms of the demo plan's run, a tenth of its own work, while Python strings cost
+    more per value (three times Arrow's at a million rows)."""
     import pandas as pd
 
     try:
         small = p.stat().st_size <= _SMALL_FILE
     except OSError:
         small = False
-    return pd.option_context("mode.string_storage", "python") if small else contextlib.nullcontext()
+    return pd.option_context("mode.string_storage", "python" if small else "auto")
 
 
 def _trimmed(data: Dataset) -> Dataset:

@@ -33,26 +33,31 @@ def _settled(analysis: str = "") -> None:
 
 
 def _computed(plan: "Plan") -> "RunResult":
-    """The plan run, with a progress bar on a terminal; the collector as before afterwards."""
+    """The plan run, with a progress bar on a terminal; the collector as before afterwards. The analyses' own text
+    arrays (names, labels, categories) are kept in Python strings: Arrow's would start its memory pool (1 to 10 ms)
+    for arrays of a few names (a large data file's columns are still Arrow's: io._text_storage)."""
+    import pandas as pd
+
     from ..plan import run_plan
 
     _settled()
-    try:
-        if len(plan.analyses) >= 8 and sys.stderr.isatty():
-            from rich.console import Console
-            from rich.progress import Progress
+    with pd.option_context("mode.string_storage", "python"):
+        try:
+            if len(plan.analyses) >= 8 and sys.stderr.isatty():
+                from rich.console import Console
+                from rich.progress import Progress
 
-            with Progress(console=Console(stderr=True), transient=True) as bar:
-                task = bar.add_task("analyses", total=len(plan.analyses))
+                with Progress(console=Console(stderr=True), transient=True) as bar:
+                    task = bar.add_task("analyses", total=len(plan.analyses))
 
-                def advanced(name: str) -> None:
-                    _settled(name)
-                    bar.update(task, advance=1, description=name)
+                    def advanced(name: str) -> None:
+                        _settled(name)
+                        bar.update(task, advance=1, description=name)
 
-                return run_plan(plan, progress=advanced)
-        return run_plan(plan, progress=_settled)
-    finally:
-        gc.unfreeze()
+                    return run_plan(plan, progress=advanced)
+            return run_plan(plan, progress=_settled)
+        finally:
+            gc.unfreeze()
 
 
 def run(ns: argparse.Namespace) -> int:
