@@ -19,7 +19,83 @@ _SUMMARIES: dict[str, Any] = {"descriptives": Description, "correlation_matrix":
 
 def dump_records(records: Iterable[Record], *, indent: int | None = 2) -> str:
     """Records as a JSON array (each with its schema and version)."""
-    return json.dumps([r.to_dict() for r in records], ensure_ascii=False, indent=indent)
+    data = [r.to_dict() for r in records]
+    if indent is not None and indent >= 0:
+        try:
+            return _indented(data, " " * indent)
+        except (_NotPlain, RecursionError):
+            pass  # (a value JSON has no plain form for: json says what it makes of it, or why it cannot)
+    return json.dumps(data, ensure_ascii=False, indent=indent)
+
+
+class _NotPlain(Exception):
+    pass
+
+
+def _indented(data: Any, step: str) -> str:
+    """``json.dumps(data, ensure_ascii=False, indent=len(step))`` for plain data (dicts with text keys, lists, text,
+    whole numbers, floats, true, false, null), written in one pass into a list: the json module writes indented text
+    with its pure-Python encoder (its C encoder only writes unindented text), twice the time (5.3 against 2.6 ms for
+    the demo plan's records; tests/test_records.py compares the two on random data)."""
+    from json.encoder import encode_basestring
+
+    out: list[str] = []
+    put = out.append
+    number = float.__repr__
+    whole = int.__repr__
+    infinity = float("inf")
+
+    def value(o: Any, pad: str) -> None:
+        kind = type(o)
+        if kind is str:
+            put(encode_basestring(o))
+        elif kind is dict:
+            if not o:
+                put("{}")
+                return
+            inner = pad + step
+            put("{\n" + inner)
+            first = True
+            for key, item in o.items():
+                if type(key) is not str:
+                    raise _NotPlain
+                if first:
+                    first = False
+                else:
+                    put(",\n" + inner)
+                put(encode_basestring(key))
+                put(": ")
+                value(item, inner)
+            put("\n" + pad + "}")
+        elif kind is list or kind is tuple:
+            if not o:
+                put("[]")
+                return
+            inner = pad + step
+            put("[\n" + inner)
+            first = True
+            for item in o:
+                if first:
+                    first = False
+                else:
+                    put(",\n" + inner)
+                value(item, inner)
+            put("\n" + pad + "]")
+        elif kind is float:
+            put(number(o) if o == o and o != infinity and o != -infinity else "NaN" if o != o else "Infinity" if o > 0 else "-Infinity")
+        elif o is None:
+            put("null")
+        elif o is True:
+            put("true")
+        elif o is False:
+            put("false")
+        elif kind is int:
+            put(whole(o))
+        else:
+            raise _NotPlain
+
+    value(data, "")
+    return "".join(out)
 
 
 def record_from_dict(data: Mapping[str, Any], *, where: str = "record") -> Record:
