@@ -6,6 +6,8 @@ expected p values are scipy's (computed here), never typed in."""
 
 from __future__ import annotations
 
+import itertools
+import math
 import re
 
 import docx
@@ -587,3 +589,26 @@ def test_a_procedure_named_in_the_tables_note_excuses_its_p(tmp_path):
     excused = entry("Note. p values are adjusted by Tukey's HSD.")
     assert not _p_findings(excused) and any("Tukey" in n for n in excused.notes)
     assert "p-does-not-follow" in entry("Note. Two-sided tests.").codes
+
+
+def test_a_spearman_p_from_rs_cor_test_is_noted_not_flagged():
+    """R's cor.test gives Spearman's ρ without ties an exact p (up to 9 pairs) or AS 89's (up to 1,290), not the t
+    approximation SPSS prints: ρ = .60 on the 9 pairs of R's help-page example (Hollander & Wolfe) has R's p .097
+    against the t approximation's .088. Both are accepted; R's is a note saying so (it had been an error); a p neither
+    gives is still an error. Numbers: scipy's spearmanr on the example's data, R's p by enumeration
+    (tests/test_pvalues.py)."""
+    x = [44.4, 45.9, 41.9, 53.3, 44.7, 44.1, 50.7, 45.2, 60.1]
+    y = [2.6, 3.1, 2.5, 5.0, 3.6, 4.0, 5.2, 2.8, 3.8]
+    rho, t_p = stats.spearmanr(x, y)
+    counts = {}
+    for perm in itertools.permutations(range(9)):
+        s = sum((i - v) ** 2 for i, v in enumerate(perm))
+        counts[s] = counts.get(s, 0) + 1
+    r_p = 2 * sum(c for s, c in counts.items() if s <= 48) / math.factorial(9)
+    base = f"r_s(7) = {rho:.2f}"
+    (r,) = audit_units([Unit("r", f"{base}, p = {r_p:.3f}".replace("0.", "."))])
+    assert _p_findings(r) == set() and "R's cor.test" in r.notes[0], r.notes
+    (t,) = audit_units([Unit("t", f"{base}, p = {t_p:.3f}".replace("0.", "."))])
+    assert _p_findings(t) == set() and t.notes == ()
+    (wrong,) = audit_units([Unit("w", f"{base}, p = .020")])
+    assert "p-does-not-follow" in wrong.codes and wrong.notes == ()

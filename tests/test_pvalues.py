@@ -223,3 +223,33 @@ def test_statistics_far_out_in_a_tail_give_a_p_not_an_error():
             assert ours == pytest.approx(ref, rel=1e-7), (symbol, value, df)
         else:
             assert ours <= 1e-300, (symbol, value, df, ours)
+
+
+def test_spearmans_p_as_rs_cor_test_gives_it():
+    """Spearman's ρ without ties as R's cor.test computes its p by default (R's prho.c and cor.test.R: the distribution
+    of S = Σ(i − πᵢ)² counted over all permutations up to 9 pairs, Algorithm AS 89's Edgeworth series from 10 to 1,290
+    pairs, the t approximation above).
+    - the counts of S: against enumerating every permutation (n = 2 to 9; independent of the recursion used);
+    - n = 10, P(S ≤ 36): 0.005825634 by AS 89 and 0.005265377 exactly — the two values printed in the examples of
+      CRAN's pspearman package (pspearman(36, 10, approximation = "AS89") and "exact"), whose AS 89 is R's prho;
+    - R's cor.test help page's Hollander & Wolfe data (9 pairs): ρ = 0.6 (scipy), one-sided p 0.0484 as R prints it
+      for alternative = "greater" (from memory), two-sided twice that, against the t approximation's 0.0876 (scipy);
+    - above 1,290 pairs: None (R takes the t approximation there, as p_from_statistic does)."""
+    from statsetter.pvalues import _spearman_counts, _spearman_lower, spearman_p
+
+    for n in range(2, 10):
+        counts = [0] * (n * (n * n - 1) // 3 + 1)
+        for perm in itertools.permutations(range(n)):
+            counts[sum((i - v) ** 2 for i, v in enumerate(perm))] += 1
+        assert _spearman_counts(n) == counts, n
+    assert _spearman_lower(10, 36 + 2) == pytest.approx(0.005825634, abs=5e-10)
+    exact = sum(_spearman_counts(10)[:37]) / math.factorial(10)
+    assert exact == pytest.approx(0.005265377, abs=5e-10)
+    x = [44.4, 45.9, 41.9, 53.3, 44.7, 44.1, 50.7, 45.2, 60.1]
+    y = [2.6, 3.1, 2.5, 5.0, 3.6, 4.0, 5.2, 2.8, 3.8]
+    rho, t_approximation = stats.spearmanr(x, y)
+    assert rho == pytest.approx(0.6, abs=1e-12) and t_approximation == pytest.approx(0.0876, abs=5e-5)
+    assert spearman_p(rho, 9) / 2 == pytest.approx(0.0484, abs=5e-5)
+    assert spearman_p(rho, 9) == spearman_p(-rho, 9) == pytest.approx(0.09679783950617284, rel=1e-15)
+    assert spearman_p(0.3, 1290) is not None and spearman_p(0.3, 1291) is None
+    assert spearman_p(1.0, 5) == pytest.approx(2 / 120) and spearman_p(0.0, 12) == 1.0

@@ -19,7 +19,7 @@ from typing import Sequence
 
 from ..errors import MissingExtra
 from ..formulas import hedges_j
-from ..pvalues import upper_tail
+from ..pvalues import spearman_p, upper_tail
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
@@ -669,6 +669,23 @@ def corrected_p_fits(rep: Reported, alpha: float) -> "tuple[float, float] | None
                  if given is not None else (1 / rep.df[0].value, 1.0))
     computed = p_span(replace(rep, effects=[]), [tuple(d.value * eps for d in rep.df) for eps in (low, high)])
     return (low, high) if computed is not None and _overlap(computed, reported) else None
+
+
+def spearman_fits(rep: Reported, alpha: float) -> "tuple[float, float] | None":
+    """For Spearman's ρ with whole df (n = df + 2 pairs, 3 to 1,290) beside a p that the t approximation does not give:
+    the two-sided p values R's cor.test gives for the printed ρ (exact over the permutations up to 9 pairs, AS 89's
+    Edgeworth series above: pvalues.spearman_p) when the reported p allows one of them, else None."""
+    if rep.symbol != "rs" or len(rep.df) != 1 or rep.op != "=" or not float(rep.df[0].value).is_integer():
+        return None
+    bounds, reported = _printed_bounds(rep), reported_p_range(rep, alpha)
+    if bounds is None or reported is None:
+        return None
+    n = int(rep.df[0].value) + 2
+    ends = [spearman_p(bounds[2], n), spearman_p(bounds[0], n)]  # (p falls as |ρ| grows)
+    if ends[0] is None or ends[1] is None:
+        return None
+    computed = (min(ends), max(ends))  # type: ignore[type-var]
+    return computed if _overlap(computed, reported) else None  # type: ignore[arg-type]
 
 
 def p_span(rep: Reported, ends: "Sequence[tuple[float, ...]]") -> "tuple[float, float] | None":

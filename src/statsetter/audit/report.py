@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, p_span, reported_p_range, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
 from .reading import Unit, read_units
@@ -469,6 +469,12 @@ def _audit_units(
                 findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes")]
                 findings.append(Finding("uncorrected-df", f"The p fits the sphericity-corrected test (ε from {eps[0]:.3g} to {eps[1]:.3g}), "
                                                           "not the df printed: give the corrected df, F(ε·df₁, ε·df₂).", evidence))
+        if rep.symbol == "rs" and any(f.code in ("p-does-not-follow", "one-sided") for f in findings):
+            fits = spearman_fits(recheck[0] if recheck is not None and not rep.df else rep, alpha)
+            if fits is not None:  # R's p for ρ (exact or AS 89), not the t approximation: a small sample's p from R
+                findings = [f for f in findings if f.code not in ("p-does-not-follow", "verdict-changes", "one-sided")]
+                notes.append(f"The p fits Spearman's test as R's cor.test computes it (p from {fits[0]:.4g} to {fits[1]:.4g}: exact over the "
+                             "permutations up to 9 pairs, AS 89's Edgeworth series up to 1,290), not the t approximation.")
         if any(f.code == "one-sided" for f in findings):
             said = _one_sided_said(unit.text, rep) or (_ONE_SIDED_SAID.search(item.how) if item.how else None)  # (a table's "Sig. (1-tailed)")
             if said is not None:  # the text says the test was one-sided, and the p fits one
