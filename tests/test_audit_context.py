@@ -612,3 +612,61 @@ def test_a_spearman_p_from_rs_cor_test_is_noted_not_flagged():
     assert _p_findings(t) == set() and t.notes == ()
     (wrong,) = audit_units([Unit("w", f"{base}, p = .020")])
     assert "p-does-not-follow" in wrong.codes and wrong.notes == ()
+
+
+# Table 2 of an article in Int J Environ Res Public Health 2021;18(22):12096 (doi:10.3390/ijerph182212096, PMC8622160,
+# as PubMed Central prints the table): correlations of age, depression, anxiety and reaction times in the anxious group,
+# M and SD first, the columns headed by the variables' numbers, marks of significance with a space before them, N and the
+# marks in the note
+_IJERPH_ROWS = [
+    ["Variables", "M", "SD", "1", "2", "3", "4", "5", "6", "7", "8"],
+    ["1. GAD", "11.1", "4.49"],
+    ["2. Age", "20.9", "2.55", "−0.14"],
+    ["3. BDI", "19.2", "10.83", "0.47 ***", "−0.15"],
+    ["4. Happy face, self-shape RTs", "694.5", "86.5", "−0.10", "0.07", "−0.16"],
+    ["5. Neutral face, self-shape RTs", "706.7", "99.46", "−0.11", "0.15", "−0.11", "0.73 ***"],
+    ["6. Sad face, self-shape RTs", "715.1", "92.49", "0.06", "0.02", "−0.02", "0.72 ***", "0.64 ***"],
+    ["7. Happy face, other-shape RTs", "723", "109.91", "−0.09", "−0.04", "−0.07", "0.52 ***", "0.55 ***", "0.40 **"],
+    ["8. Neutral face, other-shape RTs", "720.2", "105.13", "0.02", "−0.03", "−0.13", "0.51 ***", "0.45 ***", "0.41 ***", "0.81 ***"],
+    ["9. Sad face, other-shape RTs", "740.4", "108.64", "0.18", "−0.27 *", "−0.00", "0.47 ***", "0.36 **", "0.41 ***", "0.75 ***", "0.81 ***"],
+]
+_IJERPH_NOTE = ("Note. N = 60; M: mean; SD: standard deviation; * p < 0.05, ** p < 0.01, *** p < 0.001 (two-tailed tests). "
+             "1: Depression is a confounding variable which influences emotion perception [4].")
+
+
+def test_a_correlation_matrix_with_marks_of_significance(tmp_path):
+    """A correlation matrix as psychology papers print it (IJERPH 2021, Table 2, above): each coefficient with a
+    mark is r(N − 2) with the mark's bound for its p — all 17 of the table's marked coefficients read, none flagged (the
+    closest, r = .41 with ***, gives p from .00099 to .0013 on 58 df); its unmarked ones, and its M and SD, are not
+    read. The same table with one coefficient retyped (.40 ** as .20 **, p .13) is flagged; with two N's in the note
+    (subsamples) nothing is read. Before, none of it was read. Reference: scipy's t distribution for r's p."""
+    rows = [r + [""] * (11 - len(r)) for r in _IJERPH_ROWS]
+    caption = "Table 2. Correlations between age, depression, anxiety, and reaction times in the anxious group."
+    entries = audit_file(_doc(tmp_path / "matrix.docx", tables=[(caption, rows)], note=_IJERPH_NOTE))
+    read = [e for e in entries if "correlation matrix" in " ".join(e.notes)]
+    marked = sum(1 for r in _IJERPH_ROWS[1:] for cell in r[3:] if "*" in cell)
+    assert marked == 17 and len(read) == 17 and all(e.codes == [] for e in read), [(e.found, e.codes) for e in read]
+    closest = next(e for e in read if e.found.startswith("r(58) = 0.41"))
+    lo, hi = (_p2(r * (58 / (1 - r * r)) ** 0.5, 58) for r in (0.415, 0.405))
+    assert lo < 0.001 < hi and "p < 0.001" in closest.found
+    assert not any("11.1" in e.found or "−0.14" in e.found for e in entries)
+    wrong = [list(r) for r in rows]
+    wrong[7][8] = "0.20 **"
+    flagged = [e for e in audit_file(_doc(tmp_path / "wrong.docx", tables=[(caption, wrong)], note=_IJERPH_NOTE)) if e.codes]
+    assert [e.found for e in flagged] == ["r(58) = 0.20, p < 0.01"] and "p-does-not-follow" in flagged[0].codes
+    two = _IJERPH_NOTE.replace("N = 60;", "N = 60 (session 1) and N = 52 (session 2);")
+    assert not [e for e in audit_file(_doc(tmp_path / "two.docx", tables=[(caption, rows)], note=two)) if "correlation matrix" in " ".join(e.notes)]
+
+
+def test_a_tables_marked_statistic_has_its_marks_bound_for_a_p(tmp_path):
+    """A t in a table's t column with a mark the note defines ("3.10**" with "**p < .01"), and no p column, is checked
+    against the mark's bound — a t(38) of 1.20 marked * (p .24) is flagged; before, the mark was dropped and nothing
+    was checked. The note's definitions are not themselves read as reported p's (a "†p < .10" had been a p-threshold
+    style finding). Numbers: scipy's t distribution."""
+    rows = [["Measure", "t", "df"], ["Anxiety", "3.10**", "38"], ["Sleep", "1.20*", "38"], ["Energy", "2.10†", "38"], ["Mood", "0.80", "38"]]
+    entries = audit_file(_doc(tmp_path / "t.docx", tables=[("Table 1. Comparisons of the two shifts", rows)], note="Note. †p < .10. *p < .05. **p < .01."))
+    by = {e.found: e for e in entries}
+    assert _p2(3.10, 38) < 0.01 and _p2(2.10, 38) < 0.10 < _p2(1.20, 38)
+    assert by["t(38) = 3.10, p < .01"].codes == [] and by["t(38) = 2.10, p < .10"].codes == []
+    assert "p-does-not-follow" in by["t(38) = 1.20, p < .05"].codes
+    assert "t(38) = 0.80" in by and set(by) == {"t(38) = 3.10, p < .01", "t(38) = 1.20, p < .05", "t(38) = 2.10, p < .10", "t(38) = 0.80"}

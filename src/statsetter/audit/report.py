@@ -25,7 +25,7 @@ from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
-from .tables import ONE_COEFFICIENT, Reading, df_readings, table_statistics
+from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
 
@@ -268,7 +268,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         caption = " ".join(body)
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
-        found, used = table_statistics(cells, caption, mark)
+        found, used = table_statistics(cells, caption, mark, star_bounds(f"{caption} {note}", mark) if "p" in note or "P" in note or "p" in caption else None,
+                                       f"{caption} {note}")
         if _WELCH.search(caption) or _WELCH.search(note):  # Welch's t's: their df are not the table's group sizes'
             found = [replace(t, readings=()) if t.rep.symbol == "t" and not t.rep.df else t for t in found]
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)

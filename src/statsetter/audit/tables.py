@@ -21,7 +21,7 @@ from typing import Sequence
 from .parsing import Effect, Interval, Number, PValue, Reported, _patterns, statistic_text
 from .reading import Unit
 
-__all__ = ["TableStatistic", "table_statistics", "df_readings", "sizes_in", "caption_sizes", "Reading"]
+__all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "sizes_in", "caption_sizes", "Reading"]
 
 _FOOTNOTE = re.compile(r"(?<=\S)(?:\s*[*†‡§]+|(?<=value)[a-d]|(?<=values)[a-d])$")
 _ROLES = (
@@ -78,7 +78,20 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
 # an error term's row: "Residuals", "Error", "Within groups", and an error named for its stratum as mixed and
 # repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
-_BARE = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?:[*†‡§]+|[a-d])?\s*")
+_BARE = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?P<marks>[*†‡§]+|[a-d])?\s*")
+# a note's (or caption's) marks of significance: "*p < .05. **p < .01. ***p < .001.", "† p < .10", "* P ≤ 0.05"
+_STAR_SAID = re.compile(r"(?<![*†‡§\w])([*†‡§]{1,4})\s*[pP]\s*([<≤])\s*(0?[.,]\d+)")
+
+
+def star_bounds(text: str, mark: str) -> dict[str, tuple[str, Number]]:
+    """The p bound each mark stands for, as a table's note or caption defines it ("**p < .01": "**" → ("<", .01))."""
+    out = {}
+    for m in _STAR_SAID.finditer(text):
+        number = _patterns(mark).to_number(m.group(3), 0)
+        if number is not None and 0 < number.value < 1:
+            out.setdefault(m.group(1), (m.group(2), number))
+    return out
+
 _NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
 _SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
 
@@ -138,6 +151,11 @@ def sizes_in(text: str) -> list[int]:
 
 
 _PER_GROUP = re.compile(r"(?i)\s*(?:per|in each|each)\b")
+
+
+def caption_sizes_all(text: str) -> list[int]:
+    """Every total (``N = 42``) a caption or note gives."""
+    return [int(m.group(1)) for m in _SIZE.finditer(text) if m.group(0).lstrip()[0] == "N"]
 
 
 def caption_sizes(text: str) -> tuple[list[int], int | None]:
@@ -300,11 +318,15 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple
     return (b, se), effects
 
 
-def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str) -> tuple[list[TableStatistic], set[int]]:
+def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str,
+                     stars: "dict[str, tuple[str, Number]] | None" = None, said: str = "") -> tuple[list[TableStatistic], set[int]]:
     """The statistics of one table: ``cells`` are (row, column, unit, the
-    statistics the text parser found in it). Returns the statistics and the
-    ids of parsed statistics that became part of another (a lone p in the
-    cell after a statistic)."""
+    statistics the text parser found in it); ``stars``, the p bounds its note
+    gives its marks (``star_bounds``): a statistic marked so, without a p of
+    its own, has that bound for its p; ``said``, the caption and note (a
+    correlation matrix's N). Returns the statistics and the ids of
+    parsed statistics that became part of another (a lone p in the cell
+    after a statistic)."""
     rows: dict[int, dict[int, tuple[Unit, list[Reported]]]] = {}
     for r, c, unit, reps in cells:
         rows.setdefault(r, {})[c] = (unit, reps)
@@ -402,6 +424,12 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 how += ", the error row's df"
             if p is not None:
                 how += ", the p column"
+            elif stars:  # "3.10**" with "**p < .01" in the note: p < .01
+                marks = _BARE.fullmatch(unit.text)
+                bound = stars.get(marks.group("marks") or "") if marks is not None else None
+                if bound is not None:
+                    p = PValue(bound[0], bound[1], value.end, value.end, value.end, "")
+                    how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text} in the note)"  # type: ignore[union-attr]
             coefficient, effects = _coefficient_cells(row, roles, numbers, mark) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role == "wald" else []  # (a linear model's row has no odds ratio)
             if coefficient is not None:
@@ -440,7 +468,62 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                             break
                 readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table"))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
-    return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark), used
+    return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark) + _starred_matrix(rows, mark, stars, said or caption), used
+
+
+_SPEARMAN_SAID = re.compile(r"(?i)\bspearman|\brho\b|ρ")
+_COLUMN_NUMBER = re.compile(r"\s*(\d{1,2})\.?\s*")
+_DECIMALS = re.compile(r"[.,]\d")
+
+
+def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | None", caption: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """The coefficients of a correlation matrix as psychology papers print it: columns headed by the variables'
+    numbers (1, 2, 3 …; M and SD columns before them left alone), a coefficient with the note's marks of significance
+    ("−.25**" with "**p < .01"), and one N for the table in its caption or note ("N = 150"): each marked coefficient is
+    r(N − 2) with its mark's bound for a p (Spearman's where the table names Spearman). Coefficients without a mark are
+    not read (their p is only said to be above the smallest bound), nor any where the table gives no single N. A
+    coefficient computed on fewer rows (pairwise deletion) has a larger p than N − 2 gives, so a mark it earned is
+    never doubted for that."""
+    if not stars:
+        return []
+    groups, total = caption_sizes(caption)
+    if total is None and len(groups) == 1:  # "n = 312" for the whole sample, as many notes write it
+        total = groups[0]
+    if total is None or total < 4 or len(set(caption_sizes_all(caption))) > 1:
+        return []
+    order = sorted(rows)
+    columns: list[int] = []
+    for k, r in enumerate(order):
+        numbered = [(c, int(m.group(1))) for c, (u, _) in sorted(rows[r].items()) for m in [_COLUMN_NUMBER.fullmatch(u.text)] if m]
+        if len(numbered) >= 2 and numbered[0][1] in (1, 2) and [n for _, n in numbered] == list(range(numbered[0][1], numbered[0][1] + len(numbered))):
+            columns = [c for c, _ in numbered]
+            body = order[k + 1 :]
+            break
+    if not columns:
+        return []
+    symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
+    df = Number(f"{total - 2}", float(total - 2), 0, 0, 0)
+    found: list[TableStatistic] = []
+    for r in body:
+        row = rows[r]
+        for c in columns:
+            if c not in row:
+                continue
+            unit = row[c][0]
+            m = _BARE.fullmatch(unit.text)
+            if m is None or m.group("op") or not m.group("marks") or m.group("marks") not in stars or not _DECIMALS.search(m.group("num")):
+                continue
+            value = _patterns(mark).to_number(m.group("num"), m.start("num"))
+            if value is None or abs(value.value) > 1:
+                continue
+            op, bound = stars[m.group("marks")]
+            p = PValue(op, bound, value.end, value.end, value.end, "")
+            rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
+            rep.text = statistic_text(symbol, (df,), "=", value, p)
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: a coefficient of the correlation matrix with its "
+                                                         f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text} in the note), df = N − 2 "
+                                                         f"(N = {total} in the caption or note)"))
+    return found
 
 
 # SPSS's Test Statistics tables lay a test out down a column, a row for each of its parts: the Mann–Whitney and Wilcoxon
