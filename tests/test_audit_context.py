@@ -656,6 +656,10 @@ def test_a_correlation_matrix_with_marks_of_significance(tmp_path):
     assert [e.found for e in flagged] == ["r(58) = 0.20, p < 0.01"] and "p-does-not-follow" in flagged[0].codes
     two = _IJERPH_NOTE.replace("N = 60;", "N = 60 (session 1) and N = 52 (session 2);")
     assert not [e for e in audit_file(_doc(tmp_path / "two.docx", tables=[(caption, rows)], note=two)) if "correlation matrix" in " ".join(e.notes)]
+    # a model table headed by its models' numbers, its rows named by predictors, is no matrix: its β's are not r's
+    model = [["Predictor", "1", "2"], ["Age", ".25**", ".20*"], ["Sleep", "", "−.10"]]
+    assert audit_file(_doc(tmp_path / "model.docx", tables=[("Table 3. Hierarchical regression (N = 120)", model)],
+                           note="Note. Standardized coefficients. *p < .05. **p < .01.")) == []
 
 
 def test_a_tables_marked_statistic_has_its_marks_bound_for_a_p(tmp_path):

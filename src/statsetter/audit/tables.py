@@ -472,6 +472,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
 
 
 _SPEARMAN_SAID = re.compile(r"(?i)\bspearman|\brho\b|ρ")
+_ROW_NUMBER = re.compile(r"\s*(\d{1,2})[.)]?\s+\S")
 _COLUMN_NUMBER = re.compile(r"\s*(\d{1,2})\.?\s*")
 _DECIMALS = re.compile(r"[.,]\d")
 
@@ -501,13 +502,19 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
             break
     if not columns:
         return []
+    # the rows numbered as the columns are ("1. Anxiety", "2. Age" …): a matrix of the variables against each other (a
+    # model table headed by its models' numbers, its rows named by predictors, is not one)
+    numbers = {c: n for c, n in numbered}
+    labelled = {r: int(m.group(1)) for r in body for c0 in [min(rows[r])] for m in [_ROW_NUMBER.match(rows[r][c0][0].text)] if m}
+    if len(labelled) < 2 or not set(numbers.values()) <= set(labelled.values()):
+        return []
     symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
     df = Number(f"{total - 2}", float(total - 2), 0, 0, 0)
     found: list[TableStatistic] = []
     for r in body:
         row = rows[r]
         for c in columns:
-            if c not in row:
+            if c not in row or r not in labelled or numbers[c] == labelled[r]:  # (the diagonal is a variable with itself)
                 continue
             unit = row[c][0]
             m = _BARE.fullmatch(unit.text)
