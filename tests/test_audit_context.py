@@ -674,3 +674,9 @@ def test_a_tables_marked_statistic_has_its_marks_bound_for_a_p(tmp_path):
     assert by["t(38) = 3.10, p < .01"].codes == [] and by["t(38) = 2.10, p < .10"].codes == []
     assert "p-does-not-follow" in by["t(38) = 1.20, p < .05"].codes
     assert "t(38) = 0.80" in by and set(by) == {"t(38) = 3.10, p < .01", "t(38) = 1.20, p < .05", "t(38) = 2.10, p < .10", "t(38) = 0.80"}
+    # t(38) = 1.80 gives p = .080, half of it .040: a one-sided fit — a note where the table's note says one-tailed
+    assert _p2(1.80, 38) / 2 < 0.05 < _p2(1.80, 38)
+    rows = [["Measure", "t", "df"], ["Anxiety", "1.80*", "38"]]
+    (one,) = audit_file(_doc(tmp_path / "one.docx", tables=[("Table 2. Comparisons", rows)], note="Note. *p < .05, one-tailed."))
+    (two,) = audit_file(_doc(tmp_path / "two.docx", tables=[("Table 2. Comparisons", rows)], note="Note. *p < .05."))
+    assert one.codes == [] and "one-tailed" in one.notes[-1] and two.codes == ["one-sided"]

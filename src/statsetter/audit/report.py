@@ -477,7 +477,8 @@ def _audit_units(
                 notes.append(f"The p fits Spearman's test as R's cor.test computes it (p from {fits[0]:.4g} to {fits[1]:.4g}: exact over the "
                              "permutations up to 9 pairs, AS 89's Edgeworth series up to 1,290), not the t approximation.")
         if any(f.code == "one-sided" for f in findings):
-            said = _one_sided_said(unit.text, rep) or (_ONE_SIDED_SAID.search(item.how) if item.how else None)  # (a table's "Sig. (1-tailed)")
+            said = (_one_sided_said(unit.text, rep) or (_ONE_SIDED_SAID.search(item.how) if item.how else None)  # (a table's "Sig. (1-tailed)")
+                    or (_ONE_SIDED_SAID.search(item.context) if unit.cell is not None else None))  # (a table's note: "*p < .05, one-tailed")
             if said is not None:  # the text says the test was one-sided, and the p fits one
                 findings = [f for f in findings if f.code != "one-sided"]
                 notes.append(f"The p fits a one-sided test, as the text says (\"{said.group()}\").")
