@@ -680,3 +680,23 @@ def test_a_tables_marked_statistic_has_its_marks_bound_for_a_p(tmp_path):
     (one,) = audit_file(_doc(tmp_path / "one.docx", tables=[("Table 2. Comparisons", rows)], note="Note. *p < .05, one-tailed."))
     (two,) = audit_file(_doc(tmp_path / "two.docx", tables=[("Table 2. Comparisons", rows)], note="Note. *p < .05."))
     assert one.codes == [] and "one-tailed" in one.notes[-1] and two.codes == ["one-sided"]
+
+
+def test_the_terminal_summary_counts_each_kind_of_note_for_what_it_is(tmp_path, capsys):
+    """The terminal's summary had counted every statistic with a note as "read as adjusted by a procedure": a table's
+    statistics (each noted with the columns it was read from) and a one-tailed or Spearman note were all called
+    adjusted. Each kind of note is counted for what it says; a table's reading is none of them."""
+    from statsetter.audit.report import print_table
+
+    rows = [r + [""] * (11 - len(r)) for r in _IJERPH_ROWS]
+    entries = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 2. Correlations", rows)], note=_IJERPH_NOTE))
+    print_table(entries)
+    out = " ".join(capsys.readouterr().out.split())
+    assert "17 statistics found, 0 with findings" in out and "adjusted" not in out
+    t = 2.10
+    units = [Unit("a", f"With Bonferroni-adjusted p values, t(38) = {t:.2f}, p = .30."),
+             Unit("b", f"The effect was in the expected direction, t(38) = {t:.2f}, p = {_p2(t, 38) / 2:.3f}, one-tailed.")]
+    print_table(audit_units(units))
+    out = " ".join(capsys.readouterr().out.split())
+    assert "1 p value(s) read as adjusted by a procedure their text names" in out
+    assert "1 p value(s) fitting a one-sided test, as the text says" in out

@@ -542,6 +542,16 @@ def as_csv(entries: Sequence[Entry]) -> str:
     return buffer.getvalue()
 
 
+# the notes that stand for a p not checked, or checked otherwise than from the statistic's own distribution, as the
+# terminal's summary counts them (the start of each note, and what the summary says of them)
+_NOTE_SUMMARIES = (
+    ("The p differs from the one recomputed from the statistic alone", "p value(s) read as adjusted by a procedure their text names, not checked"),
+    ("The p differs from the one recomputed from the statistic's distribution", "p value(s) said to come from another method (exact, permutation, resampled), not checked"),
+    ("The p fits a one-sided test", "p value(s) fitting a one-sided test, as the text says"),
+    ("The p fits Spearman's test as R", "Spearman p value(s) fitting R's cor.test, not the t approximation"),
+)
+
+
 def print_table(entries: Sequence[Entry], *, everything: bool = False) -> None:
     from rich.console import Console
     from rich.table import Table
@@ -558,9 +568,10 @@ def print_table(entries: Sequence[Entry], *, everything: bool = False) -> None:
     flagged = sum(1 for e in entries if e.findings)
     counts = ", ".join(f"{sum(1 for e in entries if e.severity == s)} {s}" for s in SEVERITIES)
     console.print(f"{len(entries)} statistics found, {flagged} with findings (gravest finding: {counts}).")
-    adjusted = sum(1 for e in entries if e.notes)
-    if adjusted:
-        console.print(f"{adjusted} p value(s) read as adjusted by a procedure their paragraph names, not checked (the notes in --json say which).")
+    for start, said in _NOTE_SUMMARIES:  # (a table statistic's note on how it was read is no such case)
+        count = sum(1 for e in entries if any(n.startswith(start) for n in e.notes))
+        if count:
+            console.print(f"{count} {said} (the notes in --json say which).")
     if flagged:
         used = sorted({c for e in entries for c in e.codes})
         for code in used:
