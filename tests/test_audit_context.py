@@ -218,12 +218,19 @@ def test_a_welch_t_without_df_is_checked_over_the_df_welch_allows():
 
 def test_a_tables_welch_ts_take_no_student_df_from_its_group_sizes(tmp_path):
     """A table of t tests with group sizes in its header and a note saying the tests are Welch's: the t's are not given
-    n₁ + n₂ − 2 (p from scipy on 25 df, as above); without the note they are."""
+    n₁ + n₂ − 2 (p from scipy on 25 df, as above); without the note they are. With the note a t is checked over the
+    df Welch's test allows, 19 to 38, as in a sentence (it had been left unchecked): a p no df there gives is flagged."""
     rows = [("", "Control (n = 20)", "Treatment (n = 20)", "t", "p"), ("Score", "3.1 (1.0)", "3.8 (1.1)", "2.10", ".046")]
-    for note, flagged in (("Note. Our own numbers.", True), ("Note. Welch's t tests (equal variances not assumed).", False)):
+    welch = "Note. Welch's t tests (equal variances not assumed)."
+    for note, flagged in (("Note. Our own numbers.", True), (welch, False)):
         path = _doc(tmp_path / "welch.docx", tables=[("Table 2 Scores of the two groups", rows)], note=note)
         (e,) = audit_file(path)
         assert ("p-does-not-follow" in e.codes) is flagged, (note, e.codes)
+    (e,) = audit_file(_doc(tmp_path / "welch.docx", tables=[("Table 2 Scores of the two groups", rows)], note=welch))
+    assert "Welch's df, somewhere from 19" in e.checked
+    wrong = [rows[0], ("Score", "3.1 (1.0)", "3.8 (1.1)", "2.10", ".46")]
+    (e,) = audit_file(_doc(tmp_path / "welch2.docx", tables=[("Table 2 Scores of the two groups", wrong)], note=welch))
+    assert "p-does-not-follow" in e.codes and _p2(2.10, 19) < 0.06 and "over those df" in e.message + " ".join(f.evidence for f in e.findings)
 
 
 def test_spss_independent_samples_table_gives_each_statistic_its_own_columns(tmp_path):

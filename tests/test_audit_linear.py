@@ -397,7 +397,7 @@ def test_a_long_table_is_read_in_linear_work(tmp_path, monkeypatch):
             return set.__or__(self, other)
 
     read_table = report.table_statistics
-    monkeypatch.setattr(report, "table_statistics", lambda *args: (lambda found, used: (found, CountingSet(used)))(*read_table(*args)))
+    monkeypatch.setattr(report, "table_statistics", lambda *args, **kwargs: (lambda found, used: (found, CountingSet(used)))(*read_table(*args, **kwargs)))
     for small, large in zip(_long_tables(tmp_path, 300), _long_tables(tmp_path, 1200)):
         work = []
         for path in (small, large):

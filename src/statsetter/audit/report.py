@@ -242,11 +242,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     pass  # a partial correlation: N − 2 less one df for each covariate, which the N does not say
                 elif rep.symbol == "t" and not rep.df and _WELCH.search(unit.text, max(previous_value, rep.start - 160), rep.end + 60):
                     # Welch's t: its df lie anywhere from the smaller group's n − 1 to n₁ + n₂ − 2 — a range, checked as one
-                    sizes = group_sizes(unit.text, rep, mark)
-                    if sizes and min(sizes) >= 2:
-                        low, high = min(sizes) - 1.0, sizes[0] + sizes[1] - 2.0
-                        readings = (Reading((low,), f"Welch's df, somewhere from {low:g} (the smaller group's n − 1) to {high:g} (n₁ + n₂ − 2); "
-                                                    "the group sizes beside it", high),)
+                    readings = tuple(df_readings("t", list(group_sizes(unit.text, rep, mark) or ()), None, "beside it", welch=True))
                 elif rep.symbol in ("t", "r", "rs") and not rep.df:
                     sizes = group_sizes(unit.text, rep, mark)
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
@@ -269,9 +265,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
         found, used = table_statistics(cells, caption, mark, star_bounds(f"{caption} {note}", mark) if "p" in note or "P" in note or "p" in caption else None,
-                                       f"{caption} {note}")
-        if _WELCH.search(caption) or _WELCH.search(note):  # Welch's t's: their df are not the table's group sizes'
-            found = [replace(t, readings=()) if t.rep.symbol == "t" and not t.rep.df else t for t in found]
+                                       f"{caption} {note}", welch=bool(_WELCH.search(caption) or _WELCH.search(note)))  # (Welch's t's: a df range)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient) for t in found]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]

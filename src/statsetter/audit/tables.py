@@ -179,10 +179,18 @@ class Reading:
     df_high: float | None = None  # a df anywhere from df[0] to this (Welch's t: from the smaller group's n − 1 to n₁ + n₂ − 2)
 
 
-def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str) -> list[Reading]:
+def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str, welch: bool = False) -> list[Reading]:
     """The df a t or r without df may have, from group sizes and a total N;
-    each reading says what it assumes."""
+    each reading says what it assumes. A t said to be Welch's has its df
+    anywhere from the smaller group's n − 1 to n₁ + n₂ − 2 (one reading, a
+    range, from two group sizes; none without them)."""
     out: list[Reading] = []
+    if symbol == "t" and welch:
+        if len(groups) >= 2 and min(groups[:2]) >= 2:
+            low, high = min(groups[:2]) - 1.0, groups[0] + groups[1] - 2.0
+            return [Reading((low,), f"Welch's df, somewhere from {low:g} (the smaller group's n − 1) to {high:g} (n₁ + n₂ − 2); "
+                                    f"the group sizes {where}", high)]
+        return []
     if symbol == "t":
         if len(groups) == 2:
             a, b = groups
@@ -319,12 +327,13 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple
 
 
 def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str,
-                     stars: "dict[str, tuple[str, Number]] | None" = None, said: str = "") -> tuple[list[TableStatistic], set[int]]:
+                     stars: "dict[str, tuple[str, Number]] | None" = None, said: str = "", welch: bool = False) -> tuple[list[TableStatistic], set[int]]:
     """The statistics of one table: ``cells`` are (row, column, unit, the
     statistics the text parser found in it); ``stars``, the p bounds its note
     gives its marks (``star_bounds``): a statistic marked so, without a p of
     its own, has that bound for its p; ``said``, the caption and note (a
-    correlation matrix's N). Returns the statistics and the ids of
+    correlation matrix's N); ``welch``, whether they say the t tests are
+    Welch's (a t without df then has the df range Welch's test allows). Returns the statistics and the ids of
     parsed statistics that became part of another (a lone p in the cell
     after a statistic)."""
     rows: dict[int, dict[int, tuple[Unit, list[Reported]]]] = {}
@@ -443,7 +452,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
                 readings = ()
             else:
-                readings = tuple(df_readings(role, groups, total, "in the table"))
+                readings = tuple(df_readings(role, groups, total, "in the table", welch))
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
         # a statistic typed whole in a cell, its p further along the row
         ordered = sorted(row)
@@ -466,7 +475,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                             merged = replace(rep, p=p, p_range=None, text=f"{rep.text}, {other_unit.text.strip()}")
                             how = "the p in a later cell of the row"
                             break
-                readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table"))
+                readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table", welch))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
     return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark) + _starred_matrix(rows, mark, stars, said or caption), used
 
