@@ -650,7 +650,7 @@ def test_a_correlation_matrix_with_marks_of_significance(tmp_path):
     rows = [r + [""] * (11 - len(r)) for r in _IJERPH_ROWS]
     caption = "Table 2. Correlations between age, depression, anxiety, and reaction times in the anxious group."
     entries = audit_file(_doc(tmp_path / "matrix.docx", tables=[(caption, rows)], note=_IJERPH_NOTE))
-    read = [e for e in entries if "correlation matrix" in " ".join(e.notes)]
+    read = [e for e in entries if "correlation coefficient" in " ".join(e.notes)]
     marked = sum(1 for r in _IJERPH_ROWS[1:] for cell in r[3:] if "*" in cell)
     assert marked == 17 and len(read) == 17 and all(e.codes == [] for e in read), [(e.found, e.codes) for e in read]
     closest = next(e for e in read if e.found.startswith("r(58) = 0.41"))
@@ -662,7 +662,7 @@ def test_a_correlation_matrix_with_marks_of_significance(tmp_path):
     flagged = [e for e in audit_file(_doc(tmp_path / "wrong.docx", tables=[(caption, wrong)], note=_IJERPH_NOTE)) if e.codes]
     assert [e.found for e in flagged] == ["r(58) = 0.20, p < 0.01"] and "p-does-not-follow" in flagged[0].codes
     two = _IJERPH_NOTE.replace("N = 60;", "N = 60 (session 1) and N = 52 (session 2);")
-    assert not [e for e in audit_file(_doc(tmp_path / "two.docx", tables=[(caption, rows)], note=two)) if "correlation matrix" in " ".join(e.notes)]
+    assert not [e for e in audit_file(_doc(tmp_path / "two.docx", tables=[(caption, rows)], note=two)) if "correlation coefficient" in " ".join(e.notes)]
     # a model table headed by its models' numbers, its rows named by predictors, is no matrix: its β's are not r's
     model = [["Predictor", "1", "2"], ["Age", ".25**", ".20*"], ["Sleep", "", "−.10"]]
     assert audit_file(_doc(tmp_path / "model.docx", tables=[("Table 3. Hierarchical regression (N = 120)", model)],
@@ -707,3 +707,37 @@ def test_the_terminal_summary_counts_each_kind_of_note_for_what_it_is(tmp_path, 
     out = " ".join(capsys.readouterr().out.split())
     assert "1 p value(s) read as adjusted by a procedure their text names" in out
     assert "1 p value(s) fitting a one-sided test, as the text says" in out
+
+
+# Table 4 of "Computerized adaptive testing to screen children for emotional and behavioral problems by preventive child
+# healthcare", BMC Pediatrics 2020 (doi:10.1186/s12887-020-2018-1; CC BY), as the journal's site prints it: Spearman
+# correlations of four screening scales with four CBCL scales, each marked "*P < 0.01", beside counts and percentages
+_BMC_ROWS = [
+    ["Psycat scales", "Elevated Psycat scores", "CBCL", "", "", ""],
+    ["", "N (%)", "Total", "Externalizing", "Internalizing", "Hyperactivity"],
+    ["Total", "75 (16.3)", "0.72*", "0.59*", "0.55*", "0.66*"],
+    ["Externalizing", "81 (17.6)", "0.54*", "0.63*", "0.34*", "0.43*"],
+    ["Internalizing", "66 (14.3)", "0.50*", "0.30*", "0.59*", "0.31*"],
+    ["Hyperactivity", "90 (19.5)", "0.39*", "0.32*", "0.16*", "0.65*"],
+]
+_BMC_CAPTION = ("Table 4 Validity: numbers and percentages of children with elevated Psycat scores and Spearman correlations "
+                "for Psycat scores and CBCL scores (n = 181)")
+
+
+def test_a_table_of_correlations_between_two_sets_of_scales(tmp_path):
+    """A table whose caption calls its contents correlations, one set of scales against another (BMC Pediatrics 2020,
+    Table 4, above): each marked coefficient is read as Spearman's r_s(n − 2) with the mark's bound — all 16, and none of
+    the counts beside them. Checked with the caption's n = 181, one is flagged: r_s = .16 gives p from .026 to .036
+    (scipy), not below .01. The percentages beside the counts are of about 460 children (75 is 16.3%), on which .16
+    would give p < .001: a reason to look at which n the coefficients have, as every finding is — not a verdict on the
+    article. The same table whose caption names partial correlations is not read."""
+    entries = audit_file(_doc(tmp_path / "bmc.docx", tables=[(_BMC_CAPTION, _BMC_ROWS)], note="*P < 0.01"))
+    read = [e for e in entries if "correlation coefficient" in " ".join(e.notes)]
+    assert len(read) == 16 and all(e.found.startswith("rs(179) = ") for e in read), [e.found for e in read]
+    expected = {f"{v:.2f}" for r in _BMC_ROWS[2:] for v in (float(c.rstrip("*")) for c in r[2:])
+                if 2 * stats.t.sf((v + 0.005) * ((179 / (1 - (v + 0.005) ** 2)) ** 0.5), 179) >= 0.01}
+    assert expected == {"0.16"}
+    assert [e.found for e in read if e.codes] == ["rs(179) = 0.16, p < 0.01"]
+    assert not any("(16.3)" in e.found or "75" in e.found for e in entries)
+    partial = _BMC_CAPTION.replace("Spearman correlations", "partial correlations")
+    assert not [e for e in audit_file(_doc(tmp_path / "p.docx", tables=[(partial, _BMC_ROWS)], note="*P < 0.01")) if e.notes]

@@ -481,20 +481,25 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
 
 
 _SPEARMAN_SAID = re.compile(r"(?i)\bspearman|\brho\b|ρ")
+_CORRELATIONS_SAID = re.compile(r"(?i)\bcorrelation")
+_NOT_PLAIN_R = re.compile(r"(?i)\bpartial|semi-?partial|\bkendall|\btau\b|τ|intraclass|\bICC|canonical|regression|\bβ|\bbeta\b|loading|cross-lagged|\bpath\b")
 _ROW_NUMBER = re.compile(r"\s*(\d{1,2})[.)]?\s+\S")
 _COLUMN_NUMBER = re.compile(r"\s*(\d{1,2})\.?\s*")
 _DECIMALS = re.compile(r"[.,]\d")
 
 
 def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | None", caption: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
-    """The coefficients of a correlation matrix as psychology papers print it: columns headed by the variables'
-    numbers (1, 2, 3 …; M and SD columns before them left alone), a coefficient with the note's marks of significance
-    ("−.25**" with "**p < .01"), and one N for the table in its caption or note ("N = 150"): each marked coefficient is
-    r(N − 2) with its mark's bound for a p (Spearman's where the table names Spearman). Coefficients without a mark are
-    not read (their p is only said to be above the smallest bound), nor any where the table gives no single N. A
-    coefficient computed on fewer rows (pairwise deletion) has a larger p than N − 2 gives, so a mark it earned is
-    never doubted for that."""
-    if not stars:
+    """The coefficients of a table of correlations with the note's marks of significance ("−.25**" with "**p < .01")
+    and one N for the table in its caption or note ("N = 150", or one "n = 181"): each marked coefficient is r(N − 2)
+    with its mark's bound for a p (Spearman's where the table names Spearman or ρ). Two layouts: a matrix as psychology
+    papers print it, columns headed by the variables' numbers (1, 2, 3 …; M and SD columns before them left alone) and
+    rows numbered alike (its diagonal skipped); and any table whose caption calls its contents correlations, a marked
+    number from −1 to 1 with decimals in any cell but a row's first (one set of variables against another). Not read:
+    coefficients without a mark (their p is only said to be above the smallest bound), a table with more than one N
+    (subsamples), and one whose caption or note names partial, Kendall's, intraclass or canonical correlations, or
+    regression weights or loadings, whose p's a plain r's df do not give. A coefficient computed on fewer rows
+    (pairwise deletion) has a larger p than N − 2 gives, so a mark it earned is never doubted for that."""
+    if not stars or _NOT_PLAIN_R.search(caption):
         return []
     groups, total = caption_sizes(caption)
     if total is None and len(groups) == 1:  # "n = 312" for the whole sample, as many notes write it
@@ -502,43 +507,40 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
     if total is None or total < 4 or len(set(caption_sizes_all(caption))) > 1:
         return []
     order = sorted(rows)
-    columns: list[int] = []
+    cells: list[tuple[int, int]] = []  # (row, column) of the cells that may hold a coefficient
     for k, r in enumerate(order):
         numbered = [(c, int(m.group(1))) for c, (u, _) in sorted(rows[r].items()) for m in [_COLUMN_NUMBER.fullmatch(u.text)] if m]
         if len(numbered) >= 2 and numbered[0][1] in (1, 2) and [n for _, n in numbered] == list(range(numbered[0][1], numbered[0][1] + len(numbered))):
-            columns = [c for c, _ in numbered]
+            # the rows numbered as the columns are ("1. Anxiety", "2. Age" …): a matrix of the variables against each other
+            # (a model table headed by its models' numbers, its rows named by predictors, is not one)
+            numbers = dict(numbered)
             body = order[k + 1 :]
+            labelled = {b: int(m.group(1)) for b in body for m in [_ROW_NUMBER.match(rows[b][min(rows[b])][0].text)] if m}
+            if len(labelled) >= 2 and set(numbers.values()) <= set(labelled.values()):
+                cells = [(b, c) for b in body if b in labelled for c in numbers if c in rows[b] and numbers[c] != labelled[b]]
             break
-    if not columns:
-        return []
-    # the rows numbered as the columns are ("1. Anxiety", "2. Age" …): a matrix of the variables against each other (a
-    # model table headed by its models' numbers, its rows named by predictors, is not one)
-    numbers = {c: n for c, n in numbered}
-    labelled = {r: int(m.group(1)) for r in body for c0 in [min(rows[r])] for m in [_ROW_NUMBER.match(rows[r][c0][0].text)] if m}
-    if len(labelled) < 2 or not set(numbers.values()) <= set(labelled.values()):
+    if not cells and _CORRELATIONS_SAID.search(caption):
+        cells = [(r, c) for r in order[1:] for c in sorted(rows[r])[1:]]
+    if not cells:
         return []
     symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
     df = Number(f"{total - 2}", float(total - 2), 0, 0, 0)
     found: list[TableStatistic] = []
-    for r in body:
-        row = rows[r]
-        for c in columns:
-            if c not in row or r not in labelled or numbers[c] == labelled[r]:  # (the diagonal is a variable with itself)
-                continue
-            unit = row[c][0]
-            m = _BARE.fullmatch(unit.text)
-            if m is None or m.group("op") or not m.group("marks") or m.group("marks") not in stars or not _DECIMALS.search(m.group("num")):
-                continue
-            value = _patterns(mark).to_number(m.group("num"), m.start("num"))
-            if value is None or abs(value.value) > 1:
-                continue
-            op, bound = stars[m.group("marks")]
-            p = PValue(op, bound, value.end, value.end, value.end, "")
-            rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
-            rep.text = statistic_text(symbol, (df,), "=", value, p)
-            found.append(TableStatistic(unit, rep, None, f"read from the table's row: a coefficient of the correlation matrix with its "
-                                                         f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text} in the note), df = N − 2 "
-                                                         f"(N = {total} in the caption or note)"))
+    for r, c in cells:
+        unit = rows[r][c][0]
+        m = _BARE.fullmatch(unit.text)
+        if m is None or m.group("op") or not m.group("marks") or m.group("marks") not in stars or not _DECIMALS.search(m.group("num")):
+            continue
+        value = _patterns(mark).to_number(m.group("num"), m.start("num"))
+        if value is None or abs(value.value) > 1:
+            continue
+        op, bound = stars[m.group("marks")]
+        p = PValue(op, bound, value.end, value.end, value.end, "")
+        rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
+        rep.text = statistic_text(symbol, (df,), "=", value, p)
+        found.append(TableStatistic(unit, rep, None, f"read from the table's row: a correlation coefficient with its "
+                                                     f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text} in the note), df = N − 2 "
+                                                     f"(N = {total} in the caption or note)"))
     return found
 
 
