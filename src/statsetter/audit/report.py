@@ -264,8 +264,8 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         caption = " ".join(body)
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
-        found, used = table_statistics(cells, caption, mark, star_bounds(f"{caption} {note}", mark) if "p" in note or "P" in note or "p" in caption else None,
-                                       f"{caption} {note}", welch=bool(_WELCH.search(caption) or _WELCH.search(note)))  # (Welch's t's: a df range)
+        said = f"{caption} {note}"
+        found, used = table_statistics(cells, caption, mark, star_bounds(said, mark), said, welch=_WELCH.search(said) is not None)  # (Welch's t's: a df range)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient) for t in found]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]

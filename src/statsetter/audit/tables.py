@@ -79,6 +79,8 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
 # repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
 _BARE = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?P<marks>[*†‡§]+|[a-d])?\s*")
+_NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
+_SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
 # a note's (or caption's) marks of significance: "*p < .05. **p < .01. ***p < .001.", "† p < .10", "* P ≤ 0.05"
 _STAR_SAID = re.compile(r"(?<![*†‡§\w])([*†‡§]{1,4})\s*[pP]\s*([<≤])\s*(0?[.,]\d+)")
 
@@ -91,9 +93,6 @@ def star_bounds(text: str, mark: str) -> dict[str, tuple[str, Number]]:
         if number is not None and 0 < number.value < 1:
             out.setdefault(m.group(1), (m.group(2), number))
     return out
-
-_NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
-_SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
 
 
 _MARKS = str.maketrans("", "", "#¶‖∆ᵃᵇᶜᵈ")  # footnote marks authors put inside a head: "P# value", "P∆ value"
@@ -153,7 +152,7 @@ def sizes_in(text: str) -> list[int]:
 _PER_GROUP = re.compile(r"(?i)\s*(?:per|in each|each)\b")
 
 
-def caption_sizes_all(text: str) -> list[int]:
+def _totals(text: str) -> list[int]:
     """Every total (``N = 42``) a caption or note gives."""
     return [int(m.group(1)) for m in _SIZE.finditer(text) if m.group(0).lstrip()[0] == "N"]
 
@@ -438,7 +437,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 bound = stars.get(marks.group("marks") or "") if marks is not None else None
                 if bound is not None:
                     p = PValue(bound[0], bound[1], value.end, value.end, value.end, "")
-                    how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text} in the note)"  # type: ignore[union-attr]
+                    how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text}, as the table defines it)"  # type: ignore[union-attr]
             coefficient, effects = _coefficient_cells(row, roles, numbers, mark) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role == "wald" else []  # (a linear model's row has no odds ratio)
             if coefficient is not None:
@@ -504,7 +503,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
     groups, total = caption_sizes(caption)
     if total is None and len(groups) == 1:  # "n = 312" for the whole sample, as many notes write it
         total = groups[0]
-    if total is None or total < 4 or len(set(caption_sizes_all(caption))) > 1:
+    if total is None or total < 4 or len(set(_totals(caption))) > 1:
         return []
     order = sorted(rows)
     cells: list[tuple[int, int]] = []  # (row, column) of the cells that may hold a coefficient
@@ -539,7 +538,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
         rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
         rep.text = statistic_text(symbol, (df,), "=", value, p)
         found.append(TableStatistic(unit, rep, None, f"read from the table's row: a correlation coefficient with its "
-                                                     f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text} in the note), df = N − 2 "
+                                                     f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text}, as the table defines it), df = N − 2 "
                                                      f"(N = {total} in the caption or note)"))
     return found
 
