@@ -524,3 +524,17 @@ def test_a_small_files_text_kept_in_python_strings_gives_the_records_arrows_give
     assert out["python"] == out["pyarrow"]
     with pd.option_context("mode.string_storage", "python"):  # as `statsetter run` computes: a large file's text stays Arrow's
         assert read_data(tmp_path / "penguins.csv").frame.species.dtype.storage == "pyarrow"
+
+
+def test_pythons_strip_and_arrows_trim_take_off_the_same_characters():
+    """A short text column is searched for spaced values with Python's str.strip (io._trimmed) before pandas' string
+    methods, which on Arrow strings call Arrow's utf8_trim_whitespace: the search stands for the trim only if both
+    take off the same characters — over every Unicode code point (surrogates aside)."""
+    pa = pytest.importorskip("pyarrow")
+    import pyarrow.compute as pc
+
+    points = [c for c in range(0x110000) if not 0xD800 <= c <= 0xDFFF]
+    trimmed = pc.utf8_trim_whitespace(pa.array([chr(c) + "a" for c in points])).to_pylist()
+    arrow = {c for c, t in zip(points, trimmed) if t == "a"}
+    python = {c for c in points if (chr(c) + "a").strip() == "a"}
+    assert arrow == python and 0x3000 in python and 0x200B not in python  # (the ideographic space trims; a zero-width one does not)
