@@ -502,8 +502,8 @@ def test_groups_labelled_by_answers_or_bare_codes_are_named_with_their_variable(
 
 
 def test_a_small_files_text_kept_in_python_strings_gives_the_records_arrows_give(tmp_path, monkeypatch):
-    """A data file up to 2 MiB keeps its text columns in Python strings (pandas' Arrow strings cost a run about 20 ms
-    of start-up for a few hundred rows), a larger one in Arrow's: the Palmer penguins (pingouin's copy; species,
+    """A data file up to 2 MiB and 5,000 rows keeps its text columns in Python strings (pandas' Arrow strings cost a run
+    about 20 ms of start-up for a few hundred rows), a larger or longer one in Arrow's: the Palmer penguins (pingouin's copy; species,
     island and sex are text, 11 sexes missing) give the same records either way — a χ² test, a Welch ANOVA, a t test,
     a Kruskal–Wallis test and a Table 1 by species with its tests."""
     from statsetter import io as sio
@@ -524,6 +524,13 @@ def test_a_small_files_text_kept_in_python_strings_gives_the_records_arrows_give
     assert out["python"] == out["pyarrow"]
     with pd.option_context("mode.string_storage", "python"):  # as `statsetter run` computes: a large file's text stays Arrow's
         assert read_data(tmp_path / "penguins.csv").frame.species.dtype.storage == "pyarrow"
+    monkeypatch.setattr(sio, "_SMALL_FILE", 1 << 30)
+    monkeypatch.setattr(sio, "_SHORT", 100)  # a small file of more rows than this: moved to Arrow's strings after reading
+    long = read_data(tmp_path / "penguins.csv").frame
+    assert {long[c].dtype.storage for c in ("species", "island", "sex")} == {"pyarrow"}
+    monkeypatch.setattr(sio, "_SHORT", 10_000)
+    short = read_data(tmp_path / "penguins.csv").frame
+    assert short.sex.dtype.storage == "python" and long.astype(object).equals(short.astype(object)) and long.sex.isna().sum() == 11
 
 
 def test_pythons_strip_and_arrows_trim_take_off_the_same_characters():
