@@ -741,3 +741,15 @@ def test_a_table_of_correlations_between_two_sets_of_scales(tmp_path):
     assert not any("(16.3)" in e.found or "75" in e.found for e in entries)
     partial = _BMC_CAPTION.replace("Spearman correlations", "partial correlations")
     assert not [e for e in audit_file(_doc(tmp_path / "p.docx", tables=[(partial, _BMC_ROWS)], note="*P < 0.01")) if e.notes]
+
+
+def test_markdowns_escapes_and_a_notes_own_paragraphs(tmp_path):
+    """Markdown escapes a literal asterisk ("\\*p < .05", ".74\\*\\*\\*": pandoc and statsetter's own Markdown write
+    them so) and APA sets a table's probability note in a paragraph of its own after the general note: the escapes
+    had been read as typed (a backslash, and "*p*" not as the italic p it prints), so the marks were not defined
+    and not read; now the Markdown table reads as its LaTeX does (statsetter's demo tables: tests/test_demo.py)."""
+    md = ("Table 1\n\nComparisons of the two shifts\n\n| Measure | t | df |\n|---|---|---|\n| Anxiety | 3.10\\*\\* | 38 |\n"
+          "| Sleep | 1.20\\* | 38 |\n\n*Note.* Invented numbers.\n\n\\**p* < .05. \\*\\**p* < .01.\n")
+    (tmp_path / "t.md").write_text(md, encoding="utf-8")
+    by = {e.found: e.codes for e in audit_file(tmp_path / "t.md")}
+    assert by == {"t(38) = 3.10, p < .01": [], "t(38) = 1.20, p < .05": ["p-does-not-follow", "verdict-changes"]}, by

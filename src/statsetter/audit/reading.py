@@ -193,6 +193,9 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     super- and subscripts become what they print as: ``χ^2^`` is χ², ``r~s~``
     is rs."""
     tex = suffix == ".tex"
+    escapes = None
+    if not tex and "\\" in text:  # Markdown's escapes ("\\*p < .05" prints *p < .05): held out of the emphasis and scripts
+        text, escapes = _replace(_MD_ESCAPE, text, lambda g: _MD_HELD.get(g, g))
     out, spans, at = _Builder(), [], 0
     for m in (_TEX_ITALIC if tex else _MD_ITALIC).finditer(text):
         group = next(g for g in range(1, 4) if m.group(g) is not None) if tex else 2 if m.group(2) is not None else 4
@@ -207,7 +210,7 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         out.add(inner, m.start(group))  # a rewritten TeX group maps to where it starts
         at = m.end()
     out.add(text[at:], at)
-    clean, traces = out.text(), [out.trace()]
+    clean, traces = out.text(), [escapes, out.trace()]
     # after the emphasis, so that *r*~s~ and \textit{r}\textsubscript{s} read rs (spans are not used for text files)
     sup_pattern, sub_pattern = (_TEX_SUP, _TEX_SUB) if tex else (_PANDOC_SUP, _PANDOC_SUB)
     clean, sup = _replace(sup_pattern, clean, lambda g: g.translate(_SUPERSCRIPT))
@@ -218,7 +221,14 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         clean, boxes = _replace(_TEX_BOX, clean, lambda g: g)
         clean, chars = _replace(_TEX_CHAR, clean, lambda g: _TEX_CHARS[g])
         traces += [boxes, chars]
+    if escapes is not None:
+        clean = clean.translate(_MD_LET_GO)
     return clean, tuple(spans), tuple(t for t in traces if t is not None)
+
+
+_MD_ESCAPE = re.compile(r"\\([!-/:-@\[-`{-~])")  # a backslash before ASCII punctuation (CommonMark's escapes)
+_MD_HELD = {"*": "\ue000", "_": "\ue001", "^": "\ue002", "~": "\ue003"}  # the markers' characters, held as private ones
+_MD_LET_GO = str.maketrans({held: char for char, held in _MD_HELD.items()})
 
 
 def _text_units(text: str, suffix: str) -> Iterator[Unit]:

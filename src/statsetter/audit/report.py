@@ -218,6 +218,9 @@ def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
     return any(e.name == "beta" for e in rep.effects) or _COEFFICIENT_NEAR.search(text, max(previous_end, rep.start - 120), rep.start) is not None
 
 
+_NOTE_GOES_ON = re.compile(r"\s*(?:[*†‡§]|[a-d]\s?[A-Z]|Note\b)")  # a table note's next paragraph: a mark's or a letter's note
+
+
 def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
     """The statistics of the units in document order: a paragraph's as the
     parser finds them, a table's read cell by cell and row by row."""
@@ -261,6 +264,10 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
             j += 1
         body = [u.text for u in units[max(0, i - 2) : i] if u.cell is None and u.part == unit.part]
         note = units[j].text if j < len(units) and units[j].cell is None and units[j].part == unit.part else ""
+        for k in range(j + 1, min(j + 3, len(units))):  # APA's notes stand in paragraphs of their own: general, specific, probability
+            if units[k].cell is not None or units[k].part != unit.part or not _NOTE_GOES_ON.match(units[k].text):
+                break
+            note += " " + units[k].text
         caption = " ".join(body)
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
