@@ -219,9 +219,9 @@ class _Patterns:
             rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
             rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:))\s*+(?P<num>{num}{_EXPONENT}?)"
         )
-        # not after a mark of significance ("*", "†", "‡", "§", or one and a space): "*p < .05. **p < .01. †p < .10." is a
+        # not after a mark of significance ("*", "†", "‡", "§", "^", or one and a space): "*p < .05. **p < .01. †p < .10." is a
         # table's note defining its marks, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*†‡§][pP])(?<![*†‡§] [pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*†‡§^][pP])(?<![*†‡§^] [pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
         # p < .01", "each p-value ≤ .01"; or their p's listed in order, "ps = .03 and .04" (an "=" only before a list)
