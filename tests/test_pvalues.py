@@ -231,7 +231,8 @@ def test_spearmans_p_as_rs_cor_test_gives_it():
     pairs, the t approximation above).
     - the counts of S: against enumerating every permutation (n = 2 to 9; independent of the recursion used);
     - n = 10, P(S ≤ 36): 0.005825634 by AS 89 and 0.005265377 exactly — the two values printed in the examples of
-      CRAN's pspearman package (pspearman(36, 10, approximation = "AS89") and "exact"), whose AS 89 is R's prho;
+      CRAN's pspearman package (pspearman(36, 10, approximation = "AS89") and "exact"), whose AS 89 is R's prho; and
+      its spearman.test example's two-sided p, cor.test's 0.05444507 and the exact 0.05443067;
     - R's cor.test help page's Hollander & Wolfe data (9 pairs): ρ = 0.6 (scipy), one-sided p 0.0484 as R prints it
       for alternative = "greater" (from memory), two-sided twice that, against the t approximation's 0.0876 (scipy);
     - above 1,290 pairs: None (R takes the t approximation there, as p_from_statistic does)."""
@@ -251,5 +252,10 @@ def test_spearmans_p_as_rs_cor_test_gives_it():
     assert rho == pytest.approx(0.6, abs=1e-12) and t_approximation == pytest.approx(0.0876, abs=5e-5)
     assert spearman_p(rho, 9) / 2 == pytest.approx(0.0484, abs=5e-5)
     assert spearman_p(rho, 9) == spearman_p(-rho, 9) == pytest.approx(0.09679783950617284, rel=1e-15)
+    # the pspearman package's spearman.test example (x = 1:10, y = c(5:1, 6, 10:7)): cor.test's p 0.05444507 (AS 89)
+    # and the exact 0.05443067, as its Rd file prints them
+    rho10 = stats.spearmanr(range(1, 11), [5, 4, 3, 2, 1, 6, 10, 9, 8, 7]).statistic
+    assert spearman_p(rho10, 10) == pytest.approx(0.05444507, abs=5e-9)
+    assert 2 * sum(_spearman_counts(10)[:61]) / math.factorial(10) == pytest.approx(0.05443067, abs=5e-9)
     assert spearman_p(0.3, 1290) is not None and spearman_p(0.3, 1291) is None
     assert spearman_p(1.0, 5) == pytest.approx(2 / 120) and spearman_p(0.0, 12) == 1.0
