@@ -218,7 +218,9 @@ def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
     return any(e.name == "beta" for e in rep.effects) or _COEFFICIENT_NEAR.search(text, max(previous_end, rep.start - 120), rep.start) is not None
 
 
-_NOTE_GOES_ON = re.compile(r"\s*(?:[*†‡§^]|[a-d]\s?[A-Z]|Note\b)")  # a table note's next paragraph: a mark's or a letter's note
+# a table note's next paragraph: a probability note ("*p < .05. **p < .01."), a letter's note or another "Note" (not the
+# next table's label in Markdown's bold, "**Table 3**")
+_NOTE_GOES_ON = re.compile(r"\s*(?:[*†‡§^]{1,4}\s*[pP]\s*[<≤]|[a-d]\s?[A-Z]|Note\b)")
 
 
 def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
