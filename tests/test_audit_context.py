@@ -757,3 +757,57 @@ def test_markdowns_escapes_and_a_notes_own_paragraphs(tmp_path):
     (tmp_path / "t.md").write_text(md, encoding="utf-8")
     by = {e.found: e.codes for e in audit_file(tmp_path / "t.md")}
     assert by == {"t(38) = 3.10, p < .01": [], "t(38) = 1.20, p < .05": ["p-does-not-follow", "verdict-changes"]}, by
+
+
+# Table 7 of "Normative data and psychometric properties of the strengths and difficulties questionnaire among Japanese
+# school-aged children", Child Adolesc Psychiatry Ment Health 2014, 8:1 (doi:10.1186/1753-2000-8-1; CC BY), as the journal's
+# site prints it: Spearman's ρ of six SDQ scales with eleven CBCL scales, in a block for each rater, each block under a row
+# that names its sample (n = 46 parents, n = 29 teachers), marks defined in the note
+_SDQ_H = ["CBCL", "Withdrawal problems", "Somatic complaints", "Anxiety/dep", "Social problems", "Thought problems", "Attention problems",
+     "Delinquent behaviors", "Aggressive behavior", "Internalizing", "Externalizing", "Total"]
+_SDQ_E = [""] * 11
+_SDQ_ROWS = [_SDQ_H, ["SDQ"] + _SDQ_E, ["Parent rating (n = 46)"] + _SDQ_E,
+    ["Total difficulties score", ".32*", ".44**", ".25", ".48**", ".23", ".62**", ".54**", ".43**", ".36*", ".51**", ".56**"],
+    ["Emotional symptoms", ".40**", ".48**", ".44**", ".23", ".20", ".19", "-.03", ".07", ".52**", ".05", ".34*"],
+    ["Conduct problems", ".19", ".21", ".16", ".06", ".00", ".37*", ".66**", ".50**", ".21", ".59**", ".39**"],
+    ["Hyperactivity/inattention", ".06", ".27", ".00", ".35*", ".12", ".58**", ".49**", ".39**", ".09", ".44**", ".39**"],
+    ["Peer problems", ".20", ".09", ".05", ".50**", ".13", ".32*", ".11", ".00", ".10", ".04", ".18"],
+    ["Prosocial behavior", "-.26", "-.15", "-.03", "-.07", "-.06", "-.27", "-.30*", "-.34*", "-.16", "-.37*", "-.21"],
+    ["Teacher rating (n = 29)"] + _SDQ_E,
+    ["Total difficulties score", ".44*", ".29", ".49**", ".75**", ".48**", ".82**", ".55**", ".68**", ".48**", ".68**", ".77**"],
+    ["Emotional symptoms", ".23", ".57**", ".56**", ".37*", ".21", ".33", ".11", ".18", ".50**", ".18", ".36"],
+    ["Conduct problems", ".24", ".05", ".18", ".60**", ".33", ".71**", ".66**", ".79**", ".22", ".80**", ".66**"],
+    ["Hyperactivity/inattention", ".30", ".22", ".33", ".52**", ".36", ".74**", ".40*", ".62**", ".31", ".59**", ".66**"],
+    ["Peer problems", ".46*", "-.05", ".31", ".75**", ".55**", ".66**", ".51**", ".53**", ".33", ".54**", ".64**"],
+    ["Prosocial behavior", "-.34", "-.03", "-.15", "-.43*", "-.28", "-.44*", "-.14", "-.46*", "-.23", "-.40*", "-.40*"],
+]
+_SDQ_CAPTION = "Table 7 Correlations between the SDQ and CBCL for each rater (Spearman's rho)"
+_SDQ_NOTE = ("Note. SDQ, strengths and difficulties questionnaire. CBCL, child behavioral checklist. The subsample from which parent "
+        "ratings were obtained (n = 46) consisted of clinical patients (36 boys, mean age 8.0 ± 0.8). The subsample from which "
+        "teacher ratings were obtained (n = 29) consisted of clinical patients (23 boys, mean age 7.9 ± 0.7). *p < 0.05, **p < 0.01.")
+
+
+def test_a_correlation_table_in_blocks_each_with_its_own_n(tmp_path):
+    """A table of correlations in blocks, each under a row naming its sample (Child Adolesc Psychiatry Ment Health 2014,
+    Table 7, above: "Parent rating (n = 46)", "Teacher rating (n = 29)"): each marked coefficient is r_s(n − 2) with its
+    block's n — all 69 read (30 on 44 df, 39 on 27), none flagged, as scipy's t distribution says of each at the
+    printed precision; one retyped (.37* as .27*, p .15 on 27 df) is flagged. Before, the note's two n's had kept the
+    table from being read at all."""
+    import scipy.stats as st
+
+    entries = audit_file(_doc(tmp_path / "sdq.docx", tables=[(_SDQ_CAPTION, _SDQ_ROWS)], note=_SDQ_NOTE))
+    read = [e for e in entries if "correlation coefficient" in " ".join(e.notes)]
+    assert len(read) == sum(1 for r in _SDQ_ROWS for c in r[1:] if "*" in c) == 69
+    assert sum(e.found.startswith("rs(44) = ") for e in read) == 30 and sum(e.found.startswith("rs(27) = ") for e in read) == 39
+    n = None
+    for row in _SDQ_ROWS[2:]:
+        n = int(row[0].split("= ")[1].rstrip(")")) if "(n = " in row[0] else n
+        for cell in row[1:]:
+            if "*" in cell:
+                v, bound = abs(float(cell.rstrip("*"))) + 0.005, 0.05 if cell.count("*") == 1 else 0.01
+                assert 2 * st.t.sf(v * ((n - 2) / (1 - v * v)) ** 0.5, n - 2) < bound, (cell, n)
+    assert [e.codes for e in read if e.codes] == []
+    wrong = [list(r) for r in _SDQ_ROWS]
+    wrong[11][4] = ".27*"
+    flagged = [e for e in audit_file(_doc(tmp_path / "wrong.docx", tables=[(_SDQ_CAPTION, wrong)], note=_SDQ_NOTE)) if e.codes]
+    assert [e.found for e in flagged] == ["rs(27) = .27, p < 0.05"] and "p-does-not-follow" in flagged[0].codes

@@ -485,28 +485,31 @@ _NOT_PLAIN_R = re.compile(r"(?i)\bpartial|semi-?partial|\bkendall|\btau\b|τ|int
 _ROW_NUMBER = re.compile(r"\s*(\d{1,2})[.)]?\s+\S")
 _COLUMN_NUMBER = re.compile(r"\s*(\d{1,2})\.?\s*")
 _DECIMALS = re.compile(r"[.,]\d")
+_MARKED = re.compile(r"\d\s*[*†‡§^]")  # a number with a mark
 
 
 def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | None", caption: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
-    """The coefficients of a table of correlations with the note's marks of significance ("−.25**" with "**p < .01")
-    and one N for the table in its caption or note ("N = 150", or one "n = 181"): each marked coefficient is r(N − 2)
-    with its mark's bound for a p (Spearman's where the table names Spearman or ρ). Two layouts: a matrix as psychology
+    """The coefficients of a table of correlations with the note's marks of significance ("−.25**" with "**p < .01"):
+    each marked coefficient is r(N − 2) with its mark's bound for a p (Spearman's where the table names Spearman or ρ),
+    N the table's one N in its caption or note ("N = 150", or one "n = 181"), or the sample of its block — a row that
+    only names one ("Parent rating (n = 46)"), for the rows below it up to the next. Two layouts: a matrix as psychology
     papers print it, columns headed by the variables' numbers (1, 2, 3 …; M and SD columns before them left alone) and
     rows numbered alike (its diagonal skipped); and any table whose caption calls its contents correlations, a marked
     number from −1 to 1 with decimals in any cell but a row's first (one set of variables against another). Not read:
-    coefficients without a mark (their p is only said to be above the smallest bound), a table with more than one N
-    (subsamples), and one whose caption or note names partial, Kendall's, intraclass or canonical correlations, or
-    regression weights or loadings, whose p's a plain r's df do not give. A coefficient computed on fewer rows
-    (pairwise deletion) has a larger p than N − 2 gives, so a mark it earned is never doubted for that."""
+    coefficients without a mark (their p is only said to be above the smallest bound), rows under no N (a table with
+    several N's and no blocks: subsamples unsaid), and a table whose caption or note names partial, Kendall's,
+    intraclass or canonical correlations, or regression weights or loadings, whose p's a plain r's df do not give. A
+    coefficient computed on fewer rows (pairwise deletion) has a larger p than N − 2 gives, so a mark it earned is
+    never doubted for that."""
     if not stars or _NOT_PLAIN_R.search(caption):
         return []
     groups, total = caption_sizes(caption)
     if total is None and len(groups) == 1:  # "n = 312" for the whole sample, as many notes write it
         total = groups[0]
-    if total is None or total < 4 or len(set(_totals(caption))) > 1:
-        return []
+    if total is not None and (total < 4 or len(set(_totals(caption))) > 1):
+        total = None
     order = sorted(rows)
-    cells: list[tuple[int, int]] = []  # (row, column) of the cells that may hold a coefficient
+    cells: list[tuple[int, int, int | None]] = []  # (row, column, N) of the cells that may hold a coefficient
     for k, r in enumerate(order):
         numbered = [(c, int(m.group(1))) for c, (u, _) in sorted(rows[r].items()) for m in [_COLUMN_NUMBER.fullmatch(u.text)] if m]
         if len(numbered) >= 2 and numbered[0][1] in (1, 2) and [n for _, n in numbered] == list(range(numbered[0][1], numbered[0][1] + len(numbered))):
@@ -516,16 +519,21 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
             body = order[k + 1 :]
             labelled = {b: int(m.group(1)) for b in body for m in [_ROW_NUMBER.match(rows[b][min(rows[b])][0].text)] if m}
             if len(labelled) >= 2 and set(numbers.values()) <= set(labelled.values()):
-                cells = [(b, c) for b in body if b in labelled for c in numbers if c in rows[b] and numbers[c] != labelled[b]]
+                cells = [(b, c, total) for b in body if b in labelled for c in numbers if c in rows[b] and numbers[c] != labelled[b]]
             break
     if not cells and _CORRELATIONS_SAID.search(caption):
-        cells = [(r, c) for r in order[1:] for c in sorted(rows[r])[1:]]
-    if not cells:
-        return []
-    symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
-    df = Number(f"{total - 2}", float(total - 2), 0, 0, 0)
+        block = total
+        for r in order[1:]:
+            row = rows[r]
+            named = [n for u, _ in row.values() for n in sizes_in(u.text)]
+            if len(named) == 1 and not any(_MARKED.search(u.text) for u, _ in row.values()):
+                block = named[0]  # a block's row: "Parent rating (n = 46)"
+                continue
+            cells += [(r, c, block) for c in sorted(row)[1:]]
     found: list[TableStatistic] = []
-    for r, c in cells:
+    for r, c, n in cells:
+        if n is None or n < 4:
+            continue
         unit = rows[r][c][0]
         m = _BARE.fullmatch(unit.text)
         if m is None or m.group("op") or not m.group("marks") or m.group("marks") not in stars or not _DECIMALS.search(m.group("num")):
@@ -535,11 +543,14 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
             continue
         op, bound = stars[m.group("marks")]
         p = PValue(op, bound, value.end, value.end, value.end, "")
+        symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
+        df = Number(f"{n - 2}", float(n - 2), 0, 0, 0)
         rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
         rep.text = statistic_text(symbol, (df,), "=", value, p)
+        where = "its block's row" if n != total else "the caption or note"
         found.append(TableStatistic(unit, rep, None, f"read from the table's row: a correlation coefficient with its "
                                                      f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text}, as the table defines it), df = N − 2 "
-                                                     f"(N = {total} in the caption or note)"))
+                                                     f"(N = {n} in {where})"))
     return found
 
 
