@@ -25,6 +25,8 @@ from ..records.result import _unchecked_maker
 
 __all__ = ["Number", "PValue", "Interval", "Effect", "Reported", "find_statistics", "symbol_of", "decimal_mark_of"]
 
+_SIGNIFICANCE = "*†‡§^"  # the marks of significance a table or its note sets ("3.10**", "*p < .05", "0.12 ^")
+
 T = TypeVar("T")
 _MINUS = "-−–‐"  # hyphen-minus, minus, en dash, hyphen: all read as minus
 
@@ -221,7 +223,7 @@ class _Patterns:
         )
         # not after a mark of significance ("*", "†", "‡", "§", "^", or one and a space): "*p < .05. **p < .01. †p < .10." is a
         # table's note defining its marks, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.*†‡§^][pP])(?<![*†‡§^] [pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
         # p < .01", "each p-value ≤ .01"; or their p's listed in order, "ps = .03 and .04" (an "=" only before a list)

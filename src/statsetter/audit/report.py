@@ -24,7 +24,7 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
-from .parsing import Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
+from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -220,7 +220,7 @@ def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
 
 # a table note's next paragraph: a probability note ("*p < .05. **p < .01."), a letter's note or another "Note" (not the
 # next table's label in Markdown's bold, "**Table 3**")
-_NOTE_GOES_ON = re.compile(r"\s*(?:[*†‡§^]{1,4}\s*[pP]\s*[<≤]|[a-d]\s?[A-Z]|Note\b)")
+_NOTE_GOES_ON = re.compile(rf"\s*(?:[{_SIGNIFICANCE}]{{1,4}}\s*[pP]\s*[<≤]|[a-d]\s?[A-Z]|Note\b)")
 
 
 def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":

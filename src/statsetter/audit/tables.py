@@ -18,12 +18,12 @@ import re
 from dataclasses import dataclass, replace
 from typing import Sequence
 
-from .parsing import Effect, Interval, Number, PValue, Reported, _patterns, statistic_text
+from .parsing import _SIGNIFICANCE, Effect, Interval, Number, PValue, Reported, _patterns, statistic_text
 from .reading import Unit
 
 __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "sizes_in", "caption_sizes", "Reading"]
 
-_FOOTNOTE = re.compile(r"(?<=\S)(?:\s*[*†‡§^]+|(?<=value)[a-d]|(?<=values)[a-d])$")
+_FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d])$")
 _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
     (re.compile(r"F(?:[- ]?(?:values?|ratio))?"), "F"),
@@ -54,8 +54,8 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 _RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr)[a-d*†‡§]?\s*\(\s*95\s?%\s?ci\s*\)[a-d*†‡§]?")
-_RATIO_CELL = re.compile(r"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[*†‡§^a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
-                         r"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[*†‡§^a-d]*\s*")
+_RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
+                         rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
 
 
 def _ratio_role(head: str) -> str | None:
@@ -78,11 +78,11 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
 # an error term's row: "Residuals", "Error", "Within groups", and an error named for its stratum as mixed and
 # repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
-_BARE = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?P<marks>[*†‡§^]+|[a-d])?\s*")
+_BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?P<marks>[{_SIGNIFICANCE}]+|[a-d])?\s*")
 _NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
 _SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
 # a note's (or caption's) marks of significance: "*p < .05. **p < .01. ***p < .001.", "† p < .10", "^p < .10", "* P ≤ 0.05"
-_STAR_SAID = re.compile(r"(?<![*†‡§^\w])([*†‡§^]{1,4})\s*[pP]\s*([<≤])\s*(0?[.,]\d+)")
+_STAR_SAID = re.compile(rf"(?<![{_SIGNIFICANCE}\w])([{_SIGNIFICANCE}]{{1,4}})\s*[pP]\s*([<≤])\s*(0?[.,]\d+)")
 
 
 def star_bounds(text: str, mark: str) -> dict[str, tuple[str, Number]]:
@@ -113,8 +113,8 @@ def _head_dfs(text: str) -> tuple[Number, ...]:
     return tuple(Number(m.group(g), float(m.group(g)), len(m.group(g).partition(".")[2]), 0, 0) for g in ("df", "df2") if m.group(g) is not None)
 
 
-_VALUE_DF = re.compile(r"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[*†‡§^]*\s*\(\s*(?P<df>\d+(?:\.\d+)?)"
-                       r"(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*(?:[*†‡§^]+|[a-d])?\s*")
+_VALUE_DF = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[{_SIGNIFICANCE}]*\s*\(\s*(?P<df>\d+(?:\.\d+)?)"
+                       rf"(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*(?:[{_SIGNIFICANCE}]+|[a-d])?\s*")
 
 
 def _value_df(text: str, mark: str) -> "tuple[tuple[str, Number], tuple[Number, ...]] | None":
@@ -302,7 +302,7 @@ def _error_df(errors: list[tuple[int, float | None, dict[str, float | None]]], r
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
 
 
-_VALUE_SE = re.compile(r"\s*(?P<b>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[*†‡§^]*\s*\(\s*(?P<se>\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*[*†‡§^]*\s*")
+_VALUE_SE = re.compile(rf"\s*(?P<b>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[{_SIGNIFICANCE}]*\s*\(\s*(?P<se>\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*[{_SIGNIFICANCE}]*\s*")
 
 
 def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple[tuple[Number, Number] | None, list[Effect]]":  # type: ignore[no-untyped-def]
@@ -485,7 +485,7 @@ _NOT_PLAIN_R = re.compile(r"(?i)\bpartial|semi-?partial|\bkendall|\btau\b|τ|int
 _ROW_NUMBER = re.compile(r"\s*(\d{1,2})[.)]?\s+\S")
 _COLUMN_NUMBER = re.compile(r"\s*(\d{1,2})\.?\s*")
 _DECIMALS = re.compile(r"[.,]\d")
-_MARKED = re.compile(r"\d\s*[*†‡§^]")  # a number with a mark
+_MARKED = re.compile(rf"\d\s*[{_SIGNIFICANCE}]")  # a number with a mark
 
 
 def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | None", caption: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
@@ -530,6 +530,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
                 block = named[0]  # a block's row: "Parent rating (n = 46)"
                 continue
             cells += [(r, c, block) for c in sorted(row)[1:]]
+    symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
     found: list[TableStatistic] = []
     for r, c, n in cells:
         if n is None or n < 4:
@@ -543,7 +544,6 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
             continue
         op, bound = stars[m.group("marks")]
         p = PValue(op, bound, value.end, value.end, value.end, "")
-        symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
         df = Number(f"{n - 2}", float(n - 2), 0, 0, 0)
         rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
         rep.text = statistic_text(symbol, (df,), "=", value, p)

@@ -4,6 +4,7 @@ with its schema and version; ``kind`` says which class reads it back."""
 from __future__ import annotations
 
 import json
+import math
 from collections.abc import Mapping
 from typing import Any, Iterable, Union
 
@@ -43,7 +44,6 @@ def _indented(data: Any, step: str) -> str:
     put = out.append
     number = float.__repr__
     whole = int.__repr__
-    infinity = float("inf")
 
     def value(o: Any, pad: str) -> None:
         kind = type(o)
@@ -82,7 +82,7 @@ def _indented(data: Any, step: str) -> str:
                 value(item, inner)
             put("\n" + pad + "]")
         elif kind is float:
-            put(number(o) if o == o and o != infinity and o != -infinity else "NaN" if o != o else "Infinity" if o > 0 else "-Infinity")
+            put(number(o) if math.isfinite(o) else "NaN" if o != o else "Infinity" if o > 0 else "-Infinity")
         elif o is None:
             put("null")
         elif o is True:
