@@ -173,6 +173,23 @@ def _wrong_kinds(plan: Plan, where: str, entry: dict[str, Any], kind: str) -> No
                 raise plan.fail(f"{where}.{name}", f"{name} must be {wanted}, not {entry[name]!r}"[:300])
 
 
+# what each key of a table holds, as an analysis's parameters say it (a descriptives table's other keys: describe's own)
+_TABLE_TYPES = {"id": "str", "title": "str", "analyses": "Sequence[str]", "analysis": "str", "means": "bool", "intervals": "bool"}
+
+
+def _wrong_table_types(plan: Plan, where: str, table: dict[str, Any]) -> None:
+    """Each key of a table holds the kind of TOML value it is read as, or the line is named (a list given for an
+    analysis's id had been an internal error)."""
+    from .analyses import descriptives
+
+    signature = inspect.signature(descriptives.describe).parameters
+    for key, value in table.items():
+        annotation = _TABLE_TYPES.get(key) or (signature[key].annotation if key in signature else None)
+        wanted = _wanted(annotation, value, descriptives) if isinstance(annotation, str) else None
+        if wanted is not None:
+            raise plan.fail(f"{where}.{key}", f"{key} must be {wanted}, not {value!r}"[:300])
+
+
 def _alternatives(annotation: str, separator: str) -> list[str]:
     """The parts of ``annotation`` split at ``separator`` outside brackets."""
     parts, depth, start = [], 0, 0
@@ -297,6 +314,7 @@ def load_plan(path: "str | Path") -> Plan:
         if kind not in _TABLE:
             raise plan.fail(f"tables[{i}].kind", f"{kind!r} is not one of {', '.join(_TABLE)}")
         _unknown(plan, f"tables[{i}]", set(table), _TABLE[kind])
+        _wrong_table_types(plan, f"tables[{i}]", table)
         for ref in table.get("analyses", []) + ([table["analysis"]] if "analysis" in table else []):
             if ref not in ids:
                 raise plan.fail(f"tables[{i}].analyses", f"no analysis with id {ref!r}")

@@ -422,7 +422,7 @@ def _pipe_table_units(rows: list[str], line: int, table: int) -> Iterator[Unit]:
 def _docx_units(p: Path) -> Iterator[Unit]:
     from lxml import etree
 
-    from ..export.docx_input import check_docx
+    from ..export.docx_input import DAMAGED, check_docx, damaged
 
     check_docx(p)
     try:
@@ -437,8 +437,8 @@ def _docx_units(p: Path) -> Iterator[Unit]:
                 except etree.XMLSyntaxError as exc:
                     raise InputError(f"{p}: {part} is not well-formed XML ({exc.msg})") from None
                 yield from _part_units(root, part)
-    except zipfile.BadZipFile:
-        raise InputError(f"{p}: a damaged zip archive, not a readable .docx") from None
+    except DAMAGED as exc:
+        raise damaged(p, exc) from None
 
 
 def _place(part: str) -> str:

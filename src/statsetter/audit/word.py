@@ -450,12 +450,12 @@ def _comment(document, first, last, text: str) -> None:  # type: ignore[no-untyp
 def annotate(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path") -> tuple[int, int]:
     """A copy of the .docx with a Word comment on each finding in the body
     and its tables: (comments added, findings elsewhere, listed only)."""
-    import docx
     from docx.oxml.ns import qn
 
+    from ..export.docx_input import open_docx
     from ..export.docx_writer import save_document
 
-    document = docx.Document(str(source))
+    document = open_docx(source)
     paragraphs = list(document.element.body.iter(qn("w:p")))
     added = elsewhere = 0
     for e in sorted(entries, key=lambda e: (e.unit.index, -e.start)):
@@ -482,12 +482,12 @@ def revise(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path", 
     revision puts a p the text did not give (a threshold made exact). Returns the
     counts: revised, commented, kept (restyling would lose something),
     elsewhere (headers, footers, notes: listed only)."""
-    import docx
     from docx.oxml.ns import qn
 
+    from ..export.docx_input import open_docx
     from ..export.docx_writer import save_document
 
-    document = docx.Document(str(source))
+    document = open_docx(source)
     body = document.element.body
     paragraphs = list(body.iter(qn("w:p")))
     ids = [int(v) for el in document.element.iter() for k, v in el.attrib.items() if k == qn("w:id") and v.lstrip("-").isdigit()]

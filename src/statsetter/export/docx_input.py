@@ -4,6 +4,7 @@ documents, password-protected files and archives that unpack too large."""
 from __future__ import annotations
 
 import zipfile
+import zlib
 from pathlib import Path
 from typing import TYPE_CHECKING
 
@@ -13,10 +14,13 @@ from ..files import read_start
 if TYPE_CHECKING:
     from docx.document import Document
 
-__all__ = ["open_docx", "check_docx", "MAX_UNPACKED"]
+__all__ = ["open_docx", "check_docx", "MAX_UNPACKED", "DAMAGED", "damaged"]
 
 MAX_UNPACKED = 1 << 30  # 1 GiB unpacked, against zip bombs
 MAX_RATIO = 200  # unpacked / packed, per member of any size above 1 MiB
+# what reading a damaged archive's member raises: a bad checksum, a broken deflate stream, a member cut short, a
+# compression method Python's zip reader lacks (Word writes deflate only)
+DAMAGED = (zipfile.BadZipFile, zlib.error, EOFError, NotImplementedError)
 _OLE = b"\xd0\xcf\x11\xe0\xa1\xb1\x1a\xe1"
 
 
@@ -27,6 +31,8 @@ def open_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> "Docum
     check_docx(p, max_unpacked=max_unpacked)
     try:
         return docx.Document(str(p))
+    except DAMAGED as exc:
+        raise damaged(p, exc) from None
     except Exception as exc:  # python-docx raises several kinds on malformed parts
         raise InputError(f"{p}: not a readable Word document ({type(exc).__name__})") from None
 
@@ -57,5 +63,12 @@ def check_docx(path: "str | Path", *, max_unpacked: int = MAX_UNPACKED) -> None:
                         if b"<!DOCTYPE" in part.read(1024).upper():
                             raise InputError(f"{p}: {info.filename} declares a DOCTYPE, which Word documents do not have; "
                                              "open and save it in Word or LibreOffice first")
-    except zipfile.BadZipFile:
-        raise InputError(f"{p}: a damaged zip archive, not a readable .docx") from None
+    except DAMAGED as exc:
+        raise damaged(p, exc) from None
+
+
+def damaged(path: Path, exc: BaseException) -> InputError:
+    """The error for a .docx whose archive cannot be read (``exc``, one of DAMAGED)."""
+    if isinstance(exc, NotImplementedError):
+        return InputError(f"{path}: a zip archive packed with a method Word does not use; open and save it in Word or LibreOffice first")
+    return InputError(f"{path}: a damaged zip archive, not a readable .docx ({exc})")
