@@ -304,6 +304,9 @@ BAD_DATA = [
     ("y,g\n1,<script>x</script>\n2,ok\n", ["describe", "x.csv", "--group", "g", "--out", "t.md"], 0, ""),
     ("y,g\n1,a\n2,b\n", ["describe", "x.csv", "--compare"], 2, "--compare compares groups; name the grouping variable with --group"),
     ("y,g\n1,a\n2,b\n", ["describe", "x.csv", "--smd"], 2, "--smd compares groups; name the grouping variable with --group"),
+    # a category variable without a valid value in one group: no SMD (left blank, as for a mean), not an SVD of NaN (an
+    # internal error before; found by describing .sav files with random codes, labels and missing values)
+    ("g,y,x\na,1.5,u\na,2.5,v\na,3.5,u\nb,,\nb,,\n", ["describe", "x.csv", "--group", "g", "--smd", "--level", "y=ratio"], 0, "X, n (%)\n  u          2 (66.7)         0           2 (66.7)\n"),
 ]
 
 

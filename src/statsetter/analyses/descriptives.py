@@ -483,7 +483,10 @@ def _smd(v: VariableSummary) -> float:
 
     if v.kind == "nominal":
         assert v.counts is not None
-        p = v.counts[:2] / v.counts[:2].sum(axis=1, keepdims=True)
+        totals = v.counts[:2].sum(axis=1, keepdims=True)
+        if not np.all(totals > 0):  # a group without a valid value of the variable: no proportions to compare
+            return float("nan")
+        p = v.counts[:2] / totals
         t = (p[0] - p[1])[1:]
         cov = [np.diag(q[1:]) - np.outer(q[1:], q[1:]) for q in p]
         s = (cov[0] + cov[1]) / 2
