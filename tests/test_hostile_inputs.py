@@ -268,6 +268,10 @@ BAD_PLANS = [
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\nsuppress_below = "5"\n', "tables[0].suppress_below): suppress_below must be a whole number, not '5'"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\npercent_of = "rows"\n', "percent_of must be one of 'valid', 'all', not 'rows'"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\ntitle = 3\n', "tables[0].title): title must be text in quotes, not 3"),
+    ('[data]\npath = "d.csv"\n[[tables]]\nkind = ["results"]\n', "tables[0].kind): ['results'] is not one of"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = ["a"]\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n', "analyses[0].id): id must be text in quotes, not ['a']"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n[[figures]]\nkind = "means"\nanalysis = { id = "a" }\n',
+     "figures[0].analysis): analysis must be text in quotes, not {'id': 'a'}"),
 ]
 
 

@@ -290,6 +290,8 @@ def load_plan(path: "str | Path") -> Plan:
         for need in ("id", "kind"):
             if need not in analysis:
                 raise plan.fail(where, f"an analysis needs {need!r}")
+        if not isinstance(analysis["id"], str):
+            raise plan.fail(f"{where}.id", f"id must be text in quotes, not {analysis['id']!r}"[:300])
         if analysis["id"] in ids:
             raise plan.fail(f"{where}.id", f"the id {analysis['id']!r} is used twice")
         if not _MARKER_ID.fullmatch(str(analysis["id"])):
@@ -311,7 +313,7 @@ def load_plan(path: "str | Path") -> Plan:
     for i, table in enumerate(raw.get("tables", [])):
         kind = table.get("kind")
         _renamed(plan, f"tables[{i}]", table, "describe" if kind == "descriptives" else "")
-        if kind not in _TABLE:
+        if not isinstance(kind, str) or kind not in _TABLE:
             raise plan.fail(f"tables[{i}].kind", f"{kind!r} is not one of {', '.join(_TABLE)}")
         _unknown(plan, f"tables[{i}]", set(table), _TABLE[kind])
         _wrong_table_types(plan, f"tables[{i}]", table)
@@ -328,6 +330,9 @@ def load_plan(path: "str | Path") -> Plan:
     for i, fig in enumerate(raw.get("figures", [])):
         where = f"figures[{i}]"
         _unknown(plan, where, set(fig), _FIGURE)
+        for key in ("kind", "analysis", "table", "variable", "title", "note", "id"):
+            if key in fig and not isinstance(fig[key], str):
+                raise plan.fail(f"{where}.{key}", f"{key} must be text in quotes, not {fig[key]!r}"[:300])
         if fig.get("kind") not in FIGURE_KINDS:
             raise plan.fail(f"{where}.kind", f"{fig.get('kind')!r} is not one of {', '.join(FIGURE_KINDS)}")
         if fig.get("kind") == "categories":
@@ -337,9 +342,6 @@ def load_plan(path: "str | Path") -> Plan:
                                                   f"of a Table 1; descriptives tables: {', '.join(described) or 'none'})")
         elif fig.get("analysis") not in ids:
             raise plan.fail(f"{where}.analysis", f"no analysis with id {fig.get('analysis')!r} (a figure draws the records of one analysis)")
-        for key in ("title", "note", "id"):
-            if key in fig and not isinstance(fig[key], str):
-                raise plan.fail(f"{where}.{key}", f"{key} must be text in quotes")
         figure_id = str(fig.get("id") or f"figure_{i + 1}")
         if not _MARKER_ID.fullmatch(figure_id) or figure_id in table_ids:
             raise plan.fail(f"{where}.id", f"{figure_id!r}: a figure id is used once, not by a table, and uses letters, digits, _, . and - "
