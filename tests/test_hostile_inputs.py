@@ -220,7 +220,9 @@ BAD_PLANS = [
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass"\ngroup = "sex"\n', "no such column"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcom = "x"\n', "did you mean outcome"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a b"\nkind = "t_independent"\n', "ids use letters"),
-    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\n[[analyses]]\nid = "a"\nkind = "t_paired"\n', "used twice"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n[[analyses]]\nid = "a"\nkind = "t_paired"\n', "used twice"),
+    # a parameter the analysis cannot do without (Python's "spearman() missing 1 required positional argument" had been the message)
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "spearman"\nx = "body_mass_g"\n', "analyses[0]): a spearman analysis needs 'y'"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "pie"\n', "is not one of"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "results"\nanalyses = ["nope"]\n', "no analysis with id"),
     ('tables = [1]\n[data]\npath = "d.csv"\n', "each entry of tables"),

@@ -190,6 +190,14 @@ def _wrong_table_types(plan: Plan, where: str, table: dict[str, Any]) -> None:
             raise plan.fail(f"{where}.{key}", f"{key} must be {wanted}, not {value!r}"[:300])
 
 
+def _required(plan: Plan, where: str, entry: dict[str, Any], kind: str) -> None:
+    """Each parameter an analysis cannot do without (no default) is given, or the line is named (Python's own message
+    about a missing argument had been shown instead)."""
+    for name, parameter in inspect.signature(_function(kind)).parameters.items():
+        if name != "df" and parameter.default is parameter.empty and parameter.kind is not parameter.VAR_KEYWORD and name not in entry:
+            raise plan.fail(where, f"a {kind} analysis needs {name!r}")
+
+
 def _alternatives(annotation: str, separator: str) -> list[str]:
     """The parts of ``annotation`` split at ``separator`` outside brackets."""
     parts, depth, start = [], 0, 0
@@ -306,6 +314,7 @@ def load_plan(path: "str | Path") -> Plan:
         _renamed(plan, where, analysis, kind)
         _unknown(plan, where, set(analysis), {"id", "kind", "place"} | set(_parameters(kind)))
         _wrong_kinds(plan, where, analysis, kind)
+        _required(plan, where, analysis, kind)
         if analysis.get("place", "text") not in PLACES:
             raise plan.fail(f"{where}.place", f"{analysis['place']!r} is not one of {', '.join(PLACES)} (where the result goes: its sentence, a table, or both)")
         plan.analyses.append(analysis)
