@@ -222,7 +222,7 @@ BAD_PLANS = [
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a b"\nkind = "t_independent"\n', "ids use letters"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n[[analyses]]\nid = "a"\nkind = "t_paired"\n', "used twice"),
     # a parameter the analysis cannot do without (Python's "spearman() missing 1 required positional argument" had been the message)
-    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "spearman"\nx = "body_mass_g"\n', "analyses[0]): a spearman analysis needs 'y'"),
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "spearman"\nx = "body_mass_g"\n', "analyses[0]): this spearman analysis needs 'y'"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "pie"\n', "is not one of"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "results"\nanalyses = ["nope"]\n', "no analysis with id"),
     ('tables = [1]\n[data]\npath = "d.csv"\n', "each entry of tables"),
@@ -270,6 +270,7 @@ BAD_PLANS = [
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\nsuppress_below = "5"\n', "tables[0].suppress_below): suppress_below must be a whole number, not '5'"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\npercent_of = "rows"\n', "percent_of must be one of 'valid', 'all', not 'rows'"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\ntitle = 3\n', "tables[0].title): title must be text in quotes, not 3"),
+    ('style = "fatigue"\n[data]\npath = "d.csv"\n', "plan.toml, line 1: fatigue: style: no built-in style 'fatigue'"),  # (the plan's line had been left out)
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = ["results"]\n', "tables[0].kind): ['results'] is not one of"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = ["a"]\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n', "analyses[0].id): id must be text in quotes, not ['a']"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n[[figures]]\nkind = "means"\nanalysis = { id = "a" }\n',
@@ -420,6 +421,33 @@ def test_degenerate_data_in_the_api_are_refused_by_name():
         mediation(few, "x", "m", "y")
     numbers = numbers_for(load_style("apa7"))
     assert numbers.number(float("inf")) == "∞" and numbers.number(float("-inf")) == "−∞"
+
+
+@pytest.mark.parametrize("call, message", [
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).t_one_sample(d, "flat", mu=5), r"flat: zero variance \(every value is 5.1\)"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).t_paired(d, first="flat", second="triple"), "the differences have zero variance"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).anova_oneway(d, "flat", "species"), "zero variance within every group"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).anova_oneway(d, "flat_adelie", "species", variant="welch"),
+     "zero variance in species = Adelie"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).posthoc(d, "flat", "species"), "Tukey statistic is undefined"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).posthoc(d, "flat", "species", adjust="games-howell"), "Games–Howell statistic is undefined"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).kruskal_wallis(d, "flat", "species"), "H is undefined"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).cronbach_alpha(d, ["bill_length_mm", "flat", "body_mass_g"]), "flat: zero variance"),
+])
+def test_a_column_of_one_decimal_value_has_no_variance(call, message):
+    """A column whose every value is 5.1 has no variance, though numpy's variance of it is 7e-30 (its mean rounds): the
+    zero-variance checks read the values, not the variance. Before, a one-sample t of 5.3e14 with p = 0 and a paired t
+    of −2.7e16 were reported as results, Tukey's and Games–Howell's p's came out 1, and an ANOVA's and Kruskal–Wallis's
+    NaN were refused without naming their analysis (found by running plans on randomly damaged data; the penguins of
+    Gorman, Williams & Fraser, 2014, as pingouin bundles them, with constant columns added)."""
+    from statsetter.errors import InputError
+
+    penguins = pg.read_dataset("penguins").dropna(subset=["bill_length_mm", "body_mass_g"])
+    assert penguins.assign(flat=5.1)["flat"].var(ddof=1) != 0  # what fooled the old checks
+    data = penguins.assign(flat=5.1, triple=15.3, flat_adelie=penguins["body_mass_g"].where(penguins["species"] != "Adelie", 5.1))
+    with pytest.raises(InputError, match=message):
+        result = call(data)
+        result.main if isinstance(result, list) else result
 
 
 def test_three_pairs_give_a_correlation_without_an_interval_and_vanishing_squares_are_named():
@@ -683,6 +711,7 @@ def test_an_internal_error_is_one_line_and_a_log(box, capsys, monkeypatch):
     monkeypatch.setattr("statsetter.cli.format.run", boom)
     code, _, err = _run(["format", "t", "--stat", "2", "--df", "3"], capsys)
     assert code == 4 and "internal error" in err and "Traceback" not in err
+    assert "rerun as 'statsetter --debug format …'" in err  # where the option goes (after the command, argparse refuses it)
     log = Path(err.split("the full traceback is in ", 1)[1].split(";", 1)[0])
     assert "ZeroDivisionError: planted" in log.read_text(encoding="utf-8")
     log.unlink()

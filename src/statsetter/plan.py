@@ -48,7 +48,7 @@ from dataclasses import dataclass, field, replace
 from pathlib import Path
 from typing import TYPE_CHECKING, Any, Callable
 
-from .errors import InputError
+from .errors import InputError, RecordError, StyleError
 from .records import CorrelationMatrix, Description, Record, Result, name_records, with_table_labels
 from .rendering.compose import PLACES, Block, Shown
 from .style.profile import PAPERS
@@ -195,7 +195,7 @@ def _required(plan: Plan, where: str, entry: dict[str, Any], kind: str) -> None:
     about a missing argument had been shown instead)."""
     for name, parameter in inspect.signature(_function(kind)).parameters.items():
         if name != "df" and parameter.default is parameter.empty and parameter.kind is not parameter.VAR_KEYWORD and name not in entry:
-            raise plan.fail(where, f"a {kind} analysis needs {name!r}")
+            raise plan.fail(where, f"this {kind} analysis needs {name!r}")
 
 
 def _alternatives(annotation: str, separator: str) -> list[str]:
@@ -744,7 +744,7 @@ def _records(plan: Plan, data: _Data, progress: Callable[[str], None] | None, st
         try:
             used, args = _arguments(data, coded, args, kind)
             result = _function(kind)(used, **args)
-        except (InputError, TypeError) as exc:
+        except (InputError, RecordError, TypeError) as exc:  # (a record the data leave undefined: named by its analysis)
             key = _key_of(analysis, str(exc))
             raise PlanError(f"{plan.where(f'analyses[{i}].{key}' if key else f'analyses[{i}]')} (analysis {analysis['id']!r}): {exc}") from None
         found = list(result) if isinstance(result, (list, tuple)) else [result]
@@ -794,7 +794,7 @@ def _description(plan: Plan, t: dict[str, Any], i: int, data: _Data, alphas: dic
             weights=t.get("weights"), compare=bool(t.get("compare")), smd=bool(t.get("smd")), suppress_below=t.get("suppress_below"),
             percent_of=t.get("percent_of", "valid"), alphas={k: v for k, v in alphas.items() if k in (t.get("variables") or frame.columns)},
         )
-    except InputError as exc:
+    except (InputError, RecordError) as exc:
         raise PlanError(f"{plan.where(f'tables[{i}]')} (table {i + 1}): {exc}") from None
     return replace(d, id=t.get("id") or f"table_{i + 1}")
 
@@ -886,7 +886,7 @@ def _style(plan: Plan) -> "Style":
     candidate = plan.resolve(value)
     try:
         return load_style(str(candidate) if str(value).endswith(".toml") else value)
-    except InputError as exc:
+    except (InputError, StyleError) as exc:
         raise PlanError(f"{plan.where('style')}: {exc}") from None
 
 

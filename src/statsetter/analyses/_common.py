@@ -130,6 +130,12 @@ def notes(*items: Note | None) -> tuple[Note, ...]:
     return tuple(n for n in items if n is not None)
 
 
+def constant(values: "np.ndarray | pd.Series") -> bool:
+    """Whether every value is the same: by the values themselves, not a variance, which rounding leaves a hair above
+    zero for a column of 5.1s (and a t of 10¹⁴ after it)."""
+    return len(values) > 0 and values.min() == values.max()
+
+
 def fmt(x: Any) -> str:
     return f"{x:.4g}"
 

@@ -35,8 +35,12 @@ def anova_oneway(
     if variant not in ("classic", "welch"):
         raise InputError(f"variant: {variant!r} is not classic or welch")
     levels, samples, missing = c.grouped(df, outcome, group, "an ANOVA")
-    if all(v.var(ddof=1) == 0 for v in samples):
+    if all(c.constant(v) for v in samples):
         raise InputError(f"{outcome}: zero variance within every group; F is undefined")
+    flat = [category_text(lev) for lev, v in zip(levels, samples) if c.constant(v)] if variant == "welch" else []
+    if flat:  # Welch (1951) weights each group by n / s²: infinite for a group whose values are all alike
+        raise InputError(f"{outcome}: zero variance in {group} = {', '.join(flat)} (every value the same); Welch's F weights each group "
+                         "by n / s², which is then undefined: compare the groups with the classic F or a rank test")
     res = stats.f_oneway(*samples, equal_var=variant == "classic")
     k, n = len(samples), sum(len(v) for v in samples)
     means = [float(v.mean()) for v in samples]

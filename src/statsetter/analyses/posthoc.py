@@ -52,7 +52,7 @@ def posthoc(
         means = np.array([v.mean() for v in samples])
         dfe = float(sizes.sum() - k)
         mse = float(sum((len(v) - 1) * v.var(ddof=1) for v in samples)) / dfe
-        if mse == 0:
+        if all(c.constant(v) for v in samples):
             raise InputError(f"{outcome}: zero variance within every group; the Tukey statistic is undefined")
         first, second = (np.array(ix) for ix in zip(*pairs))
         diffs = means[first] - means[second]
@@ -64,7 +64,7 @@ def posthoc(
         for i, j in pairs:
             a, b = samples[i], samples[j]
             va, vb = a.var(ddof=1) / len(a), b.var(ddof=1) / len(b)
-            if va + vb == 0:
+            if c.constant(a) and c.constant(b):
                 raise InputError(f"{outcome}: zero variance in groups {category_text(levels[i])} and {category_text(levels[j])}; "
                                  "the Games–Howell statistic is undefined")
             se = math.sqrt(va + vb)

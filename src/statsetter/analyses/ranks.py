@@ -170,6 +170,8 @@ def kruskal_wallis(
     from scipy import stats
 
     levels, samples, missing = c.grouped(df, outcome, group, "a Kruskal–Wallis test", min_n=1)
+    if all(c.constant(v) for v in samples) and len({float(v[0]) for v in samples}) == 1:
+        raise InputError(f"{outcome}: every value is the same; the ranks are all tied and H is undefined")
     res = stats.kruskal(*samples)
     n = sum(len(v) for v in samples)
     h = float(res.statistic)

@@ -106,8 +106,9 @@ def cronbach_alpha(
     if n < 3:
         raise InputError(f"items: {n} complete row(s); α needs at least 3")
     variances = complete.var(axis=0, ddof=1)
-    if (variances == 0).any():
-        raise InputError(f"{items[int(np.flatnonzero(variances == 0)[0])]}: zero variance; α is undefined")
+    flat = complete.min(axis=0) == complete.max(axis=0)  # (not the variances: rounding leaves a column of 5.1s a hair above zero)
+    if flat.any():
+        raise InputError(f"{items[int(np.flatnonzero(flat)[0])]}: zero variance; α is undefined")
     total = complete.sum(axis=1)
     alpha = k / (k - 1) * (1 - variances.sum() / total.var(ddof=1))
     df1, df2 = n - 1, (n - 1) * (k - 1)

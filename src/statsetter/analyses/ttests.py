@@ -113,7 +113,7 @@ def t_independent(
         if len(v) < 2:
             raise InputError(f"{group} = {category_text(lev)}: n = {len(v)}; each group needs at least 2 values")
     (ma, va), (mb, vb) = _moments(a), _moments(b)
-    if va == 0 and vb == 0:
+    if c.constant(a) and c.constant(b):
         raise InputError(f"{outcome}: zero variance in both groups; the t statistic is undefined")
     n1, n2 = len(a), len(b)
     t_value, df_value, p_value, ci_low, ci_high = _two_sample_t(ma, va, n1, mb, vb, n2, variant == "student", alternative, level)
@@ -183,7 +183,7 @@ def t_paired(
     if n < 2:
         raise InputError(f"{first}, {second}: {n} complete pair(s); a paired t test needs at least 2")
     diff = a - b
-    if diff.var(ddof=1) == 0:
+    if c.constant(diff):
         raise InputError(f"{first} − {second}: the differences have zero variance; the t statistic is undefined")
     res = stats.ttest_rel(a, b, alternative=alternative)
     ci = res.confidence_interval(level)
@@ -234,7 +234,7 @@ def t_one_sample(
     n = len(a)
     if n < 2:
         raise InputError(f"{outcome}: n = {n}; a t test needs at least 2 values")
-    if a.var(ddof=1) == 0:
+    if c.constant(a):
         raise InputError(f"{outcome}: zero variance (every value is {a[0]:g}); the t statistic is undefined")
     res = stats.ttest_1samp(a, mu, alternative=alternative)
     ci = res.confidence_interval(level)

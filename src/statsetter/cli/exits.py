@@ -129,5 +129,5 @@ def _internal_error(ns: argparse.Namespace) -> int:
         where = f"the full traceback is in {log}"
     except OSError:
         where = "the traceback could not be saved"
-    sys.stderr.write(f"statsetter {ns.command}: internal error (a bug in statsetter, not in your input); {where}; rerun with --debug to print it\n")
+    sys.stderr.write(f"statsetter {ns.command}: internal error (a bug in statsetter, not in your input); {where}; rerun as 'statsetter --debug {ns.command} …' to print it\n")
     return EXIT_INTERNAL
