@@ -433,9 +433,21 @@ def test_degenerate_data_in_the_api_are_refused_by_name():
     (lambda d: __import__("statsetter.analyses", fromlist=["x"]).posthoc(d, "flat", "species", adjust="games-howell"), "Games–Howell statistic is undefined"),
     (lambda d: __import__("statsetter.analyses", fromlist=["x"]).kruskal_wallis(d, "flat", "species"), "H is undefined"),
     (lambda d: __import__("statsetter.analyses", fromlist=["x"]).cronbach_alpha(d, ["bill_length_mm", "flat", "body_mass_g"]), "flat: zero variance"),
+    # an outcome without variance, where models had fitted the rounding: a two-way ANOVA's F = 2.97 (p = .053), an ANCOVA's
+    # F = 2.41, a multilevel slope's z = 1e11, a likelihood-ratio χ² of 3e-6
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).factorial_anova(d, "flat", ["species", "sex"]), r"flat: zero variance \(every value is 5.1\); F"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).ancova(d, "flat", "species", ["bill_length_mm"]), r"flat: zero variance \(every value is 5.1\); F"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).mixed_model(d, "flat", ["bill_length_mm"], "island"), "no variance to split"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).compare_models(d, "flat", ["bill_length_mm"], ["bill_length_mm", "body_mass_g"], "island"),
+     "no variance to split"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).mann_whitney(d, "flat", "sex"), "U's p is undefined"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).friedman(d, ["flat", "flat_b", "flat_c"]), "every person's measurements are tied"),
+    # every person changes alike (a person's values are their own offset plus the condition's): the error is rounding
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).rm_anova(d, columns=["alike_1", "alike_2", "alike_3"]), "no error variance"),
+    (lambda d: __import__("statsetter.analyses", fromlist=["x"]).mixed_anova(d, columns=["alike_1", "alike_2", "alike_3"], between="sex"), "no error variance"),
 ])
 def test_a_column_of_one_decimal_value_has_no_variance(call, message):
-    """A column whose every value is 5.1 has no variance, though numpy's variance of it is 7e-30 (its mean rounds): the
+    """A column whose every value is 5.1, or an error term that is zero but for rounding, has no variance, though numpy's variance of it is 7e-30 (its mean rounds): the
     zero-variance checks read the values, not the variance. Before, a one-sample t of 5.3e14 with p = 0 and a paired t
     of −2.7e16 were reported as results, Tukey's and Games–Howell's p's came out 1, and an ANOVA's and Kruskal–Wallis's
     NaN were refused without naming their analysis (found by running plans on randomly damaged data; the penguins of
@@ -444,7 +456,9 @@ def test_a_column_of_one_decimal_value_has_no_variance(call, message):
 
     penguins = pg.read_dataset("penguins").dropna(subset=["bill_length_mm", "body_mass_g"])
     assert penguins.assign(flat=5.1)["flat"].var(ddof=1) != 0  # what fooled the old checks
-    data = penguins.assign(flat=5.1, triple=15.3, flat_adelie=penguins["body_mass_g"].where(penguins["species"] != "Adelie", 5.1))
+    mass = penguins["body_mass_g"] / 1000
+    data = penguins.assign(flat=5.1, flat_b=5.1, flat_c=5.1, triple=15.3, flat_adelie=penguins["body_mass_g"].where(penguins["species"] != "Adelie", 5.1),
+                           alike_1=mass + 1.1, alike_2=mass + 2.2, alike_3=mass + 3.3).dropna(subset=["sex"])
     with pytest.raises(InputError, match=message):
         result = call(data)
         result.main if isinstance(result, list) else result

@@ -78,6 +78,8 @@ def mann_whitney(
     if method == "auto":
         ties = len(np.unique(np.concatenate([a, b]))) < len(a) + len(b)
         method = "exact" if min(len(a), len(b)) <= 8 and not ties else "asymptotic"
+    if c.constant(a) and c.constant(b) and a[0] == b[0]:
+        raise InputError(f"{outcome}: every value is the same; the ranks are all tied and U's p is undefined")
     res = stats.mannwhitneyu(a, b, alternative=alternative, method=method)
     u = float(res.statistic)
     r = 2 * u / (len(a) * len(b)) - 1

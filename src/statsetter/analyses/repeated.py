@@ -24,6 +24,10 @@ McNemarVariant = Literal["auto", "exact", "corrected", "uncorrected"]
 EXACT_BELOW = 25  # discordant pairs: below this the exact binomial test (practice: the chi-square approximation needs b + c >= 25)
 
 
+# an error sum of squares below this share of the total is the rounding of the arithmetic, not variance in the data (the
+# subtraction that makes it loses about 1e-16 of the total): F would be a quotient of rounding errors
+_NO_ERROR = 1e-12
+
 def _binary(data: "pd.DataFrame", columns: Sequence[str], test: str) -> tuple[list[object], "list"]:  # type: ignore[type-arg]
     """The two values the columns take (sorted, the same two for every column) and each column as 0/1."""
     values = sorted({v for col in columns for v in data[col].unique()}, key=lambda v: (str(type(v)), v))
@@ -149,6 +153,8 @@ def friedman(df: "pd.DataFrame", columns: Sequence[str], *, outcome_label: str |
         raise InputError(f"{', '.join(columns)}: {n} complete row(s); Friedman's test needs at least two people")
     from .ranks import score_precision
 
+    if all(c.constant(row) for row in np.column_stack(arrays)):
+        raise InputError(f"{', '.join(columns)}: every person's measurements are tied; Friedman's χ² is undefined")
     res = stats.friedmanchisquare(*arrays)
     chi2 = float(res.statistic)
     named = dict(labels or {})
@@ -312,9 +318,10 @@ def rm_anova(
     grand = Y.mean()
     ss_effect = n * float(((Y.mean(axis=0) - grand) ** 2).sum())
     ss_persons = k * float(((Y.mean(axis=1) - grand) ** 2).sum())
-    ss_error = float(((Y - grand) ** 2).sum()) - ss_effect - ss_persons
+    total = float(((Y - grand) ** 2).sum())
+    ss_error = total - ss_effect - ss_persons
     df1, df2 = k - 1.0, (k - 1.0) * (n - 1.0)
-    if ss_error <= 0:
+    if ss_error <= _NO_ERROR * total:
         raise InputError(f"{', '.join(columns)}: no error variance (every person changes alike); F is undefined")
     F = (ss_effect / df1) / (ss_error / df2)
     p = k - 1
@@ -401,6 +408,10 @@ def _two_within(df: "pd.DataFrame", outcome: str, subject: str, factors: tuple[s
         E = (T - mean).T @ (T - mean)
         fitted.append((label, interaction, n * float(mean @ mean), float(np.trace(E)), E, M.shape[1]))
     ss_persons = ka * kb * float(((Y.mean(axis=1) - Y.mean()) ** 2).sum())
+    total = float(((Y - Y.mean()) ** 2).sum())
+    if c.constant(Y.ravel()) or any(f[3] <= _NO_ERROR * total for f in fitted):
+        label = next((f[0] for f in fitted if f[3] <= _NO_ERROR * total), shown[a])
+        raise InputError(f"{label}: no error variance (every person changes alike); F is undefined")
     errors = sum(f[3] for f in fitted)
     cells = c.cell_groups((category_text(x), category_text(y), Y[:, i * kb + j]) for i, x in enumerate(la) for j, y in enumerate(lb))
     variables = (Variable(outcome, shown[outcome], "outcome"), Variable(a, shown[a], "factor"), Variable(b, shown[b], "factor"))
@@ -575,10 +586,15 @@ def mixed_anova(
     H_within = N * np.outer(grand_t, grand_t)
     H_inter = sum(n_j[j] * np.outer(means[j] - grand_t, means[j] - grand_t) for j in range(G))
     ss_err, ss_within, ss_inter = float(np.trace(E)), float(np.trace(H_within)), float(np.trace(H_inter))
+    total = float(((Y - Y.mean()) ** 2).sum())
+    if c.constant(Y.ravel()) or ss_err <= _NO_ERROR * total:
+        raise InputError(f"{', '.join(columns)}: no error variance within {between}'s groups (every person changes alike); F is undefined")
     s = Y.mean(axis=1)
     s_means = np.array([s[m].mean() for m in member])
     ss_between = k * float((n_j * (s_means - s.mean()) ** 2).sum())
     ss_persons = k * float(sum(((s[m] - s_means[j]) ** 2).sum() for j, m in enumerate(member)))
+    if ss_persons <= _NO_ERROR * total:
+        raise InputError(f"{between}: every person's mean equals their group's; the between-subjects F is undefined")
     gg, hf_raw, mauchly, eps, name = _sphericity(E / dfe, float(dfe), k, correction)
     hf = min(1.0, hf_raw)
     named = dict(labels or {})
