@@ -821,6 +821,30 @@ def test_the_audit_checks_p_values_without_scipy(box, capsys, without_module):
     assert code == 1 and "p-does-not-follow" in out and "Traceback" not in err
 
 
+def test_a_spreadsheet_with_a_number_for_a_header_and_dates_among_numbers(box, capsys):
+    """A header cell holding a number (a year) names its column as text, and a column where the spreadsheet turned some
+    entries into dates is described as categories, numbers first, and said (internal errors before: "keywords must be strings" and
+    "'<' not supported between datetime and float"; found by describing random spreadsheets). The penguins of Gorman,
+    Williams & Fraser (2014), as pingouin bundles them."""
+    import datetime
+
+    import openpyxl
+
+    penguins = pg.read_dataset("penguins").dropna().iloc[::8]  # every eighth: all three species
+    book = openpyxl.Workbook()
+    sheet = book.active
+    sheet.append(["species", 2007, "clutch"])
+    for i, (species, mass) in enumerate(zip(penguins["species"], penguins["body_mass_g"])):
+        sheet.append([species, float(mass), datetime.datetime(2007, 11, 1 + i % 9) if i % 4 == 0 else i % 3 + 1])
+    book.save(box / "s.xlsx")
+    code, out, err = _run(["describe", "s.xlsx", "--group", "species", "--compare", "--level", "clutch=nominal"], capsys)
+    assert code == 0 and "Traceback" not in err, err
+    assert "2007, M (SD)" in out  # (the numeric header, now the column's name)
+    assert "clutch: 11 date(s) among 31 numbers (first in row 2 of the sheet)" in err  # the likely cause, said
+    rows = [line.split()[0] for line in out.splitlines() if line.startswith("  ")]
+    assert rows[:3] == ["1", "2", "3"] and rows[3].startswith("2007-11-01"), rows
+
+
 def test_a_spreadsheet_with_a_far_cell_is_refused_before_loading(box, capsys):
     from openpyxl import Workbook
 

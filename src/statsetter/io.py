@@ -109,6 +109,8 @@ def read_data(
         raise InputError(f"{p}: cannot read as {READERS[suffix]} ({first})") from None
     if len(data.frame) == 0:
         raise InputError(f"{p}: no rows of data (only a header, or nothing)")
+    if not all(isinstance(name, str) for name in data.frame.columns):  # a spreadsheet's header cell holding a number or a date
+        data = replace(data, frame=data.frame.set_axis([str(name) for name in data.frame.columns], axis=1))
     data = _arrow_when_long(data)
     if data.frame.columns.duplicated().any():
         raise InputError(f"{p}: column {data.frame.columns[data.frame.columns.duplicated()][0]!r} appears twice")
@@ -303,7 +305,8 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str, sep: s
         book = pd.ExcelFile(p, engine="openpyxl")
         if sheet is not None and not isinstance(sheet, int) and sheet not in book.sheet_names:
             raise InputError(f"{p}: no sheet {sheet!r}; sheets: {', '.join(map(str, book.sheet_names))}")
-        return Dataset(pd.read_excel(book, sheet_name=sheet if sheet is not None else 0), p)
+        frame = pd.read_excel(book, sheet_name=sheet if sheet is not None else 0)
+        return Dataset(frame, p, notes=tuple(_dates_among_numbers(frame)))
     if suffix == ".parquet":
         return Dataset(pd.read_parquet(p), p)
     import pyreadstat
@@ -319,6 +322,23 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str, sep: s
         if frame[name].dtype == object or pd.api.types.is_string_dtype(frame[name]):
             frame[name] = frame[name].mask(frame[name] == "")
     return Dataset(frame, p, levels, dict(meta.variable_value_labels or {}), labels)
+
+
+def _dates_among_numbers(frame: "pd.DataFrame") -> list[str]:
+    """A note for each spreadsheet column that mixes dates and numbers: a spreadsheet turns entries such as 1-3 or 3/4
+    into dates as they are typed, and the column then holds categories nobody meant."""
+    import datetime
+
+    notes = []
+    for name in frame.columns:
+        if frame[name].dtype != object:
+            continue
+        dated = frame[name].map(lambda v: isinstance(v, (datetime.date, datetime.time)))
+        numbers = frame[name].map(lambda v: isinstance(v, (int, float)) and not isinstance(v, bool) and v == v)
+        if dated.any() and numbers.any():
+            notes.append(f"{name}: {int(dated.sum())} date(s) among {int(numbers.sum())} numbers (first in row {int(dated.argmax()) + 2} of the sheet); "
+                         "a spreadsheet turns entries such as 1-3 into dates as they are typed: check the column")
+    return notes
 
 
 MAX_CELLS = 50_000_000  # a worksheet's declared dimensions (rows × columns) above this are refused before loading

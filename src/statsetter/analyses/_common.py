@@ -185,6 +185,27 @@ def grouped(df: "pd.DataFrame", outcome: str, group: str, test: str, min_n: int 
     return levels, samples, missing
 
 
+def mixed_order(v: Any) -> tuple[int, Any]:
+    """A sort key for values of kinds that do not compare with each other: numbers first, then the rest as text."""
+    return (0, v) if isinstance(v, (int, float)) else (1, str(v))
+
+
+def factorized(s: "pd.Series") -> tuple["np.ndarray", Any]:
+    """Codes of a column's values and the values in sorted order (pandas' factorize); a column of kinds that do not
+    compare (a spreadsheet column of dates and numbers) sorted by ``mixed_order``."""
+    import numpy as np
+    import pandas as pd
+
+    try:
+        return pd.factorize(s, sort=True)
+    except TypeError:
+        codes, found = pd.factorize(s)
+        order = sorted(range(len(found)), key=lambda k: mixed_order(found[k]))
+        rank = np.empty(len(order), dtype=np.intp)
+        rank[order] = np.arange(len(order))
+        return np.where(codes >= 0, rank[codes], -1), [found[k] for k in order]
+
+
 def cross_counts(data: "pd.DataFrame", row: str, column: str) -> "pd.DataFrame":
     """The counts of ``row`` × ``column`` (no missing values) as pandas' crosstab lays them out — a categorical's
     categories in their order, other values sorted, categories without a case left out, a pair of levels without a
@@ -195,7 +216,7 @@ def cross_counts(data: "pd.DataFrame", row: str, column: str) -> "pd.DataFrame":
     def coded(s: "pd.Series") -> tuple["np.ndarray", "pd.Index"]:
         if isinstance(s.dtype, pd.CategoricalDtype):
             return s.cat.codes.to_numpy().astype(np.intp), s.cat.categories
-        codes, uniques = pd.factorize(s, sort=True)
+        codes, uniques = factorized(s)
         return codes, pd.Index(uniques)
 
     (rc, rows), (cc, cols) = coded(data[row]), coded(data[column])

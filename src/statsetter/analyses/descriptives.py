@@ -215,7 +215,7 @@ def _codes(s: "pd.Series", value_labels: Mapping[Any, str] | None) -> tuple["np.
     if value_labels:
         x = s.to_numpy(dtype=float, na_value=np.nan) if pd.api.types.is_numeric_dtype(s) else s.to_numpy(dtype=object)
         present = pd.unique(s.dropna())
-        order = list(value_labels) + sorted((v for v in present if v not in value_labels), key=_sort_key)
+        order = list(value_labels) + sorted((v for v in present if v not in value_labels), key=c.mixed_order)
         codes = pd.Index(order).get_indexer(x)
         return codes.astype(np.intp), [str(value_labels.get(v, _show(v))) for v in order]
     if isinstance(s.dtype, pd.CategoricalDtype):
@@ -231,12 +231,10 @@ def _codes(s: "pd.Series", value_labels: Mapping[Any, str] | None) -> tuple["np.
                 remap = np.full(int(present.max()) + 1, -1, dtype=np.intp)
                 remap[present] = np.arange(present.size)
                 return np.where(ok, remap[offset], -1), [_show(lo + v) for v in present]
-    codes, uniques = pd.factorize(s, sort=True)
+    codes, uniques = c.factorized(s)
     return codes.astype(np.intp), [_show(v) for v in uniques]
 
 
-def _sort_key(v: Any) -> tuple[int, Any]:
-    return (0, v) if isinstance(v, (int, float)) else (1, str(v))
 
 
 def _show(v: Any) -> str:
