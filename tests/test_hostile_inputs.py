@@ -332,6 +332,19 @@ def test_bad_data(box, capsys, text, args, status, message):
         assert not re.search(r"(?<!\\)<script>", (box / "t.md").read_text(encoding="utf-8"))
 
 
+def test_a_stray_entry_in_a_column_of_numbers_is_named_with_its_row(box, capsys):
+    """One mass typed with its unit ("3750g") makes the column text: the message names that entry and its row, not
+    only the column's type; the row is the data file's, though rows before it without a sex are left out of the test (the
+    penguins of Gorman, Williams & Fraser, 2014, as pingouin bundles them; 333 have a mass and a sex)."""
+    penguins = pg.read_dataset("penguins").astype({"body_mass_g": object})
+    penguins.loc[6, "body_mass_g"] = "3750g"
+    penguins.to_csv(box / "d.csv", index=False)
+    code, _, err = _run(["run", "plan.toml"], capsys)
+    assert code == 2 and "body_mass_g: not numeric (dtype str): 1 of its 333 values are not numbers (first '3750g' in row 7)" in err, err
+    code, _, err = _run(["describe", "d.csv", "--level", "body_mass_g=ratio"], capsys)
+    assert code == 2 and "body_mass_g" in err and "Traceback" not in err, err
+
+
 def test_infinite_values_in_a_plan_are_missing_with_a_note(box, capsys):
     frame = pg.read_dataset("penguins")
     frame.loc[[5, 9], "body_mass_g"] = float("inf")

@@ -20,7 +20,7 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
 
     s = column(df, name)
     if not pd.api.types.is_numeric_dtype(s.dtype) or pd.api.types.is_bool_dtype(s.dtype):
-        raise InputError(f"{name}: not numeric (dtype {s.dtype}); a numeric outcome is required")
+        raise InputError(f"{name}: not numeric (dtype {s.dtype}){stray_text(s)}; a numeric variable is required here")
     x = s if s.dtype == np.float64 else s.astype(float)  # missing values (NA of nullable integers too) become NaN
     values = x.to_numpy()
     if np.isnan(values).all():
@@ -31,6 +31,24 @@ def numeric(df: "pd.DataFrame", name: str) -> "pd.Series":
         raise InputError(f"{name}: {int(infinite.sum())} infinite value(s) (first in row {first}); set them missing or correct them")
     refuse_huge(name, values)
     return x
+
+
+def stray_text(s: "pd.Series") -> str:
+    """Where a column of numbers holds a few entries that are not (a typo, a code such as "n/a" in a CSV): the first,
+    with its row, so that a text column read where a number was meant can be corrected; "" for a column of words."""
+    import numpy as np
+    import pandas as pd
+
+    if pd.api.types.is_bool_dtype(s.dtype):
+        return ""
+    present = s.notna()
+    stray = present & pd.to_numeric(s, errors="coerce").isna()
+    if not stray.any() or int(stray.sum()) * 2 > int(present.sum()):  # mostly words: a categorical variable, said as it is
+        return ""
+    first = int(stray.to_numpy().argmax())
+    label = s.index[first]  # the data file's row (a frame read from a file is numbered from 0; rows left out keep their numbers)
+    row = int(label) + 1 if isinstance(label, (int, np.integer)) else label
+    return f": {int(stray.sum())} of its {int(present.sum())} values are not numbers (first {s.iloc[first]!r} in row {row}); correct them or declare them missing"
 
 
 def listwise(df: "pd.DataFrame", names: Sequence[str]) -> tuple["pd.DataFrame", Note]:

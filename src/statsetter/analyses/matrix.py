@@ -47,7 +47,7 @@ def correlation_matrix(
     dtypes = df.dtypes[list(columns)]
     for name, dtype in dtypes.items():
         if not pd.api.types.is_numeric_dtype(dtype) or pd.api.types.is_bool_dtype(dtype):
-            raise InputError(f"{name}: not numeric (dtype {dtype}); correlations need numeric variables")
+            raise InputError(f"{name}: not numeric (dtype {dtype}){c.stray_text(df[name])}; correlations need numeric variables")
     X = df[list(columns)].to_numpy(dtype=float)
     with np.errstate(invalid="ignore"):
         means, sds = np.nanmean(X, axis=0), np.nanstd(X, axis=0, ddof=1)  # of the variables as measured, also for rs
