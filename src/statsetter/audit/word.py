@@ -192,12 +192,15 @@ def _as_read(text: str) -> str:
 
 def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, int]] | None) -> bool:
     """Whether the text's italics (Word's runs; None: the format does not say)
-    differ from the restyled text's at the statistic's symbols."""
+    differ from the restyled text's at the statistic's symbols: its head's, its p's, its effect sizes' and descriptives'
+    (those the italics check reads: a lone "d = 0.45" left plain beside revised, italic statistics would be found on
+    the revised copy and revised again)."""
     if italic is None:
         return False
     symbols = [(rep.symbol_start, rep.symbol_text)] if rep.symbol is not None else []
     if rep.p is not None and rep.p.symbol_text:
         symbols.append((rep.p.symbol_start, rep.p.symbol_text))
+    symbols += [(e.symbol_start, e.symbol_text) for e in rep.effects + rep.descriptives if e.symbol_text]
     styled = {new.text[a:b] for a, b in new.italic_ranges()}
     return any(any(s <= at < e for s, e in italic) != (text in styled) for at, text in symbols)
 
