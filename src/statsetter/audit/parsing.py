@@ -109,6 +109,7 @@ class Reported:
 
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
+@functools.lru_cache(maxsize=1024)  # a manuscript types its symbols a few ways; each head asks twice
 def symbol_of(text: str) -> str | None:
     t = text.replace(" ", "").removesuffix("-statistic")
     low = t.lower()
@@ -697,26 +698,25 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
 
 
 def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
-    symbol = symbol_of(m.group("sym"))
-    value = pat.to_number(m.group("num"), m.start("num"))
+    sym, num, inner, sub, bare, op = m.group("sym", "num", "inner", "sub", "bare", "op")  # (one call: a head is read 10,000 times a book)
+    symbol = symbol_of(sym)
+    value = pat.to_number(num, m.start("num"))
     if symbol is None or value is None:
         return None
     dfs: tuple[Number, ...] = ()
     n = None
-    if m.group("inner") is not None:
-        dfs, n = _inner(pat, m.group("inner"), m.start("inner"))
-    elif m.group("sub") is not None:  # df as subscripts (AMA 11): t₃₈, F₂,₂₃₇; one character each, so positions hold
-        dfs, n = _inner(pat, m.group("sub").translate(_SUBSCRIPT_DIGITS), m.start("sub"))
-    elif m.group("bare") is not None:  # "F1,23 = 4.50": df run on after the F
-        dfs, n = _inner(pat, m.group("bare"), m.start("bare"))
+    if inner is not None:
+        dfs, n = _inner(pat, inner, m.start("inner"))
+    elif sub is not None:  # df as subscripts (AMA 11): t₃₈, F₂,₂₃₇; one character each, so positions hold
+        dfs, n = _inner(pat, sub.translate(_SUBSCRIPT_DIGITS), m.start("sub"))
+    elif bare is not None:  # "F1,23 = 4.50": df run on after the F
+        dfs, n = _inner(pat, bare, m.start("bare"))
     if symbol == "chi2" and len(dfs) == 2 and n is None and dfs[1].value > dfs[0].value:  # χ²(2; 415): df and N
         dfs, n = dfs[:1], dfs[1]
-    inner = m.group("inner")
     if symbol in ("t", "r", "rs") and len(dfs) == 2 and inner and pat.mark == "." and re.fullmatch(r"\s*\d{1,3},\d{3}\s*", inner):
         one = pat.to_number(inner, m.start("inner"))  # t(1,198): one df with a thousands comma, as a t or r has one
         dfs = (one,) if one is not None else dfs
-    op = m.group("op")
-    return Reported(symbol, m.group("sym"), m.start("sym"), m.start(), value.end, dfs, n, "=" if op in (":", "¼") else op, value)
+    return Reported(symbol, sym, m.start("sym"), m.start(), value.end, dfs, n, "=" if op in (":", "¼") else op, value)
 
 
 _OPERATOR = re.compile(r"[=<>≤≥]\s*+")  # the operator first (the engine's fast scan); the space before it is found by hand
@@ -776,12 +776,12 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     if last >= 0 and (text[last] in "dmikrDMIKR" or not text[last].isascii()):  # the last letters of _ADJUSTED_WORDS (a cheap test first)
         before = text[max(0, at - 30) : at].lower()
         adjusted = any(word in before for word in _ADJUSTED_WORDS) and bool(_ADJUSTED.search(text, max(0, at - 30), at))
-    if m.group("op") is None:  # "ns"
+    op, num = m.group("op", "num")
+    if op is None:  # "ns"
         return PValue("ns", None, m.start(), m.end(), m.start(), m.group())
-    number = pat.to_number(m.group("num"), m.start("num"))
+    number = pat.to_number(num, m.start("num"))
     if number is None:
         return None
-    op = m.group("op")
     op = _GARBLED.get(op, op[-1] if len(op) > 1 else op)
     return _new_p(op, number, at, m.end("num"), at, text[at], adjusted)
 
