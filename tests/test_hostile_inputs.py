@@ -477,6 +477,19 @@ def test_a_column_of_one_decimal_value_has_no_variance(call, message):
         result.main if isinstance(result, list) else result
 
 
+def test_a_list_where_one_column_is_asked_is_named_through_the_api():
+    """Through the API, a list given for one column's name is said as such ("unhashable type: 'list'" before; found by
+    calling every analysis with arguments of the wrong kind). The penguins as pingouin bundles them."""
+    from statsetter.analyses import chi_square, t_independent
+    from statsetter.errors import InputError
+
+    penguins = pg.read_dataset("penguins")
+    with pytest.raises(InputError, match=r"\['body_mass_g'\]: one column's name is wanted here, not a list"):
+        t_independent(penguins, ["body_mass_g"], "sex")
+    with pytest.raises(InputError, match="not a dict"):
+        chi_square(penguins, {"island": 1}, "species")
+
+
 def test_three_pairs_give_a_correlation_without_an_interval_and_vanishing_squares_are_named():
     """Three pairs: r (and rs) with no CI, said — the Fisher z SE 1/√(n − 3) had divided by zero (an internal error on
     a pilot's three cases). An outcome whose squares vanish in double precision (values near 1e-200): the two-way

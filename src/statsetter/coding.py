@@ -109,6 +109,8 @@ def find_categories(variable: str, given: Iterable[Any], present: Sequence[Any],
 
 
 def column(df: "pd.DataFrame", name: str) -> "pd.Series":
+    if isinstance(name, (list, tuple, dict, set)):  # (unhashable, or a pair pandas would read as two levels of a header)
+        raise InputError(f"{name!r}: one column's name is wanted here, not a {type(name).__name__}")
     if name not in df.columns:
         names = [str(c) for c in df.columns]
         close = [n for n in names if str(name).lower() in n.lower()][:3] or difflib.get_close_matches(str(name), names, n=3, cutoff=0.5)
