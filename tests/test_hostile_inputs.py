@@ -12,6 +12,7 @@ The data are the Palmer penguins as pingouin bundles them (Gorman, Williams
 from __future__ import annotations
 
 import hashlib
+import json
 import os
 import signal
 import subprocess
@@ -475,6 +476,29 @@ def test_a_column_of_one_decimal_value_has_no_variance(call, message):
     with pytest.raises(InputError, match=message):
         result = call(data)
         result.main if isinstance(result, list) else result
+
+
+def test_titles_and_labels_with_markup_characters_compile_and_stay_text(box, capsys):
+    """A plan's title and labels holding LaTeX's, Markdown's and HTML's own characters, a zero-width space and Greek
+    letters other than the statistics' own: the LaTeX compiles with pdflatex and prints them, the Markdown heading keeps
+    them as text. The title had been escaped for three characters only (a "#", "_" or "~" stopped pdflatex), and a
+    zero-width space or a capital chi stopped it anywhere (found by running the demo plan with random labels)."""
+    import subprocess
+
+    from test_table_goldens import _require_pdflatex
+
+    _require_pdflatex()
+    title = "Mass & size: 100% of #1_a ~b^c {d} $e$ \\f *g* <i>h</i> Χ² ψ"
+    plan = GOOD_PLAN.replace("[data]", f"title = {json.dumps(title, ensure_ascii=False)}\n[data]", 1).replace(
+        'path = "d.csv"', 'path = "d.csv"\nlabels = { body_mass_g = "body\u200bmass (Ω, g)" }', 1) + 'tex = "r.tex"\n'
+    (box / "plan.toml").write_text(plan, encoding="utf-8")
+    assert _run(["run", "plan.toml"], capsys)[0] == 0
+    heading = (box / "out" / "r.md").read_text(encoding="utf-8").splitlines()[0]
+    assert heading == "# Mass & size: 100% of #1\\_a \\~b\\^c {d} $e$ \\\\f \\*g\\* \\<i>h\\</i> Χ² ψ", heading
+    done = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "r.tex"], cwd=box / "out", capture_output=True, timeout=120)
+    assert done.returncode == 0, done.stdout.decode("utf-8", "replace")[-1500:]
+    printed = subprocess.run(["pdftotext", "r.pdf", "-"], cwd=box / "out", capture_output=True, text=True).stdout
+    assert "Mass & size: 100% of #1_a" in printed and "{d} $e$" in printed and "Bodymass (" in printed, printed[:400]  # (a zero-width space prints nothing)
 
 
 def test_a_list_where_one_column_is_asked_is_named_through_the_api():

@@ -426,8 +426,25 @@ _LATEX = {
     "\u00a0": "~",  # the no-break space that keeps a statistic together
     "\u202f": r"\,",  # a thin no-break space
     "\u2009": r"\,",  # a thin space (AMA digit groups)
+    **dict.fromkeys("\u200b\u200c\u200d\u2060\ufeff", ""),  # zero-width characters (pdflatex stops at them; they print nothing)
+    # the other Greek letters a label may hold (pdflatex has none in text): capitals that look Latin as the Latin letter,
+    # the rest as math letters, which need no package
+    **dict(zip("ΑΒΕΖΗΙΚΜΝΟΡΤΥΧο", "ABEZHIKMNOPTYXo")),
+    **{g: f"$\\{name}$" for g, name in zip("ΓΘΛΞΠΣΦΨΩγδζθικλμνξπσςυψϕϑϵ", (
+        "Gamma", "Theta", "Lambda", "Xi", "Pi", "Sigma", "Phi", "Psi", "Omega", "gamma", "delta", "zeta", "theta", "iota",
+        "kappa", "lambda", "mu", "nu", "xi", "pi", "sigma", "varsigma", "upsilon", "psi", "phi", "vartheta", "epsilon"))},
 }
 _LATEX_RE = re.compile("|".join(re.escape(k) + ("(?=-)" if k == "-" else "") for k in _LATEX))
+
+
+def escape_latex(text: str) -> str:
+    """Plain text as LaTeX prints it (the writers' escaping, for a title or caption made outside a StyledText)."""
+    return _escape_latex(text)
+
+
+def escape_md(text: str) -> str:
+    """Plain text as pandoc's Markdown prints it."""
+    return _escape_md(text)
 
 
 def _escape_latex(text: str) -> str:

@@ -10,7 +10,7 @@ from typing import Sequence
 
 from ..records import Record, Result, dump_records
 from ..rendering.compose import Block
-from ..styled import LATEX_PREAMBLE, StyledText
+from ..styled import LATEX_PREAMBLE, StyledText, escape_latex, escape_md
 from ..rendering.figures import FigureModel
 from ..rendering.tables import TableModel
 from ..style.profile import Style
@@ -64,7 +64,7 @@ def section_text(blocks: Sequence[Block], style: Style, title: str, fmt: str, *,
     """The section as Markdown (``md``), HTML (``html``) or LaTeX (``tex``):
     paragraphs and tables in order; the caution line only when asked."""
     if fmt == "md":
-        parts = [f"# {title}", *(_text(b, fmt, style) for b in blocks)] + ([f"*{CAUTION}*"] if caution else [])
+        parts = [f"# {escape_md(title)}", *(_text(b, fmt, style) for b in blocks)] + ([f"*{CAUTION}*"] if caution else [])
         return "\n\n".join(p.rstrip("\n") for p in parts) + "\n"
     if fmt == "html":
         body = [f"<h1>{html.escape(title)}</h1>"] + [_text(b, fmt, style) if isinstance(b, (TableModel, FigureModel)) else f"<p>{b.to('html')}</p>" for b in blocks]
@@ -76,8 +76,7 @@ def section_text(blocks: Sequence[Block], style: Style, title: str, fmt: str, *,
         return (f'<!DOCTYPE html>\n<html lang="en"><head><meta charset="utf-8"><title>{html.escape(title)}</title>'
                 f"<style>{css}</style></head><body>\n" + "\n".join(body) + "\n</body></html>\n")
     if fmt == "tex":
-        title_tex = title.replace("\\", "\\textbackslash{}").replace("&", "\\&").replace("%", "\\%")
-        parts = [f"\\section*{{{title_tex}}}", *(_text(b, fmt, style) for b in blocks)] + ([f"\\emph{{{CAUTION}}}"] if caution else [])
+        parts = [f"\\section*{{{escape_latex(title)}}}", *(_text(b, fmt, style) for b in blocks)] + ([f"\\emph{{{CAUTION}}}"] if caution else [])
         return _latex_head(style, paper) + "\n\n".join(parts) + "\n\\end{document}\n"
     raise ValueError(f"unknown section format {fmt!r}")
 
