@@ -494,7 +494,7 @@ def test_titles_and_labels_with_markup_characters_compile_and_stay_text(box, cap
     (box / "plan.toml").write_text(plan, encoding="utf-8")
     assert _run(["run", "plan.toml"], capsys)[0] == 0
     heading = (box / "out" / "r.md").read_text(encoding="utf-8").splitlines()[0]
-    assert heading == "# Mass & size: 100% of #1\\_a \\~b\\^c {d} $e$ \\\\f \\*g\\* \\<i>h\\</i> Χ² ψ", heading
+    assert heading == "# Mass & size: 100% of #1\\_a \\~b\\^c {d} \\$e\\$ \\\\f \\*g\\* \\<i>h\\</i> Χ² ψ", heading  # ($e$: pandoc's TeX math)
     done = subprocess.run(["pdflatex", "-interaction=nonstopmode", "-halt-on-error", "r.tex"], cwd=box / "out", capture_output=True, timeout=120)
     assert done.returncode == 0, done.stdout.decode("utf-8", "replace")[-1500:]
     printed = subprocess.run(["pdftotext", "r.pdf", "-"], cwd=box / "out", capture_output=True, text=True).stdout

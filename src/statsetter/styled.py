@@ -366,11 +366,12 @@ def _unicode_script(text: str, table: dict[str, str], marker: str) -> str:
     return f"{marker}{text}"
 
 
-# pandoc's backslash escapes: emphasis, super/subscripts, code, raw HTML (<), links ([ ]), entities (&), table cells (|)
+# pandoc's backslash escapes: emphasis, super/subscripts, code, raw HTML (<), links ([ ]), entities (&), table cells (|),
+# TeX math ($: "Income ($) … savings ($)" would be read as math between the two)
 # ("<" only where a tag could start, "&" where an entity could, "[" "]" where a link, note or span could:
 # "p < .001" and "95% CI [.84, .89]" stay as they are)
-_MD_SPECIAL = re.compile(r"([\\*_^~`|]|<(?=[A-Za-z/!?])|&(?=[A-Za-z#])|\[(?=[\^@])|\](?=[(\[{]))")
-_MD_TRIGGERS = frozenset("\\*_^~`<[]&|")
+_MD_SPECIAL = re.compile(r"([\\*_^~`|$]|<(?=[A-Za-z/!?])|&(?=[A-Za-z#])|\[(?=[\^@])|\](?=[(\[{]))")
+_MD_TRIGGERS = frozenset("\\*_^~`<[]&|$")
 
 
 def _escape_md(text: str) -> str:
