@@ -168,6 +168,16 @@ def test_png_size_dpi_and_the_three_files(tmp_path):
     assert draw(model, APA, "svg") == draw(model, APA, "svg")  # deterministic: no dates, fixed ids
 
 
+def test_an_interaction_figure_of_a_factor_labelled_with_markup_characters():
+    """A factor's label holding "<" or "&" (a band such as "age < 40 & retired") stays text in the figure's note: it had
+    been parsed as markup and stopped the run (found by running the demo plan with random labels). Penguins data."""
+    d = pg.read_dataset("penguins")
+    terms = factorial_anova(d, "body_mass_g", ("species", "sex"), labels={"species": "Species (<3 kg & more)"})
+    model = figure(terms, "interaction", APA)
+    assert "a line for each level of species (<3 kg & more);" in model.note.plain()
+    assert b"&lt;3 kg &amp; more" in draw(model, APA, "svg")
+
+
 @pytest.mark.parametrize("kind", ["means", "interaction", "forest", "scatter"])
 def test_one_figure_saved_three_ways_is_each_format_drawn_afresh(tmp_path, kind):
     """write_figure builds and lays out a figure once and saves it as PNG, SVG and PDF: each file has the bytes of

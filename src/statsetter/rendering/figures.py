@@ -23,7 +23,7 @@ from typing import TYPE_CHECKING, Any, Sequence
 
 from ..errors import InputError
 from ..records import Result, table_label
-from ..styled import StyledText
+from ..styled import StyledText, escape_markup
 
 if TYPE_CHECKING:
     import pandas as pd
@@ -190,7 +190,7 @@ def interaction_figure(records: Sequence[Result], style: "Style", level: float =
     first = table_label(factors[0].heading) if factors else "First factor"
     second = table_label(factors[1].heading) if len(factors) > 1 else "Second factor"
     within = cells.details.get("epsilon") is not None or cells.kind == "anova_rm"
-    note = (f"Points show cell means, a line for each level of {_lower(first)}; "
+    note = (f"Points show cell means, a line for each level of {escape_markup(_lower(first))}; "  # (the note is markup; the label text)
             f"error bars show {level * 100:g}% confidence intervals of each cell mean.")
     if within:
         note += " Measurements of the same people are joined; the intervals do not show the precision of within-person differences."
