@@ -272,6 +272,10 @@ BAD_PLANS = [
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\npercent_of = "rows"\n', "percent_of must be one of 'valid', 'all', not 'rows'"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = "descriptives"\ntitle = 3\n', "tables[0].title): title must be text in quotes, not 3"),
     ('style = "fatigue"\n[data]\npath = "d.csv"\n', "plan.toml, line 1: fatigue: style: no built-in style 'fatigue'"),  # (the plan's line had been left out)
+    # a figure's note is markup (as the API's is): a bare "<" is named with its key and line (an internal error before;
+    # found by running the demo plan with random labels)
+    ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n[[figures]]\nkind = "means"\nanalysis = "a"\n'
+     'note = "Penguins < 3 kg left out."\n', "figures[0].note): bare '<' at position 9; write &lt;"),
     ('[data]\npath = "d.csv"\n[[tables]]\nkind = ["results"]\n', "tables[0].kind): ['results'] is not one of"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = ["a"]\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n', "analyses[0].id): id must be text in quotes, not ['a']"),
     ('[data]\npath = "d.csv"\n[[analyses]]\nid = "a"\nkind = "t_independent"\noutcome = "body_mass_g"\ngroup = "sex"\n[[figures]]\nkind = "means"\nanalysis = { id = "a" }\n',

@@ -342,6 +342,13 @@ def load_plan(path: "str | Path") -> Plan:
         for key in ("kind", "analysis", "table", "variable", "title", "note", "id"):
             if key in fig and not isinstance(fig[key], str):
                 raise plan.fail(f"{where}.{key}", f"{key} must be text in quotes, not {fig[key]!r}"[:300])
+        if "note" in fig:  # markup, as the figure's own note is (<i>n</i>): a bare "<" is refused here, with its key and line
+            from .styled import StyledText
+
+            try:
+                StyledText.from_markup(fig["note"])
+            except ValueError as exc:
+                raise plan.fail(f"{where}.note", f"{exc} (a figure's note is markup: <i>…</i> sets italics)") from None
         if fig.get("kind") not in FIGURE_KINDS:
             raise plan.fail(f"{where}.kind", f"{fig.get('kind')!r} is not one of {', '.join(FIGURE_KINDS)}")
         if fig.get("kind") == "categories":
