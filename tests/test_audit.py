@@ -498,6 +498,29 @@ def test_tex_math_is_read_as_it_prints(tmp_path, capsys):
     assert all("p-does-not-follow" not in row["codes"] and row["recomputed"] for found, row in rows.items() if found.startswith(("t", "F")))
 
 
+def test_numbers_set_with_siunitx_or_numprint_and_math_in_latex_parentheses(tmp_path, capsys):
+    """LaTeX authors set numbers with siunitx's \\num{…} (with options: \\num[round-precision=2]{…}; siunitx's manual)
+    or numprint's \\numprint{…} and \\np{…} (its README on CTAN), and write inline math as \\( … \\) as often as $ … $
+    (practice): a statistic so typed had not been found at all, and one in \\( … \\) had been found with the
+    delimiters inside its text. Values: osf-vibrm's t(97) = 2.03, p = .05 and t(97) = -2.31, p = .02 (tests/real_typings.py),
+    and one p retyped (.02 as .20), which must be flagged."""
+    from statsetter.audit.reading import _text_units
+
+    block = ("than in the smile condition, $t(97) = \\num{2.03}$, $p = \\num[round-precision=2]{.05}$, and\n"
+             "in the other, \\(t(97) = \\numprint{-2.31}\\), \\(p = \\np{.02}\\); retyped, \\(t(97) = -2.31\\), \\(p = .20\\).")
+    assert next(_text_units(block, ".tex")).text == ("than in the smile condition, t(97) = 2.03, p = .05, and\n"
+                                                     "in the other, t(97) = -2.31, p = .02; retyped, t(97) = -2.31, p = .20.")
+    path = tmp_path / "siunitx.tex"
+    path.write_text(block + "\n", encoding="utf-8")
+    capsys.readouterr()
+    main(["audit", str(path), "--json"])
+    rows = sorted(json.loads(capsys.readouterr().out), key=lambda r: (r["location"].split(",")[0], int(r["location"].split()[3].split("–")[0])))
+    assert [r["found"] for r in rows] == ["t(97) = 2.03, p = .05", "t(97) = -2.31, p = .02", "t(97) = -2.31, p = .20"]
+    assert ["p-does-not-follow" in r["codes"] for r in rows] == [False, False, True]  # 2.03 gives .045, 2.31 gives .023 (scipy)
+    assert 2 * stats.t.sf(2.03, 97) == pytest.approx(.045, abs=.0005) and 2 * stats.t.sf(2.31, 97) == pytest.approx(.023, abs=.0005)
+    assert [r["location"].split(",")[0] for r in rows] == ["line 1", "line 2", "line 2"]
+
+
 def test_inline_html_in_markdown_is_read_as_it_prints(tmp_path, capsys):
     """Markdown converted from a PDF or Word keeps HTML tags: "χ<sup>2</sup> (5, N = 5473) = 65.149, p b 0.001" (McLeod
     & Dolezel, 2018, Decision Support Systems, https://doi.org/10.1016/j.dss.2018.02.007, its PDF converted to Markdown

@@ -95,7 +95,8 @@ _TEX_COMMENT = re.compile(r"(?m:^([ \t]*))?(?<!\\)%[^\n]*")  # from an unescaped
 
 # *t*, _t_, and inline HTML's <i>t</i> and <em>t</em> (Markdown converted from Word or a PDF often carries HTML tags)
 _MD_ITALIC = re.compile(r"(?<![*A-Za-z0-9])([*_])(?!\s)([^*_\n]{1,40}?)(?<!\s)\1(?![*A-Za-z0-9])|<(i|em)>([^<>\n]{1,40})</\3>")
-_TEX_ITALIC = re.compile(r"\\textit\{([^{}]{1,40})\}|\\emph\{([^{}]{1,40})\}|\$([^$\n]{1,40})\$")
+# (inline math as $…$ or LaTeX's own \(…\))
+_TEX_ITALIC = re.compile(r"\\textit\{([^{}]{1,40})\}|\\emph\{([^{}]{1,40})\}|\$([^$\n]{1,40})\$|\\\(([^\n]{1,40}?)\\\)")
 
 
 _SUPERSCRIPT = str.maketrans("0123456789+-−", "⁰¹²³⁴⁵⁶⁷⁸⁹⁺⁻⁻")
@@ -166,7 +167,11 @@ def _replace(pattern: re.Pattern[str], text: str, inner: "Callable[[str], str]")
     return out.text(), out.trace()
 
 
-_TEX_WRAPPED = re.compile(r"\\(?:mathit|mathrm|mathsf|mathnormal|textit|textrm|text|operatorname)\s*\{([^{}]*)\}")
+# (siunitx's \num{2.14} and \num[round-precision=2]{2.14}, numprint's \numprint{2.14} and \np{2.14} print the number:
+# "$t(38) = \num{2.14}$"; siunitx's manual, numprint's README on CTAN)
+_TEX_NUMBER = r"(?:num|numprint|np)(?:\[[^\]]{0,80}\])?"
+_TEX_WRAPPED = re.compile(rf"\\(?:mathit|mathrm|mathsf|mathnormal|textit|textrm|text|operatorname|{_TEX_NUMBER})\s*\{{([^{{}}]*)\}}")
+_TEX_NUM = re.compile(rf"\\{_TEX_NUMBER}\{{([^{{}}]{{1,40}})\}}")  # the same outside math
 _TEX_SCRIPT = re.compile(r"([_^])(?:\{([^{}]{1,24})\}|([0-9A-Za-z]))")
 _DF_DIGITS = re.compile(r"[\d.,;\s]+")
 
@@ -198,12 +203,12 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         text, escapes = _replace(_MD_ESCAPE, text, lambda g: _MD_HELD.get(g, g))
     out, spans, at = _Builder(), [], 0
     for m in (_TEX_ITALIC if tex else _MD_ITALIC).finditer(text):
-        group = next(g for g in range(1, 4) if m.group(g) is not None) if tex else 2 if m.group(2) is not None else 4
+        group = next(g for g in range(1, 5) if m.group(g) is not None) if tex else 2 if m.group(2) is not None else 4
         inner = m.group(group)
         greek = False
         if tex:
             inner = _tex_math(inner)
-            greek = group == 3 and inner[:1] in "αβχηωετρφΔ"  # $\upchi$, $\chi^2$: math Greek, not italic
+            greek = group >= 3 and inner[:1] in "αβχηωετρφΔ"  # $\upchi$, $\chi^2$: math Greek, not italic
         out.add(text[at : m.start()], at)
         if not greek:
             spans.append((out.length, out.length + len(inner)))
@@ -219,8 +224,9 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     if tex:  # \textminus{}, \%, \textless{} … as the characters they print; a decimal-aligned cell's
         # \rlap{.14}\phantom{.001} (statsetter's tables) as the digits it prints once
         clean, boxes = _replace(_TEX_BOX, clean, lambda g: g)
+        clean, numbers = _replace(_TEX_NUM, clean, lambda g: g)
         clean, chars = _replace(_TEX_CHAR, clean, lambda g: _TEX_CHARS[g])
-        traces += [boxes, chars]
+        traces += [boxes, numbers, chars]
     if escapes is not None:
         clean = clean.translate(_MD_LET_GO)
     return clean, tuple(spans), tuple(t for t in traces if t is not None)
