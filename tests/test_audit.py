@@ -503,7 +503,7 @@ def test_numbers_set_with_siunitx_or_numprint_and_math_in_latex_parentheses(tmp_
     or numprint's \\numprint{…} and \\np{…} (its README on CTAN), and write inline math as \\( … \\) as often as $ … $
     (practice): a statistic so typed had not been found at all, and one in \\( … \\) had been found with the
     delimiters inside its text. Values: osf-vibrm's t(97) = 2.03, p = .05 and t(97) = -2.31, p = .02 (tests/real_typings.py),
-    and one p retyped (.02 as .20), which must be flagged."""
+    and one p retyped (.02 as .20), which must be flagged; the same in a table of siunitx's S columns."""
     from statsetter.audit.reading import _text_units
 
     block = ("than in the smile condition, $t(97) = \\num{2.03}$, $p = \\num[round-precision=2]{.05}$, and\n"
@@ -519,6 +519,14 @@ def test_numbers_set_with_siunitx_or_numprint_and_math_in_latex_parentheses(tmp_
     assert ["p-does-not-follow" in r["codes"] for r in rows] == [False, False, True]  # 2.03 gives .045, 2.31 gives .023 (scipy)
     assert 2 * stats.t.sf(2.03, 97) == pytest.approx(.045, abs=.0005) and 2 * stats.t.sf(2.31, 97) == pytest.approx(.023, abs=.0005)
     assert [r["location"].split(",")[0] for r in rows] == ["line 1", "line 2", "line 2"]
+    # siunitx's S columns take their headers' text in a group ({$t$}): such a table had not been read
+    table = ("\\begin{tabular}{lSSS}\n\\toprule\n{Rating} & {$t$} & {$df$} & {$p$} \\\\\n\\midrule\n"
+             "Smile & 2.03 & 97 & .05 \\\\\nPout & -2.31 & 97 & .20 \\\\\n\\bottomrule\n\\end{tabular}\n")
+    (tmp_path / "s.tex").write_text(table, encoding="utf-8")
+    main(["audit", str(tmp_path / "s.tex"), "--json"])
+    rows = {r["found"]: r for r in json.loads(capsys.readouterr().out)}
+    assert set(rows) == {"t(97) = 2.03, p = .05", "t(97) = -2.31, p = .20"}, rows
+    assert "p-does-not-follow" in rows["t(97) = -2.31, p = .20"]["codes"] and not rows["t(97) = 2.03, p = .05"]["codes"]
 
 
 def test_inline_html_in_markdown_is_read_as_it_prints(tmp_path, capsys):

@@ -369,7 +369,11 @@ def _tex_table_units(block: str, line: int, table: int) -> Iterator[Unit]:
                     rule = _TEX_RULES.match(block, a, b)
                 raw = block[a:b]
                 a += len(raw) - len(raw.lstrip(_BLANK))
-                texts.append((a, raw.strip(_BLANK)))
+                raw = raw.strip(_BLANK)
+                if raw.startswith("{") and _skip_group(raw, 0) == len(raw):  # a cell in one group (siunitx's S column's text: {$t$})
+                    a += 1 + len(raw[1:-1]) - len(raw[1:-1].lstrip(_BLANK))
+                    raw = raw[1:-1].strip(_BLANK)
+                texts.append((a, raw))
             if not any(t for _, t in texts):
                 continue
             r += 1
