@@ -52,8 +52,9 @@ def ancova(
     if not covariates:
         raise InputError("covariates: an ANCOVA needs at least one (without: anova_oneway or factorial_anova)")
     data, missing = c.listwise(df, [outcome, *factors, *covariates])
-    if c.constant(c.numeric(data, outcome)):
-        raise InputError(f"{outcome}: zero variance (every value is {c.numeric(data, outcome).iloc[0]:g}); F is undefined")
+    measured = c.numeric(data, outcome)
+    if c.constant(measured):
+        raise InputError(f"{outcome}: zero variance (every value is {measured.iloc[0]:g}); F is undefined")
     for cov in covariates:
         c.numeric(data, cov)
     levels_of = [sorted(data[f].unique(), key=lambda v: (str(type(v)), v)) for f in factors]

@@ -235,8 +235,6 @@ def _codes(s: "pd.Series", value_labels: Mapping[Any, str] | None) -> tuple["np.
     return codes.astype(np.intp), [_show(v) for v in uniques]
 
 
-
-
 def _show(v: Any) -> str:
     return f"{v:g}" if isinstance(v, float) else str(v)
 

@@ -28,6 +28,7 @@ EXACT_BELOW = 25  # discordant pairs: below this the exact binomial test (practi
 # subtraction that makes it loses about 1e-16 of the total): F would be a quotient of rounding errors
 _NO_ERROR = 1e-12
 
+
 def _binary(data: "pd.DataFrame", columns: Sequence[str], test: str) -> tuple[list[object], "list"]:  # type: ignore[type-arg]
     """The two values the columns take (sorted, the same two for every column) and each column as 0/1."""
     values = sorted({v for col in columns for v in data[col].unique()}, key=lambda v: (str(type(v)), v))

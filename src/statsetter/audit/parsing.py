@@ -109,7 +109,6 @@ class Reported:
 
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
-@functools.lru_cache(maxsize=1024)  # a manuscript types its symbols a few ways; each head asks twice
 def symbol_of(text: str) -> str | None:
     t = text.replace(" ", "").removesuffix("-statistic")
     low = t.lower()
