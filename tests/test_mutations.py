@@ -1,0 +1,159 @@
+"""Inputs damaged at random, as a campaign of the twenty-third session did over every command (12,000 runs, which
+found the internal errors and silent wrong results tests/test_hostile_inputs.py now holds one by one): a small,
+seeded share of it runs here, so that a new kind of failure of the same shapes shows.
+
+Each case asserts the README's exit contract (0 to 3, never 4: an internal error), no traceback, and every input
+byte-identical afterwards. The data are the Palmer penguins as pingouin bundles them (Gorman, Williams & Fraser, 2014);
+the damage is made here.
+"""
+
+from __future__ import annotations
+
+import hashlib
+import json
+import random
+import zipfile
+from pathlib import Path
+
+import pingouin as pg
+import pytest
+
+from statsetter.cli import main
+
+_COLUMNS = ["species", "island", "bill_length_mm", "bill_depth_mm", "flipper_length_mm", "body_mass_g", "sex"]  # (pingouin's columns)
+_PLAN = {
+    "analyses": [
+        {"id": "mass_sex", "kind": "t_independent", "outcome": "body_mass_g", "group": "sex"},
+        {"id": "flipper_species", "kind": "anova_oneway", "outcome": "flipper_length_mm", "group": "species", "variant": "welch"},
+        {"id": "pairs", "kind": "posthoc", "outcome": "flipper_length_mm", "group": "species"},
+        {"id": "island_species", "kind": "chi_square", "row": "island", "column": "species"},
+        {"id": "bill", "kind": "pearson", "x": "bill_length_mm", "y": "bill_depth_mm"},
+        {"id": "mass_model", "kind": "linear_regression", "outcome": "body_mass_g", "predictors": ["flipper_length_mm", "sex"]},
+        {"id": "two_way", "kind": "factorial_anova", "outcome": "body_mass_g", "factors": ["species", "sex"]},
+        {"id": "ranks", "kind": "kruskal_wallis", "outcome": "bill_depth_mm", "group": "island"},
+    ],
+    "tables": [{"kind": "descriptives", "group": "species", "compare": True}, {"kind": "results", "analyses": ["mass_sex", "bill"]}],
+}
+_WILD = ["nope", "", 0, -1, 2.5, [], ["sex"], ["sex", "species"], True, {"a": 1}, "species", "body_mass_g", 1e308]
+_CELLS = ["", "NA", "-99", "1e400", "inf", "abc", " 3 ", "3,5", "0", "3750g", "5.1"]
+
+
+def _toml(value: object) -> str:
+    if isinstance(value, dict):
+        return "{ " + ", ".join(f"{json.dumps(k)} = {_toml(v)}" for k, v in value.items()) + " }"
+    if isinstance(value, list):
+        return "[" + ", ".join(_toml(v) for v in value) + "]"
+    return json.dumps(value) if not isinstance(value, bool) else str(value).lower()
+
+
+def _plan_text(plan: dict) -> str:
+    lines = ['[data]', 'path = "d.csv"']
+    for section in ("analyses", "tables"):
+        for entry in plan[section]:
+            lines.append(f"[[{section}]]")
+            lines += [f"{json.dumps(k)} = {_toml(v)}" for k, v in entry.items()]
+    return "\n".join(lines + ["[outputs]", 'folder = "out"', 'md = "r.md"', 'docx = "r.docx"', 'tex = "r.tex"', 'json = "r.json"']) + "\n"
+
+
+_CODES: list[int] = []  # every exit status seen, for the last test's check that the damage left some runs whole
+
+
+def _snapshot(folder: Path) -> dict[str, str]:
+    return {str(p.relative_to(folder)): hashlib.sha256(p.read_bytes()).hexdigest() for p in folder.rglob("*") if p.is_file()}
+
+
+def _contract(args: list[str], folder: Path, capsys) -> int:
+    before = _snapshot(folder)
+    code = main(args)
+    out, err = capsys.readouterr()
+    _CODES.append(code)
+    assert code in (0, 1, 2, 3), err
+    assert "Traceback" not in out + err and "internal error" not in err, err
+    after = _snapshot(folder)
+    assert {k: after.get(k) for k in before} == before  # every input as it was (outputs may be new)
+    return code
+
+
+@pytest.mark.parametrize("seed", range(24))
+def test_a_plan_and_its_data_damaged_at_random(tmp_path, monkeypatch, capsys, seed):
+    """Keys removed or given values of the wrong kind, columns named that are not there, data cells replaced by codes,
+    text or numbers beyond a double, a column made constant or emptied, the data cut to a few rows."""
+    rng = random.Random(seed)
+    monkeypatch.chdir(tmp_path)
+    plan = json.loads(json.dumps(_PLAN))
+    plan["analyses"] = rng.sample(plan["analyses"], rng.randint(1, 4))
+    ids = {a["id"] for a in plan["analyses"]}
+    plan["tables"] = [t for t in plan["tables"] if all(r in ids for r in t.get("analyses", []))]
+    for _ in range(rng.choice([0, 0, 0, 1, 2])):
+        entry = rng.choice(plan["analyses"] + plan["tables"])
+        key = rng.choice([k for k in entry if k not in ("id", "kind")] or ["extra"])
+        if rng.random() < 0.3:
+            entry.pop(key, None)
+        else:
+            entry[key] = rng.choice(_COLUMNS) if rng.random() < 0.6 else rng.choice(_WILD)
+    data = pg.read_dataset("penguins").astype(object)
+    damage = rng.choice(["cells", "rows", "constant", "empty", "none", "none", "none", "none"])
+    column = rng.choice(_COLUMNS)
+    if damage == "cells":
+        for _ in range(rng.randint(1, 40)):
+            data.iat[rng.randrange(len(data)), rng.randrange(data.shape[1])] = rng.choice(_CELLS)
+    elif damage == "rows":
+        data = data.head(rng.randint(1, 6))
+    elif damage == "constant":
+        data[column] = 5.1
+    elif damage == "empty":
+        data[column] = None
+    data.to_csv(tmp_path / "d.csv", index=False)
+    (tmp_path / "plan.toml").write_text(_plan_text(plan), encoding="utf-8")
+    _contract(["run", "plan.toml"], tmp_path, capsys)
+
+
+def _manuscript(path: Path, rng: random.Random) -> None:
+    import docx
+
+    pieces = ["t(38) = 2.14, p = .039", "F(2, 97) = 4.51, p = .013, η²p = .09", "χ²(1, N = 80) = 3.90, p = .048", "r(48) = −.31, p = .03",
+              "OR = 1.70, 95% CI [1.10, 2.60]", "M = 3.2, SD = 1.1", "p < .001", "z = 1.96", "U = 45, p = .20"]
+    document = docx.Document()
+    for _ in range(rng.randint(2, 12)):
+        paragraph = document.add_paragraph()
+        for piece in rng.sample(pieces, rng.randint(1, 4)):
+            paragraph.add_run(piece + "; ").italic = rng.random() < 0.3
+    document.save(str(path))
+
+
+@pytest.mark.parametrize("seed", range(24))
+def test_a_word_manuscript_damaged_at_random(tmp_path, monkeypatch, capsys, seed):
+    """Bytes of the archive overwritten, or the document's XML cut or given stray markup inside a sound archive (and a
+    third left sound); audited, annotated and revised: refused by name or read, never an internal error, the manuscript
+    untouched."""
+    rng = random.Random(seed)
+    monkeypatch.chdir(tmp_path)
+    _manuscript(tmp_path / "m.docx", rng)
+    if seed % 3 == 0:
+        pass  # (sound: read, annotated and revised in full)
+    elif seed % 3 == 1:
+        data = bytearray((tmp_path / "m.docx").read_bytes())
+        for _ in range(rng.randint(1, 20)):
+            data[rng.randrange(len(data))] = rng.randrange(256)
+        (tmp_path / "m.docx").write_bytes(bytes(data))
+    else:
+        with zipfile.ZipFile(tmp_path / "m.docx") as z:
+            parts = {n: z.read(n) for n in z.namelist()}
+        xml = parts["word/document.xml"]
+        at = rng.randrange(len(xml))
+        parts["word/document.xml"] = xml[:at] + rng.choice([b"<", b"&", b"", b"<w:p>", b"\xff", b"]]>"]) + xml[at + rng.randint(0, 40):]
+        with zipfile.ZipFile(tmp_path / "m.docx", "w") as z:
+            for name, blob in parts.items():
+                z.writestr(name, blob)
+    for extra in ([], ["--json"], ["--annotate", "a.docx"], ["--revise", "v.docx"]):
+        code = _contract(["audit", "m.docx", *extra], tmp_path, capsys)
+        if code == 2:  # refused: the file cannot be read, whatever is asked of it
+            break
+
+
+def test_the_damage_leaves_some_runs_whole():
+    """Not every case is refused at its first line: some plans run and some manuscripts are read in full (else the cases
+    above would test the refusals only). Runs after the cases above (pytest keeps a file's order)."""
+    if len(_CODES) < 40:
+        pytest.skip("run with the cases above")
+    assert _CODES.count(2) < len(_CODES) * 0.8 and any(code in (0, 1) for code in _CODES)
