@@ -73,6 +73,22 @@ def test_render_files(tmp_path, capsys):
     assert "*r*(98) = .32" in text and "χ^2^(2, *N* = 200) = 9.87" in text
 
 
+def test_out_s_extension_picks_the_format_unless_to_says_otherwise(tmp_path, capsys):
+    """--out x.tex without --to writes LaTeX (plain text had been written under the .tex name, and pdflatex stopped at
+    its box-drawing rules); a --to that the extension contradicts is refused, naming both (found by rendering records
+    with random text to every format)."""
+    a = tmp_path / "a.json"
+    a.write_text(dump_records([EXAMPLES["pearson"]]))
+    for ext, mark in ((".tex", "\\textit{r}"), (".md", "*r*"), (".html", "<i>r</i>"), (".txt", "r(98)")):
+        assert main(["render", str(a), "--out", str(tmp_path / f"o{ext}")]) == 0
+        assert mark in (tmp_path / f"o{ext}").read_text(encoding="utf-8"), ext
+    assert main(["format", "t", "--stat", "2.14", "--df", "38", "--out", str(tmp_path / "f.md")]) == 0
+    assert (tmp_path / "f.md").read_text(encoding="utf-8").startswith("*t*(38)")
+    capsys.readouterr()
+    assert main(["render", str(a), "--to", "md", "--out", str(tmp_path / "clash.tex")]) == 2
+    assert "--to md: --out" in capsys.readouterr().err and not (tmp_path / "clash.tex").exists()
+
+
 def test_render_tables_from_records(tmp_path, capsys):
     # a co-author's records as one table: a results table (the p under a p head, without the symbol,
     # as a column head names its quantity: practice) and a regression's coefficients table, in text and Word

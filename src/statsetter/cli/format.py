@@ -6,7 +6,7 @@ import argparse
 import sys
 
 from ..errors import InputError
-from .shared import emit, p_mismatches, style_options, word
+from .shared import emit, output_format, p_mismatches, style_options, word
 
 # short names for ``statsetter format``; values are (kind, statistic symbol, details)
 _FORMAT_KINDS: dict[str, tuple[str, str | None, dict[str, str]]] = {
@@ -157,6 +157,7 @@ def run(ns: argparse.Namespace) -> int:
     from ..rendering.sentences import render
 
     record = _format_record(ns)
+    ns.to = output_format(ns.to, ns.out)
     if ns.out and ns.out.lower().endswith(".docx"):
         return word([record], ns.style, ns.form, ns.out)
     emit(render(record, ns.form, ns.style).to(ns.to), ns.out)

@@ -8,7 +8,7 @@ import argparse
 import sys
 
 from ..errors import InputError
-from .shared import emit, p_mismatches, read_records, style_options, word, word_table
+from .shared import emit, output_format, p_mismatches, read_records, style_options, word, word_table
 
 
 def add(sub) -> None:  # type: ignore[no-untyped-def]
@@ -50,6 +50,7 @@ def run(ns: argparse.Namespace) -> int:
     from ..style import load_style
 
     style = load_style(ns.style)
+    ns.to = output_format(ns.to, ns.out)
     records = select(read_records(ns.files), ns.ids)
     for where, why in p_mismatches(records):
         print(f"statsetter render: warning: {where}: {why}", file=sys.stderr)

@@ -16,9 +16,23 @@ _OWN_P = {"t": 1, "z": 0, "F": 2, "chi2": 1, "r": 1, "rs": 1}  # statistics whos
 
 def style_options(p: argparse.ArgumentParser) -> None:
     p.add_argument("--style", default=None, help="a built-in style name (see 'statsetter styles') or a TOML file")
-    p.add_argument("--to", choices=OUTPUT_FORMATS, default="text", help="output format (default: text)")
+    p.add_argument("--to", choices=OUTPUT_FORMATS, default=None, help="output format (default: --out's extension, .md .html .tex .txt; else text)")
     p.add_argument("--form", choices=("stats", "sentence"), default="stats", help="statistics string or full sentence")
     p.add_argument("--out", metavar="FILE", help="write to FILE instead of standard output")
+
+
+_TEXT_FORMATS = {".md": "md", ".html": "html", ".htm": "html", ".tex": "tex", ".txt": "text"}
+
+
+def output_format(to: str | None, out: str | None) -> str:
+    """The format to write: --to, else the one --out's extension names, else text. A --to that another extension
+    contradicts is refused (LaTeX written as plain text into a .tex file had been the silent result)."""
+    import os
+
+    named = _TEXT_FORMATS.get(os.path.splitext(out)[1].lower()) if out else None
+    if to is not None and named is not None and to != named:
+        raise InputError(f"--to {to}: --out {out} names a {named} file; give --to {named}, or another file name")
+    return to or named or "text"
 
 
 def emit(text: str, out: str | None, inputs: Sequence[str] = ()) -> None:
