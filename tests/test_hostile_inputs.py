@@ -743,6 +743,7 @@ def test_a_full_disk_is_an_environment_failure(box, capsys, monkeypatch):
     before = _snapshot(box)
     code, _, err = _run(["run", "plan.toml"], capsys)
     assert code == 3 and "No space left on device" in err and "Traceback" not in err
+    assert "(out/r." in err, err  # the file that could not be written (the write itself names none)
     monkeypatch.undo()
     assert _snapshot(box) == before and not list((box / "out").glob("*"))
 

@@ -247,9 +247,11 @@ def write_atomic(path: "str | Path", data: "str | bytes", *, inputs: Iterable["s
                 _LIVE.discard(tmp)
             finally:
                 _unblock_signals(blocked)
-    except BaseException:
+    except BaseException as exc:
         with contextlib.suppress(OSError):
             os.unlink(tmp)
         _LIVE.discard(tmp)
+        if isinstance(exc, OSError) and exc.filename is None and exc.errno is not None:  # a full disk's write names no file: the target
+            raise OSError(exc.errno, exc.strerror, str(target)) from None
         raise
     return target
