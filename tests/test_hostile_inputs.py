@@ -876,6 +876,19 @@ def test_the_audit_checks_p_values_without_scipy(box, capsys, without_module):
     assert code == 1 and "p-does-not-follow" in out and "Traceback" not in err
 
 
+@pytest.mark.parametrize("asked", [[], ["--encoding", "utf-16"]])
+def test_a_utf16_text_export_is_read(box, capsys, asked):
+    """A spreadsheet's "Unicode text" export is UTF-16 with a byte-order mark, tab-delimited, with CRLF line ends
+    (practice): its zero bytes had been taken for a binary file's and refused, even with --encoding utf-16 (found by
+    writing the penguins data as other programs write delimited text). The encoding is said, as the delimiter is."""
+    penguins = pg.read_dataset("penguins")
+    (box / "u.txt").write_bytes(penguins.to_csv(sep="\t", index=False, lineterminator="\r\n").encode("utf-16"))
+    code, out, err = _run(["describe", "u.txt", "--group", "species", "--vars", "body_mass_g,sex", *asked], capsys)
+    assert code == 0 and "Traceback" not in err, err
+    assert ("encoding: UTF-16 (the file's byte-order mark)" in err) == (not asked) and "delimiter: tab" in err
+    assert "Adelie (n = 152)" in out and "body_mass_g, M (SD)      3,700.66 (458.57)" in out, out  # (pingouin's counts and means)
+
+
 def test_a_spreadsheet_with_a_number_for_a_header_and_dates_among_numbers(box, capsys):
     """A header cell holding a number (a year) names its column as text, and a column where the spreadsheet turned some
     entries into dates is described as categories, numbers first, and said (internal errors before: "keywords must be strings" and

@@ -74,8 +74,23 @@ def _check_magic(path: Path, suffix: str) -> None:
         ok, what = expected[suffix]
         if not ok:
             raise InputError(f"{path}: not {what}; the extension does not match the contents")
+    elif head.startswith((b"\xff\xfe", b"\xfe\xff")):  # UTF-16 text (a spreadsheet's "Unicode text" export): its zero bytes are text
+        return
     elif b"\x00" in head or head.startswith((b"PK\x03\x04", b"\xd0\xcf\x11\xe0", b"$FL2", b"PAR1")):
         raise InputError(f"{path}: binary contents, not {READERS[suffix]}; the extension does not match the contents")
+
+
+_BYTE_ORDER_MARKS = ((b"\xef\xbb\xbf", "utf-8-sig", "UTF-8"), (b"\xff\xfe", "utf-16", "UTF-16"), (b"\xfe\xff", "utf-16", "UTF-16"))
+
+
+def _marked_encoding(path: Path, suffix: str, encoding: str) -> str | None:
+    """The encoding a text file's byte-order mark names (a UTF-16 "Unicode text" export, a UTF-8 file with a mark), read
+    so that the mark is not taken for part of the first column's name; None without one, or when a UTF-16 or UTF-32
+    encoding was asked for by name."""
+    if suffix not in (".csv", ".tsv", ".txt") or encoding.lower().replace("_", "-").startswith(("utf-16", "utf-32")):
+        return None
+    head = read_start(path, 4)
+    return next((name for mark, name, _ in _BYTE_ORDER_MARKS if head.startswith(mark)), None)
 
 
 def read_data(
@@ -97,9 +112,10 @@ def read_data(
     if suffix not in READERS:
         raise InputError(f"{p}: unknown data format {p.suffix or '(no extension)'!r}; statsetter reads {', '.join(READERS)}")
     _check_magic(p, suffix)
+    marked = _marked_encoding(p, suffix, encoding)
     try:
         with _text_storage(p):
-            data = _read(p, suffix, sheet, encoding, sep, decimal)
+            data = _read(p, suffix, sheet, marked or encoding, sep, decimal)
     except InputError:
         raise
     except UnicodeDecodeError as exc:
@@ -109,6 +125,9 @@ def read_data(
         raise InputError(f"{p}: cannot read as {READERS[suffix]} ({first})") from None
     if len(data.frame) == 0:
         raise InputError(f"{p}: no rows of data (only a header, or nothing)")
+    if marked == "utf-16" or (marked is not None and encoding.lower().replace("_", "-") not in ("utf-8", "utf8")):
+        data = replace(data, notes=(f"encoding: {next(said for _, name, said in _BYTE_ORDER_MARKS if name == marked)} (the file's byte-order mark)",
+                                    *data.notes))
     if not all(isinstance(name, str) for name in data.frame.columns):  # a spreadsheet's header cell holding a number or a date
         data = replace(data, frame=data.frame.set_axis([str(name) for name in data.frame.columns], axis=1))
     data = _arrow_when_long(data)
