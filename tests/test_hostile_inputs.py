@@ -889,6 +889,19 @@ def test_a_utf16_text_export_is_read(box, capsys, asked):
     assert "Adelie (n = 152)" in out and "body_mass_g, M (SD)      3,700.66 (458.57)" in out, out  # (pingouin's counts and means)
 
 
+def test_blank_lines_before_the_header_and_a_byte_order_mark(box, capsys):
+    """A UTF-8 file with a byte-order mark and blank lines before its header (semicolons): the delimiter had been looked
+    for in the blank line, and the whole header read as one column's name (found by writing the penguins data as other
+    programs write delimited text)."""
+    penguins = pg.read_dataset("penguins")
+    (box / "b.csv").write_bytes(("\n\n" + penguins.to_csv(sep=";", index=False)).encode("utf-8-sig"))
+    code, out, err = _run(["describe", "b.csv", "--vars", "sex", "--group", "island"], capsys)
+    assert code == 0 and "delimiter: semicolon" in err and "Island: Biscoe (n = 168)" in out, err + out
+    (box / "d2.csv").write_text("\n\nage,age\n1,2\n", encoding="utf-8")  # the header's line counts the blank lines before it
+    code, _, err = _run(["describe", "d2.csv"], capsys)
+    assert code == 2 and "column 'age' appears twice in the header (line 3)" in err, err
+
+
 def test_a_spreadsheet_with_a_number_for_a_header_and_dates_among_numbers(box, capsys):
     """A header cell holding a number (a year) names its column as text, and a column where the spreadsheet turned some
     entries into dates is described as categories, numbers first, and said (internal errors before: "keywords must be strings" and

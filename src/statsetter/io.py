@@ -298,7 +298,7 @@ def _read(p: Path, suffix: str, sheet: "str | int | None", encoding: str, sep: s
         skip, head = 0, []  # leading lines starting with "#" are notes about the file (our demo data say they are invented)
         with p.open(encoding=encoding, errors="replace", newline="") as fh:
             for line in fh:
-                if line.startswith("#") and not head:
+                if (line.startswith("#") or not line.strip()) and not head:  # (blank lines before the header too: not it)
                     skip += 1
                     continue
                 head.append(line)
