@@ -478,6 +478,14 @@ def test_source_index_maps_every_kept_character_back():
         assert source == char or source.translate(str.maketrans("23", "²³")) == char, (i, char, source)
 
 
+def _audited(path, text: str, capsys, *options: str) -> list[dict]:
+    """The audit's JSON rows for ``text`` written to ``path``."""
+    path.write_text(text, encoding="utf-8")
+    capsys.readouterr()
+    main(["audit", str(path), "--json", *options])
+    return json.loads(capsys.readouterr().out)
+
+
 def test_tex_math_is_read_as_it_prints(tmp_path, capsys):
     """A LaTeX manuscript types its statistics in math (practice): AMA's subscript df as $t_{38}$ and $F_{2,97}$, partial
     η² as $\\eta_p^2$ or $\\eta^2_p$, Spearman's $r_s$, an italic $\\mathit{t}$, a power of ten $10^{-4}$ — each had
@@ -488,11 +496,7 @@ def test_tex_math_is_read_as_it_prints(tmp_path, capsys):
              "$\\mathit{t}(38) = 2.10$, $\\mathit{p} = .042$; $p = 4.2 \\times 10^{-6}$")
     assert next(_text_units(block, ".tex")).text == ("t₃₈ = 2.14, P = .04; F₂,₉₇ = 4.51, P = .01; ηp² = .09; rs(98) = .29; "
                                                      "t(38) = 2.10, p = .042; p = 4.2 × 10⁻⁶")
-    path = tmp_path / "ama.tex"
-    path.write_text(block + "\n", encoding="utf-8")
-    capsys.readouterr()
-    main(["audit", str(path), "--json", "--style", "ama11"])
-    rows = {row["found"]: row for row in json.loads(capsys.readouterr().out)}
+    rows = {row["found"]: row for row in _audited(tmp_path / "ama.tex", block + "\n", capsys, "--style", "ama11")}
     assert {"t₃₈ = 2.14, P = .04", "F₂,₉₇ = 4.51, P = .01; ηp² = .09", "rs(98) = .29", "t(38) = 2.10, p = .042"} <= set(rows)
     assert stats.t.sf(2.14, 38) * 2 == pytest.approx(.039, abs=.0005) and stats.f.sf(4.51, 2, 97) < .015
     assert all("p-does-not-follow" not in row["codes"] and row["recomputed"] for found, row in rows.items() if found.startswith(("t", "F")))
@@ -510,11 +514,7 @@ def test_numbers_set_with_siunitx_or_numprint_and_math_in_latex_parentheses(tmp_
              "in the other, \\(t(97) = \\numprint{-2.31}\\), \\(p = \\np{.02}\\); retyped, \\(t(97) = -2.31\\), \\(p = .20\\).")
     assert next(_text_units(block, ".tex")).text == ("than in the smile condition, t(97) = 2.03, p = .05, and\n"
                                                      "in the other, t(97) = -2.31, p = .02; retyped, t(97) = -2.31, p = .20.")
-    path = tmp_path / "siunitx.tex"
-    path.write_text(block + "\n", encoding="utf-8")
-    capsys.readouterr()
-    main(["audit", str(path), "--json"])
-    rows = sorted(json.loads(capsys.readouterr().out), key=lambda r: (r["location"].split(",")[0], int(r["location"].split()[3].split("–")[0])))
+    rows = sorted(_audited(tmp_path / "siunitx.tex", block + "\n", capsys), key=lambda r: (r["location"].split(",")[0], int(r["location"].split()[3].split("–")[0])))
     assert [r["found"] for r in rows] == ["t(97) = 2.03, p = .05", "t(97) = -2.31, p = .02", "t(97) = -2.31, p = .20"]
     assert ["p-does-not-follow" in r["codes"] for r in rows] == [False, False, True]  # 2.03 gives .045, 2.31 gives .023 (scipy)
     assert 2 * stats.t.sf(2.03, 97) == pytest.approx(.045, abs=.0005) and 2 * stats.t.sf(2.31, 97) == pytest.approx(.023, abs=.0005)
@@ -522,9 +522,7 @@ def test_numbers_set_with_siunitx_or_numprint_and_math_in_latex_parentheses(tmp_
     # siunitx's S columns take their headers' text in a group ({$t$}): such a table had not been read
     table = ("\\begin{tabular}{lSSS}\n\\toprule\n{Rating} & {$t$} & {$df$} & {$p$} \\\\\n\\midrule\n"
              "Smile & 2.03 & 97 & .05 \\\\\nPout & -2.31 & 97 & .20 \\\\\n\\bottomrule\n\\end{tabular}\n")
-    (tmp_path / "s.tex").write_text(table, encoding="utf-8")
-    main(["audit", str(tmp_path / "s.tex"), "--json"])
-    rows = {r["found"]: r for r in json.loads(capsys.readouterr().out)}
+    rows = {r["found"]: r for r in _audited(tmp_path / "s.tex", table, capsys)}
     assert set(rows) == {"t(97) = 2.03, p = .05", "t(97) = -2.31, p = .20"}, rows
     assert "p-does-not-follow" in rows["t(97) = -2.31, p = .20"]["codes"] and not rows["t(97) = 2.03, p = .05"]["codes"]
 

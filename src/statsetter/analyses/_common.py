@@ -148,10 +148,17 @@ def notes(*items: Note | None) -> tuple[Note, ...]:
     return tuple(n for n in items if n is not None)
 
 
-def constant(values: "np.ndarray | pd.Series") -> bool:
-    """Whether every value is the same: by the values themselves, not a variance, which rounding leaves a hair above
-    zero for a column of 5.1s (and a t of 10¹⁴ after it)."""
-    return len(values) > 0 and values.min() == values.max()
+def constant(*samples: "np.ndarray | pd.Series") -> bool:
+    """Whether every value (of every sample given) is the same: by the values themselves, not a variance, which
+    rounding leaves a hair above zero for a column of 5.1s (and a t of 10¹⁴ after it)."""
+    present = [v for v in samples if len(v)]
+    return bool(present) and all(v.min() == v.max() for v in present) and len({v.min() for v in present}) == 1
+
+
+def require_variance(values: "np.ndarray | pd.Series", name: str, undefined: str) -> None:
+    """Refuse a variable whose every value is the same, naming it and what is then ``undefined``."""
+    if constant(values):
+        raise InputError(f"{name}: zero variance (every value is {float(values.min()):g}); {undefined}")
 
 
 def fmt(x: Any) -> str:

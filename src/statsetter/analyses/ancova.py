@@ -52,9 +52,7 @@ def ancova(
     if not covariates:
         raise InputError("covariates: an ANCOVA needs at least one (without: anova_oneway or factorial_anova)")
     data, missing = c.listwise(df, [outcome, *factors, *covariates])
-    measured = c.numeric(data, outcome)
-    if c.constant(measured):
-        raise InputError(f"{outcome}: zero variance (every value is {measured.iloc[0]:g}); F is undefined")
+    c.require_variance(c.numeric(data, outcome), outcome, "F is undefined")
     for cov in covariates:
         c.numeric(data, cov)
     levels_of = [sorted(data[f].unique(), key=lambda v: (str(type(v)), v)) for f in factors]

@@ -54,8 +54,7 @@ def _fit(data: "pd.DataFrame", outcome: str, predictors: Sequence[str], group: s
     if not data[group].duplicated().any():
         raise InputError(f"{group}: every group has one row; the group and residual variances cannot be told apart")
     y = c.numeric(data, outcome).to_numpy(dtype=float)
-    if c.constant(y):
-        raise InputError(f"{outcome}: zero variance (every value is {y[0]:g}); a multilevel model has no variance to split")
+    c.require_variance(y, outcome, "a multilevel model has no variance to split")
     if predictors:
         X, meta, coding = _design(data, list(predictors), dict(reference or {}), None)
         X = np.asarray(X, dtype=float)

@@ -161,9 +161,7 @@ def factorial_anova(
         raise InputError(f"factors: {list(factors) if not isinstance(factors, str) else factors!r}: a two-way ANOVA takes two factors")
     a, b = factors
     data, missing = c.listwise(df, [outcome, a, b])
-    measured = c.numeric(data, outcome)
-    if c.constant(measured):
-        raise InputError(f"{outcome}: zero variance (every value is {measured.iloc[0]:g}); F is undefined")
+    c.require_variance(c.numeric(data, outcome), outcome, "F is undefined")
     for f in (a, b):
         if data[f].nunique() < 2:
             raise InputError(f"{f}: one level with data; a factor needs at least two")

@@ -78,7 +78,7 @@ def mann_whitney(
     if method == "auto":
         ties = len(np.unique(np.concatenate([a, b]))) < len(a) + len(b)
         method = "exact" if min(len(a), len(b)) <= 8 and not ties else "asymptotic"
-    if c.constant(a) and c.constant(b) and a[0] == b[0]:
+    if c.constant(a, b):
         raise InputError(f"{outcome}: every value is the same; the ranks are all tied and U's p is undefined")
     res = stats.mannwhitneyu(a, b, alternative=alternative, method=method)
     u = float(res.statistic)
@@ -172,7 +172,7 @@ def kruskal_wallis(
     from scipy import stats
 
     levels, samples, missing = c.grouped(df, outcome, group, "a Kruskal–Wallis test", min_n=1)
-    if all(c.constant(v) for v in samples) and len({float(v[0]) for v in samples}) == 1:
+    if c.constant(*samples):
         raise InputError(f"{outcome}: every value is the same; the ranks are all tied and H is undefined")
     res = stats.kruskal(*samples)
     n = sum(len(v) for v in samples)

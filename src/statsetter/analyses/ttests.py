@@ -234,8 +234,7 @@ def t_one_sample(
     n = len(a)
     if n < 2:
         raise InputError(f"{outcome}: n = {n}; a t test needs at least 2 values")
-    if c.constant(a):
-        raise InputError(f"{outcome}: zero variance (every value is {a[0]:g}); the t statistic is undefined")
+    c.require_variance(a, outcome, "the t statistic is undefined")
     res = stats.ttest_1samp(a, mu, alternative=alternative)
     ci = res.confidence_interval(level)
     d = d_from_t("d", float(res.statistic), n - 1, 1 / math.sqrt(n), level)

@@ -21,7 +21,7 @@ def style_options(p: argparse.ArgumentParser) -> None:
     p.add_argument("--out", metavar="FILE", help="write to FILE instead of standard output")
 
 
-_TEXT_FORMATS = {".md": "md", ".html": "html", ".htm": "html", ".tex": "tex", ".txt": "text"}
+_TEXT_FORMATS = {ext: fmt for ext, fmt in TABLE_FORMATS.items() if fmt in OUTPUT_FORMATS}  # the extensions --to has a format for
 
 
 def output_format(to: str | None, out: str | None) -> str:
