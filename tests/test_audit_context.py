@@ -180,7 +180,8 @@ def test_a_coefficients_t_in_a_sentence_takes_no_two_group_df():
 def test_a_partial_correlation_takes_no_df_from_the_n():
     """A correlation with covariates partialled out has N − 2 − k df: "the partial correlation controlling for age, sex
     and income was r = .40, p = .039" in a sample of N = 30 (p from scipy on 25 df) had been recomputed on N − 2 = 28
-    and flagged; it is read, not given that df. The same r as a plain correlation still is."""
+    and flagged; it is read, not given that df. The same r as a plain correlation still is, as a warning naming the df
+    that fit (missing values or an unsaid covariate: the text does not say)."""
     import math
 
     from statsetter.audit.reading import Unit
@@ -193,7 +194,7 @@ def test_a_partial_correlation_takes_no_df_from_the_n():
         (e,) = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("r")]
         assert "p-does-not-follow" not in e.codes and e.checked == "", text
     (e,) = audit_units([Unit("c", "In the sample (N = 30), the correlation was r = .40, p = .039.")])
-    assert "p-does-not-follow" in e.codes and "N − 2 = 28" in e.checked
+    assert e.codes == ["df-unstated"] and "N − 2 = 28" in e.checked and "df = 25 would" in e.message
 
 
 def test_a_welch_t_without_df_is_checked_over_the_df_welch_allows():
@@ -457,6 +458,33 @@ def test_the_paragraphs_n_gives_the_df_and_no_reading_is_a_guess():
     assert not _p_findings(first) and "N − 2 = 66" in first.checked
     assert "p-does-not-follow" in second.codes and "earlier in the text" in second.message
     assert not _p_findings(third) and third.checked == ""  # no df anywhere: nothing recomputed, nothing claimed
+
+
+def test_a_p_that_fits_other_df_than_the_guessed_ones_is_a_warning_naming_them():
+    """A t without df on a subgroup: the N earlier in the text (here a χ²'s own) gives df of 78 or 79, its p fits neither
+    but fits the subgroup's df — a warning naming the df that fit (each checked here with scipy), not an error; a p
+    that no df gives stays an error."""
+    rng = np.random.default_rng(5)
+    for _ in range(25):
+        df, t = int(rng.integers(3, 40)), float(rng.uniform(1.7, 3.5))
+        p = _p2(round(t, 2), df)
+        if abs(p - _p2(round(t, 2), 78)) < 0.01:
+            continue  # (too close to the guessed df's p to tell apart at three decimals)
+        text = f"{p:.3f}".lstrip("0")
+        units = [Unit("p1", "Smokers were more often men, χ²(1, N = 80) = 4.20, p = .040."),
+                 Unit("p2", f"Among the smokers, anxiety was higher in those who had tried to stop, t = {t:.2f}, p = {text}.")]
+        entry = next(e for e in audit_units(units) if e.found.startswith("t"))
+        assert entry.codes == ["df-unstated"] and entry.severity == "warning", (t, df, entry.message)
+        fit = re.search(r"df = (\d+) would|df from (\d+) to (\d+) would", entry.message)
+        low, high = (int(fit.group(1)),) * 2 if fit.group(1) else (int(fit.group(2)), int(fit.group(3)))
+        assert low <= df <= high and "N earlier in the text" in entry.message
+        value, reported = float(f"{t:.2f}"), float(text)
+        for k in (low - 1, high + 1):  # the df just outside the range named do not give the printed p from the printed t
+            if k >= 1:
+                ps = sorted(_p2(value + s, k) for s in (-0.005, 0.005))
+                assert ps[1] < reported - 0.0005 or ps[0] > reported + 0.0005, (k, ps, reported)
+    (impossible,) = audit_units([Unit("p3", "In all (N = 80), scores rose, t = 2.10, p = .300.")])  # no df gives .300 from 2.10
+    assert impossible.codes[0] == "p-does-not-follow" and impossible.severity == "error"
 
 
 def test_one_tailed_said_in_the_sentence_is_a_note():

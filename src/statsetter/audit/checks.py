@@ -15,7 +15,7 @@ import bisect
 import functools
 import math
 from dataclasses import dataclass, replace
-from typing import Sequence
+from typing import Callable, Sequence
 
 from ..errors import MissingExtra
 from ..formulas import hedges_j
@@ -68,6 +68,10 @@ CODES: dict[str, tuple[str, str]] = {
         "the p and the CI disagree about the null value (one says significant, the other not)",
         "Confidence intervals and p from the same test agree (Altman & Bland, 2011, BMJ, How to obtain the P value from a confidence interval)",
     ),
+    "df-unstated": (
+        "a t or r without df whose p fits none of the df the text's N or group sizes give, but fits other df",
+        "Reporting by test: t and r with their df (APA 7 §6.43); consistency as in Nuijten et al. (2016)",
+    ),
     "d-does-not-fit": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
@@ -83,7 +87,7 @@ SEVERITY: dict[str, str] = {
     "p-does-not-follow": "error", "verdict-changes": "error", "impossible-r": "error", "impossible-p": "error",
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
-    "one-sided": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
+    "one-sided": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
     "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
@@ -261,6 +265,45 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     if (said_significant and computed[0] >= alpha) or (not said_significant and computed[1] < alpha):
         found.append(Finding("verdict-changes", f"At alpha = {alpha:g} the recomputed p leads to the other decision.", evidence))
     return found
+
+
+_MANY_DF = 10**7  # beyond this a t's p is the normal's to the digits any manuscript prints
+
+
+def df_that_fit(rep: Reported, alpha: float) -> "tuple[int, int | None] | None":
+    """The whole df (from 1) under which a t's or r's reported p follows from its printed value, as (the fewest, the
+    most; None for no upper end), or None when no df gives it. A t's or r's two-sided p falls as its df grow (a t
+    distribution's tail thins with its df), at both ends of the value's printed range, so the df that fit are one run,
+    found by bisection."""
+    reported = reported_p_range(rep, alpha)
+    if rep.symbol not in ("t", "r", "rs") or reported is None:
+        return None
+
+    def ends(df: int) -> "tuple[float, float] | None":
+        return p_range(replace(rep, df=(Number(str(df), float(df), 0, rep.start, rep.start),), p_range=None))
+
+    fewest, most = ends(1), ends(_MANY_DF)
+    if fewest is None or most is None or most[0] > reported[1] + 1e-12 or fewest[1] < reported[0] - 1e-12:
+        return None
+
+    def first(test: "Callable[[int], bool]") -> int:  # the smallest df in [1, _MANY_DF] passing a test that, once passed, stays so
+        low, high = 1, _MANY_DF
+        while low < high:
+            middle = (low + high) // 2
+            low, high = (low, middle) if test(middle) else (middle + 1, high)
+        return low
+
+    def too_high(df: int) -> bool:  # its p's lower end is above the reported range (false from the first df that fits on)
+        found = ends(df)
+        return found is not None and found[0] > reported[1] + 1e-12
+
+    def below(df: int) -> bool:  # its p's upper end is below the reported range (true past the last df that fits)
+        found = ends(df)
+        return found is None or found[1] < reported[0] - 1e-12
+
+    low = first(lambda df: not too_high(df))
+    high = None if not below(_MANY_DF) else first(below) - 1
+    return None if high is not None and high < low else (low, high)
 
 
 def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:

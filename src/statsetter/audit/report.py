@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
@@ -252,7 +252,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     sizes = group_sizes(unit.text, rep, mark)
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
                     where = "beside it" if rep.n is not None else "in the paragraph" if totals else "earlier in the text"
-                    readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where))
+                    readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where, total_guessed=rep.n is None))
                 elif rep.symbol == "chi2" and not rep.df and is_wald(unit.text, rep) and coefficient_before(unit.text, rep, previous_end, mark):
                     readings = (ONE_COEFFICIENT,)
                 yield _new_item(unit, rep, None if rep.plural else rep, readings, "", unit.text, None)  # (a plural head's: not restyled)
@@ -322,6 +322,15 @@ def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Repor
         return [], None
     candidate, found, _ = tried[0]
     readings = "; ".join(r.assumption for _, _, r in tried)
+    guessed = all(r.guessed for _, _, r in tried)  # only from an N not given with the statistic
+    fit = df_that_fit(rep, alpha) if guessed and any(f.code == "p-does-not-follow" for f in found) else None
+    if fit is not None:  # other df give the p: a sample other than the one guessed (a subgroup?)
+        low, high = fit
+        other = f"df = {low}" if low == high else f"df from {low} to {high}" if high is not None else f"df of {low} or more"
+        evidence = f"{found[0].evidence}; no reading of the df fits: {readings}; {other} would"
+        return ([Finding("df-unstated", f"The statistic gives no df, and none of the df the text suggests fits its p; {other} would. "
+                                        "Report the df, and check which sample the test used.", evidence)],
+                (candidate, tried[0][2].assumption))
     return ([Finding(f.code, f.message, f"{f.evidence}; no reading of the df fits: {readings}") for f in found],
             (candidate, tried[0][2].assumption))
 

@@ -176,13 +176,16 @@ class Reading:
     df: tuple[float, ...]
     assumption: str  # how the df was read: "df = 45 + 45 − 2 (Student's t; the group sizes in the table)"
     df_high: float | None = None  # a df anywhere from df[0] to this (Welch's t: from the smaller group's n − 1 to n₁ + n₂ − 2)
+    guessed: bool = False  # from an N of the paragraph or the text before, not given with the statistic: the test may be a subgroup's
 
 
-def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str, welch: bool = False) -> list[Reading]:
+def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str, welch: bool = False,
+                total_guessed: bool = False) -> list[Reading]:
     """The df a t or r without df may have, from group sizes and a total N;
     each reading says what it assumes. A t said to be Welch's has its df
     anywhere from the smaller group's n − 1 to n₁ + n₂ − 2 (one reading, a
-    range, from two group sizes; none without them)."""
+    range, from two group sizes; none without them). ``total_guessed``: the
+    N is not given with the statistic (its paragraph's, or the text's before)."""
     out: list[Reading] = []
     if symbol == "t" and welch:
         if len(groups) >= 2 and min(groups[:2]) >= 2:
@@ -197,10 +200,10 @@ def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: st
         if len(groups) == 1:
             out.append(Reading((groups[0] - 1.0,), f"df = {groups[0]} − 1 (one-sample or paired t; n {where})"))
         if total is not None and total > 2:
-            out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (two independent groups; N {where})"))
-            out.append(Reading((total - 1.0,), f"df = N − 1 = {total - 1} (one-sample or paired t; N {where})"))
+            out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (two independent groups; N {where})", guessed=total_guessed))
+            out.append(Reading((total - 1.0,), f"df = N − 1 = {total - 1} (one-sample or paired t; N {where})", guessed=total_guessed))
     elif symbol in ("r", "rs") and total is not None and total > 2:
-        out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (N {where})"))
+        out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (N {where})", guessed=total_guessed))
     seen, unique = set(), []
     for r in out:
         if r.df not in seen:
