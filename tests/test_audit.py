@@ -182,6 +182,31 @@ def test_grim():
     assert "grim" not in codes("M = 5.18, SD = 1.20, n = 28", grim_items=1)
 
 
+def test_each_groups_descriptives_are_a_statistic_of_their_own_with_their_own_n():
+    """Groups' descriptives typed one after another, each with its n first ("(n = 5, M = 59.20, SD = 8.53)"), as results
+    sections list them: each group a statistic of its own with its own n (GRIM checks each mean against it). Numbers:
+    pingouin's "anova" dataset (pain threshold by hair colour; integer scores, groups of 5, 5, 4 and 5), computed here.
+    The groups had been read as one statistic whose n was the first one after its first mean — the second group's —
+    and Light Brunette's mean of 4 scores, 42.50, was called impossible for 5."""
+    import pingouin as pg
+
+    data = pg.read_dataset("anova")
+    groups = data.groupby("Hair color", sort=False)["Pain threshold"].agg(["count", "mean", "std"])
+    typed = [f"{name} (n = {int(row['count'])}, M = {row['mean']:.2f}, SD = {row['std']:.2f})" for name, row in groups.iterrows()]
+    text = "Pain thresholds fell from the lightest hair to the darkest: " + ", ".join(typed) + "."
+    entries = audit_units([Unit("test", text)], grim_items=1)
+    assert [e.found for e in entries] == [t[t.index("(") + 1 : -1] for t in typed]
+    assert all(e.codes == [] for e in entries), [(e.found, e.codes) for e in entries]
+    wrong = text.replace("M = 42.50", "M = 42.60")  # (42.60 is no multiple of 1/4 to two decimals; a mutation of ours)
+    flagged = [e for e in audit_units([Unit("test", wrong)], grim_items=1) if e.codes]
+    assert [(e.found, e.codes) for e in flagged] == [("n = 4, M = 42.60, SD = 5.45", ["grim"])]
+    assert "A mean of 4 integer scores cannot be 42.60" in flagged[0].message
+    # descriptives without an n: each group's own statistic all the same, none taking the next group's n
+    plain = "Scores were higher in the treatment group (M = 4.43, SD = 2.22) than in the control group (n = 28, M = 3.10, SD = 1.95)."
+    first, second = audit_units([Unit("test", plain)], grim_items=1)
+    assert (first.found, second.found) == ("M = 4.43, SD = 2.22", "n = 28, M = 3.10, SD = 1.95") and first.codes == []
+
+
 def test_handbook_critical_values():
     # Critical values from the printed tables of a statistics handbook (recalled from memory, three
     # decimals): at each, the recomputed two-sided (t) or upper-tail (F, χ²) p is the table's alpha.

@@ -668,6 +668,25 @@ def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
                          or _GARBLED_P.search(text, start, end) is not None))
 
 
+def _n_just_before(pat: _Patterns, text: str, at: int, floor: int) -> int | None:
+    """Where an "n = 28" (or "N = 28") ends just before ``at``, set off by a comma or semicolon, starts: a group's n
+    before its descriptives ("n = 28, M = 3.11, SD = 1.95"); None when there is none after ``floor``."""
+    i = at
+    while i > floor and text[i - 1].isspace():
+        i -= 1
+    if i <= floor or text[i - 1] not in ",;":
+        return None
+    i -= 1
+    while i > floor and text[i - 1].isspace():
+        i -= 1
+    low = max(floor, i - 24)
+    for k in range(i - 1, low - 1, -1):  # the n's symbol, nearest first
+        if text[k] in "nN":
+            m = pat.n.match(text, k, i)
+            return k if m is not None and m.end() == i else None
+    return None
+
+
 def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True) -> list[Reported]:
     """The statistics without a head in one sentence piece: a cluster each, a new one where an effect size of a name
     the cluster has already read comes again ("(OR, 0.76; 95% CI, 0.73 to 0.80) and … (OR, 0.73; 95% CI, …)": two).
@@ -686,6 +705,10 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
         if not first:
             break
         at = min(first)
+        m = following[pat.effect]
+        if m is not None and m.start() == at and _effect_name(m.group("name")) in _DESCRIPTIVE:  # a group's n before its mean
+            before = _n_just_before(pat, text, at, start)
+            at = before if before is not None else at
         stop = min(end, at + _REACH)
         rep = Reported(None, "", at, at, at)
         again = _read_clause(pat, text, rep, at, stop, rare)
@@ -824,8 +847,17 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
             number = pat.to_number(m.group("num"), m.start("num"))
             if name is None or number is None:
                 continue
-            if rep.symbol is None and name not in _DESCRIPTIVE and any(e.name == name for e in rep.effects):
-                again = at
+            if rep.symbol is None and any(e.name == name for e in (rep.descriptives if name in _DESCRIPTIVE else rep.effects)):
+                again = at  # a name read again: another cluster ("(M = 4.40, SD = 2.22) … (n = 28, M = 3.11, …)"), with the n
+                # just before it, which this cluster had read for its own
+                before = _n_just_before(pat, text, at, start)
+                if before is not None:
+                    again = before
+                    if rep.n is not None and rep.n.start >= before:
+                        rep.n = None
+                        spans = [sp for sp in spans if sp[0] < before]
+                        last_end = max([rep.end] + [e for _, e in spans] + [x.end for x in rep.effects + rep.descriptives]
+                                       + [rep.p.end if rep.p is not None else 0] + [rep.ci.end if rep.ci is not None else 0])
                 break
             effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
