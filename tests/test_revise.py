@@ -627,3 +627,42 @@ def test_hidden_text_is_not_read(tmp_path):
         body = etree.fromstring(z.read("word/document.xml"))
     assert ["".join(t.text for t in c.iter(f"{W}t", f"{W}delText")).replace("\u00a0", " ") for c in body.iter(f"{W}del", f"{W}ins")] == \
         ["r(40) = 0.31, p = .046", "r(40) = .31, p = .046"]
+
+
+def test_descriptives_alone_are_restyled_symbol_for_symbol_and_ama_says_why_not(tmp_path):
+    """Groups' descriptives typed plain beside an italic t ("(n = 5, M = 59.20, SD=8.53)", words between them kept: "34.2
+    years"): revised into APA 7 each symbol is italic and each "=" spaced, the numbers and words as typed; accepted,
+    they have no style finding left and a second revision changes nothing; rejected, the text is as before. AMA 11
+    writes means and SDs in words, which no symbol-for-symbol change gives: left as typed, its comment says so. (They
+    had been left as typed in both, roman beside italic statistics, their comments giving no reason.) Numbers:
+    pingouin's "anova" dataset, pain threshold by hair colour (practice: M, SD and n italic, APA 7 §6.45)."""
+    import pingouin as pg
+
+    data = pg.read_dataset("anova")
+    groups = data.groupby("Hair color", sort=False)["Pain threshold"].agg(["count", "mean", "std"])
+    typed = [f"{name} (n = {int(r['count'])}, M = {r['mean']:.2f}, SD={r['std']:.2f})" for name, r in groups.iterrows()]
+    d = docx.Document()
+    p = d.add_paragraph("Thresholds differed by hair colour: " + "; ".join(typed) + ", ")
+    p.add_run("F").italic = True
+    aov = pg.anova(data, dv="Pain threshold", between="Hair color").iloc[0]
+    p.add_run(f"({aov['ddof1']}, {aov['ddof2']}) = {aov['F']:.2f}, ")
+    p.add_run("p").italic = True
+    p.add_run(f" = {aov['p_unc']:.3f}.".replace("0.", ".", 1))
+    d.add_paragraph("The volunteers were adults (M = 34.2 years, SD = 11.0).")
+    d.save(str(tmp_path / "m.docx"))
+    original = _texts(tmp_path / "m.docx")
+    main(["audit", str(tmp_path / "m.docx"), "--revise", str(tmp_path / "out.docx")])
+    root = etree.fromstring(zipfile.ZipFile(tmp_path / "out.docx").read("word/document.xml"))
+    inserted = ["".join(t.text for t in ins.iter(f"{W}t")) for ins in root.iter(f"{W}ins")]
+    assert len(inserted) == 5 and inserted[-1].replace("\u00a0", " ") == "M = 34.2 years, SD = 11.0"
+    italic = {"".join(t.text for t in r.iter(f"{W}t")) for ins in root.iter(f"{W}ins") for r in ins.iter(f"{W}r") if r.find(f"{W}rPr/{W}i") is not None}
+    assert italic == {"n", "M", "SD"}
+    accepted = _decided(tmp_path / "out.docx", tmp_path / "accepted.docx", accept=True)
+    assert [t.replace("\u00a0", " ") for t in _texts(accepted)] == [t.replace("SD=", "SD = ") for t in original]
+    assert [e.codes for e in audit_file(accepted)] == [[]] * 6
+    main(["audit", str(accepted), "--revise", str(tmp_path / "again.docx")])
+    assert not list(etree.fromstring(zipfile.ZipFile(tmp_path / "again.docx").read("word/document.xml")).iter(f"{W}ins"))
+    assert _texts(_decided(tmp_path / "out.docx", tmp_path / "rejected.docx", accept=False)) == original
+    main(["audit", str(tmp_path / "m.docx"), "--style", "ama11", "--revise", str(tmp_path / "ama.docx")])
+    comments = zipfile.ZipFile(tmp_path / "ama.docx").read("word/comments.xml").decode()
+    assert comments.count("writes means and SDs in words") == 5

@@ -69,6 +69,8 @@ def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> St
     from ..rendering.sentences import render
     from .checks import to_record
 
+    if rep.symbol is None and rep.p is None and not rep.effects and rep.descriptives:
+        return descriptives_text(rep, style)
     try:
         record = to_record(rep, alpha, style)
         if rep.op != "=" and not with_p:  # (an exact p the author gave, doubted, is not repeated either)
@@ -90,6 +92,35 @@ def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> St
         return text
     # a bound's "ns", like a doubted p, becomes the p the bound allows ("F(1, 56) < 1, p > .32"): true, and what the style asks
     return _bounded(text, rep.op, style, threshold_p(rep, style, style.keep_together) if with_p and not ns else _allowed_p(rep, style))
+
+
+def descriptives_text(rep: Reported, style: "Style") -> StyledText | None:
+    """A group's descriptives alone ("n = 28, M = 3.11, SD=1.95"; "M = 34.2 years, SD = 11.0") as the style sets
+    each: its symbol (italic in APA), "=" spaced, the number with the author's decimals in the style's marks; the
+    text between them as typed (no sentence form of its own: what a group is, the text says). None where the style
+    writes means and SDs in words (AMA 11's "mean [SD]"), which no symbol-for-symbol change gives, and for a negative SD."""
+    if style.spells_out or any(d.name == "SD" and d.number.value < 0 for d in rep.descriptives):  # (an impossible SD: no text, as
+        return None  # a record the renderer refuses has none)
+    num = numbers_for(style)
+    space = style.keep_together
+    pieces = [(d.symbol_start, d.number.end, d.name, num.number(d.number.value, d.name, d.number.decimals)) for d in rep.descriptives]
+    if rep.n is not None:  # its symbol: before its "=" (an n read with the cluster, "n = 28, M = …")
+        k = rep.n.start - rep.start
+        while k > 0 and rep.text[k - 1].isspace():
+            k -= 1
+        if k > 0 and rep.text[k - 1] in "=¼":
+            k -= 1
+            while k > 0 and rep.text[k - 1].isspace():
+                k -= 1
+            if k > 0 and rep.text[k - 1] in "nN":
+                pieces.append((rep.start + k - 1, rep.n.end, rep.text[k - 1], rep.n.text))
+    out, at = StyledText(""), rep.start
+    for start, end, symbol, shown in sorted(pieces):
+        if start < at:  # (pieces overlap only in a text the parser read oddly: left as typed)
+            return None
+        out = out + rep.text[at - rep.start : start - rep.start] + StyledText.from_markup(style.symbol(symbol)) + f"{space}={space}{shown}"
+        at = end
+    return out + rep.text[at - rep.start :]
 
 
 def _allowed_p(rep: Reported, style: "Style") -> StyledText | None:
@@ -164,6 +195,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     for unless a finding doubts the p."""
     new = house_text(rep, style, alpha) if house is _UNMADE else house
     if not isinstance(new, StyledText):  # left as typed
+        if rep.symbol is None and rep.descriptives and style.spells_out:
+            return None, "the style writes means and SDs in words (\u201cmean [SD], 2.86 [0.59]\u201d), which a change symbol for symbol cannot give: reword the sentence"
         return None, "the statistic cannot be restyled"
     plain = new.plain()
     old = rep.text
