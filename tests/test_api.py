@@ -241,3 +241,46 @@ def test_the_correlation_table_can_give_each_r_its_interval_underneath(penguins)
     assert laid.rows[4].cells[3].plain() == f"[{low}, {high}]"  # under r(3, 2), after the M and SD columns
     assert [c.plain() for c in laid.rows[4].cells[:2]] == ["", ""]  # no M or SD on the interval row
     assert "Values in brackets are the 95% CI of each r." in laid.general_note.plain()
+
+
+def test_arguments_of_the_wrong_kind_are_named_before_any_work(penguins):
+    """Every public function given an argument of the wrong kind says which function and argument, and what it got, as
+    the project's own error — not an AttributeError or TypeError from deep inside pandas, numpy or the renderer (each
+    of these had been one: "'int' object has no attribute 'columns'", "unsupported operand type(s) for /", "the
+    interval search did not converge" for level=1.5). One name where a list of names is wanted is a list of one."""
+    import statsetter
+    from statsetter import StatsetterError, StyledText, figure, load_style
+    from statsetter.analyses import mediation, t_one_sample
+
+    record = t_independent(penguins, "body_mass_g", "sex").main
+    cases = [
+        (lambda: t_independent(5, "body_mass_g", "sex"), "t_independent: df must be a pandas DataFrame (got int 5)"),
+        (lambda: t_independent(penguins, "body_mass_g", "sex", level="x"), "t_independent: level must be a number (got str 'x')"),
+        (lambda: t_independent(penguins, "body_mass_g", "sex", level=95), "t_independent: level must lie between 0 and 1"),
+        (lambda: t_one_sample(penguins, "body_mass_g", mu=None), "t_one_sample: mu must be a number (got NoneType None)"),
+        (lambda: t_one_sample(penguins, "body_mass_g", mu=float("nan")), "t_one_sample: mu must be a finite number"),
+        (lambda: describe(penguins, 5), "describe: variables must be a list of column names (got int 5)"),
+        (lambda: describe(penguins, ["sex"], group="species", smd="yes"), "describe: smd must be True or False"),
+        (lambda: correlation_matrix(penguins, 5), "correlation_matrix: columns must be a list of column names"),
+        (lambda: cronbach_alpha(penguins, 5), "cronbach_alpha: items must be a list of column names"),
+        (lambda: mediation(penguins, "body_mass_g", "bill_length_mm", "flipper_length_mm", n_boot=1.5), "mediation: n_boot must be a whole number"),
+        (lambda: t_independent(penguins, "body_mass_g", "sex", labels=5), "t_independent: labels must be a mapping"),
+        (lambda: render("t = 2.1"), "record: render takes a Result (got str)"),
+        (lambda: render(record, "stats", 3), "style: a style is a built-in name (apa7, ama11), a .toml file or a Style (got int)"),
+        (lambda: load_style(["apa7"]), "style: a style is a built-in name"),
+        (lambda: table(5), "source: table takes a record or a list of records (got int)"),
+        (lambda: table([record, "x"]), "records[1]: not a record (got str)"),
+        (lambda: figure(5, "means"), "figure: records must be a record or a list of records (got int)"),
+        (lambda: figure([record, None], "means"), "figure: records[1] is not a record (got NoneType)"),
+        (lambda: load_records(5), "load_records takes JSON text"),
+        (lambda: dump_records([record, 5]), "records[1]: not a record"),
+        (lambda: StyledText(5), "StyledText: expected text (got int)"),
+        (lambda: StyledText.from_markup(None), "markup: expected text (got NoneType)"),
+    ]
+    for call, said in cases:
+        with pytest.raises(StatsetterError) as caught:
+            call()
+        assert said in str(caught.value), (said, str(caught.value))
+    one, listed = linear_regression(penguins, "body_mass_g", "bill_length_mm"), linear_regression(penguins, "body_mass_g", ["bill_length_mm"])
+    assert dump_records(one) == dump_records(listed)  # (it had read the name letter by letter: "b: no such column")
+    assert dump_records(record) == dump_records([record]) and statsetter.render(record).plain().startswith("t(")

@@ -52,6 +52,10 @@ class StyledText:
     text: str
 
     def __init__(self, text: str = "", spans: Iterable[Span] = ()) -> None:
+        if not isinstance(text, str):
+            from .errors import InputError
+
+            raise InputError(f"StyledText: expected text (got {type(text).__name__})")
         object.__setattr__(self, "text", text)
         object.__setattr__(self, "_spans", tuple(s for s in spans if s.end > s.start))
         object.__setattr__(self, "_segments", None)
@@ -83,6 +87,10 @@ class StyledText:
     @classmethod
     def from_markup(cls, markup: str) -> "StyledText":
         """Parse the markup; raises ValueError naming the position of a fault."""
+        if not isinstance(markup, str):
+            from .errors import InputError
+
+            raise InputError(f"markup: expected text (got {type(markup).__name__})")
         if "&" not in markup:  # the common case: flat tags, no entities; split once
             parts = _TAG_SPLIT.split(markup)
             segs: list[tuple[str, frozenset[str]]] = [(parts[0], _NO_STYLE)] if parts[0] else []

@@ -20,6 +20,7 @@ import warnings as _warnings
 from typing import Any as _Any, Callable as _Callable
 
 from ..errors import FormerUse as _FormerUse
+from ._arguments import checked as _checked
 from . import anova as _anova, chisquare as _chisquare, choose as _choose, correlation as _correlation, descriptives as _descriptives
 from . import matrix as _matrix, posthoc as _posthoc, ranks as _ranks, regression as _regression, repeated as _repeated, scales as _scales
 from . import ancova as _ancova, mediation as _mediation, multilevel as _multilevel, moderation as _moderation, ttests as _ttests
@@ -51,6 +52,7 @@ def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
 
     name = fn.__name__
     renamed = RENAMED.get(name, {})
+    own = _inspect.signature(fn)
 
     @_functools.wraps(fn)
     def call(*args: _Any, table_labels: "dict[str, str] | None" = None, **kwargs: _Any) -> Records:
@@ -66,6 +68,7 @@ def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
         if name == "correlate" and len(args) == 4:
             _warnings.warn("correlate: give the coefficient as coefficient=", _FormerUse, stacklevel=2)
             args, kwargs["coefficient"] = args[:3], args[3]
+        args, kwargs = _checked(name, own, args, kwargs)
         out = fn(*args, **kwargs)
         found = list(out) if isinstance(out, (list, tuple)) else [out]
         if name == "correlation_matrix":
@@ -74,7 +77,7 @@ def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
             found = [with_table_labels(r, table_labels, kwargs.get("labels")) if isinstance(r, Result) else r for r in found]
         return Records(found)
 
-    signature = _inspect.signature(fn)
+    signature = own
     extra = _inspect.Parameter("table_labels", _inspect.Parameter.KEYWORD_ONLY, default=None, annotation="Mapping[str, str] | None")
     call.__signature__ = signature.replace(  # type: ignore[attr-defined]
         parameters=[*signature.parameters.values(), extra], return_annotation="Records")

@@ -5,8 +5,8 @@ from __future__ import annotations
 
 import json
 import math
-from collections.abc import Mapping
-from typing import Any, Iterable, Union
+from collections.abc import Iterable, Mapping
+from typing import Any, Union
 
 from ..errors import InputError, RecordError
 from .result import Result
@@ -20,13 +20,20 @@ _SUMMARIES: dict[str, Any] = {"descriptives": Description, "correlation_matrix":
 
 def dump_records(records: Iterable[Record], *, indent: int | None = 2) -> str:
     """Records as a JSON array (each with its schema and version)."""
-    data = [r.to_dict() for r in records]
+    if not isinstance(records, Iterable) or isinstance(records, (str, bytes, Result, Description, CorrelationMatrix)):
+        records = [records] if isinstance(records, (Result, Description, CorrelationMatrix)) else _not_records(records)
+    data = [r.to_dict() if isinstance(r, (Result, Description, CorrelationMatrix)) else _not_records(r, i) for i, r in enumerate(records)]
     if indent is not None and indent >= 0:
         try:
             return _indented(data, " " * indent)
         except (_NotPlain, RecursionError):
             pass  # (a value JSON has no plain form for: json says what it makes of it, or why it cannot)
     return json.dumps(data, ensure_ascii=False, indent=indent)
+
+
+def _not_records(value: object, index: int | None = None) -> Any:
+    where = "records" if index is None else f"records[{index}]"
+    raise RecordError(where, f"not a record: Result, Description or CorrelationMatrix (got {type(value).__name__})")
 
 
 class _NotPlain(Exception):
@@ -107,6 +114,8 @@ def record_from_dict(data: Mapping[str, Any], *, where: str = "record") -> Recor
 
 def load_records(text: str, *, source: str = "<records>") -> list[Record]:
     """Records from JSON text: an array of records, or a single record object."""
+    if not isinstance(text, (str, bytes, bytearray)):
+        raise InputError(f"{source}: load_records takes JSON text, read from a file first (got {type(text).__name__})")
     try:
         data = json.loads(text)
     except json.JSONDecodeError as exc:

@@ -18,6 +18,7 @@ kind needs is refused.
 from __future__ import annotations
 
 import math
+from collections.abc import Iterable
 from dataclasses import dataclass, field, replace
 from typing import TYPE_CHECKING, Any, Sequence
 
@@ -353,7 +354,12 @@ def figure(records: "Result | Sequence[Result]", kind: str, style: "Style | str 
     resolved = load_style(style)
     if kind not in FIGURE_KINDS:
         raise InputError(f"figure: kind {kind!r} is not one of {', '.join(FIGURE_KINDS)}")
+    if isinstance(records, (str, bytes)) or not isinstance(records, (Result, Description, Iterable)):
+        raise InputError(f"figure: records must be a record or a list of records (got {type(records).__name__})")
     items = [records] if isinstance(records, (Result, Description)) else list(records)
+    stray = next((i for i, r in enumerate(items) if not isinstance(r, (Result, Description))), None)
+    if stray is not None:
+        raise InputError(f"figure: records[{stray}] is not a record (got {type(items[stray]).__name__})")
     found = [r for r in items if isinstance(r, Result)]
     described = next((r for r in items if isinstance(r, Description)), None)
     if (kind == "categories") != (described is not None):

@@ -7,9 +7,10 @@ row each."""
 
 from __future__ import annotations
 
-from typing import TYPE_CHECKING, Iterable
+from collections.abc import Iterable
+from typing import TYPE_CHECKING
 
-from ..errors import InputError
+from ..errors import InputError, RecordError
 from ..records import CorrelationMatrix, Description, Record, Result
 from .tables import TableModel
 
@@ -33,12 +34,16 @@ def table(source: "Record | Iterable[Record]", style: "Style | str | None" = Non
         from .correlation_tables import correlation_table
 
         return correlation_table(source, style, number=number, title=title)
+    if not isinstance(source, (Result, Iterable)) or isinstance(source, (str, bytes)):
+        raise RecordError("source", f"table takes a record or a list of records (got {type(source).__name__})")
     records = [source] if isinstance(source, Result) else list(source)
     if not records:
         raise InputError("table: no records to lay out")
     if len(records) == 1 and not isinstance(records[0], Result):
         return table(records[0], style, number=number, title=title)
     for i, r in enumerate(records):
+        if not isinstance(r, (Result, Description, CorrelationMatrix)):
+            raise RecordError(f"records[{i}]", f"not a record (got {type(r).__name__})")
         if not isinstance(r, Result):
             raise InputError(f"table: record {i + 1} is a {r.kind} record; lay it out on its own")
     kinds = {r.kind for r in records}

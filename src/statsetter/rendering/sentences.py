@@ -18,7 +18,7 @@ from typing import Any, Callable
 
 from markupsafe import Markup, escape
 
-from ..errors import TemplateError
+from ..errors import RecordError, TemplateError
 from ..records import EffectSize, GroupSummary, Interval, Result
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style, load_style
@@ -514,6 +514,9 @@ def eponyms(text: str, style: Style) -> str:
 
 def render(record: Result, form: str = "stats", style: "Style | str | None" = None, language: str = "en") -> StyledText:
     """A record as StyledText: ``form`` is ``stats`` or ``sentence``."""
+    if not isinstance(record, Result):
+        raise RecordError("record", f"render takes a Result (got {type(record).__name__})"
+                          + ("; a Description or CorrelationMatrix is laid out by table()" if hasattr(record, "variables") else ""))
     resolved = style if isinstance(style, Style) else load_style(style)
     fn = _renderer(resolved, language, record.kind, form)
     try:

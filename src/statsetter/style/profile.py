@@ -12,7 +12,7 @@ import tomllib
 from dataclasses import dataclass
 from functools import lru_cache
 from importlib import resources
-from pathlib import Path
+from pathlib import Path, PurePath
 from types import MappingProxyType
 from typing import Any, Callable, Mapping
 
@@ -498,6 +498,8 @@ def load_style(spec: "str | Path | Style | None" = None) -> Style:
         return spec
     if spec is None or spec == "":
         return _load_builtin("apa7")
+    if not isinstance(spec, (str, PurePath)):
+        raise StyleError(repr(spec)[:40], "style", f"a style is a built-in name (apa7, ama11), a .toml file or a Style (got {type(spec).__name__})")
     text = str(spec)
     if isinstance(spec, str) and not text.endswith(".toml") and "/" not in text and "\\" not in text:
         if text not in builtin_styles():
