@@ -17,10 +17,11 @@ Each function loads numpy, scipy and pandas when called, never on
 import functools as _functools
 import inspect as _inspect
 import warnings as _warnings
+from collections.abc import Mapping as _Mapping
 from typing import Any as _Any, Callable as _Callable
 
 from ..errors import FormerUse as _FormerUse
-from ._arguments import checked as _checked
+from ._arguments import checked as _checked, refuse as _refuse, rules as _rules
 from . import anova as _anova, chisquare as _chisquare, choose as _choose, correlation as _correlation, descriptives as _descriptives
 from . import matrix as _matrix, posthoc as _posthoc, ranks as _ranks, regression as _regression, repeated as _repeated, scales as _scales
 from . import ancova as _ancova, mediation as _mediation, multilevel as _multilevel, moderation as _moderation, ttests as _ttests
@@ -53,6 +54,7 @@ def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
     name = fn.__name__
     renamed = RENAMED.get(name, {})
     own = _inspect.signature(fn)
+    kinds: dict[str, _Any] = {}  # each parameter's kind, read on the first call (not on import)
 
     @_functools.wraps(fn)
     def call(*args: _Any, table_labels: "dict[str, str] | None" = None, **kwargs: _Any) -> Records:
@@ -68,7 +70,11 @@ def _public(fn: _Callable[..., _Any]) -> _Callable[..., _Any]:
         if name == "correlate" and len(args) == 4:
             _warnings.warn("correlate: give the coefficient as coefficient=", _FormerUse, stacklevel=2)
             args, kwargs["coefficient"] = args[:3], args[3]
-        args, kwargs = _checked(name, own, args, kwargs)
+        if not kinds:
+            kinds.update(_rules(fn))
+        args, kwargs = _checked(name, own, kinds, args, kwargs)
+        if table_labels is not None and not isinstance(table_labels, _Mapping):
+            _refuse(name, "table_labels", "must be a mapping (a dict)", table_labels)
         out = fn(*args, **kwargs)
         found = list(out) if isinstance(out, (list, tuple)) else [out]
         if name == "correlation_matrix":

@@ -97,6 +97,8 @@ def mediation(
 
     if n_boot < 1000:
         raise InputError(f"n_boot: {n_boot} resamples are too few for a 95% interval's limits; use at least 1,000 (5,000 by default)")
+    if n_boot > 1_000_000:  # (memory and minutes for digits no interval prints)
+        raise InputError(f"n_boot: {n_boot:,} resamples are more than a bootstrap interval's printed digits need; use at most 1,000,000 (5,000 by default)")
     mediators = [mediator] if isinstance(mediator, str) else list(mediator)
     if not mediators:
         raise InputError("mediator: at least one is needed")

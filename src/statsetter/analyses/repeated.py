@@ -560,6 +560,7 @@ def mixed_anova(
         raise InputError("mixed_anova: give outcome=, subject= and within= (long data) or columns= (wide data)")
     else:
         c.column(df, between)
+        c.column(df, subject)
         per_person = df.groupby(subject, observed=True)[between].nunique()
         if (per_person > 1).any():
             raise InputError(f"{between}: person {category_text(per_person[per_person > 1].index[0])} is in more than one group; {between} must be between subjects")

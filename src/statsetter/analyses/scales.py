@@ -22,7 +22,7 @@ def _items(df: "pd.DataFrame", items: Sequence[str], reverse: Sequence[str], min
         raise InputError(f"items: {len(items)} item(s); a scale needs at least two")
     unknown = [r for r in reverse if r not in items]
     if unknown:
-        raise InputError(f"reverse: {', '.join(unknown)} not among the items")
+        raise InputError(f"reverse: {', '.join(map(str, unknown))} not among the items")
     values = np.column_stack([c.numeric(df, i).to_numpy(dtype=float) for i in items])
     if reverse:
         if minimum is None or maximum is None:
@@ -121,7 +121,7 @@ def cronbach_alpha(
     dropped = len(values) - n
     notes = [Note("method", "α CI by Feldt (1965); corrected item–total r per item in details.")]
     if reverse:
-        notes.append(Note("method", f"Reverse-keyed: {', '.join(reverse)} (x → {minimum:g} + {maximum:g} − x)."))
+        notes.append(Note("method", f"Reverse-keyed: {', '.join(map(str, reverse))} (x → {minimum:g} + {maximum:g} − x)."))
     if dropped:
         notes.append(Note("missing", f"{dropped} of {len(values)} rows dropped for missing items (listwise)."))
     from ..records import Variable
