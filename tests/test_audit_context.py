@@ -483,6 +483,13 @@ def test_a_p_that_fits_other_df_than_the_guessed_ones_is_a_warning_naming_them()
             if k >= 1:
                 ps = sorted(_p2(value + s, k) for s in (-0.005, 0.005))
                 assert ps[1] < reported - 0.0005 or ps[0] > reported + 0.0005, (k, ps, reported)
+    # a subgroup's two-sided p that fits a one-sided test under the df guessed from a small N (5: df 3 or 4) is the
+    # subgroup's (df 11 gives it two-sided), not a one-sided test — unless the text says the test was one-tailed
+    p = f"{_p2(2.10, 11):.2f}".lstrip("0")
+    assert f"{stats.t.sf(2.10, 3):.2f}" == f"{_p2(2.10, 11):.2f}"  # (the one-sided p of df 3 prints alike)
+    for tail, codes in (("", ["df-unstated"]), (", one-tailed", [])):
+        entry = audit_units([Unit("p1", "Five pilots took part (N = 5)."), Unit("p2", f"Later, in a second group, t = 2.10, p = {p}{tail}.")])[0]
+        assert entry.codes == codes, (tail, entry.codes, entry.message)
     (impossible,) = audit_units([Unit("p3", "In all (N = 80), scores rose, t = 2.10, p = .300.")])  # no df gives .300 from 2.10
     assert impossible.codes[0] == "p-does-not-follow" and impossible.severity == "error"
 

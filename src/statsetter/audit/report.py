@@ -326,7 +326,9 @@ def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Repor
     candidate, found, _ = tried[0]
     readings = "; ".join(r.assumption for _, _, r in tried)
     guessed = all(r.guessed for _, _, r in tried)  # only from an N not given with the statistic
-    fit = df_that_fit(rep, alpha) if guessed and any(f.code == "p-does-not-follow" for f in found) else None
+    # (a p that fits a one-sided test under the guessed df is that, when the text says the test was one-tailed)
+    doubted = {"p-does-not-follow"} if _one_sided_said(item.unit.text, rep) is not None else {"p-does-not-follow", "one-sided"}
+    fit = df_that_fit(rep, alpha) if guessed and any(f.code in doubted for f in found) else None
     if fit is not None:  # other df give the p: a sample other than the one guessed (a subgroup?)
         low, high = fit
         other = f"df = {low}" if low == high else f"df from {low} to {high}" if high is not None else f"df of {low} or more"
