@@ -478,6 +478,7 @@ def test_a_p_that_fits_other_df_than_the_guessed_ones_is_a_warning_naming_them()
         fit = re.search(r"df = (\d+) would|df from (\d+) to (\d+) would", entry.message)
         low, high = (int(fit.group(1)),) * 2 if fit.group(1) else (int(fit.group(2)), int(fit.group(3)))
         assert low <= df <= high and "N earlier in the text" in entry.message
+        assert entry.comment().startswith("Warning: The statistic gives no df") and "Suggested" not in entry.comment()  # (the text as typed)
         value, reported = float(f"{t:.2f}"), float(text)
         for k in (low - 1, high + 1):  # the df just outside the range named do not give the printed p from the printed t
             if k >= 1:

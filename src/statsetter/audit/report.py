@@ -89,7 +89,7 @@ class Entry:
             said.append(f"The statistic is restyled in the tracked change; {self._numbers_said()}")
         elif kept or (kept is None and self.kept):
             said.append(f"Not restyled: {kept or self.kept}.")
-        if self.suggestion:
+        if self.suggestion and (self.suggestion != self.found or any(f.severity == "style" for f in chosen)):  # (the text as typed: nothing to suggest)
             said.append(f"Suggested: {self.suggestion}")
         return f"{severity.capitalize()}: " + " ".join(said)
 
