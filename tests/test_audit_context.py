@@ -495,6 +495,23 @@ def test_a_p_that_fits_other_df_than_the_guessed_ones_is_a_warning_naming_them()
     assert impossible.codes[0] == "p-does-not-follow" and impossible.severity == "error"
 
 
+def test_a_tables_df_are_guessed_from_the_text_above_it_only_as_a_guess(tmp_path):
+    """A table of t's without df (their p from scipy on 28 df: a subgroup of 30) right below body text, not a caption:
+    a χ²'s own N in that text ("χ²(1, N = 80)") is that test's sample and gives the table nothing — it had given df 78
+    and two errors; a plain N there is a guess, so a p that fits other df is a warning naming them (df-unstated); a
+    table's own caption ("Table 2 … (N = 80)") still makes the error."""
+    rows = [("Measure", "t", "p"), ("Anxiety", "2.10", f"{_p2(2.10, 28):.3f}"), ("Sleep", "1.20", f"{_p2(1.20, 28):.3f}")]
+    chi = "Smokers were more often men, χ²(1, N = 80) = 4.20, p = .040. Among the smokers, scores were compared."
+    cases = ((chi, [[], []]), ("All 80 took part (N = 80); among the smokers, scores were compared.", [["df-unstated"]] * 2),
+             ("Table 2 Comparisons of the smokers (N = 80)", [["p-does-not-follow"]] * 2))
+    for k, (caption, codes) in enumerate(cases):
+        entries = [e for e in audit_file(_doc(tmp_path / f"t{k}.docx", tables=[(caption, rows)])) if e.found.startswith("t")]
+        assert [e.codes for e in entries] == codes, (caption, [(e.codes, e.message) for e in entries])
+        if codes[0] == ["df-unstated"]:
+            assert all(re.search(r"df (?:= 28|from \d+ to \d+) would", e.message) for e in entries) and "in the text above the table" in entries[0].message
+            assert all(int(a) <= 28 <= int(b) for e in entries for a, b in re.findall(r"df from (\d+) to (\d+) would", e.message))
+
+
 def test_one_tailed_said_in_the_sentence_is_a_note():
     p1 = stats.t.sf(1.80, 40)
     units = [Unit("p1", f"As predicted, t(40) = 1.80, p = {p1:.3f}, one-tailed."), Unit("p2", f"Scores rose, t(40) = 1.80, p = {p1:.3f}.")]

@@ -157,11 +157,18 @@ def _totals(text: str) -> list[int]:
     return [int(m.group(1)) for m in _SIZE.finditer(text) if m.group(0).lstrip()[0] == "N"]
 
 
+# what stands before a test's own N inside its parentheses, "χ²(1, N = 80)": that test's sample, not the caption's
+_OWN_N = re.compile(r"[(\[]\s*\d+(?:[.,]\d+)?\s*[,;]\s*$")
+
+
 def caption_sizes(text: str) -> tuple[list[int], int | None]:
     """Group sizes (``n = 30``; ``n = 21 per group`` is two of 21) and the
-    total (``N = 42``) a caption or paragraph gives."""
+    total (``N = 42``) a caption or paragraph gives (not a χ²'s own N, inside
+    its parentheses)."""
     groups, total = [], None
     for m in _SIZE.finditer(text):
+        if _OWN_N.search(text, max(0, m.start() - 16), m.start()):
+            continue
         if m.group(0).lstrip()[0] == "N":
             total = int(m.group(1)) if total is None else max(total, int(m.group(1)))
         else:
@@ -180,25 +187,26 @@ class Reading:
 
 
 def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str, welch: bool = False,
-                total_guessed: bool = False) -> list[Reading]:
+                total_guessed: bool = False, groups_guessed: bool = False) -> list[Reading]:
     """The df a t or r without df may have, from group sizes and a total N;
     each reading says what it assumes. A t said to be Welch's has its df
     anywhere from the smaller group's n − 1 to n₁ + n₂ − 2 (one reading, a
-    range, from two group sizes; none without them). ``total_guessed``: the
-    N is not given with the statistic (its paragraph's, or the text's before)."""
+    range, from two group sizes; none without them). ``total_guessed``,
+    ``groups_guessed``: the N, the group sizes, are not given with the
+    statistic (its paragraph's, the text's before, a table's body text above)."""
     out: list[Reading] = []
     if symbol == "t" and welch:
         if len(groups) >= 2 and min(groups[:2]) >= 2:
             low, high = min(groups[:2]) - 1.0, groups[0] + groups[1] - 2.0
             return [Reading((low,), f"Welch's df, somewhere from {low:g} (the smaller group's n − 1) to {high:g} (n₁ + n₂ − 2); "
-                                    f"the group sizes {where}", high)]
+                                    f"the group sizes {where}", high, groups_guessed)]
         return []
     if symbol == "t":
         if len(groups) == 2:
             a, b = groups
-            out.append(Reading((a + b - 2.0,), f"df = {a} + {b} − 2 = {a + b - 2} (Student's t; the group sizes {where})"))
+            out.append(Reading((a + b - 2.0,), f"df = {a} + {b} − 2 = {a + b - 2} (Student's t; the group sizes {where})", guessed=groups_guessed))
         if len(groups) == 1:
-            out.append(Reading((groups[0] - 1.0,), f"df = {groups[0]} − 1 (one-sample or paired t; n {where})"))
+            out.append(Reading((groups[0] - 1.0,), f"df = {groups[0]} − 1 (one-sample or paired t; n {where})", guessed=groups_guessed))
         if total is not None and total > 2:
             out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (two independent groups; N {where})", guessed=total_guessed))
             out.append(Reading((total - 1.0,), f"df = N − 1 = {total - 1} (one-sample or paired t; N {where})", guessed=total_guessed))
@@ -329,13 +337,17 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple
 
 
 def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str,
-                     stars: "dict[str, tuple[str, Number]] | None" = None, said: str = "", welch: bool = False) -> tuple[list[TableStatistic], set[int]]:
+                     stars: "dict[str, tuple[str, Number]] | None" = None, said: str = "", welch: bool = False,
+                     labelled: bool = True) -> tuple[list[TableStatistic], set[int]]:
     """The statistics of one table: ``cells`` are (row, column, unit, the
     statistics the text parser found in it); ``stars``, the p bounds its note
     gives its marks (``star_bounds``): a statistic marked so, without a p of
     its own, has that bound for its p; ``said``, the caption and note (a
     correlation matrix's N); ``welch``, whether they say the t tests are
-    Welch's (a t without df then has the df range Welch's test allows). Returns the statistics and the ids of
+    Welch's (a t without df then has the df range Welch's test allows);
+    ``labelled``, whether the caption is the table's own ("Table 3 …"), not
+    body text above it, whose N and group sizes may be another sample's: a df
+    read from them is a guess (`Reading.guessed`). Returns the statistics and the ids of
     parsed statistics that became part of another (a lone p in the cell
     after a statistic)."""
     rows: dict[int, dict[int, tuple[Unit, list[Reported]]]] = {}
@@ -345,6 +357,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     with_df: set[int] = set()  # the columns whose head says their cells give the df ("t test (df)")
     head_dfs: dict[int, tuple[Number, ...]] = {}  # the df a column's head gives ("F-ratio (1, 18)")
     groups, total = caption_sizes(caption)
+    groups_guessed = not labelled  # (until a row of the table gives its own)
     found: list[TableStatistic] = []
     used: set[int] = set()
     error_dfs: dict[int, list[tuple[int, float | None, dict[str, float | None]]]] = {}
@@ -378,7 +391,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
             if sizes:
-                groups = sizes
+                groups, groups_guessed = sizes, False
             continue
         # a ratio and its CI in one cell, its p in the next p column to the right (a crude and an adjusted pair side by side)
         for c, cell in ratios.items():
@@ -454,7 +467,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
                 readings = ()
             else:
-                readings = tuple(df_readings(role, groups, total, "in the table", welch))
+                where = "in the table" if labelled else "in the text above the table"
+                readings = tuple(df_readings(role, groups, total, where if groups_guessed or not groups else "in the table", welch,
+                                             total_guessed=not labelled, groups_guessed=groups_guessed))
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
         # a statistic typed whole in a cell, its p further along the row
         ordered = sorted(row)
