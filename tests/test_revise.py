@@ -666,3 +666,28 @@ def test_descriptives_alone_are_restyled_symbol_for_symbol_and_ama_says_why_not(
     main(["audit", str(tmp_path / "m.docx"), "--style", "ama11", "--revise", str(tmp_path / "ama.docx")])
     comments = zipfile.ZipFile(tmp_path / "ama.docx").read("word/comments.xml").decode()
     assert comments.count("writes means and SDs in words") == 5
+
+
+def test_descriptives_with_a_p_or_an_effect_size_and_no_test_are_restyled_piece_by_piece():
+    """A cluster of descriptives that carries a p or an effect size but no test ("(M = 4.43 vs. M = 3.10, p<.01)",
+    "(M=4.43, SD=2.22), d = 0.45", "(M = 3.10), η2p = .06") is restyled piece by piece as descriptives alone are: a
+    threshold kept (no test gives it exactly), an exact p as the style prints it. Before, the one with a p had been
+    left as typed without a reason, and η²'s subscript p had been read as a p value in the restyled text, so that
+    "η2p = .06" seemed to lose its number. With an interval or a ratio the cluster is left as typed, saying why.
+    (Practice: APA 7 §6.45 for the italics; the cases are typings of ours.)"""
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    cases = {
+        "The groups differed (M = 4.43 vs. M = 3.10, p<.01).": ["M = 4.43", "M = 3.10, p < .01"],
+        "Scores were higher (M=4.43, SD=2.22), d = 0.45.": ["M = 4.43, SD = 2.22), d = 0.45"],
+        "Recall fell (M = 3.10), η2p = .06.": ["M = 3.10), η²ₚ = .06"],
+        "Scores (M = 4.43, SD = 2.22, p = 0.0004).": ["M = 4.43, SD = 2.22, p < .001"],
+    }
+    for text, revised in cases.items():
+        entries = audit_units([Unit("p", text, [(0, 0)])], "apa7", restyle=True, check_italics=True)
+        assert [e.revision.plain().replace("\u00a0", " ") if e.revision else e.kept for e in entries] == revised, text
+        assert all(e.suggestion.replace("\u00a0", " ") == r for e, r in zip(entries, revised)), text
+    (kept,) = audit_units([Unit("p", "Higher (M = 4.43, SD = 2.22), d = 0.45, 95% CI [0.05, 0.85].", [(0, 0)])], "apa7", restyle=True,
+                          check_italics=True)
+    assert kept.revision is None and "restyle them by hand" in kept.kept

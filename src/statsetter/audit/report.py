@@ -115,10 +115,10 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
     """The statistic restyled (``house``: its `house_text`, when made already). A p the audit found not to follow
     from the statistic is never repeated: the suggestion carries the p recomputed from the printed statistic and df,
     and says so."""
+    if rep.symbol is None and rep.descriptives:  # descriptives without a test: each symbol as the style sets it, the words between kept
+        new = house_text(rep, style, alpha) if house is _UNMADE else house
+        return new.plain() if isinstance(new, StyledText) else ""
     if rep.symbol is None and not rep.effects:
-        if rep.p is None and rep.descriptives:  # descriptives alone: each symbol as the style sets it, the words between kept
-            new = house_text(rep, style, alpha) if house is _UNMADE else house
-            return new.plain() if isinstance(new, StyledText) else ""
         if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
             return ""
         if rep.p.op != "=":

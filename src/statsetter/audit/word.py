@@ -20,7 +20,7 @@ from pathlib import Path
 from typing import TYPE_CHECKING, Sequence
 
 from ..style.numbers import numbers_for
-from ..styled import StyledText
+from ..styled import StyledText, escape_markup
 from .checks import RATIOS, Finding
 from .parsing import PValue, Reported
 from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_font, symbol_text
@@ -43,6 +43,7 @@ _NOTATION_WORDS = {"df", "ns", "chi", "square", "squared", "eta", "partial", "om
                    "rho", "tau", "phi", "cramér", "cramer", "value", "confidence", "interval"}
 _WORD = re.compile(r"[^\W\d_⁰¹²³⁴⁵⁶⁷⁸⁹₀₁₂₃₄₅₆₇₈₉]{2,}")  # (super- and subscript digits are not letters: F₂ and χ²₂ are no words)
 _DIGITS = re.compile(r"\d+(?:[.,]\d+)*|[.,]\d+")
+_LETTERS = re.compile(r"[^\W\d_]")
 _P_IN_TEXT = re.compile(r"(?<![A-Za-z])[pP]\s*([=<>≤≥])\s*(\d*[.,]?\d+)")
 
 
@@ -69,8 +70,8 @@ def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> St
     from ..rendering.sentences import render
     from .checks import to_record
 
-    if rep.symbol is None and rep.p is None and not rep.effects and rep.descriptives:
-        return descriptives_text(rep, style)
+    if rep.symbol is None and rep.descriptives:
+        return descriptives_text(rep, style, alpha)
     try:
         record = to_record(rep, alpha, style)
         if rep.op != "=" and not with_p:  # (an exact p the author gave, doubted, is not repeated either)
@@ -94,16 +95,22 @@ def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> St
     return _bounded(text, rep.op, style, threshold_p(rep, style, style.keep_together) if with_p and not ns else _allowed_p(rep, style))
 
 
-def descriptives_text(rep: Reported, style: "Style") -> StyledText | None:
-    """A group's descriptives alone ("n = 28, M = 3.11, SD=1.95"; "M = 34.2 years, SD = 11.0") as the style sets
-    each: its symbol (italic in APA), "=" spaced, the number with the author's decimals in the style's marks; the
-    text between them as typed (no sentence form of its own: what a group is, the text says). None where the style
-    writes means and SDs in words (AMA 11's "mean [SD]"), which no symbol-for-symbol change gives, and for a negative SD."""
+def descriptives_text(rep: Reported, style: "Style", alpha: float = 0.05) -> StyledText | None:
+    """A group's descriptives without a test ("n = 28, M = 3.11, SD=1.95"; "M = 34.2 years, SD = 11.0"; with a p or
+    an effect size, "M = 3.10, p<.01", "M = 3.10), d = 0.45") as the style sets each: its symbol (italic in APA), "="
+    spaced, the number with the author's decimals in the style's marks, a p as the style prints it (a threshold kept:
+    no test gives it exactly); the text between them as typed (no sentence form of its own: what a group is, the text
+    says). None where the style writes means and SDs in words (AMA 11's "mean [SD]"), which no symbol-for-symbol
+    change gives, for a negative SD, and for an effect size with an interval or a ratio (restyled by hand)."""
     if style.spells_out or any(d.name == "SD" and d.number.value < 0 for d in rep.descriptives):  # (an impossible SD: no text, as
         return None  # a record the renderer refuses has none)
+    if rep.ci is not None or any(e.ci is not None or e.name in RATIOS for e in rep.effects):
+        return None
     num = numbers_for(style)
     space = style.keep_together
-    pieces = [(d.symbol_start, d.number.end, d.name, num.number(d.number.value, d.name, d.number.decimals)) for d in rep.descriptives]
+    pieces: list[tuple[int, int, str, "str | StyledText"]] = [
+        (d.symbol_start, d.number.end, d.name, f"{space}={space}{num.number(d.number.value, d.name, d.number.decimals)}")
+        for d in rep.descriptives + rep.effects]
     if rep.n is not None:  # its symbol: before its "=" (an n read with the cluster, "n = 28, M = …")
         k = rep.n.start - rep.start
         while k > 0 and rep.text[k - 1].isspace():
@@ -113,12 +120,25 @@ def descriptives_text(rep: Reported, style: "Style") -> StyledText | None:
             while k > 0 and rep.text[k - 1].isspace():
                 k -= 1
             if k > 0 and rep.text[k - 1] in "nN":
-                pieces.append((rep.start + k - 1, rep.n.end, rep.text[k - 1], rep.n.text))
+                pieces.append((rep.start + k - 1, rep.n.end, rep.text[k - 1], f"{space}={space}{rep.n.text}"))
+    p = rep.p
+    if p is not None and p.op != "ns":  # ("ns" stays as typed: the style has no form for it)
+        if p.number is None or not 0 <= p.number.value <= 1:
+            return None
+        if p.op == "=":
+            op, shown = num.p(p.number.value, alpha, held=p.number.decimals) if p.number.value > 0 else num.p(0.0, alpha)
+            made = StyledText.from_markup(f"{style.symbol('p')}{space}{escape_markup(op)}{space}{shown}")
+        else:
+            made = threshold_p(rep, style, space)  # type: ignore[assignment]
+        if made is None:
+            return None
+        pieces.append((p.symbol_start, p.end, "", made))
     out, at = StyledText(""), rep.start
-    for start, end, symbol, shown in sorted(pieces):
+    for start, end, symbol, shown in sorted(pieces, key=lambda piece: piece[0]):
         if start < at:  # (pieces overlap only in a text the parser read oddly: left as typed)
             return None
-        out = out + rep.text[at - rep.start : start - rep.start] + StyledText.from_markup(style.symbol(symbol)) + f"{space}={space}{shown}"
+        out = out + rep.text[at - rep.start : start - rep.start]
+        out = out + (shown if isinstance(shown, StyledText) else StyledText.from_markup(style.symbol(symbol)) + shown)
         at = end
     return out + rep.text[at - rep.start :]
 
@@ -197,6 +217,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     if not isinstance(new, StyledText):  # left as typed
         if rep.symbol is None and rep.descriptives and style.spells_out:
             return None, "the style writes means and SDs in words (\u201cmean [SD], 2.86 [0.59]\u201d), which a change symbol for symbol cannot give: reword the sentence"
+        if rep.symbol is None and rep.descriptives and (rep.effects or rep.ci is not None):
+            return None, "descriptives beside an interval or a ratio, without their test, have no form of the style's; restyle them by hand"
         return None, "the statistic cannot be restyled"
     plain = new.plain()
     old = rep.text
@@ -294,7 +316,8 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
         blank[at : old_p.end - rep.start] = " " * (old_p.end - rep.start - at)
     # (a subscript's comma parts two df, F₂,₉₇: apart, not one number 297, on both sides)
     old_text = _SUBSCRIPT_COMMA.sub(" ", "".join(blank)).translate(_SUBSCRIPT_DIGITS)
-    new_text = "".join(" " * len(t) if "sup" in styles else t.replace(",", " ") if "sub" in styles else t
+    # (a subscript's letters label a symbol — η²p's p, r's s — and are never a p value)
+    new_text = "".join(" " * len(t) if "sup" in styles else _LETTERS.sub("_", t.replace(",", " ")) if "sub" in styles else t
                        for t, styles in new.segments()).translate(_SUBSCRIPT_DIGITS)
     new_p = _P_IN_TEXT.search(new_text)
     if new_p is not None:
