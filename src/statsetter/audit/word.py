@@ -217,7 +217,7 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     if not isinstance(new, StyledText):  # left as typed
         if rep.symbol is None and rep.descriptives and style.spells_out:
             return None, "the style writes means and SDs in words (\u201cmean [SD], 2.86 [0.59]\u201d), which a change symbol for symbol cannot give: reword the sentence"
-        if rep.symbol is None and rep.descriptives and (rep.effects or rep.ci is not None):
+        if rep.symbol is None and rep.descriptives and (rep.ci is not None or any(e.ci is not None or e.name in RATIOS for e in rep.effects)):
             return None, "descriptives beside an interval or a ratio, without their test, have no form of the style's; restyle them by hand"
         return None, "the statistic cannot be restyled"
     plain = new.plain()
