@@ -510,6 +510,12 @@ def test_a_tables_df_are_guessed_from_the_text_above_it_only_as_a_guess(tmp_path
         if codes[0] == ["df-unstated"]:
             assert all(re.search(r"df (?:= 28|from \d+ to \d+) would", e.message) for e in entries) and "in the text above the table" in entries[0].message
             assert all(int(a) <= 28 <= int(b) for e in entries for a, b in re.findall(r"df from (\d+) to (\d+) would", e.message))
+    # LaTeX's \caption is the table's own too (the table environment's first paragraph)
+    cells = " \\\\\n".join(" & ".join(row) for row in rows)
+    tex = tmp_path / "t.tex"
+    tex.write_text("Scores were compared.\n\n\\begin{table}\n\\caption{Comparisons of the smokers (N = 80)}\n"
+                   f"\\begin{{tabular}}{{lrr}}\n{cells} \\\\\n\\end{{tabular}}\n\\end{{table}}\n", encoding="utf-8")
+    assert [e.codes for e in audit_file(tex) if e.found.startswith("t")] == [["p-does-not-follow"]] * 2
 
 
 def test_one_tailed_said_in_the_sentence_is_a_note():

@@ -226,7 +226,8 @@ def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
 _NOTE_GOES_ON = re.compile(rf"\s*(?:[{_SIGNIFICANCE}]{{1,4}}\s*[pP]\s*[<≤]|[a-d]\s?[A-Z]|Note\b)")
 
 
-_TABLE_LABEL = re.compile(r"\s*[*_]{0,2}(?:Table|TABLE|Tab\.)\s*[0-9IVXA-Z]")  # a table's label: "Table 3", "**Table 3**", "TABLE IV"
+# a table's own caption: its label ("Table 3", "**Table 3**", "TABLE IV"), pandoc's "Table: …" or ": …", LaTeX's \caption
+_TABLE_LABEL = re.compile(r"\s*(?:[*_]{0,2}(?:Table|TABLE|Tab\.)\s*[0-9IVXA-Z]|Table:|: )|[\s\S]*\\caption\b")
 
 
 def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
