@@ -117,6 +117,24 @@ def test_cli_fill(chapter, tmp_path, capsys):
     assert "r(98) = .32" in pdf_text(out)
 
 
+def test_a_marker_of_another_form_is_said_not_passed_over(tmp_path, capsys):
+    """"[[corr|bogus]]" (a form the syntax has not), "[[two words]]" and "[[score_diff | Sentence]]" look like markers
+    but are none: each is said as unknown, with the forms after '|' where one was given, and the run ends with exit 1
+    (they had been passed over in silence, left in the chapter). "[[corr]]" beside them is filled."""
+    d = docx.Document()
+    d.add_paragraph("See [[corr|bogus]], [[two words]], [[score_diff | Sentence]] and [[corr]].")
+    chapter = tmp_path / "c.docx"
+    d.save(str(chapter))
+    recs = tmp_path / "records.json"
+    recs.write_text(dump_records(RECORDS))
+    code = main(["fill", str(chapter), "--records", str(recs), "--out", str(tmp_path / "out.docx")])
+    said = capsys.readouterr().out
+    assert code == 1 and "filled 1 marker(s)" in said
+    assert "unknown marker [[corr|bogus]] in body paragraph 1 (left as it is; after '|' a marker takes stats, sentence or table, not 'bogus')" in said
+    assert "unknown marker [[two words]] in body paragraph 1 (left as it is)" in said
+    assert "not 'Sentence'" in said
+
+
 @pytest.mark.parametrize(
     "content, message",
     [

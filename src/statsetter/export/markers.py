@@ -36,6 +36,8 @@ __all__ = ["MARKER", "FillReport", "fill_chapter"]
 
 MARKER = re.compile(r"\[\[\s*(" + ID_PATTERN + r")\s*(?:\|\s*(stats|sentence|table)\s*)?\]\]")
 _W = "{http://schemas.openxmlformats.org/wordprocessingml/2006/main}"
+_LOOSE = re.compile(r"\[\[([^\[\]\n]{0,200})\]\]")  # anything written as a marker
+_FORM = re.compile(r"\|\s*([^\]]*?)\s*\]\]$")
 
 
 @dataclass
@@ -149,6 +151,10 @@ def _fill_paragraph(paragraph, lookup, where: str, report: FillReport, used: set
     if "[[" not in full:
         return
     matches = list(MARKER.finditer(full))
+    known = {(m.start(), m.end()) for m in matches}
+    for m in _LOOSE.finditer(full):  # a marker of another form ("[[id|bogus]]", "[[two words]]"): said, never passed over
+        if (m.start(), m.end()) not in known:
+            report.unknown.append((m.group(0), where))
     tables_after = False
     for m in reversed(matches):
         key, form = _marker(m)
@@ -350,7 +356,9 @@ def _figure_parts(document, model: "FigureModel", style: "Style", width: int, ro
 def describe(report: FillReport) -> Iterable[str]:
     yield f"filled {len(report.filled)} marker(s)"
     for marker, where in report.unknown:
-        yield f"unknown marker {marker} in {where} (left as it is)"
+        form = _FORM.search(marker)
+        hint = f"; after '|' a marker takes stats, sentence or table, not {form.group(1)!r}" if form and form.group(1) not in ("stats", "sentence", "table") else ""
+        yield f"unknown marker {marker} in {where} (left as it is{hint})"
     if report.unused:
         shown = ", ".join(report.unused[:8]) + (f" and {len(report.unused) - 8} more" if len(report.unused) > 8 else "")
         yield f"{len(report.unused)} record(s) not placed by any marker: {shown}"
