@@ -8,7 +8,10 @@ over a file that was read (after symlinks and ``..``; on a case-insensitive
 file system the inode comparison catches a differently cased name). Inside
 :func:`transaction` every output is staged and renamed only when the whole
 transaction succeeds, so a failed or interrupted run leaves the previous
-outputs as they were and no temporary files.
+outputs as they were and no temporary files. A run killed outright
+(SIGKILL, a power cut) cannot remove its own: each temporary file's name
+carries its process's id, and the next write to the same target removes
+those of processes no longer running.
 """
 
 from __future__ import annotations
@@ -222,15 +225,46 @@ def check_output(path: "str | Path", inputs: Iterable["str | Path"] = ()) -> Pat
     return target
 
 
+def _alive(pid: int) -> bool:
+    """Whether process ``pid`` runs (on a system that cannot tell, it is taken to)."""
+    if os.name != "posix":
+        return True
+    try:
+        os.kill(pid, 0)
+    except ProcessLookupError:
+        return False
+    except OSError:  # (another user's process: running)
+        return True
+    return True
+
+
+def _remove_orphans(folder: Path, name: str) -> None:
+    """The temporary files of ``name`` that killed runs left behind (".NAME.PID.xxxx.tmp" of a process that no
+    longer runs): removed, so that they do not pile up beside the outputs."""
+    prefix = f".{name}."
+    try:
+        entries = list(os.scandir(folder))
+    except OSError:
+        return
+    for entry in entries:
+        if not (entry.name.startswith(prefix) and entry.name.endswith(".tmp")):
+            continue
+        pid = entry.name[len(prefix) :].split(".", 1)[0]
+        if pid.isdigit() and int(pid) != os.getpid() and not _alive(int(pid)):
+            with contextlib.suppress(OSError):
+                os.unlink(entry.path)
+
+
 def write_atomic(path: "str | Path", data: "str | bytes", *, inputs: Iterable["str | Path"] = ()) -> Path:
     """Write ``data`` to ``path`` through a temporary file in the same folder.
     Refuses when ``path`` is an input; the old file is untouched on failure."""
     target = check_output(path, inputs)
     folder = target.parent if str(target.parent) else Path(".")
     raw = data.encode("utf-8") if isinstance(data, str) else data
+    _remove_orphans(folder, target.name)
     blocked = _block_signals()  # a kill between creating and recording the temporary file would leave it behind
     try:
-        fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.", suffix=".tmp", dir=folder)
+        fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.{os.getpid()}.", suffix=".tmp", dir=folder)
         _LIVE.add(tmp)
     finally:
         _unblock_signals(blocked)

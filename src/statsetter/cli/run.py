@@ -64,6 +64,12 @@ def run(ns: argparse.Namespace) -> int:
     from ..plan import load_plan, write_outputs
 
     plan = load_plan(ns.plan)
+    if ns.format != "json" and plan.chapter:  # said before the analyses run, not after
+        from ..plan import PlanError
+
+        source = plan.resolve(plan.chapter["path"])
+        if not source.is_file():
+            raise PlanError(f"{plan.where('chapter.path')}: {source}: no such file")
     result = _computed(plan)
     if ns.format == "json":
         from ..records import dump_records
