@@ -153,6 +153,11 @@ def test_style_checks_follow_the_style():
     assert "hyphen-minus" in codes("t(38) = -2.14, p = .039")
     assert "decimals" in codes("t(38) = 2.1, p = .04")
     assert "decimals" in codes("t(38) = 1.99, p = .0496")  # APA: three decimals at most; the suggestion keeps the decision
+    # an interval beside an F is an effect size's whose name the text left out (η²p's 90% CI: Steiger, 2004, from memory):
+    # its leading zero is not judged either way (it had been a missing-leading-zero finding, as if the F's own); a t's
+    # interval is its estimate's, which may exceed 1
+    assert codes("F(1, 38) = 4.41, p = .042, 90% CI [.00, .26]") == [] == codes("F(1, 38) = 4.41, p = .042, 90% CI [0.00, 0.26]")
+    assert "missing-leading-zero" in codes("t(38) = 2.10, p = .042, 95% CI [.10, .94]")
     # in AMA 11, P has two decimals and a capital P is right
     assert codes("t(38) = 2.14, P = .04", "ama11") == []
     for code in ("leading-zero", "p-threshold", "spacing", "italics", "decimals"):

@@ -394,10 +394,14 @@ def _numbers_with_quantity(rep: Reported) -> list[tuple[Number, str]]:
         out.append((e.number, e.name))
         if e.ci is not None:
             out += [(e.ci.low, e.name), (e.ci.high, e.name)]
-    if rep.ci is not None:
-        q = rep.symbol if rep.symbol in ("r", "rs", "tau_b") else "default"
+    if rep.ci is not None:  # (beside an F, χ² or H, whose own CI nobody gives, an effect size's whose name the text left out:
+        # η²p's 90% CI, say — whether it may exceed 1 is unknown)
+        q = rep.symbol if rep.symbol in ("r", "rs", "tau_b") else _UNNAMED if rep.symbol in ("F", "chi2", "H", "Q") else "default"
         out += [(rep.ci.low, q), (rep.ci.high, q)]  # type: ignore[list-item]
     return out
+
+
+_UNNAMED = "unnamed"  # a quantity the text does not name: its leading zero is not judged
 
 
 def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic: Sequence[tuple[int, int]] | None,
@@ -416,7 +420,9 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
     zero, no_zero, minus = [], [], []
     for n, q in _numbers_with_quantity(rep):
         digits = n.digits
-        if digits.startswith("0" + mark) and num.is_bounded(q):
+        if q is _UNNAMED:
+            pass
+        elif digits.startswith("0" + mark) and num.is_bounded(q):
             zero.append(n.text)
         elif digits.startswith(mark) and not num.is_bounded(q):
             no_zero.append(n.text)
