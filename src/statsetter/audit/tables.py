@@ -187,13 +187,15 @@ class Reading:
 
 
 def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str, welch: bool = False,
-                total_guessed: bool = False, groups_guessed: bool = False) -> list[Reading]:
+                total_guessed: bool = False, groups_guessed: bool = False, total_where: str | None = None) -> list[Reading]:
     """The df a t or r without df may have, from group sizes and a total N;
     each reading says what it assumes. A t said to be Welch's has its df
     anywhere from the smaller group's n − 1 to n₁ + n₂ − 2 (one reading, a
     range, from two group sizes; none without them). ``total_guessed``,
     ``groups_guessed``: the N, the group sizes, are not given with the
-    statistic (its paragraph's, the text's before, a table's body text above)."""
+    statistic (its paragraph's, the text's before, a table's body text above);
+    ``total_where``, where the N is when not where the group sizes are."""
+    said = total_where or where
     out: list[Reading] = []
     if symbol == "t" and welch:
         if len(groups) >= 2 and min(groups[:2]) >= 2:
@@ -208,10 +210,10 @@ def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: st
         if len(groups) == 1:
             out.append(Reading((groups[0] - 1.0,), f"df = {groups[0]} − 1 (one-sample or paired t; n {where})", guessed=groups_guessed))
         if total is not None and total > 2:
-            out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (two independent groups; N {where})", guessed=total_guessed))
-            out.append(Reading((total - 1.0,), f"df = N − 1 = {total - 1} (one-sample or paired t; N {where})", guessed=total_guessed))
+            out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (two independent groups; N {said})", guessed=total_guessed))
+            out.append(Reading((total - 1.0,), f"df = N − 1 = {total - 1} (one-sample or paired t; N {said})", guessed=total_guessed))
     elif symbol in ("r", "rs") and total is not None and total > 2:
-        out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (N {where})", guessed=total_guessed))
+        out.append(Reading((total - 2.0,), f"df = N − 2 = {total - 2} (N {said})", guessed=total_guessed))
     seen, unique = set(), []
     for r in out:
         if r.df not in seen:
@@ -467,9 +469,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
                 readings = ()
             else:
-                where = "in the table" if labelled else "in the text above the table"
-                readings = tuple(df_readings(role, groups, total, where if groups_guessed or not groups else "in the table", welch,
-                                             total_guessed=not labelled, groups_guessed=groups_guessed))
+                above = "in the table" if labelled else "in the text above the table"
+                readings = tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,
+                                             total_guessed=not labelled, groups_guessed=groups_guessed, total_where=above))
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
         # a statistic typed whole in a cell, its p further along the row
         ordered = sorted(row)
