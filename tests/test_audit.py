@@ -212,6 +212,23 @@ def test_each_groups_descriptives_are_a_statistic_of_their_own_with_their_own_n(
     assert (first.found, second.found) == ("M = 4.43, SD = 2.22", "n = 28, M = 3.10, SD = 1.95") and first.codes == []
 
 
+def test_a_means_interval_must_contain_the_mean():
+    """A mean typed with its interval ("M = 4,201.75, 95% CI [4,116.46, 4,287.05]") is checked as an effect size's is:
+    the interval must contain it. Numbers: pingouin's penguins, body mass, with the t interval scipy gives; a CI
+    shifted off the mean is a mutation of ours. An interval named for something else in words between ("a difference
+    of 0.5, 95% CI …") is not the mean's, and is not checked against it."""
+    import pingouin as pg
+    from scipy import stats
+
+    mass = pg.read_dataset("penguins")["body_mass_g"].dropna()
+    low, high = stats.t.interval(0.95, len(mass) - 1, loc=mass.mean(), scale=stats.sem(mass))
+    right = f"Body mass (M = {mass.mean():,.2f}, SD = {mass.std():,.2f}, 95% CI [{low:,.2f}, {high:,.2f}])."
+    assert codes(right) == []
+    assert "ci-excludes-estimate" in codes(f"Body mass (M = {mass.mean():,.2f}, 95% CI [{high + 10:,.2f}, {high + 200:,.2f}]).")
+    assert "ci-excludes-estimate" in codes("Latency (Mdn = 4, 95% CI [5, 6]).")
+    assert codes("Scores (M = 3.20, SD = 0.40) exceeded the norm by a difference of 0.50, 95% CI [0.20, 0.80].") == []
+
+
 def test_handbook_critical_values():
     # Critical values from the printed tables of a statistics handbook (recalled from memory, three
     # decimals): at each, the recomputed two-sided (t) or upper-tail (F, χ²) p is the table's alpha.

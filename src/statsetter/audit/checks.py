@@ -14,6 +14,7 @@ from __future__ import annotations
 import bisect
 import functools
 import math
+import re
 from dataclasses import dataclass, replace
 from typing import Callable, Sequence
 
@@ -23,7 +24,8 @@ from ..pvalues import spearman_p, upper_tail
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
-from .parsing import Number, Reported, _remembered
+from .parsing import Effect, Number, Reported, _remembered
+from .parsing import Interval as TypedInterval
 
 # code: (what it means, the docs/reporting-rules.md rule and its source)
 CODES: dict[str, tuple[str, str]] = {
@@ -370,7 +372,8 @@ def impossible(rep: Reported) -> list[Finding]:
     if rep.ci is not None and rep.symbol in ("r", "rs", "tau_b") and rep.value is not None:
         intervals.append((rep.ci, rep.value, rep.symbol_text))
     elif rep.ci is not None:
-        intervals.append((rep.ci, None, ""))  # type: ignore[arg-type]
+        mean = _mean_of(rep, rep.ci) if rep.symbol is None and not rep.effects else None
+        intervals.append((rep.ci, mean.number if mean is not None else None, mean.symbol_text if mean is not None else ""))  # type: ignore[arg-type]
     for ci, estimate, name in intervals:
         if ci.low.value > ci.high.value:
             out.append(Finding("ci-reversed", "The lower limit of the CI is above the upper.", f"[{ci.low.text}, {ci.high.text}]"))
@@ -379,6 +382,23 @@ def impossible(rep: Reported) -> list[Finding]:
             if not ci.low.value - slack <= estimate.value <= ci.high.value + slack:
                 out.append(Finding("ci-excludes-estimate", f"The CI does not contain {name} = {estimate.text}.", f"[{ci.low.text}, {ci.high.text}]"))
     return out
+
+
+_BETWEEN = re.compile(r"[\s,;:()]*")
+
+
+def _mean_of(rep: Reported, ci: TypedInterval) -> Effect | None:
+    """The mean (or median) an interval follows in a cluster of descriptives ("M = 3.20, 95% CI [2.90, 3.50]", "M =
+    3.20, SD = 0.40, 95% CI …"): only punctuation and the mean's SD between them; None otherwise (a difference's
+    interval, say, named in words between)."""
+    end = ci.start
+    for d in sorted((d for d in rep.descriptives if d.end <= ci.start), key=lambda d: d.start, reverse=True):
+        if _BETWEEN.fullmatch(rep.text, d.end - rep.start, end - rep.start) is None:
+            return None
+        if d.name in ("M", "Mdn"):
+            return d
+        end = d.start
+    return None
 
 
 # -- style ----------------------------------------------------------------------
