@@ -276,7 +276,7 @@ def df_that_fit(rep: Reported, alpha: float) -> "tuple[int, int | None] | None":
     """The whole df (from 1) under which a t's or r's reported p follows from its printed value, as (the fewest, the
     most; None for no upper end), or None when no df gives it. A t's or r's two-sided p falls as its df grow (a t
     distribution's tail thins with its df), at both ends of the value's printed range, so the df that fit are one run,
-    found by bisection."""
+    found by a galloping search from 1 (a subgroup's df are few: a dozen p's each, not fifty)."""
     reported = reported_p_range(rep, alpha)
     if rep.symbol not in ("t", "r", "rs") or reported is None:
         return None
@@ -288,23 +288,39 @@ def df_that_fit(rep: Reported, alpha: float) -> "tuple[int, int | None] | None":
     if fewest is None or most is None or most[0] > reported[1] + 1e-12 or fewest[1] < reported[0] - 1e-12:
         return None
 
-    def first(test: "Callable[[int], bool]") -> int:  # the smallest df in [1, _MANY_DF] passing a test that, once passed, stays so
-        low, high = 1, _MANY_DF
+    def first(test: "Callable[[int], bool]", start: int) -> int:  # the smallest df from ``start`` on passing a test that, once
+        # passed, stays so (it passes at _MANY_DF): steps doubling from ``start``, then halving back
+        low, step = start, 1
+        while not test(high := min(start + step - 1, _MANY_DF)):
+            low, step = high + 1, step * 2
         while low < high:
             middle = (low + high) // 2
             low, high = (low, middle) if test(middle) else (middle + 1, high)
         return low
 
+    bounds = _printed_bounds(replace(rep, df=(Number("1", 1.0, 0, rep.start, rep.start),), p_range=None))
+
+    def end(df: int, which: int) -> float | None:  # one end of the p range at ``df`` (0: the lower, from the larger value)
+        if bounds is None:  # (a bound, "t > 2.50": both ends, as p_range has them)
+            found = ends(df)
+            return None if found is None else found[which]
+        try:
+            return _p_of(rep.symbol, bounds[2 if which == 0 else 0], (float(df),))  # type: ignore[arg-type]
+        except MissingExtra:
+            raise
+        except Exception:  # (as p_range: no p)
+            return None
+
     def too_high(df: int) -> bool:  # its p's lower end is above the reported range (false from the first df that fits on)
-        found = ends(df)
-        return found is not None and found[0] > reported[1] + 1e-12
+        found = end(df, 0)
+        return found is not None and found > reported[1] + 1e-12
 
     def below(df: int) -> bool:  # its p's upper end is below the reported range (true past the last df that fits)
-        found = ends(df)
-        return found is None or found[1] < reported[0] - 1e-12
+        found = end(df, 1)
+        return found is None or found < reported[0] - 1e-12
 
-    low = first(lambda df: not too_high(df))
-    high = None if not below(_MANY_DF) else first(below) - 1
+    low = first(lambda df: not too_high(df), 1)
+    high = None if not below(_MANY_DF) else first(below, low) - 1
     return None if high is not None and high < low else (low, high)
 
 
