@@ -225,6 +225,9 @@ def check_output(path: "str | Path", inputs: Iterable["str | Path"] = ()) -> Pat
     return target
 
 
+_HIDDEN: dict[str, list[str]] = {}  # folder: the hidden temporary names it held when first written to
+
+
 def _alive(pid: int) -> bool:
     """Whether process ``pid`` runs (on a system that cannot tell, it is taken to)."""
     if os.name != "posix":
@@ -241,18 +244,21 @@ def _alive(pid: int) -> bool:
 def _remove_orphans(folder: Path, name: str) -> None:
     """The temporary files of ``name`` that killed runs left behind (".NAME.PID.xxxx.tmp" of a process that no
     longer runs): removed, so that they do not pile up beside the outputs."""
+    key = os.path.realpath(folder)
+    hidden = _HIDDEN.get(key)
+    if hidden is None:  # the folder's hidden .tmp names, listed once a process (a folder of many files is listed once)
+        try:
+            hidden = _HIDDEN[key] = [e.name for e in os.scandir(folder) if e.name.startswith(".") and e.name.endswith(".tmp")]
+        except OSError:
+            return
     prefix = f".{name}."
-    try:
-        entries = list(os.scandir(folder))
-    except OSError:
-        return
-    for entry in entries:
-        if not (entry.name.startswith(prefix) and entry.name.endswith(".tmp")):
+    for found in hidden:
+        if not found.startswith(prefix):
             continue
-        pid = entry.name[len(prefix) :].split(".", 1)[0]
+        pid = found[len(prefix) :].split(".", 1)[0]
         if pid.isdigit() and int(pid) != os.getpid() and not _alive(int(pid)):
             with contextlib.suppress(OSError):
-                os.unlink(entry.path)
+                os.unlink(os.path.join(folder, found))
 
 
 def write_atomic(path: "str | Path", data: "str | bytes", *, inputs: Iterable["str | Path"] = ()) -> Path:
