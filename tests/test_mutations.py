@@ -215,3 +215,40 @@ def test_the_python_api_given_arguments_of_every_wrong_kind():
                 assert "argument" in str(error), (name, target.name, value, error)
                 seen["no such argument"] += 1
     assert seen["refused"] > 200, seen
+
+
+def test_generated_clusters_of_descriptives_keep_their_numbers_and_words_when_restyled():
+    """400 seeded clusters of descriptives, p's and effect sizes typed loosely ("n=37; M =3.71; SD=58.6", words and
+    brackets between), audited with restyling in APA 7 and AMA 11: none fails; no statistic without a test holds one
+    name twice (each group's mean is its own); every restyled text keeps the words and numbers as typed (to the
+    style's rounding; thousands grouped; a p as the style prints it). A campaign of 6,000 found no case otherwise."""
+    import re
+
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    rng = random.Random(24)
+    words = ["years", "points", "and", "vs.", "in the control group", "(", ")", ";", ",", "respectively"]
+
+    def piece() -> str:
+        name = rng.choice(["M", "SD", "n", "N", "Mdn", "M", "SD", "p", "d"])
+        if name == "p":
+            return rng.choice(["p = .03", "p<.001", "p = 0.042", "ns", "p > .05"])
+        value = str(rng.randint(2, 400)) if name in "nN" else f"{rng.uniform(0, 60):.{rng.randint(0, 3)}f}"
+        return f"{name}{rng.choice([' = ', '=', ' =', '= '])}{value}"
+
+    def numbers(text: str) -> list[float]:
+        plain = re.sub(r"[pP]\s*[=<>]\s*\d*\.?\d+", " ", text.replace(",", ""))
+        return [float(x) for x in re.findall(r"\d+(?:\.\d+)?|\.\d+", plain)]
+
+    for _ in range(400):
+        text = "Scores " + " ".join(piece() if rng.random() < 0.6 else rng.choice(words) for _ in range(rng.randint(1, 10))) + "."
+        for entry in audit_units([Unit("p", text, [(0, 0)])], rng.choice(["apa7", "ama11"]), restyle=True, grim_items=rng.choice([None, 1])):
+            if not re.search(r"(?<![A-Za-z])[tFrzχUHW]\s*[(=<>]", entry.found):
+                names = re.findall(r"(?<![A-Za-z])(M|SD|Mdn)\s*=", entry.found)
+                assert len(names) == len(set(names)), (text, entry.found)
+            if entry.revision is not None:
+                new = entry.revision.plain().replace("\u00a0", " ")
+                before, after = numbers(entry.found), numbers(new)  # (the style rounds to two decimals at most: 0.005)
+                assert len(before) == len(after) and all(abs(a - b) <= 0.0051 for a, b in zip(before, after)), (entry.found, new)
+                assert re.findall(r"[a-z]{2,}", new) == re.findall(r"[a-z]{2,}", entry.found), (entry.found, new)
