@@ -229,6 +229,25 @@ def test_a_means_interval_must_contain_the_mean():
     assert codes("Scores (M = 3.20, SD = 0.40) exceeded the norm by a difference of 0.50, 95% CI [0.20, 0.80].") == []
 
 
+def test_a_mean_and_sd_typed_together_are_read_as_a_mean_and_an_sd():
+    """"M ± SD = −0.18 ± 1.37", as medical and biological texts type a mean and its SD together: the first number is
+    the mean, the one after "±" the SD. The first had been read as the SD, and a negative mean made the error
+    negative-sd. Numbers: pingouin's mixed_anova data, each person's change from June to January (computed here)."""
+    import pingouin as pg
+
+    from statsetter.audit.parsing import find_statistics
+
+    wide = pg.read_dataset("mixed_anova").pivot(index="Subject", columns="Time", values="Scores")
+    change = wide["January"] - wide["June"]
+    mean, sd = f"{change.mean():.2f}".replace("-", "−"), f"{change.std():.2f}"
+    for typed in (f"M ± SD = {mean} ± {sd}", f"mean ± SD = {mean} ± {sd}", f"M±SD={mean}±{sd}"):
+        (rep,) = find_statistics(f"Scores changed little ({typed}).")
+        assert rep.text == typed and [(d.name, d.number.text) for d in rep.descriptives] == [("M", mean), ("SD", sd)]
+        entries = audit_units([Unit("p", f"Scores changed little ({typed}).")], restyle=True)
+        assert not {"negative-sd"} & set(entries[0].codes) and entries[0].revision is None and "typed together" in entries[0].kept
+    assert "negative-sd" in codes("The spread (SD = −1.37) was reported.")  # a negative SD alone still is one
+
+
 def test_handbook_critical_values():
     # Critical values from the printed tables of a statistics handbook (recalled from memory, three
     # decimals): at each, the recomputed two-sided (t) or upper-tail (F, χ²) p is the table's alpha.

@@ -859,6 +859,15 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                         last_end = max([rep.end] + [e for _, e in spans] + [x.end for x in rep.effects + rep.descriptives]
                                        + [rep.p.end if rep.p is not None else 0] + [rep.ci.end if rep.ci is not None else 0])
                 break
+            paired = _mean_and_sd(pat, text, m, number) if name == "SD" and text[max(0, m.start() - 1) : m.start()].strip() in ("±", "") else None
+            if paired is not None:  # "M ± SD = −2.1 ± 0.5": the mean, then its SD (the first number had been read as the SD)
+                mean, sd = paired
+                rep.descriptives += [mean, sd]
+                rep.start = min(rep.start, mean.symbol_start)
+                covered = max(covered, sd.end)
+                last_end = max(last_end, sd.end)
+                spans.append((m.start(), sd.end))
+                continue
             effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
         elif kind == "df" and (not rep.df or (clause_df and rep.symbol == "F" and len(rep.df) == 1)):
@@ -882,6 +891,25 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     rep.end = last_end
     rep.operators = _operators(text, spans)
     return again
+
+
+_PLUS_MINUS_MEAN = re.compile(r"(?:\b[Mm]ean|(?<![\w])M)\s*±\s*$")  # "M ± " or "mean ± " before an SD's name
+_PLUS_MINUS_VALUE = re.compile(r"\s*±\s*([-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))")
+
+
+def _mean_and_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tuple[Effect, Effect] | None:
+    """"M ± SD = −2.1 ± 0.5" (or "mean ± SD = …", as medical texts type a mean and its SD together): the mean
+    (the first number, its symbol where "M" or "mean" stands) and the SD (the number after "±"); None otherwise."""
+    before = _PLUS_MINUS_MEAN.search(text, max(0, m.start("name") - 12), m.start("name"))
+    after = _PLUS_MINUS_VALUE.match(text, first.end)
+    if before is None or after is None:
+        return None
+    sd = pat.to_number(after.group(1), after.start(1))
+    if sd is None:
+        return None
+    symbol = before.group().rstrip(" ±")
+    return (_new_effect("M", first, before.start(), first.end, before.start(), symbol, None),
+            _new_effect("SD", sd, m.start("name"), sd.end, m.start("name"), m.group("name"), None))
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:

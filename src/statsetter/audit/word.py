@@ -217,6 +217,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     if not isinstance(new, StyledText):  # left as typed
         if rep.symbol is None and rep.descriptives and style.spells_out:
             return None, "the style writes means and SDs in words (\u201cmean [SD], 2.86 [0.59]\u201d), which a change symbol for symbol cannot give: reword the sentence"
+        if any(a.name == "M" and b.name == "SD" and a.end > b.symbol_start for a, b in zip(rep.descriptives, rep.descriptives[1:])):
+            return None, "a mean and SD typed together (\u201cM ± SD = 3.2 ± 0.5\u201d) are left as typed; the style writes M = 3.2, SD = 0.5"
         if rep.symbol is None and rep.descriptives and (rep.ci is not None or any(e.ci is not None or e.name in RATIOS for e in rep.effects)):
             return None, "descriptives beside an interval or a ratio, without their test, have no form of the style's; restyle them by hand"
         return None, "the statistic cannot be restyled"
