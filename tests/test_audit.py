@@ -246,6 +246,8 @@ def test_a_mean_and_sd_typed_together_are_read_as_a_mean_and_an_sd():
         entries = audit_units([Unit("p", f"Scores changed little ({typed}).")], restyle=True)
         assert not {"negative-sd"} & set(entries[0].codes) and entries[0].revision is None and "typed together" in entries[0].kept
     assert "negative-sd" in codes("The spread (SD = −1.37) was reported.")  # a negative SD alone still is one
+    # with the group's n before it, GRIM checks the mean (Brown & Heathers, 2016: 12 integer scores give 3.25 or 3.33)
+    assert codes("Group A (n = 12, M ± SD = 3.25 ± 0.50).", grim_items=1) == [] and "grim" in codes("Group A (n = 12, M ± SD = 3.27 ± 0.50).", grim_items=1)
 
 
 def test_handbook_critical_values():

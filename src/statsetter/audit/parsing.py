@@ -707,7 +707,8 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
         at = min(first)
         m = following[pat.effect]
         if m is not None and m.start() == at and _effect_name(m.group("name")) in _DESCRIPTIVE:  # a group's n before its mean
-            before = _n_just_before(pat, text, at, start)
+            paired = _PLUS_MINUS_MEAN.search(text, max(start, at - 12), at)  # ("n = 12, M ± SD = …": before the mean's symbol)
+            before = _n_just_before(pat, text, paired.start() if paired else at, start)
             at = before if before is not None else at
         stop = min(end, at + _REACH)
         rep = Reported(None, "", at, at, at)
