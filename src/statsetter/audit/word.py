@@ -324,8 +324,11 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     new_p = _P_IN_TEXT.search(new_text)
     if new_p is not None:
         new_text = new_text[: new_p.start(2)] + " " * len(new_p.group(2)) + new_text[new_p.end(2) :]
-    olds = sorted(_value(t, mark) for t in _DIGITS.findall(old_text))
-    news = sorted(_value(t, new_mark) for t in _DIGITS.findall(new_text))
+    try:
+        olds = sorted(_value(t, mark) for t in _DIGITS.findall(old_text))
+        news = sorted(_value(t, new_mark) for t in _DIGITS.findall(new_text))
+    except ValueError:  # digits with two decimal marks, "0.40.5": numbers run together, which no revision should touch
+        return "its numbers run into each other as typed"
     if len(olds) > len(news):
         return "the style's form of this statistic has no place for every number typed here (N beside a χ², say)"
     if len(olds) != len(news) or any(abs(a - b) > 0.5 * 10.0**-da + 0.5 * 10.0**-db + 1e-12 for (a, da), (b, db) in zip(olds, news)):
