@@ -291,3 +291,5 @@ def test_arguments_of_the_wrong_kind_are_named_before_any_work(penguins):
     one, listed = linear_regression(penguins, "body_mass_g", "bill_length_mm"), linear_regression(penguins, "body_mass_g", ["bill_length_mm"])
     assert dump_records(one) == dump_records(listed)  # (it had read the name letter by letter: "b: no such column")
     assert dump_records(record) == dump_records([record]) and statsetter.render(record).plain().startswith("t(")
+    # a generator of names is read once by the check and handed on as the list it gave (not emptied by the check)
+    assert [v.name for v in describe(penguins, (c for c in ["body_mass_g", "species"])).main.variables] == ["body_mass_g", "species"]

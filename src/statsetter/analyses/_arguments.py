@@ -11,7 +11,7 @@ from __future__ import annotations
 import inspect
 import math
 import typing
-from collections.abc import Hashable, Iterable, Mapping
+from collections.abc import Hashable, Iterable, Iterator, Mapping
 from numbers import Integral, Real
 from typing import Any, Callable
 
@@ -116,6 +116,8 @@ def checked(name: str, signature: inspect.Signature, kinds: Mapping[str, tuple[s
         if param not in kinds:
             continue
         annotation, allowed = kinds[param]
+        if isinstance(value, Iterator):  # a generator of names: read once here, and handed on as the list it gave
+            value = bound.arguments[param] = list(value)
         problem = _problem(param, annotation, allowed, value)
         if problem:
             refuse(name, param, problem, value)
