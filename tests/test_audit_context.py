@@ -516,6 +516,11 @@ def test_a_tables_df_are_guessed_from_the_text_above_it_only_as_a_guess(tmp_path
     tex.write_text("Scores were compared.\n\n\\begin{table}\n\\caption{Comparisons of the smokers (N = 80)}\n"
                    f"\\begin{{tabular}}{{lrr}}\n{cells} \\\\\n\\end{{tabular}}\n\\end{{table}}\n", encoding="utf-8")
     assert [e.codes for e in audit_file(tex) if e.found.startswith("t")] == [["p-does-not-follow"]] * 2
+    # and pandoc's "Table: …", typed under its Markdown table (it had been read as a note: no N, nothing checked)
+    md = tmp_path / "t.md"
+    pipe = "\n".join("| " + " | ".join(row) + " |" for row in rows[:1] + [("---",) * 3] + rows[1:])
+    md.write_text(f"Scores were compared.\n\n{pipe}\n\nTable: Comparisons of the smokers (N = 80)\n", encoding="utf-8")
+    assert [e.codes for e in audit_file(md) if e.found.startswith("t")] == [["p-does-not-follow"]] * 2
 
 
 def test_one_tailed_said_in_the_sentence_is_a_note():

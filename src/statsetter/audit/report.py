@@ -230,6 +230,9 @@ _NOTE_GOES_ON = re.compile(rf"\s*(?:[{_SIGNIFICANCE}]{{1,4}}\s*[pP]\s*[<≤]|[a-
 _TABLE_LABEL = re.compile(r"\s*(?:[*_]{0,2}(?:Table|TABLE|Tab\.)\s*[0-9IVXA-Z]|Table:|: )|[\s\S]*\\caption\b")
 
 
+_CAPTION_BELOW = re.compile(r"\s*(?:Table:|: )")  # pandoc's caption, typed under its table
+
+
 def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
     """The statistics of the units in document order: a paragraph's as the
     parser finds them, a table's read cell by cell and row by row."""
@@ -278,11 +281,15 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                 break
             note += " " + units[k].text
         caption = " ".join(body)
+        labelled = any(_TABLE_LABEL.match(t) for t in body)
+        below = units[j].text if note else ""
+        if not labelled and _CAPTION_BELOW.match(below):  # pandoc's "Table: …" under the table: the table's own caption
+            caption, labelled = below, True
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
         said = f"{caption} {note}"
         found, used = table_statistics(cells, caption, mark, star_bounds(said, mark), said, welch=_WELCH.search(said) is not None,  # (Welch's t's: a df range)
-                                       labelled=any(_TABLE_LABEL.match(t) for t in body))
+                                       labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient) for t in found]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
