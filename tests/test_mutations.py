@@ -164,7 +164,7 @@ def test_the_python_api_given_arguments_of_every_wrong_kind():
     NaN, text, lists, mappings, a column or the whole table where a name is asked, booleans, None): each either runs or
     raises statsetter's own error naming the function and argument — or Python's TypeError for an argument the
     function has not got — never an AttributeError, KeyError or ValueError from pandas, numpy or scipy (a campaign of
-    3,000 such calls found 14 kinds of those). The penguins and pingouin's mixed_anova data as pingouin bundles them."""
+    over 15,000 such calls found 18 kinds of those). The penguins and pingouin's mixed_anova data as pingouin bundles them."""
     import inspect
     import warnings
 
