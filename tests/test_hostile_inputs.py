@@ -870,6 +870,15 @@ def test_a_plans_missing_chapter_is_said_before_the_analyses_run(box, capsys):
     assert code == 0 and '"kind": "t_independent"' in out
 
 
+@pytest.mark.parametrize("kind, needed", [("results", "analyses"), ("correlations", "analysis"), ("regression", "analysis")])
+def test_a_plans_table_without_its_analyses_is_named_at_load(box, capsys, kind, needed):
+    """A table entry without the analyses it shows had been an internal error after the analyses ran (KeyError:
+    'analyses'; found by 250 more seeds of tests/test_mutations.py's damaged plans): now said at load, with its line."""
+    (box / "plan.toml").write_text(GOOD_PLAN.replace("[outputs]", f'[[tables]]\nkind = "{kind}"\n[outputs]'), encoding="utf-8")
+    code, _, err = _run(["run", "plan.toml"], capsys)
+    assert code == 2 and "plan.toml, line 8 (tables[0])" in err and f"a {kind} table needs {needed} = …" in err, err
+
+
 def test_two_concurrent_runs_on_one_plan(box):
     procs = [_cli("run", "plan.toml", cwd=box) for _ in range(2)]
     results = [p.communicate(timeout=180) for p in procs]

@@ -326,6 +326,10 @@ def load_plan(path: "str | Path") -> Plan:
             raise plan.fail(f"tables[{i}].kind", f"{kind!r} is not one of {', '.join(_TABLE)}")
         _unknown(plan, f"tables[{i}]", set(table), _TABLE[kind])
         _wrong_table_types(plan, f"tables[{i}]", table)
+        needed = {"descriptives": None, "results": "analyses"}.get(kind, "analysis")
+        if needed is not None and needed not in table:
+            what = "the ids of the analyses it shows" if needed == "analyses" else "the id of the analysis it shows"
+            raise plan.fail(f"tables[{i}]", f"a {kind} table needs {needed} = … ({what})")
         for ref in table.get("analyses", []) + ([table["analysis"]] if "analysis" in table else []):
             if ref not in ids:
                 raise plan.fail(f"tables[{i}].analyses", f"no analysis with id {ref!r}")
