@@ -456,7 +456,7 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
     zero, no_zero, minus = [], [], []
     for n, q in _numbers_with_quantity(rep):
         digits = n.digits
-        if q is _UNNAMED:
+        if q == _UNNAMED:
             pass
         elif digits.startswith("0" + mark) and num.is_bounded(q):
             zero.append(n.text)

@@ -860,7 +860,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                         last_end = max([rep.end] + [e for _, e in spans] + [x.end for x in rep.effects + rep.descriptives]
                                        + [rep.p.end if rep.p is not None else 0] + [rep.ci.end if rep.ci is not None else 0])
                 break
-            paired = _mean_and_sd(pat, text, m, number) if name == "SD" and text[max(0, m.start() - 1) : m.start()].strip() in ("±", "") else None
+            paired = _mean_and_sd(pat, text, m, number) if name == "SD" and "±" in text[max(0, m.start("name") - 3) : m.start("name")] else None
             if paired is not None:  # "M ± SD = −2.1 ± 0.5": the mean, then its SD (the first number had been read as the SD)
                 mean, sd = paired
                 rep.descriptives += [mean, sd]

@@ -226,11 +226,10 @@ def _a_coefficients_t(text: str, rep: Reported, previous_end: int) -> bool:
 _NOTE_GOES_ON = re.compile(rf"\s*(?:[{_SIGNIFICANCE}]{{1,4}}\s*[pP]\s*[<≤]|[a-d]\s?[A-Z]|Note\b)")
 
 
-# a table's own caption: its label ("Table 3", "**Table 3**", "TABLE IV"), pandoc's "Table: …" or ": …", LaTeX's \caption
-_TABLE_LABEL = re.compile(r"\s*(?:[*_]{0,2}(?:Table|TABLE|Tab\.)\s*[0-9IVXA-Z]|Table:|: )|[\s\S]*\\caption\b")
-
-
-_CAPTION_BELOW = re.compile(r"\s*(?:Table:|: )")  # pandoc's caption, typed under its table
+_PANDOC_CAPTION = r"Table:|: "  # pandoc's caption line, above or under its table
+# a table's own caption: its label ("Table 3", "**Table 3**", "TABLE IV"), pandoc's caption, LaTeX's \caption
+_TABLE_LABEL = re.compile(rf"\s*(?:[*_]{{0,2}}(?:Table|TABLE|Tab\.)\s*[0-9IVXA-Z]|{_PANDOC_CAPTION})|[\s\S]*\\caption\b")
+_CAPTION_BELOW = re.compile(rf"\s*(?:{_PANDOC_CAPTION})")  # (typed under the table, where a note stands)
 
 
 def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
