@@ -250,6 +250,73 @@ def test_a_mean_and_sd_typed_together_are_read_as_a_mean_and_an_sd():
     assert codes("Group A (n = 12, M ± SD = 3.25 ± 0.50).", grim_items=1) == [] and "grim" in codes("Group A (n = 12, M ± SD = 3.27 ± 0.50).", grim_items=1)
 
 
+def _grim_possible(mean: float, n: int) -> bool:
+    """Brown & Heathers (2016): some whole total k gives mean k / n to the printed two decimals."""
+    return any(abs(k / n - mean) <= 0.005 + 1e-12 for k in range(round(mean * n) - 2, round(mean * n) + 3))
+
+
+def test_flattened_subscripts_of_means_and_sds_are_read():
+    """A mean's or SD's subscript flattened, as a copy from a PDF or a plain editor leaves it ("Mage = 54.37",
+    "M age", "M_age", "SDage"; a group's digit, "M1", "M₁") and a mean with its SD in parentheses ("M (SD) =
+    54.37 (9.08)"): read as a mean and an SD, so that their checks run (they had not been read at all, and a
+    negative SD typed so passed). Numbers: pingouin's "chi2_independence" data (303 patients' ages in whole
+    years; women's by type of chest pain), computed here; the wrong values are mutations of ours. "Max = 77" or "Males = 207" are no
+    means. GRIM (Brown & Heathers, 2016) checks a group's mean "M1" against its n, but not an age's or a
+    difference's: neither is a mean of the scale's integer scores (practice)."""
+    import pingouin as pg
+
+    from statsetter.audit.parsing import subscript
+
+    age = pg.read_dataset("chi2_independence")[["age", "sex"]]  # (sex 0: women)
+    m, s = f"{age['age'].mean():.2f}", f"{age['age'].std():.2f}"
+    for typed, symbols in ((f"Mage = {m} years, SDage = {s}", ("Mage", "SDage")), (f"M age = {m} years, SD age = {s}", ("M age", "SD age")),
+                           (f"M_age = {m}, SD_age = {s}", ("M_age", "SD_age")), (f"M (SD) = {m} ({s})", ("M", "SD"))):
+        (rep,) = find_statistics(f"The {len(age)} patients ({typed}) were referred.")
+        assert rep.text == typed and [(d.name, d.symbol_text, d.number.text) for d in rep.descriptives] == [("M", symbols[0], m), ("SD", symbols[1], s)]
+        assert [subscript(d) for d in rep.descriptives] == (["", ""] if "(" in typed else ["age", "age"])
+        assert codes(f"The patients ({typed}) were referred.") == []
+        assert "negative-sd" in codes(f"The patients ({typed.replace(s, '−' + s)}) were referred.")
+    assert [r.text for r in find_statistics(f"Ages reached Max = {age['age'].max()}; Males = {(age['sex'] == 1).sum()}.")] == []
+    heart = pg.read_dataset("chi2_independence")
+    groups = heart[heart["sex"] == 0].groupby("cp")["age"].agg(["count", "mean", "std"]).head(2)  # women with chest pain of types 0 and 1
+    (n1, m1, s1), (n2, m2, s2) = [(int(c), f"{a:.2f}", f"{b:.2f}") for c, a, b in groups.itertuples(index=False)]
+    text = f"Women with pain of type 0 (n = {n1}, M1 = {m1}, SD1 = {s1}) and type 1 (n = {n2}, M₂ = {m2}, SD₂ = {s2}) differed in age."
+    entries = audit_units([Unit("test", text)], grim_items=1)
+    assert [e.found for e in entries] == [f"n = {n1}, M1 = {m1}, SD1 = {s1}", f"n = {n2}, M₂ = {m2}, SD₂ = {s2}"] and all(not e.codes for e in entries)
+    assert n1 < 100 and _grim_possible(float(m1), n1)  # (the data's ages are whole years)
+    wrong = next(f"{float(m1) + j / 100:.2f}" for j in range(1, 100) if not _grim_possible(round(float(m1) + j / 100, 2), n1))
+    assert "grim" in codes(text.replace(f"M1 = {m1}", f"M1 = {wrong}"), grim_items=1)
+    assert "grim" not in codes(f"Women (n = {n1}, Mage = {wrong}, SDage = {s1}).", grim_items=1)  # an age need not be whole years
+    # as a real author typed them (tests/real_typings.py, jov-2791376: Journal of Vision, open access), group by group
+    from real_typings import HELD_OUT, ITEMS, Text
+
+    (typed,) = [i.text for i in ITEMS + HELD_OUT if isinstance(i, Text) and i.text.startswith("In phase 1, we found no group")]
+    read = [(d.symbol_text, d.number.text) for r in find_statistics(typed) for d in r.descriptives]
+    assert read[:4] == [("M1", "13.79"), ("SD1", "7.01"), ("M2", "15.70"), ("SD2", "7.26")] and ("M1", "–16.86") in read and len(read) == 12
+    assert not {"negative-sd", "p-does-not-follow", "grim"} & set(codes(typed, grim_items=1))  # (a mean may be negative: "M1 = –16.86")
+
+
+def test_a_mean_differences_interval_is_checked_and_its_subscript_kept_in_a_revision():
+    """"Mdiff = −0.18, 95% CI [−0.51, 0.15]": the interval must contain the mean difference. Numbers: pingouin's
+    mixed_anova data, each person's change from June to January, with scipy's t interval; the shifted interval is
+    a mutation of ours. A revision in APA style sets the flattened subscript as one (M with "age" below), keeps the
+    group's digit as its subscript, and leaves "M (SD) = …" as typed, saying why."""
+    import pingouin as pg
+
+    wide = pg.read_dataset("mixed_anova").pivot(index="Subject", columns="Time", values="Scores")
+    change = wide["January"] - wide["June"]
+    low, high = stats.t.interval(0.95, len(change) - 1, loc=change.mean(), scale=stats.sem(change))
+    mean = f"{change.mean():.2f}".replace("-", "−")
+    interval = f"[{low:.2f}, {high:.2f}]".replace("-", "−")
+    assert codes(f"Scores changed little, Mdiff = {mean}, 95% CI {interval}.") == []
+    assert "ci-excludes-estimate" in codes(f"Scores changed little, Mdiff = {mean}, 95% CI [{high + 0.1:.2f}, {high + 0.5:.2f}].")
+    revised = {e.found: (e.revision, e.kept) for e in audit_units([Unit("p", "The sample (Mage = 54.37 years, SDage=9.08; M1 = 3.10, SD1 = 0.40; "
+                                                                          "M (SD) = 2.20 (0.30)) took part.")], restyle=True)}
+    assert revised["Mage = 54.37 years, SDage=9.08"][0].html().replace("\xa0", " ") == "<i>M</i><sub>age</sub> = 54.37 years, <i>SD</i><sub>age</sub> = 9.08"
+    assert revised["M1 = 3.10, SD1 = 0.40"][0].html().replace("\xa0", " ") == "<i>M</i><sub>1</sub> = 3.10, <i>SD</i><sub>1</sub> = 0.40"
+    assert revised["M (SD) = 2.20 (0.30)"][0] is None and "typed together" in revised["M (SD) = 2.20 (0.30)"][1]
+
+
 def test_handbook_critical_values():
     # Critical values from the printed tables of a statistics handbook (recalled from memory, three
     # decimals): at each, the recomputed two-sided (t) or upper-tail (F, χ²) p is the table's alpha.

@@ -24,7 +24,7 @@ from ..pvalues import spearman_p, upper_tail
 from ..records import EffectSize, Interval, Result, Statistic
 from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
-from .parsing import Effect, Number, Reported, _remembered
+from .parsing import Effect, Number, Reported, _remembered, subscript
 from .parsing import Interval as TypedInterval
 
 # code: (what it means, the docs/reporting-rules.md rule and its source)
@@ -627,6 +627,9 @@ def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]], roman: 
     return [Finding("italics", "Latin statistical symbols are italic; Greek letters are not.", ", ".join(bad))] if bad else []
 
 
+_NOT_SCORES = {"age", "diff", "difference"}  # means GRIM does not apply to: an age, a difference between means
+
+
 def grim(rep: Reported, items: int) -> list[Finding]:
     """GRIM (Brown & Heathers, 2016): a mean of n integer scores (``items``
     items each) is a multiple of 1/(n·items), so only some printed means are possible."""
@@ -635,7 +638,7 @@ def grim(rep: Reported, items: int) -> list[Finding]:
     n = int(rep.n.value)
     out = []
     for e in rep.descriptives:
-        if e.name != "M" or n <= 0 or e.number.decimals == 0:
+        if e.name != "M" or n <= 0 or e.number.decimals == 0 or subscript(e) in _NOT_SCORES:
             continue
         total = n * items
         if total >= 10 ** e.number.decimals:

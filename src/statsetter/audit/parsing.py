@@ -159,6 +159,10 @@ def _guarded(alternatives: "Iterable[str]", before: str) -> str:
 
 
 _SYMBOL = _guarded(_SYMBOLS, r"\w.")
+# a mean's or SD's subscript as a copy from a PDF or a plain-text editor flattens it: "Mage", "M age", "M_age", "SDpre",
+# "M1", "M₁" (the words a mean is usually given for, and a group's digit; other words after an M are not a mean's:
+# "Max = 40", "Males = 52"); `subscript` gives it back
+_FLAT_SUBSCRIPT = r"(?:[ _]?(?:age|diff(?:erence)?|change|pre|post|baseline|follow-?up)(?![\w])|_?[1-9](?![\w])|[₁-₉])"
 # Every alternative starts with a literal character and a name that must not follow a letter says so right after it
 # ("V(?<![\w]V)"): the regex engine then looks for the first characters with a fast scan instead of trying every position.
 _EFFECT_NAMES = [
@@ -180,8 +184,8 @@ _EFFECT_NAMES = [
     (r"g(?<![\w]g)", "g"),
     (r"Kendall'?s\s+W|W(?<![\w]W)(?=\s*=\s*0?[.,]\d)", "kendall_w"),  # W below 1 with decimals: Kendall's W, not a rank sum
     (r"M(?<![\w]M)dn", "Mdn"),
-    (r"M(?<![\w]M)", "M"),
-    (r"S(?<![\w]S)D", "SD"),
+    (rf"M(?<![\w]M)(?:{_FLAT_SUBSCRIPT}|\s?\(\s?SD\s?\))?|[Mm](?<![\w][Mm])ean\s?\(\s?SD\s?\)", "M"),  # "M (SD) = 3.2 (0.5)": _paren_sd
+    (rf"S(?<![\w]S)D{_FLAT_SUBSCRIPT}?", "SD"),
 ]
 # ratios as public-health texts type them: adjusted odds, hazard, risk and incidence-rate ratios, abbreviated or spelled
 # out. Every ratio's name, and no other, ends in "R", "ratio" or "risk", and a ratio is read also without "=" ("OR,
@@ -330,6 +334,13 @@ _UNREAD = object()
 _READ_MEMORY = 16384  # printed forms remembered (then forgotten all at once): a few MB at most
 _PLAIN = re.compile(r"(?:([-−–‐])\s?)?(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})")  # a sign, as the general path reads it, and digits
 _SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789")
+
+
+def subscript(e: Effect) -> str:
+    """The subscript a descriptive's symbol carries flattened ("Mage", "M_age", "SD pre", "M₁"): "age", "pre", "1";
+    "" for none."""
+    rest = (e.symbol_text[2:] if e.name == "SD" else e.symbol_text[1:] if e.name == "M" else "").lstrip(" _")
+    return "" if rest[:1] in ("", "(", "e") else rest.translate(_SUBSCRIPT_DIGITS)  # ("(SD)", "ean (SD)": none)
 _CACHE: dict[str, _Patterns] = {}
 _MAX_DIGITS = 100
 
@@ -860,14 +871,20 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                         last_end = max([rep.end] + [e for _, e in spans] + [x.end for x in rep.effects + rep.descriptives]
                                        + [rep.p.end if rep.p is not None else 0] + [rep.ci.end if rep.ci is not None else 0])
                 break
-            paired = _mean_and_sd(pat, text, m, number) if name == "SD" and "±" in text[max(0, m.start("name") - 3) : m.start("name")] else None
+            if name == "M" and m.group("name").endswith(")"):  # "M (SD) = 3.2 (0.5)"
+                paired = _paren_sd(pat, text, m, number)
+            elif name == "SD" and "±" in text[max(0, m.start("name") - 3) : m.start("name")]:
+                paired = _mean_and_sd(pat, text, m, number)
+            else:
+                paired = None
             if paired is not None:  # "M ± SD = −2.1 ± 0.5": the mean, then its SD (the first number had been read as the SD)
                 mean, sd = paired
                 rep.descriptives += [mean, sd]
                 rep.start = min(rep.start, mean.symbol_start)
-                covered = max(covered, sd.end)
-                last_end = max(last_end, sd.end)
-                spans.append((m.start(), sd.end))
+                close = text.find(")", sd.end, sd.end + 3) + 1 if name == "M" else sd.end  # (the SD's parenthesis closed)
+                covered = max(covered, close)
+                last_end = max(last_end, close)
+                spans.append((m.start(), close))
                 continue
             effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
@@ -911,6 +928,24 @@ def _mean_and_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> 
     symbol = before.group().rstrip(" ±")
     return (_new_effect("M", first, before.start(), first.end, before.start(), symbol, None),
             _new_effect("SD", sd, m.start("name"), sd.end, m.start("name"), m.group("name"), None))
+
+
+_PAREN_VALUE = re.compile(r"\s*\(\s*([-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*\)")
+_SD_IN_NAME = re.compile(r"SD")
+
+
+def _paren_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tuple[Effect, Effect] | None:
+    """"M (SD) = 3.20 (0.50)" (or "mean (SD) = …"): the mean (the first number) and the SD (the number in parentheses
+    after it), each with its own symbol; None when no parenthesised number follows."""
+    after = _PAREN_VALUE.match(text, first.end)
+    sd = pat.to_number(after.group(1), after.start(1)) if after is not None else None
+    if sd is None:
+        return None
+    name = m.group("name")
+    at = m.start("name") + _SD_IN_NAME.search(name).start()  # type: ignore[union-attr]
+    symbol = name[: name.index("(")].rstrip()
+    return (_new_effect("M", first, m.start(), first.end, m.start("name"), symbol, None),
+            _new_effect("SD", sd, at, sd.end, at, "SD", None))
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:

@@ -22,7 +22,7 @@ from typing import TYPE_CHECKING, Sequence
 from ..style.numbers import numbers_for
 from ..styled import StyledText, escape_markup
 from .checks import RATIOS, Finding
-from .parsing import PValue, Reported
+from .parsing import PValue, Reported, subscript
 from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_font, symbol_text
 
 if TYPE_CHECKING:
@@ -108,8 +108,9 @@ def descriptives_text(rep: Reported, style: "Style", alpha: float = 0.05) -> Sty
         return None
     num = numbers_for(style)
     space = style.keep_together
-    pieces: list[tuple[int, int, str, "str | StyledText"]] = [
-        (d.symbol_start, d.number.end, d.name, f"{space}={space}{num.number(d.number.value, d.name, d.number.decimals)}")
+    pieces: list[tuple[int, int, str, "str | StyledText", str]] = [
+        (d.symbol_start, d.number.end, d.name, f"{space}={space}{num.number(d.number.value, d.name, d.number.decimals)}",
+         subscript(d) if d.name in ("M", "SD") else "")
         for d in rep.descriptives + rep.effects]
     if rep.n is not None:  # its symbol: before its "=" (an n read with the cluster, "n = 28, M = …")
         k = rep.n.start - rep.start
@@ -120,7 +121,7 @@ def descriptives_text(rep: Reported, style: "Style", alpha: float = 0.05) -> Sty
             while k > 0 and rep.text[k - 1].isspace():
                 k -= 1
             if k > 0 and rep.text[k - 1] in "nN":
-                pieces.append((rep.start + k - 1, rep.n.end, rep.text[k - 1], f"{space}={space}{rep.n.text}"))
+                pieces.append((rep.start + k - 1, rep.n.end, rep.text[k - 1], f"{space}={space}{rep.n.text}", ""))
     p = rep.p
     if p is not None and p.op != "ns":  # ("ns" stays as typed: the style has no form for it)
         if p.number is None or not 0 <= p.number.value <= 1:
@@ -132,13 +133,16 @@ def descriptives_text(rep: Reported, style: "Style", alpha: float = 0.05) -> Sty
             made = threshold_p(rep, style, space)  # type: ignore[assignment]
         if made is None:
             return None
-        pieces.append((p.symbol_start, p.end, "", made))
+        pieces.append((p.symbol_start, p.end, "", made, ""))
     out, at = StyledText(""), rep.start
-    for start, end, symbol, shown in sorted(pieces, key=lambda piece: piece[0]):
+    for start, end, symbol, shown, sub in sorted(pieces, key=lambda piece: piece[0]):
         if start < at:  # (pieces overlap only in a text the parser read oddly: left as typed)
             return None
         out = out + rep.text[at - rep.start : start - rep.start]
-        out = out + (shown if isinstance(shown, StyledText) else StyledText.from_markup(style.symbol(symbol)) + shown)
+        if isinstance(shown, StyledText):
+            out = out + shown
+        else:  # a flattened subscript set as one ("Mage" → M with "age" below)
+            out = out + StyledText.from_markup(style.symbol(symbol) + (f"<sub>{escape_markup(sub)}</sub>" if sub else "")) + shown
         at = end
     return out + rep.text[at - rep.start :]
 
@@ -218,7 +222,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
         if rep.symbol is None and rep.descriptives and style.spells_out:
             return None, "the style writes means and SDs in words (\u201cmean [SD], 2.86 [0.59]\u201d), which a change symbol for symbol cannot give: reword the sentence"
         if any(a.name == "M" and b.name == "SD" and a.end > b.symbol_start for a, b in zip(rep.descriptives, rep.descriptives[1:])):
-            return None, "a mean and SD typed together (\u201cM ± SD = 3.2 ± 0.5\u201d) are left as typed; the style writes M = 3.2, SD = 0.5"
+            return None, ("a mean and SD typed together (\u201cM ± SD = 3.2 ± 0.5\u201d, \u201cM (SD) = 3.2 (0.5)\u201d) are left as typed; "
+                          "the style writes M = 3.2, SD = 0.5")
         if rep.symbol is None and rep.descriptives and (rep.ci is not None or any(e.ci is not None or e.name in RATIOS for e in rep.effects)):
             return None, "descriptives beside an interval or a ratio, without their test, have no form of the style's; restyle them by hand"
         return None, "the statistic cannot be restyled"
@@ -257,7 +262,8 @@ def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, 
     symbols = [(rep.symbol_start, rep.symbol_text)] if rep.symbol is not None else []
     if rep.p is not None and rep.p.symbol_text:
         symbols.append((rep.p.symbol_start, rep.p.symbol_text))
-    symbols += [(e.symbol_start, e.symbol_text) for e in rep.effects + rep.descriptives if e.symbol_text]
+    symbols += [(e.symbol_start, e.symbol_text) for e in rep.effects if e.symbol_text]
+    symbols += [(e.symbol_start, e.name if subscript(e) else e.symbol_text) for e in rep.descriptives if e.symbol_text]  # (M₁: its M)
     styled = {new.text[a:b] for a, b in new.italic_ranges()}
     return any(any(s <= at < e for s, e in italic) != (text in styled) for at, text in symbols)
 
@@ -271,6 +277,8 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
     places = [(ci.low.end, ci.high.start, _RANGE_WORDS) for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
     places += [(e.symbol_start, e.symbol_start + len(e.symbol_text), _RATIO_WORDS) for e in rep.effects if e.name in RATIOS]
     places.append((rep.symbol_start, rep.symbol_start + len(rep.symbol_text), _SYMBOL_WORDS))
+    places += [(d.symbol_start, d.symbol_start + len(d.symbol_text), frozenset({d.symbol_text.lower()})) for d in rep.descriptives
+               if subscript(d)]  # "Mage" restyled as M with "age" below
     if rep.df and rep.value is not None and rep.df[0].start > rep.value.end:  # "F-statistic: 4.51 on 2 and 97 DF"
         places.append((rep.value.end, rep.df[-1].end, _DF_WORDS))
     for m in _WORD.finditer(old):
@@ -310,6 +318,10 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
     for at, symbol in [(rep.symbol_start, rep.symbol_text)] + [(e.symbol_start, e.symbol_text) for e in rep.effects + rep.descriptives]:
         for i in range(max(at - rep.start, 0), min(at - rep.start + len(symbol), len(blank))):
             blank[i] = " "
+    for e in rep.descriptives:  # a group's digit ("M1", "SD₂") stays: the restyled text sets it as a subscript, a number on both sides
+        if subscript(e).isdigit():
+            k = e.symbol_start + len(e.symbol_text) - 1 - rep.start
+            blank[k] = old[k]
     for a, b in zip(rep.df, rep.df[1:]):  # "F(1,56)": two df, not the number 1,56
         blank[a.end - rep.start : b.start - rep.start] = " " * (b.start - a.end)
     old_p = rep.p.number if rep.p is not None else None
