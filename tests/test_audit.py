@@ -277,6 +277,7 @@ def test_flattened_subscripts_of_means_and_sds_are_read():
         assert codes(f"The patients ({typed}) were referred.") == []
         assert "negative-sd" in codes(f"The patients ({typed.replace(s, '−' + s)}) were referred.")
     assert [r.text for r in find_statistics(f"Ages reached Max = {age['age'].max()}; Males = {(age['sex'] == 1).sum()}.")] == []
+    assert find_statistics(f"The mean was M (SD) = {m} at intake.") == []  # (no SD's number after it: not a pair read, nor a mean named "M (SD)")
     heart = pg.read_dataset("chi2_independence")
     groups = heart[heart["sex"] == 0].groupby("cp")["age"].agg(["count", "mean", "std"]).head(2)  # women with chest pain of types 0 and 1
     (n1, m1, s1), (n2, m2, s2) = [(int(c), f"{a:.2f}", f"{b:.2f}") for c, a, b in groups.itertuples(index=False)]

@@ -857,8 +857,8 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
         elif kind == "effect":
             name = _effect_name(m.group("name"))
             number = pat.to_number(m.group("num"), m.start("num"))
-            if name is None or number is None:
-                continue
+            if name is None or number is None or (name == "M" and m.group("name").endswith(")") and _PAREN_VALUE.match(text, number.end) is None):
+                continue  # ("M (SD) = 3.2" without the SD's number: no reading of the pair)
             if rep.symbol is None and any(e.name == name for e in (rep.descriptives if name in _DESCRIPTIVE else rep.effects)):
                 again = at  # a name read again: another cluster ("(M = 4.40, SD = 2.22) … (n = 28, M = 3.11, …)"), with the n
                 # just before it, which this cluster had read for its own
