@@ -824,9 +824,10 @@ def test_a_killed_run_leaves_the_previous_outputs(box, sig):
 
 def test_a_run_killed_outright_leaves_temporary_files_the_next_run_removes(box):
     """SIGKILL, which no process can catch, leaves the temporary files of the outputs it was writing (on the demo plan,
-    up to 16 per killed run had piled up beside the outputs). Each carries its process's id, and the next write of the
-    same output removes those of processes no longer running — not those of a running one, nor files not of this
-    naming. Killed for real: a run stopped by SIGKILL while it writes, then a full run."""
+    up to 16 per killed run had piled up beside the outputs). Each carries statsetter's name and its process's id, and
+    the next write into the folder removes those of processes no longer running — also of an output the plan no longer
+    names (renamed since), and the older naming's for the output written — not those of a running process, nor files
+    not of this naming. Killed for real: a run stopped by SIGKILL while it writes, then a full run."""
     import time
 
     assert _cli("run", "plan.toml", cwd=box).wait(timeout=120) == 0
@@ -835,11 +836,13 @@ def test_a_run_killed_outright_leaves_temporary_files_the_next_run_removes(box):
     living = subprocess.Popen([sys.executable, "-c", "import time; time.sleep(60)"])
     try:
         out = box / "out"
-        planted = {name: out / name for name in (f".r.md.{dead.pid}.k3j2.tmp", f".r.md.{living.pid}.a8f1.tmp", ".r.md.notes.tmp", f".other.md.{dead.pid}.x.tmp")}
+        kept = {f".r.md.statsetter-{living.pid}.a8f1.tmp", ".r.md.notes.tmp", f".other.md.{dead.pid}.x.tmp", f".r.md.statsetter-{dead.pid}.tmp"}
+        gone = {f".r.md.statsetter-{dead.pid}.k3j2.tmp", f".renamed.md.statsetter-{dead.pid}.x9.tmp", f".r.md.{dead.pid}.k3j2.tmp"}
+        planted = {name: out / name for name in kept | gone}
         for path in planted.values():
             path.write_text("partial", encoding="utf-8")
         assert _cli("run", "plan.toml", cwd=box).wait(timeout=120) == 0
-        assert {name for name, path in planted.items() if path.exists()} == {f".r.md.{living.pid}.a8f1.tmp", ".r.md.notes.tmp", f".other.md.{dead.pid}.x.tmp"}
+        assert {name for name, path in planted.items() if path.exists()} == kept
     finally:
         living.kill()
         living.wait()

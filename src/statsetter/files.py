@@ -19,6 +19,7 @@ from __future__ import annotations
 import contextlib
 import contextvars
 import os
+import re
 import stat
 import tempfile
 from pathlib import Path
@@ -241,9 +242,13 @@ def _alive(pid: int) -> bool:
     return True
 
 
+_OURS = re.compile(r"\..+\.statsetter-(\d+)\.[^.]+\.tmp")  # a temporary file of statsetter's: ".NAME.statsetter-PID.xxxx.tmp"
+
+
 def _remove_orphans(folder: Path, name: str) -> None:
-    """The temporary files of ``name`` that killed runs left behind (".NAME.PID.xxxx.tmp" of a process that no
-    longer runs): removed, so that they do not pile up beside the outputs."""
+    """The temporary files that killed runs left behind in ``folder`` (".NAME.statsetter-PID.xxxx.tmp" of a process
+    that no longer runs, whatever output it was writing: one a later plan no longer names too; and the older naming,
+    ".NAME.PID.xxxx.tmp", for ``name`` alone): removed, so that they do not pile up beside the outputs."""
     key = os.path.realpath(folder)
     hidden = _HIDDEN.get(key)
     if hidden is None:  # the folder's hidden .tmp names, listed once a process (a folder of many files is listed once)
@@ -253,9 +258,13 @@ def _remove_orphans(folder: Path, name: str) -> None:
             return
     prefix = f".{name}."
     for found in hidden:
-        if not found.startswith(prefix):
+        ours = _OURS.fullmatch(found)
+        if ours is not None:
+            pid = ours.group(1)
+        elif found.startswith(prefix):
+            pid = found[len(prefix) :].split(".", 1)[0]
+        else:
             continue
-        pid = found[len(prefix) :].split(".", 1)[0]
         if pid.isdigit() and int(pid) != os.getpid() and not _alive(int(pid)):
             with contextlib.suppress(OSError):
                 os.unlink(os.path.join(folder, found))
@@ -270,7 +279,7 @@ def write_atomic(path: "str | Path", data: "str | bytes", *, inputs: Iterable["s
     _remove_orphans(folder, target.name)
     blocked = _block_signals()  # a kill between creating and recording the temporary file would leave it behind
     try:
-        fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.{os.getpid()}.", suffix=".tmp", dir=folder)
+        fd, tmp = tempfile.mkstemp(prefix=f".{target.name}.statsetter-{os.getpid()}.", suffix=".tmp", dir=folder)
         _LIVE.add(tmp)
     finally:
         _unblock_signals(blocked)
