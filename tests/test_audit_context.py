@@ -875,3 +875,51 @@ def test_a_correlation_table_in_blocks_each_with_its_own_n(tmp_path):
     wrong[11][4] = ".27*"
     flagged = [e for e in audit_file(_doc(tmp_path / "wrong.docx", tables=[(_SDQ_CAPTION, wrong)], note=_SDQ_NOTE)) if e.codes]
     assert [e.found for e in flagged] == ["rs(27) = .27, p < 0.05"] and "p-does-not-follow" in flagged[0].codes
+
+
+# R's summary of lm(mpg ~ wt + hp, data = mtcars), as published with its output (selva86.github.io, "Interpret lm()
+# Output: Every Number Explained": https://raw.githubusercontent.com/selva86/selva86.github.io/master/Interpreting-Regression-Output-Completely.html)
+_R_COEFFICIENTS = [["", "Estimate", "Std. Error", "t value", "Pr(>|t|)"], ["(Intercept)", "37.22727", "1.59879", "23.285", "< 2e-16 ***"],
+                   ["wt", "-3.87783", "0.63273", "-6.129", "1.12e-06 ***"], ["hp", "-0.03177", "0.00903", "-3.519", "0.00145 **"]]
+_R_NOTE = "Residual standard error: 2.593 on 29 degrees of freedom. F-statistic: 69.21 on 2 and 29 DF, p-value: 9.109e-12"
+
+
+def test_a_coefficients_table_as_r_statsmodels_and_stata_head_it(tmp_path):
+    """A model's coefficients pasted from R ("Estimate", "Std. Error", "t value", "Pr(>|t|)"; p values such as
+    "1.12e-06") or statsmodels and Stata ("coef", "std err", "t", "P>|t|"): each t is read with its p and checked
+    against its row's estimate / SE, and against its p under the residual df R prints below the table ("on 29
+    degrees of freedom"). These heads had been unknown: no t was checked against its B and SE, and a p column
+    "Pr(>|t|)" was not read. Numbers: R's published output (above); scipy agrees with its p for t(29) = −6.129
+    (checked here); the wrong SE and p are mutations of ours. statsmodels' layout: its OLS on pingouin's penguins."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    assert f"{_p2(-6.129, 29):.2e}" == "1.12e-06" and f"{_p2(-3.519, 29):.5f}" == "0.00145"
+    found = audit_file(_doc(tmp_path / "r.docx", tables=[("Table 1\nFuel consumption by weight and horsepower", _R_COEFFICIENTS)], note=_R_NOTE))
+    assert [e.found for e in found] == ["t = 23.285, p < 2e-16", "t = -6.129, p = 1.12e-06", "t = -3.519, p = 0.00145",
+                                        "F-statistic: 69.21 on 2 and 29 DF, p-value: 9.109e-12"]  # (the note's F: R's line, read as ever)
+    assert not _p_findings(found[3]) and all(not _p_findings(e) and "coefficient-does-not-fit" not in e.codes and "df = 29" in e.checked for e in found[:3]), [(e.codes, e.checked) for e in found]
+    wrong = [row[:] for row in _R_COEFFICIENTS]
+    wrong[2][2], wrong[3][4] = "0.73273", "0.0145 *"  # SE of wt, p of hp
+    codes = {e.found: e.codes for e in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 1\nFuel consumption", wrong)], note=_R_NOTE))}
+    assert "coefficient-does-not-fit" in codes["t = -6.129, p = 1.12e-06"] and "p-does-not-follow" in codes["t = -3.519, p = 0.0145"]
+    # statsmodels' heads, no df given: the t against coef / std err only
+    data = pg.read_dataset("penguins").dropna()
+    fit = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", data).fit()
+    rows = [["", "coef", "std err", "t", "P>|t|"]] + [[k, f"{fit.params[k]:.4f}", f"{fit.bse[k]:.3f}", f"{fit.tvalues[k]:.3f}", f"{fit.pvalues[k]:.3f}"]
+                                                       for k in fit.params.index]
+    found = audit_file(_doc(tmp_path / "s.docx", tables=[("Table 2\nBody mass", rows)]))
+    assert len(found) == 3 and all(e.codes == [] for e in found), [(e.found, e.codes) for e in found]
+    rows[2][3] = f"{fit.tvalues.iloc[1] * 1.2:.3f}"
+    found = audit_file(_doc(tmp_path / "s2.docx", tables=[("Table 2\nBody mass", rows)]))
+    assert "coefficient-does-not-fit" in found[1].codes and found[1].found.startswith("t = " + rows[2][3])
+
+
+def test_a_t_value_or_f_value_named_so_is_read():
+    """"t value = −6.13, df = 29" (R's name for the column) and "F-value", "z-value": read as t, F and z (they had
+    not been read at all). Numbers: the R output above (wt's t and the model's F on 2 and 29 df)."""
+    typed = "Weight lowered mileage, t value = −6.13, df = 29, p < .001, and the model fit, F-value = 69.21, df = 2, 29, p < .001."
+    entries = audit_units([Unit("p", typed)])
+    assert [(e.found, e.codes) for e in entries] == [("t value = −6.13, df = 29, p < .001", []), ("F-value = 69.21, df = 2, 29, p < .001", [])]
+    assert "p-does-not-follow" in audit_units([Unit("p", "t-value = 6.13, df = 29, p = .04")])[0].codes
+    assert [e.found for e in audit_units([Unit("p", "The t value was large, and a z-value of 2 is none.")])] == []

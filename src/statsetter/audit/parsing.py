@@ -110,7 +110,7 @@ class Reported:
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
 def symbol_of(text: str) -> str | None:
-    t = text.replace(" ", "").removesuffix("-statistic")
+    t = text.replace(" ", "").removesuffix("-statistic").removesuffix("-value").removesuffix("value")  # "t-value", R's "t value"
     low = t.lower()
     if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2", "x-squared", "xsquared", "wald"):  # X-squared: as R prints χ²
         return "chi2"
@@ -145,10 +145,11 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−–", "0123456789
 _SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
             r"X\s?²", r"X\^2", r"X[- ]squared",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
-            # "F-statistic" as R's summary of a linear model prints it ("F-statistic: 4.51"), and a logistic coefficient's Wald χ²
+            # "F-statistic" as R's summary of a linear model prints it ("F-statistic: 4.51"; "t value", "F-value" as output columns
+            # name them), and a logistic coefficient's Wald χ²
             # as SPSS names it ("Wald = 6.13"; "Wald χ²(1)" is read at its χ²): optional tails of one alternative each, so that
             # the engine tries no more alternatives at every "t" of the prose
-            r"t(?:-statistic|s)?", r"F(?:-statistic|s)?", "r", r"z(?:-statistic)?", "Z", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
+            r"t(?:-statistic|[- ]value|s)?", r"F(?:-statistic|[- ]value|s)?", "r", r"z(?:-statistic|[- ]value)?", r"Z(?:[- ]value)?", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
 
 
 def _guarded(alternatives: "Iterable[str]", before: str) -> str:

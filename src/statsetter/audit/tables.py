@@ -34,12 +34,15 @@ _ROLES = (
     (re.compile(r"(?i)(?:b|estimate|coefficient|coef\.?)\s*\(\s*S\.?E\.?(?:\s?B)?\s*\)"), "BSE"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
     (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:\s+coefficients?)?"), "beta"),
-    (re.compile(r"B"), "B"),  # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B))
-    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Error"), "SE"),
+    # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
+    # and statsmodels': Coef., Std. Err., coef, std err)
+    (re.compile(r"B|b|(?i:estimates?|coef\.?|coefficients?)"), "B"),
+    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?"), "SE"),
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
     (re.compile(r"r"), "r"),
-    (re.compile(r"[zZ]"), "z"),
+    (re.compile(r"[zZ](?:[- ]?values?)?"), "z"),
     (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\))?|P\s*\(2-tailed\))"), "p"),
+    (re.compile(r"Pr?\s?\(?\s?>\s?\|[tzTZ]\|\s?\)?"), "p"),  # R's "Pr(>|t|)", "Pr(>|z|)"; Stata's and statsmodels' "P>|t|"
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
     # the χ²'s own p), and its statistics under "Value", each named by its row (_CHI_ROW)
     (re.compile(r"(?i)asymp(?:\.|totic)\s*sig(?:\.|nificance)\s*(?:\(2-sided\))?"), "p"),
@@ -78,7 +81,10 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
 # an error term's row: "Residuals", "Error", "Within groups", and an error named for its stratum as mixed and
 # repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
-_BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*(?P<marks>[{_SIGNIFICANCE}]+|[a-d])?\s*")
+_BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+)(?:[eE][-−+]?\d{{1,3}})?)\s*(?P<marks>[{_SIGNIFICANCE}]+|[a-d])?\s*")
+# a model's residual df as R's summary prints them under its coefficients ("Residual standard error: 2.593 on 29 degrees of
+# freedom"; "F-statistic: 69.21 on 2 and 29 DF"), when a table's caption or note keeps the line
+_RESIDUAL_DF = re.compile(r"\bon\s+(?:\d{1,6}\s+and\s+)?(\d{1,6})\s+(?:degrees\s+of\s+freedom|DF)\b")
 _NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
 _SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
 # a note's (or caption's) marks of significance: "*p < .05. **p < .01. ***p < .001.", "† p < .10", "^p < .10", "* P ≤ 0.05"
@@ -312,6 +318,15 @@ def _error_df(errors: list[tuple[int, float | None, dict[str, float | None]]], r
     return corrected.get(correction) if correction else df
 
 
+def _residual_readings(said: str) -> tuple[Reading, ...]:
+    """The residual df a model table's caption or note gives (one value): its t's df."""
+    found = {m.group(1) for m in _RESIDUAL_DF.finditer(said)}
+    if len(found) != 1:
+        return ()
+    (df,) = found
+    return (Reading((float(df),), f"df = {df} (the model's residual df, as the caption or note gives them: \u201con {df} degrees of freedom\u201d)"),)
+
+
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
 
 
@@ -467,7 +482,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
                 readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
-                readings = ()
+                readings = _residual_readings(said) if role == "t" else ()
             else:
                 above = "in the table" if labelled else "in the text above the table"
                 readings = tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,

@@ -271,7 +271,7 @@ def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, 
 def _lost_word(rep: Reported, old: str, new: str) -> str:
     """The first word of ``old`` that ``new`` drops, other than notation: a CI's "to" between its limits ("95% CI, 0.73
     to 0.80"), the words of a ratio's spelled-out name ("odds ratio" for OR, "adjusted" in aOR), the "statistic" of
-    R's "F-statistic" and the words around df written after the value ("on 1 and 30 DF") are notation there;
+    R's "F-statistic" (and "t-value", "t value") and the words around df written after the value ("on 1 and 30 DF") are notation there;
     "unadjusted" or "crude" are the author's and keep the statistic as typed."""
     kept = {w.lower() for w in _WORD.findall(new)} | _NOTATION_WORDS
     places = [(ci.low.end, ci.high.start, _RANGE_WORDS) for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
@@ -293,7 +293,7 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
 
 _RANGE_WORDS = frozenset({"to"})
 _RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj"})
-_SYMBOL_WORDS = frozenset({"statistic"})
+_SYMBOL_WORDS = frozenset({"statistic", "value"})
 _DF_WORDS = frozenset({"on", "and", "with", "df"})
 
 
