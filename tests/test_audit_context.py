@@ -923,3 +923,31 @@ def test_a_t_value_or_f_value_named_so_is_read():
     assert [(e.found, e.codes) for e in entries] == [("t value = −6.13, df = 29, p < .001", []), ("F-value = 69.21, df = 2, 29, p < .001", [])]
     assert "p-does-not-follow" in audit_units([Unit("p", "t-value = 6.13, df = 29, p = .04")])[0].codes
     assert [e.found for e in audit_units([Unit("p", "The t value was large, and a z-value of 2 is none.")])] == []
+
+
+def test_an_anova_table_as_r_and_statsmodels_head_it(tmp_path):
+    """R's summary of aov ("Df", "Sum Sq", "Mean Sq", "F value", "Pr(>F)", a Residuals row: the columns R's
+    documentation of summary.aov names, https://rdrr.io/r/stats/summary.aov.html) and statsmodels' anova_lm
+    ("df", "sum_sq", "mean_sq", "F", "PR(>F)"): each F with the residual row's df and its p. The p column had not
+    been read. Numbers: an R output published in a gist (https://gist.github.com/3rdworldjuander/e4ad2acf64d6c4d9f8f5d2cfd1b67add:
+    cprog, 16 and 1778 df, F = 2.726, p = 0.000256; scipy agrees, checked here) and statsmodels on pingouin's "anova"
+    data; the p off by a decimal place is a mutation of ours."""
+    import pingouin as pg
+    import statsmodels.api as sm
+    import statsmodels.formula.api as smf
+
+    assert f"{stats.f.sf(2.726, 16, 1778):.6f}" == "0.000255"  # (0.0002554: the printed 0.000256 is within F's rounding)
+    rows = [["", "Df", "Sum Sq", "Mean Sq", "F value", "Pr(>F)"], ["cprog", "16", "2.58", "0.16097", "2.726", "0.000256 ***"],
+            ["Residuals", "1778", "105.01", "0.05906", "", ""]]
+    (e,) = audit_file(_doc(tmp_path / "r.docx", tables=[("Table 3\nAnalysis of variance", rows)]))
+    assert (e.found, e.codes) == ("F(16, 1778) = 2.726, p = 0.000256", [])
+    rows[1][5] = "0.00256 **"
+    (e,) = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 3\nAnalysis of variance", rows)]))
+    assert "p-does-not-follow" in e.codes
+    data = pg.read_dataset("anova").rename(columns={"Hair color": "hair", "Pain threshold": "pain"})
+    table = sm.stats.anova_lm(smf.ols("pain ~ C(hair)", data).fit())
+    rows = [["", "df", "sum_sq", "mean_sq", "F", "PR(>F)"]] + [[k, f"{r.df:.1f}", f"{r.sum_sq:.3f}", f"{r.mean_sq:.3f}",
+                                                                  "" if k == "Residual" else f"{r.F:.3f}", "" if k == "Residual" else f"{r['PR(>F)']:.4f}"]
+                                                                 for k, r in table.iterrows()]
+    (e,) = audit_file(_doc(tmp_path / "s.docx", tables=[("Table 4\nPain by hair colour", rows)]))
+    assert e.codes == [] and e.found.startswith(f"F(3.0, 15) = {table.F.iloc[0]:.3f}, p = "), e.found

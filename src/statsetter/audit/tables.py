@@ -42,7 +42,8 @@ _ROLES = (
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?values?)?"), "z"),
     (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\))?|P\s*\(2-tailed\))"), "p"),
-    (re.compile(r"Pr?\s?\(?\s?>\s?\|[tzTZ]\|\s?\)?"), "p"),  # R's "Pr(>|t|)", "Pr(>|z|)"; Stata's and statsmodels' "P>|t|"
+    # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
+    (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|Chi(?:sq)?)\s?\)?"), "p"),
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
     # the χ²'s own p), and its statistics under "Value", each named by its row (_CHI_ROW)
     (re.compile(r"(?i)asymp(?:\.|totic)\s*sig(?:\.|nificance)\s*(?:\(2-sided\))?"), "p"),
