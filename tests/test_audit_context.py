@@ -951,3 +951,28 @@ def test_an_anova_table_as_r_and_statsmodels_head_it(tmp_path):
                                                                  for k, r in table.iterrows()]
     (e,) = audit_file(_doc(tmp_path / "s.docx", tables=[("Table 4\nPain by hair colour", rows)]))
     assert e.codes == [] and e.found.startswith(f"F(3.0, 15) = {table.F.iloc[0]:.3f}, p = "), e.found
+
+
+def test_a_t_test_table_whose_rows_name_the_test_beside_a_statistic_column(tmp_path):
+    """A t-test table laid out with one "Statistic" column and the test named in each row ("Student's t", "Welch's
+    t", "Mann-Whitney U"), as jamovi and JASP print theirs (practice; layout from memory): each value is that test's,
+    with its row's df and p (none had been read). Numbers: pingouin's penguins, body mass by sex (scipy's and
+    pingouin's tests, computed here); the p of .042 is a mutation of ours."""
+    import pingouin as pg
+
+    data = pg.read_dataset("penguins").dropna(subset=["sex", "body_mass_g"])
+    a, b = (data.loc[data["sex"] == s, "body_mass_g"] for s in ("female", "male"))
+    student, welch, ranks = stats.ttest_ind(a, b), stats.ttest_ind(a, b, equal_var=False), stats.mannwhitneyu(a, b)
+    welch_df = pg.ttest(a, b, correction=True)["dof"].iloc[0]
+    rows = [["", "", "Statistic", "df", "p"], ["Body mass", "Student's t", f"{student.statistic:.2f}", f"{len(a) + len(b) - 2}", "< .001"],
+            ["", "Welch's t", f"{welch.statistic:.2f}", f"{welch_df:.1f}", "< .001"], ["", "Mann-Whitney U", f"{ranks.statistic:.1f}", "", "< .001"]]
+    found = audit_file(_doc(tmp_path / "j.docx", tables=[("Table 5\nBody mass by sex", rows)]))
+    assert [e.found for e in found] == [f"t({len(a) + len(b) - 2}) = {student.statistic:.2f}, p < .001", f"t({welch_df:.1f}) = {welch.statistic:.2f}, p < .001",
+                                        f"U = {ranks.statistic:.1f}, p < .001"]
+    assert all(e.codes == [] for e in found) and "t(331)" in found[0].checked
+    rows[1][4] = ".042"
+    assert "p-does-not-follow" in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 5\nBody mass by sex", rows)]))[0].codes
+    # SPSS's Descriptives table also heads a column "Statistic": its rows name no test, and nothing is read
+    rows = [["", "", "Statistic", "Std. Error"], ["Body mass", "Mean", f"{data['body_mass_g'].mean():.2f}", f"{stats.sem(data['body_mass_g']):.2f}"],
+            ["", "Skewness", f"{stats.skew(data['body_mass_g']):.3f}", "0.134"]]
+    assert audit_file(_doc(tmp_path / "d.docx", tables=[("Table 6\nBody mass", rows)])) == []

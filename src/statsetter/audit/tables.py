@@ -47,13 +47,16 @@ _ROLES = (
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
     # the χ²'s own p), and its statistics under "Value", each named by its row (_CHI_ROW)
     (re.compile(r"(?i)asymp(?:\.|totic)\s*sig(?:\.|nificance)\s*(?:\(2-sided\))?"), "p"),
-    (re.compile(r"(?i)value"), "value"),
+    (re.compile(r"(?i)value|(?:test\s+)?statistic"), "value"),  # (jamovi's and JASP's t-test tables: "Statistic", the test named in the row)
     (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
 )
-_STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald"}
+_STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald", "U"}  # (U: only as a row names it under "Statistic")
 # the rows of SPSS's Chi-Square Tests whose Value is a χ² (footnote letters after their names, as SPSS prints them)
+# the test a row of a t-test table names beside its "Statistic" (jamovi's and JASP's layout: "Student's t", "Welch's t",
+# "Mann-Whitney U"; practice): the statistic is that test's
+_TEST_ROW = {"t": re.compile(r"(?i)\s*(?:student(?:'?s)?|welch(?:'?s)?)(?:\s+t)?\s*"), "U": re.compile(r"(?i)\s*mann[-–\s]?whitney(?:\s+U)?\s*")}
 _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|continuity\s+correction|linear[- ]by[- ]linear\s+association)[a-d]?\s*")
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
@@ -319,6 +322,18 @@ def _error_df(errors: list[tuple[int, float | None, dict[str, float | None]]], r
     return corrected.get(correction) if correction else df
 
 
+def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> str:
+    """The test a cell before ``column`` names ("Student's t", "Welch's t", "Mann-Whitney U"), or ""."""
+    for k in sorted(row):
+        if k >= column:
+            break
+        text = row[k][0].text
+        for symbol, pattern in _TEST_ROW.items():
+            if pattern.fullmatch(text):
+                return symbol
+    return ""
+
+
 def _residual_readings(said: str) -> tuple[Reading, ...]:
     """The residual df a model table's caption or note gives (one value): its t's df."""
     found = {m.group(1) for m in _RESIDUAL_DF.finditer(said)}
@@ -435,7 +450,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         for c, role in roles.items():
             by_row = role == "value"
             if by_row:  # a χ² when its row names one
-                role = "chi2" if _CHI_ROW.fullmatch(row[min(row)][0].text) else ""
+                role = "chi2" if _CHI_ROW.fullmatch(row[min(row)][0].text) else _named_test(row, c)
             if role not in _STAT_ROLES or numbers.get(c) is None or c not in row:
                 continue
             op, value = numbers[c]  # type: ignore[misc]
@@ -443,7 +458,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             p_col = _own_column(roles, c, "p")
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
             df: tuple[Number, ...] = ()
-            how = f"the {role if role != 'chi2' else 'χ²'} column" if not by_row else f"the Value column (a χ² as its row, {row[min(row)][0].text.strip()}, names it)"
+            how = (f"the {role if role != 'chi2' else 'χ²'} column" if not by_row else
+                   f"the Value column (a χ² as its row, {row[min(row)][0].text.strip()}, names it)" if role == "chi2" else
+                   f"the Statistic column (a {role}: the test its row names)")
             k = _own_column(roles, c, "df")
             if c in cell_dfs:
                 df = cell_dfs[c]
