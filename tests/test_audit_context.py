@@ -976,3 +976,29 @@ def test_a_t_test_table_whose_rows_name_the_test_beside_a_statistic_column(tmp_p
     rows = [["", "", "Statistic", "Std. Error"], ["Body mass", "Mean", f"{data['body_mass_g'].mean():.2f}", f"{stats.sem(data['body_mass_g']):.2f}"],
             ["", "Skewness", f"{stats.skew(data['body_mass_g']):.3f}", "0.134"]]
     assert audit_file(_doc(tmp_path / "d.docx", tables=[("Table 6\nBody mass", rows)])) == []
+
+
+def test_a_correlation_matrix_with_df_and_p_value_rows_under_each_coefficient(tmp_path):
+    """jamovi's and JASP's correlation matrix: under each variable's "Pearson's r" row a "df" row and a "p-value" row
+    (practice; layout from memory), as SPSS's has "Sig. (2-tailed)" and "N" rows: each coefficient is read with the df
+    and p below it (they had not been read). Numbers: pingouin's penguins, scipy's pearsonr (computed here); the
+    coefficient .056 is a mutation of ours."""
+    import pingouin as pg
+
+    data = pg.read_dataset("penguins").dropna(subset=["bill_length_mm", "flipper_length_mm", "body_mass_g"])
+    names = {"bill_length_mm": "Bill", "flipper_length_mm": "Flipper", "body_mass_g": "Mass"}
+    rows = [["", ""] + list(names.values())]
+    for i, a in enumerate(names):
+        blocks = [[names[a], "Pearson's r"], ["", "df"], ["", "p-value"]]
+        for j, b in enumerate(names):
+            r, p = stats.pearsonr(data[a], data[b])
+            cells = [f"{r:.3f}", str(len(data) - 2), "< .001" if p < 0.001 else f"{p:.3f}"] if j < i else ["—"] * 3 if j == i else [""] * 3
+            for block, cell in zip(blocks, cells):
+                block.append(cell)
+        rows += blocks
+    found = audit_file(_doc(tmp_path / "c.docx", tables=[("Table 7\nCorrelations of the penguins' measures", rows)]))
+    r = stats.pearsonr(data["bill_length_mm"], data["flipper_length_mm"])[0]
+    assert len(found) == 3 and found[0].found == f"r({len(data) - 2}) = {r:.3f}, p < .001" and all(e.codes == [] for e in found)
+    rows[4][2] = "0.056"
+    found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 7\nCorrelations", rows)]))
+    assert "p-does-not-follow" in found[0].codes and found[0].found.startswith("r(340) = 0.056")

@@ -646,11 +646,13 @@ def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no
 
 
 # SPSS's Correlations table: under each variable a row of coefficients ("Pearson Correlation", or Spearman's and Kendall's
-# "Correlation Coefficient"), then its "Sig. (2-tailed)" and its "N", each column a pair of variables
-_COEFFICIENT_ROW = re.compile(r"(?i)\s*(?:pearson\s+correlation|correlation\s+coefficient)\s*")
+# "Correlation Coefficient"), then its "Sig. (2-tailed)" and its "N", each column a pair of variables; jamovi's and JASP's
+# ("Pearson's r" or "Spearman's rho", then "df" and "p-value" rows; practice)
+_COEFFICIENT_ROW = re.compile(r"(?i)\s*(?:pearson\s+correlation|correlation\s+coefficient|pearson'?s\s+r|spearman'?s\s+(?:rho|ρ))\s*")
 _SPEARMAN = re.compile(r"(?i)spearman|rho")
-_SIG_ROW = re.compile(r"(?i)\s*sig\.?\s*\(([12])-tailed\)\s*")
+_SIG_ROW = re.compile(r"(?i)\s*(?:sig\.?\s*\(([12])-tailed\)|p[- ]?value|p)\s*")
 _N_ROW = re.compile(r"(?i)\s*n\s*")
+_DF_ROW = re.compile(r"(?i)\s*df\s*")
 
 
 def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
@@ -658,7 +660,8 @@ def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[
     and the N of the N row below it in its column (df = N − 2), Spearman's where the table names it (its rows are
     "Correlation Coefficient" under "Spearman's rho"); a coefficient without a p below it (the diagonal's 1) is none.
     A Sig. (1-tailed) row, as SPSS prints it when asked for one-tailed tests, says so in how it was read: its p fits a
-    one-sided test, which the audit notes instead of warning."""
+    one-sided test, which the audit notes instead of warning. jamovi and JASP put a "df" row and a "p-value" row under
+    "Pearson's r" (or "Spearman's rho"): the df as given."""
     order = sorted(rows)
     found: list[TableStatistic] = []
     spearman = False
@@ -667,22 +670,42 @@ def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[
         columns = sorted(row)
         spearman = spearman or any(_SPEARMAN.search(row[c][0].text) for c in columns[:2])
         label = next((c for c in columns[:2] if _COEFFICIENT_ROW.fullmatch(row[c][0].text)), None)
-        if label is None or k + 2 >= len(order):
+        if label is None:
             continue
-        sig, n = rows[order[k + 1]], rows[order[k + 2]]
-        tails = next((m.group(1) for c in columns[:2] if c in sig for m in [_SIG_ROW.fullmatch(sig[c][0].text)] if m), None)
-        if tails is None or not any(c in n and _N_ROW.fullmatch(n[c][0].text) for c in columns[:2]):
+        sig = n = df_row = None
+        tails = "2"
+        for below in order[k + 1 : k + 4]:  # the rows under it that name what they give, up to the next coefficients
+            cells = rows[below]
+            named = [cells[c][0].text for c in columns[:2] if c in cells]
+            if any(_COEFFICIENT_ROW.fullmatch(t) for t in named):
+                break
+            m = next((m for t in named for m in [_SIG_ROW.fullmatch(t)] if m), None)
+            if m is not None and sig is None:
+                sig, tails = cells, m.group(1) or "2"
+            elif any(_N_ROW.fullmatch(t) for t in named) and n is None:
+                n = cells
+            elif any(_DF_ROW.fullmatch(t) for t in named) and df_row is None:
+                df_row = cells
+        if sig is None or (n is None and df_row is None):
             continue
         symbol = "rs" if spearman and "pearson" not in row[label][0].text.lower() else "r"
         for c in columns:
             if c <= label:
                 continue
-            value, p, size = _number(row[c][0].text, mark), _p_cell(sig[c][0].text, mark) if c in sig else None, _number(n[c][0].text, mark) if c in n else None
-            if value is None or p is None or size is None or size[1].value < 3:
+            value, p = _number(row[c][0].text, mark), _p_cell(sig[c][0].text, mark) if c in sig else None
+            if df_row is not None:
+                given = _number(df_row[c][0].text, mark) if c in df_row else None
+                df = given[1] if given is not None and given[1].value >= 1 else None
+                how = "the coefficient, the df and p-value rows below it in its column"
+            else:
+                size = _number(n[c][0].text, mark) if c in n else None
+                df = Number(f"{size[1].value - 2:g}", size[1].value - 2, 0, 0, 0) if size is not None and size[1].value >= 3 else None
+                how = f"the coefficient, the Sig. ({tails}-tailed) and N rows below it in its column (df = N − 2)"
+            if value is None or p is None or df is None:
                 continue
-            df = Number(f"{size[1].value - 2:g}", size[1].value - 2, 0, 0, 0)
+            df = Number(df.text, df.value, 0, 0, 0)  # (the df's place is another cell's)
             unit = row[c][0]
             rep = Reported(symbol, symbol, value[1].start, value[1].start, value[1].end, (df,), None, value[0], value[1], p)
             rep.text = statistic_text(symbol, (df,), value[0], value[1], p)
-            found.append(TableStatistic(unit, rep, None, f"read from the table's row: the coefficient, the Sig. ({tails}-tailed) and N rows below it in its column (df = N − 2)"))
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}"))
     return found
