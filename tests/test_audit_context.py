@@ -1002,3 +1002,35 @@ def test_a_correlation_matrix_with_df_and_p_value_rows_under_each_coefficient(tm
     rows[4][2] = "0.056"
     found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 7\nCorrelations", rows)]))
     assert "p-does-not-follow" in found[0].codes and found[0].found.startswith("r(340) = 0.056")
+
+
+def test_an_anova_tables_effect_size_column_is_checked_against_its_f(tmp_path):
+    """An ANOVA table's effect size in a column of its own (SPSS's "Partial Eta Squared", "η²p", "η²") is read with
+    its row's F and checked against it: η²p = F·df₁/(F·df₁ + df₂), and η² can only be smaller (it had not been read;
+    a wrong η²p in a table passed). Numbers: pingouin's anova (np2) of its "anova" data, pain threshold by hair
+    colour, computed here; .30 is a mutation of ours."""
+    import pingouin as pg
+
+    table = pg.anova(dv="Pain threshold", between="Hair color", data=pg.read_dataset("anova"), detailed=True)
+    effect, error = table.iloc[0], table.iloc[1]
+    rows = [["Source", "Type III Sum of Squares", "df", "Mean Square", "F", "Sig.", "Partial Eta Squared"],
+            ["Hair color", f"{effect.SS:.3f}", f"{effect.DF}", f"{effect.MS:.3f}", f"{effect.F:.3f}", f"{effect['p_unc']:.3f}", f"{effect.np2:.3f}"],
+            ["Error", f"{error.SS:.3f}", f"{error.DF}", f"{error.MS:.3f}", "", "", ""]]
+    (e,) = audit_file(_doc(tmp_path / "a.docx", tables=[("Table 9\nPain threshold by hair colour", rows)]))
+    assert e.codes == [] and e.found.endswith(f", η²p = {effect.np2:.3f}"), (e.found, e.codes)
+    rows[1][6] = ".300"
+    (e,) = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 9\nPain threshold by hair colour", rows)]))
+    assert e.codes == ["effect-does-not-fit"] and "η²p = .300 does not fit" in e.message
+    rows[0][6], rows[1][6] = "η²", f"{effect.np2 + 0.05:.3f}"  # (η² cannot exceed η²p: with one factor they are equal)
+    (e,) = audit_file(_doc(tmp_path / "e.docx", tables=[("Table 9\nPain threshold by hair colour", rows)]))
+    assert e.codes == ["effect-does-not-fit"]
+    # a real table: JASP's ANOVA published with its data (tests/real_typings.py, lboro-12017007), its η² column
+    from real_typings import ITEMS, HELD_OUT, Table
+
+    (jasp,) = [t for t in ITEMS + HELD_OUT if isinstance(t, Table) and t.caption == "ANOVA - OfficialScore"]
+    rows = [list(r) for r in jasp.rows]
+    found = audit_file(_doc(tmp_path / "j.docx", tables=[(f"Table 10\n{jasp.caption}", rows)]))
+    assert [e.found for e in found[:2]] == ["F(1, 1165) = 8.410, p = 0.004, η² = 0.007", "F(1, 1165) = 1.586, p = 0.208, η² = 0.001"]
+    assert all(e.codes == [] for e in found)
+    rows[1][6] = "0.070"  # (η²p is 8.410 / (8.410 + 1165) = .0072: η² cannot be .070)
+    assert audit_file(_doc(tmp_path / "k.docx", tables=[(f"Table 10\n{jasp.caption}", rows)]))[0].codes == ["effect-does-not-fit"]

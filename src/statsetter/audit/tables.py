@@ -47,7 +47,10 @@ _ROLES = (
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
     # the χ²'s own p), and its statistics under "Value", each named by its row (_CHI_ROW)
     (re.compile(r"(?i)asymp(?:\.|totic)\s*sig(?:\.|nificance)\s*(?:\(2-sided\))?"), "p"),
-    (re.compile(r"(?i)value|(?:test\s+)?statistic"), "value"),  # (jamovi's and JASP's t-test tables: "Statistic", the test named in the row)
+    (re.compile(r"(?i)value|(?:test\s+)?statistic"), "value"),
+    # an F's effect size in a column of its own (SPSS's "Partial Eta Squared"; "η²p", "ηp²", "η²", "ω²"): checked against the F
+    (re.compile(r"(?i)partial\s+(?:eta|η)[\s-]?(?:squared|[²2])|η\s?[²2]\s?p|ηp\s?[²2]|η_p\^?2"), "effect:eta2_p"),
+    (re.compile(r"(?i)(?:eta|η)[\s-]?(?:squared|[²2])"), "effect:eta2"),  # (jamovi's and JASP's t-test tables: "Statistic", the test named in the row)
     (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
@@ -369,6 +372,17 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple
     return (b, se), effects
 
 
+def _effect_cells(row, roles: dict[int, str], numbers, column: int) -> list[Effect]:  # type: ignore[no-untyped-def]
+    """The effect sizes in their own columns beside the statistic in ``column`` (those up to the next statistic's)."""
+    out = []
+    for name in ("eta2_p", "eta2"):
+        k = _own_column(roles, column, f"effect:{name}")
+        if k is not None and k in row and numbers.get(k) is not None and numbers[k][0] == "=":
+            number = numbers[k][1]
+            out.append(Effect(name, number, number.start, number.end, number.start, "η²p" if name == "eta2_p" else "η²", None))
+    return out
+
+
 def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str,
                      stars: "dict[str, tuple[str, Number]] | None" = None, said: str = "", welch: bool = False,
                      labelled: bool = True) -> tuple[list[TableStatistic], set[int]]:
@@ -491,12 +505,15 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                     how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text}, as the table defines it)"  # type: ignore[union-attr]
             coefficient, effects = _coefficient_cells(row, roles, numbers, mark) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role == "wald" else []  # (a linear model's row has no odds ratio)
+            if role == "F":
+                effects = _effect_cells(row, roles, numbers, c)
+                how += "".join(f", the {e.symbol_text} column" for e in effects)
             if coefficient is not None:
                 how += ", the B and SE columns" + (", the Exp(B) column" if effects else "")
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
-            rep.text = statistic_text(label, df, op, value, p)
+            rep.text = statistic_text(label, df, op, value, p) + "".join(f", {e.symbol_text} = {e.number.text}" for e in effects if e.name != "OR")
             if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
                 readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
