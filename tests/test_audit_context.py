@@ -1030,7 +1030,8 @@ def test_an_anova_tables_effect_size_column_is_checked_against_its_f(tmp_path):
     (jasp,) = [t for t in ITEMS + HELD_OUT if isinstance(t, Table) and t.caption == "ANOVA - OfficialScore"]
     rows = [list(r) for r in jasp.rows]
     found = audit_file(_doc(tmp_path / "j.docx", tables=[(f"Table 10\n{jasp.caption}", rows)]))
-    assert [e.found for e in found[:2]] == ["F(1, 1165) = 8.410, p = 0.004, η² = 0.007", "F(1, 1165) = 1.586, p = 0.208, η² = 0.001"]
+    assert [e.found for e in found] == ["F(1, 1165) = 8.410, p = 0.004, η² = 0.007", "F(1, 1165) = 1.586, p = 0.208, η² = 0.001",
+                                        "F(1, 1165) = 0.525, p = 0.469, η² = 4.462e-4"]  # (JASP's "4.462e -4": a power of ten spaced)
     assert all(e.codes == [] for e in found)
     rows[1][6] = "0.070"  # (η²p is 8.410 / (8.410 + 1165) = .0072: η² cannot be .070)
     assert audit_file(_doc(tmp_path / "k.docx", tables=[(f"Table 10\n{jasp.caption}", rows)]))[0].codes == ["effect-does-not-fit"]

@@ -88,7 +88,7 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
 # an error term's row: "Residuals", "Error", "Within groups", and an error named for its stratum as mixed and
 # repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
-_BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+)(?:[eE][-−+]?\d{{1,3}})?)\s*(?P<marks>[{_SIGNIFICANCE}]+|[a-d])?\s*")
+_BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+)(?:[eE]\s?[-−+]?\d{{1,3}})?)\s*(?P<marks>[{_SIGNIFICANCE}]+|[a-d])?\s*")
 # a model's residual df as R's summary prints them under its coefficients ("Residual standard error: 2.593 on 29 degrees of
 # freedom"; "F-statistic: 69.21 on 2 and 29 DF"), when a table's caption or note keeps the line
 _RESIDUAL_DF = re.compile(r"\bon\s+(?:\d{1,6}\s+and\s+)?(\d{1,6})\s+(?:degrees\s+of\s+freedom|DF)\b")
@@ -249,7 +249,10 @@ def _number(text: str, mark: str) -> tuple[str, Number] | None:
     m = _BARE.fullmatch(text)
     if m is None:
         return None
-    num = _patterns(mark).to_number(m.group("num"), m.start("num"))
+    typed = m.group("num")
+    if " " in typed:  # "4.462e -4", as JASP's exported tables space a power of ten
+        typed = re.sub(r"(?<=[eE])\s", "", typed)
+    num = _patterns(mark).to_number(typed, m.start("num"))
     if num is None:
         return None
     return (m.group("op") or "=").strip(), num
