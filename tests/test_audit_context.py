@@ -1035,3 +1035,33 @@ def test_an_anova_tables_effect_size_column_is_checked_against_its_f(tmp_path):
     assert all(e.codes == [] for e in found)
     rows[1][6] = "0.070"  # (η²p is 8.410 / (8.410 + 1165) = .0072: η² cannot be .070)
     assert audit_file(_doc(tmp_path / "k.docx", tables=[(f"Table 10\n{jasp.caption}", rows)]))[0].codes == ["effect-does-not-fit"]
+
+
+def test_a_one_sample_t_tables_cohens_d_is_checked_against_its_t(tmp_path):
+    """A t table's "Cohen's d" column is read with its row's t; where the caption says the test is a one-sample test
+    (one SD: d is t/√n) or the head names d_z, d is checked against t/√(df + 1). A paired test's "Cohen's d" may be
+    d_z or d_av (pingouin's), and is left alone; so is an independent test's without group sizes. Numbers: JASP's
+    published one-sample test (tests/real_typings.py, lboro-12017007: t(1168) = 10.663, d = 0.312), and pingouin's
+    paired test of its rm_anova_wide data (its d_av, and d_z computed here); the wrong d's are mutations of ours."""
+    import pingouin as pg
+    from real_typings import HELD_OUT, ITEMS, Table
+
+    (jasp,) = [t for t in ITEMS + HELD_OUT if isinstance(t, Table) and t.caption == "One Sample T-Test"]
+    rows = [list(r) for r in jasp.rows]
+    (e,) = audit_file(_doc(tmp_path / "j.docx", tables=[(f"Table 11\n{jasp.caption}", rows)]))
+    assert (e.found, e.codes) == ("t(1168) = 10.663, p < .001, d = 0.312", [])
+    rows[1][4] = "0.412"
+    (e,) = audit_file(_doc(tmp_path / "k.docx", tables=[(f"Table 11\n{jasp.caption}", rows)]))
+    assert e.codes == ["d-does-not-fit"] and "t/√1169" in e.message
+    wide = pg.read_dataset("rm_anova_wide").dropna()
+    first, last = wide.columns[0], wide.columns[-1]
+    test = pg.ttest(wide[first], wide[last], paired=True)
+    diff = wide[first] - wide[last]
+    d_z = diff.mean() / diff.std()
+    row = ["Scores", f"{test['T'].iloc[0]:.3f}", f"{int(test['dof'].iloc[0])}", f"{test['p_val'].iloc[0]:.3f}"]
+    (e,) = audit_file(_doc(tmp_path / "p.docx", tables=[("Table 12\nPaired Samples T-Test", [["", "t", "df", "p", "Cohen's d"], row + [f"{test['cohen_d'].iloc[0]:.3f}"]])]))
+    assert e.codes == [] and abs(test["cohen_d"].iloc[0] - abs(d_z)) > 0.01  # (pingouin's d_av is not d_z: not checked, no finding)
+    (e,) = audit_file(_doc(tmp_path / "z.docx", tables=[("Table 12\nPaired Samples T-Test", [["", "t", "df", "p", "d_z"], row + [f"{d_z:.3f}"]])]))
+    assert e.codes == []
+    (e,) = audit_file(_doc(tmp_path / "y.docx", tables=[("Table 12\nPaired Samples T-Test", [["", "t", "df", "p", "d_z"], row + [f"{d_z * 1.5:.3f}"]])]))
+    assert e.codes == ["d-does-not-fit"]

@@ -50,7 +50,11 @@ _ROLES = (
     (re.compile(r"(?i)value|(?:test\s+)?statistic"), "value"),
     # an F's effect size in a column of its own (SPSS's "Partial Eta Squared"; "η²p", "ηp²", "η²", "ω²"): checked against the F
     (re.compile(r"(?i)partial\s+(?:eta|η)[\s-]?(?:squared|[²2])|η\s?[²2]\s?p|ηp\s?[²2]|η_p\^?2"), "effect:eta2_p"),
-    (re.compile(r"(?i)(?:eta|η)[\s-]?(?:squared|[²2])"), "effect:eta2"),  # (jamovi's and JASP's t-test tables: "Statistic", the test named in the row)
+    (re.compile(r"(?i)(?:eta|η)[\s-]?(?:squared|[²2])"), "effect:eta2"),
+    # a t's Cohen's d: checked as t/√(df + 1) where the head names it d_z, or the caption or note says the test is a
+    # one-sample test (one SD: no other d); a paired test's "Cohen's d" may be d_z or d_av (pingouin's), and is not checked
+    (re.compile(r"(?i)(?:cohen'?s\s+)?d_?z"), "effect:d_z"),
+    (re.compile(r"(?i)cohen'?s\s+d|d"), "effect:d"),  # (jamovi's and JASP's t-test tables: "Statistic", the test named in the row)
     (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
@@ -375,14 +379,19 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple
     return (b, se), effects
 
 
-def _effect_cells(row, roles: dict[int, str], numbers, column: int) -> list[Effect]:  # type: ignore[no-untyped-def]
-    """The effect sizes in their own columns beside the statistic in ``column`` (those up to the next statistic's)."""
+_ONE_SAMPLE = re.compile(r"(?i)\bone[- ]sample")  # a one-sample t test: its d is the mean over the one SD, t/√n
+
+
+def _effect_cells(row, roles: dict[int, str], numbers, column: int, names: Sequence[str], one_sample: bool = False) -> list[Effect]:  # type: ignore[no-untyped-def]
+    """The effect sizes ``names`` in their own columns beside the statistic in ``column`` (those up to the next
+    statistic's); a one-sample test's d is t/√n, as a d_z is."""
     out = []
-    for name in ("eta2_p", "eta2"):
+    for name in names:
         k = _own_column(roles, column, f"effect:{name}")
         if k is not None and k in row and numbers.get(k) is not None and numbers[k][0] == "=":
             number = numbers[k][1]
-            out.append(Effect(name, number, number.start, number.end, number.start, "η²p" if name == "eta2_p" else "η²", None))
+            shown = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z"}[name]
+            out.append(Effect("d_z" if name == "d" and one_sample else name, number, number.start, number.end, number.start, shown, None))
     return out
 
 
@@ -508,8 +517,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                     how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text}, as the table defines it)"  # type: ignore[union-attr]
             coefficient, effects = _coefficient_cells(row, roles, numbers, mark) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role == "wald" else []  # (a linear model's row has no odds ratio)
-            if role == "F":
-                effects = _effect_cells(row, roles, numbers, c)
+            if role in ("F", "t"):
+                effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2") if role == "F" else ("d", "d_z"), _ONE_SAMPLE.search(said) is not None)
                 how += "".join(f", the {e.symbol_text} column" for e in effects)
             if coefficient is not None:
                 how += ", the B and SE columns" + (", the Exp(B) column" if effects else "")
