@@ -1065,3 +1065,35 @@ def test_a_one_sample_t_tables_cohens_d_is_checked_against_its_t(tmp_path):
     assert e.codes == []
     (e,) = audit_file(_doc(tmp_path / "y.docx", tables=[("Table 12\nPaired Samples T-Test", [["", "t", "df", "p", "d_z"], row + [f"{d_z * 1.5:.3f}"]])]))
     assert e.codes == ["d-does-not-fit"]
+
+
+def test_a_t_tests_mean_difference_and_its_se_are_checked_against_the_t(tmp_path):
+    """SPSS's Independent Samples Test gives each t with its "Mean Difference" and "Std. Error Difference" (jamovi:
+    "Mean difference", "SE difference"): t is their ratio, for Student's and Welch's rows alike, and a t or SE that
+    does not fit is the warning coefficient-does-not-fit (it had not been checked). Layout: SPSS's two header rows
+    (practice; from memory); numbers: pingouin's penguins, body mass by sex, with scipy's Levene and t tests and the
+    pooled and Welch SEs computed here; the wrong SE is a mutation of ours."""
+    import pingouin as pg
+
+    data = pg.read_dataset("penguins").dropna(subset=["sex", "body_mass_g"])
+    a, b = (data.loc[data["sex"] == s, "body_mass_g"] for s in ("female", "male"))
+    student, welch, levene = stats.ttest_ind(a, b), stats.ttest_ind(a, b, equal_var=False), stats.levene(a, b, center="mean")
+    pooled = math.sqrt(((len(a) - 1) * a.var() + (len(b) - 1) * b.var()) / (len(a) + len(b) - 2)) * math.sqrt(1 / len(a) + 1 / len(b))
+    apart = math.sqrt(a.var() / len(a) + b.var() / len(b))
+    welch_df = pg.ttest(a, b, correction=True)["dof"].iloc[0]
+    difference = a.mean() - b.mean()
+    rows = [["", "", "Levene's Test for Equality of Variances", "", "t-test for Equality of Means", "", "", "", ""],
+            ["", "", "F", "Sig.", "t", "df", "Sig. (2-tailed)", "Mean Difference", "Std. Error Difference"],
+            ["Body mass", "Equal variances assumed", f"{levene.statistic:.3f}", f"{levene.pvalue:.3f}", f"{student.statistic:.3f}",
+             f"{len(a) + len(b) - 2}", "<.001", f"{difference:.3f}", f"{pooled:.3f}"],
+            ["", "Equal variances not assumed", "", "", f"{welch.statistic:.3f}", f"{welch_df:.3f}", "<.001", f"{difference:.3f}", f"{apart:.3f}"]]
+    found = audit_file(_doc(tmp_path / "s.docx", tables=[("Table 13\nIndependent Samples Test", rows)]))
+    ts = [e for e in found if e.found.startswith("t(")]
+    assert len(ts) == 2 and all(e.codes == [] for e in found), [(e.found, e.codes) for e in found]
+    rows[3][8] = f"{pooled * 1.3:.3f}"
+    ts = [e for e in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 13\nIndependent Samples Test", rows)])) if e.found.startswith("t(")]
+    assert ts[0].codes == [] and ts[1].codes == ["coefficient-does-not-fit"] and "is not mean difference / SE" in ts[1].message
+    jamovi = [["", "", "Statistic", "df", "p", "Mean difference", "SE difference"],
+              ["Body mass", "Student's t", f"{student.statistic:.2f}", f"{len(a) + len(b) - 2}", "< .001", f"{difference:.1f}", f"{pooled * 0.8:.1f}"]]
+    (e,) = audit_file(_doc(tmp_path / "j.docx", tables=[("Table 14\nIndependent Samples T-Test", jamovi)]))
+    assert e.codes == ["coefficient-does-not-fit"]

@@ -58,7 +58,7 @@ CODES: dict[str, tuple[str, str]] = {
                        "Repeated-measures ANOVA: the corrected test is F(ε·df₁, ε·df₂) (Greenhouse & Geisser, 1959; definition); "
                        "report the df of the test whose p is given (practice)"),
     "coefficient-does-not-fit": (
-        "t (or z) does not equal B / SE, a Wald χ² (B / SE)², or an odds ratio exp(B)",
+        "t (or z) does not equal B / SE (or a table's mean difference / its SE), a Wald χ² (B / SE)², or an odds ratio exp(B)",
         "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE, its χ² form "
         "(B / SE)² on 1 df, and a logistic coefficient's odds ratio exp(B) (definitions; practice)",
     ),
@@ -813,12 +813,17 @@ def corrected_df(rep: Reported) -> list[Finding]:
     return out
 
 
-def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None) -> list[Finding]:
+Ratio = "tuple[Number, Number] | tuple[Number, Number, tuple[str, str]]"  # an estimate, its SE, and their names when not B and SE
+
+
+def coefficient_ratio(rep: Reported, coefficient: "Ratio | None") -> list[Finding]:
     """A coefficient's t (or z) against B / SE, its Wald χ² (the only χ² given a coefficient) against (B / SE)², and an
-    odds ratio beside it against exp(B), with interval arithmetic on the printed precision of all of them."""
+    odds ratio beside it against exp(B), with interval arithmetic on the printed precision of all of them; a t against
+    the mean difference / its SE where a table gives those (third item: their names)."""
     if coefficient is None or rep.value is None or rep.op != "=" or rep.symbol not in ("t", "z", "chi2"):
         return []
-    b, se = coefficient
+    b, se, *named = coefficient
+    b_name, se_name = named[0] if named else ("B", "SE")
     se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
     if se_low <= 0:
         return []  # an SE printed as 0.00 bounds nothing
@@ -829,10 +834,10 @@ def coefficient_ratio(rep: Reported, coefficient: tuple[Number, Number] | None) 
     out = []
     if rep.symbol == "chi2":  # the Wald χ² of one coefficient: (B / SE)²
         ratio = (0.0 if ratio[0] <= 0 <= ratio[1] else min(ratio[0] ** 2, ratio[1] ** 2), max(ratio[0] ** 2, ratio[1] ** 2))
-    name, what = ("Wald", "(B / SE)²") if rep.symbol == "chi2" else (rep.symbol, "B / SE")
+    name, what = ("Wald", f"({b_name} / {se_name})²") if rep.symbol == "chi2" else (rep.symbol, f"{b_name} / {se_name}")
     if not _overlap(ratio, stat):
-        out.append(Finding("coefficient-does-not-fit", f"{name} = {rep.value.text} is not {what}: B = {b.text} and SE = {se.text} give "
-                                                        f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"B = {b.text}, SE = {se.text}, {name} = {rep.value.text}"))
+        out.append(Finding("coefficient-does-not-fit", f"{name} = {rep.value.text} is not {what}: {b_name} = {b.text} and {se_name} = {se.text} give "
+                                                        f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"{b_name} = {b.text}, {se_name} = {se.text}, {name} = {rep.value.text}"))
     odds = next((e for e in rep.effects if e.name in ("OR", "aOR")), None)
     if odds is not None and b_high < 700:  # the odds ratio of a logistic coefficient is exp(B)
         expected = (math.exp(b_low), math.exp(b_high))

@@ -16,10 +16,13 @@ from __future__ import annotations
 import bisect
 import re
 from dataclasses import dataclass, replace
-from typing import Sequence
+from typing import TYPE_CHECKING, Sequence
 
 from .parsing import _SIGNIFICANCE, Effect, Interval, Number, PValue, Reported, _patterns, statistic_text
 from .reading import Unit
+
+if TYPE_CHECKING:
+    from .checks import Ratio
 
 __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "sizes_in", "caption_sizes", "Reading"]
 
@@ -37,6 +40,9 @@ _ROLES = (
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
     # and statsmodels': Coef., Std. Err., coef, std err)
     (re.compile(r"B|b|(?i:estimates?|coef\.?|coefficients?)"), "B"),
+    # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
+    (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
+    (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
     (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?"), "SE"),
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
     (re.compile(r"r"), "r"),
@@ -246,7 +252,7 @@ class TableStatistic:
     local: Reported | None  # the statistic as typed in its cell (for the style checks), None for a row of bare numbers
     how: str  # where its parts were found
     readings: tuple[Reading, ...] = ()
-    coefficient: tuple[Number, Number] | None = None  # a Wald's B and SE from their columns (checked: Wald = (B / SE)², OR = exp(B))
+    coefficient: "Ratio | None" = None  # a Wald's B and SE from their columns (checked: Wald = (B / SE)², OR = exp(B)); a t's mean difference and SE
 
 
 def _number(text: str, mark: str) -> tuple[str, Number] | None:
@@ -359,10 +365,12 @@ ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its
 _VALUE_SE = re.compile(rf"\s*(?P<b>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[{_SIGNIFICANCE}]*\s*\(\s*(?P<se>\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*[{_SIGNIFICANCE}]*\s*")
 
 
-def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple[tuple[Number, Number] | None, list[Effect]]":  # type: ignore[no-untyped-def]
+def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple[Ratio | None, list[Effect]]":  # type: ignore[no-untyped-def]
     """A Wald row's (or a t's or z's) B and SE, and its Exp(B) as an odds ratio, from their columns, or B and SE from
-    one cell under "B (SE)"."""
-    cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB") and k in row and numbers.get(k) is not None}
+    one cell under "B (SE)"; a t test's mean difference and its SE."""
+    cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB", "diff", "se_diff") and k in row and numbers.get(k) is not None}
+    if "diff" in cols and "se_diff" in cols:  # a t test's row: t = mean difference / its SE
+        return (numbers[cols["diff"]][1], numbers[cols["se_diff"]][1], ("mean difference", "SE")), []
     both = next((k for k, role in roles.items() if role == "BSE" and k in row), None)
     if ("B" not in cols or "SE" not in cols) and both is not None:  # "0.52 (0.21)" under "B (SE)"
         m = _VALUE_SE.fullmatch(row[both][0].text)
@@ -521,7 +529,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2") if role == "F" else ("d", "d_z"), _ONE_SAMPLE.search(said) is not None)
                 how += "".join(f", the {e.symbol_text} column" for e in effects)
             if coefficient is not None:
-                how += ", the B and SE columns" + (", the Exp(B) column" if effects else "")
+                how += (", the mean difference and its SE columns" if len(coefficient) == 3 else ", the B and SE columns") + (", the Exp(B) column" if effects else "")
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
