@@ -1097,3 +1097,36 @@ def test_a_t_tests_mean_difference_and_its_se_are_checked_against_the_t(tmp_path
               ["Body mass", "Student's t", f"{student.statistic:.2f}", f"{len(a) + len(b) - 2}", "< .001", f"{difference:.1f}", f"{pooled * 0.8:.1f}"]]
     (e,) = audit_file(_doc(tmp_path / "j.docx", tables=[("Table 14\nIndependent Samples T-Test", jamovi)]))
     assert e.codes == ["coefficient-does-not-fit"]
+
+
+def test_an_interval_in_two_columns_is_checked_against_its_estimate_and_p(tmp_path):
+    """The limits of a t's interval in columns of their own — SPSS's "Lower" and "Upper" under "95% Confidence Interval
+    of the Difference" (layout from memory; practice), statsmodels' "[0.025" and "0.975]" — are read with the row's t:
+    the interval must contain the estimate (the mean difference, the coefficient) and agree with the p about 0
+    (Altman & Bland, 2011). They had not been read. Numbers: pingouin's penguins, scipy's t test and its interval,
+    statsmodels' OLS and conf_int (computed here); the shifted intervals are mutations of ours."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    data = pg.read_dataset("penguins").dropna(subset=["sex", "body_mass_g", "flipper_length_mm", "bill_length_mm"])
+    a, b = (data.loc[data["sex"] == s, "body_mass_g"] for s in ("female", "male"))
+    test = stats.ttest_ind(a, b)
+    low, high = test.confidence_interval(0.95)
+    se = math.sqrt(((len(a) - 1) * a.var() + (len(b) - 1) * b.var()) / (len(a) + len(b) - 2)) * math.sqrt(1 / len(a) + 1 / len(b))
+    rows = [["", "t-test for Equality of Means", "", "", "", "", "95% Confidence Interval of the Difference", ""],
+            ["", "t", "df", "Sig. (2-tailed)", "Mean Difference", "Std. Error Difference", "Lower", "Upper"],
+            ["Body mass", f"{test.statistic:.3f}", f"{len(a) + len(b) - 2}", "<.001", f"{a.mean() - b.mean():.3f}", f"{se:.3f}", f"{low:.3f}", f"{high:.3f}"]]
+    (e,) = audit_file(_doc(tmp_path / "s.docx", tables=[("Table 15\nIndependent Samples Test", rows)]))
+    assert e.codes == [] and e.found.endswith(f"95% CI [{low:.3f}, {high:.3f}]"), (e.found, e.codes)
+    rows[2][6], rows[2][7] = "-100.000", "50.000"  # (holds 0 beside p < .001, and not the difference)
+    (e,) = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 15\nIndependent Samples Test", rows)]))
+    assert set(e.codes) == {"ci-excludes-estimate", "ci-p-disagree"}, e.codes
+    fit = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", data).fit()
+    limits = fit.conf_int()
+    rows = [["", "coef", "std err", "t", "P>|t|", "[0.025", "0.975]"]] + [
+        [k, f"{fit.params[k]:.4f}", f"{fit.bse[k]:.3f}", f"{fit.tvalues[k]:.3f}", f"{fit.pvalues[k]:.3f}", f"{limits.loc[k, 0]:.3f}", f"{limits.loc[k, 1]:.3f}"]
+        for k in fit.params.index]
+    found = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 16\nBody mass", rows)]))
+    assert len(found) == 3 and all(e.codes == [] and "95% CI [" in e.found for e in found), [(e.found, e.codes) for e in found]
+    rows[3][5], rows[3][6] = f"{fit.params.iloc[2] + 1:.3f}", f"{fit.params.iloc[2] + 9:.3f}"
+    assert "ci-excludes-estimate" in audit_file(_doc(tmp_path / "n.docx", tables=[("Table 16\nBody mass", rows)]))[2].codes

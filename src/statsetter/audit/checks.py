@@ -387,6 +387,8 @@ def impossible(rep: Reported) -> list[Finding]:
     intervals = [(e.ci, e.number, e.symbol_text) for e in rep.effects if e.ci is not None]
     if rep.ci is not None and rep.symbol in ("r", "rs", "tau_b") and rep.value is not None:
         intervals.append((rep.ci, rep.value, rep.symbol_text))
+    elif rep.ci is not None and rep.estimate is not None:  # a table row's estimate (a mean difference, a coefficient) and its CI
+        intervals.append((rep.ci, rep.estimate, "the estimate"))
     elif rep.ci is not None:
         mean = _mean_of(rep, rep.ci) if rep.symbol is None and not rep.effects else None
         intervals.append((rep.ci, mean.number if mean is not None else None, mean.symbol_text if mean is not None else ""))  # type: ignore[arg-type]

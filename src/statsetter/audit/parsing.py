@@ -106,6 +106,7 @@ class Reported:
     p_range: tuple[float, ...] | None = None  # filled by the checks (cache)
     shared_p: PValue | None = None  # its p given for several statistics ("ps < .05", "ps = .04 and .002"): checked, never rewritten
     plural: bool = False  # one of several values of a plural head ("Fs(1, 38) = 4.41 and 5.20"): checked, never rewritten
+    estimate: Number | None = None  # a table row's estimate its t's CI is of (a mean difference, a coefficient): inside the CI
 
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times

@@ -40,6 +40,10 @@ _ROLES = (
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
     # and statsmodels': Coef., Std. Err., coef, std err)
     (re.compile(r"B|b|(?i:estimates?|coef\.?|coefficients?)"), "B"),
+    # the limits of an estimate's interval in two columns: SPSS's "Lower" and "Upper" under "95% Confidence Interval of the
+    # Difference", statsmodels' "[0.025" and "0.975]", R's confint "2.5 %" and "97.5 %" (the level: _CI_LEVEL)
+    (re.compile(r"(?i)lower(?:\s+(?:bound|limit))?|LL|(?:\d{2}\s?%\s?)?CI\s+lower|\[0?\.025|2\.5\s?%|0?\.005|0\.5\s?%"), "ci_low"),
+    (re.compile(r"(?i)upper(?:\s+(?:bound|limit))?|UL|(?:\d{2}\s?%\s?)?CI\s+upper|0?\.975\]|97\.5\s?%|0?\.995\]|99\.5\s?%"), "ci_high"),
     # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
@@ -350,6 +354,31 @@ def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> s
     return ""
 
 
+_LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[0.005": 0.99, ".005": 0.99, "0.005": 0.99, "0.5%": 0.99}
+_LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
+
+
+def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str) -> Interval | None:  # type: ignore[no-untyped-def]
+    """The interval whose limits stand in their own columns beside the statistic in ``column`` (a mean difference's,
+    a coefficient's), its level from the lower limit's head ("[0.025", "2.5 %") or else the one level the header,
+    caption or note names ("95% Confidence Interval of the Difference"); None without both limits or a level."""
+    lo, hi = _own_column(roles, column, "ci_low"), _own_column(roles, column, "ci_high")
+    if lo is None or hi is None or lo not in row or hi not in row or numbers.get(lo) is None or numbers.get(hi) is None:
+        return None
+    if numbers[lo][0] != "=" or numbers[hi][0] != "=":
+        return None
+    level = _LEVEL_IN_HEAD.get(heads.get(lo, "").replace(" ", ""))
+    if level is None:
+        named = {float(m.group(1)) for m in _LEVEL_SAID.finditer(said)}
+        if len(named) != 1:
+            return None
+        level = named.pop() / 100
+    if not 0.5 <= level < 1:
+        return None
+    low, high = numbers[lo][1], numbers[hi][1]
+    return Interval(level, low, high, low.start, high.end)
+
+
 def _residual_readings(said: str) -> tuple[Reading, ...]:
     """The residual df a model table's caption or note gives (one value): its t's df."""
     found = {m.group(1) for m in _RESIDUAL_DF.finditer(said)}
@@ -429,13 +458,20 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     used: set[int] = set()
     error_dfs: dict[int, list[tuple[int, float | None, dict[str, float | None]]]] = {}
     header_above = False  # the row before was a header row
+    wordy = ""  # the text of the rows without numbers just above (a spanner's "95% Confidence Interval of the Difference")
+    heads: dict[int, str] = {}  # each column's head as typed
+    levels_said = ""  # the header's text and the caption's and note's, for an interval's level
     for r in sorted(rows):
         row = rows[r]
         header = {c: _role(u.text) for c, (u, _) in row.items()}
         stat_cells = {c for c, role in header.items() if role is not None}
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
         heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
+        if not heads_in_row and not any(v is not None for v in numbers.values()):
+            wordy += " " + " ".join(u.text for u, _ in row.values())
         if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
+            heads = {**heads, **{c: row[c][0].text for c in stat_cells}} if header_above else {c: row[c][0].text for c in stat_cells}
+            levels_said = f"{wordy} {said}"
             # a header row (also one partway down the table): heads and no number (a row of a predictor named "X2" is data);
             # the second row of a two-row header adds its heads to the first's (SPSS's Coefficients: "t", "Sig." above,
             # "B", "Std. Error" under "Unstandardized Coefficients" below)
@@ -448,6 +484,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             header_above = True
         else:
             header_above = False
+        if heads_in_row or any(v is not None for v in numbers.values()):
+            wordy = ""
         cell_dfs: dict[int, tuple[Number, ...]] = {}
         for c in with_df & set(row):
             read = _value_df(row[c][0].text, mark)
@@ -533,7 +571,13 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
+            if role in ("t", "z"):
+                rep.ci = _interval_cells(row, roles, numbers, heads, c, levels_said)
+                rep.estimate = coefficient[0] if rep.ci is not None and coefficient is not None else None
+                how += ", the interval's columns" if rep.ci is not None else ""
             rep.text = statistic_text(label, df, op, value, p) + "".join(f", {e.symbol_text} = {e.number.text}" for e in effects if e.name != "OR")
+            if rep.ci is not None:
+                rep.text += f", {rep.ci.level * 100:g}% CI [{rep.ci.low.text}, {rep.ci.high.text}]"
             if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
                 readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
