@@ -186,7 +186,8 @@ _EFFECT_NAMES = [
     (r"g(?<![\w]g)", "g"),
     (r"Kendall'?s\s+W|W(?<![\w]W)(?=\s*=\s*0?[.,]\d)", "kendall_w"),  # W below 1 with decimals: Kendall's W, not a rank sum
     (r"M(?<![\w]M)dn", "Mdn"),
-    (rf"M(?<![\w]M)(?:{_FLAT_SUBSCRIPT}|\s?\(\s?SD\s?\))?|[Mm](?<![\w][Mm])ean\s?\(\s?SD\s?\)", "M"),  # "M (SD) = 3.2 (0.5)": _paren_sd
+    # "M (SD) = 3.2 (0.5)", "Mean (SD) = …": _paren_sd (a capital M only: a lowercase "m" would cost the scan every word in "m")
+    (rf"M(?<![\w]M)(?:{_FLAT_SUBSCRIPT}|\s?\(\s?SD\s?\)|ean\s?\(\s?SD\s?\))?", "M"),
     (rf"S(?<![\w]S)D{_FLAT_SUBSCRIPT}?", "SD"),
 ]
 # ratios as public-health texts type them: adjusted odds, hazard, risk and incidence-rate ratios, abbreviated or spelled
@@ -937,7 +938,7 @@ _SD_IN_NAME = re.compile(r"SD")
 
 
 def _paren_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tuple[Effect, Effect] | None:
-    """"M (SD) = 3.20 (0.50)" (or "mean (SD) = …"): the mean (the first number) and the SD (the number in parentheses
+    """"M (SD) = 3.20 (0.50)" (or "Mean (SD) = …"): the mean (the first number) and the SD (the number in parentheses
     after it), each with its own symbol; None when no parenthesised number follows."""
     after = _PAREN_VALUE.match(text, first.end)
     sd = pat.to_number(after.group(1), after.start(1)) if after is not None else None

@@ -463,9 +463,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     levels_said = ""  # the header's text and the caption's and note's, for an interval's level
     for r in sorted(rows):
         row = rows[r]
-        header = {c: _role(u.text) for c, (u, _) in row.items()}
-        stat_cells = {c for c, role in header.items() if role is not None}
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
+        header = {c: None if numbers[c] is not None else _role(u.text) for c, (u, _) in row.items()}  # (a number is no head)
+        stat_cells = {c for c, role in header.items() if role is not None}
         heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
         if not heads_in_row and not any(v is not None for v in numbers.values()):
             wordy += " " + " ".join(u.text for u, _ in row.values())
