@@ -952,3 +952,42 @@ def test_a_power_of_ten_at_a_sentence_end_is_one_number():
         assert not {"impossible-p", "p-does-not-follow"} & set(e.codes), (typed, e.codes)
     (bad,) = audit_units([Unit("s", f"Night shifts mattered, t(98) = 4.81, p = {mantissa} × 10–{-power + 2}.")])  # 100 times too small
     assert "p-does-not-follow" in bad.codes
+
+
+def test_generalized_eta_squared_is_read_and_checked_against_its_f(tmp_path):
+    """Generalized η² (Olejnik & Algina, 2003), as statsetter writes it (η²G: "G" set below) and authors type it
+    ("ηG² = .03", "generalized η² = .03"): read, and checked as η² is — it cannot exceed the η²p that F·df₁/(F·df₁ +
+    df₂) gives (definition: its denominator holds at least the effect's error term). It had not been read at all.
+    A Word section statsetter wrote gets no tracked change for it (its lowered "G" is the style's, not a difference);
+    typed plain, it is set as the style sets it. Numbers: pingouin's rm_anova of its "rm_anova" data (ng2, computed
+    here); .30 is a mutation of ours."""
+    import pingouin as pg
+
+    table = pg.rm_anova(dv="DesireToKill", within="Disgustingness", subject="Subject", data=pg.read_dataset("rm_anova"), detailed=True)
+    row, error = table.iloc[0], table.iloc[1]
+    head, value = f"F({row.DF}, {error.DF}) = {row.F:.2f}, p < .001", f"{row.ng2:.2f}".lstrip("0")
+    for name in ("η²G", "ηG²", "η2G", "generalized η²"):
+        entries = audit_units([Unit("p", f"Disgust raised the wish to kill the insect, {head}, {name} = {value}.")])
+        assert [(e.found, e.codes) for e in entries] == [(f"{head}, {name} = {value}", [])]
+    assert "effect-does-not-fit" in codes(f"{head}, η²G = .300")
+    assert "generalized η² cannot exceed η²p" in audit_units([Unit("p", f"{head}, η²G = .300")])[0].message
+    from statsetter import EffectSize, Result, Statistic
+    from statsetter.records import dump_records
+
+    record = Result(kind="anova_term", statistic=Statistic("F", float(row.F), (float(row.DF), float(error.DF))), p=float(row.p_unc),
+                    effects=(EffectSize("eta2_g", float(row.ng2)),))
+    (tmp_path / "r.json").write_text(dump_records([record]), encoding="utf-8")
+    assert main(["render", "--style", "apa7", "--form", "sentence", "--out", str(tmp_path / "own.docx"), str(tmp_path / "r.json")]) == 0
+    (own,) = audit_units_of(tmp_path / "own.docx", restyle=True)
+    assert "η²G" in own.found and own.revision is None and own.codes == []
+    d = docx.Document()
+    d.add_paragraph(f"Disgust raised it, {head}, η²G = {value}.")
+    d.save(str(tmp_path / "plain.docx"))
+    (typed,) = audit_units_of(tmp_path / "plain.docx", restyle=True)
+    assert typed.revision is not None and "<sub>G</sub>" in typed.revision.html()
+
+
+def audit_units_of(path, **options):
+    from statsetter.audit.reading import read_units
+
+    return audit_units(read_units(path), **options)

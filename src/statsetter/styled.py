@@ -366,6 +366,12 @@ def _md_piece(text: str, styles: frozenset[str]) -> str:
     return f"{lead}{core}{trail}"
 
 
+def lowered_plain(text: str) -> str:
+    """A subscript's text as `StyledText.plain` shows it: in subscript characters where they all exist, else "_" and
+    the text ("_G")."""
+    return _unicode_script(text, _SUB, "_")
+
+
 def _unicode_script(text: str, table: dict[str, str], marker: str) -> str:
     if all(c in table for c in text):
         return "".join(table[c] for c in text)

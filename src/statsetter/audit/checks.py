@@ -102,7 +102,7 @@ FORMER_CODES: dict[str, str] = {
     "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
-_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
 RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0
@@ -707,7 +707,7 @@ def effect_from_t(rep: Reported, sizes: tuple[int, int] | None = None) -> list[F
 def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
     """η²p against F(df₁, df₂): η²p = F·df₁/(F·df₁ + df₂) whenever F is the
     ratio of the effect's and its error term's mean squares, so with whole
-    df (Welch's F and corrected df are left alone); η² can only be smaller.
+    df (Welch's F and corrected df are left alone); η² and generalized η² can only be smaller.
     V or φ against χ²(df, N): V = √(χ²/(N·m)) with m = min(rows, columns) − 1,
     between 1 and df, so V is at least √(χ²/(N·df)) (a Yates-corrected χ²
     is smaller than the one V is computed from, so only this bound is
@@ -722,8 +722,9 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
         bound = (low * l1 / (low * l1 + h2), high * h1 / (high * h1 + l2))
         for e in rep.effects:
             shown = (e.number.value - e.number.half_unit, e.number.value + e.number.half_unit)
-            if (e.name == "eta2_p" and not _overlap(bound, shown)) or (e.name == "eta2" and shown[0] > bound[1] + 1e-12):
-                relation = "F·df₁/(F·df₁ + df₂) gives" if e.name == "eta2_p" else "η² cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at"
+            if (e.name == "eta2_p" and not _overlap(bound, shown)) or (e.name in ("eta2", "eta2_g") and shown[0] > bound[1] + 1e-12):
+                relation = ("F·df₁/(F·df₁ + df₂) gives" if e.name == "eta2_p" else
+                            f"{'η²' if e.name == 'eta2' else 'generalized η²'} cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at")
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {bound[0]:.3f} to {bound[1]:.3f}.", f"{e.symbol_text} = {e.number.text}"))
     elif rep.symbol == "chi2" and len(rep.df) == 1 and rep.n is not None and rep.n.value > 0 and rep.df[0].value >= 1:

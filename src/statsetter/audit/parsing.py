@@ -170,6 +170,8 @@ _FLAT_SUBSCRIPT = r"(?:[ _]?(?:age|diff(?:erence)?|change|pre|post|baseline|foll
 _EFFECT_NAMES = [
     (r"partial\s+(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2_p"),
     (r"η\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|eta\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|η_p\^?2|ηp[²2]|η[²2]_p", "eta2_p"),
+    # generalized η² (Olejnik & Algina, 2003), as statsetter and R's afex print it: η²G, ηG², η²_G, "generalized η²"
+    (r"η\s?(?:[²2]|\^2)\s?_?G(?![A-Za-z])|ηG\s?[²2]|η_G\^?2|eta\s?(?:[²2]|\^2)\s?_?G(?![A-Za-z])|g(?<![\w]g)eneralized\s+(?:η|eta)[\s-]?(?:[²2]|\^2|squared)", "eta2_g"),
     (r"η\s?(?:[²2]|\^2|squared)|eta\s?(?:[²2]|\^2|squared)", "eta2"),
     (r"ω\s?(?:[²2]|\^2|squared)|omega\s?(?:[²2]|\^2|squared)", "omega2"),
     (r"ε\s?(?:[²2]|\^2|squared)|epsilon\s?(?:[²2]|\^2|squared)", "epsilon2"),

@@ -40,6 +40,7 @@ class Unit:
     origin: tuple[Trace, ...] = ()  # how text maps back to the file's characters (markers removed); () = as is
     cell: tuple[int, int, int] | None = None  # (table, row, column), all from 1, for a table cell's paragraph in Word
     equations: tuple[tuple[int, int], ...] = ()  # (start, end) of each Word equation's text: spaced by the equation, not the author
+    subscripts: tuple[tuple[int, int], ...] = ()  # (start, end) of a Word subscript run's letters ("G" of η²G): no character shows them lowered
 
     def source_index(self, i: int) -> int:
         """Where character ``i`` of ``text`` is in the block as written."""
@@ -477,7 +478,7 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         cell = in_cell.get(para)
         if cell is None:
             body_count += 1
-        text, spans, equations = _paragraph_text(para)
+        text, spans, equations, lowered = _paragraph_text(para)
         if not text.strip():
             continue
         if cell is None:
@@ -485,7 +486,7 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         else:
             t, r, c = cell
             location = f"table {t}, row {r}, cell {c}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {c}"
-        yield Unit(location, text, spans, part, index, cell=cell, equations=equations)
+        yield Unit(location, text, spans, part, index, cell=cell, equations=equations, subscripts=lowered)
 
 
 _VAL = f"{_W}val"
@@ -585,12 +586,14 @@ def _slanted(spans: list[tuple[int, int]], start: int, end: int) -> None:
         spans.append((start, end))
 
 
-def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
+def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple[int, int], ...], tuple[tuple[int, int], ...]]:  # type: ignore[no-untyped-def]
     """A paragraph's text (deleted runs left out; a subscript run's digits as subscript digits), the spans of its italic
-    runs and of its equations, in one walk over its runs and their text."""
+    runs, of its equations and of its subscript runs' letters (which no character shows as lowered), in one walk over
+    its runs and their text."""
     pieces: list[str] = []
     spans: list[tuple[int, int]] = []
     math: list[tuple[int, int]] = []
+    lowered_letters: list[tuple[int, int]] = []
     length = 0
     italic, lowered, skip, run = False, None, True, None  # text outside a run is not read; lowered: a script's characters
     symbol = False  # the run is set in the Symbol font
@@ -634,8 +637,10 @@ def _paragraph_text(para) -> tuple[str, tuple[tuple[int, int], ...], tuple[tuple
             chunk = chunk.translate(_SYMBOL_FONT)
         if lowered:
             chunk = chunk.translate(lowered)
+            if lowered is _SUBSCRIPT and not chunk.isdigit() and any(c.isalpha() for c in chunk):
+                lowered_letters.append((length, length + len(chunk)))
         if italic:
             _slanted(spans, length, length + len(chunk))
         pieces.append(chunk)
         length += len(chunk)
-    return "".join(pieces), tuple(spans), tuple(math)
+    return "".join(pieces), tuple(spans), tuple(math), tuple(lowered_letters)

@@ -525,7 +525,7 @@ def _audit_units(
         entries = [_without(e, "italics", suggest_all) for e in entries]
     if restyle:  # a table row's bare numbers are never rewritten
         entries = [replace(e, revision=new, kept=why, p_given=_p_given(rep, new, resolved)) for e, rep, (new, why) in
-                   ((e, rep, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic, house) if rep is not None else (None, ""))
+                   ((e, rep, restyled(rep, resolved, alpha, e.findings, mark, e.unit.italic, house, e.unit.subscripts) if rep is not None else (None, ""))
                     for e, rep, house in zip(entries, reps, houses))]
     return entries
 

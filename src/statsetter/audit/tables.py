@@ -42,8 +42,9 @@ _ROLES = (
     (re.compile(r"B|b|(?i:estimates?|coef\.?|coefficients?)"), "B"),
     # the limits of an estimate's interval in two columns: SPSS's "Lower" and "Upper" under "95% Confidence Interval of the
     # Difference", statsmodels' "[0.025" and "0.975]", R's confint "2.5 %" and "97.5 %" (the level: _CI_LEVEL)
-    (re.compile(r"(?i)lower(?:\s+(?:bound|limit))?|LL|(?:\d{2}\s?%\s?)?CI\s+lower|\[0?\.025|2\.5\s?%|0?\.005|0\.5\s?%"), "ci_low"),
-    (re.compile(r"(?i)upper(?:\s+(?:bound|limit))?|UL|(?:\d{2}\s?%\s?)?CI\s+upper|0?\.975\]|97\.5\s?%|0?\.995\]|99\.5\s?%"), "ci_high"),
+    # (also with the interval named before them, as one header row gives both: "95% CI: LL", "95% CI for OR: LL")
+    (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:lower(?:\s+(?:bound|limit))?|LL)|\[0?\.025|2\.5\s?%|\[?0?\.005|0\.5\s?%"), "ci_low"),
+    (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:upper(?:\s+(?:bound|limit))?|UL)|0?\.975\]|97\.5\s?%|0?\.995\]|99\.5\s?%"), "ci_high"),
     # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
@@ -354,16 +355,21 @@ def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> s
     return ""
 
 
+_ESTIMATES = {"B", "diff", "expB", "beta", "BSE", "effect:eta2_p", "effect:eta2", "effect:d", "effect:d_z"}  # what an interval can be of
 _LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[0.005": 0.99, ".005": 0.99, "0.005": 0.99, "0.5%": 0.99}
 _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 
 
 def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str) -> Interval | None:  # type: ignore[no-untyped-def]
     """The interval whose limits stand in their own columns beside the statistic in ``column`` (a mean difference's,
-    a coefficient's), its level from the lower limit's head ("[0.025", "2.5 %") or else the one level the header,
+    a coefficient's: the nearest estimate to their left; not an odds ratio's or an effect size's), its level from the
+    lower limit's head ("[0.025", "2.5 %") or else the one level the header,
     caption or note names ("95% Confidence Interval of the Difference"); None without both limits or a level."""
     lo, hi = _own_column(roles, column, "ci_low"), _own_column(roles, column, "ci_high")
     if lo is None or hi is None or lo not in row or hi not in row or numbers.get(lo) is None or numbers.get(hi) is None:
+        return None
+    owner = max((k for k, role in roles.items() if k < lo and role in _ESTIMATES), default=None)  # the estimate to its left
+    if owner is None or roles[owner] not in ("B", "diff"):  # an odds ratio's interval ("OR, LL, UL"), or no estimate's
         return None
     if numbers[lo][0] != "=" or numbers[hi][0] != "=":
         return None

@@ -20,7 +20,7 @@ from pathlib import Path
 from typing import TYPE_CHECKING, Sequence
 
 from ..style.numbers import numbers_for
-from ..styled import StyledText, escape_markup
+from ..styled import StyledText, escape_markup, lowered_plain
 from .checks import RATIOS, Finding
 from .parsing import PValue, Reported, subscript
 from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_font, symbol_text
@@ -210,9 +210,11 @@ _UNMADE = object()  # restyled's house text not made beforehand
 
 
 def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding], read_mark: str | None = None,
-             italic: Sequence[tuple[int, int]] | None = None, house: "StyledText | None | object" = _UNMADE) -> tuple[StyledText | None, str]:
+             italic: Sequence[tuple[int, int]] | None = None, house: "StyledText | None | object" = _UNMADE,
+             subscripts: Sequence[tuple[int, int]] = ()) -> tuple[StyledText | None, str]:
     """The statistic in the house style for a revision, or None and why not;
-    ``house`` is `house_text` of the statistic when the caller made it already.
+    ``house`` is `house_text` of the statistic when the caller made it already; ``subscripts``, the spans of the text's
+    subscript letters (Word's runs: "G" of η²G), compared as the restyled text's plain form shows them.
 
     The author's numbers are kept (rounded only where the style rounds); a
     p given as a threshold or as zero may become the exact p the style asks
@@ -231,7 +233,7 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     old = rep.text
     if not plain.strip():  # a lone "n.s." or the like: nothing the style writes in its place
         return None, ""
-    if _as_read(plain) == _as_read(old) and not any(f.code == "italics" for f in findings) and not _italics_differ(rep, new, italic):
+    if _as_read(plain) == _as_read(_lowered(old, rep.start, subscripts)) and not any(f.code == "italics" for f in findings) and not _italics_differ(rep, new, italic):
         return None, ""
     lost = _lost_word(rep, old, plain)
     if lost:
@@ -244,6 +246,21 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
 # a letter set as a script: the reader sees a Word run's digits as scripts, not its letters (η² and a subscript p read
 # "η²p"), so a letter's script is not a difference it can see
 _LETTER_SCRIPTS = str.maketrans("ₐₑₕᵢⱼₖₗₘₙₒₚᵣₛₜᵤᵥₓ", "aehijklmnoprstuvx")
+
+
+def _lowered(old: str, start: int, subscripts: Sequence[tuple[int, int]]) -> str:
+    """The typed text (starting at ``start``) with its subscript letters shown as `StyledText.plain` shows a
+    subscript ("η²G" with G lowered: "η²_G"), so that a statistic already set in the style compares equal."""
+    if not subscripts:
+        return old
+    out, at = [], 0
+    for a, b in sorted(subscripts):
+        a, b = max(a - start, 0), min(b - start, len(old))
+        if a >= b or a < at:
+            continue
+        out += [old[at:a], lowered_plain(old[a:b])]
+        at = b
+    return "".join(out) + old[at:]
 
 
 def _as_read(text: str) -> str:
@@ -279,6 +296,8 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
     places.append((rep.symbol_start, rep.symbol_start + len(rep.symbol_text), _SYMBOL_WORDS))
     places += [(d.symbol_start, d.symbol_start + len(d.symbol_text), frozenset({d.symbol_text.lower()})) for d in rep.descriptives
                if subscript(d)]  # "Mage" restyled as M with "age" below
+    places += [(e.symbol_start, e.symbol_start + len(e.symbol_text), frozenset(w.lower() for w in _WORD.findall(e.symbol_text)))
+               for e in rep.effects if e.name not in RATIOS]  # an effect size's name as typed ("ηG²", "generalized η²"): the style's symbol stands for it
     if rep.df and rep.value is not None and rep.df[0].start > rep.value.end:  # "F-statistic: 4.51 on 2 and 97 DF"
         places.append((rep.value.end, rep.df[-1].end, _DF_WORDS))
     for m in _WORD.finditer(old):
