@@ -1131,14 +1131,18 @@ def test_an_interval_in_two_columns_is_checked_against_its_estimate_and_p(tmp_pa
     rows[3][5], rows[3][6] = f"{fit.params.iloc[2] + 1:.3f}", f"{fit.params.iloc[2] + 9:.3f}"
     assert "ci-excludes-estimate" in audit_file(_doc(tmp_path / "n.docx", tables=[("Table 16\nBody mass", rows)]))[2].codes
     # an odds ratio's interval beside a logistic model's B ("B, SE, OR, 95% CI for OR: LL, UL, z, p", as statsetter's
-    # Markdown heads it) is the odds ratio's, not the B's: no finding (it had been taken for the B's interval)
+    # Markdown heads it) is the odds ratio's, not the B's (it had been taken for the B's interval): the OR must lie
+    # inside it, be exp(B), and the interval agree with the p about 1
     logit = smf.logit("male ~ body_mass_kg", data.assign(male=(data["sex"] == "male").astype(int), body_mass_kg=data["body_mass_g"] / 1000)).fit(disp=0)
     odds = np.exp(logit.conf_int())
     rows = [["Predictor", "B", "SE", "OR", "95% CI for OR: LL", "95% CI for OR: UL", "z", "p"]] + [
         [k, f"{logit.params[k]:.2f}", f"{logit.bse[k]:.2f}", f"{np.exp(logit.params[k]):.2f}", f"{odds.loc[k, 0]:.2f}", f"{odds.loc[k, 1]:.2f}",
          f"{logit.tvalues[k]:.2f}", "< .001"] for k in logit.params.index]
-    found = audit_file(_doc(tmp_path / "o.docx", tables=[("Table 17\nMale sex by body mass", rows)]))
-    assert len(found) == 2 and all(e.codes == [] and "CI" not in e.found for e in found), [(e.found, e.codes) for e in found]
     spanned = [["", "", "", "", "95% CI for OR", "95% CI for OR", "", ""], rows[0][:4] + ["LL", "UL"] + rows[0][6:]] + rows[1:]  # (Word's two rows)
-    found = audit_file(_doc(tmp_path / "q.docx", tables=[("Table 17\nMale sex by body mass", spanned)]))
-    assert len(found) == 2 and all(e.codes == [] and "CI" not in e.found for e in found), [(e.found, e.codes) for e in found]
+    for k, table in enumerate((rows, spanned)):
+        found = audit_file(_doc(tmp_path / f"o{k}.docx", tables=[("Table 17\nMale sex by body mass", table)]))
+        last = table[-1]
+        assert [e.codes for e in found] == [[], []] and found[1].found.endswith(f"OR = {last[3]}, 95% CI [{last[4]}, {last[5]}]"), [(e.found, e.codes) for e in found]
+        table[-1] = last[:4] + ["0.50", "1.80"] + last[6:]
+        found = audit_file(_doc(tmp_path / f"p{k}.docx", tables=[("Table 17\nMale sex by body mass", table)]))
+        assert set(found[1].codes) == {"ci-excludes-estimate", "ci-p-disagree"}, found[1].codes

@@ -360,16 +360,17 @@ _LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[
 _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 
 
-def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str) -> Interval | None:  # type: ignore[no-untyped-def]
-    """The interval whose limits stand in their own columns beside the statistic in ``column`` (a mean difference's,
-    a coefficient's: the nearest estimate to their left; not an odds ratio's or an effect size's), its level from the
-    lower limit's head ("[0.025", "2.5 %") or else the one level the header,
-    caption or note names ("95% Confidence Interval of the Difference"); None without both limits or a level."""
+def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str) -> tuple[Interval, str] | None:  # type: ignore[no-untyped-def]
+    """The interval whose limits stand in their own columns beside the statistic in ``column``, with the role of the
+    estimate it is of — the nearest estimate to their left: a mean difference ("diff"), a coefficient ("B"), an odds
+    ratio ("expB"); not an effect size's —, its level from the lower limit's head ("[0.025", "2.5 %") or else the one
+    level the header, caption or note names ("95% Confidence Interval of the Difference"); None without both limits,
+    an estimate or a level."""
     lo, hi = _own_column(roles, column, "ci_low"), _own_column(roles, column, "ci_high")
     if lo is None or hi is None or lo not in row or hi not in row or numbers.get(lo) is None or numbers.get(hi) is None:
         return None
     owner = max((k for k, role in roles.items() if k < lo and role in _ESTIMATES), default=None)  # the estimate to its left
-    if owner is None or roles[owner] not in ("B", "diff"):  # an odds ratio's interval ("OR, LL, UL"), or no estimate's
+    if owner is None or roles[owner] not in ("B", "diff", "expB"):
         return None
     if numbers[lo][0] != "=" or numbers[hi][0] != "=":
         return None
@@ -382,7 +383,7 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
     if not 0.5 <= level < 1:
         return None
     low, high = numbers[lo][1], numbers[hi][1]
-    return Interval(level, low, high, low.start, high.end)
+    return Interval(level, low, high, low.start, high.end), roles[owner]
 
 
 def _residual_readings(said: str) -> tuple[Reading, ...]:
@@ -400,7 +401,7 @@ ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its
 _VALUE_SE = re.compile(rf"\s*(?P<b>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[{_SIGNIFICANCE}]*\s*\(\s*(?P<se>\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*[{_SIGNIFICANCE}]*\s*")
 
 
-def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple[Ratio | None, list[Effect]]":  # type: ignore[no-untyped-def]
+def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "dict[int, str] | None" = None) -> "tuple[Ratio | None, list[Effect]]":  # type: ignore[no-untyped-def]
     """A Wald row's (or a t's or z's) B and SE, and its Exp(B) as an odds ratio, from their columns, or B and SE from
     one cell under "B (SE)"; a t test's mean difference and its SE."""
     cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB", "diff", "se_diff") and k in row and numbers.get(k) is not None}
@@ -418,7 +419,8 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str) -> "tuple
     effects = []
     if "expB" in cols:
         ratio = numbers[cols["expB"]][1]
-        effects.append(Effect("OR", ratio, ratio.start, ratio.end, ratio.start, "Exp(B)", None))
+        name = (heads or {}).get(cols["expB"], "Exp(B)").strip() or "Exp(B)"  # as the table heads it: "Exp(B)", "OR"
+        effects.append(Effect("OR", ratio, ratio.start, ratio.end, ratio.start, name, None))
     return (b, se), effects
 
 
@@ -567,8 +569,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 if bound is not None:
                     p = PValue(bound[0], bound[1], value.end, value.end, value.end, "")
                     how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text}, as the table defines it)"  # type: ignore[union-attr]
-            coefficient, effects = _coefficient_cells(row, roles, numbers, mark) if role in ("wald", "t", "z") else (None, [])
-            effects = effects if role == "wald" else []  # (a linear model's row has no odds ratio)
+            coefficient, effects = _coefficient_cells(row, roles, numbers, mark, heads) if role in ("wald", "t", "z") else (None, [])
+            effects = effects if role in ("wald", "z") else []  # (a linear model's row has no odds ratio; a logistic one's z has)
             if role in ("F", "t"):
                 effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2") if role == "F" else ("d", "d_z"), _ONE_SAMPLE.search(said) is not None)
                 how += "".join(f", the {e.symbol_text} column" for e in effects)
@@ -577,11 +579,17 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
-            if role in ("t", "z"):
-                rep.ci = _interval_cells(row, roles, numbers, heads, c, levels_said)
-                rep.estimate = coefficient[0] if rep.ci is not None and coefficient is not None else None
-                how += ", the interval's columns" if rep.ci is not None else ""
-            rep.text = statistic_text(label, df, op, value, p) + "".join(f", {e.symbol_text} = {e.number.text}" for e in effects if e.name != "OR")
+            interval = _interval_cells(row, roles, numbers, heads, c, levels_said) if role in ("t", "z", "wald") else None
+            if interval is not None and interval[1] == "expB" and rep.effects and rep.effects[-1].name == "OR":  # the odds ratio's
+                rep.effects[-1] = replace(rep.effects[-1], ci=interval[0])
+                how += ", the odds ratio's interval columns"
+            elif interval is not None and interval[1] != "expB" and role != "wald":  # the mean difference's or coefficient's
+                rep.ci = interval[0]
+                rep.estimate = coefficient[0] if coefficient is not None else None
+                how += ", the interval's columns"
+            rep.text = statistic_text(label, df, op, value, p) + "".join(
+                f", {e.symbol_text} = {e.number.text}" + (f", {e.ci.level * 100:g}% CI [{e.ci.low.text}, {e.ci.high.text}]" if e.ci else "")
+                for e in rep.effects if e.name != "OR" or e.ci is not None)
             if rep.ci is not None:
                 rep.text += f", {rep.ci.level * 100:g}% CI [{rep.ci.low.text}, {rep.ci.high.text}]"
             if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
