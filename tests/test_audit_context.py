@@ -1146,3 +1146,23 @@ def test_an_interval_in_two_columns_is_checked_against_its_estimate_and_p(tmp_pa
         table[-1] = last[:4] + ["0.50", "1.80"] + last[6:]
         found = audit_file(_doc(tmp_path / f"p{k}.docx", tables=[("Table 17\nMale sex by body mass", table)]))
         assert set(found[1].codes) == {"ci-excludes-estimate", "ci-p-disagree"}, found[1].codes
+
+
+def test_a_coefficients_interval_in_a_sentence_must_contain_its_b():
+    """"b = 6.05, SE = 5.18, t(339) = 1.17, p = .244, 95% CI [−4.14, 16.24]": the interval after the t is the b's, and
+    must contain it (it had been checked against the p only). Numbers: statsmodels' OLS of the penguins' body mass
+    on flipper and bill length, with its conf_int (computed here); the shifted interval is a mutation of ours."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    data = pg.read_dataset("penguins").dropna(subset=["body_mass_g", "flipper_length_mm", "bill_length_mm"])
+    fit = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", data).fit()
+    k = "bill_length_mm"
+    low, high = fit.conf_int().loc[k]
+    head = f"b = {fit.params[k]:.2f}, SE = {fit.bse[k]:.2f}, t({int(fit.df_resid)}) = {fit.tvalues[k]:.2f}, p = {fit.pvalues[k]:.3f}".replace("p = 0.", "p = .")
+    typed = f"Bill length added little, {head}, 95% CI [{low:.2f}, {high:.2f}].".replace("-", "−")
+    (e,) = audit_units([Unit("p", typed)])
+    assert e.codes == [] and e.found == typed[typed.index("t("):-1], (e.found, e.codes)
+    shifted = f"Bill length added little, {head}, 95% CI [{fit.params[k] + 1:.2f}, {high + 5:.2f}].".replace("-", "−")
+    (e,) = audit_units([Unit("p", shifted)])
+    assert "ci-excludes-estimate" in e.codes

@@ -439,13 +439,18 @@ def _audit_units(
             previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
             counted, lines, newline = 0, 0, -1  # newlines before position `counted`, and the last of them (one pass per unit)
         consistent, recheck = _consistency(item, alpha)
+        before = None  # the B and SE the sentence gives before a t or z (or a Wald χ²)
+        if local is not None and (local.symbol in ("t", "z") or (local.symbol == "chi2" and is_wald(unit.text, local))):
+            before = coefficient_before(unit.text, local, previous_end, mark)
+            if before is not None and rep.ci is not None and rep.estimate is None and rep.symbol in ("t", "z"):
+                rep.estimate = before[0]  # "b = 0.42, SE = 0.10, t(196) = 4.20, p < .001, 95% CI [0.22, 0.62]": the interval is b's
         findings = impossible(rep) + consistent
         if local is not None:
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
-            if local.symbol in ("t", "z") or (local.symbol == "chi2" and is_wald(unit.text, local)):
-                findings += coefficient_ratio(local, coefficient_before(unit.text, local, previous_end, mark))
+            if before is not None:
+                findings += coefficient_ratio(local, before)
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
