@@ -903,7 +903,13 @@ def test_a_coefficients_table_as_r_statsmodels_and_stata_head_it(tmp_path):
     wrong[2][2], wrong[3][4] = "0.73273", "0.0145 *"  # SE of wt, p of hp
     codes = {e.found: e.codes for e in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 1\nFuel consumption", wrong)], note=_R_NOTE))}
     assert "coefficient-does-not-fit" in codes["t = -6.129, p = 1.12e-06"] and "p-does-not-follow" in codes["t = -3.519, p = 0.0145"]
-    # statsmodels' heads, no df given: the t against coef / std err only
+    # the same table in Markdown as knitr's kable writes it, its "|" in the head as an HTML character reference (memory)
+    pipe = ["|" + "|".join(["", "Estimate", "Std. Error", "t value", "Pr(>&#124;t&#124;)"]) + "|", "|:--|--:|--:|--:|--:|"]
+    pipe += ["|" + "|".join(row[:4] + [row[4].replace(" ***", "").replace(" **", "")]) + "|" for row in _R_COEFFICIENTS[1:]]
+    (tmp_path / "r.md").write_text("Table 1\n\nFuel consumption\n\n" + "\n".join(pipe) + f"\n\n{_R_NOTE}\n", encoding="utf-8")
+    found = [e for e in audit_file(tmp_path / "r.md") if e.found.startswith("t")]
+    assert [e.found for e in found] == ["t = 23.285, p < 2e-16", "t = -6.129, p = 1.12e-06", "t = -3.519, p = 0.00145"] and all(not e.codes for e in found)
+
     data = pg.read_dataset("penguins").dropna()
     fit = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", data).fit()
     rows = [["", "coef", "std err", "t", "P>|t|"]] + [[k, f"{fit.params[k]:.4f}", f"{fit.bse[k]:.3f}", f"{fit.tvalues[k]:.3f}", f"{fit.pvalues[k]:.3f}"]

@@ -10,6 +10,7 @@ removed from the text the parser sees.
 
 from __future__ import annotations
 
+import html
 import re
 import zipfile
 from bisect import bisect_left, bisect_right
@@ -199,7 +200,10 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     super- and subscripts become what they print as: ``χ^2^`` is χ², ``r~s~``
     is rs."""
     tex = suffix == ".tex"
-    escapes = None
+    escapes = entities = None
+    if not tex and "&" in text:  # HTML's character references, which Markdown prints as their characters: knitr's kable
+        # writes R's "Pr(>|t|)" head as "Pr(>&#124;t&#124;)" in a pipe table (a "|" would part the cell)
+        text, entities = _replace(_MD_ENTITY, text, html.unescape)
     if not tex and "\\" in text:  # Markdown's escapes ("\\*p < .05" prints *p < .05): held out of the emphasis and scripts
         text, escapes = _replace(_MD_ESCAPE, text, lambda g: _MD_HELD.get(g, g))
     out, spans, at = _Builder(), [], 0
@@ -216,7 +220,7 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         out.add(inner, m.start(group))  # a rewritten TeX group maps to where it starts
         at = m.end()
     out.add(text[at:], at)
-    clean, traces = out.text(), [escapes, out.trace()]
+    clean, traces = out.text(), [entities, escapes, out.trace()]
     # after the emphasis, so that *r*~s~ and \textit{r}\textsubscript{s} read rs (spans are not used for text files)
     sup_pattern, sub_pattern = (_TEX_SUP, _TEX_SUB) if tex else (_PANDOC_SUP, _PANDOC_SUB)
     clean, sup = _replace(sup_pattern, clean, lambda g: g.translate(_SUPERSCRIPT))
@@ -233,6 +237,7 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     return clean, tuple(spans), tuple(t for t in traces if t is not None)
 
 
+_MD_ENTITY = re.compile(r"&(?:#\d{1,7}|#[xX][0-9a-fA-F]{1,6}|[A-Za-z][A-Za-z0-9]{1,31});")
 _MD_ESCAPE = re.compile(r"\\([!-/:-@\[-`{-~])")  # a backslash before ASCII punctuation (CommonMark's escapes)
 _MD_HELD = {"*": "\ue000", "_": "\ue001", "^": "\ue002", "~": "\ue003"}  # the markers' characters, held as private ones
 _MD_LET_GO = str.maketrans({held: char for char, held in _MD_HELD.items()})
