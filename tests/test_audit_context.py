@@ -1172,3 +1172,27 @@ def test_a_coefficients_interval_in_a_sentence_must_contain_its_b():
     shifted = f"Bill length added little, {head}, 95% CI [{fit.params[k] + 1:.2f}, {high + 5:.2f}].".replace("-", "−")
     (e,) = audit_units([Unit("p", shifted)])
     assert "ci-excludes-estimate" in e.codes
+
+
+def test_a_standardized_coefficients_interval_and_p_must_agree():
+    """"β = 0.66, 95% CI [0.58, 0.74], p < .001" (a coefficient with its interval and p, no test statistic, as
+    epidemiology and sociology report them): the interval and the p must agree about 0 (Altman & Bland, 2011); a
+    p below .05 beside an interval holding 0 is the warning ci-p-disagree (it had not been checked). Numbers:
+    statsmodels' OLS of the penguins' standardized body mass on standardized flipper and bill length (computed
+    here); the interval moved across 0 is a mutation of ours."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    data = pg.read_dataset("penguins").dropna(subset=["body_mass_g", "flipper_length_mm", "bill_length_mm"])
+    z = data[["body_mass_g", "flipper_length_mm", "bill_length_mm"]].apply(lambda c: (c - c.mean()) / c.std())
+    fit = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", z).fit()
+    for k in ("flipper_length_mm", "bill_length_mm"):
+        low, high = fit.conf_int().loc[k]
+        p = "< .001" if fit.pvalues[k] < 0.001 else f"= {fit.pvalues[k]:.3f}".replace("0.", ".")
+        typed = f"It predicted body mass (β = {fit.params[k]:.2f}, 95% CI [{low:.2f}, {high:.2f}], p {p}).".replace("-", "−")
+        (e,) = audit_units([Unit("p", typed)])
+        assert "ci-p-disagree" not in e.codes, (typed, e.codes)
+    k = "flipper_length_mm"
+    moved = f"It predicted body mass (β = {fit.params[k]:.2f}, 95% CI [−0.10, {fit.conf_int().loc[k][1]:.2f}], p < .001)."
+    (e,) = audit_units([Unit("p", moved)])
+    assert "ci-p-disagree" in e.codes

@@ -330,13 +330,15 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
     clearly above (at least twice it) while the CI lies wholly on one side. Each limit stands for what its printed
     digits allow and a p for its printed range, and the margin leaves alone what different methods give near the null
     (a Fisher or likelihood-ratio p beside a Wald interval, a profile interval beside a Wald p) — a warning, not an
-    error. The CIs checked: a ratio's (OR, HR, RR and their adjusted forms; null 1) and a t's or z's own (a mean
-    difference or coefficient; null 0); not d's or g's, whose intervals are often approximations that part from the
+    error. The CIs checked: a ratio's (OR, HR, RR and their adjusted forms; null 1), a t's or z's own (a mean
+    difference or coefficient; null 0) and a β's given with its p and no test (null 0); not d's or g's, whose intervals are often approximations that part from the
     t test's p near the null."""
     p = rep.p
     if p is None or p.adjusted or (p.number is None and p.op != "ns"):
         return []
     found = [(e.ci, 1.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name in RATIOS]
+    if rep.symbol is None:  # a coefficient given with its interval and p, no test ("β = 0.21, 95% CI [0.10, 0.32], p < .001")
+        found += [(e.ci, 0.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name == "beta"]
     if rep.ci is not None and rep.symbol in ("t", "z"):
         found.append((rep.ci, 0.0, "the estimate"))
     out = []
