@@ -1196,3 +1196,35 @@ def test_a_standardized_coefficients_interval_and_p_must_agree():
     moved = f"It predicted body mass (β = {fit.params[k]:.2f}, 95% CI [−0.10, {fit.conf_int().loc[k][1]:.2f}], p < .001)."
     (e,) = audit_units([Unit("p", moved)])
     assert "ci-p-disagree" in e.codes
+
+
+def test_spss_paired_samples_test_is_checked_mean_over_its_se(tmp_path):
+    """SPSS's Paired Samples Test ("Paired Differences": Mean, Std. Deviation, Std. Error Mean, the interval's Lower and
+    Upper; then t, df, Sig. (2-tailed); layout from memory, practice): the t must be the differences' mean over its
+    SE, and the interval must hold the mean and agree with the p. None of it had been read but the t, df and p.
+    One-Sample Test's interval likewise holds its Mean Difference. Numbers: pingouin's rm_anova_wide, its first and
+    last measurements, with scipy's paired t test (computed here); the wrong SE and interval are mutations of ours."""
+    import pingouin as pg
+
+    wide = pg.read_dataset("rm_anova_wide").dropna()
+    diff = wide.iloc[:, 0] - wide.iloc[:, -1]
+    n, mean, sd = len(diff), diff.mean(), diff.std()
+    se = sd / math.sqrt(n)
+    test = stats.ttest_rel(wide.iloc[:, 0], wide.iloc[:, -1])
+    half = stats.t.ppf(0.975, n - 1) * se
+    rows = [["", "Paired Differences", "", "", "95% Confidence Interval of the Difference", "", "t", "df", "Sig. (2-tailed)"],
+            ["", "Mean", "Std. Deviation", "Std. Error Mean", "Lower", "Upper", "", "", ""],
+            ["Pair 1", f"{mean:.3f}", f"{sd:.3f}", f"{se:.3f}", f"{mean - half:.3f}", f"{mean + half:.3f}", f"{test.statistic:.3f}", f"{n - 1}",
+             f"{test.pvalue:.3f}"]]
+    (e,) = audit_file(_doc(tmp_path / "p.docx", tables=[("Table 18\nPaired Samples Test", rows)]))
+    assert e.codes == [] and "95% CI" in e.found, (e.found, e.codes)
+    rows[2][3] = f"{se * 1.4:.3f}"
+    (e,) = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 18\nPaired Samples Test", rows)]))
+    assert e.codes == ["coefficient-does-not-fit"] and "mean difference" in e.message
+    rows[2][3], rows[2][4] = f"{se:.3f}", f"{mean + 0.1:.3f}"
+    (e,) = audit_file(_doc(tmp_path / "v.docx", tables=[("Table 18\nPaired Samples Test", rows)]))
+    assert e.codes == ["ci-excludes-estimate"]
+    one = [["", "Test Value = 0", "", "", "", "", ""], ["", "t", "df", "Sig. (2-tailed)", "Mean Difference", "95% CI Lower", "95% CI Upper"],
+           ["Change", f"{test.statistic:.3f}", f"{n - 1}", f"{test.pvalue:.3f}", f"{mean:.3f}", f"{mean + 0.1:.3f}", f"{mean + half:.3f}"]]
+    (e,) = audit_file(_doc(tmp_path / "o.docx", tables=[("Table 19\nOne-Sample Test", one)]))
+    assert e.codes == ["ci-excludes-estimate"], (e.found, e.codes)

@@ -360,9 +360,9 @@ _LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[
 _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 
 
-def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str) -> tuple[Interval, str] | None:  # type: ignore[no-untyped-def]
-    """The interval whose limits stand in their own columns beside the statistic in ``column``, with the role of the
-    estimate it is of — the nearest estimate to their left: a mean difference ("diff"), a coefficient ("B"), an odds
+def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str) -> tuple[Interval, str, int] | None:  # type: ignore[no-untyped-def]
+    """The interval whose limits stand in their own columns beside the statistic in ``column``, with the role and column of
+    the estimate it is of — the nearest estimate to their left: a mean difference ("diff"), a coefficient ("B"), an odds
     ratio ("expB"); not an effect size's —, its level from the lower limit's head ("[0.025", "2.5 %") or else the one
     level the header, caption or note names ("95% Confidence Interval of the Difference"); None without both limits,
     an estimate or a level."""
@@ -383,7 +383,7 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
     if not 0.5 <= level < 1:
         return None
     low, high = numbers[lo][1], numbers[hi][1]
-    return Interval(level, low, high, low.start, high.end), roles[owner]
+    return Interval(level, low, high, low.start, high.end), roles[owner], owner
 
 
 def _residual_readings(said: str) -> tuple[Reading, ...]:
@@ -484,6 +484,12 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             # the second row of a two-row header adds its heads to the first's (SPSS's Coefficients: "t", "Sig." above,
             # "B", "Std. Error" under "Unstandardized Coefficients" below)
             found_heads = {c: role for c, role in header.items() if role is not None}
+            if "paired differences" in wordy.lower():  # SPSS's Paired Samples Test: the differences' mean and its SE
+                for c, (u, _) in row.items():
+                    named = " ".join(u.text.lower().split())
+                    if named in ("mean", "std. error mean", "std error mean", "se mean"):
+                        found_heads[c] = "diff" if named == "mean" else "se_diff"
+                        stat_cells.add(c)
             roles = {**roles, **found_heads} if header_above else found_heads
             heads_df = {c for c in found_heads if found_heads[c] in _STAT_ROLES and _DF_IN_HEAD.search(row[c][0].text)}
             with_df = (with_df - set(found_heads)) | heads_df if header_above else heads_df
@@ -585,7 +591,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 how += ", the odds ratio's interval columns"
             elif interval is not None and interval[1] != "expB" and role != "wald":  # the mean difference's or coefficient's
                 rep.ci = interval[0]
-                rep.estimate = coefficient[0] if coefficient is not None else None
+                rep.estimate = numbers[interval[2]][1] if interval[2] in row and numbers.get(interval[2]) is not None else None
                 how += ", the interval's columns"
             rep.text = statistic_text(label, df, op, value, p) + "".join(
                 f", {e.symbol_text} = {e.number.text}" + (f", {e.ci.level * 100:g}% CI [{e.ci.low.text}, {e.ci.high.text}]" if e.ci else "")
