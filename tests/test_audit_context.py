@@ -1228,3 +1228,31 @@ def test_spss_paired_samples_test_is_checked_mean_over_its_se(tmp_path):
            ["Change", f"{test.statistic:.3f}", f"{n - 1}", f"{test.pvalue:.3f}", f"{mean:.3f}", f"{mean + 0.1:.3f}", f"{mean + half:.3f}"]]
     (e,) = audit_file(_doc(tmp_path / "o.docx", tables=[("Table 19\nOne-Sample Test", one)]))
     assert e.codes == ["ci-excludes-estimate"], (e.found, e.codes)
+
+
+def test_a_correlation_matrix_with_one_sample_each_side_of_its_diagonal(tmp_path):
+    """A correlation matrix with two samples, one each side of the diagonal, as the note says ("for female penguins
+    (n = 165) above the diagonal, for male penguins (n = 168) below it"): each marked coefficient is r(n − 2) of its
+    side's n (a note with two n's had left the whole matrix unread). Numbers: pingouin's penguins by sex, scipy's
+    pearsonr with the marks its p earns (computed here); the marked .10 is a mutation of ours."""
+    import pingouin as pg
+
+    data = pg.read_dataset("penguins").dropna(subset=["sex", "bill_length_mm", "bill_depth_mm", "flipper_length_mm"])
+    names = ["bill_length_mm", "bill_depth_mm", "flipper_length_mm"]
+    female, male = data[data["sex"] == "female"], data[data["sex"] == "male"]
+
+    def cell(group, a, b):
+        r, p = stats.pearsonr(group[a], group[b])
+        return f"{r:.2f}".replace("0.", ".") + ("**" if p < 0.01 else "*" if p < 0.05 else "")
+
+    rows = [["Variable", "1", "2", "3"]]
+    for i, a in enumerate(names):
+        rows.append([f"{i + 1}. {a}"] + ["—" if j == i else cell(female if j > i else male, a, b) for j, b in enumerate(names)])
+    note = f"Note. Correlations for female penguins (n = {len(female)}) are above the diagonal, for male penguins (n = {len(male)}) below it. *p < .05. **p < .01."
+    found = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 20\nCorrelations of bill and flipper measures", rows)], note=note))
+    marked = sum(1 for row in rows[1:] for c in row[1:] if c.endswith("*"))
+    assert len(found) == marked >= 4 and all(e.codes == [] for e in found), [(e.found, e.codes) for e in found]
+    assert {e.found.split(")")[0] for e in found} == {f"r({len(female) - 2}", f"r({len(male) - 2}"}
+    rows[1][3] = ".10**"  # (r = .10 on 163 df has p = .20: no p < .01)
+    found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 20\nCorrelations of bill and flipper measures", rows)], note=note))
+    assert [e.found for e in found if e.codes] == [f"r({len(female) - 2}) = .10, p < .01"] and "p-does-not-follow" in found[1].codes

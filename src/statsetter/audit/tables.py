@@ -642,6 +642,27 @@ _DECIMALS = re.compile(r"[.,]\d")
 _MARKED = re.compile(rf"\d\s*[{_SIGNIFICANCE}]")  # a number with a mark
 
 
+_DIAGONAL_SIDE = re.compile(r"(?i)\b(above|below|upper|lower)\b(?:[^.;]{0,40}?\b(?:diagonal|triangle)|\s+(?:it|that)\b)")  # ("… below it")
+_CLAUSE = re.compile(r"[.;]\s|,\s")
+
+
+def _diagonal_sizes(said: str) -> dict[str, int]:
+    """The sample each side of a correlation matrix's diagonal, as a note gives two ("for girls (n = 120) above the
+    diagonal, for boys (n = 115) below it"): {"above": 120, "below": 115}, or {} unless each side names one n."""
+    out: dict[str, int] = {}
+    if "diagonal" not in said and "triangle" not in said:
+        return out
+    for clause in _CLAUSE.split(said):
+        m = _DIAGONAL_SIDE.search(clause)
+        sizes = sizes_in(clause) if m is not None else []
+        if m is not None and len(sizes) == 1 and sizes[0] >= 4:
+            side = "above" if m.group(1).lower() in ("above", "upper") else "below"
+            if side in out and out[side] != sizes[0]:
+                return {}
+            out[side] = sizes[0]
+    return out if len(out) == 2 else {}
+
+
 def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | None", caption: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
     """The coefficients of a table of correlations with the note's marks of significance ("−.25**" with "**p < .01"):
     each marked coefficient is r(N − 2) with its mark's bound for a p (Spearman's where the table names Spearman or ρ),
@@ -651,7 +672,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
     rows numbered alike (its diagonal skipped); and any table whose caption calls its contents correlations, a marked
     number from −1 to 1 with decimals in any cell but a row's first (one set of variables against another). Not read:
     coefficients without a mark (their p is only said to be above the smallest bound), rows under no N (a table with
-    several N's and no blocks: subsamples unsaid), and a table whose caption or note names partial, Kendall's,
+    several N's and no blocks: subsamples unsaid, unless the note gives one each side of the diagonal), and a table whose caption or note names partial, Kendall's,
     intraclass or canonical correlations, or regression weights or loadings, whose p's a plain r's df do not give. A
     coefficient computed on fewer rows (pairwise deletion) has a larger p than N − 2 gives, so a mark it earned is
     never doubted for that."""
@@ -663,6 +684,8 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
     if total is not None and (total < 4 or len(set(_totals(caption))) > 1):
         total = None
     order = sorted(rows)
+    sides = _diagonal_sizes(caption)  # two samples, one each side of the diagonal ("girls (n = 120) above …")
+    by_side = False  # the coefficients' N are their side's
     cells: list[tuple[int, int, int | None]] = []  # (row, column, N) of the cells that may hold a coefficient
     for k, r in enumerate(order):
         numbered = [(c, int(m.group(1))) for c, (u, _) in sorted(rows[r].items()) for m in [_COLUMN_NUMBER.fullmatch(u.text)] if m]
@@ -673,7 +696,9 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
             body = order[k + 1 :]
             labelled = {b: int(m.group(1)) for b in body for m in [_ROW_NUMBER.match(rows[b][min(rows[b])][0].text)] if m}
             if len(labelled) >= 2 and set(numbers.values()) <= set(labelled.values()):
-                cells = [(b, c, total) for b in body if b in labelled for c in numbers if c in rows[b] and numbers[c] != labelled[b]]
+                by_side = bool(sides)
+                cells = [(b, c, (sides["above"] if numbers[c] > labelled[b] else sides["below"]) if sides else total)
+                         for b in body if b in labelled for c in numbers if c in rows[b] and numbers[c] != labelled[b]]
             break
     if not cells and _CORRELATIONS_SAID.search(caption):
         block = total
@@ -701,7 +726,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
         df = Number(f"{n - 2}", float(n - 2), 0, 0, 0)
         rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
         rep.text = statistic_text(symbol, (df,), "=", value, p)
-        where = "its block's row" if n != total else "the caption or note"
+        where = "the note, for its side of the diagonal" if by_side else "its block's row" if n != total else "the caption or note"
         found.append(TableStatistic(unit, rep, None, f"read from the table's row: a correlation coefficient with its "
                                                      f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text}, as the table defines it), df = N − 2 "
                                                      f"(N = {n} in {where})"))
