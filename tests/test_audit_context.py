@@ -1196,6 +1196,16 @@ def test_a_standardized_coefficients_interval_and_p_must_agree():
     moved = f"It predicted body mass (β = {fit.params[k]:.2f}, 95% CI [−0.10, {fit.conf_int().loc[k][1]:.2f}], p < .001)."
     (e,) = audit_units([Unit("p", moved)])
     assert "ci-p-disagree" in e.codes
+    # "β = .66, t(339) = 15.7, p < .001, 95% CI [.58, .74]": the interval after the t is the β's (no B beside it), which
+    # APA 7 writes without a leading zero, as the β itself: no missing-leading-zero (it had been judged as an unbounded
+    # estimate's); with a B and a β before the t, whose interval it is is not said, and it is not checked against the B
+    low, high = fit.conf_int().loc[k]
+    beta, t = f"{fit.params[k]:.2f}".replace("0.", "."), f"{fit.tvalues[k]:.2f}"
+    typed = f"Flipper length predicted body mass, β = {beta}, t({int(fit.df_resid)}) = {t}, p < .001, 95% CI [{low:.2f}, {high:.2f}].".replace("0.", ".")
+    assert [e.codes for e in audit_units([Unit("p", typed)])] == [[], []], typed
+    raw = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", data).fit()
+    both = typed.replace("β =", f"B = {raw.params[k]:.2f}, SE = {raw.bse[k]:.2f}, β =")
+    assert not {"ci-excludes-estimate", "coefficient-does-not-fit"} & {c for e in audit_units([Unit("p", both)]) for c in e.codes}, both
 
 
 def test_spss_paired_samples_test_is_checked_mean_over_its_se(tmp_path):

@@ -424,7 +424,10 @@ def _mean_of(rep: Reported, ci: TypedInterval) -> Effect | None:
 # -- style ----------------------------------------------------------------------
 
 
-def _numbers_with_quantity(rep: Reported) -> list[tuple[Number, str]]:
+_BETA_BEFORE = re.compile(r"(?:β|\bbeta)\s*=\s*[-−–]?\s?\d*[.,]\d+\s*[,;]\s*$")  # "β = .21, " just before a t's symbol
+
+
+def _numbers_with_quantity(rep: Reported, text: str = "") -> list[tuple[Number, str]]:
     out: list[tuple[Number, str]] = []
     if rep.value is not None and rep.symbol is not None:
         out.append((rep.value, rep.symbol))
@@ -437,6 +440,9 @@ def _numbers_with_quantity(rep: Reported) -> list[tuple[Number, str]]:
     if rep.ci is not None:  # (beside an F, χ² or H, whose own CI nobody gives, an effect size's whose name the text left out:
         # η²p's 90% CI, say — whether it may exceed 1 is unknown)
         q = rep.symbol if rep.symbol in ("r", "rs", "tau_b") else _UNNAMED if rep.symbol in ("F", "chi2", "H", "Q") else "default"
+        if rep.symbol in ("t", "z") and text and "B" not in text[max(0, rep.symbol_start - 60) : rep.symbol_start] and \
+                _BETA_BEFORE.search(text, max(0, rep.symbol_start - 30), rep.symbol_start):
+            q = "beta"  # "β = .21, t(196) = 3.10, p = .002, 95% CI [.08, .34]": the β's interval (no B beside it)
         out += [(rep.ci.low, q), (rep.ci.high, q)]  # type: ignore[list-item]
     return out
 
@@ -458,7 +464,7 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
             out.append(Finding("decimal-mark", f"Write decimals with the style's decimal mark {mark!r}.", ", ".join(other)))
         mark = read_mark  # the leading-zero checks below look at the number as typed
     zero, no_zero, minus = [], [], []
-    for n, q in _numbers_with_quantity(rep):
+    for n, q in _numbers_with_quantity(rep, text):
         digits = n.digits
         if q == _UNNAMED:
             pass

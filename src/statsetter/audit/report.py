@@ -442,8 +442,10 @@ def _audit_units(
         before = None  # the B and SE the sentence gives before a t or z (or a Wald χ²)
         if local is not None and (local.symbol in ("t", "z") or (local.symbol == "chi2" and is_wald(unit.text, local))):
             before = coefficient_before(unit.text, local, previous_end, mark)
-            if before is not None and rep.ci is not None and rep.estimate is None and rep.symbol in ("t", "z"):
+            if before is not None and rep.ci is not None and rep.estimate is None and rep.symbol in ("t", "z") and \
+                    "β" not in unit.text[previous_end : local.start] and "beta" not in unit.text[previous_end : local.start]:
                 rep.estimate = before[0]  # "b = 0.42, SE = 0.10, t(196) = 4.20, p < .001, 95% CI [0.22, 0.62]": the interval is b's
+                # (with a β beside the b, whose interval it is is not said: neither is checked)
         findings = impossible(rep) + consistent
         if local is not None:
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)
