@@ -331,7 +331,8 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
     digits allow and a p for its printed range, and the margin leaves alone what different methods give near the null
     (a Fisher or likelihood-ratio p beside a Wald interval, a profile interval beside a Wald p) — a warning, not an
     error. The CIs checked: a ratio's (OR, HR, RR and their adjusted forms; null 1), a t's or z's own (a mean
-    difference or coefficient; null 0) and a β's given with its p and no test (null 0); not d's or g's, whose intervals are often approximations that part from the
+    difference or coefficient; null 0) and a β's given with its p and no test (null 0); not d's or g's, whose
+    intervals are often approximations that part from the
     t test's p near the null."""
     p = rep.p
     if p is None or p.adjusted or (p.number is None and p.op != "ns"):
@@ -425,6 +426,7 @@ def _mean_of(rep: Reported, ci: TypedInterval) -> Effect | None:
 
 
 _BETA_BEFORE = re.compile(r"(?:β|\bbeta)\s*=\s*[-−–]?\s?\d*[.,]\d+\s*[,;]\s*$")  # "β = .21, " just before a t's symbol
+_B_BEFORE = re.compile(r"(?<![\w])[Bb]\s*[=¼]")  # an unstandardized coefficient beside it: whose interval it is is not said
 
 
 def _numbers_with_quantity(rep: Reported, text: str = "") -> list[tuple[Number, str]]:
@@ -440,8 +442,8 @@ def _numbers_with_quantity(rep: Reported, text: str = "") -> list[tuple[Number, 
     if rep.ci is not None:  # (beside an F, χ² or H, whose own CI nobody gives, an effect size's whose name the text left out:
         # η²p's 90% CI, say — whether it may exceed 1 is unknown)
         q = rep.symbol if rep.symbol in ("r", "rs", "tau_b") else _UNNAMED if rep.symbol in ("F", "chi2", "H", "Q") else "default"
-        if rep.symbol in ("t", "z") and text and "B" not in text[max(0, rep.symbol_start - 60) : rep.symbol_start] and \
-                _BETA_BEFORE.search(text, max(0, rep.symbol_start - 30), rep.symbol_start):
+        if rep.symbol in ("t", "z") and text and _BETA_BEFORE.search(text, max(0, rep.symbol_start - 30), rep.symbol_start) and \
+                _B_BEFORE.search(text, max(0, rep.symbol_start - 60), rep.symbol_start) is None:
             q = "beta"  # "β = .21, t(196) = 3.10, p = .002, 95% CI [.08, .34]": the β's interval (no B beside it)
         out += [(rep.ci.low, q), (rep.ci.high, q)]  # type: ignore[list-item]
     return out

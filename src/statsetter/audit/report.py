@@ -458,7 +458,7 @@ def _audit_units(
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
         if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns
             findings += coefficient_ratio(rep, item.coefficient)
-        if local is None and rep.symbol == "t" and rep.effects:  # a table row's t with its d (d_z where the table says one sample or pairs)
+        if local is None and rep.symbol == "t" and rep.effects:  # a table row's t with its d (d_z where the table says one sample)
             findings += effect_from_t(rep)
         if (rep.ci is not None or rep.effects) and rep.p is not None:
             disagree = ci_p_agreement(rep, alpha)

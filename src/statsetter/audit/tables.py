@@ -41,7 +41,7 @@ _ROLES = (
     # and statsmodels': Coef., Std. Err., coef, std err)
     (re.compile(r"B|b|(?i:estimates?|coef\.?|coefficients?)"), "B"),
     # the limits of an estimate's interval in two columns: SPSS's "Lower" and "Upper" under "95% Confidence Interval of the
-    # Difference", statsmodels' "[0.025" and "0.975]", R's confint "2.5 %" and "97.5 %" (the level: _CI_LEVEL)
+    # Difference", statsmodels' "[0.025" and "0.975]", R's confint "2.5 %" and "97.5 %" (the level: _interval_cells)
     # (also with the interval named before them, as one header row gives both: "95% CI: LL", "95% CI for OR: LL")
     (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:lower(?:\s+(?:bound|limit))?|LL)|\[0?\.025|2\.5\s?%|\[?0?\.005|0\.5\s?%"), "ci_low"),
     (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:upper(?:\s+(?:bound|limit))?|UL)|0?\.975\]|97\.5\s?%|0?\.995\]|99\.5\s?%"), "ci_high"),
@@ -58,23 +58,23 @@ _ROLES = (
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
     # the χ²'s own p), and its statistics under "Value", each named by its row (_CHI_ROW)
     (re.compile(r"(?i)asymp(?:\.|totic)\s*sig(?:\.|nificance)\s*(?:\(2-sided\))?"), "p"),
-    (re.compile(r"(?i)value|(?:test\s+)?statistic"), "value"),
+    (re.compile(r"(?i)value|(?:test\s+)?statistic"), "value"),  # (jamovi's and JASP's t-test tables: "Statistic", the test named in the row)
     # an F's effect size in a column of its own (SPSS's "Partial Eta Squared"; "η²p", "ηp²", "η²", "ω²"): checked against the F
     (re.compile(r"(?i)partial\s+(?:eta|η)[\s-]?(?:squared|[²2])|η\s?[²2]\s?p|ηp\s?[²2]|η_p\^?2"), "effect:eta2_p"),
     (re.compile(r"(?i)(?:eta|η)[\s-]?(?:squared|[²2])"), "effect:eta2"),
     # a t's Cohen's d: checked as t/√(df + 1) where the head names it d_z, or the caption or note says the test is a
     # one-sample test (one SD: no other d); a paired test's "Cohen's d" may be d_z or d_av (pingouin's), and is not checked
     (re.compile(r"(?i)(?:cohen'?s\s+)?d_?z"), "effect:d_z"),
-    (re.compile(r"(?i)cohen'?s\s+d|d"), "effect:d"),  # (jamovi's and JASP's t-test tables: "Statistic", the test named in the row)
+    (re.compile(r"(?i)cohen'?s\s+d|d"), "effect:d"),
     (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
 )
 _STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald", "U"}  # (U: only as a row names it under "Statistic")
-# the rows of SPSS's Chi-Square Tests whose Value is a χ² (footnote letters after their names, as SPSS prints them)
 # the test a row of a t-test table names beside its "Statistic" (jamovi's and JASP's layout: "Student's t", "Welch's t",
 # "Mann-Whitney U"; practice): the statistic is that test's
 _TEST_ROW = {"t": re.compile(r"(?i)\s*(?:student(?:'?s)?|welch(?:'?s)?)(?:\s+t)?\s*"), "U": re.compile(r"(?i)\s*mann[-–\s]?whitney(?:\s+U)?\s*")}
+# the rows of SPSS's Chi-Square Tests whose Value is a χ² (footnote letters after their names, as SPSS prints them)
 _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|continuity\s+correction|linear[- ]by[- ]linear\s+association)[a-d]?\s*")
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
@@ -581,7 +581,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2") if role == "F" else ("d", "d_z"), _ONE_SAMPLE.search(said) is not None)
                 how += "".join(f", the {e.symbol_text} column" for e in effects)
             if coefficient is not None:
-                how += (", the mean difference and its SE columns" if len(coefficient) == 3 else ", the B and SE columns") + (", the Exp(B) column" if effects else "")
+                how += (", the mean difference and its SE columns" if len(coefficient) == 3 else ", the B and SE columns") + \
+                    "".join(f", the {e.symbol_text} column" for e in effects if e.name == "OR")
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
@@ -672,8 +673,9 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
     rows numbered alike (its diagonal skipped); and any table whose caption calls its contents correlations, a marked
     number from −1 to 1 with decimals in any cell but a row's first (one set of variables against another). Not read:
     coefficients without a mark (their p is only said to be above the smallest bound), rows under no N (a table with
-    several N's and no blocks: subsamples unsaid, unless the note gives one each side of the diagonal), and a table whose caption or note names partial, Kendall's,
-    intraclass or canonical correlations, or regression weights or loadings, whose p's a plain r's df do not give. A
+    several N's and no blocks: subsamples unsaid, unless the note gives one each side of the diagonal), and a table
+    whose caption or note names partial, Kendall's, intraclass or canonical correlations, or regression weights or
+    loadings, whose p's a plain r's df do not give. A
     coefficient computed on fewer rows (pairwise deletion) has a larger p than N − 2 gives, so a mark it earned is
     never doubted for that."""
     if not stars or _NOT_PLAIN_R.search(caption):
