@@ -10,7 +10,6 @@ removed from the text the parser sees.
 
 from __future__ import annotations
 
-import html
 import re
 import zipfile
 from bisect import bisect_left, bisect_right
@@ -203,6 +202,8 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     escapes = entities = None
     if not tex and "&" in text:  # HTML's character references, which Markdown prints as their characters: knitr's kable
         # writes R's "Pr(>|t|)" head as "Pr(>&#124;t&#124;)" in a pipe table (a "|" would part the cell)
+        import html  # (html.entities is a large table: loaded only for a text that may hold a reference)
+
         text, entities = _replace(_MD_ENTITY, text, html.unescape)
     if not tex and "\\" in text:  # Markdown's escapes ("\\*p < .05" prints *p < .05): held out of the emphasis and scripts
         text, escapes = _replace(_MD_ESCAPE, text, lambda g: _MD_HELD.get(g, g))
