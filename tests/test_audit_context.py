@@ -1266,3 +1266,31 @@ def test_a_correlation_matrix_with_one_sample_each_side_of_its_diagonal(tmp_path
     rows[1][3] = ".10**"  # (r = .10 on 163 df has p = .20: no p < .01)
     found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 20\nCorrelations of bill and flipper measures", rows)], note=note))
     assert [e.found for e in found if e.codes] == [f"r({len(female) - 2}) = .10, p < .01"] and "p-does-not-follow" in found[1].codes
+
+
+def test_spss_model_summary_f_change_is_read(tmp_path):
+    """SPSS's Model Summary of a hierarchical regression ("Change Statistics": R Square Change, F Change, df1, df2,
+    Sig. F Change; layout from memory, practice): each step's F change is read with its df1 and df2 and checked against
+    its p (the heads had not been known). Numbers: statsmodels' OLS of the penguins' body mass, flipper length first,
+    the bill's length and depth added; the F change computed here from the R²s, its p from scipy; the p of .017 is a
+    mutation of ours."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    data = pg.read_dataset("penguins").dropna(subset=["body_mass_g", "flipper_length_mm", "bill_length_mm", "bill_depth_mm"])
+    first = smf.ols("body_mass_g ~ flipper_length_mm", data).fit()
+    second = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm + bill_depth_mm", data).fit()
+
+    def row(step, model, before):
+        change = model.rsquared - (before.rsquared if before is not None else 0.0)
+        df1, df2 = int(model.df_model - (before.df_model if before is not None else 0)), int(model.df_resid)
+        f = change / df1 / ((1 - model.rsquared) / df2)
+        return [str(step), f"{model.rsquared ** 0.5:.3f}", f"{model.rsquared:.3f}", f"{model.rsquared_adj:.3f}", f"{change:.3f}", f"{f:.3f}",
+                str(df1), str(df2), f"{stats.f.sf(f, df1, df2):.3f}"]
+
+    rows = [["", "", "", "", "Change Statistics", "", "", "", ""],
+            ["Model", "R", "R Square", "Adjusted R Square", "R Square Change", "F Change", "df1", "df2", "Sig. F Change"], row(1, first, None), row(2, second, first)]
+    found = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 21\nModel Summary", rows)]))
+    assert [e.found for e in found] == [f"F(1, 340) = {rows[2][5]}, p = {rows[2][8]}", f"F(2, 338) = {rows[3][5]}, p = {rows[3][8]}"] and all(not e.codes for e in found)
+    rows[3][8] = "0.017"
+    assert "p-does-not-follow" in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 21\nModel Summary", rows)]))[1].codes

@@ -29,7 +29,7 @@ __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "
 _FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d])$")
 _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
-    (re.compile(r"F(?:[- ]?(?:values?|ratio))?"), "F"),
+    (re.compile(r"F(?:[- ]?(?:values?|ratio)|\s+[Cc]hange)?"), "F"),  # (SPSS's Model Summary: "F Change", "Sig. F Change")
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
     (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "wald"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
     # a coefficient with its standard error in one cell, "0.52 (0.21)" under "B (SE)" (regression tables in psychology and
@@ -52,7 +52,7 @@ _ROLES = (
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?values?)?"), "z"),
-    (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\))?|P\s*\(2-tailed\))"), "p"),
+    (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\))"), "p"),
     # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
     (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|Chi(?:sq)?)\s?\)?"), "p"),
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
