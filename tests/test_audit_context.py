@@ -1271,9 +1271,9 @@ def test_a_correlation_matrix_with_one_sample_each_side_of_its_diagonal(tmp_path
 def test_spss_model_summary_f_change_is_read(tmp_path):
     """SPSS's Model Summary of a hierarchical regression ("Change Statistics": R Square Change, F Change, df1, df2,
     Sig. F Change; layout from memory, practice): each step's F change is read with its df1 and df2 and checked against
-    its p (the heads had not been known). Numbers: statsmodels' OLS of the penguins' body mass, flipper length first,
-    the bill's length and depth added; the F change computed here from the R²s, its p from scipy; the p of .017 is a
-    mutation of ours."""
+    its p, and with its R Square and R Square Change (the heads had not been known). Numbers: statsmodels' OLS of the penguins' body mass, flipper length first,
+    the bill's length and depth added; the F change computed here from the R²s, its p from scipy; the p of .017 and the
+    R² change of .020 are mutations of ours."""
     import pingouin as pg
     import statsmodels.formula.api as smf
 
@@ -1291,6 +1291,13 @@ def test_spss_model_summary_f_change_is_read(tmp_path):
     rows = [["", "", "", "", "Change Statistics", "", "", "", ""],
             ["Model", "R", "R Square", "Adjusted R Square", "R Square Change", "F Change", "df1", "df2", "Sig. F Change"], row(1, first, None), row(2, second, first)]
     found = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 21\nModel Summary", rows)]))
-    assert [e.found for e in found] == [f"F(1, 340) = {rows[2][5]}, p = {rows[2][8]}", f"F(2, 338) = {rows[3][5]}, p = {rows[3][8]}"] and all(not e.codes for e in found)
-    rows[3][8] = "0.017"
-    assert "p-does-not-follow" in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 21\nModel Summary", rows)]))[1].codes
+    assert [e.found for e in found] == [f"F(1, 340) = {rows[2][5]}, p = {rows[2][8]}, R² = {rows[2][2]}, ΔR² = {rows[2][4]}",
+                                        f"F(2, 338) = {rows[3][5]}, p = {rows[3][8]}, R² = {rows[3][2]}, ΔR² = {rows[3][4]}"] and all(not e.codes for e in found)
+    wrong = [r[:] for r in rows]
+    wrong[3][8] = "0.017"
+    assert "p-does-not-follow" in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 21\nModel Summary", wrong)]))[1].codes
+    # the step's R² change must give its F change with the model's R²: (ΔR²/df₁)/((1 − R²)/df₂) (definition)
+    wrong = [r[:] for r in rows]
+    wrong[3][4] = "0.020"
+    (_, e) = audit_file(_doc(tmp_path / "v.docx", tables=[("Table 21\nModel Summary", wrong)]))
+    assert e.codes == ["effect-does-not-fit"] and "(ΔR²/df₁)/((1 − R²)/df₂)" in e.message

@@ -102,7 +102,7 @@ FORMER_CODES: dict[str, str] = {
     "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
-_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
 RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0
@@ -737,6 +737,18 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                             f"{'η²' if e.name == 'eta2' else 'generalized η²'} cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at")
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {bound[0]:.3f} to {bound[1]:.3f}.", f"{e.symbol_text} = {e.number.text}"))
+        change = next((e for e in rep.effects if e.name == "delta_R2"), None)
+        r2 = next((e for e in rep.effects if e.name == "R2"), None)
+        if change is not None and r2 is not None and whole:  # a regression step's F change: (ΔR²/df₁)/((1 − R²)/df₂)
+            d_low, d_high = max(change.number.value - change.number.half_unit, 0.0), change.number.value + change.number.half_unit
+            r_low, r_high = r2.number.value - r2.number.half_unit, r2.number.value + r2.number.half_unit
+            df1, df2 = rep.df[0].value, rep.df[1].value
+            if 0 <= r_low and r_high < 1:
+                expected = (d_low / df1 / ((1 - r_low) / df2), d_high / df1 / ((1 - r_high) / df2))
+                if not _overlap(expected, (low, high)):
+                    out.append(Finding("effect-does-not-fit", f"{change.symbol_text} = {change.number.text} with {r2.symbol_text} = {r2.number.text} does not fit "
+                                       f"F({rep.df[0].text}, {rep.df[1].text}) = {rep.value.text}: (ΔR²/df₁)/((1 − R²)/df₂) gives {expected[0]:.2f} to "
+                                       f"{expected[1]:.2f}.", f"{change.symbol_text} = {change.number.text}, {r2.symbol_text} = {r2.number.text}"))
     elif rep.symbol == "chi2" and len(rep.df) == 1 and rep.n is not None and rep.n.value > 0 and rep.df[0].value >= 1:
         least = math.sqrt(low / (rep.n.value * rep.df[0].value))
         for e in rep.effects:

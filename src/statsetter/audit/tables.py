@@ -62,6 +62,10 @@ _ROLES = (
     # an F's effect size in a column of its own (SPSS's "Partial Eta Squared"; "η²p", "ηp²", "η²", "ω²"): checked against the F
     (re.compile(r"(?i)partial\s+(?:eta|η)[\s-]?(?:squared|[²2])|η\s?[²2]\s?p|ηp\s?[²2]|η_p\^?2"), "effect:eta2_p"),
     (re.compile(r"(?i)(?:eta|η)[\s-]?(?:squared|[²2])"), "effect:eta2"),
+    # a hierarchical regression's steps (SPSS's Model Summary: "R Square", "R Square Change" beside "F Change"): F is
+    # (ΔR²/df₁)/((1 − R²)/df₂)
+    (re.compile(r"(?i)R[\s-]?(?:square|[²2])\s+change|(?:Δ|∆|delta\s*)\s?R[\s-]?(?:square|[²2])"), "effect:delta_R2"),
+    (re.compile(r"(?i)R[\s-]?(?:square|[²2])"), "effect:R2"),
     # a t's Cohen's d: checked as t/√(df + 1) where the head names it d_z, or the caption or note says the test is a
     # one-sample test (one SD: no other d); a paired test's "Cohen's d" may be d_z or d_av (pingouin's), and is not checked
     (re.compile(r"(?i)(?:cohen'?s\s+)?d_?z"), "effect:d_z"),
@@ -355,7 +359,7 @@ def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> s
     return ""
 
 
-_ESTIMATES = {"B", "diff", "expB", "beta", "BSE", "effect:eta2_p", "effect:eta2", "effect:d", "effect:d_z"}  # what an interval can be of
+_ESTIMATES = {"B", "diff", "expB", "beta", "BSE", "effect:eta2_p", "effect:eta2", "effect:d", "effect:d_z", "effect:R2", "effect:delta_R2"}  # what an interval can be of
 _LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[0.005": 0.99, ".005": 0.99, "0.005": 0.99, "0.5%": 0.99}
 _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 
@@ -435,7 +439,7 @@ def _effect_cells(row, roles: dict[int, str], numbers, column: int, names: Seque
         k = _own_column(roles, column, f"effect:{name}")
         if k is not None and k in row and numbers.get(k) is not None and numbers[k][0] == "=":
             number = numbers[k][1]
-            shown = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z"}[name]
+            shown = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²"}[name]
             out.append(Effect("d_z" if name == "d" and one_sample else name, number, number.start, number.end, number.start, shown, None))
     return out
 
@@ -578,7 +582,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             coefficient, effects = _coefficient_cells(row, roles, numbers, mark, heads) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role in ("wald", "z") else []  # (a linear model's row has no odds ratio; a logistic one's z has)
             if role in ("F", "t"):
-                effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2") if role == "F" else ("d", "d_z"), _ONE_SAMPLE.search(said) is not None)
+                effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2", "R2", "delta_R2") if role == "F" else ("d", "d_z"),
+                                        _ONE_SAMPLE.search(said) is not None)
                 how += "".join(f", the {e.symbol_text} column" for e in effects)
             if coefficient is not None:
                 how += (", the mean difference and its SE columns" if len(coefficient) == 3 else ", the B and SE columns") + \
