@@ -1301,3 +1301,23 @@ def test_spss_model_summary_f_change_is_read(tmp_path):
     wrong[3][4] = "0.020"
     (_, e) = audit_file(_doc(tmp_path / "v.docx", tables=[("Table 21\nModel Summary", wrong)]))
     assert e.codes == ["effect-does-not-fit"] and "(ΔR²/df₁)/((1 − R²)/df₂)" in e.message
+
+
+def test_a_chi_square_tests_table_as_jamovi_and_jasp_name_its_rows(tmp_path):
+    """jamovi's and JASP's χ² Tests tables name their rows "χ²" (JASP: "Χ²", with the Greek capital) and "χ²
+    continuity correction" beside "Value", "df" and "p" (layout from memory, practice): each row's value is a χ² with
+    its df and p (only SPSS's row names had been known). Numbers: pingouin's chi2_independence of its heart-disease
+    data, sex by diagnosis (the Pearson and Yates-corrected χ², computed here); the p of .30 is a mutation of ours."""
+    import pingouin as pg
+
+    data = pg.read_dataset("chi2_independence")
+    _, _, plain = pg.chi2_independence(data, x="sex", y="target", correction=False)
+    _, _, yates = pg.chi2_independence(data, x="sex", y="target", correction=True)
+    pearson, corrected = plain.iloc[0], yates.iloc[0]
+    rows = [["", "Value", "df", "p"], ["χ²", f"{pearson.chi2:.2f}", f"{int(pearson.dof)}", "< .001"],
+            ["χ² continuity correction", f"{corrected.chi2:.2f}", f"{int(corrected.dof)}", "< .001"], ["N", f"{len(data)}", "", ""]]
+    found = audit_file(_doc(tmp_path / "c.docx", tables=[("Table 22\nχ² Tests", rows)]))
+    assert [e.found for e in found] == [f"χ²(1) = {pearson.chi2:.2f}, p < .001", f"χ²(1) = {corrected.chi2:.2f}, p < .001"] and all(not e.codes for e in found)
+    rows[1][0], rows[1][3] = "Χ²", ".30"
+    found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 22\nChi-Squared Tests", rows)]))
+    assert "p-does-not-follow" in found[0].codes

@@ -79,7 +79,9 @@ _STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald", "U"}  # (U: only as a row nam
 # "Mann-Whitney U"; practice): the statistic is that test's
 _TEST_ROW = {"t": re.compile(r"(?i)\s*(?:student(?:'?s)?|welch(?:'?s)?)(?:\s+t)?\s*"), "U": re.compile(r"(?i)\s*mann[-–\s]?whitney(?:\s+U)?\s*")}
 # the rows of SPSS's Chi-Square Tests whose Value is a χ² (footnote letters after their names, as SPSS prints them)
-_CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|continuity\s+correction|linear[- ]by[- ]linear\s+association)[a-d]?\s*")
+# (jamovi's and JASP's χ² Tests name the row "χ²", "Χ²" or "χ² continuity correction")
+_CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|continuity\s+correction|linear[- ]by[- ]linear\s+association"
+                      r"|[χΧ]\s?[²2](?:\s+continuity\s+correction)?)[a-d]?\s*")
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 _RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr)[a-d*†‡§]?\s*\(\s*95\s?%\s?ci\s*\)[a-d*†‡§]?")
