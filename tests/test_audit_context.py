@@ -1321,3 +1321,28 @@ def test_a_chi_square_tests_table_as_jamovi_and_jasp_name_its_rows(tmp_path):
     rows[1][0], rows[1][3] = "Χ²", ".30"
     found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 22\nChi-Squared Tests", rows)]))
     assert "p-does-not-follow" in found[0].codes
+
+
+def test_spss_coefficients_interval_for_b_after_its_beta_column(tmp_path):
+    """SPSS's Coefficients table puts "95.0% Confidence Interval for B" (Lower Bound, Upper Bound) after the Beta, t
+    and Sig. columns (layout from memory, practice): the interval is the B's, as its spanner says, not the Beta's,
+    and must hold the B and agree with the p (it had been left unread: the nearest estimate to its left is the Beta).
+    Numbers: statsmodels' OLS of the penguins' body mass, its conf_int, and the standardized fit's β (computed here);
+    the shifted interval is a mutation of ours."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    data = pg.read_dataset("penguins").dropna(subset=["body_mass_g", "flipper_length_mm", "bill_length_mm"])
+    fit = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", data).fit()
+    z = data[["body_mass_g", "flipper_length_mm", "bill_length_mm"]].apply(lambda c: (c - c.mean()) / c.std())
+    beta, limits = smf.ols("body_mass_g ~ flipper_length_mm + bill_length_mm", z).fit().params, fit.conf_int()
+    rows = [["Model", "Unstandardized Coefficients", "", "Standardized Coefficients", "", "", "95.0% Confidence Interval for B", ""],
+            ["", "B", "Std. Error", "Beta", "t", "Sig.", "Lower Bound", "Upper Bound"]]
+    for k, name in (("Intercept", "(Constant)"), ("flipper_length_mm", "Flipper length"), ("bill_length_mm", "Bill length")):
+        rows.append([name, f"{fit.params[k]:.3f}", f"{fit.bse[k]:.3f}", "" if k == "Intercept" else f"{beta[k]:.3f}", f"{fit.tvalues[k]:.3f}",
+                     f"{fit.pvalues[k]:.3f}", f"{limits.loc[k, 0]:.3f}", f"{limits.loc[k, 1]:.3f}"])
+    found = audit_file(_doc(tmp_path / "c.docx", tables=[("Table 23\nCoefficients", rows)]))
+    assert len(found) == 3 and all(e.codes == [] and "95% CI [" in e.found for e in found), [(e.found, e.codes) for e in found]
+    rows[4][6] = f"{fit.params['bill_length_mm'] + 1:.3f}"  # (the bill's interval moved off its B, and off 0 beside p = .244)
+    found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 23\nCoefficients", rows)]))
+    assert set(found[2].codes) == {"ci-excludes-estimate", "ci-p-disagree"}, found[2].codes

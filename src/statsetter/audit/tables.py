@@ -363,6 +363,7 @@ def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> s
 
 _ESTIMATES = {"B", "diff", "expB", "beta", "BSE", "effect:eta2_p", "effect:eta2", "effect:d", "effect:d_z", "effect:R2", "effect:delta_R2"}  # what an interval can be of
 _LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[0.005": 0.99, ".005": 0.99, "0.005": 0.99, "0.5%": 0.99}
+_FOR_B = re.compile(r"(?i)(?:interval|CI)\s+for\s+B\b")
 _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 
 
@@ -376,6 +377,8 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
     if lo is None or hi is None or lo not in row or hi not in row or numbers.get(lo) is None or numbers.get(hi) is None:
         return None
     owner = max((k for k, role in roles.items() if k < lo and role in _ESTIMATES), default=None)  # the estimate to its left
+    if owner is not None and roles[owner] == "beta" and _FOR_B.search(said):  # SPSS's "95.0% Confidence Interval for B" after Beta
+        owner = max((k for k, role in roles.items() if k < lo and role == "B"), default=None)
     if owner is None or roles[owner] not in ("B", "diff", "expB"):
         return None
     if numbers[lo][0] != "=" or numbers[hi][0] != "=":
