@@ -862,8 +862,17 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
         elif kind == "effect":
             name = _effect_name(m.group("name"))
             number = pat.to_number(m.group("num"), m.start("num"))
-            if name is None or number is None or (name == "M" and m.group("name").endswith(")") and _PAREN_VALUE.match(text, number.end) is None):
-                continue  # ("M (SD) = 3.2" without the SD's number: no reading of the pair)
+            if name is None or number is None:
+                continue
+            in_parentheses = name == "M" and m.group("name").endswith(")")  # "M (SD) = 3.2 (0.5)"
+            if in_parentheses:
+                paired = _paren_sd(pat, text, m, number)
+                if paired is None:
+                    continue  # ("M (SD) = 3.2" without the SD's number: no reading of the pair)
+            elif name == "SD" and "±" in text[max(0, m.start("name") - 3) : m.start("name")]:
+                paired = _mean_and_sd(pat, text, m, number)
+            else:
+                paired = None
             if rep.symbol is None and any(e.name == name for e in (rep.descriptives if name in _DESCRIPTIVE else rep.effects)):
                 again = at  # a name read again: another cluster ("(M = 4.40, SD = 2.22) … (n = 28, M = 3.11, …)"), with the n
                 # just before it, which this cluster had read for its own
@@ -876,17 +885,10 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                         last_end = max([rep.end] + [e for _, e in spans] + [x.end for x in rep.effects + rep.descriptives]
                                        + [rep.p.end if rep.p is not None else 0] + [rep.ci.end if rep.ci is not None else 0])
                 break
-            if name == "M" and m.group("name").endswith(")"):  # "M (SD) = 3.2 (0.5)"
-                paired = _paren_sd(pat, text, m, number)
-            elif name == "SD" and "±" in text[max(0, m.start("name") - 3) : m.start("name")]:
-                paired = _mean_and_sd(pat, text, m, number)
-            else:
-                paired = None
             if paired is not None:  # "M ± SD = −2.1 ± 0.5": the mean, then its SD (the first number had been read as the SD)
-                mean, sd = paired
+                mean, sd, close = paired
                 rep.descriptives += [mean, sd]
                 rep.start = min(rep.start, mean.symbol_start)
-                close = text.find(")", sd.end, sd.end + 3) + 1 if name == "M" else sd.end  # (the SD's parenthesis closed)
                 covered = max(covered, close)
                 last_end = max(last_end, close)
                 spans.append((m.start(), close))
@@ -920,9 +922,10 @@ _PLUS_MINUS_MEAN = re.compile(r"(?:\b[Mm]ean|(?<![\w])M)\s*±\s*$")  # "M ± " o
 _PLUS_MINUS_VALUE = re.compile(r"\s*±\s*([-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))")
 
 
-def _mean_and_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tuple[Effect, Effect] | None:
+def _mean_and_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tuple[Effect, Effect, int] | None:
     """"M ± SD = −2.1 ± 0.5" (or "mean ± SD = …", as medical texts type a mean and its SD together): the mean
-    (the first number, its symbol where "M" or "mean" stands) and the SD (the number after "±"); None otherwise."""
+    (the first number, its symbol where "M" or "mean" stands) and the SD (the number after "±"), and where the pair ends;
+    None otherwise."""
     before = _PLUS_MINUS_MEAN.search(text, max(0, m.start("name") - 12), m.start("name"))
     after = _PLUS_MINUS_VALUE.match(text, first.end)
     if before is None or after is None:
@@ -932,25 +935,25 @@ def _mean_and_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> 
         return None
     symbol = before.group().rstrip(" ±")
     return (_new_effect("M", first, before.start(), first.end, before.start(), symbol, None),
-            _new_effect("SD", sd, m.start("name"), sd.end, m.start("name"), m.group("name"), None))
+            _new_effect("SD", sd, m.start("name"), sd.end, m.start("name"), m.group("name"), None), sd.end)
 
 
 _PAREN_VALUE = re.compile(r"\s*\(\s*([-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*\)")
-_SD_IN_NAME = re.compile(r"SD")
 
 
-def _paren_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tuple[Effect, Effect] | None:
+def _paren_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tuple[Effect, Effect, int] | None:
     """"M (SD) = 3.20 (0.50)" (or "Mean (SD) = …"): the mean (the first number) and the SD (the number in parentheses
-    after it), each with its own symbol; None when no parenthesised number follows."""
+    after it), each with its own symbol, and where the SD's parenthesis closes; None when no parenthesised number
+    follows."""
     after = _PAREN_VALUE.match(text, first.end)
     sd = pat.to_number(after.group(1), after.start(1)) if after is not None else None
     if sd is None:
         return None
     name = m.group("name")
-    at = m.start("name") + _SD_IN_NAME.search(name).start()  # type: ignore[union-attr]
+    at = m.start("name") + name.index("SD")
     symbol = name[: name.index("(")].rstrip()
     return (_new_effect("M", first, m.start(), first.end, m.start("name"), symbol, None),
-            _new_effect("SD", sd, at, sd.end, at, "SD", None))
+            _new_effect("SD", sd, at, sd.end, at, "SD", None), after.end())  # type: ignore[union-attr]
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:

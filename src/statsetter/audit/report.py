@@ -390,6 +390,7 @@ def _above_unadjusted(rep: Reported, alpha: float) -> bool:
     return computed is None or reported is None or reported[1] >= computed[0]
 
 
+_BETA = re.compile(r"β|\bbeta\b")  # a standardized coefficient named beside a b
 _ONE_SIDED_SAID = re.compile(r"(?i)(?:one|(?<![\d.])1)[- ]?(?:tailed|sided)|directional")
 
 
@@ -443,7 +444,7 @@ def _audit_units(
         if local is not None and (local.symbol in ("t", "z") or (local.symbol == "chi2" and is_wald(unit.text, local))):
             before = coefficient_before(unit.text, local, previous_end, mark)
             if before is not None and rep.ci is not None and rep.estimate is None and rep.symbol in ("t", "z") and \
-                    "β" not in unit.text[previous_end : local.start] and "beta" not in unit.text[previous_end : local.start]:
+                    not _BETA.search(unit.text, previous_end, local.start):
                 rep.estimate = before[0]  # "b = 0.42, SE = 0.10, t(196) = 4.20, p < .001, 95% CI [0.22, 0.62]": the interval is b's
                 # (with a β beside the b, whose interval it is is not said: neither is checked)
         findings = impossible(rep) + consistent

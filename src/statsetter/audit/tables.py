@@ -433,6 +433,7 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "d
     return (b, se), effects
 
 
+_SHOWN = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²"}  # an effect column's symbol in a reading
 _ONE_SAMPLE = re.compile(r"(?i)\bone[- ]sample")  # a one-sample t test: its d is the mean over the one SD, t/√n
 
 
@@ -444,8 +445,7 @@ def _effect_cells(row, roles: dict[int, str], numbers, column: int, names: Seque
         k = _own_column(roles, column, f"effect:{name}")
         if k is not None and k in row and numbers.get(k) is not None and numbers[k][0] == "=":
             number = numbers[k][1]
-            shown = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²"}[name]
-            out.append(Effect("d_z" if name == "d" and one_sample else name, number, number.start, number.end, number.start, shown, None))
+            out.append(Effect("d_z" if name == "d" and one_sample else name, number, number.start, number.end, number.start, _SHOWN[name], None))
     return out
 
 
