@@ -192,7 +192,7 @@ def test_a_partial_correlation_takes_no_df_from_the_n():
     for text in ("In the sample (N = 30), the partial correlation controlling for age, sex and income was r = .40, p = .039.",
                  "In the sample (N = 30), partial r = .40, p = .039, adjusting for age."):
         (e,) = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("r")]
-        assert "p-does-not-follow" not in e.codes and e.checked == "", text
+        assert "p-does-not-follow" not in e.codes and "over every df it may have" in e.checked and "(28)" not in e.checked, text
     (e,) = audit_units([Unit("c", "In the sample (N = 30), the correlation was r = .40, p = .039.")])
     assert e.codes == ["df-unstated"] and "N − 2 = 28" in e.checked and "df = 25 would" in e.message
 
@@ -457,7 +457,10 @@ def test_the_paragraphs_n_gives_the_df_and_no_reading_is_a_guess():
     (third,) = audit_units([Unit("p3", "Without any sample size, t = 9.99, p = .50.")])
     assert not _p_findings(first) and "N − 2 = 66" in first.checked
     assert "p-does-not-follow" in second.codes and "earlier in the text" in second.message
-    assert not _p_findings(third) and third.checked == ""  # no df anywhere: nothing recomputed, nothing claimed
+    # no df anywhere: recomputed over every df a t may have (df = 1 gives p = .064, the normal .000): p = .50 follows under none
+    assert _p_findings(third) == {"p-does-not-follow"} and "over every df it may have" in third.checked and "under no df" in third.message
+    (fourth,) = audit_units([Unit("p4", "Without any sample size, t = 2.40, p = .030.")])  # (15 df give .030, scipy: no claim)
+    assert not _p_findings(fourth) and "over every df it may have" in fourth.checked
 
 
 def test_a_p_that_fits_other_df_than_the_guessed_ones_is_a_warning_naming_them():
@@ -595,7 +598,7 @@ def test_a_new_study_does_not_take_the_n_of_the_one_before():
     result = [Unit("p3", "Twenty-seven students took part. The groups differed, t = 2.10, p = .046.", None, "", 3)]
     for heading in ("Study 2", "Experiment 2: Method", "In Study 2, students took part."):
         (e,) = audit_units(before + [Unit("p2", heading, None, "", 2)] + result)
-        assert e.codes == [] and e.checked == "", heading
+        assert e.codes == [] and "over every df it may have" in e.checked and "198" not in e.checked, heading
     (e,) = audit_units(before + result)  # no new study said: the N before is the sample's, as before
     assert "N − 2 = 198" in e.checked
 
@@ -1346,3 +1349,33 @@ def test_spss_coefficients_interval_for_b_after_its_beta_column(tmp_path):
     rows[4][6] = f"{fit.params['bill_length_mm'] + 1:.3f}"  # (the bill's interval moved off its B, and off 0 beside p = .244)
     found = audit_file(_doc(tmp_path / "w.docx", tables=[("Table 23\nCoefficients", rows)]))
     assert set(found[2].codes) == {"ci-excludes-estimate", "ci-p-disagree"}, found[2].codes
+
+
+# A mediation paper's first regression as printed (Am J Health Behav 2014;38(4):586–597, doi:10.5993/AJHB.38.4.12,
+# Table 5, model I; https://pmc.ncbi.nlm.nih.gov/articles/PMC5509063/table/T5): the last row's t, .728, is not
+# .27 / .04 (6.75) and cannot have p < .001 under any df — the published table's own slip, kept as printed
+_AJHB_MODEL_I = [["", "Coefficient", "SE", "t", "p"], ["Intercept", "−.57", "2.12", "−.27", ".78"], ["Gender (Female)", "−.41", ".46", "−.88", ".38"],
+                 ["Race (Black)", "−.004", ".55", "−.007", ".99"], ["Age", ".05", ".02", "3.16", ".002"], ["Education", ".01", ".10", ".12", ".91"],
+                 ["CES-D", ".27", ".04", ".728", "< .001"]]
+
+
+def test_a_t_without_df_is_checked_over_every_df_it_may_have(tmp_path):
+    """A t (or r, χ²) given without df whose p no df at all allows: a t's two-sided p falls as its df grow, from the
+    df = 1 p (the Cauchy's) to the normal's, so "t = .728, p < .001" (p from .47 to .60 whatever the df: scipy) is
+    wrong in any sample. Such a t had not been checked at all where no N or group sizes gave df (a model's coefficient
+    without its residual df, a t alone in a sentence); a p inside the span is never doubted. Real: the published
+    table above, whose other rows fit."""
+    lo, hi = 2 * stats.norm.sf(0.7285), 2 * stats.t.sf(0.7275, 1)
+    assert f"{lo:.4f} {hi:.4f}" == "0.4663 0.5996"
+    found = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 5\nRegression models and mediating effects", _AJHB_MODEL_I)],
+                            note="Note. CES-D, depressive symptoms."))
+    assert [e.found for e in found][-1] == "t = .728, p < .001"
+    assert {"p-does-not-follow", "verdict-changes", "coefficient-does-not-fit"} <= set(found[-1].codes)
+    assert "p from 0.4663 to 0.5996 over every df it may have" in found[-1].message and "under no df" in found[-1].message
+    assert all(not e.codes and "over every df it may have" in e.checked for e in found[:-1]), [(e.found, e.codes) for e in found]
+    # in prose: a large t with a large p (df = 1 gives at most .107: scipy), an r whose p no df reaches (df = 1 gives .74)
+    assert f"{2 * stats.t.sf(5.895, 1):.3f} {2 * stats.t.sf(0.395 * (1 / (1 - 0.395 ** 2)) ** 0.5, 1):.3f}" == "0.107 0.741"
+    for text, flagged in (("Scores rose after training, t = 5.90, p = .45.", True), ("The two scores correlated, r = .40, p = .80.", True),
+                          ("Scores rose after training, t = 5.90, p = .003.", False), ("The two scores correlated, r = .40, p = .30.", False)):
+        (e,) = audit_units([Unit("c", text)])
+        assert ("p-does-not-follow" in e.codes) is flagged and "over every df it may have" in e.checked, (text, e.codes)

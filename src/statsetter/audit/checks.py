@@ -29,7 +29,7 @@ from .parsing import Interval as TypedInterval
 
 # code: (what it means, the docs/reporting-rules.md rule and its source)
 CODES: dict[str, tuple[str, str]] = {
-    "p-does-not-follow": ("the reported p does not follow from the statistic and df", "Numbers: exact p (APA 7 §6.36); consistency as in Nuijten et al. (2016)"),
+    "p-does-not-follow": ("the reported p does not follow from the statistic and df (without df: under no df at all)", "Numbers: exact p (APA 7 §6.36); consistency as in Nuijten et al. (2016)"),
     "verdict-changes": ("with the recomputed p the verdict at alpha is the other one", "Numbers: decision-preserving p (practice)"),
     "one-sided": ("the p agrees only with a one-sided test; say so if that was the test", "Say which test was run (practice)"),
     "impossible-r": ("a correlation outside [−1, 1]", "Reporting by test: correlation (practice)"),
@@ -252,6 +252,9 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     if reported is None or _fits_as_printed(rep, reported):
         return []
     computed = p_range(rep)
+    anywhere = computed is None and not rep.df
+    if anywhere:
+        computed = any_df_range(rep)
     if computed is None:
         return []
     if _overlap(computed, reported):
@@ -259,10 +262,12 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     given = rep.p if rep.p is not None else rep.shared_p
     assert given is not None
     shown = given.op if given.op == "ns" else f"{'p' if given is rep.p else given.symbol_text} {given.op} {given.number.text}"  # type: ignore[union-attr]
-    evidence = f"{_up_to_value(rep)} gives p from {computed[0]:.4g} to {computed[1]:.4g}; reported {shown}"
+    over = " over every df it may have (none given)" if anywhere else ""
+    evidence = f"{_up_to_value(rep)} gives p from {computed[0]:.4g} to {computed[1]:.4g}{over}; reported {shown}"
     if rep.symbol in ("t", "z", "r", "rs") and _overlap((computed[0] / 2, computed[1] / 2), reported):
         return [Finding("one-sided", "The reported p matches a one-sided test only; say that the test was one-sided, or report the two-sided p.", evidence)]
-    found = [Finding("p-does-not-follow", "The reported p does not follow from the statistic and its df.", evidence)]
+    found = [Finding("p-does-not-follow", "The reported p follows from the statistic under no df at all." if anywhere else
+                     "The reported p does not follow from the statistic and its df.", evidence)]
     said_significant = reported[1] <= alpha
     if (said_significant and computed[0] >= alpha) or (not said_significant and computed[1] < alpha):
         found.append(Finding("verdict-changes", f"At alpha = {alpha:g} the recomputed p leads to the other decision.", evidence))
@@ -270,6 +275,26 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
 
 
 _MANY_DF = 10**7  # beyond this a t's p is the normal's to the digits any manuscript prints
+
+
+def any_df_range(rep: Reported) -> tuple[float, float] | None:
+    """The p a t, r or χ² given without df allows over every df it may have (from 1 up): a t's or r's two-sided p
+    falls as its df grow (from the df = 1 p down to the normal's for a t, to 0 for an r), a χ²'s upper tail rises
+    with them (from its df = 1 p up to 1). A p outside follows under no df at all ("t = 0.73, p < .001"; "t = 5.90,
+    p = .45"), whatever the sample."""
+    if rep.df or rep.symbol not in ("t", "r", "rs", "chi2") or rep.op != "=":
+        return None
+
+    def at(df: int) -> tuple[float, float] | None:
+        return p_range(replace(rep, df=(Number(str(df), float(df), 0, rep.start, rep.start),), p_range=None))
+
+    fewest = at(1)
+    if fewest is None:
+        return None
+    if rep.symbol == "chi2":
+        return fewest[0], 1.0
+    most = at(_MANY_DF)
+    return None if most is None else (most[0], fewest[1])
 
 
 def df_that_fit(rep: Reported, alpha: float) -> "tuple[int, int | None] | None":

@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
@@ -354,10 +354,14 @@ def _consistency(item: _Item, alpha: float) -> "tuple[list[Finding], tuple[Repor
 def _recomputed(rep: Reported, assumption: str) -> str:
     """What the consistency check recomputed, to reproduce a finding ("" when nothing was)."""
     computed = p_range(rep)
+    anywhere = computed is None and not rep.df and rep.value is not None
+    if anywhere:
+        computed = any_df_range(rep)
     if computed is None or (rep.p is None and rep.shared_p is None) or rep.value is None:
         return ""
     df = f"({', '.join(f'{d.value:g}' for d in rep.df)})" if rep.df else ""
-    said = f"p recomputed from {rep.symbol}{df} {rep.op} {rep.value.text}: {computed[0]:.4g} to {computed[1]:.4g}"
+    over = " over every df it may have (none given)" if anywhere else ""
+    said = f"p recomputed from {rep.symbol}{df} {rep.op} {rep.value.text}{over}: {computed[0]:.4g} to {computed[1]:.4g}"
     if rep.p is None and rep.shared_p is not None and rep.shared_p.number is not None:  # checked against a bound it shares
         said += f", against {rep.shared_p.symbol_text} {rep.shared_p.op} {rep.shared_p.number.text}"
     return said + (f", with {assumption}" if assumption else "")
