@@ -1379,3 +1379,62 @@ def test_a_t_without_df_is_checked_over_every_df_it_may_have(tmp_path):
                           ("Scores rose after training, t = 5.90, p = .003.", False), ("The two scores correlated, r = .40, p = .30.", False)):
         (e,) = audit_units([Unit("c", text)])
         assert ("p-does-not-follow" in e.codes) is flagged and "over every df it may have" in e.checked, (text, e.codes)
+
+
+# A published regression table without a test column, two models side by side (Pediatric Research 2020;88(5):739–748,
+# doi:10.1038/s41390-020-1024-1, Table 4; https://pmc.ncbi.nlm.nih.gov/articles/PMC7577839/table/Tab4), as printed
+_PEDRES_TABLE_4 = [["", "B", "SE B", "95% CI", "β", "p", "B", "SE B", "95% CI", "β", "p"],
+                   ["Intercept", "−6.01", "0.74", "−7.48, −4.53", "", "<0.001", "−4.46", "0.60", "−5.65, −3.27", "", "<0.001"],
+                   ["Age at assessment", "0.23", "0.04", "0.15, 0.31", "0.46", "<0.001", "0.22", "0.04", "0.15, 0.30", "0.48", "<0.001"],
+                   ["Female sex", "0.12", "0.09", "−0.06, 0.31", "0.10", "0.18", "0.15", "0.09", "−0.08, 0.29", "0.12", "0.11"],
+                   ["SES", "0.05", "0.02", "0.01, 0.10", "0.18", "0.03", "0.05", "0.02", "−0.00, 0.10", "0.17", "0.04"],
+                   ["Processing speed", "0.02", "0.00", "0.01, 0.03", "0.37", "<0.001", "0.02", "0.00", "0.01, 0.03", "0.33", "<0.001"],
+                   ["Glx/Cr", "0.44", "0.22", "0.00, 0.87", "0.16", "0.05", "", "", "", "", ""],
+                   ["mI/Cr × birth group", "", "", "", "", "", "−2.84", "1.21", "−5.25, −0.44", "−0.17", "0.02"]]
+
+
+def test_a_coefficients_table_without_a_test_column_is_read(tmp_path):
+    """B, SE, 95% CI, β and p with no t column (health and psychology journals' usual layout) had not been read at all:
+    each B is now read with its SE, interval and p — per model where two stand side by side — and checked: the interval
+    holds the B (ci-excludes-estimate) and agrees with the p (ci-p-disagree), and the p follows from B / SE under some df,
+    from the normal's to the t's on 1 df (coefficient-does-not-fit). Real: the published table above, all consistent;
+    the slips are mutations of ours."""
+    caption = ("Table 4\nMultiple linear regression models for the global executive function score", _PEDRES_TABLE_4)
+    note = "Note. B unstandardized regression coefficients, SE B standard error of B, CI confidence interval, β standardized regression coefficients."
+    found = audit_file(_doc(tmp_path / "t.docx", tables=[caption], note=note))
+    assert len(found) == 12 and all(not e.codes for e in found), [(e.found, e.codes) for e in found]
+    assert found[2].found == "B = 0.23, SE = 0.04, 95% CI [0.15, 0.31], p < 0.001" and found[3].found == "B = 0.22, SE = 0.04, 95% CI [0.15, 0.30], p < 0.001"
+    assert "no test column" in found[2].notes[0]
+    rows = [r[:] for r in _PEDRES_TABLE_4]
+    rows[2][5], rows[3][1], rows[4][10] = "0.45", "0.50", "0.40"  # Age's p, Female sex's B (model 1), SES's p (model 2)
+    codes = {e.found: set(e.codes) for e in audit_file(_doc(tmp_path / "w.docx", tables=[(caption[0], rows)], note=note))}
+    # Age: |B / SE| from 5.00 to 6.71 gives p at most .126 (t on 1 df, scipy), and its CI excludes 0
+    assert 2 * stats.t.sf(0.225 / 0.045, 1) < 0.13
+    assert codes["B = 0.23, SE = 0.04, 95% CI [0.15, 0.31], p = 0.45"] == {"coefficient-does-not-fit", "ci-p-disagree"}
+    assert "ci-excludes-estimate" in codes["B = 0.50, SE = 0.09, 95% CI [−0.06, 0.31], p = 0.18"]
+    # SES (model 2): its CI holds 0, so p = .40 agrees with it, but |B / SE| is at least 1.8 (.045 / .025), whose p on 1 df
+    # is .32 (scipy): no df gives .40
+    assert f"{2 * stats.t.sf(0.045 / 0.025, 1):.2f}" == "0.32"
+    assert codes["B = 0.05, SE = 0.02, 95% CI [−0.00, 0.10], p = 0.40"] == {"coefficient-does-not-fit"}
+
+
+def test_an_odds_ratio_with_its_interval_in_a_column_of_its_own(tmp_path):
+    """A logistic model's table with "OR" and "95% CI" in columns of their own and no test column (B, SE, OR, 95% CI, p):
+    the interval after the OR is the odds ratio's, checked against the p (null 1) — had not been read. Numbers:
+    statsmodels' Logit on its Spector & Mazzeo data (grade ~ GPA + TUCE + PSI), OR and CI as exp of its estimates."""
+    import statsmodels.api as sm
+
+    data = sm.datasets.spector.load_pandas()
+    fit = sm.Logit(data.endog, sm.add_constant(data.exog)).fit(disp=0)
+    ci = np.exp(fit.conf_int())
+    rows = [["Predictor", "B", "SE", "OR", "95% CI", "p"]] + [
+        [k, f"{fit.params[k]:.3f}", f"{fit.bse[k]:.3f}", f"{math.exp(fit.params[k]):.2f}", f"{ci.loc[k, 0]:.2f}–{ci.loc[k, 1]:.2f}", f"{fit.pvalues[k]:.3f}"]
+        for k in ("GPA", "TUCE", "PSI")]
+    found = audit_file(_doc(tmp_path / "l.docx", tables=[("Table 2\nLogistic regression of grade improvement", rows)]))
+    assert [e.found for e in found] == ["OR = 16.88, 95% CI [1.42, 200.62], p = 0.025", "OR = 1.10, 95% CI [0.83, 1.45], p = 0.501",
+                                        "OR = 10.79, 95% CI [1.34, 86.94], p = 0.025"], [e.found for e in found]
+    assert all(not e.codes for e in found), [(e.found, e.codes) for e in found]
+    rows[3][5], rows[2][3] = "0.250", "1.50"  # PSI's p (its interval, 1.34 to 86.94, excludes 1); TUCE's OR (exp(0.095) = 1.10)
+    found = {e.found: set(e.codes) for e in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 2\nLogistic regression of grade improvement", rows)]))}
+    assert found["OR = 10.79, 95% CI [1.34, 86.94], p = 0.250"] == {"ci-p-disagree"}
+    assert found["OR = 1.50, 95% CI [0.83, 1.45], p = 0.501"] >= {"coefficient-does-not-fit", "ci-excludes-estimate"}, found

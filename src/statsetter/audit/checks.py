@@ -58,7 +58,7 @@ CODES: dict[str, tuple[str, str]] = {
                        "Repeated-measures ANOVA: the corrected test is F(ε·df₁, ε·df₂) (Greenhouse & Geisser, 1959; definition); "
                        "report the df of the test whose p is given (practice)"),
     "coefficient-does-not-fit": (
-        "t (or z) does not equal B / SE (or a table's mean difference / its SE), a Wald χ² (B / SE)², or an odds ratio exp(B)",
+        "t (or z) does not equal B / SE (or a table's mean difference / its SE), a Wald χ² (B / SE)², or an odds ratio exp(B); a p given without a test follows from B / SE under no df",
         "Regression: coefficients as B, SE, β, t, p (docs/reporting-rules.md); the Wald statistic of a coefficient is B / SE, its χ² form "
         "(B / SE)² on 1 df, and a logistic coefficient's odds ratio exp(B) (definitions; practice)",
     ),
@@ -365,7 +365,7 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
     found = [(e.ci, 1.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name in RATIOS]
     if rep.symbol is None:  # a coefficient given with its interval and p, no test ("β = 0.21, 95% CI [0.10, 0.32], p < .001")
         found += [(e.ci, 0.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name == "beta"]
-    if rep.ci is not None and rep.symbol in ("t", "z"):
+    if rep.ci is not None and (rep.symbol in ("t", "z") or (rep.symbol is None and rep.estimate is not None)):  # (a table's coefficient)
         found.append((rep.ci, 0.0, "the estimate"))
     out = []
     for ci, null, name in found:
@@ -888,13 +888,43 @@ def coefficient_ratio(rep: Reported, coefficient: "Ratio | None") -> list[Findin
     if not _overlap(ratio, stat):
         out.append(Finding("coefficient-does-not-fit", f"{name} = {rep.value.text} is not {what}: {b_name} = {b.text} and {se_name} = {se.text} give "
                                                         f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"{b_name} = {b.text}, {se_name} = {se.text}, {name} = {rep.value.text}"))
+    return out + _odds_fit(rep, b)
+
+
+def _odds_fit(rep: Reported, b: Number) -> list[Finding]:
+    """An odds ratio beside a logistic coefficient against exp(B), on the printed precision of both."""
     odds = next((e for e in rep.effects if e.name in ("OR", "aOR")), None)
-    if odds is not None and b_high < 700:  # the odds ratio of a logistic coefficient is exp(B)
-        expected = (math.exp(b_low), math.exp(b_high))
-        if not _overlap(expected, (odds.number.value - odds.number.half_unit, odds.number.value + odds.number.half_unit)):
-            out.append(Finding("coefficient-does-not-fit", f"{odds.symbol_text} = {odds.number.text} is not exp(B): B = {b.text} gives "
-                                                            f"{expected[0]:.4g} to {expected[1]:.4g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}"))
-    return out
+    b_low, b_high = b.value - b.half_unit, b.value + b.half_unit
+    if odds is None or b_high >= 700:
+        return []
+    expected = (math.exp(b_low), math.exp(b_high))
+    if _overlap(expected, (odds.number.value - odds.number.half_unit, odds.number.value + odds.number.half_unit)):
+        return []
+    return [Finding("coefficient-does-not-fit", f"{odds.symbol_text} = {odds.number.text} is not exp(B): B = {b.text} gives "
+                                                f"{expected[0]:.4g} to {expected[1]:.4g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}")]
+
+
+def coefficient_p(rep: Reported, coefficient: "Ratio | None", alpha: float) -> list[Finding]:
+    """The p of a coefficient given with its SE and no test (a table without a test column) against B / SE: over every
+    df the test may have, from the normal's p (a z, or a t on many df) up to the t's on 1 df, with the printed
+    precision of B and SE — a p outside follows from them under no df at all; an odds ratio beside them against exp(B)."""
+    if rep.symbol is not None or coefficient is None or len(coefficient) != 2:
+        return []
+    b, se = coefficient
+    odds = _odds_fit(rep, b)  # (and an odds ratio beside it against exp(B))
+    reported = reported_p_range(rep, alpha) if rep.p is not None and not rep.p.adjusted else None
+    se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
+    if reported is None or se_low <= 0:
+        return odds
+    low, high = max(abs(b.value) - b.half_unit, 0.0) / se_high, (abs(b.value) + b.half_unit) / se_low
+    allowed = (min(1.0, 2 * upper_tail("z", high)), min(1.0, 2 * upper_tail("t", low, (1.0,))))
+    if _overlap(allowed, reported):
+        return odds
+    shown = "ns" if rep.p.op == "ns" else f"p {rep.p.op} {rep.p.number.text}"  # type: ignore[union-attr]
+    name = "mean difference" if rep.text.startswith("mean difference") else "B"
+    return [Finding("coefficient-does-not-fit", f"The p does not follow from {name} / SE under any df: {name} = {b.text} and SE = {se.text} give "
+                                                f"|{name} / SE| from {low:.2f} to {high:.2f}, p from {allowed[0]:.4g} to {allowed[1]:.4g}.",
+                    f"{name} = {b.text}, SE = {se.text}, {shown}")] + odds
 
 
 # -- the record behind the suggestion -----------------------------------------

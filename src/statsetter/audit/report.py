@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
@@ -461,8 +461,8 @@ def _audit_units(
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
-        if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns
-            findings += coefficient_ratio(rep, item.coefficient)
+        if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns (its p, where no test is given)
+            findings += coefficient_ratio(rep, item.coefficient) + coefficient_p(rep, item.coefficient, alpha)
         if local is None and rep.symbol == "t" and rep.effects:  # a table row's t with its d (d_z where the table says one sample)
             findings += effect_from_t(rep)
         if (rep.ci is not None or rep.effects) and rep.p is not None:

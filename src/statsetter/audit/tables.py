@@ -26,6 +26,8 @@ if TYPE_CHECKING:
 
 __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "sizes_in", "caption_sizes", "Reading"]
 
+# an interval's head: "95% CI", "95% confidence interval", "CI (95%)", "Bootstrapped 95% CI", "CI"
+_INTERVAL_HEAD = r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|confidence\s+interval)|(?:CI|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)"
 _FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d])$")
 _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
@@ -35,6 +37,12 @@ _ROLES = (
     # a coefficient with its standard error in one cell, "0.52 (0.21)" under "B (SE)" (regression tables in psychology and
     # sociology; practice)
     (re.compile(r"(?i)(?:b|estimate|coefficient|coef\.?)\s*\(\s*S\.?E\.?(?:\s?B)?\s*\)"), "BSE"),
+    # a coefficient (or a mean difference) with its interval in one cell, "1.9 (0.9, 2.9)" under "β Coefficient (95% CI)",
+    # "−.93 (−1.38 to −.58)" under "Coefficient (Bootstrapped 95% CI)", "B [95% CI]" (health and psychology tables; practice)
+    (re.compile(rf"(?i)(?:(?:un)?standardi[sz]ed\s+|regression\s+)?(?:b|β|beta|estimates?|coef\.?|coefficients?|(?:β|beta)\s+coefficients?"
+                rf"|mean\s+diff(?:erence|\.)?|MD)\s*[(\[]\s*{_INTERVAL_HEAD}\s*[)\]]"), "BCI"),
+    # an interval in one column, "−7.48, −4.53" or "[0.15, 0.31]" under "95% CI" (of the nearest estimate to its left)
+    (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|the\s+(?:mean\s+)?difference|the\s+estimate))?"), "ci"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
     (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:\s+coefficients?)?"), "beta"),
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
@@ -48,7 +56,7 @@ _ROLES = (
     # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
-    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?"), "SE"),
+    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|standard\s+errors?"), "SE"),
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?values?)?"), "z"),
@@ -361,38 +369,78 @@ def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> s
     return ""
 
 
-_ESTIMATES = {"B", "diff", "expB", "beta", "BSE", "effect:eta2_p", "effect:eta2", "effect:d", "effect:d_z", "effect:R2", "effect:delta_R2"}  # what an interval can be of
+_ESTIMATES = {"B", "diff", "expB", "beta", "BSE", "BCI", "effect:eta2_p", "effect:eta2", "effect:d", "effect:d_z", "effect:R2", "effect:delta_R2"}  # what an interval can be of
 _LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[0.005": 0.99, ".005": 0.99, "0.005": 0.99, "0.5%": 0.99}
 _FOR_B = re.compile(r"(?i)(?:interval|CI)\s+for\s+B\b")
 _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
+_SIGNED = {".": r"[-−–]?\s?(?:\d+(?:\.\d+)?|\.\d+)", ",": r"[-−–]?\s?(?:\d+(?:,\d+)?|,\d+)"}
+# an interval's two limits in a cell, "−7.48, −4.53", "[0.15, 0.31]", "(−1.38 to −.58)", "0.15–0.31", "− 0.522–4.054",
+# "(-0.015_0.027)" (as published tables print them; practice); with a decimal comma the limits are never parted by a comma
+_LIMITS = {mark: rf"(?P<lo>{n})\s*(?:{'' if mark == ',' else ',|'};|to|[–—_-])\s*(?P<hi>{n})" for mark, n in _SIGNED.items()}
+_INTERVAL_CELL = {mark: re.compile(rf"\s*[(\[]?\s*{limits}\s*[)\]]?\s*[{_SIGNIFICANCE}a-d]*\s*") for mark, limits in _LIMITS.items()}
+_ESTIMATE_INTERVAL_CELL = {mark: re.compile(rf"\s*(?P<est>{_SIGNED[mark]})\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*{limits}\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
+                           for mark, limits in _LIMITS.items()}
+_MEAN_DIFFERENCE = re.compile(r"(?i)\s*(?:mean\s+diff|MD\b)")
 
 
-def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str) -> tuple[Interval, str, int] | None:  # type: ignore[no-untyped-def]
-    """The interval whose limits stand in their own columns beside the statistic in ``column``, with the role and column of
-    the estimate it is of — the nearest estimate to their left: a mean difference ("diff"), a coefficient ("B"), an odds
-    ratio ("expB"); not an effect size's —, its level from the lower limit's head ("[0.025", "2.5 %") or else the one
-    level the header, caption or note names ("95% Confidence Interval of the Difference"); None without both limits,
-    an estimate or a level."""
+def _cell_interval(text: str, mark: str, with_estimate: bool = False) -> "tuple[Number, ...] | None":
+    """A cell's interval, (low, high), or with ``with_estimate`` an estimate and its interval, "1.9 (0.9, 2.9)":
+    (estimate, low, high); None when the cell is not one."""
+    m = (_ESTIMATE_INTERVAL_CELL if with_estimate else _INTERVAL_CELL)[mark if mark in _SIGNED else "."].fullmatch(text)
+    if m is None:
+        return None
+    read = _patterns(mark).to_number
+    found = tuple(read(m.group(g), m.start(g)) for g in (("est", "lo", "hi") if with_estimate else ("lo", "hi")))
+    return None if any(n is None for n in found) else found  # type: ignore[return-value]
+
+
+def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str,  # type: ignore[no-untyped-def]
+                    mark: str = ".") -> "tuple[Interval, str, int, Number | None, str] | None":
+    """The interval of the estimate beside the statistic in ``column``: its limits in two columns of their own, in one
+    column ("95% CI": "−7.48, −4.53"), or in the estimate's own cell ("β Coefficient (95% CI)": "1.9 (0.9, 2.9)"); with the
+    role and column of the estimate it is of — the nearest estimate to the left of the limits: a mean difference ("diff"), a
+    coefficient ("B"), an odds ratio ("expB"); not an effect size's — and the estimate where the cell gives it. The level
+    comes from the limits' head ("[0.025", "2.5 %", "95% CI") or else the one level the header, caption or note names ("95%
+    Confidence Interval of the Difference"). None without limits, an estimate or a level, and for a bootstrap interval
+    (its head says so), which need not agree with the test's p nor hold the estimate. Last, where it was read."""
     lo, hi = _own_column(roles, column, "ci_low"), _own_column(roles, column, "ci_high")
-    if lo is None or hi is None or lo not in row or hi not in row or numbers.get(lo) is None or numbers.get(hi) is None:
+    one, both = _own_column(roles, column, "ci"), _own_column(roles, column, "BCI")
+    estimate = None
+    if lo is not None and hi is not None and lo in row and hi in row and numbers.get(lo) is not None and numbers.get(hi) is not None:
+        if numbers[lo][0] != "=" or numbers[hi][0] != "=":
+            return None
+        low, high, at, where = numbers[lo][1], numbers[hi][1], lo, "the interval's columns"
+    elif one is not None and one in row and (limits := _cell_interval(row[one][0].text, mark)) is not None:
+        (low, high), at, where = limits, one, "the interval's column"
+    elif both is not None and both in row and (read := _cell_interval(row[both][0].text, mark, with_estimate=True)) is not None:
+        estimate, low, high = read
+        at, where = both, "the interval beside the estimate"
+    else:
         return None
-    owner = max((k for k, role in roles.items() if k < lo and role in _ESTIMATES), default=None)  # the estimate to its left
-    if owner is not None and roles[owner] == "beta" and _FOR_B.search(said):  # SPSS's "95.0% Confidence Interval for B" after Beta
-        owner = max((k for k, role in roles.items() if k < lo and role == "B"), default=None)
-    if owner is None or roles[owner] not in ("B", "diff", "expB"):
+    head = heads.get(at, "")
+    if "bootstrap" in head.lower():
         return None
-    if numbers[lo][0] != "=" or numbers[hi][0] != "=":
-        return None
-    level = _LEVEL_IN_HEAD.get(heads.get(lo, "").replace(" ", ""))
+    if at == both:
+        owner: int | None = both
+        role = "diff" if _MEAN_DIFFERENCE.match(head) else "B"
+    else:
+        owner = max((k for k, r in roles.items() if k < at and r in _ESTIMATES), default=None)  # the estimate to its left
+        if owner is not None and roles[owner] == "beta" and _FOR_B.search(f"{head} {said}"):  # SPSS's "95.0% Confidence Interval for B" after Beta
+            owner = max((k for k, r in roles.items() if k < at and r == "B"), default=None)
+        if owner is None or roles[owner] not in ("B", "diff", "expB"):
+            return None
+        role = roles[owner]
+        estimate = numbers[owner][1] if owner in row and numbers.get(owner) is not None else None
+    level = _LEVEL_IN_HEAD.get(head.replace(" ", ""))
     if level is None:
-        named = {float(m.group(1)) for m in _LEVEL_SAID.finditer(said)}
+        own = _LEVEL_SAID.search(head) if at != lo else None
+        named = {float(own.group(1))} if own is not None else {float(m.group(1)) for m in _LEVEL_SAID.finditer(said)}
         if len(named) != 1:
             return None
         level = named.pop() / 100
     if not 0.5 <= level < 1:
         return None
-    low, high = numbers[lo][1], numbers[hi][1]
-    return Interval(level, low, high, low.start, high.end), roles[owner], owner
+    return Interval(level, low, high, low.start, high.end), role, owner, estimate, where  # type: ignore[return-value]
 
 
 def _residual_readings(said: str) -> tuple[Reading, ...]:
@@ -416,6 +464,13 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "d
     cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB", "diff", "se_diff") and k in row and numbers.get(k) is not None}
     if "diff" in cols and "se_diff" in cols:  # a t test's row: t = mean difference / its SE
         return (numbers[cols["diff"]][1], numbers[cols["se_diff"]][1], ("mean difference", "SE")), []
+    joint = next((k for k, role in roles.items() if role == "BCI" and k in row), None)
+    if "B" not in cols and "diff" not in cols and joint is not None and ("SE" in cols or "se_diff" in cols):  # "1.9 (0.9, 2.9)" under "B (95% CI)"
+        read = _cell_interval(row[joint][0].text, mark, with_estimate=True)
+        if read is None:
+            return None, []
+        se = numbers[cols.get("SE", cols.get("se_diff"))][1]  # type: ignore[index]
+        return ((read[0], se, ("mean difference", "SE")) if _MEAN_DIFFERENCE.match((heads or {}).get(joint, "")) else (read[0], se)), []
     both = next((k for k, role in roles.items() if role == "BSE" and k in row), None)
     if ("B" not in cols or "SE" not in cols) and both is not None:  # "0.52 (0.21)" under "B (SE)"
         m = _VALUE_SE.fullmatch(row[both][0].text)
@@ -431,6 +486,67 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "d
         name = (heads or {}).get(cols["expB"], "Exp(B)").strip() or "Exp(B)"  # as the table heads it: "Exp(B)", "OR"
         effects.append(Effect("OR", ratio, ratio.start, ratio.end, ratio.start, name, None))
     return (b, se), effects
+
+
+def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str], said: str, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """A model's coefficients in a table without a test column (B, SE, 95% CI, β, p: health and psychology journals'
+    usual layout; practice): each estimate column — B, "B (SE)", "B (95% CI)", a mean difference — with the SE, interval
+    and p after it up to the next one (models side by side), read as the estimate with its interval and p, and its B and
+    SE (checked: the interval holds the estimate and agrees with the p; the p follows from B / SE under some df); an
+    interval after an odds ratio column is the odds ratio's. A row without a p or an interval is not read."""
+    out = []
+    starts = sorted(k for k, role in roles.items() if role in ("B", "BSE", "BCI", "diff"))
+    for i, k in enumerate(starts):
+        end = starts[i + 1] if i + 1 < len(starts) else 1 << 30
+        if k not in row:
+            continue
+        part = {c: role for c, role in roles.items() if k <= c < end}
+        estimate = se = None
+        if roles[k] == "BSE":
+            m = _VALUE_SE.fullmatch(row[k][0].text)
+            read = _patterns(mark).to_number
+            estimate, se = (read(m.group("b"), m.start("b")), read(m.group("se"), m.start("se"))) if m else (None, None)
+        elif roles[k] == "BCI":
+            both = _cell_interval(row[k][0].text, mark, with_estimate=True)
+            estimate = both[0] if both is not None else None
+        elif numbers.get(k) is not None and numbers[k][0] == "=":
+            estimate = numbers[k][1]
+        if estimate is None:
+            continue
+        se_col = next((c for c in sorted(part) if part[c] in ("SE", "se_diff")), None)
+        if se is None and se_col is not None and se_col in row and numbers.get(se_col) is not None and numbers[se_col][0] == "=":
+            se = numbers[se_col][1]
+        p_col = next((c for c in sorted(part) if part[c] == "p"), None)
+        p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
+        interval = _interval_cells(row, part, numbers, heads, k, said, mark)
+        if interval is not None and interval[1] == "expB":  # an odds ratio and its interval: the ratio's (null 1)
+            ratio = numbers[interval[2]][1] if interval[2] in row and numbers.get(interval[2]) is not None else None
+            if ratio is None or numbers[interval[2]][0] != "=":
+                continue
+            name = heads.get(interval[2], "OR").strip() or "OR"
+            ci = interval[0]
+            rep = Reported(None, "", ratio.start, ratio.start, ratio.end, p=p, effects=[Effect("OR", ratio, ratio.start, ratio.end, ratio.start, name, ci)])
+            rep.text = f"{name} = {ratio.text}, {ci.level * 100:g}% CI [{ci.low.text}, {ci.high.text}]"
+            unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
+        else:
+            if p is None and interval is None:
+                continue
+            diff = roles[k] == "diff" or _MEAN_DIFFERENCE.match(heads.get(k, "")) is not None
+            name = "mean difference" if diff else "B"
+            rep = Reported(None, "", estimate.start, estimate.start, estimate.end, p=p)
+            rep.text = f"{name} = {estimate.text}" + (f", SE = {se.text}" if se is not None else "")
+            if interval is not None:
+                rep.ci, rep.estimate = interval[0], estimate
+                rep.text += f", {rep.ci.level * 100:g}% CI [{rep.ci.low.text}, {rep.ci.high.text}]"
+            unit = row[k][0]
+            how = f"the {heads.get(k, name).strip() or name} column" + (", its SE" if se is not None else "") + (f", {interval[4]}" if interval else "")
+        if p is not None:
+            rep.p = replace(p, start=rep.end + 2, end=rep.end + 2 + p.end - p.start, symbol_start=rep.end + 2)  # (after the estimate)
+            rep.text += " " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}"  # type: ignore[union-attr]
+            how += ", the p column"
+        coefficient = (estimate, se) if se is not None else None  # (an odds ratio's row: its B and SE too)
+        out.append(TableStatistic(unit, rep, None, f"read from the table's row: {how} (no test column)", (), coefficient))
+    return out
 
 
 _SHOWN = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²"}  # an effect column's symbol in a reading
@@ -514,9 +630,12 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             read = _value_df(row[c][0].text, mark)
             if read is not None:
                 numbers[c], cell_dfs[c] = read
-        coefficients = not {"B", "SE", "BSE", "beta"}.isdisjoint(roles.values())  # a model's coefficients table
+        coefficients = not {"B", "SE", "BSE", "BCI", "beta"}.isdisjoint(roles.values())  # a model's coefficients table
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
+            if coefficients and not any(role in _STAT_ROLES or role == "value" for role in roles.values()):  # no test column
+                found += _bare_coefficients(row, roles, numbers, heads, levels_said, mark)
+                continue
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
             if sizes:
                 groups, groups_guessed = sizes, False
@@ -596,14 +715,13 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
-            interval = _interval_cells(row, roles, numbers, heads, c, levels_said) if role in ("t", "z", "wald") else None
+            interval = _interval_cells(row, roles, numbers, heads, c, levels_said, mark) if role in ("t", "z", "wald") else None
             if interval is not None and interval[1] == "expB" and rep.effects and rep.effects[-1].name == "OR":  # the odds ratio's
                 rep.effects[-1] = replace(rep.effects[-1], ci=interval[0])
-                how += ", the odds ratio's interval columns"
+                how += f", the odds ratio's {interval[4].removeprefix('the ')}"
             elif interval is not None and interval[1] != "expB" and role != "wald":  # the mean difference's or coefficient's
-                rep.ci = interval[0]
-                rep.estimate = numbers[interval[2]][1] if interval[2] in row and numbers.get(interval[2]) is not None else None
-                how += ", the interval's columns"
+                rep.ci, rep.estimate = interval[0], interval[3]
+                how += f", {interval[4]}"
             rep.text = statistic_text(label, df, op, value, p) + "".join(
                 f", {e.symbol_text} = {e.number.text}" + (f", {e.ci.level * 100:g}% CI [{e.ci.low.text}, {e.ci.high.text}]" if e.ci else "")
                 for e in rep.effects if e.name != "OR" or e.ci is not None)
