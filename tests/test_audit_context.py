@@ -1438,3 +1438,32 @@ def test_an_odds_ratio_with_its_interval_in_a_column_of_its_own(tmp_path):
     found = {e.found: set(e.codes) for e in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 2\nLogistic regression of grade improvement", rows)]))}
     assert found["OR = 10.79, 95% CI [1.34, 86.94], p = 0.250"] == {"ci-p-disagree"}
     assert found["OR = 1.50, 95% CI [0.83, 1.45], p = 0.501"] >= {"coefficient-does-not-fit", "ci-excludes-estimate"}, found
+
+
+# A published linear model with the coefficient and its interval in one cell (BMC Health Services Research 2008;8:219,
+# doi:10.1186/1472-6963-8-219, Table 2; https://bmchealthservres.biomedcentral.com/articles/10.1186/1472-6963-8-219/tables/2)
+_BMC_TABLE_2 = [["Parameter", "β Coefficient (95% CI)", "Standard Error", "t Value", "P-value"],
+                ["Intercept", "130.0 (120.0, 140.0)", "5.1", "25.5", "<0.001"],
+                ["Age, 10 years (continuous)", "1.9 (0.9, 2.9)", "0.5", "3.8", "<0.001"],
+                ["Race (white vs. non-white (ref))", "-5.0 (-7.5, -2.6)", "1.3", "-4.0", "<0.001"],
+                ["Currently Married (yes vs. no (ref))", "-0.2 (-2.5, 2.2)", "1.2", "-0.1", "0.89"],
+                ["0–9th grade", "0.1 (-4.6, 4.8)", "2.4", "0.05", "0.96"],
+                ["Medication Adherence (nonadherent vs. adherent (ref))", "3.7 (1.3, 6.2)", "1.2", "3.0", "0.003"],
+                ["Current Smoker (yes vs. no (ref))", "-2.4 (-5.3, 0.6)", "1.5", "-1.6", "0.11"]]
+
+
+def test_a_coefficient_with_its_interval_in_one_cell_beside_a_t(tmp_path):
+    """"β Coefficient (95% CI)" over "1.9 (0.9, 2.9)" with "Standard Error", "t Value" and "P-value" columns: the t had
+    been read with its p alone; now the cell's coefficient and interval and the SE column are read too — t against
+    B / SE, the interval holding the coefficient and agreeing with the p. Real: the published table above (consistent
+    throughout); the slips are mutations of ours."""
+    found = audit_file(_doc(tmp_path / "b.docx", tables=[("Table 2 Multiple linear regression model – outcome: systolic blood pressure", _BMC_TABLE_2)],
+                            note="Total number of patients included in model = 1082."))
+    assert len(found) == 7 and all(not e.codes for e in found), [(e.found, e.codes) for e in found]
+    assert found[1].found == "t = 3.8, p < 0.001, 95% CI [0.9, 2.9]" and "the B and SE columns, the interval beside the estimate" in found[1].notes[0]
+    rows = [r[:] for r in _BMC_TABLE_2]
+    rows[2][2], rows[6][1], rows[7][4] = "0.9", "3.7 (4.3, 6.2)", "0.011"  # Age's SE; Adherence's lower limit; Smoker's p
+    codes = {e.found: set(e.codes) for e in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 2 Multiple linear regression model", rows)]))}
+    assert "coefficient-does-not-fit" in codes["t = 3.8, p < 0.001, 95% CI [0.9, 2.9]"]  # (1.9 / 0.9 is about 2.1)
+    assert "ci-excludes-estimate" in codes["t = 3.0, p = 0.003, 95% CI [4.3, 6.2]"]
+    assert "ci-p-disagree" in codes["t = -1.6, p = 0.011, 95% CI [-5.3, 0.6]"], codes
