@@ -1467,3 +1467,50 @@ def test_a_coefficient_with_its_interval_in_one_cell_beside_a_t(tmp_path):
     assert "coefficient-does-not-fit" in codes["t = 3.8, p < 0.001, 95% CI [0.9, 2.9]"]  # (1.9 / 0.9 is about 2.1)
     assert "ci-excludes-estimate" in codes["t = 3.0, p = 0.003, 95% CI [4.3, 6.2]"]
     assert "ci-p-disagree" in codes["t = -1.6, p = 0.011, 95% CI [-5.3, 0.6]"], codes
+
+
+def test_a_regression_steps_r_squared_change_and_f_change_in_prose():
+    """A hierarchical regression's step as authors type it: "ΔR² = .002, F(1, 330) = 2.20, p = .139" (the R² change just
+    before its F, or after it; "R² change", "R squared change"; the F as "F change", as SPSS names it). The change had not
+    been read (nor "F change" at all); now ΔR² is checked against the F: ΔR² = F·df₁·(1 − R²)/df₂, so with the model's
+    R² it is fixed, and without it at most F·df₁/(F·df₁ + df₂) (R² ≥ ΔR²). Numbers: statsmodels' OLS of pingouin's
+    penguins, body mass on flipper length, then bill depth added (anova_lm: F(1, 330) = 2.198, p = .139; ΔR² = .0016,
+    R² = .764); the wrong changes are mutations of ours."""
+    import pingouin as pg
+    import statsmodels.api as sm
+    import statsmodels.formula.api as smf
+
+    data = pg.read_dataset("penguins").dropna()
+    first, second = (smf.ols(f, data).fit() for f in ("body_mass_g ~ flipper_length_mm", "body_mass_g ~ flipper_length_mm + bill_depth_mm"))
+    compared = sm.stats.anova_lm(first, second)
+    f, p, change = compared.F.iloc[1], compared["Pr(>F)"].iloc[1], second.rsquared - first.rsquared
+    assert f"{f:.2f} {p:.3f} {change:.3f} {second.rsquared:.3f}" == "2.20 0.139 0.002 0.764"
+    for typed, wrong in ((f"Bill depth added little, ΔR² = {change:.3f}, F(1, 330) = {f:.2f}, p = {p:.3f}.".replace("0.", "."), False),
+                         (f"Bill depth added little, ΔR² = .020, F(1, 330) = {f:.2f}, p = .139.", True),
+                         (f"Bill depth added little, F change (1, 330) = {f:.2f}, p = .139, R² change = .002, R² = .764.", False),
+                         (f"Bill depth added little, F change (1, 330) = {f:.2f}, p = .139, R squared change = .020, R² = .764.", True)):
+        found = audit_units([Unit("c", typed)])
+        head = next(e for e in found if "F" in e.found)
+        assert head.found.startswith(("F(1, 330) = 2.20", "F change (1, 330) = 2.20")) and not _p_findings(head), (typed, head.found)
+        assert ("effect-does-not-fit" in head.codes) is wrong and "spacing" not in head.codes, (typed, head.codes)
+
+
+# A student's write-up of an SPSS hierarchical regression, as posted (https://www.scribd.com/document/829277965/write-up-with-tables)
+_WRITE_UP = ("This additional variable did not explain any additional variance in NF test scores after controlling for age and gender, "
+             "R squared change = .00, F change (1, 147) = .42, p = .52. In the final model, only two predictor variables were statistically "
+             "significant with the age recording a higher semi-partial correlation value (sr = -.24, p < .00) than gender (sr = .23, p < .00).")
+
+
+def test_each_p_without_a_head_is_its_own_and_p_below_zero_is_a_zero():
+    """Two p's without a head in one sentence ("(sr = -.24, p < .00) than gender (sr = .23, p < .00)"): the second had been
+    swallowed by the first's reach (240 characters) and never checked — a "p = .000" there went unseen. Each is now read.
+    "p < .00" (SPSS's .000 typed as a bound) is a zero p, as "p = .000" is (it had been taken for a threshold), and bounds
+    p below half its last digit. Real: the write-up above; its F change's p by scipy (.518)."""
+    assert f"{stats.f.sf(0.42, 1, 147):.2f}" == "0.52"
+    found = audit_units([Unit("c", _WRITE_UP)])
+    assert [e.found for e in found] == ["R squared change = .00", "F change (1, 147) = .42, p = .52", "p < .00", "p < .00"], [e.found for e in found]
+    assert found[2].codes == found[3].codes == ["p-zero"] and not _p_findings(found[1])
+    (e,) = audit_units([Unit("c", "Scores differed, t(38) = 4.10, p < .00.")])  # (p = .0002 on 38 df: below .005, as ".00" says)
+    assert e.codes == ["p-zero"], e.codes
+    two = audit_units([Unit("c", "Age mattered (p = .001, d = 0.52) more than sex (p = .004, d = 0.30).")])
+    assert [e.found for e in two] == ["p = .001, d = 0.52", "p = .004, d = 0.30"]

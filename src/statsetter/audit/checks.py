@@ -45,7 +45,7 @@ CODES: dict[str, tuple[str, str]] = {
     "missing-leading-zero": ("no leading zero on a quantity that can exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
     "decimals": ("decimals other than the style's", "Numbers: decimals (APA 7 §6.36)"),
     "p-threshold": ("p given as a threshold instead of exactly", "Numbers: exact p (APA 7 §6.36)"),
-    "p-zero": ("p = .000; a p value is never zero", "Numbers: never p = .000 (APA 7 §6.36)"),
+    "p-zero": ("p = .000 or p < .00; a p value is never zero", "Numbers: never p = .000 (APA 7 §6.36)"),
     "p-symbol": ("p in the other case than the style's (APA 7 writes p, AMA 11 writes P)",
                  "Statistics in text: the p symbol (APA 7 §6.45, lowercase italic p; AMA 11 §19.5, capital P — memory)"),
     "spacing": ("no space around an operator, or df spaced otherwise than F(1, 56)", "Statistics in text: spaces around = < > (APA 7 §6.45); df as in its examples, F(1, 56)"),
@@ -224,7 +224,7 @@ def reported_p_range(rep: Reported, alpha: float) -> tuple[float, float] | None:
     if p.op == "=":
         return max(v - h, 0.0), v + h
     if p.op in ("<", "≤"):
-        return 0.0, v
+        return 0.0, v if v > 0 else h  # ("p < .00", a software's zero: below half its last digit)
     return v, 1.0
 
 
@@ -512,12 +512,12 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
     if p is not None:
         floor = style.p.get("floor", 0) or 0
         ceiling = style.p.get("ceiling", 0) or 0
-        if p.op == "ns" or (p.op in ("<", "≤") and not (floor and math.isclose(p.number.value, floor))) or (  # type: ignore[union-attr]
+        if p.op in ("=", "<", "≤") and p.number is not None and p.number.value == 0:  # "p = .000", "p < .00" (a software's zero)
+            out.append(Finding("p-zero", f"A p value is never zero; write p < {num.p(0.0, alpha)[1]}.", text[p.start : p.end]))
+        elif p.op == "ns" or (p.op in ("<", "≤") and not (floor and math.isclose(p.number.value, floor))) or (  # type: ignore[union-attr]
             p.op in (">", "≥") and not (ceiling and math.isclose(p.number.value, ceiling))  # type: ignore[union-attr]
         ):
             out.append(Finding("p-threshold", "Report the exact p (thresholds only below the style's smallest p).", text[p.start : p.end]))
-        elif p.op == "=" and p.number is not None and p.number.value == 0:
-            out.append(Finding("p-zero", f"A p value is never zero; write p < {num.p(0.0, alpha)[1]}.", text[p.start : p.end]))
         letter = _p_letter(style)
         if p.symbol_text in ("p", "P") and p.symbol_text != letter and letter in ("p", "P"):
             out.append(Finding("p-symbol", f"Write the p value's symbol as {letter}, as the style does.", text[p.start : p.end]))
@@ -538,12 +538,15 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
 
 def _df_spacing(rep: Reported, text: str) -> str:
     """The head's symbol and df as typed when they are spaced otherwise than "F(1, 56)": a space before the
-    parenthesis ("F (1, 56)") or none after a comma between df ("F(1,56)") (APA 7's examples; practice); "" if not."""
+    parenthesis ("F (1, 56)") or none after a comma between df ("F(1,56)") (APA 7's examples; practice); "" if not.
+    A head of words ("F change (1, 147)") may have its space."""
     if not rep.df or rep.symbol_start < 0:
         return ""
     gap = text[rep.symbol_start + len(rep.symbol_text) : rep.df[0].start]
     if gap.strip() not in ("(", "["):  # df typed otherwise (subscripts, "F2, 97"): not this check's to judge
         return ""
+    if " " in rep.symbol_text or "-" in rep.symbol_text:
+        gap = gap.lstrip()
     last = rep.n if rep.n is not None and rep.n.start > rep.df[-1].end else rep.df[-1]
     commas = [text[a.end : b.start] for a, b in zip(rep.df, rep.df[1:])]
     if last is rep.n:  # "χ2(1,N = 80)"
@@ -755,15 +758,18 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
     if rep.symbol == "F" and len(rep.df) == 2 and all(d.value > 0 for d in rep.df) and (whole or _sphericity_corrected(rep)):
         (l1, h1), (l2, h2) = (_df_range(d) for d in rep.df)
         bound = (low * l1 / (low * l1 + h2), high * h1 / (high * h1 + l2))
+        r2 = next((e for e in rep.effects if e.name == "R2"), None)
         for e in rep.effects:
             shown = (e.number.value - e.number.half_unit, e.number.value + e.number.half_unit)
-            if (e.name == "eta2_p" and not _overlap(bound, shown)) or (e.name in ("eta2", "eta2_g") and shown[0] > bound[1] + 1e-12):
+            # (a step's ΔR² without the model's R²: ΔR² = F·df₁·(1 − R²)/df₂ with R² ≥ ΔR², so at most F·df₁/(F·df₁ + df₂))
+            capped = e.name in ("eta2", "eta2_g") or (e.name == "delta_R2" and r2 is None and whole)
+            if (e.name == "eta2_p" and not _overlap(bound, shown)) or (capped and shown[0] > bound[1] + 1e-12):
                 relation = ("F·df₁/(F·df₁ + df₂) gives" if e.name == "eta2_p" else
+                            "ΔR² = F·df₁·(1 − R²)/df₂ with R² at least ΔR² is at most F·df₁/(F·df₁ + df₂), here" if e.name == "delta_R2" else
                             f"{'η²' if e.name == 'eta2' else 'generalized η²'} cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at")
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {bound[0]:.3f} to {bound[1]:.3f}.", f"{e.symbol_text} = {e.number.text}"))
         change = next((e for e in rep.effects if e.name == "delta_R2"), None)
-        r2 = next((e for e in rep.effects if e.name == "R2"), None)
         if change is not None and r2 is not None and whole:  # a regression step's F change: (ΔR²/df₁)/((1 − R²)/df₂)
             d_low, d_high = max(change.number.value - change.number.half_unit, 0.0), change.number.value + change.number.half_unit
             r_low, r_high = r2.number.value - r2.number.half_unit, r2.number.value + r2.number.half_unit

@@ -112,6 +112,8 @@ class Reported:
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
 def symbol_of(text: str) -> str | None:
     t = text.replace(" ", "").removesuffix("-statistic").removesuffix("-value").removesuffix("value")  # "t-value", R's "t value"
+    if t.startswith("F") and t.lower().endswith("change"):  # "F change", "F-change": a regression step's F, as SPSS names it
+        return "F"
     low = t.lower()
     if low.startswith(("χ", "chi")) or low in ("x2", "x²", "x^2", "x-squared", "xsquared", "wald"):  # X-squared: as R prints χ²
         return "chi2"
@@ -150,7 +152,7 @@ _SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:
             # name them), and a logistic coefficient's Wald χ²
             # as SPSS names it ("Wald = 6.13"; "Wald χ²(1)" is read at its χ²): optional tails of one alternative each, so that
             # the engine tries no more alternatives at every "t" of the prose
-            r"t(?:-statistic|[- ]value|s)?", r"F(?:-statistic|[- ]value|s)?", "r", r"z(?:-statistic|[- ]value)?", r"Z(?:[- ]value)?", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
+            r"t(?:-statistic|[- ]value|s)?", r"F(?:-statistic|[- ]value|s|[- ]?[Cc]hange(?![a-z]))?", "r", r"z(?:-statistic|[- ]value)?", r"Z(?:[- ]value)?", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
 
 
 def _guarded(alternatives: "Iterable[str]", before: str) -> str:
@@ -180,7 +182,9 @@ _EFFECT_NAMES = [
     (r"Cram[ée]r'?s\s+V|V(?<![\w]V)", "V"),
     (r"φ|p(?<![\w]p)hi", "phi"),
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
-    (r"R(?<![\w]R)\s?(?:[²2]|\^2)", "R2"),
+    # a regression step's change in R²: "ΔR²", "R² change", "R squared change" (SPSS's "R Square Change"), "R-squared change"
+    (r"[Δ∆]\s?R\s?(?:[²2]|\^2)|R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared?|\s[Ss]quare)\s?[Cc]hange", "delta_R2"),
+    (r"R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared)", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
@@ -732,7 +736,9 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
         if rep.p is not None or rep.effects or rep.descriptives:
             rep.text = text[rep.start : rep.end]
             out.append(rep)
-        start = again if again is not None else stop
+            start = again if again is not None else max(rep.end, at + 1)  # (what it did not read may start a cluster of its own)
+        else:
+            start = again if again is not None else stop
     return out
 
 
@@ -850,6 +856,9 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
             continue
         if kind == "p" and rep.p is None:
             rep.p = _p_value(pat, m)
+        elif kind == "p" and rep.symbol is None:  # a second p: a statistic without a head ends before it ("(p = .001) … (p = .004, d = 0.30)")
+            again = at
+            break
         elif kind == "ci":
             ci = _interval(pat, m, text)
             if ci is None:

@@ -398,6 +398,9 @@ _BETA = re.compile(r"β|\bbeta\b")  # a standardized coefficient named beside a 
 _ONE_SIDED_SAID = re.compile(r"(?i)(?:one|(?<![\d.])1)[- ]?(?:tailed|sided)|directional")
 
 
+_STEP_BETWEEN = re.compile(r"[\s,;]*(?:and\s+)?")  # between a step's ΔR² and its F ("ΔR² = .05, F(1, 96) = 5.32")
+
+
 def _one_sided_said(text: str, rep: Reported) -> "re.Match[str] | None":
     """Where the text around a statistic says its test was one-tailed (the 120 characters before it to 40 after)."""
     return _ONE_SIDED_SAID.search(text, max(0, rep.start - 120), min(len(text), rep.end + 40))
@@ -436,6 +439,7 @@ def _audit_units(
             where = unit.location if unit.part else f"line {unit.index + unit.text.count(chr(10), 0, long.start())}"
             warnings.warn(f"{where}: a number of {len(long.group()):,} digits is not read as a statistic", stacklevel=2)
     current: Unit | None = None
+    step: "tuple[Unit | None, int, list]" = (None, 0, [])  # the last R² change read without a head: its unit, its end, the effects
     named_in: "tuple[str | None, re.Match[str] | None]" = (None, None)  # the procedure a context names, for the last context asked
     for item in _items(units, mark):
         unit, rep, local = item.unit, item.rep, item.local
@@ -469,8 +473,12 @@ def _audit_units(
             disagree = ci_p_agreement(rep, alpha)
             if disagree and _one_sided_said(unit.text, rep) is None:  # a one-tailed p: no disagreement
                 findings += disagree
-        if rep.symbol in ("F", "chi2") and rep.effects:
+        if rep.symbol == "F" and local is not None and step[0] is unit and _STEP_BETWEEN.fullmatch(unit.text, step[1], rep.start):
+            findings += effect_from_f_or_chi2(replace(rep, effects=rep.effects + step[2]))  # "ΔR² = .05, F(1, 96) = 5.32"
+        elif rep.symbol in ("F", "chi2") and rep.effects:
             findings += effect_from_f_or_chi2(rep)
+        if local is not None and rep.symbol is None and rep.p is None and rep.effects and all(e.name in ("delta_R2", "R2") for e in rep.effects):
+            step = (unit, rep.end, rep.effects)  # a regression step's R² change just before its F: the F's (checked with it)
         if rep.symbol == "F":
             findings += corrected_df(rep)
         if grim_items:
