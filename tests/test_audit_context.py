@@ -1514,3 +1514,56 @@ def test_each_p_without_a_head_is_its_own_and_p_below_zero_is_a_zero():
     assert e.codes == ["p-zero"], e.codes
     two = audit_units([Unit("c", "Age mattered (p = .001, d = 0.52) more than sex (p = .004, d = 0.30).")])
     assert [e.found for e in two] == ["p = .001, d = 0.52", "p = .004, d = 0.30"]
+
+
+def test_a_coefficient_given_with_its_se_or_interval_and_p_but_no_test():
+    """"b = 50.15, SE = 1.54, 95% CI [47.12, 53.18], p < .001" (a coefficient with its p and no t, as many results
+    sections type it; practice): the p had been read alone. It is now checked with the B, SE and interval typed before it
+    — the interval holding the B and agreeing with the p, the p following from B / SE under some df — and a note says so.
+    Numbers: statsmodels' OLS of pingouin's penguins (body mass on flipper length); the slips are mutations of ours."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    fit = smf.ols("body_mass_g ~ flipper_length_mm", pg.read_dataset("penguins").dropna()).fit()
+    b, se, (lo, hi) = fit.params.iloc[1], fit.bse.iloc[1], fit.conf_int().iloc[1]
+    typed = f"b = {b:.2f}, SE = {se:.2f}, 95% CI [{lo:.2f}, {hi:.2f}], p < .001"
+    assert typed == "b = 50.15, SE = 1.54, 95% CI [47.12, 53.18], p < .001", typed
+    (e,) = audit_units([Unit("c", f"Flipper length predicted body mass ({typed}).")])
+    assert e.found == "p < .001" and e.codes == [] and "B = 50.15, SE = 1.54, 95% CI [47.12, 53.18]" in e.notes[0]
+    for wrong, code in (("b = 50.15, SE = 1.54, 95% CI [47.12, 53.18], p = .30", {"coefficient-does-not-fit", "ci-p-disagree"}),
+                        ("b = 50.15, 95% CI [-7.12, 53.18], p < .001", {"ci-p-disagree"}),
+                        ("b = 58.15, 95% CI [47.12, 53.18], p < .001", {"ci-excludes-estimate"}),
+                        ("Group B = 50.15 in the first wave; p = .30", set())):  # (words between: not the p's coefficient)
+        (e,) = audit_units([Unit("c", f"Flipper length predicted body mass ({wrong}).")])
+        assert set(e.codes) == code, (wrong, e.codes)
+
+
+# Published coefficient tables laid out as their journals print them (PLOS ONE 2018;13(12):e0207851, Table 3,
+# https://pmc.ncbi.nlm.nih.gov/articles/PMC6277119/table/pone.0207851.t003; a 2022 regression of oral-health quality of
+# life, Table 6, https://pmc.ncbi.nlm.nih.gov/articles/PMC9362804/table/T6): heads such as "Estimated Regression
+# Coefficient", "z Value", "p Value", "95% C.I. of Odds Ratio" and "95% CI of B (lower–upper)" over "−1.62-1.33"
+_PONE_TABLE_3 = [["Covariate", "Estimated Regression Coefficient", "Estimated Standard Error", "z Value", "p Value", "Estimated Odds Ratio", "95% C.I. of Odds Ratio"],
+                 ["Intercept", "30.069", "9.211", "3.26", "0.0011", "", ""],
+                 ["MoCA score (0, 1, …, 30)", "-0.817", "0.240", "-3.40", "0.0007", "0.4416", "0.276–0.707"],
+                 ["Calculation score of the MMSE (0, 1, …, 5)", "-1.986", "0.953", "-2.08", "0.0371", "0.1372", "0.021–0.888"]]
+_OHRQOL_TABLE_6 = [["Predictors of OHRQoL", "B", "SE", "β", "t", "95% CI of B (lower–upper)", "P*"],
+                   ["Oral hygiene status", "−0.15", "0.75", "−0.01", "−0.19", "−1.62-1.33", "0.85"],
+                   ["Plaque level", "−1.51", "0.86", "−0.09", "−1.76", "−3.19-0.17", "0.08"],
+                   ["Probing depth (mm)", "1.16", "0.37", "0.13", "3.09", "0.42-1.89", "0.002"]]
+
+
+def test_published_coefficient_tables_with_worded_heads_and_hyphenated_intervals(tmp_path):
+    """Each table's statistics are read whole (z or t with its B and SE, the odds ratio and its interval, the B's interval
+    after a β column when the head says "of B") and found consistent; a mutated limit and a mutated odds ratio are
+    flagged. "z Value" and "p Value" (a capital V) had not been heads at all."""
+    found = audit_file(_doc(tmp_path / "o.docx", tables=[("Table 3. Multiple logistic regression", _PONE_TABLE_3)]))
+    assert [e.found for e in found] == ["z = 3.26, p = 0.0011", "z = -3.40, p = 0.0007, Estimated Odds Ratio = 0.4416, 95% CI [0.276, 0.707]",
+                                        "z = -2.08, p = 0.0371, Estimated Odds Ratio = 0.1372, 95% CI [0.021, 0.888]"] and all(not e.codes for e in found)
+    found = audit_file(_doc(tmp_path / "q.docx", tables=[("Table 6. Multiple linear regression", _OHRQOL_TABLE_6)]))
+    assert [e.found for e in found][2] == "t = 3.09, p = 0.002, 95% CI [0.42, 1.89]" and all(not e.codes for e in found), [(e.found, e.codes) for e in found]
+    rows = [r[:] for r in _OHRQOL_TABLE_6]
+    rows[3][5] = "1.42-1.89"  # the B, 1.16, outside
+    assert "ci-excludes-estimate" in audit_file(_doc(tmp_path / "q2.docx", tables=[("Table 6. Multiple linear regression", rows)]))[2].codes
+    rows = [r[:] for r in _PONE_TABLE_3]
+    rows[2][5] = "0.5416"  # exp(−0.817) = 0.442
+    assert "coefficient-does-not-fit" in audit_file(_doc(tmp_path / "o2.docx", tables=[("Table 3. Multiple logistic regression", rows)]))[1].codes

@@ -260,6 +260,10 @@ class _Patterns:
         # the unstandardised coefficient as "B" or "b", its standard error as "SE", "SE B" or "SEB"
         self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+[=¼]\s*+(?P<num>{num})")  # (not the B of "SE B")
         self.coef_se = re.compile(rf"S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<num>{num})")
+        # what may stand between a coefficient given without a test and its p: its SE and its interval ("b = 0.42, SE =
+        # 0.10, 95% CI [0.22, 0.62], p < .001"), each set off by a comma or semicolon
+        self.coef_lead = re.compile(rf"\s*+[,;]\s*+(?:S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<se>{num})\s*+[,;]\s*+)?"
+                                    rf"(?:(?P<ci>\d{{2}}(?:[.,]\d+)?\s*+%\s*+(?:CI|C\.I\.)[^,;\[(]{{0,3}}[\[(][^\])]{{1,40}}[\])])\s*+[,;]\s*+)?")
         self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+[=¼]\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
         # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan)
@@ -652,6 +656,34 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     if found["B"] is None or found["SE"] is None:
         return None
     return found["B"], found["SE"]
+
+
+def coefficient_lead(text: str, rep: Reported, since: int, decimal_mark: str = ".") -> "tuple[Number, Number | None, Interval | None] | None":
+    """The B (or b) a p without a head closes, with the SE and interval typed between them: "b = 0.42, SE = 0.10, 95% CI
+    [0.22, 0.62], p < .001" gives (0.42, 0.10, [0.22, 0.62]); only a comma or semicolon between the parts, within the
+    sentence after ``since`` (the end of the statistic before). None otherwise."""
+    p = rep.p
+    if p is None or rep.symbol is not None or rep.effects or rep.descriptives or (text.find("B", since, p.start) < 0 and text.find("b", since, p.start) < 0):
+        return None
+    pat = _patterns(decimal_mark)
+    start = _sentence_start(pat, text, since, p.start)
+    found = None
+    for m in pat.coef_b.finditer(text, start, p.start):
+        found = m
+    if found is None:
+        return None
+    between = pat.coef_lead.fullmatch(text, found.end(), p.start)
+    estimate = pat.to_number(found.group("num"), found.start("num"))
+    if between is None or estimate is None:
+        return None
+    se = pat.to_number(between.group("se"), between.start("se")) if between.group("se") else None
+    interval = None
+    if between.group("ci"):
+        ci = pat.ci.match(text, between.start("ci"), between.end("ci"))
+        interval = _interval(pat, ci, text) if ci is not None and ci.end() == between.end("ci") else None
+        if interval is None:
+            return None
+    return (estimate, se, interval) if se is not None or interval is not None else None
 
 
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥¼n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)

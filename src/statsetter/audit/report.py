@@ -24,7 +24,7 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
-from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
+from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -455,6 +455,10 @@ def _audit_units(
                     not _BETA.search(unit.text, previous_end, local.start):
                 rep.estimate = before[0]  # "b = 0.42, SE = 0.10, t(196) = 4.20, p < .001, 95% CI [0.22, 0.62]": the interval is b's
                 # (with a β beside the b, whose interval it is is not said: neither is checked)
+        lead = coefficient_lead(unit.text, local, previous_end, mark) if local is not None and local.symbol is None and local.p is not None else None
+        if lead is not None:  # "b = 0.42, SE = 0.10, 95% CI [0.22, 0.62], p < .001": the p's B, SE and interval, checked with it
+            estimate, se, interval = lead
+            rep = replace(rep, ci=interval, estimate=estimate) if interval is not None else rep
         findings = impossible(rep) + consistent
         if local is not None:
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)
@@ -467,6 +471,8 @@ def _audit_units(
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
         if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns (its p, where no test is given)
             findings += coefficient_ratio(rep, item.coefficient) + coefficient_p(rep, item.coefficient, alpha)
+        if lead is not None and lead[1] is not None:
+            findings += coefficient_p(rep, lead[:2], alpha)
         if local is None and rep.symbol == "t" and rep.effects:  # a table row's t with its d (d_z where the table says one sample)
             findings += effect_from_t(rep)
         if (rep.ci is not None or rep.effects) and rep.p is not None:
@@ -498,6 +504,9 @@ def _audit_units(
             last = unit.source_index(rep.end - 1) + 1
             location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
         notes: list[str] = [f"Read from a table: {item.how.removeprefix('read from the table' + chr(39) + 's row: ')}."] if item.how else []
+        if lead is not None:
+            notes.append(f"Checked with the B typed before it (B = {lead[0].text}" + (f", SE = {lead[1].text}" if lead[1] is not None else "")
+                         + (f", {lead[2].level * 100:g}% CI [{lead[2].low.text}, {lead[2].high.text}]" if lead[2] is not None else "") + ").")
         if any(f.code == "p-does-not-follow" for f in findings) and _above_unadjusted(rep, alpha):
             if item.context is not named_in[0]:  # a table's items share their context: searched once, not once an item
                 named_in = (item.context, _PROCEDURE.search(item.context))

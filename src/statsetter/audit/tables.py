@@ -27,7 +27,9 @@ if TYPE_CHECKING:
 __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "sizes_in", "caption_sizes", "Reading"]
 
 # an interval's head: "95% CI", "95% confidence interval", "CI (95%)", "Bootstrapped 95% CI", "CI"
-_INTERVAL_HEAD = r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|confidence\s+interval)|(?:CI|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)"
+_INTERVAL_HEAD = (r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|C\.I\.?|confidence\s+interval)|(?:CI|C\.I\.?|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)")
+# its limits named after it: "95% CI of B (lower–upper)", "95% CI (LL, UL)"
+_LIMITS_NAMED = r"(?:\s*\(\s*(?:lower|LL)\s*(?:[–—,/-]|to)\s*(?:upper|UL)\s*\))?"
 _FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d])$")
 _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
@@ -42,12 +44,12 @@ _ROLES = (
     (re.compile(rf"(?i)(?:(?:un)?standardi[sz]ed\s+|regression\s+)?(?:b|β|beta|estimates?|coef\.?|coefficients?|(?:β|beta)\s+coefficients?"
                 rf"|mean\s+diff(?:erence|\.)?|MD)\s*[(\[]\s*{_INTERVAL_HEAD}\s*[)\]]"), "BCI"),
     # an interval in one column, "−7.48, −4.53" or "[0.15, 0.31]" under "95% CI" (of the nearest estimate to its left)
-    (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|the\s+(?:mean\s+)?difference|the\s+estimate))?"), "ci"),
+    (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|odds\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
     (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:\s+coefficients?)?"), "beta"),
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
     # and statsmodels': Coef., Std. Err., coef, std err)
-    (re.compile(r"B|b|(?i:estimates?|coef\.?|coefficients?)"), "B"),
+    (re.compile(r"B|b|(?i:(?:estimated\s+)?(?:regression\s+)?(?:estimates?|coef\.?|coefficients?))"), "B"),
     # the limits of an estimate's interval in two columns: SPSS's "Lower" and "Upper" under "95% Confidence Interval of the
     # Difference", statsmodels' "[0.025" and "0.975]", R's confint "2.5 %" and "97.5 %" (the level: _interval_cells)
     # (also with the interval named before them, as one header row gives both: "95% CI: LL", "95% CI for OR: LL")
@@ -56,11 +58,11 @@ _ROLES = (
     # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
-    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|standard\s+errors?"), "SE"),
-    (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR"), "expB"),
+    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|(?:estimated\s+)?standard\s+errors?"), "SE"),
+    (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR|(?:estimated\s+)?odds\s+ratio"), "expB"),
     (re.compile(r"r"), "r"),
-    (re.compile(r"[zZ](?:[- ]?values?)?"), "z"),
-    (re.compile(r"(?:[pP](?:[- ]?values?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\))"), "p"),
+    (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
+    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\))"), "p"),
     # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
     (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|Chi(?:sq)?)\s?\)?"), "p"),
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
@@ -371,7 +373,7 @@ def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> s
 
 _ESTIMATES = {"B", "diff", "expB", "beta", "BSE", "BCI", "effect:eta2_p", "effect:eta2", "effect:d", "effect:d_z", "effect:R2", "effect:delta_R2"}  # what an interval can be of
 _LEVEL_IN_HEAD = {"[.025": 0.95, "[0.025": 0.95, "2.5%": 0.95, "[.005": 0.99, "[0.005": 0.99, ".005": 0.99, "0.005": 0.99, "0.5%": 0.99}
-_FOR_B = re.compile(r"(?i)(?:interval|CI)\s+for\s+B\b")
+_FOR_B = re.compile(r"(?i)(?:interval|CI)\s+(?:for|of)\s+B\b")
 _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 _SIGNED = {".": r"[-−–]?\s?(?:\d+(?:\.\d+)?|\.\d+)", ",": r"[-−–]?\s?(?:\d+(?:,\d+)?|,\d+)"}
 # an interval's two limits in a cell, "−7.48, −4.53", "[0.15, 0.31]", "(−1.38 to −.58)", "0.15–0.31", "− 0.522–4.054",
