@@ -426,7 +426,8 @@ def impossible(rep: Reported) -> list[Finding]:
         elif estimate is not None:
             slack = max(estimate.half_unit, ci.low.half_unit, ci.high.half_unit)
             if not ci.low.value - slack <= estimate.value <= ci.high.value + slack:
-                out.append(Finding("ci-excludes-estimate", f"The CI does not contain {name} = {estimate.text}.", f"[{ci.low.text}, {ci.high.text}]"))
+                shown = f"the estimate, {estimate.text}" if name == "the estimate" else f"{name} = {estimate.text}"
+                out.append(Finding("ci-excludes-estimate", f"The CI does not contain {shown}.", f"[{ci.low.text}, {ci.high.text}]"))
     return out
 
 
@@ -767,8 +768,9 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                 relation = ("F·df₁/(F·df₁ + df₂) gives" if e.name == "eta2_p" else
                             "ΔR² = F·df₁·(1 − R²)/df₂ with R² at least ΔR² is at most F·df₁/(F·df₁ + df₂), here" if e.name == "delta_R2" else
                             f"{'η²' if e.name == 'eta2' else 'generalized η²'} cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at")
+                span = f"{bound[0]:.3f}" if f"{bound[0]:.3f}" == f"{bound[1]:.3f}" else f"{bound[0]:.3f} to {bound[1]:.3f}"
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
-                                   f"{rep.value.text}: {relation} {bound[0]:.3f} to {bound[1]:.3f}.", f"{e.symbol_text} = {e.number.text}"))
+                                   f"{rep.value.text}: {relation} {span}.", f"{e.symbol_text} = {e.number.text}"))
         change = next((e for e in rep.effects if e.name == "delta_R2"), None)
         if change is not None and r2 is not None and whole:  # a regression step's F change: (ΔR²/df₁)/((1 − R²)/df₂)
             d_low, d_high = max(change.number.value - change.number.half_unit, 0.0), change.number.value + change.number.half_unit
@@ -910,6 +912,11 @@ def _odds_fit(rep: Reported, b: Number) -> list[Finding]:
                                                 f"{expected[0]:.4g} to {expected[1]:.4g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}")]
 
 
+def _small(p: float) -> str:
+    """A recomputed p as a message shows it: below .0001 as that bound, else four significant digits."""
+    return "below 0.0001" if p < 1e-4 else f"{p:.4g}"
+
+
 def coefficient_p(rep: Reported, coefficient: "Ratio | None", alpha: float) -> list[Finding]:
     """The p of a coefficient given with its SE and no test (a table without a test column) against B / SE: over every
     df the test may have, from the normal's p (a z, or a t on many df) up to the t's on 1 df, with the printed
@@ -929,7 +936,7 @@ def coefficient_p(rep: Reported, coefficient: "Ratio | None", alpha: float) -> l
     shown = "ns" if rep.p.op == "ns" else f"p {rep.p.op} {rep.p.number.text}"  # type: ignore[union-attr]
     name = "mean difference" if rep.text.startswith("mean difference") else "B"
     return [Finding("coefficient-does-not-fit", f"The p does not follow from {name} / SE under any df: {name} = {b.text} and SE = {se.text} give "
-                                                f"|{name} / SE| from {low:.2f} to {high:.2f}, p from {allowed[0]:.4g} to {allowed[1]:.4g}.",
+                                                f"|{name} / SE| from {low:.2f} to {high:.2f}, p from {_small(allowed[0])} (a z) to {_small(allowed[1])} (a t on 1 df).",
                     f"{name} = {b.text}, SE = {se.text}, {shown}")] + odds
 
 
