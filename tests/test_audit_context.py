@@ -1274,7 +1274,8 @@ def test_a_correlation_matrix_with_one_sample_each_side_of_its_diagonal(tmp_path
 def test_spss_model_summary_f_change_is_read(tmp_path):
     """SPSS's Model Summary of a hierarchical regression ("Change Statistics": R Square Change, F Change, df1, df2,
     Sig. F Change; layout from memory, practice): each step's F change is read with its df1 and df2 and checked against
-    its p, and with its R Square and R Square Change (the heads had not been known). Numbers: statsmodels' OLS of the penguins' body mass, flipper length first,
+    its p, and with its R Square and R Square Change (the heads had not been known), its R and Adjusted R Square with
+    R Square. Numbers: statsmodels' OLS of the penguins' body mass, flipper length first,
     the bill's length and depth added; the F change computed here from the R²s, its p from scipy; the p of .017 and the
     R² change of .020 are mutations of ours."""
     import pingouin as pg
@@ -1294,8 +1295,18 @@ def test_spss_model_summary_f_change_is_read(tmp_path):
     rows = [["", "", "", "", "Change Statistics", "", "", "", ""],
             ["Model", "R", "R Square", "Adjusted R Square", "R Square Change", "F Change", "df1", "df2", "Sig. F Change"], row(1, first, None), row(2, second, first)]
     found = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 21\nModel Summary", rows)]))
-    assert [e.found for e in found] == [f"F(1, 340) = {rows[2][5]}, p = {rows[2][8]}, R² = {rows[2][2]}, ΔR² = {rows[2][4]}",
-                                        f"F(2, 338) = {rows[3][5]}, p = {rows[3][8]}, R² = {rows[3][2]}, ΔR² = {rows[3][4]}"] and all(not e.codes for e in found)
+    assert [e.found for e in found] == [f"F(1, 340) = {rows[2][5]}, p = {rows[2][8]}, R² = {rows[2][2]}, ΔR² = {rows[2][4]}, adjusted R² = {rows[2][3]}, R = {rows[2][1]}",
+                                        f"F(2, 338) = {rows[3][5]}, p = {rows[3][8]}, R² = {rows[3][2]}, ΔR² = {rows[3][4]}, adjusted R² = {rows[3][3]}, R = {rows[3][1]}"] \
+        and all(not e.codes for e in found), [(e.found, e.codes) for e in found]
+    # R is the square root of R², and the adjusted R² is 1 − (1 − R²)(n − 1)/(n − k − 1): at most 1 − (1 − R²)(df₁ + df₂)/df₂
+    # (k at least the step's df₁); statsmodels' rsquared_adj is that formula (checked here for the second model)
+    n, k = second.nobs, second.df_model
+    assert abs(second.rsquared_adj - (1 - (1 - second.rsquared) * (n - 1) / (n - k - 1))) < 1e-12
+    for column, value in ((1, "0.950"), (3, "0.900")):
+        wrong = [r[:] for r in rows]
+        wrong[3][column] = value
+        (_, e) = audit_file(_doc(tmp_path / f"r{column}.docx", tables=[("Table 21\nModel Summary", wrong)]))
+        assert e.codes == ["effect-does-not-fit"] and ("R squared" if column == 1 else "at most") in e.message, (column, e.message)
     wrong = [r[:] for r in rows]
     wrong[3][8] = "0.017"
     assert "p-does-not-follow" in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 21\nModel Summary", wrong)]))[1].codes
@@ -1567,3 +1578,19 @@ def test_published_coefficient_tables_with_worded_heads_and_hyphenated_intervals
     rows = [r[:] for r in _PONE_TABLE_3]
     rows[2][5] = "0.5416"  # exp(−0.817) = 0.442
     assert "coefficient-does-not-fit" in audit_file(_doc(tmp_path / "o2.docx", tables=[("Table 3. Multiple logistic regression", rows)]))[1].codes
+
+
+def test_a_models_r_squared_and_adjusted_r_squared_in_prose():
+    """"R² = .76, adj. R² = .76, F(1, 331) = 1060.30" (a model's fit as results sections give it; practice): the adjusted
+    R² is checked against R² and the F's df (at most 1 − (1 − R²)(df₁ + df₂)/df₂) — "adj." had also ended the sentence
+    for the parser, splitting the two. Numbers: statsmodels' OLS of pingouin's penguins, body mass on flipper length."""
+    import pingouin as pg
+    import statsmodels.formula.api as smf
+
+    fit = smf.ols("body_mass_g ~ flipper_length_mm", pg.read_dataset("penguins").dropna()).fit()
+    typed = f"R² = {fit.rsquared:.2f}, adj. R² = {fit.rsquared_adj:.2f}".replace("0.", ".") + f", F(1, {fit.df_resid:.0f}) = {fit.fvalue:.2f}, p < .001"
+    assert typed == "R² = .76, adj. R² = .76, F(1, 331) = 1060.30, p < .001", typed
+    found = audit_units([Unit("c", f"Flipper length explained body mass well, {typed}.")])
+    assert [e.found for e in found] == ["R² = .76, adj. R² = .76", "F(1, 331) = 1060.30, p < .001"] and all(not e.codes for e in found)
+    found = audit_units([Unit("c", f"Flipper length explained body mass well, {typed.replace('adj. R² = .76', 'adj. R² = .86')}.")])
+    assert found[1].codes == ["effect-does-not-fit"] and "adj. R² = .86 is too large" in found[1].message

@@ -771,6 +771,7 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                 span = f"{bound[0]:.3f}" if f"{bound[0]:.3f}" == f"{bound[1]:.3f}" else f"{bound[0]:.3f} to {bound[1]:.3f}"
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {span}.", f"{e.symbol_text} = {e.number.text}"))
+        out += _r_squared_fits(rep, r2) if r2 is not None and whole else []
         change = next((e for e in rep.effects if e.name == "delta_R2"), None)
         if change is not None and r2 is not None and whole:  # a regression step's F change: (ΔR²/df₁)/((1 − R²)/df₂)
             d_low, d_high = max(change.number.value - change.number.half_unit, 0.0), change.number.value + change.number.half_unit
@@ -788,6 +789,30 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
             if e.name in ("V", "phi") and e.number.value >= 0 and e.number.value + e.number.half_unit < least - 1e-12:
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} is too small for χ²({rep.df[0].text}, N = {rep.n.text}) = "
                                    f"{rep.value.text}: √(χ²/(N·df)) is already {least:.3f}.", f"{e.symbol_text} = {e.number.text}"))
+    return out
+
+
+def _r_squared_fits(rep: Reported, r2: Effect) -> list[Finding]:
+    """A regression's R² against its multiple R (R² = R·R) and its adjusted R² (1 − (1 − R²)(n − 1)/(n − k − 1), with
+    n − k − 1 the F's df₂ and k at least its df₁ — the predictors of this step and any before — so at most
+    1 − (1 − R²)(df₁ + df₂)/df₂), on the printed precision of each."""
+    out = []
+    r_low, r_high = r2.number.value - r2.number.half_unit, r2.number.value + r2.number.half_unit
+    multiple = next((e for e in rep.effects if e.name == "R_multiple"), None)
+    if multiple is not None and 0 <= multiple.number.value <= 1:
+        m_low, m_high = max(multiple.number.value - multiple.number.half_unit, 0.0), multiple.number.value + multiple.number.half_unit
+        if not _overlap((m_low * m_low, m_high * m_high), (r_low, r_high)):
+            out.append(Finding("effect-does-not-fit", f"{multiple.symbol_text} = {multiple.number.text} and {r2.symbol_text} = {r2.number.text} disagree: "
+                                                      f"R² is R squared, {m_low * m_low:.3f} to {m_high * m_high:.3f}.",
+                               f"{multiple.symbol_text} = {multiple.number.text}, {r2.symbol_text} = {r2.number.text}"))
+    adjusted = next((e for e in rep.effects if e.name == "R2_adj"), None)
+    df1, df2 = rep.df[0].value, rep.df[1].value
+    if adjusted is not None and df2 > 0 and r_high < 1:
+        most = 1 - (1 - r_high) * (df1 + df2) / df2
+        if adjusted.number.value - adjusted.number.half_unit > most + 1e-12:
+            out.append(Finding("effect-does-not-fit", f"{adjusted.symbol_text} = {adjusted.number.text} is too large for {r2.symbol_text} = {r2.number.text} "
+                                                      f"and F({rep.df[0].text}, {rep.df[1].text}): 1 − (1 − R²)(n − 1)/(n − k − 1), with n − k − 1 = df₂ and "
+                                                      f"k at least df₁, is at most {most:.3f}.", f"{adjusted.symbol_text} = {adjusted.number.text}, {r2.symbol_text} = {r2.number.text}"))
     return out
 
 

@@ -266,8 +266,8 @@ class _Patterns:
                                     rf"(?:(?P<ci>\d{{2}}(?:[.,]\d+)?\s*+%\s*+(?:CI|C\.I\.)[^,;\[(]{{0,3}}[\[(][^\])]{{1,40}}[\])])\s*+[,;]\s*+)?")
         self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+[=¼]\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
-        # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan)
-        prose = r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
+        # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan; "adj. R²" is no end)
+        prose = r"\.(?<=[^\d\s]\.)(?<![aA]dj\.)(?=\s+[A-Z(])|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
         self.boundary = re.compile(prose + r"|[ \t\n](?<=\\\\[ \t\n])(?:(?<=\n)|[ \t]*\n)")
         # without a LaTeX row's end, for a text without "\\" (where it cannot match): its first characters are then "."
         # and a newline only, not every space (see boundary_in)

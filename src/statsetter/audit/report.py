@@ -62,7 +62,7 @@ class Entry:
 
     @property
     def codes(self) -> list[str]:
-        return [f.code for f in self.findings]
+        return list(dict.fromkeys(f.code for f in self.findings))  # (two findings of one kind: the code once)
 
     @property
     def severity(self) -> str:
@@ -485,7 +485,7 @@ def _audit_units(
             findings += effect_from_f_or_chi2(replace(rep, effects=rep.effects + step[2]))  # "ΔR² = .05, F(1, 96) = 5.32"
         elif rep.symbol in ("F", "chi2") and rep.effects:
             findings += effect_from_f_or_chi2(rep)
-        if local is not None and rep.symbol is None and rep.p is None and rep.effects and all(e.name in ("delta_R2", "R2") for e in rep.effects):
+        if local is not None and rep.symbol is None and rep.p is None and rep.effects and all(e.name in ("delta_R2", "R2", "R2_adj") for e in rep.effects):
             step = (unit, rep.end, rep.effects)  # a regression step's R² change just before its F: the F's (checked with it)
         if rep.symbol == "F":
             findings += corrected_df(rep)

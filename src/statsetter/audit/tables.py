@@ -76,6 +76,9 @@ _ROLES = (
     # (ΔR²/df₁)/((1 − R²)/df₂)
     (re.compile(r"(?i)R[\s-]?(?:square|[²2])\s+change|(?:Δ|∆|delta\s*)\s?R[\s-]?(?:square|[²2])"), "effect:delta_R2"),
     (re.compile(r"(?i)R[\s-]?(?:square|[²2])"), "effect:R2"),
+    # and its adjusted R² and multiple R (SPSS's "Adjusted R Square" and "R"): checked against R² and the F's df
+    (re.compile(r"(?i)adj(?:usted|\.)?\s*R[\s-]?(?:square|[²2])"), "effect:R2_adj"),
+    (re.compile(r"R|(?i:multiple\s+R)"), "effect:R_multiple"),
     # a t's Cohen's d: checked as t/√(df + 1) where the head names it d_z, or the caption or note says the test is a
     # one-sample test (one SD: no other d); a paired test's "Cohen's d" may be d_z or d_av (pingouin's), and is not checked
     (re.compile(r"(?i)(?:cohen'?s\s+)?d_?z"), "effect:d_z"),
@@ -551,7 +554,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
     return out
 
 
-_SHOWN = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²"}  # an effect column's symbol in a reading
+_SHOWN = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²", "R2_adj": "adjusted R²", "R_multiple": "R"}  # an effect column's symbol in a reading
 _ONE_SAMPLE = re.compile(r"(?i)\bone[- ]sample")  # a one-sample t test: its d is the mean over the one SD, t/√n
 
 
@@ -708,7 +711,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             coefficient, effects = _coefficient_cells(row, roles, numbers, mark, heads) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role in ("wald", "z") else []  # (a linear model's row has no odds ratio; a logistic one's z has)
             if role in ("F", "t"):
-                effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2", "R2", "delta_R2") if role == "F" else ("d", "d_z"),
+                effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2", "R2", "delta_R2", "R2_adj", "R_multiple") if role == "F" else ("d", "d_z"),
                                         _ONE_SAMPLE.search(said) is not None)
                 how += "".join(f", the {e.symbol_text} column" for e in effects)
             if coefficient is not None:
