@@ -1594,3 +1594,31 @@ def test_a_models_r_squared_and_adjusted_r_squared_in_prose():
     assert [e.found for e in found] == ["R² = .76, adj. R² = .76", "F(1, 331) = 1060.30, p < .001"] and all(not e.codes for e in found)
     found = audit_units([Unit("c", f"Flipper length explained body mass well, {typed.replace('adj. R² = .76', 'adj. R² = .86')}.")])
     assert found[1].codes == ["effect-does-not-fit"] and "adj. R² = .86 is too large" in found[1].message
+
+
+# JASP's published example of a two-way ANOVA with partial ω² and its interval (Discover JASP repository, Davey et al.'s
+# data; https://discoverjasp.com/repository/dsj1_leni/leni_13), as its table prints it
+_JASP_OMEGA = [["Cases", "Sum of Squares", "df", "Mean Square", "F", "p", "ω²ₚ", "Lower", "Upper"],
+               ["mood", "34.133", "2", "17.067", "0.683", "0.509", "0.000", "0.000", "0.000"],
+               ["stop_rule", "52.267", "1", "52.267", "2.093", "0.154", "0.018", "0.000", "0.139"],
+               ["mood ✻ stop_rule", "316.933", "2", "158.467", "6.345", "0.003", "0.151", "0.009", "0.317"],
+               ["Residuals", "1348.600", "54", "24.974", "", "", "", "", ""]]
+# a thesis's Stroop analyses as typed (https://1library.net/article/stroop-colour-naming-exploring-effect-subliminal-single-multiple.y6l39g4y):
+# its last F's p (.589) and η²p (.012) are those of F(2, 90) = .533 (scipy), not of the F(1,90) typed
+_THESIS_STROOP = ("Prime Type x Prime Content, F(2,90)=1.916, p=.153, MSE=8.272, η2p=.041, and Prime Type x Time x Prime Content, "
+                  "F(1,90)=.533, p=.589, MSE=.871, η2p=.012, were not significant.")
+
+
+def test_partial_omega_squared_and_a_misprinted_df_in_real_reports(tmp_path):
+    """ω², partial ω² (JASP's "ω²ₚ") and ε² are read and can only be smaller than the F's η²p (partial ω² = df₁(F − 1)/
+    (df₁(F − 1) + N), N above df₂); JASP's published table fits, a mutated ω²ₚ does not. A thesis's F typed with one df
+    where its p and η²p are those of two is flagged twice over (p and η²p), as scipy shows."""
+    found = audit_file(_doc(tmp_path / "j.docx", tables=[("Table 1\nANOVA - checks", _JASP_OMEGA)], note="Note. Type III Sum of Squares"))
+    assert [e.found for e in found][2] == "F(2, 54) = 6.345, p = 0.003, ω²p = 0.151" and all(not e.codes for e in found), [(e.found, e.codes) for e in found]
+    rows = [r[:] for r in _JASP_OMEGA]
+    rows[3][6] = "0.351"  # above η²p = 2 × 6.345 / (2 × 6.345 + 54) = .190
+    assert audit_file(_doc(tmp_path / "j2.docx", tables=[("Table 1\nANOVA - checks", rows)], note="Note. Type III Sum of Squares"))[2].codes == ["effect-does-not-fit"]
+    assert f"{stats.f.sf(0.533, 2, 90):.3f} {stats.f.sf(0.533, 1, 90):.3f} {2 * 0.533 / (2 * 0.533 + 90):.3f}" == "0.589 0.467 0.012"
+    first, second = audit_units([Unit("c", _THESIS_STROOP)])
+    assert not first.codes or set(first.codes) <= {"decimals", "spacing"}, first.codes
+    assert {"p-does-not-follow", "effect-does-not-fit"} <= set(second.codes), second.codes

@@ -102,7 +102,7 @@ FORMER_CODES: dict[str, str] = {
     "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
-_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "omega2_p": (-1, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
 RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0
@@ -763,11 +763,11 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
         for e in rep.effects:
             shown = (e.number.value - e.number.half_unit, e.number.value + e.number.half_unit)
             # (a step's ΔR² without the model's R²: ΔR² = F·df₁·(1 − R²)/df₂ with R² ≥ ΔR², so at most F·df₁/(F·df₁ + df₂))
-            capped = e.name in ("eta2", "eta2_g") or (e.name == "delta_R2" and r2 is None and whole)
+            capped = e.name in _BELOW_ETA2_P or (e.name == "delta_R2" and r2 is None and whole)
             if (e.name == "eta2_p" and not _overlap(bound, shown)) or (capped and shown[0] > bound[1] + 1e-12):
                 relation = ("F·df₁/(F·df₁ + df₂) gives" if e.name == "eta2_p" else
                             "ΔR² = F·df₁·(1 − R²)/df₂ with R² at least ΔR² is at most F·df₁/(F·df₁ + df₂), here" if e.name == "delta_R2" else
-                            f"{'η²' if e.name == 'eta2' else 'generalized η²'} cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at")
+                            f"{_BELOW_ETA2_P.get(e.name)} cannot exceed η²p, which F·df₁/(F·df₁ + df₂) puts at")
                 span = f"{bound[0]:.3f}" if f"{bound[0]:.3f}" == f"{bound[1]:.3f}" else f"{bound[0]:.3f} to {bound[1]:.3f}"
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {span}.", f"{e.symbol_text} = {e.number.text}"))
@@ -790,6 +790,12 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} is too small for χ²({rep.df[0].text}, N = {rep.n.text}) = "
                                    f"{rep.value.text}: √(χ²/(N·df)) is already {least:.3f}.", f"{e.symbol_text} = {e.number.text}"))
     return out
+
+
+# the effect sizes of an F that can only be smaller than its η²p: η² (SS over a total that holds the error's), generalized
+# η², and the bias-corrected ω², partial ω² and ε² (their numerators less an error mean square; partial ω²'s denominator
+# has N, above df₂) — definitions; Olejnik & Algina (2003)
+_BELOW_ETA2_P = {"eta2": "η²", "eta2_g": "generalized η²", "omega2": "ω²", "omega2_p": "partial ω²", "epsilon2": "ε²"}
 
 
 def _r_squared_fits(rep: Reported, r2: Effect) -> list[Finding]:

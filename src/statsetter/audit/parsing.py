@@ -175,6 +175,8 @@ _EFFECT_NAMES = [
     # generalized η² (Olejnik & Algina, 2003), as statsetter and R's afex print it: η²G, ηG², η²_G, "generalized η²"
     (r"η\s?(?:[²2]|\^2)\s?_?G(?![A-Za-z])|ηG\s?[²2]|η_G\^?2|eta\s?(?:[²2]|\^2)\s?_?G(?![A-Za-z])|g(?<![\w]g)eneralized\s+(?:η|eta)[\s-]?(?:[²2]|\^2|squared)", "eta2_g"),
     (r"η\s?(?:[²2]|\^2|squared)|eta\s?(?:[²2]|\^2|squared)", "eta2"),
+    # partial ω² (JASP's ω²ₚ): like η²p's typings
+    (r"ω\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|ωp\s?[²2]|ω_p\^?2|omega\s?(?:[²2]|\^2)\s?(?:p|_p)(?![A-Za-z])|p(?<![\w]p)artial\s+(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2_p"),
     (r"ω\s?(?:[²2]|\^2|squared)|omega\s?(?:[²2]|\^2|squared)", "omega2"),
     (r"ε\s?(?:[²2]|\^2|squared)|epsilon\s?(?:[²2]|\^2|squared)", "epsilon2"),
     (r"ε(?!\s?(?:[²2]|\^2|squared))|epsilon(?!\s?(?:[²2]|\^2|squared))", "epsilon"),  # a sphericity correction's ε (GG or HF)

@@ -72,6 +72,8 @@ _ROLES = (
     # an F's effect size in a column of its own (SPSS's "Partial Eta Squared"; "η²p", "ηp²", "η²", "ω²"): checked against the F
     (re.compile(r"(?i)partial\s+(?:eta|η)[\s-]?(?:squared|[²2])|η\s?[²2]\s?p|ηp\s?[²2]|η_p\^?2"), "effect:eta2_p"),
     (re.compile(r"(?i)(?:eta|η)[\s-]?(?:squared|[²2])"), "effect:eta2"),
+    (re.compile(r"(?i)partial\s+(?:omega|ω)[\s-]?(?:squared|[²2])|ω\s?[²2]\s?(?:p|ₚ)|ωp\s?[²2]|ω_p\^?2"), "effect:omega2_p"),  # (JASP's ω²ₚ)
+    (re.compile(r"(?i)(?:omega|ω)[\s-]?(?:squared|[²2])"), "effect:omega2"),
     # a hierarchical regression's steps (SPSS's Model Summary: "R Square", "R Square Change" beside "F Change"): F is
     # (ΔR²/df₁)/((1 − R²)/df₂)
     (re.compile(r"(?i)R[\s-]?(?:square|[²2])\s+change|(?:Δ|∆|delta\s*)\s?R[\s-]?(?:square|[²2])"), "effect:delta_R2"),
@@ -554,7 +556,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
     return out
 
 
-_SHOWN = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²", "R2_adj": "adjusted R²", "R_multiple": "R"}  # an effect column's symbol in a reading
+_SHOWN = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²", "R2_adj": "adjusted R²", "R_multiple": "R", "omega2_p": "ω²p", "omega2": "ω²"}  # an effect column's symbol in a reading
 _ONE_SAMPLE = re.compile(r"(?i)\bone[- ]sample")  # a one-sample t test: its d is the mean over the one SD, t/√n
 
 
@@ -711,7 +713,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             coefficient, effects = _coefficient_cells(row, roles, numbers, mark, heads) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role in ("wald", "z") else []  # (a linear model's row has no odds ratio; a logistic one's z has)
             if role in ("F", "t"):
-                effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2", "R2", "delta_R2", "R2_adj", "R_multiple") if role == "F" else ("d", "d_z"),
+                effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2", "omega2_p", "omega2", "R2", "delta_R2", "R2_adj", "R_multiple") if role == "F" else ("d", "d_z"),
                                         _ONE_SAMPLE.search(said) is not None)
                 how += "".join(f", the {e.symbol_text} column" for e in effects)
             if coefficient is not None:
