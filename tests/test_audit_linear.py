@@ -88,7 +88,14 @@ def _ratios(k: int) -> str:
     return "Odds rose (" + "OR 1.5, 95% CI 1.1 to 2.0; OR, 0.76; 95% CI, 0.73 to 0.80; p = .04 and " * (300 * k) + "AOR: 2.1)."
 
 
-@pytest.mark.parametrize("shape", [_many, _spaces, _fragments, _ratios])
+def _coefficients(k: int) -> str:
+    """One sentence of coefficients given with their p and no test, regression steps and p's without a head: each p looks
+    back for its B (that search had run from the sentence's start: quadratic), each step's R² change is its F's."""
+    return ("Each rose (" + "b = 0.4, SE = 0.1, p = .2; (p = .001, d = 0.5) " * (300 * k)
+            + "R² = .10, adj. R² = .09, ΔR² = .05, F(2, 148) = 8.49; " * (300 * k) + "ns).")
+
+
+@pytest.mark.parametrize("shape", [_many, _spaces, _fragments, _ratios, _coefficients])
 def test_work_grows_linearly(shape, monkeypatch):
     work = [_work(shape(k), monkeypatch) for k in (1, 2, 4, 8)]
     sizes = [len(shape(k)) for k in (1, 2, 4, 8)]

@@ -660,6 +660,9 @@ def coefficient_before(text: str, rep: Reported, since: int, decimal_mark: str =
     return found["B"], found["SE"]
 
 
+_LEAD_REACH = 200  # how far before its p a coefficient's B may stand (its SE and interval between them)
+
+
 def coefficient_lead(text: str, rep: Reported, since: int, decimal_mark: str = ".") -> "tuple[Number, Number | None, Interval | None] | None":
     """The B (or b) a p without a head closes, with the SE and interval typed between them: "b = 0.42, SE = 0.10, 95% CI
     [0.22, 0.62], p < .001" gives (0.42, 0.10, [0.22, 0.62]); only a comma or semicolon between the parts, within the
@@ -668,7 +671,7 @@ def coefficient_lead(text: str, rep: Reported, since: int, decimal_mark: str = "
     if p is None or rep.symbol is not None or rep.effects or rep.descriptives or (text.find("B", since, p.start) < 0 and text.find("b", since, p.start) < 0):
         return None
     pat = _patterns(decimal_mark)
-    start = _sentence_start(pat, text, since, p.start)
+    start = max(_sentence_start(pat, text, since, p.start), p.start - _LEAD_REACH)  # (a window of its own: linear in a long piece)
     found = None
     for m in pat.coef_b.finditer(text, start, p.start):
         found = m
