@@ -458,9 +458,8 @@ def _audit_units(
                 rep.estimate = before[0]  # "b = 0.42, SE = 0.10, t(196) = 4.20, p < .001, 95% CI [0.22, 0.62]": the interval is b's
                 # (with a β beside the b, whose interval it is is not said: neither is checked)
         lead = coefficient_lead(unit.text, local, previous_end, mark) if local is not None and local.symbol is None and local.p is not None else None
-        if lead is not None:  # "b = 0.42, SE = 0.10, 95% CI [0.22, 0.62], p < .001": the p's B, SE and interval, checked with it
-            estimate, se, interval = lead
-            rep = replace(rep, ci=interval, estimate=estimate) if interval is not None else rep
+        if lead is not None and lead[2] is not None:  # "b = 0.42, SE = 0.10, 95% CI [0.22, 0.62], p < .001": the p's B and interval
+            rep = replace(rep, ci=lead[2], estimate=lead[0])
         findings = impossible(rep) + consistent
         if local is not None:
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)

@@ -605,6 +605,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         row = rows[r]
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
         header = {c: None if numbers[c] is not None else _role(u.text) for c, (u, _) in row.items()}  # (a number is no head)
+        if "effect:R_multiple" in header.values() and sum(role is not None for role in header.values()) == 1:
+            header = dict.fromkeys(header)  # a lone "R" is a label (a block's, a side's), not a multiple R's head
         stat_cells = {c for c, role in header.items() if role is not None}
         heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
         if not heads_in_row and not any(v is not None for v in numbers.values()):
