@@ -1622,3 +1622,14 @@ def test_partial_omega_squared_and_a_misprinted_df_in_real_reports(tmp_path):
     first, second = audit_units([Unit("c", _THESIS_STROOP)])
     assert not first.codes or set(first.codes) <= {"decimals", "spacing"}, first.codes
     assert {"p-does-not-follow", "effect-does-not-fit"} <= set(second.codes), second.codes
+
+
+def test_an_f_change_keeps_its_name_in_suggestions_and_revisions():
+    """An F change typed "ΔF(1,330)=2.20" or "F change (1, 147) = .42" (the write-up above) had been suggested as a plain F —
+    "F(1, 147) = 0.42" — and a ΔF's revision refused as dropping "ΔF"; the suggestion is now the style's ΔF, and the ΔF
+    revised in place (a worded "F change" is still left as typed: the style has no place for the word). Numbers: the
+    penguins model comparison above (F(1, 330) = 2.20, p = .139) and the write-up's F change."""
+    (e,) = [e for e in audit_units([Unit("c", _WRITE_UP)], restyle=True, suggest_all=True) if e.found.startswith("F")]
+    assert e.suggestion == "ΔF(1, 147) = 0.42, p = .52" and e.revision is None and "change" in e.kept
+    (e,) = audit_units([Unit("c", "Bill depth added little, ΔF(1,330)=2.20, p=.139.")], restyle=True)
+    assert e.codes == ["spacing"] and e.suggestion == "ΔF(1, 330) = 2.20, p = .139" and e.revision.plain() == "ΔF(1, 330) = 2.20, p = .139"

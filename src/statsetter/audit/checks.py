@@ -982,7 +982,8 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
     statistic = None
     if rep.symbol is not None and rep.value is not None:
         df = tuple(d.value for d in rep.df)
-        statistic = Statistic(rep.symbol, rep.value.value, df if all(d > 0 for d in df) else ())
+        change = rep.symbol == "F" and (rep.symbol_text[:1] in "Δ∆" or rep.symbol_text.lower().endswith("change"))  # "ΔF", "F change"
+        statistic = Statistic("F_change" if change else rep.symbol, rep.value.value, df if all(d > 0 for d in df) else ())
         precision["statistic.value"] = rep.value.decimals
     p = None
     if rep.p is not None and rep.p.op == "=" and rep.p.number is not None and 0 < rep.p.number.value <= 1:
