@@ -1295,8 +1295,8 @@ def test_spss_model_summary_f_change_is_read(tmp_path):
     rows = [["", "", "", "", "Change Statistics", "", "", "", ""],
             ["Model", "R", "R Square", "Adjusted R Square", "R Square Change", "F Change", "df1", "df2", "Sig. F Change"], row(1, first, None), row(2, second, first)]
     found = audit_file(_doc(tmp_path / "m.docx", tables=[("Table 21\nModel Summary", rows)]))
-    assert [e.found for e in found] == [f"F(1, 340) = {rows[2][5]}, p = {rows[2][8]}, R² = {rows[2][2]}, ΔR² = {rows[2][4]}, adjusted R² = {rows[2][3]}, R = {rows[2][1]}",
-                                        f"F(2, 338) = {rows[3][5]}, p = {rows[3][8]}, R² = {rows[3][2]}, ΔR² = {rows[3][4]}, adjusted R² = {rows[3][3]}, R = {rows[3][1]}"] \
+    assert [e.found for e in found] == [f"ΔF(1, 340) = {rows[2][5]}, p = {rows[2][8]}, R² = {rows[2][2]}, ΔR² = {rows[2][4]}, adjusted R² = {rows[2][3]}, R = {rows[2][1]}",
+                                        f"ΔF(2, 338) = {rows[3][5]}, p = {rows[3][8]}, R² = {rows[3][2]}, ΔR² = {rows[3][4]}, adjusted R² = {rows[3][3]}, R = {rows[3][1]}"] \
         and all(not e.codes for e in found), [(e.found, e.codes) for e in found]
     # R is the square root of R², and the adjusted R² is 1 − (1 − R²)(n − 1)/(n − k − 1): at most 1 − (1 − R²)(df₁ + df₂)/df₂
     # (k at least the step's df₁); statsmodels' rsquared_adj is that formula (checked here for the second model)
@@ -1315,6 +1315,8 @@ def test_spss_model_summary_f_change_is_read(tmp_path):
     wrong[3][4] = "0.020"
     (_, e) = audit_file(_doc(tmp_path / "v.docx", tables=[("Table 21\nModel Summary", wrong)]))
     assert e.codes == ["effect-does-not-fit"] and "(ΔR²/df₁)/((1 − R²)/df₂)" in e.message
+    # its suggestion keeps the step's ΔF and every effect beside it (it had given "F(2, 338) = …, R² = …" alone)
+    assert e.suggestion.startswith("ΔF(2, 338) = ") and "ΔR² = .02" in e.suggestion and "adjusted R² = .76, R = .87" in e.suggestion, e.suggestion
 
 
 def test_a_chi_square_tests_table_as_jamovi_and_jasp_name_its_rows(tmp_path):

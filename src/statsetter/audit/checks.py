@@ -1005,8 +1005,9 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
         effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, i, style, e.name), ratio=e.name in RATIOS))
         precision[f"effects[{i}].value"] = e.number.decimals
     kind = _KIND.get(rep.symbol or "", "reported")
-    if rep.symbol == "F":
-        kind = "anova_oneway" if {e.name for e in rep.effects} >= {"eta2", "omega2"} else "anova_term"
+    if rep.symbol == "F":  # (a regression's F with its R², ΔR², adjusted R² or R: each effect kept, in the order typed)
+        names = {e.name for e in rep.effects}
+        kind = "anova_oneway" if names >= {"eta2", "omega2"} else "reported" if names & {"R2", "delta_R2", "R2_adj", "R_multiple"} else "anova_term"
     if kind == "chi2_independence" and rep.n is None:
         kind = "reported"
     n = int(rep.n.value) if rep.n is not None and rep.n.value >= 0 else None

@@ -723,6 +723,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                     "".join(f", the {e.symbol_text} column" for e in effects if e.name == "OR")
             symbol = "chi2" if role == "wald" else role
             label = {"chi2": "χ²", "wald": "Wald"}.get(role, role)
+            if role == "F" and "change" in heads.get(c, "").lower():  # SPSS's "F Change": a step's F, the style's ΔF
+                label = "ΔF"
             rep = Reported(symbol, label, value.start, value.start, value.end, df, None, op, value, p, effects=effects)
             interval = _interval_cells(row, roles, numbers, heads, c, levels_said, mark) if role in ("t", "z", "wald") else None
             if interval is not None and interval[1] == "expB" and rep.effects and rep.effects[-1].name == "OR":  # the odds ratio's
