@@ -170,23 +170,23 @@ _FLAT_SUBSCRIPT = r"(?:[ _]?(?:age|diff(?:erence)?|change|pre|post|baseline|foll
 # Every alternative starts with a literal character and a name that must not follow a letter says so right after it
 # ("V(?<![\w]V)"): the regex engine then looks for the first characters with a fast scan instead of trying every position.
 _EFFECT_NAMES = [
-    (r"partial\s+(?:η|eta)\s?(?:[²2]|\^2|squared)", "eta2_p"),
+    (r"partial\s+(?:η|eta|ω|omega)\s?(?:[²2]|\^2|squared)", "eta2_p"),  # ("partial ω²": named by _NAMED_FIRST)
     (r"η\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|eta\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|η_p\^?2|ηp[²2]|η[²2]_p", "eta2_p"),
     # generalized η² (Olejnik & Algina, 2003), as statsetter and R's afex print it: η²G, ηG², η²_G, "generalized η²"
     (r"η\s?(?:[²2]|\^2)\s?_?G(?![A-Za-z])|ηG\s?[²2]|η_G\^?2|eta\s?(?:[²2]|\^2)\s?_?G(?![A-Za-z])|g(?<![\w]g)eneralized\s+(?:η|eta)[\s-]?(?:[²2]|\^2|squared)", "eta2_g"),
     (r"η\s?(?:[²2]|\^2|squared)|eta\s?(?:[²2]|\^2|squared)", "eta2"),
-    # partial ω² (JASP's ω²ₚ): like η²p's typings
-    (r"ω\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)(?![A-Za-z])|ωp\s?[²2]|ω_p\^?2|omega\s?(?:[²2]|\^2)\s?(?:p|_p)(?![A-Za-z])|p(?<![\w]p)artial\s+(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2_p"),
-    (r"ω\s?(?:[²2]|\^2|squared)|omega\s?(?:[²2]|\^2|squared)", "omega2"),
+    # ω², and partial ω² (JASP's ω²ₚ) typed as η²p is: one alternative for each first character (named by _NAMED_FIRST)
+    (r"ω(?:\s?(?:[²2]|\^2)(?:\s?(?:p|_p|ₚ)(?![A-Za-z]))?|p\s?[²2]|_p\^?2|\s?squared)|omega\s?(?:(?:[²2]|\^2)(?:\s?(?:p|_p)(?![A-Za-z]))?|squared)", "omega2"),
     (r"ε\s?(?:[²2]|\^2|squared)|epsilon\s?(?:[²2]|\^2|squared)", "epsilon2"),
     (r"ε(?!\s?(?:[²2]|\^2|squared))|epsilon(?!\s?(?:[²2]|\^2|squared))", "epsilon"),  # a sphericity correction's ε (GG or HF)
     (r"r_?rb|r\s?(?:rank-biserial)", "r_rb"),
     (r"Cram[ée]r'?s\s+V|V(?<![\w]V)", "V"),
     (r"φ|p(?<![\w]p)hi", "phi"),
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
-    # a regression step's change in R²: "ΔR²", "R² change", "R squared change" (SPSS's "R Square Change"), "R-squared change"
-    (r"[Δ∆]\s?R\s?(?:[²2]|\^2)|R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared?|\s[Ss]quare)\s?[Cc]hange", "delta_R2"),
-    (r"R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared)", "R2"),
+    # R², and a regression step's change in it: "ΔR²", "R² change", "R squared change" (SPSS's "R Square Change"), "R-squared
+    # change" (one alternative for the R's; the changes named by _NAMED_FIRST)
+    (r"[Δ∆]\s?R\s?(?:[²2]|\^2)", "delta_R2"),
+    (r"R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared|[- ][Ss]quare(?=\s?[Cc]hange))(?:\s?[Cc]hange)?", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
@@ -269,7 +269,7 @@ class _Patterns:
         self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+[=¼]\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
         # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan; "adj. R²" is no end)
-        prose = r"\.(?<=[^\d\s]\.)(?<![aA]dj\.)(?=\s+[A-Z(])|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
+        prose = r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])(?<![aA]dj\.)|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
         self.boundary = re.compile(prose + r"|[ \t\n](?<=\\\\[ \t\n])(?:(?<=\n)|[ \t]*\n)")
         # without a LaTeX row's end, for a text without "\\" (where it cannot match): its first characters are then "."
         # and a newline only, not every space (see boundary_in)
@@ -366,7 +366,12 @@ def _patterns(mark: str) -> _Patterns:
     return _CACHE[mark]
 
 
-_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _RATIOS + _EFFECT_NAMES]
+# names the scan finds within another name's alternative (so that no first character is tried twice), told apart first
+_NAMED_FIRST = [
+    (r"ω\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)|ωp\s?[²2]|ω_p\^?2|omega\s?(?:[²2]|\^2)\s?(?:p|_p)|partial\s+(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2_p"),
+    (r"R\s?(?:[²2]|\^2|[- ][Ss]quared?)\s?[Cc]hange", "delta_R2"),
+]
+_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _RATIOS + _NAMED_FIRST + _EFFECT_NAMES]
 
 
 @functools.lru_cache(maxsize=4096)  # likewise its effect names: each tried against the patterns once
