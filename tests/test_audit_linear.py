@@ -440,3 +440,28 @@ def test_tables_in_markdown_and_latex_never_fail_and_map_back_inside_the_text(te
         assert all(0 <= unit.source_index(i) < len(rest) and (unit.text[i] == rest[unit.source_index(i)] or unit.text[i] != "\n")
                    for i in range(len(unit.text))), (unit, rest)
     audit_units(units)
+
+
+_NAME_PIECES = ["partial ", "η", "eta", "ω", "omega", "ε", "epsilon", "²", "2", "^2", "p", "_p", "ₚ", "G", "squared", "generalized ", "d", "_z",
+                "av", "g", "r", "rb", "V", "Cramér's ", "φ", "phi", "adj. ", "R", " squared", " Square", "change", "Δ", "β", "beta",
+                "Kendall's ", "W", "M", "dn", "SD", "ean (SD)", "age", "1", "OR", "aOR", "HR", "RR", "IRR", "odds ratio", "hazard ratio",
+                "adjusted ", "risk", "t", "F", "χ²", "-value", "s", " change", "z", "U", "H", "Wald", "τb", "x", " ", "=", " = ", ".5",
+                " 0.5", ":", ",", "(", ")", "a", "\n", "tau", "Tau", "rho", "chi", "Chi", "square", "X", "Z", "-statistic", "ald", "dn", "_b", "ₛ"]
+
+
+@settings(max_examples=5_000, deadline=None, database=None)
+@given(st.lists(st.sampled_from(_NAME_PIECES), max_size=30).map("".join))
+def test_names_grouped_by_their_first_character_match_as_the_plain_alternation(text):
+    """The scans of effect sizes', ratios' and statistics' names join the alternatives that share a first character
+    (parsing._by_first: twice as fast over prose for the effect sizes); at every place they match what the plain
+    alternation of the same names matches."""
+    num = parsing._number_pattern(".")
+    pat = parsing._patterns(".")
+    plain_effect = re.compile(r"(?P<name>" + "|".join(p for p, _ in parsing._EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{num})")
+    plain_symbol = re.compile(parsing._guarded(parsing._SYMBOLS, r"\w."))
+    plain_ratio = re.compile(r"(?:" + "|".join(p for p, _ in parsing._RATIOS) + ")")
+    for grouped, plain in ((pat.effect, plain_effect), (re.compile(parsing._SYMBOL), plain_symbol),
+                           (re.compile(parsing._by_first(p for p, _ in parsing._RATIOS)), plain_ratio)):
+        for at in range(len(text) + 1):
+            a, b = grouped.match(text, at), plain.match(text, at)
+            assert (a and (a.span(), a.groupdict())) == (b and (b.span(), b.groupdict())), (text, at)
