@@ -1635,3 +1635,22 @@ def test_an_f_change_keeps_its_name_in_suggestions_and_revisions():
     assert e.suggestion == "ΔF(1, 147) = 0.42, p = .52" and e.revision is None and "change" in e.kept
     (e,) = audit_units([Unit("c", "Bill depth added little, ΔF(1,330)=2.20, p=.139.")], restyle=True)
     assert e.codes == ["spacing"] and e.suggestion == "ΔF(1, 330) = 2.20, p = .139" and e.revision.plain() == "ΔF(1, 330) = 2.20, p = .139"
+
+
+def test_an_intraclass_correlation_with_its_form_and_interval():
+    """"ICC(A,1) = .73, 95% CI [.43, .93]" (pingouin's and Shrout & Fleiss's names for the forms) had not been read: an ICC
+    is now an effect size bounded by −1 and 1 whose interval must hold it; its form — which estimator it is — is kept in
+    the suggestion, and a revision that would drop it is refused. Numbers: pingouin's intraclass_corr of its wine-judging
+    data (ICC(A,1) = .728, 95% CI [.43, .93]); the wrong values are mutations of ours."""
+    import pingouin as pg
+
+    icc = pg.intraclass_corr(pg.read_dataset("icc"), targets="Wine", raters="Judge", ratings="Scores").set_index("Type")
+    value, (low, high) = icc.loc["ICC(A,1)", "ICC"], icc.loc["ICC(A,1)", "CI95"]
+    typed = f"ICC(A,1) = {value:.2f}, 95% CI [{low:.2f}, {high:.2f}]".replace("0.", ".")
+    assert typed == "ICC(A,1) = .73, 95% CI [.43, .93]"
+    (e,) = audit_units([Unit("c", f"The judges agreed well, {typed}.")], restyle=True, suggest_all=True)
+    assert e.found == typed and e.codes == [] and e.suggestion == typed and e.revision is None and "ICC(A,1)" in e.kept
+    (e,) = audit_units([Unit("c", "The judges agreed well, ICC(A,1) = .97, 95% CI [.43, .93].")])
+    assert e.codes == ["ci-excludes-estimate"]
+    (e,) = audit_units([Unit("c", "The judges agreed well, ICC = 1.30.")])
+    assert e.codes == ["impossible-value"]

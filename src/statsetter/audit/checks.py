@@ -102,7 +102,7 @@ FORMER_CODES: dict[str, str] = {
     "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
-_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "omega2_p": (-1, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "omega2_p": (-1, 1), "ICC": (-1, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
 RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0

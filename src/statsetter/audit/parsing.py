@@ -218,6 +218,8 @@ _EFFECT_NAMES = [
     (r"ε(?!\s?(?:[²2]|\^2|squared))|epsilon(?!\s?(?:[²2]|\^2|squared))", "epsilon"),  # a sphericity correction's ε (GG or HF)
     (r"r_?rb|r\s?(?:rank-biserial)", "r_rb"),
     (r"Cram[ée]r'?s\s+V|V(?<![\w]V)", "V"),
+    # an intraclass correlation, with its form as Shrout & Fleiss name it ("ICC(2,1) = .82, 95% CI [.75, .88]")
+    (r"I(?<![\w]I)CC(?![\w])(?:\s?\(\s?[1-3A-Z]\s?,\s?(?:[1-9]|k)\s?\))?", "ICC"),
     (r"φ|p(?<![\w]p)hi", "phi"),
     (r"adj(?:usted)?\.?\s+R\s?(?:[²2]|\^2)|R\s?(?:[²2]|\^2)\s?adj", "R2_adj"),
     # R², and a regression step's change in it: "ΔR²", "R² change", "R squared change" (SPSS's "R Square Change"), "R-squared

@@ -547,6 +547,9 @@ def _audit_units(
         # are assumptions, said in the JSON's `recomputed`, and stay out of the suggestion)
         basis = recheck[0] if recheck is not None and item.readings == (ONE_COEFFICIENT,) else rep
         suggestion = _suggest(basis, resolved, alpha, findings, house if basis is rep else _UNMADE) if findings or suggest_all else ""
+        form = next((e.symbol_text for e in rep.effects if e.name == "ICC" and "(" in e.symbol_text), None)
+        if suggestion and form is not None:  # the ICC's form as typed (ICC(2,1): which estimator), which the style's symbol leaves out
+            suggestion = suggestion.replace("ICC", form.replace(" ", ""), 1)
         entries.append(_new_entry(location, rep.text.replace("\u200b", "") if "\u200b" in rep.text else rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", recheck))
         if restyle:  # what a revision needs (held only then: the parsed statistics are most of an audit's memory)
             reps.append(local)

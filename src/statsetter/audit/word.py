@@ -238,6 +238,9 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     lost = _lost_word(rep, old, plain)
     if lost:
         return None, f"the restyled text would drop \u201c{lost}\u201d"
+    form = next((e.symbol_text for e in rep.effects if e.name == "ICC" and "(" in e.symbol_text), None)
+    if form is not None:  # ICC(2,1), ICC(3,k): which estimator it is, which the style's "ICC" does not say
+        return None, f"the restyled text would drop the ICC's form, \u201c{form}\u201d"
     doubted = any(f.code in _P_DOUBTS for f in findings)
     why = _numbers_kept(rep, old, new, read_mark or style.decimal_mark, doubted, style.decimal_mark)
     return (None, why) if why else (new, "")
