@@ -285,7 +285,8 @@ def _italics_differ(rep: Reported, new: StyledText, italic: Sequence[tuple[int, 
     symbols += [(e.symbol_start, e.symbol_text) for e in rep.effects if e.symbol_text]
     symbols += [(e.symbol_start, e.name if subscript(e) else e.symbol_text) for e in rep.descriptives if e.symbol_text]  # (M₁: its M)
     styled = {new.text[a:b] for a, b in new.italic_ranges()}
-    return any(any(s <= at < e for s, e in italic) != (text in styled) for at, text in symbols)
+    # (a symbol's first character is italic where the style's italic run begins it: "R" of R², "d" of d_z)
+    return any(any(s <= at < e for s, e in italic) != any(text.startswith(t) for t in styled if t) for at, text in symbols)
 
 
 def _lost_word(rep: Reported, old: str, new: str) -> str:
