@@ -1596,6 +1596,9 @@ def test_a_models_r_squared_and_adjusted_r_squared_in_prose():
     assert [e.found for e in found] == ["R² = .76, adj. R² = .76", "F(1, 331) = 1060.30, p < .001"] and all(not e.codes for e in found)
     found = audit_units([Unit("c", f"Flipper length explained body mass well, {typed.replace('adj. R² = .76', 'adj. R² = .86')}.")])
     assert found[1].codes == ["effect-does-not-fit"] and "adj. R² = .86 is too large" in found[1].message
+    # and R² itself is at least F·df₁/(F·df₁ + df₂) (= .762 here), whether the F is the model's or a step's change
+    found = audit_units([Unit("c", f"Flipper length explained body mass, {typed.replace('R² = .76, adj. R² = .76', 'R² = .50')}.")])
+    assert found[1].codes == ["effect-does-not-fit"] and "R² = .50 is too small" in found[1].message, [(e.found, e.codes) for e in found]
 
 
 # JASP's published example of a two-way ANOVA with partial ω² and its interval (Discover JASP repository, Davey et al.'s

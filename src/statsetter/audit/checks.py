@@ -772,6 +772,11 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {span}.", f"{e.symbol_text} = {e.number.text}"))
         out += _r_squared_fits(rep, r2) if r2 is not None and whole else []
+        if r2 is not None and whole and r2.number.value + r2.number.half_unit < bound[0] - 1e-12:
+            # (the model's F gives R² = F·df₁/(F·df₁ + df₂); a step's F change ΔR² = F·df₁·(1 − R²)/df₂ ≤ R², so R² at least that)
+            out.append(Finding("effect-does-not-fit", f"{r2.symbol_text} = {r2.number.text} is too small for F({rep.df[0].text}, {rep.df[1].text}) = "
+                                                      f"{rep.value.text}: whether the F is the model's or a step's change, R² is at least "
+                                                      f"F·df₁/(F·df₁ + df₂), {bound[0]:.3f}.", f"{r2.symbol_text} = {r2.number.text}"))
         change = next((e for e in rep.effects if e.name == "delta_R2"), None)
         if change is not None and r2 is not None and whole:  # a regression step's F change: (ΔR²/df₁)/((1 − R²)/df₂)
             d_low, d_high = max(change.number.value - change.number.half_unit, 0.0), change.number.value + change.number.half_unit
