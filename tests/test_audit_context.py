@@ -1657,3 +1657,21 @@ def test_an_intraclass_correlation_with_its_form_and_interval():
     assert e.codes == ["ci-excludes-estimate"]
     (e,) = audit_units([Unit("c", "The judges agreed well, ICC = 1.30.")])
     assert e.codes == ["impossible-value"]
+
+
+def test_an_interval_is_checked_against_the_se_beside_it(tmp_path):
+    """A coefficient's (or mean difference's) interval beside its SE reaches a z's quantile of SEs each side at the least
+    (1.96 for 95%) and a t on 1 df's at the most (12.71), whatever the df; outside that (with the printed precision and a
+    15% margin for profile intervals) the SE or the interval is another's. The published tables above fit (Pediatric
+    Research 2020's half-widths are 1.97–2.06 SEs; BMC's and the oral-health table's too); a copied SE does not."""
+    caption = ("Table 4\nMultiple linear regression models for the global executive function score", _PEDRES_TABLE_4)
+    assert all(not e.codes for e in audit_file(_doc(tmp_path / "p.docx", tables=[caption])))
+    assert all(not e.codes for e in audit_file(_doc(tmp_path / "b.docx", tables=[("Table 2 Multiple linear regression model", _BMC_TABLE_2)])))
+    assert all(not e.codes for e in audit_file(_doc(tmp_path / "q.docx", tables=[("Table 6. Multiple linear regression", _OHRQOL_TABLE_6)])))
+    rows = [r[:] for r in _PEDRES_TABLE_4]
+    rows[2][2] = "0.40"  # Age's SE, the interval [0.15, 0.31] reaching 0.2 of it each side
+    found = {e.found: e for e in audit_file(_doc(tmp_path / "w.docx", tables=[(caption[0], rows)]))}
+    e = found["B = 0.23, SE = 0.40, 95% CI [0.15, 0.31], p < 0.001"]
+    assert "coefficient-does-not-fit" in e.codes and "SEs each side" in e.message, e.message
+    (e,) = audit_units([Unit("c", "Tenure predicted alertness (b = 0.42, SE = 0.30, 95% CI [0.22, 0.62], p = .17).")])
+    assert "SEs each side" in e.message

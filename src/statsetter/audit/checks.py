@@ -948,6 +948,27 @@ def _odds_fit(rep: Reported, b: Number) -> list[Finding]:
                                                 f"{expected[0]:.4g} to {expected[1]:.4g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}")]
 
 
+def interval_fits_se(ci: "TypedInterval", se: Number) -> list[Finding]:
+    """An estimate's interval against its SE: a Wald interval reaches a z's quantile of SEs each side at the least (1.96
+    for 95%) and a t on 1 df's at the most (12.71), whatever its df; with the printed precision of the limits and the
+    SE, and a margin of 15% each way for intervals made otherwise (profile likelihood), a half-width outside says the
+    SE or the interval is another's."""
+    from statistics import NormalDist  # (only here: a coefficient's SE beside its interval)
+
+    se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
+    if se_low <= 0 or not 0.5 <= ci.level < 1:
+        return []
+    widest = ((ci.high.value + ci.high.half_unit) - (ci.low.value - ci.low.half_unit)) / 2
+    narrowest = max((ci.high.value - ci.high.half_unit) - (ci.low.value + ci.low.half_unit), 0.0) / 2
+    fewest, most = NormalDist().inv_cdf(0.5 + ci.level / 2), math.tan(math.pi * ci.level / 2)
+    if widest / se_low >= 0.85 * fewest and narrowest / se_high <= 1.15 * most:
+        return []
+    level = f"{ci.level * 100:g}%"
+    return [Finding("coefficient-does-not-fit", f"The {level} CI [{ci.low.text}, {ci.high.text}] reaches {narrowest / se_high:.2f} to {widest / se_low:.2f} "
+                                                f"SEs each side of its estimate (SE = {se.text}); an interval from that SE reaches {fewest:.2f} (a z) to "
+                                                f"{most:.2f} (a t on 1 df): the SE or the interval is another's.", f"SE = {se.text}, {level} CI [{ci.low.text}, {ci.high.text}]")]
+
+
 def _small(p: float) -> str:
     """A recomputed p as a message shows it: below .0001 as that bound, else four significant digits."""
     return "below 0.0001" if p < 1e-4 else f"{p:.4g}"

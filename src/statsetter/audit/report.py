@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, style_findings, to_record
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
@@ -474,6 +474,10 @@ def _audit_units(
             findings += coefficient_ratio(rep, item.coefficient) + coefficient_p(rep, item.coefficient, alpha)
         if lead is not None and lead[1] is not None:
             findings += coefficient_p(rep, lead[:2], alpha)
+        se = item.coefficient[1] if item.coefficient is not None else lead[1] if lead is not None else None
+        if se is not None and rep.ci is not None and rep.estimate is not None and \
+                not any(f.code in ("ci-excludes-estimate", "ci-reversed") for f in findings):  # (a coefficient's or mean difference's interval)
+            findings += interval_fits_se(rep.ci, se)
         if local is None and rep.symbol == "t" and rep.effects:  # a table row's t with its d (d_z where the table says one sample)
             findings += effect_from_t(rep)
         if (rep.ci is not None or rep.effects) and rep.p is not None:
