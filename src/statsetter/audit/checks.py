@@ -277,6 +277,11 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
 _MANY_DF = 10**7  # beyond this a t's p is the normal's to the digits any manuscript prints
 
 
+def _p_range_at(rep: Reported, df: int) -> tuple[float, float] | None:
+    """The p range of a statistic without df (a t, r or χ²) were its df ``df``."""
+    return p_range(replace(rep, df=(Number(str(df), float(df), 0, rep.start, rep.start),), p_range=None))
+
+
 def any_df_range(rep: Reported) -> tuple[float, float] | None:
     """The p a t, r or χ² given without df allows over every df it may have (from 1 up): a t's or r's two-sided p
     falls as its df grow (from the df = 1 p down to the normal's for a t, to 0 for an r), a χ²'s upper tail rises
@@ -285,15 +290,12 @@ def any_df_range(rep: Reported) -> tuple[float, float] | None:
     if rep.df or rep.symbol not in ("t", "r", "rs", "chi2") or rep.op != "=":
         return None
 
-    def at(df: int) -> tuple[float, float] | None:
-        return p_range(replace(rep, df=(Number(str(df), float(df), 0, rep.start, rep.start),), p_range=None))
-
-    fewest = at(1)
+    fewest = _p_range_at(rep, 1)
     if fewest is None:
         return None
     if rep.symbol == "chi2":
         return fewest[0], 1.0
-    most = at(_MANY_DF)
+    most = _p_range_at(rep, _MANY_DF)
     return None if most is None else (most[0], fewest[1])
 
 
@@ -306,10 +308,7 @@ def df_that_fit(rep: Reported, alpha: float) -> "tuple[int, int | None] | None":
     if rep.symbol not in ("t", "r", "rs") or reported is None:
         return None
 
-    def ends(df: int) -> "tuple[float, float] | None":
-        return p_range(replace(rep, df=(Number(str(df), float(df), 0, rep.start, rep.start),), p_range=None))
-
-    fewest, most = ends(1), ends(_MANY_DF)
+    fewest, most = _p_range_at(rep, 1), _p_range_at(rep, _MANY_DF)
     if fewest is None or most is None or most[0] > reported[1] + 1e-12 or fewest[1] < reported[0] - 1e-12:
         return None
 
@@ -327,7 +326,7 @@ def df_that_fit(rep: Reported, alpha: float) -> "tuple[int, int | None] | None":
 
     def end(df: int, which: int) -> float | None:  # one end of the p range at ``df`` (0: the lower, from the larger value)
         if bounds is None:  # (a bound, "t > 2.50": both ends, as p_range has them)
-            found = ends(df)
+            found = _p_range_at(rep, df)
             return None if found is None else found[which]
         try:
             return _p_of(rep.symbol, bounds[2 if which == 0 else 0], (float(df),))  # type: ignore[arg-type]
@@ -771,12 +770,7 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                 span = f"{bound[0]:.3f}" if f"{bound[0]:.3f}" == f"{bound[1]:.3f}" else f"{bound[0]:.3f} to {bound[1]:.3f}"
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {span}.", f"{e.symbol_text} = {e.number.text}"))
-        out += _r_squared_fits(rep, r2) if r2 is not None and whole else []
-        if r2 is not None and whole and r2.number.value + r2.number.half_unit < bound[0] - 1e-12:
-            # (the model's F gives R² = F·df₁/(F·df₁ + df₂); a step's F change ΔR² = F·df₁·(1 − R²)/df₂ ≤ R², so R² at least that)
-            out.append(Finding("effect-does-not-fit", f"{r2.symbol_text} = {r2.number.text} is too small for F({rep.df[0].text}, {rep.df[1].text}) = "
-                                                      f"{rep.value.text}: whether the F is the model's or a step's change, R² is at least "
-                                                      f"F·df₁/(F·df₁ + df₂), {bound[0]:.3f}.", f"{r2.symbol_text} = {r2.number.text}"))
+        out += _r_squared_fits(rep, r2, bound[0]) if r2 is not None and whole else []
         change = next((e for e in rep.effects if e.name == "delta_R2"), None)
         if change is not None and r2 is not None and whole:  # a regression step's F change: (ΔR²/df₁)/((1 − R²)/df₂)
             d_low, d_high = max(change.number.value - change.number.half_unit, 0.0), change.number.value + change.number.half_unit
@@ -803,12 +797,17 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
 _BELOW_ETA2_P = {"eta2": "η²", "eta2_g": "generalized η²", "omega2": "ω²", "omega2_p": "partial ω²", "epsilon2": "ε²"}
 
 
-def _r_squared_fits(rep: Reported, r2: Effect) -> list[Finding]:
-    """A regression's R² against its multiple R (R² = R·R) and its adjusted R² (1 − (1 − R²)(n − 1)/(n − k − 1), with
-    n − k − 1 the F's df₂ and k at least its df₁ — the predictors of this step and any before — so at most
+def _r_squared_fits(rep: Reported, r2: Effect, least: float) -> list[Finding]:
+    """A regression's R² against its F (at least ``least``, F·df₁/(F·df₁ + df₂): the model's F gives R² that, a step's
+    F change ΔR² = F·df₁·(1 − R²)/df₂ ≤ R²), its multiple R (R² = R·R) and its adjusted R² (1 − (1 − R²)(n − 1)/(n − k − 1),
+    with n − k − 1 the F's df₂ and k at least its df₁ — the predictors of this step and any before — so at most
     1 − (1 − R²)(df₁ + df₂)/df₂), on the printed precision of each."""
     out = []
     r_low, r_high = r2.number.value - r2.number.half_unit, r2.number.value + r2.number.half_unit
+    if r_high < least - 1e-12:
+        out.append(Finding("effect-does-not-fit", f"{r2.symbol_text} = {r2.number.text} is too small for F({rep.df[0].text}, {rep.df[1].text}) = "
+                                                  f"{rep.value.text}: whether the F is the model's or a step's change, R² is at least "
+                                                  f"F·df₁/(F·df₁ + df₂), {least:.3f}.", f"{r2.symbol_text} = {r2.number.text}"))
     multiple = next((e for e in rep.effects if e.name == "R_multiple"), None)
     if multiple is not None and 0 <= multiple.number.value <= 1:
         m_low, m_high = max(multiple.number.value - multiple.number.half_unit, 0.0), multiple.number.value + multiple.number.half_unit

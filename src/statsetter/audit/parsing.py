@@ -551,11 +551,20 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     return out
 
 
+def p_text(p: "PValue | None") -> str:
+    """A p made from a table's cell as the text after a statistic gives it: ", p = .039", " ns" ("" for none)."""
+    return "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
+
+
 def statistic_text(label: str, df: "tuple[Number, ...]", op: str, value: Number, p: PValue | None) -> str:
     """A statistic made from its parts (a table's cells, a plural head's further value) as one text: "t(38) = 2.14,
     p = .039" ("ns" as the table gives it)."""
-    p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
-    return f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text}"
+    return f"{label}{'(' + ', '.join(d.text for d in df) + ')' if df else ''} {op} {value.text}{p_text(p)}"
+
+
+def icc_form(rep: Reported) -> str | None:
+    """The form an ICC is typed with ("ICC(2,1)", "ICC(A,1)": which estimator it is), None without one."""
+    return next((e.symbol_text for e in rep.effects if e.name == "ICC" and "(" in e.symbol_text), None)
 
 
 def _more_values(pat: _Patterns, text: str, rep: Reported) -> list[Reported]:

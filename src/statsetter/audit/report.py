@@ -24,7 +24,7 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record
-from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, is_wald
+from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -551,7 +551,7 @@ def _audit_units(
         # are assumptions, said in the JSON's `recomputed`, and stay out of the suggestion)
         basis = recheck[0] if recheck is not None and item.readings == (ONE_COEFFICIENT,) else rep
         suggestion = _suggest(basis, resolved, alpha, findings, house if basis is rep else _UNMADE) if findings or suggest_all else ""
-        form = next((e.symbol_text for e in rep.effects if e.name == "ICC" and "(" in e.symbol_text), None)
+        form = icc_form(rep)
         if suggestion and form is not None:  # the ICC's form as typed (ICC(2,1): which estimator), which the style's symbol leaves out
             suggestion = suggestion.replace("ICC", form.replace(" ", ""), 1)
         entries.append(_new_entry(location, rep.text.replace("\u200b", "") if "\u200b" in rep.text else rep.text, tuple(findings), suggestion, unit, rep.start, rep.end, tuple(notes), None, "", recheck))

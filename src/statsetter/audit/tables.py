@@ -18,7 +18,7 @@ import re
 from dataclasses import dataclass, replace
 from typing import TYPE_CHECKING, Sequence
 
-from .parsing import _SIGNIFICANCE, Effect, Interval, Number, PValue, Reported, _patterns, statistic_text
+from .parsing import _SIGNIFICANCE, Effect, Interval, Number, PValue, Reported, _patterns, p_text, statistic_text
 from .reading import Unit
 
 if TYPE_CHECKING:
@@ -465,6 +465,27 @@ ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its
 _VALUE_SE = re.compile(rf"\s*(?P<b>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[{_SIGNIFICANCE}]*\s*\(\s*(?P<se>\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*[{_SIGNIFICANCE}]*\s*")
 
 
+def _value_se(text: str, mark: str) -> "tuple[Number | None, Number | None]":
+    """A coefficient and its SE in one cell, "0.52 (0.21)" under "B (SE)"; (None, None) when the cell is not one."""
+    m = _VALUE_SE.fullmatch(text)
+    read = _patterns(mark).to_number
+    return (read(m.group("b"), m.start("b")), read(m.group("se"), m.start("se"))) if m else (None, None)
+
+
+def _p_after(p: "PValue | None", at: int) -> "PValue | None":
+    """A p cell's p placed after its statistic's last part (its own cell's offsets would put it first), as the row reads."""
+    return None if p is None else replace(p, start=at + 2, end=at + 2 + p.end - p.start, symbol_start=at + 2)
+
+
+def _ratio_statistic(name: str, shown: str, estimate: Number, ci: Interval, p: "PValue | None", end: int) -> Reported:
+    """A ratio with its interval and p from a table's row, as one statistic without a head: "OR = 1.52, 95% CI [1.10,
+    2.10], p = .01"; ``end``, where it ends in the estimate's cell (the interval's end when the cell holds it too)."""
+    rep = Reported(None, "", estimate.start, estimate.start, end, p=_p_after(p, end),
+                   effects=[Effect(name, estimate, estimate.start, end, estimate.start, shown, ci)])
+    rep.text = f"{shown} = {estimate.text}, {ci.level * 100:g}% CI [{ci.low.text}, {ci.high.text}]{p_text(p)}"
+    return rep
+
+
 def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "dict[int, str] | None" = None) -> "tuple[Ratio | None, list[Effect]]":  # type: ignore[no-untyped-def]
     """A Wald row's (or a t's or z's) B and SE, and its Exp(B) as an odds ratio, from their columns, or B and SE from
     one cell under "B (SE)"; a t test's mean difference and its SE."""
@@ -480,9 +501,7 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "d
         return ((read[0], se, ("mean difference", "SE")) if _MEAN_DIFFERENCE.match((heads or {}).get(joint, "")) else (read[0], se)), []
     both = next((k for k, role in roles.items() if role == "BSE" and k in row), None)
     if ("B" not in cols or "SE" not in cols) and both is not None:  # "0.52 (0.21)" under "B (SE)"
-        m = _VALUE_SE.fullmatch(row[both][0].text)
-        read = _patterns(mark).to_number
-        b_se = (read(m.group("b"), m.start("b")), read(m.group("se"), m.start("se"))) if m else (None, None)
+        b_se = _value_se(row[both][0].text, mark)
         return (b_se, []) if None not in b_se else (None, [])  # type: ignore[return-value]
     if "B" not in cols or "SE" not in cols:
         return None, []
@@ -510,9 +529,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
         part = {c: role for c, role in roles.items() if k <= c < end}
         estimate = se = None
         if roles[k] == "BSE":
-            m = _VALUE_SE.fullmatch(row[k][0].text)
-            read = _patterns(mark).to_number
-            estimate, se = (read(m.group("b"), m.start("b")), read(m.group("se"), m.start("se"))) if m else (None, None)
+            estimate, se = _value_se(row[k][0].text, mark)
         elif roles[k] == "BCI":
             both = _cell_interval(row[k][0].text, mark, with_estimate=True)
             estimate = both[0] if both is not None else None
@@ -531,26 +548,22 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if ratio is None or numbers[interval[2]][0] != "=":
                 continue
             name = heads.get(interval[2], "OR").strip() or "OR"
-            ci = interval[0]
-            rep = Reported(None, "", ratio.start, ratio.start, ratio.end, p=p, effects=[Effect("OR", ratio, ratio.start, ratio.end, ratio.start, name, ci)])
-            rep.text = f"{name} = {ratio.text}, {ci.level * 100:g}% CI [{ci.low.text}, {ci.high.text}]"
+            rep = _ratio_statistic("OR", name, ratio, interval[0], p, ratio.end)
             unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
         else:
             if p is None and interval is None:
                 continue
             diff = roles[k] == "diff" or _MEAN_DIFFERENCE.match(heads.get(k, "")) is not None
             name = "mean difference" if diff else "B"
-            rep = Reported(None, "", estimate.start, estimate.start, estimate.end, p=p)
+            rep = Reported(None, "", estimate.start, estimate.start, estimate.end, p=_p_after(p, estimate.end))
             rep.text = f"{name} = {estimate.text}" + (f", SE = {se.text}" if se is not None else "")
             if interval is not None:
                 rep.ci, rep.estimate = interval[0], estimate
                 rep.text += f", {rep.ci.level * 100:g}% CI [{rep.ci.low.text}, {rep.ci.high.text}]"
+            rep.text += p_text(p)
             unit = row[k][0]
             how = f"the {heads.get(k, name).strip() or name} column" + (", its SE" if se is not None else "") + (f", {interval[4]}" if interval else "")
-        if p is not None:
-            rep.p = replace(p, start=rep.end + 2, end=rep.end + 2 + p.end - p.start, symbol_start=rep.end + 2)  # (after the estimate)
-            rep.text += " " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}"  # type: ignore[union-attr]
-            how += ", the p column"
+        how += ", the p column" if p is not None else ""
         coefficient = (estimate, se) if se is not None else None  # (an odds ratio's row: its B and SE too)
         out.append(TableStatistic(unit, rep, None, f"read from the table's row: {how} (no test column)", (), coefficient))
     return out
@@ -660,14 +673,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if p_col is not None and later is not None and later < p_col:
                 p_col = None  # the p beyond the next ratio column is that one's
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
-            if p is not None:  # placed after the CI, as the row reads (its own cell's offsets would put it first)
-                p = replace(p, start=high.end + 2, end=high.end + 2 + p.end - p.start, symbol_start=high.end + 2)
             name = roles[c].removeprefix("ratio:")
-            ci = Interval(0.95, low, high, low.start, high.end)
-            effect = Effect(name, estimate, estimate.start, high.end, estimate.start, name, ci)
-            rep = Reported(None, "", estimate.start, estimate.start, high.end, p=p, effects=[effect])
-            p_text = "" if p is None else (" " + p.symbol_text if p.op == "ns" else f", p {p.op} {p.number.text}")  # type: ignore[union-attr]
-            rep.text = f"{name} = {estimate.text}, 95% CI [{low.text}, {high.text}]{p_text}"
+            rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p, high.end)
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) column" + (", the p column" if p else "")))
         # a statistic whose value sits alone under a head named t, F, χ², r or z
         for c, role in roles.items():

@@ -22,7 +22,7 @@ from typing import TYPE_CHECKING, Sequence
 from ..style.numbers import numbers_for
 from ..styled import StyledText, escape_markup, lowered_plain
 from .checks import RATIOS, Finding
-from .parsing import PValue, Reported, subscript
+from .parsing import PValue, Reported, icc_form, subscript
 from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_font, symbol_text
 
 if TYPE_CHECKING:
@@ -238,7 +238,7 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     lost = _lost_word(rep, old, plain)
     if lost:
         return None, f"the restyled text would drop \u201c{lost}\u201d"
-    form = next((e.symbol_text for e in rep.effects if e.name == "ICC" and "(" in e.symbol_text), None)
+    form = icc_form(rep)
     if form is not None:  # ICC(2,1), ICC(3,k): which estimator it is, which the style's "ICC" does not say
         return None, f"the restyled text would drop the ICC's form, \u201c{form}\u201d"
     doubted = any(f.code in _P_DOUBTS for f in findings)
