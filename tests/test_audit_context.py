@@ -1675,3 +1675,53 @@ def test_an_interval_is_checked_against_the_se_beside_it(tmp_path):
     assert "coefficient-does-not-fit" in e.codes and "SEs each side" in e.message, e.message
     (e,) = audit_units([Unit("c", "Tenure predicted alertness (b = 0.42, SE = 0.30, 95% CI [0.22, 0.62], p = .17).")])
     assert "SEs each side" in e.message
+
+
+# Results of an experiment on face ensembles, Journal of Vision (https://jov.arvojournals.org/article.aspx?articleid=2245945),
+# as the journal's site prints them: each F followed, in its sentence, by the two groups' means the effect compares
+_JOV_ENSEMBLE = (
+    "We found a significant main effect of Test Face, F(1, 38) = 295.73, p < 0.001, η2p = 0.89, with participants responding "
+    "\"present\" more often for test faces that matched the preceding set (M = 81.6%) than for those that did not (M = 42.4%). "
+    "In addition, we found a significant main effect of Familiarity, F(1, 38) = 4.69, p = 0.037, η2p = 0.11, with a larger "
+    "\"present\" response for familiar test faces (M = 63.9%) than for unfamiliar ones (M = 60.1%).")
+
+
+def test_the_groups_means_after_words_are_not_the_tests():
+    """A group's mean typed words after a test ("F(1, 38) = 4.69, p = 0.037, η2p = 0.11, with a larger response for
+    familiar faces (M = 63.9%) than …") had been read into the F's clause: the F's text ran to the second mean, and its
+    revision was refused for the words it would have dropped. The means are the groups', each a descriptive of its own,
+    and the F is restyled alone; a mean typed right after a test's parts, or an SD after its mean's unit, stays with it."""
+    entries = audit_units([Unit("c", _JOV_ENSEMBLE)], restyle=True)
+    found = {e.found: e for e in entries}
+    assert set(found) == {"F(1, 38) = 295.73, p < 0.001, η2p = 0.89", "F(1, 38) = 4.69, p = 0.037, η2p = 0.11",
+                          "M = 81.6", "M = 42.4", "M = 63.9", "M = 60.1"}
+    f = found["F(1, 38) = 4.69, p = 0.037, η2p = 0.11"]
+    assert f.codes == ["leading-zero"] and f.revision.plain() == "F(1, 38) = 4.69, p = .037, η²ₚ = .11", f.kept
+    assert all(not found[m].codes for m in ("M = 81.6", "M = 42.4", "M = 63.9", "M = 60.1"))
+    (e,) = audit_units([Unit("c", "The groups differed, t(38) = 2.14, p = .039, M = 34.2 years, SD = 11.0.")])
+    assert e.found == "t(38) = 2.14, p = .039, M = 34.2 years, SD = 11.0"
+
+
+# Results of an experiment on face learning, Journal of Vision (https://jov.arvojournals.org/article.aspx?articleid=2122460),
+# as the journal's site prints them (line breaks as there)
+_JOV_TRAINING = ("An analysis of SAME trials revealed an increase in performance as a result of training, but it was not "
+                 "statistically significant\nF(1,23) = 0.144, MSe = 160.3,\np = 0.707, n.s.")
+
+
+def test_ns_beside_a_statistics_own_p_is_its_verdict_not_a_p():
+    """"p = 0.707, n.s." had given the "n.s." a statistic of its own, flagged for a threshold where the exact p stood
+    beside it. It is the author's verdict on the statistic before it: not read as a p, and checked against that p — an
+    "ns" beside a p below alpha is a warning (an alpha of a correction the text names makes it a note). The F and its p:
+    scipy's F(1, 23) tail at 0.144 is .708, as printed."""
+    assert round(stats.f.sf(0.144, 1, 23), 2) == 0.71
+    entries = audit_units([Unit("c", _JOV_TRAINING)])
+    assert [e.found for e in entries] == ["F(1,23) = 0.144, MSe = 160.3,\np = 0.707"]
+    assert "p-threshold" not in entries[0].codes and "ns-below-alpha" not in entries[0].codes
+    (e,) = audit_units([Unit("c", _JOV_TRAINING.replace("0.144", "7.49").replace("0.707", "0.012"))])
+    assert "ns-below-alpha" in e.codes and "p = 0.012, n.s." in e.message, e.message
+    (e,) = audit_units([Unit("c", "The groups did not differ, t(40) = 2.10, p < .05 (ns).")])
+    assert "ns-below-alpha" in e.codes
+    (e,) = audit_units([Unit("c", "Pairs were compared with Bonferroni correction: t(40) = 2.10, p = .042, ns.")])
+    assert "ns-below-alpha" not in e.codes and any("Bonferroni" in n for n in e.notes)
+    (e,) = audit_units([Unit("c", "The groups did not differ, t(40) = 1.10, ns.")])  # a lone ns is the statistic's p, as before
+    assert e.found == "t(40) = 1.10, ns" and e.codes == ["p-threshold"]

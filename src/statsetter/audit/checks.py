@@ -31,6 +31,7 @@ from .parsing import Interval as TypedInterval
 CODES: dict[str, tuple[str, str]] = {
     "p-does-not-follow": ("the reported p does not follow from the statistic and df (without df: under no df at all)", "Numbers: exact p (APA 7 §6.36); consistency as in Nuijten et al. (2016)"),
     "verdict-changes": ("with the recomputed p the verdict at alpha is the other one", "Numbers: decision-preserving p (practice)"),
+    "ns-below-alpha": ("the text calls a statistic not significant (ns) beside its own p below alpha", "Numbers: decision-preserving p (practice)"),
     "one-sided": ("the p agrees only with a one-sided test; say so if that was the test", "Say which test was run (practice)"),
     "impossible-r": ("a correlation outside [−1, 1]", "Reporting by test: correlation (practice)"),
     "impossible-p": ("a p value outside [0, 1]", "Numbers: p (APA 7 §6.36)"),
@@ -89,7 +90,7 @@ SEVERITY: dict[str, str] = {
     "p-does-not-follow": "error", "verdict-changes": "error", "impossible-r": "error", "impossible-p": "error",
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
-    "one-sided": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
+    "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
     "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
@@ -665,6 +666,19 @@ def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]], roman: 
         elif start not in italic:
             bad.append(f"{symbol} (not italic)")
     return [Finding("italics", "Latin statistical symbols are italic; Greek letters are not.", ", ".join(bad))] if bad else []
+
+
+def verdict_word(rep: Reported, alpha: float, evidence: str) -> list[Finding]:
+    """An "ns" the text puts beside a statistic's own p that lies below alpha ("p = .012, n.s."; "p < .05, ns"): the
+    verdict and the p disagree at alpha, unless the verdict uses another alpha (a corrected one), which the text should say."""
+    p = rep.p
+    if p is None or p.number is None or p.op not in ("=", "<", "≤"):
+        return []
+    value = p.number.value
+    if not (value < alpha or (p.op != "=" and value <= alpha)):
+        return []
+    return [Finding("ns-below-alpha", f"The text calls it not significant, but its p {p.op} {p.number.text} is below alpha = {alpha:g}: "
+                                      "say which alpha the verdict uses (a corrected one?), or correct the p or the word.", evidence)]
 
 
 _NOT_SCORES = {"age", "diff", "difference"}  # means GRIM does not apply to: an age, a difference between means

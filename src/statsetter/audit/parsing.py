@@ -545,10 +545,25 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
             out += _orphans(pat, text, piece, stop, rare)
             piece = (b.end() if b else gap_end) if stop < gap_end else gap_end
     out.sort(key=lambda r: r.start)
+    if len(out) > 1 and any(_lone_ns(r) for r in out):  # an "ns" after a statistic's own p: its verdict, not a p
+        out = [r for i, r in enumerate(out) if not (i and _lone_ns(r) and ns_after(text, out[i - 1]))]
     bare = next((r.start for r in out if r.symbol is not None and r.p is None), None)  # (most statistics carry their p)
     if bare is not None:
         _share(pat, text, out, bare)
     return out
+
+
+_NS_AFTER = re.compile(r"[\s,;(]*n(?:\.\s?s\.|s)(?![\w])")  # ", ns", " (n.s.)", "; n. s." (the forms pat.p reads as "ns")
+
+
+def _lone_ns(rep: Reported) -> bool:
+    return rep.symbol is None and rep.p is not None and rep.p.op == "ns" and not rep.effects and not rep.descriptives and rep.ci is None
+
+
+def ns_after(text: str, rep: Reported) -> "re.Match[str] | None":
+    """Whether "ns" (or "n.s.") follows a statistic that gives a p of its own ("F(1, 23) = 0.14, p = .707, n.s."): the
+    author's verdict beside the p, not a p (no statistic of its own; checked against the p: checks.verdict_word)."""
+    return _NS_AFTER.match(text, rep.end) if rep.symbol is not None and rep.p is not None and rep.p.op != "ns" else None
 
 
 def p_text(p: "PValue | None") -> str:
@@ -963,6 +978,9 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
             number = pat.to_number(m.group("num"), m.start("num"))
             if name is None or number is None:
                 continue
+            if rep.symbol is not None and name in _DESCRIPTIVE and not rep.descriptives and _WORDS.search(text, last_end, m.start()):
+                continue  # a group's mean after words ("F(1, 38) = 4.69, p = .037, with more for familiar faces (M = 63.9%) than …"):
+                # the groups', not the test's: read as descriptives of their own, and the test restyled without them
             in_parentheses = name == "M" and m.group("name").endswith(")")  # "M (SD) = 3.2 (0.5)"
             if in_parentheses:
                 paired = _paren_sd(pat, text, m, number)
@@ -1017,6 +1035,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     return again
 
 
+_WORDS = re.compile(r"[^\W\d_]{2}")  # a word between a statistic's parts (two letters: "vs", "in", "with")
 _PLUS_MINUS_MEAN = re.compile(r"(?:\b[Mm]ean|(?<![\w])M)\s*±\s*$")  # "M ± " or "mean ± " before an SD's name
 _PLUS_MINUS_VALUE = re.compile(r"\s*±\s*([-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))")
 

@@ -23,8 +23,8 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record
-from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, verdict_word
+from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after
 from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -461,10 +461,20 @@ def _audit_units(
         if lead is not None and lead[2] is not None:  # "b = 0.42, SE = 0.10, 95% CI [0.22, 0.62], p < .001": the p's B and interval
             rep = replace(rep, ci=lead[2], estimate=lead[0])
         findings = impossible(rep) + consistent
+        ns_note = ""
         if local is not None:
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
+            verdict = ns_after(unit.text, local)
+            if verdict is not None:  # "p = .012, n.s.": the author's verdict beside the p
+                disagree = verdict_word(local, alpha, unit.text[local.p.start : verdict.end()])  # type: ignore[union-attr]
+                procedure = _PROCEDURE.search(item.context) if disagree else None
+                if procedure is not None:  # a corrected alpha the text names: the verdict may be the corrected test's
+                    ns_note = (f"The text calls it not significant beside a p below alpha = {alpha:g}; it names a multiple-comparison "
+                               f"procedure (\"{procedure.group()}\"), so the verdict is read as the corrected alpha's and not checked.")
+                else:
+                    findings += disagree
             if before is not None:
                 findings += coefficient_ratio(local, before)
             if local.symbol is not None:
@@ -509,6 +519,8 @@ def _audit_units(
             last = unit.source_index(rep.end - 1) + 1
             location = f"line {line}, characters {first - line_start + 1}–{last - line_start}"
         notes: list[str] = [f"Read from a table: {item.how.removeprefix('read from the table' + chr(39) + 's row: ')}."] if item.how else []
+        if ns_note:
+            notes.append(ns_note)
         if lead is not None:
             notes.append(f"Checked with the B typed before it (B = {lead[0].text}" + (f", SE = {lead[1].text}" if lead[1] is not None else "")
                          + (f", {lead[2].level * 100:g}% CI [{lead[2].low.text}, {lead[2].high.text}]" if lead[2] is not None else "") + ").")
