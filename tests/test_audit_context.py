@@ -1725,3 +1725,36 @@ def test_ns_beside_a_statistics_own_p_is_its_verdict_not_a_p():
     assert "ns-below-alpha" not in e.codes and any("Bonferroni" in n for n in e.notes)
     (e,) = audit_units([Unit("c", "The groups did not differ, t(40) = 1.10, ns.")])  # a lone ns is the statistic's p, as before
     assert e.found == "t(40) = 1.10, ns" and e.codes == ["p-threshold"]
+
+
+# A table of a binary logistic regression in J Am Board Fam Med (www.jabfm.org; "Binary Logistic Regression:
+# Guideline-Concordant Depression Follow-up Care vs Independent Variables"), as the journal's site prints it: each odds
+# ratio's P in the column before it (the note's marks † and ‡ are the table's; its note was not in the copy)
+_JABFM_TABLE = """| Variables | P† | Unadjusted OR (95% CI) | P‡ | Adjusted OR (95% CI) |
+|---|---|---|---|---|
+| Depression with chronic conditions (CCI score ≥1) | .16 | 0.41 (0.12–1.14) | .15 | 0.29 (0.06–1.49) |
+| Moderately severe | .01 | 0.14* (0.03–0.60) | .01 | 0.11* (0.02–0.55) |
+| Severe | .01 | 0.50* (0.01–0.42) | .01 | 0.04* (0.01–0.41) |
+| 45–54 | .34 | 0.43 (0.08–2.43) | .46 | 0.44 (0.05–3.90) |
+| African-American | .11 | 2.92 (0.79–10.81) | .35 | 2.22 (0.42–11.77) |
+"""
+
+
+def test_an_odds_ratios_p_in_the_column_before_it(tmp_path):
+    """Where each odds ratio's P stands before it ("P | OR (95% CI) | P | Adjusted OR (95% CI)"), the crude OR had been
+    given the adjusted OR's P (the next P to its right) and the adjusted OR none. Each takes the P just before it now;
+    the layout with the P after each ratio keeps its reading. The table's own slip — an OR of 0.50 outside its interval
+    0.01–0.42 — is found either way."""
+    path = tmp_path / "t.md"
+    path.write_text("Table 3. Binary logistic regression\n\n" + _JABFM_TABLE, encoding="utf-8")
+    found = {e.found: e for e in audit_file(path)}
+    assert "OR = 2.92, 95% CI [0.79, 10.81], p = .11" in found and "aOR = 2.22, 95% CI [0.42, 11.77], p = .35" in found
+    assert "OR = 0.43, 95% CI [0.08, 2.43], p = .34" in found and "aOR = 0.44, 95% CI [0.05, 3.90], p = .46" in found
+    assert found["OR = 0.50, 95% CI [0.01, 0.42], p = .01"].codes == ["ci-excludes-estimate"]
+    assert sum(bool(e.codes) for e in found.values()) == 1
+    after = "\n".join("| " + " | ".join(c[:1] + [c[2], c[1], c[4], c[3]]) + " |" for c in
+                      ([x.strip() for x in line.strip("|").split("|")] for line in _JABFM_TABLE.splitlines()[2:]))
+    path.write_text("Table 3. Binary logistic regression\n\n| Variables | Unadjusted OR (95% CI) | P | Adjusted OR (95% CI) | P |\n"
+                    "|---|---|---|---|---|\n" + after + "\n", encoding="utf-8")
+    found = {e.found: e for e in audit_file(path)}
+    assert "OR = 2.92, 95% CI [0.79, 10.81], p = .11" in found and "aOR = 2.22, 95% CI [0.42, 11.77], p = .35" in found

@@ -662,16 +662,25 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if sizes:
                 groups, groups_guessed = sizes, False
             continue
-        # a ratio and its CI in one cell, its p in the next p column to the right (a crude and an adjusted pair side by side)
+        # a ratio and its CI in one cell, its p in the next p column to the right (a crude and an adjusted pair side by side),
+        # or in the one just before it where each ratio column has its p before it and none comes after the last ("P | OR
+        # (95% CI) | P | Adjusted OR (95% CI)", as a family medicine journal lays it out)
+        ratio_cols = [k for k in sorted(roles) if roles[k].startswith("ratio:")]
+        p_cols = [k for k in sorted(roles) if roles[k] == "p"]
+        p_before = bool(ratio_cols) and bool(p_cols) and p_cols[-1] < ratio_cols[-1] and all(
+            any(a < k < b for k in p_cols) for a, b in zip([-1] + ratio_cols, ratio_cols))
         for c, cell in ratios.items():
             if cell is None:
                 continue
             estimate, low, high = cell
             unit = row[c][0]
-            p_col = next((k for k in sorted(roles) if k > c and roles[k] == "p"), None)
-            later = next((k for k in sorted(roles) if k > c and roles[k].startswith("ratio:")), None)
-            if p_col is not None and later is not None and later < p_col:
-                p_col = None  # the p beyond the next ratio column is that one's
+            if p_before:
+                p_col = max(k for k in p_cols if k < c)
+            else:
+                p_col = next((k for k in p_cols if k > c), None)
+                later = next((k for k in ratio_cols if k > c), None)
+                if p_col is not None and later is not None and later < p_col:
+                    p_col = None  # the p beyond the next ratio column is that one's
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
             name = roles[c].removeprefix("ratio:")
             rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p, high.end)
