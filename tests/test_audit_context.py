@@ -1758,3 +1758,68 @@ def test_an_odds_ratios_p_in_the_column_before_it(tmp_path):
                     "|---|---|---|---|---|\n" + after + "\n", encoding="utf-8")
     found = {e.found: e for e in audit_file(path)}
     assert "OR = 2.92, 95% CI [0.79, 10.81], p = .11" in found and "aOR = 2.22, 95% CI [0.42, 11.77], p = .35" in found
+
+
+# Odds-ratio tables as epidemiology journals print them, each with its interval and p (or marks) in columns of its own:
+# Table 7 of PMC10483752 (as PubMed Central prints it); Table 2 of a Gut article on squamous dysplasia (gut.bmj.com, as the
+# journal's site prints it, three rows); a BMJ Open table of knee osteoarthritis against cognitive scores (three models side
+# by side, two rows); Table 3 of Lowenfels et al., BMC Gastroenterology 2011, 11:101 (doi:10.1186/1471-230X-11-101; marks on
+# the interval, defined in the note)
+_OR_TABLES = {
+    "Table 7": "| Risk factor | Odds ratio | 95% CI | P value |\n|---|---|---|---|\n| Age | 0.64 | 0.05–7.63 | 0.73 |\n"
+               "| Current | 7.51 | 1.63–34.71 | < 0.01* |\n| Presence of untreated dental caries | 3.33 | 1.23–9.00 | < 0.05* |\n\n"
+               "*P < 0.05 (statistically significant in multivariate logistic regression via forced-entry method)\n",
+    "Table 2. Odds ratios (OR) and 95% confidence interval (CI)": "| Variable | OR | 95% CI | p Value† |\n|---|---|---|---|\n"
+               "| Age, 10 years | 1.03 | 0.99, 1.06 | 0.18 |\n| Family history of cancer, yes | 1.57 | 1.13, 2.18 | 0.0065 |\n"
+               "| Heating stove without chimney, yes | 2.22 | 1.27, 3.86 | 0.0052 |\n",
+    "Table 2. ORs for occurrence of knee osteoarthritis": "| Explanatory variables | Reference | OR | 95% CI | p Value | OR | 95% CI | p Value |\n"
+               "|---|---|---|---|---|---|---|---|\n| Gender | 0: men, 1: women | 4.36 | 2.33 to 8.16 | <0.001** | 4.02 | 1.50 to 10.74 | 0.006** |\n"
+               "| Region | 0: mountainous area, 1: coastal area | 0.78 | 0.45 to 1.35 | 0.380 | 0.76 | 0.43 to 1.35 | 0.354 |\n",
+    "Table 3. Multivariate ordinal logistic regression": "| | Males (n = 48,395) | | Females (n = 34,246) | |\n|---|---|---|---|---|\n"
+               "| | OR | (95% CI) | OR | (95% CI) |\n| 50 - 59 | 1.06 | (0.98 - 1.16) | 1.00 | (0.91 - 1.11) |\n"
+               "| 60 - 69 | 1.29 | (1.18 - 1.40)** | 1.14 | (1.03 - 1.26)* |\n\nAll odds ratios are adjusted for all other covariates in the "
+               "table. * P < .01 **P < .0001\n",
+}
+
+
+def test_odds_ratio_tables_with_their_interval_and_p_in_columns_of_their_own(tmp_path):
+    """"Odds ratio | 95% CI | P value" (and the same for models side by side, or with the interval's marks defined in the
+    note) had not been read at all: only a ratio and its interval in one cell was. Each odds ratio is now read with its
+    interval and its p — or the bound its marks stand for — and checked: the interval holds it and agrees with the p about
+    1. The published tables are consistent; a ratio outside its interval, an interval that excludes 1 beside a p far above
+    .05, and a mark of significance on an interval that holds 1 are found."""
+    path = tmp_path / "t.md"
+    read = {}
+    for caption, table in _OR_TABLES.items():
+        path.write_text(f"{caption}\n\n{table}", encoding="utf-8")
+        entries = [e for e in audit_file(path) if e.unit.cell is not None]
+        assert entries and all(not e.codes for e in entries), [(e.found, e.codes) for e in entries]
+        read.update({e.found: e for e in entries})
+    assert {"Odds ratio = 7.51, 95% CI [1.63, 34.71], p < 0.01", "OR = 1.57, 95% CI [1.13, 2.18], p = 0.0065",
+            "OR = 4.02, 95% CI [1.50, 10.74], p = 0.006", "OR = 0.76, 95% CI [0.43, 1.35], p = 0.354",
+            "OR = 1.29, 95% CI [1.18, 1.40], p < .0001", "OR = 1.06, 95% CI [0.98, 1.16]"} <= set(read)
+    mutated = _OR_TABLES["Table 7"].replace("| 7.51 |", "| 0.71 |").replace("1.23–9.00 | < 0.05*", "1.23–9.00 | 0.73")
+    path.write_text(f"Table 7\n\n{mutated}", encoding="utf-8")
+    codes = {e.found: e.codes for e in audit_file(path) if e.codes}
+    assert codes == {"Odds ratio = 0.71, 95% CI [1.63, 34.71], p < 0.01": ["ci-excludes-estimate"],
+                     "Odds ratio = 3.33, 95% CI [1.23, 9.00], p = 0.73": ["ci-p-disagree"]}, codes
+    marked = _OR_TABLES["Table 3. Multivariate ordinal logistic regression"].replace("(0.98 - 1.16)", "(0.98 - 1.16)*")
+    path.write_text(f"Table 3\n\n{marked}", encoding="utf-8")
+    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree"]]
+
+
+def test_a_ratio_heads_spelled_out_and_marks_typed_as_the_low_asterisk(tmp_path):
+    """"Univariate Odds Ratio (95% C.I)" over "4.4*(2.0-9.8)" (Table III of PMC10862421, as PubMed Central prints it) had
+    not been read; nor had a ratio marked with the low asterisk "⁎" that PubMed Central's copies of publishers' tables print
+    (PMC9877321's Table 3: "1.24 (1.05,1.45)⁎⁎"), whose note's "⁎ p < 0.05" was read as a p of its own. Here the marks are
+    those of Lowenfels et al.'s Table 3 (above), printed so."""
+    path = tmp_path / "t.md"
+    path.write_text("Table-III. Odds ratio with 95% confidence interval using Binary Logistic Regression.\n\n"
+                    "| Risk Factors | Univariate Odds Ratio (95% C.I) | Multivariate Odds Ratio (95% C.I) |\n|---|---|---|\n"
+                    "| Hypertension | 4.4*(2.0-9.8) | 2.5(0.5-11.) |\n| Smoker | 1.2(0.4-3.2) | 0.7(0.2-2.4) |\n", encoding="utf-8")
+    assert {e.found for e in audit_file(path)} == {"OR = 4.4, 95% CI [2.0, 9.8]", "OR = 1.2, 95% CI [0.4, 3.2]", "OR = 0.7, 95% CI [0.2, 2.4]"}
+    path.write_text("Table 3\n\n| | Males OR (95% CI) | Females OR (95% CI) |\n|---|---|---|\n| 60 - 69 | 1.29 (1.18 - 1.40)⁎⁎ | "
+                    "1.14 (1.03 - 1.26)⁎ |\n| VA/Military | 0.97 (0.90 - 1.05)⁎ | 0.90 (0.78 - 1.03) |\n\n⁎ P < .01 ⁎⁎P < .0001\n", encoding="utf-8")
+    entries = audit_file(path)
+    assert {e.found: e.codes for e in entries} == {"OR = 1.29, 95% CI [1.18, 1.40], p < .0001": [], "OR = 1.14, 95% CI [1.03, 1.26], p < .01": [],
+                                                   "OR = 0.97, 95% CI [0.90, 1.05], p < .01": ["ci-p-disagree"], "OR = 0.90, 95% CI [0.78, 1.03]": []}

@@ -25,7 +25,10 @@ from ..records.result import _unchecked_maker
 
 __all__ = ["Number", "PValue", "Interval", "Effect", "Reported", "find_statistics", "symbol_of", "decimal_mark_of"]
 
-_SIGNIFICANCE = "*†‡§^"  # the marks of significance a table or its note sets ("3.10**", "*p < .05", "0.12 ^")
+# the marks of significance a table or its note sets ("3.10**", "*p < .05", "0.12 ^"); an asterisk also as the low asterisk
+# and the asterisk operator a copy from a publisher's page or a PDF gives ("1.24 (1.05,1.45)⁎⁎", "⁎ p < 0.05")
+_SIGNIFICANCE = "*†‡§^⁎∗"
+ONE_STAR = str.maketrans("⁎∗", "**")  # those asterisks as the one a note's definitions are looked up by
 
 T = TypeVar("T")
 _MINUS = "-−–‐"  # hyphen-minus, minus, en dash, hyphen: all read as minus

@@ -18,7 +18,7 @@ import re
 from dataclasses import dataclass, replace
 from typing import TYPE_CHECKING, Sequence
 
-from .parsing import _SIGNIFICANCE, Effect, Interval, Number, PValue, Reported, _patterns, p_text, statistic_text
+from .parsing import _SIGNIFICANCE, ONE_STAR, Effect, Interval, Number, PValue, Reported, _patterns, p_text, statistic_text
 from .reading import Unit
 
 if TYPE_CHECKING:
@@ -99,7 +99,10 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
                       r"|[χΧ]\s?[²2](?:\s+continuity\s+correction)?)[a-d]?\s*")
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
-_RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr)[a-d*†‡§]?\s*\(\s*95\s?%\s?ci\s*\)[a-d*†‡§]?")
+# (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
+_RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
+                         r"|incidence\s+rate\s+ratio)[a-d*†‡§]?\s*\(\s*95\s?%\s?c\.?i\.?\s*\)[a-d*†‡§]?")
+_RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR"}
 _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
                          rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
 
@@ -109,7 +112,7 @@ def _ratio_role(head: str) -> str | None:
     m = _RATIO_HEAD.fullmatch(head)
     if m is None:
         return None
-    name = m.group("name").upper()
+    name = _RATIO_NAMES.get(" ".join(m.group("name").lower().split()), m.group("name").upper())
     adjusted = m.group("adj") is not None or re.search(r"(?i)\badjusted\b|\bmultivariable\b", head) is not None
     return f"ratio:{'a' if adjusted and name != 'IRR' else ''}{name}"
 
@@ -140,7 +143,7 @@ def star_bounds(text: str, mark: str) -> dict[str, tuple[str, Number]]:
     for m in _STAR_SAID.finditer(text):
         number = _patterns(mark).to_number(m.group(3), 0)
         if number is not None and 0 < number.value < 1:
-            out.setdefault(m.group(1), (m.group(2), number))
+            out.setdefault(m.group(1).translate(ONE_STAR), (m.group(2), number))
     return out
 
 
@@ -186,6 +189,8 @@ def _head_text(text: str) -> str:
 def _role(text: str) -> str | None:
     head = _head_text(text)
     if head.endswith(")"):  # (every cell of every row is asked: the df suffixes only where one can stand)
+        if head[:1] == "(" and head.count("(") == 1:  # a head in parentheses, as its cells are: "(95% CI)" over "(0.98 - 1.16)"
+            head = head[1:-1].strip()
         head = _DFS_IN_HEAD.sub("", _DF_IN_HEAD.sub("", head))
     for pattern, role in _ROLES:
         if pattern.fullmatch(head):
@@ -514,14 +519,15 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "d
     return (b, se), effects
 
 
-def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str], said: str, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str], said: str, mark: str,  # type: ignore[no-untyped-def]
+                       stars: "dict[str, tuple[str, Number]] | None" = None) -> list[TableStatistic]:
     """A model's coefficients in a table without a test column (B, SE, 95% CI, β, p: health and psychology journals'
     usual layout; practice): each estimate column — B, "B (SE)", "B (95% CI)", a mean difference — with the SE, interval
     and p after it up to the next one (models side by side), read as the estimate with its interval and p, and its B and
     SE (checked: the interval holds the estimate and agrees with the p; the p follows from B / SE under some df); an
     interval after an odds ratio column is the odds ratio's. A row without a p or an interval is not read."""
     out = []
-    starts = sorted(k for k, role in roles.items() if role in ("B", "BSE", "BCI", "diff"))
+    starts = sorted(k for k, role in roles.items() if role in ("B", "BSE", "BCI", "diff")) or sorted(k for k, role in roles.items() if role == "expB")
     for i, k in enumerate(starts):
         end = starts[i + 1] if i + 1 < len(starts) else 1 << 30
         if k not in row:
@@ -548,10 +554,13 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if ratio is None or numbers[interval[2]][0] != "=":
                 continue
             name = heads.get(interval[2], "OR").strip() or "OR"
-            rep = _ratio_statistic("OR", name, ratio, interval[0], p, ratio.end)
+            marked = _marked_bound(f"{row[interval[2]][0].text} {row[k2][0].text if (k2 := _own_column(part, k, 'ci')) in row else ''}",
+                                   stars, ratio.end) if p is None and stars else None
+            rep = _ratio_statistic("OR", name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
             unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
+            how += f", its {marked[1]}" if marked else ""
         else:
-            if p is None and interval is None:
+            if (p is None and interval is None) or roles[k] == "expB":  # (an odds ratio without its interval: a p alone)
                 continue
             diff = roles[k] == "diff" or _MEAN_DIFFERENCE.match(heads.get(k, "")) is not None
             name = "mean difference" if diff else "B"
@@ -567,6 +576,19 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
         coefficient = (estimate, se) if se is not None else None  # (an odds ratio's row: its B and SE too)
         out.append(TableStatistic(unit, rep, None, f"read from the table's row: {how} (no test column)", (), coefficient))
     return out
+
+
+_MARKS_IN = re.compile(rf"[{_SIGNIFICANCE}]+")
+
+
+def _marked_bound(text: str, stars: "dict[str, tuple[str, Number]]", at: int) -> "tuple[PValue, str] | None":
+    """The p bound the marks in ``text`` stand for, as the table's note defines them ("(1.18 - 1.40)**" with "**P <
+    .0001"), with the reading said; None without a defined mark."""
+    m = _MARKS_IN.search(text)
+    bound = stars.get(m.group().translate(ONE_STAR)) if m is not None else None
+    if bound is None:
+        return None
+    return PValue(bound[0], bound[1], at, at, at, ""), f"{m.group()} ({m.group()}p {bound[0]} {bound[1].text}, as the table defines it)"  # type: ignore[union-attr]
 
 
 _SHOWN = {"eta2_p": "η²p", "eta2": "η²", "d": "d", "d_z": "d_z", "R2": "R²", "delta_R2": "ΔR²", "R2_adj": "adjusted R²", "R_multiple": "R", "omega2_p": "ω²p", "omega2": "ω²"}  # an effect column's symbol in a reading
@@ -652,11 +674,14 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             read = _value_df(row[c][0].text, mark)
             if read is not None:
                 numbers[c], cell_dfs[c] = read
-        coefficients = not {"B", "SE", "BSE", "BCI", "beta"}.isdisjoint(roles.values())  # a model's coefficients table
+        # a model's coefficients table; or a table of odds ratios with their intervals or p in columns of their own ("Odds
+        # ratio | 95% CI | P value"; "OR | 95% CI | p Value" for each of three models side by side)
+        coefficients = not {"B", "SE", "BSE", "BCI", "beta"}.isdisjoint(roles.values()) or (
+            "expB" in roles.values() and not {"ci", "ci_low", "p"}.isdisjoint(roles.values()))
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             if coefficients and not any(role in _STAT_ROLES or role == "value" for role in roles.values()):  # no test column
-                found += _bare_coefficients(row, roles, numbers, heads, levels_said, mark)
+                found += _bare_coefficients(row, roles, numbers, heads, levels_said, mark, stars)
                 continue
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
             if sizes:
@@ -683,8 +708,10 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                     p_col = None  # the p beyond the next ratio column is that one's
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
             name = roles[c].removeprefix("ratio:")
-            rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p, high.end)
-            found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) column" + (", the p column" if p else "")))
+            marked = _marked_bound(unit.text, stars, high.end) if p is None and p_col is None and stars else None  # "1.29 (1.18–1.40)**"
+            rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p or (marked[0] if marked else None), high.end)
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) column" + (", the p column" if p else "")
+                                        + (f", its {marked[1]}" if marked else "")))
         # a statistic whose value sits alone under a head named t, F, χ², r or z
         for c, role in roles.items():
             by_row = role == "value"
@@ -724,7 +751,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 how += ", the p column"
             elif stars:  # "3.10**" with "**p < .01" in the note: p < .01
                 marks = _BARE.fullmatch(unit.text)
-                bound = stars.get(marks.group("marks") or "") if marks is not None else None
+                bound = stars.get((marks.group("marks") or "").translate(ONE_STAR)) if marks is not None else None
                 if bound is not None:
                     p = PValue(bound[0], bound[1], value.end, value.end, value.end, "")
                     how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text}, as the table defines it)"  # type: ignore[union-attr]
@@ -873,12 +900,12 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
             continue
         unit = rows[r][c][0]
         m = _BARE.fullmatch(unit.text)
-        if m is None or m.group("op") or not m.group("marks") or m.group("marks") not in stars or not _DECIMALS.search(m.group("num")):
+        if m is None or m.group("op") or not m.group("marks") or m.group("marks").translate(ONE_STAR) not in stars or not _DECIMALS.search(m.group("num")):
             continue
         value = _patterns(mark).to_number(m.group("num"), m.start("num"))
         if value is None or abs(value.value) > 1:
             continue
-        op, bound = stars[m.group("marks")]
+        op, bound = stars[m.group("marks").translate(ONE_STAR)]
         p = PValue(op, bound, value.end, value.end, value.end, "")
         df = Number(f"{n - 2}", float(n - 2), 0, 0, 0)
         rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
