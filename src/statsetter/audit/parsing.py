@@ -548,7 +548,7 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
             out += _orphans(pat, text, piece, stop, rare)
             piece = (b.end() if b else gap_end) if stop < gap_end else gap_end
     out.sort(key=lambda r: r.start)
-    if len(out) > 1 and any(_lone_ns(r) for r in out):  # an "ns" after a statistic's own p: its verdict, not a p
+    if len(out) > 1 and ("ns" in text or "n." in text) and any(_lone_ns(r) for r in out):  # an "ns" after a statistic's own p: its verdict, not a p
         out = [r for i, r in enumerate(out) if not (i and _lone_ns(r) and ns_after(text, out[i - 1]))]
     bare = next((r.start for r in out if r.symbol is not None and r.p is None), None)  # (most statistics carry their p)
     if bare is not None:
