@@ -1823,3 +1823,29 @@ def test_a_ratio_heads_spelled_out_and_marks_typed_as_the_low_asterisk(tmp_path)
     entries = audit_file(path)
     assert {e.found: e.codes for e in entries} == {"OR = 1.29, 95% CI [1.18, 1.40], p < .0001": [], "OR = 1.14, 95% CI [1.03, 1.26], p < .01": [],
                                                    "OR = 0.97, 95% CI [0.90, 1.05], p < .01": ["ci-p-disagree"], "OR = 0.90, 95% CI [0.78, 1.03]": []}
+
+
+# Table 3 of "Thorium and fetal neural tube defects: an epidemiological evidence from large case-control study", Genes and
+# Environment 2021 (doi:10.1186/s41021-021-00227-w; as the journal's site prints it, four of its rows): each row names its
+# odds ratio (crude, then adjusted), each column an outcome with its P
+_GENES_ENV_TABLE = ("| OR | Anencephaly (N = 123) a | P | Spina bifida (N = 115) | P | Total NTDs (N = 263) | P |\n|---|---|---|---|---|---|---|\n"
+                    "| cOR b | 2.19 (1.46–3.28) | < 0.001 | 2.54 (1.67–3.87) | < 0.001 | 2.48 (1.82–3.37) | < 0.001 |\n"
+                    "| aOR1 c | 1.40 (0.83–2.35) | 0.209 | 1.96 (1.18–3.24) | < 0.01 | 1.80 (1.23–2.63) | < 0.01 |\n"
+                    "| aOR2 d | 1.53 (0.93–2.52) | 0.097 | 2.30 (1.41–3.75) | < 0.001 | 2.08 (1.45–3.00) | < 0.001 |\n"
+                    "| aOR4 f | 1.39 (0.79–2.45) | 0.254 | 1.63 (0.94–2.80) | 0.080 | 1.67 (1.11–2.51) | < 0.05 |\n")
+
+
+def test_ratios_named_by_their_row_each_with_the_p_to_its_right(tmp_path):
+    """A table whose rows name the ratio ("cOR", "aOR1") and whose columns name the outcomes had not been read. Each
+    cell's ratio and interval is read with the P column after it, in a table said to be of ratios (its caption, note or
+    corner); a descriptive table's "HR" row (a heart rate's median and range) is not a hazard ratio."""
+    path = tmp_path / "t.md"
+    path.write_text("Table 3 Odds ratios of total neural tube defects (NTDs) and two of their subtypes\n\n" + _GENES_ENV_TABLE, encoding="utf-8")
+    found = {e.found: e.codes for e in audit_file(path)}
+    assert len(found) == 12 and not any(found.values())
+    assert "OR = 2.54, 95% CI [1.67, 3.87], p < 0.001" in found and "aOR = 1.63, 95% CI [0.94, 2.80], p = 0.080" in found
+    path.write_text("Table 3 Odds ratios\n\n" + _GENES_ENV_TABLE.replace("| 0.080 |", "| 0.008 |"), encoding="utf-8")
+    assert {e.found: e.codes for e in audit_file(path) if e.codes} == {"aOR = 1.63, 95% CI [0.94, 2.80], p = 0.008": ["ci-p-disagree"]}
+    path.write_text("Table 1. Baseline characteristics\n\n| | Control (n = 40) | Exercise (n = 42) | P |\n|---|---|---|---|\n"
+                    "| HR | 72 (65–80) | 70 (62–79) | 0.30 |\n", encoding="utf-8")
+    assert audit_file(path) == []

@@ -107,6 +107,19 @@ _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\
                          rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
 
 
+# a row that names its ratio in its first cell, its outcomes' ratios with their intervals across ("cOR b", "aOR1 c", "HR",
+# "Adjusted OR"; footnote letters after it): Genes and Environment 2021's Table 3 lays its odds ratios out so
+_RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|RR|IRR)\d?(?:\s*[a-f†‡§*])?\s*", re.IGNORECASE)
+
+
+_RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate)\s+ratios?\b|\brelative\s+risks?\b")
+
+
+def _stub_ratio(m: "re.Match[str]") -> str:
+    name = m.group("name").upper()
+    return f"a{name}" if (m.group("adj") or "").strip().lower() in ("a", "adjusted") and name != "IRR" else name
+
+
 def _ratio_role(head: str) -> str | None:
     """"ratio:OR" (aOR, HR, aHR, RR, aRR, IRR) for a column of ratios with their 95% CIs, None otherwise."""
     m = _RATIO_HEAD.fullmatch(head)
@@ -636,6 +649,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     wordy = ""  # the text of the rows without numbers just above (a spanner's "95% Confidence Interval of the Difference")
     heads: dict[int, str] = {}  # each column's head as typed
     levels_said = ""  # the header's text and the caption's and note's, for an interval's level
+    ratios_said = _RATIOS_SAID.search(f"{caption} {said}") is not None  # a table of odds, hazard or risk ratios
     for r in sorted(rows):
         row = rows[r]
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
@@ -679,6 +693,10 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         coefficients = not {"B", "SE", "BSE", "BCI", "beta"}.isdisjoint(roles.values()) or (
             "expB" in roles.values() and not {"ci", "ci_low", "p"}.isdisjoint(roles.values()))
         ratios = {c: _ratio_cell(row[c][0].text, mark) for c, role in roles.items() if role.startswith("ratio:") and c in row}
+        stub = _RATIO_STUB.fullmatch(row[min(row)][0].text) if not any(ratios.values()) and (
+            roles.get(min(row)) == "expB" or ratios_said) else None  # (not a heart rate's "HR" row of a table of descriptives)
+        if stub is not None:  # the row names its ratio, the columns their outcomes ("cOR | 2.19 (1.46–3.28) | < 0.001 | …")
+            ratios = {c: _ratio_cell(row[c][0].text, mark) for c in sorted(row)[1:]}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             if coefficients and not any(role in _STAT_ROLES or role == "value" for role in roles.values()):  # no test column
                 found += _bare_coefficients(row, roles, numbers, heads, levels_said, mark, stars)
@@ -690,7 +708,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         # a ratio and its CI in one cell, its p in the next p column to the right (a crude and an adjusted pair side by side),
         # or in the one just before it where each ratio column has its p before it and none comes after the last ("P | OR
         # (95% CI) | P | Adjusted OR (95% CI)", as a family medicine journal lays it out)
-        ratio_cols = [k for k in sorted(roles) if roles[k].startswith("ratio:")]
+        ratio_cols = [k for k in sorted(ratios) if ratios[k] is not None] if stub is not None else [k for k in sorted(roles) if roles[k].startswith("ratio:")]
         p_cols = [k for k in sorted(roles) if roles[k] == "p"]
         p_before = bool(ratio_cols) and bool(p_cols) and p_cols[-1] < ratio_cols[-1] and all(
             any(a < k < b for k in p_cols) for a, b in zip([-1] + ratio_cols, ratio_cols))
@@ -707,10 +725,11 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 if p_col is not None and later is not None and later < p_col:
                     p_col = None  # the p beyond the next ratio column is that one's
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
-            name = roles[c].removeprefix("ratio:")
+            name = _stub_ratio(stub) if stub is not None else roles[c].removeprefix("ratio:")
             marked = _marked_bound(unit.text, stars, high.end) if p is None and p_col is None and stars else None  # "1.29 (1.18–1.40)**"
             rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p or (marked[0] if marked else None), high.end)
-            found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) column" + (", the p column" if p else "")
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) " + ("its row names" if stub else "column")
+                                        + (", the p column" if p else "")
                                         + (f", its {marked[1]}" if marked else "")))
         # a statistic whose value sits alone under a head named t, F, χ², r or z
         for c, role in roles.items():
