@@ -729,3 +729,15 @@ def test_a_revised_r_squared_needs_no_second_revision(tmp_path, style):
     main(["audit", "--style", style, str(accepted), "--revise", str(tmp_path / "twice.docx")])
     root = etree.fromstring(zipfile.ZipFile(tmp_path / "twice.docx").read("word/document.xml"))
     assert ["".join(t.text or "" for t in ins.iter(f"{W}t")) for ins in root.iter(f"{W}ins")] == []
+
+
+def test_an_impossible_p_is_never_replaced_by_the_styles_bound():
+    """"p < −1.2" had been revised to "p < .001": the style's smallest p took the place of an impossible one, as if it
+    were the same bound restyled. An impossible p is left as typed, with its finding (found by revising random texts
+    and comparing their numbers; the statistic is invented)."""
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    for typed in ("t(38) = 2.14, p < -1.2", "t(38) = 2.14, p < −0.01", "t(38) = 2.14, p > 1.20"):
+        (e,) = audit_units([Unit("c", f"The groups differed, {typed}.")], restyle=True)
+        assert "impossible-p" in e.codes and e.revision is None and "p" in e.kept, (typed, e.revision)

@@ -389,7 +389,7 @@ def _numbers_kept(rep: Reported, old: str, new: StyledText, mark: str, doubted: 
 def same_p(p: PValue, shown: "re.Match[str]", mark: str) -> bool:
     """Whether a p the style prints (``shown``: a match of _P_IN_TEXT) is the reported ``p`` restyled: the same
     operator and a value its printed precision allows, rounded as the style rounds."""
-    if p.number is None:
+    if p.number is None or not 0 <= p.number.value <= 1:  # (an impossible p, "p < −1.2" or "p = 1.5", is no bound the style prints)
         return False
     value, places = _value(shown.group(2), mark)
     op = shown.group(1)
