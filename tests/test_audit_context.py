@@ -1849,3 +1849,32 @@ def test_ratios_named_by_their_row_each_with_the_p_to_its_right(tmp_path):
     path.write_text("Table 1. Baseline characteristics\n\n| | Control (n = 40) | Exercise (n = 42) | P |\n|---|---|---|---|\n"
                     "| HR | 72 (65–80) | 70 (62–79) | 0.30 |\n", encoding="utf-8")
     assert audit_file(path) == []
+
+
+# A note of the Gut article's Table 2 above (as the journal's site prints it): a ratio labelled with its interval's level,
+# the interval after its number
+_GUT_NOTE = ("If the model is refit using a ratio variable representing a 100 Yuan increase (approximately 1 SD) in per capita "
+             "household income, then the OR (95% CI) is 0.84 (0.69, 1.03), p = 0.080, with very little change in the OR estimates "
+             "for the other variables.")
+
+
+def test_a_ratio_labelled_with_its_intervals_level_in_a_sentence():
+    """"the OR (95% CI) is 0.84 (0.69, 1.03), p = 0.080" had been read as a p alone: the ratio is now read with its
+    interval (containment and agreement with the p checked), and left as typed by a revision, which would drop "is"."""
+    (e,) = audit_units([Unit("c", _GUT_NOTE)], restyle=True)
+    assert e.found == "OR (95% CI) is 0.84 (0.69, 1.03), p = 0.080" and e.codes == ["leading-zero"] and e.revision is None
+    (e,) = audit_units([Unit("c", _GUT_NOTE.replace("p = 0.080", "p = 0.008"))])
+    assert "ci-p-disagree" in e.codes
+    (e,) = audit_units([Unit("c", _GUT_NOTE.replace("0.84 (0.69", "0.64 (0.69"))])
+    assert "ci-excludes-estimate" in e.codes
+
+
+# Table 2 of PMC10362262 (as PubMed Central prints it): "OR∗ (95% CI)" with the asterisk operator as the head's footnote mark
+def test_a_ratio_head_with_the_asterisk_operator_as_its_mark(tmp_path):
+    path = tmp_path / "t.md"
+    path.write_text("Table 2.\n\n| Subgroup | Cases, n | Controls, n | OR∗ (95% CI) | aOR† (95% CI) |\n|---|---|---|---|---|\n"
+                    "| Never-use | 2484 | 12691 | 1.0 (reference) | 1.0 (reference) |\n| Ever-use | 1332 | 6389 | 1.07 (0.99-1.16) | 0.87 (0.80-0.96) |\n"
+                    "| ≥10 | 289 | 1761 | 0.83 (0.73-0.96) | 0.63 (0.54-0.74) |\n\n∗Adjusted for age, sex, and calendar time (by matching design).\n",
+                    encoding="utf-8")
+    assert {e.found for e in audit_file(path)} == {"OR = 1.07, 95% CI [0.99, 1.16]", "aOR = 0.87, 95% CI [0.80, 0.96]",
+                                                   "OR = 0.83, 95% CI [0.73, 0.96]", "aOR = 0.63, 95% CI [0.54, 0.74]"}

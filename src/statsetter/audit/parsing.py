@@ -265,6 +265,7 @@ _DESCRIPTIVE = {"M", "SD", "Mdn"}
 _RATIO_ABBREVIATED = r"(?:(?:(?<=R)|(?<=ratio)|(?<=risk))\s*+[(\[]a?[A-Z]{1,3}[)\]])"
 # after a ratio's name, its number without "=": a comma or colon ("OR, 0.76", AMA's form; "AOR: 8.32"), "of" ("odds ratio
 # of 1.7") or a space ("OR 2.72"), and a number with decimals (not "OR 2 times", nor a count)
+_RATIO_LABELLED = r"(?:(?<=R)|(?<=ratio)|(?<=risk))\s*+[(\[]\s*+(?P<rlev>\d{2}(?:[.,]\d+)?)\s*+%\s*+C\.?I\.?\s*+[)\]]\s*+(?:[=:,¼]|is\b)?"
 _RATIO_WITHOUT_EQUALS = r"(?:(?<=R)|(?<=R[)\]])|(?<=ratio)|(?<=risk))(?:\s*+[:,]|\s++of\b|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)"
 
 
@@ -295,7 +296,10 @@ class _Patterns:
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{num})")
-        self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})\s*+(?P<num>{num})")
+        # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
+        # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
+        self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
+                                rf"\s*+(?P<num>{num})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<rb>{num})\s*+[)\]])")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
         self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
@@ -1013,7 +1017,8 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                 last_end = max(last_end, close)
                 spans.append((m.start(), close))
                 continue
-            effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), None)
+            effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"),
+                                 _labelled_interval(pat, m) if m.re is pat.ratio and m.group("rlev") is not None else None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
         elif kind == "df" and (not rep.df or (clause_df and rep.symbol == "F" and len(rep.df) == 1)):
             first, other = ("num", "num2") if m.group("num") is not None else ("pre", "pre2")
@@ -1075,6 +1080,14 @@ def _paren_sd(pat: _Patterns, text: str, m: re.Match[str], first: Number) -> tup
     symbol = name[: name.index("(")].rstrip()
     return (_new_effect("M", first, m.start(), first.end, m.start("name"), symbol, None),
             _new_effect("SD", sd, at, sd.end, at, "SD", None), after.end())  # type: ignore[union-attr]
+
+
+def _labelled_interval(pat: _Patterns, m: re.Match[str]) -> Interval | None:
+    """The interval after a ratio labelled with its level, "OR (95% CI) is 0.84 (0.69, 1.03)"."""
+    level, low, high = (pat.to_number(m.group(g), m.start(g)) for g in ("rlev", "ra", "rb"))
+    if level is None or low is None or high is None or not 0 < level.value < 100:
+        return None
+    return _new_interval(level.value / 100, low, high, m.start("rlev"), m.end())
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
