@@ -741,3 +741,17 @@ def test_an_impossible_p_is_never_replaced_by_the_styles_bound():
     for typed in ("t(38) = 2.14, p < -1.2", "t(38) = 2.14, p < −0.01", "t(38) = 2.14, p > 1.20"):
         (e,) = audit_units([Unit("c", f"The groups differed, {typed}.")], restyle=True)
         assert "impossible-p" in e.codes and e.revision is None and "p" in e.kept, (typed, e.revision)
+
+
+def test_a_statistic_sharing_its_parentheses_with_the_sentence_is_left_as_typed():
+    """A revision had dropped a bracket the sentence needs: "p = .039 [d = 0.5]" became "p = .039, d = 0.5]" (the
+    statistic's text ends before the "]"), and "(ns) OR = 1.52" lost the ")" that closes what opened before it. Such a
+    statistic is now left as typed, its comment saying why (found by revising random texts; the statistics are invented)."""
+    from statsetter.audit.reading import Unit
+    from statsetter.audit.report import audit_units
+
+    entries = audit_units([Unit("c", "The groups differed, t(38)=2.14, p=.039 [d = 0.5]. Older people (ns) OR = 1.52, "
+                                     "95% CI [1.10, 2.10] were also there.")], restyle=True)
+    assert len(entries) == 2 and all(e.revision is None and "parenthesis" in e.kept for e in entries), [(e.found, e.kept) for e in entries]
+    (e,) = audit_units([Unit("c", "The groups differed (t(38)=2.14, p=.039, d = 0.5).")], restyle=True)
+    assert e.revision is not None and e.revision.plain().replace("\xa0", " ") == "t(38) = 2.14, p = .039, d = 0.5"

@@ -209,6 +209,21 @@ _VALUE_END = re.compile(r"\s*[^\s,;)\]]*")
 _UNMADE = object()  # restyled's house text not made beforehand
 
 
+def _unmatched(text: str) -> tuple[int, int]:
+    """The closing brackets without their opening one in ``text`` and the opening ones left open: a statistic whose text
+    has either shares its parentheses with the sentence around it."""
+    depth = closed = 0
+    for ch in text:
+        if ch in "([":
+            depth += 1
+        elif ch in ")]":
+            if depth:
+                depth -= 1
+            else:
+                closed += 1
+    return closed, depth
+
+
 def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Finding], read_mark: str | None = None,
              italic: Sequence[tuple[int, int]] | None = None, house: "StyledText | None | object" = _UNMADE,
              subscripts: Sequence[tuple[int, int]] = ()) -> tuple[StyledText | None, str]:
@@ -238,6 +253,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
     lost = _lost_word(rep, old, plain)
     if lost:
         return None, f"the restyled text would drop \u201c{lost}\u201d"
+    if _unmatched(old) != _unmatched(plain):  # "(ns) OR = 1.52": the ")" closes what opened before the statistic
+        return None, "the restyled text would drop a parenthesis or bracket that the sentence around the statistic needs"
     form = icc_form(rep)
     if form is not None:  # ICC(2,1), ICC(3,k): which estimator it is, which the style's "ICC" does not say
         return None, f"the restyled text would drop the ICC's form, \u201c{form}\u201d"
