@@ -1878,3 +1878,30 @@ def test_a_ratio_head_with_the_asterisk_operator_as_its_mark(tmp_path):
                     encoding="utf-8")
     assert {e.found for e in audit_file(path)} == {"OR = 1.07, 95% CI [0.99, 1.16]", "aOR = 0.87, 95% CI [0.80, 0.96]",
                                                    "OR = 0.83, 95% CI [0.73, 0.96]", "aOR = 0.63, 95% CI [0.54, 0.74]"}
+
+
+# Table 2 of PMC7381040 (a JMIR article on virtual reality and anxiety; as PubMed Central prints it, three rows): a t's
+# p under "P value (Cohen d)" with the d beside it in the cell, a df with its footnote's letter ("46.19f")
+_JMIR_VR_TABLE = ("| Variables | Phase 1 (NoVR), mean (SD) | Phase 2 (YesVR), mean (SD) | df | t test | P value (Cohen d) |\n|---|---|---|---|---|---|\n"
+                  "| TP1 | 44.34 (12.38) | 40.70 (11.06) | 47 | 1.06 | .30 |\n| TP2 | 48.03 (12.67) | 41.25 (7.54) | 46.19f | 2.34 | .02 (0.65) |\n"
+                  "| TP3 | 39.55 (10.60) | 41.45 (11.69) | 47 | –0.59 | .56 |\n")
+# Table 4.1 of a thesis on cognitive behaviour therapy and academic stress (shodhganga.inflibnet.ac.in, as
+# vdocuments.mx copies it): the p marked "NS*", the df in the note
+_THESIS_TABLE = ("| Group | Mean | SD | t-value | P value |\n|---|---|---|---|---|\n| Experimental | 15.67 | 0.61 | 0.41 | 0.68NS* |\n"
+                 "| Control | 15.73 | 0.64 | | |\n\nNote: df= 58, * Non-significant\n")
+
+
+def test_a_ts_p_beside_its_d_a_df_with_a_footnote_letter_and_the_notes_df(tmp_path):
+    """A t's p under "P value (Cohen d)" (".02 (0.65)"), a df marked with a footnote's letter ("46.19f"), a p marked
+    "NS*" and the df a table's note gives ("Note: df= 58") had not been read: the t's were left without p or df. Each
+    is now read and checked; a mutated p is found."""
+    path = tmp_path / "t.md"
+    path.write_text("Table 2. Statistical analysis results.\n\n" + _JMIR_VR_TABLE, encoding="utf-8")
+    found = {e.found: e.codes for e in audit_file(path)}
+    assert found == {"t(47) = 1.06, p = .30": [], "t(46.19) = 2.34, p = .02": [], "t(47) = –0.59, p = .56": []}, found
+    path.write_text("Table 4.1 Showing Mean age of the subjects in experimental and control group\n\n" + _THESIS_TABLE, encoding="utf-8")
+    (e,) = audit_file(path)
+    assert e.found == "t = 0.41, p = 0.68" and e.codes == [] and "df = 58 (as the table's caption or note gives them)" in e.checked
+    path.write_text("Table 4.1\n\n" + _THESIS_TABLE.replace("0.68NS*", "0.18NS*"), encoding="utf-8")
+    (e,) = audit_file(path)
+    assert "p-does-not-follow" in e.codes

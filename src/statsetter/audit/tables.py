@@ -62,7 +62,8 @@ _ROLES = (
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR|(?:estimated\s+)?odds\s+ratio"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
-    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\))"), "p"),
+    # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
+    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\))(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
     # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
     (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|Chi(?:sq)?)\s?\)?"), "p"),
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
@@ -140,7 +141,10 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
 # an error term's row: "Residuals", "Error", "Within groups", and an error named for its stratum as mixed and
 # repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
-_BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+)(?:[eE]\s?[-−+]?\d{{1,3}})?)\s*(?P<marks>[{_SIGNIFICANCE}]+|[a-d])?\s*")
+# (a footnote's letter may be any, typed right after the number: "46.19f" under df; "0.68NS*", a p its author calls
+# not significant)
+_BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+)(?:[eE]\s?[-−+]?\d{{1,3}})?)\s*"
+                   rf"(?P<marks>[{_SIGNIFICANCE}]+|[a-d]|(?<=\d)[e-z]|(?<=\d)NS[{_SIGNIFICANCE}]*)?\s*")
 # a model's residual df as R's summary prints them under its coefficients ("Residual standard error: 2.593 on 29 degrees of
 # freedom"; "F-statistic: 69.21 on 2 and 29 DF"), when a table's caption or note keeps the line
 _RESIDUAL_DF = re.compile(r"\bon\s+(?:\d{1,6}\s+and\s+)?(\d{1,6})\s+(?:degrees\s+of\s+freedom|DF)\b")
@@ -312,10 +316,14 @@ def _number(text: str, mark: str) -> tuple[str, Number] | None:
     return (m.group("op") or "=").strip(), num
 
 
+_P_AND_D = re.compile(r"(?P<p>\s*[<>≤≥]?\s*(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*\(\s*[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*")
+
+
 def _p_cell(text: str, mark: str) -> PValue | None:
     if _NS.fullmatch(text):
         return PValue("ns", None, 0, len(text), 0, text.strip())
-    found = _number(text, mark)
+    both = _P_AND_D.fullmatch(text) if "(" in text else None  # ".02 (0.65)": the p, its effect size beside it
+    found = _number(text[: both.end("p")] if both is not None else text, mark)
     if found is None or not 0 <= found[1].value <= 1:
         return None
     op, num = found
@@ -475,6 +483,18 @@ def _residual_readings(said: str) -> tuple[Reading, ...]:
         return ()
     (df,) = found
     return (Reading((float(df),), f"df = {df} (the model's residual df, as the caption or note gives them: \u201con {df} degrees of freedom\u201d)"),)
+
+
+_DF_SAID = re.compile(r"(?<![\w.])(?:df|d\.f\.)\s*=\s*(\d{1,6})(?![\d.,]\d)")
+
+
+def _said_df(said: str) -> tuple[Reading, ...]:
+    """The one df a table's caption or note gives its statistics ("Note: df= 58"), as a reading; () unless exactly one."""
+    found = {m.group(1) for m in _DF_SAID.finditer(said)}
+    if len(found) != 1:
+        return ()
+    (df,) = found
+    return (Reading((float(df),), f"df = {df} (as the table's caption or note gives them)"),)
 
 
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
@@ -650,6 +670,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     heads: dict[int, str] = {}  # each column's head as typed
     levels_said = ""  # the header's text and the caption's and note's, for an interval's level
     ratios_said = _RATIOS_SAID.search(f"{caption} {said}") is not None  # a table of odds, hazard or risk ratios
+    note_df = _said_df(f"{caption} {said}")
     for r in sorted(rows):
         row = rows[r]
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
@@ -804,6 +825,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
                 readings = _residual_readings(said) if role == "t" else ()
+            elif role in ("t", "r") and note_df:  # "Note: df= 58": the table's one df, as its caption or note gives it
+                readings = note_df
             else:
                 above = "in the table" if labelled else "in the text above the table"
                 readings = tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,
