@@ -476,25 +476,22 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
     return Interval(level, low, high, low.start, high.end), role, owner, estimate, where  # type: ignore[return-value]
 
 
-def _residual_readings(said: str) -> tuple[Reading, ...]:
-    """The residual df a model table's caption or note gives (one value): its t's df."""
-    found = {m.group(1) for m in _RESIDUAL_DF.finditer(said)}
-    if len(found) != 1:
-        return ()
-    (df,) = found
-    return (Reading((float(df),), f"df = {df} (the model's residual df, as the caption or note gives them: \u201con {df} degrees of freedom\u201d)"),)
-
-
 _DF_SAID = re.compile(r"(?<![\w.])(?:df|d\.f\.)\s*=\s*(\d{1,6})(?![\d.,]\d)")
 
 
-def _said_df(said: str) -> tuple[Reading, ...]:
-    """The one df a table's caption or note gives its statistics ("Note: df= 58"), as a reading; () unless exactly one."""
-    found = {m.group(1) for m in _DF_SAID.finditer(said)}
+def _said_df(said: str, pattern: re.Pattern[str] = _DF_SAID, how: str = "as the table's caption or note gives them") -> tuple[Reading, ...]:
+    """The one df a table's caption or note gives its statistics ("Note: df= 58"; with _RESIDUAL_DF a model's residual
+    df, "on 29 degrees of freedom"), as a reading; () unless exactly one."""
+    found = {m.group(1) for m in pattern.finditer(said)}
     if len(found) != 1:
         return ()
     (df,) = found
-    return (Reading((float(df),), f"df = {df} (as the table's caption or note gives them)"),)
+    return (Reading((float(df),), f"df = {df} ({how.format(df=df)})"),)
+
+
+def _residual_readings(said: str) -> tuple[Reading, ...]:
+    """The residual df a model table's caption or note gives (one value): its t's df."""
+    return _said_df(said, _RESIDUAL_DF, "the model's residual df, as the caption or note gives them: \u201con {df} degrees of freedom\u201d")
 
 
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
