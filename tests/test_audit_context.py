@@ -1905,3 +1905,21 @@ def test_a_ts_p_beside_its_d_a_df_with_a_footnote_letter_and_the_notes_df(tmp_pa
     path.write_text("Table 4.1\n\n" + _THESIS_TABLE.replace("0.68NS*", "0.18NS*"), encoding="utf-8")
     (e,) = audit_file(path)
     assert "p-does-not-follow" in e.codes
+
+
+def test_a_difference_given_in_words_with_its_interval_and_p():
+    """A difference as medical journals type it (practice: JAMA's and AMA 11's form, "mean difference, −2.1 [95% CI, −3.4
+    to −0.8]; P = .002"; "the between-group difference was −4.2 points (95% CI, …; P = .03)") had left its interval
+    unread and its P alone. The difference is now read with its interval — never without one — and checked: the
+    interval holds it and agrees with the P about 0. It has no symbol in the styles, so it is never restyled; a
+    difference without an interval ("a difference of 0.5 points") is not a statistic. The texts are invented in that form."""
+    good = ("At 12 weeks, scores were lower (mean difference, −2.1 [95% CI, −3.4 to −0.8]; P = .002). The between-group "
+            "difference was −4.2 points (95% CI, −7.9 to −0.5; P = .03). A difference of 0.5 points was not pursued.")
+    entries = audit_units([Unit("c", good)], "ama11", restyle=True)
+    assert [e.found for e in entries] == ["mean difference, −2.1 [95% CI, −3.4 to −0.8]; P = .002",
+                                          "between-group difference was −4.2 points (95% CI, −7.9 to −0.5; P = .03"]
+    assert all(not e.codes and e.revision is None for e in entries)
+    (e,) = audit_units([Unit("c", "Scores were lower (mean difference, −2.1 [95% CI, −3.4 to −0.8]; P = .20).")], "ama11")
+    assert e.codes == ["ci-p-disagree"]
+    (e,) = audit_units([Unit("c", "The difference was 4.2 points (95% CI, 5.9 to 9.5; P = .03).")], "ama11")
+    assert e.codes == ["ci-excludes-estimate"]

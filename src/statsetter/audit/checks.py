@@ -362,7 +362,7 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
     p = rep.p
     if p is None or p.adjusted or (p.number is None and p.op != "ns"):
         return []
-    found = [(e.ci, 1.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name in RATIOS]
+    found = [(e.ci, 1.0 if e.name in RATIOS else 0.0, e.symbol_text) for e in rep.effects if e.ci is not None and (e.name in RATIOS or e.name == "MD")]
     if rep.symbol is None:  # a coefficient given with its interval and p, no test ("β = 0.21, 95% CI [0.10, 0.32], p < .001")
         found += [(e.ci, 0.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name == "beta"]
     if rep.ci is not None and (rep.symbol in ("t", "z") or (rep.symbol is None and rep.estimate is not None)):  # (a table's coefficient)
@@ -580,6 +580,8 @@ def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> li
         if rep.value.decimals != want:
             wrong.append(f"{rep.value.text} ({want} wanted)")
     for e in rep.effects:
+        if e.name == "MD":  # a difference in the measure's own units: its decimals are the measure's
+            continue
         want = num.decimals_for(e.name)
         if e.number.decimals != want:
             wrong.append(f"{e.number.text} ({want} wanted)")

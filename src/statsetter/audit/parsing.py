@@ -259,14 +259,18 @@ _RATIOS = [
     (r"[hH](?<![\w][hH])azard\s+ratio", "HR"),
     (r"[iI](?<![\w][iI])ncidence[-\s]rate\s+ratio", "IRR"),
     (r"[rR](?<![\w][rR])isk\s+ratio|[rR](?<![\w][rR])elative\s+risk", "RR"),
+    # a difference with its interval, as medical texts give it ("mean difference, −2.1 [95% CI, −3.4 to −0.8]", "the
+    # between-group difference was −4.2 points (95% CI, −7.9 to −0.5; P = .03)"): read only with its interval (null 0)
+    (r"[mM](?<![\w][mM])ean\s+difference|[dD](?<![\w][dD])ifference|[bB](?<![\w][bB])etween-group\s+difference"
+     r"|[aA](?<![\w][aA])bsolute\s+(?:risk\s+)?difference|[rR](?<![\w][rR])isk\s+difference", "MD"),
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
 # after a ratio's name, its abbreviation in parentheses or brackets ("adjusted HR (aHR)=1.29", "odds ratio [OR], 1.52")
-_RATIO_ABBREVIATED = r"(?:(?:(?<=R)|(?<=ratio)|(?<=risk))\s*+[(\[]a?[A-Z]{1,3}[)\]])"
+_RATIO_ABBREVIATED = r"(?:(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))\s*+[(\[]a?[A-Z]{1,3}[)\]])"
 # after a ratio's name, its number without "=": a comma or colon ("OR, 0.76", AMA's form; "AOR: 8.32"), "of" ("odds ratio
 # of 1.7") or a space ("OR 2.72"), and a number with decimals (not "OR 2 times", nor a count)
-_RATIO_LABELLED = r"(?:(?<=R)|(?<=ratio)|(?<=risk))\s*+[(\[]\s*+(?P<rlev>\d{2}(?:[.,]\d+)?)\s*+%\s*+C\.?I\.?\s*+[)\]]\s*+(?:[=:,¼]|is\b)?"
-_RATIO_WITHOUT_EQUALS = r"(?:(?<=R)|(?<=R[)\]])|(?<=ratio)|(?<=risk))(?:\s*+[:,]|\s++of\b|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)"
+_RATIO_LABELLED = r"(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))\s*+[(\[]\s*+(?P<rlev>\d{2}(?:[.,]\d+)?)\s*+%\s*+C\.?I\.?\s*+[)\]]\s*+(?:[=:,¼]|is\b)?"
+_RATIO_WITHOUT_EQUALS = r"(?:(?<=R)|(?<=R[)\]])|(?<=ratio)|(?<=risk)|(?<=difference))(?:\s*+[:,]|\s++(?:of|was)\b|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)"
 
 
 class _Patterns:
@@ -776,7 +780,7 @@ def _abbreviated_ratio(text: str, start: int, end: int) -> bool:
 
 
 def _ratio_words(text: str, start: int, end: int) -> bool:
-    return text.find("ratio", start, end) >= 0 or text.find("risk", start, end) >= 0
+    return text.find("ratio", start, end) >= 0 or text.find("risk", start, end) >= 0 or text.find("difference", start, end) >= 0
 
 
 def _ratios_in(text: str, start: int, end: int, rare: bool) -> bool:
@@ -788,7 +792,7 @@ def _rare_words(text: str) -> bool:
     """Whether a paragraph has what only a few statistics are typed with (OR, HR, RR and the ratios ending in them;
     "ratio", "risk"; "value:"; an operator garbled by a copy from a PDF, _GARBLED): looked for once a paragraph, so that
     most clauses and gaps are spared the searches."""
-    return (("R" in text and ("OR" in text or "HR" in text or "RR" in text)) or "ratio" in text or "risk" in text or "value" in text
+    return (("R" in text and ("OR" in text or "HR" in text or "RR" in text)) or "ratio" in text or "risk" in text or "value" in text or "difference" in text
             or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 
@@ -1038,6 +1042,8 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
         covered = max(covered, m.end())
         last_end = max(last_end, m.end(), ci.end if kind == "ci" and ci is not None else 0)
         spans.append((m.start(), m.end()))
+    if any(e.name == "MD" and e.ci is None for e in rep.effects):  # a difference is read only with its interval
+        rep.effects = [e for e in rep.effects if e.name != "MD" or e.ci is not None]
     rep.end = last_end
     rep.operators = _operators(text, spans)
     return again

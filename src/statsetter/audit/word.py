@@ -72,6 +72,8 @@ def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> St
 
     if rep.symbol is None and rep.descriptives:
         return descriptives_text(rep, style, alpha)
+    if any(e.name == "MD" for e in rep.effects):  # a difference in words ("mean difference, −2.1"): no symbol of the style's
+        return None
     try:
         record = to_record(rep, alpha, style)
         if rep.op != "=" and not with_p:  # (an exact p the author gave, doubted, is not repeated either)
@@ -243,6 +245,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
                           "the style writes M = 3.2, SD = 0.5")
         if rep.symbol is None and rep.descriptives and (rep.ci is not None or any(e.ci is not None or e.name in RATIOS for e in rep.effects)):
             return None, "descriptives beside an interval or a ratio, without their test, have no form of the style's; restyle them by hand"
+        if any(e.name == "MD" for e in rep.effects):
+            return None, "a difference given in words with its interval has no symbol in the style; it is checked and left as typed"
         return None, "the statistic cannot be restyled"
     plain = new.plain()
     old = rep.text
