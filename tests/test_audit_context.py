@@ -1923,3 +1923,39 @@ def test_a_difference_given_in_words_with_its_interval_and_p():
     assert e.codes == ["ci-p-disagree"]
     (e,) = audit_units([Unit("c", "The difference was 4.2 points (95% CI, 5.9 to 9.5; P = .03).")], "ama11")
     assert e.codes == ["ci-excludes-estimate"]
+
+
+# Table 2 of PMC8277838 (a dentine hypersensitivity trial; as PubMed Central prints it, the Schiff score's rows): each
+# cell an estimate with its interval, its percentage change and its p; the note names the interval's level
+_PMC8277838_TABLE = (
+    "| | | Test* | Control* | Test vs Cont** |\n|---|---|---|---|---|\n| Study 1 | BL | 2.70 (0.051) | 2.74 (0.051) | |\n"
+    "| | 7 d | −0.74 (−0.84, −0.65) −27.4% p < 0.0001 | −0.03 (−0.13, 0.06) −1.1% p = 0.5059 | −0.71 (−0.85, −0.57) −26.4% p < 0.0001 |\n"
+    "| | 14 d | −1.39 (−1.54, −1.23) −51.1% p < 0.0001 | −0.10 (−0.25, 0.06) −3.6% p = 0.2276 | −1.29 (−1.51, 1.07) −49.2% p < 0.0001 |\n"
+    "| Study 2 | BL | 2.80 (0.039) | 2.83 (0.037) | |\n"
+    "| | 7 d | −0.49 (−0.67, −0.30) −17.5% p < 0.0001 | −0.54 (−0.73, −0.62) −19.4% p < 0.0001 | 0.06 (−0.21, 0.32) 2.2% p = 0.67699 |\n\n"
+    "Baseline values are raw means, all other are adjusted means from ANCOVA model.\n"
+    "*Change from baseline (95% confidence interval), percentage change, p value.\n"
+    "**Difference (95% confidence interval), percentage change, p value: first-named minus second-named group.\n")
+# Table 6 of the CONSORT 2010 explanation, item 17a (consort-statement.org; adapted there from van Linschoten's trial): an
+# adjusted difference with its interval in one cell
+_CONSORT_TABLE = ("| | Exercise therapy 12 months (mean (SD)) | Control 12 months (mean (SD)) | Adjusted difference* (95% CI) at 12 months |\n"
+                  "|---|---|---|---|\n| Function score (0-100) | 83.2 (14.8) | 79.8 (17.5) | 4.52 (-0.73 to 9.76) |\n"
+                  "| Pain at rest (0-100) | 1.43 (2.2) | 2.61 (2.9) | -1.29 (-2.16 to -0.42) |\n")
+
+
+def test_an_estimate_with_its_interval_and_p_in_one_cell(tmp_path):
+    """Cells that give an estimate with its interval and p ("−0.71 (−0.85, −0.57) −26.4% p < 0.0001") had been read as
+    their p alone, and "Adjusted difference* (95% CI)" over "4.52 (-0.73 to 9.76)" not at all. Each estimate is now read
+    with its interval (the level the note gives) and its p and checked: the published table's two slips are found — an
+    estimate outside its interval ("−0.54 (−0.73, −0.62)") and an interval that holds 0 beside p < 0.0001 (a lost minus:
+    "−1.29 (−1.51, 1.07)") — and nothing else."""
+    path = tmp_path / "t.md"
+    path.write_text("Table 2. Between-treatment comparisons for change in Schiff sensitivity score\n\n" + _PMC8277838_TABLE, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 9
+    assert {e.found: e.codes for e in entries if e.codes} == {"estimate = −0.54, 95% CI [−0.73, −0.62], p < 0.0001": ["ci-excludes-estimate"],
+                                                             "estimate = −1.29, 95% CI [−1.51, 1.07], p < 0.0001": ["ci-p-disagree"]}
+    path.write_text("Table 6. Example of reporting of summary results for each study group\n\n" + _CONSORT_TABLE, encoding="utf-8")
+    assert {e.found: e.codes for e in audit_file(path)} == {"difference = 4.52, 95% CI [-0.73, 9.76]": [], "difference = -1.29, 95% CI [-2.16, -0.42]": []}
+    path.write_text("Table 6\n\n" + _CONSORT_TABLE.replace("-1.29 (-2.16", "-2.29 (-2.16"), encoding="utf-8")
+    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]

@@ -42,7 +42,8 @@ _ROLES = (
     # a coefficient (or a mean difference) with its interval in one cell, "1.9 (0.9, 2.9)" under "β Coefficient (95% CI)",
     # "−.93 (−1.38 to −.58)" under "Coefficient (Bootstrapped 95% CI)", "B [95% CI]" (health and psychology tables; practice)
     (re.compile(rf"(?i)(?:(?:un)?standardi[sz]ed\s+|regression\s+)?(?:b|β|beta|estimates?|coef\.?|coefficients?|(?:β|beta)\s+coefficients?"
-                rf"|mean\s+diff(?:erence|\.)?|MD)\s*[(\[]\s*{_INTERVAL_HEAD}\s*[)\]]"), "BCI"),
+                rf"|(?:mean|adjusted|between[- ]group|risk)?\s*diff(?:erence|\.)?|MD)[{_SIGNIFICANCE}a-d]?\s*[(\[]\s*{_INTERVAL_HEAD}\s*[)\]]"
+                rf"(?:\s+at\s+\d+\s+(?:weeks|months|days|years))?"), "BCI"),  # ("Adjusted difference* (95% CI) at 12 months": CONSORT's example)
     # an interval in one column, "−7.48, −4.53" or "[0.15, 0.31]" under "95% CI" (of the nearest estimate to its left)
     (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|odds\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
@@ -409,11 +410,11 @@ _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 _SIGNED = {".": r"[-−–]?\s?(?:\d+(?:\.\d+)?|\.\d+)", ",": r"[-−–]?\s?(?:\d+(?:,\d+)?|,\d+)"}
 # an interval's two limits in a cell, "−7.48, −4.53", "[0.15, 0.31]", "(−1.38 to −.58)", "0.15–0.31", "− 0.522–4.054",
 # "(-0.015_0.027)" (as published tables print them; practice); with a decimal comma the limits are never parted by a comma
-_LIMITS = {mark: rf"(?P<lo>{n})\s*(?:{'' if mark == ',' else ',|'};|to|[–—_-])\s*(?P<hi>{n})" for mark, n in _SIGNED.items()}
+_LIMITS = {mark: rf"(?P<lo>{n})%?\s*(?:{'' if mark == ',' else ',|'};|to|[–—_-])\s*(?P<hi>{n})%?" for mark, n in _SIGNED.items()}
 _INTERVAL_CELL = {mark: re.compile(rf"\s*[(\[]?\s*{limits}\s*[)\]]?\s*[{_SIGNIFICANCE}a-d]*\s*") for mark, limits in _LIMITS.items()}
-_ESTIMATE_INTERVAL_CELL = {mark: re.compile(rf"\s*(?P<est>{_SIGNED[mark]})\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*{limits}\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
+_ESTIMATE_INTERVAL_CELL = {mark: re.compile(rf"\s*(?P<est>{_SIGNED[mark]})%?\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*{limits}\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
                            for mark, limits in _LIMITS.items()}
-_MEAN_DIFFERENCE = re.compile(r"(?i)\s*(?:mean\s+diff|MD\b)")
+_MEAN_DIFFERENCE = re.compile(r"(?i)\s*(?:(?:mean|adjusted|between[- ]group|risk)?\s*diff|MD\b)")
 
 
 def _cell_interval(text: str, mark: str, with_estimate: bool = False) -> "tuple[Number, ...] | None":
@@ -437,7 +438,8 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
     Confidence Interval of the Difference"). None without limits, an estimate or a level, and for a bootstrap interval
     (its head says so), which need not agree with the test's p nor hold the estimate. Last, where it was read."""
     lo, hi = _own_column(roles, column, "ci_low"), _own_column(roles, column, "ci_high")
-    one, both = _own_column(roles, column, "ci"), _own_column(roles, column, "BCI")
+    one = _own_column(roles, column, "ci")
+    both = column if roles.get(column) == "BCI" else _own_column(roles, column, "BCI")  # (a table of estimates with their intervals alone)
     estimate = None
     if lo is not None and hi is not None and lo in row and hi in row and numbers.get(lo) is not None and numbers.get(hi) is not None:
         if numbers[lo][0] != "=" or numbers[hi][0] != "=":
@@ -593,7 +595,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if (p is None and interval is None) or roles[k] == "expB":  # (an odds ratio without its interval: a p alone)
                 continue
             diff = roles[k] == "diff" or _MEAN_DIFFERENCE.match(heads.get(k, "")) is not None
-            name = "mean difference" if diff else "B"
+            name = ("mean difference" if re.match(r"(?i)\s*(?:mean\s+diff|MD\b)", heads.get(k, "")) or roles[k] == "diff" else "difference") if diff else "B"
             rep = Reported(None, "", estimate.start, estimate.start, estimate.end, p=_p_after(p, estimate.end))
             rep.text = f"{name} = {estimate.text}" + (f", SE = {se.text}" if se is not None else "")
             if interval is not None:
@@ -852,7 +854,41 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                             break
                 readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table", welch))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
-    return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark) + _starred_matrix(rows, mark, stars, said or caption), used
+    estimates = _estimate_cells(rows, f"{caption} {said}", mark)
+    used |= {id(rep) for t in estimates for rep in rows[t.unit.cell[1]][t.unit.cell[2]][1]}  # type: ignore[index]  # (the cell's lone p)
+    return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark) + _starred_matrix(rows, mark, stars, said or caption) + estimates, used
+
+
+# an estimate with its interval and p in one cell, "−0.71 (−0.85, −0.57) −26.4% p < 0.0001" (a percentage change may stand
+# between them: PMC8277838's Table 2, its note "Difference (95% confidence interval), percentage change, p value")
+_ESTIMATE_CI_P = {mark: re.compile(rf"\s*(?P<est>{_SIGNED[mark]})\s*[(\[]\s*{limits}\s*[)\]]\s*[,;]?\s*(?:[-−–+]?\d+(?:[.,]\d+)?\s?%\s*[,;]?\s*)?"
+                                   rf"[pP]\s*(?P<op>[=<>≤≥])\s*(?P<p>\d*[.,]?\d+)\s*") for mark, limits in _LIMITS.items()}
+
+
+def _estimate_cells(rows, said: str, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """Cells that give an estimate with its interval and p, in a table whose caption or note names one level for its
+    intervals and is not of ratios: each an estimate (null 0) with its interval and p, checked as a coefficient's are."""
+    levels = {float(m.group(1)) for m in _LEVEL_SAID.finditer(said)}
+    if len(levels) != 1 or _RATIOS_SAID.search(said) is not None or not 50 <= next(iter(levels)) < 100:
+        return []
+    level = levels.pop() / 100
+    pattern = _ESTIMATE_CI_P[mark if mark in _ESTIMATE_CI_P else "."]
+    read = _patterns(mark).to_number
+    out = []
+    for r in sorted(rows):
+        for c, (unit, _) in sorted(rows[r].items()):
+            m = pattern.fullmatch(unit.text) if "(" in unit.text or "[" in unit.text else None
+            if m is None:
+                continue
+            estimate, low, high, p = (read(m.group(g), m.start(g)) for g in ("est", "lo", "hi", "p"))
+            if estimate is None or low is None or high is None or p is None or not 0 <= p.value <= 1:
+                continue
+            pv = PValue(m.group("op"), p, m.start("op"), p.end, m.start("op"), "p")
+            rep = Reported(None, "", estimate.start, estimate.start, p.end, p=pv, ci=Interval(level, low, high, low.start, high.end), estimate=estimate)
+            rep.text = f"estimate = {estimate.text}, {level * 100:g}% CI [{low.text}, {high.text}]{p_text(pv)}"
+            out.append(TableStatistic(unit, rep, None, "read from the table's row: an estimate with its interval and p in one cell "
+                                                       f"(the level the caption or note gives, {level * 100:g}%)"))
+    return out
 
 
 _SPEARMAN_SAID = re.compile(r"(?i)\bspearman|\brho\b|ρ")
