@@ -1959,3 +1959,38 @@ def test_an_estimate_with_its_interval_and_p_in_one_cell(tmp_path):
     assert {e.found: e.codes for e in audit_file(path)} == {"difference = 4.52, 95% CI [-0.73, 9.76]": [], "difference = -1.29, 95% CI [-2.16, -0.42]": []}
     path.write_text("Table 6\n\n" + _CONSORT_TABLE.replace("-1.29 (-2.16", "-2.29 (-2.16"), encoding="utf-8")
     assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]
+
+
+# Regression tables as PubMed Central prints them: Table 3 of PMC1373609 ("βa | 95% CI for β | P value", the note calling
+# the β unstandardised), Table 2 of PMC7757460 (standardised β with its interval in parentheses), Table 2 of PMC2713360
+# (β with the SE of β and a t; "Probability" for p), Table 5 of PMC8889762 (Est, SE, t printed without its sign, p-value)
+_BETA_TABLES = {
+    "PMC1373609": "| Explanatory variables | βa | 95% CI for β | P value |\n|---|---|---|---|\n| 0–3 months | Reference | | |\n"
+                  "| > 3–6 months | 0.013 | -0.016, 0.043 | 0.381 |\n| BMI | -0.003 | -0.005, -0.0004 | 0.020 |\n"
+                  "| 15D score at baseline | 0.752 | 0.637, 0.867 | <0.001 |\n| Constant | 0.301 | | |\n| R square | 0.613 | | |\n",
+    "PMC7757460": "| | Standardised beta coefficient | 95% CI | P value |\n|---|---|---|---|\n| Metabolic syndrome | −0.004 | (−0.040 to 0.033) | 0.847 |\n"
+                  "| Hypertension | 0.032 | (−0.003 to 0.066) | 0.071 |\n| Heart disease | 0.081 | (0.047 to 0.114) | <0.001 |\n",
+    "PMC2713360": "| Factor | Beta Weight (Standardized) | Standard Error of Beta | t-value | Probability |\n|---|---|---|---|---|\n"
+                  "| Age | .240 | .131 | 1.84 | .07 |\n| Drug Group | .068 | .123 | .24 | Ns |\n| Initial SBP | −.660 | .130 | −5.09 | <.001 |\n",
+    "PMC8889762": "| Variable | Est | SE | t | p-value |\n|---|---|---|---|---|\n| (Constant) | −14.73 | 103.4 | 0.143 | 0.8868 |\n"
+                  "| Age (per year) | 2.865 | 1.421 | 2.017 | 0.0450 |\n| Gender | −30.76 | 26.32 | 1.168 | 0.2440 |\n",
+}
+
+
+def test_regression_tables_of_beta_est_and_unsigned_t(tmp_path):
+    """A β column with its interval and p and no B (its head marked "βa"), "Beta Weight (Standardized)" with "Standard
+    Error of Beta" and "Probability", and "Est" had not been read as estimates: the β's were not read at all, the t's not
+    checked against β / SE or Est / SE. Each is now; a t printed without its sign beside a negative estimate (as the
+    last table prints every t) is no finding, and PMC2713360's own slip — t = .24 where β / SE gives .55 — is found."""
+    path = tmp_path / "t.md"
+    found = {}
+    for source, table in _BETA_TABLES.items():
+        path.write_text(f"Table 2. Multiple linear regression ({source})\n\n{table}", encoding="utf-8")
+        found[source] = {e.found: e.codes for e in audit_file(path) if e.unit.cell is not None}
+    assert found["PMC1373609"] == {"β = 0.013, 95% CI [-0.016, 0.043], p = 0.381": [], "β = -0.003, 95% CI [-0.005, -0.0004], p = 0.020": [],
+                                   "β = 0.752, 95% CI [0.637, 0.867], p < 0.001": []}
+    assert len(found["PMC7757460"]) == 3 and not any(found["PMC7757460"].values())
+    assert found["PMC2713360"] == {"t = 1.84, p = .07": [], "t = .24 Ns": ["coefficient-does-not-fit"], "t = −5.09, p < .001": []}
+    assert len(found["PMC8889762"]) == 3 and not any(found["PMC8889762"].values())
+    path.write_text("Table 5\n\n" + _BETA_TABLES["PMC8889762"].replace("| 2.017 |", "| 3.017 |"), encoding="utf-8")
+    assert [c for c in ({e.found: e.codes for e in audit_file(path)}).values() if c] == [["coefficient-does-not-fit"]]

@@ -944,7 +944,8 @@ def coefficient_ratio(rep: Reported, coefficient: "Ratio | None") -> list[Findin
     if rep.symbol == "chi2":  # the Wald χ² of one coefficient: (B / SE)²
         ratio = (0.0 if ratio[0] <= 0 <= ratio[1] else min(ratio[0] ** 2, ratio[1] ** 2), max(ratio[0] ** 2, ratio[1] ** 2))
     name, what = ("Wald", f"({b_name} / {se_name})²") if rep.symbol == "chi2" else (rep.symbol, f"{b_name} / {se_name}")
-    if not _overlap(ratio, stat):
+    unsigned = rep.symbol in ("t", "z") and rep.value.value >= 0 and not rep.value.text.lstrip().startswith("+")  # |t| as some tables print it
+    if not _overlap(ratio, stat) and not (unsigned and _overlap((-ratio[1], -ratio[0]), stat)):
         out.append(Finding("coefficient-does-not-fit", f"{name} = {rep.value.text} is not {what}: {b_name} = {b.text} and {se_name} = {se.text} give "
                                                         f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"{b_name} = {b.text}, {se_name} = {se.text}, {name} = {rep.value.text}"))
     return out + _odds_fit(rep, b)

@@ -30,7 +30,7 @@ __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "
 _INTERVAL_HEAD = (r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|C\.I\.?|confidence\s+interval)|(?:CI|C\.I\.?|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)")
 # its limits named after it: "95% CI of B (lower–upper)", "95% CI (LL, UL)"
 _LIMITS_NAMED = r"(?:\s*\(\s*(?:lower|LL)\s*(?:[–—,/-]|to)\s*(?:upper|UL)\s*\))?"
-_FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d])$")
+_FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d]|(?<=β)[a-d])$")
 _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
     (re.compile(r"F(?:[- ]?(?:values?|ratio)|\s+[Cc]hange)?"), "F"),  # (SPSS's Model Summary: "F Change", "Sig. F Change")
@@ -47,10 +47,10 @@ _ROLES = (
     # an interval in one column, "−7.48, −4.53" or "[0.15, 0.31]" under "95% CI" (of the nearest estimate to its left)
     (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|odds\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
-    (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:\s+coefficients?)?"), "beta"),
+    (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:\s+(?:coefficients?|weights?))?(?:\s*\(\s*standardi[sz]ed\s*\))?"), "beta"),
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
     # and statsmodels': Coef., Std. Err., coef, std err)
-    (re.compile(r"B|b|(?i:(?:estimated\s+)?(?:regression\s+)?(?:estimates?|coef\.?|coefficients?))"), "B"),
+    (re.compile(r"B|b|(?i:(?:estimated\s+)?(?:regression\s+)?(?:estimates?|est\.?|coef\.?|coefficients?))"), "B"),
     # the limits of an estimate's interval in two columns: SPSS's "Lower" and "Upper" under "95% Confidence Interval of the
     # Difference", statsmodels' "[0.025" and "0.975]", R's confint "2.5 %" and "97.5 %" (the level: _interval_cells)
     # (also with the interval named before them, as one header row gives both: "95% CI: LL", "95% CI for OR: LL")
@@ -59,12 +59,12 @@ _ROLES = (
     # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
-    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|(?:estimated\s+)?standard\s+errors?"), "SE"),
+    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|(?:estimated\s+)?standard\s+errors?(?:\s+of\s+(?:b|beta|β))?"), "SE"),
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR|(?:estimated\s+)?odds\s+ratio"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
     # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
-    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\))(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
+    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\)|Probability)(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
     # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
     (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|Chi(?:sq)?)\s?\)?"), "p"),
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
@@ -462,7 +462,8 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
         owner = max((k for k, r in roles.items() if k < at and r in _ESTIMATES), default=None)  # the estimate to its left
         if owner is not None and roles[owner] == "beta" and _FOR_B.search(f"{head} {said}"):  # SPSS's "95.0% Confidence Interval for B" after Beta
             owner = max((k for k, r in roles.items() if k < at and r == "B"), default=None)
-        if owner is None or roles[owner] not in ("B", "diff", "expB"):
+        alone = roles.get(owner) == "beta" and {"B", "BSE"}.isdisjoint(roles.values())  # a β with no B in the table: its own interval
+        if owner is None or (roles[owner] not in ("B", "diff", "expB") and not alone):
             return None
         role = roles[owner]
         estimate = numbers[owner][1] if owner in row and numbers.get(owner) is not None else None
@@ -526,7 +527,9 @@ def _ratio_statistic(name: str, shown: str, estimate: Number, ci: Interval, p: "
 def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "dict[int, str] | None" = None) -> "tuple[Ratio | None, list[Effect]]":  # type: ignore[no-untyped-def]
     """A Wald row's (or a t's or z's) B and SE, and its Exp(B) as an odds ratio, from their columns, or B and SE from
     one cell under "B (SE)"; a t test's mean difference and its SE."""
-    cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB", "diff", "se_diff") and k in row and numbers.get(k) is not None}
+    cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB", "diff", "se_diff", "beta") and k in row and numbers.get(k) is not None}
+    if "B" not in cols and "beta" in cols and "SE" in cols and {"B", "BSE", "BCI"}.isdisjoint(roles.values()):
+        cols["B"] = cols["beta"]  # a β with the SE of β beside it ("Beta Weight (Standardized) | Standard Error of Beta | t-value"): t = β / SE
     if "diff" in cols and "se_diff" in cols:  # a t test's row: t = mean difference / its SE
         return (numbers[cols["diff"]][1], numbers[cols["se_diff"]][1], ("mean difference", "SE")), []
     joint = next((k for k, role in roles.items() if role == "BCI" and k in row), None)
@@ -543,6 +546,8 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "d
     if "B" not in cols or "SE" not in cols:
         return None, []
     b, se = numbers[cols["B"]][1], numbers[cols["SE"]][1]
+    if roles.get(cols["B"]) == "beta":
+        return (b, se, ("β", "SE")), []
     effects = []
     if "expB" in cols:
         ratio = numbers[cols["expB"]][1]
@@ -559,7 +564,8 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
     SE (checked: the interval holds the estimate and agrees with the p; the p follows from B / SE under some df); an
     interval after an odds ratio column is the odds ratio's. A row without a p or an interval is not read."""
     out = []
-    starts = sorted(k for k, role in roles.items() if role in ("B", "BSE", "BCI", "diff")) or sorted(k for k, role in roles.items() if role == "expB")
+    starts = (sorted(k for k, role in roles.items() if role in ("B", "BSE", "BCI", "diff")) or sorted(k for k, role in roles.items() if role == "expB")
+              or sorted(k for k, role in roles.items() if role == "beta"))  # (a table of β alone, "β | 95% CI | p")
     for i, k in enumerate(starts):
         end = starts[i + 1] if i + 1 < len(starts) else 1 << 30
         if k not in row:
@@ -595,7 +601,8 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if (p is None and interval is None) or roles[k] == "expB":  # (an odds ratio without its interval: a p alone)
                 continue
             diff = roles[k] == "diff" or _MEAN_DIFFERENCE.match(heads.get(k, "")) is not None
-            name = ("mean difference" if re.match(r"(?i)\s*(?:mean\s+diff|MD\b)", heads.get(k, "")) or roles[k] == "diff" else "difference") if diff else "B"
+            name = ("mean difference" if re.match(r"(?i)\s*(?:mean\s+diff|MD\b)", heads.get(k, "")) or roles[k] == "diff" else "difference") if diff \
+                else "β" if roles[k] == "beta" else "B"
             rep = Reported(None, "", estimate.start, estimate.start, estimate.end, p=_p_after(p, estimate.end))
             rep.text = f"{name} = {estimate.text}" + (f", SE = {se.text}" if se is not None else "")
             if interval is not None:
