@@ -1994,3 +1994,26 @@ def test_regression_tables_of_beta_est_and_unsigned_t(tmp_path):
     assert len(found["PMC8889762"]) == 3 and not any(found["PMC8889762"].values())
     path.write_text("Table 5\n\n" + _BETA_TABLES["PMC8889762"].replace("| 2.017 |", "| 3.017 |"), encoding="utf-8")
     assert [c for c in ({e.found: e.codes for e in audit_file(path)}).values() if c] == [["coefficient-does-not-fit"]]
+
+
+# Table 3 of PMC7355162 (Eur Psychiatry 2020; as PubMed Central prints it, five rows): Welch's t with its df, "PV" for its
+# p and "Cohen_d" — the p's one-sided throughout, two of them in the direction opposite to the result
+_EURPSY_TABLE = ("| Difference variable | m1 | sd1 | m0 | sd0 | T | df | PV | Cohen_d |\n|---|---|---|---|---|---|---|---|---|\n"
+                 "| PANSS.Tot | 3.7 | 12.1 | −7.2 | 9.8 | 4.4 | 65.1 | <0.001 | 0.961 |\n| PANSS.Pos | 0.8 | 3.8 | −1.6 | 4.3 | 2.5 | 48.4 | 0.009 | 0.594 |\n"
+                 "| ERFCS.Tot | 2.2 | 18.5 | −4.1 | 15.9 | 1.6 | 60.6 | 0.061 | 0.357 |\n| BEMRI.NB | −0.1 | 1.5 | 0.2 | 1.9 | −0.9 | 49.8 | 0.823 | −0.229 |\n"
+                 "| MASC.Ho | −0.4 | 3.4 | 0.8 | 3.5 | −1.5 | 56.2 | 0.934 | −0.360 |\n")
+
+
+def test_one_sided_ps_in_either_direction_and_a_pv_column(tmp_path):
+    """"PV" heads the p column (it had not been read: the t's were left without p) and "Cohen_d" the d. The table's p's
+    are one-sided: .009 and .061 are half the two-sided p's (scipy: t(48.4) = 2.5 gives .016), .823 and .934 are one
+    minus half — a one-sided test whose direction is opposite to the result — which had been an error ("does not
+    follow") and is now the same warning, saying which tail."""
+    assert abs(1 - stats.t.sf(0.9, 49.8) - 0.8135) < 0.001 and abs(stats.t.sf(2.5, 48.4) - 0.0079) < 0.001
+    path = tmp_path / "t.md"
+    path.write_text("Table 3. Univariate differences between V1 and V2\n\n" + _EURPSY_TABLE, encoding="utf-8")
+    found = {e.found: e for e in audit_file(path)}
+    assert [e.codes for e in found.values()].count(["one-sided"]) == 4 and found["t(65.1) = 4.4, p < 0.001, d = 0.961"].codes == []
+    assert "opposite to the result" in found["t(49.8) = −0.9, p = 0.823, d = −0.229"].message
+    path.write_text("Table 3\n\n" + _EURPSY_TABLE.replace("| 0.823 |", "| 0.623 |"), encoding="utf-8")
+    assert "p-does-not-follow" in {e.found: e for e in audit_file(path)}["t(49.8) = −0.9, p = 0.623, d = −0.229"].codes

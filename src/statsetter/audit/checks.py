@@ -267,6 +267,11 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     evidence = f"{_up_to_value(rep)} gives p from {computed[0]:.4g} to {computed[1]:.4g}{over}; reported {shown}"
     if rep.symbol in ("t", "z", "r", "rs") and _overlap((computed[0] / 2, computed[1] / 2), reported):
         return [Finding("one-sided", "The reported p matches a one-sided test only; say that the test was one-sided, or report the two-sided p.", evidence)]
+    # (a bound, "ns" or a statistic without df would fit the other tail whatever its value: only an exact p of a statistic with df)
+    exact = rep.op == "=" and given.op == "=" and reported[0] > 0.5 and not anywhere
+    if exact and rep.symbol in ("t", "z", "r", "rs") and _overlap((1 - computed[1] / 2, 1 - computed[0] / 2), reported):  # the other tail's
+        return [Finding("one-sided", "The reported p matches only a one-sided test whose direction is opposite to the result (its p is 1 − p/2); "
+                                     "say that the test was one-sided and in which direction, or report the two-sided p.", evidence)]
     found = [Finding("p-does-not-follow", "The reported p follows from the statistic under no df at all." if anywhere else
                      "The reported p does not follow from the statistic and its df.", evidence)]
     said_significant = reported[1] <= alpha

@@ -64,7 +64,7 @@ _ROLES = (
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
     # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
-    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\)|Probability)(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
+    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\)|Probability|PV)(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
     # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
     (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|Chi(?:sq)?)\s?\)?"), "p"),
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
@@ -86,7 +86,7 @@ _ROLES = (
     # a t's Cohen's d: checked as t/√(df + 1) where the head names it d_z, or the caption or note says the test is a
     # one-sample test (one SD: no other d); a paired test's "Cohen's d" may be d_z or d_av (pingouin's), and is not checked
     (re.compile(r"(?i)(?:cohen'?s\s+)?d_?z"), "effect:d_z"),
-    (re.compile(r"(?i)cohen'?s\s+d|d"), "effect:d"),
+    (re.compile(r"(?i)cohen(?:['’]?s\s+|_)d|d"), "effect:d"),  # ("Cohen_d", as R's output names it)
     (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
