@@ -639,8 +639,8 @@ def test_decimal_commas_are_read_as_typed_and_said():
     assert "p-does-not-follow" in second.codes
     comma_style = Path(__file__).parent / "styles" / "comma.toml"
     assert "decimal-mark" not in audit_units(units, str(comma_style))[0].codes  # the style itself has decimal commas
-    forced = audit_units(units, decimal_mark=".")[0]  # asked to read points: "2,14" is then the number 2 followed by a comma
-    assert "t(38) = 2:" in forced.checked
+    forced = audit_units(units, decimal_mark=".")[0]  # asked to read points: "2,14", which no thousands group explains, is a
+    assert "t(38) = 2,14:" in forced.checked and "decimal-mark" in forced.codes  # decimal comma typed by slip (it had been the number 2)
 
 
 def test_a_procedure_named_in_the_tables_note_excuses_its_p(tmp_path):
@@ -2017,3 +2017,27 @@ def test_one_sided_ps_in_either_direction_and_a_pv_column(tmp_path):
     assert "opposite to the result" in found["t(49.8) = −0.9, p = 0.823, d = −0.229"].message
     path.write_text("Table 3\n\n" + _EURPSY_TABLE.replace("| 0.823 |", "| 0.623 |"), encoding="utf-8")
     assert "p-does-not-follow" in {e.found: e for e in audit_file(path)}["t(49.8) = −0.9, p = 0.623, d = −0.229"].codes
+
+
+# Sentences of Turkish education papers as an online dictionary quotes them (thefreedictionary.com, "Mann-Whitney U test"):
+# SPSS's decimal commas among points, "[Z(472)= 1,80; p>0.05]"
+_TR_TEXT = ("According to the results of the Mann-Whitney U test which aimed to test the attendees' self esteem levels in tandem with "
+            "their gender [Z(472)= 1,80; p>0.05], marital status [Z(472)= 1,77; p>0.05], parental status [Z(472)= 1,78; p>0.05]; "
+            "there was no statistical difference. The first effect held, t(38) = 2.50, p = .017.")
+
+
+def test_a_decimal_comma_typed_among_points_is_read_as_one():
+    """"Z(472)= 1,80" in a text of points had been read as z = 1 (a "decimals" finding on "1"); "t(38)= 2,14" as t = 2,
+    whose p range then hid any slip. A comma that no thousands group explains (not three digits after it) is a decimal
+    comma: read as such in a statistic's value, a p or an effect size, and a decimal-mark finding — never in an interval's
+    or a list's numbers, whose comma parts two ("95% CI [2,9]", "df = 2,97")."""
+    entries = audit_units([Unit("c", _TR_TEXT)])
+    zs = [e for e in entries if e.found.startswith("Z")]
+    assert len(zs) == 3 and all("decimal-mark" in e.codes and "decimals" not in e.codes for e in zs), [(e.found, e.codes) for e in zs]
+    assert "1,80" in zs[0].message
+    (e,) = audit_units([Unit("c", "The scores differed [Z(472)= 2,80; p<0.01].")])  # a mutation: 2.80 gives p = .005, 2 would give .046
+    assert "p-does-not-follow" not in e.codes and "decimal-mark" in e.codes
+    (e,) = audit_units([Unit("c", "The groups differed, t(38) = 2.50, p = .017, 95% CI [2,9].")])
+    assert e.found.endswith("95% CI [2,9]") and e.codes == []
+    (e,) = audit_units([Unit("c", "The groups differed, F = 4.10, df = 2,97, p = .02.")])
+    assert "F(2, 97) = 4.10" in e.checked and e.codes == []

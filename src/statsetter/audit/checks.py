@@ -496,6 +496,10 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
         if other:
             out.append(Finding("decimal-mark", f"Write decimals with the style's decimal mark {mark!r}.", ", ".join(other)))
         mark = read_mark  # the leading-zero checks below look at the number as typed
+    elif mark == "." and "," in rep.text:  # a decimal comma typed among points ("t(38) = 2,14" in a manuscript of points)
+        slipped = [n.text for n, _ in _numbers_with_quantity(rep) if n.decimals and "," in n.digits and "." not in n.digits]
+        if slipped:
+            out.append(Finding("decimal-mark", f"Write decimals with the style's decimal mark {mark!r}.", ", ".join(slipped)))
     zero, no_zero, minus = [], [], []
     for n, q in _numbers_with_quantity(rep, text):
         digits = n.digits

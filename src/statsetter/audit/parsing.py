@@ -133,10 +133,15 @@ def symbol_of(text: str) -> str | None:
     return t if t in ("t", "F", "r", "z", "U", "H", "W", "T", "Q", "V") else None
 
 
-def _number_pattern(mark: str) -> str:
+def _number_pattern(mark: str, slips: bool = False) -> str:
+    """A printed number; with ``slips``, also "2,14" typed among points (a statistic's value, a p, an effect size — never
+    a list's or an interval's numbers, "[2,9]", "df = 2,97", whose comma parts two)."""
     if mark == ",":
         return r"[-−–‐]?\s?(?:\d{1,3}(?:[.\u202f\u00a0 ]\d{3})+(?:,\d+)?|\d+(?:,\d+)?|,\d+)"
-    return r"[-−–‐]?\s?(?:\d{1,3}(?:,\d{3})+(?:\.\d+)?|\d{1,3}(?:[\u2009\u202f]\d{3})+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+)"
+    # (a comma no thousands group explains, "2,14" in a manuscript typed with points, is a decimal comma typed by slip: read as
+    # one, and a decimal-mark finding)
+    slipped = r"|\d+,(?:\d{1,2}|\d{4,})(?![\d.,])" if slips else ""
+    return rf"[-−–‐]?\s?(?:\d{{1,3}}(?:,\d{{3}})+(?:\.\d+)?(?!\d){slipped}|\d{{1,3}}(?:[\u2009\u202f]\d{{3}})+(?:\.\d+)?|\d+(?:\.\d+)?|\.\d+)"
 
 
 # a number's power of ten as authors type it: 2.35e-3, 2.1E−04, 2.1 × 10⁻⁴, 2.1×10^-4, 2.1 x 10−4 (one number, never two)
@@ -276,16 +281,17 @@ _RATIO_WITHOUT_EQUALS = r"(?:(?<=R)|(?<=R[)\]])|(?<=ratio)|(?<=risk)|(?<=differe
 class _Patterns:
     def __init__(self, mark: str) -> None:
         num = _number_pattern(mark)
+        value = _number_pattern(mark, slips=True)  # (a value after its operator: "t(38) = 2,14" typed among points)
         self.mark = mark
         self.read: dict[str, tuple[str, float, int, int, int] | None] = {}  # to_number's readings of printed forms, by text
         self.number = re.compile(num)
         self.head = re.compile(
             rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
-            rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:))\s*+(?P<num>{num}{_EXPONENT}?)"
+            rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:))\s*+(?P<num>{value}{_EXPONENT}?)"
         )
         # not after a mark of significance ("*", "†", "‡", "§", "^", or one and a space): "*p < .05. **p < .01. †p < .10." is a
         # table's note defining its marks, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{num}{_EXPONENT}?)"
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{value}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
         # p < .01", "each p-value ≤ .01"; or their p's listed in order, "ps = .03 and .04" (an "=" only before a list)
@@ -299,19 +305,19 @@ class _Patterns:
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,¼]?\s*+"
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
-        self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{num})")
+        self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
         # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
         self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
-                                rf"\s*+(?P<num>{num})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<rb>{num})\s*+[)\]])")
+                                rf"\s*+(?P<num>{value})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<rb>{num})\s*+[)\]])")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
         self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
                              rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         # the unstandardised coefficient as "B" or "b", its standard error as "SE", "SE B" or "SEB"
-        self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+[=¼]\s*+(?P<num>{num})")  # (not the B of "SE B")
-        self.coef_se = re.compile(rf"S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<num>{num})")
+        self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+[=¼]\s*+(?P<num>{value})")  # (not the B of "SE B")
+        self.coef_se = re.compile(rf"S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<num>{value})")
         # what may stand between a coefficient given without a test and its p: its SE and its interval ("b = 0.42, SE =
         # 0.10, 95% CI [0.22, 0.62], p < .001"), each set off by a comma or semicolon
         self.coef_lead = re.compile(rf"\s*+[,;]\s*+(?:S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<se>{num})\s*+[,;]\s*+)?"
@@ -366,6 +372,8 @@ class _Patterns:
             sign, body = body[0], body[1:].strip()
         if self.mark == ",":
             body = re.sub(r"[.\u202f\u00a0 ](?=\d{3}(?!\d))", "", body).replace(",", ".")
+        elif _SLIPPED_COMMA.fullmatch(body):  # "2,14": no thousands group, a decimal comma
+            body = body.replace(",", ".")
         else:
             body = body.replace(",", "").replace("\u2009", "").replace("\u202f", "")  # 1,256 or 13 071 (thin spaces, AMA)
         if len(body) > _MAX_DIGITS:  # not a statistic anyone typed; never converted (int-digit limits, overflow)
@@ -397,6 +405,7 @@ _new_effect = _unchecked_maker(Effect, {}, ("name", "number", "start", "end", "s
 _REACH = 240  # the characters a statistic's clause reads after its head (or, without a head, after its first part)
 _UNREAD = object()
 _READ_MEMORY = 16384  # printed forms remembered (then forgotten all at once): a few MB at most
+_SLIPPED_COMMA = re.compile(r"\d+,(?:\d{1,2}|\d{4,})")  # a decimal comma in a manuscript read with points
 _PLAIN = re.compile(r"(?:([-−–‐])\s?)?(\d{1,15}(?:\.\d{1,15})?|\.\d{1,15})")  # a sign, as the general path reads it, and digits
 _SUBSCRIPT_DIGITS = str.maketrans("₀₁₂₃₄₅₆₇₈₉", "0123456789")
 
