@@ -2037,6 +2037,8 @@ def test_a_decimal_comma_typed_among_points_is_read_as_one():
     assert "1,80" in zs[0].message
     (e,) = audit_units([Unit("c", "The scores differed [Z(472)= 2,80; p<0.01].")])  # a mutation: 2.80 gives p = .005, 2 would give .046
     assert "p-does-not-follow" not in e.codes and "decimal-mark" in e.codes
+    revised = audit_units([Unit("c", "The first held, t(38) = 2.50, p = .017; the second too, t(38)= 2,14; p=.039.")], restyle=True)[1]
+    assert revised.revision.plain().replace("\u00a0", " ") == "t(38) = 2.14, p = .039"  # the revision settles it (it had been refused)
     (e,) = audit_units([Unit("c", "The groups differed, t(38) = 2.50, p = .017, 95% CI [2,9].")])
     assert e.found.endswith("95% CI [2,9]") and e.codes == []
     (e,) = audit_units([Unit("c", "The groups differed, F = 4.10, df = 2,97, p = .02.")])

@@ -22,7 +22,7 @@ from typing import TYPE_CHECKING, Sequence
 from ..style.numbers import numbers_for
 from ..styled import StyledText, escape_markup, lowered_plain
 from .checks import RATIOS, Finding
-from .parsing import PValue, Reported, icc_form, subscript
+from .parsing import _SLIPPED_COMMA, PValue, Reported, icc_form, subscript
 from .reading import _SYM, OMATH, REMOVED, hidden, math_text, owner, symbol_font, symbol_text
 
 if TYPE_CHECKING:
@@ -344,6 +344,8 @@ _DF_WORDS = frozenset({"on", "and", "with", "df"})
 def _value(token: str, mark: str) -> tuple[float, int]:
     if mark == ",":
         token = token.replace(".", "").replace(",", ".")
+    elif _SLIPPED_COMMA.fullmatch(token):  # "2,14" among points: a decimal comma typed by slip, as the parser reads it
+        token = token.replace(",", ".")
     else:
         token = token.replace(",", "")
     return float(token), len(token.partition(".")[2])
