@@ -2043,3 +2043,12 @@ def test_a_decimal_comma_typed_among_points_is_read_as_one():
     assert e.found.endswith("95% CI [2,9]") and e.codes == []
     (e,) = audit_units([Unit("c", "The groups differed, F = 4.10, df = 2,97, p = .02.")])
     assert "F(2, 97) = 4.10" in e.checked and e.codes == []
+
+
+def test_a_coefficients_se_in_parentheses_before_its_p():
+    """"B = 0.23 (SE = 0.05), p < .001" (the SE in parentheses after the B, as many results sections type it; practice,
+    the numbers invented) had left the p alone: it is now checked with B / SE, as "B = 0.23, SE = 0.05, p < .001" is."""
+    (e,) = audit_units([Unit("c", "Stress predicted sleep quality, B = 0.23 (SE = 0.05), p < .001.")])
+    assert e.codes == [] and any("SE = 0.05" in n for n in e.notes)
+    (e,) = audit_units([Unit("c", "Stress predicted sleep quality, b = 0.23 (SE = 0.15), p < .001.")])
+    assert e.codes == ["coefficient-does-not-fit"]

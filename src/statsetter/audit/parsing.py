@@ -320,7 +320,9 @@ class _Patterns:
         self.coef_se = re.compile(rf"S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<num>{value})")
         # what may stand between a coefficient given without a test and its p: its SE and its interval ("b = 0.42, SE =
         # 0.10, 95% CI [0.22, 0.62], p < .001"), each set off by a comma or semicolon
-        self.coef_lead = re.compile(rf"\s*+[,;]\s*+(?:S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<se>{num})\s*+[,;]\s*+)?"
+        # (the SE also in parentheses after the B: "B = 0.23 (SE = 0.05), p < .001")
+        self.coef_lead = re.compile(rf"\s*+(?:[,;]\s*+(?:S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<se>{num})\s*+[,;]\s*+)?"
+                                    rf"|\(\s*+S(?<![\w]S)E(?:\s?[Bb](?![\w]))?\s*+[=¼]\s*+(?P<se2>{num})\s*+\)\s*+[,;]\s*+)"
                                     rf"(?:(?P<ci>\d{{2}}(?:[.,]\d+)?\s*+%\s*+(?:CI|C\.I\.)[^,;\[(]{{0,3}}[\[(][^\])]{{1,40}}[\])])\s*+[,;]\s*+)?")
         self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+[=¼]\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
@@ -769,7 +771,8 @@ def coefficient_lead(text: str, rep: Reported, since: int, decimal_mark: str = "
     estimate = pat.to_number(found.group("num"), found.start("num"))
     if between is None or estimate is None:
         return None
-    se = pat.to_number(between.group("se"), between.start("se")) if between.group("se") else None
+    typed = "se" if between.group("se") else "se2" if between.group("se2") else None
+    se = pat.to_number(between.group(typed), between.start(typed)) if typed else None
     interval = None
     if between.group("ci"):
         ci = pat.ci.match(text, between.start("ci"), between.end("ci"))
