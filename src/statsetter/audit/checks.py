@@ -496,13 +496,12 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
         if other:
             out.append(Finding("decimal-mark", f"Write decimals with the style's decimal mark {mark!r}.", ", ".join(other)))
         mark = read_mark  # the leading-zero checks below look at the number as typed
-    elif mark == "." and "," in rep.text:  # a decimal comma typed among points ("t(38) = 2,14" in a manuscript of points)
-        slipped = [n.text for n, _ in _numbers_with_quantity(rep) if n.decimals and "," in n.digits and "." not in n.digits]
-        if slipped:
-            out.append(Finding("decimal-mark", f"Write decimals with the style's decimal mark {mark!r}.", ", ".join(slipped)))
-    zero, no_zero, minus = [], [], []
+    slips = mark == "." and read_mark != "," and "," in rep.text  # a decimal comma typed among points ("t(38) = 2,14")
+    zero, no_zero, minus, slipped = [], [], [], []
     for n, q in _numbers_with_quantity(rep, text):
         digits = n.digits
+        if slips and n.decimals and "," in digits and "." not in digits:
+            slipped.append(n.text)
         if q == _UNNAMED:
             pass
         elif digits.startswith("0" + mark) and num.is_bounded(q):
@@ -511,6 +510,8 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
             no_zero.append(n.text)
         if n.sign and n.sign != style.minus:
             minus.append(n.text)
+    if slipped:
+        out.append(Finding("decimal-mark", f"Write decimals with the style's decimal mark {mark!r}.", ", ".join(slipped)))
     if zero:
         out.append(Finding("leading-zero", "No leading zero before a quantity that cannot exceed 1.", ", ".join(zero)))
     if no_zero:

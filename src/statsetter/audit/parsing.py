@@ -557,6 +557,7 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
             gaps.append((at, s))
         at = max(at, e)
     gaps.append((at, len(text)))
+    verdicts = False  # an "ns" read alone: it may be the verdict after a statistic's own p
     for gap_start, gap_end in gaps:  # p values, effect sizes and descriptives outside any head's clause
         if not _anything_in(text, gap_start, gap_end, rare):  # none in any of its sentences (most gaps: ", and ")
             continue
@@ -564,10 +565,13 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         while piece < gap_end:
             b = boundary.search(text, piece, gap_end)
             stop = b.start() if b else gap_end
-            out += _orphans(pat, text, piece, stop, rare)
+            found = _orphans(pat, text, piece, stop, rare)
+            if found:
+                verdicts = verdicts or any(_lone_ns(r) for r in found)
+                out += found
             piece = (b.end() if b else gap_end) if stop < gap_end else gap_end
     out.sort(key=lambda r: r.start)
-    if len(out) > 1 and ("ns" in text or "n." in text) and any(_lone_ns(r) for r in out):  # an "ns" after a statistic's own p: its verdict, not a p
+    if verdicts:  # an "ns" after a statistic's own p: its verdict, not a p
         out = [r for i, r in enumerate(out) if not (i and _lone_ns(r) and ns_after(text, out[i - 1]))]
     bare = next((r.start for r in out if r.symbol is not None and r.p is None), None)  # (most statistics carry their p)
     if bare is not None:
@@ -979,6 +983,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     ci = None
     clause_df = False  # the df were read from the clause ("df = 2"), not the head
     again = None  # where an effect size of a name already read comes again (a statistic without a head: a new one)
+    differences = False  # a difference read (kept only with its interval)
     for at, kind, m in events:
         if at < covered:  # inside a match already read
             continue
@@ -1033,6 +1038,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                 last_end = max(last_end, close)
                 spans.append((m.start(), close))
                 continue
+            differences = differences or name == "MD"
             effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"),
                                  _labelled_interval(pat, m) if m.re is pat.ratio and m.group("rlev") is not None else None)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
@@ -1054,7 +1060,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
         covered = max(covered, m.end())
         last_end = max(last_end, m.end(), ci.end if kind == "ci" and ci is not None else 0)
         spans.append((m.start(), m.end()))
-    if any(e.name == "MD" and e.ci is None for e in rep.effects):  # a difference is read only with its interval
+    if differences and any(e.name == "MD" and e.ci is None for e in rep.effects):  # a difference is read only with its interval
         rep.effects = [e for e in rep.effects if e.name != "MD" or e.ci is not None]
     rep.end = last_end
     rep.operators = _operators(text, spans)
