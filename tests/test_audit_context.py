@@ -1955,6 +1955,7 @@ def test_an_estimate_with_its_interval_and_p_in_one_cell(tmp_path):
     assert len(entries) == 9
     assert {e.found: e.codes for e in entries if e.codes} == {"estimate = −0.54, 95% CI [−0.73, −0.62], p < 0.0001": ["ci-excludes-estimate"],
                                                              "estimate = −1.29, 95% CI [−1.51, 1.07], p < 0.0001": ["ci-p-disagree"]}
+    assert all(e.suggestion == "" for e in entries)  # (no suggestion of the p alone, which would read as the whole statistic's)
     path.write_text("Table 6. Example of reporting of summary results for each study group\n\n" + _CONSORT_TABLE, encoding="utf-8")
     assert {e.found: e.codes for e in audit_file(path)} == {"difference = 4.52, 95% CI [-0.73, 9.76]": [], "difference = -1.29, 95% CI [-2.16, -0.42]": []}
     path.write_text("Table 6\n\n" + _CONSORT_TABLE.replace("-1.29 (-2.16", "-2.29 (-2.16"), encoding="utf-8")

@@ -121,6 +121,8 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
     if rep.symbol is None and not rep.effects:
         if rep.p is None or rep.p.op == "ns" or rep.p.number is None or not 0 <= rep.p.number.value <= 1:
             return ""
+        if rep.estimate is not None and rep.estimate.start >= rep.start:  # an estimate read with its interval and p (a table's):
+            return ""  # its p alone restyled would read as the whole statistic's (a p after a B typed before it is restyled alone)
         if any(f.code in ("coefficient-does-not-fit", "ci-p-disagree") for f in findings):
             return ""  # (the p itself is in doubt: restyled, it would read as confirmed)
         if rep.p.op != "=":
