@@ -592,8 +592,10 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if ratio is None or numbers[interval[2]][0] != "=":
                 continue
             name = heads.get(interval[2], "OR").strip() or "OR"
-            marked = _marked_bound(f"{row[interval[2]][0].text} {row[k2][0].text if (k2 := _own_column(part, k, 'ci')) in row else ''}",
-                                   stars, ratio.end) if p is None and stars else None
+            marked = None
+            if p is None and stars:  # the bound the ratio's or its interval's marks stand for ("1.29 | (1.18 - 1.40)**")
+                limits = _own_column(part, k, "ci")
+                marked = _marked_bound(row[interval[2]][0].text + (" " + row[limits][0].text if limits in row else ""), stars, ratio.end)
             rep = _ratio_statistic("OR", name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
             unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
             how += f", its {marked[1]}" if marked else ""
