@@ -2053,3 +2053,27 @@ def test_a_coefficients_se_in_parentheses_before_its_p():
     assert e.codes == [] and any("SE = 0.05" in n for n in e.notes)
     (e,) = audit_units([Unit("c", "Stress predicted sleep quality, b = 0.23 (SE = 0.15), p < .001.")])
     assert e.codes == ["coefficient-does-not-fit"]
+
+
+# statsmodels' summary_col of Wooldridge's log wage equation (Example 8.1, wage1 data), as printed on solomonegash.com's
+# "Wooldridge in Python" pages: each coefficient with its marks, its SE in parentheses in the row below, two models
+_WAGE_TABLE = ("| | Hetroskedastic (b/se) | Robust (b/se) |\n|---|---|---|\n| Intercept | 0.321*** | 0.321*** |\n| | (0.100) | (0.109) |\n"
+               "| marrmale | 0.213*** | 0.213*** |\n| | (0.055) | (0.057) |\n| singfem | -0.110** | -0.110* |\n| | (0.056) | (0.057) |\n"
+               "| educ | 0.079*** | 0.079*** |\n| | (0.007) | (0.007) |\n| tenursq | -0.001** | -0.001** |\n| | (0.000) | (0.000) |\n"
+               "| R-squared | 0.461 | 0.461 |\n| N | 526 | 526 |\n\nStandard errors in parentheses.\n* p<.1, ** p<.05, ***p<.01\n")
+
+
+def test_marked_coefficients_with_their_se_in_the_row_below(tmp_path):
+    """Regression tables as economics and sociology print them — a coefficient with its marks, its SE in parentheses in
+    the unnamed row below — had not been read. Each marked coefficient is now checked: its mark's bound against B / SE
+    over every df (singfem's −0.110** with SE 0.056 is z = 1.96, p ≈ .050: fits; its robust −0.110* with 0.057 too); an SE
+    printed as 0.000 bounds nothing; a mutated SE is found."""
+    path = tmp_path / "t.md"
+    path.write_text("Table 1. Log wage equation\n\n" + _WAGE_TABLE, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 10 and all(not e.codes for e in entries), [(e.found, e.codes) for e in entries]
+    assert "B = -0.110, SE = 0.057, p < .1" in {e.found for e in entries}
+    path.write_text("Table 1\n\n" + _WAGE_TABLE.replace("| | (0.007) | (0.007) |", "| | (0.070) | (0.007) |"), encoding="utf-8")
+    assert [e.found for e in audit_file(path) if e.codes] == ["B = 0.079, SE = 0.070, p < .01"]
+    path.write_text("Table 1\n\n" + _WAGE_TABLE.split("\n\nStandard")[0] + "\n", encoding="utf-8")  # no marks defined: not read
+    assert audit_file(path) == []

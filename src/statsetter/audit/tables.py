@@ -865,7 +865,45 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 found.append(TableStatistic(unit, merged, rep, how, readings))
     estimates = _estimate_cells(rows, f"{caption} {said}", mark)
     used |= {id(rep) for t in estimates for rep in rows[t.unit.cell[1]][t.unit.cell[2]][1]}  # type: ignore[index]  # (the cell's lone p)
+    if stars:
+        taken = {id(t.unit) for t in found + estimates}
+        estimates += [t for t in _marked_coefficients(rows, stars, mark) if id(t.unit) not in taken]
     return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark) + _starred_matrix(rows, mark, stars, said or caption) + estimates, used
+
+
+_SE_BELOW = re.compile(r"\s*\(\s*(?P<se>(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*\)\s*")  # "(0.100)": an SE in the row below its coefficient
+
+
+def _marked_coefficients(rows, stars: "dict[str, tuple[str, Number]]", mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """Coefficients with their marks of significance and their SEs in parentheses in the row below ("0.321***" over
+    "(0.100)", a row without a name: regression tables as economics and sociology print them, models side by side), when
+    the note defines the marks: each coefficient with its mark's bound for a p and its SE, the p checked against B / SE
+    (checks.coefficient_p)."""
+    out = []
+    keys = sorted(rows)
+    read = _patterns(mark).to_number
+    for r, below in zip(keys, keys[1:]):
+        row, under = rows[r], rows[below]
+        first = min(row)
+        if not row[first][0].text.strip() or _number(row[first][0].text, mark) is not None or any(
+                under[c][0].text.strip() for c in under if c <= first):
+            continue
+        for c in sorted(row):
+            if c == first or c not in under:
+                continue
+            m, se_cell = _BARE.fullmatch(row[c][0].text), _SE_BELOW.fullmatch(under[c][0].text)
+            if m is None or se_cell is None or m.group("op") or not m.group("marks"):
+                continue
+            bound = stars.get(m.group("marks").translate(ONE_STAR))
+            b, se = read(m.group("num"), m.start("num")), read(se_cell.group("se"), se_cell.start("se"))
+            if bound is None or b is None or se is None:
+                continue
+            p = PValue(bound[0], bound[1], b.end, b.end, b.end, "")
+            rep = Reported(None, "", b.start, b.start, b.end, p=p)
+            rep.text = f"B = {b.text}, SE = {se.text}{p_text(p)}"
+            out.append(TableStatistic(row[c][0], rep, None, f"read from the table's row: a coefficient with its {m.group('marks')} ({m.group('marks')}p "
+                                                            f"{bound[0]} {bound[1].text}, as the table defines it) and its SE in the row below", (), (b, se)))
+    return out
 
 
 # an estimate with its interval and p in one cell, "−0.71 (−0.85, −0.57) −26.4% p < 0.0001" (a percentage change may stand
