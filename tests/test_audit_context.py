@@ -2077,3 +2077,27 @@ def test_marked_coefficients_with_their_se_in_the_row_below(tmp_path):
     assert [e.found for e in audit_file(path) if e.codes] == ["B = 0.079, SE = 0.070, p < .01"]
     path.write_text("Table 1\n\n" + _WAGE_TABLE.split("\n\nStandard")[0] + "\n", encoding="utf-8")  # no marks defined: not read
     assert audit_file(path) == []
+
+
+def test_a_correlations_own_interval_agrees_with_its_p():
+    """A correlation's interval and its p must agree about 0, as a t's own interval does: "r(98) = .51, 95% CI [.35,
+    .65], p < .001" (pingouin's corr of its mediation data, X and M: r = .514, CI95 [0.35, 0.65], p = 4.4e-08; and
+    Spearman's ρ = .326, [0.14, 0.49], p = .0009) fits; an interval that holds 0 beside p < .001, or excludes 0 beside
+    p = .40, had not been found (mutations of ours)."""
+    import pingouin as pg
+
+    df = pg.read_dataset("mediation")
+    pearson, spearman = pg.corr(df["X"], df["M"]), pg.corr(df["X"], df["Y"], method="spearman")
+    r, (low, high), p = pearson["r"].iloc[0], pearson["CI95"].iloc[0], pearson["p_val"].iloc[0]
+    typed = f"r({len(df) - 2}) = {r:.2f}, 95% CI [{low:.2f}, {high:.2f}], p < .001".replace("0.", ".")
+    assert typed == "r(98) = .51, 95% CI [.35, .65], p < .001" and p < 0.001
+    rho, (low, high), p = spearman["r"].iloc[0], spearman["CI95"].iloc[0], spearman["p_val"].iloc[0]
+    typed_s = f"rs(98) = {rho:.2f}, 95% CI [{low:.2f}, {high:.2f}], p = {p:.3f}".replace("0.", ".")
+    assert typed_s == "rs(98) = .33, 95% CI [.14, .49], p = .001"
+    for text in (typed, typed_s):
+        (e,) = audit_units([Unit("c", f"The scores correlated, {text}.")])
+        assert e.codes == [], (text, e.codes)
+    (e,) = audit_units([Unit("c", "The scores correlated, " + typed.replace("[.35", "[−.05") + ".")])
+    assert e.codes == ["ci-p-disagree"]
+    (e,) = audit_units([Unit("c", "The scores correlated, r = .51, 95% CI [.35, .65], p = .40.")])
+    assert "ci-p-disagree" in e.codes

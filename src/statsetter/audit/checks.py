@@ -361,7 +361,7 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
     digits allow and a p for its printed range, and the margin leaves alone what different methods give near the null
     (a Fisher or likelihood-ratio p beside a Wald interval, a profile interval beside a Wald p) — a warning, not an
     error. The CIs checked: a ratio's (OR, HR, RR and their adjusted forms; null 1), a t's or z's own (a mean
-    difference or coefficient; null 0) and a β's given with its p and no test (null 0); not d's or g's, whose
+    difference or coefficient; null 0), a correlation's own (null 0) and a β's given with its p and no test (null 0); not d's or g's, whose
     intervals are often approximations that part from the
     t test's p near the null."""
     p = rep.p
@@ -372,6 +372,8 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
         found += [(e.ci, 0.0, e.symbol_text) for e in rep.effects if e.ci is not None and e.name == "beta"]
     if rep.ci is not None and (rep.symbol in ("t", "z") or (rep.symbol is None and rep.estimate is not None)):  # (a table's coefficient)
         found.append((rep.ci, 0.0, "the estimate"))
+    elif rep.ci is not None and rep.symbol in ("r", "rs"):  # a correlation's own interval (Fisher's z, or a bootstrap's): null 0
+        found.append((rep.ci, 0.0, rep.symbol_text))
     out = []
     for ci, null, name in found:
         threshold = 1.0 - ci.level
