@@ -2101,3 +2101,22 @@ def test_a_correlations_own_interval_agrees_with_its_p():
     assert e.codes == ["ci-p-disagree"]
     (e,) = audit_units([Unit("c", "The scores correlated, r = .51, 95% CI [.35, .65], p = .40.")])
     assert "ci-p-disagree" in e.codes
+
+
+def test_cramers_v_is_no_larger_than_chi_square_over_n():
+    """Cramér's V is √(χ²/(N·k)) with k = min(rows, columns) − 1 ≥ 1: no larger than √(χ²/N), which had not been
+    checked (only the lower bound, k ≤ df, was). pingouin's chi2_independence of its heart data, chest pain (4 kinds)
+    by target: χ²(3, N = 303) = 81.69, V = .52 — fits; V = .62 cannot (a mutation of ours). With one df the bound is not
+    applied: Yates's corrected χ² is often printed beside a φ from Pearson's."""
+    import pingouin as pg
+
+    _, _, tests = pg.chi2_independence(pg.read_dataset("chi2_independence"), x="cp", y="target")
+    pearson = tests.iloc[0]
+    typed = f"χ²({pearson['dof']:.0f}, N = 303) = {pearson['chi2']:.2f}, p < .001, V = {pearson['cramer']:.2f}".replace("0.", ".")
+    assert typed == "χ²(3, N = 303) = 81.69, p < .001, V = .52"
+    (e,) = audit_units([Unit("c", f"Chest pain and the diagnosis were related, {typed}.")])
+    assert e.codes == []
+    (e,) = audit_units([Unit("c", f"Chest pain and the diagnosis were related, {typed.replace('.52', '.62')}.")])
+    assert e.codes == ["effect-does-not-fit"] and "too large" in e.message
+    (e,) = audit_units([Unit("c", "Smokers differed, χ²(1, N = 200) = 7.50, p = .006, φ = .21.")])  # (Yates's 7.50 beside Pearson's φ)
+    assert "effect-does-not-fit" not in e.codes

@@ -816,6 +816,12 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
             if e.name in ("V", "phi") and e.number.value >= 0 and e.number.value + e.number.half_unit < least - 1e-12:
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} is too small for χ²({rep.df[0].text}, N = {rep.n.text}) = "
                                    f"{rep.value.text}: √(χ²/(N·df)) is already {least:.3f}.", f"{e.symbol_text} = {e.number.text}"))
+            # and no larger than √(χ²/N), a table with two rows or columns' V, where no continuity correction (df 1: Yates's χ²
+            # beside a φ from Pearson's) can part them
+            most = math.sqrt(high / rep.n.value)
+            if e.name == "V" and rep.df[0].value >= 2 and e.number.value - e.number.half_unit > most + 1e-12:
+                out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} is too large for χ²({rep.df[0].text}, N = {rep.n.text}) = "
+                                   f"{rep.value.text}: √(χ²/N), the largest V any table gives it, is {most:.3f}.", f"{e.symbol_text} = {e.number.text}"))
     return out
 
 
