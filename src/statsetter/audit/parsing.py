@@ -270,12 +270,15 @@ _RATIOS = [
      r"|[aA](?<![\w][aA])bsolute\s+(?:risk\s+)?difference|[rR](?<![\w][rR])isk\s+difference", "MD"),
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
+# where a ratio's (or a difference's) name ends: every name in _RATIOS ends so (the lookbehinds its patterns start from)
+_AFTER_RATIO = r"(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))"
 # after a ratio's name, its abbreviation in parentheses or brackets ("adjusted HR (aHR)=1.29", "odds ratio [OR], 1.52")
-_RATIO_ABBREVIATED = r"(?:(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))\s*+[(\[]a?[A-Z]{1,3}[)\]])"
+_RATIO_ABBREVIATED = rf"(?:{_AFTER_RATIO}\s*+[(\[]a?[A-Z]{{1,3}}[)\]])"
 # after a ratio's name, its number without "=": a comma or colon ("OR, 0.76", AMA's form; "AOR: 8.32"), "of" ("odds ratio
 # of 1.7") or a space ("OR 2.72"), and a number with decimals (not "OR 2 times", nor a count)
-_RATIO_LABELLED = r"(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))\s*+[(\[]\s*+(?P<rlev>\d{2}(?:[.,]\d+)?)\s*+%\s*+C\.?I\.?\s*+[)\]]\s*+(?:[=:,¼]|is\b)?"
-_RATIO_WITHOUT_EQUALS = r"(?:(?<=R)|(?<=R[)\]])|(?<=ratio)|(?<=risk)|(?<=difference))(?:\s*+[:,]|\s++(?:of|was)\b|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)"
+_RATIO_WITHOUT_EQUALS = rf"(?:{_AFTER_RATIO}|(?<=R[)\]]))(?:\s*+[:,]|\s++(?:of|was)\b|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)"
+# after a ratio's name, its interval's level, the interval to come after the number ("OR (95% CI) is 0.84 (0.69, 1.03)")
+_RATIO_LABELLED = rf"{_AFTER_RATIO}\s*+[(\[]\s*+(?P<rlev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+C\.?I\.?\s*+[)\]]\s*+(?:[=:,¼]|is\b)?"
 
 
 class _Patterns:

@@ -117,9 +117,13 @@ _RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate)\s+ratios?\b|\brelative\s+risks?\b")
 
 
+def _ratio_name(name: str, adjusted: bool) -> str:
+    """A ratio's canonical name, "aOR" for an adjusted odds ratio (an IRR keeps its name)."""
+    return f"a{name}" if adjusted and name != "IRR" else name
+
+
 def _stub_ratio(m: "re.Match[str]") -> str:
-    name = m.group("name").upper()
-    return f"a{name}" if (m.group("adj") or "").strip().lower() in ("a", "adjusted") and name != "IRR" else name
+    return _ratio_name(m.group("name").upper(), (m.group("adj") or "").strip().lower() in ("a", "adjusted"))
 
 
 def _ratio_role(head: str) -> str | None:
@@ -129,7 +133,7 @@ def _ratio_role(head: str) -> str | None:
         return None
     name = _RATIO_NAMES.get(" ".join(m.group("name").lower().split()), m.group("name").upper())
     adjusted = m.group("adj") is not None or re.search(r"(?i)\badjusted\b|\bmultivariable\b", head) is not None
-    return f"ratio:{'a' if adjusted and name != 'IRR' else ''}{name}"
+    return f"ratio:{_ratio_name(name, adjusted)}"
 
 
 def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
@@ -415,6 +419,7 @@ _INTERVAL_CELL = {mark: re.compile(rf"\s*[(\[]?\s*{limits}\s*[)\]]?\s*[{_SIGNIFI
 _ESTIMATE_INTERVAL_CELL = {mark: re.compile(rf"\s*(?P<est>{_SIGNED[mark]})%?\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*{limits}\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
                            for mark, limits in _LIMITS.items()}
 _MEAN_DIFFERENCE = re.compile(r"(?i)\s*(?:(?:mean|adjusted|between[- ]group|risk)?\s*diff|MD\b)")
+_MEAN_DIFF_NAMED = re.compile(r"(?i)\s*(?:mean\s+diff|MD\b)")  # a difference its head calls a mean difference
 
 
 def _cell_interval(text: str, mark: str, with_estimate: bool = False) -> "tuple[Number, ...] | None":
@@ -603,7 +608,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if (p is None and interval is None) or roles[k] == "expB":  # (an odds ratio without its interval: a p alone)
                 continue
             diff = roles[k] == "diff" or _MEAN_DIFFERENCE.match(heads.get(k, "")) is not None
-            name = ("mean difference" if re.match(r"(?i)\s*(?:mean\s+diff|MD\b)", heads.get(k, "")) or roles[k] == "diff" else "difference") if diff \
+            name = ("mean difference" if _MEAN_DIFF_NAMED.match(heads.get(k, "")) or roles[k] == "diff" else "difference") if diff \
                 else "β" if roles[k] == "beta" else "B"
             rep = Reported(None, "", estimate.start, estimate.start, estimate.end, p=_p_after(p, estimate.end))
             rep.text = f"{name} = {estimate.text}" + (f", SE = {se.text}" if se is not None else "")
