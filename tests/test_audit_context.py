@@ -2120,3 +2120,85 @@ def test_cramers_v_is_no_larger_than_chi_square_over_n():
     assert e.codes == ["effect-does-not-fit"] and "too large" in e.message
     (e,) = audit_units([Unit("c", "Smokers differed, χ²(1, N = 200) = 7.50, p = .006, φ = .21.")])  # (Yates's 7.50 beside Pearson's φ)
     assert "effect-does-not-fit" not in e.codes
+
+
+# PMC9667227 (Table 3, "Acceptance and Feasibility of the Interventions"): each row's test and its effect size with an interval in
+# a cell, the level in the column's head ("Effect size [95% CI]"), limits set off by a semicolon, Cliff's d beside each U
+_PMC9667227_TABLE3 = """Table 3. Acceptance and Feasibility of the Interventions.
+
+| Variable | Active control intervention | Engagement intervention | Test statistic | Effect size [95% CI] |
+|---|---|---|---|---|
+| Overall rating | 5.3 (2.5) | 8.4 (1.6) | t(18) = 3.63, p = .002 | Cohen’s d = 1.48 [0.55; 2.41] |
+| ‘Are you motivated to engage in therapy?’ | 8.1 (2.5) | 8.7 (1.7) | U = 86.5, p = .65 | Cliff’s d = .11 [-.34; .51] |
+| ‘After using the tool, do you feel better prepared for therapy?’ | 3.6 (3.1) | 7.0 (2.6) | U = 115, p = .013 | Cliff’s d = .60 [.10; .86] |
+| Time working with the intervention (minutes) | 31.7 (6.8) | 49.6 (6.9) | t(23) = 6.34, p < .001 | Cohen’s d = 2.61 [1.51; 3.71] |
+
+Note. Unless otherwise indicated, M (SD) are presented.
+"""
+
+
+def test_an_interval_typed_without_its_level_is_read_for_its_limits(tmp_path):
+    """An interval right after an effect size's, a ratio's or a correlation's number, without its level ("d = 1.48 [0.55;
+    2.41]" under a head that names it, "OR = 10.79 (1.34–86.94)", "r = −.35 [−.42, −.27]") had not been read: an estimate
+    outside it was not found. Its limits are checked now; its level unknown, not against the p; the statistic is left as
+    typed in a revision, which says why. Sources: PMC9667227 Table 3 (published, consistent); statsmodels' logit of its
+    spector data (PSI's odds ratio and profile-free Wald interval, exp of the coefficient's); pingouin's corr of its
+    pairwise_corr data (Neuroticism and Extraversion, n = 500). The mutations are ours."""
+    import pingouin as pg
+    import statsmodels.api as sm
+
+    path = tmp_path / "t3.md"
+    path.write_text(_PMC9667227_TABLE3, encoding="utf-8")
+    entries = audit_file(path)
+    cohen = [e for e in entries if e.found.startswith("Cohen’s d") or e.found.startswith("d = ")]
+    assert [e.found.split("= ")[-1] for e in cohen] == ["1.48 [0.55; 2.41]", "2.61 [1.51; 3.71]"]
+    assert all("ci-excludes-estimate" not in e.codes for e in entries)
+    path.write_text(_PMC9667227_TABLE3.replace("1.48 [0.55; 2.41]", "1.48 [1.55; 2.41]"), encoding="utf-8")
+    assert sum("ci-excludes-estimate" in e.codes for e in audit_file(path)) == 1
+
+    data = sm.datasets.spector.load_pandas().data
+    fit = sm.Logit(data.GRADE, sm.add_constant(data[["GPA", "TUCE", "PSI"]])).fit(disp=0)
+    ratio, (low, high) = math.exp(fit.params["PSI"]), np.exp(fit.conf_int().loc["PSI"])
+    typed = f"OR = {ratio:.2f} ({low:.2f}–{high:.2f}), p = {fit.pvalues['PSI']:.3f}".replace("p = 0.", "p = .")
+    assert typed == "OR = 10.79 (1.34–86.94), p = .025"
+    (e,) = audit_units([Unit("c", f"The new method raised the odds of a better grade ({typed}).")])
+    assert e.codes == [] and e.found == typed
+    (e,) = audit_units([Unit("c", f"The new method raised the odds of a better grade ({typed.replace('(1.34', '(11.34')}).")])
+    assert e.codes == ["ci-excludes-estimate"]
+
+    corr = pg.corr(pg.read_dataset("pairwise_corr")["Neuroticism"], pg.read_dataset("pairwise_corr")["Extraversion"])
+    r, (lo, hi) = corr["r"].iloc[0], corr["CI95"].iloc[0]
+    typed = f"r(498) = {r:.2f} [{lo:.2f}, {hi:.2f}], p < .001".replace("-0.", "−.")
+    assert typed == "r(498) = −.35 [−.42, −.27], p < .001"
+    (e,) = audit_units([Unit("c", f"Neuroticism and extraversion were related, {typed}.")])
+    assert e.codes == [] and e.found == typed
+    (e,) = audit_units([Unit("c", f"Neuroticism and extraversion were related, {typed.replace('[−.42', '[−.32')}.")])
+    assert e.codes == ["ci-excludes-estimate"]
+
+    (e,) = audit_units([Unit("c", "The effect was as large as before, d = 0.62 [12, 13].")])  # a citation's numbers, not limits
+    assert e.found == "d = 0.62"
+    (e,) = audit_units([Unit("c", "The effect was large, t(38) = 2.14, p = .039, d = 0.68 [0.04, 1.31].")], restyle=True)
+    assert e.revision is None and "without its level ([0.04, 1.31])" in e.kept
+
+
+def test_cliffs_d_is_bounded_and_not_cohens():
+    """Cliff's d (Cliff, 1993; his δ is the population's) lies between −1 and 1: written without a leading zero in APA
+    style, like r. It had been read as Cohen's d ("A leading zero before a quantity that can exceed 1" on PMC9667227's
+    "Cliff’s d = .11 [-.34; .51]"). pingouin's mwu of its anova data, light blond against dark brunette pain thresholds:
+    U = 24, p = .016, rank-biserial r = .92 (Cliff's d for two groups: 2·CLES − 1)."""
+    import pingouin as pg
+
+    data = pg.read_dataset("anova")
+    a, b = (data[data["Hair color"] == c]["Pain threshold"] for c in ("Light Blond", "Dark Brunette"))
+    row = pg.mwu(a, b).iloc[0]
+    cliff = 2 * row["CLES"] - 1
+    typed = f"U = {row['U_val']:.0f}, p = {row['p_val']:.3f}, Cliff’s d = {cliff:.2f}".replace("0.", ".")
+    assert typed == "U = 24, p = .016, Cliff’s d = .92"
+    (e,) = audit_units([Unit("c", f"Light blonds bore more pain, {typed}.")])
+    assert e.codes == []
+    (e,) = audit_units([Unit("c", f"Light blonds bore more pain, {typed.replace('.92', '0.92')}.")])
+    assert e.codes == ["leading-zero"]
+    (e,) = audit_units([Unit("c", f"Light blonds bore more pain, {typed.replace('.92', '1.92')}.")])
+    assert "impossible-value" in e.codes
+    (e,) = audit_units([Unit("c", f"Light blonds bore more pain, {typed.replace('.92', '0.92')}.")], "ama11")
+    assert "leading-zero" not in e.codes and "missing-leading-zero" not in e.codes

@@ -103,7 +103,7 @@ FORMER_CODES: dict[str, str] = {
     "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
-_BOUNDED_EFFECTS = {"V": (0, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "omega2_p": (-1, 1), "ICC": (-1, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_BOUNDED_EFFECTS = {"V": (0, 1), "cliff_d": (-1, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "omega2_p": (-1, 1), "ICC": (-1, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
 RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0
@@ -376,6 +376,8 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
         found.append((rep.ci, 0.0, rep.symbol_text))
     out = []
     for ci, null, name in found:
+        if ci.level is None:  # typed without its level ("OR = 2.30 (1.40–3.80)"): no threshold to compare its p with
+            continue
         threshold = 1.0 - ci.level
         if not 0 < threshold < 1 or ci.low.value > ci.high.value:
             continue
@@ -990,7 +992,7 @@ def interval_fits_se(ci: "TypedInterval", se: Number) -> list[Finding]:
     from statistics import NormalDist  # (only here: a coefficient's SE beside its interval)
 
     se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
-    if se_low <= 0 or not 0.5 <= ci.level < 1:
+    if se_low <= 0 or ci.level is None or not 0.5 <= ci.level < 1:
         return []
     widest = ((ci.high.value + ci.high.half_unit) - (ci.low.value - ci.low.half_unit)) / 2
     narrowest = max((ci.high.value - ci.high.half_unit) - (ci.low.value + ci.low.half_unit), 0.0) / 2
@@ -1125,6 +1127,8 @@ def _recomputed_p(rep: Reported, alpha: float) -> float | None:
 def _interval(ci, precision: dict[str, int], i: int, style: Style | None, quantity: str) -> Interval | None:  # type: ignore[no-untyped-def]
     if ci is None or ci.low.value > ci.high.value:
         return None
+    if ci.level is None:  # typed without its level: no record can say it (the statistic is left as typed)
+        raise ValueError("an interval without its level")
     precision[f"effects[{i}].ci.low"] = ci.low.decimals
     precision[f"effects[{i}].ci.high"] = ci.high.decimals
     low, high = ci.low.value, ci.high.value

@@ -69,7 +69,7 @@ class PValue:
 
 @dataclass(frozen=True, slots=True)
 class Interval:
-    level: float
+    level: float | None  # None: typed without its level ("d = 0.62 [0.21, 1.03]"), read for its limits only
     low: Number
     high: Number
     start: int
@@ -235,6 +235,8 @@ _EFFECT_NAMES = [
     (r"[Δ∆]\s?R\s?(?:[²2]|\^2)", "delta_R2"),
     (r"R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared|[- ][Ss]quare(?=\s?[Cc]hange))(?:\s?[Cc]hange)?", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
+    # Cliff's dominance statistic (Cliff, 1993: d the sample's, δ the population's), between −1 and 1: not Cohen's d
+    (r"C(?<![\w]C)liff(?:['’]s)?\s+(?:d|δ|delta)(?![\w])", "cliff_d"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
     (r"d(?<![\w]d)", "d"),
@@ -270,6 +272,7 @@ _RATIOS = [
      r"|[aA](?<![\w][aA])bsolute\s+(?:risk\s+)?difference|[rR](?<![\w][rR])isk\s+difference", "MD"),
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
+_CORRELATIONS = frozenset({"r", "rs", "tau_b"})
 # where a ratio's (or a difference's) name ends: every name in _RATIOS ends so (the lookbehinds its patterns start from)
 _AFTER_RATIO = r"(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))"
 # after a ratio's name, its abbreviation in parentheses or brackets ("adjusted HR (aHR)=1.29", "odds ratio [OR], 1.52")
@@ -308,6 +311,9 @@ class _Patterns:
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,¼]?\s*+"
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
+        # an interval typed without its level right after an effect size's or a correlation's number ("d = 0.62 [0.21,
+        # 1.03]", "OR = 2.30 (1.40–3.80)", "Cohen’s d = 1.48 [0.55; 2.41]" under a head that gives the level): its limits
+        self.bare_ci = re.compile(rf"\s?(?:(?P<sq>\[)|\()\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+(?(sq)\]|\))")
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
         # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
@@ -987,6 +993,10 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     clause_df = False  # the df were read from the clause ("df = 2"), not the head
     again = None  # where an effect size of a name already read comes again (a statistic without a head: a new one)
     differences = False  # a difference read (kept only with its interval)
+    if rep.symbol in _CORRELATIONS and rep.value is not None:  # a correlation's own interval without its level ("r = .30 [.12, .46]")
+        rep.ci = _bare_interval(pat, text, rep.value.end, end)
+        if rep.ci is not None:
+            covered = last_end = rep.ci.end
     for at, kind, m in events:
         if at < covered:  # inside a match already read
             continue
@@ -1042,8 +1052,13 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                 spans.append((m.start(), close))
                 continue
             differences = differences or name == "MD"
-            effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"),
-                                 _labelled_interval(pat, m) if m.re is pat.ratio and m.group("rlev") is not None else None)
+            ci = _labelled_interval(pat, m) if m.re is pat.ratio and m.group("rlev") is not None else None
+            if ci is None and name not in _DESCRIPTIVE:
+                ci = _bare_interval(pat, text, number.end, end)
+                if ci is not None:
+                    covered = max(covered, ci.end)
+                    last_end = max(last_end, ci.end)
+            effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), ci)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
         elif kind == "df" and (not rep.df or (clause_df and rep.symbol == "F" and len(rep.df) == 1)):
             first, other = ("num", "num2") if m.group("num") is not None else ("pre", "pre2")
@@ -1115,6 +1130,19 @@ def _labelled_interval(pat: _Patterns, m: re.Match[str]) -> Interval | None:
     if level is None or low is None or high is None or not 0 < level.value < 100:
         return None
     return _new_interval(level.value / 100, low, high, m.start("rlev"), m.end())
+
+
+def _bare_interval(pat: _Patterns, text: str, at: int, end: int) -> Interval | None:
+    """The interval typed without its level right after a number that ends at ``at`` ("d = 0.62 [0.21, 1.03]", "OR =
+    2.30 (1.40–3.80)"), its level None; None where none is, or where neither limit has decimals ("d = 0.62 [12, 13]":
+    a citation's numbers)."""
+    m = pat.bare_ci.match(text, at, end)
+    if m is None:
+        return None
+    low, high = pat.to_number(m.group("a"), m.start("a")), pat.to_number(m.group("b"), m.start("b"))
+    if low is None or high is None or not (low.decimals or high.decimals):
+        return None
+    return _new_interval(None, low, high, m.start() + (text[m.start()].isspace()), m.end())
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
