@@ -2202,3 +2202,40 @@ def test_cliffs_d_is_bounded_and_not_cohens():
     assert "impossible-value" in e.codes
     (e,) = audit_units([Unit("c", f"Light blonds bore more pain, {typed.replace('.92', '0.92')}.")], "ama11")
     assert "leading-zero" not in e.codes and "missing-leading-zero" not in e.codes
+
+
+# PMC7901853 (Pain Medicine 2021;22(2):329–337, doi:10.1093/pm/pnz269), Table 2: the same patients at baseline and follow-up,
+# each occasion's N in its head, a paired t test and an ANCOVA's t in cells of their own, without df
+_PMC7901853_TABLE2 = """Table 2. Change in treatment outcome variables from baseline to follow-up
+
+| Outcome | Min–Max | Baseline (N = 41) | Follow-up (N = 36) | Paired t Test | Cohen’s d | ANCOVA t Test | Cohen’s d |
+|---|---|---|---|---|---|---|---|
+| Pain intensity (past wk) | 0–10 | 6.41 (1.24) | 5.39 (1.70) | t = 3.64, P < 0.001 | 0.61 | t = 3.85, P < 0.001 | 0.64 |
+| Pain intensity (past 3 mo) | 0–10 | 6.40 (1.11) | 5.71 (1.60) | t = 2.82, P = 0.008 | 0.47 | t = 2.82, P = 0.008 | 0.47 |
+| Pain interference (PROMIS) | 8–40 | 27.37 (6.02) | 23.81 (8.57) | t = 2.41, P = 0.022 | 0.40 | t = 2.72, P = 0.010 | 0.45 |
+| PCL-5 | 0–80 | 43.37 (13.64) | 35.72 (16.51) | t = 2.46, P = 0.019 | 0.41 | t = 3.19, P = 0.003 | 0.53 |
+| PHQ-9 | 0–27 | 13.02 (5.67) | 9.67 (5.42) | t = 3.96, P < 0.001 | 0.66 | t = 4.06, P < 0.001 | 0.68 |
+| Suicidal ideation | 0–3 | 0.27 (0.55) | 0.11 (0.32) | t = 2.22, P = 0.033 | 0.37 | t = 2.22, P = 0.033 | 0.37 |
+| Anger (PROMIS) | 5–25 | 16.63 (4.13) | 14.94 (4.73) | t = 2.54, P = 0.016 | 0.42 | t = 2.33, P = 0.026 | 0.39 |
+| Sleep (PROMIS) | 8–40 | 30.10 (8.51) | 26.33 (8.48) | t = 2.71, P = 0.010 | 0.45 | t = 2.82, P = 0.008 | 0.47 |
+"""
+
+
+def test_a_paired_or_a_models_t_in_a_table_takes_no_two_group_df(tmp_path):
+    """A header's N for each occasion ("Baseline (N = 41) | Follow-up (N = 36)") had been read as two groups' sizes, and
+    every t without df checked under df = 41 + 36 − 2 = 75: twelve errors on PMC7901853's Table 2, a correct table (its
+    paired t's fit n − 1 for the completers, 35; its note's FDR sentence, left out here, had hidden them as notes). A t
+    under a head naming a paired test is read under each occasion's n − 1; one under a head naming a model (ANCOVA,
+    regression, adjusted) under no group size's df — its residual df depend on the covariates. A mutated p is still found."""
+    path = tmp_path / "t2.md"
+    path.write_text(_PMC7901853_TABLE2, encoding="utf-8")
+    entries = audit_file(path, "ama11")
+    assert len(entries) == 16 and all(set(e.codes) <= {"leading-zero", "decimals"} for e in entries)  # (AMA's P: 2 decimals from .01)
+    paired = [e for e in entries if "paired t, as its column's head says" in e.checked]
+    assert len(paired) == 8 and all(e.found.startswith("t = ") for e in paired)
+    assert sum("over every df it may have" in e.checked for e in entries) == 8  # the ANCOVA's
+    path.write_text(_PMC7901853_TABLE2.replace("t = 2.41, P = 0.022", "t = 2.41, P = 0.042"), encoding="utf-8")
+    (bad,) = [e for e in audit_file(path, "ama11") if "p-does-not-follow" in e.codes]
+    assert bad.found == "t = 2.41, P = 0.042"
+    (finding,) = [f for f in bad.findings if f.code == "p-does-not-follow"]
+    assert "no reading of the df fits: df = 41 − 1 (a paired t" in finding.evidence and "df = 36 − 1" in finding.evidence

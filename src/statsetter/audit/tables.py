@@ -262,6 +262,28 @@ class Reading:
     guessed: bool = False  # from an N of the paragraph or the text before, not given with the statistic: the test may be a subgroup's
 
 
+# a t's design as its column's head (or the caption or note) names it: a paired test's df are a group's n − 1 — the
+# header's sizes are its occasions' ("Baseline (N = 41) | Follow-up (N = 36) | Paired t Test"), not two groups' —; a
+# model's t (ANCOVA, regression, adjusted for covariates) has its residual df, which no group size gives
+_PAIRED_SAID = re.compile(r"(?i)\bpaired|(?<!in)dependent[- ]samples?|\brepeated[- ]measures?|\bwithin[- ]subjects?|\brelated[- ]samples?")
+_MODEL_SAID = re.compile(r"(?i)\bANCOVA|\bregression|\bmixed[- ]model|\blinear[- ]model|\bGLM\b|\bmultilevel|\bcovariates?\b|\badjusted")
+
+
+def design_readings(symbol: str, head: str, said: str, groups: Sequence[int], total: int | None, where: str) -> "tuple[Reading, ...] | None":
+    """The df a t without df may have where its column's ``head`` names its design (or, for a paired test, the caption
+    or note, ``said``): a model's t none; a paired t a group's n − 1, each size the table gives (or N − 1). None where
+    neither names one."""
+    if symbol != "t":
+        return None
+    if _MODEL_SAID.search(head):
+        return ()
+    if not _PAIRED_SAID.search(head) and (_PAIRED_SAID.search(said) is None or _MODEL_SAID.search(said) is not None):
+        return None
+    named = "its column's head" if _PAIRED_SAID.search(head) else "the caption or note"
+    sizes = list(dict.fromkeys(n for n in groups if n >= 2)) or ([total] if total is not None and total >= 2 else [])
+    return tuple(Reading((n - 1.0,), f"df = {n} − 1 (a paired t, as {named} says; n {where})") for n in sizes)
+
+
 def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str, welch: bool = False,
                 total_guessed: bool = False, groups_guessed: bool = False, total_where: str | None = None) -> list[Reading]:
     """The df a t or r without df may have, from group sizes and a total N;
@@ -684,6 +706,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     levels_said = ""  # the header's text and the caption's and note's, for an interval's level
     ratios_said = _RATIOS_SAID.search(f"{caption} {said}") is not None  # a table of odds, hazard or risk ratios
     note_df = _said_df(f"{caption} {said}")
+    words_above: dict[int, str] = {}  # each column's words in the rows without numbers above (its head, a spanner's)
+    in_body = False
     for r in sorted(rows):
         row = rows[r]
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
@@ -694,6 +718,12 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         heads_in_row = any(rep.symbol is not None for _, reps in row.values() for rep in reps)
         if not heads_in_row and not any(v is not None for v in numbers.values()):
             wordy += " " + " ".join(u.text for u, _ in row.values())
+            if in_body:  # a header's rows after the body's: the heads of another block
+                words_above, in_body = {}, False
+            for c, (u, _) in row.items():
+                words_above[c] = f"{words_above.get(c, '')} {u.text}"
+        else:
+            in_body = True
         if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
             heads = {**heads, **{c: row[c][0].text for c in stat_cells}} if header_above else {c: row[c][0].text for c in stat_cells}
             levels_said = f"{wordy} {said}"
@@ -842,8 +872,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 readings = note_df
             else:
                 above = "in the table" if labelled else "in the text above the table"
-                readings = tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,
-                                             total_guessed=not labelled, groups_guessed=groups_guessed, total_where=above))
+                design = design_readings(role, words_above.get(c, ""), f"{caption} {said}", groups, total, above if groups_guessed else "in the table")
+                readings = design if design is not None else tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,
+                                                                              total_guessed=not labelled, groups_guessed=groups_guessed, total_where=above))
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
         # a statistic typed whole in a cell, its p further along the row
         ordered = sorted(row)
@@ -866,7 +897,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                             merged = replace(rep, p=p, p_range=None, text=f"{rep.text}, {other_unit.text.strip()}")
                             how = "the p in a later cell of the row"
                             break
-                readings = () if merged.df else tuple(df_readings(rep.symbol, groups, total, "in the table", welch))
+                design = None if merged.df else design_readings(rep.symbol, words_above.get(c, ""), f"{caption} {said}", groups, total, "in the table")
+                readings = () if merged.df else design if design is not None else tuple(df_readings(rep.symbol, groups, total, "in the table", welch))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
     estimates = _estimate_cells(rows, f"{caption} {said}", mark)
     used |= {id(rep) for t in estimates for rep in rows[t.unit.cell[1]][t.unit.cell[2]][1]}  # type: ignore[index]  # (the cell's lone p)
