@@ -2239,3 +2239,9 @@ def test_a_paired_or_a_models_t_in_a_table_takes_no_two_group_df(tmp_path):
     assert bad.found == "t = 2.41, P = 0.042"
     (finding,) = [f for f in bad.findings if f.code == "p-does-not-follow"]
     assert "no reading of the df fits: df = 41 − 1 (a paired t" in finding.evidence and "df = 36 − 1" in finding.evidence
+    # the same in a sentence (ours, with the table's numbers): the occasions' sizes beside a t the sentence calls paired
+    typed = "Pain interference fell from baseline (n = 41) to follow-up (n = 36), paired t = 2.41, p = .022."
+    (e,) = [e for e in audit_units([Unit("c", typed)]) if e.found.startswith("t =")]
+    assert e.codes == [] and "a paired t, as its sentence says" in e.checked
+    (e,) = [e for e in audit_units([Unit("c", typed.replace(".022", ".042"))]) if e.found.startswith("t =")]
+    assert e.codes == ["df-unstated"]  # (sizes not typed with the t itself: no df of theirs fits, others would)

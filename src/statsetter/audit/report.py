@@ -25,7 +25,7 @@ from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after
-from .tables import ONE_COEFFICIENT, Reading, df_readings, star_bounds, table_statistics
+from .tables import ONE_COEFFICIENT, Reading, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
 
@@ -265,7 +265,10 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                     sizes = group_sizes(unit.text, rep, mark)
                     total = int(rep.n.value) if rep.n is not None and rep.n.value >= 3 else totals[0] if totals else last_total
                     where = "beside it" if rep.n is not None else "in the paragraph" if totals else "earlier in the text"
-                    readings = tuple(df_readings(rep.symbol, list(sizes or ()), total, where, total_guessed=rep.n is None))
+                    # (a t said to be paired, or a model's — "adjusted for", ANCOVA —: not two groups' df)
+                    design = design_readings("t", unit.text[max(previous_value, rep.start - 160) : rep.end + 60], "", list(sizes or ()), total, where,
+                                             rep.n is None, "its sentence") if rep.symbol == "t" else None
+                    readings = design if design is not None else tuple(df_readings(rep.symbol, list(sizes or ()), total, where, total_guessed=rep.n is None))
                 elif rep.symbol == "chi2" and not rep.df and is_wald(unit.text, rep) and coefficient_before(unit.text, rep, previous_end, mark):
                     readings = (ONE_COEFFICIENT,)
                 yield _new_item(unit, rep, None if rep.plural else rep, readings, "", unit.text, None)  # (a plural head's: not restyled)

@@ -269,19 +269,20 @@ _PAIRED_SAID = re.compile(r"(?i)\bpaired|(?<!in)dependent[- ]samples?|\brepeated
 _MODEL_SAID = re.compile(r"(?i)\bANCOVA|\bregression|\bmixed[- ]model|\blinear[- ]model|\bGLM\b|\bmultilevel|\bcovariates?\b|\badjusted")
 
 
-def design_readings(symbol: str, head: str, said: str, groups: Sequence[int], total: int | None, where: str) -> "tuple[Reading, ...] | None":
-    """The df a t without df may have where its column's ``head`` names its design (or, for a paired test, the caption
-    or note, ``said``): a model's t none; a paired t a group's n − 1, each size the table gives (or N − 1). None where
-    neither names one."""
+def design_readings(symbol: str, head: str, said: str, groups: Sequence[int], total: int | None, where: str,
+                    guessed: bool = False, head_is: str = "its column's head") -> "tuple[Reading, ...] | None":
+    """The df a t without df may have where its column's ``head`` (a sentence's: the words around it) names its design
+    (or, for a paired test, the caption or note, ``said``): a model's t none; a paired t a group's n − 1, each size
+    given (or N − 1). None where neither names one. ``guessed``: the sizes are not given with the statistic."""
     if symbol != "t":
         return None
     if _MODEL_SAID.search(head):
         return ()
     if not _PAIRED_SAID.search(head) and (_PAIRED_SAID.search(said) is None or _MODEL_SAID.search(said) is not None):
         return None
-    named = "its column's head" if _PAIRED_SAID.search(head) else "the caption or note"
+    named = head_is if _PAIRED_SAID.search(head) else "the caption or note"
     sizes = list(dict.fromkeys(n for n in groups if n >= 2)) or ([total] if total is not None and total >= 2 else [])
-    return tuple(Reading((n - 1.0,), f"df = {n} − 1 (a paired t, as {named} says; n {where})") for n in sizes)
+    return tuple(Reading((n - 1.0,), f"df = {n} − 1 (a paired t, as {named} says; n {where})", guessed=guessed) for n in sizes)
 
 
 def df_readings(symbol: str, groups: Sequence[int], total: int | None, where: str, welch: bool = False,
@@ -872,7 +873,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 readings = note_df
             else:
                 above = "in the table" if labelled else "in the text above the table"
-                design = design_readings(role, words_above.get(c, ""), f"{caption} {said}", groups, total, above if groups_guessed else "in the table")
+                design = design_readings(role, words_above.get(c, ""), f"{caption} {said}", groups, total, above if groups_guessed else "in the table",
+                                         groups_guessed)
                 readings = design if design is not None else tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,
                                                                               total_guessed=not labelled, groups_guessed=groups_guessed, total_where=above))
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
