@@ -2152,7 +2152,7 @@ def test_an_interval_typed_without_its_level_is_read_for_its_limits(tmp_path):
     entries = audit_file(path)
     cohen = [e for e in entries if e.found.startswith("Cohen’s d") or e.found.startswith("d = ")]
     assert [e.found.split("= ")[-1] for e in cohen] == ["1.48 [0.55; 2.41]", "2.61 [1.51; 3.71]"]
-    assert all("ci-excludes-estimate" not in e.codes for e in entries)
+    assert all("ci-excludes-estimate" not in e.codes and "ci-level" not in e.codes for e in entries)  # (the head names the level)
     path.write_text(_PMC9667227_TABLE3.replace("1.48 [0.55; 2.41]", "1.48 [1.55; 2.41]"), encoding="utf-8")
     assert sum("ci-excludes-estimate" in e.codes for e in audit_file(path)) == 1
 
@@ -2162,17 +2162,19 @@ def test_an_interval_typed_without_its_level_is_read_for_its_limits(tmp_path):
     typed = f"OR = {ratio:.2f} ({low:.2f}–{high:.2f}), p = {fit.pvalues['PSI']:.3f}".replace("p = 0.", "p = .")
     assert typed == "OR = 10.79 (1.34–86.94), p = .025"
     (e,) = audit_units([Unit("c", f"The new method raised the odds of a better grade ({typed}).")])
-    assert e.codes == [] and e.found == typed
+    assert e.codes == ["ci-level"] and e.found == typed  # (a style finding in prose: the paragraph names no level before it)
+    (e,) = audit_units([Unit("c", f"Odds ratios are given with their 95% CIs. The new method raised the odds of a better grade ({typed}).")])
+    assert e.codes == []
     (e,) = audit_units([Unit("c", f"The new method raised the odds of a better grade ({typed.replace('(1.34', '(11.34')}).")])
-    assert e.codes == ["ci-excludes-estimate"]
+    assert e.codes == ["ci-excludes-estimate", "ci-level"]
 
     corr = pg.corr(pg.read_dataset("pairwise_corr")["Neuroticism"], pg.read_dataset("pairwise_corr")["Extraversion"])
     r, (lo, hi) = corr["r"].iloc[0], corr["CI95"].iloc[0]
     typed = f"r(498) = {r:.2f} [{lo:.2f}, {hi:.2f}], p < .001".replace("-0.", "−.")
     assert typed == "r(498) = −.35 [−.42, −.27], p < .001"
-    (e,) = audit_units([Unit("c", f"Neuroticism and extraversion were related, {typed}.")])
+    (e,) = audit_units([Unit("c", f"Neuroticism and extraversion were related (95% CI in brackets), {typed}.")])
     assert e.codes == [] and e.found == typed
-    (e,) = audit_units([Unit("c", f"Neuroticism and extraversion were related, {typed.replace('[−.42', '[−.32')}.")])
+    (e,) = audit_units([Unit("c", f"Neuroticism and extraversion were related (95% CI in brackets), {typed.replace('[−.42', '[−.32')}.")])
     assert e.codes == ["ci-excludes-estimate"]
 
     (e,) = audit_units([Unit("c", "The effect was as large as before, d = 0.62 [12, 13].")])  # a citation's numbers, not limits

@@ -40,6 +40,8 @@ CODES: dict[str, tuple[str, str]] = {
     "negative-sd": ("a negative standard deviation", "Descriptives (APA 7 §6.44)"),
     "ci-reversed": ("a CI whose lower limit is above its upper", "Confidence intervals (APA 7 §6.44)"),
     "ci-excludes-estimate": ("a CI that does not contain its estimate", "Confidence intervals (APA 7 §6.44)"),
+    "ci-level": ("an interval typed without its level where the paragraph names none before it (d = 0.68 [0.04, 1.31])",
+                 "Confidence intervals: the level stated with every interval, 95% CI [a, b] (APA Style Blog, 2010, on the Manual's 6th ed. p. 117; practice)"),
     "df-not-integer": ("non-integer df where the test needs whole numbers (χ², r, H)", "Reporting by test (practice; Welch t and F keep decimals)"),
     "leading-zero": ("a leading zero on a quantity that cannot exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
     "decimal-mark": ("decimals typed with another mark than the style's (a comma for a point, or the reverse)", "Numbers: decimal mark (the style's numbers section; APA 7 uses a point)"),
@@ -92,7 +94,7 @@ SEVERITY: dict[str, str] = {
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
     "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
-    "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
+    "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
 }
 
@@ -549,6 +551,19 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
     if italic is not None:
         out += _italics(rep, text, italic, _roman(style))
     return out
+
+
+_LEVEL_NAMED = re.compile(r"\d{2}(?:[.,]\d+)?\s*%\s*(?:CI|C\.I\.|[Cc]onfidence|[Cc]redible)")
+
+
+def unlevelled(rep: Reported, text: str) -> list[Finding]:
+    """An interval typed without its level ("d = 0.68 [0.04, 1.31]") where the paragraph, ``text``, names no level
+    before it: the reader cannot tell a 95% interval from a 90% one (in a table the head or note names it)."""
+    bare = [ci for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None and ci.level is None]
+    if not bare or _LEVEL_NAMED.search(text, 0, bare[0].start) is not None:
+        return []
+    return [Finding("ci-level", "State the interval's level, as in 95% CI [a, b]: the paragraph names none before it.",
+                    ", ".join(text[ci.start : ci.end] for ci in bare))]
 
 
 def _df_spacing(rep: Reported, text: str) -> str:

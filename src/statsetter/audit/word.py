@@ -249,8 +249,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
             return None, "a difference given in words with its interval has no symbol in the style; it is checked and left as typed"
         bare = next((ci for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None and ci.level is None), None)
         if bare is not None:
-            return None, (f"its interval is typed without its level ({rep.text[bare.start - rep.start : bare.end - rep.start]}), which the "
-                          "style writes with it (“95% CI”): add the level, and the statistic can be restyled")
+            return None, (f"its interval is typed without its level ({rep.text[bare.start - rep.start : bare.end - rep.start]}); "
+                          "with the level added it can be")
         return None, "the statistic cannot be restyled"
     plain = new.plain()
     old = rep.text
