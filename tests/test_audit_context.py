@@ -2247,3 +2247,51 @@ def test_a_paired_or_a_models_t_in_a_table_takes_no_two_group_df(tmp_path):
     assert e.codes == [] and "a paired t, as its sentence says" in e.checked
     (e,) = [e for e in audit_units([Unit("c", typed.replace(".022", ".042"))]) if e.found.startswith("t =")]
     assert e.codes == ["df-unstated"]  # (sizes not typed with the t itself: no df of theirs fits, others would)
+
+
+def _pipe_table(caption: str, heads: list[str], rows: list[list[str]]) -> str:
+    lines = [caption, "", "| " + " | ".join(heads) + " |", "|" + "---|" * len(heads)]
+    return "\n".join(lines + ["| " + " | ".join(r) + " |" for r in rows]) + "\n"
+
+
+def test_an_anova_tables_mean_squares_and_f_are_held_to_their_definitions(tmp_path):
+    """An ANOVA table's SS, df, MS and F columns had been read for the F and its df only: a mean square that is not SS /
+    df, or an F that is not MS / MS error, was not found. pingouin's two-way ANOVA of its anova2 data (Yield by Blend and
+    Crop, SS | df | MS | F | p, a Residual row) and its repeated-measures ANOVA of its rm_anova data laid out as
+    textbooks print it (Between treatments | Within | Between subjects | Error: the Within row is split below, so the
+    error term is the Error row, df 92 — it had been read as Within's) fit; a transposed MS (an error) and an F that is
+    not MS / MS error (a warning) are found (mutations ours)."""
+    import pingouin as pg
+
+    a = pg.anova(data=pg.read_dataset("anova2"), dv="Yield", between=["Blend", "Crop"], detailed=True)
+    rows = [[r.Source, f"{r.SS:.2f}", f"{r.DF:.0f}", f"{r.MS:.2f}", "" if np.isnan(r.F) else f"{r.F:.2f}",
+             "" if np.isnan(r.p_unc) else f"{r.p_unc:.3f}"] for r in a.itertuples()]
+    assert rows[1] == ["Crop", "2736.58", "2", "1368.29", "2.53", "0.108"] and rows[3][0] == "Residual"
+    table = _pipe_table("Table 1. Two-way ANOVA of yield", ["Source", "SS", "df", "MS", "F", "p"], rows)
+    path = tmp_path / "a.md"
+    path.write_text(table, encoding="utf-8")
+    assert [e.codes for e in audit_file(path)] == [[], [], []]
+    path.write_text(table.replace("1368.29", "1386.29"), encoding="utf-8")
+    (crop,) = [e for e in audit_file(path) if e.codes]
+    assert crop.codes == ["ms-does-not-fit"] and "2736.58 / 2" in crop.message
+    path.write_text(table.replace("| 2.53 |", "| 3.53 |"), encoding="utf-8")
+    (crop,) = [e for e in audit_file(path) if "f-does-not-fit" in e.codes]
+    assert crop.found.startswith("F(2, 18) = 3.53")
+
+    data = pg.read_dataset("rm_anova")
+    means = data.groupby(["Subject", "Disgustingness"])["DesireToKill"].mean().unstack()
+    grand, n, k = means.to_numpy().mean(), len(means), means.shape[1]
+    treatments = n * ((means.mean() - grand) ** 2).sum()
+    subjects = k * ((means.mean(axis=1) - grand) ** 2).sum()
+    within = ((means - grand) ** 2).to_numpy().sum() - treatments
+    error = within - subjects
+    reference = pg.rm_anova(data=data, dv="DesireToKill", within="Disgustingness", subject="Subject", detailed=True)
+    assert math.isclose(error, reference.SS[1], rel_tol=1e-9) and reference.DF[1] == n - 1 == 92
+    f_value = (treatments / 1) / (error / (n - 1))
+    rows = [["Between treatments", f"{treatments:.2f}", "1", f"{treatments:.2f}", f"{f_value:.2f}"],
+            ["Within", f"{within:.2f}", f"{n * k - k}", "", ""],
+            ["Between subjects", f"{subjects:.2f}", f"{n - 1}", "", ""],
+            ["Error", f"{error:.2f}", f"{n - 1}", f"{error / (n - 1):.2f}", ""]]
+    path.write_text(_pipe_table("Table 2. Repeated-measures ANOVA", ["Source", "SS", "df", "MS", "F"], rows), encoding="utf-8")
+    (e,) = audit_file(path)
+    assert e.found.startswith("F(1, 92) = 12.04") and e.codes == []

@@ -73,6 +73,14 @@ CODES: dict[str, tuple[str, str]] = {
         "the p and the CI disagree about the null value (one says significant, the other not)",
         "Confidence intervals and p from the same test agree (Altman & Bland, 2011, BMJ, How to obtain the P value from a confidence interval)",
     ),
+    "ms-does-not-fit": (
+        "an ANOVA table's mean square that is not its sum of squares over its df (the effect's row or its error row)",
+        "Analysis of variance: MS = SS / df (definition), with the printed precision of each number",
+    ),
+    "f-does-not-fit": (
+        "an ANOVA table's F that is not its row's mean square over its error row's",
+        "Analysis of variance: F = MS effect / MS error (definition); a random factor's F over another row's MS is said in the note (practice)",
+    ),
     "df-unstated": (
         "a t or r without df whose p fits none of the df the text's N or group sizes give, but fits other df",
         "Reporting by test: t and r with their df (APA 7 §6.43); consistency as in Nuijten et al. (2016)",
@@ -91,7 +99,7 @@ SEVERITIES = ("error", "warning", "style")
 SEVERITY: dict[str, str] = {
     "p-does-not-follow": "error", "verdict-changes": "error", "impossible-r": "error", "impossible-p": "error",
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
-    "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error",
+    "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
     "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
@@ -1018,6 +1026,46 @@ def interval_fits_se(ci: "TypedInterval", se: Number) -> list[Finding]:
     return [Finding("coefficient-does-not-fit", f"The {level} CI [{ci.low.text}, {ci.high.text}] reaches {narrowest / se_high:.2f} to {widest / se_low:.2f} "
                                                 f"SEs each side of its estimate (SE = {se.text}); an interval from that SE reaches {fewest:.2f} (a z) to "
                                                 f"{most:.2f} (a t on 1 df): the SE or the interval is another's.", f"SE = {se.text}, {level} CI [{ci.low.text}, {ci.high.text}]")]
+
+
+def _mean_square(ss: Number | None, df: Number | None, ms: Number | None, row: str, out: list[Finding] | None) -> list[tuple[float, float]]:
+    """The ranges a row's MS may have: its printed MS's and SS / df's (both where the table gives both; an MS that is not
+    SS / df is a finding, into ``out`` unless None — either may be the slip, so the F is held to both). Each number stands
+    for what its printed digits allow; a whole df is exact."""
+    out_ranges = []
+    if ms is not None:
+        out_ranges.append((ms.value - ms.half_unit, ms.value + ms.half_unit))
+    d = df.half_unit if df is not None and df.decimals else 0.0
+    if ss is not None and df is not None and df.value - d > 0:
+        from_ss = ((ss.value - ss.half_unit) / (df.value + d), (ss.value + ss.half_unit) / (df.value - d))
+        if ms is not None and out is not None and not _overlap(from_ss, out_ranges[0]):
+            out.append(Finding("ms-does-not-fit", f"A mean square is its sum of squares over its df: {row} {ss.text} / {df.text} gives "
+                                                  f"{from_ss[0]:.6g} to {from_ss[1]:.6g}, not {ms.text}.", f"{row}: SS = {ss.text}, df = {df.text}, MS = {ms.text}"))
+        out_ranges.append(from_ss)
+    return out_ranges
+
+
+def squares_fit(rep: Reported, squares: "tuple[Number | None, Number | None, Number | None, Number | None, Number | None, Number | None, bool]") -> list[Finding]:
+    """An ANOVA table's row against the definitions of its columns: MS = SS / df for the effect's row and (the first time
+    it serves an effect) its error row, and F = MS / MS error — each number standing for what its printed digits
+    allow. An MS that is not SS / df is an error; an F that is not MS / MS error a warning: a random factor's F may
+    take another row's MS (the note should say so)."""
+    ss, df, ms, ss_e, df_e, ms_e, own_error = squares
+    out: list[Finding] = []
+    effects = _mean_square(ss, df, ms, "the row's", out)
+    errors = [e for e in _mean_square(ss_e, df_e, ms_e, "the error row's", out if own_error else None) if e[0] > 0]
+    f = rep.value
+    if not effects or not errors or f is None or rep.op != "=":
+        return out
+    printed = (f.value - f.half_unit, f.value + f.half_unit)
+    ratios = [(a[0] / b[1], a[1] / b[0]) for a in effects for b in errors]
+    if not any(_overlap(r, printed) for r in ratios):
+        low, high = min(r[0] for r in ratios), max(r[1] for r in ratios)
+        out.append(Finding("f-does-not-fit", f"F is its row's mean square over its error row's: those the table gives make it {low:.4g} to {high:.4g}, "
+                                             f"not {f.text}. Where a random factor's F takes another row's mean square, say so in the note.",
+                           f"F = {f.text}; MS from {min(e[0] for e in effects):.6g} to {max(e[1] for e in effects):.6g}, "
+                           f"error MS from {min(e[0] for e in errors):.6g} to {max(e[1] for e in errors):.6g}"))
+    return out
 
 
 def _small(p: float) -> str:

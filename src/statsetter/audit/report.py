@@ -23,9 +23,9 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after
-from .tables import ONE_COEFFICIENT, Reading, design_readings, df_readings, star_bounds, table_statistics
+from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
 
@@ -177,6 +177,7 @@ class _Item:
     how: str = ""  # where its parts were found, when not in one piece of text
     context: str = ""  # the text around it that may name a procedure (paragraph; a table's caption, cells and note)
     coefficient: "tuple[Number, Number] | None" = None  # a table row's B and SE beside its Wald
+    squares: "Squares | None" = None  # an ANOVA row's SS, df and MS and its error row's (tables.Squares)
 
 
 _DIGIT = re.compile(r"\d")
@@ -297,7 +298,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         found, used = table_statistics(cells, caption, mark, star_bounds(said, mark), said, welch=_WELCH.search(said) is not None,  # (Welch's t's: a df range)
                                        labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
-        items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient) for t in found]
+        items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
@@ -305,7 +306,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
 
 
 # a statistic's item and entry set slot by slot (the frozen dataclasses' __init__ costs a few microseconds; 10,000 per 1,000 pages)
-_new_item = _unchecked_maker(_Item, {}, ("unit", "rep", "local", "readings", "how", "context", "coefficient"))
+_new_item = _unchecked_maker(_Item, {}, ("unit", "rep", "local", "readings", "how", "context", "coefficient"))  # (a sentence's: no squares)
 _new_entry = _unchecked_maker(Entry, {}, ("location", "found", "findings", "suggestion", "unit", "start", "end", "notes", "revision", "kept",
                                           "recheck"))
 
@@ -487,6 +488,8 @@ def _audit_units(
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
+        if item.squares is not None:  # an ANOVA row's SS, MS and F against each other and its error row's
+            findings += squares_fit(rep, item.squares)
         if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns (its p, where no test is given)
             findings += coefficient_ratio(rep, item.coefficient) + coefficient_p(rep, item.coefficient, alpha)
         if lead is not None and lead[1] is not None:

@@ -90,6 +90,10 @@ _ROLES = (
     (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
+    # an ANOVA table's sums of squares and mean squares (SPSS's "Type III Sum of Squares" and "Mean Square", R's "Sum Sq" and
+    # "Mean Sq", statsmodels' "sum_sq"): a row's MS is its SS / df, and its F its MS / its error row's MS
+    (re.compile(r"(?i)(?:type\s+(?:I{1,3}|[123])\s+)?sums?\s+of\s+squares|SS|sum[\s_]sq|Ssq"), "ss"),
+    (re.compile(r"(?i)mean\s+squares?|MS|mean[\s_]sq"), "ms"),
 )
 _STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald", "U"}  # (U: only as a row names it under "Statistic")
 # the test a row of a t-test table names beside its "Statistic" (jamovi's and JASP's layout: "Student's t", "Welch's t",
@@ -329,6 +333,7 @@ class TableStatistic:
     how: str  # where its parts were found
     readings: tuple[Reading, ...] = ()
     coefficient: "Ratio | None" = None  # a Wald's B and SE from their columns (checked: Wald = (B / SE)², OR = exp(B)); a t's mean difference and SE
+    squares: "Squares | None" = None  # an ANOVA row's SS and MS and its error row's (checked: MS = SS / df, F = MS / MS error)
 
 
 def _number(text: str, mark: str) -> tuple[str, Number] | None:
@@ -384,12 +389,24 @@ def _correction(row) -> str:  # type: ignore[no-untyped-def]
     return ""
 
 
-def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, float | None, dict[str, float | None]]]:  # type: ignore[no-untyped-def]
-    """The table's error terms (Residuals, Error, Within rows) in order: (row, df, the df of each correction) — an
-    error term takes the rows under it that name only a correction (SPSS's "Error(time)" and its Greenhouse-Geisser,
-    Huynh-Feldt and Lower-bound rows); each df from the df column."""
+# an ANOVA row's sum of squares, df and mean square, its error row's, and whether the error row's own are checked with it
+# (each None where the table does not give it; the error row's own SS and MS with the first effect it serves only: its slip
+# is found once)
+Squares = tuple["Number | None", "Number | None", "Number | None", "Number | None", "Number | None", "Number | None", bool]
+# an error term, as _error_dfs reads it: its row, its df, the df of each correction's row under it, and its row's SS and MS
+_ErrorTerm = tuple[int, "float | None", dict[str, "float | None"], "tuple[Number | None, Number | None]"]
+_WITHIN = re.compile(r"(?i)\s*within")
+
+
+def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[_ErrorTerm]:  # type: ignore[no-untyped-def]
+    """The table's error terms (Residuals, Error, Within rows) in order: (row, df, the df of each correction, the
+    row's SS and MS) — an error term takes the rows under it that name only a correction (SPSS's "Error(time)" and its
+    Greenhouse-Geisser, Huynh-Feldt and Lower-bound rows); each df from the df column. A "Within" row followed by an
+    Error or Residual row is no error term: a repeated-measures table splits the within variance into the subjects'
+    and the error's ("Between treatments | Within | Between subjects | Error")."""
     column = next((k for k, v in roles.items() if v == "df"), None)
-    out: list[tuple[int, float | None, dict[str, float | None]]] = []
+    squares = [next((k for k, v in roles.items() if v == role), None) for role in ("ss", "ms")]
+    out: list[_ErrorTerm] = []
     open_block = False
     for r in sorted(rows):
         row = rows[r]
@@ -397,7 +414,10 @@ def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, float 
         found = _number(row[column][0].text, mark) if column in row else None
         df = found[1].value if found is not None else None
         if _ERROR_ROW.fullmatch(first):
-            out.append((r, df, {_correction(row): df} if _correction(row) else {}))
+            if out and _WITHIN.match(rows[out[-1][0]][min(rows[out[-1][0]])][0].text) and not _WITHIN.match(first):
+                out.pop()  # (the within variance, split further below)
+            ss, ms = (_number(row[k][0].text, mark) if k in row else None for k in squares)
+            out.append((r, df, {_correction(row): df} if _correction(row) else {}, (ss[1] if ss else None, ms[1] if ms else None)))
             open_block = True
         elif open_block and _CORRECTION.fullmatch(first):  # a correction's row under the error term
             out[-1][2].setdefault(_correction(row), df)
@@ -406,15 +426,23 @@ def _error_dfs(rows, roles: dict[int, str], mark: str) -> list[tuple[int, float 
     return out
 
 
-def _error_df(errors: list[tuple[int, float | None, dict[str, float | None]]], r: int, correction: str) -> float | None:
-    """The df of the error term of the effect in row ``r``: the first error term below the effect (an effect's error
-    follows its effects: "Error (between subjects)" after the between-subjects effects, R's Residuals last), else the
-    last above — its row of the effect's correction when the effect names one (a Greenhouse-Geisser F takes the
-    Greenhouse-Geisser error df; None when the error term has no such row), else its first row."""
+def _error_term(errors: list[_ErrorTerm], r: int) -> _ErrorTerm | None:
+    """The error term of the effect in row ``r``: the first below the effect (an effect's error follows its effects:
+    "Error (between subjects)" after the between-subjects effects, R's Residuals last), else the last above."""
     if not errors:
         return None
     k = bisect.bisect_right(errors, r, key=lambda e: e[0])
-    _, df, corrected = errors[k] if k < len(errors) else errors[-1]
+    return errors[k] if k < len(errors) else errors[-1]
+
+
+def _error_df(errors: list[_ErrorTerm], r: int, correction: str) -> float | None:
+    """The df of the error term of the effect in row ``r`` (_error_term) — its row of the effect's correction when the
+    effect names one (a Greenhouse-Geisser F takes the Greenhouse-Geisser error df; None when the error term has no such
+    row), else its first row."""
+    term = _error_term(errors, r)
+    if term is None:
+        return None
+    _, df, corrected, _ = term
     return corrected.get(correction) if correction else df
 
 
@@ -700,7 +728,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     groups_guessed = not labelled  # (until a row of the table gives its own)
     found: list[TableStatistic] = []
     used: set[int] = set()
-    error_dfs: dict[int, list[tuple[int, float | None, dict[str, float | None]]]] = {}
+    error_dfs: dict[int, list[_ErrorTerm]] = {}
+    squares_checked: set[tuple[int, int]] = set()  # the error rows whose own SS and MS have been checked (with their first effect)
     header_above = False  # the row before was a header row
     wordy = ""  # the text of the rows without numbers just above (a spanner's "95% Confidence Interval of the Difference")
     heads: dict[int, str] = {}  # each column's head as typed
@@ -831,6 +860,17 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if error_df is not None:
                 df = (df[0], Number(f"{error_df:g}", error_df, 0, 0, 0))
                 how += ", the error row's df"
+            squares = None
+            if role == "F" and df and ("ss" in roles.values() or "ms" in roles.values()):
+                ss, ms = (numbers.get(k) if k in row else None for k in (_own_column(roles, c, "ss"), _own_column(roles, c, "ms")))
+                own = (ss[1] if ss else None, df[0], ms[1] if ms else None)
+                term = _error_term(error_dfs.get(id(roles), []), r) if not _correction(row) else None  # (a corrected row's error MS is its own)
+                if term is not None and term[1] is not None:
+                    first_use = (id(roles), term[0]) not in squares_checked
+                    squares_checked.add((id(roles), term[0]))
+                    squares = (*own, term[3][0], Number(f"{term[1]:g}", term[1], 0, 0, 0), term[3][1], first_use)
+                else:
+                    squares = (*own, None, None, None, False)
             if p is not None:
                 how += ", the p column"
             elif stars:  # "3.10**" with "**p < .01" in the note: p < .01
@@ -877,7 +917,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                                          groups_guessed)
                 readings = design if design is not None else tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,
                                                                               total_guessed=not labelled, groups_guessed=groups_guessed, total_where=above))
-            found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient))
+            found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient, squares))
         # a statistic typed whole in a cell, its p further along the row
         ordered = sorted(row)
         for i, c in enumerate(ordered):
