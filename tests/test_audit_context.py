@@ -2295,3 +2295,70 @@ def test_an_anova_tables_mean_squares_and_f_are_held_to_their_definitions(tmp_pa
     path.write_text(_pipe_table("Table 2. Repeated-measures ANOVA", ["Source", "SS", "df", "MS", "F"], rows), encoding="utf-8")
     (e,) = audit_file(path)
     assert e.found.startswith("F(1, 92) = 12.04") and e.codes == []
+
+
+# structural equation models' fit tables as published: PMC7386898 (Table 3, "χ2 (df)" over "460.10 (105), p < .001", with χ²
+# difference tests), PMC8710118 (Maternal & Child Nutrition, Table 3: one model a column, rows χ², df, p, RMSEA, 90% CI, p —
+# the second p the RMSEA's test of close fit) and PMC7153860 (PLoS One 2020;15(4):e0230131, Table 3: rows "χ2 (df)" over
+# "297.5 (134)" and "P-value"; its medical students' 2-factor column prints the P-value and χ2/df swapped, "2.22")
+_PMC7386898_TABLE3 = """Table 3. Model fit statistics
+
+| Variables | χ2 (df) | CFI | SRMR | RMSEA (90% CI) |
+|---|---|---|---|---|
+| Configural, equal factor structure | 460.10 (105), p < .001 | .990 | .025 | .057 (0.052, 0.062) |
+| Metric, equal factor loadings | 387.21 (123), p < .001 | .993 | .025 | .045 (0.040, 0.051) |
+| Configural vs. metric | 21.81 (18), p = .240 | — | — | — |
+| Metric vs. scalar | 87.87 (32), p < .001 | — | — | — |
+"""
+_PMC8710118_TABLE3 = """Table 3.
+
+| Indices | Model 0 | Model 1 | Model 8 |
+|---|---|---|---|
+| χ 2 | 686.70 | 512.86 | 175.89 |
+| df | 71 | 70 | 69 |
+| p | <0.001 | <0.001 | <0.001 |
+| RMSEA | 0.17 | 0.15 | 0.07 |
+| 90% CI | 0.16–0.18 | 0.13–0.16 | 0.06–0.09 |
+| p | <0.001 | <0.001 | <0.004 |
+"""
+_PMC7153860_TABLE3 = """Table 3. Confirmatory factor analysis model fit parameters for 1-, 2-, 3-, and 4-factor models.
+
+| Model | Inpatients | Outpatients | Medical students |
+|---|---|---|---|
+| 2-factor model | | | |
+| χ2 (df) | 286.2 (134) | 271.4 (134) | 297.5 (134) |
+| P-value | <0.0001 | <0.0001 | 2.22 |
+| χ2/df | 2.14 | 2.03 | <0.0001 |
+| 3-factor model | | | |
+| χ2 (df) | 186.4 (132) | 197.8 (132) | 232.0 (132) |
+| P-value | 0.0013 | 0.0002 | <0.0001 |
+"""
+
+
+def test_the_chi_square_tests_of_model_fit_tables_are_read(tmp_path):
+    """A model's χ² test of fit had not been read where fit tables print it: with its df and p in one cell under "χ2 (df)"
+    (only the p had been read, alone), or one model a column with the χ², df and p in rows of their own (nothing had been
+    read). Read now and checked; the published slip in PMC7153860 (a p of 2.22, the χ²/df's place) is found; a χ² in a
+    sentence ends where its fit indices begin, so the RMSEA's interval is not taken for the χ²'s and the χ² is restyled."""
+    path = tmp_path / "fit.md"
+    path.write_text(_PMC7386898_TABLE3, encoding="utf-8")
+    entries = audit_file(path)
+    assert [e.found for e in entries] == ["χ²(105) = 460.10, p < .001", "χ²(123) = 387.21, p < .001", "χ²(18) = 21.81, p = .240", "χ²(32) = 87.87, p < .001"]
+    assert all(e.codes == [] for e in entries)
+    path.write_text(_PMC7386898_TABLE3.replace("p = .240", "p = .024"), encoding="utf-8")
+    assert [e.codes for e in audit_file(path) if e.codes] == [["p-does-not-follow", "verdict-changes"]]
+
+    path.write_text(_PMC8710118_TABLE3, encoding="utf-8")
+    entries = audit_file(path)
+    assert [e.found for e in entries] == ["χ²(71) = 686.70, p < 0.001", "χ²(70) = 512.86, p < 0.001", "χ²(69) = 175.89, p < 0.001"]
+    assert all(e.codes == [] for e in entries)
+
+    path.write_text(_PMC7153860_TABLE3, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 6
+    (slip,) = [e for e in entries if e.codes]
+    assert slip.found == "χ²(134) = 297.5, p = 2.22" and "impossible-p" in slip.codes
+
+    typed = "The model fit well, χ2(24) = 31.2, p = .15, CFI = .98, RMSEA = .04, 90% CI [.00, .07], SRMR = .03."  # (ours)
+    (e,) = audit_units([Unit("c", typed)], restyle=True)
+    assert e.found == "χ2(24) = 31.2, p = .15" and e.revision is not None and e.revision.plain() == "χ²(24) = 31.2, p = .15"

@@ -273,6 +273,8 @@ _RATIOS = [
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
 _CORRELATIONS = frozenset({"r", "rs", "tau_b"})
+# a structural equation model's fit indices, which a χ² test of fit is reported with (practice)
+_FIT_INDEX = re.compile(r"\b(?:CFI|TLI|NNFI|RMSEA|SRMR|GFI|AGFI|NFI|IFI|AIC|BIC|WRMR)\b")
 # where a ratio's (or a difference's) name ends: every name in _RATIOS ends so (the lookbehinds its patterns start from)
 _AFTER_RATIO = r"(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))"
 # after a ratio's name, its abbreviation in parentheses or brackets ("adjusted HR (aHR)=1.29", "odds ratio [OR], 1.52")
@@ -553,6 +555,9 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         rep = _read_head(pat, text, m)
         if rep is None:
             continue
+        if rep.symbol == "chi2":  # a model's χ² test of fit ends where its fit indices begin ("…, p = .15, CFI = .98, RMSEA = .04, 90% CI
+            fit = _FIT_INDEX.search(text, m.end(), end)  # [.00, .07]": the RMSEA's interval, not the χ²'s), unless its p comes after them
+            end = fit.start() if fit is not None and pat.p.search(text, fit.start(), end) is None else end
         _read_clause(pat, text, rep, m.end(), end, rare)
         rep.text = text[rep.start : rep.end]
         out.append(rep)

@@ -192,7 +192,8 @@ def _head_dfs(text: str) -> tuple[Number, ...]:
 
 
 _VALUE_DF = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[{_SIGNIFICANCE}]*\s*\(\s*(?P<df>\d+(?:\.\d+)?)"
-                       rf"(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*(?:[{_SIGNIFICANCE}]+|[a-d])?\s*")
+                       rf"(?:\s*[,;]\s*(?P<df2>\d+(?:\.\d+)?))?\s*\)\s*(?:[{_SIGNIFICANCE}]+|[a-d])?\s*"
+                       r"(?:[,;]\s*(?=[pP]\s*[<>=≤≥]).*)?")  # (and its p after it in the cell: "460.10 (105), p < .001", a model's χ² test of fit)
 
 
 def _value_df(text: str, mark: str) -> "tuple[tuple[str, Number], tuple[Number, ...]] | None":
@@ -778,10 +779,14 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         if heads_in_row or any(v is not None for v in numbers.values()):
             wordy = ""
         cell_dfs: dict[int, tuple[Number, ...]] = {}
+        cell_ps: dict[int, PValue] = {}  # a p typed after the value and its df in the same cell
         for c in with_df & set(row):
             read = _value_df(row[c][0].text, mark)
             if read is not None:
                 numbers[c], cell_dfs[c] = read
+                lone = next((o for o in row[c][1] if o.symbol is None and o.p is not None and not o.effects), None)
+                if lone is not None:
+                    cell_ps[c], _ = lone.p, used.add(id(lone))
         # a model's coefficients table; or a table of odds ratios with their intervals or p in columns of their own ("Odds
         # ratio | 95% CI | P value"; "OR | 95% CI | p Value" for each of three models side by side)
         coefficients = not {"B", "SE", "BSE", "BCI", "beta"}.isdisjoint(roles.values()) or (
@@ -835,7 +840,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             op, value = numbers[c]  # type: ignore[misc]
             unit = row[c][0]
             p_col = _own_column(roles, c, "p")
-            p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
+            p = cell_ps.get(c) or (_p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None)
             df: tuple[Number, ...] = ()
             how = (f"the {role if role != 'chi2' else 'χ²'} column" if not by_row else
                    f"the Value column (a χ² as its row, {row[min(row)][0].text.strip()}, names it)" if role == "chi2" else
@@ -872,7 +877,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 else:
                     squares = (*own, None, None, None, False)
             if p is not None:
-                how += ", the p column"
+                how += ", its p in the same cell" if c in cell_ps else ", the p column"
             elif stars:  # "3.10**" with "**p < .01" in the note: p < .01
                 marks = _BARE.fullmatch(unit.text)
                 bound = stars.get((marks.group("marks") or "").translate(ONE_STAR)) if marks is not None else None
@@ -947,7 +952,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     if stars:
         taken = {id(t.unit) for t in found + estimates}
         estimates += [t for t in _marked_coefficients(rows, stars, mark) if id(t.unit) not in taken]
-    return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark) + _starred_matrix(rows, mark, stars, said or caption) + estimates, used
+    return found + _correlation_rows(rows, mark) + _statistic_rows(rows, mark) + _transposed_rows(rows, mark) + _starred_matrix(rows, mark, stars, said or caption) + estimates, used
 
 
 _SE_BELOW = re.compile(r"\s*\(\s*(?P<se>(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*\)\s*")  # "(0.100)": an SE in the row below its coefficient
@@ -1153,6 +1158,46 @@ def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no
             rep.text = statistic_text(label, df, value[0], value[1], p)
             found.append(TableStatistic(rows[r][c][0], rep, None, f"read from the table's row: the {text.strip()} row" + (", the df row" if df else "")
                                         + ", the Asymp. Sig. row, in its column"))
+    return found
+
+
+# a table laid out across its columns, a model or group to each (structural equation models' fit tables): a χ² row
+# ("χ2", "χ 2", "χ2 (df)" over "384.7 (135)") with its df row and its p row right under it ("df", "p", "P-value"); a
+# later p row (the RMSEA's test of close fit) is not the χ²'s
+_ROW_P = re.compile(r"(?i)\s*(?:p|p[- ]?values?)\s*")
+
+
+def _transposed_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """Each column's χ², df and p where a row names the χ², the next its df (or its cells give them, "384.7 (135)" in a
+    row named "χ2 (df)") and the next its p; a p above 1 in that row is read, to be found impossible."""
+    order = sorted(rows)
+    found: list[TableStatistic] = []
+    for i, r in enumerate(order):
+        row = rows[r]
+        label = row[min(row)][0].text
+        if _role(label) != "chi2":
+            continue
+        with_df = _DF_IN_HEAD.search(_head_text(label)) is not None
+        below = [rows[k] for k in order[i + 1 : i + 3]]
+        df_row = below[0] if below and not with_df and _DF_ROW.fullmatch(below[0][min(below[0])][0].text) else None
+        p_row = next((b for b in below[(0 if with_df or df_row is None else 1) :][:1] if _ROW_P.fullmatch(b[min(b)][0].text)), None)
+        if p_row is None or (not with_df and df_row is None):
+            continue
+        for c in sorted(row)[1:]:
+            read = _value_df(row[c][0].text, mark) if with_df else None
+            size = _number(df_row[c][0].text, mark) if df_row is not None and c in df_row else None
+            value = read[0] if read is not None else _number(row[c][0].text, mark) if not with_df else None
+            df = read[1] if read is not None else (size[1],) if size is not None else ()
+            printed = _number(p_row[c][0].text, mark) if c in p_row else None
+            p = _p_cell(p_row[c][0].text, mark) if c in p_row else None
+            if p is None and printed is not None and printed[1].value > 1:
+                p = PValue(printed[0], printed[1], printed[1].start, printed[1].end, printed[1].start, "")
+            if value is None or not df or p is None:
+                continue
+            rep = Reported("chi2", "χ²", value[1].start, value[1].start, value[1].end, df, None, value[0], value[1], p)
+            rep.text = statistic_text("χ²", df, value[0], value[1], p)
+            found.append(TableStatistic(row[c][0], rep, None, f"read from the table's row: the {label.strip()} row" + ("" if with_df else ", the df row")
+                                        + ", the p row under it, in its column"))
     return found
 
 
