@@ -2342,9 +2342,10 @@ def test_the_chi_square_tests_of_model_fit_tables_are_read(tmp_path):
     sentence ends where its fit indices begin, so the RMSEA's interval is not taken for the χ²'s and the χ² is restyled."""
     path = tmp_path / "fit.md"
     path.write_text(_PMC7386898_TABLE3, encoding="utf-8")
-    entries = audit_file(path)
+    entries = [e for e in audit_file(path) if e.found.startswith("χ²")]  # (and the RMSEA's in its interval: all fit)
     assert [e.found for e in entries] == ["χ²(105) = 460.10, p < .001", "χ²(123) = 387.21, p < .001", "χ²(18) = 21.81, p = .240", "χ²(32) = 87.87, p < .001"]
     assert all(e.codes == [] for e in entries)
+    assert all(e.codes == [] for e in audit_file(path))
     path.write_text(_PMC7386898_TABLE3.replace("p = .240", "p = .024"), encoding="utf-8")
     assert [e.codes for e in audit_file(path) if e.codes] == [["p-does-not-follow", "verdict-changes"]]
 
@@ -2362,3 +2363,34 @@ def test_the_chi_square_tests_of_model_fit_tables_are_read(tmp_path):
     typed = "The model fit well, χ2(24) = 31.2, p = .15, CFI = .98, RMSEA = .04, 90% CI [.00, .07], SRMR = .03."  # (ours)
     (e,) = audit_units([Unit("c", typed)], restyle=True)
     assert e.found == "χ2(24) = 31.2, p = .15" and e.revision is not None and e.revision.plain() == "χ²(24) = 31.2, p = .15"
+
+
+# PMC7400860 (Nutrients 2020;12:2117, Table 3, per-protocol rows): Cohen's d with its interval in one cell under "Effect Size
+# Cohen's d [95% Confidence Interval]" beside the t test's p and an adjusted model's β and p
+_PMC7400860_TABLE3 = """Table 3. Changes in physical measurements and tests from baseline to 3-month follow-up.
+
+| Outcome | Intervention change | Control change | Difference between groups p-Value | Effect Size Cohen’s d [95% Confidence Interval] | β | p-Value |
+|---|---|---|---|---|---|---|
+| Maximal mouth opening (mm) | 0.6 ± 1.6 | −0.3 ± 2.1 | 0.088 | 0.46 [−0.07, 0.98] | 0.962 | 0.072 |
+| Maximal hand grip strength (kg) | 1.3 ± 3.8 | −0.6 ± 3.3 | 0.038 | 0.55 [0.03, 1.07] | 1.950 | 0.042 |
+| 30-s chair stand test (number of repetitions) | 0.5 ± 2.3 | 2.3 ± 3.1 | 0.012 | −0.69 [−1.22, −0.15] | −2.074 | 0.008 |
+"""
+
+
+def test_an_estimate_with_its_interval_under_a_head_naming_the_level_is_held_to_it(tmp_path):
+    """A column of estimates with their intervals under a head that names the level and no role of its own ("Effect Size
+    Cohen's d [95% Confidence Interval]", PMC7400860; "RMSEA (90%CI)", PMC8712760; "Mean (95% CI)", "AUC (95% CI)") had not
+    been read: an estimate outside its interval was not found. Each is held to its interval now (no p to compare: the
+    interval's level alone); the published cells fit, a mutated one does not."""
+    path = tmp_path / "e.md"
+    path.write_text(_PMC7400860_TABLE3, encoding="utf-8")
+    entries = [e for e in audit_file(path) if e.found.startswith("Effect Size")]
+    assert [e.found for e in entries][0] == "Effect Size Cohen’s d = 0.46, 95% CI [−0.07, 0.98]" and len(entries) == 3
+    assert all(e.codes == [] for e in entries)
+    path.write_text(_PMC7400860_TABLE3.replace("−0.69 [−1.22", "−0.69 [−0.22"), encoding="utf-8")
+    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]
+    rmsea = "| Model | χ2 (df) | p | RMSEA (90%CI) |\n|---|---|---|---|\n| Two-factor model | 929.640 (134) | < 0.001 | 0.074 (0.070–0.079) |\n"
+    path.write_text("TABLE 3. Model fit indices (PMC8712760)\n\n" + rmsea, encoding="utf-8")
+    assert [(e.found, e.codes) for e in audit_file(path)] == [("χ²(134) = 929.640, p < 0.001", []), ("RMSEA = 0.074, 90% CI [0.070, 0.079]", [])]
+    path.write_text("TABLE 3. Model fit indices\n\n" + rmsea.replace("0.074 (", "0.084 ("), encoding="utf-8")
+    assert [e.codes for e in audit_file(path)] == [[], ["ci-excludes-estimate"]]

@@ -947,7 +947,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 design = None if merged.df else design_readings(rep.symbol, words_above.get(c, ""), f"{caption} {said}", groups, total, "in the table")
                 readings = () if merged.df else design if design is not None else tuple(df_readings(rep.symbol, groups, total, "in the table", welch))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
-    estimates = _estimate_cells(rows, f"{caption} {said}", mark)
+    estimates = _estimate_cells(rows, f"{caption} {said}", mark) + _interval_columns(rows, mark)
     used |= {id(rep) for t in estimates for rep in rows[t.unit.cell[1]][t.unit.cell[2]][1]}  # type: ignore[index]  # (the cell's lone p)
     if stars:
         taken = {id(t.unit) for t in found + estimates}
@@ -987,6 +987,45 @@ def _marked_coefficients(rows, stars: "dict[str, tuple[str, Number]]", mark: str
             rep.text = f"B = {b.text}, SE = {se.text}{p_text(p)}"
             out.append(TableStatistic(row[c][0], rep, None, f"read from the table's row: a coefficient with its {m.group('marks')} ({m.group('marks')}p "
                                                             f"{bound[0]} {bound[1].text}, as the table defines it) and its SE in the row below", (), (b, se)))
+    return out
+
+
+# a column of estimates with their intervals under a head naming its level and no role of its own ("Mean (95% CI)", "AUC
+# (95% CI)", "Prevalence, % (95% CI)", "RMSEA (90% CI)"; practice): each estimate inside its interval
+_ESTIMATE_HEAD = re.compile(r"\s*(?P<name>[^()\[\]]*?[^\s,(\[])\s*,?\s*[(\[]\s*(?P<lev>\d{2}(?:\.\d)?)\s?%\s?(?:CI|C\.I\.?|[Cc]onfidence\s+[Ii]nterval"
+                            r"|CrI|[Cc]redible\s+[Ii]nterval)\s*[)\]]\s*")
+
+
+def _interval_columns(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
+    """The cells "estimate (lower–upper)" under a head that names the interval's level and has no role of its own (a
+    ratio's, a difference's or a coefficient's are read with their p elsewhere): each an estimate with its interval, to
+    hold it (no p beside it: the interval's level alone)."""
+    pattern = _ESTIMATE_INTERVAL_CELL[mark if mark in _ESTIMATE_INTERVAL_CELL else "."]
+    read = _patterns(mark).to_number
+    heads: dict[int, tuple[str, float]] = {}
+    out: list[TableStatistic] = []
+    for r in sorted(rows):
+        row = rows[r]
+        cells = {c: pattern.fullmatch(u.text) if "(" in u.text or "[" in u.text else None for c, (u, _) in row.items()}
+        if not any(cells.values()):
+            if not any(_number(u.text, mark) is not None for u, _ in row.values()):  # a header row: its heads
+                for c, (u, _) in row.items():
+                    m = _ESTIMATE_HEAD.fullmatch(_head_text(u.text)) if "%" in u.text else None
+                    if m is not None and _role(u.text) is None and 50 <= float(m.group("lev")) < 100:
+                        heads[c] = (m.group("name"), float(m.group("lev")) / 100)
+                    elif u.text.strip():
+                        heads.pop(c, None)
+            continue
+        for c, m in cells.items():
+            if m is None or c not in heads:
+                continue
+            estimate, low, high = (read(m.group(g), m.start(g)) for g in ("est", "lo", "hi"))
+            if estimate is None or low is None or high is None:
+                continue
+            name, level = heads[c]
+            rep = Reported(None, "", estimate.start, estimate.start, high.end, ci=Interval(level, low, high, low.start, high.end), estimate=estimate)
+            rep.text = f"{name} = {estimate.text}, {level * 100:g}% CI [{low.text}, {high.text}]"
+            out.append(TableStatistic(row[c][0], rep, None, f"read from the table's row: an estimate with its interval under \u201c{name} ({level * 100:g}% CI)\u201d"))
     return out
 
 
