@@ -2394,3 +2394,30 @@ def test_an_estimate_with_its_interval_under_a_head_naming_the_level_is_held_to_
     assert [(e.found, e.codes) for e in audit_file(path)] == [("χ²(134) = 929.640, p < 0.001", []), ("RMSEA = 0.074, 90% CI [0.070, 0.079]", [])]
     path.write_text("TABLE 3. Model fit indices\n\n" + rmsea.replace("0.074 (", "0.084 ("), encoding="utf-8")
     assert [e.codes for e in audit_file(path)] == [[], ["ci-excludes-estimate"]]
+
+
+def test_group_sizes_named_by_subscripts_and_the_bound_of_u():
+    """Group sizes typed with their subscripts anywhere in the statistic's sentence ("n1 = n2 = 8", as the Mann–Whitney
+    article of the English Wikipedia words its example statement of results; "n1 = 5, n2 = 5") had not been read: a U
+    larger than n₁·n₂, which no data give, was not found, nor a t's df taken from them. pingouin's mwu of its anova data,
+    light blond against dark brunette (five each): U = 24 of at most 25, p = .016; U = 124 cannot be (a mutation)."""
+    import pingouin as pg
+
+    data = pg.read_dataset("anova")
+    a, b = (data[data["Hair color"] == c]["Pain threshold"] for c in ("Light Blond", "Dark Brunette"))
+    row = pg.mwu(a, b).iloc[0]
+    typed = f"U = {row['U_val']:.0f}, n1 = {len(a)}, n2 = {len(b)}, p = {row['p_val']:.3f}".replace("0.", ".")
+    assert typed == "U = 24, n1 = 5, n2 = 5, p = .016"
+    (e,) = audit_units([Unit("c", f"Light blonds bore more pain ({typed}).")])
+    assert "impossible-value" not in e.codes
+    (e,) = audit_units([Unit("c", f"Light blonds bore more pain ({typed.replace('U = 24', 'U = 124')}).")])
+    assert "impossible-value" in e.codes and "5 × 5 = 25" in e.message
+    (e,) = audit_units([Unit("c", "The distributions in the two groups differed significantly (Mann–Whitney U = 10.5, n1 = n2 = 8, P < 0.05 two-tailed).")])
+    assert "impossible-value" not in e.codes
+    (e,) = audit_units([Unit("c", "The distributions in the two groups differed significantly (Mann–Whitney U = 105, n1 = n2 = 8, P < 0.05 two-tailed).")])
+    assert "impossible-value" in e.codes
+    # a t without df takes n₁ + n₂ − 2 from them (the t and p ours, from scipy: t(23) = 2.50 gives p = .020)
+    (e,) = audit_units([Unit("c", "Scores differed, t = 2.50, p = .020 (n1 = 12, n2 = 13).")])
+    assert e.codes == [] and "df = 12 + 13 − 2 = 23" in e.checked
+    (e,) = audit_units([Unit("c", "Scores differed, t = 2.50, p = .002 (n1 = 12, n2 = 13).")])
+    assert "p-does-not-follow" in e.codes

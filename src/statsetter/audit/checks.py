@@ -1028,6 +1028,17 @@ def interval_fits_se(ci: "TypedInterval", se: Number) -> list[Finding]:
                                                 f"{most:.2f} (a t on 1 df): the SE or the interval is another's.", f"SE = {se.text}, {level} CI [{ci.low.text}, {ci.high.text}]")]
 
 
+def rank_sum_bound(rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
+    """Mann–Whitney's U between 0 and n₁·n₂ (definition: the count of pairs in which one group's value exceeds the other's,
+    ties counting a half), where the sentence gives the two group sizes."""
+    if rep.symbol != "U" or sizes is None or rep.value is None:
+        return []
+    most = sizes[0] * sizes[1]
+    if rep.value.value - rep.value.half_unit <= most and rep.value.value + rep.value.half_unit >= 0:
+        return []
+    return [Finding("impossible-value", f"U lies between 0 and n₁·n₂ = {sizes[0]} × {sizes[1]} = {most}.", rep.value.text)]
+
+
 def _mean_square(ss: Number | None, df: Number | None, ms: Number | None, row: str, out: list[Finding] | None) -> list[tuple[float, float]]:
     """The ranges a row's MS may have: its printed MS's and SS / df's (both where the table gives both; an MS that is not
     SS / df is a finding, into ``out`` unless None — either may be the slip, so the F is held to both). Each number stands

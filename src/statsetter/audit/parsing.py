@@ -723,12 +723,27 @@ def _sentence_start(pat: _Patterns, text: str, since: int, at: int) -> int:
 _EACH_GROUP = re.compile(r"\s*(?:per (?:group|condition|arm)|in each (?:group|condition|arm)|each)\b")
 
 
+# the two groups' sizes named by their subscripts, anywhere in the statistic's sentence: "n1 = 15, n2 = 12", "n₁ = 15 and n₂ =
+# 12", "n1 = n2 = 8" (as nonparametric tests are reported; practice)
+_NUMBERED_SIZES = re.compile(r"n(?<![\w]n)\s?[1₁]\s*=\s*(?:n\s?[2₂]\s*=\s*(?P<both>\d{1,6})(?![\d.,]\d)|(?P<n1>\d{1,6})(?![\d.,]\d)\s*(?:[,;]\s*(?:and\s+)?|and\s+)"
+                             r"n\s?[2₂]\s*=\s*(?P<n2>\d{1,6})(?![\d.,]\d))")
+
+
 def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int, int] | None:
     """The two group sizes (``n = 40`` … ``n = 38``) the sentence gives before
     a statistic, when it gives exactly two; one given for each group (``n = 20
-    per group``, ``n = 20 each``) is two alike."""
+    per group``, ``n = 20 each``) is two alike; or named by their subscripts
+    anywhere in its sentence (``n1 = 15, n2 = 12``, ``n1 = n2 = 8``)."""
     pat = _patterns(decimal_mark)
     index = _index(pat, text)
+    if "1" in text or "₁" in text:  # (the subscripts' forms: looked for only where the sentence can hold one)
+        start = _sentence_start(pat, text, 0, rep.start)
+        k = bisect.bisect_left(index.ends, rep.end)
+        m = _NUMBERED_SIZES.search(text, start, index.ends[k] if k < len(index.ends) else len(text))
+        if m is not None:
+            a, b = (m.group("both"), m.group("both")) if m.group("both") else (m.group("n1"), m.group("n2"))
+            if int(a) >= 1 and int(b) >= 1:
+                return int(a), int(b)
     if bisect.bisect_left(index.n_at, rep.start) < 1:  # no "n =" before it in the whole text
         return None
     start = _sentence_start(pat, text, 0, rep.start)

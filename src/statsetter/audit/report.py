@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
+from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after
 from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
@@ -474,6 +474,8 @@ def _audit_units(
                 findings += unlevelled(local, unit.text)
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
+            elif local.symbol == "U":
+                findings += rank_sum_bound(local, group_sizes(unit.text, local, mark))
             verdict = ns_after(unit.text, local)
             if verdict is not None:  # "p = .012, n.s.": the author's verdict beside the p
                 disagree = verdict_word(local, alpha, unit.text[local.p.start : verdict.end()])  # type: ignore[union-attr]
