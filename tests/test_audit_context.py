@@ -2421,3 +2421,20 @@ def test_group_sizes_named_by_subscripts_and_the_bound_of_u():
     assert e.codes == [] and "df = 12 + 13 − 2 = 23" in e.checked
     (e,) = audit_units([Unit("c", "Scores differed, t = 2.50, p = .002 (n1 = 12, n2 = 13).")])
     assert "p-does-not-follow" in e.codes
+
+
+def test_rs_followed_by_more_values_is_r_plural_and_spearmans_rs_is_restyled():
+    """"rs = −.35 and −.37" lists two r's (as "Fs(1, 38) = 4.41 and 5.20" lists F's: practice) and had been read as one
+    Spearman's r; a shared "ps < .001" now checks each — the list's r of −.01 cannot have it — and none is restyled as a
+    Spearman's. A Spearman's "rs(498)" with no list after it is restyled with the s set below (its revision had been refused
+    as dropping the word "rs"). And a plural head before an interval's level ("Fs(1, 38) = 4.41, 95% CI …") does not take
+    the level for a value (it had made an F of 95). Numbers: pingouin's corr and scipy's spearmanr of pingouin's
+    pairwise_corr data (Neuroticism with Extraversion −.35, Conscientiousness −.37, Openness −.01; Spearman's −.33)."""
+    (a, b) = audit_units([Unit("c", "Neuroticism correlated with extraversion and conscientiousness, rs(498) = −.35 and −.37, ps < .001.")], restyle=True)
+    assert (a.found, b.found) == ("rs(498) = −.35", "r(498) = −.37") and a.codes == b.codes == [] and a.revision is b.revision is None
+    found = audit_units([Unit("c", "Neuroticism correlated with extraversion and openness, rs(498) = −.35 and −.01, ps < .001.")])
+    assert [e.codes for e in found] == [[], ["p-does-not-follow", "verdict-changes"]]
+    (e,) = audit_units([Unit("c", "Neuroticism and extraversion were related, rs(498) = −.33, p < .001.", ())], restyle=True)  # (Word: no italics)
+    assert e.revision is not None and e.revision.plain() == "rₛ(498) = −.33, p < .001"
+    found = audit_units([Unit("c", "Both effects were small, Fs(1, 38) = 4.41, 95% CI [.01, .20].")])
+    assert [e.found for e in found] == ["Fs(1, 38) = 4.41, 95% CI [.01, .20]"]  # (one statistic: no F of 95)

@@ -307,7 +307,7 @@ class _Patterns:
                                    rf"(?<!\w[bB]oth\s[pP])|(?<=[eE]ach\s[pP])(?<!\w[eE]ach\s[pP]))(?:s|['’]s|[- ]?values?)?))(?![\w'’])"
                                    rf"\s*+(?P<op>[<>≤≥]|[bN](?=\s*+\.?\d)|=(?=\s*+{num}\s*+(?:[,;&]|and\s)))\s*+(?P<num>{num}{_EXPONENT}?)")
         # the rest of a list of p's in order ("ps = .042 and .002, respectively"; "ps = .03, .04, and .20")
-        self.p_list = re.compile(rf"\s*+(?:[,;]\s*+(?:and\s++)?|and\s++|&\s*+)(?P<num>{num})(?![\d])")
+        self.p_list = re.compile(rf"\s*+(?:[,;]\s*+(?:and\s++)?|and\s++|&\s*+)(?P<num>{num})(?![\d]|\s?%)")  # (not an interval's level: "95% CI")
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,¼]?\s*+"
@@ -562,8 +562,10 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         rep.text = text[rep.start : rep.end]
         out.append(rep)
         taken.append((rep.start, rep.end))
-        if rep.symbol_text in ("Fs", "ts") and rep.value is not None:  # a plural head: its other values, each a statistic of its own
-            rep.plural = True
+        if rep.symbol_text == "rs" and rep.value is not None and pat.p_list.match(text, rep.value.end) is not None:
+            rep.symbol = "r"  # "rs = .32 and .41": r's plural, not Spearman's r (a list of values follows)
+        if rep.symbol_text in ("Fs", "ts", "rs") and rep.symbol != "rs" and rep.value is not None:  # a plural head: its other values,
+            rep.plural = True  # each a statistic of its own
             out += _more_values(pat, text, rep)
     gaps, at = [], 0
     for s, e in sorted(taken):

@@ -322,7 +322,8 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
     kept = {w.lower() for w in _WORD.findall(new)} | _NOTATION_WORDS
     places = [(ci.low.end, ci.high.start, _RANGE_WORDS) for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
     places += [(e.symbol_start, e.symbol_start + len(e.symbol_text), _RATIO_WORDS) for e in rep.effects if e.name in RATIOS]
-    places.append((rep.symbol_start, rep.symbol_start + len(rep.symbol_text), _SYMBOL_WORDS))
+    places.append((rep.symbol_start, rep.symbol_start + len(rep.symbol_text),  # (a one-word symbol's own letters: "rs" set as r with s
+                   _SYMBOL_WORDS | ({rep.symbol_text.lower()} if rep.symbol_text.isalpha() else set())))  # below; "F change" keeps its word)
     places += [(d.symbol_start, d.symbol_start + len(d.symbol_text), frozenset({d.symbol_text.lower()})) for d in rep.descriptives
                if subscript(d)]  # "Mage" restyled as M with "age" below
     places += [(e.symbol_start, e.symbol_start + len(e.symbol_text), frozenset(w.lower() for w in _WORD.findall(e.symbol_text)))
