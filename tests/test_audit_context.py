@@ -2438,3 +2438,35 @@ def test_rs_followed_by_more_values_is_r_plural_and_spearmans_rs_is_restyled():
     assert e.revision is not None and e.revision.plain() == "rₛ(498) = −.33, p < .001"
     found = audit_units([Unit("c", "Both effects were small, Fs(1, 38) = 4.41, 95% CI [.01, .20].")])
     assert [e.found for e in found] == ["Fs(1, 38) = 4.41, 95% CI [.01, .20]"]  # (one statistic: no F of 95)
+
+
+# two abstracts as published: PMC6376725 (BMC Research Notes 2019, doi:10.1186/s13104-019-4127-1) types each adjusted odds
+# ratio with its interval after a comma, "AOR = 15.47, 7.74–30.89", the level named once before; da Silva et al. (Revista de
+# Saúde Pública 2020, doi:10.11606/s1518-8787.2020054003278) a prevalence with its interval, "40.4% (95%CI 35.6-45.3)"
+_PMC6376725 = ("The prevalence of hypertension was (34.7%), 95% CI (30.6–38.8), of them 53.8 were Male and 46.2% were female. The "
+               "multivariable regression analysis showed that having ever been told hypertension (AOR = 15.47, 7.74–30.89); using "
+               "animal product butter (AOR = 2.66, 1.25–5.67); physical inactivity (AOR = 2.83, 1.34–6.01) and BMI 25.0 to 29.9 and "
+               "greater than 30 (AOR = 5.02, 1.58–15.94 and AOR = 3.98, 1.04–16.01, respectively) were statistically significant "
+               "predictors of hypertension.")
+_SEROPREVALENCE = "Seroprevalence of total antibodies against SARS-CoV-2 was 40.4% (95%CI 35.6-45.3)."
+
+
+def test_an_estimate_given_with_its_labelled_interval_and_a_ratios_interval_after_a_comma():
+    """A prevalence, mean or accuracy given with its labelled interval right after it ("40.4% (95%CI 35.6-45.3)") had not
+    been read, nor a ratio's interval set off by a comma alone ("AOR = 2.66, 1.25–5.67"): an estimate outside its interval
+    was not found. Both published texts fit; mutations of ours are found. A ratio's interval so typed has no level of its
+    own (the paragraph names 95% before it: no ci-level finding); the estimate's none is checked against a p (a
+    prevalence's null is not 0)."""
+    found = audit_units([Unit("c", _PMC6376725)])
+    ratios = [e for e in found if e.found.startswith("AOR")]
+    assert [e.found for e in ratios] == ["AOR = 15.47, 7.74–30.89", "AOR = 2.66, 1.25–5.67", "AOR = 2.83, 1.34–6.01", "AOR = 5.02, 1.58–15.94",
+                                         "AOR = 3.98, 1.04–16.01"]
+    assert all(e.codes == [] for e in found)
+    (bad,) = [e for e in audit_units([Unit("c", _PMC6376725.replace("2.66, 1.25", "2.66, 3.25"))]) if e.codes]
+    assert bad.codes == ["ci-excludes-estimate"]
+    (e,) = audit_units([Unit("c", _SEROPREVALENCE)])
+    assert e.found == "40.4% (95%CI 35.6-45.3)" and e.codes == []
+    (e,) = audit_units([Unit("c", _SEROPREVALENCE.replace("40.4%", "49.4%"))])
+    assert e.codes == ["ci-excludes-estimate"]
+    found = audit_units([Unit("c", "Smokers had higher odds (OR = 1.52, 95% CI 1.10–2.10; n = 240).")])  # (a ratio's own interval: read once)
+    assert [e.found for e in found] == ["OR = 1.52, 95% CI 1.10–2.10; n = 240"]

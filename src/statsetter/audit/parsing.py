@@ -316,6 +316,12 @@ class _Patterns:
         # an interval typed without its level right after an effect size's or a correlation's number ("d = 0.62 [0.21,
         # 1.03]", "OR = 2.30 (1.40–3.80)", "Cohen’s d = 1.48 [0.55; 2.41]" under a head that gives the level): its limits
         self.bare_ci = re.compile(rf"\s?(?:(?P<sq>\[)|\()\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+(?(sq)\]|\))")
+        # an estimate with its labelled interval right after it, as medical and public-health texts give a prevalence, a mean
+        # or an accuracy: "12.4% (95% CI, 10.1%-14.9%)", "3.2 (95% CI 2.9 to 3.5)", "0.86 (95% confidence interval [CI], 0.80-0.91)"
+        self.estimate_ci = re.compile(
+            rf"(?P<est>{num})(?:\s?%)?\s*[(\[]\s*(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|[Cc]onfidence\s+[Ii]nterval(?:\s*\[CI\])?)"
+            rf"\s*[:=,]?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?\s*[)\]]")
+        self.ratio_ci = re.compile(rf"\s*,\s*(?P<a>{num})\s*(?:–|—|-|to)\s*(?P<b>{num})(?![\d.,]?\d|\s?%)")  # (no brackets: a ratio's only)
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
         # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
@@ -586,12 +592,43 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
                 verdicts = verdicts or any(_lone_ns(r) for r in found)
                 out += found
             piece = (b.end() if b else gap_end) if stop < gap_end else gap_end
+    if "%" in text and ("CI" in text or "onfidence" in text):  # (what an estimate's labelled interval must contain)
+        out += _estimates(pat, text, out)
     out.sort(key=lambda r: r.start)
     if verdicts:  # an "ns" after a statistic's own p: its verdict, not a p
         out = [r for i, r in enumerate(out) if not (i and _lone_ns(r) and ns_after(text, out[i - 1]))]
     bare = next((r.start for r in out if r.symbol is not None and r.p is None), None)  # (most statistics carry their p)
     if bare is not None:
         _share(pat, text, out, bare)
+    return out
+
+
+_OPEN_LABEL = re.compile(r"[(\[]\s*\d{2}(?:[.,]\d+)?\s*%\s*(?:CI|C\.I\.|[Cc]onfidence)")  # "(95% CI", "[95%CI", "(95% confidence"
+_NUMBER_BEFORE = re.compile(r"[-−–]?\s?(?:\d+(?:[.,]\d+)*|[.,]\d+)(?:\s?%)?\s*$")  # the estimate just before it, "40.4% "
+
+
+def _estimates(pat: _Patterns, text: str, found: list[Reported]) -> list[Reported]:
+    """Each estimate given with its labelled interval right after it ("12.4% (95% CI, 10.1%-14.9%)") that no statistic
+    read already holds (a ratio's, a mean's, a difference's are theirs): its estimate and interval, to hold it (no p: the
+    null of a prevalence or a mean is not 0)."""
+    spans = sorted((r.start, r.end) for r in found)
+    out = []
+    for label in _OPEN_LABEL.finditer(text):  # (the bracket and level first: the estimate's pattern then matched where it can stand)
+        before = _NUMBER_BEFORE.search(text, max(0, label.start() - 24), label.start())
+        m = (pat.estimate_ci.match(text, before.start(), label.end() + 80)  # (the interval's limits within reach of its label)
+             if before is not None and not text[before.start() - 1 : before.start()].isdigit() else None)
+        if m is None:
+            continue
+        k = bisect.bisect_right(spans, (m.start("est"), len(text))) - 1
+        if k >= 0 and spans[k][0] <= m.start("est") < spans[k][1]:
+            continue
+        estimate, low, high, level = (pat.to_number(m.group(g), m.start(g)) for g in ("est", "a", "b", "lev"))
+        if estimate is None or low is None or high is None or level is None or not 0 < level.value < 100:
+            continue
+        start = m.start("est") + len(m.group("est")) - len(m.group("est").lstrip())
+        rep = Reported(None, "", start, start, m.end(), ci=_new_interval(level.value / 100, low, high, m.start("lev"), m.end()), estimate=estimate)
+        rep.text = text[start : m.end()]
+        out.append(rep)
     return out
 
 
@@ -1076,7 +1113,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
             differences = differences or name == "MD"
             ci = _labelled_interval(pat, m) if m.re is pat.ratio and m.group("rlev") is not None else None
             if ci is None and name not in _DESCRIPTIVE:
-                ci = _bare_interval(pat, text, number.end, end)
+                ci = _bare_interval(pat, text, number.end, end, ratio=m.re is pat.ratio and name != "MD")
                 if ci is not None:
                     covered = max(covered, ci.end)
                     last_end = max(last_end, ci.end)
@@ -1154,17 +1191,18 @@ def _labelled_interval(pat: _Patterns, m: re.Match[str]) -> Interval | None:
     return _new_interval(level.value / 100, low, high, m.start("rlev"), m.end())
 
 
-def _bare_interval(pat: _Patterns, text: str, at: int, end: int) -> Interval | None:
+def _bare_interval(pat: _Patterns, text: str, at: int, end: int, ratio: bool = False) -> Interval | None:
     """The interval typed without its level right after a number that ends at ``at`` ("d = 0.62 [0.21, 1.03]", "OR =
-    2.30 (1.40–3.80)"), its level None; None where none is, or where neither limit has decimals ("d = 0.62 [12, 13]":
-    a citation's numbers)."""
-    m = pat.bare_ci.match(text, at, end)
+    2.30 (1.40–3.80)"; after a ratio also set off by a comma alone, "AOR = 2.66, 1.25–5.67", as medical abstracts type
+    it), its level None; None where none is, or where neither limit has decimals ("d = 0.62 [12, 13]": a citation's numbers)."""
+    m = pat.bare_ci.match(text, at, end) or (pat.ratio_ci.match(text, at, end) if ratio else None)
     if m is None:
         return None
     low, high = pat.to_number(m.group("a"), m.start("a")), pat.to_number(m.group("b"), m.start("b"))
     if low is None or high is None or not (low.decimals or high.decimals):
         return None
-    return _new_interval(None, low, high, m.start() + (text[m.start()].isspace()), m.end())
+    typed = m.group()
+    return _new_interval(None, low, high, m.start() + len(typed) - len(typed.lstrip(" \u00a0\t\n,")), m.end())
 
 
 def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
