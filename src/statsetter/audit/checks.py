@@ -1051,9 +1051,15 @@ def _mean_square(ss: Number | None, df: Number | None, ms: Number | None, row: s
         from_ss = ((ss.value - ss.half_unit) / (df.value + d), (ss.value + ss.half_unit) / (df.value - d))
         if ms is not None and out is not None and not _overlap(from_ss, out_ranges[0]):
             out.append(Finding("ms-does-not-fit", f"A mean square is its sum of squares over its df: {row} {ss.text} / {df.text} gives "
-                                                  f"{from_ss[0]:.6g} to {from_ss[1]:.6g}, not {ms.text}.", f"{row}: SS = {ss.text}, df = {df.text}, MS = {ms.text}"))
+                                                  f"{_between(*from_ss, '.6g')}, not {ms.text}.", f"{row}: SS = {ss.text}, df = {df.text}, MS = {ms.text}"))
         out_ranges.append(from_ss)
     return out_ranges
+
+
+def _between(low: float, high: float, spec: str) -> str:
+    """A range as a message gives it: "1368.29 to 1368.29" as the one number it prints as."""
+    a, b = format(low, spec), format(high, spec)
+    return a if a == b else f"{a} to {b}"
 
 
 def squares_fit(rep: Reported, squares: "tuple[Number | None, Number | None, Number | None, Number | None, Number | None, Number | None, bool]") -> list[Finding]:
@@ -1072,7 +1078,7 @@ def squares_fit(rep: Reported, squares: "tuple[Number | None, Number | None, Num
     ratios = [(a[0] / b[1], a[1] / b[0]) for a in effects for b in errors]
     if not any(_overlap(r, printed) for r in ratios):
         low, high = min(r[0] for r in ratios), max(r[1] for r in ratios)
-        out.append(Finding("f-does-not-fit", f"F is its row's mean square over its error row's: those the table gives make it {low:.4g} to {high:.4g}, "
+        out.append(Finding("f-does-not-fit", f"F is its row's mean square over its error row's: those the table gives make it {_between(low, high, '.4g')}, "
                                              f"not {f.text}. Where a random factor's F takes another row's mean square, say so in the note.",
                            f"F = {f.text}; MS from {min(e[0] for e in effects):.6g} to {max(e[1] for e in effects):.6g}, "
                            f"error MS from {min(e[0] for e in errors):.6g} to {max(e[1] for e in errors):.6g}"))
