@@ -2470,3 +2470,21 @@ def test_an_estimate_given_with_its_labelled_interval_and_a_ratios_interval_afte
     assert e.codes == ["ci-excludes-estimate"]
     found = audit_units([Unit("c", "Smokers had higher odds (OR = 1.52, 95% CI 1.10–2.10; n = 240).")])  # (a ratio's own interval: read once)
     assert [e.found for e in found] == ["OR = 1.52, 95% CI 1.10–2.10; n = 240"]
+
+
+def test_a_mediations_indirect_effect_is_held_to_its_interval():
+    """A mediation's indirect effect typed "ab = 0.36, 95% CI [0.22, 0.54]" (or "a×b") had not been read: one outside its
+    bootstrap interval was not found. It is an effect size of its own now (it may exceed 1: a leading zero), held to its
+    interval — not to a p (a bootstrap interval and a Sobel p may part). Numbers: pingouin's mediation_analysis of its
+    mediation data (seed 42, 1,000 resamples): indirect 0.357, 95% CI [0.219, 0.539]; the mutation is ours."""
+    import pingouin as pg
+
+    row = pg.mediation_analysis(data=pg.read_dataset("mediation"), x="X", m="M", y="Y", seed=42, n_boot=1000).set_index("path").loc["Indirect"]
+    typed = f"ab = {row['coef']:.2f}, 95% CI [{row['CI2.5']:.2f}, {row['CI97.5']:.2f}]"
+    assert typed == "ab = 0.36, 95% CI [0.22, 0.54]"
+    (e,) = audit_units([Unit("c", f"The indirect effect through M was significant, {typed}.")])
+    assert e.found == typed and e.codes == []
+    (e,) = audit_units([Unit("c", f"The indirect effect through M was significant, {typed.replace('[0.22', '[0.42')}.")])
+    assert e.codes == ["ci-excludes-estimate"]
+    (e,) = audit_units([Unit("c", "The indirect effect through M was significant (a×b = .36, 95% CI [0.22, 0.54]).")])
+    assert e.codes == ["missing-leading-zero"]

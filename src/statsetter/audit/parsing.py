@@ -235,6 +235,8 @@ _EFFECT_NAMES = [
     (r"[Δ∆]\s?R\s?(?:[²2]|\^2)", "delta_R2"),
     (r"R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared|[- ][Ss]quare(?=\s?[Cc]hange))(?:\s?[Cc]hange)?", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
+    # a mediation's indirect effect, a·b, with its (bootstrap) interval: inside it
+    (r"a(?<![\w]a)(?:b|×b|·b|\*b)(?![\w])", "ab"),
     # Cliff's dominance statistic (Cliff, 1993: d the sample's, δ the population's), between −1 and 1: not Cohen's d
     (r"C(?<![\w]C)liff(?:['’]s)?\s+(?:d|δ|delta)(?![\w])", "cliff_d"),
     (r"d(?<![\w]d)_?z", "d_z"),
