@@ -2488,3 +2488,49 @@ def test_a_mediations_indirect_effect_is_held_to_its_interval():
     assert e.codes == ["ci-excludes-estimate"]
     (e,) = audit_units([Unit("c", "The indirect effect through M was significant (a×b = .36, 95% CI [0.22, 0.54]).")])
     assert e.codes == ["missing-leading-zero"]
+
+
+# PMC8484701 (Table 4, "Multivariate logistic regression analysis"): β, SE, OR and 95% CI columns, β marked with the note's
+# marks; three of its rows do not fit: an OR outside its interval (1.685 beside 1.998–2.844), another (0.25 beside 1.055–1.141,
+# whose β / SE, 1.79, cannot give the ** it is marked with), and an OR that is not exp(β) (0.567 beside β = 0.567)
+_PMC8484701_TABLE4 = """Table 4. Multivariate logistic regression analysis.
+
+| Variables | Items | Control group | β | SE | OR | 95% CI |
+|---|---|---|---|---|---|---|
+| Gender | Female | Male | 0.217 | 0.138 | 1.242 | 0.948–1.628 |
+| Education level | High school | Illiterate | 1.164** | 0.336 | 3.203 | 1.657–6.194 |
+| Monthly income (yuan) | 3,000–4,999 | <999 | 0.522* | 0.267 | 1.685 | 1.998–2.844 |
+| Self-health assessment | Fair | Very poor | −1.387** | 0.775 | 0.25 | 1.055–1.141 |
+| Hypertension | Yes | No | 0.497** | 0.154 | 1.643 | 1.216–2.221 |
+| Diabetes | Yes | No | −0.370* | 0.168 | 0.691 | 0.497–0.96 |
+| Dyslipidemia | Yes | No | 0.567* | 0.181 | 0.567 | 0.397–0.809 |
+| Disability | Yes | No | 0.922* | 0.414 | 2.515 | 1.118–5.658 |
+
+SE, standard error; OR, odds ratio; CI, confidence interval.
+*P < 0.05; **P < 0.01.
+"""
+
+
+def test_a_logistic_tables_beta_is_its_b_where_the_odds_ratios_are_exp_beta(tmp_path):
+    """A β beside an odds ratio column is the logistic model's B where the ratios are exp(β) in most rows
+    (PMC8484701's Table 4): each OR is then held to exp(β) and the β's marks to β / SE — its third slip, an OR of 0.567
+    beside β = 0.567, and a ** that β / SE = 1.79 cannot give, had not been found. And a table whose odds ratio starts
+    the row with an SE beside it ("Odds ratio | SE | 95% CI | p", as Stata's logistic prints the ratio's delta-method SE)
+    had had each ratio read as a B and found "not exp(B)": statsmodels' logit of its spector data, laid out so, fits."""
+    import statsmodels.api as sm
+
+    path = tmp_path / "t4.md"
+    path.write_text(_PMC8484701_TABLE4, encoding="utf-8")
+    found = {e.found.split(", 95%")[0]: e.codes for e in audit_file(path)}
+    assert found == {"OR = 1.242": [], "OR = 3.203": [], "OR = 1.685": ["ci-excludes-estimate"], "OR = 0.25": ["ci-excludes-estimate", "coefficient-does-not-fit"],
+                     "OR = 1.643": [], "OR = 0.691": [], "OR = 0.567": ["coefficient-does-not-fit"], "OR = 2.515": []}
+
+    data = sm.datasets.spector.load_pandas().data
+    fit = sm.Logit(data.GRADE, sm.add_constant(data[["GPA", "TUCE", "PSI"]])).fit(disp=0)
+    rows = []
+    for name in ("GPA", "TUCE", "PSI"):
+        ratio, (low, high) = math.exp(fit.params[name]), np.exp(fit.conf_int().loc[name])
+        rows.append([name, f"{ratio:.2f}", f"{ratio * fit.bse[name]:.2f}", f"{low:.2f}–{high:.2f}", f"{fit.pvalues[name]:.3f}"])
+    path.write_text(_pipe_table("Table 2. Logistic regression of the grade", ["Predictor", "Odds ratio", "SE", "95% CI", "p"], rows), encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 3 and all(e.codes == [] for e in entries), [(e.found, e.codes) for e in entries]

@@ -14,6 +14,7 @@ makes, so that a finding is reported only when no reading fits.
 from __future__ import annotations
 
 import bisect
+import math
 import re
 from dataclasses import dataclass, replace
 from typing import TYPE_CHECKING, Sequence
@@ -613,6 +614,25 @@ def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "d
     return (b, se), effects
 
 
+def _beta_as_log_odds(rows, roles: dict[int, str], mark: str) -> dict[int, str] | None:  # type: ignore[no-untyped-def]
+    """The roles with the β column read as a logistic model's B where the table has a β and an odds ratio column and no B,
+    and the odds ratio is exp(β) in at least two thirds of its rows (and two or more: "β | SE | OR | 95% CI", as health
+    journals print a logistic model); None otherwise — a standardized β beside an odds ratio is no B."""
+    beta = [c for c, role in roles.items() if role == "beta"]
+    odds = [c for c, role in roles.items() if role == "expB"]
+    if len(beta) != 1 or len(odds) != 1 or "B" in roles.values():
+        return None
+    fits = tried = 0
+    for row in rows.values():
+        b, o = (_number(row[c][0].text, mark) if c in row else None for c in (beta[0], odds[0]))
+        if b is None or o is None or b[0] != "=" or o[0] != "=" or abs(b[1].value) > 50:
+            continue
+        tried += 1
+        low, high = math.exp(b[1].value - b[1].half_unit), math.exp(b[1].value + b[1].half_unit)
+        fits += low - o[1].half_unit <= o[1].value <= high + o[1].half_unit
+    return {c: "B" if role == "beta" else role for c, role in roles.items()} if tried >= 2 and 3 * fits >= 2 * tried else None
+
+
 def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str], said: str, mark: str,  # type: ignore[no-untyped-def]
                        stars: "dict[str, tuple[str, Number]] | None" = None) -> list[TableStatistic]:
     """A model's coefficients in a table without a test column (B, SE, 95% CI, β, p: health and psychology journals'
@@ -650,9 +670,10 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
                 continue
             name = heads.get(interval[2], "OR").strip() or "OR"
             marked = None
-            if p is None and stars:  # the bound the ratio's or its interval's marks stand for ("1.29 | (1.18 - 1.40)**")
+            if p is None and stars:  # the bound the ratio's, its interval's or its B's marks stand for ("1.29 | (1.18 - 1.40)**", "0.497** | … | 1.643")
                 limits = _own_column(part, k, "ci")
-                marked = _marked_bound(row[interval[2]][0].text + (" " + row[limits][0].text if limits in row else ""), stars, ratio.end)
+                marked = _marked_bound(row[interval[2]][0].text + (" " + row[limits][0].text if limits in row else "")
+                                       + (" " + row[k][0].text if k != interval[2] else ""), stars, ratio.end)
             rep = _ratio_statistic("OR", name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
             unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
             how += f", its {marked[1]}" if marked else ""
@@ -671,7 +692,9 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             unit = row[k][0]
             how = f"the {heads.get(k, name).strip() or name} column" + (", its SE" if se is not None else "") + (f", {interval[4]}" if interval else "")
         how += ", the p column" if p is not None else ""
-        coefficient = (estimate, se) if se is not None else None  # (an odds ratio's row: its B and SE too)
+        # (an odds ratio's row: its B and SE too — not where the ratio itself starts the row: "OR | SE | 95% CI | p", as
+        # Stata's logistic prints it, has no B, and its SE may be the ratio's own)
+        coefficient = (estimate, se) if se is not None and roles[k] != "expB" else None
         out.append(TableStatistic(unit, rep, None, f"read from the table's row: {how} (no test column)", (), coefficient))
     return out
 
@@ -731,6 +754,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     used: set[int] = set()
     error_dfs: dict[int, list[_ErrorTerm]] = {}
     squares_checked: set[tuple[int, int]] = set()  # the error rows whose own SS and MS have been checked (with their first effect)
+    log_odds: dict[int, dict[int, str] | None] = {}  # each header's roles with its β read as a logistic B, where the table shows it is one
     header_above = False  # the row before was a header row
     wordy = ""  # the text of the rows without numbers just above (a spanner's "95% Confidence Interval of the Difference")
     heads: dict[int, str] = {}  # each column's head as typed
@@ -798,7 +822,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             ratios = {c: _ratio_cell(row[c][0].text, mark) for c in sorted(row)[1:]}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             if coefficients and not any(role in _STAT_ROLES or role == "value" for role in roles.values()):  # no test column
-                found += _bare_coefficients(row, roles, numbers, heads, levels_said, mark, stars)
+                if id(roles) not in log_odds:
+                    log_odds[id(roles)] = _beta_as_log_odds(rows, roles, mark)
+                found += _bare_coefficients(row, log_odds[id(roles)] or roles, numbers, heads, levels_said, mark, stars)
                 continue
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
             if sizes:
