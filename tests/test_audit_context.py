@@ -2534,3 +2534,24 @@ def test_a_logistic_tables_beta_is_its_b_where_the_odds_ratios_are_exp_beta(tmp_
     path.write_text(_pipe_table("Table 2. Logistic regression of the grade", ["Predictor", "Odds ratio", "SE", "95% CI", "p"], rows), encoding="utf-8")
     entries = audit_file(path)
     assert len(entries) == 3 and all(e.codes == [] for e in entries), [(e.found, e.codes) for e in entries]
+
+
+def test_an_odds_ratio_head_with_its_intervals_plural():
+    """"OR (95%CIs)" — the interval's abbreviation in the plural, run on to the level, as PMC10379630's Table 3 heads each
+    model's column — had not been read as an odds ratio's head: none of its 24 ratios was checked. Read now; the published
+    rows fit (the men's rural OR, 1.33 (0.99–1.77) beside P = 0.055, among them), a mutated interval is found."""
+    table = _pipe_table("Table 3. The association of different risk factors with ASCVD by logistic regression analysis.",
+                        ["Characteristic", "OR (95%CIs)", "P-value", "OR (95%CIs)", "P-value"],
+                        [["Rural", "1.25 (1.05–1.48)", "0.014", "1.33 (0.99–1.77)", "0.055"],
+                         ["24 < 28", "1.39 (1.15–1.68)", "0.001", "1.38 (1.09–1.76)", "0.009"],
+                         ["Over drinking", "2.90 (1.94–4.33)", "<0.001", "2.29 (1.49–3.50)", "<0.001"]])
+    import tempfile
+    from pathlib import Path
+
+    with tempfile.TemporaryDirectory() as folder:
+        path = Path(folder) / "t3.md"
+        path.write_text(table, encoding="utf-8")
+        entries = audit_file(path)
+        assert len(entries) == 6 and all(e.codes == [] for e in entries) and entries[0].found == "OR = 1.25, 95% CI [1.05, 1.48], p = 0.014"
+        path.write_text(table.replace("1.33 (0.99–1.77) | 0.055", "1.33 (1.09–1.77) | 0.55"), encoding="utf-8")  # (ours)
+        assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree"]]

@@ -108,7 +108,7 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 # (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
 _RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
-                         rf"|incidence\s+rate\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?c\.?i\.?\s*\)[a-d{_SIGNIFICANCE}]?")
+                         rf"|incidence\s+rate\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?c\.?i\.?s?\s*\)[a-d{_SIGNIFICANCE}]?")  # (also "95%CIs")
 _RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR"}
 _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
                          rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
