@@ -2555,3 +2555,37 @@ def test_an_odds_ratio_head_with_its_intervals_plural():
         assert len(entries) == 6 and all(e.codes == [] for e in entries) and entries[0].found == "OR = 1.25, 95% CI [1.05, 1.48], p = 0.014"
         path.write_text(table.replace("1.33 (0.99–1.77) | 0.055", "1.33 (1.09–1.77) | 0.55"), encoding="utf-8")  # (ours)
         assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree"]]
+
+
+def test_a_correlation_tables_intervals_in_the_row_below_are_read(tmp_path):
+    """APA 7's correlation table with confidence intervals puts each coefficient's interval in brackets in the row under it
+    ("−.35**" over "[−.42, −.27]"); the coefficients had been read, their intervals not. Each is now the coefficient's own
+    (the note's one level), held to it and to its mark. Numbers: pingouin's corr of its pairwise_corr data (N = 500);
+    the mutation is ours."""
+    import pingouin as pg
+
+    data = pg.read_dataset("pairwise_corr")
+    names = ["Neuroticism", "Extraversion", "Conscientiousness"]
+
+    def cell(a: str, b: str) -> tuple[str, str]:
+        result = pg.corr(data[a], data[b])
+        r, (low, high), p = result["r"].iloc[0], result["CI95"].iloc[0], result["p_val"].iloc[0]
+        mark = "**" if p < .01 else "*" if p < .05 else ""
+        text = lambda v: f"{v:.2f}".replace("0.", ".")  # noqa: E731
+        return text(r) + mark, f"[{text(low)}, {text(high)}]"
+
+    rows = [["1. Neuroticism", "", ""]]
+    for i, name in enumerate(names[1:], start=2):
+        values = [cell(name, other) for other in names[: i - 1]]
+        rows.append([f"{i}. {name}"] + [v for v, _ in values] + [""] * (3 - i))
+        rows.append([""] + [ci for _, ci in values] + [""] * (3 - i))
+    assert rows[1][1] == "-.35**" and rows[2][1] == "[-.42, -.27]"
+    table = _pipe_table("Table 1. Correlations with confidence intervals (N = 500)", ["Variable", "1", "2"], rows)
+    note = "\nNote. Values in square brackets indicate the 95% confidence interval for each correlation. * p < .05. ** p < .01.\n"
+    path = tmp_path / "c.md"
+    path.write_text(table + note, encoding="utf-8")
+    entries = audit_file(path)  # (extraversion and conscientiousness, r = .06, unmarked: not read)
+    assert len(entries) == 2 and all(e.codes == [] for e in entries)
+    assert entries[0].found == "r(498) = -.35, p < .01, 95% CI [-.42, -.27]"
+    path.write_text(table.replace("[-.42, -.27]", "[-.42, -.37]") + note, encoding="utf-8")
+    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]

@@ -1166,6 +1166,9 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
             cells += [(r, c, block) for c in sorted(row)[1:]]
     symbol = "rs" if _SPEARMAN_SAID.search(caption) else "r"
     found: list[TableStatistic] = []
+    below = dict(zip(order, order[1:]))  # each row's next: a coefficient's interval in brackets under it (APA 7's layout)
+    levels = {float(m.group(1)) for m in _LEVEL_SAID.finditer(caption)}
+    level = levels.pop() / 100 if len(levels) == 1 and 50 <= next(iter(levels)) < 100 else None
     for r, c, n in cells:
         if n is None or n < 4:
             continue
@@ -1181,10 +1184,18 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
         df = Number(f"{n - 2}", float(n - 2), 0, 0, 0)
         rep = Reported(symbol, symbol, value.start, value.start, value.end, (df,), None, "=", value, p)
         rep.text = statistic_text(symbol, (df,), "=", value, p)
+        under = rows[below[r]] if r in below else {}
+        limits = _INTERVAL_CELL[mark if mark in _INTERVAL_CELL else "."].fullmatch(under[c][0].text) if c in under and under[c][0].text.lstrip()[:1] in "[(" \
+            and _ROW_NUMBER.match(under[min(under)][0].text) is None else None
+        if limits is not None:
+            low, high = (_patterns(mark).to_number(limits.group(g), limits.start(g)) for g in ("lo", "hi"))
+            if low is not None and high is not None:
+                rep.ci = Interval(level, low, high, low.start, high.end)  # type: ignore[arg-type]
+                rep.text += f", {level * 100:g}% CI [{low.text}, {high.text}]" if level is not None else f" [{low.text}, {high.text}]"
         where = "the note, for its side of the diagonal" if by_side else "its block's row" if n != total else "the caption or note"
         found.append(TableStatistic(unit, rep, None, f"read from the table's row: a correlation coefficient with its "
                                                      f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text}, as the table defines it), df = N − 2 "
-                                                     f"(N = {n} in {where})"))
+                                                     f"(N = {n} in {where})" + (", its interval in the row below" if rep.ci is not None else "")))
     return found
 
 
