@@ -810,7 +810,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 numbers[c], cell_dfs[c] = read
                 lone = next((o for o in row[c][1] if o.symbol is None and o.p is not None and not o.effects), None)
                 if lone is not None:
-                    cell_ps[c], _ = lone.p, used.add(id(lone))
+                    cell_ps[c] = lone.p
+                    used.add(id(lone))  # (read as the statistic's p: not a lone p of its own)
         # a model's coefficients table; or a table of odds ratios with their intervals or p in columns of their own ("Odds
         # ratio | 95% CI | P value"; "OR | 95% CI | p Value" for each of three models side by side)
         coefficients = not {"B", "SE", "BSE", "BCI", "beta"}.isdisjoint(roles.values()) or (
