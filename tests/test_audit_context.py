@@ -2589,3 +2589,31 @@ def test_a_correlation_tables_intervals_in_the_row_below_are_read(tmp_path):
     assert entries[0].found == "r(498) = -.35, p < .01, 95% CI [-.42, -.27]"
     path.write_text(table.replace("[-.42, -.27]", "[-.42, -.37]") + note, encoding="utf-8")
     assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]
+
+
+# a paired comparison's write-up as a statistics question gives it, with its data (quoted in the Nemotron-CC-Math-v1
+# dataset, huggingface.co/datasets/nvidia/Nemotron-CC-Math-v1): scipy's ttest_rel of the data reproduces t(27) = 2.7007,
+# p = .0118 and the mean increase's 95% CI [0.0393, 0.2877]
+_PAIRED_A = [0.40000000, 0.44011976, 0.72727273, 0.50000000, 0, 0.07692308, 0, 0, 0, 1, 0.5, 0.91666667, 0.19354839, 0.74883721, 0.5, 0.5,
+             0.55, 0.17142857, 0.5, 0.51351351, 0.68, 0.85714286, 0.03703704, 0.05454545, 0.54219949, 0.44444444, 0, 0]
+_PAIRED_B = [0, 0.54491018, 0.72727273, 0, 0, 0, 0, 0, 0, 1, 0, 0, 0, 0.33953488, 0, 0, 0, 0.48571429, 0, 0.83783784, 0.8, 0.57142857, 0, 0,
+             0.06393862, 0.90476190, 0, 0]
+_PAIRED_WRITE_UP = ("a statistically significant mean increase of 0.1635, 95% CI [0.0393, 0.2877], t(27) = 2.7007, p = 0.0118, d = 0.4938, "
+                    "95% CI for d [-0.0501, 1.0378].")
+
+
+def test_an_interval_labelled_for_what_it_is_of():
+    """"95% CI for d [-0.0501, 1.0378]", "95% CI for the difference [0.04, 1.31]" — an interval's label naming what it is of
+    — had not been read: a d outside its interval was not found. Read now as the d's (or the test's estimate's) and held to
+    it; the restyled text keeps the interval with the style's label. The write-up's numbers are checked against scipy."""
+    from scipy import stats
+
+    result = stats.ttest_rel(_PAIRED_A, _PAIRED_B)
+    assert (f"{result.statistic:.4f}", f"{result.pvalue:.4f}") == ("2.7007", "0.0118")
+    found = [e for e in audit_units([Unit("c", _PAIRED_WRITE_UP)]) if e.found.startswith("t(27)")]
+    assert found[0].found == "t(27) = 2.7007, p = 0.0118, d = 0.4938, 95% CI for d [-0.0501, 1.0378]"
+    assert "ci-excludes-estimate" not in found[0].codes
+    found = [e for e in audit_units([Unit("c", _PAIRED_WRITE_UP.replace("[-0.0501", "[0.5501"))]) if e.found.startswith("t(27)")]
+    assert "ci-excludes-estimate" in found[0].codes
+    (e,) = audit_units([Unit("c", "Scores rose, t(27) = 2.70, p = .012, d = 0.49, 95% CI for d [-0.05, 1.04].", ())], restyle=True)
+    assert e.revision is not None and e.revision.plain() == "t(27) = 2.70, p = .012, d = 0.49, 95% CI [−0.05, 1.04]"

@@ -312,7 +312,8 @@ class _Patterns:
         self.p_list = re.compile(rf"\s*+(?:[,;]\s*+(?:and\s++)?|and\s++|&\s*+)(?P<num>{num})(?![\d]|\s?%)")  # (not an interval's level: "95% CI")
         sep = r"[;]" if mark == "," else r"[,;]"
         self.ci = re.compile(
-            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?\s*+[:=,¼]?\s*+"
+            rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?"
+            rf"(?:\s++(?:for|of)\s++(?:the\s++)?(?:(?:mean\s++)?difference|[dgr]|OR|B|β)(?![\w]))?\s*+[:=,¼]?\s*+"  # ("95% CI for the difference", "95% CI for d")
             rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
         )
         # an interval typed without its level right after an effect size's or a correlation's number ("d = 0.62 [0.21,

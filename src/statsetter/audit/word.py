@@ -320,7 +320,9 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
     R's "F-statistic" (and "t-value", "t value") and the words around df written after the value ("on 1 and 30 DF") are notation there;
     "unadjusted" or "crude" are the author's and keep the statistic as typed."""
     kept = {w.lower() for w in _WORD.findall(new)} | _NOTATION_WORDS
-    places = [(ci.low.end, ci.high.start, _RANGE_WORDS) for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
+    intervals = [ci for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None]
+    places = [(ci.low.end, ci.high.start, _RANGE_WORDS) for ci in intervals]
+    places += [(ci.start, ci.low.start, _LABEL_WORDS) for ci in intervals]  # ("95% CI for the difference [", "95% CI for d [": the interval's own)
     places += [(e.symbol_start, e.symbol_start + len(e.symbol_text), _RATIO_WORDS) for e in rep.effects if e.name in RATIOS]
     places.append((rep.symbol_start, rep.symbol_start + len(rep.symbol_text),  # (a one-word symbol's own letters: "rs" set as r with s
                    _SYMBOL_WORDS | ({rep.symbol_text.lower()} if rep.symbol_text.isalpha() else set())))  # below; "F change" keeps its word)
@@ -341,6 +343,7 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
 
 
 _RANGE_WORDS = frozenset({"to"})
+_LABEL_WORDS = frozenset({"for", "of", "the", "mean", "difference"})
 _RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj"})
 _SYMBOL_WORDS = frozenset({"statistic", "value"})
 _DF_WORDS = frozenset({"on", "and", "with", "df"})
