@@ -2617,3 +2617,22 @@ def test_an_interval_labelled_for_what_it_is_of():
     assert "ci-excludes-estimate" in found[0].codes
     (e,) = audit_units([Unit("c", "Scores rose, t(27) = 2.70, p = .012, d = 0.49, 95% CI for d [-0.05, 1.04].", ())], restyle=True)
     assert e.revision is not None and e.revision.plain() == "t(27) = 2.70, p = .012, d = 0.49, 95% CI [−0.05, 1.04]"
+
+
+def test_a_ratio_with_its_labelled_interval_in_brackets_and_an_adjusted_ratio_worded():
+    """"OR 10.79 [95% CI 1.34-86.94]" (the interval with its label inside brackets, as medical journals print it: practice)
+    had been read without its closing bracket, and its revision refused as dropping it; "adjusted OR 10.79; 95% CI,
+    1.34-86.94; P = .03" (AMA's punctuation) had its revision refused as dropping the word "OR" — the style's aOR stands
+    for it. Numbers: statsmodels' logit of its spector data, PSI's odds ratio adjusted for GPA and TUCE."""
+    import statsmodels.api as sm
+
+    data = sm.datasets.spector.load_pandas().data
+    fit = sm.Logit(data.GRADE, sm.add_constant(data[["GPA", "TUCE", "PSI"]])).fit(disp=0)
+    ratio, (low, high) = math.exp(fit.params["PSI"]), np.exp(fit.conf_int().loc["PSI"])
+    bracketed = f"OR {ratio:.2f} [95% CI {low:.2f}-{high:.2f}]"
+    assert bracketed == "OR 10.79 [95% CI 1.34-86.94]"
+    (e,) = audit_units([Unit("c", f"The new method raised the odds of a better grade ({bracketed}).", ())], "ama11", restyle=True)
+    assert e.found == bracketed and e.codes == [] and e.revision is not None
+    worded = f"adjusted OR {ratio:.1f}; 95% CI, {low:.1f}-{high:.1f}; P = .03"
+    (e,) = audit_units([Unit("c", f"The new method raised the odds of a better grade ({worded}).", ())], "ama11", restyle=True)
+    assert e.found == worded and e.revision is not None and e.revision.plain().startswith("aOR")

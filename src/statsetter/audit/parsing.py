@@ -1216,6 +1216,6 @@ def _interval(pat: _Patterns, m: re.Match[str], text: str) -> Interval | None:
     if low is None or high is None or level is None or not 0 < level.value < 100:
         return None
     end = m.end()
-    if m.group("a") is None and text[m.start() - 1 : m.start()] == "(" and text[end : end + 1] == ")":
-        end += 1  # "(95% CI, 0.04–1.31)": the closing parenthesis belongs to the interval
+    if m.group("a") is None and text[m.start() - 1 : m.start()] + text[end : end + 1] in ("()", "[]"):
+        end += 1  # "(95% CI, 0.04–1.31)", "[95% CI 1.12-1.62]": the closing bracket belongs to the interval
     return _new_interval(level.value / 100, low, high, m.start(), end)

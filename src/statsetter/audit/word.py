@@ -344,7 +344,7 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
 
 _RANGE_WORDS = frozenset({"to"})
 _LABEL_WORDS = frozenset({"for", "of", "the", "mean", "difference"})
-_RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj"})
+_RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj", "or", "hr", "rr", "irr"})  # ("adjusted OR": aOR)
 _SYMBOL_WORDS = frozenset({"statistic", "value"})
 _DF_WORDS = frozenset({"on", "and", "with", "df"})
 
