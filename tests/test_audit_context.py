@@ -2488,6 +2488,11 @@ def test_a_mediations_indirect_effect_is_held_to_its_interval():
     assert e.codes == ["ci-excludes-estimate"]
     (e,) = audit_units([Unit("c", "The indirect effect through M was significant (a×b = .36, 95% CI [0.22, 0.54]).")])
     assert e.codes == ["missing-leading-zero"]
+    # in Word, where the text sets other symbols italic, an upright ab is an italics finding (APA 7 §6.45: Latin symbols italic)
+    text = f"Scores rose (t(98) = 4.24, p < .001); the indirect effect through M was significant ({typed})."
+    t, p, ab = text.index("t("), text.index("p <"), text.index("ab =")
+    assert "italics" in [c for e in audit_units([Unit("c", text, ((t, t + 1), (p, p + 1)))]) for c in e.codes]
+    assert "italics" not in [c for e in audit_units([Unit("c", text, ((t, t + 1), (p, p + 1), (ab, ab + 2)))]) for c in e.codes]
 
 
 # PMC8484701 (Table 4, "Multivariate logistic regression analysis"): β, SE, OR and 95% CI columns, β marked with the note's

@@ -667,7 +667,7 @@ def _italic(spans: Sequence[tuple[int, int]]) -> _Italic:
     return _remembered(_LAST_ITALIC, spans, lambda: _Italic(spans))
 
 
-_ITALIC_NAMES = {"t", "F", "r", "rs", "z", "U", "H", "W", "T", "p", "d", "g", "V", "R2", "M", "SD", "Mdn", "N", "n"}
+_ITALIC_NAMES = {"t", "F", "r", "rs", "z", "U", "H", "W", "T", "p", "d", "g", "V", "R2", "M", "SD", "Mdn", "N", "n", "ab"}
 _GREEK = "χηωεφβρ"
 
 
