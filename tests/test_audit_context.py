@@ -2177,6 +2177,9 @@ def test_an_interval_typed_without_its_level_is_read_for_its_limits(tmp_path):
     (e,) = audit_units([Unit("c", f"Neuroticism and extraversion were related (95% CI in brackets), {typed.replace('[−.42', '[−.32')}.")])
     assert e.codes == ["ci-excludes-estimate"]
 
+    # the level named once in an earlier paragraph serves the text after it (not the text before it)
+    named, bare = Unit("a", "Intervals are 95% CIs throughout."), Unit("b", "The effect was large, d = 0.68 [0.04, 1.31].")
+    assert [e.codes for e in audit_units([named, bare])] == [[]] and [e.codes for e in audit_units([bare, named])] == [["ci-level"]]
     (e,) = audit_units([Unit("c", "The effect was as large as before, d = 0.62 [12, 13].")])  # a citation's numbers, not limits
     assert e.found == "d = 0.62"
     (e,) = audit_units([Unit("c", "The effect was large, t(38) = 2.14, p = .039, d = 0.68 [0.04, 1.31].")], restyle=True)

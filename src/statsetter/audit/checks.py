@@ -40,7 +40,7 @@ CODES: dict[str, tuple[str, str]] = {
     "negative-sd": ("a negative standard deviation", "Descriptives (APA 7 §6.44)"),
     "ci-reversed": ("a CI whose lower limit is above its upper", "Confidence intervals (APA 7 §6.44)"),
     "ci-excludes-estimate": ("a CI that does not contain its estimate", "Confidence intervals (APA 7 §6.44)"),
-    "ci-level": ("an interval typed without its level where the paragraph names none before it (d = 0.68 [0.04, 1.31])",
+    "ci-level": ("an interval typed without its level where the text names none before it (d = 0.68 [0.04, 1.31])",
                  "Confidence intervals: the level stated with every interval, 95% CI [a, b] (APA Style Blog, 2010, on the Manual's 6th ed. p. 117; practice)"),
     "df-not-integer": ("non-integer df where the test needs whole numbers (χ², r, H)", "Reporting by test (practice; Welch t and F keep decimals)"),
     "leading-zero": ("a leading zero on a quantity that cannot exceed 1", "Numbers: leading zero (APA 7 §6.36)"),
@@ -566,11 +566,12 @@ _LEVEL_NAMED = re.compile(r"\d{2}(?:[.,]\d+)?\s*%\s*(?:CI|C\.I\.|[Cc]onfidence|[
 
 def unlevelled(rep: Reported, text: str) -> list[Finding]:
     """An interval typed without its level ("d = 0.68 [0.04, 1.31]") where the paragraph, ``text``, names no level
-    before it: the reader cannot tell a 95% interval from a 90% one (in a table the head or note names it)."""
+    before it: the reader cannot tell a 95% interval from a 90% one (in a table the head or note names it; the report
+    asks no more where an earlier paragraph names one, "95% CIs are given in brackets")."""
     bare = [ci for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None and ci.level is None]
     if not bare or _LEVEL_NAMED.search(text, 0, bare[0].start) is not None:
         return []
-    return [Finding("ci-level", "State the interval's level, as in 95% CI [a, b]: the paragraph names none before it.",
+    return [Finding("ci-level", "State the interval's level, as in 95% CI [a, b]: the text names none before it.",
                     ", ".join(text[ci.start : ci.end] for ci in bare))]
 
 

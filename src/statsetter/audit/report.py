@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
+from .checks import _LEVEL_NAMED, CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after
 from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
@@ -449,6 +449,7 @@ def _audit_units(
     current: Unit | None = None
     step: "tuple[Unit | None, int, list]" = (None, 0, [])  # the last R² change read without a head: its unit, its end, the effects
     named_in: "tuple[str | None, re.Match[str] | None]" = (None, None)  # the procedure a context names, for the last context asked
+    first_level: "tuple[dict[int, int], int] | None" = None  # each unit's place, and the first that names an interval's level
     for item in _items(units, mark):
         unit, rep, local = item.unit, item.rep, item.local
         if unit is not current:
@@ -471,7 +472,13 @@ def _audit_units(
         if local is not None:
             findings += style_findings(local, resolved, alpha, unit.text, unit.italic, mark, unit.equations)
             if unit.cell is None:  # (a table's head or note names its intervals' level)
-                findings += unlevelled(local, unit.text)
+                bare = unlevelled(local, unit.text)
+                if bare:  # (a paragraph before it may name the level for the text: "95% CIs are given in brackets")
+                    if first_level is None:
+                        order = {id(u): i for i, u in enumerate(units)}
+                        first_level = (order, next((i for i, u in enumerate(units) if _LEVEL_NAMED.search(u.text)), len(units)))
+                    if first_level[1] >= first_level[0].get(id(unit), 0):
+                        findings += bare
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
             elif local.symbol == "U":
