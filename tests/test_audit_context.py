@@ -2596,7 +2596,11 @@ def test_a_correlation_tables_intervals_in_the_row_below_are_read(tmp_path):
     assert len(entries) == 2 and all(e.codes == [] for e in entries)
     assert entries[0].found == "r(498) = -.35, p < .01, 95% CI [-.42, -.27]"
     path.write_text(table.replace("[-.42, -.27]", "[-.42, -.37]") + note, encoding="utf-8")
-    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]
+    (bad,) = [e for e in audit_file(path) if e.codes]
+    assert bad.codes == ["ci-excludes-estimate"]
+    # its suggestion gives the p recomputed from r(498), not the mark's bound, and says so (it had said nothing: a mark's p has
+    # no place in the statistic's text, and the suggestion had been taken for the p as given)
+    assert bad.suggestion == "r(498) = −.35, 95% CI [−.42, −.37], p < .001 (p recomputed)"
 
 
 # a paired comparison's write-up as a statistics question gives it, with its data (quoted in the Nemotron-CC-Math-v1

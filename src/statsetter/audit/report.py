@@ -24,7 +24,7 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import _LEVEL_NAMED, CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
-from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after
+from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
 from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -607,7 +607,10 @@ def _p_given(rep: "Reported | None", new: "StyledText | None", style: Style) -> 
     shown = _P_IN_TEXT.search(new.plain())
     if shown is None:
         return ""
-    given = rep.text[rep.p.start - rep.start : rep.p.end - rep.start]
+    inside = rep.start <= rep.p.start < rep.p.end <= rep.start + len(rep.text)
+    given = rep.text[rep.p.start - rep.start : rep.p.end - rep.start].strip() if inside else ""
+    if not given:  # a p a table's cell or mark gave (its place is not in the statistic's text): as a text gives it
+        given = p_text(rep.p).lstrip(", ")
     return "" if same_p(rep.p, shown, style.decimal_mark) else given
 
 
