@@ -2648,3 +2648,29 @@ def test_a_ratio_with_its_labelled_interval_in_brackets_and_an_adjusted_ratio_wo
     worded = f"adjusted OR {ratio:.1f}; 95% CI, {low:.1f}-{high:.1f}; P = .03"
     (e,) = audit_units([Unit("c", f"The new method raised the odds of a better grade ({worded}).", ())], "ama11", restyle=True)
     assert e.found == worded and e.revision is not None and e.revision.plain().startswith("aOR")
+
+
+def test_a_marked_correlation_above_one_in_a_matrix_is_impossible(tmp_path):
+    """A correlation matrix's marked cell typed above 1 ("1.35**" for "−.35**"; a slip a published table can carry) had been
+    passed over as no coefficient at all; among three or more marked correlations under the variables' numbers it is read
+    now, and found impossible. Numbers: pingouin's corr of its pairwise_corr data (N = 500); the slip is ours."""
+    import pingouin as pg
+
+    data = pg.read_dataset("pairwise_corr")
+    names = ["Neuroticism", "Extraversion", "Agreeableness", "Conscientiousness"]
+    rows = []
+    for i, name in enumerate(names, start=1):
+        cells = []
+        for other in names[: i - 1]:
+            result = pg.corr(data[name], data[other])
+            r, p = result["r"].iloc[0], result["p_val"].iloc[0]
+            cells.append(f"{r:.2f}".replace("0.", ".") + ("**" if p < .01 else "*" if p < .05 else ""))
+        rows.append([f"{i}. {name}"] + cells + [""] * (len(names) - 1 - len(cells)))
+    table = _pipe_table("Table 1. Correlations (N = 500)", ["Variable", "1", "2", "3"], [r[:4] for r in rows]) + "\nNote. * p < .05. ** p < .01.\n"
+    marked = table.count("**")
+    assert rows[1][1] == "-.35**" and marked >= 4
+    path = tmp_path / "m.md"
+    path.write_text(table, encoding="utf-8")
+    assert len(audit_file(path)) >= 4 and all(e.codes == [] for e in audit_file(path))
+    path.write_text(table.replace("-.35**", "1.35**"), encoding="utf-8")
+    assert [e.codes for e in audit_file(path) if e.codes] == [["impossible-r"]]

@@ -1156,6 +1156,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
                 cells = [(b, c, (sides["above"] if numbers[c] > labelled[b] else sides["below"]) if sides else total)
                          for b in body if b in labelled for c in numbers if c in rows[b] and numbers[c] != labelled[b]]
             break
+    matrix = bool(cells)  # the variables against each other, under their numbers (not any table its caption calls correlations)
     if not cells and _CORRELATIONS_SAID.search(caption):
         block = total
         for r in order[1:]:
@@ -1170,6 +1171,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
     below = dict(zip(order, order[1:]))  # each row's next: a coefficient's interval in brackets under it (APA 7's layout)
     levels = {float(m.group(1)) for m in _LEVEL_SAID.finditer(caption)}
     level = levels.pop() / 100 if len(levels) == 1 and 50 <= next(iter(levels)) < 100 else None
+    beyond: list[TableStatistic] = []  # marked numbers above 1 in magnitude: a correlation's slip where the rest are correlations
     for r, c, n in cells:
         if n is None or n < 4:
             continue
@@ -1178,7 +1180,7 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
         if m is None or m.group("op") or not m.group("marks") or m.group("marks").translate(ONE_STAR) not in stars or not _DECIMALS.search(m.group("num")):
             continue
         value = _patterns(mark).to_number(m.group("num"), m.start("num"))
-        if value is None or abs(value.value) > 1:
+        if value is None:
             continue
         op, bound = stars[m.group("marks").translate(ONE_STAR)]
         p = PValue(op, bound, value.end, value.end, value.end, "")
@@ -1194,10 +1196,13 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
                 rep.ci = Interval(level, low, high, low.start, high.end)  # type: ignore[arg-type]
                 rep.text += f", {level * 100:g}% CI [{low.text}, {high.text}]" if level is not None else f" [{low.text}, {high.text}]"
         where = "the note, for its side of the diagonal" if by_side else "its block's row" if n != total else "the caption or note"
-        found.append(TableStatistic(unit, rep, None, f"read from the table's row: a correlation coefficient with its "
-                                                     f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text}, as the table defines it), df = N − 2 "
-                                                     f"(N = {n} in {where})" + (", its interval in the row below" if rep.ci is not None else "")))
-    return found
+        (beyond if abs(value.value) > 1 else found).append(
+            TableStatistic(unit, rep, None, f"read from the table's row: a correlation coefficient with its "
+                                            f"{m.group('marks')} ({m.group('marks')}p {op} {bound.text}, as the table defines it), df = N − 2 "
+                                            f"(N = {n} in {where})" + (", its interval in the row below" if rep.ci is not None else "")))
+    # (a marked number above 1 among three or more marked correlations is one of them typed wrong, "1.45**" for ".45**"; in a
+    # table of other numbers — covariances — it is not read)
+    return found + beyond if matrix and len(found) >= 3 and len(beyond) < len(found) / 2 else found
 
 
 # SPSS's Test Statistics tables lay a test out down a column, a row for each of its parts: the Mann–Whitney and Wilcoxon
