@@ -568,7 +568,10 @@ def unlevelled(rep: Reported, text: str) -> list[Finding]:
     """An interval typed without its level ("d = 0.68 [0.04, 1.31]") where the paragraph, ``text``, names no level
     before it: the reader cannot tell a 95% interval from a 90% one (in a table the head or note names it; the report
     asks no more where an earlier paragraph names one, "95% CIs are given in brackets")."""
-    bare = [ci for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None and ci.level is None]
+    bare = [rep.ci] if rep.ci is not None and rep.ci.level is None else []
+    for e in rep.effects:  # (a loop, not a list built per statistic: it is asked of every statistic of a paragraph)
+        if e.ci is not None and e.ci.level is None:
+            bare.append(e.ci)
     if not bare or _LEVEL_NAMED.search(text, 0, bare[0].start) is not None:
         return []
     return [Finding("ci-level", "State the interval's level, as in 95% CI [a, b]: the text names none before it.",

@@ -235,8 +235,6 @@ _EFFECT_NAMES = [
     (r"[Δ∆]\s?R\s?(?:[²2]|\^2)", "delta_R2"),
     (r"R(?<![\w]R)\s?(?:[²2]|\^2|[- ][Ss]quared|[- ][Ss]quare(?=\s?[Cc]hange))(?:\s?[Cc]hange)?", "R2"),
     (r"β|b(?<![\w]b)eta", "beta"),
-    # a mediation's indirect effect, a·b, with its (bootstrap) interval: inside it
-    (r"a(?<![\w]a)(?:b|×b|·b|\*b)(?![\w])", "ab"),
     # Cliff's dominance statistic (Cliff, 1993: d the sample's, δ the population's), between −1 and 1: not Cohen's d
     (r"C(?<![\w]C)liff(?:['’]s)?\s+(?:d|δ|delta)(?![\w])", "cliff_d"),
     (r"d(?<![\w]d)_?z", "d_z"),
@@ -275,6 +273,9 @@ _RATIOS = [
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
 _CORRELATIONS = frozenset({"r", "rs", "tau_b"})
+# a mediation's indirect effect, a·b, with its (bootstrap) interval: inside it — a pattern of its own, searched only where a
+# clause has an "ab" or "a×b" (in the effect sizes' pattern its "a" would be tried at every "a" of the prose)
+_INDIRECT = (r"a(?<![\w]a)(?:b|×b|·b|\*b)(?![\w])", "ab")
 # a structural equation model's fit indices, which a χ² test of fit is reported with (practice)
 _FIT_INDEX = re.compile(r"\b(?:CFI|TLI|NNFI|RMSEA|SRMR|GFI|AGFI|NFI|IFI|AIC|BIC|WRMR)\b")
 # where a ratio's (or a difference's) name ends: every name in _RATIOS ends so (the lookbehinds its patterns start from)
@@ -326,6 +327,7 @@ class _Patterns:
             rf"\s*[:=,]?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?\s*[)\]]")
         self.ratio_ci = re.compile(rf"\s*,\s*(?P<a>{num})\s*(?:–|—|-|to)\s*(?P<b>{num})(?![\d.,]?\d|\s?%)")  # (no brackets: a ratio's only)
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
+        self.indirect = re.compile(rf"(?P<name>{_INDIRECT[0]})\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
         # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
         self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
@@ -452,7 +454,7 @@ _NAMED_FIRST = [
     (r"ω\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)|ωp\s?[²2]|ω_p\^?2|omega\s?(?:[²2]|\^2)\s?(?:p|_p)|partial\s+(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2_p"),
     (r"R\s?(?:[²2]|\^2|[- ][Ss]quared?)\s?[Cc]hange", "delta_R2"),
 ]
-_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _RATIOS + _NAMED_FIRST + _EFFECT_NAMES]
+_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _RATIOS + _NAMED_FIRST + _EFFECT_NAMES + [_INDIRECT]]
 
 
 @functools.lru_cache(maxsize=4096)  # likewise its effect names: each tried against the patterns once
@@ -771,6 +773,9 @@ _NUMBERED_SIZES = re.compile(r"n(?<![\w]n)\s?[1₁]\s*=\s*(?:n\s?[2₂]\s*=\s*(?
                              r"n\s?[2₂]\s*=\s*(?P<n2>\d{1,6})(?![\d.,]\d))")
 
 
+_NUMBERED_TYPED = ("n1", "n₁", "n 1", "n ₁", "n\u00a01")  # what _NUMBERED_SIZES must find at its start (substring tests: a fast scan)
+
+
 def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int, int] | None:
     """The two group sizes (``n = 40`` … ``n = 38``) the sentence gives before
     a statistic, when it gives exactly two; one given for each group (``n = 20
@@ -778,7 +783,7 @@ def group_sizes(text: str, rep: Reported, decimal_mark: str = ".") -> tuple[int,
     anywhere in its sentence (``n1 = 15, n2 = 12``, ``n1 = n2 = 8``)."""
     pat = _patterns(decimal_mark)
     index = _index(pat, text)
-    if "1" in text or "₁" in text:  # (the subscripts' forms: looked for only where the sentence can hold one)
+    if any(typed in text for typed in _NUMBERED_TYPED):  # (the subscripts' forms: looked for only where the text holds one)
         start = _sentence_start(pat, text, 0, rep.start)
         k = bisect.bisect_left(index.ends, rep.end)
         m = _NUMBERED_SIZES.search(text, start, index.ends[k] if k < len(index.ends) else len(text))
@@ -883,6 +888,11 @@ def _rare_words(text: str) -> bool:
             or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 
+def _indirect_in(text: str, start: int, end: int) -> bool:
+    """Whether text[start:end] may hold a mediation's indirect effect, "ab", "a×b", "a·b" or "a*b" (substring searches)."""
+    return text.find("ab", start, end) >= 0 or text.find("×b", start, end) >= 0 or text.find("·b", start, end) >= 0 or text.find("a*b", start, end) >= 0
+
+
 def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
     """Whether text[start:end] may hold a p, an effect size or a descriptive: an operator, "ns", a ratio's name or a
     colon after "value" (plain searches for the words: a pattern of common letters would slow every gap's scan)."""
@@ -918,7 +928,8 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
     if not _anything_in(text, start, end, rare):
         return []
     ratios = _ratios_in(text, start, end, rare)
-    following = {regex: regex.search(text, start, end) for regex in ((pat.p, pat.effect, pat.ratio) if ratios else (pat.p, pat.effect))}
+    searched = (pat.p, pat.effect) + ((pat.ratio,) if ratios else ()) + ((pat.indirect,) if _indirect_in(text, start, end) else ())
+    following = {regex: regex.search(text, start, end) for regex in searched}
     out: list[Reported] = []
     while start < end:
         for regex, m in following.items():
@@ -1044,6 +1055,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     ratios = _ratios_in(text, start, end, rare)
     for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
                                 ("effect", pat.ratio, ratios),
+                                ("effect", pat.indirect, equals and _indirect_in(text, start, end)),
                                 ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
@@ -1115,7 +1127,8 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                 continue
             differences = differences or name == "MD"
             ci = _labelled_interval(pat, m) if m.re is pat.ratio and m.group("rlev") is not None else None
-            if ci is None and name not in _DESCRIPTIVE:
+            after = text[number.end : number.end + 2]  # (an interval right after the number opens there: "[", "(", or a ratio's ",")
+            if ci is None and ("[" in after or "(" in after or ("," in after and m.re is pat.ratio)) and name not in _DESCRIPTIVE:
                 ci = _bare_interval(pat, text, number.end, end, ratio=m.re is pat.ratio and name != "MD")
                 if ci is not None:
                     covered = max(covered, ci.end)

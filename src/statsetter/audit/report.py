@@ -194,6 +194,7 @@ def _long_number(text: str) -> "re.Match[str] | None":
 # "ns", "n.s." or "n. s." as the parser reads a p (a word of its own), more loosely: a paragraph without a digit is read only
 # when it has one (not for every "sessions" or "conditions" of the prose, which had sent most digitless paragraphs to the parser)
 _NS = re.compile(r"n(?<![\w.]n)\.?\s?s(?!\w)")
+_SIZE_TYPED = re.compile(r"[nN](?:\s?[12₁₂])?\s*[=¼]")  # an n, n₁ or n₂ and its "=": a group size may be typed
 _SIZE_TOTAL = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,6})(?![\d.,]\d)")  # the literal first: the engine's fast scan
 
 
@@ -481,7 +482,7 @@ def _audit_units(
                         findings += bare
             if local.symbol == "t" and local.effects:
                 findings += effect_from_t(local, group_sizes(unit.text, local, mark))
-            elif local.symbol == "U":
+            elif local.symbol == "U" and _SIZE_TYPED.search(unit.text) is not None:  # (group sizes only where an n is typed)
                 findings += rank_sum_bound(local, group_sizes(unit.text, local, mark))
             verdict = ns_after(unit.text, local)
             if verdict is not None:  # "p = .012, n.s.": the author's verdict beside the p

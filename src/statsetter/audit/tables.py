@@ -273,6 +273,7 @@ class Reading:
 # model's t (ANCOVA, regression, adjusted for covariates) has its residual df, which no group size gives
 _PAIRED_SAID = re.compile(r"(?i)\bpaired|(?<!in)dependent[- ]samples?|\brepeated[- ]measures?|\bwithin[- ]subjects?|\brelated[- ]samples?")
 _MODEL_SAID = re.compile(r"(?i)\bANCOVA|\bregression|\bmixed[- ]model|\blinear[- ]model|\bGLM\b|\bmultilevel|\bcovariates?\b|\badjusted")
+_DESIGN_SAID = re.compile(f"{_PAIRED_SAID.pattern}|{_MODEL_SAID.pattern[4:]}", re.IGNORECASE)  # either (the search asked first)
 
 
 def design_readings(symbol: str, head: str, said: str, groups: Sequence[int], total: int | None, where: str,
@@ -282,11 +283,13 @@ def design_readings(symbol: str, head: str, said: str, groups: Sequence[int], to
     given (or N − 1). None where neither names one. ``guessed``: the sizes are not given with the statistic."""
     if symbol != "t":
         return None
-    if _MODEL_SAID.search(head):
+    design = _DESIGN_SAID.search(head)  # (one pass over the head: most name neither)
+    if design is not None and _MODEL_SAID.search(head):
         return ()
-    if not _PAIRED_SAID.search(head) and (_PAIRED_SAID.search(said) is None or _MODEL_SAID.search(said) is not None):
+    paired = design is not None and _PAIRED_SAID.search(head) is not None
+    if not paired and (not said or _PAIRED_SAID.search(said) is None or _MODEL_SAID.search(said) is not None):
         return None
-    named = head_is if _PAIRED_SAID.search(head) else "the caption or note"
+    named = head_is if paired else "the caption or note"
     sizes = list(dict.fromkeys(n for n in groups if n >= 2)) or ([total] if total is not None and total >= 2 else [])
     return tuple(Reading((n - 1.0,), f"df = {n} − 1 (a paired t, as {named} says; n {where})", guessed=guessed) for n in sizes)
 
@@ -1257,7 +1260,7 @@ def _transposed_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[n
     for i, r in enumerate(order):
         row = rows[r]
         label = row[min(row)][0].text
-        if _role(label) != "chi2":
+        if label.lstrip()[:1] not in "χΧxXcC" or _role(label) != "chi2":  # (a χ²'s name starts so: the role asked of those only)
             continue
         with_df = _DF_IN_HEAD.search(_head_text(label)) is not None
         below = [rows[k] for k in order[i + 1 : i + 3]]
