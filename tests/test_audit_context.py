@@ -2674,3 +2674,30 @@ def test_a_marked_correlation_above_one_in_a_matrix_is_impossible(tmp_path):
     assert len(audit_file(path)) >= 4 and all(e.codes == [] for e in audit_file(path))
     path.write_text(table.replace("-.35**", "1.35**"), encoding="utf-8")
     assert [e.codes for e in audit_file(path) if e.codes] == [["impossible-r"]]
+
+
+# Environmental Health and Preventive Medicine 2021 (doi:10.1186/s12199-021-00968-8), Table 2: a logistic model's
+# "β-coefficient | OR | 95% CI" without an SE column
+_EHPM_TABLE2 = """Table 2. Factors associated with the outcome
+
+| Factor | Subjects | Outcome | (%) | β-coefficient | OR | 95% CI |
+|---|---|---|---|---|---|---|
+| BMI ≥22.6 | 688 | 41 | (6.0) | −0.81 | 0.44 | 0.28–0.70 |
+| Systolic blood pressure ≥156 mm Hg | 136 | 23 | (16.9) | 1.19 | 3.30 | 1.88–5.79 |
+| ALT ≥35.0 U/ml | 82 | 11 | (13.4) | 0.77 | 2.16 | 1.03–4.52 |
+| Stroke | 34 | 9 | (26.5) | 1.57 | 4.79 | 1.92–11.94 |
+| Daily sleeping ≥8 h | 265 | 29 | (10.9) | 0.48 | 1.62 | 0.99–2.65 |
+"""
+
+
+def test_an_odds_ratio_is_held_to_exp_beta_without_an_se_column(tmp_path):
+    """A "β-coefficient" head (hyphened) had not been read as β, and an odds ratio beside a logistic B without an SE column
+    was not held to exp(B): the published table fits (exp(1.57) = 4.81 prints 4.79 within β's rounding), an OR of 2.61
+    beside β = 0.77 (exp: 2.16; a mutation of ours) is found."""
+    path = tmp_path / "t2.md"
+    path.write_text(_EHPM_TABLE2, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 5 and all(e.codes == [] for e in entries)
+    path.write_text(_EHPM_TABLE2.replace("| 0.77 | 2.16 |", "| 0.77 | 2.61 |"), encoding="utf-8")
+    (bad,) = [e for e in audit_file(path) if e.codes]
+    assert bad.codes == ["coefficient-does-not-fit"] and "exp(B)" in bad.message

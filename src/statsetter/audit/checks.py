@@ -1103,6 +1103,8 @@ def coefficient_p(rep: Reported, coefficient: "Ratio | None", alpha: float) -> l
     b, se = coefficient
     odds = _odds_fit(rep, b)  # (and an odds ratio beside it against exp(B))
     reported = reported_p_range(rep, alpha) if rep.p is not None and not rep.p.adjusted else None
+    if se is None:  # an odds ratio's B without its SE ("β | OR | 95% CI"): exp(B) alone
+        return odds
     se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
     if reported is None or se_low <= 0:
         return odds

@@ -48,7 +48,7 @@ _ROLES = (
     # an interval in one column, "−7.48, −4.53" or "[0.15, 0.31]" under "95% CI" (of the nearest estimate to its left)
     (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|odds\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
-    (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:\s+(?:coefficients?|weights?))?(?:\s*\(\s*standardi[sz]ed\s*\))?"), "beta"),
+    (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:[\s-](?:coefficients?|weights?))?(?:\s*\(\s*standardi[sz]ed\s*\))?"), "beta"),
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
     # and statsmodels': Coef., Std. Err., coef, std err)
     (re.compile(r"B|b|(?i:(?:estimated\s+)?(?:regression\s+)?(?:estimates?|est\.?|coef\.?|coefficients?))"), "B"),
@@ -697,7 +697,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
         how += ", the p column" if p is not None else ""
         # (an odds ratio's row: its B and SE too — not where the ratio itself starts the row: "OR | SE | 95% CI | p", as
         # Stata's logistic prints it, has no B, and its SE may be the ratio's own)
-        coefficient = (estimate, se) if se is not None and roles[k] != "expB" else None
+        coefficient = (estimate, se) if roles[k] != "expB" and (se is not None or rep.effects) else None  # (an odds ratio's B alone: exp(B))
         out.append(TableStatistic(unit, rep, None, f"read from the table's row: {how} (no test column)", (), coefficient))
     return out
 
