@@ -888,9 +888,16 @@ def _rare_words(text: str) -> bool:
             or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 
+_INDIRECT_TYPED = re.compile(r"a(?<![\w]a)(?:b|×b|·b|\*b)\s*[=¼]")
+_LAST_INDIRECT: list = [None, False]  # the last paragraph asked, and whether it holds an indirect effect's name and "="
+
+
 def _indirect_in(text: str, start: int, end: int) -> bool:
-    """Whether text[start:end] may hold a mediation's indirect effect, "ab", "a×b", "a·b" or "a*b" (substring searches)."""
-    return text.find("ab", start, end) >= 0 or text.find("×b", start, end) >= 0 or text.find("·b", start, end) >= 0 or text.find("a*b", start, end) >= 0
+    """Whether text[start:end] may hold a mediation's indirect effect, "ab = ", "a×b = " (asked of the paragraph once:
+    most hold none, and every clause of it is asked)."""
+    if _LAST_INDIRECT[0] is not text:
+        _LAST_INDIRECT[0], _LAST_INDIRECT[1] = text, _INDIRECT_TYPED.search(text) is not None
+    return _LAST_INDIRECT[1] and _INDIRECT_TYPED.search(text, start, end) is not None
 
 
 def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
