@@ -16,7 +16,7 @@ import functools
 import math
 import re
 from dataclasses import dataclass, replace
-from typing import Callable, Sequence
+from typing import TYPE_CHECKING, Callable, Sequence
 
 from ..errors import MissingExtra
 from ..formulas import hedges_j
@@ -26,6 +26,9 @@ from ..style.numbers import Numbers, numbers_for
 from ..style.profile import Style
 from .parsing import Effect, Number, Reported, _remembered, subscript
 from .parsing import Interval as TypedInterval
+
+if TYPE_CHECKING:
+    from .tables import Squares  # (an ANOVA row's SS, df, MS and its error row's, as a table gives them)
 
 # code: (what it means, the docs/reporting-rules.md rule and its source)
 CODES: dict[str, tuple[str, str]] = {
@@ -1066,7 +1069,7 @@ def _between(low: float, high: float, spec: str) -> str:
     return a if a == b else f"{a} to {b}"
 
 
-def squares_fit(rep: Reported, squares: "tuple[Number | None, Number | None, Number | None, Number | None, Number | None, Number | None, bool]") -> list[Finding]:
+def squares_fit(rep: Reported, squares: "Squares") -> list[Finding]:
     """An ANOVA table's row against the definitions of its columns: MS = SS / df for the effect's row and (the first time
     it serves an effect) its error row, and F = MS / MS error — each number standing for what its printed digits
     allow. An MS that is not SS / df is an error; an F that is not MS / MS error a warning: a random factor's F may

@@ -888,7 +888,7 @@ def _rare_words(text: str) -> bool:
             or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 
-_INDIRECT_TYPED = re.compile(r"a(?<![\w]a)(?:b|×b|·b|\*b)\s*[=¼]")
+_INDIRECT_TYPED = re.compile(_INDIRECT[0] + r"\s*[=¼]")  # (its name and "=": asked of a paragraph, then of a clause)
 _LAST_INDIRECT: list = [None, False]  # the last paragraph asked, and whether it holds an indirect effect's name and "="
 
 
