@@ -2701,3 +2701,58 @@ def test_an_odds_ratio_is_held_to_exp_beta_without_an_se_column(tmp_path):
     path.write_text(_EHPM_TABLE2.replace("| 0.77 | 2.16 |", "| 0.77 | 2.61 |"), encoding="utf-8")
     (bad,) = [e for e in audit_file(path) if e.codes]
     assert bad.codes == ["coefficient-does-not-fit"] and "exp(B)" in bad.message
+
+
+# PMC7723764 (Ann Med Surg 2020;60:680–685), Table 4: Cox models of overall survival, a crude and an adjusted hazard ratio
+# with their 95% CIs and P values. The rows' numbers are the article's; the merged first row — a label filling both stub
+# columns, as Word lays out a variable without categories — is this test's layout (practice), as is the t table after it.
+_COX_ROWS = [["Prognostic factors", "Category", "HR (95%CI)", "P value", "aHR (95%CI)", "P value"],
+             ["Race", "Black", "1.12 (1.10,1.15)", "<0.001", "0.98 (0.95,1.02)", "0.314"],
+             ["Race, Native American", None, "1.39 (1.04,1.85)", "0.024", "1.17 (0.92,1.50)", "0.196"],
+             ["Race", "Asian", "0.88 (0.80,0.97)", "0.012", "0.87 (0.79,0.97)", "0.010"]]
+
+
+def _merged_doc(path, caption, rows):
+    """A Word table whose rows with a None in their second cell have their first cell merged across the first two."""
+    d = docx.Document()
+    d.add_paragraph(caption)
+    t = d.add_table(rows=len(rows), cols=len(rows[0]))
+    for i, row in enumerate(rows):
+        for j, cell in enumerate(row):
+            t.cell(i, j).text = cell or ""
+        if row[1] is None:
+            t.cell(i, 0).merge(t.cell(i, 1)).text = row[0]
+    d.add_paragraph("Note. aHR = adjusted hazard ratio.")
+    d.save(str(path))
+    return path
+
+
+def test_a_word_row_with_a_merged_cell_is_read_by_the_grid_columns(tmp_path):
+    """A cell merged across two columns (w:gridSpan) had shifted the rest of its row one column left: the row's hazard
+    ratios went unread under the P heads, and a t table's merged row was read as "t(.004) = 38" (its df as the t, its p as
+    the df). Each cell is now placed by the grid column it starts at; its location still counts the row's cells as seen."""
+    entries = audit_file(_merged_doc(tmp_path / "cox.docx", "Table 4. Cox Regression Models for Overall Survival", _COX_ROWS))
+    merged = [e for e in entries if e.location.startswith("table 1, row 3,")]
+    assert [e.found for e in merged] == ["HR = 1.39, 95% CI [1.04, 1.85], p = 0.024", "aHR = 1.17, 95% CI [0.92, 1.50], p = 0.196"]
+    assert [e.location.split(",")[2] for e in merged] == [" cell 2", " cell 4"]  # the second and fourth cells the reader sees
+    assert len(entries) == 6 and not any(e.codes for e in entries)
+    t, df = 3.10, 38  # a t table on the same layout; p from scipy
+    rows = [["Scale", "Subscale", "t", "df", "p"], ["Anxiety", "Somatic", "2.14", "38", f"{_p2(2.14, df):.3f}".lstrip("0")],
+            ["Total", None, f"{t:.2f}", str(df), "0.300"]]  # the merged row's p is wrong: found only when the row is read right
+    found = {e.found: e for e in audit_file(_merged_doc(tmp_path / "t.docx", "Table 1. Subscales", rows))}
+    assert "p-does-not-follow" in found["t(38) = 3.10, p = 0.300"].codes
+    assert not any(k.startswith("t(.") or k.startswith("t(0.") for k in found)
+
+
+def test_a_latex_multicolumn_cell_is_read_by_the_grid_columns(tmp_path):
+    """\\multicolumn{2}{l}{…} in a tabular's row fills two columns: the cells after it are the columns' past both (they
+    had been read one column left). The rows of PMC7723764's Table 4 (above)."""
+    def row(r):
+        cells = [f"\\multicolumn{{2}}{{l}}{{{r[0]}}}"] if r[1] is None else [r[0], r[1]]
+        return " & ".join(cells + [c.replace("%", "\\%") for c in r[2:]]) + " \\\\"
+    body = "\n".join(row(r) for r in _COX_ROWS)
+    path = tmp_path / "cox.tex"
+    path.write_text(f"Table 4. Cox Regression Models for Overall Survival\n\n\\begin{{tabular}}{{llllll}}\n{body}\n\\end{{tabular}}\n")
+    entries = audit_file(path)
+    assert sum(e.found.startswith(("HR = 1.39", "aHR = 1.17, 95% CI [0.92")) for e in entries) == 2
+    assert len(entries) == 6 and not any(e.codes for e in entries)

@@ -185,7 +185,7 @@ def _top_alternatives(pattern: str) -> list[str]:
 
 
 def _by_first(patterns: "Iterable[str]") -> str:
-    """The patterns' alternatives as one alternation, those that begin with the same literal character (or escape, or
+    r"""The patterns' alternatives as one alternation, those that begin with the same literal character (or escape, or
     character class) joined under it, in their order: "d(?<![\w]d)_?z|d(?<![\w]d)" becomes "d(?:(?<![\w]d)_?z|(?<![\w]d))".
     It matches what the plain alternation matches (alternatives of different first characters never match at one
     place, and each group keeps its order), and the engine tries a position's one group instead of every alternative:

@@ -38,7 +38,8 @@ class Unit:
     part: str = "word/document.xml"
     index: int = 0  # the paragraph's position among the part's w:p elements (a text block: its first line)
     origin: tuple[Trace, ...] = ()  # how text maps back to the file's characters (markers removed); () = as is
-    cell: tuple[int, int, int] | None = None  # (table, row, column), all from 1, for a table cell's paragraph in Word
+    cell: tuple[int, int, int] | None = None  # (table, row, column), all from 1, for a table cell: its column the grid's (a merged cell
+    # spans several, and the cell after it starts past them), as a table's columns line up under their heads
     equations: tuple[tuple[int, int], ...] = ()  # (start, end) of each Word equation's text: spaced by the equation, not the author
     subscripts: tuple[tuple[int, int], ...] = ()  # (start, end) of a Word subscript run's letters ("G" of η²G): no character shows them lowered
 
@@ -271,6 +272,7 @@ def _text_units(text: str, suffix: str) -> Iterator[Unit]:
 _TABULAR = re.compile(r"\\begin\{(tabularx|tabular\*|tabular|longtable|array)\}")
 _TEX_RULES = re.compile(r"[\s\u200b]*(?:\\(?:toprule|midrule|bottomrule|hline|endhead|endfirsthead|endfoot|endlastfoot)\b"
                         r"|\\(?:cline|cmidrule)(?:\([^)]*\))?\{[^{}]*\}|\\addlinespace(?:\[[^\]]*\])?)")
+_MULTICOLUMN = re.compile(r"\\multicolumn\{(\d{1,3})\}")
 _TEX_CELL = re.compile(r"\\multicolumn\{\d+\}\{(?:[^{}]|\{[^{}]*\})*\}(?=\{)|\\begin\{tabular\}(?:\[[^\]]*\])?\{(?:[^{}]|\{(?:[^{}]|\{[^{}]*\})*\})*\}"
                        r"|\\end\{tabular\}|\\\\")
 
@@ -384,7 +386,11 @@ def _tex_table_units(block: str, line: int, table: int) -> Iterator[Unit]:
             if not any(t for _, t in texts):
                 continue
             r += 1
-            for c, (a, raw) in enumerate(texts, 1):
+            c, span = 1, 0
+            for a, raw in texts:
+                c += span
+                wide = _MULTICOLUMN.match(raw)  # a cell spanning columns: the cell after it starts past them
+                span = max(1, int(wide.group(1))) if wide is not None else 1
                 if not raw:
                     continue
                 unwrapped, outer = _cell_text(raw)
@@ -474,9 +480,11 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
             continue
         t += 1
         for r, tr in enumerate((x for x in tbl if x.tag == f"{_W}tr"), 1):
-            for c, tc in enumerate((x for x in tr if x.tag == f"{_W}tc"), 1):
+            column = 1 + _grid_count(tr.find(f"{_W}trPr/{_W}gridBefore"))  # (a row may start past the grid's first columns)
+            for k, tc in enumerate((x for x in tr if x.tag == f"{_W}tc"), 1):
                 for para in tc.iter(_P):
-                    in_cell[para] = (t, r, c)
+                    in_cell[para] = (t, r, column, k)
+                column += max(1, _grid_count(tc.find(f"{_W}tcPr/{_W}gridSpan")))  # a merged cell spans its grid columns
     body_count = 0
     for index, para in enumerate(root.iter(_P)):
         if fallback and para in fallback:
@@ -490,9 +498,15 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         if cell is None:
             location = f"{label} {body_count}"
         else:
-            t, r, c = cell
-            location = f"table {t}, row {r}, cell {c}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {c}"
-        yield Unit(location, text, spans, part, index, cell=cell, equations=equations, subscripts=lowered)
+            t, r, c, k = cell  # (the location counts the row's cells as the reader sees them; the table is read by grid column)
+            location = f"table {t}, row {r}, cell {k}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {k}"
+        yield Unit(location, text, spans, part, index, cell=cell[:3] if cell is not None else None, equations=equations, subscripts=lowered)
+
+
+def _grid_count(element) -> int:  # type: ignore[no-untyped-def]
+    """The grid columns a w:gridSpan or w:gridBefore gives (0 where there is none or its value is not a count)."""
+    value = element.get(_VAL) if element is not None else None
+    return int(value) if value is not None and value.isdigit() and len(value) < 4 else 0
 
 
 _VAL = f"{_W}val"
