@@ -2756,3 +2756,66 @@ def test_a_latex_multicolumn_cell_is_read_by_the_grid_columns(tmp_path):
     entries = audit_file(path)
     assert sum(e.found.startswith(("HR = 1.39", "aHR = 1.17, 95% CI [0.92")) for e in entries) == 2
     assert len(entries) == 6 and not any(e.codes for e in entries)
+
+
+# PMC4864252 (J Cachexia Sarcopenia Muscle, article jcsm12073), Table 2 (rows of it): hazard ratios of three models under one
+# spanner, "Hazard ratio (95% confidence interval)", each model's P beside it; Sci Rep 2022 (s41598-022-22065-8), Table 3
+# (rows of it): "HR (95% CI)" over four models, no P. Both as the articles print them; merged cells as Word makes a spanner.
+_SPANNED_HR = [["Mortality outcome", "Hazard ratio (95% confidence interval)", None, None, None, None, None],
+               ["", "Model 1a", "P", "Model 2b", "P", "Model 3c", "P"],
+               ["All participants", "2.03 (1.81–2.28)", "<.001", "1.40 (1.25–1.57)", "<.001", "1.29 (1.13–1.47)", "<.001"],
+               ["Males", "1.91 (1.63–2.24)", "<.001", "1.42 (1.21–1.67)", "<.001", "1.21 (1.01–1.44)", ".039"],
+               ["Males, cardiovascular", "1.76 (1.39–2.23)", "<.001", "1.25 (0.98–1.60)", ".071", "1.07 (0.81–1.40)", ".643"],
+               ["Females, cancer", "1.12 (0.69–1.82)", ".633", "0.86 (0.52–1.41)", ".539", "0.85 (0.48–1.50)", ".571"]]
+_SPANNED_HR_NO_P = [["Predictor", "Overall deaths, no. (%)", "HR (95% CI)", None, None, None],
+                    ["", "", "Unadjusted", "Age adjusted", "Model 1a", "Model 2b"],
+                    ["MI as continuous variable", "1596 (59.7)", "0.57 (0.48–0.67)", "0.65 (0.55–0.77)", "0.67 (0.57–0.79)", "0.69 (0.56–0.84)"],
+                    ["Q4 (> 0.08)", "374 (57.9)", "1.05 (0.93–1.19)", "1.04 (0.92–1.17)", "1.01 (0.90–1.15)", "0.97 (0.85–1.11)"],
+                    ["IQR (−0.19 to 0.08)", "750 (55.6)", "Reference", "Reference", "Reference", "Reference"],
+                    ["Q1 (≤ −0.19)", "472 (69.6)", "1.51 (1.35–1.70)", "1.37 (1.22–1.54)", "1.38 (1.23–1.55)", "1.28 (1.12–1.46)"]]
+
+
+def _spanner_doc(path, caption, rows):
+    """A Word table whose first row's ratio head is merged across the columns after it (the row's None cells)."""
+    d = docx.Document()
+    d.add_paragraph(caption)
+    t = d.add_table(rows=len(rows), cols=len(rows[0]))
+    for i, row in enumerate(rows):
+        for j, cell in enumerate(row):
+            t.cell(i, j).text = cell or ""
+    first = next(j for j, cell in enumerate(rows[0]) if cell and "95" in cell)
+    t.cell(0, first).merge(t.cell(0, len(rows[0]) - 1)).text = rows[0][first]
+    d.add_paragraph("Note. Model 1 is unadjusted.")
+    d.save(str(path))
+    return path
+
+
+def test_ratio_columns_under_a_spanner_that_names_the_ratio(tmp_path):
+    """A spanner naming the ratio and its 95% CI over the heads of several models ("Model 1a | P | Model 2b | P …") makes
+    each model's column that ratio's (adjusted where its own head says so); before, none of them was read. The P columns
+    keep their own role; a "Reference" row under the heads is data, not another header."""
+    entries = audit_file(_spanner_doc(tmp_path / "a.docx", "Table 2. Mortality", _SPANNED_HR))
+    assert len(entries) == 12 and not any(e.codes for e in entries)
+    assert "HR = 1.25, 95% CI [0.98, 1.60], p = .071" in {e.found for e in entries}
+    rows = [r[:] for r in _SPANNED_HR]
+    rows[3][6] = ".39"  # a mutated P: the interval excludes 1
+    found = {e.found: e for e in audit_file(_spanner_doc(tmp_path / "m.docx", "Table 2. Mortality", rows))}
+    assert "ci-p-disagree" in found["HR = 1.21, 95% CI [1.01, 1.44], p = .39"].codes
+    entries = audit_file(_spanner_doc(tmp_path / "b.docx", "Table 3 Mortality HRs from Cox regression by MI.", _SPANNED_HR_NO_P))
+    names = [e.found.split(" =")[0] for e in entries]
+    assert len(entries) == 12 and not any(e.codes for e in entries)
+    assert names == ["HR", "aHR", "HR", "HR"] * 3  # the "Age adjusted" column's ratios are adjusted, in every row
+    rows = [r[:] for r in _SPANNED_HR_NO_P]
+    rows[5][5] = "1.82 (1.12–1.46)"  # a mutated ratio outside its interval
+    found = {e.found: e for e in audit_file(_spanner_doc(tmp_path / "n.docx", "Table 3", rows))}
+    assert "ci-excludes-estimate" in found["HR = 1.82, 95% CI [1.12, 1.46]"].codes
+
+
+def test_a_latex_spanner_names_the_ratio_of_the_columns_it_spans(tmp_path):
+    """The same spanner as \\multicolumn{6}{c}{…} over a LaTeX tabular's model columns (PMC4864252's rows, above)."""
+    lines = ["Mortality outcome & \\multicolumn{6}{c}{Hazard ratio (95\\% confidence interval)} \\\\"]
+    lines += [" & ".join(r) + " \\\\" for r in _SPANNED_HR[1:]]
+    path = tmp_path / "t.tex"
+    path.write_text("Table 2. Mortality\n\n\\begin{tabular}{lllllll}\n" + "\n".join(lines) + "\n\\end{tabular}\n")
+    entries = audit_file(path)
+    assert len(entries) == 12 and not any(e.codes for e in entries)

@@ -42,6 +42,7 @@ class Unit:
     # spans several, and the cell after it starts past them), as a table's columns line up under their heads
     equations: tuple[tuple[int, int], ...] = ()  # (start, end) of each Word equation's text: spaced by the equation, not the author
     subscripts: tuple[tuple[int, int], ...] = ()  # (start, end) of a Word subscript run's letters ("G" of η²G): no character shows them lowered
+    columns: int = 1  # the grid columns a table cell spans (a spanner's head over the columns of several models)
 
     def source_index(self, i: int) -> int:
         """Where character ``i`` of ``text`` is in the block as written."""
@@ -401,7 +402,7 @@ def _tex_table_units(block: str, line: int, table: int) -> Iterator[Unit]:
                 row_start = breaks[k - 1] + 1 if k else 0
                 where = line + k
                 traces = (((0,), (a - row_start,)),) + ((outer,) if outer is not None else ()) + origin
-                yield Unit(f"line {where}", clean, None, "", where, traces, cell=(table, r, c))
+                yield Unit(f"line {where}", clean, None, "", where, traces, cell=(table, r, c), columns=span)
         table += 1
         at = block.find("\n", end) + 1 if block.find("\n", end) >= 0 else len(block)
     yield from _tex_piece(block, at, len(block), line)
@@ -482,9 +483,10 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         for r, tr in enumerate((x for x in tbl if x.tag == f"{_W}tr"), 1):
             column = 1 + _grid_count(tr.find(f"{_W}trPr/{_W}gridBefore"))  # (a row may start past the grid's first columns)
             for k, tc in enumerate((x for x in tr if x.tag == f"{_W}tc"), 1):
+                span = max(1, _grid_count(tc.find(f"{_W}tcPr/{_W}gridSpan")))  # a merged cell spans its grid columns
                 for para in tc.iter(_P):
-                    in_cell[para] = (t, r, column, k)
-                column += max(1, _grid_count(tc.find(f"{_W}tcPr/{_W}gridSpan")))  # a merged cell spans its grid columns
+                    in_cell[para] = (t, r, column, k, span)
+                column += span
     body_count = 0
     for index, para in enumerate(root.iter(_P)):
         if fallback and para in fallback:
@@ -498,9 +500,10 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
         if cell is None:
             location = f"{label} {body_count}"
         else:
-            t, r, c, k = cell  # (the location counts the row's cells as the reader sees them; the table is read by grid column)
+            t, r, c, k, _ = cell  # (the location counts the row's cells as the reader sees them; the table is read by grid column)
             location = f"table {t}, row {r}, cell {k}" if part == "word/document.xml" else f"{label}, table {t}, row {r}, cell {k}"
-        yield Unit(location, text, spans, part, index, cell=cell[:3] if cell is not None else None, equations=equations, subscripts=lowered)
+        yield Unit(location, text, spans, part, index, cell=cell[:3] if cell is not None else None, equations=equations, subscripts=lowered,
+                   columns=cell[4] if cell is not None else 1)
 
 
 def _grid_count(element) -> int:  # type: ignore[no-untyped-def]

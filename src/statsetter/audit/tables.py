@@ -108,7 +108,11 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 # (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
 _RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
-                         rf"|incidence\s+rate\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?c\.?i\.?s?\s*\)[a-d{_SIGNIFICANCE}]?")  # (also "95%CIs")
+                         rf"|incidence\s+rate\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)[a-d{_SIGNIFICANCE}]?")
+# (also "95%CIs", "(95% confidence interval)"); a spanner that names the ratio over the columns of several models ("Hazard ratio
+# (95% confidence interval)" over "Model 1 | P | Model 2 | P", as JCSM 2015's Table 2 lays it out): its columns' cells are that ratio
+_RATIO_SPANNER = re.compile(r"(?i)(?<![\w])(?P<name>or|hr|rr|irr|odds\s+ratios?|hazard\s+ratios?|risk\s+ratios?|relative\s+risks?"
+                            r"|incidence\s+rate\s+ratios?)\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)")
 _RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR"}
 _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
                          rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
@@ -765,11 +769,17 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     ratios_said = _RATIOS_SAID.search(f"{caption} {said}") is not None  # a table of odds, hazard or risk ratios
     note_df = _said_df(f"{caption} {said}")
     words_above: dict[int, str] = {}  # each column's words in the rows without numbers above (its head, a spanner's)
+    spanned: dict[int, str] = {}  # the ratio a spanner in the row above names, for each column it spans
     in_body = False
     for r in sorted(rows):
         row = rows[r]
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
         header = {c: None if numbers[c] is not None else _role(u.text) for c, (u, _) in row.items()}  # (a number is no head)
+        if spanned:  # a head under a ratio's spanner in the row above ("Model 1" under "Hazard ratio (95% CI)"): that ratio's column
+            for c, (u, _) in row.items():
+                if header[c] is None and numbers[c] is None and c in spanned:
+                    header[c] = _ratio_role(f"{_head_text(u.text)} {spanned[c]} (95% CI)")
+        spanned = {}
         if "effect:R_multiple" in header.values() and sum(role is not None for role in header.values()) == 1:
             header = dict.fromkeys(header)  # a lone "R" is a label (a block's, a side's), not a multiple R's head
         stat_cells = {c for c, role in header.items() if role is not None}
@@ -779,7 +789,11 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             if in_body:  # a header's rows after the body's: the heads of another block
                 words_above, in_body = {}, False
             for c, (u, _) in row.items():
-                words_above[c] = f"{words_above.get(c, '')} {u.text}"
+                spanner = _RATIO_SPANNER.search(u.text) if "95" in u.text else None
+                for k in range(c, c + u.columns):  # (a spanner's words over each column it spans)
+                    words_above[k] = f"{words_above.get(k, '')} {u.text}"
+                    if spanner is not None:
+                        spanned[k] = spanner.group("name").rstrip("sS")
         else:
             in_body = True
         if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
