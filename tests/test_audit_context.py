@@ -2713,16 +2713,19 @@ _COX_ROWS = [["Prognostic factors", "Category", "HR (95%CI)", "P value", "aHR (9
 
 
 def _merged_doc(path, caption, rows):
-    """A Word table whose rows with a None in their second cell have their first cell merged across the first two."""
+    """A Word table in which each None cell is merged into the cell before it in its row (a label across two stub
+    columns, a spanner across the columns of several models), as Word merges cells."""
     d = docx.Document()
     d.add_paragraph(caption)
     t = d.add_table(rows=len(rows), cols=len(rows[0]))
     for i, row in enumerate(rows):
         for j, cell in enumerate(row):
             t.cell(i, j).text = cell or ""
-        if row[1] is None:
-            t.cell(i, 0).merge(t.cell(i, 1)).text = row[0]
-    d.add_paragraph("Note. aHR = adjusted hazard ratio.")
+        for j in range(len(row)):
+            if row[j] is not None and j + 1 < len(row) and row[j + 1] is None:
+                last = next((k for k in range(j + 1, len(row)) if row[k] is not None), len(row)) - 1
+                t.cell(i, j).merge(t.cell(i, last)).text = row[j]
+    d.add_paragraph("Note. aHR = adjusted hazard ratio; Model 1 is unadjusted.")
     d.save(str(path))
     return path
 
@@ -2775,39 +2778,24 @@ _SPANNED_HR_NO_P = [["Predictor", "Overall deaths, no. (%)", "HR (95% CI)", None
                     ["Q1 (≤ −0.19)", "472 (69.6)", "1.51 (1.35–1.70)", "1.37 (1.22–1.54)", "1.38 (1.23–1.55)", "1.28 (1.12–1.46)"]]
 
 
-def _spanner_doc(path, caption, rows):
-    """A Word table whose first row's ratio head is merged across the columns after it (the row's None cells)."""
-    d = docx.Document()
-    d.add_paragraph(caption)
-    t = d.add_table(rows=len(rows), cols=len(rows[0]))
-    for i, row in enumerate(rows):
-        for j, cell in enumerate(row):
-            t.cell(i, j).text = cell or ""
-    first = next(j for j, cell in enumerate(rows[0]) if cell and "95" in cell)
-    t.cell(0, first).merge(t.cell(0, len(rows[0]) - 1)).text = rows[0][first]
-    d.add_paragraph("Note. Model 1 is unadjusted.")
-    d.save(str(path))
-    return path
-
-
 def test_ratio_columns_under_a_spanner_that_names_the_ratio(tmp_path):
     """A spanner naming the ratio and its 95% CI over the heads of several models ("Model 1a | P | Model 2b | P …") makes
     each model's column that ratio's (adjusted where its own head says so); before, none of them was read. The P columns
     keep their own role; a "Reference" row under the heads is data, not another header."""
-    entries = audit_file(_spanner_doc(tmp_path / "a.docx", "Table 2. Mortality", _SPANNED_HR))
+    entries = audit_file(_merged_doc(tmp_path / "a.docx", "Table 2. Mortality", _SPANNED_HR))
     assert len(entries) == 12 and not any(e.codes for e in entries)
     assert "HR = 1.25, 95% CI [0.98, 1.60], p = .071" in {e.found for e in entries}
     rows = [r[:] for r in _SPANNED_HR]
     rows[3][6] = ".39"  # a mutated P: the interval excludes 1
-    found = {e.found: e for e in audit_file(_spanner_doc(tmp_path / "m.docx", "Table 2. Mortality", rows))}
+    found = {e.found: e for e in audit_file(_merged_doc(tmp_path / "m.docx", "Table 2. Mortality", rows))}
     assert "ci-p-disagree" in found["HR = 1.21, 95% CI [1.01, 1.44], p = .39"].codes
-    entries = audit_file(_spanner_doc(tmp_path / "b.docx", "Table 3 Mortality HRs from Cox regression by MI.", _SPANNED_HR_NO_P))
+    entries = audit_file(_merged_doc(tmp_path / "b.docx", "Table 3 Mortality HRs from Cox regression by MI.", _SPANNED_HR_NO_P))
     names = [e.found.split(" =")[0] for e in entries]
     assert len(entries) == 12 and not any(e.codes for e in entries)
     assert names == ["HR", "aHR", "HR", "HR"] * 3  # the "Age adjusted" column's ratios are adjusted, in every row
     rows = [r[:] for r in _SPANNED_HR_NO_P]
     rows[5][5] = "1.82 (1.12–1.46)"  # a mutated ratio outside its interval
-    found = {e.found: e for e in audit_file(_spanner_doc(tmp_path / "n.docx", "Table 3", rows))}
+    found = {e.found: e for e in audit_file(_merged_doc(tmp_path / "n.docx", "Table 3", rows))}
     assert "ci-excludes-estimate" in found["HR = 1.82, 95% CI [1.12, 1.46]"].codes
 
 
