@@ -2807,3 +2807,35 @@ def test_a_latex_spanner_names_the_ratio_of_the_columns_it_spans(tmp_path):
     path.write_text("Table 2. Mortality\n\n\\begin{tabular}{lllllll}\n" + "\n".join(lines) + "\n\\end{tabular}\n")
     entries = audit_file(path)
     assert len(entries) == 12 and not any(e.codes for e in entries)
+
+
+# BMC Public Health 2010;10:403 (PMC2912812), Table 3 (rows of it): a multilevel model's coefficients as "β (SE)" in one cell
+# with the article's * mark, each model's p-value in the column after it; two header rows (the models, then "β (SE) | p-value")
+_BETA_SE = """Table 3. Regional models with fixed effects, random effects and standard errors for PCS in 2004
+
+| | Model 1 (baseline) | | Model 2 (+ sociodemographic variables) | | Model 3 | |
+|---|---|---|---|---|---|---|
+| | β (SE) | p-value | β (SE) | p-value | β (SE) | p-value |
+| Constant | 49.37* (0.11) | < 0.001 | 51.62* (0.17) | < 0.001 | 51.94* (0.18) | < 0.001 |
+| Age | -0.31* (0.00) | < 0.001 | -0.31* (0.00) | < 0.001 | -0.31* (0.00) | < 0.001 |
+| Male | 0.92* (0.11) | < 0.001 | 0.70* (0.11) | < 0.001 | 0.71* (0.11) | < 0.001 |
+| Migration background | | | -0.19 (0.18) | 0.296 | -0.31 (0.18) | 0.084 |
+| Unemployed | | | -0.80* (0.23) | < 0.001 | -0.73* (0.23) | 0.001 |
+| Single household | | | 0.25 (0.18) | 0.150 | 0.23 (0.18) | 0.185 |
+| Level 1 (individuals) | 57.97 (0.81) | | 57.63 (0.80) | | 57.69 (0.80) | |
+
+Notes: PCS, physical component score; β, beta coefficients; SE, standard errors. * significant at the 5% level using the Wald test.
+"""
+
+
+def test_a_beta_and_its_se_in_one_cell(tmp_path):
+    """A "β (SE)" head is read as "B (SE)" is — each coefficient with its SE, held to the p beside it — and named β as the
+    table names it; the random part's variances (no p) are not read. Before, none of the table was read."""
+    path = tmp_path / "t.md"
+    path.write_text(_BETA_SE, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 15 and not any(e.codes for e in entries)
+    assert all(e.found.startswith("β = ") for e in entries)
+    path.write_text(_BETA_SE.replace("| 0.296 |", "| 0.029 |"), encoding="utf-8")
+    (bad,) = [e for e in audit_file(path) if e.codes]
+    assert bad.codes == ["coefficient-does-not-fit"] and "β = -0.19 and SE = 0.18" in bad.message

@@ -1116,7 +1116,7 @@ def coefficient_p(rep: Reported, coefficient: "Ratio | None", alpha: float) -> l
     if _overlap(allowed, reported):
         return odds
     shown = "ns" if rep.p.op == "ns" else f"p {rep.p.op} {rep.p.number.text}"  # type: ignore[union-attr]
-    name = "mean difference" if rep.text.startswith("mean difference") else "B"
+    name = "mean difference" if rep.text.startswith("mean difference") else "β" if rep.text.startswith("β") else "B"  # (as the table names it)
     return [Finding("coefficient-does-not-fit", f"The p does not follow from {name} / SE under any df: {name} = {b.text} and SE = {se.text} give "
                                                 f"|{name} / SE| from {low:.2f} to {high:.2f}, p from {_small(allowed[0])} (a z) to {_small(allowed[1])} (a t on 1 df).",
                     f"{name} = {b.text}, SE = {se.text}, {shown}")] + odds

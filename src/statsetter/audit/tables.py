@@ -39,7 +39,7 @@ _ROLES = (
     (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "wald"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
     # a coefficient with its standard error in one cell, "0.52 (0.21)" under "B (SE)" (regression tables in psychology and
     # sociology; practice)
-    (re.compile(r"(?i)(?:b|estimate|coefficient|coef\.?)\s*\(\s*S\.?E\.?(?:\s?B)?\s*\)"), "BSE"),
+    (re.compile(r"(?i)(?:b|β|beta|estimate|coefficient|coef\.?)\s*\(\s*S\.?E\.?(?:\s?B)?\s*\)"), "BSE"),  # (also "β (SE)")
     # a coefficient (or a mean difference) with its interval in one cell, "1.9 (0.9, 2.9)" under "β Coefficient (95% CI)",
     # "−.93 (−1.38 to −.58)" under "Coefficient (Bootstrapped 95% CI)", "B [95% CI]" (health and psychology tables; practice)
     (re.compile(rf"(?i)(?:(?:un)?standardi[sz]ed\s+|regression\s+)?(?:b|β|beta|estimates?|coef\.?|coefficients?|(?:β|beta)\s+coefficients?"
@@ -640,6 +640,9 @@ def _beta_as_log_odds(rows, roles: dict[int, str], mark: str) -> dict[int, str] 
     return {c: "B" if role == "beta" else role for c, role in roles.items()} if tried >= 2 and 3 * fits >= 2 * tried else None
 
 
+_BETA_HEAD = re.compile(r"(?i)\s*(?:β|beta)\b")  # a "β (SE)" head: its coefficients are named β, as the table names them
+
+
 def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str], said: str, mark: str,  # type: ignore[no-untyped-def]
                        stars: "dict[str, tuple[str, Number]] | None" = None) -> list[TableStatistic]:
     """A model's coefficients in a table without a test column (B, SE, 95% CI, β, p: health and psychology journals'
@@ -689,7 +692,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
                 continue
             diff = roles[k] == "diff" or _MEAN_DIFFERENCE.match(heads.get(k, "")) is not None
             name = ("mean difference" if _MEAN_DIFF_NAMED.match(heads.get(k, "")) or roles[k] == "diff" else "difference") if diff \
-                else "β" if roles[k] == "beta" else "B"
+                else "β" if roles[k] == "beta" or _BETA_HEAD.match(heads.get(k, "")) else "B"
             rep = Reported(None, "", estimate.start, estimate.start, estimate.end, p=_p_after(p, estimate.end))
             rep.text = f"{name} = {estimate.text}" + (f", SE = {se.text}" if se is not None else "")
             if interval is not None:
