@@ -494,3 +494,21 @@ def test_one_group_size_given_for_each_group_is_two():
         assert "p-does-not-follow" in e.codes, said
     (e,) = audit_units([Unit("case", "Participants (n = 20) improved, t = 2.10, p = .049.")])  # one n, not said per group
     assert e.codes == [] and "over every df it may have" in e.checked  # (no df from the one n)
+
+
+def test_statas_prob_heads_a_p_not_an_f():
+    """Stata heads a model test's p "Prob > F" and "Prob > chi2" (its regress output on the hsbdemo data, as
+    philender.com/courses/linearmodels/notes1/publish.html reprints it: "F( 5, 194) = 42.68 … Prob > F = 0.0000"); pasted
+    into a thesis, the F inside it had been read as a statistic "F = 0.0000" with style findings of its own, and the
+    model's F had no p. Now the pair is one p (a zero: p-zero), the F's own; a wrong p beside its F is still found."""
+    text = "The model fitted well, F(5, 194) = 42.68, Prob > F = 0.0000, R-squared = 0.5238."
+    (rep,) = [r for r in find_statistics(text) if r.symbol is not None]
+    assert rep.symbol == "F" and rep.value.value == 42.68 and rep.p.op == "=" and rep.p.number.value == 0
+    (entry,) = audit_units([Unit("line 1", text)])
+    assert "p-zero" in entry.codes and entry.suggestion.startswith("F(5, 194) = 42.68, p < .001")
+    wrong = f"LR chi2(3) = 7.42, Prob > chi2 = {C / 10:.4f}"  # a tenth of the χ²'s own p
+    (entry,) = audit_units([Unit("line 1", wrong)])
+    assert entry.found.startswith("chi2(3) = 7.42") and "p-does-not-follow" in entry.codes
+    right = f"LR chi2(3) = 7.42, Prob > chi2 = {C:.4f}"
+    (entry,) = audit_units([Unit("line 1", right)])
+    assert "p-does-not-follow" not in entry.codes and "leading-zero" in entry.codes  # (APA: a p has no leading zero)

@@ -289,6 +289,12 @@ _RATIO_WITHOUT_EQUALS = rf"(?:{_AFTER_RATIO}|(?<=R[)\]]))(?:\s*+[:,]|\s++(?:of|w
 _RATIO_LABELLED = rf"{_AFTER_RATIO}\s*+[(\[]\s*+(?P<rlev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+C\.?I\.?\s*+[)\]]\s*+(?:[=:,¼]|is\b)?"
 
 
+# Stata's p of a model's test as its output heads it, "Prob > F = 0.0000", "Prob > chi2 = 0.0000" (pasted into theses;
+# practice): after the "P", the rest of its name — a p, and the F or χ² in it no statistic of its own
+_STATA_P = r"(?<=P)rob\s*+>\s*+(?:F|chi2|χ2|χ²)"
+_STATA_HEAD = re.compile(r"Prob\s*>\s*$")
+
+
 class _Patterns:
     def __init__(self, mark: str) -> None:
         num = _number_pattern(mark)
@@ -302,7 +308,7 @@ class _Patterns:
         )
         # not after a mark of significance ("*", "†", "‡", "§", "^", or one and a space): "*p < .05. **p < .01. †p < .10." is a
         # table's note defining its marks, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?)?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{value}{_EXPONENT}?)"
+        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?|{_STATA_P})?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{value}{_EXPONENT}?)"
                             r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
         # p < .01", "each p-value ≤ .01"; or their p's listed in order, "ps = .03 and .04" (an "=" only before a list)
@@ -555,6 +561,8 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
     """Every statistic in ``text``, in order."""
     pat = _patterns(decimal_mark)
     heads = [m for m in pat.head.finditer(text) if symbol_of(m.group("sym")) is not None and not _an_effect(m)]
+    if "Prob" in text:  # (Stata's "Prob > F = 0.0000": a p, its F no head)
+        heads = [m for m in heads if _STATA_HEAD.search(text, max(0, m.start() - 8), m.start()) is None]
     boundary = pat.boundary_in(text)
     rare = _rare_words(text)
     out: list[Reported] = []

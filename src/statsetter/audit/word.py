@@ -330,6 +330,8 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
                if subscript(d)]  # "Mage" restyled as M with "age" below
     places += [(e.symbol_start, e.symbol_start + len(e.symbol_text), frozenset(w.lower() for w in _WORD.findall(e.symbol_text)))
                for e in rep.effects if e.name not in RATIOS]  # an effect size's name as typed ("ηG²", "generalized η²"): the style's symbol stands for it
+    if rep.p is not None:  # Stata's "Prob > F = 0.0000": the p's own name
+        places.append((rep.p.start, rep.p.end, _P_WORDS))
     if rep.df and rep.value is not None and rep.df[0].start > rep.value.end:  # "F-statistic: 4.51 on 2 and 97 DF"
         places.append((rep.value.end, rep.df[-1].end, _DF_WORDS))
     for m in _WORD.finditer(old):
@@ -347,6 +349,7 @@ _LABEL_WORDS = frozenset({"for", "of", "the", "mean", "difference"})
 _RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj", "or", "hr", "rr", "irr"})  # ("adjusted OR": aOR)
 _SYMBOL_WORDS = frozenset({"statistic", "value"})
 _DF_WORDS = frozenset({"on", "and", "with", "df"})
+_P_WORDS = frozenset({"prob", "f", "chi2"})
 
 
 def _value(token: str, mark: str) -> tuple[float, int]:
