@@ -512,3 +512,32 @@ def test_statas_prob_heads_a_p_not_an_f():
     right = f"LR chi2(3) = 7.42, Prob > chi2 = {C:.4f}"
     (entry,) = audit_units([Unit("line 1", right)])
     assert "p-does-not-follow" not in entry.codes and "leading-zero" in entry.codes  # (APA: a p has no leading zero)
+
+
+def test_a_reliabilitys_alpha_and_a_significance_level():
+    """Cronbach's α is read (it had not been): a reliability cannot exceed 1, so APA 7 writes it without a leading zero
+    (§6.36) and AMA 11 with one (memory); the significance level α likewise has none in APA. The typing "Cronbach’s α =
+    0.77" is Evid Based Complement Alternat Med 2013, article 152727 (its abstract); the values are pingouin's
+    cronbach_alpha on its bundled "cronbach_alpha" data (α = 0.59, 95% CI [0.195, 0.84]). An α alone is a reliability
+    only where the paragraph speaks of reliability, scales or items and no α in it exceeds 1 (an item response model's
+    discrimination α may), and a level only at .10 or below where it speaks of significance."""
+    import pingouin as pg
+
+    data = pg.read_dataset("cronbach_alpha")
+    alpha, (low, high) = pg.cronbach_alpha(data.pivot(index="Subj", columns="Items", values="Scores"))
+    typed = "The exploratory factor analysis yielded a one-factor solution explaining 51.96% of total variance (Cronbach’s α = 0.77)."
+    (entry,) = audit_units([Unit("line 1", typed)])
+    assert entry.found == "Cronbach’s α = 0.77" and entry.codes == ["leading-zero"] and entry.suggestion == "Cronbach’s α = .77"
+    ours = f"The ten items formed a scale of modest reliability, Cronbach's alpha = {alpha:.2f}, 95% CI [{low:.2f}, {high:.2f}]."
+    (entry,) = audit_units([Unit("line 1", ours)])
+    assert entry.codes == ["leading-zero"] and entry.suggestion == f"Cronbach's α = {alpha:.2f}, 95% CI [{low:.2f}, {high:.2f}]".replace("0.", ".")
+    (entry,) = audit_units([Unit("line 1", ours.replace(f"{high:.2f}]", "0.50]"))])  # an interval that leaves out its α
+    assert "ci-excludes-estimate" in entry.codes
+    (entry,) = audit_units([Unit("line 1", ours.replace("0.", "."))], style="ama11")
+    assert entry.codes == ["missing-leading-zero"]
+    (entry,) = audit_units([Unit("line 1", "The internal consistency of the scale was adequate (α = 1.19).".replace("α", "Cronbach's α"))])
+    assert "impossible" in " ".join(entry.codes)
+    level = [e for e in audit_units([Unit("line 1", "Significance was set at α = .05, and at alpha = 0.001 for the secondary tests.")])]
+    assert [e.codes for e in level] == [[], ["leading-zero"]] and level[1].suggestion == ""
+    assert audit_units([Unit("line 1", "The discrimination of the items ranged from α = 0.8 to α = 2.1.")]) == []
+    assert audit_units([Unit("line 1", "The smoothing weight was α = 0.3 throughout.")]) == []

@@ -116,7 +116,8 @@ FORMER_CODES: dict[str, str] = {
     "effect-does-not-fit": "effect-inconsistent", "d-does-not-fit": "d-inconsistent",
 }
 
-_BOUNDED_EFFECTS = {"V": (0, 1), "cliff_d": (-1, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "omega2_p": (-1, 1), "ICC": (-1, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1)}
+_BOUNDED_EFFECTS = {"V": (0, 1), "cliff_d": (-1, 1), "kendall_w": (0, 1), "phi": (-1, 1), "eta2": (0, 1), "eta2_p": (0, 1), "eta2_g": (0, 1), "omega2_p": (-1, 1), "ICC": (-1, 1), "R2": (0, 1), "delta_R2": (0, 1), "R2_adj": (-1, 1), "omega2": (-1, 1),
+                    "alpha": (-math.inf, 1), "alpha_level": (0, 1)}  # (Cronbach's α falls below 0 where items disagree; never above 1)
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
 RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0
@@ -428,7 +429,8 @@ def impossible(rep: Reported) -> list[Finding]:
     for e in rep.effects:
         bounds = _BOUNDED_EFFECTS.get(e.name)
         if bounds and not bounds[0] <= e.number.value <= bounds[1]:
-            out.append(Finding("impossible-value", f"{e.symbol_text} must lie between {bounds[0]} and {bounds[1]}.", e.number.text))
+            said = f"cannot exceed {bounds[1]}" if bounds[0] == -math.inf else f"must lie between {bounds[0]} and {bounds[1]}"
+            out.append(Finding("impossible-value", f"{e.symbol_text} {said}.", e.number.text))
         if e.name in RATIOS and (e.number.value <= 0 or (e.ci is not None and e.ci.low.value < 0)):
             out.append(Finding("impossible-value", f"A ratio ({e.symbol_text}) and its CI lie above 0.", e.number.text))
     for e in rep.descriptives:
@@ -624,8 +626,8 @@ def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> li
         if rep.value.decimals != want:
             wrong.append(f"{rep.value.text} ({want} wanted)")
     for e in rep.effects:
-        if e.name == "MD":  # a difference in the measure's own units: its decimals are the measure's
-            continue
+        if e.name in ("MD", "alpha_level"):  # a difference in the measure's own units: its decimals are the measure's; a significance
+            continue  # level is as the design chose it (α = .001 is no rounding)
         want = num.decimals_for(e.name)
         if e.number.decimals != want:
             wrong.append(f"{e.number.text} ({want} wanted)")

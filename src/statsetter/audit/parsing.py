@@ -237,6 +237,11 @@ _EFFECT_NAMES = [
     (r"β|b(?<![\w]b)eta", "beta"),
     # Cliff's dominance statistic (Cliff, 1993: d the sample's, δ the population's), between −1 and 1: not Cohen's d
     (r"C(?<![\w]C)liff(?:['’]s)?\s+(?:d|δ|delta)(?![\w])", "cliff_d"),
+    # a scale's reliability, Cronbach's α (named), and α alone: a reliability or a significance level, told apart by its value
+    # (`_read_clause`); "α level", "alpha-level" the level
+    (r"C(?<![\w]C)ronbach(?:['’]s)?\s+(?:α|alpha)(?![\w])", "alpha"),
+    (r"α[- ]?level|a(?<![\w]a)lpha[- ]level", "alpha_level"),
+    (r"α(?![\w])|a(?<![\w]a)lpha(?![\w])", "alpha_bare"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
     (r"d(?<![\w]d)", "d"),
@@ -1108,6 +1113,10 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
             number = pat.to_number(m.group("num"), m.start("num"))
             if name is None or number is None:
                 continue
+            if name == "alpha_bare":
+                name = _bare_alpha(text, number.value)
+                if name is None:
+                    continue
             if rep.symbol is not None and name in _DESCRIPTIVE and not rep.descriptives and _WORDS.search(text, last_end, m.start()):
                 continue  # a group's mean after words ("F(1, 38) = 4.69, p = .037, with more for familiar faces (M = 63.9%) than …"):
                 # the groups', not the test's: read as descriptives of their own, and the test restyled without them
@@ -1173,6 +1182,25 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     rep.end = last_end
     rep.operators = _operators(text, spans)
     return again
+
+
+# what a paragraph says where an α alone is a scale's reliability, or the significance level (practice)
+_RELIABILITY_SAID = re.compile(r"(?i)reliab|internal\s+consistency|cronbach|\bscales?\b|subscale|\bitems?\b|questionnaire|inventory")
+_LEVEL_SAID = re.compile(r"(?i)signific|\blevel\b|\bset\s+at\b|criterion|threshold|two-tailed|one-tailed|bonferroni|corrected|adjusted")
+_ALPHA_VALUE = re.compile(r"(?<![\w])(?:α|alpha)\s*=\s*(\d*[.,]?\d+)")
+
+
+def _bare_alpha(text: str, value: float) -> str | None:
+    """What an α typed alone is, from its paragraph: the significance level at .10 or below where the paragraph speaks of
+    significance, levels or corrections ("set at α = .05"); a scale's reliability up to 1 where it speaks of reliability,
+    scales or items ("α = .86") and no α in it exceeds 1 (an item response model's α, "ranged from α = 0.8 to 2.1", is a
+    discrimination, not a reliability); None otherwise (not read)."""
+    if 0 < value <= 0.1:
+        return "alpha_level" if _LEVEL_SAID.search(text) is not None else None
+    if value > 1 or _RELIABILITY_SAID.search(text) is None:
+        return None
+    above = any(float(v.replace(",", ".")) > 1 for v in _ALPHA_VALUE.findall(text) if v.replace(",", "").replace(".", "").isdigit())
+    return None if above else "alpha"
 
 
 _WORDS = re.compile(r"[^\W\d_]{2}")  # a word between a statistic's parts (two letters: "vs", "in", "with")

@@ -62,8 +62,13 @@ def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = Tr
 
 def named(rep: Reported, text: StyledText) -> StyledText:
     """``text``, the statistic restyled, after the name its χ² was typed with alone ("Wald = 6.13": "Wald χ²(1) =
-    6.13"); else as it is."""
-    return StyledText("Wald ") + text if rep.symbol == "chi2" and rep.symbol_text.startswith("Wald") else text
+    6.13") or the name before a reliability's α ("Cronbach's α = .81"); else as it is."""
+    if rep.symbol == "chi2" and rep.symbol_text.startswith("Wald"):
+        return StyledText("Wald ") + text
+    if rep.symbol is None and rep.effects and rep.effects[0].name == "alpha" and rep.effects[0].symbol_text.startswith("Cronbach"):
+        typed = rep.effects[0].symbol_text  # "Cronbach's alpha = 0.81": "Cronbach's α = .81", the author's name for it kept
+        return StyledText(typed[: max(typed.find("α"), typed.find("alpha"))]) + text
+    return text
 
 
 def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> StyledText | None:
@@ -72,8 +77,8 @@ def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> St
 
     if rep.symbol is None and rep.descriptives:
         return descriptives_text(rep, style, alpha)
-    if any(e.name == "MD" for e in rep.effects):  # a difference in words ("mean difference, −2.1"): no symbol of the style's
-        return None
+    if any(e.name in ("MD", "alpha_level") for e in rep.effects):  # a difference in words ("mean difference, −2.1"), a significance
+        return None  # level ("α = .001", as the design set it): no form of the style's
     try:
         record = to_record(rep, alpha, style)
         if rep.op != "=" and not with_p:  # (an exact p the author gave, doubted, is not repeated either)
@@ -247,6 +252,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
             return None, "descriptives beside an interval or a ratio, without their test, have no form of the style's; restyle them by hand"
         if any(e.name == "MD" for e in rep.effects):
             return None, "a difference given in words with its interval has no symbol in the style; it is checked and left as typed"
+        if any(e.name == "alpha_level" for e in rep.effects):
+            return None, "a significance level is checked for its leading zero and left as typed (its decimals are the design's)"
         bare = next((ci for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None and ci.level is None), None)
         if bare is not None:
             return None, (f"its interval is typed without its level ({rep.text[bare.start - rep.start : bare.end - rep.start]}); "
