@@ -541,3 +541,10 @@ def test_a_reliabilitys_alpha_and_a_significance_level():
     assert [e.codes for e in level] == [[], ["leading-zero"]] and level[1].suggestion == ""
     assert audit_units([Unit("line 1", "The discrimination of the items ranged from α = 0.8 to α = 2.1.")]) == []
     assert audit_units([Unit("line 1", "The smoothing weight was α = 0.3 throughout.")]) == []
+
+
+def test_ama_writes_cronbach_alpha_without_the_possessive():
+    """AMA 11 drops possessive eponyms ("Cronbach α", memory; docs/reporting-rules.md) and keeps the zero before a
+    reliability: a revision to it writes "Cronbach α = 0.81" for "Cronbach's alpha = .81"."""
+    (entry,) = audit_units([Unit("line 1", "Reliability was acceptable (Cronbach's alpha = .81).")], style="ama11")
+    assert entry.codes == ["missing-leading-zero"] and entry.suggestion == "Cronbach α = 0.81"

@@ -149,11 +149,11 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         if doubted and record.statistic is not None and (record.statistic.df or record.statistic.symbol == "z"):  # (a z needs none)
             recomputed = p_from_statistic(record.statistic.symbol, record.statistic.value, record.statistic.df)
             record = replace(record, p=recomputed, precision={k: v for k, v in record.precision.items() if k != "p"})
-            return named(rep, render(record, "stats", style)).plain() + " (p recomputed)"
+            return named(rep, render(record, "stats", style), style).plain() + " (p recomputed)"
         if doubted:  # no df, and none of those the text allows gives the p: no p to offer in its place
             record = replace(record, p=None, precision={k: v for k, v in record.precision.items() if k != "p"})
-            return named(rep, render(record, "stats", style)).plain() + " (p left out: no df the text allows gives the reported p)"
-        return named(rep, render(record, "stats", style)).plain()
+            return named(rep, render(record, "stats", style), style).plain() + " (p left out: no df the text allows gives the reported p)"
+        return named(rep, render(record, "stats", style), style).plain()
     except Exception:  # a record the renderer cannot take (say, an impossible value): no suggestion
         return ""
 

@@ -57,17 +57,20 @@ def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = Tr
     bound allows instead ("F(1, 56) < 1, p > .32"): a bound gives no exact p to print. A coefficient's χ² typed as its
     name alone ("Wald = 6.13") keeps the name before the symbol ("Wald χ²(1) = 6.13"): the reader is told which χ²."""
     text = _house_text(rep, style, alpha, with_p)
-    return None if text is None else named(rep, text)
+    return None if text is None else named(rep, text, style)
 
 
-def named(rep: Reported, text: StyledText) -> StyledText:
+def named(rep: Reported, text: StyledText, style: "Style | None" = None) -> StyledText:
     """``text``, the statistic restyled, after the name its χ² was typed with alone ("Wald = 6.13": "Wald χ²(1) =
-    6.13") or the name before a reliability's α ("Cronbach's α = .81"); else as it is."""
+    6.13") or the name before a reliability's α ("Cronbach's α = .81"; "Cronbach α" in a style without possessives); else as it is."""
     if rep.symbol == "chi2" and rep.symbol_text.startswith("Wald"):
         return StyledText("Wald ") + text
     if rep.symbol is None and rep.effects and rep.effects[0].name == "alpha" and rep.effects[0].symbol_text.startswith("Cronbach"):
         typed = rep.effects[0].symbol_text  # "Cronbach's alpha = 0.81": "Cronbach's α = .81", the author's name for it kept
-        return StyledText(typed[: max(typed.find("α"), typed.find("alpha"))]) + text
+        name = typed[: max(typed.find("α"), typed.find("alpha"))]
+        if style is not None and not style.wording.get("possessive", True):  # AMA 11: "Cronbach α"
+            name = re.sub(r"['’]s(?=\s)", "", name)
+        return StyledText(name) + text
     return text
 
 
