@@ -1095,3 +1095,30 @@ def test_the_data_limit_is_counted_while_reading(box, capsys, monkeypatch):
     monkeypatch.setitem(files.LIMITS, "data", 1000)
     code, _, err = _run(["describe", "d.csv"], capsys)
     assert code == 2 and "d.csv" in err and "over the limit" in err
+
+
+@pytest.mark.parametrize("span, before, columns, second", [("999", "999", 64, 1 + 64 + 64), ("abc", "-1", 1, 2), ("0", "0", 1, 2), ("2", "1", 2, 4)])
+def test_a_word_tables_spans_are_bounded(box, span, before, columns, second):
+    """A cell's w:gridSpan and a row's w:gridBefore place the cells by grid column; a hostile value (999 each, text, a
+    sign) is read as at most 64 columns or as none, so that a spanner's words never fan out over thousands of columns."""
+    import docx
+    from docx.oxml import OxmlElement
+    from docx.oxml.ns import qn
+
+    from statsetter.audit.reading import read_units
+
+    d = docx.Document()
+    table = d.add_table(rows=1, cols=2)
+    for k, cell in enumerate(table.rows[0].cells):
+        cell.text = f"t = 2.{k}"
+        grid = OxmlElement("w:gridSpan")
+        grid.set(qn("w:val"), span)
+        cell._tc.get_or_add_tcPr().append(grid)
+    first = OxmlElement("w:gridBefore")
+    first.set(qn("w:val"), before)
+    table.rows[0]._tr.get_or_add_trPr().insert(0, first)
+    path = box / "spans.docx"
+    d.save(str(path))
+    cells = [u for u in read_units(path) if u.cell is not None]
+    assert [u.location for u in cells] == ["table 1, row 1, cell 1", "table 1, row 1, cell 2"]
+    assert cells[1].cell[2] == second and cells[0].columns == columns

@@ -391,7 +391,7 @@ def _tex_table_units(block: str, line: int, table: int) -> Iterator[Unit]:
             for a, raw in texts:
                 c += span
                 wide = _MULTICOLUMN.match(raw)  # a cell spanning columns: the cell after it starts past them
-                span = max(1, int(wide.group(1))) if wide is not None else 1
+                span = min(max(1, int(wide.group(1))), _MAX_SPAN) if wide is not None else 1
                 if not raw:
                     continue
                 unwrapped, outer = _cell_text(raw)
@@ -509,7 +509,11 @@ def _part_units(root, part: str) -> Iterator[Unit]:  # type: ignore[no-untyped-d
 def _grid_count(element) -> int:  # type: ignore[no-untyped-def]
     """The grid columns a w:gridSpan or w:gridBefore gives (0 where there is none or its value is not a count)."""
     value = element.get(_VAL) if element is not None else None
-    return int(value) if value is not None and value.isdigit() and len(value) < 4 else 0
+    return min(int(value), _MAX_SPAN) if value is not None and value.isdigit() and len(value) < 4 else 0
+
+
+_MAX_SPAN = 64  # the most columns a cell is taken to span (Word's tables have at most 63; a hostile file's 999 each would
+# make a spanner's words cost a thousand columns a cell)
 
 
 _VAL = f"{_W}val"
