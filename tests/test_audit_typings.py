@@ -548,3 +548,35 @@ def test_ama_writes_cronbach_alpha_without_the_possessive():
     reliability: a revision to it writes "Cronbach α = 0.81" for "Cronbach's alpha = .81"."""
     (entry,) = audit_units([Unit("line 1", "Reliability was acceptable (Cronbach's alpha = .81).")], style="ama11")
     assert entry.codes == ["missing-leading-zero"] and entry.suggestion == "Cronbach α = 0.81"
+
+
+def test_a_tests_own_interval_is_kept_in_the_suggestion_and_the_revision():
+    """A t with its interval of the difference and no effect size beside it ("t(331) = 6.67, p < .001, 95% CI [2.53,
+    4.66]"): the restyled text had dropped the interval (the style's form of a t has no place for it) — a suggestion
+    copied over would have lost it — and a revision had been refused for the word "CI". Now the interval follows the p
+    in the style's way (APA's ", 95% CI [a, b]", AMA's " (95% CI, a-b)"). Numbers: pingouin's Student t test of
+    the penguins' bill length by sex (its bundled data), its CI95% of the difference."""
+    import pingouin as pg
+
+    data = pg.read_dataset("penguins")
+    male, female = (data[data.sex == s].bill_length_mm.dropna() for s in ("male", "female"))
+    row = pg.ttest(male, female, correction=False).iloc[0]
+    low, high = row["CI95%"] if "CI95%" in row else row["CI95"]
+    typed = f"Males had longer bills, t({row['dof']:.0f})={row['T']:.2f}, p<0.001, 95% CI [{low:.2f}, {high:.2f}]."
+    (entry,) = audit_units([Unit("line 1", typed)], restyle=True)
+    interval = f"95% CI [{low:.2f}, {high:.2f}]"
+    assert entry.suggestion == f"t({row['dof']:.0f}) = {row['T']:.2f}, p < .001, {interval}"
+    assert entry.revision is not None and entry.revision.plain().replace("\u00a0", " ").endswith(interval)
+    (entry,) = audit_units([Unit("line 1", typed)], style="ama11")
+    assert entry.suggestion.endswith(f"P < .001 (95% CI, {low:.2f}-{high:.2f})")
+    wrong = typed.replace(f"[{low:.2f}", f"[{-low:.2f}")  # an interval that holds 0 beside p < .001
+    (entry,) = audit_units([Unit("line 1", wrong)])
+    assert "ci-p-disagree" in entry.codes  # (the interval is still held to the p)
+
+
+def test_a_tests_own_interval_keeps_what_it_is_of():
+    """"95% CI for the difference [−0.10, 4.20], d = 0.68": restyled, the interval keeps its label, so that it is not
+    read as the d's after it (a typing of this test's own, as labelled intervals are typed: practice)."""
+    typed = "Scores rose, t(38) = 2.14, p = .039, 95% CI for the difference [-0.10, 4.20], d = 0.68."
+    (entry,) = audit_units([Unit("line 1", typed)])
+    assert entry.suggestion == "t(38) = 2.14, p = .039, 95% CI for the difference [−0.10, 4.20], d = 0.68"

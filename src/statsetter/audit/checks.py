@@ -1148,14 +1148,14 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
         p = _recomputed_p(rep, alpha)
     effects = []
     if rep.symbol in ("r", "rs", "tau_b") and rep.value is not None and abs(rep.value.value) <= 1:
-        ci = _interval(rep.ci, precision, 0, style, rep.symbol)
+        ci = _interval(rep.ci, precision, "effects[0].ci", style, rep.symbol)
         effects.append(EffectSize(rep.symbol, rep.value.value, ci))
         precision["effects[0].value"] = rep.value.decimals
     for e in rep.effects:
         i = len(effects)
         if e.name in RATIOS and e.number.value <= 0:
             continue
-        effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, i, style, e.name), ratio=e.name in RATIOS))
+        effects.append(EffectSize(e.name, e.number.value, _interval(e.ci, precision, f"effects[{i}].ci", style, e.name), ratio=e.name in RATIOS))
         precision[f"effects[{i}].value"] = e.number.decimals
     kind = _KIND.get(rep.symbol or "", "reported")
     if rep.symbol == "F":  # (a regression's F with its R², ΔR², adjusted R² or R: each effect kept, in the order typed)
@@ -1164,6 +1164,12 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
     if kind == "chi2_independence" and rep.n is None:
         kind = "reported"
     n = int(rep.n.value) if rep.n is not None and rep.n.value >= 0 else None
+    # a test's interval of what it tests ("t(38) = 2.14, p = .039, 95% CI [0.10, 4.20]": a difference's or a coefficient's, no
+    # effect size's), kept after the p (left out, a suggestion had dropped it)
+    own = _interval(rep.ci, precision, "details.ci", style, "MD") if rep.ci is not None and rep.symbol is not None and \
+        rep.symbol not in ("r", "rs", "tau_b") else None
+    kind = "reported" if own is not None else kind  # (the generic form, which has the interval's place)
+    label = _CI_LABEL.search(rep.text, max(0, rep.ci.start - rep.start)) if own is not None and rep.text else None  # type: ignore[union-attr]
     return Result(
         kind=kind,
         statistic=statistic,
@@ -1173,8 +1179,14 @@ def to_record(rep: Reported, alpha: float = 0.05, style: Style | None = None) ->
         precision=precision,
         alpha=alpha,
         details={"with_n": rep.symbol == "chi2" and n is not None,
-                 "p_last": rep.symbol is None and rep.p is not None and bool(rep.effects) and rep.p.start > rep.effects[0].start},
+                 "p_last": rep.symbol is None and rep.p is not None and bool(rep.effects) and rep.p.start > rep.effects[0].start,
+                 **({"ci_level": own.level, "ci_low": own.low, "ci_high": own.high} if own is not None else {}),
+                 **({"ci_label": " ".join(label.group(1).split())} if label is not None else {})},
     )
+
+
+# what an interval is of, as the text labels it ("95% CI for the difference [−0.10, 4.20]"): kept when the interval is restyled
+_CI_LABEL = re.compile(r"C\.?I\.?\s+((?:for|of)\s+(?:the\s+)?(?:(?:mean\s+)?difference|[dgr]|OR|B|β))(?![\w])")
 
 
 def _as_printed(p: float, printed: Number, style: Style, alpha: float) -> float:
@@ -1215,13 +1227,13 @@ def _recomputed_p(rep: Reported, alpha: float) -> float | None:
     return None
 
 
-def _interval(ci, precision: dict[str, int], i: int, style: Style | None, quantity: str) -> Interval | None:  # type: ignore[no-untyped-def]
+def _interval(ci, precision: dict[str, int], path: str, style: Style | None, quantity: str) -> Interval | None:  # type: ignore[no-untyped-def]
     if ci is None or ci.low.value > ci.high.value:
         return None
     if ci.level is None:  # typed without its level: no record can say it (the statistic is left as typed)
         raise ValueError("an interval without its level")
-    precision[f"effects[{i}].ci.low"] = ci.low.decimals
-    precision[f"effects[{i}].ci.high"] = ci.high.decimals
+    precision[f"{path}.low"] = ci.low.decimals
+    precision[f"{path}.high"] = ci.high.decimals
     low, high = ci.low.value, ci.high.value
     if style is not None:  # a limit printed with an added digit (−.005 for a limit near 0) keeps it
         num = numbers_for(style)

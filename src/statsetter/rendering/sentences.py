@@ -121,7 +121,7 @@ class Helpers:
         self._ci_pattern = self._ci_pattern.replace(" ", nb)
         self._ci_pattern_neg = self._ci_pattern_neg.replace(" ", nb)
 
-    _MARKUP = "sym stat pv sided eff effects ci_of ci_after value est se desc cat count pct number df compatible paren".split()
+    _MARKUP = "sym stat pv sided eff effects ci_of ci_after own_ci value est se desc cat count pct number df compatible paren".split()
     _PLAIN = "var var_list group cap verdict significant direction_word null and_next predictors pseudo_r2".split()
 
     def raw(self) -> dict[str, Any]:
@@ -225,6 +225,17 @@ class Helpers:
         if interval is None:
             return ""
         return self._ci_attach + self._ci(r, interval, quantity, null, path)
+
+    def own_ci(self, r: Result) -> str:
+        """A reported test's own interval (details ci_level, ci_low, ci_high: a difference's or a coefficient's, read by the
+        audit) attached to what it follows in the style's way (``, 95% CI [..]`` or `` (95% CI, ..)``), with what the text
+        said it is of (details ci_label, "for the difference") after "CI"; "" without one."""
+        level = r.details.get("ci_level")
+        if level is None:
+            return ""
+        text = self.ci_after(r, Interval(level, r.details["ci_low"], r.details["ci_high"]), "MD", 0.0, "details.ci")
+        label = r.details.get("ci_label")  # what the text says it is of, "for the difference": after "CI", as typed
+        return text.replace("CI", f"CI {escape(label)}", 1) if label else text
 
     def eff(self, r: Result, name: str | None = None, with_ci: bool = True) -> str:
         """``d = 0.68, 95% CI [0.04, 1.31]`` for the record's effect size (by name)."""
