@@ -443,7 +443,8 @@ def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
             ("Score", "3.1", "3.4", "1.50", "0.900")]
     entries = audit_file(_doc(tmp_path / "d.docx", tables=[("Table 4 (n = 21 per group)", rows)]))
     f = next(e for e in entries if e.found.startswith("F"))
-    assert f.found == "F (1,40) = 9.10, p = .25" and "p-does-not-follow" in f.codes
+    assert f.found == "F (1,40) = 9.10, η2 = .185, p = .25" and "p-does-not-follow" in f.codes  # (its η² beside it, which fits)
+    assert "effect-does-not-fit" not in f.codes
     assert not any(e.found == "p = .25" for e in entries)  # the p is part of the F, not a statistic of its own
     t = next(e for e in entries if e.found.startswith("t"))
     assert "21 + 21 − 2 = 40" in t.checked and "p-does-not-follow" in t.codes
@@ -2839,3 +2840,18 @@ def test_a_beta_and_its_se_in_one_cell(tmp_path):
     path.write_text(_BETA_SE.replace("| 0.296 |", "| 0.029 |"), encoding="utf-8")
     (bad,) = [e for e in audit_file(path) if e.codes]
     assert bad.codes == ["coefficient-does-not-fit"] and "β = -0.19 and SE = 0.18" in bad.message
+
+
+def test_an_effect_size_in_the_cell_beside_a_statistic_typed_whole(tmp_path):
+    """A statistic typed whole in a cell takes the effect sizes typed alone in the cells beside it, up to its p or the
+    next statistic ("F (1,56) = 1.7 | η2 = .952 | n.s.", as PLOS ONE 2015's Table 3 lays its contrasts out; or after the
+    p): each checked against the F. That table (tests/real_typings.py, pmc4476782) prints η² = .952 — the first row's —
+    beside F(1, 56) = 1.7, whose η²p is at most .03: its one published slip, now found, and no other row is flagged. Each
+    η² cell is still listed on its own, for its style."""
+    from real_typings import HELD_OUT, ITEMS, Table
+
+    (table,) = [t for t in ITEMS + HELD_OUT if isinstance(t, Table) and t.source == "pmc4476782"]
+    entries = audit_file(_doc(tmp_path / "p.docx", tables=[(f"Table 3\n{table.caption}", [list(r) for r in table.rows])]))
+    flagged = [e for e in entries if "effect-does-not-fit" in e.codes]
+    assert [e.found for e in flagged] == ["F (1,56) = 1.7, η2 = .952, n.s."] and "0.029 to 0.030" in flagged[0].message
+    assert sum(e.found.startswith("F") for e in entries) == 17 and sum(e.found.startswith("η2") for e in entries) == 17

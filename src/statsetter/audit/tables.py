@@ -979,18 +979,31 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                     continue
                 merged, how = rep, ""
                 if rep.p is None and rep is reps[-1]:
+                    # its p, and the effect sizes typed alone in the cells around it ("F (1,56) = 1.7 | η2 = .952 | n.s.", PLoS
+                    # One 2015's layout; or after the p), up to the next statistic: each effect's cell is still listed on its own
+                    sizes: list[Effect] = []
+                    texts = [rep.text]
+                    p = None
                     for k in ordered[i + 1 :]:
                         other_unit, other = row[k]
                         if any(o.symbol is not None for o in other):
                             break
                         lone = next((o for o in other if o.p is not None), None)
-                        p = lone.p if lone is not None else _p_cell(other_unit.text, mark) if roles.get(k) == "p" else None
+                        if lone is None and other and all(o.effects and not o.descriptives and o.ci is None for o in other):
+                            sizes += [e for o in other for e in o.effects]
+                            texts.append(other_unit.text.strip())
+                            continue
                         if p is not None:
-                            if lone is not None:
-                                used.add(id(lone))
-                            merged = replace(rep, p=p, p_range=None, text=f"{rep.text}, {other_unit.text.strip()}")
-                            how = "the p in a later cell of the row"
                             break
+                        p = lone.p if lone is not None else _p_cell(other_unit.text, mark) if roles.get(k) == "p" else None
+                        if p is None:
+                            continue
+                        if lone is not None:
+                            used.add(id(lone))
+                        texts.append(other_unit.text.strip())
+                    if p is not None:
+                        merged = replace(rep, p=p, p_range=None, text=", ".join(texts), effects=rep.effects + sizes)
+                        how = "the p in a later cell of the row" + (", the effect sizes beside it" if sizes else "")
                 design = None if merged.df else design_readings(rep.symbol, words_above.get(c, ""), f"{caption} {said}", groups, total, "in the table")
                 readings = () if merged.df else design if design is not None else tuple(df_readings(rep.symbol, groups, total, "in the table", welch))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
