@@ -580,3 +580,23 @@ def test_a_tests_own_interval_keeps_what_it_is_of():
     typed = "Scores rose, t(38) = 2.14, p = .039, 95% CI for the difference [-0.10, 4.20], d = 0.68."
     (entry,) = audit_units([Unit("line 1", typed)])
     assert entry.suggestion == "t(38) = 2.14, p = .039, 95% CI for the difference [−0.10, 4.20], d = 0.68"
+
+
+def test_a_prevalence_ratio_is_read_as_a_ratio():
+    """A prevalence ratio, "PR" (as cross-sectional studies name it: Rev Saude Publica 2008, "Methods for estimating
+    prevalence ratios in cross-sectional studies", its abstract's "prevalence ratio (PR)"; "adjusted PR"), is a ratio
+    like OR and RR: its interval holds it and agrees with the p about 1 (it had not been read; the p stood alone).
+    Numbers: statsmodels' Poisson model with robust (HC0) variance of GRADE on PSI in its spector data."""
+    import numpy as np
+    import statsmodels.api as sm
+
+    data = sm.datasets.spector.load_pandas().data
+    fit = sm.GLM(data["GRADE"], sm.add_constant(data[["PSI"]]), family=sm.families.Poisson()).fit(cov_type="HC0")
+    pr, (low, high), p = np.exp(fit.params["PSI"]), np.exp(fit.conf_int().loc["PSI"]), fit.pvalues["PSI"]
+    typed = f"The prevalence was higher with the new method (PR = {pr:.2f}; 95% CI: {low:.2f}–{high:.2f}; p = {p:.3f})."
+    (entry,) = audit_units([Unit("line 1", typed)])
+    assert entry.found.startswith(f"PR = {pr:.2f}; 95% CI") and not {"ci-p-disagree", "ci-excludes-estimate"} & set(entry.codes)
+    (entry,) = audit_units([Unit("line 1", typed.replace(f"p = {p:.3f}", "p = .320"))])  # the interval excludes 1
+    assert "ci-p-disagree" in entry.codes
+    (entry,) = audit_units([Unit("line 1", f"The adjusted PR = {high + 1:.2f} (95% CI {low:.2f}-{high:.2f}) held.")])
+    assert "ci-excludes-estimate" in entry.codes and entry.found.startswith("adjusted PR")

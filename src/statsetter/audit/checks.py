@@ -120,7 +120,7 @@ _BOUNDED_EFFECTS = {"V": (0, 1), "cliff_d": (-1, 1), "kendall_w": (0, 1), "phi":
                     "alpha": (-math.inf, 1), "alpha_level": (0, 1)}  # (Cronbach's α falls below 0 where items disagree; never above 1)
 _WHOLE_DF = {"chi2", "r", "rs", "H", "Q"}  # t and F may have fractional df (Welch; sphericity corrections)
 _RANK_SUMS = {"U", "W", "T", "V"}
-RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR"})  # effects whose null value is 1, and which are above 0
+RATIOS = frozenset({"OR", "aOR", "HR", "aHR", "RR", "aRR", "IRR", "PR", "aPR"})  # effects whose null value is 1, and which are above 0
 _KIND = {"t": "t_independent", "chi2": "chi2_independence", "r": "pearson", "rs": "spearman", "tau_b": "kendall", "U": "mann_whitney", "H": "kruskal_wallis", "W": "wilcoxon", "T": "wilcoxon",
          "V": "wilcoxon", "Q": "cochran_q"}
 

@@ -260,7 +260,9 @@ _RATIOS = [
     (r"a(?<![\w]a)OR|A(?<![\w]A)OR|a(?<![\w]a)dj(?:usted)?\.?\s+OR", "aOR"),
     (r"a(?<![\w]a)HR|A(?<![\w]A)HR|a(?<![\w]a)dj(?:usted)?\.?\s+HR", "aHR"),
     (r"a(?<![\w]a)RR|A(?<![\w]A)RR|a(?<![\w]a)dj(?:usted)?\.?\s+RR", "aRR"),
+    (r"a(?<![\w]a)PR|A(?<![\w]A)PR|a(?<![\w]a)dj(?:usted)?\.?\s+PR", "aPR"),
     (r"O(?<![\w]O)R", "OR"),
+    (r"P(?<![\w]P)R", "PR"),  # a prevalence ratio (cross-sectional studies; practice)
     (r"H(?<![\w]H)R", "HR"),
     (r"I(?<![\w]I)RR", "IRR"),
     (r"R(?<![\w]R)R", "RR"),
@@ -271,6 +273,8 @@ _RATIOS = [
     (r"[hH](?<![\w][hH])azard\s+ratio", "HR"),
     (r"[iI](?<![\w][iI])ncidence[-\s]rate\s+ratio", "IRR"),
     (r"[rR](?<![\w][rR])isk\s+ratio|[rR](?<![\w][rR])elative\s+risk", "RR"),
+    (r"a(?<![\w]a)djusted\s+prevalence\s+ratio", "aPR"),
+    (r"[pP](?<![\w][pP])revalence\s+ratio", "PR"),
     # a difference with its interval, as medical texts give it ("mean difference, −2.1 [95% CI, −3.4 to −0.8]", "the
     # between-group difference was −4.2 points (95% CI, −7.9 to −0.5; P = .03)"): read only with its interval (null 0)
     (r"[mM](?<![\w][mM])ean\s+difference|[dD](?<![\w][dD])ifference|[bB](?<![\w][bB])etween-group\s+difference"
@@ -877,7 +881,7 @@ def coefficient_lead(text: str, rep: Reported, since: int, decimal_mark: str = "
 
 _OPERATOR_OR_NS = re.compile(r"[=<>≤≥¼n](?:(?<!n)|(?<![\w.]n)\.?\s?s\b)")  # an operator, or "ns" / "n.s" (one fast scan)
 _GARBLED_P = re.compile(r"[bN,5.](?<=[pP]\s[bN,5.])\s*+\.?\d")  # "p b 0.01", "P N .05", "p , .05" (see _GARBLED; "¼" is in _OPERATOR_OR_NS)
-_RATIO_BARE = re.compile(r"R(?<=[OHR]R)")  # where a ratio's abbreviation may stand without "=" (then the pattern decides)
+_RATIO_BARE = re.compile(r"R(?<=[OHRP]R)")  # where a ratio's abbreviation may stand without "=" (then the pattern decides)
 
 
 def _abbreviated_ratio(text: str, start: int, end: int) -> bool:
@@ -897,7 +901,7 @@ def _rare_words(text: str) -> bool:
     """Whether a paragraph has what only a few statistics are typed with (OR, HR, RR and the ratios ending in them;
     "ratio", "risk"; "value:"; an operator garbled by a copy from a PDF, _GARBLED): looked for once a paragraph, so that
     most clauses and gaps are spared the searches."""
-    return (("R" in text and ("OR" in text or "HR" in text or "RR" in text)) or "ratio" in text or "risk" in text or "value" in text or "difference" in text
+    return (("R" in text and ("OR" in text or "HR" in text or "RR" in text or "PR" in text)) or "ratio" in text or "risk" in text or "value" in text or "difference" in text
             or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 

@@ -107,23 +107,24 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 # (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
-_RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
-                         rf"|incidence\s+rate\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)[a-d{_SIGNIFICANCE}]?")
+_RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|pr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
+                         rf"|incidence\s+rate\s+ratio|prevalence\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)[a-d{_SIGNIFICANCE}]?")
 # (also "95%CIs", "(95% confidence interval)"); a spanner that names the ratio over the columns of several models ("Hazard ratio
 # (95% confidence interval)" over "Model 1 | P | Model 2 | P", as JCSM 2015's Table 2 lays it out): its columns' cells are that ratio
-_RATIO_SPANNER = re.compile(r"(?i)(?<![\w])(?P<name>or|hr|rr|irr|odds\s+ratios?|hazard\s+ratios?|risk\s+ratios?|relative\s+risks?"
-                            r"|incidence\s+rate\s+ratios?)\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)")
-_RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR"}
+_RATIO_SPANNER = re.compile(r"(?i)(?<![\w])(?P<name>or|hr|rr|irr|pr|odds\s+ratios?|hazard\s+ratios?|risk\s+ratios?|relative\s+risks?"
+                            r"|incidence\s+rate\s+ratios?|prevalence\s+ratios?)\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)")
+_RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR",
+                "prevalence ratio": "PR"}
 _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
                          rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
 
 
 # a row that names its ratio in its first cell, its outcomes' ratios with their intervals across ("cOR b", "aOR1 c", "HR",
 # "Adjusted OR"; footnote letters after it): Genes and Environment 2021's Table 3 lays its odds ratios out so
-_RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|RR|IRR)\d?(?:\s*[a-f†‡§*])?\s*", re.IGNORECASE)
+_RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|RR|IRR|PR)\d?(?:\s*[a-f†‡§*])?\s*", re.IGNORECASE)
 
 
-_RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate)\s+ratios?\b|\brelative\s+risks?\b")
+_RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
 def _ratio_name(name: str, adjusted: bool) -> str:
