@@ -600,3 +600,25 @@ def test_a_prevalence_ratio_is_read_as_a_ratio():
     assert "ci-p-disagree" in entry.codes
     (entry,) = audit_units([Unit("line 1", f"The adjusted PR = {high + 1:.2f} (95% CI {low:.2f}-{high:.2f}) held.")])
     assert "ci-excludes-estimate" in entry.codes and entry.found.startswith("adjusted PR")
+
+
+# Quotations of published sentences in BMJ Evidence-Based Medicine's "Example uses of ORs" (its Table 2; ebm.bmj.com)
+_OR_QUOTES = ("This represented a 53% reduction in the risk of coronary heart disease among carriers of inactivating NPC1L1 mutations "
+              "(odds ratio for disease among carriers, 0.47; 95% confidence interval [CI], 0.25 to 0.87; P=0.008).")
+
+
+def test_a_ratio_named_with_a_few_words_before_its_number():
+    """"odds ratio for disease among carriers, 0.47; 95% CI, 0.25 to 0.87" (a quotation above) and "the relative risk of
+    readmission was 0.78 (95% CI, …)": a ratio's name, up to four words, then "was" or a comma and its number, is read
+    with its interval and p (the ratio had not been read; the p stood alone). More words, or a number among them, are
+    not read so."""
+    (entry,) = audit_units([Unit("line 1", _OR_QUOTES)])
+    assert entry.found.startswith("odds ratio for disease among carriers, 0.47; 95% confidence interval")
+    assert entry.suggestion == "OR = 0.47, 95% CI [0.25, 0.87], p = .008"
+    (entry,) = audit_units([Unit("line 1", _OR_QUOTES.replace("0.25 to 0.87", "0.55 to 0.87"))])  # the ratio below its interval
+    assert "ci-excludes-estimate" in entry.codes
+    (entry,) = audit_units([Unit("line 1", "The relative risk of readmission was 0.78 (95% CI, 0.65 to 1.04; P = .009).")])
+    assert entry.found.startswith("relative risk of readmission was 0.78") and "ci-p-disagree" in entry.codes
+    for far in ("The hazard ratio for death in the year 2019 was 1.20 (95% CI 1.01-1.43).",
+                "The odds ratio for the association between sleep and mood in the full sample was 1.40 (95% CI 1.1-1.8)."):
+        assert not any(e.found.startswith(("hazard", "odds")) for e in audit_units([Unit("line 1", far)]))

@@ -292,8 +292,11 @@ _AFTER_RATIO = r"(?:(?<=R)|(?<=ratio)|(?<=risk)|(?<=difference))"
 # after a ratio's name, its abbreviation in parentheses or brackets ("adjusted HR (aHR)=1.29", "odds ratio [OR], 1.52")
 _RATIO_ABBREVIATED = rf"(?:{_AFTER_RATIO}\s*+[(\[]a?[A-Z]{{1,3}}[)\]])"
 # after a ratio's name, its number without "=": a comma or colon ("OR, 0.76", AMA's form; "AOR: 8.32"), "of" ("odds ratio
-# of 1.7") or a space ("OR 2.72"), and a number with decimals (not "OR 2 times", nor a count)
-_RATIO_WITHOUT_EQUALS = rf"(?:{_AFTER_RATIO}|(?<=R[)\]]))(?:\s*+[:,]|\s++(?:of|was)\b|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)"
+# of 1.7"), a few words and "was" or a comma ("the relative risk of readmission was 0.78", "odds ratio for disease among
+# carriers, 0.47", as medical abstracts write it) or a space
+# ("OR 2.72"), and a number with decimals (not "OR 2 times", nor a count)
+_RATIO_WITHOUT_EQUALS = (rf"(?:{_AFTER_RATIO}|(?<=R[)\]]))(?:\s*+[:,]|\s++(?:of|was)\b|\s++(?:of|for|in|among|with)(?:\s++[^\W\d_][\w'’-]*+){{1,4}}?(?:\s++(?:was|were|is)\b|\s*+[,:])"
+                         rf"|(?=[ \u00a0]))\s*+(?=[-−]?\d*[.,]\d)")  # (also "the relative risk of readmission was 0.78": up to four words)
 # after a ratio's name, its interval's level, the interval to come after the number ("OR (95% CI) is 0.84 (0.69, 1.03)")
 _RATIO_LABELLED = rf"{_AFTER_RATIO}\s*+[(\[]\s*+(?P<rlev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+C\.?I\.?\s*+[)\]]\s*+(?:[=:,¼]|is\b)?"
 
