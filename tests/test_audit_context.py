@@ -2855,3 +2855,47 @@ def test_an_effect_size_in_the_cell_beside_a_statistic_typed_whole(tmp_path):
     flagged = [e for e in entries if "effect-does-not-fit" in e.codes]
     assert [e.found for e in flagged] == ["F (1,56) = 1.7, η2 = .952, n.s."] and "0.029 to 0.030" in flagged[0].message
     assert sum(e.found.startswith("F") for e in entries) == 17 and sum(e.found.startswith("η2") for e in entries) == 17
+
+
+# Critical Care 2006;10:R137 (ccforum.com/content/10/5/R137), Table 2 (rows of it): each outcome's odds ratios under a head that
+# names the outcome before the ratio, "Acute organ failure within 3 years; odds ratio (95% CI)b"
+_CRIT_CARE = """Table 2. Odds ratios, from multivariable logistic regression models, for outcomes within 3 years
+
+| Category | n (%) | Acute organ failure within 3 years; odds ratio (95% CI)b | Death within 3 years; odds ratio (95% CI) |
+|---|---|---|---|
+| 50–54 | 4,007 (26.0) | 1.2 (0.6–2.4) | 0.9 (0.6–1.4) |
+| 55–59 | 3,761 (24.4) | 1.6 (0.9–3.0) | 1.8 (1.2–2.6) |
+| Female | 8,490 (55.1) | 0.6 (0.4–0.9) | 0.6 (0.4–0.7) |
+| GOLD 1 | 1,677 (10.9) | 1.9 (0.98–3.6) | 1.3 (0.9–1.9) |
+"""
+# Injury Prevention (BMJ; injuryprevention.bmj.com, table 144289, rows of it): "OR | Lower 95% CL | Upper 95% CL | p Value", the
+# p column holding the note's marks
+_INJ_PREV = """Table 3. Adverse medical events
+
+| | OR | Lower 95% CL | Upper 95% CL | p Value |
+|---|---|---|---|---|
+| Age at baseline | 1.01 | 1.00 | 1.01 | * |
+| Malea | 1.40 | 1.27 | 1.54 | *** |
+| Never marriedb | 0.95 | 0.73 | 1.24 | |
+| African-Americanc | 1.19 | 1.01 | 1.40 | * |
+| Number of chronic conditions | 1.27 | 1.24 | 1.29 | *** |
+
+Estimates were from random-effects multinomial logistic regression. *p<0.05; ***p<0.001.
+"""
+
+
+def test_odds_ratio_heads_and_limits_as_epidemiology_tables_name_them(tmp_path):
+    """A ratio's head after the outcome it is for ("…within 3 years; odds ratio (95% CI)b": the first column had gone
+    unread, the second read as a bare estimate without the ratio's null 1), and an interval's limits headed "Lower 95%
+    CL" and "Upper 95% CL" with the p column holding the note's marks (the table had gone unread): each ratio held to
+    its interval and, by its marks, to the p. Mutated limits are found."""
+    path = tmp_path / "c.md"
+    path.write_text(_CRIT_CARE, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 8 and all(e.found.startswith("OR = ") for e in entries) and not any(e.codes for e in entries)
+    path.write_text(_INJ_PREV, encoding="utf-8")
+    entries = audit_file(path)
+    assert [e.found for e in entries][:2] == ["OR = 1.01, 95% CI [1.00, 1.01], p < 0.05", "OR = 1.40, 95% CI [1.27, 1.54], p < 0.001"]
+    assert len(entries) == 5 and not any(e.codes for e in entries)
+    path.write_text(_INJ_PREV.replace("| 1.40 | 1.27 |", "| 1.40 | 0.97 |"), encoding="utf-8")
+    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree"]]

@@ -55,8 +55,10 @@ _ROLES = (
     # the limits of an estimate's interval in two columns: SPSS's "Lower" and "Upper" under "95% Confidence Interval of the
     # Difference", statsmodels' "[0.025" and "0.975]", R's confint "2.5 %" and "97.5 %" (the level: _interval_cells)
     # (also with the interval named before them, as one header row gives both: "95% CI: LL", "95% CI for OR: LL")
-    (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:lower(?:\s+(?:bound|limit))?|LL)|\[0?\.025|2\.5\s?%|\[?0?\.005|0\.5\s?%"), "ci_low"),
-    (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:upper(?:\s+(?:bound|limit))?|UL)|0?\.975\]|97\.5\s?%|0?\.995\]|99\.5\s?%"), "ci_high"),
+    (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:lower(?:\s+(?:bound|limit))?|LL)|\[0?\.025|2\.5\s?%|\[?0?\.005|0\.5\s?%"
+                r"|lower\s+\d{2}(?:\.\d)?\s?%\s?(?:CL|CI|confidence\s+limit)|(?:\d{2}(?:\.\d)?\s?%\s?)?LCL"), "ci_low"),  # ("Lower 95% CL")
+    (re.compile(r"(?i)(?:(?:\d{2}(?:\.\d)?\s?%\s?)?CI(?:\s+for\s+[^:]{1,20})?\s*:?\s*)?(?:upper(?:\s+(?:bound|limit))?|UL)|0?\.975\]|97\.5\s?%|0?\.995\]|99\.5\s?%"
+                r"|upper\s+\d{2}(?:\.\d)?\s?%\s?(?:CL|CI|confidence\s+limit)|(?:\d{2}(?:\.\d)?\s?%\s?)?UCL"), "ci_high"),
     # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
@@ -107,7 +109,7 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 # (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
-_RATIO_HEAD = re.compile(r"(?i)(?:[\w .-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|pr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
+_RATIO_HEAD = re.compile(r"(?i)(?:[\w .,;:-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|pr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
                          rf"|incidence\s+rate\s+ratio|prevalence\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)[a-d{_SIGNIFICANCE}]?")
 # (also "95%CIs", "(95% confidence interval)"); a spanner that names the ratio over the columns of several models ("Hazard ratio
 # (95% confidence interval)" over "Model 1 | P | Model 2 | P", as JCSM 2015's Table 2 lays it out): its columns' cells are that ratio
@@ -684,7 +686,8 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if p is None and stars:  # the bound the ratio's, its interval's or its B's marks stand for ("1.29 | (1.18 - 1.40)**", "0.497** | … | 1.643")
                 limits = _own_column(part, k, "ci")
                 marked = _marked_bound(row[interval[2]][0].text + (" " + row[limits][0].text if limits in row else "")
-                                       + (" " + row[k][0].text if k != interval[2] else ""), stars, ratio.end)
+                                       + (" " + row[k][0].text if k != interval[2] else "")
+                                       + (" " + row[p_col][0].text if p_col in row else ""), stars, ratio.end)  # (a p column of marks: "*")
             rep = _ratio_statistic("OR", name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
             unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
             how += f", its {marked[1]}" if marked else ""
