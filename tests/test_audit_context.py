@@ -2713,7 +2713,7 @@ _COX_ROWS = [["Prognostic factors", "Category", "HR (95%CI)", "P value", "aHR (9
              ["Race", "Asian", "0.88 (0.80,0.97)", "0.012", "0.87 (0.79,0.97)", "0.010"]]
 
 
-def _merged_doc(path, caption, rows):
+def _merged_doc(path, caption, rows, note="Note. aHR = adjusted hazard ratio; Model 1 is unadjusted."):
     """A Word table in which each None cell is merged into the cell before it in its row (a label across two stub
     columns, a spanner across the columns of several models), as Word merges cells."""
     d = docx.Document()
@@ -2726,7 +2726,7 @@ def _merged_doc(path, caption, rows):
             if row[j] is not None and j + 1 < len(row) and row[j + 1] is None:
                 last = next((k for k in range(j + 1, len(row)) if row[k] is not None), len(row)) - 1
                 t.cell(i, j).merge(t.cell(i, last)).text = row[j]
-    d.add_paragraph("Note. aHR = adjusted hazard ratio; Model 1 is unadjusted.")
+    d.add_paragraph(note)
     d.save(str(path))
     return path
 
@@ -2899,3 +2899,29 @@ def test_odds_ratio_heads_and_limits_as_epidemiology_tables_name_them(tmp_path):
     assert len(entries) == 5 and not any(e.codes for e in entries)
     path.write_text(_INJ_PREV.replace("| 1.40 | 1.27 |", "| 1.40 | 0.97 |"), encoding="utf-8")
     assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree"]]
+
+
+# Int J Environ Res Public Health 2018;15:352 (PMC5858421), Table 2 (rows of it): "Odds ratios of one-year mortality …" with
+# heads "Crude Estimate (95% CI)" and, over "Model 1 | Model 2", the spanner "Adjusted Estimate (95% CI)"; marks in the cells
+_IJERPH = [["Characteristics", "Crude Estimate (95% CI)", "Adjusted Estimate (95% CI)", None],
+           ["", "", "Model 1", "Model 2"],
+           ["North", "0.78 (0.73–0.84)", "0.86 (0.79–0.94)", "0.87 *** (0.80–0.94)"],
+           ["Central", "0.92 (0.85–0.99)", "0.96 (0.89–1.04)", "0.97 (0.90–1.05)"],
+           ["Male", "1.69 (1.64–1.74)", "1.67 (1.62–1.72)", "1.67 *** (1.61–1.72)"],
+           ["Dementia", "1.32 (1.23–1.41)", "1.15 (1.06–1.23)", "1.12 ** (1.04–1.20)"]]
+
+
+def test_estimate_heads_in_a_table_its_caption_calls_odds_ratios(tmp_path):
+    """"Crude Estimate (95% CI)" (and the spanner "Adjusted Estimate (95% CI)" over the models' columns) in a table whose
+    caption names one kind of ratio are that ratio's columns: held to the ratio's null 1 and its marks' bounds (they had
+    been read as bare estimates, and the adjusted models not at all)."""
+    note = "Note. Model 1 is adjusted for age and sex."
+    path = _merged_doc(tmp_path / "o.docx", "Table 2. Odds ratios of one-year mortality in relation to patient- and hospital-level "
+                       "characteristics.", _IJERPH, note)
+    entries = audit_file(path)
+    assert [e.found.split(" =")[0] for e in entries] == ["OR", "aOR", "aOR"] * 4 and not any(e.codes for e in entries)
+    assert "OR = 0.87, 95% CI [0.80, 0.94], p < 0.001" not in [e.found for e in entries]  # (no note given here: marks stay marks)
+    rows = [r[:] for r in _IJERPH]
+    rows[3][3] = "1.97 (0.90–1.05)"  # a ratio outside its interval
+    path = _merged_doc(tmp_path / "m.docx", "Table 2. Odds ratios of one-year mortality.", rows, note)
+    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]

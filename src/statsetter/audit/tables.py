@@ -126,6 +126,9 @@ _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\
 _RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|RR|IRR|PR)\d?(?:\s*[a-f†‡§*])?\s*", re.IGNORECASE)
 
 
+# an estimate's head with its interval ("Crude Estimate (95% CI)", "Adjusted estimate (95% CI)"): a ratio's where the table says of which
+_ADJUSTED_SAID = re.compile(r"(?i)\badjusted\b|\bmultivariable\b")
+_ESTIMATE_HEAD = re.compile(r"(?i)\s*((?:un)?adjusted|crude|multivariable|univariable)?\s*estimates?\s*\(\s*95\s?%\s?c\.?i\.?\s*\)\s*")
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
@@ -144,7 +147,7 @@ def _ratio_role(head: str) -> str | None:
     if m is None:
         return None
     name = _RATIO_NAMES.get(" ".join(m.group("name").lower().split()), m.group("name").upper())
-    adjusted = m.group("adj") is not None or re.search(r"(?i)\badjusted\b|\bmultivariable\b", head) is not None
+    adjusted = m.group("adj") is not None or _ADJUSTED_SAID.search(head) is not None
     return f"ratio:{_ratio_name(name, adjusted)}"
 
 
@@ -774,6 +777,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     heads: dict[int, str] = {}  # each column's head as typed
     levels_said = ""  # the header's text and the caption's and note's, for an interval's level
     ratios_said = _RATIOS_SAID.search(f"{caption} {said}") is not None  # a table of odds, hazard or risk ratios
+    kinds = {" ".join(m.group().lower().rstrip("s").split()) for m in _RATIOS_SAID.finditer(f"{caption} {said}")} if ratios_said else set()
+    said_ratio = next(iter(kinds)) if len(kinds) == 1 else None  # the one kind of ratio the caption or note names: an "Estimate (95% CI)"'s
     note_df = _said_df(f"{caption} {said}")
     words_above: dict[int, str] = {}  # each column's words in the rows without numbers above (its head, a spanner's)
     spanned: dict[int, str] = {}  # the ratio a spanner in the row above names, for each column it spans
@@ -786,6 +791,11 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             for c, (u, _) in row.items():
                 if header[c] is None and numbers[c] is None and c in spanned:
                     header[c] = _ratio_role(f"{_head_text(u.text)} {spanned[c]} (95% CI)")
+        if said_ratio is not None:  # "Crude Estimate (95% CI)" in a table its caption calls odds ratios (IJERPH 2018's Table 2)
+            for c, (u, _) in row.items():
+                estimate = _ESTIMATE_HEAD.fullmatch(u.text) if header[c] is None and numbers[c] is None else None
+                if estimate is not None:
+                    header[c] = _ratio_role(f"{estimate.group(1) or ''} {said_ratio} (95% CI)")
         spanned = {}
         if "effect:R_multiple" in header.values() and sum(role is not None for role in header.values()) == 1:
             header = dict.fromkeys(header)  # a lone "R" is a label (a block's, a side's), not a multiple R's head
@@ -797,10 +807,14 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 words_above, in_body = {}, False
             for c, (u, _) in row.items():
                 spanner = _RATIO_SPANNER.search(u.text) if "95" in u.text else None
+                name = spanner.group("name").rstrip("sS") if spanner is not None else \
+                    said_ratio if said_ratio is not None and "95" in u.text and _ESTIMATE_HEAD.fullmatch(u.text) else None
+                if name is not None and _ADJUSTED_SAID.search(u.text):  # ("Adjusted Estimate (95% CI)" over "Model 1 | Model 2")
+                    name = f"adjusted {name}"
                 for k in range(c, c + u.columns):  # (a spanner's words over each column it spans)
                     words_above[k] = f"{words_above.get(k, '')} {u.text}"
-                    if spanner is not None:
-                        spanned[k] = spanner.group("name").rstrip("sS")
+                    if name is not None:
+                        spanned[k] = name
         else:
             in_body = True
         if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
@@ -1011,7 +1025,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 design = None if merged.df else design_readings(rep.symbol, words_above.get(c, ""), f"{caption} {said}", groups, total, "in the table")
                 readings = () if merged.df else design if design is not None else tuple(df_readings(rep.symbol, groups, total, "in the table", welch))
                 found.append(TableStatistic(unit, merged, rep, how, readings))
-    estimates = _estimate_cells(rows, f"{caption} {said}", mark) + _interval_columns(rows, mark)
+    read_whole = {id(t.unit) for t in found}  # (a column read as a ratio's is no bare estimate's too)
+    estimates = _estimate_cells(rows, f"{caption} {said}", mark) + [t for t in _interval_columns(rows, mark) if id(t.unit) not in read_whole]
     used |= {id(rep) for t in estimates for rep in rows[t.unit.cell[1]][t.unit.cell[2]][1]}  # type: ignore[index]  # (the cell's lone p)
     if stars:
         taken = {id(t.unit) for t in found + estimates}
