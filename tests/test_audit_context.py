@@ -2800,6 +2800,18 @@ def test_ratio_columns_under_a_spanner_that_names_the_ratio(tmp_path):
     assert "ci-excludes-estimate" in found["HR = 1.82, 95% CI [1.12, 1.46]"].codes
 
 
+def test_a_pipe_tables_spanner_names_the_ratio_of_the_empty_cells_after_it(tmp_path):
+    """A pipe table cannot merge cells: a spanner naming the ratio stands in its first column with empty cells after it
+    (pandoc's conversion of a merged head leaves it so); it spans them up to the next cell with words (PMC4864252's rows,
+    above). Before, only the first model's column was read."""
+    head = "| " + " | ".join(c or "" for c in _SPANNED_HR[0]) + " |\n|" + "---|" * 7 + "\n"
+    body = "".join("| " + " | ".join(r) + " |\n" for r in _SPANNED_HR[1:])
+    path = tmp_path / "t.md"
+    path.write_text("Table 2. Mortality\n\n" + head + body, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 12 and not any(e.codes for e in entries)
+
+
 def test_a_latex_spanner_names_the_ratio_of_the_columns_it_spans(tmp_path):
     """The same spanner as \\multicolumn{6}{c}{…} over a LaTeX tabular's model columns (PMC4864252's rows, above)."""
     lines = ["Mortality outcome & \\multicolumn{6}{c}{Hazard ratio (95\\% confidence interval)} \\\\"]

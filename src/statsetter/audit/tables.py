@@ -782,6 +782,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     note_df = _said_df(f"{caption} {said}")
     words_above: dict[int, str] = {}  # each column's words in the rows without numbers above (its head, a spanner's)
     spanned: dict[int, str] = {}  # the ratio a spanner in the row above names, for each column it spans
+    width = max((c + row_cells[0].columns - 1 for r in rows for c, row_cells in rows[r].items()), default=0)  # the table's columns
     in_body = False
     for r in sorted(rows):
         row = rows[r]
@@ -813,8 +814,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                     name = f"adjusted {name}"
                 for k in range(c, c + u.columns):  # (a spanner's words over each column it spans)
                     words_above[k] = f"{words_above.get(k, '')} {u.text}"
-                    if name is not None:
-                        spanned[k] = name
+                if name is not None:  # a ratio's spanner also over the empty cells after it (a pipe table, which cannot
+                    after = next((k for k in sorted(row) if k > c), width + 1)  # merge cells, leaves its span so)
+                    spanned.update(dict.fromkeys(range(c, max(c + u.columns, after)), name))
         else:
             in_body = True
         if stat_cells and not heads_in_row and not any(v is not None for v in numbers.values()):
