@@ -622,3 +622,27 @@ def test_a_ratio_named_with_a_few_words_before_its_number():
     for far in ("The hazard ratio for death in the year 2019 was 1.20 (95% CI 1.01-1.43).",
                 "The odds ratio for the association between sleep and mood in the full sample was 1.40 (95% CI 1.1-1.8)."):
         assert not any(e.found.startswith(("hazard", "odds")) for e in audit_units([Unit("line 1", far)]))
+
+
+def test_spss_sig_in_prose_is_a_p():
+    """SPSS labels a p "Sig." ("Look at the column labelled Sig.", the SAGE companion to Field's textbook,
+    studysites.sagepub.com/field4e, chapter 9), and theses paste it into sentences: "t = 2.14, df = 38, Sig. (2-tailed) =
+    .039", "F(2, 97) = 4.51, Sig. = .013", "Asymp. Sig. (2-sided) = .040" (practice). Each is read as the statistic's p
+    (had been read as nothing: the statistic went unchecked, and "Sig." stood for a sentence's end), and the style's p is
+    suggested; "Sig" without SPSS's period is not read. Numbers: scipy's Student t test on the penguins' bill lengths
+    by sex (pingouin's bundled data) and a wrong p beside it."""
+    import pingouin as pg
+    from scipy import stats as st
+
+    data = pg.read_dataset("penguins")
+    male, female = (data[data.sex == s].bill_length_mm.dropna() for s in ("male", "female"))
+    res = st.ttest_ind(male, female)
+    df = len(male) + len(female) - 2
+    typed = f"Males had longer bills, t = {res.statistic:.2f}, df = {df}, Sig. (2-tailed) = .000."
+    (entry,) = audit_units([Unit("line 1", typed)])
+    assert entry.found.endswith("Sig. (2-tailed) = .000") and {"p-zero", "p-symbol"} <= set(entry.codes)
+    assert entry.suggestion.startswith(f"t({df}) = {res.statistic:.2f}, p < .001")
+    wrong = f"Levene's test aside, F(2, 97) = {st.f.isf(0.013, 2, 97):.2f}, Sig. = .130."  # F's p is .013
+    (entry,) = audit_units([Unit("line 1", wrong)])
+    assert "p-does-not-follow" in entry.codes and entry.suggestion.endswith("p = .013 (p recomputed)")
+    assert [e.found for e in audit_units([Unit("line 1", "Signs = 3 were seen; Sig = 5 of them.")])] == []

@@ -549,7 +549,7 @@ def style_findings(rep: Reported, style: Style, alpha: float, text: str, italic:
         ):
             out.append(Finding("p-threshold", "Report the exact p (thresholds only below the style's smallest p).", text[p.start : p.end]))
         letter = _p_letter(style)
-        if p.symbol_text in ("p", "P") and p.symbol_text != letter and letter in ("p", "P"):
+        if (p.symbol_text in ("p", "P") or p.symbol_text[:1] in "SsAE") and p.symbol_text != letter and letter in ("p", "P"):  # (also SPSS's "Sig.")
             out.append(Finding("p-symbol", f"Write the p value's symbol as {letter}, as the style does.", text[p.start : p.end]))
     tight = [(s, e) for s, e in rep.operators if not (text[s:s + 1].isspace() and text[e - 1 : e].isspace())]
     if tight and equations:
@@ -699,7 +699,7 @@ def _italics(rep: Reported, text: str, spans: Sequence[tuple[int, int]], roman: 
     symbols: list[tuple[int, str, str]] = []
     if rep.symbol is not None:
         symbols.append((rep.symbol_start, rep.symbol_text, rep.symbol))
-    if rep.p is not None and rep.p.op != "ns":
+    if rep.p is not None and rep.p.op != "ns" and rep.p.symbol_text in ("p", "P"):  # (not SPSS's "Sig.": a word)
         symbols.append((rep.p.symbol_start, rep.p.symbol_text, "p"))
     for e in rep.effects + rep.descriptives:
         symbols.append((e.symbol_start, e.symbol_text, e.name))

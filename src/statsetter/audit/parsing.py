@@ -305,6 +305,8 @@ _RATIO_LABELLED = rf"{_AFTER_RATIO}\s*+[(\[]\s*+(?P<rlev>\d{{2}}(?:[.,]\d+)?)\s*
 # practice): after the "P", the rest of its name — a p, and the F or χ² in it no statistic of its own
 _STATA_P = r"(?<=P)rob\s*+>\s*+(?:F|chi2|χ2|χ²)"
 _STATA_HEAD = re.compile(r"Prob\s*>\s*$")
+# SPSS's name for a p, pasted into prose: "Sig. = .013", "Sig. (2-tailed) = .039", "Asymp. Sig. (2-sided) = .040" (practice)
+_SPSS_P = r"(?:A(?<![\w]A)symp\.?\s++|E(?<![\w]E)xact\s++)?[Ss](?<![\w][Ss])ig\.(?:\s*+\((?:[12]-(?:tailed|sided))\))?"
 
 
 class _Patterns:
@@ -320,8 +322,8 @@ class _Patterns:
         )
         # not after a mark of significance ("*", "†", "‡", "§", "^", or one and a space): "*p < .05. **p < .01. †p < .10." is a
         # table's note defining its marks, not a reported p
-        self.p = re.compile(rf"[pPn](?:(?<=[pP])(?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?|{_STATA_P})?\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{value}{_EXPONENT}?)"
-                            r"|(?<=n)(?<![\w.]n)(?:\.\s?s\.|s)(?![\w]))")  # a p (or P) and its number, or "ns" / "n.s."
+        self.p = re.compile(rf"(?:[pP](?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?|{_STATA_P})?|{_SPSS_P})\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{value}{_EXPONENT}?)"
+                            r"|n(?<![\w.]n)(?:\.\s?s\.|s)(?![\w])")  # a p (or P, or SPSS's Sig.) and its number, or "ns" / "n.s."
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
         # p < .01", "each p-value ≤ .01"; or their p's listed in order, "ps = .03 and .04" (an "=" only before a list)
         self.shared_p = re.compile(rf"(?P<sym>[pP](?<![\w.*'’][pP])(?:s|['’]s|(?:(?<=[aA]ll\s[pP])(?<!\w[aA]ll\s[pP])|(?<=[bB]oth\s[pP])"
@@ -366,8 +368,9 @@ class _Patterns:
                                     rf"(?:(?P<ci>\d{{2}}(?:[.,]\d+)?\s*+%\s*+(?:CI|C\.I\.)[^,;\[(]{{0,3}}[\[(][^\])]{{1,40}}[\])])\s*+[,;]\s*+)?")
         self.n = re.compile(r"(?P<sym>[Nn])(?<![\w][Nn])\s*+[=¼]\s*+(?P<num>\d{1,3}(?:[,.\u202f\u00a0 ]\d{3})+|\d+)(?![\d.,]\d)")
         # a sentence's end; a blank line or a list item; a table row's end (a Markdown row starts with |, a LaTeX row ends with \\)
-        # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan; "adj. R²" is no end)
-        prose = r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])(?<![aA]dj\.)|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
+        # (each alternative starts with a literal character, its lookbehind after it, for the engine's fast scan; "adj. R²", SPSS's
+        # "Sig. (2-tailed)" and "Asymp. Sig." are no end)
+        prose = r"\.(?<=[^\d\s]\.)(?=\s+[A-Z(])(?<![aA]dj\.)(?<![Ss]ig\.)(?<!Asymp\.)|\.(?<=\d\.)(?=\s+[A-Z])|\n(?=[ \t]*(?:\n|[-*•+]\s|\d+[.)]\s|\|))"
         self.boundary = re.compile(prose + r"|[ \t\n](?<=\\\\[ \t\n])(?:(?<=\n)|[ \t]*\n)")
         # without a LaTeX row's end, for a text without "\\" (where it cannot match): its first characters are then "."
         # and a newline only, not every space (see boundary_in)
@@ -1069,7 +1072,8 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     if number is None:
         return None
     op = _GARBLED.get(op, op[-1] if len(op) > 1 else op)
-    return _new_p(op, number, at, m.end("num"), at, text[at], adjusted)
+    symbol = text[at] if text[at] in "pP" else text[at : m.start("op")].rstrip()  # (SPSS's "Sig. (2-tailed)" as typed)
+    return _new_p(op, number, at, m.end("num"), at, symbol, adjusted)
 
 
 def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int, rare: bool = True) -> int | None:
