@@ -646,3 +646,23 @@ def test_spss_sig_in_prose_is_a_p():
     (entry,) = audit_units([Unit("line 1", wrong)])
     assert "p-does-not-follow" in entry.codes and entry.suggestion.endswith("p = .013 (p recomputed)")
     assert [e.found for e in audit_units([Unit("line 1", "Signs = 3 were seen; Sig = 5 of them.")])] == []
+
+
+def test_a_ratio_after_another_ratios_p_is_a_statistic_of_its_own():
+    """"(OR = …, 95% CI …, p = …), and the adjusted OR = … (95% CI …)": the second ratio had been read into the first's
+    statistic (their names differ), so its suggestion put the first's p after both. A ratio after the p that closed a
+    ratio's cluster now starts a statistic of its own (JMIR's "(P=.50; OR 2.72, …)", p first, keeps its one statistic).
+    Numbers: statsmodels' logit of GRADE on PSI in its spector data, alone and with GPA and TUCE."""
+    import numpy as np
+    import statsmodels.api as sm
+
+    data = sm.datasets.spector.load_pandas().data
+    crude = sm.Logit(data["GRADE"], sm.add_constant(data[["PSI"]])).fit(disp=0)
+    adjusted = sm.Logit(data["GRADE"], sm.add_constant(data[["GPA", "TUCE", "PSI"]])).fit(disp=0)
+    (c_low, c_high), (a_low, a_high) = (np.exp(m.conf_int().loc["PSI"]) for m in (crude, adjusted))
+    text = (f"Grades improved with the new method (OR = {np.exp(crude.params['PSI']):.2f}, 95% CI {c_low:.2f}–{c_high:.2f}, "
+            f"p = {crude.pvalues['PSI']:.3f}), and the adjusted OR = {np.exp(adjusted.params['PSI']):.2f} "
+            f"(95% CI {a_low:.2f}-{a_high:.2f}).")
+    first, second = audit_units([Unit("line 1", text)], suggest_all=True)
+    assert first.found.startswith("OR = ") and first.found.endswith(f"p = {crude.pvalues['PSI']:.3f}")
+    assert second.found.startswith("adjusted OR") and second.suggestion.startswith("aOR = ") and ", p " not in second.suggestion

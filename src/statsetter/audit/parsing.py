@@ -1140,6 +1140,10 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                 paired = _mean_and_sd(pat, text, m, number)
             else:
                 paired = None
+            if rep.symbol is None and rep.p is not None and m.re is pat.ratio and rep.p.end <= m.start() and rep.effects and \
+                    rep.effects[-1].start < rep.p.start:  # a ratio after the p that closed a ratio's cluster: another's
+                again = at  # ("PR = 1.45; …; p < 0.001); adjusted PR = 1.38 (…)"; not JMIR's "(P=.50; OR 2.72, …)", p first)
+                break
             if rep.symbol is None and any(e.name == name for e in (rep.descriptives if name in _DESCRIPTIVE else rep.effects)):
                 again = at  # a name read again: another cluster ("(M = 4.40, SD = 2.22) … (n = 28, M = 3.11, …)"), with the n
                 # just before it, which this cluster had read for its own
