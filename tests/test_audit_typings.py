@@ -600,6 +600,8 @@ def test_a_prevalence_ratio_is_read_as_a_ratio():
     assert "ci-p-disagree" in entry.codes
     (entry,) = audit_units([Unit("line 1", f"The adjusted PR = {high + 1:.2f} (95% CI {low:.2f}-{high:.2f}) held.")])
     assert "ci-excludes-estimate" in entry.codes and entry.found.startswith("adjusted PR")
+    (entry,) = audit_units([Unit("line 1", f"The adjusted PR = {pr:.2f} (95% CI {low:.2f}-{high:.2f}) held.")], restyle=True)
+    assert entry.revision is not None and entry.revision.plain().startswith("aPR = ")  # ("PR" is the ratio's own name, not a lost word)
 
 
 # Quotations of published sentences in BMJ Evidence-Based Medicine's "Example uses of ORs" (its Table 2; ebm.bmj.com)

@@ -356,7 +356,8 @@ def _lost_word(rep: Reported, old: str, new: str) -> str:
 
 _RANGE_WORDS = frozenset({"to"})
 _LABEL_WORDS = frozenset({"for", "of", "the", "mean", "difference"})
-_RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "rate", "ratio", "adjusted", "adj", "or", "hr", "rr", "irr"})  # ("adjusted OR": aOR)
+_RATIO_WORDS = frozenset({"odds", "hazard", "risk", "relative", "incidence", "prevalence", "rate", "ratio", "adjusted", "adj", "or", "hr", "rr", "irr",
+                          "pr"})  # ("adjusted OR": aOR)
 _SYMBOL_WORDS = frozenset({"statistic", "value"})
 _DF_WORDS = frozenset({"on", "and", "with", "df"})
 _P_WORDS = frozenset({"prob", "f", "chi2", "sig", "asymp", "exact"})  # (Stata's "Prob > F", SPSS's "Sig.": the p's own name)
