@@ -668,3 +668,31 @@ def test_a_ratio_after_another_ratios_p_is_a_statistic_of_its_own():
     first, second = audit_units([Unit("line 1", text)], suggest_all=True)
     assert first.found.startswith("OR = ") and first.found.endswith(f"p = {crude.pvalues['PSI']:.3f}")
     assert second.found.startswith("adjusted OR") and second.suggestion.startswith("aOR = ") and ", p " not in second.suggestion
+
+
+def test_cohens_f_and_f_squared_are_held_to_their_f():
+    """Cohen's f and f² (Cohen, 1988; memory for the book, the definitions are the trade's): f² = F·df₁/df₂ for the
+    partial effect (a regression's R²/(1 − R²) for its model's F), smaller otherwise; so an f² above F·df₁/df₂ (or an f
+    above its root) cannot be the F's. They had not been read. They can exceed 1: a leading zero in APA. Numbers:
+    statsmodels' OLS of its bundled stack loss data (its R² and F), and pingouin's one-way ANOVA of its penguins data."""
+    import pingouin as pg
+    import statsmodels.api as sm
+    import statsmodels.formula.api as smf
+
+    fit = smf.ols("STACKLOSS ~ AIRFLOW + WATERTEMP + ACIDCONC", sm.datasets.stackloss.load_pandas().data).fit()
+    f2 = fit.rsquared / (1 - fit.rsquared)
+    text = f"F({fit.df_model:.0f}, {fit.df_resid:.0f}) = {fit.fvalue:.2f}, p < .001, R² = {fit.rsquared:.2f}, f² = {f2:.2f}".replace("= 0.", "= .")
+    (entry,) = audit_units([Unit("line 1", text)])
+    assert entry.found.endswith(f"f² = {f2:.2f}") and entry.codes == []
+    (entry,) = audit_units([Unit("line 1", text.replace(f"f² = {f2:.2f}", f"f² = {2 * f2 + 1:.2f}"))])
+    assert "effect-does-not-fit" in entry.codes
+    aov = pg.anova(data=pg.read_dataset("penguins"), dv="bill_length_mm", between="species", detailed=True)
+    row = aov.iloc[0]
+    f = (row["np2"] / (1 - row["np2"])) ** 0.5
+    typed = f"F({row['DF']:.0f}, {aov.iloc[1]['DF']:.0f}) = {row['F']:.2f}, p < .001, Cohen's f = {f:.2f}"
+    (entry,) = audit_units([Unit("line 1", typed)])
+    assert entry.codes == []
+    (entry,) = audit_units([Unit("line 1", typed.replace(f"f = {f:.2f}", f"f = {f + 0.5:.2f}"))])
+    assert "effect-does-not-fit" in entry.codes and "f at most" in entry.message
+    (entry,) = audit_units([Unit("line 1", "A power analysis assumed Cohen’s f² = .15.")])
+    assert entry.codes == ["missing-leading-zero"] and entry.suggestion == "Cohen’s f² = 0.15"

@@ -832,6 +832,14 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                 span = f"{bound[0]:.3f}" if f"{bound[0]:.3f}" == f"{bound[1]:.3f}" else f"{bound[0]:.3f} to {bound[1]:.3f}"
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
                                    f"{rep.value.text}: {relation} {span}.", f"{e.symbol_text} = {e.number.text}"))
+        most = high * h1 / l2  # Cohen's f² = F·df₁/df₂ in its partial form (η²p/(1 − η²p)), smaller otherwise
+        for e in rep.effects:
+            if e.name in ("f", "f2"):
+                least = max(e.number.value - e.number.half_unit, 0.0) ** (2 if e.name == "f" else 1)
+                if least > most + 1e-12:
+                    out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} does not fit F({rep.df[0].text}, {rep.df[1].text}) = "
+                                       f"{rep.value.text}: f² is at most F·df₁/df₂, here {most:.3f}" + (f" (f at most {math.sqrt(most):.3f})." if e.name == "f" else "."),
+                                       f"{e.symbol_text} = {e.number.text}"))
         out += _r_squared_fits(rep, r2, bound[0]) if r2 is not None and whole else []
         change = next((e for e in rep.effects if e.name == "delta_R2"), None)
         if change is not None and r2 is not None and whole:  # a regression step's F change: (ΔR²/df₁)/((1 − R²)/df₂)

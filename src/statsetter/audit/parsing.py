@@ -153,7 +153,7 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−–", "0123456789
 
 # each alternative starts with a literal character; `_guarded` puts the "not after a letter or point" test right after it
 # (Χ: the Greek capital chi, as some symbol fonts and keyboards type it)
-_SYMBOLS = (r"Δ\s?F", r"χ\s?[²2]", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
+_SYMBOLS = (r"Δ\s?F", r"χ\s?[²2](?:_?[Fr](?![\w]))?", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
             r"X\s?²", r"X\^2", r"X[- ]squared",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
             # "F-statistic" as R's summary of a linear model prints it ("F-statistic: 4.51"; "t value", "F-value" as output columns
@@ -242,6 +242,9 @@ _EFFECT_NAMES = [
     (r"C(?<![\w]C)ronbach(?:['’]s)?\s+(?:α|alpha)(?![\w])", "alpha"),
     (r"α[- ]?level|a(?<![\w]a)lpha[- ]level", "alpha_level"),
     (r"α(?![\w])|a(?<![\w]a)lpha(?![\w])", "alpha_bare"),
+    # Cohen's f and f² (an F's effect size: f² = F·df₁/df₂ for its partial form, at most that otherwise): named, or f² alone
+    (r"C(?<![\w]C)ohen(?:['’]s)?\s+f\s?(?:[²2]|\^2)(?![\w])", "f2"),  # (f² alone: _RARE_EFFECTS)
+    (r"C(?<![\w]C)ohen(?:['’]s)?\s+f(?![\w²^])", "f"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
     (r"d(?<![\w]d)", "d"),
@@ -282,9 +285,12 @@ _RATIOS = [
 ]
 _DESCRIPTIVE = {"M", "SD", "Mdn"}
 _CORRELATIONS = frozenset({"r", "rs", "tau_b"})
-# a mediation's indirect effect, a·b, with its (bootstrap) interval: inside it — a pattern of its own, searched only where a
-# clause has an "ab" or "a×b" (in the effect sizes' pattern its "a" would be tried at every "a" of the prose)
+# a mediation's indirect effect, a·b, with its (bootstrap) interval: inside it — and Cohen's f² typed alone ("f² = .15"): a
+# pattern of their own, searched only where a clause has one of them and "=" (in the effect sizes' pattern the "a" and "f"
+# would be tried at every "a" and "f" of the prose)
 _INDIRECT = (r"a(?<![\w]a)(?:b|×b|·b|\*b)(?![\w])", "ab")
+_RARE_EFFECTS = [_INDIRECT, (r"f(?<![\w]f)\s?(?:²|\^2)", "f2")]
+_RARE_NAME = "|".join(pattern for pattern, _ in _RARE_EFFECTS)
 # a structural equation model's fit indices, which a χ² test of fit is reported with (practice)
 _FIT_INDEX = re.compile(r"\b(?:CFI|TLI|NNFI|RMSEA|SRMR|GFI|AGFI|NFI|IFI|AIC|BIC|WRMR)\b")
 # where a ratio's (or a difference's) name ends: every name in _RATIOS ends so (the lookbehinds its patterns start from)
@@ -347,7 +353,7 @@ class _Patterns:
             rf"\s*[:=,]?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?\s*[)\]]")
         self.ratio_ci = re.compile(rf"\s*,\s*(?P<a>{num})\s*(?:–|—|-|to)\s*(?P<b>{num})(?![\d.,]?\d|\s?%)")  # (no brackets: a ratio's only)
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
-        self.indirect = re.compile(rf"(?P<name>{_INDIRECT[0]})\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
+        self.indirect = re.compile(rf"(?P<name>{_RARE_NAME})\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
         # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
         self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
@@ -475,7 +481,7 @@ _NAMED_FIRST = [
     (r"ω\s?(?:[²2]|\^2)\s?(?:p|_p|ₚ)|ωp\s?[²2]|ω_p\^?2|omega\s?(?:[²2]|\^2)\s?(?:p|_p)|partial\s+(?:ω|omega)\s?(?:[²2]|\^2|squared)", "omega2_p"),
     (r"R\s?(?:[²2]|\^2|[- ][Ss]quared?)\s?[Cc]hange", "delta_R2"),
 ]
-_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _RATIOS + _NAMED_FIRST + _EFFECT_NAMES + [_INDIRECT]]
+_EFFECT_FULL = [(re.compile(pattern), name) for pattern, name in _RATIOS + _NAMED_FIRST + _EFFECT_NAMES + _RARE_EFFECTS]
 
 
 @functools.lru_cache(maxsize=4096)  # likewise its effect names: each tried against the patterns once
@@ -911,7 +917,7 @@ def _rare_words(text: str) -> bool:
             or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 
-_INDIRECT_TYPED = re.compile(_INDIRECT[0] + r"\s*[=¼]")  # (its name and "=": asked of a paragraph, then of a clause)
+_INDIRECT_TYPED = re.compile(rf"(?:{_RARE_NAME})\s*[=¼]")  # (a name and "=": asked of a paragraph, then of a clause)
 _LAST_INDIRECT: list = [None, False]  # the last paragraph asked, and whether it holds an indirect effect's name and "="
 
 

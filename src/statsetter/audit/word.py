@@ -60,14 +60,21 @@ def house_text(rep: Reported, style: "Style", alpha: float, *, with_p: bool = Tr
     return None if text is None else named(rep, text, style)
 
 
+# effect sizes typed with the name of the one who proposed them before the symbol the style writes alone: the name, and the
+# symbol's spellings it comes before
+_EPONYM_SYMBOLS = {"alpha": ("Cronbach", ("α", "alpha")), "f2": ("Cohen", ("f",))}
+
+
 def named(rep: Reported, text: StyledText, style: "Style | None" = None) -> StyledText:
     """``text``, the statistic restyled, after the name its χ² was typed with alone ("Wald = 6.13": "Wald χ²(1) =
     6.13") or the name before a reliability's α ("Cronbach's α = .81"; "Cronbach α" in a style without possessives); else as it is."""
     if rep.symbol == "chi2" and rep.symbol_text.startswith("Wald"):
         return StyledText("Wald ") + text
-    if rep.symbol is None and rep.effects and rep.effects[0].name == "alpha" and rep.effects[0].symbol_text.startswith("Cronbach"):
-        typed = rep.effects[0].symbol_text  # "Cronbach's alpha = 0.81": "Cronbach's α = .81", the author's name for it kept
-        name = typed[: max(typed.find("α"), typed.find("alpha"))]
+    first = rep.effects[0] if rep.symbol is None and rep.effects else None
+    if first is not None and first.name in _EPONYM_SYMBOLS and first.symbol_text.startswith(_EPONYM_SYMBOLS[first.name][0]) and \
+            not text.plain().startswith(_EPONYM_SYMBOLS[first.name][0]):
+        typed = first.symbol_text  # "Cronbach's alpha = 0.81": "Cronbach's α = .81", the author's name for it kept ("Cohen’s f² = …")
+        name = typed[: max(typed.find(letter) for letter in _EPONYM_SYMBOLS[first.name][1])]
         if style is not None and not style.wording.get("possessive", True):  # AMA 11: "Cronbach α"
             name = re.sub(r"['’]s(?=\s)", "", name)
         return StyledText(name) + text
