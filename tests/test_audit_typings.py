@@ -696,3 +696,32 @@ def test_cohens_f_and_f_squared_are_held_to_their_f():
     assert "effect-does-not-fit" in entry.codes and "f at most" in entry.message
     (entry,) = audit_units([Unit("line 1", "A power analysis assumed Cohen’s f² = .15.")])
     assert entry.codes == ["missing-leading-zero"] and entry.suggestion == "Cohen’s f² = 0.15"
+
+
+def test_a_meta_analysis_i_squared_is_held_to_its_q():
+    """I² = 100% × (Q − df)/Q, negative values set to 0 (Higgins & Thompson, 2002; the definition as an open article
+    restates it, pubcompare.ai's protocol EZ3FHJMBdNj1hjtA878_), beside its Q (or χ², as RevMan's forest plots print
+    "Chi² = …, df = … (P = …); I² = …%", practice). I² had not been read. Numbers: statsmodels' DerSimonian–Laird
+    combination of the sex difference in flipper length within each species and island of pingouin's penguins data."""
+    import numpy as np
+    import pingouin as pg
+    from scipy import stats as st
+    from statsmodels.stats.meta_analysis import combine_effects, effectsize_smd
+
+    data = pg.read_dataset("penguins").dropna(subset=["sex"])
+    effects, variances = [], []
+    for _, g in data.groupby(["species", "island"]):
+        m, f = (g[g.sex == s]["flipper_length_mm"].dropna() for s in ("male", "female"))
+        e, v = effectsize_smd(m.mean(), m.std(), len(m), f.mean(), f.std(), len(f))
+        effects.append(e)
+        variances.append(v)
+    res = combine_effects(np.array(effects), np.array(variances), method_re="dl")
+    df = res.k - 1
+    text = f"Heterogeneity was substantial, Q({df}) = {res.q:.2f}, p = {st.chi2.sf(res.q, df):.3f}, I² = {100 * res.i2:.0f}%.".replace("= 0.", "= .")
+    (entry,) = audit_units([Unit("line 1", text)], restyle=True)
+    assert entry.found.endswith(f"I² = {100 * res.i2:.0f}%") and entry.codes == [] and entry.revision is None
+    (entry,) = audit_units([Unit("line 1", text.replace(f"{100 * res.i2:.0f}%", f"{100 * res.i2 / 2:.0f}%"))])
+    assert entry.codes == ["effect-does-not-fit"] and "(Q − df)/Q" in entry.message
+    revman = f"Heterogeneity: Chi² = {res.q:.2f}, df = {df} (P = {st.chi2.sf(res.q, df):.3f}); I² = {100 * res.i2:.0f}%"
+    (entry,) = audit_units([Unit("line 1", revman)])
+    assert "effect-does-not-fit" not in entry.codes and "p-does-not-follow" not in entry.codes

@@ -626,8 +626,8 @@ def _decimals(rep: Reported, num: Numbers, alpha: float, accept: int = 99) -> li
         if rep.value.decimals != want:
             wrong.append(f"{rep.value.text} ({want} wanted)")
     for e in rep.effects:
-        if e.name in ("MD", "alpha_level"):  # a difference in the measure's own units: its decimals are the measure's; a significance
-            continue  # level is as the design chose it (α = .001 is no rounding)
+        if e.name in ("MD", "alpha_level", "I2"):  # a difference in the measure's own units: its decimals are the measure's; a
+            continue  # significance level is as the design chose it (α = .001 is no rounding); an I² a percent
         want = num.decimals_for(e.name)
         if e.number.decimals != want:
             wrong.append(f"{e.number.text} ({want} wanted)")
@@ -852,7 +852,9 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
                     out.append(Finding("effect-does-not-fit", f"{change.symbol_text} = {change.number.text} with {r2.symbol_text} = {r2.number.text} does not fit "
                                        f"F({rep.df[0].text}, {rep.df[1].text}) = {rep.value.text}: (ΔR²/df₁)/((1 − R²)/df₂) gives {expected[0]:.2f} to "
                                        f"{expected[1]:.2f}.", f"{change.symbol_text} = {change.number.text}, {r2.symbol_text} = {r2.number.text}"))
-    elif rep.symbol == "chi2" and len(rep.df) == 1 and rep.n is not None and rep.n.value > 0 and rep.df[0].value >= 1:
+    if rep.symbol in ("Q", "chi2") and len(rep.df) == 1 and rep.df[0].value >= 1 and low > 0:
+        out += _heterogeneity_fits(rep, low, high)
+    if rep.symbol == "chi2" and len(rep.df) == 1 and rep.n is not None and rep.n.value > 0 and rep.df[0].value >= 1:
         least = math.sqrt(low / (rep.n.value * rep.df[0].value))
         for e in rep.effects:
             if e.name in ("V", "phi") and e.number.value >= 0 and e.number.value + e.number.half_unit < least - 1e-12:
@@ -864,6 +866,23 @@ def effect_from_f_or_chi2(rep: Reported) -> list[Finding]:
             if e.name == "V" and rep.df[0].value >= 2 and e.number.value - e.number.half_unit > most + 1e-12:
                 out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text} is too large for χ²({rep.df[0].text}, N = {rep.n.text}) = "
                                    f"{rep.value.text}: √(χ²/N), the largest V any table gives it, is {most:.3f}.", f"{e.symbol_text} = {e.number.text}"))
+    return out
+
+
+def _heterogeneity_fits(rep: Reported, low: float, high: float) -> list[Finding]:
+    """A meta-analysis's I², in percent, against its Q (or χ²) on df: I² = max(0, (Q − df)/Q) (Higgins & Thompson, 2002),
+    over the values the printed Q and I² stand for (an I² is read only with its "%")."""
+    df = rep.df[0].value
+    out = []
+    for e in rep.effects:
+        if e.name != "I2":
+            continue
+        expected = (max(0.0, (low - df) / low) * 100, max(0.0, (high - df) / high) * 100)
+        shown = (e.number.value - e.number.half_unit, e.number.value + e.number.half_unit)
+        if not _overlap(expected, shown):
+            span = f"{expected[0]:.1f}%" if f"{expected[0]:.1f}" == f"{expected[1]:.1f}" else f"{expected[0]:.1f}% to {expected[1]:.1f}%"
+            out.append(Finding("effect-does-not-fit", f"{e.symbol_text} = {e.number.text}% does not fit {rep.symbol_text}({rep.df[0].text}) = "
+                               f"{rep.value.text}: (Q − df)/Q gives {span}.", f"{e.symbol_text} = {e.number.text}%"))  # type: ignore[union-attr]
     return out
 
 

@@ -245,6 +245,8 @@ _EFFECT_NAMES = [
     # Cohen's f and f² (an F's effect size: f² = F·df₁/df₂ for its partial form, at most that otherwise): named, or f² alone
     (r"C(?<![\w]C)ohen(?:['’]s)?\s+f\s?(?:[²2]|\^2)(?![\w])", "f2"),  # (f² alone: _RARE_EFFECTS)
     (r"C(?<![\w]C)ohen(?:['’]s)?\s+f(?![\w²^])", "f"),
+    # a meta-analysis's I² (Higgins & Thompson, 2002), in percent: (Q − df)/Q of the Q (or χ²) beside it
+    (r"I(?<![\w]I)\s?(?:[²2]|\^2)(?![\w])", "I2"),
     (r"d(?<![\w]d)_?z", "d_z"),
     (r"d(?<![\w]d)_?av", "d_av"),
     (r"d(?<![\w]d)", "d"),
@@ -1134,6 +1136,9 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                 name = _bare_alpha(text, number.value)
                 if name is None:
                     continue
+            percent = _PERCENT_AFTER.match(text, number.end) if name == "I2" else None
+            if name == "I2" and (percent is None or rep.symbol not in ("Q", "chi2")):  # (read with the Q it is checked against, in
+                continue  # percent: not as a proportion, nor beside a pooled effect, whose revision it would stop)
             if rep.symbol is not None and name in _DESCRIPTIVE and not rep.descriptives and _WORDS.search(text, last_end, m.start()):
                 continue  # a group's mean after words ("F(1, 38) = 4.69, p = .037, with more for familiar faces (M = 63.9%) than …"):
                 # the groups', not the test's: read as descriptives of their own, and the test restyled without them
@@ -1178,8 +1183,11 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
                 if ci is not None:
                     covered = max(covered, ci.end)
                     last_end = max(last_end, ci.end)
-            effect = _new_effect(name, number, m.start(), number.end, m.start("name"), m.group("name"), ci)
+            effect = _new_effect(name, number, m.start(), number.end if percent is None else percent.end(), m.start("name"), m.group("name"), ci)
             (rep.descriptives if name in _DESCRIPTIVE else rep.effects).append(effect)
+            if percent is not None:  # (the statistic's text ends after the I²'s percent sign)
+                last_end = max(last_end, percent.end())
+                covered = max(covered, percent.end())
         elif kind == "df" and (not rep.df or (clause_df and rep.symbol == "F" and len(rep.df) == 1)):
             first, other = ("num", "num2") if m.group("num") is not None else ("pre", "pre2")
             number = pat.to_number(m.group(first), m.start(first))
@@ -1224,6 +1232,7 @@ def _bare_alpha(text: str, value: float) -> str | None:
     return None if above else "alpha"
 
 
+_PERCENT_AFTER = re.compile(r"\s?%")
 _WORDS = re.compile(r"[^\W\d_]{2}")  # a word between a statistic's parts (two letters: "vs", "in", "with")
 _PLUS_MINUS_MEAN = re.compile(r"(?:\b[Mm]ean|(?<![\w])M)\s*±\s*$")  # "M ± " or "mean ± " before an SD's name
 _PLUS_MINUS_VALUE = re.compile(r"\s*±\s*([-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))")

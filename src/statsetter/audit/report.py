@@ -516,7 +516,7 @@ def _audit_units(
                 findings += disagree
         if rep.symbol == "F" and local is not None and step[0] is unit and _STEP_BETWEEN.fullmatch(unit.text, step[1], rep.start):
             findings += effect_from_f_or_chi2(replace(rep, effects=rep.effects + step[2]))  # "ΔR² = .05, F(1, 96) = 5.32"
-        elif rep.symbol in ("F", "chi2") and rep.effects:
+        elif rep.symbol in ("F", "chi2", "Q") and rep.effects:
             findings += effect_from_f_or_chi2(rep)
         if local is not None and rep.symbol is None and rep.p is None and rep.effects and all(e.name in ("delta_R2", "R2", "R2_adj") for e in rep.effects):
             step = (unit, rep.end, rep.effects)  # a regression step's R² change just before its F: the F's (checked with it)

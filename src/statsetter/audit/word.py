@@ -87,8 +87,8 @@ def _house_text(rep: Reported, style: "Style", alpha: float, with_p: bool) -> St
 
     if rep.symbol is None and rep.descriptives:
         return descriptives_text(rep, style, alpha)
-    if any(e.name in ("MD", "alpha_level") for e in rep.effects):  # a difference in words ("mean difference, −2.1"), a significance
-        return None  # level ("α = .001", as the design set it): no form of the style's
+    if any(e.name in ("MD", "alpha_level", "I2") for e in rep.effects):  # a difference in words ("mean difference, −2.1"), a
+        return None  # significance level ("α = .001", as the design set it), an I² in percent: no form of the style's
     try:
         record = to_record(rep, alpha, style)
         if rep.op != "=" and not with_p:  # (an exact p the author gave, doubted, is not repeated either)
@@ -264,6 +264,8 @@ def restyled(rep: Reported, style: "Style", alpha: float, findings: Sequence[Fin
             return None, "a difference given in words with its interval has no symbol in the style; it is checked and left as typed"
         if any(e.name == "alpha_level" for e in rep.effects):
             return None, "a significance level is checked for its leading zero and left as typed (its decimals are the design's)"
+        if any(e.name == "I2" for e in rep.effects):
+            return None, "an I² in percent is checked against its Q and left as typed"
         bare = next((ci for ci in [rep.ci] + [e.ci for e in rep.effects] if ci is not None and ci.level is None), None)
         if bare is not None:
             return None, (f"its interval is typed without its level ({rep.text[bare.start - rep.start : bare.end - rep.start]}); "
