@@ -355,7 +355,7 @@ class _Patterns:
             rf"\s*[:=,]?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?\s*[)\]]")
         self.ratio_ci = re.compile(rf"\s*,\s*(?P<a>{num})\s*(?:–|—|-|to)\s*(?P<b>{num})(?![\d.,]?\d|\s?%)")  # (no brackets: a ratio's only)
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
-        self.indirect = re.compile(rf"(?P<name>{_RARE_NAME})\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
+        self.rare = re.compile(rf"(?P<name>{_RARE_NAME})\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
         # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
         self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
@@ -919,16 +919,16 @@ def _rare_words(text: str) -> bool:
             or "¼" in text or "b 0" in text or "b ." in text or "N 0" in text or "N ." in text or "p , " in text or "p 5 " in text or "p . " in text)
 
 
-_INDIRECT_TYPED = re.compile(rf"(?:{_RARE_NAME})\s*[=¼]")  # (a name and "=": asked of a paragraph, then of a clause)
-_LAST_INDIRECT: list = [None, False]  # the last paragraph asked, and whether it holds an indirect effect's name and "="
+_RARE_TYPED = re.compile(rf"(?:{_RARE_NAME})\s*[=¼]")  # (a name and "=": asked of a paragraph, then of a clause)
+_LAST_RARE: list = [None, False]  # the last paragraph asked, and whether it holds a rare effect's name and "="
 
 
-def _indirect_in(text: str, start: int, end: int) -> bool:
-    """Whether text[start:end] may hold a mediation's indirect effect, "ab = ", "a×b = " (asked of the paragraph once:
-    most hold none, and every clause of it is asked)."""
-    if _LAST_INDIRECT[0] is not text:
-        _LAST_INDIRECT[0], _LAST_INDIRECT[1] = text, _INDIRECT_TYPED.search(text) is not None
-    return _LAST_INDIRECT[1] and _INDIRECT_TYPED.search(text, start, end) is not None
+def _rare_effect_in(text: str, start: int, end: int) -> bool:
+    """Whether text[start:end] may hold one of _RARE_EFFECTS — a mediation's indirect effect, "ab = ", "a×b = ", or an
+    f² typed alone, "f² = " — (asked of the paragraph once: most hold none, and every clause of it is asked)."""
+    if _LAST_RARE[0] is not text:
+        _LAST_RARE[0], _LAST_RARE[1] = text, _RARE_TYPED.search(text) is not None
+    return _LAST_RARE[1] and _RARE_TYPED.search(text, start, end) is not None
 
 
 def _anything_in(text: str, start: int, end: int, rare: bool = True) -> bool:
@@ -966,7 +966,7 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
     if not _anything_in(text, start, end, rare):
         return []
     ratios = _ratios_in(text, start, end, rare)
-    searched = (pat.p, pat.effect) + ((pat.ratio,) if ratios else ()) + ((pat.indirect,) if _indirect_in(text, start, end) else ())
+    searched = (pat.p, pat.effect) + ((pat.ratio,) if ratios else ()) + ((pat.rare,) if _rare_effect_in(text, start, end) else ())
     following = {regex: regex.search(text, start, end) for regex in searched}
     out: list[Reported] = []
     while start < end:
@@ -1094,7 +1094,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     ratios = _ratios_in(text, start, end, rare)
     for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
                                 ("effect", pat.ratio, ratios),
-                                ("effect", pat.indirect, equals and _indirect_in(text, start, end)),
+                                ("effect", pat.rare, equals and _rare_effect_in(text, start, end)),
                                 ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
