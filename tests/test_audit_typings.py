@@ -725,3 +725,15 @@ def test_a_meta_analysis_i_squared_is_held_to_its_q():
     revman = f"Heterogeneity: Chi² = {res.q:.2f}, df = {df} (P = {st.chi2.sf(res.q, df):.3f}); I² = {100 * res.i2:.0f}%"
     (entry,) = audit_units([Unit("line 1", revman)])
     assert "effect-does-not-fit" not in entry.codes and "p-does-not-follow" not in entry.codes
+
+
+def test_ama_drops_a_curly_possessive_too():
+    """AMA 11 writes eponyms without the possessive ("Cronbach α", "Welch t test"; docs/reporting-rules.md, memory); the
+    styles' own symbols type the apostrophe curly ("Cliff’s d", "Cohen’s f"), which the rule had missed, so an AMA
+    suggestion kept "Cliff’s". Straight and curly are both dropped now; APA keeps both."""
+    (entry,) = audit_units([Unit("line 1", "U = 45, p = .20, Cliff’s d = .11")], style="ama11", suggest_all=True)
+    assert entry.suggestion.endswith("Cliff d = 0.11")
+    (entry,) = audit_units([Unit("line 1", "F(3, 116) = 2.89, p = .04, Cohen's f = 0.27")], style="ama11", suggest_all=True)
+    assert entry.suggestion.endswith("Cohen f = 0.27")
+    (entry,) = audit_units([Unit("line 1", "U = 45, p = .20, Cliff’s d = .11")], suggest_all=True)
+    assert entry.suggestion.endswith("Cliff’s d = .11")

@@ -512,13 +512,13 @@ def _tidy(markup: str) -> str:
     return _SPACE_PUNCT.sub(r"\1", text)
 
 
-_POSSESSIVE = re.compile(r"\b(Welch|Student|Fisher|Cronbach|Kendall|Pearson|Spearman|Cohen|Levene|Bartlett|Tukey|Mauchly|Hedges|McNemar|Cochran|Friedman|Mann|Wilcoxon|Greenhouse|Huynh)(?:'s|&#39;s|'|&#39;)(?=[\s\u00a0\u202f<])")
+_POSSESSIVE = re.compile(r"\b(Welch|Student|Fisher|Cronbach|Kendall|Pearson|Spearman|Cohen|Cliff|Levene|Bartlett|Tukey|Mauchly|Hedges|McNemar|Cochran|Friedman|Mann|Wilcoxon|Greenhouse|Huynh)(?:['’]s|&#39;s|['’]|&#39;)(?=[\s\u00a0\u202f<])")  # (curly too: the styles' own symbols, "Cliff’s d", type it so)
 
 
 def eponyms(text: str, style: Style) -> str:
     """Methods named after people as the style writes them: "Welch's t test"
     (APA 7) or "Welch t test" (AMA 11 drops the possessive)."""
-    if style.wording.get("possessive", True) or ("'" not in text and "&#39;" not in text):
+    if style.wording.get("possessive", True) or ("'" not in text and "&#39;" not in text and "’" not in text):
         return text
     return _POSSESSIVE.sub(r"\1", text)
 
