@@ -737,3 +737,17 @@ def test_ama_drops_a_curly_possessive_too():
     assert entry.suggestion.endswith("Cohen f = 0.27")
     (entry,) = audit_units([Unit("line 1", "U = 45, p = .20, Cliff’s d = .11")], suggest_all=True)
     assert entry.suggestion.endswith("Cliff’s d = .11")
+
+
+def test_an_adjusted_ratio_at_a_sentences_start():
+    """"Adjusted OR = …" opening a sentence (practice) is the adjusted ratio, as "adjusted OR" within one is (it had been
+    read as a plain OR after the word). Numbers: statsmodels' logit of GRADE on GPA, TUCE and PSI in its spector data."""
+    import numpy as np
+    import statsmodels.api as sm
+
+    data = sm.datasets.spector.load_pandas().data
+    fit = sm.Logit(data["GRADE"], sm.add_constant(data[["GPA", "TUCE", "PSI"]])).fit(disp=0)
+    low, high = np.exp(fit.conf_int().loc["PSI"])
+    text = f"Adjusted OR = {np.exp(fit.params['PSI']):.2f} (95% CI {low:.2f}–{high:.2f}) for the new method."
+    (entry,) = audit_units([Unit("line 1", text)], suggest_all=True)
+    assert entry.found.startswith("Adjusted OR") and entry.suggestion.startswith("aOR = ")

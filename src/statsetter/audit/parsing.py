@@ -262,23 +262,23 @@ _EFFECT_NAMES = [
 # 0.76", "AOR: 8.32", "OR 2.72", "odds ratio of 1.7"): a pattern of their own, searched only where a capital R or the
 # words are (the other effect sizes' pattern keeps its fast scan and its one test after a name, "=")
 _RATIOS = [
-    (r"a(?<![\w]a)OR|A(?<![\w]A)OR|a(?<![\w]a)dj(?:usted)?\.?\s+OR", "aOR"),
-    (r"a(?<![\w]a)HR|A(?<![\w]A)HR|a(?<![\w]a)dj(?:usted)?\.?\s+HR", "aHR"),
-    (r"a(?<![\w]a)RR|A(?<![\w]A)RR|a(?<![\w]a)dj(?:usted)?\.?\s+RR", "aRR"),
-    (r"a(?<![\w]a)PR|A(?<![\w]A)PR|a(?<![\w]a)dj(?:usted)?\.?\s+PR", "aPR"),
+    (r"a(?<![\w]a)OR|A(?<![\w]A)OR|[aA](?<![\w][aA])dj(?:usted)?\.?\s+OR", "aOR"),
+    (r"a(?<![\w]a)HR|A(?<![\w]A)HR|[aA](?<![\w][aA])dj(?:usted)?\.?\s+HR", "aHR"),
+    (r"a(?<![\w]a)RR|A(?<![\w]A)RR|[aA](?<![\w][aA])dj(?:usted)?\.?\s+RR", "aRR"),
+    (r"a(?<![\w]a)PR|A(?<![\w]A)PR|[aA](?<![\w][aA])dj(?:usted)?\.?\s+PR", "aPR"),
     (r"O(?<![\w]O)R", "OR"),
     (r"P(?<![\w]P)R", "PR"),  # a prevalence ratio (cross-sectional studies; practice)
     (r"H(?<![\w]H)R", "HR"),
     (r"I(?<![\w]I)RR", "IRR"),
     (r"R(?<![\w]R)R", "RR"),
-    (r"a(?<![\w]a)djusted\s+odds\s+ratio", "aOR"),
-    (r"a(?<![\w]a)djusted\s+hazard\s+ratio", "aHR"),
-    (r"a(?<![\w]a)djusted\s+(?:risk\s+ratio|relative\s+risk)", "aRR"),
+    (r"[aA](?<![\w][aA])djusted\s+odds\s+ratio", "aOR"),
+    (r"[aA](?<![\w][aA])djusted\s+hazard\s+ratio", "aHR"),
+    (r"[aA](?<![\w][aA])djusted\s+(?:risk\s+ratio|relative\s+risk)", "aRR"),
     (r"[oO](?<![\w][oO])dds\s+ratio|u(?<![\w]u)nadjusted\s+odds\s+ratio|c(?<![\w]c)rude\s+odds\s+ratio", "OR"),
     (r"[hH](?<![\w][hH])azard\s+ratio", "HR"),
     (r"[iI](?<![\w][iI])ncidence[-\s]rate\s+ratio", "IRR"),
     (r"[rR](?<![\w][rR])isk\s+ratio|[rR](?<![\w][rR])elative\s+risk", "RR"),
-    (r"a(?<![\w]a)djusted\s+prevalence\s+ratio", "aPR"),
+    (r"[aA](?<![\w][aA])djusted\s+prevalence\s+ratio", "aPR"),
     (r"[pP](?<![\w][pP])revalence\s+ratio", "PR"),
     # a difference with its interval, as medical texts give it ("mean difference, −2.1 [95% CI, −3.4 to −0.8]", "the
     # between-group difference was −4.2 points (95% CI, −7.9 to −0.5; P = .03)"): read only with its interval (null 0)
