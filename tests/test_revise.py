@@ -177,6 +177,31 @@ def test_a_field_inside_a_statistic_is_left_alone(tmp_path):
     assert any("field, link, picture or equation" in c.text for c in docx.Document(str(tmp_path / "out.docx")).comments)
 
 
+def test_a_smart_tag_across_a_statistic_is_named_in_its_comment(tmp_path):
+    """A statistic whose runs a smart tag parts (Word's w:smartTag around its first half) is left as typed, like one
+    holding a field; the comment names such elements too (it had named fields, links, pictures and equations only).
+    A statistic wholly inside a content control (w:sdt) is revised there."""
+    d = docx.Document()
+    p = d.add_paragraph("Scores differed, ")
+    tag = etree.SubElement(p._p, f"{W}smartTag")
+    tag.set(f"{W}element", "x")
+    run = copy.deepcopy(p.runs[0]._r)
+    tag.append(run)
+    run.find(f"{W}t").text = "t(38)=2.14, "
+    p.add_run("p=0.039.")
+    q = d.add_paragraph("Scores differed, ")
+    content = etree.SubElement(etree.SubElement(q._p, f"{W}sdt"), f"{W}sdtContent")
+    inner = copy.deepcopy(q.runs[0]._r)
+    content.append(inner)
+    inner.find(f"{W}t").text = "t(38)=2.14, p=0.039"
+    d.save(str(tmp_path / "s.docx"))
+    assert main(["audit", str(tmp_path / "s.docx"), "--revise", str(tmp_path / "out.docx")]) == 1
+    comments = [c.text for c in docx.Document(str(tmp_path / "out.docx")).comments]
+    assert any("smart tag" in c for c in comments)
+    root = etree.fromstring(zipfile.ZipFile(tmp_path / "out.docx").read("word/document.xml"))
+    assert len(list(root.iter(f"{W}ins"))) == 1 and list(root.iter(f"{W}sdtContent"))[0].find(f"{W}ins") is not None
+
+
 def test_decimal_commas_become_the_styles_points(tmp_path):
     """A chapter typed with decimal commas, revised into APA 7: the numbers are kept, their marks become points."""
     d = docx.Document()

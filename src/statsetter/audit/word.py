@@ -658,7 +658,8 @@ def revise(source: "str | Path", entries: "Sequence[Entry]", out: "str | Path", 
         runs = _span_runs(paragraphs[e.unit.index], e.start, e.end)
         why = e.kept
         if runs is None or (change is not None and len({_look(r) for r in runs if r.tag == f"{_W}r"}) > 1):
-            why = "a field, link, picture or equation lies inside the statistic" if runs is None else "parts of it are in different fonts or emphasis"
+            why = ("a field, link, picture or equation lies inside the statistic, or another Word element (a smart tag, a content control) "
+                   "parts its runs" if runs is None else "parts of it are in different fonts or emphasis")
             runs = [r for r, s, t in _runs(paragraphs[e.unit.index]) if s < e.end and t > e.start]
             change = None
             open_findings = list(e.findings)
