@@ -2937,3 +2937,13 @@ def test_estimate_heads_in_a_table_its_caption_calls_odds_ratios(tmp_path):
     rows[3][3] = "1.97 (0.90–1.05)"  # a ratio outside its interval
     path = _merged_doc(tmp_path / "m.docx", "Table 2. Odds ratios of one-year mortality.", rows, note)
     assert [e.codes for e in audit_file(path) if e.codes] == [["ci-excludes-estimate"]]
+
+
+def test_only_estimate_heads_become_the_ratio_a_caption_names(tmp_path):
+    """In a table its caption calls odds ratios, an "Estimate (95% CI)" column is the ratio's (above), but a "Mean (95%
+    CI)" beside the OR column is a mean: it had been read as an OR too (the ratio's head pattern shared a name with the
+    bare estimates' own). The ratios are IJERPH 2018's (above); the means this test's."""
+    path = tmp_path / "m.md"
+    path.write_text("Table 2. Odds ratios of one-year mortality by group\n\n| Group | Mean (95% CI) | OR (95% CI) |\n|---|---|---|\n"
+                    "| North | 3.2 (2.9–3.5) | 0.78 (0.73–0.84) |\n| South | 0.8 (0.5–1.1) | 0.92 (0.85–0.99) |\n", encoding="utf-8")
+    assert [e.found.split(" =")[0] for e in audit_file(path)] == ["Mean", "OR", "Mean", "OR"]

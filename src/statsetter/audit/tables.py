@@ -109,12 +109,12 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 # (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
-_RATIO_HEAD = re.compile(r"(?i)(?:[\w .,;:-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>or|hr|rr|irr|pr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk"
-                         rf"|incidence\s+rate\s+ratio|prevalence\s+ratio)[a-d{_SIGNIFICANCE}]?\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)[a-d{_SIGNIFICANCE}]?")
+_CI95 = r"\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)"  # "(95% CI)", "(95%CIs)", "(95% C.I)", "(95% confidence interval)"
+_RATIO_WORDS = r"or|hr|rr|irr|pr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk|incidence\s+rate\s+ratio|prevalence\s+ratio"
+_RATIO_HEAD = re.compile(rf"(?i)(?:[\w .,;:-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>{_RATIO_WORDS})[a-d{_SIGNIFICANCE}]?\s*{_CI95}[a-d{_SIGNIFICANCE}]?")
 # (also "95%CIs", "(95% confidence interval)"); a spanner that names the ratio over the columns of several models ("Hazard ratio
 # (95% confidence interval)" over "Model 1 | P | Model 2 | P", as JCSM 2015's Table 2 lays it out): its columns' cells are that ratio
-_RATIO_SPANNER = re.compile(r"(?i)(?<![\w])(?P<name>or|hr|rr|irr|pr|odds\s+ratios?|hazard\s+ratios?|risk\s+ratios?|relative\s+risks?"
-                            r"|incidence\s+rate\s+ratios?|prevalence\s+ratios?)\s*\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)")
+_RATIO_SPANNER = re.compile(rf"(?i)(?<![\w])(?P<name>{_RATIO_WORDS})s?\s*{_CI95}")
 _RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR",
                 "prevalence ratio": "PR"}
 _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
@@ -128,7 +128,7 @@ _RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|
 
 # an estimate's head with its interval ("Crude Estimate (95% CI)", "Adjusted estimate (95% CI)"): a ratio's where the table says of which
 _ADJUSTED_SAID = re.compile(r"(?i)\badjusted\b|\bmultivariable\b")
-_ESTIMATE_HEAD = re.compile(r"(?i)\s*((?:un)?adjusted|crude|multivariable|univariable)?\s*estimates?\s*\(\s*95\s?%\s?c\.?i\.?\s*\)\s*")
+_RATIO_ESTIMATE_HEAD = re.compile(rf"(?i)\s*((?:un)?adjusted|crude|multivariable|univariable)?\s*estimates?\s*{_CI95}\s*")
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
@@ -794,7 +794,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                     header[c] = _ratio_role(f"{_head_text(u.text)} {spanned[c]} (95% CI)")
         if said_ratio is not None:  # "Crude Estimate (95% CI)" in a table its caption calls odds ratios (IJERPH 2018's Table 2)
             for c, (u, _) in row.items():
-                estimate = _ESTIMATE_HEAD.fullmatch(u.text) if header[c] is None and numbers[c] is None else None
+                estimate = _RATIO_ESTIMATE_HEAD.fullmatch(u.text) if header[c] is None and numbers[c] is None else None
                 if estimate is not None:
                     header[c] = _ratio_role(f"{estimate.group(1) or ''} {said_ratio} (95% CI)")
         spanned = {}
@@ -808,8 +808,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 words_above, in_body = {}, False
             for c, (u, _) in row.items():
                 spanner = _RATIO_SPANNER.search(u.text) if "95" in u.text else None
-                name = spanner.group("name").rstrip("sS") if spanner is not None else \
-                    said_ratio if said_ratio is not None and "95" in u.text and _ESTIMATE_HEAD.fullmatch(u.text) else None
+                name = spanner.group("name") if spanner is not None else \
+                    said_ratio if said_ratio is not None and "95" in u.text and _RATIO_ESTIMATE_HEAD.fullmatch(u.text) else None
                 if name is not None and _ADJUSTED_SAID.search(u.text):  # ("Adjusted Estimate (95% CI)" over "Model 1 | Model 2")
                     name = f"adjusted {name}"
                 for k in range(c, c + u.columns):  # (a spanner's words over each column it spans)
