@@ -1344,7 +1344,6 @@ _COEFFICIENT_ROW = re.compile(r"(?i)\s*(?:pearson\s+correlation|correlation\s+co
 _SPEARMAN = re.compile(r"(?i)spearman|rho")
 _SIG_ROW = re.compile(r"(?i)\s*(?:sig\.?\s*\(([12])-tailed\)|p[- ]?value|p)\s*")
 _N_ROW = re.compile(r"(?i)\s*n\s*")
-_DF_ROW = re.compile(r"(?i)\s*df\s*")
 
 
 def _correlation_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]

@@ -75,8 +75,10 @@ def named(rep: Reported, text: StyledText, style: "Style | None" = None) -> Styl
             not text.plain().startswith(_EPONYM_SYMBOLS[first.name][0]):
         typed = first.symbol_text  # "Cronbach's alpha = 0.81": "Cronbach's α = .81", the author's name for it kept ("Cohen’s f² = …")
         name = typed[: max(typed.find(letter) for letter in _EPONYM_SYMBOLS[first.name][1])]
-        if style is not None and not style.wording.get("possessive", True):  # AMA 11: "Cronbach α"
-            name = re.sub(r"['’]s(?=\s)", "", name)
+        if style is not None:
+            from ..rendering.sentences import eponyms  # (the renderer's rule: AMA 11 writes "Cronbach α")
+
+            name = eponyms(name, style)
         return StyledText(name) + text
     return text
 
