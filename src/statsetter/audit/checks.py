@@ -1025,8 +1025,11 @@ def coefficient_ratio(rep: Reported, coefficient: "Ratio | None") -> list[Findin
     name, what = ("Wald", f"({b_name} / {se_name})²") if rep.symbol == "chi2" else (rep.symbol, f"{b_name} / {se_name}")
     unsigned = rep.symbol in ("t", "z") and rep.value.value >= 0 and not rep.value.text.lstrip().startswith("+")  # |t| as some tables print it
     if not _overlap(ratio, stat) and not (unsigned and _overlap((-ratio[1], -ratio[0]), stat)):
+        shown = abs(rep.value.value) if unsigned else rep.value.value
+        places = next((k for k in range(2, 7) if not round(ratio[0], k) <= shown <= round(ratio[1], k)), 6)  # (a near miss: the
+        # digits that show where it misses, "−3.976 to −3.965" for t = −3.962, not "−3.98 to −3.96")
         out.append(Finding("coefficient-does-not-fit", f"{name} = {rep.value.text} is not {what}: {b_name} = {b.text} and {se_name} = {se.text} give "
-                                                        f"{ratio[0]:.2f} to {ratio[1]:.2f}.", f"{b_name} = {b.text}, {se_name} = {se.text}, {name} = {rep.value.text}"))
+                                                        f"{ratio[0]:.{places}f} to {ratio[1]:.{places}f}.", f"{b_name} = {b.text}, {se_name} = {se.text}, {name} = {rep.value.text}"))
     return out + _odds_fit(rep, b)
 
 
@@ -1043,16 +1046,29 @@ def _odds_fit(rep: Reported, b: Number) -> list[Finding]:
                                                 f"{expected[0]:.4g} to {expected[1]:.4g}.", f"B = {b.text}, {odds.symbol_text} = {odds.number.text}")]
 
 
-def interval_fits_se(ci: "TypedInterval", se: Number) -> list[Finding]:
+def interval_fits_se(ci: "TypedInterval", se: Number, centre: Number | None = None) -> list[Finding]:
     """An estimate's interval against its SE: a Wald interval reaches a z's quantile of SEs each side at the least (1.96
     for 95%) and a t on 1 df's at the most (12.71), whatever its df; with the printed precision of the limits and the
     SE, and a margin of 15% each way for intervals made otherwise (profile likelihood), a half-width outside says the
-    SE or the interval is another's."""
+    SE or the interval is another's. With ``centre`` (a t's B or mean difference: its interval is B ± t·SE, symmetric
+    about it) the interval's midpoint must lie on it, within the printed precision and a quarter of the half-width (a
+    mixed model's profile interval is nearly symmetric): one that is not was made for another estimate — as a table's
+    copied interval is (World J Psychiatry 2026: a model's intervals those of the model beside it)."""
     from statistics import NormalDist  # (only here: a coefficient's SE beside its interval)
 
     se_low, se_high = se.value - se.half_unit, se.value + se.half_unit
     if se_low <= 0 or ci.level is None or not 0.5 <= ci.level < 1:
         return []
+    if centre is not None:
+        middle, half = (ci.low.value + ci.high.value) / 2, (ci.high.value - ci.low.value) / 2
+        slack = (ci.low.half_unit + ci.high.half_unit) / 2 + centre.half_unit + abs(half) / 4
+        if abs(middle - centre.value) > slack * (1 + 1e-9):
+            level = f"{ci.level * 100:g}%"
+            places = max(ci.low.decimals, ci.high.decimals) + 1
+            return [Finding("coefficient-does-not-fit", f"The {level} CI [{ci.low.text}, {ci.high.text}] is centred on {middle:.{places}f}, not on the "
+                                                        f"estimate {centre.text}: an interval made from its SE (the estimate ± a t's quantile of SEs) is "
+                                                        f"symmetric about it; the interval or the estimate is another's.",
+                            f"estimate {centre.text}, {level} CI [{ci.low.text}, {ci.high.text}]")]
     widest = ((ci.high.value + ci.high.half_unit) - (ci.low.value - ci.low.half_unit)) / 2
     narrowest = max((ci.high.value - ci.high.half_unit) - (ci.low.value + ci.low.half_unit), 0.0) / 2
     fewest, most = NormalDist().inv_cdf(0.5 + ci.level / 2), math.tan(math.pi * ci.level / 2)

@@ -468,6 +468,8 @@ def _audit_units(
         lead = coefficient_lead(unit.text, local, previous_end, mark) if local is not None and local.symbol is None and local.p is not None else None
         if lead is not None and lead[2] is not None:  # "b = 0.42, SE = 0.10, 95% CI [0.22, 0.62], p < .001": the p's B and interval
             rep = replace(rep, ci=lead[2], estimate=lead[0])
+        elif lead is not None and rep.ci is not None and rep.estimate is None:  # "b = 0.42, SE = 0.10, p < .001, 95% CI [0.22, 0.62]"
+            rep = replace(rep, estimate=lead[0])  # (the interval after the p: the B's, as before it)
         findings = impossible(rep) + consistent
         ns_note = ""
         if local is not None:
@@ -504,10 +506,11 @@ def _audit_units(
             findings += coefficient_ratio(rep, item.coefficient) + coefficient_p(rep, item.coefficient, alpha)
         if lead is not None and lead[1] is not None:
             findings += coefficient_p(rep, lead[:2], alpha)
-        se = item.coefficient[1] if item.coefficient is not None else lead[1] if lead is not None else None
+        se = item.coefficient[1] if item.coefficient is not None else lead[1] if lead is not None else \
+            before[1] if before is not None and rep.estimate is before[0] else None  # (a t's B and SE typed before it: its interval's)
         if se is not None and rep.ci is not None and rep.estimate is not None and \
                 not any(f.code in ("ci-excludes-estimate", "ci-reversed") for f in findings):  # (a coefficient's or mean difference's interval)
-            findings += interval_fits_se(rep.ci, se)
+            findings += interval_fits_se(rep.ci, se, rep.estimate if rep.symbol == "t" else None)  # (a t's interval: B ± t·SE)
         if local is None and rep.symbol == "t" and rep.effects:  # a table row's t with its d (d_z where the table says one sample)
             findings += effect_from_t(rep)
         if (rep.ci is not None or rep.effects) and rep.p is not None:

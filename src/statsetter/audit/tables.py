@@ -390,6 +390,19 @@ def _own_column(roles: dict[int, str], column: int, role: str) -> int | None:
     return right[0] if right else left[-1] if left else None
 
 
+def _estimate_column(roles: dict[int, str], column: int, role: str) -> int | None:
+    """The column of an estimate's ``role`` (B, SE, Exp(B) …) that belongs to the statistic in ``column``: between it and
+    the statistic columns on either side, the nearest to its left first (a model's B and SE stand before its t; SPSS's
+    Exp(B) after its Wald), else the nearest to its right. A table of several models side by side ("Depression: B | SE
+    | t value | 95% CI | Self-efficacy: B | SE | t value | 95% CI", World J Psychiatry 2026) gives each t its own."""
+    stats = [k for k, v in roles.items() if v in _STAT_ROLES or v == "value"]
+    before = max((k for k in stats if k < column), default=-1)
+    after = min((k for k in stats if k > column), default=1 << 30)
+    left = [k for k, v in roles.items() if before < k < column and v == role]
+    right = [k for k, v in roles.items() if column < k < after and v == role]
+    return max(left) if left else min(right) if right else None
+
+
 # the sub-rows of SPSS's repeated-measures tables: an effect's F and its error term, each under the same correction
 _CORRECTION = re.compile(r"(?i)\s*(sphericity\s+assumed|greenhouse[-–\s]?geisser|huynh[-–\s]?feldt|lower[-–\s]?bound)\s*")
 
@@ -499,6 +512,20 @@ def _cell_interval(text: str, mark: str, with_estimate: bool = False) -> "tuple[
     return None if any(n is None for n in found) else found  # type: ignore[return-value]
 
 
+def _owner(roles: dict[int, str], at: int) -> int | None:
+    """The column of the estimate an interval's column at ``at`` is of: the nearest estimate column to its left."""
+    return max((k for k, r in roles.items() if k < at and r in _ESTIMATES), default=None)
+
+
+def _interval_column(roles: dict[int, str], column: int, role: str) -> int | None:
+    """The column of an interval's ``role`` (ci, ci_low, ci_high) that belongs to the statistic in ``column``: the nearest
+    whose estimate (_owner) is the statistic's own (_estimate_column) — the interval before the t in "B | SE | 95% CI | t
+    | p" twice over, the one after it in "B | SE | t | 95% CI" twice over —; else as _own_column finds it."""
+    own = {k for r in ("B", "diff", "expB", "beta") if (k := _estimate_column(roles, column, r)) is not None}
+    mine = [k for k, r in roles.items() if r == role and _owner(roles, k) in own]
+    return min(mine, key=lambda k: abs(k - column)) if mine else _own_column(roles, column, role)
+
+
 def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], column: int, said: str,  # type: ignore[no-untyped-def]
                     mark: str = ".") -> "tuple[Interval, str, int, Number | None, str] | None":
     """The interval of the estimate beside the statistic in ``column``: its limits in two columns of their own, in one
@@ -508,8 +535,8 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
     comes from the limits' head ("[0.025", "2.5 %", "95% CI") or else the one level the header, caption or note names ("95%
     Confidence Interval of the Difference"). None without limits, an estimate or a level, and for a bootstrap interval
     (its head says so), which need not agree with the test's p nor hold the estimate. Last, where it was read."""
-    lo, hi = _own_column(roles, column, "ci_low"), _own_column(roles, column, "ci_high")
-    one = _own_column(roles, column, "ci")
+    lo, hi = _interval_column(roles, column, "ci_low"), _interval_column(roles, column, "ci_high")
+    one = _interval_column(roles, column, "ci")
     both = column if roles.get(column) == "BCI" else _own_column(roles, column, "BCI")  # (a table of estimates with their intervals alone)
     estimate = None
     if lo is not None and hi is not None and lo in row and hi in row and numbers.get(lo) is not None and numbers.get(hi) is not None:
@@ -530,7 +557,7 @@ def _interval_cells(row, roles: dict[int, str], numbers, heads: dict[int, str], 
         owner: int | None = both
         role = "diff" if _MEAN_DIFFERENCE.match(head) else "B"
     else:
-        owner = max((k for k, r in roles.items() if k < at and r in _ESTIMATES), default=None)  # the estimate to its left
+        owner = _owner(roles, at)  # the estimate to its left
         if owner is not None and roles[owner] == "beta" and _FOR_B.search(f"{head} {said}"):  # SPSS's "95.0% Confidence Interval for B" after Beta
             owner = max((k for k, r in roles.items() if k < at and r == "B"), default=None)
         alone = roles.get(owner) == "beta" and {"B", "BSE"}.isdisjoint(roles.values())  # a β with no B in the table: its own interval
@@ -595,22 +622,27 @@ def _ratio_statistic(name: str, shown: str, estimate: Number, ci: Interval, p: "
     return rep
 
 
-def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "dict[int, str] | None" = None) -> "tuple[Ratio | None, list[Effect]]":  # type: ignore[no-untyped-def]
-    """A Wald row's (or a t's or z's) B and SE, and its Exp(B) as an odds ratio, from their columns, or B and SE from
-    one cell under "B (SE)"; a t test's mean difference and its SE."""
-    cols = {role: k for k, role in roles.items() if role in ("B", "SE", "expB", "diff", "se_diff", "beta") and k in row and numbers.get(k) is not None}
+def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "dict[int, str] | None",  # type: ignore[no-untyped-def]
+                       column: int) -> "tuple[Ratio | None, list[Effect]]":
+    """A Wald row's (or a t's or z's, in ``column``) B and SE, and its Exp(B) as an odds ratio, from their columns (each
+    the statistic's own: _estimate_column), or B and SE from one cell under "B (SE)"; a t test's mean difference and its SE."""
+    cols = {}
+    for role in ("B", "SE", "expB", "diff", "se_diff", "beta", "BCI", "BSE"):
+        k = _estimate_column(roles, column, role)
+        if k is not None and k in row and (numbers.get(k) is not None or role in ("BCI", "BSE")):
+            cols[role] = k
     if "B" not in cols and "beta" in cols and "SE" in cols and {"B", "BSE", "BCI"}.isdisjoint(roles.values()):
         cols["B"] = cols["beta"]  # a β with the SE of β beside it ("Beta Weight (Standardized) | Standard Error of Beta | t-value"): t = β / SE
     if "diff" in cols and "se_diff" in cols:  # a t test's row: t = mean difference / its SE
         return (numbers[cols["diff"]][1], numbers[cols["se_diff"]][1], ("mean difference", "SE")), []
-    joint = next((k for k, role in roles.items() if role == "BCI" and k in row), None)
+    joint = cols.pop("BCI", None)
     if "B" not in cols and "diff" not in cols and joint is not None and ("SE" in cols or "se_diff" in cols):  # "1.9 (0.9, 2.9)" under "B (95% CI)"
         read = _cell_interval(row[joint][0].text, mark, with_estimate=True)
         if read is None:
             return None, []
         se = numbers[cols.get("SE", cols.get("se_diff"))][1]  # type: ignore[index]
         return ((read[0], se, ("mean difference", "SE")) if _MEAN_DIFFERENCE.match((heads or {}).get(joint, "")) else (read[0], se)), []
-    both = next((k for k, role in roles.items() if role == "BSE" and k in row), None)
+    both = cols.pop("BSE", None)
     if ("B" not in cols or "SE" not in cols) and both is not None:  # "0.52 (0.21)" under "B (SE)"
         b_se = _value_se(row[both][0].text, mark)
         return (b_se, []) if None not in b_se else (None, [])  # type: ignore[return-value]
@@ -951,7 +983,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 if bound is not None:
                     p = PValue(bound[0], bound[1], value.end, value.end, value.end, "")
                     how += f", its {marks.group('marks')} ({marks.group('marks')}p {bound[0]} {bound[1].text}, as the table defines it)"  # type: ignore[union-attr]
-            coefficient, effects = _coefficient_cells(row, roles, numbers, mark, heads) if role in ("wald", "t", "z") else (None, [])
+            coefficient, effects = _coefficient_cells(row, roles, numbers, mark, heads, c) if role in ("wald", "t", "z") else (None, [])
             effects = effects if role in ("wald", "z") else []  # (a linear model's row has no odds ratio; a logistic one's z has)
             if role in ("F", "t"):
                 effects = _effect_cells(row, roles, numbers, c, ("eta2_p", "eta2", "omega2_p", "omega2", "R2", "delta_R2", "R2_adj", "R_multiple") if role == "F" else ("d", "d_z"),
