@@ -390,14 +390,36 @@ def _own_column(roles: dict[int, str], column: int, role: str) -> int | None:
     return right[0] if right else left[-1] if left else None
 
 
+_ANCHORS = ("B", "diff", "BSE", "BCI", "beta")  # the estimate a model's columns begin with
+
+
+def _model_columns(roles: dict[int, str], column: int) -> tuple[int, int] | None:
+    """Where the columns of the model holding ``column`` begin and end, in a table of several models side by side: each
+    model's columns begin with its estimate ("Depression: B | SE | t value | 95% CI | Self-efficacy: B | SE | …", World
+    J Psychiatry 2026; "Crude: B | SE | Wald | p | OR | 95% CI | Adjusted: B | …"), the first estimate's head the table
+    has, repeated; None where it has one model (or the column stands before the first)."""
+    first = min((k for k, v in roles.items() if v in _ANCHORS), default=None)
+    if first is None:
+        return None
+    anchors = sorted(k for k, v in roles.items() if v == roles[first])
+    i = bisect.bisect_right(anchors, column) - 1
+    if len(anchors) < 2 or i < 0:
+        return None
+    return anchors[i], anchors[i + 1] if i + 1 < len(anchors) else 1 << 30
+
+
 def _estimate_column(roles: dict[int, str], column: int, role: str) -> int | None:
-    """The column of an estimate's ``role`` (B, SE, Exp(B) …) that belongs to the statistic in ``column``: between it and
-    the statistic columns on either side, the nearest to its left first (a model's B and SE stand before its t; SPSS's
-    Exp(B) after its Wald), else the nearest to its right. A table of several models side by side ("Depression: B | SE
-    | t value | 95% CI | Self-efficacy: B | SE | t value | 95% CI", World J Psychiatry 2026) gives each t its own."""
-    stats = [k for k, v in roles.items() if v in _STAT_ROLES or v == "value"]
-    before = max((k for k in stats if k < column), default=-1)
-    after = min((k for k in stats if k > column), default=1 << 30)
+    """The column of an estimate's ``role`` (B, SE, Exp(B) …) that belongs to the statistic in ``column``: among its
+    model's columns (_model_columns) where the table has several, else between it and the statistic columns on either
+    side; the nearest to its left first (a model's B and SE stand before its t), else the nearest to its right (SPSS's
+    Exp(B) after its Wald)."""
+    group = _model_columns(roles, column)
+    if group is not None:
+        before, after = group[0] - 1, group[1]
+    else:
+        stats = [k for k, v in roles.items() if v in _STAT_ROLES or v == "value"]
+        before = max((k for k in stats if k < column), default=-1)
+        after = min((k for k in stats if k > column), default=1 << 30)
     left = [k for k, v in roles.items() if before < k < column and v == role]
     right = [k for k, v in roles.items() if column < k < after and v == role]
     return max(left) if left else min(right) if right else None
