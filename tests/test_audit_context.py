@@ -3108,3 +3108,35 @@ def test_crude_and_adjusted_logistic_models_side_by_side(tmp_path):
     entries = audit_file(path)
     assert len(entries) == 4 and not any(e.codes for e in entries)
     assert sum("the B and SE columns" in e.notes[0] for e in entries) == 4
+
+
+# Markdown typing its symbols as inline LaTeX math: a study summary quoting Schulze, van Ravenzwaaij & Newell (2015),
+# Cognitive Psychology 78, 78–98 (doi 10.1016/j.cogpsych.2015.03.002), typed with R Markdown's $\eta^2_p$; and an Authorea
+# preprint's export (flame-challenge.authorea.com/users/597901/articles/630743), with \(\eta_{p}^{2}\)
+_MD_MATH_TYPED = [
+    "Significant main effect of trial block on high-probability choices (F(4.90, 235.11) = 18.42, p < .001, $\\eta^2_p$ = .277, "
+    "BF = 2.79 x 10^22) - Significant main effect of competitor type on choice proportions (F(1, 48) = 11.66, p = .001, "
+    "$\\eta^2_p$ = .195, BF = 25.08)",
+    "A mixed-measures ANOVA for the negative affect scores (see Figure 3B), showed that there were significant main effects of "
+    "Group, F (1, 61) = 6.05, p = .017, \\(\\eta_{p}^{2}\\) = 0.09, and Time,F (4, 244) = 13.07, p < .001, \\(\\eta_{p}^{2}\\) = "
+    "0.18. The interaction of Time and Group was also significant,F (4, 244) =8.59, p < .001, \\(\\eta_{p}^{2}\\) = 0.12.",
+]
+
+
+def test_markdown_inline_math_is_read_as_it_prints(tmp_path):
+    """Inline math in Markdown — $…$ as R Markdown and Quarto write it, \\(…\\) as some exports do — is read as LaTeX's
+    is: $\\eta^2_p$ is η²p, each checked against its F (all of them fit) and its leading zero judged. Before, they were
+    not read. A dollar sign that opens no math (pandoc's rule: "$5 and $10") leaves the text as typed."""
+    path = tmp_path / "t.md"
+    path.write_text("\n\n".join(_MD_MATH_TYPED) + "\n\nEach was paid $5 and $10, F(1, 48) = 11.66, p = .001.\n", encoding="utf-8")
+    entries = audit_file(path)
+    effects = [e for e in entries if "η" in e.found]
+    assert [e.found.split("η")[1] for e in effects] == ["²p = .277", "²p = .195", "p² = 0.09", "p² = 0.18", "p² = 0.12"]
+    assert not any(set(e.codes) - {"leading-zero", "spacing", "decimals"} for e in entries)  # (APA: η² to two decimals)
+    assert sum("leading-zero" in e.codes for e in effects) == 3  # (0.09, 0.18, 0.12: APA writes .09)
+    lines = path.read_text(encoding="utf-8").split("\n")
+    last = entries[-1]
+    assert last.found == "F(1, 48) = 11.66, p = .001" and last.location == f"line 5, characters {lines[4].index('F(') + 1}–{len(lines[4]) - 1}"
+    source = lines[2]
+    start, end = (int(x) for x in effects[2].location.split("characters ")[1].split("–"))
+    assert source[start - 1 : end] == "F (1, 61) = 6.05, p = .017, \\(\\eta_{p}^{2}\\) = 0.09"  # (located in the source as typed)

@@ -207,6 +207,9 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         import html  # (html.entities is a large table: loaded only for a text that may hold a reference)
 
         text, entities = _replace(_MD_ENTITY, text, html.unescape)
+    maths = None
+    if not tex and ("$" in text or "\\(" in text):  # inline math in Markdown (R Markdown's and Quarto's $\eta_p^2$, \(…\) as
+        text, maths = _replace(_MD_MATH, text, _tex_math)  # some exports write it), read as LaTeX's is: before the escapes
     if not tex and "\\" in text:  # Markdown's escapes ("\\*p < .05" prints *p < .05): held out of the emphasis and scripts
         text, escapes = _replace(_MD_ESCAPE, text, lambda g: _MD_HELD.get(g, g))
     out, spans, at = _Builder(), [], 0
@@ -223,7 +226,7 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
         out.add(inner, m.start(group))  # a rewritten TeX group maps to where it starts
         at = m.end()
     out.add(text[at:], at)
-    clean, traces = out.text(), [entities, escapes, out.trace()]
+    clean, traces = out.text(), [entities, maths, escapes, out.trace()]
     # after the emphasis, so that *r*~s~ and \textit{r}\textsubscript{s} read rs (spans are not used for text files)
     sup_pattern, sub_pattern = (_TEX_SUP, _TEX_SUB) if tex else (_PANDOC_SUP, _PANDOC_SUB)
     clean, sup = _replace(sup_pattern, clean, lambda g: g.translate(_SUPERSCRIPT))
@@ -240,6 +243,9 @@ def _strip_marks(text: str, suffix: str) -> tuple[str, tuple[tuple[int, int], ..
     return clean, tuple(spans), tuple(t for t in traces if t is not None)
 
 
+# Markdown's inline math as pandoc reads it: a $ with no space after it, to the next $ with no space before it and no digit
+# after it ("costs $5 and $10" is no math; an escaped \$ opens none); or \(…\)
+_MD_MATH = re.compile(r"(?<![\\$])\$(?=[^\s$])([^$\n]{1,120}?)(?<=[^\s\\])\$(?![\d$])|\\\(([^\n]{1,120}?)\\\)")
 _MD_ENTITY = re.compile(r"&(?:#\d{1,7}|#[xX][0-9a-fA-F]{1,6}|[A-Za-z][A-Za-z0-9]{1,31});")
 _MD_ESCAPE = re.compile(r"\\([!-/:-@\[-`{-~])")  # a backslash before ASCII punctuation (CommonMark's escapes)
 _MD_HELD = {"*": "\ue000", "_": "\ue001", "^": "\ue002", "~": "\ue003"}  # the markers' characters, held as private ones
