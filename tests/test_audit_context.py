@@ -3140,3 +3140,125 @@ def test_markdown_inline_math_is_read_as_it_prints(tmp_path):
     source = lines[2]
     start, end = (int(x) for x in effects[2].location.split("characters ")[1].split("–"))
     assert source[start - 1 : end] == "F (1, 61) = 6.05, p = .017, \\(\\eta_{p}^{2}\\) = 0.09"  # (located in the source as typed)
+
+
+# Tables of counts by group with one test per variable, as the articles print them: PMC6033040 (Allergy 2018;73:1232,
+# Table 1, rows of it: row percents, a total column, each variable's P on its first category's row); PMC8722017 (BMC
+# Pregnancy Childbirth 2022;22:6, Table 1: "χ2/Z" column, binary variables in one row with each group's n in its head);
+# Research Square rs-45016/v1 (Table 1: "n,%" under the group heads, each variable's p on its own row)
+_ROW_PERCENTS = """Table 1. Characteristics of the study subjects
+
+| Variable | Total (n = 6043) | Non‐PiAR (n = 4928) | PiAR (n = 1115) | P value |
+|---|---|---|---|---|
+| Age (y),median (interquartile range) | 27.6 (19.1) | 26.1 (38.6) | 29.3(27.2) | .006 |
+| Gender, n (%) | | | | |
+| Male | 2900 | 2331 (80.4) | 569 (19.6) | .024 |
+| Female | 3143 | 2597 (82.6) | 546 (17.4) | |
+| Age group (y), n (%) | | | | |
+| 0‐6 | 1028 | 960 (93.4) | 68 (6.6) | <.001 |
+| 7‐12 | 945 | 794 (84.0) | 151 (16.0) | |
+| 13‐17 | 448 | 324 (72.3) | 124 (27.7) | |
+| 18‐39 | 1512 | 1054 (69.7) | 458 (30.3) | |
+| 40‐59 | 1553 | 1287 (82.9) | 266 (17.1) | |
+| ≥60 | 535 | 489 (91.4) | 46 (8.6) | |
+| Race, n (%) | | | | |
+| Han | 3288 | 2699 (82.1) | 589 (17.9) | .151 |
+| Mongolian | 2486 | 2002 (80.5) | 484 (19.5) | |
+| Other | 269 | 227 (84.4) | 42 (15.6) | |
+| Residence, n (%) | | | | |
+| Urban | 2961 | 2278 (76.9) | 683 (23.1) | <.001 |
+| Rural | 3079 | 2647 (86.0) | 432 (14.0) | |
+
+Chi‐square test and t test were performed in this table.
+"""
+_ONE_ROW_BINARY = """Table 1. Baseline characteristics of participations
+
+| | n = 5030 | n = 22,608 | χ2/Z | P value |
+|---|---|---|---|---|
+| Age a | 32.00 (28.00,35.00) | 32.00 (29.00,35.00) | −2.889 | 0.004 |
+| Preterm deliveryb | 287 (5.7%) | 1261 (5.6%) | 0.128 | 0.721 |
+| Multiple pregnancyb | 29 (0.6%) | 490 (2.2%) | 56.513 | < 0.001 |
+| Inductionb | 810 (16.1%) | 7536 (33.0%) | 579.495 | < 0.001 |
+| Operative deliveryb | 95 (1.9%) | 1744 (7.7%) | 224.805 | < 0.001 |
+| Ethnicb | | | 195.759 | < 0.001 |
+| White | 2820 (56.1%) | 14,968 (66.2%) | | |
+| Black | 597 (11.9%) | 1818 (8.0%) | | |
+| others | 1613 (32.1%) | 5822 (25.8%) | | |
+
+Data presented as n (%) or median (interquartile range). bThe categorical data were presented as numbers (frequencies, %), Chi-square test was used for categorical data (χ2)
+"""
+_WRONG_PERCENTS = """Table 1 Background characteristics of the participants.
+
+| | Without depressive symptoms (N = 544) | With depressive symptoms (N = 419) | p value |
+|---|---|---|---|
+| | n,% | n,% | |
+| Sex (N = 963) | | | 0.138 |
+| Male (N = 429) | 231(42.46%) | 198(47.3%) | |
+| Female (N = 534) | 313(57.54%) | 221(52.7%) | |
+| School type (N = 963) | | | 0.947 |
+| High school (N = 447) | 252(16.91%) | 195(46.6%) | |
+| College (N = 516) | 292(83.09%) | 224(53.5%) | |
+| Location (N = 963) | | | 0.300 |
+| City (N = 424) | 247(45.4%) | 177(42.2%) | |
+| Town (N = 292) | 154(28.3%) | 138(32.9%) | |
+| Village (N = 247) | 143(26.3%) | 104(24.8%) | |
+| Mean Age (SD) (N = 963) | 17.739(1.944) | 17.695(1.962) | 0.677 |
+| Parents who spent more time taking care of the children in daily life (N = 963) | | | 0.589 |
+| Mother (N = 559) | 315(57.90%) | 244(58.2%) | |
+| Father (N = 404) | 229(42.10%) | 175(41.8%) | |
+
+p value: Chi-square test and Mann-Whitney U test
+"""
+
+
+def _chi2_p(table, correction=False):
+    return stats.chi2_contingency(np.array(table), correction=correction)[:2]
+
+
+def test_a_tables_counts_give_its_chi_square_and_p(tmp_path):
+    """A categorical variable's counts by group give its χ² and p: each p of PMC6033040's Table 1 (row percents, a total
+    column that is no group) follows from its counts by Pearson's χ² — as scipy's chi2_contingency computes it —, and a
+    mutated p does not. Before, none of the table's p's was read."""
+    path = tmp_path / "t.md"
+    path.write_text(_ROW_PERCENTS, encoding="utf-8")
+    entries = audit_file(path)
+    assert [e.found for e in entries] == ["p = .024", "p < .001", "p = .151", "p < .001"] and not any(e.codes for e in entries)
+    chi, p = _chi2_p([[2331, 2597], [569, 546]])
+    assert f"Pearson's χ²(1) = {chi:.3f} from them, p = {p:.4g}" in entries[0].notes[0]
+    path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |"), encoding="utf-8")
+    (bad,) = [e for e in audit_file(path) if e.codes]
+    assert bad.codes == ["counts-do-not-fit"] and f"Pearson's χ² p = {_chi2_p([[2699, 2002, 227], [589, 484, 42]])[1]:.4g}" in bad.message
+
+
+def test_a_binary_variable_in_one_row_and_a_mixed_head(tmp_path):
+    """A binary variable typed in one row takes its other category from each group's n in the head ("n = 22,608": a
+    thousands comma); the "χ2/Z" column is χ² in the rows of counts, on the df the counts give. PMC8722017's χ² values
+    are Pearson's to the printed digits; its Induction row prints 7536 of 22,608 as 33.0% (33.3%): the one finding. A
+    mutated χ² is found. Before, nothing in the table was read."""
+    path = tmp_path / "t.md"
+    path.write_text(_ONE_ROW_BINARY, encoding="utf-8")
+    entries = {e.found: e for e in audit_file(path)}
+    assert set(entries) == {"χ²(1) = 0.128, p = 0.721", "χ²(1) = 56.513, p < 0.001", "χ²(1) = 579.495, p < 0.001", "χ²(1) = 224.805, p < 0.001",
+                            "χ²(2) = 195.759, p < 0.001"}
+    assert [e.codes for e in entries.values() if e.codes] == [["percent-does-not-fit"]]
+    assert "share of its group's n: 7536 / 22,608 is 33.3%, not 33.0%." in entries["χ²(1) = 579.495, p < 0.001"].message
+    assert f"{_chi2_p([[287, 5030 - 287], [1261, 22608 - 1261]])[0]:.3f}" == "0.128"
+    path.write_text(_ONE_ROW_BINARY.replace("| 0.128 |", "| 0.182 |"), encoding="utf-8")
+    bad = {e.found: e for e in audit_file(path)}["χ²(1) = 0.182, p = 0.721"]
+    assert "counts-do-not-fit" in bad.codes and "Pearson's χ² 0.128" in bad.message
+
+
+def test_counts_whose_percents_are_wrong_and_a_p_no_test_of_them_gives(tmp_path):
+    """Research Square rs-45016/v1's Table 1: its School type rows print 252 of 544 as 16.91% (46.32%) and 292 of 544 as
+    83.09% — the percents still make up 100 in each column, so the rows are read as counts and the percents found —; its
+    last variable's p = 0.589 follows from its counts by no usual test (Pearson's .918, Fisher's .947: scipy), a warning
+    that names them. Sex and Location agree with Pearson's χ²."""
+    path = tmp_path / "t.md"
+    path.write_text(_WRONG_PERCENTS, encoding="utf-8")
+    entries = {e.found: e for e in audit_file(path)}
+    assert not entries["p = 0.138"].codes and not entries["p = 0.300"].codes
+    school = entries["p = 0.947"]
+    assert school.codes == ["percent-does-not-fit"] and "of its column's counts: 252 / 544 is 46.32%, not 16.91%" in school.message
+    parents = entries["p = 0.589"]
+    assert parents.codes == ["counts-do-not-fit"] and parents.severity == "warning"
+    assert f"Fisher's exact test p = {stats.fisher_exact([[315, 229], [244, 175]])[1]:.4g}" in parents.message

@@ -88,6 +88,18 @@ CODES: dict[str, tuple[str, str]] = {
         "a t or r without df whose p fits none of the df the text's N or group sizes give, but fits other df",
         "Reporting by test: t and r with their df (APA 7 §6.43); consistency as in Nuijten et al. (2016)",
     ),
+    "counts-do-not-fit": (
+        "a table's χ² or p that no usual test of its counts gives: Pearson's χ², Yates's (2 × 2), the likelihood-ratio χ², each on "
+        "(r − 1)(k − 1) df, or Fisher's exact test (2 × 2)",
+        "Chi-square test of independence: χ² = Σ (O − E)²/E on (r − 1)(k − 1) df, E = row total × column total / N (definition; "
+        "Yates's correction and Fisher's exact test as R's chisq.test and fisher.test compute them); a test other than these is "
+        "named in the note (practice)",
+    ),
+    "percent-does-not-fit": (
+        "a table's percent that is not its count's share of its column, its group's n or its row, whichever the table's other "
+        "percents are",
+        "Descriptives: categorical variables as n (%) (APA 7 §7.21 sample tables; JARS-Quant) — the percent is n over its whole (definition)",
+    ),
     "d-does-not-fit": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
@@ -103,7 +115,7 @@ SEVERITY: dict[str, str] = {
     "p-does-not-follow": "error", "verdict-changes": "error", "impossible-r": "error", "impossible-p": "error",
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
-    "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning",
+    "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",

@@ -25,6 +25,7 @@ from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import _LEVEL_NAMED, CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
+from .counts import CountTest, count_tests, counts_fit
 from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -178,6 +179,7 @@ class _Item:
     context: str = ""  # the text around it that may name a procedure (paragraph; a table's caption, cells and note)
     coefficient: "tuple[Number, Number] | None" = None  # a table row's B and SE beside its Wald
     squares: "Squares | None" = None  # an ANOVA row's SS, df and MS and its error row's (tables.Squares)
+    counts: "CountTest | None" = None  # a categorical variable's counts by group, which give its χ² and p (counts.CountTest)
 
 
 _DIGIT = re.compile(r"\d")
@@ -300,10 +302,29 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                                        labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
+        if any("(" in u.text for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses)
+            items = _with_counts(items, count_tests(cells, mark), context)
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
 
+
+
+def _with_counts(items: list[_Item], tests: "list[CountTest]", context: str) -> list[_Item]:
+    """The table's items with each categorical variable's counts: a χ² already read from its column takes the df its
+    counts give (and the counts, to be held to); a χ² in a column of mixed heads ("χ2/Z") or a p alone becomes an item."""
+    by_unit = {id(it.unit): k for k, it in enumerate(items) if it.rep.symbol == "chi2"}
+    for test in tests:
+        df = test.rep.df[0].value if test.rep.df else None
+        reading = (Reading((df,), f"df = {df:g}, the table's categories less one times its groups less one ({test.how})"),) if df else ()
+        k = by_unit.get(id(test.unit))
+        if k is not None:
+            old = items[k]
+            items[k] = replace(old, readings=old.readings if old.rep.df else reading, how=f"{old.how}, {test.how}", counts=test)
+        else:
+            items.append(_Item(test.unit, test.rep, None, reading if test.rep.symbol == "chi2" else (), f"read from the table's row: {test.how}",
+                               context, counts=test))
+    return items
 
 
 # a statistic's item and entry set slot by slot (the frozen dataclasses' __init__ costs a few microseconds; 10,000 per 1,000 pages)
@@ -500,6 +521,8 @@ def _audit_units(
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
+        if item.counts is not None:  # a categorical variable's χ² and p against its counts
+            findings += counts_fit(item.counts, alpha)
         if item.squares is not None:  # an ANOVA row's SS, MS and F against each other and its error row's
             findings += squares_fit(rep, item.squares)
         if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns (its p, where no test is given)

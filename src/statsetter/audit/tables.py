@@ -169,7 +169,9 @@ _BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,
 # freedom"; "F-statistic: 69.21 on 2 and 29 DF"), when a table's caption or note keeps the line
 _RESIDUAL_DF = re.compile(r"\bon\s+(?:\d{1,6}\s+and\s+)?(\d{1,6})\s+(?:degrees\s+of\s+freedom|DF)\b")
 _NS = re.compile(r"(?i)\s*n\.?\s?s\.?\s*")
-_SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,6})(?![\d.,]\d)")
+# "n = 30", "(n = 4928)", "n = 22,608" (a thousands comma: an n is whole; the digits held, not backtracked, so that "n =
+# 22,608" is no n of 2 and "N = 100,5" none at all)
+_SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,3}(?:,\d{3})+|\d{1,6}+)(?![\d.,]\d)")
 # a note's (or caption's) marks of significance: "*p < .05. **p < .01. ***p < .001.", "† p < .10", "^p < .10", "* P ≤ 0.05"
 _STAR_SAID = re.compile(rf"(?<![{_SIGNIFICANCE}\w])([{_SIGNIFICANCE}]{{1,4}})\s*[pP]\s*([<≤])\s*(0?[.,]\d+)")
 
@@ -238,7 +240,7 @@ def _role(text: str) -> str | None:
 
 def sizes_in(text: str) -> list[int]:
     """The ``n = …``/``N = …`` numbers in a text, in order."""
-    return [int(m.group(1)) for m in _SIZE.finditer(text)]
+    return [int(m.group(1).replace(",", "")) for m in _SIZE.finditer(text)]
 
 
 _PER_GROUP = re.compile(r"(?i)\s*(?:per|in each|each)\b")
@@ -246,7 +248,7 @@ _PER_GROUP = re.compile(r"(?i)\s*(?:per|in each|each)\b")
 
 def _totals(text: str) -> list[int]:
     """Every total (``N = 42``) a caption or note gives."""
-    return [int(m.group(1)) for m in _SIZE.finditer(text) if m.group(0).lstrip()[0] == "N"]
+    return [int(m.group(1).replace(",", "")) for m in _SIZE.finditer(text) if m.group(0).lstrip()[0] == "N"]
 
 
 # what stands before a test's own N inside its parentheses, "χ²(1, N = 80)": that test's sample, not the caption's
@@ -261,12 +263,13 @@ def caption_sizes(text: str) -> tuple[list[int], int | None]:
     for m in _SIZE.finditer(text):
         if _OWN_N.search(text, max(0, m.start() - 16), m.start()):
             continue
+        n = int(m.group(1).replace(",", ""))
         if m.group(0).lstrip()[0] == "N":
-            total = int(m.group(1)) if total is None else max(total, int(m.group(1)))
+            total = n if total is None else max(total, n)
         else:
-            groups.append(int(m.group(1)))
+            groups.append(n)
             if _PER_GROUP.match(text, m.end()):
-                groups.append(int(m.group(1)))
+                groups.append(n)
     return groups, total
 
 
@@ -408,11 +411,16 @@ def _model_columns(roles: dict[int, str], column: int) -> tuple[int, int] | None
     return anchors[i], anchors[i + 1] if i + 1 < len(anchors) else 1 << 30
 
 
-def _estimate_column(roles: dict[int, str], column: int, role: str) -> int | None:
-    """The column of an estimate's ``role`` (B, SE, Exp(B) …) that belongs to the statistic in ``column``: among its
-    model's columns (_model_columns) where the table has several, else between it and the statistic columns on either
-    side; the nearest to its left first (a model's B and SE stand before its t), else the nearest to its right (SPSS's
-    Exp(B) after its Wald)."""
+_LAST_ESTIMATES: list = [None, -1, {}]  # (the roles, the column, their estimate columns): a statistic's cells ask twice
+
+
+def _estimate_columns(roles: dict[int, str], column: int) -> dict[str, int]:
+    """The columns of the estimate's roles (B, SE, Exp(B) …) that belong to the statistic in ``column``, by role: among
+    its model's columns (_model_columns) where the table has several, else between it and the statistic columns on either
+    side; of each role the nearest to its left first (a model's B and SE stand before its t), else the nearest to its
+    right (SPSS's Exp(B) after its Wald)."""
+    if _LAST_ESTIMATES[0] is roles and _LAST_ESTIMATES[1] == column:
+        return _LAST_ESTIMATES[2]  # type: ignore[no-any-return]
     group = _model_columns(roles, column)
     if group is not None:
         before, after = group[0] - 1, group[1]
@@ -420,9 +428,16 @@ def _estimate_column(roles: dict[int, str], column: int, role: str) -> int | Non
         stats = [k for k, v in roles.items() if v in _STAT_ROLES or v == "value"]
         before = max((k for k in stats if k < column), default=-1)
         after = min((k for k in stats if k > column), default=1 << 30)
-    left = [k for k, v in roles.items() if before < k < column and v == role]
-    right = [k for k, v in roles.items() if column < k < after and v == role]
-    return max(left) if left else min(right) if right else None
+    left: dict[str, int] = {}
+    right: dict[str, int] = {}
+    for k in sorted(roles):
+        if before < k < column:
+            left[roles[k]] = k  # (the nearest to its left: the last one)
+        elif column < k < after:
+            right.setdefault(roles[k], k)  # (the nearest to its right: the first one)
+    found = {**right, **left}
+    _LAST_ESTIMATES[:] = [roles, column, found]
+    return found
 
 
 # the sub-rows of SPSS's repeated-measures tables: an effect's F and its error term, each under the same correction
@@ -541,10 +556,13 @@ def _owner(roles: dict[int, str], at: int) -> int | None:
 
 def _interval_column(roles: dict[int, str], column: int, role: str) -> int | None:
     """The column of an interval's ``role`` (ci, ci_low, ci_high) that belongs to the statistic in ``column``: the nearest
-    whose estimate (_owner) is the statistic's own (_estimate_column) — the interval before the t in "B | SE | 95% CI | t
-    | p" twice over, the one after it in "B | SE | t | 95% CI" twice over —; else as _own_column finds it."""
-    own = {k for r in ("B", "diff", "expB", "beta") if (k := _estimate_column(roles, column, r)) is not None}
-    mine = [k for k, r in roles.items() if r == role and _owner(roles, k) in own]
+    whose estimate (_owner) is the statistic's own (_estimate_columns) — the interval before the t in "B | SE | 95% CI |
+    t | p" twice over, the one after it in "B | SE | t | 95% CI" twice over —; else as _own_column finds it."""
+    mine: list[int] = []
+    if role in roles.values():
+        columns = _estimate_columns(roles, column)
+        own = {columns[r] for r in ("B", "diff", "expB", "beta") if r in columns}
+        mine = [k for k, r in roles.items() if r == role and _owner(roles, k) in own]
     return min(mine, key=lambda k: abs(k - column)) if mine else _own_column(roles, column, role)
 
 
@@ -647,11 +665,10 @@ def _ratio_statistic(name: str, shown: str, estimate: Number, ci: Interval, p: "
 def _coefficient_cells(row, roles: dict[int, str], numbers, mark: str, heads: "dict[int, str] | None",  # type: ignore[no-untyped-def]
                        column: int) -> "tuple[Ratio | None, list[Effect]]":
     """A Wald row's (or a t's or z's, in ``column``) B and SE, and its Exp(B) as an odds ratio, from their columns (each
-    the statistic's own: _estimate_column), or B and SE from one cell under "B (SE)"; a t test's mean difference and its SE."""
+    the statistic's own: _estimate_columns), or B and SE from one cell under "B (SE)"; a t test's mean difference and its SE."""
     cols = {}
-    for role in ("B", "SE", "expB", "diff", "se_diff", "beta", "BCI", "BSE"):
-        k = _estimate_column(roles, column, role)
-        if k is not None and k in row and (numbers.get(k) is not None or role in ("BCI", "BSE")):
+    for role, k in _estimate_columns(roles, column).items():
+        if role in ("B", "SE", "expB", "diff", "se_diff", "beta", "BCI", "BSE") and k in row and (numbers.get(k) is not None or role in ("BCI", "BSE")):
             cols[role] = k
     if "B" not in cols and "beta" in cols and "SE" in cols and {"B", "BSE", "BCI"}.isdisjoint(roles.values()):
         cols["B"] = cols["beta"]  # a β with the SE of β beside it ("Beta Weight (Standardized) | Standard Error of Beta | t-value"): t = β / SE

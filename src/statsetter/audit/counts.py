@@ -1,0 +1,279 @@
+"""A table's counts: a categorical variable's n (%) in each group's column, and the χ² or p the table gives for it, held
+to the counts. A "Table 1" comparing groups prints each category's count by group and one test per variable — Pearson's
+χ² (Yates's correction or Fisher's exact test for a 2 × 2 table, the likelihood-ratio χ² in some programs) —, so the
+counts give the statistic, its df, (r − 1)(k − 1), and its p.
+
+A variable's block is its rows of counts: after a row naming it (which may hold its test), or starting at the row that
+holds its test; a row with counts and a test of its own starts a new block (a binary variable typed in one row, "Preterm
+delivery | 287 (5.7%) | 1261 (5.6%) | 0.128 | 0.721", whose other category is each group's n, from its column's head,
+less the count). Group columns are those whose cells give counts; a total column (its head says so) is not a group.
+"""
+
+from __future__ import annotations
+
+import math
+import re
+from dataclasses import dataclass
+from typing import Sequence
+
+from ..pvalues import upper_tail
+from .checks import Finding, _small, reported_p_range
+from .parsing import Number, PValue, Reported
+from .reading import Unit
+from .tables import _number, _p_cell, _role, sizes_in
+
+# a count with its percent, "287 (5.7%)", "2331 (80.4)", "12,513 (55.3%)"
+_COUNT = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
+_TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b")
+_CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
+_MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
+_STAT_NUMBER = re.compile(r"\s*(?P<num>\d+(?:[.,]\d+)?)\s*[*†‡a-d]*\s*")
+
+
+@dataclass(frozen=True, slots=True)
+class CountTest:
+    """One variable's counts by group (rows: its categories; columns: the groups) and the test the table gives for it."""
+
+    unit: Unit  # the cell of its χ² (or, without one, of its p)
+    rep: Reported  # the χ² with its p (df from the counts), or its p alone
+    counts: tuple[tuple[int, ...], ...]
+    how: str  # where the counts were read
+    percents: tuple[str, ...] = ()  # what the percents are shares of, then each that is not its count's share
+
+
+def _count(text: str) -> tuple[int, float, float] | None:
+    """A cell's count and its percent with the percent's half unit, "287 (5.7%)": (287, 5.7, 0.05); None for a cell that
+    is not a count with its percent."""
+    m = _COUNT.fullmatch(text)
+    if m is None:
+        return None
+    pct = m.group("pct").replace(",", ".")
+    return int(re.sub(r"\D", "", m.group("n"))), float(pct), 0.5 * 10.0 ** -len(pct.partition(".")[2])
+
+
+def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: str = ".") -> list[CountTest]:
+    """Each categorical variable's counts in a table, with its χ² (and p) or its p: see the module's text. A block is read
+    only where each of its rows gives a count with its percent in every group's column, for at least two groups, and the
+    percents are the counts' share of their column or of their row."""
+    rows: dict[int, dict[int, Unit]] = {}
+    for r, c, unit, _ in cells:
+        rows.setdefault(r, {})[c] = unit
+    heads: dict[int, str] = {}
+    p_col = chi_col = None
+    out: list[CountTest] = []
+    block: list[dict[int, tuple[int, float, float]]] = []  # each row's {column: count} in the block being read
+    anchor: dict[int, Unit] | None = None  # the row holding the block's test
+    labelled = False  # the block began at a row naming its variable without a test (the test then on its first row of counts)
+
+    def close() -> None:
+        if block and anchor is not None:
+            test = _test(block, anchor, heads, p_col, chi_col, mark)
+            if test is not None:
+                out.append(test)
+
+    for r in sorted(rows):
+        row = rows[r]
+        first = min(row)
+        counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := _count(u.text)) is not None}
+        tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
+        if len(counts) >= 2:
+            if tested and not (labelled and anchor is None and not block):
+                close()
+                block, anchor, labelled = [], row, False
+            elif tested:
+                anchor = row
+            block.append(counts)
+            continue
+        close()
+        block, anchor, labelled = [], None, False
+        roles = {c: _role(u.text) for c, u in row.items()}
+        if (any(roles.values()) or any(_CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text) for u in row.values())) and \
+                not any(_number(u.text, mark) is not None for u in row.values()):  # (a group's n in its head is no number: "n = 5030")
+            heads = {c: u.text for c, u in row.items()}  # a header row
+            p_col = next((c for c, role in roles.items() if role == "p"), None)
+            chi_col = next((c for c, u in row.items() if _CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text)), None)
+        elif all(not u.text.strip() for c, u in row.items() if c != first and c not in (p_col, chi_col)):
+            anchor, labelled = (row if tested else None), True  # a row naming the variable, its test there or on its first row of counts
+    close()
+    return out
+
+
+_SHARES = ("of its column's counts", "of its group's n", "of its row's counts")
+
+
+def _shares(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[int], sizes: list[int | None]) -> tuple[str, ...] | None:
+    """What the block's percents are shares of — their column's sum, their group's n (from its head) or their row's sum:
+    whichever most of its cells fit, to the printed digits —, then each cell's whose percent is not its count's share
+    (nothing when all are); None where fewer than half the cells fit any and the percents do not make up 100 (then they
+    are not counts: a median with its IQR, "5 (5)")."""
+    cells = [(i, j, *row[c]) for i, row in enumerate(block) for j, c in enumerate(groups)]
+    column_sums = [sum(row[c][0] for row in block) for c in groups]
+    row_sums = [sum(row[c][0] for c in groups) for row in block]
+    wholes = ([column_sums[j] for i, j, *_ in cells] if len(block) > 1 else [0] * len(cells),
+              [sizes[j] or 0 for i, j, *_ in cells], [row_sums[i] for i, j, *_ in cells])
+    fits = [[bool(w) and abs(100.0 * n / w - pct) <= half + 1e-9 for w, (i, j, n, pct, half) in zip(whole, cells)] for whole in wholes]
+    best = max(range(len(fits)), key=lambda k: sum(fits[k]))
+    if 2 * sum(fits[best]) < len(cells) and not _whole(block, groups):
+        return None
+    wrong = [(n, pct, half, w) for ok, w, (i, j, n, pct, half) in zip(fits[best], wholes[best], cells) if not ok and w]
+    return (_SHARES[best], *(f"{n} / {w:,} is {100.0 * n / w:.{max(1, _places(half))}f}%, not {pct:.{_places(half)}f}%" for n, pct, half, w in wrong)) \
+        if wrong else ()
+
+
+def _whole(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[int]) -> bool:
+    """Whether the block's percents make up 100 in each group's column, or in each row, to their printed digits: the
+    mark of a variable's counts even where their percents are wrong (a table whose percents of one column are of another)."""
+    if len(block) < 2:
+        return False
+    columns = [[row[c] for row in block] for c in groups]
+    rows = [[row[c] for c in groups] for row in block]
+    return any(all(abs(sum(pct for _, pct, _ in line) - 100.0) <= sum(half for _, _, half in line) + 1e-9 for line in lines)
+               for lines in (columns, rows))
+
+
+def _places(half: float) -> int:
+    return max(0, round(-math.log10(2 * half)))
+
+
+def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int, Unit], heads: dict[int, str], p_col: int | None,
+          chi_col: int | None, mark: str) -> CountTest | None:
+    """The block's test, when its counts make a table of at least two groups and two categories."""
+    groups = sorted(c for c in set.intersection(*(set(row) for row in block)) if not _TOTAL_HEAD.match(heads.get(c, "")))
+    if len(groups) < 2 or any(set(row) - set(groups) - {c for c in row if _TOTAL_HEAD.match(heads.get(c, ""))} for row in block):
+        return None
+    head_sizes = [sizes_in(heads.get(c, "")) for c in groups]
+    sizes = [s[0] if len(s) == 1 else None for s in head_sizes]
+    percents = _shares(block, groups, sizes)
+    if percents is None:
+        return None
+    table = [[row[c][0] for c in groups] for row in block]
+    if len(table) == 1:  # one category typed: the other is each group's n (its head's) less it
+        if any(s is None or s < n for s, n in zip(sizes, table[0])):
+            return None
+        table.append([s - n for s, n in zip(sizes, table[0])])  # type: ignore[operator]
+    counts = tuple(tuple(row[j] for row in table) for j in range(len(groups)))  # (the groups as rows)
+    p_unit = anchor.get(p_col) if p_col is not None else None
+    chi_unit = anchor.get(chi_col) if chi_col is not None else None
+    p = _p_cell(p_unit.text, mark) if p_unit is not None and p_unit.text.strip() else None
+    value = _STAT_NUMBER.fullmatch(chi_unit.text) if chi_unit is not None else None
+    if p is None and value is None:
+        return None
+    df = (len(table) - 1) * (len(groups) - 1)
+    trimmed = _trimmed(counts)
+    chi = pearson(trimmed) if len(trimmed) >= 2 and len(trimmed[0]) >= 2 else None
+    given = f"; Pearson's χ²({df}) = {_shown(chi)} from them, p = {_small(upper_tail('chi2', chi, (float(df),)))}" if chi is not None else ""
+    how = f"the counts of {len(table)} categories in {len(groups)} groups' columns" + \
+        (" (the other category each group's n less the count)" if len(block) == 1 else "") + given
+    if value is not None:
+        typed = value.group("num")
+        number = Number(typed, float(typed.replace(",", ".")), len(re.split(r"[.,]", typed)[1]) if re.search(r"[.,]", typed) else 0,
+                        value.start("num"), value.end("num"))
+        rep = Reported("chi2", "χ²", number.start, number.start, number.end, (Number(str(df), float(df), 0, 0, 0),), None, "=", number, p)
+        unit = chi_unit
+    else:
+        rep = Reported(None, "", p.start, p.start, p.end, (), None, "=", None, p)  # type: ignore[union-attr]
+        unit = p_unit
+    rep.text = ", ".join(([f"χ²({df}) = {number.text}"] if value is not None else []) + ([_p_text(p)] if p is not None else []))
+    return CountTest(unit, rep, counts, how, percents)  # type: ignore[arg-type]
+
+
+def _p_text(p: PValue) -> str:
+    return p.symbol_text if p.op == "ns" else f"p {p.op} {p.number.text}"  # type: ignore[union-attr]
+
+
+# -- the tests the counts give ---------------------------------------------------------------------------------------
+
+
+def _expected(table: Sequence[Sequence[int]]) -> list[list[float]]:
+    rows = [sum(r) for r in table]
+    cols = [sum(c) for c in zip(*table)]
+    total = sum(rows)
+    return [[rows[i] * cols[j] / total for j in range(len(cols))] for i in range(len(rows))]
+
+
+def _trimmed(table: Sequence[Sequence[int]]) -> list[list[int]]:
+    """The table without rows or columns of zeros (they add nothing and leave an expected count of 0)."""
+    keep_rows = [r for r in table if sum(r)]
+    keep_cols = [j for j in range(len(keep_rows[0])) if any(r[j] for r in keep_rows)] if keep_rows else []
+    return [[r[j] for j in keep_cols] for r in keep_rows]
+
+
+def pearson(table: Sequence[Sequence[int]], yates: bool = False) -> float:
+    """Pearson's χ² of a table of counts; with ``yates`` (a 2 × 2 table) each |O − E| less a half, not below 0 (R's
+    chisq.test and scipy's chi2_contingency)."""
+    e = _expected(table)
+    total = 0.0
+    for row, erow in zip(table, e):
+        for o, x in zip(row, erow):
+            d = abs(o - x)
+            if yates:
+                d = max(0.0, d - 0.5)
+            total += d * d / x
+    return total
+
+
+def likelihood_ratio(table: Sequence[Sequence[int]]) -> float:
+    """The likelihood-ratio χ² (G): 2 Σ O ln(O / E)."""
+    e = _expected(table)
+    return 2 * sum(o * math.log(o / x) for row, erow in zip(table, e) for o, x in zip(row, erow) if o > 0)
+
+
+def fisher_2x2(table: Sequence[Sequence[int]]) -> float:
+    """Fisher's exact test of a 2 × 2 table, two-sided: the probability of the tables with the same margins no more
+    likely than the one observed (R's fisher.test, with its relative tolerance 1e-7)."""
+    (a, b), (c, d) = table
+    r1, c1, n = a + b, a + c, a + b + c + d
+
+    def log_p(x: int) -> float:  # the hypergeometric probability of x in the first cell
+        return (math.lgamma(r1 + 1) - math.lgamma(x + 1) - math.lgamma(r1 - x + 1) + math.lgamma(n - r1 + 1)
+                - math.lgamma(c1 - x + 1) - math.lgamma(n - r1 - c1 + x + 1) - math.lgamma(n + 1) + math.lgamma(c1 + 1) + math.lgamma(n - c1 + 1))
+
+    low, high = max(0, c1 - (n - r1)), min(r1, c1)
+    observed = log_p(a)
+    return min(1.0, sum(math.exp(q) for x in range(low, high + 1) if (q := log_p(x)) <= observed + 1e-7))
+
+
+def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
+    """The table's χ² and p against its counts: the χ² one of Pearson's, Yates's (2 × 2) or the likelihood ratio's, each
+    on (r − 1)(k − 1) df; the p one of theirs or Fisher's exact test's (2 × 2) — with the printed precision of each; and
+    each percent its count's share."""
+    rep, counts = test.rep, test.counts
+    out = [Finding("percent-does-not-fit", f"A percent is not its count's share {test.percents[0]}: " + "; ".join(test.percents[1:]) + ".",
+                   ", ".join(f"{part.split(' / ')[0]} ({part.rsplit('not ', 1)[1]})" for part in test.percents[1:]))] if test.percents else []
+    table = _trimmed(counts)
+    if len(table) < 2 or len(table[0]) < 2:
+        return out
+    df = (len(table) - 1) * (len(table[0]) - 1)
+    two = len(table) == 2 and len(table[0]) == 2
+    methods = {"Pearson's χ²": pearson(table), "the likelihood-ratio χ²": likelihood_ratio(table)}
+    if two:
+        methods["Yates's χ²"] = pearson(table, yates=True)
+    value = rep.value
+    if value is not None and rep.symbol == "chi2":
+        low, high = value.value - value.half_unit, value.value + value.half_unit
+        if not any(low - 1e-9 * max(1.0, x) <= x <= high + 1e-9 * max(1.0, x) for x in methods.values()):
+            said = "; ".join(f"{name} {_shown(x)}" for name, x in methods.items())
+            out.append(Finding("counts-do-not-fit", f"χ² = {value.text} does not follow from the table's counts: on {df} df they give {said}.",
+                               f"χ² = {value.text}; counts {_counts_text(counts)}"))
+    reported = reported_p_range(rep, alpha)
+    if reported is not None:
+        ps = {name: upper_tail("chi2", x, (float(df),)) for name, x in methods.items()}
+        fits = any(reported[0] - 1e-12 <= q <= reported[1] + 1e-12 for q in ps.values())
+        if two and not fits and min(sum(table[0]), table[0][0] + table[1][0]) <= 50_000:  # (only then: its sum runs over as many
+            # tables as the smaller margin's count; beyond 50,000 the χ² tests stand for it)
+            ps["Fisher's exact test"] = fisher_2x2(table)
+            fits = reported[0] - 1e-12 <= ps["Fisher's exact test"] <= reported[1] + 1e-12
+        if not fits:
+            said = "; ".join(f"{name} p = {_small(q)}" for name, q in ps.items())
+            out.append(Finding("counts-do-not-fit", f"The p does not follow from the table's counts by the usual tests of a {len(table)} × {len(table[0])} "
+                                                    f"table ({said}); if another test gave it (a trend test, an exact test of a larger table), the note should say so.",
+                               f"{_p_text(rep.p)}; counts {_counts_text(counts)}"))  # type: ignore[arg-type]
+    return out
+
+
+def _shown(x: float) -> str:
+    return f"{x:.3f}"
+
+
+def _counts_text(counts: Sequence[Sequence[int]]) -> str:
+    return " vs ".join("/".join(str(n) for n in group) for group in counts)
