@@ -3232,19 +3232,22 @@ def test_a_tables_counts_give_its_chi_square_and_p(tmp_path):
 
 def test_a_binary_variable_in_one_row_and_a_mixed_head(tmp_path):
     """A binary variable typed in one row takes its other category from each group's n in the head ("n = 22,608": a
-    thousands comma); the "χ2/Z" column is χ² in the rows of counts, on the df the counts give. PMC8722017's χ² values
+    thousands comma); the "χ2/Z" column is χ² in the rows of counts, on the df the counts give, and Z in the median's
+    row (its p recomputed from it). PMC8722017's χ² values
     are Pearson's to the printed digits; its Induction row prints 7536 of 22,608 as 33.0% (33.3%): the one finding. A
     mutated χ² is found. Before, nothing in the table was read."""
     path = tmp_path / "t.md"
     path.write_text(_ONE_ROW_BINARY, encoding="utf-8")
     entries = {e.found: e for e in audit_file(path)}
-    assert set(entries) == {"χ²(1) = 0.128, p = 0.721", "χ²(1) = 56.513, p < 0.001", "χ²(1) = 579.495, p < 0.001", "χ²(1) = 224.805, p < 0.001",
-                            "χ²(2) = 195.759, p < 0.001"}
+    assert set(entries) == {"z = −2.889, p = 0.004", "χ² = 0.128, p = 0.721", "χ² = 56.513, p < 0.001", "χ² = 579.495, p < 0.001",
+                            "χ² = 224.805, p < 0.001", "χ² = 195.759, p < 0.001"}  # (the median row's Z: a Mann–Whitney test's)
     assert [e.codes for e in entries.values() if e.codes] == [["percent-does-not-fit"]]
-    assert "share of its group's n: 7536 / 22,608 is 33.3%, not 33.0%." in entries["χ²(1) = 579.495, p < 0.001"].message
+    assert "share of its group's n: 7536 / 22,608 is 33.3%, not 33.0%." in entries["χ² = 579.495, p < 0.001"].message
+    assert "chi2(2) = 195.759" in entries["χ² = 195.759, p < 0.001"].checked  # (on the df its three categories give)
+    assert "p recomputed from z = −2.889: 0.003859" in entries["z = −2.889, p = 0.004"].checked
     assert f"{_chi2_p([[287, 5030 - 287], [1261, 22608 - 1261]])[0]:.3f}" == "0.128"
     path.write_text(_ONE_ROW_BINARY.replace("| 0.128 |", "| 0.182 |"), encoding="utf-8")
-    bad = {e.found: e for e in audit_file(path)}["χ²(1) = 0.182, p = 0.721"]
+    bad = {e.found: e for e in audit_file(path)}["χ² = 0.182, p = 0.721"]
     assert "counts-do-not-fit" in bad.codes and "Pearson's χ² 0.128" in bad.message
 
 

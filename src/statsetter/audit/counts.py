@@ -20,10 +20,8 @@ from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, PValue, Reported
 from .reading import Unit
-from .tables import _number, _p_cell, _role, sizes_in
+from .tables import COUNT_CELL, _number, _p_cell, _role, sizes_in
 
-# a count with its percent, "287 (5.7%)", "2331 (80.4)", "12,513 (55.3%)"
-_COUNT = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 _TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b")
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -44,7 +42,7 @@ class CountTest:
 def _count(text: str) -> tuple[int, float, float] | None:
     """A cell's count and its percent with the percent's half unit, "287 (5.7%)": (287, 5.7, 0.05); None for a cell that
     is not a count with its percent."""
-    m = _COUNT.fullmatch(text)
+    m = COUNT_CELL.fullmatch(text)
     if m is None:
         return None
     pct = m.group("pct").replace(",", ".")

@@ -316,7 +316,7 @@ def _with_counts(items: list[_Item], tests: "list[CountTest]", context: str) -> 
     by_unit = {id(it.unit): k for k, it in enumerate(items) if it.rep.symbol == "chi2"}
     for test in tests:
         df = test.rep.df[0].value if test.rep.df else None
-        reading = (Reading((df,), f"df = {df:g}, the table's categories less one times its groups less one ({test.how})"),) if df else ()
+        reading = (Reading((df,), f"df = {df:g}, (categories − 1) × (groups − 1) of the counts in its rows"),) if df else ()
         k = by_unit.get(id(test.unit))
         if k is not None:
             old = items[k]

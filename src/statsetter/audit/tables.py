@@ -33,6 +33,9 @@ _INTERVAL_HEAD = (r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|C\.I\
 _LIMITS_NAMED = r"(?:\s*\(\s*(?:lower|LL)\s*(?:[–—,/-]|to)\s*(?:upper|UL)\s*\))?"
 _FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d]|(?<=β)[a-d])$")
 _ROLES = (
+    # a column of two tests' values, as medical tables print one test per row: "χ2/Z", "t/χ2 value" — χ² in a categorical
+    # variable's rows (its counts), the other test elsewhere (a Mann–Whitney Z, a t)
+    (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi2)\s*/\s*(?P<other>[zt])(?:[- ]?values?)?|(?P<first>[zt])\s*/\s*(?:χ\s?[²2]|x\s?[²2]|chi2)(?:[- ]?values?)?"), "mixed"),
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
     (re.compile(r"F(?:[- ]?(?:values?|ratio)|\s+[Cc]hange)?"), "F"),  # (SPSS's Model Summary: "F Change", "Sig. F Change")
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
@@ -98,7 +101,7 @@ _ROLES = (
     (re.compile(r"(?i)(?:type\s+(?:I{1,3}|[123])\s+)?sums?\s+of\s+squares|SS|sum[\s_]sq|Ssq"), "ss"),
     (re.compile(r"(?i)mean\s+squares?|MS|mean[\s_]sq"), "ms"),
 )
-_STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald", "U"}  # (U: only as a row names it under "Statistic")
+_STAT_ROLES = {"t", "F", "chi2", "r", "z", "wald", "U", "mixed:z", "mixed:t"}  # (U: only as a row names it under "Statistic"; mixed: "χ2/Z")
 # the test a row of a t-test table names beside its "Statistic" (jamovi's and JASP's layout: "Student's t", "Welch's t",
 # "Mann-Whitney U"; practice): the statistic is that test's
 _TEST_ROW = {"t": re.compile(r"(?i)\s*(?:student(?:'?s)?|welch(?:'?s)?)(?:\s+t)?\s*"), "U": re.compile(r"(?i)\s*mann[-–\s]?whitney(?:\s+U)?\s*")}
@@ -233,8 +236,9 @@ def _role(text: str) -> str | None:
             head = head[1:-1].strip()
         head = _DFS_IN_HEAD.sub("", _DF_IN_HEAD.sub("", head))
     for pattern, role in _ROLES:
-        if pattern.fullmatch(head):
-            return role
+        m = pattern.fullmatch(head)
+        if m is not None:
+            return role if role != "mixed" else f"mixed:{(m.group('other') or m.group('first')).lower()}"
     return _ratio_role(head) if "95" in head else None
 
 
@@ -509,6 +513,10 @@ def _error_df(errors: list[_ErrorTerm], r: int, correction: str) -> float | None
         return None
     _, df, corrected, _ = term
     return corrected.get(correction) if correction else df
+
+
+# a count with its percent, "287 (5.7%)", "2331 (80.4)", "12,513 (55.3%)" (counts.py reads a variable's block of them)
+COUNT_CELL = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 
 
 def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> str:
@@ -973,6 +981,13 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             by_row = role == "value"
             if by_row:  # a χ² when its row names one
                 role = "chi2" if _CHI_ROW.fullmatch(row[min(row)][0].text) else _named_test(row, c)
+            elif role.startswith("mixed:"):  # "χ2/Z": χ² in a categorical variable's row — counts in it, or it names the variable
+                # (nothing but its test) and the row after it has counts —, the other test elsewhere
+                counted = any(COUNT_CELL.fullmatch(u.text) for u, _ in row.values())
+                if not counted and not any(u.text.strip() for k, (u, _) in row.items() if k not in (min(row), c) and roles.get(k) != "p"):
+                    after = next((rows[k] for k in sorted(rows) if k > r), {})
+                    counted = any(COUNT_CELL.fullmatch(u.text) for u, _ in after.values())
+                role = "chi2" if counted else role[6:]
             if role not in _STAT_ROLES or numbers.get(c) is None or c not in row:
                 continue
             op, value = numbers[c]  # type: ignore[misc]
