@@ -3265,3 +3265,108 @@ def test_counts_whose_percents_are_wrong_and_a_p_no_test_of_them_gives(tmp_path)
     parents = entries["p = 0.589"]
     assert parents.codes == ["counts-do-not-fit"] and parents.severity == "warning"
     assert f"Fisher's exact test p = {stats.fisher_exact([[315, 229], [244, 175]])[1]:.4g}" in parents.message
+
+
+# World J Psychiatry 2026;16(6):119401 (doi 10.5498/wjp.v16.i6.119401), Table 1: depression scores (mean ± SD) by the
+# categories of each characteristic, each variable's F/t and P on its first row (the variable's cell spans its rows in the
+# journal's table, whose page text shifts the rows under it: laid out here as the table holds them)
+_CATEGORY_MEANS = """Table 1 Participant characteristics and univariate analysis of depression (n = 290)
+
+| Variable | Group | n (%) | mean ± SD | F/t value | P value |
+|---|---|---|---|---|---|
+| Age | ≤ 44 | 42 (14.5) | 6.24 ± 4.08 | 15.308 | < 0.001 |
+| | 45-59 | 84 (29.0) | 8.57 ± 4.86 | | |
+| | ≥ 60 | 164 (56.6) | 10.26 ± 4.17 | | |
+| Gender | Male | 149 (51.4) | 10.07 ±4.80 | 11.755 | < 0.001 |
+| | Female | 141 (48.6) | 8.26 ± 4.15 | | |
+| Smoking | Yes | 82 (28.3) | 9.24 ± 4.67 | 0.18 | 0.893 |
+| | No | 208 (71.7) | 9.16 ± 4.56 | | |
+| Drinking | Yes | 85 (29.3) | 9.42 ± 4.96 | 0.322 | 0.571 |
+| | No | 205 (70.7) | 9.08 ± 4.42 | | |
+| Economic situation | Living beyond one’s means | 176 (60.7) | 9.27 ± 4.51 | 0.106 | 0.900 |
+| | Breaking even | 85 (29.3) | 9.13 ± 4.48 | | |
+| | Balance surplus | 29 (10.0) | 8.86 ± 5.39 | | |
+| Primary caregiver | Spouse | 220 (75.9) | 9.15 ± 4.50 | 3.493 | 0.016 |
+| | Parents | 11 (3.8) | 6.18 ± 4.33 | | |
+| | Children | 57 (19.7) | 10.12 ± 4.63 | | |
+| | Others | 2 (0.7) | 3.5 ± 4.95 | | |
+| Religious beliefs | Yes | 12 (4.1) | 7.92 ± 5.18 | 0.961 | 0.328 |
+| | No | 278(95.9) | 9.24 ± 4.56 | | |
+| Household registration | Urban | 195 (67.2) | 9.41 ± 4.45 | 1.361 | 0.244 |
+| | Rural | 95 (32.8) | 9.19 ± 4.58 | | |
+"""
+
+
+def test_a_measures_means_by_category_give_each_variables_f(tmp_path):
+    """A measure's mean ± SD by the categories of each variable, the variable's F/t on its first row: one-way ANOVA's F
+    from the printed means, SDs and n's (their digits a range), on (k − 1, N − k) df. The journal's Table 1 reads clean
+    but for two rows: Smoking's 0.18, which its means give neither as t (about 0.13, whose p is the printed .893) nor
+    as F, and Household registration's 1.361, whose means give F of about 0.15 (its p follows from the 1.361). scipy's
+    one-way ANOVA from the same summaries is the reference for the clean rows. Before, the table was not read."""
+    path = tmp_path / "t.md"
+    path.write_text(_CATEGORY_MEANS, encoding="utf-8")
+    entries = {e.found: e for e in audit_file(path)}
+    assert len(entries) == 8
+    flagged = {found: e.codes for found, e in entries.items() if e.codes}
+    assert flagged == {"F(1, 288) = 0.18, p = 0.893": ["p-does-not-follow", "means-do-not-fit"], "F(1, 288) = 1.361, p = 0.244": ["means-do-not-fit"]}
+    assert "F(3, 286) = 3.493, p = 0.016" in entries and "F(2, 287) = 15.308, p < 0.001" in entries
+
+    def f_from(groups):  # one-way ANOVA from means, SDs and n's (definition), checked against the printed F
+        total = sum(n for _, _, n in groups)
+        grand = sum(m * n for m, _, n in groups) / total
+        between = sum(n * (m - grand) ** 2 for m, _, n in groups) / (len(groups) - 1)
+        within = sum((n - 1) * s * s for _, s, n in groups) / (total - len(groups))
+        return between / within
+
+    assert abs(f_from([(6.24, 4.08, 42), (8.57, 4.86, 84), (10.26, 4.17, 164)]) - 15.308) < 0.1
+    assert abs(stats.t.sf(abs((9.24 - 9.16) / math.sqrt(((81 * 4.67**2 + 207 * 4.56**2) / 288) * (1 / 82 + 1 / 208))), 288) * 2 - 0.893) < 0.002
+
+
+def test_two_groups_means_give_the_t_beside_them(tmp_path):
+    """Two groups' mean ± SD in their columns under heads with their n, the t in its column: |t| from the printed means,
+    SDs and n's by Student's or Welch's test. pingouin's penguins (body mass and flipper length by sex, scipy's t tests)
+    printed as a Table 1: clean; a mutated t is found; a table whose heads name occasions ("Baseline | Follow-up") is not
+    held to it (a paired t needs the correlation)."""
+    import pingouin as pg
+
+    d = pg.read_dataset("penguins").dropna()
+    female, male = (d[d["sex"] == s] for s in ("female", "male"))
+    lines = ["Table 1. Penguins by sex", "", f"| Measure | Female (n = {len(female)}) | Male (n = {len(male)}) | t | p |", "|---|---|---|---|---|"]
+    for column in ("body_mass_g", "flipper_length_mm", "bill_depth_mm"):
+        a, b = female[column], male[column]
+        t, p = stats.ttest_ind(a, b, equal_var=(column != "body_mass_g"))  # (Welch's for body mass)
+        lines.append(f"| {column} | {a.mean():.1f} ± {a.std():.1f} | {b.mean():.1f} ± {b.std():.1f} | {t:.2f} | {max(p, 0.001):.3f} |")
+    text = "\n".join(lines) + "\n"
+    path = tmp_path / "t.md"
+    path.write_text(text.replace("| 0.001 |", "| < .001 |"), encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 3 and not any("means-do-not-fit" in e.codes for e in entries)
+    mutated = text.replace(lines[-1].split(" | ")[3], f"{float(lines[-1].split(' | ')[3]) + 1.5:.2f}").replace("| 0.001 |", "| < .001 |")
+    path.write_text(mutated, encoding="utf-8")
+    assert sum("means-do-not-fit" in e.codes for e in audit_file(path)) == 1
+    path.write_text(mutated.replace("Female (n", "Baseline (n").replace("Male (n", "Follow-up (n"), encoding="utf-8")
+    assert not any("means-do-not-fit" in e.codes for e in audit_file(path))
+
+
+def test_a_published_table_whose_ts_its_means_do_not_give(tmp_path):
+    """PMC10964721's Table of baseline scores (tests/real_typings.py): two groups of 45, each score's mean ± SD, t and p.
+    None of its ten t's follows from the means and SDs beside it (the ZBI row's means, 39.23 ± 7.23 and 41.56 ± 7.34,
+    give |t| of about 1.52; it prints −0.255) — each a means-do-not-fit warning, beside the p's that do not follow from
+    the t's (found before). PMC12588921's table of the same layout (its two header rows merged, the groups' n in the
+    heads), whose t's fit, reads clean."""
+    import real_typings
+
+    def table_text(source):
+        table = next(t for t in real_typings.ITEMS if isinstance(t, real_typings.Table) and t.source == source)
+        head, *body = table.rows
+        lines = [table.caption, "", "| " + " | ".join(head) + " |", "|" + "---|" * len(head)]
+        return "\n".join(lines + ["| " + " | ".join(row) + " |" for row in body]) + "\n"
+
+    path = tmp_path / "t.md"
+    path.write_text(table_text("pmc10964721"), encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 10 and all("means-do-not-fit" in e.codes for e in entries)
+    zbi = next(e for e in entries if e.found.startswith("t = −0.255"))
+    assert "they give |t|: Student's 1.510 to 1.525" in zbi.message
+    path.write_text(table_text("pmc12588921").replace("| Group (mean ± SD) |  |", "| Control group (n = 30) | Intervention group (n = 30) |"), encoding="utf-8")
+    assert not any("means-do-not-fit" in e.codes for e in audit_file(path))

@@ -95,6 +95,12 @@ CODES: dict[str, tuple[str, str]] = {
         "Yates's correction and Fisher's exact test as R's chisq.test and fisher.test compute them); a test other than these is "
         "named in the note (practice)",
     ),
+    "means-do-not-fit": (
+        "a table's t (or two groups' F) that the two groups' means, SDs and sizes beside it do not give, by Student's test or "
+        "Welch's, with the printed digits of each",
+        "Independent-samples t test: t = (M₁ − M₂) / SE, SE from the pooled SD (Student) or √(s₁²/n₁ + s₂²/n₂) (Welch); "
+        "F = t² for two groups (definitions; practice for a table's layout)",
+    ),
     "percent-does-not-fit": (
         "a table's percent that is not its count's share of its column, its group's n or its row, whichever the table's other "
         "percents are",
@@ -115,7 +121,7 @@ SEVERITY: dict[str, str] = {
     "p-does-not-follow": "error", "verdict-changes": "error", "impossible-r": "error", "impossible-p": "error",
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
-    "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning",
+    "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning", "means-do-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",

@@ -20,9 +20,8 @@ from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, PValue, Reported
 from .reading import Unit
-from .tables import COUNT_CELL, _number, _p_cell, _role, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, sizes_in
 
-_TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b")
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
 _STAT_NUMBER = re.compile(r"\s*(?P<num>\d+(?:[.,]\d+)?)\s*[*†‡a-d]*\s*")

@@ -515,6 +515,7 @@ def _error_df(errors: list[_ErrorTerm], r: int, correction: str) -> float | None
     return corrected.get(correction) if correction else df
 
 
+_TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b")  # a column of all groups together, no group
 # a count with its percent, "287 (5.7%)", "2331 (80.4)", "12,513 (55.3%)" (counts.py reads a variable's block of them)
 COUNT_CELL = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 
