@@ -3352,8 +3352,8 @@ def test_a_published_table_whose_ts_its_means_do_not_give(tmp_path):
     """PMC10964721's Table of baseline scores (tests/real_typings.py): two groups of 45, each score's mean ± SD, t and p.
     None of its ten t's follows from the means and SDs beside it (the ZBI row's means, 39.23 ± 7.23 and 41.56 ± 7.34,
     give |t| of about 1.52; it prints −0.255) — each a means-do-not-fit warning, beside the p's that do not follow from
-    the t's (found before). PMC12588921's table of the same layout (its two header rows merged, the groups' n in the
-    heads), whose t's fit, reads clean."""
+    the t's (found before). PMC12588921's table of the same kind — the groups' n in a second header row under "Group
+    (mean ± SD) | t | p" —, whose t's fit, reads clean; a mutated t there is found."""
     import real_typings
 
     def table_text(source):
@@ -3368,5 +3368,8 @@ def test_a_published_table_whose_ts_its_means_do_not_give(tmp_path):
     assert len(entries) == 10 and all("means-do-not-fit" in e.codes for e in entries)
     zbi = next(e for e in entries if e.found.startswith("t = −0.255"))
     assert "they give |t|: Student's 1.510 to 1.525" in zbi.message
-    path.write_text(table_text("pmc12588921").replace("| Group (mean ± SD) |  |", "| Control group (n = 30) | Intervention group (n = 30) |"), encoding="utf-8")
-    assert not any("means-do-not-fit" in e.codes for e in audit_file(path))
+    path.write_text(table_text("pmc12588921"), encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 2 and not any("means-do-not-fit" in e.codes for e in entries)
+    path.write_text(table_text("pmc12588921").replace("−4.763", "−2.763"), encoding="utf-8")  # (a mutation)
+    assert sum("means-do-not-fit" in e.codes for e in audit_file(path)) == 1

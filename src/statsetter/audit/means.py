@@ -82,6 +82,12 @@ def two_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str)
             groups = sized if len(sized) == 2 and all(n >= 2 for _, n in sized) else []
             stat_col = next((c for c, role in roles.items() if role in ("t", "F", "mixed:t")), None)
             continue
+        if not groups and stat_col is not None and not any(_read(u.text) for u in row.values()):  # a second header row with
+            if _OCCASIONS.search(" ".join(u.text for u in row.values())):  # the groups' n ("Group (mean ± SD) | t" above
+                return []  # "Control group (n = 30) | Intervention group (n = 30)", PMC12588921)
+            sized = [(c, s[0]) for c, u in sorted(row.items()) if len(s := sizes_in(u.text)) == 1 and not _TOTAL_HEAD.match(u.text)]
+            groups = sized if len(sized) == 2 and all(n >= 2 for _, n in sized) else []
+            continue
         if len(groups) != 2 or stat_col is None or stat_col not in row:
             continue
         read = [_read(row[c].text) if c in row else None for c, _ in groups]
