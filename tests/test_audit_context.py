@@ -3310,6 +3310,8 @@ def test_a_measures_means_by_category_give_each_variables_f(tmp_path):
     flagged = {found: e.codes for found, e in entries.items() if e.codes}
     assert flagged == {"F(1, 288) = 0.18, p = 0.893": ["p-does-not-follow", "means-do-not-fit"], "F(1, 288) = 1.361, p = 0.244": ["means-do-not-fit"]}
     assert "F(3, 286) = 3.493, p = 0.016" in entries and "F(2, 287) = 15.308, p < 0.001" in entries
+    # the suggestion does not recompute a p from a value its means do not give (the printed p is the means' own)
+    assert entries["F(1, 288) = 0.18, p = 0.893"].suggestion == "F(1, 288) = 0.18 (p left out: the statistic itself does not follow from the table's numbers beside it)"
 
     def f_from(groups):  # one-way ANOVA from means, SDs and n's (definition), checked against the printed F
         total = sum(n for _, _, n in groups)
