@@ -3375,3 +3375,27 @@ def test_a_published_table_whose_ts_its_means_do_not_give(tmp_path):
     assert len(entries) == 2 and not any("means-do-not-fit" in e.codes for e in entries)
     path.write_text(table_text("pmc12588921").replace("−4.763", "−2.763"), encoding="utf-8")  # (a mutation)
     assert sum("means-do-not-fit" in e.codes for e in audit_file(path)) == 1
+
+
+# an abstract on severe acute exacerbation of chronic hepatitis B (as a journal database's page gives it:
+# http://218.28.6.71:81/Qikan/Search/Index?key=K%3D%EF%BC%9ASevere%2Bhepatitis%EF%BC%9BRisk%2Bfactor%EF%BC%9BCase-control%2Bstudy)
+_AUC_SENTENCE = ("The area under the receiver operating characteristic of the AE model [0.844, 95%confidence interval(CI): 0.779-0.896] was "
+                 "significantly higher than that of MELD score(0.690, 95%CI: 0.613-0.760, P < 0.05) in predicting the development of ACLF.")
+
+
+def test_an_estimate_with_its_labelled_interval_after_a_comma(tmp_path):
+    """An estimate followed by a comma and its labelled interval ("0.844, 95%confidence interval(CI): 0.779-0.896", an
+    AUC as an abstract gives it) is held to its interval, as one with the interval in brackets after it is; the P after
+    the second interval is the comparison's, not the AUC's. A mutated interval that excludes its AUC is found; a t's own
+    interval after its p stays the t's."""
+    path = tmp_path / "t.md"
+    path.write_text(_AUC_SENTENCE + "\n\nThe effect was reliable, t(38) = 2.14, p = .039, 95% CI [0.10, 4.20].\n", encoding="utf-8")
+    found = {e.found: e for e in audit_file(path)}
+    assert {"0.844, 95%confidence interval(CI): 0.779-0.896", "0.690, 95%CI: 0.613-0.760", "t(38) = 2.14, p = .039, 95% CI [0.10, 4.20]"} <= set(found)
+    assert not found["0.844, 95%confidence interval(CI): 0.779-0.896"].codes and not found["0.690, 95%CI: 0.613-0.760"].codes
+    path.write_text("The ICC was .78, 95% CI [.70, .84].\n", encoding="utf-8")  # (ours: a quantity named in words, whose
+    (icc,) = audit_file(path)  # leading zero is the words' to say — not judged, as in the bracketed form)
+    assert icc.found == ".78, 95% CI [.70, .84]" and not icc.codes
+    path.write_text(_AUC_SENTENCE.replace("0.779-0.896", "0.879-0.896"), encoding="utf-8")
+    bad = next(e for e in audit_file(path) if e.found.startswith("0.844"))
+    assert bad.codes == ["ci-excludes-estimate"]

@@ -509,7 +509,10 @@ def _numbers_with_quantity(rep: Reported, text: str = "") -> list[tuple[Number, 
             out += [(e.ci.low, e.name), (e.ci.high, e.name)]
     if rep.ci is not None:  # (beside an F, χ² or H, whose own CI nobody gives, an effect size's whose name the text left out:
         # η²p's 90% CI, say — whether it may exceed 1 is unknown)
-        q = rep.symbol if rep.symbol in ("r", "rs", "tau_b") else _UNNAMED if rep.symbol in ("F", "chi2", "H", "Q") else "default"
+        q = rep.symbol if rep.symbol in ("r", "rs", "tau_b") else _UNNAMED if rep.symbol in ("F", "chi2", "H", "Q") or (
+            rep.symbol is None and rep.estimate is not None and rep.p is None and not rep.effects) else "default"  # (an estimate
+        # read with its interval, named in words or not at all — "The ICC was .78, 95% CI [.70, .84]": whether it may exceed 1
+        # is the words' to say)
         if rep.symbol in ("t", "z") and text and _BETA_BEFORE.search(text, max(0, rep.symbol_start - 30), rep.symbol_start) and \
                 _B_BEFORE.search(text, max(0, rep.symbol_start - 60), rep.symbol_start) is None:
             q = "beta"  # "β = .21, t(196) = 3.10, p = .002, 95% CI [.08, .34]": the β's interval (no B beside it)

@@ -353,6 +353,11 @@ class _Patterns:
         self.estimate_ci = re.compile(
             rf"(?P<est>{num})(?:\s?%)?\s*[(\[]\s*(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|[Cc]onfidence\s+[Ii]nterval(?:\s*\[CI\])?)"
             rf"\s*[:=,]?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?\s*[)\]]")
+        # or its labelled interval after a comma, as abstracts give an AUC or a prevalence: "[0.844, 95%confidence interval(CI):
+        # 0.779-0.896]", "(0.690, 95%CI: 0.613-0.760, P < 0.05)", "(34.7%), 95% CI (30.6–38.8)"
+        self.estimate_comma_ci = re.compile(
+            rf"(?P<est>{num})(?:\s?%)?\)?\s*,\s*(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|[Cc]onfidence\s*[Ii]nterval(?:\s*[(\[]CI[)\]])?)"
+            rf"\s*[:=,]?\s*(?P<open>[(\[])?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?(?(open)\s*[)\]])(?![\d.,]?\d)")
         self.ratio_ci = re.compile(rf"\s*,\s*(?P<a>{num})\s*(?:–|—|-|to)\s*(?P<b>{num})(?![\d.,]?\d|\s?%)")  # (no brackets: a ratio's only)
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         self.rare = re.compile(rf"(?P<name>{_RARE_NAME})\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
@@ -640,18 +645,26 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
 
 
 _OPEN_LABEL = re.compile(r"[(\[]\s*\d{2}(?:[.,]\d+)?\s*%\s*(?:CI|C\.I\.|[Cc]onfidence)")  # "(95% CI", "[95%CI", "(95% confidence"
+_COMMA_LABEL = re.compile(r",\s*\d{2}(?:[.,]\d+)?\s*%\s*(?:CI|C\.I\.|[Cc]onfidence)")  # ", 95% CI", ", 95%confidence"
+_NUMBER_COMMA_BEFORE = re.compile(r"[-−–]?\s?(?:\d+(?:[.,]\d+)*|[.,]\d+)(?:\s?%)?\)?\s*$")  # "0.844", "34.7%)" just before it
 _NUMBER_BEFORE = re.compile(r"[-−–]?\s?(?:\d+(?:[.,]\d+)*|[.,]\d+)(?:\s?%)?\s*$")  # the estimate just before it, "40.4% "
 
 
 def _estimates(pat: _Patterns, text: str, found: list[Reported]) -> list[Reported]:
-    """Each estimate given with its labelled interval right after it ("12.4% (95% CI, 10.1%-14.9%)") that no statistic
+    """Each estimate given with its labelled interval right after it ("12.4% (95% CI, 10.1%-14.9%)"; or after a comma, "0.844,
+    95% CI: 0.779-0.896") that no statistic
     read already holds (a ratio's, a mean's, a difference's are theirs): its estimate and interval, to hold it (no p: the
     null of a prevalence or a mean is not 0)."""
     spans = sorted((r.start, r.end) for r in found)
     out = []
-    for label in _OPEN_LABEL.finditer(text):  # (the bracket and level first: the estimate's pattern then matched where it can stand)
-        before = _NUMBER_BEFORE.search(text, max(0, label.start() - 24), label.start())
-        m = (pat.estimate_ci.match(text, before.start(), label.end() + 80)  # (the interval's limits within reach of its label)
+    labels = [(m, _NUMBER_BEFORE, pat.estimate_ci) for m in _OPEN_LABEL.finditer(text)]
+    if "," in text:  # (or after a comma: "0.844, 95% CI: 0.779-0.896")
+        labels += [(m, _NUMBER_COMMA_BEFORE, pat.estimate_comma_ci) for m in _COMMA_LABEL.finditer(text)]
+    for label, number_before, estimate_ci in labels:  # (the level first: the estimate's pattern then matched where it can stand)
+        before = number_before.search(text, max(0, label.start() - 24), label.start())
+        if before is not None and estimate_ci is pat.estimate_comma_ci and text[max(0, before.start() - 3) : before.start()].rstrip()[-1:] in ("=", ":"):
+            continue  # (a named index's, "RMSEA = .04, 90% CI [.00, .07]": not this reading's to name)
+        m = (estimate_ci.match(text, before.start(), label.end() + 80)  # (the interval's limits within reach of its label)
              if before is not None and not text[before.start() - 1 : before.start()].isdigit() else None)
         if m is None:
             continue
