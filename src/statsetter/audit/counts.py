@@ -51,7 +51,7 @@ def _count(text: str) -> tuple[int, float, float] | None:
 def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: str = ".") -> list[CountTest]:
     """Each categorical variable's counts in a table, with its χ² (and p) or its p: see the module's text. A block is read
     only where each of its rows gives a count with its percent in every group's column, for at least two groups, and the
-    percents are the counts' share of their column or of their row."""
+    percents are the counts' shares (of their column, their group's n or their row) or make up 100 (_shares)."""
     rows: dict[int, dict[int, Unit]] = {}
     for r, c, unit, _ in cells:
         rows.setdefault(r, {})[c] = unit
@@ -74,10 +74,10 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
         counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := _count(u.text)) is not None}
         tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
         if len(counts) >= 2:
-            if tested and not (labelled and anchor is None and not block):
+            if tested and (anchor is not None or not labelled):  # a variable's own test: a new block
                 close()
                 block, anchor, labelled = [], row, False
-            elif tested:
+            elif tested:  # the test of the variable named above, on one of its rows of counts
                 anchor = row
             block.append(counts)
             continue

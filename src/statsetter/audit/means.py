@@ -17,9 +17,9 @@ from dataclasses import dataclass
 from typing import Sequence
 
 from .checks import Finding
-from .parsing import Reported
+from .parsing import Number, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, _role, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, sizes_in
 
 # a mean with its SD, "45.3 ± 6.2", "10.07 ±4.80", "3.2 +/- 0.5"
 _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)\s*(?P<sd>\d+(?:[.,]\d+)?)\s*[a-d*†‡]*\s*")
@@ -186,8 +186,6 @@ def category_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said:
     Male | 149 (51.4) | 10.07 ± 4.80 | 11.755 | < 0.001", then "Female | 141 (48.6) | 8.26 ± 4.15"), the variable's test
     on its first row: each variable's categories as groups, with the test's value and p as a statistic (a t for two
     categories under a "t" head, else an F; under "F/t" for two categories whichever the means give, F = t² else)."""
-    from .tables import COUNT_CELL  # (a category's n with its percent)
-
     rows = _rows(cells, said)
     out: list[GroupMeans] = []
     stat_col = p_col = None
@@ -230,9 +228,6 @@ def category_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said:
 
 def _category_test(unit: Unit, p_unit: "Unit | None", groups: "tuple[tuple[float, float, float, float, int], ...]", typed: str, head: str,
                    mark: str) -> GroupMeans:
-    from .parsing import Number
-    from .tables import _number, _p_cell
-
     read = _number(unit.text, mark)
     found = GroupMeans(unit, groups, typed)
     if read is None or read[0] != "=":
