@@ -3265,6 +3265,13 @@ def test_counts_whose_percents_are_wrong_and_a_p_no_test_of_them_gives(tmp_path)
     parents = entries["p = 0.589"]
     assert parents.codes == ["counts-do-not-fit"] and parents.severity == "warning"
     assert f"Fisher's exact test p = {stats.fisher_exact([[315, 229], [244, 175]])[1]:.4g}" in parents.message
+    # the p of Location on its middle row instead (as an export of a cell merged down the rows may leave it): still the
+    # three categories' test, not the middle category's against the rest
+    moved = _WRONG_PERCENTS.replace("| Location (N = 963) | | | 0.300 |", "| Location (N = 963) | | | |").replace(
+        "| Town (N = 292) | 154(28.3%) | 138(32.9%) | |", "| Town (N = 292) | 154(28.3%) | 138(32.9%) | 0.300 |")
+    path.write_text(moved, encoding="utf-8")
+    town = {e.found: e for e in audit_file(path)}["p = 0.300"]
+    assert not town.codes and "the counts of 3 categories" in town.notes[0]
 
 
 # World J Psychiatry 2026;16(6):119401 (doi 10.5498/wjp.v16.i6.119401), Table 1: depression scores (mean ± SD) by the
