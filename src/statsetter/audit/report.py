@@ -184,7 +184,7 @@ class _Item:
     coefficient: "tuple[Number, Number] | None" = None  # a table row's B and SE beside its Wald
     squares: "Squares | None" = None  # an ANOVA row's SS, df and MS and its error row's (tables.Squares)
     counts: "CountTest | None" = None  # a categorical variable's counts by group, which give its χ² and p (counts.CountTest)
-    means: "GroupMeans | None" = None  # two groups' means, SDs and sizes beside a t or F (means.TwoMeans)
+    means: "GroupMeans | None" = None  # the groups' means, SDs and sizes beside a t or F (means.GroupMeans)
 
 
 _DIGIT = re.compile(r"\d")
@@ -307,7 +307,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                                        labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
-        if any("(" in u.text for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses)
+        if any("(" in u.text or "±" in u.text for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses; a mean its ±)
             items = _with_counts(items, count_tests(cells, mark), context)
             beside = {id(m.unit): m for m in two_means(cells, said)}
             items = [replace(it, means=beside[id(it.unit)]) if id(it.unit) in beside and it.rep.symbol in ("t", "F") else it for it in items]

@@ -864,7 +864,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     spanned: dict[int, str] = {}  # the ratio a spanner in the row above names, for each column it spans
     width = max((c + row_cells[0].columns - 1 for r in rows for c, row_cells in rows[r].items()), default=0)  # the table's columns
     in_body = False
-    for r in sorted(rows):
+    order = sorted(rows)
+    for r in order:
         row = rows[r]
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
         header = {c: None if numbers[c] is not None else _role(u.text) for c, (u, _) in row.items()}  # (a number is no head)
@@ -986,7 +987,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 # (nothing but its test) and the row after it has counts —, the other test elsewhere
                 counted = any(COUNT_CELL.fullmatch(u.text) for u, _ in row.values())
                 if not counted and not any(u.text.strip() for k, (u, _) in row.items() if k not in (min(row), c) and roles.get(k) != "p"):
-                    after = next((rows[k] for k in sorted(rows) if k > r), {})
+                    k = bisect.bisect_right(order, r)
+                    after = rows[order[k]] if k < len(order) else {}
                     counted = any(COUNT_CELL.fullmatch(u.text) for u, _ in after.values())
                 role = "chi2" if counted else role[6:]
             if role not in _STAT_ROLES or numbers.get(c) is None or c not in row:
