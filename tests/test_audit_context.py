@@ -3406,3 +3406,31 @@ def test_an_estimate_with_its_labelled_interval_after_a_comma(tmp_path):
     path.write_text(_AUC_SENTENCE.replace("0.779-0.896", "0.879-0.896"), encoding="utf-8")
     bad = next(e for e in audit_file(path) if e.found.startswith("0.844"))
     assert bad.codes == ["ci-excludes-estimate"]
+
+
+def test_three_groups_means_give_the_f_beside_them(tmp_path):
+    """Three groups' mean ± SD in their columns with an F column: one-way ANOVA's F from the printed means, SDs and n's.
+    pingouin's penguins by species (scipy's f_oneway as the reference) read clean; a mutated F is found; where the note
+    says the F is Welch's ANOVA's, an F of three groups is not held to the classic one."""
+    import pingouin as pg
+
+    d = pg.read_dataset("penguins").dropna()
+    species = ["Adelie", "Chinstrap", "Gentoo"]
+    groups = [d[d["species"] == s] for s in species]
+    head = " | ".join(f"{s} (n = {len(g)})" for s, g in zip(species, groups))
+    lines = ["Table 2. Measures by species", "", f"| Measure | {head} | F | p |", "|" + "---|" * 6]
+    for column in ("bill_length_mm", "body_mass_g"):
+        f, p = stats.f_oneway(*(g[column] for g in groups))
+        cells = " | ".join(f"{g[column].mean():.1f} ± {g[column].std():.1f}" for g in groups)
+        lines.append(f"| {column} | {cells} | {f:.2f} | {'< .001' if p < 0.001 else f'{p:.3f}'} |")
+    text = "\n".join(lines) + "\n"
+    path = tmp_path / "t.md"
+    path.write_text(text, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 2 and not any(e.codes for e in entries)
+    typed = lines[-1].split(" | ")[4]
+    mutated = text.replace(f"| {typed} |", f"| {float(typed) * 1.2:.2f} |")
+    path.write_text(mutated, encoding="utf-8")
+    assert sum("means-do-not-fit" in e.codes for e in audit_file(path)) == 1
+    path.write_text(mutated + "\nNote. F from Welch's ANOVA.\n", encoding="utf-8")
+    assert not any("means-do-not-fit" in e.codes for e in audit_file(path))

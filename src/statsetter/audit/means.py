@@ -39,6 +39,7 @@ class GroupMeans:
     groups: tuple[tuple[float, float, float, float, int], ...]
     typed: str  # the cells as the table prints them
     rep: Reported | None = None  # the statistic with its p, where the table reader had not read it (a "F/t value" column)
+    welch: bool = False  # the caption or note names Welch's test: an F of more than two groups is Welch's ANOVA's, not held
 
 
 def _read(text: str) -> tuple[float, float, float, float] | None:
@@ -64,37 +65,41 @@ def _rows(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str) -> 
     return rows
 
 
-def two_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str) -> list[GroupMeans]:
-    """Each row of a two-group table whose group columns (the two heads with an n each, a total column aside) give a
-    mean ± SD and whose t (or F) column gives a value: the cell of that value with the two groups' numbers. Nothing where
-    the heads, caption or note (``said``) name a design that may be the same people's."""
+def group_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str) -> list[GroupMeans]:
+    """Each row of a table comparing groups in its columns (the heads with an n each, a total column aside: two or more)
+    whose cells give each group's mean ± SD and whose t (two groups) or F column gives a value: the cell of that value
+    with the groups' numbers. Nothing where the heads, caption or note (``said``) name a design that may be the same
+    people's."""
     rows = _rows(cells, said)
     out: list[GroupMeans] = []
-    groups: list[tuple[int, int]] = []  # (column, n) of the two groups under the latest header
+    groups: list[tuple[int, int]] = []  # (column, n) of the groups under the latest header
     stat_col = None
+
+    def sized_heads(row: dict[int, Unit]) -> list[tuple[int, int]]:
+        sized = [(c, s[0]) for c, u in sorted(row.items()) if len(s := sizes_in(u.text)) == 1 and not _TOTAL_HEAD.match(u.text)]
+        return sized if len(sized) >= 2 and all(n >= 2 for _, n in sized) else []
+
     for r in sorted(rows):
         row = rows[r]
         roles = {c: _role(u.text) for c, u in row.items()}
         if any(role in ("t", "F", "mixed:t") for role in roles.values()) and not any(_read(u.text) for u in row.values()):
             if _OCCASIONS.search(" ".join(u.text for u in row.values())):
                 return []  # (a header naming the occasions: "Baseline (n = 41) | Follow-up (n = 36)")
-            sized = [(c, s[0]) for c, u in sorted(row.items()) if len(s := sizes_in(u.text)) == 1 and not _TOTAL_HEAD.match(u.text)]
-            groups = sized if len(sized) == 2 and all(n >= 2 for _, n in sized) else []
+            groups = sized_heads(row)
             stat_col = next((c for c, role in roles.items() if role in ("t", "F", "mixed:t")), None)
             continue
         if not groups and stat_col is not None and not any(_read(u.text) for u in row.values()):  # a second header row with
             if _OCCASIONS.search(" ".join(u.text for u in row.values())):  # the groups' n ("Group (mean ± SD) | t" above
                 return []  # "Control group (n = 30) | Intervention group (n = 30)", PMC12588921)
-            sized = [(c, s[0]) for c, u in sorted(row.items()) if len(s := sizes_in(u.text)) == 1 and not _TOTAL_HEAD.match(u.text)]
-            groups = sized if len(sized) == 2 and all(n >= 2 for _, n in sized) else []
+            groups = sized_heads(row)
             continue
-        if len(groups) != 2 or stat_col is None or stat_col not in row:
+        if len(groups) < 2 or stat_col is None or stat_col not in row:
             continue
         read = [_read(row[c].text) if c in row else None for c, _ in groups]
-        if read[0] is None or read[1] is None:
+        if any(x is None for x in read):
             continue
         typed = " vs ".join(row[c].text.strip() for c, _ in groups)
-        out.append(GroupMeans(row[stat_col], ((*read[0], groups[0][1]), (*read[1], groups[1][1])), typed))  # type: ignore[arg-type]
+        out.append(GroupMeans(row[stat_col], tuple((*x, n) for x, (_, n) in zip(read, groups)), typed))  # type: ignore[misc]
     return out
 
 
@@ -157,7 +162,7 @@ def ranges(rep: Reported, groups: GroupMeans) -> dict[str, tuple[float, float]]:
     if len(groups.groups) == 2:
         two = {name: _t_range(groups, welch) for name, welch in (("Student's", False), ("Welch's", True))}
         return two if rep.symbol == "t" else {f"{name} t²": (low * low, high * high) for name, (low, high) in two.items()}
-    return {"one-way ANOVA's": _f_range(groups)} if rep.symbol == "F" else {}
+    return {"one-way ANOVA's": _f_range(groups)} if rep.symbol == "F" and not groups.welch else {}  # (Welch's ANOVA: not held)
 
 
 def means_fit(rep: Reported, groups: GroupMeans) -> list[Finding]:

@@ -26,7 +26,7 @@ from ..style.profile import Style, load_style
 from .checks import _LEVEL_NAMED, CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
 from .counts import CountTest, count_tests, counts_fit
-from .means import GroupMeans, category_means, means_fit, two_means
+from .means import GroupMeans, category_means, group_means, means_fit
 from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -309,12 +309,13 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
         if any("(" in u.text or "±" in u.text for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses; a mean its ±)
             items = _with_counts(items, count_tests(cells, mark), context)
-            beside = {id(m.unit): m for m in two_means(cells, said)}
+            welch = _WELCH.search(said) is not None
+            beside = {id(m.unit): replace(m, welch=welch) for m in group_means(cells, said)}
             items = [replace(it, means=beside[id(it.unit)]) if id(it.unit) in beside and it.rep.symbol in ("t", "F") else it for it in items]
             read_cells = {id(it.unit) for it in items}
             items += [_Item(m.unit, m.rep, None, (), f"read from the table's row: the mean ± SD of each of {len(m.groups)} categories "
                             f"with its n in the rows under the variable, the test's value on the first ({m.rep.symbol}: df from their n's), its p", context, means=m)
-                      for m in category_means(cells, said, mark) if m.rep is not None and id(m.unit) not in read_cells]
+                      for m in (replace(g, welch=welch) for g in category_means(cells, said, mark)) if m.rep is not None and id(m.unit) not in read_cells]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
