@@ -3434,3 +3434,27 @@ def test_three_groups_means_give_the_f_beside_them(tmp_path):
     assert sum("means-do-not-fit" in e.codes for e in audit_file(path)) == 1
     path.write_text(mutated + "\nNote. F from Welch's ANOVA.\n", encoding="utf-8")
     assert not any("means-do-not-fit" in e.codes for e in audit_file(path))
+
+
+# Wikipedia, "Mann–Whitney U test", Example statement of results (after Fritz, Morris & Richler, 2012, J Exp Psychol Gen)
+_U_TYPED = ("Median latencies in groups E and C were 153 and 247 ms; the distributions in the two groups differed significantly "
+            "(Mann–Whitney U = 10.5, n1 = n2 = 8, P < 0.05 two-tailed).")
+
+
+def test_a_mann_whitney_us_p_against_its_group_sizes(tmp_path):
+    """A Mann–Whitney U's p is held to the group sizes its sentence gives: no larger than the largest two-sided p of the
+    exact test (its distribution counted exactly; scipy's method="exact" agrees on 300 random untied samples) and the
+    normal approximation with or without continuity correction — ties and a one-sided test only lower it. The example
+    sentence agrees; its p mutated to .30 does not (U = 10.5 of 64 gives about .02)."""
+    from statsetter.audit.checks import _u_counts
+
+    x, y = [1, 4, 6, 9, 13, 15, 18, 22], [2, 3, 5, 7, 8, 10, 11, 12]
+    exact = stats.mannwhitneyu(x, y, method="exact")
+    u = min(exact.statistic, 64 - exact.statistic)
+    assert abs(2 * sum(_u_counts(8, 8)[: int(u) + 1]) / math.comb(16, 8) - exact.pvalue) < 1e-12
+    path = tmp_path / "t.md"
+    path.write_text(_U_TYPED + "\n", encoding="utf-8")
+    assert not any("p-does-not-follow" in e.codes for e in audit_file(path))
+    path.write_text(_U_TYPED.replace("P < 0.05", "P = 0.30") + "\n", encoding="utf-8")
+    (bad,) = [e for e in audit_file(path) if "p-does-not-follow" in e.codes]
+    assert "with n₁ = 8 and n₂ = 8" in bad.message and "the exact test" in bad.message
