@@ -3458,3 +3458,40 @@ def test_a_mann_whitney_us_p_against_its_group_sizes(tmp_path):
     path.write_text(_U_TYPED.replace("P < 0.05", "P = 0.30") + "\n", encoding="utf-8")
     (bad,) = [e for e in audit_file(path) if "p-does-not-follow" in e.codes]
     assert "with n₁ = 8 and n₂ = 8" in bad.message and "the exact test" in bad.message
+
+
+# PMC10547446 (Ann Med 2023;55(2):2261111), Table 1: each row two groups' positive and negative counts (n%) side by side
+# under the groups' spanners, the row's χ² and P after them
+_OUTCOME_PAIRS = """Table 1. Detection of mSDC2 test in the high-risk and physical examination groups based on gender and age.
+
+| | Total | High-risk group | | | Physical examination group | | | χ² | P |
+|---|---|---|---|---|---|---|---|---|---|
+| | | Total | Positive (n%) | Negative (n%) | Total | Positive (n%) | Negative (n%) | | |
+| Total | 1,560 | 9,943 | 932 (9.37) | 9,011 (90.63) | 5,117 | 208 (4.06) | 4,909 (95.97) | 136.071 | <0.0001 |
+| Male | 8,077 | 4,917 | 524 (10.66) | 4393 (89.34) | 3,160 | 140 (4.43) | 3,020 (95.57) | 98.848 | <0.0001 |
+| Female | 6,983 | 5,026 | 408 (8.12) | 4618 (91.88) | 1,957 | 68 (3.47) | 1,889 (96.53) | 47.806 | <0.0001 |
+| <20 | 122 | 102 | 2 (1.96) | 100 (98.04) | 22 | 0 (0) | 22 (100) | | |
+| 20–29 | 1,195 | 984 | 28 (2.85) | 956 (97.15) | 240 | 1 (0.42) | 239 (99.58) | 4.921 | 0.0265 |
+| 30–39 | 3,018 | 2,171 | 103 (4.74) | 2068 (95.26) | 960 | 10 (1.04) | 950 (98.96) | 26.233 | <0.0001 |
+| 40–49 | 3,548 | 2,315 | 160 (6.91) | 2155 (93.09) | 1,420 | 27 (1.90) | 1,393 (98.10) | 46.450 | <0.0001 |
+| 50–59 | 3,560 | 2,351 | 238 (10.12) | 2113 (89.88) | 1,519 | 72 (4.74) | 1,447 (95.26) | 36.293 | <0.0001 |
+| 60–69 | 1,668 | 1,274 | 197 (15.46) | 1077 (84.54) | 650 | 59 (9.08) | 591 (90.92) | 15.217 | <0.0001 |
+| 70–79 | 823 | 577 | 148 (25.65) | 429 (74.35) | 246 | 27 (10.98) | 219 (89.02) | 22.183 | <0.0001 |
+| ≥80 | 229 | 169 | 56 (33.14) | 113 (66.86) | 60 | 12 (20.00) | 48 (80.00) | 3.660 | 0.0557 |
+"""
+
+
+def test_a_row_of_groups_outcome_pairs_is_its_own_table(tmp_path):
+    """A row whose count columns come in pairs making up 100% — each group's positive and negative — is a 2 × k table of
+    its own: every one of the article's nine χ² values is Pearson's from its row (scipy's chi2_contingency), and the
+    row without a test is no part of the next. Its first row prints 4,909 of 5,117 as 95.97% (95.94%): found. A mutated
+    χ² is found. Before, none of these rows was read as counts."""
+    path = tmp_path / "t.md"
+    path.write_text(_OUTCOME_PAIRS, encoding="utf-8")
+    entries = audit_file(path)
+    assert len(entries) == 10 and all("two outcomes in pairs of columns" in e.notes[0] for e in entries)
+    assert [e.codes for e in entries if e.codes] == [["percent-does-not-fit"]]
+    assert "4909 / 5,117 is 95.94%, not 95.97%" in entries[0].message
+    assert f"{_chi2_p([[524, 4393], [140, 3020]])[0]:.3f}" == "98.848"
+    path.write_text(_OUTCOME_PAIRS.replace("| 98.848 |", "| 89.848 |"), encoding="utf-8")
+    assert sum("counts-do-not-fit" in e.codes for e in audit_file(path)) == 1

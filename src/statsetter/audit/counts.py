@@ -74,9 +74,9 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
         counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := _count(u.text)) is not None}
         tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
         if len(counts) >= 2:
-            if tested and (anchor is not None or not labelled):  # a variable's own test: a new block
-                close()
-                block, anchor, labelled = [], row, False
+            if tested and (anchor is not None or not labelled) or _outcome_pairs(counts, sorted(counts), every=True) is not None:  # a
+                close()  # variable's own test, or a row of groups' outcome pairs (each its own table): a new block
+                block, anchor, labelled = [], (row if tested else None), False
             elif tested:  # the test of the variable named above, on one of its rows of counts
                 anchor = row
             block.append(counts)
@@ -117,6 +117,23 @@ def _shares(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[i
         if wrong else ()
 
 
+def _outcome_pairs(row: dict[int, tuple[int, float, float]], columns: list[int], every: bool = False) -> "tuple[list[tuple[int, int]], tuple[str, ...]] | None":
+    """A row of two or more groups' outcomes side by side, "Positive (n%) | Negative (n%)" under each group's spanner
+    (PMC10547446's Table 1: "524 (10.66) | 4393 (89.34) | … | 140 (4.43) | 3,020 (95.57)"): the count columns in pairs
+    whose percents make up 100 — in at least half the pairs (a printed slip aside), or with ``every`` in all —; each
+    group's two counts, and (as _shares gives them) the percents that are not their count's share of their pair. None
+    for any other row."""
+    if len(columns) < 4 or len(columns) % 2:
+        return None
+    pairs = [(row[a], row[b]) for a, b in zip(columns[::2], columns[1::2])]
+    whole = sum(abs(x[1] + y[1] - 100.0) <= x[2] + y[2] + 1e-9 for x, y in pairs)
+    if whole < len(pairs) if every else 2 * whole < len(pairs):
+        return None
+    wrong = [f"{n} / {x[0] + y[0]:,} is {100.0 * n / (x[0] + y[0]):.{max(1, _places(half))}f}%, not {pct:.{_places(half)}f}%"
+             for x, y in pairs for n, pct, half in (x, y) if x[0] + y[0] and abs(100.0 * n / (x[0] + y[0]) - pct) > half + 1e-9]
+    return [(x[0], y[0]) for x, y in pairs], (("of its group's two counts", *wrong) if wrong else ())
+
+
 def _whole(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[int]) -> bool:
     """Whether the block's percents make up 100 in each group's column, or in each row, to their printed digits: the
     mark of a variable's counts even where their percents are wrong (a table whose percents of one column are of another)."""
@@ -141,10 +158,15 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
     head_sizes = [sizes_in(heads.get(c, "")) for c in groups]
     sizes = [s[0] if len(s) == 1 else None for s in head_sizes]
     percents = _shares(block, groups, sizes)
+    paired = _outcome_pairs(block[0], groups) if len(block) == 1 and percents is None else None  # (only where the counts are no
+    percents = paired[1] if paired is not None else percents  # single category of each group: their percents its n's shares)
     if percents is None:
         return None
     table = [[row[c][0] for c in groups] for row in block]
-    if len(table) == 1:  # one category typed: the other is each group's n (its head's) less it
+    if paired is not None:  # a row of groups' outcome pairs: each group's two counts (its categories)
+        table = [list(x) for x in zip(*paired[0])]
+        groups = groups[::2]
+    elif len(table) == 1:  # one category typed: the other is each group's n (its head's) less it
         if any(s is None or s < n for s, n in zip(sizes, table[0])):
             return None
         table.append([s - n for s, n in zip(sizes, table[0])])  # type: ignore[operator]
@@ -159,8 +181,9 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
     trimmed = _trimmed(counts)
     chi = pearson(trimmed) if len(trimmed) >= 2 and len(trimmed[0]) >= 2 else None
     given = f"; Pearson's χ²({df}) = {_shown(chi)} from them, p = {_small(upper_tail('chi2', chi, (float(df),)))}" if chi is not None else ""
-    how = f"the counts of {len(table)} categories in {len(groups)} groups' columns" + \
-        (" (the other category each group's n less the count)" if len(block) == 1 else "") + given
+    how = (f"the counts of {len(table)} categories in {len(groups)} groups' columns" if paired is None else
+           f"the counts of {len(groups)} groups' two outcomes in pairs of columns") + \
+        (" (the other category each group's n less the count)" if len(block) == 1 and paired is None else "") + given
     if value is not None:
         typed = value.group("num")
         number = Number(typed, float(typed.replace(",", ".")), len(re.split(r"[.,]", typed)[1]) if re.search(r"[.,]", typed) else 0,
