@@ -3228,6 +3228,9 @@ def test_a_tables_counts_give_its_chi_square_and_p(tmp_path):
     path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |"), encoding="utf-8")
     (bad,) = [e for e in audit_file(path) if e.codes]
     assert bad.codes == ["counts-do-not-fit"] and f"Pearson's χ² p = {_chi2_p([[2699, 2002, 227], [589, 484, 42]])[1]:.4g}" in bad.message
+    # a survey's weighted percents and design-based test (said in the caption) are not the counts' own: not held to them
+    path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |").replace("study subjects", "study subjects (weighted percentages)"), encoding="utf-8")
+    assert not any(e.codes for e in audit_file(path))
 
 
 def test_a_binary_variable_in_one_row_and_a_mixed_head(tmp_path):
@@ -3355,6 +3358,16 @@ def test_two_groups_means_give_the_t_beside_them(tmp_path):
     assert sum("means-do-not-fit" in e.codes for e in audit_file(path)) == 1
     path.write_text(mutated.replace("Female (n", "Baseline (n").replace("Male (n", "Follow-up (n"), encoding="utf-8")
     assert not any("means-do-not-fit" in e.codes for e in audit_file(path))
+    # the same means with their standard errors after ± ("mean ± SE" in the caption): not taken for SDs
+    with_se = text
+    for column in ("body_mass_g", "flipper_length_mm", "bill_depth_mm"):
+        a, b = female[column], male[column]
+        with_se = with_se.replace(f"{a.mean():.1f} ± {a.std():.1f}", f"{a.mean():.1f} ± {a.std() / math.sqrt(len(a)):.1f}")
+        with_se = with_se.replace(f"{b.mean():.1f} ± {b.std():.1f}", f"{b.mean():.1f} ± {b.std() / math.sqrt(len(b)):.1f}")
+    path.write_text(with_se.replace("Penguins by sex", "Penguins by sex (mean ± SE)").replace("| 0.001 |", "| < .001 |"), encoding="utf-8")
+    assert not any("means-do-not-fit" in e.codes for e in audit_file(path))
+    path.write_text(with_se.replace("| 0.001 |", "| < .001 |"), encoding="utf-8")  # (unsaid, the SEs would be taken for SDs)
+    assert any("means-do-not-fit" in e.codes for e in audit_file(path))
 
 
 def test_a_published_table_whose_ts_its_means_do_not_give(tmp_path):

@@ -48,10 +48,17 @@ def _count(text: str) -> tuple[int, float, float] | None:
     return int(re.sub(r"\D", "", m.group("n"))), float(pct), 0.5 * 10.0 ** -len(pct.partition(".")[2])
 
 
-def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: str = ".") -> list[CountTest]:
+# survey weights: the percents are weighted and the test design-based (Rao–Scott), neither the counts' own
+_WEIGHTED = re.compile(r"(?i)\bweight(?:ed|s)\b|rao[-–\s]?scott|design[- ]based|complex\s+survey|survey[- ]adjusted")
+
+
+def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: str = ".", said: str = "") -> list[CountTest]:
     """Each categorical variable's counts in a table, with its χ² (and p) or its p: see the module's text. A block is read
     only where each of its rows gives a count with its percent in every group's column, for at least two groups, and the
-    percents are the counts' shares (of their column, their group's n or their row) or make up 100 (_shares)."""
+    percents are the counts' shares (of their column, their group's n or their row) or make up 100 (_shares); nothing
+    where the caption, note (``said``) or a head says the figures are weighted (a survey's design-based test)."""
+    if _WEIGHTED.search(said) or any(_WEIGHTED.search(u.text) for _, _, u, _ in cells if COUNT_CELL.fullmatch(u.text) is None):
+        return []
     rows: dict[int, dict[int, Unit]] = {}
     for r, c, unit, _ in cells:
         rows.setdefault(r, {})[c] = unit

@@ -27,6 +27,9 @@ _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)
 # the table ("paired", "repeated measures"), or the columns' heads naming occasions ("Baseline | Follow-up", "Pre | Post") —
 # not a caption's "Baseline characteristics", a trial's Table 1 of independent groups
 _PAIRED = re.compile(r"(?i)\bpaired|(?<!in)dependent[- ]samples?|\brepeated|\bwithin[- ]subjects?")
+# a mean ± its standard error, not its SD ("mean ± SE", "± SEM", "standard error of the mean"), said in the caption, note or a
+# head: a t from the means and those numbers as SDs would be far off
+_SE_SAID = re.compile(r"(?<![\w.])(?:SEM?|S\.E\.(?:M\.)?)(?![\w.])|(?i:standard\s+errors?)")
 _OCCASIONS = re.compile(rf"{_PAIRED.pattern}|(?i:\bpre-?(?:test|treatment|intervention)?\b|\bpost|baseline|follow[- ]?up|\bbefore\b|"
                         r"\bafter\b|\btimes?\b|\bweeks?\b|\bmonths?\b|\bvisits?\b|\bT[0-3]\b)")
 
@@ -55,9 +58,10 @@ def _half(typed: str) -> float:
 
 
 def _rows(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str) -> dict[int, dict[int, Unit]]:
-    """The table's cells by row and column; none where no cell gives a mean ± SD or the caption or note (``said``) names
-    a paired design."""
-    if not any("±" in u.text or "+/-" in u.text for _, _, u, _ in cells) or _PAIRED.search(said):
+    """The table's cells by row and column; none where no cell gives a mean ± SD, or the caption or note (``said``) names
+    a paired design, or it or a head says the ± is a standard error."""
+    if not any("±" in u.text or "+/-" in u.text for _, _, u, _ in cells) or _PAIRED.search(said) or _SE_SAID.search(said) or \
+            any(_SE_SAID.search(u.text) for _, _, u, _ in cells if not _read(u.text)):
         return {}
     rows: dict[int, dict[int, Unit]] = {}
     for r, c, unit, _ in cells:

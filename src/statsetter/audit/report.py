@@ -308,7 +308,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
         if any("(" in u.text or "±" in u.text for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses; a mean its ±)
-            items = _with_counts(items, count_tests(cells, mark), context)
+            items = _with_counts(items, count_tests(cells, mark, said), context)
             welch = _WELCH.search(said) is not None
             beside = {id(m.unit): replace(m, welch=welch) for m in group_means(cells, said)}
             items = [replace(it, means=beside[id(it.unit)]) if id(it.unit) in beside and it.rep.symbol in ("t", "F") else it for it in items]
