@@ -3228,6 +3228,10 @@ def test_a_tables_counts_give_its_chi_square_and_p(tmp_path):
     path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |"), encoding="utf-8")
     (bad,) = [e for e in audit_file(path) if e.codes]
     assert bad.codes == ["counts-do-not-fit"] and f"Pearson's χ² p = {_chi2_p([[2699, 2002, 227], [589, 484, 42]])[1]:.4g}" in bad.message
+    # a note naming a trend test: a table larger than 2 × 2 may have had it — not held, and said so
+    path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |").replace("Chi‐square test and t test", "Chi-square test for trend and t test"), encoding="utf-8")
+    race = {e.found: e for e in audit_file(path)}["p = .015"]
+    assert not race.codes and "not held to them: the caption or note names 'trend'" in race.notes[0]
     # a survey's weighted percents and design-based test (said in the caption) are not the counts' own: not held to them
     path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |").replace("study subjects", "study subjects (weighted percentages)"), encoding="utf-8")
     assert not any(e.codes for e in audit_file(path))

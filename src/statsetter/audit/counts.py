@@ -13,7 +13,7 @@ from __future__ import annotations
 
 import math
 import re
-from dataclasses import dataclass
+from dataclasses import dataclass, replace
 from typing import Sequence
 
 from ..pvalues import upper_tail
@@ -36,6 +36,7 @@ class CountTest:
     counts: tuple[tuple[int, ...], ...]
     how: str  # where the counts were read
     percents: tuple[str, ...] = ()  # what the percents are shares of, then each that is not its count's share
+    other: str = ""  # a test the caption or note names that a table larger than 2 × 2 may have had instead (a trend test)
 
 
 def _count(text: str) -> tuple[int, float, float] | None:
@@ -48,6 +49,9 @@ def _count(text: str) -> tuple[int, float, float] | None:
     return int(re.sub(r"\D", "", m.group("n"))), float(pct), 0.5 * 10.0 ** -len(pct.partition(".")[2])
 
 
+# tests of a table larger than 2 × 2 other than those computed here, named in a caption or note: a trend test, a rank test
+# of ordered categories, an exact test of the whole table (Freeman–Halton)
+_OTHER_TEST = re.compile(r"(?i)\btrend|cochran[-–\s]?armitage|mantel|kruskal|mann[-–\s]?whitney|wilcoxon|\brank|fisher|\bexact\b|freeman")
 # survey weights: the percents are weighted and the test design-based (Rao–Scott), neither the counts' own
 _WEIGHTED = re.compile(r"(?i)\bweight(?:ed|s)\b|rao[-–\s]?scott|design[- ]based|complex\s+survey|survey[- ]adjusted")
 
@@ -99,7 +103,8 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
         elif all(not u.text.strip() for c, u in row.items() if c != first and c not in (p_col, chi_col)):
             anchor, labelled = (row if tested else None), True  # a row naming the variable, its test there or on its first row of counts
     close()
-    return out
+    other = _OTHER_TEST.search(said)
+    return [replace(t, other=other.group()) for t in out] if other is not None else out
 
 
 _SHARES = ("of its column's counts", "of its group's n", "of its row's counts")
@@ -268,8 +273,8 @@ def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
     out = [Finding("percent-does-not-fit", f"A percent is not its count's share {test.percents[0]}: " + "; ".join(test.percents[1:]) + ".",
                    ", ".join(f"{part.split(' / ')[0]} ({part.rsplit('not ', 1)[1]})" for part in test.percents[1:]))] if test.percents else []
     table = _trimmed(counts)
-    if len(table) < 2 or len(table[0]) < 2:
-        return out
+    if len(table) < 2 or len(table[0]) < 2 or (test.other and len(table) * len(table[0]) > 4):  # (a table larger than 2 × 2
+        return out  # whose test the note says may be another: a trend test, a rank test of ordered categories)
     df = (len(table) - 1) * (len(table[0]) - 1)
     two = len(table) == 2 and len(table[0]) == 2
     methods = {"Pearson's χ²": pearson(table), "the likelihood-ratio χ²": likelihood_ratio(table)}
