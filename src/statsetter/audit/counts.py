@@ -61,8 +61,9 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     only where each of its rows gives a count with its percent in every group's column, for at least two groups, and the
     percents are the counts' shares (of their column, their group's n or their row) or make up 100 (_shares); nothing
     where the caption, note (``said``) or a head says the figures are weighted (a survey's design-based test)."""
-    if _WEIGHTED.search(said) or any(_WEIGHTED.search(u.text) for _, _, u, _ in cells if COUNT_CELL.fullmatch(u.text) is None):
-        return []
+    top = min((r for r, _, _, _ in cells), default=0)
+    if _WEIGHTED.search(said) or any(_WEIGHTED.search(u.text) for r, _, u, _ in cells if r == top):  # (a head: "n (weighted %)"; a row's
+        return []  # label — "Birth weights" — says nothing of the figures)
     rows: dict[int, dict[int, Unit]] = {}
     for r, c, unit, _ in cells:
         rows.setdefault(r, {})[c] = unit
