@@ -3232,6 +3232,9 @@ def test_a_tables_counts_give_its_chi_square_and_p(tmp_path):
     path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |").replace("Chi‐square test and t test", "Chi-square test for trend and t test"), encoding="utf-8")
     race = {e.found: e for e in audit_file(path)}["p = .015"]
     assert not race.codes and "not held to them: the caption or note names 'trend'" in race.notes[0]
+    # a row's label that speaks of weights says nothing of the figures: read as before
+    path.write_text(_ROW_PERCENTS.replace("| Other |", "| Birth weights |"), encoding="utf-8")
+    assert [e.found for e in audit_file(path)] == ["p = .024", "p < .001", "p = .151", "p < .001"]
     # a survey's weighted percents and design-based test (said in the caption) are not the counts' own: not held to them
     path.write_text(_ROW_PERCENTS.replace("| .151 |", "| .015 |").replace("study subjects", "study subjects (weighted percentages)"), encoding="utf-8")
     assert not any(e.codes for e in audit_file(path))
