@@ -3515,3 +3515,14 @@ def test_a_row_of_groups_outcome_pairs_is_its_own_table(tmp_path):
     assert f"{_chi2_p([[524, 4393], [140, 3020]])[0]:.3f}" == "98.848"
     path.write_text(_OUTCOME_PAIRS.replace("| 98.848 |", "| 89.848 |"), encoding="utf-8")
     assert sum("counts-do-not-fit" in e.codes for e in audit_file(path)) == 1
+
+
+def test_a_count_with_a_space_as_thousands_separator_beside_means(tmp_path):
+    """A category's n typed with a space between its thousands ("12 513 (51.4)", as European typesetting prints it) in a
+    table of means by category: read as 12,513, as the counts reader reads it. Before, the means reader took the n with
+    int() on the typed text and the audit ended in an internal error (a hostile input, ours)."""
+    path = tmp_path / "t.md"
+    path.write_text("Table 1. Scores\n\n| Variable | Group | n (%) | mean ± SD | F/t value | P value |\n|---|---|---|---|---|---|\n"
+                    "| Age | young | 12 513 (51.4) | 6.24 ± 4.08 | 15.308 | < 0.001 |\n| | old | 11 830 (48.6) | 8.57 ± 4.86 | | |\n", encoding="utf-8")
+    (entry,) = audit_file(path)
+    assert entry.found.startswith("F(1, 24341) = 15.308") and "means-do-not-fit" in entry.codes  # (these invented means give F ≈ 1,500)

@@ -20,7 +20,7 @@ from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, PValue, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, sizes_in
+from .tables import _TOTAL_HEAD, _number, _p_cell, _role, count_cell, sizes_in
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -37,16 +37,6 @@ class CountTest:
     how: str  # where the counts were read
     percents: tuple[str, ...] = ()  # what the percents are shares of, then each that is not its count's share
     other: str = ""  # a test the caption or note names that a table larger than 2 × 2 may have had instead (a trend test)
-
-
-def _count(text: str) -> tuple[int, float, float] | None:
-    """A cell's count and its percent with the percent's half unit, "287 (5.7%)": (287, 5.7, 0.05); None for a cell that
-    is not a count with its percent."""
-    m = COUNT_CELL.fullmatch(text)
-    if m is None:
-        return None
-    pct = m.group("pct").replace(",", ".")
-    return int(re.sub(r"\D", "", m.group("n"))), float(pct), 0.5 * 10.0 ** -len(pct.partition(".")[2])
 
 
 # tests of a table larger than 2 × 2 other than those computed here, named in a caption or note: a trend test, a rank test
@@ -83,7 +73,7 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     for r in sorted(rows):
         row = rows[r]
         first = min(row)
-        counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := _count(u.text)) is not None}
+        counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := count_cell(u.text)) is not None}
         tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
         if len(counts) >= 2:
             if tested and (anchor is not None or not labelled) or _outcome_pairs(counts, sorted(counts), every=True) is not None:  # a

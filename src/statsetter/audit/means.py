@@ -19,7 +19,7 @@ from typing import Sequence
 from .checks import Finding
 from .parsing import Number, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, count_cell, sizes_in
 
 # a mean with its SD, "45.3 ± 6.2", "10.07 ±4.80", "3.2 +/- 0.5"
 _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)\s*(?P<sd>\d+(?:[.,]\d+)?)\s*[a-d*†‡]*\s*")
@@ -219,7 +219,7 @@ def category_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said:
                 p_col = next((c for c, u in row.items() if _role(u.text) == "p"), None)
             continue
         means = [(c, read) for c, u in row.items() if (read := _read(u.text)) is not None]
-        sized = [int(m.group("n").replace(",", "")) for u in row.values() if (m := COUNT_CELL.fullmatch(u.text))] or \
+        sized = [n[0] for u in row.values() if (n := count_cell(u.text)) is not None] or \
             [int(u.text.strip()) for c, u in row.items() if u.text.strip().isdigit() and c != min(row)]
         if stat_col is None or len(means) != 1 or len(sized) != 1:
             close()

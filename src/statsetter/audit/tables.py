@@ -520,6 +520,16 @@ _TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b") 
 COUNT_CELL = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 
 
+def count_cell(text: str) -> tuple[int, float, float] | None:
+    """A cell's count and its percent with the percent's half unit, "287 (5.7%)": (287, 5.7, 0.05); None for a cell that
+    is not a count with its percent."""
+    m = COUNT_CELL.fullmatch(text)
+    if m is None:
+        return None
+    pct = m.group("pct").replace(",", ".")
+    return int(re.sub(r"\D", "", m.group("n"))), float(pct), 0.5 * 10.0 ** -len(pct.partition(".")[2])
+
+
 def _named_test(row: "dict[int, tuple[Unit, list[Reported]]]", column: int) -> str:
     """The test a cell before ``column`` names ("Student's t", "Welch's t", "Mann-Whitney U"), or ""."""
     for k in sorted(row):
