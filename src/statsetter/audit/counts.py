@@ -18,9 +18,9 @@ from typing import Sequence
 
 from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
-from .parsing import Number, PValue, Reported
+from .parsing import Number, Reported, p_text
 from .reading import Unit
-from .tables import _TOTAL_HEAD, _number, _p_cell, _role, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -54,9 +54,7 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     top = min((r for r, _, _, _ in cells), default=0)
     if _WEIGHTED.search(said) or any(_WEIGHTED.search(u.text) for r, _, u, _ in cells if r == top):  # (a head: "n (weighted %)"; a row's
         return []  # label — "Birth weights" — says nothing of the figures)
-    rows: dict[int, dict[int, Unit]] = {}
-    for r, c, unit, _ in cells:
-        rows.setdefault(r, {})[c] = unit
+    rows = cell_grid(cells)
     heads: dict[int, str] = {}
     p_col = chi_col = None
     out: list[CountTest] = []
@@ -196,12 +194,8 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
     else:
         rep = Reported(None, "", p.start, p.start, p.end, (), None, "=", None, p)  # type: ignore[union-attr]
         unit = p_unit
-    rep.text = ", ".join(([f"χ²({df}) = {number.text}"] if value is not None else []) + ([_p_text(p)] if p is not None else []))
+    rep.text = ", ".join(([f"χ²({df}) = {number.text}"] if value is not None else []) + ([p_text(p).lstrip(', ')] if p is not None else []))
     return CountTest(unit, rep, counts, how, percents)  # type: ignore[arg-type]
-
-
-def _p_text(p: PValue) -> str:
-    return p.symbol_text if p.op == "ns" else f"p {p.op} {p.number.text}"  # type: ignore[union-attr]
 
 
 # -- the tests the counts give ---------------------------------------------------------------------------------------
@@ -290,7 +284,7 @@ def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
             said = "; ".join(f"{name} p = {_small(q)}" for name, q in ps.items())
             out.append(Finding("counts-do-not-fit", f"The p does not follow from the table's counts by the usual tests of a {len(table)} × {len(table[0])} "
                                                     f"table ({said}); if another test gave it (a trend test, an exact test of a larger table), the note should say so.",
-                               f"{_p_text(rep.p)}; counts {_counts_text(counts)}"))  # type: ignore[arg-type]
+                               f"{p_text(rep.p).lstrip(', ')}; counts {_counts_text(counts)}"))  # type: ignore[arg-type]
     return out
 
 

@@ -19,7 +19,7 @@ from typing import Sequence
 from .checks import Finding
 from .parsing import Number, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
 
 # a mean with its SD, "45.3 ± 6.2", "10.07 ±4.80", "3.2 +/- 0.5"
 _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)\s*(?P<sd>\d+(?:[.,]\d+)?)\s*[a-d*†‡]*\s*")
@@ -63,10 +63,7 @@ def _rows(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str) -> 
     if not any("±" in u.text or "+/-" in u.text for _, _, u, _ in cells) or _PAIRED.search(said) or _SE_SAID.search(said) or \
             any(_SE_SAID.search(u.text) for _, _, u, _ in cells if not _read(u.text)):
         return {}
-    rows: dict[int, dict[int, Unit]] = {}
-    for r, c, unit, _ in cells:
-        rows.setdefault(r, {})[c] = unit
-    return rows
+    return cell_grid(cells)
 
 
 def group_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str) -> list[GroupMeans]:

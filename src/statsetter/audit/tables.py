@@ -520,6 +520,14 @@ _TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b") 
 COUNT_CELL = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 
 
+def cell_grid(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> dict[int, dict[int, Unit]]:
+    """A table's cells by row and column (counts.py and means.py read them so)."""
+    rows: dict[int, dict[int, Unit]] = {}
+    for r, c, unit, _ in cells:
+        rows.setdefault(r, {})[c] = unit
+    return rows
+
+
 def count_cell(text: str) -> tuple[int, float, float] | None:
     """A cell's count and its percent with the percent's half unit, "287 (5.7%)": (287, 5.7, 0.05); None for a cell that
     is not a count with its percent."""
