@@ -3327,6 +3327,11 @@ def test_a_measures_means_by_category_give_each_variables_f(tmp_path):
     flagged = {found: e.codes for found, e in entries.items() if e.codes}
     assert flagged == {"F(1, 288) = 0.18, p = 0.893": ["p-does-not-follow", "means-do-not-fit"], "F(1, 288) = 1.361, p = 0.244": ["means-do-not-fit"]}
     assert "F(3, 286) = 3.493, p = 0.016" in entries and "F(2, 287) = 15.308, p < 0.001" in entries
+    # the same table headed "F" (read then by the table's F column): the means and the n's df serve it alike
+    path.write_text(_CATEGORY_MEANS.replace("| F/t value |", "| F |"), encoding="utf-8")
+    headed_f = {e.found: e.codes for e in audit_file(path) if e.codes}
+    assert headed_f == {"F = 0.18, p = 0.893": ["p-does-not-follow", "means-do-not-fit"], "F = 1.361, p = 0.244": ["means-do-not-fit"]}
+    path.write_text(_CATEGORY_MEANS, encoding="utf-8")
     # the suggestion does not recompute a p from a value its means do not give (the printed p is the means' own)
     assert entries["F(1, 288) = 0.18, p = 0.893"].suggestion == "F(1, 288) = 0.18 (p left out: the statistic itself does not follow from the table's numbers beside it)"
 

@@ -312,10 +312,16 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
             welch = _WELCH.search(said) is not None
             beside = {id(m.unit): replace(m, welch=welch) for m in group_means(cells, said)}
             items = [replace(it, means=beside[id(it.unit)]) if id(it.unit) in beside and it.rep.symbol in ("t", "F") else it for it in items]
-            read_cells = {id(it.unit) for it in items}
-            items += [_Item(m.unit, m.rep, None, (), f"read from the table's row: the mean ± SD of each of {len(m.groups)} categories "
-                            f"with its n in the rows under the variable, the test's value on the first ({m.rep.symbol}: df from their n's), its p", context, means=m)
-                      for m in (replace(g, welch=welch) for g in category_means(cells, said, mark)) if m.rep is not None and id(m.unit) not in read_cells]
+            read_cells = {id(it.unit): k for k, it in enumerate(items)}
+            for m in (replace(g, welch=welch) for g in category_means(cells, said, mark)):
+                how = (f"the mean ± SD of each of {len(m.groups)} categories with its n in the rows under the variable, the test's value on "
+                       f"the first ({m.rep.symbol}: df from their n's)")  # type: ignore[union-attr]
+                k = read_cells.get(id(m.unit))
+                if k is None:
+                    items.append(_Item(m.unit, m.rep, None, (), f"read from the table's row: {how}, its p", context, means=m))  # type: ignore[arg-type]
+                elif items[k].rep.symbol == m.rep.symbol and not items[k].rep.df:  # (read from an "F" or "t" column: its df are the n's)
+                    df = tuple(d.value for d in m.rep.df)  # type: ignore[union-attr]
+                    items[k] = replace(items[k], means=m, how=f"{items[k].how}, {how}", readings=(Reading(df, f"df = {', '.join(f'{d:g}' for d in df)}, from the categories' n's"),))
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
