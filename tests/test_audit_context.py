@@ -2563,7 +2563,8 @@ def test_an_odds_ratio_head_with_its_intervals_plural():
         entries = audit_file(path)
         assert len(entries) == 6 and all(e.codes == [] for e in entries) and entries[0].found == "OR = 1.25, 95% CI [1.05, 1.48], p = 0.014"
         path.write_text(table.replace("1.33 (0.99–1.77) | 0.055", "1.33 (1.09–1.77) | 0.55"), encoding="utf-8")  # (ours)
-        assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree"]]
+        # (the mutated lower limit also moves the interval's centre off the ratio: ln 1.09 and ln 1.77 centre on 1.39)
+        assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree", "ratio-does-not-fit"]]
 
 
 def test_a_correlation_tables_intervals_in_the_row_below_are_read(tmp_path):
@@ -2700,8 +2701,8 @@ def test_an_odds_ratio_is_held_to_exp_beta_without_an_se_column(tmp_path):
     entries = audit_file(path)
     assert len(entries) == 5 and all(e.codes == [] for e in entries)
     path.write_text(_EHPM_TABLE2.replace("| 0.77 | 2.16 |", "| 0.77 | 2.61 |"), encoding="utf-8")
-    (bad,) = [e for e in audit_file(path) if e.codes]
-    assert bad.codes == ["coefficient-does-not-fit"] and "exp(B)" in bad.message
+    (bad,) = [e for e in audit_file(path) if e.codes]  # (the mutated ratio is off its interval's centre too: it, not the interval, is wrong)
+    assert bad.codes == ["coefficient-does-not-fit", "ratio-does-not-fit"] and "exp(B)" in bad.message
 
 
 # PMC7723764 (Ann Med Surg 2020;60:680–685), Table 4: Cox models of overall survival, a crude and an adjusted hazard ratio
@@ -2909,8 +2910,8 @@ def test_odds_ratio_heads_and_limits_as_epidemiology_tables_name_them(tmp_path):
     entries = audit_file(path)
     assert [e.found for e in entries][:2] == ["OR = 1.01, 95% CI [1.00, 1.01], p < 0.05", "OR = 1.40, 95% CI [1.27, 1.54], p < 0.001"]
     assert len(entries) == 5 and not any(e.codes for e in entries)
-    path.write_text(_INJ_PREV.replace("| 1.40 | 1.27 |", "| 1.40 | 0.97 |"), encoding="utf-8")
-    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree"]]
+    path.write_text(_INJ_PREV.replace("| 1.40 | 1.27 |", "| 1.40 | 0.97 |"), encoding="utf-8")  # (an interval no longer the ratio's)
+    assert [e.codes for e in audit_file(path) if e.codes] == [["ci-p-disagree", "ratio-does-not-fit"]]
 
 
 # Int J Environ Res Public Health 2018;15:352 (PMC5858421), Table 2 (rows of it): "Odds ratios of one-year mortality …" with

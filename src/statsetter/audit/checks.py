@@ -15,6 +15,7 @@ import bisect
 import functools
 import math
 import re
+from statistics import NormalDist
 from dataclasses import dataclass, replace
 from typing import TYPE_CHECKING, Callable, Sequence
 
@@ -76,6 +77,13 @@ CODES: dict[str, tuple[str, str]] = {
         "the p and the CI disagree about the null value (one says significant, the other not)",
         "Confidence intervals and p from the same test agree (Altman & Bland, 2011, BMJ, How to obtain the P value from a confidence interval)",
     ),
+    "ratio-does-not-fit": (
+        "a ratio (OR, HR, RR) that its interval does not fit: not at the interval's centre on the log scale, or with a p the "
+        "interval does not give (z = ln ratio / SE, the SE from the interval's width), beyond what the printed digits and other "
+        "interval methods (exact, profile likelihood) and tests (likelihood ratio, score, exact) allow",
+        "Confidence intervals: a ratio's interval is exp(ln ratio ± z·SE), symmetric about it on the log scale (definition); its "
+        "p from the interval as Altman & Bland (2011, BMJ, How to obtain the P value from a confidence interval) compute it",
+    ),
     "ms-does-not-fit": (
         "an ANOVA table's mean square that is not its sum of squares over its df (the effect's row or its error row)",
         "Analysis of variance: MS = SS / df (definition), with the printed precision of each number",
@@ -122,7 +130,7 @@ SEVERITY: dict[str, str] = {
     "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
     "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning", "means-do-not-fit": "warning",
-    "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning",
+    "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning", "ratio-does-not-fit": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
 }
@@ -428,6 +436,67 @@ def ci_p_agreement(rep: Reported, alpha: float) -> list[Finding]:
                                f"{'below' if significant else 'above'} {threshold:g}; check both, or say which method gave each.",
                                f"{shown}; {ci.level * 100:g}% CI [{ci.low.text}, {ci.high.text}]"))
             break
+    return out
+
+
+_NORMAL = NormalDist()
+
+
+def ratio_fits(rep: Reported, alpha: float, with_p: bool = True) -> list[Finding]:
+    """A ratio (OR, HR, RR and their adjusted forms) against its interval, on the log scale where a Wald interval is
+    exp(ln ratio ± z·SE): the ratio at the interval's centre, and its p the one the interval gives (Altman & Bland, 2011:
+    z = ln ratio / SE, SE = the interval's log width / 2z). Each number stands for what its printed digits allow. Other
+    interval methods part from the centre and other tests from that p: exact (conditional) and profile-likelihood intervals,
+    likelihood-ratio, score, exact and continuity-corrected tests on 2 × 2 tables of 20 to 1,000 (simulated: the ratio at
+    most 0.13 half-widths off centre per unit of log half-width, the p's z between 0.57 and 1.46 times the interval's where
+    the half-width is below 1); the margins are twice those: a finding is a ratio its interval cannot be made around, or a p
+    of another row or model (a warning). Wide intervals (SE of ln ratio above 0.5), limits printed as 0 and intervals
+    without a level are not judged; a p only where the ratio is the statistic's one (no other test's p) and ``with_p`` (not
+    where the p and interval already disagree about the null, ci_p_agreement, or the p is said to be one-sided)."""
+    out: list[Finding] = []
+    ratios = [e for e in rep.effects if e.name in RATIOS and e.ci is not None and e.ci.level is not None and 0 < e.ci.level < 1]
+    for e in ratios:
+        ci, est = e.ci, e.number
+        assert ci is not None and ci.level is not None
+        low, high = ci.low, ci.high
+        if min(low.value - low.half_unit, est.value - est.half_unit) <= 0 or not low.value <= est.value <= high.value:
+            continue  # (a limit printed as 0.00, or the ratio outside: another finding's)
+        l1, l2 = math.log(low.value - low.half_unit), math.log(low.value + low.half_unit)
+        h1, h2 = math.log(high.value - high.half_unit), math.log(high.value + high.half_unit)
+        e1, e2 = math.log(est.value - est.half_unit), math.log(est.value + est.half_unit)
+        quantile = _NORMAL.inv_cdf(1 - (1 - ci.level) / 2)
+        widest, narrowest = (h2 - l1) / 2, (h1 - l2) / 2
+        if narrowest <= 0 or widest / quantile > 0.5:
+            continue
+        c1, c2 = (l1 + h1) / 2, (l2 + h2) / 2
+        off = max(c1 - e2, e1 - c2, 0.0)  # the ratio's least distance from the interval's centre
+        level = f"{ci.level * 100:g}%"
+        if off > (0.05 + 0.5 * widest / quantile) * widest:
+            out.append(Finding("ratio-does-not-fit", f"{e.symbol_text} {est.text} is not at the centre of its {level} CI on the log scale, "
+                               f"where a Wald interval, exp(ln {e.symbol_text} ± z·SE), puts it, nor as near it as an exact or profile "
+                               f"interval would: check that the interval is this ratio's.",
+                               f"{e.symbol_text} = {est.text}, {level} CI [{low.text}, {high.text}]: the interval's centre on the log "
+                               f"scale {math.exp((c1 + c2) / 2):.{max(est.decimals, 2) + 1}f}"))
+            continue
+        p = rep.p
+        if not with_p or len(ratios) > 1 or p is None or p.adjusted or p.op == "ns" or rep.symbol not in (None, "z", "chi2") or \
+                (rep.symbol == "chi2" and any(d.value != 1 for d in rep.df)):
+            continue
+        reported = reported_p_range(rep, alpha)
+        if reported is None:
+            continue
+        e_low = 0.0 if e1 <= 0 <= e2 else min(abs(e1), abs(e2))
+        z_low, z_high = e_low / (widest / quantile), max(abs(e1), abs(e2)) / (narrowest / quantile)
+        said_low = _NORMAL.inv_cdf(1 - reported[1] / 2) if reported[1] < 1 else 0.0
+        said_high = _NORMAL.inv_cdf(1 - reported[0] / 2) if reported[0] > 0 else math.inf
+        if said_low > 1.75 * z_high or (z_low >= 3 and said_high < 0.5 * z_low):
+            shown = f"p {p.op} {p.number.text}"  # type: ignore[union-attr]
+            given = (2 * _NORMAL.cdf(-z_high), 2 * _NORMAL.cdf(-z_low))
+            out.append(Finding("ratio-does-not-fit", f"The p does not follow from {e.symbol_text}'s {level} CI (Altman & Bland, 2011: "
+                               f"z = ln {e.symbol_text} / SE, the SE from the interval's width), nor from any usual test near it: "
+                               f"check that the p is this ratio's.",
+                               f"{e.symbol_text} = {est.text}, {level} CI [{low.text}, {high.text}] gives p from {given[0]:.2g} to "
+                               f"{given[1]:.2g}; reported {shown}"))
     return out
 
 

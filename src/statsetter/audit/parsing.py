@@ -32,6 +32,9 @@ ONE_STAR = str.maketrans("⁎∗", "**")  # those asterisks as the one a note's 
 
 T = TypeVar("T")
 _MINUS = "-−–‐"  # hyphen-minus, minus, en dash, hyphen: all read as minus
+# what stands between an interval's limits: "to", a dash, a minus sign as typeset pages print the dash ("1.043−3.013") or a
+# tilde, as East Asian journals type a range ("1.277~1.384", the full-width "～" too)
+_DASH = r"to|–|—|-|−|~|～"
 
 
 @dataclass(frozen=True, slots=True)
@@ -343,28 +346,28 @@ class _Patterns:
         self.ci = re.compile(
             rf"(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*+%\s*+(?:CI|C\.I\.|confidence interval(?:s?\s*+[\[(]CIs?[\])])?)s?"
             rf"(?:\s++(?:for|of)\s++(?:the\s++)?(?:(?:mean\s++)?difference|[dgr]|OR|B|β)(?![\w]))?\s*+[:=,¼]?\s*+"  # ("95% CI for the difference", "95% CI for d")
-            rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:to|–|—|-)\s*+(?P<b2>{num}))"
+            rf"(?:[\[(]\s*+(?P<a>{num})\s*+(?:{sep}|{_DASH})\s*+(?P<b>{num})\s*+[\])]|(?P<a2>{num})\s*+(?:{_DASH})\s*+(?P<b2>{num}))"
         )
         # an interval typed without its level right after an effect size's or a correlation's number ("d = 0.62 [0.21,
         # 1.03]", "OR = 2.30 (1.40–3.80)", "Cohen’s d = 1.48 [0.55; 2.41]" under a head that gives the level): its limits
-        self.bare_ci = re.compile(rf"\s?(?:(?P<sq>\[)|\()\s*+(?P<a>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<b>{num})\s*+(?(sq)\]|\))")
+        self.bare_ci = re.compile(rf"\s?(?:(?P<sq>\[)|\()\s*+(?P<a>{num})\s*+(?:{sep}|{_DASH})\s*+(?P<b>{num})\s*+(?(sq)\]|\))")
         # an estimate with its labelled interval right after it, as medical and public-health texts give a prevalence, a mean
         # or an accuracy: "12.4% (95% CI, 10.1%-14.9%)", "3.2 (95% CI 2.9 to 3.5)", "0.86 (95% confidence interval [CI], 0.80-0.91)"
         self.estimate_ci = re.compile(
             rf"(?P<est>{num})(?:\s?%)?\s*[(\[]\s*(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|[Cc]onfidence\s+[Ii]nterval(?:\s*\[CI\])?)"
-            rf"\s*[:=,]?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?\s*[)\]]")
+            rf"\s*[:=,]?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|{_DASH})\s*(?P<b>{num})(?:\s?%)?\s*[)\]]")
         # or its labelled interval after a comma, as abstracts give an AUC or a prevalence: "[0.844, 95%confidence interval(CI):
         # 0.779-0.896]", "(0.690, 95%CI: 0.613-0.760, P < 0.05)", "(34.7%), 95% CI (30.6–38.8)"
         self.estimate_comma_ci = re.compile(
             rf"(?P<est>{num})(?:\s?%)?\)?\s*,\s*(?P<lev>\d{{2}}(?:[.,]\d+)?)\s*%\s*(?:CI|C\.I\.|[Cc]onfidence\s*[Ii]nterval(?:\s*[(\[]CI[)\]])?)"
-            rf"\s*[:=,]?\s*(?P<open>[(\[])?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|to|–|—|-)\s*(?P<b>{num})(?:\s?%)?(?(open)\s*[)\]])(?![\d.,]?\d)")
-        self.ratio_ci = re.compile(rf"\s*,\s*(?P<a>{num})\s*(?:–|—|-|to)\s*(?P<b>{num})(?![\d.,]?\d|\s?%)")  # (no brackets: a ratio's only)
+            rf"\s*[:=,]?\s*(?P<open>[(\[])?\s*(?P<a>{num})(?:\s?%)?\s*(?:{sep}|{_DASH})\s*(?P<b>{num})(?:\s?%)?(?(open)\s*[)\]])(?![\d.,]?\d)")
+        self.ratio_ci = re.compile(rf"\s*,\s*(?P<a>{num})\s*(?:{_DASH})\s*(?P<b>{num})(?![\d.,]?\d|\s?%)")  # (no brackets: a ratio's only)
         self.effect = re.compile(r"(?P<name>" + _by_first(p for p, _ in _EFFECT_NAMES) + rf")\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         self.rare = re.compile(rf"(?P<name>{_RARE_NAME})\s*+(?P<op>[=¼])\s*+(?P<num>{value})")
         # (or labelled with its interval's level, the interval after the number: "OR (95% CI) is 0.84 (0.69, 1.03)", "aOR (95%
         # CI): 1.52 (1.10–2.10)", as a table's head and cell are run into a sentence)
         self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
-                                rf"\s*+(?P<num>{value})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|to|–|—|-)\s*+(?P<rb>{num})\s*+[)\]])")
+                                rf"\s*+(?P<num>{value})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|{_DASH})\s*+(?P<rb>{num})\s*+[)\]])")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
         self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"

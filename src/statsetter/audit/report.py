@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import _LEVEL_NAMED, CODES, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, rank_sum_p, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, style_findings, to_record, unlevelled, verdict_word
+from .checks import _LEVEL_NAMED, CODES, RATIOS, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, rank_sum_p, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, ratio_fits, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
 from .counts import CountTest, count_tests, counts_fit
 from .means import GroupMeans, category_means, group_means, means_fit
@@ -445,6 +445,9 @@ def _above_unadjusted(rep: Reported, alpha: float) -> bool:
 
 
 _BETA = re.compile(r"β|\bbeta\b")  # a standardized coefficient named beside a b
+# an interval of another shape than a Wald interval's, said in its paragraph or table: a bootstrap's, a Bayesian posterior's,
+# an exact logistic model's median-unbiased estimate's (a ratio is not held to its centre or p there)
+_OTHER_INTERVAL = re.compile(r"(?i)bootstrap|credib|bayes|posterior|median[- ]unbiased")
 _ONE_SIDED_SAID = re.compile(r"(?i)(?:one|(?<![\d.])1)[- ]?(?:tailed|sided)|directional")
 
 
@@ -559,10 +562,15 @@ def _audit_units(
             findings += interval_fits_se(rep.ci, se, rep.estimate if rep.symbol == "t" else None)  # (a t's interval: B ± t·SE)
         if local is None and rep.symbol == "t" and rep.effects:  # a table row's t with its d (d_z where the table says one sample)
             findings += effect_from_t(rep)
+        disagree = []
         if (rep.ci is not None or rep.effects) and rep.p is not None:
             disagree = ci_p_agreement(rep, alpha)
             if disagree and _one_sided_said(unit.text, rep) is None:  # a one-tailed p: no disagreement
                 findings += disagree
+        if any(e.ci is not None and e.name in RATIOS for e in rep.effects) and \
+                not any(f.code in ("ci-excludes-estimate", "ci-reversed", "impossible-value") for f in findings) \
+                and _OTHER_INTERVAL.search(item.context or unit.text) is None:  # (a bootstrap's or a posterior's interval: its own shape)
+            findings += ratio_fits(rep, alpha, with_p=not disagree and _one_sided_said(unit.text, rep) is None)
         if rep.symbol == "F" and local is not None and step[0] is unit and _STEP_BETWEEN.fullmatch(unit.text, step[1], rep.start):
             findings += effect_from_f_or_chi2(replace(rep, effects=rep.effects + step[2]))  # "ΔR² = .05, F(1, 96) = 5.32"
         elif rep.symbol in ("F", "chi2", "Q") and rep.effects:

@@ -66,7 +66,8 @@ _ROLES = (
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
     (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|(?:estimated\s+)?standard\s+errors?(?:\s+of\s+(?:b|beta|β))?"), "SE"),
-    (re.compile(r"(?i)exp\s?\(\s?B\s?\)|OR|(?:estimated\s+)?odds\s+ratio"), "expB"),
+    # (crude and adjusted too: "COR", "AOR", "cOR", "aOR", "Adjusted OR", "Crude odds ratio")
+    (re.compile(r"(?i)exp\s?\(\s?B\s?\)|(?:[ac]|crude\s+|adj(?:usted|\.)?\s*)?(?:OR|(?:estimated\s+)?odds\s+ratio)"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
     # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
@@ -120,7 +121,7 @@ _RATIO_HEAD = re.compile(rf"(?i)(?:[\w .,;:-]*\s)?(?P<adj>a|adjusted\s+)?(?P<nam
 _RATIO_SPANNER = re.compile(rf"(?i)(?<![\w])(?P<name>{_RATIO_WORDS})s?\s*{_CI95}")
 _RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR",
                 "prevalence ratio": "PR"}
-_RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—-]|to|[,;])\s*"
+_RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—−~～-]|to|[,;])\s*"
                          rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
 
 
@@ -132,6 +133,7 @@ _RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|
 # an estimate's head with its interval ("Crude Estimate (95% CI)", "Adjusted estimate (95% CI)"): a ratio's where the table says of which
 _ADJUSTED_SAID = re.compile(r"(?i)\badjusted\b|\bmultivariable\b")
 _RATIO_ESTIMATE_HEAD = re.compile(rf"(?i)\s*((?:un)?adjusted|crude|multivariable|univariable)?\s*estimates?\s*{_CI95}\s*")
+_ADJUSTED_ODDS = re.compile(r"(?i)a(?=or\b)|adj(?:usted|\.)?\s*(?:or\b|odds\s+ratio)")  # an odds ratio column's head that says adjusted: "AOR", "Adjusted OR"
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
@@ -557,7 +559,7 @@ _LEVEL_SAID = re.compile(r"(?<![\d.])(\d{2}(?:\.\d)?)\s?%")
 _SIGNED = {".": r"[-−–]?\s?(?:\d+(?:\.\d+)?|\.\d+)", ",": r"[-−–]?\s?(?:\d+(?:,\d+)?|,\d+)"}
 # an interval's two limits in a cell, "−7.48, −4.53", "[0.15, 0.31]", "(−1.38 to −.58)", "0.15–0.31", "− 0.522–4.054",
 # "(-0.015_0.027)" (as published tables print them; practice); with a decimal comma the limits are never parted by a comma
-_LIMITS = {mark: rf"(?P<lo>{n})%?\s*(?:{'' if mark == ',' else ',|'};|to|[–—_-])\s*(?P<hi>{n})%?" for mark, n in _SIGNED.items()}
+_LIMITS = {mark: rf"(?P<lo>{n})%?\s*(?:{'' if mark == ',' else ',|'};|to|[–—−~～_-])\s*(?P<hi>{n})%?" for mark, n in _SIGNED.items()}
 _INTERVAL_CELL = {mark: re.compile(rf"\s*[(\[]?\s*{limits}\s*[)\]]?\s*[{_SIGNIFICANCE}a-d]*\s*") for mark, limits in _LIMITS.items()}
 _ESTIMATE_INTERVAL_CELL = {mark: re.compile(rf"\s*(?P<est>{_SIGNED[mark]})%?\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*{limits}\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
                            for mark, limits in _LIMITS.items()}
@@ -789,7 +791,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
                 marked = _marked_bound(row[interval[2]][0].text + (" " + row[limits][0].text if limits in row else "")
                                        + (" " + row[k][0].text if k != interval[2] else "")
                                        + (" " + row[p_col][0].text if p_col in row else ""), stars, ratio.end)  # (a p column of marks: "*")
-            rep = _ratio_statistic("OR", name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
+            rep = _ratio_statistic("aOR" if _ADJUSTED_ODDS.match(name) else "OR", name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
             unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
             how += f", its {marked[1]}" if marked else ""
         else:

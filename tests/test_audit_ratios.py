@@ -1,0 +1,185 @@
+"""A ratio (OR, HR, RR) against its own interval: the ratio at the interval's centre on the log scale, and its p the one the
+interval gives (Altman & Bland, 2011, BMJ 343:d2090, "How to obtain the P value from a confidence interval"), on published
+tables and sentences (each cited) and on registry data; and the typings of an interval's limits this needs ("1.277~1.384",
+"1.043−3.013")."""
+
+from __future__ import annotations
+
+import math
+
+import numpy as np
+from scipy import stats
+from scipy.stats.contingency import odds_ratio
+
+from statsetter.audit.report import audit_file
+
+
+def _table(caption: str, heads: list[str], rows: list[list[str]], note: str = "") -> str:
+    lines = [caption, "", "| " + " | ".join(heads) + " |", "|" + "---|" * len(heads)]
+    return "\n".join(lines + ["| " + " | ".join(r) + " |" for r in rows]) + "\n" + (f"\n{note}\n" if note else "")
+
+
+def _audit(tmp_path, text: str, name: str = "t.md"):  # type: ignore[no-untyped-def]
+    path = tmp_path / name
+    path.write_text(text, encoding="utf-8")
+    return audit_file(path)
+
+
+# PMC7940880 (a Korean national cohort of SARS-CoV-2 tests), Table 3, "Association between potential risk factors and
+# SARS-CoV-2 infection": multivariate logistic odds ratios with their 95% CIs and P values, as published
+_PMC7940880 = [["Female", "1.30 (1.24–1.37)", "<0.0001"], ["Age >65 years", "1.01 (0.93–1.09)", "0.8676"],
+               ["Daegu and Gyeonsangbuk-do province", "6.87 (6.55–7.21)", "<0.0001"], ["Medical Aid beneficiaries", "1.99 (1.82–2.18)", "<0.0001"],
+               ["1", "0.79 (0.74–0.84)", "<0.0001"], ["2", "0.70 (0.65–0.76)", "<0.0001"], ["≥3", "0.61 (0.56–0.67)", "<0.0001"],
+               ["Essential hypertension", "0.98 (0.92–1.05)", "0.6005"], ["DM", "1.15 (1.01–1.24)", "0.0002"],
+               ["Asthma", "0.86 (0.81–0.92)", "<0.0001"], ["COPD", "0.56 (0.49–0.65)", "<0.0001"], ["IHD", "0.77 (0.70–0.85)", "<0.0001"],
+               ["CHF", "0.72 (0.63–0.81)", "<0.0001"], ["Cancer", "0.60 (0.53–0.67)", "<0.0001"], ["Liver cirrhosis", "0.53 (0.43–0.65)", "<0.0001"],
+               ["ESRD with dialysis", "0.18 (0.11–0.29)", "<0.0001"], ["IBD", "0.51 (0.33–0.80)", "0.0028"]]
+
+# J Geriatr Cardiol 2021;18(1):75–82 (PMC7868910), Table 3, "Crude odds ratios (CORs) and adjusted odds ratios (AORs) of
+# rick factors associated with hypertension": rows as published, the limits set off by a minus sign (U+2212) as the page
+# prints them, the marks' note as published (its "**" and "*" definitions without a "P" are not read)
+_PMC7868910 = [["55−59", "1.773", "1.043−3.013", "**", "1.535", "0.803−2.936", ""], ["60−64", "1.902", "1.112−3.253", "**", "1.223", "0.598−2.501", ""],
+               ["65−69", "2.821", "1.541−3.253", "***", "2.298", "1.051−5.020", "**"], ["70−74", "1.577", "0.846−2.937", "", "0.659", "0.270−1.608", ""],
+               ["75−79", "1.864", "0.870−3.992", "", "1.219", "0.472−3.149", ""], ["80+", "3.259", "1.584−6.703", "***", "1.712", "0.660−4.440", ""],
+               ["Poor Health", "4.319", "2.326−8.020", "**", "4.223", "1.672−10.66", "**"], ["Overweight", "10.513", "5.419−20.39", "***", "17.269", "7.730−38.58", "***"],
+               ["No", "0.483", "0.341−0.684", "***", "0.637", "0.409−0.990", "*"]]
+
+
+def test_a_ratio_its_interval_is_not_made_around_is_found_in_published_tables(tmp_path):
+    """A ratio whose interval is not centred on it on the log scale (a Wald interval is exp(ln OR ± 1.96·SE)) had been
+    held only to lie inside it. PMC7940880's DM row, 1.15 (1.01–1.24) beside P = 0.0002 (the interval centres on 1.12 —
+    1.114 to 1.124 with its printed digits — and gives p ≈ .007), and PMC7868910's 65–69 row, 2.821 (1.541−3.253) (the
+    upper limit is the row above's; the interval centres on 2.24), are found; the tables' other 16 and 17 ratios are not."""
+    entries = _audit(tmp_path, _table("Table 3. Association between potential risk factors and SARS-CoV-2 infection.",
+                                      ["Variable", "OR (95% CI)", "P value"], _PMC7940880))
+    assert len(entries) == 17
+    assert [(e.found, e.codes) for e in entries if e.codes] == [("OR = 1.15, 95% CI [1.01, 1.24], p = 0.0002", ["ratio-does-not-fit"])]
+    assert "not at the centre" in entries[8].message and "centre on the log scale 1.119" in entries[8].message
+    entries = _audit(tmp_path, _table("Table 3. Crude odds ratios (CORs) and adjusted odds ratios (AORs) of rick factors associated with hypertension.",
+                                      ["Variable", "COR", "95% CI", "P-value", "AOR", "95% CI", "P-value"], _PMC7868910,
+                                      "***P < 0.01, ** < 0.05, * < 0.1; #Reference Category."))
+    assert len(entries) == 18 and {e.found.split(" =")[0] for e in entries} == {"COR", "AOR"}  # (the heads had gone unread)
+    assert [(e.found, e.codes) for e in entries if e.codes] == [("COR = 2.821, 95% CI [1.541, 3.253], p < 0.01", ["ratio-does-not-fit"])]
+    restyled = {e.found.split(",")[0]: e.suggestion.split(",")[0] for e in audit_file(tmp_path / "t.md", suggest_all=True)}
+    assert restyled["COR = 1.773"] == "OR = 1.77" and restyled["AOR = 1.535"] == "aOR = 1.54"  # (the adjusted ratio keeps its name)
+
+
+# Sci Rep 2022 (PMC8885688), Table 2, "Univariate and multivariate logistic regression of factors associated with preterm
+# birth" (a national birth cohort: narrow intervals), rows as published
+_PMC8885688 = [["25 < Age ≤ 30", "0.90", "0.89–0.91", "0.87", "0.86–0.88"], ["30 < Age ≤ 35", "0.96", "0.95–0.97", "0.90", "0.88–0.91"],
+               ["Age > 35", "1.11", "1.09–1.13", "1.01", "0.99–1.02"], ["< NT$20,000", "0.96", "0.95–0.97", "0.96", "0.95–0.98"],
+               ["NT$20,000–$40,000", "0.98", "0.97–0.99", "1.00", "0.98–1.01"], ["> NT$40,000", "1.13", "1.11–1.14", "1.13", "1.11–1.15"],
+               ["Multifetal pregnancy", "9.46", "9.15–9.77", "9.03", "8.73–9.33"], ["Placental abnormality", "1.77", "1.75–1.79", "1.72", "1.70–1.74"],
+               ["Vaginal infection", "1.06", "1.05–1.08", "1.00", "0.98–1.01"], ["Autoimmune disease", "1.35", "1.32–1.39", "1.29", "1.25–1.32"],
+               ["Hypertension complicating pregnancy", "3.36", "3.29–3.43", "3.16", "3.09–3.23"], ["Mild PD", "1.08", "1.07–1.09", "1.05", "1.04–1.06"]]
+
+# Ann Med Surg 2020;60:680–685 (PMC7723764), Table 4, Cox models of overall survival (n = 165,465), crude and adjusted
+# hazard ratios as published
+_PMC7723764 = [["Male", "1.23 (1.22,1.25)", "<0.001", "1.17 (1.14,1.19)", "<0.001"], ["Black", "1.12 (1.10,1.15)", "<0.001", "0.98 (0.95,1.02)", "0.314"],
+               ["NA", "1.39 (1.04,1.85)", "0.024", "1.17 (0.92,1.50)", "0.196"], ["Asian", "0.88 (0.80,0.97)", "0.012", "0.87 (0.79,0.97)", "0.010"],
+               ["PI", "0.83 (0.59,1.16)", "0.268", "0.75 (0.50,1.12)", "0.162"], ["AIP", "0.86 (0.70,1.06)", "0.168", "0.97 (0.80,1.17)", "0.727"],
+               ["Other", "0.95 (0.84,1.07)", "0.386", "0.94 (0.83,1.07)", "0.342"], ["Yes", "0.99 (0.96,1.01)", "0.205", "0.94 (0.89,0.99)", "0.015"],
+               ["Middle-Low", "0.90 (0.89,0.92)", "<0.001", "0.96 (0.93,0.98)", "0.001"], ["Middle-High", "0.84 (0.82,0.85)", "<0.001", "0.92 (0.89,0.94)", "<0.001"],
+               ["Highest", "0.77 (0.76,0.79)", "<0.001", "0.88 (0.84,0.91)", "<0.001"]]
+
+
+def test_published_ratio_tables_that_fit_are_left_alone(tmp_path):
+    """Two published tables whose every ratio fits its interval and p (narrow intervals printed to two decimals, where
+    rounding moves the centre most): no finding. A p moved to another row (ours) is found by the p the interval gives,
+    where the interval and p still agree about the null."""
+    entries = _audit(tmp_path, _table("Table 2. Univariate and multivariate logistic regression of factors associated with preterm birth.",
+                                      ["Variable", "OR", "95% CI", "OR", "95% CI"], _PMC8885688))
+    assert len(entries) == 24 and not any(e.codes for e in entries)
+    heads = ["Prognostic factors", "HR (95%CI)", "P value", "aHR (95%CI)", "P value"]
+    caption = "Table 4. Cox Regression Models for Overall Survival Clustered Hospital, n = 165,465."
+    entries = _audit(tmp_path, _table(caption, heads, _PMC7723764))
+    assert len(entries) == 22 and not any(e.codes for e in entries)
+    rows = [r[:] for r in _PMC7723764]
+    rows[0][2] = "0.024"  # (ours: the NA row's p beside the men's HR, 1.23 (1.22, 1.25), whose interval gives z ≈ 30)
+    (bad,) = [e for e in _audit(tmp_path, _table(caption, heads, rows)) if e.codes]
+    assert bad.codes == ["ratio-does-not-fit"] and bad.found == "HR = 1.23, 95% CI [1.22, 1.25], p = 0.024" and "Altman & Bland" in bad.message
+
+
+def _profile_interval(a: int, b: int, c: int, d: int) -> tuple[float, float]:
+    """The profile-likelihood 95% interval of a 2 × 2 table's log odds ratio (as R's confint on a glm computes it)."""
+    from scipy import optimize
+
+    def loglik(b0: float, b1: float) -> float:
+        p1, p0 = 1 / (1 + math.exp(-(b0 + b1))), 1 / (1 + math.exp(-b0))
+        return a * math.log(p1) + b * math.log(1 - p1) + c * math.log(p0) + d * math.log(1 - p0)
+
+    b1hat, b0hat = math.log(a * d / (b * c)), math.log(c / d)
+    top, crit, se = loglik(b0hat, b1hat), stats.chi2.ppf(0.95, 1) / 2, math.sqrt(1 / a + 1 / b + 1 / c + 1 / d)
+
+    def drop(b1: float) -> float:
+        return top + optimize.minimize_scalar(lambda b0: -loglik(b0, b1), bracket=(b0hat - 1, b0hat + 1)).fun - crit
+
+    return optimize.brentq(drop, b1hat - 8 * se, b1hat), optimize.brentq(drop, b1hat, b1hat + 8 * se)
+
+
+def test_intervals_and_tests_of_other_methods_are_not_found(tmp_path):
+    """Random 2 × 2 tables (20 to 3,000 subjects, odds ratios around 1 to 20) with the sample odds ratio, a Wald, profile-
+    likelihood or exact conditional interval (scipy's) and a Wald, likelihood-ratio, Pearson, Yates or Fisher p (scipy's),
+    printed to two or three decimals: none is found, in sentences or in a table. With the intervals shuffled between the
+    rows (ours), some are."""
+    rng = np.random.default_rng(31)
+    texts = []
+    while len(texts) < 160:
+        n = int(rng.choice([20, 40, 100, 400, 3000]))
+        p0, ratio = rng.uniform(0.05, 0.6), math.exp(rng.normal(0, 1))
+        n1 = int(rng.integers(n // 4, 3 * n // 4))
+        a, c = int(rng.binomial(n1, ratio * p0 / (1 - p0 + ratio * p0))), int(rng.binomial(n - n1, p0))
+        b, d = n1 - a, n - n1 - c
+        if min(a, b, c, d) == 0:
+            continue
+        est, se = math.log(a * d / (b * c)), math.sqrt(1 / a + 1 / b + 1 / c + 1 / d)
+        method, test = len(texts) % 3, len(texts) // 3 % 5
+        if method == 0:
+            low, high = est - 1.96 * se, est + 1.96 * se
+        elif method == 1:
+            low, high = _profile_interval(a, b, c, d)
+        else:
+            ci = odds_ratio([[a, b], [c, d]], kind="conditional").confidence_interval()
+            low, high = math.log(ci.low), math.log(ci.high)
+        p = [2 * stats.norm.sf(abs(est / se)), stats.fisher_exact([[a, b], [c, d]])[1],
+             stats.chi2_contingency([[a, b], [c, d]], correction=False)[1], stats.chi2_contingency([[a, b], [c, d]])[1],
+             stats.chi2_contingency([[a, b], [c, d]], correction=False, lambda_="log-likelihood")[1]][test]
+        places = 2 + len(texts) % 2
+        if round(math.exp(low), places) <= 0:
+            continue
+        shown_p = "< 0.001" if p < 0.001 else f"= {p:.3f}"
+        texts.append((f"{math.exp(est):.{places}f}", f"{math.exp(low):.{places}f}", f"{math.exp(high):.{places}f}", shown_p))
+    prose = "\n\n".join(f"The odds were higher in group {i} (OR = {r}, 95% CI [{lo}, {hi}], p {p})." for i, (r, lo, hi, p) in enumerate(texts))
+    entries = _audit(tmp_path, prose)
+    assert len(entries) == len(texts) and not [e.found for e in entries if "ratio-does-not-fit" in e.codes]
+    rows = [[f"v{i}", f"{r} ({lo}–{hi})", p.removeprefix("= ")] for i, (r, lo, hi, p) in enumerate(texts)]
+    entries = _audit(tmp_path, _table("Table 2. Odds ratios of the outcome.", ["Variable", "OR (95% CI)", "P value"], rows))
+    assert len(entries) == len(texts) and not [e.found for e in entries if "ratio-does-not-fit" in e.codes]
+    order = rng.permutation(len(texts))
+    shuffled = "\n\n".join(f"Group {i} (OR = {r}, 95% CI [{texts[order[i]][1]}, {texts[order[i]][2]}], p {p})." for i, (r, _, _, p) in enumerate(texts))
+    assert sum("ratio-does-not-fit" in e.codes for e in _audit(tmp_path, shuffled)) >= 5  # (9 of 160; the others' intervals still fit or are found otherwise)
+
+
+def test_interval_limits_set_off_by_a_tilde_or_a_minus_sign(tmp_path):
+    """An interval's limits set off by a tilde, as East Asian journals type a range — "OR = 1.329, 95%CI = 1.277~1.384"
+    in the abstract of "Prevalence and Influencing Factors of Central Obesity among Adults in China: China Nutrition and
+    Health Surveillance (2015–2017)" (https://www.biocloudy.com/literatureDetail/Nzk1NjAwNQ==) — had not been read: the
+    ratios were read without their intervals, and a revision would have restyled them without. Read now, all eight
+    fitting; and a table's limits set off by the minus sign a typeset page prints for the dash ("1.043−3.013", PMC7868910
+    above) or by the full-width tilde."""
+    text = ("A logistic analysis suggested that the following factors were associated with central obesity: female sex [odds "
+            "ratio (OR) = 1.329, 95%CI = 1.277~1.384]; increasing age [OR (95%CI): 1.146 (1.061~1.238), 1.254 (1.167~1.348)]; "
+            "being married [OR = 1.184, 95%CI = 1.077~1.302]; being divorced or widowed [OR = 1.132, 95%CI = 1.006~1.273]; an "
+            "urban setting [OR = 1.096, 95%CI = 1.061~1.132]; drinking [OR = 1.069, 95%CI = 1.031~1.109]; and screen time > 5 "
+            "h [OR = 1.088, 95%CI = 1.036~1.141] were risk factors for central obesity; while sufficient physical activity "
+            "[OR = 0.819, 95%CI = 0.782~0.858] was a protective factor.")
+    entries = _audit(tmp_path, text)
+    assert [e.found.split("CI")[-1] for e in entries] == [" = 1.277~1.384", "): 1.146 (1.061~1.238)", " = 1.077~1.302", " = 1.006~1.273",
+                                                           " = 1.061~1.132", " = 1.031~1.109", " = 1.036~1.141", " = 0.782~0.858"]
+    assert not any(set(e.codes) - {"decimals"} for e in entries)
+    entries = _audit(tmp_path, text.replace("1.184, 95%CI = 1.077~1.302", "1.184, 95%CI = 1.077~1.502"))  # (ours)
+    assert [e.codes for e in entries if set(e.codes) - {"decimals"}] == [["decimals", "ratio-does-not-fit"]]
+    rows = [["55−59", "1.773", "1.043～3.013", "0.034"], ["60−64", "1.902", "1.112−3.253", "0.019"]]
+    entries = _audit(tmp_path, _table("Table 3. Odds ratios of hypertension.", ["Variable", "OR", "95% CI", "P-value"], rows))
+    assert [e.found for e in entries] == ["OR = 1.773, 95% CI [1.043, 3.013], p = 0.034", "OR = 1.902, 95% CI [1.112, 3.253], p = 0.019"]
+    assert not any(e.codes for e in entries)
