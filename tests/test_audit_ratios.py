@@ -183,3 +183,40 @@ def test_interval_limits_set_off_by_a_tilde_or_a_minus_sign(tmp_path):
     entries = _audit(tmp_path, _table("Table 3. Odds ratios of hypertension.", ["Variable", "OR", "95% CI", "P-value"], rows))
     assert [e.found for e in entries] == ["OR = 1.773, 95% CI [1.043, 3.013], p = 0.034", "OR = 1.902, 95% CI [1.112, 3.253], p = 0.019"]
     assert not any(e.codes for e in entries)
+
+
+# PLoS One 2016 (PMC5125657), Table 2, "Factors predicting irritable bowel syndrome (IBS) incidence in Taiwan during
+# 2003–2013": Poisson GEE incidence rate ratios, crude and adjusted, each with its interval and P value in columns of their
+# own, the P heads with footnote letters ("P value a", "P valueb,c"), rows as published
+_PMC5125657 = [["Year", "0.98", "0.98–0.99", "<.001", "0.97", "0.97–0.97", "<.001"], ["Age", "1.02", "1.02–1.02", "<.001", "1.03", "1.02–1.03", "<.001"],
+               ["Female sex", "1.12", "1.10–1.14", "<.001", "1.14", "1.12–1.16", "<.001"], [">=40000", "0.95", "0.92–0.98", "<.001", "1.15", "1.12–1.19", "<.001"],
+               ["20000–39999", "0.97", "0.95–0.99", "0.007", "1.09", "1.06–1.11", "<.001"], ["Urban", "0.89", "0.86–0.92", "<.001", "1.05", "1.01–1.09", "0.017"],
+               ["Suburban", "0.87", "0.83–0.90", "<.001", "1.00", "0.96–1.04", "0.808"]]
+
+# PMC9156757, Table 2, as published: "RR (CI95%)" (the level after the interval's name) and
+# "ARR (CI95%)" (its note does not say what ARR stands for), rows as published
+_PMC9156757 = [["HIV-positive", "7.20 (6.20–8.36)", "< 0.0001", "6.48 (5.37–7.83)", "< 0.0001"], ["Male", "1.59 (1.39–1.82)", "< 0.0001", "1.41 (1.17–1.71)", "< 0.0001"],
+               ["4–7", "0.68 (0.43–1.06)", "0.092", "0.75 (0.48–1.16)", "0.192"], ["≥ 8", "0.34 (0.22–0.54)", "< 0.0001", "0.41 (0.26–0.64)", "< 0.0001"],
+               ["Black", "1.17(0.85–1.61)", "0.336", "", ""], ["Amerindian", "4.47 (2.49–8.04)", "< 0.0001", "2.77 (1.46–5.28)", "0.002"],
+               ["Rural area", "0.23 (0.13–0.38)", "< 0.0001", "0.44 (0.24–0.80)", "0.007"], ["Others", "1.59 (1.18–2.16)", "0.002", "1.36 (0.91–2.03)", "0.135"]]
+
+
+def test_rate_hazard_and_risk_ratio_columns_are_read_as_odds_ratio_columns_are(tmp_path):
+    """A ratio other than an odds ratio in a column of its own beside its interval's ("Crude IRR | 95% CI | P value a"),
+    and a ratio's head with the level after the interval's name ("RR (CI95%)"), had left the tables unread (PMC5125657's 14
+    incidence rate ratios, PMC9156757's 8 risk ratios). Read now with their p columns and names, each fitting; an
+    "ARR" column, which names an absolute risk reduction as often as an adjusted risk ratio, is not taken for a ratio
+    (an absolute risk reduction's "4.0 (0.3 to 7.7)" had been read as an adjusted RR: ours, after a trial's usual layout)."""
+    entries = _audit(tmp_path, _table("Table 2. Factors predicting irritable bowel syndrome (IBS) incidence in Taiwan during 2003–2013 (N = 7 634 281).",
+                                      ["Variables", "Crude IRR", "95% CI", "P value a", "Adjusted IRR", "95% CI", "P valueb,c"], _PMC5125657,
+                                      "IRR = incidence rate ration; CI = confidence interval. a Tested by univariate Poisson regression with GEE model."))
+    assert len(entries) == 14 and not any(e.codes for e in entries)
+    assert entries[4].found == "Crude IRR = 1.12, 95% CI [1.10, 1.14], p < .001" and entries[13].found == "Adjusted IRR = 1.00, 95% CI [0.96, 1.04], p = 0.808"
+    restyled = [e.suggestion for e in audit_file(tmp_path / "t.md", suggest_all=True)]
+    assert restyled[4].startswith("IRR = 1.12, 95% CI [1.10, 1.14]")
+    entries = _audit(tmp_path, _table("Table 2. Factors associated with the outcome.", ["Variable", "RR (CI95%)", "P", "ARR (CI95%)", "P"], _PMC9156757))
+    assert [e.found for e in entries][:2] == ["RR = 7.20, 95% CI [6.20, 8.36], p < 0.0001", "RR = 1.59, 95% CI [1.39, 1.82], p < 0.0001"]
+    assert len(entries) == 8 and not any(e.codes for e in entries)
+    rows = [["Death", "12 (4.0)", "24 (8.0)", "4.0 (0.3 to 7.7)", "0.04"], ["Readmission", "30 (10.0)", "27 (9.0)", "−1.0 (−5.7 to 3.7)", "0.68"]]
+    entries = _audit(tmp_path, _table("Table 2. Outcomes at 12 months.", ["Outcome", "Intervention, n (%)", "Control, n (%)", "ARR (95% CI)", "P value"], rows))
+    assert [e.found for e in entries] == ["ARR = 4.0, 95% CI [0.3, 7.7]", "ARR = −1.0, 95% CI [−5.7, 3.7]"] and not any(e.codes for e in entries)

@@ -31,7 +31,8 @@ __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "
 _INTERVAL_HEAD = (r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|C\.I\.?|confidence\s+interval)|(?:CI|C\.I\.?|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)")
 # its limits named after it: "95% CI of B (lower–upper)", "95% CI (LL, UL)"
 _LIMITS_NAMED = r"(?:\s*\(\s*(?:lower|LL)\s*(?:[–—,/-]|to)\s*(?:upper|UL)\s*\))?"
-_FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)[a-d]|(?<=values)[a-d]|(?<=β)[a-d])$")
+# (footnote letters after a p head, glued or spaced, several by commas: "P valuea", "P value a", "P valueb,c")
+_FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)\s?[a-f](?:,\s?[a-f])*|(?<=values)\s?[a-f](?:,\s?[a-f])*|(?<=β)[a-d])$")
 _ROLES = (
     # a column of two tests' values, as medical tables print one test per row: "χ2/Z", "t/χ2 value" — χ² in a categorical
     # variable's rows (its counts), the other test elsewhere (a Mann–Whitney Z, a t)
@@ -66,8 +67,10 @@ _ROLES = (
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
     (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|(?:estimated\s+)?standard\s+errors?(?:\s+of\s+(?:b|beta|β))?"), "SE"),
-    # (crude and adjusted too: "COR", "AOR", "cOR", "aOR", "Adjusted OR", "Crude odds ratio")
-    (re.compile(r"(?i)exp\s?\(\s?B\s?\)|(?:[ac]|crude\s+|adj(?:usted|\.)?\s*)?(?:OR|(?:estimated\s+)?odds\s+ratio)"), "expB"),
+    # (crude and adjusted too: "COR", "AOR", "cOR", "aOR", "Adjusted OR", "Crude odds ratio"; and the other ratios of a
+    # model's exp(B), a Cox model's "HR", a Poisson model's "Crude IRR" and "Adjusted IRR", "RR", "PR": read only beside an interval)
+    (re.compile(r"(?i)exp\s?\(\s?B\s?\)|(?-i:(?!ARR\b))(?:[ac]|crude\s+|adj(?:usted|\.)?\s*)?(?:OR|HR|RR|IRR|PR|(?:estimated\s+)?odds\s+ratio|"
+                r"hazard\s+ratio|risk\s+ratio|relative\s+risk|(?:incidence\s+)?rate\s+ratio|prevalence\s+ratio)"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
     # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
@@ -113,7 +116,7 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # a ratio with its 95% CI in one cell under a head such as "OR (95% CI)", "Adjusted ORa (95%CI)c", "Model 1 AOR (95%CI)",
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 # (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
-_CI95 = r"\(\s*95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)\s*\)"  # "(95% CI)", "(95%CIs)", "(95% C.I)", "(95% confidence interval)"
+_CI95 = r"\(\s*(?:95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)|c\.?i\.?\s?95\s?%)\s*\)"  # "(95% CI)", "(95%CIs)", "(95% C.I)", "(95% confidence interval)", "(CI95%)"
 _RATIO_WORDS = r"or|hr|rr|irr|pr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk|incidence\s+rate\s+ratio|prevalence\s+ratio"
 _RATIO_HEAD = re.compile(rf"(?i)(?:[\w .,;:-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>{_RATIO_WORDS})[a-d{_SIGNIFICANCE}]?\s*{_CI95}[a-d{_SIGNIFICANCE}]?")
 # (also "95%CIs", "(95% confidence interval)"); a spanner that names the ratio over the columns of several models ("Hazard ratio
@@ -133,13 +136,25 @@ _RATIO_STUB = re.compile(r"\s*(?P<adj>[ac]|adjusted\s+|crude\s+)?(?P<name>OR|HR|
 # an estimate's head with its interval ("Crude Estimate (95% CI)", "Adjusted estimate (95% CI)"): a ratio's where the table says of which
 _ADJUSTED_SAID = re.compile(r"(?i)\badjusted\b|\bmultivariable\b")
 _RATIO_ESTIMATE_HEAD = re.compile(rf"(?i)\s*((?:un)?adjusted|crude|multivariable|univariable)?\s*estimates?\s*{_CI95}\s*")
-_ADJUSTED_ODDS = re.compile(r"(?i)a(?=or\b)|adj(?:usted|\.)?\s*(?:or\b|odds\s+ratio)")  # an odds ratio column's head that says adjusted: "AOR", "Adjusted OR"
+# the ratio an exp(B) column's head names, and whether adjusted: "AOR", "Adjusted IRR", "cHR", "Hazard ratio" (an odds ratio's otherwise)
+_COLUMN_RATIO = re.compile(r"(?i)\s*(?P<adj>[ac](?=(?:or|hr|rr|irr|pr)\b)|adj(?:usted|\.)?\s*|crude\s+)?(?P<name>or|hr|rr|irr|pr|odds\s+ratio|"
+                           r"hazard\s+ratio|risk\s+ratio|relative\s+risk|(?:incidence\s+)?rate\s+ratio|prevalence\s+ratio)\b")
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
 def _ratio_name(name: str, adjusted: bool) -> str:
     """A ratio's canonical name, "aOR" for an adjusted odds ratio (an IRR keeps its name)."""
     return f"a{name}" if adjusted and name != "IRR" else name
+
+
+def _column_ratio(head: str) -> str:
+    """The canonical name of the ratio an exp(B) column holds, as its head names it ("OR" for "Exp(B)" and "COR")."""
+    m = _COLUMN_RATIO.match(head)
+    if m is None:
+        return "OR"
+    name = " ".join(m.group("name").lower().split())
+    name = _RATIO_NAMES.get(name, "IRR" if name == "rate ratio" else name.upper())
+    return _ratio_name(name, (m.group("adj") or "").strip().lower()[:1] == "a")
 
 
 def _stub_ratio(m: "re.Match[str]") -> str:
@@ -149,7 +164,7 @@ def _stub_ratio(m: "re.Match[str]") -> str:
 def _ratio_role(head: str) -> str | None:
     """"ratio:OR" (aOR, HR, aHR, RR, aRR, IRR) for a column of ratios with their 95% CIs, None otherwise."""
     m = _RATIO_HEAD.fullmatch(head)
-    if m is None:
+    if m is None or m.group("adj") == "A" and m.group("name") == "RR":  # ("ARR": an absolute risk reduction as often as an adjusted RR)
         return None
     name = _RATIO_NAMES.get(" ".join(m.group("name").lower().split()), m.group("name").upper())
     adjusted = m.group("adj") is not None or _ADJUSTED_SAID.search(head) is not None
@@ -791,7 +806,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
                 marked = _marked_bound(row[interval[2]][0].text + (" " + row[limits][0].text if limits in row else "")
                                        + (" " + row[k][0].text if k != interval[2] else "")
                                        + (" " + row[p_col][0].text if p_col in row else ""), stars, ratio.end)  # (a p column of marks: "*")
-            rep = _ratio_statistic("aOR" if _ADJUSTED_ODDS.match(name) else "OR", name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
+            rep = _ratio_statistic(_column_ratio(name), name, ratio, interval[0], p or (marked[0] if marked else None), ratio.end)
             unit, how = row[interval[2]][0], f"the {name} column, {interval[4]}" + (", the B and SE columns" if se is not None else "")
             how += f", its {marked[1]}" if marked else ""
         else:
