@@ -13,6 +13,7 @@ from __future__ import annotations
 
 import math
 import re
+from decimal import ROUND_HALF_UP, Decimal
 from dataclasses import dataclass, replace
 from typing import Sequence
 
@@ -42,6 +43,8 @@ class CountTest:
 # tests of a table larger than 2 × 2 other than those computed here, named in a caption or note: a trend test, a rank test
 # of ordered categories, an exact test of the whole table (Freeman–Halton)
 _OTHER_TEST = re.compile(r"(?i)\btrend|cochran[-–\s]?armitage|mantel|kruskal|mann[-–\s]?whitney|wilcoxon|\brank|fisher|\bexact\b|freeman")
+# a row whose label says it gives a mean and SD, a median and IQR or a range: "45 (12)" is no count and its percent
+_NOT_COUNTS = re.compile(r"(?i)\bmean\b|\bSD\b|median|\bIQR\b|interquartile|\brange\b|±|\bM\s*\(")
 # survey weights: the percents are weighted and the test design-based (Rao–Scott), neither the counts' own
 _WEIGHTED = re.compile(r"(?i)\bweight(?:ed|s)\b|rao[-–\s]?scott|design[- ]based|complex\s+survey|survey[- ]adjusted")
 
@@ -55,34 +58,36 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     if _WEIGHTED.search(said) or any(_WEIGHTED.search(u.text) for r, _, u, _ in cells if r == top):  # (a head: "n (weighted %)"; a row's
         return []  # label — "Birth weights" — says nothing of the figures)
     rows = cell_grid(cells)
-    heads: dict[int, str] = {}
+    heads: dict[int, str] = {c: u.text for c, u in rows[top].items()} if top in rows else {}  # (the first row, until a header row: "| n = 5030 | n = 22,608 |")
     p_col = chi_col = None
     out: list[CountTest] = []
     block: list[dict[int, tuple[int, float, float]]] = []  # each row's {column: count} in the block being read
+    units: list[dict[int, Unit]] = []  # (and its cells)
     anchor: dict[int, Unit] | None = None  # the row holding the block's test
     labelled = False  # the block began at a row naming its variable without a test (the test then on its first row of counts)
 
     def close() -> None:
-        if block and anchor is not None:
-            test = _test(block, anchor, heads, p_col, chi_col, mark)
-            if test is not None:
-                out.append(test)
+        test = (_test(block, anchor, heads, p_col, chi_col, mark) if anchor is not None else _untested(block, units, heads, labelled)) if block else None
+        if test is not None:
+            out.append(test)
 
     for r in sorted(rows):
         row = rows[r]
         first = min(row)
-        counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := count_cell(u.text)) is not None}
+        counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := count_cell(u.text)) is not None} \
+            if _NOT_COUNTS.search(row[first].text) is None else {}
         tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
         if len(counts) >= 2:
             if tested and (anchor is not None or not labelled) or _outcome_pairs(counts, sorted(counts), every=True) is not None:  # a
                 close()  # variable's own test, or a row of groups' outcome pairs (each its own table): a new block
-                block, anchor, labelled = [], (row if tested else None), False
+                block, units, anchor, labelled = [], [], (row if tested else None), False
             elif tested:  # the test of the variable named above, on one of its rows of counts
                 anchor = row
             block.append(counts)
+            units.append(row)
             continue
         close()
-        block, anchor, labelled = [], None, False
+        block, units, anchor, labelled = [], [], None, False
         roles = {c: _role(u.text) for c, u in row.items()}
         if (any(roles.values()) or any(_CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text) for u in row.values())) and \
                 not any(_number(u.text, mark) is not None for u in row.values()):  # (a group's n in its head is no number: "n = 5030")
@@ -100,10 +105,20 @@ _SHARES = ("of its column's counts", "of its group's n", "of its row's counts")
 
 
 def _shares(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[int], sizes: list[int | None]) -> tuple[str, ...] | None:
+    """What the block's percents are shares of, then each cell's whose percent is not its count's share (nothing when all
+    are); None where they are not counts (_misfits)."""
+    found = _misfits(block, groups, sizes)
+    if found is None:
+        return None
+    return (found[0], *(said for _, _, said in found[1])) if found[1] else ()
+
+
+def _misfits(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[int],
+             sizes: list[int | None]) -> "tuple[str, list[tuple[int, int, str]]] | None":
     """What the block's percents are shares of — their column's sum, their group's n (from its head) or their row's sum:
-    whichever most of its cells fit, to the printed digits —, then each cell's whose percent is not its count's share
-    (nothing when all are); None where fewer than half the cells fit any and the percents do not make up 100 (then they
-    are not counts: a median with its IQR, "5 (5)")."""
+    whichever most of its cells fit, to the printed digits —, and each cell whose percent is not its count's share (its
+    row, its group's place, what it is and should be); None where fewer than half the cells fit any and the percents do
+    not make up 100 (then they are not counts: a median with its IQR, "5 (5)")."""
     cells = [(i, j, *row[c]) for i, row in enumerate(block) for j, c in enumerate(groups)]
     column_sums = [sum(row[c][0] for row in block) for c in groups]
     row_sums = [sum(row[c][0] for c in groups) for row in block]
@@ -113,9 +128,8 @@ def _shares(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[i
     best = max(range(len(fits)), key=lambda k: sum(fits[k]))
     if 2 * sum(fits[best]) < len(cells) and not _whole(block, groups):
         return None
-    wrong = [(n, pct, half, w) for ok, w, (i, j, n, pct, half) in zip(fits[best], wholes[best], cells) if not ok and w]
-    return (_SHARES[best], *(f"{n} / {w:,} is {100.0 * n / w:.{max(1, _places(half))}f}%, not {pct:.{_places(half)}f}%" for n, pct, half, w in wrong)) \
-        if wrong else ()
+    return _SHARES[best], [(i, j, f"{n} / {w:,} is {_share(n, w, half)}%, not {pct:.{_places(half)}f}%")
+                           for ok, w, (i, j, n, pct, half) in zip(fits[best], wholes[best], cells) if not ok and w]
 
 
 def _outcome_pairs(row: dict[int, tuple[int, float, float]], columns: list[int], every: bool = False) -> "tuple[list[tuple[int, int]], tuple[str, ...]] | None":
@@ -130,7 +144,7 @@ def _outcome_pairs(row: dict[int, tuple[int, float, float]], columns: list[int],
     whole = sum(abs(x[1] + y[1] - 100.0) <= x[2] + y[2] + 1e-9 for x, y in pairs)
     if whole < len(pairs) if every else 2 * whole < len(pairs):
         return None
-    wrong = [f"{n} / {x[0] + y[0]:,} is {100.0 * n / (x[0] + y[0]):.{max(1, _places(half))}f}%, not {pct:.{_places(half)}f}%"
+    wrong = [f"{n} / {x[0] + y[0]:,} is {_share(n, x[0] + y[0], half)}%, not {pct:.{_places(half)}f}%"
              for x, y in pairs for n, pct, half in (x, y) if x[0] + y[0] and abs(100.0 * n / (x[0] + y[0]) - pct) > half + 1e-9]
     return [(x[0], y[0]) for x, y in pairs], (("of its group's two counts", *wrong) if wrong else ())
 
@@ -150,14 +164,25 @@ def _places(half: float) -> int:
     return max(0, round(-math.log10(2 * half)))
 
 
+def _share(n: int, whole: int, half: float) -> str:
+    """n's share of its whole in percent, printed with the table's percents' digits (one at least) — and more where that
+    digit would round to another percent than the share does: 5 / 11 is "45.45", not "45.5", beside a printed 46."""
+    share, step = 100.0 * n / whole, Decimal(1).scaleb(-_places(half))
+    right = Decimal(repr(share)).quantize(step, ROUND_HALF_UP)
+    for digits in range(max(1, _places(half)), _places(half) + 5):
+        shown = Decimal(f"{share:.{digits}f}")
+        if shown.quantize(step, ROUND_HALF_UP) == right:
+            break
+    return str(shown)
+
+
 def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int, Unit], heads: dict[int, str], p_col: int | None,
           chi_col: int | None, mark: str) -> CountTest | None:
     """The block's test, when its counts make a table of at least two groups and two categories."""
-    groups = sorted(c for c in set.intersection(*(set(row) for row in block)) if not _TOTAL_HEAD.match(heads.get(c, "")))
-    if len(groups) < 2 or any(set(row) - set(groups) - {c for c in row if _TOTAL_HEAD.match(heads.get(c, ""))} for row in block):
+    found = _groups(block, heads)
+    if found is None:
         return None
-    head_sizes = [sizes_in(heads.get(c, "")) for c in groups]
-    sizes = [s[0] if len(s) == 1 else None for s in head_sizes]
+    groups, sizes = found
     percents = _shares(block, groups, sizes)
     paired = _outcome_pairs(block[0], groups) if len(block) == 1 and percents is None else None  # (only where the counts are no
     percents = paired[1] if paired is not None else percents  # single category of each group: their percents its n's shares)
@@ -196,6 +221,54 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
         unit = p_unit
     rep.text = ", ".join(([f"χ²({df}) = {number.text}"] if value is not None else []) + ([p_text(p).lstrip(', ')] if p is not None else []))
     return CountTest(unit, rep, counts, how, percents)  # type: ignore[arg-type]
+
+
+def _groups(block: Sequence[dict[int, tuple[int, float, float]]], heads: dict[int, str]) -> "tuple[list[int], list[int | None]] | None":
+    """The block's group columns (a total column set aside) and each group's n from its head, where every row gives a
+    count in each of at least two groups' columns."""
+    groups = sorted(c for c in set.intersection(*(set(row) for row in block)) if not _TOTAL_HEAD.match(heads.get(c, "")))
+    if len(groups) < 2 or any(set(row) - set(groups) - {c for c in row if _TOTAL_HEAD.match(heads.get(c, ""))} for row in block):
+        return None
+    head_sizes = [sizes_in(heads.get(c, "")) for c in groups]
+    return groups, [s[0] if len(s) == 1 else None for s in head_sizes]
+
+
+def _untested(block: Sequence[dict[int, tuple[int, float, float]]], units: Sequence[dict[int, Unit]], heads: dict[int, str],
+              labelled: bool) -> CountTest | None:
+    """A block of counts the table gives no test for (a descriptive "Table 1"): its percents held to their counts alone,
+    as a tested block's are; an entry (at the first percent that is not its count's share) only where one is not. Only
+    where the block is one variable's (after a row naming it) or the heads give every group's n: without a test's row
+    to start each variable, the rows of several may stand together, each variable's percents of its own valid n."""
+    found = _groups(block, heads)
+    if found is None or not (labelled or all(found[1])):
+        return None
+    misfits = _misfits(block, found[0], found[1])
+    if not misfits:
+        return None
+    wrong = [(i, j, said) for i, j, said in misfits[1] if not _run_share(block, i, found[0][j])]
+    if not wrong:
+        return None
+    i, j, _ = wrong[0]
+    unit = units[i][found[0][j]]
+    text = unit.text.strip()
+    start = unit.text.find(text)
+    rep = Reported(None, "", start, start, start + len(text))
+    rep.text = text
+    return CountTest(unit, rep, (), f"the counts of {len(block)} rows in {len(found[0])} groups' columns, no test of them given",
+                     (misfits[0], *(said for _, _, said in wrong)))
+
+
+def _run_share(block: Sequence[dict[int, tuple[int, float, float]]], i: int, column: int) -> bool:
+    """Whether row ``i``'s percent in ``column`` is its count's share of the counts of some run of two or more rows around
+    it: without a row naming each variable, one variable's rows may stand among others', its percents of its own valid n."""
+    n, pct, half = block[i][column]
+    totals = [row[column][0] for row in block]
+    for start in range(i + 1):
+        for end in range(max(i + 1, start + 2), len(block) + 1):
+            whole = sum(totals[start:end])
+            if whole and abs(100.0 * n / whole - pct) <= half + 1e-9:
+                return True
+    return False
 
 
 # -- the tests the counts give ---------------------------------------------------------------------------------------

@@ -333,7 +333,7 @@ def _with_counts(items: list[_Item], tests: "list[CountTest]", context: str) -> 
     counts give (and the counts, to be held to); a χ² in a column of mixed heads ("χ2/Z") or a p alone becomes an item."""
     by_unit = {id(it.unit): k for k, it in enumerate(items) if it.rep.symbol == "chi2"}
     for test in tests:
-        if test.other and len(test.counts) * len(test.counts[0]) > 4:  # (said, never silent)
+        if test.other and test.counts and len(test.counts) * len(test.counts[0]) > 4:  # (said, never silent; not of a block without a test)
             test = replace(test, how=f"{test.how}; not held to them: the caption or note names {test.other!r}, which a table larger than 2 × 2 may have had")
         df = test.rep.df[0].value if test.rep.df else None
         reading = (Reading((df,), f"df = {df:g}, (categories − 1) × (groups − 1) of the counts in its rows"),) if df else ()
