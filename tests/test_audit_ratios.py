@@ -220,3 +220,39 @@ def test_rate_hazard_and_risk_ratio_columns_are_read_as_odds_ratio_columns_are(t
     rows = [["Death", "12 (4.0)", "24 (8.0)", "4.0 (0.3 to 7.7)", "0.04"], ["Readmission", "30 (10.0)", "27 (9.0)", "−1.0 (−5.7 to 3.7)", "0.68"]]
     entries = _audit(tmp_path, _table("Table 2. Outcomes at 12 months.", ["Outcome", "Intervention, n (%)", "Control, n (%)", "ARR (95% CI)", "P value"], rows))
     assert [e.found for e in entries] == ["ARR = 4.0, 95% CI [0.3, 7.7]", "ARR = −1.0, 95% CI [−5.7, 3.7]"] and not any(e.codes for e in entries)
+
+
+# PMC6291340, Table 3, as published: a linear mixed model, a logistic and a negative binomial
+# model side by side ("Estimatea | 95% CI | P-value | ORa | 95% CI | P-value | IRRa | 95% CI | P-value", the heads' footnote
+# letter glued on), rows as published — its "(0.29, 072)" and its reversed "(0.39, 0.04)" among them
+_PMC6291340 = [["baseline vs year 1", "0.51", "(0.29, 072)", "<0.0001", "1.41", "(1.10, 1.82)", "0.0072", "1.45", "(1.30, 1.61)", "<0.0001"],
+               ["1–8 years (per 1 year)", "-0.09", "(−0.12, −0.06)", "<0.0001", "0.94", "(0.91, 0.98)", "0.0066", "0.92", "(0.90, 0.94)", "<0.0001"],
+               ["Age (per 10 years younger)", "0.21", "(0.39, 0.04)", "0.0159", "1.24", "(1.08, 1.44)", "0.0031", "1.12", "(1.04, 1.22)", "0.0031"],
+               ["Gender (Female vs Male)", "0.55", "(0.17, 0.94)", "0.0052", "1.42", "(0.97, 2.09)", "0.0726", "1.47", "(1.20, 1.80)", "0.0002"],
+               ["Black", "0.29", "(−0.13, 0.71)", "0.1769", "1.21", "(0.83, 1.76)", "0.3177", "1.16", "(0.94, 1.44)", "0.1633"],
+               ["Other", "1.51", "(0.59, 2.42)", "0.0012", "2.20", "(1.23, 3.92)", "0.0077", "2.11", "(1.45, 3.06)", "<0.0001"],
+               ["HS", "-0.12", "(−0.76, 0.51)", "0.7080", "1.50", "(0.89, 2.54)", "0.1304", "0.90", "(0.66, 1.21)", "0.4756"]]
+
+# Sci Rep 2020 (s41598-020-60620-3), Table 3: negative binomial coefficients with their robust SEs, the IRRs and p, rows
+# of it as published
+_UK_BIOBANK = [["Low mood (n = 9289)", "−0.015 (0.008)", "0.984", "0.053"], ["Anhedonia (n = 9289)", "−0.013 (0.008)", "0.987", "0.122"],
+               ["Tenseness (n = 9289)", "−0.007 (0.007)", "0.993", "0.339"], ["Low mood (n = 4817)", "−0.022 (0.010)", "0.978", "0.038"],
+               ["Anhedonia (n = 4817)", "−0.025 (0.011)", "0.975", "0.033"], ["Tiredness (n = 4817)", "0.000 (0.007)", "1.000", "0.980"]]
+
+
+def test_models_side_by_side_and_a_ratio_beside_its_coefficient(tmp_path):
+    """A linear, a logistic and a count model side by side, each estimate with its own interval and p, had been read
+    (once the heads' glued footnote letters were) as one model whose OR must be exp(Estimate): ten false findings.
+    Each ratio column after an estimate whose own interval stands between them now starts a model of its own; the
+    table's one real slip, an interval printed reversed, is found. And a coefficient with its SE beside its exp(B)
+    ("b (SE) | IRR | p"): each IRR held to exp(b) — the UK Biobank table's 0.984 beside b = −0.015 (exp: 0.9846 to 0.9856)."""
+    heads = ["Multivariable models", "Estimatea", "95% CI", "P-value", "ORa", "95% CI", "P-value", "IRRa", "95% CI", "P-value"]
+    entries = _audit(tmp_path, _table("Table 3. Linear mixed model, logistic and negative binomial regression of CESD scores.", heads, _PMC6291340,
+                                      "CESD, Center for Epidemiologic Studies Depression Scale; CI, Confidence Interval; OR, Odds Ratio; IRR, Incident Rate Ratio."))
+    assert len(entries) == 21 and [e.found.split(" =")[0] for e in entries[:3]] == ["B", "OR", "IRR"]
+    assert [(e.found, e.codes) for e in entries if e.codes] == [("B = 0.21, 95% CI [0.39, 0.04], p = 0.0159", ["ci-reversed"])]
+    assert "OR = 1.41, 95% CI [1.10, 1.82], p = 0.0072" in [e.found for e in entries]
+    entries = _audit(tmp_path, _table("Table 3 Associations between photoperiod and depressive symptoms.", ["Model", "b (SE)", "IRR", "p"], _UK_BIOBANK))
+    assert [(e.found, e.codes) for e in entries if e.codes] == [("B = −0.015, SE = 0.008, IRR = 0.984, p = 0.053", ["coefficient-does-not-fit"])]
+    assert "IRR = 0.984 is not exp(B): B = −0.015 gives 0.9846 to 0.9856" in entries[0].message and len(entries) == 6
+    assert not [e.suggestion for e in audit_file(tmp_path / "t.md", suggest_all=True) if e.suggestion]  # (no record takes a B: no ratio restyled without it)

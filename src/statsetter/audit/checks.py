@@ -1124,8 +1124,9 @@ def coefficient_ratio(rep: Reported, coefficient: "Ratio | None") -> list[Findin
 
 
 def _odds_fit(rep: Reported, b: Number) -> list[Finding]:
-    """An odds ratio beside a logistic coefficient against exp(B), on the printed precision of both."""
-    odds = next((e for e in rep.effects if e.name in ("OR", "aOR")), None)
+    """An odds ratio beside a logistic coefficient against exp(B) (a hazard, rate or risk ratio beside its model's
+    coefficient alike), on the printed precision of both."""
+    odds = next((e for e in rep.effects if e.name in RATIOS), None)
     b_low, b_high = b.value - b.half_unit, b.value + b.half_unit
     if odds is None or b_high >= 700:
         return []

@@ -117,6 +117,8 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
     """The statistic restyled (``house``: its `house_text`, when made already). A p the audit found not to follow
     from the statistic is never repeated: the suggestion carries the p recomputed from the printed statistic and df,
     and says so."""
+    if rep.symbol is None and rep.effects and rep.estimate is not None and rep.ci is None:  # a table's B and SE with its exp(B)
+        return ""  # beside them ("b (SE) | IRR | p"): no record takes the B, and the ratio restyled alone would drop it
     if rep.symbol is None and rep.descriptives:  # descriptives without a test: each symbol as the style sets it, the words between kept
         new = house_text(rep, style, alpha) if house is _UNMADE else house
         return new.plain() if isinstance(new, StyledText) else ""

@@ -31,8 +31,9 @@ __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "
 _INTERVAL_HEAD = (r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|C\.I\.?|confidence\s+interval)|(?:CI|C\.I\.?|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)")
 # its limits named after it: "95% CI of B (lower–upper)", "95% CI (LL, UL)"
 _LIMITS_NAMED = r"(?:\s*\(\s*(?:lower|LL)\s*(?:[–—,/-]|to)\s*(?:upper|UL)\s*\))?"
-# (footnote letters after a p head, glued or spaced, several by commas: "P valuea", "P value a", "P valueb,c")
-_FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)\s?[a-f](?:,\s?[a-f])*|(?<=values)\s?[a-f](?:,\s?[a-f])*|(?<=β)[a-d])$")
+# (footnote letters after a p head, glued or spaced, several by commas: "P valuea", "P value a", "P valueb,c"; glued to an
+# estimate's or a ratio's head: "Estimatea", "ORa", "IRRa")
+_FOOTNOTE = re.compile(rf"(?<=\S)(?:\s*[{_SIGNIFICANCE}]+|(?<=value)\s?[a-f](?:,\s?[a-f])*|(?<=values)\s?[a-f](?:,\s?[a-f])*|(?<=β)[a-d]|(?<=[Ee]stimate)[a-d]|(?<=OR|HR|RR|PR)[a-d])$")
 _ROLES = (
     # a column of two tests' values, as medical tables print one test per row: "χ2/Z", "t/χ2 value" — χ² in a categorical
     # variable's rows (its counts), the other test elsewhere (a Mann–Whitney Z, a t)
@@ -774,6 +775,12 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
     out = []
     starts = (sorted(k for k, role in roles.items() if role in ("B", "BSE", "BCI", "diff")) or sorted(k for k, role in roles.items() if role == "expB")
               or sorted(k for k, role in roles.items() if role == "beta"))  # (a table of β alone, "β | 95% CI | p")
+    if starts and roles[starts[0]] != "expB":  # a ratio column after an estimate whose own interval stands between them is another
+        for k in sorted(c for c, role in roles.items() if role == "expB"):  # model's ("Estimate | 95% CI | P | OR | 95% CI | P | IRR | …",
+            before = max((c for c in starts if c < k), default=None)  # a linear, a logistic and a count model side by side)
+            if before is not None and (roles[before] == "BCI" or any(roles[c] == "ci" for c in roles if before < c < k)):
+                starts.append(k)
+        starts.sort()
     for i, k in enumerate(starts):
         end = starts[i + 1] if i + 1 < len(starts) else 1 << 30
         if k not in row:
@@ -799,7 +806,7 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             ratio = numbers[interval[2]][1] if interval[2] in row and numbers.get(interval[2]) is not None else None
             if ratio is None or numbers[interval[2]][0] != "=":
                 continue
-            name = heads.get(interval[2], "OR").strip() or "OR"
+            name = _head_text(heads.get(interval[2], "OR")) or "OR"  # (without its footnote letter: "ORa")
             marked = None
             if p is None and stars:  # the bound the ratio's, its interval's or its B's marks stand for ("1.29 | (1.18 - 1.40)**", "0.497** | … | 1.643")
                 limits = _own_column(part, k, "ci")
@@ -820,9 +827,19 @@ def _bare_coefficients(row, roles: dict[int, str], numbers, heads: dict[int, str
             if interval is not None:
                 rep.ci, rep.estimate = interval[0], estimate
                 rep.text += f", {rep.ci.level * 100:g}% CI [{rep.ci.low.text}, {rep.ci.high.text}]"
+            ratio_col = next((c for c in sorted(part) if part[c] == "expB"), None) if interval is None and roles[k] in ("B", "BSE") else None
+            if ratio_col is not None and ratio_col in row and numbers.get(ratio_col) is not None and numbers[ratio_col][0] == "=":
+                shown = _head_text(heads.get(ratio_col, "")) or "OR"  # its exp(B) beside it without an interval ("b (SE) | IRR | p")
+                ratio = numbers[ratio_col][1]
+                rep.effects = [Effect(_column_ratio(shown), ratio, ratio.start, ratio.end, ratio.start, shown)]
+                rep.estimate = estimate  # (the row's B: no record takes it, so no suggestion restyles the ratio without it)
+                rep.text += f", {shown} = {ratio.text}"
+            else:
+                ratio_col = None
             rep.text += p_text(p)
             unit = row[k][0]
-            how = f"the {heads.get(k, name).strip() or name} column" + (", its SE" if se is not None else "") + (f", {interval[4]}" if interval else "")
+            how = f"the {_head_text(heads.get(k, name)) or name} column" + (", its SE" if se is not None else "") + (f", {interval[4]}" if interval else "") \
+                + (f", the {_head_text(heads.get(ratio_col, ''))} column" if ratio_col is not None else "")
         how += ", the p column" if p is not None else ""
         # (an odds ratio's row: its B and SE too — not where the ratio itself starts the row: "OR | SE | 95% CI | p", as
         # Stata's logistic prints it, has no B, and its SE may be the ratio's own)
