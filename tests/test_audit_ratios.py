@@ -256,3 +256,28 @@ def test_models_side_by_side_and_a_ratio_beside_its_coefficient(tmp_path):
     assert [(e.found, e.codes) for e in entries if e.codes] == [("B = −0.015, SE = 0.008, IRR = 0.984, p = 0.053", ["coefficient-does-not-fit"])]
     assert "IRR = 0.984 is not exp(B): B = −0.015 gives 0.9846 to 0.9856" in entries[0].message and len(entries) == 6
     assert not [e.suggestion for e in audit_file(tmp_path / "t.md", suggest_all=True) if e.suggestion]  # (no record takes a B: no ratio restyled without it)
+
+
+# Sci Rep 2025 (PMC12256607), Table 7, "Logistic regression analysis of the influencing factors of social participation
+# potential classification": "b | Sb | Waldχ 2 | P | OR | 95% CI", rows of it as published (its "0684" and "20,532" among them)
+_PMC12256607 = [["Constant", "− 3.917", "0.803", "23.795", "0.000", "", ""],
+                ["Some or a little of the time = 010", "0.281", "0.261", "1.156", "0.282", "1.324", "0.794–2.210"],
+                ["Most of all of the time = 100", "0.198", "0.373", "0.281", "0.596", "1.219", "0.587–20,532"],
+                ["Depression", "− 0.038", "0.017", "4.759", "0.029", "0.936", "0.931–0.996"],
+                ["IADL", "0.514", "0.122", "17.675", "0.000", "1.671", "1.315–2.123"],
+                ["Country = 1", "− 0.380", "0.191", "3.944", "0.047", "0684", "0.470–0.995"],
+                ["Not have = 1", "− 0.531", "0.176", "9.097", "0.003", "0.588", "0.417–0.830"]]
+
+
+def test_a_coefficients_se_headed_sb(tmp_path):
+    """"Sb" (S with b below: the SE of b, as Chinese journals head it) had not been read as the SE, so no Wald, OR or
+    interval of PMC12256607's Table 7 was held to its b: now each is. The Depression row's OR, 0.936, is neither exp(b)
+    (b = −0.038: 0.9622 to 0.9632) nor at its interval's centre (0.963: the digits transposed); "0684" is no ratio inside
+    its interval; the other rows fit."""
+    entries = _audit(tmp_path, _table("Table 7. Logistic regression analysis of the influencing factors of social participation potential classification.",
+                                      ["Variable", "b", "Sb", "Waldχ 2", "P", "OR", "95% CI"], _PMC12256607))
+    found = {e.found: e.codes for e in entries}
+    assert found["Wald = 4.759, p = 0.029, OR = 0.936, 95% CI [0.931, 0.996]"] == ["coefficient-does-not-fit", "ratio-does-not-fit"]
+    assert found["Wald = 3.944, p = 0.047, OR = 0684, 95% CI [0.470, 0.995]"] == ["ci-excludes-estimate", "coefficient-does-not-fit"]
+    assert len(entries) == 7 and sum(bool(c) for c in found.values()) == 2
+    assert all("the B and SE columns" in e.notes[0] for e in entries)

@@ -67,7 +67,7 @@ _ROLES = (
     # a t test's mean difference and its SE (SPSS's Independent Samples and One-Sample Test; jamovi's): t is their ratio
     (re.compile(r"(?i)mean\s+diff(?:erence|\.)?|MD"), "diff"),
     (re.compile(r"(?i)(?:std\.?\s?error|s\.?e\.?)\s+(?:of\s+(?:the\s+)?)?diff(?:erence|\.)?"), "se_diff"),
-    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|(?:estimated\s+)?standard\s+errors?(?:\s+of\s+(?:b|beta|β))?"), "SE"),
+    (re.compile(r"(?i)S\.?\s?E\.?(?:\s?B)?|Std\.?\s?Err(?:or|\.)?|(?:estimated\s+)?standard\s+errors?(?:\s+of\s+(?:b|beta|β))?|S_?[bβ]"), "SE"),  # ("Sb": S_b, as Chinese journals head it)
     # (crude and adjusted too: "COR", "AOR", "cOR", "aOR", "Adjusted OR", "Crude odds ratio"; and the other ratios of a
     # model's exp(B), a Cox model's "HR", a Poisson model's "Crude IRR" and "Adjusted IRR", "RR", "PR": read only beside an interval)
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|(?-i:(?!ARR\b))(?:[ac]|crude\s+|adj(?:usted|\.)?\s*)?(?:OR|HR|RR|IRR|PR|(?:estimated\s+)?odds\s+ratio|"
