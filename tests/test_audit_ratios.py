@@ -281,3 +281,22 @@ def test_a_coefficients_se_headed_sb(tmp_path):
     assert found["Wald = 3.944, p = 0.047, OR = 0684, 95% CI [0.470, 0.995]"] == ["ci-excludes-estimate", "coefficient-does-not-fit"]
     assert len(entries) == 7 and sum(bool(c) for c in found.values()) == 2
     assert all("the B and SE columns" in e.notes[0] for e in entries)
+
+
+# PMC6687807, Table 2, as published ("β | Wald c2 | P value | OR (95% CI)": the
+# χ² of "Wald χ2" copied as "c2", Symbol's χ), rows of it as published
+_PMC6687807 = [["Gender", "0.15", "0.474", "0.491", "1.162 (0.759–1.779)"], ["2 = 31–40 years", "− 0.824", "6.551", "0.01", "0.439 (0.234–0.825)"],
+               ["2 = 6–10 years,", "− 2.772", "11.946", "0.001", "0.063 (0.013–0.301)"], ["1 = pig farmers", "1.713", "7.134", "0.068", "5.545 (1.011–30.424)"],
+               ["2 = Slaughters", "2.396", "3.89", "0.049", "10.984 (1.650–73.130)"], ["2 = 7–9 h", "− 0.398", "1.012", "0.315", "0.670 (0.307–1.462)"]]
+
+
+def test_a_wald_column_headed_wald_c2_beside_its_coefficient(tmp_path):
+    """"Wald c2" (a copy's χ²) had not been read as a Wald column, and a Wald beside a coefficient without its SE had no
+    df: a coefficient's Wald test has 1 df (its B beside it says the row is one coefficient's). PMC6687807's pig farmers
+    row prints P = 0.068 beside Wald = 7.134 (p = .0076 on 1 df; its OR's interval, 1.011 to 30.424, excludes 1 too):
+    found; the other rows fit."""
+    entries = _audit(tmp_path, _table("Table 2. Analysis for influent factors of the positive rates of anti-HEV IgG using logistic regression model.",
+                                      ["Variables", "β", "Wald c2", "P value", "OR (95% CI)"], _PMC6687807))
+    walds = [e for e in entries if e.found.startswith("Wald")]
+    assert len(walds) == 6 and [(e.found, e.codes) for e in entries if e.codes] == [("Wald = 7.134, p = 0.068", ["p-does-not-follow", "verdict-changes"])]
+    assert "df = 1 (the Wald test of one coefficient: its B beside it)" in walds[3].checked

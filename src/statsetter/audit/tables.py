@@ -41,7 +41,7 @@ _ROLES = (
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
     (re.compile(r"F(?:[- ]?(?:values?|ratio)|\s+[Cc]hange)?"), "F"),  # (SPSS's Model Summary: "F Change", "Sig. F Change")
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
-    (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?))?"), "wald"),  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
+    (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?|c\s?[²2]))?"), "wald"),  # ("Wald c2": χ² as a copy of Symbol's χ prints it)  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
     # a coefficient with its standard error in one cell, "0.52 (0.21)" under "B (SE)" (regression tables in psychology and
     # sociology; practice)
     (re.compile(r"(?i)(?:b|β|beta|estimate|coefficient|coef\.?)\s*\(\s*S\.?E\.?(?:\s?B)?\s*\)"), "BSE"),  # (also "β (SE)")
@@ -681,6 +681,7 @@ def _residual_readings(said: str) -> tuple[Reading, ...]:
 
 
 ONE_COEFFICIENT = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B and SE beside it)")
+ONE_COEFFICIENT_B = Reading((1.0,), "df = 1 (the Wald test of one coefficient: its B beside it)")
 
 
 _VALUE_SE = re.compile(rf"\s*(?P<b>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+))\s*[{_SIGNIFICANCE}]*\s*\(\s*(?P<se>\d+(?:[.,]\d+)?|[.,]\d+)\s*\)\s*[{_SIGNIFICANCE}]*\s*")
@@ -1118,8 +1119,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 for e in rep.effects if e.name != "OR" or e.ci is not None)
             if rep.ci is not None:
                 rep.text += f", {rep.ci.level * 100:g}% CI [{rep.ci.low.text}, {rep.ci.high.text}]"
-            if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE
-                readings: tuple[Reading, ...] = () if df or coefficient is None else (ONE_COEFFICIENT,)
+            if df or role == "wald":  # a Wald's df come from its df column, or are 1 beside one coefficient's B and SE (or its B alone,
+                readings: tuple[Reading, ...] = () if df else (ONE_COEFFICIENT,) if coefficient is not None else \
+                    (ONE_COEFFICIENT_B,) if any(roles.get(k) in ("B", "beta") and numbers.get(k) is not None for k in row) else ()  # "β | Wald c2 | P")
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
                 readings = _residual_readings(said) if role == "t" else ()
             elif role in ("t", "r") and note_df:  # "Note: df= 58": the table's one df, as its caption or note gives it
