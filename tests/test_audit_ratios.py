@@ -37,7 +37,7 @@ _PMC7940880 = [["Female", "1.30 (1.24–1.37)", "<0.0001"], ["Age >65 years", "1
 
 # J Geriatr Cardiol 2021;18(1):75–82 (PMC7868910), Table 3, "Crude odds ratios (CORs) and adjusted odds ratios (AORs) of
 # rick factors associated with hypertension": rows as published, the limits set off by a minus sign (U+2212) as the page
-# prints them, the marks' note as published (its "**" and "*" definitions without a "P" are not read)
+# prints them, the marks' note as published ("***P < 0.01, ** < 0.05, * < 0.1": a list whose later marks leave the P out)
 _PMC7868910 = [["55−59", "1.773", "1.043−3.013", "**", "1.535", "0.803−2.936", ""], ["60−64", "1.902", "1.112−3.253", "**", "1.223", "0.598−2.501", ""],
                ["65−69", "2.821", "1.541−3.253", "***", "2.298", "1.051−5.020", "**"], ["70−74", "1.577", "0.846−2.937", "", "0.659", "0.270−1.608", ""],
                ["75−79", "1.864", "0.870−3.992", "", "1.219", "0.472−3.149", ""], ["80+", "3.259", "1.584−6.703", "***", "1.712", "0.660−4.440", ""],
@@ -60,6 +60,8 @@ def test_a_ratio_its_interval_is_not_made_around_is_found_in_published_tables(tm
                                       "***P < 0.01, ** < 0.05, * < 0.1; #Reference Category."))
     assert len(entries) == 18 and {e.found.split(" =")[0] for e in entries} == {"COR", "AOR"}  # (the heads had gone unread)
     assert [(e.found, e.codes) for e in entries if e.codes] == [("COR = 2.821, 95% CI [1.541, 3.253], p < 0.01", ["ratio-does-not-fit"])]
+    assert entries[0].found == "COR = 1.773, 95% CI [1.043, 3.013], p < 0.05"  # ("**", defined without its P after "***P < 0.01")
+    assert "AOR = 0.637, 95% CI [0.409, 0.990], p < 0.1" in [e.found for e in entries]
     restyled = {e.found.split(",")[0]: e.suggestion.split(",")[0] for e in audit_file(tmp_path / "t.md", suggest_all=True)}
     assert restyled["COR = 1.773"] == "OR = 1.77" and restyled["AOR = 1.535"] == "aOR = 1.54"  # (the adjusted ratio keeps its name)
 

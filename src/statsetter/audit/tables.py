@@ -197,13 +197,20 @@ _SIZE = re.compile(r"(?<![\w])[nN]\s*=\s*(\d{1,3}(?:,\d{3})+|\d{1,6}+)(?![\d.,]\
 _STAR_SAID = re.compile(rf"(?<![{_SIGNIFICANCE}\w])([{_SIGNIFICANCE}]{{1,4}})\s*[pP]\s*([<≤])\s*(0?[.,]\d+)")
 
 
+# the next definition in a list after one with its p, the p left out: "***P < 0.01, ** < 0.05, * < 0.1" (PMC7868910's note)
+_STAR_LISTED = re.compile(rf"\s*[,;]\s*([{_SIGNIFICANCE}]{{1,4}})\s*(?:[pP]\s*)?([<≤])\s*(0?[.,]\d+)")
+
+
 def star_bounds(text: str, mark: str) -> dict[str, tuple[str, Number]]:
-    """The p bound each mark stands for, as a table's note or caption defines it ("**p < .01": "**" → ("<", .01))."""
-    out = {}
+    """The p bound each mark stands for, as a table's note or caption defines it ("**p < .01": "**" → ("<", .01)); in a
+    list after a definition with its p, the p may be left out ("***P < 0.01, ** < 0.05")."""
+    out: dict[str, tuple[str, Number]] = {}
     for m in _STAR_SAID.finditer(text):
-        number = _patterns(mark).to_number(m.group(3), 0)
-        if number is not None and 0 < number.value < 1:
-            out.setdefault(m.group(1).translate(ONE_STAR), (m.group(2), number))
+        while m is not None:
+            number = _patterns(mark).to_number(m.group(3), 0)
+            if number is not None and 0 < number.value < 1:
+                out.setdefault(m.group(1).translate(ONE_STAR), (m.group(2), number))
+            m = _STAR_LISTED.match(text, m.end())
     return out
 
 
