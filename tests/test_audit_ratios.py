@@ -289,16 +289,22 @@ def test_a_coefficients_se_headed_sb(tmp_path):
 # χ² of "Wald χ2" copied as "c2", Symbol's χ), rows of it as published
 _PMC6687807 = [["Gender", "0.15", "0.474", "0.491", "1.162 (0.759–1.779)"], ["2 = 31–40 years", "− 0.824", "6.551", "0.01", "0.439 (0.234–0.825)"],
                ["2 = 6–10 years,", "− 2.772", "11.946", "0.001", "0.063 (0.013–0.301)"], ["1 = pig farmers", "1.713", "7.134", "0.068", "5.545 (1.011–30.424)"],
-               ["2 = Slaughters", "2.396", "3.89", "0.049", "10.984 (1.650–73.130)"], ["2 = 7–9 h", "− 0.398", "1.012", "0.315", "0.670 (0.307–1.462)"]]
+               ["2 = Slaughters", "2.396", "3.89", "0.049", "10.984 (1.650–73.130)"], ["1≦6 h", "− 0.008", "0", "0.985", "1.008 (0.452–2.247)"],
+               ["2 = 7–9 h", "− 0.398", "1.012", "0.315", "0.670 (0.307–1.462)"]]
 
 
 def test_a_wald_column_headed_wald_c2_beside_its_coefficient(tmp_path):
     """"Wald c2" (a copy's χ²) had not been read as a Wald column, and a Wald beside a coefficient without its SE had no
     df: a coefficient's Wald test has 1 df (its B beside it says the row is one coefficient's). PMC6687807's pig farmers
     row prints P = 0.068 beside Wald = 7.134 (p = .0076 on 1 df; its OR's interval, 1.011 to 30.424, excludes 1 too):
-    found; the other rows fit."""
+    found. And a β beside a column of ratios with their intervals, whose exp the ratio is in most rows, is the model's
+    log odds: each ratio held to exp(β) — the 1≦6 h row's OR of 1.008 beside β = −0.008 (exp: 0.992, its sign lost) and
+    the 7–9 h row's 0.670 beside β = −0.398 (0.6713 to 0.6720) are found; the other rows fit."""
     entries = _audit(tmp_path, _table("Table 2. Analysis for influent factors of the positive rates of anti-HEV IgG using logistic regression model.",
                                       ["Variables", "β", "Wald c2", "P value", "OR (95% CI)"], _PMC6687807))
     walds = [e for e in entries if e.found.startswith("Wald")]
-    assert len(walds) == 6 and [(e.found, e.codes) for e in entries if e.codes] == [("Wald = 7.134, p = 0.068", ["p-does-not-follow", "verdict-changes"])]
+    assert len(walds) == 7 and [(e.found, e.codes) for e in entries if e.codes] == [
+        ("Wald = 7.134, p = 0.068", ["p-does-not-follow", "verdict-changes"]), ("OR = 1.008, 95% CI [0.452, 2.247], p = 0.985", ["coefficient-does-not-fit"]),
+        ("OR = 0.670, 95% CI [0.307, 1.462], p = 0.315", ["coefficient-does-not-fit"])]
     assert "df = 1 (the Wald test of one coefficient: its B beside it)" in walds[3].checked
+    assert "OR = 1.008 is not exp(B): B = − 0.008 gives 0.9915 to 0.9925" in [e for e in entries if e.found.startswith("OR = 1.008")][0].message

@@ -770,6 +770,25 @@ def _beta_as_log_odds(rows, roles: dict[int, str], mark: str) -> dict[int, str] 
     return {c: "B" if role == "beta" else role for c, role in roles.items()} if tried >= 2 and 3 * fits >= 2 * tried else None
 
 
+def _log_odds_beside(rows, roles: dict[int, str], mark: str) -> int | None:  # type: ignore[no-untyped-def]
+    """The column of a logistic model's coefficients beside its one column of ratios with their intervals ("β | Wald c2 | P
+    value | OR (95% CI)"): a β or B column whose exp is the ratio in at least two thirds of the rows (and two or more);
+    None otherwise (a standardized β beside a ratio is no log odds)."""
+    betas = [c for c, role in roles.items() if role in ("beta", "B")]
+    ratios = [c for c, role in roles.items() if role.startswith("ratio:")]
+    if len(betas) != 1 or len(ratios) != 1:
+        return None
+    fits = tried = 0
+    for row in rows.values():
+        b = _number(row[betas[0]][0].text, mark) if betas[0] in row else None
+        cell = _ratio_cell(row[ratios[0]][0].text, mark) if ratios[0] in row else None
+        if b is None or cell is None or b[0] != "=" or abs(b[1].value) > 50:
+            continue
+        tried += 1
+        fits += math.exp(b[1].value - b[1].half_unit) - cell[0].half_unit <= cell[0].value <= math.exp(b[1].value + b[1].half_unit) + cell[0].half_unit
+    return betas[0] if tried >= 2 and 3 * fits >= 2 * tried else None
+
+
 _BETA_HEAD = re.compile(r"(?i)\s*(?:β|beta)\b")  # a "β (SE)" head: its coefficients are named β, as the table names them
 
 
@@ -912,6 +931,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     error_dfs: dict[int, list[_ErrorTerm]] = {}
     squares_checked: set[tuple[int, int]] = set()  # the error rows whose own SS and MS have been checked (with their first effect)
     log_odds: dict[int, dict[int, str] | None] = {}  # each header's roles with its β read as a logistic B, where the table shows it is one
+    log_odds_ratio: dict[int, int | None] = {}  # each header's β (or B) column whose exp its one column of ratios is
     header_above = False  # the row before was a header row
     wordy = ""  # the text of the rows without numbers just above (a spanner's "95% Confidence Interval of the Difference")
     heads: dict[int, str] = {}  # each column's head as typed
@@ -1035,9 +1055,15 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             name = _stub_ratio(stub) if stub is not None else roles[c].removeprefix("ratio:")
             marked = _marked_bound(unit.text, stars, high.end) if p is None and p_col is None and stars else None  # "1.29 (1.18–1.40)**"
             rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p or (marked[0] if marked else None), high.end)
+            if stub is None and id(roles) not in log_odds_ratio:
+                log_odds_ratio[id(roles)] = _log_odds_beside(rows, roles, mark)
+            beta_col = log_odds_ratio.get(id(roles)) if stub is None else None
+            beta = numbers.get(beta_col) if beta_col is not None and beta_col in row else None
+            coefficient = (beta[1], None) if beta is not None and beta[0] == "=" else None  # (held to exp(B): coefficient_p)
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) " + ("its row names" if stub else "column")
                                         + (", the p column" if p else "")
-                                        + (f", its {marked[1]}" if marked else "")))
+                                        + (f", its {marked[1]}" if marked else "")
+                                        + (f", the {_head_text(heads.get(beta_col, 'B'))} column (its exp the ratio)" if coefficient else ""), (), coefficient))
         # a statistic whose value sits alone under a head named t, F, χ², r or z
         for c, role in roles.items():
             by_row = role == "value"
