@@ -308,3 +308,57 @@ def test_a_wald_column_headed_wald_c2_beside_its_coefficient(tmp_path):
         ("OR = 0.670, 95% CI [0.307, 1.462], p = 0.315", ["coefficient-does-not-fit"])]
     assert "df = 1 (the Wald test of one coefficient: its B beside it)" in walds[3].checked
     assert "OR = 1.008 is not exp(B): B = − 0.008 gives 0.9915 to 0.9925" in [e for e in entries if e.found.startswith("OR = 1.008")][0].message
+
+
+
+# Front Cell Infect Microbiol 2022;12:919414 (PMC9250988), Table 3, and Sci Rep 2017;7:43520 (PMC5335256), Table 4: Cox
+# models' hazard ratios, as published
+_PMC9250988 = """Table 3. Univariate and multivariate Cox regression analysis of risk factors for 30-day mortality.
+
+| Variable | HR | 95%CI for HR | P value | aHRa | 95%CI for HR | P value |
+|---|---|---|---|---|---|---|
+| Sex, male vs female | 1.61 | 0.66-3.93 | 0.295 | | | |
+| Age, year, ≥65 vs <65 | 1.90 | 0.94-3.85 | 0.074 | | | |
+| Heart dysfunction | 2.21 | 1.07-4.56 | 0.031 | | | |
+| WBC, 109/L, ≥14.3 vs <14.3 | 3.15 | 1.53-6.50 | 0.002 | | | |
+| NEUT, 109/L, >11.9vs <11.9 | 3.37 | 1.63-6.96 | 0.001 | 3.12 | 1.08-8.98 | 0.035 |
+| NLR, ≥10.3vs <10.3 | 4.37 | 1.99-9.58 | <0.001 | | | |
+| PLT, 109/L, <75 vs ≥75 | 5.23 | 2.55-10.75 | <0.001 | | | |
+| CRP, mg/L, ≥149 vs <149 | 8.34 | 3.48-19.96 | <0.001 | 4.41 | 1.45-13.45 | 0.009 |
+| Effective treatment | 0.51 | 0.25-1.05 | 0.068 | | | |
+
+aAdjusted hazard ratio for age and sex.
+"""
+_PMC5335256 = """Table 4. Cox proportional hazard analysis of risk for cardiovascular mortality in haemodialysis patients according to clinical predictors and circulating TNF related markers in univariate and multivariate models.
+
+| Baseline Characteristics | HR (95% CI) | P | HR (95% CI) | P |
+|---|---|---|---|---|
+| Female gender | 0.31 (0.14–0.70) | 0.005 | 0.36 (0.16–0.81) | <0.01 |
+| Age (10 yrs) | 1.28 (0.96–1.72) | 0.10 | | |
+| Body mass index (1 kg/m2) | 0.98 (0.89–1.08) | 0.71 | | |
+| SBP (10 mmHg) | 0.88 (0.75–1.03) | 0.12 | | |
+| 140–160 (ref.) vs. <140 | 2.45 (1.10–5.45) | 0.03 | | |
+| 140–160 (ref.) vs. > 160 | 1.73 (0.74–4.04) | 0.21 | | |
+| DBP (10 mmHg) | 0.80 (0.60–1.08) | 0.14 | | |
+| <80 (ref.) vs. ≥80 | 0.48 (0.24–0.99) | 0.045 | | |
+| Prior CVD (0 = no; 1 = yes) | 3.97 (2.12–7.43) | <0.0001 | 3.86 (2.05–7.25) | <0.0001 |
+| Albumin (1 g/dL) | 0.38 (0.18–0.81) | 0.01 | | |
+| hs-CRP (1 mg/L) | 1.24 (1.04–1.48) | 0.02 | | |
+| TNFα | 1.43 (0.73–2.82) | 0.30 | 0.33 (0.15–0.75) | 0.97 |
+| TNFR1 | 2.18 (1.15–4.15) | 0.02 | 2.15 (1.13–4.10) | 0.02 |
+| TNFR2 | 2.00 (1.04–3.83) | 0.04 | 1.54 (0.80–2.99) | 0.20 |
+| TNFα (1SD = 0.29) | 1.21 (0.90–1.63) | 0.20 | 1.10 (0.80–1.50) | 0.57 |
+| TNFR1 (1SD = 0.25) | 1.31 (0.94–1.83) | 0.12 | 1.19 (0.84–1.70) | 0.33 |
+| TNFR2 (1SD = 0.24) | 1.50 (1.10–2.05) | <0.01 | 1.33 (0.97–1.82) | 0.09 |
+"""
+
+
+def test_hazard_ratio_tables_as_published(tmp_path):
+    """Two published Cox tables. PMC9250988's ("HR | 95%CI for HR | P value | aHRa | 95%CI for HR | P value") had gone
+    unread — an interval "for HR", a head with its footnote letter glued on —: its 11 ratios now read, all fitting.
+    PMC5335256's 24 hazard ratios fit their intervals and p, and its multivariate TNFα row, 0.33 (0.15–0.75) beside P =
+    0.97, is found."""
+    entries = _audit(tmp_path, _PMC9250988)
+    assert len(entries) == 11 and not any(e.codes for e in entries) and entries[5].found == "aHR = 3.12, 95% CI [1.08, 8.98], p = 0.035"
+    entries = _audit(tmp_path, _PMC5335256)
+    assert len(entries) == 25 and [(e.found, e.codes) for e in entries if e.codes] == [("HR = 0.33, 95% CI [0.15, 0.75], p = 0.97", ["ci-p-disagree"])]

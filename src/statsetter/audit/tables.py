@@ -51,7 +51,7 @@ _ROLES = (
                 rf"|(?:mean|adjusted|between[- ]group|risk)?\s*diff(?:erence|\.)?|MD)[{_SIGNIFICANCE}a-d]?\s*[(\[]\s*{_INTERVAL_HEAD}\s*[)\]]"
                 rf"(?:\s+at\s+\d+\s+(?:weeks|months|days|years))?"), "BCI"),  # ("Adjusted difference* (95% CI) at 12 months": CONSORT's example)
     # an interval in one column, "−7.48, −4.53" or "[0.15, 0.31]" under "95% CI" (of the nearest estimate to its left)
-    (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|odds\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
+    (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|HR|RR|IRR|PR|odds\s+ratio|hazard\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
     (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:[\s-](?:coefficients?|weights?))?(?:\s*\(\s*standardi[sz]ed\s*\))?"), "beta"),
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
