@@ -362,3 +362,32 @@ def test_hazard_ratio_tables_as_published(tmp_path):
     assert len(entries) == 11 and not any(e.codes for e in entries) and entries[5].found == "aHR = 3.12, 95% CI [1.08, 8.98], p = 0.035"
     entries = _audit(tmp_path, _PMC5335256)
     assert len(entries) == 25 and [(e.found, e.codes) for e in entries if e.codes] == [("HR = 0.33, 95% CI [0.15, 0.75], p = 0.97", ["ci-p-disagree"])]
+
+
+# BMC Infect Dis 2021 (s12879-021-06057-z), Table 4: univariate and multivariable Cox models, "Hazards ratio (95% CI)", as published
+_S12879 = """Table 4 Analysis of factors affecting mortality using both the univariate and multivariable Cox proportional hazards model
+
+| | Hazards ratio (95% CI) | p value | Hazards ratio (95% CI) | p value |
+|---|---|---|---|---|
+| Gender (male) | 1.724 (1.103–2.694) | 0.017 | 0.885 (0.533–1.470) | 0.637 |
+| Age# | 1.072 (1.055–1.089) | <0.001 | 1.066 (1.043–1.089) | < 0.001 |
+| > 60 years* | 8.371 (4.701–14.910) | <0.001 | - | - |
+| Diabetes | 2.187 (1.361–3.515) | 0.001 | 1.148 (0.676–1.952) | 0.609 |
+| Hypertension | 2.012 (1.270–3.189) | 0.003 | 0.852 (0.508–1.428) | 0.543 |
+| Coronary heart disease | 4.195 (2.198–8.008) | <0.001 | 1.081 (0.518–2.254) | 0.836 |
+| White blood cell count # | 1.187 (1.138–1.238) | <0.001 | 1.135 (1.080–1.192) | < 0.001 |
+| >10 × 109 per L & | 3.993 (2.469–6.459) | <0.001 | - | - |
+| Ln (Glucose)# | 3.561 (2.221–5.708) | <0.001 | 1.844 (0.931–3.649) | 0.079 |
+| Ln (AST)# | 3.452 (2.448–4.867) | <0.001 | 1.480 (0.983–2.229) | 0.060 |
+| High C-reactive protein(>10 mg/L) | 18.960 (4.658–77.170) | <0.001 | 3.907 (0.900–16.970) | 0.069 |
+| High Creatinine (>104 μmol/L) | 3.430 (1.981–5.938) | <0.001 | 1.209 (0.637–2.294) | 0.562 |
+| Low Lymphocytes (<1 × 109 per L) | 3.776 (2.150–6.635) | <0.001 | 1.516 (0.820–2.803) | 0.185 |
+"""
+
+
+def test_a_hazards_ratio_head(tmp_path):
+    """"Hazards ratio (95% CI)" (the plural "hazards") had been read as a bare estimate with its interval: no null of 1,
+    no p. Now the table's 24 hazard ratios are read with their p's and checked, and fit."""
+    entries = _audit(tmp_path, _S12879)
+    assert len(entries) == 24 and not any(e.codes for e in entries)
+    assert entries[0].found == "HR = 1.724, 95% CI [1.103, 2.694], p = 0.017"

@@ -51,7 +51,7 @@ _ROLES = (
                 rf"|(?:mean|adjusted|between[- ]group|risk)?\s*diff(?:erence|\.)?|MD)[{_SIGNIFICANCE}a-d]?\s*[(\[]\s*{_INTERVAL_HEAD}\s*[)\]]"
                 rf"(?:\s+at\s+\d+\s+(?:weeks|months|days|years))?"), "BCI"),  # ("Adjusted difference* (95% CI) at 12 months": CONSORT's example)
     # an interval in one column, "−7.48, −4.53" or "[0.15, 0.31]" under "95% CI" (of the nearest estimate to its left)
-    (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|HR|RR|IRR|PR|odds\s+ratio|hazard\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
+    (re.compile(rf"(?i){_INTERVAL_HEAD}(?:\s+(?:for|of)\s+(?:B|b|β|OR|HR|RR|IRR|PR|odds\s+ratio|hazards?\s+ratio|the\s+(?:mean\s+)?difference|the\s+estimate))?{_LIMITS_NAMED}"), "ci"),
     # a standardised coefficient's column: the table is a model's, whose t has the model's residual df, not a two-group t's
     (re.compile(r"(?i)(?:std\.?\s*|standardi[sz]ed\s+)?(?:β|beta)(?:[\s-](?:coefficients?|weights?))?(?:\s*\(\s*standardi[sz]ed\s*\))?"), "beta"),
     # its coefficient, standard error and odds ratio columns (SPSS: B, S.E., Exp(B); R's summary: Estimate, Std. Error; Stata's
@@ -71,7 +71,7 @@ _ROLES = (
     # (crude and adjusted too: "COR", "AOR", "cOR", "aOR", "Adjusted OR", "Crude odds ratio"; and the other ratios of a
     # model's exp(B), a Cox model's "HR", a Poisson model's "Crude IRR" and "Adjusted IRR", "RR", "PR": read only beside an interval)
     (re.compile(r"(?i)exp\s?\(\s?B\s?\)|(?-i:(?!ARR\b))(?:[ac]|crude\s+|adj(?:usted|\.)?\s*)?(?:OR|HR|RR|IRR|PR|(?:estimated\s+)?odds\s+ratio|"
-                r"hazard\s+ratio|risk\s+ratio|relative\s+risk|(?:incidence\s+)?rate\s+ratio|prevalence\s+ratio)"), "expB"),
+                r"hazards?\s+ratio|risk\s+ratio|relative\s+risk|(?:incidence\s+)?rate\s+ratio|prevalence\s+ratio)"), "expB"),
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
     # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
@@ -118,12 +118,12 @@ _CHI_ROW = re.compile(r"(?i)\s*(?:pearson\s+chi[- ]?square|likelihood\s+ratio|co
 # "HR (95% CI)" (public-health tables; practice): "1.3 (1.0–1.7)", "1.38 (0.92, 2.08)", "1.08 (1.06 to 1.09)*"
 # (also spelled out and with the interval's name dotted: "Multivariate Odds Ratio (95% C.I)")
 _CI95 = r"\(\s*(?:95\s?%\s?(?:c\.?i\.?s?|confidence\s+intervals?)|c\.?i\.?\s?95\s?%)\s*\)"  # "(95% CI)", "(95%CIs)", "(95% C.I)", "(95% confidence interval)", "(CI95%)"
-_RATIO_WORDS = r"or|hr|rr|irr|pr|odds\s+ratio|hazard\s+ratio|risk\s+ratio|relative\s+risk|incidence\s+rate\s+ratio|prevalence\s+ratio"
+_RATIO_WORDS = r"or|hr|rr|irr|pr|odds\s+ratio|hazards?\s+ratio|risk\s+ratio|relative\s+risk|incidence\s+rate\s+ratio|prevalence\s+ratio"
 _RATIO_HEAD = re.compile(rf"(?i)(?:[\w .,;:-]*\s)?(?P<adj>a|adjusted\s+)?(?P<name>{_RATIO_WORDS})[a-d{_SIGNIFICANCE}]?\s*{_CI95}[a-d{_SIGNIFICANCE}]?")
 # (also "95%CIs", "(95% confidence interval)"); a spanner that names the ratio over the columns of several models ("Hazard ratio
 # (95% confidence interval)" over "Model 1 | P | Model 2 | P", as JCSM 2015's Table 2 lays it out): its columns' cells are that ratio
 _RATIO_SPANNER = re.compile(rf"(?i)(?<![\w])(?P<name>{_RATIO_WORDS})s?\s*{_CI95}")
-_RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR",
+_RATIO_NAMES = {"odds ratio": "OR", "hazard ratio": "HR", "hazards ratio": "HR", "risk ratio": "RR", "relative risk": "RR", "incidence rate ratio": "IRR",
                 "prevalence ratio": "PR"}
 _RATIO_CELL = re.compile(rf"\s*(?P<est>\d+(?:[.,]\d+)?)\s*[{_SIGNIFICANCE}a-d]*\s*[(\[]\s*(?P<lo>\d+(?:[.,]\d+)?)\s*(?:[–—−~～-]|to|[,;])\s*"
                          rf"(?P<hi>\d+(?:[.,]\d+)?)\s*[)\]]\s*[{_SIGNIFICANCE}a-d]*\s*")
@@ -139,7 +139,7 @@ _ADJUSTED_SAID = re.compile(r"(?i)\badjusted\b|\bmultivariable\b")
 _RATIO_ESTIMATE_HEAD = re.compile(rf"(?i)\s*((?:un)?adjusted|crude|multivariable|univariable)?\s*estimates?\s*{_CI95}\s*")
 # the ratio an exp(B) column's head names, and whether adjusted: "AOR", "Adjusted IRR", "cHR", "Hazard ratio" (an odds ratio's otherwise)
 _COLUMN_RATIO = re.compile(r"(?i)\s*(?P<adj>[ac](?=(?:or|hr|rr|irr|pr)\b)|adj(?:usted|\.)?\s*|crude\s+)?(?P<name>or|hr|rr|irr|pr|odds\s+ratio|"
-                           r"hazard\s+ratio|risk\s+ratio|relative\s+risk|(?:incidence\s+)?rate\s+ratio|prevalence\s+ratio)\b")
+                           r"hazards?\s+ratio|risk\s+ratio|relative\s+risk|(?:incidence\s+)?rate\s+ratio|prevalence\s+ratio)\b")
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
