@@ -271,6 +271,33 @@ def _run_share(block: Sequence[dict[int, tuple[int, float, float]]], i: int, col
     return False
 
 
+# a count with its whole and its percent in one cell, as clinical tables print them: "45/120 (37.5)", "1,204/3,310 (36.4%)"
+_FRACTION_CELL = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*/\s*(?P<whole>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)"
+                            r"\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
+
+
+def fraction_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> list[CountTest]:
+    """Each cell that gives a count with its whole and percent ("45/120 (37.5)") whose percent is not n / N: an entry of
+    its own (the whole is the cell's, so no other reading of the percent stands)."""
+    out = []
+    for _, _, unit, _ in cells:
+        m = _FRACTION_CELL.fullmatch(unit.text)
+        if m is None:
+            continue
+        n, whole = (int(re.sub(r"\D", "", m.group(g))) for g in ("n", "whole"))
+        pct = m.group("pct").replace(",", ".")
+        half = 0.5 * 10.0 ** -len(pct.partition(".")[2])
+        if not 0 < whole or n > whole or abs(100.0 * n / whole - float(pct)) <= half + 1e-9:
+            continue
+        text = unit.text.strip()
+        start = unit.text.find(text)
+        rep = Reported(None, "", start, start, start + len(text))
+        rep.text = text
+        out.append(CountTest(unit, rep, (), "a count with its whole and its percent in one cell",
+                             ("of the whole the cell gives", f"{n} / {whole:,} is {_share(n, whole, half)}%, not {float(pct):.{_places(half)}f}%")))
+    return out
+
+
 # -- the tests the counts give ---------------------------------------------------------------------------------------
 
 
