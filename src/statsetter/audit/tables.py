@@ -205,7 +205,8 @@ def star_bounds(text: str, mark: str) -> dict[str, tuple[str, Number]]:
     """The p bound each mark stands for, as a table's note or caption defines it ("**p < .01": "**" → ("<", .01)); in a
     list after a definition with its p, the p may be left out ("***P < 0.01, ** < 0.05")."""
     out: dict[str, tuple[str, Number]] = {}
-    for m in _STAR_SAID.finditer(text):
+    for first in _STAR_SAID.finditer(text):
+        m: "re.Match[str] | None" = first
         while m is not None:
             number = _patterns(mark).to_number(m.group(3), 0)
             if number is not None and 0 < number.value < 1:
@@ -1063,7 +1064,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: the {name} (95% CI) " + ("its row names" if stub else "column")
                                         + (", the p column" if p else "")
                                         + (f", its {marked[1]}" if marked else "")
-                                        + (f", the {_head_text(heads.get(beta_col, 'B'))} column (its exp the ratio)" if coefficient else ""), (), coefficient))
+                                        + (f", the {_head_text(heads.get(beta_col, 'B'))} column (its exp the ratio)" if coefficient and beta_col is not None else ""), (), coefficient))
         # a statistic whose value sits alone under a head named t, F, χ², r or z
         for c, role in roles.items():
             by_row = role == "value"
