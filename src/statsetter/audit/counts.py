@@ -43,6 +43,19 @@ class CountTest:
 # tests of a table larger than 2 × 2 other than those computed here, named in a caption or note: a trend test, a rank test
 # of ordered categories, an exact test of the whole table (Freeman–Halton)
 _OTHER_TEST = re.compile(r"(?i)\btrend|cochran[-–\s]?armitage|mantel|kruskal|mann[-–\s]?whitney|wilcoxon|\brank|fisher|\bexact\b|freeman")
+# a row that gives each group's n: "n", "N", "No.", "Number of trials, n (%)", "Sample size", "Participants, n"
+_SIZES_ROW = re.compile(r"(?i)\s*(?:n|no\.?|number(?:\s+of\s+[\w\s-]+)?|sample\s+size|participants)(?:\s*[,:(]\s*(?:n|no\.?)?\s*(?:\(\s*%\s*\))?\)?)?\s*")
+
+
+def _size_cell(text: str) -> int | None:
+    """A group's n in a cell: a whole number ("120", "1,204") or a count with its percent ("34 (63)")."""
+    counted = count_cell(text)
+    if counted is not None:
+        return counted[0]
+    m = re.fullmatch(r"\s*(\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*", text)
+    return int(re.sub(r"\D", "", m.group(1))) if m is not None else None
+
+
 # a row whose label says it gives a mean and SD, a median and IQR or a range: "45 (12)" is no count and its percent
 _NOT_COUNTS = re.compile(r"(?i)\bmean\b|\bSD\b|median|\bIQR\b|interquartile|\brange\b|±|\bM\s*\(")
 # survey weights: the percents are weighted and the test design-based (Rao–Scott), neither the counts' own
@@ -74,6 +87,13 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     for r in sorted(rows):
         row = rows[r]
         first = min(row)
+        if r != top and _SIZES_ROW.fullmatch(row[first].text):  # the groups' n in a row of their own ("n | 120 | 118",
+            sizes = {c: n for c, u in row.items() if c != first and (n := _size_cell(u.text)) is not None}  # "Number of trials, n (%)
+            if len(sizes) >= 2:  # | 34 (63) | 20 (37)"): each group's n where its head gives none, for the blocks below
+                close()
+                block, units, anchor, labelled = [], [], None, False
+                heads = {**heads, **{c: f"{heads.get(c, '')} (n = {n})" for c, n in sizes.items() if not sizes_in(heads.get(c, ""))}}
+                continue
         counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := count_cell(u.text)) is not None} \
             if _NOT_COUNTS.search(row[first].text) is None else {}
         tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
