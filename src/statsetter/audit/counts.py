@@ -44,7 +44,7 @@ class CountTest:
 # of ordered categories, an exact test of the whole table (Freeman–Halton)
 _OTHER_TEST = re.compile(r"(?i)\btrend|cochran[-–\s]?armitage|mantel|kruskal|mann[-–\s]?whitney|wilcoxon|\brank|fisher|\bexact\b|freeman")
 # a row that gives each group's n: "n", "N", "No.", "Number of trials, n (%)", "Sample size", "Participants, n"
-_SIZES_ROW = re.compile(r"(?i)\s*(?:n|no\.?|number(?:\s+of\s+[\w\s-]+)?|sample\s+size|participants)(?:\s*[,:(]\s*(?:n|no\.?)?\s*(?:\(\s*%\s*\))?\)?)?\s*")
+_SIZES_ROW = re.compile(r"(?i)\s*(?:n|no\.|number(?:\s+of\s+[\w\s-]+)?|sample\s+size|participants)(?:\s*[,:(]\s*(?:n|no\.?)?\s*(?:\(\s*%\s*\))?\)?)?\s*")
 
 
 def _size_cell(text: str) -> int | None:
@@ -96,6 +96,10 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
                 continue
         counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := count_cell(u.text)) is not None} \
             if _NOT_COUNTS.search(row[first].text) is None else {}
+        if counts or block:  # a zero count typed without its percent beside counts with theirs ("Dissatisfied | 0 | 1 (4.5)"), or a
+            counts.update({c: (0, 0.0, 0.5) for c, u in row.items() if c != first and c not in (p_col, chi_col) and c not in counts
+                           and u.text.strip() == "0"})  # row of zeros among a variable's rows: 0 (0%), the category's row, not the
+            # end of its variable's
         tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
         if len(counts) >= 2:
             if tested and (anchor is not None or not labelled) or _outcome_pairs(counts, sorted(counts), every=True) is not None:  # a
