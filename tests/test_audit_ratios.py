@@ -246,13 +246,14 @@ def test_models_side_by_side_and_a_ratio_beside_its_coefficient(tmp_path):
     """A linear, a logistic and a count model side by side, each estimate with its own interval and p, had been read
     (once the heads' glued footnote letters were) as one model whose OR must be exp(Estimate): ten false findings.
     Each ratio column after an estimate whose own interval stands between them now starts a model of its own; the
-    table's one real slip, an interval printed reversed, is found. And a coefficient with its SE beside its exp(B)
+    table's real slips are found: an interval printed reversed, and "072" (0.72, its point lost: read as 72, said). And a coefficient with its SE beside its exp(B)
     ("b (SE) | IRR | p"): each IRR held to exp(b) — the UK Biobank table's 0.984 beside b = −0.015 (exp: 0.9846 to 0.9856)."""
     heads = ["Multivariable models", "Estimatea", "95% CI", "P-value", "ORa", "95% CI", "P-value", "IRRa", "95% CI", "P-value"]
     entries = _audit(tmp_path, _table("Table 3. Linear mixed model, logistic and negative binomial regression of CESD scores.", heads, _PMC6291340,
                                       "CESD, Center for Epidemiologic Studies Depression Scale; CI, Confidence Interval; OR, Odds Ratio; IRR, Incident Rate Ratio."))
     assert len(entries) == 21 and [e.found.split(" =")[0] for e in entries[:3]] == ["B", "OR", "IRR"]
-    assert [(e.found, e.codes) for e in entries if e.codes] == [("B = 0.21, 95% CI [0.39, 0.04], p = 0.0159", ["ci-reversed"])]
+    assert sorted((e.found, e.codes) for e in entries if e.codes) == [("B = 0.21, 95% CI [0.39, 0.04], p = 0.0159", ["ci-reversed"]),
+                                                                      ("B = 0.51, 95% CI [0.29, 072], p < 0.0001", ["malformed-number"])]  # (0.72's point lost)
     assert "OR = 1.41, 95% CI [1.10, 1.82], p = 0.0072" in [e.found for e in entries]
     entries = _audit(tmp_path, _table("Table 3 Associations between photoperiod and depressive symptoms.", ["Model", "b (SE)", "IRR", "p"], _UK_BIOBANK))
     assert [(e.found, e.codes) for e in entries if e.codes] == [("B = −0.015, SE = 0.008, IRR = 0.984, p = 0.053", ["coefficient-does-not-fit"])]
@@ -280,7 +281,7 @@ def test_a_coefficients_se_headed_sb(tmp_path):
                                       ["Variable", "b", "Sb", "Waldχ 2", "P", "OR", "95% CI"], _PMC12256607))
     found = {e.found: e.codes for e in entries}
     assert found["Wald = 4.759, p = 0.029, OR = 0.936, 95% CI [0.931, 0.996]"] == ["coefficient-does-not-fit", "ratio-does-not-fit"]
-    assert found["Wald = 3.944, p = 0.047, OR = 0684, 95% CI [0.470, 0.995]"] == ["ci-excludes-estimate", "coefficient-does-not-fit"]
+    assert found["Wald = 3.944, p = 0.047, OR = 0684, 95% CI [0.470, 0.995]"] == ["malformed-number", "ci-excludes-estimate", "coefficient-does-not-fit"]
     assert len(entries) == 7 and sum(bool(c) for c in found.values()) == 2
     assert all("the B and SE columns" in e.notes[0] for e in entries)
 

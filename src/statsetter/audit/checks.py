@@ -40,6 +40,8 @@ CODES: dict[str, tuple[str, str]] = {
     "impossible-r": ("a correlation outside [−1, 1]", "Reporting by test: correlation (practice)"),
     "impossible-p": ("a p value outside [0, 1]", "Numbers: p (APA 7 §6.36)"),
     "impossible-value": ("a bounded effect size outside its range", "Numbers: bounded quantities (APA 7 §6.36)"),
+    "malformed-number": ("a number typed with a leading zero and no decimal mark (\"072\", \"0684\": a decimal point lost?)",
+                         "Numbers: a decimal fraction is written with its decimal mark (practice); the number is read as typed"),
     "negative-statistic": ("a negative F or χ²", "Reporting by test (practice)"),
     "negative-sd": ("a negative standard deviation", "Descriptives (APA 7 §6.44)"),
     "ci-reversed": ("a CI whose lower limit is above its upper", "Confidence intervals (APA 7 §6.44)"),
@@ -127,7 +129,7 @@ CODES: dict[str, tuple[str, str]] = {
 SEVERITIES = ("error", "warning", "style")
 SEVERITY: dict[str, str] = {
     "p-does-not-follow": "error", "verdict-changes": "error", "impossible-r": "error", "impossible-p": "error",
-    "impossible-value": "error", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
+    "impossible-value": "error", "malformed-number": "warning", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
     "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning", "means-do-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning", "ratio-does-not-fit": "warning",
@@ -500,6 +502,9 @@ def ratio_fits(rep: Reported, alpha: float, with_p: bool = True) -> list[Finding
     return out
 
 
+_LOST_POINT = re.compile(r"0\d")  # a number's digits starting with 0 and another digit: no decimal mark after the 0
+
+
 def impossible(rep: Reported) -> list[Finding]:
     out = []
     if rep.p is not None and rep.p.number is not None and not 0 <= rep.p.number.value <= 1:
@@ -520,6 +525,12 @@ def impossible(rep: Reported) -> list[Finding]:
             out.append(Finding("impossible-value", f"{e.symbol_text} {said}.", e.number.text))
         if e.name in RATIOS and (e.number.value <= 0 or (e.ci is not None and e.ci.low.value < 0)):
             out.append(Finding("impossible-value", f"A ratio ({e.symbol_text}) and its CI lie above 0.", e.number.text))
+    typed = [n for n in (rep.value, rep.estimate, rep.p.number if rep.p is not None else None) if n is not None]
+    typed += [n for e in rep.effects for n in ((e.number, e.ci.low, e.ci.high) if e.ci is not None else (e.number,))]
+    typed += [rep.ci.low, rep.ci.high] if rep.ci is not None else []
+    lost = next((n for n in typed if _LOST_POINT.match(n.digits)), None)
+    if lost is not None:  # "(0.29, 072)", "OR = 0684": read as typed, 72 and 684
+        out.append(Finding("malformed-number", f"{lost.text} is typed with a leading zero and no decimal mark: a decimal point lost? It is read as {lost.value:g}.", lost.text))
     for e in rep.descriptives:
         if e.name == "SD" and e.number.value < 0:
             out.append(Finding("negative-sd", "A standard deviation cannot be negative.", e.number.text))
