@@ -21,7 +21,7 @@ from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, Reported, p_text
 from .reading import Unit
-from .tables import _TOTAL_HEAD, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, WHOLE_COUNT, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -52,7 +52,7 @@ def _size_cell(text: str) -> int | None:
     counted = count_cell(text)
     if counted is not None:
         return counted[0]
-    m = re.fullmatch(r"\s*(\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*", text)
+    m = re.fullmatch(rf"\s*({WHOLE_COUNT})\s*", text)
     return int(re.sub(r"\D", "", m.group(1))) if m is not None else None
 
 
@@ -152,7 +152,7 @@ def _misfits(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[
     best = max(range(len(fits)), key=lambda k: sum(fits[k]))
     if 2 * sum(fits[best]) < len(cells) and not _whole(block, groups):
         return None
-    return _SHARES[best], [(i, j, f"{n} / {w:,} is {_share(n, w, half)}%, not {pct:.{_places(half)}f}%")
+    return _SHARES[best], [(i, j, _not_share(n, w, pct, half))
                            for ok, w, (i, j, n, pct, half) in zip(fits[best], wholes[best], cells) if not ok and w]
 
 
@@ -168,7 +168,7 @@ def _outcome_pairs(row: dict[int, tuple[int, float, float]], columns: list[int],
     whole = sum(abs(x[1] + y[1] - 100.0) <= x[2] + y[2] + 1e-9 for x, y in pairs)
     if whole < len(pairs) if every else 2 * whole < len(pairs):
         return None
-    wrong = [f"{n} / {x[0] + y[0]:,} is {_share(n, x[0] + y[0], half)}%, not {pct:.{_places(half)}f}%"
+    wrong = [_not_share(n, x[0] + y[0], pct, half)
              for x, y in pairs for n, pct, half in (x, y) if x[0] + y[0] and abs(100.0 * n / (x[0] + y[0]) - pct) > half + 1e-9]
     return [(x[0], y[0]) for x, y in pairs], (("of its group's two counts", *wrong) if wrong else ())
 
@@ -186,6 +186,11 @@ def _whole(block: Sequence[dict[int, tuple[int, float, float]]], groups: list[in
 
 def _places(half: float) -> int:
     return max(0, round(-math.log10(2 * half)))
+
+
+def _not_share(n: int, whole: int, pct: float, half: float) -> str:
+    """What a misfit percent is said to be: "7536 / 22,608 is 33.3%, not 33.0%"."""
+    return f"{n} / {whole:,} is {_share(n, whole, half)}%, not {pct:.{_places(half)}f}%"
 
 
 def _share(n: int, whole: int, half: float) -> str:
@@ -274,12 +279,17 @@ def _untested(block: Sequence[dict[int, tuple[int, float, float]]], units: Seque
         return None
     i, j, _ = wrong[0]
     unit = units[i][found[0][j]]
+    return CountTest(unit, _cell_entry(unit), (), f"the counts of {len(block)} rows in {len(found[0])} groups' columns, no test of them given",
+                     (misfits[0], *(said for _, _, said in wrong)))
+
+
+def _cell_entry(unit: Unit) -> Reported:
+    """A table cell read as an entry of its own, without a statistic (a count whose percent does not fit): its text."""
     text = unit.text.strip()
     start = unit.text.find(text)
     rep = Reported(None, "", start, start, start + len(text))
     rep.text = text
-    return CountTest(unit, rep, (), f"the counts of {len(block)} rows in {len(found[0])} groups' columns, no test of them given",
-                     (misfits[0], *(said for _, _, said in wrong)))
+    return rep
 
 
 def _run_share(block: Sequence[dict[int, tuple[int, float, float]]], i: int, column: int) -> bool:
@@ -296,8 +306,7 @@ def _run_share(block: Sequence[dict[int, tuple[int, float, float]]], i: int, col
 
 
 # a count with its whole and its percent in one cell, as clinical tables print them: "45/120 (37.5)", "1,204/3,310 (36.4%)"
-_FRACTION_CELL = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*/\s*(?P<whole>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)"
-                            r"\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
+_FRACTION_CELL = re.compile(rf"\s*(?P<n>{WHOLE_COUNT})\s*/\s*(?P<whole>{WHOLE_COUNT})\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 
 
 def fraction_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> list[CountTest]:
@@ -313,12 +322,8 @@ def fraction_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> li
         half = 0.5 * 10.0 ** -len(pct.partition(".")[2])
         if not 0 < whole or n > whole or abs(100.0 * n / whole - float(pct)) <= half + 1e-9:
             continue
-        text = unit.text.strip()
-        start = unit.text.find(text)
-        rep = Reported(None, "", start, start, start + len(text))
-        rep.text = text
-        out.append(CountTest(unit, rep, (), "a count with its whole and its percent in one cell",
-                             ("of the whole the cell gives", f"{n} / {whole:,} is {_share(n, whole, half)}%, not {float(pct):.{_places(half)}f}%")))
+        out.append(CountTest(unit, _cell_entry(unit), (), "a count with its whole and its percent in one cell",
+                             ("of the whole the cell gives", _not_share(n, whole, float(pct), half))))
     return out
 
 

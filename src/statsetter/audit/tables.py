@@ -543,7 +543,8 @@ def _error_df(errors: list[_ErrorTerm], r: int, correction: str) -> float | None
 
 _TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b")  # a column of all groups together, no group
 # a count with its percent, "287 (5.7%)", "2331 (80.4)", "12,513 (55.3%)" (counts.py reads a variable's block of them)
-COUNT_CELL = re.compile(r"\s*(?P<n>\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+)\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
+WHOLE_COUNT = r"\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+"  # a count, its thousands set off or not: "12,513", "12 513", "287"
+COUNT_CELL = re.compile(rf"\s*(?P<n>{WHOLE_COUNT})\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 
 
 def cell_grid(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> dict[int, dict[int, Unit]]:
@@ -766,9 +767,13 @@ def _beta_as_log_odds(rows, roles: dict[int, str], mark: str) -> dict[int, str] 
         if b is None or o is None or b[0] != "=" or o[0] != "=" or abs(b[1].value) > 50:
             continue
         tried += 1
-        low, high = math.exp(b[1].value - b[1].half_unit), math.exp(b[1].value + b[1].half_unit)
-        fits += low - o[1].half_unit <= o[1].value <= high + o[1].half_unit
+        fits += _is_exp(b[1], o[1])
     return {c: "B" if role == "beta" else role for c, role in roles.items()} if tried >= 2 and 3 * fits >= 2 * tried else None
+
+
+def _is_exp(b: Number, ratio: Number) -> bool:
+    """Whether a printed ratio can be exp of a printed coefficient, each standing for what its digits allow."""
+    return math.exp(b.value - b.half_unit) - ratio.half_unit <= ratio.value <= math.exp(b.value + b.half_unit) + ratio.half_unit
 
 
 def _log_odds_beside(rows, roles: dict[int, str], mark: str) -> int | None:  # type: ignore[no-untyped-def]
@@ -786,7 +791,7 @@ def _log_odds_beside(rows, roles: dict[int, str], mark: str) -> int | None:  # t
         if b is None or cell is None or b[0] != "=" or abs(b[1].value) > 50:
             continue
         tried += 1
-        fits += math.exp(b[1].value - b[1].half_unit) - cell[0].half_unit <= cell[0].value <= math.exp(b[1].value + b[1].half_unit) + cell[0].half_unit
+        fits += _is_exp(b[1], cell[0])
     return betas[0] if tried >= 2 and 3 * fits >= 2 * tried else None
 
 
