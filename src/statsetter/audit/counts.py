@@ -76,11 +76,13 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     out: list[CountTest] = []
     block: list[dict[int, tuple[int, float, float]]] = []  # each row's {column: count} in the block being read
     units: list[dict[int, Unit]] = []  # (and its cells)
+    sized: dict[int, int] = {}  # each group's n from a row of their own, under the current header
     anchor: dict[int, Unit] | None = None  # the row holding the block's test
     labelled = False  # the block began at a row naming its variable without a test (the test then on its first row of counts)
 
     def close() -> None:
-        test = (_test(block, anchor, heads, p_col, chi_col, mark) if anchor is not None else _untested(block, units, heads, labelled)) if block else None
+        test = (_test(block, anchor, heads, sized, p_col, chi_col, mark) if anchor is not None else _untested(block, units, heads, sized, labelled)) \
+            if block else None
         if test is not None:
             out.append(test)
 
@@ -92,7 +94,7 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
             if len(sizes) >= 2:  # | 34 (63) | 20 (37)"): each group's n where its head gives none, for the blocks below
                 close()
                 block, units, anchor, labelled = [], [], None, False
-                heads = {**heads, **{c: f"{heads.get(c, '')} (n = {n})" for c, n in sizes.items() if not sizes_in(heads.get(c, ""))}}
+                sized = {**sized, **sizes}
                 continue
         counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := count_cell(u.text)) is not None} \
             if _NOT_COUNTS.search(row[first].text) is None else {}
@@ -115,7 +117,7 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
         roles = {c: _role(u.text) for c, u in row.items()}
         if (any(roles.values()) or any(_CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text) for u in row.values())) and \
                 not any(_number(u.text, mark) is not None for u in row.values()):  # (a group's n in its head is no number: "n = 5030")
-            heads = {c: u.text for c, u in row.items()}  # a header row
+            heads, sized = {c: u.text for c, u in row.items()}, {}  # a header row
             p_col = next((c for c, role in roles.items() if role == "p"), None)
             chi_col = next((c for c, u in row.items() if _CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text)), None)
         elif all(not u.text.strip() for c, u in row.items() if c != first and c not in (p_col, chi_col)):
@@ -205,10 +207,10 @@ def _share(n: int, whole: int, half: float) -> str:
     return str(shown)
 
 
-def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int, Unit], heads: dict[int, str], p_col: int | None,
+def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int, Unit], heads: dict[int, str], sized: dict[int, int], p_col: int | None,
           chi_col: int | None, mark: str) -> CountTest | None:
     """The block's test, when its counts make a table of at least two groups and two categories."""
-    found = _groups(block, heads)
+    found = _groups(block, heads, sized)
     if found is None:
         return None
     groups, sizes = found
@@ -252,23 +254,24 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
     return CountTest(unit, rep, counts, how, percents)  # type: ignore[arg-type]
 
 
-def _groups(block: Sequence[dict[int, tuple[int, float, float]]], heads: dict[int, str]) -> "tuple[list[int], list[int | None]] | None":
-    """The block's group columns (a total column set aside) and each group's n from its head, where every row gives a
-    count in each of at least two groups' columns."""
+def _groups(block: Sequence[dict[int, tuple[int, float, float]]], heads: dict[int, str],
+            sized: dict[int, int]) -> "tuple[list[int], list[int | None]] | None":
+    """The block's group columns (a total column set aside) and each group's n from its head (or, where the head gives
+    none, from a row of the groups' n: ``sized``), where every row gives a count in each of at least two groups' columns."""
     groups = sorted(c for c in set.intersection(*(set(row) for row in block)) if not _TOTAL_HEAD.match(heads.get(c, "")))
     if len(groups) < 2 or any(set(row) - set(groups) - {c for c in row if _TOTAL_HEAD.match(heads.get(c, ""))} for row in block):
         return None
     head_sizes = [sizes_in(heads.get(c, "")) for c in groups]
-    return groups, [s[0] if len(s) == 1 else None for s in head_sizes]
+    return groups, [s[0] if len(s) == 1 else None if s else sized.get(c) for c, s in zip(groups, head_sizes)]
 
 
 def _untested(block: Sequence[dict[int, tuple[int, float, float]]], units: Sequence[dict[int, Unit]], heads: dict[int, str],
-              labelled: bool) -> CountTest | None:
+              sized: dict[int, int], labelled: bool) -> CountTest | None:
     """A block of counts the table gives no test for (a descriptive "Table 1"): its percents held to their counts alone,
     as a tested block's are; an entry (at the first percent that is not its count's share) only where one is not. Only
     where the block is one variable's (after a row naming it) or the heads give every group's n: without a test's row
     to start each variable, the rows of several may stand together, each variable's percents of its own valid n."""
-    found = _groups(block, heads)
+    found = _groups(block, heads, sized)
     if found is None or not (labelled or all(found[1])):
         return None
     misfits = _misfits(block, found[0], found[1])
