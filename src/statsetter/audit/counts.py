@@ -15,7 +15,7 @@ import math
 import re
 from decimal import ROUND_HALF_UP, Decimal
 from dataclasses import dataclass, replace
-from typing import Sequence
+from typing import NamedTuple, Sequence
 
 from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
@@ -38,6 +38,8 @@ class CountTest:
     how: str  # where the counts were read
     percents: tuple[str, ...] = ()  # what the percents are shares of, then each that is not its count's share
     other: str = ""  # a test the caption or note names that a table larger than 2 × 2 may have had instead (a trend test)
+    df: int = 0  # (r − 1)(k − 1) of the counts
+    typed: Reported | None = None  # the statistic as typed whole in its cell, where the test is one (rep its χ² with its p)
 
 
 # tests of a table larger than 2 × 2 other than those computed here, named in a caption or note: a trend test, a rank test
@@ -45,6 +47,33 @@ class CountTest:
 _OTHER_TEST = re.compile(r"(?i)\btrend|cochran[-–\s]?armitage|mantel|kruskal|mann[-–\s]?whitney|wilcoxon|\brank|fisher|\bexact\b|freeman")
 # a row that gives each group's n: "n", "N", "No.", "Number of trials, n (%)", "Sample size", "Participants, n"
 _SIZES_ROW = re.compile(r"(?i)\s*(?:n|no\.|number(?:\s+of\s+[\w\s-]+)?|sample\s+size|participants)(?:\s*[,:(]\s*(?:n|no\.?)?\s*(?:\(\s*%\s*\))?\)?)?\s*")
+
+
+# a header row that gives each group's count and percent in two columns ("Number | % | Number | %", "n | (%)",
+# "Intervention n | Intervention %"): a count's head, then its percent's with the same group's name or none
+_N_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*\b(?:n|no\.?|number|count|freq(?:uency)?\.?)\s*")
+_PERCENT_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*(?:\(\s*%\s*\)|%|percent(?:age)?|per\s+cent)\s*")
+
+
+def _paired_columns(row: dict[int, Unit]) -> dict[int, int]:
+    """A header row's count columns, each with its percent's column next to it, where the row pairs two groups or more
+    so; nothing for any other row."""
+    columns = sorted(row)
+    pairs = {}
+    for a, b in zip(columns, columns[1:]):
+        count, percent = _N_HEAD.fullmatch(row[a].text), _PERCENT_HEAD.fullmatch(row[b].text)
+        if count is not None and percent is not None and count.group("group").lower() == percent.group("group").lower():
+            pairs[a] = b
+    return pairs if len(pairs) >= 2 else {}
+
+
+def _paired_cell(count: Unit, percent: "Unit | None") -> tuple[int, float, float] | None:
+    """A count and its percent from two cells ("17 | 56.7", "17 | (56.7%)"), as count_cell reads them from one."""
+    if percent is None:
+        return None
+    share = percent.text.strip()
+    share = share[1:-1] if share[:1] == "(" and share[-1:] == ")" else share
+    return count_cell(f"{count.text} ({share})") if "(" not in count.text else None
 
 
 def _size_cell(text: str) -> int | None:
@@ -62,6 +91,20 @@ _NOT_COUNTS = re.compile(r"(?i)\bmean\b|\bSD\b|median|\bIQR\b|interquartile|\bra
 _WEIGHTED = re.compile(r"(?i)\bweight(?:ed|s)\b|rao[-–\s]?scott|design[- ]based|complex\s+survey|survey[- ]adjusted")
 
 
+class _Block(NamedTuple):
+    """A variable's rows of counts as read, with what the table said around them (count_tests)."""
+
+    rows: list[dict[int, tuple[int, float, float]]]  # each row's {column: (count, percent, its half unit)}
+    units: list[dict[int, Unit]]  # (and its cells)
+    anchor: dict[int, Unit] | None  # the row holding the block's test
+    typed: "tuple[Unit, Reported, str, Reported] | None"  # the test typed whole in a cell (_typed_test)
+    heads: dict[int, str]
+    sized: dict[int, int]
+    p_col: int | None
+    chi_col: int | None
+    labelled: bool
+
+
 def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: str = ".", said: str = "") -> list[CountTest]:
     """Each categorical variable's counts in a table, with its χ² (and p) or its p: see the module's text. A block is read
     only where each of its rows gives a count with its percent in every group's column, for at least two groups, and the
@@ -73,18 +116,23 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     rows = cell_grid(cells)
     heads: dict[int, str] = {c: u.text for c, u in rows[top].items()} if top in rows else {}  # (the first row, until a header row: "| n = 5030 | n = 22,608 |")
     p_col = chi_col = None
+    pairs: dict[int, int] = {}  # each count's column with its percent's, where the two stand apart (_paired_columns)
+    typed_at: dict[tuple[int, int], list[tuple[Unit, Reported | None]]] = {}  # each cell's paragraphs with their statistics, for
+    for r, c, unit, reps in cells:  # a test typed whole in one
+        typed_at.setdefault((r, c), []).extend([(unit, rep) for rep in reps] or [(unit, None)])
     out: list[CountTest] = []
     block: list[dict[int, tuple[int, float, float]]] = []  # each row's {column: count} in the block being read
     units: list[dict[int, Unit]] = []  # (and its cells)
     sized: dict[int, int] = {}  # each group's n from a row of their own, under the current header
     anchor: dict[int, Unit] | None = None  # the row holding the block's test
+    typed: tuple[Unit, Reported, str, Reported] | None = None  # (the test as typed in one of its cells, "χ2(2) = 5.496 P = 0.064")
     labelled = False  # the block began at a row naming its variable without a test (the test then on its first row of counts)
 
+    pending: list[_Block] = []  # each block as read, tested once the whole table is (its percents may be padded: _padded)
+
     def close() -> None:
-        test = (_test(block, anchor, heads, sized, p_col, chi_col, mark) if anchor is not None else _untested(block, units, heads, sized, labelled)) \
-            if block else None
-        if test is not None:
-            out.append(test)
+        if block:
+            pending.append(_Block(block, units, anchor, typed, heads, sized, p_col, chi_col, labelled))
 
     for r in sorted(rows):
         row = rows[r]
@@ -96,19 +144,33 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
                 block, units, anchor, labelled = [], [], None, False
                 sized = {**sized, **sizes}
                 continue
-        counts = {c: n for c, u in row.items() if c != first and c not in (p_col, chi_col) and (n := count_cell(u.text)) is not None} \
+        if not any(_number(u.text, mark) is not None for u in row.values()) and (paired := _paired_columns(row)):  # "n | % | n | %"
+            close()
+            block, units, anchor, labelled = [], [], None, False
+            heads = {**heads, **{c: heads.get(c) or heads.get(b) or row[c].text for c, b in paired.items()}}  # (each group's name
+            pairs = paired  # and n in the spanner above its two columns: "Intervention (n = 30)")
+            roles = {c: _role(u.text) for c, u in row.items()}  # (the test's heads in the same row: "Urban n | Urban % | … | P")
+            p_col = next((c for c, role in roles.items() if role == "p"), p_col)
+            chi_col = next((c for c, u in row.items() if _CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text)), chi_col)
+            continue
+        apart = (p_col, chi_col, *pairs.values())
+        counts = {c: got for c, u in row.items() if c != first and c not in apart
+                  and (got := _paired_cell(u, row.get(pairs[c])) if c in pairs else count_cell(u.text)) is not None} \
             if _NOT_COUNTS.search(row[first].text) is None else {}
         if counts or block:  # a zero count typed without its percent beside counts with theirs ("Dissatisfied | 0 | 1 (4.5)"), or a
-            counts.update({c: (0, 0.0, 0.5) for c, u in row.items() if c != first and c not in (p_col, chi_col) and c not in counts
+            counts.update({c: (0, 0.0, 0.5) for c, u in row.items() if c != first and c not in apart and c not in counts
                            and u.text.strip() == "0"})  # row of zeros among a variable's rows: 0 (0%), the category's row, not the
             # end of its variable's
-        tested = any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
+        test_cell = _typed_test(typed_at, r, [c for c in row if c != first and c not in apart and c not in counts])
+        typed_col, in_cell = test_cell if test_cell is not None else (None, None)
+        tested = in_cell is not None or any(c in row and row[c].text.strip() for c in (p_col, chi_col) if c is not None)
         if len(counts) >= 2:
             if tested and (anchor is not None or not labelled) or _outcome_pairs(counts, sorted(counts), every=True) is not None:  # a
                 close()  # variable's own test, or a row of groups' outcome pairs (each its own table): a new block
                 block, units, anchor, labelled = [], [], (row if tested else None), False
+                typed = in_cell
             elif tested:  # the test of the variable named above, on one of its rows of counts
-                anchor = row
+                anchor, typed = row, in_cell
             block.append(counts)
             units.append(row)
             continue
@@ -117,14 +179,52 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
         roles = {c: _role(u.text) for c, u in row.items()}
         if (any(roles.values()) or any(_CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text) for u in row.values())) and \
                 not any(_number(u.text, mark) is not None for u in row.values()):  # (a group's n in its head is no number: "n = 5030")
-            heads, sized = {c: u.text for c, u in row.items()}, {}  # a header row
+            heads, sized, pairs = {c: u.text for c, u in row.items()}, {}, {}  # a header row
             p_col = next((c for c, role in roles.items() if role == "p"), None)
             chi_col = next((c for c, u in row.items() if _CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text)), None)
-        elif all(not u.text.strip() for c, u in row.items() if c != first and c not in (p_col, chi_col)):
-            anchor, labelled = (row if tested else None), True  # a row naming the variable, its test there or on its first row of counts
+        elif all(not u.text.strip() for c, u in row.items() if c != first and c not in (p_col, chi_col) and c != typed_col):
+            anchor, labelled, typed = (row if tested else None), True, in_cell  # a row naming the variable, its test there or on its
+            # first row of counts
     close()
-    other = _OTHER_TEST.search(said)
-    return [replace(t, other=other.group()) for t in out] if other is not None else out
+    padded = _padded([cell for b in pending for row in b[0] for cell in row.values()])
+    for b in pending:
+        read = [{c: (n, pct, half * 10 if half < 0.5 else half) for c, (n, pct, half) in row.items()} for row in b.rows] if padded else b.rows
+        test = _test(read, b.anchor, b.typed, b.heads, b.sized, b.p_col, b.chi_col, mark) if b.anchor is not None else \
+            _untested(read, b.units, b.heads, b.sized, b.labelled)
+        if test is not None:
+            out.append(test)
+    other = _OTHER_TEST.search(said)  # (not for a χ² typed with the df of the counts' usual test: "χ2(2) = 5.496" is that test's)
+    return [t if t.typed is not None and t.typed.symbol == "chi2" and t.typed.df and t.typed.df[0].value == t.df else replace(t, other=other.group())
+            for t in out] if other is not None else out
+
+
+def _typed_test(typed_at: dict[tuple[int, int], list[tuple[Unit, Reported | None]]], r: int,
+                columns: Sequence[int]) -> "tuple[int, tuple[Unit, Reported, str, Reported]] | None":
+    """A variable's test typed whole in one of its row's cells, under a head that does not name it ("Results",
+    "Statistic and P": "χ2(2) = 5.496 P = 0.064", "Fisher's exact test P = 0.42"): its column, and its χ² (or its p
+    alone) with the cell's text. A χ² and its p in two paragraphs of the cell are held to the counts together (the χ²
+    with the p of the paragraph after it: the counts' test only, each paragraph keeps its own statistic)."""
+    for c in columns:
+        cell = typed_at.get((r, c), [])
+        text = " ".join(dict.fromkeys(u.text for u, _ in cell))
+        found = [(u, rep) for u, rep in cell if rep is not None]
+        chi = next((x for x in found if x[1].symbol == "chi2"), None)
+        alone = [x for x in found if x[1].symbol is None and x[1].p is not None and x[1].value is None and not x[1].effects]
+        if chi is not None and chi[1].p is None and any(u is not chi[0] for u, _ in alone):
+            after = next(x for x in alone if x[0] is not chi[0])
+            return c, (chi[0], replace(chi[1], p=after[1].p), text, chi[1])
+        if chi is not None or alone:
+            unit, rep = chi or alone[0]
+            return c, (unit, rep, text, rep)
+    return None
+
+
+def _padded(cells: Sequence[tuple[int, float, float]]) -> bool:
+    """Whether a table's percents are to be read to one decimal fewer than typed: every one typed with decimals ends in
+    a 0 (four at least) — one-decimal percents padded to two ("16.70 | 83.30"), or whole ones to one ("45.0") claim no
+    digit they lack."""
+    typed = [(pct, half) for _, pct, half in cells if half < 0.5]
+    return len(typed) >= 4 and not any(round(pct / (2 * half)) % 10 for pct, half in typed)
 
 
 _SHARES = ("of its column's counts", "of its group's n", "of its row's counts")
@@ -207,9 +307,10 @@ def _share(n: int, whole: int, half: float) -> str:
     return str(shown)
 
 
-def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int, Unit], heads: dict[int, str], sized: dict[int, int], p_col: int | None,
-          chi_col: int | None, mark: str) -> CountTest | None:
-    """The block's test, when its counts make a table of at least two groups and two categories."""
+def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int, Unit], typed: "tuple[Unit, Reported, str, Reported] | None",
+          heads: dict[int, str], sized: dict[int, int], p_col: int | None, chi_col: int | None, mark: str) -> CountTest | None:
+    """The block's test, when its counts make a table of at least two groups and two categories: the test's column's
+    value (or its p's) on the anchor's row, or the test ``typed`` whole in one of its cells."""
     found = _groups(block, heads, sized)
     if found is None:
         return None
@@ -228,6 +329,10 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
             return None
         table.append([s - n for s, n in zip(sizes, table[0])])  # type: ignore[operator]
     counts = tuple(tuple(row[j] for row in table) for j in range(len(groups)))  # (the groups as rows)
+    if typed is not None:  # (the χ² or p as read from its cell, with its df where typed: the item's own statistic)
+        df = (len(table) - 1) * (len(groups) - 1)
+        named = _OTHER_TEST.search(typed[2])  # ("Fisher's exact test = 3.86 P = 0.42": a larger table's exact test)
+        return CountTest(typed[0], typed[1], counts, _how(table, groups, block, paired, counts, df), percents, named.group() if named else "", df, typed[3])
     p_unit = anchor.get(p_col) if p_col is not None else None
     chi_unit = anchor.get(chi_col) if chi_col is not None else None
     p = _p_cell(p_unit.text, mark) if p_unit is not None and p_unit.text.strip() else None
@@ -235,15 +340,10 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
     if p is None and value is None:
         return None
     df = (len(table) - 1) * (len(groups) - 1)
-    trimmed = _trimmed(counts)
-    chi = pearson(trimmed) if len(trimmed) >= 2 and len(trimmed[0]) >= 2 else None
-    given = f"; Pearson's χ²({df}) = {_shown(chi)} from them, p = {_small(upper_tail('chi2', chi, (float(df),)))}" if chi is not None else ""
-    how = (f"the counts of {len(table)} categories in {len(groups)} groups' columns" if paired is None else
-           f"the counts of {len(groups)} groups' two outcomes in pairs of columns") + \
-        (" (the other category each group's n less the count)" if len(block) == 1 and paired is None else "") + given
+    how = _how(table, groups, block, paired, counts, df)
     if value is not None:
-        typed = value.group("num")
-        number = Number(typed, float(typed.replace(",", ".")), len(re.split(r"[.,]", typed)[1]) if re.search(r"[.,]", typed) else 0,
+        digits = value.group("num")
+        number = Number(digits, float(digits.replace(",", ".")), len(re.split(r"[.,]", digits)[1]) if re.search(r"[.,]", digits) else 0,
                         value.start("num"), value.end("num"))
         rep = Reported("chi2", "χ²", number.start, number.start, number.end, (Number(str(df), float(df), 0, 0, 0),), None, "=", number, p)
         unit = chi_unit
@@ -251,7 +351,18 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
         rep = Reported(None, "", p.start, p.start, p.end, (), None, "=", None, p)  # type: ignore[union-attr]
         unit = p_unit
     rep.text = ", ".join(([f"χ²({df}) = {number.text}"] if value is not None else []) + ([p_text(p).lstrip(', ')] if p is not None else []))
-    return CountTest(unit, rep, counts, how, percents)  # type: ignore[arg-type]
+    return CountTest(unit, rep, counts, how, percents, df=df)  # type: ignore[arg-type]
+
+
+def _how(table: Sequence[Sequence[int]], groups: Sequence[int], block: Sequence[object], paired: object,
+         counts: Sequence[Sequence[int]], df: int) -> str:
+    """Where a test's counts were read, and the Pearson χ² they give."""
+    trimmed = _trimmed(counts)
+    chi = pearson(trimmed) if len(trimmed) >= 2 and len(trimmed[0]) >= 2 else None
+    given = f"; Pearson's χ²({df}) = {_shown(chi)} from them, p = {_small(upper_tail('chi2', chi, (float(df),)))}" if chi is not None else ""
+    return (f"the counts of {len(table)} categories in {len(groups)} groups' columns" if paired is None else
+            f"the counts of {len(groups)} groups' two outcomes in pairs of columns") + \
+        (" (the other category each group's n less the count)" if len(block) == 1 and paired is None else "") + given
 
 
 def _groups(block: Sequence[dict[int, tuple[int, float, float]]], heads: dict[int, str],

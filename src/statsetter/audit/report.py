@@ -309,8 +309,12 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                                        labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
-        if any("(" in u.text or "±" in u.text for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses; a mean its ±)
-            items = _with_counts(items, count_tests(cells, mark, said) + fraction_tests(cells), context)
+        if any("(" in u.text or "±" in u.text or "%" in u.text or "ercent" in u.text for _, _, u, _ in cells):  # (a count's cell has its
+            # percent in parentheses, or a column of its own under "%"; a mean its ±)
+            tests = count_tests(cells, mark, said) + fraction_tests(cells)
+            typed = {id(t.typed) for t in tests if t.typed is not None}  # (tests typed whole in a cell: their cells' statistics)
+            items = _with_counts(items, tests, context)
+            read |= typed
             welch = _WELCH.search(said) is not None
             beside = {id(m.unit): replace(m, welch=welch) for m in group_means(cells, said)}
             items = [replace(it, means=beside[id(it.unit)]) if id(it.unit) in beside and it.rep.symbol in ("t", "F") else it for it in items]
@@ -332,19 +336,24 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
 
 def _with_counts(items: list[_Item], tests: "list[CountTest]", context: str) -> list[_Item]:
     """The table's items with each categorical variable's counts: a χ² already read from its column takes the df its
-    counts give (and the counts, to be held to); a χ² in a column of mixed heads ("χ2/Z") or a p alone becomes an item."""
+    counts give (and the counts, to be held to); a χ² in a column of mixed heads ("χ2/Z") or a p alone becomes an item
+    (its own cell's statistic, restyled in place, where it was typed whole in a cell)."""
     by_unit = {id(it.unit): k for k, it in enumerate(items) if it.rep.symbol == "chi2"}
+    by_rep = {id(it.rep): k for k, it in enumerate(items)}  # (a test typed whole in a cell: the cell's own statistic)
     for test in tests:
         if test.other and test.counts and len(test.counts) * len(test.counts[0]) > 4:  # (said, never silent; not of a block without a test)
             test = replace(test, how=f"{test.how}; not held to them: the caption or note names {test.other!r}, which a table larger than 2 × 2 may have had")
-        df = test.rep.df[0].value if test.rep.df else None
+        df = test.df
         reading = (Reading((df,), f"df = {df:g}, (categories − 1) × (groups − 1) of the counts in its rows"),) if df else ()
-        k = by_unit.get(id(test.unit))
+        k = by_rep.get(id(test.typed), by_unit.get(id(test.unit)))
         if k is not None:
             old = items[k]
-            items[k] = replace(old, readings=old.readings if old.rep.df else reading, how=f"{old.how}, {test.how}", counts=test)
+            items[k] = replace(old, readings=old.readings if old.rep.df or old.rep.symbol != "chi2" else reading, how=", ".join(x for x in (old.how, test.how) if x),
+                               counts=test)
         else:
-            items.append(_Item(test.unit, test.rep, None, reading if test.rep.symbol == "chi2" else (), f"read from the table's row: {test.how}",
+            items.append(_Item(test.unit, test.typed or test.rep, test.typed, reading if test.rep.symbol == "chi2" else (),  # (a χ² whose p
+                               # is the cell's next paragraph: the p held to the counts only, never written into the χ²'s paragraph)
+                               f"read from the table's row: {test.how}",
                                context, counts=test))
     return items
 

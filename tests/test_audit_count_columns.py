@@ -1,0 +1,231 @@
+"""A Table 1 that gives each group's count and percent in two columns of their own ("Number | % | Number | %"), and its
+test typed whole in a cell under a head that does not name it ("Results": "χ2(2) = 5.496 P = 0.064"): the counts held
+to their percents and to the test, as a table of "n (%)" cells is (tests/test_audit_context.py), on two published
+tables laid out as Markdown and as Word tables the way their publisher prints them (the group's name merged over its
+two columns, the test's cell merged down its variable's rows, the χ² and its P in two paragraphs), and on random ones.
+The truth is computed here with scipy."""
+
+from __future__ import annotations
+
+import random
+import re
+
+import docx
+import numpy as np
+import pytest
+from scipy.stats import chi2_contingency, fisher_exact
+
+from statsetter.audit.report import audit_file
+
+_COUNTS = {"counts-do-not-fit", "percent-does-not-fit", "p-does-not-follow"}
+
+# BMC Nursing 2022 (s12912-022-00939-6), Table 2, "The participants' demographic characteristics of nurses in the
+# intervention and control groups", as published (https://bmcnurs.biomedcentral.com/articles/10.1186/s12912-022-00939-6/tables/2);
+# the Fisher rows' "P = 1" printed there as "1P =" (the page's own line break)
+_NURSES_2022 = """Table 2 The participants' demographic characteristics of nurses in the intervention and control groups
+
+| Variable | Categories | Intervention (n = 30) | | Control (n = 30) | | Results |
+|---|---|---|---|---|---|---|
+| | | Number | % | Number | % | |
+| Age (years)a | 20–30 | 17 | 56.7 | 22 | 73.3 | χ2(2) = 5.496 P = 0.064 |
+| | 31–40 | 4 | 13.3 | 6 | 20 | |
+| | 41–50 | 9 | 30 | 2 | 6.7 | |
+| Marital statusa | Single | 12 | 40 | 11 | 36.7 | χ2(1) = 0.071 P = 0.791 |
+| | Married | 18 | 60 | 19 | 63.3 | |
+| Premature childb | Yes | 1 | 3.3 | 0 | 0 | P = 1 |
+| | No | 29 | 96.7 | 30 | 100 | |
+| Educationa | Bachelor's degree | 25 | 83.3 | 24 | 80 | χ2(1) = 0.111 P = 0.739 |
+| | Master's degree | 5 | 16.7 | 6 | 20 | |
+| Field of studya | Pediatrics | 5 | 16.7 | 7 | 23.3 | χ2(1) = 0.417 P = 0.519 |
+| | Nursing | 25 | 83.3 | 23 | 76.8 | |
+| Employmenta | Official | 11 | 36.7 | 10 | 33.3 | χ2(2) = 0.698 P = 0.705 |
+| | Contractual | 9 | 30 | 12 | 40 | |
+| | Plan-based | 10 | 33.3 | 8 | 26.7 | |
+| Work shiftb | Fixed | 1 | 3.3 | 2 | 6.7 | P = 1 |
+| | Rotating | 29 | 96.7 | 28 | 93.3 | |
+| Participation in training courses | Yes | 5 | 16.7 | 10 | 33.3 | χ2(1) = 2.222 P = 0.136 |
+| | No | 25 | 83.3 | 20 | 66.7 | |
+| Service records in NICU (year)a | 1> | 10 | 33.3 | 5 | 16.7 | χ2(2) = 4.602 P = 0.100 |
+| | 1–5 | 9 | 30 | 17 | 56.7 | |
+| | < 5 | 11 | 36.7 | 8 | 26.7 | |
+
+aChi-square test and bFisher's exact test
+"""
+
+# BMC Nursing 2021 (s12912-021-00599-y), Table 2, "Comparison of demographic and professional information of nurses in
+# the intervention and control groups", as published (https://bmcnurs.biomedcentral.com/articles/10.1186/s12912-021-00599-y/tables/2),
+# its first seven variables
+_NURSES_2021 = """Table 2 Comparison of demographic and professional information of nurses in the intervention and control groups
+
+| Variables | Groups | Intervention | | Control | | Statistic and P |
+|---|---|---|---|---|---|---|
+| | | n | % | n | % | |
+| Gender | Male | 5 | 16.70 | 5 | 16.70 | χ2 = 0.003 P = 0.99 |
+| | Female | 25 | 83.30 | 25 | 83.30 | |
+| Age groups | 20–40 | 25 | 83.30 | 24 | 80 | χ2 = 0.15 P = 0.64 |
+| | > 40 | 5 | 16.70 | 6 | 20 | |
+| Marital status | Single | 9 | 29.10 | 8 | 26.70 | χ2 = 1.06 P = 0.58 |
+| | Married | 21 | 70.90 | 22 | 73.30 | |
+| Work experience (year) | < 5 | 8 | 25.80 | 12 | 40 | Fisher's exact test = 3.86 P = 0.42 |
+| | 5–10 | 4 | 12.90 | 4 | 13.30 | |
+| | 11–15 | 12 | 41.90 | 6 | 20 | |
+| | 16–20 | 4 | 12.90 | 4 | 13.30 | |
+| | > 21 | 2 | 6.50 | 4 | 13.30 | |
+| Work position | Head nurse | 0 | 0 | 3 | 10 | Fisher's exact test = 3.26 P = 0.7 |
+| | Nurse | 30 | 100 | 27 | 90 | |
+| Shift work | Fixed | 1 | 3.20 | 2 | 6.70 | Fisher's exact test = 0.38 P = 0.53 |
+| | Rotated | 29 | 96.80 | 28 | 93.30 | |
+"""
+
+
+def _rows(text: str) -> list[list[str]]:
+    return [[c.strip() for c in line.strip().strip("|").split("|")] for line in text.splitlines()
+            if line.startswith("|") and not line.startswith("|---")]
+
+
+def _as_word(text: str, path) -> None:  # type: ignore[no-untyped-def]
+    """The Markdown table as its publisher lays it out in Word: the spanners merged over their two columns, the first and
+    last columns merged down each variable's rows, a test's P in a paragraph of its own under its statistic."""
+    lines = text.splitlines()
+    rows = _rows(text)
+    d = docx.Document()
+    d.add_paragraph(lines[0])
+    table = d.add_table(rows=len(rows), cols=len(rows[0]))
+    for i, row in enumerate(rows):
+        for j, value in enumerate(row):
+            parts = re.split(r" (?=P = )", value) if i > 1 else [value]
+            table.cell(i, j).text = parts[0]
+            for part in parts[1:]:
+                table.cell(i, j).add_paragraph(part)
+    for j in range(len(rows[0]) - 1):
+        if rows[0][j] and not rows[0][j + 1] and rows[1][j] and rows[1][j + 1]:
+            table.cell(0, j).merge(table.cell(0, j + 1))
+    starts = [i for i in range(2, len(rows)) if rows[i][0]] + [len(rows)]
+    for a, b in zip(starts, starts[1:]):
+        if b - a > 1:
+            for column in (0, len(rows[0]) - 1):
+                table.cell(a, column).merge(table.cell(b - 1, column))
+    for line in lines[1:]:
+        if line and not line.startswith("|"):
+            d.add_paragraph(line)
+    d.save(str(path))
+
+
+def _audit(tmp_path, text: str, form: str):  # type: ignore[no-untyped-def]
+    path = tmp_path / f"t.{form}"
+    if form == "md":
+        path.write_text(text, encoding="utf-8")
+    else:
+        _as_word(text, path)
+    return audit_file(path)
+
+
+def _by_test(entries) -> dict[str, set[str]]:  # type: ignore[no-untyped-def]
+    """Each entry's codes of the counts' kind, by the statistic's first characters (a χ² and its P read apart in Word
+    are one test)."""
+    out: dict[str, set[str]] = {}
+    for e in entries:
+        out.setdefault(e.found, set()).update(set(e.codes) & _COUNTS)
+    return out
+
+
+@pytest.mark.parametrize("form", ["md", "docx"])
+def test_a_published_tables_counts_in_columns_of_their_own_are_held_to_its_tests(tmp_path, form):
+    entries = _audit(tmp_path, _NURSES_2022, form)
+    read = [e for e in entries if any("the counts of" in n for n in e.notes)]
+    assert len(read) == 9  # every variable's counts read, each with its test (five χ² typed with df, two P alone)
+    assert all(any("in 2 groups' columns" in n for n in e.notes) for e in read)
+    flagged = {e.found: set(e.codes) & _COUNTS for e in entries if set(e.codes) & _COUNTS}
+    # every χ² and P follows from the counts (scipy: Pearson's χ² 5.496, 0.071, 0.111, 0.417, 0.698, 2.222, 4.602, their p as
+    # printed; Fisher's p 1 for both "P = 1" rows); one percent does not: 23 of 30 printed as 76.8% (76.67%)
+    assert list(flagged.values()) == [{"percent-does-not-fit"}]
+    message = next(e.message for e in entries if "percent-does-not-fit" in e.codes)
+    assert "23 / 30 is 76.7%, not 76.8%" in message
+    before = chi2_contingency([[17, 4, 9], [22, 6, 2]], correction=False)
+    assert round(before[0], 3) == 5.496 and round(before[1], 3) == 0.064  # (the truth the first row is held to)
+
+
+@pytest.mark.parametrize("form", ["md", "docx"])
+def test_a_published_tables_inconsistent_counts_are_found(tmp_path, form):
+    entries = _audit(tmp_path, _NURSES_2021, form)
+    codes = _by_test(entries)
+    first = lambda start: set().union(*(v for k, v in codes.items() if k.startswith(start)))  # noqa: E731
+    # identical groups (5/25 and 5/25) give χ² = 0, p = 1, not 0.003 and 0.99 (scipy)
+    assert chi2_contingency([[5, 25], [5, 25]], correction=False)[0] == 0.0
+    assert "counts-do-not-fit" in first("χ2 = 0.003")
+    # 25/5 vs 24/6: χ² = 0.111 (p .739), not 0.15 (p .64); its percents one decimal padded to two, 83.30 for 83.3: not said
+    assert round(chi2_contingency([[25, 5], [24, 6]], correction=False)[0], 3) == 0.111
+    assert first("χ2 = 0.15") == {"counts-do-not-fit", "p-does-not-follow"} if form == "md" else first("χ2 = 0.15") >= {"counts-do-not-fit"}
+    # 9 and 21 of 30 printed as 29.1% and 70.9%; χ² 0.082 from the counts, not 1.06
+    assert {"percent-does-not-fit", "counts-do-not-fit"} <= first("χ2 = 1.06")
+    # the 2 × 5 table's P is Fisher's (Freeman–Halton), which the cell names: not held to the χ² tests; its percents are of
+    # 31 (8 / 31 is 25.8%), its counts sum to 30
+    work = next(e for e in entries if e.found.endswith("P = 0.42") or e.found == "P = 0.42")
+    assert "percent-does-not-fit" in work.codes and "counts-do-not-fit" not in work.codes
+    assert "8 / 30 is 26.7%, not 25.8%" in work.message
+    # 0/30 vs 3/27: Fisher's p = 0.237 (scipy), χ² p = .076; not 0.7
+    assert round(fisher_exact([[0, 30], [3, 27]])[1], 3) == 0.237
+    assert "counts-do-not-fit" in first("P = 0.7")
+    # 1/29 vs 2/28: Fisher's p = 1, χ² p = .554; not 0.53; and 1 of 30 printed as 3.2% (3.3%)
+    assert {"counts-do-not-fit", "percent-does-not-fit"} <= first("P = 0.53")
+
+
+def _random_table(rng: random.Random, move: str = "") -> str:
+    """A random Table 1 of two or three groups, each group's count and percent in two columns (percents of the column's
+    counts or of the group's n, 0–2 decimals, sometimes padded with a zero), each variable's test typed in one cell: a χ²
+    with or without its df (with Yates's correction now and then), a P alone (of the χ² or Fisher's test), or a Fisher's
+    P of a larger table (any p: not checkable); or, in one header row ("Intervention n | Intervention % | … | P"), each
+    variable's p alone in the P column. ``move``: one percent or one p moved."""
+    groups = rng.choice([2, 2, 3])
+    sizes = [rng.randint(15, 400) for _ in range(groups)]
+    places, padded, basis = rng.choice([0, 1, 1, 2]), rng.random() < 0.2, rng.choice(["column", "column", "n"])
+    count_head, percent_head = rng.choice([("Number", "%"), ("n", "%"), ("No.", "(%)"), ("n", "Percent")])
+    names = ["Intervention", "Control", "Waitlist"][:groups]
+    single = rng.random() < 0.3
+    lines = ["| " + " | ".join(["Variable", "Category", *(x for g, n in zip(names, sizes) for x in (f"{g} (n = {n})", "")), "Test"]) + " |",
+             "|" + "---|" * (3 + 2 * groups), "| | | " + " | ".join(f"{count_head} | {percent_head}" for _ in names) + " | |"]
+    if single:
+        lines = ["| " + " | ".join(["Variable", "Category", *(x for g in names for x in (f"{g} {count_head}", f"{g} {percent_head}")), "P"]) + " |",
+                 "|" + "---|" * (3 + 2 * groups)]
+    for v in range(rng.randint(2, 6)):
+        k = rng.choice([2, 2, 3, 4])
+        probs = np.array([rng.random() + 0.2 for _ in range(k)])
+        table = np.array([np.random.default_rng(rng.randrange(10**9)).multinomial(n, probs / probs.sum()) for n in sizes]).T
+        if (table.sum(axis=1) == 0).any():
+            continue
+        kind = "p" if single else rng.choice(["chi df", "chi", "p", "fisher" if table.shape == (2, 2) else "fisher rc"])
+        chi, p, df, _ = chi2_contingency(table, correction=table.shape == (2, 2) and rng.random() < 0.3)
+        p = fisher_exact(table)[1] if kind == "fisher" else rng.random() if kind == "fisher rc" else p
+        printed = f"{p:.{rng.choice([2, 3, 3])}f}"
+        printed = printed if float(printed) else f"{p:.3f}"
+        printed = printed if float(printed) else "< 0.001"
+        if move == "p" and v == 0 and kind != "fisher rc" and printed[0] != "<":
+            printed = f"{min(0.99, float(printed) * rng.choice([0.3, 2.5, 4])):.3f}"
+        test = {"chi df": f"χ2({df}) = {chi:.{rng.choice([2, 3])}f} P = {printed}", "chi": f"χ2 = {chi:.{rng.choice([2, 3])}f}, P = {printed}",
+                "p": f"P = {printed}", "fisher": f"Fisher's exact test P = {printed}", "fisher rc": f"Fisher's exact test P = {printed}"}[kind]
+        test = test.replace("= <", "<") if not single else printed
+        for i in range(k):
+            cells = []
+            for j in range(groups):
+                share = 100 * table[i, j] / (table[:, j].sum() if basis == "column" else sizes[j])
+                shown = f"{share:.{places}f}"
+                if padded and places:
+                    shown = f"{float(f'{share:.{places - 1}f}'):.{places}f}"
+                if move == "percent" and v == i == j == 0:
+                    shown = f"{share + rng.choice([-1, 1]) * rng.choice([1.5, 3, 7]):.{places}f}"
+                cells.append(f"{table[i, j]} | {shown}")
+            lines.append(f"| {f'Variable {v}' if i == 0 else ''} | category {i} | " + " | ".join(cells) + f" | {test if i == 0 else ''} |")
+    return "Table 1 Characteristics by group\n\n" + "\n".join(lines) + "\n"
+
+
+def test_random_tables_of_counts_in_columns_of_their_own(tmp_path):
+    rng = random.Random(32)
+    clean = [_random_table(rng) for _ in range(150)]
+    assert not [t for t in clean if {c for e in _audit(tmp_path, t, "md") for c in e.codes} & _COUNTS]
+    moved = [_random_table(rng, "percent") for _ in range(60)]
+    assert sum(bool({c for e in _audit(tmp_path, t, "md") for c in e.codes} & _COUNTS) for t in moved) >= 57
+    moved = [_random_table(rng, "p") for _ in range(60)]
+    assert sum(bool({c for e in _audit(tmp_path, t, "md") for c in e.codes} & _COUNTS) for t in moved) >= 40
+    for text in clean[:25]:  # as Word tables (merged heads and test cells, the P in a paragraph of its own): read alike
+        md = sorted(c for e in _audit(tmp_path, text, "md") for c in e.codes if c in _COUNTS)
+        assert sorted(c for e in _audit(tmp_path, text, "docx") for c in e.codes if c in _COUNTS) == md
