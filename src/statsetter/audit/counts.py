@@ -21,7 +21,7 @@ from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, Reported, p_text
 from .reading import Unit
-from .tables import _TOTAL_HEAD, WHOLE_COUNT, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, MEANS_SAID, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -85,8 +85,16 @@ def _size_cell(text: str) -> int | None:
     return int(re.sub(r"\D", "", m.group(1))) if m is not None else None
 
 
-# a row whose label says it gives a mean and SD, a median and IQR or a range: "45 (12)" is no count and its percent
-_NOT_COUNTS = re.compile(r"(?i)\bmean\b|\bSD\b|median|\bIQR\b|interquartile|\brange\b|±|\bM\s*\(")
+# what says a table's "17 (19.1)" cells may be counts with their percents
+_COUNTS_SAID = re.compile(r"(?i)%|\bn\s*\(|percent|frequenc|\bcounts?\b|\bnumbers?\b|\bno\.")
+
+
+def _means_said(text: str) -> bool:
+    """Whether a head (or a caption, note and heads) says its "17 (19.1)" cells are means with their SDs, and nothing of
+    counts."""
+    return MEANS_SAID.search(text) is not None and _COUNTS_SAID.search(text) is None
+
+
 # survey weights: the percents are weighted and the test design-based (Rao–Scott), neither the counts' own
 _WEIGHTED = re.compile(r"(?i)\bweight(?:ed|s)\b|rao[-–\s]?scott|design[- ]based|complex\s+survey|survey[- ]adjusted")
 
@@ -111,6 +119,11 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     percents are the counts' shares (of their column, their group's n or their row) or make up 100 (_shares); nothing
     where the caption, note (``said``) or a head says the figures are weighted (a survey's design-based test)."""
     top = min((r for r, _, _, _ in cells), default=0)
+    opening = " ".join([said, *(u.text for r, _, u, _ in cells if r == top)])
+    if _means_said(opening):  # ("M (SD)" said of the table by its caption, note or heads, and nothing of counts by them or its rows'
+        labels = {r: c for r, c, _, _ in sorted(cells, key=lambda x: (x[0], -x[1]))}  # labels: "17 (19.1)" is a mean and its SD)
+        if not any(_COUNTS_SAID.search(u.text) for r, c, u, _ in cells if labels[r] == c):
+            return []
     if _WEIGHTED.search(said) or any(_WEIGHTED.search(u.text) for r, _, u, _ in cells if r == top):  # (a head: "n (weighted %)"; a row's
         return []  # label — "Birth weights" — says nothing of the figures)
     rows = cell_grid(cells)
@@ -154,9 +167,9 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
             chi_col = next((c for c, u in row.items() if _CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text)), chi_col)
             continue
         apart = (p_col, chi_col, *pairs.values())
-        counts = {c: got for c, u in row.items() if c != first and c not in apart
+        counts = {c: got for c, u in row.items() if c != first and c not in apart and not _means_said(heads.get(c, ""))
                   and (got := _paired_cell(u, row.get(pairs[c])) if c in pairs else count_cell(u.text)) is not None} \
-            if _NOT_COUNTS.search(row[first].text) is None else {}
+            if NOT_COUNTS.search(row[first].text) is None else {}
         if counts or block:  # a zero count typed without its percent beside counts with theirs ("Dissatisfied | 0 | 1 (4.5)"), or a
             counts.update({c: (0, 0.0, 0.5) for c, u in row.items() if c != first and c not in apart and c not in counts
                            and u.text.strip() == "0"})  # row of zeros among a variable's rows: 0 (0%), the category's row, not the

@@ -19,7 +19,7 @@ from typing import Sequence
 from .checks import Finding
 from .parsing import Number, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, COUNT_CELL, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, MEANS_SAID, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
 
 # a mean with its SD, "45.3 ± 6.2", "10.07 ±4.80", "3.2 +/- 0.5"
 _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)\s*(?P<sd>\d+(?:[.,]\d+)?)\s*[a-d*†‡]*\s*")
@@ -45,8 +45,54 @@ class GroupMeans:
     welch: bool = False  # the caption or note names Welch's test: an F of more than two groups is Welch's ANOVA's, not held
 
 
-def _read(text: str) -> tuple[float, float, float, float] | None:
-    m = _MEAN_SD.fullmatch(text)
+# a mean with its SD in parentheses, "45.3 (6.2)" — read so only where the table says its cells are means and SDs
+_MEAN_PAREN = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*\(\s*(?P<sd>\d+(?:[.,]\d+)?)\s*\)\s*[a-d*†‡]*\s*")
+# and what says such cells may be something else: counts with their percents, medians with their IQRs, standard errors
+_NOT_MEANS_SAID = re.compile(r"(?i)%|\bn\s*\(|percent|frequenc|median|\bIQR\b|interquartile|\bSEM?\b|standard\s+error")
+# a header row that gives each group's mean and SD in two columns of their own: "M | SD | M | SD", "Mean | S.D."
+_M_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*\b(?:M|mean)\s*")
+_SD_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*\(?\s*\b(?:SD|S\.\s?D\.|std\.?\s*dev(?:iation)?\.?)\s*\)?\s*")  # ("(SD)" over "(2.0)")
+
+
+def _paired_columns(row: dict[int, Unit]) -> dict[int, int]:
+    """A header row's mean columns, each with its SD's column next to it, where the row pairs two groups or more so."""
+    columns = sorted(row)
+    pairs = {a: b for a, b in zip(columns, columns[1:]) if (m := _M_HEAD.fullmatch(row[a].text)) is not None
+             and (sd := _SD_HEAD.fullmatch(row[b].text)) is not None and m.group("group").lower() == sd.group("group").lower()}
+    return pairs if len(pairs) >= 2 else {}
+
+
+_N_HEAD = re.compile(r"\s*[nN]\s*")
+_WHOLE = re.compile(r"\s*(\d{1,3}(?:,\d{3})+|\d+)\s*")
+
+
+def _counted_columns(row: dict[int, Unit], pairs: dict[int, int]) -> dict[int, int]:
+    """Each group's n column right after its SD's ("M | SD | n | M | SD | n"), by its mean's column; nothing unless every
+    group has one."""
+    columns = sorted(row)
+    after = {a: b for a, b in zip(columns, columns[1:])}
+    counted = {m: after[sd] for m, sd in pairs.items() if sd in after and _N_HEAD.fullmatch(row[after[sd]].text)}
+    return counted if len(counted) == len(pairs) else {}
+
+
+def _group_cell(row: dict[int, Unit], column: int, pairs: dict[int, int], parenthesised: bool) -> tuple[float, float, float, float] | None:
+    """A group's mean and SD in a row: "M ± SD" in its cell, "M (SD)" where the table says its cells are so, or the mean
+    and SD in two columns of their own."""
+    if column in pairs:
+        mean, sd = row.get(column), row.get(pairs[column])
+        if mean is None or sd is None:
+            return None
+        spread = sd.text.strip()
+        spread = spread[1:-1] if spread[:1] == "(" and spread[-1:] == ")" else spread
+        return _read(f"{mean.text} ± {spread}") if "(" not in mean.text + spread else None
+    cell = row.get(column)
+    if cell is None:
+        return None
+    return _read(cell.text) or (_read(cell.text, _MEAN_PAREN) if parenthesised else None)
+
+
+def _read(text: str, pattern: re.Pattern[str] = _MEAN_SD) -> tuple[float, float, float, float] | None:
+    m = pattern.fullmatch(text)
     if m is None:
         return None
     mean, sd = (m.group(g).replace("−", "-").replace("–", "-").replace(" ", "").replace(",", ".") for g in ("m", "sd"))
@@ -60,7 +106,8 @@ def _half(typed: str) -> float:
 def _rows(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: str) -> dict[int, dict[int, Unit]]:
     """The table's cells by row and column; none where no cell gives a mean ± SD, or the caption or note (``said``) names
     a paired design, or it or a head says the ± is a standard error."""
-    if not any("±" in u.text or "+/-" in u.text for _, _, u, _ in cells) or _PAIRED.search(said) or _SE_SAID.search(said) or \
+    if not any("±" in u.text or "+/-" in u.text or MEANS_SAID.search(u.text) or _M_HEAD.fullmatch(u.text) for _, _, u, _ in cells) and \
+            not MEANS_SAID.search(said) or _PAIRED.search(said) or _SE_SAID.search(said) or \
             any(_SE_SAID.search(u.text) for _, _, u, _ in cells if not _read(u.text)):
         return {}
     return cell_grid(cells)
@@ -75,6 +122,10 @@ def group_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: st
     out: list[GroupMeans] = []
     groups: list[tuple[int, int]] = []  # (column, n) of the groups under the latest header
     stat_col = None
+    pairs: dict[int, int] = {}  # each group's mean column with its SD's, where the two stand apart
+    counted: dict[int, int] = {}  # (and with its n's, where each row gives the groups' n: "M | SD | n")
+    heads = said  # what the caption, note and header rows say (whether "45.3 (6.2)" is a mean with its SD)
+    mixed = False  # the test's column holds a t or a χ² by the row ("t/χ2")
 
     def sized_heads(row: dict[int, Unit]) -> list[tuple[int, int]]:
         sized = [(c, s[0]) for c, u in sorted(row.items()) if len(s := sizes_in(u.text)) == 1 and not _TOTAL_HEAD.match(u.text)]
@@ -86,21 +137,35 @@ def group_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: st
         if any(role in ("t", "F", "mixed:t") for role in roles.values()) and not any(_read(u.text) for u in row.values()):
             if _OCCASIONS.search(" ".join(u.text for u in row.values())):
                 return []  # (a header naming the occasions: "Baseline (n = 41) | Follow-up (n = 36)")
-            groups = sized_heads(row)
+            paired, sized = _paired_columns(row), sized_heads(row)
+            counted = _counted_columns(row, paired)
+            if sized or not paired or not groups:  # (a row of "Mean | (SD) | Mean | (SD) | t | P" under the groups' heads keeps them)
+                groups, heads = sized or [(c, 0) for c in counted], said
             stat_col = next((c for c, role in roles.items() if role in ("t", "F", "mixed:t")), None)
+            heads, pairs = " ".join([heads, *(u.text for u in row.values())]), paired
+            mixed = roles.get(stat_col) == "mixed:t"  # type: ignore[arg-type]
             continue
         if not groups and stat_col is not None and not any(_read(u.text) for u in row.values()):  # a second header row with
             if _OCCASIONS.search(" ".join(u.text for u in row.values())):  # the groups' n ("Group (mean ± SD) | t" above
                 return []  # "Control group (n = 30) | Intervention group (n = 30)", PMC12588921)
             groups = sized_heads(row)
+            heads += " " + " ".join(u.text for u in row.values())
+            continue
+        if groups and (paired := _paired_columns(row)):  # "M | SD | M | SD" under the groups' heads
+            pairs, counted = paired, _counted_columns(row, paired)
             continue
         if len(groups) < 2 or stat_col is None or stat_col not in row:
             continue
-        read = [_read(row[c].text) if c in row else None for c, _ in groups]
-        if any(x is None for x in read):
+        label = row[min(row)].text  # ("45.3 (6.2)": a mean and SD where the heads or the row's label say so, and nothing says counts)
+        parenthesised = any(MEANS_SAID.search(x) and not _NOT_MEANS_SAID.search(x) for x in (label, *(() if mixed else (heads,))))  # (in a
+        # "t/χ2" column's table, a row of counts may stand under the same heads: there only a row's own label says so)
+        read = [_group_cell(row, c, pairs, parenthesised) for c, _ in groups]
+        sizes = [int(m.group(1).replace(",", "")) if c in counted and c in row and (m := _WHOLE.fullmatch(row[counted[c]].text if counted[c] in row else ""))
+                 else n for c, n in groups]  # (each row's own n where it gives them)
+        if any(x is None for x in read) or any(n < 2 for n in sizes):
             continue
-        typed = " vs ".join(row[c].text.strip() for c, _ in groups)
-        out.append(GroupMeans(row[stat_col], tuple((*x, n) for x, (_, n) in zip(read, groups)), typed))  # type: ignore[misc]
+        typed = " vs ".join(row[c].text.strip() + (f" ({row[pairs[c]].text.strip().strip('()')})" if c in pairs else "") for c, _ in groups)
+        out.append(GroupMeans(row[stat_col], tuple((*x, n) for x, n in zip(read, sizes)), typed))  # type: ignore[misc]
     return out
 
 

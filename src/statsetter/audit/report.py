@@ -309,8 +309,9 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                                        labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
-        if any("(" in u.text or "±" in u.text or "%" in u.text or "ercent" in u.text for _, _, u, _ in cells):  # (a count's cell has its
-            # percent in parentheses, or a column of its own under "%"; a mean its ±)
+        if any("(" in u.text or "±" in u.text or "%" in u.text or "ercent" in u.text or "SD" in u.text or "S.D" in u.text or "td" in u.text
+               for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses, or a column of its own under "%"; a mean
+            # its ± or (SD), or a column of its own under "SD")
             tests = count_tests(cells, mark, said) + fraction_tests(cells)
             typed = {id(t.typed) for t in tests if t.typed is not None}  # (tests typed whole in a cell: their cells' statistics)
             items = _with_counts(items, tests, context)

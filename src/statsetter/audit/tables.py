@@ -555,6 +555,16 @@ def cell_grid(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> dict[in
     return rows
 
 
+# a row whose label says it gives a mean and SD, a median and IQR or a range: "45 (12)" is no count and its percent
+NOT_COUNTS = re.compile(r"(?i)\bmean\b|\bSD\b|median|\bIQR\b|interquartile|\brange\b|±|\bM\s*\(")
+
+
+# what says a table's "45.3 (6.2)" cells are means with their SDs: "M (SD)", "Mean (SD)", "means (standard deviations)",
+# "means and SDs", "M/SD"
+MEANS_SAID = re.compile(r"(?i)\b(?:M|means?)\s*\(\s*(?:SDs?|S\.\s?D\.|standard\s+deviations?)\s*\)|\bmeans?\s+and\s+(?:SDs?|standard\s+deviations?)\b|"
+                        r"\bM\s*/\s*SD\b")
+
+
 def count_cell(text: str) -> tuple[int, float, float] | None:
     """A cell's count and its percent with the percent's half unit, "287 (5.7%)": (287, 5.7, 0.05); None for a cell that
     is not a count with its percent."""
@@ -1077,7 +1087,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 role = "chi2" if _CHI_ROW.fullmatch(row[min(row)][0].text) else _named_test(row, c)
             elif role.startswith("mixed:"):  # "χ2/Z": χ² in a categorical variable's row — counts in it, or it names the variable
                 # (nothing but its test) and the row after it has counts —, the other test elsewhere
-                counted = any(COUNT_CELL.fullmatch(u.text) for u, _ in row.values())
+                counted = any(COUNT_CELL.fullmatch(u.text) for u, _ in row.values()) and not NOT_COUNTS.search(row[min(row)][0].text)
                 if not counted and not any(u.text.strip() for k, (u, _) in row.items() if k not in (min(row), c) and roles.get(k) != "p"):
                     k = bisect.bisect_right(order, r)
                     after = rows[order[k]] if k < len(order) else {}
