@@ -11,11 +11,12 @@ less the count). Group columns are those whose cells give counts; a total column
 
 from __future__ import annotations
 
+import functools
 import math
 import re
 from decimal import ROUND_HALF_UP, Decimal
 from dataclasses import dataclass, replace
-from typing import NamedTuple, Sequence
+from typing import Iterator, NamedTuple, Sequence
 
 from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
@@ -38,6 +39,7 @@ class CountTest:
     how: str  # where the counts were read
     percents: tuple[str, ...] = ()  # what the percents are shares of, then each that is not its count's share
     other: str = ""  # a test the caption or note names that a table larger than 2 × 2 may have had instead (a trend test)
+    exact: bool = False  # every test it names is Fisher's exact test (of a larger table: Freeman–Halton's), computed here
     df: int = 0  # (r − 1)(k − 1) of the counts
     typed: Reported | None = None  # the statistic as typed whole in its cell, where the test is one (rep its χ² with its p)
 
@@ -207,8 +209,14 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
         if test is not None:
             out.append(test)
     other = _OTHER_TEST.search(said)  # (not for a χ² typed with the df of the counts' usual test: "χ2(2) = 5.496" is that test's)
-    return [t if t.typed is not None and t.typed.symbol == "chi2" and t.typed.df and t.typed.df[0].value == t.df else replace(t, other=other.group())
-            for t in out] if other is not None else out
+    return [t if t.typed is not None and t.typed.symbol == "chi2" and t.typed.df and t.typed.df[0].value == t.df else
+            replace(t, other=other.group(), exact=_exact_only(said)) for t in out] if other is not None else out
+
+
+def _exact_only(text: str) -> bool:
+    """Whether every other test a caption, note or cell names is Fisher's exact test ("Fisher's exact test", "exact test",
+    "Freeman–Halton"): then a larger table's p is held to it too, as computed here."""
+    return all(m.group().lower().startswith(("fisher", "exact", "freeman")) for m in _OTHER_TEST.finditer(text))
 
 
 def _typed_test(typed_at: dict[tuple[int, int], list[tuple[Unit, Reported | None]]], r: int,
@@ -345,7 +353,8 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
     if typed is not None:  # (the χ² or p as read from its cell, with its df where typed: the item's own statistic)
         df = (len(table) - 1) * (len(groups) - 1)
         named = _OTHER_TEST.search(typed[2])  # ("Fisher's exact test = 3.86 P = 0.42": a larger table's exact test)
-        return CountTest(typed[0], typed[1], counts, _how(table, groups, block, paired, counts, df), percents, named.group() if named else "", df, typed[3])
+        return CountTest(typed[0], typed[1], counts, _how(table, groups, block, paired, counts, df), percents, named.group() if named else "", named is not None and _exact_only(typed[2]),
+                         df, typed[3])
     p_unit = anchor.get(p_col) if p_col is not None else None
     chi_unit = anchor.get(chi_col) if chi_col is not None else None
     p = _p_cell(p_unit.text, mark) if p_unit is not None and p_unit.text.strip() else None
@@ -506,23 +515,89 @@ def fisher_2x2(table: Sequence[Sequence[int]]) -> float:
     return min(1.0, sum(math.exp(q) for x in range(low, high + 1) if (q := log_p(x)) <= observed + 1e-7))
 
 
+def fisher_rxc(table: Sequence[Sequence[int]], budget: int = 150_000) -> float | None:
+    """Fisher's exact test of an r × c table (Freeman and Halton's): the probability of the tables with the observed
+    margins no more likely than the observed one (R's fisher.test, relative tolerance 1e-7), summed column by column
+    over the table's remaining row totals; a branch whose completions are all, or none, at most as likely as the
+    observed table is summed, or dropped, whole (the most and least likely completion of each state, found once), as in
+    Mehta and Patel's network algorithm. None where that would take more than ``budget`` column vectors (a large table:
+    then not computed)."""
+    columns = [list(c) for c in zip(*table) if sum(c)]
+    columns = [list(c) for c in zip(*[r for r in zip(*columns) if sum(r)])] if columns else []  # (empty rows and columns dropped)
+    if len(columns) < 2 or len(columns[0]) < 2:
+        return 1.0
+    if len(columns[0]) > len(columns):  # (the state is a column's height: the smaller side)
+        columns = [list(r) for r in zip(*columns)]
+    columns.sort(key=sum)  # (small columns first: fewer branches near the root)
+    sizes = [sum(c) for c in columns]
+    totals = tuple(sum(c[i] for c in columns) for i in range(len(columns[0])))
+    lf = [math.lgamma(i + 1) for i in range(sum(totals) + 1)]
+    log_all = lf[sum(totals)] - sum(lf[t] for t in totals)  # (every table's weight Π_j C_j! / Π x_ij! sums to N! / Π R_i!)
+    threshold = sum(lf[n] - sum(lf[x] for x in c) for n, c in zip(sizes, columns)) + math.log1p(1e-7)
+    last, work = len(columns) - 1, [0]
+
+    def vectors(total: int, caps: tuple[int, ...]) -> "Iterator[tuple[int, ...]]":
+        if len(caps) == 1:
+            if total <= caps[0]:
+                yield (total,)
+            return
+        rest = sum(caps[1:])
+        for x in range(max(0, total - rest), min(caps[0], total) + 1):
+            for tail in vectors(total - x, caps[1:]):
+                yield (x, *tail)
+
+    def steps(j: int, left: tuple[int, ...]) -> "Iterator[tuple[float, tuple[int, ...]]]":
+        for x in vectors(sizes[j], left):
+            work[0] += 1
+            if work[0] > budget:
+                raise _TooLarge
+            yield lf[sizes[j]] - sum(lf[a] for a in x), tuple(r - a for r, a in zip(left, x))
+
+    @functools.lru_cache(maxsize=None)
+    def bounds(j: int, left: tuple[int, ...]) -> tuple[float, float]:  # the least and most likely completions' log weights
+        if j == last:
+            w = lf[sizes[j]] - sum(lf[x] for x in left)
+            return w, w
+        found = [(w + b[0], w + b[1]) for w, rest in steps(j, left) for b in (bounds(j + 1, rest),)]
+        return min(f[0] for f in found), max(f[1] for f in found)
+
+    def walk(j: int, left: tuple[int, ...], so_far: float) -> float:
+        low, high = bounds(j, left)
+        if so_far + high <= threshold:  # every completion counts: their weights sum to m! / Π r_i!
+            return math.exp(so_far + lf[sum(left)] - sum(lf[x] for x in left) - log_all)
+        if so_far + low > threshold:
+            return 0.0
+        return sum(walk(j + 1, rest, so_far + w) for w, rest in steps(j, left))
+
+    try:
+        return min(1.0, walk(0, totals, 0.0))
+    except _TooLarge:
+        return None
+
+
+class _TooLarge(Exception):
+    """An exact test's enumeration beyond its budget."""
+
+
 def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
     """The table's χ² and p against its counts: the χ² one of Pearson's, Yates's (2 × 2) or the likelihood ratio's, each
-    on (r − 1)(k − 1) df; the p one of theirs or Fisher's exact test's (2 × 2) — with the printed precision of each; and
+    on (r − 1)(k − 1) df; the p one of theirs or Fisher's exact test's (2 × 2; of a larger table where the caption, note
+    or cell names it and the table is small enough to enumerate: fisher_rxc) — with the printed precision of each; and
     each percent its count's share."""
     rep, counts = test.rep, test.counts
     out = [Finding("percent-does-not-fit", f"A percent is not its count's share {test.percents[0]}: " + "; ".join(test.percents[1:]) + ".",
                    ", ".join(f"{part.split(' / ')[0]} ({part.rsplit('not ', 1)[1]})" for part in test.percents[1:]))] if test.percents else []
     table = _trimmed(counts)
-    if len(table) < 2 or len(table[0]) < 2 or (test.other and len(table) * len(table[0]) > 4):  # (a table larger than 2 × 2
-        return out  # whose test the note says may be another: a trend test, a rank test of ordered categories)
+    larger = len(table) * len(table[0]) > 4 if len(table) >= 2 and len(table[0]) >= 2 else False
+    if len(table) < 2 or len(table[0]) < 2 or (test.other and larger and not test.exact):  # (a table larger than 2 × 2 whose test the
+        return out  # note says may be another: a trend test, a rank test of ordered categories)
     df = (len(table) - 1) * (len(table[0]) - 1)
     two = len(table) == 2 and len(table[0]) == 2
     methods = {"Pearson's χ²": pearson(table), "the likelihood-ratio χ²": likelihood_ratio(table)}
     if two:
         methods["Yates's χ²"] = pearson(table, yates=True)
     value = rep.value
-    if value is not None and rep.symbol == "chi2":
+    if value is not None and rep.symbol == "chi2" and not (test.other and larger):  # (beside a named exact test, a larger table's
         low, high = value.value - value.half_unit, value.value + value.half_unit
         if not any(low - 1e-9 * max(1.0, x) <= x <= high + 1e-9 * max(1.0, x) for x in methods.values()):
             said = "; ".join(f"{name} {_shown(x)}" for name, x in methods.items())
@@ -536,10 +611,17 @@ def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
             # tables as the smaller margin's count; beyond 50,000 the χ² tests stand for it)
             ps["Fisher's exact test"] = fisher_2x2(table)
             fits = reported[0] - 1e-12 <= ps["Fisher's exact test"] <= reported[1] + 1e-12
+        exact = fisher_rxc(table) if larger and test.exact and not fits else None
+        if larger and test.exact and not fits and exact is None:
+            return out  # (too large to enumerate here: not held)
+        if exact is not None:
+            ps["Fisher's exact test (Freeman–Halton)"] = exact
+            fits = reported[0] - 1e-12 <= exact <= reported[1] + 1e-12
         if not fits:
             said = "; ".join(f"{name} p = {_small(q)}" for name, q in ps.items())
             out.append(Finding("counts-do-not-fit", f"The p does not follow from the table's counts by the usual tests of a {len(table)} × {len(table[0])} "
-                                                    f"table ({said}); if another test gave it (a trend test, an exact test of a larger table), the note should say so.",
+                                                    f"table ({said}); if another test gave it (a trend test"
+                                                    + (", an exact test of a larger table" if larger and exact is None else "") + "), the note should say so.",
                                f"{p_text(rep.p).lstrip(', ')}; counts {_counts_text(counts)}"))  # type: ignore[arg-type]
     return out
 

@@ -343,7 +343,9 @@ def _with_counts(items: list[_Item], tests: "list[CountTest]", context: str) -> 
     by_rep = {id(it.rep): k for k, it in enumerate(items)}  # (a test typed whole in a cell: the cell's own statistic)
     for test in tests:
         if test.other and test.counts and len(test.counts) * len(test.counts[0]) > 4:  # (said, never silent; not of a block without a test)
-            test = replace(test, how=f"{test.how}; not held to them: the caption or note names {test.other!r}, which a table larger than 2 × 2 may have had")
+            test = replace(test, how=f"{test.how}; " + (f"its p held to Fisher's exact test of the whole table as well, which the table names ({test.other!r}), "
+                                                        "where the table is small enough to enumerate" if test.exact else
+                                                        f"not held to them: the caption or note names {test.other!r}, which a table larger than 2 × 2 may have had"))
         df = test.df
         reading = (Reading((df,), f"df = {df:g}, (categories − 1) × (groups − 1) of the counts in its rows"),) if df else ()
         k = by_rep.get(id(test.typed), by_unit.get(id(test.unit)))
