@@ -282,3 +282,26 @@ def test_fishers_exact_test_of_a_larger_table():
         if min(map(sum, table)) and min(map(sum, zip(*table))):
             assert math.isclose(fisher_rxc(table), fisher_exact(table)[1], rel_tol=1e-9)  # type: ignore[arg-type]
     assert fisher_rxc([[14, 24, 39], [27, 27, 19], [15, 17, 24]]) is None  # (3 × 3, 206 subjects: beyond the budget)
+
+
+def test_a_published_tables_fisher_ps_of_larger_tables_and_its_groups_sizes(tmp_path):
+    """BMC Med Educ 2019's Table 2 (tests/test_audit_descriptive.py, cited there) names Fisher's exact test for its 5- and
+    3-category variables (2 × 4 and 2 × 3 once the empty categories are left out): its printed p's, 0.090 and 0.547, are
+    Freeman–Halton's exact p's of its counts (0.0901 and 0.5467, listed), not Pearson's (0.162 and 0.447) — before, such
+    p's were left unchecked; now they are held and read clean. Its caption's N = 42 is two fewer than its groups' heads,
+    22 + 22: said (`sizes-do-not-add`). Subgroups that do not exhaust their total (a genetics table's "Anencephaly (N =
+    123) | Spina bifida (N = 115) | Total NTDs (N = 263)") are not."""
+    from test_audit_context import _GENES_ENV_TABLE
+    from test_audit_descriptive import _BMC_MED_EDUC
+
+    assert round(_enumerated([[1, 1], [15, 8], [6, 12], [0, 1]]), 4) == 0.0901
+    assert round(_enumerated([[9, 12], [12, 10], [1, 0]]), 4) == 0.5467
+    assert round(chi2_contingency([[1, 1], [15, 8], [6, 12], [0, 1]])[1], 3) == 0.162
+    entries = _audit(tmp_path, _BMC_MED_EDUC, "md")
+    held = [e for e in entries if any("Fisher's exact test of the whole table" in n for n in e.notes)]
+    assert [e.found for e in held] == ["p = 0.090", "p = 0.547"] and not [c for e in held for c in e.codes]
+    sizes = [e for e in entries if "sizes-do-not-add" in e.codes]
+    assert len(sizes) == 1 and "add up to 44 (22 + 22), more than the N = 42 the caption gives" in sizes[0].message
+    moved = _audit(tmp_path, _BMC_MED_EDUC.replace("| 5.21a | 0.090 |", "| 5.21a | 0.300 |"), "md")
+    assert any("counts-do-not-fit" in e.codes and "Freeman–Halton) p = 0.09007" in e.message for e in moved)
+    assert not [e for e in _audit(tmp_path, _GENES_ENV_TABLE, "md") if "sizes-do-not-add" in e.codes]

@@ -100,7 +100,7 @@ CODES: dict[str, tuple[str, str]] = {
     ),
     "counts-do-not-fit": (
         "a table's χ² or p that no usual test of its counts gives: Pearson's χ², Yates's (2 × 2), the likelihood-ratio χ², each on "
-        "(r − 1)(k − 1) df, or Fisher's exact test (2 × 2)",
+        "(r − 1)(k − 1) df, or Fisher's exact test (2 × 2; of a larger table where the table names it)",
         "Chi-square test of independence: χ² = Σ (O − E)²/E on (r − 1)(k − 1) df, E = row total × column total / N (definition; "
         "Yates's correction and Fisher's exact test as R's chisq.test and fisher.test compute them); a test other than these is "
         "named in the note (practice)",
@@ -115,6 +115,11 @@ CODES: dict[str, tuple[str, str]] = {
         "a table's percent that is not its count's share of its column, its group's n or its row, whichever the table's other "
         "percents are",
         "Descriptives: categorical variables as n (%) (APA 7 §7.21 sample tables; JARS-Quant) — the percent is n over its whole (definition)",
+    ),
+    "sizes-do-not-add": (
+        "a table's groups' n in its heads that add up to more than the total its total column's head or its caption gives",
+        "Participant flow: every participant counted once, those left out said with the reason (CONSORT 2010 item 13; "
+        "JARS-Quant, participant flow) — recalled from memory; the arithmetic is definition",
     ),
     "d-does-not-fit": (
         "d (or g, d_z) does not follow from t and the group sizes",
@@ -132,6 +137,7 @@ SEVERITY: dict[str, str] = {
     "impossible-value": "error", "malformed-number": "warning", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
     "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning", "means-do-not-fit": "warning",
+    "sizes-do-not-add": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning", "ratio-does-not-fit": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",

@@ -22,7 +22,7 @@ from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, Reported, p_text
 from .reading import Unit
-from .tables import _TOTAL_HEAD, MEANS_SAID, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, MEANS_SAID, _totals, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -42,6 +42,7 @@ class CountTest:
     exact: bool = False  # every test it names is Fisher's exact test (of a larger table: Freeman–Halton's), computed here
     df: int = 0  # (r − 1)(k − 1) of the counts
     typed: Reported | None = None  # the statistic as typed whole in its cell, where the test is one (rep its χ² with its p)
+    sizes: str = ""  # the groups' n that do not add up to the total the table gives, said (size_tests)
 
 
 # tests of a table larger than 2 × 2 other than those computed here, named in a caption or note: a trend test, a rank test
@@ -463,6 +464,35 @@ def fraction_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> li
     return out
 
 
+def size_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, said: str) -> list[CountTest]:
+    """A header row's groups' n against the total the table gives — a total column's head ("Total (N = 100)"), or where
+    there is none the caption's one N —: an entry at the total's head (or the first group's) where they add up to more
+    (fewer may be legitimate: subgroups need not exhaust their total, "Anencephaly (N = 123) | Spina bifida (N = 115) |
+    Total NTDs (N = 263)"). Not where the heads name occasions or the caption or note a paired or repeated design (the
+    same people counted twice), nor for heads of fewer than two groups."""
+    from .means import _OCCASIONS, _PAIRED  # (what names the same people measured again)
+
+    if _PAIRED.search(said):
+        return []
+    rows = cell_grid(cells)
+    for r in sorted(rows)[:3]:  # (the header rows stand at the top)
+        row = rows[r]
+        sized = {c: s[0] for c, u in sorted(row.items()) if len(s := sizes_in(u.text)) == 1}
+        totals = [c for c in sized if _TOTAL_HEAD.match(row[c].text)]
+        groups = [c for c in sized if c not in totals]
+        if len(groups) < 2 or len(totals) > 1 or _OCCASIONS.search(" ".join(u.text for u in row.values())):
+            continue
+        stated = _totals(caption) if not totals else [sized[totals[0]]]
+        if len(stated) != 1 or sum(sized[c] for c in groups) <= stated[0]:
+            return []
+        unit = row[totals[0]] if totals else row[groups[0]]
+        parts = " + ".join(f"{sized[c]:,}" for c in groups)
+        where = "the total column's head gives" if totals else "the caption gives"
+        said_sizes = f"The groups' n in the heads add up to {sum(sized[c] for c in groups):,} ({parts}), more than the N = {stated[0]:,} {where}."
+        return [CountTest(unit, _cell_entry(unit), (), "the groups' n in the table's heads", sizes=said_sizes)]
+    return []
+
+
 # -- the tests the counts give ---------------------------------------------------------------------------------------
 
 
@@ -585,7 +615,9 @@ def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
     or cell names it and the table is small enough to enumerate: fisher_rxc) — with the printed precision of each; and
     each percent its count's share."""
     rep, counts = test.rep, test.counts
-    out = [Finding("percent-does-not-fit", f"A percent is not its count's share {test.percents[0]}: " + "; ".join(test.percents[1:]) + ".",
+    out = [Finding("sizes-do-not-add", test.sizes + " Say where the others are (missing data, exclusions), or correct the numbers.",
+                   test.sizes.split(" (", 1)[1].split(")", 1)[0])] if test.sizes else []
+    out += [Finding("percent-does-not-fit", f"A percent is not its count's share {test.percents[0]}: " + "; ".join(test.percents[1:]) + ".",
                    ", ".join(f"{part.split(' / ')[0]} ({part.rsplit('not ', 1)[1]})" for part in test.percents[1:]))] if test.percents else []
     table = _trimmed(counts)
     larger = len(table) * len(table[0]) > 4 if len(table) >= 2 and len(table[0]) >= 2 else False

@@ -25,7 +25,7 @@ from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import _LEVEL_NAMED, CODES, RATIOS, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, rank_sum_p, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, ratio_fits, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
-from .counts import CountTest, count_tests, counts_fit, fraction_tests
+from .counts import CountTest, count_tests, counts_fit, fraction_tests, size_tests
 from .means import GroupMeans, category_means, group_means, means_fit
 from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
@@ -312,7 +312,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
         if any("(" in u.text or "±" in u.text or "%" in u.text or "ercent" in u.text or "SD" in u.text or "S.D" in u.text or "td" in u.text
                for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses, or a column of its own under "%"; a mean
             # its ± or (SD), or a column of its own under "SD")
-            tests = count_tests(cells, mark, said) + fraction_tests(cells)
+            tests = count_tests(cells, mark, said) + fraction_tests(cells) + size_tests(cells, caption, said)
             typed = {id(t.typed) for t in tests if t.typed is not None}  # (tests typed whole in a cell: their cells' statistics)
             items = _with_counts(items, tests, context)
             read |= typed
