@@ -305,3 +305,24 @@ def test_a_published_tables_fisher_ps_of_larger_tables_and_its_groups_sizes(tmp_
     moved = _audit(tmp_path, _BMC_MED_EDUC.replace("| 5.21a | 0.090 |", "| 5.21a | 0.300 |"), "md")
     assert any("counts-do-not-fit" in e.codes and "Freeman–Halton) p = 0.09007" in e.message for e in moved)
     assert not [e for e in _audit(tmp_path, _GENES_ENV_TABLE, "md") if "sizes-do-not-add" in e.codes]
+
+
+def test_a_named_exact_test_too_large_to_compute_is_said(tmp_path):
+    """A 3 × 3 table of 9,000 subjects whose note names Fisher's exact test, its p fitting none of the χ² tests: the exact
+    test is beyond what is enumerated here, so the p is not held to it — said in the entry's notes, not guessed; a 3 × 2
+    table beside it (its exact p, 0.9729, computed as test_fishers_exact_test_of_a_larger_table checks) is held."""
+    text = """Table 1 Characteristics
+
+| Variable | Category | A (n = 3000) | B (n = 3000) | C (n = 3000) | P |
+|---|---|---|---|---|---|
+| Var | c1 | 1000 (33.3) | 900 (30.0) | 1100 (36.7) | 0.5 |
+| | c2 | 1000 (33.3) | 1100 (36.7) | 900 (30.0) | |
+| | c3 | 1000 (33.3) | 1000 (33.3) | 1000 (33.3) | |
+| Var2 | c1 | 10 (0.3) | 9 (0.3) | 11 (0.4) | 0.01 |
+| | c2 | 2990 (99.7) | 2991 (99.7) | 2989 (99.6) | |
+
+Fisher's exact test.
+"""
+    first, second = _audit(tmp_path, text, "md")
+    assert not first.codes and any("too large to compute here, so the p is not held to it" in n for n in first.notes)
+    assert "counts-do-not-fit" in second.codes and "Fisher's exact test (Freeman–Halton) p = 0.9729" in second.message

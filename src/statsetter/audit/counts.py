@@ -609,11 +609,11 @@ class _TooLarge(Exception):
     """An exact test's enumeration beyond its budget."""
 
 
-def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
+def counts_fit(test: CountTest, alpha: float, unheld: "list[str] | None" = None) -> list[Finding]:
     """The table's χ² and p against its counts: the χ² one of Pearson's, Yates's (2 × 2) or the likelihood ratio's, each
     on (r − 1)(k − 1) df; the p one of theirs or Fisher's exact test's (2 × 2; of a larger table where the caption, note
     or cell names it and the table is small enough to enumerate: fisher_rxc) — with the printed precision of each; and
-    each percent its count's share."""
+    each percent its count's share. What the p could not be held to is said in ``unheld``."""
     rep, counts = test.rep, test.counts
     out = [Finding("sizes-do-not-add", test.sizes + " Say where the others are (missing data, exclusions), or correct the numbers.",
                    test.sizes.split(" (", 1)[1].split(")", 1)[0])] if test.sizes else []
@@ -644,8 +644,11 @@ def counts_fit(test: CountTest, alpha: float) -> list[Finding]:
             ps["Fisher's exact test"] = fisher_2x2(table)
             fits = reported[0] - 1e-12 <= ps["Fisher's exact test"] <= reported[1] + 1e-12
         exact = fisher_rxc(table) if larger and test.exact and not fits else None
-        if larger and test.exact and not fits and exact is None:
-            return out  # (too large to enumerate here: not held)
+        if larger and test.exact and not fits and exact is None:  # (too large to enumerate here: not held, and said)
+            if unheld is not None:
+                unheld.append(f"The p fits none of the χ² tests of the counts; Fisher's exact test of this {len(table)} × {len(table[0])} table, "
+                              "which the table names, is too large to compute here, so the p is not held to it.")
+            return out
         if exact is not None:
             ps["Fisher's exact test (Freeman–Halton)"] = exact
             fits = reported[0] - 1e-12 <= exact <= reported[1] + 1e-12

@@ -559,8 +559,9 @@ def _audit_units(
             if local.symbol is not None:
                 previous_end = local.end
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
+        unheld: list[str] = []  # (what counts_fit could not hold the p to, said in the notes)
         if item.counts is not None:  # a categorical variable's χ² and p against its counts
-            findings += counts_fit(item.counts, alpha)
+            findings += counts_fit(item.counts, alpha, unheld)
         if item.means is not None:  # a t (or F) against the two groups' means, SDs and sizes beside it
             findings += means_fit(rep, item.means)
         if item.squares is not None:  # an ANOVA row's SS, MS and F against each other and its error row's
@@ -612,6 +613,7 @@ def _audit_units(
         notes: list[str] = [f"Read from a table: {item.how.removeprefix('read from the table' + chr(39) + 's row: ')}."] if item.how else []
         if ns_note:
             notes.append(ns_note)
+        notes += unheld
         if lead is not None:
             notes.append(f"Checked with the B typed before it (B = {lead[0].text}" + (f", SE = {lead[1].text}" if lead[1] is not None else "")
                          + (f", {lead[2].level * 100:g}% CI [{lead[2].low.text}, {lead[2].high.text}]" if lead[2] is not None else "") + ").")
@@ -721,6 +723,7 @@ _NOTE_SUMMARIES = (
     ("The p differs from the one recomputed from the statistic alone", "p value(s) read as adjusted by a procedure their text names, not checked"),
     ("The p differs from the one recomputed from the statistic's distribution", "p value(s) said to come from another method (exact, permutation, resampled), not checked"),
     ("The p fits a one-sided test", "p value(s) fitting a one-sided test, as the text says"),
+    ("The p fits none of the χ² tests of the counts; Fisher's exact test", "p value(s) of a table whose named exact test is too large to compute here, not checked"),
     ("The p fits Spearman's test as R", "Spearman p value(s) fitting R's cor.test, not the t approximation"),
 )
 
