@@ -22,7 +22,7 @@ from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, Reported, p_text
 from .reading import Unit
-from .tables import _TOTAL_HEAD, MEANS_SAID, _totals, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, MEANS_SAID, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, _totals, cell_grid, count_cell, paired_heads, sizes_in
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -56,18 +56,6 @@ _SIZES_ROW = re.compile(r"(?i)\s*(?:n|no\.|number(?:\s+of\s+[\w\s-]+)?|sample\s+
 # "Intervention n | Intervention %"): a count's head, then its percent's with the same group's name or none
 _N_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*\b(?:n|no\.?|number|count|freq(?:uency)?\.?)\s*")
 _PERCENT_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*(?:\(\s*%\s*\)|%|percent(?:age)?|per\s+cent)\s*")
-
-
-def _paired_columns(row: dict[int, Unit]) -> dict[int, int]:
-    """A header row's count columns, each with its percent's column next to it, where the row pairs two groups or more
-    so; nothing for any other row."""
-    columns = sorted(row)
-    pairs = {}
-    for a, b in zip(columns, columns[1:]):
-        count, percent = _N_HEAD.fullmatch(row[a].text), _PERCENT_HEAD.fullmatch(row[b].text)
-        if count is not None and percent is not None and count.group("group").lower() == percent.group("group").lower():
-            pairs[a] = b
-    return pairs if len(pairs) >= 2 else {}
 
 
 def _paired_cell(count: Unit, percent: "Unit | None") -> tuple[int, float, float] | None:
@@ -132,7 +120,7 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
     rows = cell_grid(cells)
     heads: dict[int, str] = {c: u.text for c, u in rows[top].items()} if top in rows else {}  # (the first row, until a header row: "| n = 5030 | n = 22,608 |")
     p_col = chi_col = None
-    pairs: dict[int, int] = {}  # each count's column with its percent's, where the two stand apart (_paired_columns)
+    pairs: dict[int, int] = {}  # each count's column with its percent's, where the two stand apart (tables.paired_heads)
     typed_at: dict[tuple[int, int], list[tuple[Unit, Reported | None]]] = {}  # each cell's paragraphs with their statistics, for
     for r, c, unit, reps in cells:  # a test typed whole in one
         typed_at.setdefault((r, c), []).extend([(unit, rep) for rep in reps] or [(unit, None)])
@@ -160,7 +148,7 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
                 block, units, anchor, labelled = [], [], None, False
                 sized = {**sized, **sizes}
                 continue
-        if not any(_number(u.text, mark) is not None for u in row.values()) and (paired := _paired_columns(row)):  # "n | % | n | %"
+        if not any(_number(u.text, mark) is not None for u in row.values()) and (paired := paired_heads(row, _N_HEAD, _PERCENT_HEAD)):  # "n | % | n | %"
             close()
             block, units, anchor, labelled = [], [], None, False
             heads = {**heads, **{c: heads.get(c) or heads.get(b) or row[c].text for c, b in paired.items()}}  # (each group's name

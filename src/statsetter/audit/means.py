@@ -19,7 +19,7 @@ from typing import Sequence
 from .checks import Finding
 from .parsing import Number, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, COUNT_CELL, MEANS_SAID, _number, _p_cell, _role, cell_grid, count_cell, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, MEANS_SAID, _number, _p_cell, _role, cell_grid, count_cell, paired_heads, sizes_in
 
 # a mean with its SD, "45.3 ± 6.2", "10.07 ±4.80", "3.2 +/- 0.5"
 _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)\s*(?P<sd>\d+(?:[.,]\d+)?)\s*[a-d*†‡]*\s*")
@@ -52,14 +52,6 @@ _NOT_MEANS_SAID = re.compile(r"(?i)%|\bn\s*\(|percent|frequenc|median|\bIQR\b|in
 # a header row that gives each group's mean and SD in two columns of their own: "M | SD | M | SD", "Mean | S.D."
 _M_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*\b(?:M|mean)\s*")
 _SD_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*\(?\s*\b(?:SD|S\.\s?D\.|std\.?\s*dev(?:iation)?\.?)\s*\)?\s*")  # ("(SD)" over "(2.0)")
-
-
-def _paired_columns(row: dict[int, Unit]) -> dict[int, int]:
-    """A header row's mean columns, each with its SD's column next to it, where the row pairs two groups or more so."""
-    columns = sorted(row)
-    pairs = {a: b for a, b in zip(columns, columns[1:]) if (m := _M_HEAD.fullmatch(row[a].text)) is not None
-             and (sd := _SD_HEAD.fullmatch(row[b].text)) is not None and m.group("group").lower() == sd.group("group").lower()}
-    return pairs if len(pairs) >= 2 else {}
 
 
 _N_HEAD = re.compile(r"\s*[nN]\s*")
@@ -137,7 +129,7 @@ def group_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: st
         if any(role in ("t", "F", "mixed:t") for role in roles.values()) and not any(_read(u.text) for u in row.values()):
             if _OCCASIONS.search(" ".join(u.text for u in row.values())):
                 return []  # (a header naming the occasions: "Baseline (n = 41) | Follow-up (n = 36)")
-            paired, sized = _paired_columns(row), sized_heads(row)
+            paired, sized = paired_heads(row, _M_HEAD, _SD_HEAD), sized_heads(row)
             counted = _counted_columns(row, paired)
             if sized or not paired or not groups:  # (a row of "Mean | (SD) | Mean | (SD) | t | P" under the groups' heads keeps them)
                 groups, heads = sized or [(c, 0) for c in counted], said
@@ -151,7 +143,7 @@ def group_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: st
             groups = sized_heads(row)
             heads += " " + " ".join(u.text for u in row.values())
             continue
-        if groups and (paired := _paired_columns(row)):  # "M | SD | M | SD" under the groups' heads
+        if groups and (paired := paired_heads(row, _M_HEAD, _SD_HEAD)):  # "M | SD | M | SD" under the groups' heads
             pairs, counted = paired, _counted_columns(row, paired)
             continue
         if len(groups) < 2 or stat_col is None or stat_col not in row:

@@ -547,6 +547,16 @@ WHOLE_COUNT = r"\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+"  # a count, its thousands
 COUNT_CELL = re.compile(rf"\s*(?P<n>{WHOLE_COUNT})\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
 
 
+def paired_heads(row: "dict[int, Unit]", first: "re.Pattern[str]", second: "re.Pattern[str]") -> dict[int, int]:
+    """A header row's columns of one kind, each with its partner's column next to it — a count's with its percent's
+    ("Number | %"), a mean's with its SD's ("M | SD") —, each head matching its pattern with the same group's name
+    before it or none ("Urban n | Urban %"); only where the row pairs two groups or more so."""
+    columns = sorted(row)
+    pairs = {a: b for a, b in zip(columns, columns[1:]) if (x := first.fullmatch(row[a].text)) is not None
+             and (y := second.fullmatch(row[b].text)) is not None and x.group("group").lower() == y.group("group").lower()}
+    return pairs if len(pairs) >= 2 else {}
+
+
 def cell_grid(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> dict[int, dict[int, Unit]]:
     """A table's cells by row and column (counts.py and means.py read them so)."""
     rows: dict[int, dict[int, Unit]] = {}
