@@ -326,3 +326,66 @@ Fisher's exact test.
     first, second = _audit(tmp_path, text, "md")
     assert not first.codes and any("too large to compute here, so the p is not held to it" in n for n in first.notes)
     assert "counts-do-not-fit" in second.codes and "Fisher's exact test (Freeman–Halton) p = 0.9729" in second.message
+
+
+# BMC Nursing 2024;23:329 (PMC11097421), Table 1, "Demographic data homogeneity for the two participant groups", as
+# published (https://pmc.ncbi.nlm.nih.gov/articles/PMC11097421/table/Tab1); the test column's head, printed t with note a
+# over χ² with note b (the page's copy runs it together as "ta2 b"), typed "t/χ2"
+_PMC11097421 = """Table 1. Demographic data homogeneity for the two participant groups
+
+| | Overall (N = 151) | Experimental (n = 73) | Control (n = 78) | t/χ2 | p |
+|---|---|---|---|---|---|
+| | n (%)/mean ± SD | n (%)/mean ± SD | | | |
+| Gender | | | | 0.43 b | 0.514 |
+| Male | 89 (58.9) | 45 (61.6) | 44 (56.4) | | |
+| Female | 62 (41.1) | 28 (38.4) | 34 (43.6) | | |
+| Age | 49.53 ± 9.27 | 48.35 ± 9.84 | 50.63 ± 8.63 | −1.51 a | 0.132 |
+| Education level | | | | 2.64 b | 0.267 |
+| Middle school and below | 62 (41.1) | 31 (42.5) | 31 (39.7) | | |
+| High school or vocational school | 65 (43.0) | 34 (46.5) | 31 (39.8) | | |
+| College and above | 24 (15.9) | 8 (11.0) | 16 (20.5) | | |
+| Marital status | | | | 0.42 b | 0.813 |
+| Single | 106 (70.2) | 50 (68.5) | 56 (71.8) | | |
+| Married | 25 (16.6) | 12 (16.4) | 13 (16.7) | | |
+| Divorced/widowed | 20 (13.2) | 11 (15.1) | 9 (11.5) | | |
+| Living status | | | | 0.02 b | 0.896 |
+| Living alone | 14 (9.3) | 7 (9.6) | 7 (9.0) | | |
+| Living with family | 137 (90.7) | 66 (90.4) | 71 (91.0) | | |
+| Employed | | | | 0.01 b | 0.976 |
+| No | 116 (76.8) | 56 (76.7) | 60 (76.9) | | |
+| Yes | 35 (23.2) | 17 (23.3) | 18 (23.1) | | |
+| Religion | | | | 0.38 b | 0.945 |
+| None | 32 (21.2) | 17 (23.3) | 15 (19.2) | | |
+| Buddhist | 64 (42.4) | 30 (41.1) | 34 (43.6) | | |
+| Taoist | 32 (21.2) | 15 (20.5) | 17 (21.8) | | |
+| Christian | 23 (15.2) | 11 (15.1) | 12 (15.4) | | |
+| Economic status | | | | 0.07 b | 0.792 |
+| Middle income | 72 (47.7) | 34 (46.6) | 38 (48.7) | | |
+| Low income | 79 (52.3) | 39 (53.4) | 40 (51.3) | | |
+| Number of years of homecare received | | | | 4.58 b | 0.101 |
+| < 1 year | 14 (9.3) | 6 (8.2) | 8 (10.3) | | |
+| 1–2 years | 36 (23.8) | 23 (31.5) | 13 (16.6) | | |
+| ≥ 2 years | 101 (66.9) | 44 (60.3) | 57 (73.1) | | |
+| Total number of psychiatric hospitalizations | 3.59 ± 3.95 | 3.79 ± 4.30 | 3.40 ± 3.59 | 0.62 a | 0.538 |
+| Number of psychiatric hospitalizations within the previous year | 0.15 ± 0.44 | 0.19 ± 0.52 | 0.10 ± 0.35 | 1.24 a | 0.218 |
+
+Note. a t-test; b chi-squared test
+"""
+
+
+def test_a_published_table_1_of_counts_and_means_with_two_chi_squares_typed_amiss(tmp_path):
+    """All eight χ²'s and three t's of PMC11097421's Table 1 are read (an Overall column set aside), with each χ²'s df from
+    its counts. Two χ²'s do not follow from the counts, their p's do: the marital status χ² is 0.4145 (scipy; p = .813 as
+    printed), printed 0.42 — said with the digits that show it (before, "0.415", which reads as if it rounded to 0.42);
+    the employment χ² is 0.0009 (p = .976 as printed), printed 0.01. Two percents of the education block are nudged to
+    make 100 (34 / 73 is 46.58%, printed 46.5; 31 / 78 is 39.74%, printed 39.8), one of the homecare block (13 / 78)."""
+    assert round(chi2_contingency([[50, 12, 11], [56, 13, 9]])[0], 4) == 0.4145
+    assert round(chi2_contingency([[56, 17], [60, 18]], correction=False)[0], 4) == 0.0009
+    entries = _audit(tmp_path, _PMC11097421, "md")
+    assert [e.found.split(",")[0] for e in entries] == ["χ² = 0.43", "t = −1.51", "χ² = 2.64", "χ² = 0.42", "χ² = 0.02", "χ² = 0.01",
+                                                        "χ² = 0.38", "χ² = 0.07", "χ² = 4.58", "t = 0.62", "t = 1.24"]
+    counts = {e.found.split(",")[0]: sorted(set(e.codes) & _COUNTS) for e in entries if set(e.codes) & _COUNTS}
+    assert counts == {"χ² = 2.64": ["percent-does-not-fit"], "χ² = 0.42": ["counts-do-not-fit"],
+                      "χ² = 0.01": ["counts-do-not-fit", "p-does-not-follow"], "χ² = 4.58": ["percent-does-not-fit"]}
+    marital = next(e for e in entries if e.found.startswith("χ² = 0.42"))
+    assert "Pearson's χ² 0.4145" in marital.message

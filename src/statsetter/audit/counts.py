@@ -620,7 +620,7 @@ def counts_fit(test: CountTest, alpha: float, unheld: "list[str] | None" = None)
     if value is not None and rep.symbol == "chi2" and not (test.other and larger):  # (beside a named exact test, a larger table's
         low, high = value.value - value.half_unit, value.value + value.half_unit
         if not any(low - 1e-9 * max(1.0, x) <= x <= high + 1e-9 * max(1.0, x) for x in methods.values()):
-            said = "; ".join(f"{name} {_shown(x)}" for name, x in methods.items())
+            said = "; ".join(f"{name} {_shown(x, value.decimals)}" for name, x in methods.items())
             out.append(Finding("counts-do-not-fit", f"χ² = {value.text} does not follow from the table's counts: on {df} df they give {said}.",
                                f"χ² = {value.text}; counts {_counts_text(counts)}"))
     reported = reported_p_range(rep, alpha)
@@ -649,8 +649,16 @@ def counts_fit(test: CountTest, alpha: float, unheld: "list[str] | None" = None)
     return out
 
 
-def _shown(x: float) -> str:
-    return f"{x:.3f}"
+def _shown(x: float, decimals: int = 0) -> str:
+    """A χ² from the counts, to three decimals — and more where those would round to another value at the printed χ²'s
+    decimals than the χ² itself does: 0.4145 beside a printed 0.42, not "0.415", which reads as if it rounded to it."""
+    step = Decimal(1).scaleb(-decimals)
+    right = Decimal(repr(x)).quantize(step, ROUND_HALF_UP)
+    for digits in range(max(3, decimals), max(3, decimals) + 6):
+        shown = f"{x:.{digits}f}"
+        if Decimal(shown).quantize(step, ROUND_HALF_UP) == right:
+            return shown
+    return shown
 
 
 def _counts_text(counts: Sequence[Sequence[int]]) -> str:
