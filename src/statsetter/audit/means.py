@@ -19,7 +19,7 @@ from typing import Sequence
 from .checks import Finding
 from .parsing import Number, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, COUNT_CELL, MEANS_SAID, _number, _p_cell, _role, cell_grid, count_cell, paired_heads, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, MEANS_SAID, OCCASIONS, _number, _p_cell, _role, cell_grid, count_cell, paired_heads, sizes_in
 
 # a mean with its SD, "45.3 ± 6.2", "10.07 ±4.80", "3.2 +/- 0.5"
 _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)\s*(?P<sd>\d+(?:[.,]\d+)?)\s*[a-d*†‡]*\s*")
@@ -30,8 +30,7 @@ _PAIRED = re.compile(r"(?i)\bpaired|(?<!in)dependent[- ]samples?|\brepeated|\bwi
 # a mean ± its standard error, not its SD ("mean ± SE", "± SEM", "standard error of the mean"), said in the caption, note or a
 # head: a t from the means and those numbers as SDs would be far off
 _SE_SAID = re.compile(r"(?<![\w.])(?:SEM?|S\.E\.(?:M\.)?)(?![\w.])|(?i:standard\s+errors?)")
-_OCCASIONS = re.compile(rf"{_PAIRED.pattern}|(?i:\bpre-?(?:test|treatment|intervention)?\b|\bpost|baseline|follow[- ]?up|\bbefore\b|"
-                        r"\bafter\b|\btimes?\b|\bweeks?\b|\bmonths?\b|\bvisits?\b|\bT[0-3]\b)")
+_OCCASIONS = re.compile(rf"{_PAIRED.pattern}|{OCCASIONS.pattern}")
 
 
 @dataclass(frozen=True, slots=True)

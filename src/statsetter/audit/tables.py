@@ -314,6 +314,10 @@ class Reading:
 # a t's design as its column's head (or the caption or note) names it: a paired test's df are a group's n − 1 — the
 # header's sizes are its occasions' ("Baseline (N = 41) | Follow-up (N = 36) | Paired t Test"), not two groups' —; a
 # model's t (ANCOVA, regression, adjusted for covariates) has its residual df, which no group size gives
+# heads that name occasions rather than groups ("Pre-test (n = 30) | Post-test (n = 30)", "Baseline | Follow-up"): the
+# same people measured again
+OCCASIONS = re.compile(r"(?i:\bpre-?(?:test|treatment|intervention)?\b|\bpost|baseline|follow[- ]?up|\bbefore\b|\bafter\b|\btimes?\b|"
+                       r"\bweeks?\b|\bmonths?\b|\bvisits?\b|\bT[0-3]\b)")
 _PAIRED_SAID = re.compile(r"(?i)\bpaired|(?<!in)dependent[- ]samples?|\brepeated[- ]measures?|\bwithin[- ]subjects?|\brelated[- ]samples?")
 _MODEL_SAID = re.compile(r"(?i)\bANCOVA|\bregression|\bmixed[- ]model|\blinear[- ]model|\bGLM\b|\bmultilevel|\bcovariates?\b|\badjusted")
 _DESIGN_SAID = re.compile(f"{_PAIRED_SAID.pattern}|{_MODEL_SAID.pattern[4:]}", re.IGNORECASE)  # either (the search asked first)
@@ -952,6 +956,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     head_dfs: dict[int, tuple[Number, ...]] = {}  # the df a column's head gives ("F-ratio (1, 18)")
     groups, total = caption_sizes(caption)
     groups_guessed = not labelled  # (until a row of the table gives its own)
+    occasions = False  # the heads that gave the group sizes name occasions: a t may be a paired one
     found: list[TableStatistic] = []
     used: set[int] = set()
     error_dfs: dict[int, list[_ErrorTerm]] = {}
@@ -1057,6 +1062,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             sizes = [n for u, _ in row.values() for n in sizes_in(u.text)]
             if sizes:
                 groups, groups_guessed = sizes, False
+                occasions = OCCASIONS.search(" ".join(u.text for u, _ in row.values())) is not None
             continue
         # a ratio and its CI in one cell, its p in the next p column to the right (a crude and an adjusted pair side by side),
         # or in the one just before it where each ratio column has its p before it and none comes after the last ("P | OR
@@ -1191,6 +1197,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                                          groups_guessed)
                 readings = design if design is not None else tuple(df_readings(role, groups, total, above if groups_guessed else "in the table", welch,
                                                                               total_guessed=not labelled, groups_guessed=groups_guessed, total_where=above))
+                if design is None and occasions and role == "t":  # ("Pre-test (n = 30) | Post-test (n = 30) | t": the same people twice,
+                    readings += tuple(Reading((n - 1.0,), f"df = {n} − 1 (a paired t: the heads name occasions; n in the table)")  # a paired t
+                                      for n in dict.fromkeys(groups) if n >= 2)
             found.append(TableStatistic(unit, rep, None, f"read from the table's row: {how}", readings, coefficient, squares))
         # a statistic typed whole in a cell, its p further along the row
         ordered = sorted(row)
