@@ -197,7 +197,7 @@ def _random_table(rng: random.Random, move: str = "") -> str:
         table = np.array([np.random.default_rng(rng.randrange(10**9)).multinomial(n, probs / probs.sum()) for n in sizes]).T
         if (table.sum(axis=1) == 0).any():
             continue
-        kind = "p" if single else rng.choice(["chi df", "chi", "p", "fisher" if table.shape == (2, 2) else "fisher rc"])
+        kind = "p" if single else rng.choice(["chi df", "chi", "p", "fisher" if table.shape == (2, 2) else "fisher rc" if sum(sizes) <= 150 else "chi"])
         chi, p, df, _ = chi2_contingency(table, correction=table.shape == (2, 2) and rng.random() < 0.3)
         exact = fisher_rxc(table.tolist()) if kind == "fisher rc" else None  # (this test's reading, not its sum: that is
         p = fisher_exact(table)[1] if kind == "fisher" else (exact if exact is not None else rng.random()) if kind == "fisher rc" else p  # tested apart)
@@ -261,7 +261,8 @@ def _enumerated(table: list[list[int]]) -> float:
 
 def test_fishers_exact_test_of_a_larger_table():
     """Freeman and Halton's extension of Fisher's test to r × c tables, as R's fisher.test computes it: R's printed p for
-    matrix(1:9, ncol = 3) is 0.9888 (R output shown in "How to Perform Fisher Test in R", a tutorial kept in the
+    matrix(1:9, ncol = 3) is 0.9888, for matrix(c(14, 27, 15, 24, 27, 17, 39, 19, 24), nrow = 3) 0.02126 (R output
+    shown in "How to Perform Fisher Test in R", a tutorial kept in the
     Nemotron-CC-Math collection, https://huggingface.co/datasets/nvidia/Nemotron-CC-Math-v1); 120 random small tables
     against listing every table with their margins; 2 × 2 tables against scipy's fisher_exact; a table too large to list
     within the budget is not computed (None), not guessed."""
@@ -281,7 +282,9 @@ def test_fishers_exact_test_of_a_larger_table():
         table = [[rng.randint(0, 40) for _ in range(2)] for _ in range(2)]
         if min(map(sum, table)) and min(map(sum, zip(*table))):
             assert math.isclose(fisher_rxc(table), fisher_exact(table)[1], rel_tol=1e-9)  # type: ignore[arg-type]
-    assert fisher_rxc([[14, 24, 39], [27, 27, 19], [15, 17, 24]]) is None  # (3 × 3, 206 subjects: beyond the budget)
+    m4 = [[14, 24, 39], [27, 27, 19], [15, 17, 24]]  # (3 × 3, 206 subjects: R's printed p, the same tutorial; beyond the
+    assert fisher_rxc(m4) is None and round(fisher_rxc(m4, budget=2_000_000), 5) == 0.02126  # default budget, within a larger)
+    assert fisher_rxc([[1000, 900, 1100], [1000, 1100, 900], [1000, 1000, 1000]]) is None  # (9,000 subjects: beyond the budget)
 
 
 def test_a_published_tables_fisher_ps_of_larger_tables_and_its_groups_sizes(tmp_path):

@@ -533,13 +533,13 @@ def fisher_2x2(table: Sequence[Sequence[int]]) -> float:
     return min(1.0, sum(math.exp(q) for x in range(low, high + 1) if (q := log_p(x)) <= observed + 1e-7))
 
 
-def fisher_rxc(table: Sequence[Sequence[int]], budget: int = 150_000) -> float | None:
+def fisher_rxc(table: Sequence[Sequence[int]], budget: int = 600_000) -> float | None:
     """Fisher's exact test of an r × c table (Freeman and Halton's): the probability of the tables with the observed
     margins no more likely than the observed one (R's fisher.test, relative tolerance 1e-7), summed column by column
     over the table's remaining row totals; a branch whose completions are all, or none, at most as likely as the
-    observed table is summed, or dropped, whole (the most and least likely completion of each state, found once), as in
-    Mehta and Patel's network algorithm. None where that would take more than ``budget`` column vectors (a large table:
-    then not computed)."""
+    observed table is summed, or dropped, whole (the most and least likely completion of each state, found once; for the
+    last two columns in closed form, _two_columns), as in Mehta and Patel's network algorithm. None where that would
+    take more than ``budget`` column vectors (about a second here: a large table, then not computed)."""
     columns = [list(c) for c in zip(*table) if sum(c)]
     columns = [list(c) for c in zip(*[r for r in zip(*columns) if sum(r)])] if columns else []  # (empty rows and columns dropped)
     if len(columns) < 2 or len(columns[0]) < 2:
@@ -576,6 +576,11 @@ def fisher_rxc(table: Sequence[Sequence[int]], budget: int = 150_000) -> float |
         if j == last:
             w = lf[sizes[j]] - sum(lf[x] for x in left)
             return w, w
+        if j == last - 1:  # two columns left: each row's share of them is a concave function of its count in the first
+            work[0] += sizes[j] + (1 << len(left))  # (its cost, counted as column vectors are)
+            if work[0] > budget:
+                raise _TooLarge
+            return _two_columns(left, sizes[j], lf)
         found = [(w + b[0], w + b[1]) for w, rest in steps(j, left) for b in (bounds(j + 1, rest),)]
         return min(f[0] for f in found), max(f[1] for f in found)
 
@@ -591,6 +596,35 @@ def fisher_rxc(table: Sequence[Sequence[int]], budget: int = 150_000) -> float |
         return min(1.0, walk(0, totals, 0.0))
     except _TooLarge:
         return None
+
+
+def _two_columns(left: tuple[int, ...], size: int, lf: list[float]) -> tuple[float, float]:
+    """The least and most likely ways to fill the last two columns (the first of ``size``) from the rows' remaining totals
+    ``left``, as the log of Π C_j! / Π x_ij!: a sum over rows of −lf(x) − lf(r − x), concave in each row's x, under Σ x =
+    size. Its most at the greedy allocation (each next unit where it adds most: the gains fall as x grows); its least at
+    a vertex of the box, every row but one at 0 or its total."""
+    rest = sum(left) - size
+    base = lf[size] + lf[rest]
+
+    def value(x: "Sequence[int]") -> float:
+        return base - sum(lf[a] + lf[r - a] for a, r in zip(x, left))
+
+    x = [0] * len(left)
+    for _ in range(size):  # (the gain of one more unit in row i: lf(x) + lf(r − x) − lf(x + 1) − lf(r − x − 1))
+        i = max((i for i in range(len(left)) if x[i] < left[i]), key=lambda i: lf[x[i]] + lf[left[i] - x[i]] - lf[x[i] + 1] - lf[left[i] - x[i] - 1])
+        x[i] += 1
+    most = value(x)
+    least = math.inf
+    for free in range(len(left)):
+        others = [i for i in range(len(left)) if i != free]
+        for mask in range(1 << len(others)):
+            y = [0] * len(left)
+            for bit, i in enumerate(others):
+                y[i] = left[i] if mask >> bit & 1 else 0
+            y[free] = size - sum(y)
+            if 0 <= y[free] <= left[free]:
+                least = min(least, value(y))
+    return least, most
 
 
 class _TooLarge(Exception):
