@@ -311,13 +311,13 @@ class Reading:
     guessed: bool = False  # from an N of the paragraph or the text before, not given with the statistic: the test may be a subgroup's
 
 
-# a t's design as its column's head (or the caption or note) names it: a paired test's df are a group's n − 1 — the
-# header's sizes are its occasions' ("Baseline (N = 41) | Follow-up (N = 36) | Paired t Test"), not two groups' —; a
-# model's t (ANCOVA, regression, adjusted for covariates) has its residual df, which no group size gives
 # heads that name occasions rather than groups ("Pre-test (n = 30) | Post-test (n = 30)", "Baseline | Follow-up"): the
 # same people measured again
 OCCASIONS = re.compile(r"(?i:\bpre-?(?:test|treatment|intervention)?\b|\bpost|baseline|follow[- ]?up|\bbefore\b|\bafter\b|\btimes?\b|"
                        r"\bweeks?\b|\bmonths?\b|\bvisits?\b|\bT[0-3]\b)")
+# a t's design as its column's head (or the caption or note) names it: a paired test's df are a group's n − 1 — the
+# header's sizes are its occasions' ("Baseline (N = 41) | Follow-up (N = 36) | Paired t Test"), not two groups' —; a
+# model's t (ANCOVA, regression, adjusted for covariates) has its residual df, which no group size gives
 _PAIRED_SAID = re.compile(r"(?i)\bpaired|(?<!in)dependent[- ]samples?|\brepeated[- ]measures?|\bwithin[- ]subjects?|\brelated[- ]samples?")
 _MODEL_SAID = re.compile(r"(?i)\bANCOVA|\bregression|\bmixed[- ]model|\blinear[- ]model|\bGLM\b|\bmultilevel|\bcovariates?\b|\badjusted")
 _DESIGN_SAID = re.compile(f"{_PAIRED_SAID.pattern}|{_MODEL_SAID.pattern[4:]}", re.IGNORECASE)  # either (the search asked first)
