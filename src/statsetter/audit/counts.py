@@ -21,8 +21,9 @@ from typing import Iterator, NamedTuple, Sequence
 from ..pvalues import upper_tail
 from .checks import Finding, _small, reported_p_range
 from .parsing import Number, Reported, p_text
+from .means import _OCCASIONS, _PAIRED  # (what names the same people measured again)
 from .reading import Unit
-from .tables import _TOTAL_HEAD, MEANS_SAID, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, _totals, cell_grid, count_cell, paired_heads, sizes_in
+from .tables import _TOTAL_HEAD, MEANS_SAID, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, _totals, cell_grid, count_cell, paired_heads, sizes_in, whole_count
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
@@ -72,8 +73,7 @@ def _size_cell(text: str) -> int | None:
     counted = count_cell(text)
     if counted is not None:
         return counted[0]
-    m = re.fullmatch(rf"\s*({WHOLE_COUNT})\s*", text)
-    return int(re.sub(r"\D", "", m.group(1))) if m is not None else None
+    return whole_count(text)
 
 
 # what says a table's "17 (19.1)" cells may be counts with their percents
@@ -458,8 +458,6 @@ def size_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: 
     (fewer may be legitimate: subgroups need not exhaust their total, "Anencephaly (N = 123) | Spina bifida (N = 115) |
     Total NTDs (N = 263)"). Not where the heads name occasions or the caption or note a paired or repeated design (the
     same people counted twice), nor for heads of fewer than two groups."""
-    from .means import _OCCASIONS, _PAIRED  # (what names the same people measured again)
-
     if _PAIRED.search(said):
         return []
     rows = cell_grid(cells)

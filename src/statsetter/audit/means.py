@@ -19,7 +19,7 @@ from typing import Sequence
 from .checks import Finding
 from .parsing import Number, Reported
 from .reading import Unit
-from .tables import _TOTAL_HEAD, COUNT_CELL, MEANS_SAID, OCCASIONS, _number, _p_cell, _role, cell_grid, count_cell, paired_heads, sizes_in
+from .tables import _TOTAL_HEAD, COUNT_CELL, MEANS_SAID, OCCASIONS, _number, _p_cell, _role, cell_grid, count_cell, paired_heads, sizes_in, whole_count
 
 # a mean with its SD, "45.3 ± 6.2", "10.07 ±4.80", "3.2 +/- 0.5"
 _MEAN_SD = re.compile(r"\s*(?P<m>[-−–]?\s?\d+(?:[.,]\d+)?)\s*(?:±|\+/-|\+-)\s*(?P<sd>\d+(?:[.,]\d+)?)\s*[a-d*†‡]*\s*")
@@ -54,7 +54,6 @@ _SD_HEAD = re.compile(r"(?i)\s*(?P<group>.*?)\s*\(?\s*\b(?:SD|S\.\s?D\.|std\.?\s
 
 
 _N_HEAD = re.compile(r"\s*[nN]\s*")
-_WHOLE = re.compile(r"\s*(\d{1,3}(?:,\d{3})+|\d+)\s*")
 
 
 def _counted_columns(row: dict[int, Unit], pairs: dict[int, int]) -> dict[int, int]:
@@ -151,8 +150,8 @@ def group_means(cells: Sequence[tuple[int, int, Unit, list[Reported]]], said: st
         parenthesised = any(MEANS_SAID.search(x) and not _NOT_MEANS_SAID.search(x) for x in (label, *(() if mixed else (heads,))))  # (in a
         # "t/χ2" column's table, a row of counts may stand under the same heads: there only a row's own label says so)
         read = [_group_cell(row, c, pairs, parenthesised) for c, _ in groups]
-        sizes = [int(m.group(1).replace(",", "")) if c in counted and c in row and (m := _WHOLE.fullmatch(row[counted[c]].text if counted[c] in row else ""))
-                 else n for c, n in groups]  # (each row's own n where it gives them)
+        sizes = [(whole_count(row[counted[c]].text) if counted[c] in row else None) or 0 if c in counted else n
+                 for c, n in groups]  # (each row's own n where it gives them)
         if any(x is None for x in read) or any(n < 2 for n in sizes):
             continue
         typed = " vs ".join(row[c].text.strip() + (f" ({row[pairs[c]].text.strip().strip('()')})" if c in pairs else "") for c, _ in groups)

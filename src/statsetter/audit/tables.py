@@ -549,6 +549,13 @@ _TOTAL_HEAD = re.compile(r"(?i)\s*(?:total|overall|all|whole sample|sample)\b") 
 # a count with its percent, "287 (5.7%)", "2331 (80.4)", "12,513 (55.3%)" (counts.py reads a variable's block of them)
 WHOLE_COUNT = r"\d{1,3}(?:[,\u202f\u00a0 ]\d{3})+|\d+"  # a count, its thousands set off or not: "12,513", "12 513", "287"
 COUNT_CELL = re.compile(rf"\s*(?P<n>{WHOLE_COUNT})\s*\(\s*(?P<pct>\d+(?:[.,]\d+)?)\s*%?\s*\)\s*")
+_WHOLE_CELL = re.compile(rf"\s*({WHOLE_COUNT})\s*")
+
+
+def whole_count(text: str) -> int | None:
+    """A cell that is a whole count alone ("120", "1,204", "12 513"), as a number; None for any other."""
+    m = _WHOLE_CELL.fullmatch(text)
+    return int(re.sub(r"\D", "", m.group(1))) if m is not None else None
 
 
 def paired_heads(row: "dict[int, Unit]", first: "re.Pattern[str]", second: "re.Pattern[str]") -> dict[int, int]:
