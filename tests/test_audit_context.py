@@ -1627,7 +1627,10 @@ def test_partial_omega_squared_and_a_misprinted_df_in_real_reports(tmp_path):
     assert f"{stats.f.sf(0.533, 2, 90):.3f} {stats.f.sf(0.533, 1, 90):.3f} {2 * 0.533 / (2 * 0.533 + 90):.3f}" == "0.589 0.467 0.012"
     first, second = audit_units([Unit("c", _THESIS_STROOP)])
     assert not first.codes or set(first.codes) <= {"decimals", "spacing"}, first.codes
-    assert {"p-does-not-follow", "effect-does-not-fit"} <= set(second.codes), second.codes
+    assert {"p-does-not-follow", "effect-does-not-fit", "typo-fits"} <= set(second.codes), second.codes
+    # the two agree on one other reading, which is said, and the p is not "corrected" to the mistyped df's
+    assert "The p and η2p = .012 both follow from F(2, 90) = .533: one number may be mistyped" in second.message, second.message
+    assert "p left out" in second.suggestion and "p = .467" not in second.suggestion, second.suggestion
 
 
 def test_an_f_change_keeps_its_name_in_suggestions_and_revisions():
@@ -3532,3 +3535,55 @@ def test_a_count_with_a_space_as_thousands_separator_beside_means(tmp_path):
                     "| Age | young | 12 513 (51.4) | 6.24 ± 4.08 | 15.308 | < 0.001 |\n| | old | 11 830 (48.6) | 8.57 ± 4.86 | | |\n", encoding="utf-8")
     (entry,) = audit_file(path)
     assert entry.found.startswith("F(1, 24341) = 15.308") and "means-do-not-fit" in entry.codes  # (these invented means give F ≈ 1,500)
+
+
+def _real_fs_with_partial_eta():
+    """The F's of the real typings (tests/real_typings.py, each cited there) typed with an exact p and an η²p."""
+    from real_typings import COPIED, HELD_OUT, ITEMS, Text
+    from statsetter.audit.parsing import find_statistics
+
+    return [(item.text[r.start:r.end], r) for item in ITEMS + HELD_OUT + COPIED if isinstance(item, Text)
+            for r in find_statistics(item.text, ".") if r.symbol == "F" and r.p is not None and r.p.op == "=" and len(r.df) == 2
+            and any(e.name == "eta2_p" for e in r.effects)]
+
+
+def test_one_mistyped_number_is_named_where_the_p_and_eta_squared_agree_on_it():
+    """Real F's with their p and η²p (two theses and a conference paper, cited in tests/real_typings.py), each number
+    typed otherwise one digit at a time: where the p and the η²p then both follow from one other df or value, the audit
+    names it (`typo-fits`) — always the one typed before the change, and for every such change; a changed p (the η²p
+    still fitting) and the F's as printed never get it."""
+    real = _real_fs_with_partial_eta()
+    assert len(real) >= 10, len(real)
+    fired = {"df1": 0, "df2": 0, "F": 0, "p": 0}
+    misfits = dict.fromkeys(fired, 0)
+    for typed, rep in real:
+        d1, d2, value, p = rep.df[0].text, rep.df[1].text, rep.value.text, rep.p.number.text
+        f = float(value)
+        printed = audit_units([Unit("c", typed)])[0]
+        if "p-does-not-follow" in printed.codes:  # (the thesis's F(1,90)=.533 above)
+            continue
+        assert "typo-fits" not in printed.codes, (typed, printed.codes)
+        for kind, old in (("df1", d1), ("df2", d2), ("F", value), ("p", p)):
+            for j, digit in ((j, c) for j, c in enumerate(old) if c.isdigit()):
+                for other in "0123456789":
+                    new = old[:j] + other + old[j + 1:]
+                    if other == digit or new.lstrip(".").startswith("0") and kind != "p" or new in ("0", "00"):
+                        continue
+                    text = typed.replace(f"{old}", f"{new}", 1) if kind != "df2" else typed.replace(f",{old}", f",{new}", 1).replace(f", {old}", f", {new}", 1)
+                    (e,) = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("F")]
+                    misfits[kind] += {"p-does-not-follow", "effect-does-not-fit"} <= set(e.codes)
+                    if "typo-fits" not in e.codes:
+                        continue
+                    fired[kind] += 1
+                    assert kind != "p", (text, e.message)
+                    said = e.message[e.message.index("both follow from"):]
+                    if kind == "F":
+                        low, _, high = re.search(r"= (\d*\.\d+(?: to \d*\.\d+)?):", said).group(1).partition(" to ")
+                        assert float(low) - 0.006 <= f <= float(high or low) + 0.006, (text, said)
+                    else:
+                        pairs = [tuple(map(int, m)) for m in re.findall(r"F\((\d+), (\d+)\)", said)]
+                        truth = int(d1) if kind == "df1" else int(d2)
+                        spots = [a if kind == "df1" else b for a, b in pairs]
+                        assert min(spots) <= truth <= max(spots), (text, said, truth)
+    # (seen: 68, 31 and 144 of the df₁, df₂ and F changes leave both the p and the η²p off, and each of them is named)
+    assert fired["p"] == misfits["p"] == 0 and all(fired[k] == misfits[k] > 20 for k in ("df1", "df2", "F")), (fired, misfits)

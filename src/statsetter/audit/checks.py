@@ -121,6 +121,11 @@ CODES: dict[str, tuple[str, str]] = {
         "Participant flow: every participant counted once, those left out said with the reason (CONSORT 2010 item 13; "
         "JARS-Quant, participant flow) — recalled from memory; the arithmetic is definition",
     ),
+    "typo-fits": (
+        "an F's p and its η²p, neither following from it, both follow with one of its df or its value typed otherwise",
+        "η²p = F·df₁/(F·df₁ + df₂) (definition) and the F distribution's p; a df or digit mistyped is a usual cause of a p that "
+        "does not follow (Nuijten et al., 2016 — recalled from memory)",
+    ),
     "d-does-not-fit": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
@@ -137,7 +142,7 @@ SEVERITY: dict[str, str] = {
     "impossible-value": "error", "malformed-number": "warning", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
     "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning", "means-do-not-fit": "warning",
-    "sizes-do-not-add": "warning",
+    "sizes-do-not-add": "warning", "typo-fits": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning", "ratio-does-not-fit": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
@@ -325,7 +330,64 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     said_significant = reported[1] <= alpha
     if (said_significant and computed[0] >= alpha) or (not said_significant and computed[1] < alpha):
         found.append(Finding("verdict-changes", f"At alpha = {alpha:g} the recomputed p leads to the other decision.", evidence))
+    if given.op == "=" and not anywhere:
+        found += one_number_off(rep, reported)
     return found
+
+
+def _f_for_p(p: float, df: tuple[float, float]) -> float:
+    """The F whose upper-tail p on ``df`` is ``p`` (bisection: the tail falls as F grows)."""
+    low, high = 0.0, 1.0
+    while upper_tail("F", high, df) > p and high < 1e9:
+        low, high = high, high * 4
+    for _ in range(60):
+        mid = (low + high) / 2
+        low, high = (mid, high) if upper_tail("F", mid, df) > p else (low, mid)
+    return (low + high) / 2
+
+
+def one_number_off(rep: Reported, reported: tuple[float, float]) -> list[Finding]:
+    """An F whose exact p does not follow, beside an η²p that does not fit it either: the one number that, typed
+    otherwise, gives both — a df (whole, from the η²p: η²p/(1 − η²p) = F·df₁/df₂) or the F itself (where the F the p
+    gives and the F the η²p gives meet). Two numbers agreeing on the same other reading point to a typo there, and then
+    the p is not the number to change."""
+    eta = next((e for e in rep.effects if e.name == "eta2_p"), None)
+    if rep.symbol != "F" or eta is None or rep.value is None or len(rep.df) != 2 or not all(float(d.value).is_integer() and d.value > 0 for d in rep.df):
+        return []
+    e_low, e_high = eta.number.value - eta.number.half_unit, eta.number.value + eta.number.half_unit
+    f_low, f_high = rep.value.value - rep.value.half_unit, rep.value.value + rep.value.half_unit
+    if not (0 < e_low and e_high < 1 and f_low > 0):
+        return []
+    q_low, q_high = e_low / (1 - e_low), e_high / (1 - e_high)  # F·df₁/df₂
+    df1, df2 = int(rep.df[0].value), int(rep.df[1].value)
+    if _overlap((f_low * df1 / df2, f_high * df1 / df2), (q_low, q_high)):
+        return []  # the η²p fits as printed: the p alone is off
+
+    def p_fits(df: tuple[float, float], low: float, high: float) -> bool:
+        return _overlap((upper_tail("F", high, df), upper_tail("F", low, df)), reported)
+
+    def run(dfs: list[int], typed: Callable[[int], str]) -> list[str]:  # the df that fit, as one reading or a run of them
+        return [] if not dfs else [typed(dfs[0])] if len(dfs) == 1 else [f"{typed(dfs[0])} to {typed(dfs[-1])}"]
+
+    readings: list[str] = []
+    ones = range(max(1, math.ceil(q_low * df2 / f_high)), math.floor(q_high * df2 / f_low) + 1)
+    twos = range(max(1, math.ceil(f_low * df1 / q_high)), math.floor(f_high * df1 / q_low) + 1)
+    if len(ones) <= 40:
+        readings += run([one for one in ones if p_fits((one, df2), f_low, f_high)], lambda one: f"F({one}, {rep.df[1].text}) = {rep.value.text}")
+    if len(twos) <= 40:  # (a df₂ of some hundreds: a three-decimal η²p pins it to a dozen or so, the p to fewer)
+        readings += run([two for two in twos if p_fits((df1, two), f_low, f_high)], lambda two: f"F({rep.df[0].text}, {two}) = {rep.value.text}")
+    by_eta = (q_low * df2 / df1, q_high * df2 / df1)
+    by_p = (_f_for_p(min(reported[1], 1.0), (df1, df2)), _f_for_p(max(reported[0], 1e-300), (df1, df2)))
+    value = (max(by_eta[0], by_p[0]), min(by_eta[1], by_p[1]))
+    if value[0] <= value[1] and not reported[0] <= 0:
+        shown = f"{value[0]:.2f}" if f"{value[0]:.2f}" == f"{value[1]:.2f}" else f"{value[0]:.2f} to {value[1]:.2f}"
+        readings.append(f"F({rep.df[0].text}, {rep.df[1].text}) = {shown}")
+    if not readings or len(readings) > 2:
+        return []
+    return [Finding("typo-fits", f"The p and {eta.symbol_text} = {eta.number.text} both follow from "
+                                 f"{' or '.join(readings)}: one number may be mistyped; check it before changing the p.",
+                    f"{eta.symbol_text} = {eta.number.text}, {rep.p.symbol_text if rep.p else 'p'} = "
+                    f"{rep.p.number.text if rep.p and rep.p.number else ''}")]
 
 
 _MANY_DF = 10**7  # beyond this a t's p is the normal's to the digits any manuscript prints

@@ -153,6 +153,9 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         if any(f.code in ("means-do-not-fit", "counts-do-not-fit") for f in findings):  # the statistic itself is in doubt (the
             record = replace(record, p=None, precision={k: v for k, v in record.precision.items() if k != "p"})  # table's
             return named(rep, render(record, "stats", style), style).plain() + " (p left out: the statistic itself does not follow from the table's numbers beside it)"
+        if any(f.code == "typo-fits" for f in findings):  # the p may be right and a df or the value mistyped
+            record = replace(record, p=None, precision={k: v for k, v in record.precision.items() if k != "p"})
+            return named(rep, render(record, "stats", style), style).plain() + " (p left out: it follows with one other number typed otherwise)"
         if doubted and record.statistic is not None and (record.statistic.df or record.statistic.symbol == "z"):  # (a z needs none)
             recomputed = p_from_statistic(record.statistic.symbol, record.statistic.value, record.statistic.df)
             record = replace(record, p=recomputed, precision={k: v for k, v in record.precision.items() if k != "p"})
