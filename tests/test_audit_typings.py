@@ -87,6 +87,11 @@ CASES = [
     # evaluate linear data with R": lm(mpg ~ wt, mtcars)); the F, its df and the p had none of them been read
     ("F-statistic: 91.38 on 1 and 30 DF,  p-value: 1.294e-10", "F", (1, 30), None, 91.38, "=", 1.294e-10),
     (f"F-statistic: 3.87 on 2 and 61 DF,  p-value: {F:.4g}", "F", (2, 61), None, 3.87, "=", float(f"{F:.4g}")),
+    # "DF = 2" in capitals, as statistics programs print it and authors paste it ("H = 8.63  DF = 2  P = 0.013", a
+    # Kruskal–Wallis test in a program's published example: https://www.pinzhi.org/Minitab/Stat/ST_Nonparametrics/
+    # Kruskal_Wallis/Example_of_Kruskal_Wallis_Test.htm); the df had not been read, so the p was held to every df
+    ("H = 8.63  DF = 2  P = 0.013", "H", (2,), None, 8.63, "=", 0.013),
+    (f"chi-square = 7.42, DF = 3, P = {p3(C)}", "chi2", (3,), None, 7.42, "=", float(p3(C))),
 ]
 
 

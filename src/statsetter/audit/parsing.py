@@ -369,8 +369,9 @@ class _Patterns:
         self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
                                 rf"\s*+(?P<num>{value})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|{_DASH})\s*+(?P<rb>{num})\s*+[)\]])")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
-        # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)"; or after their numbers, "(38 df)", "with 2 and 97 df"
-        self.df = re.compile(rf"d(?<![\w]d)\.?f\.?\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
+        # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)", as output prints it "DF = 2"; or after their numbers,
+        # "(38 df)", "with 2 and 97 df"
+        self.df = re.compile(rf"(?:d(?<![\w]d)\.?f\.?|D(?<![\w]D)F(?![\w]))\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
                              rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         # the unstandardised coefficient as "B" or "b", its standard error as "SE", "SE B" or "SEB"
