@@ -392,3 +392,89 @@ def test_a_hazards_ratio_head(tmp_path):
     entries = _audit(tmp_path, _S12879)
     assert len(entries) == 24 and not any(e.codes for e in entries)
     assert entries[0].found == "HR = 1.724, 95% CI [1.103, 2.694], p = 0.017"
+
+
+# PMC6132365 (Clin Transl Sci 2018;11(5):487–497), Table 4, "Adjusted associations between willingness to participate in
+# health research and sociodemographic characteristics…", "Multinomial logistic regression: odds ratios and 95% confidence
+# intervals": each outcome's column under a head that names the comparison, not the ratio; rows as published (the marks'
+# note, "*p < .05, **p < .01, ***p < .001", from memory of the journal's usual note: the page's own is cut off in the copy)
+_PMC6132365 = [["18–24", "5.68*** (2.63,12.25)", "2.20 (0.84,5.76)"], ["25–34", "2.97*** (1.67,5.27)", "1.07 (0.52,2.23)"],
+               ["35–44", "2.48** (1.49,4.12)", "1.07 (0.59,1.93)"], ["45–54", "2.15** (1.38,3.35)", "1.18 (0.70,1.97)"],
+               ["55–64", "1.58** (1.10,2.27)", "1.17 (0.79,1.56)"], ["Female", "1.16 (0.87,1.51)", "1.13 (0.84,1.50)"],
+               ["Black", "1.74* (1.14,2.67)", "1.39 (0.4,2.30)"], ["Hispanic", "2.06 (0.89,4.77)", "1.43 (0.52,3.89)"],
+               ["Other", "1.08 (0.59,1.96)", "0.82 (0.37,1.84)"], ["Divorced/Separated", "1.62* (1.10,2.38)", "1.05 (0.67,1.67)"],
+               ["Widowed", "1.00 (0.66,1.54)", "0.92 (0.61,1.38)"], ["Never Married", "1.12 (0.68,1.86)", "0.98 (0.54,1.79)"],
+               ["Less Than High School", "0.51* (0.33,0.80)", "0.51* (0.30,0.86)"], ["High School Diploma/GED", "0.58** (0.43,0.87)", "0.60** (0.42,0.87)"],
+               ["Nonemployed", "1.32 (0.85,2.06)", "1.19 (0.70,2.01)"], ["Retired", "0.91 (0.60,1.38)", "1.13 (0.75,1.70)"],
+               ["Unable to Work", "1.19 (0.71,2.01)", "0.78 (0.41,1.46)"], ["100–199% FPL", "0.69 (0.44,1.08)", "0.74 (0.44,1.25)"],
+               ["200–299% FPL", "0.72 (0.43,1.19)", "0.75 (0.41,1.35)"], ["300–399% FPL", "0.48* (0.26,0.88)", "0.57 (0.30,1.09)"],
+               ["≥400% FPL", "0.68 (0.39,1.20)", "0.83 (0.46,1.50)"], ["Metro/urban", "0.90 (0.69,1.17)", "1.17 (0.84,1.62)"]]
+_PMC6132365_CAPTION = ("Table 4. Adjusted associations between willingness to participate in health research and sociodemographic "
+                       "characteristics, access to care, and health status. Multinomial logistic regression: odds ratios and 95% confidence intervals")
+
+
+def test_a_ratio_the_caption_names_under_heads_that_name_the_outcomes(tmp_path):
+    """Where the caption names one ratio and its 95% CI and the heads name the outcomes compared ("(yes vs. no)"), each
+    "5.68*** (2.63,12.25)" cell is that ratio (adjusted where the caption says so), its marks its p; none had been read.
+    PMC6132365's Table 4: all 44 read; its "1.39 (0.4,2.30)" is found — the interval centres on 0.96 on the log scale (a
+    lower limit of 0.84 would centre it on 1.39) — and no other. The same rows under a caption or note that says the cells
+    are medians with their IQR, or under heads that name them, are not read as ratios."""
+    note = "Note. *p < .05, **p < .01, ***p < .001."
+    entries = _audit(tmp_path, _table(_PMC6132365_CAPTION, ["Variables", "(yes vs. no)", "(undecided vs. no)"], _PMC6132365, note))
+    assert len(entries) == 44 and all(e.found.startswith("aOR = ") for e in entries), [e.found for e in entries]
+    assert entries[0].found == "aOR = 5.68, 95% CI [2.63, 12.25], p < .001"
+    assert [(e.found, e.codes) for e in entries if e.codes] == [("aOR = 1.39, 95% CI [0.4, 2.30]", ["ratio-does-not-fit"])]
+    assert math.isclose(math.exp((math.log(0.4) + math.log(2.30)) / 2), 0.959, abs_tol=5e-4)
+    for caption, heads in ((_PMC6132365_CAPTION + "; values are median (IQR)", ["Variables", "(yes vs. no)", "(undecided vs. no)"]),
+                           (_PMC6132365_CAPTION, ["Variables", "Median (IQR), yes", "Median (IQR), undecided"])):
+        assert not _audit(tmp_path, _table(caption, heads, _PMC6132365, note)), (caption, heads)
+
+
+# PMC8392743 (BMJ Open 2021;11:e045845), Table 2, "Logistic regression results for the impact of the COVID-19 pandemic on
+# unmet healthcare needs", as SAS prints a logistic model: the OR, its "95% Wald confidence limits" in two columns under
+# one head, and "Pr >Χ2" (SAS's "Pr > ChiSq" as the journal set it); rows as published
+_PMC8392743 = [["Woman", "1.83", "1.141", "2.936", "0.012"], ["Age", "0.975", "0.953", "0.997", "0.028"],
+               ["Some college and above", "0.486", "0.278", "0.848", "0.011"], ["Yes", "1.178", "0.588", "2.359", "0.644"],
+               ["Yes", "1.004", "0.459", "2.196", "0.992"], ["Blue-collar job or self-employed", "0.653", "0.35", "1.217", "0.180"],
+               ["Economically inactive population", "0.532", "0.308", "0.92", "0.024"], ["Good", "1.578", "0.992", "2.509", "0.054"],
+               ["1 chronic disease", "2.234", "1.263", "3.952", "0.006"], ["2 or more chronic diseases", "2.341", "1.081", "5.067", "0.031"],
+               ["Yes", "1.042", "0.583", "1.861", "0.890"], ["Yes", "2.353", "1.284", "4.312", "0.006"],
+               ["Above $1675 and less than $2512", "0.665", "0.298", "1.484", "0.319"], ["Above $2512 and less than $4187", "0.973", "0.417", "2.271", "0.950"],
+               ["Above $4187", "0.487", "0.17", "1.394", "0.180"], ["Yes", "1.047", "0.666", "1.646", "0.843"],
+               ["Perceived susceptibility", "1.178", "0.869", "1.598", "0.291"], ["Perceived severity", "1.218", "0.889", "1.669", "0.219"],
+               ["High", "1.358", "0.864", "2.136", "0.185"], ["Fear", "1.432", "1.017", "2.017", "0.040"],
+               ["Stigma", "0.818", "0.617", "1.085", "0.163"], ["Yes", "0.675", "0.334", "1.365", "0.274"]]
+
+
+def test_sas_confidence_limits_under_one_head_and_its_p_head(tmp_path):
+    """SAS's layout — "OR | 95% Wald Confidence Limits (over two columns) | Pr > ChiSq" — had not been read at all. As a
+    Markdown table (the second limit's head empty) and as a Word table (the head merged over both), PMC8392743's 22 odds
+    ratios are read with their limits and p, and none is found (each p is the interval's: Woman's 1.83 (1.141–2.936)
+    gives z = 2.51, p = .012); a p moved to 0.12 and a ratio moved off its interval's centre are."""
+    import docx
+
+    heads = ["Effect", "OR", "95% Wald confidence limits", "", "Pr >Χ2"]
+    caption = "Table 2. Logistic regression results for the impact of the COVID-19 pandemic on unmet healthcare needs"
+    entries = _audit(tmp_path, _table(caption, heads, _PMC8392743))
+    assert len(entries) == 22 and not [e.codes for e in entries if e.codes], [(e.found, e.codes) for e in entries if e.codes]
+    assert entries[0].found == "OR = 1.83, 95% CI [1.141, 2.936], p = 0.012"
+    se = (math.log(2.936) - math.log(1.141)) / (2 * stats.norm.isf(0.025))
+    assert f"{2 * stats.norm.sf(math.log(1.83) / se):.3f}" == "0.012"
+    rows = [r[:] for r in _PMC8392743]
+    rows[0][4], rows[8][1] = "0.12", "3.234"
+    for head in ("Pr >Χ2", "Pr > ChiSq"):
+        moved = _audit(tmp_path, _table(caption, heads[:4] + [head], rows))
+        assert [(e.found, e.codes) for e in moved if e.codes] == [("OR = 1.83, 95% CI [1.141, 2.936], p = 0.12", ["ci-p-disagree"]),
+                                                                 ("OR = 3.234, 95% CI [1.263, 3.952], p = 0.006", ["ratio-does-not-fit"])]
+    d = docx.Document()
+    d.add_paragraph(caption)
+    table = d.add_table(rows=len(rows) + 1, cols=5)
+    for c, text in enumerate(heads):
+        table.cell(0, c).text = text
+    table.cell(0, 2).merge(table.cell(0, 3)).text = "95% Wald confidence limits"
+    for r, row in enumerate(rows, start=1):
+        for c, text in enumerate(row):
+            table.cell(r, c).text = text
+    d.save(str(tmp_path / "sas.docx"))
+    found = audit_file(tmp_path / "sas.docx")
+    assert len(found) == 22 and [e.codes for e in found if e.codes] == [["ci-p-disagree"], ["ratio-does-not-fit"]], [(e.found, e.codes) for e in found]

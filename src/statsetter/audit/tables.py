@@ -28,7 +28,9 @@ if TYPE_CHECKING:
 __all__ = ["TableStatistic", "table_statistics", "star_bounds", "df_readings", "sizes_in", "caption_sizes", "Reading"]
 
 # an interval's head: "95% CI", "95% confidence interval", "CI (95%)", "Bootstrapped 95% CI", "CI"
-_INTERVAL_HEAD = (r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:CI|C\.I\.?|confidence\s+interval)|(?:CI|C\.I\.?|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)")
+# (SAS's "95% Wald Confidence Limits", "95% Profile Likelihood Confidence Limits")
+_INTERVAL_HEAD = (r"(?:bootstrap(?:ped)?\s+)?(?:\d{2}(?:\.\d)?\s?%\s?(?:(?:wald|profile[- ]likelihood|likelihood[- ]ratio)\s+)?"
+                  r"(?:CI|C\.I\.?|confidence\s+(?:interval|limits))|(?:CI|C\.I\.?|confidence\s+interval)(?:\s*\(?\d{2}(?:\.\d)?\s?%\)?)?)")
 # its limits named after it: "95% CI of B (lower–upper)", "95% CI (LL, UL)"
 _LIMITS_NAMED = r"(?:\s*\(\s*(?:lower|LL)\s*(?:[–—,/-]|to)\s*(?:upper|UL)\s*\))?"
 # (footnote letters after a p head, glued or spaced, several by commas: "P valuea", "P value a", "P valueb,c"; glued to an
@@ -77,7 +79,8 @@ _ROLES = (
     # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
     (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\)|Probability|PV)(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
     # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
-    (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|Chi(?:sq)?)\s?\)?"), "p"),
+    # (and SAS's "Pr > ChiSq", "Pr > |t|", "Pr > F"; "Pr > Χ2" as a journal sets it)
+    (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|[Cc]hi(?:[Ss]q)?|[χΧ]\s?[²2])\s?\)?"), "p"),
     # SPSS's Chi-Square Tests: the asymptotic p of each row's χ² (its Exact Sig. columns, Fisher's and exact tests', are not
     # the χ²'s own p), and its statistics under "Value", each named by its row (_CHI_ROW)
     (re.compile(r"(?i)asymp(?:\.|totic)\s*sig(?:\.|nificance)\s*(?:\(2-sided\))?"), "p"),
@@ -140,6 +143,13 @@ _RATIO_ESTIMATE_HEAD = re.compile(rf"(?i)\s*((?:un)?adjusted|crude|multivariable
 # the ratio an exp(B) column's head names, and whether adjusted: "AOR", "Adjusted IRR", "cHR", "Hazard ratio" (an odds ratio's otherwise)
 _COLUMN_RATIO = re.compile(r"(?i)\s*(?P<adj>[ac](?=(?:or|hr|rr|irr|pr)\b)|adj(?:usted|\.)?\s*|crude\s+)?(?P<name>or|hr|rr|irr|pr|odds\s+ratio|"
                            r"hazards?\s+ratio|risk\s+ratio|relative\s+risk|(?:incidence\s+)?rate\s+ratio|prevalence\s+ratio)\b")
+_CI_SAID = re.compile(r"(?i)\b95\s?%\s?(?:CIs?\b|confidence\s+(?:intervals?|limits))")  # a caption's or note's "95% confidence intervals"
+# heads over an "x (a, b)" cell that make it something other than a ratio with its interval
+_NOT_RATIO_HEAD = re.compile(r"(?i)median|IQR|quartile|\brange|\bmean|\bSD\b|%|percent|\bn\b|count|frequenc|\bmin|\bmax|difference|\bB\b|β|coefficient|estimate")
+# a caption or note that says some cells are descriptives ("values are median (IQR)", "mean (95% CI)")
+_DESCRIBED = re.compile(r"(?i)median\s*[(\[]|\bIQR\b|interquartile|\bmeans?\s*[(\[±]|\(\s*range\s*\)")
+# (and row labels that do: "Age, median (IQR)", "n (%)" — not a category's own "%", "≥400% FPL")
+_NOT_RATIO_ROW = re.compile(r"(?i)median|IQR|quartile|\brange\b|\bmean\b|\bSD\b|\(\s*%\s*\)|\bcount|frequenc")
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
@@ -941,6 +951,17 @@ def _effect_cells(row, roles: dict[int, str], numbers, column: int, names: Seque
     return out
 
 
+def _limits_under(rows: "dict[int, dict[int, tuple[Unit, list[Reported]]]]", order: Sequence[int], r: int, c: int,
+                  header: "dict[int, tuple[Unit, list[Reported]]]", mark: str) -> bool:
+    """Whether an interval's head at column ``c`` of header row ``r`` stands over two columns of limits: it spans two (a
+    merged cell), or the head after it is empty; and the first row below with numbers has a bare number in each."""
+    head = header[c][0]
+    if head.columns != 2 and c + 1 in header and header[c + 1][0].text.strip():
+        return False
+    below = next((rows[k] for k in order if k > r and any(_number(u.text, mark) for u, _ in rows[k].values())), None)
+    return below is not None and all(k in below and _number(below[k][0].text, mark) is not None for k in (c, c + 1))
+
+
 def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: str, mark: str,
                      stars: "dict[str, tuple[str, Number]] | None" = None, said: str = "", welch: bool = False,
                      labelled: bool = True) -> tuple[list[TableStatistic], set[int]]:
@@ -978,6 +999,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     kinds = {" ".join(m.group().lower().rstrip("s").split()) for m in _RATIOS_SAID.finditer(f"{caption} {said}")} if ratios_said else set()
     said_ratio = next(iter(kinds)) if len(kinds) == 1 else None  # the one kind of ratio the caption or note names: an "Estimate (95% CI)"'s
     note_df = _said_df(f"{caption} {said}")
+    caption_ratio = _ratio_role(f"{'adjusted ' if _ADJUSTED_SAID.search(caption) else ''}{said_ratio} (95% CI)").removeprefix("ratio:") \
+        if said_ratio is not None and _CI_SAID.search(f"{caption} {said}") and not _DESCRIBED.search(f"{caption} {said}") else None  # type: ignore[union-attr]
     words_above: dict[int, str] = {}  # each column's words in the rows without numbers above (its head, a spanner's)
     spanned: dict[int, str] = {}  # the ratio a spanner in the row above names, for each column it spans
     width = max((c + row_cells[0].columns - 1 for r in rows for c, row_cells in rows[r].items()), default=0)  # the table's columns
@@ -1025,6 +1048,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             # the second row of a two-row header adds its heads to the first's (SPSS's Coefficients: "t", "Sig." above,
             # "B", "Std. Error" under "Unstandardized Coefficients" below)
             found_heads = {c: role for c, role in header.items() if role is not None}
+            for c in [c for c, role in found_heads.items() if role == "ci"]:  # an interval's head over its two limits' columns
+                if _limits_under(rows, order, r, c, row, mark):  # (SAS's "95% Wald Confidence Limits", merged over two)
+                    found_heads[c], found_heads[c + 1] = "ci_low", "ci_high"
             if "paired differences" in wordy.lower():  # SPSS's Paired Samples Test: the differences' mean and its SE
                 for c, (u, _) in row.items():
                     named = " ".join(u.text.lower().split())
@@ -1060,6 +1086,12 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
             roles.get(min(row)) == "expB" or ratios_said) else None  # (not a heart rate's "HR" row of a table of descriptives)
         if stub is not None:  # the row names its ratio, the columns their outcomes ("cOR | 2.19 (1.46–3.28) | < 0.001 | …")
             ratios = {c: _ratio_cell(row[c][0].text, mark) for c in sorted(row)[1:]}
+        elif caption_ratio is not None and not any(ratios.values()) and set(roles.values()) <= {"p"} and not _NOT_RATIO_ROW.search(row[min(row)][0].text):
+            # the caption names one ratio with its 95% CI, the heads the outcomes or models ("(yes vs. no) | (undecided vs.
+            # no)" under "odds ratios and 95% confidence intervals"): a cell "5.68*** (2.63,12.25)" under a head that names
+            # nothing else (not a median's IQR, a mean's interval, a count), in a row whose label does not either, in a table
+            # whose heads name no other column than a p, is that ratio
+            ratios = {c: _ratio_cell(row[c][0].text, mark) for c in sorted(row)[1:] if c not in roles and not _NOT_RATIO_HEAD.search(words_above.get(c, ""))}
         if not heads_in_row and not any(v is not None for c, v in numbers.items() if roles.get(c) in _STAT_ROLES or roles.get(c) == "value") and not any(ratios.values()):
             if coefficients and not any(role in _STAT_ROLES or role == "value" for role in roles.values()):  # no test column
                 if id(roles) not in log_odds:
@@ -1074,7 +1106,8 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
         # a ratio and its CI in one cell, its p in the next p column to the right (a crude and an adjusted pair side by side),
         # or in the one just before it where each ratio column has its p before it and none comes after the last ("P | OR
         # (95% CI) | P | Adjusted OR (95% CI)", as a family medicine journal lays it out)
-        ratio_cols = [k for k in sorted(ratios) if ratios[k] is not None] if stub is not None else [k for k in sorted(roles) if roles[k].startswith("ratio:")]
+        ratio_cols = [k for k in sorted(ratios) if ratios[k] is not None] if stub is not None or not any(r.startswith("ratio:") for r in roles.values()) \
+            else [k for k in sorted(roles) if roles[k].startswith("ratio:")]
         p_cols = [k for k in sorted(roles) if roles[k] == "p"]
         p_before = bool(ratio_cols) and bool(p_cols) and p_cols[-1] < ratio_cols[-1] and all(
             any(a < k < b for k in p_cols) for a, b in zip([-1] + ratio_cols, ratio_cols))
@@ -1091,7 +1124,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 if p_col is not None and later is not None and later < p_col:
                     p_col = None  # the p beyond the next ratio column is that one's
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
-            name = _stub_ratio(stub) if stub is not None else roles[c].removeprefix("ratio:")
+            name = _stub_ratio(stub) if stub is not None else roles[c].removeprefix("ratio:") if c in roles else caption_ratio  # type: ignore[assignment]
             marked = _marked_bound(unit.text, stars, high.end) if p is None and p_col is None and stars else None  # "1.29 (1.18–1.40)**"
             rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p or (marked[0] if marked else None), high.end)
             if stub is None and id(roles) not in log_odds_ratio:
