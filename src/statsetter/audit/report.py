@@ -27,6 +27,7 @@ from .checks import _LEVEL_NAMED, CODES, RATIOS, FORMER_CODES, SEVERITIES, Findi
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
 from .counts import CountTest, count_tests, counts_fit, fraction_tests, size_tests
 from .means import GroupMeans, category_means, group_means, means_fit
+from .models import _R2_ROW, ModelFit, model_fit, model_fits
 from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
@@ -190,6 +191,7 @@ class _Item:
     squares: "Squares | None" = None  # an ANOVA row's SS, df and MS and its error row's (tables.Squares)
     counts: "CountTest | None" = None  # a categorical variable's counts by group, which give its χ² and p (counts.CountTest)
     means: "GroupMeans | None" = None  # the groups' means, SDs and sizes beside a t or F (means.GroupMeans)
+    model: "ModelFit | None" = None  # a model's R², predictors and N beside its F, in a table of models side by side (models.ModelFit)
 
 
 _DIGIT = re.compile(r"\d")
@@ -332,6 +334,11 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                 elif items[k].rep.symbol == m.rep.symbol and not items[k].rep.df:  # (read from an "F" or "t" column: its df are the n's)
                     df = tuple(d.value for d in m.rep.df)  # type: ignore[union-attr]
                     items[k] = replace(items[k], means=m, how=f"{items[k].how}, {how}", readings=(Reading(df, f"df = {', '.join(f'{d:g}' for d in df)}, from the categories' n's"),))
+        if any(_R2_ROW.fullmatch(u.text) for _, c, u, _ in cells if c == 1):  # (a row of R² under models side by side)
+            taken = {id(it.unit) for it in items}
+            items += [_Item(m.unit, m.rep, None, (), f"read from the table's column: its F row, R² row{', ΔR² row' if m.delta else ''}, "
+                                                     f"{m.k} coefficients above them, N = {m.n} ({m.n_said})", context, model=m)
+                      for m in model_fits(cells, said, mark, star_bounds(said, mark)) if id(m.unit) not in taken]
         items += [_Item(u, rep, rep, context=context) for _, _, u, reps in cells for rep in reps if id(rep) not in read]
         yield from sorted(items, key=lambda it: (it.unit.cell, it.rep.start))  # type: ignore[arg-type, return-value]
         i = j
@@ -567,6 +574,8 @@ def _audit_units(
             findings += counts_fit(item.counts, alpha, unheld)
         if item.means is not None:  # a t (or F) against the two groups' means, SDs and sizes beside it
             findings += means_fit(rep, item.means)
+        if item.model is not None:  # a model's F against its R², predictors and N, in a table of models side by side
+            findings += model_fit(item.model)
         if item.squares is not None:  # an ANOVA row's SS, MS and F against each other and its error row's
             findings += squares_fit(rep, item.squares)
         if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns (its p, where no test is given)
