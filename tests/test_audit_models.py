@@ -85,7 +85,8 @@ def test_a_published_tables_models_were_not_fitted_to_its_n(tmp_path):
     entries = _audit(tmp_path, _table(caption, heads, _PMC8968192, note))
     assert len(entries) == 10 and entries[0].found == "F(5, 1212) = 9.365, p < 0.01", [e.found for e in entries]
     assert all(e.codes == ["effect-does-not-fit"] for e in entries), [(e.found, e.codes) for e in entries]
-    assert "they give 10.76 to 11.02" in entries[0].message and "N from 1,036 to 1,061 would give it" in entries[0].message
+    assert "they give 10.76 to 11.02; N from 1,036 to 1,061 would give it" in entries[0].message
+    assert entries[0].suggestion == ""  # (its df are the audit's reading of the column and the caption's N: no restyled F on them)
     assert "they give 114.27 to 114.77, nor as a step's F change from ΔR² = 0.332 on 1 added" in entries[3].message
     assert (10.76, 11.02) == tuple(round(r / 5 / ((1 - r) / 1212), 2) for r in (0.0425, 0.0435))  # (the arithmetic, apart)
     d = docx.Document()

@@ -130,7 +130,7 @@ def model_fit(fit: ModelFit) -> list[Finding]:
     n_low = shown[0] * k * (1 - r_high) / r_high + k + 1
     n_high = shown[1] * k * (1 - r_low) / r_low + k + 1
     would = f"N = {round(n_low):,}" if round(n_low) == round(n_high) else f"N from {round(n_low):,} to {round(n_high):,}"
-    change = f", nor as a step's F change from ΔR² = {fit.delta.text} on {fit.added} added" if fit.delta is not None else ""
+    change = f", nor as a step's F change from ΔR² = {fit.delta.text} on {fit.added} added" if fit.delta is not None and fit.added < k else ""
     return [Finding("effect-does-not-fit",
                     f"F = {f.text} does not follow from R² = {fit.r2.text} with {k} predictor{'s' if k > 1 else ''} (the coefficients in its "
                     f"column) and N = {fit.n:,} ({fit.n_said}): as the model's F they give {_span(*model)}{change}; {would} would give it. "

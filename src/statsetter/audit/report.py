@@ -667,7 +667,8 @@ def _audit_units(
         # a Wald χ² beside its B and SE has 1 df, whether typed or not: suggested with it (a t's df read from group sizes or N
         # are assumptions, said in the JSON's `recomputed`, and stay out of the suggestion)
         basis = recheck[0] if recheck is not None and item.readings == (ONE_COEFFICIENT,) else rep
-        suggestion = _suggest(basis, resolved, alpha, findings, house if basis is rep else _UNMADE) if findings or suggest_all else ""
+        suggestion = _suggest(basis, resolved, alpha, findings, house if basis is rep else _UNMADE) if (findings or suggest_all) and item.model is None else ""
+        # (a model's F in a table of models side by side: its df are the audit's reading of the column and the caption's N)
         form = icc_form(rep)
         if suggestion and form is not None:  # the ICC's form as typed (ICC(2,1): which estimator), which the style's symbol leaves out
             suggestion = suggestion.replace("ICC", form.replace(" ", ""), 1)
