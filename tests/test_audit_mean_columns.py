@@ -216,3 +216,32 @@ def test_a_pre_post_tables_t_is_read_with_a_paired_df(tmp_path):
     assert [e.codes for e in entries] == [[]]
     assert "df = 30 − 1 (a paired t: the heads name occasions" in entries[0].row()["recomputed"]
     assert 2 * stats.t.sf(5.80, 58) < 1e-6 < p  # (on the two-group df the printed p would not have followed)
+
+
+def test_welchs_anova_f_of_three_groups_is_held_to_their_means(tmp_path):
+    """Welch's (1951) ANOVA F of k groups from their means, SDs and n's, F = [Σ w(m − m̄)²/(k − 1)] / [1 + 2(k − 2)/(k² − 1)
+    Σ (1 − w/W)²/(n − 1)], w = n/s², held to the printed digits as the one-way F is: before, an F of three or more groups
+    beside a caption naming Welch's test was not held, and where no test was named a Welch F would have been taken for a
+    misfit of the one-way F. The truth: pingouin's welch_anova and anova on its bundled penguins data (Palmer Station),
+    body mass, flipper length and bill length by species — each printed F, Welch's under a Welch caption and either under a
+    plain one, gives no finding; an F moved by a tenth is found, saying the range of each test the table allows."""
+    import pingouin as pg
+
+    data = pg.read_dataset("penguins")
+    for dv in ("body_mass_g", "flipper_length_mm", "bill_length_mm"):
+        sub = data.dropna(subset=[dv])
+        stat = sub.groupby("species")[dv].agg(["mean", "std", "count"])
+        welch = float(pg.welch_anova(data=sub, dv=dv, between="species")["F"].iloc[0])
+        classic = float(pg.anova(data=sub, dv=dv, between="species")["F"].iloc[0])
+        heads = " | ".join(f"{name} (n = {n})" for name, n in zip(stat.index, stat["count"]))
+        cells = " | ".join(f"{m:.1f} ± {s:.1f}" for m, s in zip(stat["mean"], stat["std"]))
+
+        def table(caption: str, f: float) -> str:
+            return f"{caption}\n\n| Variable | {heads} | F | P |\n|---|---|---|---|---|---|\n| {dv} | {cells} | {f:.2f} | < 0.001 |\n"
+
+        for caption, f in (("Table 2. By species (Welch's ANOVA)", welch), ("Table 2. By species", welch), ("Table 2. By species", classic)):
+            assert [e.codes for e in _audit(tmp_path, table(caption, f))] == [[]], (dv, caption, f)
+        (moved,) = _audit(tmp_path, table("Table 2. By species (Welch's ANOVA)", welch * 1.1))
+        assert moved.codes == ["means-do-not-fit"] and "Welch's ANOVA's" in moved.message and "one-way" not in moved.message, moved.message
+        (moved,) = _audit(tmp_path, table("Table 2. By species", classic * 1.1))
+        assert moved.codes == ["means-do-not-fit"] and "one-way ANOVA's" in moved.message and "Welch's ANOVA's" in moved.message, moved.message

@@ -106,10 +106,11 @@ CODES: dict[str, tuple[str, str]] = {
         "named in the note (practice)",
     ),
     "means-do-not-fit": (
-        "a table's t (or two groups' F) that the two groups' means, SDs and sizes beside it do not give, by Student's test or "
-        "Welch's, with the printed digits of each",
+        "a table's t (or F) that the groups' means, SDs and sizes beside it do not give, by Student's test or Welch's (two "
+        "groups), one-way ANOVA or Welch's ANOVA (more), with the printed digits of each",
         "Independent-samples t test: t = (M₁ − M₂) / SE, SE from the pooled SD (Student) or √(s₁²/n₁ + s₂²/n₂) (Welch); "
-        "F = t² for two groups (definitions; practice for a table's layout)",
+        "F = t² for two groups; one-way ANOVA's F and Welch's (1951) ANOVA F from the groups' means, SDs and n's "
+        "(definitions; practice for a table's layout)",
     ),
     "percent-does-not-fit": (
         "a table's percent that is not its count's share of its column, its group's n or its row, whichever the table's other "

@@ -41,7 +41,7 @@ class GroupMeans:
     groups: tuple[tuple[float, float, float, float, int], ...]
     typed: str  # the cells as the table prints them
     rep: Reported | None = None  # the statistic with its p, where the table reader had not read it (a "F/t value" column)
-    welch: bool = False  # the caption or note names Welch's test: an F of more than two groups is Welch's ANOVA's, not held
+    welch: bool = False  # the caption or note names Welch's test: an F of more than two groups is held to Welch's ANOVA only
 
 
 # a mean with its SD in parentheses, "45.3 (6.2)" — read so only where the table says its cells are means and SDs
@@ -176,33 +176,62 @@ def _t_range(groups: GroupMeans, welch: bool) -> tuple[float, float]:
     return low, (d + h1 + h2) / low_se if low_se > 0 else math.inf
 
 
-def _f_range(groups: GroupMeans) -> tuple[float, float]:
-    """The one-way ANOVA F that k groups' printed means, SDs and sizes allow: the between-groups sum of squares at its
-    least (the means drawn together within their half units: each clamped to one common value, found by bisection) and
-    at its most (the means pushed apart: a corner of their box, where a convex function peaks), over the within-groups
-    sum of squares at its most and least (it grows with each SD)."""
-    g = groups.groups
-    n = [x[4] for x in g]
-    total, k = sum(n), len(g)
-    lows, highs = [x[0] - x[1] for x in g], [x[0] + x[1] for x in g]
+def _spread(lows: Sequence[float], highs: Sequence[float], weights: Sequence[float]) -> tuple[float, float]:
+    """The weighted sum of squares of k means about their weighted mean, Σ w(m − m̄)², at its least and its most over
+    the box their printed digits allow: at its least the means drawn together (each clamped to one common value, found by
+    bisection), at its most pushed apart (a corner of the box, where a convex function peaks; beyond ten groups twice
+    the centre's, a bound)."""
+    total = sum(weights)
 
-    def between(means: Sequence[float]) -> float:
-        grand = sum(w * m for w, m in zip(n, means)) / total
-        return sum(w * (m - grand) ** 2 for w, m in zip(n, means))
+    def spread(means: Sequence[float]) -> float:
+        grand = sum(w * m for w, m in zip(weights, means)) / total
+        return sum(w * (m - grand) ** 2 for w, m in zip(weights, means))
 
     a, b = min(lows), max(highs)
     for _ in range(100):  # the common value c whose clamped means have c as their weighted mean
         c = (a + b) / 2
-        if sum(w * (min(max(c, lo), hi) - c) for w, lo, hi in zip(n, lows, highs)) > 0:
+        if sum(w * (min(max(c, lo), hi) - c) for w, lo, hi in zip(weights, lows, highs)) > 0:
             a = c
         else:
             b = c
-    least = between([min(max(c, lo), hi) for lo, hi in zip(lows, highs)])
-    most = max(between(corner) for corner in _corners(lows, highs)) if k <= 10 else between([x[0] for x in g]) * 2
+    least = spread([min(max(c, lo), hi) for lo, hi in zip(lows, highs)])
+    most = max(spread(corner) for corner in _corners(lows, highs)) if len(lows) <= 10 else spread([(lo + hi) / 2 for lo, hi in zip(lows, highs)]) * 2
+    return least, most
+
+
+def _f_range(groups: GroupMeans) -> tuple[float, float]:
+    """The one-way ANOVA F that k groups' printed means, SDs and sizes allow: the between-groups sum of squares at its
+    least and at its most (_spread, weighted by the n's), over the within-groups sum of squares at its most and least (it
+    grows with each SD)."""
+    g = groups.groups
+    n = [x[4] for x in g]
+    total, k = sum(n), len(g)
+    least, most = _spread([x[0] - x[1] for x in g], [x[0] + x[1] for x in g], n)
     within_low = sum((w - 1) * max(x[2] - x[3], 0.0) ** 2 for w, x in zip(n, g))
     within_high = sum((w - 1) * (x[2] + x[3]) ** 2 for w, x in zip(n, g))
     scale = (total - k) / (k - 1)
     return least / within_high * scale, (most / within_low * scale if within_low > 0 else math.inf)
+
+
+def _welch_f_range(groups: GroupMeans) -> tuple[float, float]:
+    """Welch's (1951) ANOVA F that k groups' printed means, SDs and sizes allow: F = [Σ w(m − m̄)²/(k − 1)] / [1 +
+    2(k − 2)/(k² − 1) Σ (1 − w/W)²/(n − 1)], w = n/s². Its numerator is least with every w at its least (each SD at its
+    most) and the means drawn together, most with every w at its most and the means apart (Σ w(m − c)² at its best c
+    grows with each w); its denominator's terms are bounded one by one over the w's."""
+    g = groups.groups
+    n = [x[4] for x in g]
+    k = len(g)
+    if any(x[2] - x[3] <= 0 for x in g):
+        return 0.0, math.inf
+    w_low = [m / (x[2] + x[3]) ** 2 for m, x in zip(n, g)]
+    w_high = [m / (x[2] - x[3]) ** 2 for m, x in zip(n, g)]
+    lows, highs = [x[0] - x[1] for x in g], [x[0] + x[1] for x in g]
+    least, most = _spread(lows, highs, w_low)[0], _spread(lows, highs, w_high)[1]
+    low_all, high_all = sum(w_low), sum(w_high)
+    c = 2 * (k - 2) / (k * k - 1)
+    d_low = 1 + c * sum((1 - hi / (hi + low_all - lo)) ** 2 / (m - 1) for lo, hi, m in zip(w_low, w_high, n))
+    d_high = 1 + c * sum((1 - lo / (lo + high_all - hi)) ** 2 / (m - 1) for lo, hi, m in zip(w_low, w_high, n))
+    return least / (k - 1) / d_high, most / (k - 1) / d_low
 
 
 def _corners(lows: Sequence[float], highs: Sequence[float]) -> "list[list[float]]":
@@ -218,7 +247,10 @@ def ranges(rep: Reported, groups: GroupMeans) -> dict[str, tuple[float, float]]:
     if len(groups.groups) == 2:
         two = {name: _t_range(groups, welch) for name, welch in (("Student's", False), ("Welch's", True))}
         return two if rep.symbol == "t" else {f"{name} t²": (low * low, high * high) for name, (low, high) in two.items()}
-    return {"one-way ANOVA's": _f_range(groups)} if rep.symbol == "F" and not groups.welch else {}  # (Welch's ANOVA: not held)
+    if rep.symbol != "F":
+        return {}
+    welch = {"Welch's ANOVA's": _welch_f_range(groups)}
+    return welch if groups.welch else {"one-way ANOVA's": _f_range(groups), **welch}  # (either, where the table names neither)
 
 
 def means_fit(rep: Reported, groups: GroupMeans) -> list[Finding]:
