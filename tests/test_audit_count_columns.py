@@ -392,3 +392,50 @@ def test_a_published_table_1_of_counts_and_means_with_two_chi_squares_typed_amis
                       "χ² = 0.01": ["counts-do-not-fit", "p-does-not-follow"], "χ² = 4.58": ["percent-does-not-fit"]}
     marital = next(e for e in entries if e.found.startswith("χ² = 0.42"))
     assert "Pearson's χ² 0.4145" in marital.message
+
+
+# PLOS ONE 2017;12(12):e0188736 (PMC5728480), Table 1, "Participants' characteristics according to the neighbourhood
+# socioeconomic deprivation class", as published: a Total column of counts first, each class's n (%), then the test in
+# three columns headed in full — "Pearson chi-square statistic | Degrees of freedom | p-value"
+_PMC5728480_HEADS = ["n = 1154 [n (%)]", "Total", "Class 1 Least deprived (n = 361)", "Class 2 (n = 623)", "Class 3 Most deprived (n = 170)",
+                     "Pearson chi-square statistic", "Degrees of freedom", "p-value"]
+_PMC5728480 = [
+    ["Age", "", "", "", "", "35.35", "4", "<0.001"], ["18–34 years", "78", "42 (11.6)", "29 (4.7)", "7 (4.1)", "", "", ""],
+    ["35–64 years", "818", "267 (74.0)", "427 (68.5)", "124 (72.9)", "", "", ""], ["65 or more years", "258", "52 (14.4)", "167 (26.8)", "39 (22.9)", "", "", ""],
+    ["Gender", "", "", "", "", "1.31", "2", "0.519"], ["Female", "699", "210 (58.2)", "383 (61.5)", "106 (62.4)", "", "", ""],
+    ["Male", "455", "151 (41.8)", "240 (38.5)", "64 (37.6)", "", "", ""],
+    ["Education", "", "", "", "", "155.07", "4", "<0.001"], ["4 years or less", "401", "58 (16.1)", "234 (37.6)", "109 (64.1)", "", "", ""],
+    ["5 to 11 years", "384", "122 (33.8)", "212 (34.0)", "50 (29.4)", "", "", ""], ["12 or more years", "369", "181 (50.1)", "177 (28.4)", "11 (6.5)", "", "", ""],
+    ["Current smoking behaviour", "", "", "", "", "12.95", "2", "0.002"], ["Smoker", "263", "105 (29.1)", "119 (19.1)", "39 (22.9)", "", "", ""],
+    ["Non-smoker", "891", "256 (70.9)", "504 (80.9)", "131 (77.1)", "", "", ""],
+    ["Excessive alcohol intake1", "", "", "", "", "3.19", "2", "0.203"], ["No", "866", "283 (78.4)", "459 (73.7)", "124 (72.9)", "", "", ""],
+    ["Yes", "288", "78 (21.6)", "164 (26.3)", "46 (27.1)", "", "", ""],
+    ["Sedentariness2", "", "", "", "", "7.11", "2", "0.029"], ["No", "803", "248 (68.7)", "450 (72.2)", "105 (61.8)", "", "", ""],
+    ["Yes", "351", "113 (31.3)", "173 (27.8)", "65 (38.2)", "", "", ""],
+    ["Chronic Disease", "", "", "", "", "17.68", "4", "0.001"], ["No", "443", "165 (45.7)", "217 (34.8)", "61 (35.9)", "", "", ""],
+    ["Yes", "710", "196 (54.3)", "406 (65.2)", "108 (63.5)", "", "", ""]]
+
+
+def test_a_chi_square_column_headed_in_full_beside_its_df_column(tmp_path):
+    """"Pearson chi-square statistic" and "Degrees of freedom" had been no heads the audit knew, and the variable's row,
+    with its df in a column of their own, no row naming a variable: none of PLOS ONE's seven χ² was read. Now each is,
+    on its printed df, and held to its counts: five follow (scipy's chi2_contingency gives 35.35, 1.31, 12.95, 3.19, 7.11);
+    Education's 155.07 is the counts' 155.077 cut, not rounded; Chronic Disease's χ²(4) = 17.68 is not its 2 × 3 table's,
+    whose counts give χ²(2) = 11.88, p = .0026 — in Markdown and in a Word table alike."""
+    counts = {"Education": [[58, 234, 109], [122, 212, 50], [181, 177, 11]], "Chronic Disease": [[165, 217, 61], [196, 406, 108]]}
+    assert [f"{chi2_contingency(np.array(c), correction=False)[0]:.3f}" for c in counts.values()] == ["155.077", "11.878"]
+    text = "Table 1. Participants' characteristics according to the neighbourhood socioeconomic deprivation class.\n\n" + \
+        "| " + " | ".join(_PMC5728480_HEADS) + " |\n|" + "---|" * 8 + "\n" + "\n".join("| " + " | ".join(r) + " |" for r in _PMC5728480) + "\n"
+    entries = _audit(tmp_path, text, "md")
+    assert [e.found for e in entries] == ["χ²(4) = 35.35, p < 0.001", "χ²(2) = 1.31, p = 0.519", "χ²(4) = 155.07, p < 0.001", "χ²(2) = 12.95, p = 0.002",
+                                          "χ²(2) = 3.19, p = 0.203", "χ²(2) = 7.11, p = 0.029", "χ²(4) = 17.68, p = 0.001"], [e.found for e in entries]
+    assert [e.codes for e in entries] == [[], [], ["counts-do-not-fit"], [], [], [], ["counts-do-not-fit"]], [(e.found, e.codes) for e in entries]
+    assert "on 2 df they give Pearson's χ² 11.878" in entries[-1].message and "on 4 df they give Pearson's χ² 155.077" in entries[2].message
+    d = docx.Document()
+    d.add_paragraph("Table 1. Participants' characteristics according to the neighbourhood socioeconomic deprivation class.")
+    table = d.add_table(rows=len(_PMC5728480) + 1, cols=8)
+    for r, row in enumerate([_PMC5728480_HEADS] + _PMC5728480):
+        for c, cell in enumerate(row):
+            table.cell(r, c).text = cell
+    d.save(str(tmp_path / "plos.docx"))
+    assert [e.codes for e in audit_file(tmp_path / "plos.docx")] == [e.codes for e in entries]

@@ -92,6 +92,9 @@ CASES = [
     # Kruskal_Wallis/Example_of_Kruskal_Wallis_Test.htm); the df had not been read, so the p was held to every df
     ("H = 8.63  DF = 2  P = 0.013", "H", (2,), None, 8.63, "=", 0.013),
     (f"chi-square = 7.42, DF = 3, P = {p3(C)}", "chi2", (3,), None, 7.42, "=", float(p3(C))),
+    # df run together with their number, "χ2 = 0.25, 1df, P = 0.62" and "χ2 = 20.8, 2df, p < .0001" (Int J Equity Health 2023,
+    # Table 1: https://equityhealthj.biomedcentral.com/articles/10.1186/s12939-023-01965-9/tables/1); held to every df before
+    (f"χ2 = 7.42, 3df, P = {p3(C)}", "chi2", (3,), None, 7.42, "=", float(p3(C))),
 ]
 
 

@@ -25,7 +25,7 @@ from .means import _OCCASIONS, _PAIRED  # (what names the same people measured a
 from .reading import Unit
 from .tables import _TOTAL_HEAD, MEANS_SAID, NOT_COUNTS, WHOLE_COUNT, _number, _p_cell, _role, _totals, cell_grid, count_cell, paired_heads, sizes_in, whole_count
 
-_CHI_HEAD = re.compile(r"(?i)\s*(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
+_CHI_HEAD = re.compile(r"(?i)\s*(?:pearson(?:'?s)?\s+)?(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test|statistic))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
 _STAT_NUMBER = re.compile(r"\s*(?P<num>\d+(?:[.,]\d+)?)\s*[*†‡a-d]*\s*")
 
@@ -186,7 +186,8 @@ def count_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], mark: st
             heads, sized, pairs = {c: u.text for c, u in row.items()}, {}, {}  # a header row
             p_col = next((c for c, role in roles.items() if role == "p"), None)
             chi_col = next((c for c, u in row.items() if _CHI_HEAD.fullmatch(u.text) or _MIXED_HEAD.fullmatch(u.text)), None)
-        elif all(not u.text.strip() for c, u in row.items() if c != first and c not in (p_col, chi_col) and c != typed_col):
+        elif all(not u.text.strip() for c, u in row.items() if c != first and c not in (p_col, chi_col) and c != typed_col
+                 and _role(heads.get(c, "")) != "df"):  # (its df in a column of their own: "Degrees of freedom | 4")
             anchor, labelled, typed = (row if tested else None), True, in_cell  # a row naming the variable, its test there or on its
             # first row of counts
     close()

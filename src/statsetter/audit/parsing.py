@@ -370,9 +370,9 @@ class _Patterns:
                                 rf"\s*+(?P<num>{value})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|{_DASH})\s*+(?P<rb>{num})\s*+[)\]])")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
         # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)", as output prints it "DF = 2"; or after their numbers,
-        # "(38 df)", "with 2 and 97 df"
+        # "(38 df)", "with 2 and 97 df", run together "1df"
         self.df = re.compile(rf"(?:d(?<![\w]d)\.?f\.?|D(?<![\w]D)F(?![\w]))\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
-                             rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]++(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
+                             rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]*+(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         # the unstandardised coefficient as "B" or "b", its standard error as "SE", "SE B" or "SEB"
         self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+[=¼]\s*+(?P<num>{value})")  # (not the B of "SE B")

@@ -42,7 +42,8 @@ _ROLES = (
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi2)\s*/\s*(?P<other>[zt])(?:[- ]?values?)?|(?P<first>[zt])\s*/\s*(?:χ\s?[²2]|x\s?[²2]|chi2)(?:[- ]?values?)?"), "mixed"),
     (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
     (re.compile(r"F(?:[- ]?(?:values?|ratio)|\s+[Cc]hange)?"), "F"),  # (SPSS's Model Summary: "F Change", "Sig. F Change")
-    (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?values?)?"), "chi2"),
+    # (also named in full: "Pearson chi-square statistic", "Chi-square test", as PLOS ONE 2017's Table 1 heads its column)
+    (re.compile(r"(?i)(?:pearson(?:'?s)?\s+)?(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?(?:values?|statistics?|tests?))?"), "chi2"),
     (re.compile(r"(?i)wald(?:\s?(?:χ\s?[²2]|chi[- ]?squared?|c\s?[²2]))?"), "wald"),  # ("Wald c2": χ² as a copy of Symbol's χ prints it)  # a logistic model's Wald column (SPSS: B, S.E., Wald, df, Sig.)
     # a coefficient with its standard error in one cell, "0.52 (0.21)" under "B (SE)" (regression tables in psychology and
     # sociology; practice)
@@ -101,7 +102,7 @@ _ROLES = (
     # one-sample test (one SD: no other d); a paired test's "Cohen's d" may be d_z or d_av (pingouin's), and is not checked
     (re.compile(r"(?i)(?:cohen'?s\s+)?d_?z"), "effect:d_z"),
     (re.compile(r"(?i)cohen(?:['’]?s\s+|_)d|d"), "effect:d"),  # ("Cohen_d", as R's output names it)
-    (re.compile(r"(?i)(?:df|d\.f\.)"), "df"),
+    (re.compile(r"(?i)(?:df|d\.f\.|degrees?\s+of\s+freedom)"), "df"),
     (re.compile(r"(?i)(?:df\s*\(?num(?:erator)?\)?|df1|num(?:erator)?\.? df)"), "df1"),
     (re.compile(r"(?i)(?:df\s*\(?den(?:ominator)?\)?|df2|den(?:ominator)?\.? df)"), "df2"),
     # an ANOVA table's sums of squares and mean squares (SPSS's "Type III Sum of Squares" and "Mean Square", R's "Sum Sq" and
