@@ -439,3 +439,19 @@ def test_a_chi_square_column_headed_in_full_beside_its_df_column(tmp_path):
             table.cell(r, c).text = cell
     d.save(str(tmp_path / "plos.docx"))
     assert [e.codes for e in audit_file(tmp_path / "plos.docx")] == [e.codes for e in entries]
+
+
+def test_a_rows_total_against_its_groups_counts(tmp_path):
+    """A row's count in the total column against its groups' counts beside it: PLOS ONE's Table 1 above, whose classes'
+    n in the heads (361 + 623 + 170) make up its N = 1,154, has every row's total the sum of its classes' counts (443 =
+    165 + 217 + 61 …) and nothing is said; a total typed 87 for 78 (fewer than it gives: the heads leave no one outside
+    the classes) and one typed 442 for 443 (more than the total: never) are found at their cells."""
+    rows = [r[:] for r in _PMC5728480]
+    assert all(int(r[1]) == sum(int(x.split(" (")[0]) for x in r[2:5]) for r in rows if r[1])
+    rows[1][1], rows[-2][1] = "87", "442"
+    text = "Table 1. Participants' characteristics according to the neighbourhood socioeconomic deprivation class.\n\n" + \
+        "| " + " | ".join(_PMC5728480_HEADS) + " |\n|" + "---|" * 8 + "\n" + "\n".join("| " + " | ".join(r) + " |" for r in rows) + "\n"
+    found = [e for e in _audit(tmp_path, text, "md") if "sizes-do-not-add" in e.codes]
+    assert [e.found for e in found] == ["87", "442"], [(e.found, e.message) for e in found]
+    assert "add up to 78 (42 + 29 + 7), fewer than the 87 its total column gives, though the groups' n in the heads make up the table's N = 1,154" in found[0].message
+    assert "add up to 443 (165 + 217 + 61), more than the 442 its total column gives" in found[1].message

@@ -118,7 +118,8 @@ CODES: dict[str, tuple[str, str]] = {
         "Descriptives: categorical variables as n (%) (APA 7 §7.21 sample tables; JARS-Quant) — the percent is n over its whole (definition)",
     ),
     "sizes-do-not-add": (
-        "a table's groups' n in its heads that add up to more than the total its total column's head or its caption gives",
+        "a table's groups' n in its heads that add up to more than the total its total column's head or its caption gives; a "
+        "row's groups' counts that add up to more than its total column's count (or to another count, where the groups make up the N)",
         "Participant flow: every participant counted once, those left out said with the reason (CONSORT 2010 item 13; "
         "JARS-Quant, participant flow) — recalled from memory; the arithmetic is definition",
     ),

@@ -457,27 +457,71 @@ def size_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: 
     """A header row's groups' n against the total the table gives — a total column's head ("Total (N = 100)"), or where
     there is none the caption's one N —: an entry at the total's head (or the first group's) where they add up to more
     (fewer may be legitimate: subgroups need not exhaust their total, "Anencephaly (N = 123) | Spina bifida (N = 115) |
-    Total NTDs (N = 263)"). Not where the heads name occasions or the caption or note a paired or repeated design (the
-    same people counted twice), nor for heads of fewer than two groups."""
+    Total NTDs (N = 263)"); and each row's count in a total column against its groups' counts (_row_totals). Not where
+    the heads name occasions or the caption or note a paired or repeated design (the same people counted twice), nor for
+    heads of fewer than two groups."""
     if _PAIRED.search(said):
         return []
     rows = cell_grid(cells)
     for r in sorted(rows)[:3]:  # (the header rows stand at the top)
         row = rows[r]
+        if _OCCASIONS.search(" ".join(u.text for u in row.values())):
+            continue
+        found = _row_totals(rows, r, caption)
         sized = {c: s[0] for c, u in sorted(row.items()) if len(s := sizes_in(u.text)) == 1}
         totals = [c for c in sized if _TOTAL_HEAD.match(row[c].text)]
         groups = [c for c in sized if c not in totals]
-        if len(groups) < 2 or len(totals) > 1 or _OCCASIONS.search(" ".join(u.text for u in row.values())):
+        if len(groups) < 2 or len(totals) > 1:
+            if found:
+                return found
             continue
         stated = _totals(caption) if not totals else [sized[totals[0]]]
         if len(stated) != 1 or sum(sized[c] for c in groups) <= stated[0]:
-            return []
+            return found
         unit = row[totals[0]] if totals else row[groups[0]]
         parts = " + ".join(f"{sized[c]:,}" for c in groups)
         where = "the total column's head gives" if totals else "the caption gives"
-        said_sizes = f"The groups' n in the heads add up to {sum(sized[c] for c in groups):,} ({parts}), more than the N = {stated[0]:,} {where}."
-        return [CountTest(unit, _cell_entry(unit), (), "the groups' n in the table's heads", sizes=said_sizes)]
+        said_sizes = (f"The groups' n in the heads add up to {sum(sized[c] for c in groups):,} ({parts}), more than the N = {stated[0]:,} {where}. "
+                      "Say where the others are (missing data, exclusions), or correct the numbers.")
+        return [CountTest(unit, _cell_entry(unit), (), "the groups' n in the table's heads", sizes=said_sizes), *found]
     return []
+
+
+def _row_totals(rows: "dict[int, dict[int, Unit]]", header: int, caption: str) -> list[CountTest]:
+    """Each row's count in a total column ("Total" over "78" or "78 (6.8)") against its groups' counts in the columns
+    after it, each "n (%)" ("42 (11.6) | 29 (4.7) | 7 (4.1)"): a total below their sum cannot be; one above it only where
+    the groups' n in the heads add up to the table's N (the total column's head's, else the caption's one N), so that no
+    one stands outside the groups."""
+    head = rows[header]
+    total_col = next((c for c, u in sorted(head.items()) if c != min(head) and _TOTAL_HEAD.match(u.text)), None)
+    if total_col is None:
+        return []
+    groups = [c for c in sorted(head) if c > total_col and not _role(head[c].text)]
+    if len(groups) < 2:
+        return []
+    sizes = [sizes_in(head[c].text) for c in groups]
+    stated = sizes_in(head[total_col].text) or _totals(caption) or sizes_in(head[min(head)].text)
+    whole = all(len(s) == 1 for s in sizes) and len(stated) == 1 and sum(s[0] for s in sizes) == stated[0]
+    out = []
+    for r in sorted(rows):
+        row = rows[r]
+        if r <= header or total_col not in row or NOT_COUNTS.search(row[min(row)].text):
+            continue
+        total = whole_count(row[total_col].text)
+        got = count_cell(row[total_col].text) if total is None else None
+        total = got[0] if got is not None else total
+        parts = [count_cell(row[c].text) if c in row else None for c in groups]
+        if total is None or any(p is None for p in parts):
+            continue
+        added = sum(p[0] for p in parts)  # type: ignore[index]
+        if added > total or (whole and added != total):
+            unit = row[total_col]
+            typed = " + ".join(f"{p[0]:,}" for p in parts)  # type: ignore[index]
+            why = (f"more than the {total:,} its total column gives" if added > total else
+                   f"fewer than the {total:,} its total column gives, though the groups' n in the heads make up the table's N = {stated[0]:,}")
+            out.append(CountTest(unit, _cell_entry(unit), (), f"the row's total column and its groups' counts ({row[min(row)].text.strip()})",
+                                 sizes=f"The groups' counts in the row add up to {added:,} ({typed}), {why}. Correct the count that is wrong."))
+    return out
 
 
 # -- the tests the counts give ---------------------------------------------------------------------------------------
@@ -636,8 +680,7 @@ def counts_fit(test: CountTest, alpha: float, unheld: "list[str] | None" = None)
     or cell names it and the table is small enough to enumerate: fisher_rxc) — with the printed precision of each; and
     each percent its count's share. What the p could not be held to is said in ``unheld``."""
     rep, counts = test.rep, test.counts
-    out = [Finding("sizes-do-not-add", test.sizes + " Say where the others are (missing data, exclusions), or correct the numbers.",
-                   test.sizes.split(" (", 1)[1].split(")", 1)[0])] if test.sizes else []
+    out = [Finding("sizes-do-not-add", test.sizes, test.sizes.split(" (", 1)[1].split(")", 1)[0])] if test.sizes else []
     out += [Finding("percent-does-not-fit", f"A percent is not its count's share {test.percents[0]}: " + "; ".join(test.percents[1:]) + ".",
                    ", ".join(f"{part.split(' / ')[0]} ({part.rsplit('not ', 1)[1]})" for part in test.percents[1:]))] if test.percents else []
     table = _trimmed(counts)
