@@ -95,6 +95,9 @@ CASES = [
     # df run together with their number, "χ2 = 0.25, 1df, P = 0.62" and "χ2 = 20.8, 2df, p < .0001" (Int J Equity Health 2023,
     # Table 1: https://equityhealthj.biomedcentral.com/articles/10.1186/s12939-023-01965-9/tables/1); held to every df before
     (f"χ2 = 7.42, 3df, P = {p3(C)}", "chi2", (3,), None, 7.42, "=", float(p3(C))),
+    # a t's subscript df flattened, as a copy from an AMA-style PDF leaves "t₄₄" (and as a student's public notes on GitHub
+    # type it: "(t38 = -2.044, p< 0.05>)"); read only with a value with decimals and a p, "t12 = 5 s" being a time point's
+    (f"t44 = 2.61, P = {p3(T)}", "t", (44,), None, 2.61, "=", float(p3(T))),
 ]
 
 
@@ -131,6 +134,15 @@ def test_a_p_after_value_and_a_colon_is_read_and_restyled_as_given():
     # the line restyled (its "statistic", "on" and "and" are notation), unless a power of ten is in it
     (e,) = audit_units([Unit("c", "F-statistic: 16.86 on 1 and 30 DF,  p-value: 0.000285")], restyle=True)
     assert e.revision is not None and e.revision.plain() == "F(1, 30) = 16.86, p < .001"
+
+
+def test_a_time_point_is_no_flattened_t():
+    """"t12 = 5 s" (a time point), "t1 = 2.4, p = .03" (one digit: a first time point's as often as a df) and "t38 was 2.10"
+    are no t statistics; "t38 = 2.10, p = .043" is t(38)."""
+    assert not [r for r in find_statistics("At t12 = 5 s the light came on, and at t13 = 8 s it went off.") if r.symbol]
+    assert not [r for r in find_statistics("At t1 = 2.4, p = .03 of the trials had ended.") if r.symbol == "t"]
+    (rep,) = [r for r in find_statistics("The groups differed (t38 = 2.10, p = .043).") if r.symbol]
+    assert rep.symbol == "t" and tuple(d.value for d in rep.df) == (38,) and rep.value.value == 2.10
 
 
 def test_numbers_before_df_are_read_only_as_df():

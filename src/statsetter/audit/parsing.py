@@ -328,7 +328,7 @@ class _Patterns:
         self.read: dict[str, tuple[str, float, int, int, int] | None] = {}  # to_number's readings of printed forms, by text
         self.number = re.compile(num)
         self.head = re.compile(
-            rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.]))?"
+            rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.])|(?<=t)(?P<bare_t>\d{{2,4}})(?=\s*+=))?"
             rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:))\s*+(?P<num>{value}{_EXPONENT}?)"
         )
         # not after a mark of significance ("*", "†", "‡", "§", "^", or one and a space): "*p < .05. **p < .01. †p < .10." is a
@@ -610,6 +610,8 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
             fit = _FIT_INDEX.search(text, m.end(), end)  # [.00, .07]": the RMSEA's interval, not the χ²'s), unless its p comes after them
             end = fit.start() if fit is not None and pat.p.search(text, fit.start(), end) is None else end
         _read_clause(pat, text, rep, m.end(), end, rare)
+        if m.group("bare_t") is not None and (rep.p is None or rep.value is None or not rep.value.decimals):  # ("t12 = 5 s": a time
+            continue  # point, unless a value with decimals and a p follow as a t's do)
         rep.text = text[rep.start : rep.end]
         out.append(rep)
         taken.append((rep.start, rep.end))
@@ -1013,6 +1015,8 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
 
 def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     sym, num, inner, sub, bare, op = m.group("sym", "num", "inner", "sub", "bare", "op")  # (one call: a head is read 10,000 times a book)
+    if bare is None and m.group("bare_t") is not None:  # "t38 = 2.10": a t's subscript df flattened by a copy from a PDF
+        bare = m.group("bare_t")  # (two digits at least: "t1 = …" may be a first time point's)
     symbol = symbol_of(sym)
     value = pat.to_number(num, m.start("num"))
     if symbol is None or value is None:
@@ -1024,7 +1028,7 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     elif sub is not None:  # df as subscripts (AMA 11): t₃₈, F₂,₂₃₇; one character each, so positions hold
         dfs, n = _inner(pat, sub.translate(_SUBSCRIPT_DIGITS), m.start("sub"))
     elif bare is not None:  # "F1,23 = 4.50": df run on after the F
-        dfs, n = _inner(pat, bare, m.start("bare"))
+        dfs, n = _inner(pat, bare, m.start("bare") if m.group("bare") is not None else m.start("bare_t"))
     if symbol == "chi2" and len(dfs) == 2 and n is None and dfs[1].value > dfs[0].value:  # χ²(2; 415): df and N
         dfs, n = dfs[:1], dfs[1]
     if symbol in ("t", "r", "rs") and len(dfs) == 2 and inner and pat.mark == "." and re.fullmatch(r"\s*\d{1,3},\d{3}\s*", inner):
