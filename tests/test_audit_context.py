@@ -3571,7 +3571,7 @@ def test_one_mistyped_number_is_named_where_the_p_and_eta_squared_agree_on_it():
                     new = old[:j] + other + old[j + 1:]
                     if other == digit or new.lstrip(".").startswith("0") and kind != "p" or new in ("0", "00"):
                         continue
-                    text = typed.replace(f"{old}", f"{new}", 1) if kind != "df2" else typed.replace(f",{old}", f",{new}", 1).replace(f", {old}", f", {new}", 1)
+                    text = typed.replace(old, new, 1) if kind != "df2" else typed.replace(f",{old}", f",{new}", 1).replace(f", {old}", f", {new}", 1)
                     (e,) = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("F")]
                     misfits[kind] += {"p-does-not-follow", "effect-does-not-fit"} <= set(e.codes)
                     if "typo-fits" not in e.codes:

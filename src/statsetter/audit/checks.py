@@ -354,7 +354,8 @@ def one_number_off(rep: Reported, reported: tuple[float, float]) -> list[Finding
     gives and the F the η²p gives meet). Two numbers agreeing on the same other reading point to a typo there, and then
     the p is not the number to change."""
     eta = next((e for e in rep.effects if e.name == "eta2_p"), None)
-    if rep.symbol != "F" or eta is None or rep.value is None or len(rep.df) != 2 or not all(float(d.value).is_integer() and d.value > 0 for d in rep.df):
+    if rep.symbol != "F" or eta is None or rep.value is None or len(rep.df) != 2 or \
+            not all(float(d.value).is_integer() and d.value > 0 for d in rep.df):
         return []
     e_low, e_high = eta.number.value - eta.number.half_unit, eta.number.value + eta.number.half_unit
     f_low, f_high = rep.value.value - rep.value.half_unit, rep.value.value + rep.value.half_unit
@@ -368,8 +369,14 @@ def one_number_off(rep: Reported, reported: tuple[float, float]) -> list[Finding
     def p_fits(df: tuple[float, float], low: float, high: float) -> bool:
         return _overlap((upper_tail("F", high, df), upper_tail("F", low, df)), reported)
 
-    def run(dfs: list[int], typed: Callable[[int], str]) -> list[str]:  # the df that fit, as one reading or a run of them
-        return [] if not dfs else [typed(dfs[0])] if len(dfs) == 1 else [f"{typed(dfs[0])} to {typed(dfs[-1])}"]
+    def run(dfs: list[int], typed: Callable[[int], str]) -> list[str]:  # the df that fit, each run of them as one reading
+        runs: list[list[int]] = []
+        for df in dfs:
+            if runs and df == runs[-1][-1] + 1:
+                runs[-1].append(df)
+            else:
+                runs.append([df])
+        return [typed(r[0]) if len(r) == 1 else f"{typed(r[0])} to {typed(r[-1])}" for r in runs]
 
     readings: list[str] = []
     ones = range(max(1, math.ceil(q_low * df2 / f_high)), math.floor(q_high * df2 / f_low) + 1)

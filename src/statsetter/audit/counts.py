@@ -488,15 +488,18 @@ def size_tests(cells: Sequence[tuple[int, int, Unit, list[Reported]]], caption: 
 
 
 def _row_totals(rows: "dict[int, dict[int, Unit]]", header: int, caption: str) -> list[CountTest]:
-    """Each row's count in a total column ("Total" over "78" or "78 (6.8)") against its groups' counts in the columns
-    after it, each "n (%)" ("42 (11.6) | 29 (4.7) | 7 (4.1)"): a total below their sum cannot be; one above it only where
+    """Each row's count in a total column ("Total" over "78" or "78 (6.8)") against its groups' counts in the other
+    columns, each "n (%)" ("42 (11.6) | 29 (4.7) | 7 (4.1)"): a total below their sum cannot be; one above it only where
     the groups' n in the heads add up to the table's N (the total column's head's, else the caption's one N), so that no
     one stands outside the groups."""
     head = rows[header]
-    total_col = next((c for c, u in sorted(head.items()) if c != min(head) and _TOTAL_HEAD.match(u.text)), None)
-    if total_col is None:
-        return []
-    groups = [c for c in sorted(head) if c > total_col and not _role(head[c].text)]
+    label = min(c for row in rows.values() for c in row)  # (the rows' labels' column: a header's empty first cell is no cell)
+    totals = [c for c, u in sorted(head.items()) if c != label and _TOTAL_HEAD.match(u.text)]
+    if len(totals) != 1:
+        return []  # (none, or each group's own total beside its outcomes: "Total | Positive (n%) | Negative (n%)" twice)
+    total_col = totals[0]
+    groups = [c for c in sorted(head) if c not in (label, total_col) and head[c].text.strip() and not _role(head[c].text)]  # (before
+    # it or after; each group its own head, not a spanner's empty columns)
     if len(groups) < 2:
         return []
     sizes = [sizes_in(head[c].text) for c in groups]
@@ -505,7 +508,7 @@ def _row_totals(rows: "dict[int, dict[int, Unit]]", header: int, caption: str) -
     out = []
     for r in sorted(rows):
         row = rows[r]
-        if r <= header or total_col not in row or NOT_COUNTS.search(row[min(row)].text):
+        if r <= header or total_col not in row or label not in row or NOT_COUNTS.search(row[label].text):
             continue
         total = whole_count(row[total_col].text)
         got = count_cell(row[total_col].text) if total is None else None
@@ -519,7 +522,7 @@ def _row_totals(rows: "dict[int, dict[int, Unit]]", header: int, caption: str) -
             typed = " + ".join(f"{p[0]:,}" for p in parts)  # type: ignore[index]
             why = (f"more than the {total:,} its total column gives" if added > total else
                    f"fewer than the {total:,} its total column gives, though the groups' n in the heads make up the table's N = {stated[0]:,}")
-            out.append(CountTest(unit, _cell_entry(unit), (), f"the row's total column and its groups' counts ({row[min(row)].text.strip()})",
+            out.append(CountTest(unit, _cell_entry(unit), (), f"the row's total column and its groups' counts ({row[label].text.strip()})",
                                  sizes=f"The groups' counts in the row add up to {added:,} ({typed}), {why}. Correct the count that is wrong."))
     return out
 

@@ -6,9 +6,10 @@ caption or note gives, or the table's own N row):
     F = (R²/k) / ((1 − R²)/(N − k − 1))
 
 as the model's F; or, where the table gives ΔR², as a step's F change, (ΔR²/Δk) / ((1 − R²)/(N − k − 1)), Δk the
-predictors it adds to the column before it (where that column's predictors are among its own; all k otherwise). An F that fits neither, at the printed digits of each, is said with the N that would give
-it: the models may have been fitted to fewer cases than the caption's N (missing data), which the table then does not
-say. Definitions (the F test of R² and of its change).
+predictors it adds to the column before it (where that column's predictors are among its own; all k otherwise). An F
+that fits neither, at the printed digits of each, is said with the N that would give it: the models may have been
+fitted to fewer cases than the caption's N (missing data), which the table then does not say. Definitions (the F test
+of R² and of its change).
 """
 
 from __future__ import annotations
