@@ -378,13 +378,14 @@ def one_number_off(rep: Reported, reported: tuple[float, float]) -> list[Finding
                 runs.append([df])
         return [typed(r[0]) if len(r) == 1 else f"{typed(r[0])} to {typed(r[-1])}" for r in runs]
 
+    typed = rep.value.text  # (the F as printed, for the readings)
     readings: list[str] = []
     ones = range(max(1, math.ceil(q_low * df2 / f_high)), math.floor(q_high * df2 / f_low) + 1)
     twos = range(max(1, math.ceil(f_low * df1 / q_high)), math.floor(f_high * df1 / q_low) + 1)
     if len(ones) <= 40:
-        readings += run([one for one in ones if p_fits((one, df2), f_low, f_high)], lambda one: f"F({one}, {rep.df[1].text}) = {rep.value.text}")
+        readings += run([one for one in ones if p_fits((one, df2), f_low, f_high)], lambda one: f"F({one}, {rep.df[1].text}) = {typed}")
     if len(twos) <= 40:  # (a df₂ of some hundreds: a three-decimal η²p pins it to a dozen or so, the p to fewer)
-        readings += run([two for two in twos if p_fits((df1, two), f_low, f_high)], lambda two: f"F({rep.df[0].text}, {two}) = {rep.value.text}")
+        readings += run([two for two in twos if p_fits((df1, two), f_low, f_high)], lambda two: f"F({rep.df[0].text}, {two}) = {typed}")
     by_eta = (q_low * df2 / df1, q_high * df2 / df1)
     by_p = (_f_for_p(min(reported[1], 1.0), (df1, df2)), _f_for_p(max(reported[0], 1e-300), (df1, df2)))
     value = (max(by_eta[0], by_p[0]), min(by_eta[1], by_p[1]))

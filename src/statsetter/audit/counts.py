@@ -513,13 +513,13 @@ def _row_totals(rows: "dict[int, dict[int, Unit]]", header: int, caption: str) -
         total = whole_count(row[total_col].text)
         got = count_cell(row[total_col].text) if total is None else None
         total = got[0] if got is not None else total
-        parts = [count_cell(row[c].text) if c in row else None for c in groups]
-        if total is None or any(p is None for p in parts):
+        parts = [got for c in groups if c in row and (got := count_cell(row[c].text)) is not None]
+        if total is None or len(parts) != len(groups):
             continue
-        added = sum(p[0] for p in parts)  # type: ignore[index]
+        added = sum(p[0] for p in parts)
         if added > total or (whole and added != total):
             unit = row[total_col]
-            typed = " + ".join(f"{p[0]:,}" for p in parts)  # type: ignore[index]
+            typed = " + ".join(f"{p[0]:,}" for p in parts)
             why = (f"more than the {total:,} its total column gives" if added > total else
                    f"fewer than the {total:,} its total column gives, though the groups' n in the heads make up the table's N = {stated[0]:,}")
             out.append(CountTest(unit, _cell_entry(unit), (), f"the row's total column and its groups' counts ({row[label].text.strip()})",

@@ -1000,8 +1000,9 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     kinds = {" ".join(m.group().lower().rstrip("s").split()) for m in _RATIOS_SAID.finditer(f"{caption} {said}")} if ratios_said else set()
     said_ratio = next(iter(kinds)) if len(kinds) == 1 else None  # the one kind of ratio the caption or note names: an "Estimate (95% CI)"'s
     note_df = _said_df(f"{caption} {said}")
-    caption_ratio = _ratio_role(f"{'adjusted ' if _ADJUSTED_SAID.search(caption) else ''}{said_ratio} (95% CI)").removeprefix("ratio:") \
-        if said_ratio is not None and _CI_SAID.search(f"{caption} {said}") and not _DESCRIBED.search(f"{caption} {said}") else None  # type: ignore[union-attr]
+    named = _ratio_role(f"{'adjusted ' if _ADJUSTED_SAID.search(caption) else ''}{said_ratio} (95% CI)") \
+        if said_ratio is not None and _CI_SAID.search(f"{caption} {said}") and not _DESCRIBED.search(f"{caption} {said}") else None
+    caption_ratio = named.removeprefix("ratio:") if named is not None else None  # the ratio the caption names with its 95% CI
     words_above: dict[int, str] = {}  # each column's words in the rows without numbers above (its head, a spanner's)
     spanned: dict[int, str] = {}  # the ratio a spanner in the row above names, for each column it spans
     width = max((c + row_cells[0].columns - 1 for r in rows for c, row_cells in rows[r].items()), default=0)  # the table's columns
@@ -1125,7 +1126,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 if p_col is not None and later is not None and later < p_col:
                     p_col = None  # the p beyond the next ratio column is that one's
             p = _p_cell(row[p_col][0].text, mark) if p_col is not None and p_col in row else None
-            name = _stub_ratio(stub) if stub is not None else roles[c].removeprefix("ratio:") if c in roles else caption_ratio  # type: ignore[assignment]
+            name = _stub_ratio(stub) if stub is not None else roles[c].removeprefix("ratio:") if c in roles else caption_ratio or "OR"
             marked = _marked_bound(unit.text, stars, high.end) if p is None and p_col is None and stars else None  # "1.29 (1.18–1.40)**"
             rep = _ratio_statistic(name, name, estimate, Interval(0.95, low, high, low.start, high.end), p or (marked[0] if marked else None), high.end)
             if stub is None and id(roles) not in log_odds_ratio:
