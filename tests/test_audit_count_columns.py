@@ -431,6 +431,8 @@ def test_a_chi_square_column_headed_in_full_beside_its_df_column(tmp_path):
                                           "χ²(2) = 3.19, p = 0.203", "χ²(2) = 7.11, p = 0.029", "χ²(4) = 17.68, p = 0.001"], [e.found for e in entries]
     assert [e.codes for e in entries] == [[], [], ["counts-do-not-fit"], [], [], [], ["counts-do-not-fit"]], [(e.found, e.codes) for e in entries]
     assert "on 2 df they give Pearson's χ² 11.878" in entries[-1].message and "on 4 df they give Pearson's χ² 155.077" in entries[2].message
+    # (a χ² its counts do not give is not offered back with its p as if it stood, though the p follows from the χ² as printed)
+    assert entries[-1].suggestion == "χ²(4) = 17.68 (p left out: the statistic itself does not follow from the table's numbers beside it)"
     d = docx.Document()
     d.add_paragraph("Table 1. Participants' characteristics according to the neighbourhood socioeconomic deprivation class.")
     table = d.add_table(rows=len(_PMC5728480) + 1, cols=8)

@@ -143,7 +143,8 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
             return ""
         allowed = doubted or (rep.p is not None and rep.p.op == "ns")
         return new.plain() + (" (p from the bound)" if allowed and _P_IN_TEXT.search(new.plain()) else "")
-    if not doubted:  # a p the text did not give (none, a threshold or "ns" made exact) is marked as recomputed
+    in_doubt = any(f.code in ("means-do-not-fit", "counts-do-not-fit") for f in findings)  # (the statistic itself, its p with it)
+    if not doubted and not in_doubt:  # a p the text did not give (none, a threshold or "ns" made exact) is marked as recomputed
         new = house_text(rep, style, alpha) if house is _UNMADE else house
         if not isinstance(new, StyledText):
             return ""  # a record the renderer cannot take: no suggestion
@@ -151,7 +152,7 @@ def _suggest(rep: Reported, style: Style, alpha: float, findings: Sequence[Findi
         return new.plain() + (" (p recomputed)" if added else "")
     try:
         record = to_record(rep, alpha, style)
-        if any(f.code in ("means-do-not-fit", "counts-do-not-fit") for f in findings):  # the statistic itself is in doubt (the
+        if in_doubt:  # the statistic itself is in doubt (the
             record = replace(record, p=None, precision={k: v for k, v in record.precision.items() if k != "p"})  # table's
             return named(rep, render(record, "stats", style), style).plain() + " (p left out: the statistic itself does not follow from the table's numbers beside it)"
         if any(f.code == "typo-fits" for f in findings):  # the p may be right and a df or the value mistyped
