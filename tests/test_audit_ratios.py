@@ -425,6 +425,17 @@ def test_a_ratio_the_caption_names_under_heads_that_name_the_outcomes(tmp_path):
     assert entries[0].found == "aOR = 5.68, 95% CI [2.63, 12.25], p < .001"
     assert [(e.found, e.codes) for e in entries if e.codes] == [("aOR = 1.39, 95% CI [0.4, 2.30]", ["ratio-does-not-fit"])]
     assert math.isclose(math.exp((math.log(0.4) + math.log(2.30)) / 2), 0.959, abs_tol=5e-4)
+    import docx  # (the same table in Word: read alike)
+
+    d = docx.Document()
+    d.add_paragraph(_PMC6132365_CAPTION)
+    table = d.add_table(rows=len(_PMC6132365) + 1, cols=3)
+    for r, row in enumerate([["Variables", "(yes vs. no)", "(undecided vs. no)"]] + _PMC6132365):
+        for c, text in enumerate(row):
+            table.cell(r, c).text = text
+    d.add_paragraph(note)
+    d.save(str(tmp_path / "ratios.docx"))
+    assert [(e.found, e.codes) for e in audit_file(tmp_path / "ratios.docx")] == [(e.found, e.codes) for e in entries]
     for caption, heads in ((_PMC6132365_CAPTION + "; values are median (IQR)", ["Variables", "(yes vs. no)", "(undecided vs. no)"]),
                            (_PMC6132365_CAPTION, ["Variables", "Median (IQR), yes", "Median (IQR), undecided"])):
         assert not _audit(tmp_path, _table(caption, heads, _PMC6132365, note)), (caption, heads)
