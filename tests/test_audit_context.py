@@ -3589,3 +3589,36 @@ def test_one_mistyped_number_is_named_where_the_p_and_eta_squared_agree_on_it():
                         assert min(spots) <= truth <= max(spots), (text, said, truth)
     # (seen: 68, 31 and 144 of the df₁, df₂ and F changes leave both the p and the η²p off, and each of them is named)
     assert fired["p"] == misfits["p"] == 0 and all(fired[k] == misfits[k] > 20 for k in ("df1", "df2", "F")), (fired, misfits)
+
+
+def test_a_mann_whitney_us_z_against_its_u_and_group_sizes():
+    """A z typed after its U ("U = 114, z = −0.51") is held to them and the sentence's group sizes: |z| is at least
+    |U − n₁n₂/2| less a continuity correction's 0.5, over the SD without ties (ties only shrink the SD). pingouin's
+    penguins data, bill length, body mass and flipper length of Adelie against Chinstrap penguins and of each sex among
+    the Gentoo: scipy's mannwhitneyu U and the z as programs print it (with the tie correction, without the continuity
+    correction) read clean; the same z halved is found, each of the six."""
+    import pingouin as pg
+
+    data = pg.read_dataset("penguins")
+    cases = []
+    for column in ("bill_length_mm", "body_mass_g", "flipper_length_mm"):
+        for a, b in ((data[data.species == "Adelie"], data[data.species == "Chinstrap"]),
+                     (data[(data.species == "Gentoo") & (data.sex == "female")], data[(data.species == "Gentoo") & (data.sex == "male")])):
+            x, y = a[column].dropna().to_numpy(), b[column].dropna().to_numpy()
+            u = stats.mannwhitneyu(x, y, alternative="two-sided", method="asymptotic", use_continuity=False)
+            n1, n2 = len(x), len(y)
+            ranks = stats.rankdata(np.concatenate([x, y]))
+            ties = sum(t ** 3 - t for t in np.unique(ranks, return_counts=True)[1])
+            sigma = math.sqrt(n1 * n2 / 12 * ((n1 + n2 + 1) - ties / ((n1 + n2) * (n1 + n2 - 1))))
+            z = (u.statistic - n1 * n2 / 2) / sigma
+            p = 2 * stats.norm.sf(abs(z))
+            cases.append((n1, n2, u.statistic, z, p))
+    for n1, n2, u, z, p in cases:
+        p_typed = "p < .001" if p < 0.001 else f"p = {p:.3f}".replace("0.", ".")
+        text = f"The groups differed in rank (n1 = {n1}, n2 = {n2}; U = {u:g}, z = {z:.2f}, {p_typed})."
+        found = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("z")]
+        assert found and "z-does-not-fit" not in found[0].codes and "p-does-not-follow" not in found[0].codes, (text, found[0].codes)
+        halved = text.replace(f"z = {z:.2f}", f"z = {z / 2:.2f}")
+        (moved,) = [e for e in audit_units([Unit("c", halved)]) if e.found.startswith("z")]
+        assert "z-does-not-fit" in moved.codes, (halved, moved.codes)
+    assert "is smaller than U = " in moved.message and "ties only make |z| larger" in moved.message

@@ -123,6 +123,11 @@ CODES: dict[str, tuple[str, str]] = {
         "Participant flow: every participant counted once, those left out said with the reason (CONSORT 2010 item 13; "
         "JARS-Quant, participant flow) — recalled from memory; the arithmetic is definition",
     ),
+    "z-does-not-fit": (
+        "a Mann–Whitney U's z smaller than the U before it and the group sizes allow (the normal approximation without ties, "
+        "less a continuity correction)",
+        "Mann–Whitney U: z = (U − n₁n₂/2)/σ, σ² = n₁n₂(n₁ + n₂ + 1)/12, smaller with ties (Mann & Whitney, 1947; definitions)",
+    ),
     "typo-fits": (
         "an F's p and its η²p, neither following from it, both follow with one of its df or its value typed otherwise",
         "η²p = F·df₁/(F·df₁ + df₂) (definition) and the F distribution's p; a df or digit mistyped is a usual cause of a p that "
@@ -144,7 +149,7 @@ SEVERITY: dict[str, str] = {
     "impossible-value": "error", "malformed-number": "warning", "negative-statistic": "error", "negative-sd": "error", "ci-reversed": "error",
     "ci-excludes-estimate": "error", "df-not-integer": "error", "grim": "error", "ms-does-not-fit": "error", "f-does-not-fit": "warning",
     "one-sided": "warning", "ns-below-alpha": "warning", "df-unstated": "warning", "coefficient-does-not-fit": "warning", "effect-does-not-fit": "warning", "d-does-not-fit": "warning", "counts-do-not-fit": "warning", "percent-does-not-fit": "warning", "means-do-not-fit": "warning",
-    "sizes-do-not-add": "warning", "typo-fits": "warning",
+    "sizes-do-not-add": "warning", "typo-fits": "warning", "z-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning", "ratio-does-not-fit": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
     "spacing": "style", "hyphen-minus": "style", "italics": "style",
@@ -1308,6 +1313,35 @@ def rank_sum_p(rep: Reported, sizes: tuple[int, int] | None, alpha: float) -> li
     said = "; ".join(f"{name} {_small(q)}" for name, q in ps.items())
     return [Finding("p-does-not-follow", f"The reported p does not follow from U = {rep.value.text} with n₁ = {n1} and n₂ = {n2}: two-sided, {said} "
                                          f"— ties and a one-sided test only lower it.", f"U = {rep.value.text}, n₁ = {n1}, n₂ = {n2}; p {rep.p.op} {rep.p.number.text}")]  # type: ignore[union-attr]
+
+
+# a Mann–Whitney U typed just before a z, "U = 234.5, z = −2.61": the z is the U's normal approximation
+_U_BEFORE = re.compile(r"U(?<![\w]U)\s*(?:\([^()]{0,60}\))?\s*=\s*(?P<u>\d+(?:[.,]\d+)?)\s*[,;]\s*$")
+
+
+def rank_sum_z(text: str, rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
+    """A Mann–Whitney U's z against the U just before it and the group sizes its sentence gives: |z| = |U − n₁n₂/2| / σ,
+    σ² = n₁n₂(n₁ + n₂ + 1)/12 without ties — ties make σ smaller and |z| larger, a continuity correction takes 0.5 off
+    |U − n₁n₂/2| —, so |z| is at least (|U − n₁n₂/2| − 0.5)/σ at the U its printed digits allow nearest the middle
+    (Mann & Whitney, 1947; the tie correction as programs apply it). A z below that follows from no reading of the U."""
+    if rep.symbol != "z" or sizes is None or rep.value is None or rep.op != "=":
+        return []
+    m = _U_BEFORE.search(text, max(0, rep.start - 90), rep.start)
+    if m is None:
+        return []
+    typed = m.group("u")
+    u, half = float(typed.replace(",", ".")), 0.5 * 10.0 ** -len(typed.replace(",", ".").partition(".")[2])
+    n1, n2 = sizes
+    mu, sigma = n1 * n2 / 2, math.sqrt(n1 * n2 * (n1 + n2 + 1) / 12)
+    if not 0 <= u <= n1 * n2 or sigma <= 0:
+        return []
+    nearest = min(max(mu, u - half), u + half)
+    least = max(abs(nearest - mu) - 0.5, 0.0) / sigma
+    if abs(rep.value.value) + rep.value.half_unit >= least - 1e-9:
+        return []
+    return [Finding("z-does-not-fit", f"z = {rep.value.text} is smaller than U = {typed} with n₁ = {n1} and n₂ = {n2} allows: |U − n₁n₂/2| "
+                                      f"less a continuity correction's 0.5, over the SD without ties, is already {least:.3f} (ties only make |z| larger).",
+                    f"U = {typed}, n₁ = {n1}, n₂ = {n2}; z = {rep.value.text}")]
 
 
 def rank_sum_bound(rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
