@@ -3596,7 +3596,8 @@ def test_a_mann_whitney_us_z_against_its_u_and_group_sizes():
     |U − n₁n₂/2| less a continuity correction's 0.5, over the SD without ties (ties only shrink the SD). pingouin's
     penguins data, bill length, body mass and flipper length of Adelie against Chinstrap penguins and of each sex among
     the Gentoo: scipy's mannwhitneyu U and the z as programs print it (with the tie correction, without the continuity
-    correction) read clean; the same z halved is found, each of the six."""
+    correction), and the rank test's r = |z|/√N after them (Rosenthal, 1991), read clean; the same z halved is found,
+    each of the six, and so is an r doubled."""
     import pingouin as pg
 
     data = pg.read_dataset("penguins")
@@ -3615,10 +3616,16 @@ def test_a_mann_whitney_us_z_against_its_u_and_group_sizes():
             cases.append((n1, n2, u.statistic, z, p))
     for n1, n2, u, z, p in cases:
         p_typed = "p < .001" if p < 0.001 else f"p = {p:.3f}".replace("0.", ".")
-        text = f"The groups differed in rank (n1 = {n1}, n2 = {n2}; U = {u:g}, z = {z:.2f}, {p_typed})."
-        found = [e for e in audit_units([Unit("c", text)]) if e.found.startswith("z")]
+        r = abs(z) / math.sqrt(n1 + n2)  # (the rank test's r, |z|/√N)
+        text = f"The groups differed in rank (n1 = {n1}, n2 = {n2}; U = {u:g}, z = {z:.2f}, {p_typed}, r = {r:.2f})".replace("r = 0.", "r = .")
+        entries = audit_units([Unit("c", text)])
+        found = [e for e in entries if e.found.startswith("z")]
         assert found and "z-does-not-fit" not in found[0].codes and "p-does-not-follow" not in found[0].codes, (text, found[0].codes)
+        assert not [e.codes for e in entries if e.found.startswith("r") and "effect-does-not-fit" in e.codes], (text, [e.message for e in entries])
         halved = text.replace(f"z = {z:.2f}", f"z = {z / 2:.2f}")
         (moved,) = [e for e in audit_units([Unit("c", halved)]) if e.found.startswith("z")]
         assert "z-does-not-fit" in moved.codes, (halved, moved.codes)
+        doubled = text.replace(f"r = {r:.2f}".replace("r = 0.", "r = ."), f"r = {min(2 * r, 0.99):.2f}".replace("r = 0.", "r = ."))
+        (wrong_r,) = [e for e in audit_units([Unit("c", doubled)]) if e.found.startswith("r")]
+        assert wrong_r.codes == ["effect-does-not-fit"] and f"N = {n1 + n2}: {r:.3f}" in wrong_r.message, (doubled, wrong_r.message)
     assert "is smaller than U = " in moved.message and "ties only make |z| larger" in moved.message

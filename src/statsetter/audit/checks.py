@@ -1344,6 +1344,40 @@ def rank_sum_z(text: str, rep: Reported, sizes: tuple[int, int] | None) -> list[
                     f"U = {typed}, n₁ = {n1}, n₂ = {n2}; z = {rep.value.text}")]
 
 
+# a z and its p typed just before an r, "z = −3.12, p = .002, r = .45": the r is the z's effect size, |z|/√N
+_Z_BEFORE = re.compile(r"[zZ](?<![\w][zZ])\s*=\s*(?P<z>[-−–]?\s?\d+(?:[.,]\d+)?)\s*[,;]\s*[pP]\s*(?:=|<|>|≤|≥)\s*0?[.,]\d+\s*[,;]\s*$")
+_TOTAL_N = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,3}(?:,\d{3})+|\d+)(?![\d.,]\d)")
+
+
+def rank_test_r(text: str, rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
+    """An r typed right after a z and its p (a rank test's effect size, r = |z|/√N: Rosenthal, 1991, as textbooks teach
+    it for the Mann–Whitney and Wilcoxon tests) against the N its sentence gives — the r's own "N = …", an N before it
+    in the sentence, or two group sizes' sum —: the r follows from it or from twice it (a paired design's observations,
+    as some count them), at the printed digits of each; nothing where no N is given."""
+    if rep.symbol != "r" or rep.df or rep.p is not None or rep.value is None or rep.op != "=":
+        return []
+    m = _Z_BEFORE.search(text, max(0, rep.start - 60), rep.start)
+    if m is None:
+        return []
+    typed = m.group("z").replace("−", "-").replace("–", "-").replace(" ", "").replace(",", ".")
+    z, z_half = abs(float(typed)), 0.5 * 10.0 ** -len(typed.partition(".")[2])
+    ns = {int(rep.n.value)} if rep.n is not None and rep.n.value >= 2 else set()
+    sentence = text[max(0, text.rfind(". ", 0, m.start()) + 1) : rep.start]
+    ns |= {int(x.replace(",", "")) for x in _TOTAL_N.findall(sentence)}
+    if sizes is not None:
+        ns.add(sizes[0] + sizes[1])
+    if not ns:
+        return []
+    r_low, r_high = abs(rep.value.value) - rep.value.half_unit, abs(rep.value.value) + rep.value.half_unit
+    readings = {f"N = {n:,}" if k == 1 else f"2N = {2 * n:,}": ((z - z_half) / math.sqrt(k * n), (z + z_half) / math.sqrt(k * n))
+                for n in sorted(ns) for k in (1, 2)}
+    if any(_overlap(given, (r_low, r_high)) for given in readings.values()):
+        return []
+    said = "; ".join(f"{name}: {(low + high) / 2:.3f}" for name, (low, high) in readings.items())
+    return [Finding("effect-does-not-fit", f"{rep.symbol_text} = {rep.value.text} does not follow from z = {m.group('z')} as a rank test's r = |z|/√N "
+                                           f"({said}).", f"z = {m.group('z')}, {rep.symbol_text} = {rep.value.text}")]
+
+
 def rank_sum_bound(rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
     """Mann–Whitney's U between 0 and n₁·n₂ (definition: the count of pairs in which one group's value exceeds the other's,
     ties counting a half), where the sentence gives the two group sizes."""

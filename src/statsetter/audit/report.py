@@ -23,7 +23,7 @@ from ..rendering.sentences import render
 from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
-from .checks import _LEVEL_NAMED, CODES, RATIOS, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, rank_sum_p, rank_sum_z, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, ratio_fits, style_findings, to_record, unlevelled, verdict_word
+from .checks import _LEVEL_NAMED, CODES, RATIOS, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, rank_sum_p, rank_sum_z, rank_test_r, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, ratio_fits, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
 from .counts import CountTest, count_tests, counts_fit, fraction_tests, size_tests
 from .means import GroupMeans, category_means, group_means, means_fit
@@ -558,6 +558,8 @@ def _audit_units(
                 findings += rank_sum_bound(local, sizes) + rank_sum_p(local, sizes, alpha)
             elif local.symbol == "z" and "U" in unit.text[max(0, local.start - 90) : local.start] and _SIZE_TYPED.search(unit.text) is not None:
                 findings += rank_sum_z(unit.text, local, group_sizes(unit.text, local, mark))  # ("U = 234.5, z = −2.61": the U's z)
+            elif local.symbol == "r" and local.p is None and not local.df and _SIZE_TYPED.search(unit.text) is not None:  # ("z = −3.12,
+                findings += rank_test_r(unit.text, local, group_sizes(unit.text, local, mark))  # p = .002, r = .45 (N = 48)": |z|/√N)
             verdict = ns_after(unit.text, local)
             if verdict is not None:  # "p = .012, n.s.": the author's verdict beside the p
                 disagree = verdict_word(local, alpha, unit.text[local.p.start : verdict.end()])  # type: ignore[union-attr]
