@@ -1315,67 +1315,44 @@ def rank_sum_p(rep: Reported, sizes: tuple[int, int] | None, alpha: float) -> li
                                          f"— ties and a one-sided test only lower it.", f"U = {rep.value.text}, n₁ = {n1}, n₂ = {n2}; p {rep.p.op} {rep.p.number.text}")]  # type: ignore[union-attr]
 
 
-# a Mann–Whitney U typed just before a z, "U = 234.5, z = −2.61": the z is the U's normal approximation
-_U_BEFORE = re.compile(r"U(?<![\w]U)\s*(?:\([^()]{0,60}\))?\s*=\s*(?P<u>\d+(?:[.,]\d+)?)\s*[,;]\s*$")
-
-
-def rank_sum_z(text: str, rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
-    """A Mann–Whitney U's z against the U just before it and the group sizes its sentence gives: |z| = |U − n₁n₂/2| / σ,
-    σ² = n₁n₂(n₁ + n₂ + 1)/12 without ties — ties make σ smaller and |z| larger, a continuity correction takes 0.5 off
-    |U − n₁n₂/2| —, so |z| is at least (|U − n₁n₂/2| − 0.5)/σ at the U its printed digits allow nearest the middle
-    (Mann & Whitney, 1947; the tie correction as programs apply it). A z below that follows from no reading of the U."""
-    if rep.symbol != "z" or sizes is None or rep.value is None or rep.op != "=":
+def rank_sum_z(rep: Reported, u: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
+    """A Mann–Whitney U's z (``rep``, typed right after the U ``u``: "U = 234.5, z = −2.61") against the U and the group
+    sizes its sentence gives: |z| = |U − n₁n₂/2| / σ, σ² = n₁n₂(n₁ + n₂ + 1)/12 without ties — ties make σ smaller and
+    |z| larger, a continuity correction takes 0.5 off |U − n₁n₂/2| —, so |z| is at least (|U − n₁n₂/2| − 0.5)/σ at the
+    U its printed digits allow nearest the middle (Mann & Whitney, 1947; the tie correction as programs apply it). A z
+    below that follows from no reading of the U."""
+    if rep.symbol != "z" or u.symbol != "U" or sizes is None or rep.value is None or u.value is None or rep.op != "=" or u.op != "=":
         return []
-    m = _U_BEFORE.search(text, max(0, rep.start - 90), rep.start)
-    if m is None:
-        return []
-    typed = m.group("u")
-    u, half = float(typed.replace(",", ".")), 0.5 * 10.0 ** -len(typed.replace(",", ".").partition(".")[2])
     n1, n2 = sizes
     mu, sigma = n1 * n2 / 2, math.sqrt(n1 * n2 * (n1 + n2 + 1) / 12)
-    if not 0 <= u <= n1 * n2 or sigma <= 0:
+    if not 0 <= u.value.value <= n1 * n2 or sigma <= 0:
         return []
-    nearest = min(max(mu, u - half), u + half)
+    nearest = min(max(mu, u.value.value - u.value.half_unit), u.value.value + u.value.half_unit)
     least = max(abs(nearest - mu) - 0.5, 0.0) / sigma
     if abs(rep.value.value) + rep.value.half_unit >= least - 1e-9:
         return []
-    return [Finding("z-does-not-fit", f"z = {rep.value.text} is smaller than U = {typed} with n₁ = {n1} and n₂ = {n2} allows: |U − n₁n₂/2| "
+    return [Finding("z-does-not-fit", f"z = {rep.value.text} is smaller than U = {u.value.text} with n₁ = {n1} and n₂ = {n2} allows: |U − n₁n₂/2| "
                                       f"less a continuity correction's 0.5, over the SD without ties, is already {least:.3f} (ties only make |z| larger).",
-                    f"U = {typed}, n₁ = {n1}, n₂ = {n2}; z = {rep.value.text}")]
+                    f"U = {u.value.text}, n₁ = {n1}, n₂ = {n2}; z = {rep.value.text}")]
 
 
-# a z and its p typed just before an r, "z = −3.12, p = .002, r = .45": the r is the z's effect size, |z|/√N
-_Z_BEFORE = re.compile(r"[zZ](?<![\w][zZ])\s*=\s*(?P<z>[-−–]?\s?\d+(?:[.,]\d+)?)\s*[,;]\s*[pP]\s*(?:=|<|>|≤|≥)\s*0?[.,]\d+\s*[,;]\s*$")
-_TOTAL_N = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,3}(?:,\d{3})+|\d+)(?![\d.,]\d)")
-
-
-def rank_test_r(text: str, rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:
-    """An r typed right after a z and its p (a rank test's effect size, r = |z|/√N: Rosenthal, 1991, as textbooks teach
-    it for the Mann–Whitney and Wilcoxon tests) against the N its sentence gives — the r's own "N = …", an N before it
-    in the sentence, or two group sizes' sum —: the r follows from it or from twice it (a paired design's observations,
-    as some count them), at the printed digits of each; nothing where no N is given."""
-    if rep.symbol != "r" or rep.df or rep.p is not None or rep.value is None or rep.op != "=":
+def rank_test_r(rep: Reported, z: Reported, ns: "Sequence[int]") -> list[Finding]:
+    """An r (``rep``) typed right after a z and its p (``z``: a rank test's effect size, r = |z|/√N: Rosenthal, 1991, as
+    textbooks teach it for the Mann–Whitney and Wilcoxon tests) against the N's its sentence gives (``ns``: the r's own
+    "N = …", an N before it, two group sizes' sum): the r follows from one of them or from twice it (a paired design's
+    observations, as some count them), at the printed digits of each; nothing where no N is given."""
+    if rep.symbol != "r" or rep.df or rep.p is not None or rep.value is None or rep.op != "=" or z.symbol != "z" or \
+            z.p is None or z.value is None or z.op != "=" or not ns:
         return []
-    m = _Z_BEFORE.search(text, max(0, rep.start - 60), rep.start)
-    if m is None:
-        return []
-    typed = m.group("z").replace("−", "-").replace("–", "-").replace(" ", "").replace(",", ".")
-    z, z_half = abs(float(typed)), 0.5 * 10.0 ** -len(typed.partition(".")[2])
-    ns = {int(rep.n.value)} if rep.n is not None and rep.n.value >= 2 else set()
-    sentence = text[max(0, text.rfind(". ", 0, m.start()) + 1) : rep.start]
-    ns |= {int(x.replace(",", "")) for x in _TOTAL_N.findall(sentence)}
-    if sizes is not None:
-        ns.add(sizes[0] + sizes[1])
-    if not ns:
-        return []
+    low, high = abs(z.value.value) - z.value.half_unit, abs(z.value.value) + z.value.half_unit
     r_low, r_high = abs(rep.value.value) - rep.value.half_unit, abs(rep.value.value) + rep.value.half_unit
-    readings = {f"N = {n:,}" if k == 1 else f"2N = {2 * n:,}": ((z - z_half) / math.sqrt(k * n), (z + z_half) / math.sqrt(k * n))
-                for n in sorted(ns) for k in (1, 2)}
+    readings = {f"N = {n:,}" if k == 1 else f"2N = {2 * n:,}": (low / math.sqrt(k * n), high / math.sqrt(k * n))
+                for n in sorted(set(ns)) for k in (1, 2)}
     if any(_overlap(given, (r_low, r_high)) for given in readings.values()):
         return []
-    said = "; ".join(f"{name}: {(low + high) / 2:.3f}" for name, (low, high) in readings.items())
-    return [Finding("effect-does-not-fit", f"{rep.symbol_text} = {rep.value.text} does not follow from z = {m.group('z')} as a rank test's r = |z|/√N "
-                                           f"({said}).", f"z = {m.group('z')}, {rep.symbol_text} = {rep.value.text}")]
+    said = "; ".join(f"{name}: {(a + b) / 2:.3f}" for name, (a, b) in readings.items())
+    return [Finding("effect-does-not-fit", f"{rep.symbol_text} = {rep.value.text} does not follow from z = {z.value.text} as a rank test's r = |z|/√N "
+                                           f"({said}).", f"z = {z.value.text}, {rep.symbol_text} = {rep.value.text}")]
 
 
 def rank_sum_bound(rep: Reported, sizes: tuple[int, int] | None) -> list[Finding]:

@@ -24,11 +24,11 @@ from ..styled import StyledText
 from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import _LEVEL_NAMED, CODES, RATIOS, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, rank_sum_p, rank_sum_z, rank_test_r, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, ratio_fits, style_findings, to_record, unlevelled, verdict_word
-from .parsing import _SIGNIFICANCE, Number, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
+from .parsing import _SIGNIFICANCE, Number, _patterns, _sentence_start, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
 from .counts import CountTest, count_tests, counts_fit, fraction_tests, size_tests
 from .means import GroupMeans, category_means, group_means, means_fit
 from .models import _R2_ROW, ModelFit, model_fit, model_fits
-from .tables import ONE_COEFFICIENT, Reading, Squares, design_readings, df_readings, star_bounds, table_statistics
+from .tables import ONE_COEFFICIENT, Reading, Squares, _totals, design_readings, df_readings, star_bounds, table_statistics
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
 
@@ -209,6 +209,7 @@ def _long_number(text: str) -> "re.Match[str] | None":
 # "ns", "n.s." or "n. s." as the parser reads a p (a word of its own), more loosely: a paragraph without a digit is read only
 # when it has one (not for every "sessions" or "conditions" of the prose, which had sent most digitless paragraphs to the parser)
 _NS = re.compile(r"n(?<![\w.]n)\.?\s?s(?!\w)")
+_RIGHT_AFTER = re.compile(r"\s*[,;]\s*")  # what stands between a statistic and the one typed right after it, "U = 234.5, z = −2.61"
 _SIZE_TYPED = re.compile(r"[nN](?:\s?[12₁₂])?\s*[=¼]")  # an n, n₁ or n₂ and its "=": a group size may be typed
 _SIZE_TOTAL = re.compile(r"N(?<![\w]N)\s*=\s*(\d{1,6})(?![\d.,]\d)")  # the literal first: the engine's fast scan
 
@@ -525,6 +526,7 @@ def _audit_units(
         if unit is not current:
             current = unit
             previous_end = 0  # the end of the last statistic with a head, for the B and SE before a t
+            previous: Reported | None = None  # (and that statistic: a U before its z, a z before its r)
             counted, lines, newline = 0, 0, -1  # newlines before position `counted`, and the last of them (one pass per unit)
         consistent, recheck = _consistency(item, alpha)
         before = None  # the B and SE the sentence gives before a t or z (or a Wald χ²)
@@ -556,10 +558,16 @@ def _audit_units(
             elif local.symbol == "U" and _SIZE_TYPED.search(unit.text) is not None:  # (group sizes only where an n is typed)
                 sizes = group_sizes(unit.text, local, mark)
                 findings += rank_sum_bound(local, sizes) + rank_sum_p(local, sizes, alpha)
-            elif local.symbol == "z" and "U" in unit.text[max(0, local.start - 90) : local.start] and _SIZE_TYPED.search(unit.text) is not None:
-                findings += rank_sum_z(unit.text, local, group_sizes(unit.text, local, mark))  # ("U = 234.5, z = −2.61": the U's z)
-            elif local.symbol == "r" and local.p is None and not local.df and _SIZE_TYPED.search(unit.text) is not None:  # ("z = −3.12,
-                findings += rank_test_r(unit.text, local, group_sizes(unit.text, local, mark))  # p = .002, r = .45 (N = 48)": |z|/√N)
+            elif previous is not None and local.symbol in ("z", "r") and _RIGHT_AFTER.fullmatch(unit.text, previous.end, local.start) \
+                    and _SIZE_TYPED.search(unit.text) is not None:  # the statistic just before it: "U = 234.5, z = −2.61" (the U's z),
+                sizes = group_sizes(unit.text, local, mark)  # "z = −3.12, p = .002, r = .45 (N = 48)" (the z's r, |z|/√N)
+                if local.symbol == "z":
+                    findings += rank_sum_z(local, previous, sizes)
+                elif previous.symbol == "z":
+                    start = _sentence_start(_patterns(mark), unit.text, 0, local.start)
+                    ns = _totals(unit.text[start : local.start]) + ([int(local.n.value)] if local.n is not None and local.n.value >= 2 else []) + \
+                        ([sizes[0] + sizes[1]] if sizes is not None else [])
+                    findings += rank_test_r(local, previous, ns)
             verdict = ns_after(unit.text, local)
             if verdict is not None:  # "p = .012, n.s.": the author's verdict beside the p
                 disagree = verdict_word(local, alpha, unit.text[local.p.start : verdict.end()])  # type: ignore[union-attr]
@@ -572,7 +580,7 @@ def _audit_units(
             if before is not None:
                 findings += coefficient_ratio(local, before)
             if local.symbol is not None:
-                previous_end = local.end
+                previous_end, previous = local.end, local
                 italic_seen = italic_seen or bool(unit.italic and any(s <= local.symbol_start < e for s, e in unit.italic))
         unheld: list[str] = []  # (what counts_fit could not hold the p to, said in the notes)
         if item.counts is not None:  # a categorical variable's χ² and p against its counts

@@ -149,8 +149,7 @@ _CI_SAID = re.compile(r"(?i)\b95\s?%\s?(?:CIs?\b|confidence\s+(?:intervals?|limi
 _NOT_RATIO_HEAD = re.compile(r"(?i)median|IQR|quartile|\brange|\bmean|\bSD\b|%|percent|\bn\b|count|frequenc|\bmin|\bmax|difference|\bB\b|β|coefficient|estimate")
 # a caption or note that says some cells are descriptives ("values are median (IQR)", "mean (95% CI)")
 _DESCRIBED = re.compile(r"(?i)median\s*[(\[]|\bIQR\b|interquartile|\bmeans?\s*[(\[±]|\(\s*range\s*\)")
-# (and row labels that do: "Age, median (IQR)", "n (%)" — not a category's own "%", "≥400% FPL")
-_NOT_RATIO_ROW = re.compile(r"(?i)median|IQR|quartile|\brange\b|\bmean\b|\bSD\b|\(\s*%\s*\)|\bcount|frequenc")
+
 _RATIOS_SAID = re.compile(r"(?i)\b(?:odds|hazards?|risk|rate|prevalence)\s+ratios?\b|\brelative\s+risks?\b")
 
 
@@ -589,6 +588,9 @@ def cell_grid(cells: Sequence[tuple[int, int, Unit, list[Reported]]]) -> dict[in
 
 # a row whose label says it gives a mean and SD, a median and IQR or a range: "45 (12)" is no count and its percent
 NOT_COUNTS = re.compile(r"(?i)\bmean\b|\bSD\b|median|\bIQR\b|interquartile|\brange\b|±|\bM\s*\(")
+# and row labels that say a row is not ratios: those, or counts ("Age, median (IQR)", "n (%)" — not a category's own "%",
+# "≥400% FPL")
+_NOT_RATIO_ROW = re.compile(rf"{NOT_COUNTS.pattern}|quartile|\(\s*%\s*\)|\bcount|frequenc")
 
 
 # what says a table's "45.3 (6.2)" cells are means with their SDs: "M (SD)", "Mean (SD)", "means (standard deviations)",
