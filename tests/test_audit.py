@@ -120,6 +120,39 @@ def test_consistency_uses_the_printed_precision():
     assert "p-does-not-follow" not in codes("t(23) = 2.1, p = .050")
 
 
+def test_a_p_cut_after_its_last_digit_is_said_so():
+    """A p printed by cutting the exact p after its last digit rather than rounding it (as some programs and authors do;
+    a published χ² table's χ²(5) = 4.005 with p = 0.548, tests/test_audit_count_columns.py) is still not the p that
+    follows, and the finding says what it is, with the rounded p. Reference: scipy's two-sample t tests of pingouin's
+    bundled `anova` data (pain threshold by hair colour), t printed to three decimals."""
+    import itertools
+
+    import pingouin as pg
+
+    data = pg.read_dataset("anova")
+    groups = {k: v["Pain threshold"].to_numpy() for k, v in data.groupby("Hair color")}
+    cases = 0
+    for a, b in itertools.combinations(sorted(groups), 2):
+        test = stats.ttest_ind(groups[a], groups[b])
+        df = len(groups[a]) + len(groups[b]) - 2
+        shown = f"{test.statistic:.3f}".replace("-", "−")
+        cut = int(test.pvalue * 1000) / 1000
+        rounded = round(test.pvalue, 3)
+        low, high = p_range(one(f"t({df}) = {shown}, p = {cut:.3f}"))
+        if cut == rounded or low <= cut + 0.0005:  # (a p whose cut and rounded forms agree, or the t's own rounding allows it)
+            continue
+        cases += 1
+        entry = audit_units([Unit("s", f"The groups differed, t({df}) = {shown}, p = {cut:.3f}.")])[0]
+        assert "p-does-not-follow" in entry.codes, entry.message
+        assert f"cutting the exact p after its last digit gives, not rounding it (rounded: {rounded:.3f})" in entry.message, entry.message
+        assert "p-does-not-follow" not in audit_units([Unit("s", f"The groups differed, t({df}) = {shown}, p = {rounded:.3f}.")])[0].codes
+        bare = audit_units([Unit("s", f"The groups differed, t({df}) = {shown}, p = {cut:.3f}".replace("0.", ".") + ".")])[0]
+        assert f"(rounded: {rounded:.3f})".replace("0.", ".") in bare.message, bare.message
+    assert cases == 2  # (Dark Blond vs Light Blond, .19364 cut to .193; Light Blond vs Light Brunette, .01176 cut to .011)
+    # a p off by more than its last digit is not called cut: scipy, t(23) = 2.10 gives p = .0468
+    assert "cutting" not in audit_units([Unit("s", "The groups differed, t(23) = 2.10, p = .030.")])[0].message
+
+
 def test_decision_error_and_one_sided():
     # scipy: F(1, 40) = 3.10 gives p = .086; reported < .05 changes the decision
     assert {"p-does-not-follow", "verdict-changes"} <= set(codes("F(1, 40) = 3.10, p = .030"))

@@ -457,3 +457,67 @@ def test_a_rows_total_against_its_groups_counts(tmp_path):
     assert [e.found for e in found] == ["87", "442"], [(e.found, e.message) for e in found]
     assert "add up to 78 (42 + 29 + 7), fewer than the 87 its total column gives, though the groups' n in the heads make up the table's N = 1,154" in found[0].message
     assert "add up to 443 (165 + 217 + 61), more than the 442 its total column gives" in found[1].message
+
+
+# A χ² table of an open-access SCIRP article (Scientific Research Publishing), as its HTML table file prints it
+# (https://html.scirp.org/file/_1-2260316_3.htm, the rows of the stored copy): two χ² carry a capital footnote mark
+# glued to them, "4.005Y", the note defining it not in the copy
+_SCIRP_2260316 = """| Variable | Positive | Negative | Total | χ2 | p value |
+|---|---|---|---|---|---|
+| | n (%) | n (%) | N (%) | | |
+| Age group | | | | | |
+| <20 | 4 (12.5) | 28 (87.5) | 32 | 4.005Y | 0.548 |
+| 20 - 29 | 8 (3.1) | 248 (96.9) | 256 | | |
+| 30 - 39 | 15 (4.6) | 309 (95.4) | 324 | | |
+| 40 - 49 | 11 (4.5) | 232 (95.5) | 243 | | |
+| 50 - 59 | 5 (4.9) | 97 (95.1) | 102 | | |
+| ≥60 | 0 (0.0) | 8 (100.0) | 8 | | |
+| Sex | | | | | |
+| Male | 23 (7.1) | 300 (92.9) | 323 | 8.098 | 0.004* |
+| Female | 20 (3.1) | 622 (96.9) | 642 | | |
+| Marital Status | | | | | |
+| Single | 11 (4.2) | 253 (95.8) | 264 | 0.071 | 0.789 |
+| Married | 32 (4.6) | 669 (95.4) | 701 | | |
+| Occupation group | | | | | |
+| Health worker | 31 (4.1) | 718 (95.1) | 749 | 0.350Y | 0.950 |
+| Student | 7 (4.8) | 138 (95.2) | 145 | | |
+| Security | 2 (7.1) | 26 (92.9) | 28 | | |
+| Others | 3 (7.0) | 40 (93.0) | 43 | | |
+| Primary place residence | | | | | |
+| Urban | 34 (4.6) | 699 (95.4) | 733 | 0.239 | 0.625 |
+| Rural | 9 (3.9) | 223 (96.1) | 232 | | |
+"""
+
+
+def test_a_chi_square_with_a_capital_footnote_mark_is_read_on_its_counts(tmp_path):
+    """"4.005Y" had been no number: the χ² was not read, its p was held to the counts alone and to no df. Now the χ² is
+    read as "8.098" is, on its counts' df, in Markdown and in a Word table: χ²(5) = 4.005 gives p = .5487 — the printed
+    0.548 is that p cut, not rounded — and neither marked χ² is its counts' Pearson's (scipy: 6.375 on 5 df, 1.341 on 3;
+    the likelihood-ratio χ² neither), though each p follows from its χ² as printed (whatever test the mark names); the
+    three unmarked χ² are their counts' (8.098, 0.071, 0.239); and 718 of 749 is printed as 95.1% (95.9%)."""
+    counts = {"age": [[4, 8, 15, 11, 5, 0], [28, 248, 309, 232, 97, 8]], "occupation": [[31, 7, 2, 3], [718, 138, 26, 40]],
+              "sex": [[23, 20], [300, 622]], "marital": [[11, 32], [253, 669]], "residence": [[34, 9], [699, 223]]}
+    pearson = {k: f"{chi2_contingency(np.array(c).T, correction=False)[0]:.3f}" for k, c in counts.items()}
+    assert pearson == {"age": "6.375", "occupation": "1.341", "sex": "8.098", "marital": "0.071", "residence": "0.239"}
+    from scipy.stats import chi2
+    assert f"{chi2.sf(4.005, 5):.4f}" == "0.5487" and f"{chi2.sf(0.350, 3):.3f}" == "0.950"
+    for form in ("md", "docx"):
+        path = tmp_path / f"scirp.{form}"
+        if form == "md":
+            path.write_text(_SCIRP_2260316, encoding="utf-8")
+        else:
+            rows = _rows(_SCIRP_2260316)
+            d = docx.Document()
+            table = d.add_table(rows=len(rows), cols=len(rows[0]))
+            for r, row in enumerate(rows):
+                for c, cell in enumerate(row):
+                    table.cell(r, c).text = cell
+            d.save(str(path))
+        entries = sorted(audit_file(path), key=lambda e: e.found)
+        assert [e.found for e in entries] == ["χ² = 0.071, p = 0.789", "χ² = 0.239, p = 0.625", "χ² = 0.350, p = 0.950", "χ² = 4.005, p = 0.548",
+                                              "χ² = 8.098, p = 0.004"], [e.found for e in entries]
+        assert [e.codes for e in entries] == [[], [], ["percent-does-not-fit", "counts-do-not-fit"], ["p-does-not-follow", "counts-do-not-fit"], []], \
+            [(e.found, e.codes) for e in entries]
+        assert "718 / 749 is 95.9%, not 95.1%" in entries[2].message and "on 3 df they give Pearson's χ² 1.341" in entries[2].message
+        assert "on 5 df they give Pearson's χ² 6.375" in entries[3].message, entries[3].message
+        assert "cutting the exact p after its last digit gives, not rounding it (rounded: 0.549)" in entries[3].message

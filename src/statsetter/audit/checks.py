@@ -23,7 +23,7 @@ from ..errors import MissingExtra
 from ..formulas import hedges_j
 from ..pvalues import spearman_p, upper_tail
 from ..records import EffectSize, Interval, Result, Statistic
-from ..style.numbers import Numbers, numbers_for
+from ..style.numbers import Numbers, numbers_for, round_half_up
 from ..style.profile import Style
 from .parsing import Effect, Number, Reported, _remembered, subscript
 from .parsing import Interval as TypedInterval
@@ -332,14 +332,26 @@ def consistency(rep: Reported, alpha: float) -> list[Finding]:
     if exact and rep.symbol in ("t", "z", "r", "rs") and _overlap((1 - computed[1] / 2, 1 - computed[0] / 2), reported):  # the other tail's
         return [Finding("one-sided", "The reported p matches only a one-sided test whose direction is opposite to the result (its p is 1 − p/2); "
                                      "say that the test was one-sided and in which direction, or report the two-sided p.", evidence)]
+    printed = given.number if given.op == "=" and not anywhere else None  # (an exact p cut after its last digit, not rounded:
+    cut = printed is not None and _overlap(computed, (printed.value, printed.value + 2 * printed.half_unit * (1 - 1e-9)))  # below its next digit)
     found = [Finding("p-does-not-follow", "The reported p follows from the statistic under no df at all." if anywhere else
-                     "The reported p does not follow from the statistic and its df.", evidence)]
+                     "The reported p does not follow from the statistic and its df" + (
+                         f"; it is what cutting the exact p after its last digit gives, not rounding it (rounded: {_rounded_like(computed, printed)})."
+                         if cut and printed is not None else "."), evidence)]
     said_significant = reported[1] <= alpha
     if (said_significant and computed[0] >= alpha) or (not said_significant and computed[1] < alpha):
         found.append(Finding("verdict-changes", f"At alpha = {alpha:g} the recomputed p leads to the other decision.", evidence))
     if given.op == "=" and not anywhere:
         found += one_number_off(rep, reported)
     return found
+
+
+def _rounded_like(computed: tuple[float, float], printed: Number) -> str:
+    """The exact p's range rounded to the printed p's decimals, with or without its leading zero as the printed p
+    ("0.549"; "0.549 or 0.550" where the range straddles a rounding edge)."""
+    shown = dict.fromkeys(str(round_half_up(x, printed.decimals)) for x in computed)
+    bare = printed.text.lstrip("−-").startswith(".")
+    return " or ".join(x[1:] if bare and x.startswith("0.") else x for x in shown)
 
 
 def _f_for_p(p: float, df: tuple[float, float]) -> float:

@@ -27,7 +27,6 @@ from .tables import _TOTAL_HEAD, MEANS_SAID, NOT_COUNTS, WHOLE_COUNT, _number, _
 
 _CHI_HEAD = re.compile(r"(?i)\s*(?:pearson(?:'?s)?\s+)?(?:χ\s?[²2]|chi[- ]?square[d]?|chi2|x\s?[²2])(?:\s*(?:value|test|statistic))?\s*(?:/\s*[A-Za-z]{1,2}\s*)?")
 _MIXED_HEAD = re.compile(r"(?i)\s*(?:[ztFH]|U)\s*/\s*(?:χ\s?[²2]|chi2|x\s?[²2])\s*")  # "Z/χ2", "t/χ²": χ² in a count row
-_STAT_NUMBER = re.compile(r"\s*(?P<num>\d+(?:[.,]\d+)?)\s*[*†‡a-d]*\s*")
 
 
 @dataclass(frozen=True, slots=True)
@@ -348,15 +347,14 @@ def _test(block: Sequence[dict[int, tuple[int, float, float]]], anchor: dict[int
     p_unit = anchor.get(p_col) if p_col is not None else None
     chi_unit = anchor.get(chi_col) if chi_col is not None else None
     p = _p_cell(p_unit.text, mark) if p_unit is not None and p_unit.text.strip() else None
-    value = _STAT_NUMBER.fullmatch(chi_unit.text) if chi_unit is not None else None
+    read = _number(chi_unit.text, mark) if chi_unit is not None else None  # (its footnote mark or stars after it: "4.005Y", "8.10**")
+    value = read[1] if read is not None and read[0] == "=" and read[1].value >= 0 else None
     if p is None and value is None:
         return None
     df = (len(table) - 1) * (len(groups) - 1)
     how = _how(table, groups, block, paired, counts, df)
     if value is not None:
-        digits = value.group("num")
-        number = Number(digits, float(digits.replace(",", ".")), len(re.split(r"[.,]", digits)[1]) if re.search(r"[.,]", digits) else 0,
-                        value.start("num"), value.end("num"))
+        number = value
         rep = Reported("chi2", "χ²", number.start, number.start, number.end, (Number(str(df), float(df), 0, 0, 0),), None, "=", number, p)
         unit = chi_unit
     else:

@@ -193,9 +193,11 @@ def _ratio_cell(text: str, mark: str) -> tuple[Number, Number, Number] | None:
 # repeated-measures tables name them ("Error (between subjects)", "Error(week)", "Residuals (within)")
 _ERROR_ROW = re.compile(r"(?i)\s*(?:residuals?|error|within(?:[- ]groups?)?|within-subjects error)(?:\s*\([^()]{1,60}\))?\s*")
 # (a footnote's letter may be any, typed right after the number: "46.19f" under df; "0.68NS*", a p its author calls
-# not significant)
+# not significant; a capital glued to a number with decimals, "4.005Y" under χ² — not after a whole number, as a stage
+# or a grade, "2A", is typed)
 _BARE = re.compile(rf"\s*(?P<op>[<>≤≥]\s*)?(?P<num>[-−–]?\s?(?:\d+(?:[.,]\d+)?|[.,]\d+)(?:[eE]\s?[-−+]?\d{{1,3}})?)\s*"
-                   rf"(?P<marks>[{_SIGNIFICANCE}]+|[a-d]|(?<=\d)[e-z]|(?<=\d)NS[{_SIGNIFICANCE}]*)?\s*")
+                   rf"(?P<marks>[{_SIGNIFICANCE}]+|[a-d]|(?<=\d)[e-z]|(?<=\d)NS[{_SIGNIFICANCE}]*|(?<=[.,]\d)[A-DF-Z]|(?<=[.,]\d\d)[A-DF-Z]"
+                   rf"|(?<=[.,]\d{{3}})[A-DF-Z]|(?<=[.,]\d{{4}})[A-DF-Z])?\s*")
 # a model's residual df as R's summary prints them under its coefficients ("Residual standard error: 2.593 on 29 degrees of
 # freedom"; "F-statistic: 69.21 on 2 and 29 DF"), when a table's caption or note keeps the line
 _RESIDUAL_DF = re.compile(r"\bon\s+(?:\d{1,6}\s+and\s+)?(\d{1,6})\s+(?:degrees\s+of\s+freedom|DF)\b")
