@@ -436,6 +436,56 @@ def test_spss_test_statistics_tables_are_read_down_their_columns(tmp_path):
     assert ["p-does-not-follow" in e.codes for e in audit_file(_doc(tmp_path / "tests2.docx", tables=retyped))] == [False, False, True]
 
 
+# a spreadsheet's paired t test as a published training evaluation prints it (scribd.com/document/400542103, "Pre-Test & Post
+# Test Analysis Sample Computations": its output table, as printed)
+_SPREADSHEET_PAIRED = [("", "Variable 1", "Variable 2"), ("Mean", "60.3684210526", "53.7368421053"), ("Variance", "20.0233918129", "68.9824561404"),
+                       ("Observations", "19", "19"), ("Pearson Correlation", "0.5722806228", ""), ("Hypothesized Mean Difference", "0", ""),
+                       ("df", "18", ""), ("t Stat", "4.2405044127", ""), ("P(T<=t) one-tail", "0.000245961", ""), ("t Critical one-tail", "1.7340635923", ""),
+                       ("P(T<=t) two-tail", "0.000491922", ""), ("t Critical two-tail", "2.1009220369", "")]
+
+
+def _spreadsheet_t(a, b, equal: bool) -> list[tuple[str, str, str]]:
+    """Two groups' t test laid out as a spreadsheet's analysis tools print it (full digits; Welch's df rounded), its
+    numbers from scipy."""
+    test = stats.ttest_ind(a, b, equal_var=equal)
+    va, vb = np.var(a, ddof=1), np.var(b, ddof=1)
+    rows = [("", "Variable 1", "Variable 2"), ("Mean", repr(float(np.mean(a))), repr(float(np.mean(b)))), ("Variance", repr(float(va)), repr(float(vb))),
+            ("Observations", str(len(a)), str(len(b)))]
+    if equal:
+        rows.append(("Pooled Variance", repr(float(((len(a) - 1) * va + (len(b) - 1) * vb) / (len(a) + len(b) - 2))), ""))
+    rows += [("Hypothesized Mean Difference", "0", ""), ("df", f"{test.df:.0f}", ""), ("t Stat", repr(float(test.statistic)), ""),
+             ("P(T<=t) one-tail", repr(float(test.pvalue / 2)), ""), ("t Critical one-tail", repr(float(stats.t.isf(0.05, test.df))), ""),
+             ("P(T<=t) two-tail", repr(float(test.pvalue)), ""), ("t Critical two-tail", repr(float(stats.t.isf(0.025, test.df))), "")]
+    return rows
+
+
+def test_a_spreadsheets_t_test_output_is_read_down_its_column(tmp_path):
+    """A spreadsheet's t test pasted as a table — "t Stat" with its "df" and "P(T<=t) two-tail" rows, as theses paste
+    them — had not been read at all. Now the t is read with the df and two-tailed p of its column (the one-tailed p and
+    the critical values not): the published paired test is clean (scipy: t(18) = 4.2405 gives p = .000492); a Student's
+    t and a Welch's t of pingouin's penguins (bill depth, 40 Adelie and 30 Chinstrap; scipy) are clean, the Welch's held
+    to a df within 1 of its rounded df (67 for 67.03); each p moved by half again is found, in Word and Markdown."""
+    import pingouin as pg
+
+    assert f"{2 * stats.t.sf(4.2405044127, 18):.6f}" == "0.000492"
+    penguins = pg.read_dataset("penguins").dropna(subset=["bill_depth_mm"])
+    a = penguins.loc[penguins["species"] == "Adelie", "bill_depth_mm"].to_numpy()[:40]
+    b = penguins.loc[penguins["species"] == "Chinstrap", "bill_depth_mm"].to_numpy()[:30]
+    tables = {"paired": _SPREADSHEET_PAIRED, "student": _spreadsheet_t(a, b, True), "welch": _spreadsheet_t(a, b, False)}
+    assert {r[0]: r[1] for r in tables["welch"]}["df"] == "67" and abs(stats.ttest_ind(a, b, equal_var=False).df - 67.03) < 0.01
+    for name, rows in tables.items():
+        entries = audit_file(_doc(tmp_path / f"{name}.docx", tables=[("t-Test", rows)]))
+        assert len(entries) == 1 and entries[0].found.startswith(("t(18) = 4.2405044127", "t(68) = -0.847", "t = -0.868")) and entries[0].codes == [], \
+            [(e.found, e.codes) for e in entries]
+        assert entries[0].checked.startswith("p recomputed from t("), entries[0].checked
+        md = tmp_path / f"{name}.md"
+        md.write_text("| " + " | ".join(rows[0]) + " |\n|---|---|---|\n" + "".join("| " + " | ".join(r) + " |\n" for r in rows[1:]), encoding="utf-8")
+        assert [e.found for e in audit_file(md)] == [entries[0].found]
+        moved = [r if r[0] != "P(T<=t) two-tail" else (r[0], repr(float(r[1]) * 1.5), "") for r in rows]
+        assert [e.codes for e in audit_file(_doc(tmp_path / f"{name}-moved.docx", tables=[("t-Test", moved)]))] == [["p-does-not-follow"]]
+    assert "Welch's df, printed rounded as 67: from 66 to 68" in audit_file(_doc(tmp_path / "w.docx", tables=[("t-Test", tables["welch"])]))[0].checked
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

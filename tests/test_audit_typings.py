@@ -771,3 +771,37 @@ def test_an_adjusted_ratio_at_a_sentences_start():
     text = f"Adjusted OR = {np.exp(fit.params['PSI']):.2f} (95% CI {low:.2f}–{high:.2f}) for the new method."
     (entry,) = audit_units([Unit("line 1", text)], suggest_all=True)
     assert entry.found.startswith("Adjusted OR") and entry.suggestion.startswith("aOR = ")
+
+
+def test_a_statistic_given_in_words_with_its_df_or_p():
+    """A statistic named in words — "an F of 3.6 with 2 and 9 df", "the t-value of 2.31 (df = 45, …)", "a chi-square
+    value of 12.4 with 2 degrees of freedom" — had not been read (nor df spelled out as "degrees of freedom"): a p after
+    it was checked against nothing. Now it is read where its df or p follow, the operator a word ("of", "was", "is",
+    "equals", "equalled"), the symbol named as a value or statistic, spelled out, or after an article. Sources: HyperStat
+    (David Lane's open textbook; davidmlane.com/hyperstat/B88533.html and B119422.html), as printed; the rest are
+    typings of the trade (practice), their numbers from scipy."""
+    hyperstat = {"An F table can be used to compute that the probability value for an F of 3.6 with 2 and 9 df is 0.071.": ((2, 9), 3.6, 0.071),
+                 "For the interaction, the probability value associated with an F of 5.783 with 2 and 42 df is 0.006.": ((2, 42), 5.783, 0.006)}
+    for text, (df, value, p) in hyperstat.items():
+        assert round(stats.f.sf(value, *df), 3) == p  # (the textbook's p, from its F and df)
+        (rep,) = find_statistics(text)
+        assert rep.symbol == "F" and tuple(d.value for d in rep.df) == df and rep.value.value == value
+    # worded, each with its df or p: read and checked (scipy: t(45) = 2.31 gives .0255; χ²(2) = 12.4, .0020; F(2, 97) = 4.51,
+    # .0134; F(2, 40) = 3.10, .056 — not .20)
+    assert round(2 * stats.t.sf(2.31, 45), 3) == 0.026 and round(stats.chi2.sf(12.4, 2), 3) == 0.002
+    assert round(stats.f.sf(4.51, 2, 97), 3) == 0.013 and round(stats.f.sf(3.10, 2, 40), 3) == 0.056
+    clean = ["The t-value of 2.31 (df = 45, p = .03) was significant.",
+             "A chi-square value of 12.4 with 2 degrees of freedom (p = .002) was found.",
+             "The F statistic equalled 4.51 with 2 and 97 df, p = .013.",
+             "A significant t of 2.31 on 45 df was found (p = .03).",
+             "The scores differed, t = 2.31 with 45 degrees of freedom, p = .03."]
+    for text in clean:
+        (entry,) = audit_units([Unit("s", text)])
+        assert entry.checked.startswith("p recomputed from") and "p-does-not-follow" not in entry.codes, (text, entry.checked, entry.codes)
+    (wrong,) = audit_units([Unit("s", "An F value of 3.10 with 2 and 40 degrees of freedom was not significant (p = .20).")])
+    assert wrong.codes == ["p-does-not-follow"] and "F(2, 40) = 3.10" in wrong.checked
+    # not a reported statistic: a letter in prose, a value spoken of without df or p, a significance level called a
+    # "chi square" (chnm.gmu.edu/survey/sig.html, as printed)
+    for text in ["Part F of 12 items was scored first; item t of 3 sections, p = .04.", "The t value was large, and a z-value of 2 is none.",
+                 "Among statisticians a chi square of .05 is a conventionally accepted threshold of statistical significance."]:
+        assert [r.symbol for r in find_statistics(text) if r.symbol is not None] == [], text

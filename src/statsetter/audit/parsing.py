@@ -117,7 +117,7 @@ class Reported:
 
 @functools.lru_cache(maxsize=4096)  # a manuscript types its symbols a few ways, thousands of times
 def symbol_of(text: str) -> str | None:
-    t = text.replace(" ", "").removesuffix("-statistic").removesuffix("-value").removesuffix("value")  # "t-value", R's "t value"
+    t = text.replace(" ", "").removesuffix("statistic").removesuffix("value").removesuffix("-")  # "t-value", R's "t value", "F statistic"
     if t.startswith("F") and t.lower().endswith("change"):  # "F change", "F-change": a regression step's F, as SPSS names it
         return "F"
     low = t.lower()
@@ -156,14 +156,15 @@ _SUPERSCRIPT = str.maketrans("⁰¹²³⁴⁵⁶⁷⁸⁹⁻−–", "0123456789
 
 # each alternative starts with a literal character; `_guarded` puts the "not after a letter or point" test right after it
 # (Χ: the Greek capital chi, as some symbol fonts and keyboards type it)
-_SYMBOLS = (r"Δ\s?F", r"χ\s?[²2](?:_?[Fr](?![\w]))?", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)", r"C(?i:hi)[- ]?(?i:square[d]?|2|²)",
+_SYMBOLS = (r"Δ\s?F", r"χ\s?[²2](?:_?[Fr](?![\w]))?", r"χ\^2", r"Χ\s?[²2]", r"Χ\^2", r"c(?i:hi)[- ]?(?i:square[d]?|2|²)(?:[- ](?:value|statistic))?",
+            r"C(?i:hi)[- ]?(?i:square[d]?|2|²)(?:[- ](?:value|statistic))?",
             r"X\s?²", r"X\^2", r"X[- ]squared",
             r"X2(?=\s*\()", r"r[sₛ](?![A-Za-z])", r"r_s", r"ρ", r"r(?i:ho)", r"R(?i:ho)", r"τ_?b?", r"t(?i:au)(?:_?b)?", r"T(?i:au)(?:_?b)?",
             # "F-statistic" as R's summary of a linear model prints it ("F-statistic: 4.51"; "t value", "F-value" as output columns
             # name them), and a logistic coefficient's Wald χ²
             # as SPSS names it ("Wald = 6.13"; "Wald χ²(1)" is read at its χ²): optional tails of one alternative each, so that
             # the engine tries no more alternatives at every "t" of the prose
-            r"t(?:-statistic|[- ]value|s)?", r"F(?:-statistic|[- ]value|s|[- ]?[Cc]hange(?![a-z]))?", "r", r"z(?:-statistic|[- ]value)?", r"Z(?:[- ]value)?", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
+            r"t(?:[- ]statistic|[- ]value|s)?", r"F(?:[- ]statistic|[- ]value|s|[- ]?[Cc]hange(?![a-z]))?", "r", r"z(?:[- ]statistic|[- ]value)?", r"Z(?:[- ]value)?", "U", "H", r"W(?:ald(?!\s*(?:χ|[Cc]hi|X)))?", "T", "Q", "V")
 
 
 def _top_alternatives(pattern: str) -> list[str]:
@@ -329,7 +330,7 @@ class _Patterns:
         self.number = re.compile(num)
         self.head = re.compile(
             rf"(?P<sym>{_SYMBOL})\s*+(?:(?P<open>[(\[])(?P<inner>[^()\[\]]{{0,40}})[)\]]|(?P<sub>[₀-₉]+(?:[.,;]\s?[₀-₉]+){{0,3}})|(?<=F)(?P<bare>\d{{1,4}}\s?,\s?\d{{1,6}})(?![\d.])|(?<=t)(?P<bare_t>\d{{2,4}})(?=\s*+=))?"
-            rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:))\s*+(?P<num>{value}{_EXPONENT}?)"
+            rf"\s*+(?P<op>=|<|>|≤|≥|¼|:(?<=c:)|(?<=\s)(?:of|was|is|equals|equal\s++to|equall?ed)(?=\s))\s*+(?P<num>{value}{_EXPONENT}?)"
         )
         # not after a mark of significance ("*", "†", "‡", "§", "^", or one and a space): "*p < .05. **p < .01. †p < .10." is a
         # table's note defining its marks, not a reported p
@@ -369,10 +370,10 @@ class _Patterns:
         self.ratio = re.compile(r"(?P<name>" + _by_first(p for p, _ in _RATIOS) + rf"){_RATIO_ABBREVIATED}?(?:{_RATIO_LABELLED}|\s*+(?P<op>[=¼])|{_RATIO_WITHOUT_EQUALS})"
                                 rf"\s*+(?P<num>{value})(?(rlev)\s*+[(\[]\s*+(?P<ra>{num})\s*+(?:{sep}|{_DASH})\s*+(?P<rb>{num})\s*+[)\]])")
         sep2 = r"[;/]" if mark == "," else r"[,;/]"
-        # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)", as output prints it "DF = 2"; or after their numbers,
-        # "(38 df)", "with 2 and 97 df", run together "1df"
-        self.df = re.compile(rf"(?:d(?<![\w]d)\.?f\.?|D(?<![\w]D)F(?![\w]))\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
-                             rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]*+(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])")
+        # df written apart: "df = 2, 97", "d.f. = 2", "[df](2, 102)", as output prints it "DF = 2", spelled out "degrees of
+        # freedom = 2"; or after their numbers, "(38 df)", "with 2 and 97 df", run together "1df", "with 45 degrees of freedom"
+        self.df = re.compile(rf"(?:d(?<![\w]d)\.?f\.?|D(?<![\w]D)F(?![\w])|d(?<![\w]d)egrees?\s++of\s++freedom(?:\s*+\((?:df|d\.f\.)\))?)\]?\s*+[=:¼]?\s*+\(?(?P<num>{num})(?:\s*+{sep2}\s*+(?P<num2>\d+(?:[.,]\d+)?)(?![\d]))?\)?(?![\d.,]\d)"
+                             rf"|(?<![\w.,])(?P<pre>\d{{1,6}}(?:\.\d+)?)(?:\s*+(?:,|and)\s*+(?P<pre2>\d{{1,6}}(?:\.\d+)?))?[ \u00a0]*+(?:(?:d\.?f|DF)\b\.?(?!\s*[=:(\d])|degrees?\s++of\s++freedom\b(?!\s*+[=:]))")
         # (each starts with its literal, the "not after a letter" test right after it: the engine's fast scan)
         # the unstandardised coefficient as "B" or "b", its standard error as "SE", "SE B" or "SEB"
         self.coef_b = re.compile(rf"[Bb](?<![\w][Bb])(?<!SE\s[Bb])\s*+[=¼]\s*+(?P<num>{value})")  # (not the B of "SE B")
@@ -612,6 +613,8 @@ def find_statistics(text: str, decimal_mark: str = ".") -> list[Reported]:
         _read_clause(pat, text, rep, m.end(), end, rare)
         if m.group("bare_t") is not None and (rep.p is None or rep.value is None or not rep.value.decimals):  # ("t12 = 5 s": a time
             continue  # point, unless a value with decimals and a p follow as a t's do)
+        if rep.p is None and not rep.df and m.group("op")[0].isalpha():  # a value in words is a result where its df or p follow
+            continue  # ("an F of 3.6 with 2 and 9 df"), not where prose speaks of one ("a z-value of 2 is none")
         rep.text = text[rep.start : rep.end]
         out.append(rep)
         taken.append((rep.start, rep.end))
@@ -1013,11 +1016,23 @@ def _orphans(pat: _Patterns, text: str, start: int, end: int, rare: bool = True)
     return out
 
 
+# a statistic given in words, "an F of 3.60", "the t-value was 2.31", "a chi-square value of 12.4": only these symbols, and
+# only named as a value or statistic, spelled out (chi-square), or after an article ("a", "an", "the", up to two words
+# between: "a significant F of 4.20"), as a letter alone in prose may be anything ("part F of 12 items")
+_WORDED = frozenset({"t", "F", "chi2", "z", "r", "U", "H"})
+_ARTICLE_BEFORE = re.compile(r"(?<![\w])(?:[Aa]n?|[Tt]he)\s+(?:[a-z]+\s+){0,2}$")
+
+
 def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     sym, num, inner, sub, bare, op = m.group("sym", "num", "inner", "sub", "bare", "op")  # (one call: a head is read 10,000 times a book)
     if bare is None and m.group("bare_t") is not None:  # "t38 = 2.10": a t's subscript df flattened by a copy from a PDF
         bare = m.group("bare_t")  # (two digits at least: "t1 = …" may be a first time point's)
     symbol = symbol_of(sym)
+    if op[0].isalpha():  # "of", "was", "is", "equals", "equal to"
+        if symbol not in _WORDED or not (sym.endswith(("value", "statistic")) or sym[0] in "cC" or
+                                         _ARTICLE_BEFORE.search(text, max(0, m.start() - 40), m.start())):
+            return None
+        op = "="
     value = pat.to_number(num, m.start("num"))
     if symbol is None or value is None:
         return None
@@ -1116,7 +1131,8 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
                                 ("effect", pat.ratio, ratios),
                                 ("effect", pat.rare, equals and _rare_effect_in(text, start, end)),
-                                ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0), ("n", pat.n, equals)):
+                                ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0
+                                       or text.find("egree", start, end) >= 0), ("n", pat.n, equals)):
         if wanted:
             events += [(m.start(), kind, m) for m in regex.finditer(text, start, end)]
     events.sort(key=lambda e: e[0])

@@ -1519,20 +1519,29 @@ def _starred_matrix(rows, mark: str, stars: "dict[str, tuple[str, Number]] | Non
 # SPSS's Test Statistics tables lay a test out down a column, a row for each of its parts: the Mann–Whitney and Wilcoxon
 # tests' "Z", Kruskal–Wallis' "Kruskal-Wallis H" (older versions: "Chi-Square"), Friedman's "Chi-Square", each with its
 # "df" and "Asymp. Sig." rows below
+# (and as a spreadsheet's analysis tools print a t or z test, down a column for each variable: a "t Stat" or "z" row, its
+# "df" row, and its "P(T<=t) two-tail" or "P(Z<=z) two-tail" row — the one-tail and critical-value rows not read)
 _STAT_ROW = {"z": re.compile(r"(?i)\s*z\s*"), "H": re.compile(r"(?i)\s*kruskal[-–\s]wallis\s+h\s*"),
-             "chi2": re.compile(r"(?i)\s*chi[-–\s]?square\s*")}
-_ASYMP_ROW = re.compile(r"(?i)\s*asymp(?:\.|totic)\s*sig(?:\.|nificance)?\s*(?:\((?:2-tailed|2-sided(?: test)?)\))?\s*")
+             "chi2": re.compile(r"(?i)\s*chi[-–\s]?square\s*"), "t": re.compile(r"(?i)\s*t\s+stat\s*")}
+_ASYMP_ROW = re.compile(r"(?i)\s*asymp(?:\.|totic)\s*sig(?:\.|nificance)?\s*(?:\((?:2-tailed|2-sided(?: test)?)\))?\s*"
+                        r"|\s*p\s*\(\s*[tz]\s*<=?\s*[tz]\s*\)\s*two[- ]tail\s*")
 _DF_ROW = re.compile(r"(?i)\s*df\s*")
+# such a t test of two groups that pools no variance and pairs no scores (neither row printed) is Welch's: its df, printed
+# whole, rounded (memory: whether the p was computed on the rounded df is not known here, so a df within 1 of it is allowed)
+_POOLED_OR_PAIRED_ROW = re.compile(r"(?i)\s*(?:pooled\s+variance|pearson\s+correlation)\s*")
+_OBSERVATIONS_ROW = re.compile(r"(?i)\s*observations\s*")
 
 
 def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no-untyped-def]
     """The tests of a table laid out down its columns, as SPSS's Test Statistics tables are: in each column, a z, H or
-    χ² row with the df row and the Asymp. Sig. row of the same column (a table without an Asymp. Sig. row is none)."""
+    χ² row with the df row and the Asymp. Sig. row of the same column (a table without an Asymp. Sig. row is none); and
+    a spreadsheet's t or z test, its "t Stat" with its df and two-tailed p rows."""
     labels = {r: row[1][0].text for r, row in rows.items() if 1 in row}
     sig = next((r for r, text in labels.items() if _ASYMP_ROW.fullmatch(text)), None)
     if sig is None:
         return []
     df_row = next((r for r, text in labels.items() if _DF_ROW.fullmatch(text)), None)
+    welch = any(_OBSERVATIONS_ROW.fullmatch(text) for text in labels.values()) and not any(_POOLED_OR_PAIRED_ROW.fullmatch(text) for text in labels.values())
     found: list[TableStatistic] = []
     for r, text in labels.items():
         symbol = next((name for name, pattern in _STAT_ROW.items() if pattern.fullmatch(text)), None)
@@ -1545,12 +1554,17 @@ def _statistic_rows(rows, mark: str) -> list[TableStatistic]:  # type: ignore[no
             size = _number(rows[df_row][c][0].text, mark) if df_row is not None and c in rows[df_row] else None
             if value is None or p is None or (symbol != "z" and size is None):
                 continue
-            df = () if symbol == "z" else (size[1],)  # type: ignore[index]
+            df: tuple[Number, ...] = () if symbol == "z" else (size[1],)  # type: ignore[index]
             label = {"chi2": "χ²"}.get(symbol, symbol)
+            how = f"read from the table's row: the {text.strip()} row" + (", the df row" if df else "") + f", the {labels[sig].strip()} row, in its column"
+            readings: tuple[Reading, ...] = ()
+            if symbol == "t" and welch:  # (the df the p was computed on: the printed df, rounded, or one next to it)
+                readings = (Reading((df[0].value - 1,), f"Welch's df, printed rounded as {df[0].text}: from {df[0].value - 1:g} to {df[0].value + 1:g} "
+                                                         "(a t test that neither pools variances nor pairs scores)", df[0].value + 1),)
+                df = ()
             rep = Reported(symbol, label, value[1].start, value[1].start, value[1].end, df, None, value[0], value[1], p)
             rep.text = statistic_text(label, df, value[0], value[1], p)
-            found.append(TableStatistic(rows[r][c][0], rep, None, f"read from the table's row: the {text.strip()} row" + (", the df row" if df else "")
-                                        + ", the Asymp. Sig. row, in its column"))
+            found.append(TableStatistic(rows[r][c][0], rep, None, how, readings))
     return found
 
 
