@@ -805,3 +805,16 @@ def test_a_statistic_given_in_words_with_its_df_or_p():
     for text in ["Part F of 12 items was scored first; item t of 3 sections, p = .04.", "The t value was large, and a z-value of 2 is none.",
                  "Among statisticians a chi square of .05 is a conventionally accepted threshold of statistical significance."]:
         assert [r.symbol for r in find_statistics(text) if r.symbol is not None] == [], text
+
+
+def test_a_critical_value_at_a_level_is_no_result():
+    """Theses that test by the table state the critical value with its level beside its df ("χ2(0.05, 2) = 5.99", "t(.05,
+    49) = 2.01"; practice): it had been read as a statistic with a df of 0.05 — an error, df-not-integer — or with a df
+    it does not have. No df is below 1, so a head holding such a level and a whole df is a critical value, not read;
+    the computed statistic beside it still is. The values are scipy's critical values."""
+    assert f"{stats.chi2.isf(0.05, 2):.2f}" == "5.99" and f"{stats.t.isf(0.025, 49):.2f}" == "2.01"
+    text = "Since the computed χ2(2) = 8.86, p = .012, exceeds χ2(0.05, 2) = 5.99, and t(.05, 49) = 2.01 is below the t found, the null hypothesis was rejected."
+    entries = audit_units([Unit("s", text)])
+    assert [e.found for e in entries] == ["χ2(2) = 8.86, p = .012"] and entries[0].codes == [], [(e.found, e.codes) for e in entries]
+    # (a corrected df below a whole one is no level: Greenhouse–Geisser's ε(k − 1) is 1 at least, with k > 2 groups)
+    assert [r.symbol for r in find_statistics("F(1.52, 40.3) = 5.10, p = .017")] == ["F"]

@@ -1023,6 +1023,9 @@ _WORDED = frozenset({"t", "F", "chi2", "z", "r", "U", "H"})
 _ARTICLE_BEFORE = re.compile(r"(?<![\w])(?:[Aa]n?|[Tt]he)\s+(?:[a-z]+\s+){0,2}$")
 
 
+_LEVEL_AND_DF = re.compile(r"\s*(?:0?\.\d{1,3}\s*,\s*\d{1,4}|\d{1,4}\s*,\s*0?\.\d{1,3})\s*")  # "0.05, 2", "49, .05"
+
+
 def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     sym, num, inner, sub, bare, op = m.group("sym", "num", "inner", "sub", "bare", "op")  # (one call: a head is read 10,000 times a book)
     if bare is None and m.group("bare_t") is not None:  # "t38 = 2.10": a t's subscript df flattened by a copy from a PDF
@@ -1039,6 +1042,8 @@ def _read_head(pat: _Patterns, text: str, m: re.Match[str]) -> Reported | None:
     dfs: tuple[Number, ...] = ()
     n = None
     if inner is not None:
+        if "." in inner and _LEVEL_AND_DF.fullmatch(inner):  # "χ2(0.05, 2) = 5.99", "t(.05, 49)": a table's critical value at a
+            return None  # level, not a result (no df is below 1)
         dfs, n = _inner(pat, inner, m.start("inner"))
     elif sub is not None:  # df as subscripts (AMA 11): t₃₈, F₂,₂₃₇; one character each, so positions hold
         dfs, n = _inner(pat, sub.translate(_SUBSCRIPT_DIGITS), m.start("sub"))
