@@ -486,6 +486,47 @@ def test_a_spreadsheets_t_test_output_is_read_down_its_column(tmp_path):
     assert "Welch's df, printed rounded as 67: from 66 to 68" in audit_file(_doc(tmp_path / "w.docx", tables=[("t-Test", tables["welch"])]))[0].checked
 
 
+def _spreadsheet_regression(fit) -> list[tuple[str, ...]]:  # type: ignore[no-untyped-def]
+    """A fitted OLS model laid out as a spreadsheet's regression output pasted as one table: its statistics, its ANOVA
+    (df, SS, MS, F, "Significance F") and its coefficients ("t Stat", "P-value"), full digits as the tool prints them."""
+    g = "{:.10g}".format
+    blank = ("",) * 5
+    return [("SUMMARY OUTPUT", "", *blank), ("Regression Statistics", "", *blank), ("R Square", g(fit.rsquared), *blank),
+            ("Observations", g(fit.nobs), *blank), ("ANOVA", "", *blank),
+            ("", "df", "SS", "MS", "F", "Significance F", ""),
+            ("Regression", g(fit.df_model), g(fit.ess), g(fit.mse_model), g(fit.fvalue), g(fit.f_pvalue), ""),
+            ("Residual", g(fit.df_resid), g(fit.ssr), g(fit.mse_resid), "", "", ""),
+            ("Total", g(fit.df_model + fit.df_resid), g(fit.centered_tss), "", "", "", ""),
+            ("", "Coefficients", "Standard Error", "t Stat", "P-value", "Lower 95%", "Upper 95%")] + [
+            (name, g(fit.params[name]), g(fit.bse[name]), g(fit.tvalues[name]), g(fit.pvalues[name]), g(fit.conf_int().loc[name, 0]),
+             g(fit.conf_int().loc[name, 1])) for name in fit.params.index]
+
+
+def test_a_spreadsheets_regression_output_reads_its_ts_on_the_residual_df(tmp_path):
+    """A spreadsheet's regression output pasted as one table: its "Significance F" had been no p head, its "t Stat" no t
+    head — the F was read without its p and the coefficients' t's not at all. Now the F has its p, and each t its p and
+    the residual df of the ANOVA above it (the Residual row's), held to B / SE and to its interval too. Numbers:
+    statsmodels' OLS of R's mtcars (mpg on wt and hp; tests/open_data.py), F(2, 29) = 69.21; a p retyped and a t
+    retyped are found, in Word and Markdown."""
+    import statsmodels.formula.api as smf
+    from open_data import MTCARS
+
+    fit = smf.ols("mpg ~ wt + hp", data=MTCARS).fit()
+    assert (fit.df_model, fit.df_resid) == (2, 29) and f"{fit.fvalue:.2f}" == "69.21"
+    rows = _spreadsheet_regression(fit)
+    entries = audit_file(_doc(tmp_path / "reg.docx", tables=[("Regression", rows)]))
+    assert [e.found.split(" =")[0] for e in entries] == ["F(2, 29)", "t", "t", "t"] and all(e.codes == [] for e in entries), \
+        [(e.found, e.codes) for e in entries]
+    assert all("with the model's residual df, 29: its ANOVA's Residual row in the table" in e.checked for e in entries[1:]), entries[1].checked
+    md = tmp_path / "reg.md"
+    md.write_text("| " + " | ".join(rows[0]) + " |\n|" + "---|" * 7 + "\n" + "".join("| " + " | ".join(r) + " |\n" for r in rows[1:]), encoding="utf-8")
+    assert [(e.found, e.codes) for e in audit_file(md)] == [(e.found, e.codes) for e in entries]
+    retyped = [r if r[0] != "hp" else (r[0], r[1], r[2], r[3], "{:.10g}".format(3 * float(r[4])), r[5], r[6]) for r in rows]
+    retyped = [r if r[0] != "wt" else (r[0], r[1], r[2], "-5.12871", *r[4:]) for r in retyped]
+    codes = [e.codes for e in audit_file(_doc(tmp_path / "reg2.docx", tables=[("Regression", retyped)]))]
+    assert codes[0] == [] and "coefficient-does-not-fit" in codes[2] and "p-does-not-follow" in codes[3], codes
+
+
 def test_a_p_in_a_later_cell_and_a_header_partway_down(tmp_path):
     rows = [("Effect", "Test", "Size", "p"),
             ("Valence", "F (1,40) = 9.10", "η2 = .185", "p = .25"),

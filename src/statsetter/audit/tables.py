@@ -40,7 +40,7 @@ _ROLES = (
     # a column of two tests' values, as medical tables print one test per row: "χ2/Z", "t/χ2 value" — χ² in a categorical
     # variable's rows (its counts), the other test elsewhere (a Mann–Whitney Z, a t)
     (re.compile(r"(?i)(?:χ\s?[²2]|x\s?[²2]|chi2)\s*/\s*(?P<other>[zt])(?:[- ]?values?)?|(?P<first>[zt])\s*/\s*(?:χ\s?[²2]|x\s?[²2]|chi2)(?:[- ]?values?)?"), "mixed"),
-    (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?))?"), "t"),
+    (re.compile(r"(?i)t(?:[- ]?(?:tests?|values?|statistics?|stat))?"), "t"),  # (a spreadsheet's regression output: "t Stat")
     (re.compile(r"F(?:[- ]?(?:values?|ratio)|\s+[Cc]hange)?"), "F"),  # (SPSS's Model Summary: "F Change", "Sig. F Change")
     # (also named in full: "Pearson chi-square statistic", "Chi-square test", as PLOS ONE 2017's Table 1 heads its column)
     (re.compile(r"(?i)(?:pearson(?:'?s)?\s+)?(?:χ\s?[²2]|x\s?[²2]|chi[- ]?squared?)(?:[- ]?(?:values?|statistics?|tests?))?"), "chi2"),
@@ -78,7 +78,8 @@ _ROLES = (
     (re.compile(r"r"), "r"),
     (re.compile(r"[zZ](?:[- ]?[vV]alues?)?"), "z"),
     # (also with the d its cells give beside it: "P value (Cohen d)" over ".02 (0.65)", as a JMIR table lays it out)
-    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\)|Probability|PV)(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
+    # (a spreadsheet's regression output heads its F's p "Significance F")
+    (re.compile(r"(?:[pP](?:[- ]?[vV]alues?)?|Sig\.?(?:\s*\(2-tailed\)|\s+F\s+[Cc]hange)?|P\s*\(2-tailed\)|Probability|PV|Significance\s+F)(?:\s*\((?:Cohen(?:['’]s)?\s*)?d\))?"), "p"),
     # R's "Pr(>|t|)", "Pr(>|z|)", "Pr(>F)" and "Pr(>Chi)"; Stata's and statsmodels' "P>|t|", statsmodels' "PR(>F)"
     # (and SAS's "Pr > ChiSq", "Pr > |t|", "Pr > F"; "Pr > Χ2" as a journal sets it)
     (re.compile(r"P[rR]?\s?\(?\s?>\s?(?:\|[tzTZ]\||F|[Cc]hi(?:[Ss]q)?|[χΧ]\s?[²2])\s?\)?"), "p"),
@@ -1011,10 +1012,15 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
     spanned: dict[int, str] = {}  # the ratio a spanner in the row above names, for each column it spans
     width = max((c + row_cells[0].columns - 1 for r in rows for c, row_cells in rows[r].items()), default=0)  # the table's columns
     in_body = False
-    order = sorted(rows)
+    residual_row: tuple[Reading, ...] = ()  # the last model ANOVA's residual df above (a spreadsheet's regression output gives its
+    order = sorted(rows)  # ANOVA, then its coefficients: their t's df)
     for r in order:
         row = rows[r]
         numbers = {c: _number(u.text, mark) for c, (u, _) in row.items()}
+        df_col = next((k for k, v in roles.items() if v == "df"), None) if "F" in roles.values() else None
+        if df_col is not None and df_col in row and numbers[df_col] is not None and _ERROR_ROW.fullmatch(row[min(row)][0].text):
+            residual_row = (Reading((numbers[df_col][1].value,), f"the model's residual df, {numbers[df_col][1].text}: its ANOVA's "  # type: ignore[index]
+                                                                  f"{row[min(row)][0].text.strip()} row in the table"),)
         header = {c: None if numbers[c] is not None else _role(u.text) for c, (u, _) in row.items()}  # (a number is no head)
         if spanned:  # a head under a ratio's spanner in the row above ("Model 1" under "Hazard ratio (95% CI)"): that ratio's column
             for c, (u, _) in row.items():
@@ -1234,7 +1240,7 @@ def table_statistics(cells: Sequence[tuple[int, int, Unit, list[Reported]]], cap
                 readings: tuple[Reading, ...] = () if df else (ONE_COEFFICIENT,) if coefficient is not None else \
                     (ONE_COEFFICIENT_B,) if any(roles.get(k) in ("B", "beta") and numbers.get(k) is not None for k in row) else ()  # "β | Wald c2 | P")
             elif coefficients:  # a model's coefficient: its df are the model's residual df, not a two-group t's
-                readings = _residual_readings(said) if role == "t" else ()
+                readings = (_residual_readings(said) or residual_row) if role == "t" else ()
             elif role in ("t", "r") and note_df:  # "Note: df= 58": the table's one df, as its caption or note gives it
                 readings = note_df
             else:
