@@ -818,3 +818,19 @@ def test_a_critical_value_at_a_level_is_no_result():
     assert [e.found for e in entries] == ["χ2(2) = 8.86, p = .012"] and entries[0].codes == [], [(e.found, e.codes) for e in entries]
     # (a corrected df below a whole one is no level: Greenhouse–Geisser's ε(k − 1) is 1 at least, with k > 2 groups)
     assert [r.symbol for r in find_statistics("F(1.52, 40.3) = 5.10, p = .017")] == ["F"]
+
+
+def test_a_p_in_words_within_its_statistics_clause():
+    """A p given in words after its statistic — "with a p-value of .0005", "the p-value was less than 0.05", "P value is
+    < .05" (practice) — had not been read: the statistic stood without its p. Now it is, in the statistic's clause only:
+    alone, "a p-value of .05 was taken as significant" is the level, not a result. Numbers from scipy: t(18) = 4.24
+    gives p = .00049; F(2, 40) = 3.10 gives .056, so "less than 0.05" changes the decision."""
+    assert round(2 * stats.t.sf(4.24, 18), 5) == 0.00049 and round(stats.f.sf(3.10, 2, 40), 3) == 0.056
+    (clean,) = audit_units([Unit("s", "The difference was significant, t(18) = 4.24, with a p-value of .0005.")])
+    assert clean.found == "t(18) = 4.24, with a p-value of .0005" and "p-does-not-follow" not in clean.codes
+    (wrong,) = audit_units([Unit("s", "The groups differed, F(2, 40) = 3.10, and the p-value was less than 0.05.")])
+    assert {"p-does-not-follow", "verdict-changes"} <= set(wrong.codes) and "reported p < 0.05" in wrong.message
+    (bound,) = audit_units([Unit("s", "The association held, χ2(2) = 12.4, P value is < .05.")])
+    assert "p-does-not-follow" not in bound.codes and "p-threshold" in bound.codes  # (p = .002: an exact p, not a bound, is wanted)
+    for level in ("A p-value of .05 was taken as significant.", "Significance was set at a p-value of less than 0.05 for all tests."):
+        assert audit_units([Unit("s", level)]) == [], level

@@ -336,6 +336,10 @@ class _Patterns:
         # table's note defining its marks, not a reported p
         self.p = re.compile(rf"(?:[pP](?<![\w.{_SIGNIFICANCE}][pP])(?<![{_SIGNIFICANCE}] [pP])(?:[- ]?values?|{_STATA_P})?|{_SPSS_P})\s*+(?P<op>=\s*+[<>≤≥]|=|<|>|≤|≥|¼|[bN](?=\s*+\.?\d)|[,5.](?<=\s[,5.])(?=\s++0?\.\d)|:(?<=value:)|:(?<=values:))\s*+(?P<num>{value}{_EXPONENT}?)"
                             r"|n(?<![\w.]n)(?:\.\s?s\.|s)(?![\w])")  # a p (or P, or SPSS's Sig.) and its number, or "ns" / "n.s."
+        # a p in words within a statistic's clause ("t(18) = 4.24, with a p-value of .0005", "the p-value was less than
+        # 0.001", "P value is < .05"): only there — alone, "a p-value of .05 was taken as significant" is the level
+        self.p_words = re.compile(rf"[pP](?<![\w.{_SIGNIFICANCE}][pP])[- ]?values?\s++(?P<op>(?:(?:was|is|of)\s++)?(?:less|smaller|greater|larger)\s++than"
+                                  rf"|(?:was|is)\s*+[<>≤≥=]|was|is|of|equals|equal\s++to|equall?ed)\s*+(?P<num>{value}{_EXPONENT}?)")
         # a bound shared by several statistics, as psychology papers type it: "ps < .05", "p's > .20", "all ps < .001", "both
         # p < .01", "each p-value ≤ .01"; or their p's listed in order, "ps = .03 and .04" (an "=" only before a list)
         self.shared_p = re.compile(rf"(?P<sym>[pP](?<![\w.*'’][pP])(?:s|['’]s|(?:(?<=[aA]ll\s[pP])(?<!\w[aA]ll\s[pP])|(?<=[bB]oth\s[pP])"
@@ -1120,7 +1124,8 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     number = pat.to_number(num, m.start("num"))
     if number is None:
         return None
-    op = _GARBLED.get(op, op[-1] if len(op) > 1 else op)
+    op = _GARBLED.get(op, op[-1] if len(op) > 1 else op) if op in _GARBLED or not op[0].isalpha() else \
+        "<" if "less" in op or "smaller" in op else ">" if "greater" in op or "larger" in op else op[-1] if op[-1] in "<>≤≥" else "="  # (in words)
     symbol = text[at] if text[at] in "pP" else text[at : m.start("op")].rstrip()  # (SPSS's "Sig. (2-tailed)" as typed)
     return _new_p(op, number, at, m.end("num"), at, symbol, adjusted)
 
@@ -1133,7 +1138,7 @@ def _read_clause(pat: _Patterns, text: str, rep: Reported, start: int, end: int,
     # an effect size and an n their "=", a ratio its name, a df written apart its "df"
     equals = text.find("=", start, end) >= 0 or (rare and text.find("¼", start, end) >= 0)
     ratios = _ratios_in(text, start, end, rare)
-    for kind, regex, wanted in (("p", pat.p, True), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
+    for kind, regex, wanted in (("p", pat.p, True), ("p", pat.p_words, text.find("value", start, end) >= 0), ("ci", pat.ci, text.find("%", start, end) >= 0), ("effect", pat.effect, equals),
                                 ("effect", pat.ratio, ratios),
                                 ("effect", pat.rare, equals and _rare_effect_in(text, start, end)),
                                 ("df", pat.df, text.find("df", start, end) >= 0 or text.find("d.f", start, end) >= 0 or text.find("DF", start, end) >= 0
