@@ -828,6 +828,25 @@ def test_a_correlation_matrix_with_marks_of_significance(tmp_path):
                            note="Note. Standardized coefficients. *p < .05. **p < .01.")) == []
 
 
+def test_a_tables_marks_of_significance_its_note_does_not_define(tmp_path):
+    """APA 7 §7.14: a table's asterisks are defined in its probability note. IJERPH 2021's Table 2 (above) with its note
+    raises nothing; the same table without its note had been silent — its marked coefficients not read, nothing said —
+    and is now said to use *, ** and *** undefined (style), on its first marked cell; with a note defining * and ** only,
+    *** is said. A p column's own marks are not asked (a p says its level), nor marks the note defines in other words."""
+    rows = [r + [""] * (11 - len(r)) for r in _IJERPH_ROWS]
+    caption = "Table 2. Correlations between age, depression, anxiety, and reaction times in the anxious group."
+    assert not any("marks-undefined" in e.codes for e in audit_file(_doc(tmp_path / "m.docx", tables=[(caption, rows)], note=_IJERPH_NOTE)))
+    (bare,) = audit_file(_doc(tmp_path / "bare.docx", tables=[(caption, rows)], note="Note. N = 60; M: mean; SD: standard deviation."))
+    assert bare.codes == ["marks-undefined"] and bare.found == "0.47 ***" and "with *, **, ***, which" in bare.message, (bare.found, bare.message)
+    part = _IJERPH_NOTE.replace(", *** p < 0.001", "")
+    (partial,) = [e for e in audit_file(_doc(tmp_path / "part.docx", tables=[(caption, rows)], note=part)) if "marks-undefined" in e.codes]
+    assert "with ***, which" in partial.message
+    ps = [["Measure", "t", "p"], ["Anxiety", "3.10", ".004**"], ["Sleep", "2.30", ".027*"]]
+    assert [e.codes for e in audit_file(_doc(tmp_path / "p.docx", tables=[("Table 1. Comparisons (df = 38)", ps)], note="Note. Two-tailed tests."))] == [[], []]
+    worded = [["Measure", "B", "SE"], ["Age", "0.25†", "0.05"], ["Sleep", "−0.10", "0.04"]]
+    assert not any("marks-undefined" in e.codes for e in audit_file(_doc(tmp_path / "w.docx", tables=[("Table 3. Model", worded)], note="Note. † Adjusted for sex.")))
+
+
 def test_a_tables_marked_statistic_has_its_marks_bound_for_a_p(tmp_path):
     """A t in a table's t column with a mark the note defines ("3.10**" with "**p < .01"), and no p column, is checked
     against the mark's bound — a t(38) of 1.20 marked * (p .24) is flagged; before, the mark was dropped and nothing
@@ -2170,8 +2189,9 @@ def test_marked_coefficients_with_their_se_in_the_row_below(tmp_path):
     assert "B = -0.110, SE = 0.057, p < .1" in {e.found for e in entries}
     path.write_text("Table 1\n\n" + _WAGE_TABLE.replace("| | (0.007) | (0.007) |", "| | (0.070) | (0.007) |"), encoding="utf-8")
     assert [e.found for e in audit_file(path) if e.codes] == ["B = 0.079, SE = 0.070, p < .01"]
-    path.write_text("Table 1\n\n" + _WAGE_TABLE.split("\n\nStandard")[0] + "\n", encoding="utf-8")  # no marks defined: not read
-    assert audit_file(path) == []
+    path.write_text("Table 1\n\n" + _WAGE_TABLE.split("\n\nStandard")[0] + "\n", encoding="utf-8")  # no marks defined: not read,
+    (undefined,) = audit_file(path)  # and said so on the first cell marked (APA 7 §7.14)
+    assert undefined.codes == ["marks-undefined"] and "with *, **, ***," in undefined.message, undefined.message
 
 
 def test_a_correlations_own_interval_agrees_with_its_p():

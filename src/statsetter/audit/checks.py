@@ -133,6 +133,10 @@ CODES: dict[str, tuple[str, str]] = {
         "η²p = F·df₁/(F·df₁ + df₂) (definition) and the F distribution's p; a df or digit mistyped is a usual cause of a p that "
         "does not follow (Nuijten et al., 2016 — recalled from memory)",
     ),
+    "marks-undefined": (
+        "a table marks values with asterisks or other marks of significance that its caption and note do not define",
+        "Tables: probability notes define the asterisks, *p < .05. **p < .01. ***p < .001. (APA 7 §7.14)",
+    ),
     "d-does-not-fit": (
         "d (or g, d_z) does not follow from t and the group sizes",
         "Effect sizes (JARS-Quant); d = t·√(1/n₁ + 1/n₂), d_z = t/√n (Lakens, 2013, recalled from memory), g = J·d (Hedges, 1981)",
@@ -152,7 +156,7 @@ SEVERITY: dict[str, str] = {
     "sizes-do-not-add": "warning", "typo-fits": "warning", "z-does-not-fit": "warning",
     "p-zero": "warning", "corrected-df": "warning", "uncorrected-df": "warning", "ci-p-disagree": "warning", "ratio-does-not-fit": "warning",
     "ci-level": "style", "leading-zero": "style", "missing-leading-zero": "style", "p-symbol": "style", "decimal-mark": "style", "decimals": "style", "p-threshold": "style",
-    "spacing": "style", "hyphen-minus": "style", "italics": "style",
+    "spacing": "style", "hyphen-minus": "style", "italics": "style", "marks-undefined": "style",
 }
 
 # the codes of the release before, in the words of a well-known checker; read and written beside the new ones

@@ -25,10 +25,10 @@ from ..style.numbers import numbers_for
 from ..style.profile import Style, load_style
 from .checks import _LEVEL_NAMED, CODES, RATIOS, FORMER_CODES, SEVERITIES, Finding, _overlap, any_df_range, ci_p_agreement, coefficient_p, coefficient_ratio, corrected_df, corrected_p_fits, df_that_fit, p_range, p_span, rank_sum_bound, rank_sum_p, rank_sum_z, rank_test_r, reported_p_range, spearman_fits, squares_fit, consistency, effect_from_f_or_chi2, effect_from_t, grim, impossible, interval_fits_se, ratio_fits, style_findings, to_record, unlevelled, verdict_word
 from .parsing import _SIGNIFICANCE, Number, _patterns, _sentence_start, Reported, coefficient_before, coefficient_lead, comma_typed, decimal_mark_of, find_statistics, group_sizes, icc_form, is_wald, ns_after, p_text
-from .counts import CountTest, count_tests, counts_fit, fraction_tests, size_tests
+from .counts import CountTest, _cell_entry, count_tests, counts_fit, fraction_tests, size_tests
 from .means import GroupMeans, category_means, group_means, means_fit
 from .models import _R2_ROW, ModelFit, model_fit, model_fits
-from .tables import ONE_COEFFICIENT, Reading, Squares, _totals, design_readings, df_readings, star_bounds, table_statistics
+from .tables import ONE_COEFFICIENT, Reading, Squares, _totals, design_readings, df_readings, star_bounds, table_statistics, undefined_marks
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
 
@@ -193,6 +193,7 @@ class _Item:
     counts: "CountTest | None" = None  # a categorical variable's counts by group, which give its χ² and p (counts.CountTest)
     means: "GroupMeans | None" = None  # the groups' means, SDs and sizes beside a t or F (means.GroupMeans)
     model: "ModelFit | None" = None  # a model's R², predictors and N beside its F, in a table of models side by side (models.ModelFit)
+    marks: tuple[str, ...] = ()  # the marks of significance the table uses and its caption and note do not define (its first such cell's item)
 
 
 _DIGIT = re.compile(r"\d")
@@ -316,6 +317,11 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
                                        labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)
         items = [_Item(t.unit, t.rep, t.local, t.readings, t.how, context, t.coefficient, t.squares) for t in found]
+        unmarked = undefined_marks(cells, said)
+        if unmarked is not None:  # (the first cell so marked: an entry of its own, its statistic's if one was read there)
+            at = next((k for k, it in enumerate(items) if it.unit is unmarked[0]), None)
+            items = items + [_Item(unmarked[0], _cell_entry(unmarked[0]), None, context=context, marks=tuple(unmarked[1]))] if at is None else \
+                items[:at] + [replace(items[at], marks=tuple(unmarked[1]))] + items[at + 1:]
         if any("(" in u.text or "±" in u.text or "%" in u.text or "ercent" in u.text or "SD" in u.text or "S.D" in u.text or "td" in u.text
                for _, _, u, _ in cells):  # (a count's cell has its percent in parentheses, or a column of its own under "%"; a mean
             # its ± or (SD), or a column of its own under "SD")
@@ -589,6 +595,10 @@ def _audit_units(
             findings += means_fit(rep, item.means)
         if item.model is not None:  # a model's F against its R², predictors and N, in a table of models side by side
             findings += model_fit(item.model)
+        if item.marks:  # a table's marks of significance that its note does not define
+            findings.append(Finding("marks-undefined", f"The table marks values with {', '.join(item.marks)}, which its caption and note do not define; "
+                                                       "define each in a probability note (*p < .05. **p < .01. ***p < .001.) — its marked values "
+                                                       "are not checked meanwhile.", " ".join(item.marks)))
         if item.squares is not None:  # an ANOVA row's SS, MS and F against each other and its error row's
             findings += squares_fit(rep, item.squares)
         if item.coefficient is not None:  # a table row's Wald, its B and SE from their columns (its p, where no test is given)

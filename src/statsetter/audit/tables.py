@@ -214,6 +214,30 @@ _STAR_SAID = re.compile(rf"(?<![{_SIGNIFICANCE}\w])([{_SIGNIFICANCE}]{{1,4}})\s*
 _STAR_LISTED = re.compile(rf"\s*[,;]\s*([{_SIGNIFICANCE}]{{1,4}})\s*(?:[pP]\s*)?([<≤])\s*(0?[.,]\d+)")
 
 
+def undefined_marks(cells: "Sequence[tuple[int, int, Unit, list[Reported]]]", said: str) -> "tuple[Unit, list[str]] | None":
+    """The first cell whose number carries a mark of significance ("−.32**", "2.10†") that the caption and note
+    (``said``) do not define — in any words: "*p < .05", "† adjusted for age" — and every such mark, in order; None
+    where each mark used is defined (APA 7 §7.14: a table's probability note defines its asterisks). Not a p's own
+    mark, in a column a head names p."""
+    first: dict[str, Unit] = {}
+    p_columns = {c for r, c, unit, _ in cells if _role(unit.text) == "p"}  # (a p marked as well says its own level: not asked)
+    for _, c, unit, _ in cells:
+        if c not in p_columns and any(ch in unit.text for ch in _SIGNIFICANCE):  # (a fast scan: most cells carry no mark)
+            m = _BARE.fullmatch(unit.text)
+            marks = m.group("marks") if m is not None else None
+            if marks and marks[0] in _SIGNIFICANCE:
+                first.setdefault(marks.translate(ONE_STAR), unit)
+    if not first:
+        return None
+    defined = said.translate(ONE_STAR)
+    words = defined.lower()  # (marks defined in words: "significant correlations are marked with an asterisk", "daggers: adjusted")
+    defined += (" * ** ***" if "asterisk" in words else "") + (" † ‡ ††" if "dagger" in words else "")
+    missing = [k for k in first if re.search(rf"(?<!{re.escape(k[-1])}){re.escape(k)}(?!{re.escape(k[-1])})", defined) is None]
+    if not missing:
+        return None
+    return next(first[k] for k in first if k in missing), sorted(missing, key=lambda k: (k[0], len(k)))  # (said as "*, **, ***")
+
+
 def star_bounds(text: str, mark: str) -> dict[str, tuple[str, Number]]:
     """The p bound each mark stands for, as a table's note or caption defines it ("**p < .01": "**" → ("<", .01)); in a
     list after a definition with its p, the p may be left out ("***P < 0.01, ** < 0.05")."""
