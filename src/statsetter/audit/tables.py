@@ -219,14 +219,21 @@ def undefined_marks(cells: "Sequence[tuple[int, int, Unit, list[Reported]]]", sa
     (``said``) do not define — in any words: "*p < .05", "† adjusted for age" — and every such mark, in order; None
     where each mark used is defined (APA 7 §7.14: a table's probability note defines its asterisks). Not a p's own
     mark, in a column a head names p."""
-    first: dict[str, Unit] = {}
-    p_columns = {c for r, c, unit, _ in cells if _role(unit.text) == "p"}  # (a p marked as well says its own level: not asked)
+    marked: list[tuple[int, str, Unit]] = []
     for _, c, unit, _ in cells:
-        if c not in p_columns and any(ch in unit.text for ch in _SIGNIFICANCE):  # (a fast scan: most cells carry no mark)
+        if any(ch in unit.text for ch in _SIGNIFICANCE):  # (a fast scan: most cells carry no mark)
             m = _BARE.fullmatch(unit.text)
             marks = m.group("marks") if m is not None else None
             if marks and marks[0] in _SIGNIFICANCE:
-                first.setdefault(marks.translate(ONE_STAR), unit)
+                marked.append((c, marks.translate(ONE_STAR), unit))
+    if not marked:
+        return None
+    columns = {c for c, _, _ in marked}  # (a p marked as well says its own level: not asked)
+    p_columns = {c for _, c, unit, _ in cells if c in columns and _role(unit.text) == "p"}
+    first: dict[str, Unit] = {}
+    for c, marks, unit in marked:
+        if c not in p_columns:
+            first.setdefault(marks, unit)
     if not first:
         return None
     defined = said.translate(ONE_STAR)
