@@ -834,3 +834,25 @@ def test_a_p_in_words_within_its_statistics_clause():
     assert "p-does-not-follow" not in bound.codes and "p-threshold" in bound.codes  # (p = .002: an exact p, not a bound, is wanted)
     for level in ("A p-value of .05 was taken as significant.", "Significance was set at a p-value of less than 0.05 for all tests."):
         assert audit_units([Unit("s", level)]) == [], level
+
+
+def test_statas_p_as_its_output_prints_it():
+    """Stata prints a tabulation's χ² with "Pr" for its p — "Pearson chi2(2) = 16.6563   Pr = 0.000", as Stata's own page
+    on its tabi command shows for the table 280 14 / 150 16 / 59 14 (stata.com/links/stata-basics/crosstabs-chisquare-
+    tests-calculator) —, its t test's two-sided p as "Pr(|T| > |t|) =" beside the one-sided "Pr(T < t)" and "Pr(T > t)",
+    and its rank-sum test's as "Prob > |z| =" (practice: Stata's output layout). None of these p's had been read; now
+    each is its statistic's p, checked (scipy: 16.6563 is the table's Pearson χ²; t(18) = 2.1009 gives p = .0500) — a p
+    printed 0.000 is the p-zero warning, a one-sided Pr not read as the test's."""
+    from scipy.stats import chi2_contingency
+
+    assert f"{chi2_contingency([[280, 14], [150, 16], [59, 14]], correction=False)[0]:.4f}" == "16.6563"
+    (tab,) = audit_units([Unit("s", "Pearson chi2(2) =  16.6563   Pr = 0.000")])
+    assert tab.found == "chi2(2) =  16.6563   Pr = 0.000" and "p-zero" in tab.codes and "p-does-not-follow" not in tab.codes
+    assert f"{2 * stats.t.sf(2.1009, 18):.4f}" == "0.0500"
+    ttest = "t = 2.1009, degrees of freedom = 18; Pr(T < t) = 0.9750   Pr(|T| > |t|) = 0.0500   Pr(T > t) = 0.0250"
+    (t,) = audit_units([Unit("s", ttest)])
+    assert t.checked.startswith("p recomputed from t(18) = 2.1009") and "p-does-not-follow" not in t.codes and "Pr(|T| > |t|) = 0.0500" in t.found
+    (wrong,) = audit_units([Unit("s", ttest.replace("Pr(|T| > |t|) = 0.0500", "Pr(|T| > |t|) = 0.0250"))])
+    assert "one-sided" in wrong.codes  # (the one-sided p typed as the two-sided)
+    (z,) = audit_units([Unit("s", "z = 2.620, Prob > |z| = 0.0088")])
+    assert z.checked.startswith("p recomputed from z = 2.620") and "p-does-not-follow" not in z.codes

@@ -315,7 +315,9 @@ _RATIO_LABELLED = rf"{_AFTER_RATIO}\s*+[(\[]\s*+(?P<rlev>\d{{2}}(?:[.,]\d+)?)\s*
 
 # Stata's p of a model's test as its output heads it, "Prob > F = 0.0000", "Prob > chi2 = 0.0000" (pasted into theses;
 # practice): after the "P", the rest of its name — a p, and the F or χ² in it no statistic of its own
-_STATA_P = r"(?<=P)rob\s*+>\s*+(?:F|chi2|χ2|χ²)"
+# (and its "Pr = 0.033" after a tabulation's "Pearson chi2(1) = 4.5678", its t test's two-sided "Pr(|T| > |t|) = 0.0500" — not
+# its one-sided "Pr(T < t)" —, and its rank-sum test's "Prob > |z| = 0.0088")
+_STATA_P = r"(?<=P)r(?:ob\s*+>\s*+(?:F|chi2|χ2|χ²|\|z\|)|\(\|T\|\s*+>\s*+\|t\|\)|(?=\s*+=))"
 _STATA_HEAD = re.compile(r"Prob\s*>\s*$")
 # SPSS's name for a p, pasted into prose: "Sig. = .013", "Sig. (2-tailed) = .039", "Asymp. Sig. (2-sided) = .040" (practice)
 _SPSS_P = r"(?:A(?<![\w]A)symp\.?\s++|E(?<![\w]E)xact\s++)?[Ss](?<![\w][Ss])ig\.(?:\s*+\((?:[12]-(?:tailed|sided))\))?"
