@@ -236,7 +236,8 @@ def undefined_marks(cells: "Sequence[tuple[int, int, Unit, list[Reported]]]", sa
             first.setdefault(marks, unit)
     if not first:
         return None
-    defined = said.translate(ONE_STAR)
+    inside = " ".join(unit.text for _, _, unit, _ in cells if _STAR_SAID.search(unit.text) or unit.text.lstrip().startswith("Note"))
+    defined = f"{said} {inside}".translate(ONE_STAR)  # (a note typed in the table's last row, as some authors do, defines too)
     words = defined.lower()  # (marks defined in words: "significant correlations are marked with an asterisk", "daggers: adjusted")
     defined += (" * ** ***" if "asterisk" in words else "") + (" † ‡ ††" if "dagger" in words else "")
     missing = [k for k in first if re.search(rf"(?<!{re.escape(k[-1])}){re.escape(k)}(?!{re.escape(k[-1])})", defined) is None]
