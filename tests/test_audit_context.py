@@ -838,8 +838,10 @@ def test_a_tables_marks_of_significance_its_note_does_not_define(tmp_path):
     assert not any("marks-undefined" in e.codes for e in audit_file(_doc(tmp_path / "m.docx", tables=[(caption, rows)], note=_IJERPH_NOTE)))
     (bare,) = audit_file(_doc(tmp_path / "bare.docx", tables=[(caption, rows)], note="Note. N = 60; M: mean; SD: standard deviation."))
     assert bare.codes == ["marks-undefined"] and bare.found == "0.47 ***" and "with *, **, ***, which" in bare.message, (bare.found, bare.message)
-    inside = rows + [[_IJERPH_NOTE] + [""] * 10]  # (the note typed in the table's last row, as some authors do, defines them too)
-    assert not any("marks-undefined" in e.codes for e in audit_file(_doc(tmp_path / "in.docx", tables=[(caption, inside)], note="")))
+    inside = rows + [[_IJERPH_NOTE] + [""] * 10]  # (the note typed in the table's last row, as some authors do, defines them too,
+    entries = audit_file(_doc(tmp_path / "in.docx", tables=[(caption, inside)], note=""))  # and its marked coefficients are read with it)
+    assert not any("marks-undefined" in e.codes for e in entries)
+    assert sum("correlation coefficient" in " ".join(e.notes) for e in entries) == 17 and all(e.codes == [] for e in entries)
     part = _IJERPH_NOTE.replace(", *** p < 0.001", "")
     (partial,) = [e for e in audit_file(_doc(tmp_path / "part.docx", tables=[(caption, rows)], note=part)) if "marks-undefined" in e.codes]
     assert "with ***, which" in partial.message

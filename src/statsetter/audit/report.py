@@ -28,7 +28,7 @@ from .parsing import _SIGNIFICANCE, Number, _patterns, _sentence_start, Reported
 from .counts import CountTest, _cell_entry, count_tests, counts_fit, fraction_tests, size_tests
 from .means import GroupMeans, category_means, group_means, means_fit
 from .models import _R2_ROW, ModelFit, model_fit, model_fits
-from .tables import ONE_COEFFICIENT, Reading, Squares, _totals, design_readings, df_readings, star_bounds, table_statistics, undefined_marks
+from .tables import ONE_COEFFICIENT, Reading, Squares, _totals, design_readings, df_readings, note_cells, star_bounds, table_statistics, undefined_marks
 from .reading import Unit, read_units
 from .word import _P_IN_TEXT, _UNMADE, house_text, named, restyled, same_p, threshold_p
 
@@ -312,7 +312,7 @@ def _items(units: Sequence[Unit], mark: str) -> "Iterator[_Item]":
             caption, labelled = below, True
         cells = [(u.cell[1], u.cell[2], u, find_statistics(u.text, mark)) for u in units[i:j]]  # type: ignore[index]
         context = " ".join([caption, note] + [u.text for u in units[i:j]])
-        said = f"{caption} {note}"
+        said = f"{caption} {note} {note_cells(cells)}"  # (a note typed in the table's own last row is its note too, as some authors type it)
         found, used = table_statistics(cells, caption, mark, star_bounds(said, mark), said, welch=_WELCH.search(said) is not None,  # (Welch's t's: a df range)
                                        labelled=labelled)
         read = used | {id(t.local) for t in found if t.local is not None}  # (made once: a set per statistic had made a long table quadratic)

@@ -214,6 +214,12 @@ _STAR_SAID = re.compile(rf"(?<![{_SIGNIFICANCE}\w])([{_SIGNIFICANCE}]{{1,4}})\s*
 _STAR_LISTED = re.compile(rf"\s*[,;]\s*([{_SIGNIFICANCE}]{{1,4}})\s*(?:[pP]\s*)?([<≤])\s*(0?[.,]\d+)")
 
 
+def note_cells(cells: "Sequence[tuple[int, int, Unit, list[Reported]]]") -> str:
+    """The text of a table's cells that are its note, typed in its own rows as some authors do: a cell that starts
+    "Note" or defines a mark ("*p < .05")."""
+    return " ".join(unit.text for _, _, unit, _ in cells if unit.text.lstrip().startswith("Note") or _STAR_SAID.search(unit.text))
+
+
 def undefined_marks(cells: "Sequence[tuple[int, int, Unit, list[Reported]]]", said: str) -> "tuple[Unit, list[str]] | None":
     """The first cell whose number carries a mark of significance ("−.32**", "2.10†") that the caption and note
     (``said``) do not define — in any words: "*p < .05", "† adjusted for age" — and every such mark, in order; None
@@ -236,8 +242,7 @@ def undefined_marks(cells: "Sequence[tuple[int, int, Unit, list[Reported]]]", sa
             first.setdefault(marks, unit)
     if not first:
         return None
-    inside = " ".join(unit.text for _, _, unit, _ in cells if _STAR_SAID.search(unit.text) or unit.text.lstrip().startswith("Note"))
-    defined = f"{said} {inside}".translate(ONE_STAR)  # (a note typed in the table's last row, as some authors do, defines too)
+    defined = said.translate(ONE_STAR)
     words = defined.lower()  # (marks defined in words: "significant correlations are marked with an asterisk", "daggers: adjusted")
     defined += (" * ** ***" if "asterisk" in words else "") + (" † ‡ ††" if "dagger" in words else "")
     missing = [k for k in first if re.search(rf"(?<!{re.escape(k[-1])}){re.escape(k)}(?!{re.escape(k[-1])})", defined) is None]
