@@ -1111,6 +1111,15 @@ _ADJUSTED = re.compile(r"(?i:adjusted|corrected|holm|bonferroni|sidak|šidák|fd
 _GARBLED = {"b": "<", "N": ">", "¼": "=", ":": "=", ",": "<", "5": "=", ".": ">"}
 
 
+def _worded_op(op: str) -> str:
+    """The operator a p's words give: "less than" "<", "greater than" ">", "is < " its sign, "of", "was", "equals" "="."""
+    if "less" in op or "smaller" in op:
+        return "<"
+    if "greater" in op or "larger" in op:
+        return ">"
+    return op[-1] if op[-1] in "<>≤≥" else "="
+
+
 def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     text, at = m.string, m.start()
     last = at - 1  # the character before the white space and hyphens before the p: a word of _ADJUSTED must end there
@@ -1126,8 +1135,7 @@ def _p_value(pat: _Patterns, m: re.Match[str]) -> PValue | None:
     number = pat.to_number(num, m.start("num"))
     if number is None:
         return None
-    op = _GARBLED.get(op, op[-1] if len(op) > 1 else op) if op in _GARBLED or not op[0].isalpha() else \
-        "<" if "less" in op or "smaller" in op else ">" if "greater" in op or "larger" in op else op[-1] if op[-1] in "<>≤≥" else "="  # (in words)
+    op = _GARBLED.get(op, op[-1] if len(op) > 1 else op) if op in _GARBLED or not op[0].isalpha() else _worded_op(op)
     symbol = text[at] if text[at] in "pP" else text[at : m.start("op")].rstrip()  # (SPSS's "Sig. (2-tailed)" as typed)
     return _new_p(op, number, at, m.end("num"), at, symbol, adjusted)
 
